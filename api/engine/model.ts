@@ -1,0 +1,130 @@
+/**
+ * The typed domain of a study, after validation (api/study/ turns the JSON contract of
+ * DESIGN.md section 2 into these). Plain data: every later stage reads it and none mutates it.
+ * Degrees and WGS84 [lon, lat] here, as at the boundary; radians and km frames live inside geometry.
+ */
+
+export type TectonicSetting = 'crustal' | 'interface' | 'intraslab';
+export const TECTONIC_SETTINGS: readonly TectonicSetting[] = ['crustal', 'interface', 'intraslab'];
+
+export type Mechanism = 'strike-slip' | 'reverse' | 'normal';
+
+/** WGS84 longitude, latitude in degrees (RFC 7946 order). */
+export type LonLat = readonly [lonDeg: number, latDeg: number];
+
+/** ASCE 7-16 site class letters, with the intermediate classes. */
+export type SiteClass = 'A' | 'B' | 'BC' | 'C' | 'CD' | 'D' | 'DE' | 'E';
+
+export interface Community {
+  readonly id: string;
+  readonly name: string;
+  readonly lon: number;
+  readonly lat: number;
+  /** Time-averaged shear-wave velocity of the top 30 m, m/s. */
+  readonly vs30: number;
+  /** Where vs30 came from: given directly, or the representative value of a site class. */
+  readonly vs30Basis: 'measured' | 'site-class';
+  readonly siteClass?: SiteClass;
+  readonly population?: number;
+  readonly coastal: boolean;
+  readonly elevationM?: number;
+}
+
+export type Recurrence = GutenbergRichterRecurrence | MomentBalancedRecurrence | FixedRecurrence;
+
+/** log10 N(M >= m) = aValue - bValue m per year, truncated at mMax; or `rate` = N(M >= mMin). */
+export interface GutenbergRichterRecurrence {
+  readonly type: 'gutenberg-richter';
+  readonly bValue: number;
+  readonly mMin: number;
+  readonly mMax: number;
+  readonly aValue?: number;
+  readonly rate?: number;
+}
+
+export interface MomentBalancedRecurrence {
+  readonly type: 'moment-balanced';
+  readonly slipRateMmYr: number;
+  readonly bValue: number;
+  readonly mMin: number;
+  readonly mMax: number;
+  readonly shape: 'gutenberg-richter' | 'characteristic';
+  readonly shearModulusPa: number;
+}
+
+export interface FixedRecurrence {
+  readonly type: 'fixed';
+  readonly magnitude: number;
+  readonly rate: number;
+}
+
+interface SourceCommon {
+  readonly id: string;
+  readonly name: string;
+  readonly setting: TectonicSetting;
+  readonly mechanism: Mechanism;
+  readonly rakeDeg: number;
+  readonly recurrence: Recurrence;
+}
+
+/** A planar-by-segment fault surface from a LineString trace. */
+export interface FaultSource extends SourceCommon {
+  readonly kind: 'fault';
+  readonly trace: readonly LonLat[];
+  readonly dipDeg: number;
+  /** Azimuth (deg clockwise from north) the fault dips towards. */
+  readonly dipDirectionDeg: number;
+  readonly upperDepthKm: number;
+  readonly lowerDepthKm: number;
+}
+
+/** Distributed seismicity inside a polygon (outer ring first, then holes). */
+export interface ZoneSource extends SourceCommon {
+  readonly kind: 'zone';
+  readonly rings: readonly (readonly LonLat[])[];
+  readonly depthKm: number;
+}
+
+export interface PointSource extends SourceCommon {
+  readonly kind: 'point';
+  readonly location: LonLat;
+  readonly depthKm: number;
+}
+
+export type Source = FaultSource | ZoneSource | PointSource;
+
+export interface Branch {
+  readonly model: string;
+  readonly weight: number;
+}
+
+export type GroundMotionBranches = Readonly<Record<TectonicSetting, readonly Branch[]>>;
+
+export interface Settings {
+  /** Intensity measures: "PGA", "PGV", "SA(T)" with T in seconds. */
+  readonly measures: readonly string[];
+  /** Hazard-curve levels per measure, g (PGV cm/s), increasing. */
+  readonly levels: Readonly<Record<string, readonly number[]>>;
+  readonly horizonsYears: readonly number[];
+  readonly returnPeriodsYears: readonly number[];
+  /** Ground-motion distribution truncated at this many standard deviations above and below. */
+  readonly truncationSigma: number;
+  /** Ruptures farther than this (Rjb, km) from a site are skipped. */
+  readonly maxDistanceKm: number;
+  /** Width of the magnitude bins, magnitude units. */
+  readonly magnitudeStep: number;
+  /** Spacing of floating-rupture positions along strike and down dip, km. */
+  readonly ruptureSpacingKm: number;
+  /** Side of the square cells a zone is spread over, km. */
+  readonly zoneCellKm: number;
+}
+
+export interface Study {
+  readonly name: string;
+  readonly communities: readonly Community[];
+  readonly sources: readonly Source[];
+  readonly groundMotion: GroundMotionBranches;
+  readonly settings: Settings;
+  /** Optional coastline or outline polygons for maps (outer rings), WGS84. */
+  readonly outline?: readonly (readonly LonLat[])[];
+}

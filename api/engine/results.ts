@@ -1,0 +1,96 @@
+/**
+ * The results of a screening (DESIGN.md section 2: these key names are a contract; extend,
+ * never rename). Accelerations in g, PGV in cm/s, rates per year, probabilities in [0, 1].
+ */
+
+export interface HazardCurve {
+  readonly levels: readonly number[];
+  /** Mean annual rate of exceeding each level over the logic tree. */
+  readonly annualRate: readonly number[];
+  /** Per-branch curves (one per combination of the settings' branches present), for the spread. */
+  readonly branches?: readonly BranchCurve[];
+}
+
+export interface BranchCurve {
+  /** e.g. "crustal=BSSA14, interface=AGA16". */
+  readonly label: string;
+  readonly weight: number;
+  readonly annualRate: readonly number[];
+}
+
+/** Where a return period's level falls outside the computed curve. */
+export type ReturnPeriodStatus = 'ok' | 'below-lowest-level' | 'above-highest-level';
+
+export interface DeaggregationBin {
+  readonly magnitude: readonly [min: number, max: number];
+  readonly distanceKm: readonly [min: number, max: number];
+  readonly epsilon: readonly [min: number, max: number];
+  readonly share: number;
+}
+
+export interface Deaggregation {
+  readonly measure: string;
+  readonly level: number;
+  readonly returnPeriodYears: number;
+  readonly bySource: readonly { readonly sourceId: string; readonly name: string; readonly share: number }[];
+  readonly mean: { readonly magnitude: number; readonly distanceKm: number; readonly epsilon: number };
+  readonly mode: { readonly magnitude: number; readonly distanceKm: number; readonly epsilon: number };
+  readonly bins: readonly DeaggregationBin[];
+}
+
+export interface IntensityResult {
+  /** MMI at each return period (key: years as a string), with the measure it came from. */
+  readonly atReturnPeriod: Readonly<Record<string, { readonly mmi: number | null; readonly roman: string | null; readonly fromMeasure: string }>>;
+  /** Chance of reaching MMI VI, VII and VIII in each horizon (key: years as a string). */
+  readonly chanceOfReaching: Readonly<Record<string, Readonly<Record<'VI' | 'VII' | 'VIII', number>>>>;
+}
+
+export interface NearestFault {
+  readonly sourceId: string;
+  readonly name: string;
+  /** Joyner-Boore distance to the whole fault surface, km. */
+  readonly distanceKm: number;
+  /** Bearing from the community to the closest point of the surface projection, deg from north. */
+  readonly bearingDeg: number;
+}
+
+export interface ScreeningBand {
+  readonly id: string;
+  readonly label: string;
+  readonly mmi475: number | null;
+}
+
+export interface CommunityResult {
+  readonly communityId: string;
+  readonly name: string;
+  readonly curves: Readonly<Record<string, HazardCurve>>;
+  /** atReturnPeriod["475"]["PGA"]: the level (g; PGV cm/s) with that return period, or null. */
+  readonly atReturnPeriod: Readonly<Record<string, Readonly<Record<string, number | null>>>>;
+  readonly returnPeriodStatus: Readonly<Record<string, Readonly<Record<string, ReturnPeriodStatus>>>>;
+  /** chanceOfExceeding["50"]["PGA"][i]: Poisson probability of exceeding levels[i] within 50 years. */
+  readonly chanceOfExceeding: Readonly<Record<string, Readonly<Record<string, readonly number[]>>>>;
+  readonly intensity: IntensityResult;
+  /** deaggregation["475"]: at the first measure of the settings (PGA by default). */
+  readonly deaggregation: Readonly<Record<string, Deaggregation>>;
+  readonly nearestFaults: readonly NearestFault[];
+  readonly band: ScreeningBand;
+  readonly warnings: readonly string[];
+}
+
+export interface Provenance {
+  readonly tool: 'tremora';
+  readonly toolVersion: string;
+  /** SHA-256 of the canonical JSON of the validated study. */
+  readonly inputHash: string;
+  readonly models: Readonly<Record<string, readonly { readonly model: string; readonly weight: number }[]>>;
+  readonly settings: unknown;
+  readonly startedAt: string;
+  readonly finishedAt: string;
+}
+
+export interface StudyResult {
+  readonly studyName: string;
+  readonly communities: readonly CommunityResult[];
+  readonly warnings: readonly string[];
+  readonly provenance: Provenance;
+}

@@ -1,0 +1,36 @@
+import type { RuptureContext } from '../motion/types.ts';
+
+/**
+ * A point in the study's local frame: x east, y north, z positive down, all km.
+ * The frame is the azimuthal equidistant projection of geometry/projection.ts.
+ */
+export interface PointKm {
+  readonly x: number;
+  readonly y: number;
+  readonly z: number;
+}
+
+/**
+ * One planar quadrilateral of a rupture surface. Corners in order: top edge start, top edge
+ * end (along strike), bottom edge end, bottom edge start. The hanging wall lies to the right
+ * of the top edge when walking from its start to its end (right-hand rule).
+ */
+export interface RupturePlane {
+  readonly corners: readonly [PointKm, PointKm, PointKm, PointKm];
+}
+
+export type RuptureSurface =
+  | { readonly kind: 'planes'; readonly planes: readonly RupturePlane[]; readonly hypocentre: PointKm }
+  | { readonly kind: 'point'; readonly hypocentre: PointKm };
+
+/**
+ * One earthquake scenario of a source: a magnitude, where it breaks, and how often per year.
+ * Every source is discretised once per study into these (ruptures/discretise.ts).
+ */
+export interface Rupture {
+  readonly sourceIndex: number;
+  readonly sourceId: string;
+  readonly annualRate: number;
+  readonly context: RuptureContext;
+  readonly surface: RuptureSurface;
+}
