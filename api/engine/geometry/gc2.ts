@@ -1,0 +1,69 @@
+import type { PointXY } from './projection.ts';
+
+/**
+ * Strike-normal and strike-parallel coordinates of a site relative to a (possibly bent) top
+ * trace: the generalized coordinate system GC2 of Spudich & Chiou (2015), "Strike-parallel and
+ * strike-normal coordinate system around geometrically complicated rupture traces — use by
+ * NGA-West2 and further improvements", USGS Open-File Report 2015-1028 (formulas from memory).
+ *
+ * Each segment i has a local strike-normal coordinate t_i (positive to the right of the trace,
+ * the hanging-wall side) and strike-parallel u_i from its start. The weight of a segment is the
+ * integral of 1/r² along it, w_i = (1/t_i) [atan((l_i - u_i)/t_i) - atan(-u_i/t_i)], and
+ * T = Σ w_i t_i / Σ w_i, U = Σ w_i (u_i + s_i) / Σ w_i with s_i the trace length before
+ * segment i. On a single straight trace T and U are exactly the usual Rx and along-strike
+ * coordinate; across a bend they vary smoothly where nearest-segment rules jump.
+ */
+export interface TraceCoordinates {
+  /** Strike-normal coordinate T, km; positive on the hanging-wall side (Rx). */
+  readonly tKm: number;
+  /** Strike-parallel coordinate U from the trace's first vertex, km. */
+  readonly uKm: number;
+  /** Length of the trace, km. */
+  readonly lengthKm: number;
+}
+
+/** A site this close to a segment's line (1 µm) is on it: the weight's 1/t limit is taken. */
+const ON_LINE_KM = 1e-9;
+
+/**
+ * GC2 coordinates of `site` (local km) relative to the trace made of `segments`, each a
+ * [start, end] pair in trace order (they need not join: a floating rupture's top edges part
+ * below a bend).
+ */
+export function traceCoordinates(segments: readonly (readonly [PointXY, PointXY])[], site: PointXY): TraceCoordinates {
+  let weightSum = 0;
+  let tSum = 0;
+  let uSum = 0;
+  let s = 0;
+  let onTrace: number | undefined;
+  for (const [a, b] of segments) {
+    const l = Math.hypot(b.x - a.x, b.y - a.y);
+    if (l === 0) continue;
+    const sx = (b.x - a.x) / l;
+    const sy = (b.y - a.y) / l;
+    const dx = site.x - a.x;
+    const dy = site.y - a.y;
+    const u = dx * sx + dy * sy;
+    const t = dx * sy - dy * sx;
+    let w: number;
+    if (Math.abs(t) > ON_LINE_KM) {
+      w = (Math.atan((l - u) / t) - Math.atan(-u / t)) / t;
+    } else if (u >= 0 && u <= l) {
+      onTrace ??= s + u;
+      w = 0;
+    } else {
+      // ∫ dx / (x - u)² over the segment, the t -> 0 limit off its ends.
+      w = 1 / (u - l) - 1 / u;
+    }
+    weightSum += w;
+    tSum += w * t;
+    uSum += w * (u + s);
+    s += l;
+  }
+  if (onTrace !== undefined) return { tKm: 0, uKm: onTrace, lengthKm: s };
+  if (!(weightSum > 0)) return { tKm: 0, uKm: 0, lengthKm: s };
+  return { tKm: tSum / weightSum, uKm: uSum / weightSum, lengthKm: s };
+}
+
+/** Distance off the ends of the trace along strike: 0 beside it (Ry0, km). */
+export const ry0FromU = (uKm: number, lengthKm: number): number => (uKm < 0 ? -uKm : uKm > lengthKm ? uKm - lengthKm : 0);

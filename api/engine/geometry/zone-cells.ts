@@ -1,0 +1,127 @@
+import { InvalidInput } from '../errors.ts';
+import type { ZoneSource } from '../model.ts';
+import { compensatedSum } from '../summation.ts';
+import type { LocalFrame, PointXY } from './projection.ts';
+
+/** One square cell of a zone: where its seismicity is put and its share of the zone's rate. */
+export interface ZoneCell {
+  /** Centroid of the part of the cell inside the zone, local km. */
+  readonly centre: PointXY;
+  /** Area of the cell inside the zone, km². */
+  readonly areaKm2: number;
+  /** areaKm2 / the zone's area: the cell's share of the zone's rate. */
+  readonly share: number;
+}
+
+type Vertex = readonly [x: number, y: number];
+
+/**
+ * Parts of a cell smaller than this fraction of it are slivers left where a polygon edge runs
+ * along a grid line and projection rounding (about 1e-9 km) puts it a hair across; dropped.
+ */
+const SLIVER_FRACTION = 1e-6;
+
+/** Signed shoelace area (counter-clockwise positive, km²) and first moments of an open ring. */
+function ringMoments(ring: readonly Vertex[]): { area: number; mx: number; my: number } {
+  let twiceArea = 0;
+  let mx = 0;
+  let my = 0;
+  for (let i = 0; i < ring.length; i++) {
+    const [x0, y0] = ring[i] as Vertex;
+    const [x1, y1] = ring[(i + 1) % ring.length] as Vertex;
+    const crossed = x0 * y1 - x1 * y0;
+    twiceArea += crossed;
+    mx += (x0 + x1) * crossed;
+    my += (y0 + y1) * crossed;
+  }
+  return { area: twiceArea / 2, mx: mx / 6, my: my / 6 };
+}
+
+/**
+ * One ring clipped to the half-plane where `inside` holds, the boundary crossing placed by
+ * `cross` (Sutherland & Hodgman 1974). A concave ring may come out with zero-width bridges
+ * along the boundary; they add nothing to its area or moments, which is all that is used.
+ */
+function clipHalfPlane(ring: readonly Vertex[], inside: (v: Vertex) => boolean, cross: (a: Vertex, b: Vertex) => Vertex): Vertex[] {
+  const out: Vertex[] = [];
+  for (let i = 0; i < ring.length; i++) {
+    const current = ring[i] as Vertex;
+    const previous = ring[(i + ring.length - 1) % ring.length] as Vertex;
+    if (inside(current)) {
+      if (!inside(previous)) out.push(cross(previous, current));
+      out.push(current);
+    } else if (inside(previous)) {
+      out.push(cross(previous, current));
+    }
+  }
+  return out;
+}
+
+const atX = (x: number) => (a: Vertex, b: Vertex): Vertex => [x, a[1] + ((x - a[0]) * (b[1] - a[1])) / (b[0] - a[0])];
+const atY = (y: number) => (a: Vertex, b: Vertex): Vertex => [a[0] + ((y - a[1]) * (b[0] - a[0])) / (b[1] - a[1]), y];
+
+function clipToBox(ring: readonly Vertex[], x0: number, y0: number, x1: number, y1: number): Vertex[] {
+  let r = clipHalfPlane(ring, (v) => v[0] >= x0, atX(x0));
+  r = clipHalfPlane(r, (v) => v[0] <= x1, atX(x1));
+  r = clipHalfPlane(r, (v) => v[1] >= y0, atY(y0));
+  return clipHalfPlane(r, (v) => v[1] <= y1, atY(y1));
+}
+
+/**
+ * The zone's polygon cut into squares of `cellKm` (km) aligned with the local frame's axes
+ * and on a grid through its origin, south row first, west to east. A cell keeps the part
+ * inside the polygon (holes removed): its share of the zone's rate is that part's area over the
+ * zone's, and its seismicity sits at that part's centroid. Ring edges are straight lines in the
+ * local frame between the projected vertices; areas are planar there (not turf's spherical
+ * area). Each ring is clipped to each cell on its own, outer rings adding and holes
+ * subtracting, which is exact for holes inside the outer ring as GeoJSON requires; a general
+ * polygon-clipping library was tried and failed on edges lying a hair off grid lines.
+ */
+export function zoneCells(zone: ZoneSource, frame: LocalFrame, cellKm: number): ZoneCell[] {
+  if (!(cellKm > 0)) throw new InvalidInput([{ path: 'settings.zoneCellKm', message: `expected a cell size > 0 km, got ${cellKm}` }]);
+  const rings = zone.rings.map((ring) => {
+    const open = ring.map((p): Vertex => {
+      const { x, y } = frame.toLocal(p);
+      return [x, y];
+    });
+    const [fx, fy] = open[0] ?? [NaN, NaN];
+    const [lx, ly] = open[open.length - 1] ?? [NaN, NaN];
+    if (open.length > 1 && fx === lx && fy === ly) open.pop();
+    return open;
+  });
+  // Outer ring adds, holes subtract, whatever way each ring winds.
+  const signs = rings.map((ring, r) => (r === 0 ? 1 : -1) * Math.sign(ringMoments(ring).area));
+  const zoneArea = rings.reduce((sum, ring, r) => sum + (signs[r] as number) * ringMoments(ring).area, 0);
+  if (!(zoneArea > 0)) throw new InvalidInput([{ path: 'coordinates', message: `zone "${zone.id}": expected a polygon with area, got ${zoneArea} km²` }]);
+
+  const outer = rings[0] ?? [];
+  const xs = outer.map((v) => v[0]);
+  const ys = outer.map((v) => v[1]);
+  const col0 = Math.floor(Math.min(...xs) / cellKm);
+  const col1 = Math.ceil(Math.max(...xs) / cellKm);
+  const row0 = Math.floor(Math.min(...ys) / cellKm);
+  const row1 = Math.ceil(Math.max(...ys) / cellKm);
+
+  const parts: { centre: PointXY; areaKm2: number }[] = [];
+  for (let row = row0; row < row1; row++) {
+    for (let col = col0; col < col1; col++) {
+      const [x0, y0, x1, y1] = [col * cellKm, row * cellKm, (col + 1) * cellKm, (row + 1) * cellKm];
+      let area = 0;
+      let mx = 0;
+      let my = 0;
+      rings.forEach((ring, r) => {
+        const clipped = clipToBox(ring, x0, y0, x1, y1);
+        if (clipped.length < 3) return;
+        const m = ringMoments(clipped);
+        const sign = signs[r] as number;
+        area += sign * m.area;
+        mx += sign * m.mx;
+        my += sign * m.my;
+      });
+      if (area > SLIVER_FRACTION * cellKm * cellKm) parts.push({ centre: { x: mx / area, y: my / area }, areaKm2: area });
+    }
+  }
+  // Shares over the sum of the parts, so they add to 1 whatever the rounding.
+  const total = compensatedSum(parts.map((p) => p.areaKm2));
+  return parts.map((p) => ({ centre: p.centre, areaKm2: p.areaKm2, share: p.areaKm2 / total }));
+}

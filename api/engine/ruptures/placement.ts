@@ -1,0 +1,68 @@
+import { faultSurface, type FaultSurface } from '../geometry/fault-surface.ts';
+import { floatingRuptures } from '../geometry/floating-ruptures.ts';
+import type { LocalFrame, PointXY } from '../geometry/projection.ts';
+import { fitDimensions, scaledDimensions, scalingRelationFor } from '../geometry/rupture-scaling.ts';
+import { zoneCells, type ZoneCell } from '../geometry/zone-cells.ts';
+import type { FaultSource, PointSource, Settings, Source, ZoneSource } from '../model.ts';
+import { pointRuptureContext } from './point-rupture.ts';
+import type { Rupture } from './rupture.ts';
+
+/** A source's geometry worked out once, ready to place ruptures of any magnitude on. */
+export type PreparedSource =
+  | { readonly kind: 'fault'; readonly source: FaultSource; readonly sourceIndex: number; readonly surface: FaultSurface; readonly spacingKm: number }
+  | { readonly kind: 'zone'; readonly source: ZoneSource; readonly sourceIndex: number; readonly cells: readonly ZoneCell[] }
+  | { readonly kind: 'point'; readonly source: PointSource; readonly sourceIndex: number; readonly location: PointXY };
+
+/** A rupture in place without a rate, and its share (0–1) of its magnitude bin's rate. */
+export type PlacedRupture = Omit<Rupture, 'annualRate'> & { readonly share: number };
+
+/** The geometry of `source` in `frame`: a fault surface, zone cells, or a point. */
+export function prepareSource(source: Source, sourceIndex: number, frame: LocalFrame, settings: Pick<Settings, 'ruptureSpacingKm' | 'zoneCellKm'>): PreparedSource {
+  if (source.kind === 'fault') {
+    return { kind: 'fault', source, sourceIndex, surface: faultSurface(source, frame), spacingKm: settings.ruptureSpacingKm };
+  }
+  if (source.kind === 'zone') return { kind: 'zone', source, sourceIndex, cells: zoneCells(source, frame, settings.zoneCellKm) };
+  return { kind: 'point', source, sourceIndex, location: frame.toLocal(source.location) };
+}
+
+/**
+ * Every rupture of a prepared source at `magnitude`, in a fixed order: a fault's floating
+ * positions (rows from the top down, each along strike; equal shares), a zone's cells (south
+ * row first, west to east; shares by area), or the one point.
+ */
+export function placeRuptures(prepared: PreparedSource, magnitude: number): PlacedRupture[] {
+  const { source, sourceIndex } = prepared;
+  const common = { sourceIndex, sourceId: source.id };
+  if (prepared.kind === 'fault') {
+    const { surface } = prepared;
+    const scaled = scaledDimensions(scalingRelationFor(source.setting, source.mechanism), magnitude);
+    const positions = floatingRuptures(surface, fitDimensions(scaled, surface.lengthKm, surface.widthKm), { spacingKm: prepared.spacingKm });
+    return positions.map((p) => ({
+      ...common,
+      share: 1 / positions.length,
+      context: {
+        magnitude,
+        rakeDeg: source.rakeDeg,
+        mechanism: source.mechanism,
+        setting: source.setting,
+        dipDeg: surface.dipDeg,
+        ztorKm: p.ztorKm,
+        widthKm: p.widthKm,
+        hypoDepthKm: p.hypocentre.z,
+      },
+      surface: { kind: 'planes', planes: p.planes, hypocentre: p.hypocentre },
+    }));
+  }
+  const context = pointRuptureContext(prepared.source, magnitude);
+  const depthKm = prepared.source.depthKm;
+  if (prepared.kind === 'zone') {
+    return prepared.cells.map((cell) => ({
+      ...common,
+      share: cell.share,
+      context,
+      surface: { kind: 'point', hypocentre: { x: cell.centre.x, y: cell.centre.y, z: depthKm } },
+    }));
+  }
+  const { x, y } = prepared.location;
+  return [{ ...common, share: 1, context, surface: { kind: 'point', hypocentre: { x, y, z: depthKm } } }];
+}

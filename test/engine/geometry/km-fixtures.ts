@@ -1,0 +1,82 @@
+import { createLocalFrame, type LocalFrame } from '../../../api/engine/geometry/projection.ts';
+import type { FaultSource, LonLat, PointSource, Recurrence, Settings, ZoneSource } from '../../../api/engine/model.ts';
+
+/**
+ * Hand-made sources drawn in local km, so expected distances can be worked by hand. The frame
+ * sits in open ocean; positions are converted to [lon, lat] through it and come back within
+ * about 1e-9 km (tested in projection.test.ts).
+ */
+export const FRAME: LocalFrame = createLocalFrame([-150, -47]);
+
+export const toLonLat = (points: readonly (readonly [number, number])[], frame: LocalFrame = FRAME): LonLat[] =>
+  points.map(([x, y]) => frame.toLonLat({ x, y }));
+
+export const FIXED_M7: Recurrence = { type: 'fixed', magnitude: 7, rate: 0.01 };
+
+export interface FaultOptions {
+  readonly dipDeg: number;
+  readonly dipDirectionDeg: number;
+  readonly upperDepthKm: number;
+  readonly lowerDepthKm: number;
+  readonly recurrence?: Recurrence;
+  readonly mechanism?: FaultSource['mechanism'];
+  readonly setting?: FaultSource['setting'];
+  readonly id?: string;
+}
+
+export function faultKm(traceKm: readonly (readonly [number, number])[], options: FaultOptions, frame: LocalFrame = FRAME): FaultSource {
+  return {
+    kind: 'fault',
+    id: options.id ?? 'test-fault',
+    name: options.id ?? 'Test fault',
+    setting: options.setting ?? 'crustal',
+    mechanism: options.mechanism ?? 'strike-slip',
+    rakeDeg: 0,
+    recurrence: options.recurrence ?? FIXED_M7,
+    trace: toLonLat(traceKm, frame),
+    dipDeg: options.dipDeg,
+    dipDirectionDeg: options.dipDirectionDeg,
+    upperDepthKm: options.upperDepthKm,
+    lowerDepthKm: options.lowerDepthKm,
+  };
+}
+
+export function zoneKm(ringsKm: readonly (readonly (readonly [number, number])[])[], recurrence: Recurrence, depthKm = 10, frame: LocalFrame = FRAME): ZoneSource {
+  return {
+    kind: 'zone',
+    id: 'test-zone',
+    name: 'Test zone',
+    setting: 'crustal',
+    mechanism: 'strike-slip',
+    rakeDeg: 0,
+    recurrence,
+    rings: ringsKm.map((ring) => toLonLat(ring, frame)),
+    depthKm,
+  };
+}
+
+export function pointKm(x: number, y: number, recurrence: Recurrence, depthKm = 8, frame: LocalFrame = FRAME): PointSource {
+  return {
+    kind: 'point',
+    id: 'test-point',
+    name: 'Test point',
+    setting: 'crustal',
+    mechanism: 'reverse',
+    rakeDeg: 90,
+    recurrence,
+    location: frame.toLonLat({ x, y }),
+    depthKm,
+  };
+}
+
+export const SETTINGS: Settings = {
+  measures: ['PGA'],
+  levels: {},
+  horizonsYears: [50],
+  returnPeriodsYears: [475],
+  truncationSigma: 3,
+  maxDistanceKm: 300,
+  magnitudeStep: 0.1,
+  ruptureSpacingKm: 5,
+  zoneCellKm: 10,
+};

@@ -1,0 +1,64 @@
+import { describe, expect, it } from 'vitest';
+import { zoneCells } from '../../../api/engine/geometry/zone-cells.ts';
+import { InvalidInput } from '../../../api/engine/errors.ts';
+import { expectClose, expectRelative } from '../../helpers/close.ts';
+import { FIXED_M7, FRAME, zoneKm } from './km-fixtures.ts';
+
+/* Areas by hand (plane geometry). Rings go through [lon, lat] and back, ~1e-9 km. */
+const square = (x0: number, y0: number, x1: number, y1: number): [number, number][] => [[x0, y0], [x1, y0], [x1, y1], [x0, y1], [x0, y0]];
+
+describe('zoneCells', () => {
+  it('a 100 km square with a 40 km square hole on the grid: 84 whole 10 km cells, 1/84 each', () => {
+    const zone = zoneKm([square(0, 0, 100, 100), square(30, 30, 70, 70)], FIXED_M7);
+    const cells = zoneCells(zone, FRAME, 10);
+    expect(cells.length).toBe(100 - 16);
+    for (const cell of cells) {
+      expectRelative(cell.areaKm2, 100, 1e-6, 'whole 10 km cell');
+      expectRelative(cell.share, 1 / 84, 1e-6, 'area share of 8400 km²');
+      const inHole = cell.centre.x > 30 && cell.centre.x < 70 && cell.centre.y > 30 && cell.centre.y < 70;
+      expect(inHole, `cell at (${cell.centre.x}, ${cell.centre.y}) is in the hole`).toBe(false);
+    }
+    expectClose(cells.reduce((s, c) => s + c.share, 0), 1, 1e-12, 'shares sum to 1');
+  });
+
+  it('off the grid: edge cells keep the part inside, shares follow area, holes respected', () => {
+    // Outer 5..105 x 5..105 (10 000 km²) minus hole 33..67 x 33..67 (1156 km²) = 8844 km².
+    const zone = zoneKm([square(5, 5, 105, 105), square(33, 33, 67, 67)], FIXED_M7);
+    const cells = zoneCells(zone, FRAME, 10);
+    const total = cells.reduce((s, c) => s + c.areaKm2, 0);
+    expectRelative(total, 8844, 1e-6, 'area by hand');
+    expectClose(cells.reduce((s, c) => s + c.share, 0), 1, 1e-12, 'shares sum to 1');
+    for (const cell of cells) expectRelative(cell.share, cell.areaKm2 / total, 1e-12, 'share by area');
+    const corner = cells[0];
+    expectRelative(corner?.areaKm2 ?? NaN, 25, 1e-6, 'south-west corner cell: 5 x 5 km inside');
+    expectClose(corner?.centre.x ?? NaN, 7.5, 1e-6, 'centroid of the inside part');
+    const ringCell = cells.find((c) => c.centre.x > 30 && c.centre.x < 40 && c.centre.y > 40 && c.centre.y < 50);
+    expectRelative(ringCell?.areaKm2 ?? NaN, 30, 1e-6, 'cell 30..40 x 40..50 cut by the hole at x = 33: 3 x 10 km left');
+  });
+
+  it('a triangle: total area ½ b h, cells south row first, west to east', () => {
+    const zone = zoneKm([[[0, 0], [60, 0], [0, 45], [0, 0]]], FIXED_M7);
+    const cells = zoneCells(zone, FRAME, 7.5);
+    expectRelative(cells.reduce((s, c) => s + c.areaKm2, 0), 0.5 * 60 * 45, 1e-6, '½ b h');
+    for (let i = 1; i < cells.length; i++) {
+      const a = cells[i - 1];
+      const b = cells[i];
+      if (!a || !b) continue;
+      const rowA = Math.floor(a.centre.y / 7.5);
+      const rowB = Math.floor(b.centre.y / 7.5);
+      expect(rowB > rowA || (rowB === rowA && b.centre.x > a.centre.x)).toBe(true);
+    }
+  });
+
+  it('a concave L-shape, wound clockwise: area 50 x 20 + 20 x 30 = 1600 km² on 15 km cells', () => {
+    const zone = zoneKm([[[0, 0], [0, 50], [20, 50], [20, 20], [50, 20], [50, 0], [0, 0]]], FIXED_M7);
+    const cells = zoneCells(zone, FRAME, 15);
+    expectRelative(cells.reduce((s, c) => s + c.areaKm2, 0), 1600, 1e-6, 'L-shape area by hand');
+    const notch = cells.find((c) => c.centre.x > 15 && c.centre.x < 30 && c.centre.y > 15 && c.centre.y < 30);
+    expectRelative(notch?.areaKm2 ?? NaN, 15 * 15 - 10 * 10, 1e-6, 'cell 15..30 x 15..30 minus the notch 20..30 x 20..30');
+  });
+
+  it('refuses a cell size that is not positive', () => {
+    expect(() => zoneCells(zoneKm([square(0, 0, 10, 10)], FIXED_M7), FRAME, 0)).toThrow(InvalidInput);
+  });
+});
