@@ -1,0 +1,80 @@
+import { z } from 'zod';
+import type { Community, SiteClass } from '../engine/model.ts';
+import { identifier, numberIn, oneOf, text, yesNo } from './fields.ts';
+import { formatPath, type IssueList } from './issues.ts';
+import { SITE_CLASSES, SITE_CLASS_VS30 } from './site-class.ts';
+
+/** The keys a community may carry (DESIGN.md section 2, plus siteClass). */
+export const COMMUNITY_KEYS = ['id', 'name', 'lon', 'lat', 'vs30', 'siteClass', 'population', 'coastal', 'elevationM'] as const;
+
+/**
+ * Vs30 accepted from 50 to 5,000 m/s: beyond those it is surely a unit slip (ft/s, km/s).
+ * Ground-motion models warn separately when a value leaves their own range.
+ */
+const VS30_RANGE = { min: 50, max: 5000, unit: 'm/s' } as const;
+
+export const communitySchema = z.object({
+    id: identifier(),
+    name: text(120, 'a name'),
+    lon: numberIn({ min: -180, max: 180, unit: 'degrees' }),
+    lat: numberIn({ min: -90, max: 90, unit: 'degrees' }),
+    vs30: numberIn(VS30_RANGE).optional(),
+    siteClass: oneOf(SITE_CLASSES as readonly SiteClass[]).optional(),
+    population: numberIn({ min: 0, max: 1e8, integer: true, unit: 'people' }).optional(),
+    coastal: yesNo().optional(),
+    elevationM: numberIn({ min: -500, max: 9000, unit: 'm' }).optional(),
+  });
+
+export type CommunityInput = z.output<typeof communitySchema>;
+
+/** A validated community as the engine sees it; vs30 from the site class when not given. */
+export function toCommunity(c: CommunityInput): Community {
+  const vs30 = c.vs30 ?? SITE_CLASS_VS30[c.siteClass as SiteClass];
+  return {
+    id: c.id,
+    name: c.name,
+    lon: c.lon,
+    lat: c.lat,
+    vs30,
+    vs30Basis: c.vs30 !== undefined ? 'measured' : 'site-class',
+    ...(c.siteClass !== undefined ? { siteClass: c.siteClass } : {}),
+    ...(c.population !== undefined ? { population: c.population } : {}),
+    coastal: c.coastal ?? false,
+    ...(c.elevationM !== undefined ? { elevationM: c.elevationM } : {}),
+  };
+}
+
+/** Most communities one study may hold (a screening list, not a census). */
+export const MAX_COMMUNITIES = 2000;
+
+/**
+ * Validates a list of raw communities, each at `pathOf(index)`; reports every problem and
+ * duplicate id, and returns the valid ones.
+ */
+export function readCommunities(
+  raw: readonly unknown[],
+  issues: IssueList,
+  pathOf: (index: number) => readonly PropertyKey[],
+): Community[] {
+  const out: Community[] = [];
+  const seen = new Map<string, number>();
+  raw.forEach((item, index) => {
+    issues.warnUnknownKeys(item, COMMUNITY_KEYS, pathOf(index));
+    const parsed = issues.parse(communitySchema, item, pathOf(index));
+    const given = (item ?? {}) as { vs30?: unknown; siteClass?: unknown };
+    const hasSite = given.vs30 !== undefined || given.siteClass !== undefined;
+    // Checked outside the schema so it is reported alongside every other problem of the row.
+    if (typeof item === 'object' && item !== null && !hasSite) {
+      issues.add([...pathOf(index), 'vs30'], `expected vs30 (m/s) or siteClass (${SITE_CLASSES.join(', ')}), got neither`);
+    }
+    if (!parsed || !hasSite) return;
+    const first = seen.get(parsed.id);
+    if (first !== undefined) {
+      issues.add([...pathOf(index), 'id'], `duplicate id "${parsed.id}"; expected unique ids (first used at ${formatPath(pathOf(first))})`);
+      return;
+    }
+    seen.set(parsed.id, index);
+    out.push(toCommunity(parsed));
+  });
+  return out;
+}

@@ -1,0 +1,92 @@
+import type { InputIssue } from '../engine/errors.ts';
+import type { Community, LonLat, Study, TectonicSetting } from '../engine/model.ts';
+import type { ModelCatalog } from '../engine/motion/catalog.ts';
+import { readBranches } from './branches-schema.ts';
+import { MAX_COMMUNITIES, readCommunities } from './community-schema.ts';
+import { readCommunitiesCsv } from './communities-csv.ts';
+import { describeValue, text } from './fields.ts';
+import { IssueList } from './issues.ts';
+import { readSettings } from './settings-schema.ts';
+import { readSourceGeometry } from './source-geometry.ts';
+import { readSources } from './source-schema.ts';
+
+export const STUDY_KEYS = ['name', 'communities', 'sources', 'groundMotion', 'settings', 'outline'] as const;
+
+export type LoadResult =
+  | { readonly ok: true; readonly study: Study; readonly warnings: readonly InputIssue[] }
+  | { readonly ok: false; readonly issues: readonly InputIssue[]; readonly warnings: readonly InputIssue[] };
+
+export interface LoadStudyOptions {
+  /** The models studies may name (api/engine/motion/registry.ts). */
+  readonly models: ModelCatalog;
+  /**
+   * CSV text for `communities` when the study gives a path there instead of a list; the caller
+   * (CLI, service) reads the file, so loading stays free of I/O.
+   */
+  readonly communitiesCsv?: string;
+}
+
+/**
+ * Validates a study document (DESIGN.md section 2) and builds the typed Study. Every problem is
+ * reported at once, each with the path of the field and what was expected.
+ */
+export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
+  const issues = new IssueList();
+  if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) {
+    issues.add([], `expected a study object with ${STUDY_KEYS.join(', ')}, got ${describeValue(raw)}`);
+    return { ok: false, issues: issues.issues, warnings: [] };
+  }
+  const doc = raw as Record<string, unknown>;
+  issues.warnUnknownKeys(doc, STUDY_KEYS, []);
+
+  const name = issues.parse(text(200, 'a study name'), doc.name, ['name']);
+  const communities = readStudyCommunities(doc.communities, options, issues);
+  const sources = readSources(doc.sources, issues, ['sources']);
+  const settings = readSettings(doc.settings, issues, ['settings']);
+  const used = new Set<TectonicSetting>(sources.map((s) => s.setting));
+  const groundMotion = readBranches(doc.groundMotion, used, settings, options.models, issues, ['groundMotion']);
+  const outline = doc.outline === undefined ? undefined : readOutline(doc.outline, issues);
+
+  if (issues.issues.length > 0 || name === undefined || !settings || !groundMotion || communities.length === 0) {
+    return { ok: false, issues: issues.issues, warnings: issues.warnings };
+  }
+  const study: Study = { name, communities, sources, groundMotion, settings, ...(outline ? { outline } : {}) };
+  return { ok: true, study, warnings: issues.warnings };
+}
+
+function readStudyCommunities(raw: unknown, options: LoadStudyOptions, issues: IssueList): Community[] {
+  if (typeof raw === 'string') {
+    if (options.communitiesCsv === undefined) {
+      issues.add(['communities'], `a CSV file "${raw}" is named here but its text was not supplied; expected a list of communities or a readable CSV file`);
+      return [];
+    }
+    return readCommunitiesCsv(options.communitiesCsv, ['communities'], issues).communities;
+  }
+  if (!Array.isArray(raw) || raw.length === 0 || raw.length > MAX_COMMUNITIES) {
+    issues.add(['communities'], `expected a list of 1 to ${MAX_COMMUNITIES} communities (or the path of a CSV file), got ${describeValue(raw)}`);
+    return [];
+  }
+  return readCommunities(raw, issues, (i) => ['communities', i]);
+}
+
+/** The optional map outline: a GeoJSON Polygon, MultiPolygon or FeatureCollection of polygons. */
+function readOutline(raw: unknown, issues: IssueList): LonLat[][] | undefined {
+  const rings: LonLat[][] = [];
+  const take = (geometry: unknown, path: readonly PropertyKey[]) => {
+    const g = geometry as { type?: unknown; coordinates?: unknown } | null;
+    if (g?.type === 'MultiPolygon' && Array.isArray(g.coordinates)) {
+      g.coordinates.forEach((coords, i) => take({ type: 'Polygon', coordinates: coords }, [...path, 'coordinates', i]));
+      return;
+    }
+    const read = readSourceGeometry(geometry, issues, path);
+    if (read?.kind === 'zone') rings.push(read.rings[0] as LonLat[]);
+    else if (read) issues.add([...path, 'type'], `expected a Polygon or MultiPolygon outline, got ${describeValue(g?.type)}`);
+  };
+  const fc = raw as { type?: unknown; features?: unknown };
+  if (fc.type === 'FeatureCollection' && Array.isArray(fc.features)) {
+    fc.features.forEach((f, i) => take((f as { geometry?: unknown } | null)?.geometry, ['outline', 'features', i, 'geometry']));
+  } else {
+    take(raw, ['outline']);
+  }
+  return rings;
+}

@@ -1,0 +1,132 @@
+import { z } from 'zod';
+import type { Mechanism, Source } from '../engine/model.ts';
+import { TECTONIC_SETTINGS } from '../engine/model.ts';
+import { describeValue, identifier, numberIn, oneOf, text } from './fields.ts';
+import { formatPath, type IssueList } from './issues.ts';
+import { readRecurrence } from './recurrence-schema.ts';
+import { readSourceGeometry, rightHandDipDirectionDeg } from './source-geometry.ts';
+
+/** Most sources one study may hold. */
+export const MAX_SOURCES = 500;
+
+const MECHANISMS = ['strike-slip', 'reverse', 'normal'] as const;
+/** Depth of earthquakes accepted, km: the deepest known events are near 700 km. */
+const DEPTH_KM = { min: 0, max: 700, unit: 'km' } as const;
+
+const FAULT_KEYS = ['id', 'name', 'setting', 'mechanism', 'rake', 'recurrence', 'dip', 'dipDirection', 'upperDepthKm', 'lowerDepthKm'];
+const POINT_KEYS = ['id', 'name', 'setting', 'mechanism', 'rake', 'recurrence', 'depthKm'];
+
+const commonSchema = z.object({
+  id: identifier(),
+  name: text(120, 'a name').optional(),
+  setting: oneOf(TECTONIC_SETTINGS),
+  mechanism: oneOf(MECHANISMS).optional(),
+  rake: numberIn({ min: -180, max: 180, unit: 'degrees' }).optional(),
+});
+
+const faultSchema = z.object({
+  dip: numberIn({ min: 0, max: 90, minOpen: true, unit: 'degrees' }),
+  dipDirection: numberIn({ min: 0, max: 360, maxOpen: true, unit: 'degrees' }).optional(),
+  upperDepthKm: numberIn(DEPTH_KM).optional(),
+  lowerDepthKm: numberIn({ ...DEPTH_KM, minOpen: true }),
+});
+
+const pointSchema = z.object({ depthKm: numberIn(DEPTH_KM) });
+
+/** The rake of a pure mechanism (Aki & Richards convention), degrees. */
+const RAKE_OF: Record<Mechanism, number> = { 'strike-slip': 0, reverse: 90, normal: -90 };
+
+/**
+ * Mechanism class of a rake: normal for -150 < rake < -30, reverse for 30 < rake < 150,
+ * strike-slip otherwise (the ranges of Boore et al. 2014, from memory; common practice).
+ */
+export function mechanismOfRake(rakeDeg: number): Mechanism {
+  if (rakeDeg > -150 && rakeDeg < -30) return 'normal';
+  if (rakeDeg > 30 && rakeDeg < 150) return 'reverse';
+  return 'strike-slip';
+}
+
+/** Validates one GeoJSON source feature at `path`; every problem goes to `issues`. */
+export function readSource(raw: unknown, issues: IssueList, path: readonly PropertyKey[]): Source | undefined {
+  if (typeof raw !== 'object' || raw === null || (raw as { type?: unknown }).type !== 'Feature') {
+    issues.add([...path, 'type'], `expected a GeoJSON "Feature", got ${describeValue(typeof raw === 'object' && raw ? (raw as { type?: unknown }).type : raw)}`);
+    return undefined;
+  }
+  const feature = raw as { geometry?: unknown; properties?: unknown };
+  const propsPath = [...path, 'properties'];
+  const geometry = readSourceGeometry(feature.geometry, issues, [...path, 'geometry']);
+  const props = feature.properties;
+  if (typeof props !== 'object' || props === null) {
+    issues.add(propsPath, `expected an object of source properties (id, setting, recurrence, ...), got ${describeValue(props)}`);
+    return undefined;
+  }
+  const isFault = (feature.geometry as { type?: unknown } | null)?.type === 'LineString';
+  if (geometry) issues.warnUnknownKeys(props, isFault ? FAULT_KEYS : POINT_KEYS, propsPath);
+
+  const common = issues.parse(commonSchema, props, propsPath);
+  if (common && common.mechanism === undefined && common.rake === undefined) {
+    issues.add([...propsPath, 'mechanism'], `expected a mechanism (${MECHANISMS.join(', ')}) or a rake in degrees, got neither`);
+  }
+  const recurrence = readRecurrence((props as { recurrence?: unknown }).recurrence, isFault, issues, [...propsPath, 'recurrence']);
+  const shape = geometry ? issues.parse(isFault ? faultSchema : pointSchema, props, propsPath) : undefined;
+  if (!geometry || !common || !recurrence || !shape || (common.mechanism === undefined && common.rake === undefined)) return undefined;
+
+  const rakeDeg = common.rake ?? RAKE_OF[common.mechanism as Mechanism];
+  const base = {
+    id: common.id,
+    name: common.name ?? common.id,
+    setting: common.setting,
+    mechanism: common.mechanism ?? mechanismOfRake(rakeDeg),
+    rakeDeg,
+    recurrence,
+  };
+  if (geometry.kind === 'fault') {
+    const f = shape as z.output<typeof faultSchema>;
+    const upperDepthKm = f.upperDepthKm ?? 0;
+    if (upperDepthKm >= f.lowerDepthKm) {
+      issues.add([...propsPath, 'lowerDepthKm'], `expected lowerDepthKm greater than upperDepthKm (${upperDepthKm} km), got ${f.lowerDepthKm} km`);
+      return undefined;
+    }
+    return {
+      ...base,
+      kind: 'fault',
+      trace: geometry.trace,
+      dipDeg: f.dip,
+      dipDirectionDeg: f.dipDirection ?? rightHandDipDirectionDeg(geometry.trace),
+      upperDepthKm,
+      lowerDepthKm: f.lowerDepthKm,
+    };
+  }
+  const { depthKm } = shape as z.output<typeof pointSchema>;
+  return geometry.kind === 'zone'
+    ? { ...base, kind: 'zone', rings: geometry.rings, depthKm }
+    : { ...base, kind: 'point', location: geometry.location, depthKm };
+}
+
+/** Validates a GeoJSON FeatureCollection of sources at `path`, with unique ids. */
+export function readSources(raw: unknown, issues: IssueList, path: readonly PropertyKey[]): Source[] {
+  const features = (raw as { features?: unknown } | null)?.features;
+  if (typeof raw !== 'object' || raw === null || (raw as { type?: unknown }).type !== 'FeatureCollection' || !Array.isArray(features)) {
+    issues.add(path, `expected a GeoJSON FeatureCollection with a list of features, got ${describeValue(raw)}`);
+    return [];
+  }
+  if (features.length === 0 || features.length > MAX_SOURCES) {
+    issues.add([...path, 'features'], `expected 1 to ${MAX_SOURCES} sources, got ${features.length}`);
+    return [];
+  }
+  const out: Source[] = [];
+  const seen = new Map<string, number>();
+  features.forEach((feature, i) => {
+    const featurePath = [...path, 'features', i];
+    const source = readSource(feature, issues, featurePath);
+    if (!source) return;
+    const first = seen.get(source.id);
+    if (first !== undefined) {
+      issues.add([...featurePath, 'properties', 'id'], `duplicate id "${source.id}"; expected unique ids (first used at ${formatPath([...path, 'features', first])})`);
+      return;
+    }
+    seen.set(source.id, i);
+    out.push(source);
+  });
+  return out;
+}
