@@ -47,3 +47,11 @@ export class InvalidInput extends TremoraError {
     super(`${summary}: ${issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`);
   }
 }
+
+/** A screening stopped on request (ScreenStudyOptions.shouldStop) before it finished. */
+export class Cancelled extends TremoraError {
+  override name = 'Cancelled';
+  constructor(readonly shareDone: number) {
+    super(`screening cancelled on request after ${Math.round(shareDone * 100)}% of the work; expected to run to the end`);
+  }
+}

@@ -1,0 +1,308 @@
+/**
+ * CB14 — Campbell, K. W. & Bozorgnia, Y. (2014), "NGA-West2 ground motion model for the average
+ * horizontal components of PGA, PGV, and 5% damped linear acceleration response spectra",
+ * Earthquake Spectra 30(3), 1087–1115, doi:10.1193/062913EQS175M. No erratum known to us that
+ * changes the equations. Coefficients: cb14-coefficients.ts (Tables 1 and 2, typed from memory).
+ *
+ * ln Y = f_mag + f_dis + f_flt + f_hng + f_site + f_sed + f_hyp + f_dip + f_atn
+ * (the paper's model equations as recalled; from memory), and for PSA at T < 0.25 s, Y = PGA where Y < PGA.
+ *   f_mag  = c0 + c1 M + c2 (M − 4.5)₊ + c3 (M − 5.5)₊ + c4 (M − 6.5)₊ (each hinge term active above it);
+ *   f_dis  = (c5 + c6 M) ln √(Rrup² + c7²);
+ *   f_flt  = (c8 F_RV + c9 F_NM) · f_flt,M, f_flt,M = 0 (M ≤ 4.5), M − 4.5 (≤ 5.5), 1 above;
+ *            F_RV = 1 for 30° < rake < 150°, F_NM = 1 for −150° < rake < −30°;
+ *   f_hng  = c10 f_Rx f_Rrup f_M f_Z f_δ, the hanging-wall term:
+ *            f_Rx = 0 for Rx < 0; h1 + h2 (Rx/R1) + h3 (Rx/R1)² for 0 ≤ Rx < R1;
+ *                   max(h4 + h5 x + h6 x², 0), x = (Rx − R1)/(R2 − R1), for Rx ≥ R1;
+ *                   R1 = W cos δ, R2 = 62 M − 350 (km);
+ *            f_Rrup = (Rrup − Rjb)/Rrup (1 at Rrup = 0);
+ *            f_M = 0 (M ≤ 5.5), (M − 5.5)[1 + a2 (M − 6.5)] (≤ 6.5), 1 + a2 (M − 6.5) above;
+ *            f_Z = 1 − 0.06 Ztor for Ztor ≤ 16.66 km, else 0; f_δ = (90 − δ)/45;
+ *   f_site = c11 ln(Vs30/k1) + k2 [ln(A1100 + c (Vs30/k1)ⁿ) − ln(A1100 + c)] for Vs30 ≤ k1,
+ *            (c11 + k2 n) ln(Vs30/k1) above; A1100 the model's median PGA (g) at Vs30 = 1100 m/s;
+ *   f_sed  = c14 (Z2.5 − 1) for Z2.5 ≤ 1 km; 0 up to 3 km; c16 k3 e^−0.75 [1 − e^(−0.25 (Z2.5 − 3))] above;
+ *   f_hyp  = f_hyp,H f_hyp,M, f_hyp,H = 0 (Zhyp ≤ 7 km), Zhyp − 7 (≤ 20), 13 above;
+ *            f_hyp,M = c17 (M ≤ 5.5), c17 + (c18 − c17)(M − 5.5) (≤ 6.5), c18 above;
+ *   f_dip  = c19 δ (M ≤ 4.5), c19 (5.5 − M) δ (≤ 5.5), 0 above (δ in degrees);
+ *   f_atn  = (c20 + Δc20)(Rrup − 80) for Rrup > 80 km, else 0 (Δc20 = 0, California and global).
+ * The Japan terms (S_J) are off. Where the site gives no Z2.5, the paper's California default
+ * ln Z2.5 = 7.089 − 1.144 ln Vs30 (Z2.5 in km) is used; A1100 always uses the default for
+ * Vs30 = 1100 m/s (its reference-rock condition).
+ *
+ * Standard deviations (the paper's aleatory-variability model, as recalled), ln units: τ_lnY and φ_lnY ramp linearly in
+ * M from (τ1, φ1) at M ≤ 4.5 to (τ2, φ2) at M ≥ 5.5; with α = ∂f_site/∂ln A1100
+ *   = k2 A1100 [(A1100 + c (Vs30/k1)ⁿ)⁻¹ − (A1100 + c)⁻¹] for Vs30 < k1 (else 0),
+ *   τ = √(τ_lnY² + α² τ_lnPGA² + 2 α ρ τ_lnY τ_lnPGA),
+ *   φ = √(φ_lnYB² + φ_lnAF² + α² φ_lnPGAB² + 2 α ρ φ_lnYB φ_lnPGAB), φ_lnXB = √(φ_lnX² − φ_lnAF²),
+ *   σ = √(τ² + φ²). Where Vs30 ≥ k1, τ and φ equal the table's (ramped) values.
+ *
+ * Inputs: magnitude M (moment magnitude); rrupKm, rjbKm, rxKm (km); ztorKm, hypoDepthKm,
+ * widthKm (km); dipDeg, rakeDeg (degrees); vs30 (m/s); z2p5Km (km, optional). Output: ln of the
+ * median, ln(g) for PGA and 5%-damped RotD50 PSA, ln(cm/s) for PGV; sigma, tau, phi in
+ * natural-log units. Distance metric: Rrup.
+ *
+ * Validity (the paper's stated ranges, from memory): M 3.3–8.5 strike-slip, 3.3–8.0 reverse,
+ * 3.3–7.5 normal; Rrup 0–300 km; Vs30 150–1500 m/s; Zhyp 0–20 km; Ztor 0–20 km; dip 15–90°;
+ * Z2.5 0–10 km; periods PGA, PGV and PSA 0.01–10 s. Outside, finite numbers with applicable: false.
+ *
+ * How the table was checked: cb14-coefficients.ts and test/engine/motion/cb14.test.ts.
+ */
+import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
+import { toRadians } from '../units.ts';
+import { CB14_CONSTANTS as K, CB14_PGA, CB14_PGV, CB14_SA, type Cb14Row } from './cb14-coefficients.ts';
+import { predictAtPeriod } from './interpolate-period.ts';
+import type { Measure } from './measure.ts';
+import type { GmmInput, GmmPrediction, GroundMotionModel, ValidityRange } from './types.ts';
+import { validityNotes } from './validity.ts';
+
+const NAME = 'CB14';
+
+export type Cb14Mechanism = 'strike-slip' | 'normal' | 'reverse';
+
+/** The paper's rake classes (degrees, any turn): reverse 30..150, normal −150..−30 (open). */
+export function cb14MechanismFromRake(rakeDeg: number): Cb14Mechanism {
+  const rake = ((((rakeDeg + 180) % 360) + 360) % 360) - 180;
+  if (rake > 30 && rake < 150) return 'reverse';
+  if (rake > -150 && rake < -30) return 'normal';
+  return 'strike-slip';
+}
+
+const SA_PERIODS_S: readonly number[] = Object.freeze(CB14_SA.map((r) => r.periodS));
+
+/** The earthquake and path as the equation sees them; distances and depths in km, dip in degrees. */
+export interface Cb14Scenario {
+  readonly magnitude: number;
+  readonly mechanism: Cb14Mechanism;
+  readonly rrupKm: number;
+  readonly rjbKm: number;
+  readonly rxKm: number;
+  readonly ztorKm: number;
+  readonly hypoDepthKm: number;
+  readonly widthKm: number;
+  readonly dipDeg: number;
+}
+
+/** f_mag (ln units) for moment magnitude M. */
+export function cb14MagnitudeTerm(row: Cb14Row, m: number): number {
+  const above = (hinge: number): number => Math.max(m - hinge, 0);
+  return row.c0 + row.c1 * m + row.c2 * above(4.5) + row.c3 * above(5.5) + row.c4 * above(6.5);
+}
+
+/** f_dis (ln units) for Rrup in km. */
+export function cb14DistanceTerm(row: Cb14Row, m: number, rrupKm: number): number {
+  return (row.c5 + row.c6 * m) * Math.log(Math.hypot(rrupKm, row.c7));
+}
+
+/** f_flt (ln units): style of faulting, faded in between M 4.5 and 5.5. */
+export function cb14StyleTerm(row: Cb14Row, m: number, mechanism: Cb14Mechanism): number {
+  const fade = Math.min(Math.max(m - 4.5, 0), 1);
+  const factor = mechanism === 'reverse' ? row.c8 : mechanism === 'normal' ? row.c9 : 0;
+  return factor * fade;
+}
+
+/** f_hng (ln units): the hanging-wall term; zero on the footwall (Rx < 0) and for vertical faults. */
+export function cb14HangingWallTerm(row: Cb14Row, s: Cb14Scenario): number {
+  if (s.rxKm < 0 || s.magnitude <= 5.5 || s.ztorKm > 16.66) return 0;
+  const r1Km = s.widthKm * Math.cos(toRadians(s.dipDeg));
+  const r2Km = 62 * s.magnitude - 350;
+  let fRx: number;
+  if (s.rxKm < r1Km) {
+    const x = s.rxKm / r1Km;
+    fRx = row.h1 + row.h2 * x + row.h3 * x * x;
+  } else if (r2Km > r1Km) {
+    const x = (s.rxKm - r1Km) / (r2Km - r1Km);
+    fRx = Math.max(K.h4 + row.h5 * x + row.h6 * x * x, 0);
+  } else {
+    // R2 ≤ R1 only for M below about 5.65 + R1/62, where the paper's taper beyond R1 is undefined; taken as ended.
+    fRx = 0;
+  }
+  // Rjb ≤ Rrup by definition; the clamp keeps rounding in the distance code from making this negative.
+  const fRrup = s.rrupKm === 0 ? 1 : Math.max(s.rrupKm - s.rjbKm, 0) / s.rrupKm;
+  const fM = s.magnitude <= 6.5 ? (s.magnitude - 5.5) * (1 + row.a2 * (s.magnitude - 6.5)) : 1 + row.a2 * (s.magnitude - 6.5);
+  const fZ = 1 - 0.06 * s.ztorKm;
+  const fDip = (90 - s.dipDeg) / 45;
+  return row.c10 * fRx * fRrup * fM * fZ * fDip;
+}
+
+/** f_site (ln units) for Vs30 in m/s and A1100 in g (the Japan term off). */
+export function cb14SiteTerm(row: Cb14Row, vs30: number, a1100G: number): number {
+  const lnRatio = Math.log(vs30 / row.k1);
+  if (vs30 > row.k1) return (row.c11 + row.k2 * K.n) * lnRatio;
+  return row.c11 * lnRatio + row.k2 * (Math.log(a1100G + K.c * Math.exp(K.n * lnRatio)) - Math.log(a1100G + K.c));
+}
+
+/** The paper's California default depth to Vs = 2.5 km/s (km) for Vs30 in m/s. */
+export function cb14DefaultZ2p5Km(vs30: number): number {
+  return Math.exp(7.089 - 1.144 * Math.log(vs30));
+}
+
+/** f_sed (ln units): shallow-sediment and deep-basin effects for Z2.5 in km. */
+export function cb14BasinTerm(row: Cb14Row, z2p5Km: number): number {
+  if (z2p5Km <= 1) return row.c14 * (z2p5Km - 1);
+  if (z2p5Km <= 3) return 0;
+  return row.c16 * row.k3 * Math.exp(-0.75) * (1 - Math.exp(-0.25 * (z2p5Km - 3)));
+}
+
+/** f_hyp (ln units) for hypocentral depth in km. */
+export function cb14HypocentreTerm(row: Cb14Row, m: number, hypoDepthKm: number): number {
+  const fH = Math.min(Math.max(hypoDepthKm - 7, 0), 13);
+  const fM = m <= 5.5 ? row.c17 : m <= 6.5 ? row.c17 + (row.c18 - row.c17) * (m - 5.5) : row.c18;
+  return fH * fM;
+}
+
+/** f_dip (ln units) for dip in degrees; matters only below M 5.5. */
+export function cb14DipTerm(row: Cb14Row, m: number, dipDeg: number): number {
+  if (m <= 4.5) return row.c19 * dipDeg;
+  if (m <= 5.5) return row.c19 * (5.5 - m) * dipDeg;
+  return 0;
+}
+
+/** f_atn (ln units): extra anelastic attenuation beyond Rrup = 80 km. */
+export function cb14AnelasticTerm(row: Cb14Row, rrupKm: number): number {
+  return rrupKm > 80 ? (row.c20 + K.deltaC20) * (rrupKm - 80) : 0;
+}
+
+/** ln median of one row before the short-period PGA floor (ln g; ln cm/s for PGV). */
+export function cb14LnMedianUnfloored(row: Cb14Row, s: Cb14Scenario, vs30: number, z2p5Km: number, a1100G: number): number {
+  return (
+    cb14MagnitudeTerm(row, s.magnitude) +
+    cb14DistanceTerm(row, s.magnitude, s.rrupKm) +
+    cb14StyleTerm(row, s.magnitude, s.mechanism) +
+    cb14HangingWallTerm(row, s) +
+    cb14SiteTerm(row, vs30, a1100G) +
+    cb14BasinTerm(row, z2p5Km) +
+    cb14HypocentreTerm(row, s.magnitude, s.hypoDepthKm) +
+    cb14DipTerm(row, s.magnitude, s.dipDeg) +
+    cb14AnelasticTerm(row, s.rrupKm)
+  );
+}
+
+/** Vs30 of the paper's reference rock, m/s. */
+const ROCK_VS30 = 1100;
+
+/** A1100: median PGA (g) of the event on reference rock (Vs30 = 1100 m/s, its default Z2.5). */
+export function cb14A1100G(s: Cb14Scenario): number {
+  // On rock above k1 the site term does not depend on A1100, so any value serves here.
+  return Math.exp(cb14LnMedianUnfloored(CB14_PGA, s, ROCK_VS30, cb14DefaultZ2p5Km(ROCK_VS30), 0));
+}
+
+/** τ, φ and σ (ln units) of a row, with the nonlinear-site correction for Vs30 (m/s) below k1. */
+export function cb14Sigma(row: Cb14Row, m: number, vs30: number, a1100G: number): { tau: number; phi: number; sigma: number } {
+  // Magnitudes 4.5 and 5.5 bound the ramp between the small- and large-event values.
+  const ramp = (small: number, large: number): number => (m <= 4.5 ? small : m >= 5.5 ? large : large + (small - large) * (5.5 - m));
+  const tauY = ramp(row.tau1, row.tau2);
+  const phiY = ramp(row.phi1, row.phi2);
+  const alpha =
+    vs30 < row.k1 ? row.k2 * a1100G * (1 / (a1100G + K.c * (vs30 / row.k1) ** K.n) - 1 / (a1100G + K.c)) : 0;
+  if (alpha === 0) return { tau: tauY, phi: phiY, sigma: Math.hypot(tauY, phiY) };
+  const tauPga = ramp(CB14_PGA.tau1, CB14_PGA.tau2);
+  const phiPga = ramp(CB14_PGA.phi1, CB14_PGA.phi2);
+  const base = (x: number): number => Math.sqrt(Math.max(x * x - row.phiLnAF * row.phiLnAF, 0));
+  const phiYB = base(phiY);
+  const phiPgaB = Math.sqrt(Math.max(phiPga * phiPga - CB14_PGA.phiLnAF * CB14_PGA.phiLnAF, 0));
+  const tau = Math.sqrt(Math.max(tauY ** 2 + alpha ** 2 * tauPga ** 2 + 2 * alpha * row.rho * tauY * tauPga, 0));
+  const phi = Math.sqrt(
+    Math.max(phiYB ** 2 + row.phiLnAF ** 2 + alpha ** 2 * phiPgaB ** 2 + 2 * alpha * row.rho * phiYB * phiPgaB, 0),
+  );
+  return { tau, phi, sigma: Math.hypot(tau, phi) };
+}
+
+const MAGNITUDE_RANGE: Readonly<Record<Cb14Mechanism, readonly [number, number]>> = Object.freeze({
+  'strike-slip': [3.3, 8.5],
+  reverse: [3.3, 8.0],
+  normal: [3.3, 7.5],
+});
+
+/** Validity over all mechanisms (strike-slip's magnitude range; the others stop lower). */
+export const CB14_VALIDITY: ValidityRange = Object.freeze({
+  magnitude: [3.3, 8.5],
+  distanceKm: [0, 300],
+  vs30: [150, 1500],
+  depthKm: [0, 20],
+} as const);
+
+function requireNumber(path: string, value: number, expected: string, ok: (v: number) => boolean): void {
+  if (!Number.isFinite(value) || !ok(value)) {
+    throw new InvalidInput([{ path, message: `expected ${expected}, got ${value}` }], `${NAME} input`);
+  }
+}
+
+function scenarioOf(input: GmmInput): Cb14Scenario {
+  requireNumber('magnitude', input.magnitude, 'a finite moment magnitude', () => true);
+  requireNumber('rakeDeg', input.rakeDeg, 'a finite rake in degrees', () => true);
+  requireNumber('rrupKm', input.rrupKm, 'a finite rupture distance of at least 0 km', (v) => v >= 0);
+  requireNumber('rjbKm', input.rjbKm, 'a finite Joyner–Boore distance of at least 0 km', (v) => v >= 0);
+  requireNumber('rxKm', input.rxKm, 'a finite Rx in km', () => true);
+  requireNumber('dipDeg', input.dipDeg, 'a dip above 0° and at most 90°', (v) => v > 0 && v <= 90);
+  requireNumber('ztorKm', input.ztorKm, 'a finite depth to the top of rupture of at least 0 km', (v) => v >= 0);
+  requireNumber('hypoDepthKm', input.hypoDepthKm, 'a finite hypocentral depth of at least 0 km', (v) => v >= 0);
+  requireNumber('widthKm', input.widthKm, 'a finite down-dip width of at least 0 km', (v) => v >= 0);
+  requireNumber('vs30', input.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
+  if (input.z2p5Km !== undefined) requireNumber('z2p5Km', input.z2p5Km, 'a finite Z2.5 of at least 0 km', (v) => v >= 0);
+  return {
+    magnitude: input.magnitude,
+    mechanism: cb14MechanismFromRake(input.rakeDeg),
+    rrupKm: input.rrupKm,
+    rjbKm: input.rjbKm,
+    rxKm: input.rxKm,
+    ztorKm: input.ztorKm,
+    hypoDepthKm: input.hypoDepthKm,
+    widthKm: input.widthKm,
+    dipDeg: input.dipDeg,
+  };
+}
+
+function notesOf(input: GmmInput, s: Cb14Scenario): string[] {
+  const notes = validityNotes(NAME, { ...CB14_VALIDITY, magnitude: MAGNITUDE_RANGE[s.mechanism] }, input, s.rrupKm);
+  const outside = (label: string, value: number, min: number, max: number, unit: string): void => {
+    if (value < min || value > max) notes.push(`${NAME}: ${label} ${Math.round(value * 100) / 100}${unit} is outside its range ${min}–${max}${unit}`);
+  };
+  outside('depth to top of rupture', s.ztorKm, 0, 20, ' km');
+  outside('dip', s.dipDeg, 15, 90, '°');
+  if (input.z2p5Km !== undefined) outside('Z2.5', input.z2p5Km, 0, 10, ' km');
+  if (input.setting !== 'crustal') notes.unshift(`${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`);
+  return notes;
+}
+
+/**
+ * CB14 median and standard deviations for one measure (PGA and PSA in g, PGV in cm/s; all in
+ * ln units), from the rupture, distances (Rrup, Rjb, Rx) and site of the input.
+ */
+export function predictCb14(input: GmmInput, measure: Measure): GmmPrediction {
+  const s = scenarioOf(input);
+  const notes = notesOf(input, s);
+  const z2p5Km = input.z2p5Km ?? cb14DefaultZ2p5Km(input.vs30);
+  const a1100G = cb14A1100G(s);
+  const applicable = notes.length === 0;
+  const lnPga = cb14LnMedianUnfloored(CB14_PGA, s, input.vs30, z2p5Km, a1100G);
+
+  const predictRow = (row: Cb14Row): GmmPrediction => {
+    const unfloored = cb14LnMedianUnfloored(row, s, input.vs30, z2p5Km, a1100G);
+    // CB14: at periods under 0.25 s the spectral acceleration is not allowed below PGA.
+    const lnMedian = row.periodS > 0 && row.periodS < 0.25 ? Math.max(unfloored, lnPga) : unfloored;
+    return { lnMedian, ...cb14Sigma(row, s.magnitude, input.vs30, a1100G), applicable, notes };
+  };
+
+  switch (measure.kind) {
+    case 'PGA':
+      return predictRow(CB14_PGA);
+    case 'PGV':
+      return predictRow(CB14_PGV);
+    case 'SA':
+      if (!(measure.periodS > 0)) throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
+      return predictAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) => predictRow(CB14_SA[i] as Cb14Row));
+  }
+}
+
+/** Campbell & Bozorgnia (2014) for shallow crustal earthquakes (Rrup): PGA, PGV, PSA 0.01–10 s. */
+export const cb14: GroundMotionModel = Object.freeze({
+  name: NAME,
+  citation:
+    'Campbell, K. W. & Bozorgnia, Y. (2014). NGA-West2 ground motion model for the average horizontal components of PGA, PGV, and 5% damped linear acceleration response spectra. Earthquake Spectra 30(3), 1087–1115.',
+  settings: Object.freeze(['crustal'] as const),
+  distanceMetric: 'rrup',
+  periodsS: SA_PERIODS_S,
+  hasPga: true,
+  hasPgv: true,
+  validity: CB14_VALIDITY,
+  predict: (input: GmmInput, measure: Measure): GmmPrediction => predictCb14(input, measure),
+});

@@ -1,0 +1,20 @@
+import { AGA16 } from './aga16.ts';
+import { bssa14 } from './bssa14.ts';
+import { createModelCatalog, type ModelCatalog } from './catalog.ts';
+import { cb14 } from './cb14.ts';
+import { cornell79 } from './cornell79.ts';
+
+/**
+ * The ground-motion models a study may name, and the branches a tectonic setting gets when a
+ * study names none: for crustal earthquakes the two NGA-West2 models with equal weight, for
+ * subduction earthquakes AGA16 (the only subduction model here). Cornell79 is kept for textbook
+ * checks of the hazard integral, not for screening.
+ */
+export const modelCatalog: ModelCatalog = createModelCatalog([bssa14, cb14, AGA16, cornell79], {
+  crustal: [
+    { model: 'BSSA14', weight: 0.5 },
+    { model: 'CB14', weight: 0.5 },
+  ],
+  interface: [{ model: 'AGA16', weight: 1 }],
+  intraslab: [{ model: 'AGA16', weight: 1 }],
+});

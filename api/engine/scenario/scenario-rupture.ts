@@ -1,0 +1,92 @@
+import { InvalidInput } from '../errors.ts';
+import { ruptureDistances } from '../geometry/distances.ts';
+import { surfacePatch, pointOnSurface } from '../geometry/fault-surface.ts';
+import { fitDimensions, scaledDimensions, scalingRelationFor } from '../geometry/rupture-scaling.ts';
+import type { PointXY } from '../geometry/projection.ts';
+import type { PreparedSource } from '../ruptures/placement.ts';
+import { placeRuptures } from '../ruptures/placement.ts';
+import type { Rupture } from '../ruptures/rupture.ts';
+
+/**
+ * Where a scenario puts its rupture:
+ * - `closest`: for each site, the floating position (or zone cell) with the smallest Rrup to it
+ *   — the worst placement for every community at once, so the communities' numbers do not come
+ *   from one single earthquake;
+ * - `{ communityId }`: the one position closest to that community, used for every site;
+ * - `{ alongStrikeKm, downDipKm }`: a fault rupture starting that far along the trace (from its
+ *   first vertex, after the right-hand-rule orientation) and down dip from its top edge;
+ * - `{ lon, lat }`: the epicentre of a zone or point source's rupture, at the source's depth.
+ */
+export type ScenarioPosition =
+  | 'closest'
+  | { readonly communityId: string }
+  | { readonly alongStrikeKm: number; readonly downDipKm: number }
+  | { readonly lon: number; readonly lat: number };
+
+/** A scenario rupture carries no rate; it is one earthquake. */
+export type ScenarioRupture = Omit<Rupture, 'annualRate'>;
+
+/** Every candidate position of `prepared` at `magnitude` (floating positions or zone cells). */
+export function candidateRuptures(prepared: PreparedSource, magnitude: number): ScenarioRupture[] {
+  return placeRuptures(prepared, magnitude).map(({ share: _share, ...rupture }) => rupture);
+}
+
+/** The candidate with the smallest Rrup to `site` (first one on ties). */
+export function closestRupture(candidates: readonly ScenarioRupture[], site: PointXY): ScenarioRupture {
+  let best = candidates[0];
+  let bestKm = Infinity;
+  for (const rupture of candidates) {
+    const { rrupKm } = ruptureDistances(rupture.surface, site);
+    if (rrupKm < bestKm) {
+      bestKm = rrupKm;
+      best = rupture;
+    }
+  }
+  if (!best) throw new InvalidInput([{ path: 'sourceId', message: 'the source has no rupture positions at this magnitude' }]);
+  return best;
+}
+
+/** A fault rupture of `magnitude`'s scaled size starting at an explicit position on the surface. */
+export function faultRuptureAt(prepared: PreparedSource & { kind: 'fault' }, magnitude: number, alongStrikeKm: number, downDipKm: number): ScenarioRupture {
+  const { surface, source } = prepared;
+  const size = fitDimensions(scaledDimensions(scalingRelationFor(source.setting, source.mechanism), magnitude), surface.lengthKm, surface.widthKm);
+  const maxAlong = surface.lengthKm - size.lengthKm;
+  const maxDown = surface.widthKm - size.widthKm;
+  const issues = [];
+  if (!(alongStrikeKm >= 0 && alongStrikeKm <= maxAlong + 1e-9)) {
+    issues.push({ path: 'position.alongStrikeKm', message: `expected a number in [0, ${maxAlong.toFixed(1)}] km for a rupture ${size.lengthKm.toFixed(1)} km long, got ${alongStrikeKm}` });
+  }
+  if (!(downDipKm >= 0 && downDipKm <= maxDown + 1e-9)) {
+    issues.push({ path: 'position.downDipKm', message: `expected a number in [0, ${maxDown.toFixed(1)}] km for a rupture ${size.widthKm.toFixed(1)} km wide, got ${downDipKm}` });
+  }
+  if (issues.length > 0) throw new InvalidInput(issues);
+  const along: [number, number] = [alongStrikeKm, alongStrikeKm + size.lengthKm];
+  const down: [number, number] = [downDipKm, downDipKm + size.widthKm];
+  const hypocentre = pointOnSurface(surface, alongStrikeKm + size.lengthKm / 2, downDipKm + size.widthKm / 2);
+  const sinDip = Math.sin((surface.dipDeg * Math.PI) / 180);
+  return {
+    sourceIndex: prepared.sourceIndex,
+    sourceId: source.id,
+    context: {
+      magnitude,
+      rakeDeg: source.rakeDeg,
+      mechanism: source.mechanism,
+      setting: source.setting,
+      dipDeg: surface.dipDeg,
+      ztorKm: surface.upperDepthKm + downDipKm * sinDip,
+      widthKm: size.widthKm,
+      hypoDepthKm: hypocentre.z,
+    },
+    surface: { kind: 'planes', planes: surfacePatch(surface, along, down), hypocentre },
+  };
+}
+
+/** A point rupture of a zone or point source with its epicentre at `epicentre`. */
+export function pointRuptureAt(candidates: readonly ScenarioRupture[], epicentre: PointXY): ScenarioRupture {
+  const template = candidates[0];
+  if (!template || template.surface.kind !== 'point') {
+    throw new InvalidInput([{ path: 'position', message: 'a lon/lat position needs a zone or point source; for a fault give alongStrikeKm and downDipKm' }]);
+  }
+  return { ...template, surface: { kind: 'point', hypocentre: { x: epicentre.x, y: epicentre.y, z: template.surface.hypocentre.z } } };
+}
+

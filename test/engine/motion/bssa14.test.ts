@@ -1,0 +1,248 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
+import { BSSA14_PGA, BSSA14_SA } from '../../../api/engine/motion/bssa14-coefficients.ts';
+import {
+  bssa14,
+  bssa14LinearSiteTerm,
+  bssa14LnMedianOnRock,
+  bssa14MechanismFromRake,
+  bssa14NonlinearSiteTerm,
+  bssa14Sigma,
+  predictBssa14,
+} from '../../../api/engine/motion/bssa14.ts';
+import type { Measure } from '../../../api/engine/motion/measure.ts';
+import type { GmmInput } from '../../../api/engine/motion/types.ts';
+import { expectClose, expectRelative } from '../../helpers/close.ts';
+import { worstKink } from './crustal-table-checks.ts';
+
+const SOURCE = 'Boore et al. (2014)';
+const PGA: Measure = { kind: 'PGA' };
+const PGV: Measure = { kind: 'PGV' };
+const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
+
+/** A vertical strike-slip event and a rock site; tests change what they need. */
+function input(over: Partial<GmmInput> = {}): GmmInput {
+  const rjbKm = over.rjbKm ?? 10;
+  return {
+    magnitude: 7, rakeDeg: 0, mechanism: 'strike-slip', setting: 'crustal', dipDeg: 90, ztorKm: 0, widthKm: 15,
+    hypoDepthKm: 8, rjbKm, rrupKm: rjbKm, rxKm: -rjbKm, ry0Km: 0, rhypoKm: Math.hypot(rjbKm, 8), repiKm: rjbKm,
+    vs30: 760, vs30Measured: true, ...over,
+  };
+}
+const lnY = (over: Partial<GmmInput>, m: Measure): number => bssa14.predict(input(over), m).lnMedian;
+
+describe('BSSA14: the equation', () => {
+  it('reproduces a hand calculation of PGA at M 7, Rjb 10 km, Vs30 760 m/s, strike-slip', () => {
+    // Boore et al. (2014) source and path functions with the PGA row (from memory), by hand:
+    // F_E = e1 + e6 (7 − 5.5) = 0.4856 − 0.1662·1.5 = 0.2363; R = √(10² + 4.5²) = 10.96586 km;
+    // F_P = (c1 + c2 (7 − 4.5)) ln R + c3 (R − 1) = −0.65475·2.39480 − 0.008088·9.96586 = −1.64859;
+    // F_S = 0 at Vref; ln PGA = −1.41229 (0.2436 g).
+    expectClose(lnY({}, PGA), -1.41229, 1e-5, `${SOURCE}: ln PGA, hand calculation`);
+  });
+
+  it('reproduces a hand calculation of SA(1.0) below the hinge magnitude', () => {
+    // 1 s row (from memory): M 5, Rjb 20 km: F_E = 0.4218 + 1.5004(−1.2) − 0.18983(1.44) = −1.65282;
+    // R = √(20² + 5.74²) = 20.8074; F_P = (−1.193 + 0.10248·0.5) ln R − 0.00121 (R − 1) = −3.48877;
+    // ln SA = −5.14160 (0.00585 g).
+    expectClose(lnY({ magnitude: 5, rjbKm: 20 }, sa(1)), -5.1416, 1e-4, `${SOURCE}: ln SA(1.0), hand calculation`);
+  });
+
+  it('has a linear site term of zero at Vref = 760 m/s and a nonlinear term of zero at and above it', () => {
+    // Boore et al. (2014) site function (from memory): ln F_lin = c ln(Vs30/Vref); f2 vanishes at 760 m/s.
+    for (const row of [BSSA14_PGA, ...BSSA14_SA]) {
+      expectClose(bssa14LinearSiteTerm(row, 760), 0, 0, `${SOURCE}: ln F_lin at Vref, ${row.periodS} s`);
+      for (const pgaRockG of [0.01, 0.5, 1.5]) {
+        expectClose(bssa14NonlinearSiteTerm(row, 760, pgaRockG), 0, 0, `${SOURCE}: ln F_nl at 760 m/s, ${row.periodS} s`);
+        expectClose(bssa14NonlinearSiteTerm(row, 1200, pgaRockG), 0, 0, `${SOURCE}: ln F_nl at 1200 m/s, ${row.periodS} s`);
+      }
+    }
+    const rock = { magnitude: 7, rjbKm: 10, mechanism: 'strike-slip' as const };
+    expect(lnY({}, PGA)).toBe(bssa14LnMedianOnRock(BSSA14_PGA, rock));
+  });
+
+  it('caps the linear site term at Vc', () => {
+    // Boore et al. (2014) site function (from memory): ln F_lin stops changing above Vc (1500 m/s for PGA).
+    expect(bssa14LinearSiteTerm(BSSA14_PGA, 1800)).toBe(bssa14LinearSiteTerm(BSSA14_PGA, 1500));
+    expectClose(bssa14LinearSiteTerm(BSSA14_PGA, 380), -0.6 * Math.log(0.5), 1e-12, `${SOURCE}: c ln(380/760), PGA`);
+  });
+
+  it('reduces soft-soil amplification under strong rock shaking (nonlinear site response)', () => {
+    // Boore et al. (2014), site term after Seyhan & Stewart (2014): on Vs30 = 200 m/s the
+    // amplification of PGA falls as rock PGA grows.
+    const amplification = (over: Partial<GmmInput>): number => lnY({ ...over, vs30: 200 }, PGA) - lnY({ ...over, vs30: 760 }, PGA);
+    const weak = amplification({ magnitude: 5, rjbKm: 100 });
+    const strong = amplification({ magnitude: 7.5, rjbKm: 1 });
+    expect(weak).toBeGreaterThan(0);
+    expect(strong).toBeLessThan(weak - 0.3);
+    expect(bssa14NonlinearSiteTerm(BSSA14_PGA, 200, 0.6)).toBeLessThan(bssa14NonlinearSiteTerm(BSSA14_PGA, 200, 0.05));
+  });
+});
+
+describe('BSSA14: mechanism', () => {
+  it('classifies rake by the paper\'s ranges', () => {
+    // Boore et al. (2014), mechanism classes by rake (from memory).
+    expect(bssa14MechanismFromRake(0)).toBe('strike-slip');
+    expect(bssa14MechanismFromRake(180)).toBe('strike-slip');
+    expect(bssa14MechanismFromRake(-160)).toBe('strike-slip');
+    expect(bssa14MechanismFromRake(30)).toBe('strike-slip');
+    expect(bssa14MechanismFromRake(31)).toBe('reverse');
+    expect(bssa14MechanismFromRake(90)).toBe('reverse');
+    expect(bssa14MechanismFromRake(-90)).toBe('normal');
+    expect(bssa14MechanismFromRake(270)).toBe('normal');
+  });
+
+  it('orders the mechanisms as the table does', () => {
+    // Table of coefficients (from memory): normal (e2) lowest wherever typed; reverse (e3) above
+    // strike-slip (e1) at 0.3 s, below it for PGA; unspecified (e0) between normal and the others.
+    const at = (rakeDeg: number, m: Measure): number => lnY({ rakeDeg, magnitude: 6.5 }, m);
+    for (const m of [PGA, PGV, sa(0.01), sa(0.05), sa(0.3), sa(1)]) {
+      expect(at(-90, m), 'normal < strike-slip').toBeLessThan(at(0, m));
+      expect(at(-90, m), 'normal < reverse').toBeLessThan(at(90, m));
+      const unspecified = predictBssa14(input({ magnitude: 6.5 }), m, { mechanism: 'unspecified' }).lnMedian;
+      expect(unspecified).toBeGreaterThan(at(-90, m));
+    }
+    expect(at(90, sa(0.3))).toBeGreaterThan(at(0, sa(0.3)));
+    expect(at(90, PGA)).toBeLessThan(at(0, PGA));
+  });
+
+});
+
+describe('BSSA14: standard deviations', () => {
+  it('equals the table where no adjustment applies', () => {
+    // Table of coefficients (from memory): M ≥ 5.5, Rjb ≤ R1 and Vs30 ≥ V2 give τ2 and φ2;
+    // M ≤ 4.5 gives τ1 and φ1. σ = √(τ² + φ²).
+    const cases: [Measure, number, number, number, number][] = [
+      [PGA, 0.348, 0.495, 0.398, 0.695],
+      [sa(0.2), 0.309, 0.539, 0.344, 0.711],
+      [sa(1), 0.298, 0.625, 0.498, 0.553],
+      [PGV, 0.346, 0.552, 0.401, 0.644],
+    ];
+    for (const [m, tau2, phi2, tau1, phi1] of cases) {
+      const large = bssa14.predict(input({ magnitude: 6.5, rjbKm: 10, vs30: 500 }), m);
+      expectClose(large.tau, tau2, 1e-12, `${SOURCE}: τ2`);
+      expectClose(large.phi, phi2, 1e-12, `${SOURCE}: φ2`);
+      expectClose(large.sigma, Math.hypot(tau2, phi2), 1e-12, `${SOURCE}: σ = √(τ2² + φ2²)`);
+      const small = bssa14.predict(input({ magnitude: 4, rjbKm: 10, vs30: 500 }), m);
+      expectClose(small.tau, tau1, 1e-12, `${SOURCE}: τ1`);
+      expectClose(small.phi, phi1, 1e-12, `${SOURCE}: φ1`);
+    }
+    expectClose(bssa14.predict(input({ magnitude: 6.5 }), PGA).sigma, 0.605086, 1e-6, `${SOURCE}: σ(PGA, M ≥ 5.5) by hand`);
+  });
+
+  it('ramps with magnitude, distance and Vs30 as the paper\'s φ(M, Rjb, Vs30) says', () => {
+    // PGA (from memory): τ at M 5 is halfway between τ1 0.398 and τ2 0.348; φ at
+    // Rjb = √(R1 R2) gains half of ΔφR = 0.1; below V1 = 225 m/s φ loses ΔφV = 0.07.
+    expectClose(bssa14Sigma(BSSA14_PGA, 5, 10, 760).tau, 0.373, 1e-12, `${SOURCE}: τ(M 5), PGA`);
+    expectClose(bssa14Sigma(BSSA14_PGA, 6, Math.sqrt(110 * 270), 760).phi, 0.545, 1e-12, `${SOURCE}: φ at √(R1 R2), PGA`);
+    expectClose(bssa14Sigma(BSSA14_PGA, 6, 350, 200).phi, 0.495 + 0.1 - 0.07, 1e-12, `${SOURCE}: φ beyond R2, below V1`);
+    const mid = Math.sqrt(225 * 300);
+    expectClose(bssa14Sigma(BSSA14_PGA, 6, 10, mid).phi, 0.495 - 0.035, 1e-12, `${SOURCE}: φ at √(V1 V2)`);
+  });
+});
+
+describe('BSSA14: medians against published figures', () => {
+  // Orders of magnitude read from memory of the paper's and Gregor et al. (2014)'s figures of
+  // median motion against distance (Vs30 = 760 m/s, strike-slip); ±30% suits a figure read by eye.
+  const cases: [string, Partial<GmmInput>, Measure, number][] = [
+    ['PGA, M 7, 10 km', { magnitude: 7, rjbKm: 10 }, PGA, 0.26],
+    ['SA(0.2), M 7, 10 km', { magnitude: 7, rjbKm: 10 }, sa(0.2), 0.57],
+    ['SA(1.0), M 7, 10 km', { magnitude: 7, rjbKm: 10 }, sa(1), 0.2],
+    ['PGA, M 7, 100 km', { magnitude: 7, rjbKm: 100 }, PGA, 0.03],
+    ['PGA, M 5, 10 km', { magnitude: 5, rjbKm: 10 }, PGA, 0.07],
+    ['PGV, M 7, 10 km (cm/s)', { magnitude: 7, rjbKm: 10 }, PGV, 25],
+  ];
+  for (const [label, over, m, expected] of cases) {
+    it(label, () => {
+      expectRelative(Math.exp(lnY(over, m)), expected, 0.3, `Boore et al. (2014) / Gregor et al. (2014) figures, ${label} (from memory)`);
+    });
+  }
+
+  it('gives SA(0.01) practically equal to PGA', () => {
+    // PSA at 0.01 s equals PGA to within a few percent (common practice; the paper's rows agree).
+    for (const over of [{ magnitude: 5, rjbKm: 5 }, { magnitude: 7, rjbKm: 30, vs30: 300 }, { magnitude: 8, rjbKm: 150 }]) {
+      expectClose(lnY(over, sa(0.01)), lnY(over, PGA), 0.03, 'common practice: PSA(0.01 s) ≈ PGA');
+    }
+  });
+
+  it('gives smooth median spectra in ln(period)', () => {
+    // A wrong coefficient shows as a kink in ln SA. M 3.5–8, Rjb 0–150 km, Vs30 180–760 m/s,
+    // every mechanism: the recalled table's worst is 0.146 ln units (M 3.5, 5–7.5 s); bound 0.2.
+    for (const magnitude of [3.5, 5, 6, 7, 8]) {
+      for (const rjbKm of [0, 10, 50, 150]) {
+        for (const vs30 of [180, 300, 760]) {
+          for (const rakeDeg of [0, 90, -90]) {
+            const values = BSSA14_SA.map((r) => lnY({ magnitude, rjbKm, vs30, rakeDeg }, sa(r.periodS)));
+            const kink = worstKink(BSSA14_SA.map((r) => r.periodS), values);
+            expect(kink.residual <= 0.2, `M ${magnitude}, ${rjbKm} km, ${vs30} m/s, rake ${rakeDeg}: ${kink.residual.toFixed(3)} at ${kink.periodS} s`).toBe(true);
+          }
+        }
+      }
+    }
+  });
+});
+
+describe('BSSA14: properties', () => {
+  const measures = [PGA, PGV, sa(0.2), sa(1), sa(3)];
+
+  it('falls with distance and rises with magnitude', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 3, max: 8.5, noNaN: true }),
+        fc.double({ min: 0, max: 390, noNaN: true }),
+        fc.double({ min: 0.5, max: 10, noNaN: true }),
+        fc.double({ min: 0.05, max: 0.5, noNaN: true }),
+        fc.constantFrom(...measures),
+        (magnitude, rjbKm, stepKm, stepM, m) => {
+          expect(lnY({ magnitude, rjbKm: rjbKm + stepKm }, m)).toBeLessThan(lnY({ magnitude, rjbKm }, m));
+          expect(lnY({ magnitude: magnitude + stepM, rjbKm }, m)).toBeGreaterThan(lnY({ magnitude, rjbKm }, m));
+        },
+      ),
+      { seed: 20140301, numRuns: 300 },
+    );
+  });
+
+  it('interpolates between rows in ln(period) and returns the row on a row', () => {
+    const between = bssa14.predict(input(), sa(0.17));
+    const lo = bssa14.predict(input(), sa(0.15));
+    const hi = bssa14.predict(input(), sa(0.2));
+    const w = Math.log(0.17 / 0.15) / Math.log(0.2 / 0.15);
+    expectClose(between.lnMedian, lo.lnMedian + (hi.lnMedian - lo.lnMedian) * w, 1e-12, 'interpolate-period.ts rule (common practice)');
+    expect(between.lnMedian).toBeGreaterThan(Math.min(lo.lnMedian, hi.lnMedian));
+    expect(between.lnMedian).toBeLessThan(Math.max(lo.lnMedian, hi.lnMedian));
+    expect(bssa14.predict(input(), sa(0.2)).lnMedian).toBe(predictBssa14(input(), sa(0.2 * (1 + 1e-9))).lnMedian);
+  });
+
+  it('answers outside its validity with applicable false and finite numbers', () => {
+    const outside: Partial<GmmInput>[] = [
+      { magnitude: 9 }, { magnitude: 2.5 }, { rjbKm: 450 }, { vs30: 120 }, { vs30: 2000 },
+      { magnitude: 7.5, rakeDeg: -90 }, { setting: 'interface' },
+    ];
+    for (const over of outside) {
+      for (const m of measures) {
+        const p = bssa14.predict(input(over), m);
+        expect(p.applicable, JSON.stringify(over)).toBe(false);
+        expect(p.notes.length).toBeGreaterThan(0);
+        for (const v of [p.lnMedian, p.sigma, p.tau, p.phi]) expect(Number.isFinite(v)).toBe(true);
+      }
+    }
+    expect(bssa14.predict(input({ magnitude: 7.5, rakeDeg: 0 }), PGA).applicable).toBe(true);
+  });
+
+  it('refuses periods outside its table and bad input by name', () => {
+    expect(() => bssa14.predict(input(), sa(0.005))).toThrow(UnsupportedPeriod);
+    expect(() => bssa14.predict(input(), sa(12))).toThrow(UnsupportedPeriod);
+    expect(() => bssa14.predict(input({ magnitude: Number.NaN }), PGA)).toThrow(/magnitude/);
+    expect(() => bssa14.predict(input({ rjbKm: -1 }), PGA)).toThrow(InvalidInput);
+    expect(() => bssa14.predict(input({ vs30: 0 }), PGA)).toThrow(/vs30/);
+    expect(() => bssa14.predict(input({ rakeDeg: Number.POSITIVE_INFINITY }), PGA)).toThrow(/rakeDeg/);
+  });
+
+  it('describes itself for the registry', () => {
+    expect(bssa14.name).toBe('BSSA14');
+    expect(bssa14.distanceMetric).toBe('rjb');
+    expect(bssa14.settings).toEqual(['crustal']);
+    expect(bssa14.hasPga && bssa14.hasPgv).toBe(true);
+    expect(bssa14.validity).toEqual({ magnitude: [3, 8.5], distanceKm: [0, 400], vs30: [150, 1500] });
+  });
+});
