@@ -1,0 +1,65 @@
+import { Hono } from 'hono';
+import { bodyLimit } from 'hono/body-limit';
+import { methodNotAllowed } from 'hono/method-not-allowed';
+import { errorHandler, logToStderr, notFoundHandler, type LogError } from './error-handler.ts';
+import { errorBody } from './http-error.ts';
+import { requireToken } from './require-token.ts';
+import { computeRoutes } from './routes/compute.ts';
+import { healthRoutes } from './routes/health.ts';
+import { importRoutes } from './routes/imports.ts';
+import { probeRoutes } from './routes/probe.ts';
+import { runRoutes } from './routes/runs.ts';
+import { scenarioRoutes } from './routes/scenario.ts';
+import { studyRoutes } from './routes/studies.ts';
+import { sameOriginWrites } from './same-origin.ts';
+import { securityHeaders } from './security-headers.ts';
+import type { ServiceContext } from './service-context.ts';
+
+/**
+ * Largest request body accepted, bytes. A study at the schema's limits (500 sources, the
+ * communities limit) with detailed fault traces and zone outlines stays well under this.
+ */
+export const DEFAULT_BODY_LIMIT_BYTES = 5 * 1024 * 1024;
+
+export interface CreateAppOptions {
+  /** The pages, mounted at `/`; the API's headers, limits and error answers apply to them too. */
+  readonly pages?: Hono;
+  /** When set, every request that writes or computes must carry it (require-token.ts). */
+  readonly token?: string;
+  readonly bodyLimitBytes?: number;
+  readonly logError?: LogError;
+}
+
+/** The whole HTTP service: JSON API under /api/, optional pages at /, one error shape. */
+export function createApp(ctx: ServiceContext, options: CreateAppOptions = {}): Hono {
+  const app = new Hono();
+  const maxSize = options.bodyLimitBytes ?? DEFAULT_BODY_LIMIT_BYTES;
+
+  app.use(securityHeaders());
+  app.use(
+    methodNotAllowed({
+      app,
+      onMethodNotAllowed: (c, methods) =>
+        c.json(errorBody(`${c.req.method} is not allowed on ${c.req.path}; expected ${methods.join(', ')}`), 405, { Allow: methods.join(', ') }),
+    }),
+  );
+  app.use(sameOriginWrites());
+  if (options.token !== undefined) app.use(requireToken(options.token));
+  app.use(
+    bodyLimit({
+      maxSize,
+      onError: (c) => c.json(errorBody(`the request body is over the limit of ${maxSize} bytes`), 413),
+    }),
+  );
+
+  const api = new Hono();
+  for (const routes of [healthRoutes, studyRoutes, importRoutes, runRoutes, computeRoutes, scenarioRoutes, probeRoutes]) {
+    api.route('/', routes(ctx));
+  }
+  app.route('/api', api);
+  if (options.pages) app.route('/', options.pages);
+
+  app.onError(errorHandler(options.logError ?? logToStderr));
+  app.notFound(notFoundHandler);
+  return app;
+}

@@ -1,0 +1,10 @@
+export { createApp, DEFAULT_BODY_LIMIT_BYTES, type CreateAppOptions } from './app.ts';
+export { ConfigError, DEFAULT_HOST, DEFAULT_PORT, isLoopbackHost, readConfig, type ServiceConfig } from './config.ts';
+export { seedDemoStudy, DEMO_STUDY_URL, type DemoSeed } from './demo-seed.ts';
+export { errorHandler, logToStderr, notFoundHandler, type LogError } from './error-handler.ts';
+export { errorBody, HttpError, type ErrorBody } from './http-error.ts';
+export { canonicalJson, inputHash, sha256Hex } from './input-hash.ts';
+export { CONTENT_SECURITY_POLICY, securityHeaders } from './security-headers.ts';
+export type { ServiceContext } from './service-context.ts';
+export { TOOL_VERSION } from './tool-version.ts';
+export { checkWorkBudget, DEFAULT_WORK_BUDGET, studyWork, type StudyWork } from './work-budget.ts';

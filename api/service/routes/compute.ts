@@ -1,0 +1,40 @@
+import { Hono } from 'hono';
+import { readJsonObject } from '../request-body.ts';
+import type { ServiceContext } from '../service-context.ts';
+import { inputHash } from '../input-hash.ts';
+import { validateStudy } from '../study-input.ts';
+import { measureStudy } from '../study-size.ts';
+
+/** Stateless work on a posted study: validate only, or screen it without saving anything. */
+export function computeRoutes(ctx: ServiceContext): Hono {
+  const app = new Hono();
+
+  app.post('/validate', async (c) => {
+    const { value } = await readJsonObject(c, 'a study document');
+    const { study, warnings } = validateStudy(value, ctx.models);
+    const work = await measureStudy(ctx, study);
+    return c.json({
+      valid: true,
+      name: study.name,
+      communities: study.communities.length,
+      sources: study.sources.length,
+      measures: study.settings.measures,
+      work: { size: work.size, budget: ctx.workBudget, ruptures: work.ruptures, detail: work.detail },
+      inputHash: inputHash(study),
+      warnings,
+    });
+  });
+
+  app.post('/compute', async (c) => {
+    const { value } = await readJsonObject(c, 'a study document');
+    const { study } = validateStudy(value, ctx.models);
+    await measureStudy(ctx, study);
+    const handle = ctx.runPool.run({ kind: 'screen', study, inputHash: inputHash(study), toolVersion: ctx.toolVersion });
+    // Nobody is left to read the answer of a request the client gave up on.
+    c.req.raw.signal.addEventListener('abort', () => handle.cancel(), { once: true });
+    const { resultsJson } = await handle.result;
+    return c.body(resultsJson, 200, { 'Content-Type': 'application/json; charset=utf-8' });
+  });
+
+  return app;
+}

@@ -1,0 +1,25 @@
+import { Hono } from 'hono';
+import type { ServiceContext } from '../service-context.ts';
+
+/** GET /api/health: the service answers, its database answers, and how busy its workers are. */
+export function healthRoutes(ctx: ServiceContext): Hono {
+  const app = new Hono();
+  app.get('/health', (c) => {
+    const runWorkers = ctx.runPool.stats();
+    const quickWorkers = ctx.quickPool.stats();
+    const database = ctx.store.ping() ? 'ok' : 'unavailable';
+    const ok = database === 'ok' && runWorkers.alive > 0 && quickWorkers.alive > 0;
+    return c.json(
+      {
+        status: ok ? 'ok' : 'degraded',
+        tool: 'tremora',
+        version: ctx.toolVersion,
+        database,
+        workers: { runs: runWorkers, quick: quickWorkers },
+        activeRuns: ctx.scheduler.activeCount,
+      },
+      ok ? 200 : 503,
+    );
+  });
+  return app;
+}

@@ -1,0 +1,110 @@
+import { Hono } from 'hono';
+import type { StudyResult } from '../../engine/results.ts';
+import { isFinished, type RunRecord } from '../../store/index.ts';
+import { HttpError, notFound } from '../http-error.ts';
+import { inputHash } from '../input-hash.ts';
+import { runCsv } from '../run-csv.ts';
+import { runGeoJson } from '../run-geojson.ts';
+import type { ServiceContext } from '../service-context.ts';
+import { runStudy, storedInputs, validateStudy } from '../study-input.ts';
+import { measureStudy } from '../study-size.ts';
+
+/** A run as the API shows it: its state, provenance (once done) and links; results are separate. */
+export const runJson = (run: RunRecord) => ({
+  id: run.id,
+  studyId: run.studyId,
+  status: run.status,
+  progress: run.progress,
+  inputHash: run.inputHash,
+  createdAt: run.createdAt,
+  startedAt: run.startedAt,
+  finishedAt: run.finishedAt,
+  error: run.error,
+  provenance: run.provenance === null ? null : (JSON.parse(run.provenance) as unknown),
+  links: {
+    self: `/api/runs/${run.id}`,
+    study: `/api/studies/${run.studyId}`,
+    results: `/api/runs/${run.id}/results`,
+    csv: `/api/runs/${run.id}/results.csv`,
+    geojson: `/api/runs/${run.id}/results.geojson`,
+    cancel: `/api/runs/${run.id}/cancel`,
+  },
+});
+
+/** Runs of saved studies: start, follow, cancel, read and export results. */
+export function runRoutes(ctx: ServiceContext): Hono {
+  const app = new Hono();
+  const { studies, runs } = ctx.store;
+
+  const findRun = (id: string): RunRecord => {
+    const run = runs.get(id);
+    if (!run) throw notFound('run', id);
+    return run;
+  };
+
+  /** A done run's results with the study it computed (for coordinates); 409 before that. */
+  const finishedResults = (id: string) => {
+    const run = findRun(id);
+    const text = runs.results(id);
+    if (run.status !== 'done' || text === undefined) {
+      throw new HttpError(409, `run "${id}" is ${run.status}; results exist only once it is done${run.error ? ` (${run.error})` : ''}`);
+    }
+    return { run, text, inputs: runs.inputs(id) };
+  };
+
+  app.post('/studies/:id/runs', async (c) => {
+    const id = c.req.param('id');
+    const record = studies.get(id);
+    if (!record) throw notFound('study', id);
+    const inputs = storedInputs(ctx.store, record);
+    const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
+    const work = await measureStudy(ctx, study);
+    // The study may have been deleted while it was measured.
+    if (!studies.get(id)) throw notFound('study', id);
+    const run = runs.create({ studyId: id, document: inputs.document, ...(inputs.communitiesCsv === undefined ? {} : { communitiesCsv: inputs.communitiesCsv }), inputHash: inputHash(study) });
+    ctx.scheduler.start(run, study);
+    return c.json({ ...runJson(run), work: { size: work.size, budget: ctx.workBudget, detail: work.detail } }, 202, { Location: `/api/runs/${run.id}` });
+  });
+
+  app.get('/studies/:id/runs', (c) => {
+    const id = c.req.param('id');
+    if (!studies.get(id)) throw notFound('study', id);
+    return c.json({ runs: runs.listForStudy(id).map(runJson) });
+  });
+
+  app.get('/runs/:runId', (c) => c.json(runJson(findRun(c.req.param('runId')))));
+
+  app.get('/runs/:runId/results', (c) => {
+    const { text } = finishedResults(c.req.param('runId'));
+    return c.body(text, 200, { 'Content-Type': 'application/json; charset=utf-8' });
+  });
+
+  app.get('/runs/:runId/results.csv', (c) => {
+    const { run, text, inputs } = finishedResults(c.req.param('runId'));
+    const { study } = runStudy(inputs as NonNullable<typeof inputs>, ctx.models);
+    return c.body(runCsv(study, JSON.parse(text) as StudyResult), 200, {
+      'Content-Type': 'text/csv; charset=utf-8',
+      'Content-Disposition': `attachment; filename="tremora-run-${run.id}.csv"`,
+    });
+  });
+
+  app.get('/runs/:runId/results.geojson', (c) => {
+    const { run, text, inputs } = finishedResults(c.req.param('runId'));
+    const { study } = runStudy(inputs as NonNullable<typeof inputs>, ctx.models);
+    return c.body(JSON.stringify(runGeoJson(study, JSON.parse(text) as StudyResult)), 200, {
+      'Content-Type': 'application/geo+json; charset=utf-8',
+      'Content-Disposition': `attachment; filename="tremora-run-${run.id}.geojson"`,
+    });
+  });
+
+  app.post('/runs/:runId/cancel', (c) => {
+    const id = c.req.param('runId');
+    const run = findRun(id);
+    if (isFinished(run.status)) throw new HttpError(409, `run "${id}" is already ${run.status}; only a queued or running run can be cancelled`);
+    // Every unfinished run belongs to this process (others were marked interrupted at start).
+    if (!ctx.scheduler.cancel(id)) runs.finishWithout(id, 'cancelled', 'cancelled on request');
+    return c.json(runJson(findRun(id)), 202);
+  });
+
+  return app;
+}

@@ -1,0 +1,53 @@
+import { Hono } from 'hono';
+import { InvalidInput, type InputIssue } from '../../engine/errors.ts';
+import type { Study } from '../../engine/model.ts';
+import type { ScenarioRequest } from '../../engine/scenario/index.ts';
+import { notFound } from '../http-error.ts';
+import { readJsonObject } from '../request-body.ts';
+import { readScenarioRequest } from '../scenario-request.ts';
+import type { ServiceContext } from '../service-context.ts';
+import { storedInputs, validateStudy } from '../study-input.ts';
+
+/** Runs `work`, adding its InvalidInput issues to `issues` instead of throwing them. */
+function collect<T>(issues: InputIssue[], work: () => T): T | undefined {
+  try {
+    return work();
+  } catch (error) {
+    if (!(error instanceof InvalidInput)) throw error;
+    issues.push(...error.issues);
+    return undefined;
+  }
+}
+
+/** Deterministic shaking of one rupture: of a posted study, or of a saved one. */
+export function scenarioRoutes(ctx: ServiceContext): Hono {
+  const app = new Hono();
+
+  const answer = async (study: Study, request: ScenarioRequest) => {
+    const { resultJson } = await ctx.quickPool.run({ kind: 'scenario', study, request }).result;
+    return resultJson;
+  };
+
+  app.post('/scenario', async (c) => {
+    const { value } = await readJsonObject(c, 'a scenario request with its study ({ "study": {...}, "sourceId": ..., "magnitude": ... })');
+    const issues: InputIssue[] = [];
+    const { study: studyDocument, ...fields } = value;
+    const valid = collect(issues, () => validateStudy(studyDocument, ctx.models, undefined, 'study'));
+    const request = collect(issues, () => readScenarioRequest(fields));
+    if (issues.length > 0 || !valid || !request) throw new InvalidInput(issues, 'invalid scenario');
+    return c.body(await answer(valid.study, request), 200, { 'Content-Type': 'application/json; charset=utf-8' });
+  });
+
+  app.post('/studies/:id/scenario', async (c) => {
+    const id = c.req.param('id');
+    const record = ctx.store.studies.get(id);
+    if (!record) throw notFound('study', id);
+    const { value } = await readJsonObject(c, 'a scenario request ({ "sourceId": ..., "magnitude": ... })');
+    const request = readScenarioRequest(value);
+    const inputs = storedInputs(ctx.store, record);
+    const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
+    return c.body(await answer(study, request), 200, { 'Content-Type': 'application/json; charset=utf-8' });
+  });
+
+  return app;
+}

@@ -1,0 +1,78 @@
+import { Hono } from 'hono';
+import type { StudySummary } from '../../store/index.ts';
+import { notFound } from '../http-error.ts';
+import { readJsonObject } from '../request-body.ts';
+import type { ServiceContext } from '../service-context.ts';
+import { storedInputs, validateStudy } from '../study-input.ts';
+
+/** Where a study's parts and actions are. */
+export const studyLinks = (id: string) => ({
+  self: `/api/studies/${id}`,
+  document: `/api/studies/${id}/document`,
+  runs: `/api/studies/${id}/runs`,
+  communities: `/api/studies/${id}/communities`,
+  sources: `/api/studies/${id}/sources`,
+  scenario: `/api/studies/${id}/scenario`,
+});
+
+/** A study as lists and writes answer it (the document itself comes with GET /api/studies/{id}). */
+export const studyJson = (study: StudySummary) => ({
+  id: study.id,
+  name: study.name,
+  createdAt: study.createdAt,
+  updatedAt: study.updatedAt,
+  links: studyLinks(study.id),
+});
+
+/** Saved studies: list, create, read, replace, delete. Documents are kept as they were sent. */
+export function studyRoutes(ctx: ServiceContext): Hono {
+  const app = new Hono();
+  const { studies } = ctx.store;
+
+  const find = (id: string) => {
+    const record = studies.get(id);
+    if (!record) throw notFound('study', id);
+    return record;
+  };
+
+  app.get('/studies', (c) => c.json({ studies: studies.list().map(studyJson) }));
+
+  app.post('/studies', async (c) => {
+    const { value, text } = await readJsonObject(c, 'a study document');
+    const { study, warnings } = validateStudy(value, ctx.models);
+    const record = studies.create({ name: study.name, document: text });
+    return c.json({ ...studyJson(record), warnings }, 201, { Location: `/api/studies/${record.id}` });
+  });
+
+  app.get('/studies/:id', (c) => {
+    const record = find(c.req.param('id'));
+    const inputs = storedInputs(ctx.store, record);
+    return c.json({ ...studyJson(record), document: inputs.raw, communitiesCsv: inputs.communitiesCsv ?? null });
+  });
+
+  app.get('/studies/:id/document', (c) => {
+    const record = find(c.req.param('id'));
+    return c.body(record.document, 200, { 'Content-Type': 'application/json; charset=utf-8' });
+  });
+
+  app.put('/studies/:id', async (c) => {
+    const id = c.req.param('id');
+    const existing = find(id);
+    const { value, text } = await readJsonObject(c, 'a study document');
+    const csv = typeof value.communities === 'string' ? studies.latestFile(existing.id, 'communities-csv') : undefined;
+    const { study, warnings } = validateStudy(value, ctx.models, csv);
+    const record = studies.replace(id, { name: study.name, document: text });
+    if (!record) throw notFound('study', id);
+    return c.json({ ...studyJson(record), warnings });
+  });
+
+  app.delete('/studies/:id', (c) => {
+    const id = c.req.param('id');
+    find(id);
+    for (const run of ctx.store.runs.listForStudy(id)) ctx.scheduler.cancel(run.id);
+    if (!studies.delete(id)) throw notFound('study', id);
+    return c.body(null, 204);
+  });
+
+  return app;
+}

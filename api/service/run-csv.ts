@@ -1,0 +1,46 @@
+import Papa from 'papaparse';
+import type { Study } from '../engine/model.ts';
+import { measureUnit, parseMeasure } from '../engine/motion/measure.ts';
+import type { CommunityResult, StudyResult } from '../engine/results.ts';
+
+const INTENSITIES = ['VI', 'VII', 'VIII'] as const;
+
+/** Column names: `PGA_475yr_g`, `PGV_475yr_cm/s`, `MMI_475yr`, `chance_MMI_VII_50yr`. */
+function columns(study: Study): string[] {
+  const { measures, returnPeriodsYears, horizonsYears } = study.settings;
+  const out = ['communityId', 'name', 'lon', 'lat', 'vs30', 'band', 'bandLabel'];
+  for (const years of returnPeriodsYears) {
+    for (const m of measures) out.push(`${m}_${years}yr_${measureUnit(parseMeasure(m))}`);
+    out.push(`MMI_${years}yr`);
+  }
+  for (const years of horizonsYears) for (const roman of INTENSITIES) out.push(`chance_MMI_${roman}_${years}yr`);
+  out.push('nearestFault', 'nearestFault_km', 'warnings');
+  return out;
+}
+
+function row(study: Study, community: CommunityResult): unknown[] {
+  const site = study.communities.find((c) => c.id === community.communityId);
+  const { measures, returnPeriodsYears, horizonsYears } = study.settings;
+  const cells: unknown[] = [community.communityId, community.name, site?.lon ?? '', site?.lat ?? '', site?.vs30 ?? '', community.band.id, community.band.label];
+  for (const years of returnPeriodsYears) {
+    const key = String(years);
+    for (const m of measures) cells.push(community.atReturnPeriod[key]?.[m] ?? '');
+    cells.push(community.intensity.atReturnPeriod[key]?.mmi ?? '');
+  }
+  for (const years of horizonsYears) {
+    for (const roman of INTENSITIES) cells.push(community.intensity.chanceOfReaching[String(years)]?.[roman] ?? '');
+  }
+  const nearest = community.nearestFaults[0];
+  cells.push(nearest?.sourceId ?? '', nearest?.distanceKm ?? '', community.warnings.join(' | '));
+  return cells;
+}
+
+/**
+ * A run's results as CSV, one row per community: the levels at each return period (g; PGV
+ * cm/s), the intensity there, the chance of reaching MMI VI–VIII in each horizon, the nearest
+ * fault. Empty cells where the value is unknown (a level beyond the computed curve). Text
+ * cells starting with = + - @ get a leading ' so a spreadsheet does not run them as formulas.
+ */
+export function runCsv(study: Study, result: StudyResult): string {
+  return Papa.unparse({ fields: columns(study), data: result.communities.map((c) => row(study, c)) }, { newline: '\r\n', escapeFormulae: true });
+}

@@ -1,0 +1,54 @@
+import { InvalidInput, type InputIssue } from '../engine/errors.ts';
+import type { Study } from '../engine/model.ts';
+import type { ModelCatalog } from '../engine/motion/catalog.ts';
+import type { StudyRecord, Store } from '../store/index.ts';
+import { loadStudy } from '../study/load-study.ts';
+import { parseJsonText } from '../study/json-text.ts';
+
+export interface ValidStudy {
+  readonly study: Study;
+  readonly warnings: readonly InputIssue[];
+}
+
+/** Issues of a study nested in a request (`study.communities[2].vs30`). */
+const under = (prefix: string | undefined, issues: readonly InputIssue[]): InputIssue[] =>
+  prefix === undefined ? [...issues] : issues.map((i) => ({ path: i.path === '(study)' ? prefix : `${prefix}.${i.path}`, message: i.message }));
+
+/**
+ * Validates a study document; throws InvalidInput listing every problem. `communitiesCsv` is
+ * the text for a document whose `communities` names a CSV file (imported earlier).
+ */
+export function validateStudy(raw: unknown, models: ModelCatalog, communitiesCsv?: string, pathPrefix?: string): ValidStudy {
+  const result = loadStudy(raw, communitiesCsv === undefined ? { models } : { models, communitiesCsv });
+  if (!result.ok) throw new InvalidInput(under(pathPrefix, result.issues), 'invalid study');
+  return { study: result.study, warnings: under(pathPrefix, result.warnings) };
+}
+
+/** The inputs of a saved study: its document text and, when it names one, the imported CSV. */
+export interface StoredInputs {
+  readonly document: string;
+  readonly raw: Record<string, unknown>;
+  readonly communitiesCsv?: string;
+}
+
+/** A stored document is one the service validated before writing, so it parses. */
+function parseStored(text: string): Record<string, unknown> {
+  const parsed = parseJsonText(text, 'document');
+  if (!parsed.ok || typeof parsed.value !== 'object' || parsed.value === null) {
+    throw new Error(`a stored study document does not parse as a JSON object: ${parsed.ok ? 'not an object' : parsed.issue.message}`);
+  }
+  return parsed.value as Record<string, unknown>;
+}
+
+/** A saved study's document and, when its `communities` names a file, the latest imported CSV. */
+export function storedInputs(store: Store, record: StudyRecord): StoredInputs {
+  const raw = parseStored(record.document);
+  if (typeof raw.communities !== 'string') return { document: record.document, raw };
+  const csv = store.studies.latestFile(record.id, 'communities-csv');
+  return csv === undefined ? { document: record.document, raw } : { document: record.document, raw, communitiesCsv: csv };
+}
+
+/** The study a run computed, from the inputs copied into it. */
+export function runStudy(inputs: { document: string; communitiesCsv?: string }, models: ModelCatalog): ValidStudy {
+  return validateStudy(parseStored(inputs.document), models, inputs.communitiesCsv);
+}

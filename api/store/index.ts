@@ -1,0 +1,14 @@
+export { DEFAULT_DATABASE_PATH, openStore, type Store } from './store.ts';
+export { migrate, readMigrations, MIGRATIONS_DIR, type Migration, type MigrationOutcome } from './migrate.ts';
+export { StudyRepository, type StudyFile, type StudyFileKind, type StudyRecord, type StudySummary, type StudyWrite } from './study-repository.ts';
+export {
+  FINISHED_STATUSES,
+  INTERRUPTED_MESSAGE,
+  isFinished,
+  RunRepository,
+  type RunInputs,
+  type RunOutputs,
+  type RunRecord,
+  type RunStatus,
+} from './run-repository.ts';
+export { newId } from './new-id.ts';

@@ -1,0 +1,60 @@
+import { mkdirSync } from 'node:fs';
+import { dirname } from 'node:path';
+import Database from 'better-sqlite3';
+import { migrate, type MigrationOutcome } from './migrate.ts';
+import { RunRepository } from './run-repository.ts';
+import { StudyRepository } from './study-repository.ts';
+
+/** The database file used when TREMORA_DB is not set, relative to the working directory (git-ignored). */
+export const DEFAULT_DATABASE_PATH = '.tremora/tremora.db';
+
+/**
+ * How long a statement waits for another connection's lock before failing, ms. Only one
+ * service writes, but a backup or an inspection with the sqlite3 shell may hold a lock briefly.
+ */
+const BUSY_TIMEOUT_MS = 5_000;
+
+export interface Store {
+  readonly studies: StudyRepository;
+  readonly runs: RunRepository;
+  readonly migration: MigrationOutcome;
+  /** Runs found queued or running at open (left by a crash), now marked interrupted. */
+  readonly interruptedAtOpen: number;
+  /** `PRAGMA integrity_check`: 'ok' or the problems found. */
+  integrityCheck(): string;
+  /** Cheap liveness check of the connection. */
+  ping(): boolean;
+  close(): void;
+}
+
+/**
+ * Opens (creating if needed) the database at `path`: WAL journal, foreign keys on, a busy
+ * timeout, schema migrated, runs left unfinished by a previous process marked interrupted.
+ */
+export function openStore(path: string): Store {
+  if (path !== ':memory:') mkdirSync(dirname(path), { recursive: true });
+  const db = new Database(path);
+  try {
+    db.pragma('journal_mode = WAL');
+    // FULL: each commit survives a power cut too, not only a crash of the process; the
+    // service writes rarely, so the extra sync costs nothing noticeable.
+    db.pragma('synchronous = FULL');
+    db.pragma('foreign_keys = ON');
+    db.pragma(`busy_timeout = ${BUSY_TIMEOUT_MS}`);
+    const migration = migrate(db);
+    const runs = new RunRepository(db);
+    const interruptedAtOpen = runs.interruptUnfinished();
+    return {
+      studies: new StudyRepository(db),
+      runs,
+      migration,
+      interruptedAtOpen,
+      integrityCheck: () => (db.pragma('integrity_check') as { integrity_check: string }[]).map((r) => r.integrity_check).join('; '),
+      ping: () => (db.prepare('SELECT 1 AS one').get() as { one: number }).one === 1,
+      close: () => db.close(),
+    };
+  } catch (error) {
+    db.close();
+    throw error;
+  }
+}

@@ -1,0 +1,66 @@
+import type { InputIssue } from '../engine/errors.ts';
+import type { Study } from '../engine/model.ts';
+import type { Provenance } from '../engine/results.ts';
+import type { ScenarioRequest } from '../engine/scenario/index.ts';
+
+/**
+ * What the service asks of a worker thread. Everything crosses by structured clone, so tasks
+ * and outputs are plain data (a Study is plain data by design: model.ts).
+ */
+export type WorkerTask =
+  /** Screen a study: results JSON text (provenance included) and the provenance. */
+  | { readonly kind: 'screen'; readonly study: Study; readonly inputHash: string; readonly toolVersion: string }
+  /** Count a study's ruptures, for the work budget, without screening it. */
+  | { readonly kind: 'measure'; readonly study: Study }
+  /** One deterministic scenario (engine/scenario), as JSON text. */
+  | { readonly kind: 'scenario'; readonly study: Study; readonly request: ScenarioRequest };
+
+export interface ScreenOutput {
+  /** The StudyResult with its provenance, serialised in the worker to spare the service thread. */
+  readonly resultsJson: string;
+  readonly provenance: Provenance;
+}
+
+export interface MeasureOutput {
+  readonly ruptures: number;
+}
+
+export interface ScenarioOutput {
+  readonly resultJson: string;
+}
+
+export interface TaskOutputs {
+  readonly screen: ScreenOutput;
+  readonly measure: MeasureOutput;
+  readonly scenario: ScenarioOutput;
+}
+
+export type TaskKind = WorkerTask['kind'];
+
+/** A task as posted to a worker: `stop` is a one-cell Int32Array on shared memory (1 = stop). */
+export interface TaskMessage {
+  readonly id: number;
+  readonly task: WorkerTask;
+  readonly stop: Int32Array;
+}
+
+/** An error as it crosses back from a worker: enough to rebuild the engine's named errors. */
+export interface SerialisedError {
+  readonly name: string;
+  readonly message: string;
+  /** True for the engine's own errors (TremoraError): the input was at fault, not the code. */
+  readonly domain: boolean;
+  readonly issues?: readonly InputIssue[];
+  readonly size?: number;
+  readonly budget?: number;
+  readonly detail?: string;
+  readonly shareDone?: number;
+  readonly stack?: string;
+}
+
+export type WorkerReply =
+  | { readonly type: 'ready' }
+  | { readonly type: 'started'; readonly id: number; readonly at: string }
+  | { readonly type: 'progress'; readonly id: number; readonly shareDone: number }
+  | { readonly type: 'done'; readonly id: number; readonly output: TaskOutputs[TaskKind] }
+  | { readonly type: 'failed'; readonly id: number; readonly error: SerialisedError };

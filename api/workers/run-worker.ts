@@ -1,0 +1,78 @@
+import { parentPort } from 'node:worker_threads';
+import { TECTONIC_SETTINGS, type Study } from '../engine/model.ts';
+import { modelCatalog } from '../engine/motion/registry.ts';
+import type { Provenance, StudyResult } from '../engine/results.ts';
+import { discretiseStudy } from '../engine/ruptures/discretise.ts';
+import { runScenario } from '../engine/scenario/index.ts';
+import { screenStudy } from '../engine/screen-study.ts';
+import type { TaskMessage, TaskOutputs, WorkerReply, WorkerTask } from './messages.ts';
+import { serialiseError } from './task-errors.ts';
+
+/**
+ * The worker thread of the pool (worker-pool.ts): runs one task at a time, synchronously, and
+ * answers with messages. The engine polls `shouldStop`, which reads the task's shared stop
+ * flag: a message could not arrive while the engine holds this thread.
+ */
+
+if (!parentPort) throw new Error('run-worker.ts runs as a worker thread of worker-pool.ts; expected a parent port');
+const port = parentPort;
+
+/** Progress is posted when it has moved by this share (1%) since the last post, and at the end. */
+const PROGRESS_STEP = 0.01;
+
+const reply = (message: WorkerReply): void => port.postMessage(message);
+
+/** The branches of the settings the study's sources use: the models that produced its numbers. */
+function modelsUsed(study: Study): Provenance['models'] {
+  const used = TECTONIC_SETTINGS.filter((setting) => study.sources.some((s) => s.setting === setting));
+  return Object.fromEntries(used.map((setting) => [setting, study.groundMotion[setting].map((b) => ({ model: b.model, weight: b.weight }))]));
+}
+
+function screen(task: Extract<WorkerTask, { kind: 'screen' }>, id: number, stop: Int32Array): TaskOutputs['screen'] {
+  let posted = 0;
+  const startedAt = new Date().toISOString();
+  const output = screenStudy(task.study, {
+    models: modelCatalog,
+    shouldStop: () => Atomics.load(stop, 0) === 1,
+    onProgress: (shareDone) => {
+      if (shareDone - posted >= PROGRESS_STEP || (shareDone >= 1 && posted < 1)) {
+        posted = shareDone;
+        reply({ type: 'progress', id, shareDone });
+      }
+    },
+  });
+  const provenance: Provenance = {
+    tool: 'tremora',
+    toolVersion: task.toolVersion,
+    inputHash: task.inputHash,
+    models: modelsUsed(task.study),
+    settings: task.study.settings,
+    startedAt,
+    finishedAt: new Date().toISOString(),
+  };
+  const result: StudyResult = { ...output, provenance };
+  return { resultsJson: JSON.stringify(result), provenance };
+}
+
+function perform(message: TaskMessage): TaskOutputs[WorkerTask['kind']] {
+  const { id, task, stop } = message;
+  switch (task.kind) {
+    case 'screen':
+      return screen(task, id, stop);
+    case 'measure':
+      return { ruptures: discretiseStudy(task.study).ruptures.length };
+    case 'scenario':
+      return { resultJson: JSON.stringify(runScenario(task.study, modelCatalog, task.request)) };
+  }
+}
+
+port.on('message', (message: TaskMessage) => {
+  reply({ type: 'started', id: message.id, at: new Date().toISOString() });
+  try {
+    reply({ type: 'done', id: message.id, output: perform(message) });
+  } catch (error) {
+    reply({ type: 'failed', id: message.id, error: serialiseError(error) });
+  }
+});
+
+reply({ type: 'ready' });

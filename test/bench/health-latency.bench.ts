@@ -1,0 +1,62 @@
+import { createRequire } from 'node:module';
+import { startService, tempDir, type ServiceProcess } from '../service/helpers/service-process.ts';
+
+/**
+ * Latency of GET /api/health on a started service, idle and while the demo study computes in
+ * the worker pool. Prints figures; asserts nothing about time (the tests assert only that
+ * health answers while a run computes: test/service/health-while-computing.test.ts).
+ */
+
+interface AutocannonResult {
+  readonly latency: { readonly p50: number; readonly p97_5: number; readonly p99: number; readonly max: number; readonly average: number };
+  readonly requests: { readonly average: number; readonly total: number };
+  readonly non2xx: number;
+  readonly errors: number;
+}
+type Autocannon = (options: { url: string; connections: number; duration: number }) => Promise<AutocannonResult>;
+// autocannon ships no type declarations; this is the part of its API used here.
+const autocannon = createRequire(import.meta.url)('autocannon') as Autocannon;
+
+const DURATION_S = Number(process.env.BENCH_DURATION_S ?? 5);
+const CONNECTIONS = 10;
+
+function report(label: string, r: AutocannonResult): void {
+  console.log(
+    `${label.padEnd(24)} p50 ${r.latency.p50} ms  p97.5 ${r.latency.p97_5} ms  p99 ${r.latency.p99} ms  max ${r.latency.max} ms  ` +
+      `${Math.round(r.requests.average)} req/s  (${r.requests.total} requests, ${r.non2xx} non-2xx, ${r.errors} errors)`,
+  );
+}
+
+async function demoId(service: ServiceProcess): Promise<string> {
+  const { studies } = (await (await service.fetch('/api/studies')).json()) as { studies: { id: string; name: string }[] };
+  const demo = studies.find((s) => s.name === 'Demo coast');
+  if (!demo) throw new Error('the demo study was not saved on first start');
+  return demo.id;
+}
+
+async function waitUntilRunning(service: ServiceProcess, runId: string): Promise<void> {
+  for (;;) {
+    const run = (await (await service.fetch(`/api/runs/${runId}`)).json()) as { status: string };
+    if (run.status === 'running') return;
+    if (run.status !== 'queued') throw new Error(`the demo run ended early: ${run.status}`);
+    await new Promise((r) => setTimeout(r, 100));
+  }
+}
+
+const dir = tempDir('tremora-bench-');
+const service = await startService({ databasePath: `${dir.path}/bench.db` });
+try {
+  const url = `${service.url}/api/health`;
+  console.log(`health latency, ${CONNECTIONS} connections, ${DURATION_S} s each`);
+  // Warm-up, not reported: the JIT and the worker threads' start-up would colour the idle figures.
+  await autocannon({ url, connections: CONNECTIONS, duration: 1 });
+  report('idle', await autocannon({ url, connections: CONNECTIONS, duration: DURATION_S }));
+  const started = await service.fetch(`/api/studies/${await demoId(service)}/runs`, { method: 'POST' });
+  const run = (await started.json()) as { id: string };
+  await waitUntilRunning(service, run.id);
+  report('demo run computing', await autocannon({ url, connections: CONNECTIONS, duration: DURATION_S }));
+  await service.fetch(`/api/runs/${run.id}/cancel`, { method: 'POST' });
+} finally {
+  await service.stop();
+  dir.remove();
+}

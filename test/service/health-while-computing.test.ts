@@ -1,0 +1,42 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { demoStudyId, getRun, startRun, waitForStatus } from './helpers/runs.ts';
+import { type ServiceProcess, startService, tempDir, waitFor } from './helpers/service-process.ts';
+
+/** Health is answered while a heavy run (the demo) computes; its latency is in the benchmark. */
+const dir = tempDir();
+let service: ServiceProcess;
+
+beforeAll(async () => {
+  service = await startService({ databasePath: `${dir.path}/busy.db` });
+});
+afterAll(async () => {
+  await service?.stop();
+  dir.remove();
+});
+
+describe('while the demo study computes', () => {
+  it('health answers, the run reports progress, and it can be cancelled', async () => {
+    const run = await startRun(service, await demoStudyId(service));
+    await waitForStatus(service, run.id, ['running']);
+    for (let i = 0; i < 5; i++) {
+      const response = await service.fetch('/api/health');
+      expect(response.status).toBe(200);
+      const body = (await response.json()) as { status: string; workers: { runs: { busy: number } }; activeRuns: number };
+      expect(body).toMatchObject({ status: 'ok', workers: { runs: { busy: 1 } }, activeRuns: 1 });
+    }
+    expect((await service.fetch('/api/studies')).status).toBe(200);
+    // The demo reports progress after each community's branch: a few seconds in.
+    const moving = await waitFor(() => getRun(service, run.id), (r) => r.progress > 0);
+    expect(moving.status).toBe('running');
+    expect(moving.progress).toBeGreaterThan(0);
+    expect(moving.progress).toBeLessThan(1);
+    const cancel = await service.fetch(`/api/runs/${run.id}/cancel`, { method: 'POST' });
+    expect(cancel.status).toBe(202);
+    const stopped = await waitForStatus(service, run.id);
+    expect(stopped.status).toBe('cancelled');
+    expect(stopped.error).toMatch(/^cancelled on request after \d+% of the work$/);
+    expect((await getRun(service, run.id)).provenance).toBeNull();
+    const after = (await (await service.fetch('/api/health')).json()) as { workers: { runs: { alive: number; busy: number } } };
+    expect(after.workers.runs).toMatchObject({ alive: 1, busy: 0 });
+  });
+});

@@ -1,0 +1,103 @@
+import { type ChildProcess, spawn } from 'node:child_process';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+/** The repository root, where `node --import tsx api/server.ts` runs. */
+export const REPO_ROOT = fileURLToPath(new URL('../../../', import.meta.url));
+
+const ADDRESS = /listening on (http:\/\/\S+)/;
+
+/** A started service: a real process on a random loopback port with its own database. */
+export interface ServiceProcess {
+  /** Base URL, e.g. http://127.0.0.1:40213 (a 0.0.0.0 listener is reached over loopback). */
+  readonly url: string;
+  readonly child: ChildProcess;
+  /** Everything written to stdout and stderr so far. */
+  output(): string;
+  fetch(path: string, init?: RequestInit): Promise<Response>;
+  /** SIGTERM and wait for the exit code. */
+  stop(): Promise<number | null>;
+  /** SIGKILL (no chance to clean up) and wait for the exit. */
+  kill(): Promise<void>;
+}
+
+export interface StartOptions {
+  readonly databasePath: string;
+  readonly env?: Readonly<Record<string, string>>;
+}
+
+/** Spawns the service with PORT=0 and resolves once it prints its address. */
+export function startService(options: StartOptions): Promise<ServiceProcess> {
+  const child = spawn(process.execPath, ['--import', 'tsx', 'api/server.ts'], {
+    cwd: REPO_ROOT,
+    env: { ...process.env, PORT: '0', HOST: '127.0.0.1', TREMORA_DB: options.databasePath, TREMORA_TOKEN: '', ...options.env },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  let output = '';
+  const exited = new Promise<number | null>((resolve) => child.once('exit', (code) => resolve(code)));
+  return new Promise((resolve, reject) => {
+    const onData = (chunk: Buffer) => {
+      output += chunk.toString('utf8');
+      const match = ADDRESS.exec(output);
+      if (match) {
+        child.stdout?.off('data', onData);
+        child.stdout?.on('data', (more: Buffer) => (output += more.toString('utf8')));
+        const url = (match[1] as string).replace('//0.0.0.0:', '//127.0.0.1:');
+        resolve({
+          url,
+          child,
+          output: () => output,
+          fetch: (path, init) => fetch(`${url}${path}`, init),
+          stop: async () => {
+            child.kill('SIGTERM');
+            return exited;
+          },
+          kill: async () => {
+            child.kill('SIGKILL');
+            await exited;
+          },
+        });
+      }
+    };
+    child.stdout?.on('data', onData);
+    child.stderr?.on('data', (chunk: Buffer) => (output += chunk.toString('utf8')));
+    void exited.then((code) => reject(new Error(`the service exited with code ${code} before listening:\n${output}`)));
+  });
+}
+
+/** Runs the service expecting it to refuse to start; resolves with its exit code and output. */
+export function startExpectingRefusal(options: StartOptions): Promise<{ code: number | null; output: string }> {
+  const child = spawn(process.execPath, ['--import', 'tsx', 'api/server.ts'], {
+    cwd: REPO_ROOT,
+    env: { ...process.env, PORT: '0', TREMORA_DB: options.databasePath, TREMORA_TOKEN: '', ...options.env },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  let output = '';
+  child.stdout?.on('data', (c: Buffer) => (output += c.toString('utf8')));
+  child.stderr?.on('data', (c: Buffer) => (output += c.toString('utf8')));
+  return new Promise((resolve) => child.once('exit', (code) => resolve({ code, output })));
+}
+
+/** A fresh temporary directory and its removal. */
+export function tempDir(prefix = 'tremora-test-'): { path: string; remove(): void } {
+  const path = mkdtempSync(join(tmpdir(), prefix));
+  return { path, remove: () => rmSync(path, { recursive: true, force: true }) };
+}
+
+/** Polls `read` until `done` holds (or gives up after `attempts`); no timing is asserted. */
+export async function waitFor<T>(read: () => Promise<T>, done: (value: T) => boolean, attempts = 600, pauseMs = 100): Promise<T> {
+  let value = await read();
+  for (let i = 0; i < attempts && !done(value); i++) {
+    await new Promise((r) => setTimeout(r, pauseMs));
+    value = await read();
+  }
+  return value;
+}
+
+export const jsonInit = (method: string, body: unknown, headers: Record<string, string> = {}): RequestInit => ({
+  method,
+  headers: { 'Content-Type': 'application/json', ...headers },
+  body: typeof body === 'string' ? body : JSON.stringify(body),
+});

@@ -1,0 +1,44 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { expectError } from './helpers/assertions.ts';
+import { jsonInit, type ServiceProcess, startService, tempDir } from './helpers/service-process.ts';
+import { smallStudy } from './helpers/small-study.ts';
+
+/**
+ * The work budget (api/service/work-budget.ts) against a started service whose budget is set
+ * below the small study's work (1 community x 1 rupture x 3 levels = 3).
+ */
+const dir = tempDir();
+let service: ServiceProcess;
+
+beforeAll(async () => {
+  service = await startService({ databasePath: `${dir.path}/budget.db`, env: { TREMORA_WORK_BUDGET: '2' } });
+});
+afterAll(async () => {
+  await service?.stop();
+  dir.remove();
+});
+
+const EXPECTED_ERROR = 'study is too large: 1 communities x 1 ruptures x 3 levels (over 1 measures) = 3, over the budget of 2';
+
+describe('a study over the work budget', () => {
+  it('is refused by validate and compute with 422 naming the size and the budget', async () => {
+    for (const path of ['/api/validate', '/api/compute']) {
+      const body = await expectError(await service.fetch(path, jsonInit('POST', smallStudy())), 422);
+      expect(body.error).toBe(EXPECTED_ERROR);
+      expect(body.size).toBe(3);
+      expect(body.budget).toBe(2);
+      expect(body.issues).toHaveLength(1);
+      expect(body.issues[0]?.path).toBe('(study)');
+    }
+  });
+
+  it('can be saved, but a run of it is refused with 422 and no run is recorded', async () => {
+    const created = await service.fetch('/api/studies', jsonInit('POST', smallStudy()));
+    expect(created.status).toBe(201);
+    const { id } = (await created.json()) as { id: string };
+    const body = await expectError(await service.fetch(`/api/studies/${id}/runs`, { method: 'POST' }), 422);
+    expect(body.error).toBe(EXPECTED_ERROR);
+    const { runs } = (await (await service.fetch(`/api/studies/${id}/runs`)).json()) as { runs: unknown[] };
+    expect(runs).toEqual([]);
+  });
+});
