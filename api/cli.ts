@@ -4,6 +4,7 @@ import { checkVerb, CHECK_USAGE } from './cli/check.ts';
 import { StudyRejected } from './cli/load.ts';
 import { motionVerb, MOTION_USAGE } from './cli/motion.ts';
 import { scenarioVerb, SCENARIO_USAGE } from './cli/scenario.ts';
+import { screenVerb, SCREEN_USAGE } from './cli/screen.ts';
 import { EXIT_BAD_INPUT, EXIT_FAILURE, EXIT_OK, formatIssues, type Io, processIo, UsageError } from './cli/output.ts';
 import { InvalidInput, TremoraError } from './engine/errors.ts';
 
@@ -13,6 +14,7 @@ interface Verb {
 }
 
 const VERBS: Readonly<Record<string, Verb>> = {
+  screen: { usage: SCREEN_USAGE, run: screenVerb },
   check: { usage: CHECK_USAGE, run: checkVerb },
   scenario: { usage: SCENARIO_USAGE, run: scenarioVerb },
   motion: { usage: MOTION_USAGE, run: motionVerb },

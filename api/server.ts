@@ -4,7 +4,7 @@ import { modelCatalog } from './engine/motion/registry.ts';
 import { createApp } from './service/app.ts';
 import { ConfigError, readConfig, type ServiceConfig } from './service/config.ts';
 import { seedDemoStudy } from './service/demo-seed.ts';
-import { TOOL_VERSION } from './service/tool-version.ts';
+import { TOOL_VERSION } from './results/tool-version.ts';
 import { openStore, type Store } from './store/store.ts';
 import { RunScheduler } from './workers/run-scheduler.ts';
 import { WorkerPool } from './workers/worker-pool.ts';

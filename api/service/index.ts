@@ -3,8 +3,8 @@ export { ConfigError, DEFAULT_HOST, DEFAULT_PORT, isLoopbackHost, readConfig, ty
 export { seedDemoStudy, DEMO_STUDY_URL, type DemoSeed } from './demo-seed.ts';
 export { errorHandler, logToStderr, notFoundHandler, type LogError } from './error-handler.ts';
 export { errorBody, HttpError, type ErrorBody } from './http-error.ts';
-export { canonicalJson, inputHash, sha256Hex } from './input-hash.ts';
+export { canonicalJson, inputHash, sha256Hex } from '../results/input-hash.ts';
 export { CONTENT_SECURITY_POLICY, securityHeaders } from './security-headers.ts';
 export type { ServiceContext } from './service-context.ts';
-export { TOOL_VERSION } from './tool-version.ts';
+export { TOOL_VERSION } from '../results/tool-version.ts';
 export { checkWorkBudget, DEFAULT_WORK_BUDGET, studyWork, type StudyWork } from './work-budget.ts';

@@ -1,7 +1,7 @@
 import { parentPort } from 'node:worker_threads';
-import { TECTONIC_SETTINGS, type Study } from '../engine/model.ts';
 import { modelCatalog } from '../engine/motion/registry.ts';
-import type { Provenance, StudyResult } from '../engine/results.ts';
+import type { StudyResult } from '../engine/results.ts';
+import { buildProvenance } from '../results/provenance.ts';
 import { discretiseStudy } from '../engine/ruptures/discretise.ts';
 import { runScenario } from '../engine/scenario/index.ts';
 import { screenStudy } from '../engine/screen-study.ts';
@@ -22,12 +22,6 @@ const PROGRESS_STEP = 0.01;
 
 const reply = (message: WorkerReply): void => port.postMessage(message);
 
-/** The branches of the settings the study's sources use: the models that produced its numbers. */
-function modelsUsed(study: Study): Provenance['models'] {
-  const used = TECTONIC_SETTINGS.filter((setting) => study.sources.some((s) => s.setting === setting));
-  return Object.fromEntries(used.map((setting) => [setting, study.groundMotion[setting].map((b) => ({ model: b.model, weight: b.weight }))]));
-}
-
 function screen(task: Extract<WorkerTask, { kind: 'screen' }>, id: number, stop: Int32Array): TaskOutputs['screen'] {
   let posted = 0;
   const startedAt = new Date().toISOString();
@@ -41,15 +35,7 @@ function screen(task: Extract<WorkerTask, { kind: 'screen' }>, id: number, stop:
       }
     },
   });
-  const provenance: Provenance = {
-    tool: 'tremora',
-    toolVersion: task.toolVersion,
-    inputHash: task.inputHash,
-    models: modelsUsed(task.study),
-    settings: task.study.settings,
-    startedAt,
-    finishedAt: new Date().toISOString(),
-  };
+  const provenance = buildProvenance({ study: task.study, toolVersion: task.toolVersion, inputHash: task.inputHash, startedAt, finishedAt: new Date().toISOString() });
   const result: StudyResult = { ...output, provenance };
   return { resultsJson: JSON.stringify(result), provenance };
 }

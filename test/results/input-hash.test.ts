@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { modelCatalog } from '../../api/engine/motion/registry.ts';
-import { canonicalJson, inputHash, sha256Hex } from '../../api/service/input-hash.ts';
+import { canonicalJson, inputHash, sha256Hex } from '../../api/results/input-hash.ts';
 import { loadStudy } from '../../api/study/load-study.ts';
-import { smallStudy } from './helpers/small-study.ts';
+import { smallStudy } from '../service/helpers/small-study.ts';
 
 const load = (raw: unknown) => {
   const result = loadStudy(raw, { models: modelCatalog });

@@ -1,7 +1,7 @@
 import { Hono } from 'hono';
 import { readJsonObject } from '../request-body.ts';
 import type { ServiceContext } from '../service-context.ts';
-import { inputHash } from '../input-hash.ts';
+import { inputHash } from '../../results/input-hash.ts';
 import { validateStudy } from '../study-input.ts';
 import { measureStudy } from '../study-size.ts';
 

@@ -1,0 +1,76 @@
+import { writeFile } from 'node:fs/promises';
+import { parseArgs } from 'node:util';
+import { modelCatalog } from '../engine/motion/registry.ts';
+import type { StudyResult } from '../engine/results.ts';
+import { screenStudy } from '../engine/screen-study.ts';
+import { inputHash } from '../results/input-hash.ts';
+import { buildProvenance } from '../results/provenance.ts';
+import { runCsv } from '../results/run-csv.ts';
+import { TOOL_VERSION } from '../results/tool-version.ts';
+import { choiceOption, sig } from './args.ts';
+import { loadStudyForVerb } from './load.ts';
+import { EXIT_OK, type Io, UsageError } from './output.ts';
+
+export const SCREEN_USAGE = `tremora screen STUDY [--out FILE] [--format json|csv] [--json]
+
+Screens every community of a study: hazard curves, levels at the return periods, chances over
+the horizons, intensity, deaggregation, nearest faults and the screening band.
+  --out FILE          write the results there (JSON by default; --format csv for a table)
+  --format FMT        json (every result, DESIGN.md's keys) or csv (one row per community)
+  --json              print only the JSON results on stdout
+Screening estimates only, not design values: building codes and licensed engineers decide.`;
+
+export async function screenVerb(args: readonly string[], io: Io): Promise<number> {
+  const { values, positionals } = parseArgs({
+    args: [...args],
+    options: { out: { type: 'string' }, format: { type: 'string' }, json: { type: 'boolean' } },
+    allowPositionals: true,
+    strict: true,
+  });
+  if (positionals.length !== 1) throw new UsageError('expected exactly one STUDY file');
+  const format = choiceOption(values, 'format', ['json', 'csv'] as const) ?? 'json';
+  if (values.json && format === 'csv') throw new UsageError('--json prints JSON; use --format csv with --out');
+  const study = await loadStudyForVerb(positionals[0], io, values.json);
+
+  const startedAt = new Date().toISOString();
+  let shown = -1;
+  const output = screenStudy(study, {
+    models: modelCatalog,
+    onProgress: (share) => {
+      const percent = Math.floor(share * 100);
+      if (!values.json && percent >= shown + 10) {
+        shown = percent;
+        io.err(`screening: ${percent}%`);
+      }
+    },
+  });
+  const result: StudyResult = {
+    ...output,
+    provenance: buildProvenance({ study, toolVersion: TOOL_VERSION, inputHash: inputHash(study), startedAt, finishedAt: new Date().toISOString() }),
+  };
+  const text = format === 'csv' ? runCsv(study, result) : `${JSON.stringify(result, null, 2)}\n`;
+  if (values.json) {
+    io.out(text);
+    return EXIT_OK;
+  }
+  if (values.out) {
+    await writeFile(values.out, text);
+    io.err(`wrote ${values.out} (${format})`);
+  }
+
+  const chance = (p: number | undefined) => (p === undefined ? '' : `${sig(p * 100, 2)}%`);
+  io.out(`${result.studyName}: ${result.communities.length} communities screened`);
+  io.out(`\n${'community'.padEnd(22)}${'band'.padEnd(20)}${'PGA 475 yr'.padStart(12)}${'MMI 475'.padStart(9)}${'MMI VII+ 50 yr'.padStart(16)}  nearest fault`);
+  for (const c of result.communities) {
+    const pga = c.atReturnPeriod['475']?.PGA;
+    const mmi = c.intensity.atReturnPeriod['475'];
+    const fault = c.nearestFaults[0];
+    io.out(
+      `${c.name.padEnd(22)}${c.band.label.padEnd(20)}${(pga == null ? 'n/a' : `${sig(pga, 2)} g`).padStart(12)}${(mmi?.roman ?? 'n/a').padStart(9)}` +
+        `${chance(c.intensity.chanceOfReaching['50']?.VII).padStart(16)}  ${fault ? `${fault.name} ${sig(fault.distanceKm, 2)} km` : ''}`,
+    );
+  }
+  for (const w of result.warnings) io.err(`note: ${w}`);
+  io.out('\nScreening estimates only, not design values: building codes and licensed engineers decide.');
+  return EXIT_OK;
+}

@@ -1,0 +1,132 @@
+import { copyFile, mkdtemp, readFile, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { runCli } from '../../api/cli.ts';
+import type { Io } from '../../api/cli/output.ts';
+import { normalSurvival } from '../../api/engine/hazard/normal-cdf.ts';
+import { expectRelative } from '../helpers/close.ts';
+
+const TINY = new URL('fixtures/tiny.study.json', import.meta.url).pathname;
+const DEMO = new URL('../../data-demo/demo.study.json', import.meta.url).pathname;
+
+async function run(...argv: string[]): Promise<{ code: number; out: string; err: string }> {
+  let out = '';
+  let err = '';
+  const io: Io = { out: (t) => (out += `${t}\n`), err: (t) => (err += `${t}\n`) };
+  const code = await runCli(argv, io);
+  return { code, out, err };
+}
+
+/** Cornell et al. (1979) as Baker (2008) states it: mean ln PGA = −0.152 + 0.859 M − 1.803 ln(R + 25), σ = 0.57. */
+const cornellLnPga = (m: number, rKm: number) => -0.152 + 0.859 * m - 1.803 * Math.log(rKm + 25);
+
+describe('tremora check', () => {
+  it('says a valid study is valid and exits 0', async () => {
+    const { code, out } = await run('check', DEMO);
+    expect(code).toBe(0);
+    expect(out).toMatch(/valid — "Demo coast", 11 communities, 6 sources/);
+  });
+
+  it('prints every problem of a broken copy with its path and exits 2', async () => {
+    const dir = await mkdtemp(join(tmpdir(), 'tremora-cli-'));
+    const study = JSON.parse(await readFile(DEMO, 'utf8'));
+    study.sources.features[2].properties.dip = 120;
+    study.communities[0].lat = 'south';
+    study.groundMotion.crustal[1].weight = 0.4;
+    const broken = join(dir, 'broken.study.json');
+    await writeFile(broken, JSON.stringify(study));
+    const { code, err } = await run('check', broken);
+    expect(code).toBe(2);
+    expect(err).toContain('3 problems');
+    expect(err).toContain('sources.features[2].properties.dip: expected a number in (0, 90] degrees, got 120');
+    expect(err).toContain('communities[0].lat: expected a number in [-90, 90] degrees, got "south"');
+    expect(err).toContain('groundMotion.crustal: expected weights summing to 1');
+    const json = await run('check', broken, '--json');
+    expect(json.code).toBe(2);
+    expect(JSON.parse(json.out).issues).toHaveLength(3);
+  });
+
+  it('reads a communities CSV named by the study, relative to it', async () => {
+    const dir = await mkdtemp(join(tmpdir(), 'tremora-cli-'));
+    const study = JSON.parse(await readFile(DEMO, 'utf8'));
+    study.communities = 'villages.csv';
+    await writeFile(join(dir, 'demo.study.json'), JSON.stringify(study));
+    await copyFile(new URL('../../data-demo/villages.csv', import.meta.url), join(dir, 'villages.csv'));
+    const { code, out } = await run('check', join(dir, 'demo.study.json'));
+    expect(code).toBe(0);
+    expect(out).toContain('11 communities');
+  });
+
+  it('exits 2 with usage on a missing file, an unknown verb or option', async () => {
+    expect((await run('check', '/nonexistent/x.study.json')).code).toBe(2);
+    const unknown = await run('frobnicate');
+    expect(unknown.code).toBe(2);
+    expect(unknown.err).toContain('unknown verb "frobnicate"');
+    expect((await run('check', DEMO, '--bogus')).code).toBe(2);
+    expect((await run('--help')).code).toBe(0);
+  });
+});
+
+describe('tremora motion --json', () => {
+  it('prints the median in g and the sigmas in natural-log units', async () => {
+    const { code, out } = await run('motion', '--model', 'Cornell79', '--magnitude', '6.5', '--rjb', '20', '--json');
+    expect(code).toBe(0);
+    const result = JSON.parse(out);
+    // Default hypocentral depth 10 km: R = sqrt(20² + 10²).
+    expectRelative(result.measures.PGA.median, Math.exp(cornellLnPga(6.5, Math.hypot(20, 10))), 1e-12, 'Cornell et al. (1979) via Baker (2008)');
+    expect(result.measures.PGA).toMatchObject({ unit: 'g', sigma: 0.57, tau: 0, phi: 0.57 });
+  });
+
+  it('exits 2 naming a bad number and an unknown model', async () => {
+    const bad = await run('motion', '--model', 'Cornell79', '--magnitude', 'big', '--rjb', '20');
+    expect(bad.code).toBe(2);
+    expect(bad.err).toContain('--magnitude: expected a number, got "big"');
+    const unknown = await run('motion', '--model', 'NOPE', '--magnitude', '6', '--rjb', '20');
+    expect(unknown.code).toBe(2);
+    expect(unknown.err).toContain('unknown ground-motion model "NOPE"');
+  });
+});
+
+describe('tremora screen', () => {
+  it('gives the result keys of the study format, with the hazard of a point source below the village', async () => {
+    const { code, out } = await run('screen', TINY, '--json');
+    expect(code).toBe(0);
+    const result = JSON.parse(out);
+    const [c] = result.communities;
+    expect(Object.keys(c)).toEqual(expect.arrayContaining(['curves', 'atReturnPeriod', 'chanceOfExceeding', 'intensity', 'deaggregation', 'nearestFaults', 'band']));
+    expect(result.provenance).toMatchObject({ tool: 'tremora', models: { crustal: [{ model: 'Cornell79', weight: 1 }] } });
+    expect(result.provenance.inputHash).toMatch(/^[0-9a-f]{64}$/);
+    // One M 6.5 event a century, 10 km straight below: rate(PGA > x) = 0.01 P(ε > e) with the
+    // lognormal truncated at ±3σ (Baker 2008 eq. for the hazard integral).
+    const lnMedian = cornellLnPga(6.5, 10);
+    const q3 = normalSurvival(3);
+    c.curves.PGA.levels.forEach((level: number, i: number) => {
+      const e = (Math.log(level) - lnMedian) / 0.57;
+      const expected = e >= 3 ? 0 : e <= -3 ? 0.01 : (0.01 * (normalSurvival(e) - q3)) / (1 - 2 * q3);
+      expectRelative(c.curves.PGA.annualRate[i], expected, 1e-9, `annual rate at ${level} g`);
+    });
+  });
+
+  it('writes CSV with --format csv --out', async () => {
+    const dir = await mkdtemp(join(tmpdir(), 'tremora-cli-'));
+    const file = join(dir, 'out.csv');
+    const { code } = await run('screen', TINY, '--format', 'csv', '--out', file);
+    expect(code).toBe(0);
+    const [header, row] = (await readFile(file, 'utf8')).split('\r\n');
+    expect(header?.split(',').slice(0, 3)).toEqual(['communityId', 'name', 'lon']);
+    expect(row?.startsWith('east-cove,East Cove,')).toBe(true);
+  });
+});
+
+describe('tremora scenario', () => {
+  it('prints medians at every community and exits 2 on an unknown source', async () => {
+    const { code, out } = await run('scenario', TINY, '--source', 'below', '--magnitude', '6.5', '--json');
+    expect(code).toBe(0);
+    const result = JSON.parse(out);
+    expectRelative(result.communities[0].motions.PGA.median, Math.exp(cornellLnPga(6.5, 10)), 1e-6, 'Cornell et al. (1979) at R = 10 km');
+    const bad = await run('scenario', TINY, '--source', 'nope', '--magnitude', '6.5');
+    expect(bad.code).toBe(2);
+    expect(bad.err).toContain('sourceId: unknown source "nope"');
+  });
+});
