@@ -53,20 +53,33 @@ export function floatingRuptures(surface: FaultSurface, dimensions: RuptureDimen
   if (!(spacingKm > 0)) throw new InvalidInput([{ path: 'settings.ruptureSpacingKm', message: `expected a spacing > 0 km, got ${spacingKm}` }]);
   const lengthKm = Math.min(dimensions.lengthKm, surface.lengthKm);
   const widthKm = Math.min(dimensions.widthKm, surface.widthKm);
-  const sinDip = Math.sin(toRadians(surface.dipDeg));
   const ruptures: FloatingRupture[] = [];
   for (const downDipKm of positionOffsetsKm(surface.widthKm, widthKm, spacingKm)) {
     for (const alongKm of positionOffsetsKm(surface.lengthKm, lengthKm, spacingKm)) {
-      ruptures.push({
-        planes: surfacePatch(surface, [alongKm, alongKm + lengthKm], [downDipKm, downDipKm + widthKm]),
-        hypocentre: pointOnSurface(surface, alongKm + lengthKm / 2, downDipKm + widthKm / 2),
-        ztorKm: surface.upperDepthKm + downDipKm * sinDip,
-        lengthKm,
-        widthKm,
-        alongKm,
-        downDipKm,
-      });
+      ruptures.push(floatingRuptureAt(surface, { lengthKm, widthKm }, alongKm, downDipKm));
     }
   }
   return ruptures;
+}
+
+/**
+ * The rupture of `size` (already fitted to the fault) starting `alongKm` along the top trace
+ * and `downDipKm` down dip from it, km.
+ */
+export function floatingRuptureAt(
+  surface: FaultSurface,
+  size: { readonly lengthKm: number; readonly widthKm: number },
+  alongKm: number,
+  downDipKm: number,
+): FloatingRupture {
+  const { lengthKm, widthKm } = size;
+  return {
+    planes: surfacePatch(surface, [alongKm, alongKm + lengthKm], [downDipKm, downDipKm + widthKm]),
+    hypocentre: pointOnSurface(surface, alongKm + lengthKm / 2, downDipKm + widthKm / 2),
+    ztorKm: surface.upperDepthKm + downDipKm * Math.sin(toRadians(surface.dipDeg)),
+    lengthKm,
+    widthKm,
+    alongKm,
+    downDipKm,
+  };
 }

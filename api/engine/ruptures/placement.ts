@@ -1,5 +1,5 @@
 import { faultSurface, type FaultSurface } from '../geometry/fault-surface.ts';
-import { floatingRuptures } from '../geometry/floating-ruptures.ts';
+import { floatingRuptures, type FloatingRupture } from '../geometry/floating-ruptures.ts';
 import type { LocalFrame, PointXY } from '../geometry/projection.ts';
 import { fitDimensions, scaledDimensions, scalingRelationFor } from '../geometry/rupture-scaling.ts';
 import { zoneCells, type ZoneCell } from '../geometry/zone-cells.ts';
@@ -37,21 +37,7 @@ export function placeRuptures(prepared: PreparedSource, magnitude: number): Plac
     const { surface } = prepared;
     const scaled = scaledDimensions(scalingRelationFor(source.setting, source.mechanism), magnitude);
     const positions = floatingRuptures(surface, fitDimensions(scaled, surface.lengthKm, surface.widthKm), { spacingKm: prepared.spacingKm });
-    return positions.map((p) => ({
-      ...common,
-      share: 1 / positions.length,
-      context: {
-        magnitude,
-        rakeDeg: source.rakeDeg,
-        mechanism: source.mechanism,
-        setting: source.setting,
-        dipDeg: surface.dipDeg,
-        ztorKm: p.ztorKm,
-        widthKm: p.widthKm,
-        hypoDepthKm: p.hypocentre.z,
-      },
-      surface: { kind: 'planes', planes: p.planes, hypocentre: p.hypocentre },
-    }));
+    return positions.map((p) => ({ ...faultRupture(prepared, magnitude, p), share: 1 / positions.length }));
   }
   const context = pointRuptureContext(prepared.source, magnitude);
   const depthKm = prepared.source.depthKm;
@@ -65,4 +51,24 @@ export function placeRuptures(prepared: PreparedSource, magnitude: number): Plac
   }
   const { x, y } = prepared.location;
   return [{ ...common, share: 1, context, surface: { kind: 'point', hypocentre: { x, y, z: depthKm } } }];
+}
+
+/** A rupture (without rate) of a prepared fault at one floating position. */
+export function faultRupture(prepared: PreparedSource & { kind: 'fault' }, magnitude: number, p: FloatingRupture): Omit<Rupture, 'annualRate'> {
+  const { source, sourceIndex, surface } = prepared;
+  return {
+    sourceIndex,
+    sourceId: source.id,
+    context: {
+      magnitude,
+      rakeDeg: source.rakeDeg,
+      mechanism: source.mechanism,
+      setting: source.setting,
+      dipDeg: surface.dipDeg,
+      ztorKm: p.ztorKm,
+      widthKm: p.widthKm,
+      hypoDepthKm: p.hypocentre.z,
+    },
+    surface: { kind: 'planes', planes: p.planes, hypocentre: p.hypocentre },
+  };
 }

@@ -1,10 +1,10 @@
 import { InvalidInput } from '../errors.ts';
 import { ruptureDistances } from '../geometry/distances.ts';
-import { surfacePatch, pointOnSurface } from '../geometry/fault-surface.ts';
+import { floatingRuptureAt } from '../geometry/floating-ruptures.ts';
 import { fitDimensions, scaledDimensions, scalingRelationFor } from '../geometry/rupture-scaling.ts';
 import type { PointXY } from '../geometry/projection.ts';
 import type { PreparedSource } from '../ruptures/placement.ts';
-import { placeRuptures } from '../ruptures/placement.ts';
+import { faultRupture, placeRuptures } from '../ruptures/placement.ts';
 import type { Rupture } from '../ruptures/rupture.ts';
 
 /**
@@ -60,25 +60,7 @@ export function faultRuptureAt(prepared: PreparedSource & { kind: 'fault' }, mag
     issues.push({ path: 'position.downDipKm', message: `expected a number in [0, ${maxDown.toFixed(1)}] km for a rupture ${size.widthKm.toFixed(1)} km wide, got ${downDipKm}` });
   }
   if (issues.length > 0) throw new InvalidInput(issues);
-  const along: [number, number] = [alongStrikeKm, alongStrikeKm + size.lengthKm];
-  const down: [number, number] = [downDipKm, downDipKm + size.widthKm];
-  const hypocentre = pointOnSurface(surface, alongStrikeKm + size.lengthKm / 2, downDipKm + size.widthKm / 2);
-  const sinDip = Math.sin((surface.dipDeg * Math.PI) / 180);
-  return {
-    sourceIndex: prepared.sourceIndex,
-    sourceId: source.id,
-    context: {
-      magnitude,
-      rakeDeg: source.rakeDeg,
-      mechanism: source.mechanism,
-      setting: source.setting,
-      dipDeg: surface.dipDeg,
-      ztorKm: surface.upperDepthKm + downDipKm * sinDip,
-      widthKm: size.widthKm,
-      hypoDepthKm: hypocentre.z,
-    },
-    surface: { kind: 'planes', planes: surfacePatch(surface, along, down), hypocentre },
-  };
+  return faultRupture(prepared, magnitude, floatingRuptureAt(surface, size, alongStrikeKm, downDipKm));
 }
 
 /** A point rupture of a zone or point source with its epicentre at `epicentre`. */

@@ -71,6 +71,21 @@ describe('runScenario', () => {
     expect(one.communities[1]!.rrupKm).toBeGreaterThan(40);
   });
 
+  it('places an explicit fault position from the start of the trace and refuses one off the fault', () => {
+    const trace = [at(0, -40), at(0, 40)];
+    const fault: Source = {
+      ...common, id: 'f', name: 'F', kind: 'fault', trace, dipDeg: 90, dipDirectionDeg: 90, upperDepthKm: 0, lowerDepthKm: 12,
+      recurrence: { type: 'fixed', magnitude: 6, rate: 0.01 },
+    };
+    const s = study([fault], [community('south', 5, -35), community('north', 5, 35)]);
+    // M 6 strike-slip: Wells & Coppersmith (1994) area and width give a rupture about 13 km long
+    // (from memory), so one starting at the south end runs from y = -40 to about y = -27 km.
+    const result = runScenario(s, models, { sourceId: 'f', magnitude: 6, position: { alongStrikeKm: 0, downDipKm: 0 } });
+    expectClose(result.communities[0]!.rrupKm, 5, 0.05, 'south sits beside the rupture');
+    expect(result.communities[1]!.rrupKm).toBeGreaterThan(50);
+    expect(() => runScenario(s, models, { sourceId: 'f', magnitude: 6, position: { alongStrikeKm: 79, downDipKm: 0 } })).toThrow(/position.alongStrikeKm/);
+  });
+
   it('refuses an unknown source, a magnitude out of range and a bad explicit position, naming the field', () => {
     const [lon, lat] = at(0, 0);
     const point: Source = { ...common, id: 'p', name: 'P', kind: 'point', location: [lon, lat], depthKm: 10, recurrence: { type: 'fixed', magnitude: 6.5, rate: 0.01 } };
