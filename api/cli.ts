@@ -1,5 +1,6 @@
 import { resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { catalogVerb, CATALOG_USAGE } from './cli/catalog.ts';
 import { checkVerb, CHECK_USAGE } from './cli/check.ts';
 import { StudyRejected } from './cli/load.ts';
 import { motionVerb, MOTION_USAGE } from './cli/motion.ts';
@@ -18,6 +19,7 @@ const VERBS: Readonly<Record<string, Verb>> = {
   check: { usage: CHECK_USAGE, run: checkVerb },
   scenario: { usage: SCENARIO_USAGE, run: scenarioVerb },
   motion: { usage: MOTION_USAGE, run: motionVerb },
+  catalog: { usage: CATALOG_USAGE, run: catalogVerb },
 };
 
 const USAGE = `tremora — earthquake-hazard screening for small communities

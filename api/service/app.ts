@@ -4,6 +4,7 @@ import { methodNotAllowed } from 'hono/method-not-allowed';
 import { errorHandler, logToStderr, notFoundHandler, type LogError } from './error-handler.ts';
 import { errorBody } from './http-error.ts';
 import { requireToken } from './require-token.ts';
+import { catalogRoutes } from './routes/catalogs.ts';
 import { computeRoutes } from './routes/compute.ts';
 import { healthRoutes } from './routes/health.ts';
 import { importRoutes } from './routes/imports.ts';
@@ -53,7 +54,7 @@ export function createApp(ctx: ServiceContext, options: CreateAppOptions = {}): 
   );
 
   const api = new Hono();
-  for (const routes of [healthRoutes, studyRoutes, importRoutes, runRoutes, computeRoutes, scenarioRoutes, probeRoutes]) {
+  for (const routes of [healthRoutes, studyRoutes, importRoutes, runRoutes, computeRoutes, scenarioRoutes, probeRoutes, catalogRoutes]) {
     api.route('/', routes(ctx));
   }
   app.route('/api', api);

@@ -12,3 +12,4 @@ export {
   type RunStatus,
 } from './run-repository.ts';
 export { newId } from './new-id.ts';
+export { deleteStudyCatalog, getStudyCatalog, putStudyCatalog, type StudyCatalogRecord, type StudyCatalogWrite } from './catalog-repository.ts';

@@ -15,6 +15,8 @@ export const DEFAULT_DATABASE_PATH = '.tremora/tremora.db';
 const BUSY_TIMEOUT_MS = 5_000;
 
 export interface Store {
+  /** The connection, for repositories written as functions (catalog-repository.ts). */
+  readonly db: Database.Database;
   readonly studies: StudyRepository;
   readonly runs: RunRepository;
   readonly migration: MigrationOutcome;
@@ -45,6 +47,7 @@ export function openStore(path: string): Store {
     const runs = new RunRepository(db);
     const interruptedAtOpen = runs.interruptUnfinished();
     return {
+      db,
       studies: new StudyRepository(db),
       runs,
       migration,

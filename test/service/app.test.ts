@@ -128,6 +128,11 @@ describe('the routes', () => {
       'POST /api/scenario',
       'POST /api/studies/:id/scenario',
       'POST /api/probe',
+      'PUT /api/studies/:id/catalog',
+      'GET /api/studies/:id/catalog',
+      'DELETE /api/studies/:id/catalog',
+      'GET /api/studies/:id/felt',
+      'POST /api/catalog/fit',
     ]);
   });
 });

@@ -1,0 +1,207 @@
+import type { Context } from 'hono';
+import { z } from 'zod';
+import { CATALOG_FORMATS } from '../catalog/catalog-input.ts';
+import type { CatalogFitOptions } from '../catalog/catalog-fit.ts';
+import type { CatalogFormat } from '../catalog/catalog-load.ts';
+import { parseIsoTimeMs } from '../catalog/iso-time.ts';
+import { readZonePolygon } from '../catalog/zone-geojson.ts';
+import type { CompletenessPeriod } from '../engine/catalog/completeness-periods.ts';
+import { InvalidInput } from '../engine/errors.ts';
+import { HttpError } from './http-error.ts';
+import { mediaType, readJsonObject } from './request-body.ts';
+import { describeValue, listOf, numberIn, oneOf, text, yesNo } from '../study/fields.ts';
+import { IssueList } from '../study/issues.ts';
+
+/**
+ * The bodies of the catalog routes, read and validated: a catalog upload (PUT
+ * /api/studies/{id}/catalog) and a fit request (POST /api/catalog/fit). Every problem is an
+ * InvalidInput issue with the path of its field.
+ */
+
+/** Keys of a POST /api/catalog/fit body. */
+export const CATALOG_FIT_KEYS = ['text', 'format', 'polygon', 'mMax', 'decluster', 'magnitudes', 'magnitudeStep', 'completeness', 'startTime', 'endTime'] as const;
+const COMPLETENESS_KEYS = ['method', 'mc', 'correction', 'periods', 'eventsPerWindow'] as const;
+
+/** Magnitudes as the study format bounds them (api/study/recurrence-schema.ts). */
+const magnitude = numberIn({ min: 0, max: 10, unit: '(moment magnitude)' });
+
+/** The catalog itself, as a string in any of the three formats. */
+function catalogTextField() {
+  return z.unknown().transform((value, ctx): string => {
+    if (typeof value !== 'string') {
+      ctx.addIssue({ code: 'custom', message: `expected the catalog text (our CSV, FDSN event text or QuakeML) as a string, got ${describeValue(value)}` });
+      return z.NEVER;
+    }
+    return value;
+  });
+}
+
+const fitSchema = z.object({
+  text: catalogTextField(),
+  format: oneOf(CATALOG_FORMATS).optional(),
+  mMax: magnitude.optional(),
+  decluster: yesNo().optional(),
+  magnitudes: oneOf(['moment', 'all'] as const).optional(),
+  // The engine's bins take widths in (0, 1] (engine/catalog/magnitude-bins.ts).
+  magnitudeStep: numberIn({ min: 0, minOpen: true, max: 1 }).optional(),
+});
+
+const completenessSchema = z.object({
+  method: oneOf(['max-curvature', 'fixed'] as const).optional(),
+  mc: magnitude.optional(),
+  // A correction beyond one magnitude unit would discard most of any catalog.
+  correction: numberIn({ min: 0, max: 1 }).optional(),
+  // completenessOverTime's own floor: fewer than 10 events per window is no histogram.
+  eventsPerWindow: numberIn({ min: 10, max: 100_000, integer: true }).optional(),
+});
+
+const periodSchema = z.object({ magnitude, start: z.unknown() });
+
+/** A parsed fit request: the catalog text, its format if stated, and the fit's options. */
+export interface CatalogFitRequest {
+  readonly text: string;
+  readonly format?: CatalogFormat;
+  readonly options: CatalogFitOptions;
+}
+
+function readTime(raw: unknown, issues: IssueList, path: readonly PropertyKey[]): number | undefined {
+  if (raw === undefined) return undefined;
+  if (typeof raw !== 'string') {
+    issues.add(path, `expected an ISO 8601 time such as 2021-03-04T05:06:07Z, got ${describeValue(raw)}`);
+    return undefined;
+  }
+  const parsed = parseIsoTimeMs(raw);
+  if (!parsed.ok) issues.add(path, parsed.message);
+  return parsed.ok ? parsed.timeMs : undefined;
+}
+
+function unknownKeys(raw: Record<string, unknown>, known: readonly string[], issues: IssueList, path: readonly PropertyKey[]): void {
+  for (const key of Object.keys(raw)) if (!known.includes(key)) issues.add([...path, key], `unknown key; expected one of ${known.join(', ')}`);
+}
+
+function readPeriods(raw: unknown, issues: IssueList): readonly CompletenessPeriod[] | 'proposed' | undefined {
+  if (raw === undefined || raw === 'proposed') return raw;
+  const path = ['completeness', 'periods'];
+  if (!Array.isArray(raw)) {
+    issues.add(path, `expected a list of completeness periods ({ magnitude, start }) or "proposed", got ${describeValue(raw)}`);
+    return undefined;
+  }
+  const list = issues.parse(listOf(z.unknown(), 1, 50, 'completeness periods ({ magnitude, start }) or "proposed"'), raw, path);
+  if (!list) return undefined;
+  const periods: CompletenessPeriod[] = [];
+  list.forEach((item, i) => {
+    if (typeof item !== 'object' || item === null || Array.isArray(item)) {
+      issues.add([...path, i], `expected a completeness period { magnitude, start }, got ${describeValue(item)}`);
+      return;
+    }
+    const fields = issues.parse(periodSchema, item, [...path, i]);
+    if (!fields) return;
+    if (fields.start === undefined) issues.add([...path, i, 'start'], 'expected the ISO 8601 time from which the magnitude is complete, got nothing');
+    const startMs = readTime(fields.start, issues, [...path, i, 'start']);
+    if (startMs !== undefined) periods.push({ magnitude: fields.magnitude, startMs });
+  });
+  return periods.length === list.length ? periods : undefined;
+}
+
+/** Validates a POST /api/catalog/fit body; throws InvalidInput listing every problem with its path. */
+export function readCatalogFitRequest(raw: Record<string, unknown>): CatalogFitRequest {
+  const issues = new IssueList();
+  unknownKeys(raw, CATALOG_FIT_KEYS, issues, []);
+  const fields = issues.parse(fitSchema, raw, []);
+  let rings: CatalogFitOptions['rings'];
+  if (raw.polygon !== undefined) {
+    try {
+      rings = readZonePolygon(raw.polygon, 'polygon');
+    } catch (error) {
+      if (!(error instanceof InvalidInput)) throw error;
+      error.issues.forEach((i) => issues.issues.push(i));
+    }
+  }
+  const given = raw.completeness;
+  let completeness: z.output<typeof completenessSchema> | undefined = {};
+  let periods: ReturnType<typeof readPeriods>;
+  if (given !== undefined) {
+    if (typeof given !== 'object' || given === null || Array.isArray(given)) {
+      issues.add(['completeness'], `expected { method?, mc?, correction?, periods?, eventsPerWindow? }, got ${describeValue(given)}`);
+    } else {
+      unknownKeys(given as Record<string, unknown>, COMPLETENESS_KEYS, issues, ['completeness']);
+      completeness = issues.parse(completenessSchema, given, ['completeness']);
+      periods = readPeriods((given as Record<string, unknown>).periods, issues);
+    }
+  }
+  const method = completeness?.method ?? (completeness?.mc === undefined ? 'max-curvature' : 'fixed');
+  if (method === 'fixed' && completeness?.mc === undefined) issues.add(['completeness', 'mc'], 'expected a completeness magnitude for method "fixed", got nothing');
+  if (method === 'max-curvature' && completeness?.mc !== undefined) issues.add(['completeness', 'mc'], 'expected no mc with method "max-curvature" (it finds Mc); use method "fixed" to give one');
+  const startMs = readTime(raw.startTime, issues, ['startTime']);
+  const endMs = readTime(raw.endTime, issues, ['endTime']);
+  if ((raw.startTime === undefined) !== (raw.endTime === undefined)) {
+    issues.add([raw.startTime === undefined ? 'startTime' : 'endTime'], 'expected startTime and endTime together (the observation span), or neither');
+  }
+  if (startMs !== undefined && endMs !== undefined && !(endMs > startMs)) issues.add(['endTime'], `expected an end after the start ${raw.startTime as string}, got ${raw.endTime as string}`);
+  if (issues.issues.length > 0 || !fields || !completeness) throw new InvalidInput(issues.issues, 'invalid catalog fit request');
+  const options: CatalogFitOptions = {
+    ...(rings ? { rings } : {}),
+    ...(fields.mMax === undefined ? {} : { mMax: fields.mMax }),
+    ...(fields.decluster === undefined ? {} : { decluster: fields.decluster }),
+    ...(fields.magnitudes === undefined ? {} : { magnitudes: fields.magnitudes }),
+    ...(fields.magnitudeStep === undefined ? {} : { magnitudeStep: fields.magnitudeStep }),
+    ...(completeness.mc === undefined ? {} : { mc: completeness.mc }),
+    ...(completeness.correction === undefined ? {} : { mcCorrection: completeness.correction }),
+    ...(completeness.eventsPerWindow === undefined ? {} : { eventsPerWindow: completeness.eventsPerWindow }),
+    ...(periods === undefined ? {} : { periods }),
+    ...(startMs === undefined || endMs === undefined ? {} : { startMs, endMs }),
+  };
+  return { text: fields.text, ...(fields.format ? { format: fields.format } : {}), options };
+}
+
+/** A raw catalog body's format from its media type; JSON bodies say theirs (or it is detected). */
+const RAW_FORMATS: Readonly<Record<string, CatalogFormat>> = {
+  'text/csv': 'csv',
+  'text/plain': 'fdsn-text',
+  'application/xml': 'quakeml',
+  'text/xml': 'quakeml',
+};
+const CATALOG_TYPES = [...Object.keys(RAW_FORMATS), 'application/json'];
+export const DEFAULT_FILE_NAMES: Readonly<Record<CatalogFormat, string>> = { csv: 'catalog.csv', 'fdsn-text': 'catalog.txt', quakeml: 'catalog.xml' };
+
+const fileNameField = () =>
+  text(200, 'a file name').refine((name) => !/[\u0000-\u001f\u007f]/.test(name), { message: 'expected a file name without control characters' });
+
+const uploadSchema = z.object({
+  text: catalogTextField(),
+  format: oneOf(CATALOG_FORMATS).optional(),
+  fileName: fileNameField().optional(),
+});
+const UPLOAD_KEYS = Object.keys(uploadSchema.shape);
+
+export interface CatalogUpload {
+  readonly text: string;
+  readonly format?: CatalogFormat;
+  readonly fileName?: string;
+}
+
+/** The catalog of a PUT: raw text whose media type gives the format, or JSON `{ fileName?, format?, text }`. */
+export async function readCatalogUpload(c: Context): Promise<CatalogUpload> {
+  const type = mediaType(c);
+  const format = type === undefined ? undefined : RAW_FORMATS[type];
+  if (format) {
+    const issues = new IssueList();
+    const fileName = c.req.query('fileName') === undefined ? undefined : issues.parse(fileNameField(), c.req.query('fileName'), ['fileName']);
+    if (issues.issues.length > 0) throw new InvalidInput(issues.issues, 'invalid catalog upload');
+    return { text: await c.req.text(), format, ...(fileName ? { fileName } : {}) };
+  }
+  if (type !== 'application/json') {
+    throw new HttpError(
+      415,
+      `expected a catalog as text/csv (our CSV), text/plain (FDSN event text), application/xml (QuakeML) or application/json ({ fileName?, format?, text }), got ${type ?? 'no Content-Type'}`,
+      [],
+      { Accept: CATALOG_TYPES.join(', ') },
+    );
+  }
+  const { value } = await readJsonObject(c, 'a catalog upload ({ "fileName": ..., "format": ..., "text": ... })');
+  const issues = new IssueList();
+  for (const key of Object.keys(value)) if (!UPLOAD_KEYS.includes(key)) issues.add([key], `unknown key; expected one of ${UPLOAD_KEYS.join(', ')}`);
+  const fields = issues.parse(uploadSchema, value, []);
+  if (issues.issues.length > 0 || !fields) throw new InvalidInput(issues.issues, 'invalid catalog upload');
+  return fields;
+}
