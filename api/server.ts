@@ -1,7 +1,9 @@
 import type { Server } from 'node:http';
 import { serve } from '@hono/node-server';
 import { modelCatalog } from './engine/motion/registry.ts';
+import { createPages } from '../web/pages.tsx';
 import { createApp } from './service/app.ts';
+import { answerClientError } from './service/client-error.ts';
 import { ConfigError, readConfig, type ServiceConfig } from './service/config.ts';
 import { seedDemoStudy } from './service/demo-seed.ts';
 import { TOOL_VERSION } from './results/tool-version.ts';
@@ -43,16 +45,16 @@ seedOnFirstStart(store);
 const runPool = new WorkerPool({ size: config.workers, name: 'tremora-run' });
 const quickPool = new WorkerPool({ size: 1, name: 'tremora-quick' });
 const scheduler = new RunScheduler({ store, pool: runPool, toolVersion: TOOL_VERSION });
-const app = createApp(
-  { store, scheduler, runPool, quickPool, models: modelCatalog, toolVersion: TOOL_VERSION, workBudget: config.workBudget },
-  config.token === undefined ? {} : { token: config.token },
-);
+const context = { store, scheduler, runPool, quickPool, models: modelCatalog, toolVersion: TOOL_VERSION, workBudget: config.workBudget };
+const app = createApp(context, { pages: createPages(context), ...(config.token === undefined ? {} : { token: config.token }) });
 
 const server = serve({ fetch: app.fetch, hostname: config.host, port: config.port }, (info) => {
   console.log(`Tremora ${TOOL_VERSION} is listening on http://${urlHost(config.host)}:${info.port}`);
   console.log(`database: ${config.databasePath}; ${runPool.size} worker thread(s) for runs`);
 }) as Server;
 
+// Requests Node's parser refuses get the one error shape too (client-error.ts).
+server.on('clientError', answerClientError);
 server.on('error', (error: NodeJS.ErrnoException) => {
   const why = error.code === 'EADDRINUSE' ? `port ${config.port} on ${config.host} is in use; set PORT to another port` : error.message;
   console.error(`tremora: cannot listen: ${why}`);

@@ -1,0 +1,70 @@
+import type { Hono } from 'hono';
+import { modelCatalog } from '../../../api/engine/motion/registry.ts';
+import { createApp } from '../../../api/service/app.ts';
+import type { ServiceContext } from '../../../api/service/service-context.ts';
+import { openStore } from '../../../api/store/store.ts';
+import { RunScheduler } from '../../../api/workers/run-scheduler.ts';
+import { WorkerPool } from '../../../api/workers/worker-pool.ts';
+import { createPages } from '../../../web/pages.tsx';
+import { tempDir } from '../../service/helpers/service-process.ts';
+
+/** The service with its pages, in-process (app.request), on a temporary database. */
+export interface PageApp {
+  readonly app: Hono;
+  readonly ctx: ServiceContext;
+  close(): Promise<void>;
+}
+
+export function startPageApp(): PageApp {
+  const dir = tempDir('tremora-pages-');
+  const store = openStore(`${dir.path}/pages.db`);
+  const runPool = new WorkerPool({ size: 1, log: () => {} });
+  const quickPool = new WorkerPool({ size: 1, log: () => {} });
+  const ctx: ServiceContext = {
+    store,
+    runPool,
+    quickPool,
+    scheduler: new RunScheduler({ store, pool: runPool, toolVersion: 'test' }),
+    models: modelCatalog,
+    toolVersion: 'test',
+    workBudget: 1_000_000_000,
+  };
+  const app = createApp(ctx, { pages: createPages(ctx), logError: () => {} });
+  return {
+    app,
+    ctx,
+    close: async () => {
+      await Promise.all([runPool.close(), quickPool.close()]);
+      store.close();
+      dir.remove();
+    },
+  };
+}
+
+/** Waits until a run has finished (no time is asserted). */
+export async function runFinished(ctx: ServiceContext, runId: string): Promise<string> {
+  for (let i = 0; i < 1200; i++) {
+    const run = ctx.store.runs.get(runId);
+    if (run && !['queued', 'running'].includes(run.status)) return run.status;
+    await new Promise((r) => setTimeout(r, 50));
+  }
+  return ctx.store.runs.get(runId)?.status ?? 'missing';
+}
+
+/** A multipart form with one file field `file`. */
+export function fileForm(name: string, type: string, content: string, fields: Record<string, string> = {}): FormData {
+  const form = new FormData();
+  form.set('file', new File([content], name, { type }));
+  for (const [k, v] of Object.entries(fields)) form.set(k, v);
+  return form;
+}
+
+/** The inner text of the first element with `id`, tags stripped (enough for these pages' simple markup). */
+export function textOfId(html: string, id: string): string | undefined {
+  const start = html.indexOf(`id="${id}"`);
+  if (start < 0) return undefined;
+  const open = html.lastIndexOf('<', start);
+  const tag = /^<(\w+)/.exec(html.slice(open))?.[1] as string;
+  const end = html.indexOf(`</${tag}>`, start);
+  return html.slice(html.indexOf('>', start) + 1, end).replace(/<[^>]+>/g, '');
+}

@@ -1,0 +1,77 @@
+import { InvalidInput, type InputIssue } from '../../api/engine/errors.ts';
+import type { Study } from '../../api/engine/model.ts';
+import type { StudyResult } from '../../api/engine/results.ts';
+import { inputHash } from '../../api/service/index.ts';
+import type { ServiceContext } from '../../api/service/service-context.ts';
+import { storedInputs, validateStudy, type StoredInputs } from '../../api/service/study-input.ts';
+import type { RunRecord, StudyRecord } from '../../api/store/index.ts';
+
+/** A saved study as the pages read it, in-process from the store. */
+export type StudyData =
+  | { readonly ok: true; readonly record: StudyRecord; readonly inputs: StoredInputs; readonly study: Study; readonly hash: string }
+  | { readonly ok: false; readonly record: StudyRecord; readonly inputs: StoredInputs; readonly issues: readonly InputIssue[] };
+
+/** The study with `id`, validated; undefined when there is none. */
+export function readStudy(ctx: ServiceContext, id: string): StudyData | undefined {
+  const record = ctx.store.studies.get(id);
+  if (!record) return undefined;
+  const inputs = storedInputs(ctx.store, record);
+  try {
+    const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
+    return { ok: true, record, inputs, study, hash: inputHash(study) };
+  } catch (error) {
+    // A study saved before a rule changed may no longer validate; the pages say so.
+    if (error instanceof InvalidInput) return { ok: false, record, inputs, issues: error.issues };
+    throw error;
+  }
+}
+
+export interface Screening {
+  readonly run: RunRecord;
+  readonly results: StudyResult;
+  /** False when the study has changed since this run (its inputs hash differently). */
+  readonly current: boolean;
+}
+
+export interface RunState {
+  /** The newest run of any status. */
+  readonly latest?: RunRecord;
+  /** The newest done run with its results. */
+  readonly screening?: Screening;
+}
+
+/**
+ * Results of done runs never change (the store refuses it), so parsed results are kept by run
+ * id; the cache lives with the pages (createPages), holding the few most recent.
+ */
+export class ResultsCache {
+  readonly #entries = new Map<string, StudyResult>();
+  constructor(readonly capacity = 8) {}
+
+  get(ctx: ServiceContext, runId: string): StudyResult | undefined {
+    const hit = this.#entries.get(runId);
+    if (hit) {
+      this.#entries.delete(runId);
+      this.#entries.set(runId, hit);
+      return hit;
+    }
+    const text = ctx.store.runs.results(runId);
+    if (text === undefined) return undefined;
+    const results = JSON.parse(text) as StudyResult;
+    this.#entries.set(runId, results);
+    while (this.#entries.size > this.capacity) this.#entries.delete(this.#entries.keys().next().value as string);
+    return results;
+  }
+}
+
+/** The study's newest run and newest done run (with results). */
+export function readRuns(ctx: ServiceContext, cache: ResultsCache, studyId: string, currentHash: string | undefined): RunState {
+  const runs = ctx.store.runs.listForStudy(studyId);
+  const latest = runs[runs.length - 1];
+  const done = [...runs].reverse().find((r) => r.status === 'done');
+  const results = done ? cache.get(ctx, done.id) : undefined;
+  return {
+    ...(latest ? { latest } : {}),
+    ...(done && results ? { screening: { run: done, results, current: done.inputHash === currentHash } } : {}),
+  };
+}

@@ -1,0 +1,115 @@
+import type { Child } from 'hono/jsx';
+import { LANGUAGES, type Translator } from '../text/translator.ts';
+import { Caution } from './caution.tsx';
+
+export type StudySection = 'overview' | 'scenario' | 'catalog' | 'edit';
+
+export interface PageShellProps {
+  readonly tr: Translator;
+  readonly title: string;
+  /** This page's path and query, where the language switch comes back to. */
+  readonly path: string;
+  readonly toolVersion: string;
+  readonly study?: { readonly id: string; readonly name: string };
+  readonly section?: StudySection;
+  /** Extra style sheets (the handout's print sheet). */
+  readonly styles?: readonly string[];
+  /** Pages that show numbers carry the caution at the top of their content as well. */
+  readonly showsNumbers?: boolean;
+  readonly bodyClass?: string;
+  readonly children?: Child;
+}
+
+const STUDY_SECTIONS: readonly { readonly id: StudySection; readonly key: 'nav.overview' | 'nav.scenario' | 'nav.catalog' | 'nav.edit'; readonly suffix: string }[] = [
+  { id: 'overview', key: 'nav.overview', suffix: '' },
+  { id: 'scenario', key: 'nav.scenario', suffix: '/scenario' },
+  { id: 'catalog', key: 'nav.catalog', suffix: '/catalog' },
+  { id: 'edit', key: 'nav.edit', suffix: '/edit' },
+];
+
+/**
+ * The frame of every page: skip link, header with the main navigation and the language switch,
+ * the study's own navigation, the main content, and a footer with the caution and the limits.
+ * The one script (enhancements only) and the style sheets come from this service's origin.
+ */
+export function PageShell(props: PageShellProps) {
+  const { tr, study } = props;
+  return (
+    <html lang={tr.lang}>
+      <head>
+        <meta charset="utf-8" />
+        <meta name="viewport" content="width=device-width, initial-scale=1" />
+        <title>{`${props.title} · ${tr.t('site.name')}`}</title>
+        {/* The service answers with Referrer-Policy: no-referrer, under which a browser sends
+            "Origin: null" with form posts, and the same-origin check refuses them; within this
+            origin the pages need their own origin sent. */}
+        <meta name="referrer" content="same-origin" />
+        <link rel="icon" href="data:," />
+        <link rel="stylesheet" href="/static/tremora.css" />
+        {(props.styles ?? []).map((href) => (
+          <link rel="stylesheet" href={href} />
+        ))}
+        <script src="/static/tremora.js" defer></script>
+      </head>
+      <body class={props.bodyClass}>
+        <a class="skip-link" href="#main">
+          {tr.t('site.skip')}
+        </a>
+        <header class="site-header">
+          <div class="brand">
+            <a href="/" class="brand-name">
+              {tr.t('site.name')}
+            </a>
+            <span class="brand-tagline">{tr.t('site.tagline')}</span>
+          </div>
+          <nav aria-label={tr.t('nav.main')} class="main-nav">
+            <ul>
+              <li>
+                <a href="/">{tr.t('nav.studies')}</a>
+              </li>
+              <li>
+                <a href="/limits">{tr.t('nav.limits')}</a>
+              </li>
+            </ul>
+          </nav>
+          <form class="lang-switch" action="/language" method="get">
+            <label for="lang-select">{tr.t('lang.label')}</label>
+            <select id="lang-select" name="lang">
+              {LANGUAGES.map((l) => (
+                <option value={l.code} lang={l.code} selected={l.code === tr.lang}>
+                  {l.name}
+                </option>
+              ))}
+            </select>
+            <input type="hidden" name="back" value={props.path} />
+            <button type="submit">{tr.t('lang.change')}</button>
+          </form>
+        </header>
+        {study && (
+          <nav aria-label={tr.t('nav.study')} class="study-nav">
+            <span class="study-nav-name">{study.name}</span>
+            <ul>
+              {STUDY_SECTIONS.map((s) => (
+                <li>
+                  <a href={`/studies/${study.id}${s.suffix}`} aria-current={props.section === s.id ? 'page' : undefined}>
+                    {tr.t(s.key)}
+                  </a>
+                </li>
+              ))}
+            </ul>
+          </nav>
+        )}
+        <main id="main" tabindex={-1}>
+          {props.showsNumbers && <Caution tr={tr} />}
+          {props.children}
+        </main>
+        <footer class="site-footer">
+          <p class="footer-caution">
+            <strong>{tr.t('caution.short')}</strong> <a href="/limits">{tr.t('caution.limitsLink')}</a>.
+          </p>
+          <p>{tr.t('footer.version', { version: props.toolVersion })}</p>
+        </footer>
+      </body>
+    </html>
+  );
+}

@@ -1,0 +1,219 @@
+import type { Child } from 'hono/jsx';
+import type { ScreeningBandId } from '../../api/engine/intensity/screening-band.ts';
+import type { LonLat, Source, Study } from '../../api/engine/model.ts';
+import { BAND_STYLES, INK, MAP_COLOURS, PAPER } from '../style/palette.ts';
+import type { Translator } from '../text/translator.ts';
+import { BandMarker } from './band-marker.tsx';
+import { MapFurniture, ZoneHatch } from './map-furniture.tsx';
+import type { MapFrame } from './map-frame.ts';
+import { placeLabels, type LabelRequest } from './label-placement.ts';
+
+export interface StudyMapProps {
+  readonly tr: Translator;
+  readonly study: Study;
+  readonly frame: MapFrame;
+  /** Ids unique to this map on its page (patterns, title). */
+  readonly idPrefix: string;
+  /** Each community's band, once screened; unscreened communities are drawn as plain circles. */
+  readonly bands?: ReadonlyMap<string, ScreeningBandId>;
+  /** Community drawn larger (the community page's own). */
+  readonly highlight?: string;
+  /**
+   * The hazard-map layer: drawn above the land and below the sources and communities. Empty
+   * until the store offers a hazard-map run of the study (the grid-map run kind, to come).
+   */
+  readonly hazardLayer?: Child;
+  /** Drawn above everything else (scenario rupture). */
+  readonly overlay?: Child;
+  readonly labels?: boolean;
+  /** Zones hatched (default) or left out (a scenario map, where the shaking layer must read clearly). */
+  readonly showZones?: boolean;
+  /** Text added to a community's label, by id (a scenario's MMI). */
+  readonly labelSuffix?: ReadonlyMap<string, string>;
+}
+
+const lineOf = (s: Source & { kind: 'fault' }) => ({ type: 'LineString' as const, coordinates: s.trace.map((p) => [...p]) });
+const polygonOf = (rings: Study['outline'] & object) => ({ type: 'Polygon' as const, coordinates: rings.map((r) => r.map((p) => [...p])) });
+
+/** The study drawn from its own data: outline, zones, faults, points, communities; scale bar and north arrow. */
+export function StudyMap(props: StudyMapProps) {
+  const { tr, study, frame, idPrefix } = props;
+  const hatch = `${idPrefix}-hatch`;
+  const titleId = `${idPrefix}-title`;
+  const faults = study.sources.filter((s): s is Source & { kind: 'fault' } => s.kind === 'fault');
+  const sizeOf = (id: string) => (props.highlight === id ? 9 : 6.5);
+  const communityPoints = study.communities.map((c) => frame.project([c.lon, c.lat]));
+  const faultPoints = faults.map((s) => frame.project(s.trace[Math.floor((s.trace.length - 1) / 2)] ?? (s.trace[0] as LonLat)));
+  const requests: LabelRequest[] = [
+    ...study.communities.map((c, i) => ({ x: (communityPoints[i] as readonly [number, number])[0], y: (communityPoints[i] as readonly [number, number])[1], text: `${c.name}${props.labelSuffix?.get(c.id) ?? ''}`, fontSize: props.highlight === c.id ? 14 : 12, clearance: sizeOf(c.id) })),
+    ...faults.map((s, i) => ({
+      x: (faultPoints[i] as readonly [number, number])[0],
+      y: (faultPoints[i] as readonly [number, number])[1],
+      alternatives: s.trace.map((p) => frame.project(p)),
+      text: s.name,
+      fontSize: 11,
+      clearance: 3,
+    })),
+  ];
+  const placed = props.labels === false ? [] : placeLabels(requests, frame.width, frame.height);
+  const communityLabel = (i: number) => placed[i];
+  const faultLabel = (i: number) => placed[study.communities.length + i];
+  return (
+    <svg
+      class="map"
+      viewBox={`0 0 ${frame.width} ${frame.height}`}
+      width={frame.width}
+      height={frame.height}
+      role="img"
+      aria-labelledby={titleId}
+      font-family="inherit"
+    >
+      <title id={titleId}>{tr.t('map.title', { name: study.name })}</title>
+      <defs>
+        <ZoneHatch id={hatch} />
+      </defs>
+      <rect width={frame.width} height={frame.height} fill={MAP_COLOURS.sea} />
+      <g class="map-land">
+        {(study.outline ?? []).map((ring) => (
+          <path d={frame.path(polygonOf([ring]))} fill={MAP_COLOURS.land} stroke={MAP_COLOURS.coast} stroke-width={1.2} />
+        ))}
+      </g>
+      <g class="map-hazard-layer" data-layer="hazard">
+        {props.hazardLayer}
+      </g>
+      <g class="map-coast">
+        {(study.outline ?? []).map((ring) => (
+          <path d={frame.path(polygonOf([ring]))} fill="none" stroke={MAP_COLOURS.coast} stroke-width={1.2} />
+        ))}
+      </g>
+      <g class="map-zones">
+        {props.showZones !== false && study.sources
+          .filter((s) => s.kind === 'zone')
+          .map((s) => (
+            <path
+              d={frame.path(polygonOf((s as Source & { kind: 'zone' }).rings))}
+              fill={`url(#${hatch})`}
+              fill-opacity={0.35}
+              stroke={MAP_COLOURS.zoneHatch}
+              stroke-width={1}
+              stroke-dasharray="5 3"
+              data-source={s.id}
+            />
+          ))}
+      </g>
+      <g class="map-faults">
+        {faults.map((s, i) => {
+            const interfaceLike = s.setting === 'interface';
+            const label = faultLabel(i);
+            return (
+              <g data-source={s.id}>
+                {interfaceLike && <path d={frame.path(lineOf(s))} fill="none" stroke={PAPER} stroke-width={7} />}
+                <path
+                  d={frame.path(lineOf(s))}
+                  fill="none"
+                  stroke={MAP_COLOURS.fault}
+                  stroke-width={interfaceLike ? 3 : 2}
+                  stroke-dasharray={interfaceLike ? '10 4' : undefined}
+                  stroke-linecap="round"
+                />
+                {label && (
+                  <text x={label.x} y={label.y} text-anchor={label.anchor} font-size={11} font-style="italic" fill={INK} class="map-label map-label-source" paint-order="stroke" stroke={PAPER} stroke-width={3}>
+                    {s.name}
+                  </text>
+                )}
+              </g>
+            );
+          })}
+      </g>
+      <g class="map-points">
+        {study.sources
+          .filter((s): s is Source & { kind: 'point' } => s.kind === 'point')
+          .map((s) => {
+            const [x, y] = frame.project(s.location);
+            return <path d={`M${x - 5},${y - 5}L${x + 5},${y + 5}M${x - 5},${y + 5}L${x + 5},${y - 5}`} stroke={INK} stroke-width={2} data-source={s.id} />;
+          })}
+      </g>
+      {props.overlay}
+      <g class="map-communities">
+        {study.communities.map((c, i) => {
+          const [x, y] = communityPoints[i] as readonly [number, number];
+          const band = props.bands?.get(c.id);
+          const style = band ? BAND_STYLES[band] : undefined;
+          const size = sizeOf(c.id);
+          const label = communityLabel(i);
+          return (
+            <g data-community={c.id}>
+              <BandMarker shape={style?.shape ?? 'circle'} fill={style?.fill ?? PAPER} size={size} x={x} y={y} />
+              {label && (
+                <text x={label.x} y={label.y} text-anchor={label.anchor} font-size={props.highlight === c.id ? 14 : 12} font-weight={props.highlight === c.id ? 'bold' : undefined} fill={INK} paint-order="stroke" stroke={PAPER} stroke-width={3} class="map-label">
+                  {`${c.name}${props.labelSuffix?.get(c.id) ?? ''}`}
+                </text>
+              )}
+            </g>
+          );
+        })}
+      </g>
+      <MapFurniture frame={frame} tr={tr} />
+    </svg>
+  );
+}
+
+/** The legend of a study map, in words, with the symbols it explains. */
+export function StudyMapLegend(props: { readonly tr: Translator; readonly idPrefix: string; readonly bands: boolean; readonly study: Study; readonly extra?: Child }) {
+  const { tr, study } = props;
+  const has = (kind: Source['kind'], setting?: string) => study.sources.some((s) => s.kind === kind && (setting === undefined || (setting === 'interface') === (s.setting === 'interface')));
+  const hatch = `${props.idPrefix}-legend-hatch`;
+  const swatch = (content: Child) => (
+    <svg class="legend-symbol" viewBox="0 0 28 16" width="28" height="16" aria-hidden="true" focusable="false">
+      {content}
+    </svg>
+  );
+  return (
+    <div class="map-legend">
+      <h3 class="legend-title">{tr.t('map.legend')}</h3>
+      <svg width="0" height="0" class="defs-only" aria-hidden="true" focusable="false">
+        <defs>
+          <ZoneHatch id={hatch} />
+        </defs>
+      </svg>
+      <ul>
+        {(study.outline?.length ?? 0) > 0 && <li>{swatch(<rect x={1} y={1} width={26} height={14} fill={MAP_COLOURS.land} stroke={MAP_COLOURS.coast} />)} {tr.t('map.land')}</li>}
+        <li>{swatch(<rect x={1} y={1} width={26} height={14} fill={MAP_COLOURS.sea} stroke={MAP_COLOURS.grid} />)} {tr.t('map.sea')}</li>
+        {has('fault', 'interface') && (
+          <li>
+            {swatch(
+              <>
+                <line x1={2} y1={8} x2={26} y2={8} stroke={PAPER} stroke-width={7} />
+                <line x1={2} y1={8} x2={26} y2={8} stroke={INK} stroke-width={3} stroke-dasharray="10 4" />
+              </>,
+            )}{' '}
+            {tr.t('map.interface')}
+          </li>
+        )}
+        {has('fault', 'crustal') && <li>{swatch(<line x1={2} y1={8} x2={26} y2={8} stroke={INK} stroke-width={2} />)} {tr.t('map.fault')}</li>}
+        {has('zone') && (
+          <li>
+            {swatch(<rect x={1} y={1} width={26} height={14} fill={`url(#${hatch})`} fill-opacity={0.6} stroke={MAP_COLOURS.zoneHatch} stroke-dasharray="5 3" />)} {tr.t('map.zone')}
+          </li>
+        )}
+        {has('point') && <li>{swatch(<path d="M9,3L19,13M9,13L19,3" stroke={INK} stroke-width={2} />)} {tr.t('map.point')}</li>}
+        {props.bands ? (
+          <li>
+            {tr.t('map.community')}:
+            <ul class="legend-bands">
+              {(['refer-first', 'refer-soon', 'prepare', 'inform'] as const).map((id) => (
+                <li>
+                  {swatch(<BandMarker shape={BAND_STYLES[id].shape} fill={BAND_STYLES[id].fill} size={6} x={14} y={8} />)} {tr.t(`band.${id}`)}
+                </li>
+              ))}
+            </ul>
+          </li>
+        ) : (
+          <li>{swatch(<BandMarker shape="circle" fill={PAPER} size={6} x={14} y={8} />)} {tr.t('overview.communities')}</li>
+        )}
+        {props.extra}
+      </ul>
+      <p class="legend-note">{tr.t('map.projection')}</p>
+    </div>
+  );
+}

@@ -1,0 +1,58 @@
+import { Hono } from 'hono';
+import type { ServiceContext } from '../api/service/service-context.ts';
+import { catalogPages } from './routes/catalog-pages.tsx';
+import { editorPages } from './routes/editor-pages.tsx';
+import { LANGUAGE_COOKIE, pageKit, safeBackPath } from './routes/page-kit.ts';
+import { scenarioPages } from './routes/scenario-pages.tsx';
+import { staticFiles } from './routes/static-files.ts';
+import { studyPages } from './routes/study-pages.tsx';
+import { isLanguage } from './text/translator.ts';
+import { HomeView } from './views/home-view.tsx';
+import { LimitsView } from './views/limits-view.tsx';
+import { MessageView } from './views/message-view.tsx';
+
+/** How long the language choice is kept, seconds (a year). */
+const LANGUAGE_COOKIE_MAX_AGE_S = 365 * 24 * 3600;
+
+/**
+ * The pages, server-rendered, mounted at "/" by createApp (api/service/app.ts), which gives
+ * them the service's security headers and limits. They read studies and runs in-process from
+ * the store and start work through the same scheduler and pools as the API.
+ */
+export function createPages(ctx: ServiceContext): Hono {
+  const app = new Hono();
+  const kit = pageKit(ctx);
+
+  staticFiles(app);
+
+  app.get('/', (c) => {
+    const tr = kit.tr(c);
+    return kit.render(c, <HomeView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} studies={ctx.store.studies.list()} />);
+  });
+
+  app.get('/limits', (c) => kit.render(c, <LimitsView tr={kit.tr(c)} path={kit.here(c)} toolVersion={ctx.toolVersion} />));
+
+  // The language switch: a plain GET form, so it works without script; the choice is a cookie.
+  app.get('/language', (c) => {
+    const lang = c.req.query('lang');
+    const back = safeBackPath(c.req.query('back'));
+    if (isLanguage(lang)) {
+      c.header('Set-Cookie', `${LANGUAGE_COOKIE}=${lang}; Path=/; Max-Age=${LANGUAGE_COOKIE_MAX_AGE_S}; SameSite=Lax`);
+    }
+    return c.redirect(back, 303);
+  });
+
+  studyPages(app, kit);
+  scenarioPages(app, kit);
+  editorPages(app, kit);
+  catalogPages(app, kit);
+
+  // Unknown pages get a page; unknown API paths keep the API's JSON 404.
+  app.get('*', (c) => {
+    if (c.req.path.startsWith('/api/') || c.req.path === '/api') return c.notFound();
+    const tr = kit.tr(c);
+    return kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={tr.t('error.notFoundText')} />, 404);
+  });
+
+  return app;
+}

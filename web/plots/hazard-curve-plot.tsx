@@ -1,0 +1,119 @@
+import { scaleLog } from 'd3-scale';
+import { line } from 'd3-shape';
+import type { HazardCurve } from '../../api/engine/results.ts';
+import { MAP_COLOURS, PAPER } from '../style/palette.ts';
+import type { Translator } from '../text/translator.ts';
+import { Axis, logTicks, tickLabel } from './log-axis.tsx';
+
+export interface HazardCurvePlotProps {
+  readonly tr: Translator;
+  readonly curve: HazardCurve;
+  readonly returnPeriodsYears: readonly number[];
+  /** The mean curve's level at each return period (g), where on the curve. */
+  readonly levelsAtReturnPeriods: Readonly<Record<string, number | null>>;
+  readonly idPrefix: string;
+  readonly width?: number;
+  readonly height?: number;
+}
+
+/** Lowest rate drawn, per year: below one in a million years a screening says nothing useful. */
+const MIN_RATE = 1e-6;
+const MARGIN = { top: 16, right: 24, bottom: 52, left: 78 } as const;
+
+/**
+ * The hazard curve on log–log axes (d3-scale, d3-shape): the mean curve dark, each logic-tree
+ * branch lighter beneath it, dashed lines at the return periods with their level marked.
+ * Rates of zero (past the truncation) cannot sit on a log axis and are left off.
+ */
+export function HazardCurvePlot(props: HazardCurvePlotProps) {
+  const { tr, curve } = props;
+  const width = props.width ?? 640;
+  const height = props.height ?? 380;
+  const all = [curve.annualRate, ...(curve.branches ?? []).map((b) => b.annualRate)];
+  const positive = all.flat().filter((r) => r > 0);
+  const maxRate = Math.max(...positive, 1 / Math.min(...props.returnPeriodsYears) * 10);
+  const minRate = Math.max(MIN_RATE, Math.min(...positive, ...props.returnPeriodsYears.map((t) => 1 / t / 10)));
+  const levels = curve.levels;
+  const x = scaleLog().domain([levels[0] as number, levels[levels.length - 1] as number]).range([MARGIN.left, width - MARGIN.right]);
+  const y = scaleLog().domain([minRate, maxRate]).range([height - MARGIN.bottom, MARGIN.top]).nice();
+  const [yLow] = y.domain() as [number, number];
+  const path = line<[number, number]>()
+    .x((d) => x(d[0]))
+    .y((d) => y(d[1]))
+    .digits(1);
+  const pointsOf = (rates: readonly number[]) => levels.map((l, i) => [l, rates[i] as number] as [number, number]).filter((d) => d[1] >= yLow);
+  const titleId = `${props.idPrefix}-title`;
+  const descId = `${props.idPrefix}-desc`;
+  return (
+    <svg class="plot" viewBox={`0 0 ${width} ${height}`} width={width} height={height} role="img" aria-labelledby={`${titleId} ${descId}`}>
+      <title id={titleId}>{tr.t('community.curve')}</title>
+      <desc id={descId}>{`${tr.t('plot.pga')}; ${tr.t('plot.annualRate')}.`}</desc>
+      <Axis
+        orientation="bottom"
+        ticks={logTicks(x)}
+        position={x}
+        label={(v) => tickLabel(v, tr.locale)}
+        across={[MARGIN.top, height - MARGIN.bottom]}
+        at={height - MARGIN.bottom}
+        title={tr.t('plot.pga')}
+        titleAt={[(MARGIN.left + width - MARGIN.right) / 2, height - 10]}
+      />
+      <Axis
+        orientation="left"
+        ticks={logTicks(y)}
+        position={y}
+        label={(v) => tickLabel(v, tr.locale)}
+        across={[MARGIN.left, width - MARGIN.right]}
+        at={MARGIN.left}
+        title={tr.t('plot.annualRate')}
+        titleAt={[18, (MARGIN.top + height - MARGIN.bottom) / 2]}
+      />
+      <g class="branches">
+        {(curve.branches ?? []).map((b) => (
+          <path d={path(pointsOf(b.annualRate)) ?? ''} fill="none" stroke={MAP_COLOURS.branch} stroke-width={1.6} data-branch={b.label} />
+        ))}
+      </g>
+      <path class="mean-curve" d={path(pointsOf(curve.annualRate)) ?? ''} fill="none" stroke={MAP_COLOURS.mean} stroke-width={2.2} />
+      <g class="return-periods">
+        {props.returnPeriodsYears.map((years) => {
+          const rate = 1 / years;
+          if (rate < yLow) return null;
+          const level = props.levelsAtReturnPeriods[String(years)];
+          const yy = y(rate);
+          return (
+            <g data-return-period={years}>
+              <line x1={MARGIN.left} x2={width - MARGIN.right} y1={yy} y2={yy} stroke={MAP_COLOURS.returnPeriod} stroke-width={1.2} stroke-dasharray="6 4" />
+              <text x={width - MARGIN.right - 4} y={yy - 5} text-anchor="end" font-size={12} fill={MAP_COLOURS.axis} paint-order="stroke" stroke={PAPER} stroke-width={3}>
+                {tr.t('plot.returnPeriod', { years: tr.number(years) })}
+              </text>
+              {level != null && level >= (levels[0] as number) && (
+                <>
+                  <line x1={x(level)} x2={x(level)} y1={yy} y2={height - MARGIN.bottom} stroke={MAP_COLOURS.returnPeriod} stroke-width={1} stroke-dasharray="2 3" />
+                  <circle cx={x(level)} cy={yy} r={4.5} fill={PAPER} stroke={MAP_COLOURS.mean} stroke-width={2} />
+                </>
+              )}
+            </g>
+          );
+        })}
+      </g>
+      <rect x={MARGIN.left} y={MARGIN.top} width={width - MARGIN.left - MARGIN.right} height={height - MARGIN.top - MARGIN.bottom} fill="none" stroke={MAP_COLOURS.axis} />
+    </svg>
+  );
+}
+
+/** The plot's legend in words. */
+export function HazardCurveLegend(props: { readonly tr: Translator; readonly branches: number }) {
+  const { tr } = props;
+  const sample = (stroke: string, w: number, dash?: string) => (
+    <svg class="legend-symbol" viewBox="0 0 28 12" width="28" height="12" aria-hidden="true" focusable="false">
+      <line x1={1} y1={6} x2={27} y2={6} stroke={stroke} stroke-width={w} stroke-dasharray={dash} />
+    </svg>
+  );
+  return (
+    <ul class="plot-legend" aria-label={tr.t('plot.legend')}>
+      <li>{sample(MAP_COLOURS.mean, 3)} {tr.t('plot.mean')}</li>
+      {props.branches > 0 && <li>{sample(MAP_COLOURS.branch, 1.5)} {tr.t('plot.branch', { n: tr.count(props.branches) })}</li>}
+      <li>{sample(MAP_COLOURS.returnPeriod, 1.2, '6 4')} {tr.t('plot.returnPeriodLegend')}</li>
+    </ul>
+  );
+}

@@ -1,0 +1,82 @@
+import type { ScaleLogarithmic } from 'd3-scale';
+import { MAP_COLOURS } from '../style/palette.ts';
+
+/**
+ * Ticks of a log axis: every power of ten, and 2 and 5 times it when the axis spans three
+ * decades or fewer (more would crowd the labels).
+ */
+export function logTicks(scale: ScaleLogarithmic<number, number>): number[] {
+  const [a, b] = scale.domain() as [number, number];
+  const lo = Math.min(a, b);
+  const hi = Math.max(a, b);
+  const decades = Math.log10(hi / lo);
+  const steps = decades <= 3 ? [1, 2, 5] : [1];
+  const ticks: number[] = [];
+  for (let p = Math.floor(Math.log10(lo)); p <= Math.ceil(Math.log10(hi)); p++) {
+    for (const s of steps) {
+      const v = s * 10 ** p;
+      if (v >= lo * (1 - 1e-9) && v <= hi * (1 + 1e-9)) ticks.push(Number(v.toPrecision(3)));
+    }
+  }
+  return ticks;
+}
+
+/** Short label of a positive number for an axis: 0.001, 0.02, 1, 10, 1e-5 below 0.0001. */
+export function tickLabel(value: number, locale: string): string {
+  if (value < 1e-4) return `10${superscript(Math.round(Math.log10(value)))}`;
+  return new Intl.NumberFormat(locale, { maximumSignificantDigits: 2 }).format(value);
+}
+
+const SUPERSCRIPT: Readonly<Record<string, string>> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
+const superscript = (n: number): string => [...String(n)].map((ch) => SUPERSCRIPT[ch] ?? ch).join('');
+
+export interface AxisProps {
+  readonly orientation: 'bottom' | 'left';
+  readonly ticks: readonly number[];
+  readonly position: (value: number) => number;
+  readonly label: (value: number) => string;
+  /** The other axis's extent, px: grid lines run across it. */
+  readonly across: readonly [number, number];
+  /** Where the axis line sits, px (y for bottom, x for left). */
+  readonly at: number;
+  readonly title: string;
+  readonly titleAt: readonly [x: number, y: number];
+}
+
+/** An axis with ticks, grid lines, labels and a title. */
+export function Axis(props: AxisProps) {
+  const bottom = props.orientation === 'bottom';
+  return (
+    <g class={`axis axis-${props.orientation}`} font-size={12} fill={MAP_COLOURS.axis}>
+      {props.ticks.map((t) => {
+        const p = props.position(t);
+        return bottom ? (
+          <g>
+            <line x1={p} x2={p} y1={props.across[0]} y2={props.across[1]} stroke={MAP_COLOURS.grid} stroke-width={1} />
+            <line x1={p} x2={p} y1={props.at} y2={props.at + 5} stroke={MAP_COLOURS.axis} />
+            <text x={p} y={props.at + 18} text-anchor="middle">
+              {props.label(t)}
+            </text>
+          </g>
+        ) : (
+          <g>
+            <line y1={p} y2={p} x1={props.across[0]} x2={props.across[1]} stroke={MAP_COLOURS.grid} stroke-width={1} />
+            <line y1={p} y2={p} x1={props.at - 5} x2={props.at} stroke={MAP_COLOURS.axis} />
+            <text x={props.at - 8} y={p + 4} text-anchor="end">
+              {props.label(t)}
+            </text>
+          </g>
+        );
+      })}
+      <text
+        x={props.titleAt[0]}
+        y={props.titleAt[1]}
+        text-anchor="middle"
+        font-size={13}
+        transform={bottom ? undefined : `rotate(-90 ${props.titleAt[0]} ${props.titleAt[1]})`}
+      >
+        {props.title}
+      </text>
+    </g>
+  );
+}

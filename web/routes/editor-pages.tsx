@@ -1,0 +1,183 @@
+import type { Context, Hono } from 'hono';
+import type { InputIssue } from '../../api/engine/errors.ts';
+import type { Community } from '../../api/engine/model.ts';
+import { readStudy, type StudyData } from '../data/study-data.ts';
+import {
+  communityList,
+  importCommunitiesCsv,
+  importSourcesGeoJson,
+  issueField,
+  removeCommunity,
+  saveCommunity,
+  type CommunityForm,
+  type EditOutcome,
+} from '../data/study-edits.ts';
+import { CommunityFormView } from '../views/community-form-view.tsx';
+import { EditorView, type UploadProblem } from '../views/editor-view.tsx';
+import { MessageView } from '../views/message-view.tsx';
+import { field, fileField, type PageKit } from './page-kit.ts';
+
+const EMPTY_FORM: CommunityForm = { id: '', name: '', lon: '', lat: '', vs30: '', siteClass: '', population: '', elevationM: '', coastal: false };
+
+const formOf = (c: Community): CommunityForm => ({
+  id: c.id,
+  name: c.name,
+  lon: String(c.lon),
+  lat: String(c.lat),
+  vs30: c.vs30Basis === 'measured' ? String(c.vs30) : '',
+  siteClass: c.siteClass ?? '',
+  population: c.population === undefined ? '' : String(c.population),
+  elevationM: c.elevationM === undefined ? '' : String(c.elevationM),
+  coastal: c.coastal,
+});
+
+type Form = Record<string, string | File | (string | File)[]>;
+
+const postedForm = (form: Form): CommunityForm => ({
+  id: field(form, 'id') ?? '',
+  name: field(form, 'name') ?? '',
+  lon: field(form, 'lon') ?? '',
+  lat: field(form, 'lat') ?? '',
+  vs30: field(form, 'vs30') ?? '',
+  siteClass: field(form, 'siteClass') ?? '',
+  population: field(form, 'population') ?? '',
+  elevationM: field(form, 'elevationM') ?? '',
+  coastal: field(form, 'coastal') === 'true',
+});
+
+/**
+ * The study editor. Every change builds the whole candidate document and validates it
+ * (data/study-edits.ts); only a valid one is written, then the browser is sent back to the
+ * editor (303, so a reload does not post again). Problems come back on the same page, next
+ * to the field or upload they concern, with status 422.
+ */
+export function editorPages(app: Hono, kit: PageKit): void {
+  const { ctx } = kit;
+
+  const load = (c: Context): { data: StudyData & { ok: true } } | { response: Response | Promise<Response> } => {
+    const tr = kit.tr(c);
+    const id = c.req.param('id') as string;
+    const data = readStudy(ctx, id);
+    if (!data) return { response: kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={tr.t('error.studyNotFound', { id })} />, 404) };
+    if (!data.ok) {
+      return {
+        response: kit.render(
+          c,
+          <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={data.record.name} text={tr.t('editor.otherProblems')} details={data.issues.map((i) => `${i.path}: ${i.message}`)} />,
+          422,
+        ),
+      };
+    }
+    return { data };
+  };
+
+  const write = (data: StudyData & { ok: true }, outcome: EditOutcome & { ok: true }) =>
+    ctx.store.studies.replace(data.record.id, { name: outcome.name, document: JSON.stringify(outcome.document, null, 2), ...(outcome.file ? { file: outcome.file } : {}) });
+
+  const editor = (c: Context, data: StudyData & { ok: true }, extra: { problem?: UploadProblem; notice?: readonly InputIssue[] } = {}) => {
+    const saved = c.req.query('saved') === '1';
+    return kit.render(
+      c,
+      <EditorView tr={kit.tr(c)} path={kit.here(c)} toolVersion={ctx.toolVersion} studyId={data.record.id} study={data.study} saved={saved} {...extra} />,
+      extra.problem || extra.notice ? 422 : 200,
+    );
+  };
+
+  const communityForm = (c: Context, data: StudyData & { ok: true }, index: number | undefined, values: CommunityForm, issues: readonly InputIssue[]) => {
+    const tr = kit.tr(c);
+    const at = index ?? communityList(data.inputs, data.study.communities).length;
+    const byField = new Map<string, InputIssue[]>();
+    const others: InputIssue[] = [];
+    for (const issue of issues) {
+      const name = issueField(issue.path, at);
+      if (name && name !== '(row)' && name in EMPTY_FORM) byField.set(name, [...(byField.get(name) ?? []), issue]);
+      else others.push(issue);
+    }
+    const existing = index === undefined ? undefined : data.study.communities[index];
+    return kit.render(
+      c,
+      <CommunityFormView
+        tr={tr}
+        path={kit.here(c)}
+        toolVersion={ctx.toolVersion}
+        studyId={data.record.id}
+        studyName={data.study.name}
+        action={existing ? `/studies/${data.record.id}/edit/communities/${encodeURIComponent(existing.id)}` : `/studies/${data.record.id}/edit/new-community`}
+        heading={existing ? tr.t('editor.edit', { name: existing.name }) : tr.t('editor.add')}
+        values={values}
+        fieldIssues={byField}
+        otherIssues={others}
+      />,
+      issues.length > 0 ? 422 : 200,
+    );
+  };
+
+  const indexOf = (data: StudyData & { ok: true }, communityId: string) => data.study.communities.findIndex((x) => x.id === communityId);
+
+  app.get('/studies/:id/edit', (c) => {
+    const loaded = load(c);
+    return 'response' in loaded ? loaded.response : editor(c, loaded.data);
+  });
+
+  app.get('/studies/:id/edit/new-community', (c) => {
+    const loaded = load(c);
+    return 'response' in loaded ? loaded.response : communityForm(c, loaded.data, undefined, EMPTY_FORM, []);
+  });
+
+  app.post('/studies/:id/edit/new-community', async (c) => {
+    const loaded = load(c);
+    if ('response' in loaded) return loaded.response;
+    const values = postedForm(await c.req.parseBody());
+    const outcome = saveCommunity(loaded.data.inputs, loaded.data.study.communities, values, undefined, ctx.models);
+    if (!outcome.ok) return communityForm(c, loaded.data, undefined, values, outcome.issues);
+    write(loaded.data, outcome);
+    return c.redirect(`/studies/${loaded.data.record.id}/edit?saved=1`, 303);
+  });
+
+  app.get('/studies/:id/edit/communities/:cid', (c) => {
+    const loaded = load(c);
+    if ('response' in loaded) return loaded.response;
+    const index = indexOf(loaded.data, c.req.param('cid'));
+    const community = loaded.data.study.communities[index];
+    if (!community) return c.redirect(`/studies/${loaded.data.record.id}/edit`, 303);
+    return communityForm(c, loaded.data, index, formOf(community), []);
+  });
+
+  app.post('/studies/:id/edit/communities/:cid', async (c) => {
+    const loaded = load(c);
+    if ('response' in loaded) return loaded.response;
+    const index = indexOf(loaded.data, c.req.param('cid'));
+    if (index < 0) return c.redirect(`/studies/${loaded.data.record.id}/edit`, 303);
+    const values = postedForm(await c.req.parseBody());
+    const outcome = saveCommunity(loaded.data.inputs, loaded.data.study.communities, values, index, ctx.models);
+    if (!outcome.ok) return communityForm(c, loaded.data, index, values, outcome.issues);
+    write(loaded.data, outcome);
+    return c.redirect(`/studies/${loaded.data.record.id}/edit?saved=1`, 303);
+  });
+
+  app.post('/studies/:id/edit/communities/:cid/remove', (c) => {
+    const loaded = load(c);
+    if ('response' in loaded) return loaded.response;
+    const index = indexOf(loaded.data, c.req.param('cid'));
+    if (index < 0) return c.redirect(`/studies/${loaded.data.record.id}/edit`, 303);
+    const outcome = removeCommunity(loaded.data.inputs, loaded.data.study.communities, index, ctx.models);
+    if (!outcome.ok) return editor(c, loaded.data, { notice: outcome.issues });
+    write(loaded.data, outcome);
+    return c.redirect(`/studies/${loaded.data.record.id}/edit?saved=1`, 303);
+  });
+
+  const upload = (kind: 'communities' | 'sources') => async (c: Context) => {
+    const loaded = load(c);
+    if ('response' in loaded) return loaded.response;
+    const tr = kit.tr(c);
+    const file = fileField(await c.req.parseBody(), 'file');
+    if (!file) return editor(c, loaded.data, { problem: { upload: kind, issues: [{ path: '(file)', message: tr.t('editor.upload.noFile') }] } });
+    const text = await file.text();
+    const outcome = kind === 'communities' ? importCommunitiesCsv(loaded.data.inputs, text, ctx.models) : importSourcesGeoJson(loaded.data.inputs, text, ctx.models);
+    if (!outcome.ok) return editor(c, loaded.data, { problem: { upload: kind, issues: outcome.issues, text } });
+    write(loaded.data, outcome);
+    return c.redirect(`/studies/${loaded.data.record.id}/edit?saved=1`, 303);
+  };
+  app.post('/studies/:id/edit/communities-csv', upload('communities'));
+  app.post('/studies/:id/edit/sources-geojson', upload('sources'));
+}

@@ -1,0 +1,63 @@
+import type { Context } from 'hono';
+import { getCookie } from 'hono/cookie';
+import { html } from 'hono/html';
+import type { Child } from 'hono/jsx';
+import type { ContentfulStatusCode } from 'hono/utils/http-status';
+import type { ServiceContext } from '../../api/service/service-context.ts';
+import { ResultsCache } from '../data/study-data.ts';
+import { DEFAULT_LANGUAGE, isLanguage, translator, type LanguageCode, type Translator } from '../text/translator.ts';
+
+/**
+ * The language of a request: `?lang=` for this request, else the cookie the language switch
+ * sets (LANGUAGE_COOKIE, a year), else English.
+ */
+export const LANGUAGE_COOKIE = 'tremora_lang';
+
+export function languageOf(c: Context): LanguageCode {
+  const asked = c.req.query('lang');
+  if (isLanguage(asked)) return asked;
+  const saved = getCookie(c, LANGUAGE_COOKIE);
+  return isLanguage(saved) ? saved : DEFAULT_LANGUAGE;
+}
+
+/** What every page route works with. */
+export interface PageKit {
+  readonly ctx: ServiceContext;
+  readonly results: ResultsCache;
+  tr(c: Context): Translator;
+  /** This request's path and query without `lang` (where the language switch returns). */
+  here(c: Context): string;
+  render(c: Context, page: Child, status?: ContentfulStatusCode): Response | Promise<Response>;
+}
+
+export function pageKit(ctx: ServiceContext): PageKit {
+  return {
+    ctx,
+    results: new ResultsCache(),
+    tr: (c) => translator(languageOf(c)),
+    here: (c) => {
+      const url = new URL(c.req.url);
+      url.searchParams.delete('lang');
+      return `${url.pathname}${url.search}`;
+    },
+    render: (c, page, status = 200) => c.html(html`<!DOCTYPE html>${page}`, status),
+  };
+}
+
+/** A same-origin path to return to: starts with one "/", no scheme or host; else "/". */
+export function safeBackPath(back: string | undefined): string {
+  if (back === undefined || !back.startsWith('/') || back.startsWith('//') || back.includes('\\')) return '/';
+  return back;
+}
+
+/** A form field as text (multipart or urlencoded); files and absent fields are undefined. */
+export function field(form: Record<string, string | File | (string | File)[]>, name: string): string | undefined {
+  const value = form[name];
+  return typeof value === 'string' ? value : undefined;
+}
+
+/** A form's file field, when a non-empty file was sent. */
+export function fileField(form: Record<string, string | File | (string | File)[]>, name: string): File | undefined {
+  const value = form[name];
+  return value instanceof File && value.size > 0 ? value : undefined;
+}

@@ -1,0 +1,170 @@
+import type { Context, Hono } from 'hono';
+import { InvalidInput, StudyTooLarge, TremoraError } from '../../api/engine/errors.ts';
+import { runStudy } from '../../api/service/study-input.ts';
+import { communityPageData } from '../data/community-data.ts';
+import { FIRST_DIRECTION, isSortKey, leadHorizonYears, rankCommunities, sortRanked, type SortDirection } from '../data/ranking.ts';
+import { feltData, studyCatalog } from '../data/study-catalog.ts';
+import { startScreening } from '../data/start-screening.ts';
+import { readRuns, readStudy, type StudyData } from '../data/study-data.ts';
+import { mapFrame } from '../maps/map-frame.ts';
+import { CommunityView } from '../views/community-view.tsx';
+import { HandoutView } from '../views/handout-view.tsx';
+import { MessageView } from '../views/message-view.tsx';
+import { OverviewView } from '../views/overview-view.tsx';
+import { RunView } from '../views/run-view.tsx';
+import type { PageKit } from './page-kit.ts';
+
+/** Map sizes, px: the overview's map and the community page's smaller one. */
+export const OVERVIEW_MAP = { width: 760, maxHeight: 620, padding: 28 } as const;
+export const COMMUNITY_MAP = { width: 560, maxHeight: 460, padding: 30, fit: 'communities' } as const;
+
+/** Overview, screening runs, community pages and handouts. */
+export function studyPages(app: Hono, kit: PageKit): void {
+  const { ctx } = kit;
+
+  const notFound = (c: Context, text: string) => {
+    const tr = kit.tr(c);
+    return kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={text} />, 404);
+  };
+  const invalid = (c: Context, data: StudyData & { ok: false }) => {
+    const tr = kit.tr(c);
+    return kit.render(
+      c,
+      <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={data.record.name} text={tr.t('editor.otherProblems')} details={data.issues.map((i) => `${i.path}: ${i.message}`)} />,
+      422,
+    );
+  };
+
+  const overview = (c: Context, problem?: string) => {
+    const tr = kit.tr(c);
+    const id = c.req.param('id') as string;
+    const data = readStudy(ctx, id);
+    if (!data) return notFound(c, tr.t('error.studyNotFound', { id }));
+    if (!data.ok) return invalid(c, data);
+    const runs = readRuns(ctx, kit.results, id, data.hash);
+    const askedSort = c.req.query('sort');
+    const sort = isSortKey(askedSort) ? askedSort : 'rank';
+    const askedDir = c.req.query('dir');
+    const direction: SortDirection = askedDir === 'ascending' || askedDir === 'descending' ? askedDir : FIRST_DIRECTION[sort];
+    const rows = runs.screening ? sortRanked(rankCommunities(data.study, runs.screening.results), sort, direction) : undefined;
+    return kit.render(
+      c,
+      <OverviewView
+        tr={tr}
+        path={kit.here(c)}
+        toolVersion={ctx.toolVersion}
+        studyId={id}
+        study={data.study}
+        runs={runs}
+        frame={mapFrame(data.study, OVERVIEW_MAP)}
+        {...(rows ? { rows } : {})}
+        years={leadHorizonYears(data.study.settings.horizonsYears)}
+        sort={sort}
+        direction={direction}
+        {...(problem ? { problem } : {})}
+      />,
+      problem ? 422 : 200,
+    );
+  };
+
+  app.get('/studies/:id', (c) => overview(c));
+
+  app.post('/studies/:id/screen', async (c) => {
+    const id = c.req.param('id');
+    const record = ctx.store.studies.get(id);
+    if (!record) return notFound(c, kit.tr(c).t('error.studyNotFound', { id }));
+    try {
+      const run = await startScreening(ctx, record);
+      if (!run) return notFound(c, kit.tr(c).t('error.studyNotFound', { id }));
+      return c.redirect(`/studies/${id}/runs/${run.id}`, 303);
+    } catch (error) {
+      if (error instanceof InvalidInput) return overview(c, error.issues.map((i) => `${i.path}: ${i.message}`).join('; '));
+      if (error instanceof StudyTooLarge || error instanceof TremoraError) return overview(c, error.message);
+      throw error;
+    }
+  });
+
+  app.get('/studies/:id/runs/:runId', (c) => {
+    const tr = kit.tr(c);
+    const id = c.req.param('id');
+    const record = ctx.store.studies.get(id);
+    const run = ctx.store.runs.get(c.req.param('runId'));
+    if (!record || !run || run.studyId !== id) return notFound(c, tr.t('error.notFoundText'));
+    return kit.render(c, <RunView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} studyId={id} studyName={record.name} run={run} />);
+  });
+
+  /** A community of a study's newest done run, with everything its page and handout need. */
+  const communityContext = (c: Context) => {
+    const tr = kit.tr(c);
+    const id = c.req.param('id') as string;
+    const communityId = c.req.param('cid') as string;
+    const data = readStudy(ctx, id);
+    if (!data) return { kind: 'response' as const, response: notFound(c, tr.t('error.studyNotFound', { id })) };
+    if (!data.ok) return { kind: 'response' as const, response: invalid(c, data) };
+    const runs = readRuns(ctx, kit.results, id, data.hash);
+    const screening = runs.screening;
+    const result = screening?.results.communities.find((r) => r.communityId === communityId);
+    // The run's own inputs say where the community was when it was screened.
+    const runInputs = screening ? ctx.store.runs.inputs(screening.run.id) : undefined;
+    const ranStudy = runInputs ? runStudy(runInputs, ctx.models).study : undefined;
+    const community = ranStudy?.communities.find((x) => x.id === communityId) ?? data.study.communities.find((x) => x.id === communityId);
+    if (!community) return { kind: 'response' as const, response: notFound(c, tr.t('error.communityNotFound', { id: communityId })) };
+    if (!screening || !result || !ranStudy) {
+      return {
+        kind: 'response' as const,
+      response: kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={community.name} text={tr.t('community.noRun')} />, 409),
+      };
+    }
+    const felt = feltData(ctx, ranStudy, studyCatalog(ctx, id));
+    const history = felt?.kind === 'history' ? felt.history.communities.find((h) => h.communityId === communityId) : undefined;
+    return {
+      kind: 'page' as const,
+      tr,
+      id,
+      study: ranStudy,
+      screening,
+      page: communityPageData(ranStudy, community, result),
+      ...(felt?.kind === 'history' && history ? { felt: { history, eventCount: felt.history.eventCount } } : {}),
+      feltTooMany: felt?.kind === 'too-many',
+    };
+  };
+
+  app.get('/studies/:id/communities/:cid', (c) => {
+    const found = communityContext(c);
+    if (found.kind === 'response') return found.response;
+    const { tr, id, study, screening, page } = found;
+    return kit.render(
+      c,
+      <CommunityView
+        tr={tr}
+        path={kit.here(c)}
+        toolVersion={ctx.toolVersion}
+        studyId={id}
+        study={study}
+        data={page}
+        provenance={screening.results.provenance}
+        frame={mapFrame(study, COMMUNITY_MAP)}
+        {...(found.felt ? { felt: found.felt } : {})}
+        feltTooMany={found.feltTooMany}
+      />,
+    );
+  });
+
+  app.get('/studies/:id/communities/:cid/handout', (c) => {
+    const found = communityContext(c);
+    if (found.kind === 'response') return found.response;
+    const { tr, id, screening, page } = found;
+    return kit.render(
+      c,
+      <HandoutView
+        tr={tr}
+        path={kit.here(c)}
+        studyId={id}
+        data={page}
+        provenance={screening.results.provenance}
+        printedAt={new Date().toISOString()}
+        {...(found.felt ? { felt: found.felt } : {})}
+      />,
+    );
+  });
+}

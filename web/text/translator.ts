@@ -1,0 +1,84 @@
+import { EN, type TextKey } from './en.ts';
+import { FR } from './fr.ts';
+import { naturalFrequency, percentText } from '../format/natural-frequency.ts';
+import { numberInWords } from '../format/number-words.ts';
+import { placeFrom, type Compass } from '../format/direction-words.ts';
+
+/**
+ * Text bundles, one per language: English is complete (en.ts); others may leave keys out, and
+ * each missing key falls back to English. Templates name their values in braces: "{name}".
+ */
+export const LANGUAGES = [
+  { code: 'en', name: 'English', bundle: EN as Readonly<Partial<Record<TextKey, string>>> },
+  { code: 'fr', name: 'Français', bundle: FR },
+] as const;
+
+export type LanguageCode = (typeof LANGUAGES)[number]['code'];
+export const DEFAULT_LANGUAGE: LanguageCode = 'en';
+
+export const isLanguage = (code: unknown): code is LanguageCode => LANGUAGES.some((l) => l.code === code);
+
+export type TextValues = Readonly<Record<string, string | number>>;
+
+/** Fills "{name}" placeholders; a placeholder without a value is left as it is, to be seen and fixed. */
+export function fill(template: string, values: TextValues = {}): string {
+  return template.replace(/\{(\w+)\}/g, (whole, name: string) => (name in values ? String(values[name]) : whole));
+}
+
+export interface Translator {
+  readonly lang: LanguageCode;
+  /** The BCP 47 tag for number and date formats. */
+  readonly locale: string;
+  /** The text for `key` in this language, or in English when the bundle lacks it. */
+  t(key: TextKey, values?: TextValues): string;
+  /** Whether this language's own bundle has `key` (false: the English fallback is used). */
+  has(key: TextKey): boolean;
+  number(value: number, fractionDigits?: number): string;
+  /** Whole numbers 0–10 in words, larger in digits (format/number-words.ts). */
+  count(value: number): string;
+  /** "about 1 in 8 over the next 50 years (12%)" and its parts. */
+  chance(probability: number): { readonly frequency: string; readonly percent: string };
+  /** "14 km to the north-east" or "beneath this place". */
+  place(distanceKm: number, bearingDeg: number): string;
+  compass(point: Compass): string;
+  date(iso: string | number): string;
+}
+
+/** A translator for `lang`, with English as the fallback for every missing key. */
+export function translator(lang: LanguageCode): Translator {
+  const own = LANGUAGES.find((l) => l.code === lang)?.bundle ?? EN;
+  const locale = lang;
+  const text = (key: TextKey): string => own[key] ?? EN[key];
+  const t = (key: TextKey, values?: TextValues) => fill(text(key), values);
+  const self: Translator = {
+    lang,
+    locale,
+    t,
+    has: (key) => own[key] !== undefined,
+    number: (value, fractionDigits = 0) =>
+      new Intl.NumberFormat(locale, { minimumFractionDigits: fractionDigits, maximumFractionDigits: fractionDigits }).format(value),
+    count: (value) => numberInWords(value, { smallNumbers: text('numbers.small').split('|'), locale }),
+    chance: (probability) => {
+      const f = naturalFrequency(probability);
+      const frequency =
+        f.kind === 'less-than'
+          ? t('chance.lessThan', { n: self.number(f.n) })
+          : f.kind === 'one-in'
+            ? t('chance.oneIn', { n: self.number(f.n) })
+            : f.kind === 'in-ten'
+              ? t('chance.inTen', { k: f.k })
+              : t('chance.moreThanNine');
+      const p = percentText(probability);
+      const percent = p === '<0.1' ? t('chance.percentBelow', { p: self.number(0.1, 1) }) : t('chance.percent', { p: p.includes('.') ? self.number(Number(p), 1) : p });
+      return { frequency, percent };
+    },
+    place: (distanceKm, bearingDeg) => {
+      const where = placeFrom(distanceKm, bearingDeg);
+      if (where.kind === 'here') return t('place.here');
+      return t('place.away', { km: self.number(where.distanceKm), direction: self.compass(where.compass) });
+    },
+    compass: (point) => t(`compass.${point}` as TextKey),
+    date: (when) => new Intl.DateTimeFormat(locale, { dateStyle: 'long', timeZone: 'UTC' }).format(new Date(when)),
+  };
+  return self;
+}

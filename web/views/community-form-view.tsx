@@ -1,0 +1,102 @@
+import type { InputIssue } from '../../api/engine/errors.ts';
+import { SITE_CLASSES } from '../../api/study/site-class.ts';
+import type { CommunityForm } from '../data/study-edits.ts';
+import { PageShell } from '../layout/page-shell.tsx';
+import type { TextKey } from '../text/en.ts';
+import type { Translator } from '../text/translator.ts';
+import { FieldProblems } from './field-problems.tsx';
+
+export interface CommunityFormViewProps {
+  readonly tr: Translator;
+  readonly path: string;
+  readonly toolVersion: string;
+  readonly studyId: string;
+  readonly studyName: string;
+  /** Where the form posts. */
+  readonly action: string;
+  readonly heading: string;
+  readonly values: CommunityForm;
+  /** Problems by field name ("lat", "vs30"...), and those of the row or study as a whole. */
+  readonly fieldIssues: ReadonlyMap<string, readonly InputIssue[]>;
+  readonly otherIssues: readonly InputIssue[];
+}
+
+const TEXT_FIELDS = [
+  { name: 'id', type: 'text' },
+  { name: 'name', type: 'text' },
+  { name: 'lon', type: 'text', inputmode: 'decimal' },
+  { name: 'lat', type: 'text', inputmode: 'decimal' },
+  { name: 'vs30', type: 'text', inputmode: 'decimal' },
+] as const;
+
+const MORE_FIELDS = [
+  { name: 'population', type: 'text', inputmode: 'numeric' },
+  { name: 'elevationM', type: 'text', inputmode: 'decimal' },
+] as const;
+
+/** Add or edit one community; each problem is shown under its field (plain form post). */
+export function CommunityFormView(props: CommunityFormViewProps) {
+  const { tr, values } = props;
+  const problems = (name: string) => props.fieldIssues.get(name) ?? [];
+  const input = (f: { readonly name: keyof CommunityForm & string; readonly type: string; readonly inputmode?: 'decimal' | 'numeric' }) => {
+    const own = problems(f.name);
+    const problemId = `field-${f.name}-problem`;
+    return (
+      <div class={own.length > 0 ? 'field field-bad' : 'field'}>
+        <label for={`field-${f.name}`}>{tr.t(`editor.field.${f.name}` as TextKey)}</label>
+        <input
+          id={`field-${f.name}`}
+          name={f.name}
+          type={f.type}
+          value={String(values[f.name])}
+          inputmode={f.inputmode}
+          aria-invalid={own.length > 0 ? 'true' : undefined}
+          aria-describedby={own.length > 0 ? problemId : undefined}
+          autocomplete="off"
+        />
+        <FieldProblems id={problemId} issues={own} />
+      </div>
+    );
+  };
+  return (
+    <PageShell tr={tr} title={props.heading} path={props.path} toolVersion={props.toolVersion} study={{ id: props.studyId, name: props.studyName }} section="edit">
+      <h1>{props.heading}</h1>
+      <p>{tr.t('editor.intro')}</p>
+      {(props.otherIssues.length > 0 || props.fieldIssues.size > 0) && (
+        <p class="problem" role="alert">
+          {tr.t('editor.notSaved')}
+        </p>
+      )}
+      <FieldProblems id="form-problems" issues={props.otherIssues} describe={(i) => `${i.path}: ${i.message}`} />
+      <form method="post" action={props.action} class="community-form" novalidate>
+        {TEXT_FIELDS.map(input)}
+        <div class={problems('siteClass').length > 0 ? 'field field-bad' : 'field'}>
+          <label for="field-siteClass">{tr.t('editor.field.siteClass')}</label>
+          <select id="field-siteClass" name="siteClass" aria-describedby={problems('siteClass').length > 0 ? 'field-siteClass-problem' : undefined}>
+            <option value="" selected={values.siteClass === ''}>
+              {tr.t('editor.field.siteClassNone')}
+            </option>
+            {SITE_CLASSES.map((sc) => (
+              <option value={sc} selected={values.siteClass === sc}>
+                {sc}
+              </option>
+            ))}
+          </select>
+          <FieldProblems id="field-siteClass-problem" issues={problems('siteClass')} />
+        </div>
+        {MORE_FIELDS.map(input)}
+        <div class="field field-check">
+          <input id="field-coastal" name="coastal" type="checkbox" value="true" checked={values.coastal} />
+          <label for="field-coastal">{tr.t('editor.field.coastal')}</label>
+          <FieldProblems id="field-coastal-problem" issues={problems('coastal')} />
+        </div>
+        <p class="form-actions">
+          <button type="submit" class="button-primary">
+            {tr.t('editor.save')}
+          </button>{' '}
+          <a href={`/studies/${props.studyId}/edit`}>{tr.t('editor.cancel')}</a>
+        </p>
+      </form>
+    </PageShell>
+  );
+}

@@ -1,0 +1,259 @@
+import type { InputIssue } from '../../api/engine/errors.ts';
+import type { Study } from '../../api/engine/model.ts';
+import { issueFeature, issueLine } from '../data/study-edits.ts';
+import { PageShell } from '../layout/page-shell.tsx';
+import type { Translator } from '../text/translator.ts';
+import { FieldProblems } from './field-problems.tsx';
+
+/** An upload that did not validate: which form, its problems, and the text (for the line view). */
+export interface UploadProblem {
+  readonly upload: 'communities' | 'sources';
+  readonly issues: readonly InputIssue[];
+  readonly text?: string;
+}
+
+export interface EditorViewProps {
+  readonly tr: Translator;
+  readonly path: string;
+  readonly toolVersion: string;
+  readonly studyId: string;
+  readonly study: Study;
+  readonly saved?: boolean;
+  readonly problem?: UploadProblem;
+  /** Problems of a removal (e.g. the last community), shown at the top. */
+  readonly notice?: readonly InputIssue[];
+}
+
+/** Most lines of an uploaded CSV shown back with their problems. */
+const PREVIEW_LINES = 200;
+
+/** "Line 5, lat: expected a number ..." / "Feature 4 (vennick), dip: ..." / the path as it is. */
+export function describeIssue(tr: Translator, issue: InputIssue, featureIds: readonly (string | undefined)[] = []): string {
+  const line = issueLine(issue.path);
+  if (line !== undefined) {
+    const fieldName = issue.path.split(`[line ${line}]`)[1]?.replace(/^\./, '');
+    return tr.t('editor.problemAt', { where: `${tr.t('editor.line', { line })}${fieldName ? `, ${fieldName}` : ''}`, message: issue.message });
+  }
+  const feature = issueFeature(issue.path);
+  if (feature !== undefined) {
+    const id = featureIds[feature];
+    const rest = issue.path.replace(/^sources\.features\[\d+\]\.?/, '').replace(/^properties\./, '');
+    const where = `${tr.t('editor.feature', { n: feature + 1 })}${id ? ` (${id})` : ''}${rest ? `, ${rest}` : ''}`;
+    return tr.t('editor.problemAt', { where, message: issue.message });
+  }
+  return tr.t('editor.problemAt', { where: issue.path, message: issue.message });
+}
+
+/** The ids of the features of GeoJSON text, for naming them in problems; empty when it does not parse. */
+function featureIdsOf(text: string | undefined): (string | undefined)[] {
+  if (text === undefined) return [];
+  try {
+    const value = JSON.parse(text) as { features?: { properties?: { id?: unknown } }[] };
+    return (value.features ?? []).map((f) => (typeof f?.properties?.id === 'string' ? f.properties.id : undefined));
+  } catch {
+    return [];
+  }
+}
+
+/** The editor: communities (edit, add, remove), CSV and GeoJSON uploads with their problems inline. */
+export function EditorView(props: EditorViewProps) {
+  const { tr, study, studyId, problem } = props;
+  const csvProblem = problem?.upload === 'communities' ? problem : undefined;
+  const geoProblem = problem?.upload === 'sources' ? problem : undefined;
+  const featureIds = featureIdsOf(geoProblem?.text);
+  return (
+    <PageShell tr={tr} title={tr.t('editor.title', { name: study.name })} path={props.path} toolVersion={props.toolVersion} study={{ id: studyId, name: study.name }} section="edit">
+      <h1>{tr.t('editor.title', { name: study.name })}</h1>
+      <p>{tr.t('editor.intro')}</p>
+      {props.saved && (
+        <p class="notice" role="status">
+          {tr.t('editor.saved')}
+        </p>
+      )}
+      {(problem || (props.notice?.length ?? 0) > 0) && (
+        <p class="problem" role="alert">
+          {tr.t('editor.notSaved')}
+        </p>
+      )}
+      <FieldProblems id="editor-notice" issues={props.notice ?? []} describe={(i) => describeIssue(tr, i)} />
+
+      <section aria-labelledby="communities-heading">
+        <h2 id="communities-heading">{tr.t('editor.communities')}</h2>
+        <p>
+          <a class="button" href={`/studies/${studyId}/edit/new-community`}>
+            {tr.t('editor.add')}
+          </a>
+        </p>
+        <table class="data-table editor-table">
+          <caption>{tr.t('editor.communitiesCaption')}</caption>
+          <thead>
+            <tr>
+              <th scope="col">{tr.t('editor.field.name')}</th>
+              <th scope="col">{tr.t('editor.col.id')}</th>
+              <th scope="col" class="numeric">
+                {tr.t('editor.col.lon')}
+              </th>
+              <th scope="col" class="numeric">
+                {tr.t('editor.col.lat')}
+              </th>
+              <th scope="col">{tr.t('editor.col.site')}</th>
+              <th scope="col" class="numeric">
+                {tr.t('editor.col.people')}
+              </th>
+              <th scope="col">{tr.t('editor.col.coastal')}</th>
+              <th scope="col">
+                {tr.t('editor.col.actions')}
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {study.communities.map((c) => (
+              <tr data-community={c.id}>
+                <th scope="row">{c.name}</th>
+                <td>
+                  <code>{c.id}</code>
+                </td>
+                <td class="numeric">{String(c.lon)}</td>
+                <td class="numeric">{String(c.lat)}</td>
+                <td>{c.vs30Basis === 'measured' ? `${c.vs30} m/s` : `${c.siteClass} (${c.vs30} m/s)`}</td>
+                <td class="numeric">{c.population === undefined ? '' : tr.number(c.population)}</td>
+                <td>{c.coastal ? tr.t('editor.coastalYes') : ''}</td>
+                <td class="row-actions">
+                  <a href={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}`}>{tr.t('editor.edit', { name: c.name })}</a>
+                  <form method="post" action={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}/remove`} class="inline-form">
+                    <button type="submit" class="button-quiet">
+                      {tr.t('editor.remove', { name: c.name })}
+                    </button>
+                  </form>
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </section>
+
+      <section aria-labelledby="upload-communities-heading" class="upload">
+        <h2 id="upload-communities-heading">{tr.t('editor.upload.communities')}</h2>
+        <form method="post" action={`/studies/${studyId}/edit/communities-csv#upload-communities-heading`} enctype="multipart/form-data">
+          <div class="field">
+            <label for="communities-file">{tr.t('editor.upload.file')}</label>
+            <input
+              id="communities-file"
+              name="file"
+              type="file"
+              accept=".csv,text/csv"
+              aria-describedby={csvProblem ? 'communities-help communities-problems' : 'communities-help'}
+              aria-invalid={csvProblem ? 'true' : undefined}
+            />
+            <p id="communities-help" class="help">
+              {tr.t('editor.upload.communitiesHelp')}
+            </p>
+            {csvProblem && (
+              <div class="upload-problems" data-upload="communities">
+                <p class="problem-title">{tr.t('editor.problems')}</p>
+                <FieldProblems id="communities-problems" issues={csvProblem.issues} describe={(i) => describeIssue(tr, i)} />
+                {csvProblem.text !== undefined && <CsvLines tr={tr} text={csvProblem.text} issues={csvProblem.issues} />}
+              </div>
+            )}
+          </div>
+          <button type="submit">{tr.t('editor.upload.button')}</button>
+        </form>
+      </section>
+
+      <section aria-labelledby="sources-heading">
+        <h2 id="sources-heading">{tr.t('editor.sources')}</h2>
+        <table class="data-table">
+          <caption>{tr.t('editor.sourcesCaption')}</caption>
+          <thead>
+            <tr>
+              <th scope="col">{tr.t('editor.col.source')}</th>
+              <th scope="col">{tr.t('editor.col.id')}</th>
+              <th scope="col">{tr.t('editor.col.kind')}</th>
+              <th scope="col">{tr.t('editor.col.setting')}</th>
+            </tr>
+          </thead>
+          <tbody>
+            {study.sources.map((s) => (
+              <tr data-source={s.id}>
+                <th scope="row">{s.name}</th>
+                <td>
+                  <code>{s.id}</code>
+                </td>
+                <td>{tr.t(`editor.kind.${s.kind}`)}</td>
+                <td>{s.setting}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </section>
+
+      <section aria-labelledby="upload-sources-heading" class="upload">
+        <h2 id="upload-sources-heading">{tr.t('editor.upload.sources')}</h2>
+        <form method="post" action={`/studies/${studyId}/edit/sources-geojson#upload-sources-heading`} enctype="multipart/form-data">
+          <div class="field">
+            <label for="sources-file">{tr.t('editor.upload.file')}</label>
+            <input
+              id="sources-file"
+              name="file"
+              type="file"
+              accept=".geojson,.json,application/geo+json,application/json"
+              aria-describedby={geoProblem ? 'sources-help sources-problems' : 'sources-help'}
+              aria-invalid={geoProblem ? 'true' : undefined}
+            />
+            <p id="sources-help" class="help">
+              {tr.t('editor.upload.sourcesHelp')}
+            </p>
+            {geoProblem && (
+              <div class="upload-problems" data-upload="sources">
+                <p class="problem-title">{tr.t('editor.problems')}</p>
+                <FieldProblems id="sources-problems" issues={geoProblem.issues} describe={(i) => describeIssue(tr, i, featureIds)} />
+              </div>
+            )}
+          </div>
+          <button type="submit">{tr.t('editor.upload.button')}</button>
+        </form>
+      </section>
+    </PageShell>
+  );
+}
+
+/** The uploaded CSV's lines, each bad line with its problems beside it. */
+function CsvLines(props: { readonly tr: Translator; readonly text: string; readonly issues: readonly InputIssue[] }) {
+  const { tr } = props;
+  const lines = props.text.replace(/^\uFEFF/, '').split(/\r\n|\r|\n/).slice(0, PREVIEW_LINES);
+  const byLine = new Map<number, InputIssue[]>();
+  for (const issue of props.issues) {
+    const line = issueLine(issue.path);
+    if (line !== undefined) byLine.set(line, [...(byLine.get(line) ?? []), issue]);
+  }
+  return (
+    <table class="data-table csv-lines">
+      <caption>{tr.t('editor.csvPreview')}</caption>
+      <thead>
+        <tr>
+          <th scope="col" class="numeric">
+            {tr.t('editor.col.line')}
+          </th>
+          <th scope="col">{tr.t('editor.col.text')}</th>
+          <th scope="col">{tr.t('editor.col.problem')}</th>
+        </tr>
+      </thead>
+      <tbody>
+        {lines.map((text, i) => {
+          const problems = byLine.get(i + 1) ?? [];
+          return (
+            <tr class={problems.length > 0 ? 'line-bad' : undefined} data-line={i + 1}>
+              <th scope="row" class="numeric">
+                {i + 1}
+              </th>
+              <td>
+                <code>{text}</code>
+              </td>
+              <td>{problems.map((p) => p.path.split(`[line ${i + 1}]`)[1]?.replace(/^\./, '') + ': ' + p.message).join('; ')}</td>
+            </tr>
+          );
+        })}
+      </tbody>
+    </table>
+  );
+}

@@ -1,0 +1,73 @@
+import type { CommunityFeltHistory, FeltEstimate } from '../../api/engine/catalog/felt-history.ts';
+import type { Translator } from '../text/translator.ts';
+
+export interface FeltListProps {
+  readonly tr: Translator;
+  readonly studyId: string;
+  readonly communityName: string;
+  /** Undefined when the study has no catalog. */
+  readonly felt?: { readonly history: CommunityFeltHistory; readonly eventCount: number };
+  /** Rows shown, strongest first. */
+  readonly limit: number;
+  readonly headingLevel: 2 | 3;
+  readonly compact?: boolean;
+  /** The study has a catalog, too large for this page. */
+  readonly tooMany?: boolean;
+}
+
+/** The strongest of the events likely felt, strongest first, then the most recent. */
+export function strongestFelt(history: CommunityFeltHistory, limit: number): FeltEstimate[] {
+  return [...history.felt].sort((a, b) => b.mmi - a.mmi || b.timeMs - a.timeMs).slice(0, limit);
+}
+
+/** "Earthquakes people here have likely felt" (feltHistory, api/engine/catalog/felt-history.ts). */
+export function FeltList(props: FeltListProps) {
+  const { tr, felt } = props;
+  const H = props.headingLevel === 2 ? 'h2' : 'h3';
+  return (
+    <section aria-labelledby="felt-heading" class="felt">
+      <H id="felt-heading">{tr.t('community.felt')}</H>
+      {props.tooMany ? (
+        <p>{tr.t('community.feltTooMany')}</p>
+      ) : !felt ? (
+        <p>
+          {tr.t('community.feltNoCatalog')} {!props.compact && <a href={`/studies/${props.studyId}/catalog`}>{tr.t('community.feltAttach')}</a>}
+        </p>
+      ) : felt.history.felt.length === 0 ? (
+        <p>{tr.t('community.feltNone', { events: tr.number(felt.eventCount) })}</p>
+      ) : (
+        <>
+          {!props.compact && <p>{tr.t('community.feltIntro')}</p>}
+          <p data-felt={felt.history.felt.length} data-strongly-felt={felt.history.stronglyFelt.length}>
+            {tr.t('community.feltCounts', { felt: tr.count(felt.history.felt.length), strong: tr.count(felt.history.stronglyFelt.length) })}
+          </p>
+          <table class="data-table felt-table">
+            <caption>{tr.t('community.feltCaption', { name: props.communityName })}</caption>
+            <thead>
+              <tr>
+                <th scope="col">{tr.t('community.feltCol.date')}</th>
+                <th scope="col" class="numeric">
+                  {tr.t('community.feltCol.magnitude')}
+                </th>
+                <th scope="col">{tr.t('community.feltCol.where')}</th>
+                <th scope="col">{tr.t('community.feltCol.mmi')}</th>
+              </tr>
+            </thead>
+            <tbody>
+              {strongestFelt(felt.history, props.limit).map((e) => (
+                <tr data-event={e.eventId}>
+                  <th scope="row">{tr.date(e.timeMs)}</th>
+                  <td class="numeric">{`M ${tr.number(e.magnitude, 1)}`}</td>
+                  <td>{tr.place(e.distanceKm, e.bearingDeg)}</td>
+                  <td>
+                    {tr.t('mmi.label', { roman: e.roman })} · {tr.t(`mmi.${Math.min(10, Math.max(1, Math.floor(e.mmi)))}.name` as 'mmi.1.name')}
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </>
+      )}
+    </section>
+  );
+}

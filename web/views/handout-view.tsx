@@ -1,0 +1,132 @@
+import type { CommunityFeltHistory } from '../../api/engine/catalog/felt-history.ts';
+import type { ScreeningBandId } from '../../api/engine/intensity/screening-band.ts';
+import type { Provenance } from '../../api/engine/results.ts';
+import type { CommunityPageData } from '../data/community-data.ts';
+import { BandSwatch } from '../layout/band-swatch.tsx';
+import { LANGUAGES, type Translator } from '../text/translator.ts';
+import type { TextKey } from '../text/en.ts';
+import { FeltList } from './felt-list.tsx';
+import { Headline, ProvenanceLine, ShakingLevels } from './community-view.tsx';
+import { SafetyAdvice } from './safety-advice.tsx';
+
+export interface HandoutViewProps {
+  readonly tr: Translator;
+  readonly path: string;
+  readonly studyId: string;
+  readonly data: CommunityPageData;
+  readonly provenance: Provenance;
+  /** When the handout was made (ISO), printed on it. */
+  readonly printedAt: string;
+  readonly felt?: { readonly history: CommunityFeltHistory; readonly eventCount: number };
+}
+
+/**
+ * The printable handout: one or two pages of A4 or Letter, readable in greyscale. The caution
+ * and the provenance sit in a table footer that Chromium repeats at the foot of every printed
+ * page (a <tfoot> of a table split across pages; CSS 2.1 section 17.2, display
+ * table-footer-group). Boxes of advice are kept whole on one page (break-inside: avoid).
+ */
+export function HandoutView(props: HandoutViewProps) {
+  const { tr, data } = props;
+  const { community, result } = data;
+  const bandId = result.band.id as ScreeningBandId;
+  const top = data.sources
+    .filter((s) => s.sourceId !== null)
+    .slice(0, 3)
+    .map((s) => `${s.name} (${tr.t('chance.percent', { p: tr.number(Math.round(s.share * 100)) })})`)
+    .join(', ');
+  const title = tr.t('handout.title', { name: community.name });
+  return (
+    <html lang={tr.lang}>
+      <head>
+        <meta charset="utf-8" />
+        <meta name="viewport" content="width=device-width, initial-scale=1" />
+        <title>{`${title} · ${tr.t('site.name')}`}</title>
+        {/* The service answers with Referrer-Policy: no-referrer, under which a browser sends
+            "Origin: null" with form posts, and the same-origin check refuses them; within this
+            origin the pages need their own origin sent. */}
+        <meta name="referrer" content="same-origin" />
+        <link rel="icon" href="data:," />
+        <link rel="stylesheet" href="/static/tremora.css" />
+        <link rel="stylesheet" href="/static/handout.css" />
+        <script src="/static/tremora.js" defer></script>
+      </head>
+      <body class="handout-page">
+        <a class="skip-link" href="#main">
+          {tr.t('site.skip')}
+        </a>
+        <header class="handout-tools no-print">
+          <nav aria-label={tr.t('nav.main')}>
+            <a href={`/studies/${props.studyId}/communities/${community.id}`}>{tr.t('handout.back')}</a>
+          </nav>
+          <p>{tr.t('handout.printHint')}</p>
+          <form class="lang-switch" action="/language" method="get">
+            <label for="lang-select">{tr.t('lang.label')}</label>
+            <select id="lang-select" name="lang">
+              {LANGUAGES.map((l) => (
+                <option value={l.code} lang={l.code} selected={l.code === tr.lang}>
+                  {l.name}
+                </option>
+              ))}
+            </select>
+            <input type="hidden" name="back" value={props.path} />
+            <button type="submit">{tr.t('lang.change')}</button>
+          </form>
+          <p data-print-button="true" data-print-label={tr.t('handout.print')} class="print-slot"></p>
+        </header>
+        <table class="handout-frame" role="presentation">
+          <tbody>
+            <tr>
+              <td>
+                <main id="main" tabindex={-1} class="handout">
+                  <h1>{title}</h1>
+                  <p class="band-line">
+                    {tr.t('band.label')}: <BandSwatch tr={tr} bandId={bandId} /> — {tr.t(`band.${bandId}.meaning` as TextKey)}
+                  </p>
+                  <Headline tr={tr} data={data} name={community.name} />
+                  <section aria-labelledby="h-levels">
+                    <h2 id="h-levels">{tr.t('community.levels')}</h2>
+                    <ShakingLevels tr={tr} data={data} headingLevel={2} compact={true} />
+                    {top && <p>{tr.t('handout.topSources', { sources: top })}</p>}
+                  </section>
+                  {result.nearestFaults.length > 0 && (
+                    <section aria-labelledby="h-faults">
+                      <h2 id="h-faults">{tr.t('community.faults')}</h2>
+                      <ul class="faults">
+                        {result.nearestFaults.map((f) => (
+                          <li>
+                            <strong>{f.name}</strong>: {tr.place(f.distanceKm, f.bearingDeg)}
+                          </li>
+                        ))}
+                      </ul>
+                    </section>
+                  )}
+                  {props.felt && props.felt.history.felt.length > 0 && (
+                    <FeltList tr={tr} studyId={props.studyId} communityName={community.name} felt={props.felt} limit={3} headingLevel={2} compact={true} />
+                  )}
+                  <section aria-labelledby="h-todo" class="handout-todo">
+                    <h2 id="h-todo">{tr.t('community.todo')}</h2>
+                    <SafetyAdvice tr={tr} coastal={community.coastal} headingLevel={3} />
+                  </section>
+                </main>
+              </td>
+            </tr>
+          </tbody>
+          <tfoot>
+            <tr>
+              <td>
+                <div class="handout-footer">
+                  <p class="handout-caution">
+                    <strong>{tr.t('caution.short')}</strong>
+                  </p>
+                  <ProvenanceLine tr={tr} provenance={props.provenance} />
+                  <p class="printed">{tr.t('provenance.printed', { date: tr.date(props.printedAt) })}</p>
+                </div>
+              </td>
+            </tr>
+          </tfoot>
+        </table>
+      </body>
+    </html>
+  );
+}

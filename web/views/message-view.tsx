@@ -1,0 +1,30 @@
+import { PageShell } from '../layout/page-shell.tsx';
+import type { Translator } from '../text/translator.ts';
+
+/** A page with one message: not found, or a study that no longer validates. */
+export function MessageView(props: {
+  readonly tr: Translator;
+  readonly path: string;
+  readonly toolVersion: string;
+  readonly title: string;
+  readonly text: string;
+  readonly details?: readonly string[];
+}) {
+  const { tr } = props;
+  return (
+    <PageShell tr={tr} title={props.title} path={props.path} toolVersion={props.toolVersion}>
+      <h1>{props.title}</h1>
+      <p>{props.text}</p>
+      {props.details && props.details.length > 0 && (
+        <ul class="problems">
+          {props.details.map((d) => (
+            <li>{d}</li>
+          ))}
+        </ul>
+      )}
+      <p>
+        <a href="/">{tr.t('error.home')}</a>
+      </p>
+    </PageShell>
+  );
+}

@@ -1,0 +1,45 @@
+import type { RunRecord } from '../../api/store/index.ts';
+import { PageShell } from '../layout/page-shell.tsx';
+import type { Translator } from '../text/translator.ts';
+
+/**
+ * A run in progress. Without script the reader refreshes the page; with script
+ * (static/tremora.js) the bar follows GET /api/runs/{id} and the page moves on when it is done.
+ */
+export function RunView(props: { readonly tr: Translator; readonly path: string; readonly toolVersion: string; readonly studyId: string; readonly studyName: string; readonly run: RunRecord }) {
+  const { tr, run, studyId } = props;
+  const unfinished = run.status === 'queued' || run.status === 'running';
+  return (
+    <PageShell tr={tr} title={tr.t('run.title', { name: props.studyName })} path={props.path} toolVersion={props.toolVersion} study={{ id: studyId, name: props.studyName }}>
+      <h1>{tr.t('run.title', { name: props.studyName })}</h1>
+      <div class="run-status" data-run={run.id} data-status={run.status} data-done-url={`/studies/${studyId}`}>
+        {unfinished ? (
+          <>
+            <p class="run-state" aria-live="polite">
+              {tr.t(run.status === 'queued' ? 'run.queued' : 'run.running')}
+            </p>
+            <p>
+              <label for="run-progress">{tr.t('run.progress')}</label>{' '}
+              <progress id="run-progress" max={1} value={run.progress}>
+                {Math.round(run.progress * 100)}%
+              </progress>{' '}
+              <span class="run-percent">{Math.round(run.progress * 100)}%</span>
+            </p>
+            <p class="run-refresh">
+              <a href={props.path}>{tr.t('run.refresh')}</a>
+            </p>
+          </>
+        ) : run.status === 'done' ? (
+          <p>
+            {tr.t('run.done')} <a href={`/studies/${studyId}`}>{tr.t('run.see')}</a>
+          </p>
+        ) : (
+          <p class="problem">{tr.t('run.failed', { error: run.error ?? run.status })}</p>
+        )}
+      </div>
+      <p>
+        <a href={`/studies/${studyId}`}>{tr.t('run.back')}</a>
+      </p>
+    </PageShell>
+  );
+}

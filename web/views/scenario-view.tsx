@@ -1,0 +1,149 @@
+import type { InputIssue } from '../../api/engine/errors.ts';
+import type { Study } from '../../api/engine/model.ts';
+import type { ScenarioResult } from '../../api/engine/scenario/index.ts';
+import { PageShell } from '../layout/page-shell.tsx';
+import type { MapFrame } from '../maps/map-frame.ts';
+import { ScenarioLayer, ScenarioLegend } from '../maps/scenario-layer.tsx';
+import { StudyMap } from '../maps/study-map.tsx';
+import type { Translator } from '../text/translator.ts';
+import { FieldProblems } from './field-problems.tsx';
+
+export interface ScenarioViewProps {
+  readonly tr: Translator;
+  readonly path: string;
+  readonly toolVersion: string;
+  readonly studyId: string;
+  readonly study: Study;
+  readonly sourceId: string;
+  readonly magnitude: string;
+  readonly issues: readonly InputIssue[];
+  readonly result?: ScenarioResult;
+  readonly frame?: MapFrame;
+}
+
+/** Pick a source and magnitude (a plain form post), then the map of shaking and each community's intensity. */
+export function ScenarioView(props: ScenarioViewProps) {
+  const { tr, study, studyId, result } = props;
+  const issuesAt = (path: string) => props.issues.filter((i) => i.path === path);
+  const others = props.issues.filter((i) => i.path !== 'sourceId' && i.path !== 'magnitude');
+  return (
+    <PageShell
+      tr={tr}
+      title={tr.t('scenario.title', { name: study.name })}
+      path={props.path}
+      toolVersion={props.toolVersion}
+      study={{ id: studyId, name: study.name }}
+      section="scenario"
+      showsNumbers={result !== undefined}
+    >
+      <h1>{tr.t('scenario.title', { name: study.name })}</h1>
+      <p>{tr.t('scenario.intro')}</p>
+      <form method="post" action={`/studies/${studyId}/scenario`} class="scenario-form" novalidate>
+        <div class="field">
+          <label for="scenario-source">{tr.t('scenario.source')}</label>
+          <select id="scenario-source" name="sourceId" aria-describedby={issuesAt('sourceId').length ? 'scenario-source-problem' : undefined}>
+            {study.sources.map((s) => (
+              <option value={s.id} selected={s.id === props.sourceId}>
+                {s.name}
+              </option>
+            ))}
+          </select>
+          <FieldProblems id="scenario-source-problem" issues={issuesAt('sourceId')} />
+        </div>
+        <div class="field">
+          <label for="scenario-magnitude">{tr.t('scenario.magnitude')}</label>
+          <input
+            id="scenario-magnitude"
+            name="magnitude"
+            type="number"
+            min="3"
+            max="9.6"
+            step="0.1"
+            value={props.magnitude}
+            inputmode="decimal"
+            aria-invalid={issuesAt('magnitude').length > 0 ? 'true' : undefined}
+            aria-describedby={issuesAt('magnitude').length ? 'scenario-magnitude-problem' : undefined}
+          />
+          <FieldProblems id="scenario-magnitude-problem" issues={issuesAt('magnitude')} />
+        </div>
+        <FieldProblems id="scenario-other-problems" issues={others} />
+        <button type="submit" class="button-primary">
+          {tr.t('scenario.run')}
+        </button>
+      </form>
+      {result && props.frame && (
+        <>
+          <section aria-labelledby="scenario-map-heading">
+            <h2 id="scenario-map-heading">{tr.t('scenario.map')}</h2>
+            <p>
+              {result.sourceName}, M {tr.number(result.magnitude, 1)}. {tr.t('scenario.position', { position: tr.t('scenario.positionClosest') })}
+            </p>
+            <figure class="map-figure">
+              <StudyMap
+                tr={tr}
+                study={study}
+                frame={props.frame}
+                idPrefix="scenario-map"
+                showZones={false}
+                labelSuffix={new Map(result.communities.map((c) => [c.communityId, ` · ${c.mmi.romanMedian}`]))}
+                hazardLayer={result.grid ? <ScenarioLayer grid={result.grid} frame={props.frame} /> : undefined}
+              />
+              <figcaption>
+                <ScenarioLegend tr={tr} />
+                {result.grid && <p class="legend-note">{tr.t('scenario.gridNote', { vs30: tr.number(result.grid.vs30) })}</p>}
+              </figcaption>
+            </figure>
+          </section>
+          <section aria-labelledby="scenario-table-heading">
+            <h2 id="scenario-table-heading">{tr.t('scenario.table')}</h2>
+            <table class="data-table scenario-table">
+              <caption>{tr.t('scenario.table')}</caption>
+              <thead>
+                <tr>
+                  <th scope="col">{tr.t('scenario.col.community')}</th>
+                  <th scope="col" class="numeric">
+                    {tr.t('scenario.col.distance')}
+                  </th>
+                  <th scope="col">{tr.t('scenario.col.median')}</th>
+                  <th scope="col">{tr.t('scenario.col.high')}</th>
+                  <th scope="col" class="numeric">
+                    {tr.t('scenario.col.pga')}
+                  </th>
+                </tr>
+              </thead>
+              <tbody>
+                {[...result.communities]
+                  .sort((a, b) => b.mmi.median - a.mmi.median)
+                  .map((c) => (
+                    <tr data-community={c.communityId} data-mmi={c.mmi.median}>
+                      <th scope="row">
+                        <a href={`/studies/${studyId}/communities/${c.communityId}`}>{c.name}</a>
+                      </th>
+                      <td class="numeric">{tr.number(c.rjbKm)}</td>
+                      <td>
+                        {tr.t('mmi.label', { roman: c.mmi.romanMedian })} · {tr.t(`mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.median)))}.name` as 'mmi.1.name')}
+                      </td>
+                      <td>
+                        {tr.t('mmi.label', { roman: c.mmi.romanP84 })} · {tr.t(`mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.p84)))}.name` as 'mmi.1.name')}
+                      </td>
+                      <td class="numeric">{tr.number(c.motions.PGA?.median ?? 0, 3)}</td>
+                    </tr>
+                  ))}
+              </tbody>
+            </table>
+            {result.warnings.length > 0 && (
+              <details>
+                <summary>{tr.t('scenario.warnings')}</summary>
+                <ul>
+                  {result.warnings.map((w) => (
+                    <li>{w}</li>
+                  ))}
+                </ul>
+              </details>
+            )}
+          </section>
+        </>
+      )}
+    </PageShell>
+  );
+}
