@@ -177,6 +177,19 @@ describe('loadStudy: every problem at once, each with its path', () => {
     ]);
   });
 
+  it('says what was received when a value has the wrong type', () => {
+    const study = validStudy();
+    study.groundMotion.crustal = [{ model: 5, weight: 1 }];
+    study.settings = { measures: [5], levels: { PGA: 'x' } };
+    expect(lines(issuesOf(study))).toEqual([
+      'settings.measures[0]: expected a measure name such as "PGA" or "SA(0.2)", got 5',
+      'settings.levels.PGA: expected a list of levels, got "x"',
+      'groundMotion.crustal[0].model: expected a model name, got 5',
+    ]);
+    delete study.settings;
+    expect(lines(issuesOf(study))).toEqual(['groundMotion.crustal[0].model: expected a model name, got 5']);
+  });
+
   it('refuses a non-object study and a missing FeatureCollection', () => {
     expect(lines(issuesOf([1, 2]))).toEqual(['(study): expected a study object with name, communities, sources, groundMotion, settings, outline, got a list of 2']);
     const study = validStudy();
