@@ -3,6 +3,7 @@ import { fileURLToPath } from 'node:url';
 import { catalogVerb, CATALOG_USAGE } from './cli/catalog.ts';
 import { checkVerb, CHECK_USAGE } from './cli/check.ts';
 import { StudyRejected } from './cli/load.ts';
+import { mapVerb, MAP_USAGE } from './cli/map.ts';
 import { motionVerb, MOTION_USAGE } from './cli/motion.ts';
 import { scenarioVerb, SCENARIO_USAGE } from './cli/scenario.ts';
 import { screenVerb, SCREEN_USAGE } from './cli/screen.ts';
@@ -18,6 +19,7 @@ const VERBS: Readonly<Record<string, Verb>> = {
   screen: { usage: SCREEN_USAGE, run: screenVerb },
   check: { usage: CHECK_USAGE, run: checkVerb },
   scenario: { usage: SCENARIO_USAGE, run: scenarioVerb },
+  map: { usage: MAP_USAGE, run: mapVerb },
   motion: { usage: MOTION_USAGE, run: motionVerb },
   catalog: { usage: CATALOG_USAGE, run: catalogVerb },
 };

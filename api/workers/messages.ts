@@ -1,5 +1,8 @@
 import type { InputIssue } from '../engine/errors.ts';
+import type { RuptureTable } from '../engine/hazard/rupture-table.ts';
+import type { HazardMapOptions, MapPoint } from '../engine/map/hazard-map.ts';
 import type { Study } from '../engine/model.ts';
+import type { ScreeningPath } from '../engine/screening-plan.ts';
 import type { Provenance } from '../engine/results.ts';
 import type { ScenarioRequest } from '../engine/scenario/index.ts';
 
@@ -13,7 +16,50 @@ export type WorkerTask =
   /** Count a study's ruptures, for the work budget, without screening it. */
   | { readonly kind: 'measure'; readonly study: Study }
   /** One deterministic scenario (engine/scenario), as JSON text. */
-  | { readonly kind: 'scenario'; readonly study: Study; readonly request: ScenarioRequest };
+  | { readonly kind: 'scenario'; readonly study: Study; readonly request: ScenarioRequest }
+  /** A study's ruptures laid out as a table on shared memory, for the parallel runners to hand out. */
+  | { readonly kind: 'rupture-table'; readonly study: Study }
+  /**
+   * Some communities of a study on the fast path, from the rupture table the runner built once
+   * (parallel-screen.ts); `planKey` names the run, so a thread builds its plan once per run.
+   */
+  | {
+      readonly kind: 'screen-communities';
+      readonly planKey: string;
+      readonly study: Study;
+      readonly table: RuptureTable;
+      readonly indices: readonly number[];
+      /** 'reference' runs the plain sum instead (the thread then discretises the study itself): for checking the fast path. */
+      readonly path?: ScreeningPath;
+    }
+  /** Points firstIndex .. firstIndex + count − 1 of a hazard map (parallel-map.ts). */
+  | {
+      readonly kind: 'map-points';
+      readonly planKey: string;
+      readonly study: Study;
+      readonly table: RuptureTable;
+      readonly map: MapRequest;
+      readonly firstIndex: number;
+      readonly count: number;
+    };
+
+/** What a map is of, as it crosses to a thread (the models are the registry's there). */
+export type MapRequest = Omit<HazardMapOptions, 'models' | 'table'>;
+
+export interface RuptureTableOutput {
+  readonly table: RuptureTable;
+}
+
+export interface ScreenCommunitiesOutput {
+  /** The communities' results as a JSON array, in the order asked for (text: cheap to pass on unparsed). */
+  readonly communitiesJson: string;
+}
+
+export interface MapPointsOutput {
+  readonly points: readonly MapPoint[];
+  /** Per-model validity counts over these points. */
+  readonly validity: readonly (readonly [model: string, counts: { outside: number; evaluated: number; firstNote: string }])[];
+}
 
 export interface ScreenOutput {
   /** The StudyResult with its provenance, serialised in the worker to spare the service thread. */
@@ -33,6 +79,9 @@ export interface TaskOutputs {
   readonly screen: ScreenOutput;
   readonly measure: MeasureOutput;
   readonly scenario: ScenarioOutput;
+  readonly 'rupture-table': RuptureTableOutput;
+  readonly 'screen-communities': ScreenCommunitiesOutput;
+  readonly 'map-points': MapPointsOutput;
 }
 
 export type TaskKind = WorkerTask['kind'];

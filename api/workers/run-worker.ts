@@ -6,6 +6,9 @@ import { discretiseStudy } from '../engine/ruptures/discretise.ts';
 import { runScenario } from '../engine/scenario/index.ts';
 import { screenStudy } from '../engine/screen-study.ts';
 import type { TaskMessage, TaskOutputs, WorkerReply, WorkerTask } from './messages.ts';
+import { mapPointsTask, screenCommunitiesTask, type ChunkEvents } from './parallel-tasks.ts';
+import { shareTable } from './shared-table.ts';
+import { ruptureTable } from '../engine/hazard/rupture-table.ts';
 import { serialiseError } from './task-errors.ts';
 
 /**
@@ -49,7 +52,27 @@ function perform(message: TaskMessage): TaskOutputs[WorkerTask['kind']] {
       return { ruptures: discretiseStudy(task.study).ruptures.length };
     case 'scenario':
       return { resultJson: JSON.stringify(runScenario(task.study, modelCatalog, task.request)) };
+    case 'rupture-table':
+      return { table: shareTable(ruptureTable(discretiseStudy(task.study).ruptures)) };
+    case 'screen-communities':
+      return screenCommunitiesTask(task, chunkEvents(id, stop));
+    case 'map-points':
+      return mapPointsTask(task, chunkEvents(id, stop));
   }
+}
+
+/** A chunk's stop flag and progress, posted like a screening's (at most every PROGRESS_STEP). */
+function chunkEvents(id: number, stop: Int32Array): ChunkEvents {
+  let posted = 0;
+  return {
+    shouldStop: () => Atomics.load(stop, 0) === 1,
+    onProgress: (shareDone) => {
+      if (shareDone - posted >= PROGRESS_STEP || (shareDone >= 1 && posted < 1)) {
+        posted = shareDone;
+        reply({ type: 'progress', id, shareDone });
+      }
+    },
+  };
 }
 
 port.on('message', (message: TaskMessage) => {

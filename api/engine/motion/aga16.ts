@@ -47,9 +47,10 @@ import {
   AGA16_SA,
   type Aga16Row,
 } from './aga16-coefficients.ts';
+import { prepareAga16 } from './aga16-prepared.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel, ValidityRange } from './types.ts';
+import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, RuptureContext, ValidityRange } from './types.ts';
 import { validityNotes } from './validity.ts';
 
 const NAME = 'AGA16';
@@ -205,4 +206,5 @@ export const AGA16: GroundMotionModel = Object.freeze({
       predictRow(AGA16_SA[i] as Aga16Row, scenario, input.vs30, pga1000G, notes),
     );
   },
+  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion => prepareAga16(ruptures, measure),
 });

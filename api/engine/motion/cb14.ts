@@ -49,9 +49,10 @@
 import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
 import { toRadians } from '../units.ts';
 import { CB14_CONSTANTS as K, CB14_PGA, CB14_PGV, CB14_SA, type Cb14Row } from './cb14-coefficients.ts';
+import { prepareCb14 } from './cb14-prepared.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel, ValidityRange } from './types.ts';
+import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, RuptureContext, ValidityRange } from './types.ts';
 import { validityNotes } from './validity.ts';
 
 const NAME = 'CB14';
@@ -177,12 +178,12 @@ export function cb14LnMedianUnfloored(row: Cb14Row, s: Cb14Scenario, vs30: numbe
 }
 
 /** Vs30 of the paper's reference rock, m/s. */
-const ROCK_VS30 = 1100;
+export const CB14_ROCK_VS30 = 1100;
 
 /** A1100: median PGA (g) of the event on reference rock (Vs30 = 1100 m/s, its default Z2.5). */
 export function cb14A1100G(s: Cb14Scenario): number {
   // On rock above k1 the site term does not depend on A1100, so any value serves here.
-  return Math.exp(cb14LnMedianUnfloored(CB14_PGA, s, ROCK_VS30, cb14DefaultZ2p5Km(ROCK_VS30), 0));
+  return Math.exp(cb14LnMedianUnfloored(CB14_PGA, s, CB14_ROCK_VS30, cb14DefaultZ2p5Km(CB14_ROCK_VS30), 0));
 }
 
 /** τ, φ and σ (ln units) of a row, with the nonlinear-site correction for Vs30 (m/s) below k1. */
@@ -206,7 +207,8 @@ export function cb14Sigma(row: Cb14Row, m: number, vs30: number, a1100G: number)
   return { tau, phi, sigma: Math.hypot(tau, phi) };
 }
 
-const MAGNITUDE_RANGE: Readonly<Record<Cb14Mechanism, readonly [number, number]>> = Object.freeze({
+/** Magnitude validity by mechanism (the paper's ranges, from memory). */
+export const CB14_MAGNITUDE_RANGE: Readonly<Record<Cb14Mechanism, readonly [number, number]>> = Object.freeze({
   'strike-slip': [3.3, 8.5],
   reverse: [3.3, 8.0],
   normal: [3.3, 7.5],
@@ -252,7 +254,7 @@ function scenarioOf(input: GmmInput): Cb14Scenario {
 }
 
 function notesOf(input: GmmInput, s: Cb14Scenario): string[] {
-  const notes = validityNotes(NAME, { ...CB14_VALIDITY, magnitude: MAGNITUDE_RANGE[s.mechanism] }, input, s.rrupKm);
+  const notes = validityNotes(NAME, { ...CB14_VALIDITY, magnitude: CB14_MAGNITUDE_RANGE[s.mechanism] }, input, s.rrupKm);
   const outside = (label: string, value: number, min: number, max: number, unit: string): void => {
     if (value < min || value > max) notes.push(`${NAME}: ${label} ${Math.round(value * 100) / 100}${unit} is outside its range ${min}–${max}${unit}`);
   };
@@ -305,4 +307,5 @@ export const cb14: GroundMotionModel = Object.freeze({
   hasPgv: true,
   validity: CB14_VALIDITY,
   predict: (input: GmmInput, measure: Measure): GmmPrediction => predictCb14(input, measure),
+  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion => prepareCb14(ruptures, measure),
 });

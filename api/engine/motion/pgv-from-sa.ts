@@ -1,7 +1,7 @@
 import { UnsupportedMeasure } from '../errors.ts';
 import { STANDARD_GRAVITY_MS2 } from '../units.ts';
 import type { Measure } from './measure.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel } from './types.ts';
+import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, RuptureContext } from './types.ts';
 
 /**
  * PGV for a model that predicts none, from its own SA(0.5 s):
@@ -38,6 +38,22 @@ export function withPgvFromSa(model: GroundMotionModel): GroundMotionModel {
     throw new UnsupportedMeasure('PGV', `${model.name} predicts no PGV and no SA(${PGV_FROM_SA_PERIOD_S}) to derive it from`);
   }
   const saMeasure: Measure = { kind: 'SA', periodS: PGV_FROM_SA_PERIOD_S };
+  const inner = model.prepare?.bind(model);
+  // The fast path's hook (GroundMotionModel.prepare), where the model has one: its SA(0.5 s)
+  // predictor with the same constant added to every ln median.
+  const prepare = inner
+    ? (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion => {
+        if (measure.kind !== 'PGV') return inner(ruptures, measure);
+        const sa = inner(ruptures, saMeasure);
+        return {
+          distances: sa.distances,
+          predictPairs(site, pairs, out) {
+            sa.predictPairs(site, pairs, out);
+            for (let k = 0; k < pairs.count; k++) out.lnMedian[k] = (out.lnMedian[k] as number) + LN_G_TO_PGV_CMS;
+          },
+        };
+      }
+    : undefined;
   return {
     name: model.name,
     citation: model.citation,
@@ -52,5 +68,6 @@ export function withPgvFromSa(model: GroundMotionModel): GroundMotionModel {
       const sa = model.predict(input, saMeasure);
       return { ...sa, lnMedian: sa.lnMedian + LN_G_TO_PGV_CMS };
     },
+    ...(prepare ? { prepare } : {}),
   };
 }

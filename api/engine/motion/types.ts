@@ -84,4 +84,50 @@ export interface GroundMotionModel {
    * business (see interpolate-period.ts); a period outside the table throws UnsupportedPeriod.
    */
   predict(input: GmmInput, measure: Measure): GmmPrediction;
+  /**
+   * Optional precomputation hook for the fast hazard path (hazard/fast-site-hazard.ts): does the
+   * work that does not depend on the site once for `ruptures` and `measure` (magnitude and
+   * mechanism terms, period interpolation weights, validity of the rupture's own inputs), and
+   * returns a predictor for many (rupture, site) pairs at a time. Its numbers are predict()'s
+   * for the same inputs (the tests of each model check this pair by pair). It throws what
+   * predict() would throw for the measure or for a rupture's inputs. Models without it are
+   * evaluated pair by pair through predict() (hazard/prepared-motion.ts). A model made by
+   * spreading another and replacing predict must replace or drop this hook too, or the fast
+   * path would use the other model's numbers.
+   */
+  prepare?(ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion;
+}
+
+/** A distance of DistanceContext, by its field name. */
+export type DistanceName = keyof DistanceContext;
+
+/**
+ * Distances (km) of many (rupture, site) pairs at one site, as columns: entry k is one pair.
+ * Only the columns a predictor lists in `PreparedMotion.distances` need be filled.
+ */
+export interface PairDistances {
+  readonly count: number;
+  /** Each pair's rupture, as an index into the list the predictor was prepared for. */
+  readonly rupture: Int32Array;
+  readonly rjbKm: Float64Array;
+  readonly rrupKm: Float64Array;
+  readonly rxKm: Float64Array;
+  readonly ry0Km: Float64Array;
+  readonly rhypoKm: Float64Array;
+  readonly repiKm: Float64Array;
+}
+
+/** Where a predictor writes, entry k for pair k: ln median, σ (ln units) and 1 where applicable. */
+export interface PairPredictions {
+  readonly lnMedian: Float64Array;
+  readonly sigma: Float64Array;
+  readonly applicable: Uint8Array;
+}
+
+/** A model's predictor for one measure over a fixed list of ruptures (GroundMotionModel.prepare). */
+export interface PreparedMotion {
+  /** The distance columns predictPairs reads. */
+  readonly distances: readonly DistanceName[];
+  /** Predictions for the first `pairs.count` pairs at `site` (the notes come from predict()). */
+  predictPairs(site: SiteContext, pairs: PairDistances, out: PairPredictions): void;
 }

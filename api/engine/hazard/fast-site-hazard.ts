@@ -1,0 +1,209 @@
+import { TremoraError } from '../errors.ts';
+import type { PointXY } from '../geometry/projection.ts';
+import { TECTONIC_SETTINGS } from '../model.ts';
+import type { TectonicSetting } from '../model.ts';
+import { measureLabel } from '../motion/measure.ts';
+import { createPairPredictions } from '../motion/prepared-period.ts';
+import type { DistanceName, PairPredictions, SiteContext } from '../motion/types.ts';
+import type { HazardCurve } from '../results.ts';
+import { accumulatePairs, createCurveAccumulator, curveRates, resetCurveAccumulator, type CurveAccumulator } from './curve-accumulator.ts';
+import { exceedanceTable, type ExceedanceTable } from './exceedance-table.ts';
+import { branchCombinationCurves, MAX_BRANCH_COMBINATIONS, meanHazard, type SettingBranchCurve } from './logic-tree.ts';
+import { pairDistanceContext, preparedMotion, type LazyMotion } from './prepared-motion.ts';
+import { gmmInput } from './rupture-predictions.ts';
+import { ruptureContexts, settingRuptures, type RuptureTable } from './rupture-table.ts';
+import type { HazardBranch, HazardMeasure, ValiditySummary } from './site-hazard.ts';
+import { ruptureGeometry, type RuptureGeometry } from './rupture-geometry.ts';
+import { createPairBuffer, siteDistances, type PairBuffer } from './site-distances.ts';
+
+/**
+ * The fast path of the hazard integral at one site: the numbers of site-hazard.ts (classical
+ * PSHA over each setting's ruptures within the cut-off, every branch, every measure, then the
+ * logic tree of logic-tree.ts) from the rupture table, with each model's site-independent work
+ * done once per study (GroundMotionModel.prepare), one model evaluation per pair and measure,
+ * and all levels read from it (curve-accumulator.ts). Scratch buffers are reused from site to
+ * site, so one FastHazard serves one thread's sites in turn.
+ */
+
+export interface FastHazardOptions {
+  readonly table: RuptureTable;
+  /** The branches of every setting that has ruptures (others are ignored). */
+  readonly branches: Readonly<Partial<Record<TectonicSetting, readonly HazardBranch[]>>>;
+  readonly measures: readonly HazardMeasure[];
+  readonly truncationSigma: number;
+  readonly maxDistanceKm: number;
+  /** Keep each branch's predictions of the first measure and each pair's Rrup, for deaggregation. */
+  readonly keepFirstMeasure?: boolean;
+  /** Per-branch curves besides the mean (true by default; a map needs only the mean). */
+  readonly branchCurves?: boolean;
+  readonly maxBranchCombinations?: number;
+}
+
+/** One branch of one setting on the fast path: its model's predictors and curve sums, one per measure. */
+export interface BranchWork {
+  readonly model: HazardBranch['model'];
+  readonly weight: number;
+  /** One per measure. */
+  readonly motions: readonly LazyMotion[];
+  readonly curves: readonly CurveAccumulator[];
+}
+
+/** One setting's ruptures on the fast path, with the scratch buffers of its pairs at the current site. */
+export interface SettingWork {
+  readonly setting: TectonicSetting;
+  readonly ruptures: Int32Array;
+  readonly rates: Float64Array;
+  readonly contexts: ReturnType<typeof ruptureContexts>;
+  readonly branches: readonly BranchWork[];
+  readonly distances: ReadonlySet<DistanceName>;
+  readonly pairs: PairBuffer;
+  readonly predictions: PairPredictions;
+}
+
+export interface FastHazard {
+  readonly options: FastHazardOptions;
+  readonly geometry: RuptureGeometry;
+  readonly exceedance: ExceedanceTable;
+  readonly settings: readonly SettingWork[];
+}
+
+/** Prepares the fast path for a study's rupture table, branches and measures. */
+export function createFastHazard(options: FastHazardOptions): FastHazard {
+  const { table } = options;
+  const settings: SettingWork[] = [];
+  for (const setting of TECTONIC_SETTINGS) {
+    const given = options.branches[setting];
+    if (!given || given.length === 0) continue;
+    const ruptures = settingRuptures(table, setting);
+    const contexts = ruptureContexts(table, ruptures);
+    const branches = given.map(({ model, weight }) => ({
+      model,
+      weight,
+      motions: options.measures.map((m) => preparedMotion(model, contexts, m.measure)),
+      curves: options.measures.map((m) => createCurveAccumulator(m.levels)),
+    }));
+    const distances = new Set<DistanceName>(branches.flatMap((b) => b.motions.flatMap((m) => m.distances)));
+    if (options.keepFirstMeasure) distances.add('rrupKm');
+    settings.push({
+      setting,
+      ruptures,
+      rates: ruptures.length === 0 ? new Float64Array(0) : gather(table.annualRate, ruptures),
+      contexts,
+      branches,
+      distances,
+      pairs: createPairBuffer(ruptures.length),
+      predictions: createPairPredictions(ruptures.length),
+    });
+  }
+  return { options, geometry: ruptureGeometry(table), exceedance: exceedanceTable(options.truncationSigma), settings };
+}
+
+/** values[indices[k]] for each k. */
+function gather(values: Float64Array, indices: Int32Array): Float64Array {
+  const out = new Float64Array(indices.length);
+  for (let k = 0; k < indices.length; k++) out[k] = values[indices[k] as number] as number;
+  return out;
+}
+
+/** A site of the fast path: where it is in the study's local frame (km) and its ground. */
+export interface FastSite {
+  readonly point: PointXY;
+  readonly site: SiteContext;
+}
+
+/** One branch's predictions of the first measure at one site, for deaggregation. */
+export interface BranchPredictions {
+  readonly weight: number;
+  /** Table index of each pair's rupture. */
+  readonly ruptureIndex: Int32Array;
+  readonly lnMedian: Float64Array;
+  readonly sigma: Float64Array;
+  readonly rrupKm: Float64Array;
+}
+
+export interface FastSiteHazard {
+  /** Mean curve (with per-branch curves unless omitted) by measure key. */
+  readonly curves: Readonly<Record<string, HazardCurve>>;
+  readonly branchCurvesOmitted: boolean;
+  readonly validity: readonly ValiditySummary[];
+  /** Filled when FastHazardOptions.keepFirstMeasure is set; branches in site-hazard.ts's order. */
+  readonly firstMeasure: readonly BranchPredictions[];
+}
+
+/** Hazard curves at one site; `afterBranch` is called after each branch (it may throw to stop). */
+export function fastSiteHazard(hazard: FastHazard, at: FastSite, afterBranch?: () => void): FastSiteHazard {
+  const { options, geometry, exceedance } = hazard;
+  const { measures } = options;
+  const validity = new Map<string, { outside: number; evaluated: number; firstNote: string }>();
+  const settingCurves: SettingBranchCurve[][] = measures.map(() => []);
+  const firstMeasure: BranchPredictions[] = [];
+
+  for (const work of hazard.settings) {
+    const { pairs, predictions } = work;
+    siteDistances({ geometry, ruptures: work.ruptures, site: at.point, maxDistanceKm: options.maxDistanceKm, distances: work.distances }, pairs);
+    const count = pairs.count;
+    let ruptureIndex: Int32Array | undefined;
+    if (options.keepFirstMeasure) {
+      ruptureIndex = new Int32Array(count);
+      for (let k = 0; k < count; k++) ruptureIndex[k] = work.ruptures[pairs.rupture[k] as number] as number;
+    }
+    const rrupKm = options.keepFirstMeasure ? pairs.rrupKm.slice(0, count) : undefined;
+
+    for (const branch of work.branches) {
+      const summary = validity.get(branch.model.name) ?? { outside: 0, evaluated: 0, firstNote: '' };
+      measures.forEach((m, i) => {
+        const curve = branch.curves[i] as CurveAccumulator;
+        resetCurveAccumulator(curve);
+        if (count > 0) {
+          (branch.motions[i] as LazyMotion).predictor().predictPairs(at.site, pairs, predictions);
+          const bad = accumulatePairs(curve, exceedance, work.rates, pairs.rupture, predictions, count);
+          if (bad >= 0) {
+            const sourceId = options.table.sourceIds[options.table.sourceIndex[work.ruptures[pairs.rupture[bad] as number] as number] as number];
+            throw new TremoraError(
+              `${branch.model.name} gave ln median ${predictions.lnMedian[bad]} and sigma ${predictions.sigma[bad]} for ${measureLabel(m.measure)} ` +
+                `from a rupture of source "${sourceId}"; expected finite numbers with sigma >= 0`,
+            );
+          }
+        }
+        summary.evaluated += count;
+        const firstOutside = predictions.applicable.subarray(0, count).indexOf(0);
+        if (firstOutside >= 0) {
+          for (let k = firstOutside; k < count; k++) if (predictions.applicable[k] === 0) summary.outside++;
+          if (!summary.firstNote) summary.firstNote = noteOf(hazard, work, branch, i, at, firstOutside);
+        }
+        if (i === 0 && ruptureIndex && rrupKm) {
+          firstMeasure.push({ weight: branch.weight, ruptureIndex, lnMedian: predictions.lnMedian.slice(0, count), sigma: predictions.sigma.slice(0, count), rrupKm });
+        }
+        settingCurves[i]!.push({ setting: work.setting, model: branch.model.name, weight: branch.weight, annualRate: curveRates(curve) });
+      });
+      validity.set(branch.model.name, summary);
+      afterBranch?.();
+    }
+  }
+
+  const cap = options.maxBranchCombinations ?? MAX_BRANCH_COMBINATIONS;
+  let branchCurvesOmitted = false;
+  const curves: Record<string, HazardCurve> = {};
+  measures.forEach((m, i) => {
+    const list = settingCurves[i] as SettingBranchCurve[];
+    const annualRate = meanHazard(list, m.levels.length);
+    const combinations = options.branchCurves === false ? null : branchCombinationCurves(list, m.levels.length, cap);
+    if (combinations === null) branchCurvesOmitted = true;
+    curves[m.key] = combinations === null ? { levels: [...m.levels], annualRate } : { levels: [...m.levels], annualRate, branches: combinations };
+  });
+  return {
+    curves,
+    branchCurvesOmitted,
+    validity: [...validity.entries()].filter(([, s]) => s.outside > 0).map(([model, s]) => ({ model, ...s })),
+    firstMeasure,
+  };
+}
+
+/** The first validity note of pair k, from the model's own predict() (as the reference path reports it). */
+export function noteOf(hazard: FastHazard, work: SettingWork, branch: BranchWork, measureIndex: number, at: FastSite, k: number): string {
+  const local = work.pairs.rupture[k] as number;
+  const distances = pairDistanceContext(hazard.geometry, work.ruptures[local] as number, at.point);
+  const measure = (hazard.options.measures[measureIndex] as HazardMeasure).measure;
+  const prediction = branch.model.predict(gmmInput(work.contexts[local]!, distances, at.site), measure);
+  return prediction.notes[0] ?? `${branch.model.name}: outside its validity range`;
+}

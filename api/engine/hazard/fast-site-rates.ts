@@ -1,0 +1,105 @@
+import { TremoraError } from '../errors.ts';
+import { measureLabel } from '../motion/measure.ts';
+import { createPairPredictions } from '../motion/prepared-period.ts';
+import type { PairPredictions } from '../motion/types.ts';
+import { compensatedSum } from '../summation.ts';
+import { coefficientLevelRate, createLevelCoefficients, fillLevelCoefficients, levelRate, type LevelCoefficients } from './curve-accumulator.ts';
+import { noteOf, type BranchWork, type FastHazard, type FastSite, type SettingWork } from './fast-site-hazard.ts';
+import { siteDistances } from './site-distances.ts';
+import type { ValiditySummary } from './site-hazard.ts';
+
+/**
+ * One measure's mean hazard at a site read level by level on demand: the models are evaluated
+ * once per pair (as fastSiteHazard does), their predictions kept per branch, and the mean
+ * annual rate of exceeding a level summed only when asked for. A map that needs the level of one
+ * return period asks for about log₂(levels) + 2 of them (return-period-search.ts) where the full
+ * curve would sum them all.
+ */
+export interface SiteRates {
+  /** Mean annual rate (over the logic tree) of exceeding the measure's level `levelIndex`. */
+  rateAt(levelIndex: number): number;
+  readonly validity: readonly ValiditySummary[];
+}
+
+/** Per-branch prediction buffers for one FastHazard, reused from site to site. */
+export interface FastRates {
+  readonly hazard: FastHazard;
+  readonly predictions: Map<BranchWork, PairPredictions>;
+  readonly coefficients: Map<BranchWork, LevelCoefficients>;
+}
+
+export function createFastRates(hazard: FastHazard): FastRates {
+  const predictions = new Map<BranchWork, PairPredictions>();
+  const coefficients = new Map<BranchWork, LevelCoefficients>();
+  for (const work of hazard.settings) {
+    for (const branch of work.branches) {
+      predictions.set(branch, createPairPredictions(work.ruptures.length));
+      coefficients.set(branch, createLevelCoefficients(work.ruptures.length));
+    }
+  }
+  return { hazard, predictions, coefficients };
+}
+
+/** Predictions of measure `measureIndex` at one site, with its rates readable by level. */
+export function fastSiteRates(rates: FastRates, at: FastSite, measureIndex = 0): SiteRates {
+  const { hazard } = rates;
+  const { options, geometry, exceedance } = hazard;
+  const measure = options.measures[measureIndex]!;
+  const validity = new Map<string, { outside: number; evaluated: number; firstNote: string }>();
+  const terms: { weight: number; work: SettingWork; predictions: PairPredictions; coefficients: LevelCoefficients }[] = [];
+
+  for (const work of hazard.settings) {
+    const { pairs } = work;
+    siteDistances({ geometry, ruptures: work.ruptures, site: at.point, maxDistanceKm: options.maxDistanceKm, distances: work.distances }, pairs);
+    const count = pairs.count;
+    for (const branch of work.branches) {
+      const predictions = rates.predictions.get(branch)!;
+      const summary = validity.get(branch.model.name) ?? { outside: 0, evaluated: 0, firstNote: '' };
+      if (count > 0) {
+        branch.motions[measureIndex]!.predictor().predictPairs(at.site, pairs, predictions);
+        const { lnMedian, sigma: sigmas, applicable } = predictions;
+        let firstOutside = -1;
+        for (let k = 0; k < count; k++) {
+          const mu = lnMedian[k] as number;
+          const sigma = sigmas[k] as number;
+          if (applicable[k] === 0) {
+            if (firstOutside < 0) firstOutside = k;
+            summary.outside++;
+          }
+          if (!(mu > -Infinity && mu < Infinity && sigma >= 0 && sigma < Infinity)) {
+            const sourceId = options.table.sourceIds[options.table.sourceIndex[work.ruptures[pairs.rupture[k] as number] as number] as number];
+            throw new TremoraError(
+              `${branch.model.name} gave ln median ${mu} and sigma ${sigma} for ${measureLabel(measure.measure)} ` +
+                `from a rupture of source "${sourceId}"; expected finite numbers with sigma >= 0`,
+            );
+          }
+        }
+        if (firstOutside >= 0 && !summary.firstNote) summary.firstNote = noteOf(hazard, work, branch, measureIndex, at, firstOutside);
+      }
+      summary.evaluated += count;
+      validity.set(branch.model.name, summary);
+      const coefficients = rates.coefficients.get(branch)!;
+      fillLevelCoefficients(coefficients, exceedance, work.rates, pairs.rupture, predictions, count);
+      terms.push({ weight: branch.weight, work, predictions, coefficients });
+    }
+  }
+
+  const lnLevels = measure.levels.map(Math.log);
+  // Each setting's pairs stay in its buffer until the next site, so the terms can be summed at any level.
+  const counts = terms.map((t) => t.work.pairs.count);
+  return {
+    rateAt(levelIndex) {
+      const lnLevel = lnLevels[levelIndex] as number;
+      return compensatedSum(
+        terms.map(
+          (t, i) =>
+            t.weight *
+            (t.coefficients.usable && exceedance.mode === 'table'
+              ? coefficientLevelRate(lnLevel, exceedance, t.coefficients)
+              : levelRate(lnLevel, exceedance, t.work.rates, t.work.pairs.rupture, t.predictions, counts[i] as number)),
+        ),
+      );
+    },
+    validity: [...validity.entries()].filter(([, s]) => s.outside > 0).map(([model, s]) => ({ model, ...s })),
+  };
+}

@@ -1,0 +1,72 @@
+import type { PointXY } from '../geometry/projection.ts';
+import type { Measure } from '../motion/measure.ts';
+import type { DistanceContext, DistanceName, GroundMotionModel, PreparedMotion, RuptureContext } from '../motion/types.ts';
+import { gmmInput } from './rupture-predictions.ts';
+import type { RuptureGeometry } from './rupture-geometry.ts';
+import { createPairBuffer, siteDistances } from './site-distances.ts';
+
+const ALL_DISTANCES: readonly DistanceName[] = ['rjbKm', 'rrupKm', 'rxKm', 'ry0Km', 'rhypoKm', 'repiKm'];
+
+/**
+ * A model that has no precomputation hook, evaluated pair by pair through predict() with every
+ * distance: slower, and exactly the reference path's numbers.
+ */
+function pairByPair(model: GroundMotionModel, ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion {
+  return {
+    distances: ALL_DISTANCES,
+    predictPairs(site, pairs, out) {
+      for (let k = 0; k < pairs.count; k++) {
+        const distances: DistanceContext = {
+          rjbKm: pairs.rjbKm[k] as number,
+          rrupKm: pairs.rrupKm[k] as number,
+          rxKm: pairs.rxKm[k] as number,
+          ry0Km: pairs.ry0Km[k] as number,
+          rhypoKm: pairs.rhypoKm[k] as number,
+          repiKm: pairs.repiKm[k] as number,
+        };
+        const p = model.predict(gmmInput(ruptures[pairs.rupture[k] as number]!, distances, site), measure);
+        out.lnMedian[k] = p.lnMedian;
+        out.sigma[k] = p.sigma;
+        out.applicable[k] = p.applicable ? 1 : 0;
+      }
+    },
+  };
+}
+
+/**
+ * A model's predictor for one measure, prepared up front. Preparing can fail (a measure the
+ * model lacks): the error is kept and thrown when a pair first needs the predictor, as the
+ * reference path throws only when it first evaluates the model.
+ */
+export interface LazyMotion {
+  readonly distances: readonly DistanceName[];
+  predictor(): PreparedMotion;
+}
+
+export function preparedMotion(model: GroundMotionModel, ruptures: readonly RuptureContext[], measure: Measure): LazyMotion {
+  try {
+    const prepared = model.prepare ? model.prepare(ruptures, measure) : pairByPair(model, ruptures, measure);
+    return { distances: prepared.distances, predictor: () => prepared };
+  } catch (error) {
+    return {
+      distances: ALL_DISTANCES,
+      predictor: () => {
+        throw error;
+      },
+    };
+  }
+}
+
+/** Every distance of one rupture (table index) to a site, by the fast path's geometry (km). */
+export function pairDistanceContext(geometry: RuptureGeometry, ruptureIndex: number, site: PointXY): DistanceContext {
+  const one = createPairBuffer(1);
+  siteDistances({ geometry, ruptures: Int32Array.of(ruptureIndex), site, maxDistanceKm: Infinity, distances: new Set(ALL_DISTANCES) }, one);
+  return {
+    rjbKm: one.rjbKm[0] as number,
+    rrupKm: one.rrupKm[0] as number,
+    rxKm: one.rxKm[0] as number,
+    ry0Km: one.ry0Km[0] as number,
+    rhypoKm: one.rhypoKm[0] as number,
+    repiKm: one.repiKm[0] as number,
+  };
+}

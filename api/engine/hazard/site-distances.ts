@@ -1,0 +1,246 @@
+import type { PointXY } from '../geometry/projection.ts';
+import type { DistanceName, PairDistances } from '../motion/types.ts';
+import {
+  CORNERS,
+  EDGE,
+  EDGE_LENGTH_SQ,
+  EDGE_LENGTH_SQ_XY,
+  EDGE_NORMAL,
+  NORMAL,
+  ORIGIN,
+  PLANE_FIELDS,
+  RECT,
+  RECT_XY,
+  TOP,
+  type RuptureGeometry,
+} from './rupture-geometry.ts';
+
+/**
+ * Source-to-site distances for the fast path: the definitions and arithmetic of
+ * geometry/distances.ts (Rjb and Rrup as minima over a rupture's planes, Rx and Ry0 from the
+ * GC2 coordinates of its top edges, Spudich & Chiou 2015), laid out over a RuptureTable with the
+ * per-plane numbers that do not depend on the site worked out once (RuptureGeometry), √ in
+ * place of Math.hypot (motion/fast-math.ts), only the distances the models ask for, and a
+ * bounding circle per rupture so ruptures beyond the cut-off are dropped before any plane is
+ * looked at. Checked against ruptureDistances in test/engine/hazard/site-distances.test.ts.
+ */
+
+/** A site this close to a segment's line is on it (as in geometry/gc2.ts). */
+const ON_LINE_KM = 1e-9;
+
+/**
+ * Slack on the bounding-circle test, km: a rupture is dropped early only when even its circle
+ * lies farther than the cut-off by more than rounding could explain; the exact Rjb decides the rest.
+ */
+const BOUND_SLACK_KM = 1e-6;
+
+/** PairDistances with room for `capacity` pairs; `count` is set by siteDistances. */
+export interface PairBuffer extends PairDistances {
+  count: number;
+}
+
+export function createPairBuffer(capacity: number): PairBuffer {
+  const column = () => new Float64Array(capacity);
+  return { count: 0, rupture: new Int32Array(capacity), rjbKm: column(), rrupKm: column(), rxKm: column(), ry0Km: column(), rhypoKm: column(), repiKm: column() };
+}
+
+export interface SiteDistancesOptions {
+  readonly geometry: RuptureGeometry;
+  /** The ruptures to pair with the site (table indices, e.g. one setting's). */
+  readonly ruptures: Int32Array;
+  readonly site: PointXY;
+  /** Pairs with Rjb above this (km) are left out, as selectRuptures leaves them out. */
+  readonly maxDistanceKm: number;
+  /**
+   * Distances to fill. Rjb decides the cut-off whether asked for or not, but a planar rupture
+   * whose bounding circle lies wholly within the cut-off is kept without it unless it is asked for.
+   */
+  readonly distances: ReadonlySet<DistanceName>;
+}
+
+/** Rjb of a rupture's planes: 0 inside a plane's projection, else the nearest edge (km). */
+function rjbKm(g: RuptureGeometry, first: number, last: number, px: number, py: number): number {
+  const { planes, quads } = g;
+  let best = Infinity;
+  for (let p = first; p < last; p++) {
+    const at = p * PLANE_FIELDS;
+    const q = g.quadStart[p] as number;
+    if (q < 0) {
+      const dx = px - (planes[at] as number), dy = py - (planes[at + 1] as number);
+      const s = dx * (planes[at + RECT_XY + 1] as number) + dy * (planes[at + RECT_XY + 2] as number);
+      const t = dx * (planes[at + RECT_XY + 3] as number) + dy * (planes[at + RECT_XY + 4] as number);
+      const length = planes[at + RECT_XY + 5] as number, width = planes[at + RECT_XY + 6] as number;
+      const ds = s < 0 ? s : s > length ? s - length : 0;
+      const dt = t < 0 ? t : t > width ? t - width : 0;
+      best = Math.min(best, ds * ds + dt * dt);
+      continue;
+    }
+    let positive = 0;
+    let negative = 0;
+    for (let k = 0; k < 4; k++) {
+      const ax = quads[q + CORNERS + 3 * k] as number, ay = quads[q + CORNERS + 3 * k + 1] as number;
+      const side = (quads[q + EDGE + 3 * k] as number) * (py - ay) - (quads[q + EDGE + 3 * k + 1] as number) * (px - ax);
+      if (side > 0) positive++;
+      else if (side < 0) negative++;
+    }
+    if (positive === 4 || negative === 4) return 0;
+    for (let k = 0; k < 4; k++) {
+      const ax = quads[q + CORNERS + 3 * k] as number, ay = quads[q + CORNERS + 3 * k + 1] as number;
+      const ex = quads[q + EDGE + 3 * k] as number, ey = quads[q + EDGE + 3 * k + 1] as number;
+      const lengthSq = quads[q + EDGE_LENGTH_SQ_XY + k] as number;
+      const t = lengthSq === 0 ? 0 : Math.min(1, Math.max(0, ((px - ax) * ex + (py - ay) * ey) / lengthSq));
+      const dx = px - (ax + ex * t), dy = py - (ay + ey * t);
+      best = Math.min(best, dx * dx + dy * dy);
+    }
+  }
+  return Math.sqrt(best);
+}
+
+/** Rrup of a rupture's planes for a site at the surface (km). */
+function rrupKm(g: RuptureGeometry, first: number, last: number, px: number, py: number): number {
+  const { planes, quads } = g;
+  let best = Infinity;
+  for (let p = first; p < last; p++) {
+    const at = p * PLANE_FIELDS;
+    const q = g.quadStart[p] as number;
+    if (q < 0) {
+      const wx = px - (planes[at] as number), wy = py - (planes[at + 1] as number), wz = -(planes[at + 2] as number);
+      const s = wx * (planes[at + RECT + 1] as number) + wy * (planes[at + RECT + 2] as number) + wz * (planes[at + RECT + 3] as number);
+      const t = wx * (planes[at + RECT + 4] as number) + wy * (planes[at + RECT + 5] as number) + wz * (planes[at + RECT + 6] as number);
+      const d = wx * (planes[at + RECT + 7] as number) + wy * (planes[at + RECT + 8] as number) + wz * (planes[at + RECT + 9] as number);
+      const length = planes[at + RECT + 10] as number, width = planes[at + RECT + 11] as number;
+      const ds = s < 0 ? s : s > length ? s - length : 0;
+      const dt = t < 0 ? t : t > width ? t - width : 0;
+      best = Math.min(best, ds * ds + dt * dt + d * d);
+      continue;
+    }
+    const normalLength = quads[q + NORMAL + 3] as number;
+    if (normalLength > 0) {
+      let positive = 0;
+      for (let k = 0; k < 4; k++) {
+        const m = q + EDGE_NORMAL + 3 * k;
+        const a = q + CORNERS + 3 * k;
+        const dot = (px - (quads[a] as number)) * (quads[m] as number) + (py - (quads[a + 1] as number)) * (quads[m + 1] as number) - (quads[a + 2] as number) * (quads[m + 2] as number);
+        if (dot > 0) positive++;
+      }
+      if (positive === 4) {
+        const d = Math.abs((px - (quads[q] as number)) * (quads[q + NORMAL] as number) + (py - (quads[q + 1] as number)) * (quads[q + NORMAL + 1] as number) - (quads[q + 2] as number) * (quads[q + NORMAL + 2] as number)) / normalLength;
+        best = Math.min(best, d * d);
+        continue;
+      }
+    }
+    for (let k = 0; k < 4; k++) {
+      const a = q + CORNERS + 3 * k;
+      const ax = quads[a] as number, ay = quads[a + 1] as number, az = quads[a + 2] as number;
+      const ex = quads[q + EDGE + 3 * k] as number, ey = quads[q + EDGE + 3 * k + 1] as number, ez = quads[q + EDGE + 3 * k + 2] as number;
+      const lengthSq = quads[q + EDGE_LENGTH_SQ + k] as number;
+      const t = lengthSq === 0 ? 0 : Math.min(1, Math.max(0, ((px - ax) * ex + (py - ay) * ey - az * ez) / lengthSq));
+      const dx = px - (ax + ex * t), dy = py - (ay + ey * t), dz = az + ez * t;
+      best = Math.min(best, dx * dx + dy * dy + dz * dz);
+    }
+  }
+  return Math.sqrt(best);
+}
+
+/** GC2 T (Rx) and Ry0 of rupture i's top edges, as geometry/gc2.ts computes them; written to out at k. */
+function gc2(planes: Float64Array, first: number, last: number, px: number, py: number, out: PairBuffer, k: number): void {
+  let weightSum = 0, tSum = 0, uSum = 0, s = 0;
+  let onTrace = NaN;
+  for (let p = first; p < last; p++) {
+    const at = p * PLANE_FIELDS;
+    const l = planes[at + TOP] as number;
+    if (l === 0) continue;
+    const sx = planes[at + TOP + 1] as number, sy = planes[at + TOP + 2] as number;
+    const dx = px - (planes[at + ORIGIN] as number), dy = py - (planes[at + ORIGIN + 1] as number);
+    const u = dx * sx + dy * sy;
+    const t = dx * sy - dy * sx;
+    let w: number;
+    if (Math.abs(t) > ON_LINE_KM) {
+      w = (Math.atan((l - u) / t) - Math.atan(-u / t)) / t;
+    } else if (u >= 0 && u <= l) {
+      if (Number.isNaN(onTrace)) onTrace = s + u;
+      w = 0;
+    } else {
+      w = 1 / (u - l) - 1 / u;
+    }
+    weightSum += w;
+    tSum += w * t;
+    uSum += w * (u + s);
+    s += l;
+  }
+  let tKm = 0, uKm = 0;
+  if (!Number.isNaN(onTrace)) uKm = onTrace;
+  else if (weightSum > 0) {
+    tKm = tSum / weightSum;
+    uKm = uSum / weightSum;
+  }
+  out.rxKm[k] = tKm;
+  out.ry0Km[k] = uKm < 0 ? -uKm : uKm > s ? uKm - s : 0;
+}
+
+/**
+ * The pairs of `options.ruptures` with the site that lie within the cut-off, in rupture order,
+ * written to `out` (out.rupture[k] indexes options.ruptures). Point ruptures: Rjb = Repi,
+ * Rrup = Rhypo, Rx = −Repi, Ry0 = 0, as geometry/distances.ts sets them.
+ */
+export function siteDistances(options: SiteDistancesOptions, out: PairBuffer): void {
+  const { geometry, ruptures, maxDistanceKm, distances } = options;
+  const { table, planes, bounds } = geometry;
+  const { planeStart, hypocentre } = table;
+  const { rupture, rjbKm: rjbOut, rrupKm: rrupOut, rxKm: rxOut, ry0Km: ry0Out, rhypoKm: rhypoOut, repiKm: repiOut } = out;
+  const px = options.site.x, py = options.site.y;
+  const wantRrup = distances.has('rrupKm'), wantGc2 = distances.has('rxKm') || distances.has('ry0Km');
+  const wantRhypo = distances.has('rhypoKm'), wantRepi = distances.has('repiKm'), wantRjb = distances.has('rjbKm');
+  const maxSq = maxDistanceKm * maxDistanceKm;
+  let count = 0;
+  for (let local = 0; local < ruptures.length; local++) {
+    const i = ruptures[local] as number;
+    const first = planeStart[i] as number;
+    const last = planeStart[i + 1] as number;
+    const hx = hypocentre[3 * i] as number, hy = hypocentre[3 * i + 1] as number, hz = hypocentre[3 * i + 2] as number;
+    const ex = px - hx, ey = py - hy;
+    if (first === last) {
+      const repiSq = ex * ex + ey * ey;
+      if (!(repiSq <= maxSq)) continue;
+      const repi = Math.sqrt(repiSq);
+      // Only the columns asked for: a pair is written for every rupture within the cut-off.
+      rupture[count] = local;
+      rjbOut[count] = repi;
+      if (wantRepi) repiOut[count] = repi;
+      if (wantRhypo || wantRrup) {
+        const rhypo = Math.sqrt(repiSq + hz * hz);
+        rhypoOut[count] = rhypo;
+        rrupOut[count] = rhypo;
+      }
+      if (wantGc2) {
+        rxOut[count] = -repi;
+        ry0Out[count] = 0;
+      }
+      count++;
+      continue;
+    }
+    // Beyond the cut-off even from the nearest point of the bounding circle: (d − radius)² > max² with d > radius.
+    const cx = px - (bounds[3 * i] as number), cy = py - (bounds[3 * i + 1] as number);
+    const radius = bounds[3 * i + 2] as number;
+    const reach = maxDistanceKm + BOUND_SLACK_KM + radius;
+    const centreSq = cx * cx + cy * cy;
+    if (centreSq > reach * reach) continue;
+    // Within the cut-off even from the far side of the circle: Rjb is then needed only if a model reads it.
+    const within = maxDistanceKm - BOUND_SLACK_KM - radius;
+    if (wantRjb || !(within > 0 && centreSq < within * within)) {
+      const rjb = rjbKm(geometry, first, last, px, py);
+      if (!(rjb <= maxDistanceKm)) continue;
+      rjbOut[count] = rjb;
+    }
+    rupture[count] = local;
+    if (wantRrup) rrupOut[count] = rrupKm(geometry, first, last, px, py);
+    if (wantGc2) gc2(planes, first, last, px, py, out, count);
+    if (wantRhypo || wantRepi) {
+      const repiSq = ex * ex + ey * ey;
+      repiOut[count] = Math.sqrt(repiSq);
+      rhypoOut[count] = Math.sqrt(repiSq + hz * hz);
+    }
+    count++;
+  }
+  out.count = count;
+}

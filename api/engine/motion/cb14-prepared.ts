@@ -1,0 +1,300 @@
+/**
+ * CB14 for the fast hazard path (GroundMotionModel.prepare): the terms of cb14.ts that depend
+ * on the rupture alone (f_mag, f_flt, f_hyp, f_dip, the magnitude factor of f_dis, the rupture
+ * factors of f_hng, the magnitude ramps of τ and φ) are done once per rupture; per pair remain
+ * f_dis, f_hng, f_atn, A1100 and what follows from it (f_site below k1, α of the σ model).
+ * Each term is the same expression as in cb14.ts (f_site's two logarithms taken as one of their
+ * ratio) and the nine terms are added in predictCb14's order, so the numbers agree to within
+ * rounding (test/engine/motion/cb14-prepared.test.ts).
+ *
+ * This file and cb14.ts import each other (the model object names its hook; the hook reuses
+ * the model's terms); nothing here reads cb14.ts at load time, which keeps the cycle safe.
+ */
+import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
+import { toRadians } from '../units.ts';
+import { CB14_CONSTANTS as K, CB14_PGA, CB14_PGV, CB14_SA, type Cb14Row } from './cb14-coefficients.ts';
+import {
+  CB14_MAGNITUDE_RANGE,
+  CB14_ROCK_VS30,
+  CB14_VALIDITY,
+  cb14BasinTerm,
+  cb14DefaultZ2p5Km,
+  cb14DipTerm,
+  cb14HypocentreTerm,
+  cb14MechanismFromRake,
+  cb14SiteTerm,
+  cb14StyleTerm,
+} from './cb14.ts';
+import type { Measure } from './measure.ts';
+import { hypot2 } from './fast-math.ts';
+import { insideRange, preparedAtPeriod } from './prepared-period.ts';
+import type { PreparedMotion, RuptureContext, SiteContext } from './types.ts';
+
+const NAME = 'CB14';
+
+function requireNumber(path: string, value: number, expected: string, ok: (v: number) => boolean): void {
+  if (!Number.isFinite(value) || !ok(value)) {
+    throw new InvalidInput([{ path, message: `expected ${expected}, got ${value}` }], `${NAME} input`);
+  }
+}
+
+/** The rupture's own columns, shared by every row. */
+interface RuptureColumns {
+  readonly count: number;
+  readonly contexts: readonly RuptureContext[];
+  readonly mechanism: readonly ReturnType<typeof cb14MechanismFromRake>[];
+  /** 1 where the hanging-wall term can be non-zero (M > 5.5, Ztor ≤ 16.66 km). */
+  readonly hangingWall: Uint8Array;
+  readonly r1Km: Float64Array;
+  readonly r2Km: Float64Array;
+  readonly fZ: Float64Array;
+  readonly fDip: Float64Array;
+  readonly inside: Uint8Array;
+}
+
+function ruptureColumns(ruptures: readonly RuptureContext[]): RuptureColumns {
+  const count = ruptures.length;
+  const columns = {
+    count,
+    contexts: ruptures,
+    mechanism: [] as ReturnType<typeof cb14MechanismFromRake>[],
+    hangingWall: new Uint8Array(count),
+    r1Km: new Float64Array(count),
+    r2Km: new Float64Array(count),
+    fZ: new Float64Array(count),
+    fDip: new Float64Array(count),
+    inside: new Uint8Array(count),
+  };
+  ruptures.forEach((s, r) => {
+    requireNumber('magnitude', s.magnitude, 'a finite moment magnitude', () => true);
+    requireNumber('rakeDeg', s.rakeDeg, 'a finite rake in degrees', () => true);
+    requireNumber('dipDeg', s.dipDeg, 'a dip above 0° and at most 90°', (v) => v > 0 && v <= 90);
+    requireNumber('ztorKm', s.ztorKm, 'a finite depth to the top of rupture of at least 0 km', (v) => v >= 0);
+    requireNumber('hypoDepthKm', s.hypoDepthKm, 'a finite hypocentral depth of at least 0 km', (v) => v >= 0);
+    requireNumber('widthKm', s.widthKm, 'a finite down-dip width of at least 0 km', (v) => v >= 0);
+    const mechanism = cb14MechanismFromRake(s.rakeDeg);
+    columns.mechanism.push(mechanism);
+    columns.hangingWall[r] = s.magnitude <= 5.5 || s.ztorKm > 16.66 ? 0 : 1;
+    columns.r1Km[r] = s.widthKm * Math.cos(toRadians(s.dipDeg));
+    columns.r2Km[r] = 62 * s.magnitude - 350;
+    columns.fZ[r] = 1 - 0.06 * s.ztorKm;
+    columns.fDip[r] = (90 - s.dipDeg) / 45;
+    const inside =
+      s.setting === 'crustal' &&
+      insideRange(s.magnitude, CB14_MAGNITUDE_RANGE[mechanism]) &&
+      insideRange(s.hypoDepthKm, CB14_VALIDITY.depthKm as readonly [number, number]) &&
+      insideRange(s.ztorKm, [0, 20]) &&
+      insideRange(s.dipDeg, [15, 90]);
+    columns.inside[r] = inside ? 1 : 0;
+  });
+  return columns;
+}
+
+/** One row's per-rupture terms and its per-pair parts of the median. */
+interface RowTerms {
+  readonly row: Cb14Row;
+  readonly magnitudeTerm: Float64Array;
+  readonly styleTerm: Float64Array;
+  readonly hypocentreTerm: Float64Array;
+  readonly dipTerm: Float64Array;
+  readonly distanceSlope: Float64Array;
+  readonly fM: Float64Array;
+  readonly tauY: Float64Array;
+  readonly phiY: Float64Array;
+  readonly phiYB: Float64Array;
+}
+
+/** The σ model's magnitude ramp, as in cb14Sigma. */
+const ramp = (m: number, small: number, large: number): number => (m <= 4.5 ? small : m >= 5.5 ? large : large + (small - large) * (5.5 - m));
+
+function rowTerms(row: Cb14Row, columns: RuptureColumns): RowTerms {
+  const n = columns.count;
+  const terms: RowTerms = {
+    row,
+    magnitudeTerm: new Float64Array(n),
+    styleTerm: new Float64Array(n),
+    hypocentreTerm: new Float64Array(n),
+    dipTerm: new Float64Array(n),
+    distanceSlope: new Float64Array(n),
+    fM: new Float64Array(n),
+    tauY: new Float64Array(n),
+    phiY: new Float64Array(n),
+    phiYB: new Float64Array(n),
+  };
+  columns.contexts.forEach((s, r) => {
+    const m = s.magnitude;
+    // cb14MagnitudeTerm's expression, written out: that function builds a closure per call.
+    terms.magnitudeTerm[r] = row.c0 + row.c1 * m + row.c2 * Math.max(m - 4.5, 0) + row.c3 * Math.max(m - 5.5, 0) + row.c4 * Math.max(m - 6.5, 0);
+    terms.styleTerm[r] = cb14StyleTerm(row, m, columns.mechanism[r] as ReturnType<typeof cb14MechanismFromRake>);
+    terms.hypocentreTerm[r] = cb14HypocentreTerm(row, m, s.hypoDepthKm);
+    terms.dipTerm[r] = cb14DipTerm(row, m, s.dipDeg);
+    terms.distanceSlope[r] = row.c5 + row.c6 * m;
+    terms.fM[r] = m <= 6.5 ? (m - 5.5) * (1 + row.a2 * (m - 6.5)) : 1 + row.a2 * (m - 6.5);
+    const phiY = ramp(m, row.phi1, row.phi2);
+    terms.tauY[r] = ramp(m, row.tau1, row.tau2);
+    terms.phiY[r] = phiY;
+    terms.phiYB[r] = Math.sqrt(Math.max(phiY * phiY - row.phiLnAF * row.phiLnAF, 0));
+  });
+  return terms;
+}
+
+/** f_hng of cb14HangingWallTerm with the rupture's factors looked up. */
+function hangingWallTerm(t: RowTerms, c: RuptureColumns, r: number, rxKm: number, rrupKm: number, rjbKm: number): number {
+  if (rxKm < 0 || c.hangingWall[r] === 0) return 0;
+  const { row } = t;
+  const r1Km = c.r1Km[r] as number;
+  const r2Km = c.r2Km[r] as number;
+  let fRx: number;
+  if (rxKm < r1Km) {
+    const x = rxKm / r1Km;
+    fRx = row.h1 + row.h2 * x + row.h3 * x * x;
+  } else if (r2Km > r1Km) {
+    const x = (rxKm - r1Km) / (r2Km - r1Km);
+    fRx = Math.max(K.h4 + row.h5 * x + row.h6 * x * x, 0);
+  } else {
+    fRx = 0;
+  }
+  const fRrup = rrupKm === 0 ? 1 : Math.max(rrupKm - rjbKm, 0) / rrupKm;
+  return row.c10 * fRx * fRrup * (t.fM[r] as number) * (c.fZ[r] as number) * (c.fDip[r] as number);
+}
+
+/** The per-pair parts of a row's median: f_dis, f_hng and f_atn. */
+interface PathTerms {
+  distance: number;
+  hangingWall: number;
+  anelastic: number;
+}
+
+function pathTerms(into: PathTerms, t: RowTerms, c: RuptureColumns, r: number, rrupKm: number, rjbKm: number, rxKm: number): PathTerms {
+  into.distance = (t.distanceSlope[r] as number) * Math.log(hypot2(rrupKm, t.row.c7));
+  into.hangingWall = hangingWallTerm(t, c, r, rxKm, rrupKm, rjbKm);
+  into.anelastic = rrupKm > 80 ? (t.row.c20 + K.deltaC20) * (rrupKm - 80) : 0;
+  return into;
+}
+
+/** ln median before the PGA floor: the nine terms in predictCb14's order. */
+function lnMedianUnfloored(t: RowTerms, r: number, p: PathTerms, site: number, sed: number): number {
+  return (
+    (t.magnitudeTerm[r] as number) +
+    p.distance +
+    (t.styleTerm[r] as number) +
+    p.hangingWall +
+    site +
+    sed +
+    (t.hypocentreTerm[r] as number) +
+    (t.dipTerm[r] as number) +
+    p.anelastic
+  );
+}
+
+/** The site's parts of f_site for one row: constant above k1, else the pieces around A1100. */
+interface SiteTerms {
+  readonly linear: boolean;
+  readonly constant: number;
+  readonly lnRatio: number;
+  readonly cExp: number;
+  /** K.c (Vs30/k1)^n of the σ model's α. */
+  readonly cPow: number;
+}
+
+function siteTerms(row: Cb14Row, vs30: number): SiteTerms {
+  const lnRatio = Math.log(vs30 / row.k1);
+  return {
+    linear: vs30 > row.k1,
+    constant: (row.c11 + row.k2 * K.n) * lnRatio,
+    lnRatio,
+    cExp: K.c * Math.exp(K.n * lnRatio),
+    cPow: K.c * (vs30 / row.k1) ** K.n,
+  };
+}
+
+function siteTerm(row: Cb14Row, s: SiteTerms, a1100G: number): number {
+  if (s.linear) return s.constant;
+  // cb14SiteTerm's difference of two logarithms taken as the logarithm of their ratio (a rounding apart, half the cost).
+  return row.c11 * s.lnRatio + row.k2 * Math.log((a1100G + s.cExp) / (a1100G + K.c));
+}
+
+function checkSite(site: SiteContext): void {
+  requireNumber('vs30', site.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
+  if (site.z2p5Km !== undefined) requireNumber('z2p5Km', site.z2p5Km, 'a finite Z2.5 of at least 0 km', (v) => v >= 0);
+}
+
+function prepareRow(row: Cb14Row, columns: RuptureColumns, pga: RowTerms): PreparedMotion {
+  const target = row === CB14_PGA ? pga : rowTerms(row, columns);
+  const floored = row.periodS > 0 && row.periodS < 0.25;
+  const rockSite = cb14SiteTerm(CB14_PGA, CB14_ROCK_VS30, 0);
+  const rockSed = cb14BasinTerm(CB14_PGA, cb14DefaultZ2p5Km(CB14_ROCK_VS30));
+  const pgaTau = new Float64Array(columns.count);
+  const pgaPhiB = new Float64Array(columns.count);
+  for (let r = 0; r < columns.count; r++) {
+    const m = (columns.contexts[r] as RuptureContext).magnitude;
+    pgaTau[r] = ramp(m, CB14_PGA.tau1, CB14_PGA.tau2);
+    const phiPga = ramp(m, CB14_PGA.phi1, CB14_PGA.phi2);
+    pgaPhiB[r] = Math.sqrt(Math.max(phiPga * phiPga - CB14_PGA.phiLnAF * CB14_PGA.phiLnAF, 0));
+  }
+
+  const pgaPathScratch: PathTerms = { distance: 0, hangingWall: 0, anelastic: 0 };
+  const targetPathScratch: PathTerms = { distance: 0, hangingWall: 0, anelastic: 0 };
+  return {
+    distances: ['rrupKm', 'rjbKm', 'rxKm'],
+    predictPairs(site, pairs, out) {
+      checkSite(site);
+      const vs30 = site.vs30;
+      const z2p5Km = site.z2p5Km ?? cb14DefaultZ2p5Km(vs30);
+      const rowSite = siteTerms(row, vs30);
+      const pgaSite = siteTerms(CB14_PGA, vs30);
+      const rowSed = cb14BasinTerm(row, z2p5Km);
+      const pgaSed = cb14BasinTerm(CB14_PGA, z2p5Km);
+      const nonlinearSigma = vs30 < row.k1;
+      const siteInside = insideRange(vs30, CB14_VALIDITY.vs30) && (site.z2p5Km === undefined || insideRange(site.z2p5Km, [0, 10])) ? 1 : 0;
+
+      for (let k = 0; k < pairs.count; k++) {
+        const r = pairs.rupture[k] as number;
+        const rrupKm = pairs.rrupKm[k] as number;
+        const rjbKm = pairs.rjbKm[k] as number;
+        const rxKm = pairs.rxKm[k] as number;
+        const pgaPath = pathTerms(pgaPathScratch, pga, columns, r, rrupKm, rjbKm, rxKm);
+        const a1100G = Math.exp(lnMedianUnfloored(pga, r, pgaPath, rockSite, rockSed));
+        const targetPath = target === pga ? pgaPath : pathTerms(targetPathScratch, target, columns, r, rrupKm, rjbKm, rxKm);
+        let lnMedian = lnMedianUnfloored(target, r, targetPath, siteTerm(row, rowSite, a1100G), rowSed);
+        if (floored) {
+          const lnPga = lnMedianUnfloored(pga, r, pgaPath, siteTerm(CB14_PGA, pgaSite, a1100G), pgaSed);
+          lnMedian = Math.max(lnMedian, lnPga);
+        }
+        out.lnMedian[k] = lnMedian;
+
+        const tauY = target.tauY[r] as number;
+        const phiY = target.phiY[r] as number;
+        const alpha = nonlinearSigma ? row.k2 * a1100G * (1 / (a1100G + rowSite.cPow) - 1 / (a1100G + K.c)) : 0;
+        if (alpha === 0) {
+          out.sigma[k] = hypot2(tauY, phiY);
+        } else {
+          const tauPga = pgaTau[r] as number;
+          const phiYB = target.phiYB[r] as number;
+          const phiPgaB = pgaPhiB[r] as number;
+          const tau = Math.sqrt(Math.max(tauY * tauY + alpha * alpha * tauPga * tauPga + 2 * alpha * row.rho * tauY * tauPga, 0));
+          const phi = Math.sqrt(Math.max(phiYB * phiYB + row.phiLnAF * row.phiLnAF + alpha * alpha * phiPgaB * phiPgaB + 2 * alpha * row.rho * phiYB * phiPgaB, 0));
+          out.sigma[k] = hypot2(tau, phi);
+        }
+        out.applicable[k] = (columns.inside[r] as number) & siteInside & (insideRange(rrupKm, CB14_VALIDITY.distanceKm) ? 1 : 0);
+      }
+    },
+  };
+}
+
+const SA_PERIODS_S: readonly number[] = CB14_SA.map((r) => r.periodS);
+
+/** CB14 prepared for `measure` over `ruptures` (the hook of the cb14 model). */
+export function prepareCb14(ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion {
+  if (measure.kind === 'SA' && !(measure.periodS > 0)) throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
+  const columns = ruptureColumns(ruptures);
+  const pga = rowTerms(CB14_PGA, columns);
+  switch (measure.kind) {
+    case 'PGA':
+      return prepareRow(CB14_PGA, columns, pga);
+    case 'PGV':
+      return prepareRow(CB14_PGV, columns, pga);
+    case 'SA':
+      return preparedAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) => prepareRow(CB14_SA[i] as Cb14Row, columns, pga));
+  }
+}

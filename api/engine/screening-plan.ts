@@ -1,0 +1,199 @@
+import type { CommunityHazard, ScreeningMeasures } from './community-result.ts';
+import { InvalidInput } from './errors.ts';
+import { ruptureDistances } from './geometry/distances.ts';
+import { frameForStudy, type LocalFrame } from './geometry/projection.ts';
+import { deaggregate } from './hazard/deaggregation.ts';
+import { fastDeaggregate } from './hazard/fast-deaggregation.ts';
+import { createFastHazard, fastSiteHazard, type FastHazard } from './hazard/fast-site-hazard.ts';
+import { levelsFor } from './hazard/hazard-levels.ts';
+import { ruptureTable, type RuptureTable } from './hazard/rupture-table.ts';
+import { siteHazard, type HazardBranch, type HazardMeasure } from './hazard/site-hazard.ts';
+import { INTENSITY_MEASURE } from './intensity/site-intensity.ts';
+import { TECTONIC_SETTINGS } from './model.ts';
+import type { Community, Study, TectonicSetting } from './model.ts';
+import type { ModelCatalog } from './motion/catalog.ts';
+import { parseMeasure } from './motion/measure.ts';
+import { PGV_FROM_SA_NOTE, withPgvFromSa } from './motion/pgv-from-sa.ts';
+import { modelCatalog } from './motion/registry.ts';
+import type { Rupture } from './ruptures/rupture.ts';
+import { discretiseStudy } from './ruptures/discretise.ts';
+
+/** Logic-tree weights of a setting must sum to 1 within this (as the study schema requires). */
+const WEIGHT_SUM_TOLERANCE = 1e-6;
+
+/**
+ * Which sum of the hazard integral a screening uses: 'fast' (typed arrays, precomputed model
+ * terms, tabulated exceedance: hazard/fast-site-hazard.ts) or 'reference', the plain sum of
+ * hazard/site-hazard.ts that the fast one is checked against.
+ */
+export type ScreeningPath = 'fast' | 'reference';
+
+/** Everything about a screening that does not depend on the community. */
+export interface ScreeningPlan {
+  readonly study: Study;
+  readonly path: ScreeningPath;
+  readonly measures: ScreeningMeasures;
+  readonly branches: Readonly<Partial<Record<TectonicSetting, HazardBranch[]>>>;
+  readonly branchCount: number;
+  /** Study-level warnings found while planning (PGV derived from SA). */
+  readonly warnings: readonly string[];
+  readonly frame: LocalFrame;
+  readonly ruptureCount: number;
+  /** The ruptures as a table (fast path), e.g. to hand to worker threads. */
+  readonly table?: RuptureTable;
+  /** One community's hazard; `afterBranch` after each branch (it may throw to stop). */
+  hazardAt(community: Community, afterBranch: () => void): CommunityHazard;
+}
+
+export interface ScreeningPlanOptions {
+  /** The models studies may name; the registry's by default. */
+  readonly models?: ModelCatalog;
+  readonly path?: ScreeningPath;
+  /** The study's rupture table, already built (fast path only): the study is not discretised again. */
+  readonly table?: RuptureTable;
+}
+
+/** A screening's measures and branches, resolved and checked, with the warnings that found. */
+export type ScreeningSetup = Pick<ScreeningPlan, 'study' | 'measures' | 'branches' | 'branchCount' | 'warnings'>;
+
+/** Resolves and checks a study's measures and branches, without touching its ruptures. */
+export function screeningSetup(study: Study, models: ModelCatalog = modelCatalog): ScreeningSetup {
+  const measures = hazardMeasures(study);
+  const warnings: string[] = [];
+  const branches = resolveBranches(study, measures, models, warnings);
+  const branchCount = Object.values(branches).reduce((n, list) => n + list.length, 0);
+  return { study, measures, branches, branchCount, warnings };
+}
+
+/** Resolves a study's measures and branches and lays out its ruptures for the chosen path. */
+export function planScreening(study: Study, options: ScreeningPlanOptions = {}): ScreeningPlan {
+  const path = options.path ?? 'fast';
+  const setup = screeningSetup(study, options.models);
+  const { measures, branches } = setup;
+  const common = { ...setup, path };
+  const { settings } = study;
+  const sourceNames = study.sources.map((s) => s.name);
+
+  if (path === 'reference') {
+    const { frame, ruptures } = discretiseStudy(study);
+    return { ...common, frame, ruptureCount: ruptures.length, hazardAt: (community, afterBranch) => referenceHazard(ruptures, frame, community, common, afterBranch) };
+  }
+
+  let frame: LocalFrame;
+  let table: RuptureTable;
+  if (options.table) {
+    frame = frameForStudy(study);
+    table = options.table;
+  } else {
+    const discretised = discretiseStudy(study);
+    frame = discretised.frame;
+    table = ruptureTable(discretised.ruptures);
+  }
+  // Built when the first community asks: a thread that only hands communities to others needs none.
+  let fast: FastHazard | undefined;
+  return {
+    ...common,
+    frame,
+    ruptureCount: table.count,
+    table,
+    hazardAt(community, afterBranch) {
+      fast ??= createFastHazard({
+        table,
+        branches,
+        measures: measures.all,
+        truncationSigma: settings.truncationSigma,
+        maxDistanceKm: settings.maxDistanceKm,
+        keepFirstMeasure: true,
+      });
+      const site = { vs30: community.vs30, vs30Measured: community.vs30Basis === 'measured' };
+      const hazard = fastSiteHazard(fast, { point: frame.toLocal([community.lon, community.lat]), site }, afterBranch);
+      return {
+        curves: hazard.curves,
+        validity: hazard.validity,
+        deaggregate: (measure, level, returnPeriodYears) =>
+          fastDeaggregate({ measure: measure.key, level, returnPeriodYears, table, branches: hazard.firstMeasure, sourceNames, exceedance: fast!.exceedance }),
+      };
+    },
+  };
+}
+
+/** The plain path: every rupture's distances, site-hazard.ts, deaggregation.ts. */
+function referenceHazard(
+  ruptures: readonly Rupture[],
+  frame: LocalFrame,
+  community: Community,
+  plan: Pick<ScreeningPlan, 'study' | 'measures' | 'branches'>,
+  afterBranch: () => void,
+): CommunityHazard {
+  const { settings } = plan.study;
+  const siteXY = frame.toLocal([community.lon, community.lat]);
+  const distances = ruptures.map((r) => ruptureDistances(r.surface, siteXY));
+  const hazard = siteHazard({
+    ruptures,
+    distances,
+    site: { vs30: community.vs30, vs30Measured: community.vs30Basis === 'measured' },
+    branches: plan.branches,
+    measures: plan.measures.all,
+    truncationSigma: settings.truncationSigma,
+    maxDistanceKm: settings.maxDistanceKm,
+    afterBranch,
+  });
+  const sourceNames = plan.study.sources.map((s) => s.name);
+  return {
+    curves: hazard.curves,
+    validity: hazard.validity,
+    deaggregate: (measure, level, returnPeriodYears) =>
+      deaggregate({
+        measure: measure.key,
+        level,
+        returnPeriodYears,
+        ruptures,
+        distances,
+        // The first measure is first in measures.all, so its predictions are at index 0.
+        branches: hazard.branches.map((b) => ({ weight: b.weight, predictions: b.predictions[0]! })),
+        sourceNames,
+        truncationSigma: settings.truncationSigma,
+      }),
+  };
+}
+
+/** The study's measures with their levels; PGA is added (not reported) when missing, for intensity. */
+export function hazardMeasures(study: Study): ScreeningMeasures {
+  const toHazardMeasure = (key: string): HazardMeasure => {
+    const measure = parseMeasure(key);
+    return { key, measure, levels: levelsFor(study.settings.levels, key, measure) };
+  };
+  const reported = study.settings.measures.map(toHazardMeasure);
+  if (reported.length === 0) throw new InvalidInput([{ path: 'settings.measures', message: 'expected at least one measure' }]);
+  const all = reported.some((m) => m.key === INTENSITY_MEASURE) ? reported : [...reported, toHazardMeasure(INTENSITY_MEASURE)];
+  return { reported, all };
+}
+
+/**
+ * Models for each setting that has sources; PGV derived from SA(0.5 s) where a model lacks it
+ * (a study-level warning is added to `warnings` then).
+ */
+export function resolveBranches(study: Study, measures: Pick<ScreeningMeasures, 'all'>, models: ModelCatalog, warnings: string[]): Partial<Record<TectonicSetting, HazardBranch[]>> {
+  const wantsPgv = measures.all.some((m) => m.measure.kind === 'PGV');
+  const out: Partial<Record<TectonicSetting, HazardBranch[]>> = {};
+  for (const setting of TECTONIC_SETTINGS) {
+    if (!study.sources.some((s) => s.setting === setting)) continue;
+    const given = study.groundMotion[setting];
+    const path = `groundMotion.${setting}`;
+    if (given.length === 0) throw new InvalidInput([{ path, message: `expected at least one branch: the study has ${setting} sources` }]);
+    const weightSum = given.reduce((s, b) => s + b.weight, 0);
+    if (Math.abs(weightSum - 1) > WEIGHT_SUM_TOLERANCE) {
+      throw new InvalidInput([{ path, message: `expected branch weights summing to 1, got ${weightSum}` }]);
+    }
+    out[setting] = given.map((branch) => {
+      let model = models.get(branch.model);
+      if (wantsPgv && !model.hasPgv) {
+        model = withPgvFromSa(model);
+        const warning = `${branch.model} (${setting}): ${PGV_FROM_SA_NOTE}; a screening estimate with the sigma of SA(0.5 s)`;
+        if (!warnings.includes(warning)) warnings.push(warning);
+      }
+      return { model, weight: branch.weight };
+    });
+  }
+  return out;
+}

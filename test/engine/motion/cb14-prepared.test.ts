@@ -1,0 +1,22 @@
+import { describe, expect, it } from 'vitest';
+import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
+import { cb14 } from '../../../api/engine/motion/cb14.ts';
+import type { Measure } from '../../../api/engine/motion/measure.ts';
+import { checkPreparedModel } from './prepared-checks.ts';
+
+// The hook's numbers against predict() (cb14.ts); predict() itself is checked against the paper in cb14.test.ts.
+const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
+
+describe('CB14 precomputation hook', () => {
+  it('gives predict()\'s ln median, σ and applicability, within 1e-12: PGA, PGV, SA with and without the PGA floor, between rows', () => {
+    checkPreparedModel(cb14, [{ kind: 'PGA' }, { kind: 'PGV' }, sa(0.1), sa(0.12), sa(0.2), sa(1), sa(2.5)], ['crustal', 'crustal', 'intraslab']);
+  });
+
+  it('asks for Rrup, Rjb and Rx; refuses a bad dip and a period outside the table as predict does', () => {
+    expect(cb14.prepare!([], { kind: 'PGA' }).distances).toEqual(['rrupKm', 'rjbKm', 'rxKm']);
+    expect(() => cb14.prepare!([], sa(0.005))).toThrow(UnsupportedPeriod);
+    const rupture = { magnitude: 6, rakeDeg: 0, mechanism: 'strike-slip' as const, setting: 'crustal' as const, dipDeg: 0, ztorKm: 0, widthKm: 10, hypoDepthKm: 8 };
+    expect(() => cb14.prepare!([rupture], { kind: 'PGA' })).toThrow(InvalidInput);
+    expect(() => cb14.prepare!([rupture], { kind: 'PGA' })).toThrow(/dipDeg: expected a dip above 0° and at most 90°, got 0/);
+  });
+});
