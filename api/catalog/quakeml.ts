@@ -48,7 +48,13 @@ export function parseQuakeMl(text: string): CatalogLoad {
   if (valid !== true) {
     throw new InvalidInput([{ path: `line ${valid.err.line}`, message: `expected well-formed QuakeML XML: ${valid.err.msg}` }]);
   }
-  const root = parser.parse(text) as XmlNode;
+  let root: XmlNode;
+  try {
+    root = parser.parse(text) as XmlNode;
+  } catch (error) {
+    // Well-formed XML the parser still refuses: external entities (never fetched), nesting beyond its limit.
+    throw new InvalidInput([{ path: 'quakeml', message: `expected QuakeML without external entities or extreme nesting: ${error instanceof Error ? error.message : String(error)}` }]);
+  }
   const parameters = child(root.quakeml, 'eventParameters') ?? root.eventParameters;
   if (!parameters) throw new InvalidInput([{ path: 'quakeml', message: 'expected a quakeml element holding eventParameters' }]);
   const candidates: { event: CatalogEvent; where: RejectedRecord }[] = [];

@@ -36,11 +36,19 @@ function row(study: Study, community: CommunityResult): unknown[] {
 }
 
 /**
+ * A cell that a spreadsheet could take for a formula. papaparse's own pattern for
+ * `escapeFormulae: true` is /^[=+\-@\t\r].*$/, which misses a cell with a line break after
+ * its first line ("=HYPERLINK(...)\nVillage"): `.` stops at the break and `$` needs the end.
+ */
+const FORMULA_START = /^[=+\-@\t\r]/;
+
+/**
  * A run's results as CSV, one row per community: the levels at each return period (g; PGV
  * cm/s), the intensity there, the chance of reaching MMI VI–VIII in each horizon, the nearest
  * fault. Empty cells where the value is unknown (a level beyond the computed curve). Text
- * cells starting with = + - @ get a leading ' so a spreadsheet does not run them as formulas.
+ * cells starting with = + - @, tab or carriage return get a leading ' so a spreadsheet does not
+ * run them as formulas (OWASP, "CSV Injection"; from memory).
  */
 export function runCsv(study: Study, result: StudyResult): string {
-  return Papa.unparse({ fields: columns(study), data: result.communities.map((c) => row(study, c)) }, { newline: '\r\n', escapeFormulae: true });
+  return Papa.unparse({ fields: columns(study), data: result.communities.map((c) => row(study, c)) }, { newline: '\r\n', escapeFormulae: FORMULA_START });
 }

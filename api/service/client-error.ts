@@ -1,5 +1,5 @@
 import type { Duplex } from 'node:stream';
-import { CONTENT_SECURITY_POLICY } from './security-headers.ts';
+import { CONTENT_SECURITY_POLICY, REFERRER_POLICY } from './security-headers.ts';
 
 /** What Node's HTTP parser refused, as status and message (codes from llhttp and node:http). */
 function refusal(code: string | undefined): { status: number; reason: string; message: string } {
@@ -34,7 +34,7 @@ export function answerClientError(error: NodeJS.ErrnoException, socket: Duplex &
       'Content-Type: application/json\r\n' +
       `Content-Length: ${Buffer.byteLength(body)}\r\n` +
       `Content-Security-Policy: ${CONTENT_SECURITY_POLICY}\r\n` +
-      'X-Content-Type-Options: nosniff\r\nX-Frame-Options: DENY\r\nReferrer-Policy: no-referrer\r\nConnection: close\r\n\r\n' +
+      `X-Content-Type-Options: nosniff\r\nX-Frame-Options: DENY\r\nReferrer-Policy: ${REFERRER_POLICY}\r\nConnection: close\r\n\r\n` +
       body,
   );
 }

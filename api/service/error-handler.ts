@@ -42,6 +42,12 @@ export function errorHandler(logError: LogError): ErrorHandler {
     if (error instanceof Cancelled) return c.json(errorBody(error.message), 409);
     if (error instanceof TremoraError) return c.json(errorBody(error.message), 422);
     if (error instanceof PoolClosed) return c.json(errorBody('the service is shutting down; try again when it is back'), 503);
+    // A form body that does not parse as its Content-Type says (hono's parseBody, undici's formData).
+    if (error instanceof TypeError && /^Failed to parse body as FormData/.test(error.message)) {
+      return c.json(errorBody(`the body could not be read as the form its Content-Type (${c.req.header('content-type') ?? 'none'}) says`), 400);
+    }
+    // Node's "aborted": the client closed the connection before its body was complete.
+    if ((error as NodeJS.ErrnoException).code === 'ECONNRESET') return c.json(errorBody('the request body was cut short: the connection closed before all of it arrived'), 400);
     const id = randomUUID();
     logError(id, `${c.req.method} ${c.req.path}`, error);
     return c.json({ error: 'internal error', id, issues: [] }, 500);

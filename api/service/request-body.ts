@@ -1,5 +1,5 @@
 import type { Context } from 'hono';
-import { parseJsonText } from '../study/json-text.ts';
+import { MAX_JSON_DEPTH, parseJsonText } from '../study/json-text.ts';
 import { HttpError } from './http-error.ts';
 
 /** Content types accepted for each kind of body. */
@@ -27,6 +27,7 @@ export async function readText(c: Context, types: readonly string[], what: strin
 export async function readJsonObject(c: Context, what: string, types: readonly string[] = JSON_TYPES): Promise<{ value: Record<string, unknown>; text: string }> {
   const text = await readText(c, types, what);
   const parsed = parseJsonText(text, '(body)');
+  if (!parsed.ok && parsed.limit === 'depth') throw new HttpError(422, `the JSON is nested deeper than the limit of ${MAX_JSON_DEPTH} levels`, [parsed.issue]);
   if (!parsed.ok) throw new HttpError(400, 'malformed JSON', [parsed.issue]);
   const value = parsed.value;
   if (typeof value !== 'object' || value === null || Array.isArray(value)) {

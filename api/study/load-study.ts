@@ -7,8 +7,9 @@ import { readCommunitiesCsv } from './communities-csv.ts';
 import { describeValue, text } from './fields.ts';
 import { IssueList } from './issues.ts';
 import { readSettings } from './settings-schema.ts';
-import { readSourceGeometry } from './source-geometry.ts';
+import { MAX_STUDY_VERTICES, readSourceGeometry, vertexCount } from './source-geometry.ts';
 import { readSources } from './source-schema.ts';
+import { checkRuptureEstimate } from './rupture-estimate.ts';
 
 export const STUDY_KEYS = ['name', 'communities', 'sources', 'groundMotion', 'settings', 'outline'] as const;
 
@@ -46,6 +47,8 @@ export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
   const used = new Set<TectonicSetting>(sources.map((s) => s.setting));
   const groundMotion = readBranches(doc.groundMotion, used, settings, options.models, issues, ['groundMotion']);
   const outline = doc.outline === undefined ? undefined : readOutline(doc.outline, issues);
+  // Only on a study without other problems: the valid sources then keep their feature order.
+  if (issues.issues.length === 0 && settings) checkRuptureEstimate(sources, settings, issues);
 
   if (issues.issues.length > 0 || name === undefined || !settings || !groundMotion || communities.length === 0) {
     return { ok: false, issues: issues.issues, warnings: issues.warnings };
@@ -83,6 +86,11 @@ function readOutline(raw: unknown, issues: IssueList): LonLat[][] | undefined {
     else if (read) issues.add([...path, 'type'], `expected a Polygon or MultiPolygon outline, got ${describeValue(g?.type)}`);
   };
   const fc = raw as { type?: unknown; features?: unknown };
+  const vertices = Array.isArray(fc.features) ? fc.features.reduce((n: number, f) => n + vertexCount((f as { geometry?: unknown } | null)?.geometry), 0) : vertexCount(raw);
+  if (vertices > MAX_STUDY_VERTICES) {
+    issues.add(['outline'], `expected at most ${MAX_STUDY_VERTICES} vertices in the outline (the limit), got ${vertices}; simplify it`);
+    return undefined;
+  }
   if (fc.type === 'FeatureCollection' && Array.isArray(fc.features)) {
     fc.features.forEach((f, i) => take((f as { geometry?: unknown } | null)?.geometry, ['outline', 'features', i, 'geometry']));
   } else {

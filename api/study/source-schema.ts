@@ -4,7 +4,7 @@ import { TECTONIC_SETTINGS } from '../engine/model.ts';
 import { describeValue, identifier, numberIn, oneOf, text } from './fields.ts';
 import { formatPath, type IssueList } from './issues.ts';
 import { readRecurrence } from './recurrence-schema.ts';
-import { readSourceGeometry, rightHandDipDirectionDeg } from './source-geometry.ts';
+import { MAX_STUDY_VERTICES, readSourceGeometry, rightHandDipDirectionDeg, vertexCount } from './source-geometry.ts';
 
 /** Most sources one study may hold. */
 export const MAX_SOURCES = 500;
@@ -112,6 +112,11 @@ export function readSources(raw: unknown, issues: IssueList, path: readonly Prop
   }
   if (features.length === 0 || features.length > MAX_SOURCES) {
     issues.add([...path, 'features'], `expected 1 to ${MAX_SOURCES} sources, got ${features.length}`);
+    return [];
+  }
+  const vertices = features.reduce((n: number, f) => n + vertexCount((f as { geometry?: unknown } | null)?.geometry), 0);
+  if (vertices > MAX_STUDY_VERTICES) {
+    issues.add([...path, 'features'], `expected at most ${MAX_STUDY_VERTICES} vertices over all sources (the limit), got ${vertices}; simplify the traces and outlines`);
     return [];
   }
   const out: Source[] = [];

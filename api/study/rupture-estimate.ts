@@ -1,0 +1,61 @@
+import * as turf from '@turf/turf';
+import type { Recurrence, Settings, Source } from '../engine/model.ts';
+import type { IssueList } from './issues.ts';
+
+/**
+ * Most ruptures a study may be discretised into, estimated from above before any is built. A
+ * rupture holds about 1 kB while a study is measured or screened, so this keeps one study under
+ * about 1 GB; the demo coast has about 7 x 10^4. Without it a small document (a wide zone with
+ * 1 km cells and 0.01-unit magnitude bins) asks for 10^8 ruptures and holds a worker for hours.
+ */
+export const MAX_RUPTURES = 1_000_000;
+
+/** Magnitude bins of a recurrence at `stepM` (recurrence/magnitude-bins.ts makes at most this many). */
+function binCount(recurrence: Recurrence, stepM: number): number {
+  if (recurrence.type === 'fixed') return 1;
+  return Math.max(1, Math.ceil((recurrence.mMax - recurrence.mMin) / stepM - 1e-6));
+}
+
+/**
+ * Rupture positions per magnitude bin, at most: a fault's floating positions for the smallest
+ * rupture (geometry/floating-ruptures.ts spaces them at most ruptureSpacingKm apart along strike
+ * and down dip); a zone's cells, its area in cells plus a fringe of part-cells along its
+ * outline (turf's area and length are spherical, close enough for a bound); one for a point.
+ */
+function positionCount(source: Source, settings: Settings): number {
+  if (source.kind === 'point') return 1;
+  if (source.kind === 'fault') {
+    const lengthKm = turf.length(turf.lineString(source.trace.map(([lon, lat]) => [lon, lat])), { units: 'kilometers' });
+    const widthKm = (source.lowerDepthKm - source.upperDepthKm) / Math.sin((source.dipDeg * Math.PI) / 180);
+    const spacing = settings.ruptureSpacingKm;
+    return (Math.ceil(lengthKm / spacing) + 1) * (Math.ceil(widthKm / spacing) + 1);
+  }
+  const polygon = turf.polygon(source.rings.map((ring) => ring.map(([lon, lat]) => [lon, lat])));
+  const cell = settings.zoneCellKm;
+  const areaCells = turf.area(polygon) / 1e6 / (cell * cell);
+  const outlineCells = turf.length(turf.polygonToLine(polygon), { units: 'kilometers' }) / cell;
+  return Math.ceil(areaCells + 2 * outlineCells) + 1;
+}
+
+/**
+ * Refuses a study whose sources would make more than MAX_RUPTURES ruptures, estimated from
+ * above, naming the largest source and the settings that reduce the count. `sources` must be
+ * the study's valid sources in feature order.
+ */
+export function checkRuptureEstimate(sources: readonly Source[], settings: Settings, issues: IssueList): void {
+  let total = 0;
+  let largest = { index: 0, count: 0 };
+  sources.forEach((source, index) => {
+    const count = binCount(source.recurrence, settings.magnitudeStep) * positionCount(source, settings);
+    total += count;
+    if (count > largest.count) largest = { index, count };
+  });
+  if (total <= MAX_RUPTURES) return;
+  const id = sources[largest.index]?.id ?? '';
+  issues.add(
+    ['sources'],
+    `the sources would make up to about ${Math.round(total)} ruptures, over the limit of ${MAX_RUPTURES} ruptures per study ` +
+      `(the most from sources.features[${largest.index}] "${id}", up to about ${Math.round(largest.count)}); ` +
+      'expected fewer: use a larger settings.magnitudeStep, settings.ruptureSpacingKm or settings.zoneCellKm, or smaller zones',
+  );
+}

@@ -1,0 +1,96 @@
+import { createRequire } from 'node:module';
+import type { ServiceProcess } from '../helpers/service-process.ts';
+import { smallStudy } from '../helpers/small-study.ts';
+
+/**
+ * The load of issue 8, shared by the short burst in the tests (load-burst.test.ts, which
+ * asserts no failed request) and the longer measured run (test/bench/load.bench.ts, figures
+ * only): autocannon on loopback against health, the study overview page and a small compute,
+ * all at once, while a heavy run (the demo study) is in flight.
+ */
+
+export interface AutocannonResult {
+  readonly latency: { readonly p50: number; readonly p97_5: number; readonly p99: number; readonly max: number; readonly average: number };
+  readonly requests: { readonly average: number; readonly total: number };
+  readonly non2xx: number;
+  readonly errors: number;
+  readonly timeouts: number;
+  readonly resets: number;
+}
+
+interface AutocannonOptions {
+  readonly url: string;
+  readonly connections: number;
+  readonly duration: number;
+  readonly method?: string;
+  readonly headers?: Record<string, string>;
+  readonly body?: string;
+  /** Seconds before a request counts as timed out. */
+  readonly timeout?: number;
+}
+type Autocannon = (options: AutocannonOptions) => Promise<AutocannonResult>;
+// autocannon ships no type declarations; this is the part of its API used here.
+const autocannon = createRequire(import.meta.url)('autocannon') as Autocannon;
+
+export interface LoadTarget {
+  readonly label: string;
+  readonly result: AutocannonResult;
+}
+
+export interface LoadMixOptions {
+  readonly durationS: number;
+  /** Connections to health and to the page; the compute gets fewer (it queues on a worker). */
+  readonly connections: number;
+}
+
+const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
+/** Starts the demo study's run and waits until a worker computes it; returns its id. */
+export async function startHeavyRun(service: ServiceProcess): Promise<{ runId: string; studyId: string }> {
+  const { studies } = (await (await service.fetch('/api/studies')).json()) as { studies: { id: string; name: string }[] };
+  const demo = studies.find((s) => s.name === 'Demo coast');
+  if (!demo) throw new Error('the demo study was not saved on first start');
+  const started = await service.fetch(`/api/studies/${demo.id}/runs`, { method: 'POST' });
+  if (started.status !== 202) throw new Error(`the demo run did not start: ${started.status} ${await started.text()}`);
+  const { id } = (await started.json()) as { id: string };
+  // Every worker thread loads its code on its first task (seconds on a busy machine): one
+  // compute and one page first, so the load measures the service, not the start-up.
+  const warm = await service.fetch('/api/compute', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(smallStudy('Warm-up')) });
+  if (warm.status !== 200) throw new Error(`the warm-up compute failed: ${warm.status} ${await warm.text()}`);
+  await (await service.fetch(`/studies/${demo.id}`)).text();
+  for (let i = 0; i < 600; i++) {
+    const run = (await (await service.fetch(`/api/runs/${id}`)).json()) as { status: string };
+    if (run.status === 'running') return { runId: id, studyId: demo.id };
+    if (run.status !== 'queued') throw new Error(`the demo run ended before the load: ${run.status}`);
+    await sleep(100);
+  }
+  throw new Error('the demo run never started');
+}
+
+/** The three loads at once, while the heavy run computes; throws if the run is no longer running after. */
+export async function loadMix(service: ServiceProcess, studyId: string, runId: string, options: LoadMixOptions): Promise<LoadTarget[]> {
+  const common = { duration: options.durationS, timeout: 30 };
+  const compute = JSON.stringify(smallStudy('Load compute'));
+  const [health, page, computed] = await Promise.all([
+    autocannon({ ...common, url: `${service.url}/api/health`, connections: options.connections }),
+    autocannon({ ...common, url: `${service.url}/studies/${studyId}`, connections: options.connections }),
+    autocannon({ ...common, url: `${service.url}/api/compute`, connections: Math.max(1, Math.floor(options.connections / 4)), method: 'POST', headers: { 'content-type': 'application/json' }, body: compute }),
+  ]);
+  const run = (await (await service.fetch(`/api/runs/${runId}`)).json()) as { status: string };
+  if (run.status !== 'running') throw new Error(`the heavy run was ${run.status} by the end of the load; expected it still running`);
+  return [
+    { label: 'GET /api/health', result: health },
+    { label: 'GET /studies/{id} (overview)', result: page },
+    { label: 'POST /api/compute (small)', result: computed },
+  ];
+}
+
+/** One line of figures per target. */
+export function describeLoad(targets: readonly LoadTarget[]): string {
+  return targets
+    .map(({ label, result: r }) =>
+      `${label.padEnd(30)} ${Math.round(r.requests.average)} req/s, p50 ${r.latency.p50} ms, p99 ${r.latency.p99} ms, max ${r.latency.max} ms ` +
+        `(${r.requests.total} requests, ${r.non2xx} non-2xx, ${r.errors} errors, ${r.timeouts} timeouts)`,
+    )
+    .join('\n  ');
+}
