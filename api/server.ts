@@ -46,7 +46,7 @@ const runPool = new WorkerPool({ size: config.workers, name: 'tremora-run' });
 const quickPool = new WorkerPool({ size: 1, name: 'tremora-quick' });
 const scheduler = new RunScheduler({ store, pool: runPool, toolVersion: TOOL_VERSION });
 const context = { store, scheduler, runPool, quickPool, models: modelCatalog, toolVersion: TOOL_VERSION, workBudget: config.workBudget };
-const app = createApp(context, { pages: createPages(context), ...(config.token === undefined ? {} : { token: config.token }) });
+const app = createApp(context, { pages: createPages(context, { token: config.token }), ...(config.token === undefined ? {} : { token: config.token }) });
 
 const server = serve({ fetch: app.fetch, hostname: config.host, port: config.port }, (info) => {
   console.log(`Tremora ${TOOL_VERSION} is listening on http://${urlHost(config.host)}:${info.port}`);

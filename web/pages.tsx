@@ -1,5 +1,6 @@
 import { Hono } from 'hono';
 import type { ServiceContext } from '../api/service/service-context.ts';
+import { accessPages } from './routes/access-pages.tsx';
 import { catalogPages } from './routes/catalog-pages.tsx';
 import { editorPages } from './routes/editor-pages.tsx';
 import { LANGUAGE_COOKIE, pageKit, safeBackPath } from './routes/page-kit.ts';
@@ -14,12 +15,17 @@ import { MessageView } from './views/message-view.tsx';
 /** How long the language choice is kept, seconds (a year). */
 const LANGUAGE_COOKIE_MAX_AGE_S = 365 * 24 * 3600;
 
+export interface CreatePagesOptions {
+  /** The service's TREMORA_TOKEN, when it has one: the access page checks it (routes/access-pages.tsx). */
+  readonly token?: string | undefined;
+}
+
 /**
  * The pages, server-rendered, mounted at "/" by createApp (api/service/app.ts), which gives
  * them the service's security headers and limits. They read studies and runs in-process from
  * the store and start work through the same scheduler and pools as the API.
  */
-export function createPages(ctx: ServiceContext): Hono {
+export function createPages(ctx: ServiceContext, options: CreatePagesOptions = {}): Hono {
   const app = new Hono();
   const kit = pageKit(ctx);
 
@@ -42,6 +48,7 @@ export function createPages(ctx: ServiceContext): Hono {
     return c.redirect(back, 303);
   });
 
+  accessPages(app, kit, options.token);
   studyPages(app, kit);
   scenarioPages(app, kit);
   editorPages(app, kit);
@@ -51,7 +58,7 @@ export function createPages(ctx: ServiceContext): Hono {
   app.get('*', (c) => {
     if (c.req.path.startsWith('/api/') || c.req.path === '/api') return c.notFound();
     const tr = kit.tr(c);
-    return kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={tr.t('error.notFoundText')} />, 404);
+    return kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={tr.text('error.notFoundText')} />, 404);
   });
 
   return app;

@@ -8,6 +8,7 @@ import { catalogRoutes } from './routes/catalogs.ts';
 import { computeRoutes } from './routes/compute.ts';
 import { healthRoutes } from './routes/health.ts';
 import { importRoutes } from './routes/imports.ts';
+import { mapRoutes } from './routes/maps.ts';
 import { probeRoutes } from './routes/probe.ts';
 import { runRoutes } from './routes/runs.ts';
 import { scenarioRoutes } from './routes/scenario.ts';
@@ -54,7 +55,7 @@ export function createApp(ctx: ServiceContext, options: CreateAppOptions = {}): 
   );
 
   const api = new Hono();
-  for (const routes of [healthRoutes, studyRoutes, importRoutes, runRoutes, computeRoutes, scenarioRoutes, probeRoutes, catalogRoutes]) {
+  for (const routes of [healthRoutes, studyRoutes, importRoutes, runRoutes, mapRoutes, computeRoutes, scenarioRoutes, probeRoutes, catalogRoutes]) {
     api.route('/', routes(ctx));
   }
   app.route('/api', api);

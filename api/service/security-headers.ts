@@ -9,7 +9,13 @@ import { secureHeaders } from 'hono/secure-headers';
 export const CONTENT_SECURITY_POLICY =
   "default-src 'self'; script-src 'self'; style-src 'self'; img-src 'self' data:; frame-ancestors 'none'; base-uri 'none'; form-action 'self'";
 
-/** hono's secure-headers middleware set to the policy above, with nosniff, DENY and no-referrer. */
+/**
+ * No URL of ours goes to another site, while this origin's own form posts keep their Origin:
+ * under no-referrer a browser sends "Origin: null" with them, which same-origin.ts must refuse.
+ */
+export const REFERRER_POLICY = 'same-origin';
+
+/** hono's secure-headers middleware set to the policy above, with nosniff, DENY and REFERRER_POLICY. */
 export const securityHeaders = () =>
   secureHeaders({
     contentSecurityPolicy: {
@@ -22,7 +28,7 @@ export const securityHeaders = () =>
       formAction: ["'self'"],
     },
     xContentTypeOptions: 'nosniff',
-    referrerPolicy: 'no-referrer',
+    referrerPolicy: REFERRER_POLICY,
     xFrameOptions: 'DENY',
     // Served over plain HTTP on a local network: an HSTS header would be ignored or, behind a
     // TLS proxy, is that proxy's decision.

@@ -11,7 +11,7 @@ export function BandSwatch(props: { readonly tr: Translator; readonly bandId: Sc
       <svg class="band-icon" viewBox="-8 -8 16 16" width="16" height="16" aria-hidden="true" focusable="false">
         <BandMarker shape={style.shape} fill={style.fill} size={6.5} />
       </svg>
-      <span class="band-name">{props.tr.t(`band.${props.bandId}`)}</span>
+      <span class="band-name">{props.tr.text(`band.${props.bandId}`)}</span>
     </span>
   );
 }

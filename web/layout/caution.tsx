@@ -5,9 +5,9 @@ export function Caution(props: { readonly tr: Translator; readonly compact?: boo
   const { tr } = props;
   return (
     <aside class={props.compact ? 'caution caution-compact' : 'caution'} aria-label={tr.t('caution.title')}>
-      <p class="caution-title">{tr.t('caution.title')}</p>
+      <p class="caution-title">{tr.text('caution.title')}</p>
       <p>
-        {tr.t('caution.text')} <a href="/limits">{tr.t('caution.limitsLink')}</a>.
+        {tr.text('caution.text')} <a href="/limits">{tr.text('caution.limitsLink')}</a>.
       </p>
     </aside>
   );

@@ -7,6 +7,8 @@ export type StudySection = 'overview' | 'scenario' | 'catalog' | 'edit';
 export interface PageShellProps {
   readonly tr: Translator;
   readonly title: string;
+  /** "en" when the title is English standing in for a missing translation (Translator.fallbackLang). */
+  readonly titleLang?: string | undefined;
   /** This page's path and query, where the language switch comes back to. */
   readonly path: string;
   readonly toolVersion: string;
@@ -39,11 +41,7 @@ export function PageShell(props: PageShellProps) {
       <head>
         <meta charset="utf-8" />
         <meta name="viewport" content="width=device-width, initial-scale=1" />
-        <title>{`${props.title} · ${tr.t('site.name')}`}</title>
-        {/* The service answers with Referrer-Policy: no-referrer, under which a browser sends
-            "Origin: null" with form posts, and the same-origin check refuses them; within this
-            origin the pages need their own origin sent. */}
-        <meta name="referrer" content="same-origin" />
+        <title lang={props.titleLang}>{`${props.title} · ${tr.t('site.name')}`}</title>
         <link rel="icon" href="data:," />
         <link rel="stylesheet" href="/static/tremora.css" />
         {(props.styles ?? []).map((href) => (
@@ -53,27 +51,27 @@ export function PageShell(props: PageShellProps) {
       </head>
       <body class={props.bodyClass}>
         <a class="skip-link" href="#main">
-          {tr.t('site.skip')}
+          {tr.text('site.skip')}
         </a>
         <header class="site-header">
           <div class="brand">
             <a href="/" class="brand-name">
-              {tr.t('site.name')}
+              {tr.text('site.name')}
             </a>
-            <span class="brand-tagline">{tr.t('site.tagline')}</span>
+            <span class="brand-tagline">{tr.text('site.tagline')}</span>
           </div>
           <nav aria-label={tr.t('nav.main')} class="main-nav">
             <ul>
               <li>
-                <a href="/">{tr.t('nav.studies')}</a>
+                <a href="/">{tr.text('nav.studies')}</a>
               </li>
               <li>
-                <a href="/limits">{tr.t('nav.limits')}</a>
+                <a href="/limits">{tr.text('nav.limits')}</a>
               </li>
             </ul>
           </nav>
           <form class="lang-switch" action="/language" method="get">
-            <label for="lang-select">{tr.t('lang.label')}</label>
+            <label for="lang-select">{tr.text('lang.label')}</label>
             <select id="lang-select" name="lang">
               {LANGUAGES.map((l) => (
                 <option value={l.code} lang={l.code} selected={l.code === tr.lang}>
@@ -82,7 +80,7 @@ export function PageShell(props: PageShellProps) {
               ))}
             </select>
             <input type="hidden" name="back" value={props.path} />
-            <button type="submit">{tr.t('lang.change')}</button>
+            <button type="submit">{tr.text('lang.change')}</button>
           </form>
         </header>
         {study && (
@@ -92,7 +90,7 @@ export function PageShell(props: PageShellProps) {
               {STUDY_SECTIONS.map((s) => (
                 <li>
                   <a href={`/studies/${study.id}${s.suffix}`} aria-current={props.section === s.id ? 'page' : undefined}>
-                    {tr.t(s.key)}
+                    {tr.text(s.key)}
                   </a>
                 </li>
               ))}
@@ -105,9 +103,9 @@ export function PageShell(props: PageShellProps) {
         </main>
         <footer class="site-footer">
           <p class="footer-caution">
-            <strong>{tr.t('caution.short')}</strong> <a href="/limits">{tr.t('caution.limitsLink')}</a>.
+            <strong>{tr.text('caution.short')}</strong> <a href="/limits">{tr.text('caution.limitsLink')}</a>.
           </p>
-          <p>{tr.t('footer.version', { version: props.toolVersion })}</p>
+          <p>{tr.text('footer.version', { version: props.toolVersion })}</p>
         </footer>
       </body>
     </html>

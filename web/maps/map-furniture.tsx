@@ -20,14 +20,14 @@ export function MapFurniture(props: { readonly frame: MapFrame; readonly tr: Tra
         <text x={x0} y={y0 - 8} font-size={12} fill={INK}>
           0
         </text>
-        <text x={x0 + barPx} y={y0 - 8} font-size={12} fill={INK} text-anchor="middle">
+        <text x={x0 + barPx} y={y0 - 8} font-size={12} fill={INK} text-anchor="middle" lang={tr.fallbackLang('map.scale')}>
           {tr.t('map.scale', { km: tr.number(km) })}
         </text>
       </g>
       <g class="north-arrow" transform={`translate(${nx},${ny})`}>
         <circle r={17} cy={12} fill={PAPER} opacity={0.85} />
         <polygon points="0,-2 7,18 0,13 -7,18" fill={INK} />
-        <text y={30} font-size={11} fill={INK} text-anchor="middle">
+        <text y={30} font-size={11} fill={INK} text-anchor="middle" lang={tr.fallbackLang('map.north')}>
           {tr.t('map.north')}
         </text>
       </g>

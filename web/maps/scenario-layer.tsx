@@ -29,14 +29,14 @@ export function ScenarioLegend(props: { readonly tr: Translator }) {
   const { tr } = props;
   return (
     <div class="map-legend">
-      <h3 class="legend-title">{tr.t('map.shaking')}</h3>
+      <h3 class="legend-title">{tr.text('map.shaking')}</h3>
       <ul class="legend-classes">
         {MMI_CLASSES.map((c) => (
           <li>
             <svg class="legend-symbol" viewBox="0 0 28 16" width="28" height="16" aria-hidden="true" focusable="false">
               <rect x={1} y={1} width={26} height={14} fill={DUSK[c.step]} stroke="#5d5a6b" />
             </svg>{' '}
-            {`MMI ${c.label}`} · {tr.t(`mmi.${c.from === 1 ? 2 : c.from}.name` as 'mmi.1.name')}
+            {`MMI ${c.label}`} · {tr.text(`mmi.${c.from === 1 ? 2 : c.from}.name` as 'mmi.1.name')}
           </li>
         ))}
       </ul>

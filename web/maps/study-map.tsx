@@ -68,7 +68,9 @@ export function StudyMap(props: StudyMapProps) {
       aria-labelledby={titleId}
       font-family="inherit"
     >
-      <title id={titleId}>{tr.t('map.title', { name: study.name })}</title>
+      <title id={titleId} lang={tr.fallbackLang('map.title')}>
+        {tr.t('map.title', { name: study.name })}
+      </title>
       <defs>
         <ZoneHatch id={hatch} />
       </defs>
@@ -170,15 +172,15 @@ export function StudyMapLegend(props: { readonly tr: Translator; readonly idPref
   );
   return (
     <div class="map-legend">
-      <h3 class="legend-title">{tr.t('map.legend')}</h3>
+      <h3 class="legend-title">{tr.text('map.legend')}</h3>
       <svg width="0" height="0" class="defs-only" aria-hidden="true" focusable="false">
         <defs>
           <ZoneHatch id={hatch} />
         </defs>
       </svg>
       <ul>
-        {(study.outline?.length ?? 0) > 0 && <li>{swatch(<rect x={1} y={1} width={26} height={14} fill={MAP_COLOURS.land} stroke={MAP_COLOURS.coast} />)} {tr.t('map.land')}</li>}
-        <li>{swatch(<rect x={1} y={1} width={26} height={14} fill={MAP_COLOURS.sea} stroke={MAP_COLOURS.grid} />)} {tr.t('map.sea')}</li>
+        {(study.outline?.length ?? 0) > 0 && <li>{swatch(<rect x={1} y={1} width={26} height={14} fill={MAP_COLOURS.land} stroke={MAP_COLOURS.coast} />)} {tr.text('map.land')}</li>}
+        <li>{swatch(<rect x={1} y={1} width={26} height={14} fill={MAP_COLOURS.sea} stroke={MAP_COLOURS.grid} />)} {tr.text('map.sea')}</li>
         {has('fault', 'interface') && (
           <li>
             {swatch(
@@ -187,33 +189,33 @@ export function StudyMapLegend(props: { readonly tr: Translator; readonly idPref
                 <line x1={2} y1={8} x2={26} y2={8} stroke={INK} stroke-width={3} stroke-dasharray="10 4" />
               </>,
             )}{' '}
-            {tr.t('map.interface')}
+            {tr.text('map.interface')}
           </li>
         )}
-        {has('fault', 'crustal') && <li>{swatch(<line x1={2} y1={8} x2={26} y2={8} stroke={INK} stroke-width={2} />)} {tr.t('map.fault')}</li>}
+        {has('fault', 'crustal') && <li>{swatch(<line x1={2} y1={8} x2={26} y2={8} stroke={INK} stroke-width={2} />)} {tr.text('map.fault')}</li>}
         {has('zone') && (
           <li>
-            {swatch(<rect x={1} y={1} width={26} height={14} fill={`url(#${hatch})`} fill-opacity={0.6} stroke={MAP_COLOURS.zoneHatch} stroke-dasharray="5 3" />)} {tr.t('map.zone')}
+            {swatch(<rect x={1} y={1} width={26} height={14} fill={`url(#${hatch})`} fill-opacity={0.6} stroke={MAP_COLOURS.zoneHatch} stroke-dasharray="5 3" />)} {tr.text('map.zone')}
           </li>
         )}
-        {has('point') && <li>{swatch(<path d="M9,3L19,13M9,13L19,3" stroke={INK} stroke-width={2} />)} {tr.t('map.point')}</li>}
+        {has('point') && <li>{swatch(<path d="M9,3L19,13M9,13L19,3" stroke={INK} stroke-width={2} />)} {tr.text('map.point')}</li>}
         {props.bands ? (
           <li>
-            {tr.t('map.community')}:
+            {tr.text('map.community')}:
             <ul class="legend-bands">
               {(['refer-first', 'refer-soon', 'prepare', 'inform'] as const).map((id) => (
                 <li>
-                  {swatch(<BandMarker shape={BAND_STYLES[id].shape} fill={BAND_STYLES[id].fill} size={6} x={14} y={8} />)} {tr.t(`band.${id}`)}
+                  {swatch(<BandMarker shape={BAND_STYLES[id].shape} fill={BAND_STYLES[id].fill} size={6} x={14} y={8} />)} {tr.text(`band.${id}`)}
                 </li>
               ))}
             </ul>
           </li>
         ) : (
-          <li>{swatch(<BandMarker shape="circle" fill={PAPER} size={6} x={14} y={8} />)} {tr.t('overview.communities')}</li>
+          <li>{swatch(<BandMarker shape="circle" fill={PAPER} size={6} x={14} y={8} />)} {tr.text('overview.communities')}</li>
         )}
         {props.extra}
       </ul>
-      <p class="legend-note">{tr.t('map.projection')}</p>
+      <p class="legend-note">{tr.text('map.projection')}</p>
     </div>
   );
 }

@@ -27,7 +27,9 @@ export function FrequencyMagnitudePlot(props: { readonly tr: Translator; readonl
   const titleId = `${props.idPrefix}-title`;
   return (
     <svg class="plot" viewBox={`0 0 ${width} ${height}`} width={width} height={height} role="img" aria-labelledby={titleId}>
-      <title id={titleId}>{tr.t('catalog.plot')}</title>
+      <title id={titleId} lang={tr.fallbackLang('catalog.plot')}>
+        {tr.t('catalog.plot')}
+      </title>
       <Axis
         orientation="bottom"
         ticks={x.ticks(8)}
@@ -36,6 +38,7 @@ export function FrequencyMagnitudePlot(props: { readonly tr: Translator; readonl
         across={[MARGIN.top, height - MARGIN.bottom]}
         at={height - MARGIN.bottom}
         title={tr.t('plot.magnitude')}
+        titleLang={tr.fallbackLang('plot.magnitude')}
         titleAt={[(MARGIN.left + width - MARGIN.right) / 2, height - 10]}
       />
       <Axis
@@ -46,10 +49,11 @@ export function FrequencyMagnitudePlot(props: { readonly tr: Translator; readonl
         across={[MARGIN.left, width - MARGIN.right]}
         at={MARGIN.left}
         title={tr.t('plot.perYear')}
+        titleLang={tr.fallbackLang('plot.perYear')}
         titleAt={[18, (MARGIN.top + height - MARGIN.bottom) / 2]}
       />
       <line x1={x(props.mc)} x2={x(props.mc)} y1={MARGIN.top} y2={height - MARGIN.bottom} stroke={MAP_COLOURS.returnPeriod} stroke-dasharray="6 4" stroke-width={1.2} />
-      <text x={x(props.mc) + 4} y={MARGIN.top + 14} font-size={12} fill={MAP_COLOURS.axis}>
+      <text x={x(props.mc) + 4} y={MARGIN.top + 14} font-size={12} fill={MAP_COLOURS.axis} lang={tr.fallbackLang('plot.mcLine')}>
         {`${tr.t('plot.mcLine')} M ${tr.number(props.mc, 1)}`}
       </text>
       {fitPath && <path d={fitPath} stroke={DUSK[5]} stroke-width={2.5} fill="none" class="fit-line" />}
@@ -81,11 +85,17 @@ export function FrequencyMagnitudeLegend(props: { readonly tr: Translator }) {
     </svg>
   );
   return (
-    <ul class="plot-legend" aria-label={tr.t('plot.legend')}>
-      <li>{symbol(<circle cx={14} cy={6} r={4} fill={DUSK[6]} />)} {tr.t('plot.cumulative')}</li>
-      <li>{symbol(<rect x={10} y={2} width={8} height={8} fill={PAPER} stroke={INK} />)} {tr.t('plot.incremental')}</li>
-      <li>{symbol(<line x1={1} y1={6} x2={27} y2={6} stroke={DUSK[5]} stroke-width={2.5} />)} {tr.t('plot.fitLine')}</li>
-      <li>{symbol(<line x1={1} y1={6} x2={27} y2={6} stroke={MAP_COLOURS.returnPeriod} stroke-dasharray="6 4" />)} {tr.t('plot.mcLine')}</li>
-    </ul>
+    <>
+      {/* Named by a hidden element rather than aria-label, which cannot mark an English stand-in's language. */}
+      <span id="fm-legend-name" hidden>
+        {tr.text('plot.legend')}
+      </span>
+      <ul class="plot-legend" aria-labelledby="fm-legend-name">
+        <li>{symbol(<circle cx={14} cy={6} r={4} fill={DUSK[6]} />)} {tr.text('plot.cumulative')}</li>
+        <li>{symbol(<rect x={10} y={2} width={8} height={8} fill={PAPER} stroke={INK} />)} {tr.text('plot.incremental')}</li>
+        <li>{symbol(<line x1={1} y1={6} x2={27} y2={6} stroke={DUSK[5]} stroke-width={2.5} />)} {tr.text('plot.fitLine')}</li>
+        <li>{symbol(<line x1={1} y1={6} x2={27} y2={6} stroke={MAP_COLOURS.returnPeriod} stroke-dasharray="6 4" />)} {tr.text('plot.mcLine')}</li>
+      </ul>
+    </>
   );
 }

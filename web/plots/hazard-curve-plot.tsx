@@ -46,8 +46,12 @@ export function HazardCurvePlot(props: HazardCurvePlotProps) {
   const descId = `${props.idPrefix}-desc`;
   return (
     <svg class="plot" viewBox={`0 0 ${width} ${height}`} width={width} height={height} role="img" aria-labelledby={`${titleId} ${descId}`}>
-      <title id={titleId}>{tr.t('community.curve')}</title>
-      <desc id={descId}>{`${tr.t('plot.pga')}; ${tr.t('plot.annualRate')}.`}</desc>
+      <title id={titleId} lang={tr.fallbackLang('community.curve')}>
+        {tr.t('community.curve')}
+      </title>
+      <desc id={descId} lang={tr.fallbackLang('plot.pga')}>
+        {`${tr.t('plot.pga')}; ${tr.t('plot.annualRate')}.`}
+      </desc>
       <Axis
         orientation="bottom"
         ticks={logTicks(x)}
@@ -56,6 +60,7 @@ export function HazardCurvePlot(props: HazardCurvePlotProps) {
         across={[MARGIN.top, height - MARGIN.bottom]}
         at={height - MARGIN.bottom}
         title={tr.t('plot.pga')}
+        titleLang={tr.fallbackLang('plot.pga')}
         titleAt={[(MARGIN.left + width - MARGIN.right) / 2, height - 10]}
       />
       <Axis
@@ -66,6 +71,7 @@ export function HazardCurvePlot(props: HazardCurvePlotProps) {
         across={[MARGIN.left, width - MARGIN.right]}
         at={MARGIN.left}
         title={tr.t('plot.annualRate')}
+        titleLang={tr.fallbackLang('plot.annualRate')}
         titleAt={[18, (MARGIN.top + height - MARGIN.bottom) / 2]}
       />
       <g class="branches">
@@ -83,7 +89,7 @@ export function HazardCurvePlot(props: HazardCurvePlotProps) {
           return (
             <g data-return-period={years}>
               <line x1={MARGIN.left} x2={width - MARGIN.right} y1={yy} y2={yy} stroke={MAP_COLOURS.returnPeriod} stroke-width={1.2} stroke-dasharray="6 4" />
-              <text x={width - MARGIN.right - 4} y={yy - 5} text-anchor="end" font-size={12} fill={MAP_COLOURS.axis} paint-order="stroke" stroke={PAPER} stroke-width={3}>
+              <text x={width - MARGIN.right - 4} y={yy - 5} text-anchor="end" font-size={12} fill={MAP_COLOURS.axis} paint-order="stroke" stroke={PAPER} stroke-width={3} lang={tr.fallbackLang('plot.returnPeriod')}>
                 {tr.t('plot.returnPeriod', { years: tr.number(years) })}
               </text>
               {level != null && level >= (levels[0] as number) && (
@@ -110,10 +116,16 @@ export function HazardCurveLegend(props: { readonly tr: Translator; readonly bra
     </svg>
   );
   return (
-    <ul class="plot-legend" aria-label={tr.t('plot.legend')}>
-      <li>{sample(MAP_COLOURS.mean, 3)} {tr.t('plot.mean')}</li>
-      {props.branches > 0 && <li>{sample(MAP_COLOURS.branch, 1.5)} {tr.t('plot.branch', { n: tr.count(props.branches) })}</li>}
-      <li>{sample(MAP_COLOURS.returnPeriod, 1.2, '6 4')} {tr.t('plot.returnPeriodLegend')}</li>
-    </ul>
+    <>
+      {/* Named by a hidden element rather than aria-label, which cannot mark an English stand-in's language. */}
+      <span id="curve-legend-name" hidden>
+        {tr.text('plot.legend')}
+      </span>
+      <ul class="plot-legend" aria-labelledby="curve-legend-name">
+        <li>{sample(MAP_COLOURS.mean, 3)} {tr.text('plot.mean')}</li>
+        {props.branches > 0 && <li>{sample(MAP_COLOURS.branch, 1.5)} {tr.text('plot.branch', { n: tr.count(props.branches) })}</li>}
+        <li>{sample(MAP_COLOURS.returnPeriod, 1.2, '6 4')} {tr.text('plot.returnPeriodLegend')}</li>
+      </ul>
+    </>
   );
 }

@@ -40,6 +40,8 @@ export interface AxisProps {
   /** Where the axis line sits, px (y for bottom, x for left). */
   readonly at: number;
   readonly title: string;
+  /** "en" when the title is English standing in for a missing translation. */
+  readonly titleLang?: string | undefined;
   readonly titleAt: readonly [x: number, y: number];
 }
 
@@ -74,6 +76,7 @@ export function Axis(props: AxisProps) {
         text-anchor="middle"
         font-size={13}
         transform={bottom ? undefined : `rotate(-90 ${props.titleAt[0]} ${props.titleAt[1]})`}
+        lang={props.titleLang}
       >
         {props.title}
       </text>

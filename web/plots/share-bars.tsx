@@ -1,8 +1,9 @@
+import type { Child } from 'hono/jsx';
 import { DUSK, INK } from '../style/palette.ts';
 import type { Translator } from '../text/translator.ts';
 
 export interface ShareBar {
-  readonly label: string;
+  readonly label: Child;
   /** Share in [0, 1]. */
   readonly share: number;
 }
@@ -11,11 +12,11 @@ export interface ShareBar {
  * A plain bar list: each row's name, a bar as long as its share and the percentage in words
  * beside it, so the bar only repeats what the text says.
  */
-export function ShareBars(props: { readonly tr: Translator; readonly bars: readonly ShareBar[]; readonly label: string }) {
+export function ShareBars(props: { readonly tr: Translator; readonly bars: readonly ShareBar[]; /** The id of the heading that names the list. */ readonly labelledBy: string }) {
   const { tr } = props;
   const barWidth = 260;
   return (
-    <ul class="share-bars" aria-label={props.label}>
+    <ul class="share-bars" aria-labelledby={props.labelledBy}>
       {props.bars.map((b) => (
         <li>
           <span class="share-name">{b.label}</span>
@@ -23,7 +24,7 @@ export function ShareBars(props: { readonly tr: Translator; readonly bars: reado
             <rect x={0} y={1} width={barWidth} height={12} fill={DUSK[0]} stroke={DUSK[2]} />
             <rect x={0} y={1} width={Math.max(1, b.share * barWidth)} height={12} fill={DUSK[5]} stroke={INK} stroke-width={0.5} />
           </svg>
-          <span class="share-value">{tr.t('chance.percent', { p: tr.number(Math.round(b.share * 100)) })}</span>
+          <span class="share-value">{tr.text('chance.percent', { p: tr.number(Math.round(b.share * 100)) })}</span>
         </li>
       ))}
     </ul>

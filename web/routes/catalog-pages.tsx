@@ -46,7 +46,7 @@ export function catalogPages(app: Hono, kit: PageKit): void {
     const tr = kit.tr(c);
     const id = c.req.param('id') as string;
     const data = readStudy(ctx, id);
-    if (!data || !data.ok) return { response: kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={tr.t('error.studyNotFound', { id })} />, 404) };
+    if (!data || !data.ok) return { response: kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={tr.text('error.studyNotFound', { id })} />, 404) };
     return { data };
   };
 

@@ -58,12 +58,12 @@ export function editorPages(app: Hono, kit: PageKit): void {
     const tr = kit.tr(c);
     const id = c.req.param('id') as string;
     const data = readStudy(ctx, id);
-    if (!data) return { response: kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={tr.t('error.studyNotFound', { id })} />, 404) };
+    if (!data) return { response: kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={tr.text('error.studyNotFound', { id })} />, 404) };
     if (!data.ok) {
       return {
         response: kit.render(
           c,
-          <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={data.record.name} text={tr.t('editor.otherProblems')} details={data.issues.map((i) => `${i.path}: ${i.message}`)} />,
+          <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={data.record.name} text={tr.text('editor.otherProblems')} details={data.issues.map((i) => `${i.path}: ${i.message}`)} />,
           422,
         ),
       };
@@ -103,7 +103,7 @@ export function editorPages(app: Hono, kit: PageKit): void {
         studyId={data.record.id}
         studyName={data.study.name}
         action={existing ? `/studies/${data.record.id}/edit/communities/${encodeURIComponent(existing.id)}` : `/studies/${data.record.id}/edit/new-community`}
-        heading={existing ? tr.t('editor.edit', { name: existing.name }) : tr.t('editor.add')}
+        editing={existing?.name}
         values={values}
         fieldIssues={byField}
         otherIssues={others}

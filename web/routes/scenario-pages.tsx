@@ -43,7 +43,7 @@ export function scenarioPages(app: Hono, kit: PageKit): void {
     const id = c.req.param('id') as string;
     const data = readStudy(ctx, id);
     if (!data || !data.ok) {
-      return kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={tr.t('error.studyNotFound', { id })} />, 404);
+      return kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={tr.text('error.studyNotFound', { id })} />, 404);
     }
     const { study } = data;
     const first = study.sources[0];

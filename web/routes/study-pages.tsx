@@ -1,4 +1,5 @@
 import type { Context, Hono } from 'hono';
+import type { Child } from 'hono/jsx';
 import { InvalidInput, StudyTooLarge, TremoraError } from '../../api/engine/errors.ts';
 import { runStudy } from '../../api/service/study-input.ts';
 import { communityPageData } from '../data/community-data.ts';
@@ -22,7 +23,7 @@ export const COMMUNITY_MAP = { width: 560, maxHeight: 460, padding: 30, fit: 'co
 export function studyPages(app: Hono, kit: PageKit): void {
   const { ctx } = kit;
 
-  const notFound = (c: Context, text: string) => {
+  const notFound = (c: Context, text: Child) => {
     const tr = kit.tr(c);
     return kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={text} />, 404);
   };
@@ -30,7 +31,7 @@ export function studyPages(app: Hono, kit: PageKit): void {
     const tr = kit.tr(c);
     return kit.render(
       c,
-      <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={data.record.name} text={tr.t('editor.otherProblems')} details={data.issues.map((i) => `${i.path}: ${i.message}`)} />,
+      <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={data.record.name} text={tr.text('editor.otherProblems')} details={data.issues.map((i) => `${i.path}: ${i.message}`)} />,
       422,
     );
   };
@@ -39,7 +40,7 @@ export function studyPages(app: Hono, kit: PageKit): void {
     const tr = kit.tr(c);
     const id = c.req.param('id') as string;
     const data = readStudy(ctx, id);
-    if (!data) return notFound(c, tr.t('error.studyNotFound', { id }));
+    if (!data) return notFound(c, tr.text('error.studyNotFound', { id }));
     if (!data.ok) return invalid(c, data);
     const runs = readRuns(ctx, kit.results, id, data.hash);
     const askedSort = c.req.query('sort');
@@ -72,10 +73,10 @@ export function studyPages(app: Hono, kit: PageKit): void {
   app.post('/studies/:id/screen', async (c) => {
     const id = c.req.param('id');
     const record = ctx.store.studies.get(id);
-    if (!record) return notFound(c, kit.tr(c).t('error.studyNotFound', { id }));
+    if (!record) return notFound(c, kit.tr(c).text('error.studyNotFound', { id }));
     try {
       const run = await startScreening(ctx, record);
-      if (!run) return notFound(c, kit.tr(c).t('error.studyNotFound', { id }));
+      if (!run) return notFound(c, kit.tr(c).text('error.studyNotFound', { id }));
       return c.redirect(`/studies/${id}/runs/${run.id}`, 303);
     } catch (error) {
       if (error instanceof InvalidInput) return overview(c, error.issues.map((i) => `${i.path}: ${i.message}`).join('; '));
@@ -89,7 +90,7 @@ export function studyPages(app: Hono, kit: PageKit): void {
     const id = c.req.param('id');
     const record = ctx.store.studies.get(id);
     const run = ctx.store.runs.get(c.req.param('runId'));
-    if (!record || !run || run.studyId !== id) return notFound(c, tr.t('error.notFoundText'));
+    if (!record || !run || run.studyId !== id) return notFound(c, tr.text('error.notFoundText'));
     return kit.render(c, <RunView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} studyId={id} studyName={record.name} run={run} />);
   });
 
@@ -99,7 +100,7 @@ export function studyPages(app: Hono, kit: PageKit): void {
     const id = c.req.param('id') as string;
     const communityId = c.req.param('cid') as string;
     const data = readStudy(ctx, id);
-    if (!data) return { kind: 'response' as const, response: notFound(c, tr.t('error.studyNotFound', { id })) };
+    if (!data) return { kind: 'response' as const, response: notFound(c, tr.text('error.studyNotFound', { id })) };
     if (!data.ok) return { kind: 'response' as const, response: invalid(c, data) };
     const runs = readRuns(ctx, kit.results, id, data.hash);
     const screening = runs.screening;
@@ -108,11 +109,11 @@ export function studyPages(app: Hono, kit: PageKit): void {
     const runInputs = screening ? ctx.store.runs.inputs(screening.run.id) : undefined;
     const ranStudy = runInputs ? runStudy(runInputs, ctx.models).study : undefined;
     const community = ranStudy?.communities.find((x) => x.id === communityId) ?? data.study.communities.find((x) => x.id === communityId);
-    if (!community) return { kind: 'response' as const, response: notFound(c, tr.t('error.communityNotFound', { id: communityId })) };
+    if (!community) return { kind: 'response' as const, response: notFound(c, tr.text('error.communityNotFound', { id: communityId })) };
     if (!screening || !result || !ranStudy) {
       return {
         kind: 'response' as const,
-      response: kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={community.name} text={tr.t('community.noRun')} />, 409),
+      response: kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={community.name} text={tr.text('community.noRun')} />, 409),
       };
     }
     const felt = feltData(ctx, ranStudy, studyCatalog(ctx, id));

@@ -362,6 +362,22 @@ export const EN = {
   'map.noHazardLayer': 'No hazard map has been computed for this study.',
   'map.shaking': 'Likely shaking (median MMI)',
 
+  'access.title': 'Access to this service',
+  'access.intro':
+    'This service is shared. Anyone who can reach it may read its pages. To change a study or run a screening, enter the access token you were given.',
+  'access.needed': 'You need access to do that. Enter the access token, then do it again.',
+  'access.token': 'Access token',
+  'access.tokenHelp': 'The person who runs this service can give it to you.',
+  'access.enter': 'Get access',
+  'access.missing': 'Type the access token first.',
+  'access.wrong': 'That access token is not right. Check it and try again.',
+  'access.granted': 'This browser has access. You can change studies and run screenings.',
+  'access.kept': 'It keeps this access for {days} days, or until you end it here.',
+  'access.end': 'End access on this browser',
+  'access.ended': 'This browser no longer has access.',
+  'access.open': 'This service answers only this computer, so it needs no access token.',
+  'access.back': 'Go back to where you were',
+
   'error.notFound': 'Page not found',
   'error.notFoundText': 'There is no page at this address.',
   'error.studyNotFound': 'There is no study with id “{id}”.',

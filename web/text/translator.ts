@@ -1,3 +1,4 @@
+import { jsx, type Child } from 'hono/jsx';
 import { EN, type TextKey } from './en.ts';
 import { FR } from './fr.ts';
 import { naturalFrequency, percentText } from '../format/natural-frequency.ts';
@@ -25,6 +26,25 @@ export function fill(template: string, values: TextValues = {}): string {
   return template.replace(/\{(\w+)\}/g, (whole, name: string) => (name in values ? String(values[name]) : whole));
 }
 
+/** Values filled into page content: plain values, or content made by Translator.text. */
+export type ContentValues = Readonly<Record<string, Child>>;
+
+/** Like fill, for page content: the template's pieces and its values, in order. */
+function fillPieces(template: string, values: ContentValues, wrap: (value: Child) => Child): Child[] {
+  const pieces: Child[] = [];
+  let from = 0;
+  for (const match of template.matchAll(/\{(\w+)\}/g)) {
+    const name = match[1] as string;
+    if (!(name in values)) continue;
+    pieces.push(template.slice(from, match.index), wrap(values[name]));
+    from = match.index + match[0].length;
+  }
+  pieces.push(template.slice(from));
+  return pieces.filter((piece) => piece !== '');
+}
+
+const isPlain = (piece: Child): piece is string | number => typeof piece === 'string' || typeof piece === 'number';
+
 export interface Translator {
   readonly lang: LanguageCode;
   /** The BCP 47 tag for number and date formats. */
@@ -33,6 +53,21 @@ export interface Translator {
   t(key: TextKey, values?: TextValues): string;
   /** Whether this language's own bundle has `key` (false: the English fallback is used). */
   has(key: TextKey): boolean;
+  /**
+   * The text for `key` as page content. Where English stands in for a missing translation it
+   * comes inside <span lang="en">, so that readers and screen readers know its language
+   * (WCAG 2.2, success criterion 3.1.2, Language of Parts); the values filled into such a
+   * text keep this page's language. Attributes, <title>, <option> and SVG text cannot hold
+   * a span: those take t() and, where needed, lang={fallbackLang(key)} on their element.
+   */
+  text(key: TextKey, values?: ContentValues): Child;
+  /** "en" when English stands in for `key` on a page in another language; else undefined. */
+  fallbackLang(key: TextKey): LanguageCode | undefined;
+  /**
+   * Text that is English whatever the page's language (the service's messages: problems with
+   * an input, warnings, why a run failed), marked as such on a page in another language.
+   */
+  english(message: string): Child;
   number(value: number, fractionDigits?: number): string;
   /** Whole numbers 0–10 in words, larger in digits (format/number-words.ts). */
   count(value: number): string;
@@ -55,6 +90,16 @@ export function translator(lang: LanguageCode): Translator {
     locale,
     t,
     has: (key) => own[key] !== undefined,
+    text: (key, values = {}) => {
+      if (own[key] !== undefined) {
+        const pieces = fillPieces(own[key], values, (value) => value);
+        return pieces.every(isPlain) ? pieces.join('') : pieces;
+      }
+      const pageLanguage = (value: Child) => (isPlain(value) ? jsx('span', { lang }, String(value)) : value);
+      return jsx('span', { lang: DEFAULT_LANGUAGE }, ...fillPieces(EN[key], values, pageLanguage));
+    },
+    fallbackLang: (key) => (own[key] === undefined ? DEFAULT_LANGUAGE : undefined),
+    english: (message) => (lang === DEFAULT_LANGUAGE ? message : jsx('span', { lang: DEFAULT_LANGUAGE }, message)),
     number: (value, fractionDigits = 0) =>
       new Intl.NumberFormat(locale, { minimumFractionDigits: fractionDigits, maximumFractionDigits: fractionDigits }).format(value),
     count: (value) => numberInWords(value, { smallNumbers: text('numbers.small').split('|'), locale }),

@@ -1,3 +1,4 @@
+import type { Child } from 'hono/jsx';
 import type { ZoneRecurrence } from '../../api/engine/catalog/zone-recurrence.ts';
 import type { InputIssue } from '../../api/engine/errors.ts';
 import type { Study } from '../../api/engine/model.ts';
@@ -44,9 +45,9 @@ export function CatalogView(props: CatalogViewProps) {
   const otherZoneIssues = props.zoneIssues.filter((i) => !['polygon', 'mMax', 'depthKm', 'id', 'name'].includes(i.path));
   const polygons = [
     ...study.sources.filter((s) => s.kind === 'zone').map((s) => ({ value: s.id, label: s.name })),
-    ...((study.outline?.length ?? 0) > 0 ? [{ value: OUTLINE_CHOICE, label: tr.t('catalog.zoneOutline') }] : []),
+    ...((study.outline?.length ?? 0) > 0 ? [{ value: OUTLINE_CHOICE, label: tr.t('catalog.zoneOutline'), lang: tr.fallbackLang('catalog.zoneOutline') }] : []),
   ];
-  const zoneField = (name: keyof ZoneForm, label: string, inputmode?: 'decimal') => (
+  const zoneField = (name: keyof ZoneForm, label: Child, inputmode?: 'decimal') => (
     <div class="field">
       <label for={`zone-${name}`}>{label}</label>
       <input
@@ -58,82 +59,89 @@ export function CatalogView(props: CatalogViewProps) {
         aria-invalid={zoneIssue(name).length > 0 ? 'true' : undefined}
         aria-describedby={zoneIssue(name).length > 0 ? `zone-${name}-problem` : undefined}
       />
-      <FieldProblems id={`zone-${name}-problem`} issues={zoneIssue(name)} />
+      <FieldProblems tr={tr} id={`zone-${name}-problem`} issues={zoneIssue(name)} />
     </div>
   );
   return (
-    <PageShell tr={tr} title={tr.t('catalog.title', { name: study.name })} path={props.path} toolVersion={props.toolVersion} study={{ id: studyId, name: study.name }} section="catalog" showsNumbers={fit !== undefined}>
-      <h1>{tr.t('catalog.title', { name: study.name })}</h1>
-      <p>{tr.t('catalog.intro')}</p>
+    <PageShell tr={tr} title={tr.t('catalog.title', { name: study.name })} titleLang={tr.fallbackLang('catalog.title')} path={props.path} toolVersion={props.toolVersion} study={{ id: studyId, name: study.name }} section="catalog" showsNumbers={fit !== undefined}>
+      <h1>{tr.text('catalog.title', { name: study.name })}</h1>
+      <p>{tr.text('catalog.intro')}</p>
       {props.zoneAdded && (
         <p class="notice" role="status">
-          {tr.t('catalog.zoneAdded')}
+          {tr.text('catalog.zoneAdded')}
         </p>
       )}
-      {catalog ? <p>{tr.t('catalog.attached', { file: catalog.fileName, format: catalog.format })}</p> : <p>{tr.t('catalog.none')}</p>}
+      {catalog ? <p>{tr.text('catalog.attached', { file: catalog.fileName, format: catalog.format })}</p> : <p>{tr.text('catalog.none')}</p>}
 
       <section aria-labelledby="catalog-upload-heading" class="upload">
-        <h2 id="catalog-upload-heading">{tr.t('catalog.upload')}</h2>
+        <h2 id="catalog-upload-heading">{tr.text('catalog.upload')}</h2>
         <form method="post" action={`/studies/${studyId}/catalog`} enctype="multipart/form-data">
           <div class="field">
-            <label for="catalog-file">{tr.t('catalog.file')}</label>
+            <label for="catalog-file">{tr.text('catalog.file')}</label>
             <input id="catalog-file" name="file" type="file" accept=".csv,.txt,.xml,.quakeml" aria-describedby={props.uploadIssues.length ? 'catalog-help catalog-problems' : 'catalog-help'} />
             <p id="catalog-help" class="help">
-              {tr.t('catalog.uploadHelp')}
+              {tr.text('catalog.uploadHelp')}
             </p>
-            <FieldProblems id="catalog-problems" issues={props.uploadIssues} />
+            <FieldProblems tr={tr} id="catalog-problems" issues={props.uploadIssues} />
           </div>
-          <button type="submit">{tr.t('catalog.load')}</button>
+          <button type="submit">{tr.text('catalog.load')}</button>
         </form>
         <form method="post" action={`/studies/${studyId}/catalog`} enctype="multipart/form-data" class="inline-form">
           <input type="hidden" name="demo" value="1" />
-          <button type="submit">{tr.t('catalog.useDemo')}</button>
+          <button type="submit">{tr.text('catalog.useDemo')}</button>
         </form>
-        <p class="help">{tr.t('catalog.demoOnly')}</p>
+        <p class="help">{tr.text('catalog.demoOnly')}</p>
       </section>
 
       {analysis && (
         <section aria-labelledby="catalog-summary-heading">
-          <h2 id="catalog-summary-heading">{tr.t('catalog.summary')}</h2>
+          <h2 id="catalog-summary-heading">{tr.text('catalog.summary')}</h2>
           <p data-loaded={analysis.load.summary.loaded} data-rejected={analysis.load.summary.rejected}>
-            {tr.t('catalog.loaded', { loaded: tr.number(analysis.load.summary.loaded), rejected: tr.number(analysis.load.summary.rejected) })}
+            {tr.text('catalog.loaded', { loaded: tr.number(analysis.load.summary.loaded), rejected: tr.number(analysis.load.summary.rejected) })}
           </p>
-          {analysis.load.summary.nonMoment > 0 && <p>{tr.t('catalog.nonMoment', { n: tr.number(analysis.load.summary.nonMoment) })}</p>}
+          {analysis.load.summary.nonMoment > 0 && <p>{tr.text('catalog.nonMoment', { n: tr.number(analysis.load.summary.nonMoment) })}</p>}
           {analysis.load.rejected.length > 0 && (
             <table class="data-table rejected">
-              <caption>{tr.t('catalog.rejectedCaption')}</caption>
+              <caption>{tr.text('catalog.rejectedCaption')}</caption>
               <thead>
                 <tr>
-                  <th scope="col">{tr.t('catalog.col.where')}</th>
-                  <th scope="col">{tr.t('catalog.col.why')}</th>
+                  <th scope="col">{tr.text('catalog.col.where')}</th>
+                  <th scope="col">{tr.text('catalog.col.why')}</th>
                 </tr>
               </thead>
               <tbody>
                 {analysis.load.rejected.slice(0, 100).map((r) => (
                   <tr data-line={r.line}>
                     <th scope="row">{r.where}</th>
-                    <td>{r.reasons.join('; ')}</td>
+                    <td>{tr.english(r.reasons.join('; '))}</td>
                   </tr>
                 ))}
               </tbody>
             </table>
           )}
           {result?.declustering && (
-            <p>{tr.t('catalog.declustered', { main: tr.number(result.declustering.mainshocks.length), removed: tr.number(result.declustering.removed.length) })}</p>
+            <p>{tr.text('catalog.declustered', { main: tr.number(result.declustering.mainshocks.length), removed: tr.number(result.declustering.removed.length) })}</p>
           )}
-          {analysis.problem && <p class="problem">{tr.t('catalog.tooFew', { reason: analysis.problem })}</p>}
+          {analysis.problem && <p class="problem">{tr.text('catalog.tooFew', { reason: analysis.problem })}</p>}
         </section>
       )}
 
       {fit && result && (
         <section aria-labelledby="catalog-fit-heading">
-          <h2 id="catalog-fit-heading">{tr.t('catalog.fit')}</h2>
+          <h2 id="catalog-fit-heading">{tr.text('catalog.fit')}</h2>
           <p class="fit-values" data-b={fit.bValue} data-sigma-b={fit.sigmaB} data-mc={result.completeness.mc}>
             {result.periods && result.periods.length > 0
-              ? tr.t('catalog.periods', { periods: result.periods.map((p) => tr.t('catalog.period', { m: tr.number(p.magnitude, 1), year: new Date(p.startMs).getUTCFullYear() })).join('; ') })
-              : tr.t('catalog.mc', { mc: tr.number(result.completeness.mc, 1) })}{' '}
-            {tr.t(fit.method === 'weichert' ? 'catalog.method.weichert' : 'catalog.method.akiUtsu')}{' '}
-            {tr.t('catalog.fitValues', {
+              ? tr.text('catalog.periods', {
+                  periods: result.periods.map((p, i) => (
+                    <>
+                      {i > 0 && '; '}
+                      {tr.text('catalog.period', { m: tr.number(p.magnitude, 1), year: new Date(p.startMs).getUTCFullYear() })}
+                    </>
+                  )),
+                })
+              : tr.text('catalog.mc', { mc: tr.number(result.completeness.mc, 1) })}{' '}
+            {tr.text(fit.method === 'weichert' ? 'catalog.method.weichert' : 'catalog.method.akiUtsu')}{' '}
+            {tr.text('catalog.fitValues', {
               b: tr.number(fit.bValue, 2),
               sigma: tr.number(fit.sigmaB, 2),
               a: tr.number(fit.aValue, 2),
@@ -152,39 +160,39 @@ export function CatalogView(props: CatalogViewProps) {
 
       {fit && (
         <section aria-labelledby="catalog-zone-heading">
-          <h2 id="catalog-zone-heading">{tr.t('catalog.zone')}</h2>
-          <p>{tr.t('catalog.zoneIntro')}</p>
+          <h2 id="catalog-zone-heading">{tr.text('catalog.zone')}</h2>
+          <p>{tr.text('catalog.zoneIntro')}</p>
           {polygons.length === 0 ? (
-            <p>{tr.t('catalog.noPolygon')}</p>
+            <p>{tr.text('catalog.noPolygon')}</p>
           ) : (
             <form method="post" action={`/studies/${studyId}/catalog/zone`} class="zone-form" novalidate>
               <div class="field">
-                <label for="zone-polygon">{tr.t('catalog.zonePolygon')}</label>
+                <label for="zone-polygon">{tr.text('catalog.zonePolygon')}</label>
                 <select id="zone-polygon" name="polygon">
                   {polygons.map((p) => (
-                    <option value={p.value} selected={p.value === props.zone.polygon}>
+                    <option value={p.value} selected={p.value === props.zone.polygon} lang={'lang' in p ? p.lang : undefined}>
                       {p.label}
                     </option>
                   ))}
                 </select>
-                <FieldProblems id="zone-polygon-problem" issues={zoneIssue('polygon')} />
+                <FieldProblems tr={tr} id="zone-polygon-problem" issues={zoneIssue('polygon')} />
               </div>
-              {zoneField('mMax', tr.t('catalog.zoneMMax'), 'decimal')}
-              {zoneField('depthKm', tr.t('catalog.zoneDepth'), 'decimal')}
-              {zoneField('id', tr.t('catalog.zoneId'))}
-              {zoneField('name', tr.t('catalog.zoneName'))}
-              <FieldProblems id="zone-problems" issues={otherZoneIssues} describe={(i) => `${i.path}: ${i.message}`} />
+              {zoneField('mMax', tr.text('catalog.zoneMMax'), 'decimal')}
+              {zoneField('depthKm', tr.text('catalog.zoneDepth'), 'decimal')}
+              {zoneField('id', tr.text('catalog.zoneId'))}
+              {zoneField('name', tr.text('catalog.zoneName'))}
+              <FieldProblems tr={tr} id="zone-problems" issues={otherZoneIssues} describe={(i) => tr.english(`${i.path}: ${i.message}`)} />
               {props.zoneFit && (
                 <p class="zone-result" data-b={props.zoneFit.bValue} data-rate={props.zoneFit.rate}>
-                  {tr.t('catalog.zoneResult', { summary: props.zoneFit.summary })}
+                  {tr.text('catalog.zoneResult', { summary: props.zoneFit.summary })}
                 </p>
               )}
               <p class="form-actions">
                 <button type="submit" name="action" value="fit">
-                  {tr.t('catalog.zoneFit')}
+                  {tr.text('catalog.zoneFit')}
                 </button>{' '}
                 <button type="submit" name="action" value="add" class="button-primary">
-                  {tr.t('catalog.zoneAdd')}
+                  {tr.text('catalog.zoneAdd')}
                 </button>
               </p>
             </form>

@@ -14,7 +14,8 @@ export interface CommunityFormViewProps {
   readonly studyName: string;
   /** Where the form posts. */
   readonly action: string;
-  readonly heading: string;
+  /** The name of the community being edited; absent when adding one. */
+  readonly editing?: string | undefined;
   readonly values: CommunityForm;
   /** Problems by field name ("lat", "vs30"...), and those of the row or study as a whole. */
   readonly fieldIssues: ReadonlyMap<string, readonly InputIssue[]>;
@@ -37,13 +38,15 @@ const MORE_FIELDS = [
 /** Add or edit one community; each problem is shown under its field (plain form post). */
 export function CommunityFormView(props: CommunityFormViewProps) {
   const { tr, values } = props;
+  const headingKey = props.editing === undefined ? 'editor.add' : 'editor.edit';
+  const heading = { name: props.editing ?? '' };
   const problems = (name: string) => props.fieldIssues.get(name) ?? [];
   const input = (f: { readonly name: keyof CommunityForm & string; readonly type: string; readonly inputmode?: 'decimal' | 'numeric' }) => {
     const own = problems(f.name);
     const problemId = `field-${f.name}-problem`;
     return (
       <div class={own.length > 0 ? 'field field-bad' : 'field'}>
-        <label for={`field-${f.name}`}>{tr.t(`editor.field.${f.name}` as TextKey)}</label>
+        <label for={`field-${f.name}`}>{tr.text(`editor.field.${f.name}` as TextKey)}</label>
         <input
           id={`field-${f.name}`}
           name={f.name}
@@ -54,26 +57,26 @@ export function CommunityFormView(props: CommunityFormViewProps) {
           aria-describedby={own.length > 0 ? problemId : undefined}
           autocomplete="off"
         />
-        <FieldProblems id={problemId} issues={own} />
+        <FieldProblems tr={tr} id={problemId} issues={own} />
       </div>
     );
   };
   return (
-    <PageShell tr={tr} title={props.heading} path={props.path} toolVersion={props.toolVersion} study={{ id: props.studyId, name: props.studyName }} section="edit">
-      <h1>{props.heading}</h1>
-      <p>{tr.t('editor.intro')}</p>
+    <PageShell tr={tr} title={tr.t(headingKey, heading)} titleLang={tr.fallbackLang(headingKey)} path={props.path} toolVersion={props.toolVersion} study={{ id: props.studyId, name: props.studyName }} section="edit">
+      <h1>{tr.text(headingKey, heading)}</h1>
+      <p>{tr.text('editor.intro')}</p>
       {(props.otherIssues.length > 0 || props.fieldIssues.size > 0) && (
         <p class="problem" role="alert">
-          {tr.t('editor.notSaved')}
+          {tr.text('editor.notSaved')}
         </p>
       )}
-      <FieldProblems id="form-problems" issues={props.otherIssues} describe={(i) => `${i.path}: ${i.message}`} />
+      <FieldProblems tr={tr} id="form-problems" issues={props.otherIssues} describe={(i) => tr.english(`${i.path}: ${i.message}`)} />
       <form method="post" action={props.action} class="community-form" novalidate>
         {TEXT_FIELDS.map(input)}
         <div class={problems('siteClass').length > 0 ? 'field field-bad' : 'field'}>
-          <label for="field-siteClass">{tr.t('editor.field.siteClass')}</label>
+          <label for="field-siteClass">{tr.text('editor.field.siteClass')}</label>
           <select id="field-siteClass" name="siteClass" aria-describedby={problems('siteClass').length > 0 ? 'field-siteClass-problem' : undefined}>
-            <option value="" selected={values.siteClass === ''}>
+            <option value="" selected={values.siteClass === ''} lang={tr.fallbackLang('editor.field.siteClassNone')}>
               {tr.t('editor.field.siteClassNone')}
             </option>
             {SITE_CLASSES.map((sc) => (
@@ -82,19 +85,19 @@ export function CommunityFormView(props: CommunityFormViewProps) {
               </option>
             ))}
           </select>
-          <FieldProblems id="field-siteClass-problem" issues={problems('siteClass')} />
+          <FieldProblems tr={tr} id="field-siteClass-problem" issues={problems('siteClass')} />
         </div>
         {MORE_FIELDS.map(input)}
         <div class="field field-check">
           <input id="field-coastal" name="coastal" type="checkbox" value="true" checked={values.coastal} />
-          <label for="field-coastal">{tr.t('editor.field.coastal')}</label>
-          <FieldProblems id="field-coastal-problem" issues={problems('coastal')} />
+          <label for="field-coastal">{tr.text('editor.field.coastal')}</label>
+          <FieldProblems tr={tr} id="field-coastal-problem" issues={problems('coastal')} />
         </div>
         <p class="form-actions">
           <button type="submit" class="button-primary">
-            {tr.t('editor.save')}
+            {tr.text('editor.save')}
           </button>{' '}
-          <a href={`/studies/${props.studyId}/edit`}>{tr.t('editor.cancel')}</a>
+          <a href={`/studies/${props.studyId}/edit`}>{tr.text('editor.cancel')}</a>
         </p>
       </form>
     </PageShell>

@@ -38,16 +38,16 @@ export function Headline(props: { readonly tr: Translator; readonly data: Commun
   return (
     <div class="headline-block">
       <p class="headline" data-probability={data.chances.VII} data-years={data.years}>
-        {tr.t('community.headline', { name: props.name, chance: vii.frequency, years: data.years, percent: vii.percent })}
+        {tr.text('community.headline', { name: props.name, chance: vii.frequency, years: data.years, percent: vii.percent })}
       </p>
-      <p>{tr.t('community.headlineStrongWhat')}</p>
-      <p class="other-chances-title">{tr.t('community.otherChances', { years: data.years })}</p>
+      <p>{tr.text('community.headlineStrongWhat')}</p>
+      <p class="other-chances-title">{tr.text('community.otherChances', { years: data.years })}</p>
       <ul class="other-chances">
         {(['VI', 'VII', 'VIII'] as const).map((roman) => {
           const c = tr.chance(data.chances[roman]);
           return (
             <li data-mmi={roman} data-probability={data.chances[roman]}>
-              {tr.t('community.chanceOf', { roman, frequency: c.frequency, percent: c.percent })}
+              {tr.text('community.chanceOf', { roman, frequency: c.frequency, percent: c.percent })}
             </li>
           );
         })}
@@ -66,22 +66,22 @@ export function ShakingLevels(props: { readonly tr: Translator; readonly data: C
         const chance = tr.chance(level.chance);
         return (
           <section class="level-card" data-return-period={level.returnPeriodYears} aria-labelledby={`level-${level.returnPeriodYears}`}>
-            <H id={`level-${level.returnPeriodYears}`}>{tr.t('community.level', { period: tr.number(level.returnPeriodYears) })}</H>
-            <p class="level-chance">{tr.t('community.levelChance', { frequency: chance.frequency, years: data.years, percent: chance.percent })}</p>
+            <H id={`level-${level.returnPeriodYears}`}>{tr.text('community.level', { period: tr.number(level.returnPeriodYears) })}</H>
+            <p class="level-chance">{tr.text('community.levelChance', { frequency: chance.frequency, years: data.years, percent: chance.percent })}</p>
             {level.mmiLevel === null ? (
-              <p>{tr.t('community.levelOffCurve')}</p>
+              <p>{tr.text('community.levelOffCurve')}</p>
             ) : (
               <>
                 <p class="level-mmi" data-mmi={level.mmi}>
-                  {tr.t('community.levelMmi', { roman: level.roman ?? '', name: tr.t(mmiKey(level.mmiLevel, 'name')) })}
+                  {tr.text('community.levelMmi', { roman: level.roman ?? '', name: tr.text(mmiKey(level.mmiLevel, 'name')) })}
                 </p>
                 <p>
-                  <strong>{tr.t('community.feels')}:</strong> {tr.t(mmiKey(level.mmiLevel, 'feel'))}
+                  <strong>{tr.text('community.feels')}:</strong> {tr.text(mmiKey(level.mmiLevel, 'feel'))}
                 </p>
                 <p>
-                  <strong>{tr.t('community.buildings')}:</strong> {tr.t(mmiKey(level.mmiLevel, 'buildings'))}
+                  <strong>{tr.text('community.buildings')}:</strong> {tr.text(mmiKey(level.mmiLevel, 'buildings'))}
                 </p>
-                {!props.compact && level.pgaG !== null && <p class="technical">{tr.t('community.pga', { g: tr.number(level.pgaG, 2) })}</p>}
+                {!props.compact && level.pgaG !== null && <p class="technical">{tr.text('community.pga', { g: tr.number(level.pgaG, 2) })}</p>}
               </>
             )}
           </section>
@@ -96,7 +96,7 @@ export function ProvenanceLine(props: { readonly tr: Translator; readonly proven
   const { tr, provenance } = props;
   return (
     <p class="provenance" data-input-hash={provenance.inputHash}>
-      {tr.t('provenance.line', {
+      {tr.text('provenance.line', {
         date: tr.date(provenance.finishedAt),
         version: provenance.toolVersion,
         hash: provenance.inputHash.slice(0, HASH_PREFIX_LENGTH),
@@ -117,48 +117,48 @@ export function CommunityView(props: CommunityViewProps) {
     <PageShell tr={tr} title={community.name} path={props.path} toolVersion={props.toolVersion} study={{ id: studyId, name: study.name }} showsNumbers={false}>
       <h1>{community.name}</h1>
       <p class="band-line">
-        {tr.t('band.label')}: <BandSwatch tr={tr} bandId={bandId} /> — {tr.t(`band.${bandId}.meaning` as TextKey)}
+        {tr.text('band.label')}: <BandSwatch tr={tr} bandId={bandId} /> — {tr.text(`band.${bandId}.meaning` as TextKey)}
       </p>
       <p class="facts">
-        {community.population !== undefined && `${tr.t('community.people', { people: tr.number(community.population) })} `}
-        {community.coastal && `${tr.t('community.coastal')} `}
-        {tr.t('community.site', {
+        {community.population !== undefined && <>{tr.text('community.people', { people: tr.number(community.population) })} </>}
+        {community.coastal && <>{tr.text('community.coastal')} </>}
+        {tr.text('community.site', {
           vs30: tr.number(community.vs30),
-          basis: community.vs30Basis === 'measured' ? tr.t('community.site.measured') : tr.t('community.site.site-class', { siteClass: community.siteClass ?? '' }),
+          basis: community.vs30Basis === 'measured' ? tr.text('community.site.measured') : tr.text('community.site.site-class', { siteClass: community.siteClass ?? '' }),
         })}
       </p>
       <Headline tr={tr} data={data} name={community.name} />
       <aside class="caution" aria-label={tr.t('caution.title')}>
-        <p class="caution-title">{tr.t('caution.title')}</p>
+        <p class="caution-title">{tr.text('caution.title')}</p>
         <p>
-          {tr.t('caution.text')} <a href="/limits">{tr.t('caution.limitsLink')}</a>.
+          {tr.text('caution.text')} <a href="/limits">{tr.text('caution.limitsLink')}</a>.
         </p>
       </aside>
       <p class="actions">
         <a class="button" href={`/studies/${studyId}/communities/${community.id}/handout`}>
-          {tr.t('community.handout')}
+          {tr.text('community.handout')}
         </a>{' '}
         <a class="button" href={`/studies/${studyId}/scenario${data.sources[0]?.sourceId ? `?sourceId=${encodeURIComponent(data.sources[0].sourceId)}` : ''}`}>
-          {tr.t('community.scenario')}
+          {tr.text('community.scenario')}
         </a>
       </p>
       <section aria-labelledby="levels-heading">
-        <h2 id="levels-heading">{tr.t('community.levels')}</h2>
-        <p>{tr.t('community.levelIntro')}</p>
+        <h2 id="levels-heading">{tr.text('community.levels')}</h2>
+        <p>{tr.text('community.levelIntro')}</p>
         <ShakingLevels tr={tr} data={data} headingLevel={2} />
       </section>
       <section aria-labelledby="sources-heading">
-        <h2 id="sources-heading">{tr.t('community.sources')}</h2>
-        {data.sourcesReturnPeriod !== undefined && <p>{tr.t('community.sourcesIntro', { period: tr.number(data.sourcesReturnPeriod) })}</p>}
-        <ShareBars tr={tr} label={tr.t('community.sources')} bars={data.sources.map((s) => ({ label: s.sourceId === null ? tr.t('community.sourcesOther') : s.name, share: s.share }))} />
+        <h2 id="sources-heading">{tr.text('community.sources')}</h2>
+        {data.sourcesReturnPeriod !== undefined && <p>{tr.text('community.sourcesIntro', { period: tr.number(data.sourcesReturnPeriod) })}</p>}
+        <ShareBars tr={tr} labelledBy="sources-heading" bars={data.sources.map((s) => ({ label: s.sourceId === null ? tr.text('community.sourcesOther') : s.name, share: s.share }))} />
         {data.meanMagnitude !== undefined && data.meanDistanceKm !== undefined && (
-          <p>{tr.t('community.sourcesMean', { magnitude: tr.number(data.meanMagnitude, 1), km: tr.number(data.meanDistanceKm) })}</p>
+          <p>{tr.text('community.sourcesMean', { magnitude: tr.number(data.meanMagnitude, 1), km: tr.number(data.meanDistanceKm) })}</p>
         )}
       </section>
       <section aria-labelledby="faults-heading">
-        <h2 id="faults-heading">{tr.t('community.faults')}</h2>
+        <h2 id="faults-heading">{tr.text('community.faults')}</h2>
         {result.nearestFaults.length === 0 ? (
-          <p>{tr.t('community.faultsNone')}</p>
+          <p>{tr.text('community.faultsNone')}</p>
         ) : (
           <ul class="faults">
             {result.nearestFaults.map((f) => (
@@ -174,8 +174,8 @@ export function CommunityView(props: CommunityViewProps) {
       </section>
       {curve && (
         <section aria-labelledby="curve-heading">
-          <h2 id="curve-heading">{tr.t('community.curve')}</h2>
-          <p>{tr.t('community.curveIntro')}</p>
+          <h2 id="curve-heading">{tr.text('community.curve')}</h2>
+          <p>{tr.text('community.curveIntro')}</p>
           <figure class="plot-figure">
             <HazardCurvePlot tr={tr} curve={curve} returnPeriodsYears={study.settings.returnPeriodsYears} levelsAtReturnPeriods={rpLevels} idPrefix="curve" />
             <figcaption>
@@ -184,20 +184,20 @@ export function CommunityView(props: CommunityViewProps) {
           </figure>
           {data.spread && (
             <p data-spread-low={data.spread.lowG} data-spread-high={data.spread.highG}>
-              {tr.t('community.spread', { period: tr.number(data.spread.returnPeriodYears), low: tr.number(data.spread.lowG, 2), high: tr.number(data.spread.highG, 2) })}
+              {tr.text('community.spread', { period: tr.number(data.spread.returnPeriodYears), low: tr.number(data.spread.lowG, 2), high: tr.number(data.spread.highG, 2) })}
             </p>
           )}
           <details class="curve-numbers">
-            <summary>{tr.t('community.curveTable')}</summary>
+            <summary>{tr.text('community.curveTable')}</summary>
             <table class="data-table">
-              <caption>{tr.t('community.curveTableCaption')}</caption>
+              <caption>{tr.text('community.curveTableCaption')}</caption>
               <thead>
                 <tr>
                   <th scope="col" class="numeric">
-                    {tr.t('plot.pga')}
+                    {tr.text('plot.pga')}
                   </th>
                   <th scope="col" class="numeric">
-                    {tr.t('plot.annualRate')}
+                    {tr.text('plot.annualRate')}
                   </th>
                 </tr>
               </thead>
@@ -217,12 +217,12 @@ export function CommunityView(props: CommunityViewProps) {
       )}
       <FeltList tr={tr} studyId={studyId} communityName={community.name} {...(props.felt ? { felt: props.felt } : {})} tooMany={props.feltTooMany === true} limit={8} headingLevel={2} />
       <section aria-labelledby="todo-heading">
-        <h2 id="todo-heading">{tr.t('community.todo')}</h2>
+        <h2 id="todo-heading">{tr.text('community.todo')}</h2>
         <SafetyAdvice tr={tr} coastal={community.coastal} headingLevel={3} />
       </section>
       <section aria-labelledby="limits-heading">
-        <h2 id="limits-heading">{tr.t('limits.title')}</h2>
-        <ul class="limits">
+        <h2 id="limits-heading">{tr.text('limits.title')}</h2>
+        <ul class="limits" lang={tr.fallbackLang('limits.list')}>
           {tr
             .t('limits.list')
             .split('\n')
@@ -231,14 +231,14 @@ export function CommunityView(props: CommunityViewProps) {
             ))}
         </ul>
         <p>
-          <a href="/limits">{tr.t('caution.limitsLink')}</a>
+          <a href="/limits">{tr.text('caution.limitsLink')}</a>
         </p>
         {result.warnings.length > 0 && (
           <details>
-            <summary>{tr.t('community.warnings')}</summary>
+            <summary>{tr.text('community.warnings')}</summary>
             <ul>
               {result.warnings.map((w) => (
-                <li>{w}</li>
+                <li>{tr.english(w)}</li>
               ))}
             </ul>
           </details>

@@ -1,3 +1,4 @@
+import type { Child } from 'hono/jsx';
 import type { InputIssue } from '../../api/engine/errors.ts';
 import type { Study } from '../../api/engine/model.ts';
 import { issueFeature, issueLine } from '../data/study-edits.ts';
@@ -28,20 +29,32 @@ export interface EditorViewProps {
 const PREVIEW_LINES = 200;
 
 /** "Line 5, lat: expected a number ..." / "Feature 4 (vennick), dip: ..." / the path as it is. */
-export function describeIssue(tr: Translator, issue: InputIssue, featureIds: readonly (string | undefined)[] = []): string {
+export function describeIssue(tr: Translator, issue: InputIssue, featureIds: readonly (string | undefined)[] = []): Child {
+  const message = tr.english(issue.message);
   const line = issueLine(issue.path);
   if (line !== undefined) {
     const fieldName = issue.path.split(`[line ${line}]`)[1]?.replace(/^\./, '');
-    return tr.t('editor.problemAt', { where: `${tr.t('editor.line', { line })}${fieldName ? `, ${fieldName}` : ''}`, message: issue.message });
+    const where = (
+      <>
+        {tr.text('editor.line', { line })}
+        {fieldName ? `, ${fieldName}` : ''}
+      </>
+    );
+    return tr.text('editor.problemAt', { where, message });
   }
   const feature = issueFeature(issue.path);
   if (feature !== undefined) {
     const id = featureIds[feature];
     const rest = issue.path.replace(/^sources\.features\[\d+\]\.?/, '').replace(/^properties\./, '');
-    const where = `${tr.t('editor.feature', { n: feature + 1 })}${id ? ` (${id})` : ''}${rest ? `, ${rest}` : ''}`;
-    return tr.t('editor.problemAt', { where, message: issue.message });
+    const where = (
+      <>
+        {tr.text('editor.feature', { n: feature + 1 })}
+        {`${id ? ` (${id})` : ''}${rest ? `, ${rest}` : ''}`}
+      </>
+    );
+    return tr.text('editor.problemAt', { where, message });
   }
-  return tr.t('editor.problemAt', { where: issue.path, message: issue.message });
+  return tr.text('editor.problemAt', { where: issue.path, message });
 }
 
 /** The ids of the features of GeoJSON text, for naming them in problems; empty when it does not parse. */
@@ -62,47 +75,47 @@ export function EditorView(props: EditorViewProps) {
   const geoProblem = problem?.upload === 'sources' ? problem : undefined;
   const featureIds = featureIdsOf(geoProblem?.text);
   return (
-    <PageShell tr={tr} title={tr.t('editor.title', { name: study.name })} path={props.path} toolVersion={props.toolVersion} study={{ id: studyId, name: study.name }} section="edit">
-      <h1>{tr.t('editor.title', { name: study.name })}</h1>
-      <p>{tr.t('editor.intro')}</p>
+    <PageShell tr={tr} title={tr.t('editor.title', { name: study.name })} titleLang={tr.fallbackLang('editor.title')} path={props.path} toolVersion={props.toolVersion} study={{ id: studyId, name: study.name }} section="edit">
+      <h1>{tr.text('editor.title', { name: study.name })}</h1>
+      <p>{tr.text('editor.intro')}</p>
       {props.saved && (
         <p class="notice" role="status">
-          {tr.t('editor.saved')}
+          {tr.text('editor.saved')}
         </p>
       )}
       {(problem || (props.notice?.length ?? 0) > 0) && (
         <p class="problem" role="alert">
-          {tr.t('editor.notSaved')}
+          {tr.text('editor.notSaved')}
         </p>
       )}
-      <FieldProblems id="editor-notice" issues={props.notice ?? []} describe={(i) => describeIssue(tr, i)} />
+      <FieldProblems tr={tr} id="editor-notice" issues={props.notice ?? []} describe={(i) => describeIssue(tr, i)} />
 
       <section aria-labelledby="communities-heading">
-        <h2 id="communities-heading">{tr.t('editor.communities')}</h2>
+        <h2 id="communities-heading">{tr.text('editor.communities')}</h2>
         <p>
           <a class="button" href={`/studies/${studyId}/edit/new-community`}>
-            {tr.t('editor.add')}
+            {tr.text('editor.add')}
           </a>
         </p>
         <table class="data-table editor-table">
-          <caption>{tr.t('editor.communitiesCaption')}</caption>
+          <caption>{tr.text('editor.communitiesCaption')}</caption>
           <thead>
             <tr>
-              <th scope="col">{tr.t('editor.field.name')}</th>
-              <th scope="col">{tr.t('editor.col.id')}</th>
+              <th scope="col">{tr.text('editor.field.name')}</th>
+              <th scope="col">{tr.text('editor.col.id')}</th>
               <th scope="col" class="numeric">
-                {tr.t('editor.col.lon')}
+                {tr.text('editor.col.lon')}
               </th>
               <th scope="col" class="numeric">
-                {tr.t('editor.col.lat')}
+                {tr.text('editor.col.lat')}
               </th>
-              <th scope="col">{tr.t('editor.col.site')}</th>
+              <th scope="col">{tr.text('editor.col.site')}</th>
               <th scope="col" class="numeric">
-                {tr.t('editor.col.people')}
+                {tr.text('editor.col.people')}
               </th>
-              <th scope="col">{tr.t('editor.col.coastal')}</th>
+              <th scope="col">{tr.text('editor.col.coastal')}</th>
               <th scope="col">
-                {tr.t('editor.col.actions')}
+                {tr.text('editor.col.actions')}
               </th>
             </tr>
           </thead>
@@ -117,12 +130,12 @@ export function EditorView(props: EditorViewProps) {
                 <td class="numeric">{String(c.lat)}</td>
                 <td>{c.vs30Basis === 'measured' ? `${c.vs30} m/s` : `${c.siteClass} (${c.vs30} m/s)`}</td>
                 <td class="numeric">{c.population === undefined ? '' : tr.number(c.population)}</td>
-                <td>{c.coastal ? tr.t('editor.coastalYes') : ''}</td>
+                <td>{c.coastal ? tr.text('editor.coastalYes') : ''}</td>
                 <td class="row-actions">
-                  <a href={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}`}>{tr.t('editor.edit', { name: c.name })}</a>
+                  <a href={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}`}>{tr.text('editor.edit', { name: c.name })}</a>
                   <form method="post" action={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}/remove`} class="inline-form">
                     <button type="submit" class="button-quiet">
-                      {tr.t('editor.remove', { name: c.name })}
+                      {tr.text('editor.remove', { name: c.name })}
                     </button>
                   </form>
                 </td>
@@ -133,10 +146,10 @@ export function EditorView(props: EditorViewProps) {
       </section>
 
       <section aria-labelledby="upload-communities-heading" class="upload">
-        <h2 id="upload-communities-heading">{tr.t('editor.upload.communities')}</h2>
+        <h2 id="upload-communities-heading">{tr.text('editor.upload.communities')}</h2>
         <form method="post" action={`/studies/${studyId}/edit/communities-csv#upload-communities-heading`} enctype="multipart/form-data">
           <div class="field">
-            <label for="communities-file">{tr.t('editor.upload.file')}</label>
+            <label for="communities-file">{tr.text('editor.upload.file')}</label>
             <input
               id="communities-file"
               name="file"
@@ -146,30 +159,30 @@ export function EditorView(props: EditorViewProps) {
               aria-invalid={csvProblem ? 'true' : undefined}
             />
             <p id="communities-help" class="help">
-              {tr.t('editor.upload.communitiesHelp')}
+              {tr.text('editor.upload.communitiesHelp')}
             </p>
             {csvProblem && (
               <div class="upload-problems" data-upload="communities">
-                <p class="problem-title">{tr.t('editor.problems')}</p>
-                <FieldProblems id="communities-problems" issues={csvProblem.issues} describe={(i) => describeIssue(tr, i)} />
+                <p class="problem-title">{tr.text('editor.problems')}</p>
+                <FieldProblems tr={tr} id="communities-problems" issues={csvProblem.issues} describe={(i) => describeIssue(tr, i)} />
                 {csvProblem.text !== undefined && <CsvLines tr={tr} text={csvProblem.text} issues={csvProblem.issues} />}
               </div>
             )}
           </div>
-          <button type="submit">{tr.t('editor.upload.button')}</button>
+          <button type="submit">{tr.text('editor.upload.button')}</button>
         </form>
       </section>
 
       <section aria-labelledby="sources-heading">
-        <h2 id="sources-heading">{tr.t('editor.sources')}</h2>
+        <h2 id="sources-heading">{tr.text('editor.sources')}</h2>
         <table class="data-table">
-          <caption>{tr.t('editor.sourcesCaption')}</caption>
+          <caption>{tr.text('editor.sourcesCaption')}</caption>
           <thead>
             <tr>
-              <th scope="col">{tr.t('editor.col.source')}</th>
-              <th scope="col">{tr.t('editor.col.id')}</th>
-              <th scope="col">{tr.t('editor.col.kind')}</th>
-              <th scope="col">{tr.t('editor.col.setting')}</th>
+              <th scope="col">{tr.text('editor.col.source')}</th>
+              <th scope="col">{tr.text('editor.col.id')}</th>
+              <th scope="col">{tr.text('editor.col.kind')}</th>
+              <th scope="col">{tr.text('editor.col.setting')}</th>
             </tr>
           </thead>
           <tbody>
@@ -179,7 +192,7 @@ export function EditorView(props: EditorViewProps) {
                 <td>
                   <code>{s.id}</code>
                 </td>
-                <td>{tr.t(`editor.kind.${s.kind}`)}</td>
+                <td>{tr.text(`editor.kind.${s.kind}`)}</td>
                 <td>{s.setting}</td>
               </tr>
             ))}
@@ -188,10 +201,10 @@ export function EditorView(props: EditorViewProps) {
       </section>
 
       <section aria-labelledby="upload-sources-heading" class="upload">
-        <h2 id="upload-sources-heading">{tr.t('editor.upload.sources')}</h2>
+        <h2 id="upload-sources-heading">{tr.text('editor.upload.sources')}</h2>
         <form method="post" action={`/studies/${studyId}/edit/sources-geojson#upload-sources-heading`} enctype="multipart/form-data">
           <div class="field">
-            <label for="sources-file">{tr.t('editor.upload.file')}</label>
+            <label for="sources-file">{tr.text('editor.upload.file')}</label>
             <input
               id="sources-file"
               name="file"
@@ -201,16 +214,16 @@ export function EditorView(props: EditorViewProps) {
               aria-invalid={geoProblem ? 'true' : undefined}
             />
             <p id="sources-help" class="help">
-              {tr.t('editor.upload.sourcesHelp')}
+              {tr.text('editor.upload.sourcesHelp')}
             </p>
             {geoProblem && (
               <div class="upload-problems" data-upload="sources">
-                <p class="problem-title">{tr.t('editor.problems')}</p>
-                <FieldProblems id="sources-problems" issues={geoProblem.issues} describe={(i) => describeIssue(tr, i, featureIds)} />
+                <p class="problem-title">{tr.text('editor.problems')}</p>
+                <FieldProblems tr={tr} id="sources-problems" issues={geoProblem.issues} describe={(i) => describeIssue(tr, i, featureIds)} />
               </div>
             )}
           </div>
-          <button type="submit">{tr.t('editor.upload.button')}</button>
+          <button type="submit">{tr.text('editor.upload.button')}</button>
         </form>
       </section>
     </PageShell>
@@ -228,14 +241,14 @@ function CsvLines(props: { readonly tr: Translator; readonly text: string; reado
   }
   return (
     <table class="data-table csv-lines">
-      <caption>{tr.t('editor.csvPreview')}</caption>
+      <caption>{tr.text('editor.csvPreview')}</caption>
       <thead>
         <tr>
           <th scope="col" class="numeric">
-            {tr.t('editor.col.line')}
+            {tr.text('editor.col.line')}
           </th>
-          <th scope="col">{tr.t('editor.col.text')}</th>
-          <th scope="col">{tr.t('editor.col.problem')}</th>
+          <th scope="col">{tr.text('editor.col.text')}</th>
+          <th scope="col">{tr.text('editor.col.problem')}</th>
         </tr>
       </thead>
       <tbody>
@@ -249,7 +262,7 @@ function CsvLines(props: { readonly tr: Translator; readonly text: string; reado
               <td>
                 <code>{text}</code>
               </td>
-              <td>{problems.map((p) => p.path.split(`[line ${i + 1}]`)[1]?.replace(/^\./, '') + ': ' + p.message).join('; ')}</td>
+              <td>{tr.english(problems.map((p) => p.path.split(`[line ${i + 1}]`)[1]?.replace(/^\./, '') + ': ' + p.message).join('; '))}</td>
             </tr>
           );
         })}

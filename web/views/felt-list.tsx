@@ -26,31 +26,31 @@ export function FeltList(props: FeltListProps) {
   const H = props.headingLevel === 2 ? 'h2' : 'h3';
   return (
     <section aria-labelledby="felt-heading" class="felt">
-      <H id="felt-heading">{tr.t('community.felt')}</H>
+      <H id="felt-heading">{tr.text('community.felt')}</H>
       {props.tooMany ? (
-        <p>{tr.t('community.feltTooMany')}</p>
+        <p>{tr.text('community.feltTooMany')}</p>
       ) : !felt ? (
         <p>
-          {tr.t('community.feltNoCatalog')} {!props.compact && <a href={`/studies/${props.studyId}/catalog`}>{tr.t('community.feltAttach')}</a>}
+          {tr.text('community.feltNoCatalog')} {!props.compact && <a href={`/studies/${props.studyId}/catalog`}>{tr.text('community.feltAttach')}</a>}
         </p>
       ) : felt.history.felt.length === 0 ? (
-        <p>{tr.t('community.feltNone', { events: tr.number(felt.eventCount) })}</p>
+        <p>{tr.text('community.feltNone', { events: tr.number(felt.eventCount) })}</p>
       ) : (
         <>
-          {!props.compact && <p>{tr.t('community.feltIntro')}</p>}
+          {!props.compact && <p>{tr.text('community.feltIntro')}</p>}
           <p data-felt={felt.history.felt.length} data-strongly-felt={felt.history.stronglyFelt.length}>
-            {tr.t('community.feltCounts', { felt: tr.count(felt.history.felt.length), strong: tr.count(felt.history.stronglyFelt.length) })}
+            {tr.text('community.feltCounts', { felt: tr.count(felt.history.felt.length), strong: tr.count(felt.history.stronglyFelt.length) })}
           </p>
           <table class="data-table felt-table">
-            <caption>{tr.t('community.feltCaption', { name: props.communityName })}</caption>
+            <caption>{tr.text('community.feltCaption', { name: props.communityName })}</caption>
             <thead>
               <tr>
-                <th scope="col">{tr.t('community.feltCol.date')}</th>
+                <th scope="col">{tr.text('community.feltCol.date')}</th>
                 <th scope="col" class="numeric">
-                  {tr.t('community.feltCol.magnitude')}
+                  {tr.text('community.feltCol.magnitude')}
                 </th>
-                <th scope="col">{tr.t('community.feltCol.where')}</th>
-                <th scope="col">{tr.t('community.feltCol.mmi')}</th>
+                <th scope="col">{tr.text('community.feltCol.where')}</th>
+                <th scope="col">{tr.text('community.feltCol.mmi')}</th>
               </tr>
             </thead>
             <tbody>
@@ -60,7 +60,7 @@ export function FeltList(props: FeltListProps) {
                   <td class="numeric">{`M ${tr.number(e.magnitude, 1)}`}</td>
                   <td>{tr.place(e.distanceKm, e.bearingDeg)}</td>
                   <td>
-                    {tr.t('mmi.label', { roman: e.roman })} · {tr.t(`mmi.${Math.min(10, Math.max(1, Math.floor(e.mmi)))}.name` as 'mmi.1.name')}
+                    {tr.text('mmi.label', { roman: e.roman })} · {tr.text(`mmi.${Math.min(10, Math.max(1, Math.floor(e.mmi)))}.name` as 'mmi.1.name')}
                   </td>
                 </tr>
               ))}

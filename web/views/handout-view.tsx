@@ -41,11 +41,7 @@ export function HandoutView(props: HandoutViewProps) {
       <head>
         <meta charset="utf-8" />
         <meta name="viewport" content="width=device-width, initial-scale=1" />
-        <title>{`${title} · ${tr.t('site.name')}`}</title>
-        {/* The service answers with Referrer-Policy: no-referrer, under which a browser sends
-            "Origin: null" with form posts, and the same-origin check refuses them; within this
-            origin the pages need their own origin sent. */}
-        <meta name="referrer" content="same-origin" />
+        <title lang={tr.fallbackLang('handout.title')}>{`${title} · ${tr.t('site.name')}`}</title>
         <link rel="icon" href="data:," />
         <link rel="stylesheet" href="/static/tremora.css" />
         <link rel="stylesheet" href="/static/handout.css" />
@@ -53,15 +49,15 @@ export function HandoutView(props: HandoutViewProps) {
       </head>
       <body class="handout-page">
         <a class="skip-link" href="#main">
-          {tr.t('site.skip')}
+          {tr.text('site.skip')}
         </a>
         <header class="handout-tools no-print">
           <nav aria-label={tr.t('nav.main')}>
-            <a href={`/studies/${props.studyId}/communities/${community.id}`}>{tr.t('handout.back')}</a>
+            <a href={`/studies/${props.studyId}/communities/${community.id}`}>{tr.text('handout.back')}</a>
           </nav>
-          <p>{tr.t('handout.printHint')}</p>
+          <p>{tr.text('handout.printHint')}</p>
           <form class="lang-switch" action="/language" method="get">
-            <label for="lang-select">{tr.t('lang.label')}</label>
+            <label for="lang-select">{tr.text('lang.label')}</label>
             <select id="lang-select" name="lang">
               {LANGUAGES.map((l) => (
                 <option value={l.code} lang={l.code} selected={l.code === tr.lang}>
@@ -70,28 +66,28 @@ export function HandoutView(props: HandoutViewProps) {
               ))}
             </select>
             <input type="hidden" name="back" value={props.path} />
-            <button type="submit">{tr.t('lang.change')}</button>
+            <button type="submit">{tr.text('lang.change')}</button>
           </form>
-          <p data-print-button="true" data-print-label={tr.t('handout.print')} class="print-slot"></p>
+          <p data-print-button="true" data-print-label={tr.t('handout.print')} lang={tr.fallbackLang('handout.print')} class="print-slot"></p>
         </header>
         <table class="handout-frame" role="presentation">
           <tbody>
             <tr>
               <td>
                 <main id="main" tabindex={-1} class="handout">
-                  <h1>{title}</h1>
+                  <h1>{tr.text('handout.title', { name: community.name })}</h1>
                   <p class="band-line">
-                    {tr.t('band.label')}: <BandSwatch tr={tr} bandId={bandId} /> — {tr.t(`band.${bandId}.meaning` as TextKey)}
+                    {tr.text('band.label')}: <BandSwatch tr={tr} bandId={bandId} /> — {tr.text(`band.${bandId}.meaning` as TextKey)}
                   </p>
                   <Headline tr={tr} data={data} name={community.name} />
                   <section aria-labelledby="h-levels">
-                    <h2 id="h-levels">{tr.t('community.levels')}</h2>
+                    <h2 id="h-levels">{tr.text('community.levels')}</h2>
                     <ShakingLevels tr={tr} data={data} headingLevel={2} compact={true} />
-                    {top && <p>{tr.t('handout.topSources', { sources: top })}</p>}
+                    {top && <p>{tr.text('handout.topSources', { sources: top })}</p>}
                   </section>
                   {result.nearestFaults.length > 0 && (
                     <section aria-labelledby="h-faults">
-                      <h2 id="h-faults">{tr.t('community.faults')}</h2>
+                      <h2 id="h-faults">{tr.text('community.faults')}</h2>
                       <ul class="faults">
                         {result.nearestFaults.map((f) => (
                           <li>
@@ -105,7 +101,7 @@ export function HandoutView(props: HandoutViewProps) {
                     <FeltList tr={tr} studyId={props.studyId} communityName={community.name} felt={props.felt} limit={3} headingLevel={2} compact={true} />
                   )}
                   <section aria-labelledby="h-todo" class="handout-todo">
-                    <h2 id="h-todo">{tr.t('community.todo')}</h2>
+                    <h2 id="h-todo">{tr.text('community.todo')}</h2>
                     <SafetyAdvice tr={tr} coastal={community.coastal} headingLevel={3} />
                   </section>
                 </main>
@@ -117,10 +113,10 @@ export function HandoutView(props: HandoutViewProps) {
               <td>
                 <div class="handout-footer">
                   <p class="handout-caution">
-                    <strong>{tr.t('caution.short')}</strong>
+                    <strong>{tr.text('caution.short')}</strong>
                   </p>
                   <ProvenanceLine tr={tr} provenance={props.provenance} />
-                  <p class="printed">{tr.t('provenance.printed', { date: tr.date(props.printedAt) })}</p>
+                  <p class="printed">{tr.text('provenance.printed', { date: tr.date(props.printedAt) })}</p>
                 </div>
               </td>
             </tr>

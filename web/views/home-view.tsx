@@ -5,19 +5,19 @@ import type { Translator } from '../text/translator.ts';
 export function HomeView(props: { readonly tr: Translator; readonly path: string; readonly toolVersion: string; readonly studies: readonly StudySummary[] }) {
   const { tr } = props;
   return (
-    <PageShell tr={tr} title={tr.t('home.title')} path={props.path} toolVersion={props.toolVersion}>
-      <h1>{tr.t('home.title')}</h1>
-      <p class="lead">{tr.t('home.intro')}</p>
-      <p>{tr.t('home.start')}</p>
+    <PageShell tr={tr} title={tr.t('home.title')} titleLang={tr.fallbackLang('home.title')} path={props.path} toolVersion={props.toolVersion}>
+      <h1>{tr.text('home.title')}</h1>
+      <p class="lead">{tr.text('home.intro')}</p>
+      <p>{tr.text('home.start')}</p>
       {props.studies.length === 0 ? (
-        <p>{tr.t('home.none')}</p>
+        <p>{tr.text('home.none')}</p>
       ) : (
         <table class="data-table">
-          <caption>{tr.t('home.caption')}</caption>
+          <caption>{tr.text('home.caption')}</caption>
           <thead>
             <tr>
-              <th scope="col">{tr.t('home.col.name')}</th>
-              <th scope="col">{tr.t('home.col.updated')}</th>
+              <th scope="col">{tr.text('home.col.name')}</th>
+              <th scope="col">{tr.text('home.col.updated')}</th>
             </tr>
           </thead>
           <tbody>

@@ -6,10 +6,10 @@ import { SafetyAdvice } from './safety-advice.tsx';
 export function LimitsView(props: { readonly tr: Translator; readonly path: string; readonly toolVersion: string }) {
   const { tr } = props;
   return (
-    <PageShell tr={tr} title={tr.t('limits.title')} path={props.path} toolVersion={props.toolVersion}>
-      <h1>{tr.t('limits.title')}</h1>
-      <p class="lead">{tr.t('limits.intro')}</p>
-      <ul class="limits">
+    <PageShell tr={tr} title={tr.t('limits.title')} titleLang={tr.fallbackLang('limits.title')} path={props.path} toolVersion={props.toolVersion}>
+      <h1>{tr.text('limits.title')}</h1>
+      <p class="lead">{tr.text('limits.intro')}</p>
+      <ul class="limits" lang={tr.fallbackLang('limits.list')}>
         {tr
           .t('limits.list')
           .split('\n')
@@ -17,8 +17,8 @@ export function LimitsView(props: { readonly tr: Translator; readonly path: stri
             <li>{item}</li>
           ))}
       </ul>
-      <p>{tr.t('limits.source')}</p>
-      <h2>{tr.t('community.todo')}</h2>
+      <p>{tr.text('limits.source')}</p>
+      <h2>{tr.text('community.todo')}</h2>
       <SafetyAdvice tr={tr} coastal={true} headingLevel={3} />
     </PageShell>
   );

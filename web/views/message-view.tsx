@@ -1,13 +1,14 @@
+import type { Child } from 'hono/jsx';
 import { PageShell } from '../layout/page-shell.tsx';
 import type { Translator } from '../text/translator.ts';
 
-/** A page with one message: not found, or a study that no longer validates. */
+/** A page with one message: not found, or a study that no longer validates (details: the service's messages, in English). */
 export function MessageView(props: {
   readonly tr: Translator;
   readonly path: string;
   readonly toolVersion: string;
   readonly title: string;
-  readonly text: string;
+  readonly text: Child;
   readonly details?: readonly string[];
 }) {
   const { tr } = props;
@@ -18,12 +19,12 @@ export function MessageView(props: {
       {props.details && props.details.length > 0 && (
         <ul class="problems">
           {props.details.map((d) => (
-            <li>{d}</li>
+            <li>{tr.english(d)}</li>
           ))}
         </ul>
       )}
       <p>
-        <a href="/">{tr.t('error.home')}</a>
+        <a href="/">{tr.text('error.home')}</a>
       </p>
     </PageShell>
   );

@@ -10,35 +10,35 @@ export function RunView(props: { readonly tr: Translator; readonly path: string;
   const { tr, run, studyId } = props;
   const unfinished = run.status === 'queued' || run.status === 'running';
   return (
-    <PageShell tr={tr} title={tr.t('run.title', { name: props.studyName })} path={props.path} toolVersion={props.toolVersion} study={{ id: studyId, name: props.studyName }}>
-      <h1>{tr.t('run.title', { name: props.studyName })}</h1>
+    <PageShell tr={tr} title={tr.t('run.title', { name: props.studyName })} titleLang={tr.fallbackLang('run.title')} path={props.path} toolVersion={props.toolVersion} study={{ id: studyId, name: props.studyName }}>
+      <h1>{tr.text('run.title', { name: props.studyName })}</h1>
       <div class="run-status" data-run={run.id} data-status={run.status} data-done-url={`/studies/${studyId}`}>
         {unfinished ? (
           <>
             <p class="run-state" aria-live="polite">
-              {tr.t(run.status === 'queued' ? 'run.queued' : 'run.running')}
+              {tr.text(run.status === 'queued' ? 'run.queued' : 'run.running')}
             </p>
             <p>
-              <label for="run-progress">{tr.t('run.progress')}</label>{' '}
+              <label for="run-progress">{tr.text('run.progress')}</label>{' '}
               <progress id="run-progress" max={1} value={run.progress}>
                 {Math.round(run.progress * 100)}%
               </progress>{' '}
               <span class="run-percent">{Math.round(run.progress * 100)}%</span>
             </p>
             <p class="run-refresh">
-              <a href={props.path}>{tr.t('run.refresh')}</a>
+              <a href={props.path}>{tr.text('run.refresh')}</a>
             </p>
           </>
         ) : run.status === 'done' ? (
           <p>
-            {tr.t('run.done')} <a href={`/studies/${studyId}`}>{tr.t('run.see')}</a>
+            {tr.text('run.done')} <a href={`/studies/${studyId}`}>{tr.text('run.see')}</a>
           </p>
         ) : (
-          <p class="problem">{tr.t('run.failed', { error: run.error ?? run.status })}</p>
+          <p class="problem">{tr.text('run.failed', { error: tr.english(run.error ?? run.status) })}</p>
         )}
       </div>
       <p>
-        <a href={`/studies/${studyId}`}>{tr.t('run.back')}</a>
+        <a href={`/studies/${studyId}`}>{tr.text('run.back')}</a>
       </p>
     </PageShell>
   );

@@ -30,17 +30,18 @@ export function ScenarioView(props: ScenarioViewProps) {
     <PageShell
       tr={tr}
       title={tr.t('scenario.title', { name: study.name })}
+      titleLang={tr.fallbackLang('scenario.title')}
       path={props.path}
       toolVersion={props.toolVersion}
       study={{ id: studyId, name: study.name }}
       section="scenario"
       showsNumbers={result !== undefined}
     >
-      <h1>{tr.t('scenario.title', { name: study.name })}</h1>
-      <p>{tr.t('scenario.intro')}</p>
+      <h1>{tr.text('scenario.title', { name: study.name })}</h1>
+      <p>{tr.text('scenario.intro')}</p>
       <form method="post" action={`/studies/${studyId}/scenario`} class="scenario-form" novalidate>
         <div class="field">
-          <label for="scenario-source">{tr.t('scenario.source')}</label>
+          <label for="scenario-source">{tr.text('scenario.source')}</label>
           <select id="scenario-source" name="sourceId" aria-describedby={issuesAt('sourceId').length ? 'scenario-source-problem' : undefined}>
             {study.sources.map((s) => (
               <option value={s.id} selected={s.id === props.sourceId}>
@@ -48,10 +49,10 @@ export function ScenarioView(props: ScenarioViewProps) {
               </option>
             ))}
           </select>
-          <FieldProblems id="scenario-source-problem" issues={issuesAt('sourceId')} />
+          <FieldProblems tr={tr} id="scenario-source-problem" issues={issuesAt('sourceId')} />
         </div>
         <div class="field">
-          <label for="scenario-magnitude">{tr.t('scenario.magnitude')}</label>
+          <label for="scenario-magnitude">{tr.text('scenario.magnitude')}</label>
           <input
             id="scenario-magnitude"
             name="magnitude"
@@ -64,19 +65,19 @@ export function ScenarioView(props: ScenarioViewProps) {
             aria-invalid={issuesAt('magnitude').length > 0 ? 'true' : undefined}
             aria-describedby={issuesAt('magnitude').length ? 'scenario-magnitude-problem' : undefined}
           />
-          <FieldProblems id="scenario-magnitude-problem" issues={issuesAt('magnitude')} />
+          <FieldProblems tr={tr} id="scenario-magnitude-problem" issues={issuesAt('magnitude')} />
         </div>
-        <FieldProblems id="scenario-other-problems" issues={others} />
+        <FieldProblems tr={tr} id="scenario-other-problems" issues={others} />
         <button type="submit" class="button-primary">
-          {tr.t('scenario.run')}
+          {tr.text('scenario.run')}
         </button>
       </form>
       {result && props.frame && (
         <>
           <section aria-labelledby="scenario-map-heading">
-            <h2 id="scenario-map-heading">{tr.t('scenario.map')}</h2>
+            <h2 id="scenario-map-heading">{tr.text('scenario.map')}</h2>
             <p>
-              {result.sourceName}, M {tr.number(result.magnitude, 1)}. {tr.t('scenario.position', { position: tr.t('scenario.positionClosest') })}
+              {result.sourceName}, M {tr.number(result.magnitude, 1)}. {tr.text('scenario.position', { position: tr.text('scenario.positionClosest') })}
             </p>
             <figure class="map-figure">
               <StudyMap
@@ -90,24 +91,24 @@ export function ScenarioView(props: ScenarioViewProps) {
               />
               <figcaption>
                 <ScenarioLegend tr={tr} />
-                {result.grid && <p class="legend-note">{tr.t('scenario.gridNote', { vs30: tr.number(result.grid.vs30) })}</p>}
+                {result.grid && <p class="legend-note">{tr.text('scenario.gridNote', { vs30: tr.number(result.grid.vs30) })}</p>}
               </figcaption>
             </figure>
           </section>
           <section aria-labelledby="scenario-table-heading">
-            <h2 id="scenario-table-heading">{tr.t('scenario.table')}</h2>
+            <h2 id="scenario-table-heading">{tr.text('scenario.table')}</h2>
             <table class="data-table scenario-table">
-              <caption>{tr.t('scenario.table')}</caption>
+              <caption>{tr.text('scenario.table')}</caption>
               <thead>
                 <tr>
-                  <th scope="col">{tr.t('scenario.col.community')}</th>
+                  <th scope="col">{tr.text('scenario.col.community')}</th>
                   <th scope="col" class="numeric">
-                    {tr.t('scenario.col.distance')}
+                    {tr.text('scenario.col.distance')}
                   </th>
-                  <th scope="col">{tr.t('scenario.col.median')}</th>
-                  <th scope="col">{tr.t('scenario.col.high')}</th>
+                  <th scope="col">{tr.text('scenario.col.median')}</th>
+                  <th scope="col">{tr.text('scenario.col.high')}</th>
                   <th scope="col" class="numeric">
-                    {tr.t('scenario.col.pga')}
+                    {tr.text('scenario.col.pga')}
                   </th>
                 </tr>
               </thead>
@@ -121,10 +122,10 @@ export function ScenarioView(props: ScenarioViewProps) {
                       </th>
                       <td class="numeric">{tr.number(c.rjbKm)}</td>
                       <td>
-                        {tr.t('mmi.label', { roman: c.mmi.romanMedian })} · {tr.t(`mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.median)))}.name` as 'mmi.1.name')}
+                        {tr.text('mmi.label', { roman: c.mmi.romanMedian })} · {tr.text(`mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.median)))}.name` as 'mmi.1.name')}
                       </td>
                       <td>
-                        {tr.t('mmi.label', { roman: c.mmi.romanP84 })} · {tr.t(`mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.p84)))}.name` as 'mmi.1.name')}
+                        {tr.text('mmi.label', { roman: c.mmi.romanP84 })} · {tr.text(`mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.p84)))}.name` as 'mmi.1.name')}
                       </td>
                       <td class="numeric">{tr.number(c.motions.PGA?.median ?? 0, 3)}</td>
                     </tr>
@@ -133,10 +134,10 @@ export function ScenarioView(props: ScenarioViewProps) {
             </table>
             {result.warnings.length > 0 && (
               <details>
-                <summary>{tr.t('scenario.warnings')}</summary>
+                <summary>{tr.text('scenario.warnings')}</summary>
                 <ul>
                   {result.warnings.map((w) => (
-                    <li>{w}</li>
+                    <li>{tr.english(w)}</li>
                   ))}
                 </ul>
               </details>

@@ -6,7 +6,7 @@ export function expectSecurityHeaders(response: Response): void {
   expect(response.headers.get('content-security-policy')).toBe(CONTENT_SECURITY_POLICY);
   expect(response.headers.get('x-content-type-options')).toBe('nosniff');
   expect(response.headers.get('x-frame-options')).toBe('DENY');
-  expect(response.headers.get('referrer-policy')).toBe('no-referrer');
+  expect(response.headers.get('referrer-policy')).toBe('same-origin');
 }
 
 export interface ErrorAnswer {

@@ -15,7 +15,12 @@ export interface PageApp {
   close(): Promise<void>;
 }
 
-export function startPageApp(): PageApp {
+export interface StartPageAppOptions {
+  /** The service's TREMORA_TOKEN, for both the token check and the access page. */
+  readonly token?: string;
+}
+
+export function startPageApp(options: StartPageAppOptions = {}): PageApp {
   const dir = tempDir('tremora-pages-');
   const store = openStore(`${dir.path}/pages.db`);
   const runPool = new WorkerPool({ size: 1, log: () => {} });
@@ -29,7 +34,7 @@ export function startPageApp(): PageApp {
     toolVersion: 'test',
     workBudget: 1_000_000_000,
   };
-  const app = createApp(ctx, { pages: createPages(ctx), logError: () => {} });
+  const app = createApp(ctx, { pages: createPages(ctx, { token: options.token }), logError: () => {}, ...(options.token === undefined ? {} : { token: options.token }) });
   return {
     app,
     ctx,

@@ -1,0 +1,91 @@
+import { ACCESS_PATH, LEAVE_PATH } from '../../api/service/page-access.ts';
+import { PageShell } from '../layout/page-shell.tsx';
+import type { Translator } from '../text/translator.ts';
+
+/** What the access page has to say: why the user is here, or how their last try went. */
+export type AccessNotice = 'needed' | 'missing' | 'wrong' | 'ended';
+
+export interface AccessViewProps {
+  readonly tr: Translator;
+  readonly path: string;
+  readonly toolVersion: string;
+  /** `open`: the service has no token; `granted`: this browser has access; `closed`: it has not. */
+  readonly state: 'open' | 'granted' | 'closed';
+  readonly notice?: AccessNotice | undefined;
+  /** Where to go afterwards: a path of this origin (safeBackPath); this page when none was given. */
+  readonly back: string;
+  readonly keptDays: number;
+}
+
+/** The access page: enter the token once, or end this browser's access (plain form posts). */
+export function AccessView(props: AccessViewProps) {
+  const { tr, state, notice } = props;
+  const refused = notice === 'missing' || notice === 'wrong';
+  return (
+    <PageShell tr={tr} title={tr.t('access.title')} titleLang={tr.fallbackLang('access.title')} path={props.path} toolVersion={props.toolVersion}>
+      <h1>{tr.text('access.title')}</h1>
+      {state === 'open' ? (
+        <p>{tr.text('access.open')}</p>
+      ) : (
+        <>
+          <p class="lead">{tr.text('access.intro')}</p>
+          {notice === 'needed' && state === 'closed' && (
+            <p class="notice" role="status">
+              {tr.text('access.needed')}
+            </p>
+          )}
+          {notice === 'ended' && (
+            <p class="notice" role="status">
+              {tr.text('access.ended')}
+            </p>
+          )}
+          {state === 'granted' ? (
+            <>
+              <p class="notice" role="status">
+                {tr.text('access.granted')} {tr.text('access.kept', { days: tr.number(props.keptDays) })}
+              </p>
+              <form method="post" action={LEAVE_PATH} class="inline-form">
+                <button type="submit" class="button-quiet">
+                  {tr.text('access.end')}
+                </button>
+              </form>
+            </>
+          ) : (
+            <form method="post" action={ACCESS_PATH} class="access-form" novalidate>
+              <input type="hidden" name="back" value={props.back} />
+              <div class={refused ? 'field field-bad' : 'field'}>
+                <label for="access-token">{tr.text('access.token')}</label>
+                <input
+                  id="access-token"
+                  name="token"
+                  type="password"
+                  autocomplete="current-password"
+                  aria-invalid={refused ? 'true' : undefined}
+                  aria-describedby={refused ? 'access-token-problem access-token-help' : 'access-token-help'}
+                />
+                {refused && (
+                  <p class="problem" id="access-token-problem" role="alert">
+                    {tr.text(notice === 'missing' ? 'access.missing' : 'access.wrong')}
+                  </p>
+                )}
+                <p class="help" id="access-token-help">
+                  {tr.text('access.tokenHelp')}
+                </p>
+              </div>
+              <p class="form-actions">
+                <button type="submit" class="button-primary">
+                  {tr.text('access.enter')}
+                </button>
+              </p>
+            </form>
+          )}
+        </>
+      )}
+      {props.back !== ACCESS_PATH && (
+        <p>
+          <a href={props.back}>{tr.text('access.back')}</a>
+        </p>
+      )}
+    </PageShell>
+  );
+}
