@@ -152,10 +152,13 @@ describe('errors on the study routes', () => {
     expect(body.error).toBe('PATCH is not allowed on /api/studies; expected GET, HEAD, POST');
   });
 
-  it('404 JSON for an unknown route', async () => {
+  it('404 JSON for an unknown API route, and a 404 page for people elsewhere', async () => {
     const body = await expectError(await service.fetch('/api/no-such-thing'), 404);
     expect(body.error).toMatch(/^no route GET \/api\/no-such-thing/);
-    await expectError(await service.fetch('/elsewhere'), 404);
+    const page = await service.fetch('/elsewhere');
+    expect(page.status).toBe(404);
+    expect(page.headers.get('content-type')).toMatch(/^text\/html/);
+    expectSecurityHeaders(page);
   });
 
   it('403 for a write sent from another site', async () => {
