@@ -11,5 +11,6 @@ export {
   type RunRecord,
   type RunStatus,
 } from './run-repository.ts';
+export { MapRunRepository, type MapRunInputs, type MapRunOutputs, type MapRunRecord, type MapRunRequest } from './map-run-repository.ts';
 export { newId } from './new-id.ts';
 export { deleteStudyCatalog, getStudyCatalog, putStudyCatalog, type StudyCatalogRecord, type StudyCatalogWrite } from './catalog-repository.ts';

@@ -1,6 +1,7 @@
 import { mkdirSync } from 'node:fs';
 import { dirname } from 'node:path';
 import Database from 'better-sqlite3';
+import { MapRunRepository } from './map-run-repository.ts';
 import { migrate, type MigrationOutcome } from './migrate.ts';
 import { RunRepository } from './run-repository.ts';
 import { StudyRepository } from './study-repository.ts';
@@ -19,9 +20,13 @@ export interface Store {
   readonly db: Database.Database;
   readonly studies: StudyRepository;
   readonly runs: RunRepository;
+  /** Hazard-map runs and their GeoJSON. */
+  readonly maps: MapRunRepository;
   readonly migration: MigrationOutcome;
   /** Runs found queued or running at open (left by a crash), now marked interrupted. */
   readonly interruptedAtOpen: number;
+  /** Map runs found queued or running at open, now marked interrupted. */
+  readonly mapRunsInterruptedAtOpen: number;
   /** `PRAGMA integrity_check`: 'ok' or the problems found. */
   integrityCheck(): string;
   /** Cheap liveness check of the connection. */
@@ -31,7 +36,8 @@ export interface Store {
 
 /**
  * Opens (creating if needed) the database at `path`: WAL journal, foreign keys on, a busy
- * timeout, schema migrated, runs left unfinished by a previous process marked interrupted.
+ * timeout, schema migrated, runs and map runs left unfinished by a previous process marked
+ * interrupted.
  */
 export function openStore(path: string): Store {
   if (path !== ':memory:') mkdirSync(dirname(path), { recursive: true });
@@ -46,12 +52,16 @@ export function openStore(path: string): Store {
     const migration = migrate(db);
     const runs = new RunRepository(db);
     const interruptedAtOpen = runs.interruptUnfinished();
+    const maps = new MapRunRepository(db);
+    const mapRunsInterruptedAtOpen = maps.interruptUnfinished();
     return {
       db,
       studies: new StudyRepository(db),
       runs,
+      maps,
       migration,
       interruptedAtOpen,
+      mapRunsInterruptedAtOpen,
       integrityCheck: () => (db.pragma('integrity_check') as { integrity_check: string }[]).map((r) => r.integrity_check).join('; '),
       ping: () => (db.prepare('SELECT 1 AS one').get() as { one: number }).one === 1,
       close: () => db.close(),

@@ -23,7 +23,7 @@ describe('migrate', () => {
     const shipped = readMigrations();
     const outcome = migrate(db, shipped);
     expect(outcome).toEqual({ fromVersion: 0, toVersion: shipped.length });
-    expect(tables(db)).toEqual(['runs', 'schema_version', 'studies', 'study_catalogs', 'study_files']);
+    expect(tables(db)).toEqual(['map_runs', 'runs', 'schema_version', 'studies', 'study_catalogs', 'study_files']);
     const versions = db.prepare('SELECT version, name FROM schema_version ORDER BY version').all();
     expect(versions).toEqual(shipped.map((m) => ({ version: m.version, name: m.name })));
   });

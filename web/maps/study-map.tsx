@@ -19,10 +19,12 @@ export interface StudyMapProps {
   /** Community drawn larger (the community page's own). */
   readonly highlight?: string;
   /**
-   * The hazard-map layer: drawn above the land and below the sources and communities. Empty
-   * until the store offers a hazard-map run of the study (the grid-map run kind, to come).
+   * A layer of grid cells (a hazard map, maps/hazard-layer.tsx; a scenario's shaking): drawn
+   * above the land and below the coast, sources and communities.
    */
   readonly hazardLayer?: Child;
+  /** Id of the text that describes the layer in words (its range and download), for assistive technology. */
+  readonly describedBy?: string;
   /** Drawn above everything else (scenario rupture). */
   readonly overlay?: Child;
   readonly labels?: boolean;
@@ -56,6 +58,8 @@ export function StudyMap(props: StudyMapProps) {
     })),
   ];
   const placed = props.labels === false ? [] : placeLabels(requests, frame.width, frame.height);
+  // Over a layer of cells, dark lines and marks get a paper halo so they show on the darkest cells too.
+  const halo = props.hazardLayer !== undefined;
   const communityLabel = (i: number) => placed[i];
   const faultLabel = (i: number) => placed[study.communities.length + i];
   return (
@@ -66,6 +70,7 @@ export function StudyMap(props: StudyMapProps) {
       height={frame.height}
       role="img"
       aria-labelledby={titleId}
+      aria-describedby={props.describedBy}
       font-family="inherit"
     >
       <title id={titleId} lang={tr.fallbackLang('map.title')}>
@@ -109,7 +114,7 @@ export function StudyMap(props: StudyMapProps) {
             const label = faultLabel(i);
             return (
               <g data-source={s.id}>
-                {interfaceLike && <path d={frame.path(lineOf(s))} fill="none" stroke={PAPER} stroke-width={7} />}
+                {(interfaceLike || halo) && <path d={frame.path(lineOf(s))} fill="none" stroke={PAPER} stroke-width={interfaceLike ? 7 : 5} />}
                 <path
                   d={frame.path(lineOf(s))}
                   fill="none"
@@ -132,7 +137,13 @@ export function StudyMap(props: StudyMapProps) {
           .filter((s): s is Source & { kind: 'point' } => s.kind === 'point')
           .map((s) => {
             const [x, y] = frame.project(s.location);
-            return <path d={`M${x - 5},${y - 5}L${x + 5},${y + 5}M${x - 5},${y + 5}L${x + 5},${y - 5}`} stroke={INK} stroke-width={2} data-source={s.id} />;
+            const cross = `M${x - 5},${y - 5}L${x + 5},${y + 5}M${x - 5},${y + 5}L${x + 5},${y - 5}`;
+            return (
+              <g data-source={s.id}>
+                {halo && <path d={cross} stroke={PAPER} stroke-width={5} stroke-linecap="round" />}
+                <path d={cross} stroke={INK} stroke-width={2} />
+              </g>
+            );
           })}
       </g>
       {props.overlay}

@@ -3,6 +3,8 @@ import type { Child } from 'hono/jsx';
 import { InvalidInput, StudyTooLarge, TremoraError } from '../../api/engine/errors.ts';
 import { runStudy } from '../../api/service/study-input.ts';
 import { communityPageData } from '../data/community-data.ts';
+import { MapLayerCache, readMaps } from '../data/map-data.ts';
+import { suggestedMapSpacing } from '../data/map-spacing.ts';
 import { FIRST_DIRECTION, isSortKey, leadHorizonYears, rankCommunities, sortRanked, type SortDirection } from '../data/ranking.ts';
 import { feltData, studyCatalog } from '../data/study-catalog.ts';
 import { startScreening } from '../data/start-screening.ts';
@@ -10,18 +12,28 @@ import { readRuns, readStudy, type StudyData } from '../data/study-data.ts';
 import { mapFrame } from '../maps/map-frame.ts';
 import { CommunityView } from '../views/community-view.tsx';
 import { HandoutView } from '../views/handout-view.tsx';
+import type { MapFormState } from '../views/hazard-map-panel.tsx';
 import { MessageView } from '../views/message-view.tsx';
 import { OverviewView } from '../views/overview-view.tsx';
 import { RunView } from '../views/run-view.tsx';
+import { mapPages } from './map-pages.tsx';
 import type { PageKit } from './page-kit.ts';
 
 /** Map sizes, px: the overview's map and the community page's smaller one. */
 export const OVERVIEW_MAP = { width: 760, maxHeight: 620, padding: 28 } as const;
 export const COMMUNITY_MAP = { width: 560, maxHeight: 460, padding: 30, fit: 'communities' } as const;
 
-/** Overview, screening runs, community pages and handouts. */
+/** What the overview shows again after a form post with problems. */
+interface OverviewAgain {
+  /** A problem starting a screening. */
+  readonly problem?: string;
+  readonly mapForm?: MapFormState;
+}
+
+/** Overview (with its hazard maps), screening runs, community pages and handouts. */
 export function studyPages(app: Hono, kit: PageKit): void {
   const { ctx } = kit;
+  const layers = new MapLayerCache();
 
   const notFound = (c: Context, text: Child) => {
     const tr = kit.tr(c);
@@ -36,7 +48,8 @@ export function studyPages(app: Hono, kit: PageKit): void {
     );
   };
 
-  const overview = (c: Context, problem?: string) => {
+  const overview = (c: Context, again: OverviewAgain = {}) => {
+    const { problem, mapForm } = again;
     const tr = kit.tr(c);
     const id = c.req.param('id') as string;
     const data = readStudy(ctx, id);
@@ -63,12 +76,16 @@ export function studyPages(app: Hono, kit: PageKit): void {
         sort={sort}
         direction={direction}
         {...(problem ? { problem } : {})}
+        maps={readMaps(ctx, layers, id, data.hash)}
+        mapSpacing={suggestedMapSpacing(data.study)}
+        {...(mapForm ? { mapForm } : {})}
       />,
-      problem ? 422 : 200,
+      problem || mapForm ? 422 : 200,
     );
   };
 
   app.get('/studies/:id', (c) => overview(c));
+  mapPages(app, kit, overview);
 
   app.post('/studies/:id/screen', async (c) => {
     const id = c.req.param('id');
@@ -79,8 +96,8 @@ export function studyPages(app: Hono, kit: PageKit): void {
       if (!run) return notFound(c, kit.tr(c).text('error.studyNotFound', { id }));
       return c.redirect(`/studies/${id}/runs/${run.id}`, 303);
     } catch (error) {
-      if (error instanceof InvalidInput) return overview(c, error.issues.map((i) => `${i.path}: ${i.message}`).join('; '));
-      if (error instanceof StudyTooLarge || error instanceof TremoraError) return overview(c, error.message);
+      if (error instanceof InvalidInput) return overview(c, { problem: error.issues.map((i) => `${i.path}: ${i.message}`).join('; ') });
+      if (error instanceof StudyTooLarge || error instanceof TremoraError) return overview(c, { problem: error.message });
       throw error;
     }
   });

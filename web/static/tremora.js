@@ -1,6 +1,6 @@
 // Tremora's one script: enhancements only; every page works without it.
 // 1. The ranking table sorts in place when a column header is chosen (the links still work).
-// 2. A screening's progress page follows the run and moves on when it is done.
+// 2. A screening's (or hazard map's) progress page follows the run and moves on when it is done.
 // 3. The handout gets a print button.
 (() => {
   'use strict';
@@ -56,12 +56,13 @@
 
   function followRun(box) {
     const id = box.getAttribute('data-run');
+    const statusUrl = box.getAttribute('data-status-url') || `/api/runs/${encodeURIComponent(id)}`;
     const doneUrl = box.getAttribute('data-done-url');
     const bar = box.querySelector('progress');
     const percent = box.querySelector('.run-percent');
     const tick = async () => {
       try {
-        const answer = await fetch(`/api/runs/${encodeURIComponent(id)}`, { headers: { Accept: 'application/json' } });
+        const answer = await fetch(statusUrl, { headers: { Accept: 'application/json' } });
         if (answer.ok) {
           const run = await answer.json();
           if (bar) bar.value = run.progress;

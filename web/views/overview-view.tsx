@@ -1,12 +1,16 @@
 import type { Child } from 'hono/jsx';
 import type { Study } from '../../api/engine/model.ts';
+import type { MapState } from '../data/map-data.ts';
+import type { SuggestedSpacing } from '../data/map-spacing.ts';
 import { FIRST_DIRECTION, type RankedCommunity, type SortDirection, type SortKey } from '../data/ranking.ts';
 import type { RunState } from '../data/study-data.ts';
 import { BandSwatch } from '../layout/band-swatch.tsx';
 import { PageShell } from '../layout/page-shell.tsx';
+import { HazardLayer, HazardMapLegend, layerClasses } from '../maps/hazard-layer.tsx';
 import type { MapFrame } from '../maps/map-frame.ts';
 import { StudyMap, StudyMapLegend } from '../maps/study-map.tsx';
 import type { Translator } from '../text/translator.ts';
+import { HazardMapPanel, type MapFormState } from './hazard-map-panel.tsx';
 import { ScreeningStatus } from './screening-status.tsx';
 
 export interface OverviewProps {
@@ -23,7 +27,14 @@ export interface OverviewProps {
   readonly sort: SortKey;
   readonly direction: SortDirection;
   readonly problem?: string;
+  readonly maps: MapState;
+  readonly mapSpacing: SuggestedSpacing;
+  /** The hazard-map form as sent, when it had problems. */
+  readonly mapForm?: MapFormState;
 }
+
+/** Id of the hazard layer's summary, the map's description for assistive technology. */
+const HAZARD_SUMMARY_ID = 'overview-map-hazard-summary';
 
 const COLUMNS: readonly { readonly key: SortKey; readonly text: (tr: Translator, years: number) => Child; readonly numeric?: boolean }[] = [
   { key: 'rank', text: (tr) => tr.text('overview.col.rank'), numeric: true },
@@ -34,10 +45,16 @@ const COLUMNS: readonly { readonly key: SortKey; readonly text: (tr: Translator,
   { key: 'fault', text: (tr) => tr.text('overview.col.fault') },
 ];
 
-/** The study overview: status, map and the ranking table, sortable by links (and by script). */
+/**
+ * The study overview: status, the map with the newest hazard map as its layer, the form that
+ * computes a hazard map, and the ranking table, sortable by links (and by script).
+ */
 export function OverviewView(props: OverviewProps) {
   const { tr, study, studyId, rows } = props;
   const bands = new Map(rows?.map((r) => [r.communityId, r.bandId]) ?? []);
+  const shown = props.maps.shown;
+  // A map with too many points to draw is offered as a download only (hazard-map-panel.tsx).
+  const drawn = shown?.layer ? { run: shown.run, layer: shown.layer, classes: layerClasses(shown.layer.points) } : undefined;
   return (
     <PageShell
       tr={tr}
@@ -47,19 +64,32 @@ export function OverviewView(props: OverviewProps) {
       toolVersion={props.toolVersion}
       study={{ id: studyId, name: study.name }}
       section="overview"
-      showsNumbers={rows !== undefined}
+      showsNumbers={rows !== undefined || drawn !== undefined}
     >
       <h1>{tr.text('overview.title', { name: study.name })}</h1>
       <ScreeningStatus tr={tr} studyId={studyId} runs={props.runs} {...(props.problem ? { problem: props.problem } : {})} />
       <section aria-labelledby="map-heading" class="map-section">
         <h2 id="map-heading">{tr.text('overview.map')}</h2>
         <figure class="map-figure">
-          <StudyMap tr={tr} study={study} frame={props.frame} idPrefix="overview-map" bands={bands} hazardLayer={undefined} />
+          <StudyMap
+            tr={tr}
+            study={study}
+            frame={props.frame}
+            idPrefix="overview-map"
+            bands={bands}
+            hazardLayer={drawn?.classes ? <HazardLayer points={drawn.layer.points} classes={drawn.classes} spacingKm={drawn.run.description.spacingKm} frame={props.frame} /> : undefined}
+            {...(drawn ? { describedBy: HAZARD_SUMMARY_ID } : {})}
+          />
           <figcaption>
+            {drawn ? (
+              <HazardMapLegend tr={tr} description={drawn.run.description} {...(drawn.classes ? { classes: drawn.classes } : {})} geojsonUrl={`/api/maps/${drawn.run.id}/map.geojson`} summaryId={HAZARD_SUMMARY_ID} />
+            ) : (
+              !shown && <p class="legend-note">{tr.text('map.noHazardLayer')}</p>
+            )}
             <StudyMapLegend tr={tr} idPrefix="overview-map" bands={rows !== undefined} study={study} />
-            <p class="legend-note">{tr.text('map.noHazardLayer')}</p>
           </figcaption>
         </figure>
+        <HazardMapPanel tr={tr} studyId={studyId} study={study} maps={props.maps} suggestion={props.mapSpacing} {...(props.mapForm ? { form: props.mapForm } : {})} />
       </section>
       <section aria-labelledby="ranking-heading">
         <h2 id="ranking-heading">{tr.text('overview.ranking')}</h2>

@@ -1,73 +1,54 @@
 import { Hono } from 'hono';
-import { StudyTooLarge } from '../../engine/errors.ts';
-import { frameForStudy } from '../../engine/geometry/projection.ts';
-import { mapGrid } from '../../engine/map/map-grid.ts';
-import type { Study } from '../../engine/model.ts';
+import { isFinished, type MapRunRecord } from '../../store/index.ts';
 import { HttpError, notFound } from '../http-error.ts';
 import { readMapRequest } from '../map-request.ts';
-import { MapRuns, type MapRun } from '../map-runs.ts';
+import { mapRunsOf, type MapRuns } from '../map-runs.ts';
 import { readJsonObject } from '../request-body.ts';
 import type { ServiceContext } from '../service-context.ts';
-import { storedInputs, validateStudy } from '../study-input.ts';
-import type { MapRequest } from '../../workers/messages.ts';
+import { startMapRun } from '../start-map-run.ts';
 
 /** A map run as the API shows it: its state, progress, what it maps, and links; the GeoJSON is separate. */
-export const mapRunJson = (run: MapRun) => ({
+export const mapRunJson = (run: MapRunRecord) => ({
   id: run.id,
   studyId: run.studyId,
   status: run.status,
   progress: run.progress,
   request: run.request,
   map: run.description,
-  warnings: run.summary?.warnings ?? [],
+  warnings: run.warnings,
   error: run.error,
+  inputHash: run.inputHash,
+  provenance: run.provenance === null ? null : (JSON.parse(run.provenance) as unknown),
   createdAt: run.createdAt,
+  startedAt: run.startedAt,
   finishedAt: run.finishedAt,
   links: { self: `/api/maps/${run.id}`, study: `/api/studies/${run.studyId}`, geojson: `/api/maps/${run.id}/map.geojson`, cancel: `/api/maps/${run.id}/cancel` },
 });
 
-/**
- * Terms a map sums per point and rupture, for the work budget (work-budget.ts counts
- * communities × ruptures × levels): one level for a chance map; for a return-period map the
- * levels its search reads, about log₂ of the curve's 25 levels and two more.
- */
-const MAP_LEVELS_READ = { 'return-period': 7, chance: 1 } as const;
-
-/** Hazard maps of saved studies, each a run spread over the run pool with its progress in its status. */
+/** Hazard maps of saved studies, each a run spread over the run pool and kept in the store with its GeoJSON. */
 export function mapRoutes(ctx: ServiceContext & { readonly maps?: MapRuns }): Hono {
   const app = new Hono();
-  const maps = ctx.maps ?? new MapRuns();
+  const { studies, maps } = ctx.store;
 
-  const findMap = (id: string): MapRun => {
+  const findMap = (id: string): MapRunRecord => {
     const run = maps.get(id);
     if (!run) throw notFound('map', id);
     return run;
   };
 
-  const checkBudget = async (study: Study, request: MapRequest): Promise<void> => {
-    const { ruptures } = await ctx.quickPool.run({ kind: 'measure', study }).result;
-    const grid = mapGrid(study, frameForStudy(study), { spacingKm: request.spacingKm, ...(request.bounds ? { bounds: request.bounds } : {}) });
-    const levels = MAP_LEVELS_READ[request.quantity.kind];
-    const size = grid.count * ruptures * levels;
-    if (size > ctx.workBudget) throw new StudyTooLarge(size, ctx.workBudget, `${grid.count} map points x ${ruptures} ruptures x ${levels} levels read`);
-  };
-
   app.post('/studies/:id/maps', async (c) => {
     const id = c.req.param('id');
-    const record = ctx.store.studies.get(id);
+    const record = studies.get(id);
     if (!record) throw notFound('study', id);
     const { value } = await readJsonObject(c, 'a map request ({ "measure": "PGA", "returnPeriodYears": 475, "spacingKm": 10 })');
-    const request = readMapRequest(value);
-    const inputs = storedInputs(ctx.store, record);
-    const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
-    await checkBudget(study, request);
-    const run = maps.start(ctx.runPool, id, study, request);
+    const run = await startMapRun(ctx, record, readMapRequest(value));
+    if (!run) throw notFound('study', id);
     return c.json(mapRunJson(run), 202, { Location: `/api/maps/${run.id}` });
   });
 
   app.get('/studies/:id/maps', (c) => {
     const id = c.req.param('id');
-    if (!ctx.store.studies.get(id)) throw notFound('study', id);
+    if (!studies.get(id)) throw notFound('study', id);
     return c.json({ maps: maps.listForStudy(id).map(mapRunJson) });
   });
 
@@ -75,8 +56,9 @@ export function mapRoutes(ctx: ServiceContext & { readonly maps?: MapRuns }): Ho
 
   app.get('/maps/:mapId/map.geojson', (c) => {
     const run = findMap(c.req.param('mapId'));
-    if (run.status !== 'done') throw new HttpError(409, `map "${run.id}" is ${run.status}; its GeoJSON exists only once it is done${run.error ? ` (${run.error})` : ''}`);
-    return c.body(run.geojson.join(''), 200, {
+    const text = maps.geojson(run.id);
+    if (run.status !== 'done' || text === undefined) throw new HttpError(409, `map "${run.id}" is ${run.status}; its GeoJSON exists only once it is done${run.error ? ` (${run.error})` : ''}`);
+    return c.body(text, 200, {
       'Content-Type': 'application/geo+json; charset=utf-8',
       'Content-Disposition': `attachment; filename="tremora-map-${run.id}.geojson"`,
     });
@@ -84,9 +66,10 @@ export function mapRoutes(ctx: ServiceContext & { readonly maps?: MapRuns }): Ho
 
   app.post('/maps/:mapId/cancel', (c) => {
     const run = findMap(c.req.param('mapId'));
-    if (run.status !== 'running') throw new HttpError(409, `map "${run.id}" is already ${run.status}; only a running map can be cancelled`);
-    maps.cancel(run.id);
-    return c.json(mapRunJson(run), 202);
+    if (isFinished(run.status)) throw new HttpError(409, `map "${run.id}" is already ${run.status}; only a queued or running map can be cancelled`);
+    // Every unfinished map run belongs to this process (others were marked interrupted at open).
+    if (!mapRunsOf(ctx).cancel(run.id)) maps.finishWithout(run.id, 'cancelled', 'cancelled on request');
+    return c.json(mapRunJson(findMap(run.id)), 202);
   });
 
   return app;

@@ -1,0 +1,62 @@
+import type { Context, Hono } from 'hono';
+import { InvalidInput, TremoraError } from '../../api/engine/errors.ts';
+import { readMapRequest } from '../../api/service/map-request.ts';
+import { startMapRun } from '../../api/service/start-map-run.ts';
+import type { MapFormState } from '../views/hazard-map-panel.tsx';
+import { MapRunView } from '../views/map-run-view.tsx';
+import { MessageView } from '../views/message-view.tsx';
+import { field, type PageKit } from './page-kit.ts';
+
+/** The overview rendered again with the hazard-map form's problems (study-pages.tsx). */
+export type OverviewWithMapForm = (c: Context, options: { readonly mapForm: MapFormState }) => Response | Promise<Response>;
+
+/** A form number as the request wants it: a number when it reads as one ("12,5" too), else the text, for the message to quote. */
+function formNumber(text: string): number | string {
+  const trimmed = text.trim().replace(',', '.');
+  const value = Number(trimmed);
+  return trimmed !== '' && Number.isFinite(value) ? value : text;
+}
+
+/**
+ * Hazard maps from the overview: POST computes one (as POST /api/studies/{id}/maps does, with
+ * the same checks; problems come back on the overview beside the fields), then the map's
+ * progress page, which the overview's map shows when it is done.
+ */
+export function mapPages(app: Hono, kit: PageKit, overview: OverviewWithMapForm): void {
+  const { ctx } = kit;
+
+  const notFound = (c: Context) => {
+    const tr = kit.tr(c);
+    return kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={tr.text('error.studyNotFound', { id: c.req.param('id') ?? '' })} />, 404);
+  };
+
+  app.post('/studies/:id/maps', async (c) => {
+    const id = c.req.param('id');
+    const record = ctx.store.studies.get(id);
+    if (!record) return notFound(c);
+    const form = await c.req.parseBody();
+    const sent = { measure: field(form, 'measure') ?? '', returnPeriodYears: field(form, 'returnPeriodYears') ?? '', spacingKm: field(form, 'spacingKm') ?? '' };
+    try {
+      const request = readMapRequest({ measure: sent.measure, returnPeriodYears: formNumber(sent.returnPeriodYears), spacingKm: formNumber(sent.spacingKm) });
+      const run = await startMapRun(ctx, record, request);
+      if (!run) return notFound(c);
+      return c.redirect(`/studies/${id}/maps/${run.id}`, 303);
+    } catch (error) {
+      if (error instanceof InvalidInput) return overview(c, { mapForm: { ...sent, issues: error.issues } });
+      // Over the work budget, too many points, a model without the measure: said beside the form.
+      if (error instanceof TremoraError) return overview(c, { mapForm: { ...sent, issues: [{ path: '(map)', message: error.message }] } });
+      throw error;
+    }
+  });
+
+  app.get('/studies/:id/maps/:mapId', (c) => {
+    const tr = kit.tr(c);
+    const id = c.req.param('id');
+    const record = ctx.store.studies.get(id);
+    const run = ctx.store.maps.get(c.req.param('mapId'));
+    if (!record || !run || run.studyId !== id) {
+      return kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={tr.text('error.notFoundText')} />, 404);
+    }
+    return kit.render(c, <MapRunView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} studyId={id} studyName={record.name} run={run} />);
+  });
+}
