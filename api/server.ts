@@ -40,6 +40,7 @@ const urlHost = (host: string): string => (host.includes(':') && !host.startsWit
 const config = readConfigOrExit();
 const store = openStore(config.databasePath);
 if (store.interruptedAtOpen > 0) console.log(`${store.interruptedAtOpen} run(s) left unfinished by the previous process are marked interrupted`);
+if (store.mapRunsInterruptedAtOpen > 0) console.log(`${store.mapRunsInterruptedAtOpen} map(s) left unfinished by the previous process are marked interrupted`);
 seedOnFirstStart(store);
 
 const runPool = new WorkerPool({ size: config.workers, name: 'tremora-run' });
@@ -72,6 +73,7 @@ async function stop(signal: string): Promise<void> {
   // The scheduler records interrupted runs as the pool's rejections arrive; catch any left.
   await new Promise((resolve) => setImmediate(resolve));
   store.runs.interruptUnfinished();
+  store.maps.interruptUnfinished();
   store.close();
   process.exit(0);
 }

@@ -30,7 +30,8 @@ export function readMapRequest(raw: Record<string, unknown>): MapRequest {
     if (!(MAP_KEYS as readonly string[]).includes(key)) issues.add([key], `unknown key; expected one of ${MAP_KEYS.join(', ')}`);
   }
   const fields = issues.parse(mapSchema, raw, []);
-  const measure = fields?.measure ?? 'PGA';
+  // The measure is read from the raw request, so it is checked even when another field is bad.
+  const measure = typeof raw.measure === 'string' ? raw.measure : (fields?.measure ?? 'PGA');
   try {
     parseMeasure(measure);
   } catch (error) {

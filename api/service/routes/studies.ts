@@ -2,6 +2,7 @@ import { Hono } from 'hono';
 import type { StudySummary } from '../../store/index.ts';
 import { notFound } from '../http-error.ts';
 import { readJsonObject } from '../request-body.ts';
+import { mapRunsOf } from '../map-runs.ts';
 import type { ServiceContext } from '../service-context.ts';
 import { storedInputs, validateStudy } from '../study-input.ts';
 
@@ -70,6 +71,7 @@ export function studyRoutes(ctx: ServiceContext): Hono {
     const id = c.req.param('id');
     find(id);
     for (const run of ctx.store.runs.listForStudy(id)) ctx.scheduler.cancel(run.id);
+    for (const map of ctx.store.maps.listForStudy(id)) mapRunsOf(ctx).cancel(map.id);
     if (!studies.delete(id)) throw notFound('study', id);
     return c.body(null, 204);
   });
