@@ -3,7 +3,6 @@ import { readCatalogText } from '../catalog/catalog-input.ts';
 import type { CatalogLoad } from '../catalog/catalog-load.ts';
 import { InvalidInput, type InputIssue } from '../engine/errors.ts';
 import type { ModelCatalog } from '../engine/motion/catalog.ts';
-import { putStudyCatalog } from '../store/catalog-repository.ts';
 import type { Store } from '../store/index.ts';
 import { parseJsonText } from '../study/json-text.ts';
 import { loadStudy } from '../study/load-study.ts';
@@ -46,9 +45,9 @@ export function seedDemoStudy(store: Store, models: ModelCatalog, url: URL = DEM
   }
   const { summary, format } = catalog;
   const fileName = catalogUrl.pathname.split('/').pop() as string;
-  return store.db.transaction((): DemoSeed => {
+  return store.transaction((): DemoSeed => {
     const { id } = store.studies.create({ name: result.study.name, document: text });
-    putStudyCatalog(store.db, id, { fileName, format, content: catalogText, loadedCount: summary.loaded, rejectedCount: summary.rejected, nonMomentCount: summary.nonMoment });
+    store.catalogs.put(id, { fileName, format, content: catalogText, loadedCount: summary.loaded, rejectedCount: summary.rejected, nonMomentCount: summary.nonMoment });
     return { seeded: true, id };
-  })();
+  });
 }

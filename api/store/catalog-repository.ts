@@ -6,8 +6,6 @@ import type { CatalogFormat } from '../catalog/catalog-load.ts';
  * exactly as it was received, with the counts of its load. Attaching another replaces it;
  * deleting the study deletes it (ON DELETE CASCADE).
  *
- * Plain functions on the connection. Statements are prepared at each call: catalogs are
- * attached and read a few times per session, where preparing costs microseconds.
  */
 export interface StudyCatalogWrite {
   /** What the user called the file, e.g. "network-2024.csv". */
@@ -52,33 +50,43 @@ const recordOf = (row: CatalogRow): StudyCatalogRecord => ({
 
 const SELECT = 'SELECT study_id, file_name, format, content, imported_at, loaded_count, rejected_count, non_moment_count FROM study_catalogs WHERE study_id = ?';
 
-/**
- * Attaches `write` to the study, replacing any catalog it had, in one transaction. Undefined
- * when there is no such study; `replaced` says whether a catalog was there before.
- */
-export function putStudyCatalog(db: Database, studyId: string, write: StudyCatalogWrite): { readonly catalog: StudyCatalogRecord; readonly replaced: boolean } | undefined {
-  const importedAt = new Date().toISOString();
-  return db.transaction(() => {
-    if (db.prepare('SELECT 1 FROM studies WHERE id = ?').get(studyId) === undefined) return undefined;
-    const replaced = db.prepare('SELECT 1 FROM study_catalogs WHERE study_id = ?').get(studyId) !== undefined;
-    db.prepare(
-      `INSERT INTO study_catalogs (study_id, file_name, format, content, imported_at, loaded_count, rejected_count, non_moment_count)
-       VALUES (?, ?, ?, ?, ?, ?, ?, ?)
-       ON CONFLICT (study_id) DO UPDATE SET file_name = excluded.file_name, format = excluded.format, content = excluded.content,
-         imported_at = excluded.imported_at, loaded_count = excluded.loaded_count, rejected_count = excluded.rejected_count,
-         non_moment_count = excluded.non_moment_count`,
-    ).run(studyId, write.fileName, write.format, write.content, importedAt, write.loadedCount, write.rejectedCount, write.nonMomentCount);
-    return { catalog: recordOf(db.prepare(SELECT).get(studyId) as CatalogRow), replaced };
-  })();
-}
+/** The study catalogs of one connection; every write in a transaction. */
+export class CatalogRepository {
+  readonly #db: Database;
 
-/** The study's catalog, or undefined when it has none (or there is no such study). */
-export function getStudyCatalog(db: Database, studyId: string): StudyCatalogRecord | undefined {
-  const row = db.prepare(SELECT).get(studyId) as CatalogRow | undefined;
-  return row ? recordOf(row) : undefined;
-}
+  constructor(db: Database) {
+    this.#db = db;
+  }
 
-/** Detaches the study's catalog; false when it had none. */
-export function deleteStudyCatalog(db: Database, studyId: string): boolean {
-  return db.transaction(() => db.prepare('DELETE FROM study_catalogs WHERE study_id = ?').run(studyId).changes > 0)();
+  /**
+   * Attaches `write` to the study, replacing any catalog it had, in one transaction. Undefined
+   * when there is no such study; `replaced` says whether a catalog was there before.
+   */
+  put(studyId: string, write: StudyCatalogWrite): { readonly catalog: StudyCatalogRecord; readonly replaced: boolean } | undefined {
+    const db = this.#db;
+    const importedAt = new Date().toISOString();
+    return db.transaction(() => {
+      if (db.prepare('SELECT 1 FROM studies WHERE id = ?').get(studyId) === undefined) return undefined;
+      const replaced = db.prepare('SELECT 1 FROM study_catalogs WHERE study_id = ?').get(studyId) !== undefined;
+      db.prepare(
+        `INSERT INTO study_catalogs (study_id, file_name, format, content, imported_at, loaded_count, rejected_count, non_moment_count)
+         VALUES (?, ?, ?, ?, ?, ?, ?, ?)
+         ON CONFLICT (study_id) DO UPDATE SET file_name = excluded.file_name, format = excluded.format, content = excluded.content,
+           imported_at = excluded.imported_at, loaded_count = excluded.loaded_count, rejected_count = excluded.rejected_count,
+           non_moment_count = excluded.non_moment_count`,
+      ).run(studyId, write.fileName, write.format, write.content, importedAt, write.loadedCount, write.rejectedCount, write.nonMomentCount);
+      return { catalog: recordOf(db.prepare(SELECT).get(studyId) as CatalogRow), replaced };
+    })();
+  }
+
+  /** The study's catalog, or undefined when it has none (or there is no such study). */
+  get(studyId: string): StudyCatalogRecord | undefined {
+    const row = this.#db.prepare(SELECT).get(studyId) as CatalogRow | undefined;
+    return row ? recordOf(row) : undefined;
+  }
+
+  /** Detaches the study's catalog; false when it had none. */
+  delete(studyId: string): boolean {
+    return this.#db.transaction(() => this.#db.prepare('DELETE FROM study_catalogs WHERE study_id = ?').run(studyId).changes > 0)();
+  }
 }

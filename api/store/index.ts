@@ -13,4 +13,4 @@ export {
 } from './run-repository.ts';
 export { MapRunRepository, type MapRunInputs, type MapRunOutputs, type MapRunRecord, type MapRunRequest } from './map-run-repository.ts';
 export { newId } from './new-id.ts';
-export { deleteStudyCatalog, getStudyCatalog, putStudyCatalog, type StudyCatalogRecord, type StudyCatalogWrite } from './catalog-repository.ts';
+export { CatalogRepository, type StudyCatalogRecord, type StudyCatalogWrite } from './catalog-repository.ts';

@@ -1,6 +1,7 @@
 import { mkdirSync } from 'node:fs';
 import { dirname } from 'node:path';
 import Database from 'better-sqlite3';
+import { CatalogRepository } from './catalog-repository.ts';
 import { MapRunRepository } from './map-run-repository.ts';
 import { migrate, type MigrationOutcome } from './migrate.ts';
 import { RunRepository } from './run-repository.ts';
@@ -16,9 +17,11 @@ export const DEFAULT_DATABASE_PATH = '.tremora/tremora.db';
 const BUSY_TIMEOUT_MS = 5_000;
 
 export interface Store {
-  /** The connection, for repositories written as functions (catalog-repository.ts). */
+  /** The connection itself, for tests and diagnostics; the service goes through the repositories. */
   readonly db: Database.Database;
   readonly studies: StudyRepository;
+  /** The earthquake catalog attached to each study. */
+  readonly catalogs: CatalogRepository;
   readonly runs: RunRepository;
   /** Hazard-map runs and their GeoJSON. */
   readonly maps: MapRunRepository;
@@ -28,6 +31,8 @@ export interface Store {
   /** Map runs found queued or running at open, now marked interrupted. */
   readonly mapRunsInterruptedAtOpen: number;
   /** `PRAGMA integrity_check`: 'ok' or the problems found. */
+  /** Runs `work` in one transaction, for writes that span repositories (all or nothing). */
+  transaction<T>(work: () => T): T;
   integrityCheck(): string;
   /** Cheap liveness check of the connection. */
   ping(): boolean;
@@ -57,11 +62,13 @@ export function openStore(path: string): Store {
     return {
       db,
       studies: new StudyRepository(db),
+      catalogs: new CatalogRepository(db),
       runs,
       maps,
       migration,
       interruptedAtOpen,
       mapRunsInterruptedAtOpen,
+      transaction: (work) => db.transaction(work)(),
       integrityCheck: () => (db.pragma('integrity_check') as { integrity_check: string }[]).map((r) => r.integrity_check).join('; '),
       ping: () => (db.prepare('SELECT 1 AS one').get() as { one: number }).one === 1,
       close: () => db.close(),

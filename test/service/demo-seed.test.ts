@@ -3,7 +3,6 @@ import { pathToFileURL } from 'node:url';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { modelCatalog } from '../../api/engine/motion/registry.ts';
 import { DEMO_CATALOG_URL, seedDemoStudy } from '../../api/service/demo-seed.ts';
-import { getStudyCatalog } from '../../api/store/catalog-repository.ts';
 import { openStore, type Store } from '../../api/store/store.ts';
 import { tempDir } from './helpers/service-process.ts';
 
@@ -40,7 +39,7 @@ describe('seedDemoStudy', () => {
 
   it('attaches the demo catalog to the demo study (a smoke run: the demo is never a check value)', () => {
     const seed = seedDemoStudy(store, modelCatalog);
-    const catalog = seed.seeded ? getStudyCatalog(store.db, seed.id) : undefined;
+    const catalog = seed.seeded ? store.catalogs.get(seed.id) : undefined;
     expect(catalog).toMatchObject({ fileName: 'catalog.csv', format: 'csv', rejectedCount: 0 });
     expect(catalog?.content).toBe(readFileSync(DEMO_CATALOG_URL, 'utf8'));
   });

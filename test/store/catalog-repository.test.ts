@@ -1,10 +1,11 @@
 import Database from 'better-sqlite3';
 import { beforeEach, describe, expect, it } from 'vitest';
-import { deleteStudyCatalog, getStudyCatalog, putStudyCatalog, type StudyCatalogWrite } from '../../api/store/catalog-repository.ts';
+import { CatalogRepository, type StudyCatalogWrite } from '../../api/store/catalog-repository.ts';
 import { migrate, readMigrations } from '../../api/store/migrate.ts';
 import { StudyRepository } from '../../api/store/study-repository.ts';
 
 let db: Database.Database;
+let catalogs: CatalogRepository;
 let studies: StudyRepository;
 
 beforeEach(() => {
@@ -12,6 +13,7 @@ beforeEach(() => {
   db.pragma('foreign_keys = ON');
   migrate(db);
   studies = new StudyRepository(db);
+  catalogs = new CatalogRepository(db);
 });
 
 // Kept byte for byte: a BOM, CRLF line ends and a trailing blank line.
@@ -45,13 +47,13 @@ describe('migration 002', () => {
   });
 });
 
-describe('putStudyCatalog, getStudyCatalog, deleteStudyCatalog', () => {
+describe('CatalogRepository put, get, delete', () => {
   it('attaches a catalog to a study and gives it back exactly as written', () => {
     const { id } = studies.create({ name: 'S', document: '{}' });
-    const put = putStudyCatalog(db, id, write({ rejectedCount: 2, nonMomentCount: 1 }));
+    const put = catalogs.put(id, write({ rejectedCount: 2, nonMomentCount: 1 }));
     expect(put?.replaced).toBe(false);
     expect(put?.catalog.importedAt).toMatch(/^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d\.\d{3}Z$/);
-    expect(getStudyCatalog(db, id)).toEqual({
+    expect(catalogs.get(id)).toEqual({
       studyId: id,
       fileName: 'network.csv',
       format: 'csv',
@@ -65,46 +67,46 @@ describe('putStudyCatalog, getStudyCatalog, deleteStudyCatalog', () => {
 
   it('keeps one catalog per study: a second put replaces the first', () => {
     const { id } = studies.create({ name: 'S', document: '{}' });
-    putStudyCatalog(db, id, write());
-    const second = putStudyCatalog(db, id, write({ fileName: 'events.xml', format: 'quakeml', content: '<q:quakeml/>', loadedCount: 3 }));
+    catalogs.put(id, write());
+    const second = catalogs.put(id, write({ fileName: 'events.xml', format: 'quakeml', content: '<q:quakeml/>', loadedCount: 3 }));
     expect(second?.replaced).toBe(true);
-    expect(getStudyCatalog(db, id)).toMatchObject({ fileName: 'events.xml', format: 'quakeml', content: '<q:quakeml/>', loadedCount: 3 });
+    expect(catalogs.get(id)).toMatchObject({ fileName: 'events.xml', format: 'quakeml', content: '<q:quakeml/>', loadedCount: 3 });
     expect(rows()).toBe(1);
   });
 
   it('writes nothing for an unknown study, and reads nothing for a study without a catalog', () => {
-    expect(putStudyCatalog(db, 'no-such-id', write())).toBeUndefined();
+    expect(catalogs.put('no-such-id', write())).toBeUndefined();
     expect(rows()).toBe(0);
     const { id } = studies.create({ name: 'S', document: '{}' });
-    expect(getStudyCatalog(db, id)).toBeUndefined();
-    expect(getStudyCatalog(db, 'no-such-id')).toBeUndefined();
+    expect(catalogs.get(id)).toBeUndefined();
+    expect(catalogs.get('no-such-id')).toBeUndefined();
   });
 
   it('leaves the catalog as it was when a write is refused (one transaction)', () => {
     const { id } = studies.create({ name: 'S', document: '{}' });
-    putStudyCatalog(db, id, write());
-    expect(() => putStudyCatalog(db, id, write({ fileName: 'empty.csv', loadedCount: 0 }))).toThrow(/CHECK constraint failed/);
-    expect(() => putStudyCatalog(db, id, write({ format: 'xlsx' as never }))).toThrow(/CHECK constraint failed/);
-    expect(getStudyCatalog(db, id)).toMatchObject({ fileName: 'network.csv', loadedCount: 1, format: 'csv' });
+    catalogs.put(id, write());
+    expect(() => catalogs.put(id, write({ fileName: 'empty.csv', loadedCount: 0 }))).toThrow(/CHECK constraint failed/);
+    expect(() => catalogs.put(id, write({ format: 'xlsx' as never }))).toThrow(/CHECK constraint failed/);
+    expect(catalogs.get(id)).toMatchObject({ fileName: 'network.csv', loadedCount: 1, format: 'csv' });
   });
 
   it('detaches a catalog; false when there was none', () => {
     const { id } = studies.create({ name: 'S', document: '{}' });
-    putStudyCatalog(db, id, write());
-    expect(deleteStudyCatalog(db, id)).toBe(true);
-    expect(getStudyCatalog(db, id)).toBeUndefined();
-    expect(deleteStudyCatalog(db, id)).toBe(false);
-    expect(deleteStudyCatalog(db, 'no-such-id')).toBe(false);
+    catalogs.put(id, write());
+    expect(catalogs.delete(id)).toBe(true);
+    expect(catalogs.get(id)).toBeUndefined();
+    expect(catalogs.delete(id)).toBe(false);
+    expect(catalogs.delete('no-such-id')).toBe(false);
   });
 
   it('goes with its study when the study is deleted', () => {
     const keep = studies.create({ name: 'Keep', document: '{}' });
     const gone = studies.create({ name: 'Gone', document: '{}' });
-    putStudyCatalog(db, keep.id, write());
-    putStudyCatalog(db, gone.id, write());
+    catalogs.put(keep.id, write());
+    catalogs.put(gone.id, write());
     expect(studies.delete(gone.id)).toBe(true);
-    expect(getStudyCatalog(db, gone.id)).toBeUndefined();
-    expect(getStudyCatalog(db, keep.id)?.content).toBe(TEXT);
+    expect(catalogs.get(gone.id)).toBeUndefined();
+    expect(catalogs.get(keep.id)?.content).toBe(TEXT);
     expect(rows()).toBe(1);
   });
 });

@@ -2,7 +2,6 @@ import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { StudyResult } from '../../api/engine/results.ts';
 import { DEMO_STUDY_URL } from '../../api/service/demo-seed.ts';
-import { getStudyCatalog } from '../../api/store/index.ts';
 import { translator } from '../../web/text/translator.ts';
 import { smallStudy } from '../service/helpers/small-study.ts';
 import { fileForm, runFinished, startPageApp, textOfId, type PageApp } from './helpers/page-app.ts';
@@ -177,15 +176,15 @@ describe('pages', () => {
     expect(html).toContain('<table class="data-table rejected">');
     expect(html).toMatch(/<tr data-line="5"><th scope="row">line 5<\/th>/);
     expect(html).toMatch(/data-loaded="[1-9]\d*" data-rejected="[1-9]\d*"/);
-    expect(getStudyCatalog(page.ctx.store.db, smallId)?.fileName).toBe('small-catalog.csv');
+    expect(page.ctx.store.catalogs.get(smallId)?.fileName).toBe('small-catalog.csv');
   });
 
   test('a catalog file that loads no event is shown back with its problems and attaches nothing', async () => {
-    const before = getStudyCatalog(page.ctx.store.db, smallId)?.content;
+    const before = page.ctx.store.catalogs.get(smallId)?.content;
     const response = await post(`/studies/${smallId}/catalog`, fileForm('empty.csv', 'text/csv', 'time,lon,lat,depthKm,magnitude,magnitudeType,id\n'));
     expect(response.status).toBe(422);
     expect(textOfId(await response.text(), 'catalog-problems')).toMatch(/expected at least one event/);
-    expect(getStudyCatalog(page.ctx.store.db, smallId)?.content).toBe(before);
+    expect(page.ctx.store.catalogs.get(smallId)?.content).toBe(before);
   });
 
   test('the catalog view loads the demo catalog, fits it, and adds a zone only after validation', async () => {

@@ -6,7 +6,6 @@ import { InvalidInput } from '../../api/engine/errors.ts';
 import type { Study } from '../../api/engine/model.ts';
 import { FELT_PAIR_BUDGET } from '../../api/service/routes/catalogs.ts';
 import type { ServiceContext } from '../../api/service/service-context.ts';
-import { getStudyCatalog, putStudyCatalog } from '../../api/store/index.ts';
 
 /** A catalog attached to a study: its text as received, format and file name. */
 export interface AttachedCatalog {
@@ -25,7 +24,7 @@ export function readDemoCatalog(): AttachedCatalog {
 
 /** The catalog attached to the study (study_catalogs, api/store/catalog-repository.ts). */
 export function studyCatalog(ctx: ServiceContext, studyId: string): AttachedCatalog | undefined {
-  const record = getStudyCatalog(ctx.store.db, studyId);
+  const record = ctx.store.catalogs.get(studyId);
   return record ? { text: record.content, format: record.format, fileName: record.fileName } : undefined;
 }
 
@@ -34,7 +33,7 @@ export function studyCatalog(ctx: ServiceContext, studyId: string): AttachedCata
  * any other; false when there is no such study.
  */
 export function attachCatalog(ctx: ServiceContext, studyId: string, catalog: AttachedCatalog, load: CatalogLoad): boolean {
-  const put = putStudyCatalog(ctx.store.db, studyId, {
+  const put = ctx.store.catalogs.put(studyId, {
     fileName: catalog.fileName,
     format: load.format,
     content: catalog.text,

@@ -5,7 +5,7 @@ import { catalogEventJson, catalogFitJson, catalogLoadJson, feltJson } from '../
 import type { CatalogLoad } from '../../catalog/catalog-load.ts';
 import { feltHistory } from '../../engine/catalog/felt-history.ts';
 import { InvalidInput } from '../../engine/errors.ts';
-import { deleteStudyCatalog, getStudyCatalog, putStudyCatalog, type StudyCatalogRecord } from '../../store/catalog-repository.ts';
+import type { StudyCatalogRecord } from '../../store/catalog-repository.ts';
 import { describeValue } from '../../study/fields.ts';
 import { DEFAULT_FILE_NAMES, readCatalogFitRequest, readCatalogUpload } from '../catalog-requests.ts';
 import { HttpError, notFound } from '../http-error.ts';
@@ -44,7 +44,7 @@ export function catalogRoutes(ctx: ServiceContext): Hono {
   };
   const findCatalog = (id: string): StudyCatalogRecord => {
     findStudy(id);
-    const record = getStudyCatalog(store.db, id);
+    const record = store.catalogs.get(id);
     if (!record) throw new HttpError(404, `study "${id}" has no catalog attached; attach one with PUT /api/studies/${id}/catalog`);
     return record;
   };
@@ -56,7 +56,7 @@ export function catalogRoutes(ctx: ServiceContext): Hono {
     findStudy(id);
     const upload = await readCatalogUpload(c);
     const load = readCatalogText(upload.text, upload.format);
-    const put = putStudyCatalog(store.db, id, {
+    const put = store.catalogs.put(id, {
       fileName: upload.fileName ?? DEFAULT_FILE_NAMES[load.format],
       format: load.format,
       content: upload.text,
@@ -78,7 +78,7 @@ export function catalogRoutes(ctx: ServiceContext): Hono {
   app.delete('/studies/:id/catalog', (c) => {
     const id = c.req.param('id');
     findCatalog(id);
-    if (!deleteStudyCatalog(store.db, id)) throw new HttpError(404, `study "${id}" has no catalog attached`);
+    if (!store.catalogs.delete(id)) throw new HttpError(404, `study "${id}" has no catalog attached`);
     return c.body(null, 204);
   });
 
