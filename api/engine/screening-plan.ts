@@ -6,7 +6,8 @@ import { deaggregate } from './hazard/deaggregation.ts';
 import { fastDeaggregate } from './hazard/fast-deaggregation.ts';
 import { createFastHazard, fastSiteHazard, type FastHazard } from './hazard/fast-site-hazard.ts';
 import { levelsFor } from './hazard/hazard-levels.ts';
-import { ruptureTable, type RuptureTable } from './hazard/rupture-table.ts';
+import type { RuptureTable } from './hazard/rupture-table.ts';
+import { studyRuptureTable } from './hazard/study-rupture-table.ts';
 import { siteHazard, type HazardBranch, type HazardMeasure } from './hazard/site-hazard.ts';
 import { INTENSITY_MEASURE } from './intensity/site-intensity.ts';
 import { TECTONIC_SETTINGS } from './model.ts';
@@ -85,9 +86,7 @@ export function planScreening(study: Study, options: ScreeningPlanOptions = {}):
     frame = frameForStudy(study);
     table = options.table;
   } else {
-    const discretised = discretiseStudy(study);
-    frame = discretised.frame;
-    table = ruptureTable(discretised.ruptures);
+    ({ frame, table } = studyRuptureTable(study));
   }
   // Built when the first community asks: a thread that only hands communities to others needs none.
   let fast: FastHazard | undefined;

@@ -2,13 +2,12 @@ import { parentPort } from 'node:worker_threads';
 import { modelCatalog } from '../engine/motion/registry.ts';
 import type { StudyResult } from '../engine/results.ts';
 import { buildProvenance } from '../results/provenance.ts';
-import { discretiseStudy } from '../engine/ruptures/discretise.ts';
 import { runScenario } from '../engine/scenario/index.ts';
 import { screenStudy } from '../engine/screen-study.ts';
 import type { TaskMessage, TaskOutputs, WorkerReply, WorkerTask } from './messages.ts';
 import { mapPointsTask, screenCommunitiesTask, type ChunkEvents } from './parallel-tasks.ts';
 import { shareTable } from './shared-table.ts';
-import { ruptureTable } from '../engine/hazard/rupture-table.ts';
+import { studyRuptureTable } from '../engine/hazard/study-rupture-table.ts';
 import { serialiseError } from './task-errors.ts';
 
 /**
@@ -49,11 +48,11 @@ function perform(message: TaskMessage): TaskOutputs[WorkerTask['kind']] {
     case 'screen':
       return screen(task, id, stop);
     case 'measure':
-      return { ruptures: discretiseStudy(task.study).ruptures.length };
+      return { ruptures: studyRuptureTable(task.study).table.count };
     case 'scenario':
       return { resultJson: JSON.stringify(runScenario(task.study, modelCatalog, task.request)) };
     case 'rupture-table':
-      return { table: shareTable(ruptureTable(discretiseStudy(task.study).ruptures)) };
+      return { table: shareTable(studyRuptureTable(task.study).table) };
     case 'screen-communities':
       return screenCommunitiesTask(task, chunkEvents(id, stop));
     case 'map-points':

@@ -3,7 +3,7 @@ import { join } from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { waitForStatus, startRun } from '../service/helpers/runs.ts';
-import { jsonInit, REPO_ROOT, startService, tempDir, type ServiceProcess } from '../service/helpers/service-process.ts';
+import { jsonInit, REPO_ROOT, startService, tempDir, waitFor, type ServiceProcess } from '../service/helpers/service-process.ts';
 import { smallStudy } from '../service/helpers/small-study.ts';
 import { appRoutes } from '../service/reliability/hostile-requests.ts';
 import { launchChromium, offlineContext, type LaunchedBrowser } from './helpers/chromium.ts';
@@ -36,6 +36,7 @@ let foreignRequests: string[];
 let page: Page;
 let studyId: string;
 let runId: string;
+let mapId: string;
 const dialogs: string[] = [];
 const visited: string[] = [];
 
@@ -63,6 +64,14 @@ beforeAll(async () => {
   const run = await waitForStatus(service, (await startRun(service, studyId)).id);
   expect(run.status, run.error ?? '').toBe('done');
   runId = run.id;
+  const mapStart = await service.fetch(`/api/studies/${studyId}/maps`, jsonInit('POST', { returnPeriodYears: 475, spacingKm: 20 }));
+  expect(mapStart.status, await mapStart.clone().text()).toBe(202);
+  mapId = ((await mapStart.json()) as { id: string }).id;
+  const map = await waitFor(
+    async () => (await (await service.fetch(`/api/maps/${mapId}`)).json()) as { status: string; error: string | null },
+    (m) => m.status !== 'queued' && m.status !== 'running',
+  );
+  expect(map.status, map.error ?? '').toBe('done');
   const catalog = readFileSync(join(REPO_ROOT, 'data-demo/catalog.csv'), 'utf8');
   const attached = await service.fetch(`/api/studies/${studyId}/catalog`, jsonInit('PUT', { fileName: CATALOG_FILE, format: 'csv', text: catalog }));
   expect(attached.status, await attached.clone().text()).toBeLessThan(300);
@@ -125,7 +134,7 @@ async function expectInert(path: string, names: readonly string[] = []): Promise
   await page.waitForLoadState('load');
   await page.waitForTimeout(50);
   const report = (await page.evaluate(INSPECT)) as DomReport;
-  visited.push(path.replace(studyId, '{id}').replace(runId, '{run}'));
+  visited.push(path.replace(studyId, '{id}').replace(runId, '{run}').replace(mapId, '{map}'));
   expect({ path, pwned: report.pwned, marked: report.marked, handlers: report.handlers, inlineScripts: report.inlineScripts, scriptLinks: report.scriptLinks }).toEqual({
     path,
     pwned: null,
@@ -143,9 +152,11 @@ function pagePaths(): { path: string; names: string[] }[] {
   const out: { path: string; names: string[] }[] = [];
   for (const route of appRoutes()) {
     if (route.method !== 'GET' || route.path.startsWith('/api') || route.path.startsWith('/static') || route.path === '/language') continue;
-    const withIds = route.path.replace(':id', studyId).replace(':runId', runId);
+    const withIds = route.path.replace(':id', studyId).replace(':runId', runId).replace(':mapId', mapId);
     if (withIds.includes(':cid')) {
       COMMUNITY_NAMES.forEach((name, i) => out.push({ path: withIds.replace(':cid', `village-${i + 1}`), names: [name] }));
+    } else if (route.path.endsWith('/maps/:mapId')) {
+      out.push({ path: withIds, names: [STUDY_NAME] });
     } else if (withIds.endsWith('/catalog')) {
       out.push({ path: withIds, names: [CATALOG_FILE] });
     } else if (/:[a-zA-Z]+/.test(withIds)) {

@@ -45,6 +45,9 @@ export interface FaultSurface {
   readonly areaKm2: number;
   /** Whether the trace was walked last vertex first to put the dip on its right. */
   readonly reversed: boolean;
+  /** sin and cos of the dip, worked out once: every corner of every floating rupture needs them. */
+  readonly sinDip: number;
+  readonly cosDip: number;
 }
 
 /**
@@ -97,7 +100,8 @@ export function faultSurface(fault: FaultSource, frame: LocalFrame): FaultSurfac
     startKm += lengthKm;
   }
   const widthKm = (lowerDepthKm - upperDepthKm) / Math.sin(dipRad);
-  return { sourceId: fault.id, segments, dipDeg, upperDepthKm, lowerDepthKm, lengthKm: startKm, widthKm, areaKm2: startKm * widthKm, reversed };
+  const sinDip = Math.sin(dipRad);
+  return { sourceId: fault.id, segments, dipDeg, upperDepthKm, lowerDepthKm, lengthKm: startKm, widthKm, areaKm2: startKm * widthKm, reversed, sinDip, cosDip: Math.cos(dipRad) };
 }
 
 function segmentAt(surface: FaultSurface, alongKm: number): TraceSegment {
@@ -107,13 +111,12 @@ function segmentAt(surface: FaultSurface, alongKm: number): TraceSegment {
 }
 
 function pointOnSegment(surface: FaultSurface, segment: TraceSegment, alongKm: number, downDipKm: number): PointKm {
-  const dipRad = toRadians(surface.dipDeg);
   const u = alongKm - segment.startKm;
-  const h = downDipKm * Math.cos(dipRad);
+  const h = downDipKm * surface.cosDip;
   return {
     x: segment.start.x + segment.strike.x * u + segment.downDip.x * h,
     y: segment.start.y + segment.strike.y * u + segment.downDip.y * h,
-    z: surface.upperDepthKm + downDipKm * Math.sin(dipRad),
+    z: surface.upperDepthKm + downDipKm * surface.sinDip,
   };
 }
 

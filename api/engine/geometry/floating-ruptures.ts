@@ -1,6 +1,5 @@
 import { InvalidInput } from '../errors.ts';
 import type { PointKm, RupturePlane } from '../ruptures/rupture.ts';
-import { toRadians } from '../units.ts';
 import { pointOnSurface, surfacePatch, type FaultSurface } from './fault-surface.ts';
 import type { RuptureDimensions } from './rupture-scaling.ts';
 
@@ -76,7 +75,7 @@ export function floatingRuptureAt(
   return {
     planes: surfacePatch(surface, [alongKm, alongKm + lengthKm], [downDipKm, downDipKm + widthKm]),
     hypocentre: pointOnSurface(surface, alongKm + lengthKm / 2, downDipKm + widthKm / 2),
-    ztorKm: surface.upperDepthKm + downDipKm * Math.sin(toRadians(surface.dipDeg)),
+    ztorKm: surface.upperDepthKm + downDipKm * surface.sinDip,
     lengthKm,
     widthKm,
     alongKm,

@@ -22,8 +22,13 @@ export interface TraceCoordinates {
   readonly lengthKm: number;
 }
 
-/** A site this close to a segment's line (1 µm) is on it: the weight's 1/t limit is taken. */
-const ON_LINE_KM = 1e-9;
+/**
+ * A site this close to a segment's line (1 µm) is on it: the weight's 1/t limit is taken. The
+ * same slack past either end of the segment counts as on it too: there the limit's weight
+ * 1/(u − l) − 1/u grows past any bound (1/u overflows to ∞ for |u| below about 1e-308 km, and
+ * T = ∞/∞), while the site is, to this slack, on the trace's vertex.
+ */
+export const ON_LINE_KM = 1e-9;
 
 /**
  * GC2 coordinates of `site` (local km) relative to the trace made of `segments`, each a
@@ -48,11 +53,11 @@ export function traceCoordinates(segments: readonly (readonly [PointXY, PointXY]
     let w: number;
     if (Math.abs(t) > ON_LINE_KM) {
       w = (Math.atan((l - u) / t) - Math.atan(-u / t)) / t;
-    } else if (u >= 0 && u <= l) {
+    } else if (u >= -ON_LINE_KM && u <= l + ON_LINE_KM) {
       onTrace ??= s + u;
       w = 0;
     } else {
-      // ∫ dx / (x - u)² over the segment, the t -> 0 limit off its ends.
+      // ∫ dx / (x - u)² over the segment, the t -> 0 limit off its ends (|u| and |u − l| > ON_LINE_KM: finite).
       w = 1 / (u - l) - 1 / u;
     }
     weightSum += w;

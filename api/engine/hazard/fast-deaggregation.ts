@@ -1,6 +1,6 @@
 import type { Deaggregation, DeaggregationBin } from '../results.ts';
-import { accumulate, accumulatedTotals, compensatedSum, createLevelAccumulator, type LevelAccumulator } from '../summation.ts';
-import { distanceBin, distanceBinRange, epsilonBin, epsilonBinRange, magnitudeBin, magnitudeBinRange } from './deaggregation-bins.ts';
+import { compensatedSum } from '../summation.ts';
+import { DISTANCE_EDGES_KM, EPSILON_EDGES, distanceBin, distanceBinRange, epsilonBin, epsilonBinRange, magnitudeBin, magnitudeBinRange } from './deaggregation-bins.ts';
 import type { BranchPredictions } from './fast-site-hazard.ts';
 import type { RuptureTable } from './rupture-table.ts';
 import { exceedanceFromTable, type ExceedanceTable } from './exceedance-table.ts';
@@ -21,111 +21,155 @@ export interface FastDeaggregationOptions {
 
 /** ε of a zero-σ prediction is held at ±10, as deaggregation.ts holds it. */
 const EPSILON_LIMIT = 10;
-// Slots of each accumulator: contribution, and contribution × M, × R, × ε (as in deaggregation.ts).
-const RATE = 0;
-const M = 1;
-const R = 2;
-const E = 3;
+// Slots of each bin's sums: contribution, and contribution × M, × R, × ε (as in deaggregation.ts).
+const SLOTS = 4;
+const EPSILON_BINS = EPSILON_EDGES.length + 1;
 
-interface Bin {
-  readonly m: number;
-  readonly r: number;
-  readonly e: number;
-  readonly acc: LevelAccumulator;
+/**
+ * distanceBin (deaggregation-bins.ts) by a lookup on 10 km steps below the last edge, which is
+ * exact while every edge is a whole number of steps (checked here, else the lookup is not used).
+ */
+const DISTANCE_STEP_KM = 10;
+const LAST_EDGE_KM = DISTANCE_EDGES_KM[DISTANCE_EDGES_KM.length - 1] as number;
+const DISTANCE_LOOKUP = DISTANCE_EDGES_KM.every((edge) => edge % DISTANCE_STEP_KM === 0)
+  ? Int32Array.from({ length: LAST_EDGE_KM / DISTANCE_STEP_KM }, (_, i) => distanceBin(i * DISTANCE_STEP_KM))
+  : new Int32Array(0);
+const distanceBinOf = (distanceKm: number): number => {
+  const step = Math.floor(distanceKm / DISTANCE_STEP_KM);
+  return step >= 0 && step < DISTANCE_LOOKUP.length ? (DISTANCE_LOOKUP[step] as number) : distanceBin(distanceKm);
+};
+
+/** One Neumaier (1974) step on slot i of a pair of running sum and compensation columns. */
+function accumulateAt(sum: Float64Array, compensation: Float64Array, i: number, value: number): void {
+  const s = sum[i] as number;
+  const t = s + value;
+  compensation[i] = (compensation[i] as number) + (Math.abs(s) >= Math.abs(value) ? s - t + value : value - t + s);
+  sum[i] = t;
 }
-
-/** A numeric key for an (M, R, ε) bin: ε bins are 0–5 and distance bins stay far below 10^6. */
-const binKey = (m: number, r: number, e: number): number => (m * 1_000_000 + r) * 8 + e;
 
 /**
  * deaggregate (deaggregation.ts) over the fast path's predictions: the same contributions
  * (weight × rate × truncated P, here from the table of exceedance-table.ts) in the same order
  * into the same bins and compensated sums, read from the rupture table and typed arrays
- * instead of Rupture objects and string-keyed bins. Null when nothing exceeds the level.
+ * instead of Rupture objects. A first pass finds each pair's contribution, ε and bins; a second
+ * adds them into dense columns, one entry per bin in the order the result lists them
+ * (magnitude, then distance, then ε). Null when nothing exceeds the level.
  */
 export function fastDeaggregate(options: FastDeaggregationOptions): Deaggregation | null {
-  const { table, exceedance } = options;
+  const { table, exceedance, branches } = options;
   const lnLevel = Math.log(options.level);
-  const bins = new Map<number, Bin>();
-  const bySource = new Map<number, LevelAccumulator>();
-  const overall = createLevelAccumulator(4);
+  let pairs = 0;
+  for (const b of branches) pairs += b.ruptureIndex.length;
+  const contribution = new Float64Array(pairs);
+  const epsilonOf = new Float64Array(pairs);
+  const magnitudeBinOf = new Int32Array(pairs);
+  const distanceBinOfPair = new Int32Array(pairs);
   let minEpsilon = Infinity;
   let maxEpsilon = -Infinity;
-  const add = (acc: LevelAccumulator, contribution: number, magnitude: number, distanceKm: number, epsilon: number): void => {
-    accumulate(acc, RATE, contribution);
-    accumulate(acc, M, contribution * magnitude);
-    accumulate(acc, R, contribution * distanceKm);
-    accumulate(acc, E, contribution * epsilon);
-  };
+  let minM = Infinity;
+  let maxM = -Infinity;
+  let maxR = 0;
 
-  for (const { weight, ruptureIndex, lnMedian, sigma, rrupKm } of options.branches) {
-    for (let k = 0; k < ruptureIndex.length; k++) {
+  let at = 0;
+  for (const { weight, ruptureIndex, lnMedian, sigma, rrupKm } of branches) {
+    for (let k = 0; k < ruptureIndex.length; k++, at++) {
       const i = ruptureIndex[k] as number;
-      const rawEpsilon = standardisedLevel(lnLevel, lnMedian[k] as number, sigma[k] as number);
-      const contribution = weight * (table.annualRate[i] as number) * exceedanceFromTable(exceedance, rawEpsilon);
-      if (!(contribution > 0)) continue;
+      const s = sigma[k] as number;
+      const rawEpsilon = standardisedLevel(lnLevel, lnMedian[k] as number, s);
+      const c = weight * (table.annualRate[i] as number) * exceedanceFromTable(exceedance, rawEpsilon);
+      if (!(c > 0)) continue;
       const epsilon = Math.max(-EPSILON_LIMIT, Math.min(EPSILON_LIMIT, rawEpsilon));
+      const m = magnitudeBin(table.magnitude[i] as number);
+      const r = distanceBinOf(rrupKm[k] as number);
+      contribution[at] = c;
+      epsilonOf[at] = epsilon;
+      magnitudeBinOf[at] = m;
+      distanceBinOfPair[at] = r;
+      if (epsilon < minEpsilon) minEpsilon = epsilon;
+      if (epsilon > maxEpsilon) maxEpsilon = epsilon;
+      if (m < minM) minM = m;
+      if (m > maxM) maxM = m;
+      if (r > maxR) maxR = r;
+    }
+  }
+  if (minM > maxM) return null;
+
+  const distanceBins = maxR + 1;
+  const binCount = (maxM - minM + 1) * distanceBins * EPSILON_BINS;
+  const binSum = new Float64Array(binCount * SLOTS);
+  const binCompensation = new Float64Array(binCount * SLOTS);
+  const overallSum = new Float64Array(SLOTS);
+  const overallCompensation = new Float64Array(SLOTS);
+  const sourceSum = new Float64Array(table.sourceIds.length);
+  const sourceCompensation = new Float64Array(table.sourceIds.length);
+  const sourceSeen = new Uint8Array(table.sourceIds.length);
+  at = 0;
+  for (const { ruptureIndex, rrupKm } of branches) {
+    for (let k = 0; k < ruptureIndex.length; k++, at++) {
+      const c = contribution[at] as number;
+      if (!(c > 0)) continue;
+      const i = ruptureIndex[k] as number;
+      const epsilon = epsilonOf[at] as number;
       const magnitude = table.magnitude[i] as number;
       const distanceKm = rrupKm[k] as number;
-      minEpsilon = Math.min(minEpsilon, epsilon);
-      maxEpsilon = Math.max(maxEpsilon, epsilon);
-      const m = magnitudeBin(magnitude);
-      const r = distanceBin(distanceKm);
-      const e = epsilonBin(epsilon);
-      const key = binKey(m, r, e);
-      let bin = bins.get(key);
-      if (!bin) {
-        bin = { m, r, e, acc: createLevelAccumulator(4) };
-        bins.set(key, bin);
-      }
-      add(bin.acc, contribution, magnitude, distanceKm, epsilon);
-      add(overall, contribution, magnitude, distanceKm, epsilon);
-      const sourceIndex = table.sourceIndex[i] as number;
-      let source = bySource.get(sourceIndex);
-      if (!source) {
-        source = createLevelAccumulator(1);
-        bySource.set(sourceIndex, source);
-      }
-      accumulate(source, 0, contribution);
+      const bin = (((magnitudeBinOf[at] as number) - minM) * distanceBins + (distanceBinOfPair[at] as number)) * EPSILON_BINS + epsilonBin(epsilon);
+      const slot = bin * SLOTS;
+      accumulateAt(binSum, binCompensation, slot, c);
+      accumulateAt(binSum, binCompensation, slot + 1, c * magnitude);
+      accumulateAt(binSum, binCompensation, slot + 2, c * distanceKm);
+      accumulateAt(binSum, binCompensation, slot + 3, c * epsilon);
+      accumulateAt(overallSum, overallCompensation, 0, c);
+      accumulateAt(overallSum, overallCompensation, 1, c * magnitude);
+      accumulateAt(overallSum, overallCompensation, 2, c * distanceKm);
+      accumulateAt(overallSum, overallCompensation, 3, c * epsilon);
+      const source = table.sourceIndex[i] as number;
+      sourceSeen[source] = 1;
+      accumulateAt(sourceSum, sourceCompensation, source, c);
     }
   }
 
-  const [total, sumM, sumR, sumE] = accumulatedTotals(overall) as [number, number, number, number];
+  const total = (overallSum[0] as number) + (overallCompensation[0] as number);
   if (!(total > 0)) return null;
+  const mean = (slot: number): number => ((overallSum[slot] as number) + (overallCompensation[slot] as number)) / total;
 
-  const binTotals = [...bins.values()].map((bin) => ({ bin, totals: accumulatedTotals(bin.acc) }));
-  const binSum = compensatedSum(binTotals.map((b) => b.totals[RATE] as number));
-  binTotals.sort((a, b) => a.bin.m - b.bin.m || a.bin.r - b.bin.r || a.bin.e - b.bin.e);
-  const resultBins: DeaggregationBin[] = binTotals.map(({ bin, totals }) => ({
-    magnitude: magnitudeBinRange(bin.m),
-    distanceKm: distanceBinRange(bin.r),
-    epsilon: epsilonBinRange(bin.e, minEpsilon, maxEpsilon),
-    share: (totals[RATE] as number) / binSum,
-  }));
-  let modal = binTotals[0] as (typeof binTotals)[number];
-  for (const b of binTotals) if ((b.totals[RATE] as number) > (modal.totals[RATE] as number)) modal = b;
-  const modalRate = modal.totals[RATE] as number;
-
-  const sources = [...bySource.entries()].map(([sourceIndex, acc]) => {
-    const sourceId = table.sourceIds[sourceIndex] as string;
-    return { sourceId, name: options.sourceNames[sourceIndex] ?? sourceId, rate: accumulatedTotals(acc)[0] as number };
+  const totalAt = (slot: number): number => (binSum[slot] as number) + (binCompensation[slot] as number);
+  const filled: number[] = [];
+  for (let bin = 0; bin < binCount; bin++) if ((binSum[bin * SLOTS] as number) > 0) filled.push(bin);
+  const shareSum = compensatedSum(filled.map((bin) => totalAt(bin * SLOTS)));
+  // The first of equal largest bins, in the listed order, so the mode is deterministic (as deaggregation.ts).
+  let modal = filled[0] as number;
+  for (const bin of filled) if (totalAt(bin * SLOTS) > totalAt(modal * SLOTS)) modal = bin;
+  const modalRate = totalAt(modal * SLOTS);
+  const resultBins: DeaggregationBin[] = filled.map((bin) => {
+    const e = bin % EPSILON_BINS;
+    const r = ((bin - e) / EPSILON_BINS) % distanceBins;
+    const m = minM + (bin - e - r * EPSILON_BINS) / (EPSILON_BINS * distanceBins);
+    return {
+      magnitude: magnitudeBinRange(m),
+      distanceKm: distanceBinRange(r),
+      epsilon: epsilonBinRange(e, minEpsilon, maxEpsilon),
+      share: totalAt(bin * SLOTS) / shareSum,
+    };
   });
-  const sourceSum = compensatedSum(sources.map((s) => s.rate));
-  const bySourceShares = sources
-    .map(({ sourceId, name, rate }) => ({ sourceId, name, share: rate / sourceSum }))
+
+  const sources: { sourceId: string; name: string; rate: number }[] = [];
+  sourceSeen.forEach((seen, sourceIndex) => {
+    if (!seen) return;
+    const sourceId = table.sourceIds[sourceIndex] as string;
+    sources.push({ sourceId, name: options.sourceNames[sourceIndex] ?? sourceId, rate: (sourceSum[sourceIndex] as number) + (sourceCompensation[sourceIndex] as number) });
+  });
+  const sourceTotal = compensatedSum(sources.map((s) => s.rate));
+  const bySource = sources
+    .map(({ sourceId, name, rate }) => ({ sourceId, name, share: rate / sourceTotal }))
     .sort((a, b) => b.share - a.share || (a.sourceId < b.sourceId ? -1 : a.sourceId > b.sourceId ? 1 : 0));
 
   return {
     measure: options.measure,
     level: options.level,
     returnPeriodYears: options.returnPeriodYears,
-    bySource: bySourceShares,
-    mean: { magnitude: sumM / total, distanceKm: sumR / total, epsilon: sumE / total },
-    mode: {
-      magnitude: (modal.totals[M] as number) / modalRate,
-      distanceKm: (modal.totals[R] as number) / modalRate,
-      epsilon: (modal.totals[E] as number) / modalRate,
-    },
+    bySource,
+    mean: { magnitude: mean(1), distanceKm: mean(2), epsilon: mean(3) },
+    mode: { magnitude: totalAt(modal * SLOTS + 1) / modalRate, distanceKm: totalAt(modal * SLOTS + 2) / modalRate, epsilon: totalAt(modal * SLOTS + 3) / modalRate },
     bins: resultBins,
   };
 }

@@ -9,7 +9,7 @@ import type { HazardCurve } from '../results.ts';
 import { accumulatePairs, createCurveAccumulator, curveRates, resetCurveAccumulator, type CurveAccumulator } from './curve-accumulator.ts';
 import { exceedanceTable, type ExceedanceTable } from './exceedance-table.ts';
 import { branchCombinationCurves, MAX_BRANCH_COMBINATIONS, meanHazard, type SettingBranchCurve } from './logic-tree.ts';
-import { pairDistanceContext, preparedMotion, type LazyMotion } from './prepared-motion.ts';
+import { pairDistanceContext, preparedMotions, type LazyMotions } from './prepared-motion.ts';
 import { gmmInput } from './rupture-predictions.ts';
 import { ruptureContexts, settingRuptures, type RuptureTable } from './rupture-table.ts';
 import type { HazardBranch, HazardMeasure, ValiditySummary } from './site-hazard.ts';
@@ -39,12 +39,12 @@ export interface FastHazardOptions {
   readonly maxBranchCombinations?: number;
 }
 
-/** One branch of one setting on the fast path: its model's predictors and curve sums, one per measure. */
+/** One branch of one setting on the fast path: its model's predictor of every measure, and curve sums, one per measure. */
 export interface BranchWork {
   readonly model: HazardBranch['model'];
   readonly weight: number;
+  readonly motions: LazyMotions;
   /** One per measure. */
-  readonly motions: readonly LazyMotion[];
   readonly curves: readonly CurveAccumulator[];
 }
 
@@ -57,7 +57,8 @@ export interface SettingWork {
   readonly branches: readonly BranchWork[];
   readonly distances: ReadonlySet<DistanceName>;
   readonly pairs: PairBuffer;
-  readonly predictions: PairPredictions;
+  /** One per measure. */
+  readonly predictions: readonly PairPredictions[];
 }
 
 export interface FastHazard {
@@ -76,13 +77,14 @@ export function createFastHazard(options: FastHazardOptions): FastHazard {
     if (!given || given.length === 0) continue;
     const ruptures = settingRuptures(table, setting);
     const contexts = ruptureContexts(table, ruptures);
+    const measures = options.measures.map((m) => m.measure);
     const branches = given.map(({ model, weight }) => ({
       model,
       weight,
-      motions: options.measures.map((m) => preparedMotion(model, contexts, m.measure)),
+      motions: preparedMotions(model, contexts, measures),
       curves: options.measures.map((m) => createCurveAccumulator(m.levels)),
     }));
-    const distances = new Set<DistanceName>(branches.flatMap((b) => b.motions.flatMap((m) => m.distances)));
+    const distances = new Set<DistanceName>(branches.flatMap((b) => b.motions.distances));
     if (options.keepFirstMeasure) distances.add('rrupKm');
     settings.push({
       setting,
@@ -92,7 +94,7 @@ export function createFastHazard(options: FastHazardOptions): FastHazard {
       branches,
       distances,
       pairs: createPairBuffer(ruptures.length),
-      predictions: createPairPredictions(ruptures.length),
+      predictions: options.measures.map(() => createPairPredictions(ruptures.length)),
     });
   }
   return { options, geometry: ruptureGeometry(table), exceedance: exceedanceTable(options.truncationSigma), settings };
@@ -151,28 +153,29 @@ export function fastSiteHazard(hazard: FastHazard, at: FastSite, afterBranch?: (
 
     for (const branch of work.branches) {
       const summary = validity.get(branch.model.name) ?? { outside: 0, evaluated: 0, firstNote: '' };
+      if (count > 0) branch.motions.predict(at.site, pairs, predictions);
       measures.forEach((m, i) => {
         const curve = branch.curves[i] as CurveAccumulator;
+        const prediction = predictions[i] as PairPredictions;
         resetCurveAccumulator(curve);
         if (count > 0) {
-          (branch.motions[i] as LazyMotion).predictor().predictPairs(at.site, pairs, predictions);
-          const bad = accumulatePairs(curve, exceedance, work.rates, pairs.rupture, predictions, count);
+          const bad = accumulatePairs(curve, exceedance, work.rates, pairs.rupture, prediction, count);
           if (bad >= 0) {
             const sourceId = options.table.sourceIds[options.table.sourceIndex[work.ruptures[pairs.rupture[bad] as number] as number] as number];
             throw new TremoraError(
-              `${branch.model.name} gave ln median ${predictions.lnMedian[bad]} and sigma ${predictions.sigma[bad]} for ${measureLabel(m.measure)} ` +
+              `${branch.model.name} gave ln median ${prediction.lnMedian[bad]} and sigma ${prediction.sigma[bad]} for ${measureLabel(m.measure)} ` +
                 `from a rupture of source "${sourceId}"; expected finite numbers with sigma >= 0`,
             );
           }
         }
         summary.evaluated += count;
-        const firstOutside = predictions.applicable.subarray(0, count).indexOf(0);
+        const firstOutside = prediction.applicable.subarray(0, count).indexOf(0);
         if (firstOutside >= 0) {
-          for (let k = firstOutside; k < count; k++) if (predictions.applicable[k] === 0) summary.outside++;
+          for (let k = firstOutside; k < count; k++) if (prediction.applicable[k] === 0) summary.outside++;
           if (!summary.firstNote) summary.firstNote = noteOf(hazard, work, branch, i, at, firstOutside);
         }
         if (i === 0 && ruptureIndex && rrupKm) {
-          firstMeasure.push({ weight: branch.weight, ruptureIndex, lnMedian: predictions.lnMedian.slice(0, count), sigma: predictions.sigma.slice(0, count), rrupKm });
+          firstMeasure.push({ weight: branch.weight, ruptureIndex, lnMedian: prediction.lnMedian.slice(0, count), sigma: prediction.sigma.slice(0, count), rrupKm });
         }
         settingCurves[i]!.push({ setting: work.setting, model: branch.model.name, weight: branch.weight, annualRate: curveRates(curve) });
       });

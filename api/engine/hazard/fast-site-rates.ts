@@ -21,19 +21,19 @@ export interface SiteRates {
   readonly validity: readonly ValiditySummary[];
 }
 
-/** Per-branch prediction buffers for one FastHazard, reused from site to site. */
+/** Per-branch prediction buffers for one FastHazard (one per measure), reused from site to site. */
 export interface FastRates {
   readonly hazard: FastHazard;
-  readonly predictions: Map<BranchWork, PairPredictions>;
+  readonly predictions: Map<BranchWork, readonly PairPredictions[]>;
   readonly coefficients: Map<BranchWork, LevelCoefficients>;
 }
 
 export function createFastRates(hazard: FastHazard): FastRates {
-  const predictions = new Map<BranchWork, PairPredictions>();
+  const predictions = new Map<BranchWork, readonly PairPredictions[]>();
   const coefficients = new Map<BranchWork, LevelCoefficients>();
   for (const work of hazard.settings) {
     for (const branch of work.branches) {
-      predictions.set(branch, createPairPredictions(work.ruptures.length));
+      predictions.set(branch, hazard.options.measures.map(() => createPairPredictions(work.ruptures.length)));
       coefficients.set(branch, createLevelCoefficients(work.ruptures.length));
     }
   }
@@ -53,10 +53,11 @@ export function fastSiteRates(rates: FastRates, at: FastSite, measureIndex = 0):
     siteDistances({ geometry, ruptures: work.ruptures, site: at.point, maxDistanceKm: options.maxDistanceKm, distances: work.distances }, pairs);
     const count = pairs.count;
     for (const branch of work.branches) {
-      const predictions = rates.predictions.get(branch)!;
+      const all = rates.predictions.get(branch)!;
+      const predictions = all[measureIndex]!;
       const summary = validity.get(branch.model.name) ?? { outside: 0, evaluated: 0, firstNote: '' };
       if (count > 0) {
-        branch.motions[measureIndex]!.predictor().predictPairs(at.site, pairs, predictions);
+        branch.motions.predict(at.site, pairs, all);
         const { lnMedian, sigma: sigmas, applicable } = predictions;
         let firstOutside = -1;
         for (let k = 0; k < count; k++) {

@@ -1,6 +1,6 @@
 import type { PointXY } from '../geometry/projection.ts';
 import type { Measure } from '../motion/measure.ts';
-import type { DistanceContext, DistanceName, GroundMotionModel, PreparedMotion, RuptureContext } from '../motion/types.ts';
+import type { DistanceContext, DistanceName, GroundMotionModel, PairDistances, PairPredictions, PreparedMotion, RuptureContext, SiteContext } from '../motion/types.ts';
 import { gmmInput } from './rupture-predictions.ts';
 import type { RuptureGeometry } from './rupture-geometry.ts';
 import { createPairBuffer, siteDistances } from './site-distances.ts';
@@ -34,27 +34,50 @@ function pairByPair(model: GroundMotionModel, ruptures: readonly RuptureContext[
 }
 
 /**
- * A model's predictor for one measure, prepared up front. Preparing can fail (a measure the
- * model lacks): the error is kept and thrown when a pair first needs the predictor, as the
- * reference path throws only when it first evaluates the model.
+ * A model's predictor for a screening's measures, prepared up front: through its
+ * prepareMeasures hook (the measures' shared work done once per pair) where it has one, else
+ * measure by measure through prepare, else pair by pair through predict(). Preparing can fail
+ * (a measure the model lacks): the error is kept and thrown when that measure is first
+ * evaluated for some pair, as the reference path throws only when it first evaluates the model.
  */
-export interface LazyMotion {
+export interface LazyMotions {
   readonly distances: readonly DistanceName[];
-  predictor(): PreparedMotion;
+  /** Predictions of every measure for the first `pairs.count` pairs: out[i] for measure i. */
+  predict(site: SiteContext, pairs: PairDistances, out: readonly PairPredictions[]): void;
 }
 
-export function preparedMotion(model: GroundMotionModel, ruptures: readonly RuptureContext[], measure: Measure): LazyMotion {
-  try {
-    const prepared = model.prepare ? model.prepare(ruptures, measure) : pairByPair(model, ruptures, measure);
-    return { distances: prepared.distances, predictor: () => prepared };
-  } catch (error) {
-    return {
-      distances: ALL_DISTANCES,
-      predictor: () => {
-        throw error;
-      },
-    };
+function measureByMeasure(model: GroundMotionModel, ruptures: readonly RuptureContext[], measures: readonly Measure[]): LazyMotions {
+  const prepared = measures.map((measure): { distances: readonly DistanceName[]; predictor: () => PreparedMotion } => {
+    try {
+      const motion = model.prepare ? model.prepare(ruptures, measure) : pairByPair(model, ruptures, measure);
+      return { distances: motion.distances, predictor: () => motion };
+    } catch (error) {
+      return {
+        distances: ALL_DISTANCES,
+        predictor: () => {
+          throw error;
+        },
+      };
+    }
+  });
+  return {
+    distances: [...new Set(prepared.flatMap((p) => p.distances))],
+    predict(site, pairs, out) {
+      prepared.forEach((p, i) => p.predictor().predictPairs(site, pairs, out[i] as PairPredictions));
+    },
+  };
+}
+
+export function preparedMotions(model: GroundMotionModel, ruptures: readonly RuptureContext[], measures: readonly Measure[]): LazyMotions {
+  if (model.prepareMeasures) {
+    try {
+      const motions = model.prepareMeasures(ruptures, measures);
+      return { distances: motions.distances, predict: (site, pairs, out) => motions.predictPairs(site, pairs, out) };
+    } catch {
+      // One of the measures cannot be prepared: measure by measure keeps each one's error for when it is reached.
+    }
   }
+  return measureByMeasure(model, ruptures, measures);
 }
 
 /** Every distance of one rupture (table index) to a site, by the fast path's geometry (km). */

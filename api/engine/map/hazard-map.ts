@@ -5,14 +5,14 @@ import { createFastRates, fastSiteRates, type FastRates } from '../hazard/fast-s
 import { levelsFor } from '../hazard/hazard-levels.ts';
 import { poissonProbability } from '../hazard/poisson.ts';
 import { levelAtReturnPeriodBySearch } from '../hazard/return-period-search.ts';
-import { ruptureTable, type RuptureTable } from '../hazard/rupture-table.ts';
+import type { RuptureTable } from '../hazard/rupture-table.ts';
+import { studyRuptureTable } from '../hazard/study-rupture-table.ts';
 import type { HazardMeasure, ValiditySummary } from '../hazard/site-hazard.ts';
 import type { Study } from '../model.ts';
 import type { ModelCatalog } from '../motion/catalog.ts';
 import { measureUnit, parseMeasure } from '../motion/measure.ts';
 import { modelCatalog } from '../motion/registry.ts';
 import type { ReturnPeriodStatus } from '../results.ts';
-import { discretiseStudy } from '../ruptures/discretise.ts';
 import { resolveBranches } from '../screening-plan.ts';
 import { gridPoint, mapGrid, type LonLatBounds, type MapGrid } from './map-grid.ts';
 
@@ -100,9 +100,7 @@ export function planHazardMap(study: Study, options: HazardMapOptions): HazardMa
     frame = frameForStudy(study);
     table = options.table;
   } else {
-    const discretised = discretiseStudy(study);
-    frame = discretised.frame;
-    table = ruptureTable(discretised.ruptures);
+    ({ frame, table } = studyRuptureTable(study));
   }
   const grid = mapGrid(study, frame, {
     spacingKm: options.spacingKm,

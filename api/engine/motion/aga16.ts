@@ -47,10 +47,10 @@ import {
   AGA16_SA,
   type Aga16Row,
 } from './aga16-coefficients.ts';
-import { prepareAga16 } from './aga16-prepared.ts';
+import { prepareAga16, prepareAga16Measures } from './aga16-prepared.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, RuptureContext, ValidityRange } from './types.ts';
+import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, PreparedMotions, RuptureContext, ValidityRange } from './types.ts';
 import { validityNotes } from './validity.ts';
 
 const NAME = 'AGA16';
@@ -207,4 +207,5 @@ export const AGA16: GroundMotionModel = Object.freeze({
     );
   },
   prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion => prepareAga16(ruptures, measure),
+  prepareMeasures: (ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions => prepareAga16Measures(ruptures, measures),
 });

@@ -37,10 +37,10 @@
  */
 import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
 import { BSSA14_CONSTANTS as K, BSSA14_PGA, BSSA14_PGV, BSSA14_SA, type Bssa14Row } from './bssa14-coefficients.ts';
-import { prepareBssa14 } from './bssa14-prepared.ts';
+import { prepareBssa14, prepareBssa14Measures } from './bssa14-prepared.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, RuptureContext, ValidityRange } from './types.ts';
+import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, PreparedMotions, RuptureContext, ValidityRange } from './types.ts';
 import { validityNotes } from './validity.ts';
 
 const NAME = 'BSSA14';
@@ -202,4 +202,5 @@ export const bssa14: GroundMotionModel = Object.freeze({
   validity: BSSA14_VALIDITY,
   predict: (input: GmmInput, measure: Measure): GmmPrediction => predictBssa14(input, measure),
   prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion => prepareBssa14(ruptures, measure),
+  prepareMeasures: (ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions => prepareBssa14Measures(ruptures, measures),
 });

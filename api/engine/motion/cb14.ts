@@ -49,10 +49,10 @@
 import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
 import { toRadians } from '../units.ts';
 import { CB14_CONSTANTS as K, CB14_PGA, CB14_PGV, CB14_SA, type Cb14Row } from './cb14-coefficients.ts';
-import { prepareCb14 } from './cb14-prepared.ts';
+import { prepareCb14, prepareCb14Measures } from './cb14-prepared.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, RuptureContext, ValidityRange } from './types.ts';
+import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, PreparedMotions, RuptureContext, ValidityRange } from './types.ts';
 import { validityNotes } from './validity.ts';
 
 const NAME = 'CB14';
@@ -308,4 +308,5 @@ export const cb14: GroundMotionModel = Object.freeze({
   validity: CB14_VALIDITY,
   predict: (input: GmmInput, measure: Measure): GmmPrediction => predictCb14(input, measure),
   prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion => prepareCb14(ruptures, measure),
+  prepareMeasures: (ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions => prepareCb14Measures(ruptures, measures),
 });

@@ -1,7 +1,7 @@
 import { UnsupportedMeasure } from '../errors.ts';
 import { STANDARD_GRAVITY_MS2 } from '../units.ts';
 import type { Measure } from './measure.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, RuptureContext } from './types.ts';
+import type { GmmInput, GmmPrediction, GroundMotionModel, PairPredictions, PreparedMotion, PreparedMotions, RuptureContext } from './types.ts';
 
 /**
  * PGV for a model that predicts none, from its own SA(0.5 s):
@@ -54,6 +54,25 @@ export function withPgvFromSa(model: GroundMotionModel): GroundMotionModel {
         };
       }
     : undefined;
+  const innerMeasures = model.prepareMeasures?.bind(model);
+  // The same for several measures at once: PGV asked of the model as SA(0.5 s), the constant added to its output.
+  const prepareMeasures = innerMeasures
+    ? (ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions => {
+        const derived = measures.map((m) => m.kind === 'PGV');
+        const motions = innerMeasures(ruptures, measures.map((m) => (m.kind === 'PGV' ? saMeasure : m)));
+        return {
+          distances: motions.distances,
+          predictPairs(site, pairs, out) {
+            motions.predictPairs(site, pairs, out);
+            derived.forEach((isPgv, i) => {
+              if (!isPgv) return;
+              const lnMedian = (out[i] as PairPredictions).lnMedian;
+              for (let k = 0; k < pairs.count; k++) lnMedian[k] = (lnMedian[k] as number) + LN_G_TO_PGV_CMS;
+            });
+          },
+        };
+      }
+    : undefined;
   return {
     name: model.name,
     citation: model.citation,
@@ -69,5 +88,6 @@ export function withPgvFromSa(model: GroundMotionModel): GroundMotionModel {
       return { ...sa, lnMedian: sa.lnMedian + LN_G_TO_PGV_CMS };
     },
     ...(prepare ? { prepare } : {}),
+    ...(prepareMeasures ? { prepareMeasures } : {}),
   };
 }

@@ -1,5 +1,5 @@
 import { bracketPeriod, lerp } from './interpolate-period.ts';
-import type { DistanceName, PairPredictions, PreparedMotion } from './types.ts';
+import type { PairPredictions, PreparedMotion, PreparedMotions } from './types.ts';
 
 /** Columns for `capacity` pair predictions. */
 export function createPairPredictions(capacity: number): PairPredictions {
@@ -7,37 +7,65 @@ export function createPairPredictions(capacity: number): PairPredictions {
 }
 
 /**
- * The prepared counterpart of predictAtPeriod (interpolate-period.ts), with the same rule: on a
- * table row, that row's predictor; between rows, both rows' predictions with ln median and σ
- * interpolated linearly in ln(period), applicable where both rows are. A period outside the
- * table throws UnsupportedPeriod here, when the model is prepared.
+ * The table rows one measure's predictions come from, by the rule of predictAtPeriod
+ * (interpolate-period.ts): on a table row, that row; between rows, both, ln median and σ
+ * interpolated linearly in ln(period) with the upper row's weight `fraction`, applicable where
+ * both rows are. A period outside the table throws UnsupportedPeriod here, when the model is
+ * prepared.
  */
-export function preparedAtPeriod(
-  modelName: string,
-  periodsS: readonly number[],
-  periodS: number,
-  prepareRow: (rowIndex: number) => PreparedMotion,
-): PreparedMotion {
+export interface RowPlan<Row> {
+  readonly lower: Row;
+  readonly upper: Row | undefined;
+  readonly fraction: number;
+}
+
+export const singleRow = <Row>(row: Row): RowPlan<Row> => ({ lower: row, upper: undefined, fraction: 0 });
+
+/** The RowPlan of SA at `periodS` from a model's SA rows (their periods `periodsS`, increasing). */
+export function periodRows<Row>(modelName: string, periodsS: readonly number[], rows: readonly Row[], periodS: number): RowPlan<Row> {
   const { lower, upper, fraction } = bracketPeriod(modelName, periodsS, periodS);
-  const lo = prepareRow(lower);
-  if (fraction === 0) return lo;
-  const hi = prepareRow(upper);
-  // The upper row's predictions of the last block, reused from call to call (it grows when a block is larger).
-  let upperRow = createPairPredictions(0);
+  return fraction === 0 ? singleRow(rows[lower] as Row) : { lower: rows[lower] as Row, upper: rows[upper] as Row, fraction };
+}
+
+/** The upper row's predictions of interpolated measures, reused from call to call (it grows when a call has more pairs). */
+export interface RowScratch {
+  buffer: PairPredictions;
+}
+
+export const createRowScratch = (): RowScratch => ({ buffer: createPairPredictions(0) });
+
+/**
+ * Fills `out` for the first `count` pairs from a RowPlan: `evaluate` writes one row's
+ * predictions, and for a period between rows both are evaluated and interpolated as
+ * predictAtPeriod does.
+ */
+export function predictRows<Row>(plan: RowPlan<Row>, count: number, out: PairPredictions, scratch: RowScratch, evaluate: (row: Row, into: PairPredictions) => void): void {
+  evaluate(plan.lower, out);
+  if (plan.upper === undefined) return;
+  if (scratch.buffer.lnMedian.length < count) scratch.buffer = createPairPredictions(count);
+  const upper = scratch.buffer;
+  evaluate(plan.upper, upper);
+  const { fraction } = plan;
+  const { lnMedian, sigma, applicable } = out;
+  for (let k = 0; k < count; k++) {
+    lnMedian[k] = lerp(lnMedian[k] as number, upper.lnMedian[k] as number, fraction);
+    sigma[k] = lerp(sigma[k] as number, upper.sigma[k] as number, fraction);
+    applicable[k] = (applicable[k] as number) & (upper.applicable[k] as number);
+  }
+}
+
+/** One measure's predictor (GroundMotionModel.prepare) from a predictor of that measure alone (prepareMeasures). */
+export function singleMeasure(motions: PreparedMotions): PreparedMotion {
   return {
-    distances: [...new Set<DistanceName>([...lo.distances, ...hi.distances])],
+    distances: motions.distances,
     predictPairs(site, pairs, out) {
-      lo.predictPairs(site, pairs, out);
-      if (upperRow.lnMedian.length < pairs.count) upperRow = createPairPredictions(pairs.count);
-      hi.predictPairs(site, pairs, upperRow);
-      for (let k = 0; k < pairs.count; k++) {
-        out.lnMedian[k] = lerp(out.lnMedian[k] as number, upperRow.lnMedian[k] as number, fraction);
-        out.sigma[k] = lerp(out.sigma[k] as number, upperRow.sigma[k] as number, fraction);
-        out.applicable[k] = (out.applicable[k] as number) & (upperRow.applicable[k] as number);
-      }
+      motions.predictPairs(site, pairs, [out]);
     },
   };
 }
+
+/** A Float64Array of at least `capacity` entries: `column` itself when long enough (scratch that grows). */
+export const atLeast = (column: Float64Array, capacity: number): Float64Array => (column.length >= capacity ? column : new Float64Array(capacity));
 
 /** True when `value` is inside [min, max], by the test validityNotes (validity.ts) uses (indexed, not destructured: it runs per pair). */
 export const insideRange = (value: number, range: readonly [number, number]): boolean => !(value < range[0] || value > range[1]);

@@ -96,6 +96,15 @@ export interface GroundMotionModel {
    * path would use the other model's numbers.
    */
   prepare?(ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion;
+  /**
+   * Optional: `prepare` for several measures at once, whose predictor fills one output per
+   * measure and does the work the measures share once per pair (the rock motion that drives a
+   * nonlinear site term, distance terms that do not depend on the period). Its numbers are
+   * each measure's own prepare()'s. Models without it are prepared measure by measure. As
+   * with `prepare`, a model made by spreading another and replacing predict must replace or
+   * drop it.
+   */
+  prepareMeasures?(ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions;
 }
 
 /** A distance of DistanceContext, by its field name. */
@@ -130,4 +139,12 @@ export interface PreparedMotion {
   readonly distances: readonly DistanceName[];
   /** Predictions for the first `pairs.count` pairs at `site` (the notes come from predict()). */
   predictPairs(site: SiteContext, pairs: PairDistances, out: PairPredictions): void;
+}
+
+/** A model's predictor for several measures over a fixed list of ruptures (GroundMotionModel.prepareMeasures). */
+export interface PreparedMotions {
+  /** The distance columns predictPairs reads. */
+  readonly distances: readonly DistanceName[];
+  /** Predictions for the first `pairs.count` pairs at `site`: out[i] for measure i of those prepared. */
+  predictPairs(site: SiteContext, pairs: PairDistances, out: readonly PairPredictions[]): void;
 }

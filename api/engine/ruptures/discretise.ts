@@ -23,25 +23,45 @@ function inSource<T>(sourceIndex: number, work: () => T): T {
   }
 }
 
-const toRupture = ({ share, ...rest }: PlacedRupture, binRate: number): Rupture => ({ ...rest, annualRate: binRate * share });
+/** A placed rupture with its rate (per year), field by field: rest and spread here cost more than the placing. */
+const toRupture = (placed: PlacedRupture, binRate: number): Rupture => ({
+  sourceIndex: placed.sourceIndex,
+  sourceId: placed.sourceId,
+  annualRate: binRate * placed.share,
+  context: placed.context,
+  surface: placed.surface,
+});
 
 /**
- * All ruptures of one source with annual rates (per year): for each magnitude bin in
- * increasing order, every position of that magnitude, each with its share of the bin's rate.
- * Fault areas for moment balancing are the whole surface's (length x down-dip width).
+ * Visits every rupture of one source, in discretisation order: for each magnitude bin in
+ * increasing order, every position of that magnitude, with the bin's annual rate (per year;
+ * the rupture's own is that times its share). Fault areas for moment balancing are the whole
+ * surface's (length x down-dip width). The one walk over a source that both the Rupture objects
+ * (discretiseSource) and the fast path's table (hazard/study-rupture-table.ts) are built from.
  */
-export function discretiseSource(source: Source, sourceIndex: number, frame: LocalFrame, settings: Settings): Rupture[] {
-  return inSource(sourceIndex, () => {
+export function visitSourceRuptures(
+  source: Source,
+  sourceIndex: number,
+  frame: LocalFrame,
+  settings: Settings,
+  visit: (placed: PlacedRupture, binRate: number) => void,
+): void {
+  inSource(sourceIndex, () => {
     const prepared: PreparedSource = prepareSource(source, sourceIndex, frame, settings);
     const areaKm2 = prepared.kind === 'fault' ? prepared.surface.areaKm2 : undefined;
     const bins = magnitudeBins(source.recurrence, settings, areaKm2);
-    const ruptures: Rupture[] = [];
-    bins.magnitudes.forEach((magnitude, i) => {
+    for (let i = 0; i < bins.magnitudes.length; i++) {
       const binRate = bins.annualRates[i] as number;
-      for (const placed of placeRuptures(prepared, magnitude)) ruptures.push(toRupture(placed, binRate));
-    });
-    return ruptures;
+      for (const placed of placeRuptures(prepared, bins.magnitudes[i] as number)) visit(placed, binRate);
+    }
   });
+}
+
+/** All ruptures of one source with annual rates (per year), in the order of visitSourceRuptures. */
+export function discretiseSource(source: Source, sourceIndex: number, frame: LocalFrame, settings: Settings): Rupture[] {
+  const ruptures: Rupture[] = [];
+  visitSourceRuptures(source, sourceIndex, frame, settings, (placed, binRate) => ruptures.push(toRupture(placed, binRate)));
+  return ruptures;
 }
 
 export interface DiscretisedStudy {

@@ -5,7 +5,8 @@ import { fitDimensions, scaledDimensions, scalingRelationFor } from '../geometry
 import { zoneCells, type ZoneCell } from '../geometry/zone-cells.ts';
 import type { FaultSource, PointSource, Settings, Source, ZoneSource } from '../model.ts';
 import { pointRuptureContext } from './point-rupture.ts';
-import type { Rupture } from './rupture.ts';
+import type { RuptureContext } from '../motion/types.ts';
+import type { Rupture, RuptureSurface } from './rupture.ts';
 
 /** A source's geometry worked out once, ready to place ruptures of any magnitude on. */
 export type PreparedSource =
@@ -31,44 +32,49 @@ export function prepareSource(source: Source, sourceIndex: number, frame: LocalF
  * row first, west to east; shares by area), or the one point.
  */
 export function placeRuptures(prepared: PreparedSource, magnitude: number): PlacedRupture[] {
-  const { source, sourceIndex } = prepared;
-  const common = { sourceIndex, sourceId: source.id };
+  const { sourceIndex } = prepared;
+  const sourceId = prepared.source.id;
+  // Built field by field: object rest and spread here cost more than the geometry (one call per rupture).
   if (prepared.kind === 'fault') {
-    const { surface } = prepared;
+    const { surface, source } = prepared;
     const scaled = scaledDimensions(scalingRelationFor(source.setting, source.mechanism), magnitude);
     const positions = floatingRuptures(surface, fitDimensions(scaled, surface.lengthKm, surface.widthKm), { spacingKm: prepared.spacingKm });
-    return positions.map((p) => ({ ...faultRupture(prepared, magnitude, p), share: 1 / positions.length }));
+    const share = 1 / positions.length;
+    const placed: PlacedRupture[] = [];
+    for (const p of positions) placed.push({ sourceIndex, sourceId, share, context: faultContext(prepared, magnitude, p), surface: faultSurfaceOf(p) });
+    return placed;
   }
   const context = pointRuptureContext(prepared.source, magnitude);
   const depthKm = prepared.source.depthKm;
   if (prepared.kind === 'zone') {
-    return prepared.cells.map((cell) => ({
-      ...common,
-      share: cell.share,
-      context,
-      surface: { kind: 'point', hypocentre: { x: cell.centre.x, y: cell.centre.y, z: depthKm } },
-    }));
+    const placed: PlacedRupture[] = [];
+    for (const cell of prepared.cells) {
+      placed.push({ sourceIndex, sourceId, share: cell.share, context, surface: { kind: 'point', hypocentre: { x: cell.centre.x, y: cell.centre.y, z: depthKm } } });
+    }
+    return placed;
   }
   const { x, y } = prepared.location;
-  return [{ ...common, share: 1, context, surface: { kind: 'point', hypocentre: { x, y, z: depthKm } } }];
+  return [{ sourceIndex, sourceId, share: 1, context, surface: { kind: 'point', hypocentre: { x, y, z: depthKm } } }];
 }
+
+/** The rupture context of a prepared fault's rupture at one floating position. */
+function faultContext(prepared: PreparedSource & { kind: 'fault' }, magnitude: number, p: FloatingRupture): RuptureContext {
+  const { source, surface } = prepared;
+  return {
+    magnitude,
+    rakeDeg: source.rakeDeg,
+    mechanism: source.mechanism,
+    setting: source.setting,
+    dipDeg: surface.dipDeg,
+    ztorKm: p.ztorKm,
+    widthKm: p.widthKm,
+    hypoDepthKm: p.hypocentre.z,
+  };
+}
+
+const faultSurfaceOf = (p: FloatingRupture): RuptureSurface => ({ kind: 'planes', planes: p.planes, hypocentre: p.hypocentre });
 
 /** A rupture (without rate) of a prepared fault at one floating position. */
 export function faultRupture(prepared: PreparedSource & { kind: 'fault' }, magnitude: number, p: FloatingRupture): Omit<Rupture, 'annualRate'> {
-  const { source, sourceIndex, surface } = prepared;
-  return {
-    sourceIndex,
-    sourceId: source.id,
-    context: {
-      magnitude,
-      rakeDeg: source.rakeDeg,
-      mechanism: source.mechanism,
-      setting: source.setting,
-      dipDeg: surface.dipDeg,
-      ztorKm: p.ztorKm,
-      widthKm: p.widthKm,
-      hypoDepthKm: p.hypocentre.z,
-    },
-    surface: { kind: 'planes', planes: p.planes, hypocentre: p.hypocentre },
-  };
+  return { sourceIndex: prepared.sourceIndex, sourceId: prepared.source.id, context: faultContext(prepared, magnitude, p), surface: faultSurfaceOf(p) };
 }

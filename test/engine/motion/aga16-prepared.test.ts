@@ -3,7 +3,7 @@ import { UnsupportedMeasure } from '../../../api/engine/errors.ts';
 import { AGA16 } from '../../../api/engine/motion/aga16.ts';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
 import { withPgvFromSa } from '../../../api/engine/motion/pgv-from-sa.ts';
-import { checkPreparedModel } from './prepared-checks.ts';
+import { checkPreparedMeasures, checkPreparedModel } from './prepared-checks.ts';
 
 // The hook's numbers against predict() (aga16.ts); predict() itself is checked against the paper in aga16.test.ts.
 const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
@@ -12,6 +12,14 @@ const interfaceRupture = { magnitude: 8, rakeDeg: 90, mechanism: 'reverse' as co
 describe('AGA16 precomputation hook', () => {
   it('gives predict()\'s ln median, σ and applicability, within 1e-12: interface, intraslab and crustal ruptures, PGA and SA on and between rows', () => {
     checkPreparedModel(AGA16, [{ kind: 'PGA' }, sa(0.2), sa(0.02), sa(1), sa(0.12), sa(7)], ['interface', 'intraslab', 'crustal']);
+  });
+
+  it('prepared for several measures at once gives each measure\'s own numbers exactly (the shared rock motion and distance terms change none)', () => {
+    checkPreparedMeasures(AGA16, [{ kind: 'PGA' }, sa(0.2), sa(1), sa(0.12), sa(7)], ['interface', 'intraslab', 'crustal']);
+  });
+
+  it('PGV from SA(0.5 s) prepared beside other measures gives the wrapper\'s own PGV (pgv-from-sa.ts)', () => {
+    checkPreparedMeasures(withPgvFromSa(AGA16), [{ kind: 'PGA' }, { kind: 'PGV' }, sa(1)], ['interface', 'intraslab']);
   });
 
   it('PGV from SA(0.5 s) through the wrapper\'s hook equals the wrapper\'s predict() (Bommer & Alarcón 2006 scaling, pgv-from-sa.ts)', () => {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import { bssa14 } from '../../../api/engine/motion/bssa14.ts';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
-import { checkPreparedModel } from './prepared-checks.ts';
+import { checkPreparedMeasures, checkPreparedModel } from './prepared-checks.ts';
 
 // The hook's numbers against predict() (bssa14.ts); predict() itself is checked against the paper in bssa14.test.ts.
 const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
@@ -10,6 +10,10 @@ const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 describe('BSSA14 precomputation hook', () => {
   it('gives predict()\'s ln median, σ and applicability, within 1e-12: PGA, PGV, SA on rows and between rows', () => {
     checkPreparedModel(bssa14, [{ kind: 'PGA' }, { kind: 'PGV' }, sa(0.2), sa(1), sa(0.12), sa(2.5)], ['crustal', 'crustal', 'interface']);
+  });
+
+  it('prepared for several measures at once gives each measure\'s own numbers exactly (the shared rock motion and distance terms change none)', () => {
+    checkPreparedMeasures(bssa14, [{ kind: 'PGA' }, sa(0.2), sa(1), { kind: 'PGV' }, sa(0.12), sa(2.5)], ['crustal', 'crustal', 'interface']);
   });
 
   it('asks only for Rjb, and refuses a period outside the table as predict does', () => {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import { cb14 } from '../../../api/engine/motion/cb14.ts';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
-import { checkPreparedModel } from './prepared-checks.ts';
+import { checkPreparedMeasures, checkPreparedModel } from './prepared-checks.ts';
 
 // The hook's numbers against predict() (cb14.ts); predict() itself is checked against the paper in cb14.test.ts.
 const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
@@ -10,6 +10,10 @@ const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 describe('CB14 precomputation hook', () => {
   it('gives predict()\'s ln median, σ and applicability, within 1e-12: PGA, PGV, SA with and without the PGA floor, between rows', () => {
     checkPreparedModel(cb14, [{ kind: 'PGA' }, { kind: 'PGV' }, sa(0.1), sa(0.12), sa(0.2), sa(1), sa(2.5)], ['crustal', 'crustal', 'intraslab']);
+  });
+
+  it('prepared for several measures at once gives each measure\'s own numbers exactly (the shared rock motion and distance terms change none)', () => {
+    checkPreparedMeasures(cb14, [{ kind: 'PGA' }, sa(0.2), sa(1), { kind: 'PGV' }, sa(0.1), sa(0.12), sa(2.5)], ['crustal', 'crustal', 'intraslab']);
   });
 
   it('asks for Rrup, Rjb and Rx; refuses a bad dip and a period outside the table as predict does', () => {

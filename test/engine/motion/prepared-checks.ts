@@ -108,3 +108,28 @@ export function checkPreparedModel(model: GroundMotionModel, measures: readonly 
     );
   }
 }
+
+/**
+ * Checks that a model's prepareMeasures hook, preparing `measures` together, gives for each
+ * measure exactly what its prepare hook gives for that measure alone (the shared per-pair work
+ * must not change a number; same fixed seed as checkPreparedModel).
+ */
+export function checkPreparedMeasures(model: GroundMotionModel, measures: readonly Measure[], settings: readonly TectonicSetting[], numRuns = 60): void {
+  fc.assert(
+    fc.property(pairCasesArb(settings), siteArb, (cases, site) => {
+      const ruptures = cases.map((c) => c.rupture);
+      const pairs = pairColumns(cases);
+      const together = measures.map(() => createPairPredictions(cases.length));
+      model.prepareMeasures!(ruptures, measures).predictPairs(site, pairs, together);
+      measures.forEach((measure, i) => {
+        const alone = createPairPredictions(cases.length);
+        model.prepare!(ruptures, measure).predictPairs(site, pairs, alone);
+        const where = `${model.name} ${measureLabel(measure)} prepared with ${measures.map(measureLabel).join(', ')}`;
+        expect(Array.from(together[i]!.lnMedian), `${where}: ln median`).toEqual(Array.from(alone.lnMedian));
+        expect(Array.from(together[i]!.sigma), `${where}: sigma`).toEqual(Array.from(alone.sigma));
+        expect(Array.from(together[i]!.applicable), `${where}: applicable`).toEqual(Array.from(alone.applicable));
+      });
+    }),
+    { numRuns, seed: 20_260_702 },
+  );
+}
