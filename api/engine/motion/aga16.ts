@@ -180,7 +180,7 @@ function predictRow(row: Aga16Row, scenario: Aga16Scenario, vs30: number, pga100
  * Abrahamson, Gregor & Addo (2016) for subduction interface (Rrup) and intraslab (Rhypo)
  * earthquakes at forearc sites: PGA and SA 0.02–10 s in g, no PGV.
  */
-export const AGA16: GroundMotionModel = Object.freeze({
+export const aga16: GroundMotionModel = Object.freeze({
   name: NAME,
   citation:
     'Abrahamson, N., Gregor, N. & Addo, K. (2016). BC Hydro ground motion prediction equations for subduction earthquakes. Earthquake Spectra 32(1), 23–44.',

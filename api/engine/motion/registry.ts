@@ -1,4 +1,4 @@
-import { AGA16 } from './aga16.ts';
+import { aga16 } from './aga16.ts';
 import { bssa14 } from './bssa14.ts';
 import { createModelCatalog, type ModelCatalog } from './catalog.ts';
 import { cb14 } from './cb14.ts';
@@ -10,7 +10,7 @@ import { cornell79 } from './cornell79.ts';
  * subduction earthquakes AGA16 (the only subduction model here). Cornell79 is kept for textbook
  * checks of the hazard integral, not for screening.
  */
-export const modelCatalog: ModelCatalog = createModelCatalog([bssa14, cb14, AGA16, cornell79], {
+export const modelCatalog: ModelCatalog = createModelCatalog([bssa14, cb14, aga16, cornell79], {
   crustal: [
     { model: 'BSSA14', weight: 0.5 },
     { model: 'CB14', weight: 0.5 },

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { InvalidInput, UnsupportedMeasure, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import type { TectonicSetting } from '../../../api/engine/model.ts';
 import { AGA16_PGA, AGA16_SA, type Aga16Row } from '../../../api/engine/motion/aga16-coefficients.ts';
-import { AGA16, aga16LnMedianAtVlin, aga16SiteTerm, type Aga16Scenario } from '../../../api/engine/motion/aga16.ts';
+import { aga16, aga16LnMedianAtVlin, aga16SiteTerm, type Aga16Scenario } from '../../../api/engine/motion/aga16.ts';
 import { parseMeasure, type Measure } from '../../../api/engine/motion/measure.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
 import { expectClose } from '../../helpers/close.ts';
@@ -29,7 +29,7 @@ function input({ setting = 'interface', magnitude, distanceKm, vs30, hypoDepthKm
 
 const PGA: Measure = { kind: 'PGA' };
 const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
-const lnAt = (options: CaseOptions, measure: Measure): number => AGA16.predict(input(options), measure).lnMedian;
+const lnAt = (options: CaseOptions, measure: Measure): number => aga16.predict(input(options), measure).lnMedian;
 const rowAt = (periodS: number): Aga16Row => AGA16_SA.find((r) => r.periodS === periodS) as Aga16Row;
 
 // Worked examples: the paper's equation with its coefficients (both from memory), evaluated
@@ -113,13 +113,13 @@ describe('AGA16 medians against the paper\'s figures', () => {
       { setting: 'intraslab', magnitude: 6, distanceKm: 120, vs30: 250, hypoDepthKm: 100 },
     ];
     for (const options of scenarios) {
-      const lnSa = AGA16.periodsS.map((p) => lnAt(options, sa(p)));
-      const x = AGA16.periodsS.map(Math.log);
+      const lnSa = aga16.periodsS.map((p) => lnAt(options, sa(p)));
+      const x = aga16.periodsS.map(Math.log);
       for (let i = 1; i + 1 < lnSa.length; i++) {
         const [x0, x1, x2] = [x[i - 1], x[i], x[i + 1]] as [number, number, number];
         const [y0, y1, y2] = [lnSa[i - 1], lnSa[i], lnSa[i + 1]] as [number, number, number];
         const chord = y0 + ((y2 - y0) * (x1 - x0)) / (x2 - x0);
-        expectClose(y1, chord, 0.25, `smooth spectrum at ${AGA16.periodsS[i]} s for ${JSON.stringify(options)} (common practice)`);
+        expectClose(y1, chord, 0.25, `smooth spectrum at ${aga16.periodsS[i]} s for ${JSON.stringify(options)} (common practice)`);
       }
     }
   });
@@ -129,7 +129,7 @@ describe('AGA16 sigma', () => {
   it('returns the paper\'s φ = 0.60, τ = 0.43, σ = 0.74 for every measure and event type', () => {
     for (const setting of ['interface', 'intraslab'] as const) {
       for (const measure of [PGA, sa(0.02), sa(0.35), sa(1), sa(10)]) {
-        const p = AGA16.predict(input({ setting, magnitude: 7, distanceKm: 80, vs30: 400, hypoDepthKm: 50 }), measure);
+        const p = aga16.predict(input({ setting, magnitude: 7, distanceKm: 80, vs30: 400, hypoDepthKm: 50 }), measure);
         expectClose(p.phi, 0.6, 1e-12, `${PAPER}, coefficient table φ (from memory)`);
         expectClose(p.tau, 0.43, 1e-12, `${PAPER}, coefficient table τ (from memory)`);
         expectClose(p.sigma, 0.74, 1e-12, `${PAPER}, coefficient table σ (from memory)`);
@@ -138,7 +138,7 @@ describe('AGA16 sigma', () => {
   });
 });
 
-const MEASURES = [PGA, ...AGA16.periodsS.map(sa)];
+const MEASURES = [PGA, ...aga16.periodsS.map(sa)];
 const measureArb = fc.constantFrom(...MEASURES);
 const settingArb = fc.constantFrom<'interface' | 'intraslab'>('interface', 'intraslab');
 const double = (min: number, max: number): fc.Arbitrary<number> => fc.double({ min, max, noNaN: true });
@@ -250,17 +250,17 @@ describe('AGA16 periods and event types', () => {
 
   it('reads Rrup for interface events and Rhypo for intraslab events', () => {
     const base = input({ magnitude: 7, distanceKm: 80, vs30: 500, hypoDepthKm: 50 });
-    const interfaceLn = AGA16.predict(base, PGA).lnMedian;
-    expect(AGA16.predict({ ...base, rhypoKm: 200 }, PGA).lnMedian).toBe(interfaceLn);
-    expect(AGA16.predict({ ...base, rrupKm: 200 }, PGA).lnMedian).toBeLessThan(interfaceLn);
+    const interfaceLn = aga16.predict(base, PGA).lnMedian;
+    expect(aga16.predict({ ...base, rhypoKm: 200 }, PGA).lnMedian).toBe(interfaceLn);
+    expect(aga16.predict({ ...base, rrupKm: 200 }, PGA).lnMedian).toBeLessThan(interfaceLn);
     const slab = { ...base, setting: 'intraslab' as const };
-    const slabLn = AGA16.predict(slab, PGA).lnMedian;
-    expect(AGA16.predict({ ...slab, rrupKm: 200 }, PGA).lnMedian).toBe(slabLn);
-    expect(AGA16.predict({ ...slab, rhypoKm: 200 }, PGA).lnMedian).toBeLessThan(slabLn);
+    const slabLn = aga16.predict(slab, PGA).lnMedian;
+    expect(aga16.predict({ ...slab, rrupKm: 200 }, PGA).lnMedian).toBe(slabLn);
+    expect(aga16.predict({ ...slab, rhypoKm: 200 }, PGA).lnMedian).toBeLessThan(slabLn);
   });
 
   it('answers inside its validity as applicable, with no notes', () => {
-    const p = AGA16.predict(input({ setting: 'intraslab', magnitude: 7, distanceKm: 70, vs30: 760, hypoDepthKm: 60 }), sa(1));
+    const p = aga16.predict(input({ setting: 'intraslab', magnitude: 7, distanceKm: 70, vs30: 760, hypoDepthKm: 60 }), sa(1));
     expect(p.applicable).toBe(true);
     expect(p.notes).toEqual([]);
   });
@@ -276,7 +276,7 @@ describe('AGA16 periods and event types', () => {
     ];
     for (const [label, gmmInput, reason] of outside) {
       for (const measure of [PGA, sa(0.2), sa(0.35), sa(10)]) {
-        const p = AGA16.predict(gmmInput, measure);
+        const p = aga16.predict(gmmInput, measure);
         expect(p.applicable, label).toBe(false);
         expect(p.notes.join(' '), label).toMatch(reason);
         for (const value of [p.lnMedian, p.sigma, p.tau, p.phi]) expect(Number.isFinite(value), label).toBe(true);
@@ -285,14 +285,14 @@ describe('AGA16 periods and event types', () => {
   });
 
   it('has no PGV', () => {
-    expect(AGA16.hasPgv).toBe(false);
-    expect(() => AGA16.predict(input({ magnitude: 8, distanceKm: 100, vs30: 760 }), { kind: 'PGV' })).toThrow(UnsupportedMeasure);
-    expect(() => AGA16.predict(input({ magnitude: 8, distanceKm: 100, vs30: 760 }), { kind: 'PGV' })).toThrow(/no PGV/);
+    expect(aga16.hasPgv).toBe(false);
+    expect(() => aga16.predict(input({ magnitude: 8, distanceKm: 100, vs30: 760 }), { kind: 'PGV' })).toThrow(UnsupportedMeasure);
+    expect(() => aga16.predict(input({ magnitude: 8, distanceKm: 100, vs30: 760 }), { kind: 'PGV' })).toThrow(/no PGV/);
   });
 
   it('refuses periods outside its table', () => {
     for (const periodS of [0.01, 12]) {
-      expect(() => AGA16.predict(input({ magnitude: 8, distanceKm: 100, vs30: 760 }), sa(periodS))).toThrow(UnsupportedPeriod);
+      expect(() => aga16.predict(input({ magnitude: 8, distanceKm: 100, vs30: 760 }), sa(periodS))).toThrow(UnsupportedPeriod);
     }
   });
 
@@ -304,10 +304,10 @@ describe('AGA16 periods and event types', () => {
     ];
     for (const [patch, field] of cases) {
       const bad = { ...input({ magnitude: 8, distanceKm: 100, vs30: 760 }), ...patch };
-      expect(() => AGA16.predict(bad, PGA)).toThrow(InvalidInput);
-      expect(() => AGA16.predict(bad, PGA)).toThrow(field);
+      expect(() => aga16.predict(bad, PGA)).toThrow(InvalidInput);
+      expect(() => aga16.predict(bad, PGA)).toThrow(field);
     }
     const slab = { ...input({ setting: 'intraslab', magnitude: 7, distanceKm: 100, vs30: 760, hypoDepthKm: 60 }), hypoDepthKm: Number.POSITIVE_INFINITY };
-    expect(() => AGA16.predict(slab, PGA)).toThrow(/hypoDepthKm/);
+    expect(() => aga16.predict(slab, PGA)).toThrow(/hypoDepthKm/);
   });
 });
