@@ -13,7 +13,7 @@ import { WorkerPool } from './workers/worker-pool.ts';
 
 /**
  * `npm start`: the service on 127.0.0.1 (PORT, HOST, TREMORA_DB, TREMORA_TOKEN,
- * TREMORA_WORKERS, TREMORA_WORK_BUDGET; see docs-draft/service-api.md), with the demo study
+ * TREMORA_WORKERS, TREMORA_WORK_BUDGET; see README, Service), with the demo study
  * saved on the first start. SIGTERM or SIGINT stops it cleanly: runs still computing are
  * marked interrupted and the database is closed.
  */

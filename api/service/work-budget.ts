@@ -5,12 +5,14 @@ import type { Study } from '../engine/model.ts';
 import { parseMeasure } from '../engine/motion/measure.ts';
 
 /**
- * Most work one screening may ask for, counted as communities x ruptures x measure levels.
- * The demo study is about 7.5e7 and takes a few minutes on one core, so the budget admits
- * studies several times its size (tens of minutes on a core) and refuses those that would
- * hold a worker for hours. TREMORA_WORK_BUDGET overrides it.
+ * Most work one screening or map may ask for, counted as communities (or map points) x
+ * ruptures x levels. Measured on the fast path on a 2-core machine (npm run bench, README
+ * Performance): the demo study, 7.5e7, takes about 1.6 s, and the 10,000-point demo map,
+ * 4.8e9, about 70 s; both run at 5e7 to 7e7 units a second. The budget, 2e10, admits about
+ * five minutes of such a machine and refuses what would hold its threads for much longer.
+ * TREMORA_WORK_BUDGET overrides it.
  */
-export const DEFAULT_WORK_BUDGET = 500_000_000;
+export const DEFAULT_WORK_BUDGET = 20_000_000_000;
 
 export interface StudyWork {
   readonly communities: number;

@@ -3,7 +3,7 @@ import type { Answer } from './http-client.ts';
 
 /**
  * What a hostile request may get back: never a status of 500 or above, never a stack trace or
- * a path of the code, and every 4xx in the one error shape of docs-draft/service-api.md
+ * a path of the code, and every 4xx in the one error shape of the README's Service section
  * (`{ error, issues: [{ path, message }] }`, JSON, with the security headers).
  */
 

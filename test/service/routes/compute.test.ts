@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { StudyResult } from '../../../api/engine/results.ts';
 import { expectRelative } from '../../helpers/close.ts';
+import { DEFAULT_WORK_BUDGET } from '../../../api/service/work-budget.ts';
 import { expectError, expectSecurityHeaders } from '../helpers/assertions.ts';
 import { startRun, waitForStatus } from '../helpers/runs.ts';
 import { jsonInit, type ServiceProcess, startService, tempDir } from '../helpers/service-process.ts';
@@ -23,7 +24,7 @@ describe('POST /api/validate', () => {
     expect(response.status).toBe(200);
     const body = (await response.json()) as Record<string, unknown>;
     expect(body).toMatchObject({ valid: true, name: 'Small test study', communities: 1, sources: 1, measures: ['PGA'], warnings: [] });
-    expect(body.work).toMatchObject({ size: 3, ruptures: 1, budget: 500_000_000 });
+    expect(body.work).toMatchObject({ size: 3, ruptures: 1, budget: DEFAULT_WORK_BUDGET });
     expect(body.inputHash).toMatch(/^[0-9a-f]{64}$/);
   });
 
