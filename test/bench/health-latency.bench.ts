@@ -1,9 +1,10 @@
 import { createRequire } from 'node:module';
+import { saveHeavyStudy } from '../service/helpers/heavy-study.ts';
 import { startService, tempDir, type ServiceProcess } from '../service/helpers/service-process.ts';
 
 /**
- * Latency of GET /api/health on a started service, idle and while the demo study computes in
- * the worker pool. Prints figures; asserts nothing about time (the tests assert only that
+ * Latency of GET /api/health on a started service, idle and while a heavy study (the demo's
+ * sources over 440 villages) computes in the worker pool. Prints figures; asserts nothing about time (the tests assert only that
  * health answers while a run computes: test/service/health-while-computing.test.ts).
  */
 
@@ -27,18 +28,11 @@ function report(label: string, r: AutocannonResult): void {
   );
 }
 
-async function demoId(service: ServiceProcess): Promise<string> {
-  const { studies } = (await (await service.fetch('/api/studies')).json()) as { studies: { id: string; name: string }[] };
-  const demo = studies.find((s) => s.name === 'Demo coast');
-  if (!demo) throw new Error('the demo study was not saved on first start');
-  return demo.id;
-}
-
 async function waitUntilRunning(service: ServiceProcess, runId: string): Promise<void> {
   for (;;) {
     const run = (await (await service.fetch(`/api/runs/${runId}`)).json()) as { status: string };
     if (run.status === 'running') return;
-    if (run.status !== 'queued') throw new Error(`the demo run ended early: ${run.status}`);
+    if (run.status !== 'queued') throw new Error(`the heavy run ended early: ${run.status}`);
     await new Promise((r) => setTimeout(r, 100));
   }
 }
@@ -51,10 +45,10 @@ try {
   // Warm-up, not reported: the JIT and the worker threads' start-up would colour the idle figures.
   await autocannon({ url, connections: CONNECTIONS, duration: 1 });
   report('idle', await autocannon({ url, connections: CONNECTIONS, duration: DURATION_S }));
-  const started = await service.fetch(`/api/studies/${await demoId(service)}/runs`, { method: 'POST' });
+  const started = await service.fetch(`/api/studies/${await saveHeavyStudy(service)}/runs`, { method: 'POST' });
   const run = (await started.json()) as { id: string };
   await waitUntilRunning(service, run.id);
-  report('demo run computing', await autocannon({ url, connections: CONNECTIONS, duration: DURATION_S }));
+  report('heavy run computing', await autocannon({ url, connections: CONNECTIONS, duration: DURATION_S }));
   await service.fetch(`/api/runs/${run.id}/cancel`, { method: 'POST' });
 } finally {
   await service.stop();

@@ -1,8 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoStudyId, getRun, startRun, waitForStatus } from './helpers/runs.ts';
+import { saveHeavyStudy } from './helpers/heavy-study.ts';
+import { getRun, startRun, waitForStatus } from './helpers/runs.ts';
 import { type ServiceProcess, startService, tempDir, waitFor } from './helpers/service-process.ts';
 
-/** Health is answered while a heavy run (the demo) computes; its latency is in the benchmark. */
+/** Health is answered while a heavy run (helpers/heavy-study.ts) computes; its latency is in the benchmark. */
 const dir = tempDir();
 let service: ServiceProcess;
 
@@ -14,9 +15,9 @@ afterAll(async () => {
   dir.remove();
 });
 
-describe('while the demo study computes', () => {
+describe('while a heavy study computes', () => {
   it('health answers, the run reports progress, and it can be cancelled', async () => {
-    const run = await startRun(service, await demoStudyId(service));
+    const run = await startRun(service, await saveHeavyStudy(service));
     await waitForStatus(service, run.id, ['running']);
     for (let i = 0; i < 5; i++) {
       const response = await service.fetch('/api/health');
@@ -25,7 +26,7 @@ describe('while the demo study computes', () => {
       expect(body).toMatchObject({ status: 'ok', workers: { runs: { busy: 1 } }, activeRuns: 1 });
     }
     expect((await service.fetch('/api/studies')).status).toBe(200);
-    // The demo reports progress after each community's branch: a few seconds in.
+    // A run reports progress after each community's branch.
     const moving = await waitFor(() => getRun(service, run.id), (r) => r.progress > 0);
     expect(moving.status).toBe('running');
     expect(moving.progress).toBeGreaterThan(0);

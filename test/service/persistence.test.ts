@@ -2,7 +2,8 @@ import Database from 'better-sqlite3';
 import { afterAll, describe, expect, it } from 'vitest';
 import { INTERRUPTED_MESSAGE } from '../../api/store/run-repository.ts';
 import { expectError } from './helpers/assertions.ts';
-import { demoStudyId, getRun, startRun, waitForStatus } from './helpers/runs.ts';
+import { saveHeavyStudy } from './helpers/heavy-study.ts';
+import { getRun, startRun, waitForStatus } from './helpers/runs.ts';
 import { jsonInit, type ServiceProcess, startService, tempDir } from './helpers/service-process.ts';
 import { smallStudy } from './helpers/small-study.ts';
 
@@ -37,9 +38,10 @@ describe('a crash of the service (SIGKILL)', () => {
     const finished = await waitForStatus(first, (await startRun(first, studyId)).id);
     expect(finished.status).toBe('done');
     const resultsBefore = await (await first.fetch(`/api/runs/${finished.id}/results`)).text();
+    const heavyId = await saveHeavyStudy(first);
     const studiesBefore = await (await first.fetch('/api/studies')).json();
 
-    const inFlight = await startRun(first, await demoStudyId(first));
+    const inFlight = await startRun(first, heavyId);
     await waitForStatus(first, inFlight.id, ['running']);
     await first.kill();
 
@@ -66,7 +68,7 @@ describe('a crash of the service (SIGKILL)', () => {
 
   it('a clean stop (SIGTERM) marks a run in flight interrupted and exits 0', async () => {
     const service = await start();
-    const run = await startRun(service, await demoStudyId(service));
+    const run = await startRun(service, await saveHeavyStudy(service));
     await waitForStatus(service, run.id, ['running']);
     expect(await service.stop()).toBe(0);
     const db = new Database(databasePath, { readonly: true });

@@ -9,3 +9,10 @@ export { annualRateForProbability, poissonProbability, returnPeriodForProbabilit
 export { annualRateAtLevel, levelAtAnnualRate, levelAtReturnPeriod, type CurveLevel, type CurveRate } from './curve-interpolation.ts';
 export { deaggregate, type DeaggregationBranch, type DeaggregationOptions } from './deaggregation.ts';
 export { DISTANCE_EDGES_KM, EPSILON_EDGES, MAGNITUDE_BIN_WIDTH } from './deaggregation-bins.ts';
+// The fast path (typed arrays; the reference path above stays as the check).
+export { MECHANISMS, PLANE_STRIDE, ruptureContexts, settingRuptures, type RuptureTable } from './rupture-table.ts';
+export { ruptureTable, RuptureTableBuilder } from './rupture-table-builder.ts';
+export { studyRuptureTable, type StudyRuptureTable } from './study-rupture-table.ts';
+export { createFastHazard, fastSiteHazard, type FastHazard, type FastHazardOptions, type FastSite, type FastSiteHazard } from './fast-site-hazard.ts';
+export { createFastRates, fastSiteRates, type FastRates, type SiteRates } from './fast-site-rates.ts';
+export { fastDeaggregate, type FastDeaggregationOptions } from './fast-deaggregation.ts';

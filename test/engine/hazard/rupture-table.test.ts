@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { PLANE_STRIDE, ruptureContexts, ruptureTable, settingRuptures } from '../../../api/engine/hazard/rupture-table.ts';
+import { ruptureTable } from '../../../api/engine/hazard/rupture-table-builder.ts';
+import { PLANE_STRIDE, ruptureContexts, settingRuptures } from '../../../api/engine/hazard/rupture-table.ts';
 import { discretiseStudy } from '../../../api/engine/ruptures/discretise.ts';
 import { allKindsStudy } from '../fixtures/all-kinds-study.ts';
 

@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { ruptureDistances } from '../../../api/engine/geometry/distances.ts';
-import { ruptureTable, settingRuptures } from '../../../api/engine/hazard/rupture-table.ts';
+import { ruptureTable } from '../../../api/engine/hazard/rupture-table-builder.ts';
+import { settingRuptures } from '../../../api/engine/hazard/rupture-table.ts';
 import { ruptureGeometry } from '../../../api/engine/hazard/rupture-geometry.ts';
 import { createPairBuffer, siteDistances } from '../../../api/engine/hazard/site-distances.ts';
 import type { DistanceName } from '../../../api/engine/motion/types.ts';

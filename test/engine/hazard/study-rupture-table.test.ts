@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { InvalidInput } from '../../../api/engine/errors.ts';
 import { frameForStudy } from '../../../api/engine/geometry/projection.ts';
 import type { Study } from '../../../api/engine/model.ts';
-import { ruptureTable } from '../../../api/engine/hazard/rupture-table.ts';
+import { ruptureTable } from '../../../api/engine/hazard/rupture-table-builder.ts';
 import { studyRuptureTable } from '../../../api/engine/hazard/study-rupture-table.ts';
 import { discretiseStudy } from '../../../api/engine/ruptures/discretise.ts';
 import { allKindsStudy } from '../fixtures/all-kinds-study.ts';

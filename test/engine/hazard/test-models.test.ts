@@ -1,6 +1,6 @@
 import { describe, it } from 'vitest';
 import { createFastHazard, fastSiteHazard } from '../../../api/engine/hazard/fast-site-hazard.ts';
-import { ruptureTable } from '../../../api/engine/hazard/rupture-table.ts';
+import { ruptureTable } from '../../../api/engine/hazard/rupture-table-builder.ts';
 import type { HazardMeasure } from '../../../api/engine/hazard/site-hazard.ts';
 import { cornell79 } from '../../../api/engine/motion/cornell79.ts';
 import { expectRelative } from '../../helpers/close.ts';

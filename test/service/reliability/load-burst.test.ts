@@ -4,7 +4,7 @@ import { describeLoad, loadMix, startHeavyRun } from './load-mix.ts';
 
 /**
  * Load (issue 8), the short burst: a few seconds of autocannon on loopback against health, the
- * study overview page and a small compute while the demo run computes. Asserted: no failed
+ * study overview page and a small compute while a heavy run computes. Asserted: no failed
  * request (errors, timeouts, non-2xx answers) and the run still going. Requests per second
  * and p99 latency are printed, not asserted; the measured run is test/bench/load.bench.ts.
  */
@@ -27,7 +27,7 @@ describe('under load while a heavy run computes', () => {
   it('health, the overview page and a small compute fail no request', async () => {
     const { runId, studyId } = await startHeavyRun(service);
     const targets = await loadMix(service, studyId, runId, { durationS: BURST_S, connections: CONNECTIONS });
-    console.log(`load burst, ${BURST_S} s, ${CONNECTIONS} connections (compute ${Math.max(1, CONNECTIONS / 4)}), demo run in flight:\n  ${describeLoad(targets)}`);
+    console.log(`load burst, ${BURST_S} s, ${CONNECTIONS} connections (compute ${Math.max(1, CONNECTIONS / 4)}), heavy run in flight:\n  ${describeLoad(targets)}`);
     for (const { label, result } of targets) {
       expect(result.requests.total, label).toBeGreaterThan(0);
       expect({ label, errors: result.errors, timeouts: result.timeouts, non2xx: result.non2xx }).toEqual({ label, errors: 0, timeouts: 0, non2xx: 0 });

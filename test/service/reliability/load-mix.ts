@@ -1,4 +1,5 @@
 import { createRequire } from 'node:module';
+import { saveHeavyStudy } from '../helpers/heavy-study.ts';
 import type { ServiceProcess } from '../helpers/service-process.ts';
 import { smallStudy } from '../helpers/small-study.ts';
 
@@ -6,7 +7,8 @@ import { smallStudy } from '../helpers/small-study.ts';
  * The load of issue 8, shared by the short burst in the tests (load-burst.test.ts, which
  * asserts no failed request) and the longer measured run (test/bench/load.bench.ts, figures
  * only): autocannon on loopback against health, the study overview page and a small compute,
- * all at once, while a heavy run (the demo study) is in flight.
+ * all at once, while a heavy run (the demo's sources over 440 villages, helpers/heavy-study.ts)
+ * is in flight.
  */
 
 export interface AutocannonResult {
@@ -45,26 +47,24 @@ export interface LoadMixOptions {
 
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
-/** Starts the demo study's run and waits until a worker computes it; returns its id. */
+/** Saves the heavy study, starts its run and waits until a worker computes it; returns the ids. */
 export async function startHeavyRun(service: ServiceProcess): Promise<{ runId: string; studyId: string }> {
-  const { studies } = (await (await service.fetch('/api/studies')).json()) as { studies: { id: string; name: string }[] };
-  const demo = studies.find((s) => s.name === 'Demo coast');
-  if (!demo) throw new Error('the demo study was not saved on first start');
-  const started = await service.fetch(`/api/studies/${demo.id}/runs`, { method: 'POST' });
-  if (started.status !== 202) throw new Error(`the demo run did not start: ${started.status} ${await started.text()}`);
+  const studyId = await saveHeavyStudy(service);
+  const started = await service.fetch(`/api/studies/${studyId}/runs`, { method: 'POST' });
+  if (started.status !== 202) throw new Error(`the heavy run did not start: ${started.status} ${await started.text()}`);
   const { id } = (await started.json()) as { id: string };
   // Every worker thread loads its code on its first task (seconds on a busy machine): one
   // compute and one page first, so the load measures the service, not the start-up.
   const warm = await service.fetch('/api/compute', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(smallStudy('Warm-up')) });
   if (warm.status !== 200) throw new Error(`the warm-up compute failed: ${warm.status} ${await warm.text()}`);
-  await (await service.fetch(`/studies/${demo.id}`)).text();
+  await (await service.fetch(`/studies/${studyId}`)).text();
   for (let i = 0; i < 600; i++) {
     const run = (await (await service.fetch(`/api/runs/${id}`)).json()) as { status: string };
-    if (run.status === 'running') return { runId: id, studyId: demo.id };
-    if (run.status !== 'queued') throw new Error(`the demo run ended before the load: ${run.status}`);
+    if (run.status === 'running') return { runId: id, studyId };
+    if (run.status !== 'queued') throw new Error(`the heavy run ended before the load: ${run.status}`);
     await sleep(100);
   }
-  throw new Error('the demo run never started');
+  throw new Error('the heavy run never started');
 }
 
 /** The three loads at once, while the heavy run computes; throws if the run is no longer running after. */

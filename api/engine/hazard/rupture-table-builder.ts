@@ -1,0 +1,144 @@
+import { TremoraError } from '../errors.ts';
+import { TECTONIC_SETTINGS } from '../model.ts';
+import type { PointKm, Rupture, RupturePlane } from '../ruptures/rupture.ts';
+import { MECHANISMS, PLANE_STRIDE, type RuptureTable } from './rupture-table.ts';
+
+/** What the table keeps of a rupture, its rate aside (a Rupture, or a placed one with its share). */
+export type TableRupture = Pick<Rupture, 'sourceIndex' | 'sourceId' | 'context' | 'surface'>;
+
+/** Ruptures (and planes) the columns first have room for; they double as needed. */
+const FIRST_CAPACITY = 4096;
+
+type Column = Float64Array | Int32Array | Uint8Array;
+
+function grown<T extends Column>(column: T, length: number): T {
+  const Kind = column.constructor as { new (length: number): T };
+  const copy = new Kind(length);
+  copy.set(column);
+  return copy;
+}
+
+const trimmed = <T extends Column>(column: T, length: number): T => column.slice(0, length) as T;
+
+/**
+ * A RuptureTable's columns while they fill, one rupture at a time in discretisation order:
+ * rupture i at i, plane p's corners from PLANE_STRIDE × p; the columns double as needed.
+ * Both ways to a table (ruptureTable from Rupture objects, studyRuptureTable from the sources'
+ * walk) fill one of these, so they give the same table.
+ */
+export class RuptureTableBuilder {
+  count = 0;
+  planes = 0;
+  capacity = FIRST_CAPACITY;
+  planeCapacity = FIRST_CAPACITY;
+  annualRate = new Float64Array(FIRST_CAPACITY);
+  magnitude = new Float64Array(FIRST_CAPACITY);
+  rakeDeg = new Float64Array(FIRST_CAPACITY);
+  dipDeg = new Float64Array(FIRST_CAPACITY);
+  ztorKm = new Float64Array(FIRST_CAPACITY);
+  widthKm = new Float64Array(FIRST_CAPACITY);
+  hypoDepthKm = new Float64Array(FIRST_CAPACITY);
+  setting = new Uint8Array(FIRST_CAPACITY);
+  mechanism = new Uint8Array(FIRST_CAPACITY);
+  sourceIndex = new Int32Array(FIRST_CAPACITY);
+  hypocentre = new Float64Array(3 * FIRST_CAPACITY);
+  planeStart = new Int32Array(FIRST_CAPACITY + 1);
+  isPoint = new Uint8Array(FIRST_CAPACITY);
+  planeCorners = new Float64Array(PLANE_STRIDE * FIRST_CAPACITY);
+  /** Source id by source index; a source without ruptures keeps '' (dense, for structured clone). */
+  readonly sourceIds: string[] = [];
+
+  private grow(): void {
+    const capacity = (this.capacity *= 2);
+    this.annualRate = grown(this.annualRate, capacity);
+    this.magnitude = grown(this.magnitude, capacity);
+    this.rakeDeg = grown(this.rakeDeg, capacity);
+    this.dipDeg = grown(this.dipDeg, capacity);
+    this.ztorKm = grown(this.ztorKm, capacity);
+    this.widthKm = grown(this.widthKm, capacity);
+    this.hypoDepthKm = grown(this.hypoDepthKm, capacity);
+    this.setting = grown(this.setting, capacity);
+    this.mechanism = grown(this.mechanism, capacity);
+    this.sourceIndex = grown(this.sourceIndex, capacity);
+    this.hypocentre = grown(this.hypocentre, 3 * capacity);
+    this.planeStart = grown(this.planeStart, capacity + 1);
+    this.isPoint = grown(this.isPoint, capacity);
+  }
+
+  /** Appends one rupture with its annual rate (per year). */
+  add(rupture: TableRupture, annualRate: number): void {
+    if (this.count === this.capacity) this.grow();
+    const i = this.count++;
+    const c = rupture.context;
+    this.annualRate[i] = annualRate;
+    this.magnitude[i] = c.magnitude;
+    this.rakeDeg[i] = c.rakeDeg;
+    this.dipDeg[i] = c.dipDeg;
+    this.ztorKm[i] = c.ztorKm;
+    this.widthKm[i] = c.widthKm;
+    this.hypoDepthKm[i] = c.hypoDepthKm;
+    this.setting[i] = TECTONIC_SETTINGS.indexOf(c.setting);
+    this.mechanism[i] = MECHANISMS.indexOf(c.mechanism);
+    this.sourceIndex[i] = rupture.sourceIndex;
+    while (this.sourceIds.length <= rupture.sourceIndex) this.sourceIds.push('');
+    this.sourceIds[rupture.sourceIndex] = rupture.sourceId;
+    const { surface } = rupture;
+    const h = surface.hypocentre;
+    this.hypocentre[3 * i] = h.x;
+    this.hypocentre[3 * i + 1] = h.y;
+    this.hypocentre[3 * i + 2] = h.z;
+    this.planeStart[i] = this.planes;
+    if (surface.kind !== 'planes') {
+      this.isPoint[i] = 1;
+      return;
+    }
+    const planes = surface.planes;
+    if (planes.length === 0) throw new TremoraError(`a planar rupture surface needs at least one plane, got none (rupture ${i} of source "${rupture.sourceId}")`);
+    while (this.planes + planes.length > this.planeCapacity) {
+      this.planeCapacity *= 2;
+      this.planeCorners = grown(this.planeCorners, PLANE_STRIDE * this.planeCapacity);
+    }
+    const corners = this.planeCorners;
+    let at = this.planes * PLANE_STRIDE;
+    for (let p = 0; p < planes.length; p++) {
+      const q = (planes[p] as RupturePlane).corners;
+      for (let k = 0; k < 4; k++) {
+        const corner = q[k] as PointKm;
+        corners[at++] = corner.x;
+        corners[at++] = corner.y;
+        corners[at++] = corner.z;
+      }
+    }
+    this.planes += planes.length;
+  }
+
+  table(): RuptureTable {
+    const { count, planes } = this;
+    this.planeStart[count] = planes;
+    return {
+      count,
+      annualRate: trimmed(this.annualRate, count),
+      magnitude: trimmed(this.magnitude, count),
+      rakeDeg: trimmed(this.rakeDeg, count),
+      dipDeg: trimmed(this.dipDeg, count),
+      ztorKm: trimmed(this.ztorKm, count),
+      widthKm: trimmed(this.widthKm, count),
+      hypoDepthKm: trimmed(this.hypoDepthKm, count),
+      setting: trimmed(this.setting, count),
+      mechanism: trimmed(this.mechanism, count),
+      sourceIndex: trimmed(this.sourceIndex, count),
+      sourceIds: this.sourceIds,
+      hypocentre: trimmed(this.hypocentre, 3 * count),
+      planeStart: trimmed(this.planeStart, count + 1),
+      planeCorners: trimmed(this.planeCorners, PLANE_STRIDE * planes),
+      isPoint: trimmed(this.isPoint, count),
+    };
+  }
+}
+
+/** Lays out `ruptures` (as discretiseStudy gives them) in a RuptureTable. */
+export function ruptureTable(ruptures: readonly Rupture[]): RuptureTable {
+  const builder = new RuptureTableBuilder();
+  for (const r of ruptures) builder.add(r, r.annualRate);
+  return builder.table();
+}
