@@ -12,6 +12,7 @@ import { InvalidInput } from '../engine/errors.ts';
 import { mmiRoman } from '../engine/intensity/mmi-roman.ts';
 import { modelCatalog } from '../engine/motion/registry.ts';
 import { parseJsonText } from '../study/json-text.ts';
+import type { CompletenessPeriod } from '../engine/catalog/completeness-periods.ts';
 import { numberOption, sig } from './args.ts';
 import { loadStudyForVerb } from './load.ts';
 import { EXIT_OK, type Io, UsageError } from './output.ts';
@@ -19,7 +20,7 @@ import { EXIT_OK, type Io, UsageError } from './output.ts';
 export const CATALOG_USAGE = `tremora catalog (fit CATALOG | felt STUDY CATALOG) [options] [--json]
 
 tremora catalog fit CATALOG [--polygon FILE] [--m-max M] [--no-decluster] [--all-magnitudes]
-                   [--start TIME --end TIME] [--json]
+                   [--start TIME --end TIME] [--periods LIST] [--json]
   Gutenberg–Richter recurrence from an earthquake catalog (our CSV, FDSN event text or QuakeML):
   Gardner & Knopoff (1974) declustering, Mc by maximum curvature + 0.2 (Woessner & Wiemer 2005),
   b by Aki (1965) with Utsu's correction and Shi & Bolt (1982) uncertainty, the annual rate.
@@ -29,6 +30,9 @@ tremora catalog fit CATALOG [--polygon FILE] [--m-max M] [--no-decluster] [--all
   --all-magnitudes    use every magnitude type as it is (default: moment magnitudes only)
   --start --end TIME  the catalog's observation span, ISO 8601 (default: first to last event,
                       which shortens it and so raises the rates)
+  --periods LIST      completeness periods for a Weichert (1980) fit, as M@TIME pairs, e.g.
+                      5.0@1946-01-01,4.0@1970-01-01,3.0@2000-01-01 (complete from M 5.0 since
+                      1946, ...); or "proposed" to take them from Mc over time windows
 
 tremora catalog felt STUDY CATALOG [--community ID] [--all-magnitudes] [--json]
   The past earthquakes people at each community of the study have likely felt: the median
@@ -53,6 +57,21 @@ function timeOption(text: string, name: string): number {
   return parsed.timeMs;
 }
 
+/** --periods: "proposed", or comma-separated M@TIME pairs (magnitude of completeness since an ISO 8601 time). */
+function periodsOption(text: string): CompletenessPeriod[] | 'proposed' {
+  if (text.trim() === 'proposed') return 'proposed';
+  return text.split(',').map((pair, i) => {
+    const [m, time, extra] = pair.trim().split('@');
+    const magnitude = Number(m);
+    if (extra !== undefined || time === undefined || m === undefined || m.trim() === '' || !Number.isFinite(magnitude)) {
+      throw new UsageError(`--periods: expected "proposed" or M@TIME pairs such as 4.0@1970-01-01, got "${pair.trim()}" (pair ${i + 1})`);
+    }
+    const parsed = parseIsoTimeMs(time);
+    if (!parsed.ok) throw new UsageError(`--periods: pair ${i + 1}: ${parsed.message}`);
+    return { magnitude, startMs: parsed.timeMs };
+  });
+}
+
 async function readTextFile(path: string, what: string): Promise<string> {
   try {
     return await readFile(path, 'utf8');
@@ -70,7 +89,7 @@ async function fitVerb(args: readonly string[], io: Io): Promise<number> {
     args: [...args],
     options: {
       polygon: { type: 'string' }, 'm-max': { type: 'string' }, 'no-decluster': { type: 'boolean' }, 'all-magnitudes': { type: 'boolean' },
-      start: { type: 'string' }, end: { type: 'string' }, json: { type: 'boolean' },
+      start: { type: 'string' }, end: { type: 'string' }, periods: { type: 'string' }, json: { type: 'boolean' },
     },
     allowPositionals: true,
     strict: true,
@@ -82,6 +101,7 @@ async function fitVerb(args: readonly string[], io: Io): Promise<number> {
   const startMs = values.start === undefined ? undefined : timeOption(values.start, 'start');
   const endMs = values.end === undefined ? undefined : timeOption(values.end, 'end');
   if (startMs !== undefined && endMs !== undefined && !(endMs > startMs)) throw new UsageError(`--end: expected a time after --start ${values.start}, got ${values.end}`);
+  const periods = values.periods === undefined ? undefined : periodsOption(values.periods);
   let rings;
   if (values.polygon !== undefined) {
     const parsed = parseJsonText(await readTextFile(values.polygon, 'polygon file'), values.polygon);
@@ -95,6 +115,7 @@ async function fitVerb(args: readonly string[], io: Io): Promise<number> {
     decluster: !values['no-decluster'],
     magnitudes: values['all-magnitudes'] ? 'all' : 'moment',
     ...(startMs === undefined || endMs === undefined ? {} : { startMs, endMs }),
+    ...(periods === undefined ? {} : { periods }),
   });
   if (values.json) {
     io.out(JSON.stringify({ catalog: catalogLoadJson(load), ...catalogFitJson(fit) }, null, 2));

@@ -152,6 +152,21 @@ describe('tremora catalog fit', () => {
     expect(fit.notes.join(' ')).not.toMatch(/observation span runs from the first/);
   });
 
+  it('adds a Weichert fit from --periods; with one period it is the binned Aki–Utsu estimate', async () => {
+    const fit = await runJson<FitJson & { weichert: { bValue: number; sigmaB: number; rateAtReference: number; method: string } | null; periods: { magnitude: number; start: string }[] | null }>(
+      'fit', fitCsv, '--m-max', '9.5', '--periods', '4.2@2001-01-15T00:00:00Z',
+    );
+    // As the API test (test/service/routes/catalogs.test.ts): for one period Weichert's (1980)
+    // equation gives Aki–Utsu's β_U times 2 artanh(y/2) / y with y = β_U ΔM; bins run to mMax 9.5.
+    const y = DEFAULT_FIT.bValue * Math.LN10 * 0.1;
+    expect(fit.weichert?.method).toBe('weichert');
+    expectRelative(fit.weichert?.bValue ?? NaN, (DEFAULT_FIT.bValue * 2 * Math.atanh(y / 2)) / y, 1e-5, 'Aki–Utsu with the binning term (Weichert 1980, one period)');
+    expectRelative(fit.weichert?.rateAtReference ?? NaN, 7 / SPAN_YEARS, 1e-12, 'one period: N / T (Weichert 1980)');
+    expect(fit.periods).toEqual([{ magnitude: 4.2, start: '2001-01-15T00:00:00.000Z' }]);
+    const { out } = await run('fit', fitCsv, '--m-max', '9.5', '--periods', '4.2@2001-01-15T00:00:00Z');
+    expect(out).toContain(`b-value (Weichert 1980, completeness periods): ${(fit.weichert?.bValue ?? NaN).toFixed(2)} ± ${(fit.weichert?.sigmaB ?? NaN).toFixed(2)}`);
+  });
+
   it('loads the good rows of a catalog with a bad one, and says which line', async () => {
     const bad = file('bad-row.csv', `${FIT_CATALOG_CSV}2013-02-30T00:00:00Z,-139.00,-50.00,10,4.5,Mw,ev-15\n`);
     const { code, out } = await run('fit', bad);
@@ -172,6 +187,9 @@ describe('tremora catalog fit', () => {
       [['fit', fitCsv, '--polygon', file('line.geojson', '{"type":"LineString","coordinates":[[0,0],[1,1]]}')], /line\.geojson\.type: expected a GeoJSON Polygon/],
       [['fit', fitCsv, '--polygon', file('broken.geojson', '{"type": ')], /broken\.geojson: expected valid JSON/],
       [['fit', fitCsv, '--polygon', file('far.geojson', JSON.stringify({ type: 'Polygon', coordinates: [[[10, 10], [11, 10], [11, 11], [10, 10]]] }))], /polygon: expected events inside the zone polygon; all 12 events fall outside it/],
+      [['fit', fitCsv, '--periods', '4.2'], /--periods: expected "proposed" or M@TIME pairs such as 4\.0@1970-01-01, got "4\.2" \(pair 1\)/],
+      [['fit', fitCsv, '--periods', '4.2@2001-01-15,big@2005-01-01'], /--periods: expected .* got "big@2005-01-01" \(pair 2\)/],
+      [['fit', fitCsv, '--periods', '4.2@last spring'], /--periods: pair 1: expected an ISO 8601 time/],
       [['fit'], /expected exactly one CATALOG file/],
       [['fit', fitCsv, '--bogus'], /Unknown option '--bogus'/],
       [['sum', fitCsv], /expected "fit" or "felt" after "catalog", got "sum"/],
