@@ -7,9 +7,9 @@ import { parseMeasure } from '../engine/motion/measure.ts';
 /**
  * Most work one screening or map may ask for, counted as communities (or map points) x
  * ruptures x levels. Measured on the fast path on a 2-core machine (npm run bench, README
- * Performance): the demo study, 7.5e7, takes about 1.5 s, and the 10,000-point demo map,
- * 4.8e9, about 65 s; both run at 5e7 to 7e7 units a second. The budget, 2e10, admits about
- * five minutes of such a machine and refuses what would hold its threads for much longer.
+ * Performance): the demo study, 7.5e7, takes about 1.2 s, and the 10,000-point demo map,
+ * 4.8e9, about 61 s; both run at 6e7 to 8e7 units a second. The budget, 2e10, admits about
+ * four to five minutes of such a machine and refuses what would hold its threads for much longer.
  * TREMORA_WORK_BUDGET overrides it.
  */
 export const DEFAULT_WORK_BUDGET = 20_000_000_000;
