@@ -175,7 +175,11 @@ describe('the demo coast in a browser', { timeout: 180_000 }, () => {
     expect(await page.locator('tfoot .provenance').textContent()).toContain(results.provenance.inputHash.slice(0, 12));
     expect(await page.evaluate("getComputedStyle(document.querySelector('.handout-tools')).display")).toBe('none');
     await page.setViewportSize({ width: 794, height: 1123 });
-    await page.screenshot({ path: join(ARTIFACTS, 'handout-print.png'), fullPage: true });
+    // Nothing wider than the A4 width (794 px at 96 dpi) once laid out again; then the picture.
+    expect(await page.evaluate('document.documentElement.scrollWidth <= document.documentElement.clientWidth')).toBe(true);
+    // A viewport as tall as the handout: no scrollbar to take its width from the picture.
+    await page.setViewportSize({ width: 794, height: Number(await page.evaluate('document.documentElement.scrollHeight')) });
+    await page.screenshot({ path: join(ARTIFACTS, 'handout-print.png') });
     await page.emulateMedia({ media: 'screen' });
     await page.setViewportSize({ width: 1100, height: 900 });
     await checkView('handout');
