@@ -15,7 +15,7 @@ import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
 import { AGA16_CONSTANTS as K, AGA16_PGA, AGA16_SA, type Aga16Row } from './aga16-coefficients.ts';
 import { AGA16_INTERFACE_VALIDITY, AGA16_INTRASLAB_VALIDITY, aga16DeltaC1, aga16SiteTerm, type Aga16EventType } from './aga16.ts';
 import type { Measure } from './measure.ts';
-import { atLeast, createRowScratch, insideRange, periodRows, predictRows, singleMeasure, singleRow, type RowPlan } from './prepared-period.ts';
+import { atLeast, createRowScratch, insideRange, mapPlan, periodRows, plannedRows, predictRows, rowMemo, singleMeasure, singleRow, type RowPlan } from './prepared-period.ts';
 import type { DistanceName, PairDistances, PairPredictions, PreparedMotion, PreparedMotions, RuptureContext } from './types.ts';
 
 const NAME = 'AGA16';
@@ -150,19 +150,13 @@ export function prepareAga16Measures(ruptures: readonly RuptureContext[], measur
     if (m.kind === 'PGV') throw new UnsupportedMeasure('PGV', `${NAME} (Abrahamson, Gregor & Addo 2016) has no PGV equation; it predicts PGA and SA from 0.02 to 10 s`);
   }
   const columns = ruptureColumns(ruptures);
-  const terms = new Map<Aga16Row, RowTerms>();
-  const termsOf = (row: Aga16Row): RowTerms => {
-    let t = terms.get(row);
-    if (!t) terms.set(row, (t = rowTerms(row, columns)));
-    return t;
-  };
+  const termsOf = rowMemo((row: Aga16Row) => rowTerms(row, columns));
   const pga = termsOf(AGA16_PGA);
   const plans: RowPlan<RowTerms>[] = measures.map((m) => {
     if (m.kind !== 'SA') return singleRow(pga);
-    const plan = periodRows(NAME, SA_PERIODS_S, AGA16_SA, m.periodS);
-    return { lower: termsOf(plan.lower), upper: plan.upper && termsOf(plan.upper), fraction: plan.fraction };
+    return mapPlan(periodRows(NAME, SA_PERIODS_S, AGA16_SA, m.periodS), termsOf);
   });
-  const rows = [...new Set(plans.flatMap((plan) => (plan.upper ? [plan.lower.row, plan.upper.row] : [plan.lower.row])))];
+  const rows = plannedRows(plans).map((t) => t.row);
   const distances: DistanceName[] = [];
   if (columns.slab.some((s) => s === 0)) distances.push('rrupKm');
   if (columns.slab.some((s) => s === 1)) distances.push('rhypoKm');

@@ -25,7 +25,7 @@ import {
   type Bssa14Options,
 } from './bssa14.ts';
 import type { Measure } from './measure.ts';
-import { atLeast, createRowScratch, insideRange, periodRows, predictRows, singleMeasure, singleRow, type RowPlan } from './prepared-period.ts';
+import { atLeast, createRowScratch, insideRange, mapPlan, periodRows, plannedRows, predictRows, rowMemo, singleMeasure, singleRow, type RowPlan } from './prepared-period.ts';
 import type { PairDistances, PairPredictions, PreparedMotion, PreparedMotions, RuptureContext, SiteContext } from './types.ts';
 
 const NAME = 'BSSA14';
@@ -168,18 +168,12 @@ const SA_PERIODS_S: readonly number[] = BSSA14_SA.map((r) => r.periodS);
 export function prepareBssa14Measures(ruptures: readonly RuptureContext[], measures: readonly Measure[], options: Bssa14Options = {}): PreparedMotions {
   for (const m of measures) if (m.kind === 'SA' && !(m.periodS > 0)) throw new UnsupportedMeasure(`SA(${m.periodS})`, 'the period must be greater than 0 s');
   const columns = ruptureColumns(ruptures, options);
-  const terms = new Map<Bssa14Row, RowTerms>();
-  const termsOf = (row: Bssa14Row): RowTerms => {
-    let t = terms.get(row);
-    if (!t) terms.set(row, (t = rowTerms(row, columns)));
-    return t;
-  };
+  const termsOf = rowMemo((row: Bssa14Row) => rowTerms(row, columns));
   const plans: RowPlan<RowTerms>[] = measures.map((m) => {
     if (m.kind !== 'SA') return singleRow(termsOf(m.kind === 'PGA' ? BSSA14_PGA : BSSA14_PGV));
-    const plan = periodRows(NAME, SA_PERIODS_S, BSSA14_SA, m.periodS);
-    return { lower: termsOf(plan.lower), upper: plan.upper && termsOf(plan.upper), fraction: plan.fraction };
+    return mapPlan(periodRows(NAME, SA_PERIODS_S, BSSA14_SA, m.periodS), termsOf);
   });
-  const rows = [...terms.keys()];
+  const rows = plannedRows(plans).map((t) => t.row);
   const pgaAnelastic = BSSA14_PGA.c3 + K.deltaC3;
   const shared: SharedTerms = { rPgaKm: new Float64Array(0), lnRPga: new Float64Array(0), lnNonlinear: new Float64Array(0) };
   const scratch = createRowScratch();

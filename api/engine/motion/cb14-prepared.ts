@@ -29,7 +29,7 @@ import {
   type Cb14Mechanism,
 } from './cb14.ts';
 import type { Measure } from './measure.ts';
-import { atLeast, createRowScratch, insideRange, periodRows, predictRows, singleMeasure, singleRow, type RowPlan } from './prepared-period.ts';
+import { atLeast, createRowScratch, insideRange, mapPlan, periodRows, predictRows, rowMemo, singleMeasure, singleRow, type RowPlan } from './prepared-period.ts';
 import type { PairDistances, PairPredictions, PreparedMotion, PreparedMotions, RuptureContext, SiteContext } from './types.ts';
 
 const NAME = 'CB14';
@@ -289,17 +289,11 @@ const SA_PERIODS_S: readonly number[] = CB14_SA.map((r) => r.periodS);
 export function prepareCb14Measures(ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions {
   for (const m of measures) if (m.kind === 'SA' && !(m.periodS > 0)) throw new UnsupportedMeasure(`SA(${m.periodS})`, 'the period must be greater than 0 s');
   const columns = ruptureColumns(ruptures);
-  const terms = new Map<Cb14Row, RowTerms>();
-  const termsOf = (row: Cb14Row): RowTerms => {
-    let t = terms.get(row);
-    if (!t) terms.set(row, (t = rowTerms(row, columns)));
-    return t;
-  };
+  const termsOf = rowMemo((row: Cb14Row) => rowTerms(row, columns));
   const pga = termsOf(CB14_PGA);
   const plans: RowPlan<RowTerms>[] = measures.map((m) => {
     if (m.kind !== 'SA') return singleRow(m.kind === 'PGA' ? pga : termsOf(CB14_PGV));
-    const plan = periodRows(NAME, SA_PERIODS_S, CB14_SA, m.periodS);
-    return { lower: termsOf(plan.lower), upper: plan.upper && termsOf(plan.upper), fraction: plan.fraction };
+    return mapPlan(periodRows(NAME, SA_PERIODS_S, CB14_SA, m.periodS), termsOf);
   });
   const anyFloored = plans.some((plan) => isFloored(plan.lower.row) || (plan.upper !== undefined && isFloored(plan.upper.row)));
   const rockSite = cb14SiteTerm(CB14_PGA, CB14_ROCK_VS30, 0);

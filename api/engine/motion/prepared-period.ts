@@ -27,6 +27,26 @@ export function periodRows<Row>(modelName: string, periodsS: readonly number[], 
   return fraction === 0 ? singleRow(rows[lower] as Row) : { lower: rows[lower] as Row, upper: rows[upper] as Row, fraction };
 }
 
+/** The same plan over what `f` makes of each row (a model's per-rupture terms of that row). */
+export const mapPlan = <Row, Terms>(plan: RowPlan<Row>, f: (row: Row) => Terms): RowPlan<Terms> => ({
+  lower: f(plan.lower),
+  upper: plan.upper === undefined ? undefined : f(plan.upper),
+  fraction: plan.fraction,
+});
+
+/** The distinct rows the plans read, in the order they first appear. */
+export const plannedRows = <Row>(plans: readonly RowPlan<Row>[]): Row[] => [...new Set(plans.flatMap((plan) => (plan.upper === undefined ? [plan.lower] : [plan.lower, plan.upper])))];
+
+/** `build` made once per row however many measures ask for it (a row's terms cost a pass over the ruptures). */
+export function rowMemo<Row, Terms>(build: (row: Row) => Terms): (row: Row) => Terms {
+  const made = new Map<Row, Terms>();
+  return (row) => {
+    let terms = made.get(row);
+    if (terms === undefined) made.set(row, (terms = build(row)));
+    return terms;
+  };
+}
+
 /** The upper row's predictions of interpolated measures, reused from call to call (it grows when a call has more pairs). */
 export interface RowScratch {
   buffer: PairPredictions;
