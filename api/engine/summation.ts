@@ -22,6 +22,9 @@ export function accumulate(acc: LevelAccumulator, index: number, value: number):
   acc.sum[index] = t;
 }
 
+/** The compensated total of slot `index`. */
+export const accumulatedTotal = (acc: LevelAccumulator, index: number): number => (acc.sum[index] as number) + (acc.compensation[index] as number);
+
 /** The compensated totals, one per slot. */
 export function accumulatedTotals(acc: LevelAccumulator): number[] {
   return Array.from(acc.sum, (s, i) => s + (acc.compensation[i] as number));

@@ -1,5 +1,5 @@
 import type { Deaggregation, DeaggregationBin } from '../results.ts';
-import { compensatedSum } from '../summation.ts';
+import { accumulate, accumulatedTotal, compensatedSum, createLevelAccumulator } from '../summation.ts';
 import { DISTANCE_EDGES_KM, EPSILON_EDGES, distanceBin, distanceBinRange, epsilonBin, epsilonBinRange, magnitudeBin, magnitudeBinRange } from './deaggregation-bins.ts';
 import type { BranchPredictions } from './fast-site-hazard.ts';
 import type { RuptureTable } from './rupture-table.ts';
@@ -38,14 +38,6 @@ const distanceBinOf = (distanceKm: number): number => {
   const step = Math.floor(distanceKm / DISTANCE_STEP_KM);
   return step >= 0 && step < DISTANCE_LOOKUP.length ? (DISTANCE_LOOKUP[step] as number) : distanceBin(distanceKm);
 };
-
-/** One Neumaier (1974) step on slot i of a pair of running sum and compensation columns. */
-function accumulateAt(sum: Float64Array, compensation: Float64Array, i: number, value: number): void {
-  const s = sum[i] as number;
-  const t = s + value;
-  compensation[i] = (compensation[i] as number) + (Math.abs(s) >= Math.abs(value) ? s - t + value : value - t + s);
-  sum[i] = t;
-}
 
 /**
  * deaggregate (deaggregation.ts) over the fast path's predictions: the same contributions
@@ -96,12 +88,9 @@ export function fastDeaggregate(options: FastDeaggregationOptions): Deaggregatio
 
   const distanceBins = maxR + 1;
   const binCount = (maxM - minM + 1) * distanceBins * EPSILON_BINS;
-  const binSum = new Float64Array(binCount * SLOTS);
-  const binCompensation = new Float64Array(binCount * SLOTS);
-  const overallSum = new Float64Array(SLOTS);
-  const overallCompensation = new Float64Array(SLOTS);
-  const sourceSum = new Float64Array(table.sourceIds.length);
-  const sourceCompensation = new Float64Array(table.sourceIds.length);
+  const binSums = createLevelAccumulator(binCount * SLOTS);
+  const overall = createLevelAccumulator(SLOTS);
+  const sourceSums = createLevelAccumulator(table.sourceIds.length);
   const sourceSeen = new Uint8Array(table.sourceIds.length);
   at = 0;
   for (const { ruptureIndex, rrupKm } of branches) {
@@ -114,27 +103,27 @@ export function fastDeaggregate(options: FastDeaggregationOptions): Deaggregatio
       const distanceKm = rrupKm[k] as number;
       const bin = (((magnitudeBinOf[at] as number) - minM) * distanceBins + (distanceBinOfPair[at] as number)) * EPSILON_BINS + epsilonBin(epsilon);
       const slot = bin * SLOTS;
-      accumulateAt(binSum, binCompensation, slot, c);
-      accumulateAt(binSum, binCompensation, slot + 1, c * magnitude);
-      accumulateAt(binSum, binCompensation, slot + 2, c * distanceKm);
-      accumulateAt(binSum, binCompensation, slot + 3, c * epsilon);
-      accumulateAt(overallSum, overallCompensation, 0, c);
-      accumulateAt(overallSum, overallCompensation, 1, c * magnitude);
-      accumulateAt(overallSum, overallCompensation, 2, c * distanceKm);
-      accumulateAt(overallSum, overallCompensation, 3, c * epsilon);
+      accumulate(binSums, slot, c);
+      accumulate(binSums, slot + 1, c * magnitude);
+      accumulate(binSums, slot + 2, c * distanceKm);
+      accumulate(binSums, slot + 3, c * epsilon);
+      accumulate(overall, 0, c);
+      accumulate(overall, 1, c * magnitude);
+      accumulate(overall, 2, c * distanceKm);
+      accumulate(overall, 3, c * epsilon);
       const source = table.sourceIndex[i] as number;
       sourceSeen[source] = 1;
-      accumulateAt(sourceSum, sourceCompensation, source, c);
+      accumulate(sourceSums, source, c);
     }
   }
 
-  const total = (overallSum[0] as number) + (overallCompensation[0] as number);
+  const total = accumulatedTotal(overall, 0);
   if (!(total > 0)) return null;
-  const mean = (slot: number): number => ((overallSum[slot] as number) + (overallCompensation[slot] as number)) / total;
+  const mean = (slot: number): number => accumulatedTotal(overall, slot) / total;
 
-  const totalAt = (slot: number): number => (binSum[slot] as number) + (binCompensation[slot] as number);
+  const totalAt = (slot: number): number => accumulatedTotal(binSums, slot);
   const filled: number[] = [];
-  for (let bin = 0; bin < binCount; bin++) if ((binSum[bin * SLOTS] as number) > 0) filled.push(bin);
+  for (let bin = 0; bin < binCount; bin++) if ((binSums.sum[bin * SLOTS] as number) > 0) filled.push(bin);
   const shareSum = compensatedSum(filled.map((bin) => totalAt(bin * SLOTS)));
   // The first of equal largest bins, in the listed order, so the mode is deterministic (as deaggregation.ts).
   let modal = filled[0] as number;
@@ -156,7 +145,7 @@ export function fastDeaggregate(options: FastDeaggregationOptions): Deaggregatio
   sourceSeen.forEach((seen, sourceIndex) => {
     if (!seen) return;
     const sourceId = table.sourceIds[sourceIndex] as string;
-    sources.push({ sourceId, name: options.sourceNames[sourceIndex] ?? sourceId, rate: (sourceSum[sourceIndex] as number) + (sourceCompensation[sourceIndex] as number) });
+    sources.push({ sourceId, name: options.sourceNames[sourceIndex] ?? sourceId, rate: accumulatedTotal(sourceSums, sourceIndex) });
   });
   const sourceTotal = compensatedSum(sources.map((s) => s.rate));
   const bySource = sources
