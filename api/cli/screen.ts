@@ -16,8 +16,8 @@ export const SCREEN_USAGE = `tremora screen STUDY [--out FILE] [--format json|cs
 Screens every community of a study: hazard curves, levels at the return periods, chances over
 the horizons, intensity, deaggregation, nearest faults and the screening band.
   --out FILE          write the results there (JSON by default; --format csv for a table)
-  --format FMT        json (every result, DESIGN.md's keys) or csv (one row per community)
-  --json              print only the JSON results on stdout
+  --format FMT        json (every result, with the keys of README's Results) or csv (one row per community)
+  --json              print only the JSON results on stdout (also with --out, which still writes)
 Screening estimates only, not design values: building codes and licensed engineers decide.`;
 
 export async function screenVerb(args: readonly string[], io: Io): Promise<number> {
@@ -49,13 +49,13 @@ export async function screenVerb(args: readonly string[], io: Io): Promise<numbe
     provenance: buildProvenance({ study, toolVersion: TOOL_VERSION, inputHash: inputHash(study), startedAt, finishedAt: new Date().toISOString() }),
   };
   const text = format === 'csv' ? runCsv(study, result) : `${JSON.stringify(result, null, 2)}\n`;
+  if (values.out) {
+    await writeFile(values.out, text);
+    if (!values.json) io.err(`wrote ${values.out} (${format})`);
+  }
   if (values.json) {
     io.out(text);
     return EXIT_OK;
-  }
-  if (values.out) {
-    await writeFile(values.out, text);
-    io.err(`wrote ${values.out} (${format})`);
   }
 
   const chance = (p: number | undefined) => (p === undefined ? '' : `${sig(p * 100, 2)}%`);
