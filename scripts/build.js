@@ -5,12 +5,15 @@
 // version, the demo data, the SQL migrations, the page styles and script) are copied so that
 // every relative path stays the same as in the source tree.
 import { cpSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { join, relative } from 'node:path';
+import { join, relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { build } from 'esbuild';
 
 const ROOT = fileURLToPath(new URL('..', import.meta.url));
-const OUT = join(ROOT, 'dist');
+// `--out DIR` builds elsewhere (the tests build a copy of their own); it must lie inside the
+// project so that the compiled modules find node_modules.
+const outAt = process.argv.indexOf('--out');
+const OUT = outAt > 0 && process.argv[outAt + 1] ? resolve(process.argv[outAt + 1]) : join(ROOT, 'dist');
 
 function sourceFiles(dir) {
   return readdirSync(join(ROOT, dir), { withFileTypes: true }).flatMap((entry) => {

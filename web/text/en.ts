@@ -183,6 +183,7 @@ export const EN = {
   'community.handout': 'Print the handout',
   'community.scenario': 'Try a scenario for this place',
   'community.noRun': 'This community has no results yet. Screen the study first.',
+  'community.runUnderWay': 'The screening of this study is under way ({percent}% done): the results for this community will be here when it finishes, in a minute or two. Reload this page then.',
   'community.site': 'Ground: Vs30 {vs30} m/s ({basis}).',
   'community.site.measured': 'given',
   'community.site.site-class': 'from site class {siteClass}',
