@@ -1,7 +1,7 @@
 import { writeFile } from 'node:fs/promises';
 import { parseArgs } from 'node:util';
 import { modelCatalog } from '../engine/motion/registry.ts';
-import type { StudyResult } from '../engine/results.ts';
+import type { NearestFault, StudyResult } from '../engine/results.ts';
 import { screenStudy } from '../engine/screen-study.ts';
 import { inputHash } from '../results/input-hash.ts';
 import { buildProvenance } from '../results/provenance.ts';
@@ -19,6 +19,11 @@ the horizons, intensity, deaggregation, nearest faults and the screening band.
   --format FMT        json (every result, with the keys of README's Results) or csv (one row per community)
   --json              print only the JSON results on stdout (also with --out, which still writes)
 Screening estimates only, not design values: building codes and licensed engineers decide.`;
+
+/** "12 km away" or, for a fault beneath the place, "38 km below" (its depth there). */
+function faultWhere(fault: NearestFault): string {
+  return fault.depthBelowKm === undefined ? `${sig(fault.distanceKm, 2)} km away` : `${sig(fault.depthBelowKm, 2)} km below`;
+}
 
 export async function screenVerb(args: readonly string[], io: Io): Promise<number> {
   const { values, positionals } = parseArgs({
@@ -67,7 +72,7 @@ export async function screenVerb(args: readonly string[], io: Io): Promise<numbe
     const fault = c.nearestFaults[0];
     io.out(
       `${c.name.padEnd(22)}${c.band.label.padEnd(20)}${(pga == null ? 'n/a' : `${sig(pga, 2)} g`).padStart(12)}${(mmi?.roman ?? 'n/a').padStart(9)}` +
-        `${chance(c.intensity.chanceOfReaching['50']?.VII).padStart(16)}  ${fault ? `${fault.name} ${sig(fault.distanceKm, 2)} km` : ''}`,
+        `${chance(c.intensity.chanceOfReaching['50']?.VII).padStart(16)}  ${fault ? `${fault.name} ${faultWhere(fault)}` : ''}`,
     );
   }
   for (const w of result.warnings) io.err(`note: ${w}`);

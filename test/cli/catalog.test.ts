@@ -191,7 +191,7 @@ describe('tremora catalog fit', () => {
       [['fit', fitCsv, '--periods', '4.2@2001-01-15,big@2005-01-01'], /--periods: expected .* got "big@2005-01-01" \(pair 2\)/],
       [['fit', fitCsv, '--periods', '4.2@last spring'], /--periods: pair 1: expected an ISO 8601 time/],
       [['fit'], /expected exactly one CATALOG file/],
-      [['fit', fitCsv, '--bogus'], /Unknown option '--bogus'/],
+      [['fit', fitCsv, '--bogus'], /unknown option "--bogus"/],
       [['sum', fitCsv], /expected "fit" or "felt" after "catalog", got "sum"/],
     ];
     for (const [argv, message] of cases) {
