@@ -101,7 +101,8 @@ describe('tremora catalog fit', () => {
     expect(bins.map((b) => b.cumulativeCount)).toEqual([12, 8, 7, 5, 4, 3, 3, 2, 2, 1, 1]);
     bins.forEach((b) => expectRelative(b.cumulativeAnnualRate, b.cumulativeCount / SPAN_YEARS, 1e-12, `cumulative count / T at ${b.lowerEdge}`));
     expect(fit.recurrence).toBeNull();
-    expect(fit.notes).toContain('no recurrence: give the largest magnitude the zone can host (mMax; --m-max on the command line), which a catalog cannot tell');
+    // The command line names its own options, not the service's keys.
+    expect(fit.notes).toContain('no recurrence: give the largest magnitude the zone can host (--m-max), which a catalog cannot tell');
   });
 
   it('reads every magnitude type with --all-magnitudes, keeps aftershocks with --no-decluster', async () => {
