@@ -117,6 +117,25 @@ describe('tremora motion --json', () => {
     expect(unknown.err).toContain('unknown ground-motion model "NOPE"');
   });
 
+  it('for the subduction model: the hypocentral distance it used, only the assumptions it reads, a derived PGV said so', async () => {
+    const slab = await run('motion', '--model', 'AGA16', '--magnitude', '7', '--rjb', '30', '--setting', 'intraslab');
+    expect(slab.code).toBe(0);
+    // Default intraslab hypocentral depth 60 km: Rhypo = sqrt(30² + 60²) = 67.08 km (geometry).
+    expect(slab.out).toContain("distance in the model's equations: Rhypo (hypocentral) 67.1 km");
+    expect(slab.out).toContain('Rhypo 67.1 km');
+    const iface = await run('motion', '--model', 'AGA16', '--magnitude', '8', '--rjb', '0', '--rrup', '40', '--setting', 'interface');
+    expect(iface.out).toContain("distance in the model's equations: Rrup 40 km");
+    const assumed = iface.out.split('\n').find((l) => l.startsWith('assumed:')) ?? '';
+    // Abrahamson et al. (2016) interface equations read M, Rrup and Vs30 only.
+    expect(assumed).not.toMatch(/hypoDepthKm|dipDeg|widthKm|rxKm|mechanism/);
+    expect(iface.out).toMatch(/not read by AGA16 for interface earthquakes: .*hypoDepthKm/);
+    expect(iface.out).toMatch(/PGV .*derived, not predicted by the model: PGV derived from SA\(0\.5 s\) \/ 20 \(Bommer & Alarcón 2006\)/);
+    const json = JSON.parse((await run('motion', '--model', 'AGA16', '--magnitude', '8', '--rjb', '0', '--rrup', '40', '--setting', 'interface', '--json')).out);
+    expect(json.distanceUsed).toBe('rrupKm');
+    expect(json.measures.PGV.derived).toMatch(/Bommer & Alarcón 2006/);
+    expect(json.measures.PGA.derived).toBeNull();
+  });
+
   it('takes a model name in any case', async () => {
     const lower = JSON.parse((await run('motion', '--model', 'cornell79', '--magnitude', '6.5', '--rjb', '20', '--json')).out);
     expect(lower.model).toBe('Cornell79');
