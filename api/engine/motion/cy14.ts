@@ -19,7 +19,8 @@
  *   ln y = ln y_ref + φ1 min(ln(Vs30/1130), 0)
  *        + φ2 [e^(φ3 (min(Vs30, 1130) − 360)) − e^(φ3 (1130 − 360))] ln((y_ref + φ4)/φ4)
  *        + φ5 (1 − e^(−ΔZ1/φ6)),  ΔZ1 = Z1 − μZ1 (m),
- *   ln μZ1 = −7.15/4 ln((Vs30⁴ + 571⁴)/(1360⁴ + 571⁴)) (Z1 in m), the paper's California relation;
+ *   ln μZ1 = −7.15/4 ln((Vs30⁴ + 570.94⁴)/(1360⁴ + 570.94⁴)) (Z1 in m), the paper's California relation
+ *   (570.94 m/s as the reference vectors have it: 571 reproduces their Z1 only to 7e-4 relative);
  *   where the site gives no Z1, Z1 = μZ1 and the basin term is 0.
  * Mechanism from rake as the paper classes it: reverse 30° ≤ λ ≤ 150°, normal −120° ≤ λ ≤ −60°,
  * otherwise strike-slip (a rake of −45° is strike-slip here and normal in ASK14, BSSA14 and CB14).
@@ -153,7 +154,7 @@ export function cy14PathTerm(t: Cy14RuptureTerms, d: Cy14Distances): number {
 
 /** The paper's California mean Z1 (km) for Vs30 in m/s. */
 export function cy14DefaultZ1Km(vs30: number): number {
-  return Math.exp((-7.15 / 4) * Math.log((vs30 ** 4 + 571 ** 4) / (1360 ** 4 + 571 ** 4))) / 1000;
+  return Math.exp((-7.15 / 4) * Math.log((vs30 ** 4 + 570.94 ** 4) / (1360 ** 4 + 570.94 ** 4))) / 1000;
 }
 
 /** The nonlinear site factor's Vs30 part: φ2 [e^(φ3 (min(Vs30, 1130) − 360)) − e^(φ3 (1130 − 360))]. */
