@@ -1,5 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { runCli } from '../../../api/cli.ts';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import { ASK14_COLUMNS, ASK14_CONSTANTS, ASK14_PGA, ASK14_PGV, ASK14_SA, type Ask14Row } from '../../../api/engine/motion/ask14-coefficients.ts';
 import {
@@ -16,6 +17,7 @@ import type { Measure } from '../../../api/engine/motion/measure.ts';
 import { probeMotion } from '../../../api/engine/motion/probe.ts';
 import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
+import { readProbeRequest } from '../../../api/service/probe-request.ts';
 import { expectClose } from '../../helpers/close.ts';
 import { inputOf, measureOf, readReferenceVectors } from './reference-vector-cases.ts';
 
@@ -235,12 +237,17 @@ describe('ASK14: properties', () => {
     expect(() => ask14.predict(input({ z1Km: -1 }), PGA)).toThrow(/z1Km/);
   });
 
-  it('is in the registry, so studies, `tremora motion` and /api/probe can name it', () => {
+  it('is in the registry, so studies, `tremora motion` and /api/probe can name it', async () => {
     expect(modelCatalog.get('ASK14')).toBe(ask14);
-    const result = probeMotion({ model: 'ASK14', magnitude: 6.5, rjbKm: 20 }, modelCatalog);
+    const request = readProbeRequest({ model: 'ASK14', magnitude: 6.5, rjbKm: 20 }, modelCatalog);
+    const result = probeMotion(request, modelCatalog);
     expect(Object.keys(result.measures)).toEqual(['PGA', 'PGV', 'SA(0.2)', 'SA(1.0)']);
     expect(result.measures.PGA?.median).toBeCloseTo(Math.exp(ask14.predict(result.input, PGA).lnMedian), 12);
     expect(ask14.distanceMetric).toBe('rrup');
     expect(ask14.settings).toEqual(['crustal']);
+    let out = '';
+    const code = await runCli(['motion', '--model', 'ASK14', '--magnitude', '6.5', '--rjb', '20', '--json'], { out: (t) => (out += t), err: () => undefined });
+    expect(code).toBe(0);
+    expect((JSON.parse(out) as { model: string; measures: Record<string, { median: number }> }).measures.PGA?.median).toBe(result.measures.PGA?.median);
   });
 });

@@ -1,5 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { runCli } from '../../../api/cli.ts';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import { CY14_COLUMNS, CY14_PGA, CY14_PGV, CY14_SA, type Cy14Row } from '../../../api/engine/motion/cy14-coefficients.ts';
 import {
@@ -15,6 +16,7 @@ import type { Measure } from '../../../api/engine/motion/measure.ts';
 import { probeMotion } from '../../../api/engine/motion/probe.ts';
 import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
+import { readProbeRequest } from '../../../api/service/probe-request.ts';
 import { expectClose } from '../../helpers/close.ts';
 import { inputOf, measureOf, readReferenceVectors } from './reference-vector-cases.ts';
 
@@ -223,12 +225,17 @@ describe('CY14: properties', () => {
     expect(() => cy14.predict(input({ z1Km: -1 }), PGA)).toThrow(/z1Km/);
   });
 
-  it('is in the registry, so studies, `tremora motion` and /api/probe can name it', () => {
+  it('is in the registry, so studies, `tremora motion` and /api/probe can name it', async () => {
     expect(modelCatalog.get('CY14')).toBe(cy14);
-    const result = probeMotion({ model: 'CY14', magnitude: 6.5, rjbKm: 20 }, modelCatalog);
+    const request = readProbeRequest({ model: 'CY14', magnitude: 6.5, rjbKm: 20 }, modelCatalog);
+    const result = probeMotion(request, modelCatalog);
     expect(Object.keys(result.measures)).toEqual(['PGA', 'PGV', 'SA(0.2)', 'SA(1.0)']);
     expect(result.measures.PGA?.median).toBeCloseTo(Math.exp(cy14.predict(result.input, PGA).lnMedian), 12);
     expect(cy14.distanceMetric).toBe('rrup');
     expect(cy14.settings).toEqual(['crustal']);
+    let out = '';
+    const code = await runCli(['motion', '--model', 'CY14', '--magnitude', '6.5', '--rjb', '20', '--json'], { out: (t) => (out += t), err: () => undefined });
+    expect(code).toBe(0);
+    expect((JSON.parse(out) as { model: string; measures: Record<string, { median: number }> }).measures.PGA?.median).toBe(result.measures.PGA?.median);
   });
 });
