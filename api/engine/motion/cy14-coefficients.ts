@@ -4,9 +4,9 @@
  * Earthquake Spectra 30(3), 1117–1153, doi:10.1193/072813EQS219M.
  *
  * Source of the numbers: the paper's tables of coefficients (median and aleatory-variability
- * models) as updated in the NGA-West2 model spreadsheet v5.7 (2015-04-14) of its electronic
- * supplement, rows PGV, PGA and the 24 spectral periods 0.01–10 s, copied digit for digit from
- * `../shared/reference/gmm/cy14.csv` (the PGA row equals the 0.01 s row, as published). That
+ * models) in the values of the NGA-West2 model spreadsheet v5.7 (2015-04-14), from which the
+ * reference record was updated; rows PGV, PGA and the 24 spectral periods 0.01–10 s, copied
+ * digit for digit from `../shared/reference/gmm/cy14.csv` (the PGA row equals the 0.01 s row, as published). That
  * reference README records the provenance: the table was taken from a public record of the
  * spreadsheet's coefficients and cross-checked cell by cell against two further independent
  * records (1170 cells each) with no differences.
@@ -14,7 +14,7 @@
  * Every column of the published table is kept, also the ones Tremora does not use: the
  * regional terms of Japan, Italy and Wenchuan (phi1Jp, phi5Jp, phi6Jp, sigma2Jp, gammaJpIt,
  * gammaWn) and the directivity coefficients c8, c8a, c8b (Tremora evaluates the model with
- * ΔDPP = 0, as the paper does where directivity is not modelled).
+ * ΔDPP = 0: no directivity adjustment).
  *
  * How the table is checked: test/engine/motion/cy14.test.ts reproduces the independent test
  * vectors of `../shared/reference/gmm/vectors/cy14.json` (copied to

@@ -6,7 +6,7 @@
  *
  * The reference motion (Vs30 = 1130 m/s), California/global form (γ factors 1), directivity off
  * (ΔDPP = 0), as transcribed here from memory of the paper and checked against the reference
- * vectors (see below); cosh terms written ch(x) = cosh(2 max(M − 4.5, 0)):
+ * vectors (see below); with ch = cosh(2 max(M − 4.5, 0)):
  *   ln y_ref = c1 + (c1a + c1c/ch) F_RV + (c1b + c1d/ch) F_NM + (c7 + c7b/ch) ΔZtor
  *            + (c11 + c11b/ch) cos²δ + c2 (M − 6) + (c2 − c3)/cn ln(1 + e^(cn (cM − M)))
  *            + c4 ln(Rrup + c5 cosh(c6 max(M − cHM, 0))) + (c4a − c4) ln √(Rrup² + cRB²)
