@@ -356,6 +356,7 @@ export const EN = {
   'map.legend': 'Legend',
   'map.land': 'Land',
   'map.sea': 'Sea',
+  'map.noOutline': 'No coastline: the study has no outline, so land and sea are not drawn',
   'map.fault': 'Fault (line on the surface)',
   'map.interface': 'Subduction interface (top edge)',
   'map.zone': 'Zone of scattered earthquakes',
