@@ -156,10 +156,8 @@ export function fitCatalog(events: readonly CatalogEvent[], options: CatalogFitO
 
   let recurrence: ZoneRecurrence | undefined;
   if (options.mMax === undefined) notes.push(`no recurrence: give the largest magnitude the zone can host (${names.mMax}), which a catalog cannot tell`);
-  else if (weichert) {
-    notes.push(`the Weichert (1980) fit counts every magnitude bin up to ${names.mMax} ${options.mMax}, the empty ones too, so ${names.mMax} changes its b-value`);
-  }
   else {
+    if (weichert) notes.push(`the Weichert (1980) fit counts every magnitude bin up to ${names.mMax} ${options.mMax}, the empty ones too, so ${names.mMax} changes its b-value`);
     recurrence = zoneRecurrence(fitted, {
       ...common,
       rings,

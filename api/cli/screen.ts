@@ -20,6 +20,9 @@ the horizons, intensity, deaggregation, nearest faults and the screening band.
   --json              print only the JSON results on stdout (also with --out, which still writes)
 Screening estimates only, not design values: building codes and licensed engineers decide.`;
 
+/** PGA in one precision down the column: two decimals (0.50, 0.26), two significant figures below 0.01 g. */
+const pgaText = (g: number): string => (g >= 0.01 ? g.toFixed(2) : sig(g, 2));
+
 /** "12 km away" or, for a fault beneath the place, "38 km below" (its depth there). */
 function faultWhere(fault: NearestFault): string {
   return fault.depthBelowKm === undefined ? `${sig(fault.distanceKm, 2)} km away` : `${sig(fault.depthBelowKm, 2)} km below`;
@@ -71,7 +74,7 @@ export async function screenVerb(args: readonly string[], io: Io): Promise<numbe
     const mmi = c.intensity.atReturnPeriod['475'];
     const fault = c.nearestFaults[0];
     io.out(
-      `${c.name.padEnd(22)}${c.band.label.padEnd(20)}${(pga == null ? 'n/a' : `${sig(pga, 2)} g`).padStart(12)}${(mmi?.roman ?? 'n/a').padStart(9)}` +
+      `${c.name.padEnd(22)}${c.band.label.padEnd(20)}${(pga == null ? 'n/a' : `${pgaText(pga)} g`).padStart(12)}${(mmi?.roman ?? 'n/a').padStart(9)}` +
         `${chance(c.intensity.chanceOfReaching['50']?.VII).padStart(16)}  ${fault ? `${fault.name} ${faultWhere(fault)}` : ''}`,
     );
   }

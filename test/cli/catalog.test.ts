@@ -145,6 +145,13 @@ describe('tremora catalog fit', () => {
     );
   });
 
+  it('with completeness periods and --m-max, says that --m-max changes the Weichert b, and names no service key', async () => {
+    const fit = await runJson<FitJson & { notes: string[]; warnings: string[] }>('fit', fitCsv, '--m-max', '7', '--periods', '4.0@2001-01-01');
+    expect(fit.recurrence?.method).toBe('weichert');
+    expect(fit.notes).toContain('the Weichert (1980) fit counts every magnitude bin up to --m-max 7, the empty ones too, so --m-max changes its b-value');
+    expect([...fit.notes, ...fit.warnings].join(' ')).not.toMatch(/startTime|endTime|mMax\b/);
+  });
+
   it('takes the observation span from --start and --end', async () => {
     const fit = await runJson<FitJson>('fit', fitCsv, '--start', '2001-01-01', '--end', '2013-01-01');
     // 2001-01-01 to 2013-01-01 is 4383 days: exactly 12 Julian years; 7 events over it.
