@@ -100,3 +100,24 @@ export function elevationSampler(grid: ElevationGrid): (lonLat: LonLat) => numbe
     return elevationAt(grid, x, y);
   };
 }
+
+/** The grid's own x, y back to WGS84 [lon, lat]. */
+export function gridToLonLat(grid: ElevationGrid): (x: number, y: number) => LonLat {
+  const { crs } = grid;
+  if (crs.kind === 'lonlat') return (x, y) => [((((x + 180) % 360) + 360) % 360) - 180, y];
+  const converter = proj4('EPSG:4326', crs.proj4);
+  return (x, y) => converter.inverse([x, y]) as unknown as LonLat;
+}
+
+/** Points along the edge of the grid's cell-centre extent, WGS84, `perSide` to a side. */
+export function gridOutline(grid: ElevationGrid, perSide = 24): LonLat[] {
+  const toLonLat = gridToLonLat(grid);
+  const x0 = grid.west + grid.cellWidth / 2, x1 = grid.west + (grid.columns - 0.5) * grid.cellWidth;
+  const y0 = grid.north - grid.cellHeight / 2, y1 = grid.north - (grid.rows - 0.5) * grid.cellHeight;
+  const points: LonLat[] = [];
+  for (let k = 0; k < perSide; k += 1) {
+    const f = k / perSide;
+    points.push(toLonLat(x0 + f * (x1 - x0), y0), toLonLat(x1, y0 + f * (y1 - y0)), toLonLat(x1 - f * (x1 - x0), y1), toLonLat(x0, y1 - f * (y1 - y0)));
+  }
+  return points;
+}

@@ -53,24 +53,29 @@ export function fastMarching(grid: FastMarchingGrid, start: readonly StartCell[]
     }
   }
 
-  // Time of cell i from its accepted neighbours along one axis (dx = ±1 or ±columns).
-  const axis = (i: number, step: number, first: boolean, secondOk: boolean): { t1: number; t2: number } => {
-    const n1 = i + step;
-    if (!first || state[n1] !== ACCEPTED) return { t1: Infinity, t2: Infinity };
-    const t1 = time[n1] as number;
-    const n2 = n1 + step;
-    const t2 = secondOk && state[n2] === ACCEPTED ? (time[n2] as number) : Infinity;
-    return { t1, t2 };
+  // The upwind neighbours of cell i along one axis (step ±1 or ±columns): the accepted first
+  // neighbour with the smaller time, and the next one beyond it when accepted too (else Infinity).
+  let t1 = Infinity, t2 = Infinity;
+  const axis = (i: number, step: number, lowOk: boolean, lowOk2: boolean, highOk: boolean, highOk2: boolean) => {
+    t1 = Infinity;
+    t2 = Infinity;
+    if (lowOk && state[i - step] === ACCEPTED) {
+      t1 = time[i - step] as number;
+      if (lowOk2 && state[i - 2 * step] === ACCEPTED) t2 = time[i - 2 * step] as number;
+    }
+    if (highOk && state[i + step] === ACCEPTED && (time[i + step] as number) < t1) {
+      t1 = time[i + step] as number;
+      t2 = highOk2 && state[i + 2 * step] === ACCEPTED ? (time[i + 2 * step] as number) : Infinity;
+    }
   };
 
   const update = (i: number) => {
     const c = i % columns;
     const r = (i - c) / columns;
-    const west = axis(i, -1, c > 0, c > 1);
-    const east = axis(i, 1, c < columns - 1, c < columns - 2);
-    const north = axis(i, -columns, r > 0, r > 1);
-    const south = axis(i, columns, r < rows - 1, r < rows - 2);
-    const t = solveUpdate(pick(west, east), pick(north, south), (slowness[i] as number) * h);
+    axis(i, 1, c > 0, c > 1, c < columns - 1, c < columns - 2);
+    const x1 = t1, x2 = t2;
+    axis(i, columns, r > 0, r > 1, r < rows - 1, r < rows - 2);
+    const t = solveUpdate(x1, x2, t1, t2, (slowness[i] as number) * h);
     if (t < (time[i] as number)) {
       time[i] = t;
       if (state[i] === TRIAL) heap.decreased(i);
@@ -97,37 +102,25 @@ export function fastMarching(grid: FastMarchingGrid, start: readonly StartCell[]
   }
 }
 
-/** The upwind side of one axis: the smaller first neighbour, with its second when usable. */
-function pick(a: { t1: number; t2: number }, b: { t1: number; t2: number }): { t1: number; t2: number } {
-  return a.t1 <= b.t1 ? a : b;
-}
-
 /**
  * Solves Σ_axes a_k (T − τ_k)² = (s h)² for the larger root, where per axis a_k = 1 and τ_k = t1
  * (first order) or a_k = 9/4 and τ_k = (4 t1 − t2) / 3 (second order, when t2 ≤ t1). When two
- * axes give no real root no smaller than both τ, the one-axis answer of the earlier axis is
+ * axes give no real root no smaller than both τ, the one-axis answer of the nearer axis is
  * taken (the front passes along that axis only).
  */
-function solveUpdate(x: { t1: number; t2: number }, y: { t1: number; t2: number }, sh: number): number {
-  const terms: { a: number; tau: number }[] = [];
-  for (const side of [x, y]) {
-    if (side.t1 === Infinity) continue;
-    if (side.t2 <= side.t1) terms.push({ a: 9 / 4, tau: (4 * side.t1 - side.t2) / 3 });
-    else terms.push({ a: 1, tau: side.t1 });
-  }
-  if (terms.length === 0) return Infinity;
-  terms.sort((p, q) => p.tau - q.tau);
-  const one = (k: { a: number; tau: number }) => k.tau + sh / Math.sqrt(k.a);
-  const first = terms[0] as { a: number; tau: number };
-  const second = terms[1];
-  if (second === undefined) return one(first);
-  const sumA = first.a + second.a;
-  const sumAT = first.a * first.tau + second.a * second.tau;
-  const sumAT2 = first.a * first.tau * first.tau + second.a * second.tau * second.tau;
-  const disc = sumAT * sumAT - sumA * (sumAT2 - sh * sh);
-  if (disc < 0) return one(first);
+function solveUpdate(x1: number, x2: number, y1: number, y2: number, sh: number): number {
+  if (x1 === Infinity && y1 === Infinity) return Infinity;
+  const ax = x2 <= x1 ? 9 / 4 : 1, tx = x2 <= x1 ? (4 * x1 - x2) / 3 : x1;
+  const ay = y2 <= y1 ? 9 / 4 : 1, ty = y2 <= y1 ? (4 * y1 - y2) / 3 : y1;
+  if (y1 === Infinity) return tx + sh / Math.sqrt(ax);
+  if (x1 === Infinity) return ty + sh / Math.sqrt(ay);
+  const oneAxis = tx <= ty ? tx + sh / Math.sqrt(ax) : ty + sh / Math.sqrt(ay);
+  const sumA = ax + ay;
+  const sumAT = ax * tx + ay * ty;
+  const disc = sumAT * sumAT - sumA * (ax * tx * tx + ay * ty * ty - sh * sh);
+  if (disc < 0) return oneAxis;
   const t = (sumAT + Math.sqrt(disc)) / sumA;
-  return t >= second.tau ? t : one(first);
+  return t >= Math.max(tx, ty) ? t : oneAxis;
 }
 
 /** A binary min-heap of cell indices keyed by `time`, with decrease-key through a position map. */
