@@ -7,9 +7,12 @@ export { highGround, DEFAULT_HIGH_GROUND_M, HIGH_GROUND_SEARCH_KM, SLOW_WALK_MS,
 export {
   arrivalsFromAreas,
   tsunamiScreening,
+  solveGrids,
+  type SolveGrids,
   MIN_SOLVE_SPACING_KM,
   type SourceArrival,
   type TsunamiCommunity,
   type TsunamiOptions,
   type TsunamiResult,
 } from './tsunami-screening.ts';
+export { scenarioTsunami } from './scenario-tsunami.ts';

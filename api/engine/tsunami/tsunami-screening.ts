@@ -71,12 +71,21 @@ export function tsunamiScreening(study: Study, grid: ElevationGrid, options: Tsu
   return arrivalsFromAreas(study, grid, frame, chosen.map((s) => interfaceSourceArea(s, frame)), options.highGroundM ?? DEFAULT_HIGH_GROUND_M);
 }
 
+/** The two grids a solve runs on: the terrain's own cell size (MIN_SOLVE_SPACING_KM at the finest) and twice it. */
+export interface SolveGrids {
+  readonly fine: MetricGrid;
+  readonly coarse: MetricGrid;
+}
+
+export function solveGrids(grid: ElevationGrid, frame: LocalFrame): SolveGrids {
+  const fine = metricGrid(grid, frame, Math.max(MIN_SOLVE_SPACING_KM, nativeCellKm(grid, frame)));
+  return { fine, coarse: metricGrid(grid, frame, 2 * fine.spacingKm) };
+}
+
 /** The same for given source areas (a scenario's rupture, source-area.ts), in the study's frame. */
-export function arrivalsFromAreas(study: Study, grid: ElevationGrid, frame: LocalFrame, areas: readonly SourceArea[], highGroundM: number): TsunamiResult {
+export function arrivalsFromAreas(study: Study, grid: ElevationGrid, frame: LocalFrame, areas: readonly SourceArea[], highGroundM: number, grids: SolveGrids = solveGrids(grid, frame)): TsunamiResult {
   if (!(highGroundM > 0 && highGroundM <= 1000)) throw new InvalidInput([{ path: 'highGroundM', message: `expected a height above sea level in (0, 1000] m, got ${highGroundM}` }]);
-  const spacingKm = Math.max(MIN_SOLVE_SPACING_KM, nativeCellKm(grid, frame));
-  const fine = metricGrid(grid, frame, spacingKm);
-  const coarse = metricGrid(grid, frame, 2 * fine.spacingKm);
+  const { fine, coarse } = grids;
   const toLonLat = frame.toLonLat.bind(frame);
   const solves = areas.map((area) => ({
     area,
