@@ -16,7 +16,7 @@ import { studyRoutes } from './routes/studies.ts';
 import { tsunamiRoutes } from './routes/tsunami.ts';
 import { sameOriginWrites } from './same-origin.ts';
 import { securityHeaders } from './security-headers.ts';
-import type { ServiceContext } from './service-context.ts';
+import type { ServiceContext } from '../operations/service-context.ts';
 
 /**
  * Largest request body accepted, bytes. A study at the schema's limits (500 sources, the
