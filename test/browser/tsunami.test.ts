@@ -53,9 +53,10 @@ describe.each(WIDTHS)('tsunami time to act at $name width', ({ name, viewport })
   /** The tsunami section (`section`) is checked, shot alone and in the whole page. */
   async function check(view: string, section: string): Promise<void> {
     expect(await seriousAxeViolations(page), `${view}: serious axe-core violations`).toEqual([]);
-    const wide = await page.locator(`${section}, ${section} *`).evaluateAll((els) =>
-      els.filter((el) => el.getBoundingClientRect().right > document.documentElement.clientWidth + 1).map((el) => `${el.tagName}.${el.className}`),
-    );
+    const selector = JSON.stringify(`${section}, ${section} *`);
+    const wide = (await page.evaluate(
+      `[...document.querySelectorAll(${selector})].filter((el) => el.getBoundingClientRect().right > document.documentElement.clientWidth + 1).map((el) => el.tagName + '.' + el.className)`,
+    )) as string[];
     expect(wide, `${view}: parts of the tsunami section wider than the window`).toEqual([]);
     await page.locator(section).first().screenshot({ path: join(ARTIFACTS, `tsunami-${view}-${name}-section.png`) });
     await page.screenshot({ path: join(ARTIFACTS, `tsunami-${view}-${name}.png`), fullPage: true });

@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { TsunamiResult } from '../../api/engine/tsunami/index.ts';
-import { DEMO_STUDY_URL } from '../../api/service/demo-seed.ts';
+import { DEMO_STUDY_URL } from '../../api/operations/demo-seed.ts';
 import { runFinished, startPageApp, type PageApp } from './helpers/page-app.ts';
 
 /**

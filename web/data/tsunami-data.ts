@@ -3,8 +3,8 @@ import type { Study } from '../../api/engine/model.ts';
 import type { ScenarioRequest } from '../../api/engine/scenario/index.ts';
 import type { TsunamiCommunity, TsunamiResult } from '../../api/engine/tsunami/index.ts';
 import { inputHash } from '../../api/results/input-hash.ts';
-import type { ServiceContext } from '../../api/service/service-context.ts';
-import { tsunamiTimesOf } from '../../api/service/tsunami-times.ts';
+import type { ServiceContext } from '../../api/operations/service-context.ts';
+import { tsunamiTimesOf } from '../../api/operations/tsunami-times.ts';
 
 /** Tsunami times for a page: the result, or the problem that stopped it (never a silent gap). */
 export type TsunamiPageResult = { readonly ok: true; readonly result: TsunamiResult } | { readonly ok: false; readonly problem: string };

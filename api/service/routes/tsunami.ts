@@ -6,9 +6,9 @@ import { identifier, numberIn } from '../../study/fields.ts';
 import { IssueList } from '../../study/issues.ts';
 import { notFound } from '../http-error.ts';
 import { inputHash } from '../../results/input-hash.ts';
-import type { ServiceContext } from '../service-context.ts';
-import { storedInputs, validateStudy } from '../study-input.ts';
-import { tsunamiTimesOf } from '../tsunami-times.ts';
+import type { ServiceContext } from '../../operations/service-context.ts';
+import { storedInputs, validateStudy } from '../../operations/study-input.ts';
+import { tsunamiTimesOf } from '../../operations/tsunami-times.ts';
 
 /** The caution every tsunami answer carries (SAFETY.md, "Tsunami time-to-act"). */
 export const TSUNAMI_CAUTION =

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { TsunamiResult } from '../../../api/engine/tsunami/index.ts';
-import { seedDemoStudy } from '../../../api/service/demo-seed.ts';
+import { seedDemoStudy } from '../../../api/operations/demo-seed.ts';
 import { startPageApp, type PageApp } from '../../web/helpers/page-app.ts';
 import { smallStudy } from '../helpers/small-study.ts';
 
