@@ -34,6 +34,9 @@ afterAll(async () => {
   dir.remove();
 });
 
+/** Each view waits on the service and Chromium on a shared 2-core machine: a generous limit, no time asserted. */
+const VIEW_TIMEOUT_MS = 180_000;
+
 const WIDTHS = [
   { name: 'desktop', viewport: { width: 1100, height: 900 } },
   { name: 'phone', viewport: { width: 390, height: 844 } },
@@ -70,7 +73,7 @@ describe.each(WIDTHS)('tsunami time to act at $name width', ({ name, viewport })
     const minutes = await rows.evaluateAll((trs) => trs.map((tr) => Number(tr.getAttribute('data-first-arrival-minutes'))));
     expect(minutes).toEqual([...minutes].sort((a, b) => a - b));
     await check('overview', '.tsunami-ranking');
-  });
+  }, VIEW_TIMEOUT_MS);
 
   test('a coastal village\'s page and handout say the time in plain words', async () => {
     const quillan = times.communities.find((c) => c.id === 'quillan-landing');
@@ -81,7 +84,7 @@ describe.each(WIDTHS)('tsunami time to act at $name width', ({ name, viewport })
     await page.goto(`${service.url}/studies/${demoId}/communities/quillan-landing/handout`);
     await expect(page.locator('.tsunami-sentence').textContent()).resolves.toMatch(/could reach this coast in about \d+ to \d+ minutes/);
     await check('handout', '.tsunami-time');
-  });
+  }, VIEW_TIMEOUT_MS);
 
   test('the scenario on the interface gives the times of its rupture', async () => {
     await page.goto(`${service.url}/studies/${demoId}/scenario?sourceId=orle-interface`);
@@ -89,5 +92,5 @@ describe.each(WIDTHS)('tsunami time to act at $name width', ({ name, viewport })
     await page.waitForSelector('#tsunami-scenario', { timeout: 120_000 });
     expect(await page.locator('#tsunami-scenario tbody tr').count()).toBe(times.communities.length);
     await check('scenario', '.tsunami-scenario');
-  });
+  }, VIEW_TIMEOUT_MS);
 });
