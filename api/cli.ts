@@ -40,6 +40,10 @@ const VERBS: Readonly<Record<string, Verb>> = {
     synopsis: 'tremora catalog (fit CATALOG | felt STUDY CATALOG) [options] [--json]',
     load: async () => import('./cli/catalog.ts').then((m) => ({ usage: m.CATALOG_USAGE, run: m.catalogVerb })),
   },
+  tsunami: {
+    synopsis: 'tremora tsunami STUDY [--source ID]... [--high-ground M] [--json]',
+    load: async () => import('./cli/tsunami.ts').then((m) => ({ usage: m.TSUNAMI_USAGE, run: m.tsunamiVerb })),
+  },
 };
 
 export const VERB_SYNOPSES: Readonly<Record<string, string>> = Object.fromEntries(Object.entries(VERBS).map(([name, v]) => [name, v.synopsis]));
