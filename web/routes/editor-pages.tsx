@@ -78,11 +78,16 @@ export function editorPages(app: Hono, kit: PageKit): void {
    * Reads the study again once the posted body has arrived and runs `edit` on it in one
    * transaction with its write: a save made while the body was on its way is built upon, not lost.
    */
-  const afterBody = (c: Context, edit: (data: StudyData & { ok: true }) => Response | Promise<Response>) =>
+  const afterBody = (c: Context, edit: (data: StudyData & { ok: true }) => Response | Promise<Response>): Response | Promise<Response> => {
+    // A transaction's function may not return a promise (better-sqlite3), and a page rendered
+    // asynchronously is one; the answer is kept aside and returned once the write is committed.
+    let answer: Response | Promise<Response> | undefined;
     ctx.store.transaction(() => {
       const fresh = load(c);
-      return 'response' in fresh ? fresh.response : edit(fresh.data);
+      answer = 'response' in fresh ? fresh.response : edit(fresh.data);
     });
+    return answer as Response | Promise<Response>;
+  };
 
   const editor = (c: Context, data: StudyData & { ok: true }, extra: { problem?: UploadProblem; notice?: readonly InputIssue[] } = {}) => {
     const saved = c.req.query('saved') === '1';
