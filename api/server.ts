@@ -1,10 +1,10 @@
-import type { Server } from 'node:http';
-import { serve } from '@hono/node-server';
+import type { AddressInfo } from 'node:net';
 import { modelCatalog } from './engine/motion/registry.ts';
 import { createPages } from '../web/pages.tsx';
 import { createApp } from './service/app.ts';
 import { answerClientError } from './service/client-error.ts';
 import { ConfigError, readConfig, type ServiceConfig } from './service/config.ts';
+import { createNodeServer } from './service/node-listener.ts';
 import { seedDemoStudy } from './service/demo-seed.ts';
 import { TOOL_VERSION } from './results/tool-version.ts';
 import { openStore, type Store } from './store/store.ts';
@@ -47,12 +47,17 @@ const runPool = new WorkerPool({ size: config.workers, name: 'tremora-run' });
 const quickPool = new WorkerPool({ size: 1, name: 'tremora-quick' });
 const scheduler = new RunScheduler({ store, pool: runPool, toolVersion: TOOL_VERSION });
 const context = { store, scheduler, runPool, quickPool, models: modelCatalog, toolVersion: TOOL_VERSION, workBudget: config.workBudget };
-const app = createApp(context, { pages: createPages(context, { token: config.token }), ...(config.token === undefined ? {} : { token: config.token }) });
+const app = createApp(context, {
+  pages: createPages(context, { token: config.token }),
+  ...(config.token === undefined ? {} : { token: config.token }),
+  ...(config.allowedHosts === undefined ? {} : { allowedHosts: config.allowedHosts }),
+});
 
-const server = serve({ fetch: app.fetch, hostname: config.host, port: config.port }, (info) => {
-  console.log(`Tremora ${TOOL_VERSION} is listening on http://${urlHost(config.host)}:${info.port}`);
+const server = createNodeServer({ fetch: app.fetch, hostname: config.host });
+server.listen(config.port, config.host, () => {
+  console.log(`Tremora ${TOOL_VERSION} is listening on http://${urlHost(config.host)}:${(server.address() as AddressInfo).port}`);
   console.log(`database: ${config.databasePath}; ${runPool.size} worker thread(s) for runs`);
-}) as Server;
+});
 
 // Requests Node's parser refuses get the one error shape too (client-error.ts).
 server.on('clientError', answerClientError);

@@ -12,7 +12,13 @@ describe('readConfig', () => {
       databasePath: '/srv/tremora/.tremora/tremora.db',
       workers: 3,
       workBudget: DEFAULT_WORK_BUDGET,
+      allowedHosts: ['localhost', '127.0.0.1', '[::1]'],
     });
+  });
+
+  it('listens on an IPv6 address written with or without brackets', () => {
+    expect(readConfig({ HOST: '[::1]' }).host).toBe('::1');
+    expect(readConfig({ HOST: '::1' }).host).toBe('::1');
   });
 
   it('reads PORT, TREMORA_DB, TREMORA_WORKERS and TREMORA_WORK_BUDGET', () => {
