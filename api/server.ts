@@ -7,6 +7,7 @@ import { ConfigError, readConfig, type ServiceConfig } from './service/config.ts
 import { createNodeServer } from './service/node-listener.ts';
 import { seedDemoStudy } from './service/demo-seed.ts';
 import { TOOL_VERSION } from './results/tool-version.ts';
+import { DatabaseRefused } from './store/database-file.ts';
 import { openStore, type Store } from './store/store.ts';
 import { RunScheduler } from './workers/run-scheduler.ts';
 import { WorkerPool } from './workers/worker-pool.ts';
@@ -37,8 +38,18 @@ function seedOnFirstStart(store: Store): void {
 
 const urlHost = (host: string): string => (host.includes(':') && !host.startsWith('[') ? `[${host}]` : host);
 
+function openStoreOrExit(path: string): Store {
+  try {
+    return openStore(path);
+  } catch (error) {
+    if (!(error instanceof DatabaseRefused)) throw error;
+    console.error(`tremora: cannot start: ${error.message}`);
+    process.exit(2);
+  }
+}
+
 const config = readConfigOrExit();
-const store = openStore(config.databasePath);
+const store = openStoreOrExit(config.databasePath);
 if (store.interruptedAtOpen > 0) console.log(`${store.interruptedAtOpen} run(s) left unfinished by the previous process are marked interrupted`);
 if (store.mapRunsInterruptedAtOpen > 0) console.log(`${store.mapRunsInterruptedAtOpen} map(s) left unfinished by the previous process are marked interrupted`);
 seedOnFirstStart(store);
@@ -62,9 +73,10 @@ server.listen(config.port, config.host, () => {
 // Requests Node's parser refuses get the one error shape too (client-error.ts).
 server.on('clientError', answerClientError);
 server.on('error', (error: NodeJS.ErrnoException) => {
-  const why = error.code === 'EADDRINUSE' ? `port ${config.port} on ${config.host} is in use; set PORT to another port` : error.message;
-  console.error(`tremora: cannot listen: ${why}`);
-  process.exit(1);
+  const why = error.code === 'EADDRINUSE' ? `port ${config.port} on ${config.host} is in use; set PORT to another port` : `${error.message}; set HOST to an address of this machine`;
+  console.error(`tremora: cannot start: cannot listen on ${urlHost(config.host)}:${config.port}: ${why}`);
+  store.close();
+  process.exit(2);
 });
 
 let stopping = false;

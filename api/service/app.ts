@@ -65,7 +65,7 @@ export function createApp(ctx: ServiceContext, options: CreateAppOptions = {}): 
   app.route('/api', api);
   if (options.pages) app.route('/', options.pages);
 
-  app.onError(errorHandler(options.logError ?? logToStderr));
+  app.onError(errorHandler(options.logError ?? logToStderr, (error) => ctx.store.noteWriteFailure(error)));
   app.notFound(notFoundHandler);
   return app;
 }
