@@ -2,6 +2,9 @@ import { createServer, type IncomingMessage, type Server, type ServerResponse } 
 import { getRequestListener } from '@hono/node-server';
 import { SECURITY_HEADERS } from './security-headers.ts';
 
+/** The methods some route of the service accepts. */
+const SERVER_METHODS = 'GET, HEAD, POST, PUT, DELETE, OPTIONS';
+
 /** Writes an answer in the one error shape with the security headers, then closes the connection. */
 function refuse(outgoing: ServerResponse, status: number, message: string): void {
   const body = JSON.stringify({ error: message, issues: [] });
@@ -27,7 +30,15 @@ export interface NodeServerOptions {
  * security headers like every other answer.
  */
 export function createNodeServer(options: NodeServerOptions): Server {
-  const listener = getRequestListener(options.fetch, {
+  // hono answers HEAD by running GET and copying its answer without the body; on the Node
+  // adapter's lightweight Response that copy takes the headers the handler set, not those
+  // middleware added after (the security headers). So HEAD is run as GET here, keeping its headers.
+  const fetch = async (request: Request): Promise<Response> => {
+    if (request.method !== 'HEAD') return options.fetch(request);
+    const answer = await options.fetch(new Request(request.url, { method: 'GET', headers: request.headers }));
+    return new Response(null, { status: answer.status, headers: answer.headers });
+  };
+  const listener = getRequestListener(fetch, {
     hostname: options.hostname,
     errorHandler: (error) => refusal(400, `the request target or Host could not be read (${error instanceof Error ? error.message : 'unreadable'}); expected a path starting with "/" and a host name`),
   });
@@ -36,6 +47,12 @@ export function createNodeServer(options: NodeServerOptions): Server {
   const server = createServer({ requireHostHeader: false }, (incoming: IncomingMessage, outgoing: ServerResponse) => {
     if (incoming.headers.host === undefined && incoming.httpVersion === '1.1') {
       refuse(outgoing, 400, 'expected a Host header: HTTP/1.1 requires one');
+      return;
+    }
+    // "OPTIONS *" asks about the server as a whole (RFC 9110 section 9.3.7): the methods it knows.
+    if (incoming.method === 'OPTIONS' && incoming.url === '*') {
+      outgoing.writeHead(204, { ...SECURITY_HEADERS, Allow: SERVER_METHODS });
+      outgoing.end();
       return;
     }
     void listener(incoming, outgoing);
