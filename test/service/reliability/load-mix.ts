@@ -40,7 +40,14 @@ export interface LoadTarget {
 }
 
 export interface LoadMixOptions {
-  readonly durationS: number;
+  /** How long to load (the benchmark: rates depend on the machine, so they are only printed). */
+  readonly durationS?: number;
+  /**
+   * Instead of a duration, a fixed number of requests to each target, sent with fetch and
+   * never cut off (the test: what it asserts, every one answered and none failed, then does
+   * not depend on the machine's speed).
+   */
+  readonly amounts?: { readonly health: number; readonly page: number; readonly compute: number };
   /** Connections to health and to the page; the compute gets fewer (it queues on a worker). */
   readonly connections: number;
 }
@@ -69,20 +76,70 @@ export async function startHeavyRun(service: ServiceProcess): Promise<{ runId: s
 
 /** The three loads at once, while the heavy run computes; throws if the run is no longer running after. */
 export async function loadMix(service: ServiceProcess, studyId: string, runId: string, options: LoadMixOptions): Promise<LoadTarget[]> {
-  const common = { duration: options.durationS, timeout: 30 };
   const compute = JSON.stringify(smallStudy('Load compute'));
-  const [health, page, computed] = await Promise.all([
-    autocannon({ ...common, url: `${service.url}/api/health`, connections: options.connections }),
-    autocannon({ ...common, url: `${service.url}/studies/${studyId}`, connections: options.connections }),
-    autocannon({ ...common, url: `${service.url}/api/compute`, connections: Math.max(1, Math.floor(options.connections / 4)), method: 'POST', headers: { 'content-type': 'application/json' }, body: compute }),
-  ]);
+  const computeConnections = Math.max(1, Math.floor(options.connections / 4));
+  const post = { method: 'POST', headers: { 'content-type': 'application/json' }, body: compute };
+  const { amounts } = options;
+  const common = { duration: options.durationS ?? 10, timeout: 30 };
+  const [health, page, computed] = await Promise.all(
+    amounts
+      ? [
+          fixedRequests(`${service.url}/api/health`, amounts.health, options.connections),
+          fixedRequests(`${service.url}/studies/${studyId}`, amounts.page, options.connections),
+          fixedRequests(`${service.url}/api/compute`, amounts.compute, computeConnections, post),
+        ]
+      : [
+          autocannon({ ...common, url: `${service.url}/api/health`, connections: options.connections }),
+          autocannon({ ...common, url: `${service.url}/studies/${studyId}`, connections: options.connections }),
+          autocannon({ ...common, url: `${service.url}/api/compute`, connections: computeConnections, ...post }),
+        ],
+  );
+  // Whether the heavy run outlasted the load depends on the machine: the benchmark needs it
+  // (its figures are for a loaded service), the test with fixed amounts only reports it.
   const run = (await (await service.fetch(`/api/runs/${runId}`)).json()) as { status: string };
-  if (run.status !== 'running') throw new Error(`the heavy run was ${run.status} by the end of the load; expected it still running`);
+  if (!options.amounts && run.status !== 'running') throw new Error(`the heavy run was ${run.status} by the end of the load; expected it still running`);
   return [
     { label: 'GET /api/health', result: health },
     { label: 'GET /studies/{id} (overview)', result: page },
     { label: 'POST /api/compute (small)', result: computed },
   ];
+}
+
+/**
+ * `amount` requests to `url` over `connections` clients, each sending its share one after the
+ * other with fetch; every answer is counted, none is cut off at a deadline. The figures come in
+ * autocannon's shape so that describeLoad prints both alike.
+ */
+export async function fixedRequests(url: string, amount: number, connections: number, init: RequestInit = {}): Promise<AutocannonResult> {
+  const latencies: number[] = [];
+  let non2xx = 0;
+  let errors = 0;
+  const started = performance.now();
+  const client = async (share: number) => {
+    for (let i = 0; i < share; i++) {
+      const sent = performance.now();
+      try {
+        const response = await fetch(url, init);
+        await response.arrayBuffer();
+        if (response.status < 200 || response.status > 299) non2xx++;
+        latencies.push(performance.now() - sent);
+      } catch {
+        errors++;
+      }
+    }
+  };
+  await Promise.all(Array.from({ length: connections }, (_, k) => client(Math.floor(amount / connections) + (k < amount % connections ? 1 : 0))));
+  const seconds = (performance.now() - started) / 1000;
+  const sorted = latencies.sort((a, b) => a - b);
+  const at = (q: number) => Math.round(sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))] ?? 0);
+  return {
+    latency: { p50: at(0.5), p97_5: at(0.975), p99: at(0.99), max: Math.round(sorted.at(-1) ?? 0), average: Math.round(sorted.reduce((a, b) => a + b, 0) / Math.max(1, sorted.length)) },
+    requests: { average: latencies.length / seconds, total: latencies.length + errors },
+    non2xx,
+    errors,
+    timeouts: 0,
+    resets: 0,
+  };
 }
 
 /** One line of figures per target. */
