@@ -10,6 +10,7 @@ import { readSettings } from './settings-schema.ts';
 import { MAX_STUDY_VERTICES, readSourceGeometry, vertexCount } from './source-geometry.ts';
 import { readSources } from './source-schema.ts';
 import { checkRuptureEstimate } from './rupture-estimate.ts';
+import { checkStudyExtent } from './study-extent.ts';
 
 export const STUDY_KEYS = ['name', 'communities', 'sources', 'groundMotion', 'settings', 'outline'] as const;
 
@@ -48,6 +49,8 @@ export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
   const groundMotion = readBranches(doc.groundMotion, used, settings, options.models, issues, ['groundMotion']);
   const outline = doc.outline === undefined ? undefined : readOutline(doc.outline, issues);
   // Only on a study without other problems: the valid sources then keep their feature order.
+  // The extent first: beyond it the local frame, and with it the estimates, do not hold.
+  if (issues.issues.length === 0) checkStudyExtent(communities, sources, outline, issues);
   if (issues.issues.length === 0 && settings) checkRuptureEstimate(sources, settings, issues);
 
   if (issues.issues.length > 0 || name === undefined || !settings || !groundMotion || communities.length === 0) {
