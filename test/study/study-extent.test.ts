@@ -14,7 +14,7 @@ type Doc = ReturnType<typeof smallStudy> & { communities: Record<string, unknown
 function studyAt(communities: [number, number][], sourceAt?: [number, number]): Doc {
   const study = smallStudy('Extent') as Doc;
   study.communities = communities.map(([lon, lat], i) => ({ id: `c${i}`, name: `Place ${i}`, lon, lat, vs30: 500 }));
-  if (sourceAt) study.sources.features[0].geometry.coordinates = sourceAt;
+  if (sourceAt) (study.sources.features[0] as Record<string, any>).geometry.coordinates = sourceAt;
   return study;
 }
 
