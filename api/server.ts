@@ -5,7 +5,7 @@ import { createApp } from './service/app.ts';
 import { answerClientError } from './service/client-error.ts';
 import { ConfigError, readConfig, type ServiceConfig } from './service/config.ts';
 import { createNodeServer } from './service/node-listener.ts';
-import { seedDemoStudy } from './service/demo-seed.ts';
+import { seedDemoStudy } from './operations/demo-seed.ts';
 import { TOOL_VERSION } from './results/tool-version.ts';
 import { DatabaseRefused } from './store/database-file.ts';
 import { openStore, type Store } from './store/store.ts';
