@@ -131,6 +131,7 @@ export async function fixedRequests(url: string, amount: number, connections: nu
       });
       if ('error' in answer) {
         errors++;
+        console.log(`${init.method ?? 'GET'} ${target.pathname}: ${answer.error}`);
         continue;
       }
       if (answer.status < 200 || answer.status > 299) non2xx++;
