@@ -1,13 +1,14 @@
-import type { Server } from 'node:http';
-import { serve } from '@hono/node-server';
+import type { AddressInfo } from 'node:net';
 import { modelCatalog } from './engine/motion/registry.ts';
 import { startScreening } from '../web/data/start-screening.ts';
 import { createPages } from '../web/pages.tsx';
 import { createApp } from './service/app.ts';
 import { answerClientError } from './service/client-error.ts';
 import { ConfigError, readConfig, type ServiceConfig } from './service/config.ts';
+import { createNodeServer } from './service/node-listener.ts';
 import { seedDemoStudy } from './operations/demo-seed.ts';
 import { TOOL_VERSION } from './results/tool-version.ts';
+import { DatabaseRefused } from './store/database-file.ts';
 import { openStore, type Store } from './store/store.ts';
 import { RunScheduler } from './workers/run-scheduler.ts';
 import { WorkerPool } from './workers/worker-pool.ts';
@@ -40,8 +41,18 @@ function seedOnFirstStart(store: Store): string | undefined {
 
 const urlHost = (host: string): string => (host.includes(':') && !host.startsWith('[') ? `[${host}]` : host);
 
+function openStoreOrExit(path: string): Store {
+  try {
+    return openStore(path);
+  } catch (error) {
+    if (!(error instanceof DatabaseRefused)) throw error;
+    console.error(`tremora: cannot start: ${error.message}`);
+    process.exit(2);
+  }
+}
+
 const config = readConfigOrExit();
-const store = openStore(config.databasePath);
+const store = openStoreOrExit(config.databasePath);
 if (store.interruptedAtOpen > 0) console.log(`${store.interruptedAtOpen} run(s) left unfinished by the previous process are marked interrupted`);
 if (store.mapRunsInterruptedAtOpen > 0) console.log(`${store.mapRunsInterruptedAtOpen} map(s) left unfinished by the previous process are marked interrupted`);
 const demoId = seedOnFirstStart(store);
@@ -50,7 +61,11 @@ const runPool = new WorkerPool({ size: config.workers, name: 'tremora-run' });
 const quickPool = new WorkerPool({ size: 1, name: 'tremora-quick' });
 const scheduler = new RunScheduler({ store, pool: runPool, toolVersion: TOOL_VERSION });
 const context = { store, scheduler, runPool, quickPool, models: modelCatalog, toolVersion: TOOL_VERSION, workBudget: config.workBudget };
-const app = createApp(context, { pages: createPages(context, { token: config.token }), ...(config.token === undefined ? {} : { token: config.token }) });
+const app = createApp(context, {
+  pages: createPages(context, { token: config.token }),
+  ...(config.token === undefined ? {} : { token: config.token }),
+  ...(config.allowedHosts === undefined ? {} : { allowedHosts: config.allowedHosts }),
+});
 
 // A new database's demo is screened at once, in the background, so its pages have results
 // by the time a person opens them (they say the screening is under way until then).
@@ -59,20 +74,22 @@ if (demoId !== undefined && config.screenDemo) {
   if (demo) startScreening(context, demo).catch((error: unknown) => console.error(`the demo study could not be screened: ${error instanceof Error ? error.message : String(error)}`));
 }
 
-const server = serve({ fetch: app.fetch, hostname: config.host, port: config.port }, (info) => {
-  const origin = `http://${urlHost(config.host)}:${info.port}`;
+const server = createNodeServer({ fetch: app.fetch, hostname: config.host });
+server.listen(config.port, config.host, () => {
+  const origin = `http://${urlHost(config.host)}:${(server.address() as AddressInfo).port}`;
   console.log(`Tremora ${TOOL_VERSION} is listening on ${origin}`);
   console.log(`database: ${config.databasePath}; ${runPool.size} worker thread(s) for runs`);
   if (demoId !== undefined) console.log(`new database: the demo study is saved${config.screenDemo ? ' and being screened' : ''}; open ${origin}/studies/${demoId}`);
   else console.log(`open ${origin}/ in a browser`);
-}) as Server;
+});
 
 // Requests Node's parser refuses get the one error shape too (client-error.ts).
 server.on('clientError', answerClientError);
 server.on('error', (error: NodeJS.ErrnoException) => {
-  const why = error.code === 'EADDRINUSE' ? `port ${config.port} on ${config.host} is in use; set PORT to another port` : error.message;
-  console.error(`tremora: cannot listen: ${why}`);
-  process.exit(1);
+  const why = error.code === 'EADDRINUSE' ? `port ${config.port} on ${config.host} is in use; set PORT to another port` : `${error.message}; set HOST to an address of this machine`;
+  console.error(`tremora: cannot start: cannot listen on ${urlHost(config.host)}:${config.port}: ${why}`);
+  store.close();
+  process.exit(2);
 });
 
 let stopping = false;

@@ -13,6 +13,7 @@ describe('readConfig', () => {
       workers: 3,
       workBudget: DEFAULT_WORK_BUDGET,
       screenDemo: true,
+      allowedHosts: ['localhost', '127.0.0.1', '[::1]'],
     });
   });
 
@@ -20,6 +21,11 @@ describe('readConfig', () => {
     expect(readConfig({ TREMORA_SCREEN_DEMO: '0' }).screenDemo).toBe(false);
     expect(readConfig({ TREMORA_SCREEN_DEMO: '1' }).screenDemo).toBe(true);
     expect(() => readConfig({ TREMORA_SCREEN_DEMO: 'no' })).toThrow('TREMORA_SCREEN_DEMO must be a whole number from 0 to 1, got "no"');
+  });
+
+  it('listens on an IPv6 address written with or without brackets', () => {
+    expect(readConfig({ HOST: '[::1]' }).host).toBe('::1');
+    expect(readConfig({ HOST: '::1' }).host).toBe('::1');
   });
 
   it('reads PORT, TREMORA_DB, TREMORA_WORKERS and TREMORA_WORK_BUDGET', () => {
