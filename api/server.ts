@@ -8,7 +8,7 @@ import { ConfigError, readConfig, type ServiceConfig } from './service/config.ts
 import { seedDemoStudy } from './service/demo-seed.ts';
 import { TOOL_VERSION } from './results/tool-version.ts';
 import { openStore, type Store } from './store/store.ts';
-import { RunScheduler } from './workers/run-scheduler.ts';
+import { RunScheduler } from './jobs/run-scheduler.ts';
 import { WorkerPool } from './workers/worker-pool.ts';
 
 /**

@@ -1,6 +1,6 @@
 import type { ModelCatalog } from '../engine/motion/catalog.ts';
 import type { Store } from '../store/index.ts';
-import type { RunScheduler } from '../workers/run-scheduler.ts';
+import type { RunScheduler } from '../jobs/run-scheduler.ts';
 import type { WorkerPool } from '../workers/worker-pool.ts';
 
 /** What the routes work with; server.ts builds it, tests build their own. */
