@@ -118,7 +118,7 @@ export class ChunkQueue implements ChunkPool {
     const data: ChunkJobData =
       task.kind === 'map-points'
         ? { kind: task.kind, inputHash, planKey: task.planKey, map: task.map, firstIndex: task.firstIndex, count: task.count }
-        : { kind: task.kind, inputHash, planKey: task.planKey, indices: task.indices, ...(task.path ? { path: task.path } : {}) };
+        : { kind: task.kind, inputHash, planKey: task.planKey, indices: task.indices };
     const jobId = `${task.planKey}-${this.#next++}`;
     if (events.onProgress) this.#progress.set(jobId, events.onProgress);
     // attempts 1: a chunk that fails fails its run (a bad input fails everywhere alike); a chunk

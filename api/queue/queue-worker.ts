@@ -3,7 +3,6 @@ import { UnrecoverableError, Worker, type Job } from 'bullmq';
 import { Cancelled } from '../engine/errors.ts';
 import type { RuptureTable } from '../engine/hazard/rupture-table.ts';
 import type { Study } from '../engine/model.ts';
-import type { ScreeningPath } from '../engine/screening-plan.ts';
 import type { MapRequest, WorkerTask } from '../workers/messages.ts';
 import { serialiseError } from '../workers/task-errors.ts';
 import { WorkerPool } from '../workers/worker-pool.ts';
@@ -79,7 +78,7 @@ export async function startQueueWorker(options: QueueWorkerOptions): Promise<Que
       const task: WorkerTask =
         data.kind === 'map-points'
           ? { kind: 'map-points', planKey: data.planKey, study, table, map: data.map as MapRequest, firstIndex: data.firstIndex, count: data.count }
-          : { kind: 'screen-communities', planKey: data.planKey, study, table, indices: data.indices, ...(data.path ? { path: data.path as ScreeningPath } : {}) };
+          : { kind: 'screen-communities', planKey: data.planKey, study, table, indices: data.indices };
       const handle = pool.run(task, { onProgress: (share) => void job.updateProgress(share).catch(() => {}) });
       const poll = setInterval(() => {
         redis.exists(cancelKey(data.planKey)).then((n) => n === 1 && handle.cancel(), () => {});
