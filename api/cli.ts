@@ -10,6 +10,7 @@ import { screenVerb, SCREEN_USAGE } from './cli/screen.ts';
 import { workerVerb, WORKER_USAGE } from './cli/worker.ts';
 import { EXIT_BAD_INPUT, EXIT_FAILURE, EXIT_OK, formatIssues, type Io, processIo, UsageError } from './cli/output.ts';
 import { InvalidInput, TremoraError } from './engine/errors.ts';
+import { QueueSettingError } from './queue/queue-setting.ts';
 
 interface Verb {
   readonly usage: string;
@@ -61,7 +62,7 @@ export async function runCli(argv: readonly string[], io: Io = processIo): Promi
       io.err(`tremora ${name}: ${error.issues.length} problem${error.issues.length === 1 ? '' : 's'}:\n${formatIssues(error.issues)}`);
       return EXIT_BAD_INPUT;
     }
-    if (error instanceof TremoraError) {
+    if (error instanceof TremoraError || error instanceof QueueSettingError) {
       io.err(`tremora ${name}: ${error.message}`);
       return EXIT_BAD_INPUT;
     }

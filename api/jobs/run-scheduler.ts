@@ -1,5 +1,6 @@
 import type { Study } from '../engine/model.ts';
 import type { RunRecord, Store } from '../store/index.ts';
+import type { ChunkPool } from '../workers/chunk-runner.ts';
 import { spreadScreening } from '../workers/parallel-screen.ts';
 import type { WorkerPool } from '../workers/worker-pool.ts';
 import { JobLifecycle, type LogError } from './job-lifecycle.ts';
@@ -17,7 +18,19 @@ export interface RunSchedulerOptions {
    * Off by default (the pool's workers must then speak the chunk tasks, as run-worker.ts does).
    */
   readonly spreadOverPool?: boolean;
+  /**
+   * The Redis queue of `tremora worker` machines (TREMORA_QUEUE): the communities of a screening
+   * of at least QUEUED_SCREENING_COMMUNITIES go there, in chunks; smaller ones stay here.
+   */
+  readonly chunks?: ChunkPool;
 }
+
+/**
+ * Fewest communities for a screening to go to the queue: below this a screening takes seconds
+ * here, less than the round trips of handing it out would save (a judgement, not a measurement
+ * of every cluster).
+ */
+export const QUEUED_SCREENING_COMMUNITIES = 50;
 
 /**
  * Screening runs of saved studies on the worker pool, their life recorded in the store through
@@ -29,6 +42,7 @@ export class RunScheduler {
   readonly #pool: WorkerPool;
   readonly #toolVersion: string;
   readonly #spread: boolean;
+  readonly #chunks: ChunkPool | undefined;
   readonly #ledger: ReturnType<typeof runLedger>;
   readonly #jobs: JobLifecycle;
 
@@ -36,6 +50,7 @@ export class RunScheduler {
     this.#pool = options.pool;
     this.#toolVersion = options.toolVersion;
     this.#spread = options.spreadOverPool ?? false;
+    this.#chunks = options.chunks;
     this.#ledger = runLedger(options.store);
     this.#jobs = new JobLifecycle(options.logError);
   }
@@ -49,7 +64,10 @@ export class RunScheduler {
       progressOf: 'work',
       launch: (signals) => {
         const events = { onStart: () => signals.started(), onProgress: (share: number) => signals.progress(share) };
-        return this.#spread
+        const queued = this.#chunks !== undefined && study.communities.length >= QUEUED_SCREENING_COMMUNITIES;
+        return queued
+          ? spreadScreening(this.#pool, study, run.inputHash, this.#toolVersion, events, this.#chunks)
+          : this.#spread
           ? spreadScreening(this.#pool, study, run.inputHash, this.#toolVersion, events)
           : this.#pool.run({ kind: 'screen', study, inputHash: run.inputHash, toolVersion: this.#toolVersion }, events);
       },

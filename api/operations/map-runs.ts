@@ -5,6 +5,7 @@ import { JobLifecycle, type LogError } from '../jobs/job-lifecycle.ts';
 import { mapLedger } from '../jobs/store-ledgers.ts';
 import { buildProvenance } from '../results/provenance.ts';
 import type { MapRunRecord, MapRunRequest, Store } from '../store/index.ts';
+import type { ChunkPool } from '../workers/chunk-runner.ts';
 import { hazardMapOnPool } from '../workers/parallel-map.ts';
 import type { WorkerPool } from '../workers/worker-pool.ts';
 
@@ -14,6 +15,8 @@ export interface MapRunsOptions {
   readonly pool: WorkerPool;
   readonly toolVersion: string;
   readonly logError?: LogError;
+  /** Where the map's chunks of points go (the Redis queue); the pool's threads by default. */
+  readonly chunks?: ChunkPool;
 }
 
 /**
@@ -28,6 +31,7 @@ export class MapRuns {
   readonly #store: Store;
   readonly #pool: WorkerPool;
   readonly #toolVersion: string;
+  readonly #chunks: ChunkPool | undefined;
   readonly #ledger: ReturnType<typeof mapLedger>;
   readonly #jobs: JobLifecycle;
 
@@ -35,6 +39,7 @@ export class MapRuns {
     this.#store = options.store;
     this.#pool = options.pool;
     this.#toolVersion = options.toolVersion;
+    this.#chunks = options.chunks;
     this.#ledger = mapLedger(options.store);
     this.#jobs = new JobLifecycle(options.logError);
   }
@@ -52,6 +57,7 @@ export class MapRuns {
       progressOf: 'points',
       launch: (signals) =>
         hazardMapOnPool(this.#pool, study, request, {
+          ...(this.#chunks ? { chunks: this.#chunks } : {}),
           onStart: (d) => {
             description = mapDescription(d);
             pieces.push(mapGeoJsonHead(d));
@@ -94,11 +100,11 @@ const perStore = new WeakMap<Store, MapRuns>();
  * The map runs of a service: `ctx.maps` when the context carries its own (tests), else the
  * one kept for the context's store, made on first use with the run pool.
  */
-export function mapRunsOf(ctx: { readonly store: Store; readonly runPool: WorkerPool; readonly toolVersion: string; readonly maps?: MapRuns }): MapRuns {
+export function mapRunsOf(ctx: { readonly store: Store; readonly runPool: WorkerPool; readonly toolVersion: string; readonly maps?: MapRuns; readonly queue?: ChunkPool }): MapRuns {
   if (ctx.maps) return ctx.maps;
   let runs = perStore.get(ctx.store);
   if (!runs) {
-    runs = new MapRuns({ store: ctx.store, pool: ctx.runPool, toolVersion: ctx.toolVersion });
+    runs = new MapRuns({ store: ctx.store, pool: ctx.runPool, toolVersion: ctx.toolVersion, ...(ctx.queue ? { chunks: ctx.queue } : {}) });
     perStore.set(ctx.store, runs);
   }
   return runs;
