@@ -37,14 +37,10 @@ function seedOnFirstStart(store: Store): void {
   else console.error(`new database: the demo study was not saved, it does not validate:\n${seed.issues.map((i) => `  ${i.path}: ${i.message}`).join('\n')}`);
 }
 
-/** The Redis queue of TREMORA_QUEUE (README, Running a cluster), when set. */
-async function openQueueOrExit(): Promise<ChunkQueue | undefined> {
+/** The Redis URL of TREMORA_QUEUE (README, Running a cluster), when set; checked before anything opens. */
+function queueUrlOrExit(): string | undefined {
   try {
-    const url = queueUrlFrom(process.env);
-    if (url === undefined) return undefined;
-    const queue = await ChunkQueue.open({ url });
-    console.log(`map chunks and large screenings go to the queue at ${new URL(url).host}`);
-    return queue;
+    return queueUrlFrom(process.env);
   } catch (error) {
     if (!(error instanceof QueueSettingError)) throw error;
     console.error(`tremora: cannot start: ${error.message}`);
@@ -52,9 +48,17 @@ async function openQueueOrExit(): Promise<ChunkQueue | undefined> {
   }
 }
 
+async function openQueue(url: string | undefined): Promise<ChunkQueue | undefined> {
+  if (url === undefined) return undefined;
+  const queue = await ChunkQueue.open({ url });
+  console.log(`map chunks and large screenings go to the queue at ${new URL(url).host}`);
+  return queue;
+}
+
 const urlHost = (host: string): string => (host.includes(':') && !host.startsWith('[') ? `[${host}]` : host);
 
 const config = readConfigOrExit();
+const queueUrl = queueUrlOrExit();
 const store = openStore(config.databasePath);
 if (store.interruptedAtOpen > 0) console.log(`${store.interruptedAtOpen} run(s) left unfinished by the previous process are marked interrupted`);
 if (store.mapRunsInterruptedAtOpen > 0) console.log(`${store.mapRunsInterruptedAtOpen} map(s) left unfinished by the previous process are marked interrupted`);
@@ -62,7 +66,7 @@ seedOnFirstStart(store);
 
 const runPool = new WorkerPool({ size: config.workers, name: 'tremora-run' });
 const quickPool = new WorkerPool({ size: 1, name: 'tremora-quick' });
-const queue = await openQueueOrExit();
+const queue = await openQueue(queueUrl);
 const scheduler = new RunScheduler({ store, pool: runPool, toolVersion: TOOL_VERSION, ...(queue ? { chunks: queue } : {}) });
 const context = { store, scheduler, runPool, quickPool, models: modelCatalog, toolVersion: TOOL_VERSION, workBudget: config.workBudget, ...(queue ? { queue } : {}) };
 const app = createApp(context, { pages: createPages(context, { token: config.token }), ...(config.token === undefined ? {} : { token: config.token }) });
