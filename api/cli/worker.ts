@@ -35,6 +35,11 @@ export async function workerVerb(args: readonly string[], io: Io, until: () => P
   io.out(`tremora worker: ${threads} thread(s) taking chunks from ${new URL(url).host}`);
   const signal = await until();
   io.out(`${signal}: finishing the chunks in hand`);
-  await worker.close();
+  // A chunk may take longer than anyone waits at a shutdown: past one claim's length, stop anyway
+  // (its claim then lapses and another worker takes it again).
+  const closed = await Promise.race([worker.close().then(() => true), new Promise<false>((resolve) => setTimeout(() => resolve(false), lockMs + 5000).unref())]);
+  if (!closed) io.err('tremora worker: stopping with chunks in hand; other workers will take them');
+  // Connections still closing must not hold a stopped worker open.
+  if (until === waitForStop) setTimeout(() => process.exit(EXIT_OK), 1000).unref();
   return EXIT_OK;
 }
