@@ -8,6 +8,7 @@ import { motionVerb, MOTION_USAGE } from './cli/motion.ts';
 import { scenarioVerb, SCENARIO_USAGE } from './cli/scenario.ts';
 import { screenVerb, SCREEN_USAGE } from './cli/screen.ts';
 import { workerVerb, WORKER_USAGE } from './cli/worker.ts';
+import { tsunamiVerb, TSUNAMI_USAGE } from './cli/tsunami.ts';
 import { EXIT_BAD_INPUT, EXIT_FAILURE, EXIT_OK, formatIssues, type Io, processIo, UsageError } from './cli/output.ts';
 import { InvalidInput, TremoraError } from './engine/errors.ts';
 import { QueueSettingError } from './queue/queue-setting.ts';
@@ -25,6 +26,7 @@ const VERBS: Readonly<Record<string, Verb>> = {
   motion: { usage: MOTION_USAGE, run: motionVerb },
   catalog: { usage: CATALOG_USAGE, run: catalogVerb },
   worker: { usage: WORKER_USAGE, run: (args, io) => workerVerb(args, io) },
+  tsunami: { usage: TSUNAMI_USAGE, run: tsunamiVerb },
 };
 
 const USAGE = `tremora — earthquake-hazard screening for small communities
