@@ -1,6 +1,7 @@
 import type { Server } from 'node:http';
 import { serve } from '@hono/node-server';
 import { modelCatalog } from './engine/motion/registry.ts';
+import { startScreening } from '../web/data/start-screening.ts';
 import { createPages } from '../web/pages.tsx';
 import { createApp } from './service/app.ts';
 import { answerClientError } from './service/client-error.ts';
@@ -30,11 +31,13 @@ function readConfigOrExit(): ServiceConfig {
   }
 }
 
-function seedOnFirstStart(store: Store): void {
-  if (store.migration.fromVersion !== 0) return;
+/** The demo study's id when this start saved it (a new database), else undefined. */
+function seedOnFirstStart(store: Store): string | undefined {
+  if (store.migration.fromVersion !== 0) return undefined;
   const seed = seedDemoStudy(store, modelCatalog);
-  if (seed.seeded) console.log(`new database: the demo study is saved as /api/studies/${seed.id}`);
-  else console.error(`new database: the demo study was not saved, it does not validate:\n${seed.issues.map((i) => `  ${i.path}: ${i.message}`).join('\n')}`);
+  if (seed.seeded) return seed.id;
+  console.error(`new database: the demo study was not saved, it does not validate:\n${seed.issues.map((i) => `  ${i.path}: ${i.message}`).join('\n')}`);
+  return undefined;
 }
 
 /** The Redis URL of TREMORA_QUEUE (README, Running a cluster), when set; checked before anything opens. */
@@ -62,7 +65,7 @@ const queueUrl = queueUrlOrExit();
 const store = openStore(config.databasePath);
 if (store.interruptedAtOpen > 0) console.log(`${store.interruptedAtOpen} run(s) left unfinished by the previous process are marked interrupted`);
 if (store.mapRunsInterruptedAtOpen > 0) console.log(`${store.mapRunsInterruptedAtOpen} map(s) left unfinished by the previous process are marked interrupted`);
-seedOnFirstStart(store);
+const demoId = seedOnFirstStart(store);
 
 const runPool = new WorkerPool({ size: config.workers, name: 'tremora-run' });
 const quickPool = new WorkerPool({ size: 1, name: 'tremora-quick' });
@@ -71,9 +74,19 @@ const scheduler = new RunScheduler({ store, pool: runPool, toolVersion: TOOL_VER
 const context = { store, scheduler, runPool, quickPool, models: modelCatalog, toolVersion: TOOL_VERSION, workBudget: config.workBudget, ...(queue ? { queue } : {}) };
 const app = createApp(context, { pages: createPages(context, { token: config.token }), ...(config.token === undefined ? {} : { token: config.token }) });
 
+// A new database's demo is screened at once, in the background, so its pages have results
+// by the time a person opens them (they say the screening is under way until then).
+if (demoId !== undefined && config.screenDemo) {
+  const demo = store.studies.get(demoId);
+  if (demo) startScreening(context, demo).catch((error: unknown) => console.error(`the demo study could not be screened: ${error instanceof Error ? error.message : String(error)}`));
+}
+
 const server = serve({ fetch: app.fetch, hostname: config.host, port: config.port }, (info) => {
-  console.log(`Tremora ${TOOL_VERSION} is listening on http://${urlHost(config.host)}:${info.port}`);
+  const origin = `http://${urlHost(config.host)}:${info.port}`;
+  console.log(`Tremora ${TOOL_VERSION} is listening on ${origin}`);
   console.log(`database: ${config.databasePath}; ${runPool.size} worker thread(s) for runs`);
+  if (demoId !== undefined) console.log(`new database: the demo study is saved${config.screenDemo ? ' and being screened' : ''}; open ${origin}/studies/${demoId}`);
+  else console.log(`open ${origin}/ in a browser`);
 }) as Server;
 
 // Requests Node's parser refuses get the one error shape too (client-error.ts).
