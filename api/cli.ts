@@ -44,6 +44,10 @@ const VERBS: Readonly<Record<string, Verb>> = {
     synopsis: 'tremora tsunami STUDY [--source ID]... [--high-ground M] [--json]',
     load: async () => import('./cli/tsunami.ts').then((m) => ({ usage: m.TSUNAMI_USAGE, run: m.tsunamiVerb })),
   },
+  worker: {
+    synopsis: 'tremora worker [--threads N]',
+    load: async () => import('./cli/worker.ts').then((m) => ({ usage: m.WORKER_USAGE, run: (args: readonly string[], io: Io) => m.workerVerb(args, io) })),
+  },
 };
 
 export const VERB_SYNOPSES: Readonly<Record<string, string>> = Object.fromEntries(Object.entries(VERBS).map(([name, v]) => [name, v.synopsis]));
@@ -106,7 +110,7 @@ export async function runCli(argv: readonly string[], io: Io = processIo): Promi
       io.err(`tremora ${name}: ${error.issues.length} problem${error.issues.length === 1 ? '' : 's'}:\n${formatIssues(error.issues)}`);
       return EXIT_BAD_INPUT;
     }
-    if (error instanceof TremoraError) {
+    if (error instanceof TremoraError || (error instanceof Error && error.name === 'QueueSettingError')) {
       io.err(`tremora ${name}: ${error.message}`);
       return EXIT_BAD_INPUT;
     }

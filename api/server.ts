@@ -10,12 +10,14 @@ import { seedDemoStudy } from './operations/demo-seed.ts';
 import { TOOL_VERSION } from './results/tool-version.ts';
 import { DatabaseRefused } from './store/database-file.ts';
 import { openStore, type Store } from './store/store.ts';
-import { RunScheduler } from './workers/run-scheduler.ts';
+import { RunScheduler } from './jobs/run-scheduler.ts';
+import { ChunkQueue } from './queue/chunk-queue.ts';
+import { QueueSettingError, queueUrlFrom } from './queue/queue-setting.ts';
 import { WorkerPool } from './workers/worker-pool.ts';
 
 /**
  * `npm start`: the service on 127.0.0.1 (PORT, HOST, TREMORA_DB, TREMORA_TOKEN,
- * TREMORA_WORKERS, TREMORA_WORK_BUDGET; see README, Service), with the demo study
+ * TREMORA_WORKERS, TREMORA_WORK_BUDGET, TREMORA_QUEUE; see README, Service and Running a cluster), with the demo study
  * saved on the first start. SIGTERM or SIGINT stops it cleanly: runs still computing are
  * marked interrupted and the database is closed.
  */
@@ -39,6 +41,24 @@ function seedOnFirstStart(store: Store): string | undefined {
   return undefined;
 }
 
+/** The Redis URL of TREMORA_QUEUE (README, Running a cluster), when set; checked before anything opens. */
+function queueUrlOrExit(): string | undefined {
+  try {
+    return queueUrlFrom(process.env);
+  } catch (error) {
+    if (!(error instanceof QueueSettingError)) throw error;
+    console.error(`tremora: cannot start: ${error.message}`);
+    process.exit(2);
+  }
+}
+
+async function openQueue(url: string | undefined): Promise<ChunkQueue | undefined> {
+  if (url === undefined) return undefined;
+  const queue = await ChunkQueue.open({ url });
+  console.log(`map chunks and large screenings go to the queue at ${new URL(url).host}`);
+  return queue;
+}
+
 const urlHost = (host: string): string => (host.includes(':') && !host.startsWith('[') ? `[${host}]` : host);
 
 function openStoreOrExit(path: string): Store {
@@ -52,6 +72,7 @@ function openStoreOrExit(path: string): Store {
 }
 
 const config = readConfigOrExit();
+const queueUrl = queueUrlOrExit();
 const store = openStoreOrExit(config.databasePath);
 if (store.interruptedAtOpen > 0) console.log(`${store.interruptedAtOpen} run(s) left unfinished by the previous process are marked interrupted`);
 if (store.mapRunsInterruptedAtOpen > 0) console.log(`${store.mapRunsInterruptedAtOpen} map(s) left unfinished by the previous process are marked interrupted`);
@@ -59,8 +80,9 @@ const demoId = seedOnFirstStart(store);
 
 const runPool = new WorkerPool({ size: config.workers, name: 'tremora-run' });
 const quickPool = new WorkerPool({ size: 1, name: 'tremora-quick' });
-const scheduler = new RunScheduler({ store, pool: runPool, toolVersion: TOOL_VERSION });
-const context = { store, scheduler, runPool, quickPool, models: modelCatalog, toolVersion: TOOL_VERSION, workBudget: config.workBudget };
+const queue = await openQueue(queueUrl);
+const scheduler = new RunScheduler({ store, pool: runPool, toolVersion: TOOL_VERSION, ...(queue ? { chunks: queue } : {}) });
+const context = { store, scheduler, runPool, quickPool, models: modelCatalog, toolVersion: TOOL_VERSION, workBudget: config.workBudget, ...(queue ? { queue } : {}) };
 const app = createApp(context, {
   pages: createPages(context, { token: config.token }),
   ...(config.token === undefined ? {} : { token: config.token }),
@@ -99,7 +121,7 @@ async function stop(signal: string): Promise<void> {
   console.log(`${signal}: stopping`);
   server.close();
   server.closeIdleConnections();
-  await Promise.all([runPool.close(), quickPool.close()]);
+  await Promise.all([runPool.close(), quickPool.close(), queue?.close()]);
   // The scheduler records interrupted runs as the pool's rejections arrive; catch any left.
   await new Promise((resolve) => setImmediate(resolve));
   store.runs.interruptUnfinished();

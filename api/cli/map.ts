@@ -4,6 +4,8 @@ import { parseArgs } from 'node:util';
 import type { MapPoint, MapQuantity } from '../engine/map/hazard-map.ts';
 import type { LonLatBounds } from '../engine/map/map-grid.ts';
 import { MAP_CAUTION, mapGeoJsonFeatures, mapGeoJsonHead, mapGeoJsonTail, valueUnit, type MapDescription } from '../engine/map/map-geojson.ts';
+import { ChunkQueue } from '../queue/chunk-queue.ts';
+import { queueUrlFrom } from '../queue/queue-setting.ts';
 import { hazardMapOnPool } from '../workers/parallel-map.ts';
 import { WorkerPool } from '../workers/worker-pool.ts';
 import { numberOption, requiredNumber, sig } from './args.ts';
@@ -25,6 +27,8 @@ or the chance of exceeding level L within the horizon.
   --out FILE          write the map there as GeoJSON points, as it is computed
   --threads N         worker threads (default: one per core)
   --json              print only machine-readable output: the GeoJSON (no --out) or a summary
+With TREMORA_QUEUE set (a Redis URL), the points are computed by \`tremora worker\` processes
+through that queue; this process lays out the ruptures and writes the map.
 A progress bar goes to stderr. Screening estimates, not design values.`;
 
 /** Characters of the progress bar. */
@@ -96,9 +100,12 @@ export async function mapVerb(args: readonly string[], io: Io): Promise<number> 
   let description: MapDescription | undefined;
   let written = 0;
   let highest: MapPoint | undefined;
-  const pool = new WorkerPool({ size: threads, name: 'tremora-map' });
+  const queueUrl = queueUrlFrom(process.env);
+  const pool = new WorkerPool({ size: queueUrl === undefined ? threads : 1, name: 'tremora-map' });
+  const queue = queueUrl === undefined ? undefined : await ChunkQueue.open({ url: queueUrl });
   try {
     const summary = await hazardMapOnPool(pool, study, map, {
+      ...(queue ? { chunks: queue } : {}),
       onStart: (d) => {
         description = d;
         write?.(mapGeoJsonHead(d));
@@ -128,6 +135,6 @@ export async function mapVerb(args: readonly string[], io: Io): Promise<number> 
     return EXIT_OK;
   } finally {
     file?.destroy();
-    await pool.close();
+    await Promise.all([pool.close(), queue?.close()]);
   }
 }

@@ -1,6 +1,7 @@
 import type { ModelCatalog } from '../engine/motion/catalog.ts';
 import type { Store } from '../store/index.ts';
-import type { RunScheduler } from '../workers/run-scheduler.ts';
+import type { RunScheduler } from '../jobs/run-scheduler.ts';
+import type { ChunkPool } from '../workers/chunk-runner.ts';
 import type { WorkerPool } from '../workers/worker-pool.ts';
 
 /** What the routes work with; server.ts builds it, tests build their own. */
@@ -18,4 +19,6 @@ export interface ServiceContext {
   readonly toolVersion: string;
   /** Most work one screening may ask for (work-budget.ts). */
   readonly workBudget: number;
+  /** The Redis queue of `tremora worker` machines (TREMORA_QUEUE), for map chunks; absent: the run pool's threads. */
+  readonly queue?: ChunkPool;
 }

@@ -1,10 +1,19 @@
 import { randomUUID } from 'node:crypto';
 import { Cancelled } from '../engine/errors.ts';
 import type { TaskKind, TaskOutputs, WorkerTask } from './messages.ts';
-import type { TaskHandle, WorkerPool } from './worker-pool.ts';
+import type { TaskEvents, TaskHandle } from './worker-pool.ts';
 
 /** A key naming one run's plan in the threads (parallel-tasks.ts keeps plans by it). */
 export const newPlanKey = (): string => randomUUID();
+
+/**
+ * Where chunks of a run are computed: the pool of threads (worker-pool.ts) or the Redis queue
+ * of many machines (api/queue). `size` is how many chunks it works on at once.
+ */
+export interface ChunkPool {
+  readonly size: number;
+  run<K extends TaskKind>(task: Extract<WorkerTask, { kind: K }>, events?: TaskEvents): TaskHandle<TaskOutputs[K]>;
+}
 
 export interface ChunkRun<K extends TaskKind> {
   readonly tasks: readonly Extract<WorkerTask, { kind: K }>[];
@@ -26,7 +35,7 @@ export interface ChunkRun<K extends TaskKind> {
  * order (an output that arrives early waits for those before it). The first failure cancels
  * the rest and rejects; so does cancel() (with Cancelled).
  */
-export function runChunks<K extends TaskKind>(pool: WorkerPool, run: ChunkRun<K>): TaskHandle<TaskOutputs[K][]> {
+export function runChunks<K extends TaskKind>(pool: ChunkPool, run: ChunkRun<K>): TaskHandle<TaskOutputs[K][]> {
   const { tasks } = run;
   const weights = run.weights ?? tasks.map(() => 1);
   const totalWeight = weights.reduce((s, w) => s + w, 0) || 1;

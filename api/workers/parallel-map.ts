@@ -3,7 +3,7 @@ import { mapSummary, mergeValidity, planHazardMap, type HazardMapSummary, type M
 import type { MapDescription } from '../engine/map/map-geojson.ts';
 import type { Study } from '../engine/model.ts';
 import { modelCatalog } from '../engine/motion/registry.ts';
-import { newPlanKey, runChunks } from './chunk-runner.ts';
+import { newPlanKey, runChunks, type ChunkPool } from './chunk-runner.ts';
 import type { MapRequest } from './messages.ts';
 import type { TaskHandle, WorkerPool } from './worker-pool.ts';
 
@@ -18,6 +18,8 @@ export interface ParallelMapOptions {
   /** Share of the map done, in (0, 1], as the threads report (finer than onPoints). */
   readonly onProgress?: (shareDone: number) => void;
   readonly chunkPoints?: number;
+  /** Where the chunks of points go (the Redis queue, api/queue); the pool's own threads by default. */
+  readonly chunks?: ChunkPool;
 }
 
 /**
@@ -46,7 +48,7 @@ export function hazardMapOnPool(pool: WorkerPool, study: Study, map: MapRequest,
     }
     const validity: MapValidity = new Map();
     let pointsDone = 0;
-    const run = runChunks(pool, {
+    const run = runChunks(options.chunks ?? pool, {
       tasks,
       weights: tasks.map((t) => t.count),
       ...(options.onProgress ? { onProgress: options.onProgress } : {}),

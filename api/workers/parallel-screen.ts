@@ -5,7 +5,7 @@ import type { Provenance } from '../engine/results.ts';
 import { finishScreening, type ScreeningOutput } from '../engine/screen-study.ts';
 import { screeningSetup } from '../engine/screening-plan.ts';
 import { buildProvenance } from '../results/provenance.ts';
-import { newPlanKey, runChunks } from './chunk-runner.ts';
+import { newPlanKey, runChunks, type ChunkPool } from './chunk-runner.ts';
 import type { ScreenOutput } from './messages.ts';
 import type { TaskHandle, WorkerPool } from './worker-pool.ts';
 
@@ -35,6 +35,8 @@ export interface ParallelScreenOptions {
   readonly onProgress?: (shareDone: number) => void;
   /** Communities per task; by default enough tasks for each thread to take about four. */
   readonly chunkSize?: number;
+  /** Where the chunks of communities go (the Redis queue, api/queue); the pool's own threads by default. */
+  readonly chunks?: ChunkPool;
 }
 
 /**
@@ -54,13 +56,14 @@ export function screenStudyOnPool(pool: WorkerPool, study: Study, options: Paral
     const { table } = await tableTask.result;
     if (cancelled) throw new Cancelled(0);
     const count = study.communities.length;
-    const chunkSize = options.chunkSize ?? Math.max(1, Math.ceil(count / (4 * pool.size)));
-    const chunks: number[][] = [];
-    for (let first = 0; first < count; first += chunkSize) chunks.push(Array.from({ length: Math.min(chunkSize, count - first) }, (_, i) => first + i));
+    const chunks = options.chunks ?? pool;
+    const chunkSize = options.chunkSize ?? Math.max(1, Math.ceil(count / (4 * chunks.size)));
+    const groups: number[][] = [];
+    for (let first = 0; first < count; first += chunkSize) groups.push(Array.from({ length: Math.min(chunkSize, count - first) }, (_, i) => first + i));
     const planKey = newPlanKey();
-    const run = runChunks(pool, {
-      tasks: chunks.map((indices) => ({ kind: 'screen-communities' as const, planKey, study, table, indices })),
-      weights: chunks.map((c) => c.length),
+    const run = runChunks(chunks, {
+      tasks: groups.map((indices) => ({ kind: 'screen-communities' as const, planKey, study, table, indices })),
+      weights: groups.map((c) => c.length),
       ...(options.onProgress ? { onProgress: options.onProgress } : {}),
     });
     active = run;
@@ -87,9 +90,14 @@ export function spreadScreening(
   inputHash: string,
   toolVersion: string,
   events: { readonly onStart?: (at: string) => void; readonly onProgress?: (share: number) => void },
+  chunks?: ChunkPool,
 ): TaskHandle<ScreenOutput> {
   const startedAt = new Date().toISOString();
-  const handle = screenStudyOnPool(pool, study, { ...(events.onStart ? { onStart: events.onStart } : {}), ...(events.onProgress ? { onProgress: events.onProgress } : {}) });
+  const handle = screenStudyOnPool(pool, study, {
+    ...(events.onStart ? { onStart: events.onStart } : {}),
+    ...(events.onProgress ? { onProgress: events.onProgress } : {}),
+    ...(chunks ? { chunks } : {}),
+  });
   return {
     result: handle.result.then((text) => {
       const provenance = buildProvenance({ study, toolVersion, inputHash, startedAt, finishedAt: new Date().toISOString() });

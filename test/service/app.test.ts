@@ -5,7 +5,7 @@ import { modelCatalog } from '../../api/engine/motion/registry.ts';
 import { createApp } from '../../api/service/app.ts';
 import type { ServiceContext } from '../../api/operations/service-context.ts';
 import { openStore, type Store } from '../../api/store/store.ts';
-import { RunScheduler } from '../../api/workers/run-scheduler.ts';
+import { RunScheduler } from '../../api/jobs/run-scheduler.ts';
 import { WorkerPool } from '../../api/workers/worker-pool.ts';
 import { expectError, expectSecurityHeaders } from './helpers/assertions.ts';
 import { tempDir } from './helpers/service-process.ts';

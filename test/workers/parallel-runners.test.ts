@@ -6,7 +6,7 @@ import { screenStudy } from '../../api/engine/screen-study.ts';
 import { hazardMapOnPool } from '../../api/workers/parallel-map.ts';
 import { screenStudyOnPool, screeningJson, screeningOutput } from '../../api/workers/parallel-screen.ts';
 import { WorkerPool } from '../../api/workers/worker-pool.ts';
-import { RunScheduler } from '../../api/workers/run-scheduler.ts';
+import { RunScheduler } from '../../api/jobs/run-scheduler.ts';
 import { openStore } from '../../api/store/store.ts';
 import { tempDir } from '../service/helpers/service-process.ts';
 import { allKindsStudy } from '../engine/fixtures/all-kinds-study.ts';

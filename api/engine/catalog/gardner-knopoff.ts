@@ -1,6 +1,7 @@
 import { InvalidInput } from '../errors.ts';
 import { MS_PER_DAY, type CatalogEvent } from './event.ts';
 import { epicentralDistanceKm, MIN_KM_PER_DEGREE_LATITUDE } from './epicentral.ts';
+import { epicentreGrid, MIN_CELL_KM, visitNear } from './epicentre-grid.ts';
 import { selectByMagnitudeType, type MagnitudeSelectionOptions } from './magnitude-type.ts';
 
 /**
@@ -16,6 +17,11 @@ import { selectByMagnitudeType, type MagnitudeSelectionOptions } from './magnitu
  * cluster becomes a mainshock, and every event not yet in a cluster within L of its epicentre
  * and within T after it (and, by default, within T before it, as foreshocks) joins its cluster.
  * So each cluster's mainshock is its largest event.
+ *
+ * Search: epicentres are filed in space (epicentre-grid.ts) and numbered in time order, so a
+ * mainshock visits only events near it inside its time window, and the cost grows about
+ * linearly with the catalog rather than with its square. Candidates are taken in time order,
+ * so the result is the one the plain scan of every event in the window gives.
  */
 export const GARDNER_KNOPOFF_WINDOWS =
   'Gardner & Knopoff (1974) windows, fitted form: L = 10^(0.1238 M + 0.983) km; T = 10^(0.032 M + 2.7389) days (M >= 6.5), 10^(0.5409 M − 0.547) days (M < 6.5)';
@@ -65,10 +71,22 @@ export function declusterGardnerKnopoff(events: readonly CatalogEvent[], options
   });
   const n = byTime.length;
   const times = byTime.map((e) => e.timeMs);
-  const order = byTime.map((_, i) => i).sort((a, b) => (byTime[b] as CatalogEvent).magnitude - (byTime[a] as CatalogEvent).magnitude || a - b);
+  const magnitudes = Float64Array.from(byTime, (e) => e.magnitude);
+  const order = Int32Array.from(byTime, (_, i) => i).sort((a, b) => (magnitudes[b] as number) - (magnitudes[a] as number) || a - b);
+  const smallest = n === 0 ? 0 : (magnitudes[order[n - 1] as number] as number);
+  // Cells as wide as the smallest window: most mainshocks are small, and theirs then spans a few cells.
+  const grid = epicentreGrid(
+    byTime.map((e) => e.lon),
+    byTime.map((e) => e.lat),
+    Math.max(MIN_CELL_KM, gardnerKnopoffWindow(smallest).distanceKm),
+  );
   const mainshockOf = new Int32Array(n).fill(-1);
-  const removed: RemovedEvent[] = [];
+  // Each removed event by its time-order index, and the order in which it was removed.
+  const removedAt: (RemovedEvent | undefined)[] = new Array(n);
+  const removedSeq = new Int32Array(n);
+  let removedCount = 0;
   const clustered = new Set<number>();
+  const near: number[] = [];
   for (const i of order) {
     if (mainshockOf[i] !== -1) continue;
     mainshockOf[i] = i;
@@ -76,25 +94,54 @@ export function declusterGardnerKnopoff(events: readonly CatalogEvent[], options
     const window = gardnerKnopoffWindow(main.magnitude);
     const windowMs = window.days * MS_PER_DAY;
     const from = foreshocks ? firstAtOrAfter(times, main.timeMs - windowMs) : i + 1;
-    for (let j = from; j < n && (times[j] as number) <= main.timeMs + windowMs; j++) {
-      if (j === i || mainshockOf[j] !== -1) continue;
+    const to = firstAfter(times, main.timeMs + windowMs);
+    near.length = 0;
+    visitNear(grid, i, window.distanceKm, from, to, (j) => {
+      if (j !== i && mainshockOf[j] === -1) near.push(j);
+    });
+    near.sort((a, b) => a - b);
+    for (const j of near) {
       const other = byTime[j] as CatalogEvent;
       if (Math.abs(other.lat - main.lat) * MIN_KM_PER_DEGREE_LATITUDE > window.distanceKm) continue;
       const distanceKm = epicentralDistanceKm(main.lon, main.lat, other.lon, other.lat);
       if (distanceKm > window.distanceKm) continue;
       mainshockOf[j] = i;
       clustered.add(i);
-      removed.push({ event: other, mainshockId: main.id, distanceKm, daysFromMainshock: (other.timeMs - main.timeMs) / MS_PER_DAY });
+      removedAt[j] = { event: other, mainshockId: main.id, distanceKm, daysFromMainshock: (other.timeMs - main.timeMs) / MS_PER_DAY };
+      removedSeq[j] = removedCount++;
     }
   }
-  removed.sort((a, b) => a.event.timeMs - b.event.timeMs);
   return {
     mainshocks: byTime.filter((_, i) => mainshockOf[i] === i),
-    removed,
+    removed: inTimeOrder(removedAt, removedSeq, times),
     clusterCount: clustered.size,
     excludedNonMoment: selected.excludedNonMoment,
     windows: GARDNER_KNOPOFF_WINDOWS,
   };
+}
+
+/**
+ * Removed events in time order, events at the same instant in the order they were removed
+ * (as a stable sort by time of the removal list gives).
+ */
+function inTimeOrder(removedAt: readonly (RemovedEvent | undefined)[], removedSeq: Int32Array, times: readonly number[]): RemovedEvent[] {
+  const removed: RemovedEvent[] = [];
+  for (let start = 0; start < times.length; ) {
+    let end = start + 1;
+    while (end < times.length && times[end] === times[start]) end++;
+    if (end === start + 1) {
+      const only = removedAt[start];
+      if (only !== undefined) removed.push(only);
+      start = end;
+      continue;
+    }
+    const instant: number[] = [];
+    for (let j = start; j < end; j++) if (removedAt[j] !== undefined) instant.push(j);
+    instant.sort((a, b) => (removedSeq[a] as number) - (removedSeq[b] as number));
+    for (const j of instant) removed.push(removedAt[j] as RemovedEvent);
+    start = end;
+  }
+  return removed;
 }
 
 /** Index of the first time >= t in ascending `times` (binary search). */
@@ -104,6 +151,18 @@ function firstAtOrAfter(times: readonly number[], t: number): number {
   while (lo < hi) {
     const mid = (lo + hi) >>> 1;
     if ((times[mid] as number) < t) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
+
+/** Index of the first time > t in ascending `times` (binary search). */
+function firstAfter(times: readonly number[], t: number): number {
+  let lo = 0;
+  let hi = times.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if ((times[mid] as number) <= t) lo = mid + 1;
     else hi = mid;
   }
   return lo;

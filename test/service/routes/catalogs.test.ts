@@ -4,7 +4,7 @@ import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import { createApp } from '../../../api/service/app.ts';
 import type { ServiceContext } from '../../../api/operations/service-context.ts';
 import { openStore, type Store } from '../../../api/store/store.ts';
-import { RunScheduler } from '../../../api/workers/run-scheduler.ts';
+import { RunScheduler } from '../../../api/jobs/run-scheduler.ts';
 import { WorkerPool } from '../../../api/workers/worker-pool.ts';
 import { DEFAULT_FIT, EAST_ZONE, EAST_ZONE_FIT, FELT_CATALOG_CSV, FELT_EXPECTED, feltStudy, FIT_CATALOG_CSV, SPAN_YEARS } from '../../helpers/catalog-fixtures.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';

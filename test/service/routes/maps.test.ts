@@ -5,7 +5,7 @@ import { createApp } from '../../../api/service/app.ts';
 import { DEMO_STUDY_URL } from '../../../api/operations/demo-seed.ts';
 import type { ServiceContext } from '../../../api/operations/service-context.ts';
 import { openStore, type Store } from '../../../api/store/store.ts';
-import { RunScheduler } from '../../../api/workers/run-scheduler.ts';
+import { RunScheduler } from '../../../api/jobs/run-scheduler.ts';
 import { WorkerPool } from '../../../api/workers/worker-pool.ts';
 import { expectRelative } from '../../helpers/close.ts';
 import { expectError } from '../helpers/assertions.ts';

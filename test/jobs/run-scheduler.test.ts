@@ -1,11 +1,11 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { openStore, type Store } from '../../api/store/store.ts';
-import { RunScheduler } from '../../api/workers/run-scheduler.ts';
+import { RunScheduler } from '../../api/jobs/run-scheduler.ts';
 import { WorkerPool } from '../../api/workers/worker-pool.ts';
 import { tempDir } from '../service/helpers/service-process.ts';
-import { namedStudy } from './fixtures/studies.ts';
+import { namedStudy } from '../workers/fixtures/studies.ts';
 
-const FIXTURE = new URL('./fixtures/crash-worker.ts', import.meta.url);
+const FIXTURE = new URL('../workers/fixtures/crash-worker.ts', import.meta.url);
 
 let dir: ReturnType<typeof tempDir>;
 let store: Store;
