@@ -1,10 +1,11 @@
 import type { Context, Hono } from 'hono';
 import type { InputIssue } from '../../api/engine/errors.ts';
 import type { Community } from '../../api/engine/model.ts';
+import { COMMUNITY_COLUMNS, type ColumnChoice } from '../../api/study/community-files/column-names.ts';
+import { importCommunitiesFile } from '../data/community-import.ts';
 import { readStudy, type StudyData } from '../data/study-data.ts';
 import {
   communityList,
-  importCommunitiesCsv,
   importSourcesGeoJson,
   issueField,
   removeCommunity,
@@ -173,11 +174,37 @@ export function editorPages(app: Hono, kit: PageKit): void {
     const file = fileField(await c.req.parseBody(), 'file');
     if (!file) return editor(c, loaded.data, { problem: { upload: kind, issues: [{ path: '(file)', message: tr.t('editor.upload.noFile') }] } });
     const text = await file.text();
-    const outcome = kind === 'communities' ? importCommunitiesCsv(loaded.data.inputs, text, ctx.models) : importSourcesGeoJson(loaded.data.inputs, text, ctx.models);
+    const outcome = importSourcesGeoJson(loaded.data.inputs, text, ctx.models);
     if (!outcome.ok) return editor(c, loaded.data, { problem: { upload: kind, issues: outcome.issues, text } });
     write(loaded.data, outcome);
     return c.redirect(`/studies/${loaded.data.record.id}/edit?saved=1`, 303);
   };
-  app.post('/studies/:id/edit/communities-csv', upload('communities'));
+
+  // A communities file of any accepted format; the column choice form posts here too, with the
+  // file carried back (fileName, fileData in base64) or chosen again.
+  app.post('/studies/:id/edit/communities-csv', async (c) => {
+    const loaded = load(c);
+    if ('response' in loaded) return loaded.response;
+    const tr = kit.tr(c);
+    const form = await c.req.parseBody();
+    const file = fileField(form, 'file');
+    const carried = field(form, 'fileData');
+    const carriedName = field(form, 'fileName');
+    const upload = file
+      ? { bytes: new Uint8Array(await file.arrayBuffer()), name: file.name }
+      : carried && carriedName
+        ? { bytes: new Uint8Array(Buffer.from(carried, 'base64')), name: carriedName }
+        : undefined;
+    if (!upload) return editor(c, loaded.data, { problem: { upload: 'communities', issues: [{ path: '(file)', message: tr.t('editor.upload.noFile') }] } });
+    const choice: ColumnChoice = {};
+    for (const key of COMMUNITY_COLUMNS) {
+      const column = field(form, `column.${key}`);
+      if (column) choice[key] = column;
+    }
+    const outcome = await importCommunitiesFile(loaded.data.inputs, upload.bytes, upload.name, choice, ctx.models);
+    if (!outcome.ok) return editor(c, loaded.data, { problem: { upload: 'communities', issues: outcome.issues, ...(outcome.text !== undefined ? { text: outcome.text } : {}), ...(outcome.pick ? { pick: outcome.pick } : {}) } });
+    write(loaded.data, outcome);
+    return c.redirect(`/studies/${loaded.data.record.id}/edit?saved=1`, 303);
+  });
   app.post('/studies/:id/edit/sources-geojson', upload('sources'));
 }

@@ -14,6 +14,7 @@ import type { TextKey } from '../text/en.ts';
 import type { Translator } from '../text/translator.ts';
 import { FeltList } from './felt-list.tsx';
 import { SafetyAdvice } from './safety-advice.tsx';
+import { CommunityDetails } from './community-details.tsx';
 
 export interface CommunityViewProps {
   readonly tr: Translator;
@@ -216,6 +217,7 @@ export function CommunityView(props: CommunityViewProps) {
         </section>
       )}
       <FeltList tr={tr} studyId={studyId} communityName={community.name} {...(props.felt ? { felt: props.felt } : {})} tooMany={props.feltTooMany === true} limit={8} headingLevel={2} />
+      <CommunityDetails tr={tr} details={community.details} />
       <section aria-labelledby="todo-heading">
         <h2 id="todo-heading">{tr.text('community.todo')}</h2>
         <SafetyAdvice tr={tr} coastal={community.coastal} headingLevel={3} />

@@ -1,0 +1,57 @@
+import type { InputIssue } from '../../api/engine/errors.ts';
+import type { ModelCatalog } from '../../api/engine/motion/catalog.ts';
+import type { StoredInputs } from '../../api/service/study-input.ts';
+import type { ColumnChoice, CommunityColumn } from '../../api/study/community-files/column-names.ts';
+import { communitiesCsvText } from '../../api/study/community-files/communities-csv-text.ts';
+import { CommunityFileProblem } from '../../api/study/community-files/file-problem.ts';
+import { readCommunityFile } from '../../api/study/community-files/read-community-file.ts';
+import { tableCommunities } from '../../api/study/community-files/table-communities.ts';
+import { IssueList } from '../../api/study/issues.ts';
+import { importCommunitiesCsv, type EditOutcome } from './study-edits.ts';
+
+/**
+ * Largest file sent back in the column-choice form (as base64, a third larger) so the user need
+ * not choose it again; a larger one is asked for again, as the request limit is 5 MiB.
+ */
+export const MAX_CARRIED_BYTES = 3 * 1024 * 1024;
+
+/** A file whose required columns were not recognised: its columns to pick from. */
+export interface ColumnPick {
+  readonly fileName: string;
+  /** The file as base64, when small enough to carry in the form. */
+  readonly fileData?: string;
+  readonly columns: readonly string[];
+  readonly missing: readonly CommunityColumn[];
+  readonly chosen: ColumnChoice;
+}
+
+export type CommunityImport =
+  | (EditOutcome & { readonly ok: true })
+  | { readonly ok: false; readonly issues: readonly InputIssue[]; readonly pick?: ColumnPick; readonly text?: string };
+
+/**
+ * Replaces a study's communities from a file in any accepted format (CSV, XLSX, KML, KMZ,
+ * zipped shapefile, GeoJSON), with columns picked by the user where their names were not
+ * recognised. The communities are kept as CSV with Tremora's header (communitiesCsvText), so
+ * the saved study reads back the same whatever the file was; nothing is saved on any problem.
+ */
+export async function importCommunitiesFile(inputs: StoredInputs, bytes: Uint8Array, fileName: string, choice: ColumnChoice, models: ModelCatalog): Promise<CommunityImport> {
+  const issues = new IssueList();
+  let table;
+  try {
+    table = await readCommunityFile(bytes, fileName, ['communities'], issues);
+  } catch (error) {
+    if (!(error instanceof CommunityFileProblem)) throw error;
+    return { ok: false, issues: [{ path: 'communities', message: error.message }] };
+  }
+  const { communities, missingColumns, columns } = tableCommunities(table, ['communities'], issues, choice);
+  if (issues.issues.length > 0) {
+    const text = table.format === 'CSV' ? new TextDecoder().decode(bytes) : undefined;
+    const pick: ColumnPick | undefined =
+      missingColumns.length === 0
+        ? undefined
+        : { fileName, columns, missing: missingColumns, chosen: choice, ...(bytes.byteLength <= MAX_CARRIED_BYTES ? { fileData: Buffer.from(bytes).toString('base64') } : {}) };
+    return { ok: false, issues: issues.issues, ...(pick ? { pick } : {}), ...(text !== undefined ? { text } : {}) };
+  }
+  return importCommunitiesCsv(inputs, communitiesCsvText(communities), models) as CommunityImport;
+}
