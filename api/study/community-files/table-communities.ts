@@ -86,7 +86,7 @@ export function tableCommunities(table: CommunityTable, rootPath: readonly Prope
     const said = missingColumns.includes('vs30') ? [...missingColumns.filter((k) => k !== 'vs30' && k !== 'siteClass'), 'vs30' as const] : missingColumns;
     for (const key of said) {
       const accepts = key === 'vs30' ? `vs30 (m/s), accepted as ${acceptedSpellings('vs30')}; or site class, accepted as ${acceptedSpellings('siteClass')}` : `${COLUMN_MEANINGS[key]}, accepted as ${acceptedSpellings(key)}`;
-      issues.add([...rootPath, `[${table.hasGeometry ? 'properties' : 'line 1'}]`], `${where}: no column recognised for ${accepts} (any case); the file's columns are ${table.columns.map((c) => `"${c}"`).join(', ') || 'none'}`);
+      issues.add([...rootPath, table.hasGeometry ? '[properties]' : table.format === 'CSV' ? '[line 1]' : '[header]'], `${where}: no column recognised for ${accepts} (any case); the file's columns are ${table.columns.map((c) => `"${c}"`).join(', ') || 'none'}`);
     }
     return result([]);
   }
