@@ -16,7 +16,7 @@ import type { Measure } from '../../../api/engine/motion/measure.ts';
 import { probeMotion } from '../../../api/engine/motion/probe.ts';
 import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
-import { readProbeRequest } from '../../../api/service/probe-request.ts';
+import { readProbeRequest } from '../../../api/operations/probe-request.ts';
 import { expectClose } from '../../helpers/close.ts';
 import { inputOf, measureOf, readReferenceVectors } from './reference-vector-cases.ts';
 
