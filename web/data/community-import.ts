@@ -1,6 +1,6 @@
 import type { InputIssue } from '../../api/engine/errors.ts';
 import type { ModelCatalog } from '../../api/engine/motion/catalog.ts';
-import type { StoredInputs } from '../../api/service/study-input.ts';
+import type { StoredInputs } from '../../api/operations/study-input.ts';
 import type { ColumnChoice, CommunityColumn } from '../../api/study/community-files/column-names.ts';
 import { communitiesCsvText } from '../../api/study/community-files/communities-csv-text.ts';
 import { CommunityFileProblem } from '../../api/study/community-files/file-problem.ts';
