@@ -4,6 +4,7 @@ import type { CatalogEvent } from '../engine/catalog/event.ts';
 import { frequencyMagnitude, type FrequencyMagnitude } from '../engine/catalog/frequency-magnitude.ts';
 import { declusterGardnerKnopoff, type DeclusteredCatalog } from '../engine/catalog/gardner-knopoff.ts';
 import { fitGutenbergRichter, fitGutenbergRichterWeichert, observationSpan, type GutenbergRichterFit } from '../engine/catalog/gutenberg-richter-fit.ts';
+import { convertMagnitudes, type MagnitudeConversion } from '../engine/catalog/magnitude-conversion.ts';
 import { selectByMagnitudeType, type MagnitudeSelection } from '../engine/catalog/magnitude-type.ts';
 import { insideZone, zonePolygon } from '../engine/catalog/zone-polygon.ts';
 import { zoneRecurrence, type ZoneRecurrence } from '../engine/catalog/zone-recurrence.ts';
@@ -21,6 +22,8 @@ import type { LonLat } from '../engine/model.ts';
  */
 export interface CatalogFit {
   readonly magnitudes: MagnitudeSelection;
+  /** Conversions to moment magnitude the user chose: events converted and left outside each relation's range, by relation id. */
+  readonly conversion?: Pick<MagnitudeConversion, 'converted' | 'outsideRange'>;
   readonly excludedNonMoment: number;
   /** Undefined when declustering was turned off. */
   readonly declustering?: DeclusteredCatalog;
@@ -79,6 +82,11 @@ export interface CatalogFitOptions {
   readonly decluster?: boolean;
   /** Default 'moment'. */
   readonly magnitudes?: MagnitudeSelection;
+  /**
+   * Relations (ids from engine/catalog/magnitude-conversion.ts) converting ML, mb or Ms events
+   * to moment magnitude before the selection; default none, so other magnitudes are left out.
+   */
+  readonly conversions?: readonly string[];
   /** Bin width of the reported magnitudes; default 0.1. */
   readonly magnitudeStep?: number;
   /** A completeness magnitude (bin centre); default maximum curvature of the zone's events. */
@@ -105,7 +113,8 @@ export function fitCatalog(events: readonly CatalogEvent[], options: CatalogFitO
   const magnitudes = options.magnitudes ?? 'moment';
   const names = options.optionNames ?? SERVICE_OPTION_NAMES;
   const notes: string[] = [];
-  const selected = selectByMagnitudeType(events, magnitudes);
+  const conversion = options.conversions && options.conversions.length > 0 ? convertMagnitudes(events, options.conversions) : undefined;
+  const selected = selectByMagnitudeType(conversion?.events ?? events, magnitudes);
   if (selected.events.length === 0) {
     throw new InvalidInput([
       { path: 'magnitudes', message: `expected moment magnitudes; none of the ${plural(events.length, 'event')} has one. Ask for all magnitudes to fit them as they are` },
@@ -188,6 +197,7 @@ export function fitCatalog(events: readonly CatalogEvent[], options: CatalogFitO
   return {
     warnings: findings.map((f) => findingText(f, names, chosen.observationYears)),
     magnitudes,
+    ...(conversion ? { conversion: { converted: conversion.converted, outsideRange: conversion.outsideRange } } : {}),
     excludedNonMoment: selected.excludedNonMoment,
     ...(declustering ? { declustering } : {}),
     zone: { given: options.rings !== undefined, eventsInZone: fitted.length, eventsOutside: kept.length - fitted.length },

@@ -93,6 +93,7 @@ export const catalogFitJson = (fit: CatalogFit) => {
   return {
     magnitudes: fit.magnitudes,
     excludedNonMoment: fit.excludedNonMoment,
+    conversion: fit.conversion ?? null,
     declustering: d
       ? {
           applied: true,

@@ -8,6 +8,7 @@ import { describeCatalogLoad, type CatalogLoad } from '../catalog/catalog-load.t
 import { parseIsoTimeMs } from '../catalog/iso-time.ts';
 import { readZonePolygon } from '../catalog/zone-geojson.ts';
 import { feltHistory, FELT_MMI, STRONGLY_FELT_MMI, type Compass, type FeltEstimate, type FeltHistory } from '../engine/catalog/felt-history.ts';
+import { MAGNITUDE_RELATIONS } from '../engine/catalog/magnitude-conversion.ts';
 import { InvalidInput } from '../engine/errors.ts';
 import { mmiRoman } from '../engine/intensity/mmi-roman.ts';
 import { modelCatalog } from '../engine/motion/registry.ts';
@@ -28,6 +29,9 @@ tremora catalog fit CATALOG [--polygon FILE] [--m-max M] [--no-decluster] [--all
   --m-max M           largest magnitude the zone can host: gives the recurrence to paste into a study
   --no-decluster      keep foreshocks and aftershocks
   --all-magnitudes    use every magnitude type as it is (default: moment magnitudes only)
+  --convert IDS       convert ML, mb or Ms to Mw by the relations named (comma-separated):
+                      scordilis2006-ms, scordilis2006-mb, grunthal2009-ml; events outside a
+                      relation's range are not converted; converted events are counted
   --start --end TIME  the catalog's observation span, ISO 8601 (default: first to last event,
                       which shortens it and so raises the rates)
   --periods LIST      completeness periods for a Weichert (1980) fit, as M@TIME pairs, e.g.
@@ -88,7 +92,7 @@ async function fitVerb(args: readonly string[], io: Io): Promise<number> {
   const { values, positionals } = parseArgs({
     args: [...args],
     options: {
-      polygon: { type: 'string' }, 'm-max': { type: 'string' }, 'no-decluster': { type: 'boolean' }, 'all-magnitudes': { type: 'boolean' },
+      polygon: { type: 'string' }, 'm-max': { type: 'string' }, 'no-decluster': { type: 'boolean' }, 'all-magnitudes': { type: 'boolean' }, convert: { type: 'string' },
       start: { type: 'string' }, end: { type: 'string' }, periods: { type: 'string' }, json: { type: 'boolean' },
     },
     allowPositionals: true,
@@ -102,6 +106,7 @@ async function fitVerb(args: readonly string[], io: Io): Promise<number> {
   const endMs = values.end === undefined ? undefined : timeOption(values.end, 'end');
   if (startMs !== undefined && endMs !== undefined && !(endMs > startMs)) throw new UsageError(`--end: expected a time after --start ${values.start}, got ${values.end}`);
   const periods = values.periods === undefined ? undefined : periodsOption(values.periods);
+  const conversions = values.convert === undefined ? undefined : conversionOption(values.convert);
   let rings;
   if (values.polygon !== undefined) {
     const parsed = parseJsonText(await readTextFile(values.polygon, 'polygon file'), values.polygon);
@@ -114,6 +119,7 @@ async function fitVerb(args: readonly string[], io: Io): Promise<number> {
     ...(mMax === undefined ? {} : { mMax }),
     decluster: !values['no-decluster'],
     magnitudes: values['all-magnitudes'] ? 'all' : 'moment',
+    ...(conversions ? { conversions } : {}),
     ...(startMs === undefined || endMs === undefined ? {} : { startMs, endMs }),
     ...(periods === undefined ? {} : { periods }),
     optionNames: CLI_OPTION_NAMES,
@@ -130,6 +136,25 @@ async function fitVerb(args: readonly string[], io: Io): Promise<number> {
 const CLI_OPTION_NAMES: FitOptionNames = { span: '--start and --end', mMax: '--m-max', periods: '--periods proposed, or your own', decluster: '--no-decluster' };
 
 const plural = (n: number, one: string, many = `${one}s`): string => `${n} ${n === 1 ? one : many}`;
+
+/** `--convert scordilis2006-mb,grunthal2009-ml`: relation ids, each known. */
+function conversionOption(text: string): string[] {
+  const ids = text.split(',').map((s) => s.trim()).filter((s) => s !== '');
+  const known = MAGNITUDE_RELATIONS.map((r) => r.id);
+  for (const id of ids) if (!known.includes(id)) throw new UsageError(`--convert: expected relation ids among ${known.join(', ')}; got "${id}"`);
+  return ids;
+}
+
+/** The conversions of a fit, one line per relation: how many converted, how many outside its range. */
+function conversionLines(fit: CatalogFit): string[] {
+  if (!fit.conversion) return [];
+  const ids = [...new Set([...Object.keys(fit.conversion.converted), ...Object.keys(fit.conversion.outsideRange)])];
+  return ids.map((id) => {
+    const r = MAGNITUDE_RELATIONS.find((x) => x.id === id) as (typeof MAGNITUDE_RELATIONS)[number];
+    const outside = fit.conversion?.outsideRange[id] ?? 0;
+    return `Converted to Mw: ${plural(fit.conversion?.converted[id] ?? 0, `${r.scale} event`)} by ${r.source}${outside > 0 ? `; ${outside} outside ${r.scale} ${r.min}–${r.max} not converted (left out)` : ''}`;
+  });
+}
 const day = (timeMs: number): string => isoTime(timeMs).slice(0, 10);
 /** Magnitudes as catalogs print them: one decimal, two for bin edges such as 4.15. */
 const mag = (m: number): string => (Math.abs(m * 10 - Math.round(m * 10)) < 1e-6 ? m.toFixed(1) : m.toFixed(2));
@@ -141,6 +166,7 @@ export function fitLines(fileName: string, load: CatalogLoad, fit: CatalogFit, p
     fit.magnitudes === 'all'
       ? 'Magnitudes: every magnitude type, as reported'
       : `Magnitudes: moment magnitudes only${fit.excludedNonMoment > 0 ? ` (${plural(fit.excludedNonMoment, 'event')} of other types left out)` : ''}`,
+    ...conversionLines(fit),
   );
   const d = fit.declustering;
   if (!d) lines.push('Declustering: none (foreshocks and aftershocks kept)');

@@ -28,6 +28,8 @@ export interface Community {
   readonly population?: number;
   readonly coastal: boolean;
   readonly elevationM?: number;
+  /** What the community's file says that the computation does not use (school, clinic, notes), shown on its page. */
+  readonly details?: Readonly<Record<string, string>>;
 }
 
 export type Recurrence = GutenbergRichterRecurrence | MomentBalancedRecurrence | FixedRecurrence;

@@ -5,7 +5,16 @@ import { formatPath, type IssueList } from './issues.ts';
 import { SITE_CLASSES, SITE_CLASS_VS30 } from './site-class.ts';
 
 /** The keys a community may carry (DESIGN.md section 2, plus siteClass). */
-export const COMMUNITY_KEYS = ['id', 'name', 'lon', 'lat', 'vs30', 'siteClass', 'population', 'coastal', 'elevationM'] as const;
+export const COMMUNITY_KEYS = ['id', 'name', 'lon', 'lat', 'vs30', 'siteClass', 'population', 'coastal', 'elevationM', 'details'] as const;
+
+/**
+ * A community's details: what its file says that Tremora does not use (school, clinic,
+ * airstrip, notes), kept as text and shown on its page. Bounded so that a wide spreadsheet
+ * cannot swell a study.
+ */
+const detailsSchema = z
+  .record(z.string().min(1).max(80), z.string().max(500, 'expected at most 500 characters'))
+  .refine((d) => Object.keys(d).length <= 30, { message: 'expected at most 30 details' });
 
 /**
  * Vs30 accepted from 50 to 5,000 m/s: beyond those it is surely a unit slip (ft/s, km/s).
@@ -23,6 +32,7 @@ export const communitySchema = z.object({
     population: numberIn({ min: 0, max: 1e8, integer: true, unit: 'people' }).optional(),
     coastal: yesNo().optional(),
     elevationM: numberIn({ min: -500, max: 9000, unit: 'm' }).optional(),
+    details: detailsSchema.optional(),
   });
 
 export type CommunityInput = z.output<typeof communitySchema>;
@@ -41,6 +51,7 @@ export function toCommunity(c: CommunityInput): Community {
     ...(c.population !== undefined ? { population: c.population } : {}),
     coastal: c.coastal ?? false,
     ...(c.elevationM !== undefined ? { elevationM: c.elevationM } : {}),
+    ...(c.details !== undefined && Object.keys(c.details).length > 0 ? { details: c.details } : {}),
   };
 }
 

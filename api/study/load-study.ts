@@ -4,6 +4,8 @@ import type { ModelCatalog } from '../engine/motion/catalog.ts';
 import { readBranches } from './branches-schema.ts';
 import { MAX_COMMUNITIES, readCommunities } from './community-schema.ts';
 import { readCommunitiesCsv } from './communities-csv.ts';
+import type { CommunityTable } from './community-files/community-table.ts';
+import { tableCommunities } from './community-files/table-communities.ts';
 import { describeValue, text } from './fields.ts';
 import { IssueList } from './issues.ts';
 import { readSettings } from './settings-schema.ts';
@@ -26,6 +28,11 @@ export interface LoadStudyOptions {
    * (CLI, service) reads the file, so loading stays free of I/O.
    */
   readonly communitiesCsv?: string;
+  /**
+   * The file `communities` names, read into a table by its format's reader
+   * (community-files/read-community-file.ts); used instead of `communitiesCsv` when given.
+   */
+  readonly communitiesTable?: CommunityTable;
 }
 
 /**
@@ -64,14 +71,15 @@ export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
 
 function readStudyCommunities(raw: unknown, options: LoadStudyOptions, issues: IssueList): Community[] {
   if (typeof raw === 'string') {
+    if (options.communitiesTable !== undefined) return tableCommunities(options.communitiesTable, ['communities'], issues).communities;
     if (options.communitiesCsv === undefined) {
-      issues.add(['communities'], `a CSV file "${raw}" is named here but its text was not supplied; expected a list of communities or a readable CSV file`);
+      issues.add(['communities'], `a file "${raw}" is named here but its contents were not supplied; expected a list of communities or a readable communities file`);
       return [];
     }
-    return readCommunitiesCsv(options.communitiesCsv, ['communities'], issues).communities;
+    return readCommunitiesCsv(options.communitiesCsv, ['communities'], issues, raw).communities;
   }
   if (!Array.isArray(raw) || raw.length === 0 || raw.length > MAX_COMMUNITIES) {
-    issues.add(['communities'], `expected a list of 1 to ${MAX_COMMUNITIES} communities (or the path of a CSV file), got ${describeValue(raw)}`);
+    issues.add(['communities'], `expected a list of 1 to ${MAX_COMMUNITIES} communities (or the path of a communities file: CSV, XLSX, KML, KMZ, zipped shapefile or GeoJSON), got ${describeValue(raw)}`);
     return [];
   }
   return readCommunities(raw, issues, (i) => ['communities', i]);

@@ -228,11 +228,12 @@ describe('loadStudy: communities from CSV', () => {
     ]);
   });
 
-  it('reports a header without the required columns', () => {
+  it('reports a header without the required columns, with the names it accepts and the columns it found', () => {
     const study = { ...validStudy(), communities: 'villages.csv' };
     const result = load(study, 'id,title,lon,lat\nx,X,1,2');
     expect(result.ok ? [] : lines([...result.issues])).toEqual([
-      'communities[line 1]: header is missing column(s) name, vs30 or siteClass; expected id,name,lon,lat,vs30,siteClass,population,coastal,elevationM',
+      'communities[line 1]: villages.csv (header): no column recognised for the community name, accepted as name, village, village name, community, community name, settlement, place, place name, site name (any case); the file\'s columns are "id", "title", "lon", "lat"',
+      'communities[line 1]: villages.csv (header): no column recognised for vs30 (m/s), accepted as vs30, vs 30; or site class, accepted as siteClass, site class, soil class, ground class, class (any case); the file\'s columns are "id", "title", "lon", "lat"',
     ]);
   });
 });

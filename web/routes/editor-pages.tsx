@@ -1,10 +1,11 @@
 import type { Context, Hono } from 'hono';
 import type { InputIssue } from '../../api/engine/errors.ts';
 import type { Community } from '../../api/engine/model.ts';
+import { COMMUNITY_COLUMNS, type ColumnChoice } from '../../api/study/community-files/column-names.ts';
+import { applyCommunitiesFile, readCommunitiesFile } from '../data/community-import.ts';
 import { readStudy, type StudyData } from '../data/study-data.ts';
 import {
   communityList,
-  importCommunitiesCsv,
   importSourcesGeoJson,
   issueField,
   removeCommunity,
@@ -185,7 +186,7 @@ export function editorPages(app: Hono, kit: PageKit): void {
     return c.redirect(`/studies/${loaded.data.record.id}/edit?saved=1`, 303);
   });
 
-  const upload = (kind: 'communities' | 'sources') => async (c: Context) => {
+  const upload = (kind: 'sources') => async (c: Context) => {
     const loaded = load(c);
     if ('response' in loaded) return loaded.response;
     const tr = kit.tr(c);
@@ -193,12 +194,42 @@ export function editorPages(app: Hono, kit: PageKit): void {
     if (!file) return editor(c, loaded.data, { problem: { upload: kind, issues: [{ path: '(file)', message: tr.t('editor.upload.noFile') }] } });
     const text = await file.text();
     return afterBody(c, (data) => {
-      const outcome = kind === 'communities' ? importCommunitiesCsv(data.inputs, text, ctx.models) : importSourcesGeoJson(data.inputs, text, ctx.models);
+      const outcome = importSourcesGeoJson(data.inputs, text, ctx.models);
       if (!outcome.ok) return editor(c, data, { problem: { upload: kind, issues: outcome.issues, text } });
       write(data, outcome);
       return c.redirect(`/studies/${data.record.id}/edit?saved=1`, 303);
     });
   };
-  app.post('/studies/:id/edit/communities-csv', upload('communities'));
+
+  // A communities file of any accepted format; the column choice form posts here too, with the
+  // file carried back (fileName, fileData in base64) or chosen again.
+  app.post('/studies/:id/edit/communities-csv', async (c) => {
+    const loaded = load(c);
+    if ('response' in loaded) return loaded.response;
+    const tr = kit.tr(c);
+    const form = await c.req.parseBody();
+    const file = fileField(form, 'file');
+    const carried = field(form, 'fileData');
+    const carriedName = field(form, 'fileName');
+    const upload = file
+      ? { bytes: new Uint8Array(await file.arrayBuffer()), name: file.name }
+      : carried && carriedName
+        ? { bytes: new Uint8Array(Buffer.from(carried, 'base64')), name: carriedName }
+        : undefined;
+    if (!upload) return editor(c, loaded.data, { problem: { upload: 'communities', issues: [{ path: '(file)', message: tr.t('editor.upload.noFile') }] } });
+    const choice: ColumnChoice = {};
+    for (const key of COMMUNITY_COLUMNS) {
+      const column = field(form, `column.${key}`);
+      if (column) choice[key] = column;
+    }
+    const read = await readCommunitiesFile(upload.bytes, upload.name, choice);
+    // Applied to the study as read after the file has arrived, in one transaction with the write.
+    return afterBody(c, (data) => {
+      const outcome = applyCommunitiesFile(data.inputs, read, ctx.models);
+      if (!outcome.ok) return editor(c, data, { problem: { upload: 'communities', issues: outcome.issues, ...(outcome.text !== undefined ? { text: outcome.text } : {}), ...(outcome.pick ? { pick: outcome.pick } : {}) } });
+      write(data, outcome);
+      return c.redirect(`/studies/${data.record.id}/edit?saved=1`, 303);
+    });
+  });
   app.post('/studies/:id/edit/sources-geojson', upload('sources'));
 }

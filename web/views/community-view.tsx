@@ -16,6 +16,7 @@ import { FeltList } from './felt-list.tsx';
 import { SafetyAdvice } from './safety-advice.tsx';
 import type { TsunamiPageResult } from '../data/tsunami-data.ts';
 import { TsunamiTime } from './tsunami-time.tsx';
+import { CommunityDetails } from './community-details.tsx';
 
 export interface CommunityViewProps {
   readonly tr: Translator;
@@ -222,6 +223,7 @@ export function CommunityView(props: CommunityViewProps) {
         </section>
       )}
       <FeltList tr={tr} studyId={studyId} communityName={community.name} {...(props.felt ? { felt: props.felt } : {})} tooMany={props.feltTooMany === true} limit={8} headingLevel={2} />
+      <CommunityDetails tr={tr} details={community.details} />
       <section aria-labelledby="todo-heading">
         <h2 id="todo-heading">{tr.text('community.todo')}</h2>
         <SafetyAdvice tr={tr} coastal={community.coastal} headingLevel={3} />

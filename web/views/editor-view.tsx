@@ -1,9 +1,11 @@
 import type { Child } from 'hono/jsx';
 import type { InputIssue } from '../../api/engine/errors.ts';
 import type { Study } from '../../api/engine/model.ts';
+import type { ColumnPick } from '../data/community-import.ts';
 import { issueFeature, issueLine } from '../data/study-edits.ts';
 import { PageShell } from '../layout/page-shell.tsx';
 import type { Translator } from '../text/translator.ts';
+import { ColumnPickForm } from './column-pick-view.tsx';
 import { FieldProblems } from './field-problems.tsx';
 
 /** An upload that did not validate: which form, its problems, and the text (for the line view). */
@@ -11,6 +13,8 @@ export interface UploadProblem {
   readonly upload: 'communities' | 'sources';
   readonly issues: readonly InputIssue[];
   readonly text?: string;
+  /** Columns to pick, when a communities file's required columns were not recognised. */
+  readonly pick?: ColumnPick;
 }
 
 export interface EditorViewProps {
@@ -154,7 +158,7 @@ export function EditorView(props: EditorViewProps) {
               id="communities-file"
               name="file"
               type="file"
-              accept=".csv,text/csv"
+              accept=".csv,.txt,.tsv,.xlsx,.kml,.kmz,.zip,.geojson,.json"
               aria-describedby={csvProblem ? 'communities-help communities-problems' : 'communities-help'}
               aria-invalid={csvProblem ? 'true' : undefined}
             />
@@ -171,6 +175,7 @@ export function EditorView(props: EditorViewProps) {
           </div>
           <button type="submit">{tr.text('editor.upload.button')}</button>
         </form>
+        {csvProblem?.pick && <ColumnPickForm tr={tr} action={`/studies/${studyId}/edit/communities-csv#upload-communities-heading`} pick={csvProblem.pick} />}
       </section>
 
       <section aria-labelledby="sources-heading">
