@@ -13,7 +13,7 @@
  */
 import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
 import { AGA16_CONSTANTS as K, AGA16_PGA, AGA16_SA, type Aga16Row } from './aga16-coefficients.ts';
-import { AGA16_INTERFACE_VALIDITY, AGA16_INTRASLAB_VALIDITY, aga16DeltaC1, aga16SiteTerm, type Aga16EventType } from './aga16.ts';
+import { AGA16_INTERFACE_VALIDITY, AGA16_INTRASLAB_VALIDITY, AGA16_SIGMA, aga16DeltaC1, aga16SiteTerm, type Aga16EventType } from './aga16.ts';
 import type { Measure } from './measure.ts';
 import { atLeast, createRowScratch, insideRange, mapPlan, periodRows, plannedRows, predictRows, rowMemo, singleMeasure, singleRow, type RowPlan } from './prepared-period.ts';
 import type { DistanceName, PairDistances, PairPredictions, PreparedMotion, PreparedMotions, RuptureContext } from './types.ts';
@@ -120,7 +120,8 @@ function predictRow(t: RowTerms, columns: RuptureColumns, shared: SharedTerms, v
   const siteInside = insideRange(vs30, AGA16_INTERFACE_VALIDITY.vs30) ? 1 : 0;
   const [minKm, maxKm] = AGA16_INTERFACE_VALIDITY.distanceKm;
   const { constant, spreadingSlope, slabTerm, magnitudeTerm, depthTerm } = t;
-  const { theta6, b, sigma: rowSigma } = row;
+  const { theta6, b } = row;
+  const rowSigma = AGA16_SIGMA;
   const { distanceKm: distances, lnSpreading, pga1000G } = shared;
   const { inside } = columns;
   const { rupture, count } = pairs;

@@ -2,7 +2,8 @@
  * AGA16 — Abrahamson, N., Gregor, N. & Addo, K. (2016), "BC Hydro ground motion prediction
  * equations for subduction earthquakes", Earthquake Spectra 32(1), 23–44,
  * doi:10.1193/051712EQS188MR. No erratum known to us. Coefficients: aga16-coefficients.ts
- * (the paper's coefficient table, constants and ΔC1 table; typed from memory, see there).
+ * (the paper's Table 3, constants and ΔC1 table, from the project's
+ * reference record).
  *
  * One model for both subduction event types, chosen by GmmInput.setting:
  *   interface  — F_event = 0, distance R = Rrup (km);
@@ -28,7 +29,7 @@
  * Output: ln of the median, ln(g), for PGA and 5%-damped SA at 0.02–10 s (between rows,
  * interpolated in ln period by interpolate-period.ts). The paper has no PGV equation: asking for
  * PGV throws UnsupportedMeasure. Sigma: the paper's period-independent values φ = 0.60,
- * τ = 0.43 and its tabulated total σ = 0.74.
+ * τ = 0.43 and σ = √(φ² + τ²) = 0.73817 (the table prints it rounded).
  *
  * Validity (from memory of the paper's data and its stated use; conservative where unsure):
  *   interface M 6.0–9.0; intraslab M 5.0–8.0; distance (Rrup or Rhypo) 0–300 km;
@@ -41,7 +42,7 @@
 import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
 import {
   AGA16_CONSTANTS as K,
-  AGA16_DELTA_C1_INTERFACE_CENTRAL,
+  AGA16_DELTA_C1_INTERFACE,
   AGA16_DELTA_C1_INTRASLAB,
   AGA16_PGA,
   AGA16_SA,
@@ -88,7 +89,7 @@ export const AGA16_INTRASLAB_VALIDITY: ValidityRange = Object.freeze({
  */
 export function aga16DeltaC1(periodS: number, eventType: Aga16EventType): number {
   if (eventType === 'intraslab') return AGA16_DELTA_C1_INTRASLAB;
-  const anchors = AGA16_DELTA_C1_INTERFACE_CENTRAL;
+  const anchors = AGA16_DELTA_C1_INTERFACE.central;
   const [firstT, firstValue] = anchors[0] as readonly [number, number];
   const [lastT, lastValue] = anchors[anchors.length - 1] as readonly [number, number];
   if (periodS <= firstT) return firstValue;
@@ -138,6 +139,9 @@ export function aga16Pga1000G(scenario: Aga16Scenario): number {
   return Math.exp(aga16LnMedianAtVlin(AGA16_PGA, scenario) + aga16SiteTerm(AGA16_PGA, K.vs30CapMS, 0));
 }
 
+/** σ = √(φ² + τ²) = 0.73817, as the model defines it (the paper's table rounds it to 0.74). */
+export const AGA16_SIGMA = Math.sqrt(K.phi * K.phi + K.tau * K.tau);
+
 const SA_PERIODS_S: readonly number[] = Object.freeze(AGA16_SA.map((r) => r.periodS));
 
 function requireNumber(path: string, value: number, expected: string, ok: (v: number) => boolean): void {
@@ -168,9 +172,9 @@ function scenarioOf(input: GmmInput): { scenario: Aga16Scenario; notes: string[]
 function predictRow(row: Aga16Row, scenario: Aga16Scenario, vs30: number, pga1000G: number, notes: readonly string[]): GmmPrediction {
   return {
     lnMedian: aga16LnMedianAtVlin(row, scenario) + aga16SiteTerm(row, vs30, pga1000G),
-    sigma: row.sigma,
-    tau: row.tau,
-    phi: row.phi,
+    sigma: AGA16_SIGMA,
+    tau: K.tau,
+    phi: K.phi,
     applicable: notes.length === 0,
     notes,
   };

@@ -2,8 +2,8 @@
  * BSSA14 — Boore, D. M., Stewart, J. P., Seyhan, E. & Atkinson, G. M. (2014), "NGA-West2
  * equations for predicting PGA, PGV, and 5% damped PSA for shallow crustal earthquakes",
  * Earthquake Spectra 30(3), 1057–1085, doi:10.1193/070113EQS184M. No erratum known to us that
- * changes the equations. Coefficients: bssa14-coefficients.ts (the paper's table of
- * coefficients, typed from memory; see there for how firm each column is).
+ * changes the equations. Coefficients: bssa14-coefficients.ts (the published table with the
+ * revised f4 of 2014-07-15, from the project's reference record).
  *
  * ln Y = F_E(M, mechanism) + F_P(Rjb, M) + F_S(Vs30, Rjb, M)   (the paper's model equations; from memory)
  *   F_E = e_mech + e4 (M − Mh) + e5 (M − Mh)²   for M ≤ Mh,

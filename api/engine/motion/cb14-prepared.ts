@@ -16,6 +16,7 @@ import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
 import { toRadians } from '../units.ts';
 import { CB14_CONSTANTS as K, CB14_PGA, CB14_PGV, CB14_SA, type Cb14Row } from './cb14-coefficients.ts';
 import {
+  cb14HangingWallRxTaper,
   CB14_MAGNITUDE_RANGE,
   CB14_ROCK_VS30,
   CB14_VALIDITY,
@@ -149,16 +150,7 @@ function hangingWallTerm(t: RowTerms, c: RuptureColumns, r: number, rxKm: number
   const { row } = t;
   const r1Km = c.r1Km[r] as number;
   const r2Km = c.r2Km[r] as number;
-  let fRx: number;
-  if (rxKm < r1Km) {
-    const x = rxKm / r1Km;
-    fRx = row.h1 + row.h2 * x + row.h3 * x * x;
-  } else if (r2Km > r1Km) {
-    const x = (rxKm - r1Km) / (r2Km - r1Km);
-    fRx = Math.max(K.h4 + row.h5 * x + row.h6 * x * x, 0);
-  } else {
-    fRx = 0;
-  }
+  const fRx = cb14HangingWallRxTaper(row, rxKm, r1Km, r2Km);
   const fRrup = rrupKm === 0 ? 1 : Math.max(rrupKm - rjbKm, 0) / rrupKm;
   return row.c10 * fRx * fRrup * (t.fM[r] as number) * (c.fZ[r] as number) * (c.fDip[r] as number);
 }

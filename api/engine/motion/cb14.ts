@@ -2,7 +2,7 @@
  * CB14 — Campbell, K. W. & Bozorgnia, Y. (2014), "NGA-West2 ground motion model for the average
  * horizontal components of PGA, PGV, and 5% damped linear acceleration response spectra",
  * Earthquake Spectra 30(3), 1087–1115, doi:10.1193/062913EQS175M. No erratum known to us that
- * changes the equations. Coefficients: cb14-coefficients.ts (Tables 1 and 2, typed from memory).
+ * changes the equations. Coefficients: cb14-coefficients.ts (the published Tables 1 and 2).
  *
  * ln Y = f_mag + f_dis + f_flt + f_hng + f_site + f_sed + f_hyp + f_dip + f_atn
  * (the paper's model equations as recalled; from memory), and for PSA at T < 0.25 s, Y = PGA where Y < PGA.
@@ -100,22 +100,26 @@ export function cb14StyleTerm(row: Cb14Row, m: number, mechanism: Cb14Mechanism)
   return factor * fade;
 }
 
+/**
+ * f_hng,Rx of the hanging-wall term for Rx ≥ 0 (km), R1 = W cos δ and R2 = 62 M − 350 (km):
+ * h1 + h2 (Rx/R1) + h3 (Rx/R1)² below R1, max(h4 + h5 x + h6 x², 0) with x = (Rx − R1)/(R2 − R1)
+ * from R1, evaluated as published also where R2 < R1 (small events on wide ruptures), where x is
+ * negative. At R2 = R1 exactly the quadratic's limit beyond R1 is 0 (h6 < 0 in every row).
+ */
+export function cb14HangingWallRxTaper(row: Cb14Row, rxKm: number, r1Km: number, r2Km: number): number {
+  if (rxKm < r1Km) {
+    const x = rxKm / r1Km;
+    return row.h1 + row.h2 * x + row.h3 * x * x;
+  }
+  if (r2Km === r1Km) return rxKm === r1Km ? K.h4 : 0;
+  const x = (rxKm - r1Km) / (r2Km - r1Km);
+  return Math.max(K.h4 + row.h5 * x + row.h6 * x * x, 0);
+}
+
 /** f_hng (ln units): the hanging-wall term; zero on the footwall (Rx < 0) and for vertical faults. */
 export function cb14HangingWallTerm(row: Cb14Row, s: Cb14Scenario): number {
   if (s.rxKm < 0 || s.magnitude <= 5.5 || s.ztorKm > 16.66) return 0;
-  const r1Km = s.widthKm * Math.cos(toRadians(s.dipDeg));
-  const r2Km = 62 * s.magnitude - 350;
-  let fRx: number;
-  if (s.rxKm < r1Km) {
-    const x = s.rxKm / r1Km;
-    fRx = row.h1 + row.h2 * x + row.h3 * x * x;
-  } else if (r2Km > r1Km) {
-    const x = (s.rxKm - r1Km) / (r2Km - r1Km);
-    fRx = Math.max(K.h4 + row.h5 * x + row.h6 * x * x, 0);
-  } else {
-    // R2 ≤ R1 only for M below about 5.65 + R1/62, where the paper's taper beyond R1 is undefined; taken as ended.
-    fRx = 0;
-  }
+  const fRx = cb14HangingWallRxTaper(row, s.rxKm, s.widthKm * Math.cos(toRadians(s.dipDeg)), 62 * s.magnitude - 350);
   // Rjb ≤ Rrup by definition; the clamp keeps rounding in the distance code from making this negative.
   const fRrup = s.rrupKm === 0 ? 1 : Math.max(s.rrupKm - s.rjbKm, 0) / s.rrupKm;
   const fM = s.magnitude <= 6.5 ? (s.magnitude - 5.5) * (1 + row.a2 * (s.magnitude - 6.5)) : 1 + row.a2 * (s.magnitude - 6.5);
