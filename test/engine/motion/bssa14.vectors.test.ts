@@ -1,6 +1,5 @@
 import { describe, it } from 'vitest';
-import { prepareBssa14 } from '../../../api/engine/motion/bssa14-prepared.ts';
-import { bssa14, predictBssa14 } from '../../../api/engine/motion/bssa14.ts';
+import { bssa14, predictBssa14, prepareBssa14 } from '../../../api/engine/motion/bssa14.ts';
 import { createPairPredictions } from '../../../api/engine/motion/prepared-period.ts';
 import { expectClose } from '../../helpers/close.ts';
 import { pairColumns } from './prepared-checks.ts';
