@@ -15,7 +15,7 @@ import { scenarioRoutes } from './routes/scenario.ts';
 import { studyRoutes } from './routes/studies.ts';
 import { sameOriginWrites } from './same-origin.ts';
 import { securityHeaders } from './security-headers.ts';
-import type { ServiceContext } from './service-context.ts';
+import type { ServiceContext } from '../operations/service-context.ts';
 
 /**
  * Largest request body accepted, bytes. A study at the schema's limits (500 sources, the

@@ -2,7 +2,7 @@ import type { Context, Hono } from 'hono';
 import { InvalidInput, StudyTooLarge, type InputIssue } from '../../api/engine/errors.ts';
 import type { Source, Study } from '../../api/engine/model.ts';
 import type { ScenarioResult } from '../../api/engine/scenario/index.ts';
-import { readScenarioRequest } from '../../api/service/scenario-request.ts';
+import { readScenarioRequest } from '../../api/operations/scenario-request.ts';
 import { readStudy } from '../data/study-data.ts';
 import { mapFrame, studyPoints } from '../maps/map-frame.ts';
 import { MessageView } from '../views/message-view.tsx';

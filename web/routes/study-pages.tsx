@@ -1,7 +1,7 @@
 import type { Context, Hono } from 'hono';
 import type { Child } from 'hono/jsx';
 import { InvalidInput, StudyTooLarge, TremoraError } from '../../api/engine/errors.ts';
-import { runStudy } from '../../api/service/study-input.ts';
+import { runStudy } from '../../api/operations/study-input.ts';
 import { communityPageData } from '../data/community-data.ts';
 import { MapLayerCache, readMaps } from '../data/map-data.ts';
 import { suggestedMapSpacing } from '../data/map-spacing.ts';

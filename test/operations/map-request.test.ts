@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { InvalidInput } from '../../api/engine/errors.ts';
-import { readMapRequest } from '../../api/service/map-request.ts';
+import { readMapRequest } from '../../api/operations/map-request.ts';
 
 function problems(raw: Record<string, unknown>): string[] {
   try {

@@ -1,9 +1,10 @@
-import { TremoraError } from '../errors.ts';
-import type { TectonicSetting } from '../model.ts';
-import type { Measure } from '../motion/measure.ts';
-import { measureLabel } from '../motion/measure.ts';
-import type { DistanceContext, GmmInput, GroundMotionModel, RuptureContext, SiteContext } from '../motion/types.ts';
-import type { Rupture } from '../ruptures/rupture.ts';
+import { TremoraError } from '../../../api/engine/errors.ts';
+import { gmmInput } from '../../../api/engine/hazard/gmm-input.ts';
+import type { TectonicSetting } from '../../../api/engine/model.ts';
+import type { Measure } from '../../../api/engine/motion/measure.ts';
+import { measureLabel } from '../../../api/engine/motion/measure.ts';
+import type { DistanceContext, GroundMotionModel, SiteContext } from '../../../api/engine/motion/types.ts';
+import type { Rupture } from '../../../api/engine/ruptures/rupture.ts';
 
 /**
  * Indices of the ruptures of one tectonic setting that count for a site: those with
@@ -24,34 +25,6 @@ export function selectRuptures(
     if (rupture.context.setting === setting && (distances[i] as DistanceContext).rjbKm <= maxDistanceKm) kept.push(i);
   });
   return Int32Array.from(kept);
-}
-
-/**
- * A model's input from its three parts, every field written out: one object shape for every
- * rupture keeps model calls fast (spreading ruptures' objects of varied shapes costs several
- * times the call itself).
- */
-export function gmmInput(rupture: RuptureContext, d: DistanceContext, site: SiteContext): GmmInput {
-  return {
-    magnitude: rupture.magnitude,
-    rakeDeg: rupture.rakeDeg,
-    mechanism: rupture.mechanism,
-    setting: rupture.setting,
-    dipDeg: rupture.dipDeg,
-    ztorKm: rupture.ztorKm,
-    widthKm: rupture.widthKm,
-    hypoDepthKm: rupture.hypoDepthKm,
-    rjbKm: d.rjbKm,
-    rrupKm: d.rrupKm,
-    rxKm: d.rxKm,
-    ry0Km: d.ry0Km,
-    rhypoKm: d.rhypoKm,
-    repiKm: d.repiKm,
-    vs30: site.vs30,
-    vs30Measured: site.vs30Measured,
-    z1Km: site.z1Km,
-    z2p5Km: site.z2p5Km,
-  };
 }
 
 /**

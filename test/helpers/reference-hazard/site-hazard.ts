@@ -1,26 +1,14 @@
-import { TECTONIC_SETTINGS } from '../model.ts';
-import type { TectonicSetting } from '../model.ts';
-import type { Measure } from '../motion/measure.ts';
-import type { DistanceContext, GroundMotionModel, SiteContext } from '../motion/types.ts';
-import type { HazardCurve } from '../results.ts';
-import type { Rupture } from '../ruptures/rupture.ts';
+import type { HazardBranch, HazardMeasure, ValiditySummary } from '../../../api/engine/hazard/hazard-types.ts';
+import { branchCombinationCurves, MAX_BRANCH_COMBINATIONS, meanHazard } from '../../../api/engine/hazard/logic-tree.ts';
+import type { SettingBranchCurve } from '../../../api/engine/hazard/logic-tree.ts';
+import { TECTONIC_SETTINGS } from '../../../api/engine/model.ts';
+import type { TectonicSetting } from '../../../api/engine/model.ts';
+import type { DistanceContext, SiteContext } from '../../../api/engine/motion/types.ts';
+import type { HazardCurve } from '../../../api/engine/results.ts';
+import type { Rupture } from '../../../api/engine/ruptures/rupture.ts';
 import { exceedanceCurve } from './exceedance-curve.ts';
-import { branchCombinationCurves, MAX_BRANCH_COMBINATIONS, meanHazard } from './logic-tree.ts';
-import type { SettingBranchCurve } from './logic-tree.ts';
 import type { RupturePredictions } from './rupture-predictions.ts';
 import { predictRuptures, selectRuptures } from './rupture-predictions.ts';
-
-export interface HazardBranch {
-  readonly model: GroundMotionModel;
-  readonly weight: number;
-}
-
-/** A measure as named in the study ("SA(0.2)"), parsed, with its curve levels. */
-export interface HazardMeasure {
-  readonly key: string;
-  readonly measure: Measure;
-  readonly levels: readonly number[];
-}
 
 /** One setting's branch at one site: its predictions and curve for each measure (same order). */
 export interface SiteBranchHazard {
@@ -29,14 +17,6 @@ export interface SiteBranchHazard {
   readonly weight: number;
   readonly predictions: readonly RupturePredictions[];
   readonly annualRate: readonly (readonly number[])[];
-}
-
-/** Rupture evaluations outside one model's validity at this site, over all measures. */
-export interface ValiditySummary {
-  readonly model: string;
-  readonly outside: number;
-  readonly evaluated: number;
-  readonly firstNote: string;
 }
 
 export interface SiteHazard {

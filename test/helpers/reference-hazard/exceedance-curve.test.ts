@@ -1,12 +1,12 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { exceedanceCurve } from '../../../api/engine/hazard/exceedance-curve.ts';
-import { predictRuptures, selectRuptures } from '../../../api/engine/hazard/rupture-predictions.ts';
+import { exceedanceCurve } from './exceedance-curve.ts';
+import { predictRuptures, selectRuptures } from './rupture-predictions.ts';
 import { cornell79 } from '../../../api/engine/motion/cornell79.ts';
 import { compensatedSum } from '../../../api/engine/summation.ts';
-import { pointRuptures, ROCK_SITE } from './point-ruptures.ts';
-import type { PointRuptureSpec } from './point-ruptures.ts';
-import { expectRelative } from '../../helpers/close.ts';
+import { pointRuptures, ROCK_SITE } from '../../engine/hazard/point-ruptures.ts';
+import type { PointRuptureSpec } from '../../engine/hazard/point-ruptures.ts';
+import { expectRelative } from '../close.ts';
 
 const PGA = { kind: 'PGA' } as const;
 

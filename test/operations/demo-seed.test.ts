@@ -2,9 +2,9 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { modelCatalog } from '../../api/engine/motion/registry.ts';
-import { DEMO_CATALOG_URL, seedDemoStudy } from '../../api/service/demo-seed.ts';
+import { DEMO_CATALOG_URL, seedDemoStudy } from '../../api/operations/demo-seed.ts';
 import { openStore, type Store } from '../../api/store/store.ts';
-import { tempDir } from './helpers/service-process.ts';
+import { tempDir } from '../service/helpers/service-process.ts';
 
 let dir: ReturnType<typeof tempDir>;
 let store: Store;

@@ -2,9 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { StudyTooLarge } from '../../api/engine/errors.ts';
 import { DEFAULT_LEVEL_COUNT } from '../../api/engine/hazard/hazard-levels.ts';
 import { modelCatalog } from '../../api/engine/motion/registry.ts';
-import { checkWorkBudget, studyWork } from '../../api/service/work-budget.ts';
+import { checkWorkBudget, studyWork } from '../../api/operations/work-budget.ts';
 import { loadStudy } from '../../api/study/load-study.ts';
-import { smallStudy } from './helpers/small-study.ts';
+import { smallStudy } from '../service/helpers/small-study.ts';
 
 const load = (raw: unknown) => {
   const result = loadStudy(raw, { models: modelCatalog });

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { deaggregate } from '../../../api/engine/hazard/deaggregation.ts';
-import type { DeaggregationBranch } from '../../../api/engine/hazard/deaggregation.ts';
+import { deaggregate } from './deaggregation.ts';
+import type { DeaggregationBranch } from './deaggregation.ts';
 import {
   distanceBin,
   distanceBinRange,
@@ -10,13 +10,13 @@ import {
   magnitudeBin,
   magnitudeBinRange,
 } from '../../../api/engine/hazard/deaggregation-bins.ts';
-import { predictRuptures, selectRuptures } from '../../../api/engine/hazard/rupture-predictions.ts';
+import { predictRuptures, selectRuptures } from './rupture-predictions.ts';
 import { cornell79 } from '../../../api/engine/motion/cornell79.ts';
 import type { GroundMotionModel } from '../../../api/engine/motion/types.ts';
-import { pointRuptures, ROCK_SITE } from './point-ruptures.ts';
-import type { PointRuptureSpec } from './point-ruptures.ts';
-import { scaledCornell } from './test-models.ts';
-import { expectClose } from '../../helpers/close.ts';
+import { pointRuptures, ROCK_SITE } from '../../engine/hazard/point-ruptures.ts';
+import type { PointRuptureSpec } from '../../engine/hazard/point-ruptures.ts';
+import { scaledCornell } from '../../engine/hazard/test-models.ts';
+import { expectClose } from '../close.ts';
 
 const PGA = { kind: 'PGA' } as const;
 

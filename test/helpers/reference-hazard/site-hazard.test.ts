@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { siteHazard } from '../../../api/engine/hazard/site-hazard.ts';
-import type { HazardMeasure } from '../../../api/engine/hazard/site-hazard.ts';
+import { siteHazard } from './site-hazard.ts';
+import type { HazardMeasure } from '../../../api/engine/hazard/hazard-types.ts';
 import { cornell79 } from '../../../api/engine/motion/cornell79.ts';
-import { pointRuptures, ROCK_SITE } from './point-ruptures.ts';
-import { scaledCornell } from './test-models.ts';
-import { expectRelative } from '../../helpers/close.ts';
+import { pointRuptures, ROCK_SITE } from '../../engine/hazard/point-ruptures.ts';
+import { scaledCornell } from '../../engine/hazard/test-models.ts';
+import { expectRelative } from '../close.ts';
 
 /*
  * Two settings: a crustal rupture (M 6.5, 10 km, 0.01/yr) under two branches, Cornell et al.

@@ -1,6 +1,6 @@
-import type { DistanceContext } from '../motion/types.ts';
-import type { Deaggregation, DeaggregationBin } from '../results.ts';
-import type { Rupture } from '../ruptures/rupture.ts';
+import type { DistanceContext } from '../../../api/engine/motion/types.ts';
+import type { Deaggregation, DeaggregationBin } from '../../../api/engine/results.ts';
+import type { Rupture } from '../../../api/engine/ruptures/rupture.ts';
 import {
   distanceBin,
   distanceBinRange,
@@ -8,10 +8,10 @@ import {
   epsilonBinRange,
   magnitudeBin,
   magnitudeBinRange,
-} from './deaggregation-bins.ts';
-import { accumulate, accumulatedTotals, compensatedSum, createLevelAccumulator, type LevelAccumulator } from '../summation.ts';
+} from '../../../api/engine/hazard/deaggregation-bins.ts';
+import { accumulate, accumulatedTotals, compensatedSum, createLevelAccumulator, type LevelAccumulator } from '../../../api/engine/summation.ts';
 import type { RupturePredictions } from './rupture-predictions.ts';
-import { exceedanceProbability, standardisedLevel } from './truncated-exceedance.ts';
+import { exceedanceProbability, standardisedLevel } from '../../../api/engine/hazard/truncated-exceedance.ts';
 
 /** One logic-tree branch of one setting: its weight and its predictions of the measure. */
 export interface DeaggregationBranch {

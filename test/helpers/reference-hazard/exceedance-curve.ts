@@ -1,7 +1,7 @@
-import type { Rupture } from '../ruptures/rupture.ts';
-import { accumulate, accumulatedTotals, createLevelAccumulator } from '../summation.ts';
+import { exceedanceProbability, standardisedLevel } from '../../../api/engine/hazard/truncated-exceedance.ts';
+import type { Rupture } from '../../../api/engine/ruptures/rupture.ts';
+import { accumulate, accumulatedTotals, createLevelAccumulator } from '../../../api/engine/summation.ts';
 import type { RupturePredictions } from './rupture-predictions.ts';
-import { exceedanceProbability, standardisedLevel } from './truncated-exceedance.ts';
 
 /**
  * Classical PSHA (Cornell 1968; as set out in Baker 2008, eq. for λ(IM > x)): the annual rate of
