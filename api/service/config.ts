@@ -22,6 +22,8 @@ export interface ServiceConfig {
   readonly token?: string;
   readonly workers: number;
   readonly workBudget: number;
+  /** Screen the demo study in the background when a new database saves it (TREMORA_SCREEN_DEMO=0: no). */
+  readonly screenDemo: boolean;
 }
 
 /** The environment asks for something the service will not do; the message says what to set. */
@@ -73,5 +75,6 @@ export function readConfig(env: NodeJS.ProcessEnv, cwd: string = process.cwd(), 
     ...(token === undefined ? {} : { token }),
     workers: integerIn(env, 'TREMORA_WORKERS', 1, MAX_WORKERS, defaultPoolSize(cores)),
     workBudget: integerIn(env, 'TREMORA_WORK_BUDGET', 1, Number.MAX_SAFE_INTEGER, DEFAULT_WORK_BUDGET),
+    screenDemo: integerIn(env, 'TREMORA_SCREEN_DEMO', 0, 1, 1) === 1,
   };
 }

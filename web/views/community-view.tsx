@@ -14,6 +14,8 @@ import type { TextKey } from '../text/en.ts';
 import type { Translator } from '../text/translator.ts';
 import { FeltList } from './felt-list.tsx';
 import { SafetyAdvice } from './safety-advice.tsx';
+import type { TsunamiPageResult } from '../data/tsunami-data.ts';
+import { TsunamiTime } from './tsunami-time.tsx';
 
 export interface CommunityViewProps {
   readonly tr: Translator;
@@ -27,6 +29,8 @@ export interface CommunityViewProps {
   readonly felt?: { readonly history: CommunityFeltHistory; readonly eventCount: number };
   /** The attached catalog is too large for a felt history on a page. */
   readonly feltTooMany?: boolean;
+  /** Tsunami time to act, for a coastal community of a study with a terrain grid. */
+  readonly tsunami?: TsunamiPageResult;
 }
 
 const mmiKey = (level: number, part: 'name' | 'feel' | 'buildings') => `mmi.${level}.${part}` as TextKey;
@@ -41,6 +45,7 @@ export function Headline(props: { readonly tr: Translator; readonly data: Commun
         {tr.text('community.headline', { name: props.name, chance: vii.frequency, years: data.years, percent: vii.percent })}
       </p>
       <p>{tr.text('community.headlineStrongWhat')}</p>
+      <p class="mmi-explain">{tr.text('mmi.explain')}</p>
       <p class="other-chances-title">{tr.text('community.otherChances', { years: data.years })}</p>
       <ul class="other-chances">
         {(['VI', 'VII', 'VIII'] as const).map((roman) => {
@@ -73,7 +78,7 @@ export function ShakingLevels(props: { readonly tr: Translator; readonly data: C
             ) : (
               <>
                 <p class="level-mmi" data-mmi={level.mmi}>
-                  {tr.text('community.levelMmi', { roman: level.roman ?? '', name: tr.text(mmiKey(level.mmiLevel, 'name')) })}
+                  {tr.text('community.levelMmi', { mmi: tr.mmi(level.mmi ?? level.mmiLevel), name: tr.text(mmiKey(level.mmiLevel, 'name')) })}
                 </p>
                 <p>
                   <strong>{tr.text('community.feels')}:</strong> {tr.text(mmiKey(level.mmiLevel, 'feel'))}
@@ -134,6 +139,7 @@ export function CommunityView(props: CommunityViewProps) {
           {tr.text('caution.text')} <a href="/limits">{tr.text('caution.limitsLink')}</a>.
         </p>
       </aside>
+      {props.tsunami && <TsunamiTime tr={tr} communityId={community.id} tsunami={props.tsunami} headingLevel={2} />}
       <p class="actions">
         <a class="button" href={`/studies/${studyId}/communities/${community.id}/handout`}>
           {tr.text('community.handout')}
@@ -163,7 +169,7 @@ export function CommunityView(props: CommunityViewProps) {
           <ul class="faults">
             {result.nearestFaults.map((f) => (
               <li data-source={f.sourceId}>
-                <strong>{f.name}</strong>: {tr.place(f.distanceKm, f.bearingDeg)}
+                <strong>{f.name}</strong>: {tr.place(f.distanceKm, f.bearingDeg, f.depthBelowKm)}
               </li>
             ))}
           </ul>

@@ -1,4 +1,5 @@
 import type { InputIssue } from '../../api/engine/errors.ts';
+import { intensityWords } from '../format/intensity-words.ts';
 import type { Study } from '../../api/engine/model.ts';
 import type { ScenarioResult } from '../../api/engine/scenario/index.ts';
 import { PageShell } from '../layout/page-shell.tsx';
@@ -7,6 +8,8 @@ import { ScenarioLayer, ScenarioLegend } from '../maps/scenario-layer.tsx';
 import { StudyMap } from '../maps/study-map.tsx';
 import type { Translator } from '../text/translator.ts';
 import { FieldProblems } from './field-problems.tsx';
+import type { TsunamiPageResult } from '../data/tsunami-data.ts';
+import { TsunamiScenario } from './tsunami-time.tsx';
 
 export interface ScenarioViewProps {
   readonly tr: Translator;
@@ -19,6 +22,8 @@ export interface ScenarioViewProps {
   readonly issues: readonly InputIssue[];
   readonly result?: ScenarioResult;
   readonly frame?: MapFrame;
+  /** Tsunami first arrivals of this rupture, for an interface source of a study with a terrain grid. */
+  readonly tsunami?: TsunamiPageResult;
 }
 
 /** Pick a source and magnitude (a plain form post), then the map of shaking and each community's intensity. */
@@ -77,7 +82,7 @@ export function ScenarioView(props: ScenarioViewProps) {
           <section aria-labelledby="scenario-map-heading">
             <h2 id="scenario-map-heading">{tr.text('scenario.map')}</h2>
             <p>
-              {result.sourceName}, M {tr.number(result.magnitude, 1)}. {tr.text('scenario.position', { position: tr.text('scenario.positionClosest') })}
+              {result.sourceName}, M {tr.number(result.magnitude, 1)}. {tr.text('scenario.position', { position: tr.text('scenario.positionMiddle') })}
             </p>
             <figure class="map-figure">
               <StudyMap
@@ -86,7 +91,7 @@ export function ScenarioView(props: ScenarioViewProps) {
                 frame={props.frame}
                 idPrefix="scenario-map"
                 showZones={false}
-                labelSuffix={new Map(result.communities.map((c) => [c.communityId, ` · ${c.mmi.romanMedian}`]))}
+                labelSuffix={new Map(result.communities.map((c) => [c.communityId, ` · ${intensityWords(c.mmi.median).roman}`]))}
                 hazardLayer={result.grid ? <ScenarioLayer grid={result.grid} frame={props.frame} /> : undefined}
               />
               <figcaption>
@@ -120,12 +125,12 @@ export function ScenarioView(props: ScenarioViewProps) {
                       <th scope="row">
                         <a href={`/studies/${studyId}/communities/${c.communityId}`}>{c.name}</a>
                       </th>
-                      <td class="numeric">{tr.number(c.rjbKm)}</td>
+                      <td class="numeric">{tr.number(c.rrupKm)}</td>
                       <td>
-                        {tr.text('mmi.label', { roman: c.mmi.romanMedian })} · {tr.text(`mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.median)))}.name` as 'mmi.1.name')}
+                        {tr.mmi(c.mmi.median)} · {tr.text(`mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.median)))}.name` as 'mmi.1.name')}
                       </td>
                       <td>
-                        {tr.text('mmi.label', { roman: c.mmi.romanP84 })} · {tr.text(`mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.p84)))}.name` as 'mmi.1.name')}
+                        {tr.mmi(c.mmi.p84)} · {tr.text(`mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.p84)))}.name` as 'mmi.1.name')}
                       </td>
                       <td class="numeric">{tr.number(c.motions.PGA?.median ?? 0, 3)}</td>
                     </tr>
@@ -145,6 +150,7 @@ export function ScenarioView(props: ScenarioViewProps) {
           </section>
         </>
       )}
+      {result && props.tsunami && <TsunamiScenario tr={tr} studyId={studyId} tsunami={props.tsunami} />}
     </PageShell>
   );
 }
