@@ -33,7 +33,8 @@ describe('tremora check', () => {
     const study = JSON.parse(await readFile(DEMO, 'utf8'));
     study.sources.features[2].properties.dip = 120;
     study.communities[0].lat = 'south';
-    study.groundMotion.crustal[1].weight = 0.4;
+    // The demo uses the default branches; a study naming its own with weights off by 0.1 is refused.
+    study.groundMotion = { crustal: [{ model: 'BSSA14', weight: 0.5 }, { model: 'CB14', weight: 0.4 }] };
     const broken = join(dir, 'broken.study.json');
     await writeFile(broken, JSON.stringify(study));
     const { code, err } = await run('check', broken);

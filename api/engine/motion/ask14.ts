@@ -60,7 +60,8 @@ import { toRadians } from '../units.ts';
 import { ASK14_CONSTANTS as K, ASK14_PGA, ASK14_PGV, ASK14_SA, type Ask14Row } from './ask14-coefficients.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel, SiteContext, ValidityRange } from './types.ts';
+import { prepareSplit, prepareSplitMeasures, type SplitModel } from './split-prepare.ts';
+import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, PreparedMotions, RuptureContext, SiteContext, ValidityRange } from './types.ts';
 import { validityNotes } from './validity.ts';
 
 const NAME = 'ASK14';
@@ -286,6 +287,23 @@ export function predictAsk14(input: GmmInput, measure: Measure): GmmPrediction {
   }
 }
 
+/** The model as rupture terms and pair prediction, for the fast path (split-prepare.ts): the same functions predict() uses. */
+const SPLIT: SplitModel<Ask14Row, Ask14RuptureTerms> = {
+  name: NAME,
+  pga: ASK14_PGA,
+  pgv: ASK14_PGV,
+  sa: ASK14_SA,
+  periodsS: SA_PERIODS_S,
+  distances: ['rrupKm', 'rjbKm', 'rxKm', 'ry0Km'],
+  checkMeasure(measure) {
+    if (measure.kind === 'SA' && !(measure.periodS > 0)) throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
+  },
+  checkRupture: (rupture) => void ruptureOf(rupture as GmmInput),
+  ruptureTerms: (row, rupture) => ask14RuptureTerms(row, ruptureOf(rupture as GmmInput)),
+  pairPrediction: (terms, pair) => ask14PairPrediction(terms, pair, pair),
+  applicable: (pair) => notesOf(pair).length === 0,
+};
+
 /** Abrahamson, Silva & Kamai (2014) for shallow crustal earthquakes (Rrup): PGA, PGV, PSA 0.01–10 s. */
 export const ask14: GroundMotionModel = Object.freeze({
   name: NAME,
@@ -298,4 +316,6 @@ export const ask14: GroundMotionModel = Object.freeze({
   hasPgv: true,
   validity: ASK14_VALIDITY,
   predict: (input: GmmInput, measure: Measure): GmmPrediction => predictAsk14(input, measure),
+  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion => prepareSplit(SPLIT, ruptures, measure),
+  prepareMeasures: (ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions => prepareSplitMeasures(SPLIT, ruptures, measures),
 });

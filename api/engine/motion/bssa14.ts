@@ -2,10 +2,10 @@
  * BSSA14 — Boore, D. M., Stewart, J. P., Seyhan, E. & Atkinson, G. M. (2014), "NGA-West2
  * equations for predicting PGA, PGV, and 5% damped PSA for shallow crustal earthquakes",
  * Earthquake Spectra 30(3), 1057–1085, doi:10.1193/070113EQS184M. No erratum known to us that
- * changes the equations. Coefficients: bssa14-coefficients.ts (the paper's table of
- * coefficients, typed from memory; see there for how firm each column is).
+ * changes the equations. Coefficients: bssa14-coefficients.ts (the published table with the
+ * revised f4 of 2014-07-15, from the project's reference record).
  *
- * ln Y = F_E(M, mechanism) + F_P(Rjb, M) + F_S(Vs30, Rjb, M)   (the paper's model equations; from memory)
+ * ln Y = F_E(M, mechanism) + F_P(Rjb, M) + F_S(Vs30, Rjb, M)   (the paper's equations 2–9)
  *   F_E = e_mech + e4 (M − Mh) + e5 (M − Mh)²   for M ≤ Mh,
  *         e_mech + e6 (M − Mh)                 for M > Mh,
  *         e_mech = e0 unspecified, e1 strike-slip, e2 normal, e3 reverse;
@@ -19,7 +19,7 @@
  * Mechanism from rake, the paper's ranges: normal −150° < λ < −30°, reverse 30° < λ < 150°,
  * strike-slip otherwise. "Unspecified" (e0) is available through predictBssa14's options.
  *
- * Standard deviations (the paper's aleatory-variability model; from memory), natural-log units:
+ * Standard deviations (the paper's aleatory-variability model), natural-log units:
  *   τ(M) = τ1 for M ≤ 4.5, τ2 for M ≥ 5.5, linear in M between; φ(M) likewise with φ1, φ2;
  *   φ(M, Rjb) = φ(M) + ΔφR ln(Rjb / R1) / ln(R2 / R1) between R1 and R2 (0 below R1, ΔφR above R2);
  *   φ(M, Rjb, Vs30) = φ(M, Rjb) − ΔφV ln(V2 / Vs30) / ln(V2 / V1) between V1 and V2
@@ -29,18 +29,27 @@
  * rakeDeg (degrees). Output: ln of the median, ln(g) for PGA and 5%-damped RotD50 PSA,
  * ln(cm/s) for PGV; sigma, tau, phi in natural-log units. Distance metric: Rjb.
  *
- * Validity (the paper's stated ranges, from memory): M 3–8.5 for strike-slip and reverse
+ * Validity (the paper's stated ranges, from memory of its text): M 3–8.5 for strike-slip and reverse
  * (and unspecified) events, M 3–7 for normal events; Rjb 0–400 km; Vs30 150–1500 m/s; periods
  * PGA, PGV and PSA 0.01–10 s. Outside, predictions are still finite, with applicable: false.
  *
- * How the table was checked: bssa14-coefficients.ts and test/engine/motion/bssa14.test.ts.
+ * Written once: the terms that depend on the rupture alone (F_E, the magnitude factor of F_P, τ
+ * and the magnitude ramp of φ: bssa14RuptureTerms), on the site alone (the linear site term,
+ * f2, the Vs30 part of φ: bssa14SiteTerms) and on the pair (F_P, the nonlinear site term, φ's
+ * distance part: bssa14PairPrediction). predict() evaluates them for one pair; the fast path
+ * (prepare, prepareMeasures) evaluates the rupture terms once per rupture and row and the pair
+ * terms per pair, with the same functions.
+ *
+ * How the table is checked: test/engine/motion/bssa14.vectors.test.ts (independent reference
+ * vectors, 1e-4 in ln units).
  */
 import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
+import { hypot2 } from './fast-math.ts';
 import { BSSA14_CONSTANTS as K, BSSA14_PGA, BSSA14_PGV, BSSA14_SA, type Bssa14Row } from './bssa14-coefficients.ts';
-import { prepareBssa14, prepareBssa14Measures } from './bssa14-prepared.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, PreparedMotions, RuptureContext, ValidityRange } from './types.ts';
+import { atLeast, createRowScratch, insideRange, mapPlan, periodRows, plannedRows, predictRows, rowMemo, singleMeasure, singleRow, type RowPlan } from './prepared-period.ts';
+import type { GmmInput, GmmPrediction, GroundMotionModel, PairDistances, PairPredictions, PreparedMotion, PreparedMotions, RuptureContext, SiteContext, ValidityRange } from './types.ts';
 import { validityNotes } from './validity.ts';
 
 const NAME = 'BSSA14';
@@ -54,15 +63,6 @@ export function bssa14MechanismFromRake(rakeDeg: number): 'strike-slip' | 'norma
   if (rake > 30 && rake < 150) return 'reverse';
   return 'strike-slip';
 }
-
-/** The earthquake and path as the equation sees them. */
-export interface Bssa14Scenario {
-  readonly magnitude: number;
-  readonly rjbKm: number;
-  readonly mechanism: Bssa14Mechanism;
-}
-
-const SA_PERIODS_S: readonly number[] = Object.freeze(BSSA14_SA.map((r) => r.periodS));
 
 /** The mechanism constant e_mech (ln units) of a row: e0 unspecified, e1, e2, e3 by mechanism. */
 export function bssa14MechanismConstant(row: Bssa14Row, mechanism: Bssa14Mechanism): number {
@@ -84,53 +84,81 @@ export function bssa14SourceTerm(row: Bssa14Row, mechanismConstant: number, magn
   return mechanismConstant + (dm <= 0 ? row.e4 * dm + row.e5 * dm * dm : row.e6 * dm);
 }
 
-/** Path function F_P (ln units) of a row for moment magnitude M and Rjb in km. */
-export function bssa14PathTerm(row: Bssa14Row, magnitude: number, rjbKm: number): number {
-  const rKm = Math.hypot(rjbKm, row.h);
-  return (row.c1 + row.c2 * (magnitude - K.mRef)) * Math.log(rKm / K.rRefKm) + (row.c3 + K.deltaC3) * (rKm - K.rRefKm);
+/** The paper's magnitude ramp of τ and φ between M 4.5 and 5.5. */
+const magnitudeRamp = (magnitude: number, small: number, large: number): number =>
+  magnitude <= 4.5 ? small : magnitude >= 5.5 ? large : small + (large - small) * (magnitude - 4.5);
+
+/** What one row of the equation needs of the rupture alone. */
+export interface Bssa14RuptureTerms {
+  /** F_E, ln units. */
+  readonly source: number;
+  /** c1 + c2 (M − Mref), the factor of ln(R / Rref) in F_P. */
+  readonly slope: number;
+  /** τ(M), ln units. */
+  readonly tau: number;
+  /** φ(M) before its distance and Vs30 parts, ln units. */
+  readonly phiOfMagnitude: number;
 }
 
-/** Linear site term ln F_lin (ln units) for Vs30 in m/s; zero at Vref = 760 m/s. */
-export function bssa14LinearSiteTerm(row: Bssa14Row, vs30: number): number {
-  return row.c * Math.log(Math.min(vs30, row.vc) / K.vRef);
+export function bssa14RuptureTerms(row: Bssa14Row, magnitude: number, mechanism: Bssa14Mechanism): Bssa14RuptureTerms {
+  return {
+    source: bssa14SourceTerm(row, bssa14MechanismConstant(row, mechanism), magnitude),
+    slope: row.c1 + row.c2 * (magnitude - K.mRef),
+    tau: magnitudeRamp(magnitude, row.tau1, row.tau2),
+    phiOfMagnitude: magnitudeRamp(magnitude, row.phi1, row.phi2),
+  };
 }
 
 /** Vs30 (m/s) in the paper's f2 at which the nonlinear slope is referenced (the paper's f2 equation). */
 const F2_VS30_ANCHOR = 360;
 
-/**
- * Nonlinear site term ln F_nl (ln units) for Vs30 in m/s and rock PGA (g, at Vs30 = 760 m/s).
- * Zero at and above 760 m/s; negative on soft soil under strong rock motion.
- */
-export function bssa14NonlinearSiteTerm(row: Bssa14Row, vs30: number, pgaRockG: number): number {
+/** What one row of the equation needs of the site alone (Vs30 in m/s). */
+export interface Bssa14SiteTerms {
+  /** ln F_lin = c ln(min(Vs30, Vc) / Vref): zero at Vref = 760 m/s. */
+  readonly linear: number;
+  /** f2 of the nonlinear term: zero at and above 760 m/s. */
+  readonly f2: number;
+  /** The reduction of φ on soft sites (ΔφV, tapered between V1 and V2), ln units. */
+  readonly phiReduction: number;
+}
+
+export function bssa14SiteTerms(row: Bssa14Row, vs30: number): Bssa14SiteTerms {
   const f2 = row.f4 * (Math.exp(row.f5 * (Math.min(vs30, K.vRef) - F2_VS30_ANCHOR)) - Math.exp(row.f5 * (K.vRef - F2_VS30_ANCHOR)));
-  return K.f1 + f2 * Math.log((pgaRockG + K.f3G) / K.f3G);
+  let phiReduction = 0;
+  if (vs30 <= K.v1) phiReduction = row.deltaPhiV;
+  else if (vs30 < K.v2) phiReduction = (row.deltaPhiV * Math.log(K.v2 / vs30)) / Math.log(K.v2 / K.v1);
+  return { linear: row.c * Math.log(Math.min(vs30, row.vc) / K.vRef), f2, phiReduction };
 }
 
-/** ln median (ln g; ln cm/s for PGV) of a row at Vs30 = 760 m/s, where the site term is zero. */
-export function bssa14LnMedianOnRock(row: Bssa14Row, scenario: Bssa14Scenario): number {
-  return bssa14SourceTerm(row, bssa14MechanismConstant(row, scenario.mechanism), scenario.magnitude) + bssa14PathTerm(row, scenario.magnitude, scenario.rjbKm);
+/** Path function F_P (ln units) of a row for the rupture's slope and Rjb in km. */
+export function bssa14PathTerm(row: Bssa14Row, slope: number, rjbKm: number): number {
+  const rKm = hypot2(rjbKm, row.h);
+  return slope * Math.log(rKm / K.rRefKm) + (row.c3 + K.deltaC3) * (rKm - K.rRefKm);
 }
 
-/** PGAr: the median PGA (g) of the event at Vs30 = 760 m/s, the input of the nonlinear site term. */
-export function bssa14PgaRockG(scenario: Bssa14Scenario): number {
-  return Math.exp(bssa14LnMedianOnRock(BSSA14_PGA, scenario));
+/**
+ * ln((PGAr + f3) / f3), the factor of f2 in the nonlinear site term, from the PGA row's
+ * rupture terms and Rjb in km: PGAr is the model's median PGA (g) at Vs30 = Vref = 760 m/s.
+ */
+export function bssa14RockFactor(pgaTerms: Bssa14RuptureTerms, rjbKm: number): number {
+  const pgaRockG = Math.exp(pgaTerms.source + bssa14PathTerm(BSSA14_PGA, pgaTerms.slope, rjbKm));
+  return Math.log((pgaRockG + K.f3G) / K.f3G);
 }
 
-/** Between-event τ, within-event φ and total σ (ln units) of a row; Rjb in km, Vs30 in m/s. */
-export function bssa14Sigma(row: Bssa14Row, magnitude: number, rjbKm: number, vs30: number): { tau: number; phi: number; sigma: number } {
-  // Magnitudes 4.5 and 5.5 bound the ramp between the small- and large-event values (the paper's τ(M), φ(M)).
-  const ramp = (small: number, large: number): number =>
-    magnitude <= 4.5 ? small : magnitude >= 5.5 ? large : small + (large - small) * (magnitude - 4.5);
-  const tau = ramp(row.tau1, row.tau2);
-  let phi = ramp(row.phi1, row.phi2);
+/** ln median (ln g; ln cm/s for PGV) of a row for one pair; `rockFactor` from bssa14RockFactor (any value where f2 is 0). */
+export function bssa14LnMedian(row: Bssa14Row, rupture: Bssa14RuptureTerms, site: Bssa14SiteTerms, rjbKm: number, rockFactor: number): number {
+  const nonlinear = site.f2 === 0 ? K.f1 : K.f1 + site.f2 * rockFactor;
+  return rupture.source + bssa14PathTerm(row, rupture.slope, rjbKm) + site.linear + nonlinear;
+}
+
+/** φ(M, Rjb, Vs30) (ln units) of a row for one pair: the magnitude ramp, grown from R1 to R2, reduced on soft sites. */
+export function bssa14Phi(row: Bssa14Row, rupture: Bssa14RuptureTerms, site: Bssa14SiteTerms, rjbKm: number): number {
+  let phi = rupture.phiOfMagnitude;
   if (rjbKm > row.r1) phi += rjbKm >= row.r2 ? row.deltaPhiR : (row.deltaPhiR * Math.log(rjbKm / row.r1)) / Math.log(row.r2 / row.r1);
-  if (vs30 <= K.v1) phi -= row.deltaPhiV;
-  else if (vs30 < K.v2) phi -= (row.deltaPhiV * Math.log(K.v2 / vs30)) / Math.log(K.v2 / K.v1);
-  return { tau, phi, sigma: Math.hypot(tau, phi) };
+  return phi - site.phiReduction;
 }
 
-/** Validity for strike-slip, reverse and unspecified events (the paper's ranges, from memory). */
+/** Validity for strike-slip, reverse and unspecified events (the paper's ranges, from memory of its text). */
 export const BSSA14_VALIDITY: ValidityRange = Object.freeze({
   magnitude: [3, 8.5],
   distanceKm: [0, 400],
@@ -146,10 +174,26 @@ function requireNumber(path: string, value: number, expected: string, ok: (v: nu
   }
 }
 
-/** Options of predictBssa14. */
+/** Options of predictBssa14 and prepareBssa14Measures. */
 export interface Bssa14Options {
   /** Overrides the mechanism the rake implies; 'unspecified' selects the paper's e0. */
   readonly mechanism?: Bssa14Mechanism;
+}
+
+/** The rupture's mechanism for the equation, its inputs checked. */
+function mechanismOf(rupture: RuptureContext, options: Bssa14Options): Bssa14Mechanism {
+  requireNumber('magnitude', rupture.magnitude, 'a finite moment magnitude', () => true);
+  if (options.mechanism !== undefined) return options.mechanism;
+  requireNumber('rakeDeg', rupture.rakeDeg, 'a finite rake in degrees', () => true);
+  return bssa14MechanismFromRake(rupture.rakeDeg);
+}
+
+const requireVs30 = (vs30: number): void => requireNumber('vs30', vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
+
+const SA_PERIODS_S: readonly number[] = Object.freeze(BSSA14_SA.map((r) => r.periodS));
+
+function checkPeriod(measure: Measure): void {
+  if (measure.kind === 'SA' && !(measure.periodS > 0)) throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
 }
 
 /**
@@ -157,36 +201,96 @@ export interface Bssa14Options {
  * in ln units). Uses magnitude, rakeDeg, rjbKm, vs30 and setting of the input.
  */
 export function predictBssa14(input: GmmInput, measure: Measure, options: Bssa14Options = {}): GmmPrediction {
-  requireNumber('magnitude', input.magnitude, 'a finite moment magnitude', () => true);
+  const mechanism = mechanismOf(input, options);
   requireNumber('rjbKm', input.rjbKm, 'a finite Joyner–Boore distance of at least 0 km', (v) => v >= 0);
-  requireNumber('vs30', input.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
-  if (options.mechanism === undefined) requireNumber('rakeDeg', input.rakeDeg, 'a finite rake in degrees', () => true);
-  const mechanism = options.mechanism ?? bssa14MechanismFromRake(input.rakeDeg);
-  const scenario: Bssa14Scenario = { magnitude: input.magnitude, rjbKm: input.rjbKm, mechanism };
-
+  requireVs30(input.vs30);
+  checkPeriod(measure);
   const range = mechanism === 'normal' ? BSSA14_NORMAL_VALIDITY : BSSA14_VALIDITY;
   const notes = validityNotes(NAME, range, input, input.rjbKm);
   if (input.setting !== 'crustal') notes.unshift(`${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`);
-  const pgaRockG = bssa14PgaRockG(scenario);
+  const rockFactor = bssa14RockFactor(bssa14RuptureTerms(BSSA14_PGA, input.magnitude, mechanism), input.rjbKm);
 
   const predictRow = (row: Bssa14Row): GmmPrediction => {
-    const lnMedian =
-      bssa14SourceTerm(row, bssa14MechanismConstant(row, mechanism), scenario.magnitude) +
-      bssa14PathTerm(row, scenario.magnitude, scenario.rjbKm) +
-      bssa14LinearSiteTerm(row, input.vs30) +
-      bssa14NonlinearSiteTerm(row, input.vs30, pgaRockG);
-    return { lnMedian, ...bssa14Sigma(row, scenario.magnitude, scenario.rjbKm, input.vs30), applicable: notes.length === 0, notes };
+    const rupture = bssa14RuptureTerms(row, input.magnitude, mechanism);
+    const site = bssa14SiteTerms(row, input.vs30);
+    const phi = bssa14Phi(row, rupture, site, input.rjbKm);
+    const lnMedian = bssa14LnMedian(row, rupture, site, input.rjbKm, rockFactor);
+    return { lnMedian, tau: rupture.tau, phi, sigma: hypot2(rupture.tau, phi), applicable: notes.length === 0, notes };
   };
-
   switch (measure.kind) {
     case 'PGA':
       return predictRow(BSSA14_PGA);
     case 'PGV':
       return predictRow(BSSA14_PGV);
     case 'SA':
-      if (!(measure.periodS > 0)) throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
       return predictAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) => predictRow(BSSA14_SA[i] as Bssa14Row));
   }
+}
+
+/** One row's rupture terms for every prepared rupture. */
+interface PreparedRow {
+  readonly row: Bssa14Row;
+  readonly terms: readonly Bssa14RuptureTerms[];
+}
+
+/**
+ * BSSA14 for many (rupture, site) pairs (the model's prepareMeasures hook): the rupture terms
+ * once per rupture and row, the site terms once per site and row, the rock factor once per pair
+ * for every measure, then bssa14LnMedian and bssa14Phi per pair, as predictBssa14 does.
+ */
+export function prepareBssa14Measures(ruptures: readonly RuptureContext[], measures: readonly Measure[], options: Bssa14Options = {}): PreparedMotions {
+  measures.forEach(checkPeriod);
+  const mechanisms = ruptures.map((r) => mechanismOf(r, options));
+  const inside = Uint8Array.from(ruptures, (r, i) => {
+    const range = mechanisms[i] === 'normal' ? BSSA14_NORMAL_VALIDITY : BSSA14_VALIDITY;
+    return r.setting === 'crustal' && insideRange(r.magnitude, range.magnitude) ? 1 : 0;
+  });
+  const termsOf = rowMemo((row: Bssa14Row): PreparedRow => ({ row, terms: ruptures.map((r, i) => bssa14RuptureTerms(row, r.magnitude, mechanisms[i] as Bssa14Mechanism)) }));
+  const plans: RowPlan<PreparedRow>[] = measures.map((m) => {
+    if (m.kind !== 'SA') return singleRow(termsOf(m.kind === 'PGA' ? BSSA14_PGA : BSSA14_PGV));
+    return mapPlan(periodRows(NAME, SA_PERIODS_S, BSSA14_SA, m.periodS), termsOf);
+  });
+  const rows = plannedRows(plans).map((p) => p.row);
+  let pgaTerms: readonly Bssa14RuptureTerms[] | undefined;
+  let rockFactor: Float64Array = new Float64Array(0);
+  const scratch = createRowScratch();
+  const [minKm, maxKm] = BSSA14_VALIDITY.distanceKm;
+
+  const evaluate = (prepared: PreparedRow, vs30: number, pairs: PairDistances, rock: Float64Array, out: PairPredictions): void => {
+    const { row, terms } = prepared;
+    const site = bssa14SiteTerms(row, vs30);
+    const siteInside = insideRange(vs30, BSSA14_VALIDITY.vs30) ? 1 : 0;
+    const { rupture, rjbKm, count } = pairs;
+    for (let k = 0; k < count; k++) {
+      const r = rupture[k] as number;
+      const t = terms[r] as Bssa14RuptureTerms;
+      const rjb = rjbKm[k] as number;
+      const phi = bssa14Phi(row, t, site, rjb);
+      out.lnMedian[k] = bssa14LnMedian(row, t, site, rjb, rock[k] as number);
+      out.sigma[k] = hypot2(t.tau, phi);
+      out.applicable[k] = (inside[r] as number) & siteInside & (rjb < minKm || rjb > maxKm ? 0 : 1);
+    }
+  };
+
+  return {
+    distances: ['rjbKm'],
+    predictPairs(site: SiteContext, pairs: PairDistances, out: readonly PairPredictions[]) {
+      requireVs30(site.vs30);
+      const { count, rupture, rjbKm } = pairs;
+      rockFactor = atLeast(rockFactor, count);
+      // PGAr is needed only where some row's f2 is not 0 (Vs30 below 760 m/s).
+      if (rows.some((row) => bssa14SiteTerms(row, site.vs30).f2 !== 0)) {
+        pgaTerms ??= termsOf(BSSA14_PGA).terms;
+        for (let k = 0; k < count; k++) rockFactor[k] = bssa14RockFactor(pgaTerms[rupture[k] as number] as Bssa14RuptureTerms, rjbKm[k] as number);
+      }
+      plans.forEach((plan, i) => predictRows(plan, count, out[i] as PairPredictions, scratch, (p, into) => evaluate(p, site.vs30, pairs, rockFactor, into)));
+    },
+  };
+}
+
+/** BSSA14 prepared for one measure (the model's prepare hook). */
+export function prepareBssa14(ruptures: readonly RuptureContext[], measure: Measure, options: Bssa14Options = {}): PreparedMotion {
+  return singleMeasure(prepareBssa14Measures(ruptures, [measure], options));
 }
 
 /** Boore, Stewart, Seyhan & Atkinson (2014) for shallow crustal earthquakes (Rjb): PGA, PGV, PSA 0.01–10 s. */

@@ -2,7 +2,7 @@
  * CB14 — Campbell, K. W. & Bozorgnia, Y. (2014), "NGA-West2 ground motion model for the average
  * horizontal components of PGA, PGV, and 5% damped linear acceleration response spectra",
  * Earthquake Spectra 30(3), 1087–1115, doi:10.1193/062913EQS175M. No erratum known to us that
- * changes the equations. Coefficients: cb14-coefficients.ts (Tables 1 and 2, typed from memory).
+ * changes the equations. Coefficients: cb14-coefficients.ts (the published Tables 1 and 2).
  *
  * ln Y = f_mag + f_dis + f_flt + f_hng + f_site + f_sed + f_hyp + f_dip + f_atn
  * (the paper's model equations as recalled; from memory), and for PSA at T < 0.25 s, Y = PGA where Y < PGA.
@@ -44,14 +44,17 @@
  * 3.3–7.5 normal; Rrup 0–300 km; Vs30 150–1500 m/s; Zhyp 0–20 km; Ztor 0–20 km; dip 15–90°;
  * Z2.5 0–10 km; periods PGA, PGV and PSA 0.01–10 s. Outside, finite numbers with applicable: false.
  *
- * How the table was checked: cb14-coefficients.ts and test/engine/motion/cb14.test.ts.
+ * Written once: cb14RuptureTerms (the rupture's source terms per row) and cb14PairPrediction
+ * (distance, hanging-wall, site, basin and anelastic terms, A1100 and the PGA floor per pair);
+ * predict() and the fast path (split-prepare.ts) both call them. How the table is checked:
+ * test/engine/motion/cb14.vectors.test.ts (independent reference vectors, 1e-4 in ln units).
  */
 import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
 import { toRadians } from '../units.ts';
 import { CB14_CONSTANTS as K, CB14_PGA, CB14_PGV, CB14_SA, type Cb14Row } from './cb14-coefficients.ts';
-import { prepareCb14, prepareCb14Measures } from './cb14-prepared.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
+import { prepareSplit, prepareSplitMeasures, type SplitModel } from './split-prepare.ts';
 import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, PreparedMotions, RuptureContext, ValidityRange } from './types.ts';
 import { validityNotes } from './validity.ts';
 
@@ -100,22 +103,26 @@ export function cb14StyleTerm(row: Cb14Row, m: number, mechanism: Cb14Mechanism)
   return factor * fade;
 }
 
+/**
+ * f_hng,Rx of the hanging-wall term for Rx ≥ 0 (km), R1 = W cos δ and R2 = 62 M − 350 (km):
+ * h1 + h2 (Rx/R1) + h3 (Rx/R1)² below R1, max(h4 + h5 x + h6 x², 0) with x = (Rx − R1)/(R2 − R1)
+ * from R1, evaluated as published also where R2 < R1 (small events on wide ruptures), where x is
+ * negative. At R2 = R1 exactly the quadratic's limit beyond R1 is 0 (h6 < 0 in every row).
+ */
+export function cb14HangingWallRxTaper(row: Cb14Row, rxKm: number, r1Km: number, r2Km: number): number {
+  if (rxKm < r1Km) {
+    const x = rxKm / r1Km;
+    return row.h1 + row.h2 * x + row.h3 * x * x;
+  }
+  if (r2Km === r1Km) return rxKm === r1Km ? K.h4 : 0;
+  const x = (rxKm - r1Km) / (r2Km - r1Km);
+  return Math.max(K.h4 + row.h5 * x + row.h6 * x * x, 0);
+}
+
 /** f_hng (ln units): the hanging-wall term; zero on the footwall (Rx < 0) and for vertical faults. */
 export function cb14HangingWallTerm(row: Cb14Row, s: Cb14Scenario): number {
   if (s.rxKm < 0 || s.magnitude <= 5.5 || s.ztorKm > 16.66) return 0;
-  const r1Km = s.widthKm * Math.cos(toRadians(s.dipDeg));
-  const r2Km = 62 * s.magnitude - 350;
-  let fRx: number;
-  if (s.rxKm < r1Km) {
-    const x = s.rxKm / r1Km;
-    fRx = row.h1 + row.h2 * x + row.h3 * x * x;
-  } else if (r2Km > r1Km) {
-    const x = (s.rxKm - r1Km) / (r2Km - r1Km);
-    fRx = Math.max(K.h4 + row.h5 * x + row.h6 * x * x, 0);
-  } else {
-    // R2 ≤ R1 only for M below about 5.65 + R1/62, where the paper's taper beyond R1 is undefined; taken as ended.
-    fRx = 0;
-  }
+  const fRx = cb14HangingWallRxTaper(row, s.rxKm, s.widthKm * Math.cos(toRadians(s.dipDeg)), 62 * s.magnitude - 350);
   // Rjb ≤ Rrup by definition; the clamp keeps rounding in the distance code from making this negative.
   const fRrup = s.rrupKm === 0 ? 1 : Math.max(s.rrupKm - s.rjbKm, 0) / s.rrupKm;
   const fM = s.magnitude <= 6.5 ? (s.magnitude - 5.5) * (1 + row.a2 * (s.magnitude - 6.5)) : 1 + row.a2 * (s.magnitude - 6.5);
@@ -162,28 +169,36 @@ export function cb14AnelasticTerm(row: Cb14Row, rrupKm: number): number {
   return rrupKm > 80 ? (row.c20 + K.deltaC20) * (rrupKm - 80) : 0;
 }
 
+/** The terms of one row that depend on the rupture alone: f_mag + f_flt + f_hyp + f_dip (ln units). */
+export function cb14SourceTerm(row: Cb14Row, s: Omit<Cb14Scenario, 'rrupKm' | 'rjbKm' | 'rxKm'>): number {
+  return cb14MagnitudeTerm(row, s.magnitude) + cb14StyleTerm(row, s.magnitude, s.mechanism) + cb14HypocentreTerm(row, s.magnitude, s.hypoDepthKm) + cb14DipTerm(row, s.magnitude, s.dipDeg);
+}
+
+/** ln median of one row for one pair before the short-period PGA floor, from its source term (cb14SourceTerm). */
+export function cb14LnMedianFromSource(row: Cb14Row, source: number, s: Cb14Scenario, vs30: number, z2p5Km: number, a1100G: number): number {
+  return source + cb14DistanceTerm(row, s.magnitude, s.rrupKm) + cb14HangingWallTerm(row, s) + cb14SiteTerm(row, vs30, a1100G) + cb14BasinTerm(row, z2p5Km) + cb14AnelasticTerm(row, s.rrupKm);
+}
+
 /** ln median of one row before the short-period PGA floor (ln g; ln cm/s for PGV). */
 export function cb14LnMedianUnfloored(row: Cb14Row, s: Cb14Scenario, vs30: number, z2p5Km: number, a1100G: number): number {
-  return (
-    cb14MagnitudeTerm(row, s.magnitude) +
-    cb14DistanceTerm(row, s.magnitude, s.rrupKm) +
-    cb14StyleTerm(row, s.magnitude, s.mechanism) +
-    cb14HangingWallTerm(row, s) +
-    cb14SiteTerm(row, vs30, a1100G) +
-    cb14BasinTerm(row, z2p5Km) +
-    cb14HypocentreTerm(row, s.magnitude, s.hypoDepthKm) +
-    cb14DipTerm(row, s.magnitude, s.dipDeg) +
-    cb14AnelasticTerm(row, s.rrupKm)
-  );
+  return cb14LnMedianFromSource(row, cb14SourceTerm(row, s), s, vs30, z2p5Km, a1100G);
 }
 
 /** Vs30 of the paper's reference rock, m/s. */
 export const CB14_ROCK_VS30 = 1100;
 
+/** Z2.5 (km) of the reference rock, the paper's default for Vs30 = 1100 m/s. */
+const ROCK_Z2P5_KM = cb14DefaultZ2p5Km(CB14_ROCK_VS30);
+
+/** A1100 from the PGA row's source term: median PGA (g) of the event on reference rock (Vs30 = 1100 m/s, its default Z2.5). */
+function a1100FromSource(pgaSource: number, s: Cb14Scenario): number {
+  // On rock above k1 the site term does not depend on A1100, so any value serves here.
+  return Math.exp(cb14LnMedianFromSource(CB14_PGA, pgaSource, s, CB14_ROCK_VS30, ROCK_Z2P5_KM, 0));
+}
+
 /** A1100: median PGA (g) of the event on reference rock (Vs30 = 1100 m/s, its default Z2.5). */
 export function cb14A1100G(s: Cb14Scenario): number {
-  // On rock above k1 the site term does not depend on A1100, so any value serves here.
-  return Math.exp(cb14LnMedianUnfloored(CB14_PGA, s, CB14_ROCK_VS30, cb14DefaultZ2p5Km(CB14_ROCK_VS30), 0));
+  return a1100FromSource(cb14SourceTerm(CB14_PGA, s), s);
 }
 
 /** τ, φ and σ (ln units) of a row, with the nonlinear-site correction for Vs30 (m/s) below k1. */
@@ -228,29 +243,31 @@ function requireNumber(path: string, value: number, expected: string, ok: (v: nu
   }
 }
 
+function ruptureOf(rupture: RuptureContext): Omit<Cb14Scenario, 'rrupKm' | 'rjbKm' | 'rxKm'> {
+  requireNumber('magnitude', rupture.magnitude, 'a finite moment magnitude', () => true);
+  requireNumber('rakeDeg', rupture.rakeDeg, 'a finite rake in degrees', () => true);
+  requireNumber('dipDeg', rupture.dipDeg, 'a dip above 0° and at most 90°', (v) => v > 0 && v <= 90);
+  requireNumber('ztorKm', rupture.ztorKm, 'a finite depth to the top of rupture of at least 0 km', (v) => v >= 0);
+  requireNumber('hypoDepthKm', rupture.hypoDepthKm, 'a finite hypocentral depth of at least 0 km', (v) => v >= 0);
+  requireNumber('widthKm', rupture.widthKm, 'a finite down-dip width of at least 0 km', (v) => v >= 0);
+  return {
+    magnitude: rupture.magnitude,
+    mechanism: cb14MechanismFromRake(rupture.rakeDeg),
+    ztorKm: rupture.ztorKm,
+    hypoDepthKm: rupture.hypoDepthKm,
+    widthKm: rupture.widthKm,
+    dipDeg: rupture.dipDeg,
+  };
+}
+
 function scenarioOf(input: GmmInput): Cb14Scenario {
-  requireNumber('magnitude', input.magnitude, 'a finite moment magnitude', () => true);
-  requireNumber('rakeDeg', input.rakeDeg, 'a finite rake in degrees', () => true);
+  const rupture = ruptureOf(input);
   requireNumber('rrupKm', input.rrupKm, 'a finite rupture distance of at least 0 km', (v) => v >= 0);
   requireNumber('rjbKm', input.rjbKm, 'a finite Joyner–Boore distance of at least 0 km', (v) => v >= 0);
   requireNumber('rxKm', input.rxKm, 'a finite Rx in km', () => true);
-  requireNumber('dipDeg', input.dipDeg, 'a dip above 0° and at most 90°', (v) => v > 0 && v <= 90);
-  requireNumber('ztorKm', input.ztorKm, 'a finite depth to the top of rupture of at least 0 km', (v) => v >= 0);
-  requireNumber('hypoDepthKm', input.hypoDepthKm, 'a finite hypocentral depth of at least 0 km', (v) => v >= 0);
-  requireNumber('widthKm', input.widthKm, 'a finite down-dip width of at least 0 km', (v) => v >= 0);
   requireNumber('vs30', input.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
   if (input.z2p5Km !== undefined) requireNumber('z2p5Km', input.z2p5Km, 'a finite Z2.5 of at least 0 km', (v) => v >= 0);
-  return {
-    magnitude: input.magnitude,
-    mechanism: cb14MechanismFromRake(input.rakeDeg),
-    rrupKm: input.rrupKm,
-    rjbKm: input.rjbKm,
-    rxKm: input.rxKm,
-    ztorKm: input.ztorKm,
-    hypoDepthKm: input.hypoDepthKm,
-    widthKm: input.widthKm,
-    dipDeg: input.dipDeg,
-  };
+  return { ...rupture, rrupKm: input.rrupKm, rjbKm: input.rjbKm, rxKm: input.rxKm };
 }
 
 function notesOf(input: GmmInput, s: Cb14Scenario): string[] {
@@ -272,18 +289,8 @@ function notesOf(input: GmmInput, s: Cb14Scenario): string[] {
 export function predictCb14(input: GmmInput, measure: Measure): GmmPrediction {
   const s = scenarioOf(input);
   const notes = notesOf(input, s);
-  const z2p5Km = input.z2p5Km ?? cb14DefaultZ2p5Km(input.vs30);
-  const a1100G = cb14A1100G(s);
   const applicable = notes.length === 0;
-  const lnPga = cb14LnMedianUnfloored(CB14_PGA, s, input.vs30, z2p5Km, a1100G);
-
-  const predictRow = (row: Cb14Row): GmmPrediction => {
-    const unfloored = cb14LnMedianUnfloored(row, s, input.vs30, z2p5Km, a1100G);
-    // CB14: at periods under 0.25 s the spectral acceleration is not allowed below PGA.
-    const lnMedian = row.periodS > 0 && row.periodS < 0.25 ? Math.max(unfloored, lnPga) : unfloored;
-    return { lnMedian, ...cb14Sigma(row, s.magnitude, input.vs30, a1100G), applicable, notes };
-  };
-
+  const predictRow = (row: Cb14Row): GmmPrediction => ({ ...cb14PairPrediction(cb14RuptureTerms(row, s), input), applicable, notes });
   switch (measure.kind) {
     case 'PGA':
       return predictRow(CB14_PGA);
@@ -294,6 +301,51 @@ export function predictCb14(input: GmmInput, measure: Measure): GmmPrediction {
       return predictAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) => predictRow(CB14_SA[i] as Cb14Row));
   }
 }
+
+/** What one row needs of the rupture alone: the rupture itself and the source terms of the row and of the PGA row. */
+export interface Cb14RuptureTerms {
+  readonly row: Cb14Row;
+  readonly rupture: Omit<Cb14Scenario, 'rrupKm' | 'rjbKm' | 'rxKm'>;
+  readonly source: number;
+  readonly pgaSource: number;
+}
+
+export function cb14RuptureTerms(row: Cb14Row, rupture: Omit<Cb14Scenario, 'rrupKm' | 'rjbKm' | 'rxKm'>): Cb14RuptureTerms {
+  const pgaSource = cb14SourceTerm(CB14_PGA, rupture);
+  return { row, rupture, source: row === CB14_PGA ? pgaSource : cb14SourceTerm(row, rupture), pgaSource };
+}
+
+/**
+ * Median and standard deviations (ln units) of one row for one rupture–site pair: A1100 from the
+ * PGA row on reference rock, the row's ln median, and for PSA below 0.25 s not less than PGA.
+ */
+export function cb14PairPrediction(t: Cb14RuptureTerms, pair: GmmInput): { lnMedian: number; tau: number; phi: number; sigma: number } {
+  const { row } = t;
+  const s: Cb14Scenario = { ...t.rupture, rrupKm: pair.rrupKm, rjbKm: pair.rjbKm, rxKm: pair.rxKm };
+  const z2p5Km = pair.z2p5Km ?? cb14DefaultZ2p5Km(pair.vs30);
+  const a1100G = a1100FromSource(t.pgaSource, s);
+  const unfloored = cb14LnMedianFromSource(row, t.source, s, pair.vs30, z2p5Km, a1100G);
+  // CB14: at periods under 0.25 s the spectral acceleration is not allowed below PGA.
+  const lnMedian = row.periodS > 0 && row.periodS < 0.25 ? Math.max(unfloored, cb14LnMedianFromSource(CB14_PGA, t.pgaSource, s, pair.vs30, z2p5Km, a1100G)) : unfloored;
+  return { lnMedian, ...cb14Sigma(row, s.magnitude, pair.vs30, a1100G) };
+}
+
+/** The model as rupture terms and pair prediction, for the fast path (split-prepare.ts): the same functions predict() uses. */
+const SPLIT: SplitModel<Cb14Row, Cb14RuptureTerms> = {
+  name: NAME,
+  pga: CB14_PGA,
+  pgv: CB14_PGV,
+  sa: CB14_SA,
+  periodsS: SA_PERIODS_S,
+  distances: ['rrupKm', 'rjbKm', 'rxKm'],
+  checkMeasure(measure) {
+    if (measure.kind === 'SA' && !(measure.periodS > 0)) throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
+  },
+  checkRupture: (rupture) => void ruptureOf(rupture),
+  ruptureTerms: (row, rupture) => cb14RuptureTerms(row, ruptureOf(rupture)),
+  pairPrediction: (terms, pair) => cb14PairPrediction(terms, pair),
+  applicable: (pair) => notesOf(pair, { ...ruptureOf(pair), rrupKm: pair.rrupKm, rjbKm: pair.rjbKm, rxKm: pair.rxKm }).length === 0,
+};
 
 /** Campbell & Bozorgnia (2014) for shallow crustal earthquakes (Rrup): PGA, PGV, PSA 0.01–10 s. */
 export const cb14: GroundMotionModel = Object.freeze({
@@ -307,6 +359,6 @@ export const cb14: GroundMotionModel = Object.freeze({
   hasPgv: true,
   validity: CB14_VALIDITY,
   predict: (input: GmmInput, measure: Measure): GmmPrediction => predictCb14(input, measure),
-  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion => prepareCb14(ruptures, measure),
-  prepareMeasures: (ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions => prepareCb14Measures(ruptures, measures),
+  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion => prepareSplit(SPLIT, ruptures, measure),
+  prepareMeasures: (ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions => prepareSplitMeasures(SPLIT, ruptures, measures),
 });

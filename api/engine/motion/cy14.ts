@@ -50,7 +50,8 @@ import { toRadians } from '../units.ts';
 import { CY14_PGA, CY14_PGV, CY14_SA, type Cy14Row } from './cy14-coefficients.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel, SiteContext, ValidityRange } from './types.ts';
+import { prepareSplit, prepareSplitMeasures, type SplitModel } from './split-prepare.ts';
+import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, PreparedMotions, RuptureContext, SiteContext, ValidityRange } from './types.ts';
 import { validityNotes } from './validity.ts';
 
 const NAME = 'CY14';
@@ -251,6 +252,23 @@ export function predictCy14(input: GmmInput, measure: Measure): GmmPrediction {
   }
 }
 
+/** The model as rupture terms and pair prediction, for the fast path (split-prepare.ts): the same functions predict() uses. */
+const SPLIT: SplitModel<Cy14Row, Cy14RuptureTerms> = {
+  name: NAME,
+  pga: CY14_PGA,
+  pgv: CY14_PGV,
+  sa: CY14_SA,
+  periodsS: SA_PERIODS_S,
+  distances: ['rrupKm', 'rjbKm', 'rxKm'],
+  checkMeasure(measure) {
+    if (measure.kind === 'SA' && !(measure.periodS > 0)) throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
+  },
+  checkRupture: (rupture) => void ruptureOf(rupture as GmmInput),
+  ruptureTerms: (row, rupture) => cy14RuptureTerms(row, ruptureOf(rupture as GmmInput)),
+  pairPrediction: (terms, pair) => cy14PairPrediction(terms, pair, pair),
+  applicable: (pair) => notesOf(pair, ruptureOf(pair)).length === 0,
+};
+
 /** Chiou & Youngs (2014) for shallow crustal earthquakes (Rrup): PGA, PGV, PSA 0.01–10 s. */
 export const cy14: GroundMotionModel = Object.freeze({
   name: NAME,
@@ -263,4 +281,6 @@ export const cy14: GroundMotionModel = Object.freeze({
   hasPgv: true,
   validity: CY14_VALIDITY,
   predict: (input: GmmInput, measure: Measure): GmmPrediction => predictCy14(input, measure),
+  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion => prepareSplit(SPLIT, ruptures, measure),
+  prepareMeasures: (ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions => prepareSplitMeasures(SPLIT, ruptures, measures),
 });

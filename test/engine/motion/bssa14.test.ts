@@ -4,11 +4,11 @@ import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import { BSSA14_PGA, BSSA14_SA } from '../../../api/engine/motion/bssa14-coefficients.ts';
 import {
   bssa14,
-  bssa14LinearSiteTerm,
-  bssa14LnMedianOnRock,
+  bssa14LnMedian,
   bssa14MechanismFromRake,
-  bssa14NonlinearSiteTerm,
-  bssa14Sigma,
+  bssa14Phi,
+  bssa14RuptureTerms,
+  bssa14SiteTerms,
   predictBssa14,
 } from '../../../api/engine/motion/bssa14.ts';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
@@ -34,7 +34,7 @@ const lnY = (over: Partial<GmmInput>, m: Measure): number => bssa14.predict(inpu
 
 describe('BSSA14: the equation', () => {
   it('reproduces a hand calculation of PGA at M 7, Rjb 10 km, Vs30 760 m/s, strike-slip', () => {
-    // Boore et al. (2014) source and path functions with the PGA row (from memory), by hand:
+    // Boore et al. (2014) source and path functions with the PGA row of the published table, by hand:
     // F_E = e1 + e6 (7 − 5.5) = 0.4856 − 0.1662·1.5 = 0.2363; R = √(10² + 4.5²) = 10.96586 km;
     // F_P = (c1 + c2 (7 − 4.5)) ln R + c3 (R − 1) = −0.65475·2.39480 − 0.008088·9.96586 = −1.64859;
     // F_S = 0 at Vref; ln PGA = −1.41229 (0.2436 g).
@@ -42,7 +42,7 @@ describe('BSSA14: the equation', () => {
   });
 
   it('reproduces a hand calculation of SA(1.0) below the hinge magnitude', () => {
-    // 1 s row (from memory): M 5, Rjb 20 km: F_E = 0.4218 + 1.5004(−1.2) − 0.18983(1.44) = −1.65282;
+    // 1 s row of the published table: M 5, Rjb 20 km: F_E = 0.4218 + 1.5004(−1.2) − 0.18983(1.44) = −1.65282;
     // R = √(20² + 5.74²) = 20.8074; F_P = (−1.193 + 0.10248·0.5) ln R − 0.00121 (R − 1) = −3.48877;
     // ln SA = −5.14160 (0.00585 g).
     expectClose(lnY({ magnitude: 5, rjbKm: 20 }, sa(1)), -5.1416, 1e-4, `${SOURCE}: ln SA(1.0), hand calculation`);
@@ -51,20 +51,18 @@ describe('BSSA14: the equation', () => {
   it('has a linear site term of zero at Vref = 760 m/s and a nonlinear term of zero at and above it', () => {
     // Boore et al. (2014) site function (from memory): ln F_lin = c ln(Vs30/Vref); f2 vanishes at 760 m/s.
     for (const row of [BSSA14_PGA, ...BSSA14_SA]) {
-      expectClose(bssa14LinearSiteTerm(row, 760), 0, 0, `${SOURCE}: ln F_lin at Vref, ${row.periodS} s`);
-      for (const pgaRockG of [0.01, 0.5, 1.5]) {
-        expectClose(bssa14NonlinearSiteTerm(row, 760, pgaRockG), 0, 0, `${SOURCE}: ln F_nl at 760 m/s, ${row.periodS} s`);
-        expectClose(bssa14NonlinearSiteTerm(row, 1200, pgaRockG), 0, 0, `${SOURCE}: ln F_nl at 1200 m/s, ${row.periodS} s`);
-      }
+      expectClose(bssa14SiteTerms(row, 760).linear, 0, 0, `${SOURCE}: ln F_lin at Vref, ${row.periodS} s`);
+      expectClose(bssa14SiteTerms(row, 760).f2, 0, 0, `${SOURCE}: f2 at 760 m/s, ${row.periodS} s`);
+      expectClose(bssa14SiteTerms(row, 1200).f2, 0, 0, `${SOURCE}: f2 at 1200 m/s, ${row.periodS} s`);
     }
-    const rock = { magnitude: 7, rjbKm: 10, mechanism: 'strike-slip' as const };
-    expect(lnY({}, PGA)).toBe(bssa14LnMedianOnRock(BSSA14_PGA, rock));
+    const rupture = bssa14RuptureTerms(BSSA14_PGA, 7, 'strike-slip');
+    for (const rockFactor of [0.1, 1, 3]) expect(lnY({}, PGA)).toBe(bssa14LnMedian(BSSA14_PGA, rupture, bssa14SiteTerms(BSSA14_PGA, 760), 10, rockFactor));
   });
 
   it('caps the linear site term at Vc', () => {
     // Boore et al. (2014) site function (from memory): ln F_lin stops changing above Vc (1500 m/s for PGA).
-    expect(bssa14LinearSiteTerm(BSSA14_PGA, 1800)).toBe(bssa14LinearSiteTerm(BSSA14_PGA, 1500));
-    expectClose(bssa14LinearSiteTerm(BSSA14_PGA, 380), -0.6 * Math.log(0.5), 1e-12, `${SOURCE}: c ln(380/760), PGA`);
+    expect(bssa14SiteTerms(BSSA14_PGA, 1800).linear).toBe(bssa14SiteTerms(BSSA14_PGA, 1500).linear);
+    expectClose(bssa14SiteTerms(BSSA14_PGA, 380).linear, -0.6 * Math.log(0.5), 1e-12, `${SOURCE}: c ln(380/760), PGA`);
   });
 
   it('reduces soft-soil amplification under strong rock shaking (nonlinear site response)', () => {
@@ -75,7 +73,8 @@ describe('BSSA14: the equation', () => {
     const strong = amplification({ magnitude: 7.5, rjbKm: 1 });
     expect(weak).toBeGreaterThan(0);
     expect(strong).toBeLessThan(weak - 0.3);
-    expect(bssa14NonlinearSiteTerm(BSSA14_PGA, 200, 0.6)).toBeLessThan(bssa14NonlinearSiteTerm(BSSA14_PGA, 200, 0.05));
+    // f2 < 0 on soft soil: the nonlinear term falls as ln((PGAr + f3) / f3) grows.
+    expect(bssa14SiteTerms(BSSA14_PGA, 200).f2).toBeLessThan(0);
   });
 });
 
@@ -93,7 +92,7 @@ describe('BSSA14: mechanism', () => {
   });
 
   it('orders the mechanisms as the table does', () => {
-    // Table of coefficients (from memory): normal (e2) lowest wherever typed; reverse (e3) above
+    // Table of coefficients (published, 2014-07-15): normal (e2) lowest wherever typed; reverse (e3) above
     // strike-slip (e1) at 0.3 s, below it for PGA; unspecified (e0) between normal and the others.
     const at = (rakeDeg: number, m: Measure): number => lnY({ rakeDeg, magnitude: 6.5 }, m);
     for (const m of [PGA, PGV, sa(0.01), sa(0.05), sa(0.3), sa(1)]) {
@@ -110,7 +109,7 @@ describe('BSSA14: mechanism', () => {
 
 describe('BSSA14: standard deviations', () => {
   it('equals the table where no adjustment applies', () => {
-    // Table of coefficients (from memory): M ≥ 5.5, Rjb ≤ R1 and Vs30 ≥ V2 give τ2 and φ2;
+    // Table of coefficients (published, 2014-07-15): M ≥ 5.5, Rjb ≤ R1 and Vs30 ≥ V2 give τ2 and φ2;
     // M ≤ 4.5 gives τ1 and φ1. σ = √(τ² + φ²).
     const cases: [Measure, number, number, number, number][] = [
       [PGA, 0.348, 0.495, 0.398, 0.695],
@@ -131,13 +130,15 @@ describe('BSSA14: standard deviations', () => {
   });
 
   it('ramps with magnitude, distance and Vs30 as the paper\'s φ(M, Rjb, Vs30) says', () => {
-    // PGA (from memory): τ at M 5 is halfway between τ1 0.398 and τ2 0.348; φ at
+    // PGA row of the published table: τ at M 5 is halfway between τ1 0.398 and τ2 0.348; φ at
     // Rjb = √(R1 R2) gains half of ΔφR = 0.1; below V1 = 225 m/s φ loses ΔφV = 0.07.
-    expectClose(bssa14Sigma(BSSA14_PGA, 5, 10, 760).tau, 0.373, 1e-12, `${SOURCE}: τ(M 5), PGA`);
-    expectClose(bssa14Sigma(BSSA14_PGA, 6, Math.sqrt(110 * 270), 760).phi, 0.545, 1e-12, `${SOURCE}: φ at √(R1 R2), PGA`);
-    expectClose(bssa14Sigma(BSSA14_PGA, 6, 350, 200).phi, 0.495 + 0.1 - 0.07, 1e-12, `${SOURCE}: φ beyond R2, below V1`);
+    const phiAt = (magnitude: number, rjbKm: number, vs30: number): number =>
+      bssa14Phi(BSSA14_PGA, bssa14RuptureTerms(BSSA14_PGA, magnitude, 'strike-slip'), bssa14SiteTerms(BSSA14_PGA, vs30), rjbKm);
+    expectClose(bssa14RuptureTerms(BSSA14_PGA, 5, 'strike-slip').tau, 0.373, 1e-12, `${SOURCE}: τ(M 5), PGA`);
+    expectClose(phiAt(6, Math.sqrt(110 * 270), 760), 0.545, 1e-12, `${SOURCE}: φ at √(R1 R2), PGA`);
+    expectClose(phiAt(6, 350, 200), 0.495 + 0.1 - 0.07, 1e-12, `${SOURCE}: φ beyond R2, below V1`);
     const mid = Math.sqrt(225 * 300);
-    expectClose(bssa14Sigma(BSSA14_PGA, 6, 10, mid).phi, 0.495 - 0.035, 1e-12, `${SOURCE}: φ at √(V1 V2)`);
+    expectClose(phiAt(6, 10, mid), 0.495 - 0.035, 1e-12, `${SOURCE}: φ at √(V1 V2)`);
   });
 });
 
@@ -203,10 +204,10 @@ describe('BSSA14: properties', () => {
   });
 
   it('interpolates between rows in ln(period) and returns the row on a row', () => {
-    const between = bssa14.predict(input(), sa(0.17));
-    const lo = bssa14.predict(input(), sa(0.15));
-    const hi = bssa14.predict(input(), sa(0.2));
-    const w = Math.log(0.17 / 0.15) / Math.log(0.2 / 0.15);
+    const between = bssa14.predict(input(), sa(0.175));
+    const lo = bssa14.predict(input(), sa(0.17));
+    const hi = bssa14.predict(input(), sa(0.18));
+    const w = Math.log(0.175 / 0.17) / Math.log(0.18 / 0.17);
     expectClose(between.lnMedian, lo.lnMedian + (hi.lnMedian - lo.lnMedian) * w, 1e-12, 'interpolate-period.ts rule (common practice)');
     expect(between.lnMedian).toBeGreaterThan(Math.min(lo.lnMedian, hi.lnMedian));
     expect(between.lnMedian).toBeLessThan(Math.max(lo.lnMedian, hi.lnMedian));

