@@ -165,6 +165,7 @@ const CATALOG_TYPES = [...Object.keys(RAW_FORMATS), 'application/json'];
 export const DEFAULT_FILE_NAMES: Readonly<Record<CatalogFormat, string>> = { csv: 'catalog.csv', 'fdsn-text': 'catalog.txt', quakeml: 'catalog.xml' };
 
 const fileNameField = () =>
+  // eslint-disable-next-line no-control-regex -- control characters are what the pattern looks for
   text(200, 'a file name').refine((name) => !/[\u0000-\u001f\u007f]/.test(name), { message: 'expected a file name without control characters' });
 
 const uploadSchema = z.object({

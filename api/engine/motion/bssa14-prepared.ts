@@ -5,7 +5,7 @@
  * (Rjb, Vs30, done per pair). What every measure shares is done once per pair: the distance
  * R = √(Rjb² + h²) of the PGA row, PGAr and the logarithm of the nonlinear site term,
  * ln((PGAr + f3) / f3), which does not depend on the period. Every term is computed by the same
- * expression, in the same order, as predictBssa14 (√ in place of Math.hypot, fast-math.ts), so
+ * expression, in the same order, as predictBssa14 (√ in place of Math.hypot), so
  * the numbers agree to within rounding (checked pair by pair in
  * test/engine/motion/bssa14-prepared.test.ts).
  *
