@@ -16,10 +16,9 @@
  *   less sure  Mh between 0.1 and 0.3 s (where it ramps from 5.5 to 6.2); f4 at 0.75 s and
  *              1.5–10 s (two recollections differed by up to 0.023); τ2 from 0.25 s on; ΔφR and
  *              ΔφV (recalled once); e2 and e3 at 0.05, 0.3 and 1 s; e2 and e3 at 0.075–0.25,
- *              0.4–0.75 and 1.5–10 s, which the first engineer could not recall and a second
- *              recalled separately (where both recalled a cell, 0.3 s and 1 s, they agreed digit
- *              for digit; at 0.03 and 0.05 s the two recollections differ by up to 0.025, and the
- *              first engineer's values are kept).
+ *              0.4–0.75 and 1.5–10 s, from a separate recollection (where two recollections
+ *              cover a cell, 0.3 s and 1 s, they agree digit for digit; at 0.03 and 0.05 s they
+ *              differ by up to 0.025, and the values of the fuller recollection are kept).
  *   not typed  f6, f7 (the basin term, which
  *              Tremora omits: δz1 = 0) and the regional Δc3 columns (Tremora uses the global
  *              Δc3 = 0 of California, Taiwan and the other regions).
