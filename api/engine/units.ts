@@ -4,6 +4,7 @@ export const DEG_TO_RAD = Math.PI / 180;
 export const RAD_TO_DEG = 180 / Math.PI;
 
 export const toRadians = (deg: number): number => deg * DEG_TO_RAD;
+export const toDegrees = (rad: number): number => rad * RAD_TO_DEG;
 
 /** Standard gravity, m/s² (CGPM 1901 conventional value). */
 export const STANDARD_GRAVITY_MS2 = 9.80665;
