@@ -1,9 +1,8 @@
 import { InvalidInput, type InputIssue } from '../engine/errors.ts';
-import type { CatalogFormat, CatalogLoad, RejectedRecord } from './catalog-load.ts';
+import { CATALOG_FORMAT_LABELS } from './catalog-formats.ts';
+import type { CatalogFormat } from './catalog-formats.ts';
+import type { CatalogLoad, RejectedRecord } from './catalog-load.ts';
 import { parseCatalog } from './parse-catalog.ts';
-
-/** Formats by name, as requests and options give them. */
-export const CATALOG_FORMATS: readonly CatalogFormat[] = ['csv', 'fdsn-text', 'quakeml'];
 
 /**
  * Most issues listed when no event loads: enough to show the pattern of a wrong file, short
@@ -29,7 +28,7 @@ export function rejectedIssues(rejected: readonly RejectedRecord[], path: string
  */
 export function readCatalogText(text: string, format?: CatalogFormat, path = 'catalog'): CatalogLoad {
   if (text.trim() === '') {
-    throw new InvalidInput([{ path, message: 'expected catalog text (our CSV, FDSN event text or QuakeML 1.2); got an empty text' }], 'invalid catalog');
+    throw new InvalidInput([{ path, message: `expected catalog text (${CATALOG_FORMAT_LABELS}); got an empty text` }], 'invalid catalog');
   }
   let load: CatalogLoad;
   try {

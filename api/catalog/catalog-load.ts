@@ -1,7 +1,8 @@
 import type { CatalogEvent } from '../engine/catalog/event.ts';
 import { countMagnitudeTypes, isMomentMagnitudeType } from '../engine/catalog/magnitude-type.ts';
 
-export type CatalogFormat = 'csv' | 'fdsn-text' | 'quakeml';
+import type { CatalogFormat } from './catalog-formats.ts';
+
 
 /** A record that could not be loaded, where it was and why. */
 export interface RejectedRecord {

@@ -7,7 +7,6 @@ import type { ModelCatalog } from './motion/catalog.ts';
 import type { CommunityResult, StudyResult } from './results.ts';
 import { planScreening, type ScreeningPlan } from './screening-plan.ts';
 
-export { NEAREST_FAULT_COUNT } from './community-result.ts';
 
 /** A screening's results; the caller adds the provenance (it needs the clock and a hash). */
 export type ScreeningOutput = Omit<StudyResult, 'provenance'>;

@@ -9,8 +9,5 @@ export const toDegrees = (rad: number): number => rad * RAD_TO_DEG;
 /** Standard gravity, m/s² (CGPM 1901 conventional value). */
 export const STANDARD_GRAVITY_MS2 = 9.80665;
 
-/** Clamp to [-1, 1] before acos/asin: rounding can push a cosine just past 1. */
-export const clampUnit = (x: number): number => (x > 1 ? 1 : x < -1 ? -1 : x);
-
 /** Azimuth normalised to [0, 360). */
 export const normaliseAzimuthDeg = (deg: number): number => ((deg % 360) + 360) % 360;

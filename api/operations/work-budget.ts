@@ -26,6 +26,9 @@ export interface StudyWork {
   readonly detail: string;
 }
 
+/** "1 community", "11 communities". */
+const count = (n: number, one: string, many: string): string => `${n} ${n === 1 ? one : many}`;
+
 /**
  * The work of screening `study` with `ruptureCount` ruptures: every community against every
  * rupture for every level of every measure computed. Measures are those of the settings plus
@@ -41,7 +44,7 @@ export function studyWork(study: Study, ruptureCount: number): StudyWork {
     measures: keys.length,
     measureLevels,
     size: communities * ruptureCount * measureLevels,
-    detail: `${communities} communities x ${ruptureCount} ruptures x ${measureLevels} levels (over ${keys.length} measures)`,
+    detail: `${count(communities, 'community', 'communities')} x ${count(ruptureCount, 'rupture', 'ruptures')} x ${count(measureLevels, 'level', 'levels')} (over ${count(keys.length, 'measure', 'measures')})`,
   };
 }
 

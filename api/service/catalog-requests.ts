@@ -1,8 +1,8 @@
 import type { Context } from 'hono';
 import { z } from 'zod';
-import { CATALOG_FORMATS } from '../catalog/catalog-input.ts';
+import { CATALOG_FORMAT_LABELS, CATALOG_FORMAT_NAMES, CATALOG_FORMATS, formatOfMediaType } from '../catalog/catalog-formats.ts';
 import type { CatalogFitOptions } from '../catalog/catalog-fit.ts';
-import type { CatalogFormat } from '../catalog/catalog-load.ts';
+import type { CatalogFormat } from '../catalog/catalog-formats.ts';
 import { parseIsoTimeMs } from '../catalog/iso-time.ts';
 import { readZonePolygon } from '../catalog/zone-geojson.ts';
 import type { CompletenessPeriod } from '../engine/catalog/completeness-periods.ts';
@@ -29,7 +29,7 @@ const magnitude = numberIn({ min: 0, max: 10, unit: '(moment magnitude)' });
 function catalogTextField() {
   return z.unknown().transform((value, ctx): string => {
     if (typeof value !== 'string') {
-      ctx.addIssue({ code: 'custom', message: `expected the catalog text (our CSV, FDSN event text or QuakeML) as a string, got ${describeValue(value)}` });
+      ctx.addIssue({ code: 'custom', message: `expected the catalog text (${CATALOG_FORMAT_LABELS}) as a string, got ${describeValue(value)}` });
       return z.NEVER;
     }
     return value;
@@ -38,7 +38,7 @@ function catalogTextField() {
 
 const fitSchema = z.object({
   text: catalogTextField(),
-  format: oneOf(CATALOG_FORMATS).optional(),
+  format: oneOf(CATALOG_FORMAT_NAMES).optional(),
   mMax: magnitude.optional(),
   decluster: yesNo().optional(),
   magnitudes: oneOf(['moment', 'all'] as const).optional(),
@@ -154,22 +154,17 @@ export function readCatalogFitRequest(raw: Record<string, unknown>): CatalogFitR
   return { text: fields.text, ...(fields.format ? { format: fields.format } : {}), options };
 }
 
-/** A raw catalog body's format from its media type; JSON bodies say theirs (or it is detected). */
-const RAW_FORMATS: Readonly<Record<string, CatalogFormat>> = {
-  'text/csv': 'csv',
-  'text/plain': 'fdsn-text',
-  'application/xml': 'quakeml',
-  'text/xml': 'quakeml',
-};
-const CATALOG_TYPES = [...Object.keys(RAW_FORMATS), 'application/json'];
-export const DEFAULT_FILE_NAMES: Readonly<Record<CatalogFormat, string>> = { csv: 'catalog.csv', 'fdsn-text': 'catalog.txt', quakeml: 'catalog.xml' };
+/** A raw catalog body's format is its media type's; JSON bodies say theirs (or it is detected). */
+const CATALOG_TYPES = [...CATALOG_FORMATS.flatMap((f) => f.mediaTypes), 'application/json'];
+const RAW_TYPES_TEXT = CATALOG_FORMATS.map((f) => `${f.mediaTypes[0]} (${f.label})`).join(', ');
 
 const fileNameField = () =>
+  // eslint-disable-next-line no-control-regex -- control characters are what the pattern looks for
   text(200, 'a file name').refine((name) => !/[\u0000-\u001f\u007f]/.test(name), { message: 'expected a file name without control characters' });
 
 const uploadSchema = z.object({
   text: catalogTextField(),
-  format: oneOf(CATALOG_FORMATS).optional(),
+  format: oneOf(CATALOG_FORMAT_NAMES).optional(),
   fileName: fileNameField().optional(),
 });
 const UPLOAD_KEYS = Object.keys(uploadSchema.shape);
@@ -183,7 +178,7 @@ export interface CatalogUpload {
 /** The catalog of a PUT: raw text whose media type gives the format, or JSON `{ fileName?, format?, text }`. */
 export async function readCatalogUpload(c: Context): Promise<CatalogUpload> {
   const type = mediaType(c);
-  const format = type === undefined ? undefined : RAW_FORMATS[type];
+  const format = type === undefined ? undefined : formatOfMediaType(type);
   if (format) {
     const issues = new IssueList();
     const fileName = c.req.query('fileName') === undefined ? undefined : issues.parse(fileNameField(), c.req.query('fileName'), ['fileName']);
@@ -193,7 +188,7 @@ export async function readCatalogUpload(c: Context): Promise<CatalogUpload> {
   if (type !== 'application/json') {
     throw new HttpError(
       415,
-      `expected a catalog as text/csv (our CSV), text/plain (FDSN event text), application/xml (QuakeML) or application/json ({ fileName?, format?, text }), got ${type ?? 'no Content-Type'}`,
+      `expected a catalog as ${RAW_TYPES_TEXT} or application/json ({ fileName?, format?, text }), got ${type ?? 'no Content-Type'}`,
       [],
       { Accept: CATALOG_TYPES.join(', ') },
     );

@@ -1,5 +1,5 @@
 import type { Database } from 'better-sqlite3';
-import type { CatalogFormat } from '../catalog/catalog-load.ts';
+import type { CatalogFormat } from '../catalog/catalog-formats.ts';
 
 /**
  * The earthquake catalog attached to a study (migration 002): one per study, its text kept

@@ -89,7 +89,7 @@ describe('screenStudy: community inside the zone', () => {
     expectRelative(pga.annualRate[0]!, 0.06, 1e-12, 'sum of the two sources\' annual rates (fixed 0.01 + G-R rate 0.05)');
   });
 
-  it('median-only variant (truncation 0) equals Σ rates of ruptures whose Cornell (1979) median exceeds each level', () => {
+  it('median-only variant (truncation 0) equals Σ rates of the engine\'s ruptures whose Cornell (1979) median exceeds each level (checks the sum, not the discretisation)', () => {
     const stepStudy: Study = { ...study, communities: [study.communities[0]!], settings: { ...study.settings, truncationSigma: 0 } };
     const stepResult = screenStudy(stepStudy).communities[0]!;
     const { frame, ruptures } = discretiseStudy(stepStudy);
@@ -99,14 +99,14 @@ describe('screenStudy: community inside the zone', () => {
     levels.forEach((x, j) => {
       const expected = ruptures.reduce((sum, r, i) => (medians[i]! > Math.log(x) ? sum + r.annualRate : sum), 0);
       if (expected === 0) expect(stepResult.curves.PGA!.annualRate[j]).toBe(0);
-      else expectRelative(stepResult.curves.PGA!.annualRate[j]!, expected, 1e-12, `step-function hazard at ${x} g, independent sum`);
+      else expectRelative(stepResult.curves.PGA!.annualRate[j]!, expected, 1e-12, `step-function hazard at ${x} g, summed over discretiseStudy's ruptures`);
     });
     // Deaggregation by source at 475 years: each source's share of the rupture rates above the level.
     const d = stepResult.deaggregation['475']!;
     const above = (sourceId: string) =>
       ruptures.reduce((sum, r, i) => (r.sourceId === sourceId && medians[i]! > Math.log(d.level) ? sum + r.annualRate : sum), 0);
     const total = above('test-fault') + above('test-zone');
-    for (const s of d.bySource) expectRelative(s.share, above(s.sourceId) / total, 1e-12, `share of ${s.sourceId}, independent sum`);
+    for (const s of d.bySource) expectRelative(s.share, above(s.sourceId) / total, 1e-12, `share of ${s.sourceId}, summed over discretiseStudy's ruptures`);
   });
 
   it('is non-increasing, with Poisson chances 1 − exp(−50 λ) (Poisson model)', () => {

@@ -21,7 +21,7 @@ describe('studyWork', () => {
       measures: 1,
       measureLevels: 3,
       size: 120,
-      detail: '1 communities x 40 ruptures x 3 levels (over 1 measures)',
+      detail: '1 community x 40 ruptures x 3 levels (over 1 measure)',
     });
   });
 
@@ -51,6 +51,6 @@ describe('checkWorkBudget', () => {
     expect(error).toBeInstanceOf(StudyTooLarge);
     expect((error as StudyTooLarge).size).toBe(123);
     expect((error as StudyTooLarge).budget).toBe(120);
-    expect((error as StudyTooLarge).message).toBe('study is too large: 1 communities x 41 ruptures x 3 levels (over 1 measures) = 123, over the budget of 120');
+    expect((error as StudyTooLarge).message).toBe('study is too large: 1 community x 41 ruptures x 3 levels (over 1 measure) = 123, over the budget of 120');
   });
 });

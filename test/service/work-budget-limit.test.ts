@@ -18,7 +18,7 @@ afterAll(async () => {
   dir.remove();
 });
 
-const EXPECTED_ERROR = 'study is too large: 1 communities x 1 ruptures x 3 levels (over 1 measures) = 3, over the budget of 2';
+const EXPECTED_ERROR = 'study is too large: 1 community x 1 rupture x 3 levels (over 1 measure) = 3, over the budget of 2';
 
 describe('a study over the work budget', () => {
   it('is refused by validate and compute with 422 naming the size and the budget', async () => {

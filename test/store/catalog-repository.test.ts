@@ -47,6 +47,23 @@ describe('migration 002', () => {
   });
 });
 
+describe('migration 004', () => {
+  it('keeps every stored catalog and takes a format name no CHECK lists, so a new format needs no rebuild', () => {
+    const old = new Database(':memory:');
+    old.pragma('foreign_keys = ON');
+    const shipped = readMigrations();
+    const fourth = shipped.findIndex((m) => m.name === '004-catalog-format-open.sql');
+    migrate(old, shipped.slice(0, fourth));
+    const { id } = new StudyRepository(old).create({ name: 'S', document: '{}' });
+    new CatalogRepository(old).put(id, write());
+    expect(() => old.prepare("UPDATE study_catalogs SET format = 'another-format'").run()).toThrow(/CHECK/);
+    migrate(old, shipped);
+    expect(new CatalogRepository(old).get(id)).toMatchObject({ fileName: 'network.csv', format: 'csv', content: TEXT });
+    old.prepare("UPDATE study_catalogs SET format = 'another-format'").run();
+    expect((old.prepare('SELECT format FROM study_catalogs').get() as { format: string }).format).toBe('another-format');
+  });
+});
+
 describe('CatalogRepository put, get, delete', () => {
   it('attaches a catalog to a study and gives it back exactly as written', () => {
     const { id } = studies.create({ name: 'S', document: '{}' });
@@ -86,7 +103,7 @@ describe('CatalogRepository put, get, delete', () => {
     const { id } = studies.create({ name: 'S', document: '{}' });
     catalogs.put(id, write());
     expect(() => catalogs.put(id, write({ fileName: 'empty.csv', loadedCount: 0 }))).toThrow(/CHECK constraint failed/);
-    expect(() => catalogs.put(id, write({ format: 'xlsx' as never }))).toThrow(/CHECK constraint failed/);
+    expect(() => catalogs.put(id, write({ format: '' as never }))).toThrow(/CHECK constraint failed/);
     expect(catalogs.get(id)).toMatchObject({ fileName: 'network.csv', loadedCount: 1, format: 'csv' });
   });
 

@@ -1,6 +1,7 @@
 import { fitCatalog, type CatalogFit } from '../../api/catalog/catalog-fit.ts';
 import { readCatalogText } from '../../api/catalog/catalog-input.ts';
-import type { CatalogFormat, CatalogLoad } from '../../api/catalog/catalog-load.ts';
+import type { CatalogFormat } from '../../api/catalog/catalog-formats.ts';
+import type { CatalogLoad } from '../../api/catalog/catalog-load.ts';
 import type { GutenbergRichterFit } from '../../api/engine/catalog/gutenberg-richter-fit.ts';
 import type { ZoneRecurrence } from '../../api/engine/catalog/zone-recurrence.ts';
 import { InvalidInput, type InputIssue } from '../../api/engine/errors.ts';

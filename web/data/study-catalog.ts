@@ -1,5 +1,6 @@
 import { readFileSync } from 'node:fs';
-import type { CatalogFormat, CatalogLoad } from '../../api/catalog/catalog-load.ts';
+import type { CatalogFormat } from '../../api/catalog/catalog-formats.ts';
+import type { CatalogLoad } from '../../api/catalog/catalog-load.ts';
 import { readCatalogText } from '../../api/catalog/catalog-input.ts';
 import { feltHistory, type FeltHistory } from '../../api/engine/catalog/felt-history.ts';
 import { InvalidInput } from '../../api/engine/errors.ts';

@@ -84,8 +84,8 @@ export function syntheticCatalog(options: SyntheticCatalogOptions): CatalogEvent
   return times.map((timeMs, i) => {
     const raw = mMin - Math.log(1 - random.nextFloat() * span) / beta;
     const magnitude = options.magnitudeStep === undefined ? raw : binCentre(raw, options.magnitudeStep);
-    let lon = NaN;
-    let lat = NaN;
+    let lon: number;
+    let lat: number;
     for (let draw = 0; ; draw++) {
       if (draw === MAX_DRAWS_PER_EVENT) invalid('rings', `the zone fills too little of its bounding box to draw epicentres in (no hit in ${MAX_DRAWS_PER_EVENT} draws)`);
       lon = west + (east - west) * random.nextFloat();

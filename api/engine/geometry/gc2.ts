@@ -45,7 +45,13 @@ export interface Gc2Sums {
   onTraceUKm: number;
 }
 
-export const createGc2Sums = (): Gc2Sums => ({ weightSum: 0, tSum: 0, uSum: 0, lengthKm: 0, onTraceUKm: Number.NaN });
+export const createGc2Sums = (): Gc2Sums => ({
+  weightSum: 0,
+  tSum: 0,
+  uSum: 0,
+  lengthKm: 0,
+  onTraceUKm: Number.NaN,
+});
 
 export function resetGc2Sums(sums: Gc2Sums): void {
   sums.weightSum = 0;
@@ -59,7 +65,16 @@ export function resetGc2Sums(sums: Gc2Sums): void {
  * Adds one segment, starting at (ax, ay) with unit strike vector (sx, sy) and length l km
  * (l > 0), seen from the site (px, py).
  */
-export function addGc2Segment(sums: Gc2Sums, ax: number, ay: number, sx: number, sy: number, l: number, px: number, py: number): void {
+export function addGc2Segment(
+  sums: Gc2Sums,
+  ax: number,
+  ay: number,
+  sx: number,
+  sy: number,
+  l: number,
+  px: number,
+  py: number,
+): void {
   const dx = px - ax;
   const dy = py - ay;
   const u = dx * sx + dy * sy;
@@ -81,18 +96,26 @@ export function addGc2Segment(sums: Gc2Sums, ax: number, ay: number, sx: number,
 }
 
 /** T of the segments added, km: 0 on the trace, and 0 when no segment has weight. */
-export const gc2TKm = (sums: Gc2Sums): number => (!Number.isNaN(sums.onTraceUKm) || !(sums.weightSum > 0) ? 0 : sums.tSum / sums.weightSum);
+export const gc2TKm = (sums: Gc2Sums): number =>
+  !Number.isNaN(sums.onTraceUKm) || !(sums.weightSum > 0) ? 0 : sums.tSum / sums.weightSum;
 
 /** U of the segments added, km. */
 export const gc2UKm = (sums: Gc2Sums): number =>
-  !Number.isNaN(sums.onTraceUKm) ? sums.onTraceUKm : sums.weightSum > 0 ? sums.uSum / sums.weightSum : 0;
+  !Number.isNaN(sums.onTraceUKm)
+    ? sums.onTraceUKm
+    : sums.weightSum > 0
+      ? sums.uSum / sums.weightSum
+      : 0;
 
 /**
  * GC2 coordinates of `site` (local km) relative to the trace made of `segments`, each a
  * [start, end] pair in trace order (they need not join: a floating rupture's top edges part
  * below a bend).
  */
-export function traceCoordinates(segments: readonly (readonly [PointXY, PointXY])[], site: PointXY): TraceCoordinates {
+export function traceCoordinates(
+  segments: readonly (readonly [PointXY, PointXY])[],
+  site: PointXY,
+): TraceCoordinates {
   const sums = createGc2Sums();
   for (const [a, b] of segments) {
     const l = Math.hypot(b.x - a.x, b.y - a.y);
@@ -103,4 +126,5 @@ export function traceCoordinates(segments: readonly (readonly [PointXY, PointXY]
 }
 
 /** Distance off the ends of the trace along strike: 0 beside it (Ry0, km). */
-export const ry0FromU = (uKm: number, lengthKm: number): number => (uKm < 0 ? -uKm : uKm > lengthKm ? uKm - lengthKm : 0);
+export const ry0FromU = (uKm: number, lengthKm: number): number =>
+  uKm < 0 ? -uKm : uKm > lengthKm ? uKm - lengthKm : 0;

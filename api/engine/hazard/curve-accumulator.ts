@@ -240,7 +240,7 @@ export function coefficientLevelRate(lnLevel: number, exceedance: Extract<Exceed
   for (let start = 0; start < count; start += BLOCK_PAIRS) {
     const end = Math.min(count, start + BLOCK_PAIRS);
     for (let k = start; k < end; k++) {
-      let x = (a[k] as number) * lnLevel + (b[k] as number);
+      const x = (a[k] as number) * lnLevel + (b[k] as number);
       if (x >= intervals) continue;
       if (x <= 0) {
         block += rate[k] as number;

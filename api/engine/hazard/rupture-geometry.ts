@@ -23,7 +23,7 @@ export const EDGE_NORMAL = 16; // n × (c[k+1] − c[k]) for the four edges, 3 e
 export const EDGE = 28; // c[k+1] − c[k], 3 each
 export const EDGE_LENGTH_SQ = 40; // |edge|², 4
 export const EDGE_LENGTH_SQ_XY = 44; // |edge projected|², 4
-export const QUAD_FIELDS = 48;
+// 48 numbers per plane in all.
 
 /** Relative slack of the rectangle tests: corners off a rectangle by less than this share of its size are rounding. */
 const RECTANGLE_SLACK = 1e-9;
@@ -33,7 +33,7 @@ export interface RuptureGeometry {
   readonly table: RuptureTable;
   /** PLANE_FIELDS numbers per plane (the layout above). */
   readonly planes: Float64Array;
-  /** Where each plane's QUAD_FIELDS numbers start in `quads`, or −1 for a rectangle, which needs none. */
+  /** Where each plane's 48 numbers start in `quads`, or −1 for a rectangle, which needs none. */
   readonly quadStart: Int32Array;
   readonly quads: Float64Array;
   /** Centre x, y and radius (km) of a circle holding each rupture's surface projection. */

@@ -15,8 +15,8 @@ import { validityNotes } from './validity.ts';
  *   mean ln PGA = −0.152 + 0.859 M − 1.803 ln(R + 25),   σ(ln PGA) = 0.57
  *
  * PGA in g; M magnitude; R hypocentral distance in km (as the white paper states it).
- * The coefficients are those printed in the white paper (quoted in the task brief and
- * from memory); a three-coefficient formula has no period columns to check for smoothness.
+ * The coefficients are those printed in the white paper (from
+ * memory); a three-coefficient formula has no period columns to check for smoothness.
  * Only a total σ is given, so it is reported as within-event (phi) with tau 0.
  * No site term: the prediction ignores Vs30.
  *

@@ -74,17 +74,3 @@ export function discretiseStudy(study: Study): DiscretisedStudy {
   const frame = frameForStudy(study);
   return { frame, ruptures: study.sources.flatMap((source, i) => discretiseSource(source, i, frame, study.settings)) };
 }
-
-/**
- * All positions of one source at one `magnitude`, without rates (each with its share of a
- * bin), for a scenario that picks the position nearest a community.
- */
-export function rupturesAtMagnitude(
-  source: Source,
-  sourceIndex: number,
-  frame: LocalFrame,
-  settings: Pick<Settings, 'ruptureSpacingKm' | 'zoneCellKm'>,
-  magnitude: number,
-): PlacedRupture[] {
-  return inSource(sourceIndex, () => placeRuptures(prepareSource(source, sourceIndex, frame, settings), magnitude));
-}

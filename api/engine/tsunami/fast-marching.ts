@@ -24,7 +24,7 @@ export interface StartCell {
   readonly timeS: number;
 }
 
-const FAR = 0;
+// State 0 is far (not reached yet): the state array starts at 0.
 const TRIAL = 1;
 const ACCEPTED = 2;
 

@@ -1,5 +1,6 @@
 import { Hono } from 'hono';
 import { fitCatalog } from '../../catalog/catalog-fit.ts';
+import { catalogFormat } from '../../catalog/catalog-formats.ts';
 import { readCatalogText } from '../../catalog/catalog-input.ts';
 import { catalogEventJson, catalogFitJson, catalogLoadJson, feltJson } from '../../catalog/catalog-json.ts';
 import type { CatalogLoad } from '../../catalog/catalog-load.ts';
@@ -8,7 +9,7 @@ import { InvalidInput } from '../../engine/errors.ts';
 import type { StudyCatalogRecord } from '../../store/catalog-repository.ts';
 import { describeValue } from '../../study/fields.ts';
 import { FELT_PAIR_BUDGET, FIT_EVENT_BUDGET } from '../../operations/catalog-limits.ts';
-import { DEFAULT_FILE_NAMES, readCatalogFitRequest, readCatalogUpload } from '../catalog-requests.ts';
+import { readCatalogFitRequest, readCatalogUpload } from '../catalog-requests.ts';
 import { HttpError, notFound } from '../http-error.ts';
 import { readJsonObject } from '../request-body.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
@@ -48,7 +49,7 @@ export function catalogRoutes(ctx: ServiceContext): Hono {
     const upload = await readCatalogUpload(c);
     const load = readCatalogText(upload.text, upload.format);
     const put = store.catalogs.put(id, {
-      fileName: upload.fileName ?? DEFAULT_FILE_NAMES[load.format],
+      fileName: upload.fileName ?? catalogFormat(load.format).fileName,
       format: load.format,
       content: upload.text,
       loadedCount: load.summary.loaded,

@@ -4,7 +4,7 @@ import { DEFAULT_LEVEL_COUNT, defaultLevels, levelsFor } from '../../../api/engi
 import { expectRelative } from '../../helpers/close.ts';
 
 describe('hazard-curve levels', () => {
-  it('defaults to 25 levels log-spaced from 0.001 to 3 g for PGA and SA (task specification)', () => {
+  it('defaults to 25 levels log-spaced from 0.001 to 3 g for PGA and SA (our default, stated in hazard-levels.ts)', () => {
     for (const measure of [{ kind: 'PGA' } as const, { kind: 'SA', periodS: 1 } as const]) {
       const levels = defaultLevels(measure);
       expect(levels.length).toBe(DEFAULT_LEVEL_COUNT);
@@ -15,7 +15,7 @@ describe('hazard-curve levels', () => {
     }
   });
 
-  it('defaults to 0.1–300 cm/s for PGV (task specification)', () => {
+  it('defaults to 0.1–300 cm/s for PGV (our default, stated in hazard-levels.ts)', () => {
     const levels = defaultLevels({ kind: 'PGV' });
     expect([levels[0], levels[24], levels.length]).toEqual([0.1, 300, 25]);
   });

@@ -8,8 +8,9 @@ const Q1 = 0.1586552539;
 const Q3 = 0.001349898;
 
 describe('exceedanceProbability (truncated lognormal)', () => {
-  it('untruncated: P(ε > 1) = Q(1) (A&S 1964 Table 26.1, from memory)', () => {
+  it('untruncated: P(ε > 1) = Q(1) and P(ε > 3) = Q(3) (A&S 1964 Table 26.1, from memory)', () => {
     expectClose(exceedanceProbability(1, Infinity), Q1, 1e-10, 'A&S Table 26.1 (from memory)');
+    expectClose(exceedanceProbability(3, Infinity), Q3, 1e-10, 'A&S Table 26.1 (from memory)');
   });
 
   it('truncated at 3σ: P = (Q(ε) − Q(3)) / (1 − 2Q(3)); at ε = 1 that is 0.157731198 (hand computation from A&S values)', () => {

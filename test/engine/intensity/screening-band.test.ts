@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { screeningBand } from '../../../api/engine/intensity/screening-band.ts';
 
-// Thresholds are the product's own (task specification): >= 8 refer-first, >= 7 refer-soon,
+// Thresholds are the product's own (stated in screening-band.ts and the README): >= 8 refer-first, >= 7 refer-soon,
 // >= 6 prepare, below 6 inform; a 475-year level below the computed levels is inform.
 describe('screeningBand', () => {
   it('uses the stated thresholds, inclusive at the lower edge', () => {

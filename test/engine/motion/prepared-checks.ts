@@ -11,7 +11,7 @@ import type { DistanceContext, GroundMotionModel, PairDistances, RuptureContext,
  * Checks that a model's precomputation hook (GroundMotionModel.prepare) gives predict()'s
  * numbers: for generated ruptures, distances and sites, each pair's ln median and σ must agree
  * within TOLERANCE and `applicable` must be the same flag. The hook computes every term by
- * predict()'s expressions, except √(a² + b²) for Math.hypot (motion/fast-math.ts), which can
+ * predict()'s expressions, except √(a² + b²) for Math.hypot, which can
  * move the last bit or two; 1e-12 in ln units (a relative 1e-12 of the median) is a thousand
  * times that and a million times below anything a hazard curve could show. Not a check of the science:
  * the model's own tests check predict() against published values; this only ties the fast

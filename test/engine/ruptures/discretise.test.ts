@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { InvalidInput } from '../../../api/engine/errors.ts';
 import type { Community, Recurrence, Study } from '../../../api/engine/model.ts';
-import { discretiseSource, discretiseStudy, rupturesAtMagnitude } from '../../../api/engine/ruptures/discretise.ts';
+import { discretiseSource, discretiseStudy } from '../../../api/engine/ruptures/discretise.ts';
 import type { Rupture } from '../../../api/engine/ruptures/rupture.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 import { FIXED_M7, FRAME, SETTINGS, faultKm, pointKm, zoneKm } from '../geometry/km-fixtures.ts';
@@ -109,15 +109,5 @@ describe('discretiseStudy', () => {
       expect(error).toBeInstanceOf(InvalidInput);
       expect((error as InvalidInput).issues[0]?.path).toBe('sources.features[1].properties.dip');
     }
-  });
-});
-
-describe('rupturesAtMagnitude', () => {
-  it('gives every position of a fault at one magnitude, shares adding to 1', () => {
-    const fault = faultKm([[0, 0], [0, 100]], { dipDeg: 90, dipDirectionDeg: 90, upperDepthKm: 0, lowerDepthKm: 15 });
-    const placed = rupturesAtMagnitude(fault, 0, FRAME, SETTINGS, 6.5);
-    expect(placed.length).toBeGreaterThan(1);
-    expectRelative(placed.reduce((s, p) => s + p.share, 0), 1, 1e-12, 'equal shares');
-    for (const p of placed) expect(p.context.magnitude).toBe(6.5);
   });
 });

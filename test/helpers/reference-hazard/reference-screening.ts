@@ -5,7 +5,11 @@ import type { Community, Study } from '../../../api/engine/model.ts';
 import type { ModelCatalog } from '../../../api/engine/motion/catalog.ts';
 import type { Rupture } from '../../../api/engine/ruptures/rupture.ts';
 import { discretiseStudy } from '../../../api/engine/ruptures/discretise.ts';
-import { finishScreening, screenCommunities, type ScreeningOutput } from '../../../api/engine/screen-study.ts';
+import {
+  finishScreening,
+  screenCommunities,
+  type ScreeningOutput,
+} from '../../../api/engine/screen-study.ts';
 import { screeningSetup, type ScreeningSetup } from '../../../api/engine/screening-plan.ts';
 import { deaggregate } from './deaggregation.ts';
 import { siteHazard } from './site-hazard.ts';
@@ -17,16 +21,34 @@ import { siteHazard } from './site-hazard.ts';
  * exceedance-curve.ts, deaggregation.ts), with the production setup, intensity and result
  * assembly around it. Slow and plain on purpose: tests and the benchmark only.
  */
-export function referenceScreening(study: Study, options: { readonly models?: ModelCatalog } = {}): ScreeningOutput {
+export function referenceScreening(
+  study: Study,
+  options: { readonly models?: ModelCatalog } = {},
+): ScreeningOutput {
   const setup = screeningSetup(study, options.models);
   const { frame, ruptures } = discretiseStudy(study);
-  const plan = { ...setup, frame, ruptureCount: ruptures.length, hazardAt: (community: Community, afterBranch: () => void) => referenceHazard(ruptures, frame, community, setup, afterBranch) };
-  const communities = screenCommunities(plan, study.communities.map((_, c) => c));
+  const plan = {
+    ...setup,
+    frame,
+    ruptureCount: ruptures.length,
+    hazardAt: (community: Community, afterBranch: () => void) =>
+      referenceHazard(ruptures, frame, community, setup, afterBranch),
+  };
+  const communities = screenCommunities(
+    plan,
+    study.communities.map((_, c) => c),
+  );
   return finishScreening(plan, communities);
 }
 
 /** One community's hazard from every rupture's distances, site-hazard.ts and deaggregation.ts. */
-function referenceHazard(ruptures: readonly Rupture[], frame: LocalFrame, community: Community, setup: ScreeningSetup, afterBranch: () => void): CommunityHazard {
+function referenceHazard(
+  ruptures: readonly Rupture[],
+  frame: LocalFrame,
+  community: Community,
+  setup: ScreeningSetup,
+  afterBranch: () => void,
+): CommunityHazard {
   const { settings } = setup.study;
   const siteXY = frame.toLocal([community.lon, community.lat]);
   const distances = ruptures.map((r) => ruptureDistances(r.surface, siteXY));
@@ -52,7 +74,10 @@ function referenceHazard(ruptures: readonly Rupture[], frame: LocalFrame, commun
         ruptures,
         distances,
         // The first measure is first in measures.all, so its predictions are at index 0.
-        branches: hazard.branches.map((b) => ({ weight: b.weight, predictions: b.predictions[0]! })),
+        branches: hazard.branches.map((b) => ({
+          weight: b.weight,
+          predictions: b.predictions[0]!,
+        })),
         sourceNames,
         truncationSigma: settings.truncationSigma,
       }),

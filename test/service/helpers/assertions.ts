@@ -1,7 +1,7 @@
 import { expect } from 'vitest';
 import { CONTENT_SECURITY_POLICY } from '../../../api/service/security-headers.ts';
 
-/** The headers every answer carries, page or API (issue 4, "Security headers on every page"). */
+/** The headers every answer carries, page or API (README, the security headers of the service). */
 export function expectSecurityHeaders(response: Response): void {
   expect(response.headers.get('content-security-policy')).toBe(CONTENT_SECURITY_POLICY);
   expect(response.headers.get('x-content-type-options')).toBe('nosniff');

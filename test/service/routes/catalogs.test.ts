@@ -114,9 +114,9 @@ describe('PUT /api/studies/:id/catalog', () => {
       expect(body.issues.map((i) => i.path).sort(), JSON.stringify(body)).toEqual(paths);
     }
     const notText = await expectError(await app().request(`/api/studies/${id}/catalog`, jsonInit('PUT', { text: 42 })), 422);
-    expect(notText.issues).toEqual([{ path: 'text', message: 'expected the catalog text (our CSV, FDSN event text or QuakeML) as a string, got 42' }]);
+    expect(notText.issues).toEqual([{ path: 'text', message: 'expected the catalog text (QuakeML 1.2, FDSN event text or our CSV) as a string, got 42' }]);
     const unsupported = await app().request(`/api/studies/${id}/catalog`, raw('PUT', 'application/octet-stream', FELT_CATALOG_CSV));
-    expect(unsupported.headers.get('accept')).toBe('text/csv, text/plain, application/xml, text/xml, application/json');
+    expect(unsupported.headers.get('accept')).toBe('application/xml, text/xml, text/plain, text/csv, application/json');
     const badName = await expectError(await app().request(`/api/studies/${id}/catalog?fileName=a%07b.csv`, raw('PUT', 'text/csv', FIT_CATALOG_CSV)), 422);
     expect(badName.issues).toEqual([{ path: 'fileName', message: 'expected a file name without control characters' }]);
     const read = (await (await app().request(`/api/studies/${id}/catalog`)).json()) as CatalogAnswer;

@@ -2,10 +2,10 @@ import { describe, expect, test } from 'vitest';
 import { naturalFrequency, percentText } from '../../../web/format/natural-frequency.ts';
 import { translator } from '../../../web/text/translator.ts';
 
-// The rule under test is ours (common practice; stated in web/format/natural-frequency.ts); the worked example
-// "about 1 in 8 over the next 50 years (12%)" is the one in the pages issue (issue 5).
+// The rule under test is ours (stated in web/format/natural-frequency.ts), and so is the worked
+// example "about 1 in 8 over the next 50 years (12%)": 1/0.12 = 8.3, rounded to 8.
 describe('naturalFrequency', () => {
-  test('the issue example: 12% is about 1 in 8', () => {
+  test('the worked example: 12% is about 1 in 8', () => {
     expect(naturalFrequency(0.12)).toEqual({ kind: 'one-in', n: 8 });
     expect(percentText(0.12)).toBe('12');
     const en = translator('en');
