@@ -10,7 +10,7 @@ export {
   type RuptureDimensions,
   type ScalingRelation,
 } from './rupture-scaling.ts';
-export { floatingRuptures, positionOffsetsKm, type FloatingRupture, type FloatingRupturesOptions } from './floating-ruptures.ts';
+export { endToEndOffsetsKm, floatingRuptures, positionOffsetsKm, type FloatingRupture, type FloatingRupturesOptions } from './floating-ruptures.ts';
 export { zoneCells, type ZoneCell } from './zone-cells.ts';
 export { ruptureDistances } from './distances.ts';
 export { traceCoordinates, ry0FromU, type TraceCoordinates } from './gc2.ts';
