@@ -1,5 +1,6 @@
 import type { CommunityHazard, ScreeningMeasures } from './community-result.ts';
 import { InvalidInput } from './errors.ts';
+import { cellUsedAt } from './geometry/cell-refinement.ts';
 import { ruptureDistances } from './geometry/distances.ts';
 import { frameForStudy, type LocalFrame } from './geometry/projection.ts';
 import { deaggregate } from './hazard/deaggregation.ts';
@@ -126,9 +127,10 @@ function referenceHazard(
 ): CommunityHazard {
   const { settings } = plan.study;
   const siteXY = frame.toLocal([community.lon, community.lat]);
-  const distances = ruptures.map((r) => ruptureDistances(r.surface, siteXY));
+  const used = ruptures.filter((r) => !r.cellUse || cellUsedAt(r.cellUse.near, r.cellUse.centre.x, r.cellUse.centre.y, r.cellUse.radiusKm, siteXY.x, siteXY.y));
+  const distances = used.map((r) => ruptureDistances(r.surface, siteXY));
   const hazard = siteHazard({
-    ruptures,
+    ruptures: used,
     distances,
     site: { vs30: community.vs30, vs30Measured: community.vs30Basis === 'measured' },
     branches: plan.branches,
@@ -146,7 +148,7 @@ function referenceHazard(
         measure: measure.key,
         level,
         returnPeriodYears,
-        ruptures,
+        ruptures: used,
         distances,
         // The first measure is first in measures.all, so its predictions are at index 0.
         branches: hazard.branches.map((b) => ({ weight: b.weight, predictions: b.predictions[0]! })),

@@ -48,7 +48,7 @@ export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
   const groundMotion = readBranches(doc.groundMotion, used, settings, options.models, issues, ['groundMotion']);
   const outline = doc.outline === undefined ? undefined : readOutline(doc.outline, issues);
   // Only on a study without other problems: the valid sources then keep their feature order.
-  if (issues.issues.length === 0 && settings) checkRuptureEstimate(sources, settings, issues);
+  if (issues.issues.length === 0 && settings) checkRuptureEstimate(sources, settings, issues, communities.length);
 
   if (issues.issues.length > 0 || name === undefined || !settings || !groundMotion || communities.length === 0) {
     return { ok: false, issues: issues.issues, warnings: issues.warnings };

@@ -2,6 +2,7 @@ import geodesic from 'geographiclib-geodesic';
 import { describe, expect, it } from 'vitest';
 import { Cancelled, InvalidInput, UnknownModel } from '../../api/engine/errors.ts';
 import { ruptureDistances } from '../../api/engine/geometry/distances.ts';
+import { cellUsedAt } from '../../api/engine/geometry/cell-refinement.ts';
 import { pgaForMmi, mmiFromPga } from '../../api/engine/intensity/worden2012.ts';
 import type { Community, FaultSource, Study, ZoneSource } from '../../api/engine/model.ts';
 import { cornell79LnPga } from '../../api/engine/motion/cornell79.ts';
@@ -92,8 +93,10 @@ describe('screenStudy: community inside the zone', () => {
   it('median-only variant (truncation 0) equals Σ rates of ruptures whose Cornell (1979) median exceeds each level', () => {
     const stepStudy: Study = { ...study, communities: [study.communities[0]!], settings: { ...study.settings, truncationSigma: 0 } };
     const stepResult = screenStudy(stepStudy).communities[0]!;
-    const { frame, ruptures } = discretiseStudy(stepStudy);
+    const { frame, ruptures: all } = discretiseStudy(stepStudy);
     const site = frame.toLocal([-150.2, -47]);
+    // A refined zone cell counts as itself or as its squares by the site's distance (geometry/cell-refinement.ts).
+    const ruptures = all.filter((r) => !r.cellUse || cellUsedAt(r.cellUse.near, r.cellUse.centre.x, r.cellUse.centre.y, r.cellUse.radiusKm, site.x, site.y));
     const medians = ruptures.map((r) => cornell79LnPga(r.context.magnitude, ruptureDistances(r.surface, site).rhypoKm));
     const levels = stepStudy.settings.levels.PGA!;
     levels.forEach((x, j) => {
