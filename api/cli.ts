@@ -7,6 +7,7 @@ import { mapVerb, MAP_USAGE } from './cli/map.ts';
 import { motionVerb, MOTION_USAGE } from './cli/motion.ts';
 import { scenarioVerb, SCENARIO_USAGE } from './cli/scenario.ts';
 import { screenVerb, SCREEN_USAGE } from './cli/screen.ts';
+import { tsunamiVerb, TSUNAMI_USAGE } from './cli/tsunami.ts';
 import { EXIT_BAD_INPUT, EXIT_FAILURE, EXIT_OK, formatIssues, type Io, processIo, UsageError } from './cli/output.ts';
 import { InvalidInput, TremoraError } from './engine/errors.ts';
 
@@ -22,6 +23,7 @@ const VERBS: Readonly<Record<string, Verb>> = {
   map: { usage: MAP_USAGE, run: mapVerb },
   motion: { usage: MOTION_USAGE, run: motionVerb },
   catalog: { usage: CATALOG_USAGE, run: catalogVerb },
+  tsunami: { usage: TSUNAMI_USAGE, run: tsunamiVerb },
 };
 
 const USAGE = `tremora — earthquake-hazard screening for small communities

@@ -5,7 +5,7 @@ import { createPages } from '../web/pages.tsx';
 import { createApp } from './service/app.ts';
 import { answerClientError } from './service/client-error.ts';
 import { ConfigError, readConfig, type ServiceConfig } from './service/config.ts';
-import { seedDemoStudy } from './service/demo-seed.ts';
+import { seedDemoStudy } from './operations/demo-seed.ts';
 import { TOOL_VERSION } from './results/tool-version.ts';
 import { openStore, type Store } from './store/store.ts';
 import { RunScheduler } from './workers/run-scheduler.ts';

@@ -7,7 +7,8 @@
  */
 import { readFileSync, writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import { syntheticCatalog, type CatalogEvent } from '../api/engine/catalog/index.ts';
+import type { CatalogEvent } from '../api/engine/catalog/event.ts';
+import { syntheticCatalog } from '../api/engine/catalog/synthetic-catalog.ts';
 import type { LonLat } from '../api/engine/model.ts';
 import { createRandom } from '../api/engine/random.ts';
 

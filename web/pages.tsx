@@ -1,5 +1,5 @@
 import { Hono } from 'hono';
-import type { ServiceContext } from '../api/service/service-context.ts';
+import type { ServiceContext } from '../api/operations/service-context.ts';
 import { accessPages } from './routes/access-pages.tsx';
 import { catalogPages } from './routes/catalog-pages.tsx';
 import { editorPages } from './routes/editor-pages.tsx';

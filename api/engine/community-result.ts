@@ -2,7 +2,7 @@ import { nearestFaults } from './geometry/nearest-faults.ts';
 import type { LocalFrame } from './geometry/projection.ts';
 import { levelAtReturnPeriod } from './hazard/curve-interpolation.ts';
 import { poissonProbability } from './hazard/poisson.ts';
-import type { HazardMeasure, ValiditySummary } from './hazard/site-hazard.ts';
+import type { HazardMeasure, ValiditySummary } from './hazard/hazard-types.ts';
 import { intensityMeasureOf, siteIntensity } from './intensity/site-intensity.ts';
 import { INTENSITY_CONVERSIONS } from './intensity/worden2012.ts';
 import type { Community, Study } from './model.ts';

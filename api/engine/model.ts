@@ -129,4 +129,6 @@ export interface Study {
   readonly settings: Settings;
   /** Optional coastline or outline polygons for maps (outer rings), WGS84. */
   readonly outline?: readonly (readonly LonLat[])[];
+  /** File name of the terrain grid (elevation, m; negative below sea level), as the study gives it. */
+  readonly terrain?: string;
 }

@@ -5,10 +5,9 @@ import { TECTONIC_SETTINGS } from './model.ts';
 import type { Study } from './model.ts';
 import type { ModelCatalog } from './motion/catalog.ts';
 import type { CommunityResult, StudyResult } from './results.ts';
-import { planScreening, type ScreeningPath, type ScreeningPlan } from './screening-plan.ts';
+import { planScreening, type ScreeningPlan } from './screening-plan.ts';
 
 export { NEAREST_FAULT_COUNT } from './community-result.ts';
-export type { ScreeningPath } from './screening-plan.ts';
 
 /** A screening's results; the caller adds the provenance (it needs the clock and a hash). */
 export type ScreeningOutput = Omit<StudyResult, 'provenance'>;
@@ -20,16 +19,15 @@ export interface ScreenStudyOptions {
   readonly shouldStop?: () => boolean;
   /** The models studies may name; the registry's by default. */
   readonly models?: ModelCatalog;
-  /** 'fast' by default; 'reference' is the plain sum the fast path is checked against (screening-plan.ts). */
-  readonly path?: ScreeningPath;
 }
 
 /**
  * Screens every community of a validated study: hazard curves for each measure (mean and
  * per-branch), levels at the return periods, Poisson chances over the horizons, intensity,
  * deaggregation, nearest faults, band and warnings. Pure and deterministic: the same study
- * gives the same numbers. Both paths give the same numbers to within rounding and the fast
- * path's tabulated exceedance (test/engine/screen-study.test.ts runs its checks on both).
+ * gives the same numbers. The plain sum of test/helpers/reference-hazard/ gives the same
+ * numbers to within rounding and the tabulated exceedance (test/engine/screen-study.test.ts
+ * runs its checks on both).
  */
 export function screenStudy(study: Study, options: ScreenStudyOptions = {}): ScreeningOutput {
   let shareDone = 0;
@@ -37,7 +35,7 @@ export function screenStudy(study: Study, options: ScreenStudyOptions = {}): Scr
     if (options.shouldStop?.()) throw new Cancelled(shareDone);
   };
   checkStop();
-  const plan = planScreening(study, { ...(options.models ? { models: options.models } : {}), ...(options.path ? { path: options.path } : {}) });
+  const plan = planScreening(study, { models: options.models });
   checkStop();
   const indices = study.communities.map((_, c) => c);
   const communities = screenCommunities(plan, indices, {
@@ -50,6 +48,9 @@ export function screenStudy(study: Study, options: ScreenStudyOptions = {}): Scr
   return finishScreening(plan, communities);
 }
 
+/** What screening a community needs of a plan. */
+export type CommunityPlan = Pick<ScreeningPlan, 'study' | 'frame' | 'measures' | 'branchCount' | 'hazardAt'>;
+
 export interface ScreenCommunitiesOptions {
   /** Share of these communities' work done, in (0, 1], after each branch of each community. */
   readonly onProgress?: (shareDone: number) => void;
@@ -59,7 +60,7 @@ export interface ScreenCommunitiesOptions {
  * The results of the communities at `indices` of the plan's study, in that order: the unit of
  * work a worker thread takes (the whole study's screening is this over every community).
  */
-export function screenCommunities(plan: ScreeningPlan, indices: readonly number[], options: ScreenCommunitiesOptions = {}): CommunityResult[] {
+export function screenCommunities(plan: CommunityPlan, indices: readonly number[], options: ScreenCommunitiesOptions = {}): CommunityResult[] {
   const { study } = plan;
   return indices.map((c, position) => {
     const community = study.communities[c];

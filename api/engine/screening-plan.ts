@@ -1,15 +1,12 @@
 import type { CommunityHazard, ScreeningMeasures } from './community-result.ts';
 import { InvalidInput } from './errors.ts';
-import { cellUsedAt } from './geometry/cell-refinement.ts';
-import { ruptureDistances } from './geometry/distances.ts';
 import { frameForStudy, type LocalFrame } from './geometry/projection.ts';
-import { deaggregate } from './hazard/deaggregation.ts';
 import { fastDeaggregate } from './hazard/fast-deaggregation.ts';
 import { createFastHazard, fastSiteHazard, type FastHazard } from './hazard/fast-site-hazard.ts';
 import { levelsFor } from './hazard/hazard-levels.ts';
 import type { RuptureTable } from './hazard/rupture-table.ts';
+import type { HazardBranch, HazardMeasure } from './hazard/hazard-types.ts';
 import { studyRuptureTable } from './hazard/study-rupture-table.ts';
-import { siteHazard, type HazardBranch, type HazardMeasure } from './hazard/site-hazard.ts';
 import { INTENSITY_MEASURE, intensityMeasureOf } from './intensity/site-intensity.ts';
 import { TECTONIC_SETTINGS } from './model.ts';
 import type { Community, Study, TectonicSetting } from './model.ts';
@@ -17,23 +14,13 @@ import type { ModelCatalog } from './motion/catalog.ts';
 import { parseMeasure } from './motion/measure.ts';
 import { PGV_FROM_SA_NOTE, withPgvFromSa } from './motion/pgv-from-sa.ts';
 import { modelCatalog } from './motion/registry.ts';
-import type { Rupture } from './ruptures/rupture.ts';
-import { discretiseStudy } from './ruptures/discretise.ts';
 
 /** Logic-tree weights of a setting must sum to 1 within this (as the study schema requires). */
 const WEIGHT_SUM_TOLERANCE = 1e-6;
 
-/**
- * Which sum of the hazard integral a screening uses: 'fast' (typed arrays, precomputed model
- * terms, tabulated exceedance: hazard/fast-site-hazard.ts) or 'reference', the plain sum of
- * hazard/site-hazard.ts that the fast one is checked against.
- */
-export type ScreeningPath = 'fast' | 'reference';
-
 /** Everything about a screening that does not depend on the community. */
 export interface ScreeningPlan {
   readonly study: Study;
-  readonly path: ScreeningPath;
   readonly measures: ScreeningMeasures;
   readonly branches: Readonly<Partial<Record<TectonicSetting, HazardBranch[]>>>;
   readonly branchCount: number;
@@ -41,8 +28,8 @@ export interface ScreeningPlan {
   readonly warnings: readonly string[];
   readonly frame: LocalFrame;
   readonly ruptureCount: number;
-  /** The ruptures as a table (fast path), e.g. to hand to worker threads. */
-  readonly table?: RuptureTable;
+  /** The ruptures as a table, e.g. to hand to worker threads. */
+  readonly table: RuptureTable;
   /** One community's hazard; `afterBranch` after each branch (it may throw to stop). */
   hazardAt(community: Community, afterBranch: () => void): CommunityHazard;
 }
@@ -50,8 +37,7 @@ export interface ScreeningPlan {
 export interface ScreeningPlanOptions {
   /** The models studies may name; the registry's by default. */
   readonly models?: ModelCatalog;
-  readonly path?: ScreeningPath;
-  /** The study's rupture table, already built (fast path only): the study is not discretised again. */
+  /** The study's rupture table, already built: the study is not discretised again. */
   readonly table?: RuptureTable;
 }
 
@@ -67,19 +53,12 @@ export function screeningSetup(study: Study, models: ModelCatalog = modelCatalog
   return { study, measures, branches, branchCount, warnings };
 }
 
-/** Resolves a study's measures and branches and lays out its ruptures for the chosen path. */
+/** Resolves a study's measures and branches and lays out its ruptures in a table. */
 export function planScreening(study: Study, options: ScreeningPlanOptions = {}): ScreeningPlan {
-  const path = options.path ?? 'fast';
   const setup = screeningSetup(study, options.models);
   const { measures, branches } = setup;
-  const common = { ...setup, path };
   const { settings } = study;
   const sourceNames = study.sources.map((s) => s.name);
-
-  if (path === 'reference') {
-    const { frame, ruptures } = discretiseStudy(study);
-    return { ...common, frame, ruptureCount: ruptures.length, hazardAt: (community, afterBranch) => referenceHazard(ruptures, frame, community, common, afterBranch) };
-  }
 
   let frame: LocalFrame;
   let table: RuptureTable;
@@ -92,7 +71,7 @@ export function planScreening(study: Study, options: ScreeningPlanOptions = {}):
   // Built when the first community asks: a thread that only hands communities to others needs none.
   let fast: FastHazard | undefined;
   return {
-    ...common,
+    ...setup,
     frame,
     ruptureCount: table.count,
     table,
@@ -114,47 +93,6 @@ export function planScreening(study: Study, options: ScreeningPlanOptions = {}):
           fastDeaggregate({ measure: measure.key, level, returnPeriodYears, table, branches: hazard.firstMeasure, sourceNames, exceedance: fast!.exceedance }),
       };
     },
-  };
-}
-
-/** The plain path: every rupture's distances, site-hazard.ts, deaggregation.ts. */
-function referenceHazard(
-  ruptures: readonly Rupture[],
-  frame: LocalFrame,
-  community: Community,
-  plan: Pick<ScreeningPlan, 'study' | 'measures' | 'branches'>,
-  afterBranch: () => void,
-): CommunityHazard {
-  const { settings } = plan.study;
-  const siteXY = frame.toLocal([community.lon, community.lat]);
-  const used = ruptures.filter((r) => !r.cellUse || cellUsedAt(r.cellUse.near, r.cellUse.centre.x, r.cellUse.centre.y, r.cellUse.radiusKm, siteXY.x, siteXY.y));
-  const distances = used.map((r) => ruptureDistances(r.surface, siteXY));
-  const hazard = siteHazard({
-    ruptures: used,
-    distances,
-    site: { vs30: community.vs30, vs30Measured: community.vs30Basis === 'measured' },
-    branches: plan.branches,
-    measures: plan.measures.all,
-    truncationSigma: settings.truncationSigma,
-    maxDistanceKm: settings.maxDistanceKm,
-    afterBranch,
-  });
-  const sourceNames = plan.study.sources.map((s) => s.name);
-  return {
-    curves: hazard.curves,
-    validity: hazard.validity,
-    deaggregate: (measure, level, returnPeriodYears) =>
-      deaggregate({
-        measure: measure.key,
-        level,
-        returnPeriodYears,
-        ruptures: used,
-        distances,
-        // The first measure is first in measures.all, so its predictions are at index 0.
-        branches: hazard.branches.map((b) => ({ weight: b.weight, predictions: b.predictions[0]! })),
-        sourceNames,
-        truncationSigma: settings.truncationSigma,
-      }),
   };
 }
 

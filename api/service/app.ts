@@ -13,9 +13,10 @@ import { probeRoutes } from './routes/probe.ts';
 import { runRoutes } from './routes/runs.ts';
 import { scenarioRoutes } from './routes/scenario.ts';
 import { studyRoutes } from './routes/studies.ts';
+import { tsunamiRoutes } from './routes/tsunami.ts';
 import { sameOriginWrites } from './same-origin.ts';
 import { securityHeaders } from './security-headers.ts';
-import type { ServiceContext } from './service-context.ts';
+import type { ServiceContext } from '../operations/service-context.ts';
 
 /**
  * Largest request body accepted, bytes. A study at the schema's limits (500 sources, the
@@ -55,7 +56,7 @@ export function createApp(ctx: ServiceContext, options: CreateAppOptions = {}): 
   );
 
   const api = new Hono();
-  for (const routes of [healthRoutes, studyRoutes, importRoutes, runRoutes, mapRoutes, computeRoutes, scenarioRoutes, probeRoutes, catalogRoutes]) {
+  for (const routes of [healthRoutes, studyRoutes, importRoutes, runRoutes, mapRoutes, computeRoutes, scenarioRoutes, probeRoutes, catalogRoutes, tsunamiRoutes]) {
     api.route('/', routes(ctx));
   }
   app.route('/api', api);

@@ -2,7 +2,7 @@ import { isIP } from 'node:net';
 import { resolve } from 'node:path';
 import { DEFAULT_DATABASE_PATH } from '../store/store.ts';
 import { defaultPoolSize } from '../workers/worker-pool.ts';
-import { DEFAULT_WORK_BUDGET } from './work-budget.ts';
+import { DEFAULT_WORK_BUDGET } from '../operations/work-budget.ts';
 
 /** Port used when PORT is not set (our choice: unassigned by IANA and rarely taken locally). */
 export const DEFAULT_PORT = 8357;

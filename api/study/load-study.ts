@@ -11,7 +11,7 @@ import { MAX_STUDY_VERTICES, readSourceGeometry, vertexCount } from './source-ge
 import { readSources } from './source-schema.ts';
 import { checkRuptureEstimate } from './rupture-estimate.ts';
 
-export const STUDY_KEYS = ['name', 'communities', 'sources', 'groundMotion', 'settings', 'outline'] as const;
+export const STUDY_KEYS = ['name', 'communities', 'sources', 'groundMotion', 'settings', 'outline', 'terrain'] as const;
 
 export type LoadResult =
   | { readonly ok: true; readonly study: Study; readonly warnings: readonly InputIssue[] }
@@ -47,13 +47,15 @@ export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
   const used = new Set<TectonicSetting>(sources.map((s) => s.setting));
   const groundMotion = readBranches(doc.groundMotion, used, settings, options.models, issues, ['groundMotion']);
   const outline = doc.outline === undefined ? undefined : readOutline(doc.outline, issues);
+  // The terrain grid's file name; the CLI reads it beside the study, the service in its terrain folder.
+  const terrain = doc.terrain === undefined ? undefined : issues.parse(text(300, 'the file name of a GeoTIFF or ESRI ASCII elevation grid'), doc.terrain, ['terrain']);
   // Only on a study without other problems: the valid sources then keep their feature order.
   if (issues.issues.length === 0 && settings) checkRuptureEstimate(sources, settings, issues, communities.length);
 
   if (issues.issues.length > 0 || name === undefined || !settings || !groundMotion || communities.length === 0) {
     return { ok: false, issues: issues.issues, warnings: issues.warnings };
   }
-  const study: Study = { name, communities, sources, groundMotion, settings, ...(outline ? { outline } : {}) };
+  const study: Study = { name, communities, sources, groundMotion, settings, ...(outline ? { outline } : {}), ...(terrain ? { terrain } : {}) };
   return { ok: true, study, warnings: issues.warnings };
 }
 

@@ -2,7 +2,6 @@ import type { InputIssue } from '../engine/errors.ts';
 import type { RuptureTable } from '../engine/hazard/rupture-table.ts';
 import type { HazardMapOptions, MapPoint } from '../engine/map/hazard-map.ts';
 import type { Study } from '../engine/model.ts';
-import type { ScreeningPath } from '../engine/screening-plan.ts';
 import type { Provenance } from '../engine/results.ts';
 import type { ScenarioRequest } from '../engine/scenario/index.ts';
 
@@ -20,7 +19,7 @@ export type WorkerTask =
   /** A study's ruptures laid out as a table on shared memory, for the parallel runners to hand out. */
   | { readonly kind: 'rupture-table'; readonly study: Study }
   /**
-   * Some communities of a study on the fast path, from the rupture table the runner built once
+   * Some communities of a study, from the rupture table the runner built once
    * (parallel-screen.ts); `planKey` names the run, so a thread builds its plan once per run.
    */
   | {
@@ -29,8 +28,6 @@ export type WorkerTask =
       readonly study: Study;
       readonly table: RuptureTable;
       readonly indices: readonly number[];
-      /** 'reference' runs the plain sum instead (the thread then discretises the study itself): for checking the fast path. */
-      readonly path?: ScreeningPath;
     }
   /** Points firstIndex .. firstIndex + count − 1 of a hazard map (parallel-map.ts). */
   | {

@@ -3,7 +3,7 @@ import type { Study } from '../engine/model.ts';
 import { modelCatalog } from '../engine/motion/registry.ts';
 import type { Provenance } from '../engine/results.ts';
 import { finishScreening, type ScreeningOutput } from '../engine/screen-study.ts';
-import { screeningSetup, type ScreeningPath } from '../engine/screening-plan.ts';
+import { screeningSetup } from '../engine/screening-plan.ts';
 import { buildProvenance } from '../results/provenance.ts';
 import { newPlanKey, runChunks } from './chunk-runner.ts';
 import type { ScreenOutput } from './messages.ts';
@@ -35,14 +35,11 @@ export interface ParallelScreenOptions {
   readonly onProgress?: (shareDone: number) => void;
   /** Communities per task; by default enough tasks for each thread to take about four. */
   readonly chunkSize?: number;
-  /** 'reference' spreads the plain sum instead (for checking the fast path; each thread then discretises the study). */
-  readonly path?: ScreeningPath;
 }
 
 /**
- * Screens a study over the pool's threads, on the fast path: one thread lays the study's
- * ruptures out in a table on shared memory, then the communities are handed out in chunks,
- * each thread building its plan once and taking chunks until none are left. The numbers are
+ * Screens a study over the pool's threads: one thread lays the study's ruptures out in a table
+ * on shared memory, then the communities are handed out in chunks, each thread building its plan once and taking chunks until none are left. The numbers are
  * screenStudy's (the same engine functions, community by community). The models are the
  * registry's (a worker thread has no other). Cancel stops every chunk (Cancelled).
  */
@@ -62,7 +59,7 @@ export function screenStudyOnPool(pool: WorkerPool, study: Study, options: Paral
     for (let first = 0; first < count; first += chunkSize) chunks.push(Array.from({ length: Math.min(chunkSize, count - first) }, (_, i) => first + i));
     const planKey = newPlanKey();
     const run = runChunks(pool, {
-      tasks: chunks.map((indices) => ({ kind: 'screen-communities' as const, planKey, study, table, indices, ...(options.path ? { path: options.path } : {}) })),
+      tasks: chunks.map((indices) => ({ kind: 'screen-communities' as const, planKey, study, table, indices })),
       weights: chunks.map((c) => c.length),
       ...(options.onProgress ? { onProgress: options.onProgress } : {}),
     });

@@ -34,9 +34,7 @@ export interface ChunkEvents {
 }
 
 export function screenCommunitiesTask(task: Extract<WorkerTask, { kind: 'screen-communities' }>, events: ChunkEvents): TaskOutputs['screen-communities'] {
-  const plan = keptPlan(`screen:${task.path ?? 'fast'}:${task.planKey}`, () =>
-    task.path === 'reference' ? planScreening(task.study, { models: modelCatalog, path: 'reference' }) : planScreening(task.study, { models: modelCatalog, table: task.table }),
-  );
+  const plan = keptPlan(`screen:${task.planKey}`, () => planScreening(task.study, { models: modelCatalog, table: task.table }));
   const results = screenCommunities(plan, task.indices, {
     onProgress: (share) => {
       events.onProgress(share);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { ConfigError, DEFAULT_PORT, isLoopbackHost, readConfig } from '../../api/service/config.ts';
-import { DEFAULT_WORK_BUDGET } from '../../api/service/work-budget.ts';
+import { DEFAULT_WORK_BUDGET } from '../../api/operations/work-budget.ts';
 
 const TOKEN = 'test-token-0123456789abcdef';
 

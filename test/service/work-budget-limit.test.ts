@@ -4,7 +4,7 @@ import { jsonInit, type ServiceProcess, startService, tempDir } from './helpers/
 import { smallStudy } from './helpers/small-study.ts';
 
 /**
- * The work budget (api/service/work-budget.ts) against a started service whose budget is set
+ * The work budget (api/operations/work-budget.ts) against a started service whose budget is set
  * below the small study's work (1 community x 1 rupture x 3 levels = 3).
  */
 const dir = tempDir();

@@ -191,7 +191,7 @@ describe('loadStudy: every problem at once, each with its path', () => {
   });
 
   it('refuses a non-object study and a missing FeatureCollection', () => {
-    expect(lines(issuesOf([1, 2]))).toEqual(['(study): expected a study object with name, communities, sources, groundMotion, settings, outline, got a list of 2']);
+    expect(lines(issuesOf([1, 2]))).toEqual(['(study): expected a study object with name, communities, sources, groundMotion, settings, outline, terrain, got a list of 2']);
     const study = validStudy();
     study.sources = { type: 'Feature' };
     expect(lines(issuesOf(study))).toEqual(['sources: expected a GeoJSON FeatureCollection with a list of features, got an object']);

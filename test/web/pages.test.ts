@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { StudyResult } from '../../api/engine/results.ts';
-import { DEMO_STUDY_URL } from '../../api/service/demo-seed.ts';
+import { DEMO_STUDY_URL } from '../../api/operations/demo-seed.ts';
 import { translator } from '../../web/text/translator.ts';
 import { smallStudy } from '../service/helpers/small-study.ts';
 import { fileForm, runFinished, startPageApp, textOfId, type PageApp } from './helpers/page-app.ts';

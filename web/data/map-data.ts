@@ -1,5 +1,5 @@
 import type { ReturnPeriodStatus } from '../../api/engine/results.ts';
-import type { ServiceContext } from '../../api/service/service-context.ts';
+import type { ServiceContext } from '../../api/operations/service-context.ts';
 import type { MapRunRecord } from '../../api/store/index.ts';
 
 /**

@@ -1,7 +1,7 @@
-import { inputHash } from '../../api/service/index.ts';
-import type { ServiceContext } from '../../api/service/service-context.ts';
-import { measureStudy } from '../../api/service/study-size.ts';
-import { storedInputs, validateStudy } from '../../api/service/study-input.ts';
+import { inputHash } from '../../api/results/input-hash.ts';
+import type { ServiceContext } from '../../api/operations/service-context.ts';
+import { measureStudy } from '../../api/operations/study-size.ts';
+import { storedInputs, validateStudy } from '../../api/operations/study-input.ts';
 import type { RunRecord, StudyRecord } from '../../api/store/index.ts';
 
 /**

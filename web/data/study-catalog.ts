@@ -4,8 +4,8 @@ import { readCatalogText } from '../../api/catalog/catalog-input.ts';
 import { feltHistory, type FeltHistory } from '../../api/engine/catalog/felt-history.ts';
 import { InvalidInput } from '../../api/engine/errors.ts';
 import type { Study } from '../../api/engine/model.ts';
-import { FELT_PAIR_BUDGET } from '../../api/service/routes/catalogs.ts';
-import type { ServiceContext } from '../../api/service/service-context.ts';
+import { FELT_PAIR_BUDGET } from '../../api/operations/catalog-limits.ts';
+import type { ServiceContext } from '../../api/operations/service-context.ts';
 
 /** A catalog attached to a study: its text as received, format and file name. */
 export interface AttachedCatalog {
@@ -46,7 +46,7 @@ export function attachCatalog(ctx: ServiceContext, studyId: string, catalog: Att
 
 export type FeltData =
   | { readonly kind: 'history'; readonly load: CatalogLoad; readonly history: FeltHistory }
-  /** More events × communities than a request computes (the API's FELT_PAIR_BUDGET). */
+  /** More events × communities than a request computes (FELT_PAIR_BUDGET). */
   | { readonly kind: 'too-many'; readonly pairs: number };
 
 /**

@@ -1,9 +1,9 @@
 import { InvalidInput, type InputIssue } from '../../api/engine/errors.ts';
 import type { Study } from '../../api/engine/model.ts';
 import type { StudyResult } from '../../api/engine/results.ts';
-import { inputHash } from '../../api/service/index.ts';
-import type { ServiceContext } from '../../api/service/service-context.ts';
-import { storedInputs, validateStudy, type StoredInputs } from '../../api/service/study-input.ts';
+import { inputHash } from '../../api/results/input-hash.ts';
+import type { ServiceContext } from '../../api/operations/service-context.ts';
+import { storedInputs, validateStudy, type StoredInputs } from '../../api/operations/study-input.ts';
 import type { RunRecord, StudyRecord } from '../../api/store/index.ts';
 
 /** A saved study as the pages read it, in-process from the store. */

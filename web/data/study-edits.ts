@@ -1,8 +1,8 @@
 import { InvalidInput, type InputIssue } from '../../api/engine/errors.ts';
 import type { Community } from '../../api/engine/model.ts';
 import type { ModelCatalog } from '../../api/engine/motion/catalog.ts';
-import type { StoredInputs } from '../../api/service/study-input.ts';
-import { validateStudy } from '../../api/service/study-input.ts';
+import type { StoredInputs } from '../../api/operations/study-input.ts';
+import { validateStudy } from '../../api/operations/study-input.ts';
 import { parseJsonText } from '../../api/study/json-text.ts';
 
 /**

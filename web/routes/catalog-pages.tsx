@@ -3,7 +3,7 @@ import { InvalidInput, type InputIssue } from '../../api/engine/errors.ts';
 import type { ZoneRecurrence } from '../../api/engine/catalog/zone-recurrence.ts';
 import type { LonLat, Study } from '../../api/engine/model.ts';
 import { detectCatalogFormat } from '../../api/catalog/index.ts';
-import { validateStudy } from '../../api/service/study-input.ts';
+import { validateStudy } from '../../api/operations/study-input.ts';
 import { analyseCatalog, fitZone } from '../data/catalog-analysis.ts';
 import { attachCatalog, readDemoCatalog, studyCatalog, type AttachedCatalog } from '../data/study-catalog.ts';
 import { readStudy, type StudyData } from '../data/study-data.ts';

@@ -1,7 +1,7 @@
 import type { Context, Hono } from 'hono';
 import { InvalidInput, TremoraError } from '../../api/engine/errors.ts';
-import { readMapRequest } from '../../api/service/map-request.ts';
-import { startMapRun } from '../../api/service/start-map-run.ts';
+import { readMapRequest } from '../../api/operations/map-request.ts';
+import { startMapRun } from '../../api/operations/start-map-run.ts';
 import type { MapFormState } from '../views/hazard-map-panel.tsx';
 import { MapRunView } from '../views/map-run-view.tsx';
 import { MessageView } from '../views/message-view.tsx';

@@ -3,7 +3,7 @@ import { getCookie } from 'hono/cookie';
 import { html } from 'hono/html';
 import type { Child } from 'hono/jsx';
 import type { ContentfulStatusCode } from 'hono/utils/http-status';
-import type { ServiceContext } from '../../api/service/service-context.ts';
+import type { ServiceContext } from '../../api/operations/service-context.ts';
 import { ResultsCache } from '../data/study-data.ts';
 import { DEFAULT_LANGUAGE, isLanguage, translator, type LanguageCode, type Translator } from '../text/translator.ts';
 

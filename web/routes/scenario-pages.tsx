@@ -2,8 +2,9 @@ import type { Context, Hono } from 'hono';
 import { InvalidInput, StudyTooLarge, type InputIssue } from '../../api/engine/errors.ts';
 import type { Source, Study } from '../../api/engine/model.ts';
 import type { ScenarioResult } from '../../api/engine/scenario/index.ts';
-import { readScenarioRequest } from '../../api/service/scenario-request.ts';
+import { readScenarioRequest } from '../../api/operations/scenario-request.ts';
 import { readStudy } from '../data/study-data.ts';
+import { scenarioTsunamiTimes, type TsunamiPageResult } from '../data/tsunami-data.ts';
 import { mapFrame, studyPoints } from '../maps/map-frame.ts';
 import { MessageView } from '../views/message-view.tsx';
 import { ScenarioView } from '../views/scenario-view.tsx';
@@ -52,6 +53,7 @@ export function scenarioPages(app: Hono, kit: PageKit): void {
     const magnitude = form?.magnitude ?? String(defaultMagnitude(study.sources.find((s) => s.id === sourceId)));
     let issues: InputIssue[] = [];
     let result: ScenarioResult | undefined;
+    let tsunami: TsunamiPageResult | undefined;
     if (form) {
       const magnitudeValue = form.magnitude.trim() === '' ? undefined : Number(form.magnitude.replace(',', '.'));
       try {
@@ -61,6 +63,7 @@ export function scenarioPages(app: Hono, kit: PageKit): void {
         } else {
           const { resultJson } = await ctx.quickPool.run({ kind: 'scenario', study, request }).result;
           result = JSON.parse(resultJson) as ScenarioResult;
+          tsunami = await scenarioTsunamiTimes(ctx, study, request);
         }
       } catch (error) {
         if (error instanceof InvalidInput) issues = [...error.issues];
@@ -80,6 +83,7 @@ export function scenarioPages(app: Hono, kit: PageKit): void {
         sourceId={sourceId}
         magnitude={magnitude}
         issues={issues}
+        {...(tsunami ? { tsunami } : {})}
         {...(result ? { result, frame: mapFrame(study, { ...OVERVIEW_MAP, fit: 'communities', include: corners as [number, number][] }) } : {})}
       />,
       issues.length > 0 ? 422 : 200,

@@ -1,12 +1,13 @@
 import type { Context, Hono } from 'hono';
 import type { Child } from 'hono/jsx';
 import { InvalidInput, StudyTooLarge, TremoraError } from '../../api/engine/errors.ts';
-import { runStudy } from '../../api/service/study-input.ts';
+import { runStudy } from '../../api/operations/study-input.ts';
 import { communityPageData } from '../data/community-data.ts';
 import { MapLayerCache, readMaps } from '../data/map-data.ts';
 import { suggestedMapSpacing } from '../data/map-spacing.ts';
 import { FIRST_DIRECTION, isSortKey, leadHorizonYears, rankCommunities, sortRanked, type SortDirection } from '../data/ranking.ts';
 import { feltData, studyCatalog } from '../data/study-catalog.ts';
+import { rankByTimeToAct, studyTsunami } from '../data/tsunami-data.ts';
 import { startScreening } from '../data/start-screening.ts';
 import { readRuns, readStudy, type StudyData } from '../data/study-data.ts';
 import { mapFrame } from '../maps/map-frame.ts';
@@ -48,7 +49,7 @@ export function studyPages(app: Hono, kit: PageKit): void {
     );
   };
 
-  const overview = (c: Context, again: OverviewAgain = {}) => {
+  const overview = async (c: Context, again: OverviewAgain = {}) => {
     const { problem, mapForm } = again;
     const tr = kit.tr(c);
     const id = c.req.param('id') as string;
@@ -61,6 +62,7 @@ export function studyPages(app: Hono, kit: PageKit): void {
     const askedDir = c.req.query('dir');
     const direction: SortDirection = askedDir === 'ascending' || askedDir === 'descending' ? askedDir : FIRST_DIRECTION[sort];
     const rows = runs.screening ? sortRanked(rankCommunities(data.study, runs.screening.results), sort, direction) : undefined;
+    const tsunami = await studyTsunami(ctx, data.study);
     return kit.render(
       c,
       <OverviewView
@@ -79,6 +81,7 @@ export function studyPages(app: Hono, kit: PageKit): void {
         maps={readMaps(ctx, layers, id, data.hash)}
         mapSpacing={suggestedMapSpacing(data.study)}
         {...(mapForm ? { mapForm } : {})}
+        {...(tsunami ? { tsunami: { times: tsunami, ranked: tsunami.ok ? rankByTimeToAct(tsunami.result) : [] } } : {})}
       />,
       problem || mapForm ? 422 : 200,
     );
@@ -147,10 +150,11 @@ export function studyPages(app: Hono, kit: PageKit): void {
     };
   };
 
-  app.get('/studies/:id/communities/:cid', (c) => {
+  app.get('/studies/:id/communities/:cid', async (c) => {
     const found = communityContext(c);
     if (found.kind === 'response') return found.response;
     const { tr, id, study, screening, page } = found;
+    const tsunami = page.community.coastal ? await studyTsunami(ctx, study) : undefined;
     return kit.render(
       c,
       <CommunityView
@@ -164,14 +168,16 @@ export function studyPages(app: Hono, kit: PageKit): void {
         frame={mapFrame(study, COMMUNITY_MAP)}
         {...(found.felt ? { felt: found.felt } : {})}
         feltTooMany={found.feltTooMany}
+        {...(tsunami ? { tsunami } : {})}
       />,
     );
   });
 
-  app.get('/studies/:id/communities/:cid/handout', (c) => {
+  app.get('/studies/:id/communities/:cid/handout', async (c) => {
     const found = communityContext(c);
     if (found.kind === 'response') return found.response;
-    const { tr, id, screening, page } = found;
+    const { tr, id, study, screening, page } = found;
+    const tsunami = page.community.coastal ? await studyTsunami(ctx, study) : undefined;
     return kit.render(
       c,
       <HandoutView
@@ -182,6 +188,7 @@ export function studyPages(app: Hono, kit: PageKit): void {
         provenance={screening.results.provenance}
         printedAt={new Date().toISOString()}
         {...(found.felt ? { felt: found.felt } : {})}
+        {...(tsunami ? { tsunami } : {})}
       />,
     );
   });

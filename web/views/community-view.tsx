@@ -14,6 +14,8 @@ import type { TextKey } from '../text/en.ts';
 import type { Translator } from '../text/translator.ts';
 import { FeltList } from './felt-list.tsx';
 import { SafetyAdvice } from './safety-advice.tsx';
+import type { TsunamiPageResult } from '../data/tsunami-data.ts';
+import { TsunamiTime } from './tsunami-time.tsx';
 
 export interface CommunityViewProps {
   readonly tr: Translator;
@@ -27,6 +29,8 @@ export interface CommunityViewProps {
   readonly felt?: { readonly history: CommunityFeltHistory; readonly eventCount: number };
   /** The attached catalog is too large for a felt history on a page. */
   readonly feltTooMany?: boolean;
+  /** Tsunami time to act, for a coastal community of a study with a terrain grid. */
+  readonly tsunami?: TsunamiPageResult;
 }
 
 const mmiKey = (level: number, part: 'name' | 'feel' | 'buildings') => `mmi.${level}.${part}` as TextKey;
@@ -134,6 +138,7 @@ export function CommunityView(props: CommunityViewProps) {
           {tr.text('caution.text')} <a href="/limits">{tr.text('caution.limitsLink')}</a>.
         </p>
       </aside>
+      {props.tsunami && <TsunamiTime tr={tr} communityId={community.id} tsunami={props.tsunami} headingLevel={2} />}
       <p class="actions">
         <a class="button" href={`/studies/${studyId}/communities/${community.id}/handout`}>
           {tr.text('community.handout')}

@@ -8,6 +8,8 @@ import type { TextKey } from '../text/en.ts';
 import { FeltList } from './felt-list.tsx';
 import { Headline, ProvenanceLine, ShakingLevels } from './community-view.tsx';
 import { SafetyAdvice } from './safety-advice.tsx';
+import type { TsunamiPageResult } from '../data/tsunami-data.ts';
+import { TsunamiTime } from './tsunami-time.tsx';
 
 export interface HandoutViewProps {
   readonly tr: Translator;
@@ -18,6 +20,8 @@ export interface HandoutViewProps {
   /** When the handout was made (ISO), printed on it. */
   readonly printedAt: string;
   readonly felt?: { readonly history: CommunityFeltHistory; readonly eventCount: number };
+  /** Tsunami time to act, for a coastal community of a study with a terrain grid. */
+  readonly tsunami?: TsunamiPageResult;
 }
 
 /**
@@ -80,6 +84,7 @@ export function HandoutView(props: HandoutViewProps) {
                     {tr.text('band.label')}: <BandSwatch tr={tr} bandId={bandId} /> — {tr.text(`band.${bandId}.meaning` as TextKey)}
                   </p>
                   <Headline tr={tr} data={data} name={community.name} />
+                  {props.tsunami && <TsunamiTime tr={tr} communityId={community.id} tsunami={props.tsunami} headingLevel={2} compact />}
                   <section aria-labelledby="h-levels">
                     <h2 id="h-levels">{tr.text('community.levels')}</h2>
                     <ShakingLevels tr={tr} data={data} headingLevel={2} compact={true} />

@@ -2,6 +2,9 @@ import type { Child } from 'hono/jsx';
 import type { Study } from '../../api/engine/model.ts';
 import type { MapState } from '../data/map-data.ts';
 import type { SuggestedSpacing } from '../data/map-spacing.ts';
+import type { TsunamiCommunity } from '../../api/engine/tsunami/index.ts';
+import type { TsunamiPageResult } from '../data/tsunami-data.ts';
+import { TsunamiRanking } from './tsunami-time.tsx';
 import { FIRST_DIRECTION, type RankedCommunity, type SortDirection, type SortKey } from '../data/ranking.ts';
 import type { RunState } from '../data/study-data.ts';
 import { BandSwatch } from '../layout/band-swatch.tsx';
@@ -31,6 +34,8 @@ export interface OverviewProps {
   readonly mapSpacing: SuggestedSpacing;
   /** The hazard-map form as sent, when it had problems. */
   readonly mapForm?: MapFormState;
+  /** Coastal communities by tsunami time to act, when the study has a terrain grid. */
+  readonly tsunami?: { readonly times: TsunamiPageResult; readonly ranked: readonly TsunamiCommunity[] };
 }
 
 /** Id of the hazard layer's summary, the map's description for assistive technology. */
@@ -64,7 +69,7 @@ export function OverviewView(props: OverviewProps) {
       toolVersion={props.toolVersion}
       study={{ id: studyId, name: study.name }}
       section="overview"
-      showsNumbers={rows !== undefined || drawn !== undefined}
+      showsNumbers={rows !== undefined || drawn !== undefined || props.tsunami !== undefined}
     >
       <h1>{tr.text('overview.title', { name: study.name })}</h1>
       <ScreeningStatus tr={tr} studyId={studyId} runs={props.runs} {...(props.problem ? { problem: props.problem } : {})} />
@@ -157,6 +162,7 @@ export function OverviewView(props: OverviewProps) {
           </>
         )}
       </section>
+      {props.tsunami && <TsunamiRanking tr={tr} studyId={studyId} tsunami={props.tsunami.times} ranked={props.tsunami.ranked} />}
     </PageShell>
   );
 }

@@ -7,6 +7,8 @@ import { ScenarioLayer, ScenarioLegend } from '../maps/scenario-layer.tsx';
 import { StudyMap } from '../maps/study-map.tsx';
 import type { Translator } from '../text/translator.ts';
 import { FieldProblems } from './field-problems.tsx';
+import type { TsunamiPageResult } from '../data/tsunami-data.ts';
+import { TsunamiScenario } from './tsunami-time.tsx';
 
 export interface ScenarioViewProps {
   readonly tr: Translator;
@@ -19,6 +21,8 @@ export interface ScenarioViewProps {
   readonly issues: readonly InputIssue[];
   readonly result?: ScenarioResult;
   readonly frame?: MapFrame;
+  /** Tsunami first arrivals of this rupture, for an interface source of a study with a terrain grid. */
+  readonly tsunami?: TsunamiPageResult;
 }
 
 /** Pick a source and magnitude (a plain form post), then the map of shaking and each community's intensity. */
@@ -145,6 +149,7 @@ export function ScenarioView(props: ScenarioViewProps) {
           </section>
         </>
       )}
+      {result && props.tsunami && <TsunamiScenario tr={tr} studyId={studyId} tsunami={props.tsunami} />}
     </PageShell>
   );
 }

@@ -4,9 +4,9 @@ import type { ExceedanceTable } from './exceedance-table.ts';
 import { exceedanceProbability, standardisedLevel } from './truncated-exceedance.ts';
 
 /**
- * One hazard curve summed pair by pair on the fast path: Σ rate × P(IM > level) over (rupture,
- * site) pairs, as exceedance-curve.ts sums it, with three savings. All levels of a pair come
- * from one ε₀ per level, (ln level − ln median) / σ, with 1/σ computed once. Levels the pair
+ * One hazard curve summed pair by pair: Σ rate × P(IM > level) over (rupture, site) pairs, as
+ * the plain sum (test/helpers/reference-hazard/exceedance-curve.ts) adds it, with three
+ * savings. All levels of a pair come from one ε₀ per level, (ln level − ln median) / σ, with 1/σ computed once. Levels the pair
  * exceeds for certain (ε ≤ −n) are not visited one by one: the rate is recorded once at the
  * last of them and spread over the levels below when the curve is read (suffix sums of
  * positive terms, so nothing cancels). The loop stops at the first level with ε ≥ n.

@@ -10,16 +10,16 @@ import { accumulatePairs, createCurveAccumulator, curveRates, resetCurveAccumula
 import { exceedanceTable, type ExceedanceTable } from './exceedance-table.ts';
 import { branchCombinationCurves, MAX_BRANCH_COMBINATIONS, meanHazard, type SettingBranchCurve } from './logic-tree.ts';
 import { pairDistanceContext, preparedMotions, type LazyMotions } from './prepared-motion.ts';
-import { gmmInput } from './rupture-predictions.ts';
+import { gmmInput } from './gmm-input.ts';
 import { ruptureContexts, settingRuptures, type RuptureTable } from './rupture-table.ts';
-import type { HazardBranch, HazardMeasure, ValiditySummary } from './site-hazard.ts';
+import type { HazardBranch, HazardMeasure, ValiditySummary } from './hazard-types.ts';
 import { ruptureGeometry, type RuptureGeometry } from './rupture-geometry.ts';
 import { createPairBuffer, siteDistances, type PairBuffer } from './site-distances.ts';
 
 /**
- * The fast path of the hazard integral at one site: the numbers of site-hazard.ts (classical
- * PSHA over each setting's ruptures within the cut-off, every branch, every measure, then the
- * logic tree of logic-tree.ts) from the rupture table, with each model's site-independent work
+ * The hazard integral at one site (classical PSHA over each setting's ruptures within the
+ * cut-off, every branch, every measure, then the logic tree of logic-tree.ts; checked against
+ * the plain sum in test/helpers/reference-hazard/) from the rupture table, with each model's site-independent work
  * done once per study (GroundMotionModel.prepare), one model evaluation per pair and measure,
  * and all levels read from it (curve-accumulator.ts). Scratch buffers are reused from site to
  * site, so one FastHazard serves one thread's sites in turn.
@@ -128,7 +128,7 @@ export interface FastSiteHazard {
   readonly curves: Readonly<Record<string, HazardCurve>>;
   readonly branchCurvesOmitted: boolean;
   readonly validity: readonly ValiditySummary[];
-  /** Filled when FastHazardOptions.keepFirstMeasure is set; branches in site-hazard.ts's order. */
+  /** Filled when FastHazardOptions.keepFirstMeasure is set; branches in setting order, then in the study's order. */
   readonly firstMeasure: readonly BranchPredictions[];
 }
 

@@ -6,7 +6,7 @@ import { compensatedSum } from '../summation.ts';
 import { coefficientLevelRate, createLevelCoefficients, fillLevelCoefficients, levelRate, type LevelCoefficients } from './curve-accumulator.ts';
 import { noteOf, type BranchWork, type FastHazard, type FastSite, type SettingWork } from './fast-site-hazard.ts';
 import { siteDistances } from './site-distances.ts';
-import type { ValiditySummary } from './site-hazard.ts';
+import type { ValiditySummary } from './hazard-types.ts';
 
 /**
  * One measure's mean hazard at a site read level by level on demand: the models are evaluated

@@ -1,7 +1,7 @@
 import type { PointXY } from '../geometry/projection.ts';
 import type { Measure } from '../motion/measure.ts';
 import type { DistanceContext, DistanceName, GroundMotionModel, PairDistances, PairPredictions, PreparedMotion, RuptureContext, SiteContext } from '../motion/types.ts';
-import { gmmInput } from './rupture-predictions.ts';
+import { gmmInput } from './gmm-input.ts';
 import type { RuptureGeometry } from './rupture-geometry.ts';
 import { createPairBuffer, siteDistances } from './site-distances.ts';
 

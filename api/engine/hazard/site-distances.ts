@@ -1,3 +1,4 @@
+import { addGc2Segment, createGc2Sums, gc2TKm, gc2UKm, resetGc2Sums, ry0FromU, type Gc2Sums } from '../geometry/gc2.ts';
 import type { PointXY } from '../geometry/projection.ts';
 import type { DistanceName, PairDistances } from '../motion/types.ts';
 import { ruptureUsedAt } from './rupture-table.ts';
@@ -25,9 +26,6 @@ import {
  * bounding circle per rupture so ruptures beyond the cut-off are dropped before any plane is
  * looked at. Checked against ruptureDistances in test/engine/hazard/site-distances.test.ts.
  */
-
-/** A site this close to a segment's line is on it (as in geometry/gc2.ts). */
-const ON_LINE_KM = 1e-9;
 
 /**
  * Slack on the bounding-circle test, km: a rupture is dropped early only when even its circle
@@ -143,40 +141,17 @@ function rrupKm(g: RuptureGeometry, first: number, last: number, px: number, py:
   return Math.sqrt(best);
 }
 
-/** GC2 T (Rx) and Ry0 of rupture i's top edges, as geometry/gc2.ts computes them; written to out at k. */
-function gc2(planes: Float64Array, first: number, last: number, px: number, py: number, out: PairBuffer, k: number): void {
-  let weightSum = 0, tSum = 0, uSum = 0, s = 0;
-  let onTrace = NaN;
+/** GC2 T (Rx) and Ry0 of rupture i's top edges (geometry/gc2.ts); written to out at k. */
+function gc2(planes: Float64Array, first: number, last: number, px: number, py: number, sums: Gc2Sums, out: PairBuffer, k: number): void {
+  resetGc2Sums(sums);
   for (let p = first; p < last; p++) {
     const at = p * PLANE_FIELDS;
     const l = planes[at + TOP] as number;
     if (l === 0) continue;
-    const sx = planes[at + TOP + 1] as number, sy = planes[at + TOP + 2] as number;
-    const dx = px - (planes[at + ORIGIN] as number), dy = py - (planes[at + ORIGIN + 1] as number);
-    const u = dx * sx + dy * sy;
-    const t = dx * sy - dy * sx;
-    let w: number;
-    if (Math.abs(t) > ON_LINE_KM) {
-      w = (Math.atan((l - u) / t) - Math.atan(-u / t)) / t;
-    } else if (u >= 0 && u <= l) {
-      if (Number.isNaN(onTrace)) onTrace = s + u;
-      w = 0;
-    } else {
-      w = 1 / (u - l) - 1 / u;
-    }
-    weightSum += w;
-    tSum += w * t;
-    uSum += w * (u + s);
-    s += l;
+    addGc2Segment(sums, planes[at + ORIGIN] as number, planes[at + ORIGIN + 1] as number, planes[at + TOP + 1] as number, planes[at + TOP + 2] as number, l, px, py);
   }
-  let tKm = 0, uKm = 0;
-  if (!Number.isNaN(onTrace)) uKm = onTrace;
-  else if (weightSum > 0) {
-    tKm = tSum / weightSum;
-    uKm = uSum / weightSum;
-  }
-  out.rxKm[k] = tKm;
-  out.ry0Km[k] = uKm < 0 ? -uKm : uKm > s ? uKm - s : 0;
+  out.rxKm[k] = gc2TKm(sums);
+  out.ry0Km[k] = ry0FromU(gc2UKm(sums), sums.lengthKm);
 }
 
 /**
@@ -193,6 +168,7 @@ export function siteDistances(options: SiteDistancesOptions, out: PairBuffer): v
   const wantRrup = distances.has('rrupKm'), wantGc2 = distances.has('rxKm') || distances.has('ry0Km');
   const wantRhypo = distances.has('rhypoKm'), wantRepi = distances.has('repiKm'), wantRjb = distances.has('rjbKm');
   const maxSq = maxDistanceKm * maxDistanceKm;
+  const sums = createGc2Sums();
   let count = 0;
   for (let local = 0; local < ruptures.length; local++) {
     const i = ruptures[local] as number;
@@ -236,7 +212,7 @@ export function siteDistances(options: SiteDistancesOptions, out: PairBuffer): v
     }
     rupture[count] = local;
     if (wantRrup) rrupOut[count] = rrupKm(geometry, first, last, px, py);
-    if (wantGc2) gc2(planes, first, last, px, py, out, count);
+    if (wantGc2) gc2(planes, first, last, px, py, sums, out, count);
     if (wantRhypo || wantRepi) {
       const repiSq = ex * ex + ey * ey;
       repiOut[count] = Math.sqrt(repiSq);

@@ -7,7 +7,7 @@ import { poissonProbability } from '../hazard/poisson.ts';
 import { levelAtReturnPeriodBySearch } from '../hazard/return-period-search.ts';
 import type { RuptureTable } from '../hazard/rupture-table.ts';
 import { studyRuptureTable } from '../hazard/study-rupture-table.ts';
-import type { HazardMeasure, ValiditySummary } from '../hazard/site-hazard.ts';
+import type { HazardMeasure, ValiditySummary } from '../hazard/hazard-types.ts';
 import type { Study } from '../model.ts';
 import type { ModelCatalog } from '../motion/catalog.ts';
 import { measureUnit, parseMeasure } from '../motion/measure.ts';

@@ -7,21 +7,12 @@ import { feltHistory } from '../../engine/catalog/felt-history.ts';
 import { InvalidInput } from '../../engine/errors.ts';
 import type { StudyCatalogRecord } from '../../store/catalog-repository.ts';
 import { describeValue } from '../../study/fields.ts';
+import { FELT_PAIR_BUDGET, FIT_EVENT_BUDGET } from '../../operations/catalog-limits.ts';
 import { DEFAULT_FILE_NAMES, readCatalogFitRequest, readCatalogUpload } from '../catalog-requests.ts';
 import { HttpError, notFound } from '../http-error.ts';
 import { readJsonObject } from '../request-body.ts';
-import type { ServiceContext } from '../service-context.ts';
-import { storedInputs, validateStudy } from '../study-input.ts';
-
-/**
- * Most catalog events × communities one felt history computes, on the request thread (no worker
- * task exists for it yet). A pair took about 70 µs with the demo's models on one core (measured
- * once, not asserted), so this caps a request at a few seconds; the demo is 540 × 11 = 5940.
- */
-export const FELT_PAIR_BUDGET = 50_000;
-
-/** Most events one stateless fit declusters, on the request thread: 50 000 took about 1 s (measured once). */
-export const FIT_EVENT_BUDGET = 50_000;
+import type { ServiceContext } from '../../operations/service-context.ts';
+import { storedInputs, validateStudy } from '../../operations/study-input.ts';
 
 /** A stored catalog as the API shows it: where it came from, its load, and links. */
 const catalogJson = (record: StudyCatalogRecord, load: CatalogLoad) => ({

@@ -1,9 +1,9 @@
 import { Hono } from 'hono';
 import { readJsonObject } from '../request-body.ts';
-import type { ServiceContext } from '../service-context.ts';
+import type { ServiceContext } from '../../operations/service-context.ts';
 import { inputHash } from '../../results/input-hash.ts';
-import { validateStudy } from '../study-input.ts';
-import { measureStudy } from '../study-size.ts';
+import { validateStudy } from '../../operations/study-input.ts';
+import { measureStudy } from '../../operations/study-size.ts';
 
 /** Stateless work on a posted study: validate only, or screen it without saving anything. */
 export function computeRoutes(ctx: ServiceContext): Hono {

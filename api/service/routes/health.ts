@@ -1,5 +1,5 @@
 import { Hono } from 'hono';
-import type { ServiceContext } from '../service-context.ts';
+import type { ServiceContext } from '../../operations/service-context.ts';
 
 /** GET /api/health: the service answers, its database answers, and how busy its workers are. */
 export function healthRoutes(ctx: ServiceContext): Hono {

@@ -1,8 +1,8 @@
 import { Hono } from 'hono';
 import { notFound } from '../http-error.ts';
 import { CSV_TYPES, GEOJSON_TYPES, readJsonObject, readText } from '../request-body.ts';
-import type { ServiceContext } from '../service-context.ts';
-import { storedInputs, validateStudy } from '../study-input.ts';
+import type { ServiceContext } from '../../operations/service-context.ts';
+import { storedInputs, validateStudy } from '../../operations/study-input.ts';
 import { studyJson } from './studies.ts';
 
 /**

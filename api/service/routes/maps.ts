@@ -1,11 +1,11 @@
 import { Hono } from 'hono';
 import { isFinished, type MapRunRecord } from '../../store/index.ts';
 import { HttpError, notFound } from '../http-error.ts';
-import { readMapRequest } from '../map-request.ts';
-import { mapRunsOf, type MapRuns } from '../map-runs.ts';
+import { readMapRequest } from '../../operations/map-request.ts';
+import { mapRunsOf, type MapRuns } from '../../operations/map-runs.ts';
 import { readJsonObject } from '../request-body.ts';
-import type { ServiceContext } from '../service-context.ts';
-import { startMapRun } from '../start-map-run.ts';
+import type { ServiceContext } from '../../operations/service-context.ts';
+import { startMapRun } from '../../operations/start-map-run.ts';
 
 /** A map run as the API shows it: its state, progress, what it maps, and links; the GeoJSON is separate. */
 export const mapRunJson = (run: MapRunRecord) => ({

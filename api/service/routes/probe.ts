@@ -1,8 +1,8 @@
 import { Hono } from 'hono';
 import { probeMotion } from '../../engine/motion/probe.ts';
-import { readProbeRequest } from '../probe-request.ts';
+import { readProbeRequest } from '../../operations/probe-request.ts';
 import { readJsonObject } from '../request-body.ts';
-import type { ServiceContext } from '../service-context.ts';
+import type { ServiceContext } from '../../operations/service-context.ts';
 
 /**
  * POST /api/probe: one ground-motion model at one stated geometry. A handful of model

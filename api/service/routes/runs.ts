@@ -5,9 +5,9 @@ import { HttpError, notFound } from '../http-error.ts';
 import { inputHash } from '../../results/input-hash.ts';
 import { runCsv } from '../../results/run-csv.ts';
 import { runGeoJson } from '../../results/run-geojson.ts';
-import type { ServiceContext } from '../service-context.ts';
-import { runStudy, storedInputs, validateStudy } from '../study-input.ts';
-import { measureStudy } from '../study-size.ts';
+import type { ServiceContext } from '../../operations/service-context.ts';
+import { runStudy, storedInputs, validateStudy } from '../../operations/study-input.ts';
+import { measureStudy } from '../../operations/study-size.ts';
 
 /** A run as the API shows it: its state, provenance (once done) and links; results are separate. */
 export const runJson = (run: RunRecord) => ({

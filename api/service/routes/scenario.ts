@@ -4,9 +4,9 @@ import type { Study } from '../../engine/model.ts';
 import type { ScenarioRequest } from '../../engine/scenario/index.ts';
 import { notFound } from '../http-error.ts';
 import { readJsonObject } from '../request-body.ts';
-import { readScenarioRequest } from '../scenario-request.ts';
-import type { ServiceContext } from '../service-context.ts';
-import { storedInputs, validateStudy } from '../study-input.ts';
+import { readScenarioRequest } from '../../operations/scenario-request.ts';
+import type { ServiceContext } from '../../operations/service-context.ts';
+import { storedInputs, validateStudy } from '../../operations/study-input.ts';
 
 /** Runs `work`, adding its InvalidInput issues to `issues` instead of throwing them. */
 function collect<T>(issues: InputIssue[], work: () => T): T | undefined {

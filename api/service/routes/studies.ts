@@ -2,9 +2,9 @@ import { Hono } from 'hono';
 import type { StudySummary } from '../../store/index.ts';
 import { notFound } from '../http-error.ts';
 import { readJsonObject } from '../request-body.ts';
-import { mapRunsOf } from '../map-runs.ts';
-import type { ServiceContext } from '../service-context.ts';
-import { storedInputs, validateStudy } from '../study-input.ts';
+import { mapRunsOf } from '../../operations/map-runs.ts';
+import type { ServiceContext } from '../../operations/service-context.ts';
+import { storedInputs, validateStudy } from '../../operations/study-input.ts';
 
 /** Where a study's parts and actions are. */
 export const studyLinks = (id: string) => ({

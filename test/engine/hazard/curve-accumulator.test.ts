@@ -10,9 +10,9 @@ import {
   levelRate,
   resetCurveAccumulator,
 } from '../../../api/engine/hazard/curve-accumulator.ts';
-import { exceedanceCurve } from '../../../api/engine/hazard/exceedance-curve.ts';
+import { exceedanceCurve } from '../../helpers/reference-hazard/exceedance-curve.ts';
 import { exceedanceTable } from '../../../api/engine/hazard/exceedance-table.ts';
-import type { RupturePredictions } from '../../../api/engine/hazard/rupture-predictions.ts';
+import type { RupturePredictions } from '../../helpers/reference-hazard/rupture-predictions.ts';
 import { createRandom } from '../../../api/engine/random.ts';
 import { expectClose } from '../../helpers/close.ts';
 import { pointRuptures } from './point-ruptures.ts';

@@ -6,16 +6,17 @@ import { cornell79 } from '../../../api/engine/motion/cornell79.ts';
 import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import type { GroundMotionModel } from '../../../api/engine/motion/types.ts';
 import { screenStudy } from '../../../api/engine/screen-study.ts';
+import { referenceScreening } from '../../helpers/reference-hazard/reference-screening.ts';
 import { expectScreeningMatches } from '../fast-path-checks.ts';
 import { allKindsStudy } from '../fixtures/all-kinds-study.ts';
 import { FRAME, pointKm } from '../geometry/km-fixtures.ts';
 
-// The fast path (fast-site-hazard.ts and the models' hooks) against the reference path
-// (site-hazard.ts), whole screenings compared field by field (fast-path-checks.ts).
-describe('fast path against the reference path', () => {
+// The engine's screening (fast-site-hazard.ts and the models' hooks) against the plain sum of
+// test/helpers/reference-hazard/, whole screenings compared field by field (fast-path-checks.ts).
+describe('the screening against the plain reference sum', () => {
   it('every source kind and model (BSSA14, CB14, AGA16, PGV from SA), soft to rock sites, two return periods', () => {
     const study = allKindsStudy();
-    expectScreeningMatches(screenStudy(study), screenStudy(study, { path: 'reference' }));
+    expectScreeningMatches(screenStudy(study), referenceScreening(study));
   });
 
   it('at truncation 0 (median only), 2σ and untruncated, the three ways the exceedance is summed', () => {
@@ -23,7 +24,7 @@ describe('fast path against the reference path', () => {
     const small: Study = { ...base, communities: base.communities.slice(0, 2), sources: base.sources.filter((s) => s.id !== 'background') };
     for (const truncationSigma of [0, 2, Infinity]) {
       const study: Study = { ...small, settings: { ...small.settings, truncationSigma } };
-      expectScreeningMatches(screenStudy(study), screenStudy(study, { path: 'reference' }));
+      expectScreeningMatches(screenStudy(study), referenceScreening(study));
     }
   });
 
@@ -33,7 +34,7 @@ describe('fast path against the reference path', () => {
     const models = createModelCatalog([...modelCatalog.names.map((n) => modelCatalog.get(n)), plain], modelCatalog.defaultBranches);
     const base = allKindsStudy({ measures: ['PGA'] });
     const study: Study = { ...base, groundMotion: { ...base.groundMotion, crustal: [{ model: 'Plain79', weight: 0.5 }, { model: 'Cornell79', weight: 0.5 }] } };
-    expectScreeningMatches(screenStudy(study, { models }), screenStudy(study, { models, path: 'reference' }));
+    expectScreeningMatches(screenStudy(study, { models }), referenceScreening(study, { models }));
   });
 
   it('property: random point sources and sites agree (fast-check)', () => {
@@ -51,14 +52,14 @@ describe('fast path against the reference path', () => {
         const sources = specs.map((s, i) => ({ ...pointKm(s.x, s.y, { type: 'gutenberg-richter', bValue: 1, mMin: s.mMin, mMax: s.mMin + s.span, rate: s.rate }, s.depthKm), id: `p${i}`, name: `P${i}` }));
         const [lon, lat] = FRAME.toLonLat({ x: 0, y: 0 });
         const study: Study = { ...base, sources, communities: [{ id: 'site', name: 'Site', lon, lat, vs30, vs30Basis: 'measured', coastal: false }] };
-        expectScreeningMatches(screenStudy(study), screenStudy(study, { path: 'reference' }));
+        expectScreeningMatches(screenStudy(study), referenceScreening(study));
       }),
       { numRuns: 25, seed: 11 },
     );
   });
 
-  it('both paths are deterministic and the fast one is the default', () => {
+  it('the same study screens to the same numbers twice', () => {
     const study = allKindsStudy({ measures: ['PGA'] });
-    expect(screenStudy(study)).toEqual(screenStudy(study, { path: 'fast' }));
+    expect(screenStudy(study)).toEqual(screenStudy(study));
   });
 });

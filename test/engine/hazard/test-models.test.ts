@@ -1,7 +1,7 @@
 import { describe, it } from 'vitest';
 import { createFastHazard, fastSiteHazard } from '../../../api/engine/hazard/fast-site-hazard.ts';
 import { ruptureTable } from '../../../api/engine/hazard/rupture-table-builder.ts';
-import type { HazardMeasure } from '../../../api/engine/hazard/site-hazard.ts';
+import type { HazardMeasure } from '../../../api/engine/hazard/hazard-types.ts';
 import { cornell79 } from '../../../api/engine/motion/cornell79.ts';
 import { expectRelative } from '../../helpers/close.ts';
 import { checkPreparedModel } from '../motion/prepared-checks.ts';

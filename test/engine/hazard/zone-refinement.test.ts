@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { Community, Study } from '../../../api/engine/model.ts';
 import { screenStudy } from '../../../api/engine/screen-study.ts';
 import { expectRelative } from '../../helpers/close.ts';
+import { referenceScreening } from '../../helpers/reference-hazard/reference-screening.ts';
 import { allKindsStudy, ALL_KINDS_COMMUNITIES } from '../fixtures/all-kinds-study.ts';
 import { FRAME, zoneKm } from '../geometry/km-fixtures.ts';
 
@@ -78,8 +79,8 @@ describe("a community's numbers do not depend on the other communities", () => {
 
   it('the same on the reference path', () => {
     const study = zoneStudy(10, SITES.slice(0, 1));
-    const a = screenStudy(study, { path: 'reference' });
-    const b = screenStudy({ ...study, communities: [...SITES.slice(0, 1), site('beside', 60, 45), site('away', 20, 90)] }, { path: 'reference' });
+    const a = referenceScreening(study);
+    const b = referenceScreening({ ...study, communities: [...SITES.slice(0, 1), site('beside', 60, 45), site('away', 20, 90)] });
     expect(stripped(b.communities[0]!)).toEqual(stripped(a.communities[0]!));
   });
 });

@@ -3,14 +3,15 @@ import { afterAll, describe, expect, it } from 'vitest';
 import type { Study } from '../../../api/engine/model.ts';
 import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import type { CommunityResult } from '../../../api/engine/results.ts';
-import { screenStudy, type ScreeningPath } from '../../../api/engine/screen-study.ts';
+import { screenStudy } from '../../../api/engine/screen-study.ts';
 import { loadStudy } from '../../../api/study/load-study.ts';
+import { referenceScreening } from '../../helpers/reference-hazard/reference-screening.ts';
 import { type Doc, fixedRecurrenceArb, grRecurrenceArb, studyDocArb } from '../../study/arbitrary-study.ts';
 
 /**
- * Invariants of the hazard integral on generated studies (fast-check), on both paths of the
- * engine (the fast one and the plain reference sum). The invariants follow from the definition
- * of classical PSHA, λ(IM > x) = Σ rate × P(IM > x | rupture) (Cornell 1968; Baker 2008, "An
+ * Invariants of the hazard integral on generated studies (fast-check), on the engine and on
+ * the plain sum it is checked against (test/helpers/reference-hazard/). The invariants follow
+ * from the definition of classical PSHA, λ(IM > x) = Σ rate × P(IM > x | rupture) (Cornell 1968; Baker 2008, "An
  * introduction to probabilistic seismic hazard analysis", the hazard integral; from memory):
  * - every term is a rate (>= 0) times a probability that falls as x rises, so each curve is
  *   non-negative and non-increasing in x;
@@ -21,7 +22,9 @@ import { type Doc, fixedRecurrenceArb, grRecurrenceArb, studyDocArb } from '../.
  * The generated studies are invented test inputs; no check value comes from them.
  */
 
-const PATHS: readonly ScreeningPath[] = ['fast', 'reference'];
+/** The engine's screening and the plain sum it is checked against (test/helpers/reference-hazard/). */
+const PATHS = ['engine', 'reference'] as const;
+type SumPath = (typeof PATHS)[number];
 /** Runs per property and path: small studies screen in milliseconds, so 40 cost a few seconds. */
 const RUNS = 40;
 /** Fixed seed so a failure reproduces; fast-check prints the seed and the shrunk counterexample. */
@@ -36,7 +39,7 @@ function toStudy(doc: Doc): Study {
   return loaded.study;
 }
 
-const screen = (doc: Doc, path: ScreeningPath) => screenStudy(toStudy(doc), { path, models: modelCatalog });
+const screen = (doc: Doc, path: SumPath) => (path === 'engine' ? screenStudy : referenceScreening)(toStudy(doc), { models: modelCatalog });
 
 /** Every mean and branch curve of a community, with a label for messages. */
 function* curvesOf(c: CommunityResult): Generator<[string, readonly number[], readonly number[]]> {

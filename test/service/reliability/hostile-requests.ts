@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { createApp } from '../../../api/service/app.ts';
-import type { ServiceContext } from '../../../api/service/service-context.ts';
+import type { ServiceContext } from '../../../api/operations/service-context.ts';
 import { openStore } from '../../../api/store/store.ts';
 import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import { createPages } from '../../../web/pages.tsx';

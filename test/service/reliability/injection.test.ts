@@ -125,7 +125,7 @@ describe('through the service', () => {
 const FILE_SYSTEM_USERS: Readonly<Record<string, string>> = {
   'api/store/store.ts': 'creates the folder of TREMORA_DB',
   'api/store/migrate.ts': 'reads the shipped migrations',
-  'api/service/demo-seed.ts': 'reads data-demo/demo.study.json',
+  'api/operations/demo-seed.ts': 'reads data-demo/demo.study.json',
   'api/results/tool-version.ts': 'reads package.json',
   'api/study/read-study-file.ts': 'the CLI reads the study file it is given',
   'web/routes/static-files.ts': 'reads web/static/ by fixed names at start',
@@ -142,7 +142,7 @@ describe('file system use', () => {
         else if (/\.tsx?$/.test(entry.name)) files.push(relative(REPO_ROOT, full));
       }
     };
-    for (const dirName of ['api/service', 'api/store', 'api/results', 'api/workers', 'api/study', 'web']) walk(join(REPO_ROOT, dirName));
+    for (const dirName of ['api/service', 'api/operations', 'api/store', 'api/results', 'api/workers', 'api/study', 'web']) walk(join(REPO_ROOT, dirName));
     const users = files.filter((f) => /from ['"](node:)?fs(\/promises)?['"]/.test(readFileSync(join(REPO_ROOT, f), 'utf8')));
     console.log(`file system use: ${users.length} of ${files.length} service and page files (${users.join(', ')})`);
     expect(users.filter((f) => !(f in FILE_SYSTEM_USERS))).toEqual([]);

@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import { createApp } from '../../../api/service/app.ts';
-import type { ServiceContext } from '../../../api/service/service-context.ts';
+import type { ServiceContext } from '../../../api/operations/service-context.ts';
 import { openStore, type Store } from '../../../api/store/store.ts';
 import { RunScheduler } from '../../../api/workers/run-scheduler.ts';
 import { WorkerPool } from '../../../api/workers/worker-pool.ts';

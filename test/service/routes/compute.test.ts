@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { StudyResult } from '../../../api/engine/results.ts';
 import { expectRelative } from '../../helpers/close.ts';
-import { DEFAULT_WORK_BUDGET } from '../../../api/service/work-budget.ts';
+import { DEFAULT_WORK_BUDGET } from '../../../api/operations/work-budget.ts';
 import { expectError, expectSecurityHeaders } from '../helpers/assertions.ts';
 import { startRun, waitForStatus } from '../helpers/runs.ts';
 import { jsonInit, type ServiceProcess, startService, tempDir } from '../helpers/service-process.ts';

@@ -1,7 +1,7 @@
 import type { Hono } from 'hono';
 import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import { createApp } from '../../../api/service/app.ts';
-import type { ServiceContext } from '../../../api/service/service-context.ts';
+import type { ServiceContext } from '../../../api/operations/service-context.ts';
 import { openStore } from '../../../api/store/store.ts';
 import { RunScheduler } from '../../../api/workers/run-scheduler.ts';
 import { WorkerPool } from '../../../api/workers/worker-pool.ts';

@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import type { ServiceContext } from '../../../api/service/service-context.ts';
-import { DEMO_STUDY_URL } from '../../../api/service/demo-seed.ts';
+import type { ServiceContext } from '../../../api/operations/service-context.ts';
+import { DEMO_STUDY_URL } from '../../../api/operations/demo-seed.ts';
 import { MAX_DRAWN_POINTS } from '../../../web/data/map-data.ts';
 import { suggestedMapSpacing } from '../../../web/data/map-spacing.ts';
 import { DUSK } from '../../../web/style/palette.ts';

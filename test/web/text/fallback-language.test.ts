@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { Fragment, jsx, type Child } from 'hono/jsx';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { ACCESS_COOKIE, accessCookieValue } from '../../../api/service/page-access.ts';
-import { DEMO_STUDY_URL } from '../../../api/service/demo-seed.ts';
+import { DEMO_STUDY_URL } from '../../../api/operations/demo-seed.ts';
 import { EN, type TextKey } from '../../../web/text/en.ts';
 import { FR } from '../../../web/text/fr.ts';
 import { translator } from '../../../web/text/translator.ts';

@@ -3,7 +3,7 @@ import { describe, expect, test } from 'vitest';
 import { feltHistory } from '../../../api/engine/catalog/felt-history.ts';
 import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import { parseCatalog } from '../../../api/catalog/index.ts';
-import { DEMO_STUDY_URL } from '../../../api/service/demo-seed.ts';
+import { DEMO_STUDY_URL } from '../../../api/operations/demo-seed.ts';
 import { loadStudy } from '../../../api/study/load-study.ts';
 import { translator } from '../../../web/text/translator.ts';
 import { FeltList, strongestFelt } from '../../../web/views/felt-list.tsx';

@@ -1,0 +1,266 @@
+/**
+ * CY14 — Chiou, B. S.-J. & Youngs, R. R. (2014), "Update of the Chiou and Youngs NGA model for the
+ * average horizontal component of peak ground motion and response spectra", Earthquake Spectra
+ * 30(3), 1117–1153, doi:10.1193/072813EQS219M. No erratum known to us that changes the equations.
+ * Coefficients: cy14-coefficients.ts (the paper's table as updated in the NGA-West2 spreadsheet v5.7).
+ *
+ * The reference motion (Vs30 = 1130 m/s), California/global form (γ factors 1), directivity off
+ * (ΔDPP = 0), as transcribed here from memory of the paper and checked against the reference
+ * vectors (see below); with ch = cosh(2 max(M − 4.5, 0)):
+ *   ln y_ref = c1 + (c1a + c1c/ch) F_RV + (c1b + c1d/ch) F_NM + (c7 + c7b/ch) ΔZtor
+ *            + (c11 + c11b/ch) cos²δ + c2 (M − 6) + (c2 − c3)/cn ln(1 + e^(cn (cM − M)))
+ *            + c4 ln(Rrup + c5 cosh(c6 max(M − cHM, 0))) + (c4a − c4) ln √(Rrup² + cRB²)
+ *            + [cγ1 + cγ2 / cosh(max(M − cγ3, 0))] Rrup
+ *            + c9 F_HW cos δ [c9a + (1 − c9a) tanh(Rx/c9b)] [1 − √(Rjb² + Ztor²)/(Rrup + 1)];
+ *   (cos δ, not cos²δ, in the hanging-wall term: recalled both ways; the reference vectors settle it)
+ *   ΔZtor = Ztor − E[Ztor], E[Ztor] = max(2.704 − 1.226 max(M − 5.849, 0), 0)² km for reverse
+ *   faulting, max(2.673 − 1.136 max(M − 4.970, 0), 0)² km otherwise; F_HW = 1 for Rx ≥ 0.
+ * The site:
+ *   ln y = ln y_ref + φ1 min(ln(Vs30/1130), 0)
+ *        + φ2 [e^(φ3 (min(Vs30, 1130) − 360)) − e^(φ3 (1130 − 360))] ln((y_ref + φ4)/φ4)
+ *        + φ5 (1 − e^(−ΔZ1/φ6)),  ΔZ1 = Z1 − μZ1 (m),
+ *   ln μZ1 = −7.15/4 ln((Vs30⁴ + 570.94⁴)/(1360⁴ + 570.94⁴)) (Z1 in m), the paper's California relation
+ *   (570.94 m/s as the reference vectors have it: 571 reproduces their Z1 only to 7e-4 relative);
+ *   where the site gives no Z1, Z1 = μZ1 and the basin term is 0.
+ * Mechanism from rake as the paper classes it: reverse 30° ≤ λ ≤ 150°, normal −120° ≤ λ ≤ −60°,
+ * otherwise strike-slip (a rake of −45° is strike-slip here and normal in ASK14, BSSA14 and CB14).
+ * The PSA ≥ PGA rule at T ≤ 0.3 s that some records of the model apply is not applied: whether
+ * the paper states it could not be checked (../shared/reference/gmm/README.md, open point 4).
+ *
+ * Standard deviations (the paper's aleatory model), ln units, with M̃ = min(max(M, 5), 6.5):
+ *   τ = τ1 + (τ2 − τ1)(M̃ − 5)/1.5;
+ *   NL0 = φ2 [e^(φ3 (min(Vs30, 1130) − 360)) − e^(φ3 (1130 − 360))] y_ref/(y_ref + φ4);
+ *   φ = σ_NL0 = [σ1 + (σ2 − σ1)(M̃ − 5)/1.5] √(σ3 F_Inferred + 0.7 F_Measured + (1 + NL0)²);
+ *   the between-event part (1 + NL0) τ is returned as `tau`, σ = √((1 + NL0)² τ² + σ_NL0²).
+ *
+ * Inputs: magnitude M (moment magnitude); rrupKm, rjbKm, rxKm (km); ztorKm (km); dipDeg, rakeDeg
+ * (degrees); vs30 (m/s), vs30Measured; z1Km (km, optional). Output: ln of the median, ln(g) for
+ * PGA and 5%-damped RotD50 PSA, ln(cm/s) for PGV; sigma, tau, phi in natural-log units.
+ * Distance metric: Rrup.
+ *
+ * Validity (the paper's stated ranges, from memory): M 3.5–8.5 strike-slip, 3.5–8.0 reverse and
+ * normal; Rrup 0–300 km; Vs30 180–1500 m/s; Ztor 0–20 km; periods PGA, PGV and PSA 0.01–10 s.
+ * Outside, finite numbers with applicable: false.
+ *
+ * How it is checked: test/engine/motion/cy14.test.ts reproduces the reference vectors
+ * (../shared/reference/gmm/vectors/cy14.json, an independent implementation of the paper) within 1e-4.
+ */
+import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
+import { toRadians } from '../units.ts';
+import { CY14_PGA, CY14_PGV, CY14_SA, type Cy14Row } from './cy14-coefficients.ts';
+import { predictAtPeriod } from './interpolate-period.ts';
+import type { Measure } from './measure.ts';
+import type { GmmInput, GmmPrediction, GroundMotionModel, SiteContext, ValidityRange } from './types.ts';
+import { validityNotes } from './validity.ts';
+
+const NAME = 'CY14';
+const SA_PERIODS_S: readonly number[] = Object.freeze(CY14_SA.map((r) => r.periodS));
+
+/** Vs30 of the reference motion y_ref, m/s. */
+export const CY14_REFERENCE_VS30 = 1130;
+
+export type Cy14Mechanism = 'strike-slip' | 'normal' | 'reverse';
+
+/** The paper's rake classes (degrees, any turn): reverse 30..150, normal −120..−60 (closed). */
+export function cy14MechanismFromRake(rakeDeg: number): Cy14Mechanism {
+  const rake = ((((rakeDeg + 180) % 360) + 360) % 360) - 180;
+  if (rake >= 30 && rake <= 150) return 'reverse';
+  if (rake >= -120 && rake <= -60) return 'normal';
+  return 'strike-slip';
+}
+
+/** The rupture as the equation sees it; Ztor in km, dip in degrees. */
+export interface Cy14Rupture {
+  readonly magnitude: number;
+  readonly mechanism: Cy14Mechanism;
+  readonly dipDeg: number;
+  readonly ztorKm: number;
+}
+
+/** The distances the equation reads, km. */
+export interface Cy14Distances {
+  readonly rrupKm: number;
+  readonly rjbKm: number;
+  readonly rxKm: number;
+}
+
+/** The terms of one table row that depend on the rupture alone (computed once per rupture). */
+export interface Cy14RuptureTerms {
+  readonly row: Cy14Row;
+  /** The source terms of ln y_ref: constant, style of faulting, ΔZtor, dip and magnitude scaling. */
+  readonly sourceLn: number;
+  /** c5 cosh(c6 max(M − cHM, 0)), the finite-fault term added to Rrup, km. */
+  readonly nearFaultKm: number;
+  /** cγ1 + cγ2 / cosh(max(M − cγ3, 0)), anelastic attenuation per km. */
+  readonly anelasticPerKm: number;
+  /** c9 cos δ, the hanging-wall amplitude. */
+  readonly hangingWall: number;
+  readonly ztorKm: number;
+  /** τ(M) and the magnitude part of σ_NL0, ln units. */
+  readonly tau: number;
+  readonly sigmaM: number;
+}
+
+/** E[Ztor] (km), the paper's expected depth to the top of rupture for the magnitude and mechanism. */
+export function cy14ExpectedZtorKm(m: number, mechanism: Cy14Mechanism): number {
+  const root = mechanism === 'reverse' ? 2.704 - 1.226 * Math.max(m - 5.849, 0) : 2.673 - 1.136 * Math.max(m - 4.97, 0);
+  return Math.max(root, 0) ** 2;
+}
+
+/** The source terms of ln y_ref (ln units; see Cy14RuptureTerms.sourceLn). */
+export function cy14SourceTerm(row: Cy14Row, r: Cy14Rupture): number {
+  const m = r.magnitude;
+  const ch = Math.cosh(2 * Math.max(m - 4.5, 0));
+  const cos2 = Math.cos(toRadians(r.dipDeg)) ** 2;
+  const style = r.mechanism === 'reverse' ? row.c1a + row.c1c / ch : r.mechanism === 'normal' ? row.c1b + row.c1d / ch : 0;
+  const deltaZtorKm = r.ztorKm - cy14ExpectedZtorKm(m, r.mechanism);
+  return (
+    row.c1 +
+    style +
+    (row.c7 + row.c7b / ch) * deltaZtorKm +
+    (row.c11 + row.c11b / ch) * cos2 +
+    row.c2 * (m - 6) +
+    ((row.c2 - row.c3) / row.cn) * Math.log(1 + Math.exp(row.cn * (row.cM - m)))
+  );
+}
+
+/** The rupture's terms of one row (see Cy14RuptureTerms). */
+export function cy14RuptureTerms(row: Cy14Row, r: Cy14Rupture): Cy14RuptureTerms {
+  const m = r.magnitude;
+  // Magnitudes 5 and 6.5 bound the ramp of the aleatory model between small and large events.
+  const share = (Math.min(Math.max(m, 5), 6.5) - 5) / 1.5;
+  return {
+    row,
+    sourceLn: cy14SourceTerm(row, r),
+    nearFaultKm: row.c5 * Math.cosh(row.c6 * Math.max(m - row.cHM, 0)),
+    anelasticPerKm: row.cgamma1 + row.cgamma2 / Math.cosh(Math.max(m - row.cgamma3, 0)),
+    hangingWall: row.c9 * Math.cos(toRadians(r.dipDeg)),
+    ztorKm: r.ztorKm,
+    tau: row.tau1 + (row.tau2 - row.tau1) * share,
+    sigmaM: row.sigma1 + (row.sigma2 - row.sigma1) * share,
+  };
+}
+
+/** The distance and hanging-wall terms of ln y_ref (ln units): everything of the pair but the site. */
+export function cy14PathTerm(t: Cy14RuptureTerms, d: Cy14Distances): number {
+  const { row } = t;
+  const spreading = row.c4 * Math.log(d.rrupKm + t.nearFaultKm) + (row.c4a - row.c4) * Math.log(Math.hypot(d.rrupKm, row.cRB));
+  const hangingWall =
+    d.rxKm >= 0
+      ? t.hangingWall * (row.c9a + (1 - row.c9a) * Math.tanh(d.rxKm / row.c9b)) * (1 - Math.hypot(d.rjbKm, t.ztorKm) / (d.rrupKm + 1))
+      : 0;
+  return spreading + t.anelasticPerKm * d.rrupKm + hangingWall;
+}
+
+/** The paper's California mean Z1 (km) for Vs30 in m/s. */
+export function cy14DefaultZ1Km(vs30: number): number {
+  return Math.exp((-7.15 / 4) * Math.log((vs30 ** 4 + 570.94 ** 4) / (1360 ** 4 + 570.94 ** 4))) / 1000;
+}
+
+/** The nonlinear site factor's Vs30 part: φ2 [e^(φ3 (min(Vs30, 1130) − 360)) − e^(φ3 (1130 − 360))]. */
+function nonlinearStrength(row: Cy14Row, vs30: number): number {
+  return row.phi2 * (Math.exp(row.phi3 * (Math.min(vs30, CY14_REFERENCE_VS30) - 360)) - Math.exp(row.phi3 * (CY14_REFERENCE_VS30 - 360)));
+}
+
+/** The site terms (ln units) for Vs30 in m/s, y_ref in g (cm/s for PGV) and Z1 in km (default when absent). */
+export function cy14SiteTerm(row: Cy14Row, vs30: number, yRef: number, z1Km: number | undefined): number {
+  const linear = row.phi1 * Math.min(Math.log(vs30 / CY14_REFERENCE_VS30), 0);
+  const nonlinear = nonlinearStrength(row, vs30) * Math.log((yRef + row.phi4) / row.phi4);
+  const deltaZ1M = z1Km === undefined ? 0 : (z1Km - cy14DefaultZ1Km(vs30)) * 1000;
+  return linear + nonlinear + row.phi5 * (1 - Math.exp(-deltaZ1M / row.phi6));
+}
+
+/** NL0 = ∂(site term)/∂ln y_ref, the nonlinear site term's response to the reference motion. */
+export function cy14SiteSlope(row: Cy14Row, vs30: number, yRef: number): number {
+  return (nonlinearStrength(row, vs30) * yRef) / (yRef + row.phi4);
+}
+
+/** Median (ln units) and standard deviations of one row for one rupture–site pair. */
+export function cy14PairPrediction(t: Cy14RuptureTerms, d: Cy14Distances, site: SiteContext): { lnMedian: number; tau: number; phi: number; sigma: number } {
+  const { row } = t;
+  const lnYRef = t.sourceLn + cy14PathTerm(t, d);
+  const yRef = Math.exp(lnYRef);
+  const lnMedian = lnYRef + cy14SiteTerm(row, site.vs30, yRef, site.z1Km);
+  const onePlusNl0 = 1 + cy14SiteSlope(row, site.vs30, yRef);
+  const phi = t.sigmaM * Math.sqrt((site.vs30Measured ? 0.7 : row.sigma3) + onePlusNl0 * onePlusNl0);
+  const tau = onePlusNl0 * t.tau;
+  return { lnMedian, tau, phi, sigma: Math.hypot(tau, phi) };
+}
+
+/** Magnitude validity by mechanism (the paper's ranges, from memory). */
+export const CY14_MAGNITUDE_RANGE: Readonly<Record<Cy14Mechanism, readonly [number, number]>> = Object.freeze({
+  'strike-slip': [3.5, 8.5],
+  reverse: [3.5, 8.0],
+  normal: [3.5, 8.0],
+});
+
+/** Validity over all mechanisms (strike-slip's magnitude range; the others stop lower). */
+export const CY14_VALIDITY: ValidityRange = Object.freeze({
+  magnitude: [3.5, 8.5],
+  distanceKm: [0, 300],
+  vs30: [180, 1500],
+} as const);
+
+function requireNumber(path: string, value: number, expected: string, ok: (v: number) => boolean): void {
+  if (!Number.isFinite(value) || !ok(value)) {
+    throw new InvalidInput([{ path, message: `expected ${expected}, got ${value}` }], `${NAME} input`);
+  }
+}
+
+function ruptureOf(input: GmmInput): Cy14Rupture {
+  requireNumber('magnitude', input.magnitude, 'a finite moment magnitude', () => true);
+  requireNumber('rakeDeg', input.rakeDeg, 'a finite rake in degrees', () => true);
+  requireNumber('dipDeg', input.dipDeg, 'a dip above 0° and at most 90°', (v) => v > 0 && v <= 90);
+  requireNumber('ztorKm', input.ztorKm, 'a finite depth to the top of rupture of at least 0 km', (v) => v >= 0);
+  return { magnitude: input.magnitude, mechanism: cy14MechanismFromRake(input.rakeDeg), dipDeg: input.dipDeg, ztorKm: input.ztorKm };
+}
+
+function checkPair(input: GmmInput): void {
+  requireNumber('rrupKm', input.rrupKm, 'a finite rupture distance of at least 0 km', (v) => v >= 0);
+  requireNumber('rjbKm', input.rjbKm, 'a finite Joyner–Boore distance of at least 0 km', (v) => v >= 0);
+  requireNumber('rxKm', input.rxKm, 'a finite Rx in km', () => true);
+  requireNumber('vs30', input.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
+  if (input.z1Km !== undefined) requireNumber('z1Km', input.z1Km, 'a finite Z1 of at least 0 km', (v) => v >= 0);
+}
+
+function notesOf(input: GmmInput, rupture: Cy14Rupture): string[] {
+  const notes = validityNotes(NAME, { ...CY14_VALIDITY, magnitude: CY14_MAGNITUDE_RANGE[rupture.mechanism] }, input, input.rrupKm);
+  if (rupture.ztorKm > 20) notes.push(`${NAME}: depth to top of rupture ${Math.round(rupture.ztorKm * 100) / 100} km is outside its range 0–20 km`);
+  if (input.setting !== 'crustal') notes.unshift(`${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`);
+  return notes;
+}
+
+/**
+ * CY14 median and standard deviations for one measure (PGA and PSA in g, PGV in cm/s; all in
+ * ln units), from the rupture, distances (Rrup, Rjb, Rx) and site of the input.
+ */
+export function predictCy14(input: GmmInput, measure: Measure): GmmPrediction {
+  const rupture = ruptureOf(input);
+  checkPair(input);
+  const notes = notesOf(input, rupture);
+  const applicable = notes.length === 0;
+  const predictRow = (row: Cy14Row): GmmPrediction => ({ ...cy14PairPrediction(cy14RuptureTerms(row, rupture), input, input), applicable, notes });
+  switch (measure.kind) {
+    case 'PGA':
+      return predictRow(CY14_PGA);
+    case 'PGV':
+      return predictRow(CY14_PGV);
+    case 'SA':
+      if (!(measure.periodS > 0)) throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
+      return predictAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) => predictRow(CY14_SA[i] as Cy14Row));
+  }
+}
+
+/** Chiou & Youngs (2014) for shallow crustal earthquakes (Rrup): PGA, PGV, PSA 0.01–10 s. */
+export const cy14: GroundMotionModel = Object.freeze({
+  name: NAME,
+  citation:
+    'Chiou, B. S.-J. & Youngs, R. R. (2014). Update of the Chiou and Youngs NGA model for the average horizontal component of peak ground motion and response spectra. Earthquake Spectra 30(3), 1117–1153.',
+  settings: Object.freeze(['crustal'] as const),
+  distanceMetric: 'rrup',
+  periodsS: SA_PERIODS_S,
+  hasPga: true,
+  hasPgv: true,
+  validity: CY14_VALIDITY,
+  predict: (input: GmmInput, measure: Measure): GmmPrediction => predictCy14(input, measure),
+});

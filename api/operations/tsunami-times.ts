@@ -1,0 +1,85 @@
+import { stat } from 'node:fs/promises';
+import { fileURLToPath } from 'node:url';
+import { InvalidInput } from '../engine/errors.ts';
+import type { Study } from '../engine/model.ts';
+import type { ScenarioRequest } from '../engine/scenario/index.ts';
+import type { ElevationGrid } from '../engine/terrain/elevation-grid.ts';
+import { DEFAULT_HIGH_GROUND_M, scenarioTsunami, tsunamiScreening, type TsunamiResult } from '../engine/tsunami/index.ts';
+import { readTerrainFile, terrainInFolder } from '../terrain/index.ts';
+
+/** Where the service reads terrain grids: TREMORA_TERRAIN_DIR, else the demo folder (data-demo/). */
+export const DEFAULT_TERRAIN_DIR = fileURLToPath(new URL('../../data-demo/', import.meta.url));
+
+/** Results and grids kept: a few studies' worth (a demo grid is about 0.2 MB, a result a few kB). */
+const KEEP = 8;
+
+/**
+ * Tsunami times for saved studies, shared by the API route and the pages: the terrain grid is
+ * read from the terrain folder (bare file names only, terrain-path.ts) and kept while its file
+ * is unchanged; results are kept by the study's input hash and the options, as they never
+ * change for the same inputs and grid. A solve takes about a second on the demo grid.
+ */
+export class TsunamiTimes {
+  readonly #grids = new Map<string, { mtimeMs: number; grid: ElevationGrid }>();
+  readonly #results = new Map<string, TsunamiResult>();
+  /** A number per grid read, so results from a replaced file are never served again. */
+  readonly #gridIds = new WeakMap<ElevationGrid, number>();
+  #nextGridId = 1;
+
+  constructor(readonly folder: string = process.env.TREMORA_TERRAIN_DIR?.trim() || DEFAULT_TERRAIN_DIR) {}
+
+  /** The study's terrain grid; InvalidInput naming the file when it has none or cannot be read. */
+  async grid(study: Study): Promise<ElevationGrid> {
+    if (study.terrain === undefined) {
+      throw new InvalidInput([{ path: 'terrain', message: 'the study names no terrain grid; expected "terrain": the file name of a GeoTIFF or ESRI ASCII elevation grid in the service\'s terrain folder' }]);
+    }
+    const path = terrainInFolder(this.folder, study.terrain);
+    const mtimeMs = await stat(path).then((s) => s.mtimeMs, () => -1);
+    const kept = this.#grids.get(path);
+    if (kept && kept.mtimeMs === mtimeMs) return kept.grid;
+    const grid = await readTerrainFile(path);
+    this.#gridIds.set(grid, this.#nextGridId++);
+    remember(this.#grids, path, { mtimeMs, grid });
+    return grid;
+  }
+
+  /** First arrivals from the study's interface sources (all, or `sourceIds`) and high ground. */
+  async forStudy(study: Study, hash: string, options: { sourceIds?: readonly string[]; highGroundM?: number } = {}): Promise<TsunamiResult> {
+    const grid = await this.grid(study);
+    const key = `${hash}|${this.#gridIds.get(grid)}|${options.sourceIds?.join(',') ?? '*'}|${options.highGroundM ?? DEFAULT_HIGH_GROUND_M}`;
+    const kept = this.#results.get(key);
+    if (kept) return kept;
+    const result = tsunamiScreening(study, grid, options);
+    remember(this.#results, key, result);
+    return result;
+  }
+
+  /** First arrivals for a scenario earthquake on an interface source. */
+  async forScenario(study: Study, hash: string, request: Pick<ScenarioRequest, 'sourceId' | 'magnitude' | 'position'>): Promise<TsunamiResult> {
+    const grid = await this.grid(study);
+    const key = `${hash}|${this.#gridIds.get(grid)}|scenario|${request.sourceId}|${request.magnitude}|${JSON.stringify(request.position ?? 'closest')}`;
+    const kept = this.#results.get(key);
+    if (kept) return kept;
+    const result = scenarioTsunami(study, grid, request);
+    remember(this.#results, key, result);
+    return result;
+  }
+}
+
+function remember<V>(map: Map<string, V>, key: string, value: V): void {
+  map.delete(key);
+  map.set(key, value);
+  while (map.size > KEEP) map.delete(map.keys().next().value as string);
+}
+
+const perContext = new WeakMap<object, TsunamiTimes>();
+
+/** The one TsunamiTimes of a service context (routes and pages share its cache). */
+export function tsunamiTimesOf(ctx: object): TsunamiTimes {
+  let times = perContext.get(ctx);
+  if (!times) {
+    times = new TsunamiTimes();
+    perContext.set(ctx, times);
+  }
+  return times;
+}

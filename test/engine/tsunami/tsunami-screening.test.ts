@@ -1,0 +1,115 @@
+import { describe, expect, it } from 'vitest';
+import { InvalidInput } from '../../../api/engine/errors.ts';
+import { frameForStudy } from '../../../api/engine/geometry/projection.ts';
+import type { Study } from '../../../api/engine/model.ts';
+import { modelCatalog } from '../../../api/engine/motion/registry.ts';
+import { createElevationGrid } from '../../../api/engine/terrain/elevation-grid.ts';
+import { SLOW_WALK_MS, highGround, tsunamiScreening } from '../../../api/engine/tsunami/index.ts';
+import { STANDARD_GRAVITY_MS2 } from '../../../api/engine/units.ts';
+import { loadStudy } from '../../../api/study/load-study.ts';
+import { expectClose, expectRelative } from '../../helpers/close.ts';
+
+/** The coast of the test shore: sea west of this longitude, land east (invented). */
+const COAST_LON = -140.0;
+const SEA_DEPTH_M = 2000;
+/** Land rises 10 m per km east of the coast from 2 m (invented). */
+const landM = (kmInland: number) => 2 + 10 * kmInland;
+
+/** A test study: one interface fault dipping east offshore and coastal communities (all invented). */
+function study(communities: object[]): Study {
+  const loaded = loadStudy(
+    {
+      name: 'Tsunami test shore',
+      communities,
+      sources: {
+        type: 'FeatureCollection',
+        features: [
+          {
+            type: 'Feature',
+            geometry: { type: 'LineString', coordinates: [[-141.2, -47.5], [-141.2, -46.9]] },
+            properties: { id: 'trench', name: 'Test trench', setting: 'interface', mechanism: 'reverse', dip: 45, upperDepthKm: 5, lowerDepthKm: 15, recurrence: { type: 'fixed', magnitude: 8, rate: 0.001 } },
+          },
+        ],
+      },
+      groundMotion: { interface: [{ model: 'AGA16', weight: 1 }] },
+      settings: { measures: ['PGA'], horizonsYears: [50], returnPeriodsYears: [475] },
+    },
+    { models: modelCatalog },
+  );
+  if (!loaded.ok) throw new Error(JSON.stringify(loaded.issues));
+  return loaded.study;
+}
+
+/** A lon/lat grid of 0.01° from `west` to −139.0 and −48.0 to −46.4: sea of constant depth west of the coast, a ramp of land east. */
+function shoreGrid(west = -142.0) {
+  const cell = 0.01, north = -46.4;
+  const columns = Math.round((-139.0 - west) / cell), rows = Math.round((north + 48.0) / cell);
+  const values = new Float32Array(columns * rows);
+  for (let r = 0; r < rows; r += 1) {
+    const lat = north - (r + 0.5) * cell;
+    const kmPerDeg = (Math.PI / 180) * 6371 * Math.cos((lat * Math.PI) / 180);
+    for (let c = 0; c < columns; c += 1) {
+      const lon = west + (c + 0.5) * cell;
+      values[r * columns + c] = lon < COAST_LON ? -SEA_DEPTH_M : landM((lon - COAST_LON) * kmPerDeg);
+    }
+  }
+  return createElevationGrid({ label: 'shore.asc', crs: { kind: 'lonlat' }, columns, rows, west, north, cellWidth: cell, cellHeight: cell, elevationM: values });
+}
+
+const cove = { id: 'cove', name: 'Cove', lon: -139.995, lat: -47.2, vs30: 400, coastal: true };
+
+describe('tsunami first arrival for coastal communities', () => {
+  it('over a sea of constant depth, the grid time is the distance from the rupture area / √(g h), and the range holds it', () => {
+    const s = study([cove]);
+    const result = tsunamiScreening(s, shoreGrid());
+    const community = result.communities[0];
+    const arrival = community?.arrivals[0];
+    expect(community?.problems).toEqual([]);
+    if (!community || !arrival) throw new Error('no arrival');
+    // Distance (derived): from the east edge of the rupture's surface projection (the trace plus
+    // the horizontal width (15 − 5) / tan 45° = 10 km, east) to the sea cell the time is read at.
+    const frame = frameForStudy(s);
+    const traceX = frame.toLocal([-141.2, -47.2]).x;
+    const siteX = frame.toLocal([cove.lon, cove.lat]).x;
+    const distanceKm = siteX - community.arrivals[0]!.coastDistanceKm - (traceX + 10);
+    const expectedMinutes = (distanceKm * 1000) / Math.sqrt(STANDARD_GRAVITY_MS2 * SEA_DEPTH_M) / 60;
+    expectRelative(arrival.gridMinutes, expectedMinutes, 0.02, 'distance / √(g h) (Lamb 1932 §170 for the speed; distance derived)');
+    expect(community.firstArrivalMinutes).toBeLessThanOrEqual(Math.floor(expectedMinutes));
+    expect(community.latestMinutes).toBeGreaterThanOrEqual(Math.floor(expectedMinutes));
+    expect(community.sourceId).toBe('trench');
+  });
+
+  it('says so, with no number, for a community flagged coastal but far from the sea on the grid', () => {
+    const inland = { ...cove, id: 'hill-farm', name: 'Hill Farm', lon: -139.6 };
+    const result = tsunamiScreening(study([cove, inland]), shoreGrid());
+    const farm = result.communities.find((c) => c.id === 'hill-farm');
+    expect(farm?.firstArrivalMinutes).toBeNull();
+    expect(farm?.problems.join(' ')).toMatch(/community "hill-farm" \(Hill Farm\).*no sea within 5 km/);
+  });
+
+  it('refuses a grid that does not cover the source, naming the file and the source', () => {
+    expect(() => tsunamiScreening(study([cove]), shoreGrid(-141.0))).toThrow(InvalidInput);
+    expect(() => tsunamiScreening(study([cove]), shoreGrid(-141.0))).toThrow(/"shore\.asc" does not cover the rupture area of source "trench"/);
+  });
+
+  it('refuses a source that is not an interface source of the study', () => {
+    expect(() => tsunamiScreening(study([cove]), shoreGrid(), { sourceIds: ['nowhere'] })).toThrow(/not an interface source of the study: nowhere/);
+  });
+});
+
+describe('nearest high ground', () => {
+  it('on land rising 10 m per km, finds 30 m due inland at (30 − 2) / 10 km from the shore (derived)', () => {
+    const found = highGround(shoreGrid(), { ...cove, vs30Basis: 'measured', lon: -139.99 });
+    if (found.kind !== 'found') throw new Error(found.kind);
+    const kmPerDeg = (Math.PI / 180) * 6371 * Math.cos((47.2 * Math.PI) / 180);
+    const expectedKm = (30 - 2) / 10 - 0.01 * kmPerDeg;
+    expectClose(found.distanceKm, expectedKm, 0.1, 'ramp of the test grid (derived); 0.05 km rings and the sphere-versus-ellipsoid scale allow 0.1 km');
+    expectClose(found.bearingDeg, 90, 2, 'due east, up the ramp (derived)');
+    expect(found.walkingMinutes).toBe(Math.ceil((found.distanceKm * 1000) / SLOW_WALK_MS / 60));
+  });
+
+  it('says a community already stands high enough, from its own elevationM', () => {
+    const above = highGround(shoreGrid(), { ...cove, vs30Basis: 'measured', elevationM: 45 });
+    expect(above).toMatchObject({ kind: 'already-above', elevationM: 45, basis: 'community' });
+  });
+});
