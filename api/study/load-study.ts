@@ -50,7 +50,7 @@ export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
   // The terrain grid's file name; the CLI reads it beside the study, the service in its terrain folder.
   const terrain = doc.terrain === undefined ? undefined : issues.parse(text(300, 'the file name of a GeoTIFF or ESRI ASCII elevation grid'), doc.terrain, ['terrain']);
   // Only on a study without other problems: the valid sources then keep their feature order.
-  if (issues.issues.length === 0 && settings) checkRuptureEstimate(sources, settings, issues, communities.length);
+  if (issues.issues.length === 0 && settings) checkRuptureEstimate(sources, settings, issues);
 
   if (issues.issues.length > 0 || name === undefined || !settings || !groundMotion || communities.length === 0) {
     return { ok: false, issues: issues.issues, warnings: issues.warnings };

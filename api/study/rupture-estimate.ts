@@ -1,5 +1,4 @@
 import * as turf from '@turf/turf';
-import { REFINE_PARTS, REFINE_RADIUS_CELLS } from '../engine/geometry/cell-refinement.ts';
 import type { Recurrence, Settings, Source } from '../engine/model.ts';
 import type { IssueList } from './issues.ts';
 
@@ -21,11 +20,9 @@ function binCount(recurrence: Recurrence, stepM: number): number {
  * Rupture positions per magnitude bin, at most: a fault's floating positions for the smallest
  * rupture (geometry/floating-ruptures.ts spaces them at most ruptureSpacingKm apart along strike
  * and down dip); a zone's cells, its area in cells plus a fringe of part-cells along its
- * outline (turf's area and length are spherical, close enough for a bound), plus the squares
- * of the cells refined near each community (geometry/cell-refinement.ts: the cells whose
- * centre is within the radius, at most π (radius + 1 cell)² of them); one for a point.
+ * outline (turf's area and length are spherical, close enough for a bound); one for a point.
  */
-function positionCount(source: Source, settings: Settings, communityCount: number): number {
+function positionCount(source: Source, settings: Settings): number {
   if (source.kind === 'point') return 1;
   if (source.kind === 'fault') {
     const lengthKm = turf.length(turf.lineString(source.trace.map(([lon, lat]) => [lon, lat])), { units: 'kilometers' });
@@ -37,8 +34,7 @@ function positionCount(source: Source, settings: Settings, communityCount: numbe
   const cell = settings.zoneCellKm;
   const areaCells = turf.area(polygon) / 1e6 / (cell * cell);
   const outlineCells = turf.length(turf.polygonToLine(polygon), { units: 'kilometers' }) / cell;
-  const refinedCells = Math.min(areaCells + 2 * outlineCells, Math.PI * (REFINE_RADIUS_CELLS + 1) ** 2 * communityCount);
-  return Math.ceil(areaCells + 2 * outlineCells + refinedCells * REFINE_PARTS * REFINE_PARTS) + 1;
+  return Math.ceil(areaCells + 2 * outlineCells) + 1;
 }
 
 /**
@@ -46,11 +42,11 @@ function positionCount(source: Source, settings: Settings, communityCount: numbe
  * above, naming the largest source and the settings that reduce the count. `sources` must be
  * the study's valid sources in feature order.
  */
-export function checkRuptureEstimate(sources: readonly Source[], settings: Settings, issues: IssueList, communityCount = 0): void {
+export function checkRuptureEstimate(sources: readonly Source[], settings: Settings, issues: IssueList): void {
   let total = 0;
   let largest = { index: 0, count: 0 };
   sources.forEach((source, index) => {
-    const count = binCount(source.recurrence, settings.magnitudeStep) * positionCount(source, settings, communityCount);
+    const count = binCount(source.recurrence, settings.magnitudeStep) * positionCount(source, settings);
     total += count;
     if (count > largest.count) largest = { index, count };
   });
