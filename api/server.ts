@@ -1,12 +1,14 @@
-import type { Server } from 'node:http';
-import { serve } from '@hono/node-server';
+import type { AddressInfo } from 'node:net';
 import { modelCatalog } from './engine/motion/registry.ts';
+import { startScreening } from '../web/data/start-screening.ts';
 import { createPages } from '../web/pages.tsx';
 import { createApp } from './service/app.ts';
 import { answerClientError } from './service/client-error.ts';
 import { ConfigError, readConfig, type ServiceConfig } from './service/config.ts';
+import { createNodeServer } from './service/node-listener.ts';
 import { seedDemoStudy } from './operations/demo-seed.ts';
 import { TOOL_VERSION } from './results/tool-version.ts';
+import { DatabaseRefused } from './store/database-file.ts';
 import { openStore, type Store } from './store/store.ts';
 import { RunScheduler } from './workers/run-scheduler.ts';
 import { WorkerPool } from './workers/worker-pool.ts';
@@ -28,38 +30,66 @@ function readConfigOrExit(): ServiceConfig {
   }
 }
 
-function seedOnFirstStart(store: Store): void {
-  if (store.migration.fromVersion !== 0) return;
+/** The demo study's id when this start saved it (a new database), else undefined. */
+function seedOnFirstStart(store: Store): string | undefined {
+  if (store.migration.fromVersion !== 0) return undefined;
   const seed = seedDemoStudy(store, modelCatalog);
-  if (seed.seeded) console.log(`new database: the demo study is saved as /api/studies/${seed.id}`);
-  else console.error(`new database: the demo study was not saved, it does not validate:\n${seed.issues.map((i) => `  ${i.path}: ${i.message}`).join('\n')}`);
+  if (seed.seeded) return seed.id;
+  console.error(`new database: the demo study was not saved, it does not validate:\n${seed.issues.map((i) => `  ${i.path}: ${i.message}`).join('\n')}`);
+  return undefined;
 }
 
 const urlHost = (host: string): string => (host.includes(':') && !host.startsWith('[') ? `[${host}]` : host);
 
+function openStoreOrExit(path: string): Store {
+  try {
+    return openStore(path);
+  } catch (error) {
+    if (!(error instanceof DatabaseRefused)) throw error;
+    console.error(`tremora: cannot start: ${error.message}`);
+    process.exit(2);
+  }
+}
+
 const config = readConfigOrExit();
-const store = openStore(config.databasePath);
+const store = openStoreOrExit(config.databasePath);
 if (store.interruptedAtOpen > 0) console.log(`${store.interruptedAtOpen} run(s) left unfinished by the previous process are marked interrupted`);
 if (store.mapRunsInterruptedAtOpen > 0) console.log(`${store.mapRunsInterruptedAtOpen} map(s) left unfinished by the previous process are marked interrupted`);
-seedOnFirstStart(store);
+const demoId = seedOnFirstStart(store);
 
 const runPool = new WorkerPool({ size: config.workers, name: 'tremora-run' });
 const quickPool = new WorkerPool({ size: 1, name: 'tremora-quick' });
 const scheduler = new RunScheduler({ store, pool: runPool, toolVersion: TOOL_VERSION });
 const context = { store, scheduler, runPool, quickPool, models: modelCatalog, toolVersion: TOOL_VERSION, workBudget: config.workBudget };
-const app = createApp(context, { pages: createPages(context, { token: config.token }), ...(config.token === undefined ? {} : { token: config.token }) });
+const app = createApp(context, {
+  pages: createPages(context, { token: config.token }),
+  ...(config.token === undefined ? {} : { token: config.token }),
+  ...(config.allowedHosts === undefined ? {} : { allowedHosts: config.allowedHosts }),
+});
 
-const server = serve({ fetch: app.fetch, hostname: config.host, port: config.port }, (info) => {
-  console.log(`Tremora ${TOOL_VERSION} is listening on http://${urlHost(config.host)}:${info.port}`);
+// A new database's demo is screened at once, in the background, so its pages have results
+// by the time a person opens them (they say the screening is under way until then).
+if (demoId !== undefined && config.screenDemo) {
+  const demo = store.studies.get(demoId);
+  if (demo) startScreening(context, demo).catch((error: unknown) => console.error(`the demo study could not be screened: ${error instanceof Error ? error.message : String(error)}`));
+}
+
+const server = createNodeServer({ fetch: app.fetch, hostname: config.host });
+server.listen(config.port, config.host, () => {
+  const origin = `http://${urlHost(config.host)}:${(server.address() as AddressInfo).port}`;
+  console.log(`Tremora ${TOOL_VERSION} is listening on ${origin}`);
   console.log(`database: ${config.databasePath}; ${runPool.size} worker thread(s) for runs`);
-}) as Server;
+  if (demoId !== undefined) console.log(`new database: the demo study is saved${config.screenDemo ? ' and being screened' : ''}; open ${origin}/studies/${demoId}`);
+  else console.log(`open ${origin}/ in a browser`);
+});
 
 // Requests Node's parser refuses get the one error shape too (client-error.ts).
 server.on('clientError', answerClientError);
 server.on('error', (error: NodeJS.ErrnoException) => {
-  const why = error.code === 'EADDRINUSE' ? `port ${config.port} on ${config.host} is in use; set PORT to another port` : error.message;
-  console.error(`tremora: cannot listen: ${why}`);
-  process.exit(1);
+  const why = error.code === 'EADDRINUSE' ? `port ${config.port} on ${config.host} is in use; set PORT to another port` : `${error.message}; set HOST to an address of this machine`;
+  console.error(`tremora: cannot start: cannot listen on ${urlHost(config.host)}:${config.port}: ${why}`);
+  store.close();
+  process.exit(2);
 });
 
 let stopping = false;

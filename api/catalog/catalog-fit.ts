@@ -7,6 +7,7 @@ import { fitGutenbergRichter, fitGutenbergRichterWeichert, observationSpan, type
 import { selectByMagnitudeType, type MagnitudeSelection } from '../engine/catalog/magnitude-type.ts';
 import { insideZone, zonePolygon } from '../engine/catalog/zone-polygon.ts';
 import { zoneRecurrence, type ZoneRecurrence } from '../engine/catalog/zone-recurrence.ts';
+import { bOutsideUsual, completenessChanges, largeMagnitudesDisagree, mostRemoved, USUAL_B_RANGE, type FitFinding } from '../engine/catalog/fit-checks.ts';
 import { InvalidInput } from '../engine/errors.ts';
 import type { LonLat } from '../engine/model.ts';
 
@@ -41,8 +42,25 @@ export interface CatalogFit {
   /** With mMax: ready for a zone source, from Weichert when there are periods, else Aki–Utsu. */
   readonly recurrence?: ZoneRecurrence;
   readonly frequencyMagnitude: FrequencyMagnitude;
+  /** Reasons to distrust the fit (fit-checks.ts), each with what to do; read them before using the recurrence. */
+  readonly warnings: readonly string[];
   readonly notes: readonly string[];
 }
+
+/** How the caller names the options a note or warning points to (the service's keys by default). */
+export interface FitOptionNames {
+  readonly span: string;
+  readonly mMax: string;
+  readonly periods: string;
+  readonly decluster: string;
+}
+
+export const SERVICE_OPTION_NAMES: FitOptionNames = {
+  span: 'startTime and endTime',
+  mMax: 'mMax',
+  periods: 'completeness.periods ("proposed" or your own)',
+  decluster: 'decluster: false',
+};
 
 /**
  * Without a polygon every event counts: the zone is the whole globe as one ring (in GeoJSON's
@@ -77,12 +95,15 @@ export interface CatalogFitOptions {
   /** Observation span, UTC epoch ms; default the first and last event fitted. */
   readonly startMs?: number;
   readonly endMs?: number;
+  /** Names of the options in notes and warnings; default SERVICE_OPTION_NAMES. */
+  readonly optionNames?: FitOptionNames;
 }
 
 /** Declustering, Mc, Aki–Utsu (and Weichert), recurrence and frequency–magnitude of a catalog. */
 export function fitCatalog(events: readonly CatalogEvent[], options: CatalogFitOptions = {}): CatalogFit {
   const step = options.magnitudeStep ?? 0.1;
   const magnitudes = options.magnitudes ?? 'moment';
+  const names = options.optionNames ?? SERVICE_OPTION_NAMES;
   const notes: string[] = [];
   const selected = selectByMagnitudeType(events, magnitudes);
   if (selected.events.length === 0) {
@@ -104,7 +125,7 @@ export function fitCatalog(events: readonly CatalogEvent[], options: CatalogFitO
   }
   const span = observationSpan(fitted, options.startMs, options.endMs);
   if (span.notes.length > 0) {
-    notes.push('the observation span runs from the first to the last event fitted, which shortens it by about one gap between events and so raises the rates; give the catalog\'s real span (startTime and endTime; --start and --end on the command line)');
+    notes.push(`the observation span runs from the first to the last event fitted, which shortens it by about one gap between events and so raises the rates; give the catalog's real span (${names.span})`);
   }
   const inSpan = fitted.filter((e) => e.timeMs >= span.startMs && e.timeMs <= span.endMs);
   if (inSpan.length === 0) {
@@ -134,8 +155,9 @@ export function fitCatalog(events: readonly CatalogEvent[], options: CatalogFitO
   const chosen = weichert ?? akiUtsu;
 
   let recurrence: ZoneRecurrence | undefined;
-  if (options.mMax === undefined) notes.push('no recurrence: give the largest magnitude the zone can host (mMax; --m-max on the command line), which a catalog cannot tell');
+  if (options.mMax === undefined) notes.push(`no recurrence: give the largest magnitude the zone can host (${names.mMax}), which a catalog cannot tell`);
   else {
+    if (weichert) notes.push(`the Weichert (1980) fit counts every magnitude bin up to ${names.mMax} ${options.mMax}, the empty ones too, so ${names.mMax} changes its b-value`);
     recurrence = zoneRecurrence(fitted, {
       ...common,
       rings,
@@ -153,7 +175,18 @@ export function fitCatalog(events: readonly CatalogEvent[], options: CatalogFitO
     ...(periods ? { periods } : {}),
     fit: { aValue: chosen.aValue, bValue: chosen.bValue, referenceMagnitude: chosen.referenceMagnitude },
   });
+  const inSpanMagnitudes = inSpan.filter((e) => e.magnitude >= chosen.referenceMagnitude - 1e-9).map((e) => e.magnitude);
+  const windows = overTime?.windows ?? (periods === undefined && inSpan.length >= 2 * perWindow ? completenessOverTime(inSpan, { ...common, correction, eventsPerWindow: perWindow }).windows : undefined);
+  const findings = [
+    bOutsideUsual(chosen.bValue),
+    inSpanMagnitudes.length > 0
+      ? largeMagnitudesDisagree({ magnitudes: inSpanMagnitudes, aValue: chosen.aValue, bValue: chosen.bValue, referenceMagnitude: chosen.referenceMagnitude, observationYears: chosen.observationYears, magnitudeStep: step })
+      : undefined,
+    periods === undefined && windows ? completenessChanges(windows, mc) : undefined,
+    declustering ? mostRemoved(declustering.removed.length, selected.events.length) : undefined,
+  ].filter((f): f is FitFinding => f !== undefined);
   return {
+    warnings: findings.map((f) => findingText(f, names, chosen.observationYears)),
     magnitudes,
     excludedNonMoment: selected.excludedNonMoment,
     ...(declustering ? { declustering } : {}),
@@ -169,4 +202,24 @@ export function fitCatalog(events: readonly CatalogEvent[], options: CatalogFitO
     frequencyMagnitude: plot,
     notes: [...new Set(notes)],
   };
+}
+
+const sig2 = (x: number): string => String(Number(x.toPrecision(2)));
+
+/** A finding in words, with what to check and the option that helps. */
+function findingText(f: FitFinding, names: FitOptionNames, years: number): string {
+  switch (f.kind) {
+    case 'b-outside-usual':
+      return `b = ${f.bValue.toFixed(2)} lies outside the usual ${USUAL_B_RANGE[0]}–${USUAL_B_RANGE[1]}: check the completeness magnitude and whether completeness changed over time (${names.periods}) before using this recurrence`;
+    case 'large-magnitudes-disagree':
+      return (
+        `the fitted line gives ${sig2(f.predicted)} events of M ${f.magnitude.toFixed(2)} or more in the ${sig2(years)} years, the catalog has ${f.observed} ` +
+        `(a Poisson chance of ${sig2(f.chance)} of a count this far ${f.observed < f.predicted ? 'below' : 'above'}): the line does not fit the largest magnitudes; ` +
+        `check the completeness magnitude and b, and try completeness periods (${names.periods})`
+      );
+    case 'completeness-changes':
+      return `completeness looks time-dependent: Mc reaches ${f.highestMc.toFixed(1)} in part of the catalog (${f.earliestMc.toFixed(1)} in its earliest part) against the ${f.mcUsed.toFixed(1)} used for the whole; give completeness periods (${names.periods})`;
+    case 'most-removed':
+      return `declustering removed ${Math.round((100 * f.removed) / f.total)}% of the events (${f.removed} of ${f.total}) as foreshocks and aftershocks; in a dense catalog without real clusters this means the Gardner & Knopoff (1974) windows join independent events: check the windows, or compare a fit without declustering (${names.decluster})`;
+  }
 }

@@ -119,6 +119,7 @@ export const catalogFitJson = (fit: CatalogFit) => {
       ? { recurrence: r.recurrence, method: r.fit.method, bValue: r.bValue, sigmaB: r.sigmaB, rate: r.rate, sigmaRate: r.sigmaRate, eventCount: r.eventCount, summary: r.summary, notes: r.notes }
       : null,
     frequencyMagnitude: { bins: fit.frequencyMagnitude.bins, fittedLine: fit.frequencyMagnitude.fittedLine ?? null },
+    warnings: fit.warnings,
     notes: fit.notes,
   };
 };

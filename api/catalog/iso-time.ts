@@ -19,8 +19,11 @@ export function parseIsoTimeMs(text: string): ParsedTime {
   const hour = Number(h);
   const minute = Number(mi);
   const second = Number(s);
-  const dayMs = Date.UTC(year, month - 1, day);
-  const check = new Date(dayMs);
+  // Date.UTC reads years 0 to 99 as 1900 to 1999; setUTCFullYear takes the year as written,
+  // which historical catalogs need (ECMA-262, sections 21.4.3.4 MakeDay and 21.4.4.25).
+  const check = new Date(0);
+  check.setUTCFullYear(year, month - 1, day);
+  const dayMs = check.getTime();
   if (month < 1 || month > 12 || check.getUTCDate() !== day || check.getUTCMonth() !== month - 1) {
     return { ok: false, message: `expected a real calendar date; got "${text}"` };
   }

@@ -1,7 +1,7 @@
 import { readFile } from 'node:fs/promises';
 import { basename } from 'node:path';
 import { parseArgs } from 'node:util';
-import { fitCatalog, type CatalogFit } from '../catalog/catalog-fit.ts';
+import { fitCatalog, type CatalogFit, type FitOptionNames } from '../catalog/catalog-fit.ts';
 import { readCatalogText } from '../catalog/catalog-input.ts';
 import { catalogFitJson, catalogLoadJson, feltJson, isoTime } from '../catalog/catalog-json.ts';
 import { describeCatalogLoad, type CatalogLoad } from '../catalog/catalog-load.ts';
@@ -116,6 +116,7 @@ async function fitVerb(args: readonly string[], io: Io): Promise<number> {
     magnitudes: values['all-magnitudes'] ? 'all' : 'moment',
     ...(startMs === undefined || endMs === undefined ? {} : { startMs, endMs }),
     ...(periods === undefined ? {} : { periods }),
+    optionNames: CLI_OPTION_NAMES,
   });
   if (values.json) {
     io.out(JSON.stringify({ catalog: catalogLoadJson(load), ...catalogFitJson(fit) }, null, 2));
@@ -124,6 +125,9 @@ async function fitVerb(args: readonly string[], io: Io): Promise<number> {
   for (const line of fitLines(basename(path), load, fit, values.polygon === undefined ? undefined : basename(values.polygon))) io.out(line);
   return EXIT_OK;
 }
+
+/** The command line's names for what the fit's notes and warnings point to. */
+const CLI_OPTION_NAMES: FitOptionNames = { span: '--start and --end', mMax: '--m-max', periods: '--periods proposed, or your own', decluster: '--no-decluster' };
 
 const plural = (n: number, one: string, many = `${one}s`): string => `${n} ${n === 1 ? one : many}`;
 const day = (timeMs: number): string => isoTime(timeMs).slice(0, 10);
@@ -170,6 +174,7 @@ export function fitLines(fileName: string, load: CatalogLoad, fit: CatalogFit, p
   if (r) {
     const paste = { ...r.recurrence, bValue: Number(r.recurrence.bValue.toFixed(3)), rate: Number(sig(r.recurrence.rate ?? 0, 4)) };
     lines.push(`Recurrence for a zone source, up to M ${mag(r.recurrence.mMax)}: ${r.summary}`);
+    if (fit.warnings.length > 0) lines.push(...warningLines(fit.warnings), 'Read the warnings above before pasting this recurrence:');
     lines.push(`To paste into the zone source's "properties" (rounded; --json gives every digit):`, `  "recurrence": ${JSON.stringify(paste)}`);
   }
   lines.push('Frequency–magnitude (yearly rates of M at least the lower edge):');
@@ -178,9 +183,12 @@ export function fitLines(fileName: string, load: CatalogLoad, fit: CatalogFit, p
     const fitted = b.fittedCumulativeAnnualRate === undefined ? '' : sig(b.fittedCumulativeAnnualRate);
     lines.push(`  ${mag(b.lowerEdge).padEnd(8)}${String(b.count).padStart(7)}${String(b.cumulativeCount).padStart(12)}${sig(b.cumulativeAnnualRate).padStart(11)}${fitted.padStart(11)}`.trimEnd());
   }
+  if (!r && fit.warnings.length > 0) lines.push(...warningLines(fit.warnings));
   lines.push(...noteLines(fit.notes));
   return lines;
 }
+
+const warningLines = (warnings: readonly string[]): string[] => ['Warnings:', ...warnings.map((w) => `  ! ${w}`)];
 
 async function feltVerb(args: readonly string[], io: Io): Promise<number> {
   const { values, positionals } = parseArgs({

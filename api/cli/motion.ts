@@ -19,6 +19,8 @@ Evaluates one ground-motion model: median and sigma for each measure.
 With --json: per measure the median in g (PGV in cm/s) and the total, between- and within-event
 sigma in natural-log units.`;
 
+const DISTANCE_NAMES = { rjbKm: 'Rjb', rrupKm: 'Rrup', rhypoKm: 'Rhypo (hypocentral)' } as const;
+
 export async function motionVerb(args: readonly string[], io: Io): Promise<number> {
   const { values } = parseArgs({
     args: [...args],
@@ -55,17 +57,23 @@ export async function motionVerb(args: readonly string[], io: Io): Promise<numbe
   );
   if (values.json) {
     const measures = Object.fromEntries(
-      Object.entries(result.measures).map(([k, m]) => [k, { median: m.median, unit: m.unit, sigma: m.sigma, tau: m.tau, phi: m.phi, applicable: m.applicable, notes: m.notes }]),
+      Object.entries(result.measures).map(([k, m]) => [k, { median: m.median, unit: m.unit, sigma: m.sigma, tau: m.tau, phi: m.phi, applicable: m.applicable, notes: m.notes, derived: m.derived ?? null }]),
     );
-    io.out(JSON.stringify({ model: result.model, input: result.input, defaults: result.defaults, measures }, null, 2));
+    io.out(JSON.stringify({ model: result.model, input: result.input, defaults: result.defaults, unusedDefaults: result.unusedDefaults, distanceUsed: result.distanceUsed ?? null, measures }, null, 2));
     return EXIT_OK;
   }
   const i = result.input;
   io.out(`${result.model} — ${result.citation}`);
-  io.out(`M ${i.magnitude} ${i.mechanism} (${i.setting}), Rjb ${sig(i.rjbKm)} km, Rrup ${sig(i.rrupKm)} km, Vs30 ${i.vs30} m/s`);
+  io.out(`M ${i.magnitude} ${i.mechanism} (${i.setting}), Rjb ${sig(i.rjbKm)} km, Rrup ${sig(i.rrupKm)} km, Rhypo ${sig(i.rhypoKm)} km, Vs30 ${i.vs30} m/s`);
+  if (result.distanceUsed) io.out(`distance in the model's equations: ${DISTANCE_NAMES[result.distanceUsed]} ${sig(i[result.distanceUsed])} km`);
   if (result.defaults.length > 0) io.out(`assumed: ${result.defaults.join('; ')}`);
+  if (result.unusedDefaults.length > 0) io.out(`not read by ${result.model} for ${i.setting} earthquakes: ${result.unusedDefaults.map((d) => d.split(' ')[0]).join(', ')}`);
   for (const [key, m] of Object.entries(result.measures)) {
-    io.out(`  ${key.padEnd(9)} median ${sig(m.median)} ${m.unit}   sigma ${sig(m.sigma)} (tau ${sig(m.tau)}, phi ${sig(m.phi)})${m.applicable ? '' : `   outside validity: ${m.notes.join('; ')}`}`);
+    const otherNotes = m.notes.filter((n) => n !== m.derived);
+    io.out(
+      `  ${key.padEnd(9)} median ${sig(m.median)} ${m.unit}   sigma ${sig(m.sigma)} (tau ${sig(m.tau)}, phi ${sig(m.phi)})` +
+        `${m.derived ? `   derived, not predicted by the model: ${m.derived}` : ''}${m.applicable ? '' : `   outside validity: ${otherNotes.join('; ')}`}`,
+    );
   }
   return EXIT_OK;
 }

@@ -13,17 +13,20 @@ and MMI at every community.
   --source ID         the source's id in the study
   --magnitude M       moment magnitude
   --near COMMUNITY    put the rupture where it is closest to this community (for every community)
+  --middle            put the rupture nearest the middle of the source (for every community)
   --along KM --down-dip KM   a fault rupture starting this far along the trace and down dip
   --lon DEG --lat DEG        the epicentre of a zone or point source's rupture
   --grid KM           also compute a map grid at this spacing (median PGA and MMI, Vs30 760)
 Without a position, each community gets the rupture position closest to it (a worst case for
-each, not one earthquake). Screening estimates only, not design values.`;
+each, not one earthquake); with --grid the map and the table show one earthquake, by default
+in the middle of the source. Rrup is the shortest distance to the rupture surface (which may
+lie deep below). Screening estimates only, not design values.`;
 
 export async function scenarioVerb(args: readonly string[], io: Io): Promise<number> {
   const { values, positionals } = parseArgs({
     args: [...args],
     options: {
-      source: { type: 'string' }, magnitude: { type: 'string' }, near: { type: 'string' }, along: { type: 'string' },
+      source: { type: 'string' }, magnitude: { type: 'string' }, near: { type: 'string' }, middle: { type: 'boolean' }, along: { type: 'string' },
       'down-dip': { type: 'string' }, lon: { type: 'string' }, lat: { type: 'string' }, grid: { type: 'string' }, json: { type: 'boolean' },
     },
     allowPositionals: true,
@@ -36,8 +39,9 @@ export async function scenarioVerb(args: readonly string[], io: Io): Promise<num
   const downDip = numberOption(values, 'down-dip');
   const lon = numberOption(values, 'lon');
   const lat = numberOption(values, 'lat');
-  let position: ScenarioPosition = 'closest';
+  let position: ScenarioPosition | undefined;
   if (values.near) position = { communityId: values.near };
+  else if (values.middle) position = 'middle';
   else if (along !== undefined || downDip !== undefined) position = { alongStrikeKm: along ?? 0, downDipKm: downDip ?? 0 };
   else if (lon !== undefined || lat !== undefined) {
     if (lon === undefined || lat === undefined) throw new UsageError('--lon and --lat go together');
@@ -47,7 +51,7 @@ export async function scenarioVerb(args: readonly string[], io: Io): Promise<num
   const request: ScenarioRequest = {
     sourceId: values.source,
     magnitude: requiredNumber(values, 'magnitude'),
-    position,
+    ...(position === undefined ? {} : { position }),
     ...(grid !== undefined ? { gridSpacingKm: grid } : {}),
   };
   const result = runScenario(study, modelCatalog, request);

@@ -1,7 +1,7 @@
 import { writeFile } from 'node:fs/promises';
 import { parseArgs } from 'node:util';
 import { modelCatalog } from '../engine/motion/registry.ts';
-import type { StudyResult } from '../engine/results.ts';
+import type { NearestFault, StudyResult } from '../engine/results.ts';
 import { screenStudy } from '../engine/screen-study.ts';
 import { inputHash } from '../results/input-hash.ts';
 import { buildProvenance } from '../results/provenance.ts';
@@ -16,9 +16,17 @@ export const SCREEN_USAGE = `tremora screen STUDY [--out FILE] [--format json|cs
 Screens every community of a study: hazard curves, levels at the return periods, chances over
 the horizons, intensity, deaggregation, nearest faults and the screening band.
   --out FILE          write the results there (JSON by default; --format csv for a table)
-  --format FMT        json (every result, DESIGN.md's keys) or csv (one row per community)
-  --json              print only the JSON results on stdout
+  --format FMT        json (every result, with the keys of README's Results) or csv (one row per community)
+  --json              print only the JSON results on stdout (also with --out, which still writes)
 Screening estimates only, not design values: building codes and licensed engineers decide.`;
+
+/** PGA in one precision down the column: two decimals (0.50, 0.26), two significant figures below 0.01 g. */
+const pgaText = (g: number): string => (g >= 0.01 ? g.toFixed(2) : sig(g, 2));
+
+/** "12 km away" or, for a fault beneath the place, "38 km below" (its depth there). */
+function faultWhere(fault: NearestFault): string {
+  return fault.depthBelowKm === undefined ? `${sig(fault.distanceKm, 2)} km away` : `${sig(fault.depthBelowKm, 2)} km below`;
+}
 
 export async function screenVerb(args: readonly string[], io: Io): Promise<number> {
   const { values, positionals } = parseArgs({
@@ -49,13 +57,13 @@ export async function screenVerb(args: readonly string[], io: Io): Promise<numbe
     provenance: buildProvenance({ study, toolVersion: TOOL_VERSION, inputHash: inputHash(study), startedAt, finishedAt: new Date().toISOString() }),
   };
   const text = format === 'csv' ? runCsv(study, result) : `${JSON.stringify(result, null, 2)}\n`;
+  if (values.out) {
+    await writeFile(values.out, text);
+    if (!values.json) io.err(`wrote ${values.out} (${format})`);
+  }
   if (values.json) {
     io.out(text);
     return EXIT_OK;
-  }
-  if (values.out) {
-    await writeFile(values.out, text);
-    io.err(`wrote ${values.out} (${format})`);
   }
 
   const chance = (p: number | undefined) => (p === undefined ? '' : `${sig(p * 100, 2)}%`);
@@ -66,8 +74,8 @@ export async function screenVerb(args: readonly string[], io: Io): Promise<numbe
     const mmi = c.intensity.atReturnPeriod['475'];
     const fault = c.nearestFaults[0];
     io.out(
-      `${c.name.padEnd(22)}${c.band.label.padEnd(20)}${(pga == null ? 'n/a' : `${sig(pga, 2)} g`).padStart(12)}${(mmi?.roman ?? 'n/a').padStart(9)}` +
-        `${chance(c.intensity.chanceOfReaching['50']?.VII).padStart(16)}  ${fault ? `${fault.name} ${sig(fault.distanceKm, 2)} km` : ''}`,
+      `${c.name.padEnd(22)}${c.band.label.padEnd(20)}${(pga == null ? 'n/a' : `${pgaText(pga)} g`).padStart(12)}${(mmi?.roman ?? 'n/a').padStart(9)}` +
+        `${chance(c.intensity.chanceOfReaching['50']?.VII).padStart(16)}  ${fault ? `${fault.name} ${faultWhere(fault)}` : ''}`,
     );
   }
   for (const w of result.warnings) io.err(`note: ${w}`);

@@ -54,6 +54,10 @@ export interface NearestFault {
   readonly distanceKm: number;
   /** Bearing from the community to the closest point of the surface projection, deg from north. */
   readonly bearingDeg: number;
+  /** Shortest distance to the whole fault surface, through the ground (Rrup), km: the order of the list. */
+  readonly rrupKm: number;
+  /** Where the community stands above the fault (distanceKm 0): the fault's depth straight below it, km. */
+  readonly depthBelowKm?: number;
 }
 
 export interface ScreeningBand {

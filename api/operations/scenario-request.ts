@@ -17,10 +17,12 @@ const scenarioSchema = z.object({
 });
 
 const POSITION_EXPECTED =
-  'expected "closest", { "communityId" }, { "alongStrikeKm", "downDipKm" } (km, faults) or { "lon", "lat" } (degrees)';
+  'expected "closest", "middle", { "communityId" }, { "alongStrikeKm", "downDipKm" } (km, faults) or { "lon", "lat" } (degrees)';
 
 function readPosition(raw: unknown, issues: IssueList, path: readonly PropertyKey[]): ScenarioPosition | undefined {
-  if (raw === undefined || raw === 'closest') return 'closest';
+  // Left out: the engine's default ("middle" with a map, "closest" without).
+  if (raw === undefined) return undefined;
+  if (raw === 'closest' || raw === 'middle') return raw;
   const given = raw as Record<string, unknown> | null;
   if (typeof given !== 'object' || given === null || Array.isArray(given)) {
     issues.add(path, `${POSITION_EXPECTED}, got ${describeValue(raw)}`);
@@ -51,11 +53,11 @@ export function readScenarioRequest(raw: Record<string, unknown>, extraKeys: rea
   }
   const fields = issues.parse(scenarioSchema, raw, []);
   const position = readPosition(raw.position, issues, ['position']);
-  if (issues.issues.length > 0 || !fields || !position) throw new InvalidInput(issues.issues, 'invalid scenario request');
+  if (issues.issues.length > 0 || !fields || (raw.position !== undefined && !position)) throw new InvalidInput(issues.issues, 'invalid scenario request');
   return {
     sourceId: fields.sourceId,
     magnitude: fields.magnitude,
-    position,
+    ...(position === undefined ? {} : { position }),
     ...(fields.gridSpacingKm === undefined ? {} : { gridSpacingKm: fields.gridSpacingKm }),
     ...(fields.gridVs30 === undefined ? {} : { gridVs30: fields.gridVs30 }),
   };

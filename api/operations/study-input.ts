@@ -3,7 +3,7 @@ import type { Study } from '../engine/model.ts';
 import type { ModelCatalog } from '../engine/motion/catalog.ts';
 import type { StudyRecord, Store } from '../store/index.ts';
 import { loadStudy } from '../study/load-study.ts';
-import { parseJsonText } from '../study/json-text.ts';
+import { jsonDepthExceeds, MAX_JSON_DEPTH, parseJsonText } from '../study/json-text.ts';
 
 export interface ValidStudy {
   readonly study: Study;
@@ -15,10 +15,24 @@ const under = (prefix: string | undefined, issues: readonly InputIssue[]): Input
   prefix === undefined ? [...issues] : issues.map((i) => ({ path: i.path === '(study)' ? prefix : `${prefix}.${i.path}`, message: i.message }));
 
 /**
+ * The parts of a document that nest deeper than a stored document may (MAX_JSON_DEPTH, which
+ * is also the limit it is read back with). A body within the limit can exceed it once placed
+ * in the document: an import of sources goes one level down, under `sources`.
+ */
+function nestingIssues(raw: unknown): InputIssue[] {
+  if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) return [];
+  return Object.entries(raw)
+    .filter(([, value]) => typeof value === 'object' && value !== null && jsonDepthExceeds(JSON.stringify(value), MAX_JSON_DEPTH - 1))
+    .map(([key]) => ({ path: key, message: `expected the study document nested at most ${MAX_JSON_DEPTH} levels deep (objects and lists), got deeper with ${key} in it` }));
+}
+
+/**
  * Validates a study document; throws InvalidInput listing every problem. `communitiesCsv` is
  * the text for a document whose `communities` names a CSV file (imported earlier).
  */
 export function validateStudy(raw: unknown, models: ModelCatalog, communitiesCsv?: string, pathPrefix?: string): ValidStudy {
+  const tooDeep = nestingIssues(raw);
+  if (tooDeep.length > 0) throw new InvalidInput(under(pathPrefix, tooDeep), 'invalid study');
   const result = loadStudy(raw, communitiesCsv === undefined ? { models } : { models, communitiesCsv });
   if (!result.ok) throw new InvalidInput(under(pathPrefix, result.issues), 'invalid study');
   return { study: result.study, warnings: under(pathPrefix, result.warnings) };

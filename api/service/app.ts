@@ -1,6 +1,7 @@
 import { Hono } from 'hono';
 import { bodyLimit } from 'hono/body-limit';
 import { methodNotAllowed } from 'hono/method-not-allowed';
+import { allowedHosts } from './allowed-hosts.ts';
 import { errorHandler, logToStderr, notFoundHandler, type LogError } from './error-handler.ts';
 import { errorBody } from './http-error.ts';
 import { requireToken } from './require-token.ts';
@@ -30,6 +31,8 @@ export interface CreateAppOptions {
   /** When set, every request that writes or computes must carry it (require-token.ts). */
   readonly token?: string;
   readonly bodyLimitBytes?: number;
+  /** When set, requests whose Host names anything else are refused with 421 (allowed-hosts.ts). */
+  readonly allowedHosts?: readonly string[];
   readonly logError?: LogError;
 }
 
@@ -39,6 +42,7 @@ export function createApp(ctx: ServiceContext, options: CreateAppOptions = {}): 
   const maxSize = options.bodyLimitBytes ?? DEFAULT_BODY_LIMIT_BYTES;
 
   app.use(securityHeaders());
+  if (options.allowedHosts !== undefined) app.use(allowedHosts(options.allowedHosts));
   app.use(
     methodNotAllowed({
       app,
@@ -62,7 +66,7 @@ export function createApp(ctx: ServiceContext, options: CreateAppOptions = {}): 
   app.route('/api', api);
   if (options.pages) app.route('/', options.pages);
 
-  app.onError(errorHandler(options.logError ?? logToStderr));
+  app.onError(errorHandler(options.logError ?? logToStderr, (error) => ctx.store.noteWriteFailure(error)));
   app.notFound(notFoundHandler);
   return app;
 }

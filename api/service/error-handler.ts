@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import type { Context, ErrorHandler, NotFoundHandler } from 'hono';
 import { HTTPException } from 'hono/http-exception';
 import { Cancelled, InvalidInput, StudyTooLarge, TremoraError } from '../engine/errors.ts';
+import { isDamaged, isDiskFull } from '../store/index.ts';
 import { PoolClosed } from '../workers/task-errors.ts';
 import { errorBody, HttpError } from './http-error.ts';
 
@@ -20,8 +21,20 @@ const plural = (n: number, word: string): string => `${n} ${word}${n === 1 ? '' 
  * the engine's named errors are the user's mistakes too (422). Anything else is ours: logged
  * with an id, answered 500 with that id and nothing of the internals.
  */
-export function errorHandler(logError: LogError): ErrorHandler {
+export function errorHandler(logError: LogError, onStoreError: (error: unknown) => void = () => {}): ErrorHandler {
   return (error: Error, c: Context) => {
+    // The database said no: the disk is full (RFC 4918 section 11.5, 507 Insufficient
+    // Storage), or the file is damaged. Nothing was written either way (the write's
+    // transaction was rolled back); health says so too (routes/health.ts).
+    if (isDiskFull(error)) {
+      onStoreError(error);
+      return c.json(errorBody('the disk holding the database is full: nothing was saved; free some space and try again'), 507);
+    }
+    if (isDamaged(error)) {
+      const id = randomUUID();
+      logError(id, `${c.req.method} ${c.req.path}`, error);
+      return c.json({ ...errorBody('the database file is damaged: nothing was saved; stop the service and restore the file from a backup'), id }, 503);
+    }
     if (error instanceof HttpError) return c.json(errorBody(error.message, error.issues), error.status, { ...error.headers });
     if (error instanceof HTTPException) {
       // hono's own middleware (bearer auth) builds complete answers; others carry a status only.

@@ -15,6 +15,17 @@ export const CONTENT_SECURITY_POLICY =
  */
 export const REFERRER_POLICY = 'same-origin';
 
+/**
+ * The same headers as a plain record, for the few answers written before the app sees a
+ * request (client-error.ts, node-listener.ts).
+ */
+export const SECURITY_HEADERS: Readonly<Record<string, string>> = {
+  'Content-Security-Policy': CONTENT_SECURITY_POLICY,
+  'X-Content-Type-Options': 'nosniff',
+  'X-Frame-Options': 'DENY',
+  'Referrer-Policy': REFERRER_POLICY,
+};
+
 /** hono's secure-headers middleware set to the policy above, with nosniff, DENY and REFERRER_POLICY. */
 export const securityHeaders = () =>
   secureHeaders({

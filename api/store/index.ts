@@ -14,3 +14,4 @@ export {
 export { MapRunRepository, type MapRunInputs, type MapRunOutputs, type MapRunRecord, type MapRunRequest } from './map-run-repository.ts';
 export { newId } from './new-id.ts';
 export { CatalogRepository, type StudyCatalogRecord, type StudyCatalogWrite } from './catalog-repository.ts';
+export { DatabaseRefused, TREMORA_APPLICATION_ID, isDamaged, isDiskFull } from './database-file.ts';

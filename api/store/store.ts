@@ -2,6 +2,7 @@ import { mkdirSync } from 'node:fs';
 import { dirname } from 'node:path';
 import Database from 'better-sqlite3';
 import { CatalogRepository } from './catalog-repository.ts';
+import { checkDatabaseFile, isDiskFull, refusalFor } from './database-file.ts';
 import { MapRunRepository } from './map-run-repository.ts';
 import { migrate, type MigrationOutcome } from './migrate.ts';
 import { RunRepository } from './run-repository.ts';
@@ -36,18 +37,29 @@ export interface Store {
   integrityCheck(): string;
   /** Cheap liveness check of the connection. */
   ping(): boolean;
+  /** Remembers a write that failed for want of space (SQLITE_FULL); other errors are ignored. */
+  noteWriteFailure(error: unknown): void;
+  /** Whether the disk is full: the last write failed for want of space and none has succeeded since. */
+  diskFull(): boolean;
   close(): void;
 }
 
 /**
- * Opens (creating if needed) the database at `path`: WAL journal, foreign keys on, a busy
+ * Opens (creating if needed) the database at `path`: checked to be Tremora's own and whole
+ * (database-file.ts; DatabaseRefused otherwise, with nothing written), WAL journal, foreign keys on, a busy
  * timeout, schema migrated, runs and map runs left unfinished by a previous process marked
  * interrupted.
  */
 export function openStore(path: string): Store {
-  if (path !== ':memory:') mkdirSync(dirname(path), { recursive: true });
-  const db = new Database(path);
+  let db: Database.Database;
   try {
+    if (path !== ':memory:') mkdirSync(dirname(path), { recursive: true });
+    db = new Database(path);
+  } catch (error) {
+    throw refusalFor(path, error);
+  }
+  try {
+    checkDatabaseFile(db, path);
     db.pragma('journal_mode = WAL');
     // FULL: each commit survives a power cut too, not only a crash of the process; the
     // service writes rarely, so the extra sync costs nothing noticeable.
@@ -59,6 +71,11 @@ export function openStore(path: string): Store {
     const interruptedAtOpen = runs.interruptUnfinished();
     const maps = new MapRunRepository(db);
     const mapRunsInterruptedAtOpen = maps.interruptUnfinished();
+    // total_changes() counts the rows this connection has written: once it moves past its
+    // value at the failure, a write has succeeded since and there is room again.
+    const totalChanges = db.prepare('SELECT total_changes() AS n');
+    const changesNow = () => (totalChanges.get() as { n: number }).n;
+    let changesAtFull: number | undefined;
     return {
       db,
       studies: new StudyRepository(db),
@@ -71,10 +88,17 @@ export function openStore(path: string): Store {
       transaction: (work) => db.transaction(work)(),
       integrityCheck: () => (db.pragma('integrity_check') as { integrity_check: string }[]).map((r) => r.integrity_check).join('; '),
       ping: () => (db.prepare('SELECT 1 AS one').get() as { one: number }).one === 1,
+      noteWriteFailure: (error) => {
+        if (isDiskFull(error)) changesAtFull = changesNow();
+      },
+      diskFull: () => {
+        if (changesAtFull !== undefined && changesNow() !== changesAtFull) changesAtFull = undefined;
+        return changesAtFull !== undefined;
+      },
       close: () => db.close(),
     };
   } catch (error) {
     db.close();
-    throw error;
+    throw refusalFor(path, error);
   }
 }

@@ -91,6 +91,18 @@ export class StudyRepository {
     return changed ? this.get(id) : undefined;
   }
 
+  /**
+   * Reads the study, lets `change` build the write from what it read, and writes it, all in one
+   * transaction: nothing saved between the read and the write can be overwritten unseen.
+   * Undefined if there is no such study; whatever `change` throws leaves the study as it was.
+   */
+  update(id: string, change: (current: StudyRecord) => StudyWrite): StudyRecord | undefined {
+    return this.#db.transaction(() => {
+      const current = this.get(id);
+      return current === undefined ? undefined : this.replace(id, change(current));
+    })();
+  }
+
   /** Deletes a study with its files and runs; false if there was none. */
   delete(id: string): boolean {
     return this.#db.transaction(() => this.#delete.run(id).changes > 0)();

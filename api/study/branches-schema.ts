@@ -52,7 +52,9 @@ export function readBranches(
       ok = false;
       continue;
     }
-    branches.forEach((branch, i) => {
+    // Model names are matched in any case and kept as the catalog spells them.
+    const named = branches.map((branch) => ({ ...branch, model: models.find(branch.model)?.name ?? branch.model }));
+    named.forEach((branch, i) => {
       const modelPath = [...settingPath, i, 'model'];
       const model = models.find(branch.model);
       if (!model) {
@@ -64,7 +66,7 @@ export function readBranches(
         issues.add(modelPath, `${model.name} is for ${model.settings.join(' and ')} earthquakes; expected a model for ${setting} earthquakes`);
         ok = false;
       }
-      if (branches.findIndex((b) => b.model === branch.model) !== i) {
+      if (named.findIndex((b) => b.model === branch.model) !== i) {
         issues.add(modelPath, `${branch.model} is listed twice; expected each model once per setting`);
         ok = false;
       }
@@ -82,7 +84,7 @@ export function readBranches(
       issues.add(settingPath, `expected weights summing to 1 (within ${WEIGHT_SUM_TOLERANCE}), got ${Number(sum.toPrecision(12))}`);
       ok = false;
     }
-    out[setting] = branches;
+    out[setting] = named;
   }
   return ok ? out : undefined;
 }

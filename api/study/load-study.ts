@@ -10,6 +10,7 @@ import { readSettings } from './settings-schema.ts';
 import { MAX_STUDY_VERTICES, readSourceGeometry, vertexCount } from './source-geometry.ts';
 import { readSources } from './source-schema.ts';
 import { checkRuptureEstimate } from './rupture-estimate.ts';
+import { checkStudyExtent } from './study-extent.ts';
 
 export const STUDY_KEYS = ['name', 'communities', 'sources', 'groundMotion', 'settings', 'outline', 'terrain'] as const;
 
@@ -50,6 +51,8 @@ export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
   // The terrain grid's file name; the CLI reads it beside the study, the service in its terrain folder.
   const terrain = doc.terrain === undefined ? undefined : issues.parse(text(300, 'the file name of a GeoTIFF or ESRI ASCII elevation grid'), doc.terrain, ['terrain']);
   // Only on a study without other problems: the valid sources then keep their feature order.
+  // The extent first: beyond it the local frame, and with it the estimates, do not hold.
+  if (issues.issues.length === 0) checkStudyExtent(communities, sources, outline, issues);
   if (issues.issues.length === 0 && settings) checkRuptureEstimate(sources, settings, issues);
 
   if (issues.issues.length > 0 || name === undefined || !settings || !groundMotion || communities.length === 0) {

@@ -1,5 +1,6 @@
 import * as turf from '@turf/turf';
 import type { Recurrence, Settings, Source } from '../engine/model.ts';
+import { faultPlaneCount } from './fault-plane-estimate.ts';
 import type { IssueList } from './issues.ts';
 
 /**
@@ -9,6 +10,15 @@ import type { IssueList } from './issues.ts';
  * 1 km cells and 0.01-unit magnitude bins) asks for 10^8 ruptures and holds a worker for hours.
  */
 export const MAX_RUPTURES = 1_000_000;
+
+/**
+ * Most rupture planes a study's fault ruptures may hold, counted as they will be built
+ * (fault-plane-estimate.ts). A floating rupture carries one plane per trace segment it
+ * covers, so a trace of thousands of short segments multiplies the memory and the distance
+ * work of every rupture: 1,000 zig-zag vertices took 3 GB and close to a minute to validate.
+ * The demo coast holds about 5.5 x 10^4 planes; the limit leaves it forty times that.
+ */
+export const MAX_RUPTURE_PLANES = 2_000_000;
 
 /** Magnitude bins of a recurrence at `stepM` (recurrence/magnitude-bins.ts makes at most this many). */
 function binCount(recurrence: Recurrence, stepM: number): number {
@@ -50,12 +60,36 @@ export function checkRuptureEstimate(sources: readonly Source[], settings: Setti
     total += count;
     if (count > largest.count) largest = { index, count };
   });
-  if (total <= MAX_RUPTURES) return;
+  if (total <= MAX_RUPTURES) {
+    checkPlaneEstimate(sources, settings, issues);
+    return;
+  }
   const id = sources[largest.index]?.id ?? '';
   issues.add(
     ['sources'],
     `the sources would make up to about ${Math.round(total)} ruptures, over the limit of ${MAX_RUPTURES} ruptures per study ` +
       `(the most from sources.features[${largest.index}] "${id}", up to about ${Math.round(largest.count)}); ` +
       'expected fewer: use a larger settings.magnitudeStep, settings.ruptureSpacingKm or settings.zoneCellKm, or smaller zones',
+  );
+}
+
+/** Refuses a study whose fault ruptures would hold more than MAX_RUPTURE_PLANES planes, naming the largest fault. */
+function checkPlaneEstimate(sources: readonly Source[], settings: Settings, issues: IssueList): void {
+  let total = 0;
+  let largest = { index: 0, count: 0 };
+  sources.forEach((source, index) => {
+    if (source.kind !== 'fault') return;
+    const count = faultPlaneCount(source, settings);
+    total += count;
+    if (count > largest.count) largest = { index, count };
+  });
+  if (total <= MAX_RUPTURE_PLANES) return;
+  const source = sources[largest.index];
+  const vertices = source?.kind === 'fault' ? source.trace.length : 0;
+  issues.add(
+    ['sources'],
+    `the fault ruptures would hold about ${total} rupture planes (one per trace segment a rupture covers), over the limit of ${MAX_RUPTURE_PLANES} per study ` +
+      `(the most from sources.features[${largest.index}] "${source?.id ?? ''}", ${largest.count} planes from a trace of ${vertices} vertices); ` +
+      'expected fewer: simplify the fault traces to fewer, longer segments, or use a larger settings.ruptureSpacingKm or settings.magnitudeStep',
   );
 }

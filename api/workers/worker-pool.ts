@@ -16,15 +16,19 @@ export function defaultPoolSize(cores: number = availableParallelism()): number 
 /**
  * A worker thread does not inherit tsx's loader from a parent started with `tsx` or
  * `node --import tsx` (checked with tsx 4.23 on Node 20: the thread fails with "Unknown file
- * extension .ts", also with execArgv passed explicitly). So each thread registers tsx itself,
- * then imports the TypeScript worker module.
+ * extension .ts", also with execArgv passed explicitly). So a thread running from source
+ * registers tsx itself, then imports the TypeScript worker module; a thread of the compiled
+ * build (dist/, `npm run build`) loads its JavaScript module directly, with no loader.
  */
-const TSX_API_URL = import.meta.resolve('tsx/esm/api');
-
 function startThread(moduleUrl: URL, name: string): Worker {
-  const bootstrap = `import(${JSON.stringify(TSX_API_URL)}).then((tsx) => { tsx.register(); return import(${JSON.stringify(moduleUrl.href)}); });`;
+  if (!/\.tsx?$/.test(moduleUrl.pathname)) return new Worker(moduleUrl, { name });
+  const tsxApiUrl = import.meta.resolve('tsx/esm/api');
+  const bootstrap = `import(${JSON.stringify(tsxApiUrl)}).then((tsx) => { tsx.register(); return import(${JSON.stringify(moduleUrl.href)}); });`;
   return new Worker(bootstrap, { eval: true, name });
 }
+
+/** The worker module beside this one: run-worker.ts from source, run-worker.js once compiled. */
+const RUN_WORKER_URL = new URL(`./run-worker${import.meta.url.endsWith('.ts') ? '.ts' : '.js'}`, import.meta.url);
 
 export interface TaskEvents {
   /** The worker took the task (ISO time). */
@@ -104,7 +108,7 @@ export class WorkerPool {
   constructor(options: WorkerPoolOptions = {}) {
     this.size = options.size ?? defaultPoolSize();
     if (!Number.isInteger(this.size) || this.size < 1) throw new RangeError(`expected a pool size of at least 1 thread, got ${this.size}`);
-    this.#workerUrl = options.workerUrl ?? new URL('./run-worker.ts', import.meta.url);
+    this.#workerUrl = options.workerUrl ?? RUN_WORKER_URL;
     this.#cancelGraceMs = options.cancelGraceMs ?? DEFAULT_CANCEL_GRACE_MS;
     this.#name = options.name ?? 'tremora-worker';
     this.#log = options.log ?? ((message, error) => console.error(`[${this.#name}] ${message}`, error ?? ''));

@@ -27,4 +27,15 @@ describe('ISO 8601 times', () => {
     expect(parseIsoTimeMs('2021-01-01T24:00:00Z').ok).toBe(false);
     expect(parseIsoTimeMs('2021-01-01T00:00:00+15:00').ok).toBe(false);
   });
+
+  it('read years 0 to 99 as written, not as 1900 to 1999', () => {
+    // The check values come from the ECMA-262 date-time string format (section 21.4.1.32),
+    // which reads a four-digit year as written, independently of the code under test.
+    for (const text of ['0050-06-01T00:00:00Z', '0099-12-31T23:59:59Z', '0001-01-01T00:00:00Z', '0000-02-29T12:00:00Z']) {
+      expect(ms(text), text).toBe(new Date(text).getTime());
+      expect(new Date(ms(text)).toISOString().slice(0, 19), text).toBe(text.slice(0, 19));
+    }
+    // Year 0 of the proleptic Gregorian calendar is a leap year (divisible by 400); 100 is not.
+    expect(parseIsoTimeMs('0100-02-29').ok).toBe(false);
+  });
 });

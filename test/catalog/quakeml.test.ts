@@ -29,6 +29,12 @@ describe('QuakeML 1.2', () => {
     expect(load.summary).toEqual({ loaded: 2, rejected: 3, byMagnitudeType: { Mww: 1, ML: 1 }, nonMoment: 1 });
   });
 
+  it('keeps an event whose type is written "null" (no type given), as it keeps one without a type', () => {
+    const nullType = parseQuakeMl(fixture.replace('<type>earthquake</type>', '<type>null</type>'));
+    expect(nullType.events.map((e) => e.id)).toContain('smi:local/event/1');
+    expect(nullType.rejected.map((r) => r.reasons.join(' '))).not.toContain('type: "null" is not an earthquake');
+  });
+
   it('refuses text that is not well-formed XML, with the line', () => {
     expect(() => parseQuakeMl('<quakeml>\n<eventParameters>\n</quakeml>')).toThrow(/line 3: expected well-formed QuakeML XML/);
     expect(() => parseQuakeMl('<other/>')).toThrow(/eventParameters/);

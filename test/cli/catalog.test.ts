@@ -101,7 +101,8 @@ describe('tremora catalog fit', () => {
     expect(bins.map((b) => b.cumulativeCount)).toEqual([12, 8, 7, 5, 4, 3, 3, 2, 2, 1, 1]);
     bins.forEach((b) => expectRelative(b.cumulativeAnnualRate, b.cumulativeCount / SPAN_YEARS, 1e-12, `cumulative count / T at ${b.lowerEdge}`));
     expect(fit.recurrence).toBeNull();
-    expect(fit.notes).toContain('no recurrence: give the largest magnitude the zone can host (mMax; --m-max on the command line), which a catalog cannot tell');
+    // The command line names its own options, not the service's keys.
+    expect(fit.notes).toContain('no recurrence: give the largest magnitude the zone can host (--m-max), which a catalog cannot tell');
   });
 
   it('reads every magnitude type with --all-magnitudes, keeps aftershocks with --no-decluster', async () => {
@@ -142,6 +143,13 @@ describe('tremora catalog fit', () => {
     expect(out[0]).toBe(
       'Catalog fit.csv (csv): Loaded 14 events; rejected 0. 1 event has a magnitude type other than moment magnitude (ML 1); analyses use moment magnitudes only unless asked to use all.',
     );
+  });
+
+  it('with completeness periods and --m-max, says that --m-max changes the Weichert b, and names no service key', async () => {
+    const fit = await runJson<FitJson & { notes: string[]; warnings: string[] }>('fit', fitCsv, '--m-max', '7', '--periods', '4.0@2001-01-01');
+    expect(fit.recurrence?.method).toBe('weichert');
+    expect(fit.notes).toContain('the Weichert (1980) fit counts every magnitude bin up to --m-max 7, the empty ones too, so --m-max changes its b-value');
+    expect([...fit.notes, ...fit.warnings].join(' ')).not.toMatch(/startTime|endTime|mMax\b/);
   });
 
   it('takes the observation span from --start and --end', async () => {
@@ -191,7 +199,7 @@ describe('tremora catalog fit', () => {
       [['fit', fitCsv, '--periods', '4.2@2001-01-15,big@2005-01-01'], /--periods: expected .* got "big@2005-01-01" \(pair 2\)/],
       [['fit', fitCsv, '--periods', '4.2@last spring'], /--periods: pair 1: expected an ISO 8601 time/],
       [['fit'], /expected exactly one CATALOG file/],
-      [['fit', fitCsv, '--bogus'], /Unknown option '--bogus'/],
+      [['fit', fitCsv, '--bogus'], /unknown option "--bogus"/],
       [['sum', fitCsv], /expected "fit" or "felt" after "catalog", got "sum"/],
     ];
     for (const [argv, message] of cases) {

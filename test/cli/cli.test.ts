@@ -66,6 +66,36 @@ describe('tremora check', () => {
     expect((await run('check', DEMO, '--bogus')).code).toBe(2);
     expect((await run('--help')).code).toBe(0);
   });
+
+  it('says a mistyped option, a missing value and a stray argument in its own words, quotes balanced', async () => {
+    const mistyped = await run('screen', TINY, '--ot', 'x.json');
+    expect(mistyped.code).toBe(2);
+    expect(mistyped.err).toContain('tremora screen: unknown option "--ot"; the options are listed below');
+    const missing = await run('screen', TINY, '--out');
+    expect(missing.err).toContain('tremora screen: option "--out" needs a value');
+    const flag = await run('screen', TINY, '--json=yes');
+    expect(flag.err).toContain('tremora screen: option "--json" takes no value');
+    const stray = await run('motion', 'extra', '--model', 'Cornell79');
+    expect(stray.err).toContain('tremora motion: unexpected argument "extra"');
+    for (const { err } of [mistyped, missing, flag, stray]) {
+      const firstLine = err.split('\n')[0] ?? '';
+      expect(firstLine).not.toMatch(/'/);
+      expect((firstLine.match(/"/g) ?? []).length % 2).toBe(0);
+    }
+  });
+
+  it('lists each verb in the overall help with the first line of its own help', async () => {
+    const { VERB_SYNOPSES } = await import('../../api/cli.ts');
+    const overall = (await run('--help')).out;
+    for (const [verb, synopsis] of Object.entries(VERB_SYNOPSES)) {
+      expect(overall).toContain(synopsis);
+      expect((await run(verb, '--help')).out.split('\n')[0]).toBe(synopsis);
+    }
+  });
+
+  it('points to no file the project does not have', async () => {
+    for (const verb of ['screen', 'check', 'scenario', 'map', 'motion', 'catalog']) expect((await run(verb, '--help')).out).not.toContain('DESIGN.md');
+  });
 });
 
 describe('tremora motion --json', () => {
@@ -85,6 +115,31 @@ describe('tremora motion --json', () => {
     const unknown = await run('motion', '--model', 'NOPE', '--magnitude', '6', '--rjb', '20');
     expect(unknown.code).toBe(2);
     expect(unknown.err).toContain('unknown ground-motion model "NOPE"');
+  });
+
+  it('for the subduction model: the hypocentral distance it used, only the assumptions it reads, a derived PGV said so', async () => {
+    const slab = await run('motion', '--model', 'AGA16', '--magnitude', '7', '--rjb', '30', '--setting', 'intraslab');
+    expect(slab.code).toBe(0);
+    // Default intraslab hypocentral depth 60 km: Rhypo = sqrt(30² + 60²) = 67.08 km (geometry).
+    expect(slab.out).toContain("distance in the model's equations: Rhypo (hypocentral) 67.1 km");
+    expect(slab.out).toContain('Rhypo 67.1 km');
+    const iface = await run('motion', '--model', 'AGA16', '--magnitude', '8', '--rjb', '0', '--rrup', '40', '--setting', 'interface');
+    expect(iface.out).toContain("distance in the model's equations: Rrup 40 km");
+    const assumed = iface.out.split('\n').find((l) => l.startsWith('assumed:')) ?? '';
+    // Abrahamson et al. (2016) interface equations read M, Rrup and Vs30 only.
+    expect(assumed).not.toMatch(/hypoDepthKm|dipDeg|widthKm|rxKm|mechanism/);
+    expect(iface.out).toMatch(/not read by AGA16 for interface earthquakes: .*hypoDepthKm/);
+    expect(iface.out).toMatch(/PGV .*derived, not predicted by the model: PGV derived from SA\(0\.5 s\) \/ 20 \(Bommer & Alarcón 2006\)/);
+    const json = JSON.parse((await run('motion', '--model', 'AGA16', '--magnitude', '8', '--rjb', '0', '--rrup', '40', '--setting', 'interface', '--json')).out);
+    expect(json.distanceUsed).toBe('rrupKm');
+    expect(json.measures.PGV.derived).toMatch(/Bommer & Alarcón 2006/);
+    expect(json.measures.PGA.derived).toBeNull();
+  });
+
+  it('takes a model name in any case', async () => {
+    const lower = JSON.parse((await run('motion', '--model', 'cornell79', '--magnitude', '6.5', '--rjb', '20', '--json')).out);
+    expect(lower.model).toBe('Cornell79');
+    expectRelative(lower.measures.PGA.median, Math.exp(cornellLnPga(6.5, Math.hypot(20, 10))), 1e-12, 'Cornell et al. (1979) via Baker (2008)');
   });
 });
 
@@ -116,6 +171,27 @@ describe('tremora screen', () => {
     const [header, row] = (await readFile(file, 'utf8')).split('\r\n');
     expect(header?.split(',').slice(0, 3)).toEqual(['communityId', 'name', 'lon']);
     expect(row?.startsWith('east-cove,East Cove,')).toBe(true);
+  });
+
+  it('writes the file with --json --out as well as printing the JSON', async () => {
+    const dir = await mkdtemp(join(tmpdir(), 'tremora-cli-'));
+    const file = join(dir, 'out.json');
+    const { code, out } = await run('screen', TINY, '--json', '--out', file);
+    expect(code).toBe(0);
+    const written = JSON.parse(await readFile(file, 'utf8'));
+    expect(written.communities[0].name).toBe('East Cove');
+    expect(JSON.parse(out).communities[0].curves).toEqual(written.communities[0].curves);
+  });
+
+  it("takes the study's model names in any case and keeps the catalog's spelling", async () => {
+    const dir = await mkdtemp(join(tmpdir(), 'tremora-cli-'));
+    const study = JSON.parse(await readFile(TINY, 'utf8'));
+    study.groundMotion.crustal[0].model = 'CORNELL79';
+    const file = join(dir, 'upper.study.json');
+    await writeFile(file, JSON.stringify(study));
+    const { code, out } = await run('screen', file, '--json');
+    expect(code).toBe(0);
+    expect(JSON.parse(out).provenance.models.crustal).toEqual([{ model: 'Cornell79', weight: 1 }]);
   });
 });
 

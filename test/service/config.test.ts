@@ -12,7 +12,20 @@ describe('readConfig', () => {
       databasePath: '/srv/tremora/.tremora/tremora.db',
       workers: 3,
       workBudget: DEFAULT_WORK_BUDGET,
+      screenDemo: true,
+      allowedHosts: ['localhost', '127.0.0.1', '[::1]'],
     });
+  });
+
+  it('leaves the demo unscreened at first start with TREMORA_SCREEN_DEMO=0, and refuses other values', () => {
+    expect(readConfig({ TREMORA_SCREEN_DEMO: '0' }).screenDemo).toBe(false);
+    expect(readConfig({ TREMORA_SCREEN_DEMO: '1' }).screenDemo).toBe(true);
+    expect(() => readConfig({ TREMORA_SCREEN_DEMO: 'no' })).toThrow('TREMORA_SCREEN_DEMO must be a whole number from 0 to 1, got "no"');
+  });
+
+  it('listens on an IPv6 address written with or without brackets', () => {
+    expect(readConfig({ HOST: '[::1]' }).host).toBe('::1');
+    expect(readConfig({ HOST: '::1' }).host).toBe('::1');
   });
 
   it('reads PORT, TREMORA_DB, TREMORA_WORKERS and TREMORA_WORK_BUDGET', () => {

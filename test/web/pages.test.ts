@@ -35,6 +35,13 @@ function expectNoInlineCode(html: string): void {
 }
 
 describe('pages', () => {
+  test('the footer says the data are invented on the demo study only', async () => {
+    const demoNote = translator('en').t('footer.demo');
+    expect(await (await get(`/studies/${demoId}`)).text()).toContain(demoNote);
+    expect(await (await get(`/studies/${smallId}`)).text()).not.toContain(demoNote);
+    expect(await (await get('/')).text()).not.toContain(demoNote);
+  });
+
   test('home lists the studies, with the security policy and no inline code', async () => {
     const response = await get('/');
     expect(response.status).toBe(200);

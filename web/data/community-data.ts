@@ -41,6 +41,9 @@ export interface CommunityPageData {
 /** Sources listed by name before the rest are summed. */
 export const TOP_SOURCES = 4;
 
+/** The smallest share listed: it shows as 1% (shares are shown as whole percentages). */
+export const SHOWN_SHARE = 0.005;
+
 /** What the community page shows, from the study and the run's result for the community. */
 export function communityPageData(study: Study, community: Community, result: CommunityResult): CommunityPageData {
   const years = leadHorizonYears(study.settings.horizonsYears);
@@ -61,9 +64,11 @@ export function communityPageData(study: Study, community: Community, result: Co
   const firstPeriod = returnPeriods[0];
   const deagg = firstPeriod === undefined ? undefined : result.deaggregation[String(firstPeriod)];
   const ordered = [...(deagg?.bySource ?? [])].sort((a, b) => b.share - a.share);
-  const sources: SourceShare[] = ordered.slice(0, TOP_SOURCES).map((s) => ({ sourceId: s.sourceId, name: s.name, share: s.share }));
-  const rest = ordered.slice(TOP_SOURCES).reduce((sum, s) => sum + s.share, 0);
-  if (rest > 0) sources.push({ sourceId: null, name: '', share: rest });
+  // A source (or the rest together) is listed only when its share shows as 1% or more.
+  const named = ordered.slice(0, TOP_SOURCES).filter((s) => s.share >= SHOWN_SHARE);
+  const sources: SourceShare[] = named.map((s) => ({ sourceId: s.sourceId, name: s.name, share: s.share }));
+  const rest = ordered.slice(named.length).reduce((sum, s) => sum + s.share, 0);
+  if (rest >= SHOWN_SHARE) sources.push({ sourceId: null, name: '', share: rest });
   const curve = result.curves[INTENSITY_MEASURE];
   let spread: CommunityPageData['spread'];
   if (curve?.branches && curve.branches.length > 1 && firstPeriod !== undefined) {

@@ -92,7 +92,8 @@ export function sortRanked(rows: readonly RankedCommunity[], key: SortKey, direc
       case 'people':
         return r.population;
       case 'fault':
-        return r.nearestFault?.distanceKm;
+        // Results saved before faults carried rrupKm sort by their Joyner-Boore distance.
+        return r.nearestFault === undefined ? undefined : (r.nearestFault.rrupKm ?? r.nearestFault.distanceKm);
     }
   };
   return [...rows].sort((a, b) => {

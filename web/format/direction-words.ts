@@ -13,16 +13,30 @@ export const NEAR_KM = 1;
 
 export type PlaceFrom =
   | { readonly kind: 'here' }
+  | { readonly kind: 'below'; readonly depthKm: number }
   | { readonly kind: 'away'; readonly distanceKm: number; readonly compass: Compass };
 
 /**
- * Where something is from a community: "here" under NEAR_KM (a fault beneath the place), or a
- * whole number of km (rounded to the nearest km) and the compass point towards it.
+ * A depth as said: to the nearest km under 20 km, to the nearest 5 km from 20 km (a fault's
+ * depth is known to a few km at best; common practice).
  */
-export function placeFrom(distanceKm: number, bearingDeg: number): PlaceFrom {
+export function roundDepthKm(depthKm: number): number {
+  return depthKm < 20 ? Math.round(depthKm) : 5 * Math.round(depthKm / 5);
+}
+
+/**
+ * Where something is from a community: under NEAR_KM away, "below" at its depth when it lies
+ * under the place (a dipping fault beneath it; `depthBelowKm` given and said as 1 km or more),
+ * else "here" (beneath or right beside the place); further away, a whole number of km (rounded
+ * to the nearest km) and the compass point towards it.
+ */
+export function placeFrom(distanceKm: number, bearingDeg: number, depthBelowKm?: number): PlaceFrom {
   if (!(Number.isFinite(distanceKm) && distanceKm >= 0)) throw new RangeError(`expected a distance >= 0 km, got ${distanceKm}`);
   if (!Number.isFinite(bearingDeg)) throw new RangeError(`expected a bearing in degrees, got ${bearingDeg}`);
-  if (distanceKm < NEAR_KM) return { kind: 'here' };
+  if (distanceKm < NEAR_KM) {
+    if (depthBelowKm !== undefined && Number.isFinite(depthBelowKm) && roundDepthKm(depthBelowKm) >= 1) return { kind: 'below', depthKm: roundDepthKm(depthBelowKm) };
+    return { kind: 'here' };
+  }
   return { kind: 'away', distanceKm: Math.round(distanceKm), compass: compassPoint(bearingDeg) };
 }
 

@@ -1,4 +1,5 @@
 import type { Child } from 'hono/jsx';
+import { isDemoStudy } from '../data/demo-study.ts';
 import { LANGUAGES, type Translator } from '../text/translator.ts';
 import { Caution } from './caution.tsx';
 
@@ -105,7 +106,10 @@ export function PageShell(props: PageShellProps) {
           <p class="footer-caution">
             <strong>{tr.text('caution.short')}</strong> <a href="/limits">{tr.text('caution.limitsLink')}</a>.
           </p>
-          <p>{tr.text('footer.version', { version: props.toolVersion })}</p>
+          <p>
+            {tr.text('footer.version', { version: props.toolVersion })}
+            {isDemoStudy(props.study) && <> {tr.text('footer.demo')}</>}
+          </p>
         </footer>
       </body>
     </html>

@@ -79,7 +79,8 @@ export function StudyMap(props: StudyMapProps) {
       <defs>
         <ZoneHatch id={hatch} />
       </defs>
-      <rect width={frame.width} height={frame.height} fill={MAP_COLOURS.sea} />
+      {/* Sea only where an outline says where the land is; without one the background is blank. */}
+      <rect width={frame.width} height={frame.height} fill={(study.outline?.length ?? 0) > 0 ? MAP_COLOURS.sea : PAPER} />
       <g class="map-land">
         {(study.outline ?? []).map((ring) => (
           <path d={frame.path(polygonOf([ring]))} fill={MAP_COLOURS.land} stroke={MAP_COLOURS.coast} stroke-width={1.2} />
@@ -156,7 +157,7 @@ export function StudyMap(props: StudyMapProps) {
           const label = communityLabel(i);
           return (
             <g data-community={c.id}>
-              <BandMarker shape={style?.shape ?? 'circle'} fill={style?.fill ?? PAPER} size={size} x={x} y={y} />
+              <BandMarker shape={style?.shape ?? 'circle'} fill={style?.fill ?? PAPER} size={size} x={x} y={y} halo={props.hazardLayer !== undefined} />
               {label && (
                 <text x={label.x} y={label.y} text-anchor={label.anchor} font-size={props.highlight === c.id ? 14 : 12} font-weight={props.highlight === c.id ? 'bold' : undefined} fill={INK} paint-order="stroke" stroke={PAPER} stroke-width={3} class="map-label">
                   {`${c.name}${props.labelSuffix?.get(c.id) ?? ''}`}
@@ -191,7 +192,11 @@ export function StudyMapLegend(props: { readonly tr: Translator; readonly idPref
       </svg>
       <ul>
         {(study.outline?.length ?? 0) > 0 && <li>{swatch(<rect x={1} y={1} width={26} height={14} fill={MAP_COLOURS.land} stroke={MAP_COLOURS.coast} />)} {tr.text('map.land')}</li>}
-        <li>{swatch(<rect x={1} y={1} width={26} height={14} fill={MAP_COLOURS.sea} stroke={MAP_COLOURS.grid} />)} {tr.text('map.sea')}</li>
+        {(study.outline?.length ?? 0) > 0 ? (
+          <li>{swatch(<rect x={1} y={1} width={26} height={14} fill={MAP_COLOURS.sea} stroke={MAP_COLOURS.grid} />)} {tr.text('map.sea')}</li>
+        ) : (
+          <li>{swatch(<rect x={1} y={1} width={26} height={14} fill={PAPER} stroke={MAP_COLOURS.grid} />)} {tr.text('map.noOutline')}</li>
+        )}
         {has('fault', 'interface') && (
           <li>
             {swatch(

@@ -45,7 +45,7 @@ export function FrequencyMagnitudePlot(props: { readonly tr: Translator; readonl
         orientation="left"
         ticks={logTicks(y)}
         position={y}
-        label={(v) => tickLabel(v, tr.locale)}
+        label={(v) => tickLabel(v, tr.locale, logTicks(y))}
         across={[MARGIN.left, width - MARGIN.right]}
         at={MARGIN.left}
         title={tr.t('plot.perYear')}

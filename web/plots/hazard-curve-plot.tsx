@@ -56,7 +56,7 @@ export function HazardCurvePlot(props: HazardCurvePlotProps) {
         orientation="bottom"
         ticks={logTicks(x)}
         position={x}
-        label={(v) => tickLabel(v, tr.locale)}
+        label={(v) => tickLabel(v, tr.locale, logTicks(x))}
         across={[MARGIN.top, height - MARGIN.bottom]}
         at={height - MARGIN.bottom}
         title={tr.t('plot.pga')}
@@ -67,7 +67,7 @@ export function HazardCurvePlot(props: HazardCurvePlotProps) {
         orientation="left"
         ticks={logTicks(y)}
         position={y}
-        label={(v) => tickLabel(v, tr.locale)}
+        label={(v) => tickLabel(v, tr.locale, logTicks(y))}
         across={[MARGIN.left, width - MARGIN.right]}
         at={MARGIN.left}
         title={tr.t('plot.annualRate')}

@@ -21,9 +21,20 @@ export function logTicks(scale: ScaleLogarithmic<number, number>): number[] {
   return ticks;
 }
 
-/** Short label of a positive number for an axis: 0.001, 0.02, 1, 10, 1e-5 below 0.0001. */
-export function tickLabel(value: number, locale: string): string {
-  if (value < 1e-4) return `10${superscript(Math.round(Math.log10(value)))}`;
+/** Ticks below this make an axis label every tick as a power of ten. */
+export const POWER_LABELS_BELOW = 1e-3;
+
+/**
+ * Short label of a positive number for an axis, in one style per axis (`axisTicks`, the axis's
+ * ticks): decimals (0.001, 0.02, 1, 10) when every tick is at least 0.001, else every tick as a
+ * power of ten (10⁻⁵, 10⁻⁴, 2×10⁻⁴, 10⁰), so one axis never mixes 0.0001 with 10⁻⁵.
+ */
+export function tickLabel(value: number, locale: string, axisTicks: readonly number[] = [value]): string {
+  if (axisTicks.some((t) => t < POWER_LABELS_BELOW)) {
+    const power = Math.floor(Math.log10(value) + 1e-9);
+    const mantissa = Math.round(value / 10 ** power);
+    return `${mantissa === 1 ? '' : `${mantissa}×`}10${superscript(power)}`;
+  }
   return new Intl.NumberFormat(locale, { maximumSignificantDigits: 2 }).format(value);
 }
 

@@ -74,6 +74,21 @@ export function editorPages(app: Hono, kit: PageKit): void {
   const write = (data: StudyData & { ok: true }, outcome: EditOutcome & { ok: true }) =>
     ctx.store.studies.replace(data.record.id, { name: outcome.name, document: JSON.stringify(outcome.document, null, 2), ...(outcome.file ? { file: outcome.file } : {}) });
 
+  /**
+   * Reads the study again once the posted body has arrived and runs `edit` on it in one
+   * transaction with its write: a save made while the body was on its way is built upon, not lost.
+   */
+  const afterBody = (c: Context, edit: (data: StudyData & { ok: true }) => Response | Promise<Response>): Response | Promise<Response> => {
+    // A transaction's function may not return a promise (better-sqlite3), and a page rendered
+    // asynchronously is one; the answer is kept aside and returned once the write is committed.
+    let answer: Response | Promise<Response> | undefined;
+    ctx.store.transaction(() => {
+      const fresh = load(c);
+      answer = 'response' in fresh ? fresh.response : edit(fresh.data);
+    });
+    return answer as Response | Promise<Response>;
+  };
+
   const editor = (c: Context, data: StudyData & { ok: true }, extra: { problem?: UploadProblem; notice?: readonly InputIssue[] } = {}) => {
     const saved = c.req.query('saved') === '1';
     return kit.render(
@@ -128,10 +143,12 @@ export function editorPages(app: Hono, kit: PageKit): void {
     const loaded = load(c);
     if ('response' in loaded) return loaded.response;
     const values = postedForm(await c.req.parseBody());
-    const outcome = saveCommunity(loaded.data.inputs, loaded.data.study.communities, values, undefined, ctx.models);
-    if (!outcome.ok) return communityForm(c, loaded.data, undefined, values, outcome.issues);
-    write(loaded.data, outcome);
-    return c.redirect(`/studies/${loaded.data.record.id}/edit?saved=1`, 303);
+    return afterBody(c, (data) => {
+      const outcome = saveCommunity(data.inputs, data.study.communities, values, undefined, ctx.models);
+      if (!outcome.ok) return communityForm(c, data, undefined, values, outcome.issues);
+      write(data, outcome);
+      return c.redirect(`/studies/${data.record.id}/edit?saved=1`, 303);
+    });
   });
 
   app.get('/studies/:id/edit/communities/:cid', (c) => {
@@ -146,13 +163,15 @@ export function editorPages(app: Hono, kit: PageKit): void {
   app.post('/studies/:id/edit/communities/:cid', async (c) => {
     const loaded = load(c);
     if ('response' in loaded) return loaded.response;
-    const index = indexOf(loaded.data, c.req.param('cid'));
-    if (index < 0) return c.redirect(`/studies/${loaded.data.record.id}/edit`, 303);
     const values = postedForm(await c.req.parseBody());
-    const outcome = saveCommunity(loaded.data.inputs, loaded.data.study.communities, values, index, ctx.models);
-    if (!outcome.ok) return communityForm(c, loaded.data, index, values, outcome.issues);
-    write(loaded.data, outcome);
-    return c.redirect(`/studies/${loaded.data.record.id}/edit?saved=1`, 303);
+    return afterBody(c, (data) => {
+      const index = indexOf(data, c.req.param('cid'));
+      if (index < 0) return c.redirect(`/studies/${data.record.id}/edit`, 303);
+      const outcome = saveCommunity(data.inputs, data.study.communities, values, index, ctx.models);
+      if (!outcome.ok) return communityForm(c, data, index, values, outcome.issues);
+      write(data, outcome);
+      return c.redirect(`/studies/${data.record.id}/edit?saved=1`, 303);
+    });
   });
 
   app.post('/studies/:id/edit/communities/:cid/remove', (c) => {
@@ -173,10 +192,12 @@ export function editorPages(app: Hono, kit: PageKit): void {
     const file = fileField(await c.req.parseBody(), 'file');
     if (!file) return editor(c, loaded.data, { problem: { upload: kind, issues: [{ path: '(file)', message: tr.t('editor.upload.noFile') }] } });
     const text = await file.text();
-    const outcome = kind === 'communities' ? importCommunitiesCsv(loaded.data.inputs, text, ctx.models) : importSourcesGeoJson(loaded.data.inputs, text, ctx.models);
-    if (!outcome.ok) return editor(c, loaded.data, { problem: { upload: kind, issues: outcome.issues, text } });
-    write(loaded.data, outcome);
-    return c.redirect(`/studies/${loaded.data.record.id}/edit?saved=1`, 303);
+    return afterBody(c, (data) => {
+      const outcome = kind === 'communities' ? importCommunitiesCsv(data.inputs, text, ctx.models) : importSourcesGeoJson(data.inputs, text, ctx.models);
+      if (!outcome.ok) return editor(c, data, { problem: { upload: kind, issues: outcome.issues, text } });
+      write(data, outcome);
+      return c.redirect(`/studies/${data.record.id}/edit?saved=1`, 303);
+    });
   };
   app.post('/studies/:id/edit/communities-csv', upload('communities'));
   app.post('/studies/:id/edit/sources-geojson', upload('sources'));

@@ -44,10 +44,26 @@ export function pageKit(ctx: ServiceContext): PageKit {
   };
 }
 
-/** A same-origin path to return to: starts with one "/", no scheme or host; else "/". */
+/** Stands for this origin while a path is resolved as a browser would (a reserved name, RFC 2606). */
+const THIS_ORIGIN = 'http://this-origin.invalid';
+
+/**
+ * A same-origin path to return to, else "/". Browsers drop tabs and line breaks from a URL and
+ * read "\\" as "/" (WHATWG URL standard), so "/<tab>/other.example" would lead to another
+ * host: any control character or backslash is refused, then the path is resolved as a browser
+ * would and kept only if it stays on this origin. It comes back percent-encoded, so it is
+ * always a valid Location header.
+ */
 export function safeBackPath(back: string | undefined): string {
-  if (back === undefined || !back.startsWith('/') || back.startsWith('//') || back.includes('\\')) return '/';
-  return back;
+  if (back === undefined || !back.startsWith('/') || /[\u0000-\u001f\u007f\\]/.test(back)) return '/';
+  let url: URL;
+  try {
+    url = new URL(back, THIS_ORIGIN);
+  } catch {
+    return '/';
+  }
+  const path = `${url.pathname}${url.search}${url.hash}`;
+  return url.origin !== THIS_ORIGIN || path.startsWith('//') ? '/' : path;
 }
 
 /** A form field as text (multipart or urlencoded); files and absent fields are undefined. */

@@ -131,9 +131,18 @@ export function studyPages(app: Hono, kit: PageKit): void {
     const community = ranStudy?.communities.find((x) => x.id === communityId) ?? data.study.communities.find((x) => x.id === communityId);
     if (!community) return { kind: 'response' as const, response: notFound(c, tr.text('error.communityNotFound', { id: communityId })) };
     if (!screening || !result || !ranStudy) {
+      const latest = runs.latest;
+      const underWay = latest !== undefined && (latest.status === 'queued' || latest.status === 'running');
+      const text = underWay ? (
+        <>
+          {tr.text('community.runUnderWay', { percent: Math.round(latest.progress * 100) })} <a href={`/studies/${id}/runs/${latest.id}`}>{tr.text('overview.runningLink')}</a>
+        </>
+      ) : (
+        tr.text('community.noRun')
+      );
       return {
         kind: 'response' as const,
-      response: kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={community.name} text={tr.text('community.noRun')} />, 409),
+        response: kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={community.name} text={text} />, 409),
       };
     }
     const felt = feltData(ctx, ranStudy, studyCatalog(ctx, id));

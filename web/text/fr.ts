@@ -18,7 +18,8 @@ export const FR: Readonly<Partial<Record<TextKey, string>>> = {
   'nav.edit': 'Modifier l’étude',
   'lang.label': 'Langue',
   'lang.change': 'Changer',
-  'footer.version': 'Tremora {version}. Toutes les données de l’étude de démonstration sont inventées.',
+  'footer.version': 'Tremora {version}.',
+  'footer.demo': 'Toutes les données de cette étude de démonstration sont inventées.',
   'numbers.small': 'zéro|un|deux|trois|quatre|cinq|six|sept|huit|neuf|dix',
 
   'caution.title': 'Un dépistage, pas une valeur de calcul',

@@ -1,4 +1,5 @@
 import { jsx, type Child } from 'hono/jsx';
+import { intensityWords } from '../format/intensity-words.ts';
 import { EN, type TextKey } from './en.ts';
 import { FR } from './fr.ts';
 import { naturalFrequency, percentText } from '../format/natural-frequency.ts';
@@ -73,8 +74,10 @@ export interface Translator {
   count(value: number): string;
   /** "about 1 in 8 over the next 50 years (12%)" and its parts. */
   chance(probability: number): { readonly frequency: string; readonly percent: string };
-  /** "14 km to the north-east" or "beneath this place". */
-  place(distanceKm: number, bearingDeg: number): string;
+  /** An MMI value in words: "MMI VI" or "MMI VI, almost VII" (format/intensity-words.ts). */
+  mmi(value: number): string;
+  /** "14 km to the north-east", "about 40 km below this place" or "beneath or right beside this place". */
+  place(distanceKm: number, bearingDeg: number, depthBelowKm?: number): string;
   compass(point: Compass): string;
   date(iso: string | number): string;
 }
@@ -117,9 +120,14 @@ export function translator(lang: LanguageCode): Translator {
       const percent = p === '<0.1' ? t('chance.percentBelow', { p: self.number(0.1, 1) }) : t('chance.percent', { p: p.includes('.') ? self.number(Number(p), 1) : p });
       return { frequency, percent };
     },
-    place: (distanceKm, bearingDeg) => {
-      const where = placeFrom(distanceKm, bearingDeg);
+    mmi: (value) => {
+      const words = intensityWords(value);
+      return words.almost === undefined ? t('mmi.label', { roman: words.roman }) : t('mmi.almost', { roman: words.roman, next: words.almost });
+    },
+    place: (distanceKm, bearingDeg, depthBelowKm) => {
+      const where = placeFrom(distanceKm, bearingDeg, depthBelowKm);
       if (where.kind === 'here') return t('place.here');
+      if (where.kind === 'below') return t('place.below', { km: self.number(where.depthKm) });
       return t('place.away', { km: self.number(where.distanceKm), direction: self.compass(where.compass) });
     },
     compass: (point) => t(`compass.${point}` as TextKey),

@@ -149,6 +149,13 @@ export function CatalogView(props: CatalogViewProps) {
               mRef: tr.number(fit.referenceMagnitude, 2),
             })}
           </p>
+          {result.warnings.length > 0 && (
+            <ul class="problems fit-warnings">
+              {result.warnings.map((w) => (
+                <li>{tr.english(w)}</li>
+              ))}
+            </ul>
+          )}
           <figure class="plot-figure">
             <FrequencyMagnitudePlot tr={tr} data={result.frequencyMagnitude} mc={result.periods?.[0]?.magnitude ?? result.completeness.mc} idPrefix="fmd" />
             <figcaption>

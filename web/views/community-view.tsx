@@ -45,6 +45,7 @@ export function Headline(props: { readonly tr: Translator; readonly data: Commun
         {tr.text('community.headline', { name: props.name, chance: vii.frequency, years: data.years, percent: vii.percent })}
       </p>
       <p>{tr.text('community.headlineStrongWhat')}</p>
+      <p class="mmi-explain">{tr.text('mmi.explain')}</p>
       <p class="other-chances-title">{tr.text('community.otherChances', { years: data.years })}</p>
       <ul class="other-chances">
         {(['VI', 'VII', 'VIII'] as const).map((roman) => {
@@ -77,7 +78,7 @@ export function ShakingLevels(props: { readonly tr: Translator; readonly data: C
             ) : (
               <>
                 <p class="level-mmi" data-mmi={level.mmi}>
-                  {tr.text('community.levelMmi', { roman: level.roman ?? '', name: tr.text(mmiKey(level.mmiLevel, 'name')) })}
+                  {tr.text('community.levelMmi', { mmi: tr.mmi(level.mmi ?? level.mmiLevel), name: tr.text(mmiKey(level.mmiLevel, 'name')) })}
                 </p>
                 <p>
                   <strong>{tr.text('community.feels')}:</strong> {tr.text(mmiKey(level.mmiLevel, 'feel'))}
@@ -168,7 +169,7 @@ export function CommunityView(props: CommunityViewProps) {
           <ul class="faults">
             {result.nearestFaults.map((f) => (
               <li data-source={f.sourceId}>
-                <strong>{f.name}</strong>: {tr.place(f.distanceKm, f.bearingDeg)}
+                <strong>{f.name}</strong>: {tr.place(f.distanceKm, f.bearingDeg, f.depthBelowKm)}
               </li>
             ))}
           </ul>

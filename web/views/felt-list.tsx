@@ -60,7 +60,7 @@ export function FeltList(props: FeltListProps) {
                   <td class="numeric">{`M ${tr.number(e.magnitude, 1)}`}</td>
                   <td>{tr.place(e.distanceKm, e.bearingDeg)}</td>
                   <td>
-                    {tr.text('mmi.label', { roman: e.roman })} · {tr.text(`mmi.${Math.min(10, Math.max(1, Math.floor(e.mmi)))}.name` as 'mmi.1.name')}
+                    {tr.mmi(e.mmi)} · {tr.text(`mmi.${Math.min(10, Math.max(1, Math.floor(e.mmi)))}.name` as 'mmi.1.name')}
                   </td>
                 </tr>
               ))}

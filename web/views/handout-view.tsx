@@ -96,7 +96,7 @@ export function HandoutView(props: HandoutViewProps) {
                       <ul class="faults">
                         {result.nearestFaults.map((f) => (
                           <li>
-                            <strong>{f.name}</strong>: {tr.place(f.distanceKm, f.bearingDeg)}
+                            <strong>{f.name}</strong>: {tr.place(f.distanceKm, f.bearingDeg, f.depthBelowKm)}
                           </li>
                         ))}
                       </ul>

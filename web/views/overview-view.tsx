@@ -144,8 +144,8 @@ export function OverviewView(props: OverviewProps) {
                       <td class="numeric" data-key="people" data-value={r.population ?? ''}>
                         {r.population === undefined ? tr.text('overview.unknownPeople') : tr.number(r.population)}
                       </td>
-                      <td data-key="fault" data-value={r.nearestFault?.distanceKm ?? ''}>
-                        {r.nearestFault ? `${r.nearestFault.name}, ${tr.place(r.nearestFault.distanceKm, r.nearestFault.bearingDeg)}` : tr.text('overview.noFault')}
+                      <td data-key="fault" data-value={r.nearestFault === undefined ? '' : (r.nearestFault.rrupKm ?? r.nearestFault.distanceKm)}>
+                        {r.nearestFault ? `${r.nearestFault.name}, ${tr.place(r.nearestFault.distanceKm, r.nearestFault.bearingDeg, r.nearestFault.depthBelowKm)}` : tr.text('overview.noFault')}
                       </td>
                     </tr>
                   );

@@ -1,4 +1,5 @@
 import type { InputIssue } from '../../api/engine/errors.ts';
+import { intensityWords } from '../format/intensity-words.ts';
 import type { Study } from '../../api/engine/model.ts';
 import type { ScenarioResult } from '../../api/engine/scenario/index.ts';
 import { PageShell } from '../layout/page-shell.tsx';
@@ -81,7 +82,7 @@ export function ScenarioView(props: ScenarioViewProps) {
           <section aria-labelledby="scenario-map-heading">
             <h2 id="scenario-map-heading">{tr.text('scenario.map')}</h2>
             <p>
-              {result.sourceName}, M {tr.number(result.magnitude, 1)}. {tr.text('scenario.position', { position: tr.text('scenario.positionClosest') })}
+              {result.sourceName}, M {tr.number(result.magnitude, 1)}. {tr.text('scenario.position', { position: tr.text('scenario.positionMiddle') })}
             </p>
             <figure class="map-figure">
               <StudyMap
@@ -90,7 +91,7 @@ export function ScenarioView(props: ScenarioViewProps) {
                 frame={props.frame}
                 idPrefix="scenario-map"
                 showZones={false}
-                labelSuffix={new Map(result.communities.map((c) => [c.communityId, ` · ${c.mmi.romanMedian}`]))}
+                labelSuffix={new Map(result.communities.map((c) => [c.communityId, ` · ${intensityWords(c.mmi.median).roman}`]))}
                 hazardLayer={result.grid ? <ScenarioLayer grid={result.grid} frame={props.frame} /> : undefined}
               />
               <figcaption>
@@ -124,12 +125,12 @@ export function ScenarioView(props: ScenarioViewProps) {
                       <th scope="row">
                         <a href={`/studies/${studyId}/communities/${c.communityId}`}>{c.name}</a>
                       </th>
-                      <td class="numeric">{tr.number(c.rjbKm)}</td>
+                      <td class="numeric">{tr.number(c.rrupKm)}</td>
                       <td>
-                        {tr.text('mmi.label', { roman: c.mmi.romanMedian })} · {tr.text(`mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.median)))}.name` as 'mmi.1.name')}
+                        {tr.mmi(c.mmi.median)} · {tr.text(`mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.median)))}.name` as 'mmi.1.name')}
                       </td>
                       <td>
-                        {tr.text('mmi.label', { roman: c.mmi.romanP84 })} · {tr.text(`mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.p84)))}.name` as 'mmi.1.name')}
+                        {tr.mmi(c.mmi.p84)} · {tr.text(`mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.p84)))}.name` as 'mmi.1.name')}
                       </td>
                       <td class="numeric">{tr.number(c.motions.PGA?.median ?? 0, 3)}</td>
                     </tr>

@@ -54,10 +54,14 @@ export function frequencyMagnitude(events: readonly CatalogEvent[], options: Fre
   }
   const selected = selectByMagnitudeType(events, options.magnitudes);
   const periods = options.periods ?? [];
+  // With periods a bin is observed from its period's start, as the Weichert fit counts it
+  // (completeness-periods.ts observationBins), even before the first event: rates plotted from
+  // a later start would sit above the line fitted through them.
   const startOf = (k: number): number => {
-    let start = periods.length === 0 ? startMs : Infinity;
+    if (periods.length === 0) return startMs;
+    let start = Infinity;
     for (const p of periods) if (binIndex(p.magnitude, step) <= k && p.startMs < start) start = p.startMs;
-    return Math.max(start, startMs);
+    return start;
   };
   const counts = new Map<number, number>();
   for (const e of selected.events) {

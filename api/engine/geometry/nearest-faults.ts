@@ -2,6 +2,8 @@ import { bearing } from '@turf/turf';
 import type { FaultSource, LonLat, Source } from '../model.ts';
 import type { NearestFault } from '../results.ts';
 import { normaliseAzimuthDeg } from '../units.ts';
+import type { RupturePlane } from '../ruptures/rupture.ts';
+import { ruptureDistances } from './distances.ts';
 import { faultSurface, wholeSurface } from './fault-surface.ts';
 import { closestPointOnProjection } from './plane-distance.ts';
 import type { LocalFrame, PointXY } from './projection.ts';
@@ -15,16 +17,36 @@ function closestOnLine(p: PointXY, a: PointXY, b: PointXY): PointXY {
   return { x: a.x + dx * t, y: a.y + dy * t };
 }
 
+/**
+ * Depth of a plane straight below `site`, km, or undefined when the site is not above it (or
+ * the plane is vertical). The plane through corner 0 with normal n holds the points with
+ * n · (p − c0) = 0; solved for z at the site's x and y.
+ */
+function depthBelowPlaneKm(plane: RupturePlane, site: PointXY): number | undefined {
+  if (closestPointOnProjection(plane, site).distanceKm > 0) return undefined;
+  const [c0, c1, , c3] = plane.corners;
+  const u = { x: c1.x - c0.x, y: c1.y - c0.y, z: c1.z - c0.z };
+  const v = { x: c3.x - c0.x, y: c3.y - c0.y, z: c3.z - c0.z };
+  const n = { x: u.y * v.z - u.z * v.y, y: u.z * v.x - u.x * v.z, z: u.x * v.y - u.y * v.x };
+  if (Math.abs(n.z) < 1e-9 * Math.hypot(n.x, n.y, n.z)) return undefined;
+  return c0.z - (n.x * (site.x - c0.x) + n.y * (site.y - c0.y)) / n.z;
+}
+
 function nearestOf(fault: FaultSource, frame: LocalFrame, site: LonLat, siteXY: PointXY): NearestFault {
   const surface = faultSurface(fault, frame);
   const whole = wholeSurface(surface);
+  const rrupKm = ruptureDistances(whole, siteXY).rrupKm;
   let best = { point: siteXY, distanceKm: Infinity };
+  let depthBelowKm: number | undefined;
   if (whole.kind === 'planes') {
     for (const plane of whole.planes) {
       const candidate = closestPointOnProjection(plane, siteXY);
       if (candidate.distanceKm < best.distanceKm) best = candidate;
+      const depth = depthBelowPlaneKm(plane, siteXY);
+      if (depth !== undefined && (depthBelowKm === undefined || depth < depthBelowKm)) depthBelowKm = depth;
     }
   }
+  const below = best.distanceKm === 0 && depthBelowKm !== undefined ? { depthBelowKm } : {};
   let target = best.point;
   if (best.distanceKm === 0) {
     // Above the fault: point to where it reaches its top edge instead.
@@ -38,17 +60,20 @@ function nearestOf(fault: FaultSource, frame: LocalFrame, site: LonLat, siteXY: 
       }
     }
     if (traceKm === 0) {
-      return { sourceId: fault.id, name: fault.name, distanceKm: 0, bearingDeg: normaliseAzimuthDeg(fault.dipDirectionDeg) };
+      return { sourceId: fault.id, name: fault.name, distanceKm: 0, bearingDeg: normaliseAzimuthDeg(fault.dipDirectionDeg), rrupKm, ...below };
     }
   }
   const targetLonLat = frame.toLonLat(target);
   const bearingDeg = normaliseAzimuthDeg(bearing([site[0], site[1]], [targetLonLat[0], targetLonLat[1]]));
-  return { sourceId: fault.id, name: fault.name, distanceKm: best.distanceKm, bearingDeg };
+  return { sourceId: fault.id, name: fault.name, distanceKm: best.distanceKm, bearingDeg, rrupKm, ...below };
 }
 
 /**
- * The `count` fault sources nearest to `site` ([lon, lat], degrees), nearest first (ties by
- * source order): the Joyner-Boore distance to each whole fault surface (km, in `frame`) and
+ * The `count` fault sources nearest to `site` ([lon, lat], degrees), nearest first by the
+ * shortest distance to each whole fault surface through the ground (Rrup, km, in `frame`; ties
+ * by source order), so that a fault deep below comes after one near the surface beside the
+ * place. Each gives the Joyner-Boore distance (km), the depth of the fault straight below a
+ * site that stands above it, and
  * the bearing from the site to the closest point of its surface projection (degrees clockwise
  * from north in [0, 360), turf's spherical initial great-circle bearing). A site above a
  * dipping fault (distance 0) gets the bearing to the nearest point of the fault's top trace,
@@ -59,7 +84,7 @@ export function nearestFaults(sources: readonly Source[], frame: LocalFrame, sit
   const found = sources.filter((s): s is FaultSource => s.kind === 'fault').map((fault) => nearestOf(fault, frame, site, siteXY));
   return found
     .map((entry, order) => ({ entry, order }))
-    .sort((a, b) => a.entry.distanceKm - b.entry.distanceKm || a.order - b.order)
+    .sort((a, b) => a.entry.rrupKm - b.entry.rrupKm || a.order - b.order)
     .map(({ entry }) => entry)
     .slice(0, Math.max(0, count));
 }

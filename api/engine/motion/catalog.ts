@@ -7,6 +7,7 @@ import type { GroundMotionModel } from './types.ts';
 /** The ground-motion models a study may name, and the branches used where it names none. */
 export interface ModelCatalog {
   readonly names: readonly string[];
+  /** Any case: "bssa14" finds BSSA14 (a model's name is not case-sensitive for people). */
   find(name: string): GroundMotionModel | undefined;
   /** Throws UnknownModel. */
   get(name: string): GroundMotionModel;
@@ -17,13 +18,13 @@ export function createModelCatalog(
   models: readonly GroundMotionModel[],
   defaultBranches: Readonly<Record<TectonicSetting, readonly Branch[]>>,
 ): ModelCatalog {
-  const byName = new Map(models.map((m) => [m.name, m]));
+  const byName = new Map(models.map((m) => [m.name.toLowerCase(), m]));
   const names = models.map((m) => m.name);
   return {
     names,
-    find: (name) => byName.get(name),
+    find: (name) => byName.get(name.toLowerCase()),
     get(name) {
-      const model = byName.get(name);
+      const model = byName.get(name.toLowerCase());
       if (!model) throw new UnknownModel(name, names);
       return model;
     },

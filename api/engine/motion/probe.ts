@@ -2,7 +2,7 @@ import type { Mechanism, TectonicSetting } from '../model.ts';
 import { measureSupport, type ModelCatalog } from './catalog.ts';
 import { InvalidInput } from '../errors.ts';
 import { measureUnit, parseMeasure } from './measure.ts';
-import { withPgvFromSa } from './pgv-from-sa.ts';
+import { PGV_FROM_SA_NOTE, withPgvFromSa } from './pgv-from-sa.ts';
 import type { GmmInput } from './types.ts';
 
 /** What the probe is asked: one model, one rupture–site geometry, some measures. */
@@ -36,6 +36,8 @@ export interface ProbeMeasure {
   readonly phi: number;
   readonly applicable: boolean;
   readonly notes: readonly string[];
+  /** How the measure was derived when the model does not predict it (PGV from SA). */
+  readonly derived?: string;
 }
 
 export interface ProbeResult {
@@ -43,7 +45,12 @@ export interface ProbeResult {
   readonly citation: string;
   /** Every input the model saw, defaults filled in. */
   readonly input: GmmInput;
+  /** The assumptions that reach the model's equations (an input it reads, or one they are derived for). */
   readonly defaults: readonly string[];
+  /** Assumptions filled in that this model, in this setting, does not read. */
+  readonly unusedDefaults: readonly string[];
+  /** The distance the model's equations use for this setting, when known (rjbKm, rrupKm or rhypoKm). */
+  readonly distanceUsed?: 'rjbKm' | 'rrupKm' | 'rhypoKm';
   readonly measures: Readonly<Record<string, ProbeMeasure>>;
 }
 
@@ -101,7 +108,42 @@ export function probeMotion(request: ProbeRequest, models: ModelCatalog): ProbeR
   for (const key of keys) {
     const measure = parseMeasure(key);
     const p = model.predict(input, measure);
-    measures[key] = { median: Math.exp(p.lnMedian), unit: measureUnit(measure), sigma: p.sigma, tau: p.tau, phi: p.phi, applicable: p.applicable, notes: p.notes };
+    const derived = measure.kind === 'PGV' && !base.hasPgv ? { derived: PGV_FROM_SA_NOTE } : {};
+    measures[key] = { median: Math.exp(p.lnMedian), unit: measureUnit(measure), sigma: p.sigma, tau: p.tau, phi: p.phi, applicable: p.applicable, notes: p.notes, ...derived };
   }
-  return { model: model.name, citation: model.citation, input, defaults, measures };
+  const used = INPUTS_READ[model.name]?.(setting);
+  const reaches = (note: string): boolean => {
+    if (!used) return true;
+    const key = note.split(' ')[0] as string;
+    return used.includes(key) || (FEEDS[key] ?? []).some((derived) => used.includes(derived));
+  };
+  const distanceUsed = used?.find((k): k is 'rjbKm' | 'rrupKm' | 'rhypoKm' => k === 'rjbKm' || k === 'rrupKm' || k === 'rhypoKm');
+  return {
+    model: model.name,
+    citation: model.citation,
+    input,
+    defaults: defaults.filter(reaches),
+    unusedDefaults: defaults.filter((d) => !reaches(d)),
+    ...(distanceUsed ? { distanceUsed } : {}),
+    measures,
+  };
 }
+
+/**
+ * The inputs each model's equations read, by setting (read from the model files: cornell79.ts,
+ * bssa14.ts, cb14.ts, aga16.ts). A model not listed has every assumption reported.
+ */
+const INPUTS_READ: Readonly<Record<string, (setting: TectonicSetting) => readonly string[]>> = {
+  Cornell79: () => ['magnitude', 'rhypoKm'],
+  BSSA14: () => ['magnitude', 'rakeDeg', 'rjbKm', 'vs30'],
+  CB14: () => ['magnitude', 'rakeDeg', 'dipDeg', 'ztorKm', 'widthKm', 'hypoDepthKm', 'rjbKm', 'rrupKm', 'rxKm', 'vs30'],
+  // Abrahamson et al. (2016): Rrup for interface events; Rhypo and the hypocentral depth for intraslab ones.
+  AGA16: (setting) => (setting === 'intraslab' ? ['magnitude', 'rhypoKm', 'hypoDepthKm', 'vs30'] : ['magnitude', 'rrupKm', 'vs30']),
+};
+
+/** Assumptions that matter through what is derived from them (see the defaults above). */
+const FEEDS: Readonly<Record<string, readonly string[]>> = {
+  mechanism: ['rakeDeg', 'dipDeg'],
+  ztorKm: ['rrupKm'],
+  hypoDepthKm: ['rhypoKm'],
+};

@@ -11,7 +11,9 @@ import type { Rupture } from '../ruptures/rupture.ts';
  * Where a scenario puts its rupture:
  * - `closest`: for each site, the floating position (or zone cell) with the smallest Rrup to it
  *   — the worst placement for every community at once, so the communities' numbers do not come
- *   from one single earthquake;
+ *   from one single earthquake (and no map can show them: a scenario with a map uses one rupture);
+ * - `middle`: the position nearest the middle of the source (the mean of the candidates'
+ *   hypocentres), used for every site and the map: the default when a map is asked for;
  * - `{ communityId }`: the one position closest to that community, used for every site;
  * - `{ alongStrikeKm, downDipKm }`: a fault rupture starting that far along the trace (from its
  *   first vertex, after the right-hand-rule orientation) and down dip from its top edge;
@@ -19,6 +21,7 @@ import type { Rupture } from '../ruptures/rupture.ts';
  */
 export type ScenarioPosition =
   | 'closest'
+  | 'middle'
   | { readonly communityId: string }
   | { readonly alongStrikeKm: number; readonly downDipKm: number }
   | { readonly lon: number; readonly lat: number };

@@ -86,7 +86,14 @@ export function runScenario(study: Study, models: ModelCatalog, request: Scenari
     const model = models.get(b.model);
     return { model: measures.includes('PGV') ? withPgvFromSa(model) : model, weight: b.weight };
   });
-  const position = request.position ?? 'closest';
+  // A map shows one earthquake, so with a grid every community gets that same rupture.
+  const withGrid = request.gridSpacingKm !== undefined;
+  const position = request.position ?? (withGrid ? 'middle' : 'closest');
+  if (position === 'closest' && withGrid) {
+    throw new InvalidInput([
+      { path: 'position', message: '"closest" puts a different rupture beside each community, which one map cannot show; leave the position out (the middle of the source) or give one' },
+    ]);
+  }
   const fixed = fixedRupture(study, frame, prepared, candidates, request.magnitude, position);
 
   const communities = study.communities.map((community): ScenarioCommunity => {
@@ -108,15 +115,14 @@ export function runScenario(study: Study, models: ModelCatalog, request: Scenari
   });
 
   let grid: ReturnType<typeof scenarioGrid> | undefined;
-  if (request.gridSpacingKm !== undefined) {
-    const mapRupture = fixed ?? closestRupture(candidates, surfaceCentre(candidates));
-    grid = scenarioGrid({ study, frame, rupture: mapRupture, branches, spacingKm: request.gridSpacingKm, vs30: request.gridVs30 ?? 760, maxPoints: MAX_SCENARIO_GRID_POINTS, notes: warnings });
+  if (request.gridSpacingKm !== undefined && fixed !== undefined) {
+    grid = scenarioGrid({ study, frame, rupture: fixed, branches, spacingKm: request.gridSpacingKm, vs30: request.gridVs30 ?? 760, maxPoints: MAX_SCENARIO_GRID_POINTS, notes: warnings });
   }
   return {
     sourceId: source.id,
     sourceName: source.name,
     magnitude: request.magnitude,
-    position: describePosition(position, grid !== undefined && fixed === undefined),
+    position: describePosition(position),
     models: study.groundMotion[source.setting].map((b) => ({ model: b.model, weight: b.weight })),
     communities,
     ...(grid ? { grid } : {}),
@@ -133,6 +139,7 @@ function fixedRupture(
   position: ScenarioPosition,
 ): ScenarioRupture | undefined {
   if (position === 'closest') return undefined;
+  if (position === 'middle') return closestRupture(candidates, surfaceCentre(candidates));
   if ('communityId' in position) {
     const community = study.communities.find((c) => c.id === position.communityId);
     if (!community) throw new InvalidInput([{ path: 'position.communityId', message: `unknown community "${position.communityId}"` }]);
@@ -156,10 +163,9 @@ function surfaceCentre(candidates: readonly ScenarioRupture[]): PointXY {
   return { x: x / candidates.length, y: y / candidates.length };
 }
 
-function describePosition(position: ScenarioPosition, mapAtCentre: boolean): string {
-  if (position === 'closest') {
-    return `each community: the rupture position closest to it (worst case for each, not one earthquake)${mapAtCentre ? '; map: the position nearest the middle of the source' : ''}`;
-  }
+function describePosition(position: ScenarioPosition): string {
+  if (position === 'closest') return 'each community: the rupture position closest to it (worst case for each, not one earthquake)';
+  if (position === 'middle') return 'the rupture position nearest the middle of the source, for every community and the map';
   if ('communityId' in position) return `the rupture position closest to ${position.communityId}`;
   if ('alongStrikeKm' in position) return `starting ${position.alongStrikeKm} km along the trace and ${position.downDipKm} km down dip`;
   return `epicentre at ${position.lon}, ${position.lat}`;

@@ -2,7 +2,7 @@ import { Hono } from 'hono';
 import { notFound } from '../http-error.ts';
 import { CSV_TYPES, GEOJSON_TYPES, readJsonObject, readText } from '../request-body.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
-import { storedInputs, validateStudy } from '../../operations/study-input.ts';
+import { storedInputs, validateStudy, type ValidStudy } from '../../operations/study-input.ts';
 import { studyJson } from './studies.ts';
 
 /**
@@ -26,33 +26,33 @@ export function importRoutes(ctx: ServiceContext): Hono {
     return record;
   };
 
+  // The study is read for the import only once the body has arrived, in the transaction that
+  // writes it (studies.update), so a save made while the body was on its way is not lost.
   app.post('/studies/:id/communities', async (c) => {
-    const record = find(c.req.param('id'));
+    const id = find(c.req.param('id')).id;
     const csv = await readText(c, CSV_TYPES, 'a communities CSV (header id,name,lon,lat,vs30,population,coastal,elevationM)');
-    const document = { ...storedInputs(ctx.store, record).raw, communities: IMPORTED_COMMUNITIES_FILE };
-    const { study, warnings } = validateStudy(document, ctx.models, csv);
-    const updated = studies.replace(record.id, {
-      name: study.name,
-      document: JSON.stringify(document, null, 2),
-      file: { kind: 'communities-csv', content: csv },
+    let outcome: ValidStudy | undefined;
+    const updated = studies.update(id, (record) => {
+      const document = { ...storedInputs(ctx.store, record).raw, communities: IMPORTED_COMMUNITIES_FILE };
+      outcome = validateStudy(document, ctx.models, csv);
+      return { name: outcome.study.name, document: JSON.stringify(document, null, 2), file: { kind: 'communities-csv', content: csv } };
     });
-    if (!updated) throw notFound('study', record.id);
-    return c.json({ ...studyJson(updated), imported: { communities: study.communities.length }, warnings });
+    if (!updated || !outcome) throw notFound('study', id);
+    return c.json({ ...studyJson(updated), imported: { communities: outcome.study.communities.length }, warnings: outcome.warnings });
   });
 
   app.post('/studies/:id/sources', async (c) => {
-    const record = find(c.req.param('id'));
+    const id = find(c.req.param('id')).id;
     const { value, text } = await readJsonObject(c, 'a GeoJSON FeatureCollection of sources', GEOJSON_TYPES);
-    const inputs = storedInputs(ctx.store, record);
-    const document = { ...inputs.raw, sources: value };
-    const { study, warnings } = validateStudy(document, ctx.models, inputs.communitiesCsv);
-    const updated = studies.replace(record.id, {
-      name: study.name,
-      document: JSON.stringify(document, null, 2),
-      file: { kind: 'sources-geojson', content: text },
+    let outcome: ValidStudy | undefined;
+    const updated = studies.update(id, (record) => {
+      const inputs = storedInputs(ctx.store, record);
+      const document = { ...inputs.raw, sources: value };
+      outcome = validateStudy(document, ctx.models, inputs.communitiesCsv);
+      return { name: outcome.study.name, document: JSON.stringify(document, null, 2), file: { kind: 'sources-geojson', content: text } };
     });
-    if (!updated) throw notFound('study', record.id);
-    return c.json({ ...studyJson(updated), imported: { sources: study.sources.length }, warnings });
+    if (!updated || !outcome) throw notFound('study', id);
+    return c.json({ ...studyJson(updated), imported: { sources: outcome.study.sources.length }, warnings: outcome.warnings });
   });
 
   return app;

@@ -66,6 +66,26 @@ describe('frequency–magnitude distribution', () => {
     expectClose(fmd.bins[0]?.cumulativeAnnualRate ?? NaN, 0.2 + 0 + 0.1, 1e-12, 'sum of per-bin rates');
   });
 
+  it('with periods, observes each bin from its period start even when the span starts later (as Weichert 1980 counts it)', () => {
+    // The span runs from the first event (year 1) to year 10, but M >= 4.2 is complete from
+    // year 0 and M >= 4.0 from year 0.5: a bin's years are from its period's start (hand count),
+    // not from the first event, so the plotted rates sit on the line fitted with the same years.
+    const fmd = frequencyMagnitude(events, {
+      startMs: 1 * MS_PER_YEAR,
+      endMs: 10 * MS_PER_YEAR,
+      periods: [
+        { magnitude: 4.0, startMs: 0.5 * MS_PER_YEAR },
+        { magnitude: 4.2, startMs: 0 },
+      ],
+    });
+    expect(fmd.bins.map((b) => [b.magnitude, b.count, b.years])).toEqual([
+      [4.0, 3, 9.5],
+      [4.1, 2, 9.5],
+      [4.2, 0, 10],
+      [4.3, 1, 10],
+    ]);
+  });
+
   it('refuses a backwards span', () => {
     expect(() => frequencyMagnitude(events, { startMs: 10, endMs: 0 })).toThrow(/endMs after startMs/);
   });

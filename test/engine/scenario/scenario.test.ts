@@ -116,4 +116,42 @@ describe('runScenario', () => {
     const p = frame.toLocal([grid!.lon[strongest]!, grid!.lat[strongest]!]);
     expect(Math.hypot(p.x, p.y)).toBeLessThanOrEqual(5 * Math.SQRT1_2 + 0.01);
   });
+
+  it('with a map, the table and the map show one earthquake: each community reads as the map beside it', () => {
+    const trace = [at(0, -40), at(0, 40)];
+    const fault: Source = {
+      ...common, id: 'f', name: 'F', kind: 'fault', trace, dipDeg: 90, dipDirectionDeg: 90, upperDepthKm: 0, lowerDepthKm: 12,
+      recurrence: { type: 'fixed', magnitude: 6, rate: 0.01 },
+    };
+    const s = study([fault], [community('north', 5, 35), community('south', 5, -35), community('middle', 5, 0)]);
+    const mapped = runScenario(s, models, { sourceId: 'f', magnitude: 6, gridSpacingKm: 1 });
+    const grid = mapped.grid!;
+    expect(mapped.position).toMatch(/middle of the source, for every community and the map/);
+    for (const c of mapped.communities) {
+      const site = frame.toLocal([s.communities.find((x) => x.id === c.communityId)!.lon, s.communities.find((x) => x.id === c.communityId)!.lat]);
+      let nearest = 0;
+      let best = Infinity;
+      grid.lon.forEach((lon, i) => {
+        const p = frame.toLocal([lon, grid.lat[i]!]);
+        const d = Math.hypot(p.x - site.x, p.y - site.y);
+        if (d < best) [best, nearest] = [d, i];
+      });
+      // Communities and grid both on Vs30 760 with Cornell et al. (1979): within 1 km of the
+      // community the map differs from the table only by that step (ours: a bound on the slope).
+      expectClose(grid.mmiMedian[nearest]!, c.mmi.median, 0.25, `${c.communityId}: the map beside it`);
+    }
+    // The one rupture sits in the middle: the ends see it from afar, alike.
+    const [north, south, middle] = mapped.communities;
+    expect(north!.rrupKm).toBeGreaterThan(20);
+    expectClose(north!.rrupKm, south!.rrupKm, 3, 'north and south see the middle rupture from about as far');
+    expectClose(middle!.rrupKm, 5, 0.05, 'the middle community sits beside the rupture');
+    // Asking for a different rupture beside each community together with a map is refused, naming the field.
+    try {
+      runScenario(s, models, { sourceId: 'f', magnitude: 6, gridSpacingKm: 5, position: 'closest' });
+      expect.unreachable('closest with a map must be refused');
+    } catch (error) {
+      expect(error).toBeInstanceOf(InvalidInput);
+      expect((error as InvalidInput).issues.map((i) => i.path)).toEqual(['position']);
+    }
+  });
 });

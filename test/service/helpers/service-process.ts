@@ -25,14 +25,20 @@ export interface ServiceProcess {
 
 export interface StartOptions {
   readonly databasePath: string;
+  /** Node's arguments: the service from source by default, or a compiled entry such as dist/api/server.js. */
+  readonly nodeArgs?: readonly string[];
   readonly env?: Readonly<Record<string, string>>;
 }
 
-/** Spawns the service with PORT=0 and resolves once it prints its address. */
+/**
+ * Spawns the service with PORT=0 and resolves once it prints its address. The demo is not
+ * screened at first start (TREMORA_SCREEN_DEMO=0) unless `env` asks for it, so a test's runs
+ * are only its own.
+ */
 export function startService(options: StartOptions): Promise<ServiceProcess> {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'api/server.ts'], {
+  const child = spawn(process.execPath, [...(options.nodeArgs ?? ['--import', 'tsx', 'api/server.ts'])], {
     cwd: REPO_ROOT,
-    env: { ...process.env, PORT: '0', HOST: '127.0.0.1', TREMORA_DB: options.databasePath, TREMORA_TOKEN: '', ...options.env },
+    env: { ...process.env, PORT: '0', HOST: '127.0.0.1', TREMORA_DB: options.databasePath, TREMORA_TOKEN: '', TREMORA_SCREEN_DEMO: '0', ...options.env },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let output = '';

@@ -1,5 +1,6 @@
 import Database from 'better-sqlite3';
 import { afterAll, describe, expect, it } from 'vitest';
+import { TREMORA_APPLICATION_ID } from '../../../api/store/database-file.ts';
 import { jsonInit, type ServiceProcess, startService, tempDir } from '../helpers/service-process.ts';
 import { COMMUNITIES_CSV, smallStudy } from '../helpers/small-study.ts';
 import { Tally } from './answer-checks.ts';
@@ -109,12 +110,13 @@ async function writeUntilKilled(service: ServiceProcess, ledger: Ledger, random:
   await Promise.all(Array.from({ length: WRITERS }, (_, w) => writer(w)));
 }
 
-function inspect(): { integrity: string; halfWritten: number; doneWithout: number; unfinished: number } {
+function inspect(): { integrity: string; applicationId: number; halfWritten: number; doneWithout: number; unfinished: number } {
   const db = new Database(databasePath, { readonly: true });
   try {
     const count = (sql: string) => (db.prepare(sql).get() as { n: number }).n;
     return {
       integrity: db.pragma('integrity_check', { simple: true }) as string,
+      applicationId: db.pragma('application_id', { simple: true }) as number,
       halfWritten: count("SELECT COUNT(*) AS n FROM runs WHERE status <> 'done' AND (results IS NOT NULL OR provenance IS NOT NULL)"),
       doneWithout: count("SELECT COUNT(*) AS n FROM runs WHERE status = 'done' AND (results IS NULL OR provenance IS NULL OR finished_at IS NULL)"),
       unfinished: count("SELECT COUNT(*) AS n FROM runs WHERE status IN ('queued', 'running')"),
@@ -215,6 +217,8 @@ describe('SIGKILL during saves and runs', () => {
 
       const after = inspect();
       expect(after.integrity, `integrity after kill ${round + 1}`).toBe('ok');
+      // The file stays marked as Tremora's, so the next start accepts it (database-file.ts).
+      expect(after.applicationId, `application_id after kill ${round + 1}`).toBe(TREMORA_APPLICATION_ID);
       expect(after.halfWritten, `runs with results but not done after kill ${round + 1}`).toBe(0);
       expect(after.doneWithout, `done runs missing results after kill ${round + 1}`).toBe(0);
       checkSaves(ledger, round + 1, checkedRuns);

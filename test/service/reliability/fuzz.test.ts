@@ -96,7 +96,7 @@ describe('the API under hostile requests', () => {
   it('answers raw requests no client would send (bad HTTP, header overflow, cut-short bodies) in the error shape', async () => {
     const port = Number(new URL(service.url).port);
     const head = (method: string, path: string, extra = '') => `${method} ${path} HTTP/1.1\r\nHost: 127.0.0.1\r\nConnection: close\r\n${extra}`;
-    const cases: { label: string; bytes: Uint8Array | string; halfClose?: boolean; expect: number[] }[] = [
+    const cases: { label: string; bytes: Uint8Array | string; halfClose?: boolean; expect: number[]; location?: string }[] = [
       { label: 'garbage request line', bytes: '\u0000\u0001GARBAGE\r\n\r\n', expect: [400] },
       { label: 'unknown method token with a space', bytes: head('GE T', '/api/health') + '\r\n', expect: [400] },
       { label: 'TRACE', bytes: head('TRACE', '/api/health') + '\r\n', expect: [404, 405] },
@@ -112,7 +112,15 @@ describe('the API under hostile requests', () => {
       { label: 'bytes over 0x7f in a header', bytes: Buffer.concat([Buffer.from(head('GET', '/api/health', 'X-Name: ')), Buffer.from([0xff, 0xfe]), Buffer.from('\r\n\r\n')]), expect: [200, 400] },
       { label: 'invalid UTF-8 JSON body', bytes: Buffer.concat([Buffer.from(head('POST', '/api/validate', 'Content-Type: application/json\r\nContent-Length: 13\r\n') + '\r\n'), Buffer.from([0x7b, 0x22, 0x6e, 0x22, 0x3a, 0x22, 0xff, 0xfe, 0xc3, 0x28, 0x22, 0x7d, 0x20])]), expect: [422] },
       { label: 'HTTP/1.0 without Host', bytes: 'GET /api/health HTTP/1.0\r\n\r\n', expect: [200] },
-      { label: 'absolute-form URL to another host', bytes: 'GET http://elsewhere.invalid/api/health HTTP/1.1\r\nHost: elsewhere.invalid\r\nConnection: close\r\n\r\n', expect: [200, 400, 404] },
+      { label: 'absolute-form URL to another host', bytes: 'GET http://elsewhere.invalid/api/health HTTP/1.1\r\nHost: elsewhere.invalid\r\nConnection: close\r\n\r\n', expect: [421] },
+      { label: 'HTTP/1.1 without Host', bytes: 'GET /api/health HTTP/1.1\r\nConnection: close\r\n\r\n', expect: [400] },
+      { label: 'an Expect not known', bytes: head('GET', '/api/health', 'Expect: 999-foo\r\n') + '\r\n', expect: [417] },
+      { label: 'OPTIONS *', bytes: head('OPTIONS', '*') + '\r\n', expect: [204] },
+      { label: 'HEAD on the API', bytes: head('HEAD', '/api/studies') + '\r\n', expect: [200] },
+      { label: 'Host and Origin of another site writing (DNS rebinding)', bytes: 'DELETE /api/studies/x HTTP/1.1\r\nHost: evil.example:8462\r\nOrigin: http://evil.example:8462\r\nConnection: close\r\n\r\n', expect: [421] },
+      { label: 'a Host that is no host name', bytes: 'GET /api/health HTTP/1.1\r\nHost: a@127.0.0.1\r\nConnection: close\r\n\r\n', expect: [400, 421] },
+      { label: 'back path with a tab before another host', bytes: head('GET', '/language?lang=fr&back=/%09/evil.example/x') + '\r\n', expect: [303], location: '/' },
+      { label: 'back path with CR LF', bytes: head('GET', '/language?lang=fr&back=/%0d%0aSet-Cookie:%20x=1') + '\r\n', expect: [303], location: '/' },
     ];
     const byStatus = new Tally();
     const problems: string[] = [];
@@ -125,6 +133,7 @@ describe('the API under hostile requests', () => {
       }
       byStatus.add(answer.status);
       if (!c.expect.includes(answer.status)) problems.push(`${c.label}: status ${answer.status}, expected ${c.expect.join(' or ')}`);
+      if (c.location !== undefined && answer.headers.location !== c.location) problems.push(`${c.label}: Location ${String(answer.headers.location)}, expected ${c.location}`);
       const problem = answerProblem(answer, 'GET');
       if (problem) problems.push(`${c.label}: ${problem}`);
     }

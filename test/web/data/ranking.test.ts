@@ -26,7 +26,7 @@ const result = (id: string, band: string, vii: number, faultKm?: number): Commun
   chanceOfExceeding: {},
   intensity: { atReturnPeriod: {}, chanceOfReaching: { '50': { VI: vii * 2, VII: vii, VIII: vii / 2 } } },
   deaggregation: {},
-  nearestFaults: faultKm === undefined ? [] : [{ sourceId: 'f', name: 'F', distanceKm: faultKm, bearingDeg: 0 }],
+  nearestFaults: faultKm === undefined ? [] : [{ sourceId: 'f', name: 'F', distanceKm: faultKm, bearingDeg: 0, rrupKm: faultKm }],
   band: { id: band, label: band, mmi475: null },
   warnings: [],
 });

@@ -39,4 +39,18 @@ describe('directions in words', () => {
     expect(() => placeFrom(-1, 0)).toThrow(/expected a distance >= 0 km, got -1/);
     expect(() => placeFrom(3, Number.NaN)).toThrow(/expected a bearing/);
   });
+
+  test('a fault beneath the place is said at its depth: whole km under 20 km, nearest 5 km from 20 km', () => {
+    expect(placeFrom(0, 90, 38.2)).toEqual({ kind: 'below', depthKm: 40 });
+    expect(placeFrom(0, 90, 37.4)).toEqual({ kind: 'below', depthKm: 35 });
+    expect(placeFrom(0, 90, 19.4)).toEqual({ kind: 'below', depthKm: 19 });
+    expect(placeFrom(0, 90, 19.6)).toEqual({ kind: 'below', depthKm: 20 });
+    expect(placeFrom(0.5, 90, 3)).toEqual({ kind: 'below', depthKm: 3 });
+    // At the fault's top edge (depth under half a km) or with no depth known it is "here".
+    expect(placeFrom(0, 90, 0.4)).toEqual({ kind: 'here' });
+    expect(placeFrom(0, 90)).toEqual({ kind: 'here' });
+    // Beyond 1 km the horizontal distance and direction are said, whatever the depth.
+    expect(placeFrom(12, 90, 30)).toEqual({ kind: 'away', distanceKm: 12, compass: 'E' });
+    expect(translator('en').place(0, 90, 41)).toBe('about 40 km below this place');
+  });
 });

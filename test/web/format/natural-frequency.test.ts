@@ -2,7 +2,7 @@ import { describe, expect, test } from 'vitest';
 import { naturalFrequency, percentText } from '../../../web/format/natural-frequency.ts';
 import { translator } from '../../../web/text/translator.ts';
 
-// The rule under test is ours (stated in web/format/natural-frequency.ts); the worked example
+// The rule under test is ours (common practice; stated in web/format/natural-frequency.ts); the worked example
 // "about 1 in 8 over the next 50 years (12%)" is the one in the pages issue (issue 5).
 describe('naturalFrequency', () => {
   test('the issue example: 12% is about 1 in 8', () => {
@@ -13,18 +13,32 @@ describe('naturalFrequency', () => {
     expect(en.t('chance.overYears', { frequency: c.frequency, years: 50, percent: c.percent })).toBe('about 1 in 8 over the next 50 years (12%)');
   });
 
-  test('1 / p rounds to the nearest whole number up to 20', () => {
-    expect(naturalFrequency(0.5)).toEqual({ kind: 'one-in', n: 2 });
+  test('100 / P (P the shown percentage) rounds to the nearest whole number up to 20', () => {
     expect(naturalFrequency(0.3)).toEqual({ kind: 'one-in', n: 3 }); // 3.33
     expect(naturalFrequency(0.15)).toEqual({ kind: 'one-in', n: 7 }); // 6.67
     expect(naturalFrequency(0.1)).toEqual({ kind: 'one-in', n: 10 });
     expect(naturalFrequency(0.05)).toEqual({ kind: 'one-in', n: 20 });
   });
 
-  test('above 20, 1 / p keeps two significant figures', () => {
+  test('the frequency restates the shown percentage: 9.5% is 10%, so about 1 in 10, never 1 in 11', () => {
+    const en = translator('en');
+    expect(en.chance(0.095)).toEqual({ frequency: 'about 1 in 10', percent: '10%' });
+    expect(en.chance(0.1)).toEqual({ frequency: 'about 1 in 10', percent: '10%' });
+    expect(en.chance(0.104)).toEqual({ frequency: 'about 1 in 10', percent: '10%' });
+    expect(en.chance(0.0949)).toEqual({ frequency: 'about 1 in 11', percent: '9%' });
+    // Every shown percentage from 2% to 100% gets exactly one frequency, whatever the probability behind it.
+    for (let percent = 2; percent <= 100; percent++) {
+      const low = en.chance(Math.max(0, (percent - 0.499) / 100));
+      const high = en.chance(Math.min(1, (percent + 0.499) / 100));
+      expect(low.percent).toBe(`${percent}%`);
+      expect(high).toEqual(low);
+    }
+  });
+
+  test('above 20, 100 / P keeps two significant figures', () => {
     expect(naturalFrequency(0.04)).toEqual({ kind: 'one-in', n: 25 });
-    expect(naturalFrequency(0.0033)).toEqual({ kind: 'one-in', n: 300 }); // 303
-    expect(naturalFrequency(0.0021)).toEqual({ kind: 'one-in', n: 480 }); // 476
+    expect(naturalFrequency(0.0033)).toEqual({ kind: 'one-in', n: 330 }); // 0.3%: 333
+    expect(naturalFrequency(0.0021)).toEqual({ kind: 'one-in', n: 500 }); // 0.2%
     expect(naturalFrequency(0.001)).toEqual({ kind: 'one-in', n: 1000 });
   });
 
@@ -34,7 +48,11 @@ describe('naturalFrequency', () => {
     expect(translator('en').chance(0).frequency).toBe('less than 1 in 1,000');
   });
 
-  test('above an even chance, K in 10; from 0.95, more than 9 in 10', () => {
+  test('from 40%, K in 10, so both sides of an even chance read alike; from 95%, more than 9 in 10', () => {
+    expect(naturalFrequency(0.394)).toEqual({ kind: 'one-in', n: 3 }); // 39%
+    expect(naturalFrequency(0.395)).toEqual({ kind: 'in-ten', k: 4 }); // 40%
+    expect(naturalFrequency(0.49)).toEqual({ kind: 'in-ten', k: 5 });
+    expect(naturalFrequency(0.5)).toEqual({ kind: 'in-ten', k: 5 });
     expect(naturalFrequency(0.51)).toEqual({ kind: 'in-ten', k: 5 });
     expect(naturalFrequency(0.69)).toEqual({ kind: 'in-ten', k: 7 });
     expect(naturalFrequency(0.9449)).toEqual({ kind: 'in-ten', k: 9 });

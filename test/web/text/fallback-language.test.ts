@@ -40,8 +40,8 @@ describe('the translator marks English standing in for French', () => {
   });
 
   test('a value that is itself page content is kept as it is, marked or not', async () => {
-    const levelMmi = await render(fr.text('community.levelMmi', { roman: 'VII', name: fr.text('mmi.7.name') }));
-    expect(levelMmi).toBe('<span lang="en">About MMI <span lang="fr">VII</span>: <span lang="en">Damaging</span></span>');
+    const levelMmi = await render(fr.text('community.levelMmi', { mmi: fr.mmi(7.2), name: fr.text('mmi.7.name') }));
+    expect(levelMmi).toBe('<span lang="en"><span lang="fr">MMI VII</span>: <span lang="en">Damaging</span></span>');
     const inFrench = await render(fr.text('chance.overYears', { frequency: fr.text('chance.oneIn', { n: 8 }), years: 50, percent: fr.text('community.levels') }));
     expect(inFrench).toBe('environ 1 sur 8 au cours des 50 prochaines années (<span lang="en">What the shaking could be like</span>)');
   });
