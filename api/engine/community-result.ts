@@ -3,7 +3,8 @@ import type { LocalFrame } from './geometry/projection.ts';
 import { levelAtReturnPeriod } from './hazard/curve-interpolation.ts';
 import { poissonProbability } from './hazard/poisson.ts';
 import type { HazardMeasure, ValiditySummary } from './hazard/hazard-types.ts';
-import { INTENSITY_MEASURE, siteIntensity } from './intensity/site-intensity.ts';
+import { intensityMeasureOf, siteIntensity } from './intensity/site-intensity.ts';
+import { INTENSITY_CONVERSIONS } from './intensity/worden2012.ts';
 import type { Community, Study } from './model.ts';
 import type { CommunityResult, Deaggregation, HazardCurve, ReturnPeriodStatus } from './results.ts';
 
@@ -67,12 +68,14 @@ export function communityResult(study: Study, community: Community, frame: Local
     );
   }
 
-  const pga = hazard.curves[INTENSITY_MEASURE]!;
+  const intensityMeasure = intensityMeasureOf(settings);
+  const curve = hazard.curves[intensityMeasure]!;
   const intensity = siteIntensity({
-    levels: pga.levels,
-    annualRate: pga.annualRate,
+    levels: curve.levels,
+    annualRate: curve.annualRate,
     returnPeriodsYears: settings.returnPeriodsYears,
     horizonsYears: settings.horizonsYears,
+    conversion: INTENSITY_CONVERSIONS[intensityMeasure],
   });
   warnings.push(...intensity.warnings);
 

@@ -119,6 +119,8 @@ export interface Settings {
   readonly ruptureSpacingKm: number;
   /** Side of the square cells a zone is spread over, km. */
   readonly zoneCellKm: number;
+  /** Which Worden et al. (2012) relation intensity comes from: 'PGA' (when absent) or 'PGV'. */
+  readonly intensityMeasure?: 'PGA' | 'PGV';
 }
 
 export interface Study {

@@ -43,6 +43,8 @@ export interface IntensityResult {
   readonly atReturnPeriod: Readonly<Record<string, { readonly mmi: number | null; readonly roman: string | null; readonly fromMeasure: string }>>;
   /** Chance of reaching MMI VI, VII and VIII in each horizon (key: years as a string). */
   readonly chanceOfReaching: Readonly<Record<string, Readonly<Record<'VI' | 'VII' | 'VIII', number>>>>;
+  /** The conversion the intensities come from and the scatter (MMI units) the chances include; absent in results saved before it was recorded. */
+  readonly conversion?: { readonly measure: 'PGA' | 'PGV'; readonly relation: string; readonly sigmaMmi: number };
 }
 
 export interface NearestFault {

@@ -7,7 +7,7 @@ import { levelsFor } from './hazard/hazard-levels.ts';
 import type { RuptureTable } from './hazard/rupture-table.ts';
 import type { HazardBranch, HazardMeasure } from './hazard/hazard-types.ts';
 import { studyRuptureTable } from './hazard/study-rupture-table.ts';
-import { INTENSITY_MEASURE } from './intensity/site-intensity.ts';
+import { INTENSITY_MEASURE, intensityMeasureOf } from './intensity/site-intensity.ts';
 import { TECTONIC_SETTINGS } from './model.ts';
 import type { Community, Study, TectonicSetting } from './model.ts';
 import type { ModelCatalog } from './motion/catalog.ts';
@@ -104,7 +104,8 @@ export function hazardMeasures(study: Study): ScreeningMeasures {
   };
   const reported = study.settings.measures.map(toHazardMeasure);
   if (reported.length === 0) throw new InvalidInput([{ path: 'settings.measures', message: 'expected at least one measure' }]);
-  const all = reported.some((m) => m.key === INTENSITY_MEASURE) ? reported : [...reported, toHazardMeasure(INTENSITY_MEASURE)];
+  const all = [...reported];
+  for (const key of new Set([INTENSITY_MEASURE, intensityMeasureOf(study.settings)])) if (!all.some((m) => m.key === key)) all.push(toHazardMeasure(key));
   return { reported, all };
 }
 

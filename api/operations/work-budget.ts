@@ -1,6 +1,6 @@
 import { StudyTooLarge } from '../engine/errors.ts';
 import { levelsFor } from '../engine/hazard/hazard-levels.ts';
-import { INTENSITY_MEASURE } from '../engine/intensity/site-intensity.ts';
+import { INTENSITY_MEASURE, intensityMeasureOf } from '../engine/intensity/site-intensity.ts';
 import type { Study } from '../engine/model.ts';
 import { parseMeasure } from '../engine/motion/measure.ts';
 
@@ -32,10 +32,10 @@ const count = (n: number, one: string, many: string): string => `${n} ${n === 1 
 /**
  * The work of screening `study` with `ruptureCount` ruptures: every community against every
  * rupture for every level of every measure computed. Measures are those of the settings plus
- * PGA when absent (the engine adds it for intensity), with the settings' levels or the defaults.
+ * PGA and the intensity measure when absent (the engine adds them for intensity), with the settings' levels or the defaults.
  */
 export function studyWork(study: Study, ruptureCount: number): StudyWork {
-  const keys = study.settings.measures.includes(INTENSITY_MEASURE) ? study.settings.measures : [...study.settings.measures, INTENSITY_MEASURE];
+  const keys = [...new Set([...study.settings.measures, INTENSITY_MEASURE, intensityMeasureOf(study.settings)])];
   const measureLevels = keys.reduce((n, key) => n + levelsFor(study.settings.levels, key, parseMeasure(key)).length, 0);
   const communities = study.communities.length;
   return {

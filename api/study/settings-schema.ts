@@ -31,6 +31,7 @@ const settingsSchema = z.object({
   magnitudeStep: numberIn({ min: 0.01, max: 0.5, unit: 'magnitude units' }).optional(),
   ruptureSpacingKm: numberIn({ min: 0.5, max: 50, unit: 'km' }).optional(),
   zoneCellKm: numberIn({ min: 1, max: 100, unit: 'km' }).optional(),
+  intensityMeasure: z.enum(['PGA', 'PGV'], { error: (i) => `expected "PGA" or "PGV" (the Worden et al. 2012 relation intensity is read from), got ${describeValue(i.input)}` }).optional(),
 });
 
 export const SETTINGS_KEYS = Object.keys(settingsSchema.shape);
@@ -81,6 +82,7 @@ export function readSettings(raw: unknown, issues: IssueList, path: readonly Pro
         magnitudeStep: parsed.magnitudeStep ?? DEFAULT_SETTINGS.magnitudeStep,
         ruptureSpacingKm: parsed.ruptureSpacingKm ?? DEFAULT_SETTINGS.ruptureSpacingKm,
         zoneCellKm: parsed.zoneCellKm ?? DEFAULT_SETTINGS.zoneCellKm,
+        ...(parsed.intensityMeasure ? { intensityMeasure: parsed.intensityMeasure } : {}),
       }
     : undefined;
 }

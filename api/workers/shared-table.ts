@@ -32,5 +32,8 @@ export function shareTable(table: RuptureTable): RuptureTable {
     planeStart: shared(table.planeStart),
     planeCorners: shared(table.planeCorners),
     isPoint: shared(table.isPoint),
+    cellRule: shared(table.cellRule),
+    cellCentre: shared(table.cellCentre),
+    cellRadiusKm: shared(table.cellRadiusKm),
   };
 }

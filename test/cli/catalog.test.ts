@@ -260,8 +260,8 @@ describe('tremora catalog felt', () => {
     expect(out).toEqual(
       expect.arrayContaining([
         'Test Cove: 2 of 3 events within 300 km likely felt, 1 strongly',
-        '  2001-02-03  M 6.0 Mw   30 km to the north       MMI V',
-        '  2003-04-05  M 6.5 Mw   5 km to the south-east   MMI VII   strongly felt',
+        '  2001-02-03  M 6.0 Mw   30 km to the north       MMI VI',
+        '  2003-04-05  M 6.5 Mw   5 km to the south-east   MMI VIII  strongly felt',
         'Distant Shoal: no catalog event within 300 km',
         '  - 1 event left out: not moment magnitude',
       ]),

@@ -2,12 +2,15 @@ import geodesic from 'geographiclib-geodesic';
 import { describe, expect, it } from 'vitest';
 import { Cancelled, InvalidInput, UnknownModel } from '../../api/engine/errors.ts';
 import { ruptureDistances } from '../../api/engine/geometry/distances.ts';
+import { cellUsedAt } from '../../api/engine/geometry/cell-refinement.ts';
 import { pgaForMmi, mmiFromPga } from '../../api/engine/intensity/worden2012.ts';
 import type { Community, FaultSource, Study, ZoneSource } from '../../api/engine/model.ts';
+import { normalSurvival } from '../../api/engine/hazard/normal-cdf.ts';
 import { cornell79LnPga } from '../../api/engine/motion/cornell79.ts';
 import { discretiseStudy } from '../../api/engine/ruptures/discretise.ts';
 import { screenStudy } from '../../api/engine/screen-study.ts';
 import { expectClose, expectRelative } from '../helpers/close.ts';
+import { allKindsStudy } from './fixtures/all-kinds-study.ts';
 
 /*
  * A small invented study in open ocean (test data, not check values): one vertical strike-slip
@@ -92,8 +95,10 @@ describe('screenStudy: community inside the zone', () => {
   it('median-only variant (truncation 0) equals Σ rates of the engine\'s ruptures whose Cornell (1979) median exceeds each level (checks the sum, not the discretisation)', () => {
     const stepStudy: Study = { ...study, communities: [study.communities[0]!], settings: { ...study.settings, truncationSigma: 0 } };
     const stepResult = screenStudy(stepStudy).communities[0]!;
-    const { frame, ruptures } = discretiseStudy(stepStudy);
+    const { frame, ruptures: all } = discretiseStudy(stepStudy);
     const site = frame.toLocal([-150.2, -47]);
+    // A refined zone cell counts as itself or as its squares by the site's distance (geometry/cell-refinement.ts).
+    const ruptures = all.filter((r) => !r.cellUse || cellUsedAt(r.cellUse.near, r.cellUse.centre.x, r.cellUse.centre.y, r.cellUse.radiusKm, site.x, site.y));
     const medians = ruptures.map((r) => cornell79LnPga(r.context.magnitude, ruptureDistances(r.surface, site).rhypoKm));
     const levels = stepStudy.settings.levels.PGA!;
     levels.forEach((x, j) => {
@@ -133,13 +138,32 @@ describe('screenStudy: community inside the zone', () => {
     expect(inside.band.mmi475).toBe(mmi);
     const expectedBand = mmi >= 8 ? 'refer-first' : mmi >= 7 ? 'refer-soon' : mmi >= 6 ? 'prepare' : 'inform';
     expect(inside.band.id).toBe(expectedBand);
-    // Chance of reaching VI in 50 years: from the curve read log–log at Worden's PGA for MMI 6.
-    const t = pgaForMmi(6);
-    const j = pga.levels.findIndex((x) => x > t);
-    const rate = Math.exp(
-      Math.log(pga.annualRate[j - 1]!) + (Math.log(t / pga.levels[j - 1]!) / Math.log(pga.levels[j]! / pga.levels[j - 1]!)) * Math.log(pga.annualRate[j]! / pga.annualRate[j - 1]!),
-    );
-    expectClose(inside.intensity.chanceOfReaching['50']!.VI, -Math.expm1(-50 * rate), 1e-12, 'Poisson at the MMI VI threshold');
+    // Chance of reaching VI (MMI ≥ 5.5) in 50 years with the conversion's scatter (σ 0.73 MMI,
+    // Worden et al. 2012, from memory), summed independently by parts: λ(y0) P(y0) + ∫ λ(y) dP(y)
+    // over the computed levels, λ read log–log, P(y) = 1 − Φ((5.5 − MMI(y)) / σ).
+    const chance = (y: number) => normalSurvival((5.5 - mmiFromPga(y)) / 0.73);
+    const lambda = (y: number) => {
+      const j = Math.max(1, pga.levels.findIndex((x) => x >= y));
+      const [x0, x1, r0, r1] = [pga.levels[j - 1]!, pga.levels[j]!, pga.annualRate[j - 1]!, pga.annualRate[j]!];
+      return r1 > 0 ? Math.exp(Math.log(r0) + (Math.log(y / x0) / Math.log(x1 / x0)) * Math.log(r1 / r0)) : r0 + ((r1 - r0) * Math.log(y / x0)) / Math.log(x1 / x0);
+    };
+    const [lo, hi] = [pga.levels[0]!, pga.levels.at(-1)!];
+    const n = 20000;
+    let rate = lambda(lo) * chance(lo);
+    for (let i = 0; i < n; i++) {
+      const ya = lo * (hi / lo) ** (i / n), yb = lo * (hi / lo) ** ((i + 1) / n);
+      rate += lambda(Math.sqrt(ya * yb)) * (chance(yb) - chance(ya));
+    }
+    expectRelative(inside.intensity.chanceOfReaching['50']!.VI, -Math.expm1(-50 * rate), 1e-3, 'Poisson of the curve convolved with the conversion scatter, summed by parts');
+    expect(inside.intensity.conversion).toEqual({ measure: 'PGA', relation: 'Worden et al. (2012)', sigmaMmi: 0.73 });
+  });
+
+  it('intensity from the PGV relation when the settings ask for it, PGV computed even when not listed', () => {
+    const base = allKindsStudy({ measures: ['PGA'], intensityMeasure: 'PGV' });
+    const viaPgv = screenStudy({ ...base, communities: base.communities.slice(0, 1) }).communities[0]!;
+    expect(viaPgv.intensity.conversion).toEqual({ measure: 'PGV', relation: 'Worden et al. (2012)', sigmaMmi: 0.65 });
+    expect(viaPgv.intensity.atReturnPeriod['475']!.fromMeasure).toBe('PGV');
+    expect(Object.keys(viaPgv.curves)).toEqual(['PGA']);
   });
 
   it('deaggregation: shares sum to 1 within 1e-9; the fault\'s magnitudes are all 6.5, the zone\'s 5–6.5', () => {

@@ -115,13 +115,13 @@ export const FELT_CATALOG_CSV = [
  *   near-strong: Repi 5 km, R = 11.180 km, PGA 0.353952 g, MMI 7.7997 (VII): strongly felt;
  *   local-scale (ML): left out unless all magnitudes are asked for; then Repi 10 km,
  *   R = 14.142 km, PGA 0.199895 g, MMI 6.8816 (VI): strongly felt.
- * Roman numerals name the level reached (MMI rounded down; common practice).
+ * Roman numerals name the nearest level (MMI rounded; mmi-roman.ts).
  */
 export const FELT_EXPECTED = {
-  moderate: { pgaG: 0.10273, mmi: 5.8119, roman: 'V', distanceKm: 30, bearingDeg: 0, compass: 'N' },
+  moderate: { pgaG: 0.10273, mmi: 5.8119, roman: 'VI', distanceKm: 30, bearingDeg: 0, compass: 'N' },
   'small-far': { pgaG: 0.00438911, mmi: 2.7625 },
-  'near-strong': { pgaG: 0.353952, mmi: 7.7997, roman: 'VII', distanceKm: 5, bearingDeg: 135, compass: 'SE' },
-  'local-scale': { pgaG: 0.199895, mmi: 6.8816, roman: 'VI', distanceKm: 10, bearingDeg: 0, compass: 'N' },
+  'near-strong': { pgaG: 0.353952, mmi: 7.7997, roman: 'VIII', distanceKm: 5, bearingDeg: 135, compass: 'SE' },
+  'local-scale': { pgaG: 0.199895, mmi: 6.8816, roman: 'VII', distanceKm: 10, bearingDeg: 0, compass: 'N' },
 } as const;
 
 /**

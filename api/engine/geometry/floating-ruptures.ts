@@ -25,11 +25,28 @@ export interface FloatingRupture {
 const FIT_SLACK_KM = 1e-9;
 
 /**
- * Start offsets (km) of a rupture of `sizeKm` along an extent of `extentKm`: evenly spaced from
- * 0 to extentKm - sizeKm, no more than `spacingKm` apart, so the first and last positions reach
- * the two ends; one position at 0 when the rupture fills the extent.
+ * Start offsets (km) of a rupture of `sizeKm` along an extent of `extentKm`, by the midpoint
+ * rule: the room (extentKm - sizeKm) is cut into the fewest equal intervals no wider than
+ * `spacingKm`, and each interval puts one position at its middle, with an equal share. The
+ * rupture's start is uniform over the room, and the midpoint rule integrates over that
+ * uniform start with an error of order spacing² (Press et al. 2007, Numerical Recipes 3rd ed.,
+ * section 4.1); putting equal shares on both ends as well over-weights the fault's ends
+ * (test/engine/hazard/floating-convergence.test.ts measures both against a fine case). One
+ * position at 0 when the rupture fills the extent.
  */
 export function positionOffsetsKm(extentKm: number, sizeKm: number, spacingKm: number): number[] {
+  const room = extentKm - sizeKm;
+  if (room <= FIT_SLACK_KM) return [0];
+  const intervals = Math.max(1, Math.ceil((room - FIT_SLACK_KM) / spacingKm));
+  return Array.from({ length: intervals }, (_, k) => (room * (k + 0.5)) / intervals);
+}
+
+/**
+ * Start offsets (km) from 0 to extentKm - sizeKm, both ends included, no more than `spacingKm`
+ * apart: for searching the placement nearest a site (a scenario's worst case wants the
+ * extremes), not for integrating over positions (positionOffsetsKm).
+ */
+export function endToEndOffsetsKm(extentKm: number, sizeKm: number, spacingKm: number): number[] {
   const room = extentKm - sizeKm;
   if (room <= FIT_SLACK_KM) return [0];
   const gaps = Math.max(1, Math.ceil((room - FIT_SLACK_KM) / spacingKm));
@@ -39,12 +56,15 @@ export function positionOffsetsKm(extentKm: number, sizeKm: number, spacingKm: n
 export interface FloatingRupturesOptions {
   /** Largest step between neighbouring positions along strike and down dip, km. */
   readonly spacingKm: number;
+  /** Positions from end to end (endToEndOffsetsKm) instead of by the midpoint rule; false by default. */
+  readonly endToEnd?: boolean;
 }
 
 /**
  * Every position of a rupture of `dimensions` (already fitted to the fault, see
  * rupture-scaling.ts fitDimensions) on `surface`, in rows from the top down, each row along
- * strike from the trace's start; neighbours at most `spacingKm` apart. A rupture follows the trace across segment
+ * strike from the trace's start; neighbours at most `spacingKm` apart, placed by the midpoint
+ * rule (positionOffsetsKm). A rupture follows the trace across segment
  * joints, so it is then several planes.
  */
 export function floatingRuptures(surface: FaultSurface, dimensions: RuptureDimensions, options: FloatingRupturesOptions): FloatingRupture[] {
@@ -53,8 +73,9 @@ export function floatingRuptures(surface: FaultSurface, dimensions: RuptureDimen
   const lengthKm = Math.min(dimensions.lengthKm, surface.lengthKm);
   const widthKm = Math.min(dimensions.widthKm, surface.widthKm);
   const ruptures: FloatingRupture[] = [];
-  for (const downDipKm of positionOffsetsKm(surface.widthKm, widthKm, spacingKm)) {
-    for (const alongKm of positionOffsetsKm(surface.lengthKm, lengthKm, spacingKm)) {
+  const offsetsKm = options.endToEnd ? endToEndOffsetsKm : positionOffsetsKm;
+  for (const downDipKm of offsetsKm(surface.widthKm, widthKm, spacingKm)) {
+    for (const alongKm of offsetsKm(surface.lengthKm, lengthKm, spacingKm)) {
       ruptures.push(floatingRuptureAt(surface, { lengthKm, widthKm }, alongKm, downDipKm));
     }
   }

@@ -51,17 +51,20 @@ export function createLocalFrame(origin: LonLat): LocalFrame {
 }
 
 /**
- * The frame of a study: centred on the middle of the bounding box of its communities and all
- * source coordinates. Longitudes are unwrapped around the first one, so a study straddling the
- * 180° meridian gets its true middle.
+ * The frame of a study: centred on the middle of the bounding box of all its source
+ * coordinates (of its communities when it has no sources). Not the communities': the frame's
+ * small distortion away from its origin would then change every community's distances when
+ * one is added or moved. Longitudes are unwrapped around the first one, so a study straddling
+ * the 180° meridian gets its true middle.
  */
 export function frameForStudy(study: Pick<Study, 'communities' | 'sources'>): LocalFrame {
-  const points: LonLat[] = study.communities.map((c) => [c.lon, c.lat] as const);
+  const points: LonLat[] = [];
   for (const source of study.sources) {
     if (source.kind === 'fault') points.push(...source.trace);
     else if (source.kind === 'zone') for (const ring of source.rings) points.push(...ring);
     else points.push(source.location);
   }
+  if (points.length === 0) points.push(...study.communities.map((c) => [c.lon, c.lat] as const));
   const first = points[0];
   if (first === undefined) {
     throw new InvalidInput([{ path: 'communities', message: 'expected at least one community or source to centre the local frame on' }]);

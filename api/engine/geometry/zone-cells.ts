@@ -11,7 +11,11 @@ export interface ZoneCell {
   readonly areaKm2: number;
   /** areaKm2 / the zone's area: the cell's share of the zone's rate. */
   readonly share: number;
+  /** The square the cell was cut with: west, south, east, north edges, local km. */
+  readonly box: CellBox;
 }
+
+export type CellBox = readonly [x0: number, y0: number, x1: number, y1: number];
 
 type Vertex = readonly [x: number, y: number];
 
@@ -67,18 +71,13 @@ function clipToBox(ring: readonly Vertex[], x0: number, y0: number, x1: number, 
   return clipHalfPlane(r, (v) => v[1] <= y1, atY(y1));
 }
 
-/**
- * The zone's polygon cut into squares of `cellKm` (km) aligned with the local frame's axes
- * and on a grid through its origin, south row first, west to east. A cell keeps the part
- * inside the polygon (holes removed): its share of the zone's rate is that part's area over the
- * zone's, and its seismicity sits at that part's centroid. Ring edges are straight lines in the
- * local frame between the projected vertices; areas are planar there (not turf's spherical
- * area). Each ring is clipped to each cell on its own, outer rings adding and holes
- * subtracting, which is exact for holes inside the outer ring as GeoJSON requires; a general
- * polygon-clipping library was tried and failed on edges lying a hair off grid lines.
- */
-export function zoneCells(zone: ZoneSource, frame: LocalFrame, cellKm: number): ZoneCell[] {
-  if (!(cellKm > 0)) throw new InvalidInput([{ path: 'settings.zoneCellKm', message: `expected a cell size > 0 km, got ${cellKm}` }]);
+/** A zone's rings in the local frame, each ring's sign (outer adds, holes subtract) and its area. */
+interface ZoneRings {
+  readonly rings: readonly Vertex[][];
+  readonly signs: readonly number[];
+}
+
+function zoneRings(zone: ZoneSource, frame: LocalFrame): ZoneRings & { areaKm2: number } {
   const rings = zone.rings.map((ring) => {
     const open = ring.map((p): Vertex => {
       const { x, y } = frame.toLocal(p);
@@ -91,37 +90,84 @@ export function zoneCells(zone: ZoneSource, frame: LocalFrame, cellKm: number): 
   });
   // Outer ring adds, holes subtract, whatever way each ring winds.
   const signs = rings.map((ring, r) => (r === 0 ? 1 : -1) * Math.sign(ringMoments(ring).area));
-  const zoneArea = rings.reduce((sum, ring, r) => sum + (signs[r] as number) * ringMoments(ring).area, 0);
-  if (!(zoneArea > 0)) throw new InvalidInput([{ path: 'coordinates', message: `zone "${zone.id}": expected a polygon with area, got ${zoneArea} km²` }]);
+  const areaKm2 = rings.reduce((sum, ring, r) => sum + (signs[r] as number) * ringMoments(ring).area, 0);
+  if (!(areaKm2 > 0)) throw new InvalidInput([{ path: 'coordinates', message: `zone "${zone.id}": expected a polygon with area, got ${areaKm2} km²` }]);
+  return { rings, signs, areaKm2 };
+}
 
-  const outer = rings[0] ?? [];
+/** The part of the zone inside one box: its area (km²) and centroid, or null for nothing or a sliver. */
+function boxPart(zone: ZoneRings, box: CellBox): { centre: PointXY; areaKm2: number } | null {
+  const [x0, y0, x1, y1] = box;
+  let area = 0;
+  let mx = 0;
+  let my = 0;
+  zone.rings.forEach((ring, r) => {
+    const clipped = clipToBox(ring, x0, y0, x1, y1);
+    if (clipped.length < 3) return;
+    const m = ringMoments(clipped);
+    const sign = zone.signs[r] as number;
+    area += sign * m.area;
+    mx += sign * m.mx;
+    my += sign * m.my;
+  });
+  return area > SLIVER_FRACTION * (x1 - x0) * (y1 - y0) ? { centre: { x: mx / area, y: my / area }, areaKm2: area } : null;
+}
+
+/**
+ * The zone's polygon cut into squares of `cellKm` (km) aligned with the local frame's axes,
+ * on a grid anchored to the zone itself (grid lines through the first vertex of its outer
+ * ring), so the cells do not move when anything else in the study (a community, another
+ * source) moves the frame's origin; south row first, west to east. A cell keeps the part
+ * inside the polygon (holes removed): its share of the zone's rate is that part's area over the
+ * zone's, and its seismicity sits at that part's centroid. Ring edges are straight lines in the
+ * local frame between the projected vertices; areas are planar there (not turf's spherical
+ * area). Each ring is clipped to each cell on its own, outer rings adding and holes
+ * subtracting, which is exact for holes inside the outer ring as GeoJSON requires; a general
+ * polygon-clipping library was tried and failed on edges lying a hair off grid lines.
+ */
+export function zoneCells(zone: ZoneSource, frame: LocalFrame, cellKm: number): ZoneCell[] {
+  if (!(cellKm > 0)) throw new InvalidInput([{ path: 'settings.zoneCellKm', message: `expected a cell size > 0 km, got ${cellKm}` }]);
+  const prepared = zoneRings(zone, frame);
+  const outer = prepared.rings[0] ?? [];
+  const [ax, ay] = outer[0] ?? [0, 0];
   const xs = outer.map((v) => v[0]);
   const ys = outer.map((v) => v[1]);
-  const col0 = Math.floor(Math.min(...xs) / cellKm);
-  const col1 = Math.ceil(Math.max(...xs) / cellKm);
-  const row0 = Math.floor(Math.min(...ys) / cellKm);
-  const row1 = Math.ceil(Math.max(...ys) / cellKm);
+  const col0 = Math.floor((Math.min(...xs) - ax) / cellKm);
+  const col1 = Math.ceil((Math.max(...xs) - ax) / cellKm);
+  const row0 = Math.floor((Math.min(...ys) - ay) / cellKm);
+  const row1 = Math.ceil((Math.max(...ys) - ay) / cellKm);
 
-  const parts: { centre: PointXY; areaKm2: number }[] = [];
+  const parts: { centre: PointXY; areaKm2: number; box: CellBox }[] = [];
   for (let row = row0; row < row1; row++) {
     for (let col = col0; col < col1; col++) {
-      const [x0, y0, x1, y1] = [col * cellKm, row * cellKm, (col + 1) * cellKm, (row + 1) * cellKm];
-      let area = 0;
-      let mx = 0;
-      let my = 0;
-      rings.forEach((ring, r) => {
-        const clipped = clipToBox(ring, x0, y0, x1, y1);
-        if (clipped.length < 3) return;
-        const m = ringMoments(clipped);
-        const sign = signs[r] as number;
-        area += sign * m.area;
-        mx += sign * m.mx;
-        my += sign * m.my;
-      });
-      if (area > SLIVER_FRACTION * cellKm * cellKm) parts.push({ centre: { x: mx / area, y: my / area }, areaKm2: area });
+      const box: CellBox = [ax + col * cellKm, ay + row * cellKm, ax + (col + 1) * cellKm, ay + (row + 1) * cellKm];
+      const part = boxPart(prepared, box);
+      if (part) parts.push({ ...part, box });
     }
   }
   // Shares over the sum of the parts, so they add to 1 whatever the rounding.
   const total = compensatedSum(parts.map((p) => p.areaKm2));
-  return parts.map((p) => ({ centre: p.centre, areaKm2: p.areaKm2, share: p.areaKm2 / total }));
+  return parts.map((p) => ({ centre: p.centre, areaKm2: p.areaKm2, share: p.areaKm2 / total, box: p.box }));
+}
+
+/**
+ * One cell of zoneCells cut into `parts` × `parts` equal squares, each keeping the part of the
+ * zone inside it as zoneCells does. Their shares are the cell's share split by area, so they add
+ * to the cell's share whatever the rounding.
+ */
+export function subdivideZoneCell(zone: ZoneSource, frame: LocalFrame, cell: ZoneCell, parts: number): ZoneCell[] {
+  const prepared = zoneRings(zone, frame);
+  const [x0, y0, x1, y1] = cell.box;
+  const dx = (x1 - x0) / parts;
+  const dy = (y1 - y0) / parts;
+  const pieces: { centre: PointXY; areaKm2: number; box: CellBox }[] = [];
+  for (let row = 0; row < parts; row++) {
+    for (let col = 0; col < parts; col++) {
+      const box: CellBox = [x0 + col * dx, y0 + row * dy, col === parts - 1 ? x1 : x0 + (col + 1) * dx, row === parts - 1 ? y1 : y0 + (row + 1) * dy];
+      const part = boxPart(prepared, box);
+      if (part) pieces.push({ ...part, box });
+    }
+  }
+  const total = compensatedSum(pieces.map((p) => p.areaKm2));
+  return pieces.map((p) => ({ centre: p.centre, areaKm2: p.areaKm2, share: (cell.share * p.areaKm2) / total, box: p.box }));
 }

@@ -4,7 +4,7 @@ import type { PointKm, Rupture, RupturePlane } from '../ruptures/rupture.ts';
 import { MECHANISMS, PLANE_STRIDE, type RuptureTable } from './rupture-table.ts';
 
 /** What the table keeps of a rupture, its rate aside (a Rupture, or a placed one with its share). */
-export type TableRupture = Pick<Rupture, 'sourceIndex' | 'sourceId' | 'context' | 'surface'>;
+export type TableRupture = Pick<Rupture, 'sourceIndex' | 'sourceId' | 'context' | 'surface' | 'cellUse'>;
 
 /** Ruptures (and planes) the columns first have room for; they double as needed. */
 const FIRST_CAPACITY = 4096;
@@ -44,6 +44,9 @@ export class RuptureTableBuilder {
   hypocentre = new Float64Array(3 * FIRST_CAPACITY);
   planeStart = new Int32Array(FIRST_CAPACITY + 1);
   isPoint = new Uint8Array(FIRST_CAPACITY);
+  cellRule = new Uint8Array(FIRST_CAPACITY);
+  cellCentre = new Float64Array(2 * FIRST_CAPACITY);
+  cellRadiusKm = new Float64Array(FIRST_CAPACITY);
   planeCorners = new Float64Array(PLANE_STRIDE * FIRST_CAPACITY);
   /** Source id by source index; a source without ruptures keeps '' (dense, for structured clone). */
   readonly sourceIds: string[] = [];
@@ -63,6 +66,9 @@ export class RuptureTableBuilder {
     this.hypocentre = grown(this.hypocentre, 3 * capacity);
     this.planeStart = grown(this.planeStart, capacity + 1);
     this.isPoint = grown(this.isPoint, capacity);
+    this.cellRule = grown(this.cellRule, capacity);
+    this.cellCentre = grown(this.cellCentre, 2 * capacity);
+    this.cellRadiusKm = grown(this.cellRadiusKm, capacity);
   }
 
   /** Appends one rupture with its annual rate (per year). */
@@ -88,6 +94,13 @@ export class RuptureTableBuilder {
     this.hypocentre[3 * i + 1] = h.y;
     this.hypocentre[3 * i + 2] = h.z;
     this.planeStart[i] = this.planes;
+    const use = rupture.cellUse;
+    if (use) {
+      this.cellRule[i] = use.near ? 2 : 1;
+      this.cellCentre[2 * i] = use.centre.x;
+      this.cellCentre[2 * i + 1] = use.centre.y;
+      this.cellRadiusKm[i] = use.radiusKm;
+    }
     if (surface.kind !== 'planes') {
       this.isPoint[i] = 1;
       return;
@@ -132,6 +145,9 @@ export class RuptureTableBuilder {
       planeStart: trimmed(this.planeStart, count + 1),
       planeCorners: trimmed(this.planeCorners, PLANE_STRIDE * planes),
       isPoint: trimmed(this.isPoint, count),
+      cellRule: trimmed(this.cellRule, count),
+      cellCentre: trimmed(this.cellCentre, 2 * count),
+      cellRadiusKm: trimmed(this.cellRadiusKm, count),
     };
   }
 }

@@ -1,3 +1,4 @@
+import { cellUsedAt } from '../geometry/cell-refinement.ts';
 import { TECTONIC_SETTINGS } from '../model.ts';
 import type { Mechanism, TectonicSetting } from '../model.ts';
 import type { RuptureContext } from '../motion/types.ts';
@@ -38,6 +39,21 @@ export interface RuptureTable {
   readonly planeCorners: Float64Array;
   /** 1 where the rupture is a point (zone cell or point source), 0 where it is planar. */
   readonly isPoint: Uint8Array;
+  /**
+   * Which sites use rupture i (geometry/cell-refinement.ts): 0 every site; 1 sites farther than
+   * cellRadiusKm[i] from the coarse cell's centre; 2 sites within it.
+   */
+  readonly cellRule: Uint8Array;
+  /** The coarse cell's centre x, y of rupture i at 2i, 2i + 1 (rules 1 and 2). */
+  readonly cellCentre: Float64Array;
+  readonly cellRadiusKm: Float64Array;
+}
+
+/** Whether rupture i of `table` counts at the site (x, y), local km. */
+export function ruptureUsedAt(table: RuptureTable, i: number, x: number, y: number): boolean {
+  const rule = table.cellRule[i];
+  if (rule === 0) return true;
+  return cellUsedAt(rule === 2, table.cellCentre[2 * i] as number, table.cellCentre[2 * i + 1] as number, table.cellRadiusKm[i] as number, x, y);
 }
 
 /** Indices of the ruptures of one setting, in table order. */

@@ -1,6 +1,7 @@
 import { addGc2Segment, createGc2Sums, gc2TKm, gc2UKm, resetGc2Sums, ry0FromU, type Gc2Sums } from '../geometry/gc2.ts';
 import type { PointXY } from '../geometry/projection.ts';
 import type { DistanceName, PairDistances } from '../motion/types.ts';
+import { ruptureUsedAt } from './rupture-table.ts';
 import {
   CORNERS,
   EDGE,
@@ -163,7 +164,7 @@ function gc2(planes: Float64Array, first: number, last: number, px: number, py: 
 export function siteDistances(options: SiteDistancesOptions, out: PairBuffer): void {
   const { geometry, ruptures, maxDistanceKm, distances } = options;
   const { table, planes, bounds } = geometry;
-  const { planeStart, hypocentre } = table;
+  const { planeStart, hypocentre, cellRule } = table;
   const { rupture, rjbKm: rjbOut, rrupKm: rrupOut, rxKm: rxOut, ry0Km: ry0Out, rhypoKm: rhypoOut, repiKm: repiOut } = out;
   const px = options.site.x, py = options.site.y;
   const wantRrup = distances.has('rrupKm'), wantGc2 = distances.has('rxKm') || distances.has('ry0Km');
@@ -173,6 +174,7 @@ export function siteDistances(options: SiteDistancesOptions, out: PairBuffer): v
   let count = 0;
   for (let local = 0; local < ruptures.length; local++) {
     const i = ruptures[local] as number;
+    if (cellRule[i] !== 0 && !ruptureUsedAt(table, i, px, py)) continue;
     const first = planeStart[i] as number;
     const last = planeStart[i + 1] as number;
     const hx = hypocentre[3 * i] as number, hy = hypocentre[3 * i + 1] as number, hz = hypocentre[3 * i + 2] as number;

@@ -1,6 +1,6 @@
 import { frameForStudy, type LocalFrame } from '../geometry/projection.ts';
 import type { Study } from '../model.ts';
-import { visitSourceRuptures } from '../ruptures/discretise.ts';
+import { communitySites, visitSourceRuptures } from '../ruptures/discretise.ts';
 import type { PlacedRupture } from '../ruptures/placement.ts';
 import type { RuptureTable } from './rupture-table.ts';
 import { RuptureTableBuilder } from './rupture-table-builder.ts';
@@ -23,7 +23,8 @@ export function studyRuptureTable(study: Study): StudyRuptureTable {
   const builder = new RuptureTableBuilder();
   // As discretise.ts's toRupture: the bin's rate times the rupture's share.
   const add = (placed: PlacedRupture, binRate: number): void => builder.add(placed, binRate * placed.share);
-  study.sources.forEach((source, i) => visitSourceRuptures(source, i, frame, study.settings, add));
+  const sites = communitySites(study, frame);
+  study.sources.forEach((source, i) => visitSourceRuptures(source, i, frame, study.settings, add, sites));
   // One entry per source, as the sources' walk numbers them ('' for a source without ruptures).
   while (builder.sourceIds.length < study.sources.length) builder.sourceIds.push('');
   return { frame, table: builder.table() };

@@ -1,16 +1,21 @@
-import { levelAtReturnPeriod, annualRateAtLevel } from '../hazard/curve-interpolation.ts';
+import { levelAtReturnPeriod } from '../hazard/curve-interpolation.ts';
 import { poissonProbability } from '../hazard/poisson.ts';
 import type { IntensityResult, ScreeningBand } from '../results.ts';
 import { mmiRoman } from './mmi-roman.ts';
 import { screeningBand } from './screening-band.ts';
-import { mmiFromPga, pgaForMmi } from './worden2012.ts';
+import { annualRateOfReachingMmi } from './intensity-scatter.ts';
+import { INTENSITY_CONVERSIONS, mmiFromMotion, type IntensityConversion } from './worden2012.ts';
 
 /**
- * Intensity is read from the PGA hazard curve: every ground-motion model predicts PGA (AGA16
- * and Cornell79 have no PGV), so one conversion serves every setting and branch alike, where
- * PGV would need a derived motion for some models.
+ * Intensity is read from the PGA hazard curve by default: every ground-motion model predicts
+ * PGA (AGA16 and Cornell79 have no PGV), so one conversion serves every setting and branch
+ * alike, where PGV needs a motion derived from SA for some models. A study may ask for the PGV
+ * relation instead (settings.intensityMeasure); the result records which one it used.
  */
 export const INTENSITY_MEASURE = 'PGA';
+
+/** The measure a study's intensity is read from. */
+export const intensityMeasureOf = (settings: { readonly intensityMeasure?: 'PGA' | 'PGV' }): 'PGA' | 'PGV' => settings.intensityMeasure ?? INTENSITY_MEASURE;
 
 /** The intensities whose chance of being reached is reported. */
 export const REPORTED_INTENSITIES = { VI: 6, VII: 7, VIII: 8 } as const;
@@ -18,12 +23,20 @@ export const REPORTED_INTENSITIES = { VI: 6, VII: 7, VIII: 8 } as const;
 /** The band is always set from the 475-year intensity (10% in 50 years), listed or not. */
 export const BAND_RETURN_PERIOD_YEARS = 475;
 
+/**
+ * A whole level is reached when MMI rounds to it or more: MMI ≥ level − ½, as mmiRoman names
+ * levels by the rounded value (6.97 is VII).
+ */
+export const ROUNDING_HALF_MMI = 0.5;
+
 export interface SiteIntensityOptions {
-  /** The mean PGA hazard curve, g. */
+  /** The mean hazard curve of the conversion's measure, g (PGA) or cm/s (PGV). */
   readonly levels: readonly number[];
   readonly annualRate: readonly number[];
   readonly returnPeriodsYears: readonly number[];
   readonly horizonsYears: readonly number[];
+  /** Worden et al. (2012) from PGA (the default) or from PGV. */
+  readonly conversion?: IntensityConversion;
 }
 
 export interface SiteIntensity {
@@ -33,31 +46,32 @@ export interface SiteIntensity {
 }
 
 /**
- * MMI (Worden et al. 2012) at each return period from the PGA there; the chance of reaching
- * MMI VI, VII and VIII in each horizon from the PGA curve read log–log at each intensity's PGA
- * threshold (Poisson); and the screening band from the 475-year MMI.
+ * MMI (Worden et al. 2012) at each return period from the median conversion of the motion
+ * there; the chance of reaching MMI VI, VII and VIII in each horizon from the hazard curve
+ * convolved with the conversion's scatter (intensity-scatter.ts, Poisson); and the screening
+ * band from the 475-year MMI.
  */
 export function siteIntensity(options: SiteIntensityOptions): SiteIntensity {
   const { levels, annualRate } = options;
+  const conversion = options.conversion ?? INTENSITY_CONVERSIONS.PGA;
+  const { measure, gmice, toRelationUnits } = conversion;
+  const toMmi = (y: number): number => mmiFromMotion(y * toRelationUnits, gmice);
+  const unit = measure === 'PGA' ? 'g' : 'cm/s';
   const warnings: string[] = [];
-
   const atReturnPeriod: Record<string, { mmi: number | null; roman: string | null; fromMeasure: string }> = {};
   for (const years of options.returnPeriodsYears) {
     const { level } = levelAtReturnPeriod(levels, annualRate, years);
-    const mmi = level === null ? null : mmiFromPga(level);
-    atReturnPeriod[String(years)] = { mmi, roman: mmi === null ? null : mmiRoman(mmi), fromMeasure: INTENSITY_MEASURE };
+    const mmi = level === null ? null : toMmi(level);
+    atReturnPeriod[String(years)] = { mmi, roman: mmi === null ? null : mmiRoman(mmi), fromMeasure: measure };
   }
-
-  const thresholdRates = Object.entries(REPORTED_INTENSITIES).map(([roman, mmi]) => {
-    const thresholdG = pgaForMmi(mmi);
-    const read = annualRateAtLevel(levels, annualRate, thresholdG);
-    if (read.status !== 'ok') {
-      const side = read.status === 'below-lowest-level' ? 'a lower' : 'an upper';
-      warnings.push(
-        `the PGA for MMI ${roman} (${thresholdG.toPrecision(3)} g) is outside the computed levels; its chance is ${side} bound`,
-      );
+  const lowest = levels[0];
+  const thresholdRates = Object.entries(REPORTED_INTENSITIES).map(([roman, level]) => {
+    const threshold = level - ROUNDING_HALF_MMI;
+    // Below the lowest level the curve says nothing; motions there could still reach the level with the scatter.
+    if (lowest !== undefined && toMmi(lowest) + 2 * gmice.sigmaMmi > threshold) {
+      warnings.push(`the lowest ${measure} level (${lowest} ${unit}) could reach MMI ${roman} with the conversion's scatter; its chance is a lower bound`);
     }
-    return { roman: roman as keyof typeof REPORTED_INTENSITIES, rate: read.annualRate };
+    return { roman: roman as keyof typeof REPORTED_INTENSITIES, rate: annualRateOfReachingMmi(levels, annualRate, threshold, conversion) };
   });
   const chanceOfReaching: Record<string, Record<'VI' | 'VII' | 'VIII', number>> = {};
   for (const years of options.horizonsYears) {
@@ -65,14 +79,17 @@ export function siteIntensity(options: SiteIntensityOptions): SiteIntensity {
     for (const { roman, rate } of thresholdRates) chances[roman] = poissonProbability(rate, years);
     chanceOfReaching[String(years)] = chances;
   }
-
   const band475 = levelAtReturnPeriod(levels, annualRate, BAND_RETURN_PERIOD_YEARS);
-  const mmi475 = band475.level === null ? null : mmiFromPga(band475.level);
+  const mmi475 = band475.level === null ? null : toMmi(band475.level);
   let bandMmi = mmi475;
   if (band475.status === 'above-highest-level') {
     const highest = levels[levels.length - 1];
-    bandMmi = highest === undefined ? null : mmiFromPga(highest);
-    warnings.push('the 475-year PGA is above the highest computed level; the band is set from the intensity at that level, a lower bound');
+    bandMmi = highest === undefined ? null : toMmi(highest);
+    warnings.push(`the 475-year ${measure} is above the highest computed level; the band is set from the intensity at that level, a lower bound`);
   }
-  return { intensity: { atReturnPeriod, chanceOfReaching }, band: screeningBand(mmi475, bandMmi), warnings };
+  return {
+    intensity: { atReturnPeriod, chanceOfReaching, conversion: { measure, relation: 'Worden et al. (2012)', sigmaMmi: gmice.sigmaMmi } },
+    band: screeningBand(mmi475, bandMmi),
+    warnings,
+  };
 }

@@ -34,12 +34,21 @@ export interface Gmice {
   readonly t1: number;
   /** Break in MMI, for the inverse. */
   readonly t2: number;
+  /** Standard deviation of MMI about equation (3), MMI units (their Table 1). */
+  readonly sigmaMmi: number;
 }
 
-/** Worden et al. (2012) Table 1, PGA in cm/s² (from memory). */
-export const WORDEN2012_PGA: Gmice = { c1: 1.78, c2: 1.55, c3: -1.6, c4: 3.7, t1: 1.57, t2: 4.22 };
-/** Worden et al. (2012) Table 1, PGV in cm/s (from memory). */
-export const WORDEN2012_PGV: Gmice = { c1: 3.78, c2: 1.47, c3: 2.89, c4: 3.16, t1: 0.53, t2: 4.56 };
+/** Worden et al. (2012) Table 1, PGA in cm/s² (from memory, σ as well). */
+export const WORDEN2012_PGA: Gmice = { c1: 1.78, c2: 1.55, c3: -1.6, c4: 3.7, t1: 1.57, t2: 4.22, sigmaMmi: 0.73 };
+/** Worden et al. (2012) Table 1, PGV in cm/s (from memory, σ as well). */
+export const WORDEN2012_PGV: Gmice = { c1: 3.78, c2: 1.47, c3: 2.89, c4: 3.16, t1: 0.53, t2: 4.56, sigmaMmi: 0.65 };
+
+/** A conversion of one hazard measure to MMI: the relation, and the factor from the curve's units (g, cm/s) to the relation's. */
+export interface IntensityConversion {
+  readonly measure: 'PGA' | 'PGV';
+  readonly gmice: Gmice;
+  readonly toRelationUnits: number;
+}
 
 export const MMI_MIN = 1;
 export const MMI_MAX = 10;
@@ -59,6 +68,12 @@ export function motionFromMmi(mmi: number, c: Gmice): number {
   const m = clampMmi(mmi);
   return 10 ** (m <= c.t2 ? (m - c.c1) / c.c2 : (m - c.c3) / c.c4);
 }
+
+/** Worden et al. (2012) from PGA in g (the curve's units) and from PGV in cm/s. */
+export const INTENSITY_CONVERSIONS: Readonly<Record<IntensityConversion['measure'], IntensityConversion>> = {
+  PGA: { measure: 'PGA', gmice: WORDEN2012_PGA, toRelationUnits: STANDARD_GRAVITY_MS2 * 100 },
+  PGV: { measure: 'PGV', gmice: WORDEN2012_PGV, toRelationUnits: 1 },
+};
 
 /** MMI from PGA in g. */
 export function mmiFromPga(pgaG: number): number {

@@ -1,4 +1,4 @@
-import { frameForStudy, type LocalFrame } from '../geometry/projection.ts';
+import { frameForStudy, type LocalFrame, type PointXY } from '../geometry/projection.ts';
 import { InvalidInput } from '../errors.ts';
 import type { Settings, Source, Study } from '../model.ts';
 import { magnitudeBins } from '../recurrence/magnitude-bins.ts';
@@ -24,13 +24,10 @@ function inSource<T>(sourceIndex: number, work: () => T): T {
 }
 
 /** A placed rupture with its rate (per year), field by field: rest and spread here cost more than the placing. */
-const toRupture = (placed: PlacedRupture, binRate: number): Rupture => ({
-  sourceIndex: placed.sourceIndex,
-  sourceId: placed.sourceId,
-  annualRate: binRate * placed.share,
-  context: placed.context,
-  surface: placed.surface,
-});
+const toRupture = (placed: PlacedRupture, binRate: number): Rupture =>
+  placed.cellUse
+    ? { sourceIndex: placed.sourceIndex, sourceId: placed.sourceId, annualRate: binRate * placed.share, context: placed.context, surface: placed.surface, cellUse: placed.cellUse }
+    : { sourceIndex: placed.sourceIndex, sourceId: placed.sourceId, annualRate: binRate * placed.share, context: placed.context, surface: placed.surface };
 
 /**
  * Visits every rupture of one source, in discretisation order: for each magnitude bin in
@@ -45,9 +42,10 @@ export function visitSourceRuptures(
   frame: LocalFrame,
   settings: Settings,
   visit: (placed: PlacedRupture, binRate: number) => void,
+  sites: readonly PointXY[] = [],
 ): void {
   inSource(sourceIndex, () => {
-    const prepared: PreparedSource = prepareSource(source, sourceIndex, frame, settings);
+    const prepared: PreparedSource = prepareSource(source, sourceIndex, frame, settings, sites);
     const areaKm2 = prepared.kind === 'fault' ? prepared.surface.areaKm2 : undefined;
     const bins = magnitudeBins(source.recurrence, settings, areaKm2);
     for (let i = 0; i < bins.magnitudes.length; i++) {
@@ -57,10 +55,13 @@ export function visitSourceRuptures(
   });
 }
 
-/** All ruptures of one source with annual rates (per year), in the order of visitSourceRuptures. */
-export function discretiseSource(source: Source, sourceIndex: number, frame: LocalFrame, settings: Settings): Rupture[] {
+/**
+ * All ruptures of one source with annual rates (per year), in the order of visitSourceRuptures;
+ * zone cells near `sites` (local km) refined (geometry/cell-refinement.ts).
+ */
+export function discretiseSource(source: Source, sourceIndex: number, frame: LocalFrame, settings: Settings, sites: readonly PointXY[] = []): Rupture[] {
   const ruptures: Rupture[] = [];
-  visitSourceRuptures(source, sourceIndex, frame, settings, (placed, binRate) => ruptures.push(toRupture(placed, binRate)));
+  visitSourceRuptures(source, sourceIndex, frame, settings, (placed, binRate) => ruptures.push(toRupture(placed, binRate)), sites);
   return ruptures;
 }
 
@@ -69,8 +70,15 @@ export interface DiscretisedStudy {
   readonly ruptures: readonly Rupture[];
 }
 
-/** Every rupture of a study in its local frame (frameForStudy), sources in study order. */
+/**
+ * Every rupture of a study in its local frame (frameForStudy), sources in study order, zone
+ * cells refined near its communities.
+ */
 export function discretiseStudy(study: Study): DiscretisedStudy {
   const frame = frameForStudy(study);
-  return { frame, ruptures: study.sources.flatMap((source, i) => discretiseSource(source, i, frame, study.settings)) };
+  const sites = communitySites(study, frame);
+  return { frame, ruptures: study.sources.flatMap((source, i) => discretiseSource(source, i, frame, study.settings, sites)) };
 }
+
+/** The study's communities in its local frame, km. */
+export const communitySites = (study: Pick<Study, 'communities'>, frame: LocalFrame): PointXY[] => study.communities.map((c) => frame.toLocal([c.lon, c.lat]));

@@ -2,7 +2,8 @@ import { faultSurface, type FaultSurface } from '../geometry/fault-surface.ts';
 import { floatingRuptures, type FloatingRupture } from '../geometry/floating-ruptures.ts';
 import type { LocalFrame, PointXY } from '../geometry/projection.ts';
 import { fitDimensions, scaledDimensions, scalingRelationFor } from '../geometry/rupture-scaling.ts';
-import { zoneCells, type ZoneCell } from '../geometry/zone-cells.ts';
+import { refineRadiusKm, REFINE_PARTS } from '../geometry/cell-refinement.ts';
+import { subdivideZoneCell, zoneCells, type ZoneCell } from '../geometry/zone-cells.ts';
 import type { FaultSource, PointSource, Settings, Source, ZoneSource } from '../model.ts';
 import { pointRuptureContext } from './point-rupture.ts';
 import type { RuptureContext } from '../motion/types.ts';
@@ -11,18 +12,43 @@ import type { Rupture, RuptureSurface } from './rupture.ts';
 /** A source's geometry worked out once, ready to place ruptures of any magnitude on. */
 export type PreparedSource =
   | { readonly kind: 'fault'; readonly source: FaultSource; readonly sourceIndex: number; readonly surface: FaultSurface; readonly spacingKm: number }
-  | { readonly kind: 'zone'; readonly source: ZoneSource; readonly sourceIndex: number; readonly cells: readonly ZoneCell[] }
+  | {
+      readonly kind: 'zone';
+      readonly source: ZoneSource;
+      readonly sourceIndex: number;
+      readonly cells: readonly ZoneCell[];
+      /** The squares of the cells refined near a community, by cell index (geometry/cell-refinement.ts). */
+      readonly refined: ReadonlyMap<number, readonly ZoneCell[]>;
+      readonly refineRadiusKm: number;
+    }
   | { readonly kind: 'point'; readonly source: PointSource; readonly sourceIndex: number; readonly location: PointXY };
 
 /** A rupture in place without a rate, and its share (0–1) of its magnitude bin's rate. */
 export type PlacedRupture = Omit<Rupture, 'annualRate'> & { readonly share: number };
 
-/** The geometry of `source` in `frame`: a fault surface, zone cells, or a point. */
-export function prepareSource(source: Source, sourceIndex: number, frame: LocalFrame, settings: Pick<Settings, 'ruptureSpacingKm' | 'zoneCellKm'>): PreparedSource {
+/**
+ * The geometry of `source` in `frame`: a fault surface, zone cells (those near any of `sites`
+ * refined, geometry/cell-refinement.ts), or a point.
+ */
+export function prepareSource(
+  source: Source,
+  sourceIndex: number,
+  frame: LocalFrame,
+  settings: Pick<Settings, 'ruptureSpacingKm' | 'zoneCellKm'>,
+  sites: readonly PointXY[] = [],
+): PreparedSource {
   if (source.kind === 'fault') {
     return { kind: 'fault', source, sourceIndex, surface: faultSurface(source, frame), spacingKm: settings.ruptureSpacingKm };
   }
-  if (source.kind === 'zone') return { kind: 'zone', source, sourceIndex, cells: zoneCells(source, frame, settings.zoneCellKm) };
+  if (source.kind === 'zone') {
+    const cells = zoneCells(source, frame, settings.zoneCellKm);
+    const radiusKm = refineRadiusKm(settings.zoneCellKm);
+    const refined = new Map<number, readonly ZoneCell[]>();
+    cells.forEach((cell, k) => {
+      if (sites.some((p) => Math.hypot(p.x - cell.centre.x, p.y - cell.centre.y) <= radiusKm)) refined.set(k, subdivideZoneCell(source, frame, cell, REFINE_PARTS));
+    });
+    return { kind: 'zone', source, sourceIndex, cells, refined, refineRadiusKm: radiusKm };
+  }
   return { kind: 'point', source, sourceIndex, location: frame.toLocal(source.location) };
 }
 
@@ -48,9 +74,19 @@ export function placeRuptures(prepared: PreparedSource, magnitude: number): Plac
   const depthKm = prepared.source.depthKm;
   if (prepared.kind === 'zone') {
     const placed: PlacedRupture[] = [];
-    for (const cell of prepared.cells) {
-      placed.push({ sourceIndex, sourceId, share: cell.share, context, surface: { kind: 'point', hypocentre: { x: cell.centre.x, y: cell.centre.y, z: depthKm } } });
-    }
+    const radiusKm = prepared.refineRadiusKm;
+    prepared.cells.forEach((cell, k) => {
+      const squares = prepared.refined.get(k);
+      const point = (at: ZoneCell) => ({ kind: 'point' as const, hypocentre: { x: at.centre.x, y: at.centre.y, z: depthKm } });
+      if (!squares) {
+        placed.push({ sourceIndex, sourceId, share: cell.share, context, surface: point(cell) });
+        return;
+      }
+      placed.push({ sourceIndex, sourceId, share: cell.share, context, surface: point(cell), cellUse: { centre: cell.centre, radiusKm, near: false } });
+      for (const square of squares) {
+        placed.push({ sourceIndex, sourceId, share: square.share, context, surface: point(square), cellUse: { centre: cell.centre, radiusKm, near: true } });
+      }
+    });
     return placed;
   }
   const { x, y } = prepared.location;

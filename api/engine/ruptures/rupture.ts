@@ -1,3 +1,4 @@
+import type { CellUse } from '../geometry/cell-refinement.ts';
 import type { RuptureContext } from '../motion/types.ts';
 
 /**
@@ -33,4 +34,6 @@ export interface Rupture {
   readonly annualRate: number;
   readonly context: RuptureContext;
   readonly surface: RuptureSurface;
+  /** Set on the ruptures of a refined zone cell: which sites use them (geometry/cell-refinement.ts). */
+  readonly cellUse?: CellUse;
 }

@@ -1,6 +1,6 @@
 import { InvalidInput } from '../errors.ts';
 import { ruptureDistances } from '../geometry/distances.ts';
-import { floatingRuptureAt } from '../geometry/floating-ruptures.ts';
+import { floatingRuptureAt, floatingRuptures } from '../geometry/floating-ruptures.ts';
 import { fitDimensions, scaledDimensions, scalingRelationFor } from '../geometry/rupture-scaling.ts';
 import type { PointXY } from '../geometry/projection.ts';
 import type { PreparedSource } from '../ruptures/placement.ts';
@@ -29,8 +29,17 @@ export type ScenarioPosition =
 /** A scenario rupture carries no rate; it is one earthquake. */
 export type ScenarioRupture = Omit<Rupture, 'annualRate'>;
 
-/** Every candidate position of `prepared` at `magnitude` (floating positions or zone cells). */
+/**
+ * Every candidate position of `prepared` at `magnitude`: a fault's floating positions from end
+ * to end (the worst placement may be at an end, which the hazard's midpoint positions never
+ * reach), or zone cells.
+ */
 export function candidateRuptures(prepared: PreparedSource, magnitude: number): ScenarioRupture[] {
+  if (prepared.kind === 'fault') {
+    const { surface, source } = prepared;
+    const size = fitDimensions(scaledDimensions(scalingRelationFor(source.setting, source.mechanism), magnitude), surface.lengthKm, surface.widthKm);
+    return floatingRuptures(surface, size, { spacingKm: prepared.spacingKm, endToEnd: true }).map((p) => faultRupture(prepared, magnitude, p));
+  }
   return placeRuptures(prepared, magnitude).map(({ share: _share, ...rupture }) => rupture);
 }
 

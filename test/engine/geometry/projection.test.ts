@@ -91,11 +91,14 @@ describe('frameForStudy', () => {
   const community = (lon: number, lat: number): Community => ({ id: 'c', name: 'C', lon, lat, vs30: 400, vs30Basis: 'measured', coastal: false });
   const base = { name: 's', groundMotion: { crustal: [], interface: [], intraslab: [] } } as unknown as Study;
 
-  it('centres on the middle of the bounding box of communities and sources', () => {
+  it('centres on the middle of the bounding box of the sources, whatever the communities', () => {
     const point = { ...pointKm(0, 0, FIXED_M7), location: [-148, -45] as const };
-    const frame = frameForStudy({ ...base, communities: [community(-152, -47), community(-151, -49)], sources: [point] });
-    expect(frame.origin[0]).toBeCloseTo(-150, 12);
+    const other = { ...point, location: [-150, -49] as const };
+    const frame = frameForStudy({ ...base, communities: [community(-152, -47), community(-151, -49)], sources: [point, other] });
+    expect(frame.origin[0]).toBeCloseTo(-149, 12);
     expect(frame.origin[1]).toBeCloseTo(-47, 12);
+    const more = frameForStudy({ ...base, communities: [community(-170, -30)], sources: [point, other] });
+    expect(more.origin).toEqual(frame.origin);
   });
 
   it('centres a study that straddles the 180° meridian on it', () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { zoneCells } from '../../../api/engine/geometry/zone-cells.ts';
+import { subdivideZoneCell, zoneCells } from '../../../api/engine/geometry/zone-cells.ts';
 import { InvalidInput } from '../../../api/engine/errors.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 import { FIXED_M7, FRAME, zoneKm } from './km-fixtures.ts';
@@ -21,7 +21,7 @@ describe('zoneCells', () => {
     expectClose(cells.reduce((s, c) => s + c.share, 0), 1, 1e-12, 'shares sum to 1');
   });
 
-  it('off the grid: edge cells keep the part inside, shares follow area, holes respected', () => {
+  it('anchored to the zone, not the frame: a square from (5, 5) is cut along x, y = 5, 15, ..., holes respected', () => {
     // Outer 5..105 x 5..105 (10 000 km²) minus hole 33..67 x 33..67 (1156 km²) = 8844 km².
     const zone = zoneKm([square(5, 5, 105, 105), square(33, 33, 67, 67)], FIXED_M7);
     const cells = zoneCells(zone, FRAME, 10);
@@ -30,10 +30,23 @@ describe('zoneCells', () => {
     expectClose(cells.reduce((s, c) => s + c.share, 0), 1, 1e-12, 'shares sum to 1');
     for (const cell of cells) expectRelative(cell.share, cell.areaKm2 / total, 1e-12, 'share by area');
     const corner = cells[0];
-    expectRelative(corner?.areaKm2 ?? NaN, 25, 1e-6, 'south-west corner cell: 5 x 5 km inside');
-    expectClose(corner?.centre.x ?? NaN, 7.5, 1e-6, 'centroid of the inside part');
-    const ringCell = cells.find((c) => c.centre.x > 30 && c.centre.x < 40 && c.centre.y > 40 && c.centre.y < 50);
-    expectRelative(ringCell?.areaKm2 ?? NaN, 30, 1e-6, 'cell 30..40 x 40..50 cut by the hole at x = 33: 3 x 10 km left');
+    expectRelative(corner?.areaKm2 ?? NaN, 100, 1e-6, 'south-west corner cell: a whole 10 km cell from the first vertex');
+    expectClose(corner?.centre.x ?? NaN, 10, 1e-6, 'its centre');
+    const ringCell = cells.find((c) => c.centre.x > 25 && c.centre.x < 35 && c.centre.y > 35 && c.centre.y < 45);
+    expectRelative(ringCell?.areaKm2 ?? NaN, 80, 1e-6, 'cell 25..35 x 35..45 cut by the hole at x = 33: 8 x 10 km left');
+  });
+
+  it('a cell subdivided into 5 x 5 squares: the parts inside, shares adding to the cell\'s', () => {
+    // Triangle (0,0), (60,0), (0,45): the 10 km cell 20..30 x 20..30 is cut by the hypotenuse 3x + 4y = 180.
+    const zone = zoneKm([[[0, 0], [60, 0], [0, 45], [0, 0]]], FIXED_M7);
+    const cells = zoneCells(zone, FRAME, 10);
+    const cell = cells.find((c) => c.box[0] > 19 && c.box[0] < 21 && c.box[1] > 19 && c.box[1] < 21)!;
+    const squares = subdivideZoneCell(zone, FRAME, cell, 5);
+    expectClose(squares.reduce((s, q) => s + q.share, 0), cell.share, 1e-15, 'shares add to the cell\'s');
+    expectRelative(squares.reduce((s, q) => s + q.areaKm2, 0), cell.areaKm2, 1e-9, 'areas add to the cell\'s');
+    // Inside the cell, below 3x + 4y = 180: at x = 20 up to y = 30 (whole), at x = 30 up to y = 22.5; area 100 - ½ x 10 x 7.5 = 62.5 km².
+    expectRelative(cell.areaKm2, 62.5, 1e-6, 'trapezoid by hand');
+    for (const q of squares) expect(3 * q.centre.x + 4 * q.centre.y).toBeLessThanOrEqual(180 + 1e-6);
   });
 
   it('a triangle: total area ½ b h, cells south row first, west to east', () => {

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { mmiRoman } from '../../../api/engine/intensity/mmi-roman.ts';
 
-describe('mmiRoman (rounded down to the level reached; common practice)', () => {
-  it('names the level reached', () => {
-    expect([mmiRoman(1), mmiRoman(4.99), mmiRoman(6), mmiRoman(6.8), mmiRoman(7), mmiRoman(8.57), mmiRoman(10)]).toEqual([
-      'I', 'IV', 'VI', 'VI', 'VII', 'VIII', 'X',
+describe('mmiRoman (rounded to the nearest level)', () => {
+  it('names the nearest level: 6.97 is VII, 6.49 is VI, 6.5 is VII', () => {
+    expect([mmiRoman(1), mmiRoman(4.99), mmiRoman(6), mmiRoman(6.49), mmiRoman(6.5), mmiRoman(6.97), mmiRoman(8.57), mmiRoman(10)]).toEqual([
+      'I', 'V', 'VI', 'VI', 'VII', 'VII', 'IX', 'X',
     ]);
   });
   it('holds to I–XII', () => {

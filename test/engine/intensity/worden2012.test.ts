@@ -18,8 +18,8 @@ import { expectClose, expectRelative } from '../../helpers/close.ts';
  */
 describe('Worden et al. (2012) GMICE', () => {
   it('holds the quoted coefficients (Table 1, from memory)', () => {
-    expect(WORDEN2012_PGA).toEqual({ c1: 1.78, c2: 1.55, c3: -1.6, c4: 3.7, t1: 1.57, t2: 4.22 });
-    expect(WORDEN2012_PGV).toEqual({ c1: 3.78, c2: 1.47, c3: 2.89, c4: 3.16, t1: 0.53, t2: 4.56 });
+    expect(WORDEN2012_PGA).toEqual({ c1: 1.78, c2: 1.55, c3: -1.6, c4: 3.7, t1: 1.57, t2: 4.22, sigmaMmi: 0.73 });
+    expect(WORDEN2012_PGV).toEqual({ c1: 3.78, c2: 1.47, c3: 2.89, c4: 3.16, t1: 0.53, t2: 4.56, sigmaMmi: 0.65 });
   });
 
   it('PGA 0.1 g = 98.0665 cm/s²: log10 = 1.991522 > t1, MMI = −1.60 + 3.70 × 1.991522 = 5.768626', () => {

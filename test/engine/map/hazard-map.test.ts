@@ -58,7 +58,10 @@ describe('hazardMap', () => {
       const expected = c.atReturnPeriod['475']!.PGA ?? null;
       const value = points[i]!.value;
       if (expected === null) expect(value).toBeNull();
-      else expectClose(value!, expected, 1e-9 * expected, `grid point ${i}: map against single-site screening (same engine path)`);
+      // A community refines the zone cells near it (geometry/cell-refinement.ts) and a map point
+      // uses the cells as the study's communities left them: within the 1% the refinement is
+      // held to (test/engine/hazard/zone-refinement.test.ts).
+      else expectClose(value!, expected, 0.01 * expected, `grid point ${i}: map against single-site screening (same engine path)`);
       expect(points[i]!.status).toBe(c.returnPeriodStatus['475']!.PGA);
     });
   });

@@ -162,17 +162,18 @@ describe.each(PATHS)('linearity in the rates (%s path)', (path) => {
 });
 
 /**
- * Far sources for `doc`: one point source and one fault 8° of longitude beyond each side of the
- * study's extent (over 540 km at 47° S, beyond any generated cut-off of at most 300 km), on the
- * middle latitude. The local frame is centred on the middle of the bounding box of every
- * coordinate (geometry/projection.ts), so sources added symmetrically leave it where it was;
- * with coordinates on a 1/64° grid this holds exactly. (A far source on one side only would
- * move the frame and so change distances by the projection's distortion, parts in 10^4.)
+ * Far sources for `doc`: one point source and one fault at least 8° of longitude beyond each
+ * side of the study's extent (over 540 km at 47° S, beyond any generated cut-off of at most
+ * 300 km), on the middle latitude. The local frame is centred on the middle of the bounding box
+ * of the sources' coordinates, the communities' when there are none (geometry/projection.ts),
+ * so sources added symmetrically about that middle leave it where it was; with coordinates on a
+ * 1/64° grid this holds exactly. (A far source on one side only would move the frame and so
+ * change distances by the projection's distortion, parts in 10^4.)
  */
 function withFarSources(doc: Doc, recurrences: readonly [Doc, Doc]): Doc {
   const copy = structuredClone(doc);
-  const lons: number[] = copy.communities.map((c: Doc) => c.lon);
-  const lats: number[] = copy.communities.map((c: Doc) => c.lat);
+  const lons: number[] = [];
+  const lats: number[] = [];
   const visit = (x: unknown): void => {
     if (Array.isArray(x) && typeof x[0] === 'number') {
       lons.push(x[0]);
@@ -180,8 +181,11 @@ function withFarSources(doc: Doc, recurrences: readonly [Doc, Doc]): Doc {
     } else if (Array.isArray(x)) x.forEach(visit);
   };
   for (const f of copy.sources.features as Doc[]) visit(f.geometry.coordinates);
-  const west = Math.min(...lons) - 8;
-  const east = Math.max(...lons) + 8;
+  if (lons.length === 0) for (const c of copy.communities as Doc[]) visit([c.lon, c.lat]);
+  const allLons = [...lons, ...copy.communities.map((c: Doc) => c.lon as number)];
+  const reach = 8 + Math.max(Math.min(...lons) - Math.min(...allLons), Math.max(...allLons) - Math.max(...lons));
+  const west = Math.min(...lons) - reach;
+  const east = Math.max(...lons) + reach;
   const midLat = (Math.min(...lats) + Math.max(...lats)) / 2;
   copy.sources.features.push(
     { type: 'Feature', geometry: { type: 'Point', coordinates: [west, midLat] }, properties: { id: 'far-west', setting: 'crustal', mechanism: 'reverse', depthKm: 10, recurrence: recurrences[0] } },

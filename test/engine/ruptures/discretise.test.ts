@@ -12,27 +12,28 @@ const square = (x0: number, y0: number, x1: number, y1: number): [number, number
 
 describe('discretiseSource: a hand-made vertical strike-slip fault, 100 km x 15 km, M 7.0 at 0.01/yr', () => {
   // Wells & Coppersmith 1994 Table 2A strike-slip (from memory): RA = 10^2.88 = 758.58 km²,
-  // RW = 10^1.13 = 13.49 km (< 15 km), so L = 56.23 km. At 5 km spacing: along strike
-  // 43.77 km of room -> 9 gaps -> 10 positions; down dip 1.51 km of room -> 1 gap -> 2 rows.
+  // RW = 10^1.13 = 13.49 km (< 15 km), so L = 56.23 km. At 5 km spacing, midpoint rule: along
+  // strike 43.77 km of room -> 9 intervals -> 9 positions; down dip 1.51 km of room -> 1
+  // interval -> 1 row, its top 0.755 km down.
   const fault = faultKm([[0, 0], [0, 100]], { dipDeg: 90, dipDirectionDeg: 90, upperDepthKm: 0, lowerDepthKm: 15, recurrence: FIXED_M7 });
   const ruptures = discretiseSource(fault, 0, FRAME, SETTINGS);
 
-  it('has 10 x 2 = 20 ruptures of 0.01 / 20 per year each', () => {
-    expect(ruptures.length).toBe(20);
-    for (const r of ruptures) expectRelative(r.annualRate, 0.0005, 1e-12, 'equal share of the bin rate');
+  it('has 9 x 1 = 9 ruptures of 0.01 / 9 per year each', () => {
+    expect(ruptures.length).toBe(9);
+    for (const r of ruptures) expectRelative(r.annualRate, 0.01 / 9, 1e-12, 'equal share of the bin rate');
     expectRelative(sumRates(ruptures), 0.01, 1e-12, 'rates sum to the source rate');
   });
 
   it('fills the rupture context from the rupture, hypocentre at its centre (common practice)', () => {
     const top = ruptures[0];
-    const deep = ruptures[19];
+    const last = ruptures[8];
     expect(top?.context.magnitude).toBe(7);
     expect(top?.context.mechanism).toBe('strike-slip');
     expect(top?.context.dipDeg).toBe(90);
     expectRelative(top?.context.widthKm ?? NaN, 13.48963, 1e-6, 'RW at M 7');
-    expectClose(top?.context.ztorKm ?? NaN, 0, 1e-12, 'top row at the surface');
-    expectClose(top?.context.hypoDepthKm ?? NaN, 13.48963 / 2, 1e-5, 'centre of the top row');
-    expectClose(deep?.context.ztorKm ?? NaN, 15 - 13.48963, 1e-5, 'bottom row reaches the lower depth');
+    expectClose(top?.context.ztorKm ?? NaN, (15 - 13.48963) / 2, 1e-5, 'the one row in the middle of the 1.51 km of room');
+    expectClose(top?.context.hypoDepthKm ?? NaN, 7.5, 1e-5, 'centre of the row, mid-depth of the fault');
+    expectClose(last?.context.ztorKm ?? NaN, (15 - 13.48963) / 2, 1e-5, 'same row');
     expect(top?.surface.kind).toBe('planes');
   });
 });

@@ -1,4 +1,5 @@
 import type { CommunityHazard } from '../../../api/engine/community-result.ts';
+import { cellUsedAt } from '../../../api/engine/geometry/cell-refinement.ts';
 import { ruptureDistances } from '../../../api/engine/geometry/distances.ts';
 import type { LocalFrame } from '../../../api/engine/geometry/projection.ts';
 import type { Community, Study } from '../../../api/engine/model.ts';
@@ -43,7 +44,7 @@ export function referenceScreening(
 
 /** One community's hazard from every rupture's distances, site-hazard.ts and deaggregation.ts. */
 function referenceHazard(
-  ruptures: readonly Rupture[],
+  all: readonly Rupture[],
   frame: LocalFrame,
   community: Community,
   setup: ScreeningSetup,
@@ -51,6 +52,8 @@ function referenceHazard(
 ): CommunityHazard {
   const { settings } = setup.study;
   const siteXY = frame.toLocal([community.lon, community.lat]);
+  // A refined zone cell counts as itself or as its squares by the site's distance (geometry/cell-refinement.ts).
+  const ruptures = all.filter((r) => !r.cellUse || cellUsedAt(r.cellUse.near, r.cellUse.centre.x, r.cellUse.centre.y, r.cellUse.radiusKm, siteXY.x, siteXY.y));
   const distances = ruptures.map((r) => ruptureDistances(r.surface, siteXY));
   const hazard = siteHazard({
     ruptures,
