@@ -32,7 +32,7 @@ const median = (xs: readonly number[]): number => {
 };
 
 if (!existsSync(join(REPO_ROOT, 'dist/api/cli.js'))) {
-  const built = spawnSync(process.execPath, ['scripts/build.js'], { cwd: REPO_ROOT, stdio: 'inherit' });
+  const built = spawnSync(process.execPath, ['api/bin/build.js'], { cwd: REPO_ROOT, stdio: 'inherit' });
   if (built.status !== 0) throw new Error('the build failed');
 }
 

@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { REPO_ROOT, type ServiceProcess, startService, tempDir, waitFor } from './helpers/service-process.ts';
 
 /**
- * A new user's first start, on the compiled build (scripts/build.js, as `npm ci` and
+ * A new user's first start, on the compiled build (api/bin/build.js, as `npm ci` and
  * `npm start` run it): the service prints the demo's page address, the demo is screened in the
  * background on worker threads loading the compiled worker module, and its community pages say
  * the screening is under way until they show results. The compiled CLI answers too.
@@ -17,7 +17,7 @@ describe('first start of the compiled service', () => {
   let service: ServiceProcess;
 
   beforeAll(async () => {
-    const built = spawnSync(process.execPath, ['scripts/build.js', '--out', BUILD], { cwd: REPO_ROOT, encoding: 'utf8' });
+    const built = spawnSync(process.execPath, ['api/bin/build.js', '--out', BUILD], { cwd: REPO_ROOT, encoding: 'utf8' });
     expect(built.status, built.stderr).toBe(0);
     service = await startService({ databasePath: join(dir.path, 'first.db'), nodeArgs: [join(BUILD, 'api/server.js')], env: { TREMORA_SCREEN_DEMO: '1', TREMORA_WORKERS: '1' } });
   });

@@ -9,7 +9,7 @@ import { join, relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { build } from 'esbuild';
 
-const ROOT = fileURLToPath(new URL('..', import.meta.url));
+const ROOT = fileURLToPath(new URL('../..', import.meta.url));
 // `--out DIR` builds elsewhere (the tests build a copy of their own); it must lie inside the
 // project so that the compiled modules find node_modules.
 const outAt = process.argv.indexOf('--out');
