@@ -44,5 +44,4 @@ export default tseslint.config(
     files: ['test/**'],
     rules: { '@typescript-eslint/no-explicit-any': 'off' },
   },
-
 );

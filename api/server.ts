@@ -37,7 +37,9 @@ function seedOnFirstStart(store: Store): string | undefined {
   if (store.migration.fromVersion !== 0) return undefined;
   const seed = seedDemoStudy(store, modelCatalog);
   if (seed.seeded) return seed.id;
-  console.error(`new database: the demo study was not saved, it does not validate:\n${seed.issues.map((i) => `  ${i.path}: ${i.message}`).join('\n')}`);
+  console.error(
+    `new database: the demo study was not saved, it does not validate:\n${seed.issues.map((i) => `  ${i.path}: ${i.message}`).join('\n')}`,
+  );
   return undefined;
 }
 
@@ -59,7 +61,8 @@ async function openQueue(url: string | undefined): Promise<ChunkQueue | undefine
   return queue;
 }
 
-const urlHost = (host: string): string => (host.includes(':') && !host.startsWith('[') ? `[${host}]` : host);
+const urlHost = (host: string): string =>
+  host.includes(':') && !host.startsWith('[') ? `[${host}]` : host;
 
 function openStoreOrExit(path: string): Store {
   try {
@@ -74,15 +77,35 @@ function openStoreOrExit(path: string): Store {
 const config = readConfigOrExit();
 const queueUrl = queueUrlOrExit();
 const store = openStoreOrExit(config.databasePath);
-if (store.interruptedAtOpen > 0) console.log(`${store.interruptedAtOpen} run(s) left unfinished by the previous process are marked interrupted`);
-if (store.mapRunsInterruptedAtOpen > 0) console.log(`${store.mapRunsInterruptedAtOpen} map(s) left unfinished by the previous process are marked interrupted`);
+if (store.interruptedAtOpen > 0)
+  console.log(
+    `${store.interruptedAtOpen} run(s) left unfinished by the previous process are marked interrupted`,
+  );
+if (store.mapRunsInterruptedAtOpen > 0)
+  console.log(
+    `${store.mapRunsInterruptedAtOpen} map(s) left unfinished by the previous process are marked interrupted`,
+  );
 const demoId = seedOnFirstStart(store);
 
 const runPool = new WorkerPool({ size: config.workers, name: 'tremora-run' });
 const quickPool = new WorkerPool({ size: 1, name: 'tremora-quick' });
 const queue = await openQueue(queueUrl);
-const scheduler = new RunScheduler({ store, pool: runPool, toolVersion: TOOL_VERSION, ...(queue ? { chunks: queue } : {}) });
-const context = { store, scheduler, runPool, quickPool, models: modelCatalog, toolVersion: TOOL_VERSION, workBudget: config.workBudget, ...(queue ? { queue } : {}) };
+const scheduler = new RunScheduler({
+  store,
+  pool: runPool,
+  toolVersion: TOOL_VERSION,
+  ...(queue ? { chunks: queue } : {}),
+});
+const context = {
+  store,
+  scheduler,
+  runPool,
+  quickPool,
+  models: modelCatalog,
+  toolVersion: TOOL_VERSION,
+  workBudget: config.workBudget,
+  ...(queue ? { queue } : {}),
+};
 const app = createApp(context, {
   pages: createPages(context, { token: config.token }),
   ...(config.token === undefined ? {} : { token: config.token }),
@@ -93,7 +116,12 @@ const app = createApp(context, {
 // by the time a person opens them (they say the screening is under way until then).
 if (demoId !== undefined && config.screenDemo) {
   const demo = store.studies.get(demoId);
-  if (demo) startScreening(context, demo).catch((error: unknown) => console.error(`the demo study could not be screened: ${error instanceof Error ? error.message : String(error)}`));
+  if (demo)
+    startScreening(context, demo).catch((error: unknown) =>
+      console.error(
+        `the demo study could not be screened: ${error instanceof Error ? error.message : String(error)}`,
+      ),
+    );
 }
 
 const server = createNodeServer({ fetch: app.fetch, hostname: config.host });
@@ -101,15 +129,23 @@ server.listen(config.port, config.host, () => {
   const origin = `http://${urlHost(config.host)}:${(server.address() as AddressInfo).port}`;
   console.log(`Tremora ${TOOL_VERSION} is listening on ${origin}`);
   console.log(`database: ${config.databasePath}; ${runPool.size} worker thread(s) for runs`);
-  if (demoId !== undefined) console.log(`new database: the demo study is saved${config.screenDemo ? ' and being screened' : ''}; open ${origin}/studies/${demoId}`);
+  if (demoId !== undefined)
+    console.log(
+      `new database: the demo study is saved${config.screenDemo ? ' and being screened' : ''}; open ${origin}/studies/${demoId}`,
+    );
   else console.log(`open ${origin}/ in a browser`);
 });
 
 // Requests Node's parser refuses get the one error shape too (client-error.ts).
 server.on('clientError', answerClientError);
 server.on('error', (error: NodeJS.ErrnoException) => {
-  const why = error.code === 'EADDRINUSE' ? `port ${config.port} on ${config.host} is in use; set PORT to another port` : `${error.message}; set HOST to an address of this machine`;
-  console.error(`tremora: cannot start: cannot listen on ${urlHost(config.host)}:${config.port}: ${why}`);
+  const why =
+    error.code === 'EADDRINUSE'
+      ? `port ${config.port} on ${config.host} is in use; set PORT to another port`
+      : `${error.message}; set HOST to an address of this machine`;
+  console.error(
+    `tremora: cannot start: cannot listen on ${urlHost(config.host)}:${config.port}: ${why}`,
+  );
   store.close();
   process.exit(2);
 });

@@ -23,13 +23,23 @@ const COMPLETENESS: readonly [sinceYear: number, magnitude: number][] = [
 
 interface DemoFeature {
   geometry: { type: string; coordinates: unknown };
-  properties: { id: string; depthKm?: number; lowerDepthKm?: number; upperDepthKm?: number; recurrence: { bValue: number; mMin: number; mMax: number; rate: number } };
+  properties: {
+    id: string;
+    depthKm?: number;
+    lowerDepthKm?: number;
+    upperDepthKm?: number;
+    recurrence: { bValue: number; mMin: number; mMax: number; rate: number };
+  };
 }
 
 const here = new URL('.', import.meta.url);
 
 /** The catalog CSV text for the demo study's JSON text (pure: same input, same text). */
-export function buildDemoCatalog(studyText: string): { csv: string; recorded: number; drawn: number } {
+export function buildDemoCatalog(studyText: string): {
+  csv: string;
+  recorded: number;
+  drawn: number;
+} {
   const study = JSON.parse(studyText) as { sources: { features: DemoFeature[] } };
   const byId = (id: string) => {
     const f = study.sources.features.find((x) => x.properties.id === id);
@@ -37,11 +47,18 @@ export function buildDemoCatalog(studyText: string): { csv: string; recorded: nu
     return f;
   };
   /** The rate of M >= m of a zone's Gutenberg–Richter line, extended below its mMin. */
-  const rateAbove = (f: DemoFeature, m: number) => f.properties.recurrence.rate * 10 ** (-f.properties.recurrence.bValue * (m - f.properties.recurrence.mMin));
+  const rateAbove = (f: DemoFeature, m: number) =>
+    f.properties.recurrence.rate *
+    10 ** (-f.properties.recurrence.bValue * (m - f.properties.recurrence.mMin));
 
   const random = createRandom(SEED);
   const events: CatalogEvent[] = [];
-  const draw = (id: string, rings: readonly (readonly LonLat[])[], depthKm: [number, number], mMin: number) => {
+  const draw = (
+    id: string,
+    rings: readonly (readonly LonLat[])[],
+    depthKm: [number, number],
+    mMin: number,
+  ) => {
     const f = byId(id);
     events.push(
       ...syntheticCatalog({
@@ -64,23 +81,41 @@ export function buildDemoCatalog(studyText: string): { csv: string; recorded: nu
   draw('orle-slab', byId('orle-slab').geometry.coordinates as LonLat[][], [55, 80], 3.0);
   // The interface's events fall over its surface projection: a band east of the trench.
   const trench = byId('orle-interface').geometry.coordinates as LonLat[];
-  const band: LonLat[] = [...trench, ...[...trench].reverse().map(([lon, lat]) => [lon + 1.9, lat] as const), trench[0] as LonLat];
+  const band: LonLat[] = [
+    ...trench,
+    ...[...trench].reverse().map(([lon, lat]) => [lon + 1.9, lat] as const),
+    trench[0] as LonLat,
+  ];
   draw('orle-interface', [band], [8, 40], 4.0);
 
   const yearOf = (ms: number) => new Date(ms).getUTCFullYear();
   const recorded = events
-    .filter((e) => COMPLETENESS.some(([since, m]) => yearOf(e.timeMs) >= since && e.magnitude >= m - 1e-9))
+    .filter((e) =>
+      COMPLETENESS.some(([since, m]) => yearOf(e.timeMs) >= since && e.magnitude >= m - 1e-9),
+    )
     .sort((a, b) => a.timeMs - b.timeMs || a.id.localeCompare(b.id));
 
   const lines = ['time,lon,lat,depthKm,magnitude,magnitudeType,id'];
   for (const e of recorded) {
-    lines.push([new Date(e.timeMs).toISOString(), e.lon.toFixed(3), e.lat.toFixed(3), e.depthKm.toFixed(1), e.magnitude.toFixed(1), e.magnitudeType, e.id].join(','));
+    lines.push(
+      [
+        new Date(e.timeMs).toISOString(),
+        e.lon.toFixed(3),
+        e.lat.toFixed(3),
+        e.depthKm.toFixed(1),
+        e.magnitude.toFixed(1),
+        e.magnitudeType,
+        e.id,
+      ].join(','),
+    );
   }
   return { csv: `${lines.join('\n')}\n`, recorded: recorded.length, drawn: events.length };
 }
 
 if (process.argv[1] !== undefined && fileURLToPath(import.meta.url) === process.argv[1]) {
-  const { csv, recorded, drawn } = buildDemoCatalog(readFileSync(new URL('demo.study.json', here), 'utf8'));
+  const { csv, recorded, drawn } = buildDemoCatalog(
+    readFileSync(new URL('demo.study.json', here), 'utf8'),
+  );
   writeFileSync(new URL('catalog.csv', here), csv);
   console.log(`data-demo/catalog.csv: ${recorded} events (of ${drawn} drawn), seed ${SEED}`);
 }

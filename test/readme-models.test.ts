@@ -14,7 +14,12 @@ const rows = (heading: string): string[][] => {
   for (const line of lines) {
     if (!line.startsWith('|')) break;
     if (line.startsWith('|---')) continue;
-    table.push(line.split('|').slice(1, -1).map((cell) => cell.trim()));
+    table.push(
+      line
+        .split('|')
+        .slice(1, -1)
+        .map((cell) => cell.trim()),
+    );
   }
   return table;
 };
@@ -37,7 +42,12 @@ describe('README ground-motion models', () => {
         const [, model, weight] = /^`([^`]+)` ([\d.]+)$/.exec(b)!;
         return { model, weight: Number(weight) };
       });
-      expect(stated, setting).toEqual(modelCatalog.defaultBranches[setting as (typeof TECTONIC_SETTINGS)[number]].map((b) => ({ model: b.model, weight: b.weight })));
+      expect(stated, setting).toEqual(
+        modelCatalog.defaultBranches[setting as (typeof TECTONIC_SETTINGS)[number]].map((b) => ({
+          model: b.model,
+          weight: b.weight,
+        })),
+      );
     }
   });
 });

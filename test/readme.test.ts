@@ -23,11 +23,16 @@ function firstCells(heading: string): string[] {
 
 describe('README', () => {
   it('lists every result key of a community, as the engine gives them', async () => {
-    const loaded = await readStudyFile(new URL('cli/fixtures/tiny.study.json', import.meta.url).pathname, modelCatalog);
+    const loaded = await readStudyFile(
+      new URL('cli/fixtures/tiny.study.json', import.meta.url).pathname,
+      modelCatalog,
+    );
     if (!loaded.ok) throw new Error('the tiny study should load');
     const [community] = screenStudy(loaded.study, { models: modelCatalog }).communities;
     // communityId and name identify the row; returnPeriodStatus is explained in the atReturnPeriod row.
-    const keys = Object.keys(community ?? {}).filter((k) => !['communityId', 'name', 'returnPeriodStatus'].includes(k));
+    const keys = Object.keys(community ?? {}).filter(
+      (k) => !['communityId', 'name', 'returnPeriodStatus'].includes(k),
+    );
     expect(firstCells('Results').sort()).toEqual(keys.sort());
     expect(README).toContain('returnPeriodStatus');
   });
@@ -36,7 +41,11 @@ describe('README', () => {
     let out = '';
     await runCli(['--help'], { out: (t) => (out += t), err: () => undefined });
     const verbs = [...out.matchAll(/^ {2}tremora (\S+)/gm)].map((m) => m[1]);
-    const readmeVerbs = [...README.split('## The command line')[1]!.split('\n## ')[0]!.matchAll(/^\| `tremora (\S+)/gm)].map((m) => m[1]);
+    const readmeVerbs = [
+      ...README.split('## The command line')[1]!
+        .split('\n## ')[0]!
+        .matchAll(/^\| `tremora (\S+)/gm),
+    ].map((m) => m[1]);
     expect(verbs.length).toBeGreaterThan(0);
     expect([...new Set(readmeVerbs)].sort()).toEqual([...new Set(verbs)].sort());
   });
@@ -46,7 +55,9 @@ describe('README', () => {
     for (const band of SCREENING_BANDS) {
       const row = README.split('\n').find((line) => line.startsWith(`| ${band.label} |`));
       expect(row, `a README row for ${band.label}`).toBeDefined();
-      const from = Number.isFinite(band.minMmi) ? `${mmiRoman(band.minMmi)} ` : `below ${mmiRoman(lowest)} `;
+      const from = Number.isFinite(band.minMmi)
+        ? `${mmiRoman(band.minMmi)} `
+        : `below ${mmiRoman(lowest)} `;
       const rest = (row ?? '').slice(`| ${band.label} |`.length).trimStart();
       expect(rest.startsWith(from), `${row} gives ${from}`).toBe(true);
     }

@@ -33,17 +33,30 @@ export function createPages(ctx: ServiceContext, options: CreatePagesOptions = {
 
   app.get('/', (c) => {
     const tr = kit.tr(c);
-    return kit.render(c, <HomeView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} studies={ctx.store.studies.list()} />);
+    return kit.render(
+      c,
+      <HomeView
+        tr={tr}
+        path={kit.here(c)}
+        toolVersion={ctx.toolVersion}
+        studies={ctx.store.studies.list()}
+      />,
+    );
   });
 
-  app.get('/limits', (c) => kit.render(c, <LimitsView tr={kit.tr(c)} path={kit.here(c)} toolVersion={ctx.toolVersion} />));
+  app.get('/limits', (c) =>
+    kit.render(c, <LimitsView tr={kit.tr(c)} path={kit.here(c)} toolVersion={ctx.toolVersion} />),
+  );
 
   // The language switch: a plain GET form, so it works without script; the choice is a cookie.
   app.get('/language', (c) => {
     const lang = c.req.query('lang');
     const back = safeBackPath(c.req.query('back'));
     if (isLanguage(lang)) {
-      c.header('Set-Cookie', `${LANGUAGE_COOKIE}=${lang}; Path=/; Max-Age=${LANGUAGE_COOKIE_MAX_AGE_S}; SameSite=Lax`);
+      c.header(
+        'Set-Cookie',
+        `${LANGUAGE_COOKIE}=${lang}; Path=/; Max-Age=${LANGUAGE_COOKIE_MAX_AGE_S}; SameSite=Lax`,
+      );
     }
     return c.redirect(back, 303);
   });
@@ -58,7 +71,17 @@ export function createPages(ctx: ServiceContext, options: CreatePagesOptions = {
   app.get('*', (c) => {
     if (c.req.path.startsWith('/api/') || c.req.path === '/api') return c.notFound();
     const tr = kit.tr(c);
-    return kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={tr.text('error.notFoundText')} />, 404);
+    return kit.render(
+      c,
+      <MessageView
+        tr={tr}
+        path={kit.here(c)}
+        toolVersion={ctx.toolVersion}
+        title={tr.t('error.notFound')}
+        text={tr.text('error.notFoundText')}
+      />,
+      404,
+    );
   });
 
   return app;

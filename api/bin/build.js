@@ -13,7 +13,8 @@ const ROOT = fileURLToPath(new URL('../..', import.meta.url));
 // `--out DIR` builds elsewhere (the tests build a copy of their own); it must lie inside the
 // project so that the compiled modules find node_modules.
 const outAt = process.argv.indexOf('--out');
-const OUT = outAt > 0 && process.argv[outAt + 1] ? resolve(process.argv[outAt + 1]) : join(ROOT, 'dist');
+const OUT =
+  outAt > 0 && process.argv[outAt + 1] ? resolve(process.argv[outAt + 1]) : join(ROOT, 'dist');
 
 function sourceFiles(dir) {
   return readdirSync(join(ROOT, dir), { withFileTypes: true }).flatMap((entry) => {
@@ -28,7 +29,11 @@ function sourceFiles(dir) {
 const keepModulesApart = {
   name: 'keep-modules-apart',
   setup(b) {
-    b.onResolve({ filter: /^\.\.?\// }, (args) => (args.kind === 'entry-point' ? undefined : { path: args.path.replace(/\.tsx?$/, '.js'), external: true }));
+    b.onResolve({ filter: /^\.\.?\// }, (args) =>
+      args.kind === 'entry-point'
+        ? undefined
+        : { path: args.path.replace(/\.tsx?$/, '.js'), external: true },
+    );
   },
 };
 
@@ -50,6 +55,15 @@ await build({
   logLevel: 'warning',
 });
 const pkg = JSON.parse(readFileSync(join(ROOT, 'package.json'), 'utf8'));
-writeFileSync(join(OUT, 'package.json'), `${JSON.stringify({ name: pkg.name, version: pkg.version, private: true, type: 'module' }, null, 2)}\n`);
-for (const dir of ['data-demo', 'api/store/migrations', 'web/static']) cpSync(join(ROOT, dir), join(OUT, dir), { recursive: true, filter: (src) => !src.endsWith('.ts') });
-console.log(`built ${entryPoints.length} modules into ${relative(process.cwd(), OUT) || '.'}/ in ${Math.round(performance.now() - started)} ms`);
+writeFileSync(
+  join(OUT, 'package.json'),
+  `${JSON.stringify({ name: pkg.name, version: pkg.version, private: true, type: 'module' }, null, 2)}\n`,
+);
+for (const dir of ['data-demo', 'api/store/migrations', 'web/static'])
+  cpSync(join(ROOT, dir), join(OUT, dir), {
+    recursive: true,
+    filter: (src) => !src.endsWith('.ts'),
+  });
+console.log(
+  `built ${entryPoints.length} modules into ${relative(process.cwd(), OUT) || '.'}/ in ${Math.round(performance.now() - started)} ms`,
+);

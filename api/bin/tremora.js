@@ -5,7 +5,9 @@ import { existsSync } from 'node:fs';
 
 const compiled = new URL('../../dist/api/cli.js', import.meta.url);
 if (!existsSync(compiled)) {
-  console.error('tremora: the compiled CLI (dist/api/cli.js) is missing; run "npm run build" in the Tremora folder');
+  console.error(
+    'tremora: the compiled CLI (dist/api/cli.js) is missing; run "npm run build" in the Tremora folder',
+  );
   process.exit(1);
 }
 const { runCli } = await import(compiled.href);

@@ -1,14 +1,42 @@
-import { completenessOverTime, maxCurvatureMc, type CompletenessWindow } from '../engine/catalog/completeness.ts';
+import {
+  completenessOverTime,
+  maxCurvatureMc,
+  type CompletenessWindow,
+} from '../engine/catalog/completeness.ts';
 import type { CompletenessPeriod } from '../engine/catalog/completeness-periods.ts';
 import type { CatalogEvent } from '../engine/catalog/event.ts';
-import { frequencyMagnitude, type FrequencyMagnitude } from '../engine/catalog/frequency-magnitude.ts';
-import { declusterGardnerKnopoff, type DeclusteredCatalog } from '../engine/catalog/gardner-knopoff.ts';
-import { fitGutenbergRichter, fitGutenbergRichterWeichert, observationSpan, type GutenbergRichterFit } from '../engine/catalog/gutenberg-richter-fit.ts';
-import { convertMagnitudes, type MagnitudeConversion } from '../engine/catalog/magnitude-conversion.ts';
-import { selectByMagnitudeType, type MagnitudeSelection } from '../engine/catalog/magnitude-type.ts';
+import {
+  frequencyMagnitude,
+  type FrequencyMagnitude,
+} from '../engine/catalog/frequency-magnitude.ts';
+import {
+  declusterGardnerKnopoff,
+  type DeclusteredCatalog,
+} from '../engine/catalog/gardner-knopoff.ts';
+import {
+  fitGutenbergRichter,
+  fitGutenbergRichterWeichert,
+  observationSpan,
+  type GutenbergRichterFit,
+} from '../engine/catalog/gutenberg-richter-fit.ts';
+import {
+  convertMagnitudes,
+  type MagnitudeConversion,
+} from '../engine/catalog/magnitude-conversion.ts';
+import {
+  selectByMagnitudeType,
+  type MagnitudeSelection,
+} from '../engine/catalog/magnitude-type.ts';
 import { insideZone, zonePolygon } from '../engine/catalog/zone-polygon.ts';
 import { zoneRecurrence, type ZoneRecurrence } from '../engine/catalog/zone-recurrence.ts';
-import { bOutsideUsual, completenessChanges, largeMagnitudesDisagree, mostRemoved, USUAL_B_RANGE, type FitFinding } from '../engine/catalog/fit-checks.ts';
+import {
+  bOutsideUsual,
+  completenessChanges,
+  largeMagnitudesDisagree,
+  mostRemoved,
+  USUAL_B_RANGE,
+  type FitFinding,
+} from '../engine/catalog/fit-checks.ts';
 import { InvalidInput } from '../engine/errors.ts';
 import type { LonLat } from '../engine/model.ts';
 
@@ -27,8 +55,16 @@ export interface CatalogFit {
   readonly excludedNonMoment: number;
   /** Undefined when declustering was turned off. */
   readonly declustering?: DeclusteredCatalog;
-  readonly zone: { readonly given: boolean; readonly eventsInZone: number; readonly eventsOutside: number };
-  readonly observation: { readonly startMs: number; readonly endMs: number; readonly years: number };
+  readonly zone: {
+    readonly given: boolean;
+    readonly eventsInZone: number;
+    readonly eventsOutside: number;
+  };
+  readonly observation: {
+    readonly startMs: number;
+    readonly endMs: number;
+    readonly years: number;
+  };
   readonly completeness: {
     readonly method: 'max-curvature' | 'fixed';
     readonly mc: number;
@@ -69,7 +105,15 @@ export const SERVICE_OPTION_NAMES: FitOptionNames = {
  * Without a polygon every event counts: the zone is the whole globe as one ring (in GeoJSON's
  * longitude–latitude plane, where it holds every epicentre, its boundary included).
  */
-const WHOLE_GLOBE: readonly (readonly LonLat[])[] = [[[-180, -90], [180, -90], [180, 90], [-180, 90], [-180, -90]]];
+const WHOLE_GLOBE: readonly (readonly LonLat[])[] = [
+  [
+    [-180, -90],
+    [180, -90],
+    [180, 90],
+    [-180, 90],
+    [-180, -90],
+  ],
+];
 
 const plural = (n: number, one: string, many = `${one}s`): string => `${n} ${n === 1 ? one : many}`;
 
@@ -108,72 +152,139 @@ export interface CatalogFitOptions {
 }
 
 /** Declustering, Mc, Aki–Utsu (and Weichert), recurrence and frequency–magnitude of a catalog. */
-export function fitCatalog(events: readonly CatalogEvent[], options: CatalogFitOptions = {}): CatalogFit {
+export function fitCatalog(
+  events: readonly CatalogEvent[],
+  options: CatalogFitOptions = {},
+): CatalogFit {
   const step = options.magnitudeStep ?? 0.1;
   const magnitudes = options.magnitudes ?? 'moment';
   const names = options.optionNames ?? SERVICE_OPTION_NAMES;
   const notes: string[] = [];
-  const conversion = options.conversions && options.conversions.length > 0 ? convertMagnitudes(events, options.conversions) : undefined;
+  const conversion =
+    options.conversions && options.conversions.length > 0
+      ? convertMagnitudes(events, options.conversions)
+      : undefined;
   const selected = selectByMagnitudeType(conversion?.events ?? events, magnitudes);
   if (selected.events.length === 0) {
     throw new InvalidInput([
-      { path: 'magnitudes', message: `expected moment magnitudes; none of the ${plural(events.length, 'event')} has one. Ask for all magnitudes to fit them as they are` },
+      {
+        path: 'magnitudes',
+        message: `expected moment magnitudes; none of the ${plural(events.length, 'event')} has one. Ask for all magnitudes to fit them as they are`,
+      },
     ]);
   }
-  const declustering = options.decluster === false ? undefined : declusterGardnerKnopoff(selected.events, { magnitudes: 'all' });
+  const declustering =
+    options.decluster === false
+      ? undefined
+      : declusterGardnerKnopoff(selected.events, { magnitudes: 'all' });
   const kept = declustering?.mainshocks ?? selected.events;
 
   const rings = options.rings ?? WHOLE_GLOBE;
   const zone = zonePolygon(rings, 'polygon');
   const fitted = kept.filter((e) => insideZone(zone, e.lon, e.lat));
   if (fitted.length === 0) {
-    throw new InvalidInput([{ path: 'polygon', message: `expected events inside the zone polygon; all ${plural(kept.length, 'event')} fall outside it` }]);
+    throw new InvalidInput([
+      {
+        path: 'polygon',
+        message: `expected events inside the zone polygon; all ${plural(kept.length, 'event')} fall outside it`,
+      },
+    ]);
   }
-  if (options.startMs === undefined && fitted.every((e) => e.timeMs === (fitted[0] as CatalogEvent).timeMs)) {
-    throw new InvalidInput([{ path: 'startTime', message: `expected events at two or more times to measure the observation span from, or startTime and endTime; every event fitted is at ${new Date((fitted[0] as CatalogEvent).timeMs).toISOString()}` }]);
+  if (
+    options.startMs === undefined &&
+    fitted.every((e) => e.timeMs === (fitted[0] as CatalogEvent).timeMs)
+  ) {
+    throw new InvalidInput([
+      {
+        path: 'startTime',
+        message: `expected events at two or more times to measure the observation span from, or startTime and endTime; every event fitted is at ${new Date((fitted[0] as CatalogEvent).timeMs).toISOString()}`,
+      },
+    ]);
   }
   const span = observationSpan(fitted, options.startMs, options.endMs);
   if (span.notes.length > 0) {
-    notes.push(`the observation span runs from the first to the last event fitted, which shortens it by about one gap between events and so raises the rates; give the catalog's real span (${names.span})`);
+    notes.push(
+      `the observation span runs from the first to the last event fitted, which shortens it by about one gap between events and so raises the rates; give the catalog's real span (${names.span})`,
+    );
   }
   const inSpan = fitted.filter((e) => e.timeMs >= span.startMs && e.timeMs <= span.endMs);
   if (inSpan.length === 0) {
-    throw new InvalidInput([{ path: 'startTime', message: `expected events within the observation span; none of the ${plural(fitted.length, 'event')} fitted falls in it` }]);
+    throw new InvalidInput([
+      {
+        path: 'startTime',
+        message: `expected events within the observation span; none of the ${plural(fitted.length, 'event')} fitted falls in it`,
+      },
+    ]);
   }
   const correction = options.mcCorrection ?? 0.2;
-  const curvature = options.mc === undefined ? maxCurvatureMc(inSpan.map((e) => e.magnitude), { magnitudeStep: step, correction }) : undefined;
+  const curvature =
+    options.mc === undefined
+      ? maxCurvatureMc(
+          inSpan.map((e) => e.magnitude),
+          { magnitudeStep: step, correction },
+        )
+      : undefined;
   const mc = options.mc ?? (curvature?.mc as number);
   const common = { magnitudeStep: step, magnitudes: 'all' } as const;
-  const akiUtsu = fitGutenbergRichter(fitted, { ...common, mc, startMs: span.startMs, endMs: span.endMs });
+  const akiUtsu = fitGutenbergRichter(fitted, {
+    ...common,
+    mc,
+    startMs: span.startMs,
+    endMs: span.endMs,
+  });
 
   const perWindow = options.eventsPerWindow ?? 100;
   if (options.periods === 'proposed' && inSpan.length < perWindow) {
-    throw new InvalidInput([{ path: 'completeness.eventsPerWindow', message: `expected at most ${inSpan.length} events per window (the events fitted) to propose completeness periods; got ${perWindow}` }]);
+    throw new InvalidInput([
+      {
+        path: 'completeness.eventsPerWindow',
+        message: `expected at most ${inSpan.length} events per window (the events fitted) to propose completeness periods; got ${perWindow}`,
+      },
+    ]);
   }
   if (Array.isArray(options.periods)) {
     options.periods.forEach((p, i) => {
       if (!(p.startMs < span.endMs)) {
-        throw new InvalidInput([{ path: `completeness.periods[${i}].start`, message: `expected a start before the end of the observation span, ${new Date(span.endMs).toISOString()}; got ${new Date(p.startMs).toISOString()}` }]);
+        throw new InvalidInput([
+          {
+            path: `completeness.periods[${i}].start`,
+            message: `expected a start before the end of the observation span, ${new Date(span.endMs).toISOString()}; got ${new Date(p.startMs).toISOString()}`,
+          },
+        ]);
       }
     });
   }
-  const overTime = options.periods === 'proposed' ? completenessOverTime(inSpan, { ...common, correction, eventsPerWindow: perWindow }) : undefined;
-  const periods = overTime?.periods ?? (options.periods === 'proposed' ? undefined : options.periods);
+  const overTime =
+    options.periods === 'proposed'
+      ? completenessOverTime(inSpan, { ...common, correction, eventsPerWindow: perWindow })
+      : undefined;
+  const periods =
+    overTime?.periods ?? (options.periods === 'proposed' ? undefined : options.periods);
   const upper = options.mMax === undefined ? {} : { upperMagnitude: options.mMax };
-  const weichert = periods ? fitGutenbergRichterWeichert(fitted, { ...common, ...upper, periods, endMs: span.endMs }) : undefined;
+  const weichert = periods
+    ? fitGutenbergRichterWeichert(fitted, { ...common, ...upper, periods, endMs: span.endMs })
+    : undefined;
   const chosen = weichert ?? akiUtsu;
 
   let recurrence: ZoneRecurrence | undefined;
-  if (options.mMax === undefined) notes.push(`no recurrence: give the largest magnitude the zone can host (${names.mMax}), which a catalog cannot tell`);
+  if (options.mMax === undefined)
+    notes.push(
+      `no recurrence: give the largest magnitude the zone can host (${names.mMax}), which a catalog cannot tell`,
+    );
   else {
-    if (weichert) notes.push(`the Weichert (1980) fit counts every magnitude bin up to ${names.mMax} ${options.mMax}, the empty ones too, so ${names.mMax} changes its b-value`);
+    if (weichert)
+      notes.push(
+        `the Weichert (1980) fit counts every magnitude bin up to ${names.mMax} ${options.mMax}, the empty ones too, so ${names.mMax} changes its b-value`,
+      );
     recurrence = zoneRecurrence(fitted, {
       ...common,
       rings,
       mMax: options.mMax,
       // Mc − ΔM/2, a bin edge, rounded to 1e-9 as bin centres are: the recurrence to paste reads 4.15, not 4.1499999999999995.
       mMin: Math.round(chosen.referenceMagnitude * 1e9) / 1e9,
-      completeness: periods ? { periods, endMs: span.endMs } : { mc, startMs: span.startMs, endMs: span.endMs },
+      completeness: periods
+        ? { periods, endMs: span.endMs }
+        : { mc, startMs: span.startMs, endMs: span.endMs },
     });
     notes.push(...recurrence.notes);
   }
@@ -182,14 +293,31 @@ export function fitCatalog(events: readonly CatalogEvent[], options: CatalogFitO
     startMs: span.startMs,
     endMs: span.endMs,
     ...(periods ? { periods } : {}),
-    fit: { aValue: chosen.aValue, bValue: chosen.bValue, referenceMagnitude: chosen.referenceMagnitude },
+    fit: {
+      aValue: chosen.aValue,
+      bValue: chosen.bValue,
+      referenceMagnitude: chosen.referenceMagnitude,
+    },
   });
-  const inSpanMagnitudes = inSpan.filter((e) => e.magnitude >= chosen.referenceMagnitude - 1e-9).map((e) => e.magnitude);
-  const windows = overTime?.windows ?? (periods === undefined && inSpan.length >= 2 * perWindow ? completenessOverTime(inSpan, { ...common, correction, eventsPerWindow: perWindow }).windows : undefined);
+  const inSpanMagnitudes = inSpan
+    .filter((e) => e.magnitude >= chosen.referenceMagnitude - 1e-9)
+    .map((e) => e.magnitude);
+  const windows =
+    overTime?.windows ??
+    (periods === undefined && inSpan.length >= 2 * perWindow
+      ? completenessOverTime(inSpan, { ...common, correction, eventsPerWindow: perWindow }).windows
+      : undefined);
   const findings = [
     bOutsideUsual(chosen.bValue),
     inSpanMagnitudes.length > 0
-      ? largeMagnitudesDisagree({ magnitudes: inSpanMagnitudes, aValue: chosen.aValue, bValue: chosen.bValue, referenceMagnitude: chosen.referenceMagnitude, observationYears: chosen.observationYears, magnitudeStep: step })
+      ? largeMagnitudesDisagree({
+          magnitudes: inSpanMagnitudes,
+          aValue: chosen.aValue,
+          bValue: chosen.bValue,
+          referenceMagnitude: chosen.referenceMagnitude,
+          observationYears: chosen.observationYears,
+          magnitudeStep: step,
+        })
       : undefined,
     periods === undefined && windows ? completenessChanges(windows, mc) : undefined,
     declustering ? mostRemoved(declustering.removed.length, selected.events.length) : undefined,
@@ -197,13 +325,25 @@ export function fitCatalog(events: readonly CatalogEvent[], options: CatalogFitO
   return {
     warnings: findings.map((f) => findingText(f, names, chosen.observationYears)),
     magnitudes,
-    ...(conversion ? { conversion: { converted: conversion.converted, outsideRange: conversion.outsideRange } } : {}),
+    ...(conversion
+      ? { conversion: { converted: conversion.converted, outsideRange: conversion.outsideRange } }
+      : {}),
     excludedNonMoment: selected.excludedNonMoment,
     ...(declustering ? { declustering } : {}),
-    zone: { given: options.rings !== undefined, eventsInZone: fitted.length, eventsOutside: kept.length - fitted.length },
+    zone: {
+      given: options.rings !== undefined,
+      eventsInZone: fitted.length,
+      eventsOutside: kept.length - fitted.length,
+    },
     observation: { startMs: span.startMs, endMs: span.endMs, years: akiUtsu.observationYears },
     completeness: curvature
-      ? { method: 'max-curvature', mc, peakMagnitude: curvature.peakMagnitude, correction, ...(overTime ? { windows: overTime.windows } : {}) }
+      ? {
+          method: 'max-curvature',
+          mc,
+          peakMagnitude: curvature.peakMagnitude,
+          correction,
+          ...(overTime ? { windows: overTime.windows } : {}),
+        }
       : { method: 'fixed', mc, ...(overTime ? { windows: overTime.windows } : {}) },
     akiUtsu,
     ...(weichert ? { weichert } : {}),

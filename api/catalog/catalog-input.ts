@@ -11,13 +11,19 @@ import { parseCatalog } from './parse-catalog.ts';
 const MAX_ISSUES = 50;
 
 /** `catalog[line 7]` for a record's place, `catalog.quakeml` for an element. */
-const under = (path: string, where: string): string => (/^(line|event) /.test(where) ? `${path}[${where}]` : `${path}.${where}`);
+const under = (path: string, where: string): string =>
+  /^(line|event) /.test(where) ? `${path}[${where}]` : `${path}.${where}`;
 
 /** One issue per reason of each rejected record, under `path`, at most MAX_ISSUES in all. */
 export function rejectedIssues(rejected: readonly RejectedRecord[], path: string): InputIssue[] {
-  const issues = rejected.flatMap((r) => r.reasons.map((reason) => ({ path: under(path, r.where), message: reason })));
+  const issues = rejected.flatMap((r) =>
+    r.reasons.map((reason) => ({ path: under(path, r.where), message: reason })),
+  );
   if (issues.length <= MAX_ISSUES) return issues;
-  return [...issues.slice(0, MAX_ISSUES - 1), { path, message: `and ${issues.length - MAX_ISSUES + 1} more problems in other records` }];
+  return [
+    ...issues.slice(0, MAX_ISSUES - 1),
+    { path, message: `and ${issues.length - MAX_ISSUES + 1} more problems in other records` },
+  ];
 }
 
 /**
@@ -26,9 +32,16 @@ export function rejectedIssues(rejected: readonly RejectedRecord[], path: string
  * read at all (no header, malformed XML) or that loads no event at all throws InvalidInput
  * with issues under `path` naming the line or event.
  */
-export function readCatalogText(text: string, format?: CatalogFormat, path = 'catalog'): CatalogLoad {
+export function readCatalogText(
+  text: string,
+  format?: CatalogFormat,
+  path = 'catalog',
+): CatalogLoad {
   if (text.trim() === '') {
-    throw new InvalidInput([{ path, message: `expected catalog text (${CATALOG_FORMAT_LABELS}); got an empty text` }], 'invalid catalog');
+    throw new InvalidInput(
+      [{ path, message: `expected catalog text (${CATALOG_FORMAT_LABELS}); got an empty text` }],
+      'invalid catalog',
+    );
   }
   let load: CatalogLoad;
   try {
@@ -41,6 +54,9 @@ export function readCatalogText(text: string, format?: CatalogFormat, path = 'ca
     );
   }
   if (load.events.length > 0) return load;
-  const issues = load.rejected.length > 0 ? rejectedIssues(load.rejected, path) : [{ path, message: `expected at least one event; the ${load.format} text holds none` }];
+  const issues =
+    load.rejected.length > 0
+      ? rejectedIssues(load.rejected, path)
+      : [{ path, message: `expected at least one event; the ${load.format} text holds none` }];
   throw new InvalidInput(issues, 'no event could be loaded from the catalog');
 }

@@ -1,7 +1,12 @@
 import type { CompletenessPeriod } from '../engine/catalog/completeness-periods.ts';
 import type { CatalogEvent } from '../engine/catalog/event.ts';
 import type { GutenbergRichterFit } from '../engine/catalog/gutenberg-richter-fit.ts';
-import { FELT_MMI, STRONGLY_FELT_MMI, type FeltEstimate, type FeltHistory } from '../engine/catalog/felt-history.ts';
+import {
+  FELT_MMI,
+  STRONGLY_FELT_MMI,
+  type FeltEstimate,
+  type FeltHistory,
+} from '../engine/catalog/felt-history.ts';
 import type { CatalogFit } from './catalog-fit.ts';
 import { describeCatalogLoad, type CatalogLoad } from './catalog-load.ts';
 
@@ -83,7 +88,10 @@ const grFitJson = (f: GutenbergRichterFit) => ({
   observationYears: f.observationYears,
 });
 
-const periodJson = (p: CompletenessPeriod) => ({ magnitude: p.magnitude, start: isoTime(p.startMs) });
+const periodJson = (p: CompletenessPeriod) => ({
+  magnitude: p.magnitude,
+  start: isoTime(p.startMs),
+});
 
 /** A catalog fit (catalog-fit.ts); parts that were not asked for are null. */
 export const catalogFitJson = (fit: CatalogFit) => {
@@ -101,25 +109,53 @@ export const catalogFitJson = (fit: CatalogFit) => {
           mainshocks: d.mainshocks.length,
           removed: d.removed.length,
           clusters: d.clusterCount,
-          removedEvents: d.removed.map((x) => ({ ...catalogEventJson(x.event), mainshockId: x.mainshockId, distanceKm: x.distanceKm, daysFromMainshock: x.daysFromMainshock })),
+          removedEvents: d.removed.map((x) => ({
+            ...catalogEventJson(x.event),
+            mainshockId: x.mainshockId,
+            distanceKm: x.distanceKm,
+            daysFromMainshock: x.daysFromMainshock,
+          })),
         }
       : { applied: false },
     zone: fit.zone,
-    observation: { start: isoTime(fit.observation.startMs), end: isoTime(fit.observation.endMs), years: fit.observation.years },
+    observation: {
+      start: isoTime(fit.observation.startMs),
+      end: isoTime(fit.observation.endMs),
+      years: fit.observation.years,
+    },
     completeness: {
       method: c.method,
       mc: c.mc,
       peakMagnitude: c.peakMagnitude ?? null,
       correction: c.correction ?? null,
-      windows: c.windows?.map((w) => ({ start: isoTime(w.startMs), end: isoTime(w.endMs), eventCount: w.eventCount, mc: w.mc })) ?? null,
+      windows:
+        c.windows?.map((w) => ({
+          start: isoTime(w.startMs),
+          end: isoTime(w.endMs),
+          eventCount: w.eventCount,
+          mc: w.mc,
+        })) ?? null,
     },
     akiUtsu: grFitJson(fit.akiUtsu),
     weichert: fit.weichert ? grFitJson(fit.weichert) : null,
     periods: fit.periods?.map(periodJson) ?? null,
     recurrence: r
-      ? { recurrence: r.recurrence, method: r.fit.method, bValue: r.bValue, sigmaB: r.sigmaB, rate: r.rate, sigmaRate: r.sigmaRate, eventCount: r.eventCount, summary: r.summary, notes: r.notes }
+      ? {
+          recurrence: r.recurrence,
+          method: r.fit.method,
+          bValue: r.bValue,
+          sigmaB: r.sigmaB,
+          rate: r.rate,
+          sigmaRate: r.sigmaRate,
+          eventCount: r.eventCount,
+          summary: r.summary,
+          notes: r.notes,
+        }
       : null,
-    frequencyMagnitude: { bins: fit.frequencyMagnitude.bins, fittedLine: fit.frequencyMagnitude.fittedLine ?? null },
+    frequencyMagnitude: {
+      bins: fit.frequencyMagnitude.bins,
+      fittedLine: fit.frequencyMagnitude.fittedLine ?? null,
+    },
     warnings: fit.warnings,
     notes: fit.notes,
   };

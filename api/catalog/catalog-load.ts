@@ -3,7 +3,6 @@ import { countMagnitudeTypes, isMomentMagnitudeType } from '../engine/catalog/ma
 
 import type { CatalogFormat } from './catalog-formats.ts';
 
-
 /** A record that could not be loaded, where it was and why. */
 export interface RejectedRecord {
   /** "line 7" for the text formats, "event 3 (smi:local/event/3)" for QuakeML. */
@@ -48,7 +47,11 @@ export function catalogLoad(
   for (const { event, where } of candidates) {
     const first = seen.get(event.id);
     if (first !== undefined) {
-      allRejected.push({ ...where, id: event.id, reasons: [`duplicate id "${event.id}" (first at ${first})`] });
+      allRejected.push({
+        ...where,
+        id: event.id,
+        reasons: [`duplicate id "${event.id}" (first at ${first})`],
+      });
       continue;
     }
     seen.set(event.id, where.where);
@@ -60,7 +63,12 @@ export function catalogLoad(
     format,
     events,
     rejected: allRejected,
-    summary: { loaded: events.length, rejected: allRejected.length, byMagnitudeType: types.byType, nonMoment: types.nonMoment },
+    summary: {
+      loaded: events.length,
+      rejected: allRejected.length,
+      byMagnitudeType: types.byType,
+      nonMoment: types.nonMoment,
+    },
     notes,
   };
 }
@@ -71,14 +79,18 @@ export function describeCatalogLoad(load: CatalogLoad): string {
   const parts = [`Loaded ${loaded} event${loaded === 1 ? '' : 's'}; rejected ${rejected}.`];
   if (rejected > 0) {
     const shown = load.rejected.slice(0, 10).map((r) => `${r.where}: ${r.reasons.join('; ')}`);
-    parts.push(`Rejected: ${shown.join(' | ')}${rejected > shown.length ? ` | and ${rejected - shown.length} more` : ''}.`);
+    parts.push(
+      `Rejected: ${shown.join(' | ')}${rejected > shown.length ? ` | and ${rejected - shown.length} more` : ''}.`,
+    );
   }
   if (nonMoment > 0) {
     const others = Object.entries(byMagnitudeType)
       .filter(([type]) => !isMomentMagnitudeType(type))
       .map(([type, count]) => `${type} ${count}`)
       .join(', ');
-    parts.push(`${nonMoment} event${nonMoment === 1 ? ' has a magnitude type' : 's have magnitude types'} other than moment magnitude (${others}); analyses use moment magnitudes only unless asked to use all.`);
+    parts.push(
+      `${nonMoment} event${nonMoment === 1 ? ' has a magnitude type' : 's have magnitude types'} other than moment magnitude (${others}); analyses use moment magnitudes only unless asked to use all.`,
+    );
   }
   return parts.join(' ');
 }

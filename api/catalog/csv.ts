@@ -9,7 +9,15 @@ import { eventFromFields } from './event-fields.ts';
  * (columns in any order; `id` optional, other columns ignored). time ISO 8601 (UTC when no
  * zone), lon/lat WGS84 degrees, depthKm km below sea level.
  */
-export const CATALOG_CSV_COLUMNS = ['time', 'lon', 'lat', 'depthKm', 'magnitude', 'magnitudeType', 'id'] as const;
+export const CATALOG_CSV_COLUMNS = [
+  'time',
+  'lon',
+  'lat',
+  'depthKm',
+  'magnitude',
+  'magnitudeType',
+  'id',
+] as const;
 const REQUIRED = CATALOG_CSV_COLUMNS.filter((c) => c !== 'id');
 
 /**
@@ -34,15 +42,25 @@ export function parseCatalogCsv(text: string): CatalogLoad {
     },
   });
   const headerRow = rows.find((r) => r.cells.some((c) => c.trim() !== ''));
-  if (!headerRow) throw new InvalidInput([{ path: 'line 1', message: `expected a header row: ${CATALOG_CSV_COLUMNS.join(',')}` }]);
+  if (!headerRow)
+    throw new InvalidInput([
+      { path: 'line 1', message: `expected a header row: ${CATALOG_CSV_COLUMNS.join(',')}` },
+    ]);
   const header = headerRow.cells.map((c) => c.trim());
   const missing = REQUIRED.filter((c) => !header.includes(c));
   if (missing.length > 0) {
-    throw new InvalidInput([{ path: `line ${headerRow.line}`, message: `expected the columns ${CATALOG_CSV_COLUMNS.join(',')} (id optional); missing ${missing.join(', ')}` }]);
+    throw new InvalidInput([
+      {
+        path: `line ${headerRow.line}`,
+        message: `expected the columns ${CATALOG_CSV_COLUMNS.join(',')} (id optional); missing ${missing.join(', ')}`,
+      },
+    ]);
   }
   const column = (name: string): number => header.indexOf(name);
   const notes: string[] = [];
-  const ignored = header.filter((h) => h !== '' && !(CATALOG_CSV_COLUMNS as readonly string[]).includes(h));
+  const ignored = header.filter(
+    (h) => h !== '' && !(CATALOG_CSV_COLUMNS as readonly string[]).includes(h),
+  );
   if (ignored.length > 0) notes.push(`ignored columns: ${ignored.join(', ')}`);
   const candidates: { event: CatalogEvent; where: RejectedRecord }[] = [];
   const rejected: RejectedRecord[] = [];
@@ -51,10 +69,15 @@ export function parseCatalogCsv(text: string): CatalogLoad {
     if (row.line <= headerRow.line || row.cells.every((c) => c.trim() === '')) continue;
     const where = `line ${row.line}`;
     if (row.cells.length !== header.length) {
-      rejected.push({ where, line: row.line, reasons: [`expected ${header.length} fields; got ${row.cells.length}`] });
+      rejected.push({
+        where,
+        line: row.line,
+        reasons: [`expected ${header.length} fields; got ${row.cells.length}`],
+      });
       continue;
     }
-    const cell = (name: string): string | undefined => (column(name) >= 0 ? row.cells[column(name)] : undefined);
+    const cell = (name: string): string | undefined =>
+      column(name) >= 0 ? row.cells[column(name)] : undefined;
     const givenId = cell('id')?.trim() ?? '';
     if (givenId === '') generatedIds++;
     const id = givenId === '' ? `line-${row.line}` : givenId;
@@ -67,8 +90,15 @@ export function parseCatalogCsv(text: string): CatalogLoad {
       magnitude: cell('magnitude'),
       magnitudeType: cell('magnitudeType'),
     });
-    if ('event' in result) candidates.push({ event: result.event, where: { where, line: row.line, reasons: [] } });
-    else rejected.push({ where, line: row.line, ...(givenId === '' ? {} : { id: givenId }), reasons: result.reasons });
+    if ('event' in result)
+      candidates.push({ event: result.event, where: { where, line: row.line, reasons: [] } });
+    else
+      rejected.push({
+        where,
+        line: row.line,
+        ...(givenId === '' ? {} : { id: givenId }),
+        reasons: result.reasons,
+      });
   }
   if (generatedIds > 0) notes.push(`${generatedIds} rows had no id and were given "line-<number>"`);
   return catalogLoad('csv', candidates, rejected, notes);

@@ -24,20 +24,29 @@ const MAGNITUDE_RANGE = [-3, 10] as const;
 const NUMBER_PATTERN = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 
 /** An event from its text fields, or every reason it cannot be one. */
-export function eventFromFields(f: EventFields): { readonly event: CatalogEvent } | { readonly reasons: string[] } {
+export function eventFromFields(
+  f: EventFields,
+): { readonly event: CatalogEvent } | { readonly reasons: string[] } {
   const reasons: string[] = [];
-  const number = (name: string, raw: string | undefined, [min, max]: readonly [number, number], unit: string): number => {
+  const number = (
+    name: string,
+    raw: string | undefined,
+    [min, max]: readonly [number, number],
+    unit: string,
+  ): number => {
     const text = raw?.trim() ?? '';
     if (text === '') {
       reasons.push(`${name}: missing; expected a number from ${min} to ${max}${unit}`);
       return NaN;
     }
     const value = NUMBER_PATTERN.test(text) ? Number(text) : NaN;
-    if (!(value >= min && value <= max)) reasons.push(`${name}: expected a number from ${min} to ${max}${unit}; got "${text}"`);
+    if (!(value >= min && value <= max))
+      reasons.push(`${name}: expected a number from ${min} to ${max}${unit}; got "${text}"`);
     return value;
   };
   let timeMs = NaN;
-  if (f.time === undefined || f.time.trim() === '') reasons.push('time: missing; expected an ISO 8601 time');
+  if (f.time === undefined || f.time.trim() === '')
+    reasons.push('time: missing; expected an ISO 8601 time');
   else {
     const parsed = parseIsoTimeMs(f.time);
     if (parsed.ok) timeMs = parsed.timeMs;
@@ -49,5 +58,15 @@ export function eventFromFields(f: EventFields): { readonly event: CatalogEvent 
   const magnitude = number('magnitude', f.magnitude, MAGNITUDE_RANGE, '');
   if (reasons.length > 0) return { reasons };
   const type = f.magnitudeType?.trim() ?? '';
-  return { event: { id: f.id, timeMs, lon, lat, depthKm, magnitude, magnitudeType: type === '' ? 'unknown' : type } };
+  return {
+    event: {
+      id: f.id,
+      timeMs,
+      lon,
+      lat,
+      depthKm,
+      magnitude,
+      magnitudeType: type === '' ? 'unknown' : type,
+    },
+  };
 }

@@ -27,12 +27,15 @@ const parser = new XMLParser({
 /** Element text, whether the parser gave a string or an object with attributes. */
 function textOf(node: unknown): string | undefined {
   if (typeof node === 'string') return node.trim();
-  if (node && typeof node === 'object' && '#text' in node) return String((node as XmlNode)['#text']).trim();
+  if (node && typeof node === 'object' && '#text' in node)
+    return String((node as XmlNode)['#text']).trim();
   return undefined;
 }
 
-const child = (node: unknown, name: string): unknown => (node && typeof node === 'object' ? (node as XmlNode)[name] : undefined);
-const valueOf = (node: unknown, name: string): string | undefined => textOf(child(child(node, name), 'value'));
+const child = (node: unknown, name: string): unknown =>
+  node && typeof node === 'object' ? (node as XmlNode)[name] : undefined;
+const valueOf = (node: unknown, name: string): string | undefined =>
+  textOf(child(child(node, name), 'value'));
 const publicIdOf = (node: unknown): string | undefined => textOf(child(node, '@_publicID'));
 const listOf = (node: unknown, name: string): unknown[] => {
   const v = child(node, name);
@@ -46,17 +49,30 @@ const listOf = (node: unknown, name: string): unknown[] => {
 export function parseQuakeMl(text: string): CatalogLoad {
   const valid = XMLValidator.validate(text);
   if (valid !== true) {
-    throw new InvalidInput([{ path: `line ${valid.err.line}`, message: `expected well-formed QuakeML XML: ${valid.err.msg}` }]);
+    throw new InvalidInput([
+      {
+        path: `line ${valid.err.line}`,
+        message: `expected well-formed QuakeML XML: ${valid.err.msg}`,
+      },
+    ]);
   }
   let root: XmlNode;
   try {
     root = parser.parse(text) as XmlNode;
   } catch (error) {
     // Well-formed XML the parser still refuses: external entities (never fetched), nesting beyond its limit.
-    throw new InvalidInput([{ path: 'quakeml', message: `expected QuakeML without external entities or extreme nesting: ${error instanceof Error ? error.message : String(error)}` }]);
+    throw new InvalidInput([
+      {
+        path: 'quakeml',
+        message: `expected QuakeML without external entities or extreme nesting: ${error instanceof Error ? error.message : String(error)}`,
+      },
+    ]);
   }
   const parameters = child(root.quakeml, 'eventParameters') ?? root.eventParameters;
-  if (!parameters) throw new InvalidInput([{ path: 'quakeml', message: 'expected a quakeml element holding eventParameters' }]);
+  if (!parameters)
+    throw new InvalidInput([
+      { path: 'quakeml', message: 'expected a quakeml element holding eventParameters' },
+    ]);
   const candidates: { event: CatalogEvent; where: RejectedRecord }[] = [];
   const rejected: RejectedRecord[] = [];
   listOf(parameters, 'event').forEach((node, i) => {
@@ -66,12 +82,16 @@ export function parseQuakeMl(text: string): CatalogLoad {
     const reasons: string[] = [];
     if (!publicId) reasons.push('publicID: missing');
     const type = textOf(child(node, 'type'));
-    if (type !== undefined && !acceptedEventType(type)) reasons.push(`type: "${type}" is not an earthquake`);
+    if (type !== undefined && !acceptedEventType(type))
+      reasons.push(`type: "${type}" is not an earthquake`);
     const origin = preferred(node, 'origin', 'preferredOriginID', reasons);
     const magnitude = preferred(node, 'magnitude', 'preferredMagnitudeID', reasons);
     if (origin !== undefined && magnitude !== undefined) {
       const depthM = valueOf(origin, 'depth');
-      const depthKm = depthM === undefined || depthM === '' || Number.isNaN(Number(depthM)) ? depthM : String(Number(depthM) / 1000);
+      const depthKm =
+        depthM === undefined || depthM === '' || Number.isNaN(Number(depthM))
+          ? depthM
+          : String(Number(depthM) / 1000);
       const result = eventFromFields({
         id: publicId ?? '',
         time: valueOf(origin, 'time'),
@@ -81,21 +101,32 @@ export function parseQuakeMl(text: string): CatalogLoad {
         magnitude: valueOf(magnitude, 'mag'),
         magnitudeType: textOf(child(magnitude, 'type')),
       });
-      if ('reasons' in result) reasons.push(...result.reasons.map((r) => r.replace(/^depthKm: /, 'depth (km, from metres): ')));
-      else if (reasons.length === 0) candidates.push({ event: result.event, where: { where, index, reasons: [] } });
+      if ('reasons' in result)
+        reasons.push(
+          ...result.reasons.map((r) => r.replace(/^depthKm: /, 'depth (km, from metres): ')),
+        );
+      else if (reasons.length === 0)
+        candidates.push({ event: result.event, where: { where, index, reasons: [] } });
     }
-    if (reasons.length > 0) rejected.push({ where, index, ...(publicId ? { id: publicId } : {}), reasons });
+    if (reasons.length > 0)
+      rejected.push({ where, index, ...(publicId ? { id: publicId } : {}), reasons });
   });
   return catalogLoad('quakeml', candidates, rejected, []);
 }
 
 /** The origin or magnitude an event prefers, or the first; a reason is added when none fits. */
-function preferred(event: unknown, name: 'origin' | 'magnitude', preferredTag: string, reasons: string[]): unknown {
+function preferred(
+  event: unknown,
+  name: 'origin' | 'magnitude',
+  preferredTag: string,
+  reasons: string[],
+): unknown {
   const all = listOf(event, name);
   const wanted = textOf(child(event, preferredTag));
   if (wanted) {
     const match = all.find((o) => publicIdOf(o) === wanted);
-    if (match === undefined) reasons.push(`${preferredTag}: "${wanted}" matches no ${name} of this event`);
+    if (match === undefined)
+      reasons.push(`${preferredTag}: "${wanted}" matches no ${name} of this event`);
     return match;
   }
   if (all.length === 0) reasons.push(`${name}: missing`);

@@ -5,7 +5,8 @@ export function numberOption(values: Record<string, unknown>, name: string): num
   const raw = values[name];
   if (raw === undefined) return undefined;
   const n = typeof raw === 'string' && raw.trim() !== '' ? Number(raw) : NaN;
-  if (!Number.isFinite(n)) throw new UsageError(`--${name}: expected a number, got "${String(raw)}"`);
+  if (!Number.isFinite(n))
+    throw new UsageError(`--${name}: expected a number, got "${String(raw)}"`);
   return n;
 }
 
@@ -15,12 +16,18 @@ export function requiredNumber(values: Record<string, unknown>, name: string): n
   return n;
 }
 
-export function choiceOption<const T extends readonly string[]>(values: Record<string, unknown>, name: string, choices: T): T[number] | undefined {
+export function choiceOption<const T extends readonly string[]>(
+  values: Record<string, unknown>,
+  name: string,
+  choices: T,
+): T[number] | undefined {
   const raw = values[name];
   if (raw === undefined) return undefined;
-  if (typeof raw !== 'string' || !choices.includes(raw)) throw new UsageError(`--${name}: expected one of ${choices.join(', ')}, got "${String(raw)}"`);
+  if (typeof raw !== 'string' || !choices.includes(raw))
+    throw new UsageError(`--${name}: expected one of ${choices.join(', ')}, got "${String(raw)}"`);
   return raw as T[number];
 }
 
 /** Significant figures for people: 0.1234 → "0.123", 12.34 → "12.3". */
-export const sig = (x: number, digits = 3): string => (x === 0 ? '0' : Number(x.toPrecision(digits)).toString());
+export const sig = (x: number, digits = 3): string =>
+  x === 0 ? '0' : Number(x.toPrecision(digits)).toString();

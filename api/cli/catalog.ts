@@ -7,7 +7,14 @@ import { catalogFitJson, catalogLoadJson, feltJson, isoTime } from '../catalog/c
 import { describeCatalogLoad, type CatalogLoad } from '../catalog/catalog-load.ts';
 import { parseIsoTimeMs } from '../catalog/iso-time.ts';
 import { readZonePolygon } from '../catalog/zone-geojson.ts';
-import { feltHistory, FELT_MMI, STRONGLY_FELT_MMI, type Compass, type FeltEstimate, type FeltHistory } from '../engine/catalog/felt-history.ts';
+import {
+  feltHistory,
+  FELT_MMI,
+  STRONGLY_FELT_MMI,
+  type Compass,
+  type FeltEstimate,
+  type FeltHistory,
+} from '../engine/catalog/felt-history.ts';
 import { MAGNITUDE_RELATIONS } from '../engine/catalog/magnitude-conversion.ts';
 import { InvalidInput } from '../engine/errors.ts';
 import { mmiRoman } from '../engine/intensity/mmi-roman.ts';
@@ -52,7 +59,9 @@ export async function catalogVerb(args: readonly string[], io: Io): Promise<numb
   const [sub, ...rest] = args;
   if (sub === 'fit') return fitVerb(rest, io);
   if (sub === 'felt') return feltVerb(rest, io);
-  throw new UsageError(`expected "fit" or "felt" after "catalog", got ${sub === undefined ? 'nothing' : `"${sub}"`}`);
+  throw new UsageError(
+    `expected "fit" or "felt" after "catalog", got ${sub === undefined ? 'nothing' : `"${sub}"`}`,
+  );
 }
 
 function timeOption(text: string, name: string): number {
@@ -67,8 +76,16 @@ function periodsOption(text: string): CompletenessPeriod[] | 'proposed' {
   return text.split(',').map((pair, i) => {
     const [m, time, extra] = pair.trim().split('@');
     const magnitude = Number(m);
-    if (extra !== undefined || time === undefined || m === undefined || m.trim() === '' || !Number.isFinite(magnitude)) {
-      throw new UsageError(`--periods: expected "proposed" or M@TIME pairs such as 4.0@1970-01-01, got "${pair.trim()}" (pair ${i + 1})`);
+    if (
+      extra !== undefined ||
+      time === undefined ||
+      m === undefined ||
+      m.trim() === '' ||
+      !Number.isFinite(magnitude)
+    ) {
+      throw new UsageError(
+        `--periods: expected "proposed" or M@TIME pairs such as 4.0@1970-01-01, got "${pair.trim()}" (pair ${i + 1})`,
+      );
     }
     const parsed = parseIsoTimeMs(time);
     if (!parsed.ok) throw new UsageError(`--periods: pair ${i + 1}: ${parsed.message}`);
@@ -80,7 +97,12 @@ async function readTextFile(path: string, what: string): Promise<string> {
   try {
     return await readFile(path, 'utf8');
   } catch (error) {
-    throw new InvalidInput([{ path, message: `cannot read the ${what} (${(error as NodeJS.ErrnoException).code ?? 'error'})` }]);
+    throw new InvalidInput([
+      {
+        path,
+        message: `cannot read the ${what} (${(error as NodeJS.ErrnoException).code ?? 'error'})`,
+      },
+    ]);
   }
 }
 
@@ -92,24 +114,37 @@ async function fitVerb(args: readonly string[], io: Io): Promise<number> {
   const { values, positionals } = parseArgs({
     args: [...args],
     options: {
-      polygon: { type: 'string' }, 'm-max': { type: 'string' }, 'no-decluster': { type: 'boolean' }, 'all-magnitudes': { type: 'boolean' }, convert: { type: 'string' },
-      start: { type: 'string' }, end: { type: 'string' }, periods: { type: 'string' }, json: { type: 'boolean' },
+      polygon: { type: 'string' },
+      'm-max': { type: 'string' },
+      'no-decluster': { type: 'boolean' },
+      'all-magnitudes': { type: 'boolean' },
+      convert: { type: 'string' },
+      start: { type: 'string' },
+      end: { type: 'string' },
+      periods: { type: 'string' },
+      json: { type: 'boolean' },
     },
     allowPositionals: true,
     strict: true,
   });
-  if (positionals.length !== 1) throw new UsageError('expected exactly one CATALOG file after "catalog fit"');
+  if (positionals.length !== 1)
+    throw new UsageError('expected exactly one CATALOG file after "catalog fit"');
   const path = positionals[0] as string;
   const mMax = numberOption(values, 'm-max');
-  if ((values.start === undefined) !== (values.end === undefined)) throw new UsageError('--start and --end go together (the observation span of the catalog)');
+  if ((values.start === undefined) !== (values.end === undefined))
+    throw new UsageError('--start and --end go together (the observation span of the catalog)');
   const startMs = values.start === undefined ? undefined : timeOption(values.start, 'start');
   const endMs = values.end === undefined ? undefined : timeOption(values.end, 'end');
-  if (startMs !== undefined && endMs !== undefined && !(endMs > startMs)) throw new UsageError(`--end: expected a time after --start ${values.start}, got ${values.end}`);
+  if (startMs !== undefined && endMs !== undefined && !(endMs > startMs))
+    throw new UsageError(`--end: expected a time after --start ${values.start}, got ${values.end}`);
   const periods = values.periods === undefined ? undefined : periodsOption(values.periods);
   const conversions = values.convert === undefined ? undefined : conversionOption(values.convert);
   let rings;
   if (values.polygon !== undefined) {
-    const parsed = parseJsonText(await readTextFile(values.polygon, 'polygon file'), values.polygon);
+    const parsed = parseJsonText(
+      await readTextFile(values.polygon, 'polygon file'),
+      values.polygon,
+    );
     if (!parsed.ok) throw new InvalidInput([parsed.issue]);
     rings = readZonePolygon(parsed.value, values.polygon);
   }
@@ -128,27 +163,50 @@ async function fitVerb(args: readonly string[], io: Io): Promise<number> {
     io.out(JSON.stringify({ catalog: catalogLoadJson(load), ...catalogFitJson(fit) }, null, 2));
     return EXIT_OK;
   }
-  for (const line of fitLines(basename(path), load, fit, values.polygon === undefined ? undefined : basename(values.polygon))) io.out(line);
+  for (const line of fitLines(
+    basename(path),
+    load,
+    fit,
+    values.polygon === undefined ? undefined : basename(values.polygon),
+  ))
+    io.out(line);
   return EXIT_OK;
 }
 
 /** The command line's names for what the fit's notes and warnings point to. */
-const CLI_OPTION_NAMES: FitOptionNames = { span: '--start and --end', mMax: '--m-max', periods: '--periods proposed, or your own', decluster: '--no-decluster' };
+const CLI_OPTION_NAMES: FitOptionNames = {
+  span: '--start and --end',
+  mMax: '--m-max',
+  periods: '--periods proposed, or your own',
+  decluster: '--no-decluster',
+};
 
 const plural = (n: number, one: string, many = `${one}s`): string => `${n} ${n === 1 ? one : many}`;
 
 /** `--convert scordilis2006-mb,grunthal2009-ml`: relation ids, each known. */
 function conversionOption(text: string): string[] {
-  const ids = text.split(',').map((s) => s.trim()).filter((s) => s !== '');
+  const ids = text
+    .split(',')
+    .map((s) => s.trim())
+    .filter((s) => s !== '');
   const known = MAGNITUDE_RELATIONS.map((r) => r.id);
-  for (const id of ids) if (!known.includes(id)) throw new UsageError(`--convert: expected relation ids among ${known.join(', ')}; got "${id}"`);
+  for (const id of ids)
+    if (!known.includes(id))
+      throw new UsageError(
+        `--convert: expected relation ids among ${known.join(', ')}; got "${id}"`,
+      );
   return ids;
 }
 
 /** The conversions of a fit, one line per relation: how many converted, how many outside its range. */
 function conversionLines(fit: CatalogFit): string[] {
   if (!fit.conversion) return [];
-  const ids = [...new Set([...Object.keys(fit.conversion.converted), ...Object.keys(fit.conversion.outsideRange)])];
+  const ids = [
+    ...new Set([
+      ...Object.keys(fit.conversion.converted),
+      ...Object.keys(fit.conversion.outsideRange),
+    ]),
+  ];
   return ids.map((id) => {
     const r = MAGNITUDE_RELATIONS.find((x) => x.id === id) as (typeof MAGNITUDE_RELATIONS)[number];
     const outside = fit.conversion?.outsideRange[id] ?? 0;
@@ -157,10 +215,16 @@ function conversionLines(fit: CatalogFit): string[] {
 }
 const day = (timeMs: number): string => isoTime(timeMs).slice(0, 10);
 /** Magnitudes as catalogs print them: one decimal, two for bin edges such as 4.15. */
-const mag = (m: number): string => (Math.abs(m * 10 - Math.round(m * 10)) < 1e-6 ? m.toFixed(1) : m.toFixed(2));
+const mag = (m: number): string =>
+  Math.abs(m * 10 - Math.round(m * 10)) < 1e-6 ? m.toFixed(1) : m.toFixed(2);
 
 /** The human-readable account of a fit, line by line. */
-export function fitLines(fileName: string, load: CatalogLoad, fit: CatalogFit, polygonName?: string): string[] {
+export function fitLines(
+  fileName: string,
+  load: CatalogLoad,
+  fit: CatalogFit,
+  polygonName?: string,
+): string[] {
   const lines = [`Catalog ${fileName} (${load.format}): ${describeCatalogLoad(load)}`];
   lines.push(
     fit.magnitudes === 'all'
@@ -171,19 +235,26 @@ export function fitLines(fileName: string, load: CatalogLoad, fit: CatalogFit, p
   const d = fit.declustering;
   if (!d) lines.push('Declustering: none (foreshocks and aftershocks kept)');
   else {
-    lines.push(`Declustering (Gardner & Knopoff 1974): ${plural(d.mainshocks.length, 'mainshock')} kept; ${plural(d.removed.length, 'foreshock or aftershock', 'foreshocks and aftershocks')} removed in ${plural(d.clusterCount, 'cluster')}`);
+    lines.push(
+      `Declustering (Gardner & Knopoff 1974): ${plural(d.mainshocks.length, 'mainshock')} kept; ${plural(d.removed.length, 'foreshock or aftershock', 'foreshocks and aftershocks')} removed in ${plural(d.clusterCount, 'cluster')}`,
+    );
     for (const r of d.removed.slice(0, 20)) {
       const days = sig(Math.abs(r.daysFromMainshock), 2);
-      lines.push(`  ${day(r.event.timeMs)}  M ${mag(r.event.magnitude)} ${r.event.magnitudeType}  ${r.event.id}: ${sig(r.distanceKm, 2)} km from ${r.mainshockId}, ${days} day${days === '1' ? '' : 's'} ${r.daysFromMainshock < 0 ? 'before' : 'after'} it`);
+      lines.push(
+        `  ${day(r.event.timeMs)}  M ${mag(r.event.magnitude)} ${r.event.magnitudeType}  ${r.event.id}: ${sig(r.distanceKm, 2)} km from ${r.mainshockId}, ${days} day${days === '1' ? '' : 's'} ${r.daysFromMainshock < 0 ? 'before' : 'after'} it`,
+      );
     }
-    if (d.removed.length > 20) lines.push(`  and ${d.removed.length - 20} more (--json lists them all)`);
+    if (d.removed.length > 20)
+      lines.push(`  and ${d.removed.length - 20} more (--json lists them all)`);
   }
   lines.push(
     polygonName === undefined
       ? `Zone: the whole catalog (${plural(fit.zone.eventsInZone, 'event')}; give --polygon for one zone)`
       : `Zone: ${plural(fit.zone.eventsInZone, 'event')} inside ${polygonName}, ${fit.zone.eventsOutside} outside`,
   );
-  lines.push(`Observation: ${day(fit.observation.startMs)} to ${day(fit.observation.endMs)} (${sig(fit.observation.years)} years)`);
+  lines.push(
+    `Observation: ${day(fit.observation.startMs)} to ${day(fit.observation.endMs)} (${sig(fit.observation.years)} years)`,
+  );
   const c = fit.completeness;
   lines.push(
     c.method === 'max-curvature'
@@ -191,52 +262,109 @@ export function fitLines(fileName: string, load: CatalogLoad, fit: CatalogFit, p
       : `Completeness: Mc ${mag(c.mc)} (as given)`,
   );
   const a = fit.akiUtsu;
-  lines.push(`b-value (Aki–Utsu): ${a.bValue.toFixed(2)} ± ${a.sigmaB.toFixed(2)} (Shi & Bolt 1982) from ${plural(a.eventCount, 'event')} at or above Mc`);
-  if (fit.weichert) lines.push(`b-value (Weichert 1980, completeness periods): ${fit.weichert.bValue.toFixed(2)} ± ${fit.weichert.sigmaB.toFixed(2)}`);
+  lines.push(
+    `b-value (Aki–Utsu): ${a.bValue.toFixed(2)} ± ${a.sigmaB.toFixed(2)} (Shi & Bolt 1982) from ${plural(a.eventCount, 'event')} at or above Mc`,
+  );
+  if (fit.weichert)
+    lines.push(
+      `b-value (Weichert 1980, completeness periods): ${fit.weichert.bValue.toFixed(2)} ± ${fit.weichert.sigmaB.toFixed(2)}`,
+    );
   const used = fit.weichert ?? a;
-  lines.push(`a-value: ${used.aValue.toFixed(2)} (log10 of the yearly number of events of M 0 or more)`);
-  lines.push(`Yearly rate of M ${mag(used.referenceMagnitude)} or more: ${sig(used.rateAtReference)} ± ${sig(used.sigmaRate, 2)}`);
+  lines.push(
+    `a-value: ${used.aValue.toFixed(2)} (log10 of the yearly number of events of M 0 or more)`,
+  );
+  lines.push(
+    `Yearly rate of M ${mag(used.referenceMagnitude)} or more: ${sig(used.rateAtReference)} ± ${sig(used.sigmaRate, 2)}`,
+  );
   const r = fit.recurrence;
   if (r) {
-    const paste = { ...r.recurrence, bValue: Number(r.recurrence.bValue.toFixed(3)), rate: Number(sig(r.recurrence.rate ?? 0, 4)) };
+    const paste = {
+      ...r.recurrence,
+      bValue: Number(r.recurrence.bValue.toFixed(3)),
+      rate: Number(sig(r.recurrence.rate ?? 0, 4)),
+    };
     lines.push(`Recurrence for a zone source, up to M ${mag(r.recurrence.mMax)}: ${r.summary}`);
-    if (fit.warnings.length > 0) lines.push(...warningLines(fit.warnings), 'Read the warnings above before pasting this recurrence:');
-    lines.push(`To paste into the zone source's "properties" (rounded; --json gives every digit):`, `  "recurrence": ${JSON.stringify(paste)}`);
+    if (fit.warnings.length > 0)
+      lines.push(
+        ...warningLines(fit.warnings),
+        'Read the warnings above before pasting this recurrence:',
+      );
+    lines.push(
+      `To paste into the zone source's "properties" (rounded; --json gives every digit):`,
+      `  "recurrence": ${JSON.stringify(paste)}`,
+    );
   }
   lines.push('Frequency–magnitude (yearly rates of M at least the lower edge):');
-  lines.push(`  ${'M from'.padEnd(8)}${'count'.padStart(7)}${'M >= count'.padStart(12)}${'rate/yr'.padStart(11)}${'fitted/yr'.padStart(11)}`);
+  lines.push(
+    `  ${'M from'.padEnd(8)}${'count'.padStart(7)}${'M >= count'.padStart(12)}${'rate/yr'.padStart(11)}${'fitted/yr'.padStart(11)}`,
+  );
   for (const b of fit.frequencyMagnitude.bins) {
-    const fitted = b.fittedCumulativeAnnualRate === undefined ? '' : sig(b.fittedCumulativeAnnualRate);
-    lines.push(`  ${mag(b.lowerEdge).padEnd(8)}${String(b.count).padStart(7)}${String(b.cumulativeCount).padStart(12)}${sig(b.cumulativeAnnualRate).padStart(11)}${fitted.padStart(11)}`.trimEnd());
+    const fitted =
+      b.fittedCumulativeAnnualRate === undefined ? '' : sig(b.fittedCumulativeAnnualRate);
+    lines.push(
+      `  ${mag(b.lowerEdge).padEnd(8)}${String(b.count).padStart(7)}${String(b.cumulativeCount).padStart(12)}${sig(b.cumulativeAnnualRate).padStart(11)}${fitted.padStart(11)}`.trimEnd(),
+    );
   }
   if (!r && fit.warnings.length > 0) lines.push(...warningLines(fit.warnings));
   lines.push(...noteLines(fit.notes));
   return lines;
 }
 
-const warningLines = (warnings: readonly string[]): string[] => ['Warnings:', ...warnings.map((w) => `  ! ${w}`)];
+const warningLines = (warnings: readonly string[]): string[] => [
+  'Warnings:',
+  ...warnings.map((w) => `  ! ${w}`),
+];
 
 async function feltVerb(args: readonly string[], io: Io): Promise<number> {
   const { values, positionals } = parseArgs({
     args: [...args],
-    options: { community: { type: 'string' }, 'all-magnitudes': { type: 'boolean' }, json: { type: 'boolean' } },
+    options: {
+      community: { type: 'string' },
+      'all-magnitudes': { type: 'boolean' },
+      json: { type: 'boolean' },
+    },
     allowPositionals: true,
     strict: true,
   });
-  if (positionals.length !== 2) throw new UsageError('expected a STUDY file and a CATALOG file after "catalog felt"');
+  if (positionals.length !== 2)
+    throw new UsageError('expected a STUDY file and a CATALOG file after "catalog felt"');
   const [studyPath, catalogPath] = positionals as [string, string];
   const study = await loadStudyForVerb(studyPath, io, values.json);
-  const communities = values.community === undefined ? study.communities : study.communities.filter((c) => c.id === values.community);
+  const communities =
+    values.community === undefined
+      ? study.communities
+      : study.communities.filter((c) => c.id === values.community);
   if (communities.length === 0) {
-    throw new InvalidInput([{ path: 'community', message: `no community "${values.community}" in ${studyPath}; expected one of ${study.communities.map((c) => c.id).join(', ')}` }]);
+    throw new InvalidInput([
+      {
+        path: 'community',
+        message: `no community "${values.community}" in ${studyPath}; expected one of ${study.communities.map((c) => c.id).join(', ')}`,
+      },
+    ]);
   }
   const load = await readCatalogFile(catalogPath);
-  const history = feltHistory({ ...study, communities }, load.events, { models: modelCatalog, ...(values['all-magnitudes'] ? { magnitudes: 'all' } : {}) });
+  const history = feltHistory({ ...study, communities }, load.events, {
+    models: modelCatalog,
+    ...(values['all-magnitudes'] ? { magnitudes: 'all' } : {}),
+  });
   if (values.json) {
-    io.out(JSON.stringify({ study: study.name, catalog: catalogLoadJson(load), ...feltJson(history) }, null, 2));
+    io.out(
+      JSON.stringify(
+        { study: study.name, catalog: catalogLoadJson(load), ...feltJson(history) },
+        null,
+        2,
+      ),
+    );
     return EXIT_OK;
   }
-  for (const line of feltLines(study.name, study.settings.maxDistanceKm, basename(catalogPath), load, history)) io.out(line);
+  for (const line of feltLines(
+    study.name,
+    study.settings.maxDistanceKm,
+    basename(catalogPath),
+    load,
+    history,
+  ))
+    io.out(line);
   return EXIT_OK;
 }
 
@@ -253,7 +381,9 @@ const COMPASS_WORDS: Readonly<Record<Compass, string>> = {
 
 /** "30 km to the north", or "under 1 km away" where a direction means little. */
 export const distanceInWords = (e: Pick<FeltEstimate, 'distanceKm' | 'compass'>): string =>
-  e.distanceKm < 1 ? 'under 1 km away' : `${Math.round(e.distanceKm)} km to the ${COMPASS_WORDS[e.compass]}`;
+  e.distanceKm < 1
+    ? 'under 1 km away'
+    : `${Math.round(e.distanceKm)} km to the ${COMPASS_WORDS[e.compass]}`;
 
 /** Notes printed before "and N more": the engine notes each model limit met, which can run long. */
 const MAX_NOTES = 8;
@@ -261,10 +391,22 @@ const MAX_NOTES = 8;
 const noteLines = (notes: readonly string[]): string[] =>
   notes.length === 0
     ? []
-    : ['Notes:', ...notes.slice(0, MAX_NOTES).map((n) => `  - ${n}`), ...(notes.length > MAX_NOTES ? [`  - and ${notes.length - MAX_NOTES} more (--json lists them all)`] : [])];
+    : [
+        'Notes:',
+        ...notes.slice(0, MAX_NOTES).map((n) => `  - ${n}`),
+        ...(notes.length > MAX_NOTES
+          ? [`  - and ${notes.length - MAX_NOTES} more (--json lists them all)`]
+          : []),
+      ];
 
 /** The human-readable felt history, line by line; `maxDistanceKm` is the study's distance cut. */
-export function feltLines(studyName: string, maxDistanceKm: number, fileName: string, load: CatalogLoad, history: FeltHistory): string[] {
+export function feltLines(
+  studyName: string,
+  maxDistanceKm: number,
+  fileName: string,
+  load: CatalogLoad,
+  history: FeltHistory,
+): string[] {
   const lines = [
     `Catalog ${fileName} (${load.format}): ${describeCatalogLoad(load)}`,
     `Felt history of "${studyName}" from ${plural(history.eventCount, 'event')}: the median intensity each earthquake likely reached, from the study's ground-motion models and Worden et al. (2012). Likely felt: MMI ${mmiRoman(FELT_MMI)} or more; strongly felt: ${mmiRoman(STRONGLY_FELT_MMI)} or more.`,
@@ -277,8 +419,8 @@ export function feltLines(studyName: string, maxDistanceKm: number, fileName: st
       c.estimates.length === 0
         ? `${c.name}: no catalog event within ${sig(maxDistanceKm)} km`
         : c.felt.length === 0
-        ? `${c.name}: none of ${within} was likely felt`
-        : `${c.name}: ${c.felt.length} of ${within} likely felt${strong > 0 ? `, ${strong} strongly` : ''}`,
+          ? `${c.name}: none of ${within} was likely felt`
+          : `${c.name}: ${c.felt.length} of ${within} likely felt${strong > 0 ? `, ${strong} strongly` : ''}`,
     );
     for (const e of c.felt) {
       const line = `  ${e.date}  M ${mag(e.magnitude)} ${e.magnitudeType.padEnd(4)} ${distanceInWords(e).padEnd(24)} MMI ${e.roman.padEnd(5)}${e.mmi >= STRONGLY_FELT_MMI ? ' strongly felt' : ''}`;
@@ -286,6 +428,9 @@ export function feltLines(studyName: string, maxDistanceKm: number, fileName: st
     }
   }
   if (history.notes.length > 0) lines.push('', ...noteLines(history.notes));
-  lines.push('', 'Estimates from past earthquakes for awareness, not design values: building codes and licensed engineers decide.');
+  lines.push(
+    '',
+    'Estimates from past earthquakes for awareness, not design values: building codes and licensed engineers decide.',
+  );
   return lines;
 }

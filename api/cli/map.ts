@@ -3,7 +3,14 @@ import { availableParallelism } from 'node:os';
 import { parseArgs } from 'node:util';
 import type { MapPoint, MapQuantity } from '../engine/map/hazard-map.ts';
 import type { LonLatBounds } from '../engine/map/map-grid.ts';
-import { MAP_CAUTION, mapGeoJsonFeatures, mapGeoJsonHead, mapGeoJsonTail, valueUnit, type MapDescription } from '../engine/map/map-geojson.ts';
+import {
+  MAP_CAUTION,
+  mapGeoJsonFeatures,
+  mapGeoJsonHead,
+  mapGeoJsonTail,
+  valueUnit,
+  type MapDescription,
+} from '../engine/map/map-geojson.ts';
 import { ChunkQueue } from '../queue/chunk-queue.ts';
 import { queueUrlFrom } from '../queue/queue-setting.ts';
 import { hazardMapOnPool } from '../workers/parallel-map.ts';
@@ -39,22 +46,32 @@ function quantityOf(values: Record<string, unknown>): MapQuantity {
   const level = numberOption(values, 'level');
   const horizonYears = numberOption(values, 'horizon');
   if (returnPeriodYears !== undefined) {
-    if (level !== undefined || horizonYears !== undefined) throw new UsageError('give --return-period, or --level with --horizon, not both');
+    if (level !== undefined || horizonYears !== undefined)
+      throw new UsageError('give --return-period, or --level with --horizon, not both');
     return { kind: 'return-period', returnPeriodYears };
   }
-  if (level === undefined || horizonYears === undefined) throw new UsageError('expected --return-period YEARS, or --level L with --horizon YEARS');
+  if (level === undefined || horizonYears === undefined)
+    throw new UsageError('expected --return-period YEARS, or --level L with --horizon YEARS');
   return { kind: 'chance', level, horizonYears };
 }
 
 function boundsOf(text: unknown): LonLatBounds | undefined {
   if (text === undefined) return undefined;
-  const parts = String(text).split(',').map((p) => Number(p.trim()));
-  if (parts.length !== 4 || parts.some((p) => !Number.isFinite(p))) throw new UsageError(`--bounds: expected four numbers WEST,SOUTH,EAST,NORTH in degrees, got "${String(text)}"`);
+  const parts = String(text)
+    .split(',')
+    .map((p) => Number(p.trim()));
+  if (parts.length !== 4 || parts.some((p) => !Number.isFinite(p)))
+    throw new UsageError(
+      `--bounds: expected four numbers WEST,SOUTH,EAST,NORTH in degrees, got "${String(text)}"`,
+    );
   return parts as unknown as LonLatBounds;
 }
 
 /** A progress bar on stderr: redrawn in place on a terminal, a line every 10% otherwise. */
-function progressBar(io: Io, enabled: boolean): (share: number, points: number, count: number) => void {
+function progressBar(
+  io: Io,
+  enabled: boolean,
+): (share: number, points: number, count: number) => void {
   const terminal = io === processIo && process.stderr.isTTY;
   let shown = -1;
   return (share, points, count) => {
@@ -75,9 +92,16 @@ export async function mapVerb(args: readonly string[], io: Io): Promise<number> 
   const { values, positionals } = parseArgs({
     args: [...args],
     options: {
-      measure: { type: 'string' }, 'return-period': { type: 'string' }, level: { type: 'string' }, horizon: { type: 'string' },
-      spacing: { type: 'string' }, vs30: { type: 'string' }, bounds: { type: 'string' }, out: { type: 'string' },
-      threads: { type: 'string' }, json: { type: 'boolean' },
+      measure: { type: 'string' },
+      'return-period': { type: 'string' },
+      level: { type: 'string' },
+      horizon: { type: 'string' },
+      spacing: { type: 'string' },
+      vs30: { type: 'string' },
+      bounds: { type: 'string' },
+      out: { type: 'string' },
+      threads: { type: 'string' },
+      json: { type: 'boolean' },
     },
     allowPositionals: true,
     strict: true,
@@ -88,14 +112,25 @@ export async function mapVerb(args: readonly string[], io: Io): Promise<number> 
   const vs30 = numberOption(values, 'vs30');
   const bounds = boundsOf(values.bounds);
   const threads = numberOption(values, 'threads') ?? availableParallelism();
-  if (!Number.isInteger(threads) || threads < 1) throw new UsageError(`--threads: expected a whole number of at least 1, got ${threads}`);
+  if (!Number.isInteger(threads) || threads < 1)
+    throw new UsageError(`--threads: expected a whole number of at least 1, got ${threads}`);
   const study = await loadStudyForVerb(positionals[0], io, values.json);
-  const map = { measure: values.measure ?? 'PGA', quantity, spacingKm, ...(vs30 !== undefined ? { vs30 } : {}), ...(bounds ? { bounds } : {}) };
+  const map = {
+    measure: values.measure ?? 'PGA',
+    quantity,
+    spacingKm,
+    ...(vs30 !== undefined ? { vs30 } : {}),
+    ...(bounds ? { bounds } : {}),
+  };
 
   // The GeoJSON goes to the file, or to stdout for --json without --out; nowhere otherwise.
   const file: WriteStream | undefined = values.out ? createWriteStream(values.out) : undefined;
   // Through io.out on stdout: each piece ends a line or is followed by one, which JSON allows between tokens.
-  const write = file ? (text: string) => void file.write(text) : values.json ? (text: string) => io.out(text) : undefined;
+  const write = file
+    ? (text: string) => void file.write(text)
+    : values.json
+      ? (text: string) => io.out(text)
+      : undefined;
   const bar = progressBar(io, !values.json || file !== undefined);
   let description: MapDescription | undefined;
   let written = 0;
@@ -113,21 +148,36 @@ export async function mapVerb(args: readonly string[], io: Io): Promise<number> 
       onPoints: (points, share) => {
         write?.(mapGeoJsonFeatures(description!, points, written === 0));
         written += points.length;
-        for (const p of points) if (p.value !== null && (highest?.value == null || p.value > highest.value)) highest = p;
+        for (const p of points)
+          if (p.value !== null && (highest?.value == null || p.value > highest.value)) highest = p;
         bar(share, written, description!.count);
       },
     }).result;
     write?.(mapGeoJsonTail(summary));
-    if (file) await new Promise<void>((resolve, reject) => file.end((error?: Error | null) => (error ? reject(error) : resolve())));
+    if (file)
+      await new Promise<void>((resolve, reject) =>
+        file.end((error?: Error | null) => (error ? reject(error) : resolve())),
+      );
     if (values.json) {
-      if (file) io.out(JSON.stringify({ ...summary, out: values.out, valueUnit: valueUnit(summary) }, null, 2));
+      if (file)
+        io.out(
+          JSON.stringify({ ...summary, out: values.out, valueUnit: valueUnit(summary) }, null, 2),
+        );
       return EXIT_OK;
     }
-    const what = quantity.kind === 'return-period' ? `${summary.measure} with a ${quantity.returnPeriodYears}-year return period` : `chance of ${summary.measure} above ${quantity.level} ${summary.unit} within ${quantity.horizonYears} years`;
+    const what =
+      quantity.kind === 'return-period'
+        ? `${summary.measure} with a ${quantity.returnPeriodYears}-year return period`
+        : `chance of ${summary.measure} above ${quantity.level} ${summary.unit} within ${quantity.horizonYears} years`;
     io.out(`${study.name}: map of the ${what}, Vs30 ${summary.vs30} m/s`);
-    io.out(`${summary.count} points (${summary.columns} x ${summary.rows}) every ${sig(summary.spacingKm)} km${file ? `, written to ${values.out}` : ' (give --out FILE for the GeoJSON)'}`);
+    io.out(
+      `${summary.count} points (${summary.columns} x ${summary.rows}) every ${sig(summary.spacingKm)} km${file ? `, written to ${values.out}` : ' (give --out FILE for the GeoJSON)'}`,
+    );
     if (highest?.value != null) {
-      const value = quantity.kind === 'chance' ? `${sig(highest.value * 100, 2)}%` : `${sig(highest.value, 3)} ${summary.unit}`;
+      const value =
+        quantity.kind === 'chance'
+          ? `${sig(highest.value * 100, 2)}%`
+          : `${sig(highest.value, 3)} ${summary.unit}`;
       io.out(`highest: ${value} at ${highest.lon.toFixed(3)}, ${highest.lat.toFixed(3)}`);
     }
     for (const w of summary.warnings) io.err(`note: ${w}`);

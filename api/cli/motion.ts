@@ -25,15 +25,32 @@ export async function motionVerb(args: readonly string[], io: Io): Promise<numbe
   const { values } = parseArgs({
     args: [...args],
     options: {
-      model: { type: 'string' }, magnitude: { type: 'string' }, rjb: { type: 'string' }, rrup: { type: 'string' },
-      rx: { type: 'string' }, ry0: { type: 'string' }, rhypo: { type: 'string' }, vs30: { type: 'string' },
-      mechanism: { type: 'string' }, dip: { type: 'string' }, ztor: { type: 'string' }, width: { type: 'string' },
-      depth: { type: 'string' }, setting: { type: 'string' }, measures: { type: 'string' }, json: { type: 'boolean' },
+      model: { type: 'string' },
+      magnitude: { type: 'string' },
+      rjb: { type: 'string' },
+      rrup: { type: 'string' },
+      rx: { type: 'string' },
+      ry0: { type: 'string' },
+      rhypo: { type: 'string' },
+      vs30: { type: 'string' },
+      mechanism: { type: 'string' },
+      dip: { type: 'string' },
+      ztor: { type: 'string' },
+      width: { type: 'string' },
+      depth: { type: 'string' },
+      setting: { type: 'string' },
+      measures: { type: 'string' },
+      json: { type: 'boolean' },
     },
     strict: true,
   });
-  const optional = <K extends string>(key: K, value: number | undefined) => (value === undefined ? {} : { [key]: value });
-  const mechanism = choiceOption(values, 'mechanism', ['strike-slip', 'reverse', 'normal'] as const);
+  const optional = <K extends string>(key: K, value: number | undefined) =>
+    value === undefined ? {} : { [key]: value };
+  const mechanism = choiceOption(values, 'mechanism', [
+    'strike-slip',
+    'reverse',
+    'normal',
+  ] as const);
   const setting = choiceOption(values, 'setting', ['crustal', 'interface', 'intraslab'] as const);
   const result = probeMotion(
     {
@@ -57,17 +74,50 @@ export async function motionVerb(args: readonly string[], io: Io): Promise<numbe
   );
   if (values.json) {
     const measures = Object.fromEntries(
-      Object.entries(result.measures).map(([k, m]) => [k, { median: m.median, unit: m.unit, sigma: m.sigma, tau: m.tau, phi: m.phi, applicable: m.applicable, notes: m.notes, derived: m.derived ?? null }]),
+      Object.entries(result.measures).map(([k, m]) => [
+        k,
+        {
+          median: m.median,
+          unit: m.unit,
+          sigma: m.sigma,
+          tau: m.tau,
+          phi: m.phi,
+          applicable: m.applicable,
+          notes: m.notes,
+          derived: m.derived ?? null,
+        },
+      ]),
     );
-    io.out(JSON.stringify({ model: result.model, input: result.input, defaults: result.defaults, unusedDefaults: result.unusedDefaults, distanceUsed: result.distanceUsed ?? null, measures }, null, 2));
+    io.out(
+      JSON.stringify(
+        {
+          model: result.model,
+          input: result.input,
+          defaults: result.defaults,
+          unusedDefaults: result.unusedDefaults,
+          distanceUsed: result.distanceUsed ?? null,
+          measures,
+        },
+        null,
+        2,
+      ),
+    );
     return EXIT_OK;
   }
   const i = result.input;
   io.out(`${result.model} — ${result.citation}`);
-  io.out(`M ${i.magnitude} ${i.mechanism} (${i.setting}), Rjb ${sig(i.rjbKm)} km, Rrup ${sig(i.rrupKm)} km, Rhypo ${sig(i.rhypoKm)} km, Vs30 ${i.vs30} m/s`);
-  if (result.distanceUsed) io.out(`distance in the model's equations: ${DISTANCE_NAMES[result.distanceUsed]} ${sig(i[result.distanceUsed])} km`);
+  io.out(
+    `M ${i.magnitude} ${i.mechanism} (${i.setting}), Rjb ${sig(i.rjbKm)} km, Rrup ${sig(i.rrupKm)} km, Rhypo ${sig(i.rhypoKm)} km, Vs30 ${i.vs30} m/s`,
+  );
+  if (result.distanceUsed)
+    io.out(
+      `distance in the model's equations: ${DISTANCE_NAMES[result.distanceUsed]} ${sig(i[result.distanceUsed])} km`,
+    );
   if (result.defaults.length > 0) io.out(`assumed: ${result.defaults.join('; ')}`);
-  if (result.unusedDefaults.length > 0) io.out(`not read by ${result.model} for ${i.setting} earthquakes: ${result.unusedDefaults.map((d) => d.split(' ')[0]).join(', ')}`);
+  if (result.unusedDefaults.length > 0)
+    io.out(
+      `not read by ${result.model} for ${i.setting} earthquakes: ${result.unusedDefaults.map((d) => d.split(' ')[0]).join(', ')}`,
+    );
   for (const [key, m] of Object.entries(result.measures)) {
     const otherNotes = m.notes.filter((n) => n !== m.derived);
     io.out(

@@ -26,8 +26,16 @@ export async function scenarioVerb(args: readonly string[], io: Io): Promise<num
   const { values, positionals } = parseArgs({
     args: [...args],
     options: {
-      source: { type: 'string' }, magnitude: { type: 'string' }, near: { type: 'string' }, middle: { type: 'boolean' }, along: { type: 'string' },
-      'down-dip': { type: 'string' }, lon: { type: 'string' }, lat: { type: 'string' }, grid: { type: 'string' }, json: { type: 'boolean' },
+      source: { type: 'string' },
+      magnitude: { type: 'string' },
+      near: { type: 'string' },
+      middle: { type: 'boolean' },
+      along: { type: 'string' },
+      'down-dip': { type: 'string' },
+      lon: { type: 'string' },
+      lat: { type: 'string' },
+      grid: { type: 'string' },
+      json: { type: 'boolean' },
     },
     allowPositionals: true,
     strict: true,
@@ -42,7 +50,8 @@ export async function scenarioVerb(args: readonly string[], io: Io): Promise<num
   let position: ScenarioPosition | undefined;
   if (values.near) position = { communityId: values.near };
   else if (values.middle) position = 'middle';
-  else if (along !== undefined || downDip !== undefined) position = { alongStrikeKm: along ?? 0, downDipKm: downDip ?? 0 };
+  else if (along !== undefined || downDip !== undefined)
+    position = { alongStrikeKm: along ?? 0, downDipKm: downDip ?? 0 };
   else if (lon !== undefined || lat !== undefined) {
     if (lon === undefined || lat === undefined) throw new UsageError('--lon and --lat go together');
     position = { lon, lat };
@@ -59,18 +68,26 @@ export async function scenarioVerb(args: readonly string[], io: Io): Promise<num
     io.out(JSON.stringify(result, null, 2));
     return EXIT_OK;
   }
-  io.out(`Scenario: M ${result.magnitude} on ${result.sourceName} (${result.models.map((m) => `${m.model} ${m.weight}`).join(', ')})`);
+  io.out(
+    `Scenario: M ${result.magnitude} on ${result.sourceName} (${result.models.map((m) => `${m.model} ${m.weight}`).join(', ')})`,
+  );
   io.out(`Rupture position: ${result.position}`);
   const measures = Object.keys(result.communities[0]?.motions ?? {});
-  io.out(`\n${'community'.padEnd(22)}${'Rrup km'.padStart(9)}  ${measures.map((m) => `${m} median/84%`.padStart(22)).join('')}  MMI median/84%`);
+  io.out(
+    `\n${'community'.padEnd(22)}${'Rrup km'.padStart(9)}  ${measures.map((m) => `${m} median/84%`.padStart(22)).join('')}  MMI median/84%`,
+  );
   for (const c of result.communities) {
     const cells = measures.map((m) => {
       const v = c.motions[m];
       return v ? `${sig(v.median, 2)}/${sig(v.p84, 2)} ${v.unit}`.padStart(22) : ''.padStart(22);
     });
-    io.out(`${c.name.padEnd(22)}${sig(c.rrupKm).padStart(9)}  ${cells.join('')}  ${c.mmi.romanMedian}/${c.mmi.romanP84}`);
+    io.out(
+      `${c.name.padEnd(22)}${sig(c.rrupKm).padStart(9)}  ${cells.join('')}  ${c.mmi.romanMedian}/${c.mmi.romanP84}`,
+    );
   }
   for (const w of result.warnings) io.err(`note: ${w}`);
-  io.out('\nScreening estimates only, not design values: building codes and licensed engineers decide.');
+  io.out(
+    '\nScreening estimates only, not design values: building codes and licensed engineers decide.',
+  );
   return EXIT_OK;
 }

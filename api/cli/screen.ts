@@ -25,7 +25,9 @@ const pgaText = (g: number): string => (g >= 0.01 ? g.toFixed(2) : sig(g, 2));
 
 /** "12 km away" or, for a fault beneath the place, "38 km below" (its depth there). */
 function faultWhere(fault: NearestFault): string {
-  return fault.depthBelowKm === undefined ? `${sig(fault.distanceKm, 2)} km away` : `${sig(fault.depthBelowKm, 2)} km below`;
+  return fault.depthBelowKm === undefined
+    ? `${sig(fault.distanceKm, 2)} km away`
+    : `${sig(fault.depthBelowKm, 2)} km below`;
 }
 
 export async function screenVerb(args: readonly string[], io: Io): Promise<number> {
@@ -37,7 +39,8 @@ export async function screenVerb(args: readonly string[], io: Io): Promise<numbe
   });
   if (positionals.length !== 1) throw new UsageError('expected exactly one STUDY file');
   const format = choiceOption(values, 'format', ['json', 'csv'] as const) ?? 'json';
-  if (values.json && format === 'csv') throw new UsageError('--json prints JSON; use --format csv with --out');
+  if (values.json && format === 'csv')
+    throw new UsageError('--json prints JSON; use --format csv with --out');
   const study = await loadStudyForVerb(positionals[0], io, values.json);
 
   const startedAt = new Date().toISOString();
@@ -54,7 +57,13 @@ export async function screenVerb(args: readonly string[], io: Io): Promise<numbe
   });
   const result: StudyResult = {
     ...output,
-    provenance: buildProvenance({ study, toolVersion: TOOL_VERSION, inputHash: inputHash(study), startedAt, finishedAt: new Date().toISOString() }),
+    provenance: buildProvenance({
+      study,
+      toolVersion: TOOL_VERSION,
+      inputHash: inputHash(study),
+      startedAt,
+      finishedAt: new Date().toISOString(),
+    }),
   };
   const text = format === 'csv' ? runCsv(study, result) : `${JSON.stringify(result, null, 2)}\n`;
   if (values.out) {
@@ -68,7 +77,9 @@ export async function screenVerb(args: readonly string[], io: Io): Promise<numbe
 
   const chance = (p: number | undefined) => (p === undefined ? '' : `${sig(p * 100, 2)}%`);
   io.out(`${result.studyName}: ${result.communities.length} communities screened`);
-  io.out(`\n${'community'.padEnd(22)}${'band'.padEnd(20)}${'PGA 475 yr'.padStart(12)}${'MMI 475'.padStart(9)}${'MMI VII+ 50 yr'.padStart(16)}  nearest fault`);
+  io.out(
+    `\n${'community'.padEnd(22)}${'band'.padEnd(20)}${'PGA 475 yr'.padStart(12)}${'MMI 475'.padStart(9)}${'MMI VII+ 50 yr'.padStart(16)}  nearest fault`,
+  );
   for (const c of result.communities) {
     const pga = c.atReturnPeriod['475']?.PGA;
     const mmi = c.intensity.atReturnPeriod['475'];
@@ -79,6 +90,8 @@ export async function screenVerb(args: readonly string[], io: Io): Promise<numbe
     );
   }
   for (const w of result.warnings) io.err(`note: ${w}`);
-  io.out('\nScreening estimates only, not design values: building codes and licensed engineers decide.');
+  io.out(
+    '\nScreening estimates only, not design values: building codes and licensed engineers decide.',
+  );
   return EXIT_OK;
 }

@@ -22,22 +22,41 @@ const waitForStop = (): Promise<string> =>
     process.once('SIGINT', () => resolve('SIGINT'));
   });
 
-export async function workerVerb(args: readonly string[], io: Io, until: () => Promise<string> = waitForStop): Promise<number> {
-  const { values, positionals } = parseArgs({ args: [...args], options: { threads: { type: 'string' }, 'lock-ms': { type: 'string' } }, allowPositionals: false, strict: true });
+export async function workerVerb(
+  args: readonly string[],
+  io: Io,
+  until: () => Promise<string> = waitForStop,
+): Promise<number> {
+  const { values, positionals } = parseArgs({
+    args: [...args],
+    options: { threads: { type: 'string' }, 'lock-ms': { type: 'string' } },
+    allowPositionals: false,
+    strict: true,
+  });
   void positionals;
   const url = queueUrlFrom(process.env);
-  if (url === undefined) throw new UsageError(`set ${QUEUE_SETTING} to the queue's Redis URL, e.g. ${QUEUE_SETTING}=redis://127.0.0.1:6379`);
+  if (url === undefined)
+    throw new UsageError(
+      `set ${QUEUE_SETTING} to the queue's Redis URL, e.g. ${QUEUE_SETTING}=redis://127.0.0.1:6379`,
+    );
   const threads = numberOption(values, 'threads') ?? availableParallelism();
-  if (!Number.isInteger(threads) || threads < 1) throw new UsageError(`--threads: expected a whole number of at least 1, got ${threads}`);
+  if (!Number.isInteger(threads) || threads < 1)
+    throw new UsageError(`--threads: expected a whole number of at least 1, got ${threads}`);
   const lockMs = numberOption(values, 'lock-ms') ?? DEFAULT_LOCK_MS;
-  if (!Number.isInteger(lockMs) || lockMs < 1000) throw new UsageError(`--lock-ms: expected a whole number of milliseconds of at least 1000, got ${lockMs}`);
+  if (!Number.isInteger(lockMs) || lockMs < 1000)
+    throw new UsageError(
+      `--lock-ms: expected a whole number of milliseconds of at least 1000, got ${lockMs}`,
+    );
   const worker = await startQueueWorker({ url, threads, lockMs, log: (line) => io.err(line) });
   io.out(`tremora worker: ${threads} thread(s) taking chunks from ${new URL(url).host}`);
   const signal = await until();
   io.out(`${signal}: finishing the chunks in hand`);
   // A chunk may take longer than anyone waits at a shutdown: past one claim's length, stop anyway
   // (its claim then lapses and another worker takes it again).
-  const closed = await Promise.race([worker.close().then(() => true), new Promise<false>((resolve) => setTimeout(() => resolve(false), lockMs + 5000).unref())]);
+  const closed = await Promise.race([
+    worker.close().then(() => true),
+    new Promise<false>((resolve) => setTimeout(() => resolve(false), lockMs + 5000).unref()),
+  ]);
   if (!closed) io.err('tremora worker: stopping with chunks in hand; other workers will take them');
   // Connections still closing must not hold a stopped worker open.
   if (until === waitForStop) setTimeout(() => process.exit(EXIT_OK), 1000).unref();

@@ -23,7 +23,11 @@ export interface CommunityHazard {
   readonly curves: Readonly<Record<string, HazardCurve>>;
   readonly validity: readonly ValiditySummary[];
   /** Deaggregation of the mean hazard of the first reported measure at `level`, or null when nothing exceeds it. */
-  deaggregate(measure: HazardMeasure, level: number, returnPeriodYears: number): Deaggregation | null;
+  deaggregate(
+    measure: HazardMeasure,
+    level: number,
+    returnPeriodYears: number,
+  ): Deaggregation | null;
 }
 
 const WHY_NO_LEVEL: Readonly<Record<ReturnPeriodStatus, string>> = {
@@ -37,7 +41,13 @@ const WHY_NO_LEVEL: Readonly<Record<ReturnPeriodStatus, string>> = {
  * the horizons, intensity and band, deaggregation at each return period, nearest faults and
  * warnings (the result shape of results.ts).
  */
-export function communityResult(study: Study, community: Community, frame: LocalFrame, measures: ScreeningMeasures, hazard: CommunityHazard): CommunityResult {
+export function communityResult(
+  study: Study,
+  community: Community,
+  frame: LocalFrame,
+  measures: ScreeningMeasures,
+  hazard: CommunityHazard,
+): CommunityResult {
   const { settings } = study;
   const warnings: string[] = hazard.validity.map(
     (v) =>
@@ -45,7 +55,9 @@ export function communityResult(study: Study, community: Community, frame: Local
       `(for example, ${v.firstNote})`,
   );
 
-  const curves: CommunityResult['curves'] = Object.fromEntries(measures.reported.map((m) => [m.key, hazard.curves[m.key]!]));
+  const curves: CommunityResult['curves'] = Object.fromEntries(
+    measures.reported.map((m) => [m.key, hazard.curves[m.key]!]),
+  );
   const atReturnPeriod: Record<string, Record<string, number | null>> = {};
   const returnPeriodStatus: Record<string, Record<string, ReturnPeriodStatus>> = {};
   for (const years of settings.returnPeriodsYears) {
@@ -64,7 +76,10 @@ export function communityResult(study: Study, community: Community, frame: Local
   const chanceOfExceeding: Record<string, Record<string, number[]>> = {};
   for (const years of settings.horizonsYears) {
     chanceOfExceeding[String(years)] = Object.fromEntries(
-      measures.reported.map((m) => [m.key, hazard.curves[m.key]!.annualRate.map((rate) => poissonProbability(rate, years))]),
+      measures.reported.map((m) => [
+        m.key,
+        hazard.curves[m.key]!.annualRate.map((rate) => poissonProbability(rate, years)),
+      ]),
     );
   }
 
@@ -86,7 +101,10 @@ export function communityResult(study: Study, community: Community, frame: Local
     const { level, status } = levelAtReturnPeriod(firstCurve.levels, firstCurve.annualRate, years);
     const result = level === null ? null : hazard.deaggregate(first, level, years);
     if (result) deaggregation[String(years)] = result;
-    else warnings.push(`no deaggregation at ${years} years: the ${years}-year ${first.key} ${WHY_NO_LEVEL[status]}`);
+    else
+      warnings.push(
+        `no deaggregation at ${years} years: the ${years}-year ${first.key} ${WHY_NO_LEVEL[status]}`,
+      );
   }
 
   const lonLat = [community.lon, community.lat] as const;

@@ -70,7 +70,8 @@ export function randomFromState(state: XoshiroState): RandomSource {
   };
   // 53-bit float from the top 27 and 26 bits of two outputs: every double in [0, 1) on the
   // 2^-53 grid equally likely (common practice).
-  const nextFloat = (): number => ((nextUint32() >>> 5) * 67108864 + (nextUint32() >>> 6)) / 9007199254740992;
+  const nextFloat = (): number =>
+    ((nextUint32() >>> 5) * 67108864 + (nextUint32() >>> 6)) / 9007199254740992;
   const nextOpenFloat = (): number => {
     for (;;) {
       const u = nextFloat();

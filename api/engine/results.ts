@@ -32,19 +32,42 @@ export interface Deaggregation {
   readonly measure: string;
   readonly level: number;
   readonly returnPeriodYears: number;
-  readonly bySource: readonly { readonly sourceId: string; readonly name: string; readonly share: number }[];
-  readonly mean: { readonly magnitude: number; readonly distanceKm: number; readonly epsilon: number };
-  readonly mode: { readonly magnitude: number; readonly distanceKm: number; readonly epsilon: number };
+  readonly bySource: readonly {
+    readonly sourceId: string;
+    readonly name: string;
+    readonly share: number;
+  }[];
+  readonly mean: {
+    readonly magnitude: number;
+    readonly distanceKm: number;
+    readonly epsilon: number;
+  };
+  readonly mode: {
+    readonly magnitude: number;
+    readonly distanceKm: number;
+    readonly epsilon: number;
+  };
   readonly bins: readonly DeaggregationBin[];
 }
 
 export interface IntensityResult {
   /** MMI at each return period (key: years as a string), with the measure it came from. */
-  readonly atReturnPeriod: Readonly<Record<string, { readonly mmi: number | null; readonly roman: string | null; readonly fromMeasure: string }>>;
+  readonly atReturnPeriod: Readonly<
+    Record<
+      string,
+      { readonly mmi: number | null; readonly roman: string | null; readonly fromMeasure: string }
+    >
+  >;
   /** Chance of reaching MMI VI, VII and VIII in each horizon (key: years as a string). */
-  readonly chanceOfReaching: Readonly<Record<string, Readonly<Record<'VI' | 'VII' | 'VIII', number>>>>;
+  readonly chanceOfReaching: Readonly<
+    Record<string, Readonly<Record<'VI' | 'VII' | 'VIII', number>>>
+  >;
   /** The conversion the intensities come from and the scatter (MMI units) the chances include; absent in results saved before it was recorded. */
-  readonly conversion?: { readonly measure: 'PGA' | 'PGV'; readonly relation: string; readonly sigmaMmi: number };
+  readonly conversion?: {
+    readonly measure: 'PGA' | 'PGV';
+    readonly relation: string;
+    readonly sigmaMmi: number;
+  };
 }
 
 export interface NearestFault {
@@ -72,7 +95,9 @@ export interface CommunityResult {
   readonly curves: Readonly<Record<string, HazardCurve>>;
   /** atReturnPeriod["475"]["PGA"]: the level (g; PGV cm/s) with that return period, or null. */
   readonly atReturnPeriod: Readonly<Record<string, Readonly<Record<string, number | null>>>>;
-  readonly returnPeriodStatus: Readonly<Record<string, Readonly<Record<string, ReturnPeriodStatus>>>>;
+  readonly returnPeriodStatus: Readonly<
+    Record<string, Readonly<Record<string, ReturnPeriodStatus>>>
+  >;
   /** chanceOfExceeding["50"]["PGA"][i]: Poisson probability of exceeding levels[i] within 50 years. */
   readonly chanceOfExceeding: Readonly<Record<string, Readonly<Record<string, readonly number[]>>>>;
   readonly intensity: IntensityResult;
@@ -88,7 +113,9 @@ export interface Provenance {
   readonly toolVersion: string;
   /** SHA-256 of the canonical JSON of the validated study. */
   readonly inputHash: string;
-  readonly models: Readonly<Record<string, readonly { readonly model: string; readonly weight: number }[]>>;
+  readonly models: Readonly<
+    Record<string, readonly { readonly model: string; readonly weight: number }[]>
+  >;
   readonly settings: unknown;
   readonly startedAt: string;
   readonly finishedAt: string;

@@ -7,7 +7,6 @@ import type { ModelCatalog } from './motion/catalog.ts';
 import type { CommunityResult, StudyResult } from './results.ts';
 import { planScreening, type ScreeningPlan } from './screening-plan.ts';
 
-
 /** A screening's results; the caller adds the provenance (it needs the clock and a hash). */
 export type ScreeningOutput = Omit<StudyResult, 'provenance'>;
 
@@ -48,7 +47,10 @@ export function screenStudy(study: Study, options: ScreenStudyOptions = {}): Scr
 }
 
 /** What screening a community needs of a plan. */
-export type CommunityPlan = Pick<ScreeningPlan, 'study' | 'frame' | 'measures' | 'branchCount' | 'hazardAt'>;
+export type CommunityPlan = Pick<
+  ScreeningPlan,
+  'study' | 'frame' | 'measures' | 'branchCount' | 'hazardAt'
+>;
 
 export interface ScreenCommunitiesOptions {
   /** Share of these communities' work done, in (0, 1], after each branch of each community. */
@@ -59,29 +61,53 @@ export interface ScreenCommunitiesOptions {
  * The results of the communities at `indices` of the plan's study, in that order: the unit of
  * work a worker thread takes (the whole study's screening is this over every community).
  */
-export function screenCommunities(plan: CommunityPlan, indices: readonly number[], options: ScreenCommunitiesOptions = {}): CommunityResult[] {
+export function screenCommunities(
+  plan: CommunityPlan,
+  indices: readonly number[],
+  options: ScreenCommunitiesOptions = {},
+): CommunityResult[] {
   const { study } = plan;
   return indices.map((c, position) => {
     const community = study.communities[c];
-    if (!community) throw new RangeError(`expected a community index below ${study.communities.length}, got ${c}`);
+    if (!community)
+      throw new RangeError(
+        `expected a community index below ${study.communities.length}, got ${c}`,
+      );
     let branchesDone = 0;
     const afterBranch = (): void => {
       branchesDone++;
-      options.onProgress?.((position + branchesDone / Math.max(1, plan.branchCount)) / indices.length);
+      options.onProgress?.(
+        (position + branchesDone / Math.max(1, plan.branchCount)) / indices.length,
+      );
     };
-    const result = communityResult(study, community, plan.frame, plan.measures, plan.hazardAt(community, afterBranch));
+    const result = communityResult(
+      study,
+      community,
+      plan.frame,
+      plan.measures,
+      plan.hazardAt(community, afterBranch),
+    );
     if (plan.branchCount === 0) afterBranch();
     return result;
   });
 }
 
 /** The study's results from its communities' (in study order), with the study-level warnings. */
-export function finishScreening(plan: Pick<ScreeningPlan, 'study' | 'warnings' | 'ruptureCount' | 'branches'>, communities: readonly CommunityResult[]): ScreeningOutput {
+export function finishScreening(
+  plan: Pick<ScreeningPlan, 'study' | 'warnings' | 'ruptureCount' | 'branches'>,
+  communities: readonly CommunityResult[],
+): ScreeningOutput {
   const warnings = [...plan.warnings];
-  if (plan.ruptureCount === 0) warnings.push('the study has no earthquake ruptures; every curve is zero');
-  const combinations = TECTONIC_SETTINGS.reduce((n, s) => n * Math.max(1, plan.branches[s]?.length ?? 0), 1);
+  if (plan.ruptureCount === 0)
+    warnings.push('the study has no earthquake ruptures; every curve is zero');
+  const combinations = TECTONIC_SETTINGS.reduce(
+    (n, s) => n * Math.max(1, plan.branches[s]?.length ?? 0),
+    1,
+  );
   if (combinations > MAX_BRANCH_COMBINATIONS) {
-    warnings.push(`the logic tree has ${combinations} branch combinations, more than the ${MAX_BRANCH_COMBINATIONS} listed; only mean curves are given`);
+    warnings.push(
+      `the logic tree has ${combinations} branch combinations, more than the ${MAX_BRANCH_COMBINATIONS} listed; only mean curves are given`,
+    );
   }
   return { studyName: plan.study.name, communities: [...communities], warnings };
 }

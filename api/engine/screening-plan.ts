@@ -42,7 +42,10 @@ export interface ScreeningPlanOptions {
 }
 
 /** A screening's measures and branches, resolved and checked, with the warnings that found. */
-export type ScreeningSetup = Pick<ScreeningPlan, 'study' | 'measures' | 'branches' | 'branchCount' | 'warnings'>;
+export type ScreeningSetup = Pick<
+  ScreeningPlan,
+  'study' | 'measures' | 'branches' | 'branchCount' | 'warnings'
+>;
 
 /** Resolves and checks a study's measures and branches, without touching its ruptures. */
 export function screeningSetup(study: Study, models: ModelCatalog = modelCatalog): ScreeningSetup {
@@ -85,12 +88,24 @@ export function planScreening(study: Study, options: ScreeningPlanOptions = {}):
         keepFirstMeasure: true,
       });
       const site = { vs30: community.vs30, vs30Measured: community.vs30Basis === 'measured' };
-      const hazard = fastSiteHazard(fast, { point: frame.toLocal([community.lon, community.lat]), site }, afterBranch);
+      const hazard = fastSiteHazard(
+        fast,
+        { point: frame.toLocal([community.lon, community.lat]), site },
+        afterBranch,
+      );
       return {
         curves: hazard.curves,
         validity: hazard.validity,
         deaggregate: (measure, level, returnPeriodYears) =>
-          fastDeaggregate({ measure: measure.key, level, returnPeriodYears, table, branches: hazard.firstMeasure, sourceNames, exceedance: fast!.exceedance }),
+          fastDeaggregate({
+            measure: measure.key,
+            level,
+            returnPeriodYears,
+            table,
+            branches: hazard.firstMeasure,
+            sourceNames,
+            exceedance: fast!.exceedance,
+          }),
       };
     },
   };
@@ -103,9 +118,13 @@ export function hazardMeasures(study: Study): ScreeningMeasures {
     return { key, measure, levels: levelsFor(study.settings.levels, key, measure) };
   };
   const reported = study.settings.measures.map(toHazardMeasure);
-  if (reported.length === 0) throw new InvalidInput([{ path: 'settings.measures', message: 'expected at least one measure' }]);
+  if (reported.length === 0)
+    throw new InvalidInput([
+      { path: 'settings.measures', message: 'expected at least one measure' },
+    ]);
   const all = [...reported];
-  for (const key of new Set([INTENSITY_MEASURE, intensityMeasureOf(study.settings)])) if (!all.some((m) => m.key === key)) all.push(toHazardMeasure(key));
+  for (const key of new Set([INTENSITY_MEASURE, intensityMeasureOf(study.settings)]))
+    if (!all.some((m) => m.key === key)) all.push(toHazardMeasure(key));
   return { reported, all };
 }
 
@@ -113,17 +132,27 @@ export function hazardMeasures(study: Study): ScreeningMeasures {
  * Models for each setting that has sources; PGV derived from SA(0.5 s) where a model lacks it
  * (a study-level warning is added to `warnings` then).
  */
-export function resolveBranches(study: Study, measures: Pick<ScreeningMeasures, 'all'>, models: ModelCatalog, warnings: string[]): Partial<Record<TectonicSetting, HazardBranch[]>> {
+export function resolveBranches(
+  study: Study,
+  measures: Pick<ScreeningMeasures, 'all'>,
+  models: ModelCatalog,
+  warnings: string[],
+): Partial<Record<TectonicSetting, HazardBranch[]>> {
   const wantsPgv = measures.all.some((m) => m.measure.kind === 'PGV');
   const out: Partial<Record<TectonicSetting, HazardBranch[]>> = {};
   for (const setting of TECTONIC_SETTINGS) {
     if (!study.sources.some((s) => s.setting === setting)) continue;
     const given = study.groundMotion[setting];
     const path = `groundMotion.${setting}`;
-    if (given.length === 0) throw new InvalidInput([{ path, message: `expected at least one branch: the study has ${setting} sources` }]);
+    if (given.length === 0)
+      throw new InvalidInput([
+        { path, message: `expected at least one branch: the study has ${setting} sources` },
+      ]);
     const weightSum = given.reduce((s, b) => s + b.weight, 0);
     if (Math.abs(weightSum - 1) > WEIGHT_SUM_TOLERANCE) {
-      throw new InvalidInput([{ path, message: `expected branch weights summing to 1, got ${weightSum}` }]);
+      throw new InvalidInput([
+        { path, message: `expected branch weights summing to 1, got ${weightSum}` },
+      ]);
     }
     out[setting] = given.map((branch) => {
       let model = models.get(branch.model);

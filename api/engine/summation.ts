@@ -18,12 +18,15 @@ export function createLevelAccumulator(levelCount: number): LevelAccumulator {
 export function accumulate(acc: LevelAccumulator, index: number, value: number): void {
   const sum = acc.sum[index] as number;
   const t = sum + value;
-  acc.compensation[index] = (acc.compensation[index] as number) + (Math.abs(sum) >= Math.abs(value) ? sum - t + value : value - t + sum);
+  acc.compensation[index] =
+    (acc.compensation[index] as number) +
+    (Math.abs(sum) >= Math.abs(value) ? sum - t + value : value - t + sum);
   acc.sum[index] = t;
 }
 
 /** The compensated total of slot `index`. */
-export const accumulatedTotal = (acc: LevelAccumulator, index: number): number => (acc.sum[index] as number) + (acc.compensation[index] as number);
+export const accumulatedTotal = (acc: LevelAccumulator, index: number): number =>
+  (acc.sum[index] as number) + (acc.compensation[index] as number);
 
 /** The compensated totals, one per slot. */
 export function accumulatedTotals(acc: LevelAccumulator): number[] {

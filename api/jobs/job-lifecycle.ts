@@ -49,7 +49,9 @@ export class JobLifecycle {
   readonly #logError: LogError;
   readonly #active = new Map<string, TaskHandle<unknown>>();
 
-  constructor(logError: LogError = (id, context, error) => console.error(`[${id}] ${context}`, error)) {
+  constructor(
+    logError: LogError = (id, context, error) => console.error(`[${id}] ${context}`, error),
+  ) {
     this.#logError = logError;
   }
 
@@ -77,7 +79,9 @@ export class JobLifecycle {
     handle.result
       .then((output) => ledger.finishDone(id, spec.done(output, startedAt)))
       .catch((error: unknown) => this.#recordEnd(spec, error, shareDone))
-      .catch((error: unknown) => this.#logError(randomUUID(), `could not record the end of ${spec.kind} ${id}`, error))
+      .catch((error: unknown) =>
+        this.#logError(randomUUID(), `could not record the end of ${spec.kind} ${id}`, error),
+      )
       .finally(() => {
         ended = true;
         this.#active.delete(id);
@@ -102,14 +106,26 @@ export class JobLifecycle {
     try {
       write();
     } catch (error) {
-      this.#logError(randomUUID(), `could not record the progress of ${spec.kind} ${spec.id}`, error);
+      this.#logError(
+        randomUUID(),
+        `could not record the progress of ${spec.kind} ${spec.id}`,
+        error,
+      );
     }
   }
 
-  #recordEnd<Started, Output, Done>(spec: JobSpec<Started, Output, Done>, error: unknown, shareDone: number): void {
+  #recordEnd<Started, Output, Done>(
+    spec: JobSpec<Started, Output, Done>,
+    error: unknown,
+    shareDone: number,
+  ): void {
     const { id, ledger } = spec;
     if (error instanceof Cancelled) {
-      ledger.finishWithout(id, 'cancelled', `cancelled on request after ${percent(Math.max(shareDone, error.shareDone))} of the ${spec.progressOf}`);
+      ledger.finishWithout(
+        id,
+        'cancelled',
+        `cancelled on request after ${percent(Math.max(shareDone, error.shareDone))} of the ${spec.progressOf}`,
+      );
     } else if (error instanceof PoolClosed) {
       ledger.finishWithout(id, 'interrupted', ledger.interruptedMessage);
     } else if (error instanceof TremoraError) {
@@ -117,8 +133,15 @@ export class JobLifecycle {
     } else {
       const errorId = randomUUID();
       this.#logError(errorId, `${spec.kind} ${id} failed`, error);
-      const what = (error as Partial<WorkerCrashed>).name === 'WorkerCrashed' ? (error as Error).message : 'internal error';
-      ledger.finishWithout(id, 'failed', `${what} (error id ${errorId}); the service is still running`);
+      const what =
+        (error as Partial<WorkerCrashed>).name === 'WorkerCrashed'
+          ? (error as Error).message
+          : 'internal error';
+      ledger.finishWithout(
+        id,
+        'failed',
+        `${what} (error id ${errorId}); the service is still running`,
+      );
     }
   }
 }

@@ -63,15 +63,33 @@ export class RunScheduler {
       kind: 'run',
       progressOf: 'work',
       launch: (signals) => {
-        const events = { onStart: () => signals.started(), onProgress: (share: number) => signals.progress(share) };
-        const queued = this.#chunks !== undefined && study.communities.length >= QUEUED_SCREENING_COMMUNITIES;
+        const events = {
+          onStart: () => signals.started(),
+          onProgress: (share: number) => signals.progress(share),
+        };
+        const queued =
+          this.#chunks !== undefined && study.communities.length >= QUEUED_SCREENING_COMMUNITIES;
         return queued
-          ? spreadScreening(this.#pool, study, run.inputHash, this.#toolVersion, events, this.#chunks)
+          ? spreadScreening(
+              this.#pool,
+              study,
+              run.inputHash,
+              this.#toolVersion,
+              events,
+              this.#chunks,
+            )
           : this.#spread
-          ? spreadScreening(this.#pool, study, run.inputHash, this.#toolVersion, events)
-          : this.#pool.run({ kind: 'screen', study, inputHash: run.inputHash, toolVersion: this.#toolVersion }, events);
+            ? spreadScreening(this.#pool, study, run.inputHash, this.#toolVersion, events)
+            : this.#pool.run(
+                { kind: 'screen', study, inputHash: run.inputHash, toolVersion: this.#toolVersion },
+                events,
+              );
       },
-      done: (output) => ({ resultsJson: output.resultsJson, provenanceJson: JSON.stringify(output.provenance), finishedAt: output.provenance.finishedAt }),
+      done: (output) => ({
+        resultsJson: output.resultsJson,
+        provenanceJson: JSON.stringify(output.provenance),
+        finishedAt: output.provenance.finishedAt,
+      }),
     });
   }
 

@@ -1,5 +1,10 @@
 import type { MapDescription } from '../engine/map/map-geojson.ts';
-import { INTERRUPTED_MESSAGE, type MapRunOutputs, type RunOutputs, type Store } from '../store/index.ts';
+import {
+  INTERRUPTED_MESSAGE,
+  type MapRunOutputs,
+  type RunOutputs,
+  type Store,
+} from '../store/index.ts';
 import type { JobLedger } from './job-ledger.ts';
 
 /**

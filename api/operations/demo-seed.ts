@@ -12,19 +12,34 @@ export const DEMO_STUDY_URL = new URL('../../data-demo/demo.study.json', import.
 /** Its synthetic catalog, attached to it. */
 export const DEMO_CATALOG_URL = new URL('../../data-demo/catalog.csv', import.meta.url);
 
-export type DemoSeed = { readonly seeded: true; readonly id: string } | { readonly seeded: false; readonly issues: readonly InputIssue[] };
+export type DemoSeed =
+  | { readonly seeded: true; readonly id: string }
+  | { readonly seeded: false; readonly issues: readonly InputIssue[] };
 
 /**
  * Saves the demo study and its catalog, each validated like any other, into `store`. Called
  * once, when the database is new, so a user who deletes the demo does not find it back at the
  * next start.
  */
-export function seedDemoStudy(store: Store, models: ModelCatalog, url: URL = DEMO_STUDY_URL, catalogUrl: URL = DEMO_CATALOG_URL): DemoSeed {
+export function seedDemoStudy(
+  store: Store,
+  models: ModelCatalog,
+  url: URL = DEMO_STUDY_URL,
+  catalogUrl: URL = DEMO_CATALOG_URL,
+): DemoSeed {
   let text: string;
   try {
     text = readFileSync(url, 'utf8');
   } catch (error) {
-    return { seeded: false, issues: [{ path: url.pathname, message: `cannot read the demo study (${(error as NodeJS.ErrnoException).code ?? 'error'})` }] };
+    return {
+      seeded: false,
+      issues: [
+        {
+          path: url.pathname,
+          message: `cannot read the demo study (${(error as NodeJS.ErrnoException).code ?? 'error'})`,
+        },
+      ],
+    };
   }
   const parsed = parseJsonText(text, url.pathname);
   if (!parsed.ok) return { seeded: false, issues: [parsed.issue] };
@@ -34,7 +49,15 @@ export function seedDemoStudy(store: Store, models: ModelCatalog, url: URL = DEM
   try {
     catalogText = readFileSync(catalogUrl, 'utf8');
   } catch (error) {
-    return { seeded: false, issues: [{ path: catalogUrl.pathname, message: `cannot read the demo catalog (${(error as NodeJS.ErrnoException).code ?? 'error'})` }] };
+    return {
+      seeded: false,
+      issues: [
+        {
+          path: catalogUrl.pathname,
+          message: `cannot read the demo catalog (${(error as NodeJS.ErrnoException).code ?? 'error'})`,
+        },
+      ],
+    };
   }
   let catalog: CatalogLoad;
   try {
@@ -47,7 +70,14 @@ export function seedDemoStudy(store: Store, models: ModelCatalog, url: URL = DEM
   const fileName = catalogUrl.pathname.split('/').pop() as string;
   return store.transaction((): DemoSeed => {
     const { id } = store.studies.create({ name: result.study.name, document: text });
-    store.catalogs.put(id, { fileName, format, content: catalogText, loadedCount: summary.loaded, rejectedCount: summary.rejected, nonMomentCount: summary.nonMoment });
+    store.catalogs.put(id, {
+      fileName,
+      format,
+      content: catalogText,
+      loadedCount: summary.loaded,
+      rejectedCount: summary.rejected,
+      nonMomentCount: summary.nonMoment,
+    });
     return { seeded: true, id };
   });
 }

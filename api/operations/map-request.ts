@@ -6,7 +6,15 @@ import { IssueList } from '../study/issues.ts';
 import type { MapRequest } from '../workers/messages.ts';
 
 /** Keys a map request may have. */
-export const MAP_KEYS = ['measure', 'returnPeriodYears', 'level', 'horizonYears', 'spacingKm', 'vs30', 'bounds'] as const;
+export const MAP_KEYS = [
+  'measure',
+  'returnPeriodYears',
+  'level',
+  'horizonYears',
+  'spacingKm',
+  'vs30',
+  'bounds',
+] as const;
 
 const mapSchema = z.object({
   measure: z.string().optional(),
@@ -16,7 +24,14 @@ const mapSchema = z.object({
   // Finer than 0.5 km adds points without detail at screening scale; the engine caps the count.
   spacingKm: numberIn({ min: 0.5, max: 200, unit: 'km' }),
   vs30: numberIn({ min: 50, max: 5000, unit: 'm/s' }).optional(),
-  bounds: z.tuple([numberIn({ min: -540, max: 540, unit: 'degrees' }), numberIn({ min: -90, max: 90, unit: 'degrees' }), numberIn({ min: -540, max: 540, unit: 'degrees' }), numberIn({ min: -90, max: 90, unit: 'degrees' })]).optional(),
+  bounds: z
+    .tuple([
+      numberIn({ min: -540, max: 540, unit: 'degrees' }),
+      numberIn({ min: -90, max: 90, unit: 'degrees' }),
+      numberIn({ min: -540, max: 540, unit: 'degrees' }),
+      numberIn({ min: -90, max: 90, unit: 'degrees' }),
+    ])
+    .optional(),
 });
 
 /**
@@ -27,7 +42,8 @@ const mapSchema = z.object({
 export function readMapRequest(raw: Record<string, unknown>): MapRequest {
   const issues = new IssueList();
   for (const key of Object.keys(raw)) {
-    if (!(MAP_KEYS as readonly string[]).includes(key)) issues.add([key], `unknown key; expected one of ${MAP_KEYS.join(', ')}`);
+    if (!(MAP_KEYS as readonly string[]).includes(key))
+      issues.add([key], `unknown key; expected one of ${MAP_KEYS.join(', ')}`);
   }
   const fields = issues.parse(mapSchema, raw, []);
   // The measure is read from the raw request, so it is checked even when another field is bad.
@@ -40,12 +56,23 @@ export function readMapRequest(raw: Record<string, unknown>): MapRequest {
   // Which quantity is asked for is read from the keys given, so it is checked even when a value is bad.
   const byReturnPeriod = raw.returnPeriodYears !== undefined;
   const byChance = raw.level !== undefined || raw.horizonYears !== undefined;
-  if (byReturnPeriod === byChance) issues.add(['returnPeriodYears'], 'expected returnPeriodYears, or level with horizonYears (not both)');
-  else if (byChance && (raw.level === undefined || raw.horizonYears === undefined)) issues.add([raw.level === undefined ? 'level' : 'horizonYears'], 'expected level and horizonYears together');
-  if (issues.issues.length > 0 || !fields) throw new InvalidInput(issues.issues, 'invalid map request');
+  if (byReturnPeriod === byChance)
+    issues.add(
+      ['returnPeriodYears'],
+      'expected returnPeriodYears, or level with horizonYears (not both)',
+    );
+  else if (byChance && (raw.level === undefined || raw.horizonYears === undefined))
+    issues.add(
+      [raw.level === undefined ? 'level' : 'horizonYears'],
+      'expected level and horizonYears together',
+    );
+  if (issues.issues.length > 0 || !fields)
+    throw new InvalidInput(issues.issues, 'invalid map request');
   return {
     measure,
-    quantity: byReturnPeriod ? { kind: 'return-period', returnPeriodYears: fields.returnPeriodYears! } : { kind: 'chance', level: fields.level!, horizonYears: fields.horizonYears! },
+    quantity: byReturnPeriod
+      ? { kind: 'return-period', returnPeriodYears: fields.returnPeriodYears! }
+      : { kind: 'chance', level: fields.level!, horizonYears: fields.horizonYears! },
     spacingKm: fields.spacingKm,
     ...(fields.vs30 === undefined ? {} : { vs30: fields.vs30 }),
     ...(fields.bounds === undefined ? {} : { bounds: fields.bounds }),

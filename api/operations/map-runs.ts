@@ -1,5 +1,11 @@
 import type { HazardMapSummary } from '../engine/map/hazard-map.ts';
-import { mapDescription, mapGeoJsonFeatures, mapGeoJsonHead, mapGeoJsonTail, type MapDescription } from '../engine/map/map-geojson.ts';
+import {
+  mapDescription,
+  mapGeoJsonFeatures,
+  mapGeoJsonHead,
+  mapGeoJsonTail,
+  type MapDescription,
+} from '../engine/map/map-geojson.ts';
 import type { Study } from '../engine/model.ts';
 import { JobLifecycle, type LogError } from '../jobs/job-lifecycle.ts';
 import { mapLedger } from '../jobs/store-ledgers.ts';
@@ -73,8 +79,22 @@ export class MapRuns {
       done: (summary: HazardMapSummary, startedAt) => {
         pieces.push(mapGeoJsonTail(summary));
         const finishedAt = new Date().toISOString();
-        const provenance = { ...buildProvenance({ study, toolVersion: this.#toolVersion, inputHash, startedAt, finishedAt }), map: request };
-        return { geojson: pieces.join(''), warnings: summary.warnings, provenanceJson: JSON.stringify(provenance), finishedAt };
+        const provenance = {
+          ...buildProvenance({
+            study,
+            toolVersion: this.#toolVersion,
+            inputHash,
+            startedAt,
+            finishedAt,
+          }),
+          map: request,
+        };
+        return {
+          geojson: pieces.join(''),
+          warnings: summary.warnings,
+          provenanceJson: JSON.stringify(provenance),
+          finishedAt,
+        };
       },
       settled: () => {
         pieces.length = 0;
@@ -100,11 +120,22 @@ const perStore = new WeakMap<Store, MapRuns>();
  * The map runs of a service: `ctx.maps` when the context carries its own (tests), else the
  * one kept for the context's store, made on first use with the run pool.
  */
-export function mapRunsOf(ctx: { readonly store: Store; readonly runPool: WorkerPool; readonly toolVersion: string; readonly maps?: MapRuns; readonly queue?: ChunkPool }): MapRuns {
+export function mapRunsOf(ctx: {
+  readonly store: Store;
+  readonly runPool: WorkerPool;
+  readonly toolVersion: string;
+  readonly maps?: MapRuns;
+  readonly queue?: ChunkPool;
+}): MapRuns {
   if (ctx.maps) return ctx.maps;
   let runs = perStore.get(ctx.store);
   if (!runs) {
-    runs = new MapRuns({ store: ctx.store, pool: ctx.runPool, toolVersion: ctx.toolVersion, ...(ctx.queue ? { chunks: ctx.queue } : {}) });
+    runs = new MapRuns({
+      store: ctx.store,
+      pool: ctx.runPool,
+      toolVersion: ctx.toolVersion,
+      ...(ctx.queue ? { chunks: ctx.queue } : {}),
+    });
     perStore.set(ctx.store, runs);
   }
   return runs;

@@ -29,7 +29,15 @@ const probeSchema = z.object({
   widthKm: numberIn({ min: 0, max: 1000, minOpen: true, unit: 'km' }).optional(),
   hypoDepthKm: depthKm.optional(),
   setting: oneOf(TECTONIC_SETTINGS).optional(),
-  measures: listOf(z.string({ error: (i) => `expected a measure name such as "PGA" or "SA(0.2)", got ${describeValue(i.input)}` }), 1, 20, 'measures').optional(),
+  measures: listOf(
+    z.string({
+      error: (i) =>
+        `expected a measure name such as "PGA" or "SA(0.2)", got ${describeValue(i.input)}`,
+    }),
+    1,
+    20,
+    'measures',
+  ).optional(),
 });
 
 /** Keys a probe request may have. */
@@ -39,14 +47,19 @@ export const PROBE_KEYS = ['model', ...Object.keys(probeSchema.shape)];
 export function readProbeRequest(raw: Record<string, unknown>, models: ModelCatalog): ProbeRequest {
   const issues = new IssueList();
   for (const key of Object.keys(raw)) {
-    if (!PROBE_KEYS.includes(key)) issues.add([key], `unknown key; expected one of ${PROBE_KEYS.join(', ')}`);
+    if (!PROBE_KEYS.includes(key))
+      issues.add([key], `unknown key; expected one of ${PROBE_KEYS.join(', ')}`);
   }
   const model = raw.model;
   if (typeof model !== 'string' || !models.find(model)) {
-    issues.add(['model'], `expected one of ${models.names.join(', ')}, got ${describeValue(model)}`);
+    issues.add(
+      ['model'],
+      `expected one of ${models.names.join(', ')}, got ${describeValue(model)}`,
+    );
   }
   const fields = issues.parse(probeSchema, raw, []);
-  if (issues.issues.length > 0 || !fields) throw new InvalidInput(issues.issues, 'invalid probe request');
+  if (issues.issues.length > 0 || !fields)
+    throw new InvalidInput(issues.issues, 'invalid probe request');
   const request: Record<string, unknown> = { model };
   for (const [key, value] of Object.entries(fields)) if (value !== undefined) request[key] = value;
   return request as unknown as ProbeRequest;

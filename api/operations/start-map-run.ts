@@ -30,12 +30,24 @@ export interface MapWork {
  * the quick pool); throws StudyTooLarge over the budget, and the grid's own errors (spacing,
  * box, too many points) as the engine words them.
  */
-export async function checkMapWork(ctx: ServiceContext, study: Study, request: MapRequest): Promise<MapWork> {
-  const grid = mapGrid(study, frameForStudy(study), { spacingKm: request.spacingKm, ...(request.bounds ? { bounds: request.bounds } : {}) });
+export async function checkMapWork(
+  ctx: ServiceContext,
+  study: Study,
+  request: MapRequest,
+): Promise<MapWork> {
+  const grid = mapGrid(study, frameForStudy(study), {
+    spacingKm: request.spacingKm,
+    ...(request.bounds ? { bounds: request.bounds } : {}),
+  });
   const { ruptures } = await ctx.quickPool.run({ kind: 'measure', study }).result;
   const levels = MAP_LEVELS_READ[request.quantity.kind];
   const size = grid.count * ruptures * levels;
-  if (size > ctx.workBudget) throw new StudyTooLarge(size, ctx.workBudget, `${grid.count} map points x ${ruptures} ruptures x ${levels} levels read`);
+  if (size > ctx.workBudget)
+    throw new StudyTooLarge(
+      size,
+      ctx.workBudget,
+      `${grid.count} map points x ${ruptures} ruptures x ${levels} levels read`,
+    );
   return { points: grid.count, ruptures, levels, size };
 }
 
@@ -46,7 +58,11 @@ export async function checkMapWork(ctx: ServiceContext, study: Study, request: M
  * its grid filled in (MAP_VS30 unless asked), and handed to the map runs. Undefined when the
  * study was deleted meanwhile.
  */
-export async function startMapRun(ctx: ServiceContext & { readonly maps?: MapRuns }, record: StudyRecord, request: MapRequest): Promise<MapRunRecord | undefined> {
+export async function startMapRun(
+  ctx: ServiceContext & { readonly maps?: MapRuns },
+  record: StudyRecord,
+  request: MapRequest,
+): Promise<MapRunRecord | undefined> {
   const inputs = storedInputs(ctx.store, record);
   const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
   await checkMapWork(ctx, study, request);

@@ -12,7 +12,12 @@ export interface ValidStudy {
 
 /** Issues of a study nested in a request (`study.communities[2].vs30`). */
 const under = (prefix: string | undefined, issues: readonly InputIssue[]): InputIssue[] =>
-  prefix === undefined ? [...issues] : issues.map((i) => ({ path: i.path === '(study)' ? prefix : `${prefix}.${i.path}`, message: i.message }));
+  prefix === undefined
+    ? [...issues]
+    : issues.map((i) => ({
+        path: i.path === '(study)' ? prefix : `${prefix}.${i.path}`,
+        message: i.message,
+      }));
 
 /**
  * The parts of a document that nest deeper than a stored document may (MAX_JSON_DEPTH, which
@@ -22,18 +27,34 @@ const under = (prefix: string | undefined, issues: readonly InputIssue[]): Input
 function nestingIssues(raw: unknown): InputIssue[] {
   if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) return [];
   return Object.entries(raw)
-    .filter(([, value]) => typeof value === 'object' && value !== null && jsonDepthExceeds(JSON.stringify(value), MAX_JSON_DEPTH - 1))
-    .map(([key]) => ({ path: key, message: `expected the study document nested at most ${MAX_JSON_DEPTH} levels deep (objects and lists), got deeper with ${key} in it` }));
+    .filter(
+      ([, value]) =>
+        typeof value === 'object' &&
+        value !== null &&
+        jsonDepthExceeds(JSON.stringify(value), MAX_JSON_DEPTH - 1),
+    )
+    .map(([key]) => ({
+      path: key,
+      message: `expected the study document nested at most ${MAX_JSON_DEPTH} levels deep (objects and lists), got deeper with ${key} in it`,
+    }));
 }
 
 /**
  * Validates a study document; throws InvalidInput listing every problem. `communitiesCsv` is
  * the text for a document whose `communities` names a CSV file (imported earlier).
  */
-export function validateStudy(raw: unknown, models: ModelCatalog, communitiesCsv?: string, pathPrefix?: string): ValidStudy {
+export function validateStudy(
+  raw: unknown,
+  models: ModelCatalog,
+  communitiesCsv?: string,
+  pathPrefix?: string,
+): ValidStudy {
   const tooDeep = nestingIssues(raw);
   if (tooDeep.length > 0) throw new InvalidInput(under(pathPrefix, tooDeep), 'invalid study');
-  const result = loadStudy(raw, communitiesCsv === undefined ? { models } : { models, communitiesCsv });
+  const result = loadStudy(
+    raw,
+    communitiesCsv === undefined ? { models } : { models, communitiesCsv },
+  );
   if (!result.ok) throw new InvalidInput(under(pathPrefix, result.issues), 'invalid study');
   return { study: result.study, warnings: under(pathPrefix, result.warnings) };
 }
@@ -49,7 +70,9 @@ export interface StoredInputs {
 function parseStored(text: string): Record<string, unknown> {
   const parsed = parseJsonText(text, 'document');
   if (!parsed.ok || typeof parsed.value !== 'object' || parsed.value === null) {
-    throw new Error(`a stored study document does not parse as a JSON object: ${parsed.ok ? 'not an object' : parsed.issue.message}`);
+    throw new Error(
+      `a stored study document does not parse as a JSON object: ${parsed.ok ? 'not an object' : parsed.issue.message}`,
+    );
   }
   return parsed.value as Record<string, unknown>;
 }
@@ -59,10 +82,15 @@ export function storedInputs(store: Store, record: StudyRecord): StoredInputs {
   const raw = parseStored(record.document);
   if (typeof raw.communities !== 'string') return { document: record.document, raw };
   const csv = store.studies.latestFile(record.id, 'communities-csv');
-  return csv === undefined ? { document: record.document, raw } : { document: record.document, raw, communitiesCsv: csv };
+  return csv === undefined
+    ? { document: record.document, raw }
+    : { document: record.document, raw, communitiesCsv: csv };
 }
 
 /** The study a run computed, from the inputs copied into it. */
-export function runStudy(inputs: { document: string; communitiesCsv?: string }, models: ModelCatalog): ValidStudy {
+export function runStudy(
+  inputs: { document: string; communitiesCsv?: string },
+  models: ModelCatalog,
+): ValidStudy {
   return validateStudy(parseStored(inputs.document), models, inputs.communitiesCsv);
 }

@@ -4,7 +4,12 @@ import { InvalidInput } from '../engine/errors.ts';
 import type { Study } from '../engine/model.ts';
 import type { ScenarioRequest } from '../engine/scenario/index.ts';
 import type { ElevationGrid } from '../engine/terrain/elevation-grid.ts';
-import { DEFAULT_HIGH_GROUND_M, scenarioTsunami, tsunamiScreening, type TsunamiResult } from '../engine/tsunami/index.ts';
+import {
+  DEFAULT_HIGH_GROUND_M,
+  scenarioTsunami,
+  tsunamiScreening,
+  type TsunamiResult,
+} from '../engine/tsunami/index.ts';
 import { readTerrainFile, terrainInFolder } from '../terrain/index.ts';
 
 /** Where the service reads terrain grids: TREMORA_TERRAIN_DIR, else the demo folder (data-demo/). */
@@ -26,15 +31,26 @@ export class TsunamiTimes {
   readonly #gridIds = new WeakMap<ElevationGrid, number>();
   #nextGridId = 1;
 
-  constructor(readonly folder: string = process.env.TREMORA_TERRAIN_DIR?.trim() || DEFAULT_TERRAIN_DIR) {}
+  constructor(
+    readonly folder: string = process.env.TREMORA_TERRAIN_DIR?.trim() || DEFAULT_TERRAIN_DIR,
+  ) {}
 
   /** The study's terrain grid; InvalidInput naming the file when it has none or cannot be read. */
   async grid(study: Study): Promise<ElevationGrid> {
     if (study.terrain === undefined) {
-      throw new InvalidInput([{ path: 'terrain', message: 'the study names no terrain grid; expected "terrain": the file name of a GeoTIFF or ESRI ASCII elevation grid in the service\'s terrain folder' }]);
+      throw new InvalidInput([
+        {
+          path: 'terrain',
+          message:
+            'the study names no terrain grid; expected "terrain": the file name of a GeoTIFF or ESRI ASCII elevation grid in the service\'s terrain folder',
+        },
+      ]);
     }
     const path = terrainInFolder(this.folder, study.terrain);
-    const mtimeMs = await stat(path).then((s) => s.mtimeMs, () => -1);
+    const mtimeMs = await stat(path).then(
+      (s) => s.mtimeMs,
+      () => -1,
+    );
     const kept = this.#grids.get(path);
     if (kept && kept.mtimeMs === mtimeMs) return kept.grid;
     const grid = await readTerrainFile(path);
@@ -44,7 +60,11 @@ export class TsunamiTimes {
   }
 
   /** First arrivals from the study's interface sources (all, or `sourceIds`) and high ground. */
-  async forStudy(study: Study, hash: string, options: { sourceIds?: readonly string[]; highGroundM?: number } = {}): Promise<TsunamiResult> {
+  async forStudy(
+    study: Study,
+    hash: string,
+    options: { sourceIds?: readonly string[]; highGroundM?: number } = {},
+  ): Promise<TsunamiResult> {
     const grid = await this.grid(study);
     const key = `${hash}|${this.#gridIds.get(grid)}|${options.sourceIds?.join(',') ?? '*'}|${options.highGroundM ?? DEFAULT_HIGH_GROUND_M}`;
     const kept = this.#results.get(key);
@@ -55,7 +75,11 @@ export class TsunamiTimes {
   }
 
   /** First arrivals for a scenario earthquake on an interface source. */
-  async forScenario(study: Study, hash: string, request: Pick<ScenarioRequest, 'sourceId' | 'magnitude' | 'position'>): Promise<TsunamiResult> {
+  async forScenario(
+    study: Study,
+    hash: string,
+    request: Pick<ScenarioRequest, 'sourceId' | 'magnitude' | 'position'>,
+  ): Promise<TsunamiResult> {
     const grid = await this.grid(study);
     const key = `${hash}|${this.#gridIds.get(grid)}|scenario|${request.sourceId}|${request.magnitude}|${JSON.stringify(request.position ?? 'closest')}`;
     const kept = this.#results.get(key);

@@ -35,8 +35,13 @@ const count = (n: number, one: string, many: string): string => `${n} ${n === 1 
  * PGA and the intensity measure when absent (the engine adds them for intensity), with the settings' levels or the defaults.
  */
 export function studyWork(study: Study, ruptureCount: number): StudyWork {
-  const keys = [...new Set([...study.settings.measures, INTENSITY_MEASURE, intensityMeasureOf(study.settings)])];
-  const measureLevels = keys.reduce((n, key) => n + levelsFor(study.settings.levels, key, parseMeasure(key)).length, 0);
+  const keys = [
+    ...new Set([...study.settings.measures, INTENSITY_MEASURE, intensityMeasureOf(study.settings)]),
+  ];
+  const measureLevels = keys.reduce(
+    (n, key) => n + levelsFor(study.settings.levels, key, parseMeasure(key)).length,
+    0,
+  );
   const communities = study.communities.length;
   return {
     communities,

@@ -8,7 +8,14 @@ import type { SerialisedError, TaskKind, TaskOutputs, WorkerTask } from '../work
 import { rebuildError } from '../workers/task-errors.ts';
 import type { TaskEvents, TaskHandle } from '../workers/worker-pool.ts';
 import { putInput } from './job-inputs.ts';
-import { cancelKey, CHUNK_QUEUE, connect, KEEP_S, QUEUE_PREFIX, type ChunkJobData } from './queue-names.ts';
+import {
+  cancelKey,
+  CHUNK_QUEUE,
+  connect,
+  KEEP_S,
+  QUEUE_PREFIX,
+  type ChunkJobData,
+} from './queue-names.ts';
 
 /**
  * Chunks in flight at once from one run by default: enough to keep a few machines' threads
@@ -46,7 +53,13 @@ export class ChunkQueue implements ChunkPool {
   readonly #progress = new Map<string, (share: number) => void>();
   #next = 0;
 
-  private constructor(options: ChunkQueueOptions, redis: Redis, queue: Queue, events: QueueEvents, eventsRedis: Redis) {
+  private constructor(
+    options: ChunkQueueOptions,
+    redis: Redis,
+    queue: Queue,
+    events: QueueEvents,
+    eventsRedis: Redis,
+  ) {
     this.size = options.window ?? QUEUE_WINDOW;
     this.#redis = redis;
     this.#queue = queue;
@@ -70,7 +83,10 @@ export class ChunkQueue implements ChunkPool {
     return new ChunkQueue(options, redis, queue, events, eventsRedis);
   }
 
-  run<K extends TaskKind>(task: Extract<WorkerTask, { kind: K }>, events: TaskEvents = {}): TaskHandle<TaskOutputs[K]> {
+  run<K extends TaskKind>(
+    task: Extract<WorkerTask, { kind: K }>,
+    events: TaskEvents = {},
+  ): TaskHandle<TaskOutputs[K]> {
     let cancelled = false;
     let job: Job | undefined;
     let rejectRun: (error: Error) => void = () => {};
@@ -112,18 +128,33 @@ export class ChunkQueue implements ChunkPool {
   }
 
   async #submit(task: WorkerTask, events: TaskEvents, cancelled: () => boolean): Promise<Job> {
-    if (task.kind !== 'map-points' && task.kind !== 'screen-communities') throw new Error(`the queue takes chunks of maps and screenings; expected map-points or screen-communities, got ${task.kind}`);
+    if (task.kind !== 'map-points' && task.kind !== 'screen-communities')
+      throw new Error(
+        `the queue takes chunks of maps and screenings; expected map-points or screen-communities, got ${task.kind}`,
+      );
     const inputHash = await this.#inputOf(task.study);
     if (cancelled()) throw new Cancelled(0);
     const data: ChunkJobData =
       task.kind === 'map-points'
-        ? { kind: task.kind, inputHash, planKey: task.planKey, map: task.map, firstIndex: task.firstIndex, count: task.count }
+        ? {
+            kind: task.kind,
+            inputHash,
+            planKey: task.planKey,
+            map: task.map,
+            firstIndex: task.firstIndex,
+            count: task.count,
+          }
         : { kind: task.kind, inputHash, planKey: task.planKey, indices: task.indices };
     const jobId = `${task.planKey}-${this.#next++}`;
     if (events.onProgress) this.#progress.set(jobId, events.onProgress);
     // attempts 1: a chunk that fails fails its run (a bad input fails everywhere alike); a chunk
     // whose worker vanished is not a failure and goes back to the queue (MAX_STALLS, on the workers).
-    return this.#queue.add(task.kind, data, { jobId, attempts: 1, removeOnComplete: { age: 3600 }, removeOnFail: { age: 24 * 3600 } });
+    return this.#queue.add(task.kind, data, {
+      jobId,
+      attempts: 1,
+      removeOnComplete: { age: 3600 },
+      removeOnFail: { age: 24 * 3600 },
+    });
   }
 
   /** The study's content hash, storing it in Redis on the first chunk of its run. */

@@ -22,8 +22,14 @@ export class MissingInput extends Error {
 /** The inputs stored under `hash`, checked against it. */
 export async function getInput<T>(redis: Redis, hash: string): Promise<T> {
   const bytes = await redis.getBuffer(inputKey(hash));
-  if (bytes === null) throw new MissingInput(`the inputs ${hash} are no longer in the queue's Redis (kept ${KEEP_S / 86_400} days); start the run again`);
+  if (bytes === null)
+    throw new MissingInput(
+      `the inputs ${hash} are no longer in the queue's Redis (kept ${KEEP_S / 86_400} days); start the run again`,
+    );
   const actual = createHash('sha256').update(bytes).digest('hex');
-  if (actual !== hash) throw new MissingInput(`the inputs stored as ${hash} hash to ${actual}; expected them unchanged`);
+  if (actual !== hash)
+    throw new MissingInput(
+      `the inputs stored as ${hash} hash to ${actual}; expected them unchanged`,
+    );
   return deserialize(bytes) as T;
 }

@@ -20,5 +20,17 @@ export const connect = (url: string): Redis => new Redis(url, { maxRetriesPerReq
 
 /** What a chunk job carries: the task without its inputs, which travel by content hash. */
 export type ChunkJobData =
-  | { readonly kind: 'map-points'; readonly inputHash: string; readonly planKey: string; readonly map: unknown; readonly firstIndex: number; readonly count: number }
-  | { readonly kind: 'screen-communities'; readonly inputHash: string; readonly planKey: string; readonly indices: readonly number[] };
+  | {
+      readonly kind: 'map-points';
+      readonly inputHash: string;
+      readonly planKey: string;
+      readonly map: unknown;
+      readonly firstIndex: number;
+      readonly count: number;
+    }
+  | {
+      readonly kind: 'screen-communities';
+      readonly inputHash: string;
+      readonly planKey: string;
+      readonly indices: readonly number[];
+    };

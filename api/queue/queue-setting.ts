@@ -19,10 +19,13 @@ export class QueueSettingError extends Error {
 }
 
 /** The queue's Redis URL from the environment; undefined when the setting is absent. */
-export function queueUrlFrom(env: Readonly<Record<string, string | undefined>>): string | undefined {
+export function queueUrlFrom(
+  env: Readonly<Record<string, string | undefined>>,
+): string | undefined {
   const raw = env[QUEUE_SETTING];
   if (raw === undefined || raw.trim() === '') return undefined;
   const parsed = queueUrl.safeParse(raw);
-  if (!parsed.success) throw new QueueSettingError(`${parsed.error.issues[0]?.message ?? 'invalid'}; got "${raw}"`);
+  if (!parsed.success)
+    throw new QueueSettingError(`${parsed.error.issues[0]?.message ?? 'invalid'}; got "${raw}"`);
   return parsed.data;
 }

@@ -62,7 +62,10 @@ export async function startQueueWorker(options: QueueWorkerOptions): Promise<Que
       inputs.delete(hash);
     } else {
       const study = await getInput<Study>(redis, hash);
-      kept = inputs.get(hash) ?? { study, table: pool.run({ kind: 'rupture-table', study }).result.then((o) => o.table) };
+      kept = inputs.get(hash) ?? {
+        study,
+        table: pool.run({ kind: 'rupture-table', study }).result.then((o) => o.table),
+      };
       while (inputs.size >= KEPT_INPUTS) inputs.delete(inputs.keys().next().value as string);
     }
     inputs.set(hash, kept);
@@ -77,11 +80,30 @@ export async function startQueueWorker(options: QueueWorkerOptions): Promise<Que
       const table = await tablePromise;
       const task: WorkerTask =
         data.kind === 'map-points'
-          ? { kind: 'map-points', planKey: data.planKey, study, table, map: data.map as MapRequest, firstIndex: data.firstIndex, count: data.count }
-          : { kind: 'screen-communities', planKey: data.planKey, study, table, indices: data.indices };
-      const handle = pool.run(task, { onProgress: (share) => void job.updateProgress(share).catch(() => {}) });
+          ? {
+              kind: 'map-points',
+              planKey: data.planKey,
+              study,
+              table,
+              map: data.map as MapRequest,
+              firstIndex: data.firstIndex,
+              count: data.count,
+            }
+          : {
+              kind: 'screen-communities',
+              planKey: data.planKey,
+              study,
+              table,
+              indices: data.indices,
+            };
+      const handle = pool.run(task, {
+        onProgress: (share) => void job.updateProgress(share).catch(() => {}),
+      });
       const poll = setInterval(() => {
-        redis.exists(cancelKey(data.planKey)).then((n) => n === 1 && handle.cancel(), () => {});
+        redis.exists(cancelKey(data.planKey)).then(
+          (n) => n === 1 && handle.cancel(),
+          () => {},
+        );
       }, CANCEL_POLL_MS);
       try {
         return serialize(await handle.result).toString('base64');

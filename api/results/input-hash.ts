@@ -9,7 +9,8 @@ import type { Study } from '../engine/model.ts';
  */
 export function canonicalJson(value: unknown): string {
   if (value === null || typeof value !== 'object') return JSON.stringify(value) ?? 'null';
-  if (Array.isArray(value)) return `[${value.map((v) => (v === undefined ? 'null' : canonicalJson(v))).join(',')}]`;
+  if (Array.isArray(value))
+    return `[${value.map((v) => (v === undefined ? 'null' : canonicalJson(v))).join(',')}]`;
   const entries = Object.entries(value as Record<string, unknown>)
     .filter(([, v]) => v !== undefined && typeof v !== 'function')
     .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
@@ -17,7 +18,8 @@ export function canonicalJson(value: unknown): string {
 }
 
 /** SHA-256 (FIPS 180-4) of a text's UTF-8 bytes, lower-case hex. */
-export const sha256Hex = (text: string): string => createHash('sha256').update(text, 'utf8').digest('hex');
+export const sha256Hex = (text: string): string =>
+  createHash('sha256').update(text, 'utf8').digest('hex');
 
 /**
  * The provenance hash of a run's inputs: SHA-256 of the canonical JSON of the validated study

@@ -3,8 +3,15 @@ import type { Provenance } from '../engine/results.ts';
 
 /** The branches of the settings the study's sources use: the models that produced its numbers. */
 export function modelsUsed(study: Study): Provenance['models'] {
-  const used = TECTONIC_SETTINGS.filter((setting) => study.sources.some((s) => s.setting === setting));
-  return Object.fromEntries(used.map((setting) => [setting, study.groundMotion[setting].map((b) => ({ model: b.model, weight: b.weight }))]));
+  const used = TECTONIC_SETTINGS.filter((setting) =>
+    study.sources.some((s) => s.setting === setting),
+  );
+  return Object.fromEntries(
+    used.map((setting) => [
+      setting,
+      study.groundMotion[setting].map((b) => ({ model: b.model, weight: b.weight })),
+    ]),
+  );
 }
 
 export interface ProvenanceOptions {

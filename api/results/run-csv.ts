@@ -13,7 +13,8 @@ function columns(study: Study): string[] {
     for (const m of measures) out.push(`${m}_${years}yr_${measureUnit(parseMeasure(m))}`);
     out.push(`MMI_${years}yr`);
   }
-  for (const years of horizonsYears) for (const roman of INTENSITIES) out.push(`chance_MMI_${roman}_${years}yr`);
+  for (const years of horizonsYears)
+    for (const roman of INTENSITIES) out.push(`chance_MMI_${roman}_${years}yr`);
   out.push('nearestFault', 'nearestFault_km', 'warnings');
   return out;
 }
@@ -21,14 +22,23 @@ function columns(study: Study): string[] {
 function row(study: Study, community: CommunityResult): unknown[] {
   const site = study.communities.find((c) => c.id === community.communityId);
   const { measures, returnPeriodsYears, horizonsYears } = study.settings;
-  const cells: unknown[] = [community.communityId, community.name, site?.lon ?? '', site?.lat ?? '', site?.vs30 ?? '', community.band.id, community.band.label];
+  const cells: unknown[] = [
+    community.communityId,
+    community.name,
+    site?.lon ?? '',
+    site?.lat ?? '',
+    site?.vs30 ?? '',
+    community.band.id,
+    community.band.label,
+  ];
   for (const years of returnPeriodsYears) {
     const key = String(years);
     for (const m of measures) cells.push(community.atReturnPeriod[key]?.[m] ?? '');
     cells.push(community.intensity.atReturnPeriod[key]?.mmi ?? '');
   }
   for (const years of horizonsYears) {
-    for (const roman of INTENSITIES) cells.push(community.intensity.chanceOfReaching[String(years)]?.[roman] ?? '');
+    for (const roman of INTENSITIES)
+      cells.push(community.intensity.chanceOfReaching[String(years)]?.[roman] ?? '');
   }
   const nearest = community.nearestFaults[0];
   cells.push(nearest?.sourceId ?? '', nearest?.distanceKm ?? '', community.warnings.join(' | '));
@@ -50,5 +60,8 @@ const FORMULA_START = /^[=+\-@\t\r]/;
  * run them as formulas (OWASP, "CSV Injection"; from memory).
  */
 export function runCsv(study: Study, result: StudyResult): string {
-  return Papa.unparse({ fields: columns(study), data: result.communities.map((c) => row(study, c)) }, { newline: '\r\n', escapeFormulae: FORMULA_START });
+  return Papa.unparse(
+    { fields: columns(study), data: result.communities.map((c) => row(study, c)) },
+    { newline: '\r\n', escapeFormulae: FORMULA_START },
+  );
 }

@@ -2,7 +2,10 @@ import type { Feature, FeatureCollection, Point } from 'geojson';
 import type { Study } from '../engine/model.ts';
 import type { Provenance, StudyResult } from '../engine/results.ts';
 
-export type RunFeatureCollection = FeatureCollection<Point> & { readonly name: string; readonly provenance: Provenance };
+export type RunFeatureCollection = FeatureCollection<Point> & {
+  readonly name: string;
+  readonly provenance: Provenance;
+};
 
 /**
  * A run's results as a GeoJSON FeatureCollection (RFC 7946): each community a Point
@@ -34,5 +37,10 @@ export function runGeoJson(study: Study, result: StudyResult): RunFeatureCollect
       },
     });
   }
-  return { type: 'FeatureCollection', name: result.studyName, features, provenance: result.provenance };
+  return {
+    type: 'FeatureCollection',
+    name: result.studyName,
+    features,
+    provenance: result.provenance,
+  };
 }

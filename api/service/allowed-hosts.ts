@@ -29,9 +29,11 @@ export function allowedHosts(names: readonly string[]): MiddlewareHandler {
     const header = c.req.header('host');
     const name = hostNameOf(header);
     if (header !== undefined && (name === undefined || !allowed.has(name))) {
-      throw new HttpError(421, `this service answers to ${[...allowed].join(', ')} only; the request was for ${c.req.header('host') ?? 'no host'} (set TREMORA_HOSTS to add a name)`, [
-        { path: '(header) Host', message: `expected one of ${[...allowed].join(', ')}` },
-      ]);
+      throw new HttpError(
+        421,
+        `this service answers to ${[...allowed].join(', ')} only; the request was for ${c.req.header('host') ?? 'no host'} (set TREMORA_HOSTS to add a name)`,
+        [{ path: '(header) Host', message: `expected one of ${[...allowed].join(', ')}` }],
+      );
     }
     await next();
   };

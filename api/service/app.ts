@@ -47,7 +47,13 @@ export function createApp(ctx: ServiceContext, options: CreateAppOptions = {}): 
     methodNotAllowed({
       app,
       onMethodNotAllowed: (c, methods) =>
-        c.json(errorBody(`${c.req.method} is not allowed on ${c.req.path}; expected ${methods.join(', ')}`), 405, { Allow: methods.join(', ') }),
+        c.json(
+          errorBody(
+            `${c.req.method} is not allowed on ${c.req.path}; expected ${methods.join(', ')}`,
+          ),
+          405,
+          { Allow: methods.join(', ') },
+        ),
     }),
   );
   app.use(sameOriginWrites());
@@ -55,18 +61,32 @@ export function createApp(ctx: ServiceContext, options: CreateAppOptions = {}): 
   app.use(
     bodyLimit({
       maxSize,
-      onError: (c) => c.json(errorBody(`the request body is over the limit of ${maxSize} bytes`), 413),
+      onError: (c) =>
+        c.json(errorBody(`the request body is over the limit of ${maxSize} bytes`), 413),
     }),
   );
 
   const api = new Hono();
-  for (const routes of [healthRoutes, studyRoutes, importRoutes, runRoutes, mapRoutes, computeRoutes, scenarioRoutes, probeRoutes, catalogRoutes, tsunamiRoutes]) {
+  for (const routes of [
+    healthRoutes,
+    studyRoutes,
+    importRoutes,
+    runRoutes,
+    mapRoutes,
+    computeRoutes,
+    scenarioRoutes,
+    probeRoutes,
+    catalogRoutes,
+    tsunamiRoutes,
+  ]) {
     api.route('/', routes(ctx));
   }
   app.route('/api', api);
   if (options.pages) app.route('/', options.pages);
 
-  app.onError(errorHandler(options.logError ?? logToStderr, (error) => ctx.store.noteWriteFailure(error)));
+  app.onError(
+    errorHandler(options.logError ?? logToStderr, (error) => ctx.store.noteWriteFailure(error)),
+  );
   app.notFound(notFoundHandler);
   return app;
 }

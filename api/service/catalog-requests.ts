@@ -1,6 +1,11 @@
 import type { Context } from 'hono';
 import { z } from 'zod';
-import { CATALOG_FORMAT_LABELS, CATALOG_FORMAT_NAMES, CATALOG_FORMATS, formatOfMediaType } from '../catalog/catalog-formats.ts';
+import {
+  CATALOG_FORMAT_LABELS,
+  CATALOG_FORMAT_NAMES,
+  CATALOG_FORMATS,
+  formatOfMediaType,
+} from '../catalog/catalog-formats.ts';
 import type { CatalogFitOptions } from '../catalog/catalog-fit.ts';
 import type { CatalogFormat } from '../catalog/catalog-formats.ts';
 import { parseIsoTimeMs } from '../catalog/iso-time.ts';
@@ -19,7 +24,18 @@ import { IssueList } from '../study/issues.ts';
  */
 
 /** Keys of a POST /api/catalog/fit body. */
-export const CATALOG_FIT_KEYS = ['text', 'format', 'polygon', 'mMax', 'decluster', 'magnitudes', 'magnitudeStep', 'completeness', 'startTime', 'endTime'] as const;
+export const CATALOG_FIT_KEYS = [
+  'text',
+  'format',
+  'polygon',
+  'mMax',
+  'decluster',
+  'magnitudes',
+  'magnitudeStep',
+  'completeness',
+  'startTime',
+  'endTime',
+] as const;
 const COMPLETENESS_KEYS = ['method', 'mc', 'correction', 'periods', 'eventsPerWindow'] as const;
 
 /** Magnitudes as the study format bounds them (api/study/recurrence-schema.ts). */
@@ -29,7 +45,10 @@ const magnitude = numberIn({ min: 0, max: 10, unit: '(moment magnitude)' });
 function catalogTextField() {
   return z.unknown().transform((value, ctx): string => {
     if (typeof value !== 'string') {
-      ctx.addIssue({ code: 'custom', message: `expected the catalog text (${CATALOG_FORMAT_LABELS}) as a string, got ${describeValue(value)}` });
+      ctx.addIssue({
+        code: 'custom',
+        message: `expected the catalog text (${CATALOG_FORMAT_LABELS}) as a string, got ${describeValue(value)}`,
+      });
       return z.NEVER;
     }
     return value;
@@ -64,10 +83,17 @@ export interface CatalogFitRequest {
   readonly options: CatalogFitOptions;
 }
 
-function readTime(raw: unknown, issues: IssueList, path: readonly PropertyKey[]): number | undefined {
+function readTime(
+  raw: unknown,
+  issues: IssueList,
+  path: readonly PropertyKey[],
+): number | undefined {
   if (raw === undefined) return undefined;
   if (typeof raw !== 'string') {
-    issues.add(path, `expected an ISO 8601 time such as 2021-03-04T05:06:07Z, got ${describeValue(raw)}`);
+    issues.add(
+      path,
+      `expected an ISO 8601 time such as 2021-03-04T05:06:07Z, got ${describeValue(raw)}`,
+    );
     return undefined;
   }
   const parsed = parseIsoTimeMs(raw);
@@ -75,28 +101,52 @@ function readTime(raw: unknown, issues: IssueList, path: readonly PropertyKey[])
   return parsed.ok ? parsed.timeMs : undefined;
 }
 
-function unknownKeys(raw: Record<string, unknown>, known: readonly string[], issues: IssueList, path: readonly PropertyKey[]): void {
-  for (const key of Object.keys(raw)) if (!known.includes(key)) issues.add([...path, key], `unknown key; expected one of ${known.join(', ')}`);
+function unknownKeys(
+  raw: Record<string, unknown>,
+  known: readonly string[],
+  issues: IssueList,
+  path: readonly PropertyKey[],
+): void {
+  for (const key of Object.keys(raw))
+    if (!known.includes(key))
+      issues.add([...path, key], `unknown key; expected one of ${known.join(', ')}`);
 }
 
-function readPeriods(raw: unknown, issues: IssueList): readonly CompletenessPeriod[] | 'proposed' | undefined {
+function readPeriods(
+  raw: unknown,
+  issues: IssueList,
+): readonly CompletenessPeriod[] | 'proposed' | undefined {
   if (raw === undefined || raw === 'proposed') return raw;
   const path = ['completeness', 'periods'];
   if (!Array.isArray(raw)) {
-    issues.add(path, `expected a list of completeness periods ({ magnitude, start }) or "proposed", got ${describeValue(raw)}`);
+    issues.add(
+      path,
+      `expected a list of completeness periods ({ magnitude, start }) or "proposed", got ${describeValue(raw)}`,
+    );
     return undefined;
   }
-  const list = issues.parse(listOf(z.unknown(), 1, 50, 'completeness periods ({ magnitude, start }) or "proposed"'), raw, path);
+  const list = issues.parse(
+    listOf(z.unknown(), 1, 50, 'completeness periods ({ magnitude, start }) or "proposed"'),
+    raw,
+    path,
+  );
   if (!list) return undefined;
   const periods: CompletenessPeriod[] = [];
   list.forEach((item, i) => {
     if (typeof item !== 'object' || item === null || Array.isArray(item)) {
-      issues.add([...path, i], `expected a completeness period { magnitude, start }, got ${describeValue(item)}`);
+      issues.add(
+        [...path, i],
+        `expected a completeness period { magnitude, start }, got ${describeValue(item)}`,
+      );
       return;
     }
     const fields = issues.parse(periodSchema, item, [...path, i]);
     if (!fields) return;
-    if (fields.start === undefined) issues.add([...path, i, 'start'], 'expected the ISO 8601 time from which the magnitude is complete, got nothing');
+    if (fields.start === undefined)
+      issues.add(
+        [...path, i, 'start'],
+        'expected the ISO 8601 time from which the magnitude is complete, got nothing',
+      );
     const startMs = readTime(fields.start, issues, [...path, i, 'start']);
     if (startMs !== undefined) periods.push({ magnitude: fields.magnitude, startMs });
   });
@@ -122,23 +172,43 @@ export function readCatalogFitRequest(raw: Record<string, unknown>): CatalogFitR
   let periods: ReturnType<typeof readPeriods>;
   if (given !== undefined) {
     if (typeof given !== 'object' || given === null || Array.isArray(given)) {
-      issues.add(['completeness'], `expected { method?, mc?, correction?, periods?, eventsPerWindow? }, got ${describeValue(given)}`);
+      issues.add(
+        ['completeness'],
+        `expected { method?, mc?, correction?, periods?, eventsPerWindow? }, got ${describeValue(given)}`,
+      );
     } else {
       unknownKeys(given as Record<string, unknown>, COMPLETENESS_KEYS, issues, ['completeness']);
       completeness = issues.parse(completenessSchema, given, ['completeness']);
       periods = readPeriods((given as Record<string, unknown>).periods, issues);
     }
   }
-  const method = completeness?.method ?? (completeness?.mc === undefined ? 'max-curvature' : 'fixed');
-  if (method === 'fixed' && completeness?.mc === undefined) issues.add(['completeness', 'mc'], 'expected a completeness magnitude for method "fixed", got nothing');
-  if (method === 'max-curvature' && completeness?.mc !== undefined) issues.add(['completeness', 'mc'], 'expected no mc with method "max-curvature" (it finds Mc); use method "fixed" to give one');
+  const method =
+    completeness?.method ?? (completeness?.mc === undefined ? 'max-curvature' : 'fixed');
+  if (method === 'fixed' && completeness?.mc === undefined)
+    issues.add(
+      ['completeness', 'mc'],
+      'expected a completeness magnitude for method "fixed", got nothing',
+    );
+  if (method === 'max-curvature' && completeness?.mc !== undefined)
+    issues.add(
+      ['completeness', 'mc'],
+      'expected no mc with method "max-curvature" (it finds Mc); use method "fixed" to give one',
+    );
   const startMs = readTime(raw.startTime, issues, ['startTime']);
   const endMs = readTime(raw.endTime, issues, ['endTime']);
   if ((raw.startTime === undefined) !== (raw.endTime === undefined)) {
-    issues.add([raw.startTime === undefined ? 'startTime' : 'endTime'], 'expected startTime and endTime together (the observation span), or neither');
+    issues.add(
+      [raw.startTime === undefined ? 'startTime' : 'endTime'],
+      'expected startTime and endTime together (the observation span), or neither',
+    );
   }
-  if (startMs !== undefined && endMs !== undefined && !(endMs > startMs)) issues.add(['endTime'], `expected an end after the start ${raw.startTime as string}, got ${raw.endTime as string}`);
-  if (issues.issues.length > 0 || !fields || !completeness) throw new InvalidInput(issues.issues, 'invalid catalog fit request');
+  if (startMs !== undefined && endMs !== undefined && !(endMs > startMs))
+    issues.add(
+      ['endTime'],
+      `expected an end after the start ${raw.startTime as string}, got ${raw.endTime as string}`,
+    );
+  if (issues.issues.length > 0 || !fields || !completeness)
+    throw new InvalidInput(issues.issues, 'invalid catalog fit request');
   const options: CatalogFitOptions = {
     ...(rings ? { rings } : {}),
     ...(fields.mMax === undefined ? {} : { mMax: fields.mMax }),
@@ -147,7 +217,9 @@ export function readCatalogFitRequest(raw: Record<string, unknown>): CatalogFitR
     ...(fields.magnitudeStep === undefined ? {} : { magnitudeStep: fields.magnitudeStep }),
     ...(completeness.mc === undefined ? {} : { mc: completeness.mc }),
     ...(completeness.correction === undefined ? {} : { mcCorrection: completeness.correction }),
-    ...(completeness.eventsPerWindow === undefined ? {} : { eventsPerWindow: completeness.eventsPerWindow }),
+    ...(completeness.eventsPerWindow === undefined
+      ? {}
+      : { eventsPerWindow: completeness.eventsPerWindow }),
     ...(periods === undefined ? {} : { periods }),
     ...(startMs === undefined || endMs === undefined ? {} : { startMs, endMs }),
   };
@@ -160,7 +232,9 @@ const RAW_TYPES_TEXT = CATALOG_FORMATS.map((f) => `${f.mediaTypes[0]} (${f.label
 
 const fileNameField = () =>
   // eslint-disable-next-line no-control-regex -- control characters are what the pattern looks for
-  text(200, 'a file name').refine((name) => !/[\u0000-\u001f\u007f]/.test(name), { message: 'expected a file name without control characters' });
+  text(200, 'a file name').refine((name) => !/[\u0000-\u001f\u007f]/.test(name), {
+    message: 'expected a file name without control characters',
+  });
 
 const uploadSchema = z.object({
   text: catalogTextField(),
@@ -181,7 +255,10 @@ export async function readCatalogUpload(c: Context): Promise<CatalogUpload> {
   const format = type === undefined ? undefined : formatOfMediaType(type);
   if (format) {
     const issues = new IssueList();
-    const fileName = c.req.query('fileName') === undefined ? undefined : issues.parse(fileNameField(), c.req.query('fileName'), ['fileName']);
+    const fileName =
+      c.req.query('fileName') === undefined
+        ? undefined
+        : issues.parse(fileNameField(), c.req.query('fileName'), ['fileName']);
     if (issues.issues.length > 0) throw new InvalidInput(issues.issues, 'invalid catalog upload');
     return { text: await c.req.text(), format, ...(fileName ? { fileName } : {}) };
   }
@@ -193,10 +270,16 @@ export async function readCatalogUpload(c: Context): Promise<CatalogUpload> {
       { Accept: CATALOG_TYPES.join(', ') },
     );
   }
-  const { value } = await readJsonObject(c, 'a catalog upload ({ "fileName": ..., "format": ..., "text": ... })');
+  const { value } = await readJsonObject(
+    c,
+    'a catalog upload ({ "fileName": ..., "format": ..., "text": ... })',
+  );
   const issues = new IssueList();
-  for (const key of Object.keys(value)) if (!UPLOAD_KEYS.includes(key)) issues.add([key], `unknown key; expected one of ${UPLOAD_KEYS.join(', ')}`);
+  for (const key of Object.keys(value))
+    if (!UPLOAD_KEYS.includes(key))
+      issues.add([key], `unknown key; expected one of ${UPLOAD_KEYS.join(', ')}`);
   const fields = issues.parse(uploadSchema, value, []);
-  if (issues.issues.length > 0 || !fields) throw new InvalidInput(issues.issues, 'invalid catalog upload');
+  if (issues.issues.length > 0 || !fields)
+    throw new InvalidInput(issues.issues, 'invalid catalog upload');
   return fields;
 }

@@ -5,13 +5,29 @@ import { CONTENT_SECURITY_POLICY, REFERRER_POLICY } from './security-headers.ts'
 function refusal(code: string | undefined): { status: number; reason: string; message: string } {
   switch (code) {
     case 'HPE_HEADER_OVERFLOW':
-      return { status: 431, reason: 'Request Header Fields Too Large', message: 'the request line and headers are over the limit of 16 KiB (a very long URL?)' };
+      return {
+        status: 431,
+        reason: 'Request Header Fields Too Large',
+        message: 'the request line and headers are over the limit of 16 KiB (a very long URL?)',
+      };
     case 'HPE_INVALID_EOF_STATE':
-      return { status: 400, reason: 'Bad Request', message: 'the request was cut short: the connection closed before all of it arrived' };
+      return {
+        status: 400,
+        reason: 'Bad Request',
+        message: 'the request was cut short: the connection closed before all of it arrived',
+      };
     case 'ERR_HTTP_REQUEST_TIMEOUT':
-      return { status: 408, reason: 'Request Timeout', message: 'the request did not arrive in time' };
+      return {
+        status: 408,
+        reason: 'Request Timeout',
+        message: 'the request did not arrive in time',
+      };
     default:
-      return { status: 400, reason: 'Bad Request', message: `the request is not valid HTTP/1.1 (${code ?? 'unreadable'})` };
+      return {
+        status: 400,
+        reason: 'Bad Request',
+        message: `the request is not valid HTTP/1.1 (${code ?? 'unreadable'})`,
+      };
   }
 }
 
@@ -22,7 +38,10 @@ function refusal(code: string | undefined): { status: number; reason: string; me
  * 'clientError' listener; as Node's default does, it writes only to a socket with nothing
  * written yet, then closes it.
  */
-export function answerClientError(error: NodeJS.ErrnoException, socket: Duplex & { bytesWritten?: number }): void {
+export function answerClientError(
+  error: NodeJS.ErrnoException,
+  socket: Duplex & { bytesWritten?: number },
+): void {
   if (error.code === 'ECONNRESET' || !socket.writable || (socket.bytesWritten ?? 0) > 0) {
     socket.destroy();
     return;

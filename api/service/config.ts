@@ -43,7 +43,13 @@ export function isLoopbackHost(host: string): boolean {
   return false;
 }
 
-function integerIn(env: NodeJS.ProcessEnv, name: string, min: number, max: number, fallback: number): number {
+function integerIn(
+  env: NodeJS.ProcessEnv,
+  name: string,
+  min: number,
+  max: number,
+  fallback: number,
+): number {
   const text = env[name];
   if (text === undefined || text.trim() === '') return fallback;
   const value = Number(text);
@@ -62,11 +68,16 @@ const WILDCARD_HOSTS = new Set(['0.0.0.0', '::', '[::]']);
  * without TREMORA_HOSTS answers to any name (its token guards it, as any other client's).
  */
 function readAllowedHosts(env: NodeJS.ProcessEnv, host: string): readonly string[] | undefined {
-  const listed = env.TREMORA_HOSTS?.split(',').map((name) => name.trim()).filter((name) => name !== '');
+  const listed = env.TREMORA_HOSTS?.split(',')
+    .map((name) => name.trim())
+    .filter((name) => name !== '');
   if (listed !== undefined && listed.length > 0) {
     const names = listed.map((name) => {
       const bare = hostNameOf(isIP(name) === 6 ? `[${name}]` : name);
-      if (bare === undefined) throw new ConfigError(`TREMORA_HOSTS must list host names or addresses separated by commas, got "${name}"`);
+      if (bare === undefined)
+        throw new ConfigError(
+          `TREMORA_HOSTS must list host names or addresses separated by commas, got "${name}"`,
+        );
       return bare;
     });
     return [...new Set([...LOOPBACK_HOST_NAMES, ...names])];
@@ -81,10 +92,15 @@ function readAllowedHosts(env: NodeJS.ProcessEnv, host: string): readonly string
  * TREMORA_WORKERS, TREMORA_WORK_BUDGET, TREMORA_HOSTS. Listening beyond loopback requires a
  * token.
  */
-export function readConfig(env: NodeJS.ProcessEnv, cwd: string = process.cwd(), cores?: number): ServiceConfig {
+export function readConfig(
+  env: NodeJS.ProcessEnv,
+  cwd: string = process.cwd(),
+  cores?: number,
+): ServiceConfig {
   // An IPv6 address is listened on bare; "[::1]" is how URLs write it, so both are accepted.
   const host = (env.HOST?.trim() || DEFAULT_HOST).replace(/^\[(.*)\]$/, '$1');
-  const token = env.TREMORA_TOKEN === undefined || env.TREMORA_TOKEN === '' ? undefined : env.TREMORA_TOKEN;
+  const token =
+    env.TREMORA_TOKEN === undefined || env.TREMORA_TOKEN === '' ? undefined : env.TREMORA_TOKEN;
   if (token !== undefined && (token.length < MIN_TOKEN_LENGTH || !TOKEN_PATTERN.test(token))) {
     throw new ConfigError(
       `TREMORA_TOKEN must be at least ${MIN_TOKEN_LENGTH} characters of letters, digits and . _ ~ + / - (for example the output of "openssl rand -base64 24")`,
@@ -103,7 +119,13 @@ export function readConfig(env: NodeJS.ProcessEnv, cwd: string = process.cwd(), 
     databasePath: databasePath === ':memory:' ? databasePath : resolve(cwd, databasePath),
     ...(token === undefined ? {} : { token }),
     workers: integerIn(env, 'TREMORA_WORKERS', 1, MAX_WORKERS, defaultPoolSize(cores)),
-    workBudget: integerIn(env, 'TREMORA_WORK_BUDGET', 1, Number.MAX_SAFE_INTEGER, DEFAULT_WORK_BUDGET),
+    workBudget: integerIn(
+      env,
+      'TREMORA_WORK_BUDGET',
+      1,
+      Number.MAX_SAFE_INTEGER,
+      DEFAULT_WORK_BUDGET,
+    ),
     screenDemo: integerIn(env, 'TREMORA_SCREEN_DEMO', 0, 1, 1) === 1,
     ...(allowed === undefined ? {} : { allowedHosts: allowed }),
   };

@@ -25,7 +25,12 @@ export interface ErrorBody {
 }
 
 /** An error answer's body; `extra` adds fields beside error and issues (size, budget). */
-export const errorBody = (error: string, issues: readonly InputIssue[] = [], extra: Record<string, unknown> = {}): ErrorBody => ({ error, issues, ...extra });
+export const errorBody = (
+  error: string,
+  issues: readonly InputIssue[] = [],
+  extra: Record<string, unknown> = {},
+): ErrorBody => ({ error, issues, ...extra });
 
 /** 404 for an id that names nothing: `no study with id "…"`. */
-export const notFound = (what: string, id: string): HttpError => new HttpError(404, `no ${what} with id "${id}"`);
+export const notFound = (what: string, id: string): HttpError =>
+  new HttpError(404, `no ${what} with id "${id}"`);

@@ -62,7 +62,12 @@ export function grantPageAccess(c: Context, token: string): void {
 
 /** Clears the access cookie (same name, path and flags, expired). */
 export function endPageAccess(c: Context): void {
-  deleteCookie(c, ACCESS_COOKIE, { httpOnly: true, sameSite: 'Strict', path: '/', secure: overHttps(c) });
+  deleteCookie(c, ACCESS_COOKIE, {
+    httpOnly: true,
+    sameSite: 'Strict',
+    path: '/',
+    secure: overHttps(c),
+  });
 }
 
 /** The access page for a page write refused for want of access; it returns to `back` afterwards. */

@@ -1,11 +1,22 @@
 import type { Context, MiddlewareHandler } from 'hono';
 import { bearerAuth } from 'hono/bearer-auth';
 import { errorBody } from './http-error.ts';
-import { ACCESS_PATH, LEAVE_PATH, accessPageFor, hasPageAccess, pageBehind } from './page-access.ts';
+import {
+  ACCESS_PATH,
+  LEAVE_PATH,
+  accessPageFor,
+  hasPageAccess,
+  pageBehind,
+} from './page-access.ts';
 import { isWrite } from './same-origin.ts';
 
 const refused = (c: Context, why: string) =>
-  c.json(errorBody(`${why}; expected the header "Authorization: Bearer <TREMORA_TOKEN>" on every request that writes or computes`), 401);
+  c.json(
+    errorBody(
+      `${why}; expected the header "Authorization: Bearer <TREMORA_TOKEN>" on every request that writes or computes`,
+    ),
+    401,
+  );
 
 /** The JSON API; every other path is a page. */
 const isApiPath = (path: string): boolean => path === '/api' || path.startsWith('/api/');
@@ -23,7 +34,9 @@ export function requireToken(token: string): MiddlewareHandler {
   const check = bearerAuth({
     token,
     noAuthenticationHeader: { message: (c: Context) => refused(c, 'an access token is required') },
-    invalidAuthenticationHeader: { message: (c: Context) => refused(c, 'the Authorization header is malformed') },
+    invalidAuthenticationHeader: {
+      message: (c: Context) => refused(c, 'the Authorization header is malformed'),
+    },
     invalidToken: { message: (c: Context) => refused(c, 'the access token is wrong') },
   });
   return async (c, next) => {

@@ -26,7 +26,11 @@ export const sameOriginWrites = (): MiddlewareHandler => async (c, next) => {
     } else if (origin === 'null') {
       foreign = true;
     }
-    if (foreign) throw new HttpError(403, `writes are accepted only from this service's own pages; got a request from ${origin ?? 'another site'}`);
+    if (foreign)
+      throw new HttpError(
+        403,
+        `writes are accepted only from this service's own pages; got a request from ${origin ?? 'another site'}`,
+      );
   }
   await next();
 };

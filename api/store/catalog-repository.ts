@@ -48,7 +48,8 @@ const recordOf = (row: CatalogRow): StudyCatalogRecord => ({
   nonMomentCount: row.non_moment_count,
 });
 
-const SELECT = 'SELECT study_id, file_name, format, content, imported_at, loaded_count, rejected_count, non_moment_count FROM study_catalogs WHERE study_id = ?';
+const SELECT =
+  'SELECT study_id, file_name, format, content, imported_at, loaded_count, rejected_count, non_moment_count FROM study_catalogs WHERE study_id = ?';
 
 /** The study catalogs of one connection; every write in a transaction. */
 export class CatalogRepository {
@@ -62,19 +63,33 @@ export class CatalogRepository {
    * Attaches `write` to the study, replacing any catalog it had, in one transaction. Undefined
    * when there is no such study; `replaced` says whether a catalog was there before.
    */
-  put(studyId: string, write: StudyCatalogWrite): { readonly catalog: StudyCatalogRecord; readonly replaced: boolean } | undefined {
+  put(
+    studyId: string,
+    write: StudyCatalogWrite,
+  ): { readonly catalog: StudyCatalogRecord; readonly replaced: boolean } | undefined {
     const db = this.#db;
     const importedAt = new Date().toISOString();
     return db.transaction(() => {
-      if (db.prepare('SELECT 1 FROM studies WHERE id = ?').get(studyId) === undefined) return undefined;
-      const replaced = db.prepare('SELECT 1 FROM study_catalogs WHERE study_id = ?').get(studyId) !== undefined;
+      if (db.prepare('SELECT 1 FROM studies WHERE id = ?').get(studyId) === undefined)
+        return undefined;
+      const replaced =
+        db.prepare('SELECT 1 FROM study_catalogs WHERE study_id = ?').get(studyId) !== undefined;
       db.prepare(
         `INSERT INTO study_catalogs (study_id, file_name, format, content, imported_at, loaded_count, rejected_count, non_moment_count)
          VALUES (?, ?, ?, ?, ?, ?, ?, ?)
          ON CONFLICT (study_id) DO UPDATE SET file_name = excluded.file_name, format = excluded.format, content = excluded.content,
            imported_at = excluded.imported_at, loaded_count = excluded.loaded_count, rejected_count = excluded.rejected_count,
            non_moment_count = excluded.non_moment_count`,
-      ).run(studyId, write.fileName, write.format, write.content, importedAt, write.loadedCount, write.rejectedCount, write.nonMomentCount);
+      ).run(
+        studyId,
+        write.fileName,
+        write.format,
+        write.content,
+        importedAt,
+        write.loadedCount,
+        write.rejectedCount,
+        write.nonMomentCount,
+      );
       return { catalog: recordOf(db.prepare(SELECT).get(studyId) as CatalogRow), replaced };
     })();
   }
@@ -87,6 +102,9 @@ export class CatalogRepository {
 
   /** Detaches the study's catalog; false when it had none. */
   delete(studyId: string): boolean {
-    return this.#db.transaction(() => this.#db.prepare('DELETE FROM study_catalogs WHERE study_id = ?').run(studyId).changes > 0)();
+    return this.#db.transaction(
+      () =>
+        this.#db.prepare('DELETE FROM study_catalogs WHERE study_id = ?').run(studyId).changes > 0,
+    )();
   }
 }

@@ -122,19 +122,29 @@ export class MapRunRepository {
     this.#get = db.prepare(`SELECT ${MAP_RUN_COLUMNS} FROM map_runs WHERE id = ?`);
     this.#geojson = db.prepare("SELECT geojson FROM map_runs WHERE id = ? AND status = 'done'");
     // rowid keeps the order of creation among runs created in the same millisecond.
-    this.#listForStudy = db.prepare(`SELECT ${MAP_RUN_COLUMNS} FROM map_runs WHERE study_id = ? ORDER BY created_at, rowid`);
+    this.#listForStudy = db.prepare(
+      `SELECT ${MAP_RUN_COLUMNS} FROM map_runs WHERE study_id = ? ORDER BY created_at, rowid`,
+    );
     this.#insert = db.prepare(
       `INSERT INTO map_runs (id, study_id, status, progress, measure, return_period_years, level, horizon_years, spacing_km, vs30, bounds, input_hash, created_at)
        VALUES (?, ?, 'queued', 0, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
     );
-    this.#markRunning = db.prepare("UPDATE map_runs SET status = 'running', started_at = ?, description = ? WHERE id = ? AND status = 'queued'");
+    this.#markRunning = db.prepare(
+      "UPDATE map_runs SET status = 'running', started_at = ?, description = ? WHERE id = ? AND status = 'queued'",
+    );
     // Progress only moves forward, so a late message cannot make a map look less done.
-    this.#progress = db.prepare("UPDATE map_runs SET progress = ? WHERE id = ? AND status = 'running' AND progress < ?");
+    this.#progress = db.prepare(
+      "UPDATE map_runs SET progress = ? WHERE id = ? AND status = 'running' AND progress < ?",
+    );
     this.#finishDone = db.prepare(
       "UPDATE map_runs SET status = 'done', progress = 1, geojson = ?, warnings = ?, provenance = ?, finished_at = ?, error = NULL WHERE id = ? AND status = 'running'",
     );
-    this.#finishWithout = db.prepare("UPDATE map_runs SET status = ?, error = ?, finished_at = ? WHERE id = ? AND status IN ('queued', 'running')");
-    this.#interruptAll = db.prepare("UPDATE map_runs SET status = 'interrupted', error = ?, finished_at = ? WHERE status IN ('queued', 'running')");
+    this.#finishWithout = db.prepare(
+      "UPDATE map_runs SET status = ?, error = ?, finished_at = ? WHERE id = ? AND status IN ('queued', 'running')",
+    );
+    this.#interruptAll = db.prepare(
+      "UPDATE map_runs SET status = 'interrupted', error = ?, finished_at = ? WHERE status IN ('queued', 'running')",
+    );
   }
 
   /** Records a new map run, queued. */
@@ -185,10 +195,23 @@ export class MapRunRepository {
 
   /** GeoJSON, warnings, provenance and the status 'done' are written in one statement: never half a map. */
   finishDone(id: string, outputs: MapRunOutputs): boolean {
-    return this.#finishDone.run(outputs.geojson, JSON.stringify(outputs.warnings), outputs.provenanceJson, outputs.finishedAt, id).changes > 0;
+    return (
+      this.#finishDone.run(
+        outputs.geojson,
+        JSON.stringify(outputs.warnings),
+        outputs.provenanceJson,
+        outputs.finishedAt,
+        id,
+      ).changes > 0
+    );
   }
 
-  finishWithout(id: string, status: 'failed' | 'cancelled' | 'interrupted', error: string, finishedAt = new Date().toISOString()): boolean {
+  finishWithout(
+    id: string,
+    status: 'failed' | 'cancelled' | 'interrupted',
+    error: string,
+    finishedAt = new Date().toISOString(),
+  ): boolean {
     return this.#finishWithout.run(status, error, finishedAt, id).changes > 0;
   }
 

@@ -4,7 +4,12 @@ import { newId } from './new-id.ts';
 export type RunStatus = 'queued' | 'running' | 'done' | 'failed' | 'cancelled' | 'interrupted';
 
 /** Statuses after which a run never changes. */
-export const FINISHED_STATUSES: readonly RunStatus[] = ['done', 'failed', 'cancelled', 'interrupted'];
+export const FINISHED_STATUSES: readonly RunStatus[] = [
+  'done',
+  'failed',
+  'cancelled',
+  'interrupted',
+];
 
 export const isFinished = (status: RunStatus): boolean => FINISHED_STATUSES.includes(status);
 
@@ -51,7 +56,8 @@ interface RunRow {
   finished_at: string | null;
 }
 
-const RUN_COLUMNS = 'id, study_id, status, progress, input_hash, provenance, error, created_at, started_at, finished_at';
+const RUN_COLUMNS =
+  'id, study_id, status, progress, input_hash, provenance, error, created_at, started_at, finished_at';
 
 const recordOf = (row: RunRow): RunRecord => ({
   id: row.id,
@@ -89,13 +95,19 @@ export class RunRepository {
     this.#get = db.prepare(`SELECT ${RUN_COLUMNS} FROM runs WHERE id = ?`);
     this.#inputs = db.prepare('SELECT document, communities_csv FROM runs WHERE id = ?');
     this.#results = db.prepare("SELECT results FROM runs WHERE id = ? AND status = 'done'");
-    this.#listForStudy = db.prepare(`SELECT ${RUN_COLUMNS} FROM runs WHERE study_id = ? ORDER BY created_at, id`);
+    this.#listForStudy = db.prepare(
+      `SELECT ${RUN_COLUMNS} FROM runs WHERE study_id = ? ORDER BY created_at, id`,
+    );
     this.#insert = db.prepare(
       "INSERT INTO runs (id, study_id, status, progress, document, communities_csv, input_hash, created_at) VALUES (?, ?, 'queued', 0, ?, ?, ?, ?)",
     );
-    this.#markRunning = db.prepare("UPDATE runs SET status = 'running', started_at = ? WHERE id = ? AND status = 'queued'");
+    this.#markRunning = db.prepare(
+      "UPDATE runs SET status = 'running', started_at = ? WHERE id = ? AND status = 'queued'",
+    );
     // Progress only moves forward, so a late message cannot make a run look less done.
-    this.#progress = db.prepare("UPDATE runs SET progress = ? WHERE id = ? AND status = 'running' AND progress < ?");
+    this.#progress = db.prepare(
+      "UPDATE runs SET progress = ? WHERE id = ? AND status = 'running' AND progress < ?",
+    );
     this.#finishDone = db.prepare(
       "UPDATE runs SET status = 'done', progress = 1, results = ?, provenance = ?, finished_at = ?, error = NULL WHERE id = ? AND status = 'running'",
     );
@@ -110,7 +122,14 @@ export class RunRepository {
   create(inputs: RunInputs): RunRecord {
     const id = newId();
     const now = new Date().toISOString();
-    this.#insert.run(id, inputs.studyId, inputs.document, inputs.communitiesCsv ?? null, inputs.inputHash, now);
+    this.#insert.run(
+      id,
+      inputs.studyId,
+      inputs.document,
+      inputs.communitiesCsv ?? null,
+      inputs.inputHash,
+      now,
+    );
     return this.get(id) as RunRecord;
   }
 
@@ -121,9 +140,12 @@ export class RunRepository {
 
   /** The study document (and communities CSV) the run computed. */
   inputs(id: string): { document: string; communitiesCsv?: string } | undefined {
-    const row = this.#inputs.get(id) as { document: string; communities_csv: string | null } | undefined;
+    const row = this.#inputs.get(id) as
+      { document: string; communities_csv: string | null } | undefined;
     if (!row) return undefined;
-    return row.communities_csv === null ? { document: row.document } : { document: row.document, communitiesCsv: row.communities_csv };
+    return row.communities_csv === null
+      ? { document: row.document }
+      : { document: row.document, communitiesCsv: row.communities_csv };
   }
 
   /** The results JSON text of a done run; undefined for any other run. */
@@ -146,10 +168,18 @@ export class RunRepository {
 
   /** Results, provenance and the status 'done' are written in one statement: never half a run. */
   finishDone(id: string, outputs: RunOutputs): boolean {
-    return this.#finishDone.run(outputs.resultsJson, outputs.provenanceJson, outputs.finishedAt, id).changes > 0;
+    return (
+      this.#finishDone.run(outputs.resultsJson, outputs.provenanceJson, outputs.finishedAt, id)
+        .changes > 0
+    );
   }
 
-  finishWithout(id: string, status: 'failed' | 'cancelled' | 'interrupted', error: string, finishedAt = new Date().toISOString()): boolean {
+  finishWithout(
+    id: string,
+    status: 'failed' | 'cancelled' | 'interrupted',
+    error: string,
+    finishedAt = new Date().toISOString(),
+  ): boolean {
     return this.#finishWithout.run(status, error, finishedAt, id).changes > 0;
   }
 

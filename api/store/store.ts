@@ -86,13 +86,17 @@ export function openStore(path: string): Store {
       interruptedAtOpen,
       mapRunsInterruptedAtOpen,
       transaction: (work) => db.transaction(work)(),
-      integrityCheck: () => (db.pragma('integrity_check') as { integrity_check: string }[]).map((r) => r.integrity_check).join('; '),
+      integrityCheck: () =>
+        (db.pragma('integrity_check') as { integrity_check: string }[])
+          .map((r) => r.integrity_check)
+          .join('; '),
       ping: () => (db.prepare('SELECT 1 AS one').get() as { one: number }).one === 1,
       noteWriteFailure: (error) => {
         if (isDiskFull(error)) changesAtFull = changesNow();
       },
       diskFull: () => {
-        if (changesAtFull !== undefined && changesNow() !== changesAtFull) changesAtFull = undefined;
+        if (changesAtFull !== undefined && changesNow() !== changesAtFull)
+          changesAtFull = undefined;
         return changesAtFull !== undefined;
       },
       close: () => db.close(),

@@ -36,7 +36,12 @@ interface StudyRow {
   updated_at: string;
 }
 
-const summaryOf = (row: Omit<StudyRow, 'document'>): StudySummary => ({ id: row.id, name: row.name, createdAt: row.created_at, updatedAt: row.updated_at });
+const summaryOf = (row: Omit<StudyRow, 'document'>): StudySummary => ({
+  id: row.id,
+  name: row.name,
+  createdAt: row.created_at,
+  updatedAt: row.updated_at,
+});
 
 /** Saved studies and their imported files. Every write is one transaction. */
 export class StudyRepository {
@@ -51,13 +56,25 @@ export class StudyRepository {
 
   constructor(db: Database) {
     this.#db = db;
-    this.#list = db.prepare('SELECT id, name, created_at, updated_at FROM studies ORDER BY created_at, id');
-    this.#get = db.prepare('SELECT id, name, document, created_at, updated_at FROM studies WHERE id = ?');
-    this.#insert = db.prepare('INSERT INTO studies (id, name, document, created_at, updated_at) VALUES (?, ?, ?, ?, ?)');
-    this.#update = db.prepare('UPDATE studies SET name = ?, document = ?, updated_at = ? WHERE id = ?');
+    this.#list = db.prepare(
+      'SELECT id, name, created_at, updated_at FROM studies ORDER BY created_at, id',
+    );
+    this.#get = db.prepare(
+      'SELECT id, name, document, created_at, updated_at FROM studies WHERE id = ?',
+    );
+    this.#insert = db.prepare(
+      'INSERT INTO studies (id, name, document, created_at, updated_at) VALUES (?, ?, ?, ?, ?)',
+    );
+    this.#update = db.prepare(
+      'UPDATE studies SET name = ?, document = ?, updated_at = ? WHERE id = ?',
+    );
     this.#delete = db.prepare('DELETE FROM studies WHERE id = ?');
-    this.#insertFile = db.prepare('INSERT INTO study_files (study_id, kind, content, imported_at) VALUES (?, ?, ?, ?)');
-    this.#latestFile = db.prepare('SELECT content FROM study_files WHERE study_id = ? AND kind = ? ORDER BY id DESC LIMIT 1');
+    this.#insertFile = db.prepare(
+      'INSERT INTO study_files (study_id, kind, content, imported_at) VALUES (?, ?, ?, ?)',
+    );
+    this.#latestFile = db.prepare(
+      'SELECT content FROM study_files WHERE study_id = ? AND kind = ? ORDER BY id DESC LIMIT 1',
+    );
   }
 
   list(): StudySummary[] {

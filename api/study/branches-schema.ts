@@ -29,7 +29,10 @@ export function readBranches(
   path: readonly PropertyKey[],
 ): GroundMotionBranches | undefined {
   if (raw !== undefined && (typeof raw !== 'object' || raw === null || Array.isArray(raw))) {
-    issues.add(path, `expected an object with branch lists for ${TECTONIC_SETTINGS.join(', ')}, got ${describeValue(raw)}`);
+    issues.add(
+      path,
+      `expected an object with branch lists for ${TECTONIC_SETTINGS.join(', ')}, got ${describeValue(raw)}`,
+    );
     return undefined;
   }
   const given = (raw ?? {}) as Record<string, unknown>;
@@ -47,27 +50,43 @@ export function readBranches(
       }
       continue;
     }
-    const branches = issues.parse(listOf(branchSchema, 1, 10, 'branches'), given[setting], settingPath);
+    const branches = issues.parse(
+      listOf(branchSchema, 1, 10, 'branches'),
+      given[setting],
+      settingPath,
+    );
     if (!branches) {
       ok = false;
       continue;
     }
     // Model names are matched in any case and kept as the catalog spells them.
-    const named = branches.map((branch) => ({ ...branch, model: models.find(branch.model)?.name ?? branch.model }));
+    const named = branches.map((branch) => ({
+      ...branch,
+      model: models.find(branch.model)?.name ?? branch.model,
+    }));
     named.forEach((branch, i) => {
       const modelPath = [...settingPath, i, 'model'];
       const model = models.find(branch.model);
       if (!model) {
-        issues.add(modelPath, `unknown model "${branch.model}"; expected one of ${models.names.join(', ')}`);
+        issues.add(
+          modelPath,
+          `unknown model "${branch.model}"; expected one of ${models.names.join(', ')}`,
+        );
         ok = false;
         return;
       }
       if (!model.settings.includes(setting)) {
-        issues.add(modelPath, `${model.name} is for ${model.settings.join(' and ')} earthquakes; expected a model for ${setting} earthquakes`);
+        issues.add(
+          modelPath,
+          `${model.name} is for ${model.settings.join(' and ')} earthquakes; expected a model for ${setting} earthquakes`,
+        );
         ok = false;
       }
       if (named.findIndex((b) => b.model === branch.model) !== i) {
-        issues.add(modelPath, `${branch.model} is listed twice; expected each model once per setting`);
+        issues.add(
+          modelPath,
+          `${branch.model} is listed twice; expected each model once per setting`,
+        );
         ok = false;
       }
       if (!usedSettings.has(setting)) return;
@@ -81,7 +100,10 @@ export function readBranches(
     });
     const sum = branches.reduce((s, b) => s + b.weight, 0);
     if (Math.abs(sum - 1) > WEIGHT_SUM_TOLERANCE) {
-      issues.add(settingPath, `expected weights summing to 1 (within ${WEIGHT_SUM_TOLERANCE}), got ${Number(sum.toPrecision(12))}`);
+      issues.add(
+        settingPath,
+        `expected weights summing to 1 (within ${WEIGHT_SUM_TOLERANCE}), got ${Number(sum.toPrecision(12))}`,
+      );
       ok = false;
     }
     out[setting] = named;

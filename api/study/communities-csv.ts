@@ -14,10 +14,18 @@ export interface CsvCommunities {
  * other columns kept as details. Every problem is reported with its line number (the header is
  * line 1) under `rootPath`; valid rows are kept.
  */
-export function readCommunitiesCsv(text: string, rootPath: readonly PropertyKey[] = ['communities'], issues = new IssueList(), fileName = 'the communities CSV'): CsvCommunities {
+export function readCommunitiesCsv(
+  text: string,
+  rootPath: readonly PropertyKey[] = ['communities'],
+  issues = new IssueList(),
+  fileName = 'the communities CSV',
+): CsvCommunities {
   const table = csvTable(text, fileName, rootPath, issues);
   if (table.columns.length === 0) {
-    issues.add(rootPath, `${fileName}: expected CSV with a header line (e.g. name,lat,lon,vs30), got no lines`);
+    issues.add(
+      rootPath,
+      `${fileName}: expected CSV with a header line (e.g. name,lat,lon,vs30), got no lines`,
+    );
     return { communities: [], issues };
   }
   return { communities: tableCommunities(table, rootPath, issues).communities, issues };

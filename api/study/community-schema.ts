@@ -5,7 +5,18 @@ import { formatPath, type IssueList } from './issues.ts';
 import { SITE_CLASSES, SITE_CLASS_VS30 } from './site-class.ts';
 
 /** The keys a community may carry (DESIGN.md section 2, plus siteClass). */
-export const COMMUNITY_KEYS = ['id', 'name', 'lon', 'lat', 'vs30', 'siteClass', 'population', 'coastal', 'elevationM', 'details'] as const;
+export const COMMUNITY_KEYS = [
+  'id',
+  'name',
+  'lon',
+  'lat',
+  'vs30',
+  'siteClass',
+  'population',
+  'coastal',
+  'elevationM',
+  'details',
+] as const;
 
 /**
  * A community's details: what its file says that Tremora does not use (school, clinic,
@@ -23,17 +34,17 @@ const detailsSchema = z
 const VS30_RANGE = { min: 50, max: 5000, unit: 'm/s' } as const;
 
 export const communitySchema = z.object({
-    id: identifier(),
-    name: text(120, 'a name'),
-    lon: numberIn({ min: -180, max: 180, unit: 'degrees' }),
-    lat: numberIn({ min: -90, max: 90, unit: 'degrees' }),
-    vs30: numberIn(VS30_RANGE).optional(),
-    siteClass: oneOf(SITE_CLASSES as readonly SiteClass[]).optional(),
-    population: numberIn({ min: 0, max: 1e8, integer: true, unit: 'people' }).optional(),
-    coastal: yesNo().optional(),
-    elevationM: numberIn({ min: -500, max: 9000, unit: 'm' }).optional(),
-    details: detailsSchema.optional(),
-  });
+  id: identifier(),
+  name: text(120, 'a name'),
+  lon: numberIn({ min: -180, max: 180, unit: 'degrees' }),
+  lat: numberIn({ min: -90, max: 90, unit: 'degrees' }),
+  vs30: numberIn(VS30_RANGE).optional(),
+  siteClass: oneOf(SITE_CLASSES as readonly SiteClass[]).optional(),
+  population: numberIn({ min: 0, max: 1e8, integer: true, unit: 'people' }).optional(),
+  coastal: yesNo().optional(),
+  elevationM: numberIn({ min: -500, max: 9000, unit: 'm' }).optional(),
+  details: detailsSchema.optional(),
+});
 
 export type CommunityInput = z.output<typeof communitySchema>;
 
@@ -76,12 +87,18 @@ export function readCommunities(
     const hasSite = given.vs30 !== undefined || given.siteClass !== undefined;
     // Checked outside the schema so it is reported alongside every other problem of the row.
     if (typeof item === 'object' && item !== null && !hasSite) {
-      issues.add([...pathOf(index), 'vs30'], `expected vs30 (m/s) or siteClass (${SITE_CLASSES.join(', ')}), got neither`);
+      issues.add(
+        [...pathOf(index), 'vs30'],
+        `expected vs30 (m/s) or siteClass (${SITE_CLASSES.join(', ')}), got neither`,
+      );
     }
     if (!parsed || !hasSite) return;
     const first = seen.get(parsed.id);
     if (first !== undefined) {
-      issues.add([...pathOf(index), 'id'], `duplicate id "${parsed.id}"; expected unique ids (first used at ${formatPath(pathOf(first))})`);
+      issues.add(
+        [...pathOf(index), 'id'],
+        `duplicate id "${parsed.id}"; expected unique ids (first used at ${formatPath(pathOf(first))})`,
+      );
       return;
     }
     seen.set(parsed.id, index);

@@ -1,6 +1,10 @@
 import * as turf from '@turf/turf';
 import { positionOffsetsKm } from '../engine/geometry/floating-ruptures.ts';
-import { fitDimensions, scaledDimensions, scalingRelationFor } from '../engine/geometry/rupture-scaling.ts';
+import {
+  fitDimensions,
+  scaledDimensions,
+  scalingRelationFor,
+} from '../engine/geometry/rupture-scaling.ts';
 import type { FaultSource, Recurrence, Settings } from '../engine/model.ts';
 import { magnitudeEdges } from '../engine/recurrence/magnitude-bins.ts';
 
@@ -31,14 +35,23 @@ function firstAbove(values: readonly number[], x: number): number {
  * spherical distance instead of the local frame's, which differ by far less than a segment.
  * Costs one binary search per position, nothing is built.
  */
-export function faultPlaneCount(source: FaultSource, settings: Pick<Settings, 'magnitudeStep' | 'ruptureSpacingKm'>): number {
+export function faultPlaneCount(
+  source: FaultSource,
+  settings: Pick<Settings, 'magnitudeStep' | 'ruptureSpacingKm'>,
+): number {
   const ends = [0];
   for (let i = 1; i < source.trace.length; i++) {
     const [a, b] = [source.trace[i - 1] as readonly number[], source.trace[i] as readonly number[]];
-    ends.push((ends[i - 1] as number) + turf.distance([a[0] as number, a[1] as number], [b[0] as number, b[1] as number], { units: 'kilometers' }));
+    ends.push(
+      (ends[i - 1] as number) +
+        turf.distance([a[0] as number, a[1] as number], [b[0] as number, b[1] as number], {
+          units: 'kilometers',
+        }),
+    );
   }
   const lengthKm = ends.at(-1) as number;
-  const widthKm = (source.lowerDepthKm - source.upperDepthKm) / Math.sin((source.dipDeg * Math.PI) / 180);
+  const widthKm =
+    (source.lowerDepthKm - source.upperDepthKm) / Math.sin((source.dipDeg * Math.PI) / 180);
   // Segment end positions along the trace, without the start (0).
   const segmentEnds = ends.slice(1);
   const relation = scalingRelationFor(source.setting, source.mechanism);
@@ -49,7 +62,10 @@ export function faultPlaneCount(source: FaultSource, settings: Pick<Settings, 'm
     let perRow = 0;
     for (const alongKm of positionOffsetsKm(lengthKm, size.lengthKm, settings.ruptureSpacingKm)) {
       const first = Math.min(firstAbove(segmentEnds, alongKm), segmentEnds.length - 1);
-      const last = Math.min(firstAbove(segmentEnds, alongKm + size.lengthKm - 1e-9), segmentEnds.length - 1);
+      const last = Math.min(
+        firstAbove(segmentEnds, alongKm + size.lengthKm - 1e-9),
+        segmentEnds.length - 1,
+      );
       perRow += last - first + 1;
     }
     planes += rows * perRow;

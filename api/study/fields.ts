@@ -10,7 +10,8 @@ import { z } from 'zod';
 export function describeValue(value: unknown): string {
   if (value === undefined) return 'nothing';
   if (typeof value === 'number') return Number.isNaN(value) ? 'NaN' : String(value);
-  if (typeof value === 'string') return JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}…` : value);
+  if (typeof value === 'string')
+    return JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}…` : value);
   if (Array.isArray(value)) return `a list of ${value.length}`;
   if (value === null) return 'null';
   if (typeof value === 'object') return 'an object';
@@ -43,8 +44,10 @@ export function describeRange(range: NumberRange): string {
 export function inRange(value: number, range: NumberRange): boolean {
   if (!Number.isFinite(value)) return false;
   if (range.integer && !Number.isInteger(value)) return false;
-  if (range.min !== undefined && (range.minOpen ? value <= range.min : value < range.min)) return false;
-  if (range.max !== undefined && (range.maxOpen ? value >= range.max : value > range.max)) return false;
+  if (range.min !== undefined && (range.minOpen ? value <= range.min : value < range.min))
+    return false;
+  if (range.max !== undefined && (range.maxOpen ? value >= range.max : value > range.max))
+    return false;
   return true;
 }
 
@@ -53,7 +56,10 @@ export function numberIn(range: NumberRange = {}) {
   const expected = describeRange(range);
   return z.unknown().transform((value, ctx): number => {
     if (typeof value !== 'number' || !inRange(value, range)) {
-      ctx.addIssue({ code: 'custom', message: `expected ${expected}, got ${describeValue(value)}` });
+      ctx.addIssue({
+        code: 'custom',
+        message: `expected ${expected}, got ${describeValue(value)}`,
+      });
       return z.NEVER;
     }
     return value;
@@ -65,7 +71,10 @@ export function oneOf<const T extends readonly string[]>(choices: T) {
   const expected = `one of ${choices.map((c) => `"${c}"`).join(', ')}`;
   return z.unknown().transform((value, ctx): T[number] => {
     if (typeof value !== 'string' || !choices.includes(value)) {
-      ctx.addIssue({ code: 'custom', message: `expected ${expected}, got ${describeValue(value)}` });
+      ctx.addIssue({
+        code: 'custom',
+        message: `expected ${expected}, got ${describeValue(value)}`,
+      });
       return z.NEVER;
     }
     return value as T[number];
@@ -77,7 +86,10 @@ export function text(maxLength: number, what = 'text') {
   return z.unknown().transform((value, ctx): string => {
     const trimmed = typeof value === 'string' ? value.trim() : '';
     if (typeof value !== 'string' || trimmed.length === 0 || trimmed.length > maxLength) {
-      ctx.addIssue({ code: 'custom', message: `expected ${what} of 1 to ${maxLength} characters, got ${describeValue(value)}` });
+      ctx.addIssue({
+        code: 'custom',
+        message: `expected ${what} of 1 to ${maxLength} characters, got ${describeValue(value)}`,
+      });
       return z.NEVER;
     }
     return trimmed;
@@ -104,7 +116,10 @@ export function identifier() {
 export function yesNo() {
   return z.unknown().transform((value, ctx): boolean => {
     if (typeof value !== 'boolean') {
-      ctx.addIssue({ code: 'custom', message: `expected true or false, got ${describeValue(value)}` });
+      ctx.addIssue({
+        code: 'custom',
+        message: `expected true or false, got ${describeValue(value)}`,
+      });
       return z.NEVER;
     }
     return value;
@@ -112,9 +127,17 @@ export function yesNo() {
 }
 
 /** A list of at least `minItems` (at most `maxItems`) of `item`. */
-export function listOf<T extends z.ZodType>(item: T, minItems: number, maxItems: number, what: string) {
+export function listOf<T extends z.ZodType>(
+  item: T,
+  minItems: number,
+  maxItems: number,
+  what: string,
+) {
   return z.unknown().pipe(
-    z.array(item, { error: (iss) => `expected a list of ${what}, got ${describeValue(iss.input)}` })
+    z
+      .array(item, {
+        error: (iss) => `expected a list of ${what}, got ${describeValue(iss.input)}`,
+      })
       .min(minItems, { error: `expected at least ${minItems} ${what}` })
       .max(maxItems, { error: `expected at most ${maxItems} ${what}` }),
   );

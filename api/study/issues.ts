@@ -24,12 +24,21 @@ export function formatPath(path: readonly PropertyKey[]): string {
  */
 export function fromZod(error: z.ZodError, prefix: readonly PropertyKey[] = []): InputIssue[] {
   // zod 4 still runs a list's length checks on a value of the wrong type; the type says it all.
-  const wrongType = new Set(error.issues.filter((i) => i.code === 'invalid_type').map((i) => i.path.join('\u0000')));
-  const issues = error.issues.filter((i) => i.code === 'invalid_type' || !wrongType.has(i.path.join('\u0000')));
+  const wrongType = new Set(
+    error.issues.filter((i) => i.code === 'invalid_type').map((i) => i.path.join('\u0000')),
+  );
+  const issues = error.issues.filter(
+    (i) => i.code === 'invalid_type' || !wrongType.has(i.path.join('\u0000')),
+  );
   return issues.map((issue) => {
     let message = issue.message;
     if (issue.code === 'invalid_type') {
-      message = issue.input === undefined ? 'required, got nothing' : message.startsWith('Invalid input') ? `expected ${issue.expected}, got ${describeValue(issue.input)}` : message;
+      message =
+        issue.input === undefined
+          ? 'required, got nothing'
+          : message.startsWith('Invalid input')
+            ? `expected ${issue.expected}, got ${describeValue(issue.input)}`
+            : message;
     }
     return { path: formatPath([...prefix, ...issue.path]), message };
   });
@@ -45,7 +54,11 @@ export const MAX_LISTED_ISSUES = 500;
 /** Appends to `list` up to MAX_LISTED_ISSUES entries, then one that says the rest are not listed. */
 function pushCapped(list: InputIssue[], issue: InputIssue, what: string): void {
   if (list.length < MAX_LISTED_ISSUES) list.push(issue);
-  else if (list.length === MAX_LISTED_ISSUES) list.push({ path: '(study)', message: `more than ${MAX_LISTED_ISSUES} ${what}; only the first ${MAX_LISTED_ISSUES} are listed (the limit)` });
+  else if (list.length === MAX_LISTED_ISSUES)
+    list.push({
+      path: '(study)',
+      message: `more than ${MAX_LISTED_ISSUES} ${what}; only the first ${MAX_LISTED_ISSUES} are listed (the limit)`,
+    });
 }
 
 /** Collects issues and warnings while a study is read; nothing is thrown until the end. */
@@ -62,7 +75,11 @@ export class IssueList {
   }
 
   /** Parses with `schema`; on failure records every issue under `path` and returns undefined. */
-  parse<T extends z.ZodType>(schema: T, value: unknown, path: readonly PropertyKey[]): z.output<T> | undefined {
+  parse<T extends z.ZodType>(
+    schema: T,
+    value: unknown,
+    path: readonly PropertyKey[],
+  ): z.output<T> | undefined {
     const result = schema.safeParse(value, { reportInput: true });
     if (result.success) return result.data;
     for (const issue of fromZod(result.error, path)) pushCapped(this.issues, issue, 'problems');
@@ -73,7 +90,8 @@ export class IssueList {
   warnUnknownKeys(value: unknown, known: readonly string[], path: readonly PropertyKey[]): void {
     if (typeof value !== 'object' || value === null || Array.isArray(value)) return;
     for (const key of Object.keys(value)) {
-      if (!known.includes(key)) this.warn([...path, key], `unknown key ignored; expected one of ${known.join(', ')}`);
+      if (!known.includes(key))
+        this.warn([...path, key], `unknown key ignored; expected one of ${known.join(', ')}`);
     }
   }
 }

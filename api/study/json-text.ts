@@ -2,7 +2,11 @@ import type { InputIssue } from '../engine/errors.ts';
 
 export type JsonTextResult =
   | { readonly ok: true; readonly value: unknown }
-  | { readonly ok: false; readonly issue: InputIssue; /** Set when the text is well formed but over a limit. */ readonly limit?: 'depth' };
+  | {
+      readonly ok: false;
+      readonly issue: InputIssue;
+      /** Set when the text is well formed but over a limit. */ readonly limit?: 'depth';
+    };
 
 /**
  * Deepest nesting of objects and lists accepted. A study needs about 10 (an outline's
@@ -18,7 +22,8 @@ export function jsonDepthExceeds(text: string, maxDepth: number = MAX_JSON_DEPTH
   for (let i = 0; i < text.length; i++) {
     const code = text.charCodeAt(i);
     if (inString) {
-      if (code === 92) i++; // backslash: skip the escaped character
+      if (code === 92)
+        i++; // backslash: skip the escaped character
       else if (code === 34) inString = false;
     } else if (code === 34) inString = true;
     else if (code === 91 || code === 123) {
@@ -34,7 +39,14 @@ export function jsonDepthExceeds(text: string, maxDepth: number = MAX_JSON_DEPTH
  */
 export function parseJsonText(text: string, path: string): JsonTextResult {
   if (jsonDepthExceeds(text)) {
-    return { ok: false, limit: 'depth', issue: { path, message: `expected JSON nested at most ${MAX_JSON_DEPTH} levels deep (objects and lists), got deeper` } };
+    return {
+      ok: false,
+      limit: 'depth',
+      issue: {
+        path,
+        message: `expected JSON nested at most ${MAX_JSON_DEPTH} levels deep (objects and lists), got deeper`,
+      },
+    };
   }
   try {
     return { ok: true, value: JSON.parse(text.startsWith('\uFEFF') ? text.slice(1) : text) };
@@ -50,7 +62,13 @@ export function parseJsonText(text: string, path: string): JsonTextResult {
       where = ` at line ${line}, column ${column}`;
     }
     // Node quotes the whole text in some messages; keep only the reason.
-    const reason = message.replace(/ in JSON at position \d+.*$/s, '').replace(/, ".*" is not valid JSON$/s, '').slice(0, 120);
-    return { ok: false, issue: { path, message: `expected valid JSON; the text is malformed${where} (${reason})` } };
+    const reason = message
+      .replace(/ in JSON at position \d+.*$/s, '')
+      .replace(/, ".*" is not valid JSON$/s, '')
+      .slice(0, 120);
+    return {
+      ok: false,
+      issue: { path, message: `expected valid JSON; the text is malformed${where} (${reason})` },
+    };
   }
 }

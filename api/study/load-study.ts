@@ -14,11 +14,23 @@ import { readSources } from './source-schema.ts';
 import { checkRuptureEstimate } from './rupture-estimate.ts';
 import { checkStudyExtent } from './study-extent.ts';
 
-export const STUDY_KEYS = ['name', 'communities', 'sources', 'groundMotion', 'settings', 'outline', 'terrain'] as const;
+export const STUDY_KEYS = [
+  'name',
+  'communities',
+  'sources',
+  'groundMotion',
+  'settings',
+  'outline',
+  'terrain',
+] as const;
 
 export type LoadResult =
   | { readonly ok: true; readonly study: Study; readonly warnings: readonly InputIssue[] }
-  | { readonly ok: false; readonly issues: readonly InputIssue[]; readonly warnings: readonly InputIssue[] };
+  | {
+      readonly ok: false;
+      readonly issues: readonly InputIssue[];
+      readonly warnings: readonly InputIssue[];
+    };
 
 export interface LoadStudyOptions {
   /** The models studies may name (api/engine/motion/registry.ts). */
@@ -42,7 +54,10 @@ export interface LoadStudyOptions {
 export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
   const issues = new IssueList();
   if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) {
-    issues.add([], `expected a study object with ${STUDY_KEYS.join(', ')}, got ${describeValue(raw)}`);
+    issues.add(
+      [],
+      `expected a study object with ${STUDY_KEYS.join(', ')}, got ${describeValue(raw)}`,
+    );
     return { ok: false, issues: issues.issues, warnings: [] };
   }
   const doc = raw as Record<string, unknown>;
@@ -53,33 +68,67 @@ export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
   const sources = readSources(doc.sources, issues, ['sources']);
   const settings = readSettings(doc.settings, issues, ['settings']);
   const used = new Set<TectonicSetting>(sources.map((s) => s.setting));
-  const groundMotion = readBranches(doc.groundMotion, used, settings, options.models, issues, ['groundMotion']);
+  const groundMotion = readBranches(doc.groundMotion, used, settings, options.models, issues, [
+    'groundMotion',
+  ]);
   const outline = doc.outline === undefined ? undefined : readOutline(doc.outline, issues);
   // The terrain grid's file name; the CLI reads it beside the study, the service in its terrain folder.
-  const terrain = doc.terrain === undefined ? undefined : issues.parse(text(300, 'the file name of a GeoTIFF or ESRI ASCII elevation grid'), doc.terrain, ['terrain']);
+  const terrain =
+    doc.terrain === undefined
+      ? undefined
+      : issues.parse(
+          text(300, 'the file name of a GeoTIFF or ESRI ASCII elevation grid'),
+          doc.terrain,
+          ['terrain'],
+        );
   // Only on a study without other problems: the valid sources then keep their feature order.
   // The extent first: beyond it the local frame, and with it the estimates, do not hold.
   if (issues.issues.length === 0) checkStudyExtent(communities, sources, outline, issues);
   if (issues.issues.length === 0 && settings) checkRuptureEstimate(sources, settings, issues);
 
-  if (issues.issues.length > 0 || name === undefined || !settings || !groundMotion || communities.length === 0) {
+  if (
+    issues.issues.length > 0 ||
+    name === undefined ||
+    !settings ||
+    !groundMotion ||
+    communities.length === 0
+  ) {
     return { ok: false, issues: issues.issues, warnings: issues.warnings };
   }
-  const study: Study = { name, communities, sources, groundMotion, settings, ...(outline ? { outline } : {}), ...(terrain ? { terrain } : {}) };
+  const study: Study = {
+    name,
+    communities,
+    sources,
+    groundMotion,
+    settings,
+    ...(outline ? { outline } : {}),
+    ...(terrain ? { terrain } : {}),
+  };
   return { ok: true, study, warnings: issues.warnings };
 }
 
-function readStudyCommunities(raw: unknown, options: LoadStudyOptions, issues: IssueList): Community[] {
+function readStudyCommunities(
+  raw: unknown,
+  options: LoadStudyOptions,
+  issues: IssueList,
+): Community[] {
   if (typeof raw === 'string') {
-    if (options.communitiesTable !== undefined) return tableCommunities(options.communitiesTable, ['communities'], issues).communities;
+    if (options.communitiesTable !== undefined)
+      return tableCommunities(options.communitiesTable, ['communities'], issues).communities;
     if (options.communitiesCsv === undefined) {
-      issues.add(['communities'], `a file "${raw}" is named here but its contents were not supplied; expected a list of communities or a readable communities file`);
+      issues.add(
+        ['communities'],
+        `a file "${raw}" is named here but its contents were not supplied; expected a list of communities or a readable communities file`,
+      );
       return [];
     }
     return readCommunitiesCsv(options.communitiesCsv, ['communities'], issues, raw).communities;
   }
   if (!Array.isArray(raw) || raw.length === 0 || raw.length > MAX_COMMUNITIES) {
-    issues.add(['communities'], `expected a list of 1 to ${MAX_COMMUNITIES} communities (or the path of a communities file: CSV, XLSX, KML, KMZ, zipped shapefile or GeoJSON), got ${describeValue(raw)}`);
+    issues.add(
+      ['communities'],
+      `expected a list of 1 to ${MAX_COMMUNITIES} communities (or the path of a communities file: CSV, XLSX, KML, KMZ, zipped shapefile or GeoJSON), got ${describeValue(raw)}`,
+    );
     return [];
   }
   return readCommunities(raw, issues, (i) => ['communities', i]);
@@ -91,21 +140,37 @@ function readOutline(raw: unknown, issues: IssueList): LonLat[][] | undefined {
   const take = (geometry: unknown, path: readonly PropertyKey[]) => {
     const g = geometry as { type?: unknown; coordinates?: unknown } | null;
     if (g?.type === 'MultiPolygon' && Array.isArray(g.coordinates)) {
-      g.coordinates.forEach((coords, i) => take({ type: 'Polygon', coordinates: coords }, [...path, 'coordinates', i]));
+      g.coordinates.forEach((coords, i) =>
+        take({ type: 'Polygon', coordinates: coords }, [...path, 'coordinates', i]),
+      );
       return;
     }
     const read = readSourceGeometry(geometry, issues, path);
     if (read?.kind === 'zone') rings.push(read.rings[0] as LonLat[]);
-    else if (read) issues.add([...path, 'type'], `expected a Polygon or MultiPolygon outline, got ${describeValue(g?.type)}`);
+    else if (read)
+      issues.add(
+        [...path, 'type'],
+        `expected a Polygon or MultiPolygon outline, got ${describeValue(g?.type)}`,
+      );
   };
   const fc = raw as { type?: unknown; features?: unknown };
-  const vertices = Array.isArray(fc.features) ? fc.features.reduce((n: number, f) => n + vertexCount((f as { geometry?: unknown } | null)?.geometry), 0) : vertexCount(raw);
+  const vertices = Array.isArray(fc.features)
+    ? fc.features.reduce(
+        (n: number, f) => n + vertexCount((f as { geometry?: unknown } | null)?.geometry),
+        0,
+      )
+    : vertexCount(raw);
   if (vertices > MAX_STUDY_VERTICES) {
-    issues.add(['outline'], `expected at most ${MAX_STUDY_VERTICES} vertices in the outline (the limit), got ${vertices}; simplify it`);
+    issues.add(
+      ['outline'],
+      `expected at most ${MAX_STUDY_VERTICES} vertices in the outline (the limit), got ${vertices}; simplify it`,
+    );
     return undefined;
   }
   if (fc.type === 'FeatureCollection' && Array.isArray(fc.features)) {
-    fc.features.forEach((f, i) => take((f as { geometry?: unknown } | null)?.geometry, ['outline', 'features', i, 'geometry']));
+    fc.features.forEach((f, i) =>
+      take((f as { geometry?: unknown } | null)?.geometry, ['outline', 'features', i, 'geometry']),
+    );
   } else {
     take(raw, ['outline']);
   }

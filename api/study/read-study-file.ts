@@ -17,7 +17,16 @@ export async function readStudyFile(path: string, models: ModelCatalog): Promise
   try {
     text = await readFile(path, 'utf8');
   } catch (error) {
-    return { ok: false, issues: [{ path, message: `cannot read the study file (${(error as NodeJS.ErrnoException).code ?? 'error'})` }], warnings: [] };
+    return {
+      ok: false,
+      issues: [
+        {
+          path,
+          message: `cannot read the study file (${(error as NodeJS.ErrnoException).code ?? 'error'})`,
+        },
+      ],
+      warnings: [],
+    };
   }
   const parsed = parseJsonText(text, path);
   if (!parsed.ok) return { ok: false, issues: [parsed.issue], warnings: [] };
@@ -29,7 +38,12 @@ export async function readStudyFile(path: string, models: ModelCatalog): Promise
   } catch (error) {
     return {
       ok: false,
-      issues: [{ path: 'communities', message: `cannot read the communities file "${communities}" (${(error as NodeJS.ErrnoException).code ?? 'error'})` }],
+      issues: [
+        {
+          path: 'communities',
+          message: `cannot read the communities file "${communities}" (${(error as NodeJS.ErrnoException).code ?? 'error'})`,
+        },
+      ],
       warnings: [],
     };
   }

@@ -49,11 +49,19 @@ export const DEFAULT_SHEAR_MODULUS_PA = 3.0e10;
  * Validates one recurrence at `path`. `isFault` says whether the source has a fault surface,
  * which moment balancing needs.
  */
-export function readRecurrence(raw: unknown, isFault: boolean, issues: IssueList, path: readonly PropertyKey[]): Recurrence | undefined {
+export function readRecurrence(
+  raw: unknown,
+  isFault: boolean,
+  issues: IssueList,
+  path: readonly PropertyKey[],
+): Recurrence | undefined {
   const type = (raw as { type?: unknown } | null)?.type;
   if (typeof raw !== 'object' || raw === null || !RECURRENCE_TYPES.includes(type as never)) {
     const got = typeof raw === 'object' && raw !== null ? describeValue(type) : describeValue(raw);
-    issues.add([...path, 'type'], `expected one of ${RECURRENCE_TYPES.map((t) => `"${t}"`).join(', ')}, got ${got}`);
+    issues.add(
+      [...path, 'type'],
+      `expected one of ${RECURRENCE_TYPES.map((t) => `"${t}"`).join(', ')}, got ${got}`,
+    );
     return undefined;
   }
   const kind = type as (typeof RECURRENCE_TYPES)[number];
@@ -63,18 +71,27 @@ export function readRecurrence(raw: unknown, isFault: boolean, issues: IssueList
   const parsed = issues.parse(kind === 'gutenberg-richter' ? grSchema : momentSchema, raw, path);
   if (!parsed) return undefined;
   if (parsed.mMin >= parsed.mMax) {
-    issues.add([...path, 'mMax'], `expected mMax greater than mMin (${parsed.mMin}), got ${parsed.mMax}`);
+    issues.add(
+      [...path, 'mMax'],
+      `expected mMax greater than mMin (${parsed.mMin}), got ${parsed.mMax}`,
+    );
     return undefined;
   }
   if (parsed.type === 'gutenberg-richter') {
     if ((parsed.aValue === undefined) === (parsed.rate === undefined)) {
-      issues.add([...path, 'aValue'], 'expected exactly one of aValue (log10 annual rate of M >= 0) or rate (annual rate of M >= mMin)');
+      issues.add(
+        [...path, 'aValue'],
+        'expected exactly one of aValue (log10 annual rate of M >= 0) or rate (annual rate of M >= mMin)',
+      );
       return undefined;
     }
     return parsed;
   }
   if (!isFault) {
-    issues.add([...path, 'type'], 'moment-balanced recurrence needs a fault surface; expected a LineString source, or use "gutenberg-richter"');
+    issues.add(
+      [...path, 'type'],
+      'moment-balanced recurrence needs a fault surface; expected a LineString source, or use "gutenberg-richter"',
+    );
     return undefined;
   }
   const shape = parsed.shape ?? 'gutenberg-richter';

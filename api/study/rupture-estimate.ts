@@ -35,8 +35,11 @@ function binCount(recurrence: Recurrence, stepM: number): number {
 function positionCount(source: Source, settings: Settings): number {
   if (source.kind === 'point') return 1;
   if (source.kind === 'fault') {
-    const lengthKm = turf.length(turf.lineString(source.trace.map(([lon, lat]) => [lon, lat])), { units: 'kilometers' });
-    const widthKm = (source.lowerDepthKm - source.upperDepthKm) / Math.sin((source.dipDeg * Math.PI) / 180);
+    const lengthKm = turf.length(turf.lineString(source.trace.map(([lon, lat]) => [lon, lat])), {
+      units: 'kilometers',
+    });
+    const widthKm =
+      (source.lowerDepthKm - source.upperDepthKm) / Math.sin((source.dipDeg * Math.PI) / 180);
     const spacing = settings.ruptureSpacingKm;
     return (Math.ceil(lengthKm / spacing) + 1) * (Math.ceil(widthKm / spacing) + 1);
   }
@@ -52,11 +55,16 @@ function positionCount(source: Source, settings: Settings): number {
  * above, naming the largest source and the settings that reduce the count. `sources` must be
  * the study's valid sources in feature order.
  */
-export function checkRuptureEstimate(sources: readonly Source[], settings: Settings, issues: IssueList): void {
+export function checkRuptureEstimate(
+  sources: readonly Source[],
+  settings: Settings,
+  issues: IssueList,
+): void {
   let total = 0;
   let largest = { index: 0, count: 0 };
   sources.forEach((source, index) => {
-    const count = binCount(source.recurrence, settings.magnitudeStep) * positionCount(source, settings);
+    const count =
+      binCount(source.recurrence, settings.magnitudeStep) * positionCount(source, settings);
     total += count;
     if (count > largest.count) largest = { index, count };
   });
@@ -74,7 +82,11 @@ export function checkRuptureEstimate(sources: readonly Source[], settings: Setti
 }
 
 /** Refuses a study whose fault ruptures would hold more than MAX_RUPTURE_PLANES planes, naming the largest fault. */
-function checkPlaneEstimate(sources: readonly Source[], settings: Settings, issues: IssueList): void {
+function checkPlaneEstimate(
+  sources: readonly Source[],
+  settings: Settings,
+  issues: IssueList,
+): void {
   let total = 0;
   let largest = { index: 0, count: 0 };
   sources.forEach((source, index) => {

@@ -21,23 +21,47 @@ export const DEFAULT_SETTINGS: Settings = {
 const positive = (max: number, unit: string) => numberIn({ min: 0, minOpen: true, max, unit });
 
 const settingsSchema = z.object({
-  measures: listOf(z.string({ error: (i) => `expected a measure name such as "PGA" or "SA(0.2)", got ${describeValue(i.input)}` }), 1, 12, 'measures').optional(),
-  levels: z.record(z.string(), listOf(positive(100_000, '(g, or cm/s for PGV)'), 2, 100, 'levels')).optional(),
+  measures: listOf(
+    z.string({
+      error: (i) =>
+        `expected a measure name such as "PGA" or "SA(0.2)", got ${describeValue(i.input)}`,
+    }),
+    1,
+    12,
+    'measures',
+  ).optional(),
+  levels: z
+    .record(z.string(), listOf(positive(100_000, '(g, or cm/s for PGV)'), 2, 100, 'levels'))
+    .optional(),
   horizonsYears: listOf(positive(10_000, 'years'), 1, 10, 'horizons').optional(),
-  returnPeriodsYears: listOf(numberIn({ min: 1, max: 1e6, unit: 'years' }), 1, 10, 'return periods').optional(),
+  returnPeriodsYears: listOf(
+    numberIn({ min: 1, max: 1e6, unit: 'years' }),
+    1,
+    10,
+    'return periods',
+  ).optional(),
   /** 0 gives median-only motions; beyond 6 sigma the normal tail adds nothing a screening needs. */
   truncationSigma: numberIn({ min: 0, max: 6, unit: 'sigma' }).optional(),
   maxDistanceKm: numberIn({ min: 0, minOpen: true, max: 1000, unit: 'km' }).optional(),
   magnitudeStep: numberIn({ min: 0.01, max: 0.5, unit: 'magnitude units' }).optional(),
   ruptureSpacingKm: numberIn({ min: 0.5, max: 50, unit: 'km' }).optional(),
   zoneCellKm: numberIn({ min: 1, max: 100, unit: 'km' }).optional(),
-  intensityMeasure: z.enum(['PGA', 'PGV'], { error: (i) => `expected "PGA" or "PGV" (the Worden et al. 2012 relation intensity is read from), got ${describeValue(i.input)}` }).optional(),
+  intensityMeasure: z
+    .enum(['PGA', 'PGV'], {
+      error: (i) =>
+        `expected "PGA" or "PGV" (the Worden et al. 2012 relation intensity is read from), got ${describeValue(i.input)}`,
+    })
+    .optional(),
 });
 
 export const SETTINGS_KEYS = Object.keys(settingsSchema.shape);
 
 /** Validates `settings` (absent: all defaults); measures must parse and levels must increase. */
-export function readSettings(raw: unknown, issues: IssueList, path: readonly PropertyKey[]): Settings | undefined {
+export function readSettings(
+  raw: unknown,
+  issues: IssueList,
+  path: readonly PropertyKey[],
+): Settings | undefined {
   if (raw === undefined) return DEFAULT_SETTINGS;
   issues.warnUnknownKeys(raw, SETTINGS_KEYS, path);
   const parsed = issues.parse(settingsSchema, raw, path);
@@ -59,12 +83,18 @@ export function readSettings(raw: unknown, issues: IssueList, path: readonly Pro
   });
   for (const [measure, levels] of Object.entries(parsed.levels ?? {})) {
     if (!measures.includes(measure)) {
-      issues.add([...path, 'levels', measure], `levels for a measure not in settings.measures; expected one of ${measures.join(', ')}`);
+      issues.add(
+        [...path, 'levels', measure],
+        `levels for a measure not in settings.measures; expected one of ${measures.join(', ')}`,
+      );
       ok = false;
     }
     for (let i = 1; i < levels.length; i++) {
       if ((levels[i] as number) <= (levels[i - 1] as number)) {
-        issues.add([...path, 'levels', measure, i], `expected levels in increasing order, got ${levels[i]} after ${levels[i - 1]}`);
+        issues.add(
+          [...path, 'levels', measure, i],
+          `expected levels in increasing order, got ${levels[i]} after ${levels[i - 1]}`,
+        );
         ok = false;
         break;
       }
@@ -76,7 +106,9 @@ export function readSettings(raw: unknown, issues: IssueList, path: readonly Pro
         measures,
         levels: parsed.levels ?? {},
         horizonsYears: sortedUnique(parsed.horizonsYears ?? DEFAULT_SETTINGS.horizonsYears),
-        returnPeriodsYears: sortedUnique(parsed.returnPeriodsYears ?? DEFAULT_SETTINGS.returnPeriodsYears),
+        returnPeriodsYears: sortedUnique(
+          parsed.returnPeriodsYears ?? DEFAULT_SETTINGS.returnPeriodsYears,
+        ),
         truncationSigma: parsed.truncationSigma ?? DEFAULT_SETTINGS.truncationSigma,
         maxDistanceKm: parsed.maxDistanceKm ?? DEFAULT_SETTINGS.maxDistanceKm,
         magnitudeStep: parsed.magnitudeStep ?? DEFAULT_SETTINGS.magnitudeStep,

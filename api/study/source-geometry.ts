@@ -15,7 +15,12 @@ export const MAX_STUDY_VERTICES = 20_000;
 
 /** Positions in a raw GeoJSON geometry's coordinates (Point, LineString, Polygon, MultiPolygon); 0 for anything else. */
 export function vertexCount(geometry: unknown): number {
-  const count = (x: unknown): number => (!Array.isArray(x) ? 0 : typeof x[0] === 'number' ? 1 : x.reduce((n: number, y) => n + count(y), 0));
+  const count = (x: unknown): number =>
+    !Array.isArray(x)
+      ? 0
+      : typeof x[0] === 'number'
+        ? 1
+        : x.reduce((n: number, y) => n + count(y), 0);
   const coordinates = (geometry as { coordinates?: unknown } | null)?.coordinates;
   return count(coordinates);
 }
@@ -33,8 +38,17 @@ export type SourceGeometry =
   | { readonly kind: 'zone'; readonly rings: Position[][] }
   | { readonly kind: 'point'; readonly location: Position };
 
-function readPosition(raw: unknown, issues: IssueList, path: readonly PropertyKey[]): Position | undefined {
-  if (!Array.isArray(raw) || raw.length < 2 || raw.length > 3 || !raw.every((v) => typeof v === 'number' && Number.isFinite(v))) {
+function readPosition(
+  raw: unknown,
+  issues: IssueList,
+  path: readonly PropertyKey[],
+): Position | undefined {
+  if (
+    !Array.isArray(raw) ||
+    raw.length < 2 ||
+    raw.length > 3 ||
+    !raw.every((v) => typeof v === 'number' && Number.isFinite(v))
+  ) {
     issues.add(path, `expected a position [lon, lat] in degrees, got ${describeValue(raw)}`);
     return undefined;
   }
@@ -51,7 +65,12 @@ function readPosition(raw: unknown, issues: IssueList, path: readonly PropertyKe
   return ok ? [lon as number, lat as number] : undefined;
 }
 
-function readPositions(raw: unknown, minCount: number, issues: IssueList, path: readonly PropertyKey[]): Position[] | undefined {
+function readPositions(
+  raw: unknown,
+  minCount: number,
+  issues: IssueList,
+  path: readonly PropertyKey[],
+): Position[] | undefined {
   if (!Array.isArray(raw) || raw.length < minCount) {
     issues.add(path, `expected at least ${minCount} positions, got ${describeValue(raw)}`);
     return undefined;
@@ -70,11 +89,17 @@ function readPositions(raw: unknown, minCount: number, issues: IssueList, path: 
     const a = out[i - 1] as Position;
     const b = out[i] as Position;
     if (Math.abs(b[0] - a[0]) > 180) {
-      issues.add([...path, i], 'the line crosses the 180° meridian; expected a geometry that stays on one side (split it into two sources)');
+      issues.add(
+        [...path, i],
+        'the line crosses the 180° meridian; expected a geometry that stays on one side (split it into two sources)',
+      );
       return undefined;
     }
     if (turf.distance(a, b, { units: 'kilometers' }) < DUPLICATE_VERTEX_KM) {
-      issues.add([...path, i], `repeats the previous vertex; expected consecutive vertices at least ${DUPLICATE_VERTEX_KM * 1000} m apart`);
+      issues.add(
+        [...path, i],
+        `repeats the previous vertex; expected consecutive vertices at least ${DUPLICATE_VERTEX_KM * 1000} m apart`,
+      );
       return undefined;
     }
   }
@@ -86,11 +111,22 @@ function readPositions(raw: unknown, minCount: number, issues: IssueList, path: 
  * out-of-range positions, degenerate and self-intersecting shapes. turf's length and area are
  * spherical; they only gate degeneracy here.
  */
-export function readSourceGeometry(raw: unknown, issues: IssueList, path: readonly PropertyKey[]): SourceGeometry | undefined {
+export function readSourceGeometry(
+  raw: unknown,
+  issues: IssueList,
+  path: readonly PropertyKey[],
+): SourceGeometry | undefined {
   const type = (raw as { type?: unknown } | null)?.type;
   const coordinates = (raw as { coordinates?: unknown } | null)?.coordinates;
-  if (typeof raw !== 'object' || raw === null || !['LineString', 'Polygon', 'Point'].includes(type as string)) {
-    issues.add([...path, 'type'], `expected "LineString" (fault), "Polygon" (zone) or "Point", got ${describeValue(typeof raw === 'object' && raw ? type : raw)}`);
+  if (
+    typeof raw !== 'object' ||
+    raw === null ||
+    !['LineString', 'Polygon', 'Point'].includes(type as string)
+  ) {
+    issues.add(
+      [...path, 'type'],
+      `expected "LineString" (fault), "Polygon" (zone) or "Point", got ${describeValue(typeof raw === 'object' && raw ? type : raw)}`,
+    );
     return undefined;
   }
   const coordPath = [...path, 'coordinates'];
@@ -103,7 +139,10 @@ export function readSourceGeometry(raw: unknown, issues: IssueList, path: readon
     if (!trace) return undefined;
     const line = turf.lineString(trace);
     if (turf.length(line, { units: 'kilometers' }) < MIN_TRACE_KM) {
-      issues.add(coordPath, `the trace is degenerate; expected a length of at least ${MIN_TRACE_KM} km`);
+      issues.add(
+        coordPath,
+        `the trace is degenerate; expected a length of at least ${MIN_TRACE_KM} km`,
+      );
       return undefined;
     }
     if (turf.kinks(line).features.length > 0) {
@@ -113,7 +152,10 @@ export function readSourceGeometry(raw: unknown, issues: IssueList, path: readon
     return { kind: 'fault', trace };
   }
   if (!Array.isArray(coordinates) || coordinates.length < 1) {
-    issues.add(coordPath, `expected a list of rings (outer ring first), got ${describeValue(coordinates)}`);
+    issues.add(
+      coordPath,
+      `expected a list of rings (outer ring first), got ${describeValue(coordinates)}`,
+    );
     return undefined;
   }
   const rings: Position[][] = [];
@@ -124,7 +166,10 @@ export function readSourceGeometry(raw: unknown, issues: IssueList, path: readon
     const first = ring[0] as Position;
     const last = ring[ring.length - 1] as Position;
     if (first[0] !== last[0] || first[1] !== last[1]) {
-      issues.add(ringPath, 'the ring is not closed; expected its last position to repeat its first');
+      issues.add(
+        ringPath,
+        'the ring is not closed; expected its last position to repeat its first',
+      );
       return undefined;
     }
     rings.push(ring);
@@ -135,7 +180,10 @@ export function readSourceGeometry(raw: unknown, issues: IssueList, path: readon
     return undefined;
   }
   if (turf.area(polygon) / 1e6 < MIN_ZONE_KM2) {
-    issues.add(coordPath, `the polygon is degenerate; expected an area of at least ${MIN_ZONE_KM2} km²`);
+    issues.add(
+      coordPath,
+      `the polygon is degenerate; expected an area of at least ${MIN_ZONE_KM2} km²`,
+    );
     return undefined;
   }
   return { kind: 'zone', rings };

@@ -4,7 +4,12 @@ import { TECTONIC_SETTINGS } from '../engine/model.ts';
 import { describeValue, identifier, numberIn, oneOf, text } from './fields.ts';
 import { formatPath, type IssueList } from './issues.ts';
 import { readRecurrence } from './recurrence-schema.ts';
-import { MAX_STUDY_VERTICES, readSourceGeometry, rightHandDipDirectionDeg, vertexCount } from './source-geometry.ts';
+import {
+  MAX_STUDY_VERTICES,
+  readSourceGeometry,
+  rightHandDipDirectionDeg,
+  vertexCount,
+} from './source-geometry.ts';
 
 /** Most sources one study may hold. */
 export const MAX_SOURCES = 500;
@@ -13,7 +18,18 @@ const MECHANISMS = ['strike-slip', 'reverse', 'normal'] as const;
 /** Depth of earthquakes accepted, km: the deepest known events are near 700 km. */
 const DEPTH_KM = { min: 0, max: 700, unit: 'km' } as const;
 
-const FAULT_KEYS = ['id', 'name', 'setting', 'mechanism', 'rake', 'recurrence', 'dip', 'dipDirection', 'upperDepthKm', 'lowerDepthKm'];
+const FAULT_KEYS = [
+  'id',
+  'name',
+  'setting',
+  'mechanism',
+  'rake',
+  'recurrence',
+  'dip',
+  'dipDirection',
+  'upperDepthKm',
+  'lowerDepthKm',
+];
 const POINT_KEYS = ['id', 'name', 'setting', 'mechanism', 'rake', 'recurrence', 'depthKm'];
 
 const commonSchema = z.object({
@@ -47,9 +63,16 @@ export function mechanismOfRake(rakeDeg: number): Mechanism {
 }
 
 /** Validates one GeoJSON source feature at `path`; every problem goes to `issues`. */
-export function readSource(raw: unknown, issues: IssueList, path: readonly PropertyKey[]): Source | undefined {
+export function readSource(
+  raw: unknown,
+  issues: IssueList,
+  path: readonly PropertyKey[],
+): Source | undefined {
   if (typeof raw !== 'object' || raw === null || (raw as { type?: unknown }).type !== 'Feature') {
-    issues.add([...path, 'type'], `expected a GeoJSON "Feature", got ${describeValue(typeof raw === 'object' && raw ? (raw as { type?: unknown }).type : raw)}`);
+    issues.add(
+      [...path, 'type'],
+      `expected a GeoJSON "Feature", got ${describeValue(typeof raw === 'object' && raw ? (raw as { type?: unknown }).type : raw)}`,
+    );
     return undefined;
   }
   const feature = raw as { geometry?: unknown; properties?: unknown };
@@ -57,7 +80,10 @@ export function readSource(raw: unknown, issues: IssueList, path: readonly Prope
   const geometry = readSourceGeometry(feature.geometry, issues, [...path, 'geometry']);
   const props = feature.properties;
   if (typeof props !== 'object' || props === null) {
-    issues.add(propsPath, `expected an object of source properties (id, setting, recurrence, ...), got ${describeValue(props)}`);
+    issues.add(
+      propsPath,
+      `expected an object of source properties (id, setting, recurrence, ...), got ${describeValue(props)}`,
+    );
     return undefined;
   }
   const isFault = (feature.geometry as { type?: unknown } | null)?.type === 'LineString';
@@ -65,11 +91,28 @@ export function readSource(raw: unknown, issues: IssueList, path: readonly Prope
 
   const common = issues.parse(commonSchema, props, propsPath);
   if (common && common.mechanism === undefined && common.rake === undefined) {
-    issues.add([...propsPath, 'mechanism'], `expected a mechanism (${MECHANISMS.join(', ')}) or a rake in degrees, got neither`);
+    issues.add(
+      [...propsPath, 'mechanism'],
+      `expected a mechanism (${MECHANISMS.join(', ')}) or a rake in degrees, got neither`,
+    );
   }
-  const recurrence = readRecurrence((props as { recurrence?: unknown }).recurrence, isFault, issues, [...propsPath, 'recurrence']);
-  const shape = geometry ? issues.parse(isFault ? faultSchema : pointSchema, props, propsPath) : undefined;
-  if (!geometry || !common || !recurrence || !shape || (common.mechanism === undefined && common.rake === undefined)) return undefined;
+  const recurrence = readRecurrence(
+    (props as { recurrence?: unknown }).recurrence,
+    isFault,
+    issues,
+    [...propsPath, 'recurrence'],
+  );
+  const shape = geometry
+    ? issues.parse(isFault ? faultSchema : pointSchema, props, propsPath)
+    : undefined;
+  if (
+    !geometry ||
+    !common ||
+    !recurrence ||
+    !shape ||
+    (common.mechanism === undefined && common.rake === undefined)
+  )
+    return undefined;
 
   const rakeDeg = common.rake ?? RAKE_OF[common.mechanism as Mechanism];
   const base = {
@@ -84,7 +127,10 @@ export function readSource(raw: unknown, issues: IssueList, path: readonly Prope
     const f = shape as z.output<typeof faultSchema>;
     const upperDepthKm = f.upperDepthKm ?? 0;
     if (upperDepthKm >= f.lowerDepthKm) {
-      issues.add([...propsPath, 'lowerDepthKm'], `expected lowerDepthKm greater than upperDepthKm (${upperDepthKm} km), got ${f.lowerDepthKm} km`);
+      issues.add(
+        [...propsPath, 'lowerDepthKm'],
+        `expected lowerDepthKm greater than upperDepthKm (${upperDepthKm} km), got ${f.lowerDepthKm} km`,
+      );
       return undefined;
     }
     return {
@@ -104,19 +150,40 @@ export function readSource(raw: unknown, issues: IssueList, path: readonly Prope
 }
 
 /** Validates a GeoJSON FeatureCollection of sources at `path`, with unique ids. */
-export function readSources(raw: unknown, issues: IssueList, path: readonly PropertyKey[]): Source[] {
+export function readSources(
+  raw: unknown,
+  issues: IssueList,
+  path: readonly PropertyKey[],
+): Source[] {
   const features = (raw as { features?: unknown } | null)?.features;
-  if (typeof raw !== 'object' || raw === null || (raw as { type?: unknown }).type !== 'FeatureCollection' || !Array.isArray(features)) {
-    issues.add(path, `expected a GeoJSON FeatureCollection with a list of features, got ${describeValue(raw)}`);
+  if (
+    typeof raw !== 'object' ||
+    raw === null ||
+    (raw as { type?: unknown }).type !== 'FeatureCollection' ||
+    !Array.isArray(features)
+  ) {
+    issues.add(
+      path,
+      `expected a GeoJSON FeatureCollection with a list of features, got ${describeValue(raw)}`,
+    );
     return [];
   }
   if (features.length === 0 || features.length > MAX_SOURCES) {
-    issues.add([...path, 'features'], `expected 1 to ${MAX_SOURCES} sources, got ${features.length}`);
+    issues.add(
+      [...path, 'features'],
+      `expected 1 to ${MAX_SOURCES} sources, got ${features.length}`,
+    );
     return [];
   }
-  const vertices = features.reduce((n: number, f) => n + vertexCount((f as { geometry?: unknown } | null)?.geometry), 0);
+  const vertices = features.reduce(
+    (n: number, f) => n + vertexCount((f as { geometry?: unknown } | null)?.geometry),
+    0,
+  );
   if (vertices > MAX_STUDY_VERTICES) {
-    issues.add([...path, 'features'], `expected at most ${MAX_STUDY_VERTICES} vertices over all sources (the limit), got ${vertices}; simplify the traces and outlines`);
+    issues.add(
+      [...path, 'features'],
+      `expected at most ${MAX_STUDY_VERTICES} vertices over all sources (the limit), got ${vertices}; simplify the traces and outlines`,
+    );
     return [];
   }
   const out: Source[] = [];
@@ -127,7 +194,10 @@ export function readSources(raw: unknown, issues: IssueList, path: readonly Prop
     if (!source) return;
     const first = seen.get(source.id);
     if (first !== undefined) {
-      issues.add([...featurePath, 'properties', 'id'], `duplicate id "${source.id}"; expected unique ids (first used at ${formatPath([...path, 'features', first])})`);
+      issues.add(
+        [...featurePath, 'properties', 'id'],
+        `duplicate id "${source.id}"; expected unique ids (first used at ${formatPath([...path, 'features', first])})`,
+      );
       return;
     }
     seen.set(source.id, i);

@@ -19,7 +19,12 @@ export const MAX_FRAME_RADIUS_KM = 2_000;
  * Refuses a study whose points lie more than MAX_FRAME_RADIUS_KM from the centre of its
  * frame (turf's spherical distance), naming the farthest point, the extent and the limit.
  */
-export function checkStudyExtent(communities: readonly Community[], sources: readonly Source[], outline: readonly (readonly LonLat[])[] | undefined, issues: IssueList): void {
+export function checkStudyExtent(
+  communities: readonly Community[],
+  sources: readonly Source[],
+  outline: readonly (readonly LonLat[])[] | undefined,
+  issues: IssueList,
+): void {
   if (communities.length === 0 && sources.length === 0) return;
   const centre = frameForStudy({ communities, sources }).origin;
   let farthest = { km: 0, path: [] as (string | number)[] };
@@ -31,7 +36,8 @@ export function checkStudyExtent(communities: readonly Community[], sources: rea
   sources.forEach((source, i) => {
     const path = ['sources', 'features', i, 'geometry', 'coordinates'];
     if (source.kind === 'fault') source.trace.forEach((p) => consider(p, path));
-    else if (source.kind === 'zone') source.rings.forEach((ring) => ring.forEach((p) => consider(p, path)));
+    else if (source.kind === 'zone')
+      source.rings.forEach((ring) => ring.forEach((p) => consider(p, path)));
     else consider(source.location, path);
   });
   outline?.forEach((ring) => ring.forEach((p) => consider(p, ['outline'])));

@@ -6,5 +6,7 @@ declare module 'shpjs' {
     prj?: string;
     cpg?: Uint8Array;
   }
-  export default function getShapefile(input: ShapefileParts): Promise<import('geojson').FeatureCollection>;
+  export default function getShapefile(
+    input: ShapefileParts,
+  ): Promise<import('geojson').FeatureCollection>;
 }

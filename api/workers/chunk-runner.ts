@@ -12,7 +12,10 @@ export const newPlanKey = (): string => randomUUID();
  */
 export interface ChunkPool {
   readonly size: number;
-  run<K extends TaskKind>(task: Extract<WorkerTask, { kind: K }>, events?: TaskEvents): TaskHandle<TaskOutputs[K]>;
+  run<K extends TaskKind>(
+    task: Extract<WorkerTask, { kind: K }>,
+    events?: TaskEvents,
+  ): TaskHandle<TaskOutputs[K]>;
 }
 
 export interface ChunkRun<K extends TaskKind> {
@@ -35,7 +38,10 @@ export interface ChunkRun<K extends TaskKind> {
  * order (an output that arrives early waits for those before it). The first failure cancels
  * the rest and rejects; so does cancel() (with Cancelled).
  */
-export function runChunks<K extends TaskKind>(pool: ChunkPool, run: ChunkRun<K>): TaskHandle<TaskOutputs[K][]> {
+export function runChunks<K extends TaskKind>(
+  pool: ChunkPool,
+  run: ChunkRun<K>,
+): TaskHandle<TaskOutputs[K][]> {
   const { tasks } = run;
   const weights = run.weights ?? tasks.map(() => 1);
   const totalWeight = weights.reduce((s, w) => s + w, 0) || 1;
@@ -59,7 +65,8 @@ export function runChunks<K extends TaskKind>(pool: ChunkPool, run: ChunkRun<K>)
     const report = (): void => {
       if (!run.onProgress) return;
       let done = 0;
-      for (let i = 0; i < tasks.length; i++) done += (progress[i] as number) * (weights[i] as number);
+      for (let i = 0; i < tasks.length; i++)
+        done += (progress[i] as number) * (weights[i] as number);
       run.onProgress(Math.min(1, done / totalWeight));
     };
     const emit = (): void => {

@@ -11,7 +11,12 @@ import type { ScenarioRequest } from '../engine/scenario/index.ts';
  */
 export type WorkerTask =
   /** Screen a study: results JSON text (provenance included) and the provenance. */
-  | { readonly kind: 'screen'; readonly study: Study; readonly inputHash: string; readonly toolVersion: string }
+  | {
+      readonly kind: 'screen';
+      readonly study: Study;
+      readonly inputHash: string;
+      readonly toolVersion: string;
+    }
   /** Count a study's ruptures, for the work budget, without screening it. */
   | { readonly kind: 'measure'; readonly study: Study }
   /** One deterministic scenario (engine/scenario), as JSON text. */
@@ -55,7 +60,10 @@ export interface ScreenCommunitiesOutput {
 export interface MapPointsOutput {
   readonly points: readonly MapPoint[];
   /** Per-model validity counts over these points. */
-  readonly validity: readonly (readonly [model: string, counts: { outside: number; evaluated: number; firstNote: string }])[];
+  readonly validity: readonly (readonly [
+    model: string,
+    counts: { outside: number; evaluated: number; firstNote: string },
+  ])[];
 }
 
 export interface ScreenOutput {

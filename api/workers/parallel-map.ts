@@ -1,5 +1,12 @@
 import { Cancelled } from '../engine/errors.ts';
-import { mapSummary, mergeValidity, planHazardMap, type HazardMapSummary, type MapPoint, type MapValidity } from '../engine/map/hazard-map.ts';
+import {
+  mapSummary,
+  mergeValidity,
+  planHazardMap,
+  type HazardMapSummary,
+  type MapPoint,
+  type MapValidity,
+} from '../engine/map/hazard-map.ts';
 import type { MapDescription } from '../engine/map/map-geojson.ts';
 import type { Study } from '../engine/model.ts';
 import { modelCatalog } from '../engine/motion/registry.ts';
@@ -28,7 +35,12 @@ export interface ParallelMapOptions {
  * grid order as they come and not kept, so memory stays flat whatever the grid's size. The
  * numbers are hazardMap's (map/hazard-map.ts). Resolves with the map's summary.
  */
-export function hazardMapOnPool(pool: WorkerPool, study: Study, map: MapRequest, options: ParallelMapOptions): TaskHandle<HazardMapSummary> {
+export function hazardMapOnPool(
+  pool: WorkerPool,
+  study: Study,
+  map: MapRequest,
+  options: ParallelMapOptions,
+): TaskHandle<HazardMapSummary> {
   let cancelled = false;
   let active: { cancel(): void } | undefined;
   const result = (async (): Promise<HazardMapSummary> => {
@@ -39,12 +51,29 @@ export function hazardMapOnPool(pool: WorkerPool, study: Study, map: MapRequest,
     // The grid and checks of the map, here; the models' work is left to the threads (it is built lazily).
     const plan = planHazardMap(study, { ...map, models: modelCatalog, table });
     const { grid } = plan;
-    options.onStart?.({ measure: plan.measure.key, unit: plan.unit, quantity: plan.quantity, vs30: plan.vs30, spacingKm: grid.spacingKm, columns: grid.columns, rows: grid.rows, count: grid.count });
+    options.onStart?.({
+      measure: plan.measure.key,
+      unit: plan.unit,
+      quantity: plan.quantity,
+      vs30: plan.vs30,
+      spacingKm: grid.spacingKm,
+      columns: grid.columns,
+      rows: grid.rows,
+      count: grid.count,
+    });
     const size = options.chunkPoints ?? MAP_CHUNK_POINTS;
     const planKey = newPlanKey();
     const tasks = [];
     for (let first = 0; first < plan.grid.count; first += size) {
-      tasks.push({ kind: 'map-points' as const, planKey, study, table, map, firstIndex: first, count: Math.min(size, plan.grid.count - first) });
+      tasks.push({
+        kind: 'map-points' as const,
+        planKey,
+        study,
+        table,
+        map,
+        firstIndex: first,
+        count: Math.min(size, plan.grid.count - first),
+      });
     }
     const validity: MapValidity = new Map();
     let pointsDone = 0;

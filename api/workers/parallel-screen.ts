@@ -19,13 +19,21 @@ export interface ScreeningText {
 
 /** The StudyResult JSON (results.ts, keys in its order) of a screening and its provenance. */
 export function screeningJson(text: ScreeningText, provenance: Provenance): string {
-  const communities = text.communityChunks.map((chunk) => chunk.slice(1, -1)).filter((inner) => inner.length > 0);
+  const communities = text.communityChunks
+    .map((chunk) => chunk.slice(1, -1))
+    .filter((inner) => inner.length > 0);
   return `{"studyName":${JSON.stringify(text.studyName)},"communities":[${communities.join(',')}],"warnings":${JSON.stringify(text.warnings)},"provenance":${JSON.stringify(provenance)}}`;
 }
 
 /** The screening's results as objects (the CLI prints from them). */
 export function screeningOutput(text: ScreeningText): ScreeningOutput {
-  return { studyName: text.studyName, communities: text.communityChunks.flatMap((chunk) => JSON.parse(chunk) as ScreeningOutput['communities']), warnings: [...text.warnings] };
+  return {
+    studyName: text.studyName,
+    communities: text.communityChunks.flatMap(
+      (chunk) => JSON.parse(chunk) as ScreeningOutput['communities'],
+    ),
+    warnings: [...text.warnings],
+  };
 }
 
 export interface ParallelScreenOptions {
@@ -45,13 +53,20 @@ export interface ParallelScreenOptions {
  * screenStudy's (the same engine functions, community by community). The models are the
  * registry's (a worker thread has no other). Cancel stops every chunk (Cancelled).
  */
-export function screenStudyOnPool(pool: WorkerPool, study: Study, options: ParallelScreenOptions = {}): TaskHandle<ScreeningText> {
+export function screenStudyOnPool(
+  pool: WorkerPool,
+  study: Study,
+  options: ParallelScreenOptions = {},
+): TaskHandle<ScreeningText> {
   let cancelled = false;
   let active: { cancel(): void } | undefined;
   const result = (async (): Promise<ScreeningText> => {
     // Branches and study warnings are checked here first: a bad study fails before any thread works.
     const setup = screeningSetup(study, modelCatalog);
-    const tableTask = pool.run({ kind: 'rupture-table', study }, options.onStart ? { onStart: options.onStart } : {});
+    const tableTask = pool.run(
+      { kind: 'rupture-table', study },
+      options.onStart ? { onStart: options.onStart } : {},
+    );
     active = tableTask;
     const { table } = await tableTask.result;
     if (cancelled) throw new Cancelled(0);
@@ -59,10 +74,17 @@ export function screenStudyOnPool(pool: WorkerPool, study: Study, options: Paral
     const chunks = options.chunks ?? pool;
     const chunkSize = options.chunkSize ?? Math.max(1, Math.ceil(count / (4 * chunks.size)));
     const groups: number[][] = [];
-    for (let first = 0; first < count; first += chunkSize) groups.push(Array.from({ length: Math.min(chunkSize, count - first) }, (_, i) => first + i));
+    for (let first = 0; first < count; first += chunkSize)
+      groups.push(Array.from({ length: Math.min(chunkSize, count - first) }, (_, i) => first + i));
     const planKey = newPlanKey();
     const run = runChunks(chunks, {
-      tasks: groups.map((indices) => ({ kind: 'screen-communities' as const, planKey, study, table, indices })),
+      tasks: groups.map((indices) => ({
+        kind: 'screen-communities' as const,
+        planKey,
+        study,
+        table,
+        indices,
+      })),
       weights: groups.map((c) => c.length),
       ...(options.onProgress ? { onProgress: options.onProgress } : {}),
     });
@@ -89,7 +111,10 @@ export function spreadScreening(
   study: Study,
   inputHash: string,
   toolVersion: string,
-  events: { readonly onStart?: (at: string) => void; readonly onProgress?: (share: number) => void },
+  events: {
+    readonly onStart?: (at: string) => void;
+    readonly onProgress?: (share: number) => void;
+  },
   chunks?: ChunkPool,
 ): TaskHandle<ScreenOutput> {
   const startedAt = new Date().toISOString();
@@ -100,7 +125,13 @@ export function spreadScreening(
   });
   return {
     result: handle.result.then((text) => {
-      const provenance = buildProvenance({ study, toolVersion, inputHash, startedAt, finishedAt: new Date().toISOString() });
+      const provenance = buildProvenance({
+        study,
+        toolVersion,
+        inputHash,
+        startedAt,
+        finishedAt: new Date().toISOString(),
+      });
       return { resultsJson: screeningJson(text, provenance), provenance };
     }),
     cancel: () => handle.cancel(),

@@ -1,5 +1,10 @@
 import { Cancelled } from '../engine/errors.ts';
-import { hazardMapChunk, planHazardMap, type HazardMapPlan, type MapValidity } from '../engine/map/hazard-map.ts';
+import {
+  hazardMapChunk,
+  planHazardMap,
+  type HazardMapPlan,
+  type MapValidity,
+} from '../engine/map/hazard-map.ts';
 import { modelCatalog } from '../engine/motion/registry.ts';
 import { screenCommunities } from '../engine/screen-study.ts';
 import { planScreening, type ScreeningPlan } from '../engine/screening-plan.ts';
@@ -33,8 +38,13 @@ export interface ChunkEvents {
   readonly onProgress: (shareDone: number) => void;
 }
 
-export function screenCommunitiesTask(task: Extract<WorkerTask, { kind: 'screen-communities' }>, events: ChunkEvents): TaskOutputs['screen-communities'] {
-  const plan = keptPlan(`screen:${task.planKey}`, () => planScreening(task.study, { models: modelCatalog, table: task.table }));
+export function screenCommunitiesTask(
+  task: Extract<WorkerTask, { kind: 'screen-communities' }>,
+  events: ChunkEvents,
+): TaskOutputs['screen-communities'] {
+  const plan = keptPlan(`screen:${task.planKey}`, () =>
+    planScreening(task.study, { models: modelCatalog, table: task.table }),
+  );
   const results = screenCommunities(plan, task.indices, {
     onProgress: (share) => {
       events.onProgress(share);
@@ -44,8 +54,13 @@ export function screenCommunitiesTask(task: Extract<WorkerTask, { kind: 'screen-
   return { communitiesJson: JSON.stringify(results) };
 }
 
-export function mapPointsTask(task: Extract<WorkerTask, { kind: 'map-points' }>, events: ChunkEvents): TaskOutputs['map-points'] {
-  const plan = keptPlan(`map:${task.planKey}`, () => planHazardMap(task.study, { ...task.map, models: modelCatalog, table: task.table }));
+export function mapPointsTask(
+  task: Extract<WorkerTask, { kind: 'map-points' }>,
+  events: ChunkEvents,
+): TaskOutputs['map-points'] {
+  const plan = keptPlan(`map:${task.planKey}`, () =>
+    planHazardMap(task.study, { ...task.map, models: modelCatalog, table: task.table }),
+  );
   const validity: MapValidity = new Map();
   const points = hazardMapChunk(plan, task.firstIndex, task.count, validity, events.shouldStop);
   events.onProgress(1);

@@ -16,7 +16,10 @@ import { serialiseError } from './task-errors.ts';
  * flag: a message could not arrive while the engine holds this thread.
  */
 
-if (!parentPort) throw new Error('run-worker.ts runs as a worker thread of worker-pool.ts; expected a parent port');
+if (!parentPort)
+  throw new Error(
+    'run-worker.ts runs as a worker thread of worker-pool.ts; expected a parent port',
+  );
 const port = parentPort;
 
 /** Progress is posted when it has moved by this share (1%) since the last post, and at the end. */
@@ -24,7 +27,11 @@ const PROGRESS_STEP = 0.01;
 
 const reply = (message: WorkerReply): void => port.postMessage(message);
 
-function screen(task: Extract<WorkerTask, { kind: 'screen' }>, id: number, stop: Int32Array): TaskOutputs['screen'] {
+function screen(
+  task: Extract<WorkerTask, { kind: 'screen' }>,
+  id: number,
+  stop: Int32Array,
+): TaskOutputs['screen'] {
   let posted = 0;
   const startedAt = new Date().toISOString();
   const output = screenStudy(task.study, {
@@ -37,7 +44,13 @@ function screen(task: Extract<WorkerTask, { kind: 'screen' }>, id: number, stop:
       }
     },
   });
-  const provenance = buildProvenance({ study: task.study, toolVersion: task.toolVersion, inputHash: task.inputHash, startedAt, finishedAt: new Date().toISOString() });
+  const provenance = buildProvenance({
+    study: task.study,
+    toolVersion: task.toolVersion,
+    inputHash: task.inputHash,
+    startedAt,
+    finishedAt: new Date().toISOString(),
+  });
   const result: StudyResult = { ...output, provenance };
   return { resultsJson: JSON.stringify(result), provenance };
 }

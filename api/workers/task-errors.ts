@@ -4,8 +4,14 @@ import type { SerialisedError } from './messages.ts';
 /** A worker thread exited (crash, out of memory, killed) while it held a task. */
 export class WorkerCrashed extends Error {
   override name = 'WorkerCrashed';
-  constructor(readonly exitCode: number | undefined, cause?: unknown) {
-    super(`the computation stopped unexpectedly: its worker thread exited${exitCode === undefined ? '' : ` with code ${exitCode}`}`, { cause });
+  constructor(
+    readonly exitCode: number | undefined,
+    cause?: unknown,
+  ) {
+    super(
+      `the computation stopped unexpectedly: its worker thread exited${exitCode === undefined ? '' : ` with code ${exitCode}`}`,
+      { cause },
+    );
   }
 }
 
@@ -20,7 +26,11 @@ export class PoolClosed extends Error {
 /** An unexpected failure inside a worker: a fault of the code, not of the input. */
 export class WorkerFailure extends Error {
   override name = 'WorkerFailure';
-  constructor(readonly errorName: string, message: string, readonly workerStack?: string) {
+  constructor(
+    readonly errorName: string,
+    message: string,
+    readonly workerStack?: string,
+  ) {
     super(`${errorName}: ${message}`);
   }
 }
@@ -30,7 +40,8 @@ export function serialiseError(error: unknown): SerialisedError {
   if (!(error instanceof Error)) return { name: 'Error', message: String(error), domain: false };
   const base = { name: error.name, message: error.message, domain: error instanceof TremoraError };
   if (error instanceof InvalidInput) return { ...base, issues: error.issues };
-  if (error instanceof StudyTooLarge) return { ...base, size: error.size, budget: error.budget, detail: error.detail };
+  if (error instanceof StudyTooLarge)
+    return { ...base, size: error.size, budget: error.budget, detail: error.detail };
   if (error instanceof Cancelled) return { ...base, shareDone: error.shareDone };
   return base.domain ? base : { ...base, ...(error.stack ? { stack: error.stack } : {}) };
 }

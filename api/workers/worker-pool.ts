@@ -28,7 +28,10 @@ function startThread(moduleUrl: URL, name: string): Worker {
 }
 
 /** The worker module beside this one: run-worker.ts from source, run-worker.js once compiled. */
-const RUN_WORKER_URL = new URL(`./run-worker${import.meta.url.endsWith('.ts') ? '.ts' : '.js'}`, import.meta.url);
+const RUN_WORKER_URL = new URL(
+  `./run-worker${import.meta.url.endsWith('.ts') ? '.ts' : '.js'}`,
+  import.meta.url,
+);
 
 export interface TaskEvents {
   /** The worker took the task (ISO time). */
@@ -107,16 +110,21 @@ export class WorkerPool {
 
   constructor(options: WorkerPoolOptions = {}) {
     this.size = options.size ?? defaultPoolSize();
-    if (!Number.isInteger(this.size) || this.size < 1) throw new RangeError(`expected a pool size of at least 1 thread, got ${this.size}`);
+    if (!Number.isInteger(this.size) || this.size < 1)
+      throw new RangeError(`expected a pool size of at least 1 thread, got ${this.size}`);
     this.#workerUrl = options.workerUrl ?? RUN_WORKER_URL;
     this.#cancelGraceMs = options.cancelGraceMs ?? DEFAULT_CANCEL_GRACE_MS;
     this.#name = options.name ?? 'tremora-worker';
-    this.#log = options.log ?? ((message, error) => console.error(`[${this.#name}] ${message}`, error ?? ''));
+    this.#log =
+      options.log ?? ((message, error) => console.error(`[${this.#name}] ${message}`, error ?? ''));
     for (let i = 0; i < this.size; i++) this.#spawn();
   }
 
   /** Queues a task; its result resolves with the worker's output or rejects with its error. */
-  run<K extends TaskKind>(task: Extract<WorkerTask, { kind: K }>, events: TaskEvents = {}): TaskHandle<TaskOutputs[K]> {
+  run<K extends TaskKind>(
+    task: Extract<WorkerTask, { kind: K }>,
+    events: TaskEvents = {},
+  ): TaskHandle<TaskOutputs[K]> {
     let job!: Job;
     const result = new Promise<TaskOutputs[K]>((resolve, reject) => {
       job = {
@@ -218,7 +226,8 @@ export class WorkerPool {
     if (slot.ready) this.#spawn();
     else this.#startFailure = slot.lastError;
     if (this.#slots.length === 0) {
-      for (const queued of this.#queue.splice(0)) queued.reject(new WorkerCrashed(undefined, this.#startFailure));
+      for (const queued of this.#queue.splice(0))
+        queued.reject(new WorkerCrashed(undefined, this.#startFailure));
     } else {
       this.#dispatch();
     }

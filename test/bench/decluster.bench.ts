@@ -14,7 +14,15 @@ import { loadLine, machineLine } from './hazard-cases.ts';
  *
  *   npm run bench -- decluster
  */
-const BOX: [number, number][][] = [[[-150, -50], [-140, -50], [-140, -40], [-150, -40], [-150, -50]]];
+const BOX: [number, number][][] = [
+  [
+    [-150, -50],
+    [-140, -50],
+    [-140, -40],
+    [-150, -40],
+    [-150, -50],
+  ],
+];
 const seconds = (ms: number): string => `${(ms / 1000).toFixed(2)} s`;
 
 console.log(`Tremora declustering benchmark, ${new Date().toISOString().slice(0, 10)}`);

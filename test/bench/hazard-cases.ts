@@ -13,7 +13,11 @@ import { frameForStudy } from '../../api/engine/geometry/projection.ts';
 export const RATE_FLOOR = 1e-12;
 
 /** The largest relative difference between two lists of numbers (absolute below `floor`). */
-export function largestDifference(fast: readonly (number | null)[], reference: readonly (number | null)[], floor = RATE_FLOOR): number {
+export function largestDifference(
+  fast: readonly (number | null)[],
+  reference: readonly (number | null)[],
+  floor = RATE_FLOOR,
+): number {
   let worst = 0;
   reference.forEach((r, i) => {
     const f = fast[i];
@@ -33,18 +37,33 @@ export function screeningDifference(fast: ScreeningOutput, reference: ScreeningO
     const f = fast.communities[c]!;
     for (const [key, curve] of Object.entries(r.curves)) {
       worst = Math.max(worst, largestDifference(f.curves[key]!.annualRate, curve.annualRate));
-      curve.branches?.forEach((b, i) => (worst = Math.max(worst, largestDifference(f.curves[key]!.branches![i]!.annualRate, b.annualRate))));
+      curve.branches?.forEach(
+        (b, i) =>
+          (worst = Math.max(
+            worst,
+            largestDifference(f.curves[key]!.branches![i]!.annualRate, b.annualRate),
+          )),
+      );
     }
     for (const [years, levels] of Object.entries(r.atReturnPeriod)) {
       const keys = Object.keys(levels);
-      worst = Math.max(worst, largestDifference(keys.map((k) => f.atReturnPeriod[years]![k] ?? null), keys.map((k) => levels[k] ?? null), 1e-9));
+      worst = Math.max(
+        worst,
+        largestDifference(
+          keys.map((k) => f.atReturnPeriod[years]![k] ?? null),
+          keys.map((k) => levels[k] ?? null),
+          1e-9,
+        ),
+      );
     }
   });
   return worst;
 }
 
 /** Peak resident memory, sampled while `work` runs (process.memoryUsage: the whole process, worker threads included). */
-export async function withPeakRss<T>(work: () => Promise<T>): Promise<{ value: T; peakRssMb: number }> {
+export async function withPeakRss<T>(
+  work: () => Promise<T>,
+): Promise<{ value: T; peakRssMb: number }> {
   let peak = process.memoryUsage().rss;
   const timer = setInterval(() => (peak = Math.max(peak, process.memoryUsage().rss)), 25);
   try {
@@ -61,7 +80,10 @@ export function machineLine(): string {
   return `${cpu?.model ?? 'unknown CPU'} (${arch()}), ${availableParallelism()} cores, ${Math.round(totalmem() / 2 ** 30)} GB, Node ${process.version}`;
 }
 
-export const loadLine = (): string => `load average ${loadavg().map((l) => l.toFixed(2)).join(' / ')} (1 / 5 / 15 min)`;
+export const loadLine = (): string =>
+  `load average ${loadavg()
+    .map((l) => l.toFixed(2))
+    .join(' / ')} (1 / 5 / 15 min)`;
 
 /** Vs30 values the invented communities cycle through, m/s: rock to soft soil. */
 const VS30_CYCLE = [760, 450, 300, 620, 240, 900, 360, 520];
@@ -73,13 +95,26 @@ const VS30_CYCLE = [760, 450, 300, 620, 240, 900, 360, 520];
 export function latticeCommunities(study: Study, count: number, prefix: string): Community[] {
   const frame = frameForStudy(study);
   const points = study.communities.map((c) => frame.toLocal([c.lon, c.lat]));
-  const x0 = Math.min(...points.map((p) => p.x)), x1 = Math.max(...points.map((p) => p.x));
-  const y0 = Math.min(...points.map((p) => p.y)), y1 = Math.max(...points.map((p) => p.y));
+  const x0 = Math.min(...points.map((p) => p.x)),
+    x1 = Math.max(...points.map((p) => p.x));
+  const y0 = Math.min(...points.map((p) => p.y)),
+    y1 = Math.max(...points.map((p) => p.y));
   const columns = Math.ceil(Math.sqrt(count));
   const rows = Math.ceil(count / columns);
   return Array.from({ length: count }, (_, i) => {
-    const [lon, lat] = frame.toLonLat({ x: x0 + ((i % columns) + 0.5) * ((x1 - x0) / columns), y: y0 + (Math.floor(i / columns) + 0.5) * ((y1 - y0) / rows) });
-    return { id: `${prefix}-${i + 1}`, name: `${prefix} ${i + 1}`, lon, lat, vs30: VS30_CYCLE[i % VS30_CYCLE.length]!, vs30Basis: 'measured', coastal: false };
+    const [lon, lat] = frame.toLonLat({
+      x: x0 + ((i % columns) + 0.5) * ((x1 - x0) / columns),
+      y: y0 + (Math.floor(i / columns) + 0.5) * ((y1 - y0) / rows),
+    });
+    return {
+      id: `${prefix}-${i + 1}`,
+      name: `${prefix} ${i + 1}`,
+      lon,
+      lat,
+      vs30: VS30_CYCLE[i % VS30_CYCLE.length]!,
+      vs30Basis: 'measured',
+      coastal: false,
+    };
   });
 }
 
@@ -92,7 +127,8 @@ export function syntheticStudy(): Study {
   const origin = { lon: -140, lat: -50 };
   const kmPerDegLat = 111.2;
   const kmPerDegLon = kmPerDegLat * Math.cos((origin.lat * Math.PI) / 180);
-  const at = (xKm: number, yKm: number) => [origin.lon + xKm / kmPerDegLon, origin.lat + yKm / kmPerDegLat] as const;
+  const at = (xKm: number, yKm: number) =>
+    [origin.lon + xKm / kmPerDegLon, origin.lat + yKm / kmPerDegLat] as const;
   const sources = Array.from({ length: 200 }, (_, i) => {
     const [lon, lat] = at(((i * 37) % 200) * 0.8 - 80, ((i * 53) % 200) * 0.8 - 80);
     return {
@@ -102,14 +138,26 @@ export function syntheticStudy(): Study {
       setting: 'crustal' as const,
       mechanism: (['strike-slip', 'reverse', 'normal'] as const)[i % 3]!,
       rakeDeg: [0, 90, -90][i % 3]!,
-      recurrence: { type: 'fixed' as const, magnitude: 5 + (i % 26) * 0.1, rate: 10 ** (-2 - (i % 21) * 0.1) },
+      recurrence: {
+        type: 'fixed' as const,
+        magnitude: 5 + (i % 26) * 0.1,
+        rate: 10 ** (-2 - (i % 21) * 0.1),
+      },
       location: [lon, lat] as const,
       depthKm: 5 + (i % 11),
     };
   });
   const communities: Community[] = Array.from({ length: 1000 }, (_, i) => {
     const [lon, lat] = at((i % 40) * 4 - 78, Math.floor(i / 40) * 6.4 - 77);
-    return { id: `site-${i + 1}`, name: `Site ${i + 1}`, lon, lat, vs30: VS30_CYCLE[i % VS30_CYCLE.length]!, vs30Basis: 'measured', coastal: false };
+    return {
+      id: `site-${i + 1}`,
+      name: `Site ${i + 1}`,
+      lon,
+      lat,
+      vs30: VS30_CYCLE[i % VS30_CYCLE.length]!,
+      vs30Basis: 'measured',
+      coastal: false,
+    };
   });
   return {
     name: 'Synthetic points (invented)',

@@ -15,9 +15,21 @@ import { createFastHazard, fastSiteHazard } from '../../api/engine/hazard/fast-s
 import { readStudyFile } from '../../api/study/read-study-file.ts';
 import { referenceScreening } from '../helpers/reference-hazard/reference-screening.ts';
 import { siteHazard } from '../helpers/reference-hazard/site-hazard.ts';
-import { screenStudyOnPool, screeningOutput, type ScreeningText } from '../../api/workers/parallel-screen.ts';
+import {
+  screenStudyOnPool,
+  screeningOutput,
+  type ScreeningText,
+} from '../../api/workers/parallel-screen.ts';
 import { WorkerPool } from '../../api/workers/worker-pool.ts';
-import { largestDifference, latticeCommunities, loadLine, machineLine, screeningDifference, syntheticStudy, withPeakRss } from './hazard-cases.ts';
+import {
+  largestDifference,
+  latticeCommunities,
+  loadLine,
+  machineLine,
+  screeningDifference,
+  syntheticStudy,
+  withPeakRss,
+} from './hazard-cases.ts';
 
 /**
  * The performance benchmark of issue 7: the demo study; 100 communities with the demo's
@@ -44,19 +56,26 @@ console.log(`Tremora hazard benchmark, ${new Date().toISOString().slice(0, 10)}`
 console.log(`machine: ${machineLine()}`);
 console.log(`${loadLine()} at the start (other work on the machine slows every figure)`);
 
-const loaded = await readStudyFile(new URL('../../data-demo/demo.study.json', import.meta.url).pathname, modelCatalog);
+const loaded = await readStudyFile(
+  new URL('../../data-demo/demo.study.json', import.meta.url).pathname,
+  modelCatalog,
+);
 if (!loaded.ok) throw new Error('the demo study does not validate');
 const demo = loaded.study;
 
 /** Exceedance terms of a study's screening at its communities: pairs within the cut-off × branches × levels. */
-function exceedanceTerms(study: Study, sites: readonly { x: number; y: number }[]): { terms: number; ruptures: number } {
+function exceedanceTerms(
+  study: Study,
+  sites: readonly { x: number; y: number }[],
+): { terms: number; ruptures: number } {
   const { ruptures } = discretiseStudy(study);
   const setup = screeningSetup(study, modelCatalog);
   const levels = setup.measures.all.reduce((n, m) => n + m.levels.length, 0);
   let terms = 0;
   for (const site of sites) {
     for (const r of ruptures) {
-      if (ruptureDistances(r.surface, site).rjbKm <= study.settings.maxDistanceKm) terms += (setup.branches[r.context.setting]?.length ?? 0) * levels;
+      if (ruptureDistances(r.surface, site).rjbKm <= study.settings.maxDistanceKm)
+        terms += (setup.branches[r.context.setting]?.length ?? 0) * levels;
     }
   }
   return { terms, ruptures: ruptures.length };
@@ -70,19 +89,30 @@ const warm = performance.now();
 // One community per task, a few per thread, so that every thread (not only the first free one)
 // has loaded its code and run the engine once before anything is timed, as in a service that has
 // screened before.
-await screenStudyOnPool(pool, { ...demo, communities: latticeCommunities(demo, 4 * THREADS, 'Warm-up village') }, { chunkSize: 1 }).result;
-console.log(`\nthreads: ${THREADS} worker threads (one per core; the main thread only hands out work); started and warmed in ${seconds(performance.now() - warm)}`);
+await screenStudyOnPool(
+  pool,
+  { ...demo, communities: latticeCommunities(demo, 4 * THREADS, 'Warm-up village') },
+  { chunkSize: 1 },
+).result;
+console.log(
+  `\nthreads: ${THREADS} worker threads (one per core; the main thread only hands out work); started and warmed in ${seconds(performance.now() - warm)}`,
+);
 
 async function screeningCase(label: string, study: Study, referenceNote: string): Promise<void> {
   const frame = frameForStudy(study);
-  const { terms, ruptures } = exceedanceTerms(study, study.communities.map((c) => frame.toLocal([c.lon, c.lat])));
+  const { terms, ruptures } = exceedanceTerms(
+    study,
+    study.communities.map((c) => frame.toLocal([c.lon, c.lat])),
+  );
   // The first run, then RUNS more: a service screens many studies, so the figures are the
   // median run's (the first is printed beside it: it still pays for code the warm-up left cold).
   const runs: { wallMs: number; cpuMs: number; peakRssMb: number; text: ScreeningText }[] = [];
   for (let i = 0; i <= RUNS; i++) {
     const cpu = process.cpuUsage();
     const start = performance.now();
-    const { value: text, peakRssMb } = await withPeakRss(() => screenStudyOnPool(pool, study).result);
+    const { value: text, peakRssMb } = await withPeakRss(
+      () => screenStudyOnPool(pool, study).result,
+    );
     const wallMs = performance.now() - start;
     const used = process.cpuUsage(cpu);
     runs.push({ wallMs, cpuMs: (used.user + used.system) / 1000, peakRssMb, text });
@@ -96,28 +126,56 @@ async function screeningCase(label: string, study: Study, referenceNote: string)
   const reference = referenceScreening(study);
   const refMs = performance.now() - refStart;
   const sites = study.communities.length;
-  console.log(`\n${label}: ${ruptures} ruptures × ${sites} sites, ${study.settings.measures.length} measures`);
-  console.log(`  wall time          ${seconds(wallMs)} (CPU ${seconds(median.cpuMs)}, all threads), the median of ${RUNS} runs after the first, which took ${seconds(first.wallMs)}`);
+  console.log(
+    `\n${label}: ${ruptures} ruptures × ${sites} sites, ${study.settings.measures.length} measures`,
+  );
+  console.log(
+    `  wall time          ${seconds(wallMs)} (CPU ${seconds(median.cpuMs)}, all threads), the median of ${RUNS} runs after the first, which took ${seconds(first.wallMs)}`,
+  );
   console.log(`  ruptures × sites   ${rate(ruptures * sites, wallMs)}`);
   console.log(`  exceedance terms   ${rate(terms, wallMs)} (${terms.toExponential(2)} terms)`);
   console.log(`  peak RSS           ${peakRssMb.toFixed(0)} MB`);
   console.log(`  worker threads     ${THREADS}`);
-  console.log(`  fast vs reference  largest relative difference ${screeningDifference(fast, reference).toExponential(2)} (${referenceNote}; reference path ${seconds(refMs)} in this thread)`);
+  console.log(
+    `  fast vs reference  largest relative difference ${screeningDifference(fast, reference).toExponential(2)} (${referenceNote}; reference path ${seconds(refMs)} in this thread)`,
+  );
 }
 
-await screeningCase('demo study (all villages, all measures)', demo, 'every rate of every curve and branch, every return-period level');
-await screeningCase('100 communities × the demo sources', { ...demo, communities: latticeCommunities(demo, 100, 'Bench village') }, 'every rate, every level');
+await screeningCase(
+  'demo study (all villages, all measures)',
+  demo,
+  'every rate of every curve and branch, every return-period level',
+);
+await screeningCase(
+  '100 communities × the demo sources',
+  { ...demo, communities: latticeCommunities(demo, 100, 'Bench village') },
+  'every rate, every level',
+);
 
 // The synthetic case: its reference runs on every site (200 ruptures each is quick).
 const synthetic = syntheticStudy();
-await screeningCase('synthetic: 200 point sources × 1,000 sites × 25 levels, BSSA14', synthetic, 'every site');
+await screeningCase(
+  'synthetic: 200 point sources × 1,000 sites × 25 levels, BSSA14',
+  synthetic,
+  'every site',
+);
 {
   // The sum alone, without the screening's per-community results (intensity, deaggregation, result objects): the
   // 25-level curves of the 1,000 sites on the fast path, in this thread, after one warm-up pass.
   const plan = planScreening(synthetic, { models: modelCatalog });
-  const fast = createFastHazard({ table: plan.table!, branches: plan.branches, measures: plan.measures.all, truncationSigma: 3, maxDistanceKm: 300, branchCurves: false });
+  const fast = createFastHazard({
+    table: plan.table!,
+    branches: plan.branches,
+    measures: plan.measures.all,
+    truncationSigma: 3,
+    maxDistanceKm: 300,
+    branchCurves: false,
+  });
   const frame = plan.frame;
-  const sites = synthetic.communities.map((c) => ({ point: frame.toLocal([c.lon, c.lat]), site: { vs30: c.vs30, vs30Measured: true } }));
+  const sites = synthetic.communities.map((c) => ({
+    point: frame.toLocal([c.lon, c.lat]),
+    site: { vs30: c.vs30, vs30Measured: true },
+  }));
   for (const site of sites) fastSiteHazard(fast, site);
   const passes: number[] = [];
   for (let pass = 0; pass < RUNS; pass++) {
@@ -126,13 +184,25 @@ await screeningCase('synthetic: 200 point sources × 1,000 sites × 25 levels, B
     passes.push(performance.now() - start);
   }
   const ms = passes.sort((a, b) => a - b)[RUNS >> 1]!;
-  const { terms } = exceedanceTerms(synthetic, sites.map((s) => s.point));
-  console.log(`  the sum alone      ${rate(terms, ms)} in one thread (${seconds(ms)} for the curves of the 1,000 sites, the median of ${RUNS} passes after a warm-up, no results assembly; twice that on two threads at best)`);
+  const { terms } = exceedanceTerms(
+    synthetic,
+    sites.map((s) => s.point),
+  );
+  console.log(
+    `  the sum alone      ${rate(terms, ms)} in one thread (${seconds(ms)} for the curves of the 1,000 sites, the median of ${RUNS} passes after a warm-up, no results assembly; twice that on two threads at best)`,
+  );
 }
 
 /** Runs one map of the demo in a process of its own (map-run.ts) and reads its figures. */
 function mapRun(points: number, sampleEvery: number, stopAfter = Infinity): Record<string, any> {
-  const args = ['--import', 'tsx', new URL('./map-run.ts', import.meta.url).pathname, String(points), String(sampleEvery), ...(Number.isFinite(stopAfter) ? [String(stopAfter)] : [])];
+  const args = [
+    '--import',
+    'tsx',
+    new URL('./map-run.ts', import.meta.url).pathname,
+    String(points),
+    String(sampleEvery),
+    ...(Number.isFinite(stopAfter) ? [String(stopAfter)] : []),
+  ];
   const run = spawnSync(process.execPath, args, { encoding: 'utf8', maxBuffer: 64 * 2 ** 20 });
   if (run.status !== 0) throw new Error(`map-run failed: ${run.stderr}`);
   return JSON.parse(run.stdout.trim().split('\n').at(-1)!);
@@ -143,7 +213,11 @@ function referenceAtPoints(spacingKm: number, indices: readonly number[]): (numb
   const frame = frameForStudy(demo);
   const grid = mapGrid(demo, frame, { spacingKm, maxPoints: Infinity });
   const { ruptures } = discretiseStudy(demo);
-  const measure = { key: 'PGA', measure: parseMeasure('PGA'), levels: levelsFor(demo.settings.levels, 'PGA', parseMeasure('PGA')) };
+  const measure = {
+    key: 'PGA',
+    measure: parseMeasure('PGA'),
+    levels: levelsFor(demo.settings.levels, 'PGA', parseMeasure('PGA')),
+  };
   const branches = resolveBranches(demo, { all: [measure] }, modelCatalog, []);
   return indices.map((index) => {
     const site = gridPoint(grid, index);
@@ -165,28 +239,52 @@ const SAMPLE_EVERY = 500;
 const map10k = mapRun(10_000, SAMPLE_EVERY);
 const sampled: { index: number; value: number | null }[] = map10k.samples;
 const refStart = performance.now();
-const referenceValues = referenceAtPoints(map10k.spacingKm, sampled.map((s) => s.index));
+const referenceValues = referenceAtPoints(
+  map10k.spacingKm,
+  sampled.map((s) => s.index),
+);
 const refMs = performance.now() - refStart;
 const demoRuptures = discretiseStudy(demo).ruptures.length;
 const mapTerms = (() => {
   // Pairs within the cut-off, from the sampled points, scaled to the grid (the map evaluates one level per pass; this counts the 25 levels of the curve it reads).
   const frame = frameForStudy(demo);
   const grid = mapGrid(demo, frame, { spacingKm: map10k.spacingKm, maxPoints: Infinity });
-  const sample = exceedanceTerms({ ...demo, settings: { ...demo.settings, measures: ['PGA'] } }, sampled.map((s) => gridPoint(grid, s.index)));
+  const sample = exceedanceTerms(
+    { ...demo, settings: { ...demo.settings, measures: ['PGA'] } },
+    sampled.map((s) => gridPoint(grid, s.index)),
+  );
   return (sample.terms / sampled.length) * map10k.points;
 })();
-console.log(`\ngrid map of the demo region, 475-year PGA at Vs30 760: ${map10k.points} points every ${map10k.spacingKm.toFixed(3)} km × ${demoRuptures} ruptures`);
-console.log(`  wall time          ${seconds(map10k.wallMs)} (CPU ${seconds(map10k.cpuMs)}, all threads)`);
+console.log(
+  `\ngrid map of the demo region, 475-year PGA at Vs30 760: ${map10k.points} points every ${map10k.spacingKm.toFixed(3)} km × ${demoRuptures} ruptures`,
+);
+console.log(
+  `  wall time          ${seconds(map10k.wallMs)} (CPU ${seconds(map10k.cpuMs)}, all threads)`,
+);
 console.log(`  ruptures × sites   ${rate(demoRuptures * map10k.points, map10k.wallMs)}`);
-console.log(`  exceedance terms   ${rate(mapTerms, map10k.wallMs)} (${mapTerms.toExponential(2)} terms of the 25-level curves, counted on the sampled points and scaled)`);
+console.log(
+  `  exceedance terms   ${rate(mapTerms, map10k.wallMs)} (${mapTerms.toExponential(2)} terms of the 25-level curves, counted on the sampled points and scaled)`,
+);
 console.log(`  peak RSS           ${map10k.peakRssMb.toFixed(0)} MB`);
 console.log(`  worker threads     ${map10k.threads}`);
-console.log(`  fast vs reference  largest relative difference ${largestDifference(sampled.map((s) => s.value), referenceValues, 1e-9).toExponential(2)} (475-year PGA at every ${SAMPLE_EVERY}th point: ${sampled.length} points; reference path ${seconds(refMs)})`);
+console.log(
+  `  fast vs reference  largest relative difference ${largestDifference(
+    sampled.map((s) => s.value),
+    referenceValues,
+    1e-9,
+  ).toExponential(
+    2,
+  )} (475-year PGA at every ${SAMPLE_EVERY}th point: ${sampled.length} points; reference path ${seconds(refMs)})`,
+);
 
 const map100k = mapRun(100_000, 0, STOP_100K);
-console.log(`\nmemory as the map grows (each map in a process of its own, GeoJSON streamed to a file):`);
+console.log(
+  `\nmemory as the map grows (each map in a process of its own, GeoJSON streamed to a file):`,
+);
 console.log(`  ${map10k.points}-point map   peak RSS ${map10k.peakRssMb.toFixed(0)} MB`);
-console.log(`  ${map100k.points}-point map  peak RSS ${map100k.peakRssMb.toFixed(0)} MB${map100k.finished ? '' : ` (stopped after ${map100k.computed} points; TREMORA_BENCH_FULL_MAP=1 runs it to the end)`}, wall time ${seconds(map100k.wallMs)}`);
+console.log(
+  `  ${map100k.points}-point map  peak RSS ${map100k.peakRssMb.toFixed(0)} MB${map100k.finished ? '' : ` (stopped after ${map100k.computed} points; TREMORA_BENCH_FULL_MAP=1 runs it to the end)`}, wall time ${seconds(map100k.wallMs)}`,
+);
 console.log(`  ratio              ${(map100k.peakRssMb / map10k.peakRssMb).toFixed(2)}`);
 console.log(`\n${loadLine()} at the end`);
 await pool.close();

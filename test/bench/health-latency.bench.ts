@@ -9,12 +9,22 @@ import { startService, tempDir, type ServiceProcess } from '../service/helpers/s
  */
 
 interface AutocannonResult {
-  readonly latency: { readonly p50: number; readonly p97_5: number; readonly p99: number; readonly max: number; readonly average: number };
+  readonly latency: {
+    readonly p50: number;
+    readonly p97_5: number;
+    readonly p99: number;
+    readonly max: number;
+    readonly average: number;
+  };
   readonly requests: { readonly average: number; readonly total: number };
   readonly non2xx: number;
   readonly errors: number;
 }
-type Autocannon = (options: { url: string; connections: number; duration: number }) => Promise<AutocannonResult>;
+type Autocannon = (options: {
+  url: string;
+  connections: number;
+  duration: number;
+}) => Promise<AutocannonResult>;
 // autocannon ships no type declarations; this is the part of its API used here.
 const autocannon = createRequire(import.meta.url)('autocannon') as Autocannon;
 
@@ -45,10 +55,15 @@ try {
   // Warm-up, not reported: the JIT and the worker threads' start-up would colour the idle figures.
   await autocannon({ url, connections: CONNECTIONS, duration: 1 });
   report('idle', await autocannon({ url, connections: CONNECTIONS, duration: DURATION_S }));
-  const started = await service.fetch(`/api/studies/${await saveHeavyStudy(service)}/runs`, { method: 'POST' });
+  const started = await service.fetch(`/api/studies/${await saveHeavyStudy(service)}/runs`, {
+    method: 'POST',
+  });
   const run = (await started.json()) as { id: string };
   await waitUntilRunning(service, run.id);
-  report('heavy run computing', await autocannon({ url, connections: CONNECTIONS, duration: DURATION_S }));
+  report(
+    'heavy run computing',
+    await autocannon({ url, connections: CONNECTIONS, duration: DURATION_S }),
+  );
   await service.fetch(`/api/runs/${run.id}/cancel`, { method: 'POST' });
 } finally {
   await service.stop();

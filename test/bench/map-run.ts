@@ -4,7 +4,12 @@ import { availableParallelism, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { frameForStudy } from '../../api/engine/geometry/projection.ts';
 import { mapGrid } from '../../api/engine/map/map-grid.ts';
-import { mapGeoJsonFeatures, mapGeoJsonHead, mapGeoJsonTail, type MapDescription } from '../../api/engine/map/map-geojson.ts';
+import {
+  mapGeoJsonFeatures,
+  mapGeoJsonHead,
+  mapGeoJsonTail,
+  type MapDescription,
+} from '../../api/engine/map/map-geojson.ts';
 import { modelCatalog } from '../../api/engine/motion/registry.ts';
 import { readStudyFile } from '../../api/study/read-study-file.ts';
 import { hazardMapOnPool } from '../../api/workers/parallel-map.ts';
@@ -23,11 +28,15 @@ import { withPeakRss } from './hazard-cases.ts';
  */
 const [target = 10_000, sampleEvery = 0, stopAfter = Infinity] = process.argv.slice(2).map(Number);
 
-const loaded = await readStudyFile(new URL('../../data-demo/demo.study.json', import.meta.url).pathname, modelCatalog);
+const loaded = await readStudyFile(
+  new URL('../../data-demo/demo.study.json', import.meta.url).pathname,
+  modelCatalog,
+);
 if (!loaded.ok) throw new Error('the demo study does not validate');
 const study = loaded.study;
 const frame = frameForStudy(study);
-const count = (spacingKm: number): number => mapGrid(study, frame, { spacingKm, maxPoints: Infinity }).count;
+const count = (spacingKm: number): number =>
+  mapGrid(study, frame, { spacingKm, maxPoints: Infinity }).count;
 // The widest spacing that still gives `target` points: count falls as the spacing grows.
 let lo = 0.05;
 let hi = 100;
@@ -50,22 +59,29 @@ const cpuStart = process.cpuUsage();
 const started = performance.now();
 let stopped = false;
 const { value: summary, peakRssMb } = await withPeakRss(async () => {
-  const handle = hazardMapOnPool(pool, study, { measure: 'PGA', quantity: { kind: 'return-period', returnPeriodYears: 475 }, spacingKm }, {
-    onStart: (d) => {
-      description = d;
-      file.write(mapGeoJsonHead(d));
+  const handle = hazardMapOnPool(
+    pool,
+    study,
+    { measure: 'PGA', quantity: { kind: 'return-period', returnPeriodYears: 475 }, spacingKm },
+    {
+      onStart: (d) => {
+        description = d;
+        file.write(mapGeoJsonHead(d));
+      },
+      onPoints: (points) => {
+        file.write(mapGeoJsonFeatures(description!, points, first));
+        first = false;
+        for (const p of points)
+          if (sampleEvery > 0 && p.index % sampleEvery === 0)
+            samples.push({ index: p.index, value: p.value, status: p.status });
+        done += points.length;
+        if (done >= stopAfter && !stopped) {
+          stopped = true;
+          handle.cancel();
+        }
+      },
     },
-    onPoints: (points) => {
-      file.write(mapGeoJsonFeatures(description!, points, first));
-      first = false;
-      for (const p of points) if (sampleEvery > 0 && p.index % sampleEvery === 0) samples.push({ index: p.index, value: p.value, status: p.status });
-      done += points.length;
-      if (done >= stopAfter && !stopped) {
-        stopped = true;
-        handle.cancel();
-      }
-    },
-  });
+  );
   try {
     return await handle.result;
   } catch (error) {

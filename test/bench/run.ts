@@ -19,7 +19,10 @@ const selected = only.length === 0 ? files : files.filter((f) => only.some((o) =
 let failed = 0;
 for (const file of selected) {
   console.log(`\n== ${file}`);
-  const result = spawnSync(process.execPath, ['--import', 'tsx', `${BENCH_DIR}${file}`], { cwd: ROOT, stdio: 'inherit' });
+  const result = spawnSync(process.execPath, ['--import', 'tsx', `${BENCH_DIR}${file}`], {
+    cwd: ROOT,
+    stdio: 'inherit',
+  });
   if (result.status !== 0) {
     failed++;
     console.error(`${file} failed (exit ${result.status ?? result.signal})`);

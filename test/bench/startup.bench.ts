@@ -21,18 +21,29 @@ interface Case {
 const CASES: readonly Case[] = [
   { label: 'node -e "" (Node alone)', args: ['-e', ''] },
   { label: 'tremora --help (compiled)', args: [join(REPO_ROOT, 'api/bin/tremora.js'), '--help'] },
-  { label: 'tremora screen --help (compiled)', args: [join(REPO_ROOT, 'api/bin/tremora.js'), 'screen', '--help'] },
-  { label: 'tsx api/cli.ts --help (source)', args: ['--import', 'tsx', join(REPO_ROOT, 'api/cli.ts'), '--help'] },
+  {
+    label: 'tremora screen --help (compiled)',
+    args: [join(REPO_ROOT, 'api/bin/tremora.js'), 'screen', '--help'],
+  },
+  {
+    label: 'tsx api/cli.ts --help (source)',
+    args: ['--import', 'tsx', join(REPO_ROOT, 'api/cli.ts'), '--help'],
+  },
 ];
 
 const median = (xs: readonly number[]): number => {
   const sorted = [...xs].sort((a, b) => a - b);
   const mid = sorted.length >> 1;
-  return sorted.length % 2 === 1 ? (sorted[mid] as number) : ((sorted[mid - 1] as number) + (sorted[mid] as number)) / 2;
+  return sorted.length % 2 === 1
+    ? (sorted[mid] as number)
+    : ((sorted[mid - 1] as number) + (sorted[mid] as number)) / 2;
 };
 
 if (!existsSync(join(REPO_ROOT, 'dist/api/cli.js'))) {
-  const built = spawnSync(process.execPath, ['api/bin/build.js'], { cwd: REPO_ROOT, stdio: 'inherit' });
+  const built = spawnSync(process.execPath, ['api/bin/build.js'], {
+    cwd: REPO_ROOT,
+    stdio: 'inherit',
+  });
   if (built.status !== 0) throw new Error('the build failed');
 }
 
@@ -50,5 +61,7 @@ for (const c of CASES) {
   }
   const s = median(wall);
   if (c === CASES[0]) nodeAloneS = s;
-  console.log(`  ${c.label.padEnd(36)} ${s.toFixed(3)} s${c === CASES[0] ? '' : `  (${(s - nodeAloneS).toFixed(3)} s over Node alone)`}`);
+  console.log(
+    `  ${c.label.padEnd(36)} ${s.toFixed(3)} s${c === CASES[0] ? '' : `  (${(s - nodeAloneS).toFixed(3)} s over Node alone)`}`,
+  );
 }

@@ -7,7 +7,14 @@
 import { fileURLToPath } from 'node:url';
 import { frameForStudy } from '../../api/engine/geometry/projection.ts';
 import { modelCatalog } from '../../api/engine/motion/registry.ts';
-import { fastMarching, interfaceSourceArea, longWaveGrid, solveGrids, startCells, tsunamiScreening } from '../../api/engine/tsunami/index.ts';
+import {
+  fastMarching,
+  interfaceSourceArea,
+  longWaveGrid,
+  solveGrids,
+  startCells,
+  tsunamiScreening,
+} from '../../api/engine/tsunami/index.ts';
 import { readStudyFile } from '../../api/study/read-study-file.ts';
 import { readTerrainFile } from '../../api/terrain/index.ts';
 
@@ -15,7 +22,8 @@ const DEMO = fileURLToPath(new URL('../../data-demo/demo.study.json', import.met
 const TERRAIN = fileURLToPath(new URL('../../data-demo/demo-terrain.asc', import.meta.url));
 const RUNS = 5;
 
-const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)] as number;
+const median = (values: number[]) =>
+  [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)] as number;
 function time(work: () => void): number {
   work();
   const ms: number[] = [];
@@ -46,8 +54,16 @@ const resampleMs = time(() => solveGrids(grid, frame));
 const marchMs = time(() => fastMarching(slowness, start));
 const wholeMs = time(() => tsunamiScreening(study, grid));
 
-console.log(`terrain ${grid.label}: ${grid.columns} × ${grid.rows} cells, read in ${readMs.toFixed(0)} ms`);
-console.log(`solve grid: ${grids.fine.columns} × ${grids.fine.rows} cells of ${grids.fine.spacingKm.toFixed(2)} km (and ${grids.coarse.columns} × ${grids.coarse.rows} of ${grids.coarse.spacingKm.toFixed(2)} km); ${start.length} start cells`);
+console.log(
+  `terrain ${grid.label}: ${grid.columns} × ${grid.rows} cells, read in ${readMs.toFixed(0)} ms`,
+);
+console.log(
+  `solve grid: ${grids.fine.columns} × ${grids.fine.rows} cells of ${grids.fine.spacingKm.toFixed(2)} km (and ${grids.coarse.columns} × ${grids.coarse.rows} of ${grids.coarse.spacingKm.toFixed(2)} km); ${start.length} start cells`,
+);
 console.log(`resampling both grids: ${resampleMs.toFixed(0)} ms (median of ${RUNS})`);
-console.log(`fast marching, fine grid: ${marchMs.toFixed(0)} ms (median of ${RUNS}), ${((grids.fine.columns * grids.fine.rows) / (marchMs / 1000)).toExponential(2)} cells/s`);
-console.log(`whole tsunami screening of the demo (both grids, one source, 6 coastal villages, high ground): ${wholeMs.toFixed(0)} ms (median of ${RUNS})`);
+console.log(
+  `fast marching, fine grid: ${marchMs.toFixed(0)} ms (median of ${RUNS}), ${((grids.fine.columns * grids.fine.rows) / (marchMs / 1000)).toExponential(2)} cells/s`,
+);
+console.log(
+  `whole tsunami screening of the demo (both grids, one source, 6 coastal villages, high ground): ${wholeMs.toFixed(0)} ms (median of ${RUNS})`,
+);

@@ -5,7 +5,14 @@ import { ACCESS_COOKIE, accessCookieValue } from '../../api/service/page-access.
 import { translator } from '../../web/text/translator.ts';
 import { demoStudyId, getRun, waitForStatus } from '../service/helpers/runs.ts';
 import { startService, tempDir, type ServiceProcess } from '../service/helpers/service-process.ts';
-import { ARTIFACTS, launchChromium, offlineContext, seriousAxeViolations, walkWithTab, type LaunchedBrowser } from './helpers/chromium.ts';
+import {
+  ARTIFACTS,
+  launchChromium,
+  offlineContext,
+  seriousAxeViolations,
+  walkWithTab,
+  type LaunchedBrowser,
+} from './helpers/chromium.ts';
 
 /**
  * A service on a shared office machine has TREMORA_TOKEN: in Chromium, a user who presses
@@ -24,7 +31,10 @@ let page: Page;
 let demoId: string;
 
 beforeAll(async () => {
-  service = await startService({ databasePath: join(dir.path, 'access.db'), env: { HOST: '127.0.0.1', TREMORA_TOKEN: TOKEN } });
+  service = await startService({
+    databasePath: join(dir.path, 'access.db'),
+    env: { HOST: '127.0.0.1', TREMORA_TOKEN: TOKEN },
+  });
   demoId = await demoStudyId(service);
   chromium = await launchChromium();
   ({ context, foreignRequests } = await offlineContext(chromium.browser, service.url));
@@ -58,7 +68,9 @@ describe('page forms on a service with a token', { timeout: 120_000 }, () => {
   test('a wrong token is refused on the page', async () => {
     await page.getByLabel(en.t('access.token')).fill('not-the-office-token-000');
     await page.getByRole('button', { name: en.t('access.enter') }).click();
-    await expect.poll(() => page.locator('#access-token-problem').textContent()).toBe(en.t('access.wrong'));
+    await expect
+      .poll(() => page.locator('#access-token-problem').textContent())
+      .toBe(en.t('access.wrong'));
     expect((await context.cookies()).map((c) => c.name)).not.toContain(ACCESS_COOKIE);
   });
 
@@ -67,7 +79,13 @@ describe('page forms on a service with a token', { timeout: 120_000 }, () => {
     await page.getByRole('button', { name: en.t('access.enter') }).click();
     await page.waitForURL(`${service.url}/studies/${demoId}`);
     const cookie = (await context.cookies()).find((c) => c.name === ACCESS_COOKIE);
-    expect(cookie).toMatchObject({ value: accessCookieValue(TOKEN), path: '/', httpOnly: true, sameSite: 'Strict', secure: false });
+    expect(cookie).toMatchObject({
+      value: accessCookieValue(TOKEN),
+      path: '/',
+      httpOnly: true,
+      sameSite: 'Strict',
+      secure: false,
+    });
     expect(cookie?.value).not.toContain(TOKEN);
   });
 

@@ -4,7 +4,13 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { startService, tempDir, type ServiceProcess } from '../service/helpers/service-process.ts';
 import { demoStudyId } from '../service/helpers/runs.ts';
 import { xlsxBytes } from '../study/community-files/fixtures.ts';
-import { ARTIFACTS, launchChromium, offlineContext, seriousAxeViolations, type LaunchedBrowser } from './helpers/chromium.ts';
+import {
+  ARTIFACTS,
+  launchChromium,
+  offlineContext,
+  seriousAxeViolations,
+  type LaunchedBrowser,
+} from './helpers/chromium.ts';
 
 /**
  * A village workbook into the demo study from the editor in Chromium, at desktop and phone
@@ -23,7 +29,8 @@ const WORKBOOK = xlsxBytes([
   ['Upper Terrace', -47.35, -150.7, 'C', null],
 ]);
 
-const document = async (): Promise<string> => (await service.fetch(`/api/studies/${demoId}/document`)).text();
+const document = async (): Promise<string> =>
+  (await service.fetch(`/api/studies/${demoId}/document`)).text();
 
 beforeAll(async () => {
   service = await startService({ databasePath: join(dir.path, 'import.db') });
@@ -44,33 +51,58 @@ for (const width of [1100, 390]) {
     let page: Page;
 
     beforeAll(async () => {
-      ({ context, foreignRequests: foreign } = await offlineContext(chromium.browser, service.url, { viewport: { width, height: 900 } }));
+      ({ context, foreignRequests: foreign } = await offlineContext(chromium.browser, service.url, {
+        viewport: { width, height: 900 },
+      }));
       page = await context.newPage();
     });
     afterAll(async () => {
       await context.close();
     });
 
-    test('unrecognised columns are picked from the file\'s own, then the villages are saved', async () => {
+    test("unrecognised columns are picked from the file's own, then the villages are saved", async () => {
       const before = await document();
       await page.goto(`${service.url}/studies/${demoId}/edit`);
-      await page.setInputFiles('#communities-file', { name: 'villages.xlsx', mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', buffer: Buffer.from(WORKBOOK) });
+      await page.setInputFiles('#communities-file', {
+        name: 'villages.xlsx',
+        mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
+        buffer: Buffer.from(WORKBOOK),
+      });
       await page.locator('form:has(#communities-file) button[type="submit"]').click();
       await page.waitForSelector('#pick-lat');
       expect(await document()).toBe(before);
-      expect(await page.locator('#pick-lat option').allTextContents()).toEqual(['(choose a column)', 'Village', 'Pos S', 'Pos W', 'Site class', 'Clinic']);
+      expect(await page.locator('#pick-lat option').allTextContents()).toEqual([
+        '(choose a column)',
+        'Village',
+        'Pos S',
+        'Pos W',
+        'Site class',
+        'Clinic',
+      ]);
       await page.selectOption('#pick-lat', 'Pos S');
       await page.selectOption('#pick-lon', 'Pos W');
       await page.locator('#pick-lat').scrollIntoViewIfNeeded();
-      await page.screenshot({ path: join(ARTIFACTS, `community-import-pick-${width}.png`), fullPage: false });
+      await page.screenshot({
+        path: join(ARTIFACTS, `community-import-pick-${width}.png`),
+        fullPage: false,
+      });
       const violations = await seriousAxeViolations(page);
       expect(violations, JSON.stringify(violations, null, 2)).toEqual([]);
       await page.locator('form.column-pick button[type="submit"]').click();
       await page.waitForURL(/\/edit\?saved=1(#|$)/);
-      const csv = JSON.parse(await (await service.fetch(`/api/studies/${demoId}`)).text()).communitiesCsv as string;
+      const csv = JSON.parse(await (await service.fetch(`/api/studies/${demoId}`)).text())
+        .communitiesCsv as string;
       // 47°18'S = -47.3 and 150°54'W = -150.9 (degrees + minutes/60).
-      expect(csv.split('\n').slice(0, 3)).toEqual(['id,name,lon,lat,vs30,siteClass,population,coastal,elevationM,Clinic', 'kelp-landing,Kelp Landing,-150.9,-47.3,,D,,false,,nurse visits monthly', 'upper-terrace,Upper Terrace,-150.7,-47.35,,C,,false,,']);
-      expect(await page.locator('tr[data-community]').evaluateAll((rows) => rows.map((r) => r.getAttribute('data-community')))).toEqual(['kelp-landing', 'upper-terrace']);
+      expect(csv.split('\n').slice(0, 3)).toEqual([
+        'id,name,lon,lat,vs30,siteClass,population,coastal,elevationM,Clinic',
+        'kelp-landing,Kelp Landing,-150.9,-47.3,,D,,false,,nurse visits monthly',
+        'upper-terrace,Upper Terrace,-150.7,-47.35,,C,,false,,',
+      ]);
+      expect(
+        await page
+          .locator('tr[data-community]')
+          .evaluateAll((rows) => rows.map((r) => r.getAttribute('data-community'))),
+      ).toEqual(['kelp-landing', 'upper-terrace']);
     });
 
     test('no request left the origin', () => {

@@ -4,7 +4,14 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { translator } from '../../web/text/translator.ts';
 import { startService, tempDir, type ServiceProcess } from '../service/helpers/service-process.ts';
 import { demoStudyId } from '../service/helpers/runs.ts';
-import { ARTIFACTS, launchChromium, offlineContext, seriousAxeViolations, walkWithTab, type LaunchedBrowser } from './helpers/chromium.ts';
+import {
+  ARTIFACTS,
+  launchChromium,
+  offlineContext,
+  seriousAxeViolations,
+  walkWithTab,
+  type LaunchedBrowser,
+} from './helpers/chromium.ts';
 
 /**
  * The study editor in Chromium, with and without script: uploads that do not validate show
@@ -23,13 +30,29 @@ const BROKEN_GEOJSON = JSON.stringify({
   features: [
     {
       type: 'Feature',
-      geometry: { type: 'LineString', coordinates: [[-150.2, -47.0], [-150.3, -47.3]] },
-      properties: { id: 'steep-fault', name: 'Steep fault', setting: 'crustal', mechanism: 'normal', dip: 120, upperDepthKm: 0, lowerDepthKm: 12, recurrence: { type: 'fixed', magnitude: 6.2, rate: 0.001 } },
+      geometry: {
+        type: 'LineString',
+        coordinates: [
+          [-150.2, -47.0],
+          [-150.3, -47.3],
+        ],
+      },
+      properties: {
+        id: 'steep-fault',
+        name: 'Steep fault',
+        setting: 'crustal',
+        mechanism: 'normal',
+        dip: 120,
+        upperDepthKm: 0,
+        lowerDepthKm: 12,
+        recurrence: { type: 'fixed', magnitude: 6.2, rate: 0.001 },
+      },
     },
   ],
 });
 
-const document = async (): Promise<string> => (await service.fetch(`/api/studies/${demoId}/document`)).text();
+const document = async (): Promise<string> =>
+  (await service.fetch(`/api/studies/${demoId}/document`)).text();
 
 beforeAll(async () => {
   service = await startService({ databasePath: join(dir.path, 'editor.db') });
@@ -44,70 +67,108 @@ afterAll(async () => {
 });
 
 for (const javaScriptEnabled of [true, false]) {
-  describe(`the editor ${javaScriptEnabled ? 'with' : 'without'} script`, { timeout: 120_000 }, () => {
-    let context: BrowserContext;
-    let foreign: string[];
-    let page: Page;
+  describe(
+    `the editor ${javaScriptEnabled ? 'with' : 'without'} script`,
+    { timeout: 120_000 },
+    () => {
+      let context: BrowserContext;
+      let foreign: string[];
+      let page: Page;
 
-    beforeAll(async () => {
-      ({ context, foreignRequests: foreign } = await offlineContext(chromium.browser, service.url, { javaScriptEnabled }));
-      page = await context.newPage();
-    });
-    afterAll(async () => {
-      await context.close();
-    });
+      beforeAll(async () => {
+        ({ context, foreignRequests: foreign } = await offlineContext(
+          chromium.browser,
+          service.url,
+          { javaScriptEnabled },
+        ));
+        page = await context.newPage();
+      });
+      afterAll(async () => {
+        await context.close();
+      });
 
-    test('a broken GeoJSON upload shows the message next to the upload and saves nothing', async () => {
-      const before = await document();
-      await page.goto(`${service.url}/studies/${demoId}/edit`);
-      await page.setInputFiles('#sources-file', { name: 'sources.geojson', mimeType: 'application/geo+json', buffer: Buffer.from(BROKEN_GEOJSON) });
-      await page.locator('form:has(#sources-file) button[type="submit"]').click();
-      await page.waitForSelector('#sources-problems');
-      // The message sits in the same field block as the upload, and the upload points to it.
-      const message = await page.locator('.field:has(#sources-file) #sources-problems').textContent();
-      expect(message).toBe('Feature 1 (steep-fault), dip: expected a number in (0, 90] degrees, got 120');
-      expect(await page.locator('#sources-file').getAttribute('aria-describedby')).toBe('sources-help sources-problems');
-      expect(await page.getByRole('alert').first().textContent()).toBe(en.t('editor.notSaved'));
-      expect(await document()).toBe(before);
-      if (javaScriptEnabled) {
-        await page.screenshot({ path: join(ARTIFACTS, 'editor-problem.png'), fullPage: true });
-        const violations = await seriousAxeViolations(page);
-        expect(violations, JSON.stringify(violations, null, 2)).toEqual([]);
-        expect((await walkWithTab(page)).missed).toEqual([]);
-      }
-    });
+      test('a broken GeoJSON upload shows the message next to the upload and saves nothing', async () => {
+        const before = await document();
+        await page.goto(`${service.url}/studies/${demoId}/edit`);
+        await page.setInputFiles('#sources-file', {
+          name: 'sources.geojson',
+          mimeType: 'application/geo+json',
+          buffer: Buffer.from(BROKEN_GEOJSON),
+        });
+        await page.locator('form:has(#sources-file) button[type="submit"]').click();
+        await page.waitForSelector('#sources-problems');
+        // The message sits in the same field block as the upload, and the upload points to it.
+        const message = await page
+          .locator('.field:has(#sources-file) #sources-problems')
+          .textContent();
+        expect(message).toBe(
+          'Feature 1 (steep-fault), dip: expected a number in (0, 90] degrees, got 120',
+        );
+        expect(await page.locator('#sources-file').getAttribute('aria-describedby')).toBe(
+          'sources-help sources-problems',
+        );
+        expect(await page.getByRole('alert').first().textContent()).toBe(en.t('editor.notSaved'));
+        expect(await document()).toBe(before);
+        if (javaScriptEnabled) {
+          await page.screenshot({ path: join(ARTIFACTS, 'editor-problem.png'), fullPage: true });
+          const violations = await seriousAxeViolations(page);
+          expect(violations, JSON.stringify(violations, null, 2)).toEqual([]);
+          expect((await walkWithTab(page)).missed).toEqual([]);
+        }
+      });
 
-    test('a communities CSV with a bad line names the line, shows it, and saves nothing', async () => {
-      const before = await document();
-      await page.goto(`${service.url}/studies/${demoId}/edit`);
-      const csv = 'id,name,lon,lat,vs30,population,coastal,elevationM\nnew-cove,New Cove,-150.9,-47.2,420,80,true,5\nhigh-farm,High Farm,-150.1,-47.25,420,eighty,false,300\n';
-      await page.setInputFiles('#communities-file', { name: 'villages.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
-      await page.locator('form:has(#communities-file) button[type="submit"]').click();
-      await page.waitForSelector('#communities-problems');
-      expect(await page.locator('.field:has(#communities-file) #communities-problems li').first().textContent()).toMatch(/^Line 3, population: /);
-      expect(await page.locator('table.csv-lines tr.line-bad').getAttribute('data-line')).toBe('3');
-      expect(await document()).toBe(before);
-    });
+      test('a communities CSV with a bad line names the line, shows it, and saves nothing', async () => {
+        const before = await document();
+        await page.goto(`${service.url}/studies/${demoId}/edit`);
+        const csv =
+          'id,name,lon,lat,vs30,population,coastal,elevationM\nnew-cove,New Cove,-150.9,-47.2,420,80,true,5\nhigh-farm,High Farm,-150.1,-47.25,420,eighty,false,300\n';
+        await page.setInputFiles('#communities-file', {
+          name: 'villages.csv',
+          mimeType: 'text/csv',
+          buffer: Buffer.from(csv),
+        });
+        await page.locator('form:has(#communities-file) button[type="submit"]').click();
+        await page.waitForSelector('#communities-problems');
+        expect(
+          await page
+            .locator('.field:has(#communities-file) #communities-problems li')
+            .first()
+            .textContent(),
+        ).toMatch(/^Line 3, population: /);
+        expect(await page.locator('table.csv-lines tr.line-bad').getAttribute('data-line')).toBe(
+          '3',
+        );
+        expect(await document()).toBe(before);
+      });
 
-    test('a community form shows the problem under its field; once fixed, it is saved', async () => {
-      await page.goto(`${service.url}/studies/${demoId}/edit/communities/drumarrow`);
-      await page.fill('#field-lat', '-91');
-      await page.getByRole('button', { name: en.t('editor.save') }).click();
-      await page.waitForSelector('#field-lat-problem');
-      expect(await page.locator('.field:has(#field-lat) #field-lat-problem').textContent()).toMatch(/-91/);
-      expect(await page.locator('#field-lat').getAttribute('aria-invalid')).toBe('true');
-      expect(JSON.parse(await document()).communities.find((c: { id: string }) => c.id === 'drumarrow').lat).toBe(-47.3);
-      const population = javaScriptEnabled ? '96' : '97';
-      await page.fill('#field-lat', '-47.3');
-      await page.fill('#field-population', population);
-      await page.getByRole('button', { name: en.t('editor.save') }).click();
-      await page.waitForURL(/\/edit\?saved=1$/);
-      expect(await page.getByRole('status').textContent()).toBe(en.t('editor.saved'));
-      expect(JSON.parse(await document()).communities.find((c: { id: string }) => c.id === 'drumarrow').population).toBe(Number(population));
-    });
+      test('a community form shows the problem under its field; once fixed, it is saved', async () => {
+        await page.goto(`${service.url}/studies/${demoId}/edit/communities/drumarrow`);
+        await page.fill('#field-lat', '-91');
+        await page.getByRole('button', { name: en.t('editor.save') }).click();
+        await page.waitForSelector('#field-lat-problem');
+        expect(
+          await page.locator('.field:has(#field-lat) #field-lat-problem').textContent(),
+        ).toMatch(/-91/);
+        expect(await page.locator('#field-lat').getAttribute('aria-invalid')).toBe('true');
+        expect(
+          JSON.parse(await document()).communities.find((c: { id: string }) => c.id === 'drumarrow')
+            .lat,
+        ).toBe(-47.3);
+        const population = javaScriptEnabled ? '96' : '97';
+        await page.fill('#field-lat', '-47.3');
+        await page.fill('#field-population', population);
+        await page.getByRole('button', { name: en.t('editor.save') }).click();
+        await page.waitForURL(/\/edit\?saved=1$/);
+        expect(await page.getByRole('status').textContent()).toBe(en.t('editor.saved'));
+        expect(
+          JSON.parse(await document()).communities.find((c: { id: string }) => c.id === 'drumarrow')
+            .population,
+        ).toBe(Number(population));
+      });
 
-    test('no request left the origin', () => {
-      expect(foreign).toEqual([]);
-    });
-  });
+      test('no request left the origin', () => {
+        expect(foreign).toEqual([]);
+      });
+    },
+  );
 }

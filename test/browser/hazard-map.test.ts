@@ -2,9 +2,21 @@ import { join } from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { translator } from '../../web/text/translator.ts';
-import { jsonInit, startService, tempDir, type ServiceProcess } from '../service/helpers/service-process.ts';
+import {
+  jsonInit,
+  startService,
+  tempDir,
+  type ServiceProcess,
+} from '../service/helpers/service-process.ts';
 import { spreadStudy } from '../web/helpers/map-study.ts';
-import { ARTIFACTS, launchChromium, offlineContext, seriousAxeViolations, walkWithTab, type LaunchedBrowser } from './helpers/chromium.ts';
+import {
+  ARTIFACTS,
+  launchChromium,
+  offlineContext,
+  seriousAxeViolations,
+  walkWithTab,
+  type LaunchedBrowser,
+} from './helpers/chromium.ts';
 
 /**
  * A hazard map from the overview in Chromium: a small study (two invented villages, one
@@ -25,7 +37,10 @@ type MapAnswer = { id: string; status: string; map: { count: number } | null };
 
 beforeAll(async () => {
   service = await startService({ databasePath: join(dir.path, 'maps.db') });
-  const created = await service.fetch('/api/studies', jsonInit('POST', spreadStudy('Spread coast')));
+  const created = await service.fetch(
+    '/api/studies',
+    jsonInit('POST', spreadStudy('Spread coast')),
+  );
   studyId = ((await created.json()) as { id: string }).id;
   chromium = await launchChromium();
   ({ context, foreignRequests } = await offlineContext(chromium.browser, service.url));
@@ -41,15 +56,24 @@ afterAll(async () => {
 
 async function checkView(view: Page, name: string): Promise<void> {
   const violations = await seriousAxeViolations(view);
-  expect(violations, `${name}: serious or critical axe-core violations\n${JSON.stringify(violations, null, 2)}`).toEqual([]);
+  expect(
+    violations,
+    `${name}: serious or critical axe-core violations\n${JSON.stringify(violations, null, 2)}`,
+  ).toEqual([]);
   const walk = await walkWithTab(view);
   expect(walk.missed, `${name}: controls Tab never reached`).toEqual([]);
   expect(walk.invisibleFocus, `${name}: controls focused without a visible focus ring`).toEqual([]);
 }
 
-const maps = async (): Promise<MapAnswer[]> => ((await (await service.fetch(`/api/studies/${studyId}/maps`)).json()) as { maps: MapAnswer[] }).maps;
+const maps = async (): Promise<MapAnswer[]> =>
+  ((await (await service.fetch(`/api/studies/${studyId}/maps`)).json()) as { maps: MapAnswer[] })
+    .maps;
 
-const legendTitle = en.t('hazardMap.title.returnPeriod', { measure: en.t('hazardMap.measure.PGA'), years: '475', unit: 'g' });
+const legendTitle = en.t('hazardMap.title.returnPeriod', {
+  measure: en.t('hazardMap.measure.PGA'),
+  years: '475',
+  unit: 'g',
+});
 
 describe('a hazard map from the overview, in a browser', { timeout: 180_000 }, () => {
   test('the overview offers the form; computing follows the map and comes back to the layer and its legend', async () => {
@@ -66,13 +90,25 @@ describe('a hazard map from the overview, in a browser', { timeout: 180_000 }, (
     expect(map?.status).toBe('done');
     const cells = page.locator('svg.map .hazard-cells rect');
     expect(await cells.count()).toBe(map?.map?.count);
-    expect((await page.locator('.hazard-legend .legend-title').textContent())?.trim()).toBe(legendTitle);
-    expect(await page.locator('.hazard-legend .legend-classes li').count()).toBeGreaterThanOrEqual(2);
-    expect(await page.locator('.hazard-legend').textContent()).toContain(en.t('hazardMap.vs30', { vs30: '760' }));
+    expect((await page.locator('.hazard-legend .legend-title').textContent())?.trim()).toBe(
+      legendTitle,
+    );
+    expect(await page.locator('.hazard-legend .legend-classes li').count()).toBeGreaterThanOrEqual(
+      2,
+    );
+    expect(await page.locator('.hazard-legend').textContent()).toContain(
+      en.t('hazardMap.vs30', { vs30: '760' }),
+    );
     expect(await page.locator('.hazard-legend').textContent()).toContain(en.t('hazardMap.caution'));
     // The layer's text alternative: the map names the summary, which links to the GeoJSON.
-    expect(await page.locator('svg.map').getAttribute('aria-describedby')).toBe('overview-map-hazard-summary');
-    expect(await page.locator(`#overview-map-hazard-summary a[href="/api/maps/${map?.id}/map.geojson"]`).count()).toBe(1);
+    expect(await page.locator('svg.map').getAttribute('aria-describedby')).toBe(
+      'overview-map-hazard-summary',
+    );
+    expect(
+      await page
+        .locator(`#overview-map-hazard-summary a[href="/api/maps/${map?.id}/map.geojson"]`)
+        .count(),
+    ).toBe(1);
     await page.screenshot({ path: join(ARTIFACTS, 'overview-hazard-map.png'), fullPage: true });
     await checkView(page, 'overview with a hazard map');
     await page.goto(`${service.url}/studies/${studyId}/maps/${map?.id}`);
@@ -80,14 +116,22 @@ describe('a hazard map from the overview, in a browser', { timeout: 180_000 }, (
   });
 
   test('without script: the form posts, the refresh link shows how far the map has got, and the done page links to the map', async () => {
-    const { context: plain, foreignRequests: plainForeign } = await offlineContext(chromium.browser, service.url, { javaScriptEnabled: false });
+    const { context: plain, foreignRequests: plainForeign } = await offlineContext(
+      chromium.browser,
+      service.url,
+      { javaScriptEnabled: false },
+    );
     const noScript = await plain.newPage();
     await noScript.goto(`${service.url}/studies/${studyId}`);
     await noScript.selectOption('#hazard-map-return-period', '2475');
     await noScript.getByRole('button', { name: en.t('hazardMap.compute') }).click();
     await noScript.waitForURL(/\/maps\/[\w-]+$/);
     const progressUrl = noScript.url();
-    for (let i = 0; i < 600 && (await noScript.locator('.run-status[data-status="done"]').count()) === 0; i++) {
+    for (
+      let i = 0;
+      i < 600 && (await noScript.locator('.run-status[data-status="done"]').count()) === 0;
+      i++
+    ) {
       await new Promise((r) => setTimeout(r, 200));
       const refresh = noScript.getByRole('link', { name: en.t('mapRun.refresh') });
       if ((await refresh.count()) === 1) await refresh.click();
@@ -97,9 +141,17 @@ describe('a hazard map from the overview, in a browser', { timeout: 180_000 }, (
     expect(await noScript.locator('.run-status').getAttribute('data-status')).toBe('done');
     await noScript.getByRole('link', { name: en.t('mapRun.see') }).click();
     await noScript.waitForURL(`${service.url}/studies/${studyId}#map-heading`);
-    const title = en.t('hazardMap.title.returnPeriod', { measure: en.t('hazardMap.measure.PGA'), years: '2,475', unit: 'g' });
-    expect((await noScript.locator('.hazard-legend .legend-title').textContent())?.trim()).toBe(title);
-    expect(await noScript.locator('svg.map .hazard-cells rect').count()).toBe((await maps()).at(-1)?.map?.count);
+    const title = en.t('hazardMap.title.returnPeriod', {
+      measure: en.t('hazardMap.measure.PGA'),
+      years: '2,475',
+      unit: 'g',
+    });
+    expect((await noScript.locator('.hazard-legend .legend-title').textContent())?.trim()).toBe(
+      title,
+    );
+    expect(await noScript.locator('svg.map .hazard-cells rect').count()).toBe(
+      (await maps()).at(-1)?.map?.count,
+    );
     await plain.close();
     expect(plainForeign).toEqual([]);
   });

@@ -3,7 +3,14 @@ import { join } from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { waitForStatus, startRun } from '../service/helpers/runs.ts';
-import { jsonInit, REPO_ROOT, startService, tempDir, waitFor, type ServiceProcess } from '../service/helpers/service-process.ts';
+import {
+  jsonInit,
+  REPO_ROOT,
+  startService,
+  tempDir,
+  waitFor,
+  type ServiceProcess,
+} from '../service/helpers/service-process.ts';
 import { smallStudy } from '../service/helpers/small-study.ts';
 import { appRoutes } from '../service/reliability/hostile-requests.ts';
 import { launchChromium, offlineContext, type LaunchedBrowser } from './helpers/chromium.ts';
@@ -24,7 +31,10 @@ const COMMUNITY_NAMES = [
   `"><svg data-pwned onload="window.__pwned='svg'"></svg>`,
   `</title></textarea></style><script data-pwned>window.__pwned='breakout'</script>`,
 ] as const;
-const SOURCE_NAMES = [`<a data-pwned href="javascript:window.__pwned='link'">Fault</a>`, `<iframe data-pwned srcdoc="<script>parent.__pwned='iframe'</script>"></iframe>`] as const;
+const SOURCE_NAMES = [
+  `<a data-pwned href="javascript:window.__pwned='link'">Fault</a>`,
+  `<iframe data-pwned srcdoc="<script>parent.__pwned='iframe'</script>"></iframe>`,
+] as const;
 const STUDY_NAME = `<style data-pwned>body{display:none}</style><b data-pwned>Study</b>'-alert(1)-'{{7*7}}`;
 const CATALOG_FILE = `<img data-pwned src=x onerror="window.__pwned='file'">.csv`;
 
@@ -43,14 +53,33 @@ const visited: string[] = [];
 function hostileStudy(): Record<string, unknown> {
   const study = smallStudy(STUDY_NAME) as Record<string, any>;
   const base = study.communities[0];
-  study.communities = COMMUNITY_NAMES.map((name, i) => ({ ...base, id: `village-${i + 1}`, name, lat: base.lat + i * 0.02 }));
+  study.communities = COMMUNITY_NAMES.map((name, i) => ({
+    ...base,
+    id: `village-${i + 1}`,
+    name,
+    lat: base.lat + i * 0.02,
+  }));
   const [point] = study.sources.features;
   study.sources.features = [
     { ...point, properties: { ...point.properties, name: SOURCE_NAMES[0] } },
     {
       type: 'Feature',
-      geometry: { type: 'LineString', coordinates: [[base.lon - 0.1, base.lat - 0.1], [base.lon - 0.1, base.lat + 0.15]] },
-      properties: { id: 'near-fault', name: SOURCE_NAMES[1], setting: 'crustal', mechanism: 'strike-slip', dip: 90, lowerDepthKm: 12, recurrence: { type: 'fixed', magnitude: 6.3, rate: 0.002 } },
+      geometry: {
+        type: 'LineString',
+        coordinates: [
+          [base.lon - 0.1, base.lat - 0.1],
+          [base.lon - 0.1, base.lat + 0.15],
+        ],
+      },
+      properties: {
+        id: 'near-fault',
+        name: SOURCE_NAMES[1],
+        setting: 'crustal',
+        mechanism: 'strike-slip',
+        dip: 90,
+        lowerDepthKm: 12,
+        recurrence: { type: 'fixed', magnitude: 6.3, rate: 0.002 },
+      },
     },
   ];
   return study;
@@ -64,16 +93,26 @@ beforeAll(async () => {
   const run = await waitForStatus(service, (await startRun(service, studyId)).id);
   expect(run.status, run.error ?? '').toBe('done');
   runId = run.id;
-  const mapStart = await service.fetch(`/api/studies/${studyId}/maps`, jsonInit('POST', { returnPeriodYears: 475, spacingKm: 20 }));
+  const mapStart = await service.fetch(
+    `/api/studies/${studyId}/maps`,
+    jsonInit('POST', { returnPeriodYears: 475, spacingKm: 20 }),
+  );
   expect(mapStart.status, await mapStart.clone().text()).toBe(202);
   mapId = ((await mapStart.json()) as { id: string }).id;
   const map = await waitFor(
-    async () => (await (await service.fetch(`/api/maps/${mapId}`)).json()) as { status: string; error: string | null },
+    async () =>
+      (await (await service.fetch(`/api/maps/${mapId}`)).json()) as {
+        status: string;
+        error: string | null;
+      },
     (m) => m.status !== 'queued' && m.status !== 'running',
   );
   expect(map.status, map.error ?? '').toBe('done');
   const catalog = readFileSync(join(REPO_ROOT, 'data-demo/catalog.csv'), 'utf8');
-  const attached = await service.fetch(`/api/studies/${studyId}/catalog`, jsonInit('PUT', { fileName: CATALOG_FILE, format: 'csv', text: catalog }));
+  const attached = await service.fetch(
+    `/api/studies/${studyId}/catalog`,
+    jsonInit('PUT', { fileName: CATALOG_FILE, format: 'csv', text: catalog }),
+  );
   expect(attached.status, await attached.clone().text()).toBeLessThan(300);
   chromium = await launchChromium();
   ({ context, foreignRequests } = await offlineContext(chromium.browser, service.url));
@@ -85,7 +124,9 @@ beforeAll(async () => {
 }, 300_000);
 
 afterAll(async () => {
-  console.log(`injection in the browser: ${visited.length} pages checked (${visited.join(', ')}); dialogs: ${dialogs.length}; foreign requests: ${foreignRequests?.length ?? 0}`);
+  console.log(
+    `injection in the browser: ${visited.length} pages checked (${visited.join(', ')}); dialogs: ${dialogs.length}; foreign requests: ${foreignRequests?.length ?? 0}`,
+  );
   await context?.close();
   await chromium?.close();
   await service?.stop();
@@ -135,7 +176,14 @@ async function expectInert(path: string, names: readonly string[] = []): Promise
   await page.waitForTimeout(50);
   const report = (await page.evaluate(INSPECT)) as DomReport;
   visited.push(path.replace(studyId, '{id}').replace(runId, '{run}').replace(mapId, '{map}'));
-  expect({ path, pwned: report.pwned, marked: report.marked, handlers: report.handlers, inlineScripts: report.inlineScripts, scriptLinks: report.scriptLinks }).toEqual({
+  expect({
+    path,
+    pwned: report.pwned,
+    marked: report.marked,
+    handlers: report.handlers,
+    inlineScripts: report.inlineScripts,
+    scriptLinks: report.scriptLinks,
+  }).toEqual({
     path,
     pwned: null,
     marked: [],
@@ -143,7 +191,8 @@ async function expectInert(path: string, names: readonly string[] = []): Promise
     inlineScripts: 0,
     scriptLinks: [],
   });
-  for (const name of names) expect(squash(report.text), `${path} shows "${name}" as text`).toContain(squash(name));
+  for (const name of names)
+    expect(squash(report.text), `${path} shows "${name}" as text`).toContain(squash(name));
   return report;
 }
 
@@ -151,10 +200,21 @@ async function expectInert(path: string, names: readonly string[] = []): Promise
 function pagePaths(): { path: string; names: string[] }[] {
   const out: { path: string; names: string[] }[] = [];
   for (const route of appRoutes()) {
-    if (route.method !== 'GET' || route.path.startsWith('/api') || route.path.startsWith('/static') || route.path === '/language') continue;
-    const withIds = route.path.replace(':id', studyId).replace(':runId', runId).replace(':mapId', mapId);
+    if (
+      route.method !== 'GET' ||
+      route.path.startsWith('/api') ||
+      route.path.startsWith('/static') ||
+      route.path === '/language'
+    )
+      continue;
+    const withIds = route.path
+      .replace(':id', studyId)
+      .replace(':runId', runId)
+      .replace(':mapId', mapId);
     if (withIds.includes(':cid')) {
-      COMMUNITY_NAMES.forEach((name, i) => out.push({ path: withIds.replace(':cid', `village-${i + 1}`), names: [name] }));
+      COMMUNITY_NAMES.forEach((name, i) =>
+        out.push({ path: withIds.replace(':cid', `village-${i + 1}`), names: [name] }),
+      );
     } else if (route.path.endsWith('/maps/:mapId')) {
       out.push({ path: withIds, names: [STUDY_NAME] });
     } else if (withIds.endsWith('/catalog')) {
@@ -180,7 +240,10 @@ describe('names made of markup, in the browser', () => {
   });
 
   test('community pages name the nearest fault, as text', async () => {
-    await expectInert(`/studies/${studyId}/communities/village-1`, [COMMUNITY_NAMES[0], SOURCE_NAMES[1]]);
+    await expectInert(`/studies/${studyId}/communities/village-1`, [
+      COMMUNITY_NAMES[0],
+      SOURCE_NAMES[1],
+    ]);
   });
 
   test('render inert in every page and every handout', async () => {
@@ -199,7 +262,11 @@ describe('names made of markup, in the browser', () => {
       await sort.click();
       await page.waitForLoadState('load');
       const report = (await page.evaluate(INSPECT)) as DomReport;
-      expect({ pwned: report.pwned, marked: report.marked, handlers: report.handlers }).toEqual({ pwned: null, marked: [], handlers: [] });
+      expect({ pwned: report.pwned, marked: report.marked, handlers: report.handlers }).toEqual({
+        pwned: null,
+        marked: [],
+        handlers: [],
+      });
     }
   });
 
@@ -207,24 +274,40 @@ describe('names made of markup, in the browser', () => {
     await expectInert(`/studies/${studyId}/scenario`);
     await page.selectOption('select[name="sourceId"]', 'near-fault');
     await page.fill('input[name="magnitude"]', '6.2');
-    await Promise.all([page.waitForLoadState('load'), page.locator('form.scenario-form [type="submit"]').first().click()]);
+    await Promise.all([
+      page.waitForLoadState('load'),
+      page.locator('form.scenario-form [type="submit"]').first().click(),
+    ]);
     await page.waitForSelector('table.scenario-table');
     const report = (await page.evaluate(INSPECT)) as DomReport;
     visited.push('scenario result');
-    expect({ pwned: report.pwned, marked: report.marked, handlers: report.handlers, scriptLinks: report.scriptLinks }).toEqual({ pwned: null, marked: [], handlers: [], scriptLinks: [] });
+    expect({
+      pwned: report.pwned,
+      marked: report.marked,
+      handlers: report.handlers,
+      scriptLinks: report.scriptLinks,
+    }).toEqual({ pwned: null, marked: [], handlers: [], scriptLinks: [] });
     for (const name of COMMUNITY_NAMES) expect(squash(report.text)).toContain(squash(name));
   });
 
   test('an upload whose problems echo its text renders inert', async () => {
     await expectInert(`/studies/${studyId}/edit`);
     const csv = `id,name,lon,lat,vs30\nbad-row,${COMMUNITY_NAMES[1].replace(/"/g, '""').replace(/^/, '"')}",-140.2,95,400\n`;
-    await page.setInputFiles('#communities-file', { name: CATALOG_FILE, mimeType: 'text/csv', buffer: Buffer.from(csv) });
+    await page.setInputFiles('#communities-file', {
+      name: CATALOG_FILE,
+      mimeType: 'text/csv',
+      buffer: Buffer.from(csv),
+    });
     await page.locator('form:has(#communities-file) button[type="submit"]').click();
     // The problems are listed beside the upload, with the uploaded lines shown back.
     await page.waitForSelector('#communities-problems');
     const report = (await page.evaluate(INSPECT)) as DomReport;
     visited.push('editor upload problems');
-    expect({ pwned: report.pwned, marked: report.marked, handlers: report.handlers }).toEqual({ pwned: null, marked: [], handlers: [] });
+    expect({ pwned: report.pwned, marked: report.marked, handlers: report.handlers }).toEqual({
+      pwned: null,
+      marked: [],
+      handlers: [],
+    });
     expect(squash(report.text)).toContain(squash(COMMUNITY_NAMES[1]));
   });
 

@@ -5,7 +5,15 @@ import type { StudyResult } from '../../api/engine/results.ts';
 import { translator } from '../../web/text/translator.ts';
 import { startService, tempDir, type ServiceProcess } from '../service/helpers/service-process.ts';
 import { demoStudyId } from '../service/helpers/runs.ts';
-import { ARTIFACTS, launchChromium, offlineContext, pdfPageCount, seriousAxeViolations, walkWithTab, type LaunchedBrowser } from './helpers/chromium.ts';
+import {
+  ARTIFACTS,
+  launchChromium,
+  offlineContext,
+  pdfPageCount,
+  seriousAxeViolations,
+  walkWithTab,
+  type LaunchedBrowser,
+} from './helpers/chromium.ts';
 
 /**
  * A new user's path through the demo coast in Chromium: open the overview, screen the study,
@@ -44,7 +52,10 @@ afterAll(async () => {
 /** axe-core and the Tab walk on the page as it stands. */
 async function checkView(name: string): Promise<void> {
   const violations = await seriousAxeViolations(page);
-  expect(violations, `${name}: serious or critical axe-core violations\n${JSON.stringify(violations, null, 2)}`).toEqual([]);
+  expect(
+    violations,
+    `${name}: serious or critical axe-core violations\n${JSON.stringify(violations, null, 2)}`,
+  ).toEqual([]);
   const walk = await walkWithTab(page);
   expect(walk.controls.length, `${name}: controls found`).toBeGreaterThan(0);
   expect(walk.missed, `${name}: controls Tab never reached`).toEqual([]);
@@ -82,19 +93,28 @@ describe('the demo coast in a browser', { timeout: 180_000 }, () => {
   }, 320_000);
 
   test("the ranking matches the API's results", async () => {
-    const { runs } = (await (await service.fetch(`/api/studies/${demoId}/runs`)).json()) as { runs: { id: string; status: string }[] };
+    const { runs } = (await (await service.fetch(`/api/studies/${demoId}/runs`)).json()) as {
+      runs: { id: string; status: string }[];
+    };
     const done = runs.filter((r) => r.status === 'done').at(-1) as { id: string };
     results = (await (await service.fetch(`/api/runs/${done.id}/results`)).json()) as StudyResult;
-    const { document } = (await (await service.fetch(`/api/studies/${demoId}`)).json()) as { document: { communities: { id: string; population?: number }[] } };
+    const { document } = (await (await service.fetch(`/api/studies/${demoId}`)).json()) as {
+      document: { communities: { id: string; population?: number }[] };
+    };
     const people = new Map(document.communities.map((c) => [c.id, c.population ?? -1]));
     const expected = [...results.communities]
       .sort(
         (a, b) =>
           BAND_ORDER.indexOf(a.band.id) - BAND_ORDER.indexOf(b.band.id) ||
-          (b.intensity.chanceOfReaching['50']?.VII ?? 0) - (a.intensity.chanceOfReaching['50']?.VII ?? 0) ||
+          (b.intensity.chanceOfReaching['50']?.VII ?? 0) -
+            (a.intensity.chanceOfReaching['50']?.VII ?? 0) ||
           (people.get(b.communityId) as number) - (people.get(a.communityId) as number),
       )
-      .map((c) => ({ id: c.communityId, band: c.band.id, vii: c.intensity.chanceOfReaching['50']?.VII }));
+      .map((c) => ({
+        id: c.communityId,
+        band: c.band.id,
+        vii: c.intensity.chanceOfReaching['50']?.VII,
+      }));
     const shown = await page.locator('table.ranking tbody tr').evaluateAll((rows) =>
       rows.map((row) => ({
         id: row.getAttribute('data-community'),
@@ -112,17 +132,27 @@ describe('the demo coast in a browser', { timeout: 180_000 }, () => {
 
   test('sorting: the column links sort with the script, and without it', async () => {
     await page.getByRole('link', { name: new RegExp(`^${en.t('overview.col.people')}`) }).click();
-    const people = await page.locator('table.ranking tbody tr [data-key="people"]').evaluateAll((cells) => cells.map((c) => Number(c.getAttribute('data-value'))));
+    const people = await page
+      .locator('table.ranking tbody tr [data-key="people"]')
+      .evaluateAll((cells) => cells.map((c) => Number(c.getAttribute('data-value'))));
     expect(people).toEqual([...people].sort((a, b) => b - a));
     expect(await page.locator('th[aria-sort="descending"]').count()).toBe(1);
     expect(page.url()).toContain('sort=people');
 
-    const { context: plain, foreignRequests: plainForeign } = await offlineContext(chromium.browser, service.url, { javaScriptEnabled: false });
+    const { context: plain, foreignRequests: plainForeign } = await offlineContext(
+      chromium.browser,
+      service.url,
+      { javaScriptEnabled: false },
+    );
     const noScript = await plain.newPage();
     await noScript.goto(`${service.url}/studies/${demoId}`);
-    await noScript.getByRole('link', { name: new RegExp(`^${en.t('overview.col.people')}`) }).click();
+    await noScript
+      .getByRole('link', { name: new RegExp(`^${en.t('overview.col.people')}`) })
+      .click();
     await noScript.waitForURL(/sort=people&dir=descending/);
-    const plainPeople = await noScript.locator('table.ranking tbody tr [data-key="people"]').evaluateAll((cells) => cells.map((c) => Number(c.getAttribute('data-value'))));
+    const plainPeople = await noScript
+      .locator('table.ranking tbody tr [data-key="people"]')
+      .evaluateAll((cells) => cells.map((c) => Number(c.getAttribute('data-value'))));
     expect(plainPeople).toEqual(people);
     await plain.close();
     expect(plainForeign).toEqual([]);
@@ -136,33 +166,68 @@ describe('the demo coast in a browser', { timeout: 180_000 }, () => {
     const vii = harbour?.intensity.chanceOfReaching['50']?.VII as number;
     expect(Number(await headline.getAttribute('data-probability'))).toBe(vii);
     const c = en.chance(vii);
-    expect(await headline.textContent()).toBe(en.t('community.headline', { name: 'Harbour Point', chance: c.frequency, years: 50, percent: c.percent }));
+    expect(await headline.textContent()).toBe(
+      en.t('community.headline', {
+        name: 'Harbour Point',
+        chance: c.frequency,
+        years: 50,
+        percent: c.percent,
+      }),
+    );
     for (const roman of ['VI', 'VII', 'VIII'] as const) {
-      expect(Number(await page.locator(`.other-chances [data-mmi="${roman}"]`).getAttribute('data-probability'))).toBe(harbour?.intensity.chanceOfReaching['50']?.[roman]);
+      expect(
+        Number(
+          await page
+            .locator(`.other-chances [data-mmi="${roman}"]`)
+            .getAttribute('data-probability'),
+        ),
+      ).toBe(harbour?.intensity.chanceOfReaching['50']?.[roman]);
     }
     for (const years of ['475', '2475']) {
-      expect(Number(await page.locator(`.level-card[data-return-period="${years}"] .level-mmi`).getAttribute('data-mmi'))).toBe(harbour?.intensity.atReturnPeriod[years]?.mmi);
+      expect(
+        Number(
+          await page
+            .locator(`.level-card[data-return-period="${years}"] .level-mmi`)
+            .getAttribute('data-mmi'),
+        ),
+      ).toBe(harbour?.intensity.atReturnPeriod[years]?.mmi);
     }
     // Coastal: the tsunami advice; every page with numbers: the caution and the limits link.
-    await expect.poll(() => page.getByRole('heading', { name: en.t('tsunami.title') }).count()).toBe(1);
+    await expect
+      .poll(() => page.getByRole('heading', { name: en.t('tsunami.title') }).count())
+      .toBe(1);
     expect(await page.locator('main .caution').textContent()).toContain(en.t('caution.text'));
     expect(await page.locator('main a[href="/limits"]').count()).toBeGreaterThan(0);
     // "Earthquakes people here have likely felt": the counts of the API's felt history of the
     // attached demo catalog, and its strongest events listed.
-    const felt = (await (await service.fetch(`/api/studies/${demoId}/felt?community=harbour-point`)).json()) as { communities: { felt: unknown[]; stronglyFelt: unknown[] }[] };
+    const felt = (await (
+      await service.fetch(`/api/studies/${demoId}/felt?community=harbour-point`)
+    ).json()) as { communities: { felt: unknown[]; stronglyFelt: unknown[] }[] };
     const counts = page.locator('section.felt [data-felt]');
     expect(Number(await counts.getAttribute('data-felt'))).toBe(felt.communities[0]?.felt.length);
-    expect(Number(await counts.getAttribute('data-strongly-felt'))).toBe(felt.communities[0]?.stronglyFelt.length);
-    expect(await page.locator('table.felt-table tbody tr').count()).toBe(Math.min(8, felt.communities[0]?.felt.length ?? 0));
+    expect(Number(await counts.getAttribute('data-strongly-felt'))).toBe(
+      felt.communities[0]?.stronglyFelt.length,
+    );
+    expect(await page.locator('table.felt-table tbody tr').count()).toBe(
+      Math.min(8, felt.communities[0]?.felt.length ?? 0),
+    );
     await page.screenshot({ path: join(ARTIFACTS, 'community.png'), fullPage: true });
     await checkView('community page');
   });
 
   test('every handout prints to PDF in at most two pages, A4 and Letter, with the caution in the repeated footer', async () => {
     for (const community of results.communities) {
-      await page.goto(`${service.url}/studies/${demoId}/communities/${community.communityId}/handout`);
+      await page.goto(
+        `${service.url}/studies/${demoId}/communities/${community.communityId}/handout`,
+      );
       for (const format of ['A4', 'Letter'] as const) {
-        const pdf = await page.pdf({ format, path: community.communityId === 'harbour-point' ? join(ARTIFACTS, `handout-${format}.pdf`) : undefined });
+        const pdf = await page.pdf({
+          format,
+          path:
+            community.communityId === 'harbour-point'
+              ? join(ARTIFACTS, `handout-${format}.pdf`)
+              : undefined,
+        });
         const pages = pdfPageCount(pdf);
         expect(pages, `${community.communityId} on ${format}`).toBeGreaterThanOrEqual(1);
         expect(pages, `${community.communityId} on ${format}`).toBeLessThanOrEqual(2);
@@ -170,15 +235,32 @@ describe('the demo coast in a browser', { timeout: 180_000 }, () => {
     }
     await page.goto(`${service.url}/studies/${demoId}/communities/harbour-point/handout`);
     await page.emulateMedia({ media: 'print' });
-    expect(await page.evaluate("getComputedStyle(document.querySelector('table.handout-frame > tfoot')).display")).toBe('table-footer-group');
-    expect(await page.locator('tfoot .handout-caution').textContent()).toContain(en.t('caution.short'));
-    expect(await page.locator('tfoot .provenance').textContent()).toContain(results.provenance.inputHash.slice(0, 12));
-    expect(await page.evaluate("getComputedStyle(document.querySelector('.handout-tools')).display")).toBe('none');
+    expect(
+      await page.evaluate(
+        "getComputedStyle(document.querySelector('table.handout-frame > tfoot')).display",
+      ),
+    ).toBe('table-footer-group');
+    expect(await page.locator('tfoot .handout-caution').textContent()).toContain(
+      en.t('caution.short'),
+    );
+    expect(await page.locator('tfoot .provenance').textContent()).toContain(
+      results.provenance.inputHash.slice(0, 12),
+    );
+    expect(
+      await page.evaluate("getComputedStyle(document.querySelector('.handout-tools')).display"),
+    ).toBe('none');
     await page.setViewportSize({ width: 794, height: 1123 });
     // Nothing wider than the A4 width (794 px at 96 dpi) once laid out again; then the picture.
-    expect(await page.evaluate('document.documentElement.scrollWidth <= document.documentElement.clientWidth')).toBe(true);
+    expect(
+      await page.evaluate(
+        'document.documentElement.scrollWidth <= document.documentElement.clientWidth',
+      ),
+    ).toBe(true);
     // A viewport as tall as the handout: no scrollbar to take its width from the picture.
-    await page.setViewportSize({ width: 794, height: Number(await page.evaluate('document.documentElement.scrollHeight')) });
+    await page.setViewportSize({
+      width: 794,
+      height: Number(await page.evaluate('document.documentElement.scrollHeight')),
+    });
     await page.screenshot({ path: join(ARTIFACTS, 'handout-print.png') });
     await page.emulateMedia({ media: 'screen' });
     await page.setViewportSize({ width: 1100, height: 900 });
@@ -237,7 +319,7 @@ describe('the demo coast in a browser', { timeout: 180_000 }, () => {
     await checkView('not found');
   });
 
-  test('no request left the service\'s origin', () => {
+  test("no request left the service's origin", () => {
     expect(foreignRequests).toEqual([]);
   });
 });

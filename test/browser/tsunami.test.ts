@@ -5,7 +5,13 @@ import type { TsunamiResult } from '../../api/engine/tsunami/index.ts';
 import { translator } from '../../web/text/translator.ts';
 import { startService, tempDir, type ServiceProcess } from '../service/helpers/service-process.ts';
 import { demoStudyId, startRun, waitForStatus } from '../service/helpers/runs.ts';
-import { ARTIFACTS, launchChromium, offlineContext, seriousAxeViolations, type LaunchedBrowser } from './helpers/chromium.ts';
+import {
+  ARTIFACTS,
+  launchChromium,
+  offlineContext,
+  seriousAxeViolations,
+  type LaunchedBrowser,
+} from './helpers/chromium.ts';
 
 /**
  * The tsunami time to act on the demo coast in Chromium, at a desktop and a phone width: the
@@ -48,7 +54,9 @@ describe.each(WIDTHS)('tsunami time to act at $name width', ({ name, viewport })
   let page: Page;
 
   beforeAll(async () => {
-    ({ context, foreignRequests } = await offlineContext(chromium.browser, service.url, { viewport }));
+    ({ context, foreignRequests } = await offlineContext(chromium.browser, service.url, {
+      viewport,
+    }));
     page = await context.newPage();
   });
   afterAll(async () => context?.close());
@@ -61,36 +69,59 @@ describe.each(WIDTHS)('tsunami time to act at $name width', ({ name, viewport })
       `[...document.querySelectorAll(${selector})].filter((el) => el.getBoundingClientRect().right > document.documentElement.clientWidth + 1).map((el) => el.tagName + '.' + el.className)`,
     )) as string[];
     expect(wide, `${view}: parts of the tsunami section wider than the window`).toEqual([]);
-    await page.locator(section).first().screenshot({ path: join(ARTIFACTS, `tsunami-${view}-${name}-section.png`) });
+    await page
+      .locator(section)
+      .first()
+      .screenshot({ path: join(ARTIFACTS, `tsunami-${view}-${name}-section.png`) });
     await page.screenshot({ path: join(ARTIFACTS, `tsunami-${view}-${name}.png`), fullPage: true });
     expect(foreignRequests).toEqual([]);
   }
 
-  test('the overview ranks the coastal villages by time to act', async () => {
-    await page.goto(`${service.url}/studies/${demoId}`);
-    const rows = page.locator('#tsunami-ranking tbody tr');
-    expect(await rows.count()).toBe(times.communities.length);
-    const minutes = await rows.evaluateAll((trs) => trs.map((tr) => Number(tr.getAttribute('data-first-arrival-minutes'))));
-    expect(minutes).toEqual([...minutes].sort((a, b) => a - b));
-    await check('overview', '.tsunami-ranking');
-  }, VIEW_TIMEOUT_MS);
+  test(
+    'the overview ranks the coastal villages by time to act',
+    async () => {
+      await page.goto(`${service.url}/studies/${demoId}`);
+      const rows = page.locator('#tsunami-ranking tbody tr');
+      expect(await rows.count()).toBe(times.communities.length);
+      const minutes = await rows.evaluateAll((trs) =>
+        trs.map((tr) => Number(tr.getAttribute('data-first-arrival-minutes'))),
+      );
+      expect(minutes).toEqual([...minutes].sort((a, b) => a - b));
+      await check('overview', '.tsunami-ranking');
+    },
+    VIEW_TIMEOUT_MS,
+  );
 
-  test('a coastal village\'s page and handout say the time in plain words', async () => {
-    const quillan = times.communities.find((c) => c.id === 'quillan-landing');
-    await page.goto(`${service.url}/studies/${demoId}/communities/quillan-landing`);
-    await expect(page.locator('.tsunami-sentence').textContent()).resolves.toContain(`could reach this coast in about ${quillan?.firstArrivalMinutes} to ${quillan?.latestMinutes} minutes`);
-    await expect(page.locator('.tsunami-time .tsunami-caution').isVisible()).resolves.toBe(true);
-    await check('community', '.tsunami-time');
-    await page.goto(`${service.url}/studies/${demoId}/communities/quillan-landing/handout`);
-    await expect(page.locator('.tsunami-sentence').textContent()).resolves.toMatch(/could reach this coast in about \d+ to \d+ minutes/);
-    await check('handout', '.tsunami-time');
-  }, VIEW_TIMEOUT_MS);
+  test(
+    "a coastal village's page and handout say the time in plain words",
+    async () => {
+      const quillan = times.communities.find((c) => c.id === 'quillan-landing');
+      await page.goto(`${service.url}/studies/${demoId}/communities/quillan-landing`);
+      await expect(page.locator('.tsunami-sentence').textContent()).resolves.toContain(
+        `could reach this coast in about ${quillan?.firstArrivalMinutes} to ${quillan?.latestMinutes} minutes`,
+      );
+      await expect(page.locator('.tsunami-time .tsunami-caution').isVisible()).resolves.toBe(true);
+      await check('community', '.tsunami-time');
+      await page.goto(`${service.url}/studies/${demoId}/communities/quillan-landing/handout`);
+      await expect(page.locator('.tsunami-sentence').textContent()).resolves.toMatch(
+        /could reach this coast in about \d+ to \d+ minutes/,
+      );
+      await check('handout', '.tsunami-time');
+    },
+    VIEW_TIMEOUT_MS,
+  );
 
-  test('the scenario on the interface gives the times of its rupture', async () => {
-    await page.goto(`${service.url}/studies/${demoId}/scenario?sourceId=orle-interface`);
-    await page.getByRole('button', { name: translator('en').t('scenario.run') }).click();
-    await page.waitForSelector('#tsunami-scenario', { timeout: 120_000 });
-    expect(await page.locator('#tsunami-scenario tbody tr').count()).toBe(times.communities.length);
-    await check('scenario', '.tsunami-scenario');
-  }, VIEW_TIMEOUT_MS);
+  test(
+    'the scenario on the interface gives the times of its rupture',
+    async () => {
+      await page.goto(`${service.url}/studies/${demoId}/scenario?sourceId=orle-interface`);
+      await page.getByRole('button', { name: translator('en').t('scenario.run') }).click();
+      await page.waitForSelector('#tsunami-scenario', { timeout: 120_000 });
+      expect(await page.locator('#tsunami-scenario tbody tr').count()).toBe(
+        times.communities.length,
+      );
+      await check('scenario', '.tsunami-scenario');
+    },
+    VIEW_TIMEOUT_MS,
+  );
 });

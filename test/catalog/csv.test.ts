@@ -36,27 +36,39 @@ describe('catalog CSV', () => {
   });
 
   it('summarises counts and flags magnitude types other than moment magnitude', () => {
-    expect(load.summary).toEqual({ loaded: 4, rejected: 4, byMagnitudeType: { Mw: 1, ML: 1, Mww: 1, mb: 1 }, nonMoment: 2 });
+    expect(load.summary).toEqual({
+      loaded: 4,
+      rejected: 4,
+      byMagnitudeType: { Mw: 1, ML: 1, Mww: 1, mb: 1 },
+      nonMoment: 2,
+    });
     expect(load.notes).toContain('1 rows had no id and were given "line-<number>"');
     const text = describeCatalogLoad(load);
     expect(text).toMatch(/^Loaded 4 events; rejected 4\. Rejected: line 5: /);
-    expect(text).toMatch(/2 events have magnitude types other than moment magnitude \(ML 1, mb 1\)/);
+    expect(text).toMatch(
+      /2 events have magnitude types other than moment magnitude \(ML 1, mb 1\)/,
+    );
   });
 
   it('keeps lines right across Windows line ends and quoted fields', () => {
-    const text = 'time,lon,lat,depthKm,magnitude,magnitudeType,id\r\n"2001-01-01T00:00:00Z",-150,-47,10,4,Mw,"a\r\nb"\r\nbad,-150,-47,10,4,Mw,c\r\n';
+    const text =
+      'time,lon,lat,depthKm,magnitude,magnitudeType,id\r\n"2001-01-01T00:00:00Z",-150,-47,10,4,Mw,"a\r\nb"\r\nbad,-150,-47,10,4,Mw,c\r\n';
     const r = parseCatalogCsv(text);
     expect(r.events.map((e) => e.id)).toEqual(['a\nb']);
     expect(r.rejected.map((x) => x.line)).toEqual([4]);
   });
 
   it('refuses a header without the required columns', () => {
-    expect(() => parseCatalogCsv('time,lon,lat,magnitude\n2001-01-01,-150,-47,4\n')).toThrow(/missing depthKm, magnitudeType/);
+    expect(() => parseCatalogCsv('time,lon,lat,magnitude\n2001-01-01,-150,-47,4\n')).toThrow(
+      /missing depthKm, magnitudeType/,
+    );
     expect(() => parseCatalogCsv('\n\n')).toThrow(/header row/);
   });
 
   it('rejects values outside their ranges, every problem at once', () => {
-    const r = parseCatalogCsv('time,lon,lat,depthKm,magnitude,magnitudeType\n2001-01-01T00:00:00Z,200,-47,900,abc,Mw\n');
+    const r = parseCatalogCsv(
+      'time,lon,lat,depthKm,magnitude,magnitudeType\n2001-01-01T00:00:00Z,200,-47,900,abc,Mw\n',
+    );
     expect(r.rejected[0]?.reasons).toEqual([
       'lon: expected a number from -180 to 180 degrees; got "200"',
       'depthKm: expected a number from -10 to 800 km; got "900"',

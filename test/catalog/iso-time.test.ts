@@ -21,7 +21,10 @@ describe('ISO 8601 times', () => {
   });
 
   it('say what is wrong with a bad time', () => {
-    expect(parseIsoTimeMs('04/03/2021')).toEqual({ ok: false, message: 'expected an ISO 8601 time such as 2021-03-04T05:06:07Z; got "04/03/2021"' });
+    expect(parseIsoTimeMs('04/03/2021')).toEqual({
+      ok: false,
+      message: 'expected an ISO 8601 time such as 2021-03-04T05:06:07Z; got "04/03/2021"',
+    });
     expect(parseIsoTimeMs('2021-02-29T00:00:00Z').ok).toBe(false);
     expect(parseIsoTimeMs('2020-02-29T00:00:00Z').ok).toBe(true);
     expect(parseIsoTimeMs('2021-01-01T24:00:00Z').ok).toBe(false);
@@ -31,7 +34,12 @@ describe('ISO 8601 times', () => {
   it('read years 0 to 99 as written, not as 1900 to 1999', () => {
     // The check values come from the ECMA-262 date-time string format (section 21.4.1.32),
     // which reads a four-digit year as written, independently of the code under test.
-    for (const text of ['0050-06-01T00:00:00Z', '0099-12-31T23:59:59Z', '0001-01-01T00:00:00Z', '0000-02-29T12:00:00Z']) {
+    for (const text of [
+      '0050-06-01T00:00:00Z',
+      '0099-12-31T23:59:59Z',
+      '0001-01-01T00:00:00Z',
+      '0000-02-29T12:00:00Z',
+    ]) {
       expect(ms(text), text).toBe(new Date(text).getTime());
       expect(new Date(ms(text)).toISOString().slice(0, 19), text).toBe(text.slice(0, 19));
     }

@@ -31,12 +31,16 @@ describe('tremora catalog fit --convert', () => {
     const { code, out } = await run('catalog', 'fit', fitCsv, '--convert', 'grunthal2009-ml');
     expect(code).toBe(0);
     expect(out[1]).toBe('Magnitudes: moment magnitudes only');
-    expect(out[2]).toMatch(/^Converted to Mw: 1 ML event by Grünthal, Wahlström & Stromeyer \(2009\), .*Mw = 0\.53 \+ 0\.646 ML \+ 0\.0376 ML² \(from memory\)/);
+    expect(out[2]).toMatch(
+      /^Converted to Mw: 1 ML event by Grünthal, Wahlström & Stromeyer \(2009\), .*Mw = 0\.53 \+ 0\.646 ML \+ 0\.0376 ML² \(from memory\)/,
+    );
   });
 
   it('refuses an unknown relation, naming the known ones', async () => {
     const { code, err } = await run('catalog', 'fit', fitCsv, '--convert', 'ml-guess');
     expect(code).toBe(2);
-    expect(err.join('\n')).toContain('--convert: expected relation ids among scordilis2006-ms, scordilis2006-mb, grunthal2009-ml; got "ml-guess"');
+    expect(err.join('\n')).toContain(
+      '--convert: expected relation ids among scordilis2006-ms, scordilis2006-mb, grunthal2009-ml; got "ml-guess"',
+    );
   });
 });

@@ -34,14 +34,23 @@ describe('tremora check', () => {
     study.sources.features[2].properties.dip = 120;
     study.communities[0].lat = 'south';
     // The demo uses the default branches; a study naming its own with weights off by 0.1 is refused.
-    study.groundMotion = { crustal: [{ model: 'BSSA14', weight: 0.5 }, { model: 'CB14', weight: 0.4 }] };
+    study.groundMotion = {
+      crustal: [
+        { model: 'BSSA14', weight: 0.5 },
+        { model: 'CB14', weight: 0.4 },
+      ],
+    };
     const broken = join(dir, 'broken.study.json');
     await writeFile(broken, JSON.stringify(study));
     const { code, err } = await run('check', broken);
     expect(code).toBe(2);
     expect(err).toContain('3 problems');
-    expect(err).toContain('sources.features[2].properties.dip: expected a number in (0, 90] degrees, got 120');
-    expect(err).toContain('communities[0].lat: expected a number in [-90, 90] degrees, got "south"');
+    expect(err).toContain(
+      'sources.features[2].properties.dip: expected a number in (0, 90] degrees, got 120',
+    );
+    expect(err).toContain(
+      'communities[0].lat: expected a number in [-90, 90] degrees, got "south"',
+    );
     expect(err).toContain('groundMotion.crustal: expected weights summing to 1');
     const json = await run('check', broken, '--json');
     expect(json.code).toBe(2);
@@ -53,7 +62,10 @@ describe('tremora check', () => {
     const study = JSON.parse(await readFile(DEMO, 'utf8'));
     study.communities = 'villages.csv';
     await writeFile(join(dir, 'demo.study.json'), JSON.stringify(study));
-    await copyFile(new URL('../../data-demo/villages.csv', import.meta.url), join(dir, 'villages.csv'));
+    await copyFile(
+      new URL('../../data-demo/villages.csv', import.meta.url),
+      join(dir, 'villages.csv'),
+    );
     const { code, out } = await run('check', join(dir, 'demo.study.json'));
     expect(code).toBe(0);
     expect(out).toContain('11 communities');
@@ -71,7 +83,9 @@ describe('tremora check', () => {
   it('says a mistyped option, a missing value and a stray argument in its own words, quotes balanced', async () => {
     const mistyped = await run('screen', TINY, '--ot', 'x.json');
     expect(mistyped.code).toBe(2);
-    expect(mistyped.err).toContain('tremora screen: unknown option "--ot"; the options are listed below');
+    expect(mistyped.err).toContain(
+      'tremora screen: unknown option "--ot"; the options are listed below',
+    );
     const missing = await run('screen', TINY, '--out');
     expect(missing.err).toContain('tremora screen: option "--out" needs a value');
     const flag = await run('screen', TINY, '--json=yes');
@@ -95,17 +109,32 @@ describe('tremora check', () => {
   });
 
   it('points to no file the project does not have', async () => {
-    for (const verb of ['screen', 'check', 'scenario', 'map', 'motion', 'catalog']) expect((await run(verb, '--help')).out).not.toContain('DESIGN.md');
+    for (const verb of ['screen', 'check', 'scenario', 'map', 'motion', 'catalog'])
+      expect((await run(verb, '--help')).out).not.toContain('DESIGN.md');
   });
 });
 
 describe('tremora motion --json', () => {
   it('prints the median in g and the sigmas in natural-log units', async () => {
-    const { code, out } = await run('motion', '--model', 'Cornell79', '--magnitude', '6.5', '--rjb', '20', '--json');
+    const { code, out } = await run(
+      'motion',
+      '--model',
+      'Cornell79',
+      '--magnitude',
+      '6.5',
+      '--rjb',
+      '20',
+      '--json',
+    );
     expect(code).toBe(0);
     const result = JSON.parse(out);
     // Default hypocentral depth 10 km: R = sqrt(20² + 10²).
-    expectRelative(result.measures.PGA.median, Math.exp(cornellLnPga(6.5, Math.hypot(20, 10))), 1e-12, 'Cornell et al. (1979) via Baker (2008)');
+    expectRelative(
+      result.measures.PGA.median,
+      Math.exp(cornellLnPga(6.5, Math.hypot(20, 10))),
+      1e-12,
+      'Cornell et al. (1979) via Baker (2008)',
+    );
     expect(result.measures.PGA).toMatchObject({ unit: 'g', sigma: 0.57, tau: 0, phi: 0.57 });
   });
 
@@ -119,28 +148,77 @@ describe('tremora motion --json', () => {
   });
 
   it('for the subduction model: the hypocentral distance it used, only the assumptions it reads, a derived PGV said so', async () => {
-    const slab = await run('motion', '--model', 'AGA16', '--magnitude', '7', '--rjb', '30', '--setting', 'intraslab');
+    const slab = await run(
+      'motion',
+      '--model',
+      'AGA16',
+      '--magnitude',
+      '7',
+      '--rjb',
+      '30',
+      '--setting',
+      'intraslab',
+    );
     expect(slab.code).toBe(0);
     // Default intraslab hypocentral depth 60 km: Rhypo = sqrt(30² + 60²) = 67.08 km (geometry).
     expect(slab.out).toContain("distance in the model's equations: Rhypo (hypocentral) 67.1 km");
     expect(slab.out).toContain('Rhypo 67.1 km');
-    const iface = await run('motion', '--model', 'AGA16', '--magnitude', '8', '--rjb', '0', '--rrup', '40', '--setting', 'interface');
+    const iface = await run(
+      'motion',
+      '--model',
+      'AGA16',
+      '--magnitude',
+      '8',
+      '--rjb',
+      '0',
+      '--rrup',
+      '40',
+      '--setting',
+      'interface',
+    );
     expect(iface.out).toContain("distance in the model's equations: Rrup 40 km");
     const assumed = iface.out.split('\n').find((l) => l.startsWith('assumed:')) ?? '';
     // Abrahamson et al. (2016) interface equations read M, Rrup and Vs30 only.
     expect(assumed).not.toMatch(/hypoDepthKm|dipDeg|widthKm|rxKm|mechanism/);
     expect(iface.out).toMatch(/not read by AGA16 for interface earthquakes: .*hypoDepthKm/);
-    expect(iface.out).toMatch(/PGV .*derived, not predicted by the model: PGV derived from SA\(0\.5 s\) \/ 20 \(Bommer & Alarcón 2006\)/);
-    const json = JSON.parse((await run('motion', '--model', 'AGA16', '--magnitude', '8', '--rjb', '0', '--rrup', '40', '--setting', 'interface', '--json')).out);
+    expect(iface.out).toMatch(
+      /PGV .*derived, not predicted by the model: PGV derived from SA\(0\.5 s\) \/ 20 \(Bommer & Alarcón 2006\)/,
+    );
+    const json = JSON.parse(
+      (
+        await run(
+          'motion',
+          '--model',
+          'AGA16',
+          '--magnitude',
+          '8',
+          '--rjb',
+          '0',
+          '--rrup',
+          '40',
+          '--setting',
+          'interface',
+          '--json',
+        )
+      ).out,
+    );
     expect(json.distanceUsed).toBe('rrupKm');
     expect(json.measures.PGV.derived).toMatch(/Bommer & Alarcón 2006/);
     expect(json.measures.PGA.derived).toBeNull();
   });
 
   it('takes a model name in any case', async () => {
-    const lower = JSON.parse((await run('motion', '--model', 'cornell79', '--magnitude', '6.5', '--rjb', '20', '--json')).out);
+    const lower = JSON.parse(
+      (await run('motion', '--model', 'cornell79', '--magnitude', '6.5', '--rjb', '20', '--json'))
+        .out,
+    );
     expect(lower.model).toBe('Cornell79');
-    expectRelative(lower.measures.PGA.median, Math.exp(cornellLnPga(6.5, Math.hypot(20, 10))), 1e-12, 'Cornell et al. (1979) via Baker (2008)');
+    expectRelative(
+      lower.measures.PGA.median,
+      Math.exp(cornellLnPga(6.5, Math.hypot(20, 10))),
+      1e-12,
+      'Cornell et al. (1979) via Baker (2008)',
+    );
   });
 });
 
@@ -150,8 +228,21 @@ describe('tremora screen', () => {
     expect(code).toBe(0);
     const result = JSON.parse(out);
     const [c] = result.communities;
-    expect(Object.keys(c)).toEqual(expect.arrayContaining(['curves', 'atReturnPeriod', 'chanceOfExceeding', 'intensity', 'deaggregation', 'nearestFaults', 'band']));
-    expect(result.provenance).toMatchObject({ tool: 'tremora', models: { crustal: [{ model: 'Cornell79', weight: 1 }] } });
+    expect(Object.keys(c)).toEqual(
+      expect.arrayContaining([
+        'curves',
+        'atReturnPeriod',
+        'chanceOfExceeding',
+        'intensity',
+        'deaggregation',
+        'nearestFaults',
+        'band',
+      ]),
+    );
+    expect(result.provenance).toMatchObject({
+      tool: 'tremora',
+      models: { crustal: [{ model: 'Cornell79', weight: 1 }] },
+    });
     expect(result.provenance.inputHash).toMatch(/^[0-9a-f]{64}$/);
     // One M 6.5 event a century, 10 km straight below: rate(PGA > x) = 0.01 P(ε > e) with the
     // lognormal truncated at ±3σ (Baker 2008 eq. for the hazard integral).
@@ -159,7 +250,8 @@ describe('tremora screen', () => {
     const q3 = normalSurvival(3);
     c.curves.PGA.levels.forEach((level: number, i: number) => {
       const e = (Math.log(level) - lnMedian) / 0.57;
-      const expected = e >= 3 ? 0 : e <= -3 ? 0.01 : (0.01 * (normalSurvival(e) - q3)) / (1 - 2 * q3);
+      const expected =
+        e >= 3 ? 0 : e <= -3 ? 0.01 : (0.01 * (normalSurvival(e) - q3)) / (1 - 2 * q3);
       expectRelative(c.curves.PGA.annualRate[i], expected, 1e-9, `annual rate at ${level} g`);
     });
   });
@@ -198,10 +290,23 @@ describe('tremora screen', () => {
 
 describe('tremora scenario', () => {
   it('prints medians at every community and exits 2 on an unknown source', async () => {
-    const { code, out } = await run('scenario', TINY, '--source', 'below', '--magnitude', '6.5', '--json');
+    const { code, out } = await run(
+      'scenario',
+      TINY,
+      '--source',
+      'below',
+      '--magnitude',
+      '6.5',
+      '--json',
+    );
     expect(code).toBe(0);
     const result = JSON.parse(out);
-    expectRelative(result.communities[0].motions.PGA.median, Math.exp(cornellLnPga(6.5, 10)), 1e-6, 'Cornell et al. (1979) at R = 10 km');
+    expectRelative(
+      result.communities[0].motions.PGA.median,
+      Math.exp(cornellLnPga(6.5, 10)),
+      1e-6,
+      'Cornell et al. (1979) at R = 10 km',
+    );
     const bad = await run('scenario', TINY, '--source', 'nope', '--magnitude', '6.5');
     expect(bad.code).toBe(2);
     expect(bad.err).toContain('sourceId: unknown source "nope"');

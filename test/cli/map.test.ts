@@ -41,13 +41,33 @@ describe('tremora map', () => {
   it('writes the 475-year PGA as GeoJSON points with value and unit, draws progress on stderr and sums up on stdout', async () => {
     const dir = await mkdtemp(join(tmpdir(), 'tremora-map-'));
     const out = join(dir, 'map.geojson');
-    const { code, out: stdout, err } = await run('map', TINY, '--measure', 'PGA', '--return-period', '475', '--spacing', '4', `--bounds=${BOX}`, '--out', out, '--threads', '1');
+    const {
+      code,
+      out: stdout,
+      err,
+    } = await run(
+      'map',
+      TINY,
+      '--measure',
+      'PGA',
+      '--return-period',
+      '475',
+      '--spacing',
+      '4',
+      `--bounds=${BOX}`,
+      '--out',
+      out,
+      '--threads',
+      '1',
+    );
     expect(code).toBe(0);
     const doc = JSON.parse(await readFile(out, 'utf8'));
     expectMapGeoJson(doc, 'g');
     expect(doc.map.quantity).toEqual({ kind: 'return-period', returnPeriodYears: 475 });
     expect(err).toMatch(/map \[#+\] 100%/);
-    expect(stdout).toContain(`points (${doc.map.columns} x ${doc.map.rows}) every 4 km, written to ${out}`);
+    expect(stdout).toContain(
+      `points (${doc.map.columns} x ${doc.map.rows}) every 4 km, written to ${out}`,
+    );
     expect(stdout).toContain('not design values');
     // The village sits on the source: the highest value is near it, and values fall away from it.
     const values = doc.features.map((f: any) => f.properties.value ?? 0);
@@ -55,20 +75,53 @@ describe('tremora map', () => {
   });
 
   it('with --json and no --out prints only the GeoJSON; with --level and --horizon maps chances (unit: probability)', async () => {
-    const { code, out, err } = await run('map', TINY, '--level', '0.2', '--horizon', '50', '--spacing', '8', `--bounds=${BOX}`, '--json', '--threads', '1');
+    const { code, out, err } = await run(
+      'map',
+      TINY,
+      '--level',
+      '0.2',
+      '--horizon',
+      '50',
+      '--spacing',
+      '8',
+      `--bounds=${BOX}`,
+      '--json',
+      '--threads',
+      '1',
+    );
     expect(code).toBe(0);
     expect(err).toBe('');
     const doc = JSON.parse(out);
     expectMapGeoJson(doc, 'probability');
-    for (const f of doc.features) expect(f.properties.value >= 0 && f.properties.value <= 1).toBe(true);
+    for (const f of doc.features)
+      expect(f.properties.value >= 0 && f.properties.value <= 1).toBe(true);
   });
 
   it('refuses a missing spacing, a return period with a level, and bad bounds (usage, exit 2)', async () => {
     expect((await run('map', TINY, '--return-period', '475')).code).toBe(2);
-    const both = await run('map', TINY, '--return-period', '475', '--level', '0.1', '--horizon', '50', '--spacing', '5');
+    const both = await run(
+      'map',
+      TINY,
+      '--return-period',
+      '475',
+      '--level',
+      '0.1',
+      '--horizon',
+      '50',
+      '--spacing',
+      '5',
+    );
     expect(both.code).toBe(2);
     expect(both.err).toContain('not both');
-    const bounds = await run('map', TINY, '--return-period', '475', '--spacing', '5', '--bounds=1,2,3');
+    const bounds = await run(
+      'map',
+      TINY,
+      '--return-period',
+      '475',
+      '--spacing',
+      '5',
+      '--bounds=1,2,3',
+    );
     expect(bounds.err).toContain('--bounds: expected four numbers');
   });
 });

@@ -21,9 +21,21 @@ describe('tremora tsunami', () => {
   it('lists every coastal community of the demo with its id and first arrival in whole minutes (--json)', async () => {
     const { code, out } = await run('tsunami', DEMO, '--source', 'orle-interface', '--json');
     expect(code).toBe(0);
-    const result = JSON.parse(out) as { communities: { id: string; firstArrivalMinutes: number; latestMinutes: number; highGround: { kind: string } }[]; caution: string };
-    const demo = JSON.parse(await readFile(DEMO, 'utf8')) as { communities: { id: string; coastal: boolean }[] };
-    expect(result.communities.map((c) => c.id)).toEqual(demo.communities.filter((c) => c.coastal).map((c) => c.id));
+    const result = JSON.parse(out) as {
+      communities: {
+        id: string;
+        firstArrivalMinutes: number;
+        latestMinutes: number;
+        highGround: { kind: string };
+      }[];
+      caution: string;
+    };
+    const demo = JSON.parse(await readFile(DEMO, 'utf8')) as {
+      communities: { id: string; coastal: boolean }[];
+    };
+    expect(result.communities.map((c) => c.id)).toEqual(
+      demo.communities.filter((c) => c.coastal).map((c) => c.id),
+    );
     for (const c of result.communities) {
       expect(Number.isInteger(c.firstArrivalMinutes) && c.firstArrivalMinutes >= 0).toBe(true);
       expect(c.latestMinutes).toBeGreaterThan(c.firstArrivalMinutes);
@@ -50,7 +62,9 @@ describe('tremora tsunami', () => {
 
   it('names a community flagged coastal far from the sea, and exits 2', async () => {
     const dir = await mkdtemp(join(tmpdir(), 'tremora-tsunami-'));
-    const study = JSON.parse(await readFile(DEMO, 'utf8')) as { communities: { id: string; coastal: boolean }[] };
+    const study = JSON.parse(await readFile(DEMO, 'utf8')) as {
+      communities: { id: string; coastal: boolean }[];
+    };
     for (const c of study.communities) if (c.id === 'drumarrow') c.coastal = true;
     await writeFile(join(dir, 'inland.study.json'), JSON.stringify(study));
     await copyFile(DEMO_TERRAIN, join(dir, 'demo-terrain.asc'));

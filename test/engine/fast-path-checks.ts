@@ -15,9 +15,18 @@ export const RELATIVE = 1e-6;
 export const RATE_FLOOR = 1e-15;
 
 const near = (actual: number, expected: number, what: string): void =>
-  expectClose(actual, expected, RELATIVE * Math.abs(expected) + RATE_FLOOR, `${what}: fast path against the reference path`);
+  expectClose(
+    actual,
+    expected,
+    RELATIVE * Math.abs(expected) + RATE_FLOOR,
+    `${what}: fast path against the reference path`,
+  );
 
-const nearOrNull = (actual: number | null | undefined, expected: number | null | undefined, what: string): void => {
+const nearOrNull = (
+  actual: number | null | undefined,
+  expected: number | null | undefined,
+  what: string,
+): void => {
   if (expected === null || expected === undefined) expect(actual, what).toBe(expected);
   else near(actual as number, expected, what);
 };
@@ -28,18 +37,35 @@ export function expectCommunityMatches(fast: CommunityResult, reference: Communi
   for (const [key, curve] of Object.entries(reference.curves)) {
     const f = fast.curves[key]!;
     expect(f.levels).toEqual(curve.levels);
-    curve.annualRate.forEach((rate, j) => near(f.annualRate[j]!, rate, `${id} ${key} mean rate at level ${j}`));
-    expect(f.branches?.map((b) => [b.label, b.weight])).toEqual(curve.branches?.map((b) => [b.label, b.weight]));
-    curve.branches?.forEach((b, i) => b.annualRate.forEach((rate, j) => near(f.branches![i]!.annualRate[j]!, rate, `${id} ${key} ${b.label} at level ${j}`)));
+    curve.annualRate.forEach((rate, j) =>
+      near(f.annualRate[j]!, rate, `${id} ${key} mean rate at level ${j}`),
+    );
+    expect(f.branches?.map((b) => [b.label, b.weight])).toEqual(
+      curve.branches?.map((b) => [b.label, b.weight]),
+    );
+    curve.branches?.forEach((b, i) =>
+      b.annualRate.forEach((rate, j) =>
+        near(f.branches![i]!.annualRate[j]!, rate, `${id} ${key} ${b.label} at level ${j}`),
+      ),
+    );
   }
   for (const [years, byMeasure] of Object.entries(reference.atReturnPeriod)) {
-    for (const [key, level] of Object.entries(byMeasure)) nearOrNull(fast.atReturnPeriod[years]![key], level, `${id} ${years}-year ${key}`);
+    for (const [key, level] of Object.entries(byMeasure))
+      nearOrNull(fast.atReturnPeriod[years]![key], level, `${id} ${years}-year ${key}`);
   }
   expect(fast.returnPeriodStatus).toEqual(reference.returnPeriodStatus);
   for (const [years, byMeasure] of Object.entries(reference.chanceOfExceeding)) {
-    for (const [key, chances] of Object.entries(byMeasure)) chances.forEach((p, j) => near(fast.chanceOfExceeding[years]![key]![j]!, p, `${id} chance in ${years} years, ${key} level ${j}`));
+    for (const [key, chances] of Object.entries(byMeasure))
+      chances.forEach((p, j) =>
+        near(
+          fast.chanceOfExceeding[years]![key]![j]!,
+          p,
+          `${id} chance in ${years} years, ${key} level ${j}`,
+        ),
+      );
   }
-  for (const [years, value] of Object.entries(reference.intensity.atReturnPeriod)) nearOrNull(fast.intensity.atReturnPeriod[years]!.mmi, value.mmi, `${id} MMI at ${years} years`);
+  for (const [years, value] of Object.entries(reference.intensity.atReturnPeriod))
+    nearOrNull(fast.intensity.atReturnPeriod[years]!.mmi, value.mmi, `${id} MMI at ${years} years`);
   expect(fast.band.id).toBe(reference.band.id);
   expect(fast.nearestFaults).toEqual(reference.nearestFaults);
   expect(fast.warnings).toEqual(reference.warnings);
@@ -47,13 +73,23 @@ export function expectCommunityMatches(fast: CommunityResult, reference: Communi
   for (const [years, d] of Object.entries(reference.deaggregation)) {
     const f = fast.deaggregation[years]!;
     near(f.level, d.level, `${id} deaggregated level at ${years} years`);
-    expect(f.bySource.map((s) => s.sourceId).sort()).toEqual(d.bySource.map((s) => s.sourceId).sort());
-    for (const s of d.bySource) expectClose(f.bySource.find((x) => x.sourceId === s.sourceId)!.share, s.share, RELATIVE, `${id} share of ${s.sourceId} at ${years} years`);
+    expect(f.bySource.map((s) => s.sourceId).sort()).toEqual(
+      d.bySource.map((s) => s.sourceId).sort(),
+    );
+    for (const s of d.bySource)
+      expectClose(
+        f.bySource.find((x) => x.sourceId === s.sourceId)!.share,
+        s.share,
+        RELATIVE,
+        `${id} share of ${s.sourceId} at ${years} years`,
+      );
     near(f.mean.magnitude, d.mean.magnitude, `${id} mean M at ${years} years`);
     near(f.mean.distanceKm, d.mean.distanceKm, `${id} mean R at ${years} years`);
     expectClose(f.mean.epsilon, d.mean.epsilon, RELATIVE, `${id} mean ε at ${years} years`);
     expect(f.bins.length).toBe(d.bins.length);
-    d.bins.forEach((b, i) => expectClose(f.bins[i]!.share, b.share, RELATIVE, `${id} bin ${i} share at ${years} years`));
+    d.bins.forEach((b, i) =>
+      expectClose(f.bins[i]!.share, b.share, RELATIVE, `${id} bin ${i} share at ${years} years`),
+    );
   }
 }
 

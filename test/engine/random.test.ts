@@ -10,7 +10,9 @@ describe('xoshiro128**', () => {
     // next state [7, 0, 1026, 12288] gives 0; then [12295, 1029, 1029, 25165824] gives
     // 5145·128·9 = 5927040; then s1 = 12295 gives 61475·128·9 = 70819200.
     const r = randomFromState([1, 2, 3, 4]);
-    expect([r.nextUint32(), r.nextUint32(), r.nextUint32(), r.nextUint32()]).toEqual([11520, 0, 5927040, 70819200]);
+    expect([r.nextUint32(), r.nextUint32(), r.nextUint32(), r.nextUint32()]).toEqual([
+      11520, 0, 5927040, 70819200,
+    ]);
   });
 
   it('refuses the all-zero state, which the generator never leaves', () => {
@@ -71,7 +73,12 @@ describe('uniform floats', () => {
     expect(outside).toBe(0);
     const mean = sum / n;
     expectClose(mean, 0.5, 4 * Math.sqrt(1 / 12 / n), 'uniform mean 1/2 (textbook)');
-    expectClose(sumSq / n - mean * mean, 1 / 12, 4 * Math.sqrt((1 / 80 - 1 / 144) / n), 'uniform variance 1/12 (textbook)');
+    expectClose(
+      sumSq / n - mean * mean,
+      1 / 12,
+      4 * Math.sqrt((1 / 80 - 1 / 144) / n),
+      'uniform variance 1/12 (textbook)',
+    );
   });
 
   it('nextOpenFloat never returns 0', () => {

@@ -12,7 +12,9 @@ import { referenceScreening } from '../helpers/reference-hazard/reference-screen
 vi.mock('../../api/engine/screen-study.ts', async (importOriginal) => {
   const original = await importOriginal<typeof import('../../api/engine/screen-study.ts')>();
   const screenStudy = (study: Study, options: ScreenStudyOptions = {}) =>
-    options.onProgress || options.shouldStop ? original.screenStudy(study, options) : referenceScreening(study, options);
+    options.onProgress || options.shouldStop
+      ? original.screenStudy(study, options)
+      : referenceScreening(study, options);
   return { ...original, screenStudy };
 });
 

@@ -55,7 +55,15 @@ const zone: ZoneSource = {
   ],
   depthKm: 8,
 };
-const community = (id: string, lon: number): Community => ({ id, name: id, lon, lat: -47, vs30: 760, vs30Basis: 'measured', coastal: false });
+const community = (id: string, lon: number): Community => ({
+  id,
+  name: id,
+  lon,
+  lat: -47,
+  vs30: 760,
+  vs30Basis: 'measured',
+  coastal: false,
+});
 
 const study: Study = {
   name: 'Two-source test',
@@ -76,7 +84,10 @@ const study: Study = {
 };
 
 const result = screenStudy(study);
-const [inside, far] = result.communities as [(typeof result.communities)[0], (typeof result.communities)[0]];
+const [inside, far] = result.communities as [
+  (typeof result.communities)[0],
+  (typeof result.communities)[0],
+];
 const pga = inside.curves.PGA!;
 
 describe('screenStudy: community inside the zone', () => {
@@ -86,38 +97,87 @@ describe('screenStudy: community inside the zone', () => {
     const { frame, ruptures } = discretiseStudy(study);
     const site = frame.toLocal([-150.2, -47]);
     for (const r of ruptures) {
-      const lnMedian = cornell79LnPga(r.context.magnitude, ruptureDistances(r.surface, site).rhypoKm);
+      const lnMedian = cornell79LnPga(
+        r.context.magnitude,
+        ruptureDistances(r.surface, site).rhypoKm,
+      );
       expect(lnMedian - 3 * 0.57).toBeGreaterThan(Math.log(0.001));
     }
-    expectRelative(pga.annualRate[0]!, 0.06, 1e-12, 'sum of the two sources\' annual rates (fixed 0.01 + G-R rate 0.05)');
+    expectRelative(
+      pga.annualRate[0]!,
+      0.06,
+      1e-12,
+      "sum of the two sources' annual rates (fixed 0.01 + G-R rate 0.05)",
+    );
   });
 
-  it('median-only variant (truncation 0) equals Σ rates of the engine\'s ruptures whose Cornell (1979) median exceeds each level (checks the sum, not the discretisation)', () => {
-    const stepStudy: Study = { ...study, communities: [study.communities[0]!], settings: { ...study.settings, truncationSigma: 0 } };
+  it("median-only variant (truncation 0) equals Σ rates of the engine's ruptures whose Cornell (1979) median exceeds each level (checks the sum, not the discretisation)", () => {
+    const stepStudy: Study = {
+      ...study,
+      communities: [study.communities[0]!],
+      settings: { ...study.settings, truncationSigma: 0 },
+    };
     const stepResult = screenStudy(stepStudy).communities[0]!;
     const { frame, ruptures: all } = discretiseStudy(stepStudy);
     const site = frame.toLocal([-150.2, -47]);
     // A refined zone cell counts as itself or as its squares by the site's distance (geometry/cell-refinement.ts).
-    const ruptures = all.filter((r) => !r.cellUse || cellUsedAt(r.cellUse.near, r.cellUse.centre.x, r.cellUse.centre.y, r.cellUse.radiusKm, site.x, site.y));
-    const medians = ruptures.map((r) => cornell79LnPga(r.context.magnitude, ruptureDistances(r.surface, site).rhypoKm));
+    const ruptures = all.filter(
+      (r) =>
+        !r.cellUse ||
+        cellUsedAt(
+          r.cellUse.near,
+          r.cellUse.centre.x,
+          r.cellUse.centre.y,
+          r.cellUse.radiusKm,
+          site.x,
+          site.y,
+        ),
+    );
+    const medians = ruptures.map((r) =>
+      cornell79LnPga(r.context.magnitude, ruptureDistances(r.surface, site).rhypoKm),
+    );
     const levels = stepStudy.settings.levels.PGA!;
     levels.forEach((x, j) => {
-      const expected = ruptures.reduce((sum, r, i) => (medians[i]! > Math.log(x) ? sum + r.annualRate : sum), 0);
+      const expected = ruptures.reduce(
+        (sum, r, i) => (medians[i]! > Math.log(x) ? sum + r.annualRate : sum),
+        0,
+      );
       if (expected === 0) expect(stepResult.curves.PGA!.annualRate[j]).toBe(0);
-      else expectRelative(stepResult.curves.PGA!.annualRate[j]!, expected, 1e-12, `step-function hazard at ${x} g, summed over discretiseStudy's ruptures`);
+      else
+        expectRelative(
+          stepResult.curves.PGA!.annualRate[j]!,
+          expected,
+          1e-12,
+          `step-function hazard at ${x} g, summed over discretiseStudy's ruptures`,
+        );
     });
     // Deaggregation by source at 475 years: each source's share of the rupture rates above the level.
     const d = stepResult.deaggregation['475']!;
     const above = (sourceId: string) =>
-      ruptures.reduce((sum, r, i) => (r.sourceId === sourceId && medians[i]! > Math.log(d.level) ? sum + r.annualRate : sum), 0);
+      ruptures.reduce(
+        (sum, r, i) =>
+          r.sourceId === sourceId && medians[i]! > Math.log(d.level) ? sum + r.annualRate : sum,
+        0,
+      );
     const total = above('test-fault') + above('test-zone');
-    for (const s of d.bySource) expectRelative(s.share, above(s.sourceId) / total, 1e-12, `share of ${s.sourceId}, summed over discretiseStudy's ruptures`);
+    for (const s of d.bySource)
+      expectRelative(
+        s.share,
+        above(s.sourceId) / total,
+        1e-12,
+        `share of ${s.sourceId}, summed over discretiseStudy's ruptures`,
+      );
   });
 
   it('is non-increasing, with Poisson chances 1 − exp(−50 λ) (Poisson model)', () => {
     pga.annualRate.slice(1).forEach((r, i) => expect(r).toBeLessThanOrEqual(pga.annualRate[i]!));
     pga.annualRate.forEach((rate, i) =>
-      expectClose(inside.chanceOfExceeding['50']!.PGA![i]!, -Math.expm1(-50 * rate), 1e-15, 'Poisson 1 − exp(−λt)'),
+      expectClose(
+        inside.chanceOfExceeding['50']!.PGA![i]!,
+        -Math.expm1(-50 * rate),
+        1e-15,
+        'Poisson 1 − exp(−λt)',
+      ),
     );
   });
 
@@ -126,51 +186,99 @@ describe('screenStudy: community inside the zone', () => {
       const level = inside.atReturnPeriod[String(years)]!.PGA!;
       expect(inside.returnPeriodStatus[String(years)]!.PGA).toBe('ok');
       const j = pga.levels.findIndex((x) => x > level);
-      const [x0, x1, r0, r1] = [pga.levels[j - 1]!, pga.levels[j]!, pga.annualRate[j - 1]!, pga.annualRate[j]!];
-      const rate = Math.exp(Math.log(r0) + (Math.log(level / x0) / Math.log(x1 / x0)) * Math.log(r1 / r0));
+      const [x0, x1, r0, r1] = [
+        pga.levels[j - 1]!,
+        pga.levels[j]!,
+        pga.annualRate[j - 1]!,
+        pga.annualRate[j]!,
+      ];
+      const rate = Math.exp(
+        Math.log(r0) + (Math.log(level / x0) / Math.log(x1 / x0)) * Math.log(r1 / r0),
+      );
       expectRelative(rate, 1 / years, 1e-9, 'log–log interpolation, hand computation');
     }
   });
 
   it('intensity: MMI at 475 years is Worden et al. (2012) of the 475-year PGA; band from it', () => {
     const mmi = inside.intensity.atReturnPeriod['475']!.mmi!;
-    expectClose(mmi, mmiFromPga(inside.atReturnPeriod['475']!.PGA!), 1e-12, 'Worden 2012 of the PGA (from memory)');
+    expectClose(
+      mmi,
+      mmiFromPga(inside.atReturnPeriod['475']!.PGA!),
+      1e-12,
+      'Worden 2012 of the PGA (from memory)',
+    );
     expect(inside.band.mmi475).toBe(mmi);
-    const expectedBand = mmi >= 8 ? 'refer-first' : mmi >= 7 ? 'refer-soon' : mmi >= 6 ? 'prepare' : 'inform';
+    const expectedBand =
+      mmi >= 8 ? 'refer-first' : mmi >= 7 ? 'refer-soon' : mmi >= 6 ? 'prepare' : 'inform';
     expect(inside.band.id).toBe(expectedBand);
     // Chance of reaching VI (MMI ≥ 5.5) in 50 years with the conversion's scatter (σ 0.73 MMI,
     // Worden et al. 2012, from memory), summed independently by parts: λ(y0) P(y0) + ∫ λ(y) dP(y)
     // over the computed levels, λ read log–log, P(y) = 1 − Φ((5.5 − MMI(y)) / σ).
     const chance = (y: number) => normalSurvival((5.5 - mmiFromPga(y)) / 0.73);
     const lambda = (y: number) => {
-      const j = Math.max(1, pga.levels.findIndex((x) => x >= y));
-      const [x0, x1, r0, r1] = [pga.levels[j - 1]!, pga.levels[j]!, pga.annualRate[j - 1]!, pga.annualRate[j]!];
-      return r1 > 0 ? Math.exp(Math.log(r0) + (Math.log(y / x0) / Math.log(x1 / x0)) * Math.log(r1 / r0)) : r0 + ((r1 - r0) * Math.log(y / x0)) / Math.log(x1 / x0);
+      const j = Math.max(
+        1,
+        pga.levels.findIndex((x) => x >= y),
+      );
+      const [x0, x1, r0, r1] = [
+        pga.levels[j - 1]!,
+        pga.levels[j]!,
+        pga.annualRate[j - 1]!,
+        pga.annualRate[j]!,
+      ];
+      return r1 > 0
+        ? Math.exp(Math.log(r0) + (Math.log(y / x0) / Math.log(x1 / x0)) * Math.log(r1 / r0))
+        : r0 + ((r1 - r0) * Math.log(y / x0)) / Math.log(x1 / x0);
     };
     const [lo, hi] = [pga.levels[0]!, pga.levels.at(-1)!];
     const n = 20000;
     let rate = lambda(lo) * chance(lo);
     for (let i = 0; i < n; i++) {
-      const ya = lo * (hi / lo) ** (i / n), yb = lo * (hi / lo) ** ((i + 1) / n);
+      const ya = lo * (hi / lo) ** (i / n),
+        yb = lo * (hi / lo) ** ((i + 1) / n);
       rate += lambda(Math.sqrt(ya * yb)) * (chance(yb) - chance(ya));
     }
-    expectRelative(inside.intensity.chanceOfReaching['50']!.VI, -Math.expm1(-50 * rate), 1e-3, 'Poisson of the curve convolved with the conversion scatter, summed by parts');
-    expect(inside.intensity.conversion).toEqual({ measure: 'PGA', relation: 'Worden et al. (2012)', sigmaMmi: 0.73 });
+    expectRelative(
+      inside.intensity.chanceOfReaching['50']!.VI,
+      -Math.expm1(-50 * rate),
+      1e-3,
+      'Poisson of the curve convolved with the conversion scatter, summed by parts',
+    );
+    expect(inside.intensity.conversion).toEqual({
+      measure: 'PGA',
+      relation: 'Worden et al. (2012)',
+      sigmaMmi: 0.73,
+    });
   });
 
   it('intensity from the PGV relation when the settings ask for it, PGV computed even when not listed', () => {
     const base = allKindsStudy({ measures: ['PGA'], intensityMeasure: 'PGV' });
-    const viaPgv = screenStudy({ ...base, communities: base.communities.slice(0, 1) }).communities[0]!;
-    expect(viaPgv.intensity.conversion).toEqual({ measure: 'PGV', relation: 'Worden et al. (2012)', sigmaMmi: 0.65 });
+    const viaPgv = screenStudy({ ...base, communities: base.communities.slice(0, 1) })
+      .communities[0]!;
+    expect(viaPgv.intensity.conversion).toEqual({
+      measure: 'PGV',
+      relation: 'Worden et al. (2012)',
+      sigmaMmi: 0.65,
+    });
     expect(viaPgv.intensity.atReturnPeriod['475']!.fromMeasure).toBe('PGV');
     expect(Object.keys(viaPgv.curves)).toEqual(['PGA']);
   });
 
-  it('deaggregation: shares sum to 1 within 1e-9; the fault\'s magnitudes are all 6.5, the zone\'s 5–6.5', () => {
+  it("deaggregation: shares sum to 1 within 1e-9; the fault's magnitudes are all 6.5, the zone's 5–6.5", () => {
     for (const years of ['475', '2475']) {
       const d = inside.deaggregation[years]!;
-      expectClose(d.bySource.reduce((s, x) => s + x.share, 0), 1, 1e-9, 'source shares sum to 1');
-      expectClose(d.bins.reduce((s, x) => s + x.share, 0), 1, 1e-9, 'bin shares sum to 1');
+      expectClose(
+        d.bySource.reduce((s, x) => s + x.share, 0),
+        1,
+        1e-9,
+        'source shares sum to 1',
+      );
+      expectClose(
+        d.bins.reduce((s, x) => s + x.share, 0),
+        1,
+        1e-9,
+        'bin shares sum to 1',
+      );
       expect(d.mean.magnitude).toBeGreaterThanOrEqual(5);
       expect(d.mean.magnitude).toBeLessThanOrEqual(6.5);
       expect(d.measure).toBe('PGA');
@@ -183,7 +291,12 @@ describe('screenStudy: community inside the zone', () => {
     expect(inside.nearestFaults.length).toBe(1);
     expect(nearest!.sourceId).toBe('test-fault');
     // The closest point of a meridian to a point on the same parallel is a hair poleward; 0.05 km covers it and the frame's scale.
-    expectClose(nearest!.distanceKm, (g.s12 as number) / 1000, 0.05, 'geodesic distance to the trace (geographiclib)');
+    expectClose(
+      nearest!.distanceKm,
+      (g.s12 as number) / 1000,
+      0.05,
+      'geodesic distance to the trace (geographiclib)',
+    );
     expectClose(nearest!.bearingDeg, 90, 0.5, 'due east, common sense of the geometry');
   });
 });
@@ -247,7 +360,11 @@ describe('screenStudy: PGV from SA(0.5 s) for a model without PGV (AGA16)', () =
     communities: [study.communities[0]!],
     sources: [interfaceFault],
     groundMotion: { crustal: [], interface: [{ model: 'AGA16', weight: 1 }], intraslab: [] },
-    settings: { ...study.settings, measures: ['SA(0.5)', 'PGV'], levels: { 'SA(0.5)': saLevels, PGV: saLevels.map((x) => x * gPerPgv) } },
+    settings: {
+      ...study.settings,
+      measures: ['SA(0.5)', 'PGV'],
+      levels: { 'SA(0.5)': saLevels, PGV: saLevels.map((x) => x * gPerPgv) },
+    },
   };
   const out = screenStudy(pgvStudy);
 
@@ -260,7 +377,9 @@ describe('screenStudy: PGV from SA(0.5 s) for a model without PGV (AGA16)', () =
     const sa = c.curves['SA(0.5)']!.annualRate;
     const pgv = c.curves.PGV!.annualRate;
     expect(sa[0]).toBeGreaterThan(0);
-    sa.forEach((rate, i) => expectRelative(pgv[i]!, rate, 1e-12, `Bommer & Alarcón (2006) scaling at level ${i}`));
+    sa.forEach((rate, i) =>
+      expectRelative(pgv[i]!, rate, 1e-12, `Bommer & Alarcón (2006) scaling at level ${i}`),
+    );
   });
 
   it('reads intensity from PGA, computed though not a listed measure', () => {
@@ -271,9 +390,14 @@ describe('screenStudy: PGV from SA(0.5 s) for a model without PGV (AGA16)', () =
 
   it('one source of 0.002 a year cannot reach the 475-year rate (1/475 > 0.002): no level, no deaggregation', () => {
     const c = out.communities[0]!;
-    expect(c.returnPeriodStatus['475']).toEqual({ 'SA(0.5)': 'below-lowest-level', PGV: 'below-lowest-level' });
+    expect(c.returnPeriodStatus['475']).toEqual({
+      'SA(0.5)': 'below-lowest-level',
+      PGV: 'below-lowest-level',
+    });
     expect(c.deaggregation['475']).toBeUndefined();
-    expect(c.warnings).toContain('no deaggregation at 475 years: the 475-year SA(0.5) is below the lowest computed level');
+    expect(c.warnings).toContain(
+      'no deaggregation at 475 years: the 475-year SA(0.5) is below the lowest computed level',
+    );
   });
 
   it('deaggregates the first measure at 2475 years: one source, every rupture M 8, so mean and mode M are 8', () => {
@@ -292,9 +416,23 @@ describe('screenStudy: bad branches', () => {
     expect(() => screenStudy(bad)).toThrow(/groundMotion\.crustal/);
   });
   it('refuses weights that do not sum to 1, and unknown models', () => {
-    const weights: Study = { ...study, groundMotion: { crustal: [{ model: 'Cornell79', weight: 0.5 }], interface: [], intraslab: [] } };
+    const weights: Study = {
+      ...study,
+      groundMotion: {
+        crustal: [{ model: 'Cornell79', weight: 0.5 }],
+        interface: [],
+        intraslab: [],
+      },
+    };
     expect(() => screenStudy(weights)).toThrow(/summing to 1, got 0.5/);
-    const unknown: Study = { ...study, groundMotion: { crustal: [{ model: 'NoSuchModel', weight: 1 }], interface: [], intraslab: [] } };
+    const unknown: Study = {
+      ...study,
+      groundMotion: {
+        crustal: [{ model: 'NoSuchModel', weight: 1 }],
+        interface: [],
+        intraslab: [],
+      },
+    };
     expect(() => screenStudy(unknown)).toThrow(UnknownModel);
   });
 });

@@ -37,7 +37,18 @@ export const FIT_CATALOG_CSV = `time,lon,lat,depthKm,magnitude,magnitudeType,id
 export const EAST_ZONE = {
   type: 'Feature',
   properties: { id: 'east-box' },
-  geometry: { type: 'Polygon', coordinates: [[[-139.5, -50.5], [-138.5, -50.5], [-138.5, -49.5], [-139.5, -49.5], [-139.5, -50.5]]] },
+  geometry: {
+    type: 'Polygon',
+    coordinates: [
+      [
+        [-139.5, -50.5],
+        [-138.5, -50.5],
+        [-138.5, -49.5],
+        [-139.5, -49.5],
+        [-139.5, -50.5],
+      ],
+    ],
+  },
 } as const;
 
 /** 2001-01-15 to 2012-01-15: 11 × 365 + 2 leap days = 4017 days, in Julian years (365.25 days). */
@@ -65,20 +76,48 @@ export interface HandFit {
  * b = 0.4342945 / 0.35 = 1.2408414; σb = 2.302585 · 1.2408414² · sqrt(0.58 / 42) = 0.4166176;
  * rate = 7 / 10.997947 = 0.6364824; a = log10(0.6364824) + 1.2408414 · 4.15 = 4.9532781.
  */
-export const DEFAULT_FIT: HandFit = { mc: 4.2, n: 7, bValue: 1.2408414, sigmaB: 0.4166176, rate: 0.6364824, aValue: 4.9532781 };
+export const DEFAULT_FIT: HandFit = {
+  mc: 4.2,
+  n: 7,
+  bValue: 1.2408414,
+  sigmaB: 0.4166176,
+  rate: 0.6364824,
+  aValue: 4.9532781,
+};
 
 /** All magnitude types: ev-08 (4.7) joins: n = 8, mean 36.2 / 8 = 4.525, b = 0.4342945 / 0.375 = 1.1581186; rate 8 / T = 0.7274085. */
-export const ALL_MAGNITUDES_FIT: HandFit = { mc: 4.2, n: 8, bValue: 1.1581186, sigmaB: 0.3236423, rate: 0.7274085, aValue: 4.6679706 };
+export const ALL_MAGNITUDES_FIT: HandFit = {
+  mc: 4.2,
+  n: 8,
+  bValue: 1.1581186,
+  sigmaB: 0.3236423,
+  rate: 0.7274085,
+  aValue: 4.6679706,
+};
 
 /** Not declustered: ev-02 (4.2) stays: n = 8, mean 35.7 / 8 = 4.4625, b = 0.4342945 / 0.3125 = 1.3897423. */
-export const NOT_DECLUSTERED_FIT: HandFit = { mc: 4.2, n: 8, bValue: 1.3897423, sigmaB: 0.482337, rate: 0.7274085, aValue: 5.6292091 };
+export const NOT_DECLUSTERED_FIT: HandFit = {
+  mc: 4.2,
+  n: 8,
+  bValue: 1.3897423,
+  sigmaB: 0.482337,
+  rate: 0.7274085,
+  aValue: 5.6292091,
+};
 
 /**
  * Inside EAST_ZONE after declustering: 8 events (4 outside); bins 4.0 ×3, 4.2 ×2, 4.6, 4.8, 5.0;
  * Mc 4.2; n = 5, mean 22.8 / 5 = 4.56, b = 0.4342945 / 0.41 = 1.0592548; Σ(M − mean)² = 0.512,
  * σb = 2.302585 · 1.0592548² · sqrt(0.512 / 20) = 0.4133677; rate 5 / T = 0.4546303.
  */
-export const EAST_ZONE_FIT: HandFit = { mc: 4.2, n: 5, bValue: 1.0592548, sigmaB: 0.4133677, rate: 0.4546303, aValue: 4.053566 };
+export const EAST_ZONE_FIT: HandFit = {
+  mc: 4.2,
+  n: 5,
+  bValue: 1.0592548,
+  sigmaB: 0.4133677,
+  rate: 0.4546303,
+  aValue: 4.053566,
+};
 
 const WGS84 = geodesic.Geodesic.WGS84;
 
@@ -88,7 +127,14 @@ function from(distanceKm: number, azimuthDeg: number): { lon: number; lat: numbe
   return { lon: p.lon2 as number, lat: p.lat2 as number };
 }
 
-const row = (time: string, distanceKm: number, azimuthDeg: number, magnitude: number, type: string, id: string): string => {
+const row = (
+  time: string,
+  distanceKm: number,
+  azimuthDeg: number,
+  magnitude: number,
+  type: string,
+  id: string,
+): string => {
   const { lon, lat } = from(distanceKm, azimuthDeg);
   return `${time},${lon.toFixed(7)},${lat.toFixed(7)},10,${magnitude.toFixed(1)},${type},${id}`;
 };
@@ -118,10 +164,31 @@ export const FELT_CATALOG_CSV = [
  * Roman numerals name the nearest level (MMI rounded; mmi-roman.ts).
  */
 export const FELT_EXPECTED = {
-  moderate: { pgaG: 0.10273, mmi: 5.8119, roman: 'VI', distanceKm: 30, bearingDeg: 0, compass: 'N' },
+  moderate: {
+    pgaG: 0.10273,
+    mmi: 5.8119,
+    roman: 'VI',
+    distanceKm: 30,
+    bearingDeg: 0,
+    compass: 'N',
+  },
   'small-far': { pgaG: 0.00438911, mmi: 2.7625 },
-  'near-strong': { pgaG: 0.353952, mmi: 7.7997, roman: 'VIII', distanceKm: 5, bearingDeg: 135, compass: 'SE' },
-  'local-scale': { pgaG: 0.199895, mmi: 6.8816, roman: 'VII', distanceKm: 10, bearingDeg: 0, compass: 'N' },
+  'near-strong': {
+    pgaG: 0.353952,
+    mmi: 7.7997,
+    roman: 'VIII',
+    distanceKm: 5,
+    bearingDeg: 135,
+    compass: 'SE',
+  },
+  'local-scale': {
+    pgaG: 0.199895,
+    mmi: 6.8816,
+    roman: 'VII',
+    distanceKm: 10,
+    bearingDeg: 0,
+    compass: 'N',
+  },
 } as const;
 
 /**
@@ -131,6 +198,15 @@ export const FELT_EXPECTED = {
 export function feltStudy(): Record<string, unknown> {
   const study = smallStudy('Felt test study');
   const { lon, lat } = from(400, 180);
-  const distant = { id: 'distant-shoal', name: 'Distant Shoal', lon: Number(lon.toFixed(5)), lat: Number(lat.toFixed(5)), vs30: 760, population: 30, coastal: true, elevationM: 2 };
+  const distant = {
+    id: 'distant-shoal',
+    name: 'Distant Shoal',
+    lon: Number(lon.toFixed(5)),
+    lat: Number(lat.toFixed(5)),
+    vs30: 760,
+    population: 30,
+    coastal: true,
+    elevationM: 2,
+  };
   return { ...study, communities: [...(study.communities as unknown[]), distant] };
 }

@@ -4,7 +4,12 @@ import { expect } from 'vitest';
  * Asserts |actual - expected| <= tolerance (absolute), with a message that shows all three
  * and the source of the expected value.
  */
-export function expectClose(actual: number, expected: number, tolerance: number, source: string): void {
+export function expectClose(
+  actual: number,
+  expected: number,
+  tolerance: number,
+  source: string,
+): void {
   const diff = Math.abs(actual - expected);
   expect(
     diff <= tolerance,
@@ -13,7 +18,12 @@ export function expectClose(actual: number, expected: number, tolerance: number,
 }
 
 /** Asserts |actual / expected - 1| <= relTolerance. */
-export function expectRelative(actual: number, expected: number, relTolerance: number, source: string): void {
+export function expectRelative(
+  actual: number,
+  expected: number,
+  relTolerance: number,
+  source: string,
+): void {
   const rel = Math.abs(actual / expected - 1);
   expect(
     rel <= relTolerance,

@@ -1,7 +1,16 @@
 import type { CatalogEvent } from '../../api/engine/catalog/event.ts';
 import { MS_PER_DAY } from '../../api/engine/catalog/event.ts';
-import { epicentralDistanceKm, MIN_KM_PER_DEGREE_LATITUDE } from '../../api/engine/catalog/epicentral.ts';
-import { GARDNER_KNOPOFF_WINDOWS, gardnerKnopoffWindow, type DeclusterOptions, type DeclusteredCatalog, type RemovedEvent } from '../../api/engine/catalog/gardner-knopoff.ts';
+import {
+  epicentralDistanceKm,
+  MIN_KM_PER_DEGREE_LATITUDE,
+} from '../../api/engine/catalog/epicentral.ts';
+import {
+  GARDNER_KNOPOFF_WINDOWS,
+  gardnerKnopoffWindow,
+  type DeclusterOptions,
+  type DeclusteredCatalog,
+  type RemovedEvent,
+} from '../../api/engine/catalog/gardner-knopoff.ts';
 import { selectByMagnitudeType } from '../../api/engine/catalog/magnitude-type.ts';
 
 /**
@@ -9,13 +18,21 @@ import { selectByMagnitudeType } from '../../api/engine/catalog/magnitude-type.t
  * inside its time window. Quadratic on large catalogs, so the engine indexes epicentres in
  * space; this stays with the tests as the oracle the indexed version must match exactly.
  */
-export function declusterGardnerKnopoffByScan(events: readonly CatalogEvent[], options: DeclusterOptions = {}): DeclusteredCatalog {
+export function declusterGardnerKnopoffByScan(
+  events: readonly CatalogEvent[],
+  options: DeclusterOptions = {},
+): DeclusteredCatalog {
   const foreshocks = options.removeForeshocks ?? true;
   const selected = selectByMagnitudeType(events, options.magnitudes);
   const byTime = [...selected.events].sort((a, b) => a.timeMs - b.timeMs);
   const n = byTime.length;
   const times = byTime.map((e) => e.timeMs);
-  const order = byTime.map((_, i) => i).sort((a, b) => (byTime[b] as CatalogEvent).magnitude - (byTime[a] as CatalogEvent).magnitude || a - b);
+  const order = byTime
+    .map((_, i) => i)
+    .sort(
+      (a, b) =>
+        (byTime[b] as CatalogEvent).magnitude - (byTime[a] as CatalogEvent).magnitude || a - b,
+    );
   const mainshockOf = new Int32Array(n).fill(-1);
   const removed: RemovedEvent[] = [];
   const clustered = new Set<number>();
@@ -34,7 +51,12 @@ export function declusterGardnerKnopoffByScan(events: readonly CatalogEvent[], o
       if (distanceKm > window.distanceKm) continue;
       mainshockOf[j] = i;
       clustered.add(i);
-      removed.push({ event: other, mainshockId: main.id, distanceKm, daysFromMainshock: (other.timeMs - main.timeMs) / MS_PER_DAY });
+      removed.push({
+        event: other,
+        mainshockId: main.id,
+        distanceKm,
+        daysFromMainshock: (other.timeMs - main.timeMs) / MS_PER_DAY,
+      });
     }
   }
   removed.sort((a, b) => a.event.timeMs - b.event.timeMs);

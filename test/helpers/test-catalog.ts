@@ -5,7 +5,12 @@ import type { GroundMotionModel } from '../../api/engine/motion/types.ts';
  * Catalog entries for validation tests: they describe what a model covers; loading never
  * predicts, so predict() refuses loudly if a test reaches it by mistake.
  */
-function descriptor(name: string, settings: GroundMotionModel['settings'], periodsS: number[], hasPgv: boolean): GroundMotionModel {
+function descriptor(
+  name: string,
+  settings: GroundMotionModel['settings'],
+  periodsS: number[],
+  hasPgv: boolean,
+): GroundMotionModel {
   return {
     name,
     citation: 'validation-test descriptor',

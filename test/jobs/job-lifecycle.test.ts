@@ -9,10 +9,17 @@ function memoryLedger() {
   const writes: string[] = [];
   let status = 'queued';
   const ledger: JobLedger<string, string> = {
-    markRunning: (id, _at, started) => (status === 'queued' ? (writes.push(`running ${id} ${started}`), (status = 'running'), true) : false),
+    markRunning: (id, _at, started) =>
+      status === 'queued'
+        ? (writes.push(`running ${id} ${started}`), (status = 'running'), true)
+        : false,
     setProgress: (_id, share) => void (status === 'running' && writes.push(`progress ${share}`)),
-    finishDone: (_id, done) => (status === 'running' ? (writes.push(`done ${done}`), (status = 'done'), true) : false),
-    finishWithout: (_id, end: JobEnd, message) => (['queued', 'running'].includes(status) ? (writes.push(`${end}: ${message}`), (status = end), true) : false),
+    finishDone: (_id, done) =>
+      status === 'running' ? (writes.push(`done ${done}`), (status = 'done'), true) : false,
+    finishWithout: (_id, end: JobEnd, message) =>
+      ['queued', 'running'].includes(status)
+        ? (writes.push(`${end}: ${message}`), (status = end), true)
+        : false,
     interruptedMessage: 'stopped by a shutdown',
   };
   return { ledger, writes, status: () => status };
@@ -32,7 +39,13 @@ function manualJob() {
     signals = s;
     return { result, cancel: () => void cancels++ };
   };
-  return { launch, signals: () => signals as JobSignals<string>, resolve, reject, cancels: () => cancels };
+  return {
+    launch,
+    signals: () => signals as JobSignals<string>,
+    resolve,
+    reject,
+    cancels: () => cancels,
+  };
 }
 
 const settle = () => new Promise((r) => setTimeout(r, 0));
@@ -42,7 +55,14 @@ describe('JobLifecycle', () => {
     const { ledger, writes } = memoryLedger();
     const job = manualJob();
     const jobs = new JobLifecycle();
-    jobs.start({ id: 'j1', ledger, kind: 'job', progressOf: 'work', launch: job.launch, done: (out) => `${out}!` });
+    jobs.start({
+      id: 'j1',
+      ledger,
+      kind: 'job',
+      progressOf: 'work',
+      launch: job.launch,
+      done: (out) => `${out}!`,
+    });
     expect(jobs.activeCount).toBe(1);
     job.signals().started('grid');
     for (const share of [0.001, 0.005, 0.02, 0.025, 0.5]) job.signals().progress(share);
@@ -57,7 +77,14 @@ describe('JobLifecycle', () => {
     const { ledger, writes, status } = memoryLedger();
     const job = manualJob();
     const jobs = new JobLifecycle();
-    jobs.start({ id: 'j2', ledger, kind: 'job', progressOf: 'points', launch: job.launch, done: (out) => out });
+    jobs.start({
+      id: 'j2',
+      ledger,
+      kind: 'job',
+      progressOf: 'points',
+      launch: job.launch,
+      done: (out) => out,
+    });
     job.signals().started('grid');
     job.signals().progress(0.3);
     expect(jobs.cancel('j2')).toBe(true);
@@ -72,11 +99,21 @@ describe('JobLifecycle', () => {
   it('ends a job interrupted when its pool closes, failed on a user error in its own words', async () => {
     for (const [error, expected] of [
       [new PoolClosed(), 'interrupted: stopped by a shutdown'],
-      [new InvalidInput([{ path: 'sources[0]', message: 'expected a source' }]), 'failed: invalid input: sources[0]: expected a source'],
+      [
+        new InvalidInput([{ path: 'sources[0]', message: 'expected a source' }]),
+        'failed: invalid input: sources[0]: expected a source',
+      ],
     ] as const) {
       const { ledger, writes } = memoryLedger();
       const job = manualJob();
-      new JobLifecycle().start({ id: 'j3', ledger, kind: 'job', progressOf: 'work', launch: job.launch, done: (out) => out });
+      new JobLifecycle().start({
+        id: 'j3',
+        ledger,
+        kind: 'job',
+        progressOf: 'work',
+        launch: job.launch,
+        done: (out) => out,
+      });
       job.reject(error);
       await settle();
       expect(writes).toEqual([expected]);
@@ -87,11 +124,20 @@ describe('JobLifecycle', () => {
     const { ledger, writes } = memoryLedger();
     const job = manualJob();
     const logged: { id: string; context: string }[] = [];
-    new JobLifecycle((id, context) => logged.push({ id, context })).start({ id: 'j4', ledger, kind: 'map run', progressOf: 'points', launch: job.launch, done: (out) => out });
+    new JobLifecycle((id, context) => logged.push({ id, context })).start({
+      id: 'j4',
+      ledger,
+      kind: 'map run',
+      progressOf: 'points',
+      launch: job.launch,
+      done: (out) => out,
+    });
     job.signals().started('grid');
     job.reject(new TypeError('boom'));
     await settle();
     expect(logged).toEqual([{ id: expect.any(String), context: 'map run j4 failed' }]);
-    expect(writes.at(-1)).toBe(`failed: internal error (error id ${logged[0]?.id}); the service is still running`);
+    expect(writes.at(-1)).toBe(
+      `failed: internal error (error id ${logged[0]?.id}); the service is still running`,
+    );
   });
 });

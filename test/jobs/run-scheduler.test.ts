@@ -19,7 +19,12 @@ beforeEach(() => {
   store = openStore(`${dir.path}/scheduler.db`);
   pool = new WorkerPool({ size: 1, workerUrl: FIXTURE, log: () => {} });
   logged = [];
-  scheduler = new RunScheduler({ store, pool, toolVersion: '9.9.9', logError: (id, context) => logged.push({ id, context }) });
+  scheduler = new RunScheduler({
+    store,
+    pool,
+    toolVersion: '9.9.9',
+    logError: (id, context) => logged.push({ id, context }),
+  });
   studyId = store.studies.create({ name: 'S', document: '{}' }).id;
 });
 afterEach(async () => {
@@ -33,7 +38,12 @@ async function runNamed(name: string, whileRunning?: (runId: string) => void) {
   const run = store.runs.create({ studyId, document: '{}', inputHash: `hash-${name}` });
   scheduler.start(run, namedStudy(name));
   if (whileRunning) whileRunning(run.id);
-  for (let i = 0; i < 500 && !['done', 'failed', 'cancelled', 'interrupted'].includes(store.runs.get(run.id)!.status); i++) {
+  for (
+    let i = 0;
+    i < 500 &&
+    !['done', 'failed', 'cancelled', 'interrupted'].includes(store.runs.get(run.id)!.status);
+    i++
+  ) {
     await new Promise((r) => setTimeout(r, 10));
   }
   return store.runs.get(run.id)!;
@@ -42,16 +52,26 @@ async function runNamed(name: string, whileRunning?: (runId: string) => void) {
 describe('RunScheduler', () => {
   it('records a done run with its results and provenance', async () => {
     const run = await runNamed('fine');
-    expect(run).toMatchObject({ status: 'done', progress: 1, error: null, startedAt: expect.any(String) });
+    expect(run).toMatchObject({
+      status: 'done',
+      progress: 1,
+      error: null,
+      startedAt: expect.any(String),
+    });
     expect(JSON.parse(store.runs.results(run.id)!)).toEqual({ fixture: 'fine' });
-    expect(JSON.parse(run.provenance!)).toMatchObject({ toolVersion: '9.9.9', inputHash: 'hash-fine' });
+    expect(JSON.parse(run.provenance!)).toMatchObject({
+      toolVersion: '9.9.9',
+      inputHash: 'hash-fine',
+    });
     expect(scheduler.activeCount).toBe(0);
   });
 
   it('marks a run failed when its worker crashes, logs an id, and keeps serving runs', async () => {
     const crashed = await runNamed('crash');
     expect(crashed.status).toBe('failed');
-    expect(crashed.error).toMatch(/^the computation stopped unexpectedly: its worker thread exited with code 3 \(error id [0-9a-f-]{36}\); the service is still running$/);
+    expect(crashed.error).toMatch(
+      /^the computation stopped unexpectedly: its worker thread exited with code 3 \(error id [0-9a-f-]{36}\); the service is still running$/,
+    );
     expect(crashed.error).toContain(logged[0]!.id);
     expect(logged[0]!.context).toBe(`run ${crashed.id} failed`);
     expect(store.runs.results(crashed.id)).toBeUndefined();
@@ -60,7 +80,10 @@ describe('RunScheduler', () => {
 
   it("records the engine's message for a domain failure", async () => {
     const run = await runNamed('bad-input');
-    expect(run).toMatchObject({ status: 'failed', error: 'invalid input: settings.measures[0]: expected a measure' });
+    expect(run).toMatchObject({
+      status: 'failed',
+      error: 'invalid input: settings.measures[0]: expected a measure',
+    });
     expect(logged).toEqual([]);
   });
 
@@ -82,7 +105,8 @@ describe('RunScheduler', () => {
   it('marks runs interrupted when the pool closes under them', async () => {
     const run = store.runs.create({ studyId, document: '{}', inputHash: 'h' });
     scheduler.start(run, namedStudy('hang'));
-    while (store.runs.get(run.id)!.status !== 'running') await new Promise((r) => setTimeout(r, 10));
+    while (store.runs.get(run.id)!.status !== 'running')
+      await new Promise((r) => setTimeout(r, 10));
     await pool.close();
     await new Promise((r) => setImmediate(r));
     expect(store.runs.get(run.id)).toMatchObject({ status: 'interrupted' });

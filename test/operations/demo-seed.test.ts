@@ -28,9 +28,14 @@ describe('seedDemoStudy', () => {
 
   it('saves nothing and says why when the file is missing, malformed or invalid', () => {
     const missing = seedDemoStudy(store, modelCatalog, pathToFileURL(`${dir.path}/absent.json`));
-    expect(missing).toMatchObject({ seeded: false, issues: [{ message: 'cannot read the demo study (ENOENT)' }] });
+    expect(missing).toMatchObject({
+      seeded: false,
+      issues: [{ message: 'cannot read the demo study (ENOENT)' }],
+    });
     writeFileSync(`${dir.path}/bad.json`, '{ "name": ');
-    expect(seedDemoStudy(store, modelCatalog, pathToFileURL(`${dir.path}/bad.json`)).seeded).toBe(false);
+    expect(seedDemoStudy(store, modelCatalog, pathToFileURL(`${dir.path}/bad.json`)).seeded).toBe(
+      false,
+    );
     writeFileSync(`${dir.path}/invalid.json`, '{ "name": "Invalid" }');
     const invalid = seedDemoStudy(store, modelCatalog, pathToFileURL(`${dir.path}/invalid.json`));
     expect(invalid.seeded).toBe(false);
@@ -45,11 +50,30 @@ describe('seedDemoStudy', () => {
   });
 
   it('saves nothing when the demo catalog is missing or loads no event', () => {
-    const missing = seedDemoStudy(store, modelCatalog, undefined, pathToFileURL(`${dir.path}/absent.csv`));
-    expect(missing).toMatchObject({ seeded: false, issues: [{ message: 'cannot read the demo catalog (ENOENT)' }] });
-    writeFileSync(`${dir.path}/empty.csv`, 'time,lon,lat,depthKm,magnitude,magnitudeType,id\n2001-13-01T00:00:00Z,-150,-47,10,5,Mw,x\n');
-    const empty = seedDemoStudy(store, modelCatalog, undefined, pathToFileURL(`${dir.path}/empty.csv`));
-    expect(empty).toMatchObject({ seeded: false, issues: [{ path: `${dir.path}/empty.csv[line 2]` }] });
+    const missing = seedDemoStudy(
+      store,
+      modelCatalog,
+      undefined,
+      pathToFileURL(`${dir.path}/absent.csv`),
+    );
+    expect(missing).toMatchObject({
+      seeded: false,
+      issues: [{ message: 'cannot read the demo catalog (ENOENT)' }],
+    });
+    writeFileSync(
+      `${dir.path}/empty.csv`,
+      'time,lon,lat,depthKm,magnitude,magnitudeType,id\n2001-13-01T00:00:00Z,-150,-47,10,5,Mw,x\n',
+    );
+    const empty = seedDemoStudy(
+      store,
+      modelCatalog,
+      undefined,
+      pathToFileURL(`${dir.path}/empty.csv`),
+    );
+    expect(empty).toMatchObject({
+      seeded: false,
+      issues: [{ path: `${dir.path}/empty.csv[line 2]` }],
+    });
     expect(store.studies.list()).toEqual([]);
   });
 });

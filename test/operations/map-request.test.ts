@@ -21,13 +21,21 @@ describe('readMapRequest', () => {
   });
 
   it('reads a return-period map and a chance map', () => {
-    expect(readMapRequest({ spacingKm: 5, returnPeriodYears: 475 })).toEqual({ measure: 'PGA', quantity: { kind: 'return-period', returnPeriodYears: 475 }, spacingKm: 5 });
-    expect(readMapRequest({ measure: 'PGV', spacingKm: 5, level: 10, horizonYears: 50, vs30: 400 })).toEqual({
+    expect(readMapRequest({ spacingKm: 5, returnPeriodYears: 475 })).toEqual({
+      measure: 'PGA',
+      quantity: { kind: 'return-period', returnPeriodYears: 475 },
+      spacingKm: 5,
+    });
+    expect(
+      readMapRequest({ measure: 'PGV', spacingKm: 5, level: 10, horizonYears: 50, vs30: 400 }),
+    ).toEqual({
       measure: 'PGV',
       quantity: { kind: 'chance', level: 10, horizonYears: 50 },
       spacingKm: 5,
       vs30: 400,
     });
-    expect(problems({ spacingKm: 5, returnPeriodYears: 475, level: 0.1 })).toEqual(['returnPeriodYears: expected returnPeriodYears, or level with horizonYears (not both)']);
+    expect(problems({ spacingKm: 5, returnPeriodYears: 475, level: 0.1 })).toEqual([
+      'returnPeriodYears: expected returnPeriodYears, or level with horizonYears (not both)',
+    ]);
   });
 });

@@ -51,6 +51,8 @@ describe('checkWorkBudget', () => {
     expect(error).toBeInstanceOf(StudyTooLarge);
     expect((error as StudyTooLarge).size).toBe(123);
     expect((error as StudyTooLarge).budget).toBe(120);
-    expect((error as StudyTooLarge).message).toBe('study is too large: 1 community x 41 ruptures x 3 levels (over 1 measure) = 123, over the budget of 120');
+    expect((error as StudyTooLarge).message).toBe(
+      'study is too large: 1 community x 41 ruptures x 3 levels (over 1 measure) = 123, over the budget of 120',
+    );
   });
 });

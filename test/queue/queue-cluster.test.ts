@@ -13,7 +13,12 @@ import type { MapRequest } from '../../api/workers/messages.ts';
 import { hazardMapOnPool } from '../../api/workers/parallel-map.ts';
 import { screenStudyOnPool } from '../../api/workers/parallel-screen.ts';
 import { WorkerPool } from '../../api/workers/worker-pool.ts';
-import { startRedis, startWorker, type RedisServer, type WorkerProcess } from './helpers/redis-cluster.ts';
+import {
+  startRedis,
+  startWorker,
+  type RedisServer,
+  type WorkerProcess,
+} from './helpers/redis-cluster.ts';
 
 /**
  * The queue end to end: a real redis-server on a free loopback port, two `tremora worker`
@@ -21,7 +26,11 @@ import { startRedis, startWorker, type RedisServer, type WorkerProcess } from '.
  * this process coordinating. What a map or a screening gives through the queue is compared,
  * byte for byte in V8's serialisation, with the same run on this process's own threads.
  */
-const MAP: MapRequest = { measure: 'PGA', quantity: { kind: 'return-period', returnPeriodYears: 475 }, spacingKm: 25 };
+const MAP: MapRequest = {
+  measure: 'PGA',
+  quantity: { kind: 'return-period', returnPeriodYears: 475 },
+  spacingKm: 25,
+};
 const CHUNK_POINTS = 8;
 const WORKER_ARGS = ['--threads', '1', '--lock-ms', '2000'];
 
@@ -32,7 +41,11 @@ let pool: WorkerPool;
 let study: Study;
 let inProcess: { points: MapPoint[]; summary: HazardMapSummary };
 
-async function mapOn(chunks: ChunkPool | undefined, onPoints?: (points: readonly MapPoint[], share: number) => void, onProgress?: (share: number) => void) {
+async function mapOn(
+  chunks: ChunkPool | undefined,
+  onPoints?: (points: readonly MapPoint[], share: number) => void,
+  onProgress?: (share: number) => void,
+) {
   const points: MapPoint[] = [];
   const handle = hazardMapOnPool(pool, study, MAP, {
     chunkPoints: CHUNK_POINTS,
@@ -47,11 +60,17 @@ async function mapOn(chunks: ChunkPool | undefined, onPoints?: (points: readonly
 }
 
 beforeAll(async () => {
-  const loaded = await readStudyFile(new URL('../../data-demo/demo.study.json', import.meta.url).pathname, modelCatalog);
+  const loaded = await readStudyFile(
+    new URL('../../data-demo/demo.study.json', import.meta.url).pathname,
+    modelCatalog,
+  );
   if (!loaded.ok) throw new Error('the demo study does not validate');
   study = loaded.study;
   redis = await startRedis();
-  workers = await Promise.all([startWorker(redis.url, WORKER_ARGS), startWorker(redis.url, WORKER_ARGS)]);
+  workers = await Promise.all([
+    startWorker(redis.url, WORKER_ARGS),
+    startWorker(redis.url, WORKER_ARGS),
+  ]);
   queue = await ChunkQueue.open({ url: redis.url, window: 4 });
   pool = new WorkerPool({ size: 1, name: 'tremora-test' });
   inProcess = await (await mapOn(undefined)).done;
@@ -95,7 +114,10 @@ describe('the Redis queue with two workers', () => {
     await killing;
     expect(queued.points.length).toBe(inProcess.summary.count);
     expect(Buffer.compare(serialize(queued.points), serialize(inProcess.points))).toBe(0);
-    const inspect = new Queue(CHUNK_QUEUE, { connection: connect(redis.url), prefix: QUEUE_PREFIX });
+    const inspect = new Queue(CHUNK_QUEUE, {
+      connection: connect(redis.url),
+      prefix: QUEUE_PREFIX,
+    });
     try {
       const completed = await inspect.getJobs(['completed']);
       expect(completed.some((job) => job.stalledCounter > 0 || job.attemptsStarted > 1)).toBe(true);
@@ -109,7 +131,10 @@ describe('the Redis queue with two workers', () => {
   it('cancels a map across machines: the run stops and the workers leave its chunks', async () => {
     const { handle, done } = await mapOn(queue, () => handle.cancel());
     await expect(done).rejects.toBeInstanceOf(Cancelled);
-    const inspect = new Queue(CHUNK_QUEUE, { connection: connect(redis.url), prefix: QUEUE_PREFIX });
+    const inspect = new Queue(CHUNK_QUEUE, {
+      connection: connect(redis.url),
+      prefix: QUEUE_PREFIX,
+    });
     try {
       let left = Infinity;
       for (let i = 0; i < 300 && left > 0; i++) {

@@ -14,7 +14,11 @@ const load = (raw: unknown) => {
 function reverseKeys(value: unknown): unknown {
   if (Array.isArray(value)) return value.map(reverseKeys);
   if (value === null || typeof value !== 'object') return value;
-  return Object.fromEntries(Object.entries(value).reverse().map(([k, v]) => [k, reverseKeys(v)]));
+  return Object.fromEntries(
+    Object.entries(value)
+      .reverse()
+      .map(([k, v]) => [k, reverseKeys(v)]),
+  );
 }
 
 describe('canonicalJson', () => {
@@ -29,7 +33,9 @@ describe('canonicalJson', () => {
 describe('sha256Hex', () => {
   it('matches the published SHA-256 test vectors', () => {
     // FIPS 180-2, Appendix B.1 ("abc") and the digest of the empty message (from memory).
-    expect(sha256Hex('abc')).toBe('ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad');
+    expect(sha256Hex('abc')).toBe(
+      'ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad',
+    );
     expect(sha256Hex('')).toBe('e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855');
   });
 });

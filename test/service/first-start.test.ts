@@ -2,7 +2,13 @@ import { spawnSync } from 'node:child_process';
 import { rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { REPO_ROOT, type ServiceProcess, startService, tempDir, waitFor } from './helpers/service-process.ts';
+import {
+  REPO_ROOT,
+  type ServiceProcess,
+  startService,
+  tempDir,
+  waitFor,
+} from './helpers/service-process.ts';
 
 /**
  * A new user's first start, on the compiled build (api/bin/build.js, as `npm ci` and
@@ -17,9 +23,16 @@ describe('first start of the compiled service', () => {
   let service: ServiceProcess;
 
   beforeAll(async () => {
-    const built = spawnSync(process.execPath, ['api/bin/build.js', '--out', BUILD], { cwd: REPO_ROOT, encoding: 'utf8' });
+    const built = spawnSync(process.execPath, ['api/bin/build.js', '--out', BUILD], {
+      cwd: REPO_ROOT,
+      encoding: 'utf8',
+    });
     expect(built.status, built.stderr).toBe(0);
-    service = await startService({ databasePath: join(dir.path, 'first.db'), nodeArgs: [join(BUILD, 'api/server.js')], env: { TREMORA_SCREEN_DEMO: '1', TREMORA_WORKERS: '1' } });
+    service = await startService({
+      databasePath: join(dir.path, 'first.db'),
+      nodeArgs: [join(BUILD, 'api/server.js')],
+      env: { TREMORA_SCREEN_DEMO: '1', TREMORA_WORKERS: '1' },
+    });
   });
 
   afterAll(async () => {
@@ -29,7 +42,11 @@ describe('first start of the compiled service', () => {
   });
 
   it('prints the address of the demo page, and the demo is screened without anyone asking', async () => {
-    const opened = await waitFor(async () => service.output(), (o) => /open (http:\/\/\S+\/studies\/(\S+))/.test(o), 100);
+    const opened = await waitFor(
+      async () => service.output(),
+      (o) => /open (http:\/\/\S+\/studies\/(\S+))/.test(o),
+      100,
+    );
     const match = /open http:\/\/\S+(\/studies\/(\S+))/.exec(opened);
     expect(match, opened).not.toBeNull();
     const [, path, studyId] = match as RegExpExecArray;
@@ -38,7 +55,12 @@ describe('first start of the compiled service', () => {
     expect((await service.fetch(path as string)).status).toBe(200);
 
     const communityPath = `${path}/communities/harbour-point`;
-    const runs = async () => ((await (await service.fetch(`/api/studies/${studyId}/runs`)).json()) as { runs: { status: string }[] }).runs;
+    const runs = async () =>
+      (
+        (await (await service.fetch(`/api/studies/${studyId}/runs`)).json()) as {
+          runs: { status: string }[];
+        }
+      ).runs;
     // The run is recorded once the study is measured on the quick thread.
     const first = await waitFor(runs, (r) => r.length > 0);
     expect(first).toHaveLength(1);
@@ -46,7 +68,12 @@ describe('first start of the compiled service', () => {
     const stillRunning = ((await runs())[0]?.status ?? '') !== 'done';
     if (stillRunning) expect(early).toContain('The screening of this study is under way');
 
-    const finished = await waitFor(runs, (r) => r[0]?.status === 'done' || r[0]?.status === 'failed', 1200, 250);
+    const finished = await waitFor(
+      runs,
+      (r) => r[0]?.status === 'done' || r[0]?.status === 'failed',
+      1200,
+      250,
+    );
     expect(finished[0]?.status).toBe('done');
     const page = await (await service.fetch(communityPath)).text();
     expect(page).not.toContain('no results yet');
@@ -55,10 +82,17 @@ describe('first start of the compiled service', () => {
   });
 
   it('runs the compiled CLI with no TypeScript loader', () => {
-    const help = spawnSync(process.execPath, [join(BUILD, 'api/cli.js'), '--help'], { cwd: REPO_ROOT, encoding: 'utf8' });
+    const help = spawnSync(process.execPath, [join(BUILD, 'api/cli.js'), '--help'], {
+      cwd: REPO_ROOT,
+      encoding: 'utf8',
+    });
     expect(help.status).toBe(0);
     expect(help.stdout).toContain('tremora screen STUDY');
-    const check = spawnSync(process.execPath, [join(BUILD, 'api/cli.js'), 'check', 'data-demo/demo.study.json'], { cwd: REPO_ROOT, encoding: 'utf8' });
+    const check = spawnSync(
+      process.execPath,
+      [join(BUILD, 'api/cli.js'), 'check', 'data-demo/demo.study.json'],
+      { cwd: REPO_ROOT, encoding: 'utf8' },
+    );
     expect(check.stdout).toContain('valid — "Demo coast", 11 communities');
   });
 });

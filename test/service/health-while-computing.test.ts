@@ -22,12 +22,19 @@ describe('while a heavy study computes', () => {
     for (let i = 0; i < 5; i++) {
       const response = await service.fetch('/api/health');
       expect(response.status).toBe(200);
-      const body = (await response.json()) as { status: string; workers: { runs: { busy: number } }; activeRuns: number };
+      const body = (await response.json()) as {
+        status: string;
+        workers: { runs: { busy: number } };
+        activeRuns: number;
+      };
       expect(body).toMatchObject({ status: 'ok', workers: { runs: { busy: 1 } }, activeRuns: 1 });
     }
     expect((await service.fetch('/api/studies')).status).toBe(200);
     // A run reports progress after each community's branch.
-    const moving = await waitFor(() => getRun(service, run.id), (r) => r.progress > 0);
+    const moving = await waitFor(
+      () => getRun(service, run.id),
+      (r) => r.progress > 0,
+    );
     expect(moving.status).toBe('running');
     expect(moving.progress).toBeGreaterThan(0);
     expect(moving.progress).toBeLessThan(1);
@@ -37,7 +44,9 @@ describe('while a heavy study computes', () => {
     expect(stopped.status).toBe('cancelled');
     expect(stopped.error).toMatch(/^cancelled on request after \d+% of the work$/);
     expect((await getRun(service, run.id)).provenance).toBeNull();
-    const after = (await (await service.fetch('/api/health')).json()) as { workers: { runs: { alive: number; busy: number } } };
+    const after = (await (await service.fetch('/api/health')).json()) as {
+      workers: { runs: { alive: number; busy: number } };
+    };
     expect(after.workers.runs).toMatchObject({ alive: 1, busy: 0 });
   });
 });

@@ -16,14 +16,15 @@ const start = async () => {
   return service;
 };
 afterAll(async () => {
-  for (const service of running) if (service.child.exitCode === null && service.child.signalCode === null) await service.stop();
+  for (const service of running)
+    if (service.child.exitCode === null && service.child.signalCode === null) await service.stop();
   dir.remove();
 });
 
 const integrity = (): string => {
   const db = new Database(databasePath, { readonly: true });
   try {
-    return (db.pragma('integrity_check', { simple: true }) as string);
+    return db.pragma('integrity_check', { simple: true }) as string;
   } finally {
     db.close();
   }
@@ -48,14 +49,22 @@ describe('a crash of the service (SIGKILL)', () => {
     expect(integrity()).toBe('ok');
 
     const second = await start();
-    expect(second.output()).toMatch(/1 run\(s\) left unfinished by the previous process are marked interrupted/);
+    expect(second.output()).toMatch(
+      /1 run\(s\) left unfinished by the previous process are marked interrupted/,
+    );
     expect(await (await second.fetch('/api/studies')).json()).toEqual(studiesBefore);
     expect(await (await second.fetch(`/api/studies/${studyId}/document`)).text()).toBe(text);
     expect(await getRun(second, finished.id)).toEqual(finished);
-    expect(await (await second.fetch(`/api/runs/${finished.id}/results`)).text()).toBe(resultsBefore);
+    expect(await (await second.fetch(`/api/runs/${finished.id}/results`)).text()).toBe(
+      resultsBefore,
+    );
 
     const interrupted = await getRun(second, inFlight.id);
-    expect(interrupted).toMatchObject({ status: 'interrupted', error: INTERRUPTED_MESSAGE, provenance: null });
+    expect(interrupted).toMatchObject({
+      status: 'interrupted',
+      error: INTERRUPTED_MESSAGE,
+      provenance: null,
+    });
     await expectError(await second.fetch(`/api/runs/${inFlight.id}/results`), 409);
 
     expect(await second.stop()).toBe(0);

@@ -11,19 +11,26 @@ const dir = tempDir();
 let service: ServiceProcess;
 
 beforeAll(async () => {
-  service = await startService({ databasePath: `${dir.path}/budget.db`, env: { TREMORA_WORK_BUDGET: '2' } });
+  service = await startService({
+    databasePath: `${dir.path}/budget.db`,
+    env: { TREMORA_WORK_BUDGET: '2' },
+  });
 });
 afterAll(async () => {
   await service?.stop();
   dir.remove();
 });
 
-const EXPECTED_ERROR = 'study is too large: 1 community x 1 rupture x 3 levels (over 1 measure) = 3, over the budget of 2';
+const EXPECTED_ERROR =
+  'study is too large: 1 community x 1 rupture x 3 levels (over 1 measure) = 3, over the budget of 2';
 
 describe('a study over the work budget', () => {
   it('is refused by validate and compute with 422 naming the size and the budget', async () => {
     for (const path of ['/api/validate', '/api/compute']) {
-      const body = await expectError(await service.fetch(path, jsonInit('POST', smallStudy())), 422);
+      const body = await expectError(
+        await service.fetch(path, jsonInit('POST', smallStudy())),
+        422,
+      );
       expect(body.error).toBe(EXPECTED_ERROR);
       expect(body.size).toBe(3);
       expect(body.budget).toBe(2);
@@ -36,9 +43,14 @@ describe('a study over the work budget', () => {
     const created = await service.fetch('/api/studies', jsonInit('POST', smallStudy()));
     expect(created.status).toBe(201);
     const { id } = (await created.json()) as { id: string };
-    const body = await expectError(await service.fetch(`/api/studies/${id}/runs`, { method: 'POST' }), 422);
+    const body = await expectError(
+      await service.fetch(`/api/studies/${id}/runs`, { method: 'POST' }),
+      422,
+    );
     expect(body.error).toBe(EXPECTED_ERROR);
-    const { runs } = (await (await service.fetch(`/api/studies/${id}/runs`)).json()) as { runs: unknown[] };
+    const { runs } = (await (await service.fetch(`/api/studies/${id}/runs`)).json()) as {
+      runs: unknown[];
+    };
     expect(runs).toEqual([]);
   });
 });

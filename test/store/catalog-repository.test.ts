@@ -17,7 +17,8 @@ beforeEach(() => {
 });
 
 // Kept byte for byte: a BOM, CRLF line ends and a trailing blank line.
-const TEXT = '\uFEFFtime,lon,lat,depthKm,magnitude,magnitudeType,id\r\n2001-01-15T00:00:00Z,-139,-50,10,5.0,Mw,ev-01\r\n\r\n';
+const TEXT =
+  '\uFEFFtime,lon,lat,depthKm,magnitude,magnitudeType,id\r\n2001-01-15T00:00:00Z,-139,-50,10,5.0,Mw,ev-01\r\n\r\n';
 const write = (overrides: Partial<StudyCatalogWrite> = {}): StudyCatalogWrite => ({
   fileName: 'network.csv',
   format: 'csv',
@@ -27,13 +28,16 @@ const write = (overrides: Partial<StudyCatalogWrite> = {}): StudyCatalogWrite =>
   nonMomentCount: 0,
   ...overrides,
 });
-const rows = () => (db.prepare('SELECT COUNT(*) AS n FROM study_catalogs').get() as { n: number }).n;
+const rows = () =>
+  (db.prepare('SELECT COUNT(*) AS n FROM study_catalogs').get() as { n: number }).n;
 
 describe('migration 002', () => {
   it('adds the study_catalogs table as schema version 2', () => {
     const names = readMigrations().map((m) => m.name);
     expect(names.slice(0, 2)).toEqual(['001-initial.sql', '002-study-catalogs.sql']);
-    const columns = (db.prepare('PRAGMA table_info(study_catalogs)').all() as { name: string; pk: number }[]).map((c) => [c.name, c.pk]);
+    const columns = (
+      db.prepare('PRAGMA table_info(study_catalogs)').all() as { name: string; pk: number }[]
+    ).map((c) => [c.name, c.pk]);
     expect(columns).toEqual([
       ['study_id', 1],
       ['file_name', 0],
@@ -56,11 +60,19 @@ describe('migration 004', () => {
     migrate(old, shipped.slice(0, fourth));
     const { id } = new StudyRepository(old).create({ name: 'S', document: '{}' });
     new CatalogRepository(old).put(id, write());
-    expect(() => old.prepare("UPDATE study_catalogs SET format = 'another-format'").run()).toThrow(/CHECK/);
+    expect(() => old.prepare("UPDATE study_catalogs SET format = 'another-format'").run()).toThrow(
+      /CHECK/,
+    );
     migrate(old, shipped);
-    expect(new CatalogRepository(old).get(id)).toMatchObject({ fileName: 'network.csv', format: 'csv', content: TEXT });
+    expect(new CatalogRepository(old).get(id)).toMatchObject({
+      fileName: 'network.csv',
+      format: 'csv',
+      content: TEXT,
+    });
     old.prepare("UPDATE study_catalogs SET format = 'another-format'").run();
-    expect((old.prepare('SELECT format FROM study_catalogs').get() as { format: string }).format).toBe('another-format');
+    expect(
+      (old.prepare('SELECT format FROM study_catalogs').get() as { format: string }).format,
+    ).toBe('another-format');
   });
 });
 
@@ -85,9 +97,17 @@ describe('CatalogRepository put, get, delete', () => {
   it('keeps one catalog per study: a second put replaces the first', () => {
     const { id } = studies.create({ name: 'S', document: '{}' });
     catalogs.put(id, write());
-    const second = catalogs.put(id, write({ fileName: 'events.xml', format: 'quakeml', content: '<q:quakeml/>', loadedCount: 3 }));
+    const second = catalogs.put(
+      id,
+      write({ fileName: 'events.xml', format: 'quakeml', content: '<q:quakeml/>', loadedCount: 3 }),
+    );
     expect(second?.replaced).toBe(true);
-    expect(catalogs.get(id)).toMatchObject({ fileName: 'events.xml', format: 'quakeml', content: '<q:quakeml/>', loadedCount: 3 });
+    expect(catalogs.get(id)).toMatchObject({
+      fileName: 'events.xml',
+      format: 'quakeml',
+      content: '<q:quakeml/>',
+      loadedCount: 3,
+    });
     expect(rows()).toBe(1);
   });
 
@@ -102,9 +122,17 @@ describe('CatalogRepository put, get, delete', () => {
   it('leaves the catalog as it was when a write is refused (one transaction)', () => {
     const { id } = studies.create({ name: 'S', document: '{}' });
     catalogs.put(id, write());
-    expect(() => catalogs.put(id, write({ fileName: 'empty.csv', loadedCount: 0 }))).toThrow(/CHECK constraint failed/);
-    expect(() => catalogs.put(id, write({ format: '' as never }))).toThrow(/CHECK constraint failed/);
-    expect(catalogs.get(id)).toMatchObject({ fileName: 'network.csv', loadedCount: 1, format: 'csv' });
+    expect(() => catalogs.put(id, write({ fileName: 'empty.csv', loadedCount: 0 }))).toThrow(
+      /CHECK constraint failed/,
+    );
+    expect(() => catalogs.put(id, write({ format: '' as never }))).toThrow(
+      /CHECK constraint failed/,
+    );
+    expect(catalogs.get(id)).toMatchObject({
+      fileName: 'network.csv',
+      loadedCount: 1,
+      format: 'csv',
+    });
   });
 
   it('detaches a catalog; false when there was none', () => {

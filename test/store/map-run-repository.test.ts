@@ -24,10 +24,35 @@ beforeEach(() => {
   studyId = studies.create({ name: 'S', document: '{}' }).id;
 });
 
-const byReturnPeriod: MapRunRequest = { measure: 'PGA', quantity: { kind: 'return-period', returnPeriodYears: 475 }, spacingKm: 10, vs30: 760 };
-const byChance: MapRunRequest = { measure: 'SA(1.0)', quantity: { kind: 'chance', level: 0.1, horizonYears: 50 }, spacingKm: 2.5, vs30: 400, bounds: [-141, -48, -140, -47] };
-const description: MapDescription = { measure: 'PGA', unit: 'g', quantity: { kind: 'return-period', returnPeriodYears: 475 }, vs30: 760, spacingKm: 10, columns: 3, rows: 2, count: 6 };
-const outputs = { geojson: '{"type":"FeatureCollection","features":[]}', warnings: ['a note'], provenanceJson: '{"inputHash":"h"}', finishedAt: '2000-01-01T00:00:10.000Z' };
+const byReturnPeriod: MapRunRequest = {
+  measure: 'PGA',
+  quantity: { kind: 'return-period', returnPeriodYears: 475 },
+  spacingKm: 10,
+  vs30: 760,
+};
+const byChance: MapRunRequest = {
+  measure: 'SA(1.0)',
+  quantity: { kind: 'chance', level: 0.1, horizonYears: 50 },
+  spacingKm: 2.5,
+  vs30: 400,
+  bounds: [-141, -48, -140, -47],
+};
+const description: MapDescription = {
+  measure: 'PGA',
+  unit: 'g',
+  quantity: { kind: 'return-period', returnPeriodYears: 475 },
+  vs30: 760,
+  spacingKm: 10,
+  columns: 3,
+  rows: 2,
+  count: 6,
+};
+const outputs = {
+  geojson: '{"type":"FeatureCollection","features":[]}',
+  warnings: ['a note'],
+  provenanceJson: '{"inputHash":"h"}',
+  finishedAt: '2000-01-01T00:00:10.000Z',
+};
 
 describe('migration 003 (map_runs)', () => {
   it('adds map_runs to a database at version 2, keeping its studies and runs', () => {
@@ -37,18 +62,28 @@ describe('migration 003 (map_runs)', () => {
     expect(shipped.map((m) => m.name)).toContain('003-map-runs.sql');
     migrate(old, shipped.slice(0, 2));
     const study = new StudyRepository(old).create({ name: 'Kept', document: '{"name":"Kept"}' });
-    const run = new RunRepository(old).create({ studyId: study.id, document: '{}', inputHash: 'h' });
+    const run = new RunRepository(old).create({
+      studyId: study.id,
+      document: '{}',
+      inputHash: 'h',
+    });
     expect(migrate(old, shipped)).toEqual({ fromVersion: 2, toVersion: shipped.length });
     expect(new StudyRepository(old).get(study.id)?.document).toBe('{"name":"Kept"}');
     expect(new RunRepository(old).get(run.id)?.status).toBe('queued');
-    const created = new MapRunRepository(old).create({ studyId: study.id, request: byReturnPeriod, inputHash: 'h' });
+    const created = new MapRunRepository(old).create({
+      studyId: study.id,
+      request: byReturnPeriod,
+      inputHash: 'h',
+    });
     expect(created.status).toBe('queued');
   });
 
   it('keeps one quantity per map: a return period, or a level with a horizon', () => {
     const insert = (rp: number | null, level: number | null, horizon: number | null) =>
       db
-        .prepare("INSERT INTO map_runs (id, study_id, status, measure, return_period_years, level, horizon_years, spacing_km, vs30, input_hash, created_at) VALUES (?, ?, 'queued', 'PGA', ?, ?, ?, 5, 760, 'h', 'x')")
+        .prepare(
+          "INSERT INTO map_runs (id, study_id, status, measure, return_period_years, level, horizon_years, spacing_km, vs30, input_hash, created_at) VALUES (?, ?, 'queued', 'PGA', ?, ?, ?, 5, 760, 'h', 'x')",
+        )
         .run(`m${rp}${level}${horizon}`, studyId, rp, level, horizon);
     expect(() => insert(475, 0.1, 50)).toThrow(/CHECK constraint failed/);
     expect(() => insert(null, null, null)).toThrow(/CHECK constraint failed/);
@@ -69,16 +104,38 @@ describe('MapRunRepository', () => {
 
   it('follows a map from queued through running to done, the GeoJSON written with the status', () => {
     const run = maps.create({ studyId, request: byReturnPeriod, inputHash: 'h' });
-    expect(run).toMatchObject({ status: 'queued', progress: 0, inputHash: 'h', description: null, warnings: [], provenance: null, startedAt: null, finishedAt: null, error: null });
+    expect(run).toMatchObject({
+      status: 'queued',
+      progress: 0,
+      inputHash: 'h',
+      description: null,
+      warnings: [],
+      provenance: null,
+      startedAt: null,
+      finishedAt: null,
+      error: null,
+    });
     expect(maps.finishDone(run.id, outputs)).toBe(false);
     expect(maps.markRunning(run.id, '2000-01-01T00:00:00.000Z', description)).toBe(true);
     expect(maps.markRunning(run.id, '2000-01-01T00:00:01.000Z', description)).toBe(false);
     maps.setProgress(run.id, 0.5);
     maps.setProgress(run.id, 0.25);
-    expect(maps.get(run.id)).toMatchObject({ status: 'running', progress: 0.5, description, startedAt: '2000-01-01T00:00:00.000Z' });
+    expect(maps.get(run.id)).toMatchObject({
+      status: 'running',
+      progress: 0.5,
+      description,
+      startedAt: '2000-01-01T00:00:00.000Z',
+    });
     expect(maps.geojson(run.id)).toBeUndefined();
     expect(maps.finishDone(run.id, outputs)).toBe(true);
-    expect(maps.get(run.id)).toMatchObject({ status: 'done', progress: 1, warnings: ['a note'], provenance: outputs.provenanceJson, finishedAt: outputs.finishedAt, error: null });
+    expect(maps.get(run.id)).toMatchObject({
+      status: 'done',
+      progress: 1,
+      warnings: ['a note'],
+      provenance: outputs.provenanceJson,
+      finishedAt: outputs.finishedAt,
+      error: null,
+    });
     expect(maps.geojson(run.id)).toBe(outputs.geojson);
   });
 
@@ -89,19 +146,29 @@ describe('MapRunRepository', () => {
     expect(maps.finishWithout(run.id, 'failed', 'late')).toBe(false);
     maps.setProgress(run.id, 0.1);
     expect(maps.interruptUnfinished()).toBe(0);
-    expect(() => db.prepare("UPDATE map_runs SET geojson = '{}' WHERE id = ?").run(run.id)).toThrow('a finished map run cannot be changed');
-    expect(() => db.prepare("UPDATE map_runs SET status = 'running' WHERE id = ?").run(run.id)).toThrow('a finished map run cannot be changed');
+    expect(() => db.prepare("UPDATE map_runs SET geojson = '{}' WHERE id = ?").run(run.id)).toThrow(
+      'a finished map run cannot be changed',
+    );
+    expect(() =>
+      db.prepare("UPDATE map_runs SET status = 'running' WHERE id = ?").run(run.id),
+    ).toThrow('a finished map run cannot be changed');
     const failed = maps.create({ studyId, request: byReturnPeriod, inputHash: 'h' });
     maps.finishWithout(failed.id, 'failed', 'boom');
-    expect(() => db.prepare('UPDATE map_runs SET error = NULL WHERE id = ?').run(failed.id)).toThrow('a finished map run cannot be changed');
+    expect(() =>
+      db.prepare('UPDATE map_runs SET error = NULL WHERE id = ?').run(failed.id),
+    ).toThrow('a finished map run cannot be changed');
     expect(maps.geojson(run.id)).toBe(outputs.geojson);
     expect(maps.get(failed.id)?.error).toBe('boom');
   });
 
   it('refuses GeoJSON on a map that is not done, and a done map without it', () => {
     const run = maps.create({ studyId, request: byReturnPeriod, inputHash: 'h' });
-    expect(() => db.prepare("UPDATE map_runs SET geojson = '{}' WHERE id = ?").run(run.id)).toThrow(/CHECK constraint failed/);
-    expect(() => db.prepare("UPDATE map_runs SET status = 'done' WHERE id = ?").run(run.id)).toThrow(/CHECK constraint failed/);
+    expect(() => db.prepare("UPDATE map_runs SET geojson = '{}' WHERE id = ?").run(run.id)).toThrow(
+      /CHECK constraint failed/,
+    );
+    expect(() =>
+      db.prepare("UPDATE map_runs SET status = 'done' WHERE id = ?").run(run.id),
+    ).toThrow(/CHECK constraint failed/);
   });
 
   it('records failure, cancellation and interruption with their message', () => {
@@ -118,7 +185,9 @@ describe('MapRunRepository', () => {
   });
 
   it('refuses a map of a study that does not exist, and goes with its study when that is deleted', () => {
-    expect(() => maps.create({ studyId: 'missing', request: byReturnPeriod, inputHash: 'h' })).toThrow(/FOREIGN KEY/);
+    expect(() =>
+      maps.create({ studyId: 'missing', request: byReturnPeriod, inputHash: 'h' }),
+    ).toThrow(/FOREIGN KEY/);
     const run = maps.create({ studyId, request: byReturnPeriod, inputHash: 'h' });
     maps.markRunning(run.id, '2000-01-01T00:00:00.000Z', description);
     maps.finishDone(run.id, outputs);
@@ -137,7 +206,11 @@ describe('openStore and map runs', () => {
     const path = join(dir, 'tremora.db');
     const first = openStore(path);
     const study = first.studies.create({ name: 'S', document: '{}' });
-    const queued = first.maps.create({ studyId: study.id, request: byReturnPeriod, inputHash: 'h' });
+    const queued = first.maps.create({
+      studyId: study.id,
+      request: byReturnPeriod,
+      inputHash: 'h',
+    });
     const running = first.maps.create({ studyId: study.id, request: byChance, inputHash: 'h' });
     first.maps.markRunning(running.id, '2000-01-01T00:00:00.000Z', description);
     first.maps.setProgress(running.id, 0.4);
@@ -151,7 +224,10 @@ describe('openStore and map runs', () => {
     expect(second.mapRunsInterruptedAtOpen).toBe(2);
     expect(second.interruptedAtOpen).toBe(0);
     for (const id of [queued.id, running.id]) {
-      expect(second.maps.get(id)).toMatchObject({ status: 'interrupted', error: INTERRUPTED_MESSAGE });
+      expect(second.maps.get(id)).toMatchObject({
+        status: 'interrupted',
+        error: INTERRUPTED_MESSAGE,
+      });
       expect(second.maps.geojson(id)).toBeUndefined();
     }
     expect(second.maps.get(running.id)?.progress).toBe(0.4);

@@ -16,12 +16,28 @@ beforeEach(() => {
   studyId = new StudyRepository(db).create({ name: 'S', document: '{}' }).id;
 });
 
-const outputs = { resultsJson: '{"communities":[]}', provenanceJson: '{"inputHash":"h"}', finishedAt: '2000-01-01T00:00:10.000Z' };
+const outputs = {
+  resultsJson: '{"communities":[]}',
+  provenanceJson: '{"inputHash":"h"}',
+  finishedAt: '2000-01-01T00:00:10.000Z',
+};
 
 describe('RunRepository', () => {
   it('follows a run from queued through running to done, results written with the status', () => {
-    const run = runs.create({ studyId, document: '{"name":"S"}', communitiesCsv: 'id,name', inputHash: 'h' });
-    expect(run).toMatchObject({ status: 'queued', progress: 0, inputHash: 'h', startedAt: null, finishedAt: null, provenance: null });
+    const run = runs.create({
+      studyId,
+      document: '{"name":"S"}',
+      communitiesCsv: 'id,name',
+      inputHash: 'h',
+    });
+    expect(run).toMatchObject({
+      status: 'queued',
+      progress: 0,
+      inputHash: 'h',
+      startedAt: null,
+      finishedAt: null,
+      provenance: null,
+    });
     expect(runs.inputs(run.id)).toEqual({ document: '{"name":"S"}', communitiesCsv: 'id,name' });
     expect(runs.finishDone(run.id, outputs)).toBe(false);
     expect(runs.markRunning(run.id, '2000-01-01T00:00:00.000Z')).toBe(true);
@@ -30,7 +46,13 @@ describe('RunRepository', () => {
     expect(runs.get(run.id)?.progress).toBe(0.5);
     expect(runs.results(run.id)).toBeUndefined();
     expect(runs.finishDone(run.id, outputs)).toBe(true);
-    expect(runs.get(run.id)).toMatchObject({ status: 'done', progress: 1, provenance: outputs.provenanceJson, finishedAt: outputs.finishedAt, error: null });
+    expect(runs.get(run.id)).toMatchObject({
+      status: 'done',
+      progress: 1,
+      provenance: outputs.provenanceJson,
+      finishedAt: outputs.finishedAt,
+      error: null,
+    });
     expect(runs.results(run.id)).toBe(outputs.resultsJson);
     expect(runs.listForStudy(studyId).map((r) => r.id)).toEqual([run.id]);
   });
@@ -43,13 +65,17 @@ describe('RunRepository', () => {
     expect(runs.markRunning(run.id, 'x')).toBe(false);
     runs.setProgress(run.id, 0.1);
     expect(runs.interruptUnfinished()).toBe(0);
-    expect(() => db.prepare("UPDATE runs SET results = '{}' WHERE id = ?").run(run.id)).toThrow('a finished run cannot be changed');
+    expect(() => db.prepare("UPDATE runs SET results = '{}' WHERE id = ?").run(run.id)).toThrow(
+      'a finished run cannot be changed',
+    );
     expect(runs.results(run.id)).toBe(outputs.resultsJson);
   });
 
   it('refuses results on a run that is not done', () => {
     const run = runs.create({ studyId, document: '{}', inputHash: 'h' });
-    expect(() => db.prepare("UPDATE runs SET results = '{}' WHERE id = ?").run(run.id)).toThrow(/CHECK constraint failed/);
+    expect(() => db.prepare("UPDATE runs SET results = '{}' WHERE id = ?").run(run.id)).toThrow(
+      /CHECK constraint failed/,
+    );
   });
 
   it('records failure, cancellation and interruption with their message', () => {
@@ -66,6 +92,8 @@ describe('RunRepository', () => {
   });
 
   it('refuses a run of a study that does not exist (foreign key)', () => {
-    expect(() => runs.create({ studyId: 'missing', document: '{}', inputHash: 'h' })).toThrow(/FOREIGN KEY/);
+    expect(() => runs.create({ studyId: 'missing', document: '{}', inputHash: 'h' })).toThrow(
+      /FOREIGN KEY/,
+    );
   });
 });

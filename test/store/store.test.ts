@@ -38,7 +38,11 @@ describe('openStore', () => {
     first.runs.setProgress(running.id, 0.4);
     const done = first.runs.create({ studyId: study.id, document: '{}', inputHash: 'h3' });
     first.runs.markRunning(done.id, '2000-01-01T00:00:00.000Z');
-    first.runs.finishDone(done.id, { resultsJson: '{"ok":1}', provenanceJson: '{}', finishedAt: '2000-01-01T00:01:00.000Z' });
+    first.runs.finishDone(done.id, {
+      resultsJson: '{"ok":1}',
+      provenanceJson: '{}',
+      finishedAt: '2000-01-01T00:01:00.000Z',
+    });
     first.close();
 
     const second = openStore(path);

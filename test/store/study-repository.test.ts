@@ -20,13 +20,23 @@ describe('StudyRepository', () => {
     const created = studies.create({ name: 'Kept', document: text });
     expect(created.id).toMatch(/^[A-Za-z0-9_-]{12}$/);
     expect(studies.get(created.id)?.document).toBe(text);
-    expect(studies.list()).toEqual([{ id: created.id, name: 'Kept', createdAt: created.createdAt, updatedAt: created.updatedAt }]);
+    expect(studies.list()).toEqual([
+      { id: created.id, name: 'Kept', createdAt: created.createdAt, updatedAt: created.updatedAt },
+    ]);
   });
 
   it('replaces a document and records the imported file with it; the latest file wins', () => {
     const { id } = studies.create({ name: 'A', document: '{"v":1}' });
-    studies.replace(id, { name: 'A', document: '{"v":2}', file: { kind: 'communities-csv', content: 'first' } });
-    const replaced = studies.replace(id, { name: 'B', document: '{"v":3}', file: { kind: 'communities-csv', content: 'second' } });
+    studies.replace(id, {
+      name: 'A',
+      document: '{"v":2}',
+      file: { kind: 'communities-csv', content: 'first' },
+    });
+    const replaced = studies.replace(id, {
+      name: 'B',
+      document: '{"v":3}',
+      file: { kind: 'communities-csv', content: 'second' },
+    });
     expect(replaced?.name).toBe('B');
     expect(replaced?.document).toBe('{"v":3}');
     expect(studies.latestFile(id, 'communities-csv')).toBe('second');
@@ -35,7 +45,11 @@ describe('StudyRepository', () => {
   });
 
   it('deletes a study with its files and runs', () => {
-    const { id } = studies.create({ name: 'A', document: '{}', file: { kind: 'sources-geojson', content: '{}' } });
+    const { id } = studies.create({
+      name: 'A',
+      document: '{}',
+      file: { kind: 'sources-geojson', content: '{}' },
+    });
     const runs = new RunRepository(db);
     const run = runs.create({ studyId: id, document: '{}', inputHash: 'h' });
     expect(studies.delete(id)).toBe(true);

@@ -16,32 +16,53 @@ export type Doc = Record<string, any>;
 export const GRID_DEG = 1 / 64;
 
 const gridIn = (min: number, max: number): fc.Arbitrary<number> =>
-  fc.integer({ min: Math.round(min / GRID_DEG), max: Math.round(max / GRID_DEG) }).map((i) => i * GRID_DEG);
+  fc
+    .integer({ min: Math.round(min / GRID_DEG), max: Math.round(max / GRID_DEG) })
+    .map((i) => i * GRID_DEG);
 
 /** A longitude and latitude of the invented region, degrees. */
 export const lonArb = gridIn(-150.75, -149.25);
 export const latArb = gridIn(-47.5, -46.5);
 
 /** A display name: any text of 1 to 60 characters that is not blank. */
-export const nameArb = fc.string({ minLength: 1, maxLength: 60, unit: 'binary' }).filter((s) => s.trim().length > 0);
+export const nameArb = fc
+  .string({ minLength: 1, maxLength: 60, unit: 'binary' })
+  .filter((s) => s.trim().length > 0);
 
 /** A number rounded to `digits` decimals, so documents stay readable when printed. */
-const rounded = (arb: fc.Arbitrary<number>, digits: number) => arb.map((x) => Number(x.toFixed(digits)));
+const rounded = (arb: fc.Arbitrary<number>, digits: number) =>
+  arb.map((x) => Number(x.toFixed(digits)));
 
 /** An annual rate, log-uniform from 1e-4 to 1e-1 a year. */
-const rateArb = rounded(fc.double({ min: -4, max: -1, noNaN: true }), 3).map((e) => Number((10 ** e).toPrecision(4)));
-const magnitudeArb = (min: number, max: number) => fc.integer({ min: Math.round(min * 20), max: Math.round(max * 20) }).map((i) => i / 20);
+const rateArb = rounded(fc.double({ min: -4, max: -1, noNaN: true }), 3).map((e) =>
+  Number((10 ** e).toPrecision(4)),
+);
+const magnitudeArb = (min: number, max: number) =>
+  fc.integer({ min: Math.round(min * 20), max: Math.round(max * 20) }).map((i) => i / 20);
 
-export const fixedRecurrenceArb = fc.record({ type: fc.constant('fixed'), magnitude: magnitudeArb(5, 7.5), rate: rateArb });
+export const fixedRecurrenceArb = fc.record({
+  type: fc.constant('fixed'),
+  magnitude: magnitudeArb(5, 7.5),
+  rate: rateArb,
+});
 
 export const grRecurrenceArb = fc
   .record({
     bValue: rounded(fc.double({ min: 0.7, max: 1.3, noNaN: true }), 2),
     mMin: magnitudeArb(4.5, 5.5),
     span: magnitudeArb(0.5, 2.2),
-    given: fc.oneof(fc.record({ rate: rateArb }), fc.record({ aValue: rounded(fc.double({ min: 2, max: 4.5, noNaN: true }), 2) })),
+    given: fc.oneof(
+      fc.record({ rate: rateArb }),
+      fc.record({ aValue: rounded(fc.double({ min: 2, max: 4.5, noNaN: true }), 2) }),
+    ),
   })
-  .map(({ bValue, mMin, span, given }) => ({ type: 'gutenberg-richter', bValue, mMin, mMax: Number((mMin + span).toFixed(2)), ...given }));
+  .map(({ bValue, mMin, span, given }) => ({
+    type: 'gutenberg-richter',
+    bValue,
+    mMin,
+    mMax: Number((mMin + span).toFixed(2)),
+    ...given,
+  }));
 
 export const momentRecurrenceArb = fc
   .record({
@@ -89,8 +110,20 @@ export function faultSourceArb(id: string): fc.Arbitrary<Doc> {
     .filter(({ dx, dy }) => Math.hypot(dx * 0.68, dy) >= 4)
     .map(({ lon, lat, dx, dy, thicknessKm, upperDepthKm, ...p }) => ({
       type: 'Feature',
-      geometry: { type: 'LineString', coordinates: [[lon, lat], [lon + dx * GRID_DEG, lat + dy * GRID_DEG]] },
-      properties: { id, setting: 'crustal', upperDepthKm, lowerDepthKm: upperDepthKm + thicknessKm, ...p },
+      geometry: {
+        type: 'LineString',
+        coordinates: [
+          [lon, lat],
+          [lon + dx * GRID_DEG, lat + dy * GRID_DEG],
+        ],
+      },
+      properties: {
+        id,
+        setting: 'crustal',
+        upperDepthKm,
+        lowerDepthKm: upperDepthKm + thicknessKm,
+        ...p,
+      },
     }));
 }
 
@@ -110,7 +143,18 @@ export function zoneSourceArb(id: string): fc.Arbitrary<Doc> {
       const d = side * GRID_DEG;
       return {
         type: 'Feature',
-        geometry: { type: 'Polygon', coordinates: [[[lon, lat], [lon + d, lat], [lon + d, lat + d], [lon, lat + d], [lon, lat]]] },
+        geometry: {
+          type: 'Polygon',
+          coordinates: [
+            [
+              [lon, lat],
+              [lon + d, lat],
+              [lon + d, lat + d],
+              [lon, lat + d],
+              [lon, lat],
+            ],
+          ],
+        },
         properties: { id, setting: 'crustal', ...p },
       };
     });
@@ -122,21 +166,40 @@ export function communityArb(id: string): fc.Arbitrary<Doc> {
       name: nameArb,
       lon: lonArb,
       lat: latArb,
-      site: fc.oneof(fc.record({ vs30: fc.integer({ min: 180, max: 1400 }) }), fc.record({ siteClass: fc.constantFrom('B', 'BC', 'C', 'CD', 'D') })),
+      site: fc.oneof(
+        fc.record({ vs30: fc.integer({ min: 180, max: 1400 }) }),
+        fc.record({ siteClass: fc.constantFrom('B', 'BC', 'C', 'CD', 'D') }),
+      ),
       population: fc.option(fc.integer({ min: 0, max: 5000 }), { nil: undefined }),
       coastal: fc.boolean(),
     })
-    .map(({ site, population, ...c }) => ({ id, ...c, ...site, ...(population === undefined ? {} : { population }) }));
+    .map(({ site, population, ...c }) => ({
+      id,
+      ...c,
+      ...site,
+      ...(population === undefined ? {} : { population }),
+    }));
 }
 
 /** Ground motion and measures that go together: Cornell79 knows PGA only. */
 const motionArb = fc.oneof(
-  fc.constant({ groundMotion: { crustal: [{ model: 'Cornell79', weight: 1 }] }, measures: ['PGA'] }),
+  fc.constant({
+    groundMotion: { crustal: [{ model: 'Cornell79', weight: 1 }] },
+    measures: ['PGA'],
+  }),
   fc.subarray(['SA(0.2)', 'SA(1.0)', 'PGV'] as const).map((extra) => ({
-    groundMotion: { crustal: [{ model: 'BSSA14', weight: 0.5 }, { model: 'CB14', weight: 0.5 }] },
+    groundMotion: {
+      crustal: [
+        { model: 'BSSA14', weight: 0.5 },
+        { model: 'CB14', weight: 0.5 },
+      ],
+    },
     measures: ['PGA', ...extra],
   })),
-  fc.constant({ groundMotion: { crustal: [{ model: 'BSSA14', weight: 1 }] }, measures: ['PGA', 'SA(1.0)'] }),
+  fc.constant({
+    groundMotion: { crustal: [{ model: 'BSSA14', weight: 1 }] },
+    measures: ['PGA', 'SA(1.0)'],
+  }),
 );
 
 export interface StudyArbOptions {
@@ -148,7 +211,10 @@ export interface StudyArbOptions {
 export function studyDocArb(options: StudyArbOptions = {}): fc.Arbitrary<Doc> {
   const maxCommunities = options.maxCommunities ?? 3;
   const maxSources = options.maxSources ?? 3;
-  const kinds = fc.array(fc.constantFrom('point', 'fault', 'zone'), { minLength: 1, maxLength: maxSources });
+  const kinds = fc.array(fc.constantFrom('point', 'fault', 'zone'), {
+    minLength: 1,
+    maxLength: maxSources,
+  });
   return fc
     .record({
       name: nameArb,
@@ -164,9 +230,17 @@ export function studyDocArb(options: StudyArbOptions = {}): fc.Arbitrary<Doc> {
     .chain((s) =>
       fc
         .record({
-          communities: fc.tuple(...Array.from({ length: s.communityCount }, (_, i) => communityArb(`c${i + 1}`))),
+          communities: fc.tuple(
+            ...Array.from({ length: s.communityCount }, (_, i) => communityArb(`c${i + 1}`)),
+          ),
           features: fc.tuple(
-            ...s.kinds.map((kind, i) => (kind === 'point' ? pointSourceArb(`s${i + 1}`) : kind === 'fault' ? faultSourceArb(`s${i + 1}`) : zoneSourceArb(`s${i + 1}`))),
+            ...s.kinds.map((kind, i) =>
+              kind === 'point'
+                ? pointSourceArb(`s${i + 1}`)
+                : kind === 'fault'
+                  ? faultSourceArb(`s${i + 1}`)
+                  : zoneSourceArb(`s${i + 1}`),
+            ),
           ),
         })
         .map(({ communities, features }) => ({

@@ -30,19 +30,36 @@ function studyWithTrace(trace: number[][]): Record<string, any> {
 
 describe('faultPlaneCount', () => {
   for (const [name, trace] of [
-    ['a straight two-vertex trace', [[-140.5, -47.6], [-140.5, -47.2]]],
-    ['a bent trace of 3 segments', [[-140.0, -47.8], [-139.8, -47.5], [-139.7, -47.1], [-139.75, -46.9]]],
+    [
+      'a straight two-vertex trace',
+      [
+        [-140.5, -47.6],
+        [-140.5, -47.2],
+      ],
+    ],
+    [
+      'a bent trace of 3 segments',
+      [
+        [-140.0, -47.8],
+        [-139.8, -47.5],
+        [-139.7, -47.1],
+        [-139.75, -46.9],
+      ],
+    ],
     ['a zig-zag of 40 vertices', zigZag(40, 0.02)],
   ] as const) {
     test(`counts the planes the engine builds: ${name}`, () => {
-      const loaded = loadStudy(studyWithTrace(trace as unknown as number[][]), { models: modelCatalog });
+      const loaded = loadStudy(studyWithTrace(trace as unknown as number[][]), {
+        models: modelCatalog,
+      });
       if (!loaded.ok) throw new Error(JSON.stringify(loaded.issues));
       const { study } = loaded;
       const fault = study.sources[0] as FaultSource;
       const prepared = prepareSource(fault, 0, frameForStudy(study), study.settings);
       let built = 0;
       for (const magnitude of magnitudeBins(fault.recurrence, study.settings).magnitudes) {
-        for (const rupture of placeRuptures(prepared, magnitude)) built += rupture.surface.kind === 'planes' ? rupture.surface.planes.length : 1;
+        for (const rupture of placeRuptures(prepared, magnitude))
+          built += rupture.surface.kind === 'planes' ? rupture.surface.planes.length : 1;
       }
       const estimated = faultPlaneCount(fault, study.settings);
       console.log(`${name}: ${estimated} planes estimated, ${built} built`);
@@ -56,10 +73,19 @@ describe('faultPlaneCount', () => {
     // Large ruptures (up to M 8, a few hundred km) each cover hundreds of the 1.4 km segments;
     // the ruptures themselves stay far under MAX_RUPTURES.
     const study = studyWithTrace(zigZag(1000, 0.01));
-    study.sources.features[0].properties.recurrence = { type: 'gutenberg-richter', bValue: 1, mMin: 5, mMax: 8, aValue: 3.1 };
+    study.sources.features[0].properties.recurrence = {
+      type: 'gutenberg-richter',
+      bValue: 1,
+      mMin: 5,
+      mMax: 8,
+      aValue: 3.1,
+    };
     study.settings = { ...study.settings, ruptureSpacingKm: 1 };
     const loaded = loadStudy(study, { models: modelCatalog });
-    if (loaded.ok) console.log(`accepted with ${faultPlaneCount(loaded.study.sources[0] as FaultSource, loaded.study.settings)} planes`);
+    if (loaded.ok)
+      console.log(
+        `accepted with ${faultPlaneCount(loaded.study.sources[0] as FaultSource, loaded.study.settings)} planes`,
+      );
     expect(loaded.ok).toBe(false);
     const issue = loaded.ok ? undefined : loaded.issues.find((i) => i.path === 'sources');
     expect(issue?.message).toContain(`over the limit of ${MAX_RUPTURE_PLANES}`);

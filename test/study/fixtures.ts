@@ -6,7 +6,16 @@ export function validStudy(): Record<string, any> {
   return {
     name: 'Test shore',
     communities: [
-      { id: 'north-cove', name: 'North Cove', lon: -140.1, lat: -47.2, vs30: 450, population: 300, coastal: true, elevationM: 5 },
+      {
+        id: 'north-cove',
+        name: 'North Cove',
+        lon: -140.1,
+        lat: -47.2,
+        vs30: 450,
+        population: 300,
+        coastal: true,
+        elevationM: 5,
+      },
       { id: 'ridge-camp', name: 'Ridge Camp', lon: -140.3, lat: -47.4, siteClass: 'C' },
     ],
     sources: {
@@ -14,33 +23,88 @@ export function validStudy(): Record<string, any> {
       features: [
         {
           type: 'Feature',
-          geometry: { type: 'LineString', coordinates: [[-140.5, -47.6], [-140.5, -47.2]] },
+          geometry: {
+            type: 'LineString',
+            coordinates: [
+              [-140.5, -47.6],
+              [-140.5, -47.2],
+            ],
+          },
           properties: {
-            id: 'fault-a', name: 'Fault A', setting: 'crustal', mechanism: 'strike-slip',
-            dip: 90, upperDepthKm: 0, lowerDepthKm: 15,
+            id: 'fault-a',
+            name: 'Fault A',
+            setting: 'crustal',
+            mechanism: 'strike-slip',
+            dip: 90,
+            upperDepthKm: 0,
+            lowerDepthKm: 15,
             recurrence: { type: 'gutenberg-richter', bValue: 1, mMin: 5, mMax: 7.2, aValue: 3.1 },
           },
         },
         {
           type: 'Feature',
-          geometry: { type: 'LineString', coordinates: [[-140.0, -47.8], [-139.8, -47.5], [-139.7, -47.1]] },
+          geometry: {
+            type: 'LineString',
+            coordinates: [
+              [-140.0, -47.8],
+              [-139.8, -47.5],
+              [-139.7, -47.1],
+            ],
+          },
           properties: {
-            id: 'fault-b', setting: 'crustal', rake: 95, dip: 40, lowerDepthKm: 18,
-            recurrence: { type: 'moment-balanced', slipRateMmYr: 2, bValue: 1, mMin: 5, mMax: 7.4, shape: 'characteristic' },
+            id: 'fault-b',
+            setting: 'crustal',
+            rake: 95,
+            dip: 40,
+            lowerDepthKm: 18,
+            recurrence: {
+              type: 'moment-balanced',
+              slipRateMmYr: 2,
+              bValue: 1,
+              mMin: 5,
+              mMax: 7.4,
+              shape: 'characteristic',
+            },
           },
         },
         {
           type: 'Feature',
-          geometry: { type: 'Polygon', coordinates: [[[-141, -48], [-139, -48], [-139, -46.5], [-141, -46.5], [-141, -48]]] },
+          geometry: {
+            type: 'Polygon',
+            coordinates: [
+              [
+                [-141, -48],
+                [-139, -48],
+                [-139, -46.5],
+                [-141, -46.5],
+                [-141, -48],
+              ],
+            ],
+          },
           properties: {
-            id: 'background', setting: 'crustal', mechanism: 'normal', depthKm: 10,
-            recurrence: { type: 'gutenberg-richter', bValue: 1.05, mMin: 4.5, mMax: 6.5, rate: 0.2 },
+            id: 'background',
+            setting: 'crustal',
+            mechanism: 'normal',
+            depthKm: 10,
+            recurrence: {
+              type: 'gutenberg-richter',
+              bValue: 1.05,
+              mMin: 4.5,
+              mMax: 6.5,
+              rate: 0.2,
+            },
           },
         },
         {
           type: 'Feature',
           geometry: { type: 'Point', coordinates: [-140.2, -47.9] },
-          properties: { id: 'deep-spot', setting: 'intraslab', mechanism: 'normal', depthKm: 60, recurrence: { type: 'fixed', magnitude: 6.8, rate: 0.001 } },
+          properties: {
+            id: 'deep-spot',
+            setting: 'intraslab',
+            mechanism: 'normal',
+            depthKm: 60,
+            recurrence: { type: 'fixed', magnitude: 6.8, rate: 0.001 },
+          },
         },
       ],
     },

@@ -6,7 +6,10 @@ import { testCatalog } from '../helpers/test-catalog.ts';
 import { validStudy } from './fixtures.ts';
 
 const load = (raw: unknown, communitiesCsv?: string) =>
-  loadStudy(raw, { models: testCatalog, ...(communitiesCsv !== undefined ? { communitiesCsv } : {}) });
+  loadStudy(raw, {
+    models: testCatalog,
+    ...(communitiesCsv !== undefined ? { communitiesCsv } : {}),
+  });
 
 function issuesOf(raw: unknown): InputIssue[] {
   const result = load(raw);
@@ -23,10 +26,27 @@ describe('loadStudy: a valid study', () => {
     if (!result.ok) return;
     const { study } = result;
     expect(study.communities.map((c) => c.id)).toEqual(['north-cove', 'ridge-camp']);
-    expect(study.communities[0]).toMatchObject({ vs30: 450, vs30Basis: 'measured', coastal: true, population: 300 });
+    expect(study.communities[0]).toMatchObject({
+      vs30: 450,
+      vs30Basis: 'measured',
+      coastal: true,
+      population: 300,
+    });
     // ASCE 7-16 class C: geometric mean of 366 and 762 m/s, about 530 (api/study/site-class.ts).
-    expect(study.communities[1]).toMatchObject({ vs30: 530, vs30Basis: 'site-class', siteClass: 'C', coastal: false });
-    expect(study.settings).toMatchObject({ measures: ['PGA', 'SA(1.0)'], horizonsYears: [1, 50], returnPeriodsYears: [475, 2475], truncationSigma: 3, maxDistanceKm: 300, magnitudeStep: 0.1 });
+    expect(study.communities[1]).toMatchObject({
+      vs30: 530,
+      vs30Basis: 'site-class',
+      siteClass: 'C',
+      coastal: false,
+    });
+    expect(study.settings).toMatchObject({
+      measures: ['PGA', 'SA(1.0)'],
+      horizonsYears: [1, 50],
+      returnPeriodsYears: [475, 2475],
+      truncationSigma: 3,
+      maxDistanceKm: 300,
+      magnitudeStep: 0.1,
+    });
     expect(study.groundMotion.intraslab).toEqual([{ model: 'SUBDUCTION-A', weight: 1 }]);
     expect(result.warnings.map((w) => w.path)).toEqual(['groundMotion.intraslab']);
   });
@@ -36,16 +56,33 @@ describe('loadStudy: a valid study', () => {
     if (!result.ok) throw new Error('expected ok');
     const [a, b, zone, point] = result.study.sources;
     // A trace drawn due north dips east by the right-hand rule: dip direction 90°.
-    expect(a).toMatchObject({ kind: 'fault', mechanism: 'strike-slip', rakeDeg: 0, dipDeg: 90, upperDepthKm: 0, lowerDepthKm: 15, name: 'Fault A' });
+    expect(a).toMatchObject({
+      kind: 'fault',
+      mechanism: 'strike-slip',
+      rakeDeg: 0,
+      dipDeg: 90,
+      upperDepthKm: 0,
+      lowerDepthKm: 15,
+      name: 'Fault A',
+    });
     expect((a as FaultSource).dipDirectionDeg).toBeCloseTo(90, 6);
     // Rake 95° lies in the reverse range 30–150° (Boore et al. 2014 classes, from memory).
     expect(b).toMatchObject({ kind: 'fault', mechanism: 'reverse', rakeDeg: 95, name: 'fault-b' });
-    expect(b?.recurrence).toMatchObject({ type: 'moment-balanced', shape: 'characteristic', shearModulusPa: 3e10 });
+    expect(b?.recurrence).toMatchObject({
+      type: 'moment-balanced',
+      shape: 'characteristic',
+      shearModulusPa: 3e10,
+    });
     // The trace runs roughly north-north-east, so the dip direction is roughly east-south-east.
     expect((b as FaultSource).dipDirectionDeg).toBeGreaterThan(100);
     expect((b as FaultSource).dipDirectionDeg).toBeLessThan(120);
     expect(zone).toMatchObject({ kind: 'zone', mechanism: 'normal', rakeDeg: -90, depthKm: 10 });
-    expect(point).toMatchObject({ kind: 'point', setting: 'intraslab', location: [-140.2, -47.9], depthKm: 60 });
+    expect(point).toMatchObject({
+      kind: 'point',
+      setting: 'intraslab',
+      location: [-140.2, -47.9],
+      depthKm: 60,
+    });
   });
 
   it('warns about unknown keys instead of dropping them silently', () => {
@@ -60,8 +97,13 @@ describe('loadStudy: a valid study', () => {
 describe('loadStudy: every problem at once, each with its path', () => {
   it('reports the issue example exactly (dip out of range)', () => {
     const study = validStudy();
-    study.sources.features[3] = { ...study.sources.features[1], properties: { ...study.sources.features[1].properties, id: 'fault-c', dip: 120 } };
-    expect(lines(issuesOf(study))).toEqual(['sources.features[3].properties.dip: expected a number in (0, 90] degrees, got 120']);
+    study.sources.features[3] = {
+      ...study.sources.features[1],
+      properties: { ...study.sources.features[1].properties, id: 'fault-c', dip: 120 },
+    };
+    expect(lines(issuesOf(study))).toEqual([
+      'sources.features[3].properties.dip: expected a number in (0, 90] degrees, got 120',
+    ]);
   });
 
   it('lists wrong types, ranges, recurrence, models and weights together', () => {
@@ -80,17 +122,19 @@ describe('loadStudy: every problem at once, each with its path', () => {
       { model: 'NOPE', weight: 0.5 },
       { model: 'CRUSTAL-B', weight: 0.4 },
     ];
-    expect(lines(issuesOf(study))).toEqual([
-      'name: expected a study name of 1 to 200 characters, got 42',
-      'communities[0].lon: expected a number in [-180, 180] degrees, got 200',
-      'communities[1].lat: expected a number in [-90, 90] degrees, got "south"',
-      'communities[1].vs30: expected vs30 (m/s) or siteClass (A, B, BC, C, CD, D, DE, E), got neither',
-      'sources.features[0].properties.recurrence.mMax: expected mMax greater than mMin (7.5), got 7.2',
-      'sources.features[1].properties.recurrence.bValue: expected a number in (0.3, 2.5), got 2.5',
-      'sources.features[2].properties.setting: expected one of "crustal", "interface", "intraslab", got "crust"',
-      'groundMotion.crustal[0].model: unknown model "NOPE"; expected one of CRUSTAL-A, CRUSTAL-B, SUBDUCTION-A, PGA-ONLY',
-      'groundMotion.crustal: expected weights summing to 1 (within 0.000001), got 0.9',
-    ].map((l) => l.replace('0.000001', String(1e-6))));
+    expect(lines(issuesOf(study))).toEqual(
+      [
+        'name: expected a study name of 1 to 200 characters, got 42',
+        'communities[0].lon: expected a number in [-180, 180] degrees, got 200',
+        'communities[1].lat: expected a number in [-90, 90] degrees, got "south"',
+        'communities[1].vs30: expected vs30 (m/s) or siteClass (A, B, BC, C, CD, D, DE, E), got neither',
+        'sources.features[0].properties.recurrence.mMax: expected mMax greater than mMin (7.5), got 7.2',
+        'sources.features[1].properties.recurrence.bValue: expected a number in (0.3, 2.5), got 2.5',
+        'sources.features[2].properties.setting: expected one of "crustal", "interface", "intraslab", got "crust"',
+        'groundMotion.crustal[0].model: unknown model "NOPE"; expected one of CRUSTAL-A, CRUSTAL-B, SUBDUCTION-A, PGA-ONLY',
+        'groundMotion.crustal: expected weights summing to 1 (within 0.000001), got 0.9',
+      ].map((l) => l.replace('0.000001', String(1e-6))),
+    );
   });
 
   it('reports upper depth below lower depth', () => {
@@ -113,9 +157,24 @@ describe('loadStudy: every problem at once, each with its path', () => {
 
   it('reports self-intersecting and degenerate geometry', () => {
     const study = validStudy();
-    study.sources.features[0].geometry.coordinates = [[-140.5, -47.6], [-140.3, -47.2], [-140.3, -47.6], [-140.5, -47.2]];
-    study.sources.features[2].geometry.coordinates = [[[-141, -48], [-139, -48], [-141, -48], [-141, -48]]];
-    study.sources.features[1].geometry.coordinates = [[-140.0, -47.8], [-140.0, -47.8]];
+    study.sources.features[0].geometry.coordinates = [
+      [-140.5, -47.6],
+      [-140.3, -47.2],
+      [-140.3, -47.6],
+      [-140.5, -47.2],
+    ];
+    study.sources.features[2].geometry.coordinates = [
+      [
+        [-141, -48],
+        [-139, -48],
+        [-141, -48],
+        [-141, -48],
+      ],
+    ];
+    study.sources.features[1].geometry.coordinates = [
+      [-140.0, -47.8],
+      [-140.0, -47.8],
+    ];
     expect(lines(issuesOf(study))).toEqual([
       'sources.features[0].geometry.coordinates: the trace crosses itself; expected a simple line',
       'sources.features[1].geometry.coordinates[1]: repeats the previous vertex; expected consecutive vertices at least 1 m apart',
@@ -125,10 +184,29 @@ describe('loadStudy: every problem at once, each with its path', () => {
 
   it('reports an unclosed ring and a bow-tie polygon', () => {
     const study = validStudy();
-    study.sources.features[2].geometry.coordinates = [[[-141, -48], [-139, -46.5], [-139, -48], [-141, -46.5], [-141, -48]]];
-    expect(lines(issuesOf(study))).toEqual(['sources.features[2].geometry.coordinates: the polygon crosses itself; expected simple rings']);
-    study.sources.features[2].geometry.coordinates = [[[-141, -48], [-139, -48], [-139, -46.5], [-141, -46.5]]];
-    expect(lines(issuesOf(study))).toEqual(['sources.features[2].geometry.coordinates[0]: the ring is not closed; expected its last position to repeat its first']);
+    study.sources.features[2].geometry.coordinates = [
+      [
+        [-141, -48],
+        [-139, -46.5],
+        [-139, -48],
+        [-141, -46.5],
+        [-141, -48],
+      ],
+    ];
+    expect(lines(issuesOf(study))).toEqual([
+      'sources.features[2].geometry.coordinates: the polygon crosses itself; expected simple rings',
+    ]);
+    study.sources.features[2].geometry.coordinates = [
+      [
+        [-141, -48],
+        [-139, -48],
+        [-139, -46.5],
+        [-141, -46.5],
+      ],
+    ];
+    expect(lines(issuesOf(study))).toEqual([
+      'sources.features[2].geometry.coordinates[0]: the ring is not closed; expected its last position to repeat its first',
+    ]);
   });
 
   it('rejects models that do not suit the setting or the measures', () => {
@@ -144,7 +222,13 @@ describe('loadStudy: every problem at once, each with its path', () => {
 
   it('rejects moment balancing on a zone and a characteristic range too narrow for its box', () => {
     const study = validStudy();
-    study.sources.features[2].properties.recurrence = { type: 'moment-balanced', slipRateMmYr: 1, bValue: 1, mMin: 5, mMax: 6 };
+    study.sources.features[2].properties.recurrence = {
+      type: 'moment-balanced',
+      slipRateMmYr: 1,
+      bValue: 1,
+      mMin: 5,
+      mMax: 6,
+    };
     study.sources.features[1].properties.recurrence.mMin = 7.0;
     expect(lines(issuesOf(study))).toEqual([
       'sources.features[1].properties.recurrence.mMin: the characteristic shape (Youngs & Coppersmith 1985) needs mMax - mMin > 0.5, got 0.40',
@@ -164,7 +248,11 @@ describe('loadStudy: every problem at once, each with its path', () => {
 
   it('checks settings: measures, levels order, ranges', () => {
     const study = validStudy();
-    study.settings = { measures: ['PGA', 'SA(x)', 'PGA'], levels: { PGA: [0.1, 0.05], PGV: [1, 2] }, truncationSigma: -1 };
+    study.settings = {
+      measures: ['PGA', 'SA(x)', 'PGA'],
+      levels: { PGA: [0.1, 0.05], PGV: [1, 2] },
+      truncationSigma: -1,
+    };
     expect(lines(issuesOf(study))).toEqual([
       'settings.truncationSigma: expected a number in [0, 6] sigma, got -1',
     ]);
@@ -187,14 +275,20 @@ describe('loadStudy: every problem at once, each with its path', () => {
       'groundMotion.crustal[0].model: expected a model name, got 5',
     ]);
     delete study.settings;
-    expect(lines(issuesOf(study))).toEqual(['groundMotion.crustal[0].model: expected a model name, got 5']);
+    expect(lines(issuesOf(study))).toEqual([
+      'groundMotion.crustal[0].model: expected a model name, got 5',
+    ]);
   });
 
   it('refuses a non-object study and a missing FeatureCollection', () => {
-    expect(lines(issuesOf([1, 2]))).toEqual(['(study): expected a study object with name, communities, sources, groundMotion, settings, outline, terrain, got a list of 2']);
+    expect(lines(issuesOf([1, 2]))).toEqual([
+      '(study): expected a study object with name, communities, sources, groundMotion, settings, outline, terrain, got a list of 2',
+    ]);
     const study = validStudy();
     study.sources = { type: 'Feature' };
-    expect(lines(issuesOf(study))).toEqual(['sources: expected a GeoJSON FeatureCollection with a list of features, got an object']);
+    expect(lines(issuesOf(study))).toEqual([
+      'sources: expected a GeoJSON FeatureCollection with a list of features, got an object',
+    ]);
   });
 });
 
@@ -212,14 +306,42 @@ describe('loadStudy: communities from CSV', () => {
     expect(result.ok).toBe(true);
     if (!result.ok) return;
     expect(result.study.communities).toEqual([
-      { id: 'north-cove', name: 'North Cove', lon: -140.1, lat: -47.2, vs30: 260, vs30Basis: 'site-class', siteClass: 'D', population: 300, coastal: true, elevationM: 5 },
-      { id: 'ridge-camp', name: 'Ridge Camp, upper', lon: -140.3, lat: -47.4, vs30: 1080, vs30Basis: 'site-class', siteClass: 'B', coastal: false },
+      {
+        id: 'north-cove',
+        name: 'North Cove',
+        lon: -140.1,
+        lat: -47.2,
+        vs30: 260,
+        vs30Basis: 'site-class',
+        siteClass: 'D',
+        population: 300,
+        coastal: true,
+        elevationM: 5,
+      },
+      {
+        id: 'ridge-camp',
+        name: 'Ridge Camp, upper',
+        lon: -140.3,
+        lat: -47.4,
+        vs30: 1080,
+        vs30Basis: 'site-class',
+        siteClass: 'B',
+        coastal: false,
+      },
     ]);
   });
 
   it('reports rows with missing columns and bad cells by line number, blank lines counted', () => {
     const study = { ...validStudy(), communities: 'villages.csv' };
-    const csv = [header, 'a,A,-140,-47,400,10,no,3', '', 'b,B,-140,-47,400', 'c,C,-140,-95,400,10,no,3', 'd,"D\nwith a break",-140,-47,400,10,maybe,3', 'e,E,-140,-47,400,10,no,3'].join('\r\n');
+    const csv = [
+      header,
+      'a,A,-140,-47,400,10,no,3',
+      '',
+      'b,B,-140,-47,400',
+      'c,C,-140,-95,400,10,no,3',
+      'd,"D\nwith a break",-140,-47,400,10,maybe,3',
+      'e,E,-140,-47,400,10,no,3',
+    ].join('\r\n');
     const result = load(study, csv);
     expect(result.ok ? [] : lines([...result.issues])).toEqual([
       'communities[line 4]: expected 8 columns (id,name,lon,lat,vs30,population,coastal,elevationM), got 5',

@@ -18,13 +18,20 @@ let demoId: string;
 beforeAll(async () => {
   page = startPageApp();
   const small = smallStudy('Pages fixture');
-  smallId = page.ctx.store.studies.create({ name: 'Pages fixture', document: JSON.stringify(small) }).id;
-  demoId = page.ctx.store.studies.create({ name: 'Demo coast', document: readFileSync(DEMO_STUDY_URL, 'utf8') }).id;
+  smallId = page.ctx.store.studies.create({
+    name: 'Pages fixture',
+    document: JSON.stringify(small),
+  }).id;
+  demoId = page.ctx.store.studies.create({
+    name: 'Demo coast',
+    document: readFileSync(DEMO_STUDY_URL, 'utf8'),
+  }).id;
 });
 afterAll(async () => page.close());
 
 const get = (path: string, init?: RequestInit) => page.app.request(path, init);
-const post = (path: string, body: FormData | URLSearchParams) => page.app.request(path, { method: 'POST', body });
+const post = (path: string, body: FormData | URLSearchParams) =>
+  page.app.request(path, { method: 'POST', body });
 
 /** No inline script or style anywhere: the service's CSP forbids both. */
 function expectNoInlineCode(html: string): void {
@@ -90,8 +97,12 @@ describe('pages', () => {
 
   test('a broken GeoJSON upload shows its problem next to the upload and saves nothing', async () => {
     const saved = page.ctx.store.studies.get(smallId)?.document;
-    const bad = '{"type":"FeatureCollection","features":[{"type":"Feature","geometry":{"type":"Point","coordinates":[-140.2,-47.4]},"properties":{"id":"p","setting":"volcanic","mechanism":"normal","depthKm":8,"recurrence":{"type":"fixed","magnitude":6,"rate":0.01}}}]}';
-    const response = await post(`/studies/${smallId}/edit/sources-geojson`, fileForm('bad.geojson', 'application/geo+json', bad));
+    const bad =
+      '{"type":"FeatureCollection","features":[{"type":"Feature","geometry":{"type":"Point","coordinates":[-140.2,-47.4]},"properties":{"id":"p","setting":"volcanic","mechanism":"normal","depthKm":8,"recurrence":{"type":"fixed","magnitude":6,"rate":0.01}}}]}';
+    const response = await post(
+      `/studies/${smallId}/edit/sources-geojson`,
+      fileForm('bad.geojson', 'application/geo+json', bad),
+    );
     expect(response.status).toBe(422);
     const html = await response.text();
     const problems = textOfId(html, 'sources-problems') as string;
@@ -101,15 +112,24 @@ describe('pages', () => {
   });
 
   test('malformed JSON is reported next to the upload too', async () => {
-    const response = await post(`/studies/${smallId}/edit/sources-geojson`, fileForm('broken.geojson', 'application/geo+json', '{"type": "FeatureCollection", '));
+    const response = await post(
+      `/studies/${smallId}/edit/sources-geojson`,
+      fileForm('broken.geojson', 'application/geo+json', '{"type": "FeatureCollection", '),
+    );
     expect(response.status).toBe(422);
-    expect(textOfId(await response.text(), 'sources-problems')).toMatch(/^sources: expected valid JSON/);
+    expect(textOfId(await response.text(), 'sources-problems')).toMatch(
+      /^sources: expected valid JSON/,
+    );
   });
 
   test('a CSV with a bad line shows the line with its problem; nothing is saved', async () => {
     const saved = page.ctx.store.studies.get(smallId)?.document;
-    const csv = 'id,name,lon,lat,vs30,population,coastal\ntest-cove,Test Cove,-140.2,-47.4,500,120,true\nfar-ridge,Far Ridge,-140.5,-47.6,abc,45,false\n';
-    const response = await post(`/studies/${smallId}/edit/communities-csv`, fileForm('villages.csv', 'text/csv', csv));
+    const csv =
+      'id,name,lon,lat,vs30,population,coastal\ntest-cove,Test Cove,-140.2,-47.4,500,120,true\nfar-ridge,Far Ridge,-140.5,-47.6,abc,45,false\n';
+    const response = await post(
+      `/studies/${smallId}/edit/communities-csv`,
+      fileForm('villages.csv', 'text/csv', csv),
+    );
     expect(response.status).toBe(422);
     const html = await response.text();
     expect(textOfId(html, 'communities-problems')).toContain('Line 3, vs30:');
@@ -119,7 +139,17 @@ describe('pages', () => {
 
   test('adding a community: a bad field is shown under that field; a good one is saved', async () => {
     const saved = page.ctx.store.studies.get(smallId)?.document;
-    const fields = { id: 'reef-end', name: 'Reef End', lon: '-140.4', lat: '-95', vs30: '400', siteClass: '', population: '30', elevationM: '3', coastal: 'true' };
+    const fields = {
+      id: 'reef-end',
+      name: 'Reef End',
+      lon: '-140.4',
+      lat: '-95',
+      vs30: '400',
+      siteClass: '',
+      population: '30',
+      elevationM: '3',
+      coastal: 'true',
+    };
     const bad = await post(`/studies/${smallId}/edit/new-community`, new URLSearchParams(fields));
     expect(bad.status).toBe(422);
     const html = await bad.text();
@@ -127,13 +157,20 @@ describe('pages', () => {
     expect(html).toMatch(/id="field-lat"[^>]*aria-invalid="true"/);
     expect(page.ctx.store.studies.get(smallId)?.document).toBe(saved);
 
-    const good = await post(`/studies/${smallId}/edit/new-community`, new URLSearchParams({ ...fields, lat: '-47.45' }));
+    const good = await post(
+      `/studies/${smallId}/edit/new-community`,
+      new URLSearchParams({ ...fields, lat: '-47.45' }),
+    );
     expect(good.status).toBe(303);
     expect(good.headers.get('location')).toBe(`/studies/${smallId}/edit?saved=1`);
-    const document = JSON.parse(page.ctx.store.studies.get(smallId)?.document as string) as { communities: { id: string; lat: number }[] };
+    const document = JSON.parse(page.ctx.store.studies.get(smallId)?.document as string) as {
+      communities: { id: string; lat: number }[];
+    };
     expect(document.communities.map((c) => c.id)).toEqual(['test-cove', 'reef-end']);
     // The study changed after its screening: the overview says so.
-    expect(await (await get(`/studies/${smallId}`)).text()).toContain(translator('en').t('overview.stale'));
+    expect(await (await get(`/studies/${smallId}`)).text()).toContain(
+      translator('en').t('overview.stale'),
+    );
   });
 
   test('the language switch sets a cookie and returns to a same-origin page; French falls back to English', async () => {
@@ -146,7 +183,9 @@ describe('pages', () => {
     expect(html).toContain('<html lang="fr">');
     expect(html).toContain('<h1>Les limites d’un dépistage</h1>');
     expect(html).toContain(translator('en').t('limits.intro'));
-    expect((await get('/language?lang=fr&back=//elsewhere.example/x')).headers.get('location')).toBe('/');
+    expect(
+      (await get('/language?lang=fr&back=//elsewhere.example/x')).headers.get('location'),
+    ).toBe('/');
     expect((await get('/limits?lang=en', { headers: { cookie } })).status).toBe(200);
   });
 
@@ -156,18 +195,26 @@ describe('pages', () => {
     expect(missing.headers.get('content-type')).toContain('text/html');
     const api = await get('/api/no-such-route');
     expect(api.status).toBe(404);
-    expect(((await api.json()) as { error: string }).error).toMatch(/no route GET \/api\/no-such-route/);
+    expect(((await api.json()) as { error: string }).error).toMatch(
+      /no route GET \/api\/no-such-route/,
+    );
     expect((await get('/studies/nope')).status).toBe(404);
   });
 
   test('a scenario with a magnitude out of range shows the problem next to the magnitude', async () => {
-    const response = await post(`/studies/${demoId}/scenario`, new URLSearchParams({ sourceId: 'vennick-fault', magnitude: '12' }));
+    const response = await post(
+      `/studies/${demoId}/scenario`,
+      new URLSearchParams({ sourceId: 'vennick-fault', magnitude: '12' }),
+    );
     expect(response.status).toBe(422);
     expect(textOfId(await response.text(), 'scenario-magnitude-problem')).toMatch(/12/);
   });
 
   test('a scenario on the demo coast gives each community its intensity and a map grid', async () => {
-    const response = await post(`/studies/${demoId}/scenario`, new URLSearchParams({ sourceId: 'vennick-fault', magnitude: '6.8' }));
+    const response = await post(
+      `/studies/${demoId}/scenario`,
+      new URLSearchParams({ sourceId: 'vennick-fault', magnitude: '6.8' }),
+    );
     expect(response.status).toBe(200);
     const html = await response.text();
     expect((html.match(/<tr data-community="/g) ?? []).length).toBe(11);
@@ -175,8 +222,14 @@ describe('pages', () => {
   });
 
   test('an uploaded catalog with bad lines is attached with the rest, and each rejected line is listed', async () => {
-    const csv = readFileSync(new URL('../catalog/fixtures/small-catalog.csv', import.meta.url), 'utf8');
-    const response = await post(`/studies/${smallId}/catalog`, fileForm('small-catalog.csv', 'text/csv', csv));
+    const csv = readFileSync(
+      new URL('../catalog/fixtures/small-catalog.csv', import.meta.url),
+      'utf8',
+    );
+    const response = await post(
+      `/studies/${smallId}/catalog`,
+      fileForm('small-catalog.csv', 'text/csv', csv),
+    );
     expect(response.status).toBe(303);
     const html = await (await get(`/studies/${smallId}/catalog`)).text();
     // The fixture's line 5 has month 13 (test/catalog/csv.test.ts reads the same file).
@@ -188,30 +241,55 @@ describe('pages', () => {
 
   test('a catalog file that loads no event is shown back with its problems and attaches nothing', async () => {
     const before = page.ctx.store.catalogs.get(smallId)?.content;
-    const response = await post(`/studies/${smallId}/catalog`, fileForm('empty.csv', 'text/csv', 'time,lon,lat,depthKm,magnitude,magnitudeType,id\n'));
+    const response = await post(
+      `/studies/${smallId}/catalog`,
+      fileForm('empty.csv', 'text/csv', 'time,lon,lat,depthKm,magnitude,magnitudeType,id\n'),
+    );
     expect(response.status).toBe(422);
-    expect(textOfId(await response.text(), 'catalog-problems')).toMatch(/expected at least one event/);
+    expect(textOfId(await response.text(), 'catalog-problems')).toMatch(
+      /expected at least one event/,
+    );
     expect(page.ctx.store.catalogs.get(smallId)?.content).toBe(before);
   });
 
   test('the catalog view loads the demo catalog, fits it, and adds a zone only after validation', async () => {
-    const loaded = await post(`/studies/${demoId}/catalog`, fileForm('x', 'text/plain', '', { demo: '1' }));
+    const loaded = await post(
+      `/studies/${demoId}/catalog`,
+      fileForm('x', 'text/plain', '', { demo: '1' }),
+    );
     expect(loaded.status).toBe(303);
     const html = await (await get(`/studies/${demoId}/catalog`)).text();
     expect(html).toMatch(/data-loaded="\d+" data-rejected="0"/);
     expect(html).toContain('class="fit-line"');
-    const zone = { polygon: 'orle-background', mMax: '6.5', depthKm: '8', id: 'fitted-zone', name: 'Fitted zone' };
-    const fit = await post(`/studies/${demoId}/catalog/zone`, new URLSearchParams({ ...zone, action: 'fit' }));
+    const zone = {
+      polygon: 'orle-background',
+      mMax: '6.5',
+      depthKm: '8',
+      id: 'fitted-zone',
+      name: 'Fitted zone',
+    };
+    const fit = await post(
+      `/studies/${demoId}/catalog/zone`,
+      new URLSearchParams({ ...zone, action: 'fit' }),
+    );
     expect(fit.status).toBe(200);
     expect(await fit.text()).toMatch(/class="zone-result" data-b="[\d.]+" data-rate="[\d.e-]+"/);
     const before = page.ctx.store.studies.get(demoId)?.document;
-    const clash = await post(`/studies/${demoId}/catalog/zone`, new URLSearchParams({ ...zone, id: 'orle-background', action: 'add' }));
+    const clash = await post(
+      `/studies/${demoId}/catalog/zone`,
+      new URLSearchParams({ ...zone, id: 'orle-background', action: 'add' }),
+    );
     expect(clash.status).toBe(422);
     expect(textOfId(await clash.text(), 'zone-id-problem')).toMatch(/duplicate|orle-background/);
     expect(page.ctx.store.studies.get(demoId)?.document).toBe(before);
-    const added = await post(`/studies/${demoId}/catalog/zone`, new URLSearchParams({ ...zone, action: 'add' }));
+    const added = await post(
+      `/studies/${demoId}/catalog/zone`,
+      new URLSearchParams({ ...zone, action: 'add' }),
+    );
     expect(added.status).toBe(303);
-    const document = JSON.parse(page.ctx.store.studies.get(demoId)?.document as string) as { sources: { features: { properties: { id: string } }[] } };
+    const document = JSON.parse(page.ctx.store.studies.get(demoId)?.document as string) as {
+      sources: { features: { properties: { id: string } }[] };
+    };
     expect(document.sources.features.map((f) => f.properties.id)).toContain('fitted-zone');
   });
 });

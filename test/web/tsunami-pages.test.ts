@@ -18,17 +18,36 @@ function cutDemo(): Record<string, unknown> {
   return {
     ...demo,
     name: 'Demo coast, tsunami pages',
-    communities: demo.communities.filter((c: { id: string }) => ['harbour-point', 'quillan-landing', 'pellow'].includes(c.id)),
-    sources: { type: 'FeatureCollection', features: demo.sources.features.filter((f: { properties: { id: string } }) => f.properties.id === 'orle-interface') },
+    communities: demo.communities.filter((c: { id: string }) =>
+      ['harbour-point', 'quillan-landing', 'pellow'].includes(c.id),
+    ),
+    sources: {
+      type: 'FeatureCollection',
+      features: demo.sources.features.filter(
+        (f: { properties: { id: string } }) => f.properties.id === 'orle-interface',
+      ),
+    },
     groundMotion: { interface: demo.groundMotion.interface },
-    settings: { ...demo.settings, measures: ['PGA'], magnitudeStep: 0.5, horizonsYears: [50], returnPeriodsYears: [475] },
+    settings: {
+      ...demo.settings,
+      measures: ['PGA'],
+      magnitudeStep: 0.5,
+      horizonsYears: [50],
+      returnPeriodsYears: [475],
+    },
   };
 }
 
 beforeAll(async () => {
   page = startPageApp();
-  id = page.ctx.store.studies.create({ name: 'Demo coast, tsunami pages', document: JSON.stringify(cutDemo()) }).id;
-  const started = await page.app.request(`/studies/${id}/screen`, { method: 'POST', body: new URLSearchParams() });
+  id = page.ctx.store.studies.create({
+    name: 'Demo coast, tsunami pages',
+    document: JSON.stringify(cutDemo()),
+  }).id;
+  const started = await page.app.request(`/studies/${id}/screen`, {
+    method: 'POST',
+    body: new URLSearchParams(),
+  });
   const runId = (started.headers.get('location') as string).split('/').at(-1) as string;
   expect(await runFinished(page.ctx, runId)).toBe('done');
 }, 120_000);
@@ -39,35 +58,50 @@ const html = async (path: string, init?: RequestInit) => {
   expect(response.status).toBe(200);
   return response.text();
 };
-const api = async () => (await (await page.app.request(`/api/studies/${id}/tsunami`)).json()) as TsunamiResult;
+const api = async () =>
+  (await (await page.app.request(`/api/studies/${id}/tsunami`)).json()) as TsunamiResult;
 
 describe('tsunami time to act on the pages', () => {
   test('the community page of a coastal village says the time in plain words, the high ground and the caution', async () => {
     const times = (await api()).communities.find((c) => c.id === 'harbour-point');
-    if (!times || times.firstArrivalMinutes === null || times.highGround?.kind !== 'found') throw new Error('no time for harbour-point');
+    if (!times || times.firstArrivalMinutes === null || times.highGround?.kind !== 'found')
+      throw new Error('no time for harbour-point');
     const text = await html(`/studies/${id}/communities/harbour-point`);
     expect(text).toContain(`data-first-arrival-minutes="${times.firstArrivalMinutes}"`);
-    expect(text).toMatch(new RegExp(`After strong or long shaking, go at once to high ground\\. A tsunami from the plate boundary could reach this coast in about ${times.firstArrivalMinutes} to ${times.latestMinutes} minutes\\.`));
-    expect(text).toMatch(/The nearest high ground is about [\d.]+ km to the (north|south|east|west|north-east|north-west|south-east|south-west)\./);
+    expect(text).toMatch(
+      new RegExp(
+        `After strong or long shaking, go at once to high ground\\. A tsunami from the plate boundary could reach this coast in about ${times.firstArrivalMinutes} to ${times.latestMinutes} minutes\\.`,
+      ),
+    );
+    expect(text).toMatch(
+      /The nearest high ground is about [\d.]+ km to the (north|south|east|west|north-east|north-west|south-east|south-west)\./,
+    );
     expect(text).toMatch(/rough screening estimate, not a warning/);
     expect(text).toMatch(/undersea landslide can come sooner/);
   });
 
   test('the handout carries the same sentence; an inland village has none', async () => {
-    expect(await html(`/studies/${id}/communities/quillan-landing/handout`)).toMatch(/could reach this coast in about \d+ to \d+ minutes/);
+    expect(await html(`/studies/${id}/communities/quillan-landing/handout`)).toMatch(
+      /could reach this coast in about \d+ to \d+ minutes/,
+    );
     expect(await html(`/studies/${id}/communities/pellow`)).not.toContain('tsunami-time');
   });
 
   test('the overview ranks the coastal villages by time to act, soonest first', async () => {
     const text = await html(`/studies/${id}`);
     const ranking = text.slice(text.indexOf('id="tsunami-ranking"'));
-    const order = [...ranking.matchAll(/<tr data-community="([^"]+)" data-first-arrival-minutes="(\d*)"/g)].map((m) => [m[1], Number(m[2])] as const);
+    const order = [
+      ...ranking.matchAll(/<tr data-community="([^"]+)" data-first-arrival-minutes="(\d*)"/g),
+    ].map((m) => [m[1], Number(m[2])] as const);
     expect(order.map(([c]) => c).sort()).toEqual(['harbour-point', 'quillan-landing']);
     expect(order[0]![1]).toBeLessThanOrEqual(order[1]![1]);
   });
 
   test('the scenario page gives the times for the chosen rupture on the interface', async () => {
-    const text = await html(`/studies/${id}/scenario`, { method: 'POST', body: new URLSearchParams({ sourceId: 'orle-interface', magnitude: '8.5' }) });
+    const text = await html(`/studies/${id}/scenario`, {
+      method: 'POST',
+      body: new URLSearchParams({ sourceId: 'orle-interface', magnitude: '8.5' }),
+    });
     expect(text).toContain('Tsunami from this earthquake');
     expect(text).toMatch(/<tr data-community="harbour-point" data-first-arrival-minutes="\d+"/);
     expect(text).toMatch(/not a warning/);

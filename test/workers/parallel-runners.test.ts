@@ -4,7 +4,11 @@ import { hazardMap, type MapPoint } from '../../api/engine/map/hazard-map.ts';
 import type { Study } from '../../api/engine/model.ts';
 import { screenStudy } from '../../api/engine/screen-study.ts';
 import { hazardMapOnPool } from '../../api/workers/parallel-map.ts';
-import { screenStudyOnPool, screeningJson, screeningOutput } from '../../api/workers/parallel-screen.ts';
+import {
+  screenStudyOnPool,
+  screeningJson,
+  screeningOutput,
+} from '../../api/workers/parallel-screen.ts';
 import { WorkerPool } from '../../api/workers/worker-pool.ts';
 import { RunScheduler } from '../../api/jobs/run-scheduler.ts';
 import { openStore } from '../../api/store/store.ts';
@@ -20,13 +24,27 @@ const base = allKindsStudy({ measures: ['PGA', 'SA(1.0)'] });
 const study: Study = { ...base, sources: base.sources.filter((s) => s.id !== 'background') };
 
 describe('screenStudyOnPool', () => {
-  it('gives screenStudy\'s results, communities in study order, chunk by chunk over two threads', async () => {
+  it("gives screenStudy's results, communities in study order, chunk by chunk over two threads", async () => {
     const progress: number[] = [];
-    const text = await screenStudyOnPool(pool, study, { chunkSize: 2, onProgress: (s) => progress.push(s) }).result;
+    const text = await screenStudyOnPool(pool, study, {
+      chunkSize: 2,
+      onProgress: (s) => progress.push(s),
+    }).result;
     expect(screeningOutput(text)).toEqual(screenStudy(study));
     expect(progress.at(-1)).toBe(1);
-    const provenance = { tool: 'tremora' as const, toolVersion: 't', inputHash: 'h', models: {}, settings: {}, startedAt: 's', finishedAt: 'f' };
-    expect(JSON.parse(screeningJson(text, provenance))).toEqual({ ...screenStudy(study), provenance });
+    const provenance = {
+      tool: 'tremora' as const,
+      toolVersion: 't',
+      inputHash: 'h',
+      models: {},
+      settings: {},
+      startedAt: 's',
+      finishedAt: 'f',
+    };
+    expect(JSON.parse(screeningJson(text, provenance))).toEqual({
+      ...screenStudy(study),
+      provenance,
+    });
   });
 
   it('stops with Cancelled when cancelled', async () => {
@@ -37,9 +55,13 @@ describe('screenStudyOnPool', () => {
 });
 
 describe('hazardMapOnPool', () => {
-  const map = { measure: 'PGA', quantity: { kind: 'return-period' as const, returnPeriodYears: 475 }, spacingKm: 40 };
+  const map = {
+    measure: 'PGA',
+    quantity: { kind: 'return-period' as const, returnPeriodYears: 475 },
+    spacingKm: 40,
+  };
 
-  it('gives hazardMap\'s points in grid order, in chunks, with the same summary', async () => {
+  it("gives hazardMap's points in grid order, in chunks, with the same summary", async () => {
     const single: MapPoint[] = [];
     const singleSummary = hazardMap(study, map, (points) => single.push(...points));
     const parallel: MapPoint[] = [];
@@ -62,21 +84,37 @@ describe('hazardMapOnPool', () => {
 });
 
 describe('RunScheduler spreading runs over the pool', () => {
-  it('records a done run whose results are screenStudy\'s, with provenance', async () => {
+  it("records a done run whose results are screenStudy's, with provenance", async () => {
     const dir = tempDir();
     const store = openStore(`${dir.path}/spread.db`);
     try {
-      const scheduler = new RunScheduler({ store, pool, toolVersion: '1.2.3', spreadOverPool: true });
+      const scheduler = new RunScheduler({
+        store,
+        pool,
+        toolVersion: '1.2.3',
+        spreadOverPool: true,
+      });
       const studyId = store.studies.create({ name: 'S', document: '{}' }).id;
       const run = store.runs.create({ studyId, document: '{}', inputHash: 'hash-spread' });
       scheduler.start(run, study);
-      for (let i = 0; i < 600 && store.runs.get(run.id)!.status !== 'done' && store.runs.get(run.id)!.status !== 'failed'; i++) await new Promise((r) => setTimeout(r, 50));
+      for (
+        let i = 0;
+        i < 600 &&
+        store.runs.get(run.id)!.status !== 'done' &&
+        store.runs.get(run.id)!.status !== 'failed';
+        i++
+      )
+        await new Promise((r) => setTimeout(r, 50));
       const record = store.runs.get(run.id)!;
       expect(record).toMatchObject({ status: 'done', progress: 1, error: null });
       const results = JSON.parse(store.runs.results(run.id)!);
       const { provenance, ...rest } = results;
       expect(rest).toEqual(JSON.parse(JSON.stringify(screenStudy(study))));
-      expect(provenance).toMatchObject({ tool: 'tremora', toolVersion: '1.2.3', inputHash: 'hash-spread' });
+      expect(provenance).toMatchObject({
+        tool: 'tremora',
+        toolVersion: '1.2.3',
+        inputHash: 'hash-spread',
+      });
     } finally {
       store.close();
       dir.remove();

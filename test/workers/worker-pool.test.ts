@@ -35,7 +35,12 @@ describe('WorkerPool with the real run worker', () => {
     const progress: number[] = [];
     let startedAt: string | undefined;
     const handle = runs.run(
-      { kind: 'screen', study: validSmallStudy(), inputHash: 'test-hash', toolVersion: '0.0.0-test' },
+      {
+        kind: 'screen',
+        study: validSmallStudy(),
+        inputHash: 'test-hash',
+        toolVersion: '0.0.0-test',
+      },
       { onStart: (at) => (startedAt = at), onProgress: (share) => progress.push(share) },
     );
     const output = await handle.result;
@@ -50,7 +55,12 @@ describe('WorkerPool with the real run worker', () => {
     // At the median level half of the truncated normal lies above: rate x 1/2 (see small-study.ts).
     const rates = result.communities[0]?.curves.PGA?.annualRate ?? [];
     EXCEEDANCE_AT_LEVELS.forEach((p, i) =>
-      expectRelative(rates[i] as number, RATE_PER_YEAR * p, 1e-6, `Cornell et al. (1979) median with a +-3 sigma truncated normal (Abramowitz & Stegun Table 26.1), level ${i}`),
+      expectRelative(
+        rates[i] as number,
+        RATE_PER_YEAR * p,
+        1e-6,
+        `Cornell et al. (1979) median with a +-3 sigma truncated normal (Abramowitz & Stegun Table 26.1), level ${i}`,
+      ),
     );
   });
 
@@ -59,8 +69,18 @@ describe('WorkerPool with the real run worker', () => {
     const a = await quick.run({ kind: 'measure', study: validSmallStudy() }).result;
     expect(a).toEqual({ ruptures: 1 });
     const runs = pool({ size: 1 });
-    const first = await runs.run({ kind: 'screen', study: validSmallStudy(), inputHash: 'h', toolVersion: 'v' }).result;
-    const second = await runs.run({ kind: 'screen', study: validSmallStudy(), inputHash: 'h', toolVersion: 'v' }).result;
+    const first = await runs.run({
+      kind: 'screen',
+      study: validSmallStudy(),
+      inputHash: 'h',
+      toolVersion: 'v',
+    }).result;
+    const second = await runs.run({
+      kind: 'screen',
+      study: validSmallStudy(),
+      inputHash: 'h',
+      toolVersion: 'v',
+    }).result;
     const strip = (json: string) => (JSON.parse(json) as StudyResult).communities;
     expect(strip(second.resultsJson)).toEqual(strip(first.resultsJson));
   });
@@ -68,8 +88,13 @@ describe('WorkerPool with the real run worker', () => {
   it("rebuilds the engine's named errors thrown in the worker", async () => {
     const runs = pool({ size: 1 });
     const study = validSmallStudy();
-    const broken = { ...study, groundMotion: { ...study.groundMotion, crustal: [{ model: 'NO-SUCH-MODEL', weight: 1 }] } };
-    const error = await runs.run({ kind: 'screen', study: broken, inputHash: 'h', toolVersion: 'v' }).result.catch((e: unknown) => e);
+    const broken = {
+      ...study,
+      groundMotion: { ...study.groundMotion, crustal: [{ model: 'NO-SUCH-MODEL', weight: 1 }] },
+    };
+    const error = await runs
+      .run({ kind: 'screen', study: broken, inputHash: 'h', toolVersion: 'v' })
+      .result.catch((e: unknown) => e);
     expect((error as Error).name).toBe('UnknownModel');
     expect((error as Error).message).toContain('NO-SUCH-MODEL');
   });
@@ -78,7 +103,9 @@ describe('WorkerPool with the real run worker', () => {
 describe('WorkerPool failures and cancellation (fixture worker)', () => {
   it('fails only the task whose thread crashed, replaces the thread and runs the next task', async () => {
     const p = pool({ size: 1, workerUrl: FIXTURE });
-    const crashed = p.run({ kind: 'measure', study: namedStudy('crash') }).result.catch((e: unknown) => e);
+    const crashed = p
+      .run({ kind: 'measure', study: namedStudy('crash') })
+      .result.catch((e: unknown) => e);
     const next = p.run({ kind: 'measure', study: namedStudy('after') }).result;
     const error = await crashed;
     expect(error).toBeInstanceOf(WorkerCrashed);
@@ -90,7 +117,10 @@ describe('WorkerPool failures and cancellation (fixture worker)', () => {
   it('cancels a queued task at once and a running one at its next check', async () => {
     const p = pool({ size: 1, workerUrl: FIXTURE });
     const progress: number[] = [];
-    const running = p.run({ kind: 'measure', study: namedStudy('steps') }, { onProgress: (s) => progress.push(s) });
+    const running = p.run(
+      { kind: 'measure', study: namedStudy('steps') },
+      { onProgress: (s) => progress.push(s) },
+    );
     const queued = p.run({ kind: 'measure', study: namedStudy('waiting') });
     queued.cancel();
     const queuedError = await queued.result.catch((e: unknown) => e);
@@ -115,36 +145,55 @@ describe('WorkerPool failures and cancellation (fixture worker)', () => {
     const p = pool({ size: 1, workerUrl: FIXTURE, cancelGraceMs: 50 });
     let markStarted!: () => void;
     const started = new Promise<void>((resolve) => (markStarted = resolve));
-    const hanging = p.run({ kind: 'measure', study: namedStudy('hang') }, { onStart: () => markStarted() });
+    const hanging = p.run(
+      { kind: 'measure', study: namedStudy('hang') },
+      { onStart: () => markStarted() },
+    );
     const outcome = hanging.result.catch((e: unknown) => e);
     await started;
     hanging.cancel();
     expect(await outcome).toBeInstanceOf(Cancelled);
-    await expect(p.run({ kind: 'measure', study: namedStudy('after') }).result).resolves.toEqual({ ruptures: 1 });
+    await expect(p.run({ kind: 'measure', study: namedStudy('after') }).result).resolves.toEqual({
+      ruptures: 1,
+    });
   });
 
   it('passes domain errors through with their issues', async () => {
     const p = pool({ size: 1, workerUrl: FIXTURE });
-    const error = await p.run({ kind: 'measure', study: namedStudy('bad-input') }).result.catch((e: unknown) => e);
+    const error = await p
+      .run({ kind: 'measure', study: namedStudy('bad-input') })
+      .result.catch((e: unknown) => e);
     expect(error).toBeInstanceOf(InvalidInput);
-    expect((error as InvalidInput).issues).toEqual([{ path: 'settings.measures[0]', message: 'expected a measure' }]);
+    expect((error as InvalidInput).issues).toEqual([
+      { path: 'settings.measures[0]', message: 'expected a measure' },
+    ]);
   });
 
   it('rejects queued and new tasks once closed', async () => {
     const p = pool({ size: 1, workerUrl: FIXTURE });
-    const running = p.run({ kind: 'measure', study: namedStudy('hang') }).result.catch((e: unknown) => e);
-    const queued = p.run({ kind: 'measure', study: namedStudy('later') }).result.catch((e: unknown) => e);
+    const running = p
+      .run({ kind: 'measure', study: namedStudy('hang') })
+      .result.catch((e: unknown) => e);
+    const queued = p
+      .run({ kind: 'measure', study: namedStudy('later') })
+      .result.catch((e: unknown) => e);
     await p.close();
     expect(await running).toBeInstanceOf(PoolClosed);
     expect(await queued).toBeInstanceOf(PoolClosed);
-    expect(await p.run({ kind: 'measure', study: namedStudy('late') }).result.catch((e: unknown) => e)).toBeInstanceOf(PoolClosed);
+    expect(
+      await p.run({ kind: 'measure', study: namedStudy('late') }).result.catch((e: unknown) => e),
+    ).toBeInstanceOf(PoolClosed);
   });
 
   it('does not respawn a worker module that fails to load, and fails its tasks', async () => {
     const p = pool({ size: 1, workerUrl: BROKEN });
-    const error = await p.run({ kind: 'measure', study: namedStudy('any') }).result.catch((e: unknown) => e);
+    const error = await p
+      .run({ kind: 'measure', study: namedStudy('any') })
+      .result.catch((e: unknown) => e);
     expect(error).toBeInstanceOf(WorkerCrashed);
     expect(p.stats().alive).toBe(0);
-    expect(await p.run({ kind: 'measure', study: namedStudy('again') }).result.catch((e: unknown) => e)).toBeInstanceOf(WorkerCrashed);
+    expect(
+      await p.run({ kind: 'measure', study: namedStudy('again') }).result.catch((e: unknown) => e),
+    ).toBeInstanceOf(WorkerCrashed);
   });
 });

@@ -15,14 +15,20 @@ import type { LonLat } from '../../api/engine/model.ts';
  * and the frequency–magnitude data with the fit. Moment magnitudes only, the default.
  */
 export type CatalogAnalysis =
-  | { readonly ok: true; readonly load: CatalogLoad; readonly fit?: CatalogFit; readonly problem?: string }
+  | {
+      readonly ok: true;
+      readonly load: CatalogLoad;
+      readonly fit?: CatalogFit;
+      readonly problem?: string;
+    }
   /** The text cannot be read, or no event loads from it. */
   | { readonly ok: false; readonly issues: readonly InputIssue[] };
 
 /** Events per window when completeness periods are proposed (fitCatalog's default). */
 const EVENTS_PER_WINDOW = 100;
 
-const fitOptions = (events: number) => (events >= 2 * EVENTS_PER_WINDOW ? { periods: 'proposed' as const } : {});
+const fitOptions = (events: number) =>
+  events >= 2 * EVENTS_PER_WINDOW ? { periods: 'proposed' as const } : {};
 
 /** The fit the view leads with: Weichert when there are completeness periods, else Aki–Utsu. */
 export const chosenFit = (fit: CatalogFit): GutenbergRichterFit => fit.weichert ?? fit.akiUtsu;
@@ -39,7 +45,8 @@ export function analyseCatalog(text: string, format?: CatalogFormat): CatalogAna
   try {
     return { ok: true, load, fit: fitCatalog(load.events, fitOptions(load.events.length)) };
   } catch (error) {
-    if (error instanceof InvalidInput) return { ok: true, load, problem: error.issues.map((i) => i.message).join('; ') };
+    if (error instanceof InvalidInput)
+      return { ok: true, load, problem: error.issues.map((i) => i.message).join('; ') };
     throw error;
   }
 }
@@ -51,7 +58,14 @@ export interface ZoneFitRequest {
 
 /** A background zone's recurrence from the catalog's events inside the zone outline. */
 export function fitZone(load: CatalogLoad, request: ZoneFitRequest): ZoneRecurrence {
-  const fit = fitCatalog(load.events, { ...fitOptions(load.events.length), rings: request.rings, mMax: request.mMax });
-  if (!fit.recurrence) throw new InvalidInput([{ path: 'mMax', message: 'expected the largest magnitude of the zone' }]);
+  const fit = fitCatalog(load.events, {
+    ...fitOptions(load.events.length),
+    rings: request.rings,
+    mMax: request.mMax,
+  });
+  if (!fit.recurrence)
+    throw new InvalidInput([
+      { path: 'mMax', message: 'expected the largest magnitude of the zone' },
+    ]);
   return fit.recurrence;
 }

@@ -35,7 +35,12 @@ export interface CommunityPageData {
   readonly meanMagnitude?: number;
   readonly meanDistanceKm?: number;
   /** Spread of the branches' PGA at the first return period, g. */
-  readonly spread?: { readonly returnPeriodYears: number; readonly lowG: number; readonly highG: number; readonly branches: number };
+  readonly spread?: {
+    readonly returnPeriodYears: number;
+    readonly lowG: number;
+    readonly highG: number;
+    readonly branches: number;
+  };
 }
 
 /** Sources listed by name before the rest are summed. */
@@ -45,7 +50,11 @@ export const TOP_SOURCES = 4;
 export const SHOWN_SHARE = 0.005;
 
 /** What the community page shows, from the study and the run's result for the community. */
-export function communityPageData(study: Study, community: Community, result: CommunityResult): CommunityPageData {
+export function communityPageData(
+  study: Study,
+  community: Community,
+  result: CommunityResult,
+): CommunityPageData {
   const years = leadHorizonYears(study.settings.horizonsYears);
   const chances = result.intensity.chanceOfReaching[String(years)] ?? { VI: 0, VII: 0, VIII: 0 };
   const returnPeriods = [...study.settings.returnPeriodsYears].sort((a, b) => a - b);
@@ -66,14 +75,26 @@ export function communityPageData(study: Study, community: Community, result: Co
   const ordered = [...(deagg?.bySource ?? [])].sort((a, b) => b.share - a.share);
   // A source (or the rest together) is listed only when its share shows as 1% or more.
   const named = ordered.slice(0, TOP_SOURCES).filter((s) => s.share >= SHOWN_SHARE);
-  const sources: SourceShare[] = named.map((s) => ({ sourceId: s.sourceId, name: s.name, share: s.share }));
+  const sources: SourceShare[] = named.map((s) => ({
+    sourceId: s.sourceId,
+    name: s.name,
+    share: s.share,
+  }));
   const rest = ordered.slice(named.length).reduce((sum, s) => sum + s.share, 0);
   if (rest >= SHOWN_SHARE) sources.push({ sourceId: null, name: '', share: rest });
   const curve = result.curves[INTENSITY_MEASURE];
   let spread: CommunityPageData['spread'];
   if (curve?.branches && curve.branches.length > 1 && firstPeriod !== undefined) {
-    const values = curve.branches.map((b) => levelAtReturnPeriod(curve.levels, b.annualRate, firstPeriod).level).filter((v): v is number => v !== null);
-    if (values.length > 1) spread = { returnPeriodYears: firstPeriod, lowG: Math.min(...values), highG: Math.max(...values), branches: curve.branches.length };
+    const values = curve.branches
+      .map((b) => levelAtReturnPeriod(curve.levels, b.annualRate, firstPeriod).level)
+      .filter((v): v is number => v !== null);
+    if (values.length > 1)
+      spread = {
+        returnPeriodYears: firstPeriod,
+        lowG: Math.min(...values),
+        highG: Math.max(...values),
+        branches: curve.branches.length,
+      };
   }
   return {
     community,
@@ -82,7 +103,13 @@ export function communityPageData(study: Study, community: Community, result: Co
     chances,
     levels,
     sources,
-    ...(firstPeriod !== undefined && deagg ? { sourcesReturnPeriod: firstPeriod, meanMagnitude: deagg.mean.magnitude, meanDistanceKm: deagg.mean.distanceKm } : {}),
+    ...(firstPeriod !== undefined && deagg
+      ? {
+          sourcesReturnPeriod: firstPeriod,
+          meanMagnitude: deagg.mean.magnitude,
+          meanDistanceKm: deagg.mean.distanceKm,
+        }
+      : {}),
     ...(spread ? { spread } : {}),
   };
 }
@@ -90,7 +117,10 @@ export function communityPageData(study: Study, community: Community, result: Co
 /** The models of a provenance in one line: "crustal: BSSA14 (0.5), CB14 (0.5); interface: AGA16". */
 export function modelsLine(provenance: Provenance): string {
   return Object.entries(provenance.models)
-    .map(([setting, branches]) => `${setting}: ${branches.map((b) => (branches.length > 1 ? `${b.model} (${b.weight})` : b.model)).join(', ')}`)
+    .map(
+      ([setting, branches]) =>
+        `${setting}: ${branches.map((b) => (branches.length > 1 ? `${b.model} (${b.weight})` : b.model)).join(', ')}`,
+    )
     .join('; ');
 }
 

@@ -1,7 +1,10 @@
 import type { InputIssue } from '../../api/engine/errors.ts';
 import type { ModelCatalog } from '../../api/engine/motion/catalog.ts';
 import type { StoredInputs } from '../../api/operations/study-input.ts';
-import type { ColumnChoice, CommunityColumn } from '../../api/study/community-files/column-names.ts';
+import type {
+  ColumnChoice,
+  CommunityColumn,
+} from '../../api/study/community-files/column-names.ts';
 import { communitiesCsvText } from '../../api/study/community-files/communities-csv-text.ts';
 import { CommunityFileProblem } from '../../api/study/community-files/file-problem.ts';
 import { readCommunityFile } from '../../api/study/community-files/read-community-file.ts';
@@ -34,7 +37,8 @@ export interface CommunityFileRefusal {
 }
 
 /** A file read as communities, in CSV with Tremora's header, ready to apply to a study. */
-export type CommunityFileRead = { readonly ok: true; readonly csvText: string } | CommunityFileRefusal;
+export type CommunityFileRead =
+  { readonly ok: true; readonly csvText: string } | CommunityFileRefusal;
 
 export type CommunityImport = (EditOutcome & { readonly ok: true }) | CommunityFileRefusal;
 
@@ -45,7 +49,11 @@ export type CommunityImport = (EditOutcome & { readonly ok: true }) | CommunityF
  * reads back the same whatever the file was. Reading is asynchronous and touches no study:
  * applying it (applyCommunitiesFile) is done on the study as read inside the write's transaction.
  */
-export async function readCommunitiesFile(bytes: Uint8Array, fileName: string, choice: ColumnChoice): Promise<CommunityFileRead> {
+export async function readCommunitiesFile(
+  bytes: Uint8Array,
+  fileName: string,
+  choice: ColumnChoice,
+): Promise<CommunityFileRead> {
   const issues = new IssueList();
   let table;
   try {
@@ -54,20 +62,42 @@ export async function readCommunitiesFile(bytes: Uint8Array, fileName: string, c
     if (!(error instanceof CommunityFileProblem)) throw error;
     return { ok: false, issues: [{ path: 'communities', message: error.message }] };
   }
-  const { communities, missingColumns, columns } = tableCommunities(table, ['communities'], issues, choice);
+  const { communities, missingColumns, columns } = tableCommunities(
+    table,
+    ['communities'],
+    issues,
+    choice,
+  );
   if (issues.issues.length > 0) {
     const text = table.format === 'CSV' ? new TextDecoder().decode(bytes) : undefined;
     const pick: ColumnPick | undefined =
       missingColumns.length === 0
         ? undefined
-        : { fileName, columns, missing: missingColumns, chosen: choice, ...(bytes.byteLength <= MAX_CARRIED_BYTES ? { fileData: Buffer.from(bytes).toString('base64') } : {}) };
-    return { ok: false, issues: issues.issues, ...(pick ? { pick } : {}), ...(text !== undefined ? { text } : {}) };
+        : {
+            fileName,
+            columns,
+            missing: missingColumns,
+            chosen: choice,
+            ...(bytes.byteLength <= MAX_CARRIED_BYTES
+              ? { fileData: Buffer.from(bytes).toString('base64') }
+              : {}),
+          };
+    return {
+      ok: false,
+      issues: issues.issues,
+      ...(pick ? { pick } : {}),
+      ...(text !== undefined ? { text } : {}),
+    };
   }
   return { ok: true, csvText: communitiesCsvText(communities) };
 }
 
 /** Replaces a study's communities with those read from a file; nothing is saved on any problem. */
-export function applyCommunitiesFile(inputs: StoredInputs, read: CommunityFileRead, models: ModelCatalog): CommunityImport {
+export function applyCommunitiesFile(
+  inputs: StoredInputs,
+  read: CommunityFileRead,
+  models: ModelCatalog,
+): CommunityImport {
   if (!read.ok) return read;
   return importCommunitiesCsv(inputs, read.csvText, models) as CommunityImport;
 }

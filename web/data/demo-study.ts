@@ -4,4 +4,5 @@
  */
 export const DEMO_STUDY_NAME = 'Demo coast';
 
-export const isDemoStudy = (study: { readonly name: string } | undefined): boolean => study?.name === DEMO_STUDY_NAME;
+export const isDemoStudy = (study: { readonly name: string } | undefined): boolean =>
+  study?.name === DEMO_STUDY_NAME;

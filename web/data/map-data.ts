@@ -62,21 +62,35 @@ export class MapLayerCache {
     if (text === undefined) return undefined;
     const features = (JSON.parse(text) as { features: readonly PointFeature[] }).features;
     const layer: MapLayer = {
-      points: features.map((f) => ({ lon: f.geometry.coordinates[0], lat: f.geometry.coordinates[1], value: f.properties.value, status: f.properties.status })),
+      points: features.map((f) => ({
+        lon: f.geometry.coordinates[0],
+        lat: f.geometry.coordinates[1],
+        value: f.properties.value,
+        status: f.properties.status,
+      })),
     };
     this.#entries.set(runId, layer);
-    while (this.#entries.size > this.capacity) this.#entries.delete(this.#entries.keys().next().value as string);
+    while (this.#entries.size > this.capacity)
+      this.#entries.delete(this.#entries.keys().next().value as string);
     return layer;
   }
 }
 
 /** The study's newest map run and newest done map (with its points when few enough to draw). */
-export function readMaps(ctx: ServiceContext, cache: MapLayerCache, studyId: string, currentHash: string | undefined): MapState {
+export function readMaps(
+  ctx: ServiceContext,
+  cache: MapLayerCache,
+  studyId: string,
+  currentHash: string | undefined,
+): MapState {
   const runs = ctx.store.maps.listForStudy(studyId);
   const latest = runs.at(-1);
   const done = [...runs].reverse().find((r) => r.status === 'done' && r.description !== null);
   if (!done) return latest ? { latest } : {};
   const run = done as ShownMap['run'];
   const layer = run.description.count <= MAX_DRAWN_POINTS ? cache.get(ctx, run.id) : undefined;
-  return { ...(latest ? { latest } : {}), shown: { run, ...(layer ? { layer } : {}), current: run.inputHash === currentHash } };
+  return {
+    ...(latest ? { latest } : {}),
+    shown: { run, ...(layer ? { layer } : {}), current: run.inputHash === currentHash },
+  };
 }

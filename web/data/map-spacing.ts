@@ -23,9 +23,15 @@ export interface SuggestedSpacing {
  * the map covers, map-grid.ts studyBounds, measured in the study's local frame) divided by
  * SUGGESTED_CELLS_ACROSS and rounded up to a whole km, 1 km at the finest.
  */
-export function suggestedMapSpacing(study: Pick<Study, 'communities' | 'sources' | 'outline'>): SuggestedSpacing {
+export function suggestedMapSpacing(
+  study: Pick<Study, 'communities' | 'sources' | 'outline'>,
+): SuggestedSpacing {
   // At 1 km the grid's columns and rows less one are the box's sides in whole km, rounded up.
   const unit = mapGrid(study, frameForStudy(study), { spacingKm: 1, maxPoints: Infinity });
   const spanKm = Math.max(unit.columns, unit.rows) - 1;
-  return { spacingKm: Math.max(1, Math.ceil(spanKm / SUGGESTED_CELLS_ACROSS)), spanKm, cellsAcross: SUGGESTED_CELLS_ACROSS };
+  return {
+    spacingKm: Math.max(1, Math.ceil(spanKm / SUGGESTED_CELLS_ACROSS)),
+    spanKm,
+    cellsAcross: SUGGESTED_CELLS_ACROSS,
+  };
 }

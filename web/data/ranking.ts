@@ -1,4 +1,7 @@
-import { SCREENING_BANDS, type ScreeningBandId } from '../../api/engine/intensity/screening-band.ts';
+import {
+  SCREENING_BANDS,
+  type ScreeningBandId,
+} from '../../api/engine/intensity/screening-band.ts';
 import type { Study } from '../../api/engine/model.ts';
 import type { CommunityResult, NearestFault, StudyResult } from '../../api/engine/results.ts';
 
@@ -61,7 +64,8 @@ export const SORT_KEYS = ['rank', 'name', 'band', 'chance', 'people', 'fault'] a
 export type SortKey = (typeof SORT_KEYS)[number];
 export type SortDirection = 'ascending' | 'descending';
 
-export const isSortKey = (key: unknown): key is SortKey => (SORT_KEYS as readonly unknown[]).includes(key);
+export const isSortKey = (key: unknown): key is SortKey =>
+  (SORT_KEYS as readonly unknown[]).includes(key);
 
 /** The direction a column sorts in when first chosen: the most pressing first. */
 export const FIRST_DIRECTION: Readonly<Record<SortKey, SortDirection>> = {
@@ -77,7 +81,11 @@ export const FIRST_DIRECTION: Readonly<Record<SortKey, SortDirection>> = {
  * The ranked rows sorted by one column; ties keep the ranking's order. "band" ascending puts
  * Refer first on top; a missing population or fault sorts last either way.
  */
-export function sortRanked(rows: readonly RankedCommunity[], key: SortKey, direction: SortDirection): RankedCommunity[] {
+export function sortRanked(
+  rows: readonly RankedCommunity[],
+  key: SortKey,
+  direction: SortDirection,
+): RankedCommunity[] {
   const sign = direction === 'ascending' ? 1 : -1;
   const value = (r: RankedCommunity): number | string | undefined => {
     switch (key) {
@@ -93,13 +101,16 @@ export function sortRanked(rows: readonly RankedCommunity[], key: SortKey, direc
         return r.population;
       case 'fault':
         // Results saved before faults carried rrupKm sort by their Joyner-Boore distance.
-        return r.nearestFault === undefined ? undefined : (r.nearestFault.rrupKm ?? r.nearestFault.distanceKm);
+        return r.nearestFault === undefined
+          ? undefined
+          : (r.nearestFault.rrupKm ?? r.nearestFault.distanceKm);
     }
   };
   return [...rows].sort((a, b) => {
     const va = value(a);
     const vb = value(b);
-    if (va === undefined || vb === undefined) return va === vb ? a.rank - b.rank : va === undefined ? 1 : -1;
+    if (va === undefined || vb === undefined)
+      return va === vb ? a.rank - b.rank : va === undefined ? 1 : -1;
     const order = typeof va === 'string' ? va.localeCompare(vb as string) : va - (vb as number);
     return sign * order || a.rank - b.rank;
   });

@@ -9,7 +9,10 @@ import type { RunRecord, StudyRecord } from '../../api/store/index.ts';
  * validated and measured against the work budget first (InvalidInput or StudyTooLarge when
  * they fail; no run is recorded), then the run is recorded and handed to the scheduler.
  */
-export async function startScreening(ctx: ServiceContext, record: StudyRecord): Promise<RunRecord | undefined> {
+export async function startScreening(
+  ctx: ServiceContext,
+  record: StudyRecord,
+): Promise<RunRecord | undefined> {
   const inputs = storedInputs(ctx.store, record);
   const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
   await measureStudy(ctx, study);

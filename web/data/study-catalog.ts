@@ -20,20 +20,31 @@ export const DEMO_CATALOG_URL = new URL('../../data-demo/catalog.csv', import.me
 export const DEMO_CATALOG_FILE = 'catalog.csv';
 
 export function readDemoCatalog(): AttachedCatalog {
-  return { text: readFileSync(DEMO_CATALOG_URL, 'utf8'), format: 'csv', fileName: DEMO_CATALOG_FILE };
+  return {
+    text: readFileSync(DEMO_CATALOG_URL, 'utf8'),
+    format: 'csv',
+    fileName: DEMO_CATALOG_FILE,
+  };
 }
 
 /** The catalog attached to the study (study_catalogs, api/store/catalog-repository.ts). */
 export function studyCatalog(ctx: ServiceContext, studyId: string): AttachedCatalog | undefined {
   const record = ctx.store.catalogs.get(studyId);
-  return record ? { text: record.content, format: record.format, fileName: record.fileName } : undefined;
+  return record
+    ? { text: record.content, format: record.format, fileName: record.fileName }
+    : undefined;
 }
 
 /**
  * Attaches a catalog whose load found events (as PUT /api/studies/{id}/catalog does), replacing
  * any other; false when there is no such study.
  */
-export function attachCatalog(ctx: ServiceContext, studyId: string, catalog: AttachedCatalog, load: CatalogLoad): boolean {
+export function attachCatalog(
+  ctx: ServiceContext,
+  studyId: string,
+  catalog: AttachedCatalog,
+  load: CatalogLoad,
+): boolean {
   const put = ctx.store.catalogs.put(studyId, {
     fileName: catalog.fileName,
     format: load.format,
@@ -55,13 +66,21 @@ export type FeltData =
  * declustered (people felt the aftershocks too). Undefined without a catalog, or when the
  * stored text no longer loads.
  */
-export function feltData(ctx: ServiceContext, study: Study, catalog: AttachedCatalog | undefined): FeltData | undefined {
+export function feltData(
+  ctx: ServiceContext,
+  study: Study,
+  catalog: AttachedCatalog | undefined,
+): FeltData | undefined {
   if (!catalog) return undefined;
   try {
     const load = readCatalogText(catalog.text, catalog.format);
     const pairs = load.events.length * study.communities.length;
     if (pairs > FELT_PAIR_BUDGET) return { kind: 'too-many', pairs };
-    return { kind: 'history', load, history: feltHistory(study, load.events, { models: ctx.models }) };
+    return {
+      kind: 'history',
+      load,
+      history: feltHistory(study, load.events, { models: ctx.models }),
+    };
   } catch (error) {
     if (error instanceof InvalidInput) return undefined;
     throw error;

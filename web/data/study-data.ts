@@ -3,13 +3,28 @@ import type { Study } from '../../api/engine/model.ts';
 import type { StudyResult } from '../../api/engine/results.ts';
 import { inputHash } from '../../api/results/input-hash.ts';
 import type { ServiceContext } from '../../api/operations/service-context.ts';
-import { storedInputs, validateStudy, type StoredInputs } from '../../api/operations/study-input.ts';
+import {
+  storedInputs,
+  validateStudy,
+  type StoredInputs,
+} from '../../api/operations/study-input.ts';
 import type { RunRecord, StudyRecord } from '../../api/store/index.ts';
 
 /** A saved study as the pages read it, in-process from the store. */
 export type StudyData =
-  | { readonly ok: true; readonly record: StudyRecord; readonly inputs: StoredInputs; readonly study: Study; readonly hash: string }
-  | { readonly ok: false; readonly record: StudyRecord; readonly inputs: StoredInputs; readonly issues: readonly InputIssue[] };
+  | {
+      readonly ok: true;
+      readonly record: StudyRecord;
+      readonly inputs: StoredInputs;
+      readonly study: Study;
+      readonly hash: string;
+    }
+  | {
+      readonly ok: false;
+      readonly record: StudyRecord;
+      readonly inputs: StoredInputs;
+      readonly issues: readonly InputIssue[];
+    };
 
 /** The study with `id`, validated; undefined when there is none. */
 export function readStudy(ctx: ServiceContext, id: string): StudyData | undefined {
@@ -59,19 +74,27 @@ export class ResultsCache {
     if (text === undefined) return undefined;
     const results = JSON.parse(text) as StudyResult;
     this.#entries.set(runId, results);
-    while (this.#entries.size > this.capacity) this.#entries.delete(this.#entries.keys().next().value as string);
+    while (this.#entries.size > this.capacity)
+      this.#entries.delete(this.#entries.keys().next().value as string);
     return results;
   }
 }
 
 /** The study's newest run and newest done run (with results). */
-export function readRuns(ctx: ServiceContext, cache: ResultsCache, studyId: string, currentHash: string | undefined): RunState {
+export function readRuns(
+  ctx: ServiceContext,
+  cache: ResultsCache,
+  studyId: string,
+  currentHash: string | undefined,
+): RunState {
   const runs = ctx.store.runs.listForStudy(studyId);
   const latest = runs[runs.length - 1];
   const done = [...runs].reverse().find((r) => r.status === 'done');
   const results = done ? cache.get(ctx, done.id) : undefined;
   return {
     ...(latest ? { latest } : {}),
-    ...(done && results ? { screening: { run: done, results, current: done.inputHash === currentHash } } : {}),
+    ...(done && results
+      ? { screening: { run: done, results, current: done.inputHash === currentHash } }
+      : {}),
   };
 }

@@ -11,11 +11,21 @@ import { parseJsonText } from '../../api/study/json-text.ts';
  * `document` only on `ok`). The imports follow api/service/routes/imports.ts.
  */
 export type EditOutcome =
-  | { readonly ok: true; readonly document: Record<string, unknown>; readonly name: string; readonly file?: { readonly kind: 'communities-csv' | 'sources-geojson'; readonly content: string } }
+  | {
+      readonly ok: true;
+      readonly document: Record<string, unknown>;
+      readonly name: string;
+      readonly file?: {
+        readonly kind: 'communities-csv' | 'sources-geojson';
+        readonly content: string;
+      };
+    }
   | { readonly ok: false; readonly issues: readonly InputIssue[] };
 
 /** What the community form posts, as text. */
-export type CommunityForm = Readonly<Record<'id' | 'name' | 'lon' | 'lat' | 'vs30' | 'siteClass' | 'population' | 'elevationM', string>> & { readonly coastal: boolean };
+export type CommunityForm = Readonly<
+  Record<'id' | 'name' | 'lon' | 'lat' | 'vs30' | 'siteClass' | 'population' | 'elevationM', string>
+> & { readonly coastal: boolean };
 
 const NUMBER_FIELDS = ['lon', 'lat', 'vs30', 'population', 'elevationM'] as const;
 
@@ -54,13 +64,20 @@ export function communityToJson(c: Community): Record<string, unknown> {
 }
 
 /** The study's communities as a JSON list (a study whose communities came as CSV gets them listed). */
-export function communityList(inputs: StoredInputs, communities: readonly Community[]): Record<string, unknown>[] {
+export function communityList(
+  inputs: StoredInputs,
+  communities: readonly Community[],
+): Record<string, unknown>[] {
   const raw = inputs.raw.communities;
   if (Array.isArray(raw)) return raw.map((c) => ({ ...(c as Record<string, unknown>) }));
   return communities.map(communityToJson);
 }
 
-function validated(document: Record<string, unknown>, models: ModelCatalog, csv?: string): EditOutcome {
+function validated(
+  document: Record<string, unknown>,
+  models: ModelCatalog,
+  csv?: string,
+): EditOutcome {
   try {
     const { study } = validateStudy(document, models, csv);
     return { ok: true, document, name: study.name };
@@ -71,7 +88,13 @@ function validated(document: Record<string, unknown>, models: ModelCatalog, csv?
 }
 
 /** Replaces the community at `index` (or appends one when index is undefined) and validates. */
-export function saveCommunity(inputs: StoredInputs, communities: readonly Community[], form: CommunityForm, index: number | undefined, models: ModelCatalog): EditOutcome & { index: number } {
+export function saveCommunity(
+  inputs: StoredInputs,
+  communities: readonly Community[],
+  form: CommunityForm,
+  index: number | undefined,
+  models: ModelCatalog,
+): EditOutcome & { index: number } {
   const list = communityList(inputs, communities);
   const at = index ?? list.length;
   list[at] = communityFromForm(form);
@@ -79,7 +102,12 @@ export function saveCommunity(inputs: StoredInputs, communities: readonly Commun
 }
 
 /** Removes the community at `index` and validates (a study keeps at least one). */
-export function removeCommunity(inputs: StoredInputs, communities: readonly Community[], index: number, models: ModelCatalog): EditOutcome {
+export function removeCommunity(
+  inputs: StoredInputs,
+  communities: readonly Community[],
+  index: number,
+  models: ModelCatalog,
+): EditOutcome {
   const list = communityList(inputs, communities);
   list.splice(index, 1);
   return validated({ ...inputs.raw, communities: list }, models);
@@ -89,16 +117,28 @@ export function removeCommunity(inputs: StoredInputs, communities: readonly Comm
 export const IMPORTED_COMMUNITIES_FILE = 'communities.csv';
 
 /** Replaces the communities from CSV text; issues name CSV lines (`communities[line 5].lat`). */
-export function importCommunitiesCsv(inputs: StoredInputs, csv: string, models: ModelCatalog): EditOutcome {
+export function importCommunitiesCsv(
+  inputs: StoredInputs,
+  csv: string,
+  models: ModelCatalog,
+): EditOutcome {
   const outcome = validated({ ...inputs.raw, communities: IMPORTED_COMMUNITIES_FILE }, models, csv);
   return outcome.ok ? { ...outcome, file: { kind: 'communities-csv', content: csv } } : outcome;
 }
 
 /** Replaces the sources from GeoJSON text; malformed JSON is one issue naming line and column. */
-export function importSourcesGeoJson(inputs: StoredInputs, text: string, models: ModelCatalog): EditOutcome {
+export function importSourcesGeoJson(
+  inputs: StoredInputs,
+  text: string,
+  models: ModelCatalog,
+): EditOutcome {
   const parsed = parseJsonText(text, 'sources');
   if (!parsed.ok) return { ok: false, issues: [parsed.issue] };
-  const outcome = validated({ ...inputs.raw, sources: parsed.value }, models, inputs.communitiesCsv);
+  const outcome = validated(
+    { ...inputs.raw, sources: parsed.value },
+    models,
+    inputs.communitiesCsv,
+  );
   return outcome.ok ? { ...outcome, file: { kind: 'sources-geojson', content: text } } : outcome;
 }
 

@@ -30,11 +30,22 @@ export function roundDepthKm(depthKm: number): number {
  * else "here" (beneath or right beside the place); further away, a whole number of km (rounded
  * to the nearest km) and the compass point towards it.
  */
-export function placeFrom(distanceKm: number, bearingDeg: number, depthBelowKm?: number): PlaceFrom {
-  if (!(Number.isFinite(distanceKm) && distanceKm >= 0)) throw new RangeError(`expected a distance >= 0 km, got ${distanceKm}`);
-  if (!Number.isFinite(bearingDeg)) throw new RangeError(`expected a bearing in degrees, got ${bearingDeg}`);
+export function placeFrom(
+  distanceKm: number,
+  bearingDeg: number,
+  depthBelowKm?: number,
+): PlaceFrom {
+  if (!(Number.isFinite(distanceKm) && distanceKm >= 0))
+    throw new RangeError(`expected a distance >= 0 km, got ${distanceKm}`);
+  if (!Number.isFinite(bearingDeg))
+    throw new RangeError(`expected a bearing in degrees, got ${bearingDeg}`);
   if (distanceKm < NEAR_KM) {
-    if (depthBelowKm !== undefined && Number.isFinite(depthBelowKm) && roundDepthKm(depthBelowKm) >= 1) return { kind: 'below', depthKm: roundDepthKm(depthBelowKm) };
+    if (
+      depthBelowKm !== undefined &&
+      Number.isFinite(depthBelowKm) &&
+      roundDepthKm(depthBelowKm) >= 1
+    )
+      return { kind: 'below', depthKm: roundDepthKm(depthBelowKm) };
     return { kind: 'here' };
   }
   return { kind: 'away', distanceKm: Math.round(distanceKm), compass: compassPoint(bearingDeg) };

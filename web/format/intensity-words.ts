@@ -20,5 +20,7 @@ export function intensityWords(mmi: number): IntensityWords {
   if (!Number.isFinite(mmi)) throw new RangeError(`expected a finite MMI, got ${mmi}`);
   const level = Math.min(12, Math.max(1, Math.floor(mmi)));
   const roman = mmiRoman(level);
-  return mmi - level >= 0.5 && level < 12 ? { roman, almost: mmiRoman(level + 1), level } : { roman, level };
+  return mmi - level >= 0.5 && level < 12
+    ? { roman, almost: mmiRoman(level + 1), level }
+    : { roman, level };
 }

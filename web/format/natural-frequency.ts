@@ -53,6 +53,7 @@ function shownPercent(p: number): number | undefined {
 }
 
 function checkProbability(p: number): number {
-  if (!(Number.isFinite(p) && p >= 0 && p <= 1)) throw new RangeError(`expected a probability in [0, 1], got ${p}`);
+  if (!(Number.isFinite(p) && p >= 0 && p <= 1))
+    throw new RangeError(`expected a probability in [0, 1], got ${p}`);
   return p;
 }

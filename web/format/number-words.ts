@@ -17,7 +17,10 @@ export function numberInWords(count: number, vocabulary: NumberWordsVocabulary):
   if (!Number.isFinite(count)) throw new RangeError(`expected a finite number, got ${count}`);
   if (Number.isInteger(count) && count >= 0 && count <= WORDS_UP_TO) {
     const word = vocabulary.smallNumbers[count];
-    if (word === undefined) throw new RangeError(`the vocabulary has no word for ${count}; expected ${WORDS_UP_TO + 1} words`);
+    if (word === undefined)
+      throw new RangeError(
+        `the vocabulary has no word for ${count}; expected ${WORDS_UP_TO + 1} words`,
+      );
     return word;
   }
   return groupedDigits(count, vocabulary.locale);

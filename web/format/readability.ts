@@ -22,7 +22,11 @@ const HAS_LETTER = /[A-Za-zÀ-ÿ]/;
 
 /** Syllables in one word by the vowel-group heuristic above. */
 export function countSyllables(word: string): number {
-  const parts = word.toLowerCase().replace(/['’]/g, '').split('-').filter((p) => p.length > 0);
+  const parts = word
+    .toLowerCase()
+    .replace(/['’]/g, '')
+    .split('-')
+    .filter((p) => p.length > 0);
   let total = 0;
   for (const part of parts) total += partSyllables(part);
   return Math.max(1, total);
@@ -48,7 +52,11 @@ export function countText(text: string): TextCounts {
   const words = text.match(WORD) ?? [];
   const pieces = text.split(/[.!?:](?=\s|$)|\n+/).filter((s) => HAS_LETTER.test(s));
   const syllables = words.reduce((n, w) => n + countSyllables(w), 0);
-  return { sentences: words.length === 0 ? 0 : Math.max(1, pieces.length), words: words.length, syllables };
+  return {
+    sentences: words.length === 0 ? 0 : Math.max(1, pieces.length),
+    words: words.length,
+    syllables,
+  };
 }
 
 /** Flesch–Kincaid grade level of `text`; NaN-free: a text without words is grade 0. */

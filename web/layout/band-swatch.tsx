@@ -8,7 +8,14 @@ export function BandSwatch(props: { readonly tr: Translator; readonly bandId: Sc
   const style = BAND_STYLES[props.bandId];
   return (
     <span class={`band band-${props.bandId}`}>
-      <svg class="band-icon" viewBox="-8 -8 16 16" width="16" height="16" aria-hidden="true" focusable="false">
+      <svg
+        class="band-icon"
+        viewBox="-8 -8 16 16"
+        width="16"
+        height="16"
+        aria-hidden="true"
+        focusable="false"
+      >
         <BandMarker shape={style.shape} fill={style.fill} size={6.5} />
       </svg>
       <span class="band-name">{props.tr.text(`band.${props.bandId}`)}</span>

@@ -4,7 +4,10 @@ import type { Translator } from '../text/translator.ts';
 export function Caution(props: { readonly tr: Translator; readonly compact?: boolean }) {
   const { tr } = props;
   return (
-    <aside class={props.compact ? 'caution caution-compact' : 'caution'} aria-label={tr.t('caution.title')}>
+    <aside
+      class={props.compact ? 'caution caution-compact' : 'caution'}
+      aria-label={tr.t('caution.title')}
+    >
       <p class="caution-title">{tr.text('caution.title')}</p>
       <p>
         {tr.text('caution.text')} <a href="/limits">{tr.text('caution.limitsLink')}</a>.

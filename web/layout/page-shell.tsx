@@ -23,7 +23,11 @@ export interface PageShellProps {
   readonly children?: Child;
 }
 
-const STUDY_SECTIONS: readonly { readonly id: StudySection; readonly key: 'nav.overview' | 'nav.scenario' | 'nav.catalog' | 'nav.edit'; readonly suffix: string }[] = [
+const STUDY_SECTIONS: readonly {
+  readonly id: StudySection;
+  readonly key: 'nav.overview' | 'nav.scenario' | 'nav.catalog' | 'nav.edit';
+  readonly suffix: string;
+}[] = [
   { id: 'overview', key: 'nav.overview', suffix: '' },
   { id: 'scenario', key: 'nav.scenario', suffix: '/scenario' },
   { id: 'catalog', key: 'nav.catalog', suffix: '/catalog' },
@@ -90,7 +94,10 @@ export function PageShell(props: PageShellProps) {
             <ul>
               {STUDY_SECTIONS.map((s) => (
                 <li>
-                  <a href={`/studies/${study.id}${s.suffix}`} aria-current={props.section === s.id ? 'page' : undefined}>
+                  <a
+                    href={`/studies/${study.id}${s.suffix}`}
+                    aria-current={props.section === s.id ? 'page' : undefined}
+                  >
                     {tr.text(s.key)}
                   </a>
                 </li>
@@ -104,7 +111,8 @@ export function PageShell(props: PageShellProps) {
         </main>
         <footer class="site-footer">
           <p class="footer-caution">
-            <strong>{tr.text('caution.short')}</strong> <a href="/limits">{tr.text('caution.limitsLink')}</a>.
+            <strong>{tr.text('caution.short')}</strong>{' '}
+            <a href="/limits">{tr.text('caution.limitsLink')}</a>.
           </p>
           <p>
             {tr.text('footer.version', { version: props.toolVersion })}

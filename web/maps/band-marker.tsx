@@ -25,19 +25,33 @@ export function BandMarker(props: MarkerProps) {
   );
 }
 
-function MarkerShape(props: MarkerProps & { readonly stroke: string; readonly strokeWidth: number }) {
+function MarkerShape(
+  props: MarkerProps & { readonly stroke: string; readonly strokeWidth: number },
+) {
   const { size: s, fill } = props;
   const x = props.x ?? 0;
   const y = props.y ?? 0;
-  const common = { fill, stroke: props.stroke, 'stroke-width': props.strokeWidth, 'stroke-linejoin': 'round' as const };
+  const common = {
+    fill,
+    stroke: props.stroke,
+    'stroke-width': props.strokeWidth,
+    'stroke-linejoin': 'round' as const,
+  };
   switch (props.shape) {
     case 'circle':
       return <circle cx={x} cy={y} r={s * 0.9} {...common} />;
     case 'square':
       return <rect x={x - s * 0.8} y={y - s * 0.8} width={s * 1.6} height={s * 1.6} {...common} />;
     case 'diamond':
-      return <polygon points={`${x},${y - s} ${x + s},${y} ${x},${y + s} ${x - s},${y}`} {...common} />;
+      return (
+        <polygon points={`${x},${y - s} ${x + s},${y} ${x},${y + s} ${x - s},${y}`} {...common} />
+      );
     case 'triangle':
-      return <polygon points={`${x},${y - s} ${x + s},${y + s * 0.8} ${x - s},${y + s * 0.8}`} {...common} />;
+      return (
+        <polygon
+          points={`${x},${y - s} ${x + s},${y + s * 0.8} ${x - s},${y + s * 0.8}`}
+          {...common}
+        />
+      );
   }
 }

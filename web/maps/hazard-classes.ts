@@ -21,7 +21,12 @@ const RATIO_SPACED_FROM = 10;
 const SMALLEST_SPAN = 1e-12;
 
 /** Round numbers within a decade, finest first. */
-const DECADE_STEPS: readonly (readonly number[])[] = [[1, 1.5, 2, 3, 4, 5, 6, 8], [1, 2, 5], [1, 3], [1]];
+const DECADE_STEPS: readonly (readonly number[])[] = [
+  [1, 1.5, 2, 3, 4, 5, 6, 8],
+  [1, 2, 5],
+  [1, 3],
+  [1],
+];
 
 /** Lightest and darkest dusk steps a cell may take. */
 const FIRST_STEP = 1;
@@ -52,7 +57,12 @@ export interface ValueClasses {
 const round = (x: number): number => Number(x.toPrecision(6));
 
 /** Round numbers of the decade steps `steps` in (min, max]. */
-function limitsWith(steps: readonly number[], min: number, max: number, smallestPositive: number): number[] {
+function limitsWith(
+  steps: readonly number[],
+  min: number,
+  max: number,
+  smallestPositive: number,
+): number[] {
   const limits: number[] = [];
   for (let k = Math.floor(Math.log10(smallestPositive)); k <= Math.ceil(Math.log10(max)); k++) {
     for (const s of steps) {
@@ -64,8 +74,15 @@ function limitsWith(steps: readonly number[], min: number, max: number, smallest
 }
 
 /** Limits spaced by ratio: the finest decade steps that fit, else every few decades. */
-function ratioLimits(min: number, max: number, smallestPositive: number, maxClasses: number): number[] {
-  const fits = DECADE_STEPS.map((steps) => limitsWith(steps, min, max, smallestPositive)).find((l) => l.length <= maxClasses - 1);
+function ratioLimits(
+  min: number,
+  max: number,
+  smallestPositive: number,
+  maxClasses: number,
+): number[] {
+  const fits = DECADE_STEPS.map((steps) => limitsWith(steps, min, max, smallestPositive)).find(
+    (l) => l.length <= maxClasses - 1,
+  );
   if (fits) return fits;
   const decades = limitsWith([1], min, max, smallestPositive);
   const every = Math.ceil(decades.length / (maxClasses - 1));
@@ -75,7 +92,11 @@ function ratioLimits(min: number, max: number, smallestPositive: number, maxClas
 /** Evenly spaced round limits in (min, max]: the most of d3-scale's linear ticks that fit. */
 function evenLimits(min: number, max: number, maxClasses: number): number[] {
   for (let count = 2 * maxClasses; count >= 1; count--) {
-    const limits = scaleLinear().domain([min, max]).ticks(count).map(round).filter((t) => t > min && t <= max);
+    const limits = scaleLinear()
+      .domain([min, max])
+      .ticks(count)
+      .map(round)
+      .filter((t) => t > min && t <= max);
     if (limits.length <= maxClasses - 1) return limits;
   }
   return [];
@@ -89,9 +110,13 @@ export function classIndex(limits: readonly number[], value: number): number {
 }
 
 /** Classes of `values` (finite, at least one), at most `maxClasses` of them (1 to MAX_CLASSES). */
-export function valueClasses(values: readonly number[], maxClasses: number = MAX_CLASSES): ValueClasses {
+export function valueClasses(
+  values: readonly number[],
+  maxClasses: number = MAX_CLASSES,
+): ValueClasses {
   if (values.length === 0) throw new RangeError('expected at least one value to class');
-  if (!(Number.isInteger(maxClasses) && maxClasses >= 1 && maxClasses <= MAX_CLASSES)) throw new RangeError(`expected 1 to ${MAX_CLASSES} classes, got ${maxClasses}`);
+  if (!(Number.isInteger(maxClasses) && maxClasses >= 1 && maxClasses <= MAX_CLASSES))
+    throw new RangeError(`expected 1 to ${MAX_CLASSES} classes, got ${maxClasses}`);
   let min = Infinity;
   let max = -Infinity;
   let smallestPositive = Infinity;
@@ -102,7 +127,11 @@ export function valueClasses(values: readonly number[], maxClasses: number = MAX
     if (v > 0) smallestPositive = Math.min(smallestPositive, v);
   }
   let limits: number[] = [];
-  if (maxClasses > 1 && max - min > SMALLEST_SPAN) limits = min > 0 && max / min >= RATIO_SPACED_FROM ? ratioLimits(min, max, smallestPositive, maxClasses) : evenLimits(min, max, maxClasses);
+  if (maxClasses > 1 && max - min > SMALLEST_SPAN)
+    limits =
+      min > 0 && max / min >= RATIO_SPACED_FROM
+        ? ratioLimits(min, max, smallestPositive, maxClasses)
+        : evenLimits(min, max, maxClasses);
   const counts = new Array<number>(limits.length + 1).fill(0);
   for (const v of values) counts[classIndex(limits, v)]! += 1;
   const n = counts.length;

@@ -24,8 +24,16 @@ export function layerClasses(points: readonly LayerPoint[]): LayerClasses | unde
   if (values.length === 0) return undefined;
   const found = valueClasses(values);
   const above = points.filter((p) => p.value === null && p.status === 'above-highest-level').length;
-  const classes = found.classes.map((c, i) => (i === found.classes.length - 1 ? { ...c, count: c.count + above } : c));
-  return { classes, limits: found.limits, min: found.min, max: found.max, clear: points.filter((p) => p.value === null && p.status !== 'above-highest-level').length };
+  const classes = found.classes.map((c, i) =>
+    i === found.classes.length - 1 ? { ...c, count: c.count + above } : c,
+  );
+  return {
+    classes,
+    limits: found.limits,
+    min: found.min,
+    max: found.max,
+    clear: points.filter((p) => p.value === null && p.status !== 'above-highest-level').length,
+  };
 }
 
 /**
@@ -33,16 +41,35 @@ export function layerClasses(points: readonly LayerPoint[]): LayerClasses | unde
  * that frame, api/engine/map/map-grid.ts), filled by class on the dusk scale, opaque so the
  * shade alone reads in greyscale; the coast, sources and communities are drawn above it.
  */
-export function HazardLayer(props: { readonly points: readonly LayerPoint[]; readonly classes: LayerClasses; readonly spacingKm: number; readonly frame: MapFrame }) {
+export function HazardLayer(props: {
+  readonly points: readonly LayerPoint[];
+  readonly classes: LayerClasses;
+  readonly spacingKm: number;
+  readonly frame: MapFrame;
+}) {
   const { points, classes, frame } = props;
   const side = props.spacingKm * frame.scale;
   const top = classes.classes.length - 1;
   const cells = [];
   for (const p of points) {
-    const index = p.value !== null ? classIndex(classes.limits, p.value) : p.status === 'above-highest-level' ? top : -1;
+    const index =
+      p.value !== null
+        ? classIndex(classes.limits, p.value)
+        : p.status === 'above-highest-level'
+          ? top
+          : -1;
     if (index < 0) continue;
     const [x, y] = frame.project([p.lon, p.lat]);
-    cells.push(<rect x={(x - side / 2).toFixed(1)} y={(y - side / 2).toFixed(1)} width={(side + 0.6).toFixed(1)} height={(side + 0.6).toFixed(1)} fill={DUSK[(classes.classes[index] as ValueClass).step]} data-class={index} />);
+    cells.push(
+      <rect
+        x={(x - side / 2).toFixed(1)}
+        y={(y - side / 2).toFixed(1)}
+        width={(side + 0.6).toFixed(1)}
+        height={(side + 0.6).toFixed(1)}
+        fill={DUSK[(classes.classes[index] as ValueClass).step]}
+        data-class={index}
+      />,
+    );
   }
   return (
     <g class="hazard-cells" shape-rendering="crispEdges">
@@ -58,13 +85,19 @@ function exactDecimals(x: number): number {
 }
 
 /** Decimal places for two significant figures of `x`. */
-const twoFigures = (x: number): number => (x === 0 ? 0 : Math.max(0, 1 - Math.floor(Math.log10(Math.abs(x)))));
+const twoFigures = (x: number): number =>
+  x === 0 ? 0 : Math.max(0, 1 - Math.floor(Math.log10(Math.abs(x))));
 
 /** A value of the map in words: "0.15 g", "12 cm/s", or a percentage for a chance map. */
 export function mapValueText(tr: Translator, value: number, unit: string, round: boolean): string {
   if (unit === 'probability') {
     const percent = value * 100;
-    return tr.t('chance.percent', { p: tr.number(percent, round ? exactDecimals(Number(percent.toPrecision(6))) : twoFigures(percent)) });
+    return tr.t('chance.percent', {
+      p: tr.number(
+        percent,
+        round ? exactDecimals(Number(percent.toPrecision(6))) : twoFigures(percent),
+      ),
+    });
   }
   return `${tr.number(value, round ? exactDecimals(value) : twoFigures(value))} ${unit}`;
 }
@@ -74,17 +107,38 @@ export function measureWords(tr: Translator, key: string, plain: true): string;
 export function measureWords(tr: Translator, key: string, plain?: false): Child;
 export function measureWords(tr: Translator, key: string, plain = false): Child {
   const m = parseMeasure(key);
-  if (m.kind === 'SA') return plain ? tr.t('hazardMap.measure.SA', { period: tr.number(m.periodS, exactDecimals(m.periodS)), key }) : tr.text('hazardMap.measure.SA', { period: tr.number(m.periodS, exactDecimals(m.periodS)), key });
+  if (m.kind === 'SA')
+    return plain
+      ? tr.t('hazardMap.measure.SA', {
+          period: tr.number(m.periodS, exactDecimals(m.periodS)),
+          key,
+        })
+      : tr.text('hazardMap.measure.SA', {
+          period: tr.number(m.periodS, exactDecimals(m.periodS)),
+          key,
+        });
   const textKey = m.kind === 'PGA' ? 'hazardMap.measure.PGA' : 'hazardMap.measure.PGV';
   return plain ? tr.t(textKey) : tr.text(textKey);
 }
 
 /** What a map shows, in words with its unit and return period or horizon. */
-export function mapTitle(tr: Translator, d: Pick<MapDescription, 'measure' | 'unit' | 'quantity'>): Child {
+export function mapTitle(
+  tr: Translator,
+  d: Pick<MapDescription, 'measure' | 'unit' | 'quantity'>,
+): Child {
   const measure = measureWords(tr, d.measure);
   return d.quantity.kind === 'return-period'
-    ? tr.text('hazardMap.title.returnPeriod', { measure, years: tr.number(d.quantity.returnPeriodYears), unit: d.unit })
-    : tr.text('hazardMap.title.chance', { measure, level: tr.number(d.quantity.level, twoFigures(d.quantity.level)), unit: d.unit, years: tr.number(d.quantity.horizonYears) });
+    ? tr.text('hazardMap.title.returnPeriod', {
+        measure,
+        years: tr.number(d.quantity.returnPeriodYears),
+        unit: d.unit,
+      })
+    : tr.text('hazardMap.title.chance', {
+        measure,
+        level: tr.number(d.quantity.level, twoFigures(d.quantity.level)),
+        unit: d.unit,
+        years: tr.number(d.quantity.horizonYears),
+      });
 }
 
 export interface HazardMapLegendProps {
@@ -108,7 +162,11 @@ export function HazardMapLegend(props: HazardMapLegendProps) {
   const unit = d.quantity.kind === 'chance' ? 'probability' : d.unit;
   const say = (v: number) => mapValueText(tr, v, unit, true);
   const label = (c: ValueClass): Child => {
-    if (c.from === null && c.to === null) return tr.text('hazardMap.class.between', { from: mapValueText(tr, classes?.min ?? 0, unit, false), to: mapValueText(tr, classes?.max ?? 0, unit, false) });
+    if (c.from === null && c.to === null)
+      return tr.text('hazardMap.class.between', {
+        from: mapValueText(tr, classes?.min ?? 0, unit, false),
+        to: mapValueText(tr, classes?.max ?? 0, unit, false),
+      });
     if (c.from === null) return tr.text('hazardMap.class.below', { to: say(c.to as number) });
     if (c.to === null) return tr.text('hazardMap.class.from', { from: say(c.from) });
     return tr.text('hazardMap.class.between', { from: say(c.from), to: say(c.to) });
@@ -120,21 +178,53 @@ export function HazardMapLegend(props: HazardMapLegendProps) {
         <ul class="legend-classes">
           {classes.classes.map((c, i) => (
             <li data-class={i} data-count={c.count}>
-              <svg class="legend-symbol" viewBox="0 0 28 16" width="28" height="16" aria-hidden="true" focusable="false">
-                <rect x={1} y={1} width={26} height={14} fill={DUSK[c.step]} stroke={MAP_COLOURS.returnPeriod} />
+              <svg
+                class="legend-symbol"
+                viewBox="0 0 28 16"
+                width="28"
+                height="16"
+                aria-hidden="true"
+                focusable="false"
+              >
+                <rect
+                  x={1}
+                  y={1}
+                  width={26}
+                  height={14}
+                  fill={DUSK[c.step]}
+                  stroke={MAP_COLOURS.returnPeriod}
+                />
               </svg>{' '}
               {label(c)} ({tr.text('hazardMap.class.points', { n: tr.number(c.count) })})
             </li>
           ))}
         </ul>
       )}
-      {(classes?.clear ?? d.count) > 0 && <p class="legend-note">{tr.text('hazardMap.clear', { n: tr.number(classes?.clear ?? d.count) })}</p>}
-      <p class="legend-note">{tr.text(d.quantity.kind === 'chance' ? 'hazardMap.darker.chance' : 'hazardMap.darker.returnPeriod')}</p>
+      {(classes?.clear ?? d.count) > 0 && (
+        <p class="legend-note">
+          {tr.text('hazardMap.clear', { n: tr.number(classes?.clear ?? d.count) })}
+        </p>
+      )}
+      <p class="legend-note">
+        {tr.text(
+          d.quantity.kind === 'chance'
+            ? 'hazardMap.darker.chance'
+            : 'hazardMap.darker.returnPeriod',
+        )}
+      </p>
       <p class="legend-note">{tr.text('hazardMap.vs30', { vs30: tr.number(d.vs30) })}</p>
       <p class="legend-note" id={props.summaryId}>
         {classes
-          ? tr.text('hazardMap.summary', { count: tr.number(d.count), spacing: tr.number(d.spacingKm, exactDecimals(d.spacingKm)), min: mapValueText(tr, classes.min, unit, false), max: mapValueText(tr, classes.max, unit, false) })
-          : tr.text('hazardMap.summaryNone', { count: tr.number(d.count), spacing: tr.number(d.spacingKm, exactDecimals(d.spacingKm)) })}{' '}
+          ? tr.text('hazardMap.summary', {
+              count: tr.number(d.count),
+              spacing: tr.number(d.spacingKm, exactDecimals(d.spacingKm)),
+              min: mapValueText(tr, classes.min, unit, false),
+              max: mapValueText(tr, classes.max, unit, false),
+            })
+          : tr.text('hazardMap.summaryNone', {
+              count: tr.number(d.count),
+              spacing: tr.number(d.spacingKm, exactDecimals(d.spacingKm)),
+            })}{' '}
         <a href={props.geojsonUrl}>{tr.text('hazardMap.download')}</a>
       </p>
       <p class="legend-note hazard-caution">

@@ -1,5 +1,9 @@
 import { geoPath, geoTransform, type GeoPermissibleObjects } from 'd3-geo';
-import { frameForStudy, type LocalFrame, type PointXY } from '../../api/engine/geometry/projection.ts';
+import {
+  frameForStudy,
+  type LocalFrame,
+  type PointXY,
+} from '../../api/engine/geometry/projection.ts';
 import type { LonLat, Study } from '../../api/engine/model.ts';
 
 /**
@@ -49,11 +53,24 @@ export function studyPoints(study: Pick<Study, 'communities' | 'sources' | 'outl
 }
 
 /** The frame fitting the study (and `include`) into the map's box, north up. */
-export function mapFrame(study: Pick<Study, 'communities' | 'sources' | 'outline'>, options: MapFrameOptions): MapFrame {
+export function mapFrame(
+  study: Pick<Study, 'communities' | 'sources' | 'outline'>,
+  options: MapFrameOptions,
+): MapFrame {
   const local = frameForStudy(study);
-  const shown = options.fit === 'communities' ? studyPoints({ communities: study.communities, sources: [], ...(study.outline ? { outline: study.outline } : {}) }) : studyPoints(study);
+  const shown =
+    options.fit === 'communities'
+      ? studyPoints({
+          communities: study.communities,
+          sources: [],
+          ...(study.outline ? { outline: study.outline } : {}),
+        })
+      : studyPoints(study);
   const points = [...shown, ...(options.include ?? [])].map((p) => local.toLocal(p));
-  let minX = Infinity, maxX = -Infinity, minY = Infinity, maxY = -Infinity;
+  let minX = Infinity,
+    maxX = -Infinity,
+    minY = Infinity,
+    maxY = -Infinity;
   for (const p of points) {
     minX = Math.min(minX, p.x);
     maxX = Math.max(maxX, p.x);
@@ -68,7 +85,8 @@ export function mapFrame(study: Pick<Study, 'communities' | 'sources' | 'outline
   const inner = options.width - 2 * options.padding;
   const scale = Math.min(inner / spanX, (options.maxHeight - 2 * options.padding) / spanY);
   const height = Math.round(spanY * scale + 2 * options.padding);
-  const fromLocal = (p: PointXY) => [options.width / 2 + (p.x - cx) * scale, height / 2 - (p.y - cy) * scale] as const;
+  const fromLocal = (p: PointXY) =>
+    [options.width / 2 + (p.x - cx) * scale, height / 2 - (p.y - cy) * scale] as const;
   const project = (lonLat: LonLat) => fromLocal(local.toLocal(lonLat));
   const transform = geoTransform({
     point(lon: number, lat: number) {
@@ -77,7 +95,15 @@ export function mapFrame(study: Pick<Study, 'communities' | 'sources' | 'outline
     },
   });
   const generator = geoPath(transform).digits(1);
-  return { width: options.width, height, local, scale, project, fromLocal, path: (object) => generator(object) ?? '' };
+  return {
+    width: options.width,
+    height,
+    local,
+    scale,
+    project,
+    fromLocal,
+    path: (object) => generator(object) ?? '',
+  };
 }
 
 /**
@@ -85,7 +111,10 @@ export function mapFrame(study: Pick<Study, 'communities' | 'sources' | 'outline
  * `pxPerKm` (the usual round lengths of map scale bars; common practice).
  */
 export function scaleBarKm(pxPerKm: number, maxPx: number): number {
-  if (!(pxPerKm > 0 && maxPx > 0)) throw new RangeError(`expected positive pixels per km and bar length, got ${pxPerKm}, ${maxPx}`);
+  if (!(pxPerKm > 0 && maxPx > 0))
+    throw new RangeError(
+      `expected positive pixels per km and bar length, got ${pxPerKm}, ${maxPx}`,
+    );
   const maxKm = maxPx / pxPerKm;
   const power = 10 ** Math.floor(Math.log10(maxKm));
   for (const step of [5, 2, 1]) if (step * power <= maxKm) return step * power;

@@ -34,8 +34,14 @@ export interface StudyMapProps {
   readonly labelSuffix?: ReadonlyMap<string, string>;
 }
 
-const lineOf = (s: Source & { kind: 'fault' }) => ({ type: 'LineString' as const, coordinates: s.trace.map((p) => [...p]) });
-const polygonOf = (rings: Study['outline'] & object) => ({ type: 'Polygon' as const, coordinates: rings.map((r) => r.map((p) => [...p])) });
+const lineOf = (s: Source & { kind: 'fault' }) => ({
+  type: 'LineString' as const,
+  coordinates: s.trace.map((p) => [...p]),
+});
+const polygonOf = (rings: Study['outline'] & object) => ({
+  type: 'Polygon' as const,
+  coordinates: rings.map((r) => r.map((p) => [...p])),
+});
 
 /** The study drawn from its own data: outline, zones, faults, points, communities; scale bar and north arrow. */
 export function StudyMap(props: StudyMapProps) {
@@ -45,9 +51,17 @@ export function StudyMap(props: StudyMapProps) {
   const faults = study.sources.filter((s): s is Source & { kind: 'fault' } => s.kind === 'fault');
   const sizeOf = (id: string) => (props.highlight === id ? 9 : 6.5);
   const communityPoints = study.communities.map((c) => frame.project([c.lon, c.lat]));
-  const faultPoints = faults.map((s) => frame.project(s.trace[Math.floor((s.trace.length - 1) / 2)] ?? (s.trace[0] as LonLat)));
+  const faultPoints = faults.map((s) =>
+    frame.project(s.trace[Math.floor((s.trace.length - 1) / 2)] ?? (s.trace[0] as LonLat)),
+  );
   const requests: LabelRequest[] = [
-    ...study.communities.map((c, i) => ({ x: (communityPoints[i] as readonly [number, number])[0], y: (communityPoints[i] as readonly [number, number])[1], text: `${c.name}${props.labelSuffix?.get(c.id) ?? ''}`, fontSize: props.highlight === c.id ? 14 : 12, clearance: sizeOf(c.id) })),
+    ...study.communities.map((c, i) => ({
+      x: (communityPoints[i] as readonly [number, number])[0],
+      y: (communityPoints[i] as readonly [number, number])[1],
+      text: `${c.name}${props.labelSuffix?.get(c.id) ?? ''}`,
+      fontSize: props.highlight === c.id ? 14 : 12,
+      clearance: sizeOf(c.id),
+    })),
     ...faults.map((s, i) => ({
       x: (faultPoints[i] as readonly [number, number])[0],
       y: (faultPoints[i] as readonly [number, number])[1],
@@ -80,10 +94,19 @@ export function StudyMap(props: StudyMapProps) {
         <ZoneHatch id={hatch} />
       </defs>
       {/* Sea only where an outline says where the land is; without one the background is blank. */}
-      <rect width={frame.width} height={frame.height} fill={(study.outline?.length ?? 0) > 0 ? MAP_COLOURS.sea : PAPER} />
+      <rect
+        width={frame.width}
+        height={frame.height}
+        fill={(study.outline?.length ?? 0) > 0 ? MAP_COLOURS.sea : PAPER}
+      />
       <g class="map-land">
         {(study.outline ?? []).map((ring) => (
-          <path d={frame.path(polygonOf([ring]))} fill={MAP_COLOURS.land} stroke={MAP_COLOURS.coast} stroke-width={1.2} />
+          <path
+            d={frame.path(polygonOf([ring]))}
+            fill={MAP_COLOURS.land}
+            stroke={MAP_COLOURS.coast}
+            stroke-width={1.2}
+          />
         ))}
       </g>
       <g class="map-hazard-layer" data-layer="hazard">
@@ -91,47 +114,71 @@ export function StudyMap(props: StudyMapProps) {
       </g>
       <g class="map-coast">
         {(study.outline ?? []).map((ring) => (
-          <path d={frame.path(polygonOf([ring]))} fill="none" stroke={MAP_COLOURS.coast} stroke-width={1.2} />
+          <path
+            d={frame.path(polygonOf([ring]))}
+            fill="none"
+            stroke={MAP_COLOURS.coast}
+            stroke-width={1.2}
+          />
         ))}
       </g>
       <g class="map-zones">
-        {props.showZones !== false && study.sources
-          .filter((s) => s.kind === 'zone')
-          .map((s) => (
-            <path
-              d={frame.path(polygonOf((s as Source & { kind: 'zone' }).rings))}
-              fill={`url(#${hatch})`}
-              fill-opacity={0.35}
-              stroke={MAP_COLOURS.zoneHatch}
-              stroke-width={1}
-              stroke-dasharray="5 3"
-              data-source={s.id}
-            />
-          ))}
+        {props.showZones !== false &&
+          study.sources
+            .filter((s) => s.kind === 'zone')
+            .map((s) => (
+              <path
+                d={frame.path(polygonOf((s as Source & { kind: 'zone' }).rings))}
+                fill={`url(#${hatch})`}
+                fill-opacity={0.35}
+                stroke={MAP_COLOURS.zoneHatch}
+                stroke-width={1}
+                stroke-dasharray="5 3"
+                data-source={s.id}
+              />
+            ))}
       </g>
       <g class="map-faults">
         {faults.map((s, i) => {
-            const interfaceLike = s.setting === 'interface';
-            const label = faultLabel(i);
-            return (
-              <g data-source={s.id}>
-                {(interfaceLike || halo) && <path d={frame.path(lineOf(s))} fill="none" stroke={PAPER} stroke-width={interfaceLike ? 7 : 5} />}
+          const interfaceLike = s.setting === 'interface';
+          const label = faultLabel(i);
+          return (
+            <g data-source={s.id}>
+              {(interfaceLike || halo) && (
                 <path
                   d={frame.path(lineOf(s))}
                   fill="none"
-                  stroke={MAP_COLOURS.fault}
-                  stroke-width={interfaceLike ? 3 : 2}
-                  stroke-dasharray={interfaceLike ? '10 4' : undefined}
-                  stroke-linecap="round"
+                  stroke={PAPER}
+                  stroke-width={interfaceLike ? 7 : 5}
                 />
-                {label && (
-                  <text x={label.x} y={label.y} text-anchor={label.anchor} font-size={11} font-style="italic" fill={INK} class="map-label map-label-source" paint-order="stroke" stroke={PAPER} stroke-width={3}>
-                    {s.name}
-                  </text>
-                )}
-              </g>
-            );
-          })}
+              )}
+              <path
+                d={frame.path(lineOf(s))}
+                fill="none"
+                stroke={MAP_COLOURS.fault}
+                stroke-width={interfaceLike ? 3 : 2}
+                stroke-dasharray={interfaceLike ? '10 4' : undefined}
+                stroke-linecap="round"
+              />
+              {label && (
+                <text
+                  x={label.x}
+                  y={label.y}
+                  text-anchor={label.anchor}
+                  font-size={11}
+                  font-style="italic"
+                  fill={INK}
+                  class="map-label map-label-source"
+                  paint-order="stroke"
+                  stroke={PAPER}
+                  stroke-width={3}
+                >
+                  {s.name}
+                </text>
+              )}
+            </g>
+          );
+        })}
       </g>
       <g class="map-points">
         {study.sources
@@ -157,9 +204,27 @@ export function StudyMap(props: StudyMapProps) {
           const label = communityLabel(i);
           return (
             <g data-community={c.id}>
-              <BandMarker shape={style?.shape ?? 'circle'} fill={style?.fill ?? PAPER} size={size} x={x} y={y} halo={props.hazardLayer !== undefined} />
+              <BandMarker
+                shape={style?.shape ?? 'circle'}
+                fill={style?.fill ?? PAPER}
+                size={size}
+                x={x}
+                y={y}
+                halo={props.hazardLayer !== undefined}
+              />
               {label && (
-                <text x={label.x} y={label.y} text-anchor={label.anchor} font-size={props.highlight === c.id ? 14 : 12} font-weight={props.highlight === c.id ? 'bold' : undefined} fill={INK} paint-order="stroke" stroke={PAPER} stroke-width={3} class="map-label">
+                <text
+                  x={label.x}
+                  y={label.y}
+                  text-anchor={label.anchor}
+                  font-size={props.highlight === c.id ? 14 : 12}
+                  font-weight={props.highlight === c.id ? 'bold' : undefined}
+                  fill={INK}
+                  paint-order="stroke"
+                  stroke={PAPER}
+                  stroke-width={3}
+                  class="map-label"
+                >
                   {`${c.name}${props.labelSuffix?.get(c.id) ?? ''}`}
                 </text>
               )}
@@ -173,12 +238,30 @@ export function StudyMap(props: StudyMapProps) {
 }
 
 /** The legend of a study map, in words, with the symbols it explains. */
-export function StudyMapLegend(props: { readonly tr: Translator; readonly idPrefix: string; readonly bands: boolean; readonly study: Study; readonly extra?: Child }) {
+export function StudyMapLegend(props: {
+  readonly tr: Translator;
+  readonly idPrefix: string;
+  readonly bands: boolean;
+  readonly study: Study;
+  readonly extra?: Child;
+}) {
   const { tr, study } = props;
-  const has = (kind: Source['kind'], setting?: string) => study.sources.some((s) => s.kind === kind && (setting === undefined || (setting === 'interface') === (s.setting === 'interface')));
+  const has = (kind: Source['kind'], setting?: string) =>
+    study.sources.some(
+      (s) =>
+        s.kind === kind &&
+        (setting === undefined || (setting === 'interface') === (s.setting === 'interface')),
+    );
   const hatch = `${props.idPrefix}-legend-hatch`;
   const swatch = (content: Child) => (
-    <svg class="legend-symbol" viewBox="0 0 28 16" width="28" height="16" aria-hidden="true" focusable="false">
+    <svg
+      class="legend-symbol"
+      viewBox="0 0 28 16"
+      width="28"
+      height="16"
+      aria-hidden="true"
+      focusable="false"
+    >
       {content}
     </svg>
   );
@@ -191,43 +274,116 @@ export function StudyMapLegend(props: { readonly tr: Translator; readonly idPref
         </defs>
       </svg>
       <ul>
-        {(study.outline?.length ?? 0) > 0 && <li>{swatch(<rect x={1} y={1} width={26} height={14} fill={MAP_COLOURS.land} stroke={MAP_COLOURS.coast} />)} {tr.text('map.land')}</li>}
+        {(study.outline?.length ?? 0) > 0 && (
+          <li>
+            {swatch(
+              <rect
+                x={1}
+                y={1}
+                width={26}
+                height={14}
+                fill={MAP_COLOURS.land}
+                stroke={MAP_COLOURS.coast}
+              />,
+            )}{' '}
+            {tr.text('map.land')}
+          </li>
+        )}
         {(study.outline?.length ?? 0) > 0 ? (
-          <li>{swatch(<rect x={1} y={1} width={26} height={14} fill={MAP_COLOURS.sea} stroke={MAP_COLOURS.grid} />)} {tr.text('map.sea')}</li>
+          <li>
+            {swatch(
+              <rect
+                x={1}
+                y={1}
+                width={26}
+                height={14}
+                fill={MAP_COLOURS.sea}
+                stroke={MAP_COLOURS.grid}
+              />,
+            )}{' '}
+            {tr.text('map.sea')}
+          </li>
         ) : (
-          <li>{swatch(<rect x={1} y={1} width={26} height={14} fill={PAPER} stroke={MAP_COLOURS.grid} />)} {tr.text('map.noOutline')}</li>
+          <li>
+            {swatch(
+              <rect x={1} y={1} width={26} height={14} fill={PAPER} stroke={MAP_COLOURS.grid} />,
+            )}{' '}
+            {tr.text('map.noOutline')}
+          </li>
         )}
         {has('fault', 'interface') && (
           <li>
             {swatch(
               <>
                 <line x1={2} y1={8} x2={26} y2={8} stroke={PAPER} stroke-width={7} />
-                <line x1={2} y1={8} x2={26} y2={8} stroke={INK} stroke-width={3} stroke-dasharray="10 4" />
+                <line
+                  x1={2}
+                  y1={8}
+                  x2={26}
+                  y2={8}
+                  stroke={INK}
+                  stroke-width={3}
+                  stroke-dasharray="10 4"
+                />
               </>,
             )}{' '}
             {tr.text('map.interface')}
           </li>
         )}
-        {has('fault', 'crustal') && <li>{swatch(<line x1={2} y1={8} x2={26} y2={8} stroke={INK} stroke-width={2} />)} {tr.text('map.fault')}</li>}
-        {has('zone') && (
+        {has('fault', 'crustal') && (
           <li>
-            {swatch(<rect x={1} y={1} width={26} height={14} fill={`url(#${hatch})`} fill-opacity={0.6} stroke={MAP_COLOURS.zoneHatch} stroke-dasharray="5 3" />)} {tr.text('map.zone')}
+            {swatch(<line x1={2} y1={8} x2={26} y2={8} stroke={INK} stroke-width={2} />)}{' '}
+            {tr.text('map.fault')}
           </li>
         )}
-        {has('point') && <li>{swatch(<path d="M9,3L19,13M9,13L19,3" stroke={INK} stroke-width={2} />)} {tr.text('map.point')}</li>}
+        {has('zone') && (
+          <li>
+            {swatch(
+              <rect
+                x={1}
+                y={1}
+                width={26}
+                height={14}
+                fill={`url(#${hatch})`}
+                fill-opacity={0.6}
+                stroke={MAP_COLOURS.zoneHatch}
+                stroke-dasharray="5 3"
+              />,
+            )}{' '}
+            {tr.text('map.zone')}
+          </li>
+        )}
+        {has('point') && (
+          <li>
+            {swatch(<path d="M9,3L19,13M9,13L19,3" stroke={INK} stroke-width={2} />)}{' '}
+            {tr.text('map.point')}
+          </li>
+        )}
         {props.bands ? (
           <li>
             {tr.text('map.community')}:
             <ul class="legend-bands">
               {(['refer-first', 'refer-soon', 'prepare', 'inform'] as const).map((id) => (
                 <li>
-                  {swatch(<BandMarker shape={BAND_STYLES[id].shape} fill={BAND_STYLES[id].fill} size={6} x={14} y={8} />)} {tr.text(`band.${id}`)}
+                  {swatch(
+                    <BandMarker
+                      shape={BAND_STYLES[id].shape}
+                      fill={BAND_STYLES[id].fill}
+                      size={6}
+                      x={14}
+                      y={8}
+                    />,
+                  )}{' '}
+                  {tr.text(`band.${id}`)}
                 </li>
               ))}
             </ul>
           </li>
         ) : (
-          <li>{swatch(<BandMarker shape="circle" fill={PAPER} size={6} x={14} y={8} />)} {tr.text('overview.communities')}</li>
+          <li>
+            {swatch(<BandMarker shape="circle" fill={PAPER} size={6} x={14} y={8} />)}{' '}
+            {tr.text('overview.communities')}
+          </li>
         )}
         {props.extra}
       </ul>

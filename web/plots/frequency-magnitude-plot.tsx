@@ -12,21 +12,46 @@ const MARGIN = { top: 16, right: 24, bottom: 52, left: 78 } as const;
  * circles) and in each bin (open squares) on a log axis, the fitted Gutenberg–Richter line, and
  * the magnitude of completeness as a dashed line. Shapes tell the series apart, not colour.
  */
-export function FrequencyMagnitudePlot(props: { readonly tr: Translator; readonly data: FrequencyMagnitude; readonly mc: number; readonly idPrefix: string }) {
+export function FrequencyMagnitudePlot(props: {
+  readonly tr: Translator;
+  readonly data: FrequencyMagnitude;
+  readonly mc: number;
+  readonly idPrefix: string;
+}) {
   const { tr, data } = props;
   const width = 640;
   const height = 380;
   const bins = data.bins;
   const rates = bins.flatMap((b) => [b.cumulativeAnnualRate, b.annualRate]).filter((r) => r > 0);
-  const step = bins.length > 1 ? (bins[1] as { magnitude: number }).magnitude - (bins[0] as { magnitude: number }).magnitude : 0.1;
+  const step =
+    bins.length > 1
+      ? (bins[1] as { magnitude: number }).magnitude - (bins[0] as { magnitude: number }).magnitude
+      : 0.1;
   const mLow = Math.min(...bins.map((b) => b.lowerEdge), props.mc) - step;
   const mHigh = Math.max(...bins.map((b) => b.magnitude)) + 2 * step;
-  const x = scaleLinear().domain([mLow, mHigh]).range([MARGIN.left, width - MARGIN.right]);
-  const y = scaleLog().domain([Math.min(...rates), Math.max(...rates)]).range([height - MARGIN.bottom, MARGIN.top]).nice();
-  const fitPath = data.fittedLine ? line<{ magnitude: number; cumulativeAnnualRate: number }>().x((d) => x(d.magnitude)).y((d) => y(d.cumulativeAnnualRate)).digits(1)([...data.fittedLine]) : null;
+  const x = scaleLinear()
+    .domain([mLow, mHigh])
+    .range([MARGIN.left, width - MARGIN.right]);
+  const y = scaleLog()
+    .domain([Math.min(...rates), Math.max(...rates)])
+    .range([height - MARGIN.bottom, MARGIN.top])
+    .nice();
+  const fitPath = data.fittedLine
+    ? line<{ magnitude: number; cumulativeAnnualRate: number }>()
+        .x((d) => x(d.magnitude))
+        .y((d) => y(d.cumulativeAnnualRate))
+        .digits(1)([...data.fittedLine])
+    : null;
   const titleId = `${props.idPrefix}-title`;
   return (
-    <svg class="plot" viewBox={`0 0 ${width} ${height}`} width={width} height={height} role="img" aria-labelledby={titleId}>
+    <svg
+      class="plot"
+      viewBox={`0 0 ${width} ${height}`}
+      width={width}
+      height={height}
+      role="img"
+      aria-labelledby={titleId}
+    >
       <title id={titleId} lang={tr.fallbackLang('catalog.plot')}>
         {tr.t('catalog.plot')}
       </title>
@@ -52,16 +77,40 @@ export function FrequencyMagnitudePlot(props: { readonly tr: Translator; readonl
         titleLang={tr.fallbackLang('plot.perYear')}
         titleAt={[18, (MARGIN.top + height - MARGIN.bottom) / 2]}
       />
-      <line x1={x(props.mc)} x2={x(props.mc)} y1={MARGIN.top} y2={height - MARGIN.bottom} stroke={MAP_COLOURS.returnPeriod} stroke-dasharray="6 4" stroke-width={1.2} />
-      <text x={x(props.mc) + 4} y={MARGIN.top + 14} font-size={12} fill={MAP_COLOURS.axis} lang={tr.fallbackLang('plot.mcLine')}>
+      <line
+        x1={x(props.mc)}
+        x2={x(props.mc)}
+        y1={MARGIN.top}
+        y2={height - MARGIN.bottom}
+        stroke={MAP_COLOURS.returnPeriod}
+        stroke-dasharray="6 4"
+        stroke-width={1.2}
+      />
+      <text
+        x={x(props.mc) + 4}
+        y={MARGIN.top + 14}
+        font-size={12}
+        fill={MAP_COLOURS.axis}
+        lang={tr.fallbackLang('plot.mcLine')}
+      >
         {`${tr.t('plot.mcLine')} M ${tr.number(props.mc, 1)}`}
       </text>
-      {fitPath && <path d={fitPath} stroke={DUSK[5]} stroke-width={2.5} fill="none" class="fit-line" />}
+      {fitPath && (
+        <path d={fitPath} stroke={DUSK[5]} stroke-width={2.5} fill="none" class="fit-line" />
+      )}
       <g class="incremental">
         {bins
           .filter((b) => b.annualRate > 0)
           .map((b) => (
-            <rect x={x(b.magnitude) - 3.5} y={y(b.annualRate) - 3.5} width={7} height={7} fill={PAPER} stroke={INK} stroke-width={1.2} />
+            <rect
+              x={x(b.magnitude) - 3.5}
+              y={y(b.annualRate) - 3.5}
+              width={7}
+              height={7}
+              fill={PAPER}
+              stroke={INK}
+              stroke-width={1.2}
+            />
           ))}
       </g>
       <g class="cumulative">
@@ -71,7 +120,14 @@ export function FrequencyMagnitudePlot(props: { readonly tr: Translator; readonl
             <circle cx={x(b.lowerEdge)} cy={y(b.cumulativeAnnualRate)} r={3.8} fill={DUSK[6]} />
           ))}
       </g>
-      <rect x={MARGIN.left} y={MARGIN.top} width={width - MARGIN.left - MARGIN.right} height={height - MARGIN.top - MARGIN.bottom} fill="none" stroke={MAP_COLOURS.axis} />
+      <rect
+        x={MARGIN.left}
+        y={MARGIN.top}
+        width={width - MARGIN.left - MARGIN.right}
+        height={height - MARGIN.top - MARGIN.bottom}
+        fill="none"
+        stroke={MAP_COLOURS.axis}
+      />
     </svg>
   );
 }
@@ -80,7 +136,14 @@ export function FrequencyMagnitudePlot(props: { readonly tr: Translator; readonl
 export function FrequencyMagnitudeLegend(props: { readonly tr: Translator }) {
   const { tr } = props;
   const symbol = (content: unknown) => (
-    <svg class="legend-symbol" viewBox="0 0 28 12" width="28" height="12" aria-hidden="true" focusable="false">
+    <svg
+      class="legend-symbol"
+      viewBox="0 0 28 12"
+      width="28"
+      height="12"
+      aria-hidden="true"
+      focusable="false"
+    >
       {content}
     </svg>
   );
@@ -91,10 +154,30 @@ export function FrequencyMagnitudeLegend(props: { readonly tr: Translator }) {
         {tr.text('plot.legend')}
       </span>
       <ul class="plot-legend" aria-labelledby="fm-legend-name">
-        <li>{symbol(<circle cx={14} cy={6} r={4} fill={DUSK[6]} />)} {tr.text('plot.cumulative')}</li>
-        <li>{symbol(<rect x={10} y={2} width={8} height={8} fill={PAPER} stroke={INK} />)} {tr.text('plot.incremental')}</li>
-        <li>{symbol(<line x1={1} y1={6} x2={27} y2={6} stroke={DUSK[5]} stroke-width={2.5} />)} {tr.text('plot.fitLine')}</li>
-        <li>{symbol(<line x1={1} y1={6} x2={27} y2={6} stroke={MAP_COLOURS.returnPeriod} stroke-dasharray="6 4" />)} {tr.text('plot.mcLine')}</li>
+        <li>
+          {symbol(<circle cx={14} cy={6} r={4} fill={DUSK[6]} />)} {tr.text('plot.cumulative')}
+        </li>
+        <li>
+          {symbol(<rect x={10} y={2} width={8} height={8} fill={PAPER} stroke={INK} />)}{' '}
+          {tr.text('plot.incremental')}
+        </li>
+        <li>
+          {symbol(<line x1={1} y1={6} x2={27} y2={6} stroke={DUSK[5]} stroke-width={2.5} />)}{' '}
+          {tr.text('plot.fitLine')}
+        </li>
+        <li>
+          {symbol(
+            <line
+              x1={1}
+              y1={6}
+              x2={27}
+              y2={6}
+              stroke={MAP_COLOURS.returnPeriod}
+              stroke-dasharray="6 4"
+            />,
+          )}{' '}
+          {tr.text('plot.mcLine')}
+        </li>
       </ul>
     </>
   );

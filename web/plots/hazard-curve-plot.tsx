@@ -31,21 +31,37 @@ export function HazardCurvePlot(props: HazardCurvePlotProps) {
   const height = props.height ?? 380;
   const all = [curve.annualRate, ...(curve.branches ?? []).map((b) => b.annualRate)];
   const positive = all.flat().filter((r) => r > 0);
-  const maxRate = Math.max(...positive, 1 / Math.min(...props.returnPeriodsYears) * 10);
-  const minRate = Math.max(MIN_RATE, Math.min(...positive, ...props.returnPeriodsYears.map((t) => 1 / t / 10)));
+  const maxRate = Math.max(...positive, (1 / Math.min(...props.returnPeriodsYears)) * 10);
+  const minRate = Math.max(
+    MIN_RATE,
+    Math.min(...positive, ...props.returnPeriodsYears.map((t) => 1 / t / 10)),
+  );
   const levels = curve.levels;
-  const x = scaleLog().domain([levels[0] as number, levels[levels.length - 1] as number]).range([MARGIN.left, width - MARGIN.right]);
-  const y = scaleLog().domain([minRate, maxRate]).range([height - MARGIN.bottom, MARGIN.top]).nice();
+  const x = scaleLog()
+    .domain([levels[0] as number, levels[levels.length - 1] as number])
+    .range([MARGIN.left, width - MARGIN.right]);
+  const y = scaleLog()
+    .domain([minRate, maxRate])
+    .range([height - MARGIN.bottom, MARGIN.top])
+    .nice();
   const [yLow] = y.domain() as [number, number];
   const path = line<[number, number]>()
     .x((d) => x(d[0]))
     .y((d) => y(d[1]))
     .digits(1);
-  const pointsOf = (rates: readonly number[]) => levels.map((l, i) => [l, rates[i] as number] as [number, number]).filter((d) => d[1] >= yLow);
+  const pointsOf = (rates: readonly number[]) =>
+    levels.map((l, i) => [l, rates[i] as number] as [number, number]).filter((d) => d[1] >= yLow);
   const titleId = `${props.idPrefix}-title`;
   const descId = `${props.idPrefix}-desc`;
   return (
-    <svg class="plot" viewBox={`0 0 ${width} ${height}`} width={width} height={height} role="img" aria-labelledby={`${titleId} ${descId}`}>
+    <svg
+      class="plot"
+      viewBox={`0 0 ${width} ${height}`}
+      width={width}
+      height={height}
+      role="img"
+      aria-labelledby={`${titleId} ${descId}`}
+    >
       <title id={titleId} lang={tr.fallbackLang('community.curve')}>
         {tr.t('community.curve')}
       </title>
@@ -76,10 +92,22 @@ export function HazardCurvePlot(props: HazardCurvePlotProps) {
       />
       <g class="branches">
         {(curve.branches ?? []).map((b) => (
-          <path d={path(pointsOf(b.annualRate)) ?? ''} fill="none" stroke={MAP_COLOURS.branch} stroke-width={1.6} data-branch={b.label} />
+          <path
+            d={path(pointsOf(b.annualRate)) ?? ''}
+            fill="none"
+            stroke={MAP_COLOURS.branch}
+            stroke-width={1.6}
+            data-branch={b.label}
+          />
         ))}
       </g>
-      <path class="mean-curve" d={path(pointsOf(curve.annualRate)) ?? ''} fill="none" stroke={MAP_COLOURS.mean} stroke-width={2.2} />
+      <path
+        class="mean-curve"
+        d={path(pointsOf(curve.annualRate)) ?? ''}
+        fill="none"
+        stroke={MAP_COLOURS.mean}
+        stroke-width={2.2}
+      />
       <g class="return-periods">
         {props.returnPeriodsYears.map((years) => {
           const rate = 1 / years;
@@ -88,21 +116,61 @@ export function HazardCurvePlot(props: HazardCurvePlotProps) {
           const yy = y(rate);
           return (
             <g data-return-period={years}>
-              <line x1={MARGIN.left} x2={width - MARGIN.right} y1={yy} y2={yy} stroke={MAP_COLOURS.returnPeriod} stroke-width={1.2} stroke-dasharray="6 4" />
-              <text x={width - MARGIN.right - 4} y={yy - 5} text-anchor="end" font-size={12} fill={MAP_COLOURS.axis} paint-order="stroke" stroke={PAPER} stroke-width={3} lang={tr.fallbackLang('plot.returnPeriod')}>
+              <line
+                x1={MARGIN.left}
+                x2={width - MARGIN.right}
+                y1={yy}
+                y2={yy}
+                stroke={MAP_COLOURS.returnPeriod}
+                stroke-width={1.2}
+                stroke-dasharray="6 4"
+              />
+              <text
+                x={width - MARGIN.right - 4}
+                y={yy - 5}
+                text-anchor="end"
+                font-size={12}
+                fill={MAP_COLOURS.axis}
+                paint-order="stroke"
+                stroke={PAPER}
+                stroke-width={3}
+                lang={tr.fallbackLang('plot.returnPeriod')}
+              >
                 {tr.t('plot.returnPeriod', { years: tr.number(years) })}
               </text>
               {level != null && level >= (levels[0] as number) && (
                 <>
-                  <line x1={x(level)} x2={x(level)} y1={yy} y2={height - MARGIN.bottom} stroke={MAP_COLOURS.returnPeriod} stroke-width={1} stroke-dasharray="2 3" />
-                  <circle cx={x(level)} cy={yy} r={4.5} fill={PAPER} stroke={MAP_COLOURS.mean} stroke-width={2} />
+                  <line
+                    x1={x(level)}
+                    x2={x(level)}
+                    y1={yy}
+                    y2={height - MARGIN.bottom}
+                    stroke={MAP_COLOURS.returnPeriod}
+                    stroke-width={1}
+                    stroke-dasharray="2 3"
+                  />
+                  <circle
+                    cx={x(level)}
+                    cy={yy}
+                    r={4.5}
+                    fill={PAPER}
+                    stroke={MAP_COLOURS.mean}
+                    stroke-width={2}
+                  />
                 </>
               )}
             </g>
           );
         })}
       </g>
-      <rect x={MARGIN.left} y={MARGIN.top} width={width - MARGIN.left - MARGIN.right} height={height - MARGIN.top - MARGIN.bottom} fill="none" stroke={MAP_COLOURS.axis} />
+      <rect
+        x={MARGIN.left}
+        y={MARGIN.top}
+        width={width - MARGIN.left - MARGIN.right}
+        height={height - MARGIN.top - MARGIN.bottom}
+        fill="none"
+        stroke={MAP_COLOURS.axis}
+      />
     </svg>
   );
 }
@@ -111,7 +179,14 @@ export function HazardCurvePlot(props: HazardCurvePlotProps) {
 export function HazardCurveLegend(props: { readonly tr: Translator; readonly branches: number }) {
   const { tr } = props;
   const sample = (stroke: string, w: number, dash?: string) => (
-    <svg class="legend-symbol" viewBox="0 0 28 12" width="28" height="12" aria-hidden="true" focusable="false">
+    <svg
+      class="legend-symbol"
+      viewBox="0 0 28 12"
+      width="28"
+      height="12"
+      aria-hidden="true"
+      focusable="false"
+    >
       <line x1={1} y1={6} x2={27} y2={6} stroke={stroke} stroke-width={w} stroke-dasharray={dash} />
     </svg>
   );
@@ -122,9 +197,18 @@ export function HazardCurveLegend(props: { readonly tr: Translator; readonly bra
         {tr.text('plot.legend')}
       </span>
       <ul class="plot-legend" aria-labelledby="curve-legend-name">
-        <li>{sample(MAP_COLOURS.mean, 3)} {tr.text('plot.mean')}</li>
-        {props.branches > 0 && <li>{sample(MAP_COLOURS.branch, 1.5)} {tr.text('plot.branch', { n: tr.count(props.branches) })}</li>}
-        <li>{sample(MAP_COLOURS.returnPeriod, 1.2, '6 4')} {tr.text('plot.returnPeriodLegend')}</li>
+        <li>
+          {sample(MAP_COLOURS.mean, 3)} {tr.text('plot.mean')}
+        </li>
+        {props.branches > 0 && (
+          <li>
+            {sample(MAP_COLOURS.branch, 1.5)}{' '}
+            {tr.text('plot.branch', { n: tr.count(props.branches) })}
+          </li>
+        )}
+        <li>
+          {sample(MAP_COLOURS.returnPeriod, 1.2, '6 4')} {tr.text('plot.returnPeriodLegend')}
+        </li>
       </ul>
     </>
   );

@@ -29,7 +29,11 @@ export const POWER_LABELS_BELOW = 1e-3;
  * ticks): decimals (0.001, 0.02, 1, 10) when every tick is at least 0.001, else every tick as a
  * power of ten (10⁻⁵, 10⁻⁴, 2×10⁻⁴, 10⁰), so one axis never mixes 0.0001 with 10⁻⁵.
  */
-export function tickLabel(value: number, locale: string, axisTicks: readonly number[] = [value]): string {
+export function tickLabel(
+  value: number,
+  locale: string,
+  axisTicks: readonly number[] = [value],
+): string {
   if (axisTicks.some((t) => t < POWER_LABELS_BELOW)) {
     const power = Math.floor(Math.log10(value) + 1e-9);
     const mantissa = Math.round(value / 10 ** power);
@@ -38,8 +42,21 @@ export function tickLabel(value: number, locale: string, axisTicks: readonly num
   return new Intl.NumberFormat(locale, { maximumSignificantDigits: 2 }).format(value);
 }
 
-const SUPERSCRIPT: Readonly<Record<string, string>> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
-const superscript = (n: number): string => [...String(n)].map((ch) => SUPERSCRIPT[ch] ?? ch).join('');
+const SUPERSCRIPT: Readonly<Record<string, string>> = {
+  '-': '⁻',
+  '0': '⁰',
+  '1': '¹',
+  '2': '²',
+  '3': '³',
+  '4': '⁴',
+  '5': '⁵',
+  '6': '⁶',
+  '7': '⁷',
+  '8': '⁸',
+  '9': '⁹',
+};
+const superscript = (n: number): string =>
+  [...String(n)].map((ch) => SUPERSCRIPT[ch] ?? ch).join('');
 
 export interface AxisProps {
   readonly orientation: 'bottom' | 'left';
@@ -65,7 +82,14 @@ export function Axis(props: AxisProps) {
         const p = props.position(t);
         return bottom ? (
           <g>
-            <line x1={p} x2={p} y1={props.across[0]} y2={props.across[1]} stroke={MAP_COLOURS.grid} stroke-width={1} />
+            <line
+              x1={p}
+              x2={p}
+              y1={props.across[0]}
+              y2={props.across[1]}
+              stroke={MAP_COLOURS.grid}
+              stroke-width={1}
+            />
             <line x1={p} x2={p} y1={props.at} y2={props.at + 5} stroke={MAP_COLOURS.axis} />
             <text x={p} y={props.at + 18} text-anchor="middle">
               {props.label(t)}
@@ -73,7 +97,14 @@ export function Axis(props: AxisProps) {
           </g>
         ) : (
           <g>
-            <line y1={p} y2={p} x1={props.across[0]} x2={props.across[1]} stroke={MAP_COLOURS.grid} stroke-width={1} />
+            <line
+              y1={p}
+              y2={p}
+              x1={props.across[0]}
+              x2={props.across[1]}
+              stroke={MAP_COLOURS.grid}
+              stroke-width={1}
+            />
             <line y1={p} y2={p} x1={props.at - 5} x2={props.at} stroke={MAP_COLOURS.axis} />
             <text x={props.at - 8} y={p + 4} text-anchor="end">
               {props.label(t)}

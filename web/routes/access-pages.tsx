@@ -1,12 +1,21 @@
 import type { Context, Hono } from 'hono';
-import { ACCESS_MAX_AGE_S, ACCESS_PATH, LEAVE_PATH, endPageAccess, grantPageAccess, hasPageAccess, sameSecret } from '../../api/service/page-access.ts';
+import {
+  ACCESS_MAX_AGE_S,
+  ACCESS_PATH,
+  LEAVE_PATH,
+  endPageAccess,
+  grantPageAccess,
+  hasPageAccess,
+  sameSecret,
+} from '../../api/service/page-access.ts';
 import { AccessView, type AccessNotice, type AccessViewProps } from '../views/access-view.tsx';
 import { field, safeBackPath, type PageKit } from './page-kit.ts';
 
 const DAY_S = 24 * 3600;
 
 /** Where to go once access is given: the page asked for, else back to this page. */
-const backFrom = (asked: string | undefined): string => (asked === undefined || asked === '' ? ACCESS_PATH : safeBackPath(asked));
+const backFrom = (asked: string | undefined): string =>
+  asked === undefined || asked === '' ? ACCESS_PATH : safeBackPath(asked);
 
 /**
  * The access page (api/service/page-access.ts): with TREMORA_TOKEN set, a form to enter the
@@ -14,10 +23,24 @@ const backFrom = (asked: string | undefined): string => (asked === undefined || 
  * Without a token the page only says that none is needed.
  */
 export function accessPages(app: Hono, kit: PageKit, token: string | undefined): void {
-  const view = (c: Context, state: AccessViewProps['state'], notice: AccessNotice | undefined, back: string, status: 200 | 403 | 422 = 200) =>
+  const view = (
+    c: Context,
+    state: AccessViewProps['state'],
+    notice: AccessNotice | undefined,
+    back: string,
+    status: 200 | 403 | 422 = 200,
+  ) =>
     kit.render(
       c,
-      <AccessView tr={kit.tr(c)} path={kit.here(c)} toolVersion={kit.ctx.toolVersion} state={state} notice={notice} back={back} keptDays={ACCESS_MAX_AGE_S / DAY_S} />,
+      <AccessView
+        tr={kit.tr(c)}
+        path={kit.here(c)}
+        toolVersion={kit.ctx.toolVersion}
+        state={state}
+        notice={notice}
+        back={back}
+        keptDays={ACCESS_MAX_AGE_S / DAY_S}
+      />,
       status,
     );
 

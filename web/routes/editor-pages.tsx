@@ -1,7 +1,10 @@
 import type { Context, Hono } from 'hono';
 import type { InputIssue } from '../../api/engine/errors.ts';
 import type { Community } from '../../api/engine/model.ts';
-import { COMMUNITY_COLUMNS, type ColumnChoice } from '../../api/study/community-files/column-names.ts';
+import {
+  COMMUNITY_COLUMNS,
+  type ColumnChoice,
+} from '../../api/study/community-files/column-names.ts';
 import { applyCommunitiesFile, readCommunitiesFile } from '../data/community-import.ts';
 import { readStudy, type StudyData } from '../data/study-data.ts';
 import {
@@ -18,7 +21,17 @@ import { EditorView, type UploadProblem } from '../views/editor-view.tsx';
 import { MessageView } from '../views/message-view.tsx';
 import { field, fileField, type PageKit } from './page-kit.ts';
 
-const EMPTY_FORM: CommunityForm = { id: '', name: '', lon: '', lat: '', vs30: '', siteClass: '', population: '', elevationM: '', coastal: false };
+const EMPTY_FORM: CommunityForm = {
+  id: '',
+  name: '',
+  lon: '',
+  lat: '',
+  vs30: '',
+  siteClass: '',
+  population: '',
+  elevationM: '',
+  coastal: false,
+};
 
 const formOf = (c: Community): CommunityForm => ({
   id: c.id,
@@ -55,16 +68,38 @@ const postedForm = (form: Form): CommunityForm => ({
 export function editorPages(app: Hono, kit: PageKit): void {
   const { ctx } = kit;
 
-  const load = (c: Context): { data: StudyData & { ok: true } } | { response: Response | Promise<Response> } => {
+  const load = (
+    c: Context,
+  ): { data: StudyData & { ok: true } } | { response: Response | Promise<Response> } => {
     const tr = kit.tr(c);
     const id = c.req.param('id') as string;
     const data = readStudy(ctx, id);
-    if (!data) return { response: kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={tr.text('error.studyNotFound', { id })} />, 404) };
+    if (!data)
+      return {
+        response: kit.render(
+          c,
+          <MessageView
+            tr={tr}
+            path={kit.here(c)}
+            toolVersion={ctx.toolVersion}
+            title={tr.t('error.notFound')}
+            text={tr.text('error.studyNotFound', { id })}
+          />,
+          404,
+        ),
+      };
     if (!data.ok) {
       return {
         response: kit.render(
           c,
-          <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={data.record.name} text={tr.text('editor.otherProblems')} details={data.issues.map((i) => `${i.path}: ${i.message}`)} />,
+          <MessageView
+            tr={tr}
+            path={kit.here(c)}
+            toolVersion={ctx.toolVersion}
+            title={data.record.name}
+            text={tr.text('editor.otherProblems')}
+            details={data.issues.map((i) => `${i.path}: ${i.message}`)}
+          />,
           422,
         ),
       };
@@ -73,13 +108,20 @@ export function editorPages(app: Hono, kit: PageKit): void {
   };
 
   const write = (data: StudyData & { ok: true }, outcome: EditOutcome & { ok: true }) =>
-    ctx.store.studies.replace(data.record.id, { name: outcome.name, document: JSON.stringify(outcome.document, null, 2), ...(outcome.file ? { file: outcome.file } : {}) });
+    ctx.store.studies.replace(data.record.id, {
+      name: outcome.name,
+      document: JSON.stringify(outcome.document, null, 2),
+      ...(outcome.file ? { file: outcome.file } : {}),
+    });
 
   /**
    * Reads the study again once the posted body has arrived and runs `edit` on it in one
    * transaction with its write: a save made while the body was on its way is built upon, not lost.
    */
-  const afterBody = (c: Context, edit: (data: StudyData & { ok: true }) => Response | Promise<Response>): Response | Promise<Response> => {
+  const afterBody = (
+    c: Context,
+    edit: (data: StudyData & { ok: true }) => Response | Promise<Response>,
+  ): Response | Promise<Response> => {
     // A transaction's function may not return a promise (better-sqlite3), and a page rendered
     // asynchronously is one; the answer is kept aside and returned once the write is committed.
     let answer: Response | Promise<Response> | undefined;
@@ -90,23 +132,42 @@ export function editorPages(app: Hono, kit: PageKit): void {
     return answer as Response | Promise<Response>;
   };
 
-  const editor = (c: Context, data: StudyData & { ok: true }, extra: { problem?: UploadProblem; notice?: readonly InputIssue[] } = {}) => {
+  const editor = (
+    c: Context,
+    data: StudyData & { ok: true },
+    extra: { problem?: UploadProblem; notice?: readonly InputIssue[] } = {},
+  ) => {
     const saved = c.req.query('saved') === '1';
     return kit.render(
       c,
-      <EditorView tr={kit.tr(c)} path={kit.here(c)} toolVersion={ctx.toolVersion} studyId={data.record.id} study={data.study} saved={saved} {...extra} />,
+      <EditorView
+        tr={kit.tr(c)}
+        path={kit.here(c)}
+        toolVersion={ctx.toolVersion}
+        studyId={data.record.id}
+        study={data.study}
+        saved={saved}
+        {...extra}
+      />,
       extra.problem || extra.notice ? 422 : 200,
     );
   };
 
-  const communityForm = (c: Context, data: StudyData & { ok: true }, index: number | undefined, values: CommunityForm, issues: readonly InputIssue[]) => {
+  const communityForm = (
+    c: Context,
+    data: StudyData & { ok: true },
+    index: number | undefined,
+    values: CommunityForm,
+    issues: readonly InputIssue[],
+  ) => {
     const tr = kit.tr(c);
     const at = index ?? communityList(data.inputs, data.study.communities).length;
     const byField = new Map<string, InputIssue[]>();
     const others: InputIssue[] = [];
     for (const issue of issues) {
       const name = issueField(issue.path, at);
-      if (name && name !== '(row)' && name in EMPTY_FORM) byField.set(name, [...(byField.get(name) ?? []), issue]);
+      if (name && name !== '(row)' && name in EMPTY_FORM)
+        byField.set(name, [...(byField.get(name) ?? []), issue]);
       else others.push(issue);
     }
     const existing = index === undefined ? undefined : data.study.communities[index];
@@ -118,7 +179,11 @@ export function editorPages(app: Hono, kit: PageKit): void {
         toolVersion={ctx.toolVersion}
         studyId={data.record.id}
         studyName={data.study.name}
-        action={existing ? `/studies/${data.record.id}/edit/communities/${encodeURIComponent(existing.id)}` : `/studies/${data.record.id}/edit/new-community`}
+        action={
+          existing
+            ? `/studies/${data.record.id}/edit/communities/${encodeURIComponent(existing.id)}`
+            : `/studies/${data.record.id}/edit/new-community`
+        }
         editing={existing?.name}
         values={values}
         fieldIssues={byField}
@@ -128,7 +193,8 @@ export function editorPages(app: Hono, kit: PageKit): void {
     );
   };
 
-  const indexOf = (data: StudyData & { ok: true }, communityId: string) => data.study.communities.findIndex((x) => x.id === communityId);
+  const indexOf = (data: StudyData & { ok: true }, communityId: string) =>
+    data.study.communities.findIndex((x) => x.id === communityId);
 
   app.get('/studies/:id/edit', (c) => {
     const loaded = load(c);
@@ -137,7 +203,9 @@ export function editorPages(app: Hono, kit: PageKit): void {
 
   app.get('/studies/:id/edit/new-community', (c) => {
     const loaded = load(c);
-    return 'response' in loaded ? loaded.response : communityForm(c, loaded.data, undefined, EMPTY_FORM, []);
+    return 'response' in loaded
+      ? loaded.response
+      : communityForm(c, loaded.data, undefined, EMPTY_FORM, []);
   });
 
   app.post('/studies/:id/edit/new-community', async (c) => {
@@ -145,7 +213,13 @@ export function editorPages(app: Hono, kit: PageKit): void {
     if ('response' in loaded) return loaded.response;
     const values = postedForm(await c.req.parseBody());
     return afterBody(c, (data) => {
-      const outcome = saveCommunity(data.inputs, data.study.communities, values, undefined, ctx.models);
+      const outcome = saveCommunity(
+        data.inputs,
+        data.study.communities,
+        values,
+        undefined,
+        ctx.models,
+      );
       if (!outcome.ok) return communityForm(c, data, undefined, values, outcome.issues);
       write(data, outcome);
       return c.redirect(`/studies/${data.record.id}/edit?saved=1`, 303);
@@ -180,7 +254,12 @@ export function editorPages(app: Hono, kit: PageKit): void {
     if ('response' in loaded) return loaded.response;
     const index = indexOf(loaded.data, c.req.param('cid'));
     if (index < 0) return c.redirect(`/studies/${loaded.data.record.id}/edit`, 303);
-    const outcome = removeCommunity(loaded.data.inputs, loaded.data.study.communities, index, ctx.models);
+    const outcome = removeCommunity(
+      loaded.data.inputs,
+      loaded.data.study.communities,
+      index,
+      ctx.models,
+    );
     if (!outcome.ok) return editor(c, loaded.data, { notice: outcome.issues });
     write(loaded.data, outcome);
     return c.redirect(`/studies/${loaded.data.record.id}/edit?saved=1`, 303);
@@ -191,11 +270,18 @@ export function editorPages(app: Hono, kit: PageKit): void {
     if ('response' in loaded) return loaded.response;
     const tr = kit.tr(c);
     const file = fileField(await c.req.parseBody(), 'file');
-    if (!file) return editor(c, loaded.data, { problem: { upload: kind, issues: [{ path: '(file)', message: tr.t('editor.upload.noFile') }] } });
+    if (!file)
+      return editor(c, loaded.data, {
+        problem: {
+          upload: kind,
+          issues: [{ path: '(file)', message: tr.t('editor.upload.noFile') }],
+        },
+      });
     const text = await file.text();
     return afterBody(c, (data) => {
       const outcome = importSourcesGeoJson(data.inputs, text, ctx.models);
-      if (!outcome.ok) return editor(c, data, { problem: { upload: kind, issues: outcome.issues, text } });
+      if (!outcome.ok)
+        return editor(c, data, { problem: { upload: kind, issues: outcome.issues, text } });
       write(data, outcome);
       return c.redirect(`/studies/${data.record.id}/edit?saved=1`, 303);
     });
@@ -216,7 +302,13 @@ export function editorPages(app: Hono, kit: PageKit): void {
       : carried && carriedName
         ? { bytes: new Uint8Array(Buffer.from(carried, 'base64')), name: carriedName }
         : undefined;
-    if (!upload) return editor(c, loaded.data, { problem: { upload: 'communities', issues: [{ path: '(file)', message: tr.t('editor.upload.noFile') }] } });
+    if (!upload)
+      return editor(c, loaded.data, {
+        problem: {
+          upload: 'communities',
+          issues: [{ path: '(file)', message: tr.t('editor.upload.noFile') }],
+        },
+      });
     const choice: ColumnChoice = {};
     for (const key of COMMUNITY_COLUMNS) {
       const column = field(form, `column.${key}`);
@@ -226,7 +318,15 @@ export function editorPages(app: Hono, kit: PageKit): void {
     // Applied to the study as read after the file has arrived, in one transaction with the write.
     return afterBody(c, (data) => {
       const outcome = applyCommunitiesFile(data.inputs, read, ctx.models);
-      if (!outcome.ok) return editor(c, data, { problem: { upload: 'communities', issues: outcome.issues, ...(outcome.text !== undefined ? { text: outcome.text } : {}), ...(outcome.pick ? { pick: outcome.pick } : {}) } });
+      if (!outcome.ok)
+        return editor(c, data, {
+          problem: {
+            upload: 'communities',
+            issues: outcome.issues,
+            ...(outcome.text !== undefined ? { text: outcome.text } : {}),
+            ...(outcome.pick ? { pick: outcome.pick } : {}),
+          },
+        });
       write(data, outcome);
       return c.redirect(`/studies/${data.record.id}/edit?saved=1`, 303);
     });

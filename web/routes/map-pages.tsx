@@ -8,7 +8,10 @@ import { MessageView } from '../views/message-view.tsx';
 import { field, type PageKit } from './page-kit.ts';
 
 /** The overview rendered again with the hazard-map form's problems (study-pages.tsx). */
-export type OverviewWithMapForm = (c: Context, options: { readonly mapForm: MapFormState }) => Response | Promise<Response>;
+export type OverviewWithMapForm = (
+  c: Context,
+  options: { readonly mapForm: MapFormState },
+) => Response | Promise<Response>;
 
 /** A form number as the request wants it: a number when it reads as one ("12,5" too), else the text, for the message to quote. */
 function formNumber(text: string): number | string {
@@ -27,7 +30,17 @@ export function mapPages(app: Hono, kit: PageKit, overview: OverviewWithMapForm)
 
   const notFound = (c: Context) => {
     const tr = kit.tr(c);
-    return kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={tr.text('error.studyNotFound', { id: c.req.param('id') ?? '' })} />, 404);
+    return kit.render(
+      c,
+      <MessageView
+        tr={tr}
+        path={kit.here(c)}
+        toolVersion={ctx.toolVersion}
+        title={tr.t('error.notFound')}
+        text={tr.text('error.studyNotFound', { id: c.req.param('id') ?? '' })}
+      />,
+      404,
+    );
   };
 
   app.post('/studies/:id/maps', async (c) => {
@@ -35,16 +48,28 @@ export function mapPages(app: Hono, kit: PageKit, overview: OverviewWithMapForm)
     const record = ctx.store.studies.get(id);
     if (!record) return notFound(c);
     const form = await c.req.parseBody();
-    const sent = { measure: field(form, 'measure') ?? '', returnPeriodYears: field(form, 'returnPeriodYears') ?? '', spacingKm: field(form, 'spacingKm') ?? '' };
+    const sent = {
+      measure: field(form, 'measure') ?? '',
+      returnPeriodYears: field(form, 'returnPeriodYears') ?? '',
+      spacingKm: field(form, 'spacingKm') ?? '',
+    };
     try {
-      const request = readMapRequest({ measure: sent.measure, returnPeriodYears: formNumber(sent.returnPeriodYears), spacingKm: formNumber(sent.spacingKm) });
+      const request = readMapRequest({
+        measure: sent.measure,
+        returnPeriodYears: formNumber(sent.returnPeriodYears),
+        spacingKm: formNumber(sent.spacingKm),
+      });
       const run = await startMapRun(ctx, record, request);
       if (!run) return notFound(c);
       return c.redirect(`/studies/${id}/maps/${run.id}`, 303);
     } catch (error) {
-      if (error instanceof InvalidInput) return overview(c, { mapForm: { ...sent, issues: error.issues } });
+      if (error instanceof InvalidInput)
+        return overview(c, { mapForm: { ...sent, issues: error.issues } });
       // Over the work budget, too many points, a model without the measure: said beside the form.
-      if (error instanceof TremoraError) return overview(c, { mapForm: { ...sent, issues: [{ path: '(map)', message: error.message }] } });
+      if (error instanceof TremoraError)
+        return overview(c, {
+          mapForm: { ...sent, issues: [{ path: '(map)', message: error.message }] },
+        });
       throw error;
     }
   });
@@ -55,8 +80,28 @@ export function mapPages(app: Hono, kit: PageKit, overview: OverviewWithMapForm)
     const record = ctx.store.studies.get(id);
     const run = ctx.store.maps.get(c.req.param('mapId'));
     if (!record || !run || run.studyId !== id) {
-      return kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={tr.text('error.notFoundText')} />, 404);
+      return kit.render(
+        c,
+        <MessageView
+          tr={tr}
+          path={kit.here(c)}
+          toolVersion={ctx.toolVersion}
+          title={tr.t('error.notFound')}
+          text={tr.text('error.notFoundText')}
+        />,
+        404,
+      );
     }
-    return kit.render(c, <MapRunView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} studyId={id} studyName={record.name} run={run} />);
+    return kit.render(
+      c,
+      <MapRunView
+        tr={tr}
+        path={kit.here(c)}
+        toolVersion={ctx.toolVersion}
+        studyId={id}
+        studyName={record.name}
+        run={run}
+      />,
+    );
   });
 }

@@ -5,7 +5,13 @@ import type { Child } from 'hono/jsx';
 import type { ContentfulStatusCode } from 'hono/utils/http-status';
 import type { ServiceContext } from '../../api/operations/service-context.ts';
 import { ResultsCache } from '../data/study-data.ts';
-import { DEFAULT_LANGUAGE, isLanguage, translator, type LanguageCode, type Translator } from '../text/translator.ts';
+import {
+  DEFAULT_LANGUAGE,
+  isLanguage,
+  translator,
+  type LanguageCode,
+  type Translator,
+} from '../text/translator.ts';
 
 /**
  * The language of a request: `?lang=` for this request, else the cookie the language switch
@@ -55,7 +61,8 @@ const THIS_ORIGIN = 'http://this-origin.invalid';
  * always a valid Location header.
  */
 export function safeBackPath(back: string | undefined): string {
-  if (back === undefined || !back.startsWith('/') || /[\u0000-\u001f\u007f\\]/.test(back)) return '/';
+  if (back === undefined || !back.startsWith('/') || /[\u0000-\u001f\u007f\\]/.test(back))
+    return '/';
   let url: URL;
   try {
     url = new URL(back, THIS_ORIGIN);
@@ -67,13 +74,19 @@ export function safeBackPath(back: string | undefined): string {
 }
 
 /** A form field as text (multipart or urlencoded); files and absent fields are undefined. */
-export function field(form: Record<string, string | File | (string | File)[]>, name: string): string | undefined {
+export function field(
+  form: Record<string, string | File | (string | File)[]>,
+  name: string,
+): string | undefined {
   const value = form[name];
   return typeof value === 'string' ? value : undefined;
 }
 
 /** A form's file field, when a non-empty file was sent. */
-export function fileField(form: Record<string, string | File | (string | File)[]>, name: string): File | undefined {
+export function fileField(
+  form: Record<string, string | File | (string | File)[]>,
+  name: string,
+): File | undefined {
   const value = form[name];
   return value instanceof File && value.size > 0 ? value : undefined;
 }

@@ -18,7 +18,10 @@ const GRID_CELLS_ACROSS = 64;
 export function scenarioSpacingKm(study: Study): number {
   const frame = mapFrame(study, OVERVIEW_MAP);
   const points = studyPoints(study).map((p) => frame.local.toLocal(p));
-  const span = Math.max(Math.max(...points.map((p) => p.x)) - Math.min(...points.map((p) => p.x)), Math.max(...points.map((p) => p.y)) - Math.min(...points.map((p) => p.y)));
+  const span = Math.max(
+    Math.max(...points.map((p) => p.x)) - Math.min(...points.map((p) => p.x)),
+    Math.max(...points.map((p) => p.y)) - Math.min(...points.map((p) => p.y)),
+  );
   // The engine's grid adds a 10 km margin on each side (scenario-grid.ts).
   return Math.max(1, Math.round(((span + 20) / GRID_CELLS_ACROSS) * 2) / 2);
 }
@@ -44,34 +47,59 @@ export function scenarioPages(app: Hono, kit: PageKit): void {
     const id = c.req.param('id') as string;
     const data = readStudy(ctx, id);
     if (!data || !data.ok) {
-      return kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={tr.text('error.studyNotFound', { id })} />, 404);
+      return kit.render(
+        c,
+        <MessageView
+          tr={tr}
+          path={kit.here(c)}
+          toolVersion={ctx.toolVersion}
+          title={tr.t('error.notFound')}
+          text={tr.text('error.studyNotFound', { id })}
+        />,
+        404,
+      );
     }
     const { study } = data;
     const first = study.sources[0];
     const asked = c.req.query('sourceId');
-    const sourceId = form?.sourceId ?? (study.sources.some((s) => s.id === asked) ? (asked as string) : (first?.id ?? ''));
-    const magnitude = form?.magnitude ?? String(defaultMagnitude(study.sources.find((s) => s.id === sourceId)));
+    const sourceId =
+      form?.sourceId ??
+      (study.sources.some((s) => s.id === asked) ? (asked as string) : (first?.id ?? ''));
+    const magnitude =
+      form?.magnitude ?? String(defaultMagnitude(study.sources.find((s) => s.id === sourceId)));
     let issues: InputIssue[] = [];
     let result: ScenarioResult | undefined;
     let tsunami: TsunamiPageResult | undefined;
     if (form) {
-      const magnitudeValue = form.magnitude.trim() === '' ? undefined : Number(form.magnitude.replace(',', '.'));
+      const magnitudeValue =
+        form.magnitude.trim() === '' ? undefined : Number(form.magnitude.replace(',', '.'));
       try {
-        const request = readScenarioRequest({ sourceId: form.sourceId, magnitude: magnitudeValue ?? form.magnitude, gridSpacingKm: scenarioSpacingKm(study) });
+        const request = readScenarioRequest({
+          sourceId: form.sourceId,
+          magnitude: magnitudeValue ?? form.magnitude,
+          gridSpacingKm: scenarioSpacingKm(study),
+        });
         if (!study.sources.some((s) => s.id === request.sourceId)) {
           issues = [{ path: 'sourceId', message: `unknown source "${request.sourceId}"` }];
         } else {
-          const { resultJson } = await ctx.quickPool.run({ kind: 'scenario', study, request }).result;
+          const { resultJson } = await ctx.quickPool.run({ kind: 'scenario', study, request })
+            .result;
           result = JSON.parse(resultJson) as ScenarioResult;
           tsunami = await scenarioTsunamiTimes(ctx, study, request);
         }
       } catch (error) {
         if (error instanceof InvalidInput) issues = [...error.issues];
-        else if (error instanceof StudyTooLarge) issues = [{ path: '(scenario)', message: error.message }];
+        else if (error instanceof StudyTooLarge)
+          issues = [{ path: '(scenario)', message: error.message }];
         else throw error;
       }
     }
-    const corners = result?.grid ? [[result.grid.lon[0], result.grid.lat[0]] as const, [result.grid.lon.at(-1), result.grid.lat.at(-1)] as const] : [];
+    const corners = result?.grid
+      ? [
+          [result.grid.lon[0], result.grid.lat[0]] as const,
+          [result.grid.lon.at(-1), result.grid.lat.at(-1)] as const,
+        ]
+      : [];
     return kit.render(
       c,
       <ScenarioView
@@ -84,7 +112,16 @@ export function scenarioPages(app: Hono, kit: PageKit): void {
         magnitude={magnitude}
         issues={issues}
         {...(tsunami ? { tsunami } : {})}
-        {...(result ? { result, frame: mapFrame(study, { ...OVERVIEW_MAP, fit: 'communities', include: corners as [number, number][] }) } : {})}
+        {...(result
+          ? {
+              result,
+              frame: mapFrame(study, {
+                ...OVERVIEW_MAP,
+                fit: 'communities',
+                include: corners as [number, number][],
+              }),
+            }
+          : {})}
       />,
       issues.length > 0 ? 422 : 200,
     );
@@ -93,6 +130,9 @@ export function scenarioPages(app: Hono, kit: PageKit): void {
   app.get('/studies/:id/scenario', (c) => page(c));
   app.post('/studies/:id/scenario', async (c) => {
     const form = await c.req.parseBody();
-    return page(c, { sourceId: field(form, 'sourceId') ?? '', magnitude: field(form, 'magnitude') ?? '' });
+    return page(c, {
+      sourceId: field(form, 'sourceId') ?? '',
+      magnitude: field(form, 'magnitude') ?? '',
+    });
   });
 }

@@ -15,7 +15,13 @@ export function staticFiles(app: Hono): void {
   const handoutCss = read('handout.css');
   const cache = { 'Cache-Control': 'no-cache' };
 
-  app.get('/static/tremora.css', (c) => c.body(css, 200, { 'Content-Type': 'text/css; charset=utf-8', ...cache }));
-  app.get('/static/tremora.js', (c) => c.body(script, 200, { 'Content-Type': 'text/javascript; charset=utf-8', ...cache }));
-  app.get('/static/handout.css', (c) => c.body(handoutCss, 200, { 'Content-Type': 'text/css; charset=utf-8', ...cache }));
+  app.get('/static/tremora.css', (c) =>
+    c.body(css, 200, { 'Content-Type': 'text/css; charset=utf-8', ...cache }),
+  );
+  app.get('/static/tremora.js', (c) =>
+    c.body(script, 200, { 'Content-Type': 'text/javascript; charset=utf-8', ...cache }),
+  );
+  app.get('/static/handout.css', (c) =>
+    c.body(handoutCss, 200, { 'Content-Type': 'text/css; charset=utf-8', ...cache }),
+  );
 }

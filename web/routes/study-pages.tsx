@@ -5,7 +5,14 @@ import { runStudy } from '../../api/operations/study-input.ts';
 import { communityPageData } from '../data/community-data.ts';
 import { MapLayerCache, readMaps } from '../data/map-data.ts';
 import { suggestedMapSpacing } from '../data/map-spacing.ts';
-import { FIRST_DIRECTION, isSortKey, leadHorizonYears, rankCommunities, sortRanked, type SortDirection } from '../data/ranking.ts';
+import {
+  FIRST_DIRECTION,
+  isSortKey,
+  leadHorizonYears,
+  rankCommunities,
+  sortRanked,
+  type SortDirection,
+} from '../data/ranking.ts';
 import { feltData, studyCatalog } from '../data/study-catalog.ts';
 import { rankByTimeToAct, studyTsunami } from '../data/tsunami-data.ts';
 import { startScreening } from '../data/start-screening.ts';
@@ -22,7 +29,12 @@ import type { PageKit } from './page-kit.ts';
 
 /** Map sizes, px: the overview's map and the community page's smaller one. */
 export const OVERVIEW_MAP = { width: 760, maxHeight: 620, padding: 28 } as const;
-export const COMMUNITY_MAP = { width: 560, maxHeight: 460, padding: 30, fit: 'communities' } as const;
+export const COMMUNITY_MAP = {
+  width: 560,
+  maxHeight: 460,
+  padding: 30,
+  fit: 'communities',
+} as const;
 
 /** What the overview shows again after a form post with problems. */
 interface OverviewAgain {
@@ -38,13 +50,30 @@ export function studyPages(app: Hono, kit: PageKit): void {
 
   const notFound = (c: Context, text: Child) => {
     const tr = kit.tr(c);
-    return kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={tr.t('error.notFound')} text={text} />, 404);
+    return kit.render(
+      c,
+      <MessageView
+        tr={tr}
+        path={kit.here(c)}
+        toolVersion={ctx.toolVersion}
+        title={tr.t('error.notFound')}
+        text={text}
+      />,
+      404,
+    );
   };
   const invalid = (c: Context, data: StudyData & { ok: false }) => {
     const tr = kit.tr(c);
     return kit.render(
       c,
-      <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={data.record.name} text={tr.text('editor.otherProblems')} details={data.issues.map((i) => `${i.path}: ${i.message}`)} />,
+      <MessageView
+        tr={tr}
+        path={kit.here(c)}
+        toolVersion={ctx.toolVersion}
+        title={data.record.name}
+        text={tr.text('editor.otherProblems')}
+        details={data.issues.map((i) => `${i.path}: ${i.message}`)}
+      />,
       422,
     );
   };
@@ -60,8 +89,11 @@ export function studyPages(app: Hono, kit: PageKit): void {
     const askedSort = c.req.query('sort');
     const sort = isSortKey(askedSort) ? askedSort : 'rank';
     const askedDir = c.req.query('dir');
-    const direction: SortDirection = askedDir === 'ascending' || askedDir === 'descending' ? askedDir : FIRST_DIRECTION[sort];
-    const rows = runs.screening ? sortRanked(rankCommunities(data.study, runs.screening.results), sort, direction) : undefined;
+    const direction: SortDirection =
+      askedDir === 'ascending' || askedDir === 'descending' ? askedDir : FIRST_DIRECTION[sort];
+    const rows = runs.screening
+      ? sortRanked(rankCommunities(data.study, runs.screening.results), sort, direction)
+      : undefined;
     const tsunami = await studyTsunami(ctx, data.study);
     return kit.render(
       c,
@@ -81,7 +113,14 @@ export function studyPages(app: Hono, kit: PageKit): void {
         maps={readMaps(ctx, layers, id, data.hash)}
         mapSpacing={suggestedMapSpacing(data.study)}
         {...(mapForm ? { mapForm } : {})}
-        {...(tsunami ? { tsunami: { times: tsunami, ranked: tsunami.ok ? rankByTimeToAct(tsunami.result) : [] } } : {})}
+        {...(tsunami
+          ? {
+              tsunami: {
+                times: tsunami,
+                ranked: tsunami.ok ? rankByTimeToAct(tsunami.result) : [],
+              },
+            }
+          : {})}
       />,
       problem || mapForm ? 422 : 200,
     );
@@ -99,8 +138,12 @@ export function studyPages(app: Hono, kit: PageKit): void {
       if (!run) return notFound(c, kit.tr(c).text('error.studyNotFound', { id }));
       return c.redirect(`/studies/${id}/runs/${run.id}`, 303);
     } catch (error) {
-      if (error instanceof InvalidInput) return overview(c, { problem: error.issues.map((i) => `${i.path}: ${i.message}`).join('; ') });
-      if (error instanceof StudyTooLarge || error instanceof TremoraError) return overview(c, { problem: error.message });
+      if (error instanceof InvalidInput)
+        return overview(c, {
+          problem: error.issues.map((i) => `${i.path}: ${i.message}`).join('; '),
+        });
+      if (error instanceof StudyTooLarge || error instanceof TremoraError)
+        return overview(c, { problem: error.message });
       throw error;
     }
   });
@@ -111,7 +154,17 @@ export function studyPages(app: Hono, kit: PageKit): void {
     const record = ctx.store.studies.get(id);
     const run = ctx.store.runs.get(c.req.param('runId'));
     if (!record || !run || run.studyId !== id) return notFound(c, tr.text('error.notFoundText'));
-    return kit.render(c, <RunView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} studyId={id} studyName={record.name} run={run} />);
+    return kit.render(
+      c,
+      <RunView
+        tr={tr}
+        path={kit.here(c)}
+        toolVersion={ctx.toolVersion}
+        studyId={id}
+        studyName={record.name}
+        run={run}
+      />,
+    );
   });
 
   /** A community of a study's newest done run, with everything its page and handout need. */
@@ -120,7 +173,11 @@ export function studyPages(app: Hono, kit: PageKit): void {
     const id = c.req.param('id') as string;
     const communityId = c.req.param('cid') as string;
     const data = readStudy(ctx, id);
-    if (!data) return { kind: 'response' as const, response: notFound(c, tr.text('error.studyNotFound', { id })) };
+    if (!data)
+      return {
+        kind: 'response' as const,
+        response: notFound(c, tr.text('error.studyNotFound', { id })),
+      };
     if (!data.ok) return { kind: 'response' as const, response: invalid(c, data) };
     const runs = readRuns(ctx, kit.results, id, data.hash);
     const screening = runs.screening;
@@ -128,25 +185,46 @@ export function studyPages(app: Hono, kit: PageKit): void {
     // The run's own inputs say where the community was when it was screened.
     const runInputs = screening ? ctx.store.runs.inputs(screening.run.id) : undefined;
     const ranStudy = runInputs ? runStudy(runInputs, ctx.models).study : undefined;
-    const community = ranStudy?.communities.find((x) => x.id === communityId) ?? data.study.communities.find((x) => x.id === communityId);
-    if (!community) return { kind: 'response' as const, response: notFound(c, tr.text('error.communityNotFound', { id: communityId })) };
+    const community =
+      ranStudy?.communities.find((x) => x.id === communityId) ??
+      data.study.communities.find((x) => x.id === communityId);
+    if (!community)
+      return {
+        kind: 'response' as const,
+        response: notFound(c, tr.text('error.communityNotFound', { id: communityId })),
+      };
     if (!screening || !result || !ranStudy) {
       const latest = runs.latest;
-      const underWay = latest !== undefined && (latest.status === 'queued' || latest.status === 'running');
+      const underWay =
+        latest !== undefined && (latest.status === 'queued' || latest.status === 'running');
       const text = underWay ? (
         <>
-          {tr.text('community.runUnderWay', { percent: Math.round(latest.progress * 100) })} <a href={`/studies/${id}/runs/${latest.id}`}>{tr.text('overview.runningLink')}</a>
+          {tr.text('community.runUnderWay', { percent: Math.round(latest.progress * 100) })}{' '}
+          <a href={`/studies/${id}/runs/${latest.id}`}>{tr.text('overview.runningLink')}</a>
         </>
       ) : (
         tr.text('community.noRun')
       );
       return {
         kind: 'response' as const,
-        response: kit.render(c, <MessageView tr={tr} path={kit.here(c)} toolVersion={ctx.toolVersion} title={community.name} text={text} />, 409),
+        response: kit.render(
+          c,
+          <MessageView
+            tr={tr}
+            path={kit.here(c)}
+            toolVersion={ctx.toolVersion}
+            title={community.name}
+            text={text}
+          />,
+          409,
+        ),
       };
     }
     const felt = feltData(ctx, ranStudy, studyCatalog(ctx, id));
-    const history = felt?.kind === 'history' ? felt.history.communities.find((h) => h.communityId === communityId) : undefined;
+    const history =
+      felt?.kind === 'history'
+        ? felt.history.communities.find((h) => h.communityId === communityId)
+        : undefined;
     return {
       kind: 'page' as const,
       tr,
@@ -154,7 +232,9 @@ export function studyPages(app: Hono, kit: PageKit): void {
       study: ranStudy,
       screening,
       page: communityPageData(ranStudy, community, result),
-      ...(felt?.kind === 'history' && history ? { felt: { history, eventCount: felt.history.eventCount } } : {}),
+      ...(felt?.kind === 'history' && history
+        ? { felt: { history, eventCount: felt.history.eventCount } }
+        : {}),
       feltTooMany: felt?.kind === 'too-many',
     };
   };

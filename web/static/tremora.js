@@ -35,7 +35,11 @@
       const key = link.getAttribute('data-sort');
       const th = link.closest('th');
       const current = th.getAttribute('aria-sort');
-      const direction = current ? (current === 'ascending' ? 'descending' : 'ascending') : link.getAttribute('data-first');
+      const direction = current
+        ? current === 'ascending'
+          ? 'descending'
+          : 'ascending'
+        : link.getAttribute('data-first');
       for (const other of table.querySelectorAll('thead th')) {
         other.removeAttribute('aria-sort');
         const state = other.querySelector('.sort-state');
@@ -43,7 +47,8 @@
       }
       th.setAttribute('aria-sort', direction);
       const state = th.querySelector('.sort-state');
-      if (state) state.textContent = ` (${table.getAttribute(`data-label-${direction}`) || direction})`;
+      if (state)
+        state.textContent = ` (${table.getAttribute(`data-label-${direction}`) || direction})`;
       sortTable(table, key, direction);
       const url = new URL(window.location.href);
       url.searchParams.set('sort', key);
@@ -88,14 +93,20 @@
     const button = document.createElement('button');
     button.type = 'button';
     button.className = 'button-primary';
-    button.textContent = slot.closest('[data-print-label]')?.getAttribute('data-print-label') || document.documentElement.getAttribute('data-print-label') || 'Print';
+    button.textContent =
+      slot.closest('[data-print-label]')?.getAttribute('data-print-label') ||
+      document.documentElement.getAttribute('data-print-label') ||
+      'Print';
     button.addEventListener('click', () => window.print());
     slot.appendChild(button);
   }
 
   document.addEventListener('DOMContentLoaded', () => {
-    for (const table of document.querySelectorAll('table[data-sortable="true"]')) enhanceSorting(table);
-    const box = document.querySelector('.run-status[data-status="queued"], .run-status[data-status="running"]');
+    for (const table of document.querySelectorAll('table[data-sortable="true"]'))
+      enhanceSorting(table);
+    const box = document.querySelector(
+      '.run-status[data-status="queued"], .run-status[data-status="running"]',
+    );
     if (box) followRun(box);
     for (const slot of document.querySelectorAll('[data-print-button]')) addPrintButton(slot);
   });

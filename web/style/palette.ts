@@ -11,7 +11,15 @@ import type { ScreeningBandId } from '../../api/engine/intensity/screening-band.
  * all four views. Meaning never rests on colour alone: bands also carry a shape and their
  * name, maps a legend in words, intensities their Roman numerals.
  */
-export const DUSK = ['#fef5eb', '#eac8e0', '#c8a1d1', '#9b7fc3', '#6661aa', '#344584', '#12294e'] as const;
+export const DUSK = [
+  '#fef5eb',
+  '#eac8e0',
+  '#c8a1d1',
+  '#9b7fc3',
+  '#6661aa',
+  '#344584',
+  '#12294e',
+] as const;
 
 /** Text on the scale: dark ink on the light steps, paper on the dark ones (contrast above 4.5:1). */
 export const INK = '#1b1a2b';
@@ -70,8 +78,10 @@ export const MAP_COLOURS = {
 /** The palette as CSS custom properties, served at the top of the style sheet. */
 export function paletteCss(): string {
   const lines = DUSK.map((c, i) => `  --dusk-${i}: ${c};`);
-  for (const [id, style] of Object.entries(BAND_STYLES)) lines.push(`  --band-${id}: ${style.fill};`, `  --band-${id}-text: ${style.text};`);
-  for (const [name, colour] of Object.entries(MAP_COLOURS)) lines.push(`  --map-${name.replace(/[A-Z]/g, (m) => `-${m.toLowerCase()}`)}: ${colour};`);
+  for (const [id, style] of Object.entries(BAND_STYLES))
+    lines.push(`  --band-${id}: ${style.fill};`, `  --band-${id}-text: ${style.text};`);
+  for (const [name, colour] of Object.entries(MAP_COLOURS))
+    lines.push(`  --map-${name.replace(/[A-Z]/g, (m) => `-${m.toLowerCase()}`)}: ${colour};`);
   lines.push(`  --ink: ${INK};`, `  --paper: ${PAPER};`);
   return `:root {\n${lines.join('\n')}\n}\n`;
 }

@@ -26,7 +26,8 @@ export const EN = {
   'caution.title': 'A screening, not a design value',
   'caution.text':
     'These numbers are a screening estimate. They are not a design value. Do not use them to design, repair, approve or insure a building. Building codes and licensed engineers decide.',
-  'caution.short': 'Screening estimate, not a design value. Building codes and licensed engineers decide.',
+  'caution.short':
+    'Screening estimate, not a design value. Building codes and licensed engineers decide.',
   'caution.limitsLink': 'Read the limits of a screening',
 
   'chance.oneIn': 'about 1 in {n}',
@@ -54,11 +55,13 @@ export const EN = {
   'band.refer-soon': 'Refer soon',
   'band.prepare': 'Prepare and inform',
   'band.inform': 'Inform',
-  'band.refer-first.meaning': 'Ask for a professional check of key buildings here before other places.',
+  'band.refer-first.meaning':
+    'Ask for a professional check of key buildings here before other places.',
   'band.refer-soon.meaning': 'Plan a professional check of key buildings in the next round.',
   'band.prepare.meaning': 'Help people get ready and share what to do.',
   'band.inform.meaning': 'Share the basic advice on what to do.',
-  'band.rule': 'The band comes from the shaking with a 1 in 10 chance over 50 years: Refer first at MMI VIII or more, Refer soon at VII, Prepare and inform at VI, Inform below VI.',
+  'band.rule':
+    'The band comes from the shaking with a 1 in 10 chance over 50 years: Refer first at MMI VIII or more, Refer soon at VII, Prepare and inform at VI, Inform below VI.',
 
   'mmi.label': 'MMI {roman}',
   'mmi.almost': 'MMI {roman}, almost {next}',
@@ -79,19 +82,24 @@ export const EN = {
   'mmi.4.buildings': 'Plates, windows and doors rattle. Walls creak. There is no harm.',
   'mmi.5.name': 'Jolting',
   'mmi.5.feel': 'Nearly all people feel it. Most wake up. Some are scared.',
-  'mmi.5.buildings': 'Small things tip over and fall. Some plates and windows break. Plaster may crack.',
+  'mmi.5.buildings':
+    'Small things tip over and fall. Some plates and windows break. Plaster may crack.',
   'mmi.6.name': 'Frightening',
   'mmi.6.feel': 'All people feel it. Many are scared and run outside. It is hard to walk.',
-  'mmi.6.buildings': 'Heavy furniture moves. Things fall off shelves. Weak plaster and chimneys crack. Good houses get small cracks.',
+  'mmi.6.buildings':
+    'Heavy furniture moves. Things fall off shelves. Weak plaster and chimneys crack. Good houses get small cracks.',
   'mmi.7.name': 'Damaging',
   'mmi.7.feel': 'It is hard to stand. People driving cars feel it.',
-  'mmi.7.buildings': 'Weak buildings are badly hurt. Ordinary houses crack. Chimneys and loose bricks fall. Well-built houses have little harm.',
+  'mmi.7.buildings':
+    'Weak buildings are badly hurt. Ordinary houses crack. Chimneys and loose bricks fall. Well-built houses have little harm.',
   'mmi.8.name': 'Heavily damaging',
   'mmi.8.feel': 'It is very hard to stand or walk. People lose their balance.',
-  'mmi.8.buildings': 'Ordinary houses are badly hurt. Some fall down. Chimneys, walls and water tanks fall. Strong buildings have some harm.',
+  'mmi.8.buildings':
+    'Ordinary houses are badly hurt. Some fall down. Chimneys, walls and water tanks fall. Strong buildings have some harm.',
   'mmi.9.name': 'Destructive',
   'mmi.9.feel': 'People are thrown down. It is hard to move at all.',
-  'mmi.9.buildings': 'Many strong buildings are badly hurt. Houses slide off their base. Pipes in the ground break.',
+  'mmi.9.buildings':
+    'Many strong buildings are badly hurt. Houses slide off their base. Pipes in the ground break.',
   'mmi.10.name': 'Devastating',
   'mmi.10.feel': 'The shaking is violent. Nothing stays up.',
   'mmi.10.buildings': 'Most buildings fall, even many strong ones. The ground cracks open.',
@@ -99,7 +107,8 @@ export const EN = {
   'home.title': 'Studies',
   'home.intro':
     'Tremora shows how strongly the ground could shake in small places, and how likely that is. It helps you plan talks with residents and pick the places to check first.',
-  'home.start': 'Open a study to see its map and the ranking of its communities. The demo coast is an invented place to try things out.',
+  'home.start':
+    'Open a study to see its map and the ranking of its communities. The demo coast is an invented place to try things out.',
   'home.caption': 'Saved studies',
   'home.col.name': 'Study',
   'home.col.updated': 'Last changed',
@@ -109,14 +118,16 @@ export const EN = {
   'overview.notScreened': 'This study has not been screened yet.',
   'overview.screenButton': 'Screen this study',
   'overview.screenAgain': 'Screen again',
-  'overview.stale': 'The study has changed since its last screening. Screen it again to bring the numbers up to date.',
+  'overview.stale':
+    'The study has changed since its last screening. Screen it again to bring the numbers up to date.',
   'overview.running': 'A screening is under way: {percent}% done.',
   'overview.runningLink': 'Follow the screening',
   'overview.screenedOn': 'Screened on {date}.',
   'overview.lastFailed': 'The last screening did not finish: {error}',
   'overview.map': 'Map of the study',
   'overview.ranking': 'Communities ranked for outreach and referral',
-  'overview.rankingRule': 'Ranked by screening band first, then by the chance of strong shaking in {years} years, then by the number of people.',
+  'overview.rankingRule':
+    'Ranked by screening band first, then by the chance of strong shaking in {years} years, then by the number of people.',
   'overview.col.rank': 'Rank',
   'overview.col.community': 'Community',
   'overview.col.band': 'Screening band',
@@ -145,13 +156,16 @@ export const EN = {
   'run.back': 'Back to the overview',
 
   'community.title': '{name}',
-  'community.headline': 'The chance of strong shaking (MMI VII or more) at {name} is {chance} over the next {years} years ({percent}).',
-  'community.headlineStrongWhat': 'Shaking this strong makes it hard to stand and badly harms weak buildings.',
+  'community.headline':
+    'The chance of strong shaking (MMI VII or more) at {name} is {chance} over the next {years} years ({percent}).',
+  'community.headlineStrongWhat':
+    'Shaking this strong makes it hard to stand and badly harms weak buildings.',
   'community.otherChances': 'Other levels over the next {years} years',
   'community.chanceOf': 'MMI {roman} or more: {frequency} ({percent})',
   'community.bound': 'This is a bound: the level is outside the computed curve.',
   'community.levels': 'What the shaking could be like',
-  'community.levelIntro': 'Each level below is reached on average once in the number of years shown. The rarer levels are the stronger ones.',
+  'community.levelIntro':
+    'Each level below is reached on average once in the number of years shown. The rarer levels are the stronger ones.',
   'community.level': 'Shaking reached on average once in {period} years',
   'community.levelChance': '{frequency} over {years} years ({percent})',
   'community.levelMmi': '{mmi}: {name}',
@@ -162,7 +176,8 @@ export const EN = {
   'community.sources': 'Where the shaking would come from',
   'community.sourcesIntro': 'Share of the {period}-year shaking that comes from each source.',
   'community.sourcesOther': 'Other sources',
-  'community.sourcesMean': 'On average, the earthquakes behind this shaking are of magnitude {magnitude} and about {km} km away.',
+  'community.sourcesMean':
+    'On average, the earthquakes behind this shaking are of magnitude {magnitude} and about {km} km away.',
   'community.faults': 'Nearest faults',
   'community.faultsNone': 'The study maps no faults.',
   'community.curve': 'How often each level of shaking is passed',
@@ -174,10 +189,12 @@ export const EN = {
   'community.felt': 'Earthquakes people here have likely felt',
   'community.feltIntro':
     'These are past earthquakes from the catalog. The shaking here is an estimate from the same models.',
-  'community.feltCounts': 'Likely felt here (MMI IV or more): {felt}. Likely felt strongly (MMI VI or more): {strong}.',
+  'community.feltCounts':
+    'Likely felt here (MMI IV or more): {felt}. Likely felt strongly (MMI VI or more): {strong}.',
   'community.feltNone': 'None of the {events} earthquakes in the catalog was likely felt here.',
   'community.feltNoCatalog': 'No earthquake catalog is attached to this study yet.',
-  'community.feltTooMany': 'The catalog is too large to estimate its felt history on this page; use the felt history of the API or the command line.',
+  'community.feltTooMany':
+    'The catalog is too large to estimate its felt history on this page; use the felt history of the API or the command line.',
   'community.feltAttach': 'Add a catalog in the catalog view',
   'community.feltCaption': 'The strongest past earthquakes at {name}',
   'community.feltCol.date': 'Date',
@@ -186,11 +203,13 @@ export const EN = {
   'community.feltCol.mmi': 'Likely shaking here',
   'community.todo': 'What to do',
   'community.details': 'From the village list',
-  'community.detailsIntro': 'Other things the village list says about this place, as written there.',
+  'community.detailsIntro':
+    'Other things the village list says about this place, as written there.',
   'community.handout': 'Print the handout',
   'community.scenario': 'Try a scenario for this place',
   'community.noRun': 'This community has no results yet. Screen the study first.',
-  'community.runUnderWay': 'The screening of this study is under way ({percent}% done): the results for this community will be here when it finishes, in a minute or two. Reload this page then.',
+  'community.runUnderWay':
+    'The screening of this study is under way ({percent}% done): the results for this community will be here when it finishes, in a minute or two. Reload this page then.',
   'community.site': 'Ground: Vs30 {vs30} m/s ({basis}).',
   'community.site.measured': 'given',
   'community.site.site-class': 'from site class {siteClass}',
@@ -212,18 +231,26 @@ export const EN = {
   'tsunami.text':
     'If the shaking is long (a minute or more) or so strong that it is hard to stand, go to high ground or inland at once. Go on foot if you can. Do not wait for an official warning. A tsunami can come in minutes.\nAlso go if the sea suddenly pulls back, or you hear a loud roar from the sea.\nStay away from the shore until officials say it is safe. The first wave is often not the biggest.',
   'tsunami.time.title': 'Tsunami: time to act',
-  'tsunami.time.sentence': 'After strong or long shaking, go at once to high ground. A tsunami from the plate boundary could reach this coast in about {from} to {to} minutes.',
-  'tsunami.time.sentenceNow': 'After strong or long shaking, go at once to high ground. A tsunami from the plate boundary could reach this coast in about {from} to {to} minutes. It may come as the shaking stops.',
+  'tsunami.time.sentence':
+    'After strong or long shaking, go at once to high ground. A tsunami from the plate boundary could reach this coast in about {from} to {to} minutes.',
+  'tsunami.time.sentenceNow':
+    'After strong or long shaking, go at once to high ground. A tsunami from the plate boundary could reach this coast in about {from} to {to} minutes. It may come as the shaking stops.',
   'tsunami.time.ground': 'The nearest high ground is about {km} km to the {direction}.',
-  'tsunami.time.walk': 'On foot at a slow pace that is about {minutes} minutes in a straight line. Real paths are longer.',
-  'tsunami.time.above': 'This place stands about {elevation} m above the sea, which is already above {height} m. Still move away from the shore and the river mouths.',
-  'tsunami.time.none': 'We found no ground above {height} m within {km} km. Ask about the local evacuation plan.',
+  'tsunami.time.walk':
+    'On foot at a slow pace that is about {minutes} minutes in a straight line. Real paths are longer.',
+  'tsunami.time.above':
+    'This place stands about {elevation} m above the sea, which is already above {height} m. Still move away from the shore and the river mouths.',
+  'tsunami.time.none':
+    'We found no ground above {height} m within {km} km. Ask about the local evacuation plan.',
   'tsunami.time.height': 'Here high ground means {height} m above sea level or more.',
-  'tsunami.time.caution': 'These times are a rough screening estimate, not a warning. Strong or long shaking, the sea pulling back or a roar from the sea are the warning: do not wait. Official warnings come first, and local evacuation plans decide the routes. A tsunami from an undersea landslide can come sooner.',
+  'tsunami.time.caution':
+    'These times are a rough screening estimate, not a warning. Strong or long shaking, the sea pulling back or a roar from the sea are the warning: do not wait. Official warnings come first, and local evacuation plans decide the routes. A tsunami from an undersea landslide can come sooner.',
   'tsunami.time.problem': 'No tsunami time could be worked out for this place: {problem}',
-  'tsunami.time.technical': 'Worked out from {sources} over the terrain grid {grid} ({km} km cells), with the long-wave speed √(g·h).',
+  'tsunami.time.technical':
+    'Worked out from {sources} over the terrain grid {grid} ({km} km cells), with the long-wave speed √(g·h).',
   'tsunami.rank.title': 'Coastal places by time to act',
-  'tsunami.rank.intro': 'Soonest tsunami first, from the plate boundary. Rough screening estimates, not warnings.',
+  'tsunami.rank.intro':
+    'Soonest tsunami first, from the plate boundary. Rough screening estimates, not warnings.',
   'tsunami.rank.place': 'Place',
   'tsunami.rank.arrival': 'Tsunami could arrive in',
   'tsunami.rank.ground': 'Nearest high ground',
@@ -236,7 +263,8 @@ export const EN = {
   'tsunami.scenario.intro': 'First arrival at the coast of each coastal place for this rupture.',
 
   'limits.title': 'The limits of a screening',
-  'limits.intro': 'Tremora gives a quick, rough picture of earthquake shaking. Please keep these limits in mind.',
+  'limits.intro':
+    'Tremora gives a quick, rough picture of earthquake shaking. Please keep these limits in mind.',
   'limits.list':
     'It is not a design value. Never use it to design, fix, approve or insure a building, bridge, dam or pipe. Building codes and licensed engineers decide.\nIt is not a forecast or a warning. It does not say when an earthquake will come. It says how often shaking of a given strength comes on average over many years.\nIt is not for use in an emergency. Follow your local emergency services and official warnings.\nIt is only as good as what went in. A fault nobody has mapped, a wrong rate or a poor site description can make the numbers far too low or far too high.\nIt is about shaking only. It does not show landslides, ground that turns soft, breaks in the ground, tsunami height, fire or damage.',
   'limits.source': 'Each result lists the inputs and models it came from. Check them.',
@@ -246,13 +274,15 @@ export const EN = {
 
   'handout.title': '{name}: earthquake shaking handout',
   'handout.print': 'Print this handout',
-  'handout.printHint': 'Use your browser’s print command. The handout fits on one or two pages of A4 or Letter paper.',
+  'handout.printHint':
+    'Use your browser’s print command. The handout fits on one or two pages of A4 or Letter paper.',
   'handout.back': 'Back to the community page',
   'handout.topSources': 'Most of the shaking would come from: {sources}.',
   'handout.feltTop': 'Past earthquakes likely felt here',
 
   'scenario.title': '{name}: scenario',
-  'scenario.intro': 'Pick a source and a magnitude to see how strongly one earthquake could shake each community.',
+  'scenario.intro':
+    'Pick a source and a magnitude to see how strongly one earthquake could shake each community.',
   'scenario.source': 'Source',
   'scenario.magnitude': 'Magnitude (moment magnitude, 3 to 9.6)',
   'scenario.run': 'Show the shaking',
@@ -264,13 +294,16 @@ export const EN = {
   'scenario.col.high': 'Stronger case (84th percentile)',
   'scenario.col.pga': 'Median PGA (g)',
   'scenario.position': 'Rupture position: {position}.',
-  'scenario.positionMiddle': 'the middle of the source. The map and the table show this one earthquake. The distance is the shortest one to the rupture, which may lie deep below',
-  'scenario.gridNote': 'The map assumes firm ground (Vs30 {vs30} m/s) everywhere; each community uses its own ground.',
+  'scenario.positionMiddle':
+    'the middle of the source. The map and the table show this one earthquake. The distance is the shortest one to the rupture, which may lie deep below',
+  'scenario.gridNote':
+    'The map assumes firm ground (Vs30 {vs30} m/s) everywhere; each community uses its own ground.',
   'scenario.warnings': 'Notes',
   'scenario.notScreened': 'A scenario does not need a screening.',
 
   'editor.title': '{name}: edit the study',
-  'editor.intro': 'Nothing is saved until the whole study checks out. Problems are shown next to the field or line they concern.',
+  'editor.intro':
+    'Nothing is saved until the whole study checks out. Problems are shown next to the field or line they concern.',
   'editor.communities': 'Communities',
   'editor.communitiesCaption': 'The communities of this study',
   'editor.add': 'Add a community',
@@ -293,7 +326,8 @@ export const EN = {
   'editor.upload.communitiesHelp':
     'A spreadsheet (CSV or XLSX), placemarks (KML or KMZ), a zipped shapefile or GeoJSON points. It needs a name, a position (lat and lon, in decimal degrees or degrees, minutes and seconds) and vs30 or a site class for each place. Usual column names are understood; other columns (school, clinic, notes) are kept and shown on the community page.',
   'editor.pick.legend': 'Which columns of {file} hold these?',
-  'editor.pick.help': 'Some columns were not recognised by their names. Pick the column for each, then check the file again.',
+  'editor.pick.help':
+    'Some columns were not recognised by their names. Pick the column for each, then check the file again.',
   'editor.pick.none': '(choose a column)',
   'editor.pick.fileAgain': 'Choose the file again',
   'editor.pick.button': 'Use these columns',
@@ -307,7 +341,8 @@ export const EN = {
   'editor.pick.field.coastal': 'On the coast',
   'editor.pick.field.elevationM': 'Elevation (m)',
   'editor.upload.sources': 'Replace the sources from a GeoJSON file',
-  'editor.upload.sourcesHelp': 'A FeatureCollection of faults (LineString), zones (Polygon) and points.',
+  'editor.upload.sourcesHelp':
+    'A FeatureCollection of faults (LineString), zones (Polygon) and points.',
   'editor.upload.file': 'File',
   'editor.upload.button': 'Check and save',
   'editor.upload.noFile': 'Choose a file first.',
@@ -339,10 +374,12 @@ export const EN = {
   'editor.cancel': 'Back to the editor',
 
   'catalog.title': '{name}: earthquake catalog',
-  'catalog.intro': 'A catalog lists past earthquakes. Tremora fits how often they come, and which ones people here likely felt.',
+  'catalog.intro':
+    'A catalog lists past earthquakes. Tremora fits how often they come, and which ones people here likely felt.',
   'catalog.none': 'No catalog is attached to this study.',
   'catalog.upload': 'Load a catalog',
-  'catalog.uploadHelp': 'CSV (time,lon,lat,depthKm,magnitude,magnitudeType,id), FDSN event text, or QuakeML 1.2.',
+  'catalog.uploadHelp':
+    'CSV (time,lon,lat,depthKm,magnitude,magnitudeType,id), FDSN event text, or QuakeML 1.2.',
   'catalog.useDemo': 'Use the demo catalog',
   'catalog.file': 'Catalog file',
   'catalog.load': 'Load and check',
@@ -352,18 +389,23 @@ export const EN = {
   'catalog.rejectedCaption': 'Rejected lines',
   'catalog.col.where': 'Where',
   'catalog.col.why': 'Why',
-  'catalog.nonMoment': '{n} events have a magnitude type other than moment magnitude; the fit leaves them out.',
-  'catalog.declustered': 'Declustering (Gardner and Knopoff 1974) kept {main} main shocks and set aside {removed} fore- and aftershocks.',
+  'catalog.nonMoment':
+    '{n} events have a magnitude type other than moment magnitude; the fit leaves them out.',
+  'catalog.declustered':
+    'Declustering (Gardner and Knopoff 1974) kept {main} main shocks and set aside {removed} fore- and aftershocks.',
   'catalog.fit': 'How often earthquakes come',
-  'catalog.fitValues': 'b = {b} ± {sigma}; a = {a}; {rate} earthquakes a year of magnitude {mRef} or more.',
+  'catalog.fitValues':
+    'b = {b} ± {sigma}; a = {a}; {rate} earthquakes a year of magnitude {mRef} or more.',
   'catalog.mc': 'Complete above magnitude {mc} (maximum curvature plus 0.2).',
-  'catalog.periods': 'Complete in periods (maximum curvature plus 0.2, in steps of 100 main shocks): {periods}.',
+  'catalog.periods':
+    'Complete in periods (maximum curvature plus 0.2, in steps of 100 main shocks): {periods}.',
   'catalog.period': 'M {m} and up since {year}',
   'catalog.method.weichert': 'Fit by Weichert (1980) over these periods:',
   'catalog.method.akiUtsu': 'Fit by Aki (1965) and Utsu:',
   'catalog.plot': 'Earthquakes per year at or above each magnitude, with the fitted line',
   'catalog.zone': 'Turn the fit into a background zone',
-  'catalog.zoneIntro': 'The zone uses the earthquakes inside its outline. Check the numbers, then add it to the study.',
+  'catalog.zoneIntro':
+    'The zone uses the earthquakes inside its outline. Check the numbers, then add it to the study.',
   'catalog.zonePolygon': 'Zone outline',
   'catalog.zoneOutline': 'The study outline',
   'catalog.zoneMMax': 'Largest magnitude the zone can have',
@@ -410,24 +452,31 @@ export const EN = {
   'map.shaking': 'Likely shaking (median MMI)',
 
   'hazardMap.heading': 'Hazard map',
-  'hazardMap.intro': 'A hazard map shows the shaking on a grid of points over the whole study area, not only at the communities. Pick what to map and press the button. It can take a few minutes.',
+  'hazardMap.intro':
+    'A hazard map shows the shaking on a grid of points over the whole study area, not only at the communities. Pick what to map and press the button. It can take a few minutes.',
   'hazardMap.measure': 'What to map',
   'hazardMap.returnPeriod': 'How rare the shaking is',
   'hazardMap.returnPeriodOption': 'A 1 in {years} chance each year (return period {years} years)',
   'hazardMap.spacing': 'Distance between grid points (km)',
-  'hazardMap.spacingHelp': 'Suggested: {km} km, which gives about {cells} cells across the longer side of the study area ({span} km), rounded up to a whole km. A shorter distance shows more detail and takes longer.',
-  'hazardMap.vs30': 'Every grid point uses the same ground: Vs30 {vs30} m/s, firm ground. Real ground changes from place to place; each community’s own results use its own ground.',
-  'hazardMap.vs30Form': 'The map gives every grid point the same ground: Vs30 {vs30} m/s, firm ground.',
+  'hazardMap.spacingHelp':
+    'Suggested: {km} km, which gives about {cells} cells across the longer side of the study area ({span} km), rounded up to a whole km. A shorter distance shows more detail and takes longer.',
+  'hazardMap.vs30':
+    'Every grid point uses the same ground: Vs30 {vs30} m/s, firm ground. Real ground changes from place to place; each community’s own results use its own ground.',
+  'hazardMap.vs30Form':
+    'The map gives every grid point the same ground: Vs30 {vs30} m/s, firm ground.',
   'hazardMap.compute': 'Compute the hazard map',
   'hazardMap.queued': 'A hazard map is waiting for a free worker.',
   'hazardMap.running': 'A hazard map is being computed: {percent}% done.',
   'hazardMap.follow': 'Follow the hazard map',
   'hazardMap.lastFailed': 'The last hazard map did not finish: {error}',
   'hazardMap.computedOn': 'The map above shows the hazard map computed on {date}.',
-  'hazardMap.stale': 'The study has changed since this hazard map was computed. Compute it again to bring it up to date.',
-  'hazardMap.tooMany': 'This hazard map has {count} grid points, too many to draw on this page. Download it as GeoJSON to see it.',
+  'hazardMap.stale':
+    'The study has changed since this hazard map was computed. Compute it again to bring it up to date.',
+  'hazardMap.tooMany':
+    'This hazard map has {count} grid points, too many to draw on this page. Download it as GeoJSON to see it.',
   'hazardMap.download': 'Download the hazard map as GeoJSON',
-  'hazardMap.title.returnPeriod': '{measure} with a 1 in {years} chance of being passed each year, in {unit}',
+  'hazardMap.title.returnPeriod':
+    '{measure} with a 1 in {years} chance of being passed each year, in {unit}',
   'hazardMap.title.chance': '{measure}: the chance of passing {level} {unit} within {years} years',
   'hazardMap.darker.returnPeriod': 'Darker cells: stronger shaking.',
   'hazardMap.darker.chance': 'Darker cells: a higher chance.',
@@ -436,9 +485,12 @@ export const EN = {
   'hazardMap.class.from': '{from} or more',
   'hazardMap.class.points': '{n} grid points',
   'hazardMap.clear': 'Cells left clear ({n} grid points): below the lowest level computed.',
-  'hazardMap.summary': 'The hazard map has {count} grid points, {spacing} km apart. Its values go from {min} to {max}.',
-  'hazardMap.summaryNone': 'The hazard map has {count} grid points, {spacing} km apart. Every value is below the lowest level computed.',
-  'hazardMap.caution': 'A screening estimate on a grid, not a design value. Building codes and licensed engineers decide.',
+  'hazardMap.summary':
+    'The hazard map has {count} grid points, {spacing} km apart. Its values go from {min} to {max}.',
+  'hazardMap.summaryNone':
+    'The hazard map has {count} grid points, {spacing} km apart. Every value is below the lowest level computed.',
+  'hazardMap.caution':
+    'A screening estimate on a grid, not a design value. Building codes and licensed engineers decide.',
   'hazardMap.measure.PGA': 'Peak ground acceleration (PGA)',
   'hazardMap.measure.PGV': 'Peak ground velocity (PGV)',
   'hazardMap.measure.SA': 'Spectral acceleration at {period} s ({key})',

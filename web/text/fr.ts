@@ -25,7 +25,8 @@ export const FR: Readonly<Partial<Record<TextKey, string>>> = {
   'caution.title': 'Un dépistage, pas une valeur de calcul',
   'caution.text':
     'Ces chiffres sont une estimation de dépistage, pas une valeur de calcul. Ne les utilisez pas pour concevoir, réparer, autoriser ou assurer un bâtiment. Les codes de construction et les ingénieurs agréés décident.',
-  'caution.short': 'Estimation de dépistage, pas une valeur de calcul. Les codes de construction et les ingénieurs agréés décident.',
+  'caution.short':
+    'Estimation de dépistage, pas une valeur de calcul. Les codes de construction et les ingénieurs agréés décident.',
   'caution.limitsLink': 'Lire les limites d’un dépistage',
 
   'chance.oneIn': 'environ 1 sur {n}',

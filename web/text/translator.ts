@@ -18,20 +18,27 @@ export const LANGUAGES = [
 export type LanguageCode = (typeof LANGUAGES)[number]['code'];
 export const DEFAULT_LANGUAGE: LanguageCode = 'en';
 
-export const isLanguage = (code: unknown): code is LanguageCode => LANGUAGES.some((l) => l.code === code);
+export const isLanguage = (code: unknown): code is LanguageCode =>
+  LANGUAGES.some((l) => l.code === code);
 
 export type TextValues = Readonly<Record<string, string | number>>;
 
 /** Fills "{name}" placeholders; a placeholder without a value is left as it is, to be seen and fixed. */
 export function fill(template: string, values: TextValues = {}): string {
-  return template.replace(/\{(\w+)\}/g, (whole, name: string) => (name in values ? String(values[name]) : whole));
+  return template.replace(/\{(\w+)\}/g, (whole, name: string) =>
+    name in values ? String(values[name]) : whole,
+  );
 }
 
 /** Values filled into page content: plain values, or content made by Translator.text. */
 export type ContentValues = Readonly<Record<string, Child>>;
 
 /** Like fill, for page content: the template's pieces and its values, in order. */
-function fillPieces(template: string, values: ContentValues, wrap: (value: Child) => Child): Child[] {
+function fillPieces(
+  template: string,
+  values: ContentValues,
+  wrap: (value: Child) => Child,
+): Child[] {
   const pieces: Child[] = [];
   let from = 0;
   for (const match of template.matchAll(/\{(\w+)\}/g)) {
@@ -44,7 +51,8 @@ function fillPieces(template: string, values: ContentValues, wrap: (value: Child
   return pieces.filter((piece) => piece !== '');
 }
 
-const isPlain = (piece: Child): piece is string | number => typeof piece === 'string' || typeof piece === 'number';
+const isPlain = (piece: Child): piece is string | number =>
+  typeof piece === 'string' || typeof piece === 'number';
 
 export interface Translator {
   readonly lang: LanguageCode;
@@ -98,14 +106,20 @@ export function translator(lang: LanguageCode): Translator {
         const pieces = fillPieces(own[key], values, (value) => value);
         return pieces.every(isPlain) ? pieces.join('') : pieces;
       }
-      const pageLanguage = (value: Child) => (isPlain(value) ? jsx('span', { lang }, String(value)) : value);
+      const pageLanguage = (value: Child) =>
+        isPlain(value) ? jsx('span', { lang }, String(value)) : value;
       return jsx('span', { lang: DEFAULT_LANGUAGE }, ...fillPieces(EN[key], values, pageLanguage));
     },
     fallbackLang: (key) => (own[key] === undefined ? DEFAULT_LANGUAGE : undefined),
-    english: (message) => (lang === DEFAULT_LANGUAGE ? message : jsx('span', { lang: DEFAULT_LANGUAGE }, message)),
+    english: (message) =>
+      lang === DEFAULT_LANGUAGE ? message : jsx('span', { lang: DEFAULT_LANGUAGE }, message),
     number: (value, fractionDigits = 0) =>
-      new Intl.NumberFormat(locale, { minimumFractionDigits: fractionDigits, maximumFractionDigits: fractionDigits }).format(value),
-    count: (value) => numberInWords(value, { smallNumbers: text('numbers.small').split('|'), locale }),
+      new Intl.NumberFormat(locale, {
+        minimumFractionDigits: fractionDigits,
+        maximumFractionDigits: fractionDigits,
+      }).format(value),
+    count: (value) =>
+      numberInWords(value, { smallNumbers: text('numbers.small').split('|'), locale }),
     chance: (probability) => {
       const f = naturalFrequency(probability);
       const frequency =
@@ -117,21 +131,32 @@ export function translator(lang: LanguageCode): Translator {
               ? t('chance.inTen', { k: f.k })
               : t('chance.moreThanNine');
       const p = percentText(probability);
-      const percent = p === '<0.1' ? t('chance.percentBelow', { p: self.number(0.1, 1) }) : t('chance.percent', { p: p.includes('.') ? self.number(Number(p), 1) : p });
+      const percent =
+        p === '<0.1'
+          ? t('chance.percentBelow', { p: self.number(0.1, 1) })
+          : t('chance.percent', { p: p.includes('.') ? self.number(Number(p), 1) : p });
       return { frequency, percent };
     },
     mmi: (value) => {
       const words = intensityWords(value);
-      return words.almost === undefined ? t('mmi.label', { roman: words.roman }) : t('mmi.almost', { roman: words.roman, next: words.almost });
+      return words.almost === undefined
+        ? t('mmi.label', { roman: words.roman })
+        : t('mmi.almost', { roman: words.roman, next: words.almost });
     },
     place: (distanceKm, bearingDeg, depthBelowKm) => {
       const where = placeFrom(distanceKm, bearingDeg, depthBelowKm);
       if (where.kind === 'here') return t('place.here');
       if (where.kind === 'below') return t('place.below', { km: self.number(where.depthKm) });
-      return t('place.away', { km: self.number(where.distanceKm), direction: self.compass(where.compass) });
+      return t('place.away', {
+        km: self.number(where.distanceKm),
+        direction: self.compass(where.compass),
+      });
     },
     compass: (point) => t(`compass.${point}` as TextKey),
-    date: (when) => new Intl.DateTimeFormat(locale, { dateStyle: 'long', timeZone: 'UTC' }).format(new Date(when)),
+    date: (when) =>
+      new Intl.DateTimeFormat(locale, { dateStyle: 'long', timeZone: 'UTC' }).format(
+        new Date(when),
+      ),
   };
   return self;
 }

@@ -22,7 +22,13 @@ export function AccessView(props: AccessViewProps) {
   const { tr, state, notice } = props;
   const refused = notice === 'missing' || notice === 'wrong';
   return (
-    <PageShell tr={tr} title={tr.t('access.title')} titleLang={tr.fallbackLang('access.title')} path={props.path} toolVersion={props.toolVersion}>
+    <PageShell
+      tr={tr}
+      title={tr.t('access.title')}
+      titleLang={tr.fallbackLang('access.title')}
+      path={props.path}
+      toolVersion={props.toolVersion}
+    >
       <h1>{tr.text('access.title')}</h1>
       {state === 'open' ? (
         <p>{tr.text('access.open')}</p>
@@ -42,7 +48,8 @@ export function AccessView(props: AccessViewProps) {
           {state === 'granted' ? (
             <>
               <p class="notice" role="status">
-                {tr.text('access.granted')} {tr.text('access.kept', { days: tr.number(props.keptDays) })}
+                {tr.text('access.granted')}{' '}
+                {tr.text('access.kept', { days: tr.number(props.keptDays) })}
               </p>
               <form method="post" action={LEAVE_PATH} class="inline-form">
                 <button type="submit" class="button-quiet">
@@ -61,7 +68,9 @@ export function AccessView(props: AccessViewProps) {
                   type="password"
                   autocomplete="current-password"
                   aria-invalid={refused ? 'true' : undefined}
-                  aria-describedby={refused ? 'access-token-problem access-token-help' : 'access-token-help'}
+                  aria-describedby={
+                    refused ? 'access-token-problem access-token-help' : 'access-token-help'
+                  }
                 />
                 {refused && (
                   <p class="problem" id="access-token-problem" role="alert">

@@ -5,7 +5,10 @@ import type { Study } from '../../api/engine/model.ts';
 import { chosenFit, type CatalogAnalysis } from '../data/catalog-analysis.ts';
 import type { AttachedCatalog } from '../data/study-catalog.ts';
 import { PageShell } from '../layout/page-shell.tsx';
-import { FrequencyMagnitudeLegend, FrequencyMagnitudePlot } from '../plots/frequency-magnitude-plot.tsx';
+import {
+  FrequencyMagnitudeLegend,
+  FrequencyMagnitudePlot,
+} from '../plots/frequency-magnitude-plot.tsx';
 import type { Translator } from '../text/translator.ts';
 import { FieldProblems } from './field-problems.tsx';
 
@@ -42,10 +45,20 @@ export function CatalogView(props: CatalogViewProps) {
   const result = analysis?.fit;
   const fit = result ? chosenFit(result) : undefined;
   const zoneIssue = (name: string) => props.zoneIssues.filter((i) => i.path === name);
-  const otherZoneIssues = props.zoneIssues.filter((i) => !['polygon', 'mMax', 'depthKm', 'id', 'name'].includes(i.path));
+  const otherZoneIssues = props.zoneIssues.filter(
+    (i) => !['polygon', 'mMax', 'depthKm', 'id', 'name'].includes(i.path),
+  );
   const polygons = [
     ...study.sources.filter((s) => s.kind === 'zone').map((s) => ({ value: s.id, label: s.name })),
-    ...((study.outline?.length ?? 0) > 0 ? [{ value: OUTLINE_CHOICE, label: tr.t('catalog.zoneOutline'), lang: tr.fallbackLang('catalog.zoneOutline') }] : []),
+    ...((study.outline?.length ?? 0) > 0
+      ? [
+          {
+            value: OUTLINE_CHOICE,
+            label: tr.t('catalog.zoneOutline'),
+            lang: tr.fallbackLang('catalog.zoneOutline'),
+          },
+        ]
+      : []),
   ];
   const zoneField = (name: keyof ZoneForm, label: Child, inputmode?: 'decimal') => (
     <div class="field">
@@ -63,7 +76,16 @@ export function CatalogView(props: CatalogViewProps) {
     </div>
   );
   return (
-    <PageShell tr={tr} title={tr.t('catalog.title', { name: study.name })} titleLang={tr.fallbackLang('catalog.title')} path={props.path} toolVersion={props.toolVersion} study={{ id: studyId, name: study.name }} section="catalog" showsNumbers={fit !== undefined}>
+    <PageShell
+      tr={tr}
+      title={tr.t('catalog.title', { name: study.name })}
+      titleLang={tr.fallbackLang('catalog.title')}
+      path={props.path}
+      toolVersion={props.toolVersion}
+      study={{ id: studyId, name: study.name }}
+      section="catalog"
+      showsNumbers={fit !== undefined}
+    >
       <h1>{tr.text('catalog.title', { name: study.name })}</h1>
       <p>{tr.text('catalog.intro')}</p>
       {props.zoneAdded && (
@@ -71,14 +93,26 @@ export function CatalogView(props: CatalogViewProps) {
           {tr.text('catalog.zoneAdded')}
         </p>
       )}
-      {catalog ? <p>{tr.text('catalog.attached', { file: catalog.fileName, format: catalog.format })}</p> : <p>{tr.text('catalog.none')}</p>}
+      {catalog ? (
+        <p>{tr.text('catalog.attached', { file: catalog.fileName, format: catalog.format })}</p>
+      ) : (
+        <p>{tr.text('catalog.none')}</p>
+      )}
 
       <section aria-labelledby="catalog-upload-heading" class="upload">
         <h2 id="catalog-upload-heading">{tr.text('catalog.upload')}</h2>
         <form method="post" action={`/studies/${studyId}/catalog`} enctype="multipart/form-data">
           <div class="field">
             <label for="catalog-file">{tr.text('catalog.file')}</label>
-            <input id="catalog-file" name="file" type="file" accept=".csv,.txt,.xml,.quakeml" aria-describedby={props.uploadIssues.length ? 'catalog-help catalog-problems' : 'catalog-help'} />
+            <input
+              id="catalog-file"
+              name="file"
+              type="file"
+              accept=".csv,.txt,.xml,.quakeml"
+              aria-describedby={
+                props.uploadIssues.length ? 'catalog-help catalog-problems' : 'catalog-help'
+              }
+            />
             <p id="catalog-help" class="help">
               {tr.text('catalog.uploadHelp')}
             </p>
@@ -86,7 +120,12 @@ export function CatalogView(props: CatalogViewProps) {
           </div>
           <button type="submit">{tr.text('catalog.load')}</button>
         </form>
-        <form method="post" action={`/studies/${studyId}/catalog`} enctype="multipart/form-data" class="inline-form">
+        <form
+          method="post"
+          action={`/studies/${studyId}/catalog`}
+          enctype="multipart/form-data"
+          class="inline-form"
+        >
           <input type="hidden" name="demo" value="1" />
           <button type="submit">{tr.text('catalog.useDemo')}</button>
         </form>
@@ -96,10 +135,18 @@ export function CatalogView(props: CatalogViewProps) {
       {analysis && (
         <section aria-labelledby="catalog-summary-heading">
           <h2 id="catalog-summary-heading">{tr.text('catalog.summary')}</h2>
-          <p data-loaded={analysis.load.summary.loaded} data-rejected={analysis.load.summary.rejected}>
-            {tr.text('catalog.loaded', { loaded: tr.number(analysis.load.summary.loaded), rejected: tr.number(analysis.load.summary.rejected) })}
+          <p
+            data-loaded={analysis.load.summary.loaded}
+            data-rejected={analysis.load.summary.rejected}
+          >
+            {tr.text('catalog.loaded', {
+              loaded: tr.number(analysis.load.summary.loaded),
+              rejected: tr.number(analysis.load.summary.rejected),
+            })}
           </p>
-          {analysis.load.summary.nonMoment > 0 && <p>{tr.text('catalog.nonMoment', { n: tr.number(analysis.load.summary.nonMoment) })}</p>}
+          {analysis.load.summary.nonMoment > 0 && (
+            <p>{tr.text('catalog.nonMoment', { n: tr.number(analysis.load.summary.nonMoment) })}</p>
+          )}
           {analysis.load.rejected.length > 0 && (
             <table class="data-table rejected">
               <caption>{tr.text('catalog.rejectedCaption')}</caption>
@@ -120,27 +167,44 @@ export function CatalogView(props: CatalogViewProps) {
             </table>
           )}
           {result?.declustering && (
-            <p>{tr.text('catalog.declustered', { main: tr.number(result.declustering.mainshocks.length), removed: tr.number(result.declustering.removed.length) })}</p>
+            <p>
+              {tr.text('catalog.declustered', {
+                main: tr.number(result.declustering.mainshocks.length),
+                removed: tr.number(result.declustering.removed.length),
+              })}
+            </p>
           )}
-          {analysis.problem && <p class="problem">{tr.text('catalog.tooFew', { reason: analysis.problem })}</p>}
+          {analysis.problem && (
+            <p class="problem">{tr.text('catalog.tooFew', { reason: analysis.problem })}</p>
+          )}
         </section>
       )}
 
       {fit && result && (
         <section aria-labelledby="catalog-fit-heading">
           <h2 id="catalog-fit-heading">{tr.text('catalog.fit')}</h2>
-          <p class="fit-values" data-b={fit.bValue} data-sigma-b={fit.sigmaB} data-mc={result.completeness.mc}>
+          <p
+            class="fit-values"
+            data-b={fit.bValue}
+            data-sigma-b={fit.sigmaB}
+            data-mc={result.completeness.mc}
+          >
             {result.periods && result.periods.length > 0
               ? tr.text('catalog.periods', {
                   periods: result.periods.map((p, i) => (
                     <>
                       {i > 0 && '; '}
-                      {tr.text('catalog.period', { m: tr.number(p.magnitude, 1), year: new Date(p.startMs).getUTCFullYear() })}
+                      {tr.text('catalog.period', {
+                        m: tr.number(p.magnitude, 1),
+                        year: new Date(p.startMs).getUTCFullYear(),
+                      })}
                     </>
                   )),
                 })
               : tr.text('catalog.mc', { mc: tr.number(result.completeness.mc, 1) })}{' '}
-            {tr.text(fit.method === 'weichert' ? 'catalog.method.weichert' : 'catalog.method.akiUtsu')}{' '}
+            {tr.text(
+              fit.method === 'weichert' ? 'catalog.method.weichert' : 'catalog.method.akiUtsu',
+            )}{' '}
             {tr.text('catalog.fitValues', {
               b: tr.number(fit.bValue, 2),
               sigma: tr.number(fit.sigmaB, 2),
@@ -157,7 +221,12 @@ export function CatalogView(props: CatalogViewProps) {
             </ul>
           )}
           <figure class="plot-figure">
-            <FrequencyMagnitudePlot tr={tr} data={result.frequencyMagnitude} mc={result.periods?.[0]?.magnitude ?? result.completeness.mc} idPrefix="fmd" />
+            <FrequencyMagnitudePlot
+              tr={tr}
+              data={result.frequencyMagnitude}
+              mc={result.periods?.[0]?.magnitude ?? result.completeness.mc}
+              idPrefix="fmd"
+            />
             <figcaption>
               <FrequencyMagnitudeLegend tr={tr} />
             </figcaption>
@@ -172,12 +241,21 @@ export function CatalogView(props: CatalogViewProps) {
           {polygons.length === 0 ? (
             <p>{tr.text('catalog.noPolygon')}</p>
           ) : (
-            <form method="post" action={`/studies/${studyId}/catalog/zone`} class="zone-form" novalidate>
+            <form
+              method="post"
+              action={`/studies/${studyId}/catalog/zone`}
+              class="zone-form"
+              novalidate
+            >
               <div class="field">
                 <label for="zone-polygon">{tr.text('catalog.zonePolygon')}</label>
                 <select id="zone-polygon" name="polygon">
                   {polygons.map((p) => (
-                    <option value={p.value} selected={p.value === props.zone.polygon} lang={'lang' in p ? p.lang : undefined}>
+                    <option
+                      value={p.value}
+                      selected={p.value === props.zone.polygon}
+                      lang={'lang' in p ? p.lang : undefined}
+                    >
                       {p.label}
                     </option>
                   ))}
@@ -188,7 +266,12 @@ export function CatalogView(props: CatalogViewProps) {
               {zoneField('depthKm', tr.text('catalog.zoneDepth'), 'decimal')}
               {zoneField('id', tr.text('catalog.zoneId'))}
               {zoneField('name', tr.text('catalog.zoneName'))}
-              <FieldProblems tr={tr} id="zone-problems" issues={otherZoneIssues} describe={(i) => tr.english(`${i.path}: ${i.message}`)} />
+              <FieldProblems
+                tr={tr}
+                id="zone-problems"
+                issues={otherZoneIssues}
+                describe={(i) => tr.english(`${i.path}: ${i.message}`)}
+              />
               {props.zoneFit && (
                 <p class="zone-result" data-b={props.zoneFit.bValue} data-rate={props.zoneFit.rate}>
                   {tr.text('catalog.zoneResult', { summary: props.zoneFit.summary })}

@@ -6,15 +6,27 @@ import type { Translator } from '../text/translator.ts';
  * Asks which of the file's columns holds each field that was not recognised by its name, and
  * sends the file back with the choice (carried in the form when small enough, else chosen again).
  */
-export function ColumnPickForm(props: { readonly tr: Translator; readonly action: string; readonly pick: ColumnPick }) {
+export function ColumnPickForm(props: {
+  readonly tr: Translator;
+  readonly action: string;
+  readonly pick: ColumnPick;
+}) {
   const { tr, pick } = props;
   return (
-    <form method="post" action={props.action} enctype="multipart/form-data" class="column-pick" data-pick={pick.fileName}>
+    <form
+      method="post"
+      action={props.action}
+      enctype="multipart/form-data"
+      class="column-pick"
+      data-pick={pick.fileName}
+    >
       <fieldset>
         <legend>{tr.text('editor.pick.legend', { file: pick.fileName })}</legend>
         <p class="help">{tr.text('editor.pick.help')}</p>
         {Object.entries(pick.chosen).map(([key, column]) =>
-          pick.missing.includes(key as never) || column === undefined ? null : <input type="hidden" name={`column.${key}`} value={column} />,
+          pick.missing.includes(key as never) || column === undefined ? null : (
+            <input type="hidden" name={`column.${key}`} value={column} />
+          ),
         )}
         {pick.missing.map((key) => (
           <div class="field">

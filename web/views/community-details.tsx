@@ -1,7 +1,10 @@
 import type { Translator } from '../text/translator.ts';
 
 /** What the community's file said that the computation does not use (school, clinic, notes), as given. */
-export function CommunityDetails(props: { readonly tr: Translator; readonly details: Readonly<Record<string, string>> | undefined }) {
+export function CommunityDetails(props: {
+  readonly tr: Translator;
+  readonly details: Readonly<Record<string, string>> | undefined;
+}) {
   const entries = Object.entries(props.details ?? {});
   if (entries.length === 0) return null;
   return (

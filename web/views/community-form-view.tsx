@@ -41,7 +41,11 @@ export function CommunityFormView(props: CommunityFormViewProps) {
   const headingKey = props.editing === undefined ? 'editor.add' : 'editor.edit';
   const heading = { name: props.editing ?? '' };
   const problems = (name: string) => props.fieldIssues.get(name) ?? [];
-  const input = (f: { readonly name: keyof CommunityForm & string; readonly type: string; readonly inputmode?: 'decimal' | 'numeric' }) => {
+  const input = (f: {
+    readonly name: keyof CommunityForm & string;
+    readonly type: string;
+    readonly inputmode?: 'decimal' | 'numeric';
+  }) => {
     const own = problems(f.name);
     const problemId = `field-${f.name}-problem`;
     return (
@@ -62,7 +66,15 @@ export function CommunityFormView(props: CommunityFormViewProps) {
     );
   };
   return (
-    <PageShell tr={tr} title={tr.t(headingKey, heading)} titleLang={tr.fallbackLang(headingKey)} path={props.path} toolVersion={props.toolVersion} study={{ id: props.studyId, name: props.studyName }} section="edit">
+    <PageShell
+      tr={tr}
+      title={tr.t(headingKey, heading)}
+      titleLang={tr.fallbackLang(headingKey)}
+      path={props.path}
+      toolVersion={props.toolVersion}
+      study={{ id: props.studyId, name: props.studyName }}
+      section="edit"
+    >
       <h1>{tr.text(headingKey, heading)}</h1>
       <p>{tr.text('editor.intro')}</p>
       {(props.otherIssues.length > 0 || props.fieldIssues.size > 0) && (
@@ -70,13 +82,28 @@ export function CommunityFormView(props: CommunityFormViewProps) {
           {tr.text('editor.notSaved')}
         </p>
       )}
-      <FieldProblems tr={tr} id="form-problems" issues={props.otherIssues} describe={(i) => tr.english(`${i.path}: ${i.message}`)} />
+      <FieldProblems
+        tr={tr}
+        id="form-problems"
+        issues={props.otherIssues}
+        describe={(i) => tr.english(`${i.path}: ${i.message}`)}
+      />
       <form method="post" action={props.action} class="community-form" novalidate>
         {TEXT_FIELDS.map(input)}
         <div class={problems('siteClass').length > 0 ? 'field field-bad' : 'field'}>
           <label for="field-siteClass">{tr.text('editor.field.siteClass')}</label>
-          <select id="field-siteClass" name="siteClass" aria-describedby={problems('siteClass').length > 0 ? 'field-siteClass-problem' : undefined}>
-            <option value="" selected={values.siteClass === ''} lang={tr.fallbackLang('editor.field.siteClassNone')}>
+          <select
+            id="field-siteClass"
+            name="siteClass"
+            aria-describedby={
+              problems('siteClass').length > 0 ? 'field-siteClass-problem' : undefined
+            }
+          >
+            <option
+              value=""
+              selected={values.siteClass === ''}
+              lang={tr.fallbackLang('editor.field.siteClassNone')}
+            >
               {tr.t('editor.field.siteClassNone')}
             </option>
             {SITE_CLASSES.map((sc) => (
@@ -89,7 +116,13 @@ export function CommunityFormView(props: CommunityFormViewProps) {
         </div>
         {MORE_FIELDS.map(input)}
         <div class="field field-check">
-          <input id="field-coastal" name="coastal" type="checkbox" value="true" checked={values.coastal} />
+          <input
+            id="field-coastal"
+            name="coastal"
+            type="checkbox"
+            value="true"
+            checked={values.coastal}
+          />
           <label for="field-coastal">{tr.text('editor.field.coastal')}</label>
           <FieldProblems tr={tr} id="field-coastal-problem" issues={problems('coastal')} />
         </div>

@@ -34,16 +34,26 @@ export interface CommunityViewProps {
   readonly tsunami?: TsunamiPageResult;
 }
 
-const mmiKey = (level: number, part: 'name' | 'feel' | 'buildings') => `mmi.${level}.${part}` as TextKey;
+const mmiKey = (level: number, part: 'name' | 'feel' | 'buildings') =>
+  `mmi.${level}.${part}` as TextKey;
 
 /** The headline and the other chances, with the raw probabilities in data attributes. */
-export function Headline(props: { readonly tr: Translator; readonly data: CommunityPageData; readonly name: string }) {
+export function Headline(props: {
+  readonly tr: Translator;
+  readonly data: CommunityPageData;
+  readonly name: string;
+}) {
   const { tr, data } = props;
   const vii = tr.chance(data.chances.VII);
   return (
     <div class="headline-block">
       <p class="headline" data-probability={data.chances.VII} data-years={data.years}>
-        {tr.text('community.headline', { name: props.name, chance: vii.frequency, years: data.years, percent: vii.percent })}
+        {tr.text('community.headline', {
+          name: props.name,
+          chance: vii.frequency,
+          years: data.years,
+          percent: vii.percent,
+        })}
       </p>
       <p>{tr.text('community.headlineStrongWhat')}</p>
       <p class="mmi-explain">{tr.text('mmi.explain')}</p>
@@ -63,7 +73,12 @@ export function Headline(props: { readonly tr: Translator; readonly data: Commun
 }
 
 /** What the shaking at each return-period level feels like and does, in our own words. */
-export function ShakingLevels(props: { readonly tr: Translator; readonly data: CommunityPageData; readonly headingLevel: 2 | 3; readonly compact?: boolean }) {
+export function ShakingLevels(props: {
+  readonly tr: Translator;
+  readonly data: CommunityPageData;
+  readonly headingLevel: 2 | 3;
+  readonly compact?: boolean;
+}) {
   const { tr, data } = props;
   const H = props.headingLevel === 2 ? 'h3' : 'h4';
   return (
@@ -71,23 +86,44 @@ export function ShakingLevels(props: { readonly tr: Translator; readonly data: C
       {data.levels.map((level) => {
         const chance = tr.chance(level.chance);
         return (
-          <section class="level-card" data-return-period={level.returnPeriodYears} aria-labelledby={`level-${level.returnPeriodYears}`}>
-            <H id={`level-${level.returnPeriodYears}`}>{tr.text('community.level', { period: tr.number(level.returnPeriodYears) })}</H>
-            <p class="level-chance">{tr.text('community.levelChance', { frequency: chance.frequency, years: data.years, percent: chance.percent })}</p>
+          <section
+            class="level-card"
+            data-return-period={level.returnPeriodYears}
+            aria-labelledby={`level-${level.returnPeriodYears}`}
+          >
+            <H id={`level-${level.returnPeriodYears}`}>
+              {tr.text('community.level', { period: tr.number(level.returnPeriodYears) })}
+            </H>
+            <p class="level-chance">
+              {tr.text('community.levelChance', {
+                frequency: chance.frequency,
+                years: data.years,
+                percent: chance.percent,
+              })}
+            </p>
             {level.mmiLevel === null ? (
               <p>{tr.text('community.levelOffCurve')}</p>
             ) : (
               <>
                 <p class="level-mmi" data-mmi={level.mmi}>
-                  {tr.text('community.levelMmi', { mmi: tr.mmi(level.mmi ?? level.mmiLevel), name: tr.text(mmiKey(level.mmiLevel, 'name')) })}
+                  {tr.text('community.levelMmi', {
+                    mmi: tr.mmi(level.mmi ?? level.mmiLevel),
+                    name: tr.text(mmiKey(level.mmiLevel, 'name')),
+                  })}
                 </p>
                 <p>
-                  <strong>{tr.text('community.feels')}:</strong> {tr.text(mmiKey(level.mmiLevel, 'feel'))}
+                  <strong>{tr.text('community.feels')}:</strong>{' '}
+                  {tr.text(mmiKey(level.mmiLevel, 'feel'))}
                 </p>
                 <p>
-                  <strong>{tr.text('community.buildings')}:</strong> {tr.text(mmiKey(level.mmiLevel, 'buildings'))}
+                  <strong>{tr.text('community.buildings')}:</strong>{' '}
+                  {tr.text(mmiKey(level.mmiLevel, 'buildings'))}
                 </p>
-                {!props.compact && level.pgaG !== null && <p class="technical">{tr.text('community.pga', { g: tr.number(level.pgaG, 2) })}</p>}
+                {!props.compact && level.pgaG !== null && (
+                  <p class="technical">
+                    {tr.text('community.pga', { g: tr.number(level.pgaG, 2) })}
+                  </p>
+                )}
               </>
             )}
           </section>
@@ -98,7 +134,10 @@ export function ShakingLevels(props: { readonly tr: Translator; readonly data: C
 }
 
 /** The provenance line: date, tool version, input hash prefix and models. */
-export function ProvenanceLine(props: { readonly tr: Translator; readonly provenance: Provenance }) {
+export function ProvenanceLine(props: {
+  readonly tr: Translator;
+  readonly provenance: Provenance;
+}) {
   const { tr, provenance } = props;
   return (
     <p class="provenance" data-input-hash={provenance.inputHash}>
@@ -118,19 +157,37 @@ export function CommunityView(props: CommunityViewProps) {
   const { community, result } = data;
   const bandId = result.band.id as ScreeningBandId;
   const curve = result.curves[INTENSITY_MEASURE];
-  const rpLevels = Object.fromEntries(study.settings.returnPeriodsYears.map((t) => [String(t), result.atReturnPeriod[String(t)]?.[INTENSITY_MEASURE] ?? null]));
+  const rpLevels = Object.fromEntries(
+    study.settings.returnPeriodsYears.map((t) => [
+      String(t),
+      result.atReturnPeriod[String(t)]?.[INTENSITY_MEASURE] ?? null,
+    ]),
+  );
   return (
-    <PageShell tr={tr} title={community.name} path={props.path} toolVersion={props.toolVersion} study={{ id: studyId, name: study.name }} showsNumbers={false}>
+    <PageShell
+      tr={tr}
+      title={community.name}
+      path={props.path}
+      toolVersion={props.toolVersion}
+      study={{ id: studyId, name: study.name }}
+      showsNumbers={false}
+    >
       <h1>{community.name}</h1>
       <p class="band-line">
-        {tr.text('band.label')}: <BandSwatch tr={tr} bandId={bandId} /> — {tr.text(`band.${bandId}.meaning` as TextKey)}
+        {tr.text('band.label')}: <BandSwatch tr={tr} bandId={bandId} /> —{' '}
+        {tr.text(`band.${bandId}.meaning` as TextKey)}
       </p>
       <p class="facts">
-        {community.population !== undefined && <>{tr.text('community.people', { people: tr.number(community.population) })} </>}
+        {community.population !== undefined && (
+          <>{tr.text('community.people', { people: tr.number(community.population) })} </>
+        )}
         {community.coastal && <>{tr.text('community.coastal')} </>}
         {tr.text('community.site', {
           vs30: tr.number(community.vs30),
-          basis: community.vs30Basis === 'measured' ? tr.text('community.site.measured') : tr.text('community.site.site-class', { siteClass: community.siteClass ?? '' }),
+          basis:
+            community.vs30Basis === 'measured'
+              ? tr.text('community.site.measured')
+              : tr.text('community.site.site-class', { siteClass: community.siteClass ?? '' }),
         })}
       </p>
       <Headline tr={tr} data={data} name={community.name} />
@@ -140,12 +197,17 @@ export function CommunityView(props: CommunityViewProps) {
           {tr.text('caution.text')} <a href="/limits">{tr.text('caution.limitsLink')}</a>.
         </p>
       </aside>
-      {props.tsunami && <TsunamiTime tr={tr} communityId={community.id} tsunami={props.tsunami} headingLevel={2} />}
+      {props.tsunami && (
+        <TsunamiTime tr={tr} communityId={community.id} tsunami={props.tsunami} headingLevel={2} />
+      )}
       <p class="actions">
         <a class="button" href={`/studies/${studyId}/communities/${community.id}/handout`}>
           {tr.text('community.handout')}
         </a>{' '}
-        <a class="button" href={`/studies/${studyId}/scenario${data.sources[0]?.sourceId ? `?sourceId=${encodeURIComponent(data.sources[0].sourceId)}` : ''}`}>
+        <a
+          class="button"
+          href={`/studies/${studyId}/scenario${data.sources[0]?.sourceId ? `?sourceId=${encodeURIComponent(data.sources[0].sourceId)}` : ''}`}
+        >
           {tr.text('community.scenario')}
         </a>
       </p>
@@ -156,10 +218,26 @@ export function CommunityView(props: CommunityViewProps) {
       </section>
       <section aria-labelledby="sources-heading">
         <h2 id="sources-heading">{tr.text('community.sources')}</h2>
-        {data.sourcesReturnPeriod !== undefined && <p>{tr.text('community.sourcesIntro', { period: tr.number(data.sourcesReturnPeriod) })}</p>}
-        <ShareBars tr={tr} labelledBy="sources-heading" bars={data.sources.map((s) => ({ label: s.sourceId === null ? tr.text('community.sourcesOther') : s.name, share: s.share }))} />
+        {data.sourcesReturnPeriod !== undefined && (
+          <p>
+            {tr.text('community.sourcesIntro', { period: tr.number(data.sourcesReturnPeriod) })}
+          </p>
+        )}
+        <ShareBars
+          tr={tr}
+          labelledBy="sources-heading"
+          bars={data.sources.map((s) => ({
+            label: s.sourceId === null ? tr.text('community.sourcesOther') : s.name,
+            share: s.share,
+          }))}
+        />
         {data.meanMagnitude !== undefined && data.meanDistanceKm !== undefined && (
-          <p>{tr.text('community.sourcesMean', { magnitude: tr.number(data.meanMagnitude, 1), km: tr.number(data.meanDistanceKm) })}</p>
+          <p>
+            {tr.text('community.sourcesMean', {
+              magnitude: tr.number(data.meanMagnitude, 1),
+              km: tr.number(data.meanDistanceKm),
+            })}
+          </p>
         )}
       </section>
       <section aria-labelledby="faults-heading">
@@ -176,7 +254,14 @@ export function CommunityView(props: CommunityViewProps) {
           </ul>
         )}
         <figure class="map-figure map-small">
-          <StudyMap tr={tr} study={study} frame={props.frame} idPrefix="community-map" highlight={community.id} bands={new Map([[community.id, bandId]])} />
+          <StudyMap
+            tr={tr}
+            study={study}
+            frame={props.frame}
+            idPrefix="community-map"
+            highlight={community.id}
+            bands={new Map([[community.id, bandId]])}
+          />
         </figure>
       </section>
       {curve && (
@@ -184,14 +269,24 @@ export function CommunityView(props: CommunityViewProps) {
           <h2 id="curve-heading">{tr.text('community.curve')}</h2>
           <p>{tr.text('community.curveIntro')}</p>
           <figure class="plot-figure">
-            <HazardCurvePlot tr={tr} curve={curve} returnPeriodsYears={study.settings.returnPeriodsYears} levelsAtReturnPeriods={rpLevels} idPrefix="curve" />
+            <HazardCurvePlot
+              tr={tr}
+              curve={curve}
+              returnPeriodsYears={study.settings.returnPeriodsYears}
+              levelsAtReturnPeriods={rpLevels}
+              idPrefix="curve"
+            />
             <figcaption>
               <HazardCurveLegend tr={tr} branches={curve.branches?.length ?? 0} />
             </figcaption>
           </figure>
           {data.spread && (
             <p data-spread-low={data.spread.lowG} data-spread-high={data.spread.highG}>
-              {tr.text('community.spread', { period: tr.number(data.spread.returnPeriodYears), low: tr.number(data.spread.lowG, 2), high: tr.number(data.spread.highG, 2) })}
+              {tr.text('community.spread', {
+                period: tr.number(data.spread.returnPeriodYears),
+                low: tr.number(data.spread.lowG, 2),
+                high: tr.number(data.spread.highG, 2),
+              })}
             </p>
           )}
           <details class="curve-numbers">
@@ -222,7 +317,15 @@ export function CommunityView(props: CommunityViewProps) {
           </details>
         </section>
       )}
-      <FeltList tr={tr} studyId={studyId} communityName={community.name} {...(props.felt ? { felt: props.felt } : {})} tooMany={props.feltTooMany === true} limit={8} headingLevel={2} />
+      <FeltList
+        tr={tr}
+        studyId={studyId}
+        communityName={community.name}
+        {...(props.felt ? { felt: props.felt } : {})}
+        tooMany={props.feltTooMany === true}
+        limit={8}
+        headingLevel={2}
+      />
       <CommunityDetails tr={tr} details={community.details} />
       <section aria-labelledby="todo-heading">
         <h2 id="todo-heading">{tr.text('community.todo')}</h2>

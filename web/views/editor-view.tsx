@@ -33,7 +33,11 @@ export interface EditorViewProps {
 const PREVIEW_LINES = 200;
 
 /** "Line 5, lat: expected a number ..." / "Feature 4 (vennick), dip: ..." / the path as it is. */
-export function describeIssue(tr: Translator, issue: InputIssue, featureIds: readonly (string | undefined)[] = []): Child {
+export function describeIssue(
+  tr: Translator,
+  issue: InputIssue,
+  featureIds: readonly (string | undefined)[] = [],
+): Child {
   const message = tr.english(issue.message);
   const line = issueLine(issue.path);
   if (line !== undefined) {
@@ -49,7 +53,9 @@ export function describeIssue(tr: Translator, issue: InputIssue, featureIds: rea
   const feature = issueFeature(issue.path);
   if (feature !== undefined) {
     const id = featureIds[feature];
-    const rest = issue.path.replace(/^sources\.features\[\d+\]\.?/, '').replace(/^properties\./, '');
+    const rest = issue.path
+      .replace(/^sources\.features\[\d+\]\.?/, '')
+      .replace(/^properties\./, '');
     const where = (
       <>
         {tr.text('editor.feature', { n: feature + 1 })}
@@ -66,7 +72,9 @@ function featureIdsOf(text: string | undefined): (string | undefined)[] {
   if (text === undefined) return [];
   try {
     const value = JSON.parse(text) as { features?: { properties?: { id?: unknown } }[] };
-    return (value.features ?? []).map((f) => (typeof f?.properties?.id === 'string' ? f.properties.id : undefined));
+    return (value.features ?? []).map((f) =>
+      typeof f?.properties?.id === 'string' ? f.properties.id : undefined,
+    );
   } catch {
     return [];
   }
@@ -79,7 +87,15 @@ export function EditorView(props: EditorViewProps) {
   const geoProblem = problem?.upload === 'sources' ? problem : undefined;
   const featureIds = featureIdsOf(geoProblem?.text);
   return (
-    <PageShell tr={tr} title={tr.t('editor.title', { name: study.name })} titleLang={tr.fallbackLang('editor.title')} path={props.path} toolVersion={props.toolVersion} study={{ id: studyId, name: study.name }} section="edit">
+    <PageShell
+      tr={tr}
+      title={tr.t('editor.title', { name: study.name })}
+      titleLang={tr.fallbackLang('editor.title')}
+      path={props.path}
+      toolVersion={props.toolVersion}
+      study={{ id: studyId, name: study.name }}
+      section="edit"
+    >
       <h1>{tr.text('editor.title', { name: study.name })}</h1>
       <p>{tr.text('editor.intro')}</p>
       {props.saved && (
@@ -92,7 +108,12 @@ export function EditorView(props: EditorViewProps) {
           {tr.text('editor.notSaved')}
         </p>
       )}
-      <FieldProblems tr={tr} id="editor-notice" issues={props.notice ?? []} describe={(i) => describeIssue(tr, i)} />
+      <FieldProblems
+        tr={tr}
+        id="editor-notice"
+        issues={props.notice ?? []}
+        describe={(i) => describeIssue(tr, i)}
+      />
 
       <section aria-labelledby="communities-heading">
         <h2 id="communities-heading">{tr.text('editor.communities')}</h2>
@@ -118,9 +139,7 @@ export function EditorView(props: EditorViewProps) {
                 {tr.text('editor.col.people')}
               </th>
               <th scope="col">{tr.text('editor.col.coastal')}</th>
-              <th scope="col">
-                {tr.text('editor.col.actions')}
-              </th>
+              <th scope="col">{tr.text('editor.col.actions')}</th>
             </tr>
           </thead>
           <tbody>
@@ -132,12 +151,20 @@ export function EditorView(props: EditorViewProps) {
                 </td>
                 <td class="numeric">{String(c.lon)}</td>
                 <td class="numeric">{String(c.lat)}</td>
-                <td>{c.vs30Basis === 'measured' ? `${c.vs30} m/s` : `${c.siteClass} (${c.vs30} m/s)`}</td>
+                <td>
+                  {c.vs30Basis === 'measured' ? `${c.vs30} m/s` : `${c.siteClass} (${c.vs30} m/s)`}
+                </td>
                 <td class="numeric">{c.population === undefined ? '' : tr.number(c.population)}</td>
                 <td>{c.coastal ? tr.text('editor.coastalYes') : ''}</td>
                 <td class="row-actions">
-                  <a href={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}`}>{tr.text('editor.edit', { name: c.name })}</a>
-                  <form method="post" action={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}/remove`} class="inline-form">
+                  <a href={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}`}>
+                    {tr.text('editor.edit', { name: c.name })}
+                  </a>
+                  <form
+                    method="post"
+                    action={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}/remove`}
+                    class="inline-form"
+                  >
                     <button type="submit" class="button-quiet">
                       {tr.text('editor.remove', { name: c.name })}
                     </button>
@@ -151,7 +178,11 @@ export function EditorView(props: EditorViewProps) {
 
       <section aria-labelledby="upload-communities-heading" class="upload">
         <h2 id="upload-communities-heading">{tr.text('editor.upload.communities')}</h2>
-        <form method="post" action={`/studies/${studyId}/edit/communities-csv#upload-communities-heading`} enctype="multipart/form-data">
+        <form
+          method="post"
+          action={`/studies/${studyId}/edit/communities-csv#upload-communities-heading`}
+          enctype="multipart/form-data"
+        >
           <div class="field">
             <label for="communities-file">{tr.text('editor.upload.file')}</label>
             <input
@@ -159,7 +190,9 @@ export function EditorView(props: EditorViewProps) {
               name="file"
               type="file"
               accept=".csv,.txt,.tsv,.xlsx,.kml,.kmz,.zip,.geojson,.json"
-              aria-describedby={csvProblem ? 'communities-help communities-problems' : 'communities-help'}
+              aria-describedby={
+                csvProblem ? 'communities-help communities-problems' : 'communities-help'
+              }
               aria-invalid={csvProblem ? 'true' : undefined}
             />
             <p id="communities-help" class="help">
@@ -168,14 +201,27 @@ export function EditorView(props: EditorViewProps) {
             {csvProblem && (
               <div class="upload-problems" data-upload="communities">
                 <p class="problem-title">{tr.text('editor.problems')}</p>
-                <FieldProblems tr={tr} id="communities-problems" issues={csvProblem.issues} describe={(i) => describeIssue(tr, i)} />
-                {csvProblem.text !== undefined && <CsvLines tr={tr} text={csvProblem.text} issues={csvProblem.issues} />}
+                <FieldProblems
+                  tr={tr}
+                  id="communities-problems"
+                  issues={csvProblem.issues}
+                  describe={(i) => describeIssue(tr, i)}
+                />
+                {csvProblem.text !== undefined && (
+                  <CsvLines tr={tr} text={csvProblem.text} issues={csvProblem.issues} />
+                )}
               </div>
             )}
           </div>
           <button type="submit">{tr.text('editor.upload.button')}</button>
         </form>
-        {csvProblem?.pick && <ColumnPickForm tr={tr} action={`/studies/${studyId}/edit/communities-csv#upload-communities-heading`} pick={csvProblem.pick} />}
+        {csvProblem?.pick && (
+          <ColumnPickForm
+            tr={tr}
+            action={`/studies/${studyId}/edit/communities-csv#upload-communities-heading`}
+            pick={csvProblem.pick}
+          />
+        )}
       </section>
 
       <section aria-labelledby="sources-heading">
@@ -207,7 +253,11 @@ export function EditorView(props: EditorViewProps) {
 
       <section aria-labelledby="upload-sources-heading" class="upload">
         <h2 id="upload-sources-heading">{tr.text('editor.upload.sources')}</h2>
-        <form method="post" action={`/studies/${studyId}/edit/sources-geojson#upload-sources-heading`} enctype="multipart/form-data">
+        <form
+          method="post"
+          action={`/studies/${studyId}/edit/sources-geojson#upload-sources-heading`}
+          enctype="multipart/form-data"
+        >
           <div class="field">
             <label for="sources-file">{tr.text('editor.upload.file')}</label>
             <input
@@ -224,7 +274,12 @@ export function EditorView(props: EditorViewProps) {
             {geoProblem && (
               <div class="upload-problems" data-upload="sources">
                 <p class="problem-title">{tr.text('editor.problems')}</p>
-                <FieldProblems tr={tr} id="sources-problems" issues={geoProblem.issues} describe={(i) => describeIssue(tr, i, featureIds)} />
+                <FieldProblems
+                  tr={tr}
+                  id="sources-problems"
+                  issues={geoProblem.issues}
+                  describe={(i) => describeIssue(tr, i, featureIds)}
+                />
               </div>
             )}
           </div>
@@ -236,9 +291,16 @@ export function EditorView(props: EditorViewProps) {
 }
 
 /** The uploaded CSV's lines, each bad line with its problems beside it. */
-function CsvLines(props: { readonly tr: Translator; readonly text: string; readonly issues: readonly InputIssue[] }) {
+function CsvLines(props: {
+  readonly tr: Translator;
+  readonly text: string;
+  readonly issues: readonly InputIssue[];
+}) {
   const { tr } = props;
-  const lines = props.text.replace(/^\uFEFF/, '').split(/\r\n|\r|\n/).slice(0, PREVIEW_LINES);
+  const lines = props.text
+    .replace(/^\uFEFF/, '')
+    .split(/\r\n|\r|\n/)
+    .slice(0, PREVIEW_LINES);
   const byLine = new Map<number, InputIssue[]>();
   for (const issue of props.issues) {
     const line = issueLine(issue.path);
@@ -267,7 +329,16 @@ function CsvLines(props: { readonly tr: Translator; readonly text: string; reado
               <td>
                 <code>{text}</code>
               </td>
-              <td>{tr.english(problems.map((p) => p.path.split(`[line ${i + 1}]`)[1]?.replace(/^\./, '') + ': ' + p.message).join('; '))}</td>
+              <td>
+                {tr.english(
+                  problems
+                    .map(
+                      (p) =>
+                        p.path.split(`[line ${i + 1}]`)[1]?.replace(/^\./, '') + ': ' + p.message,
+                    )
+                    .join('; '),
+                )}
+              </td>
             </tr>
           );
         })}

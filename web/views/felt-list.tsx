@@ -31,15 +31,24 @@ export function FeltList(props: FeltListProps) {
         <p>{tr.text('community.feltTooMany')}</p>
       ) : !felt ? (
         <p>
-          {tr.text('community.feltNoCatalog')} {!props.compact && <a href={`/studies/${props.studyId}/catalog`}>{tr.text('community.feltAttach')}</a>}
+          {tr.text('community.feltNoCatalog')}{' '}
+          {!props.compact && (
+            <a href={`/studies/${props.studyId}/catalog`}>{tr.text('community.feltAttach')}</a>
+          )}
         </p>
       ) : felt.history.felt.length === 0 ? (
         <p>{tr.text('community.feltNone', { events: tr.number(felt.eventCount) })}</p>
       ) : (
         <>
           {!props.compact && <p>{tr.text('community.feltIntro')}</p>}
-          <p data-felt={felt.history.felt.length} data-strongly-felt={felt.history.stronglyFelt.length}>
-            {tr.text('community.feltCounts', { felt: tr.count(felt.history.felt.length), strong: tr.count(felt.history.stronglyFelt.length) })}
+          <p
+            data-felt={felt.history.felt.length}
+            data-strongly-felt={felt.history.stronglyFelt.length}
+          >
+            {tr.text('community.feltCounts', {
+              felt: tr.count(felt.history.felt.length),
+              strong: tr.count(felt.history.stronglyFelt.length),
+            })}
           </p>
           <table class="data-table felt-table">
             <caption>{tr.text('community.feltCaption', { name: props.communityName })}</caption>
@@ -60,7 +69,10 @@ export function FeltList(props: FeltListProps) {
                   <td class="numeric">{`M ${tr.number(e.magnitude, 1)}`}</td>
                   <td>{tr.place(e.distanceKm, e.bearingDeg)}</td>
                   <td>
-                    {tr.mmi(e.mmi)} · {tr.text(`mmi.${Math.min(10, Math.max(1, Math.floor(e.mmi)))}.name` as 'mmi.1.name')}
+                    {tr.mmi(e.mmi)} ·{' '}
+                    {tr.text(
+                      `mmi.${Math.min(10, Math.max(1, Math.floor(e.mmi)))}.name` as 'mmi.1.name',
+                    )}
                   </td>
                 </tr>
               ))}

@@ -37,7 +37,9 @@ export function HandoutView(props: HandoutViewProps) {
   const top = data.sources
     .filter((s) => s.sourceId !== null)
     .slice(0, 3)
-    .map((s) => `${s.name} (${tr.t('chance.percent', { p: tr.number(Math.round(s.share * 100)) })})`)
+    .map(
+      (s) => `${s.name} (${tr.t('chance.percent', { p: tr.number(Math.round(s.share * 100)) })})`,
+    )
     .join(', ');
   const title = tr.t('handout.title', { name: community.name });
   return (
@@ -57,7 +59,9 @@ export function HandoutView(props: HandoutViewProps) {
         </a>
         <header class="handout-tools no-print">
           <nav aria-label={tr.t('nav.main')}>
-            <a href={`/studies/${props.studyId}/communities/${community.id}`}>{tr.text('handout.back')}</a>
+            <a href={`/studies/${props.studyId}/communities/${community.id}`}>
+              {tr.text('handout.back')}
+            </a>
           </nav>
           <p>{tr.text('handout.printHint')}</p>
           <form class="lang-switch" action="/language" method="get">
@@ -72,7 +76,12 @@ export function HandoutView(props: HandoutViewProps) {
             <input type="hidden" name="back" value={props.path} />
             <button type="submit">{tr.text('lang.change')}</button>
           </form>
-          <p data-print-button="true" data-print-label={tr.t('handout.print')} lang={tr.fallbackLang('handout.print')} class="print-slot"></p>
+          <p
+            data-print-button="true"
+            data-print-label={tr.t('handout.print')}
+            lang={tr.fallbackLang('handout.print')}
+            class="print-slot"
+          ></p>
         </header>
         <table class="handout-frame" role="presentation">
           <tbody>
@@ -81,10 +90,19 @@ export function HandoutView(props: HandoutViewProps) {
                 <main id="main" tabindex={-1} class="handout">
                   <h1>{tr.text('handout.title', { name: community.name })}</h1>
                   <p class="band-line">
-                    {tr.text('band.label')}: <BandSwatch tr={tr} bandId={bandId} /> — {tr.text(`band.${bandId}.meaning` as TextKey)}
+                    {tr.text('band.label')}: <BandSwatch tr={tr} bandId={bandId} /> —{' '}
+                    {tr.text(`band.${bandId}.meaning` as TextKey)}
                   </p>
                   <Headline tr={tr} data={data} name={community.name} />
-                  {props.tsunami && <TsunamiTime tr={tr} communityId={community.id} tsunami={props.tsunami} headingLevel={2} compact />}
+                  {props.tsunami && (
+                    <TsunamiTime
+                      tr={tr}
+                      communityId={community.id}
+                      tsunami={props.tsunami}
+                      headingLevel={2}
+                      compact
+                    />
+                  )}
                   <section aria-labelledby="h-levels">
                     <h2 id="h-levels">{tr.text('community.levels')}</h2>
                     <ShakingLevels tr={tr} data={data} headingLevel={2} compact={true} />
@@ -96,14 +114,23 @@ export function HandoutView(props: HandoutViewProps) {
                       <ul class="faults">
                         {result.nearestFaults.map((f) => (
                           <li>
-                            <strong>{f.name}</strong>: {tr.place(f.distanceKm, f.bearingDeg, f.depthBelowKm)}
+                            <strong>{f.name}</strong>:{' '}
+                            {tr.place(f.distanceKm, f.bearingDeg, f.depthBelowKm)}
                           </li>
                         ))}
                       </ul>
                     </section>
                   )}
                   {props.felt && props.felt.history.felt.length > 0 && (
-                    <FeltList tr={tr} studyId={props.studyId} communityName={community.name} felt={props.felt} limit={3} headingLevel={2} compact={true} />
+                    <FeltList
+                      tr={tr}
+                      studyId={props.studyId}
+                      communityName={community.name}
+                      felt={props.felt}
+                      limit={3}
+                      headingLevel={2}
+                      compact={true}
+                    />
                   )}
                   <section aria-labelledby="h-todo" class="handout-todo">
                     <h2 id="h-todo">{tr.text('community.todo')}</h2>
@@ -121,7 +148,9 @@ export function HandoutView(props: HandoutViewProps) {
                     <strong>{tr.text('caution.short')}</strong>
                   </p>
                   <ProvenanceLine tr={tr} provenance={props.provenance} />
-                  <p class="printed">{tr.text('provenance.printed', { date: tr.date(props.printedAt) })}</p>
+                  <p class="printed">
+                    {tr.text('provenance.printed', { date: tr.date(props.printedAt) })}
+                  </p>
                 </div>
               </td>
             </tr>

@@ -36,59 +36,98 @@ export function HazardMapPanel(props: HazardMapPanelProps) {
   const issues = props.form?.issues ?? [];
   const issuesAt = (path: string) => issues.filter((i) => i.path === path);
   const others = issues.filter((i) => !(FIELDS as readonly string[]).includes(i.path));
-  const describedBy = (path: string, help?: string) => [help, issuesAt(path).length > 0 ? `hazard-map-${path}-problem` : undefined].filter(Boolean).join(' ') || undefined;
+  const describedBy = (path: string, help?: string) =>
+    [help, issuesAt(path).length > 0 ? `hazard-map-${path}-problem` : undefined]
+      .filter(Boolean)
+      .join(' ') || undefined;
   const latest = maps.latest;
   const shown = maps.shown;
   const unfinished = latest && (latest.status === 'queued' || latest.status === 'running');
   const failed = latest && !unfinished && latest.status !== 'done';
-  const measure = props.form?.measure ?? shown?.run.request.measure ?? study.settings.measures[0] ?? 'PGA';
-  const shownYears = shown?.run.request.quantity.kind === 'return-period' ? String(shown.run.request.quantity.returnPeriodYears) : undefined;
-  const years = props.form?.returnPeriodYears ?? shownYears ?? String(study.settings.returnPeriodsYears[0] ?? 475);
+  const measure =
+    props.form?.measure ?? shown?.run.request.measure ?? study.settings.measures[0] ?? 'PGA';
+  const shownYears =
+    shown?.run.request.quantity.kind === 'return-period'
+      ? String(shown.run.request.quantity.returnPeriodYears)
+      : undefined;
+  const years =
+    props.form?.returnPeriodYears ??
+    shownYears ??
+    String(study.settings.returnPeriodsYears[0] ?? 475);
   const spacing = props.form?.spacingKm ?? String(suggestion.spacingKm);
   return (
     <section aria-labelledby="hazard-map-heading" id="hazard-map" class="hazard-map-panel">
       <h3 id="hazard-map-heading">{tr.text('hazardMap.heading')}</h3>
       {(unfinished || failed || shown) && (
-      <div class="status-box">
-        {unfinished ? (
-          <p>
-            {latest.status === 'queued' ? tr.text('hazardMap.queued') : tr.text('hazardMap.running', { percent: Math.round(latest.progress * 100) })}{' '}
-            <a href={`/studies/${studyId}/maps/${latest.id}`}>{tr.text('hazardMap.follow')}</a>
-          </p>
-        ) : (
-          failed && <p class="problem">{tr.text('hazardMap.lastFailed', { error: tr.english(latest.error ?? latest.status) })}</p>
-        )}
-        {shown ? (
-          <>
-            <p>{tr.text('hazardMap.computedOn', { date: tr.date(shown.run.finishedAt ?? shown.run.createdAt) })}</p>
-            {!shown.current && <p class="notice">{tr.text('hazardMap.stale')}</p>}
-            {!shown.layer && shown.run.description.count > MAX_DRAWN_POINTS && (
-              <p class="notice">
-                {tr.text('hazardMap.tooMany', { count: tr.number(shown.run.description.count) })}{' '}
-                <a href={`/api/maps/${shown.run.id}/map.geojson`}>{tr.text('hazardMap.download')}</a>
+        <div class="status-box">
+          {unfinished ? (
+            <p>
+              {latest.status === 'queued'
+                ? tr.text('hazardMap.queued')
+                : tr.text('hazardMap.running', { percent: Math.round(latest.progress * 100) })}{' '}
+              <a href={`/studies/${studyId}/maps/${latest.id}`}>{tr.text('hazardMap.follow')}</a>
+            </p>
+          ) : (
+            failed && (
+              <p class="problem">
+                {tr.text('hazardMap.lastFailed', {
+                  error: tr.english(latest.error ?? latest.status),
+                })}
               </p>
-            )}
-            {shown.run.warnings.length > 0 && (
-              <details>
-                <summary>{tr.text('hazardMap.warnings')}</summary>
-                <ul>
-                  {shown.run.warnings.map((w) => (
-                    <li>{tr.english(w)}</li>
-                  ))}
-                </ul>
-              </details>
-            )}
-          </>
-        ) : null}
-      </div>
+            )
+          )}
+          {shown ? (
+            <>
+              <p>
+                {tr.text('hazardMap.computedOn', {
+                  date: tr.date(shown.run.finishedAt ?? shown.run.createdAt),
+                })}
+              </p>
+              {!shown.current && <p class="notice">{tr.text('hazardMap.stale')}</p>}
+              {!shown.layer && shown.run.description.count > MAX_DRAWN_POINTS && (
+                <p class="notice">
+                  {tr.text('hazardMap.tooMany', { count: tr.number(shown.run.description.count) })}{' '}
+                  <a href={`/api/maps/${shown.run.id}/map.geojson`}>
+                    {tr.text('hazardMap.download')}
+                  </a>
+                </p>
+              )}
+              {shown.run.warnings.length > 0 && (
+                <details>
+                  <summary>{tr.text('hazardMap.warnings')}</summary>
+                  <ul>
+                    {shown.run.warnings.map((w) => (
+                      <li>{tr.english(w)}</li>
+                    ))}
+                  </ul>
+                </details>
+              )}
+            </>
+          ) : null}
+        </div>
       )}
       <p>{tr.text('hazardMap.intro')}</p>
       <form method="post" action={`/studies/${studyId}/maps`} class="hazard-map-form" novalidate>
         <div class="field">
           <label for="hazard-map-measure">{tr.text('hazardMap.measure')}</label>
-          <select id="hazard-map-measure" name="measure" aria-describedby={describedBy('measure')} aria-invalid={issuesAt('measure').length > 0 ? 'true' : undefined}>
+          <select
+            id="hazard-map-measure"
+            name="measure"
+            aria-describedby={describedBy('measure')}
+            aria-invalid={issuesAt('measure').length > 0 ? 'true' : undefined}
+          >
             {study.settings.measures.map((m) => (
-              <option value={m} selected={m === measure} lang={tr.fallbackLang(m.startsWith('SA') ? 'hazardMap.measure.SA' : m === 'PGV' ? 'hazardMap.measure.PGV' : 'hazardMap.measure.PGA')}>
+              <option
+                value={m}
+                selected={m === measure}
+                lang={tr.fallbackLang(
+                  m.startsWith('SA')
+                    ? 'hazardMap.measure.SA'
+                    : m === 'PGV'
+                      ? 'hazardMap.measure.PGV'
+                      : 'hazardMap.measure.PGA',
+                )}
+              >
                 {measureWords(tr, m, true)}
               </option>
             ))}
@@ -97,14 +136,27 @@ export function HazardMapPanel(props: HazardMapPanelProps) {
         </div>
         <div class="field">
           <label for="hazard-map-return-period">{tr.text('hazardMap.returnPeriod')}</label>
-          <select id="hazard-map-return-period" name="returnPeriodYears" aria-describedby={describedBy('returnPeriodYears')} aria-invalid={issuesAt('returnPeriodYears').length > 0 ? 'true' : undefined}>
+          <select
+            id="hazard-map-return-period"
+            name="returnPeriodYears"
+            aria-describedby={describedBy('returnPeriodYears')}
+            aria-invalid={issuesAt('returnPeriodYears').length > 0 ? 'true' : undefined}
+          >
             {study.settings.returnPeriodsYears.map((y) => (
-              <option value={String(y)} selected={String(y) === years} lang={tr.fallbackLang('hazardMap.returnPeriodOption')}>
+              <option
+                value={String(y)}
+                selected={String(y) === years}
+                lang={tr.fallbackLang('hazardMap.returnPeriodOption')}
+              >
                 {tr.t('hazardMap.returnPeriodOption', { years: tr.number(y) })}
               </option>
             ))}
           </select>
-          <FieldProblems tr={tr} id="hazard-map-returnPeriodYears-problem" issues={issuesAt('returnPeriodYears')} />
+          <FieldProblems
+            tr={tr}
+            id="hazard-map-returnPeriodYears-problem"
+            issues={issuesAt('returnPeriodYears')}
+          />
         </div>
         <div class="field">
           <label for="hazard-map-spacing">{tr.text('hazardMap.spacing')}</label>
@@ -121,7 +173,11 @@ export function HazardMapPanel(props: HazardMapPanelProps) {
             aria-invalid={issuesAt('spacingKm').length > 0 ? 'true' : undefined}
           />
           <p class="help" id="hazard-map-spacing-help">
-            {tr.text('hazardMap.spacingHelp', { km: tr.number(suggestion.spacingKm), cells: tr.number(suggestion.cellsAcross), span: tr.number(suggestion.spanKm) })}
+            {tr.text('hazardMap.spacingHelp', {
+              km: tr.number(suggestion.spacingKm),
+              cells: tr.number(suggestion.cellsAcross),
+              span: tr.number(suggestion.spanKm),
+            })}
           </p>
           <FieldProblems tr={tr} id="hazard-map-spacingKm-problem" issues={issuesAt('spacingKm')} />
         </div>

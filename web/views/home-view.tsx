@@ -2,10 +2,21 @@ import type { StudySummary } from '../../api/store/index.ts';
 import { PageShell } from '../layout/page-shell.tsx';
 import type { Translator } from '../text/translator.ts';
 
-export function HomeView(props: { readonly tr: Translator; readonly path: string; readonly toolVersion: string; readonly studies: readonly StudySummary[] }) {
+export function HomeView(props: {
+  readonly tr: Translator;
+  readonly path: string;
+  readonly toolVersion: string;
+  readonly studies: readonly StudySummary[];
+}) {
   const { tr } = props;
   return (
-    <PageShell tr={tr} title={tr.t('home.title')} titleLang={tr.fallbackLang('home.title')} path={props.path} toolVersion={props.toolVersion}>
+    <PageShell
+      tr={tr}
+      title={tr.t('home.title')}
+      titleLang={tr.fallbackLang('home.title')}
+      path={props.path}
+      toolVersion={props.toolVersion}
+    >
       <h1>{tr.text('home.title')}</h1>
       <p class="lead">{tr.text('home.intro')}</p>
       <p>{tr.text('home.start')}</p>

@@ -3,10 +3,20 @@ import type { Translator } from '../text/translator.ts';
 import { SafetyAdvice } from './safety-advice.tsx';
 
 /** The limits of a screening and the safety advice (SAFETY.md in plain words). */
-export function LimitsView(props: { readonly tr: Translator; readonly path: string; readonly toolVersion: string }) {
+export function LimitsView(props: {
+  readonly tr: Translator;
+  readonly path: string;
+  readonly toolVersion: string;
+}) {
   const { tr } = props;
   return (
-    <PageShell tr={tr} title={tr.t('limits.title')} titleLang={tr.fallbackLang('limits.title')} path={props.path} toolVersion={props.toolVersion}>
+    <PageShell
+      tr={tr}
+      title={tr.t('limits.title')}
+      titleLang={tr.fallbackLang('limits.title')}
+      path={props.path}
+      toolVersion={props.toolVersion}
+    >
       <h1>{tr.text('limits.title')}</h1>
       <p class="lead">{tr.text('limits.intro')}</p>
       <ul class="limits" lang={tr.fallbackLang('limits.list')}>

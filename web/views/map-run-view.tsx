@@ -22,12 +22,29 @@ export function MapRunView(props: MapRunViewProps) {
   const { tr, run, studyId } = props;
   const unfinished = run.status === 'queued' || run.status === 'running';
   const doneUrl = `/studies/${studyId}#map-heading`;
-  const what = run.description ?? { measure: run.request.measure, unit: measureUnit(parseMeasure(run.request.measure)), quantity: run.request.quantity };
+  const what = run.description ?? {
+    measure: run.request.measure,
+    unit: measureUnit(parseMeasure(run.request.measure)),
+    quantity: run.request.quantity,
+  };
   return (
-    <PageShell tr={tr} title={tr.t('mapRun.title', { name: props.studyName })} titleLang={tr.fallbackLang('mapRun.title')} path={props.path} toolVersion={props.toolVersion} study={{ id: studyId, name: props.studyName }}>
+    <PageShell
+      tr={tr}
+      title={tr.t('mapRun.title', { name: props.studyName })}
+      titleLang={tr.fallbackLang('mapRun.title')}
+      path={props.path}
+      toolVersion={props.toolVersion}
+      study={{ id: studyId, name: props.studyName }}
+    >
       <h1>{tr.text('mapRun.title', { name: props.studyName })}</h1>
       <p>{mapTitle(tr, what)}</p>
-      <div class="run-status" data-run={run.id} data-status={run.status} data-status-url={`/api/maps/${run.id}`} data-done-url={doneUrl}>
+      <div
+        class="run-status"
+        data-run={run.id}
+        data-status={run.status}
+        data-status-url={`/api/maps/${run.id}`}
+        data-done-url={doneUrl}
+      >
         {unfinished ? (
           <>
             <p class="run-state" aria-live="polite">
@@ -49,7 +66,9 @@ export function MapRunView(props: MapRunViewProps) {
             {tr.text('mapRun.done')} <a href={doneUrl}>{tr.text('mapRun.see')}</a>
           </p>
         ) : (
-          <p class="problem">{tr.text('mapRun.failed', { error: tr.english(run.error ?? run.status) })}</p>
+          <p class="problem">
+            {tr.text('mapRun.failed', { error: tr.english(run.error ?? run.status) })}
+          </p>
         )}
       </div>
       <p>

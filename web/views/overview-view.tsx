@@ -5,7 +5,12 @@ import type { SuggestedSpacing } from '../data/map-spacing.ts';
 import type { TsunamiCommunity } from '../../api/engine/tsunami/index.ts';
 import type { TsunamiPageResult } from '../data/tsunami-data.ts';
 import { TsunamiRanking } from './tsunami-time.tsx';
-import { FIRST_DIRECTION, type RankedCommunity, type SortDirection, type SortKey } from '../data/ranking.ts';
+import {
+  FIRST_DIRECTION,
+  type RankedCommunity,
+  type SortDirection,
+  type SortKey,
+} from '../data/ranking.ts';
 import type { RunState } from '../data/study-data.ts';
 import { BandSwatch } from '../layout/band-swatch.tsx';
 import { PageShell } from '../layout/page-shell.tsx';
@@ -35,13 +40,20 @@ export interface OverviewProps {
   /** The hazard-map form as sent, when it had problems. */
   readonly mapForm?: MapFormState;
   /** Coastal communities by tsunami time to act, when the study has a terrain grid. */
-  readonly tsunami?: { readonly times: TsunamiPageResult; readonly ranked: readonly TsunamiCommunity[] };
+  readonly tsunami?: {
+    readonly times: TsunamiPageResult;
+    readonly ranked: readonly TsunamiCommunity[];
+  };
 }
 
 /** Id of the hazard layer's summary, the map's description for assistive technology. */
 const HAZARD_SUMMARY_ID = 'overview-map-hazard-summary';
 
-const COLUMNS: readonly { readonly key: SortKey; readonly text: (tr: Translator, years: number) => Child; readonly numeric?: boolean }[] = [
+const COLUMNS: readonly {
+  readonly key: SortKey;
+  readonly text: (tr: Translator, years: number) => Child;
+  readonly numeric?: boolean;
+}[] = [
   { key: 'rank', text: (tr) => tr.text('overview.col.rank'), numeric: true },
   { key: 'name', text: (tr) => tr.text('overview.col.community') },
   { key: 'band', text: (tr) => tr.text('overview.col.band') },
@@ -59,7 +71,9 @@ export function OverviewView(props: OverviewProps) {
   const bands = new Map(rows?.map((r) => [r.communityId, r.bandId]) ?? []);
   const shown = props.maps.shown;
   // A map with too many points to draw is offered as a download only (hazard-map-panel.tsx).
-  const drawn = shown?.layer ? { run: shown.run, layer: shown.layer, classes: layerClasses(shown.layer.points) } : undefined;
+  const drawn = shown?.layer
+    ? { run: shown.run, layer: shown.layer, classes: layerClasses(shown.layer.points) }
+    : undefined;
   return (
     <PageShell
       tr={tr}
@@ -72,7 +86,12 @@ export function OverviewView(props: OverviewProps) {
       showsNumbers={rows !== undefined || drawn !== undefined || props.tsunami !== undefined}
     >
       <h1>{tr.text('overview.title', { name: study.name })}</h1>
-      <ScreeningStatus tr={tr} studyId={studyId} runs={props.runs} {...(props.problem ? { problem: props.problem } : {})} />
+      <ScreeningStatus
+        tr={tr}
+        studyId={studyId}
+        runs={props.runs}
+        {...(props.problem ? { problem: props.problem } : {})}
+      />
       <section aria-labelledby="map-heading" class="map-section">
         <h2 id="map-heading">{tr.text('overview.map')}</h2>
         <figure class="map-figure">
@@ -82,19 +101,46 @@ export function OverviewView(props: OverviewProps) {
             frame={props.frame}
             idPrefix="overview-map"
             bands={bands}
-            hazardLayer={drawn?.classes ? <HazardLayer points={drawn.layer.points} classes={drawn.classes} spacingKm={drawn.run.description.spacingKm} frame={props.frame} /> : undefined}
+            hazardLayer={
+              drawn?.classes ? (
+                <HazardLayer
+                  points={drawn.layer.points}
+                  classes={drawn.classes}
+                  spacingKm={drawn.run.description.spacingKm}
+                  frame={props.frame}
+                />
+              ) : undefined
+            }
             {...(drawn ? { describedBy: HAZARD_SUMMARY_ID } : {})}
           />
           <figcaption>
             {drawn ? (
-              <HazardMapLegend tr={tr} description={drawn.run.description} {...(drawn.classes ? { classes: drawn.classes } : {})} geojsonUrl={`/api/maps/${drawn.run.id}/map.geojson`} summaryId={HAZARD_SUMMARY_ID} />
+              <HazardMapLegend
+                tr={tr}
+                description={drawn.run.description}
+                {...(drawn.classes ? { classes: drawn.classes } : {})}
+                geojsonUrl={`/api/maps/${drawn.run.id}/map.geojson`}
+                summaryId={HAZARD_SUMMARY_ID}
+              />
             ) : (
               !shown && <p class="legend-note">{tr.text('map.noHazardLayer')}</p>
             )}
-            <StudyMapLegend tr={tr} idPrefix="overview-map" bands={rows !== undefined} study={study} />
+            <StudyMapLegend
+              tr={tr}
+              idPrefix="overview-map"
+              bands={rows !== undefined}
+              study={study}
+            />
           </figcaption>
         </figure>
-        <HazardMapPanel tr={tr} studyId={studyId} study={study} maps={props.maps} suggestion={props.mapSpacing} {...(props.mapForm ? { form: props.mapForm } : {})} />
+        <HazardMapPanel
+          tr={tr}
+          studyId={studyId}
+          study={study}
+          maps={props.maps}
+          suggestion={props.mapSpacing}
+          {...(props.mapForm ? { form: props.mapForm } : {})}
+        />
       </section>
       <section aria-labelledby="ranking-heading">
         <h2 id="ranking-heading">{tr.text('overview.ranking')}</h2>
@@ -103,19 +149,39 @@ export function OverviewView(props: OverviewProps) {
         ) : (
           <>
             <p>{tr.text('overview.rankingRule', { years: props.years })}</p>
-            <table class="data-table ranking" data-sortable="true" data-label-ascending={tr.t('overview.sorted.ascending')} data-label-descending={tr.t('overview.sorted.descending')}>
+            <table
+              class="data-table ranking"
+              data-sortable="true"
+              data-label-ascending={tr.t('overview.sorted.ascending')}
+              data-label-descending={tr.t('overview.sorted.descending')}
+            >
               <caption>{tr.text('overview.ranking')}</caption>
               <thead>
                 <tr>
                   {COLUMNS.map((col) => {
                     const active = props.sort === col.key;
-                    const next: SortDirection = active ? (props.direction === 'ascending' ? 'descending' : 'ascending') : FIRST_DIRECTION[col.key];
+                    const next: SortDirection = active
+                      ? props.direction === 'ascending'
+                        ? 'descending'
+                        : 'ascending'
+                      : FIRST_DIRECTION[col.key];
                     return (
-                      <th scope="col" aria-sort={active ? props.direction : undefined} class={col.numeric ? 'numeric' : undefined}>
-                        <a href={`/studies/${studyId}?sort=${col.key}&dir=${next}#ranking-heading`} data-sort={col.key} data-first={FIRST_DIRECTION[col.key]}>
+                      <th
+                        scope="col"
+                        aria-sort={active ? props.direction : undefined}
+                        class={col.numeric ? 'numeric' : undefined}
+                      >
+                        <a
+                          href={`/studies/${studyId}?sort=${col.key}&dir=${next}#ranking-heading`}
+                          data-sort={col.key}
+                          data-first={FIRST_DIRECTION[col.key]}
+                        >
                           {col.text(tr, props.years)}
                           {/* The script rewrites this text from the table's data-label-* attributes, which share a bundle. */}
-                          <span class="sort-state" lang={tr.fallbackLang('overview.sorted.ascending')}>
+                          <span
+                            class="sort-state"
+                            lang={tr.fallbackLang('overview.sorted.ascending')}
+                          >
                             {active ? ` (${tr.t(`overview.sorted.${props.direction}`)})` : ''}
                           </span>
                         </a>
@@ -135,17 +201,39 @@ export function OverviewView(props: OverviewProps) {
                       <th scope="row" data-key="name" data-value={r.name}>
                         <a href={`/studies/${studyId}/communities/${r.communityId}`}>{r.name}</a>
                       </th>
-                      <td data-key="band" data-value={['refer-first', 'refer-soon', 'prepare', 'inform'].indexOf(r.bandId)} data-band={r.bandId}>
+                      <td
+                        data-key="band"
+                        data-value={['refer-first', 'refer-soon', 'prepare', 'inform'].indexOf(
+                          r.bandId,
+                        )}
+                        data-band={r.bandId}
+                      >
                         <BandSwatch tr={tr} bandId={r.bandId} />
                       </td>
-                      <td class="numeric" data-key="chance" data-value={r.chanceVii} data-probability={r.chanceVii}>
+                      <td
+                        class="numeric"
+                        data-key="chance"
+                        data-value={r.chanceVii}
+                        data-probability={r.chanceVii}
+                      >
                         {chance.frequency} <span class="percent">({chance.percent})</span>
                       </td>
                       <td class="numeric" data-key="people" data-value={r.population ?? ''}>
-                        {r.population === undefined ? tr.text('overview.unknownPeople') : tr.number(r.population)}
+                        {r.population === undefined
+                          ? tr.text('overview.unknownPeople')
+                          : tr.number(r.population)}
                       </td>
-                      <td data-key="fault" data-value={r.nearestFault === undefined ? '' : (r.nearestFault.rrupKm ?? r.nearestFault.distanceKm)}>
-                        {r.nearestFault ? `${r.nearestFault.name}, ${tr.place(r.nearestFault.distanceKm, r.nearestFault.bearingDeg, r.nearestFault.depthBelowKm)}` : tr.text('overview.noFault')}
+                      <td
+                        data-key="fault"
+                        data-value={
+                          r.nearestFault === undefined
+                            ? ''
+                            : (r.nearestFault.rrupKm ?? r.nearestFault.distanceKm)
+                        }
+                      >
+                        {r.nearestFault
+                          ? `${r.nearestFault.name}, ${tr.place(r.nearestFault.distanceKm, r.nearestFault.bearingDeg, r.nearestFault.depthBelowKm)}`
+                          : tr.text('overview.noFault')}
                       </td>
                     </tr>
                   );
@@ -155,14 +243,27 @@ export function OverviewView(props: OverviewProps) {
             <p class="band-rule">{tr.text('band.rule')}</p>
             {props.runs.screening && (
               <p>
-                {tr.text('overview.downloads')}: <a href={`/api/runs/${props.runs.screening.run.id}/results.csv`}>{tr.text('overview.csv')}</a> ·{' '}
-                <a href={`/api/runs/${props.runs.screening.run.id}/results.geojson`}>{tr.text('overview.geojson')}</a>
+                {tr.text('overview.downloads')}:{' '}
+                <a href={`/api/runs/${props.runs.screening.run.id}/results.csv`}>
+                  {tr.text('overview.csv')}
+                </a>{' '}
+                ·{' '}
+                <a href={`/api/runs/${props.runs.screening.run.id}/results.geojson`}>
+                  {tr.text('overview.geojson')}
+                </a>
               </p>
             )}
           </>
         )}
       </section>
-      {props.tsunami && <TsunamiRanking tr={tr} studyId={studyId} tsunami={props.tsunami.times} ranked={props.tsunami.ranked} />}
+      {props.tsunami && (
+        <TsunamiRanking
+          tr={tr}
+          studyId={studyId}
+          tsunami={props.tsunami.times}
+          ranked={props.tsunami.ranked}
+        />
+      )}
     </PageShell>
   );
 }

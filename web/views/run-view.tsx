@@ -6,13 +6,32 @@ import type { Translator } from '../text/translator.ts';
  * A run in progress. Without script the reader refreshes the page; with script
  * (static/tremora.js) the bar follows GET /api/runs/{id} and the page moves on when it is done.
  */
-export function RunView(props: { readonly tr: Translator; readonly path: string; readonly toolVersion: string; readonly studyId: string; readonly studyName: string; readonly run: RunRecord }) {
+export function RunView(props: {
+  readonly tr: Translator;
+  readonly path: string;
+  readonly toolVersion: string;
+  readonly studyId: string;
+  readonly studyName: string;
+  readonly run: RunRecord;
+}) {
   const { tr, run, studyId } = props;
   const unfinished = run.status === 'queued' || run.status === 'running';
   return (
-    <PageShell tr={tr} title={tr.t('run.title', { name: props.studyName })} titleLang={tr.fallbackLang('run.title')} path={props.path} toolVersion={props.toolVersion} study={{ id: studyId, name: props.studyName }}>
+    <PageShell
+      tr={tr}
+      title={tr.t('run.title', { name: props.studyName })}
+      titleLang={tr.fallbackLang('run.title')}
+      path={props.path}
+      toolVersion={props.toolVersion}
+      study={{ id: studyId, name: props.studyName }}
+    >
       <h1>{tr.text('run.title', { name: props.studyName })}</h1>
-      <div class="run-status" data-run={run.id} data-status={run.status} data-done-url={`/studies/${studyId}`}>
+      <div
+        class="run-status"
+        data-run={run.id}
+        data-status={run.status}
+        data-done-url={`/studies/${studyId}`}
+      >
         {unfinished ? (
           <>
             <p class="run-state" aria-live="polite">
@@ -34,7 +53,9 @@ export function RunView(props: { readonly tr: Translator; readonly path: string;
             {tr.text('run.done')} <a href={`/studies/${studyId}`}>{tr.text('run.see')}</a>
           </p>
         ) : (
-          <p class="problem">{tr.text('run.failed', { error: tr.english(run.error ?? run.status) })}</p>
+          <p class="problem">
+            {tr.text('run.failed', { error: tr.english(run.error ?? run.status) })}
+          </p>
         )}
       </div>
       <p>

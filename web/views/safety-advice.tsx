@@ -14,7 +14,11 @@ const Lines = (props: { readonly tr: Translator; readonly k: TextKey }) => (
 );
 
 /** Before, during and after shaking; the tsunami advice for coastal places (SAFETY.md). */
-export function SafetyAdvice(props: { readonly tr: Translator; readonly coastal: boolean; readonly headingLevel: 2 | 3 }) {
+export function SafetyAdvice(props: {
+  readonly tr: Translator;
+  readonly coastal: boolean;
+  readonly headingLevel: 2 | 3;
+}) {
   const { tr } = props;
   const H = props.headingLevel === 2 ? 'h2' : 'h3';
   return (

@@ -47,7 +47,11 @@ export function ScenarioView(props: ScenarioViewProps) {
       <form method="post" action={`/studies/${studyId}/scenario`} class="scenario-form" novalidate>
         <div class="field">
           <label for="scenario-source">{tr.text('scenario.source')}</label>
-          <select id="scenario-source" name="sourceId" aria-describedby={issuesAt('sourceId').length ? 'scenario-source-problem' : undefined}>
+          <select
+            id="scenario-source"
+            name="sourceId"
+            aria-describedby={issuesAt('sourceId').length ? 'scenario-source-problem' : undefined}
+          >
             {study.sources.map((s) => (
               <option value={s.id} selected={s.id === props.sourceId}>
                 {s.name}
@@ -68,7 +72,9 @@ export function ScenarioView(props: ScenarioViewProps) {
             value={props.magnitude}
             inputmode="decimal"
             aria-invalid={issuesAt('magnitude').length > 0 ? 'true' : undefined}
-            aria-describedby={issuesAt('magnitude').length ? 'scenario-magnitude-problem' : undefined}
+            aria-describedby={
+              issuesAt('magnitude').length ? 'scenario-magnitude-problem' : undefined
+            }
           />
           <FieldProblems tr={tr} id="scenario-magnitude-problem" issues={issuesAt('magnitude')} />
         </div>
@@ -82,7 +88,8 @@ export function ScenarioView(props: ScenarioViewProps) {
           <section aria-labelledby="scenario-map-heading">
             <h2 id="scenario-map-heading">{tr.text('scenario.map')}</h2>
             <p>
-              {result.sourceName}, M {tr.number(result.magnitude, 1)}. {tr.text('scenario.position', { position: tr.text('scenario.positionMiddle') })}
+              {result.sourceName}, M {tr.number(result.magnitude, 1)}.{' '}
+              {tr.text('scenario.position', { position: tr.text('scenario.positionMiddle') })}
             </p>
             <figure class="map-figure">
               <StudyMap
@@ -91,12 +98,25 @@ export function ScenarioView(props: ScenarioViewProps) {
                 frame={props.frame}
                 idPrefix="scenario-map"
                 showZones={false}
-                labelSuffix={new Map(result.communities.map((c) => [c.communityId, ` · ${intensityWords(c.mmi.median).roman}`]))}
-                hazardLayer={result.grid ? <ScenarioLayer grid={result.grid} frame={props.frame} /> : undefined}
+                labelSuffix={
+                  new Map(
+                    result.communities.map((c) => [
+                      c.communityId,
+                      ` · ${intensityWords(c.mmi.median).roman}`,
+                    ]),
+                  )
+                }
+                hazardLayer={
+                  result.grid ? <ScenarioLayer grid={result.grid} frame={props.frame} /> : undefined
+                }
               />
               <figcaption>
                 <ScenarioLegend tr={tr} />
-                {result.grid && <p class="legend-note">{tr.text('scenario.gridNote', { vs30: tr.number(result.grid.vs30) })}</p>}
+                {result.grid && (
+                  <p class="legend-note">
+                    {tr.text('scenario.gridNote', { vs30: tr.number(result.grid.vs30) })}
+                  </p>
+                )}
               </figcaption>
             </figure>
           </section>
@@ -127,10 +147,16 @@ export function ScenarioView(props: ScenarioViewProps) {
                       </th>
                       <td class="numeric">{tr.number(c.rrupKm)}</td>
                       <td>
-                        {tr.mmi(c.mmi.median)} · {tr.text(`mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.median)))}.name` as 'mmi.1.name')}
+                        {tr.mmi(c.mmi.median)} ·{' '}
+                        {tr.text(
+                          `mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.median)))}.name` as 'mmi.1.name',
+                        )}
                       </td>
                       <td>
-                        {tr.mmi(c.mmi.p84)} · {tr.text(`mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.p84)))}.name` as 'mmi.1.name')}
+                        {tr.mmi(c.mmi.p84)} ·{' '}
+                        {tr.text(
+                          `mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.p84)))}.name` as 'mmi.1.name',
+                        )}
                       </td>
                       <td class="numeric">{tr.number(c.motions.PGA?.median ?? 0, 3)}</td>
                     </tr>
@@ -150,7 +176,9 @@ export function ScenarioView(props: ScenarioViewProps) {
           </section>
         </>
       )}
-      {result && props.tsunami && <TsunamiScenario tr={tr} studyId={studyId} tsunami={props.tsunami} />}
+      {result && props.tsunami && (
+        <TsunamiScenario tr={tr} studyId={studyId} tsunami={props.tsunami} />
+      )}
     </PageShell>
   );
 }

@@ -3,12 +3,22 @@ import type { RunState } from '../data/study-data.ts';
 import type { Translator } from '../text/translator.ts';
 
 /** Where the study's screening stands, with the button that starts one (a plain form post). */
-export function ScreeningStatus(props: { readonly tr: Translator; readonly studyId: string; readonly runs: RunState; readonly problem?: string }) {
+export function ScreeningStatus(props: {
+  readonly tr: Translator;
+  readonly studyId: string;
+  readonly runs: RunState;
+  readonly problem?: string;
+}) {
   const { tr, runs, studyId } = props;
   const latest = runs.latest;
   const screening = runs.screening;
   const running = latest && (latest.status === 'queued' || latest.status === 'running');
-  const failed = latest && (latest.status === 'failed' || latest.status === 'interrupted' || latest.status === 'cancelled') && latest.id !== screening?.run.id;
+  const failed =
+    latest &&
+    (latest.status === 'failed' ||
+      latest.status === 'interrupted' ||
+      latest.status === 'cancelled') &&
+    latest.id !== screening?.run.id;
   const button = (label: Child) => (
     <form method="post" action={`/studies/${studyId}/screen`} class="inline-form">
       <button type="submit" class="button-primary">
@@ -34,15 +44,27 @@ export function ScreeningStatus(props: { readonly tr: Translator; readonly study
         </p>
       ) : screening ? (
         <>
-          <p>{tr.text('overview.screenedOn', { date: tr.date(screening.run.finishedAt ?? screening.run.createdAt) })}</p>
-          {failed && <p class="problem">{tr.text('overview.lastFailed', { error: tr.english(latest.error ?? latest.status) })}</p>}
+          <p>
+            {tr.text('overview.screenedOn', {
+              date: tr.date(screening.run.finishedAt ?? screening.run.createdAt),
+            })}
+          </p>
+          {failed && (
+            <p class="problem">
+              {tr.text('overview.lastFailed', { error: tr.english(latest.error ?? latest.status) })}
+            </p>
+          )}
           {!screening.current && <p class="notice">{tr.text('overview.stale')}</p>}
           {button(tr.text('overview.screenAgain'))}
         </>
       ) : (
         <>
           <p>{tr.text('overview.notScreened')}</p>
-          {failed && <p class="problem">{tr.text('overview.lastFailed', { error: tr.english(latest.error ?? latest.status) })}</p>}
+          {failed && (
+            <p class="problem">
+              {tr.text('overview.lastFailed', { error: tr.english(latest.error ?? latest.status) })}
+            </p>
+          )}
           {button(tr.text('overview.screenButton'))}
         </>
       )}

@@ -9,32 +9,77 @@ const DECIMAL_KM_BELOW = 10;
 const km = (tr: Translator, value: number) => tr.number(value, value < DECIMAL_KM_BELOW ? 1 : 0);
 
 /** The plain-words sentence and the high ground for one coastal community. */
-function TimeToAct(props: { readonly tr: Translator; readonly community: TsunamiCommunity; readonly result: TsunamiResult; readonly compact: boolean }) {
+function TimeToAct(props: {
+  readonly tr: Translator;
+  readonly community: TsunamiCommunity;
+  readonly result: TsunamiResult;
+  readonly compact: boolean;
+}) {
   const { tr, community: c, result } = props;
   const ground = c.highGround;
   return (
     <>
       {c.firstArrivalMinutes === null || c.latestMinutes === null ? (
-        <p class="tsunami-problem">{tr.text('tsunami.time.problem', { problem: tr.english(c.problems.join('; ')) })}</p>
+        <p class="tsunami-problem">
+          {tr.text('tsunami.time.problem', { problem: tr.english(c.problems.join('; ')) })}
+        </p>
       ) : (
-        <p class="tsunami-sentence" data-first-arrival-minutes={c.firstArrivalMinutes} data-latest-minutes={c.latestMinutes}>
+        <p
+          class="tsunami-sentence"
+          data-first-arrival-minutes={c.firstArrivalMinutes}
+          data-latest-minutes={c.latestMinutes}
+        >
           <strong>
-            {tr.text(c.firstArrivalMinutes === 0 ? 'tsunami.time.sentenceNow' : 'tsunami.time.sentence', { from: tr.number(c.firstArrivalMinutes), to: tr.number(c.latestMinutes) })}
+            {tr.text(
+              c.firstArrivalMinutes === 0 ? 'tsunami.time.sentenceNow' : 'tsunami.time.sentence',
+              { from: tr.number(c.firstArrivalMinutes), to: tr.number(c.latestMinutes) },
+            )}
           </strong>{' '}
-          {ground?.kind === 'found' && tr.text('tsunami.time.ground', { km: km(tr, ground.distanceKm), direction: tr.compass(compassPoint(ground.bearingDeg)) })}
+          {ground?.kind === 'found' &&
+            tr.text('tsunami.time.ground', {
+              km: km(tr, ground.distanceKm),
+              direction: tr.compass(compassPoint(ground.bearingDeg)),
+            })}
         </p>
       )}
       {ground?.kind === 'found' && (
-        <p class="tsunami-ground" data-high-ground-km={ground.distanceKm} data-walking-minutes={ground.walkingMinutes}>
-          {c.firstArrivalMinutes === null && tr.text('tsunami.time.ground', { km: km(tr, ground.distanceKm), direction: tr.compass(compassPoint(ground.bearingDeg)) })}{' '}
-          {tr.text('tsunami.time.walk', { minutes: tr.number(ground.walkingMinutes) })} {tr.text('tsunami.time.height', { height: tr.number(result.highGroundM) })}
+        <p
+          class="tsunami-ground"
+          data-high-ground-km={ground.distanceKm}
+          data-walking-minutes={ground.walkingMinutes}
+        >
+          {c.firstArrivalMinutes === null &&
+            tr.text('tsunami.time.ground', {
+              km: km(tr, ground.distanceKm),
+              direction: tr.compass(compassPoint(ground.bearingDeg)),
+            })}{' '}
+          {tr.text('tsunami.time.walk', { minutes: tr.number(ground.walkingMinutes) })}{' '}
+          {tr.text('tsunami.time.height', { height: tr.number(result.highGroundM) })}
         </p>
       )}
-      {ground?.kind === 'already-above' && <p class="tsunami-ground">{tr.text('tsunami.time.above', { elevation: tr.number(ground.elevationM), height: tr.number(ground.heightM) })}</p>}
-      {ground?.kind === 'none' && <p class="tsunami-ground">{tr.text('tsunami.time.none', { height: tr.number(ground.heightM), km: tr.number(ground.searchKm) })}</p>}
+      {ground?.kind === 'already-above' && (
+        <p class="tsunami-ground">
+          {tr.text('tsunami.time.above', {
+            elevation: tr.number(ground.elevationM),
+            height: tr.number(ground.heightM),
+          })}
+        </p>
+      )}
+      {ground?.kind === 'none' && (
+        <p class="tsunami-ground">
+          {tr.text('tsunami.time.none', {
+            height: tr.number(ground.heightM),
+            km: tr.number(ground.searchKm),
+          })}
+        </p>
+      )}
       {!props.compact && (
         <p class="technical">
-          {tr.text('tsunami.time.technical', { sources: result.sources.map((s) => s.name).join(', '), grid: result.terrain.label, km: tr.number(result.terrain.spacingKm, 1) })}
+          {tr.text('tsunami.time.technical', {
+            sources: result.sources.map((s) => s.name).join(', '),
+            grid: result.terrain.label,
+            km: tr.number(result.terrain.spacingKm, 1),
+          })}
         </p>
       )}
     </>
@@ -42,18 +87,35 @@ function TimeToAct(props: { readonly tr: Translator; readonly community: Tsunami
 }
 
 /** The community page's and handout's tsunami block: time to act, high ground and the caution. */
-export function TsunamiTime(props: { readonly tr: Translator; readonly communityId: string; readonly tsunami: TsunamiPageResult; readonly headingLevel: 2 | 3; readonly compact?: boolean }) {
+export function TsunamiTime(props: {
+  readonly tr: Translator;
+  readonly communityId: string;
+  readonly tsunami: TsunamiPageResult;
+  readonly headingLevel: 2 | 3;
+  readonly compact?: boolean;
+}) {
   const { tr, tsunami } = props;
   const H = props.headingLevel === 2 ? 'h2' : 'h3';
-  const community = tsunami.ok ? tsunami.result.communities.find((c) => c.id === props.communityId) : undefined;
+  const community = tsunami.ok
+    ? tsunami.result.communities.find((c) => c.id === props.communityId)
+    : undefined;
   if (tsunami.ok && !community) return <></>;
   return (
     <section class="tsunami-time" aria-labelledby="tsunami-time-title">
       <H id="tsunami-time-title">{tr.text('tsunami.time.title')}</H>
       {tsunami.ok && community ? (
-        <TimeToAct tr={tr} community={community} result={tsunami.result} compact={props.compact === true} />
+        <TimeToAct
+          tr={tr}
+          community={community}
+          result={tsunami.result}
+          compact={props.compact === true}
+        />
       ) : (
-        <p class="tsunami-problem">{tr.text('tsunami.time.problem', { problem: tr.english(tsunami.ok ? '' : tsunami.problem) })}</p>
+        <p class="tsunami-problem">
+          {tr.text('tsunami.time.problem', {
+            problem: tr.english(tsunami.ok ? '' : tsunami.problem),
+          })}
+        </p>
       )}
       <p class="tsunami-caution">{tr.text('tsunami.time.caution')}</p>
     </section>
@@ -91,12 +153,22 @@ export function TsunamiTable(props: {
                 <td>
                   {c.firstArrivalMinutes === null || c.latestMinutes === null
                     ? tr.text('tsunami.rank.none')
-                    : tr.text('tsunami.rank.minutes', { from: tr.number(c.firstArrivalMinutes), to: tr.number(c.latestMinutes) })}
+                    : tr.text('tsunami.rank.minutes', {
+                        from: tr.number(c.firstArrivalMinutes),
+                        to: tr.number(c.latestMinutes),
+                      })}
                 </td>
                 <td>
-                  {g?.kind === 'found' && tr.text('tsunami.rank.groundAway', { km: km(tr, g.distanceKm), direction: tr.compass(compassPoint(g.bearingDeg)), minutes: tr.number(g.walkingMinutes) })}
-                  {g?.kind === 'already-above' && tr.text('tsunami.rank.groundAbove', { height: tr.number(g.heightM) })}
-                  {g?.kind === 'none' && tr.text('tsunami.rank.groundNone', { km: tr.number(g.searchKm) })}
+                  {g?.kind === 'found' &&
+                    tr.text('tsunami.rank.groundAway', {
+                      km: km(tr, g.distanceKm),
+                      direction: tr.compass(compassPoint(g.bearingDeg)),
+                      minutes: tr.number(g.walkingMinutes),
+                    })}
+                  {g?.kind === 'already-above' &&
+                    tr.text('tsunami.rank.groundAbove', { height: tr.number(g.heightM) })}
+                  {g?.kind === 'none' &&
+                    tr.text('tsunami.rank.groundNone', { km: tr.number(g.searchKm) })}
                 </td>
               </tr>
             );
@@ -108,16 +180,29 @@ export function TsunamiTable(props: {
 }
 
 /** The overview's section: coastal communities ranked by time to act (data/tsunami-data.ts), with the caution. */
-export function TsunamiRanking(props: { readonly tr: Translator; readonly studyId: string; readonly tsunami: TsunamiPageResult; readonly ranked: readonly TsunamiCommunity[] }) {
+export function TsunamiRanking(props: {
+  readonly tr: Translator;
+  readonly studyId: string;
+  readonly tsunami: TsunamiPageResult;
+  readonly ranked: readonly TsunamiCommunity[];
+}) {
   const { tr, tsunami } = props;
   return (
     <section class="tsunami-ranking" aria-labelledby="tsunami-rank-heading">
       <h2 id="tsunami-rank-heading">{tr.text('tsunami.rank.title')}</h2>
       <p>{tr.text('tsunami.rank.intro')}</p>
       {tsunami.ok ? (
-        <TsunamiTable tr={tr} studyId={props.studyId} communities={props.ranked} caption={tr.t('tsunami.rank.title')} id="tsunami-ranking" />
+        <TsunamiTable
+          tr={tr}
+          studyId={props.studyId}
+          communities={props.ranked}
+          caption={tr.t('tsunami.rank.title')}
+          id="tsunami-ranking"
+        />
       ) : (
-        <p class="tsunami-problem">{tr.text('tsunami.time.problem', { problem: tr.english(tsunami.problem) })}</p>
+        <p class="tsunami-problem">
+          {tr.text('tsunami.time.problem', { problem: tr.english(tsunami.problem) })}
+        </p>
       )}
       <p class="tsunami-caution">{tr.text('tsunami.time.caution')}</p>
     </section>
@@ -125,16 +210,28 @@ export function TsunamiRanking(props: { readonly tr: Translator; readonly studyI
 }
 
 /** The scenario page's section: each coastal community's first arrival from the chosen rupture. */
-export function TsunamiScenario(props: { readonly tr: Translator; readonly studyId: string; readonly tsunami: TsunamiPageResult }) {
+export function TsunamiScenario(props: {
+  readonly tr: Translator;
+  readonly studyId: string;
+  readonly tsunami: TsunamiPageResult;
+}) {
   const { tr, tsunami } = props;
   return (
     <section class="tsunami-scenario" aria-labelledby="tsunami-scenario-heading">
       <h2 id="tsunami-scenario-heading">{tr.text('tsunami.scenario.title')}</h2>
       <p>{tr.text('tsunami.scenario.intro')}</p>
       {tsunami.ok ? (
-        <TsunamiTable tr={tr} studyId={props.studyId} communities={tsunami.result.communities} caption={tr.t('tsunami.scenario.title')} id="tsunami-scenario" />
+        <TsunamiTable
+          tr={tr}
+          studyId={props.studyId}
+          communities={tsunami.result.communities}
+          caption={tr.t('tsunami.scenario.title')}
+          id="tsunami-scenario"
+        />
       ) : (
-        <p class="tsunami-problem">{tr.text('tsunami.time.problem', { problem: tr.english(tsunami.problem) })}</p>
+        <p class="tsunami-problem">
+          {tr.text('tsunami.time.problem', { problem: tr.english(tsunami.problem) })}
+        </p>
       )}
       <p class="tsunami-caution">{tr.text('tsunami.time.caution')}</p>
     </section>

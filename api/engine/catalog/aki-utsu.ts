@@ -31,8 +31,15 @@ export interface BValueEstimate {
  * first rounded to bins of that width and Mc is taken as a bin centre; with 0 they are used as
  * given. Needs at least two events at or above Mc with different magnitudes.
  */
-export function akiUtsuBValue(magnitudes: readonly number[], mc: number, magnitudeStep: number): BValueEstimate {
-  if (!Number.isFinite(mc)) throw new InvalidInput([{ path: 'mc', message: `expected a finite completeness magnitude; got ${mc}` }]);
+export function akiUtsuBValue(
+  magnitudes: readonly number[],
+  mc: number,
+  magnitudeStep: number,
+): BValueEstimate {
+  if (!Number.isFinite(mc))
+    throw new InvalidInput([
+      { path: 'mc', message: `expected a finite completeness magnitude; got ${mc}` },
+    ]);
   if (magnitudeStep !== 0) checkMagnitudeStep(magnitudeStep);
   const mcUsed = magnitudeStep > 0 ? binCentre(mc, magnitudeStep) : mc;
   // A bin centre compared with Mc: allow for representation error in the printed values.
@@ -41,13 +48,23 @@ export function akiUtsuBValue(magnitudes: readonly number[], mc: number, magnitu
     .filter((m) => m >= mcUsed - 1e-9);
   const n = complete.length;
   if (n < 2) {
-    throw new InvalidInput([{ path: 'magnitudes', message: `expected at least 2 events at or above Mc ${mcUsed}; got ${n}` }]);
+    throw new InvalidInput([
+      {
+        path: 'magnitudes',
+        message: `expected at least 2 events at or above Mc ${mcUsed}; got ${n}`,
+      },
+    ]);
   }
   const mean = compensatedSum(complete) / n;
   const excess = mean - (mcUsed - magnitudeStep / 2);
   const spread = compensatedSum(complete.map((m) => (m - mean) ** 2));
   if (!(excess > 0) || spread === 0) {
-    throw new InvalidInput([{ path: 'magnitudes', message: `expected magnitudes spread above Mc ${mcUsed}; all ${n} events share one magnitude` }]);
+    throw new InvalidInput([
+      {
+        path: 'magnitudes',
+        message: `expected magnitudes spread above Mc ${mcUsed}; all ${n} events share one magnitude`,
+      },
+    ]);
   }
   const bValue = Math.LOG10E / excess;
   const sigmaB = Math.LN10 * bValue * bValue * Math.sqrt(spread / (n * (n - 1)));

@@ -39,14 +39,31 @@ export interface ObservationBinsOptions {
  * observed from the earliest start among the periods whose magnitude it reaches; events before
  * that start or after endMs are not counted.
  */
-export function observationBins(events: readonly CatalogEvent[], options: ObservationBinsOptions): ObservationBin[] {
+export function observationBins(
+  events: readonly CatalogEvent[],
+  options: ObservationBinsOptions,
+): ObservationBin[] {
   const { periods, endMs, magnitudeStep: step } = options;
   checkMagnitudeStep(step);
-  if (periods.length === 0) throw new InvalidInput([{ path: 'periods', message: 'expected at least one completeness period' }]);
+  if (periods.length === 0)
+    throw new InvalidInput([
+      { path: 'periods', message: 'expected at least one completeness period' },
+    ]);
   periods.forEach((p, i) => {
-    if (!Number.isFinite(p.magnitude)) throw new InvalidInput([{ path: `periods[${i}].magnitude`, message: `expected a finite magnitude; got ${p.magnitude}` }]);
+    if (!Number.isFinite(p.magnitude))
+      throw new InvalidInput([
+        {
+          path: `periods[${i}].magnitude`,
+          message: `expected a finite magnitude; got ${p.magnitude}`,
+        },
+      ]);
     if (!(Number.isFinite(p.startMs) && p.startMs < endMs)) {
-      throw new InvalidInput([{ path: `periods[${i}].startMs`, message: `expected a start before the catalog end ${new Date(endMs).toISOString()}; got ${p.startMs}` }]);
+      throw new InvalidInput([
+        {
+          path: `periods[${i}].startMs`,
+          message: `expected a start before the catalog end ${new Date(endMs).toISOString()}; got ${p.startMs}`,
+        },
+      ]);
     }
   });
   const periodIndex = periods.map((p) => binIndex(p.magnitude, step));
@@ -66,10 +83,15 @@ export function observationBins(events: readonly CatalogEvent[], options: Observ
     counts.set(k, (counts.get(k) ?? 0) + 1);
     if (k > hi) hi = k;
   }
-  if (options.upperMagnitude !== undefined) hi = Math.max(hi, binIndex(options.upperMagnitude, step));
+  if (options.upperMagnitude !== undefined)
+    hi = Math.max(hi, binIndex(options.upperMagnitude, step));
   const bins: ObservationBin[] = [];
   for (let k = lo; k <= hi; k++) {
-    bins.push({ magnitude: binMagnitude(k, step), count: counts.get(k) ?? 0, years: (endMs - startOf(k)) / MS_PER_YEAR });
+    bins.push({
+      magnitude: binMagnitude(k, step),
+      count: counts.get(k) ?? 0,
+      years: (endMs - startOf(k)) / MS_PER_YEAR,
+    });
   }
   return bins;
 }

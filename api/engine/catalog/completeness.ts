@@ -32,10 +32,19 @@ export interface MaxCurvatureOptions {
  * Mc by maximum curvature of magnitudes. When two bins tie for the most events the lower is
  * taken (our choice: the cautious end, keeping more events).
  */
-export function maxCurvatureMc(magnitudes: readonly number[], options: MaxCurvatureOptions = {}): MaxCurvatureResult {
+export function maxCurvatureMc(
+  magnitudes: readonly number[],
+  options: MaxCurvatureOptions = {},
+): MaxCurvatureResult {
   const step = options.magnitudeStep ?? 0.1;
   const correction = options.correction ?? 0.2;
-  if (magnitudes.length === 0) throw new InvalidInput([{ path: 'magnitudes', message: 'expected at least one event to find the magnitude of completeness' }]);
+  if (magnitudes.length === 0)
+    throw new InvalidInput([
+      {
+        path: 'magnitudes',
+        message: 'expected at least one event to find the magnitude of completeness',
+      },
+    ]);
   const histogram = magnitudeHistogram(magnitudes, step);
   let peak = histogram[0] as MagnitudeBinCount;
   for (const bin of histogram) if (bin.count > peak.count) peak = bin;
@@ -63,7 +72,8 @@ export interface CompletenessOverTime {
   readonly excludedNonMoment: number;
 }
 
-export interface CompletenessOverTimeOptions extends MagnitudeSelectionOptions, MaxCurvatureOptions {
+export interface CompletenessOverTimeOptions
+  extends MagnitudeSelectionOptions, MaxCurvatureOptions {
   /** Events per window; default 100. The last window takes any remainder smaller than this. */
   readonly eventsPerWindow?: number;
 }
@@ -76,20 +86,36 @@ export interface CompletenessOverTimeOptions extends MagnitudeSelectionOptions, 
  * the earliest window from which every later window has Mc at most m. The last window reaches
  * the catalog's first event; give the catalog's real start in the periods if it is known.
  */
-export function completenessOverTime(events: readonly CatalogEvent[], options: CompletenessOverTimeOptions = {}): CompletenessOverTime {
+export function completenessOverTime(
+  events: readonly CatalogEvent[],
+  options: CompletenessOverTimeOptions = {},
+): CompletenessOverTime {
   const perWindow = options.eventsPerWindow ?? 100;
   if (!(Number.isInteger(perWindow) && perWindow >= 10)) {
-    throw new InvalidInput([{ path: 'eventsPerWindow', message: `expected a whole number of at least 10 events per window; got ${perWindow}` }]);
+    throw new InvalidInput([
+      {
+        path: 'eventsPerWindow',
+        message: `expected a whole number of at least 10 events per window; got ${perWindow}`,
+      },
+    ]);
   }
   const selected = selectByMagnitudeType(events, options.magnitudes);
   const sorted = [...selected.events].sort((a, b) => a.timeMs - b.timeMs);
   if (sorted.length < perWindow) {
-    throw new InvalidInput([{ path: 'events', message: `expected at least ${perWindow} events (one window); got ${sorted.length}` }]);
+    throw new InvalidInput([
+      {
+        path: 'events',
+        message: `expected at least ${perWindow} events (one window); got ${sorted.length}`,
+      },
+    ]);
   }
   const windowCount = Math.floor(sorted.length / perWindow);
   const windows: CompletenessWindow[] = [];
   for (let w = 0; w < windowCount; w++) {
-    const slice = sorted.slice(w * perWindow, w === windowCount - 1 ? sorted.length : (w + 1) * perWindow);
+    const slice = sorted.slice(
+      w * perWindow,
+      w === windowCount - 1 ? sorted.length : (w + 1) * perWindow,
+    );
     const first = slice[0] as CatalogEvent;
     const last = slice[slice.length - 1] as CatalogEvent;
     const mc = maxCurvatureMc(
@@ -98,7 +124,11 @@ export function completenessOverTime(events: readonly CatalogEvent[], options: C
     ).mc;
     windows.push({ startMs: first.timeMs, endMs: last.timeMs, eventCount: slice.length, mc });
   }
-  return { windows, periods: proposePeriods(windows), excludedNonMoment: selected.excludedNonMoment };
+  return {
+    windows,
+    periods: proposePeriods(windows),
+    excludedNonMoment: selected.excludedNonMoment,
+  };
 }
 
 /** Completeness periods from windows in time order (see completenessOverTime). */
@@ -109,7 +139,8 @@ export function proposePeriods(windows: readonly CompletenessWindow[]): Complete
   for (let w = windows.length - 1; w >= 0; w--) {
     const window = windows[w] as CompletenessWindow;
     // 1e-9: Mc values are bin centres that may differ in the last bits.
-    if (window.mc > level + 1e-9 && Number.isFinite(level)) periods.push({ magnitude: level, startMs });
+    if (window.mc > level + 1e-9 && Number.isFinite(level))
+      periods.push({ magnitude: level, startMs });
     level = Math.max(level, window.mc);
     startMs = window.startMs;
   }

@@ -15,14 +15,23 @@ export interface EpicentralPath {
 }
 
 /** Geodesic distance (km) and azimuth (deg) from (lon1, lat1) to (lon2, lat2), degrees in. */
-export function epicentralPath(lon1: number, lat1: number, lon2: number, lat2: number): EpicentralPath {
+export function epicentralPath(
+  lon1: number,
+  lat1: number,
+  lon2: number,
+  lat2: number,
+): EpicentralPath {
   const r = WGS84.Inverse(lat1, lon1, lat2, lon2);
   return { distanceKm: (r.s12 ?? 0) / 1000, azimuthDeg: normaliseAzimuthDeg(r.azi1 ?? 0) };
 }
 
 /** Geodesic distance between epicentres, km. */
-export const epicentralDistanceKm = (lon1: number, lat1: number, lon2: number, lat2: number): number =>
-  epicentralPath(lon1, lat1, lon2, lat2).distanceKm;
+export const epicentralDistanceKm = (
+  lon1: number,
+  lat1: number,
+  lon2: number,
+  lat2: number,
+): number => epicentralPath(lon1, lat1, lon2, lat2).distanceKm;
 
 /**
  * Shortest length of one degree of latitude on WGS84 (the meridian at the equator, a(1 − e²)

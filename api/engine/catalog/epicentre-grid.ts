@@ -47,8 +47,13 @@ export interface EpicentreGrid {
 }
 
 /** Files epicentres (WGS84 degrees; index = position in the arrays) in cells of `cellKm`. */
-export function epicentreGrid(lons: ArrayLike<number>, lats: ArrayLike<number>, cellKm: number): EpicentreGrid {
-  if (!(cellKm >= MIN_CELL_KM)) throw new RangeError(`expected a cell side of at least ${MIN_CELL_KM} km; got ${cellKm}`);
+export function epicentreGrid(
+  lons: ArrayLike<number>,
+  lats: ArrayLike<number>,
+  cellKm: number,
+): EpicentreGrid {
+  if (!(cellKm >= MIN_CELL_KM))
+    throw new RangeError(`expected a cell side of at least ${MIN_CELL_KM} km; got ${cellKm}`);
   const n = lons.length;
   const x = new Float64Array(n);
   const y = new Float64Array(n);
@@ -64,7 +69,11 @@ export function epicentreGrid(lons: ArrayLike<number>, lats: ArrayLike<number>, 
     x[i] = primeVerticalKm * cosLat * Math.cos(lon);
     y[i] = primeVerticalKm * cosLat * Math.sin(lon);
     z[i] = primeVerticalKm * (1 - WGS84_E2) * sinLat;
-    const key = cellKey(cellOf(x[i] as number, cellKm), cellOf(y[i] as number, cellKm), cellOf(z[i] as number, cellKm));
+    const key = cellKey(
+      cellOf(x[i] as number, cellKm),
+      cellOf(y[i] as number, cellKm),
+      cellOf(z[i] as number, cellKm),
+    );
     keys[i] = key;
     counts.set(key, (counts.get(key) ?? 0) + 1);
   }
@@ -88,7 +97,14 @@ export function epicentreGrid(lons: ArrayLike<number>, lats: ArrayLike<number>, 
  * most `distanceKm` (plus rounding slack); the caller applies the exact distance. Order of
  * visits: by cell, ascending index within a cell.
  */
-export function visitNear(grid: EpicentreGrid, i: number, distanceKm: number, fromIndex: number, toIndex: number, visit: (j: number) => void): void {
+export function visitNear(
+  grid: EpicentreGrid,
+  i: number,
+  distanceKm: number,
+  fromIndex: number,
+  toIndex: number,
+  visit: (j: number) => void,
+): void {
   const { cellKm, x, y, z, cells } = grid;
   const px = x[i] as number;
   const py = y[i] as number;
@@ -121,7 +137,8 @@ export function visitNear(grid: EpicentreGrid, i: number, distanceKm: number, fr
 
 const cellOf = (km: number, cellKm: number): number => Math.floor(km / cellKm);
 
-const cellKey = (cx: number, cy: number, cz: number): number => ((cx + LATTICE_HALF) * LATTICE + (cy + LATTICE_HALF)) * LATTICE + (cz + LATTICE_HALF);
+const cellKey = (cx: number, cy: number, cz: number): number =>
+  ((cx + LATTICE_HALF) * LATTICE + (cy + LATTICE_HALF)) * LATTICE + (cz + LATTICE_HALF);
 
 /** Position of the first member >= index in an ascending list (binary search). */
 function firstAtLeast(members: Int32Array, index: number): number {

@@ -22,4 +22,5 @@ export const MS_PER_YEAR = 365.25 * 86_400_000;
 export const MS_PER_DAY = 86_400_000;
 
 /** The span between two instants in Julian years. */
-export const yearsBetween = (startMs: number, endMs: number): number => (endMs - startMs) / MS_PER_YEAR;
+export const yearsBetween = (startMs: number, endMs: number): number =>
+  (endMs - startMs) / MS_PER_YEAR;

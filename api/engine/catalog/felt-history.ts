@@ -54,7 +54,8 @@ export type Compass = 'N' | 'NE' | 'E' | 'SE' | 'S' | 'SW' | 'W' | 'NW';
 const COMPASS: readonly Compass[] = ['N', 'NE', 'E', 'SE', 'S', 'SW', 'W', 'NW'];
 
 /** The nearest of the eight compass points to a bearing in degrees. */
-export const compassPoint = (bearingDeg: number): Compass => COMPASS[Math.round((((bearingDeg % 360) + 360) % 360) / 45) % 8] as Compass;
+export const compassPoint = (bearingDeg: number): Compass =>
+  COMPASS[Math.round((((bearingDeg % 360) + 360) % 360) / 45) % 8] as Compass;
 
 export interface CommunityFeltHistory {
   readonly communityId: string;
@@ -84,7 +85,10 @@ export interface FeltHistoryOptions extends MagnitudeSelectionOptions {
 
 export const FELT_MMI = 4;
 export const STRONGLY_FELT_MMI = 6;
-const MECHANISM_OF: Readonly<Record<'crustal' | 'intraslab', Mechanism>> = { crustal: 'strike-slip', intraslab: 'normal' };
+const MECHANISM_OF: Readonly<Record<'crustal' | 'intraslab', Mechanism>> = {
+  crustal: 'strike-slip',
+  intraslab: 'normal',
+};
 const RAKE_OF: Readonly<Record<Mechanism, number>> = { 'strike-slip': 0, reverse: 90, normal: -90 };
 
 interface WeightedModel {
@@ -93,7 +97,11 @@ interface WeightedModel {
 }
 
 /** Estimated intensity of each event at each community, and the events likely felt there. */
-export function feltHistory(study: Study, events: readonly CatalogEvent[], options: FeltHistoryOptions = {}): FeltHistory {
+export function feltHistory(
+  study: Study,
+  events: readonly CatalogEvent[],
+  options: FeltHistoryOptions = {},
+): FeltHistory {
   const models = options.models ?? modelCatalog;
   const crustalMaxDepthKm = options.crustalMaxDepthKm ?? 35;
   const selected = selectByMagnitudeType(events, options.magnitudes);
@@ -105,7 +113,14 @@ export function feltHistory(study: Study, events: readonly CatalogEvent[], optio
   const communities = study.communities.map((community): CommunityFeltHistory => {
     const estimates: FeltEstimate[] = [];
     for (const event of ordered) {
-      const estimate = estimateAt(community, event, crustalMaxDepthKm, branches, study.settings.maxDistanceKm, notes);
+      const estimate = estimateAt(
+        community,
+        event,
+        crustalMaxDepthKm,
+        branches,
+        study.settings.maxDistanceKm,
+        notes,
+      );
       if (estimate) estimates.push(estimate);
     }
     return {
@@ -117,8 +132,17 @@ export function feltHistory(study: Study, events: readonly CatalogEvent[], optio
     };
   });
   const left = selected.excludedNonMoment;
-  if (left > 0) notes.add(`${left} event${left === 1 ? '' : 's'} left out: not moment magnitude${left === 1 ? '' : 's'}`);
-  return { communities, eventCount: ordered.length, excludedNonMoment: selected.excludedNonMoment, crustalMaxDepthKm, notes: [...notes] };
+  if (left > 0)
+    notes.add(
+      `${left} event${left === 1 ? '' : 's'} left out: not moment magnitude${left === 1 ? '' : 's'}`,
+    );
+  return {
+    communities,
+    eventCount: ordered.length,
+    excludedNonMoment: selected.excludedNonMoment,
+    crustalMaxDepthKm,
+    notes: [...notes],
+  };
 }
 
 function estimateAt(
@@ -151,11 +175,23 @@ function estimateAt(
   };
   const context = pointRuptureContext(source, event.magnitude);
   const rhypoKm = Math.hypot(path.distanceKm, depthKm);
-  const distances: DistanceContext = { rjbKm: path.distanceKm, rrupKm: rhypoKm, rxKm: -path.distanceKm, ry0Km: 0, rhypoKm, repiKm: path.distanceKm };
+  const distances: DistanceContext = {
+    rjbKm: path.distanceKm,
+    rrupKm: rhypoKm,
+    rxKm: -path.distanceKm,
+    ry0Km: 0,
+    rhypoKm,
+    repiKm: path.distanceKm,
+  };
   let pgaG: number;
   try {
     const motions = siteMotions({
-      rupture: { sourceIndex: -1, sourceId: event.id, context, surface: { kind: 'point', hypocentre: { x: 0, y: 0, z: depthKm } } },
+      rupture: {
+        sourceIndex: -1,
+        sourceId: event.id,
+        context,
+        surface: { kind: 'point', hypocentre: { x: 0, y: 0, z: depthKm } },
+      },
       distances,
       vs30: community.vs30,
       vs30Measured: community.vs30Basis === 'measured',

@@ -28,11 +28,18 @@ export type FitFinding =
       /** Poisson chance of a count this far from the prediction or further, on the side observed. */
       readonly chance: number;
     }
-  | { readonly kind: 'completeness-changes'; readonly mcUsed: number; readonly earliestMc: number; readonly highestMc: number }
+  | {
+      readonly kind: 'completeness-changes';
+      readonly mcUsed: number;
+      readonly earliestMc: number;
+      readonly highestMc: number;
+    }
   | { readonly kind: 'most-removed'; readonly removed: number; readonly total: number };
 
 export function bOutsideUsual(bValue: number): FitFinding | undefined {
-  return bValue < USUAL_B_RANGE[0] || bValue > USUAL_B_RANGE[1] ? { kind: 'b-outside-usual', bValue } : undefined;
+  return bValue < USUAL_B_RANGE[0] || bValue > USUAL_B_RANGE[1]
+    ? { kind: 'b-outside-usual', bValue }
+    : undefined;
 }
 
 /** P(N <= k) for N Poisson with mean mu, summed term by term (k is small here: a few hundred at most). */
@@ -68,16 +75,25 @@ export interface LargeMagnitudeCheck {
 export function largeMagnitudesDisagree(check: LargeMagnitudeCheck): FitFinding | undefined {
   const largest = Math.max(...check.magnitudes);
   const step = check.magnitudeStep > 0 ? check.magnitudeStep : 0.1;
-  const magnitude = Math.round((Math.floor((largest - 1 + step / 2) / step) * step - step / 2) * 1e9) / 1e9;
+  const magnitude =
+    Math.round((Math.floor((largest - 1 + step / 2) / step) * step - step / 2) * 1e9) / 1e9;
   if (!(magnitude >= check.referenceMagnitude + 1 - 1e-9)) return undefined;
   const observed = check.magnitudes.filter((m) => m >= magnitude).length;
   const predicted = check.observationYears * 10 ** (check.aValue - check.bValue * magnitude);
-  const chance = observed < predicted ? poissonAtMost(observed, predicted) : 1 - poissonAtMost(observed - 1, predicted);
-  return 2 * chance < DISAGREEMENT_CHANCE ? { kind: 'large-magnitudes-disagree', magnitude, observed, predicted, chance } : undefined;
+  const chance =
+    observed < predicted
+      ? poissonAtMost(observed, predicted)
+      : 1 - poissonAtMost(observed - 1, predicted);
+  return 2 * chance < DISAGREEMENT_CHANCE
+    ? { kind: 'large-magnitudes-disagree', magnitude, observed, predicted, chance }
+    : undefined;
 }
 
 /** Completeness that looks time-dependent: a window (earliest first) with Mc well above the Mc used. */
-export function completenessChanges(windows: readonly CompletenessWindow[], mcUsed: number): FitFinding | undefined {
+export function completenessChanges(
+  windows: readonly CompletenessWindow[],
+  mcUsed: number,
+): FitFinding | undefined {
   if (windows.length < 2) return undefined;
   const highestMc = Math.max(...windows.map((w) => w.mc));
   if (!(highestMc > mcUsed + MC_CHANGE)) return undefined;
@@ -86,5 +102,7 @@ export function completenessChanges(windows: readonly CompletenessWindow[], mcUs
 }
 
 export function mostRemoved(removed: number, total: number): FitFinding | undefined {
-  return total > 0 && removed / total > MOST_REMOVED_SHARE ? { kind: 'most-removed', removed, total } : undefined;
+  return total > 0 && removed / total > MOST_REMOVED_SHARE
+    ? { kind: 'most-removed', removed, total }
+    : undefined;
 }

@@ -25,7 +25,10 @@ export interface FrequencyMagnitudeBin {
 export interface FrequencyMagnitude {
   readonly bins: readonly FrequencyMagnitudeBin[];
   /** The fitted line's end points over the bins at or above its reference magnitude. */
-  readonly fittedLine?: readonly { readonly magnitude: number; readonly cumulativeAnnualRate: number }[];
+  readonly fittedLine?: readonly {
+    readonly magnitude: number;
+    readonly cumulativeAnnualRate: number;
+  }[];
   readonly excludedNonMoment: number;
 }
 
@@ -38,19 +41,31 @@ export interface FrequencyMagnitudeOptions extends MagnitudeSelectionOptions {
   /** With periods, each bin's rate uses its own observed years and earlier events are not counted. */
   readonly periods?: readonly CompletenessPeriod[];
   /** A fitted line, log10 N(M >= m) = aValue − bValue m, and the magnitude it applies from. */
-  readonly fit?: { readonly aValue: number; readonly bValue: number; readonly referenceMagnitude: number };
+  readonly fit?: {
+    readonly aValue: number;
+    readonly bValue: number;
+    readonly referenceMagnitude: number;
+  };
 }
 
 /**
  * Incremental and cumulative counts and annual rates per magnitude bin, every bin from the
  * lowest to the highest occupied one, with the fitted line beside them.
  */
-export function frequencyMagnitude(events: readonly CatalogEvent[], options: FrequencyMagnitudeOptions): FrequencyMagnitude {
+export function frequencyMagnitude(
+  events: readonly CatalogEvent[],
+  options: FrequencyMagnitudeOptions,
+): FrequencyMagnitude {
   const step = options.magnitudeStep ?? 0.1;
   checkMagnitudeStep(step);
   const { startMs, endMs } = options;
   if (!(Number.isFinite(startMs) && Number.isFinite(endMs) && endMs > startMs)) {
-    throw new InvalidInput([{ path: 'endMs', message: `expected an observation span with endMs after startMs; got ${startMs} to ${endMs}` }]);
+    throw new InvalidInput([
+      {
+        path: 'endMs',
+        message: `expected an observation span with endMs after startMs; got ${startMs} to ${endMs}`,
+      },
+    ]);
   }
   const selected = selectByMagnitudeType(events, options.magnitudes);
   const periods = options.periods ?? [];
@@ -60,7 +75,8 @@ export function frequencyMagnitude(events: readonly CatalogEvent[], options: Fre
   const startOf = (k: number): number => {
     if (periods.length === 0) return startMs;
     let start = Infinity;
-    for (const p of periods) if (binIndex(p.magnitude, step) <= k && p.startMs < start) start = p.startMs;
+    for (const p of periods)
+      if (binIndex(p.magnitude, step) <= k && p.startMs < start) start = p.startMs;
     return start;
   };
   const counts = new Map<number, number>();
@@ -76,7 +92,11 @@ export function frequencyMagnitude(events: readonly CatalogEvent[], options: Fre
   const rows: { k: number; count: number; years: number }[] = [];
   for (let k = lo; k <= hi; k++) {
     const start = startOf(k);
-    rows.push({ k, count: counts.get(k) ?? 0, years: Number.isFinite(start) ? yearsBetween(start, endMs) : 0 });
+    rows.push({
+      k,
+      count: counts.get(k) ?? 0,
+      years: Number.isFinite(start) ? yearsBetween(start, endMs) : 0,
+    });
   }
   let cumulativeCount = 0;
   let cumulativeRate = 0;
@@ -88,7 +108,10 @@ export function frequencyMagnitude(events: readonly CatalogEvent[], options: Fre
     cumulativeRate += annualRate;
     const magnitude = binMagnitude(k, step);
     const lowerEdge = Math.round((magnitude - step / 2) * 1e9) / 1e9;
-    const fitted = options.fit && lowerEdge >= options.fit.referenceMagnitude - 1e-9 ? 10 ** (options.fit.aValue - options.fit.bValue * lowerEdge) : undefined;
+    const fitted =
+      options.fit && lowerEdge >= options.fit.referenceMagnitude - 1e-9
+        ? 10 ** (options.fit.aValue - options.fit.bValue * lowerEdge)
+        : undefined;
     bins.push({
       magnitude,
       lowerEdge,
@@ -102,10 +125,20 @@ export function frequencyMagnitude(events: readonly CatalogEvent[], options: Fre
   }
   bins.reverse();
   const fit = options.fit;
-  const fittedEdges = bins.filter((b) => b.fittedCumulativeAnnualRate !== undefined).map((b) => b.lowerEdge);
-  if (!fit || fittedEdges.length === 0) return { bins, excludedNonMoment: selected.excludedNonMoment };
-  const line = (m: number) => ({ magnitude: m, cumulativeAnnualRate: 10 ** (fit.aValue - fit.bValue * m) });
+  const fittedEdges = bins
+    .filter((b) => b.fittedCumulativeAnnualRate !== undefined)
+    .map((b) => b.lowerEdge);
+  if (!fit || fittedEdges.length === 0)
+    return { bins, excludedNonMoment: selected.excludedNonMoment };
+  const line = (m: number) => ({
+    magnitude: m,
+    cumulativeAnnualRate: 10 ** (fit.aValue - fit.bValue * m),
+  });
   const from = fittedEdges[0] as number;
   const to = (fittedEdges[fittedEdges.length - 1] as number) + step;
-  return { bins, fittedLine: [line(from), line(to)], excludedNonMoment: selected.excludedNonMoment };
+  return {
+    bins,
+    fittedLine: [line(from), line(to)],
+    excludedNonMoment: selected.excludedNonMoment,
+  };
 }

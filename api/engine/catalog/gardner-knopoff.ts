@@ -27,10 +27,14 @@ export const GARDNER_KNOPOFF_WINDOWS =
   'Gardner & Knopoff (1974) windows, fitted form: L = 10^(0.1238 M + 0.983) km; T = 10^(0.032 M + 2.7389) days (M >= 6.5), 10^(0.5409 M − 0.547) days (M < 6.5)';
 
 /** Window half-lengths for a mainshock of magnitude M: distance in km, time in days. */
-export function gardnerKnopoffWindow(magnitude: number): { readonly distanceKm: number; readonly days: number } {
+export function gardnerKnopoffWindow(magnitude: number): {
+  readonly distanceKm: number;
+  readonly days: number;
+} {
   return {
     distanceKm: 10 ** (0.1238 * magnitude + 0.983),
-    days: magnitude >= 6.5 ? 10 ** (0.032 * magnitude + 2.7389) : 10 ** (0.5409 * magnitude - 0.547),
+    days:
+      magnitude >= 6.5 ? 10 ** (0.032 * magnitude + 2.7389) : 10 ** (0.5409 * magnitude - 0.547),
   };
 }
 
@@ -60,19 +64,27 @@ export interface DeclusterOptions extends MagnitudeSelectionOptions {
 }
 
 /** Gardner & Knopoff (1974) declustering (see the file comment). */
-export function declusterGardnerKnopoff(events: readonly CatalogEvent[], options: DeclusterOptions = {}): DeclusteredCatalog {
+export function declusterGardnerKnopoff(
+  events: readonly CatalogEvent[],
+  options: DeclusterOptions = {},
+): DeclusteredCatalog {
   const foreshocks = options.removeForeshocks ?? true;
   const selected = selectByMagnitudeType(events, options.magnitudes);
   const byTime = [...selected.events].sort((a, b) => a.timeMs - b.timeMs);
   const ids = new Set<string>();
   byTime.forEach((e, i) => {
-    if (ids.has(e.id)) throw new InvalidInput([{ path: `events[${i}].id`, message: `expected unique event ids; "${e.id}" appears twice` }]);
+    if (ids.has(e.id))
+      throw new InvalidInput([
+        { path: `events[${i}].id`, message: `expected unique event ids; "${e.id}" appears twice` },
+      ]);
     ids.add(e.id);
   });
   const n = byTime.length;
   const times = byTime.map((e) => e.timeMs);
   const magnitudes = Float64Array.from(byTime, (e) => e.magnitude);
-  const order = Int32Array.from(byTime, (_, i) => i).sort((a, b) => (magnitudes[b] as number) - (magnitudes[a] as number) || a - b);
+  const order = Int32Array.from(byTime, (_, i) => i).sort(
+    (a, b) => (magnitudes[b] as number) - (magnitudes[a] as number) || a - b,
+  );
   const smallest = n === 0 ? 0 : (magnitudes[order[n - 1] as number] as number);
   // Cells as wide as the smallest window: most mainshocks are small, and theirs then spans a few cells.
   const grid = epicentreGrid(
@@ -107,7 +119,12 @@ export function declusterGardnerKnopoff(events: readonly CatalogEvent[], options
       if (distanceKm > window.distanceKm) continue;
       mainshockOf[j] = i;
       clustered.add(i);
-      removedAt[j] = { event: other, mainshockId: main.id, distanceKm, daysFromMainshock: (other.timeMs - main.timeMs) / MS_PER_DAY };
+      removedAt[j] = {
+        event: other,
+        mainshockId: main.id,
+        distanceKm,
+        daysFromMainshock: (other.timeMs - main.timeMs) / MS_PER_DAY,
+      };
       removedSeq[j] = removedCount++;
     }
   }
@@ -124,9 +141,13 @@ export function declusterGardnerKnopoff(events: readonly CatalogEvent[], options
  * Removed events in time order, events at the same instant in the order they were removed
  * (as a stable sort by time of the removal list gives).
  */
-function inTimeOrder(removedAt: readonly (RemovedEvent | undefined)[], removedSeq: Int32Array, times: readonly number[]): RemovedEvent[] {
+function inTimeOrder(
+  removedAt: readonly (RemovedEvent | undefined)[],
+  removedSeq: Int32Array,
+  times: readonly number[],
+): RemovedEvent[] {
   const removed: RemovedEvent[] = [];
-  for (let start = 0; start < times.length; ) {
+  for (let start = 0; start < times.length;) {
     let end = start + 1;
     while (end < times.length && times[end] === times[start]) end++;
     if (end === start + 1) {

@@ -39,7 +39,10 @@ export interface GutenbergRichterFitOptions extends MagnitudeSelectionOptions {
 }
 
 /** Aki–Utsu b, Shi & Bolt σb and the annual rate (per year) for a catalog complete above `mc`. */
-export function fitGutenbergRichter(events: readonly CatalogEvent[], options: GutenbergRichterFitOptions): GutenbergRichterFit {
+export function fitGutenbergRichter(
+  events: readonly CatalogEvent[],
+  options: GutenbergRichterFitOptions,
+): GutenbergRichterFit {
   const step = options.magnitudeStep ?? 0.1;
   const selected = selectByMagnitudeType(events, options.magnitudes);
   const span = observationSpan(selected.events, options.startMs, options.endMs);
@@ -66,8 +69,10 @@ export function fitGutenbergRichter(events: readonly CatalogEvent[], options: Gu
 }
 
 /** Annual rate of M >= magnitude on the fitted (untruncated) line. */
-export const annualRateAbove = (fit: Pick<GutenbergRichterFit, 'aValue' | 'bValue'>, magnitude: number): number =>
-  10 ** (fit.aValue - fit.bValue * magnitude);
+export const annualRateAbove = (
+  fit: Pick<GutenbergRichterFit, 'aValue' | 'bValue'>,
+  magnitude: number,
+): number => 10 ** (fit.aValue - fit.bValue * magnitude);
 
 /**
  * Annual rate of M >= magnitude when the same events are read as a Gutenberg–Richter
@@ -81,11 +86,19 @@ export function truncatedRateAbove(
   mMax: number,
 ): number {
   if (!(mMax > fit.referenceMagnitude)) {
-    throw new InvalidInput([{ path: 'mMax', message: `expected mMax above the reference magnitude ${fit.referenceMagnitude}; got ${mMax}` }]);
+    throw new InvalidInput([
+      {
+        path: 'mMax',
+        message: `expected mMax above the reference magnitude ${fit.referenceMagnitude}; got ${mMax}`,
+      },
+    ]);
   }
   if (magnitude >= mMax) return 0;
   const tail = 10 ** (-fit.bValue * (mMax - fit.referenceMagnitude));
-  return (fit.rateAtReference * (10 ** (-fit.bValue * (magnitude - fit.referenceMagnitude)) - tail)) / (1 - tail);
+  return (
+    (fit.rateAtReference * (10 ** (-fit.bValue * (magnitude - fit.referenceMagnitude)) - tail)) /
+    (1 - tail)
+  );
 }
 
 /**
@@ -101,7 +114,13 @@ export function observationSpan(
   let start = startMs;
   let end = endMs;
   if (start === undefined || end === undefined) {
-    if (events.length === 0) throw new InvalidInput([{ path: 'events', message: 'expected at least one event to take the observation span from' }]);
+    if (events.length === 0)
+      throw new InvalidInput([
+        {
+          path: 'events',
+          message: 'expected at least one event to take the observation span from',
+        },
+      ]);
     let first = Infinity;
     let last = -Infinity;
     for (const e of events) {
@@ -110,10 +129,17 @@ export function observationSpan(
     }
     start ??= first;
     end ??= last;
-    notes.push(`observation ${startMs === undefined ? (endMs === undefined ? 'start and end' : 'start') : 'end'} taken from the events, which shortens the span; give startMs and endMs for the catalog's real span`);
+    notes.push(
+      `observation ${startMs === undefined ? (endMs === undefined ? 'start and end' : 'start') : 'end'} taken from the events, which shortens the span; give startMs and endMs for the catalog's real span`,
+    );
   }
   if (!(Number.isFinite(start) && Number.isFinite(end) && end > start)) {
-    throw new InvalidInput([{ path: 'endMs', message: `expected an observation span with endMs after startMs; got ${start} to ${end}` }]);
+    throw new InvalidInput([
+      {
+        path: 'endMs',
+        message: `expected an observation span with endMs after startMs; got ${start} to ${end}`,
+      },
+    ]);
   }
   return { startMs: start, endMs: end, notes };
 }
@@ -129,9 +155,15 @@ export interface WeichertCatalogFitOptions extends MagnitudeSelectionOptions {
 }
 
 /** A Gutenberg–Richter line by Weichert (1980) over completeness periods (weichert.ts). */
-export function fitGutenbergRichterWeichert(events: readonly CatalogEvent[], options: WeichertCatalogFitOptions): GutenbergRichterFit {
+export function fitGutenbergRichterWeichert(
+  events: readonly CatalogEvent[],
+  options: WeichertCatalogFitOptions,
+): GutenbergRichterFit {
   const step = options.magnitudeStep ?? 0.1;
-  if (options.periods.length === 0) throw new InvalidInput([{ path: 'periods', message: 'expected at least one completeness period' }]);
+  if (options.periods.length === 0)
+    throw new InvalidInput([
+      { path: 'periods', message: 'expected at least one completeness period' },
+    ]);
   const selected = selectByMagnitudeType(events, options.magnitudes);
   const earliest = Math.min(...options.periods.map((p) => p.startMs));
   const span = observationSpan(selected.events, earliest, options.endMs);

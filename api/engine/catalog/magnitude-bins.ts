@@ -13,18 +13,26 @@ import { InvalidInput } from '../errors.ts';
 const EDGE_GUARD = 1e-9;
 
 /** The integer index of the bin holding `magnitude`. */
-export const binIndex = (magnitude: number, stepM: number): number => Math.floor(magnitude / stepM + 0.5 + EDGE_GUARD);
+export const binIndex = (magnitude: number, stepM: number): number =>
+  Math.floor(magnitude / stepM + 0.5 + EDGE_GUARD);
 
 /** Bin centre of index k, rounded to 1e-9 so 43 × 0.1 reads 4.3. */
-export const binMagnitude = (index: number, stepM: number): number => Math.round(index * stepM * 1e9) / 1e9;
+export const binMagnitude = (index: number, stepM: number): number =>
+  Math.round(index * stepM * 1e9) / 1e9;
 
 /** The centre of the bin holding `magnitude`. */
-export const binCentre = (magnitude: number, stepM: number): number => binMagnitude(binIndex(magnitude, stepM), stepM);
+export const binCentre = (magnitude: number, stepM: number): number =>
+  binMagnitude(binIndex(magnitude, stepM), stepM);
 
 /** Throws InvalidInput unless the step is a finite number in (0, 1]. */
 export function checkMagnitudeStep(stepM: number, path = 'magnitudeStep'): void {
   if (!(Number.isFinite(stepM) && stepM > 0 && stepM <= 1)) {
-    throw new InvalidInput([{ path, message: `expected a magnitude bin width greater than 0 and at most 1; got ${stepM}` }]);
+    throw new InvalidInput([
+      {
+        path,
+        message: `expected a magnitude bin width greater than 0 and at most 1; got ${stepM}`,
+      },
+    ]);
   }
 }
 
@@ -35,7 +43,10 @@ export interface MagnitudeBinCount {
 }
 
 /** Counts per bin, every bin from the lowest to the highest occupied one (empty bins included). */
-export function magnitudeHistogram(magnitudes: readonly number[], stepM: number): MagnitudeBinCount[] {
+export function magnitudeHistogram(
+  magnitudes: readonly number[],
+  stepM: number,
+): MagnitudeBinCount[] {
   checkMagnitudeStep(stepM);
   if (magnitudes.length === 0) return [];
   const indices = magnitudes.map((m) => binIndex(m, stepM));

@@ -34,7 +34,8 @@ export const MAGNITUDE_RELATIONS: readonly MagnitudeRelation[] = [
   {
     id: 'scordilis2006-mb',
     scale: 'mb',
-    source: 'Scordilis (2006), J. Seismology 10, 225–236: Mw = 0.85 mb + 1.03 for mb 3.5–6.2 (from memory)',
+    source:
+      'Scordilis (2006), J. Seismology 10, 225–236: Mw = 0.85 mb + 1.03 for mb 3.5–6.2 (from memory)',
     min: 3.5,
     max: 6.2,
     toMw: (mb) => 0.85 * mb + 1.03,
@@ -62,7 +63,11 @@ export function convertibleScale(magnitudeType: string): ConvertibleScale | unde
 
 /** A converted event keeps what was reported, and the relation used. */
 export interface ConvertedEvent extends CatalogEvent {
-  readonly convertedFrom: { readonly magnitude: number; readonly magnitudeType: string; readonly relation: string };
+  readonly convertedFrom: {
+    readonly magnitude: number;
+    readonly magnitudeType: string;
+    readonly relation: string;
+  };
 }
 
 export interface MagnitudeConversion {
@@ -79,11 +84,17 @@ export interface MagnitudeConversion {
  * chose for it (relation ids from MAGNITUDE_RELATIONS). A magnitude outside its relation's
  * validity range is not extrapolated: the event keeps its own type and is counted.
  */
-export function convertMagnitudes(events: readonly CatalogEvent[], relationIds: readonly string[]): MagnitudeConversion {
+export function convertMagnitudes(
+  events: readonly CatalogEvent[],
+  relationIds: readonly string[],
+): MagnitudeConversion {
   const byScale = new Map<ConvertibleScale, MagnitudeRelation>();
   for (const id of relationIds) {
     const relation = MAGNITUDE_RELATIONS.find((r) => r.id === id);
-    if (!relation) throw new RangeError(`unknown magnitude relation "${id}"; expected one of ${MAGNITUDE_RELATIONS.map((r) => r.id).join(', ')}`);
+    if (!relation)
+      throw new RangeError(
+        `unknown magnitude relation "${id}"; expected one of ${MAGNITUDE_RELATIONS.map((r) => r.id).join(', ')}`,
+      );
     byScale.set(relation.scale, relation);
   }
   const converted: Record<string, number> = {};
@@ -101,7 +112,11 @@ export function convertMagnitudes(events: readonly CatalogEvent[], relationIds: 
       ...event,
       magnitude: relation.toMw(event.magnitude),
       magnitudeType: 'Mw',
-      convertedFrom: { magnitude: event.magnitude, magnitudeType: event.magnitudeType, relation: relation.id },
+      convertedFrom: {
+        magnitude: event.magnitude,
+        magnitudeType: event.magnitudeType,
+        relation: relation.id,
+      },
     };
     return mw;
   });

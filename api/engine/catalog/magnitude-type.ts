@@ -27,7 +27,10 @@ export interface SelectedEvents {
 }
 
 /** The events an analysis should read under `magnitudes`. */
-export function selectByMagnitudeType(events: readonly CatalogEvent[], magnitudes: MagnitudeSelection = 'moment'): SelectedEvents {
+export function selectByMagnitudeType(
+  events: readonly CatalogEvent[],
+  magnitudes: MagnitudeSelection = 'moment',
+): SelectedEvents {
   if (magnitudes === 'all') return { events, excludedNonMoment: 0 };
   const kept = events.filter((e) => isMomentMagnitudeType(e.magnitudeType));
   return { events: kept, excludedNonMoment: events.length - kept.length };

@@ -57,23 +57,42 @@ export function syntheticCatalog(options: SyntheticCatalogOptions): CatalogEvent
   const invalid = (path: string, message: string): never => {
     throw new InvalidInput([{ path, message }]);
   };
-  if (!(bValue > 0 && Number.isFinite(bValue))) invalid('bValue', `expected a b-value greater than 0; got ${bValue}`);
-  if (!(Number.isFinite(mMin) && Number.isFinite(mMax) && mMax > mMin)) invalid('mMax', `expected mMax greater than mMin ${mMin}; got ${mMax}`);
-  if (!(Number.isFinite(startMs) && Number.isFinite(endMs) && endMs > startMs)) invalid('endMs', `expected endMs after startMs; got ${startMs} to ${endMs}`);
-  if (!(Number.isFinite(depthMin) && Number.isFinite(depthMax) && depthMax >= depthMin)) invalid('depthKm', `expected [min, max] depths in km with max >= min; got [${depthMin}, ${depthMax}]`);
-  if ((options.eventCount === undefined) === (options.annualRate === undefined)) invalid('eventCount', 'expected exactly one of eventCount and annualRate');
-  if (options.eventCount !== undefined && !(Number.isInteger(options.eventCount) && options.eventCount >= 0)) {
+  if (!(bValue > 0 && Number.isFinite(bValue)))
+    invalid('bValue', `expected a b-value greater than 0; got ${bValue}`);
+  if (!(Number.isFinite(mMin) && Number.isFinite(mMax) && mMax > mMin))
+    invalid('mMax', `expected mMax greater than mMin ${mMin}; got ${mMax}`);
+  if (!(Number.isFinite(startMs) && Number.isFinite(endMs) && endMs > startMs))
+    invalid('endMs', `expected endMs after startMs; got ${startMs} to ${endMs}`);
+  if (!(Number.isFinite(depthMin) && Number.isFinite(depthMax) && depthMax >= depthMin))
+    invalid(
+      'depthKm',
+      `expected [min, max] depths in km with max >= min; got [${depthMin}, ${depthMax}]`,
+    );
+  if ((options.eventCount === undefined) === (options.annualRate === undefined))
+    invalid('eventCount', 'expected exactly one of eventCount and annualRate');
+  if (
+    options.eventCount !== undefined &&
+    !(Number.isInteger(options.eventCount) && options.eventCount >= 0)
+  ) {
     invalid('eventCount', `expected a whole number of events; got ${options.eventCount}`);
   }
-  if (options.annualRate !== undefined && !(options.annualRate >= 0 && Number.isFinite(options.annualRate))) {
+  if (
+    options.annualRate !== undefined &&
+    !(options.annualRate >= 0 && Number.isFinite(options.annualRate))
+  ) {
     invalid('annualRate', `expected an annual rate of at least 0; got ${options.annualRate}`);
   }
   if (options.magnitudeStep !== undefined) checkMagnitudeStep(options.magnitudeStep);
-  const expected = options.eventCount ?? ((options.annualRate ?? 0) * (endMs - startMs)) / MS_PER_YEAR;
-  if (expected > MAX_EVENTS) throw new StudyTooLarge(Math.round(expected), MAX_EVENTS, 'synthetic catalog events');
+  const expected =
+    options.eventCount ?? ((options.annualRate ?? 0) * (endMs - startMs)) / MS_PER_YEAR;
+  if (expected > MAX_EVENTS)
+    throw new StudyTooLarge(Math.round(expected), MAX_EVENTS, 'synthetic catalog events');
   const zone = zonePolygon(options.rings);
 
-  const times = options.eventCount !== undefined ? uniformTimes(random, options.eventCount, startMs, endMs) : poissonTimes(random, options.annualRate ?? 0, startMs, endMs);
+  const times =
+    options.eventCount !== undefined
+      ? uniformTimes(random, options.eventCount, startMs, endMs)
+      : poissonTimes(random, options.annualRate ?? 0, startMs, endMs);
   const beta = bValue * Math.LN10;
   const span = 1 - Math.exp(-beta * (mMax - mMin));
   const [west, south, east, north] = zone.bbox;
@@ -83,11 +102,16 @@ export function syntheticCatalog(options: SyntheticCatalogOptions): CatalogEvent
   const width = String(times.length).length;
   return times.map((timeMs, i) => {
     const raw = mMin - Math.log(1 - random.nextFloat() * span) / beta;
-    const magnitude = options.magnitudeStep === undefined ? raw : binCentre(raw, options.magnitudeStep);
+    const magnitude =
+      options.magnitudeStep === undefined ? raw : binCentre(raw, options.magnitudeStep);
     let lon: number;
     let lat: number;
     for (let draw = 0; ; draw++) {
-      if (draw === MAX_DRAWS_PER_EVENT) invalid('rings', `the zone fills too little of its bounding box to draw epicentres in (no hit in ${MAX_DRAWS_PER_EVENT} draws)`);
+      if (draw === MAX_DRAWS_PER_EVENT)
+        invalid(
+          'rings',
+          `the zone fills too little of its bounding box to draw epicentres in (no hit in ${MAX_DRAWS_PER_EVENT} draws)`,
+        );
       lon = west + (east - west) * random.nextFloat();
       lat = Math.asin(sinSouth + (sinNorth - sinSouth) * random.nextFloat()) * RAD_TO_DEG;
       if (insideZone(zone, lon, lat)) break;
@@ -104,16 +128,32 @@ export function syntheticCatalog(options: SyntheticCatalogOptions): CatalogEvent
   });
 }
 
-function uniformTimes(random: RandomSource, count: number, startMs: number, endMs: number): number[] {
-  const times = Array.from({ length: count }, () => Math.floor(startMs + (endMs - startMs) * random.nextFloat()));
+function uniformTimes(
+  random: RandomSource,
+  count: number,
+  startMs: number,
+  endMs: number,
+): number[] {
+  const times = Array.from({ length: count }, () =>
+    Math.floor(startMs + (endMs - startMs) * random.nextFloat()),
+  );
   return times.sort((a, b) => a - b);
 }
 
-function poissonTimes(random: RandomSource, annualRate: number, startMs: number, endMs: number): number[] {
+function poissonTimes(
+  random: RandomSource,
+  annualRate: number,
+  startMs: number,
+  endMs: number,
+): number[] {
   const times: number[] = [];
   if (annualRate === 0) return times;
   const meanGapMs = MS_PER_YEAR / annualRate;
-  for (let t = startMs - Math.log(random.nextOpenFloat()) * meanGapMs; t < endMs; t -= Math.log(random.nextOpenFloat()) * meanGapMs) {
+  for (
+    let t = startMs - Math.log(random.nextOpenFloat()) * meanGapMs;
+    t < endMs;
+    t -= Math.log(random.nextOpenFloat()) * meanGapMs
+  ) {
     times.push(Math.floor(t));
   }
   return times;

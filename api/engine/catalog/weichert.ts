@@ -43,16 +43,33 @@ export interface WeichertOptions {
 const BETA_BOUND = 30;
 
 /** Weichert (1980) fit of bins with their counts and observation years. */
-export function weichertFit(bins: readonly ObservationBin[], options: WeichertOptions): WeichertEstimate {
+export function weichertFit(
+  bins: readonly ObservationBin[],
+  options: WeichertOptions,
+): WeichertEstimate {
   const tolerance = options.toleranceBeta ?? 1e-10;
   const maxIterations = options.maxIterations ?? 200;
   bins.forEach((b, i) => {
-    if (!(Number.isInteger(b.count) && b.count >= 0)) throw new InvalidInput([{ path: `bins[${i}].count`, message: `expected a whole number of events; got ${b.count}` }]);
-    if (!(b.years > 0 && Number.isFinite(b.years))) throw new InvalidInput([{ path: `bins[${i}].years`, message: `expected observation years greater than 0; got ${b.years}` }]);
+    if (!(Number.isInteger(b.count) && b.count >= 0))
+      throw new InvalidInput([
+        { path: `bins[${i}].count`, message: `expected a whole number of events; got ${b.count}` },
+      ]);
+    if (!(b.years > 0 && Number.isFinite(b.years)))
+      throw new InvalidInput([
+        {
+          path: `bins[${i}].years`,
+          message: `expected observation years greater than 0; got ${b.years}`,
+        },
+      ]);
   });
   const occupied = bins.filter((b) => b.count > 0).length;
   if (occupied < 2) {
-    throw new InvalidInput([{ path: 'bins', message: `expected events in at least 2 magnitude bins for a Weichert fit; got ${occupied}` }]);
+    throw new InvalidInput([
+      {
+        path: 'bins',
+        message: `expected events in at least 2 magnitude bins for a Weichert fit; got ${occupied}`,
+      },
+    ]);
   }
   const m0 = Math.min(...bins.map((b) => b.magnitude));
   // Magnitudes relative to the lowest bin keep the exponentials near 1.
@@ -74,7 +91,9 @@ export function weichertFit(bins: readonly ObservationBin[], options: WeichertOp
   let lo = -BETA_BOUND;
   let hi = BETA_BOUND;
   if (!(excessMean(lo) > 0 && excessMean(hi) < 0)) {
-    throw new TremoraError(`Weichert fit: no b-value between ${-BETA_BOUND / Math.LN10} and ${BETA_BOUND / Math.LN10} fits these bins`);
+    throw new TremoraError(
+      `Weichert fit: no b-value between ${-BETA_BOUND / Math.LN10} and ${BETA_BOUND / Math.LN10} fits these bins`,
+    );
   }
   let beta = Math.LN10;
   for (let iteration = 1; iteration <= maxIterations; iteration++) {
@@ -87,9 +106,12 @@ export function weichertFit(bins: readonly ObservationBin[], options: WeichertOp
     if (!(next > lo && next < hi)) next = (lo + hi) / 2;
     const change = Math.abs(next - beta);
     beta = next;
-    if (change < tolerance) return estimate(dm, m0, n, beta, options.magnitudeStep, iteration, moments);
+    if (change < tolerance)
+      return estimate(dm, m0, n, beta, options.magnitudeStep, iteration, moments);
   }
-  throw new TremoraError(`Weichert fit did not converge to ${tolerance} in β within ${maxIterations} iterations`);
+  throw new TremoraError(
+    `Weichert fit did not converge to ${tolerance} in β within ${maxIterations} iterations`,
+  );
 }
 
 function estimate(

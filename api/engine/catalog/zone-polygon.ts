@@ -17,18 +17,38 @@ export interface ZonePolygon {
 
 /** Checks and closes the rings; throws InvalidInput naming the bad ring or point. */
 export function zonePolygon(rings: readonly (readonly LonLat[])[], path = 'rings'): ZonePolygon {
-  if (rings.length === 0) throw new InvalidInput([{ path, message: 'expected at least an outer ring' }]);
+  if (rings.length === 0)
+    throw new InvalidInput([{ path, message: 'expected at least an outer ring' }]);
   const closed = rings.map((ring, r) => {
     ring.forEach(([lon, lat], i) => {
-      if (!(Number.isFinite(lon) && lon >= -180 && lon <= 180 && Number.isFinite(lat) && lat >= -90 && lat <= 90)) {
-        throw new InvalidInput([{ path: `${path}[${r}][${i}]`, message: `expected [lon, lat] in degrees within ±180, ±90; got [${lon}, ${lat}]` }]);
+      if (!(
+        Number.isFinite(lon) &&
+        lon >= -180 &&
+        lon <= 180 &&
+        Number.isFinite(lat) &&
+        lat >= -90 &&
+        lat <= 90
+      )) {
+        throw new InvalidInput([
+          {
+            path: `${path}[${r}][${i}]`,
+            message: `expected [lon, lat] in degrees within ±180, ±90; got [${lon}, ${lat}]`,
+          },
+        ]);
       }
     });
     const first = ring[0];
     const last = ring[ring.length - 1];
     const points = ring.map(([lon, lat]) => [lon, lat]);
-    if (first && last && (first[0] !== last[0] || first[1] !== last[1])) points.push([first[0], first[1]]);
-    if (points.length < 4) throw new InvalidInput([{ path: `${path}[${r}]`, message: `expected a ring of at least 3 distinct points; got ${ring.length} points` }]);
+    if (first && last && (first[0] !== last[0] || first[1] !== last[1]))
+      points.push([first[0], first[1]]);
+    if (points.length < 4)
+      throw new InvalidInput([
+        {
+          path: `${path}[${r}]`,
+          message: `expected a ring of at least 3 distinct points; got ${ring.length} points`,
+        },
+      ]);
     return points;
   });
   const outer = closed[0] as number[][];
@@ -41,4 +61,5 @@ export function zonePolygon(rings: readonly (readonly LonLat[])[], path = 'rings
 }
 
 /** True when the epicentre (degrees) lies inside the zone or on its boundary. */
-export const insideZone = (zone: ZonePolygon, lon: number, lat: number): boolean => booleanPointInPolygon([lon, lat], zone.geometry);
+export const insideZone = (zone: ZonePolygon, lon: number, lat: number): boolean =>
+  booleanPointInPolygon([lon, lat], zone.geometry);

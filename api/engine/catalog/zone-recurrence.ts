@@ -2,7 +2,12 @@ import { InvalidInput } from '../errors.ts';
 import type { GutenbergRichterRecurrence, LonLat } from '../model.ts';
 import type { CompletenessPeriod } from './completeness-periods.ts';
 import type { CatalogEvent } from './event.ts';
-import { fitGutenbergRichter, fitGutenbergRichterWeichert, truncatedRateAbove, type GutenbergRichterFit } from './gutenberg-richter-fit.ts';
+import {
+  fitGutenbergRichter,
+  fitGutenbergRichterWeichert,
+  truncatedRateAbove,
+  type GutenbergRichterFit,
+} from './gutenberg-richter-fit.ts';
 import type { MagnitudeSelectionOptions } from './magnitude-type.ts';
 import { insideZone, zonePolygon } from './zone-polygon.ts';
 
@@ -51,16 +56,29 @@ export interface ZoneRecurrenceOptions extends MagnitudeSelectionOptions {
  * as truncated at mMax with the observed rate at the reference magnitude kept
  * (truncatedRateAbove), and carries the count's relative Poisson error 1/sqrt(n).
  */
-export function zoneRecurrence(events: readonly CatalogEvent[], options: ZoneRecurrenceOptions): ZoneRecurrence {
+export function zoneRecurrence(
+  events: readonly CatalogEvent[],
+  options: ZoneRecurrenceOptions,
+): ZoneRecurrence {
   const step = options.magnitudeStep ?? 0.1;
   const zone = zonePolygon(options.rings);
   const [dMin, dMax] = options.depthKm ?? [-Infinity, Infinity];
-  const inZone = events.filter((e) => e.depthKm >= dMin && e.depthKm <= dMax && insideZone(zone, e.lon, e.lat));
+  const inZone = events.filter(
+    (e) => e.depthKm >= dMin && e.depthKm <= dMax && insideZone(zone, e.lon, e.lat),
+  );
   const c = options.completeness;
-  const common = { magnitudeStep: step, ...(options.magnitudes ? { magnitudes: options.magnitudes } : {}) };
+  const common = {
+    magnitudeStep: step,
+    ...(options.magnitudes ? { magnitudes: options.magnitudes } : {}),
+  };
   const fit =
     'periods' in c
-      ? fitGutenbergRichterWeichert(inZone, { ...common, periods: c.periods, upperMagnitude: options.mMax, ...(c.endMs === undefined ? {} : { endMs: c.endMs }) })
+      ? fitGutenbergRichterWeichert(inZone, {
+          ...common,
+          periods: c.periods,
+          upperMagnitude: options.mMax,
+          ...(c.endMs === undefined ? {} : { endMs: c.endMs }),
+        })
       : fitGutenbergRichter(inZone, {
           ...common,
           mc: c.mc,
@@ -69,14 +87,22 @@ export function zoneRecurrence(events: readonly CatalogEvent[], options: ZoneRec
         });
   const mMin = options.mMin ?? fit.referenceMagnitude;
   if (!(Number.isFinite(options.mMax) && options.mMax > mMin)) {
-    throw new InvalidInput([{ path: 'mMax', message: `expected mMax greater than mMin ${mMin}; got ${options.mMax}` }]);
+    throw new InvalidInput([
+      { path: 'mMax', message: `expected mMax greater than mMin ${mMin}; got ${options.mMax}` },
+    ]);
   }
   const rate = truncatedRateAbove(fit, mMin, options.mMax);
   const sigmaRate = rate / Math.sqrt(fit.eventCount);
   const notes = [...fit.notes];
   const left = fit.excludedNonMoment;
-  if (left > 0) notes.push(`${left} event${left === 1 ? ' in the zone was' : 's in the zone were'} left out: not moment magnitudes`);
-  if (mMin < fit.referenceMagnitude - 1e-9) notes.push(`mMin ${mMin} is below the completeness magnitude: the rate there extrapolates the fitted line`);
+  if (left > 0)
+    notes.push(
+      `${left} event${left === 1 ? ' in the zone was' : 's in the zone were'} left out: not moment magnitudes`,
+    );
+  if (mMin < fit.referenceMagnitude - 1e-9)
+    notes.push(
+      `mMin ${mMin} is below the completeness magnitude: the rate there extrapolates the fitted line`,
+    );
   return {
     recurrence: { type: 'gutenberg-richter', bValue: fit.bValue, mMin, mMax: options.mMax, rate },
     bValue: fit.bValue,

@@ -34,7 +34,14 @@ export interface CellUse {
 }
 
 /** Whether a rupture with `use` counts at the site (x, y), local km. */
-export function cellUsedAt(near: boolean, centreX: number, centreY: number, radiusKm: number, x: number, y: number): boolean {
+export function cellUsedAt(
+  near: boolean,
+  centreX: number,
+  centreY: number,
+  radiusKm: number,
+  x: number,
+  y: number,
+): boolean {
   const dx = x - centreX;
   const dy = y - centreY;
   return dx * dx + dy * dy <= radiusKm * radiusKm ? near : !near;

@@ -24,9 +24,11 @@ export function ruptureDistances(surface: RuptureSurface, site: PointXY): Distan
   const h = surface.hypocentre;
   const repiKm = Math.hypot(site.x - h.x, site.y - h.y);
   const rhypoKm = Math.hypot(repiKm, h.z);
-  if (surface.kind === 'point') return { rjbKm: repiKm, rrupKm: rhypoKm, rxKm: -repiKm, ry0Km: 0, rhypoKm, repiKm };
+  if (surface.kind === 'point')
+    return { rjbKm: repiKm, rrupKm: rhypoKm, rxKm: -repiKm, ry0Km: 0, rhypoKm, repiKm };
 
-  if (surface.planes.length === 0) throw new TremoraError('a planar rupture surface needs at least one plane, got none');
+  if (surface.planes.length === 0)
+    throw new TremoraError('a planar rupture surface needs at least one plane, got none');
   const atSurface: PointKm = { x: site.x, y: site.y, z: 0 };
   let rjbKm = Infinity;
   let rrupKm = Infinity;

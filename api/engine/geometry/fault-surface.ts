@@ -64,26 +64,44 @@ const fieldError = (fault: FaultSource, field: string, message: string): Invalid
 /** The surface of a fault source in `frame` (km; depths km, dip degrees). */
 export function faultSurface(fault: FaultSource, frame: LocalFrame): FaultSurface {
   const { dipDeg, upperDepthKm, lowerDepthKm } = fault;
-  if (!(dipDeg > 0 && dipDeg <= 90)) throw fieldError(fault, 'dip', `expected a dip in (0, 90] degrees, got ${dipDeg}`);
+  if (!(dipDeg > 0 && dipDeg <= 90))
+    throw fieldError(fault, 'dip', `expected a dip in (0, 90] degrees, got ${dipDeg}`);
   if (!(upperDepthKm >= 0 && lowerDepthKm > upperDepthKm)) {
-    throw fieldError(fault, 'lowerDepthKm', `expected 0 <= upperDepthKm < lowerDepthKm, got ${upperDepthKm} and ${lowerDepthKm} km`);
+    throw fieldError(
+      fault,
+      'lowerDepthKm',
+      `expected 0 <= upperDepthKm < lowerDepthKm, got ${upperDepthKm} and ${lowerDepthKm} km`,
+    );
   }
   let points = fault.trace.map((p) => frame.toLocal(p));
   const first = points[0];
   const last = points[points.length - 1];
   if (points.length < 2 || first === undefined || last === undefined) {
-    throw fieldError(fault, 'coordinates', `expected a trace of at least 2 vertices, got ${points.length}`);
+    throw fieldError(
+      fault,
+      'coordinates',
+      `expected a trace of at least 2 vertices, got ${points.length}`,
+    );
   }
   const chordX = last.x - first.x;
   const chordY = last.y - first.y;
   const chordKm = Math.hypot(chordX, chordY);
-  if (chordKm < MIN_SEGMENT_KM) throw fieldError(fault, 'coordinates', 'expected a trace whose ends are apart, got ends at the same place');
+  if (chordKm < MIN_SEGMENT_KM)
+    throw fieldError(
+      fault,
+      'coordinates',
+      'expected a trace whose ends are apart, got ends at the same place',
+    );
   const dipRad = toRadians(dipDeg);
   const dipAzRad = toRadians(fault.dipDirectionDeg);
   // Right of the chord is (chordY, -chordX) in x-east, y-north coordinates.
   const side = (Math.sin(dipAzRad) * chordY - Math.cos(dipAzRad) * chordX) / chordKm;
   if (Math.abs(side) < SIDE_COS_MIN && dipDeg < 90) {
-    throw fieldError(fault, 'dipDirection', `expected a dip direction to one side of the trace, got ${fault.dipDirectionDeg}° along it`);
+    throw fieldError(
+      fault,
+      'dipDirection',
+      `expected a dip direction to one side of the trace, got ${fault.dipDirectionDeg}° along it`,
+    );
   }
   const reversed = side < 0;
   if (reversed) points = [...points].reverse();
@@ -96,12 +114,31 @@ export function faultSurface(fault: FaultSource, frame: LocalFrame): FaultSurfac
     const lengthKm = Math.hypot(end.x - start.x, end.y - start.y);
     if (lengthKm < MIN_SEGMENT_KM) continue;
     const strike = { x: (end.x - start.x) / lengthKm, y: (end.y - start.y) / lengthKm };
-    segments.push({ start, end, strike, downDip: { x: strike.y, y: -strike.x }, lengthKm, startKm });
+    segments.push({
+      start,
+      end,
+      strike,
+      downDip: { x: strike.y, y: -strike.x },
+      lengthKm,
+      startKm,
+    });
     startKm += lengthKm;
   }
   const widthKm = (lowerDepthKm - upperDepthKm) / Math.sin(dipRad);
   const sinDip = Math.sin(dipRad);
-  return { sourceId: fault.id, segments, dipDeg, upperDepthKm, lowerDepthKm, lengthKm: startKm, widthKm, areaKm2: startKm * widthKm, reversed, sinDip, cosDip: Math.cos(dipRad) };
+  return {
+    sourceId: fault.id,
+    segments,
+    dipDeg,
+    upperDepthKm,
+    lowerDepthKm,
+    lengthKm: startKm,
+    widthKm,
+    areaKm2: startKm * widthKm,
+    reversed,
+    sinDip,
+    cosDip: Math.cos(dipRad),
+  };
 }
 
 function segmentAt(surface: FaultSurface, alongKm: number): TraceSegment {
@@ -110,7 +147,12 @@ function segmentAt(surface: FaultSurface, alongKm: number): TraceSegment {
   return segments[segments.length - 1] as TraceSegment;
 }
 
-function pointOnSegment(surface: FaultSurface, segment: TraceSegment, alongKm: number, downDipKm: number): PointKm {
+function pointOnSegment(
+  surface: FaultSurface,
+  segment: TraceSegment,
+  alongKm: number,
+  downDipKm: number,
+): PointKm {
   const u = alongKm - segment.startKm;
   const h = downDipKm * surface.cosDip;
   return {

@@ -67,9 +67,16 @@ export interface FloatingRupturesOptions {
  * rule (positionOffsetsKm). A rupture follows the trace across segment
  * joints, so it is then several planes.
  */
-export function floatingRuptures(surface: FaultSurface, dimensions: RuptureDimensions, options: FloatingRupturesOptions): FloatingRupture[] {
+export function floatingRuptures(
+  surface: FaultSurface,
+  dimensions: RuptureDimensions,
+  options: FloatingRupturesOptions,
+): FloatingRupture[] {
   const { spacingKm } = options;
-  if (!(spacingKm > 0)) throw new InvalidInput([{ path: 'settings.ruptureSpacingKm', message: `expected a spacing > 0 km, got ${spacingKm}` }]);
+  if (!(spacingKm > 0))
+    throw new InvalidInput([
+      { path: 'settings.ruptureSpacingKm', message: `expected a spacing > 0 km, got ${spacingKm}` },
+    ]);
   const lengthKm = Math.min(dimensions.lengthKm, surface.lengthKm);
   const widthKm = Math.min(dimensions.widthKm, surface.widthKm);
   const ruptures: FloatingRupture[] = [];

@@ -13,7 +13,8 @@ function closestOnLine(p: PointXY, a: PointXY, b: PointXY): PointXY {
   const dx = b.x - a.x;
   const dy = b.y - a.y;
   const lengthSq = dx * dx + dy * dy;
-  const t = lengthSq === 0 ? 0 : Math.min(1, Math.max(0, ((p.x - a.x) * dx + (p.y - a.y) * dy) / lengthSq));
+  const t =
+    lengthSq === 0 ? 0 : Math.min(1, Math.max(0, ((p.x - a.x) * dx + (p.y - a.y) * dy) / lengthSq));
   return { x: a.x + dx * t, y: a.y + dy * t };
 }
 
@@ -32,7 +33,12 @@ function depthBelowPlaneKm(plane: RupturePlane, site: PointXY): number | undefin
   return c0.z - (n.x * (site.x - c0.x) + n.y * (site.y - c0.y)) / n.z;
 }
 
-function nearestOf(fault: FaultSource, frame: LocalFrame, site: LonLat, siteXY: PointXY): NearestFault {
+function nearestOf(
+  fault: FaultSource,
+  frame: LocalFrame,
+  site: LonLat,
+  siteXY: PointXY,
+): NearestFault {
   const surface = faultSurface(fault, frame);
   const whole = wholeSurface(surface);
   const rrupKm = ruptureDistances(whole, siteXY).rrupKm;
@@ -43,7 +49,8 @@ function nearestOf(fault: FaultSource, frame: LocalFrame, site: LonLat, siteXY: 
       const candidate = closestPointOnProjection(plane, siteXY);
       if (candidate.distanceKm < best.distanceKm) best = candidate;
       const depth = depthBelowPlaneKm(plane, siteXY);
-      if (depth !== undefined && (depthBelowKm === undefined || depth < depthBelowKm)) depthBelowKm = depth;
+      if (depth !== undefined && (depthBelowKm === undefined || depth < depthBelowKm))
+        depthBelowKm = depth;
     }
   }
   const below = best.distanceKm === 0 && depthBelowKm !== undefined ? { depthBelowKm } : {};
@@ -60,12 +67,28 @@ function nearestOf(fault: FaultSource, frame: LocalFrame, site: LonLat, siteXY: 
       }
     }
     if (traceKm === 0) {
-      return { sourceId: fault.id, name: fault.name, distanceKm: 0, bearingDeg: normaliseAzimuthDeg(fault.dipDirectionDeg), rrupKm, ...below };
+      return {
+        sourceId: fault.id,
+        name: fault.name,
+        distanceKm: 0,
+        bearingDeg: normaliseAzimuthDeg(fault.dipDirectionDeg),
+        rrupKm,
+        ...below,
+      };
     }
   }
   const targetLonLat = frame.toLonLat(target);
-  const bearingDeg = normaliseAzimuthDeg(bearing([site[0], site[1]], [targetLonLat[0], targetLonLat[1]]));
-  return { sourceId: fault.id, name: fault.name, distanceKm: best.distanceKm, bearingDeg, rrupKm, ...below };
+  const bearingDeg = normaliseAzimuthDeg(
+    bearing([site[0], site[1]], [targetLonLat[0], targetLonLat[1]]),
+  );
+  return {
+    sourceId: fault.id,
+    name: fault.name,
+    distanceKm: best.distanceKm,
+    bearingDeg,
+    rrupKm,
+    ...below,
+  };
 }
 
 /**
@@ -79,9 +102,16 @@ function nearestOf(fault: FaultSource, frame: LocalFrame, site: LonLat, siteXY: 
  * dipping fault (distance 0) gets the bearing to the nearest point of the fault's top trace,
  * the line to look for; a site on that trace gets the dip direction.
  */
-export function nearestFaults(sources: readonly Source[], frame: LocalFrame, site: LonLat, count: number): NearestFault[] {
+export function nearestFaults(
+  sources: readonly Source[],
+  frame: LocalFrame,
+  site: LonLat,
+  count: number,
+): NearestFault[] {
   const siteXY = frame.toLocal(site);
-  const found = sources.filter((s): s is FaultSource => s.kind === 'fault').map((fault) => nearestOf(fault, frame, site, siteXY));
+  const found = sources
+    .filter((s): s is FaultSource => s.kind === 'fault')
+    .map((fault) => nearestOf(fault, frame, site, siteXY));
   return found
     .map((entry, order) => ({ entry, order }))
     .sort((a, b) => a.entry.rrupKm - b.entry.rrupKm || a.order - b.order)

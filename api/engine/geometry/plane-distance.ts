@@ -10,7 +10,11 @@ import type { PointXY } from './projection.ts';
 
 const sub = (a: PointKm, b: PointKm): PointKm => ({ x: a.x - b.x, y: a.y - b.y, z: a.z - b.z });
 const dot = (a: PointKm, b: PointKm): number => a.x * b.x + a.y * b.y + a.z * b.z;
-const cross = (a: PointKm, b: PointKm): PointKm => ({ x: a.y * b.z - a.z * b.y, y: a.z * b.x - a.x * b.z, z: a.x * b.y - a.y * b.x });
+const cross = (a: PointKm, b: PointKm): PointKm => ({
+  x: a.y * b.z - a.z * b.y,
+  y: a.z * b.x - a.x * b.z,
+  z: a.x * b.y - a.y * b.x,
+});
 
 /** Closest point of segment a-b to p (3-D, km). */
 function closestOnSegment(p: PointKm, a: PointKm, b: PointKm): PointKm {
@@ -46,7 +50,10 @@ export function distanceToPlaneKm(plane: RupturePlane, point: PointKm): number {
 }
 
 /** Closest point of the plane's surface projection to `site`, and the distance to it, km. */
-export function closestPointOnProjection(plane: RupturePlane, site: PointXY): { readonly point: PointXY; readonly distanceKm: number } {
+export function closestPointOnProjection(
+  plane: RupturePlane,
+  site: PointXY,
+): { readonly point: PointXY; readonly distanceKm: number } {
   const p: PointKm = { x: site.x, y: site.y, z: 0 };
   const c = plane.corners.map((q) => ({ x: q.x, y: q.y, z: 0 }));
   let positive = 0;

@@ -34,13 +34,24 @@ const wrapLongitudeDeg = (lonDeg: number): number => ((((lonDeg + 180) % 360) + 
 export function createLocalFrame(origin: LonLat): LocalFrame {
   const [lon0, lat0] = origin;
   if (!Number.isFinite(lon0) || !Number.isFinite(lat0) || lat0 < -90 || lat0 > 90) {
-    throw new InvalidInput([{ path: 'origin', message: `expected [lon, lat] in degrees with lat in [-90, 90], got [${lon0}, ${lat0}]` }]);
+    throw new InvalidInput([
+      {
+        path: 'origin',
+        message: `expected [lon, lat] in degrees with lat in [-90, 90], got [${lon0}, ${lat0}]`,
+      },
+    ]);
   }
-  const converter = proj4('EPSG:4326', `+proj=aeqd +lat_0=${lat0} +lon_0=0 +x_0=0 +y_0=0 +ellps=WGS84 +units=m +no_defs`);
+  const converter = proj4(
+    'EPSG:4326',
+    `+proj=aeqd +lat_0=${lat0} +lon_0=0 +x_0=0 +y_0=0 +ellps=WGS84 +units=m +no_defs`,
+  );
   return {
     origin: [lon0, lat0],
     toLocal([lonDeg, latDeg]) {
-      const [xM, yM] = converter.forward([wrapLongitudeDeg(lonDeg - lon0), latDeg]) as [number, number];
+      const [xM, yM] = converter.forward([wrapLongitudeDeg(lonDeg - lon0), latDeg]) as [
+        number,
+        number,
+      ];
       return { x: xM / 1000, y: yM / 1000 };
     },
     toLonLat({ x, y }) {
@@ -67,9 +78,17 @@ export function frameForStudy(study: Pick<Study, 'communities' | 'sources'>): Lo
   if (points.length === 0) points.push(...study.communities.map((c) => [c.lon, c.lat] as const));
   const first = points[0];
   if (first === undefined) {
-    throw new InvalidInput([{ path: 'communities', message: 'expected at least one community or source to centre the local frame on' }]);
+    throw new InvalidInput([
+      {
+        path: 'communities',
+        message: 'expected at least one community or source to centre the local frame on',
+      },
+    ]);
   }
-  let minLon = Infinity, maxLon = -Infinity, minLat = Infinity, maxLat = -Infinity;
+  let minLon = Infinity,
+    maxLon = -Infinity,
+    minLat = Infinity,
+    maxLat = -Infinity;
   for (const [lon, lat] of points) {
     const unwrapped = first[0] + wrapLongitudeDeg(lon - first[0]);
     minLon = Math.min(minLon, unwrapped);

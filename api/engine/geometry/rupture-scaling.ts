@@ -31,9 +31,24 @@ export interface ScalingRelation {
 }
 
 export const WELLS_COPPERSMITH_1994: Readonly<Record<Mechanism, ScalingRelation>> = {
-  'strike-slip': { name: 'Wells & Coppersmith 1994 (strike-slip)', area: [-3.42, 0.9], width: [-0.76, 0.27], length: [-2.57, 0.62] },
-  reverse: { name: 'Wells & Coppersmith 1994 (reverse)', area: [-3.99, 0.98], width: [-1.61, 0.41], length: [-2.42, 0.58] },
-  normal: { name: 'Wells & Coppersmith 1994 (normal)', area: [-2.87, 0.82], width: [-1.14, 0.35], length: [-1.88, 0.5] },
+  'strike-slip': {
+    name: 'Wells & Coppersmith 1994 (strike-slip)',
+    area: [-3.42, 0.9],
+    width: [-0.76, 0.27],
+    length: [-2.57, 0.62],
+  },
+  reverse: {
+    name: 'Wells & Coppersmith 1994 (reverse)',
+    area: [-3.99, 0.98],
+    width: [-1.61, 0.41],
+    length: [-2.42, 0.58],
+  },
+  normal: {
+    name: 'Wells & Coppersmith 1994 (normal)',
+    area: [-2.87, 0.82],
+    width: [-1.14, 0.35],
+    length: [-1.88, 0.5],
+  },
 };
 
 export const STRASSER_2010_INTERFACE: ScalingRelation = {
@@ -51,7 +66,10 @@ export const STRASSER_2010_INTRASLAB: ScalingRelation = {
 };
 
 /** The relation used for a fault: Strasser et al. for subduction settings, else Wells & Coppersmith by mechanism. */
-export function scalingRelationFor(setting: TectonicSetting, mechanism: Mechanism): ScalingRelation {
+export function scalingRelationFor(
+  setting: TectonicSetting,
+  mechanism: Mechanism,
+): ScalingRelation {
   if (setting === 'interface') return STRASSER_2010_INTERFACE;
   if (setting === 'intraslab') return STRASSER_2010_INTRASLAB;
   return WELLS_COPPERSMITH_1994[mechanism];
@@ -63,7 +81,8 @@ export interface RuptureDimensions {
   readonly widthKm: number;
 }
 
-const sizeFromLog = ([a, b]: readonly [number, number], magnitude: number): number => 10 ** (a + b * magnitude);
+const sizeFromLog = ([a, b]: readonly [number, number], magnitude: number): number =>
+  10 ** (a + b * magnitude);
 
 /**
  * Median rupture area and width of `relation` at `magnitude` (km², km), and the length that
@@ -81,7 +100,11 @@ export function scaledDimensions(relation: ScalingRelation, magnitude: number): 
  * capped at the fault's length; a rupture that fills the fault has less area than the
  * relation's median, as a fault cannot hold more.
  */
-export function fitDimensions(scaled: RuptureDimensions, faultLengthKm: number, faultWidthKm: number): RuptureDimensions {
+export function fitDimensions(
+  scaled: RuptureDimensions,
+  faultLengthKm: number,
+  faultWidthKm: number,
+): RuptureDimensions {
   const widthKm = Math.min(scaled.widthKm, faultWidthKm);
   const lengthKm = Math.min(scaled.areaKm2 / widthKm, faultLengthKm);
   return { areaKm2: lengthKm * widthKm, lengthKm, widthKm };

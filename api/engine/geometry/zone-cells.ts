@@ -46,7 +46,11 @@ function ringMoments(ring: readonly Vertex[]): { area: number; mx: number; my: n
  * `cross` (Sutherland & Hodgman 1974). A concave ring may come out with zero-width bridges
  * along the boundary; they add nothing to its area or moments, which is all that is used.
  */
-function clipHalfPlane(ring: readonly Vertex[], inside: (v: Vertex) => boolean, cross: (a: Vertex, b: Vertex) => Vertex): Vertex[] {
+function clipHalfPlane(
+  ring: readonly Vertex[],
+  inside: (v: Vertex) => boolean,
+  cross: (a: Vertex, b: Vertex) => Vertex,
+): Vertex[] {
   const out: Vertex[] = [];
   for (let i = 0; i < ring.length; i++) {
     const current = ring[i] as Vertex;
@@ -61,10 +65,20 @@ function clipHalfPlane(ring: readonly Vertex[], inside: (v: Vertex) => boolean, 
   return out;
 }
 
-const atX = (x: number) => (a: Vertex, b: Vertex): Vertex => [x, a[1] + ((x - a[0]) * (b[1] - a[1])) / (b[0] - a[0])];
-const atY = (y: number) => (a: Vertex, b: Vertex): Vertex => [a[0] + ((y - a[1]) * (b[0] - a[0])) / (b[1] - a[1]), y];
+const atX =
+  (x: number) =>
+  (a: Vertex, b: Vertex): Vertex => [x, a[1] + ((x - a[0]) * (b[1] - a[1])) / (b[0] - a[0])];
+const atY =
+  (y: number) =>
+  (a: Vertex, b: Vertex): Vertex => [a[0] + ((y - a[1]) * (b[0] - a[0])) / (b[1] - a[1]), y];
 
-function clipToBox(ring: readonly Vertex[], x0: number, y0: number, x1: number, y1: number): Vertex[] {
+function clipToBox(
+  ring: readonly Vertex[],
+  x0: number,
+  y0: number,
+  x1: number,
+  y1: number,
+): Vertex[] {
   let r = clipHalfPlane(ring, (v) => v[0] >= x0, atX(x0));
   r = clipHalfPlane(r, (v) => v[0] <= x1, atX(x1));
   r = clipHalfPlane(r, (v) => v[1] >= y0, atY(y0));
@@ -90,8 +104,17 @@ function zoneRings(zone: ZoneSource, frame: LocalFrame): ZoneRings & { areaKm2: 
   });
   // Outer ring adds, holes subtract, whatever way each ring winds.
   const signs = rings.map((ring, r) => (r === 0 ? 1 : -1) * Math.sign(ringMoments(ring).area));
-  const areaKm2 = rings.reduce((sum, ring, r) => sum + (signs[r] as number) * ringMoments(ring).area, 0);
-  if (!(areaKm2 > 0)) throw new InvalidInput([{ path: 'coordinates', message: `zone "${zone.id}": expected a polygon with area, got ${areaKm2} km²` }]);
+  const areaKm2 = rings.reduce(
+    (sum, ring, r) => sum + (signs[r] as number) * ringMoments(ring).area,
+    0,
+  );
+  if (!(areaKm2 > 0))
+    throw new InvalidInput([
+      {
+        path: 'coordinates',
+        message: `zone "${zone.id}": expected a polygon with area, got ${areaKm2} km²`,
+      },
+    ]);
   return { rings, signs, areaKm2 };
 }
 
@@ -110,7 +133,9 @@ function boxPart(zone: ZoneRings, box: CellBox): { centre: PointXY; areaKm2: num
     mx += sign * m.mx;
     my += sign * m.my;
   });
-  return area > SLIVER_FRACTION * (x1 - x0) * (y1 - y0) ? { centre: { x: mx / area, y: my / area }, areaKm2: area } : null;
+  return area > SLIVER_FRACTION * (x1 - x0) * (y1 - y0)
+    ? { centre: { x: mx / area, y: my / area }, areaKm2: area }
+    : null;
 }
 
 /**
@@ -126,7 +151,10 @@ function boxPart(zone: ZoneRings, box: CellBox): { centre: PointXY; areaKm2: num
  * polygon-clipping library was tried and failed on edges lying a hair off grid lines.
  */
 export function zoneCells(zone: ZoneSource, frame: LocalFrame, cellKm: number): ZoneCell[] {
-  if (!(cellKm > 0)) throw new InvalidInput([{ path: 'settings.zoneCellKm', message: `expected a cell size > 0 km, got ${cellKm}` }]);
+  if (!(cellKm > 0))
+    throw new InvalidInput([
+      { path: 'settings.zoneCellKm', message: `expected a cell size > 0 km, got ${cellKm}` },
+    ]);
   const prepared = zoneRings(zone, frame);
   const outer = prepared.rings[0] ?? [];
   const [ax, ay] = outer[0] ?? [0, 0];
@@ -140,14 +168,24 @@ export function zoneCells(zone: ZoneSource, frame: LocalFrame, cellKm: number): 
   const parts: { centre: PointXY; areaKm2: number; box: CellBox }[] = [];
   for (let row = row0; row < row1; row++) {
     for (let col = col0; col < col1; col++) {
-      const box: CellBox = [ax + col * cellKm, ay + row * cellKm, ax + (col + 1) * cellKm, ay + (row + 1) * cellKm];
+      const box: CellBox = [
+        ax + col * cellKm,
+        ay + row * cellKm,
+        ax + (col + 1) * cellKm,
+        ay + (row + 1) * cellKm,
+      ];
       const part = boxPart(prepared, box);
       if (part) parts.push({ ...part, box });
     }
   }
   // Shares over the sum of the parts, so they add to 1 whatever the rounding.
   const total = compensatedSum(parts.map((p) => p.areaKm2));
-  return parts.map((p) => ({ centre: p.centre, areaKm2: p.areaKm2, share: p.areaKm2 / total, box: p.box }));
+  return parts.map((p) => ({
+    centre: p.centre,
+    areaKm2: p.areaKm2,
+    share: p.areaKm2 / total,
+    box: p.box,
+  }));
 }
 
 /**
@@ -155,7 +193,12 @@ export function zoneCells(zone: ZoneSource, frame: LocalFrame, cellKm: number): 
  * zone inside it as zoneCells does. Their shares are the cell's share split by area, so they add
  * to the cell's share whatever the rounding.
  */
-export function subdivideZoneCell(zone: ZoneSource, frame: LocalFrame, cell: ZoneCell, parts: number): ZoneCell[] {
+export function subdivideZoneCell(
+  zone: ZoneSource,
+  frame: LocalFrame,
+  cell: ZoneCell,
+  parts: number,
+): ZoneCell[] {
   const prepared = zoneRings(zone, frame);
   const [x0, y0, x1, y1] = cell.box;
   const dx = (x1 - x0) / parts;
@@ -163,11 +206,21 @@ export function subdivideZoneCell(zone: ZoneSource, frame: LocalFrame, cell: Zon
   const pieces: { centre: PointXY; areaKm2: number; box: CellBox }[] = [];
   for (let row = 0; row < parts; row++) {
     for (let col = 0; col < parts; col++) {
-      const box: CellBox = [x0 + col * dx, y0 + row * dy, col === parts - 1 ? x1 : x0 + (col + 1) * dx, row === parts - 1 ? y1 : y0 + (row + 1) * dy];
+      const box: CellBox = [
+        x0 + col * dx,
+        y0 + row * dy,
+        col === parts - 1 ? x1 : x0 + (col + 1) * dx,
+        row === parts - 1 ? y1 : y0 + (row + 1) * dy,
+      ];
       const part = boxPart(prepared, box);
       if (part) pieces.push({ ...part, box });
     }
   }
   const total = compensatedSum(pieces.map((p) => p.areaKm2));
-  return pieces.map((p) => ({ centre: p.centre, areaKm2: p.areaKm2, share: (cell.share * p.areaKm2) / total, box: p.box }));
+  return pieces.map((p) => ({
+    centre: p.centre,
+    areaKm2: p.areaKm2,
+    share: (cell.share * p.areaKm2) / total,
+    box: p.box,
+  }));
 }

@@ -103,7 +103,13 @@ export function accumulatePairs(
         const i = x | 0;
         const t = x - i;
         const at = i << 2;
-        partial[j] = (partial[j] as number) + rate * ((cubic[at] as number) + t * ((cubic[at + 1] as number) + t * ((cubic[at + 2] as number) + t * (cubic[at + 3] as number))));
+        partial[j] =
+          (partial[j] as number) +
+          rate *
+            ((cubic[at] as number) +
+              t *
+                ((cubic[at + 1] as number) +
+                  t * ((cubic[at + 2] as number) + t * (cubic[at + 3] as number))));
       }
       continue;
     }
@@ -149,7 +155,14 @@ export function resetCurveAccumulator(acc: CurveAccumulator): void {
  * forms at that level, the same terms added the same way, for a search that needs a few levels
  * of a curve and not all (map/return-period search). Assumes predictions already checked finite.
  */
-export function levelRate(lnLevel: number, exceedance: ExceedanceTable, rates: Float64Array, pairRupture: Int32Array, predictions: PairPredictions, count: number): number {
+export function levelRate(
+  lnLevel: number,
+  exceedance: ExceedanceTable,
+  rates: Float64Array,
+  pairRupture: Int32Array,
+  predictions: PairPredictions,
+  count: number,
+): number {
   const lnMedians = predictions.lnMedian;
   const sigmas = predictions.sigma;
   const n = exceedance.mode === 'step' ? 0 : exceedance.truncationSigma;
@@ -183,7 +196,12 @@ export function levelRate(lnLevel: number, exceedance: ExceedanceTable, rates: F
       const i = x | 0;
       const t = x - i;
       const at = i << 2;
-      block += rate * ((cubic[at] as number) + t * ((cubic[at + 1] as number) + t * ((cubic[at + 2] as number) + t * (cubic[at + 3] as number))));
+      block +=
+        rate *
+        ((cubic[at] as number) +
+          t *
+            ((cubic[at + 1] as number) +
+              t * ((cubic[at + 2] as number) + t * (cubic[at + 3] as number))));
     } else {
       block += rate * exceedanceProbability(standardisedLevel(lnLevel, mu, sigma), n);
     }
@@ -207,10 +225,23 @@ export interface LevelCoefficients {
 }
 
 export function createLevelCoefficients(capacity: number): LevelCoefficients {
-  return { rate: new Float64Array(capacity), a: new Float64Array(capacity), b: new Float64Array(capacity), count: 0, usable: false };
+  return {
+    rate: new Float64Array(capacity),
+    a: new Float64Array(capacity),
+    b: new Float64Array(capacity),
+    count: 0,
+    usable: false,
+  };
 }
 
-export function fillLevelCoefficients(into: LevelCoefficients, exceedance: ExceedanceTable, rates: Float64Array, pairRupture: Int32Array, predictions: PairPredictions, count: number): void {
+export function fillLevelCoefficients(
+  into: LevelCoefficients,
+  exceedance: ExceedanceTable,
+  rates: Float64Array,
+  pairRupture: Int32Array,
+  predictions: PairPredictions,
+  count: number,
+): void {
   into.count = 0;
   into.usable = false;
   if (exceedance.mode !== 'table') return;
@@ -232,7 +263,11 @@ export function fillLevelCoefficients(into: LevelCoefficients, exceedance: Excee
 }
 
 /** levelRate from filled coefficients (same terms, same blocks, same compensated sum). */
-export function coefficientLevelRate(lnLevel: number, exceedance: Extract<ExceedanceTable, { mode: 'table' }>, c: LevelCoefficients): number {
+export function coefficientLevelRate(
+  lnLevel: number,
+  exceedance: Extract<ExceedanceTable, { mode: 'table' }>,
+  c: LevelCoefficients,
+): number {
   const { cubic, intervals } = exceedance;
   const { rate, a, b, count } = c;
   const total = createLevelAccumulator(1);
@@ -249,7 +284,12 @@ export function coefficientLevelRate(lnLevel: number, exceedance: Extract<Exceed
       const i = x | 0;
       const t = x - i;
       const at = i << 2;
-      block += (rate[k] as number) * ((cubic[at] as number) + t * ((cubic[at + 1] as number) + t * ((cubic[at + 2] as number) + t * (cubic[at + 3] as number))));
+      block +=
+        (rate[k] as number) *
+        ((cubic[at] as number) +
+          t *
+            ((cubic[at + 1] as number) +
+              t * ((cubic[at + 2] as number) + t * (cubic[at + 3] as number))));
     }
     accumulate(total, 0, block);
     block = 0;

@@ -15,9 +15,14 @@ export interface CurveLevel {
 }
 
 /** The level exceeded at `targetRate` per year, or null with the side on which it falls off the curve. */
-export function levelAtAnnualRate(levels: readonly number[], annualRate: readonly number[], targetRate: number): CurveLevel {
+export function levelAtAnnualRate(
+  levels: readonly number[],
+  annualRate: readonly number[],
+  targetRate: number,
+): CurveLevel {
   const first = annualRate[0];
-  if (first === undefined || first < targetRate) return { level: null, status: 'below-lowest-level' };
+  if (first === undefined || first < targetRate)
+    return { level: null, status: 'below-lowest-level' };
   const j = annualRate.findIndex((rate) => rate <= targetRate);
   if (j === -1) return { level: null, status: 'above-highest-level' };
   if (j === 0 || annualRate[j] === targetRate) return { level: levels[j] as number, status: 'ok' };
@@ -25,12 +30,17 @@ export function levelAtAnnualRate(levels: readonly number[], annualRate: readonl
   const x1 = Math.log(levels[j] as number);
   const r0 = annualRate[j - 1] as number;
   const r1 = annualRate[j] as number;
-  const fraction = r1 > 0 ? Math.log(targetRate / r0) / Math.log(r1 / r0) : (targetRate - r0) / (r1 - r0);
+  const fraction =
+    r1 > 0 ? Math.log(targetRate / r0) / Math.log(r1 / r0) : (targetRate - r0) / (r1 - r0);
   return { level: Math.exp(x0 + fraction * (x1 - x0)), status: 'ok' };
 }
 
 /** The level with a return period of `years` (annual rate 1 / years). */
-export function levelAtReturnPeriod(levels: readonly number[], annualRate: readonly number[], years: number): CurveLevel {
+export function levelAtReturnPeriod(
+  levels: readonly number[],
+  annualRate: readonly number[],
+  years: number,
+): CurveLevel {
   return levelAtAnnualRate(levels, annualRate, 1 / years);
 }
 
@@ -44,17 +54,26 @@ export interface CurveRate {
 }
 
 /** The annual rate of exceeding `level`, read from the curve. */
-export function annualRateAtLevel(levels: readonly number[], annualRate: readonly number[], level: number): CurveRate {
+export function annualRateAtLevel(
+  levels: readonly number[],
+  annualRate: readonly number[],
+  level: number,
+): CurveRate {
   const last = levels.length - 1;
   if (last < 0) return { annualRate: 0, status: 'above-highest-level' };
-  if (level < (levels[0] as number)) return { annualRate: annualRate[0] as number, status: 'below-lowest-level' };
-  if (level > (levels[last] as number)) return { annualRate: annualRate[last] as number, status: 'above-highest-level' };
+  if (level < (levels[0] as number))
+    return { annualRate: annualRate[0] as number, status: 'below-lowest-level' };
+  if (level > (levels[last] as number))
+    return { annualRate: annualRate[last] as number, status: 'above-highest-level' };
   const j = levels.findIndex((l) => l >= level);
   if (levels[j] === level || j === 0) return { annualRate: annualRate[j] as number, status: 'ok' };
   const r0 = annualRate[j - 1] as number;
   const r1 = annualRate[j] as number;
-  const fraction = Math.log(level / (levels[j - 1] as number)) / Math.log((levels[j] as number) / (levels[j - 1] as number));
+  const fraction =
+    Math.log(level / (levels[j - 1] as number)) /
+    Math.log((levels[j] as number) / (levels[j - 1] as number));
   if (r0 === 0) return { annualRate: 0, status: 'ok' };
-  const rate = r1 > 0 ? Math.exp(Math.log(r0) + fraction * Math.log(r1 / r0)) : r0 + fraction * (r1 - r0);
+  const rate =
+    r1 > 0 ? Math.exp(Math.log(r0) + fraction * Math.log(r1 / r0)) : r0 + fraction * (r1 - r0);
   return { annualRate: rate, status: 'ok' };
 }

@@ -9,7 +9,9 @@
  *   smallest whole numbers that hold every ε in them (at least −3 and 3).
  */
 export const MAGNITUDE_BIN_WIDTH = 0.5;
-export const DISTANCE_EDGES_KM: readonly number[] = [0, 10, 20, 40, 60, 100, 150, 200, 300, 500, 1000];
+export const DISTANCE_EDGES_KM: readonly number[] = [
+  0, 10, 20, 40, 60, 100, 150, 200, 300, 500, 1000,
+];
 const DISTANCE_STEP_BEYOND_KM = 500;
 export const EPSILON_EDGES: readonly number[] = [-2, -1, 0, 1, 2];
 
@@ -27,7 +29,9 @@ const lastEdgeKm = DISTANCE_EDGES_KM[DISTANCE_EDGES_KM.length - 1] as number;
 
 export function distanceBin(distanceKm: number): number {
   if (distanceKm >= lastEdgeKm) {
-    return DISTANCE_EDGES_KM.length - 1 + Math.floor((distanceKm - lastEdgeKm) / DISTANCE_STEP_BEYOND_KM);
+    return (
+      DISTANCE_EDGES_KM.length - 1 + Math.floor((distanceKm - lastEdgeKm) / DISTANCE_STEP_BEYOND_KM)
+    );
   }
   let bin = 0;
   while (distanceKm >= (DISTANCE_EDGES_KM[bin + 1] as number)) bin++;
@@ -36,7 +40,9 @@ export function distanceBin(distanceKm: number): number {
 
 export function distanceBinRange(bin: number): [number, number] {
   const edge = (i: number): number =>
-    i < DISTANCE_EDGES_KM.length ? (DISTANCE_EDGES_KM[i] as number) : lastEdgeKm + (i - DISTANCE_EDGES_KM.length + 1) * DISTANCE_STEP_BEYOND_KM;
+    i < DISTANCE_EDGES_KM.length
+      ? (DISTANCE_EDGES_KM[i] as number)
+      : lastEdgeKm + (i - DISTANCE_EDGES_KM.length + 1) * DISTANCE_STEP_BEYOND_KM;
   return [edge(bin), edge(bin + 1)];
 }
 
@@ -48,8 +54,16 @@ export function epsilonBin(epsilon: number): number {
 }
 
 /** The bin's edges; the outer bins closed with the observed extremes, rounded outwards. */
-export function epsilonBinRange(bin: number, minEpsilon: number, maxEpsilon: number): [number, number] {
-  const lower = bin === 0 ? Math.min(-3, Math.floor(minEpsilon)) : (EPSILON_EDGES[bin - 1] as number);
-  const upper = bin === EPSILON_EDGES.length ? Math.max(3, Math.ceil(maxEpsilon)) : (EPSILON_EDGES[bin] as number);
+export function epsilonBinRange(
+  bin: number,
+  minEpsilon: number,
+  maxEpsilon: number,
+): [number, number] {
+  const lower =
+    bin === 0 ? Math.min(-3, Math.floor(minEpsilon)) : (EPSILON_EDGES[bin - 1] as number);
+  const upper =
+    bin === EPSILON_EDGES.length
+      ? Math.max(3, Math.ceil(maxEpsilon))
+      : (EPSILON_EDGES[bin] as number);
   return [lower, upper];
 }

@@ -41,14 +41,18 @@ export function exceedanceTable(truncationSigma: number): ExceedanceTable {
   const intervals = Math.ceil(2 * n * NODES_PER_SIGMA);
   const h = (2 * n) / intervals;
   const norm = 1 - 2 * exceedanceProbabilityTail(n);
-  const value = (i: number): number => (i === 0 ? 1 : i === intervals ? 0 : exceedanceProbability(-n + i * h, n));
+  const value = (i: number): number =>
+    i === 0 ? 1 : i === intervals ? 0 : exceedanceProbability(-n + i * h, n);
   const slope = (i: number): number => {
     const e = -n + i * h;
     return (-INV_SQRT_2PI * Math.exp(-0.5 * e * e)) / norm;
   };
   const cubic = new Float64Array(4 * intervals);
   for (let i = 0; i < intervals; i++) {
-    const p0 = value(i), p1 = value(i + 1), m0 = slope(i) * h, m1 = slope(i + 1) * h;
+    const p0 = value(i),
+      p1 = value(i + 1),
+      m0 = slope(i) * h,
+      m1 = slope(i + 1) * h;
     cubic.set([p0, m0, 3 * (p1 - p0) - 2 * m0 - m1, 2 * (p0 - p1) + m0 + m1], 4 * i);
   }
   return { mode: 'table', truncationSigma: n, scale: 1 / h, intervals, cubic };
@@ -63,21 +67,31 @@ function exceedanceProbabilityTail(n: number): number {
  * P(ε) from a 'table' ExceedanceTable, for −n < ε < n (callers handle ε outside, where P is 1
  * or 0 exactly); clamped to [0, 1] as the exact function is.
  */
-export function tabulatedExceedance(cubic: Float64Array, scale: number, intervals: number, truncationSigma: number, epsilon: number): number {
+export function tabulatedExceedance(
+  cubic: Float64Array,
+  scale: number,
+  intervals: number,
+  truncationSigma: number,
+  epsilon: number,
+): number {
   const x = (epsilon + truncationSigma) * scale;
   let i = Math.floor(x);
   if (i >= intervals) i = intervals - 1;
   else if (i < 0) i = 0;
   const t = x - i;
   const at = 4 * i;
-  const p = (cubic[at] as number) + t * ((cubic[at + 1] as number) + t * ((cubic[at + 2] as number) + t * (cubic[at + 3] as number)));
+  const p =
+    (cubic[at] as number) +
+    t *
+      ((cubic[at + 1] as number) + t * ((cubic[at + 2] as number) + t * (cubic[at + 3] as number)));
   return p < 0 ? 0 : p > 1 ? 1 : p;
 }
 
 /** P(ε) from the table where there is one (1 and 0 exactly at and beyond ∓n), else the exact function. */
 export function exceedanceFromTable(exceedance: ExceedanceTable, epsilon: number): number {
   if (exceedance.mode === 'step') return exceedanceProbability(epsilon, 0);
-  if (exceedance.mode === 'exact') return exceedanceProbability(epsilon, exceedance.truncationSigma);
+  if (exceedance.mode === 'exact')
+    return exceedanceProbability(epsilon, exceedance.truncationSigma);
   const n = exceedance.truncationSigma;
   if (epsilon >= n) return 0;
   if (epsilon <= -n) return 1;

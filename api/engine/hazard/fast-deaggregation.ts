@@ -1,6 +1,20 @@
 import type { Deaggregation, DeaggregationBin } from '../results.ts';
-import { accumulate, accumulatedTotal, compensatedSum, createLevelAccumulator } from '../summation.ts';
-import { DISTANCE_EDGES_KM, EPSILON_EDGES, distanceBin, distanceBinRange, epsilonBin, epsilonBinRange, magnitudeBin, magnitudeBinRange } from './deaggregation-bins.ts';
+import {
+  accumulate,
+  accumulatedTotal,
+  compensatedSum,
+  createLevelAccumulator,
+} from '../summation.ts';
+import {
+  DISTANCE_EDGES_KM,
+  EPSILON_EDGES,
+  distanceBin,
+  distanceBinRange,
+  epsilonBin,
+  epsilonBinRange,
+  magnitudeBin,
+  magnitudeBinRange,
+} from './deaggregation-bins.ts';
 import type { BranchPredictions } from './fast-site-hazard.ts';
 import type { RuptureTable } from './rupture-table.ts';
 import { exceedanceFromTable, type ExceedanceTable } from './exceedance-table.ts';
@@ -32,11 +46,15 @@ const EPSILON_BINS = EPSILON_EDGES.length + 1;
 const DISTANCE_STEP_KM = 10;
 const LAST_EDGE_KM = DISTANCE_EDGES_KM[DISTANCE_EDGES_KM.length - 1] as number;
 const DISTANCE_LOOKUP = DISTANCE_EDGES_KM.every((edge) => edge % DISTANCE_STEP_KM === 0)
-  ? Int32Array.from({ length: LAST_EDGE_KM / DISTANCE_STEP_KM }, (_, i) => distanceBin(i * DISTANCE_STEP_KM))
+  ? Int32Array.from({ length: LAST_EDGE_KM / DISTANCE_STEP_KM }, (_, i) =>
+      distanceBin(i * DISTANCE_STEP_KM),
+    )
   : new Int32Array(0);
 const distanceBinOf = (distanceKm: number): number => {
   const step = Math.floor(distanceKm / DISTANCE_STEP_KM);
-  return step >= 0 && step < DISTANCE_LOOKUP.length ? (DISTANCE_LOOKUP[step] as number) : distanceBin(distanceKm);
+  return step >= 0 && step < DISTANCE_LOOKUP.length
+    ? (DISTANCE_LOOKUP[step] as number)
+    : distanceBin(distanceKm);
 };
 
 /**
@@ -68,7 +86,8 @@ export function fastDeaggregate(options: FastDeaggregationOptions): Deaggregatio
       const i = ruptureIndex[k] as number;
       const s = sigma[k] as number;
       const rawEpsilon = standardisedLevel(lnLevel, lnMedian[k] as number, s);
-      const c = weight * (table.annualRate[i] as number) * exceedanceFromTable(exceedance, rawEpsilon);
+      const c =
+        weight * (table.annualRate[i] as number) * exceedanceFromTable(exceedance, rawEpsilon);
       if (!(c > 0)) continue;
       const epsilon = Math.max(-EPSILON_LIMIT, Math.min(EPSILON_LIMIT, rawEpsilon));
       const m = magnitudeBin(table.magnitude[i] as number);
@@ -101,7 +120,11 @@ export function fastDeaggregate(options: FastDeaggregationOptions): Deaggregatio
       const epsilon = epsilonOf[at] as number;
       const magnitude = table.magnitude[i] as number;
       const distanceKm = rrupKm[k] as number;
-      const bin = (((magnitudeBinOf[at] as number) - minM) * distanceBins + (distanceBinOfPair[at] as number)) * EPSILON_BINS + epsilonBin(epsilon);
+      const bin =
+        (((magnitudeBinOf[at] as number) - minM) * distanceBins +
+          (distanceBinOfPair[at] as number)) *
+          EPSILON_BINS +
+        epsilonBin(epsilon);
       const slot = bin * SLOTS;
       accumulate(binSums, slot, c);
       accumulate(binSums, slot + 1, c * magnitude);
@@ -123,7 +146,8 @@ export function fastDeaggregate(options: FastDeaggregationOptions): Deaggregatio
 
   const totalAt = (slot: number): number => accumulatedTotal(binSums, slot);
   const filled: number[] = [];
-  for (let bin = 0; bin < binCount; bin++) if ((binSums.sum[bin * SLOTS] as number) > 0) filled.push(bin);
+  for (let bin = 0; bin < binCount; bin++)
+    if ((binSums.sum[bin * SLOTS] as number) > 0) filled.push(bin);
   const shareSum = compensatedSum(filled.map((bin) => totalAt(bin * SLOTS)));
   // The first of equal largest bins, in the listed order, so the mode is deterministic (as deaggregation.ts).
   let modal = filled[0] as number;
@@ -145,12 +169,19 @@ export function fastDeaggregate(options: FastDeaggregationOptions): Deaggregatio
   sourceSeen.forEach((seen, sourceIndex) => {
     if (!seen) return;
     const sourceId = table.sourceIds[sourceIndex] as string;
-    sources.push({ sourceId, name: options.sourceNames[sourceIndex] ?? sourceId, rate: accumulatedTotal(sourceSums, sourceIndex) });
+    sources.push({
+      sourceId,
+      name: options.sourceNames[sourceIndex] ?? sourceId,
+      rate: accumulatedTotal(sourceSums, sourceIndex),
+    });
   });
   const sourceTotal = compensatedSum(sources.map((s) => s.rate));
   const bySource = sources
     .map(({ sourceId, name, rate }) => ({ sourceId, name, share: rate / sourceTotal }))
-    .sort((a, b) => b.share - a.share || (a.sourceId < b.sourceId ? -1 : a.sourceId > b.sourceId ? 1 : 0));
+    .sort(
+      (a, b) =>
+        b.share - a.share || (a.sourceId < b.sourceId ? -1 : a.sourceId > b.sourceId ? 1 : 0),
+    );
 
   return {
     measure: options.measure,
@@ -158,7 +189,11 @@ export function fastDeaggregate(options: FastDeaggregationOptions): Deaggregatio
     returnPeriodYears: options.returnPeriodYears,
     bySource,
     mean: { magnitude: mean(1), distanceKm: mean(2), epsilon: mean(3) },
-    mode: { magnitude: totalAt(modal * SLOTS + 1) / modalRate, distanceKm: totalAt(modal * SLOTS + 2) / modalRate, epsilon: totalAt(modal * SLOTS + 3) / modalRate },
+    mode: {
+      magnitude: totalAt(modal * SLOTS + 1) / modalRate,
+      distanceKm: totalAt(modal * SLOTS + 2) / modalRate,
+      epsilon: totalAt(modal * SLOTS + 3) / modalRate,
+    },
     bins: resultBins,
   };
 }

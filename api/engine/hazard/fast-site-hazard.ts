@@ -6,9 +6,20 @@ import { measureLabel } from '../motion/measure.ts';
 import { createPairPredictions } from '../motion/prepared-period.ts';
 import type { DistanceName, PairPredictions, SiteContext } from '../motion/types.ts';
 import type { HazardCurve } from '../results.ts';
-import { accumulatePairs, createCurveAccumulator, curveRates, resetCurveAccumulator, type CurveAccumulator } from './curve-accumulator.ts';
+import {
+  accumulatePairs,
+  createCurveAccumulator,
+  curveRates,
+  resetCurveAccumulator,
+  type CurveAccumulator,
+} from './curve-accumulator.ts';
 import { exceedanceTable, type ExceedanceTable } from './exceedance-table.ts';
-import { branchCombinationCurves, MAX_BRANCH_COMBINATIONS, meanHazard, type SettingBranchCurve } from './logic-tree.ts';
+import {
+  branchCombinationCurves,
+  MAX_BRANCH_COMBINATIONS,
+  meanHazard,
+  type SettingBranchCurve,
+} from './logic-tree.ts';
 import { pairDistanceContext, preparedMotions, type LazyMotions } from './prepared-motion.ts';
 import { gmmInput } from './gmm-input.ts';
 import { ruptureContexts, settingRuptures, type RuptureTable } from './rupture-table.ts';
@@ -97,7 +108,12 @@ export function createFastHazard(options: FastHazardOptions): FastHazard {
       predictions: options.measures.map(() => createPairPredictions(ruptures.length)),
     });
   }
-  return { options, geometry: ruptureGeometry(table), exceedance: exceedanceTable(options.truncationSigma), settings };
+  return {
+    options,
+    geometry: ruptureGeometry(table),
+    exceedance: exceedanceTable(options.truncationSigma),
+    settings,
+  };
 }
 
 /** values[indices[k]] for each k. */
@@ -133,7 +149,11 @@ export interface FastSiteHazard {
 }
 
 /** Hazard curves at one site; `afterBranch` is called after each branch (it may throw to stop). */
-export function fastSiteHazard(hazard: FastHazard, at: FastSite, afterBranch?: () => void): FastSiteHazard {
+export function fastSiteHazard(
+  hazard: FastHazard,
+  at: FastSite,
+  afterBranch?: () => void,
+): FastSiteHazard {
   const { options, geometry, exceedance } = hazard;
   const { measures } = options;
   const validity = new Map<string, { outside: number; evaluated: number; firstNote: string }>();
@@ -142,26 +162,52 @@ export function fastSiteHazard(hazard: FastHazard, at: FastSite, afterBranch?: (
 
   for (const work of hazard.settings) {
     const { pairs, predictions } = work;
-    siteDistances({ geometry, ruptures: work.ruptures, site: at.point, maxDistanceKm: options.maxDistanceKm, distances: work.distances }, pairs);
+    siteDistances(
+      {
+        geometry,
+        ruptures: work.ruptures,
+        site: at.point,
+        maxDistanceKm: options.maxDistanceKm,
+        distances: work.distances,
+      },
+      pairs,
+    );
     const count = pairs.count;
     let ruptureIndex: Int32Array | undefined;
     if (options.keepFirstMeasure) {
       ruptureIndex = new Int32Array(count);
-      for (let k = 0; k < count; k++) ruptureIndex[k] = work.ruptures[pairs.rupture[k] as number] as number;
+      for (let k = 0; k < count; k++)
+        ruptureIndex[k] = work.ruptures[pairs.rupture[k] as number] as number;
     }
     const rrupKm = options.keepFirstMeasure ? pairs.rrupKm.slice(0, count) : undefined;
 
     for (const branch of work.branches) {
-      const summary = validity.get(branch.model.name) ?? { outside: 0, evaluated: 0, firstNote: '' };
+      const summary = validity.get(branch.model.name) ?? {
+        outside: 0,
+        evaluated: 0,
+        firstNote: '',
+      };
       if (count > 0) branch.motions.predict(at.site, pairs, predictions);
       measures.forEach((m, i) => {
         const curve = branch.curves[i] as CurveAccumulator;
         const prediction = predictions[i] as PairPredictions;
         resetCurveAccumulator(curve);
         if (count > 0) {
-          const bad = accumulatePairs(curve, exceedance, work.rates, pairs.rupture, prediction, count);
+          const bad = accumulatePairs(
+            curve,
+            exceedance,
+            work.rates,
+            pairs.rupture,
+            prediction,
+            count,
+          );
           if (bad >= 0) {
-            const sourceId = options.table.sourceIds[options.table.sourceIndex[work.ruptures[pairs.rupture[bad] as number] as number] as number];
+            const sourceId =
+              options.table.sourceIds[
+                options.table.sourceIndex[
+                  work.ruptures[pairs.rupture[bad] as number] as number
+                ] as number
+              ];
             throw new TremoraError(
               `${branch.model.name} gave ln median ${prediction.lnMedian[bad]} and sigma ${prediction.sigma[bad]} for ${measureLabel(m.measure)} ` +
                 `from a rupture of source "${sourceId}"; expected finite numbers with sigma >= 0`,
@@ -171,13 +217,26 @@ export function fastSiteHazard(hazard: FastHazard, at: FastSite, afterBranch?: (
         summary.evaluated += count;
         const firstOutside = prediction.applicable.subarray(0, count).indexOf(0);
         if (firstOutside >= 0) {
-          for (let k = firstOutside; k < count; k++) if (prediction.applicable[k] === 0) summary.outside++;
-          if (!summary.firstNote) summary.firstNote = noteOf(hazard, work, branch, i, at, firstOutside);
+          for (let k = firstOutside; k < count; k++)
+            if (prediction.applicable[k] === 0) summary.outside++;
+          if (!summary.firstNote)
+            summary.firstNote = noteOf(hazard, work, branch, i, at, firstOutside);
         }
         if (i === 0 && ruptureIndex && rrupKm) {
-          firstMeasure.push({ weight: branch.weight, ruptureIndex, lnMedian: prediction.lnMedian.slice(0, count), sigma: prediction.sigma.slice(0, count), rrupKm });
+          firstMeasure.push({
+            weight: branch.weight,
+            ruptureIndex,
+            lnMedian: prediction.lnMedian.slice(0, count),
+            sigma: prediction.sigma.slice(0, count),
+            rrupKm,
+          });
         }
-        settingCurves[i]!.push({ setting: work.setting, model: branch.model.name, weight: branch.weight, annualRate: curveRates(curve) });
+        settingCurves[i]!.push({
+          setting: work.setting,
+          model: branch.model.name,
+          weight: branch.weight,
+          annualRate: curveRates(curve),
+        });
       });
       validity.set(branch.model.name, summary);
       afterBranch?.();
@@ -190,23 +249,39 @@ export function fastSiteHazard(hazard: FastHazard, at: FastSite, afterBranch?: (
   measures.forEach((m, i) => {
     const list = settingCurves[i] as SettingBranchCurve[];
     const annualRate = meanHazard(list, m.levels.length);
-    const combinations = options.branchCurves === false ? null : branchCombinationCurves(list, m.levels.length, cap);
+    const combinations =
+      options.branchCurves === false ? null : branchCombinationCurves(list, m.levels.length, cap);
     if (combinations === null) branchCurvesOmitted = true;
-    curves[m.key] = combinations === null ? { levels: [...m.levels], annualRate } : { levels: [...m.levels], annualRate, branches: combinations };
+    curves[m.key] =
+      combinations === null
+        ? { levels: [...m.levels], annualRate }
+        : { levels: [...m.levels], annualRate, branches: combinations };
   });
   return {
     curves,
     branchCurvesOmitted,
-    validity: [...validity.entries()].filter(([, s]) => s.outside > 0).map(([model, s]) => ({ model, ...s })),
+    validity: [...validity.entries()]
+      .filter(([, s]) => s.outside > 0)
+      .map(([model, s]) => ({ model, ...s })),
     firstMeasure,
   };
 }
 
 /** The first validity note of pair k, from the model's own predict() (as the reference path reports it). */
-export function noteOf(hazard: FastHazard, work: SettingWork, branch: BranchWork, measureIndex: number, at: FastSite, k: number): string {
+export function noteOf(
+  hazard: FastHazard,
+  work: SettingWork,
+  branch: BranchWork,
+  measureIndex: number,
+  at: FastSite,
+  k: number,
+): string {
   const local = work.pairs.rupture[k] as number;
   const distances = pairDistanceContext(hazard.geometry, work.ruptures[local] as number, at.point);
   const measure = (hazard.options.measures[measureIndex] as HazardMeasure).measure;
-  const prediction = branch.model.predict(gmmInput(work.contexts[local]!, distances, at.site), measure);
+  const prediction = branch.model.predict(
+    gmmInput(work.contexts[local]!, distances, at.site),
+    measure,
+  );
   return prediction.notes[0] ?? `${branch.model.name}: outside its validity range`;
 }

@@ -3,8 +3,20 @@ import { measureLabel } from '../motion/measure.ts';
 import { createPairPredictions } from '../motion/prepared-period.ts';
 import type { PairPredictions } from '../motion/types.ts';
 import { compensatedSum } from '../summation.ts';
-import { coefficientLevelRate, createLevelCoefficients, fillLevelCoefficients, levelRate, type LevelCoefficients } from './curve-accumulator.ts';
-import { noteOf, type BranchWork, type FastHazard, type FastSite, type SettingWork } from './fast-site-hazard.ts';
+import {
+  coefficientLevelRate,
+  createLevelCoefficients,
+  fillLevelCoefficients,
+  levelRate,
+  type LevelCoefficients,
+} from './curve-accumulator.ts';
+import {
+  noteOf,
+  type BranchWork,
+  type FastHazard,
+  type FastSite,
+  type SettingWork,
+} from './fast-site-hazard.ts';
 import { siteDistances } from './site-distances.ts';
 import type { ValiditySummary } from './hazard-types.ts';
 
@@ -33,7 +45,10 @@ export function createFastRates(hazard: FastHazard): FastRates {
   const coefficients = new Map<BranchWork, LevelCoefficients>();
   for (const work of hazard.settings) {
     for (const branch of work.branches) {
-      predictions.set(branch, hazard.options.measures.map(() => createPairPredictions(work.ruptures.length)));
+      predictions.set(
+        branch,
+        hazard.options.measures.map(() => createPairPredictions(work.ruptures.length)),
+      );
       coefficients.set(branch, createLevelCoefficients(work.ruptures.length));
     }
   }
@@ -46,16 +61,34 @@ export function fastSiteRates(rates: FastRates, at: FastSite, measureIndex = 0):
   const { options, geometry, exceedance } = hazard;
   const measure = options.measures[measureIndex]!;
   const validity = new Map<string, { outside: number; evaluated: number; firstNote: string }>();
-  const terms: { weight: number; work: SettingWork; predictions: PairPredictions; coefficients: LevelCoefficients }[] = [];
+  const terms: {
+    weight: number;
+    work: SettingWork;
+    predictions: PairPredictions;
+    coefficients: LevelCoefficients;
+  }[] = [];
 
   for (const work of hazard.settings) {
     const { pairs } = work;
-    siteDistances({ geometry, ruptures: work.ruptures, site: at.point, maxDistanceKm: options.maxDistanceKm, distances: work.distances }, pairs);
+    siteDistances(
+      {
+        geometry,
+        ruptures: work.ruptures,
+        site: at.point,
+        maxDistanceKm: options.maxDistanceKm,
+        distances: work.distances,
+      },
+      pairs,
+    );
     const count = pairs.count;
     for (const branch of work.branches) {
       const all = rates.predictions.get(branch)!;
       const predictions = all[measureIndex]!;
-      const summary = validity.get(branch.model.name) ?? { outside: 0, evaluated: 0, firstNote: '' };
+      const summary = validity.get(branch.model.name) ?? {
+        outside: 0,
+        evaluated: 0,
+        firstNote: '',
+      };
       if (count > 0) {
         branch.motions.predict(at.site, pairs, all);
         const { lnMedian, sigma: sigmas, applicable } = predictions;
@@ -68,19 +101,32 @@ export function fastSiteRates(rates: FastRates, at: FastSite, measureIndex = 0):
             summary.outside++;
           }
           if (!(mu > -Infinity && mu < Infinity && sigma >= 0 && sigma < Infinity)) {
-            const sourceId = options.table.sourceIds[options.table.sourceIndex[work.ruptures[pairs.rupture[k] as number] as number] as number];
+            const sourceId =
+              options.table.sourceIds[
+                options.table.sourceIndex[
+                  work.ruptures[pairs.rupture[k] as number] as number
+                ] as number
+              ];
             throw new TremoraError(
               `${branch.model.name} gave ln median ${mu} and sigma ${sigma} for ${measureLabel(measure.measure)} ` +
                 `from a rupture of source "${sourceId}"; expected finite numbers with sigma >= 0`,
             );
           }
         }
-        if (firstOutside >= 0 && !summary.firstNote) summary.firstNote = noteOf(hazard, work, branch, measureIndex, at, firstOutside);
+        if (firstOutside >= 0 && !summary.firstNote)
+          summary.firstNote = noteOf(hazard, work, branch, measureIndex, at, firstOutside);
       }
       summary.evaluated += count;
       validity.set(branch.model.name, summary);
       const coefficients = rates.coefficients.get(branch)!;
-      fillLevelCoefficients(coefficients, exceedance, work.rates, pairs.rupture, predictions, count);
+      fillLevelCoefficients(
+        coefficients,
+        exceedance,
+        work.rates,
+        pairs.rupture,
+        predictions,
+        count,
+      );
       terms.push({ weight: branch.weight, work, predictions, coefficients });
     }
   }
@@ -97,10 +143,19 @@ export function fastSiteRates(rates: FastRates, at: FastSite, measureIndex = 0):
             t.weight *
             (t.coefficients.usable && exceedance.mode === 'table'
               ? coefficientLevelRate(lnLevel, exceedance, t.coefficients)
-              : levelRate(lnLevel, exceedance, t.work.rates, t.work.pairs.rupture, t.predictions, counts[i] as number)),
+              : levelRate(
+                  lnLevel,
+                  exceedance,
+                  t.work.rates,
+                  t.work.pairs.rupture,
+                  t.predictions,
+                  counts[i] as number,
+                )),
         ),
       );
     },
-    validity: [...validity.entries()].filter(([, s]) => s.outside > 0).map(([model, s]) => ({ model, ...s })),
+    validity: [...validity.entries()]
+      .filter(([, s]) => s.outside > 0)
+      .map(([model, s]) => ({ model, ...s })),
   };
 }

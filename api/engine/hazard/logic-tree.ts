@@ -24,12 +24,16 @@ export const MAX_BRANCH_COMBINATIONS = 64;
  * weights summing to 1); no combination needs building for it.
  */
 export function meanHazard(curves: readonly SettingBranchCurve[], levelCount: number): number[] {
-  return Array.from({ length: levelCount }, (_, j) => compensatedSum(curves.map((c) => c.weight * (c.annualRate[j] as number))));
+  return Array.from({ length: levelCount }, (_, j) =>
+    compensatedSum(curves.map((c) => c.weight * (c.annualRate[j] as number))),
+  );
 }
 
 /** Settings present in `curves`, in the fixed order of TECTONIC_SETTINGS, with their branches. */
 function bySetting(curves: readonly SettingBranchCurve[]): SettingBranchCurve[][] {
-  return TECTONIC_SETTINGS.map((s) => curves.filter((c) => c.setting === s)).filter((group) => group.length > 0);
+  return TECTONIC_SETTINGS.map((s) => curves.filter((c) => c.setting === s)).filter(
+    (group) => group.length > 0,
+  );
 }
 
 /** How many branch combinations `curves` make (the product of each setting's branch count). */
@@ -56,6 +60,8 @@ export function branchCombinationCurves(
   return combinations.map((chosen) => ({
     label: chosen.map((c) => `${c.setting}=${c.model}`).join(', '),
     weight: chosen.reduce((w, c) => w * c.weight, 1),
-    annualRate: Array.from({ length: levelCount }, (_, j) => compensatedSum(chosen.map((c) => c.annualRate[j] as number))),
+    annualRate: Array.from({ length: levelCount }, (_, j) =>
+      compensatedSum(chosen.map((c) => c.annualRate[j] as number)),
+    ),
   }));
 }

@@ -15,7 +15,9 @@ export function poissonProbability(annualRate: number, years: number): number {
 /** The annual rate whose Poisson chance over `years` is `probability`: −ln(1 − P) / years. */
 export function annualRateForProbability(probability: number, years: number): number {
   if (!(probability >= 0 && probability < 1)) {
-    throw new InvalidInput([{ path: 'probability', message: `expected a probability in [0, 1), got ${probability}` }]);
+    throw new InvalidInput([
+      { path: 'probability', message: `expected a probability in [0, 1), got ${probability}` },
+    ]);
   }
   checkYears(years);
   return -Math.log1p(-probability) / years;
@@ -28,12 +30,16 @@ export function returnPeriodForProbability(probability: number, years: number): 
 
 function checkRate(annualRate: number): void {
   if (!(annualRate >= 0 && Number.isFinite(annualRate))) {
-    throw new InvalidInput([{ path: 'annualRate', message: `expected a finite rate >= 0 per year, got ${annualRate}` }]);
+    throw new InvalidInput([
+      { path: 'annualRate', message: `expected a finite rate >= 0 per year, got ${annualRate}` },
+    ]);
   }
 }
 
 function checkYears(years: number): void {
   if (!(years > 0 && Number.isFinite(years))) {
-    throw new InvalidInput([{ path: 'years', message: `expected a finite number of years > 0, got ${years}` }]);
+    throw new InvalidInput([
+      { path: 'years', message: `expected a finite number of years > 0, got ${years}` },
+    ]);
   }
 }

@@ -1,17 +1,37 @@
 import type { PointXY } from '../geometry/projection.ts';
 import type { Measure } from '../motion/measure.ts';
-import type { DistanceContext, DistanceName, GroundMotionModel, PairDistances, PairPredictions, PreparedMotion, RuptureContext, SiteContext } from '../motion/types.ts';
+import type {
+  DistanceContext,
+  DistanceName,
+  GroundMotionModel,
+  PairDistances,
+  PairPredictions,
+  PreparedMotion,
+  RuptureContext,
+  SiteContext,
+} from '../motion/types.ts';
 import { gmmInput } from './gmm-input.ts';
 import type { RuptureGeometry } from './rupture-geometry.ts';
 import { createPairBuffer, siteDistances } from './site-distances.ts';
 
-const ALL_DISTANCES: readonly DistanceName[] = ['rjbKm', 'rrupKm', 'rxKm', 'ry0Km', 'rhypoKm', 'repiKm'];
+const ALL_DISTANCES: readonly DistanceName[] = [
+  'rjbKm',
+  'rrupKm',
+  'rxKm',
+  'ry0Km',
+  'rhypoKm',
+  'repiKm',
+];
 
 /**
  * A model that has no precomputation hook, evaluated pair by pair through predict() with every
  * distance: slower, and exactly the reference path's numbers.
  */
-function pairByPair(model: GroundMotionModel, ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion {
+function pairByPair(
+  model: GroundMotionModel,
+  ruptures: readonly RuptureContext[],
+  measure: Measure,
+): PreparedMotion {
   return {
     distances: ALL_DISTANCES,
     predictPairs(site, pairs, out) {
@@ -24,7 +44,10 @@ function pairByPair(model: GroundMotionModel, ruptures: readonly RuptureContext[
           rhypoKm: pairs.rhypoKm[k] as number,
           repiKm: pairs.repiKm[k] as number,
         };
-        const p = model.predict(gmmInput(ruptures[pairs.rupture[k] as number]!, distances, site), measure);
+        const p = model.predict(
+          gmmInput(ruptures[pairs.rupture[k] as number]!, distances, site),
+          measure,
+        );
         out.lnMedian[k] = p.lnMedian;
         out.sigma[k] = p.sigma;
         out.applicable[k] = p.applicable ? 1 : 0;
@@ -46,33 +69,50 @@ export interface LazyMotions {
   predict(site: SiteContext, pairs: PairDistances, out: readonly PairPredictions[]): void;
 }
 
-function measureByMeasure(model: GroundMotionModel, ruptures: readonly RuptureContext[], measures: readonly Measure[]): LazyMotions {
-  const prepared = measures.map((measure): { distances: readonly DistanceName[]; predictor: () => PreparedMotion } => {
-    try {
-      const motion = model.prepare ? model.prepare(ruptures, measure) : pairByPair(model, ruptures, measure);
-      return { distances: motion.distances, predictor: () => motion };
-    } catch (error) {
-      return {
-        distances: ALL_DISTANCES,
-        predictor: () => {
-          throw error;
-        },
-      };
-    }
-  });
+function measureByMeasure(
+  model: GroundMotionModel,
+  ruptures: readonly RuptureContext[],
+  measures: readonly Measure[],
+): LazyMotions {
+  const prepared = measures.map(
+    (measure): { distances: readonly DistanceName[]; predictor: () => PreparedMotion } => {
+      try {
+        const motion = model.prepare
+          ? model.prepare(ruptures, measure)
+          : pairByPair(model, ruptures, measure);
+        return { distances: motion.distances, predictor: () => motion };
+      } catch (error) {
+        return {
+          distances: ALL_DISTANCES,
+          predictor: () => {
+            throw error;
+          },
+        };
+      }
+    },
+  );
   return {
     distances: [...new Set(prepared.flatMap((p) => p.distances))],
     predict(site, pairs, out) {
-      prepared.forEach((p, i) => p.predictor().predictPairs(site, pairs, out[i] as PairPredictions));
+      prepared.forEach((p, i) =>
+        p.predictor().predictPairs(site, pairs, out[i] as PairPredictions),
+      );
     },
   };
 }
 
-export function preparedMotions(model: GroundMotionModel, ruptures: readonly RuptureContext[], measures: readonly Measure[]): LazyMotions {
+export function preparedMotions(
+  model: GroundMotionModel,
+  ruptures: readonly RuptureContext[],
+  measures: readonly Measure[],
+): LazyMotions {
   if (model.prepareMeasures) {
     try {
       const motions = model.prepareMeasures(ruptures, measures);
-      return { distances: motions.distances, predict: (site, pairs, out) => motions.predictPairs(site, pairs, out) };
+      return {
+        distances: motions.distances,
+        predict: (site, pairs, out) => motions.predictPairs(site, pairs, out),
+      };
     } catch {
       // One of the measures cannot be prepared: measure by measure keeps each one's error for when it is reached.
     }
@@ -81,9 +121,22 @@ export function preparedMotions(model: GroundMotionModel, ruptures: readonly Rup
 }
 
 /** Every distance of one rupture (table index) to a site, by the fast path's geometry (km). */
-export function pairDistanceContext(geometry: RuptureGeometry, ruptureIndex: number, site: PointXY): DistanceContext {
+export function pairDistanceContext(
+  geometry: RuptureGeometry,
+  ruptureIndex: number,
+  site: PointXY,
+): DistanceContext {
   const one = createPairBuffer(1);
-  siteDistances({ geometry, ruptures: Int32Array.of(ruptureIndex), site, maxDistanceKm: Infinity, distances: new Set(ALL_DISTANCES) }, one);
+  siteDistances(
+    {
+      geometry,
+      ruptures: Int32Array.of(ruptureIndex),
+      site,
+      maxDistanceKm: Infinity,
+      distances: new Set(ALL_DISTANCES),
+    },
+    one,
+  );
   return {
     rjbKm: one.rjbKm[0] as number,
     rrupKm: one.rrupKm[0] as number,

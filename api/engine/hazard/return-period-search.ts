@@ -13,7 +13,12 @@ export interface SearchedLevel extends CurveLevel {
  * reading between it and the level below. The answer is levelAtReturnPeriod's on the full
  * curve; two to about log₂(levels) + 3 rates are read instead of all of them.
  */
-export function levelAtReturnPeriodBySearch(levels: readonly number[], rateAt: (levelIndex: number) => number, years: number, hint?: number): SearchedLevel {
+export function levelAtReturnPeriodBySearch(
+  levels: readonly number[],
+  rateAt: (levelIndex: number) => number,
+  years: number,
+  hint?: number,
+): SearchedLevel {
   const target = 1 / years;
   const known = new Map<number, number>();
   const rate = (j: number): number => {
@@ -50,5 +55,12 @@ export function levelAtReturnPeriodBySearch(levels: readonly number[], rateAt: (
   // For j > 0, rate(0) >= rate(j − 1) > target: only j = 0 can fall below the curve.
   if (j === 0 && rate(0) < target) return { level: null, status: 'below-lowest-level', index: 0 };
   if (j === 0 || rate(j) === target) return { level: levels[j] as number, status: 'ok', index: j };
-  return { ...levelAtAnnualRate([levels[j - 1] as number, levels[j] as number], [rate(j - 1), rate(j)], target), index: j };
+  return {
+    ...levelAtAnnualRate(
+      [levels[j - 1] as number, levels[j] as number],
+      [rate(j - 1), rate(j)],
+      target,
+    ),
+    index: j,
+  };
 }

@@ -49,10 +49,18 @@ export function ruptureGeometry(table: RuptureTable): RuptureGeometry {
   for (let p = 0; p < planeCount; p++) {
     const at = p * PLANE_FIELDS;
     const cAt = p * PLANE_STRIDE;
-    const x0 = c[cAt] as number, y0 = c[cAt + 1] as number, z0 = c[cAt + 2] as number;
-    const ux = (c[cAt + 3] as number) - x0, uy = (c[cAt + 4] as number) - y0, uz = (c[cAt + 5] as number) - z0;
-    const vx = (c[cAt + 9] as number) - x0, vy = (c[cAt + 10] as number) - y0, vz = (c[cAt + 11] as number) - z0;
-    const nx = uy * vz - uz * vy, ny = uz * vx - ux * vz, nz = ux * vy - uy * vx;
+    const x0 = c[cAt] as number,
+      y0 = c[cAt + 1] as number,
+      z0 = c[cAt + 2] as number;
+    const ux = (c[cAt + 3] as number) - x0,
+      uy = (c[cAt + 4] as number) - y0,
+      uz = (c[cAt + 5] as number) - z0;
+    const vx = (c[cAt + 9] as number) - x0,
+      vy = (c[cAt + 10] as number) - y0,
+      vz = (c[cAt + 11] as number) - z0;
+    const nx = uy * vz - uz * vy,
+      ny = uz * vx - ux * vz,
+      nz = ux * vy - uy * vx;
     planes[at + ORIGIN] = x0;
     planes[at + ORIGIN + 1] = y0;
     planes[at + ORIGIN + 2] = z0;
@@ -70,8 +78,11 @@ export function ruptureGeometry(table: RuptureTable): RuptureGeometry {
     const lengths: number[] = [];
     const lengthsXY: number[] = [];
     for (let k = 0; k < 4; k++) {
-      const a = cAt + 3 * k, b = cAt + 3 * ((k + 1) % 4);
-      const ex = (c[b] as number) - (c[a] as number), ey = (c[b + 1] as number) - (c[a + 1] as number), ez = (c[b + 2] as number) - (c[a + 2] as number);
+      const a = cAt + 3 * k,
+        b = cAt + 3 * ((k + 1) % 4);
+      const ex = (c[b] as number) - (c[a] as number),
+        ey = (c[b + 1] as number) - (c[a + 1] as number),
+        ez = (c[b + 2] as number) - (c[a + 2] as number);
       edgeNormals.push(ny * ez - nz * ey, nz * ex - nx * ez, nx * ey - ny * ex);
       edges.push(ex, ey, ez);
       lengths.push(ex * ex + ey * ey + ez * ez);
@@ -89,16 +100,19 @@ export function ruptureGeometry(table: RuptureTable): RuptureGeometry {
       bounds[3 * i + 1] = table.hypocentre[3 * i + 1] as number;
       continue;
     }
-    let sx = 0, sy = 0;
+    let sx = 0,
+      sy = 0;
     for (let q = first * PLANE_STRIDE; q < last * PLANE_STRIDE; q += 3) {
       sx += c[q] as number;
       sy += c[q + 1] as number;
     }
     const corners = 4 * (last - first);
-    const cx = sx / corners, cy = sy / corners;
+    const cx = sx / corners,
+      cy = sy / corners;
     let radiusSq = 0;
     for (let q = first * PLANE_STRIDE; q < last * PLANE_STRIDE; q += 3) {
-      const dx = (c[q] as number) - cx, dy = (c[q + 1] as number) - cy;
+      const dx = (c[q] as number) - cx,
+        dy = (c[q + 1] as number) - cy;
       radiusSq = Math.max(radiusSq, dx * dx + dy * dy);
     }
     bounds[3 * i] = cx;
@@ -112,23 +126,50 @@ export function ruptureGeometry(table: RuptureTable): RuptureGeometry {
  * Fills the RECT and RECT_XY fields of one plane (u = c1 − c0, v = c3 − c0, n = u × v); true
  * when both apply, so the plane needs no quadrilateral tests.
  */
-function rectangleAxes(planes: Float64Array, at: number, c: Float64Array, cAt: number, ux: number, uy: number, uz: number, vx: number, vy: number, vz: number, nx: number, ny: number, nz: number): boolean {
+function rectangleAxes(
+  planes: Float64Array,
+  at: number,
+  c: Float64Array,
+  cAt: number,
+  ux: number,
+  uy: number,
+  uz: number,
+  vx: number,
+  vy: number,
+  vz: number,
+  nx: number,
+  ny: number,
+  nz: number,
+): boolean {
   const lu = Math.sqrt(ux * ux + uy * uy + uz * uz);
   const lv = Math.sqrt(vx * vx + vy * vy + vz * vz);
   const ln = Math.sqrt(nx * nx + ny * ny + nz * nz);
   const size = lu + lv;
   // c2 must be c0 + u + v, and u ⟂ v.
-  const gap = Math.abs((c[cAt + 6] as number) - (c[cAt] as number) - ux - vx) + Math.abs((c[cAt + 7] as number) - (c[cAt + 1] as number) - uy - vy) + Math.abs((c[cAt + 8] as number) - (c[cAt + 2] as number) - uz - vz);
+  const gap =
+    Math.abs((c[cAt + 6] as number) - (c[cAt] as number) - ux - vx) +
+    Math.abs((c[cAt + 7] as number) - (c[cAt + 1] as number) - uy - vy) +
+    Math.abs((c[cAt + 8] as number) - (c[cAt + 2] as number) - uz - vz);
   const parallelogram = size > 0 && gap <= RECTANGLE_SLACK * size;
-  if (!(parallelogram && lu > 0 && lv > 0 && Math.abs(ux * vx + uy * vy + uz * vz) <= RECTANGLE_SLACK * lu * lv)) return false;
+  if (!(
+    parallelogram &&
+    lu > 0 &&
+    lv > 0 &&
+    Math.abs(ux * vx + uy * vy + uz * vz) <= RECTANGLE_SLACK * lu * lv
+  ))
+    return false;
   // The projection: û₂ along the projected u, ŵ₂ perpendicular to it on the side v points to (either side when v projects to nothing).
   const lu2 = Math.sqrt(ux * ux + uy * uy);
   const lv2 = Math.sqrt(vx * vx + vy * vy);
-  if (lu2 === 0 || Math.abs(ux * vx + uy * vy) > RECTANGLE_SLACK * lu2 * Math.max(lv2, lu2)) return false;
-  planes.set([1, ux / lu, uy / lu, uz / lu, vx / lv, vy / lv, vz / lv, nx / ln, ny / ln, nz / ln, lu, lv], at + RECT);
-  const ax = ux / lu2, ay = uy / lu2;
+  if (lu2 === 0 || Math.abs(ux * vx + uy * vy) > RECTANGLE_SLACK * lu2 * Math.max(lv2, lu2))
+    return false;
+  planes.set(
+    [1, ux / lu, uy / lu, uz / lu, vx / lv, vy / lv, vz / lv, nx / ln, ny / ln, nz / ln, lu, lv],
+    at + RECT,
+  );
+  const ax = ux / lu2,
+    ay = uy / lu2;
   const side = ax * vy - ay * vx >= 0 ? 1 : -1;
   planes.set([1, ax, ay, -ay * side, ax * side, lu2, lv2], at + RECT_XY);
   return true;
 }
-

@@ -4,7 +4,10 @@ import type { PointKm, Rupture, RupturePlane } from '../ruptures/rupture.ts';
 import { MECHANISMS, PLANE_STRIDE, type RuptureTable } from './rupture-table.ts';
 
 /** What the table keeps of a rupture, its rate aside (a Rupture, or a placed one with its share). */
-export type TableRupture = Pick<Rupture, 'sourceIndex' | 'sourceId' | 'context' | 'surface' | 'cellUse'>;
+export type TableRupture = Pick<
+  Rupture,
+  'sourceIndex' | 'sourceId' | 'context' | 'surface' | 'cellUse'
+>;
 
 /** Ruptures (and planes) the columns first have room for; they double as needed. */
 const FIRST_CAPACITY = 4096;
@@ -106,7 +109,10 @@ export class RuptureTableBuilder {
       return;
     }
     const planes = surface.planes;
-    if (planes.length === 0) throw new TremoraError(`a planar rupture surface needs at least one plane, got none (rupture ${i} of source "${rupture.sourceId}")`);
+    if (planes.length === 0)
+      throw new TremoraError(
+        `a planar rupture surface needs at least one plane, got none (rupture ${i} of source "${rupture.sourceId}")`,
+      );
     while (this.planes + planes.length > this.planeCapacity) {
       this.planeCapacity *= 2;
       this.planeCorners = grown(this.planeCorners, PLANE_STRIDE * this.planeCapacity);

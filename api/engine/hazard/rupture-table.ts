@@ -53,7 +53,14 @@ export interface RuptureTable {
 export function ruptureUsedAt(table: RuptureTable, i: number, x: number, y: number): boolean {
   const rule = table.cellRule[i];
   if (rule === 0) return true;
-  return cellUsedAt(rule === 2, table.cellCentre[2 * i] as number, table.cellCentre[2 * i + 1] as number, table.cellRadiusKm[i] as number, x, y);
+  return cellUsedAt(
+    rule === 2,
+    table.cellCentre[2 * i] as number,
+    table.cellCentre[2 * i + 1] as number,
+    table.cellRadiusKm[i] as number,
+    x,
+    y,
+  );
 }
 
 /** Indices of the ruptures of one setting, in table order. */

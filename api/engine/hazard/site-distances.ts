@@ -1,4 +1,12 @@
-import { addGc2Segment, createGc2Sums, gc2TKm, gc2UKm, resetGc2Sums, ry0FromU, type Gc2Sums } from '../geometry/gc2.ts';
+import {
+  addGc2Segment,
+  createGc2Sums,
+  gc2TKm,
+  gc2UKm,
+  resetGc2Sums,
+  ry0FromU,
+  type Gc2Sums,
+} from '../geometry/gc2.ts';
 import type { PointXY } from '../geometry/projection.ts';
 import type { DistanceName, PairDistances } from '../motion/types.ts';
 import { ruptureUsedAt } from './rupture-table.ts';
@@ -42,7 +50,16 @@ export interface PairBuffer extends PairDistances {
 
 export function createPairBuffer(capacity: number): PairBuffer {
   const column = () => new Float64Array(capacity);
-  return { count: 0, rupture: new Int32Array(capacity), rjbKm: column(), rrupKm: column(), rxKm: column(), ry0Km: column(), rhypoKm: column(), repiKm: column() };
+  return {
+    count: 0,
+    rupture: new Int32Array(capacity),
+    rjbKm: column(),
+    rrupKm: column(),
+    rxKm: column(),
+    ry0Km: column(),
+    rhypoKm: column(),
+    repiKm: column(),
+  };
 }
 
 export interface SiteDistancesOptions {
@@ -67,10 +84,14 @@ function rjbKm(g: RuptureGeometry, first: number, last: number, px: number, py: 
     const at = p * PLANE_FIELDS;
     const q = g.quadStart[p] as number;
     if (q < 0) {
-      const dx = px - (planes[at] as number), dy = py - (planes[at + 1] as number);
-      const s = dx * (planes[at + RECT_XY + 1] as number) + dy * (planes[at + RECT_XY + 2] as number);
-      const t = dx * (planes[at + RECT_XY + 3] as number) + dy * (planes[at + RECT_XY + 4] as number);
-      const length = planes[at + RECT_XY + 5] as number, width = planes[at + RECT_XY + 6] as number;
+      const dx = px - (planes[at] as number),
+        dy = py - (planes[at + 1] as number);
+      const s =
+        dx * (planes[at + RECT_XY + 1] as number) + dy * (planes[at + RECT_XY + 2] as number);
+      const t =
+        dx * (planes[at + RECT_XY + 3] as number) + dy * (planes[at + RECT_XY + 4] as number);
+      const length = planes[at + RECT_XY + 5] as number,
+        width = planes[at + RECT_XY + 6] as number;
       const ds = s < 0 ? s : s > length ? s - length : 0;
       const dt = t < 0 ? t : t > width ? t - width : 0;
       best = Math.min(best, ds * ds + dt * dt);
@@ -79,18 +100,25 @@ function rjbKm(g: RuptureGeometry, first: number, last: number, px: number, py: 
     let positive = 0;
     let negative = 0;
     for (let k = 0; k < 4; k++) {
-      const ax = quads[q + CORNERS + 3 * k] as number, ay = quads[q + CORNERS + 3 * k + 1] as number;
-      const side = (quads[q + EDGE + 3 * k] as number) * (py - ay) - (quads[q + EDGE + 3 * k + 1] as number) * (px - ax);
+      const ax = quads[q + CORNERS + 3 * k] as number,
+        ay = quads[q + CORNERS + 3 * k + 1] as number;
+      const side =
+        (quads[q + EDGE + 3 * k] as number) * (py - ay) -
+        (quads[q + EDGE + 3 * k + 1] as number) * (px - ax);
       if (side > 0) positive++;
       else if (side < 0) negative++;
     }
     if (positive === 4 || negative === 4) return 0;
     for (let k = 0; k < 4; k++) {
-      const ax = quads[q + CORNERS + 3 * k] as number, ay = quads[q + CORNERS + 3 * k + 1] as number;
-      const ex = quads[q + EDGE + 3 * k] as number, ey = quads[q + EDGE + 3 * k + 1] as number;
+      const ax = quads[q + CORNERS + 3 * k] as number,
+        ay = quads[q + CORNERS + 3 * k + 1] as number;
+      const ex = quads[q + EDGE + 3 * k] as number,
+        ey = quads[q + EDGE + 3 * k + 1] as number;
       const lengthSq = quads[q + EDGE_LENGTH_SQ_XY + k] as number;
-      const t = lengthSq === 0 ? 0 : Math.min(1, Math.max(0, ((px - ax) * ex + (py - ay) * ey) / lengthSq));
-      const dx = px - (ax + ex * t), dy = py - (ay + ey * t);
+      const t =
+        lengthSq === 0 ? 0 : Math.min(1, Math.max(0, ((px - ax) * ex + (py - ay) * ey) / lengthSq));
+      const dx = px - (ax + ex * t),
+        dy = py - (ay + ey * t);
       best = Math.min(best, dx * dx + dy * dy);
     }
   }
@@ -105,11 +133,23 @@ function rrupKm(g: RuptureGeometry, first: number, last: number, px: number, py:
     const at = p * PLANE_FIELDS;
     const q = g.quadStart[p] as number;
     if (q < 0) {
-      const wx = px - (planes[at] as number), wy = py - (planes[at + 1] as number), wz = -(planes[at + 2] as number);
-      const s = wx * (planes[at + RECT + 1] as number) + wy * (planes[at + RECT + 2] as number) + wz * (planes[at + RECT + 3] as number);
-      const t = wx * (planes[at + RECT + 4] as number) + wy * (planes[at + RECT + 5] as number) + wz * (planes[at + RECT + 6] as number);
-      const d = wx * (planes[at + RECT + 7] as number) + wy * (planes[at + RECT + 8] as number) + wz * (planes[at + RECT + 9] as number);
-      const length = planes[at + RECT + 10] as number, width = planes[at + RECT + 11] as number;
+      const wx = px - (planes[at] as number),
+        wy = py - (planes[at + 1] as number),
+        wz = -(planes[at + 2] as number);
+      const s =
+        wx * (planes[at + RECT + 1] as number) +
+        wy * (planes[at + RECT + 2] as number) +
+        wz * (planes[at + RECT + 3] as number);
+      const t =
+        wx * (planes[at + RECT + 4] as number) +
+        wy * (planes[at + RECT + 5] as number) +
+        wz * (planes[at + RECT + 6] as number);
+      const d =
+        wx * (planes[at + RECT + 7] as number) +
+        wy * (planes[at + RECT + 8] as number) +
+        wz * (planes[at + RECT + 9] as number);
+      const length = planes[at + RECT + 10] as number,
+        width = planes[at + RECT + 11] as number;
       const ds = s < 0 ? s : s > length ? s - length : 0;
       const dt = t < 0 ? t : t > width ? t - width : 0;
       best = Math.min(best, ds * ds + dt * dt + d * d);
@@ -121,22 +161,39 @@ function rrupKm(g: RuptureGeometry, first: number, last: number, px: number, py:
       for (let k = 0; k < 4; k++) {
         const m = q + EDGE_NORMAL + 3 * k;
         const a = q + CORNERS + 3 * k;
-        const dot = (px - (quads[a] as number)) * (quads[m] as number) + (py - (quads[a + 1] as number)) * (quads[m + 1] as number) - (quads[a + 2] as number) * (quads[m + 2] as number);
+        const dot =
+          (px - (quads[a] as number)) * (quads[m] as number) +
+          (py - (quads[a + 1] as number)) * (quads[m + 1] as number) -
+          (quads[a + 2] as number) * (quads[m + 2] as number);
         if (dot > 0) positive++;
       }
       if (positive === 4) {
-        const d = Math.abs((px - (quads[q] as number)) * (quads[q + NORMAL] as number) + (py - (quads[q + 1] as number)) * (quads[q + NORMAL + 1] as number) - (quads[q + 2] as number) * (quads[q + NORMAL + 2] as number)) / normalLength;
+        const d =
+          Math.abs(
+            (px - (quads[q] as number)) * (quads[q + NORMAL] as number) +
+              (py - (quads[q + 1] as number)) * (quads[q + NORMAL + 1] as number) -
+              (quads[q + 2] as number) * (quads[q + NORMAL + 2] as number),
+          ) / normalLength;
         best = Math.min(best, d * d);
         continue;
       }
     }
     for (let k = 0; k < 4; k++) {
       const a = q + CORNERS + 3 * k;
-      const ax = quads[a] as number, ay = quads[a + 1] as number, az = quads[a + 2] as number;
-      const ex = quads[q + EDGE + 3 * k] as number, ey = quads[q + EDGE + 3 * k + 1] as number, ez = quads[q + EDGE + 3 * k + 2] as number;
+      const ax = quads[a] as number,
+        ay = quads[a + 1] as number,
+        az = quads[a + 2] as number;
+      const ex = quads[q + EDGE + 3 * k] as number,
+        ey = quads[q + EDGE + 3 * k + 1] as number,
+        ez = quads[q + EDGE + 3 * k + 2] as number;
       const lengthSq = quads[q + EDGE_LENGTH_SQ + k] as number;
-      const t = lengthSq === 0 ? 0 : Math.min(1, Math.max(0, ((px - ax) * ex + (py - ay) * ey - az * ez) / lengthSq));
-      const dx = px - (ax + ex * t), dy = py - (ay + ey * t), dz = az + ez * t;
+      const t =
+        lengthSq === 0
+          ? 0
+          : Math.min(1, Math.max(0, ((px - ax) * ex + (py - ay) * ey - az * ez) / lengthSq));
+      const dx = px - (ax + ex * t),
+        dy = py - (ay + ey * t),
+        dz = az + ez * t;
       best = Math.min(best, dx * dx + dy * dy + dz * dz);
     }
   }
@@ -144,13 +201,31 @@ function rrupKm(g: RuptureGeometry, first: number, last: number, px: number, py:
 }
 
 /** GC2 T (Rx) and Ry0 of rupture i's top edges (geometry/gc2.ts); written to out at k. */
-function gc2(planes: Float64Array, first: number, last: number, px: number, py: number, sums: Gc2Sums, out: PairBuffer, k: number): void {
+function gc2(
+  planes: Float64Array,
+  first: number,
+  last: number,
+  px: number,
+  py: number,
+  sums: Gc2Sums,
+  out: PairBuffer,
+  k: number,
+): void {
   resetGc2Sums(sums);
   for (let p = first; p < last; p++) {
     const at = p * PLANE_FIELDS;
     const l = planes[at + TOP] as number;
     if (l === 0) continue;
-    addGc2Segment(sums, planes[at + ORIGIN] as number, planes[at + ORIGIN + 1] as number, planes[at + TOP + 1] as number, planes[at + TOP + 2] as number, l, px, py);
+    addGc2Segment(
+      sums,
+      planes[at + ORIGIN] as number,
+      planes[at + ORIGIN + 1] as number,
+      planes[at + TOP + 1] as number,
+      planes[at + TOP + 2] as number,
+      l,
+      px,
+      py,
+    );
   }
   out.rxKm[k] = gc2TKm(sums);
   out.ry0Km[k] = ry0FromU(gc2UKm(sums), sums.lengthKm);
@@ -165,10 +240,22 @@ export function siteDistances(options: SiteDistancesOptions, out: PairBuffer): v
   const { geometry, ruptures, maxDistanceKm, distances } = options;
   const { table, planes, bounds } = geometry;
   const { planeStart, hypocentre, cellRule } = table;
-  const { rupture, rjbKm: rjbOut, rrupKm: rrupOut, rxKm: rxOut, ry0Km: ry0Out, rhypoKm: rhypoOut, repiKm: repiOut } = out;
-  const px = options.site.x, py = options.site.y;
-  const wantRrup = distances.has('rrupKm'), wantGc2 = distances.has('rxKm') || distances.has('ry0Km');
-  const wantRhypo = distances.has('rhypoKm'), wantRepi = distances.has('repiKm'), wantRjb = distances.has('rjbKm');
+  const {
+    rupture,
+    rjbKm: rjbOut,
+    rrupKm: rrupOut,
+    rxKm: rxOut,
+    ry0Km: ry0Out,
+    rhypoKm: rhypoOut,
+    repiKm: repiOut,
+  } = out;
+  const px = options.site.x,
+    py = options.site.y;
+  const wantRrup = distances.has('rrupKm'),
+    wantGc2 = distances.has('rxKm') || distances.has('ry0Km');
+  const wantRhypo = distances.has('rhypoKm'),
+    wantRepi = distances.has('repiKm'),
+    wantRjb = distances.has('rjbKm');
   const maxSq = maxDistanceKm * maxDistanceKm;
   const sums = createGc2Sums();
   let count = 0;
@@ -177,8 +264,11 @@ export function siteDistances(options: SiteDistancesOptions, out: PairBuffer): v
     if (cellRule[i] !== 0 && !ruptureUsedAt(table, i, px, py)) continue;
     const first = planeStart[i] as number;
     const last = planeStart[i + 1] as number;
-    const hx = hypocentre[3 * i] as number, hy = hypocentre[3 * i + 1] as number, hz = hypocentre[3 * i + 2] as number;
-    const ex = px - hx, ey = py - hy;
+    const hx = hypocentre[3 * i] as number,
+      hy = hypocentre[3 * i + 1] as number,
+      hz = hypocentre[3 * i + 2] as number;
+    const ex = px - hx,
+      ey = py - hy;
     if (first === last) {
       const repiSq = ex * ex + ey * ey;
       if (!(repiSq <= maxSq)) continue;
@@ -200,7 +290,8 @@ export function siteDistances(options: SiteDistancesOptions, out: PairBuffer): v
       continue;
     }
     // Beyond the cut-off even from the nearest point of the bounding circle: (d − radius)² > max² with d > radius.
-    const cx = px - (bounds[3 * i] as number), cy = py - (bounds[3 * i + 1] as number);
+    const cx = px - (bounds[3 * i] as number),
+      cy = py - (bounds[3 * i + 1] as number);
     const radius = bounds[3 * i + 2] as number;
     const reach = maxDistanceKm + BOUND_SLACK_KM + radius;
     const centreSq = cx * cx + cy * cy;

@@ -22,9 +22,12 @@ export function studyRuptureTable(study: Study): StudyRuptureTable {
   const frame = frameForStudy(study);
   const builder = new RuptureTableBuilder();
   // As discretise.ts's toRupture: the bin's rate times the rupture's share.
-  const add = (placed: PlacedRupture, binRate: number): void => builder.add(placed, binRate * placed.share);
+  const add = (placed: PlacedRupture, binRate: number): void =>
+    builder.add(placed, binRate * placed.share);
   const sites = communitySites(study, frame);
-  study.sources.forEach((source, i) => visitSourceRuptures(source, i, frame, study.settings, add, sites));
+  study.sources.forEach((source, i) =>
+    visitSourceRuptures(source, i, frame, study.settings, add, sites),
+  );
   // One entry per source, as the sources' walk numbers them ('' for a source without ruptures).
   while (builder.sourceIds.length < study.sources.length) builder.sourceIds.push('');
   return { frame, table: builder.table() };

@@ -24,13 +24,21 @@ const STEPS_PER_INTERVAL = 16;
  * when the curve is cut short at either end. Not the clamped median alone: MMI held to 1–10
  * (worden2012.ts) is used as the median, its scatter unclamped.
  */
-export function annualRateOfReachingMmi(levels: readonly number[], annualRate: readonly number[], mmiThreshold: number, conversion: IntensityConversion): number {
+export function annualRateOfReachingMmi(
+  levels: readonly number[],
+  annualRate: readonly number[],
+  mmiThreshold: number,
+  conversion: IntensityConversion,
+): number {
   const { gmice, toRelationUnits } = conversion;
-  const chance = (y: number): number => normalSurvival((mmiThreshold - mmiFromMotion(y * toRelationUnits, gmice)) / gmice.sigmaMmi);
+  const chance = (y: number): number =>
+    normalSurvival((mmiThreshold - mmiFromMotion(y * toRelationUnits, gmice)) / gmice.sigmaMmi);
   const parts: number[] = [];
   for (let k = 0; k + 1 < levels.length; k++) {
-    const y0 = levels[k] as number, y1 = levels[k + 1] as number;
-    const r0 = annualRate[k] as number, r1 = annualRate[k + 1] as number;
+    const y0 = levels[k] as number,
+      y1 = levels[k + 1] as number;
+    const r0 = annualRate[k] as number,
+      r1 = annualRate[k + 1] as number;
     if (!(r0 > r1)) continue;
     const rateAt = (y: number): number => {
       if (r1 > 0) return r0 * Math.exp((Math.log(r1 / r0) * Math.log(y / y0)) / Math.log(y1 / y0));

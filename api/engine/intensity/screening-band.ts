@@ -15,7 +15,10 @@ export const SCREENING_BANDS = [
 export type ScreeningBandId = (typeof SCREENING_BANDS)[number]['id'];
 
 /** The band for a 475-year MMI; `bandMmi` (a bound, when mmi475 is unknown) overrides for the choice. */
-export function screeningBand(mmi475: number | null, bandMmi: number | null = mmi475): ScreeningBand {
+export function screeningBand(
+  mmi475: number | null,
+  bandMmi: number | null = mmi475,
+): ScreeningBand {
   const mmi = bandMmi ?? -Infinity;
   const band = SCREENING_BANDS.find((b) => mmi >= b.minMmi) ?? SCREENING_BANDS[3];
   return { id: band.id, label: band.label, mmi475 };

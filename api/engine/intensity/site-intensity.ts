@@ -15,7 +15,9 @@ import { INTENSITY_CONVERSIONS, mmiFromMotion, type IntensityConversion } from '
 export const INTENSITY_MEASURE = 'PGA';
 
 /** The measure a study's intensity is read from. */
-export const intensityMeasureOf = (settings: { readonly intensityMeasure?: 'PGA' | 'PGV' }): 'PGA' | 'PGV' => settings.intensityMeasure ?? INTENSITY_MEASURE;
+export const intensityMeasureOf = (settings: {
+  readonly intensityMeasure?: 'PGA' | 'PGV';
+}): 'PGA' | 'PGV' => settings.intensityMeasure ?? INTENSITY_MEASURE;
 
 /** The intensities whose chance of being reached is reported. */
 export const REPORTED_INTENSITIES = { VI: 6, VII: 7, VIII: 8 } as const;
@@ -58,20 +60,32 @@ export function siteIntensity(options: SiteIntensityOptions): SiteIntensity {
   const toMmi = (y: number): number => mmiFromMotion(y * toRelationUnits, gmice);
   const unit = measure === 'PGA' ? 'g' : 'cm/s';
   const warnings: string[] = [];
-  const atReturnPeriod: Record<string, { mmi: number | null; roman: string | null; fromMeasure: string }> = {};
+  const atReturnPeriod: Record<
+    string,
+    { mmi: number | null; roman: string | null; fromMeasure: string }
+  > = {};
   for (const years of options.returnPeriodsYears) {
     const { level } = levelAtReturnPeriod(levels, annualRate, years);
     const mmi = level === null ? null : toMmi(level);
-    atReturnPeriod[String(years)] = { mmi, roman: mmi === null ? null : mmiRoman(mmi), fromMeasure: measure };
+    atReturnPeriod[String(years)] = {
+      mmi,
+      roman: mmi === null ? null : mmiRoman(mmi),
+      fromMeasure: measure,
+    };
   }
   const lowest = levels[0];
   const thresholdRates = Object.entries(REPORTED_INTENSITIES).map(([roman, level]) => {
     const threshold = level - ROUNDING_HALF_MMI;
     // Below the lowest level the curve says nothing; motions there could still reach the level with the scatter.
     if (lowest !== undefined && toMmi(lowest) + 2 * gmice.sigmaMmi > threshold) {
-      warnings.push(`the lowest ${measure} level (${lowest} ${unit}) could reach MMI ${roman} with the conversion's scatter; its chance is a lower bound`);
+      warnings.push(
+        `the lowest ${measure} level (${lowest} ${unit}) could reach MMI ${roman} with the conversion's scatter; its chance is a lower bound`,
+      );
     }
-    return { roman: roman as keyof typeof REPORTED_INTENSITIES, rate: annualRateOfReachingMmi(levels, annualRate, threshold, conversion) };
+    return {
+      roman: roman as keyof typeof REPORTED_INTENSITIES,
+      rate: annualRateOfReachingMmi(levels, annualRate, threshold, conversion),
+    };
   });
   const chanceOfReaching: Record<string, Record<'VI' | 'VII' | 'VIII', number>> = {};
   for (const years of options.horizonsYears) {
@@ -85,10 +99,16 @@ export function siteIntensity(options: SiteIntensityOptions): SiteIntensity {
   if (band475.status === 'above-highest-level') {
     const highest = levels[levels.length - 1];
     bandMmi = highest === undefined ? null : toMmi(highest);
-    warnings.push(`the 475-year ${measure} is above the highest computed level; the band is set from the intensity at that level, a lower bound`);
+    warnings.push(
+      `the 475-year ${measure} is above the highest computed level; the band is set from the intensity at that level, a lower bound`,
+    );
   }
   return {
-    intensity: { atReturnPeriod, chanceOfReaching, conversion: { measure, relation: 'Worden et al. (2012)', sigmaMmi: gmice.sigmaMmi } },
+    intensity: {
+      atReturnPeriod,
+      chanceOfReaching,
+      conversion: { measure, relation: 'Worden et al. (2012)', sigmaMmi: gmice.sigmaMmi },
+    },
     band: screeningBand(mmi475, bandMmi),
     warnings,
   };

@@ -39,9 +39,25 @@ export interface Gmice {
 }
 
 /** Worden et al. (2012) Table 1, PGA in cm/s² (from memory, σ as well). */
-export const WORDEN2012_PGA: Gmice = { c1: 1.78, c2: 1.55, c3: -1.6, c4: 3.7, t1: 1.57, t2: 4.22, sigmaMmi: 0.73 };
+export const WORDEN2012_PGA: Gmice = {
+  c1: 1.78,
+  c2: 1.55,
+  c3: -1.6,
+  c4: 3.7,
+  t1: 1.57,
+  t2: 4.22,
+  sigmaMmi: 0.73,
+};
 /** Worden et al. (2012) Table 1, PGV in cm/s (from memory, σ as well). */
-export const WORDEN2012_PGV: Gmice = { c1: 3.78, c2: 1.47, c3: 2.89, c4: 3.16, t1: 0.53, t2: 4.56, sigmaMmi: 0.65 };
+export const WORDEN2012_PGV: Gmice = {
+  c1: 3.78,
+  c2: 1.47,
+  c3: 2.89,
+  c4: 3.16,
+  t1: 0.53,
+  t2: 4.56,
+  sigmaMmi: 0.65,
+};
 
 /** A conversion of one hazard measure to MMI: the relation, and the factor from the curve's units (g, cm/s) to the relation's. */
 export interface IntensityConversion {
@@ -70,7 +86,9 @@ export function motionFromMmi(mmi: number, c: Gmice): number {
 }
 
 /** Worden et al. (2012) from PGA in g (the curve's units) and from PGV in cm/s. */
-export const INTENSITY_CONVERSIONS: Readonly<Record<IntensityConversion['measure'], IntensityConversion>> = {
+export const INTENSITY_CONVERSIONS: Readonly<
+  Record<IntensityConversion['measure'], IntensityConversion>
+> = {
   PGA: { measure: 'PGA', gmice: WORDEN2012_PGA, toRelationUnits: STANDARD_GRAVITY_MS2 * 100 },
   PGV: { measure: 'PGV', gmice: WORDEN2012_PGV, toRelationUnits: 1 },
 };

@@ -74,9 +74,11 @@ export interface HazardMapPlan {
 
 function checkQuantity(quantity: MapQuantity): void {
   const positive = (path: string, value: number, what: string): void => {
-    if (!(value > 0 && Number.isFinite(value))) throw new InvalidInput([{ path, message: `expected ${what} above 0, got ${value}` }]);
+    if (!(value > 0 && Number.isFinite(value)))
+      throw new InvalidInput([{ path, message: `expected ${what} above 0, got ${value}` }]);
   };
-  if (quantity.kind === 'return-period') positive('returnPeriodYears', quantity.returnPeriodYears, 'a return period in years');
+  if (quantity.kind === 'return-period')
+    positive('returnPeriodYears', quantity.returnPeriodYears, 'a return period in years');
   else {
     positive('level', quantity.level, 'a level of the measure');
     positive('horizonYears', quantity.horizonYears, 'a horizon in years');
@@ -87,13 +89,22 @@ function checkQuantity(quantity: MapQuantity): void {
 export function planHazardMap(study: Study, options: HazardMapOptions): HazardMapPlan {
   checkQuantity(options.quantity);
   const vs30 = options.vs30 ?? MAP_VS30;
-  if (!(vs30 > 0 && Number.isFinite(vs30))) throw new InvalidInput([{ path: 'vs30', message: `expected a Vs30 above 0 m/s, got ${vs30}` }]);
+  if (!(vs30 > 0 && Number.isFinite(vs30)))
+    throw new InvalidInput([{ path: 'vs30', message: `expected a Vs30 above 0 m/s, got ${vs30}` }]);
   const parsed = parseMeasure(options.measure);
   // A chance map needs the rate at its one level only; a return-period map reads the study's curve levels.
-  const levels = options.quantity.kind === 'chance' ? [options.quantity.level] : levelsFor(study.settings.levels, options.measure, parsed);
+  const levels =
+    options.quantity.kind === 'chance'
+      ? [options.quantity.level]
+      : levelsFor(study.settings.levels, options.measure, parsed);
   const measure: HazardMeasure = { key: options.measure, measure: parsed, levels };
   const warnings: string[] = [];
-  const branches = resolveBranches(study, { all: [measure] }, options.models ?? modelCatalog, warnings);
+  const branches = resolveBranches(
+    study,
+    { all: [measure] },
+    options.models ?? modelCatalog,
+    warnings,
+  );
   let frame: LocalFrame;
   let table: RuptureTable;
   if (options.table) {
@@ -119,7 +130,17 @@ export function planHazardMap(study: Study, options: HazardMapOptions): HazardMa
         branchCurves: false,
       }),
     ));
-  return { grid, frame, measure, quantity: options.quantity, vs30, unit: measureUnit(parsed), table, warnings, rates: fastRates };
+  return {
+    grid,
+    frame,
+    measure,
+    quantity: options.quantity,
+    vs30,
+    unit: measureUnit(parsed),
+    table,
+    warnings,
+    rates: fastRates,
+  };
 }
 
 /** Per-model counts of predictions outside validity over a map's points (as a community's warnings give them). */
@@ -130,7 +151,13 @@ export type MapValidity = Map<string, { outside: number; evaluated: number; firs
  * `validity` collects the models' validity counts when given; `shouldStop` is polled before
  * each point (true stops with Cancelled).
  */
-export function hazardMapChunk(plan: HazardMapPlan, firstIndex: number, count: number, validity?: MapValidity, shouldStop?: () => boolean): MapPoint[] {
+export function hazardMapChunk(
+  plan: HazardMapPlan,
+  firstIndex: number,
+  count: number,
+  validity?: MapValidity,
+  shouldStop?: () => boolean,
+): MapPoint[] {
   const { grid, quantity } = plan;
   const last = Math.min(grid.count, firstIndex + count);
   const site = { vs30: plan.vs30, vs30Measured: false };
@@ -145,7 +172,12 @@ export function hazardMapChunk(plan: HazardMapPlan, firstIndex: number, count: n
     let value: number | null;
     let status: ReturnPeriodStatus;
     if (quantity.kind === 'return-period') {
-      const found = levelAtReturnPeriodBySearch(plan.measure.levels, (j) => hazard.rateAt(j), quantity.returnPeriodYears, hint);
+      const found = levelAtReturnPeriodBySearch(
+        plan.measure.levels,
+        (j) => hazard.rateAt(j),
+        quantity.returnPeriodYears,
+        hint,
+      );
       ({ level: value, status } = found);
       if (found.index >= 0) hint = found.index;
     } else {
@@ -160,8 +192,12 @@ export function hazardMapChunk(plan: HazardMapPlan, firstIndex: number, count: n
   return points;
 }
 
-export function mergeValidity(into: MapValidity, from: readonly ValiditySummary[] | MapValidity): void {
-  const entries = from instanceof Map ? [...from.entries()] : from.map((v) => [v.model, v] as const);
+export function mergeValidity(
+  into: MapValidity,
+  from: readonly ValiditySummary[] | MapValidity,
+): void {
+  const entries =
+    from instanceof Map ? [...from.entries()] : from.map((v) => [v.model, v] as const);
   for (const [model, v] of entries) {
     const summary = into.get(model) ?? { outside: 0, evaluated: 0, firstNote: '' };
     summary.outside += v.outside;
@@ -185,10 +221,16 @@ export interface HazardMapSummary {
 }
 
 /** Summary of a planned map with the validity counts its points gathered. */
-export function mapSummary(plan: Pick<HazardMapPlan, 'grid' | 'measure' | 'unit' | 'quantity' | 'vs30' | 'warnings'>, validity: MapValidity): HazardMapSummary {
+export function mapSummary(
+  plan: Pick<HazardMapPlan, 'grid' | 'measure' | 'unit' | 'quantity' | 'vs30' | 'warnings'>,
+  validity: MapValidity,
+): HazardMapSummary {
   const warnings = [...plan.warnings];
   for (const [model, v] of validity) {
-    if (v.outside > 0) warnings.push(`${model}: ${v.outside} of ${v.evaluated} rupture predictions over the map are outside its validity range (for example, ${v.firstNote})`);
+    if (v.outside > 0)
+      warnings.push(
+        `${model}: ${v.outside} of ${v.evaluated} rupture predictions over the map are outside its validity range (for example, ${v.firstNote})`,
+      );
   }
   const { grid } = plan;
   return {
@@ -216,7 +258,12 @@ export interface HazardMapRunOptions {
  * `onChunk` as soon as it is computed and is not kept, so memory stays flat however large the
  * grid. Returns the summary. (The parallel runner shares the chunks over worker threads.)
  */
-export function hazardMap(study: Study, options: HazardMapOptions, onChunk: (points: readonly MapPoint[], shareDone: number) => void, run: HazardMapRunOptions = {}): HazardMapSummary {
+export function hazardMap(
+  study: Study,
+  options: HazardMapOptions,
+  onChunk: (points: readonly MapPoint[], shareDone: number) => void,
+  run: HazardMapRunOptions = {},
+): HazardMapSummary {
   const plan = planHazardMap(study, options);
   const chunkSize = run.chunkSize ?? 1000;
   const validity: MapValidity = new Map();

@@ -23,9 +23,11 @@ export interface MapDescription {
 }
 
 /** The unit of the values: the measure's for a return-period map, a probability (0–1) for a chance map. */
-export const valueUnit = (d: Pick<MapDescription, 'unit' | 'quantity'>): string => (d.quantity.kind === 'chance' ? 'probability' : d.unit);
+export const valueUnit = (d: Pick<MapDescription, 'unit' | 'quantity'>): string =>
+  d.quantity.kind === 'chance' ? 'probability' : d.unit;
 
-export const MAP_CAUTION = 'Screening estimates on a grid at one Vs30, not design values: building codes and licensed engineers decide.';
+export const MAP_CAUTION =
+  'Screening estimates on a grid at one Vs30, not design values: building codes and licensed engineers decide.';
 
 /** The opening of the FeatureCollection, up to the first feature. */
 export function mapGeoJsonHead(d: MapDescription): string {
@@ -34,17 +36,31 @@ export function mapGeoJsonHead(d: MapDescription): string {
 }
 
 /** One point as a Feature. */
-export function mapFeature(d: Pick<MapDescription, 'unit' | 'quantity' | 'measure'>, p: MapPoint): Record<string, unknown> {
+export function mapFeature(
+  d: Pick<MapDescription, 'unit' | 'quantity' | 'measure'>,
+  p: MapPoint,
+): Record<string, unknown> {
   const round = (x: number): number => Number(x.toFixed(COORDINATE_DECIMALS));
   return {
     type: 'Feature',
     geometry: { type: 'Point', coordinates: [round(p.lon), round(p.lat)] },
-    properties: { value: p.value, unit: valueUnit(d), measure: d.measure, status: p.status, row: p.row, column: p.column },
+    properties: {
+      value: p.value,
+      unit: valueUnit(d),
+      measure: d.measure,
+      status: p.status,
+      row: p.row,
+      column: p.column,
+    },
   };
 }
 
 /** Features of a chunk, as text to follow the head (`first` says whether any feature came before). */
-export function mapGeoJsonFeatures(d: Pick<MapDescription, 'unit' | 'quantity' | 'measure'>, points: readonly MapPoint[], first: boolean): string {
+export function mapGeoJsonFeatures(
+  d: Pick<MapDescription, 'unit' | 'quantity' | 'measure'>,
+  points: readonly MapPoint[],
+  first: boolean,
+): string {
   if (points.length === 0) return '';
   return `${first ? '' : ',\n'}${points.map((p) => JSON.stringify(mapFeature(d, p))).join(',\n')}`;
 }
@@ -56,5 +72,14 @@ export function mapGeoJsonTail(summary: Pick<HazardMapSummary, 'warnings'>): str
 
 /** The description of a planned or finished map. */
 export function mapDescription(s: MapDescription): MapDescription {
-  return { measure: s.measure, unit: s.unit, quantity: s.quantity, vs30: s.vs30, spacingKm: s.spacingKm, columns: s.columns, rows: s.rows, count: s.count };
+  return {
+    measure: s.measure,
+    unit: s.unit,
+    quantity: s.quantity,
+    vs30: s.vs30,
+    spacingKm: s.spacingKm,
+    columns: s.columns,
+    rows: s.rows,
+    count: s.count,
+  };
 }

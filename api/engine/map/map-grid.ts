@@ -44,7 +44,9 @@ export interface MapGridOptions {
  * frame is centred on (geometry/projection.ts, frameForStudy), with the outline added.
  * Longitudes are unwrapped around the first point, as frameForStudy does.
  */
-export function studyBounds(study: Pick<Study, 'communities' | 'sources' | 'outline'>): LonLatBounds {
+export function studyBounds(
+  study: Pick<Study, 'communities' | 'sources' | 'outline'>,
+): LonLatBounds {
   const points: LonLat[] = study.communities.map((c) => [c.lon, c.lat] as const);
   for (const source of study.sources) {
     if (source.kind === 'fault') points.push(...source.trace);
@@ -53,9 +55,16 @@ export function studyBounds(study: Pick<Study, 'communities' | 'sources' | 'outl
   }
   for (const ring of study.outline ?? []) points.push(...ring);
   const first = points[0];
-  if (!first) throw new InvalidInput([{ path: 'communities', message: 'expected at least one community or source to map around' }]);
-  const wrap = (lon: number): number => first[0] + ((((lon - first[0] + 180) % 360) + 360) % 360) - 180;
-  let west = Infinity, east = -Infinity, south = Infinity, north = -Infinity;
+  if (!first)
+    throw new InvalidInput([
+      { path: 'communities', message: 'expected at least one community or source to map around' },
+    ]);
+  const wrap = (lon: number): number =>
+    first[0] + ((((lon - first[0] + 180) % 360) + 360) % 360) - 180;
+  let west = Infinity,
+    east = -Infinity,
+    south = Infinity,
+    north = -Infinity;
   for (const [lon, lat] of points) {
     const x = wrap(lon);
     west = Math.min(west, x);
@@ -71,14 +80,25 @@ export function studyBounds(study: Pick<Study, 'communities' | 'sources' | 'outl
  * the bounds' edges projected, with the first point at its south-west corner and enough columns
  * and rows that the last ones reach or pass its far edges.
  */
-export function mapGrid(study: Pick<Study, 'communities' | 'sources' | 'outline'>, frame: LocalFrame, options: MapGridOptions): MapGrid {
+export function mapGrid(
+  study: Pick<Study, 'communities' | 'sources' | 'outline'>,
+  frame: LocalFrame,
+  options: MapGridOptions,
+): MapGrid {
   const { spacingKm } = options;
   if (!(spacingKm > 0 && Number.isFinite(spacingKm))) {
-    throw new InvalidInput([{ path: 'spacingKm', message: `expected a grid spacing above 0 km, got ${spacingKm}` }]);
+    throw new InvalidInput([
+      { path: 'spacingKm', message: `expected a grid spacing above 0 km, got ${spacingKm}` },
+    ]);
   }
   const [west, south, east, north] = options.bounds ?? studyBounds(study);
   if (!(west <= east && south <= north && south >= -90 && north <= 90)) {
-    throw new InvalidInput([{ path: 'bounds', message: `expected [west, south, east, north] in degrees with west <= east and south <= north, got [${west}, ${south}, ${east}, ${north}]` }]);
+    throw new InvalidInput([
+      {
+        path: 'bounds',
+        message: `expected [west, south, east, north] in degrees with west <= east and south <= north, got [${west}, ${south}, ${east}, ${north}]`,
+      },
+    ]);
   }
   // The box's edges are curves in the local frame (parallels bow): EDGE_SAMPLES points along each.
   const edge: LonLat[] = [];
@@ -95,7 +115,8 @@ export function mapGrid(study: Pick<Study, 'communities' | 'sources' | 'outline'
   const rows = Math.ceil((Math.max(...local.map((p) => p.y)) - y0) / spacingKm) + 1;
   const count = columns * rows;
   const maxPoints = options.maxPoints ?? MAX_MAP_POINTS;
-  if (count > maxPoints) throw new StudyTooLarge(count, maxPoints, `map grid points at ${spacingKm} km spacing`);
+  if (count > maxPoints)
+    throw new StudyTooLarge(count, maxPoints, `map grid points at ${spacingKm} km spacing`);
   return { spacingKm, x0, y0, columns, rows, count };
 }
 

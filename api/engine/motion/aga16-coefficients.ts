@@ -28,7 +28,20 @@ import { coefficientRows, rowOfPeriod, type CoefficientRow } from './coefficient
 
 /** Column names of Table 3, in the paper's order. */
 export const AGA16_COLUMNS = [
-  'vlin', 'b', 'theta1', 'theta2', 'theta6', 'theta7', 'theta8', 'theta10', 'theta11', 'theta12', 'theta13', 'theta14', 'theta15', 'theta16',
+  'vlin',
+  'b',
+  'theta1',
+  'theta2',
+  'theta6',
+  'theta7',
+  'theta8',
+  'theta10',
+  'theta11',
+  'theta12',
+  'theta13',
+  'theta14',
+  'theta15',
+  'theta16',
 ] as const;
 
 /** One row of Table 3. `periodS` is 0 for the PGA row. */
@@ -109,10 +122,30 @@ export type Aga16DeltaC1Branch = 'lower' | 'central' | 'upper';
  * (period 0) and periods up to the first anchor take its value, periods from the last anchor
  * take the last; between anchors ΔC1 is linear in ln(period), as three of the four records do.
  */
-export const AGA16_DELTA_C1_INTERFACE: Readonly<Record<Aga16DeltaC1Branch, readonly (readonly [periodS: number, deltaC1: number])[]>> = Object.freeze({
-  central: [[0.3, 0.2], [0.5, 0.1], [1, 0], [2, -0.1], [3, -0.2]],
-  lower: [[0.3, 0], [0.5, -0.1], [1, -0.2], [2, -0.3], [3, -0.4]],
-  upper: [[0.3, 0.4], [0.5, 0.3], [1, 0.2], [2, 0.1], [3, 0]],
+export const AGA16_DELTA_C1_INTERFACE: Readonly<
+  Record<Aga16DeltaC1Branch, readonly (readonly [periodS: number, deltaC1: number])[]>
+> = Object.freeze({
+  central: [
+    [0.3, 0.2],
+    [0.5, 0.1],
+    [1, 0],
+    [2, -0.1],
+    [3, -0.2],
+  ],
+  lower: [
+    [0.3, 0],
+    [0.5, -0.1],
+    [1, -0.2],
+    [2, -0.3],
+    [3, -0.4],
+  ],
+  upper: [
+    [0.3, 0.4],
+    [0.5, 0.3],
+    [1, 0.2],
+    [2, 0.1],
+    [3, 0],
+  ],
 });
 
 /** ΔC1 of intraslab events at every period: the magnitude break sits at C1 − 0.3 = 7.5. */

@@ -55,8 +55,31 @@ import {
 } from './aga16-coefficients.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
-import { atLeast, createRowScratch, insideRange, mapPlan, periodRows, plannedRows, predictRows, rowMemo, singleMeasure, singleRow, type RowPlan } from './prepared-period.ts';
-import type { DistanceName, GmmInput, GmmPrediction, GroundMotionModel, PairDistances, PairPredictions, PreparedMotion, PreparedMotions, RuptureContext, ValidityRange } from './types.ts';
+import {
+  atLeast,
+  createRowScratch,
+  insideRange,
+  mapPlan,
+  periodRows,
+  plannedRows,
+  predictRows,
+  rowMemo,
+  singleMeasure,
+  singleRow,
+  type RowPlan,
+} from './prepared-period.ts';
+import type {
+  DistanceName,
+  GmmInput,
+  GmmPrediction,
+  GroundMotionModel,
+  PairDistances,
+  PairPredictions,
+  PreparedMotion,
+  PreparedMotions,
+  RuptureContext,
+  ValidityRange,
+} from './types.ts';
 import { validityNotes } from './validity.ts';
 
 const NAME = 'AGA16';
@@ -95,7 +118,11 @@ export const AGA16_SIGMA = Math.sqrt(K.phi * K.phi + K.tau * K.tau);
  * ΔC1 (magnitude units) at a period in s (0 for PGA) for a branch: interface anchors linear
  * in ln(period), constant beyond the first and last anchors; intraslab −0.3 in every branch.
  */
-export function aga16DeltaC1(periodS: number, eventType: Aga16EventType, branch: Aga16DeltaC1Branch = 'central'): number {
+export function aga16DeltaC1(
+  periodS: number,
+  eventType: Aga16EventType,
+  branch: Aga16DeltaC1Branch = 'central',
+): number {
   if (eventType === 'intraslab') return AGA16_DELTA_C1_INTRASLAB;
   const anchors = AGA16_DELTA_C1_INTERFACE[branch];
   const [firstT, firstValue] = anchors[0] as readonly [number, number];
@@ -119,7 +146,13 @@ export interface Aga16RuptureTerms {
   readonly finiteFaultKm: number;
 }
 
-export function aga16RuptureTerms(row: Aga16Row, eventType: Aga16EventType, magnitude: number, hypoDepthKm: number, branch: Aga16DeltaC1Branch): Aga16RuptureTerms {
+export function aga16RuptureTerms(
+  row: Aga16Row,
+  eventType: Aga16EventType,
+  magnitude: number,
+  hypoDepthKm: number,
+  branch: Aga16DeltaC1Branch,
+): Aga16RuptureTerms {
   const slab = eventType === 'intraslab' ? 1 : 0;
   const deltaC1 = aga16DeltaC1(row.periodS, eventType, branch);
   const magnitudeBreak = K.c1 + deltaC1;
@@ -134,16 +167,36 @@ export function aga16RuptureTerms(row: Aga16Row, eventType: Aga16EventType, magn
 }
 
 /** ln(R + C4 exp(θ9 (M − 6))), the spreading logarithm of a pair (R in km); the same for every row. */
-export const aga16SpreadingLog = (terms: Aga16RuptureTerms, distanceKm: number): number => Math.log(distanceKm + terms.finiteFaultKm);
+export const aga16SpreadingLog = (terms: Aga16RuptureTerms, distanceKm: number): number =>
+  Math.log(distanceKm + terms.finiteFaultKm);
 
 /** ln median (ln g) of a row at Vs30 = Vlin (no site term) for one pair, given its spreading logarithm. */
-export const aga16LnMedianAtVlinFor = (row: Aga16Row, terms: Aga16RuptureTerms, spreadingLog: number, distanceKm: number): number =>
-  terms.constant + terms.spreadingSlope * spreadingLog + row.theta6 * distanceKm;
+export const aga16LnMedianAtVlinFor = (
+  row: Aga16Row,
+  terms: Aga16RuptureTerms,
+  spreadingLog: number,
+  distanceKm: number,
+): number => terms.constant + terms.spreadingSlope * spreadingLog + row.theta6 * distanceKm;
 
 /** ln median (ln g) of one row without the site term: the prediction on a site whose Vs30 equals the row's Vlin. */
-export function aga16LnMedianAtVlin(row: Aga16Row, scenario: Aga16Scenario, branch: Aga16DeltaC1Branch = 'central'): number {
-  const terms = aga16RuptureTerms(row, scenario.eventType, scenario.magnitude, scenario.hypoDepthKm, branch);
-  return aga16LnMedianAtVlinFor(row, terms, aga16SpreadingLog(terms, scenario.distanceKm), scenario.distanceKm);
+export function aga16LnMedianAtVlin(
+  row: Aga16Row,
+  scenario: Aga16Scenario,
+  branch: Aga16DeltaC1Branch = 'central',
+): number {
+  const terms = aga16RuptureTerms(
+    row,
+    scenario.eventType,
+    scenario.magnitude,
+    scenario.hypoDepthKm,
+    branch,
+  );
+  return aga16LnMedianAtVlinFor(
+    row,
+    terms,
+    aga16SpreadingLog(terms, scenario.distanceKm),
+    scenario.distanceKm,
+  );
 }
 
 /** What one row's site term needs of the site alone (Vs30 in m/s). */
@@ -160,7 +213,12 @@ export interface Aga16SiteTerms {
 
 export function aga16SiteTerms(row: Aga16Row, vs30: number): Aga16SiteTerms {
   const lnRatio = Math.log(Math.min(vs30, K.vs30CapMS) / row.vlin);
-  return { linear: vs30 >= row.vlin, linearTerm: (row.theta12 + row.b * K.n) * lnRatio, lnRatioTerm: row.theta12 * lnRatio, cScaled: K.c * Math.exp(K.n * lnRatio) };
+  return {
+    linear: vs30 >= row.vlin,
+    linearTerm: (row.theta12 + row.b * K.n) * lnRatio,
+    lnRatioTerm: row.theta12 * lnRatio,
+    cScaled: K.c * Math.exp(K.n * lnRatio),
+  };
 }
 
 /**
@@ -169,45 +227,80 @@ export function aga16SiteTerms(row: Aga16Row, vs30: number): Aga16SiteTerms {
  * logarithms taken as one of their ratio.
  */
 export const aga16SiteTermFor = (row: Aga16Row, site: Aga16SiteTerms, pga1000G: number): number =>
-  site.linear ? site.linearTerm : site.lnRatioTerm + row.b * Math.log((pga1000G + site.cScaled) / (pga1000G + K.c));
+  site.linear
+    ? site.linearTerm
+    : site.lnRatioTerm + row.b * Math.log((pga1000G + site.cScaled) / (pga1000G + K.c));
 
 /** f_site (ln units) of one row for Vs30 in m/s and the rock PGA (g) at Vs30 = 1000 m/s. Zero at Vs30 = Vlin. */
-export const aga16SiteTerm = (row: Aga16Row, vs30: number, pga1000G: number): number => aga16SiteTermFor(row, aga16SiteTerms(row, vs30), pga1000G);
+export const aga16SiteTerm = (row: Aga16Row, vs30: number, pga1000G: number): number =>
+  aga16SiteTermFor(row, aga16SiteTerms(row, vs30), pga1000G);
 
 /** Site term of the PGA row on the reference rock (Vs30 = 1000 m/s, linear there): PGA1000 = exp(ln median at Vlin + this). */
 const ROCK_SITE_TERM = aga16SiteTerm(AGA16_PGA, K.vs30CapMS, 0);
 
 /** PGA1000 (g) of a pair from the PGA row's rupture terms and spreading logarithm. */
-export const aga16Pga1000For = (pgaTerms: Aga16RuptureTerms, spreadingLog: number, distanceKm: number): number =>
+export const aga16Pga1000For = (
+  pgaTerms: Aga16RuptureTerms,
+  spreadingLog: number,
+  distanceKm: number,
+): number =>
   Math.exp(aga16LnMedianAtVlinFor(AGA16_PGA, pgaTerms, spreadingLog, distanceKm) + ROCK_SITE_TERM);
 
 const SA_PERIODS_S: readonly number[] = Object.freeze(AGA16_SA.map((r) => r.periodS));
 
-function requireNumber(path: string, value: number, expected: string, ok: (v: number) => boolean): void {
+function requireNumber(
+  path: string,
+  value: number,
+  expected: string,
+  ok: (v: number) => boolean,
+): void {
   if (!Number.isFinite(value) || !ok(value)) {
-    throw new InvalidInput([{ path, message: `expected ${expected}, got ${value}` }], `${NAME} input`);
+    throw new InvalidInput(
+      [{ path, message: `expected ${expected}, got ${value}` }],
+      `${NAME} input`,
+    );
   }
 }
 
-const eventTypeOf = (rupture: RuptureContext): Aga16EventType => (rupture.setting === 'intraslab' ? 'intraslab' : 'interface');
+const eventTypeOf = (rupture: RuptureContext): Aga16EventType =>
+  rupture.setting === 'intraslab' ? 'intraslab' : 'interface';
 
 /** Checks the rupture's own inputs; returns whether they are inside the model's validity. */
 function checkRupture(rupture: RuptureContext): boolean {
   const eventType = eventTypeOf(rupture);
   requireNumber('magnitude', rupture.magnitude, 'a finite moment magnitude', () => true);
-  if (eventType === 'intraslab') requireNumber('hypoDepthKm', rupture.hypoDepthKm, 'a finite hypocentral depth of at least 0 km', (v) => v >= 0);
+  if (eventType === 'intraslab')
+    requireNumber(
+      'hypoDepthKm',
+      rupture.hypoDepthKm,
+      'a finite hypocentral depth of at least 0 km',
+      (v) => v >= 0,
+    );
   const range = eventType === 'intraslab' ? AGA16_INTRASLAB_VALIDITY : AGA16_INTERFACE_VALIDITY;
-  const depthInside = range.depthKm === undefined || insideRange(rupture.hypoDepthKm, range.depthKm);
-  return rupture.setting !== 'crustal' && insideRange(rupture.magnitude, range.magnitude) && depthInside;
+  const depthInside =
+    range.depthKm === undefined || insideRange(rupture.hypoDepthKm, range.depthKm);
+  return (
+    rupture.setting !== 'crustal' && insideRange(rupture.magnitude, range.magnitude) && depthInside
+  );
 }
 
-const requireVs30 = (vs30: number): void => requireNumber('vs30', vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
+const requireVs30 = (vs30: number): void =>
+  requireNumber('vs30', vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
 
 function refusePgv(measure: Measure): void {
-  if (measure.kind === 'PGV') throw new UnsupportedMeasure('PGV', `${NAME} (Abrahamson, Gregor & Addo 2016) has no PGV equation; it predicts PGA and SA from 0.02 to 10 s`);
+  if (measure.kind === 'PGV')
+    throw new UnsupportedMeasure(
+      'PGV',
+      `${NAME} (Abrahamson, Gregor & Addo 2016) has no PGV equation; it predicts PGA and SA from 0.02 to 10 s`,
+    );
 }
 
-function predictAga16(input: GmmInput, measure: Measure, branch: Aga16DeltaC1Branch, name: string): GmmPrediction {
+function predictAga16(
+  input: GmmInput,
+  measure: Measure,
+  branch: Aga16DeltaC1Branch,
+  name: string,
+): GmmPrediction {
   refusePgv(measure);
   checkRupture(input);
   const eventType = eventTypeOf(input);
@@ -217,13 +310,19 @@ function predictAga16(input: GmmInput, measure: Measure, branch: Aga16DeltaC1Bra
   requireVs30(input.vs30);
   const range = eventType === 'intraslab' ? AGA16_INTRASLAB_VALIDITY : AGA16_INTERFACE_VALIDITY;
   const notes = validityNotes(name, range, input, distanceKm);
-  if (input.setting === 'crustal') notes.unshift(`${name}: it is a model for subduction interface and intraslab earthquakes, not crustal ones; answered as an interface event`);
-  const termsOf = (row: Aga16Row): Aga16RuptureTerms => aga16RuptureTerms(row, eventType, input.magnitude, input.hypoDepthKm, branch);
+  if (input.setting === 'crustal')
+    notes.unshift(
+      `${name}: it is a model for subduction interface and intraslab earthquakes, not crustal ones; answered as an interface event`,
+    );
+  const termsOf = (row: Aga16Row): Aga16RuptureTerms =>
+    aga16RuptureTerms(row, eventType, input.magnitude, input.hypoDepthKm, branch);
   const pgaTerms = termsOf(AGA16_PGA);
   const spreadingLog = aga16SpreadingLog(pgaTerms, distanceKm);
   const pga1000G = aga16Pga1000For(pgaTerms, spreadingLog, distanceKm);
   const predictRow = (row: Aga16Row): GmmPrediction => ({
-    lnMedian: aga16LnMedianAtVlinFor(row, termsOf(row), spreadingLog, distanceKm) + aga16SiteTerm(row, input.vs30, pga1000G),
+    lnMedian:
+      aga16LnMedianAtVlinFor(row, termsOf(row), spreadingLog, distanceKm) +
+      aga16SiteTerm(row, input.vs30, pga1000G),
     sigma: AGA16_SIGMA,
     tau: K.tau,
     phi: K.phi,
@@ -231,7 +330,9 @@ function predictAga16(input: GmmInput, measure: Measure, branch: Aga16DeltaC1Bra
     notes,
   });
   if (measure.kind === 'PGA') return predictRow(AGA16_PGA);
-  return predictAtPeriod(name, SA_PERIODS_S, (measure as { periodS: number }).periodS, (i) => predictRow(AGA16_SA[i] as Aga16Row));
+  return predictAtPeriod(name, SA_PERIODS_S, (measure as { periodS: number }).periodS, (i) =>
+    predictRow(AGA16_SA[i] as Aga16Row),
+  );
 }
 
 /** One row's rupture terms for every prepared rupture. */
@@ -245,23 +346,47 @@ interface PreparedRow {
  * per rupture and row; per pair the distance, the spreading logarithm and PGA1000 once for
  * every measure, then each row's ln median and site term by the functions predict() uses.
  */
-function prepareAga16Measures(ruptures: readonly RuptureContext[], measures: readonly Measure[], branch: Aga16DeltaC1Branch, name: string): PreparedMotions {
+function prepareAga16Measures(
+  ruptures: readonly RuptureContext[],
+  measures: readonly Measure[],
+  branch: Aga16DeltaC1Branch,
+  name: string,
+): PreparedMotions {
   measures.forEach(refusePgv);
   const inside = Uint8Array.from(ruptures, (r) => (checkRupture(r) ? 1 : 0));
   const slab = Uint8Array.from(ruptures, (r) => (eventTypeOf(r) === 'intraslab' ? 1 : 0));
-  const termsOf = rowMemo((row: Aga16Row): PreparedRow => ({ row, terms: ruptures.map((r) => aga16RuptureTerms(row, eventTypeOf(r), r.magnitude, r.hypoDepthKm, branch)) }));
+  const termsOf = rowMemo((row: Aga16Row): PreparedRow => ({
+    row,
+    terms: ruptures.map((r) =>
+      aga16RuptureTerms(row, eventTypeOf(r), r.magnitude, r.hypoDepthKm, branch),
+    ),
+  }));
   const pga = termsOf(AGA16_PGA).terms;
-  const plans: RowPlan<PreparedRow>[] = measures.map((m) => (m.kind !== 'SA' ? singleRow(termsOf(AGA16_PGA)) : mapPlan(periodRows(name, SA_PERIODS_S, AGA16_SA, m.periodS), termsOf)));
+  const plans: RowPlan<PreparedRow>[] = measures.map((m) =>
+    m.kind !== 'SA'
+      ? singleRow(termsOf(AGA16_PGA))
+      : mapPlan(periodRows(name, SA_PERIODS_S, AGA16_SA, m.periodS), termsOf),
+  );
   const rows = plannedRows(plans).map((p) => p.row);
   const distances: DistanceName[] = [];
   if (slab.some((s) => s === 0)) distances.push('rrupKm');
   if (slab.some((s) => s === 1)) distances.push('rhypoKm');
-  const shared: { distanceKm: Float64Array; spreadingLog: Float64Array; pga1000G: Float64Array } = { distanceKm: new Float64Array(0), spreadingLog: new Float64Array(0), pga1000G: new Float64Array(0) };
+  const shared: { distanceKm: Float64Array; spreadingLog: Float64Array; pga1000G: Float64Array } = {
+    distanceKm: new Float64Array(0),
+    spreadingLog: new Float64Array(0),
+    pga1000G: new Float64Array(0),
+  };
   const scratch = createRowScratch();
   // Interface and intraslab predictions share their Vs30 and distance ranges.
   const [minKm, maxKm] = AGA16_INTERFACE_VALIDITY.distanceKm;
 
-  const evaluate = (prepared: PreparedRow, vs30: number, count: number, rupture: Int32Array, out: PairPredictions): void => {
+  const evaluate = (
+    prepared: PreparedRow,
+    vs30: number,
+    count: number,
+    rupture: Int32Array,
+    out: PairPredictions,
+  ): void => {
     const { row, terms } = prepared;
     const site = aga16SiteTerms(row, vs30);
     const siteInside = insideRange(vs30, AGA16_INTERFACE_VALIDITY.vs30) ? 1 : 0;
@@ -269,7 +394,9 @@ function prepareAga16Measures(ruptures: readonly RuptureContext[], measures: rea
     for (let k = 0; k < count; k++) {
       const r = rupture[k] as number;
       const d = distanceKm[k] as number;
-      out.lnMedian[k] = aga16LnMedianAtVlinFor(row, terms[r] as Aga16RuptureTerms, spreadingLog[k] as number, d) + aga16SiteTermFor(row, site, pga1000G[k] as number);
+      out.lnMedian[k] =
+        aga16LnMedianAtVlinFor(row, terms[r] as Aga16RuptureTerms, spreadingLog[k] as number, d) +
+        aga16SiteTermFor(row, site, pga1000G[k] as number);
       out.sigma[k] = AGA16_SIGMA;
       out.applicable[k] = (inside[r] as number) & siteInside & (d < minKm || d > maxKm ? 0 : 1);
     }
@@ -295,7 +422,11 @@ function prepareAga16Measures(ruptures: readonly RuptureContext[], measures: rea
         spreadingLog[k] = lnR;
         if (rock) pga1000G[k] = aga16Pga1000For(terms, lnR, d);
       }
-      plans.forEach((plan, i) => predictRows(plan, count, out[i] as PairPredictions, scratch, (p, into) => evaluate(p, site.vs30, count, rupture, into)));
+      plans.forEach((plan, i) =>
+        predictRows(plan, count, out[i] as PairPredictions, scratch, (p, into) =>
+          evaluate(p, site.vs30, count, rupture, into),
+        ),
+      );
     },
   };
 }
@@ -304,7 +435,8 @@ const CITATION =
   'Abrahamson, N., Gregor, N. & Addo, K. (2016). BC Hydro ground motion prediction equations for subduction earthquakes. Earthquake Spectra 32(1), 23–44.';
 
 /** The model's name for a ΔC1 branch: "AGA16" for the central branch, "AGA16-lower" and "AGA16-upper" for the others. */
-export const aga16Name = (branch: Aga16DeltaC1Branch): string => (branch === 'central' ? NAME : `${NAME}-${branch}`);
+export const aga16Name = (branch: Aga16DeltaC1Branch): string =>
+  branch === 'central' ? NAME : `${NAME}-${branch}`;
 
 /**
  * Abrahamson, Gregor & Addo (2016) with one ΔC1 branch, for subduction interface (Rrup) and
@@ -314,17 +446,29 @@ export function createAga16(branch: Aga16DeltaC1Branch): GroundMotionModel {
   const name = aga16Name(branch);
   return Object.freeze({
     name,
-    citation: branch === 'central' ? CITATION : `${CITATION} ${branch[0]!.toUpperCase()}${branch.slice(1)} ΔC1 branch (central ${branch === 'lower' ? '−' : '+'} 0.2 for interface events).`,
+    citation:
+      branch === 'central'
+        ? CITATION
+        : `${CITATION} ${branch[0]!.toUpperCase()}${branch.slice(1)} ΔC1 branch (central ${branch === 'lower' ? '−' : '+'} 0.2 for interface events).`,
     settings: Object.freeze(['interface', 'intraslab'] as const),
     // Rrup is the interface metric; intraslab predictions use Rhypo (see the top comment).
     distanceMetric: 'rrup',
     periodsS: SA_PERIODS_S,
     hasPga: true,
     hasPgv: false,
-    validity: Object.freeze({ magnitude: [5.0, 9.0], distanceKm: [0, 300], vs30: [150, 1000] } as const),
-    predict: (input: GmmInput, measure: Measure): GmmPrediction => predictAga16(input, measure, branch, name),
-    prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion => singleMeasure(prepareAga16Measures(ruptures, [measure], branch, name)),
-    prepareMeasures: (ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions => prepareAga16Measures(ruptures, measures, branch, name),
+    validity: Object.freeze({
+      magnitude: [5.0, 9.0],
+      distanceKm: [0, 300],
+      vs30: [150, 1000],
+    } as const),
+    predict: (input: GmmInput, measure: Measure): GmmPrediction =>
+      predictAga16(input, measure, branch, name),
+    prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion =>
+      singleMeasure(prepareAga16Measures(ruptures, [measure], branch, name)),
+    prepareMeasures: (
+      ruptures: readonly RuptureContext[],
+      measures: readonly Measure[],
+    ): PreparedMotions => prepareAga16Measures(ruptures, measures, branch, name),
   });
 }
 

@@ -57,11 +57,26 @@
  */
 import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
 import { toRadians } from '../units.ts';
-import { ASK14_CONSTANTS as K, ASK14_PGA, ASK14_PGV, ASK14_SA, type Ask14Row } from './ask14-coefficients.ts';
+import {
+  ASK14_CONSTANTS as K,
+  ASK14_PGA,
+  ASK14_PGV,
+  ASK14_SA,
+  type Ask14Row,
+} from './ask14-coefficients.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
 import { prepareSplit, prepareSplitMeasures, type SplitModel } from './split-prepare.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, PreparedMotions, RuptureContext, SiteContext, ValidityRange } from './types.ts';
+import type {
+  GmmInput,
+  GmmPrediction,
+  GroundMotionModel,
+  PreparedMotion,
+  PreparedMotions,
+  RuptureContext,
+  SiteContext,
+  ValidityRange,
+} from './types.ts';
 import { validityNotes } from './validity.ts';
 
 const NAME = 'ASK14';
@@ -121,7 +136,13 @@ export function ask14MagnitudeTerm(row: Ask14Row, m: number): number {
   if (m > row.M1) return row.a1 + row.a5 * (m - row.M1) + row.a8 * (8.5 - m) ** 2;
   if (m >= row.M2) return row.a1 + row.a4 * (m - row.M1) + row.a8 * (8.5 - m) ** 2;
   const dm = m - row.M2;
-  return row.a1 + row.a4 * (row.M2 - row.M1) + row.a8 * (8.5 - row.M2) ** 2 + row.a6 * dm + row.a7 * dm * dm;
+  return (
+    row.a1 +
+    row.a4 * (row.M2 - row.M1) +
+    row.a8 * (8.5 - row.M2) ** 2 +
+    row.a6 * dm +
+    row.a7 * dm * dm
+  );
 }
 
 /** F_RV f7 + F_N f8 (ln units): style of faulting, faded in between M 4 and 5. */
@@ -150,10 +171,14 @@ export function ask14RuptureTerms(row: Ask14Row, rupture: Ask14Rupture): Ask14Ru
   const m = rupture.magnitude;
   const c4mKm = m > 5 ? row.c4 : m > 3 ? row.c4 - (row.c4 - 1) * (5 - m) : 1;
   // Magnitude ramps of the aleatory model: φ between M 4 and 6, τ between M 5 and 7.
-  const ramp = (small: number, large: number, from: number): number => (m < from ? small : m > from + 2 ? large : small + ((large - small) * (m - from)) / 2);
+  const ramp = (small: number, large: number, from: number): number =>
+    m < from ? small : m > from + 2 ? large : small + ((large - small) * (m - from)) / 2;
   return {
     row,
-    sourceLn: ask14MagnitudeTerm(row, m) + ask14StyleTerm(row, m, rupture.mechanism) + ask14DepthTerm(row, rupture.ztorKm),
+    sourceLn:
+      ask14MagnitudeTerm(row, m) +
+      ask14StyleTerm(row, m, rupture.mechanism) +
+      ask14DepthTerm(row, rupture.ztorKm),
     spreading: row.a2 + row.a3 * (Math.max(m, row.M2) - row.M1),
     c4mKm,
     hangingWall: row.a13 * ask14HangingWallScale(m, rupture.dipDeg, rupture.ztorKm),
@@ -168,7 +193,11 @@ export function ask14RuptureTerms(row: Ask14Row, rupture: Ask14Rupture): Ask14Ru
 export function ask14HangingWallTaper(r1Km: number, rxKm: number, ry0Km: number): number {
   const r2Km = 3 * r1Km;
   const t3 =
-    rxKm < r1Km ? K.h1 + K.h2 * (rxKm / r1Km) + K.h3 * (rxKm / r1Km) ** 2 : rxKm < r2Km ? 1 - (rxKm - r1Km) / (r2Km - r1Km) : 0;
+    rxKm < r1Km
+      ? K.h1 + K.h2 * (rxKm / r1Km) + K.h3 * (rxKm / r1Km) ** 2
+      : rxKm < r2Km
+        ? 1 - (rxKm - r1Km) / (r2Km - r1Km)
+        : 0;
   // Off the ends of the rupture the term fades over 5 km beyond Ry1 = Rx tan 20°.
   const beyond = ry0Km - rxKm * Math.tan(toRadians(20));
   const t5 = beyond <= 0 ? 1 : beyond < 5 ? 1 - beyond / 5 : 0;
@@ -178,7 +207,10 @@ export function ask14HangingWallTaper(r1Km: number, rxKm: number, ry0Km: number)
 /** f1's distance part plus F_HW f4 (ln units): everything of the pair but the site. */
 export function ask14PathTerm(t: Ask14RuptureTerms, d: Ask14Distances): number {
   const rKm = Math.hypot(d.rrupKm, t.c4mKm);
-  const hangingWall = d.rxKm >= 0 && t.hangingWall !== 0 ? t.hangingWall * ask14HangingWallTaper(t.r1Km, d.rxKm, d.ry0Km) : 0;
+  const hangingWall =
+    d.rxKm >= 0 && t.hangingWall !== 0
+      ? t.hangingWall * ask14HangingWallTaper(t.r1Km, d.rxKm, d.ry0Km)
+      : 0;
   return t.spreading * Math.log(rKm) + t.row.a17 * d.rrupKm + hangingWall;
 }
 
@@ -193,7 +225,11 @@ export function ask14V1(periodS: number): number {
 export function ask14SiteTerm(row: Ask14Row, vs30: number, sa1180: number): number {
   const lnRatio = Math.log(Math.min(vs30, ask14V1(row.periodS)) / row.Vlin);
   if (vs30 >= row.Vlin) return (row.a10 + row.b * row.n) * lnRatio;
-  return row.a10 * lnRatio - row.b * Math.log(sa1180 + row.c) + row.b * Math.log(sa1180 + row.c * Math.exp(row.n * lnRatio));
+  return (
+    row.a10 * lnRatio -
+    row.b * Math.log(sa1180 + row.c) +
+    row.b * Math.log(sa1180 + row.c * Math.exp(row.n * lnRatio))
+  );
 }
 
 /** δ = ∂f5/∂ln Sa1180, the nonlinear site term's response to the rock motion (0 at and above Vlin). */
@@ -216,11 +252,16 @@ export function ask14BasinTerm(row: Ask14Row, vs30: number, z1Km: number | undef
 }
 
 /** Median (ln units) and standard deviations of one row for one rupture–site pair. */
-export function ask14PairPrediction(t: Ask14RuptureTerms, d: Ask14Distances, site: SiteContext): { lnMedian: number; tau: number; phi: number; sigma: number } {
+export function ask14PairPrediction(
+  t: Ask14RuptureTerms,
+  d: Ask14Distances,
+  site: SiteContext,
+): { lnMedian: number; tau: number; phi: number; sigma: number } {
   const { row } = t;
   const rockLn = t.sourceLn + ask14PathTerm(t, d);
   const sa1180 = Math.exp(rockLn + ask14SiteTerm(row, ASK14_ROCK_VS30, 0));
-  const lnMedian = rockLn + ask14SiteTerm(row, site.vs30, sa1180) + ask14BasinTerm(row, site.vs30, site.z1Km);
+  const lnMedian =
+    rockLn + ask14SiteTerm(row, site.vs30, sa1180) + ask14BasinTerm(row, site.vs30, site.z1Km);
   const slope = ask14SiteSlope(row, site.vs30, sa1180);
   const phiA = site.vs30Measured ? t.phiAMeasured : t.phiAEstimated;
   const phiB2 = phiA * phiA - K.phiAmp * K.phiAmp;
@@ -236,9 +277,17 @@ export const ASK14_VALIDITY: ValidityRange = Object.freeze({
   vs30: [180, 1000],
 } as const);
 
-function requireNumber(path: string, value: number, expected: string, ok: (v: number) => boolean): void {
+function requireNumber(
+  path: string,
+  value: number,
+  expected: string,
+  ok: (v: number) => boolean,
+): void {
   if (!Number.isFinite(value) || !ok(value)) {
-    throw new InvalidInput([{ path, message: `expected ${expected}, got ${value}` }], `${NAME} input`);
+    throw new InvalidInput(
+      [{ path, message: `expected ${expected}, got ${value}` }],
+      `${NAME} input`,
+    );
   }
 }
 
@@ -246,23 +295,53 @@ function ruptureOf(input: GmmInput): Ask14Rupture {
   requireNumber('magnitude', input.magnitude, 'a finite moment magnitude', () => true);
   requireNumber('rakeDeg', input.rakeDeg, 'a finite rake in degrees', () => true);
   requireNumber('dipDeg', input.dipDeg, 'a dip above 0° and at most 90°', (v) => v > 0 && v <= 90);
-  requireNumber('ztorKm', input.ztorKm, 'a finite depth to the top of rupture of at least 0 km', (v) => v >= 0);
-  requireNumber('widthKm', input.widthKm, 'a finite down-dip width of at least 0 km', (v) => v >= 0);
-  return { magnitude: input.magnitude, mechanism: ask14MechanismFromRake(input.rakeDeg), dipDeg: input.dipDeg, ztorKm: input.ztorKm, widthKm: input.widthKm };
+  requireNumber(
+    'ztorKm',
+    input.ztorKm,
+    'a finite depth to the top of rupture of at least 0 km',
+    (v) => v >= 0,
+  );
+  requireNumber(
+    'widthKm',
+    input.widthKm,
+    'a finite down-dip width of at least 0 km',
+    (v) => v >= 0,
+  );
+  return {
+    magnitude: input.magnitude,
+    mechanism: ask14MechanismFromRake(input.rakeDeg),
+    dipDeg: input.dipDeg,
+    ztorKm: input.ztorKm,
+    widthKm: input.widthKm,
+  };
 }
 
 function checkPair(input: GmmInput): void {
-  requireNumber('rrupKm', input.rrupKm, 'a finite rupture distance of at least 0 km', (v) => v >= 0);
-  requireNumber('rjbKm', input.rjbKm, 'a finite Joyner–Boore distance of at least 0 km', (v) => v >= 0);
+  requireNumber(
+    'rrupKm',
+    input.rrupKm,
+    'a finite rupture distance of at least 0 km',
+    (v) => v >= 0,
+  );
+  requireNumber(
+    'rjbKm',
+    input.rjbKm,
+    'a finite Joyner–Boore distance of at least 0 km',
+    (v) => v >= 0,
+  );
   requireNumber('rxKm', input.rxKm, 'a finite Rx in km', () => true);
   requireNumber('ry0Km', input.ry0Km, 'a finite Ry0 of at least 0 km', (v) => v >= 0);
   requireNumber('vs30', input.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
-  if (input.z1Km !== undefined) requireNumber('z1Km', input.z1Km, 'a finite Z1 of at least 0 km', (v) => v >= 0);
+  if (input.z1Km !== undefined)
+    requireNumber('z1Km', input.z1Km, 'a finite Z1 of at least 0 km', (v) => v >= 0);
 }
 
 function notesOf(input: GmmInput): string[] {
   const notes = validityNotes(NAME, ASK14_VALIDITY, input, input.rrupKm);
-  if (input.setting !== 'crustal') notes.unshift(`${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`);
+  if (input.setting !== 'crustal')
+    notes.unshift(
+      `${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`,
+    );
   return notes;
 }
 
@@ -275,15 +354,25 @@ export function predictAsk14(input: GmmInput, measure: Measure): GmmPrediction {
   checkPair(input);
   const notes = notesOf(input);
   const applicable = notes.length === 0;
-  const predictRow = (row: Ask14Row): GmmPrediction => ({ ...ask14PairPrediction(ask14RuptureTerms(row, rupture), input, input), applicable, notes });
+  const predictRow = (row: Ask14Row): GmmPrediction => ({
+    ...ask14PairPrediction(ask14RuptureTerms(row, rupture), input, input),
+    applicable,
+    notes,
+  });
   switch (measure.kind) {
     case 'PGA':
       return predictRow(ASK14_PGA);
     case 'PGV':
       return predictRow(ASK14_PGV);
     case 'SA':
-      if (!(measure.periodS > 0)) throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
-      return predictAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) => predictRow(ASK14_SA[i] as Ask14Row));
+      if (!(measure.periodS > 0))
+        throw new UnsupportedMeasure(
+          `SA(${measure.periodS})`,
+          'the period must be greater than 0 s',
+        );
+      return predictAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) =>
+        predictRow(ASK14_SA[i] as Ask14Row),
+      );
   }
 }
 
@@ -296,7 +385,8 @@ const SPLIT: SplitModel<Ask14Row, Ask14RuptureTerms> = {
   periodsS: SA_PERIODS_S,
   distances: ['rrupKm', 'rjbKm', 'rxKm', 'ry0Km'],
   checkMeasure(measure) {
-    if (measure.kind === 'SA' && !(measure.periodS > 0)) throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
+    if (measure.kind === 'SA' && !(measure.periodS > 0))
+      throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
   },
   checkRupture: (rupture) => void ruptureOf(rupture as GmmInput),
   ruptureTerms: (row, rupture) => ask14RuptureTerms(row, ruptureOf(rupture as GmmInput)),
@@ -316,6 +406,10 @@ export const ask14: GroundMotionModel = Object.freeze({
   hasPgv: true,
   validity: ASK14_VALIDITY,
   predict: (input: GmmInput, measure: Measure): GmmPrediction => predictAsk14(input, measure),
-  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion => prepareSplit(SPLIT, ruptures, measure),
-  prepareMeasures: (ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions => prepareSplitMeasures(SPLIT, ruptures, measures),
+  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion =>
+    prepareSplit(SPLIT, ruptures, measure),
+  prepareMeasures: (
+    ruptures: readonly RuptureContext[],
+    measures: readonly Measure[],
+  ): PreparedMotions => prepareSplitMeasures(SPLIT, ruptures, measures),
 });

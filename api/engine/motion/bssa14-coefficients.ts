@@ -29,9 +29,42 @@ import { coefficientRows, rowOfPeriod, type CoefficientRow } from './coefficient
 
 /** Column names of the table, in the supplement's order. */
 export const BSSA14_COLUMNS = [
-  'e0', 'e1', 'e2', 'e3', 'e4', 'e5', 'e6', 'mh', 'c1', 'c2', 'c3', 'mRef', 'rRefKm', 'h',
-  'deltaC3Global', 'deltaC3ChinaTurkey', 'deltaC3ItalyJapan', 'c', 'vc', 'vRef', 'f1', 'f3G', 'f4', 'f5', 'f6', 'f7',
-  'r1', 'r2', 'deltaPhiR', 'deltaPhiV', 'v1', 'v2', 'phi1', 'phi2', 'tau1', 'tau2',
+  'e0',
+  'e1',
+  'e2',
+  'e3',
+  'e4',
+  'e5',
+  'e6',
+  'mh',
+  'c1',
+  'c2',
+  'c3',
+  'mRef',
+  'rRefKm',
+  'h',
+  'deltaC3Global',
+  'deltaC3ChinaTurkey',
+  'deltaC3ItalyJapan',
+  'c',
+  'vc',
+  'vRef',
+  'f1',
+  'f3G',
+  'f4',
+  'f5',
+  'f6',
+  'f7',
+  'r1',
+  'r2',
+  'deltaPhiR',
+  'deltaPhiV',
+  'v1',
+  'v2',
+  'phi1',
+  'phi2',
+  'tau1',
+  'tau2',
 ] as const;
 
 /** One row of the table. `periodS` is 0 for PGA and −1 for PGV, as in the supplement. */
@@ -156,7 +189,9 @@ export const BSSA14_PGV: Bssa14Row = rowOfPeriod('BSSA14', BSSA14_ROWS, -1);
 export const BSSA14_PGA: Bssa14Row = rowOfPeriod('BSSA14', BSSA14_ROWS, 0);
 
 /** The spectral rows, periods in s, increasing. */
-export const BSSA14_SA: readonly Bssa14Row[] = Object.freeze(BSSA14_ROWS.filter((r) => r.periodS > 0));
+export const BSSA14_SA: readonly Bssa14Row[] = Object.freeze(
+  BSSA14_ROWS.filter((r) => r.periodS > 0),
+);
 
 /**
  * Period-independent coefficients, as repeated in every row of the table: Mref, Rref (km), Vref

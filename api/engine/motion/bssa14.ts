@@ -45,11 +45,40 @@
  */
 import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
 import { hypot2 } from './fast-math.ts';
-import { BSSA14_CONSTANTS as K, BSSA14_PGA, BSSA14_PGV, BSSA14_SA, type Bssa14Row } from './bssa14-coefficients.ts';
+import {
+  BSSA14_CONSTANTS as K,
+  BSSA14_PGA,
+  BSSA14_PGV,
+  BSSA14_SA,
+  type Bssa14Row,
+} from './bssa14-coefficients.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
-import { atLeast, createRowScratch, insideRange, mapPlan, periodRows, plannedRows, predictRows, rowMemo, singleMeasure, singleRow, type RowPlan } from './prepared-period.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel, PairDistances, PairPredictions, PreparedMotion, PreparedMotions, RuptureContext, SiteContext, ValidityRange } from './types.ts';
+import {
+  atLeast,
+  createRowScratch,
+  insideRange,
+  mapPlan,
+  periodRows,
+  plannedRows,
+  predictRows,
+  rowMemo,
+  singleMeasure,
+  singleRow,
+  type RowPlan,
+} from './prepared-period.ts';
+import type {
+  GmmInput,
+  GmmPrediction,
+  GroundMotionModel,
+  PairDistances,
+  PairPredictions,
+  PreparedMotion,
+  PreparedMotions,
+  RuptureContext,
+  SiteContext,
+  ValidityRange,
+} from './types.ts';
 import { validityNotes } from './validity.ts';
 
 const NAME = 'BSSA14';
@@ -79,7 +108,11 @@ export function bssa14MechanismConstant(row: Bssa14Row, mechanism: Bssa14Mechani
 }
 
 /** Source function F_E (ln units) of a row for moment magnitude M, given its mechanism constant. */
-export function bssa14SourceTerm(row: Bssa14Row, mechanismConstant: number, magnitude: number): number {
+export function bssa14SourceTerm(
+  row: Bssa14Row,
+  mechanismConstant: number,
+  magnitude: number,
+): number {
   const dm = magnitude - row.mh;
   return mechanismConstant + (dm <= 0 ? row.e4 * dm + row.e5 * dm * dm : row.e6 * dm);
 }
@@ -100,7 +133,11 @@ export interface Bssa14RuptureTerms {
   readonly phiOfMagnitude: number;
 }
 
-export function bssa14RuptureTerms(row: Bssa14Row, magnitude: number, mechanism: Bssa14Mechanism): Bssa14RuptureTerms {
+export function bssa14RuptureTerms(
+  row: Bssa14Row,
+  magnitude: number,
+  mechanism: Bssa14Mechanism,
+): Bssa14RuptureTerms {
   return {
     source: bssa14SourceTerm(row, bssa14MechanismConstant(row, mechanism), magnitude),
     slope: row.c1 + row.c2 * (magnitude - K.mRef),
@@ -123,10 +160,14 @@ export interface Bssa14SiteTerms {
 }
 
 export function bssa14SiteTerms(row: Bssa14Row, vs30: number): Bssa14SiteTerms {
-  const f2 = row.f4 * (Math.exp(row.f5 * (Math.min(vs30, K.vRef) - F2_VS30_ANCHOR)) - Math.exp(row.f5 * (K.vRef - F2_VS30_ANCHOR)));
+  const f2 =
+    row.f4 *
+    (Math.exp(row.f5 * (Math.min(vs30, K.vRef) - F2_VS30_ANCHOR)) -
+      Math.exp(row.f5 * (K.vRef - F2_VS30_ANCHOR)));
   let phiReduction = 0;
   if (vs30 <= K.v1) phiReduction = row.deltaPhiV;
-  else if (vs30 < K.v2) phiReduction = (row.deltaPhiV * Math.log(K.v2 / vs30)) / Math.log(K.v2 / K.v1);
+  else if (vs30 < K.v2)
+    phiReduction = (row.deltaPhiV * Math.log(K.v2 / vs30)) / Math.log(K.v2 / K.v1);
   return { linear: row.c * Math.log(Math.min(vs30, row.vc) / K.vRef), f2, phiReduction };
 }
 
@@ -146,15 +187,30 @@ export function bssa14RockFactor(pgaTerms: Bssa14RuptureTerms, rjbKm: number): n
 }
 
 /** ln median (ln g; ln cm/s for PGV) of a row for one pair; `rockFactor` from bssa14RockFactor (any value where f2 is 0). */
-export function bssa14LnMedian(row: Bssa14Row, rupture: Bssa14RuptureTerms, site: Bssa14SiteTerms, rjbKm: number, rockFactor: number): number {
+export function bssa14LnMedian(
+  row: Bssa14Row,
+  rupture: Bssa14RuptureTerms,
+  site: Bssa14SiteTerms,
+  rjbKm: number,
+  rockFactor: number,
+): number {
   const nonlinear = site.f2 === 0 ? K.f1 : K.f1 + site.f2 * rockFactor;
   return rupture.source + bssa14PathTerm(row, rupture.slope, rjbKm) + site.linear + nonlinear;
 }
 
 /** φ(M, Rjb, Vs30) (ln units) of a row for one pair: the magnitude ramp, grown from R1 to R2, reduced on soft sites. */
-export function bssa14Phi(row: Bssa14Row, rupture: Bssa14RuptureTerms, site: Bssa14SiteTerms, rjbKm: number): number {
+export function bssa14Phi(
+  row: Bssa14Row,
+  rupture: Bssa14RuptureTerms,
+  site: Bssa14SiteTerms,
+  rjbKm: number,
+): number {
   let phi = rupture.phiOfMagnitude;
-  if (rjbKm > row.r1) phi += rjbKm >= row.r2 ? row.deltaPhiR : (row.deltaPhiR * Math.log(rjbKm / row.r1)) / Math.log(row.r2 / row.r1);
+  if (rjbKm > row.r1)
+    phi +=
+      rjbKm >= row.r2
+        ? row.deltaPhiR
+        : (row.deltaPhiR * Math.log(rjbKm / row.r1)) / Math.log(row.r2 / row.r1);
   return phi - site.phiReduction;
 }
 
@@ -166,11 +222,22 @@ export const BSSA14_VALIDITY: ValidityRange = Object.freeze({
 } as const);
 
 /** Validity for normal-faulting events: the paper stops at M 7 for them. */
-export const BSSA14_NORMAL_VALIDITY: ValidityRange = Object.freeze({ ...BSSA14_VALIDITY, magnitude: [3, 7] } as const);
+export const BSSA14_NORMAL_VALIDITY: ValidityRange = Object.freeze({
+  ...BSSA14_VALIDITY,
+  magnitude: [3, 7],
+} as const);
 
-function requireNumber(path: string, value: number, expected: string, ok: (v: number) => boolean): void {
+function requireNumber(
+  path: string,
+  value: number,
+  expected: string,
+  ok: (v: number) => boolean,
+): void {
   if (!Number.isFinite(value) || !ok(value)) {
-    throw new InvalidInput([{ path, message: `expected ${expected}, got ${value}` }], `${NAME} input`);
+    throw new InvalidInput(
+      [{ path, message: `expected ${expected}, got ${value}` }],
+      `${NAME} input`,
+    );
   }
 }
 
@@ -188,34 +255,58 @@ function mechanismOf(rupture: RuptureContext, options: Bssa14Options): Bssa14Mec
   return bssa14MechanismFromRake(rupture.rakeDeg);
 }
 
-const requireVs30 = (vs30: number): void => requireNumber('vs30', vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
+const requireVs30 = (vs30: number): void =>
+  requireNumber('vs30', vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
 
 const SA_PERIODS_S: readonly number[] = Object.freeze(BSSA14_SA.map((r) => r.periodS));
 
 function checkPeriod(measure: Measure): void {
-  if (measure.kind === 'SA' && !(measure.periodS > 0)) throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
+  if (measure.kind === 'SA' && !(measure.periodS > 0))
+    throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
 }
 
 /**
  * BSSA14 median and standard deviations for one measure (PGA and PSA in g, PGV in cm/s; all
  * in ln units). Uses magnitude, rakeDeg, rjbKm, vs30 and setting of the input.
  */
-export function predictBssa14(input: GmmInput, measure: Measure, options: Bssa14Options = {}): GmmPrediction {
+export function predictBssa14(
+  input: GmmInput,
+  measure: Measure,
+  options: Bssa14Options = {},
+): GmmPrediction {
   const mechanism = mechanismOf(input, options);
-  requireNumber('rjbKm', input.rjbKm, 'a finite Joyner–Boore distance of at least 0 km', (v) => v >= 0);
+  requireNumber(
+    'rjbKm',
+    input.rjbKm,
+    'a finite Joyner–Boore distance of at least 0 km',
+    (v) => v >= 0,
+  );
   requireVs30(input.vs30);
   checkPeriod(measure);
   const range = mechanism === 'normal' ? BSSA14_NORMAL_VALIDITY : BSSA14_VALIDITY;
   const notes = validityNotes(NAME, range, input, input.rjbKm);
-  if (input.setting !== 'crustal') notes.unshift(`${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`);
-  const rockFactor = bssa14RockFactor(bssa14RuptureTerms(BSSA14_PGA, input.magnitude, mechanism), input.rjbKm);
+  if (input.setting !== 'crustal')
+    notes.unshift(
+      `${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`,
+    );
+  const rockFactor = bssa14RockFactor(
+    bssa14RuptureTerms(BSSA14_PGA, input.magnitude, mechanism),
+    input.rjbKm,
+  );
 
   const predictRow = (row: Bssa14Row): GmmPrediction => {
     const rupture = bssa14RuptureTerms(row, input.magnitude, mechanism);
     const site = bssa14SiteTerms(row, input.vs30);
     const phi = bssa14Phi(row, rupture, site, input.rjbKm);
     const lnMedian = bssa14LnMedian(row, rupture, site, input.rjbKm, rockFactor);
-    return { lnMedian, tau: rupture.tau, phi, sigma: hypot2(rupture.tau, phi), applicable: notes.length === 0, notes };
+    return {
+      lnMedian,
+      tau: rupture.tau,
+      phi,
+      sigma: hypot2(rupture.tau, phi),
+      applicable: notes.length === 0,
+      notes,
+    };
   };
   switch (measure.kind) {
     case 'PGA':
@@ -223,7 +314,9 @@ export function predictBssa14(input: GmmInput, measure: Measure, options: Bssa14
     case 'PGV':
       return predictRow(BSSA14_PGV);
     case 'SA':
-      return predictAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) => predictRow(BSSA14_SA[i] as Bssa14Row));
+      return predictAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) =>
+        predictRow(BSSA14_SA[i] as Bssa14Row),
+      );
   }
 }
 
@@ -238,14 +331,23 @@ interface PreparedRow {
  * once per rupture and row, the site terms once per site and row, the rock factor once per pair
  * for every measure, then bssa14LnMedian and bssa14Phi per pair, as predictBssa14 does.
  */
-export function prepareBssa14Measures(ruptures: readonly RuptureContext[], measures: readonly Measure[], options: Bssa14Options = {}): PreparedMotions {
+export function prepareBssa14Measures(
+  ruptures: readonly RuptureContext[],
+  measures: readonly Measure[],
+  options: Bssa14Options = {},
+): PreparedMotions {
   measures.forEach(checkPeriod);
   const mechanisms = ruptures.map((r) => mechanismOf(r, options));
   const inside = Uint8Array.from(ruptures, (r, i) => {
     const range = mechanisms[i] === 'normal' ? BSSA14_NORMAL_VALIDITY : BSSA14_VALIDITY;
     return r.setting === 'crustal' && insideRange(r.magnitude, range.magnitude) ? 1 : 0;
   });
-  const termsOf = rowMemo((row: Bssa14Row): PreparedRow => ({ row, terms: ruptures.map((r, i) => bssa14RuptureTerms(row, r.magnitude, mechanisms[i] as Bssa14Mechanism)) }));
+  const termsOf = rowMemo((row: Bssa14Row): PreparedRow => ({
+    row,
+    terms: ruptures.map((r, i) =>
+      bssa14RuptureTerms(row, r.magnitude, mechanisms[i] as Bssa14Mechanism),
+    ),
+  }));
   const plans: RowPlan<PreparedRow>[] = measures.map((m) => {
     if (m.kind !== 'SA') return singleRow(termsOf(m.kind === 'PGA' ? BSSA14_PGA : BSSA14_PGV));
     return mapPlan(periodRows(NAME, SA_PERIODS_S, BSSA14_SA, m.periodS), termsOf);
@@ -256,7 +358,13 @@ export function prepareBssa14Measures(ruptures: readonly RuptureContext[], measu
   const scratch = createRowScratch();
   const [minKm, maxKm] = BSSA14_VALIDITY.distanceKm;
 
-  const evaluate = (prepared: PreparedRow, vs30: number, pairs: PairDistances, rock: Float64Array, out: PairPredictions): void => {
+  const evaluate = (
+    prepared: PreparedRow,
+    vs30: number,
+    pairs: PairDistances,
+    rock: Float64Array,
+    out: PairPredictions,
+  ): void => {
     const { row, terms } = prepared;
     const site = bssa14SiteTerms(row, vs30);
     const siteInside = insideRange(vs30, BSSA14_VALIDITY.vs30) ? 1 : 0;
@@ -281,15 +389,27 @@ export function prepareBssa14Measures(ruptures: readonly RuptureContext[], measu
       // PGAr is needed only where some row's f2 is not 0 (Vs30 below 760 m/s).
       if (rows.some((row) => bssa14SiteTerms(row, site.vs30).f2 !== 0)) {
         pgaTerms ??= termsOf(BSSA14_PGA).terms;
-        for (let k = 0; k < count; k++) rockFactor[k] = bssa14RockFactor(pgaTerms[rupture[k] as number] as Bssa14RuptureTerms, rjbKm[k] as number);
+        for (let k = 0; k < count; k++)
+          rockFactor[k] = bssa14RockFactor(
+            pgaTerms[rupture[k] as number] as Bssa14RuptureTerms,
+            rjbKm[k] as number,
+          );
       }
-      plans.forEach((plan, i) => predictRows(plan, count, out[i] as PairPredictions, scratch, (p, into) => evaluate(p, site.vs30, pairs, rockFactor, into)));
+      plans.forEach((plan, i) =>
+        predictRows(plan, count, out[i] as PairPredictions, scratch, (p, into) =>
+          evaluate(p, site.vs30, pairs, rockFactor, into),
+        ),
+      );
     },
   };
 }
 
 /** BSSA14 prepared for one measure (the model's prepare hook). */
-export function prepareBssa14(ruptures: readonly RuptureContext[], measure: Measure, options: Bssa14Options = {}): PreparedMotion {
+export function prepareBssa14(
+  ruptures: readonly RuptureContext[],
+  measure: Measure,
+  options: Bssa14Options = {},
+): PreparedMotion {
   return singleMeasure(prepareBssa14Measures(ruptures, [measure], options));
 }
 
@@ -305,6 +425,10 @@ export const bssa14: GroundMotionModel = Object.freeze({
   hasPgv: true,
   validity: BSSA14_VALIDITY,
   predict: (input: GmmInput, measure: Measure): GmmPrediction => predictBssa14(input, measure),
-  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion => prepareBssa14(ruptures, measure),
-  prepareMeasures: (ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions => prepareBssa14Measures(ruptures, measures),
+  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion =>
+    prepareBssa14(ruptures, measure),
+  prepareMeasures: (
+    ruptures: readonly RuptureContext[],
+    measures: readonly Measure[],
+  ): PreparedMotions => prepareBssa14Measures(ruptures, measures),
 });

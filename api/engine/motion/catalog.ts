@@ -39,14 +39,20 @@ export function createModelCatalog(
 export function measureSupport(model: GroundMotionModel, measure: Measure): string | undefined {
   const first = model.periodsS[0];
   const last = model.periodsS[model.periodsS.length - 1];
-  const inTable = (t: number) => first !== undefined && last !== undefined && t >= first * (1 - 1e-6) && t <= last * (1 + 1e-6);
+  const inTable = (t: number) =>
+    first !== undefined && last !== undefined && t >= first * (1 - 1e-6) && t <= last * (1 + 1e-6);
   switch (measure.kind) {
     case 'PGA':
       return model.hasPga ? undefined : `${model.name} has no PGA`;
     case 'PGV':
-      return model.hasPgv || canDerivePgv(model) ? undefined : `${model.name} has no PGV and no SA(${PGV_FROM_SA_PERIOD_S}) to derive it from`;
+      return model.hasPgv || canDerivePgv(model)
+        ? undefined
+        : `${model.name} has no PGV and no SA(${PGV_FROM_SA_PERIOD_S}) to derive it from`;
     case 'SA':
-      if (first === undefined || last === undefined) return `${model.name} has no spectral accelerations`;
-      return inTable(measure.periodS) ? undefined : `${model.name} covers SA periods ${first} to ${last} s; got ${measure.periodS} s`;
+      if (first === undefined || last === undefined)
+        return `${model.name} has no spectral accelerations`;
+      return inTable(measure.periodS)
+        ? undefined
+        : `${model.name} covers SA periods ${first} to ${last} s; got ${measure.periodS} s`;
   }
 }

@@ -73,4 +73,9 @@ export const CB14_PGA: Cb14Row = rowOfPeriod('CB14', CB14_ROWS, 0);
 export const CB14_SA: readonly Cb14Row[] = Object.freeze(CB14_ROWS.filter((r) => r.periodS > 0));
 
 /** Period-independent constants (cb14-constants.csv): c, n of the nonlinear site term; h4 = 1 in every row; Δc20 = 0 for California and global use. */
-export const CB14_CONSTANTS = Object.freeze({ c: 1.88, n: 1.18, h4: CB14_PGA.h4, deltaC20: CB14_PGA.deltaC20CA });
+export const CB14_CONSTANTS = Object.freeze({
+  c: 1.88,
+  n: 1.18,
+  h4: CB14_PGA.h4,
+  deltaC20: CB14_PGA.deltaC20CA,
+});

@@ -51,11 +51,25 @@
  */
 import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
 import { toRadians } from '../units.ts';
-import { CB14_CONSTANTS as K, CB14_PGA, CB14_PGV, CB14_SA, type Cb14Row } from './cb14-coefficients.ts';
+import {
+  CB14_CONSTANTS as K,
+  CB14_PGA,
+  CB14_PGV,
+  CB14_SA,
+  type Cb14Row,
+} from './cb14-coefficients.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
 import { prepareSplit, prepareSplitMeasures, type SplitModel } from './split-prepare.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, PreparedMotions, RuptureContext, ValidityRange } from './types.ts';
+import type {
+  GmmInput,
+  GmmPrediction,
+  GroundMotionModel,
+  PreparedMotion,
+  PreparedMotions,
+  RuptureContext,
+  ValidityRange,
+} from './types.ts';
 import { validityNotes } from './validity.ts';
 
 const NAME = 'CB14';
@@ -109,7 +123,12 @@ export function cb14StyleTerm(row: Cb14Row, m: number, mechanism: Cb14Mechanism)
  * from R1, evaluated as published also where R2 < R1 (small events on wide ruptures), where x is
  * negative. At R2 = R1 exactly the quadratic's limit beyond R1 is 0 (h6 < 0 in every row).
  */
-export function cb14HangingWallRxTaper(row: Cb14Row, rxKm: number, r1Km: number, r2Km: number): number {
+export function cb14HangingWallRxTaper(
+  row: Cb14Row,
+  rxKm: number,
+  r1Km: number,
+  r2Km: number,
+): number {
   if (rxKm < r1Km) {
     const x = rxKm / r1Km;
     return row.h1 + row.h2 * x + row.h3 * x * x;
@@ -122,10 +141,18 @@ export function cb14HangingWallRxTaper(row: Cb14Row, rxKm: number, r1Km: number,
 /** f_hng (ln units): the hanging-wall term; zero on the footwall (Rx < 0) and for vertical faults. */
 export function cb14HangingWallTerm(row: Cb14Row, s: Cb14Scenario): number {
   if (s.rxKm < 0 || s.magnitude <= 5.5 || s.ztorKm > 16.66) return 0;
-  const fRx = cb14HangingWallRxTaper(row, s.rxKm, s.widthKm * Math.cos(toRadians(s.dipDeg)), 62 * s.magnitude - 350);
+  const fRx = cb14HangingWallRxTaper(
+    row,
+    s.rxKm,
+    s.widthKm * Math.cos(toRadians(s.dipDeg)),
+    62 * s.magnitude - 350,
+  );
   // Rjb ≤ Rrup by definition; the clamp keeps rounding in the distance code from making this negative.
   const fRrup = s.rrupKm === 0 ? 1 : Math.max(s.rrupKm - s.rjbKm, 0) / s.rrupKm;
-  const fM = s.magnitude <= 6.5 ? (s.magnitude - 5.5) * (1 + row.a2 * (s.magnitude - 6.5)) : 1 + row.a2 * (s.magnitude - 6.5);
+  const fM =
+    s.magnitude <= 6.5
+      ? (s.magnitude - 5.5) * (1 + row.a2 * (s.magnitude - 6.5))
+      : 1 + row.a2 * (s.magnitude - 6.5);
   const fZ = 1 - 0.06 * s.ztorKm;
   const fDip = (90 - s.dipDeg) / 45;
   return row.c10 * fRx * fRrup * fM * fZ * fDip;
@@ -135,7 +162,10 @@ export function cb14HangingWallTerm(row: Cb14Row, s: Cb14Scenario): number {
 export function cb14SiteTerm(row: Cb14Row, vs30: number, a1100G: number): number {
   const lnRatio = Math.log(vs30 / row.k1);
   if (vs30 > row.k1) return (row.c11 + row.k2 * K.n) * lnRatio;
-  return row.c11 * lnRatio + row.k2 * (Math.log(a1100G + K.c * Math.exp(K.n * lnRatio)) - Math.log(a1100G + K.c));
+  return (
+    row.c11 * lnRatio +
+    row.k2 * (Math.log(a1100G + K.c * Math.exp(K.n * lnRatio)) - Math.log(a1100G + K.c))
+  );
 }
 
 /** The paper's California default depth to Vs = 2.5 km/s (km) for Vs30 in m/s. */
@@ -170,17 +200,45 @@ export function cb14AnelasticTerm(row: Cb14Row, rrupKm: number): number {
 }
 
 /** The terms of one row that depend on the rupture alone: f_mag + f_flt + f_hyp + f_dip (ln units). */
-export function cb14SourceTerm(row: Cb14Row, s: Omit<Cb14Scenario, 'rrupKm' | 'rjbKm' | 'rxKm'>): number {
-  return cb14MagnitudeTerm(row, s.magnitude) + cb14StyleTerm(row, s.magnitude, s.mechanism) + cb14HypocentreTerm(row, s.magnitude, s.hypoDepthKm) + cb14DipTerm(row, s.magnitude, s.dipDeg);
+export function cb14SourceTerm(
+  row: Cb14Row,
+  s: Omit<Cb14Scenario, 'rrupKm' | 'rjbKm' | 'rxKm'>,
+): number {
+  return (
+    cb14MagnitudeTerm(row, s.magnitude) +
+    cb14StyleTerm(row, s.magnitude, s.mechanism) +
+    cb14HypocentreTerm(row, s.magnitude, s.hypoDepthKm) +
+    cb14DipTerm(row, s.magnitude, s.dipDeg)
+  );
 }
 
 /** ln median of one row for one pair before the short-period PGA floor, from its source term (cb14SourceTerm). */
-export function cb14LnMedianFromSource(row: Cb14Row, source: number, s: Cb14Scenario, vs30: number, z2p5Km: number, a1100G: number): number {
-  return source + cb14DistanceTerm(row, s.magnitude, s.rrupKm) + cb14HangingWallTerm(row, s) + cb14SiteTerm(row, vs30, a1100G) + cb14BasinTerm(row, z2p5Km) + cb14AnelasticTerm(row, s.rrupKm);
+export function cb14LnMedianFromSource(
+  row: Cb14Row,
+  source: number,
+  s: Cb14Scenario,
+  vs30: number,
+  z2p5Km: number,
+  a1100G: number,
+): number {
+  return (
+    source +
+    cb14DistanceTerm(row, s.magnitude, s.rrupKm) +
+    cb14HangingWallTerm(row, s) +
+    cb14SiteTerm(row, vs30, a1100G) +
+    cb14BasinTerm(row, z2p5Km) +
+    cb14AnelasticTerm(row, s.rrupKm)
+  );
 }
 
 /** ln median of one row before the short-period PGA floor (ln g; ln cm/s for PGV). */
-export function cb14LnMedianUnfloored(row: Cb14Row, s: Cb14Scenario, vs30: number, z2p5Km: number, a1100G: number): number {
+export function cb14LnMedianUnfloored(
+  row: Cb14Row,
+  s: Cb14Scenario,
+  vs30: number,
+  z2p5Km: number,
+  a1100G: number,
+): number {
   return cb14LnMedianFromSource(row, cb14SourceTerm(row, s), s, vs30, z2p5Km, a1100G);
 }
 
@@ -202,32 +260,49 @@ export function cb14A1100G(s: Cb14Scenario): number {
 }
 
 /** τ, φ and σ (ln units) of a row, with the nonlinear-site correction for Vs30 (m/s) below k1. */
-export function cb14Sigma(row: Cb14Row, m: number, vs30: number, a1100G: number): { tau: number; phi: number; sigma: number } {
+export function cb14Sigma(
+  row: Cb14Row,
+  m: number,
+  vs30: number,
+  a1100G: number,
+): { tau: number; phi: number; sigma: number } {
   // Magnitudes 4.5 and 5.5 bound the ramp between the small- and large-event values.
-  const ramp = (small: number, large: number): number => (m <= 4.5 ? small : m >= 5.5 ? large : large + (small - large) * (5.5 - m));
+  const ramp = (small: number, large: number): number =>
+    m <= 4.5 ? small : m >= 5.5 ? large : large + (small - large) * (5.5 - m);
   const tauY = ramp(row.tau1, row.tau2);
   const phiY = ramp(row.phi1, row.phi2);
   const alpha =
-    vs30 < row.k1 ? row.k2 * a1100G * (1 / (a1100G + K.c * (vs30 / row.k1) ** K.n) - 1 / (a1100G + K.c)) : 0;
+    vs30 < row.k1
+      ? row.k2 * a1100G * (1 / (a1100G + K.c * (vs30 / row.k1) ** K.n) - 1 / (a1100G + K.c))
+      : 0;
   if (alpha === 0) return { tau: tauY, phi: phiY, sigma: Math.hypot(tauY, phiY) };
   const tauPga = ramp(CB14_PGA.tau1, CB14_PGA.tau2);
   const phiPga = ramp(CB14_PGA.phi1, CB14_PGA.phi2);
   const base = (x: number): number => Math.sqrt(Math.max(x * x - row.phiLnAF * row.phiLnAF, 0));
   const phiYB = base(phiY);
   const phiPgaB = Math.sqrt(Math.max(phiPga * phiPga - CB14_PGA.phiLnAF * CB14_PGA.phiLnAF, 0));
-  const tau = Math.sqrt(Math.max(tauY ** 2 + alpha ** 2 * tauPga ** 2 + 2 * alpha * row.rho * tauY * tauPga, 0));
+  const tau = Math.sqrt(
+    Math.max(tauY ** 2 + alpha ** 2 * tauPga ** 2 + 2 * alpha * row.rho * tauY * tauPga, 0),
+  );
   const phi = Math.sqrt(
-    Math.max(phiYB ** 2 + row.phiLnAF ** 2 + alpha ** 2 * phiPgaB ** 2 + 2 * alpha * row.rho * phiYB * phiPgaB, 0),
+    Math.max(
+      phiYB ** 2 +
+        row.phiLnAF ** 2 +
+        alpha ** 2 * phiPgaB ** 2 +
+        2 * alpha * row.rho * phiYB * phiPgaB,
+      0,
+    ),
   );
   return { tau, phi, sigma: Math.hypot(tau, phi) };
 }
 
 /** Magnitude validity by mechanism (the paper's ranges, from memory). */
-export const CB14_MAGNITUDE_RANGE: Readonly<Record<Cb14Mechanism, readonly [number, number]>> = Object.freeze({
-  'strike-slip': [3.3, 8.5],
-  reverse: [3.3, 8.0],
-  normal: [3.3, 7.5],
-});
+export const CB14_MAGNITUDE_RANGE: Readonly<Record<Cb14Mechanism, readonly [number, number]>> =
+  Object.freeze({
+    'strike-slip': [3.3, 8.5],
+    reverse: [3.3, 8.0],
+    normal: [3.3, 7.5],
+  });
 
 /** Validity over all mechanisms (strike-slip's magnitude range; the others stop lower). */
 export const CB14_VALIDITY: ValidityRange = Object.freeze({
@@ -237,19 +312,47 @@ export const CB14_VALIDITY: ValidityRange = Object.freeze({
   depthKm: [0, 20],
 } as const);
 
-function requireNumber(path: string, value: number, expected: string, ok: (v: number) => boolean): void {
+function requireNumber(
+  path: string,
+  value: number,
+  expected: string,
+  ok: (v: number) => boolean,
+): void {
   if (!Number.isFinite(value) || !ok(value)) {
-    throw new InvalidInput([{ path, message: `expected ${expected}, got ${value}` }], `${NAME} input`);
+    throw new InvalidInput(
+      [{ path, message: `expected ${expected}, got ${value}` }],
+      `${NAME} input`,
+    );
   }
 }
 
 function ruptureOf(rupture: RuptureContext): Omit<Cb14Scenario, 'rrupKm' | 'rjbKm' | 'rxKm'> {
   requireNumber('magnitude', rupture.magnitude, 'a finite moment magnitude', () => true);
   requireNumber('rakeDeg', rupture.rakeDeg, 'a finite rake in degrees', () => true);
-  requireNumber('dipDeg', rupture.dipDeg, 'a dip above 0° and at most 90°', (v) => v > 0 && v <= 90);
-  requireNumber('ztorKm', rupture.ztorKm, 'a finite depth to the top of rupture of at least 0 km', (v) => v >= 0);
-  requireNumber('hypoDepthKm', rupture.hypoDepthKm, 'a finite hypocentral depth of at least 0 km', (v) => v >= 0);
-  requireNumber('widthKm', rupture.widthKm, 'a finite down-dip width of at least 0 km', (v) => v >= 0);
+  requireNumber(
+    'dipDeg',
+    rupture.dipDeg,
+    'a dip above 0° and at most 90°',
+    (v) => v > 0 && v <= 90,
+  );
+  requireNumber(
+    'ztorKm',
+    rupture.ztorKm,
+    'a finite depth to the top of rupture of at least 0 km',
+    (v) => v >= 0,
+  );
+  requireNumber(
+    'hypoDepthKm',
+    rupture.hypoDepthKm,
+    'a finite hypocentral depth of at least 0 km',
+    (v) => v >= 0,
+  );
+  requireNumber(
+    'widthKm',
+    rupture.widthKm,
+    'a finite down-dip width of at least 0 km',
+    (v) => v >= 0,
+  );
   return {
     magnitude: rupture.magnitude,
     mechanism: cb14MechanismFromRake(rupture.rakeDeg),
@@ -262,23 +365,45 @@ function ruptureOf(rupture: RuptureContext): Omit<Cb14Scenario, 'rrupKm' | 'rjbK
 
 function scenarioOf(input: GmmInput): Cb14Scenario {
   const rupture = ruptureOf(input);
-  requireNumber('rrupKm', input.rrupKm, 'a finite rupture distance of at least 0 km', (v) => v >= 0);
-  requireNumber('rjbKm', input.rjbKm, 'a finite Joyner–Boore distance of at least 0 km', (v) => v >= 0);
+  requireNumber(
+    'rrupKm',
+    input.rrupKm,
+    'a finite rupture distance of at least 0 km',
+    (v) => v >= 0,
+  );
+  requireNumber(
+    'rjbKm',
+    input.rjbKm,
+    'a finite Joyner–Boore distance of at least 0 km',
+    (v) => v >= 0,
+  );
   requireNumber('rxKm', input.rxKm, 'a finite Rx in km', () => true);
   requireNumber('vs30', input.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
-  if (input.z2p5Km !== undefined) requireNumber('z2p5Km', input.z2p5Km, 'a finite Z2.5 of at least 0 km', (v) => v >= 0);
+  if (input.z2p5Km !== undefined)
+    requireNumber('z2p5Km', input.z2p5Km, 'a finite Z2.5 of at least 0 km', (v) => v >= 0);
   return { ...rupture, rrupKm: input.rrupKm, rjbKm: input.rjbKm, rxKm: input.rxKm };
 }
 
 function notesOf(input: GmmInput, s: Cb14Scenario): string[] {
-  const notes = validityNotes(NAME, { ...CB14_VALIDITY, magnitude: CB14_MAGNITUDE_RANGE[s.mechanism] }, input, s.rrupKm);
+  const notes = validityNotes(
+    NAME,
+    { ...CB14_VALIDITY, magnitude: CB14_MAGNITUDE_RANGE[s.mechanism] },
+    input,
+    s.rrupKm,
+  );
   const outside = (label: string, value: number, min: number, max: number, unit: string): void => {
-    if (value < min || value > max) notes.push(`${NAME}: ${label} ${Math.round(value * 100) / 100}${unit} is outside its range ${min}–${max}${unit}`);
+    if (value < min || value > max)
+      notes.push(
+        `${NAME}: ${label} ${Math.round(value * 100) / 100}${unit} is outside its range ${min}–${max}${unit}`,
+      );
   };
   outside('depth to top of rupture', s.ztorKm, 0, 20, ' km');
   outside('dip', s.dipDeg, 15, 90, '°');
   if (input.z2p5Km !== undefined) outside('Z2.5', input.z2p5Km, 0, 10, ' km');
-  if (input.setting !== 'crustal') notes.unshift(`${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`);
+  if (input.setting !== 'crustal')
+    notes.unshift(
+      `${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`,
+    );
   return notes;
 }
 
@@ -290,15 +415,25 @@ export function predictCb14(input: GmmInput, measure: Measure): GmmPrediction {
   const s = scenarioOf(input);
   const notes = notesOf(input, s);
   const applicable = notes.length === 0;
-  const predictRow = (row: Cb14Row): GmmPrediction => ({ ...cb14PairPrediction(cb14RuptureTerms(row, s), input), applicable, notes });
+  const predictRow = (row: Cb14Row): GmmPrediction => ({
+    ...cb14PairPrediction(cb14RuptureTerms(row, s), input),
+    applicable,
+    notes,
+  });
   switch (measure.kind) {
     case 'PGA':
       return predictRow(CB14_PGA);
     case 'PGV':
       return predictRow(CB14_PGV);
     case 'SA':
-      if (!(measure.periodS > 0)) throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
-      return predictAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) => predictRow(CB14_SA[i] as Cb14Row));
+      if (!(measure.periodS > 0))
+        throw new UnsupportedMeasure(
+          `SA(${measure.periodS})`,
+          'the period must be greater than 0 s',
+        );
+      return predictAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) =>
+        predictRow(CB14_SA[i] as Cb14Row),
+      );
   }
 }
 
@@ -310,23 +445,40 @@ export interface Cb14RuptureTerms {
   readonly pgaSource: number;
 }
 
-export function cb14RuptureTerms(row: Cb14Row, rupture: Omit<Cb14Scenario, 'rrupKm' | 'rjbKm' | 'rxKm'>): Cb14RuptureTerms {
+export function cb14RuptureTerms(
+  row: Cb14Row,
+  rupture: Omit<Cb14Scenario, 'rrupKm' | 'rjbKm' | 'rxKm'>,
+): Cb14RuptureTerms {
   const pgaSource = cb14SourceTerm(CB14_PGA, rupture);
-  return { row, rupture, source: row === CB14_PGA ? pgaSource : cb14SourceTerm(row, rupture), pgaSource };
+  return {
+    row,
+    rupture,
+    source: row === CB14_PGA ? pgaSource : cb14SourceTerm(row, rupture),
+    pgaSource,
+  };
 }
 
 /**
  * Median and standard deviations (ln units) of one row for one rupture–site pair: A1100 from the
  * PGA row on reference rock, the row's ln median, and for PSA below 0.25 s not less than PGA.
  */
-export function cb14PairPrediction(t: Cb14RuptureTerms, pair: GmmInput): { lnMedian: number; tau: number; phi: number; sigma: number } {
+export function cb14PairPrediction(
+  t: Cb14RuptureTerms,
+  pair: GmmInput,
+): { lnMedian: number; tau: number; phi: number; sigma: number } {
   const { row } = t;
   const s: Cb14Scenario = { ...t.rupture, rrupKm: pair.rrupKm, rjbKm: pair.rjbKm, rxKm: pair.rxKm };
   const z2p5Km = pair.z2p5Km ?? cb14DefaultZ2p5Km(pair.vs30);
   const a1100G = a1100FromSource(t.pgaSource, s);
   const unfloored = cb14LnMedianFromSource(row, t.source, s, pair.vs30, z2p5Km, a1100G);
   // CB14: at periods under 0.25 s the spectral acceleration is not allowed below PGA.
-  const lnMedian = row.periodS > 0 && row.periodS < 0.25 ? Math.max(unfloored, cb14LnMedianFromSource(CB14_PGA, t.pgaSource, s, pair.vs30, z2p5Km, a1100G)) : unfloored;
+  const lnMedian =
+    row.periodS > 0 && row.periodS < 0.25
+      ? Math.max(
+          unfloored,
+          cb14LnMedianFromSource(CB14_PGA, t.pgaSource, s, pair.vs30, z2p5Km, a1100G),
+        )
+      : unfloored;
   return { lnMedian, ...cb14Sigma(row, s.magnitude, pair.vs30, a1100G) };
 }
 
@@ -339,12 +491,15 @@ const SPLIT: SplitModel<Cb14Row, Cb14RuptureTerms> = {
   periodsS: SA_PERIODS_S,
   distances: ['rrupKm', 'rjbKm', 'rxKm'],
   checkMeasure(measure) {
-    if (measure.kind === 'SA' && !(measure.periodS > 0)) throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
+    if (measure.kind === 'SA' && !(measure.periodS > 0))
+      throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
   },
   checkRupture: (rupture) => void ruptureOf(rupture),
   ruptureTerms: (row, rupture) => cb14RuptureTerms(row, ruptureOf(rupture)),
   pairPrediction: (terms, pair) => cb14PairPrediction(terms, pair),
-  applicable: (pair) => notesOf(pair, { ...ruptureOf(pair), rrupKm: pair.rrupKm, rjbKm: pair.rjbKm, rxKm: pair.rxKm }).length === 0,
+  applicable: (pair) =>
+    notesOf(pair, { ...ruptureOf(pair), rrupKm: pair.rrupKm, rjbKm: pair.rjbKm, rxKm: pair.rxKm })
+      .length === 0,
 };
 
 /** Campbell & Bozorgnia (2014) for shallow crustal earthquakes (Rrup): PGA, PGV, PSA 0.01–10 s. */
@@ -359,6 +514,10 @@ export const cb14: GroundMotionModel = Object.freeze({
   hasPgv: true,
   validity: CB14_VALIDITY,
   predict: (input: GmmInput, measure: Measure): GmmPrediction => predictCb14(input, measure),
-  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion => prepareSplit(SPLIT, ruptures, measure),
-  prepareMeasures: (ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions => prepareSplitMeasures(SPLIT, ruptures, measures),
+  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion =>
+    prepareSplit(SPLIT, ruptures, measure),
+  prepareMeasures: (
+    ruptures: readonly RuptureContext[],
+    measures: readonly Measure[],
+  ): PreparedMotions => prepareSplitMeasures(SPLIT, ruptures, measures),
 });

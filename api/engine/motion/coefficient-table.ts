@@ -4,7 +4,9 @@
  * file keeps its table as written in the reference record, digit for digit, and reads it into
  * typed rows here.
  */
-export type CoefficientRow<Column extends string> = { readonly periodS: number } & { readonly [K in Column]: number };
+export type CoefficientRow<Column extends string> = { readonly periodS: number } & {
+  readonly [K in Column]: number;
+};
 
 /**
  * Rows of `cells` (each `[periodS, ...values in the order of columns]`), frozen. A row of the
@@ -18,7 +20,9 @@ export function coefficientRows<Column extends string>(
   return Object.freeze(
     cells.map((values) => {
       if (values.length !== columns.length + 1) {
-        throw new Error(`${model} coefficient table: the row of period ${values[0]} has ${values.length - 1} values, expected ${columns.length}`);
+        throw new Error(
+          `${model} coefficient table: the row of period ${values[0]} has ${values.length - 1} values, expected ${columns.length}`,
+        );
       }
       const row: Record<string, number> = { periodS: values[0] as number };
       columns.forEach((column, i) => (row[column] = values[i + 1] as number));
@@ -28,7 +32,11 @@ export function coefficientRows<Column extends string>(
 }
 
 /** The row of `periodS` (−1 PGV, 0 PGA); throws if the table has none (a slip in a coefficient file). */
-export function rowOfPeriod<Row extends { readonly periodS: number }>(model: string, rows: readonly Row[], periodS: number): Row {
+export function rowOfPeriod<Row extends { readonly periodS: number }>(
+  model: string,
+  rows: readonly Row[],
+  periodS: number,
+): Row {
   const row = rows.find((r) => r.periodS === periodS);
   if (!row) throw new Error(`${model} coefficient table has no row for period ${periodS}`);
   return row;

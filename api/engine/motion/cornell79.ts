@@ -2,7 +2,14 @@ import { UnsupportedMeasure } from '../errors.ts';
 import type { Measure } from './measure.ts';
 import { measureLabel } from './measure.ts';
 import { insideRange } from './prepared-period.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, RuptureContext, ValidityRange } from './types.ts';
+import type {
+  GmmInput,
+  GmmPrediction,
+  GroundMotionModel,
+  PreparedMotion,
+  RuptureContext,
+  ValidityRange,
+} from './types.ts';
 import { validityNotes } from './validity.ts';
 
 /**
@@ -40,7 +47,10 @@ export function cornell79LnPga(magnitude: number, rhypoKm: number): number {
 
 function predict(input: GmmInput, measure: Measure): GmmPrediction {
   if (measure.kind !== 'PGA') {
-    throw new UnsupportedMeasure(measureLabel(measure), 'Cornell79 (Cornell et al. 1979) predicts PGA only');
+    throw new UnsupportedMeasure(
+      measureLabel(measure),
+      'Cornell79 (Cornell et al. 1979) predicts PGA only',
+    );
   }
   const notes = validityNotes('Cornell79', VALIDITY, input, input.rhypoKm);
   return {
@@ -59,7 +69,10 @@ function predict(input: GmmInput, measure: Measure): GmmPrediction {
  */
 function prepare(ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion {
   if (measure.kind !== 'PGA') {
-    throw new UnsupportedMeasure(measureLabel(measure), 'Cornell79 (Cornell et al. 1979) predicts PGA only');
+    throw new UnsupportedMeasure(
+      measureLabel(measure),
+      'Cornell79 (Cornell et al. 1979) predicts PGA only',
+    );
   }
   const magnitudeTerm = new Float64Array(ruptures.length);
   const magnitudeInside = new Uint8Array(ruptures.length);
@@ -74,9 +87,13 @@ function prepare(ruptures: readonly RuptureContext[], measure: Measure): Prepare
       for (let k = 0; k < pairs.count; k++) {
         const r = pairs.rupture[k] as number;
         const rhypoKm = pairs.rhypoKm[k] as number;
-        out.lnMedian[k] = (magnitudeTerm[r] as number) + C_LN_DISTANCE * Math.log(rhypoKm + DISTANCE_OFFSET_KM);
+        out.lnMedian[k] =
+          (magnitudeTerm[r] as number) + C_LN_DISTANCE * Math.log(rhypoKm + DISTANCE_OFFSET_KM);
         out.sigma[k] = SIGMA;
-        out.applicable[k] = (magnitudeInside[r] as number) & siteInside & (insideRange(rhypoKm, VALIDITY.distanceKm) ? 1 : 0);
+        out.applicable[k] =
+          (magnitudeInside[r] as number) &
+          siteInside &
+          (insideRange(rhypoKm, VALIDITY.distanceKm) ? 1 : 0);
       }
     },
   };
@@ -84,7 +101,8 @@ function prepare(ruptures: readonly RuptureContext[], measure: Measure): Prepare
 
 export const cornell79: GroundMotionModel = {
   name: 'Cornell79',
-  citation: 'Cornell, Banon & Shakal (1979), Seismic motion and response prediction alternatives, Earthquake Eng. Struct. Dyn. 7(4)',
+  citation:
+    'Cornell, Banon & Shakal (1979), Seismic motion and response prediction alternatives, Earthquake Eng. Struct. Dyn. 7(4)',
   settings: ['crustal'],
   distanceMetric: 'rhypo',
   periodsS: [],

@@ -51,7 +51,16 @@ import { CY14_PGA, CY14_PGV, CY14_SA, type Cy14Row } from './cy14-coefficients.t
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
 import { prepareSplit, prepareSplitMeasures, type SplitModel } from './split-prepare.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, PreparedMotions, RuptureContext, SiteContext, ValidityRange } from './types.ts';
+import type {
+  GmmInput,
+  GmmPrediction,
+  GroundMotionModel,
+  PreparedMotion,
+  PreparedMotions,
+  RuptureContext,
+  SiteContext,
+  ValidityRange,
+} from './types.ts';
 import { validityNotes } from './validity.ts';
 
 const NAME = 'CY14';
@@ -104,7 +113,10 @@ export interface Cy14RuptureTerms {
 
 /** E[Ztor] (km), the paper's expected depth to the top of rupture for the magnitude and mechanism. */
 export function cy14ExpectedZtorKm(m: number, mechanism: Cy14Mechanism): number {
-  const root = mechanism === 'reverse' ? 2.704 - 1.226 * Math.max(m - 5.849, 0) : 2.673 - 1.136 * Math.max(m - 4.97, 0);
+  const root =
+    mechanism === 'reverse'
+      ? 2.704 - 1.226 * Math.max(m - 5.849, 0)
+      : 2.673 - 1.136 * Math.max(m - 4.97, 0);
   return Math.max(root, 0) ** 2;
 }
 
@@ -113,7 +125,12 @@ export function cy14SourceTerm(row: Cy14Row, r: Cy14Rupture): number {
   const m = r.magnitude;
   const ch = Math.cosh(2 * Math.max(m - 4.5, 0));
   const cos2 = Math.cos(toRadians(r.dipDeg)) ** 2;
-  const style = r.mechanism === 'reverse' ? row.c1a + row.c1c / ch : r.mechanism === 'normal' ? row.c1b + row.c1d / ch : 0;
+  const style =
+    r.mechanism === 'reverse'
+      ? row.c1a + row.c1c / ch
+      : r.mechanism === 'normal'
+        ? row.c1b + row.c1d / ch
+        : 0;
   const deltaZtorKm = r.ztorKm - cy14ExpectedZtorKm(m, r.mechanism);
   return (
     row.c1 +
@@ -145,26 +162,41 @@ export function cy14RuptureTerms(row: Cy14Row, r: Cy14Rupture): Cy14RuptureTerms
 /** The distance and hanging-wall terms of ln y_ref (ln units): everything of the pair but the site. */
 export function cy14PathTerm(t: Cy14RuptureTerms, d: Cy14Distances): number {
   const { row } = t;
-  const spreading = row.c4 * Math.log(d.rrupKm + t.nearFaultKm) + (row.c4a - row.c4) * Math.log(Math.hypot(d.rrupKm, row.cRB));
+  const spreading =
+    row.c4 * Math.log(d.rrupKm + t.nearFaultKm) +
+    (row.c4a - row.c4) * Math.log(Math.hypot(d.rrupKm, row.cRB));
   const hangingWall =
     d.rxKm >= 0
-      ? t.hangingWall * (row.c9a + (1 - row.c9a) * Math.tanh(d.rxKm / row.c9b)) * (1 - Math.hypot(d.rjbKm, t.ztorKm) / (d.rrupKm + 1))
+      ? t.hangingWall *
+        (row.c9a + (1 - row.c9a) * Math.tanh(d.rxKm / row.c9b)) *
+        (1 - Math.hypot(d.rjbKm, t.ztorKm) / (d.rrupKm + 1))
       : 0;
   return spreading + t.anelasticPerKm * d.rrupKm + hangingWall;
 }
 
 /** The paper's California mean Z1 (km) for Vs30 in m/s. */
 export function cy14DefaultZ1Km(vs30: number): number {
-  return Math.exp((-7.15 / 4) * Math.log((vs30 ** 4 + 570.94 ** 4) / (1360 ** 4 + 570.94 ** 4))) / 1000;
+  return (
+    Math.exp((-7.15 / 4) * Math.log((vs30 ** 4 + 570.94 ** 4) / (1360 ** 4 + 570.94 ** 4))) / 1000
+  );
 }
 
 /** The nonlinear site factor's Vs30 part: φ2 [e^(φ3 (min(Vs30, 1130) − 360)) − e^(φ3 (1130 − 360))]. */
 function nonlinearStrength(row: Cy14Row, vs30: number): number {
-  return row.phi2 * (Math.exp(row.phi3 * (Math.min(vs30, CY14_REFERENCE_VS30) - 360)) - Math.exp(row.phi3 * (CY14_REFERENCE_VS30 - 360)));
+  return (
+    row.phi2 *
+    (Math.exp(row.phi3 * (Math.min(vs30, CY14_REFERENCE_VS30) - 360)) -
+      Math.exp(row.phi3 * (CY14_REFERENCE_VS30 - 360)))
+  );
 }
 
 /** The site terms (ln units) for Vs30 in m/s, y_ref in g (cm/s for PGV) and Z1 in km (default when absent). */
-export function cy14SiteTerm(row: Cy14Row, vs30: number, yRef: number, z1Km: number | undefined): number {
+export function cy14SiteTerm(
+  row: Cy14Row,
+  vs30: number,
+  yRef: number,
+  z1Km: number | undefined,
+): number {
   const linear = row.phi1 * Math.min(Math.log(vs30 / CY14_REFERENCE_VS30), 0);
   const nonlinear = nonlinearStrength(row, vs30) * Math.log((yRef + row.phi4) / row.phi4);
   const deltaZ1M = z1Km === undefined ? 0 : (z1Km - cy14DefaultZ1Km(vs30)) * 1000;
@@ -177,23 +209,29 @@ export function cy14SiteSlope(row: Cy14Row, vs30: number, yRef: number): number 
 }
 
 /** Median (ln units) and standard deviations of one row for one rupture–site pair. */
-export function cy14PairPrediction(t: Cy14RuptureTerms, d: Cy14Distances, site: SiteContext): { lnMedian: number; tau: number; phi: number; sigma: number } {
+export function cy14PairPrediction(
+  t: Cy14RuptureTerms,
+  d: Cy14Distances,
+  site: SiteContext,
+): { lnMedian: number; tau: number; phi: number; sigma: number } {
   const { row } = t;
   const lnYRef = t.sourceLn + cy14PathTerm(t, d);
   const yRef = Math.exp(lnYRef);
   const lnMedian = lnYRef + cy14SiteTerm(row, site.vs30, yRef, site.z1Km);
   const onePlusNl0 = 1 + cy14SiteSlope(row, site.vs30, yRef);
-  const phi = t.sigmaM * Math.sqrt((site.vs30Measured ? 0.7 : row.sigma3) + onePlusNl0 * onePlusNl0);
+  const phi =
+    t.sigmaM * Math.sqrt((site.vs30Measured ? 0.7 : row.sigma3) + onePlusNl0 * onePlusNl0);
   const tau = onePlusNl0 * t.tau;
   return { lnMedian, tau, phi, sigma: Math.hypot(tau, phi) };
 }
 
 /** Magnitude validity by mechanism (the paper's ranges, from memory). */
-export const CY14_MAGNITUDE_RANGE: Readonly<Record<Cy14Mechanism, readonly [number, number]>> = Object.freeze({
-  'strike-slip': [3.5, 8.5],
-  reverse: [3.5, 8.0],
-  normal: [3.5, 8.0],
-});
+export const CY14_MAGNITUDE_RANGE: Readonly<Record<Cy14Mechanism, readonly [number, number]>> =
+  Object.freeze({
+    'strike-slip': [3.5, 8.5],
+    reverse: [3.5, 8.0],
+    normal: [3.5, 8.0],
+  });
 
 /** Validity over all mechanisms (strike-slip's magnitude range; the others stop lower). */
 export const CY14_VALIDITY: ValidityRange = Object.freeze({
@@ -202,9 +240,17 @@ export const CY14_VALIDITY: ValidityRange = Object.freeze({
   vs30: [180, 1500],
 } as const);
 
-function requireNumber(path: string, value: number, expected: string, ok: (v: number) => boolean): void {
+function requireNumber(
+  path: string,
+  value: number,
+  expected: string,
+  ok: (v: number) => boolean,
+): void {
   if (!Number.isFinite(value) || !ok(value)) {
-    throw new InvalidInput([{ path, message: `expected ${expected}, got ${value}` }], `${NAME} input`);
+    throw new InvalidInput(
+      [{ path, message: `expected ${expected}, got ${value}` }],
+      `${NAME} input`,
+    );
   }
 }
 
@@ -212,22 +258,54 @@ function ruptureOf(input: GmmInput): Cy14Rupture {
   requireNumber('magnitude', input.magnitude, 'a finite moment magnitude', () => true);
   requireNumber('rakeDeg', input.rakeDeg, 'a finite rake in degrees', () => true);
   requireNumber('dipDeg', input.dipDeg, 'a dip above 0° and at most 90°', (v) => v > 0 && v <= 90);
-  requireNumber('ztorKm', input.ztorKm, 'a finite depth to the top of rupture of at least 0 km', (v) => v >= 0);
-  return { magnitude: input.magnitude, mechanism: cy14MechanismFromRake(input.rakeDeg), dipDeg: input.dipDeg, ztorKm: input.ztorKm };
+  requireNumber(
+    'ztorKm',
+    input.ztorKm,
+    'a finite depth to the top of rupture of at least 0 km',
+    (v) => v >= 0,
+  );
+  return {
+    magnitude: input.magnitude,
+    mechanism: cy14MechanismFromRake(input.rakeDeg),
+    dipDeg: input.dipDeg,
+    ztorKm: input.ztorKm,
+  };
 }
 
 function checkPair(input: GmmInput): void {
-  requireNumber('rrupKm', input.rrupKm, 'a finite rupture distance of at least 0 km', (v) => v >= 0);
-  requireNumber('rjbKm', input.rjbKm, 'a finite Joyner–Boore distance of at least 0 km', (v) => v >= 0);
+  requireNumber(
+    'rrupKm',
+    input.rrupKm,
+    'a finite rupture distance of at least 0 km',
+    (v) => v >= 0,
+  );
+  requireNumber(
+    'rjbKm',
+    input.rjbKm,
+    'a finite Joyner–Boore distance of at least 0 km',
+    (v) => v >= 0,
+  );
   requireNumber('rxKm', input.rxKm, 'a finite Rx in km', () => true);
   requireNumber('vs30', input.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
-  if (input.z1Km !== undefined) requireNumber('z1Km', input.z1Km, 'a finite Z1 of at least 0 km', (v) => v >= 0);
+  if (input.z1Km !== undefined)
+    requireNumber('z1Km', input.z1Km, 'a finite Z1 of at least 0 km', (v) => v >= 0);
 }
 
 function notesOf(input: GmmInput, rupture: Cy14Rupture): string[] {
-  const notes = validityNotes(NAME, { ...CY14_VALIDITY, magnitude: CY14_MAGNITUDE_RANGE[rupture.mechanism] }, input, input.rrupKm);
-  if (rupture.ztorKm > 20) notes.push(`${NAME}: depth to top of rupture ${Math.round(rupture.ztorKm * 100) / 100} km is outside its range 0–20 km`);
-  if (input.setting !== 'crustal') notes.unshift(`${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`);
+  const notes = validityNotes(
+    NAME,
+    { ...CY14_VALIDITY, magnitude: CY14_MAGNITUDE_RANGE[rupture.mechanism] },
+    input,
+    input.rrupKm,
+  );
+  if (rupture.ztorKm > 20)
+    notes.push(
+      `${NAME}: depth to top of rupture ${Math.round(rupture.ztorKm * 100) / 100} km is outside its range 0–20 km`,
+    );
+  if (input.setting !== 'crustal')
+    notes.unshift(
+      `${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`,
+    );
   return notes;
 }
 
@@ -240,15 +318,25 @@ export function predictCy14(input: GmmInput, measure: Measure): GmmPrediction {
   checkPair(input);
   const notes = notesOf(input, rupture);
   const applicable = notes.length === 0;
-  const predictRow = (row: Cy14Row): GmmPrediction => ({ ...cy14PairPrediction(cy14RuptureTerms(row, rupture), input, input), applicable, notes });
+  const predictRow = (row: Cy14Row): GmmPrediction => ({
+    ...cy14PairPrediction(cy14RuptureTerms(row, rupture), input, input),
+    applicable,
+    notes,
+  });
   switch (measure.kind) {
     case 'PGA':
       return predictRow(CY14_PGA);
     case 'PGV':
       return predictRow(CY14_PGV);
     case 'SA':
-      if (!(measure.periodS > 0)) throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
-      return predictAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) => predictRow(CY14_SA[i] as Cy14Row));
+      if (!(measure.periodS > 0))
+        throw new UnsupportedMeasure(
+          `SA(${measure.periodS})`,
+          'the period must be greater than 0 s',
+        );
+      return predictAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) =>
+        predictRow(CY14_SA[i] as Cy14Row),
+      );
   }
 }
 
@@ -261,7 +349,8 @@ const SPLIT: SplitModel<Cy14Row, Cy14RuptureTerms> = {
   periodsS: SA_PERIODS_S,
   distances: ['rrupKm', 'rjbKm', 'rxKm'],
   checkMeasure(measure) {
-    if (measure.kind === 'SA' && !(measure.periodS > 0)) throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
+    if (measure.kind === 'SA' && !(measure.periodS > 0))
+      throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
   },
   checkRupture: (rupture) => void ruptureOf(rupture as GmmInput),
   ruptureTerms: (row, rupture) => cy14RuptureTerms(row, ruptureOf(rupture as GmmInput)),
@@ -281,6 +370,10 @@ export const cy14: GroundMotionModel = Object.freeze({
   hasPgv: true,
   validity: CY14_VALIDITY,
   predict: (input: GmmInput, measure: Measure): GmmPrediction => predictCy14(input, measure),
-  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion => prepareSplit(SPLIT, ruptures, measure),
-  prepareMeasures: (ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions => prepareSplitMeasures(SPLIT, ruptures, measures),
+  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion =>
+    prepareSplit(SPLIT, ruptures, measure),
+  prepareMeasures: (
+    ruptures: readonly RuptureContext[],
+    measures: readonly Measure[],
+  ): PreparedMotions => prepareSplitMeasures(SPLIT, ruptures, measures),
 });

@@ -15,17 +15,25 @@ export interface PeriodBracket {
   readonly fraction: number;
 }
 
-export function bracketPeriod(modelName: string, periodsS: readonly number[], periodS: number): PeriodBracket {
+export function bracketPeriod(
+  modelName: string,
+  periodsS: readonly number[],
+  periodS: number,
+): PeriodBracket {
   const first = periodsS[0];
   const last = periodsS[periodsS.length - 1];
-  if (first === undefined || last === undefined) throw new UnsupportedPeriod(modelName, periodS, NaN, NaN);
+  if (first === undefined || last === undefined)
+    throw new UnsupportedPeriod(modelName, periodS, NaN, NaN);
   const onRow = periodsS.findIndex((p) => Math.abs(p / periodS - 1) <= 1e-6);
   if (onRow >= 0) return { lower: onRow, upper: onRow, fraction: 0 };
-  if (!(periodS > first && periodS < last)) throw new UnsupportedPeriod(modelName, periodS, first, last);
+  if (!(periodS > first && periodS < last))
+    throw new UnsupportedPeriod(modelName, periodS, first, last);
   let upper = 1;
   while ((periodsS[upper] as number) < periodS) upper++;
   const lower = upper - 1;
-  const fraction = Math.log(periodS / (periodsS[lower] as number)) / Math.log((periodsS[upper] as number) / (periodsS[lower] as number));
+  const fraction =
+    Math.log(periodS / (periodsS[lower] as number)) /
+    Math.log((periodsS[upper] as number) / (periodsS[lower] as number));
   return { lower, upper, fraction };
 }
 

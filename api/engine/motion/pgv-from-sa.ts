@@ -1,7 +1,15 @@
 import { UnsupportedMeasure } from '../errors.ts';
 import { STANDARD_GRAVITY_MS2 } from '../units.ts';
 import type { Measure } from './measure.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel, PairPredictions, PreparedMotion, PreparedMotions, RuptureContext } from './types.ts';
+import type {
+  GmmInput,
+  GmmPrediction,
+  GroundMotionModel,
+  PairPredictions,
+  PreparedMotion,
+  PreparedMotions,
+  RuptureContext,
+} from './types.ts';
 
 /**
  * PGV for a model that predicts none, from its own SA(0.5 s):
@@ -25,7 +33,12 @@ export const PGV_FROM_SA_NOTE = 'PGV derived from SA(0.5 s) / 20 (Bommer & Alarc
 export function canDerivePgv(model: GroundMotionModel): boolean {
   const first = model.periodsS[0];
   const last = model.periodsS[model.periodsS.length - 1];
-  return first !== undefined && last !== undefined && first <= PGV_FROM_SA_PERIOD_S && PGV_FROM_SA_PERIOD_S <= last;
+  return (
+    first !== undefined &&
+    last !== undefined &&
+    first <= PGV_FROM_SA_PERIOD_S &&
+    PGV_FROM_SA_PERIOD_S <= last
+  );
 }
 
 /**
@@ -35,7 +48,10 @@ export function canDerivePgv(model: GroundMotionModel): boolean {
 export function withPgvFromSa(model: GroundMotionModel): GroundMotionModel {
   if (model.hasPgv) return model;
   if (!canDerivePgv(model)) {
-    throw new UnsupportedMeasure('PGV', `${model.name} predicts no PGV and no SA(${PGV_FROM_SA_PERIOD_S}) to derive it from`);
+    throw new UnsupportedMeasure(
+      'PGV',
+      `${model.name} predicts no PGV and no SA(${PGV_FROM_SA_PERIOD_S}) to derive it from`,
+    );
   }
   const saMeasure: Measure = { kind: 'SA', periodS: PGV_FROM_SA_PERIOD_S };
   const inner = model.prepare?.bind(model);
@@ -49,7 +65,8 @@ export function withPgvFromSa(model: GroundMotionModel): GroundMotionModel {
           distances: sa.distances,
           predictPairs(site, pairs, out) {
             sa.predictPairs(site, pairs, out);
-            for (let k = 0; k < pairs.count; k++) out.lnMedian[k] = (out.lnMedian[k] as number) + LN_G_TO_PGV_CMS;
+            for (let k = 0; k < pairs.count; k++)
+              out.lnMedian[k] = (out.lnMedian[k] as number) + LN_G_TO_PGV_CMS;
           },
         };
       }
@@ -59,7 +76,10 @@ export function withPgvFromSa(model: GroundMotionModel): GroundMotionModel {
   const prepareMeasures = innerMeasures
     ? (ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions => {
         const derived = measures.map((m) => m.kind === 'PGV');
-        const motions = innerMeasures(ruptures, measures.map((m) => (m.kind === 'PGV' ? saMeasure : m)));
+        const motions = innerMeasures(
+          ruptures,
+          measures.map((m) => (m.kind === 'PGV' ? saMeasure : m)),
+        );
         return {
           distances: motions.distances,
           predictPairs(site, pairs, out) {
@@ -67,7 +87,8 @@ export function withPgvFromSa(model: GroundMotionModel): GroundMotionModel {
             derived.forEach((isPgv, i) => {
               if (!isPgv) return;
               const lnMedian = (out[i] as PairPredictions).lnMedian;
-              for (let k = 0; k < pairs.count; k++) lnMedian[k] = (lnMedian[k] as number) + LN_G_TO_PGV_CMS;
+              for (let k = 0; k < pairs.count; k++)
+                lnMedian[k] = (lnMedian[k] as number) + LN_G_TO_PGV_CMS;
             });
           },
         };

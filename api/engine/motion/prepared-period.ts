@@ -3,7 +3,11 @@ import type { PairPredictions, PreparedMotion, PreparedMotions } from './types.t
 
 /** Columns for `capacity` pair predictions. */
 export function createPairPredictions(capacity: number): PairPredictions {
-  return { lnMedian: new Float64Array(capacity), sigma: new Float64Array(capacity), applicable: new Uint8Array(capacity) };
+  return {
+    lnMedian: new Float64Array(capacity),
+    sigma: new Float64Array(capacity),
+    applicable: new Uint8Array(capacity),
+  };
 }
 
 /**
@@ -19,23 +23,41 @@ export interface RowPlan<Row> {
   readonly fraction: number;
 }
 
-export const singleRow = <Row>(row: Row): RowPlan<Row> => ({ lower: row, upper: undefined, fraction: 0 });
+export const singleRow = <Row>(row: Row): RowPlan<Row> => ({
+  lower: row,
+  upper: undefined,
+  fraction: 0,
+});
 
 /** The RowPlan of SA at `periodS` from a model's SA rows (their periods `periodsS`, increasing). */
-export function periodRows<Row>(modelName: string, periodsS: readonly number[], rows: readonly Row[], periodS: number): RowPlan<Row> {
+export function periodRows<Row>(
+  modelName: string,
+  periodsS: readonly number[],
+  rows: readonly Row[],
+  periodS: number,
+): RowPlan<Row> {
   const { lower, upper, fraction } = bracketPeriod(modelName, periodsS, periodS);
-  return fraction === 0 ? singleRow(rows[lower] as Row) : { lower: rows[lower] as Row, upper: rows[upper] as Row, fraction };
+  return fraction === 0
+    ? singleRow(rows[lower] as Row)
+    : { lower: rows[lower] as Row, upper: rows[upper] as Row, fraction };
 }
 
 /** The same plan over what `f` makes of each row (a model's per-rupture terms of that row). */
-export const mapPlan = <Row, Terms>(plan: RowPlan<Row>, f: (row: Row) => Terms): RowPlan<Terms> => ({
+export const mapPlan = <Row, Terms>(
+  plan: RowPlan<Row>,
+  f: (row: Row) => Terms,
+): RowPlan<Terms> => ({
   lower: f(plan.lower),
   upper: plan.upper === undefined ? undefined : f(plan.upper),
   fraction: plan.fraction,
 });
 
 /** The distinct rows the plans read, in the order they first appear. */
-export const plannedRows = <Row>(plans: readonly RowPlan<Row>[]): Row[] => [...new Set(plans.flatMap((plan) => (plan.upper === undefined ? [plan.lower] : [plan.lower, plan.upper])))];
+export const plannedRows = <Row>(plans: readonly RowPlan<Row>[]): Row[] => [
+  ...new Set(
+    plans.flatMap((plan) => (plan.upper === undefined ? [plan.lower] : [plan.lower, plan.upper])),
+  ),
+];
 
 /** `build` made once per row however many measures ask for it (a row's terms cost a pass over the ruptures). */
 export function rowMemo<Row, Terms>(build: (row: Row) => Terms): (row: Row) => Terms {
@@ -59,7 +81,13 @@ export const createRowScratch = (): RowScratch => ({ buffer: createPairPredictio
  * predictions, and for a period between rows both are evaluated and interpolated as
  * predictAtPeriod does.
  */
-export function predictRows<Row>(plan: RowPlan<Row>, count: number, out: PairPredictions, scratch: RowScratch, evaluate: (row: Row, into: PairPredictions) => void): void {
+export function predictRows<Row>(
+  plan: RowPlan<Row>,
+  count: number,
+  out: PairPredictions,
+  scratch: RowScratch,
+  evaluate: (row: Row, into: PairPredictions) => void,
+): void {
   evaluate(plan.lower, out);
   if (plan.upper === undefined) return;
   if (scratch.buffer.lnMedian.length < count) scratch.buffer = createPairPredictions(count);
@@ -85,7 +113,9 @@ export function singleMeasure(motions: PreparedMotions): PreparedMotion {
 }
 
 /** A Float64Array of at least `capacity` entries: `column` itself when long enough (scratch that grows). */
-export const atLeast = (column: Float64Array, capacity: number): Float64Array => (column.length >= capacity ? column : new Float64Array(capacity));
+export const atLeast = (column: Float64Array, capacity: number): Float64Array =>
+  column.length >= capacity ? column : new Float64Array(capacity);
 
 /** True when `value` is inside [min, max], by the test validityNotes (validity.ts) uses (indexed, not destructured: it runs per pair). */
-export const insideRange = (value: number, range: readonly [number, number]): boolean => !(value < range[0] || value > range[1]);
+export const insideRange = (value: number, range: readonly [number, number]): boolean =>
+  !(value < range[0] || value > range[1]);

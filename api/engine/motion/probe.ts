@@ -58,7 +58,11 @@ const RAKE_OF: Record<Mechanism, number> = { 'strike-slip': 0, reverse: 90, norm
 /** Dips assumed when none is given: vertical strike-slip, 45° dip-slip (common practice). */
 const DIP_OF: Record<Mechanism, number> = { 'strike-slip': 90, reverse: 45, normal: 45 };
 /** Mechanisms assumed per setting when none is given: the usual ones (common practice). */
-const MECHANISM_OF: Record<TectonicSetting, Mechanism> = { crustal: 'strike-slip', interface: 'reverse', intraslab: 'normal' };
+const MECHANISM_OF: Record<TectonicSetting, Mechanism> = {
+  crustal: 'strike-slip',
+  interface: 'reverse',
+  intraslab: 'normal',
+};
 const DEFAULT_MEASURES = ['PGA', 'PGV', 'SA(0.2)', 'SA(1.0)'];
 
 /**
@@ -70,25 +74,48 @@ const DEFAULT_MEASURES = ['PGA', 'PGV', 'SA(0.2)', 'SA(1.0)'];
 export function probeMotion(request: ProbeRequest, models: ModelCatalog): ProbeResult {
   const base = models.get(request.model);
   // Asked-for measures a model lacks raise an error; the default list keeps only what it has.
-  const keys = request.measures ?? DEFAULT_MEASURES.filter((k) => measureSupport(base, parseMeasure(k)) === undefined);
+  const keys =
+    request.measures ??
+    DEFAULT_MEASURES.filter((k) => measureSupport(base, parseMeasure(k)) === undefined);
   const model = keys.includes('PGV') ? withPgvFromSa(base) : base;
   const defaults: string[] = [];
   const setting = request.setting ?? (model.settings[0] as TectonicSetting);
   if (!model.settings.includes(setting)) {
-    throw new InvalidInput([{ path: 'setting', message: `${model.name} is for ${model.settings.join(' and ')} earthquakes, got "${setting}"` }]);
+    throw new InvalidInput([
+      {
+        path: 'setting',
+        message: `${model.name} is for ${model.settings.join(' and ')} earthquakes, got "${setting}"`,
+      },
+    ]);
   }
   const take = <T>(given: T | undefined, fallback: T, note: string): T => {
     if (given !== undefined) return given;
     defaults.push(note);
     return fallback;
   };
-  const mechanism = take(request.mechanism, MECHANISM_OF[setting], `mechanism = ${MECHANISM_OF[setting]} for ${setting}`);
+  const mechanism = take(
+    request.mechanism,
+    MECHANISM_OF[setting],
+    `mechanism = ${MECHANISM_OF[setting]} for ${setting}`,
+  );
   const ztorKm = take(request.ztorKm, 0, 'ztorKm = 0 (rupture reaches the surface)');
-  const hypoDepthKm = take(request.hypoDepthKm, setting === 'intraslab' ? 60 : 10, `hypoDepthKm = ${setting === 'intraslab' ? 60 : 10}`);
-  const dipDeg = take(request.dipDeg, DIP_OF[mechanism], `dipDeg = ${DIP_OF[mechanism]} for ${mechanism}`);
+  const hypoDepthKm = take(
+    request.hypoDepthKm,
+    setting === 'intraslab' ? 60 : 10,
+    `hypoDepthKm = ${setting === 'intraslab' ? 60 : 10}`,
+  );
+  const dipDeg = take(
+    request.dipDeg,
+    DIP_OF[mechanism],
+    `dipDeg = ${DIP_OF[mechanism]} for ${mechanism}`,
+  );
   const input: GmmInput = {
     magnitude: request.magnitude,
-    rakeDeg: take(request.rakeDeg, RAKE_OF[mechanism], `rakeDeg = ${RAKE_OF[mechanism]} for ${mechanism}`),
+    rakeDeg: take(
+      request.rakeDeg,
+      RAKE_OF[mechanism],
+      `rakeDeg = ${RAKE_OF[mechanism]} for ${mechanism}`,
+    ),
     mechanism,
     setting,
     dipDeg,
@@ -99,7 +126,11 @@ export function probeMotion(request: ProbeRequest, models: ModelCatalog): ProbeR
     rrupKm: take(request.rrupKm, Math.hypot(request.rjbKm, ztorKm), 'rrupKm = sqrt(rjb² + ztor²)'),
     rxKm: take(request.rxKm, -request.rjbKm, 'rxKm = -rjbKm (footwall)'),
     ry0Km: take(request.ry0Km, 0, 'ry0Km = 0'),
-    rhypoKm: take(request.rhypoKm, Math.hypot(request.rjbKm, hypoDepthKm), 'rhypoKm = sqrt(rjb² + hypoDepth²)'),
+    rhypoKm: take(
+      request.rhypoKm,
+      Math.hypot(request.rjbKm, hypoDepthKm),
+      'rhypoKm = sqrt(rjb² + hypoDepth²)',
+    ),
     repiKm: request.rjbKm,
     vs30: take(request.vs30, 760, 'vs30 = 760 m/s'),
     vs30Measured: true,
@@ -109,7 +140,16 @@ export function probeMotion(request: ProbeRequest, models: ModelCatalog): ProbeR
     const measure = parseMeasure(key);
     const p = model.predict(input, measure);
     const derived = measure.kind === 'PGV' && !base.hasPgv ? { derived: PGV_FROM_SA_NOTE } : {};
-    measures[key] = { median: Math.exp(p.lnMedian), unit: measureUnit(measure), sigma: p.sigma, tau: p.tau, phi: p.phi, applicable: p.applicable, notes: p.notes, ...derived };
+    measures[key] = {
+      median: Math.exp(p.lnMedian),
+      unit: measureUnit(measure),
+      sigma: p.sigma,
+      tau: p.tau,
+      phi: p.phi,
+      applicable: p.applicable,
+      notes: p.notes,
+      ...derived,
+    };
   }
   const used = INPUTS_READ[model.name]?.(setting);
   const reaches = (note: string): boolean => {
@@ -117,7 +157,9 @@ export function probeMotion(request: ProbeRequest, models: ModelCatalog): ProbeR
     const key = note.split(' ')[0] as string;
     return used.includes(key) || (FEEDS[key] ?? []).some((derived) => used.includes(derived));
   };
-  const distanceUsed = used?.find((k): k is 'rjbKm' | 'rrupKm' | 'rhypoKm' => k === 'rjbKm' || k === 'rrupKm' || k === 'rhypoKm');
+  const distanceUsed = used?.find(
+    (k): k is 'rjbKm' | 'rrupKm' | 'rhypoKm' => k === 'rjbKm' || k === 'rrupKm' || k === 'rhypoKm',
+  );
   return {
     model: model.name,
     citation: model.citation,
@@ -136,9 +178,23 @@ export function probeMotion(request: ProbeRequest, models: ModelCatalog): ProbeR
 const INPUTS_READ: Readonly<Record<string, (setting: TectonicSetting) => readonly string[]>> = {
   Cornell79: () => ['magnitude', 'rhypoKm'],
   BSSA14: () => ['magnitude', 'rakeDeg', 'rjbKm', 'vs30'],
-  CB14: () => ['magnitude', 'rakeDeg', 'dipDeg', 'ztorKm', 'widthKm', 'hypoDepthKm', 'rjbKm', 'rrupKm', 'rxKm', 'vs30'],
+  CB14: () => [
+    'magnitude',
+    'rakeDeg',
+    'dipDeg',
+    'ztorKm',
+    'widthKm',
+    'hypoDepthKm',
+    'rjbKm',
+    'rrupKm',
+    'rxKm',
+    'vs30',
+  ],
   // Abrahamson et al. (2016): Rrup for interface events; Rhypo and the hypocentral depth for intraslab ones.
-  AGA16: (setting) => (setting === 'intraslab' ? ['magnitude', 'rhypoKm', 'hypoDepthKm', 'vs30'] : ['magnitude', 'rrupKm', 'vs30']),
+  AGA16: (setting) =>
+    setting === 'intraslab'
+      ? ['magnitude', 'rhypoKm', 'hypoDepthKm', 'vs30']
+      : ['magnitude', 'rrupKm', 'vs30'],
 };
 
 /** Assumptions that matter through what is derived from them (see the defaults above). */

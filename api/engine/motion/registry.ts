@@ -18,21 +18,24 @@ import { zhao06, zhao06Msq } from './zhao06.ts';
  *   intraslab  AGA16 0.6 and Zhao06 0.4 (AGA16's ΔC1 branches are the same for intraslab events).
  * Cornell79 is kept for textbook checks of the hazard integral, not for screening.
  */
-export const modelCatalog: ModelCatalog = createModelCatalog([bssa14, cb14, ask14, cy14, aga16, aga16Lower, aga16Upper, zhao06, zhao06Msq, cornell79], {
-  crustal: [
-    { model: 'BSSA14', weight: 0.25 },
-    { model: 'CB14', weight: 0.25 },
-    { model: 'ASK14', weight: 0.25 },
-    { model: 'CY14', weight: 0.25 },
-  ],
-  interface: [
-    { model: 'AGA16-lower', weight: 0.12 },
-    { model: 'AGA16', weight: 0.36 },
-    { model: 'AGA16-upper', weight: 0.12 },
-    { model: 'Zhao06', weight: 0.4 },
-  ],
-  intraslab: [
-    { model: 'AGA16', weight: 0.6 },
-    { model: 'Zhao06', weight: 0.4 },
-  ],
-});
+export const modelCatalog: ModelCatalog = createModelCatalog(
+  [bssa14, cb14, ask14, cy14, aga16, aga16Lower, aga16Upper, zhao06, zhao06Msq, cornell79],
+  {
+    crustal: [
+      { model: 'BSSA14', weight: 0.25 },
+      { model: 'CB14', weight: 0.25 },
+      { model: 'ASK14', weight: 0.25 },
+      { model: 'CY14', weight: 0.25 },
+    ],
+    interface: [
+      { model: 'AGA16-lower', weight: 0.12 },
+      { model: 'AGA16', weight: 0.36 },
+      { model: 'AGA16-upper', weight: 0.12 },
+      { model: 'Zhao06', weight: 0.4 },
+    ],
+    intraslab: [
+      { model: 'AGA16', weight: 0.6 },
+      { model: 'Zhao06', weight: 0.4 },
+    ],
+  },
+);

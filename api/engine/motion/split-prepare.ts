@@ -1,6 +1,24 @@
 import type { Measure } from './measure.ts';
-import { createRowScratch, mapPlan, periodRows, predictRows, rowMemo, singleMeasure, singleRow, type RowPlan } from './prepared-period.ts';
-import type { DistanceName, GmmInput, PairDistances, PairPredictions, PreparedMotion, PreparedMotions, RuptureContext, SiteContext } from './types.ts';
+import {
+  createRowScratch,
+  mapPlan,
+  periodRows,
+  predictRows,
+  rowMemo,
+  singleMeasure,
+  singleRow,
+  type RowPlan,
+} from './prepared-period.ts';
+import type {
+  DistanceName,
+  GmmInput,
+  PairDistances,
+  PairPredictions,
+  PreparedMotion,
+  PreparedMotions,
+  RuptureContext,
+  SiteContext,
+} from './types.ts';
 
 /**
  * A model written as the terms of one table row that depend on the rupture alone and the
@@ -21,7 +39,10 @@ export interface SplitModel<Row, Terms> {
   /** Throws what predict() throws for the rupture's own inputs. */
   checkRupture(rupture: RuptureContext): void;
   ruptureTerms(row: Row, rupture: RuptureContext): Terms;
-  pairPrediction(terms: Terms, pair: GmmInput): { readonly lnMedian: number; readonly sigma: number };
+  pairPrediction(
+    terms: Terms,
+    pair: GmmInput,
+  ): { readonly lnMedian: number; readonly sigma: number };
   /** Whether predict() would say applicable for the pair (no validity notes). */
   applicable(pair: GmmInput): boolean;
 }
@@ -40,12 +61,20 @@ type MutablePair = { -readonly [K in keyof GmmInput]: GmmInput[K] };
  * are interpolated in ln(period) as predict() does (prepared-period.ts). One pair input object is
  * reused from pair to pair.
  */
-export function prepareSplitMeasures<Row, Terms>(model: SplitModel<Row, Terms>, ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions {
+export function prepareSplitMeasures<Row, Terms>(
+  model: SplitModel<Row, Terms>,
+  ruptures: readonly RuptureContext[],
+  measures: readonly Measure[],
+): PreparedMotions {
   measures.forEach((m) => model.checkMeasure(m));
   ruptures.forEach((r) => model.checkRupture(r));
-  const termsOf = rowMemo((row: Row): PreparedRow<Row, Terms> => ({ row, terms: ruptures.map((r) => model.ruptureTerms(row, r)) }));
+  const termsOf = rowMemo((row: Row): PreparedRow<Row, Terms> => ({
+    row,
+    terms: ruptures.map((r) => model.ruptureTerms(row, r)),
+  }));
   const plans: RowPlan<PreparedRow<Row, Terms>>[] = measures.map((m) => {
-    if (m.kind === 'SA') return mapPlan(periodRows(model.name, model.periodsS, model.sa, m.periodS), termsOf);
+    if (m.kind === 'SA')
+      return mapPlan(periodRows(model.name, model.periodsS, model.sa, m.periodS), termsOf);
     return singleRow(termsOf(m.kind === 'PGA' ? model.pga : (model.pgv as Row)));
   });
   const scratch = createRowScratch();
@@ -69,7 +98,11 @@ export function prepareSplitMeasures<Row, Terms>(model: SplitModel<Row, Terms>, 
     pair.repiKm = pairs.repiKm[k] as number;
   };
 
-  const evaluate = (prepared: PreparedRow<Row, Terms>, pairs: PairDistances, out: PairPredictions): void => {
+  const evaluate = (
+    prepared: PreparedRow<Row, Terms>,
+    pairs: PairDistances,
+    out: PairPredictions,
+  ): void => {
     for (let k = 0; k < pairs.count; k++) {
       const r = pairs.rupture[k] as number;
       setPair(ruptures[r] as RuptureContext, pairs, k);
@@ -92,11 +125,18 @@ export function prepareSplitMeasures<Row, Terms>(model: SplitModel<Row, Terms>, 
         setPair(ruptures[pairs.rupture[k] as number] as RuptureContext, pairs, k);
         applicable[k] = model.applicable(pair) ? 1 : 0;
       }
-      plans.forEach((plan, i) => predictRows(plan, pairs.count, out[i] as PairPredictions, scratch, (p, into) => evaluate(p, pairs, into)));
+      plans.forEach((plan, i) =>
+        predictRows(plan, pairs.count, out[i] as PairPredictions, scratch, (p, into) =>
+          evaluate(p, pairs, into),
+        ),
+      );
     },
   };
 }
 
 /** prepareSplitMeasures for one measure (a model's prepare hook). */
-export const prepareSplit = <Row, Terms>(model: SplitModel<Row, Terms>, ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion =>
-  singleMeasure(prepareSplitMeasures(model, ruptures, [measure]));
+export const prepareSplit = <Row, Terms>(
+  model: SplitModel<Row, Terms>,
+  ruptures: readonly RuptureContext[],
+  measure: Measure,
+): PreparedMotion => singleMeasure(prepareSplitMeasures(model, ruptures, [measure]));

@@ -104,7 +104,10 @@ export interface GroundMotionModel {
    * with `prepare`, a model made by spreading another and replacing predict must replace or
    * drop it.
    */
-  prepareMeasures?(ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions;
+  prepareMeasures?(
+    ruptures: readonly RuptureContext[],
+    measures: readonly Measure[],
+  ): PreparedMotions;
 }
 
 /** A distance of DistanceContext, by its field name. */

@@ -4,11 +4,23 @@ import type { GmmInput, ValidityRange } from './types.ts';
  * Notes for every input outside a model's stated validity range; empty when all are inside.
  * `distanceKm` is the model's own metric, chosen by the caller.
  */
-export function validityNotes(modelName: string, range: ValidityRange, input: GmmInput, distanceKm: number): string[] {
+export function validityNotes(
+  modelName: string,
+  range: ValidityRange,
+  input: GmmInput,
+  distanceKm: number,
+): string[] {
   const notes: string[] = [];
-  const outside = (label: string, value: number, [min, max]: readonly [number, number], unit: string): void => {
+  const outside = (
+    label: string,
+    value: number,
+    [min, max]: readonly [number, number],
+    unit: string,
+  ): void => {
     if (value < min || value > max) {
-      notes.push(`${modelName}: ${label} ${round(value)}${unit} is outside its range ${min}–${max}${unit}`);
+      notes.push(
+        `${modelName}: ${label} ${round(value)}${unit} is outside its range ${min}–${max}${unit}`,
+      );
     }
   };
   outside('magnitude M', input.magnitude, range.magnitude, '');

@@ -65,7 +65,9 @@ export const ZHAO06_ROWS: readonly Zhao06Row[] = coefficientRows('Zhao06', ZHAO0
 export const ZHAO06_PGA: Zhao06Row = rowOfPeriod('Zhao06', ZHAO06_ROWS, 0);
 
 /** The spectral rows, 0.05–5 s, increasing. */
-export const ZHAO06_SA: readonly Zhao06Row[] = Object.freeze(ZHAO06_ROWS.filter((r) => r.periodS > 0));
+export const ZHAO06_SA: readonly Zhao06Row[] = Object.freeze(
+  ZHAO06_ROWS.filter((r) => r.periodS > 0),
+);
 
 /** Period-independent constants (zhao06-constants.csv). */
 export const ZHAO06_CONSTANTS = Object.freeze({

@@ -33,10 +33,35 @@ import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
 import type { TectonicSetting } from '../model.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
-import { createRowScratch, insideRange, mapPlan, periodRows, predictRows, rowMemo, singleMeasure, singleRow, type RowPlan } from './prepared-period.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel, PairDistances, PairPredictions, PreparedMotion, PreparedMotions, RuptureContext, ValidityRange } from './types.ts';
+import {
+  createRowScratch,
+  insideRange,
+  mapPlan,
+  periodRows,
+  predictRows,
+  rowMemo,
+  singleMeasure,
+  singleRow,
+  type RowPlan,
+} from './prepared-period.ts';
+import type {
+  GmmInput,
+  GmmPrediction,
+  GroundMotionModel,
+  PairDistances,
+  PairPredictions,
+  PreparedMotion,
+  PreparedMotions,
+  RuptureContext,
+  ValidityRange,
+} from './types.ts';
 import { validityNotes } from './validity.ts';
-import { ZHAO06_CONSTANTS as K, ZHAO06_PGA, ZHAO06_SA, type Zhao06Row } from './zhao06-coefficients.ts';
+import {
+  ZHAO06_CONSTANTS as K,
+  ZHAO06_PGA,
+  ZHAO06_SA,
+  type Zhao06Row,
+} from './zhao06-coefficients.ts';
 
 /** Standard gravity, cm/s²: the equation's y is in cm/s². */
 const STANDARD_GRAVITY_CMS2 = 980.665;
@@ -88,10 +113,24 @@ const isReverse = (rakeDeg: number): boolean => {
   return rake > 30 && rake < 150;
 };
 
-export function zhao06RuptureTerms(row: Zhao06Row, setting: TectonicSetting, magnitude: number, hypoDepthKm: number, rakeDeg: number, magnitudeSquared: boolean): Zhao06RuptureTerms {
+export function zhao06RuptureTerms(
+  row: Zhao06Row,
+  setting: TectonicSetting,
+  magnitude: number,
+  hypoDepthKm: number,
+  rakeDeg: number,
+  magnitudeSquared: boolean,
+): Zhao06RuptureTerms {
   const h = Math.min(hypoDepthKm, K.depthCapKm);
   const depth = h >= K.hcKm ? row.e * (h - K.hcKm) : 0;
-  const source = setting === 'interface' ? row.si : setting === 'intraslab' ? row.ss : isReverse(rakeDeg) ? row.fr : 0;
+  const source =
+    setting === 'interface'
+      ? row.si
+      : setting === 'intraslab'
+        ? row.ss
+        : isReverse(rakeDeg)
+          ? row.fr
+          : 0;
   let constant = row.a * magnitude + depth + source - LN_G;
   let tau = row.tau;
   if (magnitudeSquared) {
@@ -109,7 +148,12 @@ export function zhao06RuptureTerms(row: Zhao06Row, setting: TectonicSetting, mag
       tau = row.tauC;
     }
   }
-  return { constant, nearSourceKm: row.c * Math.exp(row.d * magnitude), slabPath: setting === 'intraslab' ? row.ssl : 0, tau };
+  return {
+    constant,
+    nearSourceKm: row.c * Math.exp(row.d * magnitude),
+    slabPath: setting === 'intraslab' ? row.ssl : 0,
+    tau,
+  };
 }
 
 /**
@@ -119,8 +163,17 @@ export function zhao06RuptureTerms(row: Zhao06Row, setting: TectonicSetting, mag
 const SLAB_MIN_DISTANCE_KM = 1;
 
 /** ln median (ln g) of a row for one pair: Rrup in km, C_k of the site. */
-export const zhao06LnMedianFor = (row: Zhao06Row, terms: Zhao06RuptureTerms, rrupKm: number, siteTerm: number): number =>
-  terms.constant + row.b * rrupKm - Math.log(rrupKm + terms.nearSourceKm) + (terms.slabPath === 0 ? 0 : terms.slabPath * Math.log(Math.max(rrupKm, SLAB_MIN_DISTANCE_KM))) + siteTerm;
+export const zhao06LnMedianFor = (
+  row: Zhao06Row,
+  terms: Zhao06RuptureTerms,
+  rrupKm: number,
+  siteTerm: number,
+): number =>
+  terms.constant +
+  row.b * rrupKm -
+  Math.log(rrupKm + terms.nearSourceKm) +
+  (terms.slabPath === 0 ? 0 : terms.slabPath * Math.log(Math.max(rrupKm, SLAB_MIN_DISTANCE_KM))) +
+  siteTerm;
 
 /** Validity (the paper's data, from memory; see the top comment). */
 export const ZHAO06_VALIDITY: ValidityRange = Object.freeze({
@@ -132,19 +185,42 @@ export const ZHAO06_VALIDITY: ValidityRange = Object.freeze({
 
 const SA_PERIODS_S: readonly number[] = Object.freeze(ZHAO06_SA.map((r) => r.periodS));
 
-function requireNumber(name: string, path: string, value: number, expected: string, ok: (v: number) => boolean): void {
-  if (!Number.isFinite(value) || !ok(value)) throw new InvalidInput([{ path, message: `expected ${expected}, got ${value}` }], `${name} input`);
+function requireNumber(
+  name: string,
+  path: string,
+  value: number,
+  expected: string,
+  ok: (v: number) => boolean,
+): void {
+  if (!Number.isFinite(value) || !ok(value))
+    throw new InvalidInput(
+      [{ path, message: `expected ${expected}, got ${value}` }],
+      `${name} input`,
+    );
 }
 
 function checkRupture(name: string, rupture: RuptureContext): boolean {
   requireNumber(name, 'magnitude', rupture.magnitude, 'a finite moment magnitude', () => true);
-  requireNumber(name, 'hypoDepthKm', rupture.hypoDepthKm, 'a finite focal depth of at least 0 km', (v) => v >= 0);
+  requireNumber(
+    name,
+    'hypoDepthKm',
+    rupture.hypoDepthKm,
+    'a finite focal depth of at least 0 km',
+    (v) => v >= 0,
+  );
   requireNumber(name, 'rakeDeg', rupture.rakeDeg, 'a finite rake in degrees', () => true);
-  return insideRange(rupture.magnitude, ZHAO06_VALIDITY.magnitude) && insideRange(rupture.hypoDepthKm, ZHAO06_VALIDITY.depthKm!);
+  return (
+    insideRange(rupture.magnitude, ZHAO06_VALIDITY.magnitude) &&
+    insideRange(rupture.hypoDepthKm, ZHAO06_VALIDITY.depthKm!)
+  );
 }
 
 function refusePgv(name: string, measure: Measure): void {
-  if (measure.kind === 'PGV') throw new UnsupportedMeasure('PGV', `${name} (Zhao et al. 2006) has no PGV equation; it predicts PGA and SA from 0.05 to 5 s`);
+  if (measure.kind === 'PGV')
+    throw new UnsupportedMeasure(
+      'PGV',
+      `${name} (Zhao et al. 2006) has no PGV equation; it predicts PGA and SA from 0.05 to 5 s`,
+    );
 }
 
 interface PreparedRow {
@@ -155,12 +231,19 @@ interface PreparedRow {
 /** Zhao et al. (2006), with or without the magnitude-squared term. */
 export function createZhao06(magnitudeSquared: boolean): GroundMotionModel {
   const name = magnitudeSquared ? 'Zhao06-Msq' : 'Zhao06';
-  const rowTerms = (row: Zhao06Row, r: RuptureContext): Zhao06RuptureTerms => zhao06RuptureTerms(row, r.setting, r.magnitude, r.hypoDepthKm, r.rakeDeg, magnitudeSquared);
+  const rowTerms = (row: Zhao06Row, r: RuptureContext): Zhao06RuptureTerms =>
+    zhao06RuptureTerms(row, r.setting, r.magnitude, r.hypoDepthKm, r.rakeDeg, magnitudeSquared);
 
   function predict(input: GmmInput, measure: Measure): GmmPrediction {
     refusePgv(name, measure);
     checkRupture(name, input);
-    requireNumber(name, 'rrupKm', input.rrupKm, 'a finite rupture distance of at least 0 km', (v) => v >= 0);
+    requireNumber(
+      name,
+      'rrupKm',
+      input.rrupKm,
+      'a finite rupture distance of at least 0 km',
+      (v) => v >= 0,
+    );
     requireNumber(name, 'vs30', input.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
     const notes = validityNotes(name, ZHAO06_VALIDITY, input, input.rrupKm);
     const siteClass = zhao06SiteClass(input.vs30);
@@ -176,17 +259,34 @@ export function createZhao06(magnitudeSquared: boolean): GroundMotionModel {
       };
     };
     if (measure.kind === 'PGA') return predictRow(ZHAO06_PGA);
-    return predictAtPeriod(name, SA_PERIODS_S, (measure as { periodS: number }).periodS, (i) => predictRow(ZHAO06_SA[i] as Zhao06Row));
+    return predictAtPeriod(name, SA_PERIODS_S, (measure as { periodS: number }).periodS, (i) =>
+      predictRow(ZHAO06_SA[i] as Zhao06Row),
+    );
   }
 
-  function prepareMeasures(ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions {
+  function prepareMeasures(
+    ruptures: readonly RuptureContext[],
+    measures: readonly Measure[],
+  ): PreparedMotions {
     measures.forEach((m) => refusePgv(name, m));
     const inside = Uint8Array.from(ruptures, (r) => (checkRupture(name, r) ? 1 : 0));
-    const termsOf = rowMemo((row: Zhao06Row): PreparedRow => ({ row, terms: ruptures.map((r) => rowTerms(row, r)) }));
-    const plans: RowPlan<PreparedRow>[] = measures.map((m) => (m.kind !== 'SA' ? singleRow(termsOf(ZHAO06_PGA)) : mapPlan(periodRows(name, SA_PERIODS_S, ZHAO06_SA, m.periodS), termsOf)));
+    const termsOf = rowMemo((row: Zhao06Row): PreparedRow => ({
+      row,
+      terms: ruptures.map((r) => rowTerms(row, r)),
+    }));
+    const plans: RowPlan<PreparedRow>[] = measures.map((m) =>
+      m.kind !== 'SA'
+        ? singleRow(termsOf(ZHAO06_PGA))
+        : mapPlan(periodRows(name, SA_PERIODS_S, ZHAO06_SA, m.periodS), termsOf),
+    );
     const scratch = createRowScratch();
     const [minKm, maxKm] = ZHAO06_VALIDITY.distanceKm;
-    const evaluate = (prepared: PreparedRow, vs30: number, pairs: PairDistances, out: PairPredictions): void => {
+    const evaluate = (
+      prepared: PreparedRow,
+      vs30: number,
+      pairs: PairDistances,
+      out: PairPredictions,
+    ): void => {
       const { row, terms } = prepared;
       const siteTerm = zhao06SiteTerm(row, zhao06SiteClass(vs30));
       const siteInside = insideRange(vs30, ZHAO06_VALIDITY.vs30) ? 1 : 0;
@@ -204,7 +304,11 @@ export function createZhao06(magnitudeSquared: boolean): GroundMotionModel {
       distances: ['rrupKm'],
       predictPairs(site, pairs, out) {
         requireNumber(name, 'vs30', site.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
-        plans.forEach((plan, i) => predictRows(plan, pairs.count, out[i] as PairPredictions, scratch, (p, into) => evaluate(p, site.vs30, pairs, into)));
+        plans.forEach((plan, i) =>
+          predictRows(plan, pairs.count, out[i] as PairPredictions, scratch, (p, into) =>
+            evaluate(p, site.vs30, pairs, into),
+          ),
+        );
       },
     };
   }
@@ -219,7 +323,8 @@ export function createZhao06(magnitudeSquared: boolean): GroundMotionModel {
     hasPgv: false,
     validity: ZHAO06_VALIDITY,
     predict,
-    prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion => singleMeasure(prepareMeasures(ruptures, [measure])),
+    prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion =>
+      singleMeasure(prepareMeasures(ruptures, [measure])),
     prepareMeasures,
   });
 }

@@ -16,17 +16,25 @@ export const CHARACTERISTIC_BOX_WIDTH = 0.5;
 export const CHARACTERISTIC_HEIGHT_OFFSET = 1.0;
 
 /** Probability of each bin [edges[i], edges[i+1]] under the Youngs & Coppersmith distribution. */
-export function characteristicBinProbabilities(edges: readonly number[], mMin: number, mMax: number, bValue: number): number[] {
+export function characteristicBinProbabilities(
+  edges: readonly number[],
+  mMin: number,
+  mMax: number,
+  bValue: number,
+): number[] {
   const beta = betaOf(bValue);
   const mc = mMax - CHARACTERISTIC_BOX_WIDTH;
   if (!(mc > mMin)) {
-    throw new InvalidInput([{
-      path: 'recurrence.mMin',
-      message: `the characteristic shape needs mMax - mMin > ${CHARACTERISTIC_BOX_WIDTH}, got ${mMax - mMin}`,
-    }]);
+    throw new InvalidInput([
+      {
+        path: 'recurrence.mMin',
+        message: `the characteristic shape needs mMax - mMin > ${CHARACTERISTIC_BOX_WIDTH}, got ${mMax - mMin}`,
+      },
+    ]);
   }
   const normaliser = exponentialMass(beta, 0, mc - mMin);
-  const boxDensity = (beta * Math.exp(-beta * (mc - CHARACTERISTIC_HEIGHT_OFFSET - mMin))) / normaliser;
+  const boxDensity =
+    (beta * Math.exp(-beta * (mc - CHARACTERISTIC_HEIGHT_OFFSET - mMin))) / normaliser;
   const c2 = boxDensity * CHARACTERISTIC_BOX_WIDTH;
   const out: number[] = [];
   for (let i = 0; i + 1 < edges.length; i++) {

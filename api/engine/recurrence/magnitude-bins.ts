@@ -25,34 +25,62 @@ const roundEdge = (m: number): number => Math.round(m * 1e9) / 1e9;
  * their rates add up to the rate of the whole range.
  */
 export function magnitudeEdges(mMin: number, mMax: number, stepM: number): number[] {
-  if (!(stepM > 0)) throw new InvalidInput([{ path: 'settings.magnitudeStep', message: `expected a magnitude step > 0, got ${stepM}` }]);
-  if (!(mMax > mMin)) throw new InvalidInput([{ path: 'recurrence.mMax', message: `expected mMax greater than mMin (${mMin}), got ${mMax}` }]);
+  if (!(stepM > 0))
+    throw new InvalidInput([
+      { path: 'settings.magnitudeStep', message: `expected a magnitude step > 0, got ${stepM}` },
+    ]);
+  if (!(mMax > mMin))
+    throw new InvalidInput([
+      {
+        path: 'recurrence.mMax',
+        message: `expected mMax greater than mMin (${mMin}), got ${mMax}`,
+      },
+    ]);
   const steps = (mMax - mMin) / stepM;
   const whole = Math.round(steps);
-  const count = Math.abs(steps - whole) <= WHOLE_STEPS_SLACK ? Math.max(1, whole) : Math.ceil(steps);
+  const count =
+    Math.abs(steps - whole) <= WHOLE_STEPS_SLACK ? Math.max(1, whole) : Math.ceil(steps);
   const edges = Array.from({ length: count }, (_, k) => roundEdge(mMin + k * stepM));
   edges.push(mMax);
   return edges;
 }
 
-const centres = (edges: readonly number[]): number[] => edges.slice(1).map((hi, i) => roundEdge(((edges[i] as number) + hi) / 2));
+const centres = (edges: readonly number[]): number[] =>
+  edges.slice(1).map((hi, i) => roundEdge(((edges[i] as number) + hi) / 2));
 
 /**
  * The magnitude bins of a recurrence with annual rates (per year). Gutenberg–Richter: the
  * rate of M >= mMin spread by the truncated exponential; moment-balanced: from the fault's
  * moment rate (`faultAreaKm2`, km², required); fixed: one bin at its magnitude.
  */
-export function magnitudeBins(recurrence: Recurrence, settings: Pick<Settings, 'magnitudeStep'>, faultAreaKm2?: number): MagnitudeBins {
+export function magnitudeBins(
+  recurrence: Recurrence,
+  settings: Pick<Settings, 'magnitudeStep'>,
+  faultAreaKm2?: number,
+): MagnitudeBins {
   if (recurrence.type === 'fixed') {
     const half = settings.magnitudeStep / 2;
-    return { magnitudes: [recurrence.magnitude], annualRates: [recurrence.rate], edges: [recurrence.magnitude - half, recurrence.magnitude + half] };
+    return {
+      magnitudes: [recurrence.magnitude],
+      annualRates: [recurrence.rate],
+      edges: [recurrence.magnitude - half, recurrence.magnitude + half],
+    };
   }
   const edges = magnitudeEdges(recurrence.mMin, recurrence.mMax, settings.magnitudeStep);
   const magnitudes = centres(edges);
   if (recurrence.type === 'moment-balanced') {
-    return { magnitudes, annualRates: momentBalancedRates(recurrence, edges, magnitudes, faultAreaKm2), edges };
+    return {
+      magnitudes,
+      annualRates: momentBalancedRates(recurrence, edges, magnitudes, faultAreaKm2),
+      edges,
+    };
   }
   const total = rateAboveMinimum(recurrence);
-  const shares = truncatedExponentialBinProbabilities(edges, recurrence.mMin, recurrence.mMax, recurrence.bValue);
+  const shares = truncatedExponentialBinProbabilities(
+    edges,
+    recurrence.mMin,
+    recurrence.mMax,
+    recurrence.bValue,
+  );
   return { magnitudes, annualRates: shares.map((p) => p * total), edges };
 }

@@ -23,13 +23,23 @@ export function momentBalancedRates(
   faultAreaKm2: number | undefined,
 ): number[] {
   if (faultAreaKm2 === undefined || !(faultAreaKm2 > 0)) {
-    throw new InvalidInput([{ path: 'recurrence.type', message: `moment balancing needs a fault area > 0 km², got ${faultAreaKm2}` }]);
+    throw new InvalidInput([
+      {
+        path: 'recurrence.type',
+        message: `moment balancing needs a fault area > 0 km², got ${faultAreaKm2}`,
+      },
+    ]);
   }
   const { mMin, mMax, bValue } = recurrence;
-  const shares = recurrence.shape === 'characteristic'
-    ? characteristicBinProbabilities(edges, mMin, mMax, bValue)
-    : truncatedExponentialBinProbabilities(edges, mMin, mMax, bValue);
-  const momentPerEvent = compensatedSum(shares.map((p, i) => p * momentNm(magnitudes[i] as number)));
-  const eventRate = momentRateNmYr(recurrence.shearModulusPa, faultAreaKm2, recurrence.slipRateMmYr) / momentPerEvent;
+  const shares =
+    recurrence.shape === 'characteristic'
+      ? characteristicBinProbabilities(edges, mMin, mMax, bValue)
+      : truncatedExponentialBinProbabilities(edges, mMin, mMax, bValue);
+  const momentPerEvent = compensatedSum(
+    shares.map((p, i) => p * momentNm(magnitudes[i] as number)),
+  );
+  const eventRate =
+    momentRateNmYr(recurrence.shearModulusPa, faultAreaKm2, recurrence.slipRateMmYr) /
+    momentPerEvent;
   return shares.map((p) => p * eventRate);
 }

@@ -17,5 +17,8 @@ const M_PER_MM = 1e-3;
  * Moment rate of a fault, N·m per year: shear modulus (Pa) x area (km²) x slip rate (mm/yr),
  * the long-term moment-rate balance of Brune (1968) (from memory).
  */
-export const momentRateNmYr = (shearModulusPa: number, areaKm2: number, slipRateMmYr: number): number =>
-  shearModulusPa * areaKm2 * M2_PER_KM2 * slipRateMmYr * M_PER_MM;
+export const momentRateNmYr = (
+  shearModulusPa: number,
+  areaKm2: number,
+  slipRateMmYr: number,
+): number => shearModulusPa * areaKm2 * M2_PER_KM2 * slipRateMmYr * M_PER_MM;

@@ -2,7 +2,12 @@ import { frameForStudy, type LocalFrame, type PointXY } from '../geometry/projec
 import { InvalidInput } from '../errors.ts';
 import type { Settings, Source, Study } from '../model.ts';
 import { magnitudeBins } from '../recurrence/magnitude-bins.ts';
-import { placeRuptures, prepareSource, type PlacedRupture, type PreparedSource } from './placement.ts';
+import {
+  placeRuptures,
+  prepareSource,
+  type PlacedRupture,
+  type PreparedSource,
+} from './placement.ts';
 import type { Rupture } from './rupture.ts';
 
 /**
@@ -16,18 +21,37 @@ function inSource<T>(sourceIndex: number, work: () => T): T {
   } catch (error) {
     if (!(error instanceof InvalidInput)) throw error;
     const feature = `sources.features[${sourceIndex}]`;
-    throw new InvalidInput(error.issues.map((issue) => ({
-      path: issue.path.startsWith('settings.') ? issue.path : issue.path === 'coordinates' ? `${feature}.geometry.coordinates` : `${feature}.properties.${issue.path}`,
-      message: issue.message,
-    })));
+    throw new InvalidInput(
+      error.issues.map((issue) => ({
+        path: issue.path.startsWith('settings.')
+          ? issue.path
+          : issue.path === 'coordinates'
+            ? `${feature}.geometry.coordinates`
+            : `${feature}.properties.${issue.path}`,
+        message: issue.message,
+      })),
+    );
   }
 }
 
 /** A placed rupture with its rate (per year), field by field: rest and spread here cost more than the placing. */
 const toRupture = (placed: PlacedRupture, binRate: number): Rupture =>
   placed.cellUse
-    ? { sourceIndex: placed.sourceIndex, sourceId: placed.sourceId, annualRate: binRate * placed.share, context: placed.context, surface: placed.surface, cellUse: placed.cellUse }
-    : { sourceIndex: placed.sourceIndex, sourceId: placed.sourceId, annualRate: binRate * placed.share, context: placed.context, surface: placed.surface };
+    ? {
+        sourceIndex: placed.sourceIndex,
+        sourceId: placed.sourceId,
+        annualRate: binRate * placed.share,
+        context: placed.context,
+        surface: placed.surface,
+        cellUse: placed.cellUse,
+      }
+    : {
+        sourceIndex: placed.sourceIndex,
+        sourceId: placed.sourceId,
+        annualRate: binRate * placed.share,
+        context: placed.context,
+        surface: placed.surface,
+      };
 
 /**
  * Visits every rupture of one source, in discretisation order: for each magnitude bin in
@@ -50,7 +74,8 @@ export function visitSourceRuptures(
     const bins = magnitudeBins(source.recurrence, settings, areaKm2);
     for (let i = 0; i < bins.magnitudes.length; i++) {
       const binRate = bins.annualRates[i] as number;
-      for (const placed of placeRuptures(prepared, bins.magnitudes[i] as number)) visit(placed, binRate);
+      for (const placed of placeRuptures(prepared, bins.magnitudes[i] as number))
+        visit(placed, binRate);
     }
   });
 }
@@ -59,9 +84,22 @@ export function visitSourceRuptures(
  * All ruptures of one source with annual rates (per year), in the order of visitSourceRuptures;
  * zone cells near `sites` (local km) refined (geometry/cell-refinement.ts).
  */
-export function discretiseSource(source: Source, sourceIndex: number, frame: LocalFrame, settings: Settings, sites: readonly PointXY[] = []): Rupture[] {
+export function discretiseSource(
+  source: Source,
+  sourceIndex: number,
+  frame: LocalFrame,
+  settings: Settings,
+  sites: readonly PointXY[] = [],
+): Rupture[] {
   const ruptures: Rupture[] = [];
-  visitSourceRuptures(source, sourceIndex, frame, settings, (placed, binRate) => ruptures.push(toRupture(placed, binRate)), sites);
+  visitSourceRuptures(
+    source,
+    sourceIndex,
+    frame,
+    settings,
+    (placed, binRate) => ruptures.push(toRupture(placed, binRate)),
+    sites,
+  );
   return ruptures;
 }
 
@@ -77,8 +115,14 @@ export interface DiscretisedStudy {
 export function discretiseStudy(study: Study): DiscretisedStudy {
   const frame = frameForStudy(study);
   const sites = communitySites(study, frame);
-  return { frame, ruptures: study.sources.flatMap((source, i) => discretiseSource(source, i, frame, study.settings, sites)) };
+  return {
+    frame,
+    ruptures: study.sources.flatMap((source, i) =>
+      discretiseSource(source, i, frame, study.settings, sites),
+    ),
+  };
 }
 
 /** The study's communities in its local frame, km. */
-export const communitySites = (study: Pick<Study, 'communities'>, frame: LocalFrame): PointXY[] => study.communities.map((c) => frame.toLocal([c.lon, c.lat]));
+export const communitySites = (study: Pick<Study, 'communities'>, frame: LocalFrame): PointXY[] =>
+  study.communities.map((c) => frame.toLocal([c.lon, c.lat]));

@@ -1,7 +1,11 @@
 import { faultSurface, type FaultSurface } from '../geometry/fault-surface.ts';
 import { floatingRuptures, type FloatingRupture } from '../geometry/floating-ruptures.ts';
 import type { LocalFrame, PointXY } from '../geometry/projection.ts';
-import { fitDimensions, scaledDimensions, scalingRelationFor } from '../geometry/rupture-scaling.ts';
+import {
+  fitDimensions,
+  scaledDimensions,
+  scalingRelationFor,
+} from '../geometry/rupture-scaling.ts';
 import { refineRadiusKm, REFINE_PARTS } from '../geometry/cell-refinement.ts';
 import { subdivideZoneCell, zoneCells, type ZoneCell } from '../geometry/zone-cells.ts';
 import type { FaultSource, PointSource, Settings, Source, ZoneSource } from '../model.ts';
@@ -11,7 +15,13 @@ import type { Rupture, RuptureSurface } from './rupture.ts';
 
 /** A source's geometry worked out once, ready to place ruptures of any magnitude on. */
 export type PreparedSource =
-  | { readonly kind: 'fault'; readonly source: FaultSource; readonly sourceIndex: number; readonly surface: FaultSurface; readonly spacingKm: number }
+  | {
+      readonly kind: 'fault';
+      readonly source: FaultSource;
+      readonly sourceIndex: number;
+      readonly surface: FaultSurface;
+      readonly spacingKm: number;
+    }
   | {
       readonly kind: 'zone';
       readonly source: ZoneSource;
@@ -21,7 +31,12 @@ export type PreparedSource =
       readonly refined: ReadonlyMap<number, readonly ZoneCell[]>;
       readonly refineRadiusKm: number;
     }
-  | { readonly kind: 'point'; readonly source: PointSource; readonly sourceIndex: number; readonly location: PointXY };
+  | {
+      readonly kind: 'point';
+      readonly source: PointSource;
+      readonly sourceIndex: number;
+      readonly location: PointXY;
+    };
 
 /** A rupture in place without a rate, and its share (0–1) of its magnitude bin's rate. */
 export type PlacedRupture = Omit<Rupture, 'annualRate'> & { readonly share: number };
@@ -38,14 +53,21 @@ export function prepareSource(
   sites: readonly PointXY[] = [],
 ): PreparedSource {
   if (source.kind === 'fault') {
-    return { kind: 'fault', source, sourceIndex, surface: faultSurface(source, frame), spacingKm: settings.ruptureSpacingKm };
+    return {
+      kind: 'fault',
+      source,
+      sourceIndex,
+      surface: faultSurface(source, frame),
+      spacingKm: settings.ruptureSpacingKm,
+    };
   }
   if (source.kind === 'zone') {
     const cells = zoneCells(source, frame, settings.zoneCellKm);
     const radiusKm = refineRadiusKm(settings.zoneCellKm);
     const refined = new Map<number, readonly ZoneCell[]>();
     cells.forEach((cell, k) => {
-      if (sites.some((p) => Math.hypot(p.x - cell.centre.x, p.y - cell.centre.y) <= radiusKm)) refined.set(k, subdivideZoneCell(source, frame, cell, REFINE_PARTS));
+      if (sites.some((p) => Math.hypot(p.x - cell.centre.x, p.y - cell.centre.y) <= radiusKm))
+        refined.set(k, subdivideZoneCell(source, frame, cell, REFINE_PARTS));
     });
     return { kind: 'zone', source, sourceIndex, cells, refined, refineRadiusKm: radiusKm };
   }
@@ -63,11 +85,25 @@ export function placeRuptures(prepared: PreparedSource, magnitude: number): Plac
   // Built field by field: object rest and spread here cost more than the geometry (one call per rupture).
   if (prepared.kind === 'fault') {
     const { surface, source } = prepared;
-    const scaled = scaledDimensions(scalingRelationFor(source.setting, source.mechanism), magnitude);
-    const positions = floatingRuptures(surface, fitDimensions(scaled, surface.lengthKm, surface.widthKm), { spacingKm: prepared.spacingKm });
+    const scaled = scaledDimensions(
+      scalingRelationFor(source.setting, source.mechanism),
+      magnitude,
+    );
+    const positions = floatingRuptures(
+      surface,
+      fitDimensions(scaled, surface.lengthKm, surface.widthKm),
+      { spacingKm: prepared.spacingKm },
+    );
     const share = 1 / positions.length;
     const placed: PlacedRupture[] = [];
-    for (const p of positions) placed.push({ sourceIndex, sourceId, share, context: faultContext(prepared, magnitude, p), surface: faultSurfaceOf(p) });
+    for (const p of positions)
+      placed.push({
+        sourceIndex,
+        sourceId,
+        share,
+        context: faultContext(prepared, magnitude, p),
+        surface: faultSurfaceOf(p),
+      });
     return placed;
   }
   const context = pointRuptureContext(prepared.source, magnitude);
@@ -77,24 +113,53 @@ export function placeRuptures(prepared: PreparedSource, magnitude: number): Plac
     const radiusKm = prepared.refineRadiusKm;
     prepared.cells.forEach((cell, k) => {
       const squares = prepared.refined.get(k);
-      const point = (at: ZoneCell) => ({ kind: 'point' as const, hypocentre: { x: at.centre.x, y: at.centre.y, z: depthKm } });
+      const point = (at: ZoneCell) => ({
+        kind: 'point' as const,
+        hypocentre: { x: at.centre.x, y: at.centre.y, z: depthKm },
+      });
       if (!squares) {
         placed.push({ sourceIndex, sourceId, share: cell.share, context, surface: point(cell) });
         return;
       }
-      placed.push({ sourceIndex, sourceId, share: cell.share, context, surface: point(cell), cellUse: { centre: cell.centre, radiusKm, near: false } });
+      placed.push({
+        sourceIndex,
+        sourceId,
+        share: cell.share,
+        context,
+        surface: point(cell),
+        cellUse: { centre: cell.centre, radiusKm, near: false },
+      });
       for (const square of squares) {
-        placed.push({ sourceIndex, sourceId, share: square.share, context, surface: point(square), cellUse: { centre: cell.centre, radiusKm, near: true } });
+        placed.push({
+          sourceIndex,
+          sourceId,
+          share: square.share,
+          context,
+          surface: point(square),
+          cellUse: { centre: cell.centre, radiusKm, near: true },
+        });
       }
     });
     return placed;
   }
   const { x, y } = prepared.location;
-  return [{ sourceIndex, sourceId, share: 1, context, surface: { kind: 'point', hypocentre: { x, y, z: depthKm } } }];
+  return [
+    {
+      sourceIndex,
+      sourceId,
+      share: 1,
+      context,
+      surface: { kind: 'point', hypocentre: { x, y, z: depthKm } },
+    },
+  ];
 }
 
 /** The rupture context of a prepared fault's rupture at one floating position. */
-function faultContext(prepared: PreparedSource & { kind: 'fault' }, magnitude: number, p: FloatingRupture): RuptureContext {
+function faultContext(
+  prepared: PreparedSource & { kind: 'fault' },
+  magnitude: number,
+  p: FloatingRupture,
+): RuptureContext {
   const { source, surface } = prepared;
   return {
     magnitude,
@@ -108,9 +173,22 @@ function faultContext(prepared: PreparedSource & { kind: 'fault' }, magnitude: n
   };
 }
 
-const faultSurfaceOf = (p: FloatingRupture): RuptureSurface => ({ kind: 'planes', planes: p.planes, hypocentre: p.hypocentre });
+const faultSurfaceOf = (p: FloatingRupture): RuptureSurface => ({
+  kind: 'planes',
+  planes: p.planes,
+  hypocentre: p.hypocentre,
+});
 
 /** A rupture (without rate) of a prepared fault at one floating position. */
-export function faultRupture(prepared: PreparedSource & { kind: 'fault' }, magnitude: number, p: FloatingRupture): Omit<Rupture, 'annualRate'> {
-  return { sourceIndex: prepared.sourceIndex, sourceId: prepared.source.id, context: faultContext(prepared, magnitude, p), surface: faultSurfaceOf(p) };
+export function faultRupture(
+  prepared: PreparedSource & { kind: 'fault' },
+  magnitude: number,
+  p: FloatingRupture,
+): Omit<Rupture, 'annualRate'> {
+  return {
+    sourceIndex: prepared.sourceIndex,
+    sourceId: prepared.source.id,
+    context: faultContext(prepared, magnitude, p),
+    surface: faultSurfaceOf(p),
+  };
 }

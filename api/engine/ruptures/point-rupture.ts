@@ -9,7 +9,11 @@ import { toRadians } from '../units.ts';
  * ground-motion prediction equations in engineering practice", Earthquake Spectra 27(4),
  * recommend (from memory).
  */
-export const POINT_DIP_DEG: Readonly<Record<Mechanism, number>> = { 'strike-slip': 90, reverse: 40, normal: 50 };
+export const POINT_DIP_DEG: Readonly<Record<Mechanism, number>> = {
+  'strike-slip': 90,
+  reverse: 40,
+  normal: 50,
+};
 
 /**
  * Fraction of the rupture width above the hypocentre when placing a virtual rupture's top:
@@ -23,10 +27,19 @@ const HYPOCENTRE_DOWN_DIP_FRACTION = 0.6;
  * relation and the top of rupture follows from them, for the models that take these even
  * though the distances treat the rupture as a point (geometry/distances.ts).
  */
-export function pointRuptureContext(source: ZoneSource | PointSource, magnitude: number): RuptureContext {
+export function pointRuptureContext(
+  source: ZoneSource | PointSource,
+  magnitude: number,
+): RuptureContext {
   const dipDeg = POINT_DIP_DEG[source.mechanism];
-  const { widthKm } = scaledDimensions(scalingRelationFor(source.setting, source.mechanism), magnitude);
-  const ztorKm = Math.max(source.depthKm - HYPOCENTRE_DOWN_DIP_FRACTION * widthKm * Math.sin(toRadians(dipDeg)), 0);
+  const { widthKm } = scaledDimensions(
+    scalingRelationFor(source.setting, source.mechanism),
+    magnitude,
+  );
+  const ztorKm = Math.max(
+    source.depthKm - HYPOCENTRE_DOWN_DIP_FRACTION * widthKm * Math.sin(toRadians(dipDeg)),
+    0,
+  );
   return {
     magnitude,
     rakeDeg: source.rakeDeg,

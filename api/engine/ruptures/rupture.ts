@@ -21,7 +21,11 @@ export interface RupturePlane {
 }
 
 export type RuptureSurface =
-  | { readonly kind: 'planes'; readonly planes: readonly RupturePlane[]; readonly hypocentre: PointKm }
+  | {
+      readonly kind: 'planes';
+      readonly planes: readonly RupturePlane[];
+      readonly hypocentre: PointKm;
+    }
   | { readonly kind: 'point'; readonly hypocentre: PointKm };
 
 /**

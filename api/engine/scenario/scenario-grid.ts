@@ -47,7 +47,10 @@ export function scenarioGrid(options: ScenarioGridOptions): ScenarioGrid {
     xs.push(p.x);
     ys.push(p.y);
   }
-  const corners = rupture.surface.kind === 'planes' ? rupture.surface.planes.flatMap((p) => p.corners) : [rupture.surface.hypocentre];
+  const corners =
+    rupture.surface.kind === 'planes'
+      ? rupture.surface.planes.flatMap((p) => p.corners)
+      : [rupture.surface.hypocentre];
   for (const c of corners) {
     xs.push(c.x);
     ys.push(c.y);
@@ -57,15 +60,36 @@ export function scenarioGrid(options: ScenarioGridOptions): ScenarioGrid {
   const columns = Math.floor((Math.max(...xs) + GRID_MARGIN_KM - x0) / spacingKm) + 1;
   const rows = Math.floor((Math.max(...ys) + GRID_MARGIN_KM - y0) / spacingKm) + 1;
   if (columns * rows > options.maxPoints) {
-    throw new StudyTooLarge(columns * rows, options.maxPoints, `scenario grid points at ${spacingKm} km spacing`);
+    throw new StudyTooLarge(
+      columns * rows,
+      options.maxPoints,
+      `scenario grid points at ${spacingKm} km spacing`,
+    );
   }
-  const grid = { spacingKm, vs30: options.vs30, columns, rows, lon: [] as number[], lat: [] as number[], pgaMedianG: [] as number[], mmiMedian: [] as number[] };
+  const grid = {
+    spacingKm,
+    vs30: options.vs30,
+    columns,
+    rows,
+    lon: [] as number[],
+    lat: [] as number[],
+    pgaMedianG: [] as number[],
+    mmiMedian: [] as number[],
+  };
   for (let r = 0; r < rows; r++) {
     for (let c = 0; c < columns; c++) {
       const site = { x: x0 + c * spacingKm, y: y0 + r * spacingKm };
       const [lon, lat] = frame.toLonLat(site);
       const distances = ruptureDistances(rupture.surface, site);
-      const pga = siteMotions({ rupture, distances, vs30: options.vs30, vs30Measured: false, branches: options.branches, measures: ['PGA'], notes: options.notes }).PGA;
+      const pga = siteMotions({
+        rupture,
+        distances,
+        vs30: options.vs30,
+        vs30Measured: false,
+        branches: options.branches,
+        measures: ['PGA'],
+        notes: options.notes,
+      }).PGA;
       grid.lon.push(lon);
       grid.lat.push(lat);
       grid.pgaMedianG.push(pga?.median ?? 0);

@@ -1,7 +1,11 @@
 import { InvalidInput } from '../errors.ts';
 import { ruptureDistances } from '../geometry/distances.ts';
 import { floatingRuptureAt, floatingRuptures } from '../geometry/floating-ruptures.ts';
-import { fitDimensions, scaledDimensions, scalingRelationFor } from '../geometry/rupture-scaling.ts';
+import {
+  fitDimensions,
+  scaledDimensions,
+  scalingRelationFor,
+} from '../geometry/rupture-scaling.ts';
 import type { PointXY } from '../geometry/projection.ts';
 import type { PreparedSource } from '../ruptures/placement.ts';
 import { faultRupture, placeRuptures } from '../ruptures/placement.ts';
@@ -37,14 +41,23 @@ export type ScenarioRupture = Omit<Rupture, 'annualRate'>;
 export function candidateRuptures(prepared: PreparedSource, magnitude: number): ScenarioRupture[] {
   if (prepared.kind === 'fault') {
     const { surface, source } = prepared;
-    const size = fitDimensions(scaledDimensions(scalingRelationFor(source.setting, source.mechanism), magnitude), surface.lengthKm, surface.widthKm);
-    return floatingRuptures(surface, size, { spacingKm: prepared.spacingKm, endToEnd: true }).map((p) => faultRupture(prepared, magnitude, p));
+    const size = fitDimensions(
+      scaledDimensions(scalingRelationFor(source.setting, source.mechanism), magnitude),
+      surface.lengthKm,
+      surface.widthKm,
+    );
+    return floatingRuptures(surface, size, { spacingKm: prepared.spacingKm, endToEnd: true }).map(
+      (p) => faultRupture(prepared, magnitude, p),
+    );
   }
   return placeRuptures(prepared, magnitude).map(({ share: _share, ...rupture }) => rupture);
 }
 
 /** The candidate with the smallest Rrup to `site` (first one on ties). */
-export function closestRupture(candidates: readonly ScenarioRupture[], site: PointXY): ScenarioRupture {
+export function closestRupture(
+  candidates: readonly ScenarioRupture[],
+  site: PointXY,
+): ScenarioRupture {
   let best = candidates[0];
   let bestKm = Infinity;
   for (const rupture of candidates) {
@@ -54,33 +67,69 @@ export function closestRupture(candidates: readonly ScenarioRupture[], site: Poi
       best = rupture;
     }
   }
-  if (!best) throw new InvalidInput([{ path: 'sourceId', message: 'the source has no rupture positions at this magnitude' }]);
+  if (!best)
+    throw new InvalidInput([
+      { path: 'sourceId', message: 'the source has no rupture positions at this magnitude' },
+    ]);
   return best;
 }
 
 /** A fault rupture of `magnitude`'s scaled size starting at an explicit position on the surface. */
-export function faultRuptureAt(prepared: PreparedSource & { kind: 'fault' }, magnitude: number, alongStrikeKm: number, downDipKm: number): ScenarioRupture {
+export function faultRuptureAt(
+  prepared: PreparedSource & { kind: 'fault' },
+  magnitude: number,
+  alongStrikeKm: number,
+  downDipKm: number,
+): ScenarioRupture {
   const { surface, source } = prepared;
-  const size = fitDimensions(scaledDimensions(scalingRelationFor(source.setting, source.mechanism), magnitude), surface.lengthKm, surface.widthKm);
+  const size = fitDimensions(
+    scaledDimensions(scalingRelationFor(source.setting, source.mechanism), magnitude),
+    surface.lengthKm,
+    surface.widthKm,
+  );
   const maxAlong = surface.lengthKm - size.lengthKm;
   const maxDown = surface.widthKm - size.widthKm;
   const issues = [];
   if (!(alongStrikeKm >= 0 && alongStrikeKm <= maxAlong + 1e-9)) {
-    issues.push({ path: 'position.alongStrikeKm', message: `expected a number in [0, ${maxAlong.toFixed(1)}] km for a rupture ${size.lengthKm.toFixed(1)} km long, got ${alongStrikeKm}` });
+    issues.push({
+      path: 'position.alongStrikeKm',
+      message: `expected a number in [0, ${maxAlong.toFixed(1)}] km for a rupture ${size.lengthKm.toFixed(1)} km long, got ${alongStrikeKm}`,
+    });
   }
   if (!(downDipKm >= 0 && downDipKm <= maxDown + 1e-9)) {
-    issues.push({ path: 'position.downDipKm', message: `expected a number in [0, ${maxDown.toFixed(1)}] km for a rupture ${size.widthKm.toFixed(1)} km wide, got ${downDipKm}` });
+    issues.push({
+      path: 'position.downDipKm',
+      message: `expected a number in [0, ${maxDown.toFixed(1)}] km for a rupture ${size.widthKm.toFixed(1)} km wide, got ${downDipKm}`,
+    });
   }
   if (issues.length > 0) throw new InvalidInput(issues);
-  return faultRupture(prepared, magnitude, floatingRuptureAt(surface, size, alongStrikeKm, downDipKm));
+  return faultRupture(
+    prepared,
+    magnitude,
+    floatingRuptureAt(surface, size, alongStrikeKm, downDipKm),
+  );
 }
 
 /** A point rupture of a zone or point source with its epicentre at `epicentre`. */
-export function pointRuptureAt(candidates: readonly ScenarioRupture[], epicentre: PointXY): ScenarioRupture {
+export function pointRuptureAt(
+  candidates: readonly ScenarioRupture[],
+  epicentre: PointXY,
+): ScenarioRupture {
   const template = candidates[0];
   if (!template || template.surface.kind !== 'point') {
-    throw new InvalidInput([{ path: 'position', message: 'a lon/lat position needs a zone or point source; for a fault give alongStrikeKm and downDipKm' }]);
+    throw new InvalidInput([
+      {
+        path: 'position',
+        message:
+          'a lon/lat position needs a zone or point source; for a fault give alongStrikeKm and downDipKm',
+      },
+    ]);
   }
-  return { ...template, surface: { kind: 'point', hypocentre: { x: epicentre.x, y: epicentre.y, z: template.surface.hypocentre.z } } };
+  return {
+    ...template,
+    surface: {
+      kind: 'point',
+      hypocentre: { x: epicentre.x, y: epicentre.y, z: template.surface.hypocentre.z },
+    },
+  };
 }
-

@@ -36,7 +36,12 @@ export interface ScenarioCommunity {
   readonly rrupKm: number;
   readonly motions: Readonly<Record<string, ScenarioMotion>>;
   /** MMI from PGA (Worden et al. 2012) at the median and the 84th-percentile PGA. */
-  readonly mmi: { readonly median: number; readonly p84: number; readonly romanMedian: string; readonly romanP84: string };
+  readonly mmi: {
+    readonly median: number;
+    readonly p84: number;
+    readonly romanMedian: string;
+    readonly romanP84: string;
+  };
 }
 
 export interface ScenarioResult {
@@ -64,19 +69,41 @@ export const MAX_SCENARIO_GRID_POINTS = 40_000;
  * size follows the source's magnitude–area scaling (as in the hazard); where it goes follows
  * `request.position` (default 'closest', see ScenarioPosition).
  */
-export function runScenario(study: Study, models: ModelCatalog, request: ScenarioRequest): ScenarioResult {
+export function runScenario(
+  study: Study,
+  models: ModelCatalog,
+  request: ScenarioRequest,
+): ScenarioResult {
   const sourceIndex = study.sources.findIndex((s) => s.id === request.sourceId);
   const source = study.sources[sourceIndex];
   if (!source) {
-    throw new InvalidInput([{ path: 'sourceId', message: `unknown source "${request.sourceId}"; expected one of ${study.sources.map((s) => s.id).join(', ')}` }]);
+    throw new InvalidInput([
+      {
+        path: 'sourceId',
+        message: `unknown source "${request.sourceId}"; expected one of ${study.sources.map((s) => s.id).join(', ')}`,
+      },
+    ]);
   }
   if (!(request.magnitude >= 3 && request.magnitude <= 9.6)) {
-    throw new InvalidInput([{ path: 'magnitude', message: `expected a moment magnitude in [3, 9.6], got ${request.magnitude}` }]);
+    throw new InvalidInput([
+      {
+        path: 'magnitude',
+        message: `expected a moment magnitude in [3, 9.6], got ${request.magnitude}`,
+      },
+    ]);
   }
   const warnings = new Set<string>();
-  const range = source.recurrence.type === 'fixed' ? [source.recurrence.magnitude, source.recurrence.magnitude] : [source.recurrence.mMin, source.recurrence.mMax];
-  if (request.magnitude < (range[0] as number) - 1e-9 || request.magnitude > (range[1] as number) + 1e-9) {
-    warnings.add(`M ${request.magnitude} is outside the magnitudes the study gives ${source.name} (${range[0]}–${range[1]})`);
+  const range =
+    source.recurrence.type === 'fixed'
+      ? [source.recurrence.magnitude, source.recurrence.magnitude]
+      : [source.recurrence.mMin, source.recurrence.mMax];
+  if (
+    request.magnitude < (range[0] as number) - 1e-9 ||
+    request.magnitude > (range[1] as number) + 1e-9
+  ) {
+    warnings.add(
+      `M ${request.magnitude} is outside the magnitudes the study gives ${source.name} (${range[0]}–${range[1]})`,
+    );
   }
   const frame = frameForStudy(study);
   const prepared = prepareSource(source, sourceIndex, frame, study.settings);
@@ -91,7 +118,11 @@ export function runScenario(study: Study, models: ModelCatalog, request: Scenari
   const position = request.position ?? (withGrid ? 'middle' : 'closest');
   if (position === 'closest' && withGrid) {
     throw new InvalidInput([
-      { path: 'position', message: '"closest" puts a different rupture beside each community, which one map cannot show; leave the position out (the middle of the source) or give one' },
+      {
+        path: 'position',
+        message:
+          '"closest" puts a different rupture beside each community, which one map cannot show; leave the position out (the middle of the source) or give one',
+      },
     ]);
   }
   const fixed = fixedRupture(study, frame, prepared, candidates, request.magnitude, position);
@@ -100,7 +131,15 @@ export function runScenario(study: Study, models: ModelCatalog, request: Scenari
     const site = frame.toLocal([community.lon, community.lat]);
     const rupture = fixed ?? closestRupture(candidates, site);
     const distances = ruptureDistances(rupture.surface, site);
-    const motions = siteMotions({ rupture, distances, vs30: community.vs30, vs30Measured: community.vs30Basis === 'measured', branches, measures, notes: warnings });
+    const motions = siteMotions({
+      rupture,
+      distances,
+      vs30: community.vs30,
+      vs30Measured: community.vs30Basis === 'measured',
+      branches,
+      measures,
+      notes: warnings,
+    });
     const pga = motions.PGA as ScenarioMotion;
     const median = mmiFromPga(pga.median);
     const p84 = mmiFromPga(pga.p84);
@@ -116,7 +155,16 @@ export function runScenario(study: Study, models: ModelCatalog, request: Scenari
 
   let grid: ReturnType<typeof scenarioGrid> | undefined;
   if (request.gridSpacingKm !== undefined && fixed !== undefined) {
-    grid = scenarioGrid({ study, frame, rupture: fixed, branches, spacingKm: request.gridSpacingKm, vs30: request.gridVs30 ?? 760, maxPoints: MAX_SCENARIO_GRID_POINTS, notes: warnings });
+    grid = scenarioGrid({
+      study,
+      frame,
+      rupture: fixed,
+      branches,
+      spacingKm: request.gridSpacingKm,
+      vs30: request.gridVs30 ?? 760,
+      maxPoints: MAX_SCENARIO_GRID_POINTS,
+      notes: warnings,
+    });
   }
   return {
     sourceId: source.id,
@@ -142,11 +190,21 @@ function fixedRupture(
   if (position === 'middle') return closestRupture(candidates, surfaceCentre(candidates));
   if ('communityId' in position) {
     const community = study.communities.find((c) => c.id === position.communityId);
-    if (!community) throw new InvalidInput([{ path: 'position.communityId', message: `unknown community "${position.communityId}"` }]);
+    if (!community)
+      throw new InvalidInput([
+        { path: 'position.communityId', message: `unknown community "${position.communityId}"` },
+      ]);
     return closestRupture(candidates, frame.toLocal([community.lon, community.lat]));
   }
   if ('alongStrikeKm' in position) {
-    if (prepared.kind !== 'fault') throw new InvalidInput([{ path: 'position', message: 'alongStrikeKm and downDipKm need a fault source; for a zone or point give lon and lat' }]);
+    if (prepared.kind !== 'fault')
+      throw new InvalidInput([
+        {
+          path: 'position',
+          message:
+            'alongStrikeKm and downDipKm need a fault source; for a zone or point give lon and lat',
+        },
+      ]);
     return faultRuptureAt(prepared, magnitude, position.alongStrikeKm, position.downDipKm);
   }
   return pointRuptureAt(candidates, frame.toLocal([position.lon, position.lat]));
@@ -164,9 +222,12 @@ function surfaceCentre(candidates: readonly ScenarioRupture[]): PointXY {
 }
 
 function describePosition(position: ScenarioPosition): string {
-  if (position === 'closest') return 'each community: the rupture position closest to it (worst case for each, not one earthquake)';
-  if (position === 'middle') return 'the rupture position nearest the middle of the source, for every community and the map';
+  if (position === 'closest')
+    return 'each community: the rupture position closest to it (worst case for each, not one earthquake)';
+  if (position === 'middle')
+    return 'the rupture position nearest the middle of the source, for every community and the map';
   if ('communityId' in position) return `the rupture position closest to ${position.communityId}`;
-  if ('alongStrikeKm' in position) return `starting ${position.alongStrikeKm} km along the trace and ${position.downDipKm} km down dip`;
+  if ('alongStrikeKm' in position)
+    return `starting ${position.alongStrikeKm} km along the trace and ${position.downDipKm} km down dip`;
   return `epicentre at ${position.lon}, ${position.lat}`;
 }

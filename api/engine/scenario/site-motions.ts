@@ -27,7 +27,12 @@ export interface SiteMotionOptions {
  */
 export function siteMotions(options: SiteMotionOptions): Record<string, ScenarioMotion> {
   const out: Record<string, ScenarioMotion> = {};
-  const input = { ...options.rupture.context, ...options.distances, vs30: options.vs30, vs30Measured: options.vs30Measured };
+  const input = {
+    ...options.rupture.context,
+    ...options.distances,
+    vs30: options.vs30,
+    vs30Measured: options.vs30Measured,
+  };
   for (const key of options.measures) {
     const measure = parseMeasure(key);
     let lnMedian = 0;
@@ -38,7 +43,11 @@ export function siteMotions(options: SiteMotionOptions): Record<string, Scenario
       sigma += weight * p.sigma;
       if (!p.applicable) for (const note of p.notes) options.notes.add(note);
     }
-    out[key] = { median: Math.exp(lnMedian), p84: Math.exp(lnMedian + sigma), unit: measureUnit(measure) };
+    out[key] = {
+      median: Math.exp(lnMedian),
+      p84: Math.exp(lnMedian + sigma),
+      unit: measureUnit(measure),
+    };
   }
   return out;
 }

@@ -8,7 +8,9 @@ import type { LonLat } from '../model.ts';
  * - `projected`: x east, y north in the units of a proj4 definition (`proj4`, e.g. a UTM zone in
  *   metres), named by `name` (an EPSG code or the file's own label) for messages.
  */
-export type GridCrs = { readonly kind: 'lonlat' } | { readonly kind: 'projected'; readonly name: string; readonly proj4: string };
+export type GridCrs =
+  | { readonly kind: 'lonlat' }
+  | { readonly kind: 'projected'; readonly name: string; readonly proj4: string };
 
 /**
  * A georeferenced raster of elevation, metres above sea level (negative below: bathymetry).
@@ -30,7 +32,9 @@ export interface ElevationGrid {
   readonly elevationM: Float32Array;
 }
 
-export type ElevationGridInit = Omit<ElevationGrid, 'elevationM'> & { readonly elevationM: ArrayLike<number> };
+export type ElevationGridInit = Omit<ElevationGrid, 'elevationM'> & {
+  readonly elevationM: ArrayLike<number>;
+};
 
 /**
  * Checks a grid's shape and georeferencing and builds it; every problem named with the file.
@@ -40,21 +44,53 @@ export type ElevationGridInit = Omit<ElevationGrid, 'elevationM'> & { readonly e
 export function createElevationGrid(init: ElevationGridInit): ElevationGrid {
   const { label, columns, rows, west, north, cellWidth, cellHeight, crs } = init;
   const problems: string[] = [];
-  if (!(Number.isInteger(columns) && columns >= 2 && Number.isInteger(rows) && rows >= 2)) problems.push(`expected at least 2 × 2 cells, got ${columns} × ${rows}`);
-  if (!(Number.isFinite(west) && Number.isFinite(north))) problems.push(`expected a finite origin, got west ${west}, north ${north}`);
-  if (!(cellWidth > 0 && cellHeight > 0 && Number.isFinite(cellWidth) && Number.isFinite(cellHeight))) {
+  if (!(Number.isInteger(columns) && columns >= 2 && Number.isInteger(rows) && rows >= 2))
+    problems.push(`expected at least 2 × 2 cells, got ${columns} × ${rows}`);
+  if (!(Number.isFinite(west) && Number.isFinite(north)))
+    problems.push(`expected a finite origin, got west ${west}, north ${north}`);
+  if (!(
+    cellWidth > 0 &&
+    cellHeight > 0 &&
+    Number.isFinite(cellWidth) &&
+    Number.isFinite(cellHeight)
+  )) {
     problems.push(`expected positive cell sizes, got ${cellWidth} × ${cellHeight}`);
   }
-  if (init.elevationM.length !== columns * rows) problems.push(`expected ${columns * rows} values (${columns} columns × ${rows} rows), got ${init.elevationM.length}`);
+  if (init.elevationM.length !== columns * rows)
+    problems.push(
+      `expected ${columns * rows} values (${columns} columns × ${rows} rows), got ${init.elevationM.length}`,
+    );
   if (problems.length === 0 && crs.kind === 'lonlat') {
     const east = west + columns * cellWidth;
     const south = north - rows * cellHeight;
-    if (west < -540 || east > 540 || south < -90 - 1e-9 || north > 90 + 1e-9 || columns * cellWidth > 360 + 1e-9) {
-      problems.push(`a longitude/latitude grid must lie within ±90° latitude and span at most 360°, got lon ${west} to ${east}, lat ${south} to ${north}`);
+    if (
+      west < -540 ||
+      east > 540 ||
+      south < -90 - 1e-9 ||
+      north > 90 + 1e-9 ||
+      columns * cellWidth > 360 + 1e-9
+    ) {
+      problems.push(
+        `a longitude/latitude grid must lie within ±90° latitude and span at most 360°, got lon ${west} to ${east}, lat ${south} to ${north}`,
+      );
     }
   }
-  if (problems.length > 0) throw new InvalidInput(problems.map((message) => ({ path: label, message })), 'unusable terrain grid');
-  return { label, crs, columns, rows, west, north, cellWidth, cellHeight, elevationM: Float32Array.from(init.elevationM) };
+  if (problems.length > 0)
+    throw new InvalidInput(
+      problems.map((message) => ({ path: label, message })),
+      'unusable terrain grid',
+    );
+  return {
+    label,
+    crs,
+    columns,
+    rows,
+    west,
+    north,
+    cellWidth,
+    cellHeight,
+    elevationM: Float32Array.from(init.elevationM),
+  };
 }
 
 /** WGS84 [lon, lat] to the grid's own x, y. */
@@ -87,7 +123,10 @@ export function elevationAt(grid: ElevationGrid, x: number, y: number): number |
   const fv = v - r0;
   const i = r0 * grid.columns + c0;
   const z = grid.elevationM;
-  const z00 = z[i] as number, z01 = z[i + 1] as number, z10 = z[i + grid.columns] as number, z11 = z[i + grid.columns + 1] as number;
+  const z00 = z[i] as number,
+    z01 = z[i + 1] as number,
+    z10 = z[i + grid.columns] as number,
+    z11 = z[i + grid.columns + 1] as number;
   const value = (1 - fv) * ((1 - fu) * z00 + fu * z01) + fv * ((1 - fu) * z10 + fu * z11);
   return Number.isNaN(value) ? null : value;
 }
@@ -112,12 +151,19 @@ export function gridToLonLat(grid: ElevationGrid): (x: number, y: number) => Lon
 /** Points along the edge of the grid's cell-centre extent, WGS84, `perSide` to a side. */
 export function gridOutline(grid: ElevationGrid, perSide = 24): LonLat[] {
   const toLonLat = gridToLonLat(grid);
-  const x0 = grid.west + grid.cellWidth / 2, x1 = grid.west + (grid.columns - 0.5) * grid.cellWidth;
-  const y0 = grid.north - grid.cellHeight / 2, y1 = grid.north - (grid.rows - 0.5) * grid.cellHeight;
+  const x0 = grid.west + grid.cellWidth / 2,
+    x1 = grid.west + (grid.columns - 0.5) * grid.cellWidth;
+  const y0 = grid.north - grid.cellHeight / 2,
+    y1 = grid.north - (grid.rows - 0.5) * grid.cellHeight;
   const points: LonLat[] = [];
   for (let k = 0; k < perSide; k += 1) {
     const f = k / perSide;
-    points.push(toLonLat(x0 + f * (x1 - x0), y0), toLonLat(x1, y0 + f * (y1 - y0)), toLonLat(x1 - f * (x1 - x0), y1), toLonLat(x0, y1 - f * (y1 - y0)));
+    points.push(
+      toLonLat(x0 + f * (x1 - x0), y0),
+      toLonLat(x1, y0 + f * (y1 - y0)),
+      toLonLat(x1 - f * (x1 - x0), y1),
+      toLonLat(x0, y1 - f * (y1 - y0)),
+    );
   }
   return points;
 }

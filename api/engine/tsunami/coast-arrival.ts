@@ -53,8 +53,13 @@ export function coastArrival(fine: TravelTimes, coarse: TravelTimes, site: Point
   const nearFine = nearestSea(fine, site);
   if (!nearFine.ok) return nearFine;
   const coastPoint = cellCentre(fine.grid, nearFine.index);
-  let lowS = Infinity, highS = -Infinity;
-  for (const i of cellsWithin(fine.grid, coastPoint, Math.max(COAST_BAND_KM, 1.5 * fine.grid.spacingKm))) {
+  let lowS = Infinity,
+    highS = -Infinity;
+  for (const i of cellsWithin(
+    fine.grid,
+    coastPoint,
+    Math.max(COAST_BAND_KM, 1.5 * fine.grid.spacingKm),
+  )) {
     const t = fine.timesS[i] as number;
     if (!((fine.grid.elevationM[i] as number) < 0) || t === Infinity) continue;
     lowS = Math.min(lowS, t);
@@ -64,14 +69,27 @@ export function coastArrival(fine: TravelTimes, coarse: TravelTimes, site: Point
   const nearCoarse = nearestSea(coarse, site);
   const gridErrorS = nearCoarse.ok ? Math.abs((coarse.timesS[nearCoarse.index] as number) - tS) : 0;
   const first = Math.max(0, Math.floor(((lowS - gridErrorS) * (1 - MODEL_ALLOWANCE)) / 60));
-  const latest = Math.max(first + 1, Math.floor(((highS + gridErrorS) * (1 + MODEL_ALLOWANCE)) / 60));
-  return { ok: true, firstArrivalMinutes: first, latestMinutes: latest, gridMinutes: tS / 60, coastDistanceKm: nearFine.distanceKm };
+  const latest = Math.max(
+    first + 1,
+    Math.floor(((highS + gridErrorS) * (1 + MODEL_ALLOWANCE)) / 60),
+  );
+  return {
+    ok: true,
+    firstArrivalMinutes: first,
+    latestMinutes: latest,
+    gridMinutes: tS / 60,
+    coastDistanceKm: nearFine.distanceKm,
+  };
 }
 
 /** The sea cell reached by the wave nearest to `site` within COAST_SEARCH_KM, or why there is none. */
-function nearestSea(solve: TravelTimes, site: PointXY): { ok: true; index: number; distanceKm: number } | { ok: false; problem: string } {
+function nearestSea(
+  solve: TravelTimes,
+  site: PointXY,
+): { ok: true; index: number; distanceKm: number } | { ok: false; problem: string } {
   let sea = 0;
-  let best = -1, bestKm = Infinity;
+  let best = -1,
+    bestKm = Infinity;
   for (const i of cellsWithin(solve.grid, site, COAST_SEARCH_KM)) {
     if (!((solve.grid.elevationM[i] as number) < 0)) continue;
     sea += 1;
@@ -83,7 +101,15 @@ function nearestSea(solve: TravelTimes, site: PointXY): { ok: true; index: numbe
       best = i;
     }
   }
-  if (sea === 0) return { ok: false, problem: `no sea within ${COAST_SEARCH_KM} km on the terrain grid; expected a coastal community near the shore (check its position, its coastal flag and the grid)` };
-  if (best < 0) return { ok: false, problem: `the sea within ${COAST_SEARCH_KM} km on the terrain grid is not reached from the source (walled in by land on the grid)` };
+  if (sea === 0)
+    return {
+      ok: false,
+      problem: `no sea within ${COAST_SEARCH_KM} km on the terrain grid; expected a coastal community near the shore (check its position, its coastal flag and the grid)`,
+    };
+  if (best < 0)
+    return {
+      ok: false,
+      problem: `the sea within ${COAST_SEARCH_KM} km on the terrain grid is not reached from the source (walled in by land on the grid)`,
+    };
   return { ok: true, index: best, distanceKm: bestKm };
 }

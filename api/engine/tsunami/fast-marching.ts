@@ -55,8 +55,16 @@ export function fastMarching(grid: FastMarchingGrid, start: readonly StartCell[]
 
   // The upwind neighbours of cell i along one axis (step ±1 or ±columns): the accepted first
   // neighbour with the smaller time, and the next one beyond it when accepted too (else Infinity).
-  let t1 = Infinity, t2 = Infinity;
-  const axis = (i: number, step: number, lowOk: boolean, lowOk2: boolean, highOk: boolean, highOk2: boolean) => {
+  let t1 = Infinity,
+    t2 = Infinity;
+  const axis = (
+    i: number,
+    step: number,
+    lowOk: boolean,
+    lowOk2: boolean,
+    highOk: boolean,
+    highOk2: boolean,
+  ) => {
     t1 = Infinity;
     t2 = Infinity;
     if (lowOk && state[i - step] === ACCEPTED) {
@@ -73,7 +81,8 @@ export function fastMarching(grid: FastMarchingGrid, start: readonly StartCell[]
     const c = i % columns;
     const r = (i - c) / columns;
     axis(i, 1, c > 0, c > 1, c < columns - 1, c < columns - 2);
-    const x1 = t1, x2 = t2;
+    const x1 = t1,
+      x2 = t2;
     axis(i, columns, r > 0, r > 1, r < rows - 1, r < rows - 2);
     const t = solveUpdate(x1, x2, t1, t2, (slowness[i] as number) * h);
     if (t < (time[i] as number)) {
@@ -110,8 +119,10 @@ export function fastMarching(grid: FastMarchingGrid, start: readonly StartCell[]
  */
 function solveUpdate(x1: number, x2: number, y1: number, y2: number, sh: number): number {
   if (x1 === Infinity && y1 === Infinity) return Infinity;
-  const ax = x2 <= x1 ? 9 / 4 : 1, tx = x2 <= x1 ? (4 * x1 - x2) / 3 : x1;
-  const ay = y2 <= y1 ? 9 / 4 : 1, ty = y2 <= y1 ? (4 * y1 - y2) / 3 : y1;
+  const ax = x2 <= x1 ? 9 / 4 : 1,
+    tx = x2 <= x1 ? (4 * x1 - x2) / 3 : x1;
+  const ay = y2 <= y1 ? 9 / 4 : 1,
+    ty = y2 <= y1 ? (4 * y1 - y2) / 3 : y1;
   if (y1 === Infinity) return tx + sh / Math.sqrt(ax);
   if (x1 === Infinity) return ty + sh / Math.sqrt(ay);
   const oneAxis = tx <= ty ? tx + sh / Math.sqrt(ax) : ty + sh / Math.sqrt(ay);
@@ -129,7 +140,10 @@ class TimeHeap {
   private readonly position: Int32Array;
   size = 0;
 
-  constructor(capacity: number, private readonly time: Float64Array) {
+  constructor(
+    capacity: number,
+    private readonly time: Float64Array,
+  ) {
     this.cells = new Int32Array(capacity);
     this.position = new Int32Array(capacity).fill(-1);
   }

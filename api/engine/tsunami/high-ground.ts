@@ -21,7 +21,12 @@ export const HIGH_GROUND_STEP_KM = 0.05;
 export const SLOW_WALK_MS = 1.1;
 
 export type HighGround =
-  | { readonly kind: 'already-above'; readonly heightM: number; readonly elevationM: number; readonly basis: 'community' | 'terrain' }
+  | {
+      readonly kind: 'already-above';
+      readonly heightM: number;
+      readonly elevationM: number;
+      readonly basis: 'community' | 'terrain';
+    }
   | {
       readonly kind: 'found';
       readonly heightM: number;
@@ -44,11 +49,20 @@ export type HighGround =
  * it taken. The community's own `elevationM`, when given, says whether it already stands there
  * (the terrain's value at its position otherwise).
  */
-export function highGround(grid: ElevationGrid, community: Community, heightM: number = DEFAULT_HIGH_GROUND_M): HighGround {
+export function highGround(
+  grid: ElevationGrid,
+  community: Community,
+  heightM: number = DEFAULT_HIGH_GROUND_M,
+): HighGround {
   const sample = elevationSampler(grid);
   const here = community.elevationM ?? sample([community.lon, community.lat]);
   if (here !== null && here >= heightM) {
-    return { kind: 'already-above', heightM, elevationM: here, basis: community.elevationM === undefined ? 'terrain' : 'community' };
+    return {
+      kind: 'already-above',
+      heightM,
+      elevationM: here,
+      basis: community.elevationM === undefined ? 'terrain' : 'community',
+    };
   }
   const frame = createLocalFrame([community.lon, community.lat]);
   const rings = Math.ceil(HIGH_GROUND_SEARCH_KM / HIGH_GROUND_STEP_KM);
@@ -58,11 +72,16 @@ export function highGround(grid: ElevationGrid, community: Community, heightM: n
     let best: { z: number; angle: number } | undefined;
     for (let j = 0; j < points; j += 1) {
       const angle = (2 * Math.PI * j) / points;
-      const z = sample(frame.toLonLat({ x: radiusKm * Math.sin(angle), y: radiusKm * Math.cos(angle) }));
+      const z = sample(
+        frame.toLonLat({ x: radiusKm * Math.sin(angle), y: radiusKm * Math.cos(angle) }),
+      );
       if (z !== null && z >= heightM && (best === undefined || z > best.z)) best = { z, angle };
     }
     if (best) {
-      const [lon, lat] = frame.toLonLat({ x: radiusKm * Math.sin(best.angle), y: radiusKm * Math.cos(best.angle) });
+      const [lon, lat] = frame.toLonLat({
+        x: radiusKm * Math.sin(best.angle),
+        y: radiusKm * Math.cos(best.angle),
+      });
       return {
         kind: 'found',
         heightM,

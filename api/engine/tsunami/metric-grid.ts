@@ -1,5 +1,10 @@
 import type { LocalFrame, PointXY } from '../geometry/projection.ts';
-import { elevationAt, gridCoordinates, gridOutline, type ElevationGrid } from '../terrain/elevation-grid.ts';
+import {
+  elevationAt,
+  gridCoordinates,
+  gridOutline,
+  type ElevationGrid,
+} from '../terrain/elevation-grid.ts';
 
 /**
  * An elevation grid resampled onto square cells of the study's local frame (x east, y north,
@@ -23,8 +28,14 @@ const LATTICE_STRIDE = 8;
 export const MAX_METRIC_CELLS = 1_000_000;
 
 /** The bounding box of the terrain's cell centres in the local frame, km. */
-export function terrainExtentKm(grid: ElevationGrid, frame: LocalFrame): { west: number; east: number; south: number; north: number } {
-  let west = Infinity, east = -Infinity, south = Infinity, north = -Infinity;
+export function terrainExtentKm(
+  grid: ElevationGrid,
+  frame: LocalFrame,
+): { west: number; east: number; south: number; north: number } {
+  let west = Infinity,
+    east = -Infinity,
+    south = Infinity,
+    north = -Infinity;
   for (const lonLat of gridOutline(grid)) {
     const { x, y } = frame.toLocal(lonLat);
     west = Math.min(west, x);
@@ -38,7 +49,10 @@ export function terrainExtentKm(grid: ElevationGrid, frame: LocalFrame): { west:
 /** The side of one terrain cell in km near the grid's middle: the shorter of its two sides. */
 export function nativeCellKm(grid: ElevationGrid, frame: LocalFrame): number {
   const extent = terrainExtentKm(grid, frame);
-  return Math.min((extent.east - extent.west) / (grid.columns - 1), (extent.north - extent.south) / (grid.rows - 1));
+  return Math.min(
+    (extent.east - extent.west) / (grid.columns - 1),
+    (extent.north - extent.south) / (grid.rows - 1),
+  );
 }
 
 /**
@@ -47,7 +61,8 @@ export function nativeCellKm(grid: ElevationGrid, frame: LocalFrame): number {
  */
 export function metricGrid(grid: ElevationGrid, frame: LocalFrame, spacingKm: number): MetricGrid {
   const extent = terrainExtentKm(grid, frame);
-  const widthKm = extent.east - extent.west, heightKm = extent.north - extent.south;
+  const widthKm = extent.east - extent.west,
+    heightKm = extent.north - extent.south;
   const spacing = Math.max(spacingKm, Math.sqrt((widthKm * heightKm) / MAX_METRIC_CELLS));
   const columns = Math.max(2, Math.floor(widthKm / spacing));
   const rows = Math.max(2, Math.floor(heightKm / spacing));
@@ -59,23 +74,41 @@ export function metricGrid(grid: ElevationGrid, frame: LocalFrame, spacingKm: nu
   const lattice = new Float64Array(2 * latticeColumns * latticeRows);
   for (let lr = 0; lr < latticeRows; lr += 1) {
     for (let lc = 0; lc < latticeColumns; lc += 1) {
-      const [x, y] = toGrid(frame.toLonLat({ x: extent.west + (lc * LATTICE_STRIDE + 0.5) * spacing, y: extent.north - (lr * LATTICE_STRIDE + 0.5) * spacing }));
+      const [x, y] = toGrid(
+        frame.toLonLat({
+          x: extent.west + (lc * LATTICE_STRIDE + 0.5) * spacing,
+          y: extent.north - (lr * LATTICE_STRIDE + 0.5) * spacing,
+        }),
+      );
       lattice[2 * (lr * latticeColumns + lc)] = x;
       lattice[2 * (lr * latticeColumns + lc) + 1] = y;
     }
   }
   const elevationM = new Float32Array(columns * rows);
   for (let r = 0; r < rows; r += 1) {
-    const lr = Math.floor(r / LATTICE_STRIDE), fr = (r % LATTICE_STRIDE) / LATTICE_STRIDE;
+    const lr = Math.floor(r / LATTICE_STRIDE),
+      fr = (r % LATTICE_STRIDE) / LATTICE_STRIDE;
     for (let c = 0; c < columns; c += 1) {
-      const lc = Math.floor(c / LATTICE_STRIDE), fc = (c % LATTICE_STRIDE) / LATTICE_STRIDE;
-      const k00 = 2 * (lr * latticeColumns + lc), k01 = k00 + 2, k10 = k00 + 2 * latticeColumns, k11 = k10 + 2;
+      const lc = Math.floor(c / LATTICE_STRIDE),
+        fc = (c % LATTICE_STRIDE) / LATTICE_STRIDE;
+      const k00 = 2 * (lr * latticeColumns + lc),
+        k01 = k00 + 2,
+        k10 = k00 + 2 * latticeColumns,
+        k11 = k10 + 2;
       const at = (o: number) =>
-        (1 - fr) * ((1 - fc) * (lattice[k00 + o] as number) + fc * (lattice[k01 + o] as number)) + fr * ((1 - fc) * (lattice[k10 + o] as number) + fc * (lattice[k11 + o] as number));
+        (1 - fr) * ((1 - fc) * (lattice[k00 + o] as number) + fc * (lattice[k01 + o] as number)) +
+        fr * ((1 - fc) * (lattice[k10 + o] as number) + fc * (lattice[k11 + o] as number));
       elevationM[r * columns + c] = elevationAt(grid, at(0), at(1)) ?? NaN;
     }
   }
-  return { columns, rows, westKm: extent.west, northKm: extent.north, spacingKm: spacing, elevationM };
+  return {
+    columns,
+    rows,
+    westKm: extent.west,
+    northKm: extent.north,
+    spacingKm: spacing,
+    elevationM,
+  };
 }
 
 export const cellCentre = (m: MetricGrid, index: number): PointXY => {

@@ -22,9 +22,18 @@ export interface SourceArea {
 /** The surface projection of a rupture surface: one quadrilateral per plane. */
 export function ruptureArea(sourceId: string, name: string, surface: RuptureSurface): SourceArea {
   if (surface.kind === 'point') {
-    throw new InvalidInput([{ path: 'sourceId', message: `source "${sourceId}" has a point rupture, with no area for a tsunami to start from; expected a fault or zone interface source` }]);
+    throw new InvalidInput([
+      {
+        path: 'sourceId',
+        message: `source "${sourceId}" has a point rupture, with no area for a tsunami to start from; expected a fault or zone interface source`,
+      },
+    ]);
   }
-  return { sourceId, name, footprints: surface.planes.map((p) => p.corners.map(({ x, y }) => ({ x, y }))) };
+  return {
+    sourceId,
+    name,
+    footprints: surface.planes.map((p) => p.corners.map(({ x, y }) => ({ x, y }))),
+  };
 }
 
 /**
@@ -33,9 +42,18 @@ export function ruptureArea(sourceId: string, name: string, surface: RuptureSurf
  * from any rupture on it comes from some part of this area.
  */
 export function interfaceSourceArea(source: Source, frame: LocalFrame): SourceArea {
-  if (source.kind === 'fault') return ruptureArea(source.id, source.name, wholeSurface(faultSurface(source, frame)));
-  if (source.kind === 'zone') return { sourceId: source.id, name: source.name, footprints: [(source.rings[0] ?? []).map((p) => frame.toLocal(p))] };
-  return ruptureArea(source.id, source.name, { kind: 'point', hypocentre: { ...frame.toLocal(source.location), z: source.depthKm } });
+  if (source.kind === 'fault')
+    return ruptureArea(source.id, source.name, wholeSurface(faultSurface(source, frame)));
+  if (source.kind === 'zone')
+    return {
+      sourceId: source.id,
+      name: source.name,
+      footprints: [(source.rings[0] ?? []).map((p) => frame.toLocal(p))],
+    };
+  return ruptureArea(source.id, source.name, {
+    kind: 'point',
+    hypocentre: { ...frame.toLocal(source.location), z: source.depthKm },
+  });
 }
 
 /**
@@ -43,14 +61,22 @@ export function interfaceSourceArea(source: Source, frame: LocalFrame): SourceAr
  * zero. The whole area must lie on the terrain: a corner off the grid or on missing data means
  * the grid does not cover the source, and an area with no water cell cannot start a tsunami.
  */
-export function startCells(m: MetricGrid, area: SourceArea, terrainLabel: string, toLonLat: (p: PointXY) => readonly [number, number]): StartCell[] {
+export function startCells(
+  m: MetricGrid,
+  area: SourceArea,
+  terrainLabel: string,
+  toLonLat: (p: PointXY) => readonly [number, number],
+): StartCell[] {
   for (const footprint of area.footprints) {
     for (const corner of footprint) {
       const index = cellIndexAt(m, corner);
       if (index < 0 || Number.isNaN(m.elevationM[index])) {
         const [lon, lat] = toLonLat(corner);
         throw new InvalidInput([
-          { path: 'terrain', message: `the terrain grid "${terrainLabel}" does not cover the rupture area of source "${area.sourceId}": its corner at lon ${lon.toFixed(3)}, lat ${lat.toFixed(3)} is off the grid or on missing data; expected a grid covering the whole source` },
+          {
+            path: 'terrain',
+            message: `the terrain grid "${terrainLabel}" does not cover the rupture area of source "${area.sourceId}": its corner at lon ${lon.toFixed(3)}, lat ${lat.toFixed(3)} is off the grid or on missing data; expected a grid covering the whole source`,
+          },
         ]);
       }
     }
@@ -66,11 +92,23 @@ export function startCells(m: MetricGrid, area: SourceArea, terrainLabel: string
   for (let index = 0; index < m.elevationM.length; index += 1) {
     if (!((m.elevationM[index] as number) < 0)) continue;
     const { x, y } = cellCentre(m, index);
-    const inside = polygons.some((p) => x >= p.west && x <= p.east && y >= p.south && y <= p.north && booleanPointInPolygon([x, y], p.shape));
+    const inside = polygons.some(
+      (p) =>
+        x >= p.west &&
+        x <= p.east &&
+        y >= p.south &&
+        y <= p.north &&
+        booleanPointInPolygon([x, y], p.shape),
+    );
     if (inside) cells.push({ index, timeS: 0 });
   }
   if (cells.length === 0) {
-    throw new InvalidInput([{ path: 'terrain', message: `the rupture area of source "${area.sourceId}" has no sea on the terrain grid "${terrainLabel}"; expected part of it below sea level` }]);
+    throw new InvalidInput([
+      {
+        path: 'terrain',
+        message: `the rupture area of source "${area.sourceId}" has no sea on the terrain grid "${terrainLabel}"; expected part of it below sea level`,
+      },
+    ]);
   }
   return cells;
 }

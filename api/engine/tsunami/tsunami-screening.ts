@@ -41,7 +41,13 @@ export interface TsunamiCommunity {
 }
 
 export interface TsunamiResult {
-  readonly terrain: { readonly label: string; readonly spacingKm: number; readonly coarseSpacingKm: number; readonly columns: number; readonly rows: number };
+  readonly terrain: {
+    readonly label: string;
+    readonly spacingKm: number;
+    readonly coarseSpacingKm: number;
+    readonly columns: number;
+    readonly rows: number;
+  };
   readonly sources: readonly { readonly sourceId: string; readonly name: string }[];
   readonly highGroundM: number;
   /** Coastal communities only, in study order. */
@@ -56,19 +62,41 @@ export const MIN_SOLVE_SPACING_KM = 0.25;
  * source's area at the coast nearest each (fast marching of √(g h), fast-marching.ts) and the
  * nearest high ground (high-ground.ts).
  */
-export function tsunamiScreening(study: Study, grid: ElevationGrid, options: TsunamiOptions = {}): TsunamiResult {
+export function tsunamiScreening(
+  study: Study,
+  grid: ElevationGrid,
+  options: TsunamiOptions = {},
+): TsunamiResult {
   const frame = frameForStudy(study);
   const interfaces = study.sources.filter((s) => s.setting === 'interface');
   let chosen = interfaces;
   if (options.sourceIds !== undefined) {
     const unknown = options.sourceIds.filter((id) => !interfaces.some((s) => s.id === id));
     if (unknown.length > 0) {
-      throw new InvalidInput([{ path: 'source', message: `not an interface source of the study: ${unknown.join(', ')}; expected one of ${interfaces.map((s) => s.id).join(', ') || '(none)'}` }]);
+      throw new InvalidInput([
+        {
+          path: 'source',
+          message: `not an interface source of the study: ${unknown.join(', ')}; expected one of ${interfaces.map((s) => s.id).join(', ') || '(none)'}`,
+        },
+      ]);
     }
     chosen = interfaces.filter((s) => options.sourceIds?.includes(s.id));
   }
-  if (chosen.length === 0) throw new InvalidInput([{ path: 'sources', message: 'the study has no interface source for a tsunami to start from; expected at least one source with setting "interface"' }]);
-  return arrivalsFromAreas(study, grid, frame, chosen.map((s) => interfaceSourceArea(s, frame)), options.highGroundM ?? DEFAULT_HIGH_GROUND_M);
+  if (chosen.length === 0)
+    throw new InvalidInput([
+      {
+        path: 'sources',
+        message:
+          'the study has no interface source for a tsunami to start from; expected at least one source with setting "interface"',
+      },
+    ]);
+  return arrivalsFromAreas(
+    study,
+    grid,
+    frame,
+    chosen.map((s) => interfaceSourceArea(s, frame)),
+    options.highGroundM ?? DEFAULT_HIGH_GROUND_M,
+  );
 }
 
 /** The two grids a solve runs on: the terrain's own cell size (MIN_SOLVE_SPACING_KM at the finest) and twice it. */
@@ -83,8 +111,21 @@ export function solveGrids(grid: ElevationGrid, frame: LocalFrame): SolveGrids {
 }
 
 /** The same for given source areas (a scenario's rupture, source-area.ts), in the study's frame. */
-export function arrivalsFromAreas(study: Study, grid: ElevationGrid, frame: LocalFrame, areas: readonly SourceArea[], highGroundM: number, grids: SolveGrids = solveGrids(grid, frame)): TsunamiResult {
-  if (!(highGroundM > 0 && highGroundM <= 1000)) throw new InvalidInput([{ path: 'highGroundM', message: `expected a height above sea level in (0, 1000] m, got ${highGroundM}` }]);
+export function arrivalsFromAreas(
+  study: Study,
+  grid: ElevationGrid,
+  frame: LocalFrame,
+  areas: readonly SourceArea[],
+  highGroundM: number,
+  grids: SolveGrids = solveGrids(grid, frame),
+): TsunamiResult {
+  if (!(highGroundM > 0 && highGroundM <= 1000))
+    throw new InvalidInput([
+      {
+        path: 'highGroundM',
+        message: `expected a height above sea level in (0, 1000] m, got ${highGroundM}`,
+      },
+    ]);
   const { fine, coarse } = grids;
   const toLonLat = frame.toLonLat.bind(frame);
   const solves = areas.map((area) => ({
@@ -100,10 +141,26 @@ export function arrivalsFromAreas(study: Study, grid: ElevationGrid, frame: Loca
       const arrivals: SourceArrival[] = [];
       for (const s of solves) {
         const arrival = coastArrival(s.fine, s.coarse, site);
-        if (arrival.ok) arrivals.push({ sourceId: s.area.sourceId, firstArrivalMinutes: arrival.firstArrivalMinutes, latestMinutes: arrival.latestMinutes, gridMinutes: arrival.gridMinutes, coastDistanceKm: arrival.coastDistanceKm });
-        else problems.push(`community "${community.id}" (${community.name}), source "${s.area.sourceId}": ${arrival.problem}`);
+        if (arrival.ok)
+          arrivals.push({
+            sourceId: s.area.sourceId,
+            firstArrivalMinutes: arrival.firstArrivalMinutes,
+            latestMinutes: arrival.latestMinutes,
+            gridMinutes: arrival.gridMinutes,
+            coastDistanceKm: arrival.coastDistanceKm,
+          });
+        else
+          problems.push(
+            `community "${community.id}" (${community.name}), source "${s.area.sourceId}": ${arrival.problem}`,
+          );
       }
-      const earliest = arrivals.length === areas.length ? [...arrivals].sort((a, b) => a.firstArrivalMinutes - b.firstArrivalMinutes || a.latestMinutes - b.latestMinutes)[0] : undefined;
+      const earliest =
+        arrivals.length === areas.length
+          ? [...arrivals].sort(
+              (a, b) =>
+                a.firstArrivalMinutes - b.firstArrivalMinutes || a.latestMinutes - b.latestMinutes,
+            )[0]
+          : undefined;
       return {
         id: community.id,
         name: community.name,
@@ -116,13 +173,24 @@ export function arrivalsFromAreas(study: Study, grid: ElevationGrid, frame: Loca
       };
     });
   return {
-    terrain: { label: grid.label, spacingKm: fine.spacingKm, coarseSpacingKm: coarse.spacingKm, columns: fine.columns, rows: fine.rows },
+    terrain: {
+      label: grid.label,
+      spacingKm: fine.spacingKm,
+      coarseSpacingKm: coarse.spacingKm,
+      columns: fine.columns,
+      rows: fine.rows,
+    },
     sources: areas.map((a) => ({ sourceId: a.sourceId, name: a.name })),
     highGroundM,
     communities,
   };
 }
 
-function solve(m: MetricGrid, area: SourceArea, label: string, toLonLat: (p: { x: number; y: number }) => readonly [number, number]): TravelTimes {
+function solve(
+  m: MetricGrid,
+  area: SourceArea,
+  label: string,
+  toLonLat: (p: { x: number; y: number }) => readonly [number, number],
+): TravelTimes {
   return { grid: m, timesS: fastMarching(longWaveGrid(m), startCells(m, area, label, toLonLat)) };
 }

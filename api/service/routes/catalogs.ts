@@ -2,7 +2,12 @@ import { Hono } from 'hono';
 import { fitCatalog } from '../../catalog/catalog-fit.ts';
 import { catalogFormat } from '../../catalog/catalog-formats.ts';
 import { readCatalogText } from '../../catalog/catalog-input.ts';
-import { catalogEventJson, catalogFitJson, catalogLoadJson, feltJson } from '../../catalog/catalog-json.ts';
+import {
+  catalogEventJson,
+  catalogFitJson,
+  catalogLoadJson,
+  feltJson,
+} from '../../catalog/catalog-json.ts';
 import type { CatalogLoad } from '../../catalog/catalog-load.ts';
 import { feltHistory } from '../../engine/catalog/felt-history.ts';
 import { InvalidInput } from '../../engine/errors.ts';
@@ -21,7 +26,11 @@ const catalogJson = (record: StudyCatalogRecord, load: CatalogLoad) => ({
   fileName: record.fileName,
   importedAt: record.importedAt,
   ...catalogLoadJson(load),
-  links: { self: `/api/studies/${record.studyId}/catalog`, felt: `/api/studies/${record.studyId}/felt`, study: `/api/studies/${record.studyId}` },
+  links: {
+    self: `/api/studies/${record.studyId}/catalog`,
+    felt: `/api/studies/${record.studyId}/felt`,
+    study: `/api/studies/${record.studyId}`,
+  },
 });
 
 /** Catalogs: attach one to a saved study, read or detach it, its felt history; stateless fits. */
@@ -37,11 +46,16 @@ export function catalogRoutes(ctx: ServiceContext): Hono {
   const findCatalog = (id: string): StudyCatalogRecord => {
     findStudy(id);
     const record = store.catalogs.get(id);
-    if (!record) throw new HttpError(404, `study "${id}" has no catalog attached; attach one with PUT /api/studies/${id}/catalog`);
+    if (!record)
+      throw new HttpError(
+        404,
+        `study "${id}" has no catalog attached; attach one with PUT /api/studies/${id}/catalog`,
+      );
     return record;
   };
   // A stored catalog was read before it was written, so it parses (and holds events) again.
-  const loadOf = (record: StudyCatalogRecord): CatalogLoad => readCatalogText(record.content, record.format);
+  const loadOf = (record: StudyCatalogRecord): CatalogLoad =>
+    readCatalogText(record.content, record.format);
 
   app.put('/studies/:id/catalog', async (c) => {
     const id = c.req.param('id');
@@ -70,7 +84,8 @@ export function catalogRoutes(ctx: ServiceContext): Hono {
   app.delete('/studies/:id/catalog', (c) => {
     const id = c.req.param('id');
     findCatalog(id);
-    if (!store.catalogs.delete(id)) throw new HttpError(404, `study "${id}" has no catalog attached`);
+    if (!store.catalogs.delete(id))
+      throw new HttpError(404, `study "${id}" has no catalog attached`);
     return c.body(null, 204);
   });
 
@@ -79,34 +94,66 @@ export function catalogRoutes(ctx: ServiceContext): Hono {
     const record = findCatalog(id);
     const magnitudes = c.req.query('magnitudes');
     if (magnitudes !== undefined && magnitudes !== 'moment' && magnitudes !== 'all') {
-      throw new InvalidInput([{ path: 'magnitudes', message: `expected "moment" or "all", got ${describeValue(magnitudes)}` }], 'invalid felt request');
+      throw new InvalidInput(
+        [
+          {
+            path: 'magnitudes',
+            message: `expected "moment" or "all", got ${describeValue(magnitudes)}`,
+          },
+        ],
+        'invalid felt request',
+      );
     }
     const inputs = storedInputs(store, findStudy(id));
     const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
     const communityId = c.req.query('community');
-    const communities = communityId === undefined ? study.communities : study.communities.filter((x) => x.id === communityId);
+    const communities =
+      communityId === undefined
+        ? study.communities
+        : study.communities.filter((x) => x.id === communityId);
     if (communities.length === 0) {
       throw new HttpError(404, `no community "${communityId}" in study "${id}"`, [
-        { path: 'community', message: `expected one of ${study.communities.map((x) => x.id).join(', ')}, got ${describeValue(communityId)}` },
+        {
+          path: 'community',
+          message: `expected one of ${study.communities.map((x) => x.id).join(', ')}, got ${describeValue(communityId)}`,
+        },
       ]);
     }
     const load = loadOf(record);
     const pairs = load.events.length * communities.length;
     if (pairs > FELT_PAIR_BUDGET) {
       throw new InvalidInput([
-        { path: 'catalog', message: `expected at most ${FELT_PAIR_BUDGET} catalog events × communities for one felt history; got ${load.events.length} × ${communities.length} = ${pairs}. Ask for one community at a time` },
+        {
+          path: 'catalog',
+          message: `expected at most ${FELT_PAIR_BUDGET} catalog events × communities for one felt history; got ${load.events.length} × ${communities.length} = ${pairs}. Ask for one community at a time`,
+        },
       ]);
     }
-    const history = feltHistory({ ...study, communities }, load.events, { models: ctx.models, ...(magnitudes === 'all' ? { magnitudes } : {}) });
-    return c.json({ studyId: id, catalog: { fileName: record.fileName, format: record.format, importedAt: record.importedAt }, ...feltJson(history) });
+    const history = feltHistory({ ...study, communities }, load.events, {
+      models: ctx.models,
+      ...(magnitudes === 'all' ? { magnitudes } : {}),
+    });
+    return c.json({
+      studyId: id,
+      catalog: { fileName: record.fileName, format: record.format, importedAt: record.importedAt },
+      ...feltJson(history),
+    });
   });
 
   app.post('/catalog/fit', async (c) => {
-    const { value } = await readJsonObject(c, 'a catalog fit request ({ "text": ..., "polygon"?: ..., "mMax"?: ... })');
+    const { value } = await readJsonObject(
+      c,
+      'a catalog fit request ({ "text": ..., "polygon"?: ..., "mMax"?: ... })',
+    );
     const request = readCatalogFitRequest(value);
     const load = readCatalogText(request.text, request.format);
     if (load.events.length > FIT_EVENT_BUDGET) {
-      throw new InvalidInput([{ path: 'catalog', message: `expected at most ${FIT_EVENT_BUDGET} events for one fit; got ${load.events.length}. Fit a part of the catalog (one region or period) at a time` }]);
+      throw new InvalidInput([
+        {
+          path: 'catalog',
+          message: `expected at most ${FIT_EVENT_BUDGET} events for one fit; got ${load.events.length}. Fit a part of the catalog (one region or period) at a time`,
+        },
+      ]);
     }
     const fit = fitCatalog(load.events, request.options);
     return c.json({ catalog: catalogLoadJson(load), ...catalogFitJson(fit) });

@@ -19,7 +19,12 @@ export function computeRoutes(ctx: ServiceContext): Hono {
       communities: study.communities.length,
       sources: study.sources.length,
       measures: study.settings.measures,
-      work: { size: work.size, budget: ctx.workBudget, ruptures: work.ruptures, detail: work.detail },
+      work: {
+        size: work.size,
+        budget: ctx.workBudget,
+        ruptures: work.ruptures,
+        detail: work.detail,
+      },
       inputHash: inputHash(study),
       warnings,
     });
@@ -29,7 +34,12 @@ export function computeRoutes(ctx: ServiceContext): Hono {
     const { value } = await readJsonObject(c, 'a study document');
     const { study } = validateStudy(value, ctx.models);
     await measureStudy(ctx, study);
-    const handle = ctx.runPool.run({ kind: 'screen', study, inputHash: inputHash(study), toolVersion: ctx.toolVersion });
+    const handle = ctx.runPool.run({
+      kind: 'screen',
+      study,
+      inputHash: inputHash(study),
+      toolVersion: ctx.toolVersion,
+    });
     // Nobody is left to read the answer of a request the client gave up on.
     c.req.raw.signal.addEventListener('abort', () => handle.cancel(), { once: true });
     const { resultsJson } = await handle.result;

@@ -30,29 +30,56 @@ export function importRoutes(ctx: ServiceContext): Hono {
   // writes it (studies.update), so a save made while the body was on its way is not lost.
   app.post('/studies/:id/communities', async (c) => {
     const id = find(c.req.param('id')).id;
-    const csv = await readText(c, CSV_TYPES, 'a communities CSV (header id,name,lon,lat,vs30,population,coastal,elevationM)');
+    const csv = await readText(
+      c,
+      CSV_TYPES,
+      'a communities CSV (header id,name,lon,lat,vs30,population,coastal,elevationM)',
+    );
     let outcome: ValidStudy | undefined;
     const updated = studies.update(id, (record) => {
-      const document = { ...storedInputs(ctx.store, record).raw, communities: IMPORTED_COMMUNITIES_FILE };
+      const document = {
+        ...storedInputs(ctx.store, record).raw,
+        communities: IMPORTED_COMMUNITIES_FILE,
+      };
       outcome = validateStudy(document, ctx.models, csv);
-      return { name: outcome.study.name, document: JSON.stringify(document, null, 2), file: { kind: 'communities-csv', content: csv } };
+      return {
+        name: outcome.study.name,
+        document: JSON.stringify(document, null, 2),
+        file: { kind: 'communities-csv', content: csv },
+      };
     });
     if (!updated || !outcome) throw notFound('study', id);
-    return c.json({ ...studyJson(updated), imported: { communities: outcome.study.communities.length }, warnings: outcome.warnings });
+    return c.json({
+      ...studyJson(updated),
+      imported: { communities: outcome.study.communities.length },
+      warnings: outcome.warnings,
+    });
   });
 
   app.post('/studies/:id/sources', async (c) => {
     const id = find(c.req.param('id')).id;
-    const { value, text } = await readJsonObject(c, 'a GeoJSON FeatureCollection of sources', GEOJSON_TYPES);
+    const { value, text } = await readJsonObject(
+      c,
+      'a GeoJSON FeatureCollection of sources',
+      GEOJSON_TYPES,
+    );
     let outcome: ValidStudy | undefined;
     const updated = studies.update(id, (record) => {
       const inputs = storedInputs(ctx.store, record);
       const document = { ...inputs.raw, sources: value };
       outcome = validateStudy(document, ctx.models, inputs.communitiesCsv);
-      return { name: outcome.study.name, document: JSON.stringify(document, null, 2), file: { kind: 'sources-geojson', content: text } };
+      return {
+        name: outcome.study.name,
+        document: JSON.stringify(document, null, 2),
+        file: { kind: 'sources-geojson', content: text },
+      };
     });
     if (!updated || !outcome) throw notFound('study', id);
-    return c.json({ ...studyJson(updated), imported: { sources: outcome.study.sources.length }, warnings: outcome.warnings });
+    return c.json({
+      ...studyJson(updated),
+      imported: { sources: outcome.study.sources.length },
+      warnings: outcome.warnings,
+    });
   });
 
   return app;

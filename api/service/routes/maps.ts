@@ -22,7 +22,12 @@ export const mapRunJson = (run: MapRunRecord) => ({
   createdAt: run.createdAt,
   startedAt: run.startedAt,
   finishedAt: run.finishedAt,
-  links: { self: `/api/maps/${run.id}`, study: `/api/studies/${run.studyId}`, geojson: `/api/maps/${run.id}/map.geojson`, cancel: `/api/maps/${run.id}/cancel` },
+  links: {
+    self: `/api/maps/${run.id}`,
+    study: `/api/studies/${run.studyId}`,
+    geojson: `/api/maps/${run.id}/map.geojson`,
+    cancel: `/api/maps/${run.id}/cancel`,
+  },
 });
 
 /** Hazard maps of saved studies, each a run spread over the run pool and kept in the store with its GeoJSON. */
@@ -40,7 +45,10 @@ export function mapRoutes(ctx: ServiceContext & { readonly maps?: MapRuns }): Ho
     const id = c.req.param('id');
     const record = studies.get(id);
     if (!record) throw notFound('study', id);
-    const { value } = await readJsonObject(c, 'a map request ({ "measure": "PGA", "returnPeriodYears": 475, "spacingKm": 10 })');
+    const { value } = await readJsonObject(
+      c,
+      'a map request ({ "measure": "PGA", "returnPeriodYears": 475, "spacingKm": 10 })',
+    );
     const run = await startMapRun(ctx, record, readMapRequest(value));
     if (!run) throw notFound('study', id);
     return c.json(mapRunJson(run), 202, { Location: `/api/maps/${run.id}` });
@@ -57,7 +65,11 @@ export function mapRoutes(ctx: ServiceContext & { readonly maps?: MapRuns }): Ho
   app.get('/maps/:mapId/map.geojson', (c) => {
     const run = findMap(c.req.param('mapId'));
     const text = maps.geojson(run.id);
-    if (run.status !== 'done' || text === undefined) throw new HttpError(409, `map "${run.id}" is ${run.status}; its GeoJSON exists only once it is done${run.error ? ` (${run.error})` : ''}`);
+    if (run.status !== 'done' || text === undefined)
+      throw new HttpError(
+        409,
+        `map "${run.id}" is ${run.status}; its GeoJSON exists only once it is done${run.error ? ` (${run.error})` : ''}`,
+      );
     return c.body(text, 200, {
       'Content-Type': 'application/geo+json; charset=utf-8',
       'Content-Disposition': `attachment; filename="tremora-map-${run.id}.geojson"`,
@@ -66,9 +78,14 @@ export function mapRoutes(ctx: ServiceContext & { readonly maps?: MapRuns }): Ho
 
   app.post('/maps/:mapId/cancel', (c) => {
     const run = findMap(c.req.param('mapId'));
-    if (isFinished(run.status)) throw new HttpError(409, `map "${run.id}" is already ${run.status}; only a queued or running map can be cancelled`);
+    if (isFinished(run.status))
+      throw new HttpError(
+        409,
+        `map "${run.id}" is already ${run.status}; only a queued or running map can be cancelled`,
+      );
     // Every unfinished map run belongs to this process (others were marked interrupted at open).
-    if (!mapRunsOf(ctx).cancel(run.id)) maps.finishWithout(run.id, 'cancelled', 'cancelled on request');
+    if (!mapRunsOf(ctx).cancel(run.id))
+      maps.finishWithout(run.id, 'cancelled', 'cancelled on request');
     return c.json(mapRunJson(findMap(run.id)), 202);
   });
 

@@ -11,7 +11,10 @@ import type { ServiceContext } from '../../operations/service-context.ts';
 export function probeRoutes(ctx: ServiceContext): Hono {
   const app = new Hono();
   app.post('/probe', async (c) => {
-    const { value } = await readJsonObject(c, 'a ground-motion probe request ({ "model": ..., "magnitude": ..., "rjbKm": ... })');
+    const { value } = await readJsonObject(
+      c,
+      'a ground-motion probe request ({ "model": ..., "magnitude": ..., "rjbKm": ... })',
+    );
     return c.json(probeMotion(readProbeRequest(value, ctx.models), ctx.models));
   });
   return app;

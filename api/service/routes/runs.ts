@@ -47,7 +47,10 @@ export function runRoutes(ctx: ServiceContext): Hono {
     const run = findRun(id);
     const text = runs.results(id);
     if (run.status !== 'done' || text === undefined) {
-      throw new HttpError(409, `run "${id}" is ${run.status}; results exist only once it is done${run.error ? ` (${run.error})` : ''}`);
+      throw new HttpError(
+        409,
+        `run "${id}" is ${run.status}; results exist only once it is done${run.error ? ` (${run.error})` : ''}`,
+      );
     }
     return { run, text, inputs: runs.inputs(id) };
   };
@@ -61,9 +64,18 @@ export function runRoutes(ctx: ServiceContext): Hono {
     const work = await measureStudy(ctx, study);
     // The study may have been deleted while it was measured.
     if (!studies.get(id)) throw notFound('study', id);
-    const run = runs.create({ studyId: id, document: inputs.document, ...(inputs.communitiesCsv === undefined ? {} : { communitiesCsv: inputs.communitiesCsv }), inputHash: inputHash(study) });
+    const run = runs.create({
+      studyId: id,
+      document: inputs.document,
+      ...(inputs.communitiesCsv === undefined ? {} : { communitiesCsv: inputs.communitiesCsv }),
+      inputHash: inputHash(study),
+    });
     ctx.scheduler.start(run, study);
-    return c.json({ ...runJson(run), work: { size: work.size, budget: ctx.workBudget, detail: work.detail } }, 202, { Location: `/api/runs/${run.id}` });
+    return c.json(
+      { ...runJson(run), work: { size: work.size, budget: ctx.workBudget, detail: work.detail } },
+      202,
+      { Location: `/api/runs/${run.id}` },
+    );
   });
 
   app.get('/studies/:id/runs', (c) => {
@@ -100,7 +112,11 @@ export function runRoutes(ctx: ServiceContext): Hono {
   app.post('/runs/:runId/cancel', (c) => {
     const id = c.req.param('runId');
     const run = findRun(id);
-    if (isFinished(run.status)) throw new HttpError(409, `run "${id}" is already ${run.status}; only a queued or running run can be cancelled`);
+    if (isFinished(run.status))
+      throw new HttpError(
+        409,
+        `run "${id}" is already ${run.status}; only a queued or running run can be cancelled`,
+      );
     // Every unfinished run belongs to this process (others were marked interrupted at start).
     if (!ctx.scheduler.cancel(id)) runs.finishWithout(id, 'cancelled', 'cancelled on request');
     return c.json(runJson(findRun(id)), 202);

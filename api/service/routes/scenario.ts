@@ -29,24 +29,36 @@ export function scenarioRoutes(ctx: ServiceContext): Hono {
   };
 
   app.post('/scenario', async (c) => {
-    const { value } = await readJsonObject(c, 'a scenario request with its study ({ "study": {...}, "sourceId": ..., "magnitude": ... })');
+    const { value } = await readJsonObject(
+      c,
+      'a scenario request with its study ({ "study": {...}, "sourceId": ..., "magnitude": ... })',
+    );
     const issues: InputIssue[] = [];
     const { study: studyDocument, ...fields } = value;
-    const valid = collect(issues, () => validateStudy(studyDocument, ctx.models, undefined, 'study'));
+    const valid = collect(issues, () =>
+      validateStudy(studyDocument, ctx.models, undefined, 'study'),
+    );
     const request = collect(issues, () => readScenarioRequest(fields));
     if (issues.length > 0 || !valid || !request) throw new InvalidInput(issues, 'invalid scenario');
-    return c.body(await answer(valid.study, request), 200, { 'Content-Type': 'application/json; charset=utf-8' });
+    return c.body(await answer(valid.study, request), 200, {
+      'Content-Type': 'application/json; charset=utf-8',
+    });
   });
 
   app.post('/studies/:id/scenario', async (c) => {
     const id = c.req.param('id');
     const record = ctx.store.studies.get(id);
     if (!record) throw notFound('study', id);
-    const { value } = await readJsonObject(c, 'a scenario request ({ "sourceId": ..., "magnitude": ... })');
+    const { value } = await readJsonObject(
+      c,
+      'a scenario request ({ "sourceId": ..., "magnitude": ... })',
+    );
     const request = readScenarioRequest(value);
     const inputs = storedInputs(ctx.store, record);
     const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
-    return c.body(await answer(study, request), 200, { 'Content-Type': 'application/json; charset=utf-8' });
+    return c.body(await answer(study, request), 200, {
+      'Content-Type': 'application/json; charset=utf-8',
+    });
   });
 
   return app;

@@ -42,13 +42,19 @@ export function studyRoutes(ctx: ServiceContext): Hono {
     const { value, text } = await readJsonObject(c, 'a study document');
     const { study, warnings } = validateStudy(value, ctx.models);
     const record = studies.create({ name: study.name, document: text });
-    return c.json({ ...studyJson(record), warnings }, 201, { Location: `/api/studies/${record.id}` });
+    return c.json({ ...studyJson(record), warnings }, 201, {
+      Location: `/api/studies/${record.id}`,
+    });
   });
 
   app.get('/studies/:id', (c) => {
     const record = find(c.req.param('id'));
     const inputs = storedInputs(ctx.store, record);
-    return c.json({ ...studyJson(record), document: inputs.raw, communitiesCsv: inputs.communitiesCsv ?? null });
+    return c.json({
+      ...studyJson(record),
+      document: inputs.raw,
+      communitiesCsv: inputs.communitiesCsv ?? null,
+    });
   });
 
   app.get('/studies/:id/document', (c) => {
@@ -60,7 +66,10 @@ export function studyRoutes(ctx: ServiceContext): Hono {
     const id = c.req.param('id');
     const existing = find(id);
     const { value, text } = await readJsonObject(c, 'a study document');
-    const csv = typeof value.communities === 'string' ? studies.latestFile(existing.id, 'communities-csv') : undefined;
+    const csv =
+      typeof value.communities === 'string'
+        ? studies.latestFile(existing.id, 'communities-csv')
+        : undefined;
     const { study, warnings } = validateStudy(value, ctx.models, csv);
     const record = studies.replace(id, { name: study.name, document: text });
     if (!record) throw notFound('study', id);

@@ -28,10 +28,20 @@ export function tsunamiRoutes(ctx: ServiceContext): Hono {
     const record = ctx.store.studies.get(id);
     if (!record) throw notFound('study', id);
     const issues = new IssueList();
-    for (const key of Object.keys(c.req.queries())) if (key !== 'source' && key !== 'highGroundM') issues.add([key], 'unknown query parameter; expected source or highGroundM');
+    for (const key of Object.keys(c.req.queries()))
+      if (key !== 'source' && key !== 'highGroundM')
+        issues.add([key], 'unknown query parameter; expected source or highGroundM');
     const height = c.req.query('highGroundM');
-    const query = issues.parse(querySchema, { source: c.req.queries('source'), highGroundM: height === undefined ? undefined : Number(height) }, []);
-    if (issues.issues.length > 0 || !query) throw new InvalidInput(issues.issues, 'invalid tsunami request');
+    const query = issues.parse(
+      querySchema,
+      {
+        source: c.req.queries('source'),
+        highGroundM: height === undefined ? undefined : Number(height),
+      },
+      [],
+    );
+    if (issues.issues.length > 0 || !query)
+      throw new InvalidInput(issues.issues, 'invalid tsunami request');
     const inputs = storedInputs(ctx.store, record);
     const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
     const result = await tsunamiTimesOf(ctx).forStudy(study, inputHash(study), {

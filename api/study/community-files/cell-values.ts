@@ -13,7 +13,10 @@ export function cellText(cell: TableCell | undefined): string | undefined {
  * digits (`1,250`) is read as a thousands separator only for counts (`integer`), where a decimal
  * makes no sense. Text that is not a number is returned as it is, so the schema names it.
  */
-export function readNumber(cell: TableCell | undefined, integer = false): number | string | undefined {
+export function readNumber(
+  cell: TableCell | undefined,
+  integer = false,
+): number | string | undefined {
   if (typeof cell === 'number') return cell;
   const text = cellText(cell);
   if (text === undefined) return undefined;
@@ -34,14 +37,20 @@ export type Axis = keyof typeof HEMISPHERES;
  * A hemisphere letter sets the sign and must suit the axis (N/S for latitude, E/W for
  * longitude). Returns the degrees, or a message saying what was expected.
  */
-export function readCoordinate(cell: TableCell | undefined, axis: Axis): number | { message: string } | undefined {
+export function readCoordinate(
+  cell: TableCell | undefined,
+  axis: Axis,
+): number | { message: string } | undefined {
   if (typeof cell === 'number') return cell;
   const text = cellText(cell);
   if (text === undefined) return undefined;
   const plain = readNumber(text);
   if (typeof plain === 'number') return plain;
   const expected = `expected ${axis === 'lat' ? 'a latitude' : 'a longitude'} in decimal degrees or degrees, minutes and seconds (e.g. ${axis === 'lat' ? `12°34'56"S` : `139°12'30"W`}), got "${text}"`;
-  let rest = text.toUpperCase().replace(/[\u2032\u2019\u00B4`]/g, "'").replace(/[\u2033\u201D]|''/g, '"');
+  let rest = text
+    .toUpperCase()
+    .replace(/[\u2032\u2019\u00B4`]/g, "'")
+    .replace(/[\u2033\u201D]|''/g, '"');
   let hemisphere: string | undefined;
   const lead = /^([NSEW])\s*/.exec(rest);
   const trail = /\s*([NSEW])$/.exec(rest);
@@ -54,7 +63,9 @@ export function readCoordinate(cell: TableCell | undefined, axis: Axis): number 
   }
   const signs = HEMISPHERES[axis] as Record<string, number>;
   if (hemisphere !== undefined && signs[hemisphere] === undefined) {
-    return { message: `${expected}; ${hemisphere} is not a hemisphere of ${axis === 'lat' ? 'latitude (N or S)' : 'longitude (E or W)'}` };
+    return {
+      message: `${expected}; ${hemisphere} is not a hemisphere of ${axis === 'lat' ? 'latitude (N or S)' : 'longitude (E or W)'}`,
+    };
   }
   const negative = rest.startsWith('-');
   if (negative || rest.startsWith('+')) rest = rest.slice(1);
@@ -63,11 +74,18 @@ export function readCoordinate(cell: TableCell | undefined, axis: Axis): number 
     .trim()
     .split(/\s+/)
     .map((p) => readNumber(p));
-  if (parts.length === 0 || parts.length > 3 || parts.some((p) => typeof p !== 'number' || p < 0)) return { message: expected };
+  if (parts.length === 0 || parts.length > 3 || parts.some((p) => typeof p !== 'number' || p < 0))
+    return { message: expected };
   const [degrees, minutes = 0, seconds = 0] = parts as number[];
-  if (minutes >= 60 || seconds >= 60) return { message: `${expected}; minutes and seconds must be below 60` };
-  if ((parts.length > 1 && !Number.isInteger(degrees)) || (parts.length > 2 && !Number.isInteger(minutes))) return { message: `${expected}; only the last part may have decimals` };
-  if (negative && hemisphere !== undefined) return { message: `${expected}; give either a minus sign or a hemisphere letter, not both` };
+  if (minutes >= 60 || seconds >= 60)
+    return { message: `${expected}; minutes and seconds must be below 60` };
+  if (
+    (parts.length > 1 && !Number.isInteger(degrees)) ||
+    (parts.length > 2 && !Number.isInteger(minutes))
+  )
+    return { message: `${expected}; only the last part may have decimals` };
+  if (negative && hemisphere !== undefined)
+    return { message: `${expected}; give either a minus sign or a hemisphere letter, not both` };
   const value = (degrees as number) + minutes / 60 + seconds / 3600;
   return (negative ? -1 : (signs[hemisphere ?? ''] ?? 1)) * value;
 }

@@ -1,5 +1,15 @@
 /** Tremora's community fields that a file's columns are matched to. */
-export const COMMUNITY_COLUMNS = ['id', 'name', 'lon', 'lat', 'vs30', 'siteClass', 'population', 'coastal', 'elevationM'] as const;
+export const COMMUNITY_COLUMNS = [
+  'id',
+  'name',
+  'lon',
+  'lat',
+  'vs30',
+  'siteClass',
+  'population',
+  'coastal',
+  'elevationM',
+] as const;
 export type CommunityColumn = (typeof COMMUNITY_COLUMNS)[number];
 
 /**
@@ -9,7 +19,17 @@ export type CommunityColumn = (typeof COMMUNITY_COLUMNS)[number];
  */
 export const COLUMN_SPELLINGS: Readonly<Record<CommunityColumn, readonly string[]>> = {
   id: ['id', 'code', 'community id', 'village id', 'site id', 'place id'],
-  name: ['name', 'village', 'village name', 'community', 'community name', 'settlement', 'place', 'place name', 'site name'],
+  name: [
+    'name',
+    'village',
+    'village name',
+    'community',
+    'community name',
+    'settlement',
+    'place',
+    'place name',
+    'site name',
+  ],
   lon: ['lon', 'long', 'lng', 'longitude', 'x', 'lon dd', 'longitude dd', 'longitude deg'],
   lat: ['lat', 'latitude', 'y', 'lat dd', 'latitude dd', 'latitude deg'],
   vs30: ['vs30', 'vs 30'],
@@ -53,7 +73,10 @@ export function recogniseColumn(column: string): CommunityColumn | undefined {
   const n = squeeze(normaliseColumnName(column));
   if (n === '') return undefined;
   // The unit in brackets is dropped above, so "Vs30 (m/s)" and "Elevation (m)" match too.
-  return COMMUNITY_COLUMNS.find((key) => squeeze(key.toLowerCase()) === n || COLUMN_SPELLINGS[key].some((s) => squeeze(s) === n));
+  return COMMUNITY_COLUMNS.find(
+    (key) =>
+      squeeze(key.toLowerCase()) === n || COLUMN_SPELLINGS[key].some((s) => squeeze(s) === n),
+  );
 }
 
 /** A mapping picked by the user: field -> the file's column name. */
@@ -71,11 +94,16 @@ export interface ColumnMatch {
  * header is a recognised spelling. `skip` lists fields the file gives otherwise (the position
  * of a placemark or feature), whose look-alike columns are then kept as details.
  */
-export function matchColumns(columns: readonly string[], choice: ColumnChoice = {}, skip: readonly CommunityColumn[] = []): ColumnMatch {
+export function matchColumns(
+  columns: readonly string[],
+  choice: ColumnChoice = {},
+  skip: readonly CommunityColumn[] = [],
+): ColumnMatch {
   const columnOf = new Map<CommunityColumn, string>();
   for (const key of COMMUNITY_COLUMNS) {
     const picked = choice[key];
-    if (picked !== undefined && picked !== '' && columns.includes(picked) && !skip.includes(key)) columnOf.set(key, picked);
+    if (picked !== undefined && picked !== '' && columns.includes(picked) && !skip.includes(key))
+      columnOf.set(key, picked);
   }
   const used = new Set(columnOf.values());
   for (const column of columns) {

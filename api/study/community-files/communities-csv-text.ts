@@ -1,7 +1,17 @@
 import Papa from 'papaparse';
 import type { Community } from '../../engine/model.ts';
 
-const FIELDS = ['id', 'name', 'lon', 'lat', 'vs30', 'siteClass', 'population', 'coastal', 'elevationM'] as const;
+const FIELDS = [
+  'id',
+  'name',
+  'lon',
+  'lat',
+  'vs30',
+  'siteClass',
+  'population',
+  'coastal',
+  'elevationM',
+] as const;
 
 /**
  * Validated communities as CSV with Tremora's own header, then their details' columns. An

@@ -31,7 +31,12 @@ export function guessDelimiter(text: string): string {
  * the file (`[line 5]`, the header being line 1); a row with the wrong number of cells is
  * reported and left out.
  */
-export function csvTable(text: string, fileName: string, rootPath: readonly PropertyKey[], issues: IssueList): CommunityTable {
+export function csvTable(
+  text: string,
+  fileName: string,
+  rootPath: readonly PropertyKey[],
+  issues: IssueList,
+): CommunityTable {
   const csvText = text.startsWith('\uFEFF') ? text.slice(1) : text;
   const lines: { line: number; cells: string[] }[] = [];
   let line = 1;
@@ -56,7 +61,10 @@ export function csvTable(text: string, fileName: string, rootPath: readonly Prop
     // Spreadsheets often pad rows with empty trailing cells: those beyond the header are let pass.
     const width = cells.length - [...cells].reverse().findIndex((c) => c.trim() !== '');
     if (cells.length < columns.length || width > columns.length) {
-      issues.add([...rootPath, `[line ${at}]`], `expected ${columns.length} columns (${columns.join(',')}), got ${cells.length}`);
+      issues.add(
+        [...rootPath, `[line ${at}]`],
+        `expected ${columns.length} columns (${columns.join(',')}), got ${cells.length}`,
+      );
       continue;
     }
     const record: Record<string, TableCell> = {};

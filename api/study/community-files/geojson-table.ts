@@ -9,13 +9,27 @@ import { pointRows } from './point-rows.ts';
  * GeoJSON points as a table: a FeatureCollection (or one Feature) whose properties are the
  * columns; positions WGS84 `[lon, lat]` as RFC 7946 requires. Features are named `[feature n]`.
  */
-export function geojsonTable(text: string, fileName: string, rootPath: readonly PropertyKey[], issues: IssueList): CommunityTable {
+export function geojsonTable(
+  text: string,
+  fileName: string,
+  rootPath: readonly PropertyKey[],
+  issues: IssueList,
+): CommunityTable {
   const parsed = parseJsonText(text, fileName);
   if (!parsed.ok) throw new CommunityFileProblem(`${parsed.issue.path}: ${parsed.issue.message}`);
   const value = parsed.value as { type?: unknown; features?: unknown };
-  const features = value?.type === 'FeatureCollection' && Array.isArray(value.features) ? (value.features as Feature[]) : value?.type === 'Feature' ? [value as Feature] : undefined;
-  if (!features) throw new CommunityFileProblem(`${fileName}: expected a GeoJSON FeatureCollection of points, got ${value?.type === undefined ? 'JSON without a "type"' : `a ${String(value.type)}`}`);
-  if (features.length === 0) throw new CommunityFileProblem(`${fileName}: expected at least one point feature, found none`);
+  const features =
+    value?.type === 'FeatureCollection' && Array.isArray(value.features)
+      ? (value.features as Feature[])
+      : value?.type === 'Feature'
+        ? [value as Feature]
+        : undefined;
+  if (!features)
+    throw new CommunityFileProblem(
+      `${fileName}: expected a GeoJSON FeatureCollection of points, got ${value?.type === undefined ? 'JSON without a "type"' : `a ${String(value.type)}`}`,
+    );
+  if (features.length === 0)
+    throw new CommunityFileProblem(`${fileName}: expected at least one point feature, found none`);
   const { columns, rows } = pointRows(features, 'feature', fileName, rootPath, issues);
   return { fileName, format: 'GeoJSON', columns, rows, hasGeometry: true };
 }

@@ -29,7 +29,10 @@ const isZip = (b: Uint8Array) => b[0] === 0x50 && b[1] === 0x4b;
  */
 export function detectFormat(fileName: string, bytes: Uint8Array): CommunityFileFormat {
   const lower = fileName.toLowerCase();
-  if (lower.endsWith('.xls')) throw new CommunityFileProblem(`${fileName}: expected a newer spreadsheet; the old .xls format is not read (save it as .xlsx or CSV UTF-8)`);
+  if (lower.endsWith('.xls'))
+    throw new CommunityFileProblem(
+      `${fileName}: expected a newer spreadsheet; the old .xls format is not read (save it as .xlsx or CSV UTF-8)`,
+    );
   for (const [format, extensions] of Object.entries(FORMAT_EXTENSIONS)) {
     if (extensions.some((e) => lower.endsWith(e))) return format as CommunityFileFormat;
   }
@@ -39,7 +42,10 @@ export function detectFormat(fileName: string, bytes: Uint8Array): CommunityFile
     if (names.some((n) => n.endsWith('.kml'))) return 'kmz';
     return 'shapefile';
   }
-  const head = new TextDecoder().decode(bytes.subarray(0, 200)).replace(/^\uFEFF/, '').trimStart();
+  const head = new TextDecoder()
+    .decode(bytes.subarray(0, 200))
+    .replace(/^\uFEFF/, '')
+    .trimStart();
   if (head.startsWith('<')) return 'kml';
   if (head.startsWith('{')) return 'geojson';
   return 'csv';
@@ -50,7 +56,12 @@ export function detectFormat(fileName: string, bytes: Uint8Array): CommunityFile
  * all throws CommunityFileProblem; problems of single rows, placemarks or features go to
  * `issues` under `rootPath`.
  */
-export async function readCommunityFile(bytes: Uint8Array, fileName: string, rootPath: readonly PropertyKey[], issues: IssueList): Promise<CommunityTable> {
+export async function readCommunityFile(
+  bytes: Uint8Array,
+  fileName: string,
+  rootPath: readonly PropertyKey[],
+  issues: IssueList,
+): Promise<CommunityTable> {
   const format = detectFormat(fileName, bytes);
   switch (format) {
     case 'xlsx':

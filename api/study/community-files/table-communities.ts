@@ -2,7 +2,13 @@ import type { Community } from '../../engine/model.ts';
 import { MAX_COMMUNITIES, readCommunities } from '../community-schema.ts';
 import type { IssueList } from '../issues.ts';
 import { cellText, idFromName, readCoordinate, readNumber, readYesNo } from './cell-values.ts';
-import { acceptedSpellings, COLUMN_MEANINGS, matchColumns, type ColumnChoice, type CommunityColumn } from './column-names.ts';
+import {
+  acceptedSpellings,
+  COLUMN_MEANINGS,
+  matchColumns,
+  type ColumnChoice,
+  type CommunityColumn,
+} from './column-names.ts';
 import type { CommunityTable, TableRow } from './community-table.ts';
 
 /** Most columns kept as a community's details, and the longest value kept (a screening list, not a database). */
@@ -18,7 +24,10 @@ export interface TableCommunities {
 }
 
 /** Fields a file must give: a name, a position (unless the rows are placemarks or features) and vs30 or a site class. */
-function missingFields(columnOf: ReadonlyMap<CommunityColumn, string>, hasGeometry: boolean): CommunityColumn[] {
+function missingFields(
+  columnOf: ReadonlyMap<CommunityColumn, string>,
+  hasGeometry: boolean,
+): CommunityColumn[] {
   const missing: CommunityColumn[] = [];
   if (!columnOf.has('name')) missing.push('name');
   if (!hasGeometry && !columnOf.has('lat')) missing.push('lat');
@@ -31,7 +40,12 @@ function missingFields(columnOf: ReadonlyMap<CommunityColumn, string>, hasGeomet
 const BAD_POSITION = Symbol('bad position');
 
 /** The raw community (as a study document would give it) of one row. */
-function rowRecord(row: TableRow, columnOf: ReadonlyMap<CommunityColumn, string>, otherColumns: readonly string[], rowIssue: (field: string, message: string) => void): Record<string | symbol, unknown> {
+function rowRecord(
+  row: TableRow,
+  columnOf: ReadonlyMap<CommunityColumn, string>,
+  otherColumns: readonly string[],
+  rowIssue: (field: string, message: string) => void,
+): Record<string | symbol, unknown> {
   const cell = (key: CommunityColumn) => {
     const column = columnOf.get(key);
     return column === undefined ? undefined : row.cells[column];
@@ -77,16 +91,42 @@ function rowRecord(row: TableRow, columnOf: ReadonlyMap<CommunityColumn, string>
  * as each community's details. Every problem goes to `issues` under `rootPath` and the row's
  * place in the file; valid rows are returned.
  */
-export function tableCommunities(table: CommunityTable, rootPath: readonly PropertyKey[], issues: IssueList, choice: ColumnChoice = {}): TableCommunities {
-  const { columnOf, otherColumns } = matchColumns(table.columns, choice, table.hasGeometry ? ['lon', 'lat'] : []);
+export function tableCommunities(
+  table: CommunityTable,
+  rootPath: readonly PropertyKey[],
+  issues: IssueList,
+  choice: ColumnChoice = {},
+): TableCommunities {
+  const { columnOf, otherColumns } = matchColumns(
+    table.columns,
+    choice,
+    table.hasGeometry ? ['lon', 'lat'] : [],
+  );
   const missingColumns = missingFields(columnOf, table.hasGeometry);
-  const result = (communities: Community[]): TableCommunities => ({ communities, missingColumns, columns: table.columns });
+  const result = (communities: Community[]): TableCommunities => ({
+    communities,
+    missingColumns,
+    columns: table.columns,
+  });
   if (missingColumns.length > 0) {
-    const where = table.hasGeometry ? `${table.fileName} (${table.format} properties)` : `${table.fileName} (header)`;
-    const said = missingColumns.includes('vs30') ? [...missingColumns.filter((k) => k !== 'vs30' && k !== 'siteClass'), 'vs30' as const] : missingColumns;
+    const where = table.hasGeometry
+      ? `${table.fileName} (${table.format} properties)`
+      : `${table.fileName} (header)`;
+    const said = missingColumns.includes('vs30')
+      ? [...missingColumns.filter((k) => k !== 'vs30' && k !== 'siteClass'), 'vs30' as const]
+      : missingColumns;
     for (const key of said) {
-      const accepts = key === 'vs30' ? `vs30 (m/s), accepted as ${acceptedSpellings('vs30')}; or site class, accepted as ${acceptedSpellings('siteClass')}` : `${COLUMN_MEANINGS[key]}, accepted as ${acceptedSpellings(key)}`;
-      issues.add([...rootPath, table.hasGeometry ? '[properties]' : table.format === 'CSV' ? '[line 1]' : '[header]'], `${where}: no column recognised for ${accepts} (any case); the file's columns are ${table.columns.map((c) => `"${c}"`).join(', ') || 'none'}`);
+      const accepts =
+        key === 'vs30'
+          ? `vs30 (m/s), accepted as ${acceptedSpellings('vs30')}; or site class, accepted as ${acceptedSpellings('siteClass')}`
+          : `${COLUMN_MEANINGS[key]}, accepted as ${acceptedSpellings(key)}`;
+      issues.add(
+        [
+          ...rootPath,
+          table.hasGeometry ? '[properties]' : table.format === 'CSV' ? '[line 1]' : '[header]',
+        ],
+        `${where}: no column recognised for ${accepts} (any case); the file's columns are ${table.columns.map((c) => `"${c}"`).join(', ') || 'none'}`,
+      );
     }
     return result([]);
   }
@@ -95,12 +135,21 @@ export function tableCommunities(table: CommunityTable, rootPath: readonly Prope
     return result([]);
   }
   if (table.rows.length > MAX_COMMUNITIES) {
-    issues.add(rootPath, `${table.fileName}: expected at most ${MAX_COMMUNITIES} communities, got ${table.rows.length}`);
+    issues.add(
+      rootPath,
+      `${table.fileName}: expected at most ${MAX_COMMUNITIES} communities, got ${table.rows.length}`,
+    );
     return result([]);
   }
-  const givenIds = new Set(table.rows.map((r) => cellText(r.cells[columnOf.get('id') ?? ''])).filter((id) => id !== undefined));
+  const givenIds = new Set(
+    table.rows
+      .map((r) => cellText(r.cells[columnOf.get('id') ?? '']))
+      .filter((id) => id !== undefined),
+  );
   const raw = table.rows.map((row) => {
-    const record = rowRecord(row, columnOf, otherColumns, (field, message) => issues.add([...rootPath, row.where, field], message));
+    const record = rowRecord(row, columnOf, otherColumns, (field, message) =>
+      issues.add([...rootPath, row.where, field], message),
+    );
     if (record.id === undefined && typeof record.name === 'string') {
       // Made ids stay unique among themselves and the file's own ids: a second "Lower Bay" is lower-bay-2.
       const base = idFromName(record.name);
@@ -111,7 +160,10 @@ export function tableCommunities(table: CommunityTable, rootPath: readonly Prope
     }
     return record;
   });
-  const valid = readCommunities(raw, issues, (i) => [...rootPath, (table.rows[i] as TableRow).where]);
+  const valid = readCommunities(raw, issues, (i) => [
+    ...rootPath,
+    (table.rows[i] as TableRow).where,
+  ]);
   const badIds = new Set(raw.filter((r) => r[BAD_POSITION] === true).map((r) => r.id));
   return result(valid.filter((c) => !badIds.has(c.id)));
 }

@@ -15,19 +15,27 @@ export function zipEntries(bytes: Uint8Array, fileName: string): Map<string, Uin
     entries = unzipSync(bytes, {
       filter: (file) => {
         total += file.originalSize;
-        if (total > MAX_UNZIPPED_BYTES) throw new CommunityFileProblem(`${fileName}: expected a zip that unpacks to at most ${MAX_UNZIPPED_BYTES / 1024 / 1024} MiB (the limit), got more`);
+        if (total > MAX_UNZIPPED_BYTES)
+          throw new CommunityFileProblem(
+            `${fileName}: expected a zip that unpacks to at most ${MAX_UNZIPPED_BYTES / 1024 / 1024} MiB (the limit), got more`,
+          );
         return !file.name.startsWith('__MACOSX/') && !file.name.endsWith('/');
       },
     });
   } catch (error) {
     if (error instanceof CommunityFileProblem) throw error;
-    throw new CommunityFileProblem(`${fileName}: expected a zip file, but it cannot be unpacked (${(error as Error).message})`);
+    throw new CommunityFileProblem(
+      `${fileName}: expected a zip file, but it cannot be unpacked (${(error as Error).message})`,
+    );
   }
   return new Map(Object.entries(entries));
 }
 
 /** The entries whose names end with `extension` (case-insensitive). */
-export function entriesEnding(entries: ReadonlyMap<string, Uint8Array>, extension: string): string[] {
+export function entriesEnding(
+  entries: ReadonlyMap<string, Uint8Array>,
+  extension: string,
+): string[] {
   return [...entries.keys()].filter((name) => name.toLowerCase().endsWith(extension));
 }
 

@@ -1,7 +1,13 @@
 import { mkdirSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { chromium, type Browser, type BrowserContext, type BrowserContextOptions, type Page } from 'playwright-core';
+import {
+  chromium,
+  type Browser,
+  type BrowserContext,
+  type BrowserContextOptions,
+  type Page,
+} from 'playwright-core';
 import { REPO_ROOT } from '../../service/helpers/service-process.ts';
 
 /** Debian's Chromium (installed by .ci/run); never a downloaded browser. */
@@ -55,7 +61,11 @@ export interface GuardedContext {
 }
 
 /** A browser context that refuses, and records, any request leaving `origin`. */
-export async function offlineContext(browser: Browser, origin: string, options: BrowserContextOptions = {}): Promise<GuardedContext> {
+export async function offlineContext(
+  browser: Browser,
+  origin: string,
+  options: BrowserContextOptions = {},
+): Promise<GuardedContext> {
   const context = await browser.newContext({ viewport: { width: 1100, height: 900 }, ...options });
   const foreignRequests: string[] = [];
   await context.route('**/*', async (route) => {
@@ -83,7 +93,8 @@ export interface AxeViolation {
  */
 export async function seriousAxeViolations(page: Page): Promise<AxeViolation[]> {
   await page.evaluate(AXE_SOURCE);
-  const violations = (await page.evaluate(`axe.run(document, { resultTypes: ['violations'] }).then((result) =>
+  const violations =
+    (await page.evaluate(`axe.run(document, { resultTypes: ['violations'] }).then((result) =>
     result.violations.map((v) => ({ id: v.id, impact: v.impact, help: v.help, nodes: v.nodes.map((n) => JSON.stringify(n.target)) })))`)) as AxeViolation[];
   return violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
 }
@@ -133,7 +144,9 @@ const FOCUS_STATE = `(() => {
  */
 export async function walkWithTab(page: Page): Promise<TabWalk> {
   const controls = (await page.evaluate(COLLECT_CONTROLS)) as string[];
-  await page.evaluate('document.activeElement && document.activeElement.blur(); window.scrollTo(0, 0)');
+  await page.evaluate(
+    'document.activeElement && document.activeElement.blur(); window.scrollTo(0, 0)',
+  );
   const reached = new Set<number>();
   const invisible = new Set<number>();
   for (let i = 0; i < controls.length * 2 + 2; i++) {

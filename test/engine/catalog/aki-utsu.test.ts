@@ -5,7 +5,15 @@ import type { LonLat } from '../../../api/engine/model.ts';
 import { createRandom } from '../../../api/engine/random.ts';
 import { expectClose } from '../../helpers/close.ts';
 
-const ZONE: readonly (readonly LonLat[])[] = [[[-150, -48], [-148, -48], [-148, -46], [-150, -46], [-150, -48]]];
+const ZONE: readonly (readonly LonLat[])[] = [
+  [
+    [-150, -48],
+    [-148, -48],
+    [-148, -46],
+    [-150, -46],
+    [-150, -48],
+  ],
+];
 const START = Date.UTC(1990, 0, 1);
 const END = Date.UTC(2020, 0, 1);
 
@@ -77,7 +85,12 @@ describe('b-value recovered from synthetic catalogs', () => {
         0.1,
       );
       expect(e.eventCount).toBe(n);
-      expectClose(e.bValue, b, 2 * e.sigmaB, `true b of the synthetic catalog, within 2 Shi & Bolt (1982) standard errors (seed ${i + 1})`);
+      expectClose(
+        e.bValue,
+        b,
+        2 * e.sigmaB,
+        `true b of the synthetic catalog, within 2 Shi & Bolt (1982) standard errors (seed ${i + 1})`,
+      );
     });
   });
 

@@ -33,8 +33,13 @@ describe('observation bins from completeness periods', () => {
 
   it('count each bin over its own period', () => {
     const bins = observationBins(events, { periods, endMs, magnitudeStep: 0.1 });
-    expect(bins.map((b) => b.magnitude)).toEqual([4.0, 4.1, 4.2, 4.3, 4.4, 4.5, 4.6, 4.7, 4.8, 4.9, 5.0, 5.1, 5.2, 5.3, 5.4, 5.5, 5.6, 5.7, 5.8, 5.9, 6.0]);
-    expect(bins.map((b) => b.count)).toEqual([1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 1, 0, 0, 0, 0, 0, 0, 0, 1]);
+    expect(bins.map((b) => b.magnitude)).toEqual([
+      4.0, 4.1, 4.2, 4.3, 4.4, 4.5, 4.6, 4.7, 4.8, 4.9, 5.0, 5.1, 5.2, 5.3, 5.4, 5.5, 5.6, 5.7, 5.8,
+      5.9, 6.0,
+    ]);
+    expect(bins.map((b) => b.count)).toEqual([
+      1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 1, 0, 0, 0, 0, 0, 0, 0, 1,
+    ]);
     // 2000-01-01 to 2020-01-01 is 7305 days = 20 Julian years; 1950-01-01 to 2020-01-01 is
     // 70 · 365 + 17 leap days = 25567 days = 69.998631 Julian years (calendar arithmetic).
     expectClose(bins[0]?.years ?? NaN, 20, 1e-12, 'calendar: 7305 days');
@@ -46,7 +51,12 @@ describe('observation bins from completeness periods', () => {
   it('extend to an upper magnitude with empty bins', () => {
     // 0.5-wide bins: 4.0 holds [3.75, 4.25), so the 3.9 of 2019 joins b and c;
     // 5.0 holds the 5.2 of 1960 (the 1940 one is before its period).
-    const bins = observationBins(events, { periods, endMs, magnitudeStep: 0.5, upperMagnitude: 7.5 });
+    const bins = observationBins(events, {
+      periods,
+      endMs,
+      magnitudeStep: 0.5,
+      upperMagnitude: 7.5,
+    });
     expect(bins.map((b) => [b.magnitude, b.count])).toEqual([
       [4.0, 3],
       [4.5, 0],
@@ -60,7 +70,15 @@ describe('observation bins from completeness periods', () => {
   });
 
   it('refuse missing or impossible periods', () => {
-    expect(() => observationBins(events, { periods: [], endMs, magnitudeStep: 0.1 })).toThrow(/at least one completeness period/);
-    expect(() => observationBins(events, { periods: [{ magnitude: 4, startMs: endMs + 1 }], endMs, magnitudeStep: 0.1 })).toThrow(/periods\[0\]\.startMs/);
+    expect(() => observationBins(events, { periods: [], endMs, magnitudeStep: 0.1 })).toThrow(
+      /at least one completeness period/,
+    );
+    expect(() =>
+      observationBins(events, {
+        periods: [{ magnitude: 4, startMs: endMs + 1 }],
+        endMs,
+        magnitudeStep: 0.1,
+      }),
+    ).toThrow(/periods\[0\]\.startMs/);
   });
 });

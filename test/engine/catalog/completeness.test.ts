@@ -1,10 +1,15 @@
 import { describe, expect, it } from 'vitest';
-import { completenessOverTime, maxCurvatureMc, proposePeriods } from '../../../api/engine/catalog/completeness.ts';
+import {
+  completenessOverTime,
+  maxCurvatureMc,
+  proposePeriods,
+} from '../../../api/engine/catalog/completeness.ts';
 import type { CatalogEvent } from '../../../api/engine/catalog/event.ts';
 import { expectClose } from '../../helpers/close.ts';
 
 /** Magnitudes repeated as a histogram says: [[magnitude, count], ...]. */
-const fromHistogram = (h: readonly (readonly [number, number])[]): number[] => h.flatMap(([m, n]) => Array<number>(n).fill(m));
+const fromHistogram = (h: readonly (readonly [number, number])[]): number[] =>
+  h.flatMap(([m, n]) => Array<number>(n).fill(m));
 
 describe('maximum curvature (Wiemer & Wyss 2000) with the +0.2 correction (Woessner & Wiemer 2005)', () => {
   // A hand-made histogram rising to a peak at 2.3 and falling off: the peak bin is where the
@@ -27,19 +32,40 @@ describe('maximum curvature (Wiemer & Wyss 2000) with the +0.2 correction (Woess
     expectClose(r.mc, 2.5, 1e-12, 'maximum curvature + 0.2 (Woessner & Wiemer 2005, from memory)');
     expect(r.eventCount).toBe(103);
     // Every bin from lowest to highest, the empty 2.8 included.
-    expect(r.histogram.map((b) => [b.magnitude, b.count])).toEqual([...histogram.slice(0, 8), [2.8, 0], [2.9, 4]]);
+    expect(r.histogram.map((b) => [b.magnitude, b.count])).toEqual([
+      ...histogram.slice(0, 8),
+      [2.8, 0],
+      [2.9, 4],
+    ]);
   });
 
   it('takes the correction and the bin width as options', () => {
-    expectClose(maxCurvatureMc(fromHistogram(histogram), { correction: 0 }).mc, 2.3, 1e-12, 'maximum curvature without correction');
+    expectClose(
+      maxCurvatureMc(fromHistogram(histogram), { correction: 0 }).mc,
+      2.3,
+      1e-12,
+      'maximum curvature without correction',
+    );
     // 0.2-wide bins centred on 2.0, 2.2, 2.4 ...: edges round up, so 2.2 holds 2.1 and 2.2
     // (8 + 15 = 23) and 2.4 holds 2.3 and 2.4 (22 + 18 = 40), the peak; Mc = 2.4 + 0.2 = 2.6
     // (hand count).
-    expectClose(maxCurvatureMc(fromHistogram(histogram), { magnitudeStep: 0.2 }).mc, 2.6, 1e-12, 'hand count of 0.2-wide bins');
+    expectClose(
+      maxCurvatureMc(fromHistogram(histogram), { magnitudeStep: 0.2 }).mc,
+      2.6,
+      1e-12,
+      'hand count of 0.2-wide bins',
+    );
   });
 
   it('takes the lower bin on a tie', () => {
-    const r = maxCurvatureMc(fromHistogram([[3.0, 5], [3.1, 9], [3.2, 9], [3.3, 4]]));
+    const r = maxCurvatureMc(
+      fromHistogram([
+        [3.0, 5],
+        [3.1, 9],
+        [3.2, 9],
+        [3.3, 4],
+      ]),
+    );
     expectClose(r.peakMagnitude, 3.1, 1e-12, 'lower of two tied peaks (our stated choice)');
   });
 
@@ -51,13 +77,40 @@ describe('maximum curvature (Wiemer & Wyss 2000) with the +0.2 correction (Woess
 describe('completeness over time', () => {
   // Two eras, hand-made: before 1950 the histogram peaks at 4.0 (Mc 4.2), from 1950 at 3.0
   // (Mc 3.2). Two windows of 50 events in each era.
-  const early: [number, number][] = [[4.0, 20], [4.1, 12], [4.2, 8], [4.3, 5], [4.4, 3], [4.5, 2]];
-  const late: [number, number][] = [[3.0, 20], [3.1, 12], [3.2, 8], [3.3, 5], [3.4, 3], [3.5, 2]];
+  const early: [number, number][] = [
+    [4.0, 20],
+    [4.1, 12],
+    [4.2, 8],
+    [4.3, 5],
+    [4.4, 3],
+    [4.5, 2],
+  ];
+  const late: [number, number][] = [
+    [3.0, 20],
+    [3.1, 12],
+    [3.2, 8],
+    [3.3, 5],
+    [3.4, 3],
+    [3.5, 2],
+  ];
   const events: CatalogEvent[] = [];
-  const windowStarts = [Date.UTC(1900, 0, 1), Date.UTC(1925, 0, 1), Date.UTC(1950, 0, 1), Date.UTC(1975, 0, 1)];
+  const windowStarts = [
+    Date.UTC(1900, 0, 1),
+    Date.UTC(1925, 0, 1),
+    Date.UTC(1950, 0, 1),
+    Date.UTC(1975, 0, 1),
+  ];
   windowStarts.forEach((start, w) => {
     fromHistogram(w < 2 ? early : late).forEach((magnitude, i) => {
-      events.push({ id: `w${w}-${i}`, timeMs: start + i * 86_400_000, lon: -150, lat: -47, depthKm: 10, magnitude, magnitudeType: 'Mw' });
+      events.push({
+        id: `w${w}-${i}`,
+        timeMs: start + i * 86_400_000,
+        lon: -150,
+        lat: -47,
+        depthKm: 10,
+        magnitude,
+        magnitudeType: 'Mw',
+      });
     });
   });
 
@@ -86,7 +139,9 @@ describe('completeness over time', () => {
   });
 
   it('refuses too few events or a tiny window', () => {
-    expect(() => completenessOverTime(events.slice(0, 20), { eventsPerWindow: 50 })).toThrow(/at least 50 events/);
+    expect(() => completenessOverTime(events.slice(0, 20), { eventsPerWindow: 50 })).toThrow(
+      /at least 50 events/,
+    );
     expect(() => completenessOverTime(events, { eventsPerWindow: 5 })).toThrow(/eventsPerWindow/);
   });
 });

@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { epicentralDistanceKm, epicentralPath, MIN_KM_PER_DEGREE_LATITUDE } from '../../../api/engine/catalog/epicentral.ts';
+import {
+  epicentralDistanceKm,
+  epicentralPath,
+  MIN_KM_PER_DEGREE_LATITUDE,
+} from '../../../api/engine/catalog/epicentral.ts';
 import { expectClose } from '../../helpers/close.ts';
 
 describe('epicentral distance and azimuth (WGS84 geodesics, Karney 2013)', () => {
@@ -15,17 +19,36 @@ describe('epicentral distance and azimuth (WGS84 geodesics, Karney 2013)', () =>
     // a (1 − e²) / (1 − e² sin²φ)^(3/2) with WGS84 a = 6378137 m, f = 1/298.257223563
     // (NIMA TR8350.2), by the midpoint rule with 1e5 steps (computed by hand, outside this code):
     // 110.574389 km.
-    expectClose(epicentralDistanceKm(-150, 0, -150, 1), 110.574389, 1e-6, 'integral of the WGS84 meridian radius of curvature, 0° to 1°');
-    expectClose(epicentralPath(-150, -47, -150, -46).azimuthDeg, 0, 1e-9, 'due north along a meridian');
-    expectClose(epicentralPath(-150, -46, -150, -47).azimuthDeg, 180, 1e-9, 'due south along a meridian');
+    expectClose(
+      epicentralDistanceKm(-150, 0, -150, 1),
+      110.574389,
+      1e-6,
+      'integral of the WGS84 meridian radius of curvature, 0° to 1°',
+    );
+    expectClose(
+      epicentralPath(-150, -47, -150, -46).azimuthDeg,
+      0,
+      1e-9,
+      'due north along a meridian',
+    );
+    expectClose(
+      epicentralPath(-150, -46, -150, -47).azimuthDeg,
+      180,
+      1e-9,
+      'due south along a meridian',
+    );
   });
 
   it('never comes closer than the latitude bound the declustering search uses', () => {
     // A degree of latitude is shortest at the equator (meridian radius of curvature a(1 − e²)
     // there); the bound 110.5 km must sit below the distance of any two points a degree apart in latitude.
     for (const lat of [-89, -60, -47, 0, 30, 88]) {
-      expect(epicentralDistanceKm(-150, lat, -150, lat + 1) >= MIN_KM_PER_DEGREE_LATITUDE).toBe(true);
-      expect(epicentralDistanceKm(-150, lat, -149, lat + 1) >= MIN_KM_PER_DEGREE_LATITUDE).toBe(true);
+      expect(epicentralDistanceKm(-150, lat, -150, lat + 1) >= MIN_KM_PER_DEGREE_LATITUDE).toBe(
+        true,
+      );
+      expect(epicentralDistanceKm(-150, lat, -149, lat + 1) >= MIN_KM_PER_DEGREE_LATITUDE).toBe(
+        true,
+      );
     }
   });
 

@@ -11,9 +11,23 @@ const WGS84 = geodesic.Geodesic.WGS84;
 // its one-line equation lets the intensities be checked by hand.
 const study: Study = {
   name: 'felt-history test',
-  communities: [{ id: 'test-village', name: 'Test Village', lon: -150, lat: -47, vs30: 760, vs30Basis: 'measured', coastal: false }],
+  communities: [
+    {
+      id: 'test-village',
+      name: 'Test Village',
+      lon: -150,
+      lat: -47,
+      vs30: 760,
+      vs30Basis: 'measured',
+      coastal: false,
+    },
+  ],
   sources: [],
-  groundMotion: { crustal: [{ model: 'Cornell79', weight: 1 }], interface: [{ model: 'AGA16', weight: 1 }], intraslab: [{ model: 'AGA16', weight: 1 }] },
+  groundMotion: {
+    crustal: [{ model: 'Cornell79', weight: 1 }],
+    interface: [{ model: 'AGA16', weight: 1 }],
+    intraslab: [{ model: 'AGA16', weight: 1 }],
+  },
   settings: {
     measures: ['PGA'],
     levels: {},
@@ -28,9 +42,25 @@ const study: Study = {
 };
 
 /** An event at a geodesic distance and azimuth from the village. */
-function at(id: string, magnitude: number, distanceKm: number, azimuthDeg: number, depthKm: number, isoDay: string, magnitudeType = 'Mw'): CatalogEvent {
+function at(
+  id: string,
+  magnitude: number,
+  distanceKm: number,
+  azimuthDeg: number,
+  depthKm: number,
+  isoDay: string,
+  magnitudeType = 'Mw',
+): CatalogEvent {
   const p = WGS84.Direct(-47, -150, azimuthDeg, distanceKm * 1000);
-  return { id, timeMs: Date.parse(`${isoDay}T00:00:00Z`), lon: p.lon2 ?? NaN, lat: p.lat2 ?? NaN, depthKm, magnitude, magnitudeType };
+  return {
+    id,
+    timeMs: Date.parse(`${isoDay}T00:00:00Z`),
+    lon: p.lon2 ?? NaN,
+    lat: p.lat2 ?? NaN,
+    depthKm,
+    magnitude,
+    magnitudeType,
+  };
 }
 
 describe('feltHistory', () => {
@@ -63,14 +93,26 @@ describe('feltHistory', () => {
     for (const [id, pga, mmi] of cases) {
       const e = byId.get(id);
       expect(e?.setting).toBe('crustal');
-      expectClose(e?.pgaG ?? NaN, pga, pga * 1e-4, `Cornell et al. (1979) median PGA, hand computation (${id})`);
-      expectClose(e?.mmi ?? NaN, mmi, 1e-3, `Worden et al. (2012) MMI from that PGA, hand computation (${id})`);
+      expectClose(
+        e?.pgaG ?? NaN,
+        pga,
+        pga * 1e-4,
+        `Cornell et al. (1979) median PGA, hand computation (${id})`,
+      );
+      expectClose(
+        e?.mmi ?? NaN,
+        mmi,
+        1e-3,
+        `Worden et al. (2012) MMI from that PGA, hand computation (${id})`,
+      );
     }
     expect(byId.get('near-strong')?.roman).toBe('VIII'); // 7.80 rounds to VIII
   });
 
   it('lists the events likely felt and strongly felt, with date, distance and direction', () => {
-    expect(village?.felt.map((e) => e.eventId)).toEqual(expect.arrayContaining(['moderate', 'near-strong']));
+    expect(village?.felt.map((e) => e.eventId)).toEqual(
+      expect.arrayContaining(['moderate', 'near-strong']),
+    );
     expect(village?.felt.map((e) => e.eventId)).not.toContain('small-far');
     expect(village?.stronglyFelt.map((e) => e.eventId)).toContain('near-strong');
     expect(village?.stronglyFelt.map((e) => e.eventId)).not.toContain('moderate');
@@ -82,7 +124,11 @@ describe('feltHistory', () => {
     expect(moderate?.compass).toBe('N');
     expect(byId.get('near-strong')?.compass).toBe('SE');
     // Time order.
-    expect(village?.estimates.map((e) => e.eventId).slice(0, 3)).toEqual(['moderate', 'small-far', 'near-strong']);
+    expect(village?.estimates.map((e) => e.eventId).slice(0, 3)).toEqual([
+      'moderate',
+      'small-far',
+      'near-strong',
+    ]);
   });
 
   it('uses the intraslab branches for deep events', () => {
@@ -104,6 +150,18 @@ describe('feltHistory', () => {
   });
 
   it('names the eight compass points', () => {
-    expect([0, 44, 46, 90, 135, 180, 225, 270, 315, 337.6, 359].map(compassPoint)).toEqual(['N', 'NE', 'NE', 'E', 'SE', 'S', 'SW', 'W', 'NW', 'N', 'N']);
+    expect([0, 44, 46, 90, 135, 180, 225, 270, 315, 337.6, 359].map(compassPoint)).toEqual([
+      'N',
+      'NE',
+      'NE',
+      'E',
+      'SE',
+      'S',
+      'SW',
+      'W',
+      'NW',
+      'N',
+      'N',
+    ]);
   });
 });

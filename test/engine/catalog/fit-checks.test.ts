@@ -1,6 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { fitCatalog } from '../../../api/catalog/catalog-fit.ts';
-import { bOutsideUsual, completenessChanges, largeMagnitudesDisagree, mostRemoved, poissonAtMost } from '../../../api/engine/catalog/fit-checks.ts';
+import {
+  bOutsideUsual,
+  completenessChanges,
+  largeMagnitudesDisagree,
+  mostRemoved,
+  poissonAtMost,
+} from '../../../api/engine/catalog/fit-checks.ts';
 import { syntheticCatalog } from '../../../api/engine/catalog/synthetic-catalog.ts';
 import { createRandom } from '../../../api/engine/random.ts';
 import { expectRelative } from '../../helpers/close.ts';
@@ -24,7 +30,13 @@ describe('checks of a Gutenberg–Richter fit', () => {
 
   it('the line against the count of the largest events, one unit below the largest', () => {
     // a = 4, b = 1, 10 years: from M 5.95 the line gives 10 · 10^(4 − 5.95) = 0.112 events.
-    const base = { aValue: 4, bValue: 1, referenceMagnitude: 3.95, observationYears: 10, magnitudeStep: 0.1 };
+    const base = {
+      aValue: 4,
+      bValue: 1,
+      referenceMagnitude: 3.95,
+      observationYears: 10,
+      magnitudeStep: 0.1,
+    };
     const agreeing = largeMagnitudesDisagree({ ...base, magnitudes: [4, 4.5, 5, 5.5, 6.96] });
     // One observed against 0.112 predicted: P(N >= 1) = 1 − e^-0.112 = 0.106, two-sided 0.21: no finding.
     expect(agreeing).toBeUndefined();
@@ -41,8 +53,18 @@ describe('checks of a Gutenberg–Richter fit', () => {
   });
 
   it('completeness changing over time, and declustering removing most events', () => {
-    const window = (startYear: number, mc: number) => ({ startMs: startYear * YEAR_MS, endMs: (startYear + 10) * YEAR_MS, eventCount: 100, mc });
-    expect(completenessChanges([window(0, 4.2), window(10, 3.2)], 3.2)).toEqual({ kind: 'completeness-changes', mcUsed: 3.2, earliestMc: 4.2, highestMc: 4.2 });
+    const window = (startYear: number, mc: number) => ({
+      startMs: startYear * YEAR_MS,
+      endMs: (startYear + 10) * YEAR_MS,
+      eventCount: 100,
+      mc,
+    });
+    expect(completenessChanges([window(0, 4.2), window(10, 3.2)], 3.2)).toEqual({
+      kind: 'completeness-changes',
+      mcUsed: 3.2,
+      earliestMc: 4.2,
+      highestMc: 4.2,
+    });
     expect(completenessChanges([window(0, 3.3), window(10, 3.2)], 3.2)).toBeUndefined();
     expect(mostRemoved(800, 1000)).toEqual({ kind: 'most-removed', removed: 800, total: 1000 });
     expect(mostRemoved(500, 1000)).toBeUndefined();
@@ -57,12 +79,30 @@ describe('checks of a Gutenberg–Richter fit', () => {
       mMin: 4,
       mMax: 6,
       eventCount: 2000,
-      rings: [[[-140, -50], [-139, -50], [-139, -49], [-140, -49], [-140, -50]]],
+      rings: [
+        [
+          [-140, -50],
+          [-139, -50],
+          [-139, -49],
+          [-140, -49],
+          [-140, -50],
+        ],
+      ],
       depthKm: [5, 15],
       startMs: Date.UTC(2001, 0, 1),
       endMs: Date.UTC(2021, 0, 1),
     });
-    const fit = fitCatalog(events, { mc: 4, startMs: Date.UTC(2001, 0, 1), endMs: Date.UTC(2021, 0, 1), optionNames: { span: '--start and --end', mMax: '--m-max', periods: '--periods', decluster: '--no-decluster' } });
+    const fit = fitCatalog(events, {
+      mc: 4,
+      startMs: Date.UTC(2001, 0, 1),
+      endMs: Date.UTC(2021, 0, 1),
+      optionNames: {
+        span: '--start and --end',
+        mMax: '--m-max',
+        periods: '--periods',
+        decluster: '--no-decluster',
+      },
+    });
     const removed = fit.declustering?.removed.length ?? 0;
     expect(removed / events.length).toBeGreaterThan(0.5);
     const warning = fit.warnings.find((w) => w.startsWith('declustering removed'));

@@ -3,7 +3,12 @@ import { MS_PER_YEAR, type CatalogEvent } from '../../../api/engine/catalog/even
 import { frequencyMagnitude } from '../../../api/engine/catalog/frequency-magnitude.ts';
 import { expectClose } from '../../helpers/close.ts';
 
-const event = (id: string, years: number, magnitude: number, magnitudeType = 'Mw'): CatalogEvent => ({
+const event = (
+  id: string,
+  years: number,
+  magnitude: number,
+  magnitudeType = 'Mw',
+): CatalogEvent => ({
   id,
   timeMs: years * MS_PER_YEAR,
   lon: -150,
@@ -15,7 +20,15 @@ const event = (id: string, years: number, magnitude: number, magnitudeType = 'Mw
 
 describe('frequency–magnitude distribution', () => {
   // Hand-made: 4.0 three times, 4.1 twice, 4.3 once, over 10 Julian years; an ML event left out.
-  const events = [event('a', 1, 4.0), event('b', 2, 4.0), event('c', 3, 4.0), event('d', 4, 4.1), event('e', 5, 4.1), event('f', 6, 4.3), event('g', 7, 4.2, 'ML')];
+  const events = [
+    event('a', 1, 4.0),
+    event('b', 2, 4.0),
+    event('c', 3, 4.0),
+    event('d', 4, 4.1),
+    event('e', 5, 4.1),
+    event('f', 6, 4.3),
+    event('g', 7, 4.2, 'ML'),
+  ];
 
   it('counts per bin and cumulatively, with annual rates', () => {
     const fmd = frequencyMagnitude(events, { startMs: 0, endMs: 10 * MS_PER_YEAR });
@@ -28,7 +41,12 @@ describe('frequency–magnitude distribution', () => {
       [4.3, 1, 1],
     ]);
     const rates = fmd.bins.map((b) => [b.annualRate, b.cumulativeAnnualRate]);
-    [[0.3, 0.6], [0.2, 0.3], [0, 0.1], [0.1, 0.1]].forEach(([r, c], i) => {
+    [
+      [0.3, 0.6],
+      [0.2, 0.3],
+      [0, 0.1],
+      [0.1, 0.1],
+    ].forEach(([r, c], i) => {
       expectClose(rates[i]?.[0] ?? NaN, r as number, 1e-12, 'hand count over 10 years');
       expectClose(rates[i]?.[1] ?? NaN, c as number, 1e-12, 'hand count over 10 years, cumulative');
     });
@@ -39,15 +57,34 @@ describe('frequency–magnitude distribution', () => {
   it('puts a fitted line beside the bins', () => {
     // log10 N = 5 − 1.0 M at the lower edges (the cumulative counts' magnitudes, Utsu 1965):
     // 10^(5 − 3.95) = 11.2202, 10^(5 − 4.05) = 8.91251 ... (hand computation).
-    const fmd = frequencyMagnitude(events, { startMs: 0, endMs: 10 * MS_PER_YEAR, fit: { aValue: 5, bValue: 1, referenceMagnitude: 4.05 } });
+    const fmd = frequencyMagnitude(events, {
+      startMs: 0,
+      endMs: 10 * MS_PER_YEAR,
+      fit: { aValue: 5, bValue: 1, referenceMagnitude: 4.05 },
+    });
     expect(fmd.bins[0]?.fittedCumulativeAnnualRate).toBeUndefined();
-    expectClose(fmd.bins[1]?.fittedCumulativeAnnualRate ?? NaN, 8.91251, 1e-5, 'hand computation of 10^(a − b M)');
-    expectClose(fmd.bins[3]?.fittedCumulativeAnnualRate ?? NaN, 5.62341, 1e-5, 'hand computation of 10^(a − b M)');
+    expectClose(
+      fmd.bins[1]?.fittedCumulativeAnnualRate ?? NaN,
+      8.91251,
+      1e-5,
+      'hand computation of 10^(a − b M)',
+    );
+    expectClose(
+      fmd.bins[3]?.fittedCumulativeAnnualRate ?? NaN,
+      5.62341,
+      1e-5,
+      'hand computation of 10^(a − b M)',
+    );
     expect(fmd.fittedLine?.map((p) => p.magnitude)).toEqual([4.05, 4.35]);
-    expectClose(fmd.fittedLine?.[1]?.cumulativeAnnualRate ?? NaN, 4.46684, 1e-5, 'hand computation of 10^(5 − 4.35)');
+    expectClose(
+      fmd.fittedLine?.[1]?.cumulativeAnnualRate ?? NaN,
+      4.46684,
+      1e-5,
+      'hand computation of 10^(5 − 4.35)',
+    );
   });
 
-  it('uses each bin\'s own years under completeness periods', () => {
+  it("uses each bin's own years under completeness periods", () => {
     // M >= 4.0 from year 5, M >= 4.2 from year 0: bins 4.0 and 4.1 hold only e (year 5),
     // observed 5 years; 4.3 holds f, observed 10 years (hand count).
     const fmd = frequencyMagnitude(events, {
@@ -63,7 +100,12 @@ describe('frequency–magnitude distribution', () => {
       [4.2, 0, 10],
       [4.3, 1, 10],
     ]);
-    expectClose(fmd.bins[0]?.cumulativeAnnualRate ?? NaN, 0.2 + 0 + 0.1, 1e-12, 'sum of per-bin rates');
+    expectClose(
+      fmd.bins[0]?.cumulativeAnnualRate ?? NaN,
+      0.2 + 0 + 0.1,
+      1e-12,
+      'sum of per-bin rates',
+    );
   });
 
   it('with periods, observes each bin from its period start even when the span starts later (as Weichert 1980 counts it)', () => {
@@ -87,6 +129,8 @@ describe('frequency–magnitude distribution', () => {
   });
 
   it('refuses a backwards span', () => {
-    expect(() => frequencyMagnitude(events, { startMs: 10, endMs: 0 })).toThrow(/endMs after startMs/);
+    expect(() => frequencyMagnitude(events, { startMs: 10, endMs: 0 })).toThrow(
+      /endMs after startMs/,
+    );
   });
 });

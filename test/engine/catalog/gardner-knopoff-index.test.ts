@@ -20,22 +20,53 @@ const T0 = Date.UTC(2001, 0, 1);
  * sequences: a third of the events placed 0–80 km and 0–400 days from an earlier one, on whole
  * days (time ties). Magnitudes on 0.1 steps (magnitude ties), Gutenberg–Richter b = 1 from 2.5.
  */
-function clusteredCatalog(random: RandomSource, count: number, centreLon: number, centreLat: number, spanDeg: number): CatalogEvent[] {
+function clusteredCatalog(
+  random: RandomSource,
+  count: number,
+  centreLon: number,
+  centreLat: number,
+  spanDeg: number,
+): CatalogEvent[] {
   const events: CatalogEvent[] = [];
-  const magnitude = (): number => Math.round((2.5 - Math.log10(1 - random.nextFloat() * 0.9999)) * 10) / 10;
+  const magnitude = (): number =>
+    Math.round((2.5 - Math.log10(1 - random.nextFloat() * 0.9999)) * 10) / 10;
   for (let k = 0; k < count; k++) {
     const id = `e${k}`;
     const type = random.nextFloat() < 0.05 ? 'ML' : 'Mw';
     if (k > 0 && random.nextFloat() < 1 / 3) {
       const parent = events[Math.floor(random.nextFloat() * events.length)] as CatalogEvent;
-      const p = WGS84.Direct(parent.lat, parent.lon, 360 * random.nextFloat(), 80_000 * random.nextFloat());
+      const p = WGS84.Direct(
+        parent.lat,
+        parent.lon,
+        360 * random.nextFloat(),
+        80_000 * random.nextFloat(),
+      );
       const days = Math.floor(400 * random.nextFloat());
-      events.push({ id, timeMs: parent.timeMs + days * MS_PER_DAY, lon: p.lon2 ?? NaN, lat: p.lat2 ?? NaN, depthKm: 10, magnitude: magnitude(), magnitudeType: type });
+      events.push({
+        id,
+        timeMs: parent.timeMs + days * MS_PER_DAY,
+        lon: p.lon2 ?? NaN,
+        lat: p.lat2 ?? NaN,
+        depthKm: 10,
+        magnitude: magnitude(),
+        magnitudeType: type,
+      });
     } else {
       const lat = Math.max(-90, Math.min(90, centreLat + spanDeg * (2 * random.nextFloat() - 1)));
       const lon = ((centreLon + spanDeg * (2 * random.nextFloat() - 1) + 540) % 360) - 180;
-      const timeMs = T0 + Math.floor(730 * random.nextFloat()) * MS_PER_DAY + (random.nextFloat() < 0.5 ? 0 : Math.floor(86_400_000 * random.nextFloat()));
-      events.push({ id, timeMs, lon, lat, depthKm: 10, magnitude: magnitude(), magnitudeType: type });
+      const timeMs =
+        T0 +
+        Math.floor(730 * random.nextFloat()) * MS_PER_DAY +
+        (random.nextFloat() < 0.5 ? 0 : Math.floor(86_400_000 * random.nextFloat()));
+      events.push({
+        id,
+        timeMs,
+        lon,
+        lat,
+        depthKm: 10,
+        magnitude: magnitude(),
+        magnitudeType: type,
+      });
     }
   }
   return events;

@@ -2,7 +2,10 @@ import geodesic from 'geographiclib-geodesic';
 import { describe, expect, it } from 'vitest';
 import type { CatalogEvent } from '../../../api/engine/catalog/event.ts';
 import { MS_PER_DAY } from '../../../api/engine/catalog/event.ts';
-import { declusterGardnerKnopoff, gardnerKnopoffWindow } from '../../../api/engine/catalog/gardner-knopoff.ts';
+import {
+  declusterGardnerKnopoff,
+  gardnerKnopoffWindow,
+} from '../../../api/engine/catalog/gardner-knopoff.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 
 describe('Gardner & Knopoff (1974) windows', () => {
@@ -26,8 +29,18 @@ describe('Gardner & Knopoff (1974) windows', () => {
   it('switch time branch at M 6.5', () => {
     // Fitted form, upper branch from M 6.5: 10^(0.032 · 6.5 + 2.7389) = 884.912 days; the lower
     // branch would give 930.786 (hand computation; the fitted form is not continuous there).
-    expectRelative(gardnerKnopoffWindow(6.5).days, 884.912, 1e-5, 'fitted Gardner & Knopoff time window, M >= 6.5 branch');
-    expectRelative(gardnerKnopoffWindow(6.4999).days, 930.786, 1e-3, 'fitted Gardner & Knopoff time window, M < 6.5 branch');
+    expectRelative(
+      gardnerKnopoffWindow(6.5).days,
+      884.912,
+      1e-5,
+      'fitted Gardner & Knopoff time window, M >= 6.5 branch',
+    );
+    expectRelative(
+      gardnerKnopoffWindow(6.4999).days,
+      930.786,
+      1e-3,
+      'fitted Gardner & Knopoff time window, M < 6.5 branch',
+    );
   });
 
   it('stay close to the original table', () => {
@@ -41,8 +54,18 @@ describe('Gardner & Knopoff (1974) windows', () => {
     ];
     for (const [m, km, days] of table) {
       const w = gardnerKnopoffWindow(m);
-      expectRelative(w.distanceKm, km, 0.02, `Gardner & Knopoff (1974) table distance at M ${m} (from memory)`);
-      expectRelative(w.days, days, 0.08, `Gardner & Knopoff (1974) table time at M ${m} (from memory)`);
+      expectRelative(
+        w.distanceKm,
+        km,
+        0.02,
+        `Gardner & Knopoff (1974) table distance at M ${m} (from memory)`,
+      );
+      expectRelative(
+        w.days,
+        days,
+        0.08,
+        `Gardner & Knopoff (1974) table time at M ${m} (from memory)`,
+      );
     }
   });
 });
@@ -52,9 +75,24 @@ const T0 = Date.UTC(2000, 0, 1);
 const ORIGIN = { lon: -150, lat: -47 };
 
 /** An event placed at a geodesic distance and azimuth from the origin, `days` after T0. */
-function at(id: string, magnitude: number, distanceKm: number, azimuthDeg: number, days: number, magnitudeType = 'Mw'): CatalogEvent {
+function at(
+  id: string,
+  magnitude: number,
+  distanceKm: number,
+  azimuthDeg: number,
+  days: number,
+  magnitudeType = 'Mw',
+): CatalogEvent {
   const p = WGS84.Direct(ORIGIN.lat, ORIGIN.lon, azimuthDeg, distanceKm * 1000);
-  return { id, timeMs: T0 + days * MS_PER_DAY, lon: p.lon2 ?? NaN, lat: p.lat2 ?? NaN, depthKm: 10, magnitude, magnitudeType };
+  return {
+    id,
+    timeMs: T0 + days * MS_PER_DAY,
+    lon: p.lon2 ?? NaN,
+    lat: p.lat2 ?? NaN,
+    depthKm: 10,
+    magnitude,
+    magnitudeType,
+  };
 }
 
 describe('declusterGardnerKnopoff', () => {
@@ -83,7 +121,12 @@ describe('declusterGardnerKnopoff', () => {
     const fore = d.removed.find((r) => r.event.id === 'fore');
     expectClose(fore?.daysFromMainshock ?? NaN, -1, 1e-9, 'foreshock placed one day before');
     // Placed with GeographicLib's direct problem (Karney 2013); the inverse returns it.
-    expectClose(d.removed.find((r) => r.event.id === 'after-near')?.distanceKm ?? NaN, 20, 1e-6, 'geodesic distance of the placed aftershock');
+    expectClose(
+      d.removed.find((r) => r.event.id === 'after-near')?.distanceKm ?? NaN,
+      20,
+      1e-6,
+      'geodesic distance of the placed aftershock',
+    );
   });
 
   it('keeps foreshocks when asked', () => {
@@ -105,7 +148,11 @@ describe('declusterGardnerKnopoff', () => {
   });
 
   it('uses moment magnitudes only unless told otherwise', () => {
-    const mixed = [at('main', 6.0, 0, 0, 0), at('ml-after', 4.5, 10, 0, 5, 'ML'), at('mw-after', 4.0, 10, 90, 6, 'Mwr')];
+    const mixed = [
+      at('main', 6.0, 0, 0, 0),
+      at('ml-after', 4.5, 10, 0, 5, 'ML'),
+      at('mw-after', 4.0, 10, 90, 6, 'Mwr'),
+    ];
     const moment = declusterGardnerKnopoff(mixed);
     expect(moment.excludedNonMoment).toBe(1);
     expect(moment.removed.map((r) => r.event.id)).toEqual(['mw-after']);
@@ -115,6 +162,8 @@ describe('declusterGardnerKnopoff', () => {
   });
 
   it('refuses repeated ids', () => {
-    expect(() => declusterGardnerKnopoff([at('x', 5, 0, 0, 0), at('x', 4, 1, 0, 1)])).toThrow(/unique event ids; "x"/);
+    expect(() => declusterGardnerKnopoff([at('x', 5, 0, 0, 0), at('x', 4, 1, 0, 1)])).toThrow(
+      /unique event ids; "x"/,
+    );
   });
 });

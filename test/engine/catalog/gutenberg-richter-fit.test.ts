@@ -11,9 +11,22 @@ import type { LonLat } from '../../../api/engine/model.ts';
 import { createRandom } from '../../../api/engine/random.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 
-const ZONE: readonly (readonly LonLat[])[] = [[[-150, -48], [-148, -48], [-148, -46], [-150, -46], [-150, -48]]];
+const ZONE: readonly (readonly LonLat[])[] = [
+  [
+    [-150, -48],
+    [-148, -48],
+    [-148, -46],
+    [-150, -46],
+    [-150, -48],
+  ],
+];
 
-const event = (id: string, years: number, magnitude: number, magnitudeType = 'Mw'): CatalogEvent => ({
+const event = (
+  id: string,
+  years: number,
+  magnitude: number,
+  magnitudeType = 'Mw',
+): CatalogEvent => ({
   id,
   timeMs: years * MS_PER_YEAR,
   lon: -150,
@@ -45,8 +58,18 @@ describe('fitGutenbergRichter (Aki–Utsu over one span)', () => {
     expectRelative(annualRateAbove(fit, 5.0), 0.0387759, 1e-5, 'hand computation of 10^(a − b M)');
     // Truncated at 7: 0.6 (10^(−b · 1.05) − 10^(−b · 3.05)) / (1 − 10^(−b · 3.05)) = 0.0385792
     // (hand computation of the renormalised truncated form, Cornell & Vanmarcke 1969, from memory).
-    expectRelative(truncatedRateAbove(fit, 5.0, 7.0), 0.0385792, 1e-5, 'hand computation, truncated Gutenberg–Richter');
-    expectClose(truncatedRateAbove(fit, 3.95, 7.0), 0.6, 1e-12, 'rate kept at the reference magnitude');
+    expectRelative(
+      truncatedRateAbove(fit, 5.0, 7.0),
+      0.0385792,
+      1e-5,
+      'hand computation, truncated Gutenberg–Richter',
+    );
+    expectClose(
+      truncatedRateAbove(fit, 3.95, 7.0),
+      0.6,
+      1e-12,
+      'rate kept at the reference magnitude',
+    );
     expect(truncatedRateAbove(fit, 7.0, 7.0)).toBe(0);
   });
 
@@ -59,7 +82,9 @@ describe('fitGutenbergRichter (Aki–Utsu over one span)', () => {
   });
 
   it('refuses a span that ends before it starts', () => {
-    expect(() => fitGutenbergRichter(events, { mc: 4.0, startMs: 10, endMs: 5 })).toThrow(/endMs after startMs/);
+    expect(() => fitGutenbergRichter(events, { mc: 4.0, startMs: 10, endMs: 5 })).toThrow(
+      /endMs after startMs/,
+    );
   });
 });
 
@@ -86,12 +111,26 @@ describe('fitGutenbergRichterWeichert (unequal completeness periods)', () => {
   ];
 
   it('recovers b and the rate where one span would not', () => {
-    const fit = fitGutenbergRichterWeichert(recorded, { periods, endMs: 100 * MS_PER_YEAR, upperMagnitude: 8.4 });
+    const fit = fitGutenbergRichterWeichert(recorded, {
+      periods,
+      endMs: 100 * MS_PER_YEAR,
+      upperMagnitude: 8.4,
+    });
     expect(fit.method).toBe('weichert');
     // True b = 1 and true rate 15 a year of M >= 3.95 (the synthetic catalog's own parameters):
     // within two Weichert (1980) standard errors.
-    expectClose(fit.bValue, 1, 2 * fit.sigmaB, 'true b of the synthetic catalog, within 2σ (Weichert 1980)');
-    expectClose(fit.rateAtReference, 15, 2 * fit.sigmaRate, 'true rate of the synthetic catalog, within 2σ');
+    expectClose(
+      fit.bValue,
+      1,
+      2 * fit.sigmaB,
+      'true b of the synthetic catalog, within 2σ (Weichert 1980)',
+    );
+    expectClose(
+      fit.rateAtReference,
+      15,
+      2 * fit.sigmaRate,
+      'true rate of the synthetic catalog, within 2σ',
+    );
     // Ignoring the periods (one span of 100 years from Mc 4.0) the missing early small events
     // pull b well below the truth: a check that the periods matter.
     const naive = fitGutenbergRichter(recorded, { mc: 4.0, startMs: 0, endMs: 100 * MS_PER_YEAR });
@@ -99,6 +138,8 @@ describe('fitGutenbergRichterWeichert (unequal completeness periods)', () => {
   });
 
   it('refuses an empty list of periods', () => {
-    expect(() => fitGutenbergRichterWeichert(recorded, { periods: [] })).toThrow(/at least one completeness period/);
+    expect(() => fitGutenbergRichterWeichert(recorded, { periods: [] })).toThrow(
+      /at least one completeness period/,
+    );
   });
 });

@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { binCentre, binIndex, magnitudeHistogram } from '../../../api/engine/catalog/magnitude-bins.ts';
+import {
+  binCentre,
+  binIndex,
+  magnitudeHistogram,
+} from '../../../api/engine/catalog/magnitude-bins.ts';
 
 describe('magnitude bins', () => {
   it('round to the nearest bin centre, edges upwards', () => {

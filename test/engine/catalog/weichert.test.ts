@@ -8,7 +8,15 @@ import type { LonLat } from '../../../api/engine/model.ts';
 import { createRandom } from '../../../api/engine/random.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 
-const ZONE: readonly (readonly LonLat[])[] = [[[-150, -48], [-148, -48], [-148, -46], [-150, -46], [-150, -48]]];
+const ZONE: readonly (readonly LonLat[])[] = [
+  [
+    [-150, -48],
+    [-148, -48],
+    [-148, -46],
+    [-150, -46],
+    [-150, -48],
+  ],
+];
 
 describe('Weichert (1980) maximum likelihood', () => {
   it('solves a table built to fit b exactly, with unequal periods', () => {
@@ -28,7 +36,7 @@ describe('Weichert (1980) maximum likelihood', () => {
       ],
       { magnitudeStep: 0.5 },
     );
-    expectClose(fit.bValue, 0.6020600, 1e-8, 'hand construction satisfying Weichert (1980) exactly');
+    expectClose(fit.bValue, 0.60206, 1e-8, 'hand construction satisfying Weichert (1980) exactly');
     expectClose(fit.rateAtReference, 18.75, 1e-8, 'hand computation of the Weichert (1980) rate');
     expectClose(fit.referenceMagnitude, 3.75, 1e-12, 'lowest bin centre − ΔM/2 (Utsu 1965)');
     expectClose(fit.aValue, 3.5307262, 1e-7, 'log10(18.75) + b · 3.75, hand computation');
@@ -41,7 +49,11 @@ describe('Weichert (1980) maximum likelihood', () => {
   describe('with one completeness period', () => {
     const start = Date.UTC(1990, 0, 1);
     const end = start + 30 * MS_PER_YEAR;
-    for (const [seed, b] of [[21, 0.8], [22, 1.0], [23, 1.2]] as const) {
+    for (const [seed, b] of [
+      [21, 0.8],
+      [22, 1.0],
+      [23, 1.2],
+    ] as const) {
       const events = syntheticCatalog({
         random: createRandom(seed),
         bValue: b,
@@ -56,7 +68,12 @@ describe('Weichert (1980) maximum likelihood', () => {
       });
       // Bins continue with zero counts up to 20, so the fit is effectively untruncated (the
       // missing tail is under e^(−1.8 · 16) ≈ 1e-13 of the total).
-      const bins = observationBins(events, { periods: [{ magnitude: 4.0, startMs: start }], endMs: end, magnitudeStep: 0.1, upperMagnitude: 20 });
+      const bins = observationBins(events, {
+        periods: [{ magnitude: 4.0, startMs: start }],
+        endMs: end,
+        magnitudeStep: 0.1,
+        upperMagnitude: 20,
+      });
       const fit = weichertFit(bins, { magnitudeStep: 0.1 });
       const au = akiUtsuBValue(
         events.map((e) => e.magnitude),
@@ -69,7 +86,12 @@ describe('Weichert (1980) maximum likelihood', () => {
         // solved in closed form by b = ln(1 + ΔM / (mean − Mc)) / (ΔM ln 10) (Bender 1983;
         // Tinti & Mulargia 1987; from memory, and derivable by hand).
         const closed = Math.log(1 + 0.1 / (au.meanMagnitude - 4.0)) / (0.1 * Math.LN10);
-        expectRelative(fit.bValue, closed, 1e-9, 'closed-form binned MLE (Bender 1983, from memory)');
+        expectRelative(
+          fit.bValue,
+          closed,
+          1e-9,
+          'closed-form binned MLE (Bender 1983, from memory)',
+        );
       });
 
       it(`equals Aki–Utsu up to the known binning term (b = ${b})`, () => {
@@ -78,8 +100,18 @@ describe('Weichert (1980) maximum likelihood', () => {
         // (derived here from the two formulas). Checked to 1e-9; the plain difference is
         // 0.3% (b = 0.8) to 0.7% (b = 1.2), the tolerance any "equal" claim must allow.
         const y = au.bValue * Math.LN10 * 0.1;
-        expectRelative(fit.bValue, (au.bValue * 2 * Math.atanh(y / 2)) / y, 1e-9, 'Aki (1965) / Utsu (1965) with the binning term');
-        expectRelative(fit.bValue, au.bValue, 0.008, 'Aki–Utsu, within the binning term (under 0.8% for b ≤ 1.3)');
+        expectRelative(
+          fit.bValue,
+          (au.bValue * 2 * Math.atanh(y / 2)) / y,
+          1e-9,
+          'Aki (1965) / Utsu (1965) with the binning term',
+        );
+        expectRelative(
+          fit.bValue,
+          au.bValue,
+          0.008,
+          'Aki–Utsu, within the binning term (under 0.8% for b ≤ 1.3)',
+        );
       });
 
       it(`gives the count over the span as the rate, and Aki's σ in the limit (b = ${b})`, () => {
@@ -95,10 +127,20 @@ describe('Weichert (1980) maximum likelihood', () => {
   });
 
   it('refuses bins it cannot fit', () => {
-    expect(() => weichertFit([{ magnitude: 4, count: 10, years: 5 }, { magnitude: 4.1, count: 0, years: 5 }], { magnitudeStep: 0.1 })).toThrow(
-      /at least 2 magnitude bins/,
-    );
-    expect(() => weichertFit([{ magnitude: 4, count: 1.5, years: 5 }], { magnitudeStep: 0.1 })).toThrow(/bins\[0\]\.count/);
-    expect(() => weichertFit([{ magnitude: 4, count: 1, years: 0 }], { magnitudeStep: 0.1 })).toThrow(/bins\[0\]\.years/);
+    expect(() =>
+      weichertFit(
+        [
+          { magnitude: 4, count: 10, years: 5 },
+          { magnitude: 4.1, count: 0, years: 5 },
+        ],
+        { magnitudeStep: 0.1 },
+      ),
+    ).toThrow(/at least 2 magnitude bins/);
+    expect(() =>
+      weichertFit([{ magnitude: 4, count: 1.5, years: 5 }], { magnitudeStep: 0.1 }),
+    ).toThrow(/bins\[0\]\.count/);
+    expect(() =>
+      weichertFit([{ magnitude: 4, count: 1, years: 0 }], { magnitudeStep: 0.1 }),
+    ).toThrow(/bins\[0\]\.years/);
   });
 });

@@ -3,15 +3,34 @@ import { insideZone, zonePolygon } from '../../../api/engine/catalog/zone-polygo
 
 describe('zone polygons', () => {
   it('close an open ring and find its bounding box', () => {
-    const z = zonePolygon([[[-150, -48], [-148, -48], [-148, -46], [-150, -46]]]);
+    const z = zonePolygon([
+      [
+        [-150, -48],
+        [-148, -48],
+        [-148, -46],
+        [-150, -46],
+      ],
+    ]);
     expect(z.geometry.coordinates[0]).toHaveLength(5);
     expect(z.bbox).toEqual([-150, -48, -148, -46]);
   });
 
   it('tell inside from outside, holes and boundary included', () => {
     const z = zonePolygon([
-      [[-150, -48], [-148, -48], [-148, -46], [-150, -46], [-150, -48]],
-      [[-149.5, -47.5], [-148.5, -47.5], [-148.5, -46.5], [-149.5, -46.5], [-149.5, -47.5]],
+      [
+        [-150, -48],
+        [-148, -48],
+        [-148, -46],
+        [-150, -46],
+        [-150, -48],
+      ],
+      [
+        [-149.5, -47.5],
+        [-148.5, -47.5],
+        [-148.5, -46.5],
+        [-149.5, -46.5],
+        [-149.5, -47.5],
+      ],
     ]);
     expect(insideZone(z, -149.8, -47.9)).toBe(true);
     expect(insideZone(z, -149, -47)).toBe(false); // in the hole
@@ -21,7 +40,23 @@ describe('zone polygons', () => {
 
   it('name the bad ring or point', () => {
     expect(() => zonePolygon([])).toThrow(/outer ring/);
-    expect(() => zonePolygon([[[-150, -48], [-148, -95], [-148, -46]]])).toThrow(/rings\[0\]\[1\]/);
-    expect(() => zonePolygon([[[-150, -48], [-148, -48], [-150, -48]]])).toThrow(/at least 3 distinct points/);
+    expect(() =>
+      zonePolygon([
+        [
+          [-150, -48],
+          [-148, -95],
+          [-148, -46],
+        ],
+      ]),
+    ).toThrow(/rings\[0\]\[1\]/);
+    expect(() =>
+      zonePolygon([
+        [
+          [-150, -48],
+          [-148, -48],
+          [-150, -48],
+        ],
+      ]),
+    ).toThrow(/at least 3 distinct points/);
   });
 });

@@ -1,6 +1,10 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { faultSurface, surfacePatch, wholeSurface } from '../../../api/engine/geometry/fault-surface.ts';
+import {
+  faultSurface,
+  surfacePatch,
+  wholeSurface,
+} from '../../../api/engine/geometry/fault-surface.ts';
 import { ruptureDistances } from '../../../api/engine/geometry/distances.ts';
 import type { RuptureSurface } from '../../../api/engine/ruptures/rupture.ts';
 import { expectClose } from '../../helpers/close.ts';
@@ -17,7 +21,18 @@ const rad = (deg: number): number => (deg * Math.PI) / 180;
 
 function plane(dipDeg: number, upperDepthKm: number, widthKm: number): RuptureSurface {
   const lowerDepthKm = upperDepthKm + widthKm * Math.sin(rad(dipDeg));
-  return wholeSurface(faultSurface(faultKm([[0, -50], [0, 50]], { dipDeg, dipDirectionDeg: 90, upperDepthKm, lowerDepthKm }), FRAME));
+  return wholeSurface(
+    faultSurface(
+      faultKm(
+        [
+          [0, -50],
+          [0, 50],
+        ],
+        { dipDeg, dipDirectionDeg: 90, upperDepthKm, lowerDepthKm },
+      ),
+      FRAME,
+    ),
+  );
 }
 
 describe('ruptureDistances on a dipping plane reaching the surface (dip 30°, W = 20 km)', () => {
@@ -38,7 +53,12 @@ describe('ruptureDistances on a dipping plane reaching the surface (dip 30°, W 
     const d = 30; // d cos δ = 25.98 > W, so the perpendicular's foot is off the plane
     const r = ruptureDistances(surface, { x: d, y: 0 });
     expectClose(r.rjbKm, d - 20 * Math.cos(delta), TOL, 'Rjb beyond the surface projection');
-    expectClose(r.rrupKm, Math.hypot(d - 20 * Math.cos(delta), 20 * Math.sin(delta)), TOL, 'Rrup to the bottom edge (hand geometry)');
+    expectClose(
+      r.rrupKm,
+      Math.hypot(d - 20 * Math.cos(delta), 20 * Math.sin(delta)),
+      TOL,
+      'Rrup to the bottom edge (hand geometry)',
+    );
   });
 
   it('footwall sites: Rjb = Rrup = d, Rx = -d', () => {
@@ -52,7 +72,12 @@ describe('ruptureDistances on a dipping plane reaching the surface (dip 30°, W 
 
   it('zero distance on the trace', () => {
     const r = ruptureDistances(surface, { x: 0, y: 10 });
-    for (const [name, value] of [['Rjb', r.rjbKm], ['Rrup', r.rrupKm], ['Rx', r.rxKm], ['Ry0', r.ry0Km]] as const) {
+    for (const [name, value] of [
+      ['Rjb', r.rjbKm],
+      ['Rrup', r.rrupKm],
+      ['Rx', r.rxKm],
+      ['Ry0', r.ry0Km],
+    ] as const) {
       expectClose(value, 0, TOL, `${name} on the trace`);
     }
   });
@@ -83,7 +108,12 @@ describe('ruptureDistances on a buried dipping plane (dip 40°, top at 5 km, W =
   it('hanging wall, d < z tan δ: Rrup = sqrt(d² + z²) to the top edge', () => {
     for (const d of [0, 1, 4]) {
       expect(d).toBeLessThan(z * Math.tan(delta));
-      expectClose(ruptureDistances(surface, { x: d, y: 0 }).rrupKm, Math.hypot(d, z), TOL, `Rrup to the top edge, d = ${d}`);
+      expectClose(
+        ruptureDistances(surface, { x: d, y: 0 }).rrupKm,
+        Math.hypot(d, z),
+        TOL,
+        `Rrup to the top edge, d = ${d}`,
+      );
     }
   });
 
@@ -91,7 +121,12 @@ describe('ruptureDistances on a buried dipping plane (dip 40°, top at 5 km, W =
     for (const d of [6, 12, 20]) {
       expect(d * Math.cos(delta) - z * Math.sin(delta)).toBeLessThanOrEqual(18);
       const r = ruptureDistances(surface, { x: d, y: 0 });
-      expectClose(r.rrupKm, d * Math.sin(delta) + z * Math.cos(delta), TOL, `Rrup = d sin δ + z cos δ, d = ${d}`);
+      expectClose(
+        r.rrupKm,
+        d * Math.sin(delta) + z * Math.cos(delta),
+        TOL,
+        `Rrup = d sin δ + z cos δ, d = ${d}`,
+      );
       expectClose(r.rjbKm, Math.max(0, d - 18 * Math.cos(delta)), TOL, `Rjb, d = ${d}`);
     }
   });
@@ -115,7 +150,12 @@ describe('ruptureDistances on a vertical strike-slip plane (0–15 km)', () => {
   });
   it('buried at 3 km: Rrup = sqrt(x² + 3²)', () => {
     const buried = plane(90, 3, 12);
-    expectClose(ruptureDistances(buried, { x: 7, y: 0 }).rrupKm, Math.hypot(7, 3), TOL, 'buried vertical plane');
+    expectClose(
+      ruptureDistances(buried, { x: 7, y: 0 }).rrupKm,
+      Math.hypot(7, 3),
+      TOL,
+      'buried vertical plane',
+    );
   });
 });
 
@@ -123,32 +163,71 @@ describe('ruptureDistances invariants', () => {
   const surface = plane(35, 2, 16);
   it('Rx changes sign across the trace; Rjb <= Rrup <= Rhypo and Rjb <= Repi', () => {
     fc.assert(
-      fc.property(fc.double({ min: -80, max: 80, noNaN: true }), fc.double({ min: -80, max: 80, noNaN: true }), (x, y) => {
-        const r = ruptureDistances(surface, { x, y });
-        if (Math.abs(x) > 1e-6) expect(Math.sign(r.rxKm)).toBe(Math.sign(x));
-        expect(r.rjbKm).toBeLessThanOrEqual(r.rrupKm + 1e-9);
-        expect(r.rrupKm).toBeLessThanOrEqual(r.rhypoKm + 1e-9);
-        expect(r.rjbKm).toBeLessThanOrEqual(r.repiKm + 1e-9);
-        expect(r.ry0Km).toBeGreaterThanOrEqual(0);
-      }),
+      fc.property(
+        fc.double({ min: -80, max: 80, noNaN: true }),
+        fc.double({ min: -80, max: 80, noNaN: true }),
+        (x, y) => {
+          const r = ruptureDistances(surface, { x, y });
+          if (Math.abs(x) > 1e-6) expect(Math.sign(r.rxKm)).toBe(Math.sign(x));
+          expect(r.rjbKm).toBeLessThanOrEqual(r.rrupKm + 1e-9);
+          expect(r.rrupKm).toBeLessThanOrEqual(r.rhypoKm + 1e-9);
+          expect(r.rjbKm).toBeLessThanOrEqual(r.repiKm + 1e-9);
+          expect(r.ry0Km).toBeGreaterThanOrEqual(0);
+        },
+      ),
     );
   });
 });
 
 describe('ruptureDistances on several planes', () => {
   it('a straight trace cut into two segments gives the distances of the uncut one (GC2 property, Spudich & Chiou 2015, from memory)', () => {
-    const cut = faultSurface(faultKm([[0, -50], [0, 10], [0, 50]], { dipDeg: 50, dipDirectionDeg: 90, upperDepthKm: 1, lowerDepthKm: 14 }), FRAME);
-    const whole = faultSurface(faultKm([[0, -50], [0, 50]], { dipDeg: 50, dipDirectionDeg: 90, upperDepthKm: 1, lowerDepthKm: 14 }), FRAME);
-    for (const site of [{ x: 12, y: 3 }, { x: -20, y: 70 }, { x: 5, y: -66 }, { x: 0.2, y: 10 }]) {
+    const cut = faultSurface(
+      faultKm(
+        [
+          [0, -50],
+          [0, 10],
+          [0, 50],
+        ],
+        { dipDeg: 50, dipDirectionDeg: 90, upperDepthKm: 1, lowerDepthKm: 14 },
+      ),
+      FRAME,
+    );
+    const whole = faultSurface(
+      faultKm(
+        [
+          [0, -50],
+          [0, 50],
+        ],
+        { dipDeg: 50, dipDirectionDeg: 90, upperDepthKm: 1, lowerDepthKm: 14 },
+      ),
+      FRAME,
+    );
+    for (const site of [
+      { x: 12, y: 3 },
+      { x: -20, y: 70 },
+      { x: 5, y: -66 },
+      { x: 0.2, y: 10 },
+    ]) {
       const a = ruptureDistances(wholeSurface(cut), site);
       const b = ruptureDistances(wholeSurface(whole), site);
-      for (const key of ['rjbKm', 'rrupKm', 'rxKm', 'ry0Km'] as const) expectClose(a[key], b[key], 1e-6, `${key} at (${site.x}, ${site.y})`);
+      for (const key of ['rjbKm', 'rrupKm', 'rxKm', 'ry0Km'] as const)
+        expectClose(a[key], b[key], 1e-6, `${key} at (${site.x}, ${site.y})`);
     }
   });
 
   it('Rjb and Rrup are the minima over the planes of a bent trace; Rx varies smoothly past the bend', () => {
     // North 40 km, then east 40 km; vertical, so every distance is to the trace.
-    const s = faultSurface(faultKm([[0, 0], [0, 40], [40, 40]], { dipDeg: 90, dipDirectionDeg: 135, upperDepthKm: 0, lowerDepthKm: 12 }), FRAME);
+    const s = faultSurface(
+      faultKm(
+        [
+          [0, 0],
+          [0, 40],
+          [40, 40],
+        ],
+        { dipDeg: 90, dipDirectionDeg: 135, upperDepthKm: 0, lowerDepthKm: 12 },
+      ),
+      FRAME,
+    );
     const surface = wholeSurface(s);
     const inside = ruptureDistances(surface, { x: 10, y: 30 });
     expectClose(inside.rjbKm, 10, TOL, 'nearest is the northward segment');
@@ -174,10 +253,22 @@ describe('ruptureDistances on several planes', () => {
   });
 
   it('a patch across the joint is two planes whose top edges add to its length', () => {
-    const s = faultSurface(faultKm([[0, 0], [0, 50], [50, 50]], { dipDeg: 90, dipDirectionDeg: 135, upperDepthKm: 0, lowerDepthKm: 12 }), FRAME);
+    const s = faultSurface(
+      faultKm(
+        [
+          [0, 0],
+          [0, 50],
+          [50, 50],
+        ],
+        { dipDeg: 90, dipDirectionDeg: 135, upperDepthKm: 0, lowerDepthKm: 12 },
+      ),
+      FRAME,
+    );
     const planes = surfacePatch(s, [30, 70], [0, 12]);
     expect(planes.length).toBe(2);
-    const lengths = planes.map((p) => Math.hypot(p.corners[1].x - p.corners[0].x, p.corners[1].y - p.corners[0].y));
+    const lengths = planes.map((p) =>
+      Math.hypot(p.corners[1].x - p.corners[0].x, p.corners[1].y - p.corners[0].y),
+    );
     expectClose(lengths[0] ?? NaN, 20, TOL, '20 km before the joint');
     expectClose(lengths[1] ?? NaN, 20, TOL, '20 km after the joint');
   });
@@ -185,7 +276,10 @@ describe('ruptureDistances on several planes', () => {
 
 describe('ruptureDistances for a point rupture (common practice)', () => {
   it('Rjb = Repi, Rrup = Rhypo, Rx = -Repi, Ry0 = 0', () => {
-    const r = ruptureDistances({ kind: 'point', hypocentre: { x: 3, y: 4, z: 12 } }, { x: 0, y: 0 });
+    const r = ruptureDistances(
+      { kind: 'point', hypocentre: { x: 3, y: 4, z: 12 } },
+      { x: 0, y: 0 },
+    );
     expectClose(r.repiKm, 5, 1e-12, '3-4-5');
     expectClose(r.rhypoKm, 13, 1e-12, '5-12-13');
     expectClose(r.rjbKm, 5, 1e-12, 'Rjb = Repi');

@@ -1,6 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { faultSurface } from '../../../api/engine/geometry/fault-surface.ts';
-import { endToEndOffsetsKm, floatingRuptures, positionOffsetsKm } from '../../../api/engine/geometry/floating-ruptures.ts';
+import {
+  endToEndOffsetsKm,
+  floatingRuptures,
+  positionOffsetsKm,
+} from '../../../api/engine/geometry/floating-ruptures.ts';
 import { InvalidInput } from '../../../api/engine/errors.ts';
 import { expectClose } from '../../helpers/close.ts';
 import { FRAME, faultKm } from './km-fixtures.ts';
@@ -15,13 +19,28 @@ describe('positionOffsetsKm', () => {
   it('not a whole number: 55 km of room at 10 km -> 6 intervals of 9.1667 km, one position in the middle of each', () => {
     const offsets = positionOffsetsKm(100, 45, 10);
     expect(offsets.length).toBe(6);
-    expectClose(offsets[0] ?? NaN, 55 / 12, 1e-12, 'first position half an interval from the start');
-    expectClose(offsets[5] ?? NaN, 55 - 55 / 12, 1e-12, 'last position half an interval from the end');
+    expectClose(
+      offsets[0] ?? NaN,
+      55 / 12,
+      1e-12,
+      'first position half an interval from the start',
+    );
+    expectClose(
+      offsets[5] ?? NaN,
+      55 - 55 / 12,
+      1e-12,
+      'last position half an interval from the end',
+    );
     expectClose((offsets[1] ?? NaN) - (offsets[0] ?? NaN), 55 / 6, 1e-12, 'even spacing');
   });
   it('the mean start is the middle of the room, as for a uniform start', () => {
     const offsets = positionOffsetsKm(73, 21.5, 5);
-    expectClose(offsets.reduce((s, o) => s + o, 0) / offsets.length, (73 - 21.5) / 2, 1e-12, 'mean of a uniform start on [0, 51.5]');
+    expectClose(
+      offsets.reduce((s, o) => s + o, 0) / offsets.length,
+      (73 - 21.5) / 2,
+      1e-12,
+      'mean of a uniform start on [0, 51.5]',
+    );
   });
   it('a rupture that fills the extent has one position', () => {
     expect(positionOffsetsKm(30, 30, 5)).toEqual([0]);
@@ -39,13 +58,31 @@ describe('endToEndOffsetsKm (a scenario searching for the nearest placement)', (
 });
 
 describe('floatingRuptures', () => {
-  const vertical = faultSurface(faultKm([[0, 0], [0, 100]], { dipDeg: 90, dipDirectionDeg: 90, upperDepthKm: 0, lowerDepthKm: 20 }), FRAME);
+  const vertical = faultSurface(
+    faultKm(
+      [
+        [0, 0],
+        [0, 100],
+      ],
+      { dipDeg: 90, dipDirectionDeg: 90, upperDepthKm: 0, lowerDepthKm: 20 },
+    ),
+    FRAME,
+  );
 
   it('a 40 x 10 km rupture on a 100 x 20 km fault at 5 km: 12 along x 2 down = 24 positions', () => {
-    const ruptures = floatingRuptures(vertical, { areaKm2: 400, lengthKm: 40, widthKm: 10 }, { spacingKm: 5 });
+    const ruptures = floatingRuptures(
+      vertical,
+      { areaKm2: 400, lengthKm: 40, widthKm: 10 },
+      { spacingKm: 5 },
+    );
     expect(ruptures.length).toBe(24);
     const last = ruptures[23];
-    expectClose(last?.alongKm ?? NaN, 57.5, 1e-9, 'last along-strike start, mid-way through the last 5 km interval');
+    expectClose(
+      last?.alongKm ?? NaN,
+      57.5,
+      1e-9,
+      'last along-strike start, mid-way through the last 5 km interval',
+    );
     expectClose(last?.ztorKm ?? NaN, 7.5, 1e-9, 'deepest row tops at 7.5 km');
     expectClose(last?.hypocentre.z ?? NaN, 12.5, 1e-9, 'hypocentre at the rupture centre');
     expectClose(last?.hypocentre.y ?? NaN, 77.5, 1e-6, 'hypocentre mid-length');
@@ -54,16 +91,35 @@ describe('floatingRuptures', () => {
   });
 
   it('follows the trace across a joint: two planes, top edges adding to the rupture length', () => {
-    const bent = faultSurface(faultKm([[0, 0], [0, 50], [50, 50]], { dipDeg: 60, dipDirectionDeg: 135, upperDepthKm: 0, lowerDepthKm: 12 }), FRAME);
-    const ruptures = floatingRuptures(bent, { areaKm2: 40 * bent.widthKm, lengthKm: 40, widthKm: bent.widthKm }, { spacingKm: 10 });
+    const bent = faultSurface(
+      faultKm(
+        [
+          [0, 0],
+          [0, 50],
+          [50, 50],
+        ],
+        { dipDeg: 60, dipDirectionDeg: 135, upperDepthKm: 0, lowerDepthKm: 12 },
+      ),
+      FRAME,
+    );
+    const ruptures = floatingRuptures(
+      bent,
+      { areaKm2: 40 * bent.widthKm, lengthKm: 40, widthKm: bent.widthKm },
+      { spacingKm: 10 },
+    );
     expect(ruptures.length).toBe(6); // 60 km of room at 10 km: starts 5, 15, ..., 55
     const across = ruptures.find((r) => Math.abs(r.alongKm - 35) < 1e-9);
     expect(across?.planes.length).toBe(2);
-    const total = (across?.planes ?? []).reduce((s, p) => s + Math.hypot(p.corners[1].x - p.corners[0].x, p.corners[1].y - p.corners[0].y), 0);
+    const total = (across?.planes ?? []).reduce(
+      (s, p) => s + Math.hypot(p.corners[1].x - p.corners[0].x, p.corners[1].y - p.corners[0].y),
+      0,
+    );
     expectClose(total, 40, 1e-6, 'top edges add to 40 km');
   });
 
   it('refuses a spacing that is not positive', () => {
-    expect(() => floatingRuptures(vertical, { areaKm2: 400, lengthKm: 40, widthKm: 10 }, { spacingKm: 0 })).toThrow(InvalidInput);
+    expect(() =>
+      floatingRuptures(vertical, { areaKm2: 400, lengthKm: 40, widthKm: 10 }, { spacingKm: 0 }),
+    ).toThrow(InvalidInput);
   });
 });

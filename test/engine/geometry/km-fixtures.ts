@@ -1,5 +1,12 @@
 import { createLocalFrame, type LocalFrame } from '../../../api/engine/geometry/projection.ts';
-import type { FaultSource, LonLat, PointSource, Recurrence, Settings, ZoneSource } from '../../../api/engine/model.ts';
+import type {
+  FaultSource,
+  LonLat,
+  PointSource,
+  Recurrence,
+  Settings,
+  ZoneSource,
+} from '../../../api/engine/model.ts';
 
 /**
  * Hand-made sources drawn in local km, so expected distances can be worked by hand. The frame
@@ -8,8 +15,10 @@ import type { FaultSource, LonLat, PointSource, Recurrence, Settings, ZoneSource
  */
 export const FRAME: LocalFrame = createLocalFrame([-150, -47]);
 
-export const toLonLat = (points: readonly (readonly [number, number])[], frame: LocalFrame = FRAME): LonLat[] =>
-  points.map(([x, y]) => frame.toLonLat({ x, y }));
+export const toLonLat = (
+  points: readonly (readonly [number, number])[],
+  frame: LocalFrame = FRAME,
+): LonLat[] => points.map(([x, y]) => frame.toLonLat({ x, y }));
 
 export const FIXED_M7: Recurrence = { type: 'fixed', magnitude: 7, rate: 0.01 };
 
@@ -24,7 +33,11 @@ export interface FaultOptions {
   readonly id?: string;
 }
 
-export function faultKm(traceKm: readonly (readonly [number, number])[], options: FaultOptions, frame: LocalFrame = FRAME): FaultSource {
+export function faultKm(
+  traceKm: readonly (readonly [number, number])[],
+  options: FaultOptions,
+  frame: LocalFrame = FRAME,
+): FaultSource {
   return {
     kind: 'fault',
     id: options.id ?? 'test-fault',
@@ -41,7 +54,12 @@ export function faultKm(traceKm: readonly (readonly [number, number])[], options
   };
 }
 
-export function zoneKm(ringsKm: readonly (readonly (readonly [number, number])[])[], recurrence: Recurrence, depthKm = 10, frame: LocalFrame = FRAME): ZoneSource {
+export function zoneKm(
+  ringsKm: readonly (readonly (readonly [number, number])[])[],
+  recurrence: Recurrence,
+  depthKm = 10,
+  frame: LocalFrame = FRAME,
+): ZoneSource {
   return {
     kind: 'zone',
     id: 'test-zone',
@@ -55,7 +73,13 @@ export function zoneKm(ringsKm: readonly (readonly (readonly [number, number])[]
   };
 }
 
-export function pointKm(x: number, y: number, recurrence: Recurrence, depthKm = 8, frame: LocalFrame = FRAME): PointSource {
+export function pointKm(
+  x: number,
+  y: number,
+  recurrence: Recurrence,
+  depthKm = 8,
+  frame: LocalFrame = FRAME,
+): PointSource {
   return {
     kind: 'point',
     id: 'test-point',

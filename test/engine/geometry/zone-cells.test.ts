@@ -5,7 +5,13 @@ import { expectClose, expectRelative } from '../../helpers/close.ts';
 import { FIXED_M7, FRAME, zoneKm } from './km-fixtures.ts';
 
 /* Areas by hand (plane geometry). Rings go through [lon, lat] and back, ~1e-9 km. */
-const square = (x0: number, y0: number, x1: number, y1: number): [number, number][] => [[x0, y0], [x1, y0], [x1, y1], [x0, y1], [x0, y0]];
+const square = (x0: number, y0: number, x1: number, y1: number): [number, number][] => [
+  [x0, y0],
+  [x1, y0],
+  [x1, y1],
+  [x0, y1],
+  [x0, y0],
+];
 
 describe('zoneCells', () => {
   it('a 100 km square with a 40 km square hole on the grid: 84 whole 10 km cells, 1/84 each', () => {
@@ -15,10 +21,16 @@ describe('zoneCells', () => {
     for (const cell of cells) {
       expectRelative(cell.areaKm2, 100, 1e-6, 'whole 10 km cell');
       expectRelative(cell.share, 1 / 84, 1e-6, 'area share of 8400 km²');
-      const inHole = cell.centre.x > 30 && cell.centre.x < 70 && cell.centre.y > 30 && cell.centre.y < 70;
+      const inHole =
+        cell.centre.x > 30 && cell.centre.x < 70 && cell.centre.y > 30 && cell.centre.y < 70;
       expect(inHole, `cell at (${cell.centre.x}, ${cell.centre.y}) is in the hole`).toBe(false);
     }
-    expectClose(cells.reduce((s, c) => s + c.share, 0), 1, 1e-12, 'shares sum to 1');
+    expectClose(
+      cells.reduce((s, c) => s + c.share, 0),
+      1,
+      1e-12,
+      'shares sum to 1',
+    );
   });
 
   it('anchored to the zone, not the frame: a square from (5, 5) is cut along x, y = 5, 15, ..., holes respected', () => {
@@ -27,32 +39,88 @@ describe('zoneCells', () => {
     const cells = zoneCells(zone, FRAME, 10);
     const total = cells.reduce((s, c) => s + c.areaKm2, 0);
     expectRelative(total, 8844, 1e-6, 'area by hand');
-    expectClose(cells.reduce((s, c) => s + c.share, 0), 1, 1e-12, 'shares sum to 1');
-    for (const cell of cells) expectRelative(cell.share, cell.areaKm2 / total, 1e-12, 'share by area');
+    expectClose(
+      cells.reduce((s, c) => s + c.share, 0),
+      1,
+      1e-12,
+      'shares sum to 1',
+    );
+    for (const cell of cells)
+      expectRelative(cell.share, cell.areaKm2 / total, 1e-12, 'share by area');
     const corner = cells[0];
-    expectRelative(corner?.areaKm2 ?? NaN, 100, 1e-6, 'south-west corner cell: a whole 10 km cell from the first vertex');
+    expectRelative(
+      corner?.areaKm2 ?? NaN,
+      100,
+      1e-6,
+      'south-west corner cell: a whole 10 km cell from the first vertex',
+    );
     expectClose(corner?.centre.x ?? NaN, 10, 1e-6, 'its centre');
-    const ringCell = cells.find((c) => c.centre.x > 25 && c.centre.x < 35 && c.centre.y > 35 && c.centre.y < 45);
-    expectRelative(ringCell?.areaKm2 ?? NaN, 80, 1e-6, 'cell 25..35 x 35..45 cut by the hole at x = 33: 8 x 10 km left');
+    const ringCell = cells.find(
+      (c) => c.centre.x > 25 && c.centre.x < 35 && c.centre.y > 35 && c.centre.y < 45,
+    );
+    expectRelative(
+      ringCell?.areaKm2 ?? NaN,
+      80,
+      1e-6,
+      'cell 25..35 x 35..45 cut by the hole at x = 33: 8 x 10 km left',
+    );
   });
 
-  it('a cell subdivided into 5 x 5 squares: the parts inside, shares adding to the cell\'s', () => {
+  it("a cell subdivided into 5 x 5 squares: the parts inside, shares adding to the cell's", () => {
     // Triangle (0,0), (60,0), (0,45): the 10 km cell 20..30 x 20..30 is cut by the hypotenuse 3x + 4y = 180.
-    const zone = zoneKm([[[0, 0], [60, 0], [0, 45], [0, 0]]], FIXED_M7);
+    const zone = zoneKm(
+      [
+        [
+          [0, 0],
+          [60, 0],
+          [0, 45],
+          [0, 0],
+        ],
+      ],
+      FIXED_M7,
+    );
     const cells = zoneCells(zone, FRAME, 10);
-    const cell = cells.find((c) => c.box[0] > 19 && c.box[0] < 21 && c.box[1] > 19 && c.box[1] < 21)!;
+    const cell = cells.find(
+      (c) => c.box[0] > 19 && c.box[0] < 21 && c.box[1] > 19 && c.box[1] < 21,
+    )!;
     const squares = subdivideZoneCell(zone, FRAME, cell, 5);
-    expectClose(squares.reduce((s, q) => s + q.share, 0), cell.share, 1e-15, 'shares add to the cell\'s');
-    expectRelative(squares.reduce((s, q) => s + q.areaKm2, 0), cell.areaKm2, 1e-9, 'areas add to the cell\'s');
+    expectClose(
+      squares.reduce((s, q) => s + q.share, 0),
+      cell.share,
+      1e-15,
+      "shares add to the cell's",
+    );
+    expectRelative(
+      squares.reduce((s, q) => s + q.areaKm2, 0),
+      cell.areaKm2,
+      1e-9,
+      "areas add to the cell's",
+    );
     // Inside the cell, below 3x + 4y = 180: at x = 20 up to y = 30 (whole), at x = 30 up to y = 22.5; area 100 - ½ x 10 x 7.5 = 62.5 km².
     expectRelative(cell.areaKm2, 62.5, 1e-6, 'trapezoid by hand');
-    for (const q of squares) expect(3 * q.centre.x + 4 * q.centre.y).toBeLessThanOrEqual(180 + 1e-6);
+    for (const q of squares)
+      expect(3 * q.centre.x + 4 * q.centre.y).toBeLessThanOrEqual(180 + 1e-6);
   });
 
   it('a triangle: total area ½ b h, cells south row first, west to east', () => {
-    const zone = zoneKm([[[0, 0], [60, 0], [0, 45], [0, 0]]], FIXED_M7);
+    const zone = zoneKm(
+      [
+        [
+          [0, 0],
+          [60, 0],
+          [0, 45],
+          [0, 0],
+        ],
+      ],
+      FIXED_M7,
+    );
     const cells = zoneCells(zone, FRAME, 7.5);
-    expectRelative(cells.reduce((s, c) => s + c.areaKm2, 0), 0.5 * 60 * 45, 1e-6, '½ b h');
+    expectRelative(
+      cells.reduce((s, c) => s + c.areaKm2, 0),
+      0.5 * 60 * 45,
+      1e-6,
+      '½ b h',
+    );
     for (let i = 1; i < cells.length; i++) {
       const a = cells[i - 1];
       const b = cells[i];
@@ -64,14 +132,41 @@ describe('zoneCells', () => {
   });
 
   it('a concave L-shape, wound clockwise: area 50 x 20 + 20 x 30 = 1600 km² on 15 km cells', () => {
-    const zone = zoneKm([[[0, 0], [0, 50], [20, 50], [20, 20], [50, 20], [50, 0], [0, 0]]], FIXED_M7);
+    const zone = zoneKm(
+      [
+        [
+          [0, 0],
+          [0, 50],
+          [20, 50],
+          [20, 20],
+          [50, 20],
+          [50, 0],
+          [0, 0],
+        ],
+      ],
+      FIXED_M7,
+    );
     const cells = zoneCells(zone, FRAME, 15);
-    expectRelative(cells.reduce((s, c) => s + c.areaKm2, 0), 1600, 1e-6, 'L-shape area by hand');
-    const notch = cells.find((c) => c.centre.x > 15 && c.centre.x < 30 && c.centre.y > 15 && c.centre.y < 30);
-    expectRelative(notch?.areaKm2 ?? NaN, 15 * 15 - 10 * 10, 1e-6, 'cell 15..30 x 15..30 minus the notch 20..30 x 20..30');
+    expectRelative(
+      cells.reduce((s, c) => s + c.areaKm2, 0),
+      1600,
+      1e-6,
+      'L-shape area by hand',
+    );
+    const notch = cells.find(
+      (c) => c.centre.x > 15 && c.centre.x < 30 && c.centre.y > 15 && c.centre.y < 30,
+    );
+    expectRelative(
+      notch?.areaKm2 ?? NaN,
+      15 * 15 - 10 * 10,
+      1e-6,
+      'cell 15..30 x 15..30 minus the notch 20..30 x 20..30',
+    );
   });
 
   it('refuses a cell size that is not positive', () => {
-    expect(() => zoneCells(zoneKm([square(0, 0, 10, 10)], FIXED_M7), FRAME, 0)).toThrow(InvalidInput);
+    expect(() => zoneCells(zoneKm([square(0, 0, 10, 10)], FIXED_M7), FRAME, 0)).toThrow(
+      InvalidInput,
+    );
   });
 });

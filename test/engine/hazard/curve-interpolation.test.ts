@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { annualRateAtLevel, levelAtAnnualRate, levelAtReturnPeriod } from '../../../api/engine/hazard/curve-interpolation.ts';
+import {
+  annualRateAtLevel,
+  levelAtAnnualRate,
+  levelAtReturnPeriod,
+} from '../../../api/engine/hazard/curve-interpolation.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 
 // A power-law curve, λ = k x^−b, is a straight line on log–log axes, so log–log interpolation
@@ -19,13 +23,25 @@ describe('levelAtAnnualRate (log–log interpolation)', () => {
   });
 
   it('returns a level exactly when the rate is on a level', () => {
-    expect(levelAtAnnualRate(levels, rates, rates[2] as number)).toEqual({ level: 0.1, status: 'ok' });
-    expect(levelAtAnnualRate(levels, rates, rates[0] as number)).toEqual({ level: 0.01, status: 'ok' });
+    expect(levelAtAnnualRate(levels, rates, rates[2] as number)).toEqual({
+      level: 0.1,
+      status: 'ok',
+    });
+    expect(levelAtAnnualRate(levels, rates, rates[0] as number)).toEqual({
+      level: 0.01,
+      status: 'ok',
+    });
   });
 
   it('says which side of the curve a rate falls off', () => {
-    expect(levelAtAnnualRate(levels, rates, (rates[0] as number) * 1.01)).toEqual({ level: null, status: 'below-lowest-level' });
-    expect(levelAtAnnualRate(levels, rates, (rates[4] as number) * 0.99)).toEqual({ level: null, status: 'above-highest-level' });
+    expect(levelAtAnnualRate(levels, rates, (rates[0] as number) * 1.01)).toEqual({
+      level: null,
+      status: 'below-lowest-level',
+    });
+    expect(levelAtAnnualRate(levels, rates, (rates[4] as number) * 0.99)).toEqual({
+      level: null,
+      status: 'above-highest-level',
+    });
   });
 
   it('reads the 475-year level of a curve as the level at rate 1/475', () => {
@@ -51,12 +67,23 @@ describe('annualRateAtLevel', () => {
 
   it('gives the curve value on a level and bounds off the curve', () => {
     expect(annualRateAtLevel(levels, rates, 0.3)).toEqual({ annualRate: rates[3], status: 'ok' });
-    expect(annualRateAtLevel(levels, rates, 0.001)).toEqual({ annualRate: rates[0], status: 'below-lowest-level' });
-    expect(annualRateAtLevel(levels, rates, 2)).toEqual({ annualRate: rates[4], status: 'above-highest-level' });
+    expect(annualRateAtLevel(levels, rates, 0.001)).toEqual({
+      annualRate: rates[0],
+      status: 'below-lowest-level',
+    });
+    expect(annualRateAtLevel(levels, rates, 2)).toEqual({
+      annualRate: rates[4],
+      status: 'above-highest-level',
+    });
   });
 
   it('is 0 past the point where the curve reaches 0', () => {
     expect(annualRateAtLevel([0.1, 0.2, 0.4], [1e-3, 0, 0], 0.3).annualRate).toBe(0);
-    expectClose(annualRateAtLevel([0.1, 0.4], [1e-3, 0], 0.2).annualRate, 5e-4, 1e-18, 'linear in ln level on the last segment');
+    expectClose(
+      annualRateAtLevel([0.1, 0.4], [1e-3, 0], 0.2).annualRate,
+      5e-4,
+      1e-18,
+      'linear in ln level on the last segment',
+    );
   });
 });

@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { exceedanceFromTable, exceedanceTable, MAX_TABULATED_SIGMA, tabulatedExceedance } from '../../../api/engine/hazard/exceedance-table.ts';
+import {
+  exceedanceFromTable,
+  exceedanceTable,
+  MAX_TABULATED_SIGMA,
+  tabulatedExceedance,
+} from '../../../api/engine/hazard/exceedance-table.ts';
 import { exceedanceProbability } from '../../../api/engine/hazard/truncated-exceedance.ts';
 
 /*
@@ -34,7 +39,11 @@ describe('exceedanceTable', () => {
     expect(exceedanceFromTable(table, -7)).toBe(1);
     expect(exceedanceFromTable(table, 3)).toBe(0);
     expect(exceedanceFromTable(table, 12)).toBe(0);
-    if (table.mode === 'table') expect(tabulatedExceedance(table.cubic, table.scale, table.intervals, 3, 0)).toBeCloseTo(0.5, 12);
+    if (table.mode === 'table')
+      expect(tabulatedExceedance(table.cubic, table.scale, table.intervals, 3, 0)).toBeCloseTo(
+        0.5,
+        12,
+      );
   });
 
   it('keeps the exact function for the median-only step and for no or very wide truncation', () => {
@@ -43,6 +52,8 @@ describe('exceedanceTable', () => {
     expect(exceedanceTable(MAX_TABULATED_SIGMA + 1).mode).toBe('exact');
     expect(exceedanceFromTable(exceedanceTable(0), -0.1)).toBe(1);
     expect(exceedanceFromTable(exceedanceTable(0), 0)).toBe(0);
-    expect(exceedanceFromTable(exceedanceTable(Infinity), 1.5)).toBe(exceedanceProbability(1.5, Infinity));
+    expect(exceedanceFromTable(exceedanceTable(Infinity), 1.5)).toBe(
+      exceedanceProbability(1.5, Infinity),
+    );
   });
 });

@@ -21,7 +21,11 @@ describe('the screening against the plain reference sum', () => {
 
   it('at truncation 0 (median only), 2σ and untruncated, the three ways the exceedance is summed', () => {
     const base = allKindsStudy({ measures: ['PGA'] });
-    const small: Study = { ...base, communities: base.communities.slice(0, 2), sources: base.sources.filter((s) => s.id !== 'background') };
+    const small: Study = {
+      ...base,
+      communities: base.communities.slice(0, 2),
+      sources: base.sources.filter((s) => s.id !== 'background'),
+    };
     for (const truncationSigma of [0, 2, Infinity]) {
       const study: Study = { ...small, settings: { ...small.settings, truncationSigma } };
       expectScreeningMatches(screenStudy(study), referenceScreening(study));
@@ -31,9 +35,21 @@ describe('the screening against the plain reference sum', () => {
   it('a model without the precomputation hook is evaluated pair by pair, with the reference numbers', () => {
     const { prepare: _, ...rest } = cornell79;
     const plain: GroundMotionModel = { ...rest, name: 'Plain79' };
-    const models = createModelCatalog([...modelCatalog.names.map((n) => modelCatalog.get(n)), plain], modelCatalog.defaultBranches);
+    const models = createModelCatalog(
+      [...modelCatalog.names.map((n) => modelCatalog.get(n)), plain],
+      modelCatalog.defaultBranches,
+    );
     const base = allKindsStudy({ measures: ['PGA'] });
-    const study: Study = { ...base, groundMotion: { ...base.groundMotion, crustal: [{ model: 'Plain79', weight: 0.5 }, { model: 'Cornell79', weight: 0.5 }] } };
+    const study: Study = {
+      ...base,
+      groundMotion: {
+        ...base.groundMotion,
+        crustal: [
+          { model: 'Plain79', weight: 0.5 },
+          { model: 'Cornell79', weight: 0.5 },
+        ],
+      },
+    };
     expectScreeningMatches(screenStudy(study, { models }), referenceScreening(study, { models }));
   });
 
@@ -47,13 +63,38 @@ describe('the screening against the plain reference sum', () => {
       rate: fc.double({ min: 1e-4, max: 0.1, noNaN: true }),
     });
     fc.assert(
-      fc.property(fc.array(sourceArb, { minLength: 1, maxLength: 4 }), fc.constantFrom(180, 300, 450, 760, 1200), (specs, vs30) => {
-        const base = allKindsStudy({ measures: ['PGA', 'SA(1.0)'] });
-        const sources = specs.map((s, i) => ({ ...pointKm(s.x, s.y, { type: 'gutenberg-richter', bValue: 1, mMin: s.mMin, mMax: s.mMin + s.span, rate: s.rate }, s.depthKm), id: `p${i}`, name: `P${i}` }));
-        const [lon, lat] = FRAME.toLonLat({ x: 0, y: 0 });
-        const study: Study = { ...base, sources, communities: [{ id: 'site', name: 'Site', lon, lat, vs30, vs30Basis: 'measured', coastal: false }] };
-        expectScreeningMatches(screenStudy(study), referenceScreening(study));
-      }),
+      fc.property(
+        fc.array(sourceArb, { minLength: 1, maxLength: 4 }),
+        fc.constantFrom(180, 300, 450, 760, 1200),
+        (specs, vs30) => {
+          const base = allKindsStudy({ measures: ['PGA', 'SA(1.0)'] });
+          const sources = specs.map((s, i) => ({
+            ...pointKm(
+              s.x,
+              s.y,
+              {
+                type: 'gutenberg-richter',
+                bValue: 1,
+                mMin: s.mMin,
+                mMax: s.mMin + s.span,
+                rate: s.rate,
+              },
+              s.depthKm,
+            ),
+            id: `p${i}`,
+            name: `P${i}`,
+          }));
+          const [lon, lat] = FRAME.toLonLat({ x: 0, y: 0 });
+          const study: Study = {
+            ...base,
+            sources,
+            communities: [
+              { id: 'site', name: 'Site', lon, lat, vs30, vs30Basis: 'measured', coastal: false },
+            ],
+          };
+          expectScreeningMatches(screenStudy(study), referenceScreening(study));
+        },
+      ),
       { numRuns: 25, seed: 11 },
     );
   });

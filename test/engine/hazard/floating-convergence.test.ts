@@ -16,15 +16,21 @@ import { FRAME, faultKm } from '../geometry/km-fixtures.ts';
  */
 function faultStudy(ruptureSpacingKm: number): Study {
   const fault = {
-    ...faultKm([[0, 0], [0, 60]], {
-      dipDeg: 35,
-      dipDirectionDeg: 90,
-      upperDepthKm: 1,
-      lowerDepthKm: 16,
-      mechanism: 'reverse',
-      recurrence: { type: 'gutenberg-richter', bValue: 1, mMin: 5, mMax: 7.2, rate: 0.02 },
-      id: 'reverse-fault',
-    }),
+    ...faultKm(
+      [
+        [0, 0],
+        [0, 60],
+      ],
+      {
+        dipDeg: 35,
+        dipDirectionDeg: 90,
+        upperDepthKm: 1,
+        lowerDepthKm: 16,
+        mechanism: 'reverse',
+        recurrence: { type: 'gutenberg-richter', bValue: 1, mMin: 5, mMax: 7.2, rate: 0.02 },
+        id: 'reverse-fault',
+      },
+    ),
     rakeDeg: 90,
   };
   const site = (id: string, x: number, y: number) => {
@@ -35,7 +41,14 @@ function faultStudy(ruptureSpacingKm: number): Study {
     name: 'Floating convergence',
     communities: [site('hanging-wall', 12, 30), site('near-end', 6, 58), site('foot-wall', -10, 5)],
     sources: [fault],
-    groundMotion: { crustal: [{ model: 'BSSA14', weight: 0.5 }, { model: 'CB14', weight: 0.5 }], interface: [{ model: 'AGA16', weight: 1 }], intraslab: [{ model: 'AGA16', weight: 1 }] },
+    groundMotion: {
+      crustal: [
+        { model: 'BSSA14', weight: 0.5 },
+        { model: 'CB14', weight: 0.5 },
+      ],
+      interface: [{ model: 'AGA16', weight: 1 }],
+      intraslab: [{ model: 'AGA16', weight: 1 }],
+    },
     settings: {
       measures: ['PGA'],
       levels: {},
@@ -52,7 +65,11 @@ function faultStudy(ruptureSpacingKm: number): Study {
 
 describe('floating ruptures converge to a finely discretised case', () => {
   const fine = screenStudy(faultStudy(0.5));
-  for (const [spacingKm, tolerance] of [[2.5, 0.002], [5, 0.006], [10, 0.025]] as const) {
+  for (const [spacingKm, tolerance] of [
+    [2.5, 0.002],
+    [5, 0.006],
+    [10, 0.025],
+  ] as const) {
     it(`at ${spacingKm} km the 475- and 2475-year PGA are within ${tolerance * 100}% of ruptures every 0.5 km`, () => {
       const coarse = screenStudy(faultStudy(spacingKm));
       coarse.communities.forEach((c, i) => {
@@ -60,7 +77,12 @@ describe('floating ruptures converge to a finely discretised case', () => {
           const expected = fine.communities[i]?.atReturnPeriod[years]?.PGA;
           const actual = c.atReturnPeriod[years]?.PGA;
           expect(expected).toBeGreaterThan(0);
-          expectRelative(actual ?? NaN, expected ?? NaN, tolerance, `${c.communityId} ${years}-year PGA against the 0.5 km case`);
+          expectRelative(
+            actual ?? NaN,
+            expected ?? NaN,
+            tolerance,
+            `${c.communityId} ${years}-year PGA against the 0.5 km case`,
+          );
         }
       });
     });

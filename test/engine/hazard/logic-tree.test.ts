@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { branchCombinationCount, branchCombinationCurves, meanHazard } from '../../../api/engine/hazard/logic-tree.ts';
+import {
+  branchCombinationCount,
+  branchCombinationCurves,
+  meanHazard,
+} from '../../../api/engine/hazard/logic-tree.ts';
 import type { SettingBranchCurve } from '../../../api/engine/hazard/logic-tree.ts';
 import { expectClose } from '../../helpers/close.ts';
 
@@ -19,7 +23,10 @@ describe('logic tree', () => {
 
   it('one curve per combination, labelled in setting order, weight the product, rates the sum', () => {
     const combos = branchCombinationCurves(curves, 2)!;
-    expect(combos.map((c) => c.label)).toEqual(['crustal=C1, interface=I1', 'crustal=C2, interface=I1']);
+    expect(combos.map((c) => c.label)).toEqual([
+      'crustal=C1, interface=I1',
+      'crustal=C2, interface=I1',
+    ]);
     expect(combos.map((c) => c.weight)).toEqual([0.7, 0.3]);
     expectClose(combos[0]!.annualRate[0]!, 0.12, 1e-15, '0.02 + 0.1');
     expectClose(combos[1]!.annualRate[1]!, 0.014, 1e-16, '0.004 + 0.01');
@@ -29,7 +36,12 @@ describe('logic tree', () => {
     const combos = branchCombinationCurves(curves, 2)!;
     const mean = meanHazard(curves, 2);
     for (let j = 0; j < 2; j++) {
-      expectClose(combos.reduce((s, c) => s + c.weight * c.annualRate[j]!, 0), mean[j]!, 1e-15, 'Σ weight × combination');
+      expectClose(
+        combos.reduce((s, c) => s + c.weight * c.annualRate[j]!, 0),
+        mean[j]!,
+        1e-15,
+        'Σ weight × combination',
+      );
     }
   });
 

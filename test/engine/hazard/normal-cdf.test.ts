@@ -32,7 +32,12 @@ describe('normal distribution from erfc (Cody 1969)', () => {
   ];
   for (const [x, q] of tail) {
     it(`Q(${x}) = ${q} to 10 figures (A&S 1964 Table 26.1, from memory)`, () => {
-      expectRelative(normalSurvival(x), q, TABLE_ROUNDING, 'A&S Table 26.1 tail, 10 figures (from memory)');
+      expectRelative(
+        normalSurvival(x),
+        q,
+        TABLE_ROUNDING,
+        'A&S Table 26.1 tail, 10 figures (from memory)',
+      );
     });
   }
 
@@ -68,7 +73,7 @@ describe('normal distribution from erfc (Cody 1969)', () => {
     expect(normalCdf(0)).toBe(0.5);
   });
 
-  it('is continuous where Cody\'s ranges join (|x| = 0.46875 and 4), to a few ulps', () => {
+  it("is continuous where Cody's ranges join (|x| = 0.46875 and 4), to a few ulps", () => {
     for (const join of [0.46875, 4, -0.46875, -4]) {
       const below = erfc(join * (1 - 1e-15));
       const above = erfc(join * (1 + 1e-15));
@@ -89,9 +94,13 @@ describe('normal distribution from erfc (Cody 1969)', () => {
 
   it('is non-decreasing, up to one rounding at the range joins', () => {
     fc.assert(
-      fc.property(fc.double({ min: -10, max: 10, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), (x, step) => {
-        expect(normalCdf(x + step)).toBeGreaterThanOrEqual(normalCdf(x) - 2.3e-16);
-      }),
+      fc.property(
+        fc.double({ min: -10, max: 10, noNaN: true }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        (x, step) => {
+          expect(normalCdf(x + step)).toBeGreaterThanOrEqual(normalCdf(x) - 2.3e-16);
+        },
+      ),
     );
   });
 

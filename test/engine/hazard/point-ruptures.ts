@@ -17,7 +17,10 @@ export interface PointRuptureSpec {
   readonly setting?: TectonicSetting;
 }
 
-export function pointRupture(spec: PointRuptureSpec): { rupture: Rupture; distances: DistanceContext } {
+export function pointRupture(spec: PointRuptureSpec): {
+  rupture: Rupture;
+  distances: DistanceContext;
+} {
   const depthKm = spec.depthKm ?? 0;
   const sourceIndex = spec.sourceIndex ?? 0;
   const rhypoKm = Math.hypot(spec.repiKm, depthKm);
@@ -38,11 +41,21 @@ export function pointRupture(spec: PointRuptureSpec): { rupture: Rupture; distan
       },
       surface: { kind: 'point', hypocentre: { x: spec.repiKm, y: 0, z: depthKm } },
     },
-    distances: { rjbKm: spec.repiKm, rrupKm: rhypoKm, rxKm: 0, ry0Km: 0, rhypoKm, repiKm: spec.repiKm },
+    distances: {
+      rjbKm: spec.repiKm,
+      rrupKm: rhypoKm,
+      rxKm: 0,
+      ry0Km: 0,
+      rhypoKm,
+      repiKm: spec.repiKm,
+    },
   };
 }
 
-export function pointRuptures(specs: readonly PointRuptureSpec[]): { ruptures: Rupture[]; distances: DistanceContext[] } {
+export function pointRuptures(specs: readonly PointRuptureSpec[]): {
+  ruptures: Rupture[];
+  distances: DistanceContext[];
+} {
   const built = specs.map(pointRupture);
   return { ruptures: built.map((b) => b.rupture), distances: built.map((b) => b.distances) };
 }

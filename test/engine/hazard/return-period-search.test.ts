@@ -16,11 +16,21 @@ const curveArb = fc
 describe('levelAtReturnPeriodBySearch', () => {
   it('equals levelAtReturnPeriod on the whole curve, whatever the hint (fast-check)', () => {
     fc.assert(
-      fc.property(curveArb, fc.constantFrom(2, 10, 100, 475, 2475, 1e6), fc.option(fc.integer({ min: -3, max: 30 })), ({ levels, annualRate }, years, hint) => {
-        const expected = levelAtReturnPeriod(levels, annualRate, years);
-        const found = levelAtReturnPeriodBySearch(levels, (j) => annualRate[j]!, years, hint ?? undefined);
-        expect({ level: found.level, status: found.status }).toEqual(expected);
-      }),
+      fc.property(
+        curveArb,
+        fc.constantFrom(2, 10, 100, 475, 2475, 1e6),
+        fc.option(fc.integer({ min: -3, max: 30 })),
+        ({ levels, annualRate }, years, hint) => {
+          const expected = levelAtReturnPeriod(levels, annualRate, years);
+          const found = levelAtReturnPeriodBySearch(
+            levels,
+            (j) => annualRate[j]!,
+            years,
+            hint ?? undefined,
+          );
+          expect({ level: found.level, status: found.status }).toEqual(expected);
+        },
+      ),
       { numRuns: 2000, seed: 5 },
     );
   });

@@ -19,11 +19,62 @@ import { FRAME, SETTINGS, faultKm, pointKm, zoneKm } from '../geometry/km-fixtur
  * rounding (√ for Math.hypot, a rectangle's own axes for the quadrilateral tests).
  */
 const TOLERANCE_KM = 1e-9;
-const M6: { type: 'fixed'; magnitude: number; rate: number } = { type: 'fixed', magnitude: 6.5, rate: 0.01 };
+const M6: { type: 'fixed'; magnitude: number; rate: number } = {
+  type: 'fixed',
+  magnitude: 6.5,
+  rate: 0.01,
+};
 const ruptures: Rupture[] = [
-  ...discretiseSource(faultKm([[0, 0], [25, 40], [25, 90]], { dipDeg: 35, dipDirectionDeg: 110, upperDepthKm: 1, lowerDepthKm: 18, mechanism: 'reverse', recurrence: M6 }), 0, FRAME, SETTINGS),
-  ...discretiseSource(faultKm([[-40, -20], [-40, 60]], { dipDeg: 90, dipDirectionDeg: 90, upperDepthKm: 0, lowerDepthKm: 14, recurrence: M6 }), 1, FRAME, SETTINGS),
-  ...discretiseSource(zoneKm([[[50, 50], [90, 50], [90, 90], [50, 90], [50, 50]]], M6, 9), 2, FRAME, SETTINGS),
+  ...discretiseSource(
+    faultKm(
+      [
+        [0, 0],
+        [25, 40],
+        [25, 90],
+      ],
+      {
+        dipDeg: 35,
+        dipDirectionDeg: 110,
+        upperDepthKm: 1,
+        lowerDepthKm: 18,
+        mechanism: 'reverse',
+        recurrence: M6,
+      },
+    ),
+    0,
+    FRAME,
+    SETTINGS,
+  ),
+  ...discretiseSource(
+    faultKm(
+      [
+        [-40, -20],
+        [-40, 60],
+      ],
+      { dipDeg: 90, dipDirectionDeg: 90, upperDepthKm: 0, lowerDepthKm: 14, recurrence: M6 },
+    ),
+    1,
+    FRAME,
+    SETTINGS,
+  ),
+  ...discretiseSource(
+    zoneKm(
+      [
+        [
+          [50, 50],
+          [90, 50],
+          [90, 90],
+          [50, 90],
+          [50, 50],
+        ],
+      ],
+      M6,
+      9,
+    ),
+    2,
+    FRAME,
+    SETTINGS,
+  ),
   ...discretiseSource(pointKm(-10, 70, M6, 12), 3, FRAME, SETTINGS),
 ];
 // A skewed quadrilateral and a trapezoid (not rectangles): corners in RupturePlane order.
@@ -33,29 +84,66 @@ const skewed: Rupture = {
     kind: 'planes',
     hypocentre: { x: 5, y: 5, z: 8 },
     planes: [
-      { corners: [{ x: 0, y: 0, z: 2 }, { x: 10, y: 3, z: 2 }, { x: 13, y: 9, z: 12 }, { x: 2, y: 7, z: 12 }] },
-      { corners: [{ x: 10, y: 3, z: 2 }, { x: 20, y: 2, z: 2 }, { x: 19, y: 10, z: 12 }, { x: 13, y: 9, z: 12 }] },
+      {
+        corners: [
+          { x: 0, y: 0, z: 2 },
+          { x: 10, y: 3, z: 2 },
+          { x: 13, y: 9, z: 12 },
+          { x: 2, y: 7, z: 12 },
+        ],
+      },
+      {
+        corners: [
+          { x: 10, y: 3, z: 2 },
+          { x: 20, y: 2, z: 2 },
+          { x: 19, y: 10, z: 12 },
+          { x: 13, y: 9, z: 12 },
+        ],
+      },
     ],
   },
 };
 const all = [...ruptures, skewed];
 const table = ruptureTable(all);
 const geometry = ruptureGeometry(table);
-const everyDistance = new Set<DistanceName>(['rjbKm', 'rrupKm', 'rxKm', 'ry0Km', 'rhypoKm', 'repiKm']);
+const everyDistance = new Set<DistanceName>([
+  'rjbKm',
+  'rrupKm',
+  'rxKm',
+  'ry0Km',
+  'rhypoKm',
+  'repiKm',
+]);
 const indices = Int32Array.from(all, (_, i) => i);
 // Site coordinates, km; denormal ones are left out: there both paths' GC2 divides ∞ by ∞ (a limit case of geometry/gc2.ts).
-const coordinate = (min: number, max: number) => fc.double({ min, max, noNaN: true }).filter((v) => v === 0 || Math.abs(v) > 1e-6);
+const coordinate = (min: number, max: number) =>
+  fc.double({ min, max, noNaN: true }).filter((v) => v === 0 || Math.abs(v) > 1e-6);
 
 describe('siteDistances (the fast path) against ruptureDistances (the reference)', () => {
   it('gives every distance of every rupture within 1e-9 km, at generated sites near and far', () => {
     const buffer = createPairBuffer(all.length);
     fc.assert(
       fc.property(coordinate(-150, 200), coordinate(-150, 250), (x, y) => {
-        siteDistances({ geometry, ruptures: indices, site: { x, y }, maxDistanceKm: Infinity, distances: everyDistance }, buffer);
+        siteDistances(
+          {
+            geometry,
+            ruptures: indices,
+            site: { x, y },
+            maxDistanceKm: Infinity,
+            distances: everyDistance,
+          },
+          buffer,
+        );
         expect(buffer.count).toBe(all.length);
         for (let k = 0; k < buffer.count; k++) {
           const expected = ruptureDistances(all[buffer.rupture[k]!]!.surface, { x, y });
-          for (const name of everyDistance) expectClose(buffer[name][k]!, expected[name], TOLERANCE_KM, `${name} of rupture ${k} at (${x}, ${y}) km, geometry/distances.ts`);
+          for (const name of everyDistance)
+            expectClose(
+              buffer[name][k]!,
+              expected[name],
+              TOLERANCE_KM,
+              `${name} of rupture ${k} at (${x}, ${y}) km, geometry/distances.ts`,
+            );
         }
       }),
       { numRuns: 200, seed: 7 },
@@ -64,21 +152,44 @@ describe('siteDistances (the fast path) against ruptureDistances (the reference)
 
   it('keeps exactly the ruptures with Rjb within the cut-off, in order, whatever the bounding circles drop early', () => {
     const buffer = createPairBuffer(all.length);
-    for (const site of [{ x: 0, y: 0 }, { x: 140, y: -60 }, { x: -120, y: 200 }]) {
+    for (const site of [
+      { x: 0, y: 0 },
+      { x: 140, y: -60 },
+      { x: -120, y: 200 },
+    ]) {
       for (const cutoffKm of [0, 20, 60, 150]) {
-        siteDistances({ geometry, ruptures: indices, site, maxDistanceKm: cutoffKm, distances: new Set() }, buffer);
-        const expected = all.flatMap((r, i) => (ruptureDistances(r.surface, site).rjbKm <= cutoffKm ? [i] : []));
+        siteDistances(
+          { geometry, ruptures: indices, site, maxDistanceKm: cutoffKm, distances: new Set() },
+          buffer,
+        );
+        const expected = all.flatMap((r, i) =>
+          ruptureDistances(r.surface, site).rjbKm <= cutoffKm ? [i] : [],
+        );
         expect(Array.from(buffer.rupture.subarray(0, buffer.count))).toEqual(expected);
       }
     }
   });
 
-  it('pairs a subset by its own indices (one setting\'s ruptures)', () => {
+  it("pairs a subset by its own indices (one setting's ruptures)", () => {
     const crustal = settingRuptures(table, 'crustal');
     const subset = crustal.subarray(0, 5);
     const buffer = createPairBuffer(subset.length);
-    siteDistances({ geometry, ruptures: subset, site: { x: 3, y: 4 }, maxDistanceKm: Infinity, distances: everyDistance }, buffer);
+    siteDistances(
+      {
+        geometry,
+        ruptures: subset,
+        site: { x: 3, y: 4 },
+        maxDistanceKm: Infinity,
+        distances: everyDistance,
+      },
+      buffer,
+    );
     expect(Array.from(buffer.rupture.subarray(0, buffer.count))).toEqual([0, 1, 2, 3, 4]);
-    expectClose(buffer.rrupKm[4]!, ruptureDistances(all[subset[4]!]!.surface, { x: 3, y: 4 }).rrupKm, TOLERANCE_KM, 'Rrup of the fifth');
+    expectClose(
+      buffer.rrupKm[4]!,
+      ruptureDistances(all[subset[4]!]!.surface, { x: 3, y: 4 }).rrupKm,
+      TOLERANCE_KM,
+      'Rrup of the fifth',
+    );
   });
 });

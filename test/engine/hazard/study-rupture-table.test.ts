@@ -11,7 +11,10 @@ import { allKindsStudy } from '../fixtures/all-kinds-study.ts';
 // number for number (rupture-table.test.ts checks that layout against the Rupture objects).
 describe('studyRuptureTable', () => {
   it('is ruptureTable(discretiseStudy(study).ruptures), every column equal, for every kind of source', () => {
-    for (const study of [allKindsStudy(), allKindsStudy({ magnitudeStep: 0.25, ruptureSpacingKm: 7, zoneCellKm: 15 })]) {
+    for (const study of [
+      allKindsStudy(),
+      allKindsStudy({ magnitudeStep: 0.25, ruptureSpacingKm: 7, zoneCellKm: 15 }),
+    ]) {
       const direct = studyRuptureTable(study);
       const { ruptures } = discretiseStudy(study);
       expect(direct.table).toEqual(ruptureTable(ruptures));
@@ -22,7 +25,12 @@ describe('studyRuptureTable', () => {
 
   it('names a bad field by its path in the study, as discretiseStudy does', () => {
     const base = allKindsStudy();
-    const bad: Study = { ...base, sources: base.sources.map((s, i) => (i === 1 && s.kind === 'fault' ? { ...s, dipDeg: 0 } : s)) };
+    const bad: Study = {
+      ...base,
+      sources: base.sources.map((s, i) =>
+        i === 1 && s.kind === 'fault' ? { ...s, dipDeg: 0 } : s,
+      ),
+    };
     expect(() => studyRuptureTable(bad)).toThrow(InvalidInput);
     try {
       studyRuptureTable(bad);

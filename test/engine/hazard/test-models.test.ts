@@ -16,13 +16,27 @@ import { scaledCornell } from './test-models.ts';
  * 0.6 λc Q(ε₁) + 0.4 λc Q(ε₂) + λi Q(εi), untruncated, from the printed equation.
  */
 const { ruptures } = pointRuptures([
-  { magnitude: 6.5, annualRate: 0.01, repiKm: 10, setting: 'crustal', sourceIndex: 0, sourceId: 'ridge-fault' },
-  { magnitude: 8, annualRate: 0.001, repiKm: 250, setting: 'interface', sourceIndex: 1, sourceId: 'trench' },
+  {
+    magnitude: 6.5,
+    annualRate: 0.01,
+    repiKm: 10,
+    setting: 'crustal',
+    sourceIndex: 0,
+    sourceId: 'ridge-fault',
+  },
+  {
+    magnitude: 8,
+    annualRate: 0.001,
+    repiKm: 250,
+    setting: 'interface',
+    sourceIndex: 1,
+    sourceId: 'trench',
+  },
 ]);
 const measures: HazardMeasure[] = [{ key: 'PGA', measure: { kind: 'PGA' }, levels: [0.05, 0.3] }];
 
 describe('scaledCornell (test scaffolding) on the fast path', () => {
-  it('its hook gives its predict()\'s numbers pair by pair', () => {
+  it("its hook gives its predict()'s numbers pair by pair", () => {
     checkPreparedModel(scaledCornell('Scaled', 1.5), [{ kind: 'PGA' }], ['crustal'], 50);
   });
 
@@ -42,9 +56,29 @@ describe('scaledCornell (test scaffolding) on the fast path', () => {
     });
     const curve = fastSiteHazard(fast, { point: { x: 0, y: 0 }, site: ROCK_SITE }).curves.PGA!;
     // 1e-9: the fast path's √ for Math.hypot and its order of sums, nothing else (the exceedance is exact when untruncated).
-    expectRelative(curve.annualRate[0]!, 0.010688258634279083, 1e-9, 'hand computation at 0.05 g (site-hazard.test.ts)');
-    expectRelative(curve.annualRate[1]!, 0.007388514730343052, 1e-9, 'hand computation at 0.3 g (site-hazard.test.ts)');
-    expectRelative(curve.branches![0]!.annualRate[1]!, 0.0065400181466918296, 1e-9, 'hand computation, crustal=Cornell79 branch');
-    expectRelative(curve.branches![1]!.annualRate[1]!, 0.008661259605819887, 1e-9, 'hand computation, crustal=Scaled branch');
+    expectRelative(
+      curve.annualRate[0]!,
+      0.010688258634279083,
+      1e-9,
+      'hand computation at 0.05 g (site-hazard.test.ts)',
+    );
+    expectRelative(
+      curve.annualRate[1]!,
+      0.007388514730343052,
+      1e-9,
+      'hand computation at 0.3 g (site-hazard.test.ts)',
+    );
+    expectRelative(
+      curve.branches![0]!.annualRate[1]!,
+      0.0065400181466918296,
+      1e-9,
+      'hand computation, crustal=Cornell79 branch',
+    );
+    expectRelative(
+      curve.branches![1]!.annualRate[1]!,
+      0.008661259605819887,
+      1e-9,
+      'hand computation, crustal=Scaled branch',
+    );
   });
 });

@@ -1,6 +1,12 @@
 import { cornell79 } from '../../../api/engine/motion/cornell79.ts';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel, PreparedMotion, RuptureContext } from '../../../api/engine/motion/types.ts';
+import type {
+  GmmInput,
+  GmmPrediction,
+  GroundMotionModel,
+  PreparedMotion,
+  RuptureContext,
+} from '../../../api/engine/motion/types.ts';
 import type { TectonicSetting } from '../../../api/engine/model.ts';
 
 /**
@@ -10,7 +16,11 @@ import type { TectonicSetting } from '../../../api/engine/model.ts';
  * scaled: predict() and the fast path's hook (GroundMotionModel.prepare), which spreading
  * cornell79 would otherwise hand on unscaled.
  */
-export function scaledCornell(name: string, factor: number, setting: TectonicSetting = 'crustal'): GroundMotionModel {
+export function scaledCornell(
+  name: string,
+  factor: number,
+  setting: TectonicSetting = 'crustal',
+): GroundMotionModel {
   const lnFactor = Math.log(factor);
   return {
     ...cornell79,
@@ -26,7 +36,8 @@ export function scaledCornell(name: string, factor: number, setting: TectonicSet
         distances: inner.distances,
         predictPairs(site, pairs, out) {
           inner.predictPairs(site, pairs, out);
-          for (let k = 0; k < pairs.count; k++) out.lnMedian[k] = (out.lnMedian[k] as number) + lnFactor;
+          for (let k = 0; k < pairs.count; k++)
+            out.lnMedian[k] = (out.lnMedian[k] as number) + lnFactor;
         },
       };
     },

@@ -1,6 +1,9 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { exceedanceProbability, standardisedLevel } from '../../../api/engine/hazard/truncated-exceedance.ts';
+import {
+  exceedanceProbability,
+  standardisedLevel,
+} from '../../../api/engine/hazard/truncated-exceedance.ts';
 import { expectClose } from '../../helpers/close.ts';
 
 // Q(1) and Q(3) from Abramowitz & Stegun (1964), Table 26.1 (from memory): 0.1586552539, 0.0013498980.
@@ -15,12 +18,18 @@ describe('exceedanceProbability (truncated lognormal)', () => {
 
   it('truncated at 3σ: P = (Q(ε) − Q(3)) / (1 − 2Q(3)); at ε = 1 that is 0.157731198 (hand computation from A&S values)', () => {
     // (0.1586552539 − 0.0013498980) / (1 − 2 × 0.0013498980) = 0.1573053559 / 0.9973002040 = 0.1577311980
-    expectClose(exceedanceProbability(1, 3), 0.157731198, 1e-9, 'renormalised two-sided truncation, hand computation');
+    expectClose(
+      exceedanceProbability(1, 3),
+      0.157731198,
+      1e-9,
+      'renormalised two-sided truncation, hand computation',
+    );
     expectClose(exceedanceProbability(-1, 3), 1 - 0.157731198, 1e-9, 'same, by symmetry');
   });
 
   it('is exactly 1/2 at the median for any symmetric truncation (symmetry)', () => {
-    for (const n of [0.5, 1, 2, 3, 6, Infinity]) expectClose(exceedanceProbability(0, n), 0.5, 1e-15, `truncation ${n}: symmetry`);
+    for (const n of [0.5, 1, 2, 3, 6, Infinity])
+      expectClose(exceedanceProbability(0, n), 0.5, 1e-15, `truncation ${n}: symmetry`);
   });
 
   it('is 0 at and beyond +n and 1 at and beyond −n (definition of the truncation)', () => {
@@ -59,7 +68,12 @@ describe('exceedanceProbability (truncated lognormal)', () => {
 
 describe('standardisedLevel', () => {
   it('is (ln level − ln median) / σ', () => {
-    expectClose(standardisedLevel(Math.log(0.2), Math.log(0.1), 0.5), Math.log(2) / 0.5, 1e-15, 'definition of ε');
+    expectClose(
+      standardisedLevel(Math.log(0.2), Math.log(0.1), 0.5),
+      Math.log(2) / 0.5,
+      1e-15,
+      'definition of ε',
+    );
   });
   it('treats σ = 0 as the median-only case, matching truncation 0', () => {
     expect(exceedanceProbability(standardisedLevel(-1, 0, 0), 3)).toBe(1);

@@ -21,13 +21,23 @@ const levels = [0.01, 0.03, 0.1, 0.3, 1];
 const annualRate = levels.map((x) => k * x ** -2.5);
 
 describe('siteIntensity', () => {
-  const result = siteIntensity({ levels, annualRate, returnPeriodsYears: [475, 2475], horizonsYears: [50] });
+  const result = siteIntensity({
+    levels,
+    annualRate,
+    returnPeriodsYears: [475, 2475],
+    horizonsYears: [50],
+  });
 
   it('MMI at 475 years = 7.510133 (VII), at 2475 years = 8.571118 (IX, rounded)', () => {
     const at475 = result.intensity.atReturnPeriod['475']!;
     expectClose(at475.mmi!, 7.510133041880696, 1e-9, 'hand computation');
     expect([at475.roman, at475.fromMeasure]).toEqual(['VIII', 'PGA']);
-    expectClose(result.intensity.atReturnPeriod['2475']!.mmi!, 8.571117800474884, 1e-9, 'hand computation');
+    expectClose(
+      result.intensity.atReturnPeriod['2475']!.mmi!,
+      8.571117800474884,
+      1e-9,
+      'hand computation',
+    );
     expect(result.intensity.atReturnPeriod['2475']!.roman).toBe('IX');
   });
 
@@ -35,29 +45,55 @@ describe('siteIntensity', () => {
     // Levels 0.04–20 g on the upper segment, 60 per decade: the sum over the curve against the closed form.
     const wide = Array.from({ length: 163 }, (_, i) => 0.04 * 10 ** (i / 60));
     const wideRates = wide.map((x) => k * x ** -2.5);
-    const high = siteIntensity({ levels: wide, annualRate: wideRates, returnPeriodsYears: [475], horizonsYears: [1] });
+    const high = siteIntensity({
+      levels: wide,
+      annualRate: wideRates,
+      returnPeriodsYears: [475],
+      horizonsYears: [1],
+    });
     const yM = 10 ** (9.1 / 3.7) / 980.665;
     const beta = (0.73 * Math.LN10) / 3.7;
     const expected = k * yM ** -2.5 * Math.exp((6.25 * beta * beta) / 2);
-    expectRelative(-Math.log1p(-high.intensity.chanceOfReaching['1']!.VIII), expected, 0.005, 'Cornell et al. 2002 closed form (from memory)');
+    expectRelative(
+      -Math.log1p(-high.intensity.chanceOfReaching['1']!.VIII),
+      expected,
+      0.005,
+      'Cornell et al. 2002 closed form (from memory)',
+    );
   });
 
   it('the scatter raises every chance above the median-only chance, and the record names the conversion', () => {
     const c = result.intensity.chanceOfReaching['50']!;
-    const medianOnly = (m: number) => -Math.expm1(-50 * k * (10 ** ((m + 1.6) / 3.7) / 980.665) ** -2.5);
+    const medianOnly = (m: number) =>
+      -Math.expm1(-50 * k * (10 ** ((m + 1.6) / 3.7) / 980.665) ** -2.5);
     expect(c.VI).toBeGreaterThan(medianOnly(5.5));
     expect(c.VII).toBeGreaterThan(medianOnly(6.5));
     expect(c.VIII).toBeGreaterThan(medianOnly(7.5));
     expect(c.VI).toBeGreaterThan(c.VII);
     expect(c.VII).toBeGreaterThan(c.VIII);
-    expect(result.intensity.conversion).toEqual({ measure: 'PGA', relation: 'Worden et al. (2012)', sigmaMmi: 0.73 });
+    expect(result.intensity.conversion).toEqual({
+      measure: 'PGA',
+      relation: 'Worden et al. (2012)',
+      sigmaMmi: 0.73,
+    });
   });
 
   it('from PGV: the PGV relation and its σ 0.65, recorded', () => {
     const pgvLevels = [1, 3, 10, 30, 100, 300];
-    const pgv = siteIntensity({ levels: pgvLevels, annualRate: pgvLevels.map((v) => 1e-2 * v ** -2), returnPeriodsYears: [475], horizonsYears: [50], conversion: INTENSITY_CONVERSIONS.PGV });
+    const pgv = siteIntensity({
+      levels: pgvLevels,
+      annualRate: pgvLevels.map((v) => 1e-2 * v ** -2),
+      returnPeriodsYears: [475],
+      horizonsYears: [50],
+      conversion: INTENSITY_CONVERSIONS.PGV,
+    });
     // 475-year PGV = (1e-2 × 475)^(1/2) = 2.179449 cm/s: log10 = 0.338347 <= t1, MMI = 3.78 + 1.47 × 0.338347 = 4.277370.
-    expectClose(pgv.intensity.atReturnPeriod['475']!.mmi!, 4.27737, 1e-5, 'Worden 2012 PGV relation, hand computation');
+    expectClose(
+      pgv.intensity.atReturnPeriod['475']!.mmi!,
+      4.27737,
+      1e-5,
+      'Worden 2012 PGV relation, hand computation',
+    );
     expect(pgv.intensity.atReturnPeriod['475']!.fromMeasure).toBe('PGV');
     expect(pgv.intensity.conversion?.sigmaMmi).toBe(0.65);
   });
@@ -68,13 +104,27 @@ describe('siteIntensity', () => {
   });
 
   it('a curve too low to reach the 475-year rate gives null MMI and the inform band', () => {
-    const low = siteIntensity({ levels, annualRate: annualRate.map((r) => r * 1e-4), returnPeriodsYears: [475], horizonsYears: [50] });
-    expect(low.intensity.atReturnPeriod['475']).toEqual({ mmi: null, roman: null, fromMeasure: 'PGA' });
+    const low = siteIntensity({
+      levels,
+      annualRate: annualRate.map((r) => r * 1e-4),
+      returnPeriodsYears: [475],
+      horizonsYears: [50],
+    });
+    expect(low.intensity.atReturnPeriod['475']).toEqual({
+      mmi: null,
+      roman: null,
+      fromMeasure: 'PGA',
+    });
     expect(low.band).toEqual({ id: 'inform', label: 'Inform', mmi475: null });
   });
 
   it('a curve above its highest level at 475 years bands from that level (a lower bound) and says so', () => {
-    const high = siteIntensity({ levels: [0.01, 0.05], annualRate: [0.5, 0.1], returnPeriodsYears: [475], horizonsYears: [50] });
+    const high = siteIntensity({
+      levels: [0.01, 0.05],
+      annualRate: [0.5, 0.1],
+      returnPeriodsYears: [475],
+      horizonsYears: [50],
+    });
     expect(high.band.mmi475).toBeNull();
     expect(high.band.id).toBe('inform'); // MMI at 0.05 g is 4.7: a lower bound only
     expect(high.warnings.some((w) => w.includes('475-year'))).toBe(true);

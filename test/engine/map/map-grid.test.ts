@@ -62,17 +62,29 @@ describe('mapGrid', () => {
       const f = k / 200;
       const lon = bounds[0] + (bounds[2] - bounds[0]) * f;
       const lat = bounds[1] + (bounds[3] - bounds[1]) * f;
-      for (const p of [[lon, bounds[1]], [lon, bounds[3]], [bounds[0], lat], [bounds[2], lat]] as const) {
+      for (const p of [
+        [lon, bounds[1]],
+        [lon, bounds[3]],
+        [bounds[0], lat],
+        [bounds[2], lat],
+      ] as const) {
         const { x, y } = frame.toLocal(p);
-        expect(x >= grid.x0 - 1e-3 && y >= grid.y0 - 1e-3 && x <= last.x + 1e-3 && y <= last.y + 1e-3, `edge point ${p} inside the grid`).toBe(true);
+        expect(
+          x >= grid.x0 - 1e-3 && y >= grid.y0 - 1e-3 && x <= last.x + 1e-3 && y <= last.y + 1e-3,
+          `edge point ${p} inside the grid`,
+        ).toBe(true);
       }
     }
   });
 
   it('refuses a spacing that is not positive and a grid over the point budget, naming the field', () => {
     expect(() => mapGrid(study, frame, { spacingKm: 0 })).toThrow(InvalidInput);
-    expect(() => mapGrid(study, frame, { spacingKm: -1 })).toThrow(/spacingKm: expected a grid spacing above 0 km, got -1/);
+    expect(() => mapGrid(study, frame, { spacingKm: -1 })).toThrow(
+      /spacingKm: expected a grid spacing above 0 km, got -1/,
+    );
     expect(() => mapGrid(study, frame, { spacingKm: 1, maxPoints: 100 })).toThrow(StudyTooLarge);
-    expect(() => mapGrid(study, frame, { spacingKm: 1, bounds: [10, 0, 5, 1] })).toThrow(/bounds: expected \[west, south, east, north\]/);
+    expect(() => mapGrid(study, frame, { spacingKm: 1, bounds: [10, 0, 5, 1] })).toThrow(
+      /bounds: expected \[west, south, east, north\]/,
+    );
   });
 });

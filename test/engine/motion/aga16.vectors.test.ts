@@ -1,6 +1,12 @@
 import { describe, it } from 'vitest';
 import { aga16, aga16Lower, aga16Upper } from '../../../api/engine/motion/aga16.ts';
-import { expectFastPathMatchesVector, expectMatchesVector, readVectors, vectorInput, vectorMeasure } from './reference-vectors.ts';
+import {
+  expectFastPathMatchesVector,
+  expectMatchesVector,
+  readVectors,
+  vectorInput,
+  vectorMeasure,
+} from './reference-vectors.ts';
 
 // Independent test vectors of Abrahamson, Gregor & Addo (2016), computed by pygmm 0.8.0 from the
 // published Table 3 and constants (vectors/README.md): forearc sites, interface R = Rrup,
@@ -9,12 +15,24 @@ import { expectFastPathMatchesVector, expectMatchesVector, readVectors, vectorIn
 // the reference README says); intraslab cases carry the branch name "intraslab" (ΔC1 = −0.3).
 const vectors = readVectors('aga16.json');
 const SOURCE = 'Abrahamson, Gregor & Addo (2016), reference vectors (pygmm 0.8.0)';
-const MODEL_OF = { central: aga16, intraslab: aga16, lower: aga16Lower, upper: aga16Upper } as const;
+const MODEL_OF = {
+  central: aga16,
+  intraslab: aga16,
+  lower: aga16Lower,
+  upper: aga16Upper,
+} as const;
 
 describe('AGA16 and its ΔC1 branches against the reference vectors', () => {
-  it.each(vectors.cases.map((c) => [c.id, c.deltaC1Branch as keyof typeof MODEL_OF, c] as const))('%s (%s ΔC1): ln median, τ, φ, σ within 1e-4', (_, branch, c) => {
-    const model = MODEL_OF[branch];
-    expectMatchesVector(model.predict(vectorInput(c), vectorMeasure(c)), c, `${SOURCE}, ${model.name}`);
-    expectFastPathMatchesVector(model, c, `${SOURCE}, ${model.name}`);
-  });
+  it.each(vectors.cases.map((c) => [c.id, c.deltaC1Branch as keyof typeof MODEL_OF, c] as const))(
+    '%s (%s ΔC1): ln median, τ, φ, σ within 1e-4',
+    (_, branch, c) => {
+      const model = MODEL_OF[branch];
+      expectMatchesVector(
+        model.predict(vectorInput(c), vectorMeasure(c)),
+        c,
+        `${SOURCE}, ${model.name}`,
+      );
+      expectFastPathMatchesVector(model, c, `${SOURCE}, ${model.name}`);
+    },
+  );
 });

@@ -2,7 +2,14 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { runCli } from '../../../api/cli.ts';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
-import { ASK14_COLUMNS, ASK14_CONSTANTS, ASK14_PGA, ASK14_PGV, ASK14_SA, type Ask14Row } from '../../../api/engine/motion/ask14-coefficients.ts';
+import {
+  ASK14_COLUMNS,
+  ASK14_CONSTANTS,
+  ASK14_PGA,
+  ASK14_PGV,
+  ASK14_SA,
+  type Ask14Row,
+} from '../../../api/engine/motion/ask14-coefficients.ts';
 import {
   ask14,
   ask14BasinTerm,
@@ -42,9 +49,23 @@ const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 function input(over: Partial<GmmInput> = {}): GmmInput {
   const rrupKm = over.rrupKm ?? 10;
   return {
-    magnitude: 7, rakeDeg: 0, mechanism: 'strike-slip', setting: 'crustal', dipDeg: 90, ztorKm: 0, widthKm: 15,
-    hypoDepthKm: 8, rjbKm: rrupKm, rrupKm, rxKm: -rrupKm, ry0Km: 0, rhypoKm: Math.hypot(rrupKm, 8), repiKm: rrupKm,
-    vs30: 760, vs30Measured: true, ...over,
+    magnitude: 7,
+    rakeDeg: 0,
+    mechanism: 'strike-slip',
+    setting: 'crustal',
+    dipDeg: 90,
+    ztorKm: 0,
+    widthKm: 15,
+    hypoDepthKm: 8,
+    rjbKm: rrupKm,
+    rrupKm,
+    rxKm: -rrupKm,
+    ry0Km: 0,
+    rhypoKm: Math.hypot(rrupKm, 8),
+    repiKm: rrupKm,
+    vs30: 760,
+    vs30Measured: true,
+    ...over,
   };
 }
 const lnY = (over: Partial<GmmInput>, m: Measure): number => ask14.predict(input(over), m).lnMedian;
@@ -58,25 +79,39 @@ describe('ASK14: the reference vectors', () => {
     expect(new Set(VECTORS.cases.map((c) => c.vs30Measured))).toEqual(new Set([true, false]));
   });
 
-  it.each(VECTORS.cases.map((c) => [c.id, c.measure, c] as const))('%s %s: ln median, τ, φ, σ within 1e-4', (id, _measure, c) => {
-    const p = ask14.predict(inputOf(c), measureOf(c));
-    expectClose(p.lnMedian, c.lnMedian, TOLERANCE, `${SOURCE} ${id} ln median`);
-    expectClose(p.tau, c.tau, TOLERANCE, `${SOURCE} ${id} τ`);
-    expectClose(p.phi, c.phi, TOLERANCE, `${SOURCE} ${id} φ`);
-    expectClose(p.sigma, c.sigma, TOLERANCE, `${SOURCE} ${id} σ`);
-  });
+  it.each(VECTORS.cases.map((c) => [c.id, c.measure, c] as const))(
+    '%s %s: ln median, τ, φ, σ within 1e-4',
+    (id, _measure, c) => {
+      const p = ask14.predict(inputOf(c), measureOf(c));
+      expectClose(p.lnMedian, c.lnMedian, TOLERANCE, `${SOURCE} ${id} ln median`);
+      expectClose(p.tau, c.tau, TOLERANCE, `${SOURCE} ${id} τ`);
+      expectClose(p.phi, c.phi, TOLERANCE, `${SOURCE} ${id} φ`);
+      expectClose(p.sigma, c.sigma, TOLERANCE, `${SOURCE} ${id} σ`);
+    },
+  );
 
-  it('gives the same numbers with the vectors\' Z1 passed in (it is the paper\'s default Z1ref)', () => {
+  it("gives the same numbers with the vectors' Z1 passed in (it is the paper's default Z1ref)", () => {
     for (const c of VECTORS.cases) {
       expect(c.z1Km).not.toBeNull();
       // The file writes Z1 rounded to 1e-6 km: well inside the tolerance of f10 = a ln((Z1 + 0.01)/(Z1ref + 0.01)).
-      expectClose(ask14DefaultZ1Km(c.vs30), c.z1Km as number, 1e-6, `${SOURCE} ${c.id} Z1ref(Vs30)`);
-      expectClose(ask14.predict(inputOf(c, 'given'), measureOf(c)).lnMedian, c.lnMedian, TOLERANCE, `${SOURCE} ${c.id} with Z1 given`);
+      expectClose(
+        ask14DefaultZ1Km(c.vs30),
+        c.z1Km as number,
+        1e-6,
+        `${SOURCE} ${c.id} Z1ref(Vs30)`,
+      );
+      expectClose(
+        ask14.predict(inputOf(c, 'given'), measureOf(c)).lnMedian,
+        c.lnMedian,
+        TOLERANCE,
+        `${SOURCE} ${c.id} with Z1 given`,
+      );
     }
   });
 
-  it('classes every case\'s rake as the vectors do', () => {
-    for (const c of VECTORS.cases) expect(ask14MechanismFromRake(c.rakeDeg), c.id).toBe(c.mechanism);
+  it("classes every case's rake as the vectors do", () => {
+    for (const c of VECTORS.cases)
+      expect(ask14MechanismFromRake(c.rakeDeg), c.id).toBe(c.mechanism);
   });
 });
 
@@ -90,7 +125,8 @@ describe('ASK14: the coefficient table', () => {
     expect(periods.length).toBe(22);
     expect(periods[0]).toBe(0.01);
     expect(periods[periods.length - 1]).toBe(10);
-    for (let i = 1; i < periods.length; i++) expect(periods[i] as number).toBeGreaterThan(periods[i - 1] as number);
+    for (let i = 1; i < periods.length; i++)
+      expect(periods[i] as number).toBeGreaterThan(periods[i - 1] as number);
     expect(ask14.periodsS).toEqual(periods);
   });
 
@@ -98,57 +134,99 @@ describe('ASK14: the coefficient table', () => {
     expect(ASK14_COLUMNS.length).toBe(45);
     for (const row of rows) {
       expect(Object.keys(row).sort()).toEqual(['periodS', ...ASK14_COLUMNS].sort());
-      for (const column of ASK14_COLUMNS) expect(Number.isFinite(row[column]), `${column} at ${row.periodS} s`).toBe(true);
+      for (const column of ASK14_COLUMNS)
+        expect(Number.isFinite(row[column]), `${column} at ${row.periodS} s`).toBe(true);
     }
     for (const value of Object.values(ASK14_CONSTANTS)) expect(Number.isFinite(value)).toBe(true);
   });
 
-  it('meets the hanging-wall taper\'s continuity at Rx = R1 (h1 + h2 + h3 = 1)', () => {
+  it("meets the hanging-wall taper's continuity at Rx = R1 (h1 + h2 + h3 = 1)", () => {
     // Abrahamson, Silva & Kamai (2014): T3 = h1 + h2 (Rx/R1) + h3 (Rx/R1)² must reach 1 at R1, where the linear taper starts.
-    expectClose(ASK14_CONSTANTS.h1 + ASK14_CONSTANTS.h2 + ASK14_CONSTANTS.h3, 1, 1e-12, 'ASK14 hanging-wall constants');
+    expectClose(
+      ASK14_CONSTANTS.h1 + ASK14_CONSTANTS.h2 + ASK14_CONSTANTS.h3,
+      1,
+      1e-12,
+      'ASK14 hanging-wall constants',
+    );
   });
 });
 
 describe('ASK14: the equation by hand', () => {
   it('tapers the hanging-wall term as the paper gives it', () => {
     // T1 (δ 45°) = 1; T2 (M 6) = 1 + 0.2(−0.5) − 0.8(0.25) = 0.7; T4 (Ztor 2 km) = 0.96: 0.672.
-    expectClose(ask14HangingWallScale(6, 45, 2), 0.672, 1e-12, 'Abrahamson, Silva & Kamai (2014) T1 T2 T4, by hand');
+    expectClose(
+      ask14HangingWallScale(6, 45, 2),
+      0.672,
+      1e-12,
+      'Abrahamson, Silva & Kamai (2014) T1 T2 T4, by hand',
+    );
     expect(ask14HangingWallScale(5.5, 45, 2)).toBe(0);
     expect(ask14HangingWallScale(7, 45, 10)).toBe(0);
     // R1 10 km: T3 at Rx 5 = 0.25 + 0.75 − 0.1875 = 0.8125; at Rx 20 (R2 30) = 0.5; T5 fades 5 km beyond Ry1 = Rx tan 20°.
     expectClose(ask14HangingWallTaper(10, 5, 0), 0.8125, 1e-12, 'ASK14 T3 below R1, by hand');
-    expectClose(ask14HangingWallTaper(10, 20, 0), 0.5, 1e-12, 'ASK14 T3 between R1 and R2, by hand');
+    expectClose(
+      ask14HangingWallTaper(10, 20, 0),
+      0.5,
+      1e-12,
+      'ASK14 T3 between R1 and R2, by hand',
+    );
     expect(ask14HangingWallTaper(10, 30, 0)).toBe(0);
     const ry1 = 5 * Math.tan((20 * Math.PI) / 180);
-    expectClose(ask14HangingWallTaper(10, 5, ry1 + 2.5), 0.8125 * 0.5, 1e-12, 'ASK14 T5 halfway, by hand');
+    expectClose(
+      ask14HangingWallTaper(10, 5, ry1 + 2.5),
+      0.8125 * 0.5,
+      1e-12,
+      'ASK14 T5 halfway, by hand',
+    );
     expect(ask14HangingWallTaper(10, 5, ry1 + 5)).toBe(0);
     expect(ask14HangingWallTaper(0, 0, 0)).toBe(0);
   });
 
-  it('stops Vs30 scaling at the paper\'s V1', () => {
+  it("stops Vs30 scaling at the paper's V1", () => {
     expect(ask14V1(0)).toBe(1500);
     expect(ask14V1(0.5)).toBe(1500);
-    expectClose(ask14V1(1), 1500 * 2 ** -0.35, 1e-9, 'ASK14 V1 = exp(−0.35 ln(T/0.5) + ln 1500), by hand');
+    expectClose(
+      ask14V1(1),
+      1500 * 2 ** -0.35,
+      1e-9,
+      'ASK14 V1 = exp(−0.35 ln(T/0.5) + ln 1500), by hand',
+    );
     expect(ask14V1(3)).toBe(800);
     expect(ask14V1(10)).toBe(800);
     expect(lnY({ vs30: 1600 }, PGA)).toBe(lnY({ vs30: 1500 }, PGA));
   });
 
-  it('has no basin term at the default Z1 and the paper\'s f10 elsewhere', () => {
+  it("has no basin term at the default Z1 and the paper's f10 elsewhere", () => {
     const row = ASK14_SA.find((r) => r.periodS === 3) as Ask14Row;
     expect(ask14BasinTerm(row, 400, undefined)).toBe(0);
     expectClose(ask14BasinTerm(row, 400, ask14DefaultZ1Km(400)), 0, 1e-15, 'ASK14 f10 at Z1ref');
     // Vs30 400 m/s uses a45: f10 = a45 ln((0.5 + 0.01)/(Z1ref + 0.01)).
-    expectClose(ask14BasinTerm(row, 400, 0.5), row.a45 * Math.log(0.51 / (ask14DefaultZ1Km(400) + 0.01)), 1e-15, 'ASK14 f10, by hand');
+    expectClose(
+      ask14BasinTerm(row, 400, 0.5),
+      row.a45 * Math.log(0.51 / (ask14DefaultZ1Km(400) + 0.01)),
+      1e-15,
+      'ASK14 f10, by hand',
+    );
     expect(lnY({ vs30: 400, z1Km: 0.8 }, sa(3))).toBeGreaterThan(lnY({ vs30: 400 }, sa(3)));
   });
 
   it('keeps the rupture terms and the pair terms apart', () => {
-    const terms = ask14RuptureTerms(ASK14_PGA, { magnitude: 6.5, mechanism: 'reverse', dipDeg: 45, ztorKm: 2, widthKm: 14 });
+    const terms = ask14RuptureTerms(ASK14_PGA, {
+      magnitude: 6.5,
+      mechanism: 'reverse',
+      dipDeg: 45,
+      ztorKm: 2,
+      widthKm: 14,
+    });
     expect(terms.row).toBe(ASK14_PGA);
     expectClose(terms.r1Km, 14 * Math.SQRT1_2, 1e-12, 'R1 = W cos δ');
     // M 6.5: τA halfway between s3 and s4 (M 5 to 7 ramp); φA at s2 (M ≥ 6).
-    expectClose(terms.tauA, ASK14_PGA.s3 + 0.75 * (ASK14_PGA.s4 - ASK14_PGA.s3), 1e-12, 'ASK14 τA ramp');
+    expectClose(
+      terms.tauA,
+      ASK14_PGA.s3 + 0.75 * (ASK14_PGA.s4 - ASK14_PGA.s3),
+      1e-12,
+      'ASK14 τA ramp',
+    );
     expectClose(terms.phiAMeasured, ASK14_PGA.s2Meas, 1e-12, 'ASK14 φA above M 6');
   });
 });
@@ -166,8 +244,12 @@ describe('ASK14: properties', () => {
         fc.constantFrom(200, 400, 760),
         fc.constantFrom(...measures),
         (magnitude, rrupKm, stepKm, stepM, vs30, m) => {
-          expect(lnY({ magnitude, rrupKm: rrupKm + stepKm, vs30 }, m)).toBeLessThan(lnY({ magnitude, rrupKm, vs30 }, m));
-          expect(lnY({ magnitude: magnitude + stepM, rrupKm, vs30 }, m)).toBeGreaterThan(lnY({ magnitude, rrupKm, vs30 }, m));
+          expect(lnY({ magnitude, rrupKm: rrupKm + stepKm, vs30 }, m)).toBeLessThan(
+            lnY({ magnitude, rrupKm, vs30 }, m),
+          );
+          expect(lnY({ magnitude: magnitude + stepM, rrupKm, vs30 }, m)).toBeGreaterThan(
+            lnY({ magnitude, rrupKm, vs30 }, m),
+          );
         },
       ),
       { seed: 20140801, numRuns: 300 },
@@ -177,19 +259,30 @@ describe('ASK14: properties', () => {
   it('is higher on the hanging wall of a dipping reverse fault than on the footwall', () => {
     // M 7, dip 45°, Ztor 2 km, W 20 km. Hanging wall at Rx 10 km (above the rupture: Rjb 0, Rrup
     // (10 + 2)/√2); footwall at Rx −10 km (Rjb 10, Rrup √(10² + 2²)).
-    const fault = { magnitude: 7, rakeDeg: 90, mechanism: 'reverse' as const, dipDeg: 45, ztorKm: 2, widthKm: 20 };
+    const fault = {
+      magnitude: 7,
+      rakeDeg: 90,
+      mechanism: 'reverse' as const,
+      dipDeg: 45,
+      ztorKm: 2,
+      widthKm: 20,
+    };
     const hanging = input({ ...fault, rxKm: 10, rjbKm: 0, rrupKm: 12 / Math.SQRT2 });
     const foot = input({ ...fault, rxKm: -10, rjbKm: 10, rrupKm: Math.hypot(10, 2) });
     for (const m of [PGA, PGV, sa(0.2), sa(1), sa(3)]) {
       expect(ask14.predict(hanging, m).lnMedian).toBeGreaterThan(ask14.predict(foot, m).lnMedian);
       // The same distances on either side: the difference is the hanging-wall term alone, and positive.
-      expect(ask14.predict(hanging, m).lnMedian).toBeGreaterThan(ask14.predict({ ...hanging, rxKm: -10 }, m).lnMedian);
+      expect(ask14.predict(hanging, m).lnMedian).toBeGreaterThan(
+        ask14.predict({ ...hanging, rxKm: -10 }, m).lnMedian,
+      );
     }
     // a13 is 0 from 5 s: no hanging-wall effect there.
-    expect(ask14.predict(hanging, sa(5)).lnMedian).toBe(ask14.predict({ ...hanging, rxKm: -10 }, sa(5)).lnMedian);
+    expect(ask14.predict(hanging, sa(5)).lnMedian).toBe(
+      ask14.predict({ ...hanging, rxKm: -10 }, sa(5)).lnMedian,
+    );
   });
 
-  it('gives a larger φ where Vs30 is estimated than where it is measured (the paper\'s s1, s2)', () => {
+  it("gives a larger φ where Vs30 is estimated than where it is measured (the paper's s1, s2)", () => {
     const measured = ask14.predict(input({ magnitude: 4.5 }), PGA);
     const estimated = ask14.predict(input({ magnitude: 4.5, vs30Measured: false }), PGA);
     expect(estimated.lnMedian).toBe(measured.lnMedian);
@@ -201,21 +294,43 @@ describe('ASK14: properties', () => {
     const lo = ask14.predict(input(), sa(0.5));
     const hi = ask14.predict(input(), sa(0.75));
     const w = Math.log(0.6 / 0.5) / Math.log(0.75 / 0.5);
-    expectClose(between.lnMedian, lo.lnMedian + (hi.lnMedian - lo.lnMedian) * w, 1e-12, 'interpolate-period.ts rule (common practice)');
-    expectClose(between.sigma, lo.sigma + (hi.sigma - lo.sigma) * w, 1e-12, 'interpolate-period.ts rule (common practice)');
-    expect(ask14.predict(input(), sa(1)).lnMedian).toBe(ask14.predict(input(), sa(1 + 1e-9)).lnMedian);
+    expectClose(
+      between.lnMedian,
+      lo.lnMedian + (hi.lnMedian - lo.lnMedian) * w,
+      1e-12,
+      'interpolate-period.ts rule (common practice)',
+    );
+    expectClose(
+      between.sigma,
+      lo.sigma + (hi.sigma - lo.sigma) * w,
+      1e-12,
+      'interpolate-period.ts rule (common practice)',
+    );
+    expect(ask14.predict(input(), sa(1)).lnMedian).toBe(
+      ask14.predict(input(), sa(1 + 1e-9)).lnMedian,
+    );
   });
 
   it('answers at zero distance and zero width with finite numbers', () => {
     for (const m of measures) {
-      for (const p of [ask14.predict(input({ rrupKm: 0, rjbKm: 0, rxKm: 0 }), m), ask14.predict(input({ widthKm: 0, dipDeg: 45, rxKm: 0 }), m)]) {
+      for (const p of [
+        ask14.predict(input({ rrupKm: 0, rjbKm: 0, rxKm: 0 }), m),
+        ask14.predict(input({ widthKm: 0, dipDeg: 45, rxKm: 0 }), m),
+      ]) {
         for (const v of [p.lnMedian, p.sigma, p.tau, p.phi]) expect(Number.isFinite(v)).toBe(true);
       }
     }
   });
 
   it('answers outside its validity with applicable false and finite numbers', () => {
-    const outside: Partial<GmmInput>[] = [{ magnitude: 9 }, { magnitude: 2.5 }, { rrupKm: 350 }, { vs30: 150 }, { vs30: 1200 }, { setting: 'interface' }];
+    const outside: Partial<GmmInput>[] = [
+      { magnitude: 9 },
+      { magnitude: 2.5 },
+      { rrupKm: 350 },
+      { vs30: 150 },
+      { vs30: 1200 },
+      { setting: 'interface' },
+    ];
     for (const over of outside) {
       for (const m of measures) {
         const p = ask14.predict(input(over), m);
@@ -242,12 +357,21 @@ describe('ASK14: properties', () => {
     const request = readProbeRequest({ model: 'ASK14', magnitude: 6.5, rjbKm: 20 }, modelCatalog);
     const result = probeMotion(request, modelCatalog);
     expect(Object.keys(result.measures)).toEqual(['PGA', 'PGV', 'SA(0.2)', 'SA(1.0)']);
-    expect(result.measures.PGA?.median).toBeCloseTo(Math.exp(ask14.predict(result.input, PGA).lnMedian), 12);
+    expect(result.measures.PGA?.median).toBeCloseTo(
+      Math.exp(ask14.predict(result.input, PGA).lnMedian),
+      12,
+    );
     expect(ask14.distanceMetric).toBe('rrup');
     expect(ask14.settings).toEqual(['crustal']);
     let out = '';
-    const code = await runCli(['motion', '--model', 'ASK14', '--magnitude', '6.5', '--rjb', '20', '--json'], { out: (t) => (out += t), err: () => undefined });
+    const code = await runCli(
+      ['motion', '--model', 'ASK14', '--magnitude', '6.5', '--rjb', '20', '--json'],
+      { out: (t) => (out += t), err: () => undefined },
+    );
     expect(code).toBe(0);
-    expect((JSON.parse(out) as { model: string; measures: Record<string, { median: number }> }).measures.PGA?.median).toBe(result.measures.PGA?.median);
+    expect(
+      (JSON.parse(out) as { model: string; measures: Record<string, { median: number }> }).measures
+        .PGA?.median,
+    ).toBe(result.measures.PGA?.median);
   });
 });

@@ -8,12 +8,20 @@ import { checkPreparedMeasures, checkPreparedModel } from './prepared-checks.ts'
 const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 
 describe('BSSA14 precomputation hook', () => {
-  it('gives predict()\'s ln median, σ and applicability, within 1e-12: PGA, PGV, SA on rows and between rows', () => {
-    checkPreparedModel(bssa14, [{ kind: 'PGA' }, { kind: 'PGV' }, sa(0.2), sa(1), sa(0.12), sa(2.5)], ['crustal', 'crustal', 'interface']);
+  it("gives predict()'s ln median, σ and applicability, within 1e-12: PGA, PGV, SA on rows and between rows", () => {
+    checkPreparedModel(
+      bssa14,
+      [{ kind: 'PGA' }, { kind: 'PGV' }, sa(0.2), sa(1), sa(0.12), sa(2.5)],
+      ['crustal', 'crustal', 'interface'],
+    );
   });
 
-  it('prepared for several measures at once gives each measure\'s own numbers exactly (the shared rock motion and distance terms change none)', () => {
-    checkPreparedMeasures(bssa14, [{ kind: 'PGA' }, sa(0.2), sa(1), { kind: 'PGV' }, sa(0.12), sa(2.5)], ['crustal', 'crustal', 'interface']);
+  it("prepared for several measures at once gives each measure's own numbers exactly (the shared rock motion and distance terms change none)", () => {
+    checkPreparedMeasures(
+      bssa14,
+      [{ kind: 'PGA' }, sa(0.2), sa(1), { kind: 'PGV' }, sa(0.12), sa(2.5)],
+      ['crustal', 'crustal', 'interface'],
+    );
   });
 
   it('asks only for Rjb, and refuses a period outside the table as predict does', () => {

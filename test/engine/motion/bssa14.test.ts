@@ -25,12 +25,27 @@ const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 function input(over: Partial<GmmInput> = {}): GmmInput {
   const rjbKm = over.rjbKm ?? 10;
   return {
-    magnitude: 7, rakeDeg: 0, mechanism: 'strike-slip', setting: 'crustal', dipDeg: 90, ztorKm: 0, widthKm: 15,
-    hypoDepthKm: 8, rjbKm, rrupKm: rjbKm, rxKm: -rjbKm, ry0Km: 0, rhypoKm: Math.hypot(rjbKm, 8), repiKm: rjbKm,
-    vs30: 760, vs30Measured: true, ...over,
+    magnitude: 7,
+    rakeDeg: 0,
+    mechanism: 'strike-slip',
+    setting: 'crustal',
+    dipDeg: 90,
+    ztorKm: 0,
+    widthKm: 15,
+    hypoDepthKm: 8,
+    rjbKm,
+    rrupKm: rjbKm,
+    rxKm: -rjbKm,
+    ry0Km: 0,
+    rhypoKm: Math.hypot(rjbKm, 8),
+    repiKm: rjbKm,
+    vs30: 760,
+    vs30Measured: true,
+    ...over,
   };
 }
-const lnY = (over: Partial<GmmInput>, m: Measure): number => bssa14.predict(input(over), m).lnMedian;
+const lnY = (over: Partial<GmmInput>, m: Measure): number =>
+  bssa14.predict(input(over), m).lnMedian;
 
 describe('BSSA14: the equation', () => {
   it('reproduces a hand calculation of PGA at M 7, Rjb 10 km, Vs30 760 m/s, strike-slip', () => {
@@ -45,30 +60,54 @@ describe('BSSA14: the equation', () => {
     // 1 s row of the published table: M 5, Rjb 20 km: F_E = 0.4218 + 1.5004(−1.2) − 0.18983(1.44) = −1.65282;
     // R = √(20² + 5.74²) = 20.8074; F_P = (−1.193 + 0.10248·0.5) ln R − 0.00121 (R − 1) = −3.48877;
     // ln SA = −5.14160 (0.00585 g).
-    expectClose(lnY({ magnitude: 5, rjbKm: 20 }, sa(1)), -5.1416, 1e-4, `${SOURCE}: ln SA(1.0), hand calculation`);
+    expectClose(
+      lnY({ magnitude: 5, rjbKm: 20 }, sa(1)),
+      -5.1416,
+      1e-4,
+      `${SOURCE}: ln SA(1.0), hand calculation`,
+    );
   });
 
   it('has a linear site term of zero at Vref = 760 m/s and a nonlinear term of zero at and above it', () => {
     // Boore et al. (2014) site function (from memory): ln F_lin = c ln(Vs30/Vref); f2 vanishes at 760 m/s.
     for (const row of [BSSA14_PGA, ...BSSA14_SA]) {
-      expectClose(bssa14SiteTerms(row, 760).linear, 0, 0, `${SOURCE}: ln F_lin at Vref, ${row.periodS} s`);
+      expectClose(
+        bssa14SiteTerms(row, 760).linear,
+        0,
+        0,
+        `${SOURCE}: ln F_lin at Vref, ${row.periodS} s`,
+      );
       expectClose(bssa14SiteTerms(row, 760).f2, 0, 0, `${SOURCE}: f2 at 760 m/s, ${row.periodS} s`);
-      expectClose(bssa14SiteTerms(row, 1200).f2, 0, 0, `${SOURCE}: f2 at 1200 m/s, ${row.periodS} s`);
+      expectClose(
+        bssa14SiteTerms(row, 1200).f2,
+        0,
+        0,
+        `${SOURCE}: f2 at 1200 m/s, ${row.periodS} s`,
+      );
     }
     const rupture = bssa14RuptureTerms(BSSA14_PGA, 7, 'strike-slip');
-    for (const rockFactor of [0.1, 1, 3]) expect(lnY({}, PGA)).toBe(bssa14LnMedian(BSSA14_PGA, rupture, bssa14SiteTerms(BSSA14_PGA, 760), 10, rockFactor));
+    for (const rockFactor of [0.1, 1, 3])
+      expect(lnY({}, PGA)).toBe(
+        bssa14LnMedian(BSSA14_PGA, rupture, bssa14SiteTerms(BSSA14_PGA, 760), 10, rockFactor),
+      );
   });
 
   it('caps the linear site term at Vc', () => {
     // Boore et al. (2014) site function (from memory): ln F_lin stops changing above Vc (1500 m/s for PGA).
     expect(bssa14SiteTerms(BSSA14_PGA, 1800).linear).toBe(bssa14SiteTerms(BSSA14_PGA, 1500).linear);
-    expectClose(bssa14SiteTerms(BSSA14_PGA, 380).linear, -0.6 * Math.log(0.5), 1e-12, `${SOURCE}: c ln(380/760), PGA`);
+    expectClose(
+      bssa14SiteTerms(BSSA14_PGA, 380).linear,
+      -0.6 * Math.log(0.5),
+      1e-12,
+      `${SOURCE}: c ln(380/760), PGA`,
+    );
   });
 
   it('reduces soft-soil amplification under strong rock shaking (nonlinear site response)', () => {
     // Boore et al. (2014), site term after Seyhan & Stewart (2014): on Vs30 = 200 m/s the
     // amplification of PGA falls as rock PGA grows.
-    const amplification = (over: Partial<GmmInput>): number => lnY({ ...over, vs30: 200 }, PGA) - lnY({ ...over, vs30: 760 }, PGA);
+    const amplification = (over: Partial<GmmInput>): number =>
+      lnY({ ...over, vs30: 200 }, PGA) - lnY({ ...over, vs30: 760 }, PGA);
     const weak = amplification({ magnitude: 5, rjbKm: 100 });
     const strong = amplification({ magnitude: 7.5, rjbKm: 1 });
     expect(weak).toBeGreaterThan(0);
@@ -79,7 +118,7 @@ describe('BSSA14: the equation', () => {
 });
 
 describe('BSSA14: mechanism', () => {
-  it('classifies rake by the paper\'s ranges', () => {
+  it("classifies rake by the paper's ranges", () => {
     // Boore et al. (2014), mechanism classes by rake (from memory).
     expect(bssa14MechanismFromRake(0)).toBe('strike-slip');
     expect(bssa14MechanismFromRake(180)).toBe('strike-slip');
@@ -98,13 +137,14 @@ describe('BSSA14: mechanism', () => {
     for (const m of [PGA, PGV, sa(0.01), sa(0.05), sa(0.3), sa(1)]) {
       expect(at(-90, m), 'normal < strike-slip').toBeLessThan(at(0, m));
       expect(at(-90, m), 'normal < reverse').toBeLessThan(at(90, m));
-      const unspecified = predictBssa14(input({ magnitude: 6.5 }), m, { mechanism: 'unspecified' }).lnMedian;
+      const unspecified = predictBssa14(input({ magnitude: 6.5 }), m, {
+        mechanism: 'unspecified',
+      }).lnMedian;
       expect(unspecified).toBeGreaterThan(at(-90, m));
     }
     expect(at(90, sa(0.3))).toBeGreaterThan(at(0, sa(0.3)));
     expect(at(90, PGA)).toBeLessThan(at(0, PGA));
   });
-
 });
 
 describe('BSSA14: standard deviations', () => {
@@ -126,15 +166,30 @@ describe('BSSA14: standard deviations', () => {
       expectClose(small.tau, tau1, 1e-12, `${SOURCE}: τ1`);
       expectClose(small.phi, phi1, 1e-12, `${SOURCE}: φ1`);
     }
-    expectClose(bssa14.predict(input({ magnitude: 6.5 }), PGA).sigma, 0.605086, 1e-6, `${SOURCE}: σ(PGA, M ≥ 5.5) by hand`);
+    expectClose(
+      bssa14.predict(input({ magnitude: 6.5 }), PGA).sigma,
+      0.605086,
+      1e-6,
+      `${SOURCE}: σ(PGA, M ≥ 5.5) by hand`,
+    );
   });
 
-  it('ramps with magnitude, distance and Vs30 as the paper\'s φ(M, Rjb, Vs30) says', () => {
+  it("ramps with magnitude, distance and Vs30 as the paper's φ(M, Rjb, Vs30) says", () => {
     // PGA row of the published table: τ at M 5 is halfway between τ1 0.398 and τ2 0.348; φ at
     // Rjb = √(R1 R2) gains half of ΔφR = 0.1; below V1 = 225 m/s φ loses ΔφV = 0.07.
     const phiAt = (magnitude: number, rjbKm: number, vs30: number): number =>
-      bssa14Phi(BSSA14_PGA, bssa14RuptureTerms(BSSA14_PGA, magnitude, 'strike-slip'), bssa14SiteTerms(BSSA14_PGA, vs30), rjbKm);
-    expectClose(bssa14RuptureTerms(BSSA14_PGA, 5, 'strike-slip').tau, 0.373, 1e-12, `${SOURCE}: τ(M 5), PGA`);
+      bssa14Phi(
+        BSSA14_PGA,
+        bssa14RuptureTerms(BSSA14_PGA, magnitude, 'strike-slip'),
+        bssa14SiteTerms(BSSA14_PGA, vs30),
+        rjbKm,
+      );
+    expectClose(
+      bssa14RuptureTerms(BSSA14_PGA, 5, 'strike-slip').tau,
+      0.373,
+      1e-12,
+      `${SOURCE}: τ(M 5), PGA`,
+    );
     expectClose(phiAt(6, Math.sqrt(110 * 270), 760), 0.545, 1e-12, `${SOURCE}: φ at √(R1 R2), PGA`);
     expectClose(phiAt(6, 350, 200), 0.495 + 0.1 - 0.07, 1e-12, `${SOURCE}: φ beyond R2, below V1`);
     const mid = Math.sqrt(225 * 300);
@@ -155,13 +210,22 @@ describe('BSSA14: medians against published figures', () => {
   ];
   for (const [label, over, m, expected] of cases) {
     it(label, () => {
-      expectRelative(Math.exp(lnY(over, m)), expected, 0.3, `Boore et al. (2014) / Gregor et al. (2014) figures, ${label} (from memory)`);
+      expectRelative(
+        Math.exp(lnY(over, m)),
+        expected,
+        0.3,
+        `Boore et al. (2014) / Gregor et al. (2014) figures, ${label} (from memory)`,
+      );
     });
   }
 
   it('gives SA(0.01) practically equal to PGA', () => {
     // PSA at 0.01 s equals PGA to within a few percent (common practice; the paper's rows agree).
-    for (const over of [{ magnitude: 5, rjbKm: 5 }, { magnitude: 7, rjbKm: 30, vs30: 300 }, { magnitude: 8, rjbKm: 150 }]) {
+    for (const over of [
+      { magnitude: 5, rjbKm: 5 },
+      { magnitude: 7, rjbKm: 30, vs30: 300 },
+      { magnitude: 8, rjbKm: 150 },
+    ]) {
       expectClose(lnY(over, sa(0.01)), lnY(over, PGA), 0.03, 'common practice: PSA(0.01 s) ≈ PGA');
     }
   });
@@ -173,9 +237,17 @@ describe('BSSA14: medians against published figures', () => {
       for (const rjbKm of [0, 10, 50, 150]) {
         for (const vs30 of [180, 300, 760]) {
           for (const rakeDeg of [0, 90, -90]) {
-            const values = BSSA14_SA.map((r) => lnY({ magnitude, rjbKm, vs30, rakeDeg }, sa(r.periodS)));
-            const kink = worstKink(BSSA14_SA.map((r) => r.periodS), values);
-            expect(kink.residual <= 0.2, `M ${magnitude}, ${rjbKm} km, ${vs30} m/s, rake ${rakeDeg}: ${kink.residual.toFixed(3)} at ${kink.periodS} s`).toBe(true);
+            const values = BSSA14_SA.map((r) =>
+              lnY({ magnitude, rjbKm, vs30, rakeDeg }, sa(r.periodS)),
+            );
+            const kink = worstKink(
+              BSSA14_SA.map((r) => r.periodS),
+              values,
+            );
+            expect(
+              kink.residual <= 0.2,
+              `M ${magnitude}, ${rjbKm} km, ${vs30} m/s, rake ${rakeDeg}: ${kink.residual.toFixed(3)} at ${kink.periodS} s`,
+            ).toBe(true);
           }
         }
       }
@@ -195,8 +267,12 @@ describe('BSSA14: properties', () => {
         fc.double({ min: 0.05, max: 0.5, noNaN: true }),
         fc.constantFrom(...measures),
         (magnitude, rjbKm, stepKm, stepM, m) => {
-          expect(lnY({ magnitude, rjbKm: rjbKm + stepKm }, m)).toBeLessThan(lnY({ magnitude, rjbKm }, m));
-          expect(lnY({ magnitude: magnitude + stepM, rjbKm }, m)).toBeGreaterThan(lnY({ magnitude, rjbKm }, m));
+          expect(lnY({ magnitude, rjbKm: rjbKm + stepKm }, m)).toBeLessThan(
+            lnY({ magnitude, rjbKm }, m),
+          );
+          expect(lnY({ magnitude: magnitude + stepM, rjbKm }, m)).toBeGreaterThan(
+            lnY({ magnitude, rjbKm }, m),
+          );
         },
       ),
       { seed: 20140301, numRuns: 300 },
@@ -208,16 +284,28 @@ describe('BSSA14: properties', () => {
     const lo = bssa14.predict(input(), sa(0.17));
     const hi = bssa14.predict(input(), sa(0.18));
     const w = Math.log(0.175 / 0.17) / Math.log(0.18 / 0.17);
-    expectClose(between.lnMedian, lo.lnMedian + (hi.lnMedian - lo.lnMedian) * w, 1e-12, 'interpolate-period.ts rule (common practice)');
+    expectClose(
+      between.lnMedian,
+      lo.lnMedian + (hi.lnMedian - lo.lnMedian) * w,
+      1e-12,
+      'interpolate-period.ts rule (common practice)',
+    );
     expect(between.lnMedian).toBeGreaterThan(Math.min(lo.lnMedian, hi.lnMedian));
     expect(between.lnMedian).toBeLessThan(Math.max(lo.lnMedian, hi.lnMedian));
-    expect(bssa14.predict(input(), sa(0.2)).lnMedian).toBe(predictBssa14(input(), sa(0.2 * (1 + 1e-9))).lnMedian);
+    expect(bssa14.predict(input(), sa(0.2)).lnMedian).toBe(
+      predictBssa14(input(), sa(0.2 * (1 + 1e-9))).lnMedian,
+    );
   });
 
   it('answers outside its validity with applicable false and finite numbers', () => {
     const outside: Partial<GmmInput>[] = [
-      { magnitude: 9 }, { magnitude: 2.5 }, { rjbKm: 450 }, { vs30: 120 }, { vs30: 2000 },
-      { magnitude: 7.5, rakeDeg: -90 }, { setting: 'interface' },
+      { magnitude: 9 },
+      { magnitude: 2.5 },
+      { rjbKm: 450 },
+      { vs30: 120 },
+      { vs30: 2000 },
+      { magnitude: 7.5, rakeDeg: -90 },
+      { setting: 'interface' },
     ];
     for (const over of outside) {
       for (const m of measures) {
@@ -236,7 +324,9 @@ describe('BSSA14: properties', () => {
     expect(() => bssa14.predict(input({ magnitude: Number.NaN }), PGA)).toThrow(/magnitude/);
     expect(() => bssa14.predict(input({ rjbKm: -1 }), PGA)).toThrow(InvalidInput);
     expect(() => bssa14.predict(input({ vs30: 0 }), PGA)).toThrow(/vs30/);
-    expect(() => bssa14.predict(input({ rakeDeg: Number.POSITIVE_INFINITY }), PGA)).toThrow(/rakeDeg/);
+    expect(() => bssa14.predict(input({ rakeDeg: Number.POSITIVE_INFINITY }), PGA)).toThrow(
+      /rakeDeg/,
+    );
   });
 
   it('describes itself for the registry', () => {
@@ -244,6 +334,10 @@ describe('BSSA14: properties', () => {
     expect(bssa14.distanceMetric).toBe('rjb');
     expect(bssa14.settings).toEqual(['crustal']);
     expect(bssa14.hasPga && bssa14.hasPgv).toBe(true);
-    expect(bssa14.validity).toEqual({ magnitude: [3, 8.5], distanceKm: [0, 400], vs30: [150, 1500] });
+    expect(bssa14.validity).toEqual({
+      magnitude: [3, 8.5],
+      distanceKm: [0, 400],
+      vs30: [150, 1500],
+    });
   });
 });

@@ -3,7 +3,14 @@ import { bssa14, predictBssa14, prepareBssa14 } from '../../../api/engine/motion
 import { createPairPredictions } from '../../../api/engine/motion/prepared-period.ts';
 import { expectClose } from '../../helpers/close.ts';
 import { pairColumns } from './prepared-checks.ts';
-import { expectFastPathMatchesVector, expectMatchesVector, readVectors, VECTOR_TOLERANCE, vectorInput, vectorMeasure } from './reference-vectors.ts';
+import {
+  expectFastPathMatchesVector,
+  expectMatchesVector,
+  readVectors,
+  VECTOR_TOLERANCE,
+  vectorInput,
+  vectorMeasure,
+} from './reference-vectors.ts';
 
 // Independent test vectors of Boore, Stewart, Seyhan & Atkinson (2014), computed by pygmm 0.8.0
 // from the published table with the revised f4 of 2014-07-15 (vectors/README.md): global
@@ -13,18 +20,39 @@ const vectors = readVectors('bssa14.json');
 const SOURCE = 'Boore et al. (2014), reference vectors (pygmm 0.8.0)';
 
 describe('BSSA14 against the reference vectors', () => {
-  it.each(vectors.cases.map((c) => [c.id, c] as const))('%s: ln median, τ, φ, σ within 1e-4', (_, c) => {
-    const unspecified = c.mechanism === 'unspecified';
-    const prediction = predictBssa14(vectorInput(c), vectorMeasure(c), unspecified ? { mechanism: 'unspecified' } : {});
-    expectMatchesVector(prediction, c, SOURCE);
-    if (!unspecified) {
-      expectFastPathMatchesVector(bssa14, c, SOURCE);
-    } else {
-      const input = vectorInput(c);
-      const out = createPairPredictions(1);
-      prepareBssa14([input], vectorMeasure(c), { mechanism: 'unspecified' }).predictPairs(input, pairColumns([{ rupture: input, distances: input }]), out);
-      expectClose(out.lnMedian[0]!, c.lnMedian, VECTOR_TOLERANCE, `${SOURCE}, case ${c.id}, fast path: ln median`);
-      expectClose(out.sigma[0]!, c.sigma, VECTOR_TOLERANCE, `${SOURCE}, case ${c.id}, fast path: sigma`);
-    }
-  });
+  it.each(vectors.cases.map((c) => [c.id, c] as const))(
+    '%s: ln median, τ, φ, σ within 1e-4',
+    (_, c) => {
+      const unspecified = c.mechanism === 'unspecified';
+      const prediction = predictBssa14(
+        vectorInput(c),
+        vectorMeasure(c),
+        unspecified ? { mechanism: 'unspecified' } : {},
+      );
+      expectMatchesVector(prediction, c, SOURCE);
+      if (!unspecified) {
+        expectFastPathMatchesVector(bssa14, c, SOURCE);
+      } else {
+        const input = vectorInput(c);
+        const out = createPairPredictions(1);
+        prepareBssa14([input], vectorMeasure(c), { mechanism: 'unspecified' }).predictPairs(
+          input,
+          pairColumns([{ rupture: input, distances: input }]),
+          out,
+        );
+        expectClose(
+          out.lnMedian[0]!,
+          c.lnMedian,
+          VECTOR_TOLERANCE,
+          `${SOURCE}, case ${c.id}, fast path: ln median`,
+        );
+        expectClose(
+          out.sigma[0]!,
+          c.sigma,
+          VECTOR_TOLERANCE,
+          `${SOURCE}, case ${c.id}, fast path: sigma`,
+        );
+      }
+    },
+  );
 });

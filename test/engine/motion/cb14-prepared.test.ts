@@ -8,19 +8,38 @@ import { checkPreparedMeasures, checkPreparedModel } from './prepared-checks.ts'
 const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 
 describe('CB14 precomputation hook', () => {
-  it('gives predict()\'s ln median, σ and applicability, within 1e-12: PGA, PGV, SA with and without the PGA floor, between rows', () => {
-    checkPreparedModel(cb14, [{ kind: 'PGA' }, { kind: 'PGV' }, sa(0.1), sa(0.12), sa(0.2), sa(1), sa(2.5)], ['crustal', 'crustal', 'intraslab']);
+  it("gives predict()'s ln median, σ and applicability, within 1e-12: PGA, PGV, SA with and without the PGA floor, between rows", () => {
+    checkPreparedModel(
+      cb14,
+      [{ kind: 'PGA' }, { kind: 'PGV' }, sa(0.1), sa(0.12), sa(0.2), sa(1), sa(2.5)],
+      ['crustal', 'crustal', 'intraslab'],
+    );
   });
 
-  it('prepared for several measures at once gives each measure\'s own numbers exactly (the shared rock motion and distance terms change none)', () => {
-    checkPreparedMeasures(cb14, [{ kind: 'PGA' }, sa(0.2), sa(1), { kind: 'PGV' }, sa(0.1), sa(0.12), sa(2.5)], ['crustal', 'crustal', 'intraslab']);
+  it("prepared for several measures at once gives each measure's own numbers exactly (the shared rock motion and distance terms change none)", () => {
+    checkPreparedMeasures(
+      cb14,
+      [{ kind: 'PGA' }, sa(0.2), sa(1), { kind: 'PGV' }, sa(0.1), sa(0.12), sa(2.5)],
+      ['crustal', 'crustal', 'intraslab'],
+    );
   });
 
   it('asks for Rrup, Rjb and Rx; refuses a bad dip and a period outside the table as predict does', () => {
     expect(cb14.prepare!([], { kind: 'PGA' }).distances).toEqual(['rrupKm', 'rjbKm', 'rxKm']);
     expect(() => cb14.prepare!([], sa(0.005))).toThrow(UnsupportedPeriod);
-    const rupture = { magnitude: 6, rakeDeg: 0, mechanism: 'strike-slip' as const, setting: 'crustal' as const, dipDeg: 0, ztorKm: 0, widthKm: 10, hypoDepthKm: 8 };
+    const rupture = {
+      magnitude: 6,
+      rakeDeg: 0,
+      mechanism: 'strike-slip' as const,
+      setting: 'crustal' as const,
+      dipDeg: 0,
+      ztorKm: 0,
+      widthKm: 10,
+      hypoDepthKm: 8,
+    };
     expect(() => cb14.prepare!([rupture], { kind: 'PGA' })).toThrow(InvalidInput);
-    expect(() => cb14.prepare!([rupture], { kind: 'PGA' })).toThrow(/dipDeg: expected a dip above 0° and at most 90°, got 0/);
+    expect(() => cb14.prepare!([rupture], { kind: 'PGA' })).toThrow(
+      /dipDeg: expected a dip above 0° and at most 90°, got 0/,
+    );
   });
 });

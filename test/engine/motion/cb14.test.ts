@@ -30,15 +30,38 @@ const rowAt = (periodS: number): Cb14Row => CB14_SA.find((r) => r.periodS === pe
 function input(over: Partial<GmmInput> = {}): GmmInput {
   const rrupKm = over.rrupKm ?? 10;
   return {
-    magnitude: 7, rakeDeg: 0, mechanism: 'strike-slip', setting: 'crustal', dipDeg: 90, ztorKm: 0, widthKm: 15,
-    hypoDepthKm: 7, rjbKm: rrupKm, rrupKm, rxKm: -rrupKm, ry0Km: 0, rhypoKm: Math.hypot(rrupKm, 7), repiKm: rrupKm,
-    vs30: 760, vs30Measured: true, ...over,
+    magnitude: 7,
+    rakeDeg: 0,
+    mechanism: 'strike-slip',
+    setting: 'crustal',
+    dipDeg: 90,
+    ztorKm: 0,
+    widthKm: 15,
+    hypoDepthKm: 7,
+    rjbKm: rrupKm,
+    rrupKm,
+    rxKm: -rrupKm,
+    ry0Km: 0,
+    rhypoKm: Math.hypot(rrupKm, 7),
+    repiKm: rrupKm,
+    vs30: 760,
+    vs30Measured: true,
+    ...over,
   };
 }
 const lnY = (over: Partial<GmmInput>, m: Measure): number => cb14.predict(input(over), m).lnMedian;
 
 const scenario = (over: Partial<Cb14Scenario> = {}): Cb14Scenario => ({
-  magnitude: 7, mechanism: 'reverse', rrupKm: 5, rjbKm: 0, rxKm: 5, ztorKm: 2, hypoDepthKm: 10, widthKm: 20, dipDeg: 45, ...over,
+  magnitude: 7,
+  mechanism: 'reverse',
+  rrupKm: 5,
+  rjbKm: 0,
+  rxKm: 5,
+  ztorKm: 2,
+  hypoDepthKm: 10,
+  widthKm: 20,
+  dipDeg: 45,
+  ...over,
 });
 
 describe('CB14: the equation', () => {
@@ -48,14 +71,24 @@ describe('CB14: the equation', () => {
     // f_mag = −4.416 + 0.984·7 + 0.537·2.5 − 1.499·1.5 − 0.496·0.5 = 1.31800;
     // f_dis = (−2.773 + 0.248·7) ln √(10² + 6.768²) = −2.58331;
     // f_site = (1.090 − 1.186·1.18) ln(1100/865) = −0.07438; ln PGA = −1.33969 (0.2619 g).
-    expectClose(lnY({ vs30: 1100, z2p5Km: 2 }, PGA), -1.33969, 1e-5, `${SOURCE}: ln PGA, hand calculation`);
+    expectClose(
+      lnY({ vs30: 1100, z2p5Km: 2 }, PGA),
+      -1.33969,
+      1e-5,
+      `${SOURCE}: ln PGA, hand calculation`,
+    );
   });
 
   it('reproduces a hand calculation of the hanging-wall term', () => {
     // PGA row, M 7, dip 45°, W 20 km, Ztor 2 km, Rx 5 km, Rjb 0: R1 = 14.1421 km, x = 0.353553,
     // f_Rx = 0.241 + 1.474x − 0.715x² = 0.672763; f_Rrup = 1; f_M = 1 + 0.167·0.5 = 1.0835;
     // f_Z = 1 − 0.06·2 = 0.88; f_δ = 1; f_hng = 0.72 · … = 0.461855.
-    expectClose(cb14HangingWallTerm(CB14_PGA, scenario()), 0.461855, 1e-6, `${SOURCE}: f_hng, hand calculation`);
+    expectClose(
+      cb14HangingWallTerm(CB14_PGA, scenario()),
+      0.461855,
+      1e-6,
+      `${SOURCE}: f_hng, hand calculation`,
+    );
     // Beyond R1 (Rx 30 km, R2 = 62·7 − 350 = 84 km): x = 0.227002, f_Rx = 1 − 0.337x − 0.270x² = 0.909587;
     // with Rrup 31, Rjb 29: f_Rrup = 2/31; f_hng = 0.040286.
     expectClose(
@@ -68,7 +101,12 @@ describe('CB14: the equation', () => {
 
   it('has no hanging-wall effect on the footwall, for vertical faults, small events or deep tops', () => {
     for (const over of [{ rxKm: -1 }, { dipDeg: 90 }, { magnitude: 5.5 }, { ztorKm: 17 }]) {
-      expectClose(cb14HangingWallTerm(CB14_PGA, scenario(over)), 0, 0, `${SOURCE}: f_hng zero for ${JSON.stringify(over)}`);
+      expectClose(
+        cb14HangingWallTerm(CB14_PGA, scenario(over)),
+        0,
+        0,
+        `${SOURCE}: f_hng zero for ${JSON.stringify(over)}`,
+      );
     }
   });
 
@@ -76,28 +114,57 @@ describe('CB14: the equation', () => {
     // Campbell & Bozorgnia (2014) site term (from memory): both branches vanish at Vs30 = k1; above k1 the term
     // is (c11 + k2 n) ln(Vs30/k1): at 1 s and 760 m/s (1.447 − 1.955·1.18) ln(760/400) = −0.551930.
     for (const row of [CB14_PGA, ...CB14_SA]) {
-      for (const a1100G of [0.01, 0.3, 1.2]) expectClose(cb14SiteTerm(row, row.k1, a1100G), 0, 1e-15, `${SOURCE}: f_site at k1, ${row.periodS} s`);
+      for (const a1100G of [0.01, 0.3, 1.2])
+        expectClose(
+          cb14SiteTerm(row, row.k1, a1100G),
+          0,
+          1e-15,
+          `${SOURCE}: f_site at k1, ${row.periodS} s`,
+        );
     }
-    expectClose(cb14SiteTerm(rowAt(1), 760, 0.2), -0.55193, 1e-5, `${SOURCE}: f_site above k1, hand calculation`);
+    expectClose(
+      cb14SiteTerm(rowAt(1), 760, 0.2),
+      -0.55193,
+      1e-5,
+      `${SOURCE}: f_site above k1, hand calculation`,
+    );
   });
 
   it('reduces soft-soil amplification under strong rock shaking (nonlinear site response)', () => {
     // Campbell & Bozorgnia (2014), after Walling et al. (2008): on Vs30 = 200 m/s the PGA site
     // term falls as A1100 grows.
     expect(cb14SiteTerm(CB14_PGA, 200, 0.6)).toBeLessThan(cb14SiteTerm(CB14_PGA, 200, 0.05) - 0.3);
-    const amplification = (over: Partial<GmmInput>): number => lnY({ ...over, vs30: 200 }, PGA) - lnY({ ...over, vs30: 1100 }, PGA);
-    expect(amplification({ magnitude: 7.5, rrupKm: 1 })).toBeLessThan(amplification({ magnitude: 5, rrupKm: 100 }) - 0.3);
+    const amplification = (over: Partial<GmmInput>): number =>
+      lnY({ ...over, vs30: 200 }, PGA) - lnY({ ...over, vs30: 1100 }, PGA);
+    expect(amplification({ magnitude: 7.5, rrupKm: 1 })).toBeLessThan(
+      amplification({ magnitude: 5, rrupKm: 100 }) - 0.3,
+    );
   });
 
-  it('uses the paper\'s default Z2.5 and basin, depth and dip terms', () => {
+  it("uses the paper's default Z2.5 and basin, depth and dip terms", () => {
     // ln Z2.5 = 7.089 − 1.144 ln Vs30 (California; from memory): 0.606824 km at 760 m/s.
     expectClose(cb14DefaultZ2p5Km(760), 0.606824, 1e-6, `${SOURCE}: default Z2.5 at 760 m/s`);
-    expectClose(cb14BasinTerm(CB14_PGA, 0.5), -0.0064 * -0.5, 1e-15, `${SOURCE}: f_sed, shallow sediment`);
+    expectClose(
+      cb14BasinTerm(CB14_PGA, 0.5),
+      -0.0064 * -0.5,
+      1e-15,
+      `${SOURCE}: f_sed, shallow sediment`,
+    );
     expectClose(cb14BasinTerm(CB14_PGA, 2), 0, 0, `${SOURCE}: f_sed between 1 and 3 km`);
     expect(cb14BasinTerm(rowAt(3), 6)).toBeGreaterThan(0);
     expectClose(cb14HypocentreTerm(CB14_PGA, 7, 5), 0, 0, `${SOURCE}: f_hyp above 7 km`);
-    expectClose(cb14HypocentreTerm(CB14_PGA, 7, 25), 13 * 0.0333, 1e-12, `${SOURCE}: f_hyp capped at 20 km (13 × c18)`);
-    expectClose(cb14HypocentreTerm(CB14_PGA, 6, 10), 3 * (0.0977 + (0.0333 - 0.0977) * 0.5), 1e-12, `${SOURCE}: f_hyp,M ramp`);
+    expectClose(
+      cb14HypocentreTerm(CB14_PGA, 7, 25),
+      13 * 0.0333,
+      1e-12,
+      `${SOURCE}: f_hyp capped at 20 km (13 × c18)`,
+    );
+    expectClose(
+      cb14HypocentreTerm(CB14_PGA, 6, 10),
+      3 * (0.0977 + (0.0333 - 0.0977) * 0.5),
+      1e-12,
+      `${SOURCE}: f_hyp,M ramp`,
+    );
     expectClose(cb14DipTerm(CB14_PGA, 5, 60), 0.00757 * 0.5 * 60, 1e-12, `${SOURCE}: f_dip at M 5`);
     expectClose(cb14DipTerm(CB14_PGA, 6, 60), 0, 0, `${SOURCE}: f_dip above M 5.5`);
   });
@@ -111,7 +178,9 @@ describe('CB14: the equation', () => {
         fc.constantFrom(0.01, 0.02, 0.03, 0.05, 0.1, 0.2),
         fc.constantFrom(180, 400, 760, 1500),
         (magnitude, rrupKm, periodS, vs30) => {
-          expect(lnY({ magnitude, rrupKm, vs30 }, sa(periodS))).toBeGreaterThanOrEqual(lnY({ magnitude, rrupKm, vs30 }, PGA));
+          expect(lnY({ magnitude, rrupKm, vs30 }, sa(periodS))).toBeGreaterThanOrEqual(
+            lnY({ magnitude, rrupKm, vs30 }, PGA),
+          );
         },
       ),
       { seed: 20140302, numRuns: 200 },
@@ -120,7 +189,7 @@ describe('CB14: the equation', () => {
 });
 
 describe('CB14: mechanism', () => {
-  it('classifies rake by the paper\'s ranges', () => {
+  it("classifies rake by the paper's ranges", () => {
     expect(cb14MechanismFromRake(0)).toBe('strike-slip');
     expect(cb14MechanismFromRake(150)).toBe('strike-slip');
     expect(cb14MechanismFromRake(100)).toBe('reverse');
@@ -131,13 +200,25 @@ describe('CB14: mechanism', () => {
     // Campbell & Bozorgnia (2014), Table 1: c8 = 0, so reverse equals strike-slip
     // away from the hanging wall; c9 < 0 up to 2 s makes normal lower, c9 = 0 from 3 s on.
     for (const m of [PGA, PGV, sa(0.2), sa(1), sa(2)]) {
-      expectClose(lnY({ rakeDeg: 90 }, m), lnY({ rakeDeg: 0 }, m), 0, `${SOURCE}: reverse = strike-slip off the hanging wall`);
+      expectClose(
+        lnY({ rakeDeg: 90 }, m),
+        lnY({ rakeDeg: 0 }, m),
+        0,
+        `${SOURCE}: reverse = strike-slip off the hanging wall`,
+      );
       expect(lnY({ rakeDeg: -90 }, m)).toBeLessThan(lnY({ rakeDeg: 0 }, m));
     }
-    expectClose(lnY({ rakeDeg: -90 }, sa(3)), lnY({ rakeDeg: 0 }, sa(3)), 0, `${SOURCE}: c9 = 0 at 3 s`);
+    expectClose(
+      lnY({ rakeDeg: -90 }, sa(3)),
+      lnY({ rakeDeg: 0 }, sa(3)),
+      0,
+      `${SOURCE}: c9 = 0 at 3 s`,
+    );
     // A dipping reverse rupture is stronger over its hanging wall than at the same Rrup on its footwall.
     const dipping = { rakeDeg: 90, dipDeg: 40, ztorKm: 2, rrupKm: 8, rjbKm: 3 };
-    expect(lnY({ ...dipping, rxKm: 6 }, PGA)).toBeGreaterThan(lnY({ ...dipping, rxKm: -6 }, PGA) + 0.1);
+    expect(lnY({ ...dipping, rxKm: 6 }, PGA)).toBeGreaterThan(
+      lnY({ ...dipping, rxKm: -6 }, PGA) + 0.1,
+    );
   });
 });
 
@@ -160,7 +241,12 @@ describe('CB14: standard deviations', () => {
       expectClose(small.phi, phi1, 1e-12, `${SOURCE}: φ1`);
     }
     // τ at M 5 is halfway between τ1 and τ2 (the paper's τ(M) ramp, from memory).
-    expectClose(cb14Sigma(CB14_PGA, 5, 1100, 0.1).tau, (0.409 + 0.322) / 2, 1e-12, `${SOURCE}: τ(M 5), PGA`);
+    expectClose(
+      cb14Sigma(CB14_PGA, 5, 1100, 0.1).tau,
+      (0.409 + 0.322) / 2,
+      1e-12,
+      `${SOURCE}: τ(M 5), PGA`,
+    );
   });
 
   it('narrows PGA scatter on soft soil under strong shaking', () => {
@@ -186,7 +272,12 @@ describe('CB14: medians against published figures', () => {
   ];
   for (const [label, over, m, expected] of cases) {
     it(label, () => {
-      expectRelative(Math.exp(lnY(over, m)), expected, 0.3, `Campbell & Bozorgnia (2014) / Gregor et al. (2014) figures, ${label} (from memory)`);
+      expectRelative(
+        Math.exp(lnY(over, m)),
+        expected,
+        0.3,
+        `Campbell & Bozorgnia (2014) / Gregor et al. (2014) figures, ${label} (from memory)`,
+      );
     });
   }
 
@@ -199,7 +290,10 @@ describe('CB14: medians against published figures', () => {
         for (const m of [PGA, PGV, sa(0.2), sa(1)]) {
           const over = { magnitude, rrupKm: distanceKm, rjbKm: distanceKm, hypoDepthKm: 8 };
           const ratio = Math.exp(lnY(over, m) - bssa14.predict(input(over), m).lnMedian);
-          expect(ratio > 1 / 1.5 && ratio < 1.5, `M ${magnitude}, ${distanceKm} km, ${m.kind}: CB14/BSSA14 = ${ratio.toFixed(3)}`).toBe(true);
+          expect(
+            ratio > 1 / 1.5 && ratio < 1.5,
+            `M ${magnitude}, ${distanceKm} km, ${m.kind}: CB14/BSSA14 = ${ratio.toFixed(3)}`,
+          ).toBe(true);
         }
       }
     }
@@ -212,11 +306,30 @@ describe('CB14: medians against published figures', () => {
     for (const magnitude of [5, 6, 7, 8]) {
       for (const rrupKm of [3, 10, 50, 150]) {
         for (const vs30 of [180, 300, 760]) {
-          for (const [rakeDeg, dipDeg, rxKm] of [[0, 90, -rrupKm], [90, 45, rrupKm + 5], [-90, 60, -rrupKm]] as const) {
-            const over = { magnitude, rrupKm, rjbKm: Math.max(rrupKm - 3, 0), vs30, rakeDeg, dipDeg, rxKm, ztorKm: 2 };
+          for (const [rakeDeg, dipDeg, rxKm] of [
+            [0, 90, -rrupKm],
+            [90, 45, rrupKm + 5],
+            [-90, 60, -rrupKm],
+          ] as const) {
+            const over = {
+              magnitude,
+              rrupKm,
+              rjbKm: Math.max(rrupKm - 3, 0),
+              vs30,
+              rakeDeg,
+              dipDeg,
+              rxKm,
+              ztorKm: 2,
+            };
             const values = CB14_SA.map((r) => lnY(over, sa(r.periodS)));
-            const kink = worstKink(CB14_SA.map((r) => r.periodS), values);
-            expect(kink.residual <= 0.25, `${JSON.stringify(over)}: ${kink.residual.toFixed(3)} at ${kink.periodS} s`).toBe(true);
+            const kink = worstKink(
+              CB14_SA.map((r) => r.periodS),
+              values,
+            );
+            expect(
+              kink.residual <= 0.25,
+              `${JSON.stringify(over)}: ${kink.residual.toFixed(3)} at ${kink.periodS} s`,
+            ).toBe(true);
           }
         }
       }
@@ -238,8 +351,12 @@ describe('CB14: properties', () => {
         fc.double({ min: 0.05, max: 0.5, noNaN: true }),
         fc.constantFrom(...measures),
         (magnitude, rrupKm, stepKm, stepM, m) => {
-          expect(lnY({ magnitude, rrupKm: rrupKm + stepKm }, m)).toBeLessThan(lnY({ magnitude, rrupKm }, m));
-          expect(lnY({ magnitude: magnitude + stepM, rrupKm }, m)).toBeGreaterThan(lnY({ magnitude, rrupKm }, m));
+          expect(lnY({ magnitude, rrupKm: rrupKm + stepKm }, m)).toBeLessThan(
+            lnY({ magnitude, rrupKm }, m),
+          );
+          expect(lnY({ magnitude: magnitude + stepM, rrupKm }, m)).toBeGreaterThan(
+            lnY({ magnitude, rrupKm }, m),
+          );
         },
       ),
       { seed: 20140303, numRuns: 300 },
@@ -251,18 +368,39 @@ describe('CB14: properties', () => {
     const lo = cb14.predict(input(), sa(0.5));
     const hi = cb14.predict(input(), sa(0.75));
     const w = Math.log(0.6 / 0.5) / Math.log(0.75 / 0.5);
-    expectClose(between.lnMedian, lo.lnMedian + (hi.lnMedian - lo.lnMedian) * w, 1e-12, 'interpolate-period.ts rule (common practice)');
-    expectClose(between.sigma, lo.sigma + (hi.sigma - lo.sigma) * w, 1e-12, 'interpolate-period.ts rule (common practice)');
+    expectClose(
+      between.lnMedian,
+      lo.lnMedian + (hi.lnMedian - lo.lnMedian) * w,
+      1e-12,
+      'interpolate-period.ts rule (common practice)',
+    );
+    expectClose(
+      between.sigma,
+      lo.sigma + (hi.sigma - lo.sigma) * w,
+      1e-12,
+      'interpolate-period.ts rule (common practice)',
+    );
     expect(between.lnMedian).toBeLessThan(Math.max(lo.lnMedian, hi.lnMedian));
     expect(between.lnMedian).toBeGreaterThan(Math.min(lo.lnMedian, hi.lnMedian));
-    expect(cb14.predict(input(), sa(1)).lnMedian).toBe(cb14.predict(input(), sa(1 + 1e-9)).lnMedian);
+    expect(cb14.predict(input(), sa(1)).lnMedian).toBe(
+      cb14.predict(input(), sa(1 + 1e-9)).lnMedian,
+    );
   });
 
   it('answers outside its validity with applicable false and finite numbers', () => {
     const outside: Partial<GmmInput>[] = [
-      { magnitude: 9 }, { magnitude: 3 }, { magnitude: 8.2, rakeDeg: 90, dipDeg: 45 }, { magnitude: 7.7, rakeDeg: -90, dipDeg: 60 },
-      { rrupKm: 350 }, { vs30: 120 }, { vs30: 1800 }, { hypoDepthKm: 25 }, { ztorKm: 22 }, { dipDeg: 10 },
-      { z2p5Km: 12 }, { setting: 'intraslab' },
+      { magnitude: 9 },
+      { magnitude: 3 },
+      { magnitude: 8.2, rakeDeg: 90, dipDeg: 45 },
+      { magnitude: 7.7, rakeDeg: -90, dipDeg: 60 },
+      { rrupKm: 350 },
+      { vs30: 120 },
+      { vs30: 1800 },
+      { hypoDepthKm: 25 },
+      { ztorKm: 22 },
+      { dipDeg: 10 },
+      { z2p5Km: 12 },
+      { setting: 'intraslab' },
     ];
     for (const over of outside) {
       for (const m of measures) {

@@ -8,9 +8,30 @@ import { CB14_COLUMNS, CB14_ROWS } from '../../../api/engine/motion/cb14-coeffic
 // The numbers themselves are checked through the models against the independent reference
 // vectors (<model>.vectors.test.ts), never against the table itself.
 const TABLES = [
-  { name: 'BSSA14 (Boore et al. 2014, supplement, revised 2014-07-15)', rows: BSSA14_ROWS, columns: BSSA14_COLUMNS, count: 107, first: -1, last: 10 },
-  { name: 'CB14 (Campbell & Bozorgnia 2014, Tables 1 and 2)', rows: CB14_ROWS, columns: CB14_COLUMNS, count: 23, first: -1, last: 10 },
-  { name: 'AGA16 (Abrahamson et al. 2016, Table 3)', rows: AGA16_ROWS, columns: AGA16_COLUMNS, count: 23, first: 0, last: 10 },
+  {
+    name: 'BSSA14 (Boore et al. 2014, supplement, revised 2014-07-15)',
+    rows: BSSA14_ROWS,
+    columns: BSSA14_COLUMNS,
+    count: 107,
+    first: -1,
+    last: 10,
+  },
+  {
+    name: 'CB14 (Campbell & Bozorgnia 2014, Tables 1 and 2)',
+    rows: CB14_ROWS,
+    columns: CB14_COLUMNS,
+    count: 23,
+    first: -1,
+    last: 10,
+  },
+  {
+    name: 'AGA16 (Abrahamson et al. 2016, Table 3)',
+    rows: AGA16_ROWS,
+    columns: AGA16_COLUMNS,
+    count: 23,
+    first: 0,
+    last: 10,
+  },
 ] as const;
 
 describe('published coefficient tables: shape', () => {
@@ -20,9 +41,13 @@ describe('published coefficient tables: shape', () => {
       expect(table.rows[0]!.periodS).toBe(table.first);
       expect(table.rows.at(-1)!.periodS).toBe(table.last);
       table.rows.forEach((row, i) => {
-        if (i > 0) expect(row.periodS, `${table.name} row ${i}`).toBeGreaterThan(table.rows[i - 1]!.periodS);
+        if (i > 0)
+          expect(row.periodS, `${table.name} row ${i}`).toBeGreaterThan(table.rows[i - 1]!.periodS);
         for (const column of table.columns) {
-          expect(Number.isFinite((row as Record<string, number>)[column]), `${table.name} period ${row.periodS} ${column}`).toBe(true);
+          expect(
+            Number.isFinite((row as Record<string, number>)[column]),
+            `${table.name} period ${row.periodS} ${column}`,
+          ).toBe(true);
         }
       });
     });

@@ -5,7 +5,7 @@ import { checkPreparedModel } from './prepared-checks.ts';
 
 // The hook's numbers against predict() (cornell79.ts); predict() itself is checked by hand arithmetic in cornell79.test.ts.
 describe('Cornell79 precomputation hook', () => {
-  it('gives predict()\'s ln PGA, σ and applicability, within 1e-12', () => {
+  it("gives predict()'s ln PGA, σ and applicability, within 1e-12", () => {
     checkPreparedModel(cornell79, [{ kind: 'PGA' }], ['crustal']);
   });
 

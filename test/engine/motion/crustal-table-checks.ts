@@ -15,7 +15,9 @@ export interface Kink {
 export function worstKink(periodsS: readonly number[], values: readonly number[]): Kink {
   let worst: Kink = { residual: 0, periodS: Number.NaN };
   for (let i = 1; i + 1 < values.length; i++) {
-    const [x0, x1, x2] = [periodsS[i - 1], periodsS[i], periodsS[i + 1]].map((p) => Math.log(p as number)) as [number, number, number];
+    const [x0, x1, x2] = [periodsS[i - 1], periodsS[i], periodsS[i + 1]].map((p) =>
+      Math.log(p as number),
+    ) as [number, number, number];
     const [v0, v1, v2] = [values[i - 1], values[i], values[i + 1]] as [number, number, number];
     const chord = v0 + ((v2 - v0) * (x1 - x0)) / (x2 - x0);
     const residual = Math.abs(v1 - chord);
@@ -28,5 +30,7 @@ export function worstKink(periodsS: readonly number[], values: readonly number[]
 export function relativeKink(periodsS: readonly number[], values: readonly number[]): Kink {
   const range = Math.max(...values) - Math.min(...values);
   const kink = worstKink(periodsS, values);
-  return range === 0 ? { residual: 0, periodS: kink.periodS } : { residual: kink.residual / range, periodS: kink.periodS };
+  return range === 0
+    ? { residual: 0, periodS: kink.periodS }
+    : { residual: kink.residual / range, periodS: kink.periodS };
 }

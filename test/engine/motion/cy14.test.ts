@@ -2,7 +2,13 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { runCli } from '../../../api/cli.ts';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
-import { CY14_COLUMNS, CY14_PGA, CY14_PGV, CY14_SA, type Cy14Row } from '../../../api/engine/motion/cy14-coefficients.ts';
+import {
+  CY14_COLUMNS,
+  CY14_PGA,
+  CY14_PGV,
+  CY14_SA,
+  type Cy14Row,
+} from '../../../api/engine/motion/cy14-coefficients.ts';
 import {
   cy14,
   cy14DefaultZ1Km,
@@ -41,9 +47,23 @@ const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 function input(over: Partial<GmmInput> = {}): GmmInput {
   const rrupKm = over.rrupKm ?? 10;
   return {
-    magnitude: 7, rakeDeg: 0, mechanism: 'strike-slip', setting: 'crustal', dipDeg: 90, ztorKm: 0, widthKm: 15,
-    hypoDepthKm: 8, rjbKm: rrupKm, rrupKm, rxKm: -rrupKm, ry0Km: 0, rhypoKm: Math.hypot(rrupKm, 8), repiKm: rrupKm,
-    vs30: 760, vs30Measured: true, ...over,
+    magnitude: 7,
+    rakeDeg: 0,
+    mechanism: 'strike-slip',
+    setting: 'crustal',
+    dipDeg: 90,
+    ztorKm: 0,
+    widthKm: 15,
+    hypoDepthKm: 8,
+    rjbKm: rrupKm,
+    rrupKm,
+    rxKm: -rrupKm,
+    ry0Km: 0,
+    rhypoKm: Math.hypot(rrupKm, 8),
+    repiKm: rrupKm,
+    vs30: 760,
+    vs30Measured: true,
+    ...over,
   };
 }
 const lnY = (over: Partial<GmmInput>, m: Measure): number => cy14.predict(input(over), m).lnMedian;
@@ -57,24 +77,37 @@ describe('CY14: the reference vectors', () => {
     expect(new Set(VECTORS.cases.map((c) => c.vs30Measured))).toEqual(new Set([true, false]));
   });
 
-  it.each(VECTORS.cases.map((c) => [c.id, c.measure, c] as const))('%s %s: ln median, τ, φ, σ within 1e-4', (id, _measure, c) => {
-    const p = cy14.predict(inputOf(c), measureOf(c));
-    expectClose(p.lnMedian, c.lnMedian, TOLERANCE, `${SOURCE} ${id} ln median`);
-    expectClose(p.tau, c.tau, TOLERANCE, `${SOURCE} ${id} τ`);
-    expectClose(p.phi, c.phi, TOLERANCE, `${SOURCE} ${id} φ`);
-    expectClose(p.sigma, c.sigma, TOLERANCE, `${SOURCE} ${id} σ`);
-  });
+  it.each(VECTORS.cases.map((c) => [c.id, c.measure, c] as const))(
+    '%s %s: ln median, τ, φ, σ within 1e-4',
+    (id, _measure, c) => {
+      const p = cy14.predict(inputOf(c), measureOf(c));
+      expectClose(p.lnMedian, c.lnMedian, TOLERANCE, `${SOURCE} ${id} ln median`);
+      expectClose(p.tau, c.tau, TOLERANCE, `${SOURCE} ${id} τ`);
+      expectClose(p.phi, c.phi, TOLERANCE, `${SOURCE} ${id} φ`);
+      expectClose(p.sigma, c.sigma, TOLERANCE, `${SOURCE} ${id} σ`);
+    },
+  );
 
-  it('gives the same numbers with the vectors\' Z1 passed in (it is the paper\'s default)', () => {
+  it("gives the same numbers with the vectors' Z1 passed in (it is the paper's default)", () => {
     for (const c of VECTORS.cases) {
       expect(c.z1Km).not.toBeNull();
       // The file writes Z1 rounded to 1e-6 km (1 mm of the 300 m scale φ6).
-      expectClose(cy14DefaultZ1Km(c.vs30), c.z1Km as number, 1e-6, `${SOURCE} ${c.id} default Z1(Vs30)`);
-      expectClose(cy14.predict(inputOf(c, 'given'), measureOf(c)).lnMedian, c.lnMedian, TOLERANCE, `${SOURCE} ${c.id} with Z1 given`);
+      expectClose(
+        cy14DefaultZ1Km(c.vs30),
+        c.z1Km as number,
+        1e-6,
+        `${SOURCE} ${c.id} default Z1(Vs30)`,
+      );
+      expectClose(
+        cy14.predict(inputOf(c, 'given'), measureOf(c)).lnMedian,
+        c.lnMedian,
+        TOLERANCE,
+        `${SOURCE} ${c.id} with Z1 given`,
+      );
     }
   });
 
-  it('classes every case\'s rake as the vectors do', () => {
+  it("classes every case's rake as the vectors do", () => {
     for (const c of VECTORS.cases) expect(cy14MechanismFromRake(c.rakeDeg), c.id).toBe(c.mechanism);
   });
 });
@@ -89,7 +122,8 @@ describe('CY14: the coefficient table', () => {
     expect(periods.length).toBe(24);
     expect(periods[0]).toBe(0.01);
     expect(periods[periods.length - 1]).toBe(10);
-    for (let i = 1; i < periods.length; i++) expect(periods[i] as number).toBeGreaterThan(periods[i - 1] as number);
+    for (let i = 1; i < periods.length; i++)
+      expect(periods[i] as number).toBeGreaterThan(periods[i - 1] as number);
     expect(cy14.periodsS).toEqual(periods);
   });
 
@@ -97,7 +131,8 @@ describe('CY14: the coefficient table', () => {
     expect(CY14_COLUMNS.length).toBe(45);
     for (const row of rows) {
       expect(Object.keys(row).sort()).toEqual(['periodS', ...CY14_COLUMNS].sort());
-      for (const column of CY14_COLUMNS) expect(Number.isFinite(row[column]), `${column} at ${row.periodS} s`).toBe(true);
+      for (const column of CY14_COLUMNS)
+        expect(Number.isFinite(row[column]), `${column} at ${row.periodS} s`).toBe(true);
     }
   });
 
@@ -108,40 +143,85 @@ describe('CY14: the coefficient table', () => {
 });
 
 describe('CY14: the equation by hand', () => {
-  it('takes the paper\'s expected Ztor for the mechanism', () => {
+  it("takes the paper's expected Ztor for the mechanism", () => {
     // Chiou & Youngs (2014): E[Ztor] = max(2.704 − 1.226 max(M − 5.849, 0), 0)² reverse,
     // max(2.673 − 1.136 max(M − 4.970, 0), 0)² otherwise (km); values by hand.
-    expectClose(cy14ExpectedZtorKm(6, 'reverse'), 6.344726, 1e-6, 'CY14 E[Ztor] reverse M 6, by hand');
-    expectClose(cy14ExpectedZtorKm(6, 'strike-slip'), 2.258769, 1e-6, 'CY14 E[Ztor] strike-slip M 6, by hand');
-    expectClose(cy14ExpectedZtorKm(8, 'reverse'), 0.004472, 1e-6, 'CY14 E[Ztor] reverse M 8, by hand');
-    expectClose(cy14ExpectedZtorKm(4.5, 'normal'), 7.144929, 1e-6, 'CY14 E[Ztor] normal M 4.5, by hand');
+    expectClose(
+      cy14ExpectedZtorKm(6, 'reverse'),
+      6.344726,
+      1e-6,
+      'CY14 E[Ztor] reverse M 6, by hand',
+    );
+    expectClose(
+      cy14ExpectedZtorKm(6, 'strike-slip'),
+      2.258769,
+      1e-6,
+      'CY14 E[Ztor] strike-slip M 6, by hand',
+    );
+    expectClose(
+      cy14ExpectedZtorKm(8, 'reverse'),
+      0.004472,
+      1e-6,
+      'CY14 E[Ztor] reverse M 8, by hand',
+    );
+    expectClose(
+      cy14ExpectedZtorKm(4.5, 'normal'),
+      7.144929,
+      1e-6,
+      'CY14 E[Ztor] normal M 4.5, by hand',
+    );
     expect(cy14ExpectedZtorKm(9, 'strike-slip')).toBe(0);
   });
 
-  it('has no site term at and above the reference Vs30 of 1130 m/s, and the table\'s σ there', () => {
+  it("has no site term at and above the reference Vs30 of 1130 m/s, and the table's σ there", () => {
     expectClose(cy14SiteTerm(CY14_PGA, 1130, 0.3, undefined), 0, 0, 'CY14 site term at 1130 m/s');
-    expectClose(cy14SiteTerm(CY14_PGA, 1500, 0.3, undefined), 0, 0, 'CY14 site term above 1130 m/s');
+    expectClose(
+      cy14SiteTerm(CY14_PGA, 1500, 0.3, undefined),
+      0,
+      0,
+      'CY14 site term above 1130 m/s',
+    );
     expectClose(cy14SiteSlope(CY14_PGA, 1500, 0.3), 0, 0, 'CY14 NL0 above 1130 m/s');
     expect(lnY({ vs30: 1500 }, PGA)).toBe(lnY({ vs30: 1130 }, PGA));
     // M 5 is the small-event end of the ramp: τ = τ1 = 0.4, φ = σ1 √(0.7 + 1) = 0.4912 · √1.7 (measured Vs30).
     const p = cy14.predict(input({ magnitude: 5, vs30: 1200 }), PGA);
     expectClose(p.tau, 0.4, 1e-12, 'CY14 τ1 of PGA, by hand');
     expectClose(p.phi, 0.640446444, 1e-9, 'CY14 σ_NL0 of PGA at M 5, measured, by hand');
-    expectClose(cy14.predict(input({ magnitude: 5, vs30: 1200, vs30Measured: false }), PGA).phi, 0.659013954, 1e-9, 'CY14 σ_NL0, inferred (σ3 0.8), by hand');
+    expectClose(
+      cy14.predict(input({ magnitude: 5, vs30: 1200, vs30Measured: false }), PGA).phi,
+      0.659013954,
+      1e-9,
+      'CY14 σ_NL0, inferred (σ3 0.8), by hand',
+    );
   });
 
   it('has no basin term at the default Z1 and deepens long periods in a deeper basin', () => {
     const row = CY14_SA.find((r) => r.periodS === 3) as Cy14Row;
     const at = cy14SiteTerm(row, 400, 0.05, undefined);
-    expectClose(cy14SiteTerm(row, 400, 0.05, cy14DefaultZ1Km(400)), at, 1e-12, 'CY14 ΔZ1 = 0 at the default');
+    expectClose(
+      cy14SiteTerm(row, 400, 0.05, cy14DefaultZ1Km(400)),
+      at,
+      1e-12,
+      'CY14 ΔZ1 = 0 at the default',
+    );
     // φ5 (1 − e^(−ΔZ1/φ6)) with ΔZ1 = 500 m − μZ1, by hand from the formula.
     const deltaZ1M = 500 - cy14DefaultZ1Km(400) * 1000;
-    expectClose(cy14SiteTerm(row, 400, 0.05, 0.5) - at, row.phi5 * (1 - Math.exp(-deltaZ1M / row.phi6)), 1e-12, 'CY14 basin term, by hand');
+    expectClose(
+      cy14SiteTerm(row, 400, 0.05, 0.5) - at,
+      row.phi5 * (1 - Math.exp(-deltaZ1M / row.phi6)),
+      1e-12,
+      'CY14 basin term, by hand',
+    );
     expect(lnY({ vs30: 400, z1Km: 0.8 }, sa(3))).toBeGreaterThan(lnY({ vs30: 400 }, sa(3)));
   });
 
   it('keeps the rupture terms and the pair terms apart', () => {
-    const terms = cy14RuptureTerms(CY14_PGA, { magnitude: 6.5, mechanism: 'reverse', dipDeg: 60, ztorKm: 2 });
+    const terms = cy14RuptureTerms(CY14_PGA, {
+      magnitude: 6.5,
+      mechanism: 'reverse',
+      dipDeg: 60,
+      ztorKm: 2,
+    });
     expect(terms.row).toBe(CY14_PGA);
     expectClose(terms.hangingWall, CY14_PGA.c9 * 0.5, 1e-12, 'c9 cos δ at 60°');
     expectClose(terms.tau, CY14_PGA.tau2, 1e-12, 'CY14 τ at the large-event end (M ≥ 6.5)');
@@ -161,8 +241,12 @@ describe('CY14: properties', () => {
         fc.constantFrom(200, 400, 760),
         fc.constantFrom(...measures),
         (magnitude, rrupKm, stepKm, stepM, vs30, m) => {
-          expect(lnY({ magnitude, rrupKm: rrupKm + stepKm, vs30 }, m)).toBeLessThan(lnY({ magnitude, rrupKm, vs30 }, m));
-          expect(lnY({ magnitude: magnitude + stepM, rrupKm, vs30 }, m)).toBeGreaterThan(lnY({ magnitude, rrupKm, vs30 }, m));
+          expect(lnY({ magnitude, rrupKm: rrupKm + stepKm, vs30 }, m)).toBeLessThan(
+            lnY({ magnitude, rrupKm, vs30 }, m),
+          );
+          expect(lnY({ magnitude: magnitude + stepM, rrupKm, vs30 }, m)).toBeGreaterThan(
+            lnY({ magnitude, rrupKm, vs30 }, m),
+          );
         },
       ),
       { seed: 20140802, numRuns: 300 },
@@ -172,13 +256,22 @@ describe('CY14: properties', () => {
   it('is higher on the hanging wall of a dipping reverse fault than on the footwall', () => {
     // M 7, dip 45°, Ztor 2 km, W 20 km. Hanging wall at Rx 10 km (above the rupture: Rjb 0, Rrup
     // (10 + 2)/√2); footwall at Rx −10 km (Rjb 10, Rrup √(10² + 2²)).
-    const fault = { magnitude: 7, rakeDeg: 90, mechanism: 'reverse' as const, dipDeg: 45, ztorKm: 2, widthKm: 20 };
+    const fault = {
+      magnitude: 7,
+      rakeDeg: 90,
+      mechanism: 'reverse' as const,
+      dipDeg: 45,
+      ztorKm: 2,
+      widthKm: 20,
+    };
     const hanging = input({ ...fault, rxKm: 10, rjbKm: 0, rrupKm: 12 / Math.SQRT2 });
     const foot = input({ ...fault, rxKm: -10, rjbKm: 10, rrupKm: Math.hypot(10, 2) });
     for (const m of [PGA, PGV, sa(0.2), sa(1), sa(3)]) {
       expect(cy14.predict(hanging, m).lnMedian).toBeGreaterThan(cy14.predict(foot, m).lnMedian);
       // The same distances on either side: the difference is the hanging-wall term alone, and positive.
-      expect(cy14.predict(hanging, m).lnMedian).toBeGreaterThan(cy14.predict({ ...hanging, rxKm: -10 }, m).lnMedian);
+      expect(cy14.predict(hanging, m).lnMedian).toBeGreaterThan(
+        cy14.predict({ ...hanging, rxKm: -10 }, m).lnMedian,
+      );
     }
   });
 
@@ -187,9 +280,21 @@ describe('CY14: properties', () => {
     const lo = cy14.predict(input(), sa(0.5));
     const hi = cy14.predict(input(), sa(0.75));
     const w = Math.log(0.6 / 0.5) / Math.log(0.75 / 0.5);
-    expectClose(between.lnMedian, lo.lnMedian + (hi.lnMedian - lo.lnMedian) * w, 1e-12, 'interpolate-period.ts rule (common practice)');
-    expectClose(between.sigma, lo.sigma + (hi.sigma - lo.sigma) * w, 1e-12, 'interpolate-period.ts rule (common practice)');
-    expect(cy14.predict(input(), sa(1)).lnMedian).toBe(cy14.predict(input(), sa(1 + 1e-9)).lnMedian);
+    expectClose(
+      between.lnMedian,
+      lo.lnMedian + (hi.lnMedian - lo.lnMedian) * w,
+      1e-12,
+      'interpolate-period.ts rule (common practice)',
+    );
+    expectClose(
+      between.sigma,
+      lo.sigma + (hi.sigma - lo.sigma) * w,
+      1e-12,
+      'interpolate-period.ts rule (common practice)',
+    );
+    expect(cy14.predict(input(), sa(1)).lnMedian).toBe(
+      cy14.predict(input(), sa(1 + 1e-9)).lnMedian,
+    );
   });
 
   it('answers at zero distance with finite numbers', () => {
@@ -201,8 +306,15 @@ describe('CY14: properties', () => {
 
   it('answers outside its validity with applicable false and finite numbers', () => {
     const outside: Partial<GmmInput>[] = [
-      { magnitude: 9 }, { magnitude: 3 }, { magnitude: 8.2, rakeDeg: 90, dipDeg: 45 }, { magnitude: 8.2, rakeDeg: -90, dipDeg: 60 },
-      { rrupKm: 350 }, { vs30: 150 }, { vs30: 1800 }, { ztorKm: 22 }, { setting: 'intraslab' },
+      { magnitude: 9 },
+      { magnitude: 3 },
+      { magnitude: 8.2, rakeDeg: 90, dipDeg: 45 },
+      { magnitude: 8.2, rakeDeg: -90, dipDeg: 60 },
+      { rrupKm: 350 },
+      { vs30: 150 },
+      { vs30: 1800 },
+      { ztorKm: 22 },
+      { setting: 'intraslab' },
     ];
     for (const over of outside) {
       for (const m of measures) {
@@ -230,12 +342,21 @@ describe('CY14: properties', () => {
     const request = readProbeRequest({ model: 'CY14', magnitude: 6.5, rjbKm: 20 }, modelCatalog);
     const result = probeMotion(request, modelCatalog);
     expect(Object.keys(result.measures)).toEqual(['PGA', 'PGV', 'SA(0.2)', 'SA(1.0)']);
-    expect(result.measures.PGA?.median).toBeCloseTo(Math.exp(cy14.predict(result.input, PGA).lnMedian), 12);
+    expect(result.measures.PGA?.median).toBeCloseTo(
+      Math.exp(cy14.predict(result.input, PGA).lnMedian),
+      12,
+    );
     expect(cy14.distanceMetric).toBe('rrup');
     expect(cy14.settings).toEqual(['crustal']);
     let out = '';
-    const code = await runCli(['motion', '--model', 'CY14', '--magnitude', '6.5', '--rjb', '20', '--json'], { out: (t) => (out += t), err: () => undefined });
+    const code = await runCli(
+      ['motion', '--model', 'CY14', '--magnitude', '6.5', '--rjb', '20', '--json'],
+      { out: (t) => (out += t), err: () => undefined },
+    );
     expect(code).toBe(0);
-    expect((JSON.parse(out) as { model: string; measures: Record<string, { median: number }> }).measures.PGA?.median).toBe(result.measures.PGA?.median);
+    expect(
+      (JSON.parse(out) as { model: string; measures: Record<string, { median: number }> }).measures
+        .PGA?.median,
+    ).toBe(result.measures.PGA?.median);
   });
 });

@@ -3,7 +3,11 @@ import { UnsupportedMeasure } from '../../../api/engine/errors.ts';
 import { cornell79 } from '../../../api/engine/motion/cornell79.ts';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
 import { withPgvFromSa } from '../../../api/engine/motion/pgv-from-sa.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel } from '../../../api/engine/motion/types.ts';
+import type {
+  GmmInput,
+  GmmPrediction,
+  GroundMotionModel,
+} from '../../../api/engine/motion/types.ts';
 import { pointRupture, ROCK_SITE } from '../hazard/point-ruptures.ts';
 import { expectClose } from '../../helpers/close.ts';
 
@@ -19,7 +23,14 @@ const flatSa: GroundMotionModel = {
   validity: { magnitude: [5, 9], distanceKm: [0, 300], vs30: [150, 1500] },
   predict(_input: GmmInput, measure: Measure): GmmPrediction {
     if (measure.kind === 'PGV') throw new UnsupportedMeasure('PGV', 'no PGV');
-    return { lnMedian: Math.log(0.3), sigma: 0.7, tau: 0.4, phi: 0.5745, applicable: true, notes: [] };
+    return {
+      lnMedian: Math.log(0.3),
+      sigma: 0.7,
+      tau: 0.4,
+      phi: 0.5745,
+      applicable: true,
+      notes: [],
+    };
   },
 };
 
@@ -29,7 +40,12 @@ const input = { ...rupture.context, ...distances, ...ROCK_SITE };
 describe('PGV from SA(0.5 s) (Bommer & Alarcón 2006, PGV = SA(0.5) / 20 in cm/s and cm/s², from memory)', () => {
   it('SA(0.5) = 0.3 g is 294.1995 cm/s², so PGV = 14.709975 cm/s (hand arithmetic with g = 980.665 cm/s²)', () => {
     const p = withPgvFromSa(flatSa).predict(input, { kind: 'PGV' });
-    expectClose(Math.exp(p.lnMedian), 14.709975, 1e-9, 'Bommer & Alarcón (2006) (from memory), hand arithmetic');
+    expectClose(
+      Math.exp(p.lnMedian),
+      14.709975,
+      1e-9,
+      'Bommer & Alarcón (2006) (from memory), hand arithmetic',
+    );
     expect([p.sigma, p.tau, p.phi]).toEqual([0.7, 0.4, 0.5745]);
   });
 

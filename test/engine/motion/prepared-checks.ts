@@ -5,7 +5,13 @@ import type { Measure } from '../../../api/engine/motion/measure.ts';
 import { measureLabel } from '../../../api/engine/motion/measure.ts';
 import { createPairPredictions } from '../../../api/engine/motion/prepared-period.ts';
 import { expectClose } from '../../helpers/close.ts';
-import type { DistanceContext, GroundMotionModel, PairDistances, RuptureContext, SiteContext } from '../../../api/engine/motion/types.ts';
+import type {
+  DistanceContext,
+  GroundMotionModel,
+  PairDistances,
+  RuptureContext,
+  SiteContext,
+} from '../../../api/engine/motion/types.ts';
 
 /**
  * Checks that a model's precomputation hook (GroundMotionModel.prepare) gives predict()'s
@@ -28,19 +34,31 @@ const settingArb = fc.constantFrom<TectonicSetting>('crustal', 'interface', 'int
 
 const ruptureArb = (settings: readonly TectonicSetting[]): fc.Arbitrary<RuptureContext> =>
   fc.record({
-    magnitude: fc.oneof(fc.double({ min: 2.5, max: 9.5, noNaN: true }), fc.constantFrom(4.5, 5.5, 6.5, 7.2, 7.5, 7.8, 8.0)),
-    rakeDeg: fc.oneof(fc.double({ min: -180, max: 180, noNaN: true }), fc.constantFrom(0, 90, -90, 30, 150, -30, -150, 180)),
+    magnitude: fc.oneof(
+      fc.double({ min: 2.5, max: 9.5, noNaN: true }),
+      fc.constantFrom(4.5, 5.5, 6.5, 7.2, 7.5, 7.8, 8.0),
+    ),
+    rakeDeg: fc.oneof(
+      fc.double({ min: -180, max: 180, noNaN: true }),
+      fc.constantFrom(0, 90, -90, 30, 150, -30, -150, 180),
+    ),
     mechanism: fc.constantFrom('strike-slip' as const, 'reverse' as const, 'normal' as const),
     setting: settings.length === 3 ? settingArb : fc.constantFrom(...settings),
     dipDeg: fc.oneof(fc.double({ min: 10, max: 90, noNaN: true }), fc.constantFrom(15, 45, 90)),
     ztorKm: fc.oneof(fc.double({ min: 0, max: 25, noNaN: true }), fc.constantFrom(0, 16.66, 20)),
     widthKm: fc.double({ min: 0, max: 60, noNaN: true }),
-    hypoDepthKm: fc.oneof(fc.double({ min: 0, max: 160, noNaN: true }), fc.constantFrom(7, 20, 60, 120)),
+    hypoDepthKm: fc.oneof(
+      fc.double({ min: 0, max: 160, noNaN: true }),
+      fc.constantFrom(7, 20, 60, 120),
+    ),
   });
 
 const distancesArb: fc.Arbitrary<DistanceContext> = fc
   .record({
-    rjbKm: fc.oneof(fc.double({ min: 0, max: 450, noNaN: true }), fc.constantFrom(0, 1, 80, 300, 400)),
+    rjbKm: fc.oneof(
+      fc.double({ min: 0, max: 450, noNaN: true }),
+      fc.constantFrom(0, 1, 80, 300, 400),
+    ),
     extraKm: fc.double({ min: 0, max: 40, noNaN: true }),
     rxKm: fc.oneof(fc.double({ min: -150, max: 150, noNaN: true }), fc.constant(0)),
     ry0Km: fc.double({ min: 0, max: 60, noNaN: true }),
@@ -57,7 +75,10 @@ const distancesArb: fc.Arbitrary<DistanceContext> = fc
 
 export const siteArb: fc.Arbitrary<SiteContext> = fc.record(
   {
-    vs30: fc.oneof(fc.double({ min: 120, max: 2000, noNaN: true }), fc.constantFrom(150, 225, 300, 360, 450, 760, 865, 1000, 1100, 1500)),
+    vs30: fc.oneof(
+      fc.double({ min: 120, max: 2000, noNaN: true }),
+      fc.constantFrom(150, 225, 300, 360, 450, 760, 865, 1000, 1100, 1500),
+    ),
     vs30Measured: fc.boolean(),
     z2p5Km: fc.double({ min: 0, max: 12, noNaN: true }),
   },
@@ -65,11 +86,15 @@ export const siteArb: fc.Arbitrary<SiteContext> = fc.record(
 );
 
 export const pairCasesArb = (settings: readonly TectonicSetting[]): fc.Arbitrary<PairCase[]> =>
-  fc.array(fc.record({ rupture: ruptureArb(settings), distances: distancesArb }), { minLength: 1, maxLength: 12 });
+  fc.array(fc.record({ rupture: ruptureArb(settings), distances: distancesArb }), {
+    minLength: 1,
+    maxLength: 12,
+  });
 
 /** The pairs as columns, rupture k paired with distances k. */
 export function pairColumns(cases: readonly PairCase[]): PairDistances {
-  const column = (pick: (d: DistanceContext) => number) => Float64Array.from(cases, (c) => pick(c.distances));
+  const column = (pick: (d: DistanceContext) => number) =>
+    Float64Array.from(cases, (c) => pick(c.distances));
   return {
     count: cases.length,
     rupture: Int32Array.from(cases, (_, k) => k),
@@ -86,24 +111,47 @@ export function pairColumns(cases: readonly PairCase[]): PairDistances {
 export const TOLERANCE = 1e-12;
 
 /** Asserts the hook's predictions equal predict()'s for every pair, within TOLERANCE. */
-export function expectPreparedEqualsPredict(model: GroundMotionModel, measure: Measure, cases: readonly PairCase[], site: SiteContext): void {
-  const prepared = model.prepare!(cases.map((c) => c.rupture), measure);
+export function expectPreparedEqualsPredict(
+  model: GroundMotionModel,
+  measure: Measure,
+  cases: readonly PairCase[],
+  site: SiteContext,
+): void {
+  const prepared = model.prepare!(
+    cases.map((c) => c.rupture),
+    measure,
+  );
   const out = createPairPredictions(cases.length);
   prepared.predictPairs(site, pairColumns(cases), out);
   cases.forEach((c, k) => {
     const expected = model.predict({ ...c.rupture, ...c.distances, ...site }, measure);
     const where = `${model.name} ${measureLabel(measure)} pair ${k}: ${JSON.stringify({ ...c.rupture, ...c.distances, ...site })}`;
-    expectClose(out.lnMedian[k]!, expected.lnMedian, TOLERANCE, `${where}: ln median against predict()`);
+    expectClose(
+      out.lnMedian[k]!,
+      expected.lnMedian,
+      TOLERANCE,
+      `${where}: ln median against predict()`,
+    );
     expectClose(out.sigma[k]!, expected.sigma, TOLERANCE, `${where}: sigma against predict()`);
-    expect(out.applicable[k] === 1, `${where}: applicable vs predict ${expected.applicable} (${expected.notes.join('; ')})`).toBe(expected.applicable);
+    expect(
+      out.applicable[k] === 1,
+      `${where}: applicable vs predict ${expected.applicable} (${expected.notes.join('; ')})`,
+    ).toBe(expected.applicable);
   });
 }
 
 /** Runs the check over generated cases for each measure (fast-check, fixed seed so a failure repeats). */
-export function checkPreparedModel(model: GroundMotionModel, measures: readonly Measure[], settings: readonly TectonicSetting[], numRuns = 150): void {
+export function checkPreparedModel(
+  model: GroundMotionModel,
+  measures: readonly Measure[],
+  settings: readonly TectonicSetting[],
+  numRuns = 150,
+): void {
   for (const measure of measures) {
     fc.assert(
-      fc.property(pairCasesArb(settings), siteArb, (cases, site) => expectPreparedEqualsPredict(model, measure, cases, site)),
+      fc.property(pairCasesArb(settings), siteArb, (cases, site) =>
+        expectPreparedEqualsPredict(model, measure, cases, site),
+      ),
       { numRuns, seed: 20_260_701 },
     );
   }
@@ -114,7 +162,12 @@ export function checkPreparedModel(model: GroundMotionModel, measures: readonly 
  * measure exactly what its prepare hook gives for that measure alone (the shared per-pair work
  * must not change a number; same fixed seed as checkPreparedModel).
  */
-export function checkPreparedMeasures(model: GroundMotionModel, measures: readonly Measure[], settings: readonly TectonicSetting[], numRuns = 60): void {
+export function checkPreparedMeasures(
+  model: GroundMotionModel,
+  measures: readonly Measure[],
+  settings: readonly TectonicSetting[],
+  numRuns = 60,
+): void {
   fc.assert(
     fc.property(pairCasesArb(settings), siteArb, (cases, site) => {
       const ruptures = cases.map((c) => c.rupture);
@@ -125,9 +178,13 @@ export function checkPreparedMeasures(model: GroundMotionModel, measures: readon
         const alone = createPairPredictions(cases.length);
         model.prepare!(ruptures, measure).predictPairs(site, pairs, alone);
         const where = `${model.name} ${measureLabel(measure)} prepared with ${measures.map(measureLabel).join(', ')}`;
-        expect(Array.from(together[i]!.lnMedian), `${where}: ln median`).toEqual(Array.from(alone.lnMedian));
+        expect(Array.from(together[i]!.lnMedian), `${where}: ln median`).toEqual(
+          Array.from(alone.lnMedian),
+        );
         expect(Array.from(together[i]!.sigma), `${where}: sigma`).toEqual(Array.from(alone.sigma));
-        expect(Array.from(together[i]!.applicable), `${where}: applicable`).toEqual(Array.from(alone.applicable));
+        expect(Array.from(together[i]!.applicable), `${where}: applicable`).toEqual(
+          Array.from(alone.applicable),
+        );
       });
     }),
     { numRuns, seed: 20_260_702 },

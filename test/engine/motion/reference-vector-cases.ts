@@ -53,7 +53,9 @@ export interface ReferenceVectors {
 
 /** The vector file `vectors/<file>` beside this module. */
 export function readReferenceVectors(file: string): ReferenceVectors {
-  return JSON.parse(readFileSync(new URL(`vectors/${file}`, import.meta.url), 'utf8')) as ReferenceVectors;
+  return JSON.parse(
+    readFileSync(new URL(`vectors/${file}`, import.meta.url), 'utf8'),
+  ) as ReferenceVectors;
 }
 
 export function measureOf(c: ReferenceCase): Measure {
@@ -65,10 +67,22 @@ export function measureOf(c: ReferenceCase): Measure {
 /** The case as a model input; the basin depth left to the model's default unless `z1` is 'given'. */
 export function inputOf(c: ReferenceCase, z1: 'default' | 'given' = 'default'): GmmInput {
   return {
-    magnitude: c.magnitude, rakeDeg: c.rakeDeg, mechanism: c.mechanism, setting: 'crustal', dipDeg: c.dipDeg,
-    ztorKm: c.ztorKm, widthKm: c.widthKm, hypoDepthKm: c.hypoDepthKm,
-    rjbKm: c.rjbKm, rrupKm: c.rrupKm, rxKm: c.rxKm, ry0Km: c.ry0Km, rhypoKm: c.rhypoKm, repiKm: c.repiKm,
-    vs30: c.vs30, vs30Measured: c.vs30Measured,
+    magnitude: c.magnitude,
+    rakeDeg: c.rakeDeg,
+    mechanism: c.mechanism,
+    setting: 'crustal',
+    dipDeg: c.dipDeg,
+    ztorKm: c.ztorKm,
+    widthKm: c.widthKm,
+    hypoDepthKm: c.hypoDepthKm,
+    rjbKm: c.rjbKm,
+    rrupKm: c.rrupKm,
+    rxKm: c.rxKm,
+    ry0Km: c.ry0Km,
+    rhypoKm: c.rhypoKm,
+    repiKm: c.repiKm,
+    vs30: c.vs30,
+    vs30Measured: c.vs30Measured,
     ...(z1 === 'given' && c.z1Km !== null ? { z1Km: c.z1Km } : {}),
   };
 }

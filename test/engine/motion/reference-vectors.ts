@@ -2,7 +2,11 @@ import { readFileSync } from 'node:fs';
 import { expect } from 'vitest';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
 import { createPairPredictions } from '../../../api/engine/motion/prepared-period.ts';
-import type { GmmInput, GmmPrediction, GroundMotionModel } from '../../../api/engine/motion/types.ts';
+import type {
+  GmmInput,
+  GmmPrediction,
+  GroundMotionModel,
+} from '../../../api/engine/motion/types.ts';
 import { expectClose } from '../../helpers/close.ts';
 import { pairColumns } from './prepared-checks.ts';
 
@@ -48,7 +52,9 @@ export interface VectorFile {
 export const VECTOR_TOLERANCE = 1e-4;
 
 export function readVectors(file: string): VectorFile {
-  return JSON.parse(readFileSync(new URL(`./vectors/${file}`, import.meta.url), 'utf8')) as VectorFile;
+  return JSON.parse(
+    readFileSync(new URL(`./vectors/${file}`, import.meta.url), 'utf8'),
+  ) as VectorFile;
 }
 
 export function vectorMeasure(c: VectorCase): Measure {
@@ -59,7 +65,8 @@ export function vectorMeasure(c: VectorCase): Measure {
 
 /** The case as Tremora's model input; basin depths left to the model's defaults, as the vectors assume. */
 export function vectorInput(c: VectorCase): GmmInput {
-  const mechanism = c.mechanism === 'reverse' || c.mechanism === 'normal' ? c.mechanism : 'strike-slip';
+  const mechanism =
+    c.mechanism === 'reverse' || c.mechanism === 'normal' ? c.mechanism : 'strike-slip';
   return {
     magnitude: c.magnitude,
     rakeDeg: c.rakeDeg ?? 0,
@@ -81,7 +88,11 @@ export function vectorInput(c: VectorCase): GmmInput {
 }
 
 /** Asserts one prediction against a case: ln median, τ, φ and σ within VECTOR_TOLERANCE. */
-export function expectMatchesVector(p: Pick<GmmPrediction, 'lnMedian' | 'tau' | 'phi' | 'sigma'>, c: VectorCase, source: string): void {
+export function expectMatchesVector(
+  p: Pick<GmmPrediction, 'lnMedian' | 'tau' | 'phi' | 'sigma'>,
+  c: VectorCase,
+  source: string,
+): void {
   const where = `${source}, case ${c.id} (${c.measure}, M ${c.magnitude}, Vs30 ${c.vs30})`;
   expectClose(p.lnMedian, c.lnMedian, VECTOR_TOLERANCE, `${where}: ln median`);
   expectClose(p.tau, c.tau, VECTOR_TOLERANCE, `${where}: tau`);
@@ -93,11 +104,19 @@ export function expectMatchesVector(p: Pick<GmmPrediction, 'lnMedian' | 'tau' | 
  * Asserts the fast path (the model's prepare hook, one rupture–site pair per case) gives the
  * case's ln median and σ within VECTOR_TOLERANCE (it reports no τ and φ).
  */
-export function expectFastPathMatchesVector(model: GroundMotionModel, c: VectorCase, source: string): void {
+export function expectFastPathMatchesVector(
+  model: GroundMotionModel,
+  c: VectorCase,
+  source: string,
+): void {
   const input = vectorInput(c);
   const out = createPairPredictions(1);
   expect(model.prepare, `${model.name} has a fast path`).toBeDefined();
-  model.prepare!([input], vectorMeasure(c)).predictPairs(input, pairColumns([{ rupture: input, distances: input }]), out);
+  model.prepare!([input], vectorMeasure(c)).predictPairs(
+    input,
+    pairColumns([{ rupture: input, distances: input }]),
+    out,
+  );
   const where = `${source}, case ${c.id} (${c.measure}, M ${c.magnitude}, Vs30 ${c.vs30}), fast path`;
   expectClose(out.lnMedian[0]!, c.lnMedian, VECTOR_TOLERANCE, `${where}: ln median`);
   expectClose(out.sigma[0]!, c.sigma, VECTOR_TOLERANCE, `${where}: sigma`);

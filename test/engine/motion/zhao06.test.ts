@@ -7,13 +7,37 @@ import { checkPreparedMeasures, checkPreparedModel } from './prepared-checks.ts'
 
 const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 const slab: GmmInput = {
-  magnitude: 7, rakeDeg: -90, mechanism: 'normal', setting: 'intraslab', dipDeg: 60, ztorKm: 50, widthKm: 20, hypoDepthKm: 60,
-  rjbKm: 30, rrupKm: 67, rxKm: 0, ry0Km: 0, rhypoKm: 67, repiKm: 30, vs30: 400, vs30Measured: true,
+  magnitude: 7,
+  rakeDeg: -90,
+  mechanism: 'normal',
+  setting: 'intraslab',
+  dipDeg: 60,
+  ztorKm: 50,
+  widthKm: 20,
+  hypoDepthKm: 60,
+  rjbKm: 30,
+  rrupKm: 67,
+  rxKm: 0,
+  ry0Km: 0,
+  rhypoKm: 67,
+  repiKm: 30,
+  vs30: 400,
+  vs30Measured: true,
 };
 
 describe('Zhao06: site classes and validity', () => {
-  it('classes Vs30 by the paper\'s site classes, each including its upper bound (Zhao et al. 2006)', () => {
-    expect([1101, 1100, 601, 600, 301, 300, 201, 200, 150].map(zhao06SiteClass)).toEqual(['hard rock', 'SC I', 'SC I', 'SC II', 'SC II', 'SC III', 'SC III', 'SC IV', 'SC IV']);
+  it("classes Vs30 by the paper's site classes, each including its upper bound (Zhao et al. 2006)", () => {
+    expect([1101, 1100, 601, 600, 301, 300, 201, 200, 150].map(zhao06SiteClass)).toEqual([
+      'hard rock',
+      'SC I',
+      'SC I',
+      'SC II',
+      'SC II',
+      'SC III',
+      'SC III',
+      'SC IV',
+      'SC IV',
+    ]);
   });
 
   it('answers outside its validity with finite numbers and applicable false; refuses PGV and periods off its table', () => {
@@ -29,11 +53,22 @@ describe('Zhao06: site classes and validity', () => {
 });
 
 describe('Zhao06 fast path', () => {
-  it('gives predict()\'s ln median, σ and applicability within 1e-12, with and without the magnitude-squared term', () => {
-    for (const model of [zhao06, zhao06Msq]) checkPreparedModel(model, [{ kind: 'PGA' }, sa(0.2), sa(1), sa(0.35)], ['interface', 'intraslab', 'crustal'], 60);
+  it("gives predict()'s ln median, σ and applicability within 1e-12, with and without the magnitude-squared term", () => {
+    for (const model of [zhao06, zhao06Msq])
+      checkPreparedModel(
+        model,
+        [{ kind: 'PGA' }, sa(0.2), sa(1), sa(0.35)],
+        ['interface', 'intraslab', 'crustal'],
+        60,
+      );
   });
 
-  it('prepared for several measures gives each measure\'s own numbers', () => {
-    checkPreparedMeasures(zhao06, [{ kind: 'PGA' }, sa(0.2), sa(1), sa(0.35)], ['interface', 'intraslab', 'crustal'], 30);
+  it("prepared for several measures gives each measure's own numbers", () => {
+    checkPreparedMeasures(
+      zhao06,
+      [{ kind: 'PGA' }, sa(0.2), sa(1), sa(0.35)],
+      ['interface', 'intraslab', 'crustal'],
+      30,
+    );
   });
 });

@@ -1,6 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { zhao06, zhao06Msq, zhao06SiteClass } from '../../../api/engine/motion/zhao06.ts';
-import { expectFastPathMatchesVector, expectMatchesVector, readVectors, vectorInput, vectorMeasure } from './reference-vectors.ts';
+import {
+  expectFastPathMatchesVector,
+  expectMatchesVector,
+  readVectors,
+  vectorInput,
+  vectorMeasure,
+} from './reference-vectors.ts';
 
 // Independent test vectors of Zhao et al. (2006): an independent transcription of the paper's
 // equations with the published coefficients, checked against a port of a public record to
@@ -10,10 +16,17 @@ const vectors = readVectors('zhao06.json');
 const SOURCE = 'Zhao et al. (2006), reference vectors (independent transcription)';
 
 describe('Zhao06 against the reference vectors', () => {
-  it.each(vectors.cases.map((c) => [c.id, c] as const))('%s: ln median, τ, φ, σ within 1e-4', (_, c) => {
-    const model = c.magnitudeSquaredTerm ? zhao06Msq : zhao06;
-    expect(zhao06SiteClass(c.vs30), `${SOURCE}, case ${c.id}: site class`).toBe(c.siteClass);
-    expectMatchesVector(model.predict(vectorInput(c), vectorMeasure(c)), c, `${SOURCE}, ${model.name}`);
-    expectFastPathMatchesVector(model, c, `${SOURCE}, ${model.name}`);
-  });
+  it.each(vectors.cases.map((c) => [c.id, c] as const))(
+    '%s: ln median, τ, φ, σ within 1e-4',
+    (_, c) => {
+      const model = c.magnitudeSquaredTerm ? zhao06Msq : zhao06;
+      expect(zhao06SiteClass(c.vs30), `${SOURCE}, case ${c.id}: site class`).toBe(c.siteClass);
+      expectMatchesVector(
+        model.predict(vectorInput(c), vectorMeasure(c)),
+        c,
+        `${SOURCE}, ${model.name}`,
+      );
+      expectFastPathMatchesVector(model, c, `${SOURCE}, ${model.name}`);
+    },
+  );
 });

@@ -36,7 +36,8 @@ afterAll(() => console.log(`distance properties (seed ${SEED}): ${figures.join('
 /** A study's ruptures with 1 to 3 sources of every kind, one community to centre the frame. */
 const rupturesArb = studyDocArb({ maxCommunities: 1 }).map((doc) => {
   const loaded = loadStudy(doc, { models: modelCatalog });
-  if (!loaded.ok) throw new Error(`a generated study should be valid: ${JSON.stringify(loaded.issues)}`);
+  if (!loaded.ok)
+    throw new Error(`a generated study should be valid: ${JSON.stringify(loaded.issues)}`);
   return discretiseStudy(loaded.study).ruptures;
 });
 
@@ -48,10 +49,17 @@ const sitesArb = (ruptures: readonly Rupture[]): fc.Arbitrary<PointXY[]> => {
   const special: PointXY[] = [];
   for (const r of ruptures.slice(0, 50)) {
     special.push({ x: r.surface.hypocentre.x, y: r.surface.hypocentre.y });
-    if (r.surface.kind === 'planes') for (const p of r.surface.planes) special.push(...p.corners.map((c) => ({ x: c.x, y: c.y })));
+    if (r.surface.kind === 'planes')
+      for (const p of r.surface.planes) special.push(...p.corners.map((c) => ({ x: c.x, y: c.y })));
   }
-  const anywhere = fc.record({ x: fc.double({ min: -200, max: 200, noNaN: true }), y: fc.double({ min: -200, max: 200, noNaN: true }) });
-  return fc.array(special.length > 0 ? fc.oneof(anywhere, fc.constantFrom(...special)) : anywhere, { minLength: 1, maxLength: 8 });
+  const anywhere = fc.record({
+    x: fc.double({ min: -200, max: 200, noNaN: true }),
+    y: fc.double({ min: -200, max: 200, noNaN: true }),
+  });
+  return fc.array(special.length > 0 ? fc.oneof(anywhere, fc.constantFrom(...special)) : anywhere, {
+    minLength: 1,
+    maxLength: 8,
+  });
 };
 
 describe('rupture distances', () => {
@@ -67,14 +75,23 @@ describe('rupture distances', () => {
             for (const site of sites) {
               pairs++;
               const d = ruptureDistances(rupture.surface, site);
-              const label = () => `${rupture.sourceId} M${rupture.context.magnitude} at (${site.x}, ${site.y}): ${JSON.stringify(d)}`;
+              const label = () =>
+                `${rupture.sourceId} M${rupture.context.magnitude} at (${site.x}, ${site.y}): ${JSON.stringify(d)}`;
               for (const v of Object.values(d)) check(Number.isFinite(v), label);
-              for (const v of [d.rjbKm, d.rrupKm, d.ry0Km, d.rhypoKm, d.repiKm]) check(v >= 0, label);
+              for (const v of [d.rjbKm, d.rrupKm, d.ry0Km, d.rhypoKm, d.repiKm])
+                check(v >= 0, label);
               check(d.rrupKm >= d.rjbKm - SLACK_KM, () => `Rrup < Rjb: ${label()}`);
-              check(d.rrupKm >= rupture.context.ztorKm - SLACK_KM, () => `Rrup < Ztor ${rupture.context.ztorKm}: ${label()}`);
+              check(
+                d.rrupKm >= rupture.context.ztorKm - SLACK_KM,
+                () => `Rrup < Ztor ${rupture.context.ztorKm}: ${label()}`,
+              );
               check(d.rrupKm <= d.rhypoKm + SLACK_KM, () => `Rrup > Rhypo: ${label()}`);
               check(d.rjbKm <= d.repiKm + SLACK_KM, () => `Rjb > Repi: ${label()}`);
-              if (rupture.surface.kind === 'point') check(d.rjbKm === d.repiKm && d.rrupKm === d.rhypoKm, () => `point rupture: ${label()}`);
+              if (rupture.surface.kind === 'point')
+                check(
+                  d.rjbKm === d.repiKm && d.rrupKm === d.rhypoKm,
+                  () => `point rupture: ${label()}`,
+                );
             }
           }
         },

@@ -6,7 +6,12 @@ import type { CommunityResult } from '../../../api/engine/results.ts';
 import { screenStudy } from '../../../api/engine/screen-study.ts';
 import { loadStudy } from '../../../api/study/load-study.ts';
 import { referenceScreening } from '../../helpers/reference-hazard/reference-screening.ts';
-import { type Doc, fixedRecurrenceArb, grRecurrenceArb, studyDocArb } from '../../study/arbitrary-study.ts';
+import {
+  type Doc,
+  fixedRecurrenceArb,
+  grRecurrenceArb,
+  studyDocArb,
+} from '../../study/arbitrary-study.ts';
 
 /**
  * Invariants of the hazard integral on generated studies (fast-check), on the engine and on
@@ -31,21 +36,30 @@ const RUNS = 40;
 const SEED = 20_240_817;
 
 const figures: string[] = [];
-afterAll(() => console.log(`engine properties (seed ${SEED}, ${RUNS} studies per property and path):\n  ${figures.join('\n  ')}`));
+afterAll(() =>
+  console.log(
+    `engine properties (seed ${SEED}, ${RUNS} studies per property and path):\n  ${figures.join('\n  ')}`,
+  ),
+);
 
 function toStudy(doc: Doc): Study {
   const loaded = loadStudy(doc, { models: modelCatalog });
-  if (!loaded.ok) throw new Error(`a generated study should be valid: ${loaded.issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`);
+  if (!loaded.ok)
+    throw new Error(
+      `a generated study should be valid: ${loaded.issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`,
+    );
   return loaded.study;
 }
 
-const screen = (doc: Doc, path: SumPath) => (path === 'engine' ? screenStudy : referenceScreening)(toStudy(doc), { models: modelCatalog });
+const screen = (doc: Doc, path: SumPath) =>
+  (path === 'engine' ? screenStudy : referenceScreening)(toStudy(doc), { models: modelCatalog });
 
 /** Every mean and branch curve of a community, with a label for messages. */
 function* curvesOf(c: CommunityResult): Generator<[string, readonly number[], readonly number[]]> {
   for (const [key, curve] of Object.entries(c.curves)) {
     yield [`${c.communityId} ${key} mean`, curve.levels, curve.annualRate];
-    for (const b of curve.branches ?? []) yield [`${c.communityId} ${key} ${b.label}`, curve.levels, b.annualRate];
+    for (const b of curve.branches ?? [])
+      yield [`${c.communityId} ${key} ${b.label}`, curve.levels, b.annualRate];
   }
 }
 
@@ -67,15 +81,24 @@ describe.each(PATHS)('hazard curves (%s path)', (path) => {
             curves++;
             expect(rates.length, label).toBe(levels.length);
             rates.forEach((r, i) => {
-              expect(Number.isFinite(r) && r >= 0, `${label}: rate ${r} at level ${levels[i]}`).toBe(true);
+              expect(
+                Number.isFinite(r) && r >= 0,
+                `${label}: rate ${r} at level ${levels[i]}`,
+              ).toBe(true);
               const previous = rates[i - 1];
-              if (previous !== undefined) expect(r <= previous * (1 + ROUNDING), `${label}: ${r} at ${levels[i]} after ${previous}`).toBe(true);
+              if (previous !== undefined)
+                expect(
+                  r <= previous * (1 + ROUNDING),
+                  `${label}: ${r} at ${levels[i]} after ${previous}`,
+                ).toBe(true);
             });
           }
           for (const [years, byMeasure] of Object.entries(c.chanceOfExceeding)) {
             for (const [key, chances] of Object.entries(byMeasure)) {
               chances.forEach((p, i) => {
-                expect(p >= 0 && p <= 1, `${c.communityId} ${key} ${years} yr: chance ${p}`).toBe(true);
+                expect(p >= 0 && p <= 1, `${c.communityId} ${key} ${years} yr: chance ${p}`).toBe(
+                  true,
+                );
                 const previous = chances[i - 1];
                 if (previous !== undefined) expect(p <= previous * (1 + ROUNDING)).toBe(true);
               });
@@ -96,13 +119,19 @@ describe.each(PATHS)('hazard curves (%s path)', (path) => {
           for (const [years, d] of Object.entries(c.deaggregation)) {
             checked++;
             const label = `${c.communityId} at ${years} years`;
-            for (const share of [...d.bySource.map((s) => s.share), ...d.bins.map((b) => b.share)]) {
+            for (const share of [
+              ...d.bySource.map((s) => s.share),
+              ...d.bins.map((b) => b.share),
+            ]) {
               expect(share >= 0 && share <= 1 + ROUNDING, `${label}: share ${share}`).toBe(true);
             }
             // Shares are ratios of compensated sums: their sum is 1 to a few units in the last place.
             const bySource = d.bySource.reduce((s, x) => s + x.share, 0);
             const byBin = d.bins.reduce((s, x) => s + x.share, 0);
-            expect(Math.abs(bySource - 1), `${label}: source shares sum to ${bySource}`).toBeLessThan(1e-9);
+            expect(
+              Math.abs(bySource - 1),
+              `${label}: source shares sum to ${bySource}`,
+            ).toBeLessThan(1e-9);
             expect(Math.abs(byBin - 1), `${label}: bin shares sum to ${byBin}`).toBeLessThan(1e-9);
           }
         }
@@ -121,7 +150,8 @@ function doubledRates(doc: Doc): Doc {
   for (const feature of copy.sources.features as Doc[]) {
     const r = feature.properties.recurrence as Doc;
     if (r.type === 'fixed') r.rate *= 2;
-    else if (r.type === 'moment-balanced') r.slipRateMmYr *= 2; // moment rate, hence every rate, doubles
+    else if (r.type === 'moment-balanced')
+      r.slipRateMmYr *= 2; // moment rate, hence every rate, doubles
     else if (r.rate !== undefined) r.rate *= 2;
     else r.aValue += Math.log10(2);
   }
@@ -150,7 +180,10 @@ describe.each(PATHS)('linearity in the rates (%s path)', (path) => {
             rates.forEach((r, i) => {
               compared++;
               const got = other[i] as number;
-              expect(Math.abs(got - 2 * r) <= LINEARITY * 2 * r, `${label}: ${got} for twice ${r}`).toBe(true);
+              expect(
+                Math.abs(got - 2 * r) <= LINEARITY * 2 * r,
+                `${label}: ${got} for twice ${r}`,
+              ).toBe(true);
             });
           });
         });
@@ -183,16 +216,41 @@ function withFarSources(doc: Doc, recurrences: readonly [Doc, Doc]): Doc {
   for (const f of copy.sources.features as Doc[]) visit(f.geometry.coordinates);
   if (lons.length === 0) for (const c of copy.communities as Doc[]) visit([c.lon, c.lat]);
   const allLons = [...lons, ...copy.communities.map((c: Doc) => c.lon as number)];
-  const reach = 8 + Math.max(Math.min(...lons) - Math.min(...allLons), Math.max(...allLons) - Math.max(...lons));
+  const reach =
+    8 +
+    Math.max(Math.min(...lons) - Math.min(...allLons), Math.max(...allLons) - Math.max(...lons));
   const west = Math.min(...lons) - reach;
   const east = Math.max(...lons) + reach;
   const midLat = (Math.min(...lats) + Math.max(...lats)) / 2;
   copy.sources.features.push(
-    { type: 'Feature', geometry: { type: 'Point', coordinates: [west, midLat] }, properties: { id: 'far-west', setting: 'crustal', mechanism: 'reverse', depthKm: 10, recurrence: recurrences[0] } },
     {
       type: 'Feature',
-      geometry: { type: 'LineString', coordinates: [[east, midLat], [east - 0.25, midLat]] },
-      properties: { id: 'far-east', setting: 'crustal', mechanism: 'strike-slip', dip: 90, lowerDepthKm: 15, recurrence: recurrences[1] },
+      geometry: { type: 'Point', coordinates: [west, midLat] },
+      properties: {
+        id: 'far-west',
+        setting: 'crustal',
+        mechanism: 'reverse',
+        depthKm: 10,
+        recurrence: recurrences[0],
+      },
+    },
+    {
+      type: 'Feature',
+      geometry: {
+        type: 'LineString',
+        coordinates: [
+          [east, midLat],
+          [east - 0.25, midLat],
+        ],
+      },
+      properties: {
+        id: 'far-east',
+        setting: 'crustal',
+        mechanism: 'strike-slip',
+        dip: 90,
+        lowerDepthKm: 15,
+        recurrence: recurrences[1],
+      },
     },
   );
   return copy;
@@ -202,20 +260,27 @@ describe.each(PATHS)('the distance cut-off (%s path)', (path) => {
   it('a source beyond the cut-off changes no curve, level, chance, intensity or deaggregation', () => {
     let studies = 0;
     fc.assert(
-      fc.property(studyDocArb(), fc.tuple(fc.oneof(fixedRecurrenceArb, grRecurrenceArb), fc.oneof(fixedRecurrenceArb, grRecurrenceArb)), (doc, recurrences) => {
-        const before = screen(doc, path).communities;
-        const after = screen(withFarSources(doc, recurrences), path).communities;
-        studies++;
-        before.forEach((c, i) => {
-          const a = after[i] as CommunityResult;
-          expect(a.curves).toEqual(c.curves);
-          expect(a.atReturnPeriod).toEqual(c.atReturnPeriod);
-          expect(a.chanceOfExceeding).toEqual(c.chanceOfExceeding);
-          expect(a.intensity).toEqual(c.intensity);
-          expect(a.deaggregation).toEqual(c.deaggregation);
-          expect(a.band).toEqual(c.band);
-        });
-      }),
+      fc.property(
+        studyDocArb(),
+        fc.tuple(
+          fc.oneof(fixedRecurrenceArb, grRecurrenceArb),
+          fc.oneof(fixedRecurrenceArb, grRecurrenceArb),
+        ),
+        (doc, recurrences) => {
+          const before = screen(doc, path).communities;
+          const after = screen(withFarSources(doc, recurrences), path).communities;
+          studies++;
+          before.forEach((c, i) => {
+            const a = after[i] as CommunityResult;
+            expect(a.curves).toEqual(c.curves);
+            expect(a.atReturnPeriod).toEqual(c.atReturnPeriod);
+            expect(a.chanceOfExceeding).toEqual(c.chanceOfExceeding);
+            expect(a.intensity).toEqual(c.intensity);
+            expect(a.deaggregation).toEqual(c.deaggregation);
+            expect(a.band).toEqual(c.band);
+          });
+        },
+      ),
       { numRuns: RUNS, seed: SEED },
     );
     figures.push(`${path}: ${studies} studies unchanged by two sources beyond the cut-off`);

@@ -15,7 +15,12 @@ describe('characteristicBinProbabilities', () => {
   const p = characteristicBinProbabilities(edges, 5, 7.5, 1);
 
   it('sums to 1', () => {
-    expectRelative(p.reduce((s, x) => s + x, 0), 1, 1e-12, 'normalised density');
+    expectRelative(
+      p.reduce((s, x) => s + x, 0),
+      1,
+      1e-12,
+      'normalised density',
+    );
   });
 
   it('the box holds c2 / (1 + c2) = 0.1041772', () => {
@@ -27,7 +32,12 @@ describe('characteristicBinProbabilities', () => {
   it('box height equals the exponential density at mc - 1 (ratio of the 6.0–6.1 bin to a box bin)', () => {
     // Exponential bin mass / box bin mass = (1 - 10^-0.1) / (0.1 β) = 0.8932211 when the box
     // height is the density at 6.0, the lower edge of that exponential bin.
-    expectRelative((p[10] ?? NaN) / (p[20] ?? NaN), (1 - 10 ** -0.1) / (0.1 * Math.LN10), 1e-12, 'Youngs & Coppersmith 1985 box height');
+    expectRelative(
+      (p[10] ?? NaN) / (p[20] ?? NaN),
+      (1 - 10 ** -0.1) / (0.1 * Math.LN10),
+      1e-12,
+      'Youngs & Coppersmith 1985 box height',
+    );
   });
 
   it('refuses a range no wider than the box', () => {

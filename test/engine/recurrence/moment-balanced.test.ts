@@ -25,36 +25,69 @@ function simpson(f: (x: number) => number, a: number, b: number, n = 20000): num
 }
 
 const recurrence = (shape: MomentBalancedRecurrence['shape']): MomentBalancedRecurrence => ({
-  type: 'moment-balanced', slipRateMmYr: 4, bValue: 1, mMin: 5, mMax: 7.5, shape, shearModulusPa: 3e10,
+  type: 'moment-balanced',
+  slipRateMmYr: 4,
+  bValue: 1,
+  mMin: 5,
+  mMax: 7.5,
+  shape,
+  shearModulusPa: 3e10,
 });
 
 describe('moment-balanced rates', () => {
   for (const shape of ['gutenberg-richter', 'characteristic'] as const) {
     it(`${shape}: the bins release μ A s`, () => {
-      const { magnitudes, annualRates } = magnitudeBins(recurrence(shape), { magnitudeStep: 0.1 }, AREA_KM2);
+      const { magnitudes, annualRates } = magnitudeBins(
+        recurrence(shape),
+        { magnitudeStep: 0.1 },
+        AREA_KM2,
+      );
       const released = annualRates.reduce((s, r, i) => s + r * m0(magnitudes[i] as number), 0);
-      expectRelative(released, MOMENT_RATE, 1e-9, 'μ A s, sum over bins of rate x M0 (Hanks & Kanamori 1979)');
+      expectRelative(
+        released,
+        MOMENT_RATE,
+        1e-9,
+        'μ A s, sum over bins of rate x M0 (Hanks & Kanamori 1979)',
+      );
     });
   }
 
   it('gutenberg-richter: the continuous truncated exponential releases μ A s within 0.5%', () => {
-    const { annualRates } = magnitudeBins(recurrence('gutenberg-richter'), { magnitudeStep: 0.1 }, AREA_KM2);
+    const { annualRates } = magnitudeBins(
+      recurrence('gutenberg-richter'),
+      { magnitudeStep: 0.1 },
+      AREA_KM2,
+    );
     const n0 = annualRates.reduce((s, r) => s + r, 0);
-    const density = (m: number): number => (beta * Math.exp(-beta * (m - 5))) / (1 - Math.exp(-beta * 2.5));
-    expectRelative(n0 * simpson((m) => density(m) * m0(m), 5, 7.5), MOMENT_RATE, 0.005, 'integral of N0 f(m) M0(m)');
+    const density = (m: number): number =>
+      (beta * Math.exp(-beta * (m - 5))) / (1 - Math.exp(-beta * 2.5));
+    expectRelative(
+      n0 * simpson((m) => density(m) * m0(m), 5, 7.5),
+      MOMENT_RATE,
+      0.005,
+      'integral of N0 f(m) M0(m)',
+    );
   });
 
   it('characteristic: the continuous Youngs & Coppersmith density releases μ A s within 0.5%', () => {
-    const { annualRates } = magnitudeBins(recurrence('characteristic'), { magnitudeStep: 0.1 }, AREA_KM2);
+    const { annualRates } = magnitudeBins(
+      recurrence('characteristic'),
+      { magnitudeStep: 0.1 },
+      AREA_KM2,
+    );
     const n0 = annualRates.reduce((s, r) => s + r, 0);
     const d = 1 - Math.exp(-beta * 2);
     const c2 = (beta * Math.exp(-beta * 1) * 0.5) / d;
-    const density = (m: number): number => (m < 7 ? beta * Math.exp(-beta * (m - 5)) : beta * Math.exp(-beta * 1)) / d / (1 + c2);
-    const released = n0 * (simpson((m) => density(m) * m0(m), 5, 7) + simpson((m) => density(m) * m0(m), 7, 7.5));
+    const density = (m: number): number =>
+      (m < 7 ? beta * Math.exp(-beta * (m - 5)) : beta * Math.exp(-beta * 1)) / d / (1 + c2);
+    const released =
+      n0 * (simpson((m) => density(m) * m0(m), 5, 7) + simpson((m) => density(m) * m0(m), 7, 7.5));
     expectRelative(released, MOMENT_RATE, 0.005, 'integral of N0 f(m) M0(m)');
   });
 
   it('refuses to balance without a fault area', () => {
-    expect(() => magnitudeBins(recurrence('gutenberg-richter'), { magnitudeStep: 0.1 })).toThrow(InvalidInput);
+    expect(() => magnitudeBins(recurrence('gutenberg-richter'), { magnitudeStep: 0.1 })).toThrow(
+      InvalidInput,
+    );
   });
 });

@@ -1,6 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { InvalidInput } from '../../../api/engine/errors.ts';
-import { rateAboveMinimum, truncatedExponentialBinProbabilities } from '../../../api/engine/recurrence/truncated-gr.ts';
+import {
+  rateAboveMinimum,
+  truncatedExponentialBinProbabilities,
+} from '../../../api/engine/recurrence/truncated-gr.ts';
 import { expectRelative } from '../../helpers/close.ts';
 
 describe('truncated exponential bin probabilities', () => {
@@ -18,18 +21,33 @@ describe('truncated exponential bin probabilities', () => {
   it('b 0.8 in 0.1 bins sums to 1 (1e-12), and a bin outside [mMin, mMax] carries nothing', () => {
     const edges = Array.from({ length: 41 }, (_, k) => 4 + k * 0.1);
     const p = truncatedExponentialBinProbabilities(edges, 4.5, 7.5, 0.8);
-    expectRelative(p.reduce((s, x) => s + x, 0), 1, 1e-12, 'total probability');
+    expectRelative(
+      p.reduce((s, x) => s + x, 0),
+      1,
+      1e-12,
+      'total probability',
+    );
     expect(p[0]).toBe(0);
     expect(p[39]).toBe(0);
   });
 
   it('ratio of neighbouring bins is 10^-b (the Gutenberg–Richter slope)', () => {
     const p = truncatedExponentialBinProbabilities([5, 5.1, 5.2, 5.3], 5, 7, 1.2);
-    expectRelative((p[1] ?? NaN) / (p[0] ?? NaN), 10 ** -0.12, 1e-12, 'Gutenberg & Richter (1944): log-linear with slope -b');
+    expectRelative(
+      (p[1] ?? NaN) / (p[0] ?? NaN),
+      10 ** -0.12,
+      1e-12,
+      'Gutenberg & Richter (1944): log-linear with slope -b',
+    );
   });
 
   it('rate of M >= mMin from aValue is 10^(a - b mMin), or the given rate', () => {
-    expectRelative(rateAboveMinimum({ aValue: 3.2, bValue: 0.9, mMin: 4.5 }), 10 ** (3.2 - 4.05), 1e-12, 'DESIGN.md section 2 definition');
+    expectRelative(
+      rateAboveMinimum({ aValue: 3.2, bValue: 0.9, mMin: 4.5 }),
+      10 ** (3.2 - 4.05),
+      1e-12,
+      'DESIGN.md section 2 definition',
+    );
     expect(rateAboveMinimum({ rate: 0.2, bValue: 1, mMin: 5 })).toBe(0.2);
     expect(() => rateAboveMinimum({ bValue: 1, mMin: 5 })).toThrow(InvalidInput);
   });

@@ -15,7 +15,8 @@ const models = createModelCatalog([cornell79], {
 });
 
 /** Cornell et al. (1979) as Baker (2008) states it: mean ln PGA = −0.152 + 0.859 M − 1.803 ln(R + 25), σ = 0.57. */
-const cornellMedianG = (m: number, rKm: number) => Math.exp(-0.152 + 0.859 * m - 1.803 * Math.log(rKm + 25));
+const cornellMedianG = (m: number, rKm: number) =>
+  Math.exp(-0.152 + 0.859 * m - 1.803 * Math.log(rKm + 25));
 
 const origin = [-140, -47] as const;
 const frame = createLocalFrame(origin);
@@ -32,7 +33,17 @@ function study(sources: Source[], communities: Community[]): Study {
     communities,
     sources,
     groundMotion: { crustal: [{ model: 'Cornell79', weight: 1 }], interface: [], intraslab: [] },
-    settings: { measures: ['PGA'], levels: {}, horizonsYears: [50], returnPeriodsYears: [475], truncationSigma: 3, maxDistanceKm: 300, magnitudeStep: 0.1, ruptureSpacingKm: 2, zoneCellKm: 10 },
+    settings: {
+      measures: ['PGA'],
+      levels: {},
+      horizonsYears: [50],
+      returnPeriodsYears: [475],
+      truncationSigma: 3,
+      maxDistanceKm: 300,
+      magnitudeStep: 0.1,
+      ruptureSpacingKm: 2,
+      zoneCellKm: 10,
+    },
   };
 }
 
@@ -41,7 +52,15 @@ const common = { setting: 'crustal', mechanism: 'strike-slip', rakeDeg: 0 } as c
 describe('runScenario', () => {
   it('gives Cornell et al. (1979) medians, 84th percentiles and Worden et al. (2012) MMI for a point source', () => {
     const [lon, lat] = at(0, 0);
-    const point: Source = { ...common, id: 'p', name: 'P', kind: 'point', location: [lon, lat], depthKm: 10, recurrence: { type: 'fixed', magnitude: 6.5, rate: 0.01 } };
+    const point: Source = {
+      ...common,
+      id: 'p',
+      name: 'P',
+      kind: 'point',
+      location: [lon, lat],
+      depthKm: 10,
+      recurrence: { type: 'fixed', magnitude: 6.5, rate: 0.01 },
+    };
     // Communities 30 and 0 km from the epicentre: the test's study frame is centred elsewhere, so
     // distances carry the projection's small error (< 1e-3 relative within 50 km, projection.ts).
     const s = study([point], [community('a', 30, 0), community('b', 0, 0)]);
@@ -49,24 +68,57 @@ describe('runScenario', () => {
     const [a, b] = result.communities;
     const rA = Math.hypot(30, 10);
     expectRelative(a!.rrupKm, rA, 1e-3, 'hypocentral distance sqrt(30² + 10²)');
-    expectRelative(a!.motions.PGA!.median, cornellMedianG(6.5, rA), 2e-3, 'Cornell et al. (1979) median PGA via Baker (2008)');
-    expectRelative(a!.motions.PGA!.p84, cornellMedianG(6.5, rA) * Math.exp(0.57), 2e-3, 'median x e^σ, σ = 0.57');
-    expectRelative(b!.motions.PGA!.median, cornellMedianG(6.5, 10), 2e-3, 'Cornell et al. (1979) at the epicentre, R = depth');
-    expectClose(a!.mmi.median, mmiFromPga(a!.motions.PGA!.median), 1e-12, 'MMI from the median PGA');
+    expectRelative(
+      a!.motions.PGA!.median,
+      cornellMedianG(6.5, rA),
+      2e-3,
+      'Cornell et al. (1979) median PGA via Baker (2008)',
+    );
+    expectRelative(
+      a!.motions.PGA!.p84,
+      cornellMedianG(6.5, rA) * Math.exp(0.57),
+      2e-3,
+      'median x e^σ, σ = 0.57',
+    );
+    expectRelative(
+      b!.motions.PGA!.median,
+      cornellMedianG(6.5, 10),
+      2e-3,
+      'Cornell et al. (1979) at the epicentre, R = depth',
+    );
+    expectClose(
+      a!.mmi.median,
+      mmiFromPga(a!.motions.PGA!.median),
+      1e-12,
+      'MMI from the median PGA',
+    );
     expect(result.position).toMatch(/closest/);
   });
 
   it("places the 'closest' rupture nearest each community and a named community's rupture for all", () => {
     const trace = [at(0, -40), at(0, 40)];
     const fault: Source = {
-      ...common, id: 'f', name: 'F', kind: 'fault', trace, dipDeg: 90, dipDirectionDeg: 90, upperDepthKm: 0, lowerDepthKm: 12,
+      ...common,
+      id: 'f',
+      name: 'F',
+      kind: 'fault',
+      trace,
+      dipDeg: 90,
+      dipDirectionDeg: 90,
+      upperDepthKm: 0,
+      lowerDepthKm: 12,
       recurrence: { type: 'fixed', magnitude: 6, rate: 0.01 },
     };
     const s = study([fault], [community('north', 5, 35), community('south', 5, -35)]);
     const each = runScenario(s, models, { sourceId: 'f', magnitude: 6 });
     // A vertical fault reaching the surface: the closest floating rupture lies beside each site, Rrup = 5 km.
-    for (const c of each.communities) expectClose(c.rrupKm, 5, 0.05, 'perpendicular distance to a vertical surface rupture');
-    const one = runScenario(s, models, { sourceId: 'f', magnitude: 6, position: { communityId: 'north' } });
+    for (const c of each.communities)
+      expectClose(c.rrupKm, 5, 0.05, 'perpendicular distance to a vertical surface rupture');
+    const one = runScenario(s, models, {
+      sourceId: 'f',
+      magnitude: 6,
+      position: { communityId: 'north' },
+    });
     expectClose(one.communities[0]!.rrupKm, 5, 0.05, 'north sits beside the chosen rupture');
     expect(one.communities[1]!.rrupKm).toBeGreaterThan(40);
   });
@@ -74,21 +126,47 @@ describe('runScenario', () => {
   it('places an explicit fault position from the start of the trace and refuses one off the fault', () => {
     const trace = [at(0, -40), at(0, 40)];
     const fault: Source = {
-      ...common, id: 'f', name: 'F', kind: 'fault', trace, dipDeg: 90, dipDirectionDeg: 90, upperDepthKm: 0, lowerDepthKm: 12,
+      ...common,
+      id: 'f',
+      name: 'F',
+      kind: 'fault',
+      trace,
+      dipDeg: 90,
+      dipDirectionDeg: 90,
+      upperDepthKm: 0,
+      lowerDepthKm: 12,
       recurrence: { type: 'fixed', magnitude: 6, rate: 0.01 },
     };
     const s = study([fault], [community('south', 5, -35), community('north', 5, 35)]);
     // M 6 strike-slip: Wells & Coppersmith (1994) area and width give a rupture about 13 km long
     // (from memory), so one starting at the south end runs from y = -40 to about y = -27 km.
-    const result = runScenario(s, models, { sourceId: 'f', magnitude: 6, position: { alongStrikeKm: 0, downDipKm: 0 } });
+    const result = runScenario(s, models, {
+      sourceId: 'f',
+      magnitude: 6,
+      position: { alongStrikeKm: 0, downDipKm: 0 },
+    });
     expectClose(result.communities[0]!.rrupKm, 5, 0.05, 'south sits beside the rupture');
     expect(result.communities[1]!.rrupKm).toBeGreaterThan(50);
-    expect(() => runScenario(s, models, { sourceId: 'f', magnitude: 6, position: { alongStrikeKm: 79, downDipKm: 0 } })).toThrow(/position.alongStrikeKm/);
+    expect(() =>
+      runScenario(s, models, {
+        sourceId: 'f',
+        magnitude: 6,
+        position: { alongStrikeKm: 79, downDipKm: 0 },
+      }),
+    ).toThrow(/position.alongStrikeKm/);
   });
 
   it('refuses an unknown source, a magnitude out of range and a bad explicit position, naming the field', () => {
     const [lon, lat] = at(0, 0);
-    const point: Source = { ...common, id: 'p', name: 'P', kind: 'point', location: [lon, lat], depthKm: 10, recurrence: { type: 'fixed', magnitude: 6.5, rate: 0.01 } };
+    const point: Source = {
+      ...common,
+      id: 'p',
+      name: 'P',
+      kind: 'point',
+      location: [lon, lat],
+      depthKm: 10,
+      recurrence: { type: 'fixed', magnitude: 6.5, rate: 0.01 },
+    };
     const s = study([point], [community('a', 30, 0)]);
     const issuePaths = (request: Parameters<typeof runScenario>[2]) => {
       try {
@@ -101,13 +179,25 @@ describe('runScenario', () => {
     };
     expect(issuePaths({ sourceId: 'nope', magnitude: 6 })).toEqual(['sourceId']);
     expect(issuePaths({ sourceId: 'p', magnitude: 11 })).toEqual(['magnitude']);
-    expect(issuePaths({ sourceId: 'p', magnitude: 6, position: { alongStrikeKm: 1, downDipKm: 0 } })).toEqual(['position']);
-    expect(runScenario(s, models, { sourceId: 'p', magnitude: 7 }).warnings[0]).toMatch(/outside the magnitudes/);
+    expect(
+      issuePaths({ sourceId: 'p', magnitude: 6, position: { alongStrikeKm: 1, downDipKm: 0 } }),
+    ).toEqual(['position']);
+    expect(runScenario(s, models, { sourceId: 'p', magnitude: 7 }).warnings[0]).toMatch(
+      /outside the magnitudes/,
+    );
   });
 
   it('maps median PGA on a grid, strongest at the grid point nearest the epicentre', () => {
     const [lon, lat] = at(0, 0);
-    const point: Source = { ...common, id: 'p', name: 'P', kind: 'point', location: [lon, lat], depthKm: 10, recurrence: { type: 'fixed', magnitude: 6.5, rate: 0.01 } };
+    const point: Source = {
+      ...common,
+      id: 'p',
+      name: 'P',
+      kind: 'point',
+      location: [lon, lat],
+      depthKm: 10,
+      recurrence: { type: 'fixed', magnitude: 6.5, rate: 0.01 },
+    };
     const s = study([point], [community('a', 30, 0)]);
     const { grid } = runScenario(s, models, { sourceId: 'p', magnitude: 6.5, gridSpacingKm: 5 });
     expect(grid).toBeDefined();
@@ -120,15 +210,29 @@ describe('runScenario', () => {
   it('with a map, the table and the map show one earthquake: each community reads as the map beside it', () => {
     const trace = [at(0, -40), at(0, 40)];
     const fault: Source = {
-      ...common, id: 'f', name: 'F', kind: 'fault', trace, dipDeg: 90, dipDirectionDeg: 90, upperDepthKm: 0, lowerDepthKm: 12,
+      ...common,
+      id: 'f',
+      name: 'F',
+      kind: 'fault',
+      trace,
+      dipDeg: 90,
+      dipDirectionDeg: 90,
+      upperDepthKm: 0,
+      lowerDepthKm: 12,
       recurrence: { type: 'fixed', magnitude: 6, rate: 0.01 },
     };
-    const s = study([fault], [community('north', 5, 35), community('south', 5, -35), community('middle', 5, 0)]);
+    const s = study(
+      [fault],
+      [community('north', 5, 35), community('south', 5, -35), community('middle', 5, 0)],
+    );
     const mapped = runScenario(s, models, { sourceId: 'f', magnitude: 6, gridSpacingKm: 1 });
     const grid = mapped.grid!;
     expect(mapped.position).toMatch(/middle of the source, for every community and the map/);
     for (const c of mapped.communities) {
-      const site = frame.toLocal([s.communities.find((x) => x.id === c.communityId)!.lon, s.communities.find((x) => x.id === c.communityId)!.lat]);
+      const site = frame.toLocal([
+        s.communities.find((x) => x.id === c.communityId)!.lon,
+        s.communities.find((x) => x.id === c.communityId)!.lat,
+      ]);
       let nearest = 0;
       let best = Infinity;
       grid.lon.forEach((lon, i) => {
@@ -138,16 +242,31 @@ describe('runScenario', () => {
       });
       // Communities and grid both on Vs30 760 with Cornell et al. (1979): within 1 km of the
       // community the map differs from the table only by that step (ours: a bound on the slope).
-      expectClose(grid.mmiMedian[nearest]!, c.mmi.median, 0.25, `${c.communityId}: the map beside it`);
+      expectClose(
+        grid.mmiMedian[nearest]!,
+        c.mmi.median,
+        0.25,
+        `${c.communityId}: the map beside it`,
+      );
     }
     // The one rupture sits in the middle: the ends see it from afar, alike.
     const [north, south, middle] = mapped.communities;
     expect(north!.rrupKm).toBeGreaterThan(20);
-    expectClose(north!.rrupKm, south!.rrupKm, 3, 'north and south see the middle rupture from about as far');
+    expectClose(
+      north!.rrupKm,
+      south!.rrupKm,
+      3,
+      'north and south see the middle rupture from about as far',
+    );
     expectClose(middle!.rrupKm, 5, 0.05, 'the middle community sits beside the rupture');
     // Asking for a different rupture beside each community together with a map is refused, naming the field.
     try {
-      runScenario(s, models, { sourceId: 'f', magnitude: 6, gridSpacingKm: 5, position: 'closest' });
+      runScenario(s, models, {
+        sourceId: 'f',
+        magnitude: 6,
+        gridSpacingKm: 5,
+        position: 'closest',
+      });
       expect.unreachable('closest with a map must be refused');
     } catch (error) {
       expect(error).toBeInstanceOf(InvalidInput);

@@ -26,8 +26,23 @@ function study(communities: object[]): Study {
         features: [
           {
             type: 'Feature',
-            geometry: { type: 'LineString', coordinates: [[-141.2, -47.5], [-141.2, -46.9]] },
-            properties: { id: 'trench', name: 'Test trench', setting: 'interface', mechanism: 'reverse', dip: 45, upperDepthKm: 5, lowerDepthKm: 15, recurrence: { type: 'fixed', magnitude: 8, rate: 0.001 } },
+            geometry: {
+              type: 'LineString',
+              coordinates: [
+                [-141.2, -47.5],
+                [-141.2, -46.9],
+              ],
+            },
+            properties: {
+              id: 'trench',
+              name: 'Test trench',
+              setting: 'interface',
+              mechanism: 'reverse',
+              dip: 45,
+              upperDepthKm: 5,
+              lowerDepthKm: 15,
+              recurrence: { type: 'fixed', magnitude: 8, rate: 0.001 },
+            },
           },
         ],
       },
@@ -42,18 +57,31 @@ function study(communities: object[]): Study {
 
 /** A lon/lat grid of 0.01° from `west` to −139.0 and −48.0 to −46.4: sea of constant depth west of the coast, a ramp of land east. */
 function shoreGrid(west = -142.0) {
-  const cell = 0.01, north = -46.4;
-  const columns = Math.round((-139.0 - west) / cell), rows = Math.round((north + 48.0) / cell);
+  const cell = 0.01,
+    north = -46.4;
+  const columns = Math.round((-139.0 - west) / cell),
+    rows = Math.round((north + 48.0) / cell);
   const values = new Float32Array(columns * rows);
   for (let r = 0; r < rows; r += 1) {
     const lat = north - (r + 0.5) * cell;
     const kmPerDeg = (Math.PI / 180) * 6371 * Math.cos((lat * Math.PI) / 180);
     for (let c = 0; c < columns; c += 1) {
       const lon = west + (c + 0.5) * cell;
-      values[r * columns + c] = lon < COAST_LON ? -SEA_DEPTH_M : landM((lon - COAST_LON) * kmPerDeg);
+      values[r * columns + c] =
+        lon < COAST_LON ? -SEA_DEPTH_M : landM((lon - COAST_LON) * kmPerDeg);
     }
   }
-  return createElevationGrid({ label: 'shore.asc', crs: { kind: 'lonlat' }, columns, rows, west, north, cellWidth: cell, cellHeight: cell, elevationM: values });
+  return createElevationGrid({
+    label: 'shore.asc',
+    crs: { kind: 'lonlat' },
+    columns,
+    rows,
+    west,
+    north,
+    cellWidth: cell,
+    cellHeight: cell,
+    elevationM: values,
+  });
 }
 
 const cove = { id: 'cove', name: 'Cove', lon: -139.995, lat: -47.2, vs30: 400, coastal: true };
@@ -72,8 +100,14 @@ describe('tsunami first arrival for coastal communities', () => {
     const traceX = frame.toLocal([-141.2, -47.2]).x;
     const siteX = frame.toLocal([cove.lon, cove.lat]).x;
     const distanceKm = siteX - community.arrivals[0]!.coastDistanceKm - (traceX + 10);
-    const expectedMinutes = (distanceKm * 1000) / Math.sqrt(STANDARD_GRAVITY_MS2 * SEA_DEPTH_M) / 60;
-    expectRelative(arrival.gridMinutes, expectedMinutes, 0.02, 'distance / √(g h) (Lamb 1932 §170 for the speed; distance derived)');
+    const expectedMinutes =
+      (distanceKm * 1000) / Math.sqrt(STANDARD_GRAVITY_MS2 * SEA_DEPTH_M) / 60;
+    expectRelative(
+      arrival.gridMinutes,
+      expectedMinutes,
+      0.02,
+      'distance / √(g h) (Lamb 1932 §170 for the speed; distance derived)',
+    );
     expect(community.firstArrivalMinutes).toBeLessThanOrEqual(Math.floor(expectedMinutes));
     expect(community.latestMinutes).toBeGreaterThanOrEqual(Math.floor(expectedMinutes));
     expect(community.sourceId).toBe('trench');
@@ -84,16 +118,22 @@ describe('tsunami first arrival for coastal communities', () => {
     const result = tsunamiScreening(study([cove, inland]), shoreGrid());
     const farm = result.communities.find((c) => c.id === 'hill-farm');
     expect(farm?.firstArrivalMinutes).toBeNull();
-    expect(farm?.problems.join(' ')).toMatch(/community "hill-farm" \(Hill Farm\).*no sea within 5 km/);
+    expect(farm?.problems.join(' ')).toMatch(
+      /community "hill-farm" \(Hill Farm\).*no sea within 5 km/,
+    );
   });
 
   it('refuses a grid that does not cover the source, naming the file and the source', () => {
     expect(() => tsunamiScreening(study([cove]), shoreGrid(-141.0))).toThrow(InvalidInput);
-    expect(() => tsunamiScreening(study([cove]), shoreGrid(-141.0))).toThrow(/"shore\.asc" does not cover the rupture area of source "trench"/);
+    expect(() => tsunamiScreening(study([cove]), shoreGrid(-141.0))).toThrow(
+      /"shore\.asc" does not cover the rupture area of source "trench"/,
+    );
   });
 
   it('refuses a source that is not an interface source of the study', () => {
-    expect(() => tsunamiScreening(study([cove]), shoreGrid(), { sourceIds: ['nowhere'] })).toThrow(/not an interface source of the study: nowhere/);
+    expect(() => tsunamiScreening(study([cove]), shoreGrid(), { sourceIds: ['nowhere'] })).toThrow(
+      /not an interface source of the study: nowhere/,
+    );
   });
 });
 
@@ -103,7 +143,12 @@ describe('nearest high ground', () => {
     if (found.kind !== 'found') throw new Error(found.kind);
     const kmPerDeg = (Math.PI / 180) * 6371 * Math.cos((47.2 * Math.PI) / 180);
     const expectedKm = (30 - 2) / 10 - 0.01 * kmPerDeg;
-    expectClose(found.distanceKm, expectedKm, 0.1, 'ramp of the test grid (derived); 0.05 km rings and the sphere-versus-ellipsoid scale allow 0.1 km');
+    expectClose(
+      found.distanceKm,
+      expectedKm,
+      0.1,
+      'ramp of the test grid (derived); 0.05 km rings and the sphere-versus-ellipsoid scale allow 0.1 km',
+    );
     expectClose(found.bearingDeg, 90, 2, 'due east, up the ramp (derived)');
     expect(found.walkingMinutes).toBe(Math.ceil((found.distanceKm * 1000) / SLOW_WALK_MS / 60));
   });

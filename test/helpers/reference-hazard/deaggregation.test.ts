@@ -20,14 +20,28 @@ import { expectClose } from '../close.ts';
 
 const PGA = { kind: 'PGA' } as const;
 
-function deagg(specs: readonly PointRuptureSpec[], level: number, truncationSigma: number, models: readonly [GroundMotionModel, number][] = [[cornell79, 1]]) {
+function deagg(
+  specs: readonly PointRuptureSpec[],
+  level: number,
+  truncationSigma: number,
+  models: readonly [GroundMotionModel, number][] = [[cornell79, 1]],
+) {
   const { ruptures, distances } = pointRuptures(specs);
   const selected = selectRuptures(ruptures, distances, 'crustal', 300);
   const branches: DeaggregationBranch[] = models.map(([model, weight]) => ({
     weight,
     predictions: predictRuptures(model, PGA, ruptures, distances, ROCK_SITE, selected),
   }));
-  return deaggregate({ measure: 'PGA', level, returnPeriodYears: 475, ruptures, distances, branches, sourceNames: ['Near fault', 'Far fault'], truncationSigma });
+  return deaggregate({
+    measure: 'PGA',
+    level,
+    returnPeriodYears: 475,
+    ruptures,
+    distances,
+    branches,
+    sourceNames: ['Near fault', 'Far fault'],
+    truncationSigma,
+  });
 }
 
 /*
@@ -50,25 +64,53 @@ describe('deaggregate: two ruptures (hand computation)', () => {
   });
 
   it('means: M 6.66923, Rrup 13.38456 km, ε −1.11948', () => {
-    expectClose(d.mean.magnitude, 6.669227962308164, 1e-12, 'contribution-weighted mean M, hand computation');
-    expectClose(d.mean.distanceKm, 13.38455924616327, 1e-11, 'contribution-weighted mean R, hand computation');
-    expectClose(d.mean.epsilon, -1.1194796016747246, 1e-12, 'contribution-weighted mean ε, hand computation');
+    expectClose(
+      d.mean.magnitude,
+      6.669227962308164,
+      1e-12,
+      'contribution-weighted mean M, hand computation',
+    );
+    expectClose(
+      d.mean.distanceKm,
+      13.38455924616327,
+      1e-11,
+      'contribution-weighted mean R, hand computation',
+    );
+    expectClose(
+      d.mean.epsilon,
+      -1.1194796016747246,
+      1e-12,
+      'contribution-weighted mean ε, hand computation',
+    );
   });
 
   it('bins: M 6.5–7, R 10–20 km, ε −2…−1 holds the near rupture; the mode is that bin', () => {
     expect(d.bins.map((b) => [b.magnitude, b.distanceKm, b.epsilon])).toEqual([
-      [[6.5, 7], [10, 20], [-2, -1]],
-      [[7.5, 8], [20, 40], [-2, -1]],
+      [
+        [6.5, 7],
+        [10, 20],
+        [-2, -1],
+      ],
+      [
+        [7.5, 8],
+        [20, 40],
+        [-2, -1],
+      ],
     ]);
     expectClose(d.bins[0]!.share, 0.8307720376918365, 1e-12, 'hand computation');
     expectClose(d.mode.magnitude, 6.5, 1e-12, 'modal bin holds only M 6.5');
     expectClose(d.mode.distanceKm, 10, 1e-12, 'modal bin holds only R 10 km');
-    expectClose(d.mode.epsilon, -1.1063953641555926, 1e-12, 'ε of the near rupture, hand computation');
+    expectClose(
+      d.mode.epsilon,
+      -1.1063953641555926,
+      1e-12,
+      'ε of the near rupture, hand computation',
+    );
     expect([d.level, d.measure, d.returnPeriodYears]).toEqual([0.2, 'PGA', 475]);
   });
 });
 
-describe('deaggregate: over a logic tree, weighted by each branch\'s contribution', () => {
+describe("deaggregate: over a logic tree, weighted by each branch's contribution", () => {
   it('Cornell79 (0.6) and Cornell79 × 1.5 (0.4), one rupture, PGA > 0.3 g: mean ε = −0.72863 (hand computation)', () => {
     // ε₁ = (ln 0.3 + 0.9787926)/0.57 = −0.3950531; ε₂ = ε₁ − ln 1.5/0.57 = −1.1063954;
     // weights 0.6 × 0.01 Q(ε₁) and 0.4 × 0.01 Q(ε₂).
@@ -78,7 +120,12 @@ describe('deaggregate: over a logic tree, weighted by each branch\'s contributio
     ])!;
     expectClose(d.mean.epsilon, -0.7286310847243446, 1e-12, 'hand computation');
     expect(d.bins.length).toBe(2);
-    expectClose(d.bins.reduce((s, b) => s + b.share, 0), 1, 1e-12, 'shares sum to 1');
+    expectClose(
+      d.bins.reduce((s, b) => s + b.share, 0),
+      1,
+      1e-12,
+      'shares sum to 1',
+    );
   });
 });
 
@@ -94,22 +141,37 @@ const specsArb = fc.array(
 );
 
 describe('deaggregate: properties', () => {
-  it('shares by source and by bin each sum to 1 within 1e-9; means lie within the ruptures\' range', () => {
+  it("shares by source and by bin each sum to 1 within 1e-9; means lie within the ruptures' range", () => {
     fc.assert(
-      fc.property(specsArb, fc.double({ min: 0.001, max: 2, noNaN: true }), fc.constantFrom(0, 2, 3, Infinity), (raw, level, n) => {
-        const specs = raw.map((s) => ({ ...s, sourceId: `s${s.sourceIndex}` }));
-        const d = deagg(specs, level, n);
-        if (d === null) return;
-        expectClose(d.bySource.reduce((s, b) => s + b.share, 0), 1, 1e-9, 'source shares sum to 1');
-        expectClose(d.bins.reduce((s, b) => s + b.share, 0), 1, 1e-9, 'bin shares sum to 1');
-        const ms = specs.map((s) => s.magnitude);
-        expect(d.mean.magnitude).toBeGreaterThanOrEqual(Math.min(...ms) - 1e-9);
-        expect(d.mean.magnitude).toBeLessThanOrEqual(Math.max(...ms) + 1e-9);
-        for (const b of d.bins) {
-          expect(b.share).toBeGreaterThan(0);
-          expect(b.epsilon[0]).toBeLessThan(b.epsilon[1]);
-        }
-      }),
+      fc.property(
+        specsArb,
+        fc.double({ min: 0.001, max: 2, noNaN: true }),
+        fc.constantFrom(0, 2, 3, Infinity),
+        (raw, level, n) => {
+          const specs = raw.map((s) => ({ ...s, sourceId: `s${s.sourceIndex}` }));
+          const d = deagg(specs, level, n);
+          if (d === null) return;
+          expectClose(
+            d.bySource.reduce((s, b) => s + b.share, 0),
+            1,
+            1e-9,
+            'source shares sum to 1',
+          );
+          expectClose(
+            d.bins.reduce((s, b) => s + b.share, 0),
+            1,
+            1e-9,
+            'bin shares sum to 1',
+          );
+          const ms = specs.map((s) => s.magnitude);
+          expect(d.mean.magnitude).toBeGreaterThanOrEqual(Math.min(...ms) - 1e-9);
+          expect(d.mean.magnitude).toBeLessThanOrEqual(Math.max(...ms) + 1e-9);
+          for (const b of d.bins) {
+            expect(b.share).toBeGreaterThan(0);
+            expect(b.epsilon[0]).toBeLessThan(b.epsilon[1]);
+          }
+        },
+      ),
     );
   });
 

@@ -9,9 +9,18 @@ import {
   magnitudeBin,
   magnitudeBinRange,
 } from '../../../api/engine/hazard/deaggregation-bins.ts';
-import { accumulate, accumulatedTotals, compensatedSum, createLevelAccumulator, type LevelAccumulator } from '../../../api/engine/summation.ts';
+import {
+  accumulate,
+  accumulatedTotals,
+  compensatedSum,
+  createLevelAccumulator,
+  type LevelAccumulator,
+} from '../../../api/engine/summation.ts';
 import type { RupturePredictions } from './rupture-predictions.ts';
-import { exceedanceProbability, standardisedLevel } from '../../../api/engine/hazard/truncated-exceedance.ts';
+import {
+  exceedanceProbability,
+  standardisedLevel,
+} from '../../../api/engine/hazard/truncated-exceedance.ts';
 
 /** One logic-tree branch of one setting: its weight and its predictions of the measure. */
 export interface DeaggregationBranch {
@@ -75,7 +84,8 @@ export function deaggregate(options: DeaggregationOptions): Deaggregation | null
       const rupture = ruptures[ruptureIndex] as Rupture;
       const sigma = predictions.sigma[k] as number;
       const rawEpsilon = standardisedLevel(lnLevel, predictions.lnMedian[k] as number, sigma);
-      const contribution = weight * rupture.annualRate * exceedanceProbability(rawEpsilon, truncationSigma);
+      const contribution =
+        weight * rupture.annualRate * exceedanceProbability(rawEpsilon, truncationSigma);
       if (!(contribution > 0)) return;
       const epsilon = Math.max(-EPSILON_LIMIT, Math.min(EPSILON_LIMIT, rawEpsilon));
       const magnitude = rupture.context.magnitude;
@@ -122,7 +132,8 @@ export function deaggregate(options: DeaggregationOptions): Deaggregation | null
 
   // The first of equal largest bins, in the order above, so the mode is deterministic.
   let modal = binTotals[0] as (typeof binTotals)[number];
-  for (const b of binTotals) if ((b.totals[RATE] as number) > (modal.totals[RATE] as number)) modal = b;
+  for (const b of binTotals)
+    if ((b.totals[RATE] as number) > (modal.totals[RATE] as number)) modal = b;
   const modalRate = modal.totals[RATE] as number;
 
   const sources = [...bySource.entries()].map(([sourceIndex, { sourceId, acc }]) => ({
@@ -133,7 +144,10 @@ export function deaggregate(options: DeaggregationOptions): Deaggregation | null
   const sourceSum = compensatedSum(sources.map((s) => s.rate));
   const bySourceShares = sources
     .map(({ sourceId, name, rate }) => ({ sourceId, name, share: rate / sourceSum }))
-    .sort((a, b) => b.share - a.share || (a.sourceId < b.sourceId ? -1 : a.sourceId > b.sourceId ? 1 : 0));
+    .sort(
+      (a, b) =>
+        b.share - a.share || (a.sourceId < b.sourceId ? -1 : a.sourceId > b.sourceId ? 1 : 0),
+    );
 
   return {
     measure: options.measure,

@@ -10,10 +10,20 @@ import { expectRelative } from '../close.ts';
 
 const PGA = { kind: 'PGA' } as const;
 
-function curve(specs: readonly PointRuptureSpec[], levels: readonly number[], truncationSigma: number, maxDistanceKm = 300): number[] {
+function curve(
+  specs: readonly PointRuptureSpec[],
+  levels: readonly number[],
+  truncationSigma: number,
+  maxDistanceKm = 300,
+): number[] {
   const { ruptures, distances } = pointRuptures(specs);
   const selected = selectRuptures(ruptures, distances, 'crustal', maxDistanceKm);
-  return exceedanceCurve(predictRuptures(cornell79, PGA, ruptures, distances, ROCK_SITE, selected), ruptures, levels, truncationSigma);
+  return exceedanceCurve(
+    predictRuptures(cornell79, PGA, ruptures, distances, ROCK_SITE, selected),
+    ruptures,
+    levels,
+    truncationSigma,
+  );
 }
 
 /*
@@ -29,15 +39,28 @@ describe('exceedanceCurve: one rupture (Baker 2008 single-scenario example set-u
   const levels = [0.1, 0.2, 0.3, 0.5, 1.0];
 
   it('untruncated: λ(PGA > 0.1, 0.2, 0.3, 0.5, 1 g) = 0.01 × (0.98990, 0.86572, 0.65360, 0.30814, 0.04297) (hand computation)', () => {
-    const expected = [0.009898954541949763, 0.008657222844156154, 0.006535981385028097, 0.003081390307182214, 0.0004297315155098654];
+    const expected = [
+      0.009898954541949763, 0.008657222844156154, 0.006535981385028097, 0.003081390307182214,
+      0.0004297315155098654,
+    ];
     curve(scenario, levels, Infinity).forEach((rate, i) =>
-      expectRelative(rate, expected[i] as number, 1e-12, `Baker (2008) set-up, hand computation at ${levels[i]} g`),
+      expectRelative(
+        rate,
+        expected[i] as number,
+        1e-12,
+        `Baker (2008) set-up, hand computation at ${levels[i]} g`,
+      ),
     );
   });
 
   it('truncated at 3σ: renormalised two-sided (hand computation)', () => {
-    const expected = [0.00991221652478526, 0.008667123329284045, 0.006540139447445181, 0.0030761964298771103, 0.0004173593202433224];
-    curve(scenario, levels, 3).forEach((rate, i) => expectRelative(rate, expected[i] as number, 1e-12, `3σ truncation at ${levels[i]} g`));
+    const expected = [
+      0.00991221652478526, 0.008667123329284045, 0.006540139447445181, 0.0030761964298771103,
+      0.0004173593202433224,
+    ];
+    curve(scenario, levels, 3).forEach((rate, i) =>
+      expectRelative(rate, expected[i] as number, 1e-12, `3σ truncation at ${levels[i]} g`),
+    );
   });
 });
 
@@ -52,7 +75,12 @@ describe('exceedanceCurve: two ruptures add (total probability over ruptures; Ba
       [0.2],
       Infinity,
     );
-    expectRelative(rate as number, 0.010420695992860838, 1e-12, 'sum over two ruptures, hand computation');
+    expectRelative(
+      rate as number,
+      0.010420695992860838,
+      1e-12,
+      'sum over two ruptures, hand computation',
+    );
   });
 });
 
@@ -75,13 +103,21 @@ describe('exceedanceCurve: Gutenberg–Richter source (independent numerical int
   const levels = [0.01, 0.1, 0.3, 1.0];
 
   it('untruncated', () => {
-    const expected = [0.049999738720433805, 0.036098773228173946, 0.0073834162624877775, 0.0003255471562728128];
-    curve(specs, levels, Infinity).forEach((rate, i) => expectRelative(rate, expected[i] as number, 1e-4, `Simpson integral at ${levels[i]} g`));
+    const expected = [
+      0.049999738720433805, 0.036098773228173946, 0.0073834162624877775, 0.0003255471562728128,
+    ];
+    curve(specs, levels, Infinity).forEach((rate, i) =>
+      expectRelative(rate, expected[i] as number, 1e-4, `Simpson integral at ${levels[i]} g`),
+    );
   });
 
   it('truncated at 3σ', () => {
-    const expected = [0.04999999999999966, 0.036128358534134875, 0.007335726325962092, 0.0003013181525552821];
-    curve(specs, levels, 3).forEach((rate, i) => expectRelative(rate, expected[i] as number, 1e-4, `Simpson integral at ${levels[i]} g, 3σ`));
+    const expected = [
+      0.04999999999999966, 0.036128358534134875, 0.007335726325962092, 0.0003013181525552821,
+    ];
+    curve(specs, levels, 3).forEach((rate, i) =>
+      expectRelative(rate, expected[i] as number, 1e-4, `Simpson integral at ${levels[i]} g, 3σ`),
+    );
   });
 });
 
@@ -123,8 +159,15 @@ describe('exceedanceCurve: properties', () => {
     fc.assert(
       fc.property(rupturesArb, (specs) => {
         const { ruptures, distances } = pointRuptures(specs);
-        const medians = ruptures.map((r, i) => cornell79.predict({ ...r.context, ...distances[i]!, ...ROCK_SITE }, PGA).lnMedian);
-        const step = levels.map((x) => compensatedSum(ruptures.filter((_, i) => medians[i]! > Math.log(x)).map((r) => r.annualRate)));
+        const medians = ruptures.map(
+          (r, i) =>
+            cornell79.predict({ ...r.context, ...distances[i]!, ...ROCK_SITE }, PGA).lnMedian,
+        );
+        const step = levels.map((x) =>
+          compensatedSum(
+            ruptures.filter((_, i) => medians[i]! > Math.log(x)).map((r) => r.annualRate),
+          ),
+        );
         expect(curve(specs, levels, 0)).toEqual(step);
       }),
     );
@@ -134,18 +177,29 @@ describe('exceedanceCurve: properties', () => {
     fc.assert(
       fc.property(rupturesArb, (specs) => {
         const base = curve(specs, levels, 3, 300);
-        expect(curve([...specs, { magnitude: 8, annualRate: 1, repiKm: 300.001 }], levels, 3, 300)).toEqual(base);
+        expect(
+          curve([...specs, { magnitude: 8, annualRate: 1, repiKm: 300.001 }], levels, 3, 300),
+        ).toEqual(base);
       }),
     );
     const atLimit = curve([{ magnitude: 8, annualRate: 1, repiKm: 300 }], [0.001], 3, 300);
     expect(atLimit[0]).toBeGreaterThan(0);
     // The cut-off is on Rjb: a deep rupture with Rjb 299 km and Rrup 300.5 km still counts.
-    const deep = curve([{ magnitude: 8, annualRate: 1, repiKm: 299, depthKm: 30 }], [0.001], 3, 300);
+    const deep = curve(
+      [{ magnitude: 8, annualRate: 1, repiKm: 299, depthKm: 30 }],
+      [0.001],
+      3,
+      300,
+    );
     expect(deep[0]).toBeGreaterThan(0);
   });
 
   it('ruptures of another setting are not integrated with crustal models', () => {
-    const rates = curve([{ magnitude: 7, annualRate: 0.1, repiKm: 10, setting: 'interface' }], levels, 3);
+    const rates = curve(
+      [{ magnitude: 7, annualRate: 0.1, repiKm: 10, setting: 'interface' }],
+      levels,
+      3,
+    );
     expect(rates.every((r) => r === 0)).toBe(true);
   });
 });

@@ -1,6 +1,13 @@
-import { exceedanceProbability, standardisedLevel } from '../../../api/engine/hazard/truncated-exceedance.ts';
+import {
+  exceedanceProbability,
+  standardisedLevel,
+} from '../../../api/engine/hazard/truncated-exceedance.ts';
 import type { Rupture } from '../../../api/engine/ruptures/rupture.ts';
-import { accumulate, accumulatedTotals, createLevelAccumulator } from '../../../api/engine/summation.ts';
+import {
+  accumulate,
+  accumulatedTotals,
+  createLevelAccumulator,
+} from '../../../api/engine/summation.ts';
 import type { RupturePredictions } from './rupture-predictions.ts';
 
 /**
@@ -23,7 +30,10 @@ export function exceedanceCurve(
     const lnMedian = predictions.lnMedian[k] as number;
     const sigma = predictions.sigma[k] as number;
     for (let j = 0; j < lnLevels.length; j++) {
-      const p = exceedanceProbability(standardisedLevel(lnLevels[j] as number, lnMedian, sigma), truncationSigma);
+      const p = exceedanceProbability(
+        standardisedLevel(lnLevels[j] as number, lnMedian, sigma),
+        truncationSigma,
+      );
       // Levels increase, so once a rupture cannot exceed one it cannot exceed the rest.
       if (p === 0) break;
       accumulate(acc, j, rate * p);

@@ -53,7 +53,18 @@ function referenceHazard(
   const { settings } = setup.study;
   const siteXY = frame.toLocal([community.lon, community.lat]);
   // A refined zone cell counts as itself or as its squares by the site's distance (geometry/cell-refinement.ts).
-  const ruptures = all.filter((r) => !r.cellUse || cellUsedAt(r.cellUse.near, r.cellUse.centre.x, r.cellUse.centre.y, r.cellUse.radiusKm, siteXY.x, siteXY.y));
+  const ruptures = all.filter(
+    (r) =>
+      !r.cellUse ||
+      cellUsedAt(
+        r.cellUse.near,
+        r.cellUse.centre.x,
+        r.cellUse.centre.y,
+        r.cellUse.radiusKm,
+        siteXY.x,
+        siteXY.y,
+      ),
+  );
   const distances = ruptures.map((r) => ruptureDistances(r.surface, siteXY));
   const hazard = siteHazard({
     ruptures,

@@ -3,7 +3,11 @@ import { gmmInput } from '../../../api/engine/hazard/gmm-input.ts';
 import type { TectonicSetting } from '../../../api/engine/model.ts';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
 import { measureLabel } from '../../../api/engine/motion/measure.ts';
-import type { DistanceContext, GroundMotionModel, SiteContext } from '../../../api/engine/motion/types.ts';
+import type {
+  DistanceContext,
+  GroundMotionModel,
+  SiteContext,
+} from '../../../api/engine/motion/types.ts';
 import type { Rupture } from '../../../api/engine/ruptures/rupture.ts';
 
 /**
@@ -18,11 +22,17 @@ export function selectRuptures(
   maxDistanceKm: number,
 ): Int32Array {
   if (distances.length !== ruptures.length) {
-    throw new TremoraError(`expected one distance context per rupture (${ruptures.length}), got ${distances.length}`);
+    throw new TremoraError(
+      `expected one distance context per rupture (${ruptures.length}), got ${distances.length}`,
+    );
   }
   const kept: number[] = [];
   ruptures.forEach((rupture, i) => {
-    if (rupture.context.setting === setting && (distances[i] as DistanceContext).rjbKm <= maxDistanceKm) kept.push(i);
+    if (
+      rupture.context.setting === setting &&
+      (distances[i] as DistanceContext).rjbKm <= maxDistanceKm
+    )
+      kept.push(i);
   });
   return Int32Array.from(kept);
 }
@@ -55,8 +65,14 @@ export function predictRuptures(
   let firstNote: string | null = null;
   selected.forEach((ruptureIndex, k) => {
     const rupture = ruptures[ruptureIndex] as Rupture;
-    const prediction = model.predict(gmmInput(rupture.context, distances[ruptureIndex] as DistanceContext, site), measure);
-    if (!Number.isFinite(prediction.lnMedian) || !(prediction.sigma >= 0 && Number.isFinite(prediction.sigma))) {
+    const prediction = model.predict(
+      gmmInput(rupture.context, distances[ruptureIndex] as DistanceContext, site),
+      measure,
+    );
+    if (
+      !Number.isFinite(prediction.lnMedian) ||
+      !(prediction.sigma >= 0 && Number.isFinite(prediction.sigma))
+    ) {
       throw new TremoraError(
         `${model.name} gave ln median ${prediction.lnMedian} and sigma ${prediction.sigma} for ${measureLabel(measure)} ` +
           `from a rupture of source "${rupture.sourceId}"; expected finite numbers with sigma >= 0`,

@@ -13,8 +13,22 @@ import { expectRelative } from '../close.ts';
  * weighted and summed by hand.
  */
 const { ruptures, distances } = pointRuptures([
-  { magnitude: 6.5, annualRate: 0.01, repiKm: 10, setting: 'crustal', sourceIndex: 0, sourceId: 'ridge-fault' },
-  { magnitude: 8, annualRate: 0.001, repiKm: 250, setting: 'interface', sourceIndex: 1, sourceId: 'trench' },
+  {
+    magnitude: 6.5,
+    annualRate: 0.01,
+    repiKm: 10,
+    setting: 'crustal',
+    sourceIndex: 0,
+    sourceId: 'ridge-fault',
+  },
+  {
+    magnitude: 8,
+    annualRate: 0.001,
+    repiKm: 250,
+    setting: 'interface',
+    sourceIndex: 1,
+    sourceId: 'trench',
+  },
 ]);
 const measures: HazardMeasure[] = [{ key: 'PGA', measure: { kind: 'PGA' }, levels: [0.05, 0.3] }];
 const branches = {
@@ -26,7 +40,15 @@ const branches = {
 };
 
 describe('siteHazard: logic tree over two settings (hand computation)', () => {
-  const result = siteHazard({ ruptures, distances, site: ROCK_SITE, branches, measures, truncationSigma: Infinity, maxDistanceKm: 300 });
+  const result = siteHazard({
+    ruptures,
+    distances,
+    site: ROCK_SITE,
+    branches,
+    measures,
+    truncationSigma: Infinity,
+    maxDistanceKm: 300,
+  });
   const curve = result.curves.PGA!;
 
   it('mean curve = 0.6 λc Q(ε₁) + 0.4 λc Q(ε₂) + λi Q(εi)', () => {
@@ -39,17 +61,31 @@ describe('siteHazard: logic tree over two settings (hand computation)', () => {
       ['crustal=Cornell79, interface=Trench2x', 0.6],
       ['crustal=Scaled, interface=Trench2x', 0.4],
     ]);
-    expectRelative(curve.branches![0]!.annualRate[1]!, 0.0065400181466918296, 1e-12, 'hand computation');
-    expectRelative(curve.branches![1]!.annualRate[1]!, 0.008661259605819887, 1e-12, 'hand computation');
+    expectRelative(
+      curve.branches![0]!.annualRate[1]!,
+      0.0065400181466918296,
+      1e-12,
+      'hand computation',
+    );
+    expectRelative(
+      curve.branches![1]!.annualRate[1]!,
+      0.008661259605819887,
+      1e-12,
+      'hand computation',
+    );
   });
 
-  it('summarises ruptures outside a model\'s validity (the interface rupture is at 250 km, past 200 km)', () => {
-    expect(result.validity.map((v) => [v.model, v.outside, v.evaluated])).toEqual([['Trench2x', 1, 1]]);
+  it("summarises ruptures outside a model's validity (the interface rupture is at 250 km, past 200 km)", () => {
+    expect(result.validity.map((v) => [v.model, v.outside, v.evaluated])).toEqual([
+      ['Trench2x', 1, 1],
+    ]);
     expect(result.validity[0]!.firstNote).toMatch(/distance 250 km/);
   });
 
   it('keeps predictions for deaggregation, one set per branch and measure', () => {
-    expect(result.branches.map((b) => [b.setting, b.model, b.predictions[0]!.ruptureIndex.length])).toEqual([
+    expect(
+      result.branches.map((b) => [b.setting, b.model, b.predictions[0]!.ruptureIndex.length]),
+    ).toEqual([
       ['crustal', 'Cornell79', 1],
       ['crustal', 'Scaled', 1],
       ['interface', 'Trench2x', 1],
@@ -57,14 +93,31 @@ describe('siteHazard: logic tree over two settings (hand computation)', () => {
   });
 
   it('omits the per-branch curves above the combination cap but keeps the same mean', () => {
-    const capped = siteHazard({ ruptures, distances, site: ROCK_SITE, branches, measures, truncationSigma: Infinity, maxDistanceKm: 300, maxBranchCombinations: 1 });
+    const capped = siteHazard({
+      ruptures,
+      distances,
+      site: ROCK_SITE,
+      branches,
+      measures,
+      truncationSigma: Infinity,
+      maxDistanceKm: 300,
+      maxBranchCombinations: 1,
+    });
     expect(capped.branchCurvesOmitted).toBe(true);
     expect(capped.curves.PGA!.branches).toBeUndefined();
     expect(capped.curves.PGA!.annualRate).toEqual(curve.annualRate);
   });
 
   it('is deterministic: the same inputs give identical numbers', () => {
-    const again = siteHazard({ ruptures, distances, site: ROCK_SITE, branches, measures, truncationSigma: Infinity, maxDistanceKm: 300 });
+    const again = siteHazard({
+      ruptures,
+      distances,
+      site: ROCK_SITE,
+      branches,
+      measures,
+      truncationSigma: Infinity,
+      maxDistanceKm: 300,
+    });
     expect(again.curves).toEqual(result.curves);
   });
 });

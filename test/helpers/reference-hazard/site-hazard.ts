@@ -1,5 +1,13 @@
-import type { HazardBranch, HazardMeasure, ValiditySummary } from '../../../api/engine/hazard/hazard-types.ts';
-import { branchCombinationCurves, MAX_BRANCH_COMBINATIONS, meanHazard } from '../../../api/engine/hazard/logic-tree.ts';
+import type {
+  HazardBranch,
+  HazardMeasure,
+  ValiditySummary,
+} from '../../../api/engine/hazard/hazard-types.ts';
+import {
+  branchCombinationCurves,
+  MAX_BRANCH_COMBINATIONS,
+  meanHazard,
+} from '../../../api/engine/hazard/logic-tree.ts';
 import type { SettingBranchCurve } from '../../../api/engine/hazard/logic-tree.ts';
 import { TECTONIC_SETTINGS } from '../../../api/engine/model.ts';
 import type { TectonicSetting } from '../../../api/engine/model.ts';
@@ -58,8 +66,12 @@ export function siteHazard(options: SiteHazardOptions): SiteHazard {
     if (!settingBranches || settingBranches.length === 0) continue;
     const selected = selectRuptures(ruptures, distances, setting, options.maxDistanceKm);
     for (const { model, weight } of settingBranches) {
-      const predictions = measures.map((m) => predictRuptures(model, m.measure, ruptures, distances, site, selected));
-      const annualRate = predictions.map((p, i) => exceedanceCurve(p, ruptures, (measures[i] as HazardMeasure).levels, truncationSigma));
+      const predictions = measures.map((m) =>
+        predictRuptures(model, m.measure, ruptures, distances, site, selected),
+      );
+      const annualRate = predictions.map((p, i) =>
+        exceedanceCurve(p, ruptures, (measures[i] as HazardMeasure).levels, truncationSigma),
+      );
       branches.push({ setting, model: model.name, weight, predictions, annualRate });
       const summary = validity.get(model.name) ?? { outside: 0, evaluated: 0, firstNote: '' };
       for (const p of predictions) {
@@ -85,13 +97,18 @@ export function siteHazard(options: SiteHazardOptions): SiteHazard {
     const annualRate = meanHazard(settingCurves, m.levels.length);
     const combinations = branchCombinationCurves(settingCurves, m.levels.length, cap);
     if (combinations === null) branchCurvesOmitted = true;
-    curves[m.key] = combinations === null ? { levels: [...m.levels], annualRate } : { levels: [...m.levels], annualRate, branches: combinations };
+    curves[m.key] =
+      combinations === null
+        ? { levels: [...m.levels], annualRate }
+        : { levels: [...m.levels], annualRate, branches: combinations };
   });
 
   return {
     curves,
     branches,
     branchCurvesOmitted,
-    validity: [...validity.entries()].filter(([, s]) => s.outside > 0).map(([model, s]) => ({ model, ...s })),
+    validity: [...validity.entries()]
+      .filter(([, s]) => s.outside > 0)
+      .map(([model, s]) => ({ model, ...s })),
   };
 }

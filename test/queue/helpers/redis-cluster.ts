@@ -9,7 +9,11 @@ export function freePort(): Promise<number> {
     server.once('error', reject);
     server.listen(0, '127.0.0.1', () => {
       const address = server.address();
-      server.close(() => (typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port'))));
+      server.close(() =>
+        typeof address === 'object' && address
+          ? resolve(address.port)
+          : reject(new Error('no port')),
+      );
     });
   });
 }
@@ -41,7 +45,22 @@ export interface RedisServer {
 export async function startRedis(): Promise<RedisServer> {
   const dir = tempDir();
   const port = await freePort();
-  const child = spawn('redis-server', ['--port', String(port), '--bind', '127.0.0.1', '--dir', dir.path, '--save', '', '--appendonly', 'no'], { stdio: ['ignore', 'pipe', 'pipe'] });
+  const child = spawn(
+    'redis-server',
+    [
+      '--port',
+      String(port),
+      '--bind',
+      '127.0.0.1',
+      '--dir',
+      dir.path,
+      '--save',
+      '',
+      '--appendonly',
+      'no',
+    ],
+    { stdio: ['ignore', 'pipe', 'pipe'] },
+  );
   await started(child, /Ready to accept connections/, 'redis-server');
   return {
     url: `redis://127.0.0.1:${port}`,
@@ -64,7 +83,10 @@ export interface WorkerProcess {
 }
 
 /** `tremora worker` as its own process, on the queue at `url`. */
-export async function startWorker(url: string, args: readonly string[] = []): Promise<WorkerProcess> {
+export async function startWorker(
+  url: string,
+  args: readonly string[] = [],
+): Promise<WorkerProcess> {
   const child = spawn(process.execPath, ['--import', 'tsx', 'api/cli.ts', 'worker', ...args], {
     cwd: REPO_ROOT,
     env: { ...process.env, TREMORA_QUEUE: url },

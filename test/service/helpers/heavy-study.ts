@@ -11,9 +11,16 @@ const COPIES = 40;
  * budget. For tests and benchmarks that need a run still computing while they measure.
  */
 export function heavyStudy(): Record<string, unknown> {
-  const demo = JSON.parse(readFileSync(join(REPO_ROOT, 'data-demo/demo.study.json'), 'utf8')) as { communities: Record<string, any>[] } & Record<string, unknown>;
+  const demo = JSON.parse(readFileSync(join(REPO_ROOT, 'data-demo/demo.study.json'), 'utf8')) as {
+    communities: Record<string, any>[];
+  } & Record<string, unknown>;
   const communities = demo.communities.flatMap((village) =>
-    Array.from({ length: COPIES }, (_, k) => ({ ...village, id: `${village.id}-${k + 1}`, name: `${village.name} ${k + 1}`, lat: village.lat + 0.01 * k })),
+    Array.from({ length: COPIES }, (_, k) => ({
+      ...village,
+      id: `${village.id}-${k + 1}`,
+      name: `${village.name} ${k + 1}`,
+      lat: village.lat + 0.01 * k,
+    })),
   );
   return { ...demo, name: 'Heavy demo', communities };
 }
@@ -21,6 +28,7 @@ export function heavyStudy(): Record<string, unknown> {
 /** Saves heavyStudy() in the service and returns its id. */
 export async function saveHeavyStudy(service: ServiceProcess): Promise<string> {
   const response = await service.fetch('/api/studies', jsonInit('POST', heavyStudy()));
-  if (response.status !== 201) throw new Error(`the heavy study was not saved: ${response.status} ${await response.text()}`);
+  if (response.status !== 201)
+    throw new Error(`the heavy study was not saved: ${response.status} ${await response.text()}`);
   return ((await response.json()) as { id: string }).id;
 }

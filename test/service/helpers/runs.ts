@@ -23,7 +23,11 @@ export async function getRun(service: ServiceProcess, id: string): Promise<RunAn
 }
 
 /** Starts a run of a saved study (202) and returns its first state. */
-export async function startRun(service: ServiceProcess, studyId: string, headers: Record<string, string> = {}): Promise<RunAnswer> {
+export async function startRun(
+  service: ServiceProcess,
+  studyId: string,
+  headers: Record<string, string> = {},
+): Promise<RunAnswer> {
   const response = await service.fetch(`/api/studies/${studyId}/runs`, { method: 'POST', headers });
   const text = await response.text();
   expect(response.status, text).toBe(202);
@@ -33,15 +37,24 @@ export async function startRun(service: ServiceProcess, studyId: string, headers
 }
 
 /** Polls until the run reaches one of `statuses`. */
-export async function waitForStatus(service: ServiceProcess, id: string, statuses: readonly string[] = FINISHED): Promise<RunAnswer> {
-  const run = await waitFor(() => getRun(service, id), (r) => statuses.includes(r.status));
+export async function waitForStatus(
+  service: ServiceProcess,
+  id: string,
+  statuses: readonly string[] = FINISHED,
+): Promise<RunAnswer> {
+  const run = await waitFor(
+    () => getRun(service, id),
+    (r) => statuses.includes(r.status),
+  );
   expect(statuses, `run ${id} stayed ${run.status}`).toContain(run.status);
   return run;
 }
 
 /** The id of the demo study saved on first start. */
 export async function demoStudyId(service: ServiceProcess): Promise<string> {
-  const { studies } = (await (await service.fetch('/api/studies')).json()) as { studies: { id: string; name: string }[] };
+  const { studies } = (await (await service.fetch('/api/studies')).json()) as {
+    studies: { id: string; name: string }[];
+  };
   const demo = studies.find((s) => s.name === 'Demo coast');
   expect(demo, 'the demo study is saved on first start').toBeDefined();
   return (demo as { id: string }).id;

@@ -36,13 +36,27 @@ export interface StartOptions {
  * are only its own.
  */
 export function startService(options: StartOptions): Promise<ServiceProcess> {
-  const child = spawn(process.execPath, [...(options.nodeArgs ?? ['--import', 'tsx', 'api/server.ts'])], {
-    cwd: REPO_ROOT,
-    env: { ...process.env, PORT: '0', HOST: '127.0.0.1', TREMORA_DB: options.databasePath, TREMORA_TOKEN: '', TREMORA_SCREEN_DEMO: '0', ...options.env },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
+  const child = spawn(
+    process.execPath,
+    [...(options.nodeArgs ?? ['--import', 'tsx', 'api/server.ts'])],
+    {
+      cwd: REPO_ROOT,
+      env: {
+        ...process.env,
+        PORT: '0',
+        HOST: '127.0.0.1',
+        TREMORA_DB: options.databasePath,
+        TREMORA_TOKEN: '',
+        TREMORA_SCREEN_DEMO: '0',
+        ...options.env,
+      },
+      stdio: ['ignore', 'pipe', 'pipe'],
+    },
+  );
   let output = '';
-  const exited = new Promise<number | null>((resolve) => child.once('exit', (code) => resolve(code)));
+  const exited = new Promise<number | null>((resolve) =>
+    child.once('exit', (code) => resolve(code)),
+  );
   return new Promise((resolve, reject) => {
     const onData = (chunk: Buffer) => {
       output += chunk.toString('utf8');
@@ -69,15 +83,25 @@ export function startService(options: StartOptions): Promise<ServiceProcess> {
     };
     child.stdout?.on('data', onData);
     child.stderr?.on('data', (chunk: Buffer) => (output += chunk.toString('utf8')));
-    void exited.then((code) => reject(new Error(`the service exited with code ${code} before listening:\n${output}`)));
+    void exited.then((code) =>
+      reject(new Error(`the service exited with code ${code} before listening:\n${output}`)),
+    );
   });
 }
 
 /** Runs the service expecting it to refuse to start; resolves with its exit code and output. */
-export function startExpectingRefusal(options: StartOptions): Promise<{ code: number | null; output: string }> {
+export function startExpectingRefusal(
+  options: StartOptions,
+): Promise<{ code: number | null; output: string }> {
   const child = spawn(process.execPath, ['--import', 'tsx', 'api/server.ts'], {
     cwd: REPO_ROOT,
-    env: { ...process.env, PORT: '0', TREMORA_DB: options.databasePath, TREMORA_TOKEN: '', ...options.env },
+    env: {
+      ...process.env,
+      PORT: '0',
+      TREMORA_DB: options.databasePath,
+      TREMORA_TOKEN: '',
+      ...options.env,
+    },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let output = '';
@@ -93,7 +117,12 @@ export function tempDir(prefix = 'tremora-test-'): { path: string; remove(): voi
 }
 
 /** Polls `read` until `done` holds (or gives up after `attempts`); no timing is asserted. */
-export async function waitFor<T>(read: () => Promise<T>, done: (value: T) => boolean, attempts = 600, pauseMs = 100): Promise<T> {
+export async function waitFor<T>(
+  read: () => Promise<T>,
+  done: (value: T) => boolean,
+  attempts = 600,
+  pauseMs = 100,
+): Promise<T> {
   let value = await read();
   for (let i = 0; i < attempts && !done(value); i++) {
     await new Promise((r) => setTimeout(r, pauseMs));
@@ -102,7 +131,11 @@ export async function waitFor<T>(read: () => Promise<T>, done: (value: T) => boo
   return value;
 }
 
-export const jsonInit = (method: string, body: unknown, headers: Record<string, string> = {}): RequestInit => ({
+export const jsonInit = (
+  method: string,
+  body: unknown,
+  headers: Record<string, string> = {},
+): RequestInit => ({
   method,
   headers: { 'Content-Type': 'application/json', ...headers },
   body: typeof body === 'string' ? body : JSON.stringify(body),

@@ -10,7 +10,13 @@
  * seismic hazard analysis", white paper v1.3: ln PGA = -0.152 + 0.859 M - 1.803 ln(R + 25),
  * sigma 0.57, R hypocentral in km (from memory, as in api/engine/motion/cornell79.ts).
  */
-export const CORNELL79 = { c0: -0.152, cM: 0.859, cLnR: -1.803, offsetKm: 25, sigma: 0.57 } as const;
+export const CORNELL79 = {
+  c0: -0.152,
+  cM: 0.859,
+  cLnR: -1.803,
+  offsetKm: 25,
+  sigma: 0.57,
+} as const;
 
 export const MAGNITUDE = 6.5;
 export const DEPTH_KM = 10;
@@ -18,12 +24,29 @@ export const DEPTH_KM = 10;
 export const RATE_PER_YEAR = 0.01;
 
 /** Median PGA (g) at the community: R = the source depth, the source being straight below. */
-export const MEDIAN_PGA_G = Math.exp(CORNELL79.c0 + CORNELL79.cM * MAGNITUDE + CORNELL79.cLnR * Math.log(DEPTH_KM + CORNELL79.offsetKm));
+export const MEDIAN_PGA_G = Math.exp(
+  CORNELL79.c0 +
+    CORNELL79.cM * MAGNITUDE +
+    CORNELL79.cLnR * Math.log(DEPTH_KM + CORNELL79.offsetKm),
+);
 
 /** Curve levels at epsilon = -1, 0, +1. */
-export const LEVELS_G = [MEDIAN_PGA_G * Math.exp(-CORNELL79.sigma), MEDIAN_PGA_G, MEDIAN_PGA_G * Math.exp(CORNELL79.sigma)];
+export const LEVELS_G = [
+  MEDIAN_PGA_G * Math.exp(-CORNELL79.sigma),
+  MEDIAN_PGA_G,
+  MEDIAN_PGA_G * Math.exp(CORNELL79.sigma),
+];
 
-export const COMMUNITY = { id: 'test-cove', name: 'Test Cove', lon: -140.2, lat: -47.4, vs30: 500, population: 120, coastal: true, elevationM: 4 };
+export const COMMUNITY = {
+  id: 'test-cove',
+  name: 'Test Cove',
+  lon: -140.2,
+  lat: -47.4,
+  vs30: 500,
+  population: 120,
+  coastal: true,
+  elevationM: 4,
+};
 
 export function smallStudy(name = 'Small test study'): Record<string, unknown> {
   return {
@@ -62,17 +85,22 @@ export function smallStudy(name = 'Small test study'): Record<string, unknown> {
  * 0.8413447461 and Phi(3) = 0.9986501020 (Abramowitz & Stegun 1964, Table 26.1).
  */
 const Q1 = 1 - 0.8413447461;
-const Q3 = 1 - 0.9986501020;
+const Q3 = 1 - 0.998650102;
 
 /**
  * P(PGA > level | the earthquake) at epsilon -1, 0, +1 for a normal truncated at +-3 sigma and
  * renormalised (the truncation of api/engine/hazard/truncated-exceedance.ts; classical PSHA as
  * in Baker 2008): (Q(e) - Q(3)) / (1 - 2 Q(3)), Q(-1) = 1 - Q(1), Q(0) = 1/2.
  */
-export const EXCEEDANCE_AT_LEVELS = [(1 - Q1 - Q3) / (1 - 2 * Q3), (0.5 - Q3) / (1 - 2 * Q3), (Q1 - Q3) / (1 - 2 * Q3)];
+export const EXCEEDANCE_AT_LEVELS = [
+  (1 - Q1 - Q3) / (1 - 2 * Q3),
+  (0.5 - Q3) / (1 - 2 * Q3),
+  (Q1 - Q3) / (1 - 2 * Q3),
+];
 
 /** Poisson probability of at least one exceedance in `years` (Baker 2008, eq. for the Poisson model). */
-export const poissonChance = (annualRate: number, years: number): number => 1 - Math.exp(-annualRate * years);
+export const poissonChance = (annualRate: number, years: number): number =>
+  1 - Math.exp(-annualRate * years);
 
 /** A communities CSV (DESIGN.md section 2 header) with two invented villages. */
 export const COMMUNITIES_CSV = [
@@ -92,7 +120,13 @@ export function sourcesCollection(): Record<string, unknown> {
       {
         type: 'Feature',
         geometry: { type: 'Point', coordinates: [-140.6, -47.7] },
-        properties: { id: 'spot-west', setting: 'crustal', mechanism: 'reverse', depthKm: 12, recurrence: { type: 'fixed', magnitude: 6.0, rate: 0.002 } },
+        properties: {
+          id: 'spot-west',
+          setting: 'crustal',
+          mechanism: 'reverse',
+          depthKm: 12,
+          recurrence: { type: 'fixed', magnitude: 6.0, rate: 0.002 },
+        },
       },
     ],
   };

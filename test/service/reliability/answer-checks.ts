@@ -8,7 +8,14 @@ import type { Answer } from './http-client.ts';
  */
 
 /** Signs of internals in an answer: a stack frame, a source path, an engine error class name. */
-const INTERNALS = [/\n\s+at /, /\bat [\w$.<>]+ \([^)]*:\d+:\d+\)/, /node_modules/, /\/work\/|file:\/\//, /\.ts:\d+/, /RangeError|TypeError|ReferenceError|SqliteError/];
+const INTERNALS = [
+  /\n\s+at /,
+  /\bat [\w$.<>]+ \([^)]*:\d+:\d+\)/,
+  /node_modules/,
+  /\/work\/|file:\/\//,
+  /\.ts:\d+/,
+  /RangeError|TypeError|ReferenceError|SqliteError/,
+];
 
 /**
  * Why `answer` breaks the rules above, or undefined when it keeps them. Outside /api/ the
@@ -17,17 +24,24 @@ const INTERNALS = [/\n\s+at /, /\bat [\w$.<>]+ \([^)]*:\d+:\d+\)/, /node_modules
  */
 export function answerProblem(answer: Answer, method: string, path = '/api/'): string | undefined {
   if (answer.status >= 500) return `status ${answer.status}`;
-  for (const pattern of INTERNALS) if (pattern.test(answer.text)) return `internals in the answer (${pattern}): ${answer.text.slice(0, 200)}`;
+  for (const pattern of INTERNALS)
+    if (pattern.test(answer.text))
+      return `internals in the answer (${pattern}): ${answer.text.slice(0, 200)}`;
   if (answer.status < 400 || method === 'HEAD') return undefined;
   const type = String(answer.headers['content-type'] ?? '');
   // As the service sees the path: dot segments (also %2e%2e) resolved by URL parsing.
-  const seen = URL.canParse(`http://127.0.0.1${path}`) ? new URL(`http://127.0.0.1${path}`).pathname : path;
+  const seen = URL.canParse(`http://127.0.0.1${path}`)
+    ? new URL(`http://127.0.0.1${path}`).pathname
+    : path;
   const isApi = seen === '/api' || seen.startsWith('/api/');
   if (!isApi && type.startsWith('text/html')) {
-    return answer.headers['content-security-policy'] === CONTENT_SECURITY_POLICY ? undefined : `a ${answer.status} page without the security headers`;
+    return answer.headers['content-security-policy'] === CONTENT_SECURITY_POLICY
+      ? undefined
+      : `a ${answer.status} page without the security headers`;
   }
   if (!type.startsWith('application/json')) return `a ${answer.status} with Content-Type "${type}"`;
-  if (answer.headers['content-security-policy'] !== CONTENT_SECURITY_POLICY) return `a ${answer.status} without the security headers`;
+  if (answer.headers['content-security-policy'] !== CONTENT_SECURITY_POLICY)
+    return `a ${answer.status} without the security headers`;
   let body: unknown;
   try {
     body = JSON.parse(answer.text);
@@ -35,10 +49,12 @@ export function answerProblem(answer: Answer, method: string, path = '/api/'): s
     return `a ${answer.status} whose body is not JSON: ${answer.text.slice(0, 120)}`;
   }
   const shaped = body as { error?: unknown; issues?: unknown };
-  if (typeof shaped.error !== 'string' || shaped.error.length === 0) return `a ${answer.status} without an "error" text`;
+  if (typeof shaped.error !== 'string' || shaped.error.length === 0)
+    return `a ${answer.status} without an "error" text`;
   if (!Array.isArray(shaped.issues)) return `a ${answer.status} without an "issues" list`;
   for (const issue of shaped.issues as { path?: unknown; message?: unknown }[]) {
-    if (typeof issue?.path !== 'string' || typeof issue?.message !== 'string') return `a ${answer.status} with an issue that is not { path, message }: ${JSON.stringify(issue)}`;
+    if (typeof issue?.path !== 'string' || typeof issue?.message !== 'string')
+      return `a ${answer.status} with an issue that is not { path, message }: ${JSON.stringify(issue)}`;
   }
   return undefined;
 }
@@ -56,6 +72,9 @@ export class Tally {
     return this.#counts.get(String(key)) ?? 0;
   }
   toString(): string {
-    return [...this.#counts.entries()].sort(([a], [b]) => (a < b ? -1 : 1)).map(([k, n]) => `${k}: ${n}`).join(', ');
+    return [...this.#counts.entries()]
+      .sort(([a], [b]) => (a < b ? -1 : 1))
+      .map(([k, n]) => `${k}: ${n}`)
+      .join(', ');
   }
 }

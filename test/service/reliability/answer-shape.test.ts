@@ -46,7 +46,16 @@ describe('answers the app does not write itself', () => {
   });
 
   test('an Expect the service does not know: 417 in the error shape', async () => {
-    expectRefusal(await raw(['GET /api/health HTTP/1.1', 'Host: 127.0.0.1', 'Expect: 999-foo', 'Connection: close']), 417, 'Expect');
+    expectRefusal(
+      await raw([
+        'GET /api/health HTTP/1.1',
+        'Host: 127.0.0.1',
+        'Expect: 999-foo',
+        'Connection: close',
+      ]),
+      417,
+      'Expect',
+    );
   });
 
   test('OPTIONS *: the methods, with the headers', async () => {
@@ -57,8 +66,16 @@ describe('answers the app does not write itself', () => {
   });
 
   test('a target or Host the adapter cannot read: 400 in the error shape', async () => {
-    expectRefusal(await raw(['GET /a\\b HTTP/1.1', 'Host: 127.0.0.1', 'Connection: close']), 400, 'backslash');
-    expectRefusal(await raw(['GET /api/health HTTP/1.1', 'Host: 127.0.0.1:80:80', 'Connection: close']), 400, 'bad Host');
+    expectRefusal(
+      await raw(['GET /a\\b HTTP/1.1', 'Host: 127.0.0.1', 'Connection: close']),
+      400,
+      'backslash',
+    );
+    expectRefusal(
+      await raw(['GET /api/health HTTP/1.1', 'Host: 127.0.0.1:80:80', 'Connection: close']),
+      400,
+      'bad Host',
+    );
   });
 
   test('HEAD on API routes and pages carries the headers', async () => {

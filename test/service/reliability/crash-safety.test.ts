@@ -1,7 +1,12 @@
 import Database from 'better-sqlite3';
 import { afterAll, describe, expect, it } from 'vitest';
 import { TREMORA_APPLICATION_ID } from '../../../api/store/database-file.ts';
-import { jsonInit, type ServiceProcess, startService, tempDir } from '../helpers/service-process.ts';
+import {
+  jsonInit,
+  type ServiceProcess,
+  startService,
+  tempDir,
+} from '../helpers/service-process.ts';
 import { COMMUNITIES_CSV, smallStudy } from '../helpers/small-study.ts';
 import { Tally } from './answer-checks.ts';
 
@@ -23,7 +28,8 @@ const dir = tempDir('tremora-crash-');
 const databasePath = `${dir.path}/crash.db`;
 let current: ServiceProcess | undefined;
 afterAll(async () => {
-  if (current && current.child.exitCode === null && current.child.signalCode === null) await current.stop();
+  if (current && current.child.exitCode === null && current.child.signalCode === null)
+    await current.stop();
   dir.remove();
 });
 
@@ -54,7 +60,13 @@ interface Ledger {
 }
 
 /** Writes against `service` until it dies; each write is recorded when acknowledged. */
-async function writeUntilKilled(service: ServiceProcess, ledger: Ledger, random: () => number, ops: Tally, killed: () => boolean): Promise<void> {
+async function writeUntilKilled(
+  service: ServiceProcess,
+  ledger: Ledger,
+  random: () => number,
+  ops: Tally,
+  killed: () => boolean,
+): Promise<void> {
   // Each writer changes only the studies it created, so one study's writes are answered in
   // the order they were committed and the ledger can follow them.
   const pick = (w: number) => {
@@ -70,7 +82,8 @@ async function writeUntilKilled(service: ServiceProcess, ledger: Ledger, random:
         if (roll < 0.35 || !id) {
           const text = JSON.stringify(smallStudy(`Crash study ${w}-${n++}`), null, 1);
           const response = await service.fetch('/api/studies', jsonInit('POST', text));
-          if (response.status !== 201) throw new Error(`create: ${response.status} ${await response.text()}`);
+          if (response.status !== 201)
+            throw new Error(`create: ${response.status} ${await response.text()}`);
           const created = ((await response.json()) as { id: string }).id;
           ledger.documents.set(created, text);
           ledger.owner.set(created, w);
@@ -79,24 +92,44 @@ async function writeUntilKilled(service: ServiceProcess, ledger: Ledger, random:
           const text = JSON.stringify(smallStudy(`Crash update ${w}-${n++}`), null, 1);
           ledger.inFlight.set(id, [...(ledger.inFlight.get(id) ?? []), text]);
           const response = await service.fetch(`/api/studies/${id}`, jsonInit('PUT', text));
-          if (response.status !== 200) throw new Error(`update: ${response.status} ${await response.text()}`);
+          if (response.status !== 200)
+            throw new Error(`update: ${response.status} ${await response.text()}`);
           ledger.documents.set(id, text);
           ledger.csv.delete(id);
-          ledger.inFlight.set(id, (ledger.inFlight.get(id) ?? []).filter((t) => t !== text));
+          ledger.inFlight.set(
+            id,
+            (ledger.inFlight.get(id) ?? []).filter((t) => t !== text),
+          );
           ops.add('update');
         } else if (roll < 0.7) {
           // The service keeps the document with `communities` naming the imported file (routes/imports.ts).
-          const document = JSON.stringify({ ...(JSON.parse(ledger.documents.get(id) as string) as object), communities: 'communities.csv' }, null, 2);
+          const document = JSON.stringify(
+            {
+              ...(JSON.parse(ledger.documents.get(id) as string) as object),
+              communities: 'communities.csv',
+            },
+            null,
+            2,
+          );
           ledger.inFlight.set(id, [...(ledger.inFlight.get(id) ?? []), document]);
-          const response = await service.fetch(`/api/studies/${id}/communities`, { method: 'POST', headers: { 'content-type': 'text/csv' }, body: COMMUNITIES_CSV });
-          if (response.status !== 200) throw new Error(`import: ${response.status} ${await response.text()}`);
+          const response = await service.fetch(`/api/studies/${id}/communities`, {
+            method: 'POST',
+            headers: { 'content-type': 'text/csv' },
+            body: COMMUNITIES_CSV,
+          });
+          if (response.status !== 200)
+            throw new Error(`import: ${response.status} ${await response.text()}`);
           ledger.documents.set(id, document);
-          ledger.inFlight.set(id, (ledger.inFlight.get(id) ?? []).filter((t) => t !== document));
+          ledger.inFlight.set(
+            id,
+            (ledger.inFlight.get(id) ?? []).filter((t) => t !== document),
+          );
           ledger.csv.set(id, COMMUNITIES_CSV);
           ops.add('import');
         } else {
           const response = await service.fetch(`/api/studies/${id}/runs`, { method: 'POST' });
-          if (response.status !== 202) throw new Error(`run: ${response.status} ${await response.text()}`);
+          if (response.status !== 202)
+            throw new Error(`run: ${response.status} ${await response.text()}`);
           ledger.runs.set(((await response.json()) as { id: string }).id, id);
           ops.add('run');
         }
@@ -110,15 +143,25 @@ async function writeUntilKilled(service: ServiceProcess, ledger: Ledger, random:
   await Promise.all(Array.from({ length: WRITERS }, (_, w) => writer(w)));
 }
 
-function inspect(): { integrity: string; applicationId: number; halfWritten: number; doneWithout: number; unfinished: number } {
+function inspect(): {
+  integrity: string;
+  applicationId: number;
+  halfWritten: number;
+  doneWithout: number;
+  unfinished: number;
+} {
   const db = new Database(databasePath, { readonly: true });
   try {
     const count = (sql: string) => (db.prepare(sql).get() as { n: number }).n;
     return {
       integrity: db.pragma('integrity_check', { simple: true }) as string,
       applicationId: db.pragma('application_id', { simple: true }) as number,
-      halfWritten: count("SELECT COUNT(*) AS n FROM runs WHERE status <> 'done' AND (results IS NOT NULL OR provenance IS NOT NULL)"),
-      doneWithout: count("SELECT COUNT(*) AS n FROM runs WHERE status = 'done' AND (results IS NULL OR provenance IS NULL OR finished_at IS NULL)"),
+      halfWritten: count(
+        "SELECT COUNT(*) AS n FROM runs WHERE status <> 'done' AND (results IS NOT NULL OR provenance IS NOT NULL)",
+      ),
+      doneWithout: count(
+        "SELECT COUNT(*) AS n FROM runs WHERE status = 'done' AND (results IS NULL OR provenance IS NULL OR finished_at IS NULL)",
+      ),
       unfinished: count("SELECT COUNT(*) AS n FROM runs WHERE status IN ('queued', 'running')"),
     };
   } finally {
@@ -130,11 +173,27 @@ function inspect(): { integrity: string; applicationId: number; halfWritten: num
 function readDatabase() {
   const db = new Database(databasePath, { readonly: true });
   try {
-    const studies = new Map((db.prepare('SELECT id, document FROM studies').all() as { id: string; document: string }[]).map((r) => [r.id, r.document]));
+    const studies = new Map(
+      (
+        db.prepare('SELECT id, document FROM studies').all() as { id: string; document: string }[]
+      ).map((r) => [r.id, r.document]),
+    );
     const csv = new Map<string, string>();
-    for (const r of db.prepare("SELECT study_id, content FROM study_files WHERE kind = 'communities-csv' ORDER BY id").all() as { study_id: string; content: string }[]) csv.set(r.study_id, r.content);
-    const rows = db.prepare('SELECT id, study_id, status, results FROM runs').all() as { id: string; study_id: string; status: string; results: string | null }[];
-    const runs = new Map(rows.map((r) => [r.id, { studyId: r.study_id, status: r.status, results: r.results }]));
+    for (const r of db
+      .prepare(
+        "SELECT study_id, content FROM study_files WHERE kind = 'communities-csv' ORDER BY id",
+      )
+      .all() as { study_id: string; content: string }[])
+      csv.set(r.study_id, r.content);
+    const rows = db.prepare('SELECT id, study_id, status, results FROM runs').all() as {
+      id: string;
+      study_id: string;
+      status: string;
+      results: string | null;
+    }[];
+    const runs = new Map(
+      rows.map((r) => [r.id, { studyId: r.study_id, status: r.status, results: r.results }]),
+    );
     return { studies, csv, runs };
   } finally {
     db.close();
@@ -151,17 +210,24 @@ function checkSaves(ledger: Ledger, kill: number, checkedRuns: Set<string>): voi
   for (const [id, text] of ledger.documents) {
     const saved = stored.studies.get(id);
     expect(saved, `study ${id} after kill ${kill}`).toBeDefined();
-    expect([text, ...(ledger.inFlight.get(id) ?? [])], `study ${id} after kill ${kill} holds ${saved?.slice(0, 200)}`).toContain(saved);
+    expect(
+      [text, ...(ledger.inFlight.get(id) ?? [])],
+      `study ${id} after kill ${kill} holds ${saved?.slice(0, 200)}`,
+    ).toContain(saved);
     if (saved !== text) ledger.documents.set(id, saved as string);
     const csv = ledger.csv.get(id);
-    if (csv !== undefined && saved === text) expect(stored.csv.get(id), `CSV of study ${id}`).toBe(csv);
+    if (csv !== undefined && saved === text)
+      expect(stored.csv.get(id), `CSV of study ${id}`).toBe(csv);
   }
   ledger.inFlight.clear();
   for (const [runId, studyId] of ledger.runs) {
     const run = stored.runs.get(runId);
     expect(run?.studyId, `run ${runId} after kill ${kill}`).toBe(studyId);
     if (run?.status !== 'done' || checkedRuns.has(runId)) continue;
-    const results = JSON.parse(run.results as string) as { communities: unknown[]; provenance: unknown };
+    const results = JSON.parse(run.results as string) as {
+      communities: unknown[];
+      provenance: unknown;
+    };
     expect(results.communities.length, `results of run ${runId}`).toBeGreaterThan(0);
     expect(results.provenance, `provenance of run ${runId}`).toBeTruthy();
     checkedRuns.add(runId);
@@ -171,7 +237,13 @@ function checkSaves(ledger: Ledger, kill: number, checkedRuns: Set<string>): voi
 describe('SIGKILL during saves and runs', () => {
   it(`loses no acknowledged save and leaves no half-written run over ${ROUNDS} rounds`, async () => {
     const random = mulberry32(SEED);
-    const ledger: Ledger = { documents: new Map(), inFlight: new Map(), csv: new Map(), runs: new Map(), owner: new Map() };
+    const ledger: Ledger = {
+      documents: new Map(),
+      inFlight: new Map(),
+      csv: new Map(),
+      runs: new Map(),
+      owner: new Map(),
+    };
     const ops = new Tally();
     const runStates = new Tally();
     let interruptedAtStart = 0;
@@ -181,7 +253,9 @@ describe('SIGKILL during saves and runs', () => {
     for (let round = 0; round <= ROUNDS; round++) {
       const service = await startService({ databasePath, env: { TREMORA_WORKERS: '1' } });
       current = service;
-      interruptedAtStart += Number(/(\d+) run\(s\) left unfinished/.exec(service.output())?.[1] ?? 0);
+      interruptedAtStart += Number(
+        /(\d+) run\(s\) left unfinished/.exec(service.output())?.[1] ?? 0,
+      );
 
       // After the restart: every acknowledged run is there and finished (unfinished ones were
       // marked interrupted at start), and the API reads back a saved study and a finished run.
@@ -189,13 +263,20 @@ describe('SIGKILL during saves and runs', () => {
       for (const [runId, studyId] of ledger.runs) {
         const run = stored.runs.get(runId);
         expect(run?.studyId, `run ${runId} after restart ${round}`).toBe(studyId);
-        expect(['done', 'failed', 'cancelled', 'interrupted'], `run ${runId} after restart ${round}`).toContain(run?.status);
+        expect(
+          ['done', 'failed', 'cancelled', 'interrupted'],
+          `run ${runId} after restart ${round}`,
+        ).toContain(run?.status);
         if (round === ROUNDS) runStates.add(run?.status ?? 'missing');
       }
       const someStudy = [...ledger.documents.keys()][Math.floor(random() * ledger.documents.size)];
-      if (someStudy) expect(await (await service.fetch(`/api/studies/${someStudy}/document`)).text()).toBe(ledger.documents.get(someStudy));
+      if (someStudy)
+        expect(await (await service.fetch(`/api/studies/${someStudy}/document`)).text()).toBe(
+          ledger.documents.get(someStudy),
+        );
       const someDone = [...stored.runs].find(([, r]) => r.status === 'done')?.[0];
-      if (someDone) expect((await service.fetch(`/api/runs/${someDone}/results.csv`)).status).toBe(200);
+      if (someDone)
+        expect((await service.fetch(`/api/runs/${someDone}/results.csv`)).status).toBe(200);
       if (round === ROUNDS) {
         await service.stop();
         break;
@@ -209,7 +290,10 @@ describe('SIGKILL during saves and runs', () => {
       let killed = false;
       const writing = writeUntilKilled(service, ledger, random, ops, () => killed);
       // A failure of a write before the kill fails the test; the race only holds it until then.
-      const early = await Promise.race([writing.then(() => 'ended'), new Promise((r) => setTimeout(() => r('time'), wait))]);
+      const early = await Promise.race([
+        writing.then(() => 'ended'),
+        new Promise((r) => setTimeout(() => r('time'), wait)),
+      ]);
       expect(early, 'the writers stopped before the kill').toBe('time');
       killed = true;
       await service.kill();
@@ -218,7 +302,9 @@ describe('SIGKILL during saves and runs', () => {
       const after = inspect();
       expect(after.integrity, `integrity after kill ${round + 1}`).toBe('ok');
       // The file stays marked as Tremora's, so the next start accepts it (database-file.ts).
-      expect(after.applicationId, `application_id after kill ${round + 1}`).toBe(TREMORA_APPLICATION_ID);
+      expect(after.applicationId, `application_id after kill ${round + 1}`).toBe(
+        TREMORA_APPLICATION_ID,
+      );
       expect(after.halfWritten, `runs with results but not done after kill ${round + 1}`).toBe(0);
       expect(after.doneWithout, `done runs missing results after kill ${round + 1}`).toBe(0);
       checkSaves(ledger, round + 1, checkedRuns);

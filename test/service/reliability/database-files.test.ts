@@ -1,4 +1,12 @@
-import { closeSync, mkdirSync, openSync, readFileSync, statSync, writeFileSync, writeSync } from 'node:fs';
+import {
+  closeSync,
+  mkdirSync,
+  openSync,
+  readFileSync,
+  statSync,
+  writeFileSync,
+  writeSync,
+} from 'node:fs';
 import Database from 'better-sqlite3';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { migrate } from '../../../api/store/migrate.ts';
@@ -29,7 +37,11 @@ async function expectRefusal(path: string, said: RegExp): Promise<string> {
 
 const tablesOf = (path: string) => {
   const db = new Database(path, { readonly: true });
-  const names = (db.prepare("SELECT name FROM sqlite_schema WHERE type = 'table' ORDER BY name").all() as { name: string }[]).map((r) => r.name);
+  const names = (
+    db.prepare("SELECT name FROM sqlite_schema WHERE type = 'table' ORDER BY name").all() as {
+      name: string;
+    }[]
+  ).map((r) => r.name);
   db.close();
   return names;
 };
@@ -37,7 +49,11 @@ const tablesOf = (path: string) => {
 /** A Tremora database with enough studies to fill many pages. */
 function filledDatabase(path: string): void {
   const store = openStore(path);
-  for (let i = 0; i < 60; i++) store.studies.create({ name: `Filler ${i}`, document: JSON.stringify({ ...smallStudy(`Filler ${i}`), padding: 'x'.repeat(3000) }) });
+  for (let i = 0; i < 60; i++)
+    store.studies.create({
+      name: `Filler ${i}`,
+      document: JSON.stringify({ ...smallStudy(`Filler ${i}`), padding: 'x'.repeat(3000) }),
+    });
   store.db.pragma('wal_checkpoint(TRUNCATE)');
   store.close();
 }
@@ -85,7 +101,11 @@ describe('start on a file that is not a whole Tremora database', () => {
 
     const newer = `${dir.path}/newer.db`;
     const store = openStore(newer);
-    store.db.prepare("INSERT INTO schema_version (version, name, applied_at) VALUES (99, '099-future.sql', '2030-01-01')").run();
+    store.db
+      .prepare(
+        "INSERT INTO schema_version (version, name, applied_at) VALUES (99, '099-future.sql', '2030-01-01')",
+      )
+      .run();
     store.close();
     await expectRefusal(newer, /schema version 99 but this Tremora knows versions up to \d+/);
 
@@ -118,14 +138,20 @@ describe('a full disk', () => {
   });
 
   test('writes answer 507 in the error shape, health says degraded, and both recover once there is room', async () => {
-    const kept = await page.app.request('/api/studies', jsonInit('POST', smallStudy('Saved before')));
+    const kept = await page.app.request(
+      '/api/studies',
+      jsonInit('POST', smallStudy('Saved before')),
+    );
     expect(kept.status).toBe(201);
     const keptId = ((await kept.json()) as { id: string }).id;
     // SQLite's max_page_count stands in for the disk: no page beyond it can be written.
     const pages = page.ctx.store.db.pragma('page_count', { simple: true }) as number;
     page.ctx.store.db.pragma(`max_page_count = ${pages}`);
     const big = { ...smallStudy('Too big for the disk'), padding: 'x'.repeat(200_000) };
-    const refused = await expectError(await page.app.request('/api/studies', jsonInit('POST', big)), 507);
+    const refused = await expectError(
+      await page.app.request('/api/studies', jsonInit('POST', big)),
+      507,
+    );
     expect(refused.error).toMatch(/disk .* is full: nothing was saved/);
     const health = await page.app.request('/api/health');
     expect(health.status).toBe(503);

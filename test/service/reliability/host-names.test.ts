@@ -1,6 +1,11 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { readConfig } from '../../../api/service/config.ts';
-import { jsonInit, type ServiceProcess, startService, tempDir } from '../helpers/service-process.ts';
+import {
+  jsonInit,
+  type ServiceProcess,
+  startService,
+  tempDir,
+} from '../helpers/service-process.ts';
 import { smallStudy } from '../helpers/small-study.ts';
 import { closeClient, send, type Answer } from './http-client.ts';
 
@@ -22,11 +27,22 @@ afterAll(async () => {
 });
 
 const port = () => new URL(service.url).port;
-const studyCount = async () => ((await (await service.fetch('/api/studies')).json()) as { studies: unknown[] }).studies.length;
+const studyCount = async () =>
+  ((await (await service.fetch('/api/studies')).json()) as { studies: unknown[] }).studies.length;
 const body = (value: unknown) => new TextEncoder().encode(JSON.stringify(value));
 
-async function answer(method: string, path: string, headers: Record<string, string>, value?: unknown): Promise<Answer> {
-  const result = await send(service.url, { method, path, headers: { 'content-type': 'application/json', ...headers }, ...(value === undefined ? {} : { body: body(value) }) });
+async function answer(
+  method: string,
+  path: string,
+  headers: Record<string, string>,
+  value?: unknown,
+): Promise<Answer> {
+  const result = await send(service.url, {
+    method,
+    path,
+    headers: { 'content-type': 'application/json', ...headers },
+    ...(value === undefined ? {} : { body: body(value) }),
+  });
   if ('error' in result) throw new Error(result.error);
   return result;
 }
@@ -52,13 +68,24 @@ describe('host names', () => {
   });
 
   test('its own names are answered: 127.0.0.1, localhost, [::1], with or without the port', async () => {
-    for (const host of [`127.0.0.1:${port()}`, `localhost:${port()}`, 'localhost', `[::1]:${port()}`]) {
+    for (const host of [
+      `127.0.0.1:${port()}`,
+      `localhost:${port()}`,
+      'localhost',
+      `[::1]:${port()}`,
+    ]) {
       expect((await answer('GET', '/api/health', { host })).status, host).toBe(200);
     }
   });
 
   test('names that only look like ours are refused', async () => {
-    for (const host of ['localhost.evil.example', '127.0.0.1.evil.example', '127.0.0.2', 'evil.example@127.0.0.1', 'LOCALHOST.evil.example']) {
+    for (const host of [
+      'localhost.evil.example',
+      '127.0.0.1.evil.example',
+      '127.0.0.2',
+      'evil.example@127.0.0.1',
+      'LOCALHOST.evil.example',
+    ]) {
       const refused = await answer('GET', '/api/health', { host });
       // 421 for a host name not ours; 400 for a Host that is no host name at all (the "@").
       expect([400, 421], host).toContain(refused.status);
@@ -71,7 +98,9 @@ describe('host names', () => {
 describe('TREMORA_HOSTS', () => {
   test('adds names to the loopback ones; HOST is allowed; a wildcard HOST without a list allows any', () => {
     expect(readConfig({}).allowedHosts).toEqual(['localhost', '127.0.0.1', '[::1]']);
-    expect(readConfig({ TREMORA_HOSTS: 'Survey-Laptop.lan, 192.168.1.20,fe80::1' }).allowedHosts).toEqual([
+    expect(
+      readConfig({ TREMORA_HOSTS: 'Survey-Laptop.lan, 192.168.1.20,fe80::1' }).allowedHosts,
+    ).toEqual([
       'localhost',
       '127.0.0.1',
       '[::1]',
@@ -79,8 +108,12 @@ describe('TREMORA_HOSTS', () => {
       '192.168.1.20',
       '[fe80::1]',
     ]);
-    expect(readConfig({ HOST: '192.168.1.20', TREMORA_TOKEN: 'a-token-of-enough-length' }).allowedHosts).toContain('192.168.1.20');
-    expect(readConfig({ HOST: '0.0.0.0', TREMORA_TOKEN: 'a-token-of-enough-length' }).allowedHosts).toBeUndefined();
+    expect(
+      readConfig({ HOST: '192.168.1.20', TREMORA_TOKEN: 'a-token-of-enough-length' }).allowedHosts,
+    ).toContain('192.168.1.20');
+    expect(
+      readConfig({ HOST: '0.0.0.0', TREMORA_TOKEN: 'a-token-of-enough-length' }).allowedHosts,
+    ).toBeUndefined();
     expect(() => readConfig({ TREMORA_HOSTS: 'a/b' })).toThrow(/TREMORA_HOSTS .* got "a\/b"/);
   });
 });

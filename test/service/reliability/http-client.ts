@@ -25,7 +25,10 @@ const agent = new http.Agent({ keepAlive: false, maxSockets: 16 });
  * body on any method, bytes that are not UTF-8). Resolves with the answer, or with the
  * client-side error when there was none.
  */
-export function send(baseUrl: string, options: SendOptions): Promise<Answer | { readonly error: string }> {
+export function send(
+  baseUrl: string,
+  options: SendOptions,
+): Promise<Answer | { readonly error: string }> {
   const url = new URL(baseUrl);
   return new Promise((resolve) => {
     const request = http.request(
@@ -35,13 +38,22 @@ export function send(baseUrl: string, options: SendOptions): Promise<Answer | { 
         port: url.port,
         method: options.method,
         path: options.path,
-        headers: { ...(options.headers ?? {}), ...(options.body ? { 'content-length': String(options.body.length) } : {}) },
+        headers: {
+          ...(options.headers ?? {}),
+          ...(options.body ? { 'content-length': String(options.body.length) } : {}),
+        },
         timeout: options.timeoutMs ?? 120_000,
       },
       (response) => {
         const chunks: Buffer[] = [];
         response.on('data', (chunk: Buffer) => chunks.push(chunk));
-        response.on('end', () => resolve({ status: response.statusCode ?? 0, headers: response.headers, text: Buffer.concat(chunks).toString('utf8') }));
+        response.on('end', () =>
+          resolve({
+            status: response.statusCode ?? 0,
+            headers: response.headers,
+            text: Buffer.concat(chunks).toString('utf8'),
+          }),
+        );
         response.on('error', (error) => resolve({ error: error.message }));
       },
     );
@@ -62,7 +74,11 @@ export const closeClient = (): void => agent.destroy();
  * writing side is closed after the bytes, as a client that gave up mid-body does. Resolves
  * with everything received until the server closes (or `timeoutMs`).
  */
-export function sendRaw(port: number, bytes: Uint8Array | string, options: { halfClose?: boolean; timeoutMs?: number } = {}): Promise<string> {
+export function sendRaw(
+  port: number,
+  bytes: Uint8Array | string,
+  options: { halfClose?: boolean; timeoutMs?: number } = {},
+): Promise<string> {
   return new Promise((resolve) => {
     const chunks: Buffer[] = [];
     const socket = net.connect({ port, host: '127.0.0.1', allowHalfOpen: true }, () => {
@@ -90,12 +106,13 @@ export function parseRawAnswer(raw: string): Answer | undefined {
   const headers: Record<string, string> = {};
   for (const line of raw.slice(0, split).split('\r\n').slice(1)) {
     const colon = line.indexOf(':');
-    if (colon > 0) headers[line.slice(0, colon).trim().toLowerCase()] = line.slice(colon + 1).trim();
+    if (colon > 0)
+      headers[line.slice(0, colon).trim().toLowerCase()] = line.slice(colon + 1).trim();
   }
   let text = raw.slice(split + 4);
   if (headers['transfer-encoding'] === 'chunked') {
     let decoded = '';
-    for (let at = 0; ; ) {
+    for (let at = 0; ;) {
       const end = text.indexOf('\r\n', at);
       const size = end < 0 ? 0 : parseInt(text.slice(at, end), 16);
       if (!(size > 0)) break;

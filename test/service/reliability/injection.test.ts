@@ -6,7 +6,13 @@ import type { Study } from '../../../api/engine/model.ts';
 import type { StudyResult } from '../../../api/engine/results.ts';
 import { runCsv } from '../../../api/results/run-csv.ts';
 import { startRun, waitForStatus } from '../helpers/runs.ts';
-import { jsonInit, REPO_ROOT, type ServiceProcess, startService, tempDir } from '../helpers/service-process.ts';
+import {
+  jsonInit,
+  REPO_ROOT,
+  type ServiceProcess,
+  startService,
+  tempDir,
+} from '../helpers/service-process.ts';
 import { COMMUNITIES_CSV, COMMUNITY, smallStudy } from '../helpers/small-study.ts';
 
 /**
@@ -18,7 +24,7 @@ import { COMMUNITIES_CSV, COMMUNITY, smallStudy } from '../helpers/small-study.t
 
 /** Names a spreadsheet would run as formulas, or as commands through DDE (OWASP's examples, from memory). */
 export const FORMULA_NAMES = [
-  '=SUM(1+1)*cmd|\' /C calc\'!A0',
+  "=SUM(1+1)*cmd|' /C calc'!A0",
   '+1+2',
   '-2+3',
   '@SUM(1,2)',
@@ -27,14 +33,27 @@ export const FORMULA_NAMES = [
 ] as const;
 
 /** A cell a spreadsheet may evaluate: it starts with = + - @, tab or CR and is not a plain number. */
-const isLive = (cell: string): boolean => /^[=+\-@\t\r]/.test(cell) && !Number.isFinite(Number(cell));
+const isLive = (cell: string): boolean =>
+  /^[=+\-@\t\r]/.test(cell) && !Number.isFinite(Number(cell));
 
 describe('CSV export (runCsv)', () => {
   it('prefixes every text cell that starts with = + - @ tab or CR, also past a line break, and keeps numbers', () => {
     const names = [...FORMULA_NAMES, '\tTabbed', '\rReturned', 'Plain Cove'];
-    const community = (name: string, i: number) => ({ id: `c${i}`, name, lon: -140.2, lat: -47.4, vs30: 400, vs30Basis: 'measured' as const, coastal: false });
+    const community = (name: string, i: number) => ({
+      id: `c${i}`,
+      name,
+      lon: -140.2,
+      lat: -47.4,
+      vs30: 400,
+      vs30Basis: 'measured' as const,
+      coastal: false,
+    });
     // Hand-built: validation trims a leading tab or CR from names, the export must not rely on it.
-    const study = { ...(smallStudy() as object), communities: names.map(community), settings: { measures: ['PGA'], returnPeriodsYears: [475], horizonsYears: [50] } } as unknown as Study;
+    const study = {
+      ...(smallStudy() as object),
+      communities: names.map(community),
+      settings: { measures: ['PGA'], returnPeriodsYears: [475], horizonsYears: [50] },
+    } as unknown as Study;
     const result = {
       studyName: 'x',
       warnings: [],
@@ -51,10 +70,17 @@ describe('CSV export (runCsv)', () => {
     const rows = Papa.parse<string[]>(runCsv(study, result), { skipEmptyLines: true }).data;
     const header = rows[0] as string[];
     const live = rows.slice(1).flatMap((row) => row.filter(isLive));
-    console.log(`CSV export: ${rows.length - 1} rows x ${header.length} columns; live formula cells: ${live.length}`);
+    console.log(
+      `CSV export: ${rows.length - 1} rows x ${header.length} columns; live formula cells: ${live.length}`,
+    );
     expect(live).toEqual([]);
     const nameColumn = header.indexOf('name');
-    expect(rows.slice(1).map((r) => r[nameColumn])).toEqual([...FORMULA_NAMES.map((n) => `'${n}`), "'\tTabbed", "'\rReturned", 'Plain Cove']);
+    expect(rows.slice(1).map((r) => r[nameColumn])).toEqual([
+      ...FORMULA_NAMES.map((n) => `'${n}`),
+      "'\tTabbed",
+      "'\rReturned",
+      'Plain Cove',
+    ]);
     // Numbers are data, not formulas: a negative level stays a number.
     expect(rows[1]?.[header.indexOf('PGA_475yr_g')]).toBe('-0.5');
     expect(rows[1]?.[header.indexOf('lon')]).toBe('-140.2');
@@ -65,7 +91,10 @@ describe('through the service', () => {
   const dir = tempDir('tremora-injection-');
   let service: ServiceProcess;
   beforeAll(async () => {
-    service = await startService({ databasePath: `${dir.path}/injection.db`, env: { TREMORA_WORKERS: '1' } });
+    service = await startService({
+      databasePath: `${dir.path}/injection.db`,
+      env: { TREMORA_WORKERS: '1' },
+    });
   });
   afterAll(async () => {
     await service?.stop();
@@ -74,7 +103,12 @@ describe('through the service', () => {
 
   it('a run of communities named as formulas exports a CSV with no live formula cell', async () => {
     const study = smallStudy('=CMD("boom")');
-    study.communities = FORMULA_NAMES.map((name, i) => ({ ...COMMUNITY, id: `village-${i}`, name, lat: COMMUNITY.lat + i * 0.01 }));
+    study.communities = FORMULA_NAMES.map((name, i) => ({
+      ...COMMUNITY,
+      id: `village-${i}`,
+      name,
+      lat: COMMUNITY.lat + i * 0.01,
+    }));
     const created = await service.fetch('/api/studies', jsonInit('POST', study));
     expect(created.status, await created.clone().text()).toBe(201);
     const { id } = (await created.json()) as { id: string };
@@ -85,7 +119,9 @@ describe('through the service', () => {
     const rows = Papa.parse<string[]>(await csv.text(), { skipEmptyLines: true }).data;
     const live = rows.flatMap((row) => row.filter(isLive));
     const names = rows.slice(1).map((r) => r[(rows[0] as string[]).indexOf('name')]);
-    console.log(`service CSV: ${rows.length - 1} communities named as formulas; live formula cells: ${live.length}`);
+    console.log(
+      `service CSV: ${rows.length - 1} communities named as formulas; live formula cells: ${live.length}`,
+    );
     expect(live).toEqual([]);
     expect(names).toEqual(FORMULA_NAMES.map((n) => `'${n}`));
   });
@@ -94,25 +130,51 @@ describe('through the service', () => {
     const created = await service.fetch('/api/studies', jsonInit('POST', smallStudy('Uploads')));
     const { id } = (await created.json()) as { id: string };
     const marker = `tremora-upload-${process.pid}-${Date.now()}`;
-    const targets = [join(dir.path, `${marker}.csv`), join(REPO_ROOT, `${marker}.csv`), `/tmp/${marker}.geojson`];
-    const names = [`../../../../..${targets[0]}`, `../${marker}.csv`, targets[2] as string, `C:\\Windows\\${marker}.csv`, `${marker}\u0000.csv`, `%2e%2e%2f${marker}.csv`];
+    const targets = [
+      join(dir.path, `${marker}.csv`),
+      join(REPO_ROOT, `${marker}.csv`),
+      `/tmp/${marker}.geojson`,
+    ];
+    const names = [
+      `../../../../..${targets[0]}`,
+      `../${marker}.csv`,
+      targets[2] as string,
+      `C:\\Windows\\${marker}.csv`,
+      `${marker}\u0000.csv`,
+      `%2e%2e%2f${marker}.csv`,
+    ];
     const before = readdirSync(dir.path).sort();
     const statuses: number[] = [];
     for (const [i, name] of names.entries()) {
       const form = new FormData();
       const geojson = i % 2 === 1;
       const content = geojson ? JSON.stringify(smallStudy().sources) : COMMUNITIES_CSV;
-      form.append('file', new Blob([content], { type: geojson ? 'application/geo+json' : 'text/csv' }), name);
-      const response = await service.fetch(`/studies/${id}/edit/${geojson ? 'sources-geojson' : 'communities-csv'}`, { method: 'POST', body: form, redirect: 'manual' });
+      form.append(
+        'file',
+        new Blob([content], { type: geojson ? 'application/geo+json' : 'text/csv' }),
+        name,
+      );
+      const response = await service.fetch(
+        `/studies/${id}/edit/${geojson ? 'sources-geojson' : 'communities-csv'}`,
+        { method: 'POST', body: form, redirect: 'manual' },
+      );
       statuses.push(response.status);
       expect(response.status, `upload named ${JSON.stringify(name)}`).toBeLessThan(500);
     }
-    console.log(`uploads with hostile file names: ${names.length}, answered ${statuses.join(', ')}`);
+    console.log(
+      `uploads with hostile file names: ${names.length}, answered ${statuses.join(', ')}`,
+    );
     for (const target of targets) expect(existsSync(target), target).toBe(false);
     // Only the database's own files are in its folder.
-    expect(readdirSync(dir.path).sort().filter((f) => !before.includes(f) && !/^injection\.db(-wal|-shm)?$/.test(f))).toEqual([]);
+    expect(
+      readdirSync(dir.path)
+        .sort()
+        .filter((f) => !before.includes(f) && !/^injection\.db(-wal|-shm)?$/.test(f)),
+    ).toEqual([]);
     // The import reached the study (by its content), not a file.
-    const saved = (await (await service.fetch(`/api/studies/${id}`)).json()) as { communitiesCsv: string | null };
+    const saved = (await (await service.fetch(`/api/studies/${id}`)).json()) as {
+      communitiesCsv: string | null;
+    };
     expect(saved.communitiesCsv).toBe(COMMUNITIES_CSV);
   });
 });
@@ -142,12 +204,28 @@ describe('file system use', () => {
         else if (/\.tsx?$/.test(entry.name)) files.push(relative(REPO_ROOT, full));
       }
     };
-    for (const dirName of ['api/service', 'api/operations', 'api/store', 'api/results', 'api/workers', 'api/study', 'web']) walk(join(REPO_ROOT, dirName));
-    const users = files.filter((f) => /from ['"](node:)?fs(\/promises)?['"]/.test(readFileSync(join(REPO_ROOT, f), 'utf8')));
-    console.log(`file system use: ${users.length} of ${files.length} service and page files (${users.join(', ')})`);
+    for (const dirName of [
+      'api/service',
+      'api/operations',
+      'api/store',
+      'api/results',
+      'api/workers',
+      'api/study',
+      'web',
+    ])
+      walk(join(REPO_ROOT, dirName));
+    const users = files.filter((f) =>
+      /from ['"](node:)?fs(\/promises)?['"]/.test(readFileSync(join(REPO_ROOT, f), 'utf8')),
+    );
+    console.log(
+      `file system use: ${users.length} of ${files.length} service and page files (${users.join(', ')})`,
+    );
     expect(users.filter((f) => !(f in FILE_SYSTEM_USERS))).toEqual([]);
     for (const f of users) {
-      const writes = readFileSync(join(REPO_ROOT, f), 'utf8').match(/\b(writeFile|appendFile|createWriteStream|rename|unlink|rm|copyFile|symlink|open)(Sync)?\(/g) ?? [];
+      const writes =
+        readFileSync(join(REPO_ROOT, f), 'utf8').match(
+          /\b(writeFile|appendFile|createWriteStream|rename|unlink|rm|copyFile|symlink|open)(Sync)?\(/g,
+        ) ?? [];
       expect(writes, `${f} writes`).toEqual([]);
     }
   });

@@ -13,7 +13,13 @@ import { send } from './http-client.ts';
  */
 
 export interface AutocannonResult {
-  readonly latency: { readonly p50: number; readonly p97_5: number; readonly p99: number; readonly max: number; readonly average: number };
+  readonly latency: {
+    readonly p50: number;
+    readonly p97_5: number;
+    readonly p99: number;
+    readonly max: number;
+    readonly average: number;
+  };
   readonly requests: { readonly average: number; readonly total: number };
   readonly non2xx: number;
   readonly errors: number;
@@ -56,27 +62,41 @@ export interface LoadMixOptions {
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
 /** Saves the heavy study, starts its run and waits until a worker computes it; returns the ids. */
-export async function startHeavyRun(service: ServiceProcess): Promise<{ runId: string; studyId: string }> {
+export async function startHeavyRun(
+  service: ServiceProcess,
+): Promise<{ runId: string; studyId: string }> {
   const studyId = await saveHeavyStudy(service);
   const started = await service.fetch(`/api/studies/${studyId}/runs`, { method: 'POST' });
-  if (started.status !== 202) throw new Error(`the heavy run did not start: ${started.status} ${await started.text()}`);
+  if (started.status !== 202)
+    throw new Error(`the heavy run did not start: ${started.status} ${await started.text()}`);
   const { id } = (await started.json()) as { id: string };
   // Every worker thread loads its code on its first task (seconds on a busy machine): one
   // compute and one page first, so the load measures the service, not the start-up.
-  const warm = await service.fetch('/api/compute', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(smallStudy('Warm-up')) });
-  if (warm.status !== 200) throw new Error(`the warm-up compute failed: ${warm.status} ${await warm.text()}`);
+  const warm = await service.fetch('/api/compute', {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify(smallStudy('Warm-up')),
+  });
+  if (warm.status !== 200)
+    throw new Error(`the warm-up compute failed: ${warm.status} ${await warm.text()}`);
   await (await service.fetch(`/studies/${studyId}`)).text();
   for (let i = 0; i < 600; i++) {
     const run = (await (await service.fetch(`/api/runs/${id}`)).json()) as { status: string };
     if (run.status === 'running') return { runId: id, studyId };
-    if (run.status !== 'queued') throw new Error(`the heavy run ended before the load: ${run.status}`);
+    if (run.status !== 'queued')
+      throw new Error(`the heavy run ended before the load: ${run.status}`);
     await sleep(100);
   }
   throw new Error('the heavy run never started');
 }
 
 /** The three loads at once, while the heavy run computes; throws if the run is no longer running after. */
-export async function loadMix(service: ServiceProcess, studyId: string, runId: string, options: LoadMixOptions): Promise<LoadTarget[]> {
+export async function loadMix(
+  service: ServiceProcess,
+  studyId: string,
+  runId: string,
+  options: LoadMixOptions,
+): Promise<LoadTarget[]> {
   const compute = JSON.stringify(smallStudy('Load compute'));
   const computeConnections = Math.max(1, Math.floor(options.connections / 4));
   const post = { method: 'POST', headers: { 'content-type': 'application/json' }, body: compute };
@@ -90,15 +110,31 @@ export async function loadMix(service: ServiceProcess, studyId: string, runId: s
           fixedRequests(`${service.url}/api/compute`, amounts.compute, computeConnections, post),
         ]
       : [
-          autocannon({ ...common, url: `${service.url}/api/health`, connections: options.connections }),
-          autocannon({ ...common, url: `${service.url}/studies/${studyId}`, connections: options.connections }),
-          autocannon({ ...common, url: `${service.url}/api/compute`, connections: computeConnections, ...post }),
+          autocannon({
+            ...common,
+            url: `${service.url}/api/health`,
+            connections: options.connections,
+          }),
+          autocannon({
+            ...common,
+            url: `${service.url}/studies/${studyId}`,
+            connections: options.connections,
+          }),
+          autocannon({
+            ...common,
+            url: `${service.url}/api/compute`,
+            connections: computeConnections,
+            ...post,
+          }),
         ],
   );
   // Whether the heavy run outlasted the load depends on the machine: the benchmark needs it
   // (its figures are for a loaded service), the test with fixed amounts only reports it.
   const run = (await (await service.fetch(`/api/runs/${runId}`)).json()) as { status: string };
-  if (!options.amounts && run.status !== 'running') throw new Error(`the heavy run was ${run.status} by the end of the load; expected it still running`);
+  if (!options.amounts && run.status !== 'running')
+    throw new Error(
+      `the heavy run was ${run.status} by the end of the load; expected it still running`,
+    );
   return [
     { label: 'GET /api/health', result: health },
     { label: 'GET /studies/{id} (overview)', result: page },
@@ -111,7 +147,12 @@ export async function loadMix(service: ServiceProcess, studyId: string, runId: s
  * other; every answer is counted, none is cut off at a deadline. The figures come in
  * autocannon's shape so that describeLoad prints both alike.
  */
-export async function fixedRequests(url: string, amount: number, connections: number, init: { method?: string; headers?: Record<string, string>; body?: string } = {}): Promise<AutocannonResult> {
+export async function fixedRequests(
+  url: string,
+  amount: number,
+  connections: number,
+  init: { method?: string; headers?: Record<string, string>; body?: string } = {},
+): Promise<AutocannonResult> {
   const latencies: number[] = [];
   let non2xx = 0;
   let errors = 0;
@@ -138,12 +179,23 @@ export async function fixedRequests(url: string, amount: number, connections: nu
       latencies.push(performance.now() - sent);
     }
   };
-  await Promise.all(Array.from({ length: connections }, (_, k) => client(Math.floor(amount / connections) + (k < amount % connections ? 1 : 0))));
+  await Promise.all(
+    Array.from({ length: connections }, (_, k) =>
+      client(Math.floor(amount / connections) + (k < amount % connections ? 1 : 0)),
+    ),
+  );
   const seconds = (performance.now() - started) / 1000;
   const sorted = latencies.sort((a, b) => a - b);
-  const at = (q: number) => Math.round(sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))] ?? 0);
+  const at = (q: number) =>
+    Math.round(sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))] ?? 0);
   return {
-    latency: { p50: at(0.5), p97_5: at(0.975), p99: at(0.99), max: Math.round(sorted.at(-1) ?? 0), average: Math.round(sorted.reduce((a, b) => a + b, 0) / Math.max(1, sorted.length)) },
+    latency: {
+      p50: at(0.5),
+      p97_5: at(0.975),
+      p99: at(0.99),
+      max: Math.round(sorted.at(-1) ?? 0),
+      average: Math.round(sorted.reduce((a, b) => a + b, 0) / Math.max(1, sorted.length)),
+    },
     requests: { average: latencies.length / seconds, total: latencies.length + errors },
     non2xx,
     errors,
@@ -155,8 +207,9 @@ export async function fixedRequests(url: string, amount: number, connections: nu
 /** One line of figures per target. */
 export function describeLoad(targets: readonly LoadTarget[]): string {
   return targets
-    .map(({ label, result: r }) =>
-      `${label.padEnd(30)} ${Math.round(r.requests.average)} req/s, p50 ${r.latency.p50} ms, p99 ${r.latency.p99} ms, max ${r.latency.max} ms ` +
+    .map(
+      ({ label, result: r }) =>
+        `${label.padEnd(30)} ${Math.round(r.requests.average)} req/s, p50 ${r.latency.p50} ms, p99 ${r.latency.p99} ms, max ${r.latency.max} ms ` +
         `(${r.requests.total} requests, ${r.non2xx} non-2xx, ${r.errors} errors, ${r.timeouts} timeouts)`,
     )
     .join('\n  ');

@@ -32,21 +32,42 @@ function heldBody(bytes: Uint8Array): { body: ReadableStream<Uint8Array>; releas
   return { body, release };
 }
 
-const newStudy = () => page.ctx.store.studies.create({ name: 'Held', document: JSON.stringify(smallStudy('Held')) }).id;
-const savedName = (id: string) => (JSON.parse(page.ctx.store.studies.get(id)?.document as string) as { name: string }).name;
+const newStudy = () =>
+  page.ctx.store.studies.create({ name: 'Held', document: JSON.stringify(smallStudy('Held')) }).id;
+const savedName = (id: string) =>
+  (JSON.parse(page.ctx.store.studies.get(id)?.document as string) as { name: string }).name;
 
-async function bytesOf(form: FormData | URLSearchParams): Promise<{ bytes: Uint8Array; type: string }> {
+async function bytesOf(
+  form: FormData | URLSearchParams,
+): Promise<{ bytes: Uint8Array; type: string }> {
   const encoded = new Response(form);
-  return { bytes: new Uint8Array(await encoded.arrayBuffer()), type: encoded.headers.get('content-type') as string };
+  return {
+    bytes: new Uint8Array(await encoded.arrayBuffer()),
+    type: encoded.headers.get('content-type') as string,
+  };
 }
 
 /** Sends `path` with a held body, PUTs a renamed study meanwhile, releases; returns the write's status. */
-async function raceWithPut(id: string, path: string, bytes: Uint8Array, type: string): Promise<number> {
+async function raceWithPut(
+  id: string,
+  path: string,
+  bytes: Uint8Array,
+  type: string,
+): Promise<number> {
   const held = heldBody(bytes);
-  const pending = page.app.request(path, { method: 'POST', headers: { 'Content-Type': type, 'Content-Length': String(bytes.length) }, body: held.body, duplex: 'half' } as RequestInit);
+  const pending = page.app.request(path, {
+    method: 'POST',
+    headers: { 'Content-Type': type, 'Content-Length': String(bytes.length) },
+    body: held.body,
+    duplex: 'half',
+  } as RequestInit);
   // Let the held request run as far as it can before its body arrives.
   for (let i = 0; i < 5; i++) await new Promise((r) => setTimeout(r, 10));
-  const put = await page.app.request(`/api/studies/${id}`, { method: 'PUT', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(smallStudy('Renamed meanwhile')) });
+  const put = await page.app.request(`/api/studies/${id}`, {
+    method: 'PUT',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify(smallStudy('Renamed meanwhile')),
+  });
   expect(put.status).toBe(200);
   held.release();
   return (await pending).status;
@@ -55,22 +76,46 @@ async function raceWithPut(id: string, path: string, bytes: Uint8Array, type: st
 describe('no lost update while a body is on its way', () => {
   test('API communities import', async () => {
     const id = newStudy();
-    const status = await raceWithPut(id, `/api/studies/${id}/communities`, new TextEncoder().encode(COMMUNITIES_CSV), 'text/csv');
+    const status = await raceWithPut(
+      id,
+      `/api/studies/${id}/communities`,
+      new TextEncoder().encode(COMMUNITIES_CSV),
+      'text/csv',
+    );
     expect(status).toBe(200);
     expect(savedName(id)).toBe('Renamed meanwhile');
   });
 
   test('API sources import', async () => {
     const id = newStudy();
-    const status = await raceWithPut(id, `/api/studies/${id}/sources`, new TextEncoder().encode(JSON.stringify(sourcesCollection())), 'application/geo+json');
+    const status = await raceWithPut(
+      id,
+      `/api/studies/${id}/sources`,
+      new TextEncoder().encode(JSON.stringify(sourcesCollection())),
+      'application/geo+json',
+    );
     expect(status).toBe(200);
     expect(savedName(id)).toBe('Renamed meanwhile');
   });
 
   test('editor: add a community', async () => {
     const id = newStudy();
-    const form = await bytesOf(new URLSearchParams({ id: 'second-cove', name: 'Second Cove', lon: '-140.1', lat: '-47.3', vs30: '400', coastal: 'true' }));
-    const status = await raceWithPut(id, `/studies/${id}/edit/new-community`, form.bytes, form.type);
+    const form = await bytesOf(
+      new URLSearchParams({
+        id: 'second-cove',
+        name: 'Second Cove',
+        lon: '-140.1',
+        lat: '-47.3',
+        vs30: '400',
+        coastal: 'true',
+      }),
+    );
+    const status = await raceWithPut(
+      id,
+      `/studies/${id}/edit/new-community`,
+      form.bytes,
+      form.type,
+    );
     expect(status).toBe(303);
     expect(savedName(id)).toBe('Renamed meanwhile');
     expect(page.ctx.store.studies.get(id)?.document).toContain('second-cove');
@@ -78,8 +123,22 @@ describe('no lost update while a body is on its way', () => {
 
   test('editor: edit a community', async () => {
     const id = newStudy();
-    const form = await bytesOf(new URLSearchParams({ id: 'test-cove', name: 'Test Cove', lon: '-140.2', lat: '-47.4', vs30: '650', coastal: 'true' }));
-    const status = await raceWithPut(id, `/studies/${id}/edit/communities/test-cove`, form.bytes, form.type);
+    const form = await bytesOf(
+      new URLSearchParams({
+        id: 'test-cove',
+        name: 'Test Cove',
+        lon: '-140.2',
+        lat: '-47.4',
+        vs30: '650',
+        coastal: 'true',
+      }),
+    );
+    const status = await raceWithPut(
+      id,
+      `/studies/${id}/edit/communities/test-cove`,
+      form.bytes,
+      form.type,
+    );
     expect(status).toBe(303);
     expect(savedName(id)).toBe('Renamed meanwhile');
     expect(page.ctx.store.studies.get(id)?.document).toContain('650');
@@ -87,8 +146,15 @@ describe('no lost update while a body is on its way', () => {
 
   test('editor: sources upload', async () => {
     const id = newStudy();
-    const form = await bytesOf(fileForm('sources.geojson', 'application/geo+json', JSON.stringify(sourcesCollection())));
-    const status = await raceWithPut(id, `/studies/${id}/edit/sources-geojson`, form.bytes, form.type);
+    const form = await bytesOf(
+      fileForm('sources.geojson', 'application/geo+json', JSON.stringify(sourcesCollection())),
+    );
+    const status = await raceWithPut(
+      id,
+      `/studies/${id}/edit/sources-geojson`,
+      form.bytes,
+      form.type,
+    );
     expect(status).toBe(303);
     expect(savedName(id)).toBe('Renamed meanwhile');
   });

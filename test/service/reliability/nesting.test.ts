@@ -27,13 +27,21 @@ function sourcesNested(depth: number): Record<string, unknown> {
   return collection;
 }
 
-const newStudy = () => page.ctx.store.studies.create({ name: 'Deep', document: JSON.stringify(smallStudy('Deep')) }).id;
+const newStudy = () =>
+  page.ctx.store.studies.create({ name: 'Deep', document: JSON.stringify(smallStudy('Deep')) }).id;
 
 describe(`an import at the nesting limit (${MAX_JSON_DEPTH})`, () => {
   test('the API refuses it (422 at sources) and the study still reads', async () => {
     const id = newStudy();
     const body = JSON.stringify(sourcesNested(MAX_JSON_DEPTH));
-    const refused = await expectError(await page.app.request(`/api/studies/${id}/sources`, { method: 'POST', headers: { 'Content-Type': 'application/geo+json' }, body }), 422);
+    const refused = await expectError(
+      await page.app.request(`/api/studies/${id}/sources`, {
+        method: 'POST',
+        headers: { 'Content-Type': 'application/geo+json' },
+        body,
+      }),
+      422,
+    );
     expect(refused.issues[0]?.path).toBe('sources');
     expect(refused.issues[0]?.message).toContain(String(MAX_JSON_DEPTH));
     expect((await page.app.request(`/api/studies/${id}`)).status).toBe(200);
@@ -43,7 +51,11 @@ describe(`an import at the nesting limit (${MAX_JSON_DEPTH})`, () => {
   test('one level less is accepted and reads back', async () => {
     const id = newStudy();
     const body = JSON.stringify(sourcesNested(MAX_JSON_DEPTH - 1));
-    const accepted = await page.app.request(`/api/studies/${id}/sources`, { method: 'POST', headers: { 'Content-Type': 'application/geo+json' }, body });
+    const accepted = await page.app.request(`/api/studies/${id}/sources`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/geo+json' },
+      body,
+    });
     expect(accepted.status, await accepted.clone().text()).toBe(200);
     expect((await page.app.request(`/api/studies/${id}`)).status).toBe(200);
   });
@@ -51,8 +63,15 @@ describe(`an import at the nesting limit (${MAX_JSON_DEPTH})`, () => {
   test('the editor upload shows the problem and saves nothing', async () => {
     const id = newStudy();
     const before = page.ctx.store.studies.get(id)?.document;
-    const form = fileForm('deep.geojson', 'application/geo+json', JSON.stringify(sourcesNested(MAX_JSON_DEPTH)));
-    const response = await page.app.request(`/studies/${id}/edit/sources-geojson`, { method: 'POST', body: form });
+    const form = fileForm(
+      'deep.geojson',
+      'application/geo+json',
+      JSON.stringify(sourcesNested(MAX_JSON_DEPTH)),
+    );
+    const response = await page.app.request(`/studies/${id}/edit/sources-geojson`, {
+      method: 'POST',
+      body: form,
+    });
     expect(response.status).toBe(422);
     expect(await response.text()).toContain(String(MAX_JSON_DEPTH));
     expect(page.ctx.store.studies.get(id)?.document).toBe(before);

@@ -10,7 +10,13 @@ import { WorkerPool } from '../../../api/workers/worker-pool.ts';
 import { expectRelative } from '../../helpers/close.ts';
 import { expectError } from '../helpers/assertions.ts';
 import { tempDir } from '../helpers/service-process.ts';
-import { EXCEEDANCE_AT_LEVELS, MEDIAN_PGA_G, RATE_PER_YEAR, poissonChance, smallStudy } from '../helpers/small-study.ts';
+import {
+  EXCEEDANCE_AT_LEVELS,
+  MEDIAN_PGA_G,
+  RATE_PER_YEAR,
+  poissonChance,
+  smallStudy,
+} from '../helpers/small-study.ts';
 
 /*
  * Map runs through app.request(), kept in the store. The small study (one earthquake straight
@@ -29,10 +35,21 @@ beforeAll(async () => {
   store = openStore(`${dir.path}/maps.db`);
   const runPool = new WorkerPool({ size: 1, log: () => {} });
   const quickPool = new WorkerPool({ size: 1, log: () => {} });
-  ctx = { store, runPool, quickPool, scheduler: new RunScheduler({ store, pool: runPool, toolVersion: 'test' }), models: modelCatalog, toolVersion: 'test', workBudget: 1e9 };
+  ctx = {
+    store,
+    runPool,
+    quickPool,
+    scheduler: new RunScheduler({ store, pool: runPool, toolVersion: 'test' }),
+    models: modelCatalog,
+    toolVersion: 'test',
+    workBudget: 1e9,
+  };
   const created = await app().request('/api/studies', json('POST', smallStudy()));
   studyId = ((await created.json()) as { id: string }).id;
-  demoId = store.studies.create({ name: 'Demo coast', document: readFileSync(DEMO_STUDY_URL, 'utf8') }).id;
+  demoId = store.studies.create({
+    name: 'Demo coast',
+    document: readFileSync(DEMO_STUDY_URL, 'utf8'),
+  }).id;
 });
 afterAll(async () => {
   await Promise.all([ctx.runPool.close(), ctx.quickPool.close()]);
@@ -42,7 +59,11 @@ afterAll(async () => {
 
 let shared: ReturnType<typeof createApp> | undefined;
 const app = () => (shared ??= createApp(ctx, { logError: () => {} }));
-const json = (method: string, body: unknown): RequestInit => ({ method, headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(body) });
+const json = (method: string, body: unknown): RequestInit => ({
+  method,
+  headers: { 'Content-Type': 'application/json' },
+  body: JSON.stringify(body),
+});
 
 async function finished(id: string): Promise<Record<string, any>> {
   for (let i = 0; i < 1200; i++) {
@@ -64,13 +85,48 @@ async function startMap(id: string, body: Record<string, unknown>): Promise<Reco
 
 describe('map runs', () => {
   it('POST /api/studies/:id/maps records a queued run (202) whose status shows progress, then its GeoJSON, kept in the store', async () => {
-    const started = await startMap(studyId, { level: MEDIAN_PGA_G, horizonYears: 50, spacingKm: 5 });
-    expect(started).toMatchObject({ studyId, status: 'queued', progress: 0, map: null, provenance: null, startedAt: null, finishedAt: null, links: { geojson: `/api/maps/${started.id}/map.geojson` } });
-    expect(started.request).toEqual({ measure: 'PGA', quantity: { kind: 'chance', level: MEDIAN_PGA_G, horizonYears: 50 }, spacingKm: 5, vs30: 760 });
+    const started = await startMap(studyId, {
+      level: MEDIAN_PGA_G,
+      horizonYears: 50,
+      spacingKm: 5,
+    });
+    expect(started).toMatchObject({
+      studyId,
+      status: 'queued',
+      progress: 0,
+      map: null,
+      provenance: null,
+      startedAt: null,
+      finishedAt: null,
+      links: { geojson: `/api/maps/${started.id}/map.geojson` },
+    });
+    expect(started.request).toEqual({
+      measure: 'PGA',
+      quantity: { kind: 'chance', level: MEDIAN_PGA_G, horizonYears: 50 },
+      spacingKm: 5,
+      vs30: 760,
+    });
     const done = await finished(started.id);
     expect(done.error).toBeNull();
-    expect(done).toMatchObject({ status: 'done', progress: 1, error: null, warnings: [], map: { count: 1, measure: 'PGA', vs30: 760, quantity: { kind: 'chance', level: MEDIAN_PGA_G, horizonYears: 50 } } });
-    expect(done.provenance).toMatchObject({ tool: 'tremora', toolVersion: 'test', inputHash: done.inputHash, models: { crustal: [{ model: 'Cornell79', weight: 1 }] }, map: started.request });
+    expect(done).toMatchObject({
+      status: 'done',
+      progress: 1,
+      error: null,
+      warnings: [],
+      map: {
+        count: 1,
+        measure: 'PGA',
+        vs30: 760,
+        quantity: { kind: 'chance', level: MEDIAN_PGA_G, horizonYears: 50 },
+      },
+    });
+    expect(done.provenance).toMatchObject({
+      tool: 'tremora',
+      toolVersion: 'test',
+      inputHash: done.inputHash,
+      models: { crustal: [{ model: 'Cornell79', weight: 1 }] },
+      map: started.request,
+    });
     expect(done.startedAt <= done.finishedAt).toBe(true);
 
     const geo = await app().request(`/api/maps/${started.id}/map.geojson`);
@@ -81,8 +137,15 @@ describe('map runs', () => {
     expect(doc.type).toBe('FeatureCollection');
     expect(doc.features).toHaveLength(1);
     expect(doc.features[0].properties.unit).toBe('probability');
-    expectRelative(doc.features[0].properties.value, poissonChance(RATE_PER_YEAR * EXCEEDANCE_AT_LEVELS[1]!, 50), 1e-9, 'Poisson chance of rate × 1/2 over 50 years (Cornell et al. 1979 median; Baker 2008 Poisson)');
-    const list = (await (await app().request(`/api/studies/${studyId}/maps`)).json()) as { maps: { id: string; status: string }[] };
+    expectRelative(
+      doc.features[0].properties.value,
+      poissonChance(RATE_PER_YEAR * EXCEEDANCE_AT_LEVELS[1]!, 50),
+      1e-9,
+      'Poisson chance of rate × 1/2 over 50 years (Cornell et al. 1979 median; Baker 2008 Poisson)',
+    );
+    const list = (await (await app().request(`/api/studies/${studyId}/maps`)).json()) as {
+      maps: { id: string; status: string }[];
+    };
     expect(list.maps.map((m) => m.id)).toContain(started.id);
     expect(store.maps.get(started.id)?.status).toBe('done');
   });
@@ -91,31 +154,68 @@ describe('map runs', () => {
     const years = 1 / (RATE_PER_YEAR * EXCEEDANCE_AT_LEVELS[1]!);
     const started = await startMap(studyId, { returnPeriodYears: years, spacingKm: 5, vs30: 500 });
     const done = await finished(started.id);
-    expect(done).toMatchObject({ status: 'done', map: { count: 1, unit: 'g', vs30: 500 }, request: { vs30: 500, quantity: { kind: 'return-period', returnPeriodYears: years } } });
+    expect(done).toMatchObject({
+      status: 'done',
+      map: { count: 1, unit: 'g', vs30: 500 },
+      request: { vs30: 500, quantity: { kind: 'return-period', returnPeriodYears: years } },
+    });
     const doc = JSON.parse(store.maps.geojson(started.id) as string) as any;
     expect(doc.features[0].properties.status).toBe('ok');
     // The curve's levels sit at the median and one sigma either side; the rate at the median is 1/years exactly, so log–log reading returns that level.
-    expectRelative(doc.features[0].properties.value, MEDIAN_PGA_G, 1e-9, 'median PGA of Cornell et al. (1979) at R = 10 km, M 6.5 (Baker 2008, from memory), the level whose rate is rate × 1/2');
+    expectRelative(
+      doc.features[0].properties.value,
+      MEDIAN_PGA_G,
+      1e-9,
+      'median PGA of Cornell et al. (1979) at R = 10 km, M 6.5 (Baker 2008, from memory), the level whose rate is rate × 1/2',
+    );
   });
 
   it('lists every problem of a map request (422), in the one error shape, and records nothing', async () => {
     const before = store.maps.listForStudy(studyId).length;
-    const body = await expectError(await app().request(`/api/studies/${studyId}/maps`, json('POST', { returnPeriodYears: 475, level: 0.1, horizonYears: 50, spacingKm: 0.01, colour: 'red' })), 422);
-    expect(body.issues.map((i) => i.path).sort()).toEqual(['colour', 'returnPeriodYears', 'spacingKm']);
+    const body = await expectError(
+      await app().request(
+        `/api/studies/${studyId}/maps`,
+        json('POST', {
+          returnPeriodYears: 475,
+          level: 0.1,
+          horizonYears: 50,
+          spacingKm: 0.01,
+          colour: 'red',
+        }),
+      ),
+      422,
+    );
+    expect(body.issues.map((i) => i.path).sort()).toEqual([
+      'colour',
+      'returnPeriodYears',
+      'spacingKm',
+    ]);
     expect(store.maps.listForStudy(studyId)).toHaveLength(before);
   });
 
   it('refuses a map over the work budget (422, size and budget) and records nothing', async () => {
     const tight = createApp({ ...ctx, workBudget: 10 }, { logError: () => {} });
     const before = store.maps.listForStudy(demoId).length;
-    const body = await expectError(await tight.request(`/api/studies/${demoId}/maps`, json('POST', { returnPeriodYears: 475, spacingKm: 50 })), 422);
+    const body = await expectError(
+      await tight.request(
+        `/api/studies/${demoId}/maps`,
+        json('POST', { returnPeriodYears: 475, spacingKm: 50 }),
+      ),
+      422,
+    );
     expect(body.budget).toBe(10);
     expect(body.error).toMatch(/map points x \d+ ruptures x 7 levels read/);
     expect(store.maps.listForStudy(demoId)).toHaveLength(before);
   });
 
   it('404 for an unknown study or map; 409 for the GeoJSON of a map not done and for cancelling a finished one', async () => {
-    await expectError(await app().request('/api/studies/none-such/maps', json('POST', { returnPeriodYears: 475, spacingKm: 5 })), 404);
+    await expectError(
+      await app().request(
+        '/api/studies/none-such/maps',
+        json('POST', { returnPeriodYears: 475, spacingKm: 5 }),
+      ),
+      404,
+    );
     await expectError(await app().request('/api/maps/none-such'), 404);
     await expectError(await app().request('/api/maps/none-such/map.geojson'), 404);
     await expectError(await app().request('/api/maps/none-such/cancel', { method: 'POST' }), 404);
@@ -134,7 +234,13 @@ describe('map runs', () => {
     expect(done.status).toBe('cancelled');
     expect(done.error).toMatch(/^cancelled on request after \d+% of the points$/);
     expect(store.maps.geojson(id)).toBeUndefined();
-    expect((store.db.prepare('SELECT geojson FROM map_runs WHERE id = ?').get(id) as { geojson: string | null }).geojson).toBeNull();
+    expect(
+      (
+        store.db.prepare('SELECT geojson FROM map_runs WHERE id = ?').get(id) as {
+          geojson: string | null;
+        }
+      ).geojson,
+    ).toBeNull();
     await expectError(await app().request(`/api/maps/${id}/map.geojson`), 409);
     await expectError(await app().request(`/api/maps/${id}/cancel`, { method: 'POST' }), 409);
   });
@@ -146,7 +252,9 @@ describe('map runs', () => {
     const second = await startMap(goneId, { returnPeriodYears: 475, spacingKm: 5 });
     await finished(first.id);
     await finished(second.id);
-    const list = (await (await app().request(`/api/studies/${goneId}/maps`)).json()) as { maps: { id: string }[] };
+    const list = (await (await app().request(`/api/studies/${goneId}/maps`)).json()) as {
+      maps: { id: string }[];
+    };
     expect(list.maps.map((m) => m.id)).toEqual([first.id, second.id]);
     expect((await app().request(`/api/studies/${goneId}`, { method: 'DELETE' })).status).toBe(204);
     await expectError(await app().request(`/api/maps/${first.id}`), 404);

@@ -4,8 +4,20 @@ import type { StudyResult } from '../../../api/engine/results.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 import { expectError, expectSecurityHeaders } from '../helpers/assertions.ts';
 import { demoStudyId, getRun, startRun, waitForStatus } from '../helpers/runs.ts';
-import { jsonInit, type ServiceProcess, startService, tempDir } from '../helpers/service-process.ts';
-import { COMMUNITY, EXCEEDANCE_AT_LEVELS, LEVELS_G, poissonChance, RATE_PER_YEAR, smallStudy } from '../helpers/small-study.ts';
+import {
+  jsonInit,
+  type ServiceProcess,
+  startService,
+  tempDir,
+} from '../helpers/service-process.ts';
+import {
+  COMMUNITY,
+  EXCEEDANCE_AT_LEVELS,
+  LEVELS_G,
+  poissonChance,
+  RATE_PER_YEAR,
+  smallStudy,
+} from '../helpers/small-study.ts';
 
 const dir = tempDir();
 let service: ServiceProcess;
@@ -13,7 +25,10 @@ let studyId: string;
 
 beforeAll(async () => {
   // One worker, so a second run waits behind the first whatever the machine's cores.
-  service = await startService({ databasePath: `${dir.path}/runs.db`, env: { TREMORA_WORKERS: '1' } });
+  service = await startService({
+    databasePath: `${dir.path}/runs.db`,
+    env: { TREMORA_WORKERS: '1' },
+  });
   const created = await service.fetch('/api/studies', jsonInit('POST', smallStudy('Run me')));
   studyId = ((await created.json()) as { id: string }).id;
 });
@@ -35,7 +50,11 @@ describe('a run of a saved study', () => {
     const response = await service.fetch(`/api/studies/${studyId}/runs`, { method: 'POST' });
     expect(response.status).toBe(202);
     expectSecurityHeaders(response);
-    const accepted = (await response.json()) as { id: string; status: string; work: { size: number; detail: string } };
+    const accepted = (await response.json()) as {
+      id: string;
+      status: string;
+      work: { size: number; detail: string };
+    };
     expect(['queued', 'running']).toContain(accepted.status);
     expect(accepted.work.size).toBe(3);
     runId = accepted.id;
@@ -51,26 +70,45 @@ describe('a run of a saved study', () => {
     const community = result.communities[0]!;
     expect(community.communityId).toBe(COMMUNITY.id);
     const curve = community.curves.PGA!;
-    curve.levels.forEach((level, i) => expectRelative(level, LEVELS_G[i] as number, 1e-12, 'levels are those the study gave'));
+    curve.levels.forEach((level, i) =>
+      expectRelative(level, LEVELS_G[i] as number, 1e-12, 'levels are those the study gave'),
+    );
     EXCEEDANCE_AT_LEVELS.forEach((p, i) =>
-      expectRelative(curve.annualRate[i] as number, RATE_PER_YEAR * p, 1e-6, `Cornell et al. (1979) median, truncated normal at +-3 sigma (Abramowitz & Stegun 1964 Table 26.1), level ${i}`),
+      expectRelative(
+        curve.annualRate[i] as number,
+        RATE_PER_YEAR * p,
+        1e-6,
+        `Cornell et al. (1979) median, truncated normal at +-3 sigma (Abramowitz & Stegun 1964 Table 26.1), level ${i}`,
+      ),
     );
     const chance50 = community.chanceOfExceeding['50']!.PGA!;
     chance50.forEach((p, i) =>
-      expectClose(p, poissonChance(RATE_PER_YEAR * (EXCEEDANCE_AT_LEVELS[i] as number), 50), 1e-8, `Poisson chance in 50 years (Baker 2008), level ${i}`),
+      expectClose(
+        p,
+        poissonChance(RATE_PER_YEAR * (EXCEEDANCE_AT_LEVELS[i] as number), 50),
+        1e-8,
+        `Poisson chance in 50 years (Baker 2008), level ${i}`,
+      ),
     );
   });
 
   it('records its provenance: tool version, input hash, models, settings, start and end', async () => {
     const run = await getRun(service, runId);
-    const validated = (await (await service.fetch('/api/validate', jsonInit('POST', smallStudy('Run me')))).json()) as { inputHash: string };
+    const validated = (await (
+      await service.fetch('/api/validate', jsonInit('POST', smallStudy('Run me')))
+    ).json()) as { inputHash: string };
     expect(run.inputHash).toBe(validated.inputHash);
     expect(run.provenance).toEqual(result.provenance);
     expect(result.provenance).toMatchObject({
       tool: 'tremora',
       inputHash: validated.inputHash,
       models: { crustal: [{ model: 'Cornell79', weight: 1 }] },
-      settings: { measures: ['PGA'], truncationSigma: 3, horizonsYears: [50], returnPeriodsYears: [475] },
+      settings: {
+        measures: ['PGA'],
+        truncationSigma: 3,
+        horizonsYears: [50],
+        returnPeriodsYears: [475],
+      },
     });
     expect(result.provenance.startedAt <= result.provenance.finishedAt).toBe(true);
   });
@@ -81,7 +119,9 @@ describe('a run of a saved study', () => {
     expect(again.inputHash).toBe((await getRun(service, runId)).inputHash);
     const second = JSON.parse((await results(again.id)).text) as StudyResult;
     expect(second.communities).toEqual(result.communities);
-    const list = (await (await service.fetch(`/api/studies/${studyId}/runs`)).json()) as { runs: { id: string }[] };
+    const list = (await (await service.fetch(`/api/studies/${studyId}/runs`)).json()) as {
+      runs: { id: string }[];
+    };
     expect(list.runs.map((r) => r.id)).toEqual([runId, again.id]);
   });
 
@@ -90,15 +130,37 @@ describe('a run of a saved study', () => {
     expect(response.status).toBe(200);
     expect(response.headers.get('content-type')).toBe('text/csv; charset=utf-8');
     expectSecurityHeaders(response);
-    const parsed = Papa.parse<Record<string, string>>((await response.text()).trim(), { header: true });
+    const parsed = Papa.parse<Record<string, string>>((await response.text()).trim(), {
+      header: true,
+    });
     expect(parsed.errors).toEqual([]);
     expect(parsed.meta.fields).toEqual([
-      'communityId', 'name', 'lon', 'lat', 'vs30', 'band', 'bandLabel', 'PGA_475yr_g', 'MMI_475yr',
-      'chance_MMI_VI_50yr', 'chance_MMI_VII_50yr', 'chance_MMI_VIII_50yr', 'nearestFault', 'nearestFault_km', 'warnings',
+      'communityId',
+      'name',
+      'lon',
+      'lat',
+      'vs30',
+      'band',
+      'bandLabel',
+      'PGA_475yr_g',
+      'MMI_475yr',
+      'chance_MMI_VI_50yr',
+      'chance_MMI_VII_50yr',
+      'chance_MMI_VIII_50yr',
+      'nearestFault',
+      'nearestFault_km',
+      'warnings',
     ]);
     const row = parsed.data[0]!;
     const community = result.communities[0]!;
-    expect(row).toMatchObject({ communityId: COMMUNITY.id, name: COMMUNITY.name, lon: String(COMMUNITY.lon), lat: String(COMMUNITY.lat), vs30: String(COMMUNITY.vs30), band: community.band.id });
+    expect(row).toMatchObject({
+      communityId: COMMUNITY.id,
+      name: COMMUNITY.name,
+      lon: String(COMMUNITY.lon),
+      lat: String(COMMUNITY.lat),
+      vs30: String(COMMUNITY.vs30),
+      band: community.band.id,
+    });
     expect(row.PGA_475yr_g).toBe(String(community.atReturnPeriod['475']!.PGA ?? ''));
     expect(row.chance_MMI_VII_50yr).toBe(String(community.intensity.chanceOfReaching['50']!.VII));
   });
@@ -109,20 +171,37 @@ describe('a run of a saved study', () => {
     expect(response.headers.get('content-type')).toBe('application/geo+json; charset=utf-8');
     const collection = (await response.json()) as {
       type: string;
-      features: { type: string; geometry: { type: string; coordinates: number[] }; properties: Record<string, unknown> }[];
+      features: {
+        type: string;
+        geometry: { type: string; coordinates: number[] };
+        properties: Record<string, unknown>;
+      }[];
       provenance: unknown;
     };
     expect(collection.type).toBe('FeatureCollection');
     expect(collection.provenance).toEqual(result.provenance);
     expect(collection.features).toHaveLength(1);
     const feature = collection.features[0]!;
-    expect(feature.geometry).toEqual({ type: 'Point', coordinates: [COMMUNITY.lon, COMMUNITY.lat] });
-    expect(feature.properties).toMatchObject({ communityId: COMMUNITY.id, vs30: COMMUNITY.vs30, atReturnPeriod: result.communities[0]!.atReturnPeriod, band: result.communities[0]!.band });
+    expect(feature.geometry).toEqual({
+      type: 'Point',
+      coordinates: [COMMUNITY.lon, COMMUNITY.lat],
+    });
+    expect(feature.properties).toMatchObject({
+      communityId: COMMUNITY.id,
+      vs30: COMMUNITY.vs30,
+      atReturnPeriod: result.communities[0]!.atReturnPeriod,
+      band: result.communities[0]!.band,
+    });
   });
 
   it('refuses to cancel a finished run (409)', async () => {
-    const body = await expectError(await service.fetch(`/api/runs/${runId}/cancel`, { method: 'POST' }), 409);
-    expect(body.error).toBe(`run "${runId}" is already done; only a queued or running run can be cancelled`);
+    const body = await expectError(
+      await service.fetch(`/api/runs/${runId}/cancel`, { method: 'POST' }),
+      409,
+    );
+    expect(body.error).toBe(
+      `run "${runId}" is already done; only a queued or running run can be cancelled`,
+    );
   });
 });
 
@@ -138,18 +217,26 @@ describe('runs that are not done', () => {
     const cancelled = await service.fetch(`/api/runs/${queued.id}/cancel`, { method: 'POST' });
     expect(cancelled.status).toBe(202);
     const stopped = await waitForStatus(service, queued.id);
-    expect(stopped).toMatchObject({ status: 'cancelled', error: 'cancelled on request after 0% of the work' });
+    expect(stopped).toMatchObject({
+      status: 'cancelled',
+      error: 'cancelled on request after 0% of the work',
+    });
     await service.fetch(`/api/runs/${heavy.id}/cancel`, { method: 'POST' });
     expect((await waitForStatus(service, heavy.id)).status).toBe('cancelled');
     const body = await expectError(await service.fetch(`/api/runs/${heavy.id}/results`), 409);
-    expect(body.error).toMatch(/is cancelled; results exist only once it is done \(cancelled on request after \d+% of the work\)/);
+    expect(body.error).toMatch(
+      /is cancelled; results exist only once it is done \(cancelled on request after \d+% of the work\)/,
+    );
   });
 
   it('404 for an unknown run or study', async () => {
     await expectError(await service.fetch('/api/runs/no-such-run'), 404);
     await expectError(await service.fetch('/api/runs/no-such-run/results'), 404);
     await expectError(await service.fetch('/api/runs/no-such-run/cancel', { method: 'POST' }), 404);
-    await expectError(await service.fetch('/api/studies/no-such-study/runs', { method: 'POST' }), 404);
+    await expectError(
+      await service.fetch('/api/studies/no-such-study/runs', { method: 'POST' }),
+      404,
+    );
     await expectError(await service.fetch('/api/studies/no-such-study/runs'), 404);
   });
 });

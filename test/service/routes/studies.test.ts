@@ -1,7 +1,12 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { expectError, expectSecurityHeaders } from '../helpers/assertions.ts';
-import { jsonInit, type ServiceProcess, startService, tempDir } from '../helpers/service-process.ts';
+import {
+  jsonInit,
+  type ServiceProcess,
+  startService,
+  tempDir,
+} from '../helpers/service-process.ts';
 import { smallStudy } from '../helpers/small-study.ts';
 
 const dir = tempDir();
@@ -15,7 +20,11 @@ afterAll(async () => {
   dir.remove();
 });
 
-const packageVersion = (JSON.parse(readFileSync(new URL('../../../package.json', import.meta.url), 'utf8')) as { version: string }).version;
+const packageVersion = (
+  JSON.parse(readFileSync(new URL('../../../package.json', import.meta.url), 'utf8')) as {
+    version: string;
+  }
+).version;
 
 interface StudyAnswer {
   id: string;
@@ -38,8 +47,18 @@ describe('GET /api/health', () => {
     const response = await service.fetch('/api/health');
     expect(response.status).toBe(200);
     expectSecurityHeaders(response);
-    const body = (await response.json()) as { status: string; version: string; database: string; workers: { runs: { alive: number } } };
-    expect(body).toMatchObject({ status: 'ok', tool: 'tremora', version: packageVersion, database: 'ok' });
+    const body = (await response.json()) as {
+      status: string;
+      version: string;
+      database: string;
+      workers: { runs: { alive: number } };
+    };
+    expect(body).toMatchObject({
+      status: 'ok',
+      tool: 'tremora',
+      version: packageVersion,
+      database: 'ok',
+    });
     expect(body.workers.runs.alive).toBeGreaterThanOrEqual(1);
   });
 });
@@ -77,12 +96,18 @@ describe('studies', () => {
 
   it('replaces a study; an invalid replacement changes nothing', async () => {
     const created = await createSmall('Before');
-    const replaced = await service.fetch(`/api/studies/${created.id}`, jsonInit('PUT', smallStudy('After')));
+    const replaced = await service.fetch(
+      `/api/studies/${created.id}`,
+      jsonInit('PUT', smallStudy('After')),
+    );
     expect(replaced.status).toBe(200);
     expect(((await replaced.json()) as StudyAnswer).name).toBe('After');
     const bad = smallStudy('Never saved');
     (bad.communities as Record<string, unknown>[])[0]!.lat = 123;
-    const refused = await expectError(await service.fetch(`/api/studies/${created.id}`, jsonInit('PUT', bad)), 422);
+    const refused = await expectError(
+      await service.fetch(`/api/studies/${created.id}`, jsonInit('PUT', bad)),
+      422,
+    );
     expect(refused.issues.map((i) => i.path)).toEqual(['communities[0].lat']);
     const read = (await (await service.fetch(`/api/studies/${created.id}`)).json()) as StudyAnswer;
     expect(read.name).toBe('After');
@@ -96,7 +121,10 @@ describe('studies', () => {
     const gone = await expectError(await service.fetch(`/api/studies/${created.id}`), 404);
     expect(gone.error).toBe(`no study with id "${created.id}"`);
     await expectError(await service.fetch(`/api/studies/${created.id}`, { method: 'DELETE' }), 404);
-    await expectError(await service.fetch(`/api/studies/${created.id}`, jsonInit('PUT', smallStudy())), 404);
+    await expectError(
+      await service.fetch(`/api/studies/${created.id}`, jsonInit('PUT', smallStudy())),
+      404,
+    );
   });
 });
 
@@ -106,42 +134,72 @@ describe('errors on the study routes', () => {
     const community = (bad.communities as Record<string, unknown>[])[0]!;
     community.lat = 95;
     community.vs30 = -5;
-    const feature = (bad.sources as { features: { properties: Record<string, unknown> }[] }).features[0]!;
+    const feature = (bad.sources as { features: { properties: Record<string, unknown> }[] })
+      .features[0]!;
     feature.properties.setting = 'volcanic';
     delete feature.properties.depthKm;
     const body = await expectError(await service.fetch('/api/studies', jsonInit('POST', bad)), 422);
     expect(body.error).toBe('the input has 4 problems');
     expect(body.issues.map((i) => i.path).sort()).toEqual(
-      ['communities[0].lat', 'communities[0].vs30', 'sources.features[0].properties.depthKm', 'sources.features[0].properties.setting'].sort(),
+      [
+        'communities[0].lat',
+        'communities[0].vs30',
+        'sources.features[0].properties.depthKm',
+        'sources.features[0].properties.setting',
+      ].sort(),
     );
     const setting = body.issues.find((i) => i.path.endsWith('setting'));
-    expect(setting?.message).toBe('expected one of "crustal", "interface", "intraslab", got "volcanic"');
+    expect(setting?.message).toBe(
+      'expected one of "crustal", "interface", "intraslab", got "volcanic"',
+    );
   });
 
   it('400 for malformed JSON, naming where', async () => {
-    const body = await expectError(await service.fetch('/api/studies', jsonInit('POST', '{\n  "name": "x",\n  oops\n}')), 400);
+    const body = await expectError(
+      await service.fetch('/api/studies', jsonInit('POST', '{\n  "name": "x",\n  oops\n}')),
+      400,
+    );
     expect(body.error).toBe('malformed JSON');
     expect(body.issues).toHaveLength(1);
     expect(body.issues[0]?.path).toBe('(body)');
-    expect(body.issues[0]?.message).toMatch(/^expected valid JSON; the text is malformed at line 3, column 3/);
+    expect(body.issues[0]?.message).toMatch(
+      /^expected valid JSON; the text is malformed at line 3, column 3/,
+    );
   });
 
   it('422 for JSON that is not an object', async () => {
-    const body = await expectError(await service.fetch('/api/studies', jsonInit('POST', '[1, 2]')), 422);
-    expect(body.issues).toEqual([{ path: '(body)', message: 'expected a study document as a JSON object, got a list' }]);
+    const body = await expectError(
+      await service.fetch('/api/studies', jsonInit('POST', '[1, 2]')),
+      422,
+    );
+    expect(body.issues).toEqual([
+      { path: '(body)', message: 'expected a study document as a JSON object, got a list' },
+    ]);
   });
 
   it('415 for another content type', async () => {
-    const response = await service.fetch('/api/studies', { method: 'POST', headers: { 'Content-Type': 'text/plain' }, body: JSON.stringify(smallStudy()) });
+    const response = await service.fetch('/api/studies', {
+      method: 'POST',
+      headers: { 'Content-Type': 'text/plain' },
+      body: JSON.stringify(smallStudy()),
+    });
     const body = await expectError(response, 415);
-    expect(body.error).toBe('expected a study document with Content-Type application/json, got text/plain');
+    expect(body.error).toBe(
+      'expected a study document with Content-Type application/json, got text/plain',
+    );
     expect(response.headers.get('accept')).toBe('application/json');
-    await expectError(await service.fetch('/api/studies', { method: 'POST', body: new Uint8Array([123, 125]) }), 415);
+    await expectError(
+      await service.fetch('/api/studies', { method: 'POST', body: new Uint8Array([123, 125]) }),
+      415,
+    );
   });
 
   it('413 for a body over the limit', async () => {
     const huge = JSON.stringify({ ...smallStudy(), padding: 'x'.repeat(6 * 1024 * 1024) });
-    const body = await expectError(await service.fetch('/api/studies', jsonInit('POST', huge)), 413);
+    const body = await expectError(
+      await service.fetch('/api/studies', jsonInit('POST', huge)),
+      413,
+    );
     expect(body.error).toBe('the request body is over the limit of 5242880 bytes');
   });
 

@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { idFromName, readCoordinate, readNumber, readYesNo } from '../../../api/study/community-files/cell-values.ts';
+import {
+  idFromName,
+  readCoordinate,
+  readNumber,
+  readYesNo,
+} from '../../../api/study/community-files/cell-values.ts';
 import { expectClose } from '../../helpers/close.ts';
 
 // Degrees, minutes and seconds: 1° = 60′ = 3600″ (the sexagesimal definition). Tolerance 1e-12°
@@ -28,7 +33,12 @@ describe('readCoordinate', () => {
   ] as const)('reads %s', (text, axis, expected) => {
     const value = readCoordinate(text, axis);
     expect(typeof value).toBe('number');
-    expectClose(value as number, expected, TOL, 'sexagesimal degrees: d + m/60 + s/3600, negative for S and W');
+    expectClose(
+      value as number,
+      expected,
+      TOL,
+      'sexagesimal degrees: d + m/60 + s/3600, negative for S and W',
+    );
   });
 
   it.each([
@@ -57,7 +67,13 @@ describe('readNumber', () => {
 
 describe('readYesNo and idFromName', () => {
   it('reads the usual yes and no words', () => {
-    expect([readYesNo('Yes'), readYesNo('n'), readYesNo('x'), readYesNo(1), readYesNo('maybe')]).toEqual([true, false, true, true, 'maybe']);
+    expect([
+      readYesNo('Yes'),
+      readYesNo('n'),
+      readYesNo('x'),
+      readYesNo(1),
+      readYesNo('maybe'),
+    ]).toEqual([true, false, true, true, 'maybe']);
   });
 
   it('makes an id from a name: lower case, accents dropped, dashes', () => {

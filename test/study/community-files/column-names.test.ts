@@ -22,14 +22,24 @@ describe('recogniseColumn', () => {
   });
 
   it('leaves other columns alone', () => {
-    expect(['School', 'Clinic', 'Airstrip', 'Notes', ''].map(recogniseColumn)).toEqual([undefined, undefined, undefined, undefined, undefined]);
+    expect(['School', 'Clinic', 'Airstrip', 'Notes', ''].map(recogniseColumn)).toEqual([
+      undefined,
+      undefined,
+      undefined,
+      undefined,
+      undefined,
+    ]);
   });
 });
 
 describe('matchColumns', () => {
   it('takes a picked column first, then the first recognised one, and keeps the rest as details', () => {
     const match = matchColumns(['Village', 'Name', 'Breite', 'Lon', 'School'], { lat: 'Breite' });
-    expect(Object.fromEntries(match.columnOf)).toEqual({ lat: 'Breite', name: 'Village', lon: 'Lon' });
+    expect(Object.fromEntries(match.columnOf)).toEqual({
+      lat: 'Breite',
+      name: 'Village',
+      lon: 'Lon',
+    });
     expect(match.otherColumns).toEqual(['Name', 'School']);
   });
 

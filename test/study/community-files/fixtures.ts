@@ -5,7 +5,8 @@ import { strToU8, zipSync } from 'fflate';
  * bytes whose every part is known. Places are in the invented demo region (open ocean).
  */
 
-const escapeXml = (s: string) => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
+const escapeXml = (s: string) =>
+  s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
 
 /** Column letters A, B, ... (enough for a test sheet). */
 const columnLetter = (i: number) => String.fromCharCode(65 + i);
@@ -21,7 +22,9 @@ export function xlsxBytes(rows: readonly (readonly (string | number | null)[])[]
         .map((cell, c) => {
           const ref = `${columnLetter(c)}${r + 1}`;
           if (cell === null) return '';
-          return typeof cell === 'number' ? `<c r="${ref}"><v>${cell}</v></c>` : `<c r="${ref}" t="inlineStr"><is><t>${escapeXml(cell)}</t></is></c>`;
+          return typeof cell === 'number'
+            ? `<c r="${ref}"><v>${cell}</v></c>`
+            : `<c r="${ref}" t="inlineStr"><is><t>${escapeXml(cell)}</t></is></c>`;
         })
         .join('');
       return `<row r="${r + 1}">${xml}</row>`;
@@ -41,7 +44,9 @@ export function xlsxBytes(rows: readonly (readonly (string | number | null)[])[]
     'xl/_rels/workbook.xml.rels': strToU8(
       `<?xml version="1.0" encoding="UTF-8"?><Relationships xmlns="${ns}/package/2006/relationships"><Relationship Id="rId1" Type="${ns}/officeDocument/2006/relationships/worksheet" Target="worksheets/sheet1.xml"/></Relationships>`,
     ),
-    'xl/worksheets/sheet1.xml': strToU8(`<?xml version="1.0" encoding="UTF-8"?><worksheet xmlns="${ns}/spreadsheetml/2006/main"><sheetData>${sheetRows}</sheetData></worksheet>`),
+    'xl/worksheets/sheet1.xml': strToU8(
+      `<?xml version="1.0" encoding="UTF-8"?><worksheet xmlns="${ns}/spreadsheetml/2006/main"><sheetData>${sheetRows}</sheetData></worksheet>`,
+    ),
   });
 }
 
@@ -57,8 +62,16 @@ export interface PlacemarkFixture {
 export function kmlText(placemarks: readonly PlacemarkFixture[]): string {
   const body = placemarks
     .map((p) => {
-      const data = p.data ? `<ExtendedData>${Object.entries(p.data).map(([k, v]) => `<Data name="${escapeXml(k)}"><value>${escapeXml(v)}</value></Data>`).join('')}</ExtendedData>` : '';
-      const geometry = p.point ? `<Point><coordinates>${p.point.join(',')},0</coordinates></Point>` : p.line ? `<LineString><coordinates>${p.line.map((q) => q.join(',')).join(' ')}</coordinates></LineString>` : '';
+      const data = p.data
+        ? `<ExtendedData>${Object.entries(p.data)
+            .map(([k, v]) => `<Data name="${escapeXml(k)}"><value>${escapeXml(v)}</value></Data>`)
+            .join('')}</ExtendedData>`
+        : '';
+      const geometry = p.point
+        ? `<Point><coordinates>${p.point.join(',')},0</coordinates></Point>`
+        : p.line
+          ? `<LineString><coordinates>${p.line.map((q) => q.join(',')).join(' ')}</coordinates></LineString>`
+          : '';
       return `<Placemark>${p.name !== undefined ? `<name>${escapeXml(p.name)}</name>` : ''}<styleUrl>#village</styleUrl>${data}${geometry}</Placemark>`;
     })
     .join('\n');
@@ -67,7 +80,14 @@ export function kmlText(placemarks: readonly PlacemarkFixture[]): string {
 
 /** A zip of the given files (a KMZ, a zipped shapefile). */
 export function zipBytes(files: Readonly<Record<string, Uint8Array | string>>): Uint8Array {
-  return zipSync(Object.fromEntries(Object.entries(files).map(([name, content]) => [name, typeof content === 'string' ? strToU8(content) : content])));
+  return zipSync(
+    Object.fromEntries(
+      Object.entries(files).map(([name, content]) => [
+        name,
+        typeof content === 'string' ? strToU8(content) : content,
+      ]),
+    ),
+  );
 }
 
 /** A dBASE field: name (at most 10 characters), type C (text) or N (number), width in characters. */
@@ -82,7 +102,11 @@ export interface DbfField {
  * the file code 9994 and length big-endian, version 1000 and shape type 1 little-endian, then
  * records of a big-endian number and length and a little-endian Point) and its dBASE III .dbf.
  */
-export function pointShapefile(points: readonly (readonly [number, number])[], fields: readonly DbfField[], records: readonly (readonly (string | number)[])[]): { shp: Uint8Array; dbf: Uint8Array } {
+export function pointShapefile(
+  points: readonly (readonly [number, number])[],
+  fields: readonly DbfField[],
+  records: readonly (readonly (string | number)[])[],
+): { shp: Uint8Array; dbf: Uint8Array } {
   const shp = new DataView(new ArrayBuffer(100 + points.length * 28));
   shp.setInt32(0, 9994, false);
   shp.setInt32(24, shp.byteLength / 2, false);
@@ -90,7 +114,9 @@ export function pointShapefile(points: readonly (readonly [number, number])[], f
   shp.setInt32(32, 1, true);
   const xs = points.map((p) => p[0]);
   const ys = points.map((p) => p[1]);
-  [Math.min(...xs), Math.min(...ys), Math.max(...xs), Math.max(...ys)].forEach((v, i) => shp.setFloat64(36 + i * 8, v, true));
+  [Math.min(...xs), Math.min(...ys), Math.max(...xs), Math.max(...ys)].forEach((v, i) =>
+    shp.setFloat64(36 + i * 8, v, true),
+  );
   points.forEach(([x, y], i) => {
     const at = 100 + i * 28;
     shp.setInt32(at, i + 1, false);

@@ -1,10 +1,28 @@
 import { describe, expect, test } from 'vitest';
 import { modelCatalog } from '../../../api/engine/motion/registry.ts';
-import { communityFromForm, importCommunitiesCsv, importSourcesGeoJson, issueFeature, issueField, issueLine, saveCommunity } from '../../../web/data/study-edits.ts';
+import {
+  communityFromForm,
+  importCommunitiesCsv,
+  importSourcesGeoJson,
+  issueFeature,
+  issueField,
+  issueLine,
+  saveCommunity,
+} from '../../../web/data/study-edits.ts';
 import { smallStudy } from '../../service/helpers/small-study.ts';
 import { loadStudy } from '../../../api/study/load-study.ts';
 
-const form = { id: ' new-spot ', name: 'New Spot', lon: '-140,3', lat: '-47.5', vs30: '', siteClass: 'C', population: '12', elevationM: 'high', coastal: true };
+const form = {
+  id: ' new-spot ',
+  name: 'New Spot',
+  lon: '-140,3',
+  lat: '-47.5',
+  vs30: '',
+  siteClass: 'C',
+  population: '12',
+  elevationM: 'high',
+  coastal: true,
+};
 
 const inputsOf = (raw: Record<string, unknown>) => ({ document: JSON.stringify(raw), raw });
 const communitiesOf = (raw: Record<string, unknown>) => {
@@ -15,7 +33,16 @@ const communitiesOf = (raw: Record<string, unknown>) => {
 
 describe('study edits', () => {
   test('a form becomes document JSON: trimmed, numbers as numbers, text kept for the schema to name', () => {
-    expect(communityFromForm(form)).toEqual({ id: 'new-spot', name: 'New Spot', lon: -140.3, lat: -47.5, siteClass: 'C', population: 12, elevationM: 'high', coastal: true });
+    expect(communityFromForm(form)).toEqual({
+      id: 'new-spot',
+      name: 'New Spot',
+      lon: -140.3,
+      lat: -47.5,
+      siteClass: 'C',
+      population: 12,
+      elevationM: 'high',
+      coastal: true,
+    });
   });
 
   test('a bad field comes back with its path, and nothing is returned to save', () => {
@@ -23,28 +50,47 @@ describe('study edits', () => {
     const outcome = saveCommunity(inputsOf(raw), communitiesOf(raw), form, undefined, modelCatalog);
     expect(outcome.ok).toBe(false);
     expect(outcome.index).toBe(1);
-    if (!outcome.ok) expect(outcome.issues.map((i) => i.path)).toEqual(['communities[1].elevationM']);
+    if (!outcome.ok)
+      expect(outcome.issues.map((i) => i.path)).toEqual(['communities[1].elevationM']);
   });
 
   test('a good community is appended and the document validates', () => {
     const raw = smallStudy();
-    const outcome = saveCommunity(inputsOf(raw), communitiesOf(raw), { ...form, elevationM: '12' }, undefined, modelCatalog);
+    const outcome = saveCommunity(
+      inputsOf(raw),
+      communitiesOf(raw),
+      { ...form, elevationM: '12' },
+      undefined,
+      modelCatalog,
+    );
     expect(outcome.ok).toBe(true);
     if (outcome.ok) expect((outcome.document.communities as unknown[]).length).toBe(2);
   });
 
   test('a CSV with a bad line names the line; a good one is kept as the study file', () => {
     const raw = smallStudy();
-    const bad = importCommunitiesCsv(inputsOf(raw), 'id,name,lon,lat,vs30\ncove,Cove,-140.2,-47.4,500\nreef,Reef,-140.3,-95,500\n', modelCatalog);
+    const bad = importCommunitiesCsv(
+      inputsOf(raw),
+      'id,name,lon,lat,vs30\ncove,Cove,-140.2,-47.4,500\nreef,Reef,-140.3,-95,500\n',
+      modelCatalog,
+    );
     expect(bad.ok).toBe(false);
     if (!bad.ok) expect(bad.issues.map((i) => i.path)).toEqual(['communities[line 3].lat']);
-    const good = importCommunitiesCsv(inputsOf(raw), 'id,name,lon,lat,vs30\ncove,Cove,-140.2,-47.4,500\n', modelCatalog);
+    const good = importCommunitiesCsv(
+      inputsOf(raw),
+      'id,name,lon,lat,vs30\ncove,Cove,-140.2,-47.4,500\n',
+      modelCatalog,
+    );
     expect(good.ok && good.file?.kind).toBe('communities-csv');
   });
 
   test('malformed GeoJSON is one issue at "sources"', () => {
     const raw = smallStudy();
-    const outcome = importSourcesGeoJson(inputsOf(raw), '{\n  "type": "FeatureCollection",\n  "features": [,]\n}', modelCatalog);
+    const outcome = importSourcesGeoJson(
+      inputsOf(raw),
+      '{\n  "type": "FeatureCollection",\n  "features": [,]\n}',
+      modelCatalog,
+    );
     expect(outcome.ok).toBe(false);
     if (!outcome.ok) {
       expect(outcome.issues).toHaveLength(1);

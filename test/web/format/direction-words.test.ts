@@ -11,10 +11,24 @@ describe('directions in words', () => {
 
   test('each point owns 22.5° either side of it; a boundary goes clockwise', () => {
     const cases: [number, string][] = [
-      [0, 'N'], [22.4, 'N'], [22.5, 'NE'], [67.4, 'NE'], [67.5, 'E'], [90, 'E'], [135, 'SE'],
-      [180, 'S'], [202.5, 'SW'], [247.4, 'SW'], [270, 'W'], [315, 'NW'], [337.4, 'NW'], [337.5, 'N'], [359.9, 'N'],
+      [0, 'N'],
+      [22.4, 'N'],
+      [22.5, 'NE'],
+      [67.4, 'NE'],
+      [67.5, 'E'],
+      [90, 'E'],
+      [135, 'SE'],
+      [180, 'S'],
+      [202.5, 'SW'],
+      [247.4, 'SW'],
+      [270, 'W'],
+      [315, 'NW'],
+      [337.4, 'NW'],
+      [337.5, 'N'],
+      [359.9, 'N'],
     ];
-    for (const [bearing, point] of cases) expect(compassPoint(bearing), `bearing ${bearing}`).toBe(point);
+    for (const [bearing, point] of cases)
+      expect(compassPoint(bearing), `bearing ${bearing}`).toBe(point);
   });
 
   test('bearings outside [0, 360) are wrapped', () => {

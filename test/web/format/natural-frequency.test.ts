@@ -10,7 +10,9 @@ describe('naturalFrequency', () => {
     expect(percentText(0.12)).toBe('12');
     const en = translator('en');
     const c = en.chance(0.12);
-    expect(en.t('chance.overYears', { frequency: c.frequency, years: 50, percent: c.percent })).toBe('about 1 in 8 over the next 50 years (12%)');
+    expect(
+      en.t('chance.overYears', { frequency: c.frequency, years: 50, percent: c.percent }),
+    ).toBe('about 1 in 8 over the next 50 years (12%)');
   });
 
   test('100 / P (P the shown percentage) rounds to the nearest whole number up to 20', () => {
@@ -70,7 +72,9 @@ describe('naturalFrequency', () => {
   });
 
   test('a value that is not a probability is refused, never shown as NaN', () => {
-    expect(() => naturalFrequency(Number.NaN)).toThrow(/expected a probability in \[0, 1\], got NaN/);
+    expect(() => naturalFrequency(Number.NaN)).toThrow(
+      /expected a probability in \[0, 1\], got NaN/,
+    );
     expect(() => percentText(1.2)).toThrow(/got 1.2/);
   });
 });

@@ -9,7 +9,14 @@ describe('number words', () => {
   const fr = translator('fr');
 
   test('zero to ten are words', () => {
-    expect([0, 1, 2, 3, 7, 10].map((n) => en.count(n))).toEqual(['zero', 'one', 'two', 'three', 'seven', 'ten']);
+    expect([0, 1, 2, 3, 7, 10].map((n) => en.count(n))).toEqual([
+      'zero',
+      'one',
+      'two',
+      'three',
+      'seven',
+      'ten',
+    ]);
     expect(fr.count(3)).toBe('trois');
   });
 
@@ -25,7 +32,9 @@ describe('number words', () => {
   });
 
   test('a vocabulary missing a word says so', () => {
-    expect(() => numberInWords(4, { smallNumbers: ['zero', 'one'], locale: 'en' })).toThrow(/no word for 4; expected 11 words/);
+    expect(() => numberInWords(4, { smallNumbers: ['zero', 'one'], locale: 'en' })).toThrow(
+      /no word for 4; expected 11 words/,
+    );
   });
 
   test('infinite counts are refused', () => {

@@ -2,14 +2,33 @@ import { describe, expect, test } from 'vitest';
 import { countSyllables, countText, fleschKincaidGrade } from '../../../web/format/readability.ts';
 import { expectClose } from '../../helpers/close.ts';
 
-const FK = 'Flesch–Kincaid grade, Kincaid et al. (1975): 0.39 words/sentence + 11.8 syllables/word − 15.59';
+const FK =
+  'Flesch–Kincaid grade, Kincaid et al. (1975): 0.39 words/sentence + 11.8 syllables/word − 15.59';
 
 describe('syllable counting (vowel groups, silent e, -es and -ed)', () => {
   // Dictionary syllable counts (common knowledge); the heuristic gets these right.
   const words: [string, number][] = [
-    ['the', 1], ['cat', 1], ['shaking', 2], ['earthquake', 2], ['table', 2], ['people', 2], ['furniture', 3],
-    ['everyone', 3], ['shakes', 1], ['houses', 2], ['moved', 1], ['rattled', 2], ['wanted', 2], ['agree', 2],
-    ['whole', 1], ['building', 2], ['damaging', 3], ['north-east', 2], ["don't", 1], ['tsunami', 3], ['water', 2],
+    ['the', 1],
+    ['cat', 1],
+    ['shaking', 2],
+    ['earthquake', 2],
+    ['table', 2],
+    ['people', 2],
+    ['furniture', 3],
+    ['everyone', 3],
+    ['shakes', 1],
+    ['houses', 2],
+    ['moved', 1],
+    ['rattled', 2],
+    ['wanted', 2],
+    ['agree', 2],
+    ['whole', 1],
+    ['building', 2],
+    ['damaging', 3],
+    ['north-east', 2],
+    ["don't", 1],
+    ['tsunami', 3],
+    ['water', 2],
   ];
   for (const [word, syllables] of words) {
     test(`${word}: ${syllables}`, () => expect(countSyllables(word)).toBe(syllables));
@@ -31,7 +50,12 @@ describe('counting text', () => {
 
 describe('Flesch–Kincaid grade', () => {
   test('hand-counted: "The cat sat on the mat." 6 words, 1 sentence, 6 syllables', () => {
-    expectClose(fleschKincaidGrade('The cat sat on the mat.'), 0.39 * 6 + 11.8 * 1 - 15.59, 1e-12, FK);
+    expectClose(
+      fleschKincaidGrade('The cat sat on the mat.'),
+      0.39 * 6 + 11.8 * 1 - 15.59,
+      1e-12,
+      FK,
+    );
   });
 
   test('hand-counted: two sentences, 13 words, 16 syllables', () => {
@@ -44,7 +68,8 @@ describe('Flesch–Kincaid grade', () => {
 
   test('long words and sentences raise the grade', () => {
     const plain = 'Drop to the ground. Cover your head. Hold on.';
-    const dense = 'Occupants should immediately assume a protective posture beneath substantial furniture, maintaining that position throughout the duration of ground motion.';
+    const dense =
+      'Occupants should immediately assume a protective posture beneath substantial furniture, maintaining that position throughout the duration of ground motion.';
     expect(fleschKincaidGrade(dense)).toBeGreaterThan(fleschKincaidGrade(plain) + 10);
   });
 

@@ -4,14 +4,38 @@
  * them (one magnitude, one rate), with the Cornell et al. (1979) PGA model (small-study.ts),
  * so a map costs one rupture per grid point. Names, places and rates are invented.
  */
-export const SPREAD_SOURCE = { lon: -140.1, lat: -47.33, depthKm: 10, magnitude: 6.5, rate: 0.01 } as const;
+export const SPREAD_SOURCE = {
+  lon: -140.1,
+  lat: -47.33,
+  depthKm: 10,
+  magnitude: 6.5,
+  rate: 0.01,
+} as const;
 
 export function spreadStudy(name = 'Spread test study'): Record<string, unknown> {
   return {
     name,
     communities: [
-      { id: 'low-cove', name: 'Low Cove', lon: -140.2, lat: -47.4, vs30: 500, population: 120, coastal: true, elevationM: 4 },
-      { id: 'ridge-end', name: 'Ridge End', lon: -140.0, lat: -47.25, vs30: 700, population: 60, coastal: false, elevationM: 180 },
+      {
+        id: 'low-cove',
+        name: 'Low Cove',
+        lon: -140.2,
+        lat: -47.4,
+        vs30: 500,
+        population: 120,
+        coastal: true,
+        elevationM: 4,
+      },
+      {
+        id: 'ridge-end',
+        name: 'Ridge End',
+        lon: -140.0,
+        lat: -47.25,
+        vs30: 700,
+        population: 60,
+        coastal: false,
+        elevationM: 180,
+      },
     ],
     sources: {
       type: 'FeatureCollection',
@@ -25,12 +49,21 @@ export function spreadStudy(name = 'Spread test study'): Record<string, unknown>
             setting: 'crustal',
             mechanism: 'strike-slip',
             depthKm: SPREAD_SOURCE.depthKm,
-            recurrence: { type: 'fixed', magnitude: SPREAD_SOURCE.magnitude, rate: SPREAD_SOURCE.rate },
+            recurrence: {
+              type: 'fixed',
+              magnitude: SPREAD_SOURCE.magnitude,
+              rate: SPREAD_SOURCE.rate,
+            },
           },
         },
       ],
     },
     groundMotion: { crustal: [{ model: 'Cornell79', weight: 1 }] },
-    settings: { measures: ['PGA'], horizonsYears: [50], returnPeriodsYears: [475, 2475], truncationSigma: 3 },
+    settings: {
+      measures: ['PGA'],
+      horizonsYears: [50],
+      returnPeriodsYears: [475, 2475],
+      truncationSigma: 3,
+    },
   };
 }

@@ -34,7 +34,11 @@ export function startPageApp(options: StartPageAppOptions = {}): PageApp {
     toolVersion: 'test',
     workBudget: 1_000_000_000,
   };
-  const app = createApp(ctx, { pages: createPages(ctx, { token: options.token }), logError: () => {}, ...(options.token === undefined ? {} : { token: options.token }) });
+  const app = createApp(ctx, {
+    pages: createPages(ctx, { token: options.token }),
+    logError: () => {},
+    ...(options.token === undefined ? {} : { token: options.token }),
+  });
   return {
     app,
     ctx,
@@ -57,7 +61,12 @@ export async function runFinished(ctx: ServiceContext, runId: string): Promise<s
 }
 
 /** A multipart form with one file field `file`. */
-export function fileForm(name: string, type: string, content: string, fields: Record<string, string> = {}): FormData {
+export function fileForm(
+  name: string,
+  type: string,
+  content: string,
+  fields: Record<string, string> = {},
+): FormData {
   const form = new FormData();
   form.set('file', new File([content], name, { type }));
   for (const [k, v] of Object.entries(fields)) form.set(k, v);

@@ -8,12 +8,31 @@ export interface MarkedText {
 }
 
 /** Elements with no end tag (HTML Living Standard, 13.1.2 "Void elements"). */
-const VOID = new Set(['area', 'base', 'br', 'col', 'embed', 'hr', 'img', 'input', 'link', 'meta', 'source', 'track', 'wbr']);
+const VOID = new Set([
+  'area',
+  'base',
+  'br',
+  'col',
+  'embed',
+  'hr',
+  'img',
+  'input',
+  'link',
+  'meta',
+  'source',
+  'track',
+  'wbr',
+]);
 /** Attributes that screen readers speak. */
 const SPOKEN = ['aria-label', 'title', 'alt', 'placeholder'];
 
 const decode = (text: string): string =>
-  text.replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&quot;/g, '"').replace(/&#39;/g, "'").replace(/&amp;/g, '&');
+  text
+    .replace(/&lt;/g, '<')
+    .replace(/&gt;/g, '>')
+    .replace(/&quot;/g, '"')
+    .replace(/&#39;/g, "'")
+    .replace(/&amp;/g, '&');
 
 /**
  * Every text node and spoken attribute of a page rendered by hono's JSX, with its language.
@@ -24,13 +43,20 @@ export function textLanguages(html: string): MarkedText[] {
   const found: MarkedText[] = [];
   const stack: { readonly tag: string; readonly lang: string }[] = [];
   const current = () => stack.at(-1)?.lang ?? '';
-  for (const token of html.matchAll(/<!--[\s\S]*?-->|<![^>]*>|<\/([a-zA-Z][\w-]*)\s*>|<([a-zA-Z][\w-]*)((?:\s+[^\s=/>]+(?:="[^"]*")?)*)\s*(\/?)>|[^<]+/g)) {
+  for (const token of html.matchAll(
+    /<!--[\s\S]*?-->|<![^>]*>|<\/([a-zA-Z][\w-]*)\s*>|<([a-zA-Z][\w-]*)((?:\s+[^\s=/>]+(?:="[^"]*")?)*)\s*(\/?)>|[^<]+/g,
+  )) {
     const [whole, closing, opening, attributes = '', selfClosing] = token;
     if (closing !== undefined) {
       const at = stack.map((s) => s.tag).lastIndexOf(closing.toLowerCase());
       if (at >= 0) stack.length = at;
     } else if (opening !== undefined) {
-      const attrs = new Map([...attributes.matchAll(/([^\s=]+)(?:="([^"]*)")?/g)].map((m) => [m[1] as string, decode(m[2] ?? '')]));
+      const attrs = new Map(
+        [...attributes.matchAll(/([^\s=]+)(?:="([^"]*)")?/g)].map((m) => [
+          m[1] as string,
+          decode(m[2] ?? ''),
+        ]),
+      );
       const lang = attrs.get('lang') ?? current();
       for (const name of SPOKEN) {
         const value = attrs.get(name);

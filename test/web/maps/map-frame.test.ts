@@ -8,26 +8,51 @@ import { expectClose } from '../../helpers/close.ts';
 const WGS84 = geodesic.Geodesic.WGS84;
 
 /** An invented community in open ocean at `lon, lat`. */
-const community = (id: string, lon: number, lat: number): Community => ({ id, name: id, lon, lat, vs30: 500, vs30Basis: 'measured', coastal: false });
+const community = (id: string, lon: number, lat: number): Community => ({
+  id,
+  name: id,
+  lon,
+  lat,
+  vs30: 500,
+  vs30Basis: 'measured',
+  coastal: false,
+});
 
 /** Two communities 60 km either side of (-140, -47) along an azimuth (Karney 2013 direct problem). */
 function pair(azimuthDeg: number) {
   const a = WGS84.Direct(-47, -140, azimuthDeg, 60_000);
   const b = WGS84.Direct(-47, -140, azimuthDeg + 180, 60_000);
-  return [community('a', a.lon2 as number, a.lat2 as number), community('b', b.lon2 as number, b.lat2 as number)];
+  return [
+    community('a', a.lon2 as number, a.lat2 as number),
+    community('b', b.lon2 as number, b.lat2 as number),
+  ];
 }
 
-describe('the map frame (the engine\'s azimuthal equidistant frame, scaled to pixels)', () => {
+describe("the map frame (the engine's azimuthal equidistant frame, scaled to pixels)", () => {
   test('a km on the map is a km of the geodesic (Karney 2013, geographiclib), north up', () => {
     for (const azimuth of [0, 45, 90, 135]) {
       const communities = pair(azimuth);
-      const frame = mapFrame({ communities, sources: [] }, { width: 600, maxHeight: 600, padding: 20 });
+      const frame = mapFrame(
+        { communities, sources: [] },
+        { width: 600, maxHeight: 600, padding: 20 },
+      );
       const [ax, ay] = frame.project([communities[0]!.lon, communities[0]!.lat]);
       const [bx, by] = frame.project([communities[1]!.lon, communities[1]!.lat]);
-      const geodesicKm = (WGS84.Inverse(communities[0]!.lat, communities[0]!.lon, communities[1]!.lat, communities[1]!.lon).s12 as number) / 1000;
+      const geodesicKm =
+        (WGS84.Inverse(
+          communities[0]!.lat,
+          communities[0]!.lon,
+          communities[1]!.lat,
+          communities[1]!.lon,
+        ).s12 as number) / 1000;
       // The frame is centred between the two, so both lie on one line through its origin, where
       // azimuthal equidistant distances are exact (Snyder 1987); 1 m covers proj4's rounding.
-      expectClose(Math.hypot(ax - bx, ay - by) / frame.scale, geodesicKm, 1e-3, `geodesic distance, azimuth ${azimuth}`);
+      expectClose(
+        Math.hypot(ax - bx, ay - by) / frame.scale,
+        geodesicKm,
+        1e-3,
+        `geodesic distance, azimuth ${azimuth}`,
+      );
       // Azimuth on the map (x right, y down) equals the geodesic azimuth from b to a.
       const mapAzimuth = ((Math.atan2(ax - bx, by - ay) * 180) / Math.PI + 360) % 360;
       expectClose(mapAzimuth, azimuth, 0.05, `map azimuth of the geodesic, azimuth ${azimuth}`);
@@ -35,23 +60,40 @@ describe('the map frame (the engine\'s azimuthal equidistant frame, scaled to pi
   });
 
   test('the frame keeps the data inside the box with its padding', () => {
-    const frame = mapFrame({ communities: pair(90), sources: [] }, { width: 600, maxHeight: 400, padding: 20 });
+    const frame = mapFrame(
+      { communities: pair(90), sources: [] },
+      { width: 600, maxHeight: 400, padding: 20 },
+    );
     expect(frame.width).toBe(600);
     const [ax] = frame.project([pair(90)[0]!.lon, pair(90)[0]!.lat]);
     expectClose(ax, 580, 1e-6, 'east community at the right padding');
   });
 
   test('one community gets a 20 km wide map', () => {
-    const frame = mapFrame({ communities: [community('only', -140, -47)], sources: [] }, { width: 420, maxHeight: 420, padding: 10 });
+    const frame = mapFrame(
+      { communities: [community('only', -140, -47)], sources: [] },
+      { width: 420, maxHeight: 420, padding: 10 },
+    );
     expectClose(frame.scale, 400 / 20, 1e-9, 'pixels per km for a 20 km span');
   });
 
   test('GeoJSON becomes SVG path data in the same pixels', () => {
     const communities = pair(90);
-    const frame = mapFrame({ communities, sources: [] }, { width: 600, maxHeight: 600, padding: 20 });
+    const frame = mapFrame(
+      { communities, sources: [] },
+      { width: 600, maxHeight: 600, padding: 20 },
+    );
     const [ax, ay] = frame.project([communities[0]!.lon, communities[0]!.lat]);
-    const d = frame.path({ type: 'LineString', coordinates: [[communities[1]!.lon, communities[1]!.lat], [communities[0]!.lon, communities[0]!.lat]] });
-    expect(d).toBe(`M20,${ay.toFixed(1).replace(/\.0$/, '')}L${ax.toFixed(1).replace(/\.0$/, '')},${ay.toFixed(1).replace(/\.0$/, '')}`);
+    const d = frame.path({
+      type: 'LineString',
+      coordinates: [
+        [communities[1]!.lon, communities[1]!.lat],
+        [communities[0]!.lon, communities[0]!.lat],
+      ],
+    });
+    expect(d).toBe(
+      `M20,${ay.toFixed(1).replace(/\.0$/, '')}L${ax.toFixed(1).replace(/\.0$/, '')},${ay.toFixed(1).replace(/\.0$/, '')}`,
+    );
   });
 });
 
@@ -91,14 +133,22 @@ describe('label placement', () => {
       }
       for (const l of labels) {
         const a = boxes[i]!;
-        const hitsMarker = a.x0 < l.x + l.clearance && l.x - l.clearance < a.x1 && a.y0 < l.y + l.clearance && l.y - l.clearance < a.y1;
+        const hitsMarker =
+          a.x0 < l.x + l.clearance &&
+          l.x - l.clearance < a.x1 &&
+          a.y0 < l.y + l.clearance &&
+          l.y - l.clearance < a.y1;
         expect(hitsMarker, `label ${i} over the marker at ${l.x},${l.y}`).toBe(false);
       }
     }
   });
 
   test('a label near the right edge goes to the left of its point', () => {
-    const [placed] = placeLabels([{ x: 390, y: 50, text: 'Lisk Head', fontSize: 12, clearance: 6 }], 400, 100);
+    const [placed] = placeLabels(
+      [{ x: 390, y: 50, text: 'Lisk Head', fontSize: 12, clearance: 6 }],
+      400,
+      100,
+    );
     expect(placed!.anchor).toBe('end');
   });
 });

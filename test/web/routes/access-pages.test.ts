@@ -1,5 +1,9 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { ACCESS_COOKIE, ACCESS_MAX_AGE_S, accessCookieValue } from '../../../api/service/page-access.ts';
+import {
+  ACCESS_COOKIE,
+  ACCESS_MAX_AGE_S,
+  accessCookieValue,
+} from '../../../api/service/page-access.ts';
 import { translator } from '../../../web/text/translator.ts';
 import { expectError, expectSecurityHeaders } from '../../service/helpers/assertions.ts';
 import { smallStudy } from '../../service/helpers/small-study.ts';
@@ -20,7 +24,10 @@ let studyId: string;
 beforeAll(() => {
   guarded = startPageApp({ token: TOKEN });
   open = startPageApp();
-  studyId = guarded.ctx.store.studies.create({ name: 'Access fixture', document: JSON.stringify(smallStudy('Access fixture')) }).id;
+  studyId = guarded.ctx.store.studies.create({
+    name: 'Access fixture',
+    document: JSON.stringify(smallStudy('Access fixture')),
+  }).id;
 });
 afterAll(async () => {
   await guarded.close();
@@ -29,9 +36,14 @@ afterAll(async () => {
 
 const request = (path: string, init?: RequestInit) => guarded.app.request(path, init);
 const enter = (token: string, back?: string, headers: Record<string, string> = {}) =>
-  request('/access', { method: 'POST', headers, body: new URLSearchParams({ token, ...(back === undefined ? {} : { back }) }) });
+  request('/access', {
+    method: 'POST',
+    headers,
+    body: new URLSearchParams({ token, ...(back === undefined ? {} : { back }) }),
+  });
 /** The `name=value` part of a Set-Cookie header. */
-const cookiePair = (response: Response): string | undefined => response.headers.get('set-cookie')?.split(';')[0];
+const cookiePair = (response: Response): string | undefined =>
+  response.headers.get('set-cookie')?.split(';')[0];
 const accessCookie = `${ACCESS_COOKIE}=${accessCookieValue(TOKEN)}`;
 
 describe('the access cookie', () => {
@@ -50,7 +62,9 @@ describe('entering the token on the access page', () => {
     expect(response.status).toBe(200);
     expectSecurityHeaders(response);
     const html = await response.text();
-    expect(html).toContain('<form method="post" action="/access" class="access-form" novalidate="">');
+    expect(html).toContain(
+      '<form method="post" action="/access" class="access-form" novalidate="">',
+    );
     expect(html).toContain('<input type="hidden" name="back" value="/studies/abc"/>');
     expect(html).toContain('name="token" type="password" autocomplete="current-password"');
     expect(html).toContain(en.t('access.needed'));
@@ -60,7 +74,9 @@ describe('entering the token on the access page', () => {
     const response = await enter(TOKEN, '/studies/abc');
     expect(response.status).toBe(303);
     expect(response.headers.get('location')).toBe('/studies/abc');
-    expect(response.headers.get('set-cookie')).toBe(`${accessCookie}; Max-Age=${ACCESS_MAX_AGE_S}; Path=/; HttpOnly; SameSite=Strict`);
+    expect(response.headers.get('set-cookie')).toBe(
+      `${accessCookie}; Max-Age=${ACCESS_MAX_AGE_S}; Path=/; HttpOnly; SameSite=Strict`,
+    );
     expect(response.headers.get('set-cookie')).not.toContain(TOKEN);
   });
 
@@ -78,7 +94,9 @@ describe('entering the token on the access page', () => {
       body: new URLSearchParams({ token: TOKEN }),
     });
     expect(direct.status).toBe(303);
-    expect(direct.headers.get('set-cookie')).toBe(`${accessCookie}; Max-Age=${ACCESS_MAX_AGE_S}; Path=/; HttpOnly; Secure; SameSite=Strict`);
+    expect(direct.headers.get('set-cookie')).toBe(
+      `${accessCookie}; Max-Age=${ACCESS_MAX_AGE_S}; Path=/; HttpOnly; Secure; SameSite=Strict`,
+    );
     const proxied = await enter(TOKEN, '/', { 'X-Forwarded-Proto': 'https' });
     expect(proxied.headers.get('set-cookie')).toContain('; Secure;');
   });
@@ -109,17 +127,25 @@ describe('entering the token on the access page', () => {
     expect(html).toContain(en.t('access.granted'));
     expect(html).toContain('<form method="post" action="/access/leave" class="inline-form">');
     expect(html).not.toContain('name="token"');
-    const left = await request('/access/leave', { method: 'POST', headers: { cookie: accessCookie } });
+    const left = await request('/access/leave', {
+      method: 'POST',
+      headers: { cookie: accessCookie },
+    });
     expect(left.status).toBe(303);
     expect(left.headers.get('location')).toBe('/access?why=ended');
-    expect(left.headers.get('set-cookie')).toBe(`${ACCESS_COOKIE}=; Max-Age=0; Path=/; HttpOnly; SameSite=Strict`);
+    expect(left.headers.get('set-cookie')).toBe(
+      `${ACCESS_COOKIE}=; Max-Age=0; Path=/; HttpOnly; SameSite=Strict`,
+    );
     expect(await (await request('/access?why=ended')).text()).toContain(en.t('access.ended'));
   });
 });
 
 describe('page writes on a service with a token', () => {
   test('are accepted with the cookie', async () => {
-    const started = await request(`/studies/${studyId}/screen`, { method: 'POST', headers: { cookie: accessCookie } });
+    const started = await request(`/studies/${studyId}/screen`, {
+      method: 'POST',
+      headers: { cookie: accessCookie },
+    });
     expect(started.status).toBe(303);
     const location = started.headers.get('location') as string;
     expect(location).toMatch(new RegExp(`^/studies/${studyId}/runs/[A-Za-z0-9_-]+$`));
@@ -127,25 +153,46 @@ describe('page writes on a service with a token', () => {
   });
 
   test('without access go to the access page (303), which returns to the page the form was on', async () => {
-    const refused = await request(`/studies/${studyId}/screen`, { method: 'POST', headers: { host: 'localhost', referer: `http://localhost/studies/${studyId}?sort=name` } });
+    const refused = await request(`/studies/${studyId}/screen`, {
+      method: 'POST',
+      headers: { host: 'localhost', referer: `http://localhost/studies/${studyId}?sort=name` },
+    });
     expect(refused.status).toBe(303);
-    expect(refused.headers.get('location')).toBe(`/access?back=${encodeURIComponent(`/studies/${studyId}?sort=name`)}&why=needed`);
-    const foreignReferer = await request(`/studies/${studyId}/screen`, { method: 'POST', headers: { host: 'localhost', referer: 'http://elsewhere.example/x' } });
+    expect(refused.headers.get('location')).toBe(
+      `/access?back=${encodeURIComponent(`/studies/${studyId}?sort=name`)}&why=needed`,
+    );
+    const foreignReferer = await request(`/studies/${studyId}/screen`, {
+      method: 'POST',
+      headers: { host: 'localhost', referer: 'http://elsewhere.example/x' },
+    });
     expect(foreignReferer.headers.get('location')).toBe('/access?back=%2F&why=needed');
   });
 
   test('are refused with a cookie that is not the one of this token: the token itself, or one of another token', async () => {
-    for (const cookie of [`${ACCESS_COOKIE}=${TOKEN}`, `${ACCESS_COOKIE}=${accessCookieValue(OTHER_TOKEN)}`, `${ACCESS_COOKIE}=`]) {
-      const response = await request(`/studies/${studyId}/screen`, { method: 'POST', headers: { cookie } });
+    for (const cookie of [
+      `${ACCESS_COOKIE}=${TOKEN}`,
+      `${ACCESS_COOKIE}=${accessCookieValue(OTHER_TOKEN)}`,
+      `${ACCESS_COOKIE}=`,
+    ]) {
+      const response = await request(`/studies/${studyId}/screen`, {
+        method: 'POST',
+        headers: { cookie },
+      });
       expect(response.status, cookie).toBe(303);
       expect(response.headers.get('location'), cookie).toBe('/access?back=%2F&why=needed');
     }
   });
 
   test('are refused from another site even with the cookie (the same-origin check), the access form too', async () => {
-    const crossSite = await request(`/studies/${studyId}/screen`, { method: 'POST', headers: { cookie: accessCookie, 'Sec-Fetch-Site': 'cross-site' } });
+    const crossSite = await request(`/studies/${studyId}/screen`, {
+      method: 'POST',
+      headers: { cookie: accessCookie, 'Sec-Fetch-Site': 'cross-site' },
+    });
     await expectError(crossSite, 403);
-    const foreignOrigin = await request(`/studies/${studyId}/screen`, { method: 'POST', headers: { cookie: accessCookie, host: 'localhost', origin: 'http://elsewhere.example' } });
+    const foreignOrigin = await request(`/studies/${studyId}/screen`, {
+      method: 'POST',
+      headers: { cookie: accessCookie, host: 'localhost', origin: 'http://elsewhere.example' },
+    });
     await expectError(foreignOrigin, 403);
     const login = await enter(TOKEN, '/', { 'Sec-Fetch-Site': 'cross-site' });
     await expectError(login, 403);
@@ -155,16 +202,27 @@ describe('page writes on a service with a token', () => {
 
 describe('the API on a service with a token', () => {
   const post = (headers: Record<string, string>) =>
-    request('/api/studies', { method: 'POST', headers: { 'Content-Type': 'application/json', ...headers }, body: JSON.stringify(smallStudy('API fixture')) });
+    request('/api/studies', {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json', ...headers },
+      body: JSON.stringify(smallStudy('API fixture')),
+    });
 
   test('still answers a write without the token with 401 JSON, not a redirect', async () => {
     const body = await expectError(await post({}), 401);
-    expect(body.error).toBe('an access token is required; expected the header "Authorization: Bearer <TREMORA_TOKEN>" on every request that writes or computes');
-    expect((await expectError(await post({ Authorization: `Bearer ${OTHER_TOKEN}` }), 401)).error).toMatch(/^the access token is wrong/);
+    expect(body.error).toBe(
+      'an access token is required; expected the header "Authorization: Bearer <TREMORA_TOKEN>" on every request that writes or computes',
+    );
+    expect(
+      (await expectError(await post({ Authorization: `Bearer ${OTHER_TOKEN}` }), 401)).error,
+    ).toMatch(/^the access token is wrong/);
   });
 
   test('a wrong bearer header is refused even beside a good cookie', async () => {
-    await expectError(await post({ Authorization: `Bearer ${OTHER_TOKEN}`, cookie: accessCookie }), 401);
+    await expectError(
+      await post({ Authorization: `Bearer ${OTHER_TOKEN}`, cookie: accessCookie }),
+      401,
+    );
   });
 
   test('accepts the bearer header, and the access cookie of a page', async () => {

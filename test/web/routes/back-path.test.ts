@@ -34,7 +34,8 @@ const HOSTILE = [
 ];
 
 /** Where a browser at http://localhost:8357/ goes with this Location. */
-const followed = (location: string) => new URL(location.replace(/[\t\n\r]/g, ''), 'http://localhost:8357/language');
+const followed = (location: string) =>
+  new URL(location.replace(/[\t\n\r]/g, ''), 'http://localhost:8357/language');
 
 describe('the back path', () => {
   test('the language switch never leads off this origin, never answers 500', async () => {
@@ -49,9 +50,15 @@ describe('the back path', () => {
 
   test('the access page, after the token, goes back only on this origin', async () => {
     for (const back of HOSTILE.map(decodeURIComponent)) {
-      const response = await page.app.request('/access', { method: 'POST', body: new URLSearchParams({ token: TOKEN, back }) });
+      const response = await page.app.request('/access', {
+        method: 'POST',
+        body: new URLSearchParams({ token: TOKEN, back }),
+      });
       expect(response.status, JSON.stringify(back)).toBe(303);
-      expect(followed(response.headers.get('location') as string).origin, JSON.stringify(back)).toBe('http://localhost:8357');
+      expect(
+        followed(response.headers.get('location') as string).origin,
+        JSON.stringify(back),
+      ).toBe('http://localhost:8357');
     }
   });
 

@@ -14,15 +14,20 @@ let studyId: string;
 
 beforeAll(() => {
   page = startPageApp();
-  studyId = page.ctx.store.studies.create({ name: 'Import fixture', document: JSON.stringify(smallStudy('Import fixture')) }).id;
+  studyId = page.ctx.store.studies.create({
+    name: 'Import fixture',
+    document: JSON.stringify(smallStudy('Import fixture')),
+  }).id;
 });
 afterAll(async () => page.close());
 
 const document = () => page.ctx.store.studies.get(studyId)?.document;
-const upload = (form: FormData) => page.app.request(`/studies/${studyId}/edit/communities-csv`, { method: 'POST', body: form });
+const upload = (form: FormData) =>
+  page.app.request(`/studies/${studyId}/edit/communities-csv`, { method: 'POST', body: form });
 
 /** The value of the hidden input `name` in a page. */
-const hidden = (html: string, name: string) => new RegExp(`<input type="hidden" name="${name}" value="([^"]*)"`).exec(html)?.[1];
+const hidden = (html: string, name: string) =>
+  new RegExp(`<input type="hidden" name="${name}" value="([^"]*)"`).exec(html)?.[1];
 
 // The community sits where the fixture's point source is (smallStudy), so the run has a result for it.
 const WORKBOOK = xlsxBytes([
@@ -31,7 +36,7 @@ const WORKBOOK = xlsxBytes([
 ]);
 
 describe('communities upload from the editor', () => {
-  test('unrecognised position columns are asked for from the file\'s columns; nothing is saved meanwhile', async () => {
+  test("unrecognised position columns are asked for from the file's columns; nothing is saved meanwhile", async () => {
     const before = document();
     const form = new FormData();
     form.set('file', new File([WORKBOOK], 'villages.xlsx'));
@@ -40,12 +45,25 @@ describe('communities upload from the editor', () => {
     const html = await response.text();
     expect(html).toContain('no column recognised for latitude (degrees north)');
     for (const key of ['lat', 'lon']) {
-      const select = new RegExp(`<select id="pick-${key}" name="column\\.${key}">(.*?)</select>`).exec(html)?.[1] ?? '';
-      expect([...select.matchAll(/<option value="([^"]*)"/g)].map((m) => m[1])).toEqual(['', 'Village', 'Pos S', 'Pos W', 'Site class', 'School', 'Airstrip']);
+      const select =
+        new RegExp(`<select id="pick-${key}" name="column\\.${key}">(.*?)</select>`).exec(
+          html,
+        )?.[1] ?? '';
+      expect([...select.matchAll(/<option value="([^"]*)"/g)].map((m) => m[1])).toEqual([
+        '',
+        'Village',
+        'Pos S',
+        'Pos W',
+        'Site class',
+        'School',
+        'Airstrip',
+      ]);
     }
     expect(html).not.toContain('id="pick-name"');
     expect(hidden(html, 'fileName')).toBe('villages.xlsx');
-    expect(Buffer.from(hidden(html, 'fileData') as string, 'base64')).toEqual(Buffer.from(WORKBOOK));
+    expect(Buffer.from(hidden(html, 'fileData') as string, 'base64')).toEqual(
+      Buffer.from(WORKBOOK),
+    );
     expect(document()).toBe(before);
 
     const pick = new FormData();
@@ -62,7 +80,10 @@ describe('communities upload from the editor', () => {
   });
 
   test('the kept columns are shown on the community page', async () => {
-    const started = await page.app.request(`/studies/${studyId}/screen`, { method: 'POST', body: new URLSearchParams() });
+    const started = await page.app.request(`/studies/${studyId}/screen`, {
+      method: 'POST',
+      body: new URLSearchParams(),
+    });
     const runId = (started.headers.get('location') as string).split('/').at(-1) as string;
     expect(await runFinished(page.ctx, runId)).toBe('done');
     const html = await (await page.app.request(`/studies/${studyId}/communities/test-cove`)).text();
@@ -76,7 +97,9 @@ describe('communities upload from the editor', () => {
     form.set('file', new File([kmlText([])], 'villages.kml'));
     const response = await upload(form);
     expect(response.status).toBe(422);
-    expect(await response.text()).toContain('villages.kml: expected KML with at least one Placemark (one point per community), found none');
+    expect(await response.text()).toContain(
+      'villages.kml: expected KML with at least one Placemark (one point per community), found none',
+    );
     expect(document()).toBe(before);
   });
 });

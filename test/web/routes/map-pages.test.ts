@@ -25,7 +25,8 @@ let mapId: string;
 const en = translator('en');
 
 const get = (path: string, init?: RequestInit) => page.app.request(path, init);
-const post = (path: string, fields: Record<string, string>) => page.app.request(path, { method: 'POST', body: new URLSearchParams(fields) });
+const post = (path: string, fields: Record<string, string>) =>
+  page.app.request(path, { method: 'POST', body: new URLSearchParams(fields) });
 
 async function mapFinished(ctx: ServiceContext, id: string): Promise<string> {
   for (let i = 0; i < 1200; i++) {
@@ -47,8 +48,14 @@ const count = (html: string, pattern: RegExp): number => (html.match(pattern) ??
 
 beforeAll(async () => {
   page = startPageApp();
-  spreadId = page.ctx.store.studies.create({ name: 'Spread fixture', document: JSON.stringify(spreadStudy('Spread fixture')) }).id;
-  demoId = page.ctx.store.studies.create({ name: 'Demo coast', document: readFileSync(DEMO_STUDY_URL, 'utf8') }).id;
+  spreadId = page.ctx.store.studies.create({
+    name: 'Spread fixture',
+    document: JSON.stringify(spreadStudy('Spread fixture')),
+  }).id;
+  demoId = page.ctx.store.studies.create({
+    name: 'Demo coast',
+    document: readFileSync(DEMO_STUDY_URL, 'utf8'),
+  }).id;
 });
 afterAll(async () => page.close());
 
@@ -60,38 +67,85 @@ describe('the hazard map on the overview', () => {
     expectPlainPage(html);
     expect(html).toContain(en.t('map.noHazardLayer'));
     expect(html).not.toContain('class="hazard-cells"');
-    const measures = [...html.matchAll(/<select id="hazard-map-measure"[^>]*>([\s\S]*?)<\/select>/g)][0]?.[1] ?? '';
-    expect([...measures.matchAll(/<option value="([^"]+)"/g)].map((m) => m[1])).toEqual(['PGA', 'SA(0.2)', 'SA(1.0)', 'PGV']);
-    expect(measures).toContain(`>${en.t('hazardMap.measure.SA', { period: '0.2', key: 'SA(0.2)' })}</option>`);
-    const periods = [...html.matchAll(/<select id="hazard-map-return-period"[^>]*>([\s\S]*?)<\/select>/g)][0]?.[1] ?? '';
-    expect([...periods.matchAll(/<option value="([^"]+)"/g)].map((m) => m[1])).toEqual(['475', '2475']);
+    const measures =
+      [...html.matchAll(/<select id="hazard-map-measure"[^>]*>([\s\S]*?)<\/select>/g)][0]?.[1] ??
+      '';
+    expect([...measures.matchAll(/<option value="([^"]+)"/g)].map((m) => m[1])).toEqual([
+      'PGA',
+      'SA(0.2)',
+      'SA(1.0)',
+      'PGV',
+    ]);
+    expect(measures).toContain(
+      `>${en.t('hazardMap.measure.SA', { period: '0.2', key: 'SA(0.2)' })}</option>`,
+    );
+    const periods =
+      [
+        ...html.matchAll(/<select id="hazard-map-return-period"[^>]*>([\s\S]*?)<\/select>/g),
+      ][0]?.[1] ?? '';
+    expect([...periods.matchAll(/<option value="([^"]+)"/g)].map((m) => m[1])).toEqual([
+      '475',
+      '2475',
+    ]);
     const data = readStudy(page.ctx, demoId);
     const suggested = suggestedMapSpacing(data?.ok ? data.study : (undefined as never));
     expect(html).toMatch(new RegExp(`id="hazard-map-spacing"[^>]*value="${suggested.spacingKm}"`));
-    expect(textOfId(html, 'hazard-map-spacing-help')).toBe(en.t('hazardMap.spacingHelp', { km: String(suggested.spacingKm), cells: '24', span: en.number(suggested.spanKm) }));
+    expect(textOfId(html, 'hazard-map-spacing-help')).toBe(
+      en.t('hazardMap.spacingHelp', {
+        km: String(suggested.spacingKm),
+        cells: '24',
+        span: en.number(suggested.spanKm),
+      }),
+    );
     expect(html).toContain(en.t('hazardMap.vs30Form', { vs30: '760' }));
   });
 
   test('a form post records a queued map and goes to its progress page, which follows it with a link and no meta refresh', async () => {
-    const response = await post(`/studies/${spreadId}/maps`, { measure: 'PGA', returnPeriodYears: '475', spacingKm: '1' });
+    const response = await post(`/studies/${spreadId}/maps`, {
+      measure: 'PGA',
+      returnPeriodYears: '475',
+      spacingKm: '1',
+    });
     expect(response.status).toBe(303);
     const location = response.headers.get('location') as string;
     mapId = location.split('/').at(-1) as string;
     expect(location).toBe(`/studies/${spreadId}/maps/${mapId}`);
-    expect(page.ctx.store.maps.get(mapId)?.request).toEqual({ measure: 'PGA', quantity: { kind: 'return-period', returnPeriodYears: 475 }, spacingKm: 1, vs30: 760 });
+    expect(page.ctx.store.maps.get(mapId)?.request).toEqual({
+      measure: 'PGA',
+      quantity: { kind: 'return-period', returnPeriodYears: 475 },
+      spacingKm: 1,
+      vs30: 760,
+    });
     const progress = await (await get(location)).text();
     expectPlainPage(progress);
     expect(progress).toContain(`data-status-url="/api/maps/${mapId}"`);
     expect(progress).toContain(`data-done-url="/studies/${spreadId}#map-heading"`);
-    expect(progress).toContain(en.t('hazardMap.title.returnPeriod', { measure: en.t('hazardMap.measure.PGA'), years: '475', unit: 'g' }));
+    expect(progress).toContain(
+      en.t('hazardMap.title.returnPeriod', {
+        measure: en.t('hazardMap.measure.PGA'),
+        years: '475',
+        unit: 'g',
+      }),
+    );
     // The page of a map still queued (a record made here, so it stays queued while it is read): the bar and the refresh link.
-    const waiting = page.ctx.store.maps.create({ studyId: spreadId, request: { measure: 'PGA', quantity: { kind: 'return-period', returnPeriodYears: 475 }, spacingKm: 1, vs30: 760 }, inputHash: 'h' });
+    const waiting = page.ctx.store.maps.create({
+      studyId: spreadId,
+      request: {
+        measure: 'PGA',
+        quantity: { kind: 'return-period', returnPeriodYears: 475 },
+        spacingKm: 1,
+        vs30: 760,
+      },
+      inputHash: 'h',
+    });
     const queued = await (await get(`/studies/${spreadId}/maps/${waiting.id}`)).text();
     expectPlainPage(queued);
     expect(queued).toContain('data-status="queued"');
     expect(queued).toContain(en.t('mapRun.queued'));
     expect(queued).toMatch(/<progress id="map-run-progress" max="1" value="0">0%<\/progress>/);
-    expect(queued).toContain(`<a href="/studies/${spreadId}/maps/${waiting.id}">${en.t('mapRun.refresh')}</a>`);
+    expect(queued).toContain(
+      `<a href="/studies/${spreadId}/maps/${waiting.id}">${en.t('mapRun.refresh')}</a>`,
+    );
     page.ctx.store.maps.finishWithout(waiting.id, 'cancelled', 'cancelled on request');
     expect(await mapFinished(page.ctx, mapId)).toBe('done');
     const done = await (await get(location)).text();
@@ -102,17 +156,27 @@ describe('the hazard map on the overview', () => {
   test("the overview draws the done map: a cell per point with a value, the legend's classes and counts, the summary, the download, the caution and the Vs30", async () => {
     const html = await (await get(`/studies/${spreadId}`)).text();
     expectPlainPage(html);
-    const doc = JSON.parse(page.ctx.store.maps.geojson(mapId) as string) as { features: { properties: { value: number | null } }[] };
-    const values = doc.features.map((f) => f.properties.value).filter((v): v is number => v !== null);
+    const doc = JSON.parse(page.ctx.store.maps.geojson(mapId) as string) as {
+      features: { properties: { value: number | null } }[];
+    };
+    const values = doc.features
+      .map((f) => f.properties.value)
+      .filter((v): v is number => v !== null);
     expect(values).toHaveLength(doc.features.length);
     const cells = [...html.matchAll(/<rect [^>]*fill="(#[0-9a-f]{6})" data-class="(\d)"/g)];
     expect(cells).toHaveLength(values.length);
     for (const [, fill] of cells) expect(DUSK.slice(1)).toContain(fill);
-    const legend = [...html.matchAll(/<li data-class="(\d)" data-count="(\d+)">/g)].map((m) => ({ index: m[1], count: Number(m[2]) }));
+    const legend = [...html.matchAll(/<li data-class="(\d)" data-count="(\d+)">/g)].map((m) => ({
+      index: m[1],
+      count: Number(m[2]),
+    }));
     expect(legend.length).toBeGreaterThanOrEqual(2);
     expect(legend.reduce((n, c) => n + c.count, 0)).toBe(values.length);
-    for (const c of legend) expect(cells.filter((cell) => cell[2] === c.index)).toHaveLength(c.count);
-    expect(html).toContain(`<h3 class="legend-title">${en.t('hazardMap.title.returnPeriod', { measure: en.t('hazardMap.measure.PGA'), years: '475', unit: 'g' })}</h3>`);
+    for (const c of legend)
+      expect(cells.filter((cell) => cell[2] === c.index)).toHaveLength(c.count);
+    expect(html).toContain(
+      `<h3 class="legend-title">${en.t('hazardMap.title.returnPeriod', { measure: en.t('hazardMap.measure.PGA'), years: '475', unit: 'g' })}</h3>`,
+    );
     // Two significant figures of the smallest and largest values, in g (the spread map's values are a few tenths of a g).
     const [min, max] = [Math.min(...values), Math.max(...values)];
     expect(min).toBeGreaterThan(0.1);
@@ -130,20 +194,46 @@ describe('the hazard map on the overview', () => {
 
   test('problems come back beside the fields (422) and nothing is recorded', async () => {
     const before = page.ctx.store.maps.listForStudy(spreadId).length;
-    const bad = await post(`/studies/${spreadId}/maps`, { measure: 'PGX', returnPeriodYears: '475', spacingKm: 'abc' });
+    const bad = await post(`/studies/${spreadId}/maps`, {
+      measure: 'PGX',
+      returnPeriodYears: '475',
+      spacingKm: 'abc',
+    });
     expect(bad.status).toBe(422);
     const html = await bad.text();
-    expect(textOfId(html, 'hazard-map-spacingKm-problem')).toBe('expected a number in [0.5, 200] km, got &quot;abc&quot;');
-    expect(html).toMatch(/id="hazard-map-spacing"[^>]*value="abc"[^>]*aria-describedby="hazard-map-spacing-help hazard-map-spacingKm-problem" aria-invalid="true"/);
-    const measure = await post(`/studies/${spreadId}/maps`, { measure: 'PGX', returnPeriodYears: '475', spacingKm: '5' });
+    expect(textOfId(html, 'hazard-map-spacingKm-problem')).toBe(
+      'expected a number in [0.5, 200] km, got &quot;abc&quot;',
+    );
+    expect(html).toMatch(
+      /id="hazard-map-spacing"[^>]*value="abc"[^>]*aria-describedby="hazard-map-spacing-help hazard-map-spacingKm-problem" aria-invalid="true"/,
+    );
+    const measure = await post(`/studies/${spreadId}/maps`, {
+      measure: 'PGX',
+      returnPeriodYears: '475',
+      spacingKm: '5',
+    });
     expect(measure.status).toBe(422);
-    expect(textOfId(await measure.text(), 'hazard-map-measure-problem')).toMatch(/^unsupported measure &quot;PGX&quot;: expected/);
-    const fine = await post(`/studies/${spreadId}/maps`, { measure: 'PGA', returnPeriodYears: '475', spacingKm: '0,25' });
+    expect(textOfId(await measure.text(), 'hazard-map-measure-problem')).toMatch(
+      /^unsupported measure &quot;PGX&quot;: expected/,
+    );
+    const fine = await post(`/studies/${spreadId}/maps`, {
+      measure: 'PGA',
+      returnPeriodYears: '475',
+      spacingKm: '0,25',
+    });
     expect(fine.status).toBe(422);
-    expect(textOfId(await fine.text(), 'hazard-map-spacingKm-problem')).toBe('expected a number in [0.5, 200] km, got 0.25');
-    const large = await post(`/studies/${demoId}/maps`, { measure: 'PGA', returnPeriodYears: '475', spacingKm: '0.5' });
+    expect(textOfId(await fine.text(), 'hazard-map-spacingKm-problem')).toBe(
+      'expected a number in [0.5, 200] km, got 0.25',
+    );
+    const large = await post(`/studies/${demoId}/maps`, {
+      measure: 'PGA',
+      returnPeriodYears: '475',
+      spacingKm: '0.5',
+    });
     expect(large.status).toBe(422);
-    expect(textOfId(await large.text(), 'hazard-map-other-problems')).toMatch(/^study is too large: map grid points at 0\.5 km spacing = \d+, over the budget of 250000$/);
+    expect(textOfId(await large.text(), 'hazard-map-other-problems')).toMatch(
+      /^study is too large: map grid points at 0\.5 km spacing = \d+, over the budget of 250000$/,
+    );
     expect(page.ctx.store.maps.listForStudy(spreadId)).toHaveLength(before);
     expect(page.ctx.store.maps.listForStudy(demoId)).toHaveLength(0);
   });
@@ -152,8 +242,20 @@ describe('the hazard map on the overview', () => {
     const record = page.ctx.store.studies.get(spreadId)!;
     const edited = spreadStudy('Spread fixture');
     (edited.communities as { vs30: number }[])[0]!.vs30 = 450;
-    page.ctx.store.studies.replace(spreadId, { name: record.name, document: JSON.stringify(edited) });
-    const failed = page.ctx.store.maps.create({ studyId: spreadId, request: { measure: 'PGA', quantity: { kind: 'return-period', returnPeriodYears: 475 }, spacingKm: 1, vs30: 760 }, inputHash: 'h' });
+    page.ctx.store.studies.replace(spreadId, {
+      name: record.name,
+      document: JSON.stringify(edited),
+    });
+    const failed = page.ctx.store.maps.create({
+      studyId: spreadId,
+      request: {
+        measure: 'PGA',
+        quantity: { kind: 'return-period', returnPeriodYears: 475 },
+        spacingKm: 1,
+        vs30: 760,
+      },
+      inputHash: 'h',
+    });
     page.ctx.store.maps.finishWithout(failed.id, 'failed', 'a failure for the test');
     let html = await (await get(`/studies/${spreadId}`)).text();
     expect(html).toContain(en.t('hazardMap.stale'));
@@ -161,31 +263,70 @@ describe('the hazard map on the overview', () => {
     expect(html).toContain('class="hazard-cells"');
 
     // A stored map record standing in for one over the drawing limit (a page behaviour, not a computation).
-    const big = page.ctx.store.maps.create({ studyId: spreadId, request: { measure: 'PGA', quantity: { kind: 'return-period', returnPeriodYears: 475 }, spacingKm: 0.5, vs30: 760 }, inputHash: 'h' });
-    const description = { measure: 'PGA', unit: 'g' as const, quantity: { kind: 'return-period' as const, returnPeriodYears: 475 }, vs30: 760, spacingKm: 0.5, columns: 200, rows: 100, count: MAX_DRAWN_POINTS + 8000 };
+    const big = page.ctx.store.maps.create({
+      studyId: spreadId,
+      request: {
+        measure: 'PGA',
+        quantity: { kind: 'return-period', returnPeriodYears: 475 },
+        spacingKm: 0.5,
+        vs30: 760,
+      },
+      inputHash: 'h',
+    });
+    const description = {
+      measure: 'PGA',
+      unit: 'g' as const,
+      quantity: { kind: 'return-period' as const, returnPeriodYears: 475 },
+      vs30: 760,
+      spacingKm: 0.5,
+      columns: 200,
+      rows: 100,
+      count: MAX_DRAWN_POINTS + 8000,
+    };
     page.ctx.store.maps.markRunning(big.id, new Date().toISOString(), description);
-    page.ctx.store.maps.finishDone(big.id, { geojson: '{"type":"FeatureCollection","features":[]}', warnings: [], provenanceJson: '{}', finishedAt: new Date().toISOString() });
+    page.ctx.store.maps.finishDone(big.id, {
+      geojson: '{"type":"FeatureCollection","features":[]}',
+      warnings: [],
+      provenanceJson: '{}',
+      finishedAt: new Date().toISOString(),
+    });
     html = await (await get(`/studies/${spreadId}`)).text();
-    expect(html).toContain(en.t('hazardMap.tooMany', { count: en.number(MAX_DRAWN_POINTS + 8000) }));
+    expect(html).toContain(
+      en.t('hazardMap.tooMany', { count: en.number(MAX_DRAWN_POINTS + 8000) }),
+    );
     expect(html).toContain(`href="/api/maps/${big.id}/map.geojson"`);
     expect(html).not.toContain('class="hazard-cells"');
     expect(html).not.toContain('aria-describedby="overview-map-hazard-summary"');
   });
 
   test('unknown studies and maps get a 404 page', async () => {
-    expect((await post('/studies/none-such/maps', { measure: 'PGA', returnPeriodYears: '475', spacingKm: '5' })).status).toBe(404);
+    expect(
+      (
+        await post('/studies/none-such/maps', {
+          measure: 'PGA',
+          returnPeriodYears: '475',
+          spacingKm: '5',
+        })
+      ).status,
+    ).toBe(404);
     expect((await get(`/studies/${spreadId}/maps/none-such`)).status).toBe(404);
     expect((await get(`/studies/${demoId}/maps/${mapId}`)).status).toBe(404);
   });
 
   test('on a French page, every hazard-map text English stands in for is marked lang="en"', async () => {
-    const html = await (await get(`/studies/${spreadId}`, { headers: { cookie: 'tremora_lang=fr' } })).text();
+    const html = await (
+      await get(`/studies/${spreadId}`, { headers: { cookie: 'tremora_lang=fr' } })
+    ).text();
     expect(html).toContain('<html lang="fr">');
     const pieces = (Object.keys(EN) as TextKey[])
       .filter((key) => key.startsWith('hazardMap.') || key.startsWith('map.'))
-      .flatMap((key) => EN[key].split(/\{\w+\}/).map((p) => p.trim().replace(/^[\s,.:;()]+|[\s,.:;()]+$/g, '')))
+      .flatMap((key) =>
+        EN[key].split(/\{\w+\}/).map((p) => p.trim().replace(/^[\s,.:;()]+|[\s,.:;()]+$/g, '')),
+      )
       .filter((p) => (p.match(/\p{L}+/gu) ?? []).length >= 2);
-    const unmarked = textLanguages(html).filter((t) => t.lang === 'fr' && pieces.some((p) => t.text.includes(p)));
+    const unmarked = textLanguages(html).filter(
+      (t) => t.lang === 'fr' && pieces.some((p) => t.text.includes(p)),
+    );
     expect(unmarked).toEqual([]);
     expect(count(html, /lang="en"/g)).toBeGreaterThan(0);
   });

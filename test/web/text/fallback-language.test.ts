@@ -17,7 +17,8 @@ import { textLanguages, type MarkedText } from '../helpers/text-languages.ts';
  */
 const fr = translator('fr');
 const en = translator('en');
-const render = async (child: Child): Promise<string> => String(await jsx(Fragment, {}, child).toString());
+const render = async (child: Child): Promise<string> =>
+  String(await jsx(Fragment, {}, child).toString());
 
 describe('the translator marks English standing in for French', () => {
   test('a French text is the text itself, unmarked', async () => {
@@ -29,36 +30,58 @@ describe('the translator marks English standing in for French', () => {
 
   test('a missing one comes inside <span lang="en">', async () => {
     expect(fr.has('community.levels')).toBe(false);
-    expect(await render(fr.text('community.levels'))).toBe('<span lang="en">What the shaking could be like</span>');
+    expect(await render(fr.text('community.levels'))).toBe(
+      '<span lang="en">What the shaking could be like</span>',
+    );
     expect(fr.fallbackLang('community.levels')).toBe('en');
   });
 
   test("values filled into an English stand-in keep the page's language", async () => {
     const html = await render(fr.text('community.level', { period: fr.number(2475) }));
     // fr-FR groups thousands with a narrow no-break space (U+202F) in ICU's CLDR data (from memory).
-    expect(html).toBe('<span lang="en">Shaking reached on average once in <span lang="fr">2\u202f475</span> years</span>');
+    expect(html).toBe(
+      '<span lang="en">Shaking reached on average once in <span lang="fr">2\u202f475</span> years</span>',
+    );
   });
 
   test('a value that is itself page content is kept as it is, marked or not', async () => {
-    const levelMmi = await render(fr.text('community.levelMmi', { mmi: fr.mmi(7.2), name: fr.text('mmi.7.name') }));
-    expect(levelMmi).toBe('<span lang="en"><span lang="fr">MMI VII</span>: <span lang="en">Damaging</span></span>');
-    const inFrench = await render(fr.text('chance.overYears', { frequency: fr.text('chance.oneIn', { n: 8 }), years: 50, percent: fr.text('community.levels') }));
-    expect(inFrench).toBe('environ 1 sur 8 au cours des 50 prochaines années (<span lang="en">What the shaking could be like</span>)');
+    const levelMmi = await render(
+      fr.text('community.levelMmi', { mmi: fr.mmi(7.2), name: fr.text('mmi.7.name') }),
+    );
+    expect(levelMmi).toBe(
+      '<span lang="en"><span lang="fr">MMI VII</span>: <span lang="en">Damaging</span></span>',
+    );
+    const inFrench = await render(
+      fr.text('chance.overYears', {
+        frequency: fr.text('chance.oneIn', { n: 8 }),
+        years: 50,
+        percent: fr.text('community.levels'),
+      }),
+    );
+    expect(inFrench).toBe(
+      'environ 1 sur 8 au cours des 50 prochaines années (<span lang="en">What the shaking could be like</span>)',
+    );
   });
 
   test('a placeholder without a value stays visible, as fill leaves it', async () => {
-    expect(await render(fr.text('community.level'))).toBe('<span lang="en">Shaking reached on average once in {period} years</span>');
+    expect(await render(fr.text('community.level'))).toBe(
+      '<span lang="en">Shaking reached on average once in {period} years</span>',
+    );
   });
 
   test('on an English page nothing is marked', async () => {
     expect(en.text('community.levels')).toBe(EN['community.levels']);
-    expect(en.text('community.level', { period: '475' })).toBe('Shaking reached on average once in 475 years');
+    expect(en.text('community.level', { period: '475' })).toBe(
+      'Shaking reached on average once in 475 years',
+    );
     expect(en.fallbackLang('community.levels')).toBeUndefined();
     expect(en.english('expected a number')).toBe('expected a number');
   });
 
   test("the service's own messages, English on every page, are marked on a French page", async () => {
-    expect(await render(fr.english('expected a number in [-90, 90] degrees, got 95'))).toBe('<span lang="en">expected a number in [-90, 90] degrees, got 95</span>');
+    expect(await render(fr.english('expected a number in [-90, 90] degrees, got 95'))).toBe(
+      '<span lang="en">expected a number in [-90, 90] degrees, got 95</span>',
+    );
   });
 });
 
@@ -68,7 +91,11 @@ describe('the translator marks English standing in for French', () => {
  */
 const fallbackPieces = (Object.keys(EN) as TextKey[])
   .filter((key) => FR[key] === undefined)
-  .flatMap((key) => EN[key].split(/\{\w+\}|\n/).map((piece) => ({ key, piece: piece.trim().replace(/^[\s,.:;()]+|[\s,.:;()]+$/g, '') })))
+  .flatMap((key) =>
+    EN[key]
+      .split(/\{\w+\}|\n/)
+      .map((piece) => ({ key, piece: piece.trim().replace(/^[\s,.:;()]+|[\s,.:;()]+$/g, '') })),
+  )
   .filter(({ piece }) => (piece.match(/\p{L}+/gu) ?? []).some((word) => word.length >= 3));
 
 const wordCount = (text: string) => (text.match(/\p{L}+/gu) ?? []).length;
@@ -79,8 +106,12 @@ function unmarkedEnglish(found: readonly MarkedText[]): string[] {
   for (const item of found) {
     if (item.lang !== 'fr') continue;
     for (const { key, piece } of fallbackPieces) {
-      const hit = wordCount(piece) >= 2 ? item.text.includes(piece) : item.text.trim().replace(/[\s:.]+$/, '') === piece;
-      if (hit) problems.push(`${item.kind} "${item.text.trim().slice(0, 80)}" holds "${piece}" (${key})`);
+      const hit =
+        wordCount(piece) >= 2
+          ? item.text.includes(piece)
+          : item.text.trim().replace(/[\s:.]+$/, '') === piece;
+      if (hit)
+        problems.push(`${item.kind} "${item.text.trim().slice(0, 80)}" holds "${piece}" (${key})`);
     }
   }
   return problems;
@@ -94,33 +125,76 @@ describe('French pages mark every English stand-in', { timeout: 120_000 }, () =>
   let demoId: string;
   let runId: string;
   const get = (path: string) => app.app.request(path, { headers });
-  const post = (path: string, body: FormData | URLSearchParams) => app.app.request(path, { method: 'POST', headers, body });
+  const post = (path: string, body: FormData | URLSearchParams) =>
+    app.app.request(path, { method: 'POST', headers, body });
 
   beforeAll(async () => {
     app = startPageApp({ token: TOKEN });
-    smallId = app.ctx.store.studies.create({ name: 'Language fixture', document: JSON.stringify(smallStudy('Language fixture')) }).id;
-    demoId = app.ctx.store.studies.create({ name: 'Demo coast', document: readFileSync(DEMO_STUDY_URL, 'utf8') }).id;
+    smallId = app.ctx.store.studies.create({
+      name: 'Language fixture',
+      document: JSON.stringify(smallStudy('Language fixture')),
+    }).id;
+    demoId = app.ctx.store.studies.create({
+      name: 'Demo coast',
+      document: readFileSync(DEMO_STUDY_URL, 'utf8'),
+    }).id;
     const started = await post(`/studies/${smallId}/screen`, new URLSearchParams());
     runId = (started.headers.get('location') as string).split('/').at(-1) as string;
     expect(await runFinished(app.ctx, runId)).toBe('done');
-    expect((await post(`/studies/${demoId}/catalog`, fileForm('x', 'text/plain', '', { demo: '1' }))).status).toBe(303);
+    expect(
+      (await post(`/studies/${demoId}/catalog`, fileForm('x', 'text/plain', '', { demo: '1' })))
+        .status,
+    ).toBe(303);
   });
   afterAll(async () => app?.close());
 
   const pages: readonly [string, () => Response | Promise<Response>][] = [
     ['home', () => get('/')],
     ['limits', () => get('/limits')],
-    ['access', () => app.app.request('/access?why=needed&back=/', { headers: { cookie: 'tremora_lang=fr' } })],
+    [
+      'access',
+      () =>
+        app.app.request('/access?why=needed&back=/', { headers: { cookie: 'tremora_lang=fr' } }),
+    ],
     ['access, granted', () => get('/access')],
-    ['access, wrong token', () => app.app.request('/access', { method: 'POST', headers: { cookie: 'tremora_lang=fr' }, body: new URLSearchParams({ token: 'not-the-token-0000000' }) })],
+    [
+      'access, wrong token',
+      () =>
+        app.app.request('/access', {
+          method: 'POST',
+          headers: { cookie: 'tremora_lang=fr' },
+          body: new URLSearchParams({ token: 'not-the-token-0000000' }),
+        }),
+    ],
     ['overview', () => get(`/studies/${smallId}`)],
     ['run', () => get(`/studies/${smallId}/runs/${runId}`)],
     ['community', () => get(`/studies/${smallId}/communities/test-cove`)],
     ['handout', () => get(`/studies/${smallId}/communities/test-cove/handout`)],
-    ['scenario', () => post(`/studies/${smallId}/scenario`, new URLSearchParams({ sourceId: 'spot-below', magnitude: '6.5' }))],
-    ['scenario, bad magnitude', () => post(`/studies/${smallId}/scenario`, new URLSearchParams({ sourceId: 'spot-below', magnitude: '12' }))],
+    [
+      'scenario',
+      () =>
+        post(
+          `/studies/${smallId}/scenario`,
+          new URLSearchParams({ sourceId: 'spot-below', magnitude: '6.5' }),
+        ),
+    ],
+    [
+      'scenario, bad magnitude',
+      () =>
+        post(
+          `/studies/${smallId}/scenario`,
+          new URLSearchParams({ sourceId: 'spot-below', magnitude: '12' }),
+        ),
+    ],
     ['editor', () => get(`/studies/${smallId}/edit`)],
-    ['community form with problems', () => post(`/studies/${smallId}/edit/new-community`, new URLSearchParams({ id: 'x', name: '', lon: '500', lat: 'north' }))],
+    [
+      'community form with problems',
+      () =>
+        post(
+          `/studies/${smallId}/edit/new-community`,
+          new URLSearchParams({ id: 'x', name: '', lon: '500', lat: 'north' }),
+        ),
+    ],
     ['catalog', () => get(`/studies/${demoId}/catalog`)],
     ['not found', () => get('/no/such/page')],
   ];
@@ -135,7 +209,11 @@ describe('French pages mark every English stand-in', { timeout: 120_000 }, () =>
   }
 
   test('the check finds English that is not marked', () => {
-    const found = textLanguages(`<html lang="fr"><p>${EN['community.levelIntro']}</p><p lang="en">${EN['community.curveIntro']}</p></html>`);
-    expect(unmarkedEnglish(found)).toEqual([`text "${EN['community.levelIntro'].slice(0, 80)}" holds "${EN['community.levelIntro'].replace(/\.$/, '')}" (community.levelIntro)`]);
+    const found = textLanguages(
+      `<html lang="fr"><p>${EN['community.levelIntro']}</p><p lang="en">${EN['community.curveIntro']}</p></html>`,
+    );
+    expect(unmarkedEnglish(found)).toEqual([
+      `text "${EN['community.levelIntro'].slice(0, 80)}" holds "${EN['community.levelIntro'].replace(/\.$/, '')}" (community.levelIntro)`,
+    ]);
   });
 });

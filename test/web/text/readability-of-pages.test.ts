@@ -14,21 +14,44 @@ const en = translator('en');
 const chance = en.chance(0.15);
 
 const blocks: Record<string, string> = {
-  headline: fill(EN['community.headline'], { name: 'Harbour Point', chance: chance.frequency, years: 50, percent: chance.percent }) + ' ' + EN['community.headlineStrongWhat'],
-  levels: [EN['community.levelIntro'], fill(EN['community.level'], { period: '475' }), fill(EN['community.levelChance'], { frequency: 'about 1 in 10', years: 50, percent: '10%' })].join('\n'),
-  sources: [fill(EN['community.sourcesIntro'], { period: '475' }), fill(EN['community.sourcesMean'], { magnitude: '7.1', km: '37' })].join('\n'),
+  headline:
+    fill(EN['community.headline'], {
+      name: 'Harbour Point',
+      chance: chance.frequency,
+      years: 50,
+      percent: chance.percent,
+    }) +
+    ' ' +
+    EN['community.headlineStrongWhat'],
+  levels: [
+    EN['community.levelIntro'],
+    fill(EN['community.level'], { period: '475' }),
+    fill(EN['community.levelChance'], { frequency: 'about 1 in 10', years: 50, percent: '10%' }),
+  ].join('\n'),
+  sources: [
+    fill(EN['community.sourcesIntro'], { period: '475' }),
+    fill(EN['community.sourcesMean'], { magnitude: '7.1', km: '37' }),
+  ].join('\n'),
   curve: EN['community.curveIntro'],
-  felt: [EN['community.feltIntro'], fill(EN['community.feltCounts'], { felt: 'three', strong: 'one' })].join('\n'),
+  felt: [
+    EN['community.feltIntro'],
+    fill(EN['community.feltCounts'], { felt: 'three', strong: 'one' }),
+  ].join('\n'),
   safetyBefore: EN['safety.before'],
   safetyDuring: EN['safety.during'],
   safetyAfter: EN['safety.after'],
   tsunami: EN['tsunami.text'],
   limits: [EN['limits.intro'], EN['limits.list'], EN['limits.source']].join('\n'),
   caution: EN['caution.text'],
-  bands: (['refer-first', 'refer-soon', 'prepare', 'inform'] as const).map((b) => EN[`band.${b}.meaning` as TextKey]).join('\n'),
+  bands: (['refer-first', 'refer-soon', 'prepare', 'inform'] as const)
+    .map((b) => EN[`band.${b}.meaning` as TextKey])
+    .join('\n'),
 };
 for (let level = 1; level <= 10; level++) {
-  blocks[`mmi ${level}`] = [EN[`mmi.${level}.feel` as TextKey], EN[`mmi.${level}.buildings` as TextKey]].join('\n');
+  blocks[`mmi ${level}`] = [
+    EN[`mmi.${level}.feel` as TextKey],
+    EN[`mmi.${level}.buildings` as TextKey],
+  ].join('\n');
 }
 
 describe(`community-page prose reads at grade ${MAX_GRADE} or below (Flesch–Kincaid)`, () => {

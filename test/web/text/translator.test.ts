@@ -4,13 +4,16 @@ import { EN, type TextKey } from '../../../web/text/en.ts';
 import { FR } from '../../../web/text/fr.ts';
 import { fill, translator } from '../../../web/text/translator.ts';
 
-const placeholders = (text: string): string[] => [...text.matchAll(/\{(\w+)\}/g)].map((m) => m[1] as string).sort();
+const placeholders = (text: string): string[] =>
+  [...text.matchAll(/\{(\w+)\}/g)].map((m) => m[1] as string).sort();
 
 describe('text bundles', () => {
   test('the French bundle has only keys English has, with the same placeholders', () => {
     for (const [key, text] of Object.entries(FR)) {
       expect(Object.keys(EN), `French key ${key}`).toContain(key);
-      expect(placeholders(text as string), `placeholders of ${key}`).toEqual(placeholders(EN[key as TextKey]));
+      expect(placeholders(text as string), `placeholders of ${key}`).toEqual(
+        placeholders(EN[key as TextKey]),
+      );
     }
   });
 
@@ -33,7 +36,8 @@ describe('text bundles', () => {
 
   test('every MMI level I to X has a name, a feeling and what it does to buildings', () => {
     for (let level = 1; level <= 10; level++) {
-      for (const part of ['name', 'feel', 'buildings']) expect(EN[`mmi.${level}.${part}` as TextKey], `mmi.${level}.${part}`).toBeTruthy();
+      for (const part of ['name', 'feel', 'buildings'])
+        expect(EN[`mmi.${level}.${part}` as TextKey], `mmi.${level}.${part}`).toBeTruthy();
     }
   });
 
