@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { Cancelled, InvalidInput, UnknownModel } from '../../api/engine/errors.ts';
 import { ruptureDistances } from '../../api/engine/geometry/distances.ts';
 import { cellUsedAt } from '../../api/engine/geometry/cell-refinement.ts';
-import { pgaForMmi, mmiFromPga } from '../../api/engine/intensity/worden2012.ts';
+import { mmiFromPga } from '../../api/engine/intensity/worden2012.ts';
 import type { Community, FaultSource, Study, ZoneSource } from '../../api/engine/model.ts';
 import { normalSurvival } from '../../api/engine/hazard/normal-cdf.ts';
 import { cornell79LnPga } from '../../api/engine/motion/cornell79.ts';

@@ -73,7 +73,6 @@ import type {
   GmmInput,
   GmmPrediction,
   GroundMotionModel,
-  PairDistances,
   PairPredictions,
   PreparedMotion,
   PreparedMotions,

@@ -231,17 +231,6 @@ export function cb14LnMedianFromSource(
   );
 }
 
-/** ln median of one row before the short-period PGA floor (ln g; ln cm/s for PGV). */
-export function cb14LnMedianUnfloored(
-  row: Cb14Row,
-  s: Cb14Scenario,
-  vs30: number,
-  z2p5Km: number,
-  a1100G: number,
-): number {
-  return cb14LnMedianFromSource(row, cb14SourceTerm(row, s), s, vs30, z2p5Km, a1100G);
-}
-
 /** Vs30 of the paper's reference rock, m/s. */
 export const CB14_ROCK_VS30 = 1100;
 
@@ -252,11 +241,6 @@ const ROCK_Z2P5_KM = cb14DefaultZ2p5Km(CB14_ROCK_VS30);
 function a1100FromSource(pgaSource: number, s: Cb14Scenario): number {
   // On rock above k1 the site term does not depend on A1100, so any value serves here.
   return Math.exp(cb14LnMedianFromSource(CB14_PGA, pgaSource, s, CB14_ROCK_VS30, ROCK_Z2P5_KM, 0));
-}
-
-/** A1100: median PGA (g) of the event on reference rock (Vs30 = 1100 m/s, its default Z2.5). */
-export function cb14A1100G(s: Cb14Scenario): number {
-  return a1100FromSource(cb14SourceTerm(CB14_PGA, s), s);
 }
 
 /** τ, φ and σ (ln units) of a row, with the nonlinear-site correction for Vs30 (m/s) below k1. */

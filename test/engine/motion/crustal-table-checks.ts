@@ -25,12 +25,3 @@ export function worstKink(periodsS: readonly number[], values: readonly number[]
   }
   return worst;
 }
-
-/** The worst chord residual as a share of the column's range (0 for a constant column). */
-export function relativeKink(periodsS: readonly number[], values: readonly number[]): Kink {
-  const range = Math.max(...values) - Math.min(...values);
-  const kink = worstKink(periodsS, values);
-  return range === 0
-    ? { residual: 0, periodS: kink.periodS }
-    : { residual: kink.residual / range, periodS: kink.periodS };
-}

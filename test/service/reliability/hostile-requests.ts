@@ -229,33 +229,25 @@ const badTextArb: fc.Arbitrary<{ kind: string; text: string }> = fc.oneof(
       '{"__proto__":{"polluted":1},"constructor":{"prototype":{"polluted":1}},"name":"x"}',
     )
     .map((text) => ({ kind: 'malformed JSON', text })),
-  fc
-    .constantFrom(1_000, 60, 65, 100_000, 1_000_000)
-    .map((depth) => ({
-      kind: 'deep nesting',
-      text: `{"name":"deep","x":${'['.repeat(depth)}${']'.repeat(depth)}}`,
-    })),
-  fc
-    .constantFrom(100_000, 1_000_000)
-    .map((depth) => ({
-      kind: 'deep nesting',
-      text: '{"a":'.repeat(depth) + '1' + '}'.repeat(depth),
-    })),
-  fc
-    .constantFrom(100_000, 4_000_000)
-    .map((n) => ({
-      kind: 'very long string',
-      text: JSON.stringify({ ...smallStudy(), name: 'n'.repeat(n) }),
-    })),
-  fc
-    .constantFrom(50_000)
-    .map((n) => ({
-      kind: 'many keys',
-      text: JSON.stringify({
-        ...smallStudy(),
-        ...Object.fromEntries(Array.from({ length: n }, (_, i) => [`k${i}`, i])),
-      }),
-    })),
+  fc.constantFrom(1_000, 60, 65, 100_000, 1_000_000).map((depth) => ({
+    kind: 'deep nesting',
+    text: `{"name":"deep","x":${'['.repeat(depth)}${']'.repeat(depth)}}`,
+  })),
+  fc.constantFrom(100_000, 1_000_000).map((depth) => ({
+    kind: 'deep nesting',
+    text: '{"a":'.repeat(depth) + '1' + '}'.repeat(depth),
+  })),
+  fc.constantFrom(100_000, 4_000_000).map((n) => ({
+    kind: 'very long string',
+    text: JSON.stringify({ ...smallStudy(), name: 'n'.repeat(n) }),
+  })),
+  fc.constantFrom(50_000).map((n) => ({
+    kind: 'many keys',
+    text: JSON.stringify({
+      ...smallStudy(),
+      ...Object.fromEntries(Array.from({ length: n }, (_, i) => [`k${i}`, i])),
+    }),
+  })),
   fc
     .constantFrom('1e400', '-1e400', '123456789012345678901234567890', '0.' + '0'.repeat(400) + '1')
     .map((n) => ({
@@ -454,20 +446,16 @@ export function requestsFor(route: RouteSpec, ids: KnownIds): fc.Arbitrary<FuzzR
       type: isCsv ? 'text/csv' : 'application/json',
       bytes: utf8(text),
     })),
-    fc
-      .constantFrom(...WRONG_TYPES)
-      .map((type) => ({
-        kind: 'wrong content type',
-        type,
-        bytes: utf8(JSON.stringify(smallStudy())),
-      })),
-    fc
-      .uint8Array({ minLength: 1, maxLength: 300 })
-      .map((bytes) => ({
-        kind: 'invalid UTF-8',
-        type: isCsv ? 'text/csv' : 'application/json',
-        bytes: Uint8Array.from([0x7b, 0x22, 0xff, 0xfe, ...bytes, 0xc3]),
-      })),
+    fc.constantFrom(...WRONG_TYPES).map((type) => ({
+      kind: 'wrong content type',
+      type,
+      bytes: utf8(JSON.stringify(smallStudy())),
+    })),
+    fc.uint8Array({ minLength: 1, maxLength: 300 }).map((bytes) => ({
+      kind: 'invalid UTF-8',
+      type: isCsv ? 'text/csv' : 'application/json',
+      bytes: Uint8Array.from([0x7b, 0x22, 0xff, 0xfe, ...bytes, 0xc3]),
+    })),
     fc.constant({ kind: 'no body', type: isCsv ? 'text/csv' : 'application/json' }),
   );
   return fc.tuple(path, body).map(([p, b]): FuzzRequest => ({
