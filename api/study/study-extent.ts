@@ -15,6 +15,9 @@ import type { IssueList } from './issues.ts';
  */
 export const MAX_FRAME_RADIUS_KM = 2_000;
 
+/** Half the circumference of turf's sphere (mean Earth radius 6371.0088 km), km. */
+const HALF_CIRCUMFERENCE_KM = Math.PI * 6371.0088;
+
 /**
  * Refuses a study whose points lie more than MAX_FRAME_RADIUS_KM from the centre of its
  * frame (turf's spherical distance), naming the farthest point, the extent and the limit.
@@ -29,7 +32,12 @@ export function checkStudyExtent(
   const centre = frameForStudy({ communities, sources }).origin;
   let farthest = { km: 0, path: [] as (string | number)[] };
   const consider = (point: LonLat, path: (string | number)[]) => {
-    const km = turf.distance([centre[0], centre[1]], [point[0], point[1]], { units: 'kilometers' });
+    // turf's haversine (spherical) gives NaN at the exact antipode, where rounding puts its
+    // argument a hair past 1: that point is half the Earth's circumference away.
+    const haversineKm = turf.distance([centre[0], centre[1]], [point[0], point[1]], {
+      units: 'kilometers',
+    });
+    const km = Number.isFinite(haversineKm) ? haversineKm : HALF_CIRCUMFERENCE_KM;
     if (km > farthest.km) farthest = { km, path };
   };
   communities.forEach((c, i) => consider([c.lon, c.lat], ['communities', i]));

@@ -44,7 +44,8 @@ describe('study extent', () => {
     // [-140.2, -47.4] and [39.8, 47.4] are antipodal: half the Earth's circumference apart (about 20,000 km).
     const message = expectRefused(
       studyAt([[-140.2, -47.4]], [39.8, 47.4]),
-      'sources.features[0].geometry.coordinates',
+      // The frame is centred on the sources (engine/geometry/projection.ts), so the community is the far point.
+      'communities[0]',
     );
     expect(message).toMatch(/the study spans about \d{5} km/);
   });
@@ -58,7 +59,8 @@ describe('study extent', () => {
         ],
         [0, 89],
       ),
-      'communities[0]',
+      // The frame is centred on the source beside the north pole: the south pole is the far point.
+      'communities[1]',
     );
   });
 

@@ -27,7 +27,6 @@ function cutDemo(): Record<string, unknown> {
         (f: { properties: { id: string } }) => f.properties.id === 'orle-interface',
       ),
     },
-    groundMotion: { interface: demo.groundMotion.interface },
     settings: {
       ...demo.settings,
       measures: ['PGA'],

@@ -187,7 +187,7 @@ function fixedRupture(
   position: ScenarioPosition,
 ): ScenarioRupture | undefined {
   if (position === 'closest') return undefined;
-  if (position === 'middle') return closestRupture(candidates, surfaceCentre(candidates));
+  if (position === 'middle') return middleRupture(candidates);
   if ('communityId' in position) {
     const community = study.communities.find((c) => c.id === position.communityId);
     if (!community)
@@ -211,14 +211,28 @@ function fixedRupture(
 }
 
 /** The middle of the candidates' hypocentres, where the map's rupture goes by default. */
-function surfaceCentre(candidates: readonly ScenarioRupture[]): PointXY {
+/**
+ * The candidate whose hypocentre is nearest the mean of all the candidates' hypocentres: the
+ * middle of the source. (Rrup to the mean would tie among every rupture that spans it.)
+ */
+function middleRupture(candidates: readonly ScenarioRupture[]): ScenarioRupture | undefined {
   let x = 0;
   let y = 0;
+  let z = 0;
   for (const c of candidates) {
     x += c.surface.hypocentre.x;
     y += c.surface.hypocentre.y;
+    z += c.surface.hypocentre.z;
   }
-  return { x: x / candidates.length, y: y / candidates.length };
+  const n = candidates.length;
+  let best: ScenarioRupture | undefined;
+  let bestKm = Infinity;
+  for (const c of candidates) {
+    const h = c.surface.hypocentre;
+    const km = Math.hypot(h.x - x / n, h.y - y / n, h.z - z / n);
+    if (km < bestKm) [best, bestKm] = [c, km];
+  }
+  return best;
 }
 
 function describePosition(position: ScenarioPosition): string {

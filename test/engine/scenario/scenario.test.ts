@@ -258,7 +258,9 @@ describe('runScenario', () => {
       3,
       'north and south see the middle rupture from about as far',
     );
-    expectClose(middle!.rrupKm, 5, 0.05, 'the middle community sits beside the rupture');
+    // 5 km off the trace; the middle position down dip may start up to 2 km below the surface
+    // (rows of the 12 km deep fault), so Rrup is at most √(5² + 2²) = 5.39 km (derived).
+    expectClose(middle!.rrupKm, 5, 0.4, 'the middle community sits beside the rupture');
     // Asking for a different rupture beside each community together with a map is refused, naming the field.
     try {
       runScenario(s, models, {

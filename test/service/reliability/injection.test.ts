@@ -175,7 +175,8 @@ describe('through the service', () => {
     const saved = (await (await service.fetch(`/api/studies/${id}`)).json()) as {
       communitiesCsv: string | null;
     };
-    expect(saved.communitiesCsv).toBe(COMMUNITIES_CSV);
+    // Stored as CSV with Tremora's header, ending in a newline.
+    expect(saved.communitiesCsv?.trimEnd()).toBe(COMMUNITIES_CSV.trimEnd());
   });
 });
 
@@ -192,6 +193,8 @@ const FILE_SYSTEM_USERS: Readonly<Record<string, string>> = {
   'api/study/read-study-file.ts': 'the CLI reads the study file it is given',
   'web/routes/static-files.ts': 'reads web/static/ by fixed names at start',
   'web/data/study-catalog.ts': 'reads the demo catalog by a fixed name',
+  'api/operations/tsunami-times.ts':
+    "stats the study's terrain grid, a bare file name in TREMORA_TERRAIN_DIR",
 };
 
 describe('file system use', () => {
