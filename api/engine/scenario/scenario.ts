@@ -1,6 +1,6 @@
 import { InvalidInput } from '../errors.ts';
 import { ruptureDistances } from '../geometry/distances.ts';
-import { frameForStudy, type LocalFrame, type PointXY } from '../geometry/projection.ts';
+import { frameForStudy, type LocalFrame } from '../geometry/projection.ts';
 import { mmiRoman } from '../intensity/mmi-roman.ts';
 import { mmiFromPga } from '../intensity/worden2012.ts';
 import type { Study } from '../model.ts';
