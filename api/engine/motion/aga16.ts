@@ -43,7 +43,7 @@
  * (prepare, prepareMeasures) both call them. How the table is checked:
  * test/engine/motion/aga16.vectors.test.ts (independent reference vectors, every branch).
  */
-import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
+import { UnsupportedMeasure } from '../errors.ts';
 import {
   AGA16_CONSTANTS as K,
   AGA16_DELTA_C1_INTERFACE,
@@ -79,7 +79,7 @@ import type {
   RuptureContext,
   ValidityRange,
 } from './types.ts';
-import { validityNotes } from './validity.ts';
+import { requireInput, validityNotes } from './validity.ts';
 
 const NAME = 'AGA16';
 
@@ -247,19 +247,12 @@ export const aga16Pga1000For = (
 
 const SA_PERIODS_S: readonly number[] = Object.freeze(AGA16_SA.map((r) => r.periodS));
 
-function requireNumber(
+const requireNumber = (
   path: string,
   value: number,
   expected: string,
   ok: (v: number) => boolean,
-): void {
-  if (!Number.isFinite(value) || !ok(value)) {
-    throw new InvalidInput(
-      [{ path, message: `expected ${expected}, got ${value}` }],
-      `${NAME} input`,
-    );
-  }
-}
+): void => requireInput(NAME, path, value, expected, ok);
 
 const eventTypeOf = (rupture: RuptureContext): Aga16EventType =>
   rupture.setting === 'intraslab' ? 'intraslab' : 'interface';

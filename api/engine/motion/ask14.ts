@@ -55,7 +55,7 @@
  * How it is checked: test/engine/motion/ask14.test.ts reproduces the reference vectors
  * (../shared/reference/gmm/vectors/ask14.json, an independent implementation of the paper) within 1e-4.
  */
-import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
+import { UnsupportedMeasure } from '../errors.ts';
 import { toRadians } from '../units.ts';
 import {
   ASK14_CONSTANTS as K,
@@ -77,7 +77,7 @@ import type {
   SiteContext,
   ValidityRange,
 } from './types.ts';
-import { validityNotes } from './validity.ts';
+import { requireInput, validityNotes } from './validity.ts';
 
 const NAME = 'ASK14';
 const SA_PERIODS_S: readonly number[] = Object.freeze(ASK14_SA.map((r) => r.periodS));
@@ -277,19 +277,12 @@ export const ASK14_VALIDITY: ValidityRange = Object.freeze({
   vs30: [180, 1000],
 } as const);
 
-function requireNumber(
+const requireNumber = (
   path: string,
   value: number,
   expected: string,
   ok: (v: number) => boolean,
-): void {
-  if (!Number.isFinite(value) || !ok(value)) {
-    throw new InvalidInput(
-      [{ path, message: `expected ${expected}, got ${value}` }],
-      `${NAME} input`,
-    );
-  }
-}
+): void => requireInput(NAME, path, value, expected, ok);
 
 function ruptureOf(input: GmmInput): Ask14Rupture {
   requireNumber('magnitude', input.magnitude, 'a finite moment magnitude', () => true);

@@ -43,7 +43,7 @@
  * How the table is checked: test/engine/motion/bssa14.vectors.test.ts (independent reference
  * vectors, 1e-4 in ln units).
  */
-import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
+import { UnsupportedMeasure } from '../errors.ts';
 import { hypot2 } from './fast-math.ts';
 import {
   BSSA14_CONSTANTS as K,
@@ -79,7 +79,7 @@ import type {
   SiteContext,
   ValidityRange,
 } from './types.ts';
-import { validityNotes } from './validity.ts';
+import { requireInput, validityNotes } from './validity.ts';
 
 const NAME = 'BSSA14';
 
@@ -227,19 +227,12 @@ export const BSSA14_NORMAL_VALIDITY: ValidityRange = Object.freeze({
   magnitude: [3, 7],
 } as const);
 
-function requireNumber(
+const requireNumber = (
   path: string,
   value: number,
   expected: string,
   ok: (v: number) => boolean,
-): void {
-  if (!Number.isFinite(value) || !ok(value)) {
-    throw new InvalidInput(
-      [{ path, message: `expected ${expected}, got ${value}` }],
-      `${NAME} input`,
-    );
-  }
-}
+): void => requireInput(NAME, path, value, expected, ok);
 
 /** Options of predictBssa14 and prepareBssa14Measures. */
 export interface Bssa14Options {

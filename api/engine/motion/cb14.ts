@@ -49,7 +49,7 @@
  * predict() and the fast path (split-prepare.ts) both call them. How the table is checked:
  * test/engine/motion/cb14.vectors.test.ts (independent reference vectors, 1e-4 in ln units).
  */
-import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
+import { UnsupportedMeasure } from '../errors.ts';
 import { toRadians } from '../units.ts';
 import {
   CB14_CONSTANTS as K,
@@ -70,7 +70,7 @@ import type {
   RuptureContext,
   ValidityRange,
 } from './types.ts';
-import { validityNotes } from './validity.ts';
+import { requireInput, validityNotes } from './validity.ts';
 
 const NAME = 'CB14';
 
@@ -296,19 +296,12 @@ export const CB14_VALIDITY: ValidityRange = Object.freeze({
   depthKm: [0, 20],
 } as const);
 
-function requireNumber(
+const requireNumber = (
   path: string,
   value: number,
   expected: string,
   ok: (v: number) => boolean,
-): void {
-  if (!Number.isFinite(value) || !ok(value)) {
-    throw new InvalidInput(
-      [{ path, message: `expected ${expected}, got ${value}` }],
-      `${NAME} input`,
-    );
-  }
-}
+): void => requireInput(NAME, path, value, expected, ok);
 
 function ruptureOf(rupture: RuptureContext): Omit<Cb14Scenario, 'rrupKm' | 'rjbKm' | 'rxKm'> {
   requireNumber('magnitude', rupture.magnitude, 'a finite moment magnitude', () => true);

@@ -45,7 +45,7 @@
  * How it is checked: test/engine/motion/cy14.test.ts reproduces the reference vectors
  * (../shared/reference/gmm/vectors/cy14.json, an independent implementation of the paper) within 1e-4.
  */
-import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
+import { UnsupportedMeasure } from '../errors.ts';
 import { toRadians } from '../units.ts';
 import { CY14_PGA, CY14_PGV, CY14_SA, type Cy14Row } from './cy14-coefficients.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
@@ -61,7 +61,7 @@ import type {
   SiteContext,
   ValidityRange,
 } from './types.ts';
-import { validityNotes } from './validity.ts';
+import { requireInput, validityNotes } from './validity.ts';
 
 const NAME = 'CY14';
 const SA_PERIODS_S: readonly number[] = Object.freeze(CY14_SA.map((r) => r.periodS));
@@ -240,19 +240,12 @@ export const CY14_VALIDITY: ValidityRange = Object.freeze({
   vs30: [180, 1500],
 } as const);
 
-function requireNumber(
+const requireNumber = (
   path: string,
   value: number,
   expected: string,
   ok: (v: number) => boolean,
-): void {
-  if (!Number.isFinite(value) || !ok(value)) {
-    throw new InvalidInput(
-      [{ path, message: `expected ${expected}, got ${value}` }],
-      `${NAME} input`,
-    );
-  }
-}
+): void => requireInput(NAME, path, value, expected, ok);
 
 function ruptureOf(input: GmmInput): Cy14Rupture {
   requireNumber('magnitude', input.magnitude, 'a finite moment magnitude', () => true);

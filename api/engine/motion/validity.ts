@@ -1,4 +1,21 @@
+import { InvalidInput } from '../errors.ts';
 import type { GmmInput, ValidityRange } from './types.ts';
+
+/** Throws InvalidInput naming `path` unless `value` is finite and `ok`; `expected` says what was wanted. */
+export function requireInput(
+  modelName: string,
+  path: string,
+  value: number,
+  expected: string,
+  ok: (v: number) => boolean,
+): void {
+  if (!Number.isFinite(value) || !ok(value)) {
+    throw new InvalidInput(
+      [{ path, message: `expected ${expected}, got ${value}` }],
+      `${modelName} input`,
+    );
+  }
+}
 
 /**
  * Notes for every input outside a model's stated validity range; empty when all are inside.

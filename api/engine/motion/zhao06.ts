@@ -29,7 +29,7 @@
  * predict() and the fast path call both. Checked against independent vectors in
  * test/engine/motion/zhao06.vectors.test.ts.
  */
-import { InvalidInput, UnsupportedMeasure } from '../errors.ts';
+import { UnsupportedMeasure } from '../errors.ts';
 import type { TectonicSetting } from '../model.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
@@ -55,7 +55,7 @@ import type {
   RuptureContext,
   ValidityRange,
 } from './types.ts';
-import { validityNotes } from './validity.ts';
+import { requireInput, validityNotes } from './validity.ts';
 import {
   ZHAO06_CONSTANTS as K,
   ZHAO06_PGA,
@@ -185,30 +185,16 @@ export const ZHAO06_VALIDITY: ValidityRange = Object.freeze({
 
 const SA_PERIODS_S: readonly number[] = Object.freeze(ZHAO06_SA.map((r) => r.periodS));
 
-function requireNumber(
-  name: string,
-  path: string,
-  value: number,
-  expected: string,
-  ok: (v: number) => boolean,
-): void {
-  if (!Number.isFinite(value) || !ok(value))
-    throw new InvalidInput(
-      [{ path, message: `expected ${expected}, got ${value}` }],
-      `${name} input`,
-    );
-}
-
 function checkRupture(name: string, rupture: RuptureContext): boolean {
-  requireNumber(name, 'magnitude', rupture.magnitude, 'a finite moment magnitude', () => true);
-  requireNumber(
+  requireInput(name, 'magnitude', rupture.magnitude, 'a finite moment magnitude', () => true);
+  requireInput(
     name,
     'hypoDepthKm',
     rupture.hypoDepthKm,
     'a finite focal depth of at least 0 km',
     (v) => v >= 0,
   );
-  requireNumber(name, 'rakeDeg', rupture.rakeDeg, 'a finite rake in degrees', () => true);
+  requireInput(name, 'rakeDeg', rupture.rakeDeg, 'a finite rake in degrees', () => true);
   return (
     insideRange(rupture.magnitude, ZHAO06_VALIDITY.magnitude) &&
     insideRange(rupture.hypoDepthKm, ZHAO06_VALIDITY.depthKm!)
@@ -237,14 +223,14 @@ export function createZhao06(magnitudeSquared: boolean): GroundMotionModel {
   function predict(input: GmmInput, measure: Measure): GmmPrediction {
     refusePgv(name, measure);
     checkRupture(name, input);
-    requireNumber(
+    requireInput(
       name,
       'rrupKm',
       input.rrupKm,
       'a finite rupture distance of at least 0 km',
       (v) => v >= 0,
     );
-    requireNumber(name, 'vs30', input.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
+    requireInput(name, 'vs30', input.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
     const notes = validityNotes(name, ZHAO06_VALIDITY, input, input.rrupKm);
     const siteClass = zhao06SiteClass(input.vs30);
     const predictRow = (row: Zhao06Row): GmmPrediction => {
@@ -303,7 +289,7 @@ export function createZhao06(magnitudeSquared: boolean): GroundMotionModel {
     return {
       distances: ['rrupKm'],
       predictPairs(site, pairs, out) {
-        requireNumber(name, 'vs30', site.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
+        requireInput(name, 'vs30', site.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
         plans.forEach((plan, i) =>
           predictRows(plan, pairs.count, out[i] as PairPredictions, scratch, (p, into) =>
             evaluate(p, site.vs30, pairs, into),
