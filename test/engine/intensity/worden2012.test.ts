@@ -122,12 +122,14 @@ describe('Worden et al. (2012) GMICE', () => {
     );
   });
 
-  it('round trips exactly away from the break (property)', () => {
+  // Away from both breaks: MMI 4.22 for PGA and 4.56 for PGV (Table 1), where the two segments
+  // differ by up to 0.01 MMI and the round trip is only that close.
+  it('round trips exactly away from the breaks (property)', () => {
     fc.assert(
       fc.property(
         fc.oneof(
           fc.double({ min: 1.2, max: 4.1, noNaN: true }),
-          fc.double({ min: 4.35, max: 9.9, noNaN: true }),
+          fc.double({ min: 4.7, max: 9.9, noNaN: true }),
         ),
         (mmi) => {
           expectClose(mmiFromPga(pgaForMmi(mmi)), mmi, 1e-9, 'PGA round trip');
