@@ -15,7 +15,7 @@ import {
 } from '../data/ranking.ts';
 import { feltData, studyCatalog } from '../data/study-catalog.ts';
 import { rankByTimeToAct, studyTsunami } from '../data/tsunami-data.ts';
-import { startScreening } from '../data/start-screening.ts';
+import { startScreening } from '../../api/operations/start-screening.ts';
 import { readRuns, readStudy, type StudyData } from '../data/study-data.ts';
 import { mapFrame } from '../maps/map-frame.ts';
 import { CommunityView } from '../views/community-view.tsx';
@@ -124,9 +124,9 @@ export function studyPages(app: Hono, kit: PageKit): void {
     const record = ctx.store.studies.get(id);
     if (!record) return notFound(c, kit.tr(c).text('error.studyNotFound', { id }));
     try {
-      const run = await startScreening(ctx, record);
-      if (!run) return notFound(c, kit.tr(c).text('error.studyNotFound', { id }));
-      return c.redirect(`/studies/${id}/runs/${run.id}`, 303);
+      const started = await startScreening(ctx, record);
+      if (!started) return notFound(c, kit.tr(c).text('error.studyNotFound', { id }));
+      return c.redirect(`/studies/${id}/runs/${started.run.id}`, 303);
     } catch (error) {
       if (error instanceof InvalidInput)
         return overview(c, {
