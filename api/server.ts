@@ -104,6 +104,7 @@ const context = {
   models: modelCatalog,
   toolVersion: TOOL_VERSION,
   workBudget: config.workBudget,
+  quickLimitS: config.quickLimitS,
   ...(queue ? { queue } : {}),
 };
 const app = createApp(context, {

@@ -15,6 +15,8 @@ export interface ServiceContext {
    * never queued behind a screening that may take minutes.
    */
   readonly quickPool: WorkerPool;
+  /** How long one request may keep the quick thread, s (quick-task.ts; TREMORA_QUICK_LIMIT_S). */
+  readonly quickLimitS?: number;
   readonly models: ModelCatalog;
   readonly toolVersion: string;
   /** Most work one screening may ask for (work-budget.ts). */

@@ -7,6 +7,7 @@ import { inputHash } from '../results/input-hash.ts';
 import type { MapRunRecord, StudyRecord } from '../store/index.ts';
 import type { MapRequest } from '../workers/messages.ts';
 import { mapRunsOf, type MapRuns } from './map-runs.ts';
+import { runQuickTask } from './quick-task.ts';
 import type { ServiceContext } from './service-context.ts';
 import { storedInputs, validateStudy } from './study-input.ts';
 
@@ -39,7 +40,7 @@ export async function checkMapWork(
     spacingKm: request.spacingKm,
     ...(request.bounds ? { bounds: request.bounds } : {}),
   });
-  const { ruptures } = await ctx.quickPool.run({ kind: 'measure', study }).result;
+  const { ruptures } = await runQuickTask(ctx, { kind: 'measure', study });
   const levels = MAP_LEVELS_READ[request.quantity.kind];
   const size = grid.count * ruptures * levels;
   if (size > ctx.workBudget)

@@ -14,10 +14,11 @@ import type { RunRecord, StudyRecord } from '../store/index.ts';
 export async function startScreening(
   ctx: ServiceContext,
   record: StudyRecord,
+  signal?: AbortSignal,
 ): Promise<{ readonly run: RunRecord; readonly work: StudyWork } | undefined> {
   const inputs = storedInputs(ctx.store, record);
   const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
-  const work = await measureStudy(ctx, study);
+  const work = await measureStudy(ctx, study, signal);
   // The study may have been deleted while it was measured.
   if (!ctx.store.studies.get(record.id)) return undefined;
   const run = ctx.store.runs.create({

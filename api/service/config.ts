@@ -1,3 +1,4 @@
+import { DEFAULT_QUICK_LIMIT_S } from '../operations/quick-task.ts';
 import { isIP } from 'node:net';
 import { resolve } from 'node:path';
 import { DEFAULT_DATABASE_PATH } from '../store/store.ts';
@@ -23,6 +24,8 @@ export interface ServiceConfig {
   readonly token?: string;
   readonly workers: number;
   readonly workBudget: number;
+  /** How long one request may keep the quick thread, s (TREMORA_QUICK_LIMIT_S). */
+  readonly quickLimitS: number;
   /** Screen the demo study in the background when a new database saves it (TREMORA_SCREEN_DEMO=0: no). */
   readonly screenDemo: boolean;
   /** Host names the service answers to (allowed-hosts.ts); undefined: any, the token guarding it. */
@@ -89,7 +92,7 @@ function readAllowedHosts(env: NodeJS.ProcessEnv, host: string): readonly string
 
 /**
  * The service's settings from the environment: PORT, HOST, TREMORA_DB, TREMORA_TOKEN,
- * TREMORA_WORKERS, TREMORA_WORK_BUDGET, TREMORA_HOSTS. Listening beyond loopback requires a
+ * TREMORA_WORKERS, TREMORA_WORK_BUDGET, TREMORA_QUICK_LIMIT_S, TREMORA_HOSTS. Listening beyond loopback requires a
  * token.
  */
 export function readConfig(
@@ -126,6 +129,7 @@ export function readConfig(
       Number.MAX_SAFE_INTEGER,
       DEFAULT_WORK_BUDGET,
     ),
+    quickLimitS: integerIn(env, 'TREMORA_QUICK_LIMIT_S', 1, 3_600, DEFAULT_QUICK_LIMIT_S),
     screenDemo: integerIn(env, 'TREMORA_SCREEN_DEMO', 0, 1, 1) === 1,
     ...(allowed === undefined ? {} : { allowedHosts: allowed }),
   };

@@ -1,3 +1,4 @@
+import { QuickTaskTooLong } from '../operations/quick-task.ts';
 import { randomUUID } from 'node:crypto';
 import type { Context, ErrorHandler, NotFoundHandler } from 'hono';
 import { HTTPException } from 'hono/http-exception';
@@ -81,6 +82,8 @@ export function errorHandler(
         422,
       );
     }
+    if (error instanceof QuickTaskTooLong)
+      return c.json(errorBody(error.message), 503, { 'Retry-After': '60' });
     if (error instanceof Cancelled) return c.json(errorBody(error.message), 409);
     if (error instanceof TremoraError) return c.json(errorBody(error.message), 422);
     if (error instanceof PoolClosed)

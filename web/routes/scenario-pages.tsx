@@ -1,3 +1,4 @@
+import { runQuickTask } from '../../api/operations/quick-task.ts';
 import type { Context, Hono } from 'hono';
 import { InvalidInput, StudyTooLarge, type InputIssue } from '../../api/engine/errors.ts';
 import type { Source, Study } from '../../api/engine/model.ts';
@@ -80,8 +81,11 @@ export function scenarioPages(app: Hono, kit: PageKit): void {
         if (!study.sources.some((s) => s.id === request.sourceId)) {
           issues = [{ path: 'sourceId', message: `unknown source "${request.sourceId}"` }];
         } else {
-          const { resultJson } = await ctx.quickPool.run({ kind: 'scenario', study, request })
-            .result;
+          const { resultJson } = await runQuickTask(
+            ctx,
+            { kind: 'scenario', study, request },
+            c.req.raw.signal,
+          );
           result = JSON.parse(resultJson) as ScenarioResult;
           tsunami = await scenarioTsunamiTimes(ctx, study, request);
         }

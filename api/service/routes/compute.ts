@@ -12,7 +12,7 @@ export function computeRoutes(ctx: ServiceContext): Hono {
   app.post('/validate', async (c) => {
     const { value } = await readJsonObject(c, 'a study document');
     const { study, warnings } = validateStudy(value, ctx.models);
-    const work = await measureStudy(ctx, study);
+    const work = await measureStudy(ctx, study, c.req.raw.signal);
     return c.json({
       valid: true,
       name: study.name,
@@ -33,7 +33,7 @@ export function computeRoutes(ctx: ServiceContext): Hono {
   app.post('/compute', async (c) => {
     const { value } = await readJsonObject(c, 'a study document');
     const { study } = validateStudy(value, ctx.models);
-    await measureStudy(ctx, study);
+    await measureStudy(ctx, study, c.req.raw.signal);
     const handle = ctx.runPool.run({
       kind: 'screen',
       study,

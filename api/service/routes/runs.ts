@@ -58,7 +58,7 @@ export function runRoutes(ctx: ServiceContext): Hono {
     const id = c.req.param('id');
     const record = studies.get(id);
     if (!record) throw notFound('study', id);
-    const started = await startScreening(ctx, record);
+    const started = await startScreening(ctx, record, c.req.raw.signal);
     if (!started) throw notFound('study', id);
     const { run, work } = started;
     return c.json(

@@ -5,6 +5,7 @@ import type { ScenarioRequest } from '../../engine/scenario/index.ts';
 import { notFound } from '../http-error.ts';
 import { readJsonObject } from '../request-body.ts';
 import { readScenarioRequest } from '../../operations/scenario-request.ts';
+import { runQuickTask } from '../../operations/quick-task.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
 import { storedInputs, validateStudy } from '../../operations/study-input.ts';
 
@@ -23,8 +24,8 @@ function collect<T>(issues: InputIssue[], work: () => T): T | undefined {
 export function scenarioRoutes(ctx: ServiceContext): Hono {
   const app = new Hono();
 
-  const answer = async (study: Study, request: ScenarioRequest) => {
-    const { resultJson } = await ctx.quickPool.run({ kind: 'scenario', study, request }).result;
+  const answer = async (study: Study, request: ScenarioRequest, signal: AbortSignal) => {
+    const { resultJson } = await runQuickTask(ctx, { kind: 'scenario', study, request }, signal);
     return resultJson;
   };
 
@@ -40,7 +41,7 @@ export function scenarioRoutes(ctx: ServiceContext): Hono {
     );
     const request = collect(issues, () => readScenarioRequest(fields));
     if (issues.length > 0 || !valid || !request) throw new InvalidInput(issues, 'invalid scenario');
-    return c.body(await answer(valid.study, request), 200, {
+    return c.body(await answer(valid.study, request, c.req.raw.signal), 200, {
       'Content-Type': 'application/json; charset=utf-8',
     });
   });
@@ -56,7 +57,7 @@ export function scenarioRoutes(ctx: ServiceContext): Hono {
     const request = readScenarioRequest(value);
     const inputs = storedInputs(ctx.store, record);
     const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
-    return c.body(await answer(study, request), 200, {
+    return c.body(await answer(study, request, c.req.raw.signal), 200, {
       'Content-Type': 'application/json; charset=utf-8',
     });
   });
