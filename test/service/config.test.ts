@@ -5,13 +5,14 @@ import { DEFAULT_WORK_BUDGET } from '../../api/operations/work-budget.ts';
 const TOKEN = 'test-token-0123456789abcdef';
 
 describe('readConfig', () => {
-  it('defaults to loopback, the default port, .tremora/tremora.db under the working directory, cores - 1 workers', () => {
+  it('defaults to loopback, the default port, .tremora/tremora.db under the working directory, cores - 1 workers, 60 s on the quick thread', () => {
     expect(readConfig({}, '/srv/tremora', 4)).toEqual({
       host: '127.0.0.1',
       port: DEFAULT_PORT,
       databasePath: '/srv/tremora/.tremora/tremora.db',
       workers: 3,
       workBudget: DEFAULT_WORK_BUDGET,
+      quickLimitS: 60,
       screenDemo: true,
       allowedHosts: ['localhost', '127.0.0.1', '[::1]'],
     });
