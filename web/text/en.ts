@@ -327,6 +327,7 @@ export const EN = {
   'editor.communities': 'Communities',
   'editor.communitiesCaption': 'The communities of this study',
   'editor.add': 'Add a community',
+  'editor.sourceChecks': 'Checks of the sources (warnings only: nothing is refused)',
   'editor.edit': 'Edit {name}',
   'editor.remove': 'Remove {name}',
   'editor.save': 'Save the community',

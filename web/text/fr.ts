@@ -49,6 +49,7 @@ export const FR: Readonly<Partial<Record<TextKey, string>>> = {
   'compass.NW': 'nord-ouest',
 
   'band.label': 'Niveau de dépistage',
+  'editor.sourceChecks': 'Vérification des sources (avertissements : rien n’est refusé)',
   'firmness.title': 'Ce niveau est-il sûr',
   'firmness.overview': 'Ce que chaque niveau a de sûr',
   'firmness.shares': 'Parmi les choix derrière ces chiffres, {shares}.',
