@@ -5,6 +5,7 @@ import type { NearestFault, StudyResult } from '../engine/results.ts';
 import { screenStudy } from '../engine/screen-study.ts';
 import { inputHash } from '../results/input-hash.ts';
 import { buildProvenance } from '../results/provenance.ts';
+import { robustnessLine } from '../results/band-robustness-words.ts';
 import { runCsv } from '../results/run-csv.ts';
 import { TOOL_VERSION } from '../results/tool-version.ts';
 import { choiceOption, sig } from './args.ts';
@@ -88,6 +89,14 @@ export async function screenVerb(args: readonly string[], io: Io): Promise<numbe
       `${c.name.padEnd(22)}${c.band.label.padEnd(20)}${(pga == null ? 'n/a' : `${pgaText(pga)} g`).padStart(12)}${(mmi?.roman ?? 'n/a').padStart(9)}` +
         `${chance(c.intensity.chanceOfReaching['50']?.VII).padStart(16)}  ${fault ? `${fault.name} ${faultWhere(fault)}` : ''}`,
     );
+  }
+  const robust = result.communities.filter((c) => c.bandRobustness);
+  if (robust.length > 0) {
+    const { combinations, sampled } = robust[0]!.bandRobustness!;
+    io.out(
+      `\nHow firm each band is: the share of the logic tree's weight in each band (${combinations} combinations${sampled ? `, ${sampled} drawn` : ''}) and the single choice that moves it most`,
+    );
+    for (const c of robust) io.out(`${c.name.padEnd(22)}${robustnessLine(c.bandRobustness!)}`);
   }
   for (const w of result.warnings) io.err(`note: ${w}`);
   io.out(

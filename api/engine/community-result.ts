@@ -6,7 +6,13 @@ import type { HazardMeasure, ValiditySummary } from './hazard/hazard-types.ts';
 import { intensityMeasureOf, siteIntensity } from './intensity/site-intensity.ts';
 import { INTENSITY_CONVERSIONS } from './intensity/worden2012.ts';
 import type { Community, Study } from './model.ts';
-import type { CommunityResult, Deaggregation, HazardCurve, ReturnPeriodStatus } from './results.ts';
+import type {
+  BandRobustness,
+  CommunityResult,
+  Deaggregation,
+  HazardCurve,
+  ReturnPeriodStatus,
+} from './results.ts';
 
 /** Each community's list of nearest faults holds this many. */
 export const NEAREST_FAULT_COUNT = 3;
@@ -22,6 +28,11 @@ export interface CommunityHazard {
   /** Curves of every measure in ScreeningMeasures.all, by key. */
   readonly curves: Readonly<Record<string, HazardCurve>>;
   readonly validity: readonly ValiditySummary[];
+  /** Fractile curves (by measure key, then fractile) and band robustness over the whole logic tree. */
+  readonly tree?: {
+    readonly fractiles: Readonly<Record<string, Readonly<Record<string, readonly number[]>>>>;
+    readonly robustness: BandRobustness;
+  };
   /** Deaggregation of the mean hazard of the first reported measure at `level`, or null when nothing exceeds it. */
   deaggregate(
     measure: HazardMeasure,
@@ -56,7 +67,10 @@ export function communityResult(
   );
 
   const curves: CommunityResult['curves'] = Object.fromEntries(
-    measures.reported.map((m) => [m.key, hazard.curves[m.key]!]),
+    measures.reported.map((m) => {
+      const fractiles = hazard.tree?.fractiles[m.key];
+      return [m.key, fractiles ? { ...hazard.curves[m.key]!, fractiles } : hazard.curves[m.key]!];
+    }),
   );
   const atReturnPeriod: Record<string, Record<string, number | null>> = {};
   const returnPeriodStatus: Record<string, Record<string, ReturnPeriodStatus>> = {};
@@ -119,6 +133,7 @@ export function communityResult(
     deaggregation,
     nearestFaults: nearestFaults(study.sources, frame, lonLat, NEAREST_FAULT_COUNT),
     band: intensity.band,
+    ...(hazard.tree ? { bandRobustness: hazard.tree.robustness } : {}),
     warnings,
   };
 }

@@ -34,6 +34,27 @@ export interface Community {
 
 export type Recurrence = GutenbergRichterRecurrence | MomentBalancedRecurrence | FixedRecurrence;
 
+/** One alternative of a source-model logic-tree branch point, with its weight. */
+export interface Alternative<T> {
+  readonly value: T;
+  readonly weight: number;
+}
+
+/**
+ * A source's logic tree: alternatives for some of its recurrence parameters, each list's
+ * weights summing to 1. A parameter listed here replaces the recurrence's single value in the
+ * tree; its variants are every combination of one alternative per parameter
+ * (recurrence/recurrence-variants.ts).
+ */
+export interface RecurrenceAlternatives {
+  readonly mMax?: readonly Alternative<number>[];
+  readonly bValue?: readonly Alternative<number>[];
+  readonly shape?: readonly Alternative<'gutenberg-richter' | 'characteristic'>[];
+  readonly slipRateMmYr?: readonly Alternative<number>[];
+  /** Annual rate of M >= mMin (Gutenberg–Richter given by `rate`) or of the fixed magnitude. */
+  readonly rate?: readonly Alternative<number>[];
+}
+
 /** log10 N(M >= m) = aValue - bValue m per year, truncated at mMax; or `rate` = N(M >= mMin). */
 export interface GutenbergRichterRecurrence {
   readonly type: 'gutenberg-richter';
@@ -42,6 +63,7 @@ export interface GutenbergRichterRecurrence {
   readonly mMax: number;
   readonly aValue?: number;
   readonly rate?: number;
+  readonly alternatives?: RecurrenceAlternatives;
 }
 
 export interface MomentBalancedRecurrence {
@@ -52,12 +74,14 @@ export interface MomentBalancedRecurrence {
   readonly mMax: number;
   readonly shape: 'gutenberg-richter' | 'characteristic';
   readonly shearModulusPa: number;
+  readonly alternatives?: RecurrenceAlternatives;
 }
 
 export interface FixedRecurrence {
   readonly type: 'fixed';
   readonly magnitude: number;
   readonly rate: number;
+  readonly alternatives?: RecurrenceAlternatives;
 }
 
 interface SourceCommon {
@@ -121,6 +145,8 @@ export interface Settings {
   readonly zoneCellKm: number;
   /** Which Worden et al. (2012) relation intensity comes from: 'PGA' (when absent) or 'PGV'. */
   readonly intensityMeasure?: 'PGA' | 'PGV';
+  /** Fractiles of the hazard curves over the logic tree, in (0, 1); 0.16, 0.5, 0.84 when absent. */
+  readonly fractiles?: readonly number[];
 }
 
 export interface Study {

@@ -9,6 +9,11 @@ export interface HazardCurve {
   readonly annualRate: readonly number[];
   /** Per-branch curves (one per combination of the settings' branches present), for the spread. */
   readonly branches?: readonly BranchCurve[];
+  /**
+   * Fractile curves over the whole logic tree (source alternatives × ground-motion branches),
+   * level by level, keyed by the fractile as written in the settings ("0.16", "0.5", "0.84").
+   */
+  readonly fractiles?: Readonly<Record<string, readonly number[]>>;
 }
 
 export interface BranchCurve {
@@ -89,6 +94,43 @@ export interface ScreeningBand {
   readonly mmi475: number | null;
 }
 
+/** One alternative of a logic-tree choice, with the band the mean hazard would give if it were the only one. */
+export interface HingeAlternative {
+  /** The alternative's value ("7.2", "characteristic") or, for ground motion, the model. */
+  readonly value: string;
+  readonly weight: number;
+  /** 475-year MMI of the mean hazard with this alternative alone (the band's MMI; null below the curve). */
+  readonly mmi475: number | null;
+  readonly bandId: string;
+}
+
+/** One choice of the logic tree and how far switching it alone moves the 475-year intensity. */
+export interface BandHinge {
+  /** "groundMotion", or the recurrence parameter: mMax, bValue, shape, slipRateMmYr, rate. */
+  readonly choice: string;
+  readonly setting: string;
+  /** The source whose parameter it is; absent for a setting's ground-motion models. */
+  readonly sourceId?: string;
+  readonly sourceName?: string;
+  /** Largest less smallest 475-year MMI over the alternatives. */
+  readonly mmiShift: number;
+  /** Whether the alternatives give more than one band. */
+  readonly changesBand: boolean;
+  readonly alternatives: readonly HingeAlternative[];
+}
+
+/** How firmly the logic tree puts a community in its band. */
+export interface BandRobustness {
+  /** Share of the logic tree's weight in each band, by band id (every band listed). */
+  readonly bandShares: Readonly<Record<string, number>>;
+  /** Combinations of the whole tree (source alternatives × ground-motion branches). */
+  readonly combinations: number;
+  /** How many combinations were drawn when the tree was too large to list (null: listed exactly). */
+  readonly sampled: number | null;
+  /** The choices that move the 475-year intensity most, largest first (band changes first). */
+  readonly hinges: readonly BandHinge[];
+}
+
 export interface CommunityResult {
   readonly communityId: string;
   readonly name: string;
@@ -105,6 +147,8 @@ export interface CommunityResult {
   readonly deaggregation: Readonly<Record<string, Deaggregation>>;
   readonly nearestFaults: readonly NearestFault[];
   readonly band: ScreeningBand;
+  /** Absent in results saved before the logic tree was summarised. */
+  readonly bandRobustness?: BandRobustness;
   readonly warnings: readonly string[];
 }
 

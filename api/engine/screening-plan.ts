@@ -7,7 +7,11 @@ import { levelsFor } from './hazard/hazard-levels.ts';
 import type { RuptureTable } from './hazard/rupture-table.ts';
 import type { HazardBranch, HazardMeasure } from './hazard/hazard-types.ts';
 import { studyRuptureTable } from './hazard/study-rupture-table.ts';
+import { DEFAULT_FRACTILES } from './hazard/fractiles.ts';
+import { sourceTree } from './hazard/source-tree.ts';
+import { treeSummary } from './hazard/tree-summary.ts';
 import { INTENSITY_MEASURE, intensityMeasureOf } from './intensity/site-intensity.ts';
+import { INTENSITY_CONVERSIONS } from './intensity/worden2012.ts';
 import { TECTONIC_SETTINGS } from './model.ts';
 import type { Community, Study, TectonicSetting } from './model.ts';
 import type { ModelCatalog } from './motion/catalog.ts';
@@ -73,12 +77,22 @@ export function planScreening(study: Study, options: ScreeningPlanOptions = {}):
   }
   // Built when the first community asks: a thread that only hands communities to others needs none.
   let fast: FastHazard | undefined;
+  let tree: ReturnType<typeof sourceTree> | undefined;
+  const intensityKey = intensityMeasureOf(settings);
+  const intensityIndex = measures.all.findIndex((m) => m.key === intensityKey);
+  const treeBranches = Object.fromEntries(
+    Object.entries(branches).map(([setting, list]) => [
+      setting,
+      list.map((b) => ({ model: b.model.name, weight: b.weight })),
+    ]),
+  );
   return {
     ...setup,
     frame,
     ruptureCount: table.count,
     table,
     hazardAt(community, afterBranch) {
+      tree ??= sourceTree(study, table, frame);
       fast ??= createFastHazard({
         table,
         branches,
@@ -86,6 +100,7 @@ export function planScreening(study: Study, options: ScreeningPlanOptions = {}):
         truncationSigma: settings.truncationSigma,
         maxDistanceKm: settings.maxDistanceKm,
         keepFirstMeasure: true,
+        sourceTree: tree,
       });
       const site = { vs30: community.vs30, vs30Measured: community.vs30Basis === 'measured' };
       const hazard = fastSiteHazard(
@@ -93,8 +108,24 @@ export function planScreening(study: Study, options: ScreeningPlanOptions = {}):
         { point: frame.toLocal([community.lon, community.lat]), site },
         afterBranch,
       );
+      const summary = treeSummary({
+        nodes: tree,
+        branches: treeBranches,
+        curves: hazard.treeCurves!,
+        levelCounts: measures.all.map((m) => m.levels.length),
+        fractiles: settings.fractiles ?? DEFAULT_FRACTILES,
+        intensity: {
+          index: intensityIndex,
+          levels: measures.all[intensityIndex]!.levels,
+          conversion: INTENSITY_CONVERSIONS[intensityKey],
+        },
+      });
       return {
         curves: hazard.curves,
+        tree: {
+          fractiles: Object.fromEntries(measures.all.map((m, i) => [m.key, summary.fractiles[i]!])),
+          robustness: summary.robustness,
+        },
         validity: hazard.validity,
         deaggregate: (measure, level, returnPeriodYears) =>
           fastDeaggregate({

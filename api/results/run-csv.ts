@@ -1,7 +1,9 @@
 import Papa from 'papaparse';
 import type { Study } from '../engine/model.ts';
 import { measureUnit, parseMeasure } from '../engine/motion/measure.ts';
+import { SCREENING_BANDS } from '../engine/intensity/screening-band.ts';
 import type { CommunityResult, StudyResult } from '../engine/results.ts';
+import { hingeAlternativesText, hingeSubject } from './band-robustness-words.ts';
 
 const INTENSITIES = ['VI', 'VII', 'VIII'] as const;
 
@@ -15,7 +17,9 @@ function columns(study: Study): string[] {
   }
   for (const years of horizonsYears)
     for (const roman of INTENSITIES) out.push(`chance_MMI_${roman}_${years}yr`);
-  out.push('nearestFault', 'nearestFault_km', 'warnings');
+  out.push('nearestFault', 'nearestFault_km');
+  for (const band of SCREENING_BANDS) out.push(`bandShare_${band.id}`);
+  out.push('bandHinge', 'bandHinge_mmiShift', 'bandHinge_alternatives', 'warnings');
   return out;
 }
 
@@ -41,7 +45,16 @@ function row(study: Study, community: CommunityResult): unknown[] {
       cells.push(community.intensity.chanceOfReaching[String(years)]?.[roman] ?? '');
   }
   const nearest = community.nearestFaults[0];
-  cells.push(nearest?.sourceId ?? '', nearest?.distanceKm ?? '', community.warnings.join(' | '));
+  cells.push(nearest?.sourceId ?? '', nearest?.distanceKm ?? '');
+  const robustness = community.bandRobustness;
+  for (const band of SCREENING_BANDS) cells.push(robustness?.bandShares[band.id] ?? '');
+  const hinge = robustness?.hinges[0];
+  cells.push(
+    hinge ? hingeSubject(hinge) : '',
+    hinge?.mmiShift ?? '',
+    hinge ? hingeAlternativesText(hinge) : '',
+    community.warnings.join(' | '),
+  );
   return cells;
 }
 
@@ -55,7 +68,7 @@ const FORMULA_START = /^[=+\-@\t\r]/;
 /**
  * A run's results as CSV, one row per community: the levels at each return period (g; PGV
  * cm/s), the intensity there, the chance of reaching MMI VI–VIII in each horizon, the nearest
- * fault. Empty cells where the value is unknown (a level beyond the computed curve). Text
+ * fault, the share of the logic tree's weight in each band and the choice that moves it most. Empty cells where the value is unknown (a level beyond the computed curve). Text
  * cells starting with = + - @, tab or carriage return get a leading ' so a spreadsheet does not
  * run them as formulas (OWASP, "CSV Injection"; from memory).
  */

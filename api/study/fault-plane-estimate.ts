@@ -8,11 +8,19 @@ import {
 import type { FaultSource, Recurrence, Settings } from '../engine/model.ts';
 import { magnitudeEdges } from '../engine/recurrence/magnitude-bins.ts';
 
-/** Bin-centre magnitudes of a recurrence, as recurrence/magnitude-bins.ts makes them. */
+/**
+ * Bin-centre magnitudes of a recurrence, as recurrence/magnitude-bins.ts makes them; over a
+ * logic tree, those of every mMax alternative (tree-magnitude-bins.ts takes their union).
+ */
 function binMagnitudes(recurrence: Recurrence, stepM: number): number[] {
   if (recurrence.type === 'fixed') return [recurrence.magnitude];
-  const edges = magnitudeEdges(recurrence.mMin, recurrence.mMax, stepM);
-  return edges.slice(1).map((hi, i) => ((edges[i] as number) + hi) / 2);
+  const maxima = recurrence.alternatives?.mMax?.map((a) => a.value) ?? [recurrence.mMax];
+  const centres = new Set<number>();
+  for (const mMax of maxima) {
+    const edges = magnitudeEdges(recurrence.mMin, mMax, stepM);
+    edges.slice(1).forEach((hi, i) => centres.add(Math.round(((edges[i] as number) + hi) * 5e5)));
+  }
+  return [...centres].sort((a, b) => a - b).map((k) => k / 1e6);
 }
 
 /** First index whose value exceeds `x` in increasing `values` (binary search). */

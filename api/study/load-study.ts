@@ -1,3 +1,4 @@
+import { sourceSanity } from '../engine/sanity/source-sanity.ts';
 import type { InputIssue } from '../engine/errors.ts';
 import type { Community, LonLat, Study, TectonicSetting } from '../engine/model.ts';
 import type { ModelCatalog } from '../engine/motion/catalog.ts';
@@ -104,6 +105,11 @@ export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
     ...(outline ? { outline } : {}),
     ...(terrain ? { terrain } : {}),
   };
+  for (const w of sourceSanity(study))
+    issues.warn(
+      ['sources', 'features', w.sourceIndex, 'properties', ...w.field.split('.')],
+      w.message,
+    );
   return { ok: true, study, warnings: issues.warnings };
 }
 

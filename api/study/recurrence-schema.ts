@@ -3,6 +3,7 @@ import type { Recurrence } from '../engine/model.ts';
 import { describeValue, numberIn, oneOf } from './fields.ts';
 import type { IssueList } from './issues.ts';
 import { CHARACTERISTIC_BOX_WIDTH } from '../engine/recurrence/characteristic.ts';
+import { readAlternatives } from './alternatives-schema.ts';
 
 /** Moment magnitude bounds accepted anywhere in a study. */
 const MAGNITUDE = { min: 0, max: 10 } as const;
@@ -36,10 +37,11 @@ const fixedSchema = z.object({
   rate: numberIn({ min: 0, minOpen: true, max: 1e6, unit: 'per year' }),
 });
 
+/** `alternatives` (the source's logic tree) is read by alternatives-schema.ts. */
 const KEYS: Record<(typeof RECURRENCE_TYPES)[number], readonly string[]> = {
-  'gutenberg-richter': Object.keys(grSchema.shape),
-  'moment-balanced': Object.keys(momentSchema.shape),
-  fixed: Object.keys(fixedSchema.shape),
+  'gutenberg-richter': [...Object.keys(grSchema.shape), 'alternatives'],
+  'moment-balanced': [...Object.keys(momentSchema.shape), 'alternatives'],
+  fixed: [...Object.keys(fixedSchema.shape), 'alternatives'],
 };
 
 /** Shear modulus when a moment-balanced source gives none, Pa (DESIGN.md section 3). */
@@ -50,6 +52,21 @@ export const DEFAULT_SHEAR_MODULUS_PA = 3.0e10;
  * which moment balancing needs.
  */
 export function readRecurrence(
+  raw: unknown,
+  isFault: boolean,
+  issues: IssueList,
+  path: readonly PropertyKey[],
+  sourceId = '?',
+): Recurrence | undefined {
+  const single = readSingleRecurrence(raw, isFault, issues, path);
+  const given = (raw as { alternatives?: unknown } | null)?.alternatives;
+  if (!single || given === undefined) return single;
+  const alternatives = readAlternatives(given, single, sourceId, issues, path);
+  return alternatives ? { ...single, alternatives } : undefined;
+}
+
+/** One recurrence without its alternatives. */
+function readSingleRecurrence(
   raw: unknown,
   isFault: boolean,
   issues: IssueList,

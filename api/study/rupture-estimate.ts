@@ -20,10 +20,17 @@ export const MAX_RUPTURES = 1_000_000;
  */
 export const MAX_RUPTURE_PLANES = 2_000_000;
 
-/** Magnitude bins of a recurrence at `stepM` (recurrence/magnitude-bins.ts makes at most this many). */
+/**
+ * Magnitude bins of a recurrence at `stepM` (recurrence/magnitude-bins.ts makes at most this
+ * many); over a logic tree, the sum over its mMax alternatives, at least the union's count.
+ */
 function binCount(recurrence: Recurrence, stepM: number): number {
   if (recurrence.type === 'fixed') return 1;
-  return Math.max(1, Math.ceil((recurrence.mMax - recurrence.mMin) / stepM - 1e-6));
+  const maxima = new Set(recurrence.alternatives?.mMax?.map((a) => a.value) ?? [recurrence.mMax]);
+  let count = 0;
+  for (const mMax of maxima)
+    count += Math.max(1, Math.ceil((mMax - recurrence.mMin) / stepM - 1e-6));
+  return count;
 }
 
 /**

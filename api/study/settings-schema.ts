@@ -52,6 +52,12 @@ const settingsSchema = z.object({
         `expected "PGA" or "PGV" (the Worden et al. 2012 relation intensity is read from), got ${describeValue(i.input)}`,
     })
     .optional(),
+  fractiles: listOf(
+    numberIn({ min: 0, max: 1, minOpen: true, maxOpen: true }),
+    1,
+    9,
+    'fractiles (each in (0, 1))',
+  ).optional(),
 });
 
 export const SETTINGS_KEYS = Object.keys(settingsSchema.shape);
@@ -115,6 +121,7 @@ export function readSettings(
         ruptureSpacingKm: parsed.ruptureSpacingKm ?? DEFAULT_SETTINGS.ruptureSpacingKm,
         zoneCellKm: parsed.zoneCellKm ?? DEFAULT_SETTINGS.zoneCellKm,
         ...(parsed.intensityMeasure ? { intensityMeasure: parsed.intensityMeasure } : {}),
+        ...(parsed.fractiles ? { fractiles: sortedUnique(parsed.fractiles) } : {}),
       }
     : undefined;
 }

@@ -101,6 +101,7 @@ export function readSource(
     isFault,
     issues,
     [...propsPath, 'recurrence'],
+    common?.id,
   );
   const shape = geometry
     ? issues.parse(isFault ? faultSchema : pointSchema, props, propsPath)

@@ -1,6 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { frameForStudy } from '../../api/engine/geometry/projection.ts';
 import { magnitudeBins } from '../../api/engine/recurrence/magnitude-bins.ts';
+import { treeMagnitudeBins } from '../../api/engine/recurrence/tree-magnitude-bins.ts';
 import { placeRuptures, prepareSource } from '../../api/engine/ruptures/placement.ts';
 import { modelCatalog } from '../../api/engine/motion/registry.ts';
 import type { FaultSource } from '../../api/engine/model.ts';
@@ -68,6 +69,31 @@ describe('faultPlaneCount', () => {
       expect(Math.abs(estimated - built)).toBeLessThanOrEqual(Math.ceil(built * 0.01));
     });
   }
+
+  test('over a logic tree, counts the planes of every mMax alternative (the union of their bins the engine builds)', () => {
+    const raw = studyWithTrace([
+      [-140.5, -47.6],
+      [-140.5, -47.2],
+    ]);
+    raw.sources.features[0].properties.recurrence.alternatives = {
+      mMax: [
+        { value: 7.2, weight: 0.5 },
+        { value: 7.65, weight: 0.5 },
+      ],
+    };
+    const loaded = loadStudy(raw, { models: modelCatalog });
+    if (!loaded.ok) throw new Error(JSON.stringify(loaded.issues));
+    const { study } = loaded;
+    const fault = study.sources[0] as FaultSource;
+    const prepared = prepareSource(fault, 0, frameForStudy(study), study.settings);
+    let built = 0;
+    for (const magnitude of treeMagnitudeBins(fault.recurrence, study.settings).magnitudes) {
+      for (const rupture of placeRuptures(prepared, magnitude))
+        built += rupture.surface.kind === 'planes' ? rupture.surface.planes.length : 1;
+    }
+    const estimated = faultPlaneCount(fault, study.settings);
+    expect(Math.abs(estimated - built)).toBeLessThanOrEqual(Math.ceil(built * 0.01));
+  });
 
   test(`a trace of 1,000 zig-zag vertices is refused before any rupture is built, naming the limit of ${MAX_RUPTURE_PLANES}`, () => {
     // Large ruptures (up to M 8, a few hundred km) each cover hundreds of the 1.4 km segments;

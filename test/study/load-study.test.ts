@@ -48,7 +48,12 @@ describe('loadStudy: a valid study', () => {
       magnitudeStep: 0.1,
     });
     expect(study.groundMotion.intraslab).toEqual([{ model: 'SUBDUCTION-A', weight: 1 }]);
-    expect(result.warnings.map((w) => w.path)).toEqual(['groundMotion.intraslab']);
+    // The fixture's background zone repeats its faults' M 5–6.5: warned of, not refused (source-sanity.ts).
+    expect(result.warnings.map((w) => w.path)).toEqual([
+      'groundMotion.intraslab',
+      'sources.features[2].properties.recurrence.mMax',
+      'sources.features[2].properties.recurrence.mMax',
+    ]);
   });
 
   it('derives kinds, mechanisms and the right-hand-rule dip direction', () => {

@@ -42,6 +42,14 @@ function expectNoInlineCode(html: string): void {
 }
 
 describe('pages', () => {
+  test("the editor lists the sources' sanity warnings of the demo study (its interface slips about 1.3 mm/yr)", async () => {
+    const html = await (await get(`/studies/${demoId}/edit`)).text();
+    expect(html).toContain('id="source-checks-heading"');
+    expect(html).toContain(
+      'source &quot;orle-interface&quot;: its rates imply a slip rate of 1.27 mm/yr',
+    );
+  });
+
   test('the footer says the data are invented on the demo study only', async () => {
     const demoNote = translator('en').t('footer.demo');
     expect(await (await get(`/studies/${demoId}`)).text()).toContain(demoNote);
@@ -87,6 +95,10 @@ describe('pages', () => {
     expect(html).toContain('id="tsunami-title"');
     expect(html).toContain(translator('en').t('caution.text'));
     expect(html).toContain(results.provenance.inputHash.slice(0, 12));
+    // How firm the band is, in words, on the community page and the overview.
+    expect(html).toContain('class="band-firmness"');
+    expect(html).toContain('Of the weight of the choices behind these numbers,');
+    expect(overview).toContain('<ul class="band-firmness">');
 
     const handout = await get(`/studies/${smallId}/communities/test-cove/handout`);
     expect(handout.status).toBe(200);

@@ -63,6 +63,26 @@ export const EN = {
   'band.rule':
     'The band comes from the shaking with a 1 in 10 chance over 50 years: Refer first at MMI VIII or more, Refer soon at VII, Prepare and inform at VI, Inform below VI.',
 
+  'firmness.title': 'How firm is this band',
+  'firmness.overview': 'How firm each band is',
+  'firmness.shares': 'Of the weight of the choices behind these numbers, {shares}.',
+  'firmness.share': '{percent} gives {band}',
+  'firmness.hinge': 'The band hinges most on {subject}: {alternatives}.',
+  'firmness.steady':
+    'No single choice moves it to another band. {subject} moves it most: {alternatives}.',
+  'firmness.alternative': 'with {value}, {band}',
+  'firmness.subject.source': "{source}'s {choice}",
+  'firmness.subject.setting': 'the {setting} {choice}',
+  'firmness.choice.groundMotion': 'ground-motion model',
+  'firmness.choice.mMax': 'largest magnitude',
+  'firmness.choice.bValue': 'b-value',
+  'firmness.choice.shape': 'magnitude–frequency shape',
+  'firmness.choice.slipRateMmYr': 'slip rate',
+  'firmness.choice.rate': 'earthquake rate',
+  'firmness.setting.crustal': 'shallow-crust',
+  'firmness.setting.interface': 'plate-interface',
+  'firmness.setting.intraslab': 'deep-slab',
+
   'mmi.label': 'MMI {roman}',
   'mmi.almost': 'MMI {roman}, almost {next}',
   'mmi.explain':
@@ -307,6 +327,7 @@ export const EN = {
   'editor.communities': 'Communities',
   'editor.communitiesCaption': 'The communities of this study',
   'editor.add': 'Add a community',
+  'editor.sourceChecks': 'Checks of the sources (warnings only: nothing is refused)',
   'editor.edit': 'Edit {name}',
   'editor.remove': 'Remove {name}',
   'editor.save': 'Save the community',

@@ -5,6 +5,7 @@ import { INTENSITY_MEASURE } from '../../api/engine/intensity/site-intensity.ts'
 import type { ScreeningBandId } from '../../api/engine/intensity/screening-band.ts';
 import { HASH_PREFIX_LENGTH, modelsLine, type CommunityPageData } from '../data/community-data.ts';
 import { BandSwatch } from '../layout/band-swatch.tsx';
+import { BandFirmness } from './band-firmness.tsx';
 import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 import type { MapFrame } from '../maps/map-frame.ts';
 import { StudyMap } from '../maps/study-map.tsx';
@@ -174,6 +175,7 @@ export function CommunityView(props: CommunityViewProps) {
         {tr.text('band.label')}: <BandSwatch tr={tr} bandId={bandId} /> —{' '}
         {tr.text(`band.${bandId}.meaning` as TextKey)}
       </p>
+      <BandFirmness tr={tr} robustness={result.bandRobustness} />
       <p class="facts">
         {community.population !== undefined && (
           <>{tr.text('community.people', { people: tr.number(community.population) })} </>

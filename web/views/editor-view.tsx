@@ -1,4 +1,5 @@
 import type { Child } from 'hono/jsx';
+import { sourceSanity } from '../../api/engine/sanity/source-sanity.ts';
 import type { InputIssue } from '../../api/engine/errors.ts';
 import type { Study } from '../../api/engine/model.ts';
 import type { ColumnPick } from '../data/community-import.ts';
@@ -15,6 +16,22 @@ export interface UploadProblem {
   readonly text?: string;
   /** Columns to pick, when a communities file's required columns were not recognised. */
   readonly pick?: ColumnPick;
+}
+
+/** Warnings about the sources (engine/sanity/source-sanity.ts): shown, never a reason to refuse. */
+function SourceChecks(props: { tr: Translator; study: Study }) {
+  const warnings = sourceSanity(props.study);
+  if (warnings.length === 0) return null;
+  return (
+    <section class="source-checks" aria-labelledby="source-checks-heading">
+      <h2 id="source-checks-heading">{props.tr.text('editor.sourceChecks')}</h2>
+      <ul class="warnings">
+        {warnings.map((w) => (
+          <li>{props.tr.english(w.message)}</li>
+        ))}
+      </ul>
+    </section>
+  );
 }
 
 export interface EditorViewProps {
@@ -111,6 +128,7 @@ export function EditorView(props: EditorViewProps) {
         issues={props.notice ?? []}
         describe={(i) => describeIssue(tr, i)}
       />
+      <SourceChecks tr={tr} study={study} />
 
       <section aria-labelledby="communities-heading">
         <h2 id="communities-heading">{tr.text('editor.communities')}</h2>

@@ -13,6 +13,7 @@ import {
 } from '../data/ranking.ts';
 import type { RunState } from '../data/study-data.ts';
 import { BandSwatch } from '../layout/band-swatch.tsx';
+import { bandFirmnessText } from './band-firmness.tsx';
 import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 import { HazardLayer, HazardMapLegend, layerClasses } from '../maps/hazard-layer.tsx';
 import type { MapFrame } from '../maps/map-frame.ts';
@@ -238,6 +239,21 @@ export function OverviewView(props: OverviewProps) {
               </tbody>
             </table>
             <p class="band-rule">{tr.text('band.rule')}</p>
+            {rows.some((r) => r.result.bandRobustness) && (
+              <>
+                <h3>{tr.text('firmness.overview')}</h3>
+                <ul class="band-firmness">
+                  {rows.map(
+                    (r) =>
+                      r.result.bandRobustness && (
+                        <li data-community={r.communityId}>
+                          {r.name}: {bandFirmnessText(tr, r.result.bandRobustness)}
+                        </li>
+                      ),
+                  )}
+                </ul>
+              </>
+            )}
             {props.runs.screening && (
               <p>
                 {tr.text('overview.downloads')}:{' '}

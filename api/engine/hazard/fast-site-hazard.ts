@@ -26,6 +26,13 @@ import { ruptureContexts, settingRuptures, type RuptureTable } from './rupture-t
 import type { HazardBranch, HazardMeasure, ValiditySummary } from './hazard-types.ts';
 import { ruptureGeometry, type RuptureGeometry } from './rupture-geometry.ts';
 import { createPairBuffer, siteDistances, type PairBuffer } from './site-distances.ts';
+import type { SourceTreeNode } from './source-tree.ts';
+import {
+  accumulateTreeNodes,
+  createTreeSettingWork,
+  type NodeCurves,
+  type TreeSettingWork,
+} from './tree-curves.ts';
 
 /**
  * The hazard integral at one site (classical PSHA over each setting's ruptures within the
@@ -48,6 +55,8 @@ export interface FastHazardOptions {
   /** Per-branch curves besides the mean (true by default; a map needs only the mean). */
   readonly branchCurves?: boolean;
   readonly maxBranchCombinations?: number;
+  /** The source-model logic tree (source-tree.ts): each node's curves are kept per branch and variant. */
+  readonly sourceTree?: readonly SourceTreeNode[];
 }
 
 /** One branch of one setting on the fast path: its model's predictor of every measure, and curve sums, one per measure. */
@@ -70,6 +79,7 @@ export interface SettingWork {
   readonly pairs: PairBuffer;
   /** One per measure. */
   readonly predictions: readonly PairPredictions[];
+  readonly tree?: TreeSettingWork;
 }
 
 export interface FastHazard {
@@ -106,6 +116,16 @@ export function createFastHazard(options: FastHazardOptions): FastHazard {
       distances,
       pairs: createPairBuffer(ruptures.length),
       predictions: options.measures.map(() => createPairPredictions(ruptures.length)),
+      ...(options.sourceTree
+        ? {
+            tree: createTreeSettingWork(
+              options.sourceTree,
+              setting,
+              ruptures.length,
+              options.measures.map((m) => m.levels),
+            ),
+          }
+        : {}),
     });
   }
   return {
@@ -146,6 +166,8 @@ export interface FastSiteHazard {
   readonly validity: readonly ValiditySummary[];
   /** Filled when FastHazardOptions.keepFirstMeasure is set; branches in setting order, then in the study's order. */
   readonly firstMeasure: readonly BranchPredictions[];
+  /** With FastHazardOptions.sourceTree: treeCurves[measure][node] (node as in the tree). */
+  readonly treeCurves?: readonly (readonly NodeCurves[])[];
 }
 
 /** Hazard curves at one site; `afterBranch` is called after each branch (it may throw to stop). */
@@ -159,6 +181,9 @@ export function fastSiteHazard(
   const validity = new Map<string, { outside: number; evaluated: number; firstNote: string }>();
   const settingCurves: SettingBranchCurve[][] = measures.map(() => []);
   const firstMeasure: BranchPredictions[] = [];
+  const treeCurves: NodeCurves[][] | undefined = options.sourceTree
+    ? measures.map(() => [])
+    : undefined;
 
   for (const work of hazard.settings) {
     const { pairs, predictions } = work;
@@ -181,7 +206,7 @@ export function fastSiteHazard(
     }
     const rrupKm = options.keepFirstMeasure ? pairs.rrupKm.slice(0, count) : undefined;
 
-    for (const branch of work.branches) {
+    work.branches.forEach((branch, branchIndex) => {
       const summary = validity.get(branch.model.name) ?? {
         outside: 0,
         evaluated: 0,
@@ -231,16 +256,29 @@ export function fastSiteHazard(
             rrupKm,
           });
         }
+        const annualRate = curveRates(curve);
         settingCurves[i]!.push({
           setting: work.setting,
           model: branch.model.name,
           weight: branch.weight,
-          annualRate: curveRates(curve),
+          annualRate,
         });
+        if (work.tree && treeCurves)
+          accumulateTreeNodes(
+            work.tree,
+            i,
+            branchIndex,
+            annualRate,
+            exceedance,
+            pairs.rupture,
+            prediction,
+            count,
+            treeCurves[i]!,
+          );
       });
       validity.set(branch.model.name, summary);
       afterBranch?.();
-    }
+    });
   }
 
   const cap = options.maxBranchCombinations ?? MAX_BRANCH_COMBINATIONS;
@@ -264,6 +302,7 @@ export function fastSiteHazard(
       .filter(([, s]) => s.outside > 0)
       .map(([model, s]) => ({ model, ...s })),
     firstMeasure,
+    ...(treeCurves ? { treeCurves } : {}),
   };
 }
 

@@ -31,6 +31,25 @@ export const BAND_RETURN_PERIOD_YEARS = 475;
  */
 export const ROUNDING_HALF_MMI = 0.5;
 
+/**
+ * The 475-year MMI of a hazard curve (null below its lowest level) and the MMI its band is
+ * chosen by: the intensity at the highest level when the 475-year level is above the curve
+ * (a lower bound).
+ */
+export function bandIntensity(
+  levels: readonly number[],
+  annualRate: readonly number[],
+  conversion: IntensityConversion,
+): { mmi475: number | null; bandMmi: number | null; aboveCurve: boolean } {
+  const toMmi = (y: number): number =>
+    mmiFromMotion(y * conversion.toRelationUnits, conversion.gmice);
+  const at = levelAtReturnPeriod(levels, annualRate, BAND_RETURN_PERIOD_YEARS);
+  const mmi475 = at.level === null ? null : toMmi(at.level);
+  if (at.status !== 'above-highest-level') return { mmi475, bandMmi: mmi475, aboveCurve: false };
+  const highest = levels[levels.length - 1];
+  return { mmi475, bandMmi: highest === undefined ? null : toMmi(highest), aboveCurve: true };
+}
+
 export interface SiteIntensityOptions {
   /** The mean hazard curve of the conversion's measure, g (PGA) or cm/s (PGV). */
   readonly levels: readonly number[];
@@ -93,16 +112,11 @@ export function siteIntensity(options: SiteIntensityOptions): SiteIntensity {
     for (const { roman, rate } of thresholdRates) chances[roman] = poissonProbability(rate, years);
     chanceOfReaching[String(years)] = chances;
   }
-  const band475 = levelAtReturnPeriod(levels, annualRate, BAND_RETURN_PERIOD_YEARS);
-  const mmi475 = band475.level === null ? null : toMmi(band475.level);
-  let bandMmi = mmi475;
-  if (band475.status === 'above-highest-level') {
-    const highest = levels[levels.length - 1];
-    bandMmi = highest === undefined ? null : toMmi(highest);
+  const { mmi475, bandMmi, aboveCurve } = bandIntensity(levels, annualRate, conversion);
+  if (aboveCurve)
     warnings.push(
       `the 475-year ${measure} is above the highest computed level; the band is set from the intensity at that level, a lower bound`,
     );
-  }
   return {
     intensity: {
       atReturnPeriod,

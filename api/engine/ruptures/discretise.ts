@@ -1,7 +1,7 @@
 import { frameForStudy, type LocalFrame, type PointXY } from '../geometry/projection.ts';
 import { InvalidInput } from '../errors.ts';
 import type { Settings, Source, Study } from '../model.ts';
-import { magnitudeBins } from '../recurrence/magnitude-bins.ts';
+import { treeMagnitudeBins } from '../recurrence/tree-magnitude-bins.ts';
 import {
   placeRuptures,
   prepareSource,
@@ -71,7 +71,8 @@ export function visitSourceRuptures(
   inSource(sourceIndex, () => {
     const prepared: PreparedSource = prepareSource(source, sourceIndex, frame, settings, sites);
     const areaKm2 = prepared.kind === 'fault' ? prepared.surface.areaKm2 : undefined;
-    const bins = magnitudeBins(source.recurrence, settings, areaKm2);
+    // Over the source's logic tree, the weighted mean rate of each magnitude (exact for the mean hazard).
+    const bins = treeMagnitudeBins(source.recurrence, settings, areaKm2);
     for (let i = 0; i < bins.magnitudes.length; i++) {
       const binRate = bins.annualRates[i] as number;
       for (const placed of placeRuptures(prepared, bins.magnitudes[i] as number))

@@ -149,6 +149,13 @@ describe('a run of a saved study', () => {
       'chance_MMI_VIII_50yr',
       'nearestFault',
       'nearestFault_km',
+      'bandShare_refer-first',
+      'bandShare_refer-soon',
+      'bandShare_prepare',
+      'bandShare_inform',
+      'bandHinge',
+      'bandHinge_mmiShift',
+      'bandHinge_alternatives',
       'warnings',
     ]);
     const row = parsed.data[0]!;
@@ -163,6 +170,8 @@ describe('a run of a saved study', () => {
     });
     expect(row.PGA_475yr_g).toBe(String(community.atReturnPeriod['475']!.PGA ?? ''));
     expect(row.chance_MMI_VII_50yr).toBe(String(community.intensity.chanceOfReaching['50']!.VII));
+    const shares = community.bandRobustness!.bandShares;
+    expect(row['bandShare_refer-first']).toBe(String(shares['refer-first']));
   });
 
   it('exports GeoJSON: communities as points with their results and the provenance', async () => {
