@@ -69,10 +69,28 @@ interface SourceCommon {
   readonly recurrence: Recurrence;
 }
 
-/** A planar-by-segment fault surface from a LineString trace. */
+/**
+ * A surface given by its depth contours (a GeoJSON MultiLineString): lines in order down dip,
+ * each at one depth, all running the same way.
+ */
+export interface FaultContours {
+  readonly lines: readonly (readonly LonLat[])[];
+  /** One depth per line, km, increasing. */
+  readonly depthsKm: readonly number[];
+  /** Largest side of the mesh cells built between the contours, km. */
+  readonly meshSpacingKm: number;
+}
+
+/**
+ * A fault: planar by segment from a LineString trace, or, with `contours`, the mesh between
+ * its depth contours (geometry/contour-mesh.ts). A contoured fault's trace is its top contour,
+ * its depths those of its first and last contours and its dip their mean, for what only needs
+ * an outline (maps, the study's extent, size estimates).
+ */
 export interface FaultSource extends SourceCommon {
   readonly kind: 'fault';
   readonly trace: readonly LonLat[];
+  readonly contours?: FaultContours;
   readonly dipDeg: number;
   /** Azimuth (deg clockwise from north) the fault dips towards. */
   readonly dipDirectionDeg: number;

@@ -160,24 +160,23 @@ function faultContext(
   magnitude: number,
   p: FloatingRupture,
 ): RuptureContext {
-  const { source, surface } = prepared;
+  const { source } = prepared;
   return {
     magnitude,
     rakeDeg: source.rakeDeg,
     mechanism: source.mechanism,
     setting: source.setting,
-    dipDeg: surface.dipDeg,
+    dipDeg: p.dipDeg,
     ztorKm: p.ztorKm,
     widthKm: p.widthKm,
     hypoDepthKm: p.hypocentre.z,
   };
 }
 
-const faultSurfaceOf = (p: FloatingRupture): RuptureSurface => ({
-  kind: 'planes',
-  planes: p.planes,
-  hypocentre: p.hypocentre,
-});
+const faultSurfaceOf = (p: FloatingRupture): RuptureSurface =>
+  p.tracePlanes === p.planes.length
+    ? { kind: 'planes', planes: p.planes, hypocentre: p.hypocentre }
+    : { kind: 'planes', planes: p.planes, hypocentre: p.hypocentre, tracePlanes: p.tracePlanes };
 
 /** A rupture (without rate) of a prepared fault at one floating position. */
 export function faultRupture(
