@@ -9,7 +9,7 @@ import type { FaultSource, Recurrence, Settings } from '../engine/model.ts';
 import { magnitudeEdges } from '../engine/recurrence/magnitude-bins.ts';
 
 /** Bin-centre magnitudes of a recurrence, as recurrence/magnitude-bins.ts makes them. */
-function binMagnitudes(recurrence: Recurrence, stepM: number): number[] {
+export function binMagnitudes(recurrence: Recurrence, stepM: number): number[] {
   if (recurrence.type === 'fixed') return [recurrence.magnitude];
   const edges = magnitudeEdges(recurrence.mMin, recurrence.mMax, stepM);
   return edges.slice(1).map((hi, i) => ((edges[i] as number) + hi) / 2);
