@@ -1,6 +1,6 @@
 import type { AddressInfo } from 'node:net';
 import { modelCatalog } from './engine/motion/registry.ts';
-import { startScreening } from '../web/data/start-screening.ts';
+import { startScreening } from './operations/start-screening.ts';
 import { createPages } from '../web/pages.tsx';
 import { createApp } from './service/app.ts';
 import { answerClientError } from './service/client-error.ts';

@@ -32,21 +32,10 @@ export function createPages(ctx: ServiceContext, options: CreatePagesOptions = {
   staticFiles(app);
 
   app.get('/', (c) => {
-    const tr = kit.tr(c);
-    return kit.render(
-      c,
-      <HomeView
-        tr={tr}
-        path={kit.here(c)}
-        toolVersion={ctx.toolVersion}
-        studies={ctx.store.studies.list()}
-      />,
-    );
+    return kit.render(c, <HomeView page={kit.page(c)} studies={ctx.store.studies.list()} />);
   });
 
-  app.get('/limits', (c) =>
-    kit.render(c, <LimitsView tr={kit.tr(c)} path={kit.here(c)} toolVersion={ctx.toolVersion} />),
-  );
+  app.get('/limits', (c) => kit.render(c, <LimitsView page={kit.page(c)} />));
 
   // The language switch: a plain GET form, so it works without script; the choice is a cookie.
   app.get('/language', (c) => {
@@ -74,9 +63,7 @@ export function createPages(ctx: ServiceContext, options: CreatePagesOptions = {
     return kit.render(
       c,
       <MessageView
-        tr={tr}
-        path={kit.here(c)}
-        toolVersion={ctx.toolVersion}
+        page={kit.page(c)}
         title={tr.t('error.notFound')}
         text={tr.text('error.notFoundText')}
       />,

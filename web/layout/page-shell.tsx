@@ -5,14 +5,19 @@ import { Caution } from './caution.tsx';
 
 export type StudySection = 'overview' | 'scenario' | 'catalog' | 'edit';
 
-export interface PageShellProps {
+/** What every page needs from its request: the reader's language, where it is, and the tool's version. */
+export interface PageContext {
   readonly tr: Translator;
-  readonly title: string;
-  /** "en" when the title is English standing in for a missing translation (Translator.fallbackLang). */
-  readonly titleLang?: string | undefined;
   /** This page's path and query, where the language switch comes back to. */
   readonly path: string;
   readonly toolVersion: string;
+}
+
+export interface PageShellProps {
+  readonly page: PageContext;
+  readonly title: string;
+  /** "en" when the title is English standing in for a missing translation (Translator.fallbackLang). */
+  readonly titleLang?: string | undefined;
   readonly study?: { readonly id: string; readonly name: string };
   readonly section?: StudySection;
   /** Extra style sheets (the handout's print sheet). */
@@ -40,7 +45,8 @@ const STUDY_SECTIONS: readonly {
  * The one script (enhancements only) and the style sheets come from this service's origin.
  */
 export function PageShell(props: PageShellProps) {
-  const { tr, study } = props;
+  const { study } = props;
+  const { tr, path, toolVersion } = props.page;
   return (
     <html lang={tr.lang}>
       <head>
@@ -84,7 +90,7 @@ export function PageShell(props: PageShellProps) {
                 </option>
               ))}
             </select>
-            <input type="hidden" name="back" value={props.path} />
+            <input type="hidden" name="back" value={path} />
             <button type="submit">{tr.text('lang.change')}</button>
           </form>
         </header>
@@ -115,7 +121,7 @@ export function PageShell(props: PageShellProps) {
             <a href="/limits">{tr.text('caution.limitsLink')}</a>.
           </p>
           <p>
-            {tr.text('footer.version', { version: props.toolVersion })}
+            {tr.text('footer.version', { version: toolVersion })}
             {isDemoStudy(props.study) && <> {tr.text('footer.demo')}</>}
           </p>
         </footer>

@@ -3,9 +3,10 @@ import { line } from 'd3-shape';
 import type { FrequencyMagnitude } from '../../api/engine/catalog/frequency-magnitude.ts';
 import { DUSK, INK, MAP_COLOURS, PAPER } from '../style/palette.ts';
 import type { Translator } from '../text/translator.ts';
-import { Axis, logTicks, tickLabel } from './log-axis.tsx';
+import { logTicks, tickLabel } from './log-axis.tsx';
+import { PLOT_MARGIN, PlotFrame } from './plot-frame.tsx';
 
-const MARGIN = { top: 16, right: 24, bottom: 52, left: 78 } as const;
+const MARGIN = PLOT_MARGIN;
 
 /**
  * The frequency–magnitude distribution: annual rates at or above each magnitude (filled
@@ -42,41 +43,28 @@ export function FrequencyMagnitudePlot(props: {
         .y((d) => y(d.cumulativeAnnualRate))
         .digits(1)([...data.fittedLine])
     : null;
-  const titleId = `${props.idPrefix}-title`;
   return (
-    <svg
-      class="plot"
-      viewBox={`0 0 ${width} ${height}`}
+    <PlotFrame
       width={width}
       height={height}
-      role="img"
-      aria-labelledby={titleId}
+      idPrefix={props.idPrefix}
+      title={tr.t('catalog.plot')}
+      titleLang={tr.fallbackLang('catalog.plot')}
+      x={{
+        ticks: x.ticks(8),
+        position: x,
+        label: (v) => tr.number(v, 1),
+        title: tr.t('plot.magnitude'),
+        titleLang: tr.fallbackLang('plot.magnitude'),
+      }}
+      y={{
+        ticks: logTicks(y),
+        position: y,
+        label: (v) => tickLabel(v, tr.locale, logTicks(y)),
+        title: tr.t('plot.perYear'),
+        titleLang: tr.fallbackLang('plot.perYear'),
+      }}
     >
-      <title id={titleId} lang={tr.fallbackLang('catalog.plot')}>
-        {tr.t('catalog.plot')}
-      </title>
-      <Axis
-        orientation="bottom"
-        ticks={x.ticks(8)}
-        position={x}
-        label={(v) => tr.number(v, 1)}
-        across={[MARGIN.top, height - MARGIN.bottom]}
-        at={height - MARGIN.bottom}
-        title={tr.t('plot.magnitude')}
-        titleLang={tr.fallbackLang('plot.magnitude')}
-        titleAt={[(MARGIN.left + width - MARGIN.right) / 2, height - 10]}
-      />
-      <Axis
-        orientation="left"
-        ticks={logTicks(y)}
-        position={y}
-        label={(v) => tickLabel(v, tr.locale, logTicks(y))}
-        across={[MARGIN.left, width - MARGIN.right]}
-        at={MARGIN.left}
-        title={tr.t('plot.perYear')}
-        titleLang={tr.fallbackLang('plot.perYear')}
-        titleAt={[18, (MARGIN.top + height - MARGIN.bottom) / 2]}
-      />
       <line
         x1={x(props.mc)}
         x2={x(props.mc)}
@@ -120,15 +108,7 @@ export function FrequencyMagnitudePlot(props: {
             <circle cx={x(b.lowerEdge)} cy={y(b.cumulativeAnnualRate)} r={3.8} fill={DUSK[6]} />
           ))}
       </g>
-      <rect
-        x={MARGIN.left}
-        y={MARGIN.top}
-        width={width - MARGIN.left - MARGIN.right}
-        height={height - MARGIN.top - MARGIN.bottom}
-        fill="none"
-        stroke={MAP_COLOURS.axis}
-      />
-    </svg>
+    </PlotFrame>
   );
 }
 

@@ -3,7 +3,8 @@ import { line } from 'd3-shape';
 import type { HazardCurve } from '../../api/engine/results.ts';
 import { MAP_COLOURS, PAPER } from '../style/palette.ts';
 import type { Translator } from '../text/translator.ts';
-import { Axis, logTicks, tickLabel } from './log-axis.tsx';
+import { logTicks, tickLabel } from './log-axis.tsx';
+import { PLOT_MARGIN, PlotFrame } from './plot-frame.tsx';
 
 export interface HazardCurvePlotProps {
   readonly tr: Translator;
@@ -18,7 +19,7 @@ export interface HazardCurvePlotProps {
 
 /** Lowest rate drawn, per year: below one in a million years a screening says nothing useful. */
 const MIN_RATE = 1e-6;
-const MARGIN = { top: 16, right: 24, bottom: 52, left: 78 } as const;
+const MARGIN = PLOT_MARGIN;
 
 /**
  * The hazard curve on log–log axes (d3-scale, d3-shape): the mean curve dark, each logic-tree
@@ -51,45 +52,32 @@ export function HazardCurvePlot(props: HazardCurvePlotProps) {
     .digits(1);
   const pointsOf = (rates: readonly number[]) =>
     levels.map((l, i) => [l, rates[i] as number] as [number, number]).filter((d) => d[1] >= yLow);
-  const titleId = `${props.idPrefix}-title`;
-  const descId = `${props.idPrefix}-desc`;
   return (
-    <svg
-      class="plot"
-      viewBox={`0 0 ${width} ${height}`}
+    <PlotFrame
       width={width}
       height={height}
-      role="img"
-      aria-labelledby={`${titleId} ${descId}`}
+      idPrefix={props.idPrefix}
+      title={tr.t('community.curve')}
+      titleLang={tr.fallbackLang('community.curve')}
+      description={{
+        text: `${tr.t('plot.pga')}; ${tr.t('plot.annualRate')}.`,
+        lang: tr.fallbackLang('plot.pga'),
+      }}
+      x={{
+        ticks: logTicks(x),
+        position: x,
+        label: (v) => tickLabel(v, tr.locale, logTicks(x)),
+        title: tr.t('plot.pga'),
+        titleLang: tr.fallbackLang('plot.pga'),
+      }}
+      y={{
+        ticks: logTicks(y),
+        position: y,
+        label: (v) => tickLabel(v, tr.locale, logTicks(y)),
+        title: tr.t('plot.annualRate'),
+        titleLang: tr.fallbackLang('plot.annualRate'),
+      }}
     >
-      <title id={titleId} lang={tr.fallbackLang('community.curve')}>
-        {tr.t('community.curve')}
-      </title>
-      <desc id={descId} lang={tr.fallbackLang('plot.pga')}>
-        {`${tr.t('plot.pga')}; ${tr.t('plot.annualRate')}.`}
-      </desc>
-      <Axis
-        orientation="bottom"
-        ticks={logTicks(x)}
-        position={x}
-        label={(v) => tickLabel(v, tr.locale, logTicks(x))}
-        across={[MARGIN.top, height - MARGIN.bottom]}
-        at={height - MARGIN.bottom}
-        title={tr.t('plot.pga')}
-        titleLang={tr.fallbackLang('plot.pga')}
-        titleAt={[(MARGIN.left + width - MARGIN.right) / 2, height - 10]}
-      />
-      <Axis
-        orientation="left"
-        ticks={logTicks(y)}
-        position={y}
-        label={(v) => tickLabel(v, tr.locale, logTicks(y))}
-        across={[MARGIN.left, width - MARGIN.right]}
-        at={MARGIN.left}
-        title={tr.t('plot.annualRate')}
-        titleLang={tr.fallbackLang('plot.annualRate')}
-        titleAt={[18, (MARGIN.top + height - MARGIN.bottom) / 2]}
-      />
       <g class="branches">
         {(curve.branches ?? []).map((b) => (
           <path
@@ -163,15 +151,7 @@ export function HazardCurvePlot(props: HazardCurvePlotProps) {
           );
         })}
       </g>
-      <rect
-        x={MARGIN.left}
-        y={MARGIN.top}
-        width={width - MARGIN.left - MARGIN.right}
-        height={height - MARGIN.top - MARGIN.bottom}
-        fill="none"
-        stroke={MAP_COLOURS.axis}
-      />
-    </svg>
+    </PlotFrame>
   );
 }
 

@@ -33,9 +33,7 @@ export function accessPages(app: Hono, kit: PageKit, token: string | undefined):
     kit.render(
       c,
       <AccessView
-        tr={kit.tr(c)}
-        path={kit.here(c)}
-        toolVersion={kit.ctx.toolVersion}
+        page={kit.page(c)}
         state={state}
         notice={notice}
         back={back}

@@ -81,9 +81,7 @@ export function catalogPages(app: Hono, kit: PageKit): void {
         response: kit.render(
           c,
           <MessageView
-            tr={tr}
-            path={kit.here(c)}
-            toolVersion={ctx.toolVersion}
+            page={kit.page(c)}
             title={tr.t('error.notFound')}
             text={tr.text('error.studyNotFound', { id })}
           />,
@@ -104,15 +102,12 @@ export function catalogPages(app: Hono, kit: PageKit): void {
       uploadIssues?: InputIssue[];
     } = {},
   ) => {
-    const tr = kit.tr(c);
     const analysis = catalog ? analyseCatalog(catalog.text, catalog.format) : undefined;
     const failed = (extra.zoneIssues?.length ?? 0) > 0 || (extra.uploadIssues?.length ?? 0) > 0;
     return kit.render(
       c,
       <CatalogView
-        tr={tr}
-        path={kit.here(c)}
-        toolVersion={ctx.toolVersion}
+        page={kit.page(c)}
         studyId={data.record.id}
         study={data.study}
         {...(catalog ? { catalog } : {})}

@@ -79,9 +79,7 @@ export function editorPages(app: Hono, kit: PageKit): void {
         response: kit.render(
           c,
           <MessageView
-            tr={tr}
-            path={kit.here(c)}
-            toolVersion={ctx.toolVersion}
+            page={kit.page(c)}
             title={tr.t('error.notFound')}
             text={tr.text('error.studyNotFound', { id })}
           />,
@@ -93,9 +91,7 @@ export function editorPages(app: Hono, kit: PageKit): void {
         response: kit.render(
           c,
           <MessageView
-            tr={tr}
-            path={kit.here(c)}
-            toolVersion={ctx.toolVersion}
+            page={kit.page(c)}
             title={data.record.name}
             text={tr.text('editor.otherProblems')}
             details={data.issues.map((i) => `${i.path}: ${i.message}`)}
@@ -141,9 +137,7 @@ export function editorPages(app: Hono, kit: PageKit): void {
     return kit.render(
       c,
       <EditorView
-        tr={kit.tr(c)}
-        path={kit.here(c)}
-        toolVersion={ctx.toolVersion}
+        page={kit.page(c)}
         studyId={data.record.id}
         study={data.study}
         saved={saved}
@@ -160,7 +154,6 @@ export function editorPages(app: Hono, kit: PageKit): void {
     values: CommunityForm,
     issues: readonly InputIssue[],
   ) => {
-    const tr = kit.tr(c);
     const at = index ?? communityList(data.inputs, data.study.communities).length;
     const byField = new Map<string, InputIssue[]>();
     const others: InputIssue[] = [];
@@ -174,9 +167,7 @@ export function editorPages(app: Hono, kit: PageKit): void {
     return kit.render(
       c,
       <CommunityFormView
-        tr={tr}
-        path={kit.here(c)}
-        toolVersion={ctx.toolVersion}
+        page={kit.page(c)}
         studyId={data.record.id}
         studyName={data.study.name}
         action={

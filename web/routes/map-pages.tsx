@@ -33,9 +33,7 @@ export function mapPages(app: Hono, kit: PageKit, overview: OverviewWithMapForm)
     return kit.render(
       c,
       <MessageView
-        tr={tr}
-        path={kit.here(c)}
-        toolVersion={ctx.toolVersion}
+        page={kit.page(c)}
         title={tr.t('error.notFound')}
         text={tr.text('error.studyNotFound', { id: c.req.param('id') ?? '' })}
       />,
@@ -83,9 +81,7 @@ export function mapPages(app: Hono, kit: PageKit, overview: OverviewWithMapForm)
       return kit.render(
         c,
         <MessageView
-          tr={tr}
-          path={kit.here(c)}
-          toolVersion={ctx.toolVersion}
+          page={kit.page(c)}
           title={tr.t('error.notFound')}
           text={tr.text('error.notFoundText')}
         />,
@@ -94,14 +90,7 @@ export function mapPages(app: Hono, kit: PageKit, overview: OverviewWithMapForm)
     }
     return kit.render(
       c,
-      <MapRunView
-        tr={tr}
-        path={kit.here(c)}
-        toolVersion={ctx.toolVersion}
-        studyId={id}
-        studyName={record.name}
-        run={run}
-      />,
+      <MapRunView page={kit.page(c)} studyId={id} studyName={record.name} run={run} />,
     );
   });
 }

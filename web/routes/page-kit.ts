@@ -5,6 +5,7 @@ import type { Child } from 'hono/jsx';
 import type { ContentfulStatusCode } from 'hono/utils/http-status';
 import type { ServiceContext } from '../../api/operations/service-context.ts';
 import { ResultsCache } from '../data/study-data.ts';
+import type { PageContext } from '../layout/page-shell.tsx';
 import {
   DEFAULT_LANGUAGE,
   isLanguage,
@@ -33,19 +34,24 @@ export interface PageKit {
   tr(c: Context): Translator;
   /** This request's path and query without `lang` (where the language switch returns). */
   here(c: Context): string;
+  /** The reader's language, this page's path and the tool's version, as every view takes them. */
+  page(c: Context): PageContext;
   render(c: Context, page: Child, status?: ContentfulStatusCode): Response | Promise<Response>;
 }
 
 export function pageKit(ctx: ServiceContext): PageKit {
+  const tr = (c: Context): Translator => translator(languageOf(c));
+  const here = (c: Context): string => {
+    const url = new URL(c.req.url);
+    url.searchParams.delete('lang');
+    return `${url.pathname}${url.search}`;
+  };
   return {
     ctx,
     results: new ResultsCache(),
-    tr: (c) => translator(languageOf(c)),
-    here: (c) => {
-      const url = new URL(c.req.url);
-      url.searchParams.delete('lang');
-      return `${url.pathname}${url.search}`;
-    },
+    tr,
+    here,
+    page: (c) => ({ tr: tr(c), path: here(c), toolVersion: ctx.toolVersion }),
     render: (c, page, status = 200) => c.html(html`<!DOCTYPE html>${page}`, status),
   };
 }

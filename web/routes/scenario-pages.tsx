@@ -50,9 +50,7 @@ export function scenarioPages(app: Hono, kit: PageKit): void {
       return kit.render(
         c,
         <MessageView
-          tr={tr}
-          path={kit.here(c)}
-          toolVersion={ctx.toolVersion}
+          page={kit.page(c)}
           title={tr.t('error.notFound')}
           text={tr.text('error.studyNotFound', { id })}
         />,
@@ -103,9 +101,7 @@ export function scenarioPages(app: Hono, kit: PageKit): void {
     return kit.render(
       c,
       <ScenarioView
-        tr={tr}
-        path={kit.here(c)}
-        toolVersion={ctx.toolVersion}
+        page={kit.page(c)}
         studyId={id}
         study={study}
         sourceId={sourceId}

@@ -15,7 +15,7 @@ import {
 } from '../data/ranking.ts';
 import { feltData, studyCatalog } from '../data/study-catalog.ts';
 import { rankByTimeToAct, studyTsunami } from '../data/tsunami-data.ts';
-import { startScreening } from '../data/start-screening.ts';
+import { startScreening } from '../../api/operations/start-screening.ts';
 import { readRuns, readStudy, type StudyData } from '../data/study-data.ts';
 import { mapFrame } from '../maps/map-frame.ts';
 import { CommunityView } from '../views/community-view.tsx';
@@ -52,13 +52,7 @@ export function studyPages(app: Hono, kit: PageKit): void {
     const tr = kit.tr(c);
     return kit.render(
       c,
-      <MessageView
-        tr={tr}
-        path={kit.here(c)}
-        toolVersion={ctx.toolVersion}
-        title={tr.t('error.notFound')}
-        text={text}
-      />,
+      <MessageView page={kit.page(c)} title={tr.t('error.notFound')} text={text} />,
       404,
     );
   };
@@ -67,9 +61,7 @@ export function studyPages(app: Hono, kit: PageKit): void {
     return kit.render(
       c,
       <MessageView
-        tr={tr}
-        path={kit.here(c)}
-        toolVersion={ctx.toolVersion}
+        page={kit.page(c)}
         title={data.record.name}
         text={tr.text('editor.otherProblems')}
         details={data.issues.map((i) => `${i.path}: ${i.message}`)}
@@ -98,9 +90,7 @@ export function studyPages(app: Hono, kit: PageKit): void {
     return kit.render(
       c,
       <OverviewView
-        tr={tr}
-        path={kit.here(c)}
-        toolVersion={ctx.toolVersion}
+        page={kit.page(c)}
         studyId={id}
         study={data.study}
         runs={runs}
@@ -134,9 +124,9 @@ export function studyPages(app: Hono, kit: PageKit): void {
     const record = ctx.store.studies.get(id);
     if (!record) return notFound(c, kit.tr(c).text('error.studyNotFound', { id }));
     try {
-      const run = await startScreening(ctx, record);
-      if (!run) return notFound(c, kit.tr(c).text('error.studyNotFound', { id }));
-      return c.redirect(`/studies/${id}/runs/${run.id}`, 303);
+      const started = await startScreening(ctx, record);
+      if (!started) return notFound(c, kit.tr(c).text('error.studyNotFound', { id }));
+      return c.redirect(`/studies/${id}/runs/${started.run.id}`, 303);
     } catch (error) {
       if (error instanceof InvalidInput)
         return overview(c, {
@@ -156,14 +146,7 @@ export function studyPages(app: Hono, kit: PageKit): void {
     if (!record || !run || run.studyId !== id) return notFound(c, tr.text('error.notFoundText'));
     return kit.render(
       c,
-      <RunView
-        tr={tr}
-        path={kit.here(c)}
-        toolVersion={ctx.toolVersion}
-        studyId={id}
-        studyName={record.name}
-        run={run}
-      />,
+      <RunView page={kit.page(c)} studyId={id} studyName={record.name} run={run} />,
     );
   });
 
@@ -209,13 +192,7 @@ export function studyPages(app: Hono, kit: PageKit): void {
         kind: 'response' as const,
         response: kit.render(
           c,
-          <MessageView
-            tr={tr}
-            path={kit.here(c)}
-            toolVersion={ctx.toolVersion}
-            title={community.name}
-            text={text}
-          />,
+          <MessageView page={kit.page(c)} title={community.name} text={text} />,
           409,
         ),
       };
@@ -242,14 +219,12 @@ export function studyPages(app: Hono, kit: PageKit): void {
   app.get('/studies/:id/communities/:cid', async (c) => {
     const found = communityContext(c);
     if (found.kind === 'response') return found.response;
-    const { tr, id, study, screening, page } = found;
+    const { id, study, screening, page } = found;
     const tsunami = page.community.coastal ? await studyTsunami(ctx, study) : undefined;
     return kit.render(
       c,
       <CommunityView
-        tr={tr}
-        path={kit.here(c)}
-        toolVersion={ctx.toolVersion}
+        page={kit.page(c)}
         studyId={id}
         study={study}
         data={page}

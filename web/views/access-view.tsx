@@ -1,14 +1,11 @@
 import { ACCESS_PATH, LEAVE_PATH } from '../../api/service/page-access.ts';
-import { PageShell } from '../layout/page-shell.tsx';
-import type { Translator } from '../text/translator.ts';
+import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 
 /** What the access page has to say: why the user is here, or how their last try went. */
 export type AccessNotice = 'needed' | 'missing' | 'wrong' | 'ended';
 
 export interface AccessViewProps {
-  readonly tr: Translator;
-  readonly path: string;
-  readonly toolVersion: string;
+  readonly page: PageContext;
   /** `open`: the service has no token; `granted`: this browser has access; `closed`: it has not. */
   readonly state: 'open' | 'granted' | 'closed';
   readonly notice?: AccessNotice | undefined;
@@ -19,15 +16,14 @@ export interface AccessViewProps {
 
 /** The access page: enter the token once, or end this browser's access (plain form posts). */
 export function AccessView(props: AccessViewProps) {
-  const { tr, state, notice } = props;
+  const { tr } = props.page;
+  const { state, notice } = props;
   const refused = notice === 'missing' || notice === 'wrong';
   return (
     <PageShell
-      tr={tr}
+      page={props.page}
       title={tr.t('access.title')}
       titleLang={tr.fallbackLang('access.title')}
-      path={props.path}
-      toolVersion={props.toolVersion}
     >
       <h1>{tr.text('access.title')}</h1>
       {state === 'open' ? (

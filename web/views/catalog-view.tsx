@@ -4,12 +4,11 @@ import type { InputIssue } from '../../api/engine/errors.ts';
 import type { Study } from '../../api/engine/model.ts';
 import { chosenFit, type CatalogAnalysis } from '../data/catalog-analysis.ts';
 import type { AttachedCatalog } from '../data/study-catalog.ts';
-import { PageShell } from '../layout/page-shell.tsx';
+import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 import {
   FrequencyMagnitudeLegend,
   FrequencyMagnitudePlot,
 } from '../plots/frequency-magnitude-plot.tsx';
-import type { Translator } from '../text/translator.ts';
 import { FieldProblems } from './field-problems.tsx';
 
 /** The zone form's values, as posted. */
@@ -25,9 +24,7 @@ export interface ZoneForm {
 export const OUTLINE_CHOICE = '(outline)';
 
 export interface CatalogViewProps {
-  readonly tr: Translator;
-  readonly path: string;
-  readonly toolVersion: string;
+  readonly page: PageContext;
   readonly studyId: string;
   readonly study: Study;
   readonly catalog?: AttachedCatalog;
@@ -41,7 +38,8 @@ export interface CatalogViewProps {
 
 /** The catalog view: load, summary with rejected lines, frequency–magnitude plot with the fit, and the zone. */
 export function CatalogView(props: CatalogViewProps) {
-  const { tr, study, studyId, analysis, catalog } = props;
+  const { tr } = props.page;
+  const { study, studyId, analysis, catalog } = props;
   const result = analysis?.fit;
   const fit = result ? chosenFit(result) : undefined;
   const zoneIssue = (name: string) => props.zoneIssues.filter((i) => i.path === name);
@@ -77,11 +75,9 @@ export function CatalogView(props: CatalogViewProps) {
   );
   return (
     <PageShell
-      tr={tr}
+      page={props.page}
       title={tr.t('catalog.title', { name: study.name })}
       titleLang={tr.fallbackLang('catalog.title')}
-      path={props.path}
-      toolVersion={props.toolVersion}
       study={{ id: studyId, name: study.name }}
       section="catalog"
       showsNumbers={fit !== undefined}

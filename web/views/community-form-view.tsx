@@ -1,15 +1,12 @@
 import type { InputIssue } from '../../api/engine/errors.ts';
 import { SITE_CLASSES } from '../../api/study/site-class.ts';
 import type { CommunityForm } from '../data/study-edits.ts';
-import { PageShell } from '../layout/page-shell.tsx';
+import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 import type { TextKey } from '../text/en.ts';
-import type { Translator } from '../text/translator.ts';
 import { FieldProblems } from './field-problems.tsx';
 
 export interface CommunityFormViewProps {
-  readonly tr: Translator;
-  readonly path: string;
-  readonly toolVersion: string;
+  readonly page: PageContext;
   readonly studyId: string;
   readonly studyName: string;
   /** Where the form posts. */
@@ -37,7 +34,8 @@ const MORE_FIELDS = [
 
 /** Add or edit one community; each problem is shown under its field (plain form post). */
 export function CommunityFormView(props: CommunityFormViewProps) {
-  const { tr, values } = props;
+  const { tr } = props.page;
+  const { values } = props;
   const headingKey = props.editing === undefined ? 'editor.add' : 'editor.edit';
   const heading = { name: props.editing ?? '' };
   const problems = (name: string) => props.fieldIssues.get(name) ?? [];
@@ -67,11 +65,9 @@ export function CommunityFormView(props: CommunityFormViewProps) {
   };
   return (
     <PageShell
-      tr={tr}
+      page={props.page}
       title={tr.t(headingKey, heading)}
       titleLang={tr.fallbackLang(headingKey)}
-      path={props.path}
-      toolVersion={props.toolVersion}
       study={{ id: props.studyId, name: props.studyName }}
       section="edit"
     >

@@ -5,7 +5,7 @@ import { INTENSITY_MEASURE } from '../../api/engine/intensity/site-intensity.ts'
 import type { ScreeningBandId } from '../../api/engine/intensity/screening-band.ts';
 import { HASH_PREFIX_LENGTH, modelsLine, type CommunityPageData } from '../data/community-data.ts';
 import { BandSwatch } from '../layout/band-swatch.tsx';
-import { PageShell } from '../layout/page-shell.tsx';
+import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 import type { MapFrame } from '../maps/map-frame.ts';
 import { StudyMap } from '../maps/study-map.tsx';
 import { HazardCurveLegend, HazardCurvePlot } from '../plots/hazard-curve-plot.tsx';
@@ -19,9 +19,7 @@ import { TsunamiTime } from './tsunami-time.tsx';
 import { CommunityDetails } from './community-details.tsx';
 
 export interface CommunityViewProps {
-  readonly tr: Translator;
-  readonly path: string;
-  readonly toolVersion: string;
+  readonly page: PageContext;
   readonly studyId: string;
   readonly study: Study;
   readonly data: CommunityPageData;
@@ -153,7 +151,8 @@ export function ProvenanceLine(props: {
 
 /** The community page: headline, shaking levels, sources, faults, curve, felt history, advice, limits. */
 export function CommunityView(props: CommunityViewProps) {
-  const { tr, data, study, studyId } = props;
+  const { tr } = props.page;
+  const { data, study, studyId } = props;
   const { community, result } = data;
   const bandId = result.band.id as ScreeningBandId;
   const curve = result.curves[INTENSITY_MEASURE];
@@ -165,10 +164,8 @@ export function CommunityView(props: CommunityViewProps) {
   );
   return (
     <PageShell
-      tr={tr}
+      page={props.page}
       title={community.name}
-      path={props.path}
-      toolVersion={props.toolVersion}
       study={{ id: studyId, name: study.name }}
       showsNumbers={false}
     >

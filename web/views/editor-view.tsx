@@ -3,7 +3,7 @@ import type { InputIssue } from '../../api/engine/errors.ts';
 import type { Study } from '../../api/engine/model.ts';
 import type { ColumnPick } from '../data/community-import.ts';
 import { issueFeature, issueLine } from '../data/study-edits.ts';
-import { PageShell } from '../layout/page-shell.tsx';
+import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 import type { Translator } from '../text/translator.ts';
 import { ColumnPickForm } from './column-pick-view.tsx';
 import { FieldProblems } from './field-problems.tsx';
@@ -18,9 +18,7 @@ export interface UploadProblem {
 }
 
 export interface EditorViewProps {
-  readonly tr: Translator;
-  readonly path: string;
-  readonly toolVersion: string;
+  readonly page: PageContext;
   readonly studyId: string;
   readonly study: Study;
   readonly saved?: boolean;
@@ -82,17 +80,16 @@ function featureIdsOf(text: string | undefined): (string | undefined)[] {
 
 /** The editor: communities (edit, add, remove), CSV and GeoJSON uploads with their problems inline. */
 export function EditorView(props: EditorViewProps) {
-  const { tr, study, studyId, problem } = props;
+  const { tr } = props.page;
+  const { study, studyId, problem } = props;
   const csvProblem = problem?.upload === 'communities' ? problem : undefined;
   const geoProblem = problem?.upload === 'sources' ? problem : undefined;
   const featureIds = featureIdsOf(geoProblem?.text);
   return (
     <PageShell
-      tr={tr}
+      page={props.page}
       title={tr.t('editor.title', { name: study.name })}
       titleLang={tr.fallbackLang('editor.title')}
-      path={props.path}
-      toolVersion={props.toolVersion}
       study={{ id: studyId, name: study.name }}
       section="edit"
     >

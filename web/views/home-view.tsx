@@ -1,21 +1,16 @@
 import type { StudySummary } from '../../api/store/index.ts';
-import { PageShell } from '../layout/page-shell.tsx';
-import type { Translator } from '../text/translator.ts';
+import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 
 export function HomeView(props: {
-  readonly tr: Translator;
-  readonly path: string;
-  readonly toolVersion: string;
+  readonly page: PageContext;
   readonly studies: readonly StudySummary[];
 }) {
-  const { tr } = props;
+  const { tr } = props.page;
   return (
     <PageShell
-      tr={tr}
+      page={props.page}
       title={tr.t('home.title')}
       titleLang={tr.fallbackLang('home.title')}
-      path={props.path}
-      toolVersion={props.toolVersion}
     >
       <h1>{tr.text('home.title')}</h1>
       <p class="lead">{tr.text('home.intro')}</p>

@@ -1,21 +1,14 @@
-import { PageShell } from '../layout/page-shell.tsx';
-import type { Translator } from '../text/translator.ts';
+import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 import { SafetyAdvice } from './safety-advice.tsx';
 
 /** The limits of a screening and the safety advice (SAFETY.md in plain words). */
-export function LimitsView(props: {
-  readonly tr: Translator;
-  readonly path: string;
-  readonly toolVersion: string;
-}) {
-  const { tr } = props;
+export function LimitsView(props: { readonly page: PageContext }) {
+  const { tr } = props.page;
   return (
     <PageShell
-      tr={tr}
+      page={props.page}
       title={tr.t('limits.title')}
       titleLang={tr.fallbackLang('limits.title')}
-      path={props.path}
-      toolVersion={props.toolVersion}
     >
       <h1>{tr.text('limits.title')}</h1>
       <p class="lead">{tr.text('limits.intro')}</p>

@@ -1,13 +1,10 @@
 import { measureUnit, parseMeasure } from '../../api/engine/motion/measure.ts';
 import type { MapRunRecord } from '../../api/store/index.ts';
-import { PageShell } from '../layout/page-shell.tsx';
+import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 import { mapTitle } from '../maps/hazard-layer.tsx';
-import type { Translator } from '../text/translator.ts';
 
 export interface MapRunViewProps {
-  readonly tr: Translator;
-  readonly path: string;
-  readonly toolVersion: string;
+  readonly page: PageContext;
   readonly studyId: string;
   readonly studyName: string;
   readonly run: MapRunRecord;
@@ -19,7 +16,8 @@ export interface MapRunViewProps {
  * the page moves to the overview's map when it is done.
  */
 export function MapRunView(props: MapRunViewProps) {
-  const { tr, run, studyId } = props;
+  const { tr } = props.page;
+  const { run, studyId } = props;
   const unfinished = run.status === 'queued' || run.status === 'running';
   const doneUrl = `/studies/${studyId}#map-heading`;
   const what = run.description ?? {
@@ -29,11 +27,9 @@ export function MapRunView(props: MapRunViewProps) {
   };
   return (
     <PageShell
-      tr={tr}
+      page={props.page}
       title={tr.t('mapRun.title', { name: props.studyName })}
       titleLang={tr.fallbackLang('mapRun.title')}
-      path={props.path}
-      toolVersion={props.toolVersion}
       study={{ id: studyId, name: props.studyName }}
     >
       <h1>{tr.text('mapRun.title', { name: props.studyName })}</h1>
@@ -58,7 +54,7 @@ export function MapRunView(props: MapRunViewProps) {
               <span class="run-percent">{Math.round(run.progress * 100)}%</span>
             </p>
             <p class="run-refresh">
-              <a href={props.path}>{tr.text('mapRun.refresh')}</a>
+              <a href={props.page.path}>{tr.text('mapRun.refresh')}</a>
             </p>
           </>
         ) : run.status === 'done' ? (

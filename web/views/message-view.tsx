@@ -1,19 +1,16 @@
 import type { Child } from 'hono/jsx';
-import { PageShell } from '../layout/page-shell.tsx';
-import type { Translator } from '../text/translator.ts';
+import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 
 /** A page with one message: not found, or a study that no longer validates (details: the service's messages, in English). */
 export function MessageView(props: {
-  readonly tr: Translator;
-  readonly path: string;
-  readonly toolVersion: string;
+  readonly page: PageContext;
   readonly title: string;
   readonly text: Child;
   readonly details?: readonly string[];
 }) {
-  const { tr } = props;
+  const { tr } = props.page;
   return (
-    <PageShell tr={tr} title={props.title} path={props.path} toolVersion={props.toolVersion}>
+    <PageShell page={props.page} title={props.title}>
       <h1>{props.title}</h1>
       <p>{props.text}</p>
       {props.details && props.details.length > 0 && (

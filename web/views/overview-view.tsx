@@ -13,7 +13,7 @@ import {
 } from '../data/ranking.ts';
 import type { RunState } from '../data/study-data.ts';
 import { BandSwatch } from '../layout/band-swatch.tsx';
-import { PageShell } from '../layout/page-shell.tsx';
+import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 import { HazardLayer, HazardMapLegend, layerClasses } from '../maps/hazard-layer.tsx';
 import type { MapFrame } from '../maps/map-frame.ts';
 import { StudyMap, StudyMapLegend } from '../maps/study-map.tsx';
@@ -22,9 +22,7 @@ import { HazardMapPanel, type MapFormState } from './hazard-map-panel.tsx';
 import { ScreeningStatus } from './screening-status.tsx';
 
 export interface OverviewProps {
-  readonly tr: Translator;
-  readonly path: string;
-  readonly toolVersion: string;
+  readonly page: PageContext;
   readonly studyId: string;
   readonly study: Study;
   readonly runs: RunState;
@@ -67,7 +65,8 @@ const COLUMNS: readonly {
  * computes a hazard map, and the ranking table, sortable by links (and by script).
  */
 export function OverviewView(props: OverviewProps) {
-  const { tr, study, studyId, rows } = props;
+  const { tr } = props.page;
+  const { study, studyId, rows } = props;
   const bands = new Map(rows?.map((r) => [r.communityId, r.bandId]) ?? []);
   const shown = props.maps.shown;
   // A map with too many points to draw is offered as a download only (hazard-map-panel.tsx).
@@ -76,11 +75,9 @@ export function OverviewView(props: OverviewProps) {
     : undefined;
   return (
     <PageShell
-      tr={tr}
+      page={props.page}
       title={tr.t('overview.title', { name: study.name })}
       titleLang={tr.fallbackLang('overview.title')}
-      path={props.path}
-      toolVersion={props.toolVersion}
       study={{ id: studyId, name: study.name }}
       section="overview"
       showsNumbers={rows !== undefined || drawn !== undefined || props.tsunami !== undefined}

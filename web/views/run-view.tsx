@@ -1,28 +1,24 @@
 import type { RunRecord } from '../../api/store/index.ts';
-import { PageShell } from '../layout/page-shell.tsx';
-import type { Translator } from '../text/translator.ts';
+import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 
 /**
  * A run in progress. Without script the reader refreshes the page; with script
  * (static/tremora.js) the bar follows GET /api/runs/{id} and the page moves on when it is done.
  */
 export function RunView(props: {
-  readonly tr: Translator;
-  readonly path: string;
-  readonly toolVersion: string;
+  readonly page: PageContext;
   readonly studyId: string;
   readonly studyName: string;
   readonly run: RunRecord;
 }) {
-  const { tr, run, studyId } = props;
+  const { tr } = props.page;
+  const { run, studyId } = props;
   const unfinished = run.status === 'queued' || run.status === 'running';
   return (
     <PageShell
-      tr={tr}
+      page={props.page}
       title={tr.t('run.title', { name: props.studyName })}
       titleLang={tr.fallbackLang('run.title')}
-      path={props.path}
-      toolVersion={props.toolVersion}
       study={{ id: studyId, name: props.studyName }}
     >
       <h1>{tr.text('run.title', { name: props.studyName })}</h1>
@@ -45,7 +41,7 @@ export function RunView(props: {
               <span class="run-percent">{Math.round(run.progress * 100)}%</span>
             </p>
             <p class="run-refresh">
-              <a href={props.path}>{tr.text('run.refresh')}</a>
+              <a href={props.page.path}>{tr.text('run.refresh')}</a>
             </p>
           </>
         ) : run.status === 'done' ? (

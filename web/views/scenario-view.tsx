@@ -2,19 +2,16 @@ import type { InputIssue } from '../../api/engine/errors.ts';
 import { intensityWords } from '../format/intensity-words.ts';
 import type { Study } from '../../api/engine/model.ts';
 import type { ScenarioResult } from '../../api/engine/scenario/index.ts';
-import { PageShell } from '../layout/page-shell.tsx';
+import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 import type { MapFrame } from '../maps/map-frame.ts';
 import { ScenarioLayer, ScenarioLegend } from '../maps/scenario-layer.tsx';
 import { StudyMap } from '../maps/study-map.tsx';
-import type { Translator } from '../text/translator.ts';
 import { FieldProblems } from './field-problems.tsx';
 import type { TsunamiPageResult } from '../data/tsunami-data.ts';
 import { TsunamiScenario } from './tsunami-time.tsx';
 
 export interface ScenarioViewProps {
-  readonly tr: Translator;
-  readonly path: string;
-  readonly toolVersion: string;
+  readonly page: PageContext;
   readonly studyId: string;
   readonly study: Study;
   readonly sourceId: string;
@@ -28,16 +25,15 @@ export interface ScenarioViewProps {
 
 /** Pick a source and magnitude (a plain form post), then the map of shaking and each community's intensity. */
 export function ScenarioView(props: ScenarioViewProps) {
-  const { tr, study, studyId, result } = props;
+  const { tr } = props.page;
+  const { study, studyId, result } = props;
   const issuesAt = (path: string) => props.issues.filter((i) => i.path === path);
   const others = props.issues.filter((i) => i.path !== 'sourceId' && i.path !== 'magnitude');
   return (
     <PageShell
-      tr={tr}
+      page={props.page}
       title={tr.t('scenario.title', { name: study.name })}
       titleLang={tr.fallbackLang('scenario.title')}
-      path={props.path}
-      toolVersion={props.toolVersion}
       study={{ id: studyId, name: study.name }}
       section="scenario"
       showsNumbers={result !== undefined}

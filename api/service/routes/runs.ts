@@ -2,12 +2,11 @@ import { Hono } from 'hono';
 import type { StudyResult } from '../../engine/results.ts';
 import { isFinished, type RunRecord } from '../../store/index.ts';
 import { HttpError, notFound } from '../http-error.ts';
-import { inputHash } from '../../results/input-hash.ts';
 import { runCsv } from '../../results/run-csv.ts';
 import { runGeoJson } from '../../results/run-geojson.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
-import { runStudy, storedInputs, validateStudy } from '../../operations/study-input.ts';
-import { measureStudy } from '../../operations/study-size.ts';
+import { startScreening } from '../../operations/start-screening.ts';
+import { runStudy } from '../../operations/study-input.ts';
 
 /** A run as the API shows it: its state, provenance (once done) and links; results are separate. */
 export const runJson = (run: RunRecord) => ({
@@ -59,18 +58,9 @@ export function runRoutes(ctx: ServiceContext): Hono {
     const id = c.req.param('id');
     const record = studies.get(id);
     if (!record) throw notFound('study', id);
-    const inputs = storedInputs(ctx.store, record);
-    const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
-    const work = await measureStudy(ctx, study);
-    // The study may have been deleted while it was measured.
-    if (!studies.get(id)) throw notFound('study', id);
-    const run = runs.create({
-      studyId: id,
-      document: inputs.document,
-      ...(inputs.communitiesCsv === undefined ? {} : { communitiesCsv: inputs.communitiesCsv }),
-      inputHash: inputHash(study),
-    });
-    ctx.scheduler.start(run, study);
+    const started = await startScreening(ctx, record);
+    if (!started) throw notFound('study', id);
+    const { run, work } = started;
     return c.json(
       { ...runJson(run), work: { size: work.size, budget: ctx.workBudget, detail: work.detail } },
       202,

@@ -1,21 +1,23 @@
-import { inputHash } from '../../api/results/input-hash.ts';
-import type { ServiceContext } from '../../api/operations/service-context.ts';
-import { measureStudy } from '../../api/operations/study-size.ts';
-import { storedInputs, validateStudy } from '../../api/operations/study-input.ts';
-import type { RunRecord, StudyRecord } from '../../api/store/index.ts';
+import { inputHash } from '../results/input-hash.ts';
+import type { ServiceContext } from './service-context.ts';
+import { measureStudy } from './study-size.ts';
+import type { StudyWork } from './work-budget.ts';
+import { storedInputs, validateStudy } from './study-input.ts';
+import type { RunRecord, StudyRecord } from '../store/index.ts';
 
 /**
- * Starts a run of a saved study, as POST /api/studies/{id}/runs does: the saved inputs are
+ * Starts a run of a saved study (POST /api/studies/{id}/runs, the pages, the demo at first start): the saved inputs are
  * validated and measured against the work budget first (InvalidInput or StudyTooLarge when
  * they fail; no run is recorded), then the run is recorded and handed to the scheduler.
+ * Undefined when the study was deleted while it was measured.
  */
 export async function startScreening(
   ctx: ServiceContext,
   record: StudyRecord,
-): Promise<RunRecord | undefined> {
+): Promise<{ readonly run: RunRecord; readonly work: StudyWork } | undefined> {
   const inputs = storedInputs(ctx.store, record);
   const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
-  await measureStudy(ctx, study);
+  const work = await measureStudy(ctx, study);
   // The study may have been deleted while it was measured.
   if (!ctx.store.studies.get(record.id)) return undefined;
   const run = ctx.store.runs.create({
@@ -25,5 +27,5 @@ export async function startScreening(
     inputHash: inputHash(study),
   });
   ctx.scheduler.start(run, study);
-  return run;
+  return { run, work };
 }
