@@ -98,11 +98,25 @@ export interface FaultSource extends SourceCommon {
   readonly lowerDepthKm: number;
 }
 
+/** One hypocentral depth of a zone and its weight (the weights of a zone sum to 1). */
+export interface WeightedDepth {
+  readonly depthKm: number;
+  readonly weight: number;
+}
+
 /** Distributed seismicity inside a polygon (outer ring first, then holes). */
 export interface ZoneSource extends SourceCommon {
   readonly kind: 'zone';
   readonly rings: readonly (readonly LonLat[])[];
+  /** Hypocentral depth, km; with depthFrom or depths, only a representative value (their mean). */
   readonly depthKm: number;
+  /**
+   * Each cell's hypocentres `offsetKm` below the surface of the contoured fault `sourceId`
+   * straight under the cell's centre (ruptures/zone-depths.ts).
+   */
+  readonly depthFrom?: { readonly sourceId: string; readonly offsetKm: number };
+  /** Hypocentral depths with weights, the same in every cell. */
+  readonly depths?: readonly WeightedDepth[];
 }
 
 export interface PointSource extends SourceCommon {

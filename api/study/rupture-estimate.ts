@@ -52,7 +52,8 @@ function positionCount(source: Source, settings: Settings): number {
   const cell = settings.zoneCellKm;
   const areaCells = turf.area(polygon) / 1e6 / (cell * cell);
   const outlineCells = turf.length(turf.polygonToLine(polygon), { units: 'kilometers' }) / cell;
-  return Math.ceil(areaCells + 2 * outlineCells) + 1;
+  // One rupture per cell and depth (a zone's weighted depths).
+  return (Math.ceil(areaCells + 2 * outlineCells) + 1) * (source.depths?.length ?? 1);
 }
 
 /**

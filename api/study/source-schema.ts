@@ -60,6 +60,27 @@ const faultSchema = z.object({
 
 const pointSchema = z.object({ depthKm: numberIn(DEPTH_KM) });
 
+const ZONE_KEYS = [...POINT_KEYS, 'depthFromSource', 'depths'];
+/** Weights of a zone's depths sum to 1 within this (as the logic tree's do). */
+const WEIGHT_SUM_SLACK = 1e-6;
+const zoneSchema = z.object({
+  depthKm: numberIn(DEPTH_KM).optional(),
+  depthFromSource: z
+    .object({ id: identifier(), offsetKm: numberIn({ min: -50, max: 300, unit: 'km' }).optional() })
+    .strict()
+    .optional(),
+  depths: z
+    .array(
+      z.object({
+        depthKm: numberIn(DEPTH_KM),
+        weight: numberIn({ min: 0, max: 1, minOpen: true }),
+      }),
+    )
+    .min(1)
+    .max(20)
+    .optional(),
+});
+
 /** Mesh spacing of a contoured fault, km: 5 km (the default rupture spacing) unless given. */
 const DEFAULT_MESH_SPACING_KM = 5;
 const contourSchema = z.object({
@@ -111,7 +132,13 @@ export function readSource(
   if (geometry)
     issues.warnUnknownKeys(
       props,
-      isContoured ? CONTOUR_KEYS : isFault ? FAULT_KEYS : POINT_KEYS,
+      isContoured
+        ? CONTOUR_KEYS
+        : isFault
+          ? FAULT_KEYS
+          : geometry.kind === 'zone'
+            ? ZONE_KEYS
+            : POINT_KEYS,
       propsPath,
     );
 
@@ -130,7 +157,13 @@ export function readSource(
   );
   const shape = geometry
     ? issues.parse(
-        isContoured ? contourSchema : isFault ? faultSchema : pointSchema,
+        isContoured
+          ? contourSchema
+          : isFault
+            ? faultSchema
+            : geometry.kind === 'zone'
+              ? zoneSchema
+              : pointSchema,
         props,
         propsPath,
       )
@@ -202,10 +235,46 @@ export function readSource(
       lowerDepthKm: f.lowerDepthKm,
     };
   }
+  if (geometry.kind === 'zone') {
+    const zone = shape as z.output<typeof zoneSchema>;
+    const given = [zone.depthKm, zone.depthFromSource, zone.depths].filter((v) => v !== undefined);
+    if (given.length !== 1) {
+      issues.add(
+        [...propsPath, 'depthKm'],
+        `expected one of depthKm, depthFromSource ({ id, offsetKm }) or depths ([{ depthKm, weight }]), got ${given.length}`,
+      );
+      return undefined;
+    }
+    const weightSum = zone.depths?.reduce((sum, d) => sum + d.weight, 0) ?? 1;
+    if (Math.abs(weightSum - 1) > WEIGHT_SUM_SLACK) {
+      issues.add(
+        [...propsPath, 'depths'],
+        `expected weights summing to 1 (within ${WEIGHT_SUM_SLACK}), got ${weightSum}`,
+      );
+      return undefined;
+    }
+    const depthKm =
+      zone.depthKm ??
+      zone.depths?.reduce((sum, d) => sum + d.depthKm * d.weight, 0) ??
+      Math.max(0, zone.depthFromSource?.offsetKm ?? 0);
+    return {
+      ...base,
+      kind: 'zone',
+      rings: geometry.rings,
+      depthKm,
+      ...(zone.depthFromSource
+        ? {
+            depthFrom: {
+              sourceId: zone.depthFromSource.id,
+              offsetKm: zone.depthFromSource.offsetKm ?? 0,
+            },
+          }
+        : {}),
+      ...(zone.depths ? { depths: zone.depths } : {}),
+    };
+  }
   const { depthKm } = shape as z.output<typeof pointSchema>;
-  return geometry.kind === 'zone'
-    ? { ...base, kind: 'zone', rings: geometry.rings, depthKm }
-    : { ...base, kind: 'point', location: geometry.location, depthKm };
+  return { ...base, kind: 'point', location: geometry.location, depthKm };
 }
 
 /** A contoured fault's MultiLineString, as its lines (contour-geometry.ts). */
@@ -274,6 +343,15 @@ export function readSources(
     }
     seen.set(source.id, i);
     out.push(source);
+  });
+  out.forEach((source) => {
+    if (source.kind !== 'zone' || !source.depthFrom) return;
+    const named = out.find((s) => s.id === source.depthFrom?.sourceId);
+    if (named?.kind === 'fault' && named.contours) return;
+    issues.add(
+      [...path, 'features', seen.get(source.id) as number, 'properties', 'depthFromSource', 'id'],
+      `expected the id of a source given by depth contours (a MultiLineString fault) in this study, got "${source.depthFrom.sourceId}"`,
+    );
   });
   return out;
 }

@@ -145,3 +145,48 @@ describe('a contoured source in the study format', () => {
     );
   });
 });
+
+describe('a zone whose depths come from a contoured source, or a weighted list', () => {
+  const zoneWith = (properties: Record<string, unknown>): Record<string, any> => {
+    const study = withContours(CONTOURS);
+    const zone = study.sources.features.find((f: any) => f.properties.id === 'background');
+    delete zone.properties.depthKm;
+    Object.assign(zone.properties, properties);
+    return study;
+  };
+  const zoneOf = (raw: unknown) => {
+    const result = load(raw);
+    expect(result.ok, result.ok ? '' : JSON.stringify(result.issues)).toBe(true);
+    if (!result.ok) throw new Error('refused');
+    return result.study.sources.find((s) => s.id === 'background');
+  };
+
+  it('reads depthFromSource with its offset', () => {
+    const zone = zoneOf(zoneWith({ depthFromSource: { id: 'slab-top', offsetKm: 10 } }));
+    expect(zone).toMatchObject({ kind: 'zone', depthFrom: { sourceId: 'slab-top', offsetKm: 10 } });
+  });
+
+  it('reads weighted depths', () => {
+    const depths = [
+      { depthKm: 40, weight: 0.4 },
+      { depthKm: 70, weight: 0.6 },
+    ];
+    expect(zoneOf(zoneWith({ depths }))).toMatchObject({ kind: 'zone', depths });
+  });
+
+  it('refuses a depthFromSource that names no contoured source', () => {
+    const issues = issuesOf(zoneWith({ depthFromSource: { id: 'fault-a', offsetKm: 10 } }));
+    expect(issues.join('\n')).toMatch(
+      /properties\.depthFromSource\.id: expected the id of a source given by depth contours .*got "fault-a"/,
+    );
+  });
+
+  it('refuses weights that do not sum to 1, and a zone with two ways to its depth', () => {
+    expect(issuesOf(zoneWith({ depths: [{ depthKm: 40, weight: 0.5 }] })).join('\n')).toMatch(
+      /properties\.depths: expected weights summing to 1/,
+    );
+    expect(
+      issuesOf(zoneWith({ depthKm: 30, depthFromSource: { id: 'slab-top' } })).join('\n'),
+    ).toMatch(/properties\.depthKm: expected one of depthKm, depthFromSource .* got 2/);
+  });
+});

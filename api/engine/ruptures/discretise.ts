@@ -67,9 +67,17 @@ export function visitSourceRuptures(
   settings: Settings,
   visit: (placed: PlacedRupture, binRate: number) => void,
   sites: readonly PointXY[] = [],
+  sources: readonly Source[] = [],
 ): void {
   inSource(sourceIndex, () => {
-    const prepared: PreparedSource = prepareSource(source, sourceIndex, frame, settings, sites);
+    const prepared: PreparedSource = prepareSource(
+      source,
+      sourceIndex,
+      frame,
+      settings,
+      sites,
+      sources,
+    );
     const areaKm2 = prepared.kind === 'fault' ? prepared.surface.areaKm2 : undefined;
     const bins = magnitudeBins(source.recurrence, settings, areaKm2);
     for (let i = 0; i < bins.magnitudes.length; i++) {
@@ -90,6 +98,7 @@ export function discretiseSource(
   frame: LocalFrame,
   settings: Settings,
   sites: readonly PointXY[] = [],
+  sources: readonly Source[] = [],
 ): Rupture[] {
   const ruptures: Rupture[] = [];
   visitSourceRuptures(
@@ -99,6 +108,7 @@ export function discretiseSource(
     settings,
     (placed, binRate) => ruptures.push(toRupture(placed, binRate)),
     sites,
+    sources,
   );
   return ruptures;
 }
@@ -118,7 +128,7 @@ export function discretiseStudy(study: Study): DiscretisedStudy {
   return {
     frame,
     ruptures: study.sources.flatMap((source, i) =>
-      discretiseSource(source, i, frame, study.settings, sites),
+      discretiseSource(source, i, frame, study.settings, sites, study.sources),
     ),
   };
 }
