@@ -19,7 +19,7 @@ import {
 import { closeClient, parseRawAnswer, send, sendRaw } from './http-client.ts';
 
 /**
- * API fuzz (issue 8): at least 2,000 generated malformed or hostile requests across every route
+ * API fuzz: at least 2,000 generated malformed or hostile requests across every route
  * of a started service, then a set of raw requests no HTTP client would send. Expected: no
  * answer of 500 or above, no stack trace, the process alive, no internal error logged, and every
  * 4xx in the documented error shape (answer-checks.ts).
@@ -131,7 +131,9 @@ describe('the API under hostile requests', () => {
     expect(requests.length).toBeGreaterThanOrEqual(2_000);
     expect(problems.slice(0, 10), problems.slice(0, 10).join('\n')).toEqual([]);
     expect(byStatus.total).toBe(requests.length);
-  });
+    // A time limit for a fixed number of requests only: on a busy shared machine they take
+    // several minutes, and what is checked does not depend on how fast they are answered.
+  }, 600_000);
 
   it('answers raw requests no client would send (bad HTTP, header overflow, cut-short bodies) in the error shape', async () => {
     const port = Number(new URL(service.url).port);
