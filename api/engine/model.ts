@@ -93,10 +93,28 @@ interface SourceCommon {
   readonly recurrence: Recurrence;
 }
 
-/** A planar-by-segment fault surface from a LineString trace. */
+/**
+ * A surface given by its depth contours (a GeoJSON MultiLineString): lines in order down dip,
+ * each at one depth, all running the same way.
+ */
+export interface FaultContours {
+  readonly lines: readonly (readonly LonLat[])[];
+  /** One depth per line, km, increasing. */
+  readonly depthsKm: readonly number[];
+  /** Largest side of the mesh cells built between the contours, km. */
+  readonly meshSpacingKm: number;
+}
+
+/**
+ * A fault: planar by segment from a LineString trace, or, with `contours`, the mesh between
+ * its depth contours (geometry/contour-mesh.ts). A contoured fault's trace is its top contour,
+ * its depths those of its first and last contours and its dip their mean, for what only needs
+ * an outline (maps, the study's extent, size estimates).
+ */
 export interface FaultSource extends SourceCommon {
   readonly kind: 'fault';
   readonly trace: readonly LonLat[];
+  readonly contours?: FaultContours;
   readonly dipDeg: number;
   /** Azimuth (deg clockwise from north) the fault dips towards. */
   readonly dipDirectionDeg: number;
@@ -104,11 +122,25 @@ export interface FaultSource extends SourceCommon {
   readonly lowerDepthKm: number;
 }
 
+/** One hypocentral depth of a zone and its weight (the weights of a zone sum to 1). */
+export interface WeightedDepth {
+  readonly depthKm: number;
+  readonly weight: number;
+}
+
 /** Distributed seismicity inside a polygon (outer ring first, then holes). */
 export interface ZoneSource extends SourceCommon {
   readonly kind: 'zone';
   readonly rings: readonly (readonly LonLat[])[];
+  /** Hypocentral depth, km; with depthFrom or depths, only a representative value (their mean). */
   readonly depthKm: number;
+  /**
+   * Each cell's hypocentres `offsetKm` below the surface of the contoured fault `sourceId`
+   * straight under the cell's centre (ruptures/zone-depths.ts).
+   */
+  readonly depthFrom?: { readonly sourceId: string; readonly offsetKm: number };
+  /** Hypocentral depths with weights, the same in every cell. */
+  readonly depths?: readonly WeightedDepth[];
 }
 
 export interface PointSource extends SourceCommon {

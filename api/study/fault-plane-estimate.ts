@@ -12,7 +12,7 @@ import { magnitudeEdges } from '../engine/recurrence/magnitude-bins.ts';
  * Bin-centre magnitudes of a recurrence, as recurrence/magnitude-bins.ts makes them; over a
  * logic tree, those of every mMax alternative (tree-magnitude-bins.ts takes their union).
  */
-function binMagnitudes(recurrence: Recurrence, stepM: number): number[] {
+export function binMagnitudes(recurrence: Recurrence, stepM: number): number[] {
   if (recurrence.type === 'fixed') return [recurrence.magnitude];
   const maxima = recurrence.alternatives?.mMax?.map((a) => a.value) ?? [recurrence.mMax];
   const centres = new Set<number>();

@@ -1,5 +1,6 @@
 import * as turf from '@turf/turf';
 import type { Recurrence, Settings, Source } from '../engine/model.ts';
+import { contouredExtent, contouredPlaneCount } from './contour-cell-estimate.ts';
 import { faultPlaneCount } from './fault-plane-estimate.ts';
 import type { IssueList } from './issues.ts';
 
@@ -42,11 +43,15 @@ function binCount(recurrence: Recurrence, stepM: number): number {
 function positionCount(source: Source, settings: Settings): number {
   if (source.kind === 'point') return 1;
   if (source.kind === 'fault') {
-    const lengthKm = turf.length(turf.lineString(source.trace.map(([lon, lat]) => [lon, lat])), {
-      units: 'kilometers',
-    });
-    const widthKm =
-      (source.lowerDepthKm - source.upperDepthKm) / Math.sin((source.dipDeg * Math.PI) / 180);
+    const { lengthKm, widthKm } = source.contours
+      ? contouredExtent(source.contours)
+      : {
+          lengthKm: turf.length(turf.lineString(source.trace.map(([lon, lat]) => [lon, lat])), {
+            units: 'kilometers',
+          }),
+          widthKm:
+            (source.lowerDepthKm - source.upperDepthKm) / Math.sin((source.dipDeg * Math.PI) / 180),
+        };
     const spacing = settings.ruptureSpacingKm;
     return (Math.ceil(lengthKm / spacing) + 1) * (Math.ceil(widthKm / spacing) + 1);
   }
@@ -54,7 +59,8 @@ function positionCount(source: Source, settings: Settings): number {
   const cell = settings.zoneCellKm;
   const areaCells = turf.area(polygon) / 1e6 / (cell * cell);
   const outlineCells = turf.length(turf.polygonToLine(polygon), { units: 'kilometers' }) / cell;
-  return Math.ceil(areaCells + 2 * outlineCells) + 1;
+  // One rupture per cell and depth (a zone's weighted depths).
+  return (Math.ceil(areaCells + 2 * outlineCells) + 1) * (source.depths?.length ?? 1);
 }
 
 /**
@@ -98,17 +104,23 @@ function checkPlaneEstimate(
   let largest = { index: 0, count: 0 };
   sources.forEach((source, index) => {
     if (source.kind !== 'fault') return;
-    const count = faultPlaneCount(source, settings);
+    const count = source.contours
+      ? contouredPlaneCount({ ...source, contours: source.contours }, settings)
+      : faultPlaneCount(source, settings);
     total += count;
     if (count > largest.count) largest = { index, count };
   });
   if (total <= MAX_RUPTURE_PLANES) return;
   const source = sources[largest.index];
   const vertices = source?.kind === 'fault' ? source.trace.length : 0;
+  const from =
+    source?.kind === 'fault' && source.contours
+      ? `${largest.count} planes from the mesh cells between its contours`
+      : `${largest.count} planes from a trace of ${vertices} vertices`;
   issues.add(
     ['sources'],
-    `the fault ruptures would hold about ${total} rupture planes (one per trace segment a rupture covers), over the limit of ${MAX_RUPTURE_PLANES} per study ` +
-      `(the most from sources.features[${largest.index}] "${source?.id ?? ''}", ${largest.count} planes from a trace of ${vertices} vertices); ` +
-      'expected fewer: simplify the fault traces to fewer, longer segments, or use a larger settings.ruptureSpacingKm or settings.magnitudeStep',
+    `the fault ruptures would hold about ${total} rupture planes (one per trace segment a rupture covers, or per mesh cell of a contoured fault), over the limit of ${MAX_RUPTURE_PLANES} per study ` +
+      `(the most from sources.features[${largest.index}] "${source?.id ?? ''}", ${from}); ` +
+      'expected fewer: simplify the fault traces to fewer, longer segments, give contoured faults a larger meshSpacingKm, or use a larger settings.ruptureSpacingKm or settings.magnitudeStep',
   );
 }

@@ -66,7 +66,7 @@ function readPosition(
   return ok ? [lon as number, lat as number] : undefined;
 }
 
-function readPositions(
+export function readPositions(
   raw: unknown,
   minCount: number,
   issues: IssueList,
@@ -126,7 +126,7 @@ export function readSourceGeometry(
   ) {
     issues.add(
       [...path, 'type'],
-      `expected "LineString" (fault), "Polygon" (zone) or "Point", got ${describeValue(typeof raw === 'object' && raw ? type : raw)}`,
+      `expected "LineString" (fault), "MultiLineString" (depth contours of a fault), "Polygon" (zone) or "Point", got ${describeValue(typeof raw === 'object' && raw ? type : raw)}`,
     );
     return undefined;
   }

@@ -3,6 +3,7 @@ import type { Mechanism, Source } from '../engine/model.ts';
 import { TECTONIC_SETTINGS } from '../engine/model.ts';
 import { describeValue, identifier, numberIn, oneOf, text } from './fields.ts';
 import { formatPath, type IssueList } from './issues.ts';
+import { contourOutline, readContourDepths, readContourLines } from './contour-geometry.ts';
 import { readRecurrence } from './recurrence-schema.ts';
 import {
   MAX_STUDY_VERTICES,
@@ -30,6 +31,16 @@ const FAULT_KEYS = [
   'upperDepthKm',
   'lowerDepthKm',
 ];
+const CONTOUR_KEYS = [
+  'id',
+  'name',
+  'setting',
+  'mechanism',
+  'rake',
+  'recurrence',
+  'contourDepthsKm',
+  'meshSpacingKm',
+];
 const POINT_KEYS = ['id', 'name', 'setting', 'mechanism', 'rake', 'recurrence', 'depthKm'];
 
 const commonSchema = z.object({
@@ -48,6 +59,33 @@ const faultSchema = z.object({
 });
 
 const pointSchema = z.object({ depthKm: numberIn(DEPTH_KM) });
+
+const ZONE_KEYS = [...POINT_KEYS, 'depthFromSource', 'depths'];
+/** Weights of a zone's depths sum to 1 within this (as the logic tree's do). */
+const WEIGHT_SUM_SLACK = 1e-6;
+const zoneSchema = z.object({
+  depthKm: numberIn(DEPTH_KM).optional(),
+  depthFromSource: z
+    .object({ id: identifier(), offsetKm: numberIn({ min: -50, max: 300, unit: 'km' }).optional() })
+    .strict()
+    .optional(),
+  depths: z
+    .array(
+      z.object({
+        depthKm: numberIn(DEPTH_KM),
+        weight: numberIn({ min: 0, max: 1, minOpen: true }),
+      }),
+    )
+    .min(1)
+    .max(20)
+    .optional(),
+});
+
+/** Mesh spacing of a contoured fault, km: 5 km (the default rupture spacing) unless given. */
+const DEFAULT_MESH_SPACING_KM = 5;
+const contourSchema = z.object({
+  meshSpacingKm: numberIn({ min: 0.5, max: 50, unit: 'km' }).optional(),
+});
 
 /** The rake of a pure mechanism (Aki & Richards convention), degrees. */
 const RAKE_OF: Record<Mechanism, number> = { 'strike-slip': 0, reverse: 90, normal: -90 };
@@ -77,7 +115,10 @@ export function readSource(
   }
   const feature = raw as { geometry?: unknown; properties?: unknown };
   const propsPath = [...path, 'properties'];
-  const geometry = readSourceGeometry(feature.geometry, issues, [...path, 'geometry']);
+  const isContoured = (feature.geometry as { type?: unknown } | null)?.type === 'MultiLineString';
+  const geometry = isContoured
+    ? readContoured(feature.geometry, issues, [...path, 'geometry'])
+    : readSourceGeometry(feature.geometry, issues, [...path, 'geometry']);
   const props = feature.properties;
   if (typeof props !== 'object' || props === null) {
     issues.add(
@@ -86,8 +127,20 @@ export function readSource(
     );
     return undefined;
   }
-  const isFault = (feature.geometry as { type?: unknown } | null)?.type === 'LineString';
-  if (geometry) issues.warnUnknownKeys(props, isFault ? FAULT_KEYS : POINT_KEYS, propsPath);
+  const isFault =
+    isContoured || (feature.geometry as { type?: unknown } | null)?.type === 'LineString';
+  if (geometry)
+    issues.warnUnknownKeys(
+      props,
+      isContoured
+        ? CONTOUR_KEYS
+        : isFault
+          ? FAULT_KEYS
+          : geometry.kind === 'zone'
+            ? ZONE_KEYS
+            : POINT_KEYS,
+      propsPath,
+    );
 
   const common = issues.parse(commonSchema, props, propsPath);
   if (common && common.mechanism === undefined && common.rake === undefined) {
@@ -104,8 +157,27 @@ export function readSource(
     common?.id,
   );
   const shape = geometry
-    ? issues.parse(isFault ? faultSchema : pointSchema, props, propsPath)
+    ? issues.parse(
+        isContoured
+          ? contourSchema
+          : isFault
+            ? faultSchema
+            : geometry.kind === 'zone'
+              ? zoneSchema
+              : pointSchema,
+        props,
+        propsPath,
+      )
     : undefined;
+  const depthsKm =
+    geometry?.kind === 'contours'
+      ? readContourDepths(
+          (props as { contourDepthsKm?: unknown }).contourDepthsKm,
+          geometry.lines.length,
+          issues,
+          [...propsPath, 'contourDepthsKm'],
+        )
+      : undefined;
   if (
     !geometry ||
     !common ||
@@ -115,6 +187,7 @@ export function readSource(
   )
     return undefined;
 
+  if (geometry.kind === 'contours' && !depthsKm) return undefined;
   const rakeDeg = common.rake ?? RAKE_OF[common.mechanism as Mechanism];
   const base = {
     id: common.id,
@@ -124,6 +197,25 @@ export function readSource(
     rakeDeg,
     recurrence,
   };
+  if (geometry.kind === 'contours') {
+    const depths = depthsKm as number[];
+    const { dipDeg, dipDirectionDeg } = contourOutline(geometry.lines, depths);
+    return {
+      ...base,
+      kind: 'fault',
+      trace: geometry.lines[0] as [number, number][],
+      dipDeg,
+      dipDirectionDeg,
+      upperDepthKm: depths[0] as number,
+      lowerDepthKm: depths[depths.length - 1] as number,
+      contours: {
+        lines: geometry.lines,
+        depthsKm: depths,
+        meshSpacingKm:
+          (shape as z.output<typeof contourSchema>).meshSpacingKm ?? DEFAULT_MESH_SPACING_KM,
+      },
+    };
+  }
   if (geometry.kind === 'fault') {
     const f = shape as z.output<typeof faultSchema>;
     const upperDepthKm = f.upperDepthKm ?? 0;
@@ -144,10 +236,59 @@ export function readSource(
       lowerDepthKm: f.lowerDepthKm,
     };
   }
+  if (geometry.kind === 'zone') {
+    const zone = shape as z.output<typeof zoneSchema>;
+    const given = [zone.depthKm, zone.depthFromSource, zone.depths].filter((v) => v !== undefined);
+    if (given.length !== 1) {
+      issues.add(
+        [...propsPath, 'depthKm'],
+        `expected one of depthKm, depthFromSource ({ id, offsetKm }) or depths ([{ depthKm, weight }]), got ${given.length}`,
+      );
+      return undefined;
+    }
+    const weightSum = zone.depths?.reduce((sum, d) => sum + d.weight, 0) ?? 1;
+    if (Math.abs(weightSum - 1) > WEIGHT_SUM_SLACK) {
+      issues.add(
+        [...propsPath, 'depths'],
+        `expected weights summing to 1 (within ${WEIGHT_SUM_SLACK}), got ${weightSum}`,
+      );
+      return undefined;
+    }
+    const depthKm =
+      zone.depthKm ??
+      zone.depths?.reduce((sum, d) => sum + d.depthKm * d.weight, 0) ??
+      Math.max(0, zone.depthFromSource?.offsetKm ?? 0);
+    return {
+      ...base,
+      kind: 'zone',
+      rings: geometry.rings,
+      depthKm,
+      ...(zone.depthFromSource
+        ? {
+            depthFrom: {
+              sourceId: zone.depthFromSource.id,
+              offsetKm: zone.depthFromSource.offsetKm ?? 0,
+            },
+          }
+        : {}),
+      ...(zone.depths ? { depths: zone.depths } : {}),
+    };
+  }
   const { depthKm } = shape as z.output<typeof pointSchema>;
-  return geometry.kind === 'zone'
-    ? { ...base, kind: 'zone', rings: geometry.rings, depthKm }
-    : { ...base, kind: 'point', location: geometry.location, depthKm };
+  return { ...base, kind: 'point', location: geometry.location, depthKm };
+}
+
+/** A contoured fault's MultiLineString, as its lines (contour-geometry.ts). */
+function readContoured(
+  raw: unknown,
+  issues: IssueList,
+  path: readonly PropertyKey[],
+): { readonly kind: 'contours'; readonly lines: [number, number][][] } | undefined {
+  const lines = readContourLines((raw as { coordinates?: unknown }).coordinates, issues, [
+    ...path,
+    'coordinates',
+  ]);
+  return lines ? { kind: 'contours', lines } : undefined;
 }
 
 /** Validates a GeoJSON FeatureCollection of sources at `path`, with unique ids. */
@@ -203,6 +344,15 @@ export function readSources(
     }
     seen.set(source.id, i);
     out.push(source);
+  });
+  out.forEach((source) => {
+    if (source.kind !== 'zone' || !source.depthFrom) return;
+    const named = out.find((s) => s.id === source.depthFrom?.sourceId);
+    if (named?.kind === 'fault' && named.contours) return;
+    issues.add(
+      [...path, 'features', seen.get(source.id) as number, 'properties', 'depthFromSource', 'id'],
+      `expected the id of a source given by depth contours (a MultiLineString fault) in this study, got "${source.depthFrom.sourceId}"`,
+    );
   });
   return out;
 }

@@ -43,7 +43,8 @@ export function checkStudyExtent(
   communities.forEach((c, i) => consider([c.lon, c.lat], ['communities', i]));
   sources.forEach((source, i) => {
     const path = ['sources', 'features', i, 'geometry', 'coordinates'];
-    if (source.kind === 'fault') source.trace.forEach((p) => consider(p, path));
+    if (source.kind === 'fault')
+      (source.contours?.lines.flat() ?? source.trace).forEach((p) => consider(p, path));
     else if (source.kind === 'zone')
       source.rings.forEach((ring) => ring.forEach((p) => consider(p, path)));
     else consider(source.location, path);

@@ -30,6 +30,7 @@ export function shareTable(table: RuptureTable): RuptureTable {
     sourceIds: [...table.sourceIds],
     hypocentre: shared(table.hypocentre),
     planeStart: shared(table.planeStart),
+    traceEnd: shared(table.traceEnd),
     planeCorners: shared(table.planeCorners),
     isPoint: shared(table.isPoint),
     cellRule: shared(table.cellRule),

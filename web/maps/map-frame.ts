@@ -44,7 +44,7 @@ export interface MapFrameOptions {
 export function studyPoints(study: Pick<Study, 'communities' | 'sources' | 'outline'>): LonLat[] {
   const points: LonLat[] = study.communities.map((c) => [c.lon, c.lat] as const);
   for (const s of study.sources) {
-    if (s.kind === 'fault') points.push(...s.trace);
+    if (s.kind === 'fault') points.push(...(s.contours?.lines.flat() ?? s.trace));
     else if (s.kind === 'zone') for (const ring of s.rings) points.push(...ring);
     else points.push(s.location);
   }

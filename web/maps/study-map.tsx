@@ -38,6 +38,13 @@ const lineOf = (s: Source & { kind: 'fault' }) => ({
   type: 'LineString' as const,
   coordinates: s.trace.map((p) => [...p]),
 });
+/** A contoured fault's deeper contours (its top one is its trace), each with its depth, km. */
+const deeperContours = (s: Source & { kind: 'fault' }) =>
+  (s.contours?.lines ?? []).slice(1).map((line, k) => ({
+    line: { type: 'LineString' as const, coordinates: line.map((p) => [...p]) },
+    end: line[line.length - 1] as LonLat,
+    depthKm: s.contours?.depthsKm[k + 1] as number,
+  }));
 const polygonOf = (rings: Study['outline'] & object) => ({
   type: 'Polygon' as const,
   coordinates: rings.map((r) => r.map((p) => [...p])),
@@ -144,6 +151,33 @@ export function StudyMap(props: StudyMapProps) {
           const label = faultLabel(i);
           return (
             <g data-source={s.id}>
+              {deeperContours(s).map((contour) => {
+                const [x, y] = frame.project(contour.end);
+                return (
+                  <g class="map-contour" data-depth-km={contour.depthKm}>
+                    <path
+                      d={frame.path(contour.line)}
+                      fill="none"
+                      stroke={MAP_COLOURS.fault}
+                      stroke-width={1}
+                      stroke-dasharray="2 3"
+                    />
+                    <text
+                      x={x}
+                      y={y - 3}
+                      text-anchor="middle"
+                      font-size={10}
+                      fill={INK}
+                      paint-order="stroke"
+                      stroke={PAPER}
+                      stroke-width={3}
+                      lang={tr.fallbackLang('map.contourDepth')}
+                    >
+                      {tr.t('map.contourDepth', { depth: String(Math.round(contour.depthKm)) })}
+                    </text>
+                  </g>
+                );
+              })}
               {(interfaceLike || halo) && (
                 <path
                   d={frame.path(lineOf(s))}

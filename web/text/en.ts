@@ -463,6 +463,7 @@ export const EN = {
   'map.sea': 'Sea',
   'map.noOutline': 'No coastline: the study has no outline, so land and sea are not drawn',
   'map.fault': 'Fault (line on the surface)',
+  'map.contourDepth': '{depth} km deep',
   'map.interface': 'Subduction interface (top edge)',
   'map.zone': 'Zone of scattered earthquakes',
   'map.point': 'Point source',

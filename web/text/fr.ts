@@ -87,4 +87,5 @@ export const FR: Readonly<Partial<Record<TextKey, string>>> = {
 
   'error.notFound': 'Page introuvable',
   'error.home': 'Aller à la liste des études',
+  'map.contourDepth': 'à {depth} km de profondeur',
 };

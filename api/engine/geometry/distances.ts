@@ -9,8 +9,9 @@ import type { PointXY } from './projection.ts';
  * Source-to-site distances (km) of one rupture for a site at the ground surface, `site` in the
  * local frame. Definitions as in the NGA-West2 flatfile (Ancheta et al. 2014, from memory).
  *
- * Planar ruptures: Rjb and Rrup are the minima over the rupture's planes; Rx and Ry0 come from
- * the GC2 coordinates of the rupture's top edges taken together (gc2.ts, Spudich & Chiou 2015),
+ * Planar ruptures: Rjb and Rrup are the minima over the rupture's planes (on a contoured
+ * fault, its mesh cells); Rx and Ry0 come from the GC2 coordinates of the top edges of its top
+ * row of planes taken together (gc2.ts, Spudich & Chiou 2015),
  * which on a single plane are exactly the usual definitions; Rhypo and Repi are to the
  * hypocentre and the point above it.
  *
@@ -36,7 +37,9 @@ export function ruptureDistances(surface: RuptureSurface, site: PointXY): Distan
     rjbKm = Math.min(rjbKm, closestPointOnProjection(plane, site).distanceKm);
     rrupKm = Math.min(rrupKm, distanceToPlaneKm(plane, atSurface));
   }
-  const topEdges = surface.planes.map((p) => [p.corners[0], p.corners[1]] as const);
+  const topEdges = surface.planes
+    .slice(0, surface.tracePlanes ?? surface.planes.length)
+    .map((p) => [p.corners[0], p.corners[1]] as const);
   const { tKm, uKm, lengthKm } = traceCoordinates(topEdges, site);
   return { rjbKm, rrupKm, rxKm: tKm, ry0Km: ry0FromU(uKm, lengthKm), rhypoKm, repiKm };
 }

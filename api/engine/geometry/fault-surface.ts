@@ -2,6 +2,8 @@ import { InvalidInput } from '../errors.ts';
 import type { FaultSource } from '../model.ts';
 import type { PointKm, RupturePlane, RuptureSurface } from '../ruptures/rupture.ts';
 import { toRadians } from '../units.ts';
+import { contourMesh, type ContourMesh } from './contour-mesh.ts';
+import { meanDipDeg, meshPatch, pointOnMesh, type MeshPatch } from './mesh-patch.ts';
 import type { LocalFrame, PointXY } from './projection.ts';
 
 /** One straight piece of the top trace, in the local frame. */
@@ -48,6 +50,12 @@ export interface FaultSurface {
   /** sin and cos of the dip, worked out once: every corner of every floating rupture needs them. */
   readonly sinDip: number;
   readonly cosDip: number;
+  /**
+   * A contoured fault's mesh (contour-mesh.ts): then the surface is the mesh, lengthKm and
+   * widthKm are its along-strike and down-dip extents, areaKm2 the sum of its cells, dipDeg
+   * their area-weighted mean, and segments its top row.
+   */
+  readonly mesh?: ContourMesh;
 }
 
 /**
@@ -61,8 +69,82 @@ const MIN_SEGMENT_KM = 1e-9;
 const fieldError = (fault: FaultSource, field: string, message: string): InvalidInput =>
   new InvalidInput([{ path: field, message: `source "${fault.id}": ${message}` }]);
 
+/** The straight pieces of a trace (local km), repeated vertices skipped. */
+function traceSegments(points: readonly PointXY[]): TraceSegment[] {
+  const segments: TraceSegment[] = [];
+  let startKm = 0;
+  for (let i = 1; i < points.length; i++) {
+    const start = points[i - 1] as PointXY;
+    const end = points[i] as PointXY;
+    const lengthKm = Math.hypot(end.x - start.x, end.y - start.y);
+    if (lengthKm < MIN_SEGMENT_KM) continue;
+    const strike = { x: (end.x - start.x) / lengthKm, y: (end.y - start.y) / lengthKm };
+    segments.push({
+      start,
+      end,
+      strike,
+      downDip: { x: strike.y, y: -strike.x },
+      lengthKm,
+      startKm,
+    });
+    startKm += lengthKm;
+  }
+  return segments;
+}
+
+const centroid = (points: readonly PointXY[]): PointXY => ({
+  x: points.reduce((s, p) => s + p.x, 0) / points.length,
+  y: points.reduce((s, p) => s + p.y, 0) / points.length,
+});
+
+/**
+ * The mesh surface of a contoured fault. The contours are walked so the surface dips to the
+ * right of them (the right-hand rule of ruptures/rupture.ts): all reversed when the last
+ * contour lies to the left of the first one's overall strike (first to last point).
+ */
+function contouredSurface(
+  fault: FaultSource,
+  contours: NonNullable<FaultSource['contours']>,
+  frame: LocalFrame,
+): FaultSurface {
+  let lines = contours.lines.map((line) => line.map((p) => frame.toLocal(p)));
+  const top = lines[0] as PointXY[];
+  const first = top[0] as PointXY;
+  const last = top[top.length - 1] as PointXY;
+  const towards = centroid(lines[lines.length - 1] as PointXY[]);
+  const from = centroid(top);
+  const side =
+    (towards.x - from.x) * (last.y - first.y) - (towards.y - from.y) * (last.x - first.x);
+  const reversed = side < 0;
+  if (reversed) lines = lines.map((line) => [...line].reverse());
+  const mesh = contourMesh(
+    lines.map((points, i) => ({ points, depthKm: contours.depthsKm[i] as number })),
+    contours.meshSpacingKm,
+  );
+  const topRow = mesh.nodes.slice(0, mesh.columnCount);
+  const dipDeg = meanDipDeg(meshPatch(mesh, [0, Infinity], [0, Infinity]).planes);
+  const dipRad = toRadians(dipDeg);
+  const lengthKm = mesh.alongKm[mesh.columnCount - 1] as number;
+  const widthKm = mesh.downDipKm[mesh.rowCount - 1] as number;
+  return {
+    sourceId: fault.id,
+    segments: traceSegments(topRow),
+    dipDeg,
+    upperDepthKm: contours.depthsKm[0] as number,
+    lowerDepthKm: contours.depthsKm[contours.depthsKm.length - 1] as number,
+    lengthKm,
+    widthKm,
+    areaKm2: mesh.areaKm2,
+    reversed,
+    sinDip: Math.sin(dipRad),
+    cosDip: Math.cos(dipRad),
+    mesh,
+  };
+}
+
 /** The surface of a fault source in `frame` (km; depths km, dip degrees). */
 export function faultSurface(fault: FaultSource, frame: LocalFrame): FaultSurface {
+  if (fault.contours) return contouredSurface(fault, fault.contours, frame);
   const { dipDeg, upperDepthKm, lowerDepthKm } = fault;
   if (!(dipDeg > 0 && dipDeg <= 90))
     throw fieldError(fault, 'dip', `expected a dip in (0, 90] degrees, got ${dipDeg}`);
@@ -106,24 +188,8 @@ export function faultSurface(fault: FaultSource, frame: LocalFrame): FaultSurfac
   const reversed = side < 0;
   if (reversed) points = [...points].reverse();
 
-  const segments: TraceSegment[] = [];
-  let startKm = 0;
-  for (let i = 1; i < points.length; i++) {
-    const start = points[i - 1] as PointXY;
-    const end = points[i] as PointXY;
-    const lengthKm = Math.hypot(end.x - start.x, end.y - start.y);
-    if (lengthKm < MIN_SEGMENT_KM) continue;
-    const strike = { x: (end.x - start.x) / lengthKm, y: (end.y - start.y) / lengthKm };
-    segments.push({
-      start,
-      end,
-      strike,
-      downDip: { x: strike.y, y: -strike.x },
-      lengthKm,
-      startKm,
-    });
-    startKm += lengthKm;
-  }
+  const segments = traceSegments(points);
+  const startKm = segments.reduce((sum, segment) => sum + segment.lengthKm, 0);
   const widthKm = (lowerDepthKm - upperDepthKm) / Math.sin(dipRad);
   const sinDip = Math.sin(dipRad);
   return {
@@ -164,6 +230,7 @@ function pointOnSegment(
 
 /** The point `alongKm` along the top trace and `downDipKm` down dip from it (km). */
 export function pointOnSurface(surface: FaultSurface, alongKm: number, downDipKm: number): PointKm {
+  if (surface.mesh) return pointOnMesh(surface.mesh, alongKm, downDipKm);
   return pointOnSegment(surface, segmentAt(surface, alongKm), alongKm, downDipKm);
 }
 
@@ -195,11 +262,30 @@ export function surfacePatch(
   return planes;
 }
 
+/**
+ * The part of any fault surface between `alongKm` and `downDipKm` (km): surfacePatch's planes
+ * on a planar fault (each spanning the part's width, so all make its top trace), the cut cells
+ * of a contoured fault's mesh (mesh-patch.ts).
+ */
+export function surfacePiece(
+  surface: FaultSurface,
+  alongKm: readonly [from: number, to: number],
+  downDipKm: readonly [from: number, to: number],
+): MeshPatch {
+  if (surface.mesh) return meshPatch(surface.mesh, alongKm, downDipKm);
+  const planes = surfacePatch(surface, alongKm, downDipKm);
+  return { planes, tracePlanes: planes.length };
+}
+
 /** The whole fault surface as a rupture surface, hypocentre at its centre. */
 export function wholeSurface(surface: FaultSurface): RuptureSurface {
-  return {
-    kind: 'planes',
-    planes: surfacePatch(surface, [0, surface.lengthKm], [0, surface.widthKm]),
-    hypocentre: pointOnSurface(surface, surface.lengthKm / 2, surface.widthKm / 2),
-  };
+  const { planes, tracePlanes } = surfacePiece(
+    surface,
+    [0, surface.lengthKm],
+    [0, surface.widthKm],
+  );
+  const hypocentre = pointOnSurface(surface, surface.lengthKm / 2, surface.widthKm / 2);
+  return tracePlanes === planes.length
+    ? { kind: 'planes', planes, hypocentre }
+    : { kind: 'planes', planes, hypocentre, tracePlanes };
 }

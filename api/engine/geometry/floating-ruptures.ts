@@ -1,12 +1,20 @@
 import { InvalidInput } from '../errors.ts';
 import type { PointKm, RupturePlane } from '../ruptures/rupture.ts';
-import { pointOnSurface, surfacePatch, type FaultSurface } from './fault-surface.ts';
+import { pointOnSurface, surfacePiece, type FaultSurface } from './fault-surface.ts';
+import { meanDipDeg } from './mesh-patch.ts';
 import type { RuptureDimensions } from './rupture-scaling.ts';
 
 /** One position of a rupture of fixed size on a fault surface. */
 export interface FloatingRupture {
-  /** One plane per trace segment the rupture covers, in trace order. */
+  /**
+   * One plane per trace segment the rupture covers, in trace order; on a contoured fault its
+   * cut mesh cells, rows from the top down (fault-surface.ts surfacePiece).
+   */
   readonly planes: readonly RupturePlane[];
+  /** How many leading planes make the top row (its top trace, for GC2). */
+  readonly tracePlanes: number;
+  /** The rupture's dip, degrees: the fault's, or on a mesh its planes' area-weighted mean. */
+  readonly dipDeg: number;
   /** The rupture's centre, common practice for the hypocentre of a floating rupture. */
   readonly hypocentre: PointKm;
   /** Depth of the rupture's top edge, km. */
@@ -89,6 +97,16 @@ export function floatingRuptures(
   return ruptures;
 }
 
+/** Depth of the shallowest point of the top edges of the first `tracePlanes` planes, km. */
+function topDepthKm(planes: readonly RupturePlane[], tracePlanes: number): number {
+  let depthKm = Infinity;
+  for (let p = 0; p < tracePlanes; p++) {
+    const [a, b] = (planes[p] as RupturePlane).corners;
+    depthKm = Math.min(depthKm, a.z, b.z);
+  }
+  return depthKm;
+}
+
 /**
  * The rupture of `size` (already fitted to the fault) starting `alongKm` along the top trace
  * and `downDipKm` down dip from it, km.
@@ -100,10 +118,19 @@ export function floatingRuptureAt(
   downDipKm: number,
 ): FloatingRupture {
   const { lengthKm, widthKm } = size;
+  const { planes, tracePlanes } = surfacePiece(
+    surface,
+    [alongKm, alongKm + lengthKm],
+    [downDipKm, downDipKm + widthKm],
+  );
   return {
-    planes: surfacePatch(surface, [alongKm, alongKm + lengthKm], [downDipKm, downDipKm + widthKm]),
+    planes,
+    tracePlanes,
+    dipDeg: surface.mesh ? meanDipDeg(planes) : surface.dipDeg,
     hypocentre: pointOnSurface(surface, alongKm + lengthKm / 2, downDipKm + widthKm / 2),
-    ztorKm: surface.upperDepthKm + downDipKm * surface.sinDip,
+    ztorKm: surface.mesh
+      ? topDepthKm(planes, tracePlanes)
+      : surface.upperDepthKm + downDipKm * surface.sinDip,
     lengthKm,
     widthKm,
     alongKm,

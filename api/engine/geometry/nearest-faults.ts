@@ -2,9 +2,9 @@ import { bearing } from '@turf/turf';
 import type { FaultSource, LonLat, Source } from '../model.ts';
 import type { NearestFault } from '../results.ts';
 import { normaliseAzimuthDeg } from '../units.ts';
-import type { RupturePlane } from '../ruptures/rupture.ts';
 import { ruptureDistances } from './distances.ts';
 import { faultSurface, wholeSurface } from './fault-surface.ts';
+import { depthBelowPlaneKm } from './depth-below.ts';
 import { closestPointOnProjection } from './plane-distance.ts';
 import type { LocalFrame, PointXY } from './projection.ts';
 
@@ -16,21 +16,6 @@ function closestOnLine(p: PointXY, a: PointXY, b: PointXY): PointXY {
   const t =
     lengthSq === 0 ? 0 : Math.min(1, Math.max(0, ((p.x - a.x) * dx + (p.y - a.y) * dy) / lengthSq));
   return { x: a.x + dx * t, y: a.y + dy * t };
-}
-
-/**
- * Depth of a plane straight below `site`, km, or undefined when the site is not above it (or
- * the plane is vertical). The plane through corner 0 with normal n holds the points with
- * n · (p − c0) = 0; solved for z at the site's x and y.
- */
-function depthBelowPlaneKm(plane: RupturePlane, site: PointXY): number | undefined {
-  if (closestPointOnProjection(plane, site).distanceKm > 0) return undefined;
-  const [c0, c1, , c3] = plane.corners;
-  const u = { x: c1.x - c0.x, y: c1.y - c0.y, z: c1.z - c0.z };
-  const v = { x: c3.x - c0.x, y: c3.y - c0.y, z: c3.z - c0.z };
-  const n = { x: u.y * v.z - u.z * v.y, y: u.z * v.x - u.x * v.z, z: u.x * v.y - u.y * v.x };
-  if (Math.abs(n.z) < 1e-9 * Math.hypot(n.x, n.y, n.z)) return undefined;
-  return c0.z - (n.x * (site.x - c0.x) + n.y * (site.y - c0.y)) / n.z;
 }
 
 function nearestOf(

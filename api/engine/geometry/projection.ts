@@ -71,7 +71,7 @@ export function createLocalFrame(origin: LonLat): LocalFrame {
 export function frameForStudy(study: Pick<Study, 'communities' | 'sources'>): LocalFrame {
   const points: LonLat[] = [];
   for (const source of study.sources) {
-    if (source.kind === 'fault') points.push(...source.trace);
+    if (source.kind === 'fault') points.push(...(source.contours?.lines.flat() ?? source.trace));
     else if (source.kind === 'zone') for (const ring of source.rings) points.push(...ring);
     else points.push(source.location);
   }

@@ -46,6 +46,7 @@ export class RuptureTableBuilder {
   sourceIndex = new Int32Array(FIRST_CAPACITY);
   hypocentre = new Float64Array(3 * FIRST_CAPACITY);
   planeStart = new Int32Array(FIRST_CAPACITY + 1);
+  traceEnd = new Int32Array(FIRST_CAPACITY);
   isPoint = new Uint8Array(FIRST_CAPACITY);
   cellRule = new Uint8Array(FIRST_CAPACITY);
   cellCentre = new Float64Array(2 * FIRST_CAPACITY);
@@ -68,6 +69,7 @@ export class RuptureTableBuilder {
     this.sourceIndex = grown(this.sourceIndex, capacity);
     this.hypocentre = grown(this.hypocentre, 3 * capacity);
     this.planeStart = grown(this.planeStart, capacity + 1);
+    this.traceEnd = grown(this.traceEnd, capacity);
     this.isPoint = grown(this.isPoint, capacity);
     this.cellRule = grown(this.cellRule, capacity);
     this.cellCentre = grown(this.cellCentre, 2 * capacity);
@@ -97,6 +99,7 @@ export class RuptureTableBuilder {
     this.hypocentre[3 * i + 1] = h.y;
     this.hypocentre[3 * i + 2] = h.z;
     this.planeStart[i] = this.planes;
+    this.traceEnd[i] = this.planes;
     const use = rupture.cellUse;
     if (use) {
       this.cellRule[i] = use.near ? 2 : 1;
@@ -128,6 +131,7 @@ export class RuptureTableBuilder {
         corners[at++] = corner.z;
       }
     }
+    this.traceEnd[i] = this.planes + (surface.tracePlanes ?? planes.length);
     this.planes += planes.length;
   }
 
@@ -149,6 +153,7 @@ export class RuptureTableBuilder {
       sourceIds: this.sourceIds,
       hypocentre: trimmed(this.hypocentre, 3 * count),
       planeStart: trimmed(this.planeStart, count + 1),
+      traceEnd: trimmed(this.traceEnd, count),
       planeCorners: trimmed(this.planeCorners, PLANE_STRIDE * planes),
       isPoint: trimmed(this.isPoint, count),
       cellRule: trimmed(this.cellRule, count),

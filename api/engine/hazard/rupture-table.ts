@@ -35,6 +35,11 @@ export interface RuptureTable {
   readonly hypocentre: Float64Array;
   /** Planes of rupture i are planeStart[i] .. planeStart[i + 1] − 1; a point rupture has none. */
   readonly planeStart: Int32Array;
+  /**
+   * Planes planeStart[i] .. traceEnd[i] − 1 make rupture i's top row, whose top edges are its
+   * trace for GC2 (all its planes but on a contoured fault's mesh).
+   */
+  readonly traceEnd: Int32Array;
   /** PLANE_STRIDE numbers per plane: corners in RupturePlane order, x, y, z each. */
   readonly planeCorners: Float64Array;
   /** 1 where the rupture is a point (zone cell or point source), 0 where it is planar. */

@@ -200,7 +200,7 @@ function rrupKm(g: RuptureGeometry, first: number, last: number, px: number, py:
   return Math.sqrt(best);
 }
 
-/** GC2 T (Rx) and Ry0 of rupture i's top edges (geometry/gc2.ts); written to out at k. */
+/** GC2 T (Rx) and Ry0 of the top edges of planes first .. last − 1 (geometry/gc2.ts); written to out at k. */
 function gc2(
   planes: Float64Array,
   first: number,
@@ -239,7 +239,7 @@ function gc2(
 export function siteDistances(options: SiteDistancesOptions, out: PairBuffer): void {
   const { geometry, ruptures, maxDistanceKm, distances } = options;
   const { table, planes, bounds } = geometry;
-  const { planeStart, hypocentre, cellRule } = table;
+  const { planeStart, traceEnd, hypocentre, cellRule } = table;
   const {
     rupture,
     rjbKm: rjbOut,
@@ -305,7 +305,7 @@ export function siteDistances(options: SiteDistancesOptions, out: PairBuffer): v
     }
     rupture[count] = local;
     if (wantRrup) rrupOut[count] = rrupKm(geometry, first, last, px, py);
-    if (wantGc2) gc2(planes, first, last, px, py, sums, out, count);
+    if (wantGc2) gc2(planes, first, traceEnd[i] as number, px, py, sums, out, count);
     if (wantRhypo || wantRepi) {
       const repiSq = ex * ex + ey * ey;
       repiOut[count] = Math.sqrt(repiSq);

@@ -26,7 +26,7 @@ export function studyRuptureTable(study: Study): StudyRuptureTable {
     builder.add(placed, binRate * placed.share);
   const sites = communitySites(study, frame);
   study.sources.forEach((source, i) =>
-    visitSourceRuptures(source, i, frame, study.settings, add, sites),
+    visitSourceRuptures(source, i, frame, study.settings, add, sites, study.sources),
   );
   // One entry per source, as the sources' walk numbers them ('' for a source without ruptures).
   while (builder.sourceIds.length < study.sources.length) builder.sourceIds.push('');

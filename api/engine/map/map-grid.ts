@@ -49,7 +49,7 @@ export function studyBounds(
 ): LonLatBounds {
   const points: LonLat[] = study.communities.map((c) => [c.lon, c.lat] as const);
   for (const source of study.sources) {
-    if (source.kind === 'fault') points.push(...source.trace);
+    if (source.kind === 'fault') points.push(...(source.contours?.lines.flat() ?? source.trace));
     else if (source.kind === 'zone') for (const ring of source.rings) points.push(...ring);
     else points.push(source.location);
   }

@@ -67,9 +67,17 @@ export function visitSourceRuptures(
   settings: Settings,
   visit: (placed: PlacedRupture, binRate: number) => void,
   sites: readonly PointXY[] = [],
+  sources: readonly Source[] = [],
 ): void {
   inSource(sourceIndex, () => {
-    const prepared: PreparedSource = prepareSource(source, sourceIndex, frame, settings, sites);
+    const prepared: PreparedSource = prepareSource(
+      source,
+      sourceIndex,
+      frame,
+      settings,
+      sites,
+      sources,
+    );
     const areaKm2 = prepared.kind === 'fault' ? prepared.surface.areaKm2 : undefined;
     // Over the source's logic tree, the weighted mean rate of each magnitude (exact for the mean hazard).
     const bins = treeMagnitudeBins(source.recurrence, settings, areaKm2);
@@ -91,6 +99,7 @@ export function discretiseSource(
   frame: LocalFrame,
   settings: Settings,
   sites: readonly PointXY[] = [],
+  sources: readonly Source[] = [],
 ): Rupture[] {
   const ruptures: Rupture[] = [];
   visitSourceRuptures(
@@ -100,6 +109,7 @@ export function discretiseSource(
     settings,
     (placed, binRate) => ruptures.push(toRupture(placed, binRate)),
     sites,
+    sources,
   );
   return ruptures;
 }
@@ -119,7 +129,7 @@ export function discretiseStudy(study: Study): DiscretisedStudy {
   return {
     frame,
     ruptures: study.sources.flatMap((source, i) =>
-      discretiseSource(source, i, frame, study.settings, sites),
+      discretiseSource(source, i, frame, study.settings, sites, study.sources),
     ),
   };
 }

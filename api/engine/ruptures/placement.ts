@@ -10,6 +10,7 @@ import { refineRadiusKm, REFINE_PARTS } from '../geometry/cell-refinement.ts';
 import { subdivideZoneCell, zoneCells, type ZoneCell } from '../geometry/zone-cells.ts';
 import type { FaultSource, PointSource, Settings, Source, ZoneSource } from '../model.ts';
 import { pointRuptureContext } from './point-rupture.ts';
+import { zoneDepths, type DepthsAt } from './zone-depths.ts';
 import type { RuptureContext } from '../motion/types.ts';
 import type { Rupture, RuptureSurface } from './rupture.ts';
 
@@ -30,6 +31,8 @@ export type PreparedSource =
       /** The squares of the cells refined near a community, by cell index (geometry/cell-refinement.ts). */
       readonly refined: ReadonlyMap<number, readonly ZoneCell[]>;
       readonly refineRadiusKm: number;
+      /** Hypocentral depths at a cell centre (zone-depths.ts). */
+      readonly depthsAt: DepthsAt;
     }
   | {
       readonly kind: 'point';
@@ -43,7 +46,8 @@ export type PlacedRupture = Omit<Rupture, 'annualRate'> & { readonly share: numb
 
 /**
  * The geometry of `source` in `frame`: a fault surface, zone cells (those near any of `sites`
- * refined, geometry/cell-refinement.ts), or a point.
+ * refined, geometry/cell-refinement.ts) with their depths (a zone may take them from another of
+ * the study's `sources`, zone-depths.ts), or a point.
  */
 export function prepareSource(
   source: Source,
@@ -51,6 +55,7 @@ export function prepareSource(
   frame: LocalFrame,
   settings: Pick<Settings, 'ruptureSpacingKm' | 'zoneCellKm'>,
   sites: readonly PointXY[] = [],
+  sources: readonly Source[] = [],
 ): PreparedSource {
   if (source.kind === 'fault') {
     return {
@@ -69,7 +74,15 @@ export function prepareSource(
       if (sites.some((p) => Math.hypot(p.x - cell.centre.x, p.y - cell.centre.y) <= radiusKm))
         refined.set(k, subdivideZoneCell(source, frame, cell, REFINE_PARTS));
     });
-    return { kind: 'zone', source, sourceIndex, cells, refined, refineRadiusKm: radiusKm };
+    return {
+      kind: 'zone',
+      source,
+      sourceIndex,
+      cells,
+      refined,
+      refineRadiusKm: radiusKm,
+      depthsAt: zoneDepths(source, sources, frame),
+    };
   }
   return { kind: 'point', source, sourceIndex, location: frame.toLocal(source.location) };
 }
@@ -106,42 +119,47 @@ export function placeRuptures(prepared: PreparedSource, magnitude: number): Plac
       });
     return placed;
   }
-  const context = pointRuptureContext(prepared.source, magnitude);
-  const depthKm = prepared.source.depthKm;
   if (prepared.kind === 'zone') {
     const placed: PlacedRupture[] = [];
     const radiusKm = prepared.refineRadiusKm;
+    const contexts = new Map<number, RuptureContext>();
+    const contextAt = (depthKm: number): RuptureContext => {
+      let context = contexts.get(depthKm);
+      if (!context) {
+        context = pointRuptureContext(prepared.source, magnitude, depthKm);
+        contexts.set(depthKm, context);
+      }
+      return context;
+    };
+    // One rupture per depth of the cell (or square), its share split by the depths' weights.
+    const place = (at: ZoneCell, cellUse?: PlacedRupture['cellUse']): void => {
+      for (const { depthKm, weight } of prepared.depthsAt(at.centre)) {
+        const surface = {
+          kind: 'point' as const,
+          hypocentre: { x: at.centre.x, y: at.centre.y, z: depthKm },
+        };
+        const share = at.share * weight;
+        const context = contextAt(depthKm);
+        placed.push(
+          cellUse
+            ? { sourceIndex, sourceId, share, context, surface, cellUse }
+            : { sourceIndex, sourceId, share, context, surface },
+        );
+      }
+    };
     prepared.cells.forEach((cell, k) => {
       const squares = prepared.refined.get(k);
-      const point = (at: ZoneCell) => ({
-        kind: 'point' as const,
-        hypocentre: { x: at.centre.x, y: at.centre.y, z: depthKm },
-      });
       if (!squares) {
-        placed.push({ sourceIndex, sourceId, share: cell.share, context, surface: point(cell) });
+        place(cell);
         return;
       }
-      placed.push({
-        sourceIndex,
-        sourceId,
-        share: cell.share,
-        context,
-        surface: point(cell),
-        cellUse: { centre: cell.centre, radiusKm, near: false },
-      });
-      for (const square of squares) {
-        placed.push({
-          sourceIndex,
-          sourceId,
-          share: square.share,
-          context,
-          surface: point(square),
-          cellUse: { centre: cell.centre, radiusKm, near: true },
-        });
-      }
+      place(cell, { centre: cell.centre, radiusKm, near: false });
+      for (const square of squares) place(square, { centre: cell.centre, radiusKm, near: true });
     });
     return placed;
   }
+  const context = pointRuptureContext(prepared.source, magnitude);
+  const depthKm = prepared.source.depthKm;
   const { x, y } = prepared.location;
   return [
     {
@@ -160,24 +178,23 @@ function faultContext(
   magnitude: number,
   p: FloatingRupture,
 ): RuptureContext {
-  const { source, surface } = prepared;
+  const { source } = prepared;
   return {
     magnitude,
     rakeDeg: source.rakeDeg,
     mechanism: source.mechanism,
     setting: source.setting,
-    dipDeg: surface.dipDeg,
+    dipDeg: p.dipDeg,
     ztorKm: p.ztorKm,
     widthKm: p.widthKm,
     hypoDepthKm: p.hypocentre.z,
   };
 }
 
-const faultSurfaceOf = (p: FloatingRupture): RuptureSurface => ({
-  kind: 'planes',
-  planes: p.planes,
-  hypocentre: p.hypocentre,
-});
+const faultSurfaceOf = (p: FloatingRupture): RuptureSurface =>
+  p.tracePlanes === p.planes.length
+    ? { kind: 'planes', planes: p.planes, hypocentre: p.hypocentre }
+    : { kind: 'planes', planes: p.planes, hypocentre: p.hypocentre, tracePlanes: p.tracePlanes };
 
 /** A rupture (without rate) of a prepared fault at one floating position. */
 export function faultRupture(

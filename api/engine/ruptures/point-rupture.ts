@@ -30,6 +30,7 @@ const HYPOCENTRE_DOWN_DIP_FRACTION = 0.6;
 export function pointRuptureContext(
   source: ZoneSource | PointSource,
   magnitude: number,
+  depthKm: number = source.depthKm,
 ): RuptureContext {
   const dipDeg = POINT_DIP_DEG[source.mechanism];
   const { widthKm } = scaledDimensions(
@@ -37,7 +38,7 @@ export function pointRuptureContext(
     magnitude,
   );
   const ztorKm = Math.max(
-    source.depthKm - HYPOCENTRE_DOWN_DIP_FRACTION * widthKm * Math.sin(toRadians(dipDeg)),
+    depthKm - HYPOCENTRE_DOWN_DIP_FRACTION * widthKm * Math.sin(toRadians(dipDeg)),
     0,
   );
   return {
@@ -48,6 +49,6 @@ export function pointRuptureContext(
     dipDeg,
     ztorKm,
     widthKm,
-    hypoDepthKm: source.depthKm,
+    hypoDepthKm: depthKm,
   };
 }

@@ -25,6 +25,11 @@ export type RuptureSurface =
       readonly kind: 'planes';
       readonly planes: readonly RupturePlane[];
       readonly hypocentre: PointKm;
+      /**
+       * How many leading planes make the rupture's top row, whose top edges are its top trace
+       * (for GC2); all of them when absent (a planar fault's planes each span the rupture's width).
+       */
+      readonly tracePlanes?: number;
     }
   | { readonly kind: 'point'; readonly hypocentre: PointKm };
 

@@ -106,7 +106,7 @@ export function runScenario(
     );
   }
   const frame = frameForStudy(study);
-  const prepared = prepareSource(source, sourceIndex, frame, study.settings);
+  const prepared = prepareSource(source, sourceIndex, frame, study.settings, [], study.sources);
   const candidates = candidateRuptures(prepared, request.magnitude);
   const measures = scenarioMeasures(study);
   const branches = study.groundMotion[source.setting].map((b) => {

@@ -42,7 +42,7 @@ export function scenarioTsunami(
     ]);
   }
   const frame = frameForStudy(study);
-  const prepared = prepareSource(source, sourceIndex, frame, study.settings);
+  const prepared = prepareSource(source, sourceIndex, frame, study.settings, [], study.sources);
   const candidates = candidateRuptures(prepared, request.magnitude);
   const position = request.position ?? 'closest';
   let fixed: ScenarioRupture | undefined;

@@ -54,6 +54,33 @@ export function faultKm(
   };
 }
 
+/**
+ * A fault given by depth contours drawn in local km (lines in order down dip, one depth each,
+ * km); its trace, depths and dip are the outline the study schema would give it.
+ */
+export function contouredKm(
+  linesKm: readonly (readonly (readonly [number, number])[])[],
+  depthsKm: readonly number[],
+  options: Omit<FaultOptions, 'upperDepthKm' | 'lowerDepthKm'> & {
+    readonly meshSpacingKm?: number;
+  },
+  frame: LocalFrame = FRAME,
+): FaultSource {
+  const lines = linesKm.map((line) => toLonLat(line, frame));
+  return {
+    ...faultKm(
+      linesKm[0] as (readonly [number, number])[],
+      {
+        ...options,
+        upperDepthKm: depthsKm[0] as number,
+        lowerDepthKm: depthsKm[depthsKm.length - 1] as number,
+      },
+      frame,
+    ),
+    contours: { lines, depthsKm, meshSpacingKm: options.meshSpacingKm ?? 5 },
+  };
+}
+
 export function zoneKm(
   ringsKm: readonly (readonly (readonly [number, number])[])[],
   recurrence: Recurrence,

@@ -9,12 +9,14 @@ import type { DistanceName } from '../../../api/engine/motion/types.ts';
 import { discretiseSource } from '../../../api/engine/ruptures/discretise.ts';
 import type { Rupture } from '../../../api/engine/ruptures/rupture.ts';
 import { expectClose } from '../../helpers/close.ts';
-import { FRAME, SETTINGS, faultKm, pointKm, zoneKm } from '../geometry/km-fixtures.ts';
+import { FRAME, SETTINGS, contouredKm, faultKm, pointKm, zoneKm } from '../geometry/km-fixtures.ts';
 
 /*
  * The fast path's distances against geometry/distances.ts (the reference, itself checked by hand
  * in test/engine/geometry/distances.test.ts), for ruptures of hand-made sources (test scaffolding):
- * a bent dipping reverse fault, a vertical strike-slip fault, a zone and a point, plus planes that
+ * a bent dipping reverse fault, a vertical strike-slip fault, a zone, a point and a bent surface
+ * given by depth contours (whose ruptures are rows of mesh cells, only the top row's edges
+ * making the GC2 trace), plus planes that
  * are not rectangles, which take the general path. Tolerance 1e-9 km: the two differ only in
  * rounding (√ for Math.hypot, a rectangle's own axes for the quadrilateral tests).
  */
@@ -76,6 +78,20 @@ const ruptures: Rupture[] = [
     SETTINGS,
   ),
   ...discretiseSource(pointKm(-10, 70, M6, 12), 3, FRAME, SETTINGS),
+  ...discretiseSource(
+    contouredKm(
+      [0, 8, 20].map((eastKm): [number, number][] => [
+        [100 + eastKm, 100],
+        [120 + eastKm, 130 + eastKm / 4],
+        [118 + eastKm, 160],
+      ]),
+      [2, 10, 22],
+      { dipDeg: 40, dipDirectionDeg: 90, mechanism: 'reverse', recurrence: M6 },
+    ),
+    4,
+    FRAME,
+    SETTINGS,
+  ),
 ];
 // A skewed quadrilateral and a trapezoid (not rectangles): corners in RupturePlane order.
 const skewed: Rupture = {
@@ -121,6 +137,14 @@ const coordinate = (min: number, max: number) =>
 
 describe('siteDistances (the fast path) against ruptureDistances (the reference)', () => {
   it('gives every distance of every rupture within 1e-9 km, at generated sites near and far', () => {
+    // The contoured source's ruptures have rows below their top row.
+    expect(
+      all.some(
+        (r) =>
+          r.surface.kind === 'planes' &&
+          (r.surface.tracePlanes ?? Infinity) < r.surface.planes.length,
+      ),
+    ).toBe(true);
     const buffer = createPairBuffer(all.length);
     fc.assert(
       fc.property(coordinate(-150, 200), coordinate(-150, 250), (x, y) => {
