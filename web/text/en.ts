@@ -213,6 +213,8 @@ export const EN = {
   'community.site': 'Ground: Vs30 {vs30} m/s ({basis}).',
   'community.site.measured': 'given',
   'community.site.site-class': 'from site class {siteClass}',
+  'community.site.slope-proxy':
+    'estimated from the slope of the land, not measured: class {siteClass}, likely {min} to {max} m/s',
   'community.people': '{people} people live here.',
   'community.coastal': 'This place is on the coast.',
   'community.warnings': 'Notes from the screening',
