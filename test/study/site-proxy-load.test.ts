@@ -1,8 +1,12 @@
-import { describe, expect, it } from 'vitest';
+import { mkdtemp, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
 import { createElevationGrid } from '../../api/engine/terrain/elevation-grid.ts';
 import { siteProxy } from '../../api/engine/terrain/site-proxy.ts';
 import { loadStudy } from '../../api/study/load-study.ts';
 import { readCommunitiesCsv } from '../../api/study/communities-csv.ts';
+import { readStudyFile } from '../../api/study/read-study-file.ts';
 import { expectRelative } from '../helpers/close.ts';
 import { testCatalog } from '../helpers/test-catalog.ts';
 import { validStudy } from './fixtures.ts';
@@ -84,5 +88,42 @@ describe('communities without vs30 or site class', () => {
     );
     expect(read.issues.issues).toEqual([]);
     expect(read.communities[0]?.vs30Basis).toBe('slope-proxy');
+  });
+});
+
+describe('readStudyFile with a terrain grid beside the study', () => {
+  // Project-made files in a temporary folder: an ESRI ASCII grid of 0.01° cells over the fixture
+  // study, land rising 1,000 m per degree of longitude eastwards, and the fixture study naming it
+  // with its first community's vs30 removed.
+  const dirs: string[] = [];
+  afterAll(() => Promise.all(dirs.map((d) => rm(d, { recursive: true, force: true }))));
+  async function studyBeside(terrainText: string | undefined): Promise<string> {
+    const dir = await mkdtemp(join(tmpdir(), 'tremora-proxy-'));
+    dirs.push(dir);
+    if (terrainText !== undefined) await writeFile(join(dir, 'ramp.asc'), terrainText);
+    const path = join(dir, 'proxy.study.json');
+    await writeFile(path, JSON.stringify({ ...withoutSite(), terrain: 'ramp.asc' }));
+    return path;
+  }
+  const asc = () => {
+    const grid = rampGrid();
+    const rows: string[] = [];
+    for (let r = 0; r < grid.rows; r += 1)
+      rows.push(
+        Array.from(grid.elevationM.subarray(r * grid.columns, (r + 1) * grid.columns)).join(' '),
+      );
+    return `ncols ${grid.columns}\nnrows ${grid.rows}\nxllcorner -141\nyllcorner -48\ncellsize 0.01\nNODATA_value -9999\n${rows.join('\n')}\n`;
+  };
+
+  it('reads the grid and gives the community without a site the proxy', async () => {
+    const result = await readStudyFile(await studyBeside(asc()), testCatalog);
+    if (!result.ok) throw new Error(JSON.stringify(result.issues));
+    expect(result.study.communities[0]?.vs30Basis).toBe('slope-proxy');
+  });
+
+  it('names the missing grid when a community needed it', async () => {
+    const result = await readStudyFile(await studyBeside(undefined), testCatalog);
+    expect(result.ok).toBe(false);
+    if (!result.ok) expect(result.issues.map((i) => i.path)).toContain('terrain');
   });
 });
