@@ -393,6 +393,11 @@ export const EN = {
   'catalog.col.why': 'Why',
   'catalog.nonMoment':
     '{n} events have a magnitude type other than moment magnitude; the fit leaves them out.',
+  'catalog.convert.legend':
+    'Convert other magnitudes to moment magnitude (by a published relation; check its coefficients against the paper)',
+  'catalog.convert.submit': 'Fit again',
+  'catalog.convert.done':
+    '{n} {scale} events converted to moment magnitude by {source} and marked as converted; {outside} outside its range left out.',
   'catalog.declustered':
     'Declustering (Gardner and Knopoff 1974) kept {main} main shocks and set aside {removed} fore- and aftershocks.',
   'catalog.fit': 'How often earthquakes come',
