@@ -1,19 +1,10 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { saveHeavyStudy } from './helpers/heavy-study.ts';
 import { getRun, startRun, waitForStatus } from './helpers/runs.ts';
-import { type ServiceProcess, startService, tempDir, waitFor } from './helpers/service-process.ts';
+import { waitFor, serviceForFile } from './helpers/service-process.ts';
 
 /** Health is answered while a heavy run (helpers/heavy-study.ts) computes; its latency is in the benchmark. */
-const dir = tempDir();
-let service: ServiceProcess;
-
-beforeAll(async () => {
-  service = await startService({ databasePath: `${dir.path}/busy.db` });
-});
-afterAll(async () => {
-  await service?.stop();
-  dir.remove();
-});
+const service = serviceForFile('busy');
 
 describe('while a heavy study computes', () => {
   it('health answers, the run reports progress, and it can be cancelled', async () => {
@@ -31,9 +22,11 @@ describe('while a heavy study computes', () => {
     }
     expect((await service.fetch('/api/studies')).status).toBe(200);
     // A run reports progress after each community's branch.
+    // Waits as long as a busy machine needs (up to 5 minutes); nothing asserted depends on speed.
     const moving = await waitFor(
       () => getRun(service, run.id),
       (r) => r.progress > 0,
+      3_000,
     );
     expect(moving.status).toBe('running');
     expect(moving.progress).toBeGreaterThan(0);
@@ -48,5 +41,5 @@ describe('while a heavy study computes', () => {
       workers: { runs: { alive: number; busy: number } };
     };
     expect(after.workers.runs).toMatchObject({ alive: 1, busy: 0 });
-  });
+  }, 420_000);
 });

@@ -398,6 +398,8 @@ export const EN = {
   'catalog.convert.submit': 'Fit again',
   'catalog.convert.done':
     '{n} {scale} events converted to moment magnitude by {source} and marked as converted; {outside} outside its range left out.',
+  'catalog.withoutDepth':
+    '{n} earthquakes have no depth: they count in the recurrence fit and are left out of the felt history, which needs the distance to the hypocentre.',
   'catalog.declustered':
     'Declustering (Gardner and Knopoff 1974) kept {main} main shocks and set aside {removed} fore- and aftershocks.',
   'catalog.fit': 'How often earthquakes come',

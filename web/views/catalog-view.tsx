@@ -179,6 +179,13 @@ export function CatalogView(props: CatalogViewProps) {
               })}
             </p>
           ))}
+          {analysis.load.summary.withoutDepth > 0 && (
+            <p data-without-depth={analysis.load.summary.withoutDepth}>
+              {tr.text('catalog.withoutDepth', {
+                n: tr.number(analysis.load.summary.withoutDepth),
+              })}
+            </p>
+          )}
           {analysis.load.rejected.length > 0 && (
             <table class="data-table rejected">
               <caption>{tr.text('catalog.rejectedCaption')}</caption>
