@@ -14,6 +14,7 @@ import {
 import { ChunkQueue } from '../queue/chunk-queue.ts';
 import { queueUrlFrom } from '../queue/queue-setting.ts';
 import { hazardMapOnPool } from '../workers/parallel-map.ts';
+import { readTerrainFile, terrainBesideStudy } from '../terrain/index.ts';
 import { WorkerPool } from '../workers/worker-pool.ts';
 import { numberOption, requiredNumber, sig } from './args.ts';
 import { loadStudyForVerb } from './load.ts';
@@ -29,7 +30,8 @@ or the chance of exceeding level L within the horizon.
   --return-period Y   years, e.g. 475
   --level L --horizon Y   a level of the measure and a horizon in years, instead
   --spacing KM        distance between grid points
-  --vs30 M/S          one Vs30 for every point (default 760)
+  --vs30 M/S          one Vs30 for every point (default 760; without it, a study naming a terrain
+                      grid gives each point on land the slope–Vs30 proxy there)
   --bounds=W,S,E,N    another box to cover, degrees (with "=" when W is negative)
   --out FILE          write the map there as GeoJSON points, as it is computed
   --threads N         worker threads (default: one per core)
@@ -115,11 +117,16 @@ export async function mapVerb(args: readonly string[], io: Io): Promise<number> 
   if (!Number.isInteger(threads) || threads < 1)
     throw new UsageError(`--threads: expected a whole number of at least 1, got ${threads}`);
   const study = await loadStudyForVerb(positionals[0], io, values.json);
+  const terrain =
+    vs30 === undefined && study.terrain !== undefined
+      ? await readTerrainFile(terrainBesideStudy(positionals[0] as string, study.terrain))
+      : undefined;
   const map = {
     measure: values.measure ?? 'PGA',
     quantity,
     spacingKm,
     ...(vs30 !== undefined ? { vs30 } : {}),
+    ...(terrain ? { terrain } : {}),
     ...(bounds ? { bounds } : {}),
   };
 
@@ -169,7 +176,9 @@ export async function mapVerb(args: readonly string[], io: Io): Promise<number> 
       quantity.kind === 'return-period'
         ? `${summary.measure} with a ${quantity.returnPeriodYears}-year return period`
         : `chance of ${summary.measure} above ${quantity.level} ${summary.unit} within ${quantity.horizonYears} years`;
-    io.out(`${study.name}: map of the ${what}, Vs30 ${summary.vs30} m/s`);
+    io.out(
+      `${study.name}: map of the ${what}, ${terrain ? `Vs30 from the terrain's slope (${summary.vs30} m/s at sea)` : `Vs30 ${summary.vs30} m/s`}`,
+    );
     io.out(
       `${summary.count} points (${summary.columns} x ${summary.rows}) every ${sig(summary.spacingKm)} km${file ? `, written to ${values.out}` : ' (give --out FILE for the GeoJSON)'}`,
     );

@@ -5,7 +5,7 @@ import { poissonProbability } from './hazard/poisson.ts';
 import type { HazardMeasure, ValiditySummary } from './hazard/hazard-types.ts';
 import { intensityMeasureOf, siteIntensity } from './intensity/site-intensity.ts';
 import { INTENSITY_CONVERSIONS } from './intensity/worden2012.ts';
-import type { Community, Study } from './model.ts';
+import type { Community, Study, Vs30Proxy } from './model.ts';
 import type {
   BandRobustness,
   CommunityResult,
@@ -65,6 +65,9 @@ export function communityResult(
       `${v.model}: ${v.outside} of ${v.evaluated} rupture predictions within ${settings.maxDistanceKm} km are outside its validity range ` +
       `(for example, ${v.firstNote})`,
   );
+
+  if (community.vs30Proxy !== undefined)
+    warnings.push(proxyNote(community.vs30, community.vs30Proxy));
 
   const curves: CommunityResult['curves'] = Object.fromEntries(
     measures.reported.map((m) => {
@@ -134,6 +137,18 @@ export function communityResult(
     nearestFaults: nearestFaults(study.sources, frame, lonLat, NEAREST_FAULT_COUNT),
     band: intensity.band,
     ...(hazard.tree ? { bandRobustness: hazard.tree.robustness } : {}),
+    ...(community.vs30Proxy !== undefined
+      ? { vs30Proxy: { vs30: community.vs30, ...community.vs30Proxy } }
+      : {}),
     warnings,
   };
+}
+
+/** The warning every export carries for a Vs30 from the slope proxy, with its stated range. */
+function proxyNote(vs30: number, proxy: Vs30Proxy): string {
+  const [min, max] = proxy.vs30Range;
+  return (
+    `Vs30 ${Math.round(vs30)} m/s is a proxy from the topographic slope (${proxy.slope.toPrecision(2)} m/m; ` +
+    `Wald & Allen 2007, active regions), not a measurement: class ${proxy.siteClass}, likely ${min}–${max} m/s`
+  );
 }

@@ -22,14 +22,29 @@ export interface Community {
   readonly lat: number;
   /** Time-averaged shear-wave velocity of the top 30 m, m/s. */
   readonly vs30: number;
-  /** Where vs30 came from: given directly, or the representative value of a site class. */
-  readonly vs30Basis: 'measured' | 'site-class';
+  /**
+   * Where vs30 came from: given directly, the representative value of a site class, or the
+   * slope–Vs30 proxy over the study's terrain grid (then `vs30Proxy` says how).
+   */
+  readonly vs30Basis: 'measured' | 'site-class' | 'slope-proxy';
   readonly siteClass?: SiteClass;
+  /** The slope proxy behind vs30 when `vs30Basis` is `slope-proxy` (engine/terrain/slope-vs30.ts). */
+  readonly vs30Proxy?: Vs30Proxy;
   readonly population?: number;
   readonly coastal: boolean;
   readonly elevationM?: number;
   /** What the community's file says that the computation does not use (school, clinic, notes), shown on its page. */
   readonly details?: Readonly<Record<string, string>>;
+}
+
+/** A Vs30 estimated from topographic slope (Wald & Allen 2007), with the range it stands for. */
+export interface Vs30Proxy {
+  /** Topographic slope, m/m. */
+  readonly slope: number;
+  /** The NEHRP class of the slope's row. */
+  readonly siteClass: 'B' | 'C' | 'D' | 'E';
+  /** The class's Vs30 range, m/s: the proxy's stated uncertainty. */
+  readonly vs30Range: readonly [min: number, max: number];
 }
 
 export type Recurrence = GutenbergRichterRecurrence | MomentBalancedRecurrence | FixedRecurrence;

@@ -3,6 +3,7 @@
  * never rename). Accelerations in g, PGV in cm/s, rates per year, probabilities in [0, 1].
  */
 
+import type { Vs30Proxy } from './model.ts';
 export interface HazardCurve {
   readonly levels: readonly number[];
   /** Mean annual rate of exceeding each level over the logic tree. */
@@ -149,6 +150,8 @@ export interface CommunityResult {
   readonly band: ScreeningBand;
   /** Absent in results saved before the logic tree was summarised. */
   readonly bandRobustness?: BandRobustness;
+  /** Present when the community's Vs30 (m/s) is the slope proxy's estimate, not a given value. */
+  readonly vs30Proxy?: Vs30Proxy & { readonly vs30: number };
   readonly warnings: readonly string[];
 }
 

@@ -26,6 +26,7 @@ export function runGeoJson(study: Study, result: StudyResult): RunFeatureCollect
         communityId: community.communityId,
         name: community.name,
         vs30: site.vs30,
+        vs30Basis: site.vs30Basis,
         population: site.population ?? null,
         coastal: site.coastal,
         band: community.band,

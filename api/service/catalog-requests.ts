@@ -11,6 +11,7 @@ import type { CatalogFormat } from '../catalog/catalog-formats.ts';
 import { parseIsoTimeMs } from '../catalog/iso-time.ts';
 import { readZonePolygon } from '../catalog/zone-geojson.ts';
 import type { CompletenessPeriod } from '../engine/catalog/completeness-periods.ts';
+import { MAGNITUDE_RELATIONS } from '../engine/catalog/magnitude-conversion.ts';
 import { InvalidInput } from '../engine/errors.ts';
 import { HttpError } from './http-error.ts';
 import { mediaType, readJsonObject } from './request-body.ts';
@@ -31,6 +32,7 @@ export const CATALOG_FIT_KEYS = [
   'mMax',
   'decluster',
   'magnitudes',
+  'conversions',
   'magnitudeStep',
   'completeness',
   'startTime',
@@ -61,6 +63,13 @@ const fitSchema = z.object({
   mMax: magnitude.optional(),
   decluster: yesNo().optional(),
   magnitudes: oneOf(['moment', 'all'] as const).optional(),
+  // Relations converting ML, mb or Ms to Mw (engine/catalog/magnitude-conversion.ts); none by default.
+  conversions: listOf(
+    oneOf(MAGNITUDE_RELATIONS.map((r) => r.id)),
+    0,
+    MAGNITUDE_RELATIONS.length,
+    'magnitude relation ids',
+  ).optional(),
   // The engine's bins take widths in (0, 1] (engine/catalog/magnitude-bins.ts).
   magnitudeStep: numberIn({ min: 0, minOpen: true, max: 1 }).optional(),
 });
@@ -194,6 +203,16 @@ export function readCatalogFitRequest(raw: Record<string, unknown>): CatalogFitR
       ['completeness', 'mc'],
       'expected no mc with method "max-curvature" (it finds Mc); use method "fixed" to give one',
     );
+  const scales = (fields?.conversions ?? []).map(
+    (id) => MAGNITUDE_RELATIONS.find((r) => r.id === id)?.scale,
+  );
+  scales.forEach((scale, i) => {
+    if (scales.indexOf(scale) !== i)
+      issues.add(
+        ['conversions', i],
+        `expected at most one relation per scale, got a second for ${scale} ("${fields?.conversions?.[i]}")`,
+      );
+  });
   const startMs = readTime(raw.startTime, issues, ['startTime']);
   const endMs = readTime(raw.endTime, issues, ['endTime']);
   if ((raw.startTime === undefined) !== (raw.endTime === undefined)) {
@@ -214,6 +233,9 @@ export function readCatalogFitRequest(raw: Record<string, unknown>): CatalogFitR
     ...(fields.mMax === undefined ? {} : { mMax: fields.mMax }),
     ...(fields.decluster === undefined ? {} : { decluster: fields.decluster }),
     ...(fields.magnitudes === undefined ? {} : { magnitudes: fields.magnitudes }),
+    ...(fields.conversions === undefined || fields.conversions.length === 0
+      ? {}
+      : { conversions: fields.conversions }),
     ...(fields.magnitudeStep === undefined ? {} : { magnitudeStep: fields.magnitudeStep }),
     ...(completeness.mc === undefined ? {} : { mc: completeness.mc }),
     ...(completeness.correction === undefined ? {} : { mcCorrection: completeness.correction }),

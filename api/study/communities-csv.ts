@@ -1,4 +1,5 @@
 import type { Community } from '../engine/model.ts';
+import type { SiteProxy } from '../engine/terrain/site-proxy.ts';
 import { csvTable } from './community-files/csv-table.ts';
 import { tableCommunities } from './community-files/table-communities.ts';
 import { IssueList } from './issues.ts';
@@ -19,6 +20,7 @@ export function readCommunitiesCsv(
   rootPath: readonly PropertyKey[] = ['communities'],
   issues = new IssueList(),
   fileName = 'the communities CSV',
+  proxy?: SiteProxy,
 ): CsvCommunities {
   const table = csvTable(text, fileName, rootPath, issues);
   if (table.columns.length === 0) {
@@ -28,5 +30,5 @@ export function readCommunitiesCsv(
     );
     return { communities: [], issues };
   }
-  return { communities: tableCommunities(table, rootPath, issues).communities, issues };
+  return { communities: tableCommunities(table, rootPath, issues, {}, proxy).communities, issues };
 }

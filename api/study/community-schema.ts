@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { Community, SiteClass } from '../engine/model.ts';
+import type { SiteProxy } from '../engine/terrain/site-proxy.ts';
 import { identifier, numberIn, oneOf, text, yesNo } from './fields.ts';
 import { formatPath, type IssueList } from './issues.ts';
 import { SITE_CLASSES, SITE_CLASS_VS30 } from './site-class.ts';
@@ -69,14 +70,26 @@ export function toCommunity(c: CommunityInput): Community {
 /** Most communities one study may hold (a screening list, not a census). */
 export const MAX_COMMUNITIES = 2000;
 
+/** A community without vs30 or a site class, given the slope proxy's Vs30 at its place. */
+function withProxy(community: Community, proxy: NonNullable<ReturnType<SiteProxy>>): Community {
+  return {
+    ...community,
+    vs30: proxy.vs30,
+    vs30Basis: 'slope-proxy',
+    vs30Proxy: { slope: proxy.slope, siteClass: proxy.siteClass, vs30Range: proxy.vs30Range },
+  };
+}
+
 /**
  * Validates a list of raw communities, each at `pathOf(index)`; reports every problem and
- * duplicate id, and returns the valid ones.
+ * duplicate id, and returns the valid ones. With `proxy` (the study's terrain grid), a
+ * community without vs30 or a site class takes the slope–Vs30 proxy at its place.
  */
 export function readCommunities(
   raw: readonly unknown[],
   issues: IssueList,
   pathOf: (index: number) => readonly PropertyKey[],
+  proxy?: SiteProxy,
 ): Community[] {
   const out: Community[] = [];
   const seen = new Map<string, number>();
@@ -85,14 +98,18 @@ export function readCommunities(
     const parsed = issues.parse(communitySchema, item, pathOf(index));
     const given = (item ?? {}) as { vs30?: unknown; siteClass?: unknown };
     const hasSite = given.vs30 !== undefined || given.siteClass !== undefined;
+    const estimate =
+      hasSite || !parsed || proxy === undefined ? null : proxy([parsed.lon, parsed.lat]);
     // Checked outside the schema so it is reported alongside every other problem of the row.
-    if (typeof item === 'object' && item !== null && !hasSite) {
+    if (typeof item === 'object' && item !== null && !hasSite && estimate === null) {
       issues.add(
         [...pathOf(index), 'vs30'],
-        `expected vs30 (m/s) or siteClass (${SITE_CLASSES.join(', ')}), got neither`,
+        proxy === undefined
+          ? `expected vs30 (m/s) or siteClass (${SITE_CLASSES.join(', ')}), got neither (or name a terrain grid in the study for the slope–Vs30 proxy)`
+          : `expected vs30 (m/s) or siteClass (${SITE_CLASSES.join(', ')}), got neither, and the study's terrain grid gives no slope here (off the grid, without data or below sea level)`,
       );
     }
-    if (!parsed || !hasSite) return;
+    if (!parsed || (!hasSite && estimate === null)) return;
     const first = seen.get(parsed.id);
     if (first !== undefined) {
       issues.add(
@@ -102,7 +119,7 @@ export function readCommunities(
       return;
     }
     seen.set(parsed.id, index);
-    out.push(toCommunity(parsed));
+    out.push(estimate === null ? toCommunity(parsed) : withProxy(toCommunity(parsed), estimate));
   });
   return out;
 }

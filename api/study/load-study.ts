@@ -2,6 +2,7 @@ import { sourceSanity } from '../engine/sanity/source-sanity.ts';
 import type { InputIssue } from '../engine/errors.ts';
 import type { Community, LonLat, Study, TectonicSetting } from '../engine/model.ts';
 import type { ModelCatalog } from '../engine/motion/catalog.ts';
+import type { SiteProxy } from '../engine/terrain/site-proxy.ts';
 import { readBranches } from './branches-schema.ts';
 import { MAX_COMMUNITIES, readCommunities } from './community-schema.ts';
 import { readCommunitiesCsv } from './communities-csv.ts';
@@ -46,6 +47,11 @@ export interface LoadStudyOptions {
    * (community-files/read-community-file.ts); used instead of `communitiesCsv` when given.
    */
   readonly communitiesTable?: CommunityTable;
+  /**
+   * The slope–Vs30 proxy over the study's terrain grid (engine/terrain/site-proxy.ts), read by
+   * the caller: communities without vs30 or a site class take it.
+   */
+  readonly siteProxy?: SiteProxy;
 }
 
 /**
@@ -120,7 +126,13 @@ function readStudyCommunities(
 ): Community[] {
   if (typeof raw === 'string') {
     if (options.communitiesTable !== undefined)
-      return tableCommunities(options.communitiesTable, ['communities'], issues).communities;
+      return tableCommunities(
+        options.communitiesTable,
+        ['communities'],
+        issues,
+        {},
+        options.siteProxy,
+      ).communities;
     if (options.communitiesCsv === undefined) {
       issues.add(
         ['communities'],
@@ -128,7 +140,13 @@ function readStudyCommunities(
       );
       return [];
     }
-    return readCommunitiesCsv(options.communitiesCsv, ['communities'], issues, raw).communities;
+    return readCommunitiesCsv(
+      options.communitiesCsv,
+      ['communities'],
+      issues,
+      raw,
+      options.siteProxy,
+    ).communities;
   }
   if (!Array.isArray(raw) || raw.length === 0 || raw.length > MAX_COMMUNITIES) {
     issues.add(
@@ -137,7 +155,7 @@ function readStudyCommunities(
     );
     return [];
   }
-  return readCommunities(raw, issues, (i) => ['communities', i]);
+  return readCommunities(raw, issues, (i) => ['communities', i], options.siteProxy);
 }
 
 /** The optional map outline: a GeoJSON Polygon, MultiPolygon or FeatureCollection of polygons. */

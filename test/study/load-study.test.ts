@@ -132,7 +132,7 @@ describe('loadStudy: every problem at once, each with its path', () => {
         'name: expected a study name of 1 to 200 characters, got 42',
         'communities[0].lon: expected a number in [-180, 180] degrees, got 200',
         'communities[1].lat: expected a number in [-90, 90] degrees, got "south"',
-        'communities[1].vs30: expected vs30 (m/s) or siteClass (A, B, BC, C, CD, D, DE, E), got neither',
+        'communities[1].vs30: expected vs30 (m/s) or siteClass (A, B, BC, C, CD, D, DE, E), got neither (or name a terrain grid in the study for the slope–Vs30 proxy)',
         'sources.features[0].properties.recurrence.mMax: expected mMax greater than mMin (7.5), got 7.2',
         'sources.features[1].properties.recurrence.bValue: expected a number in (0.3, 2.5), got 2.5',
         'sources.features[2].properties.setting: expected one of "crustal", "interface", "intraslab", got "crust"',

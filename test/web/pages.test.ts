@@ -306,4 +306,27 @@ describe('pages', () => {
     };
     expect(document.sources.features.map((f) => f.properties.id)).toContain('fitted-zone');
   });
+
+  test('the catalog view converts local magnitudes when asked, and counts them', async () => {
+    // Project-made: 120 Mw events from 3.0 to 4.9 over 12 years and 6 ML events at 4.0.
+    const rows = ['time,lon,lat,depthKm,magnitude,magnitudeType,id'];
+    for (let i = 0; i < 120; i += 1)
+      rows.push(
+        `${2000 + Math.floor(i / 10)}-0${1 + (i % 9)}-1${i % 10}T00:00:00Z,-150.${i % 9},-47.${i % 7},10,${(3 + (i % 20) / 10).toFixed(1)},Mw,w${i}`,
+      );
+    for (let i = 0; i < 6; i += 1)
+      rows.push(`201${i}-06-01T00:00:00Z,-150.5,-47.5,10,4.0,ML,l${i}`);
+    const posted = await post(
+      `/studies/${smallId}/catalog`,
+      fileForm('mixed.csv', 'text/csv', rows.join('\n')),
+    );
+    expect(posted.status).toBe(303);
+    const plain = await (await get(`/studies/${smallId}/catalog`)).text();
+    expect(plain).not.toMatch(/class="converted"/);
+    expect(plain).toMatch(/name="convert" value="grunthal2009-ml"/);
+    const converted = await (
+      await get(`/studies/${smallId}/catalog?convert=grunthal2009-ml`)
+    ).text();
+    expect(converted).toMatch(/data-relation="grunthal2009-ml">6 ML events converted/);
+  });
 });

@@ -33,8 +33,15 @@ const fitOptions = (events: number) =>
 /** The fit the view leads with: Weichert when there are completeness periods, else Aki–Utsu. */
 export const chosenFit = (fit: CatalogFit): GutenbergRichterFit => fit.weichert ?? fit.akiUtsu;
 
-/** The catalog view's analysis of catalog text. */
-export function analyseCatalog(text: string, format?: CatalogFormat): CatalogAnalysis {
+/**
+ * The catalog view's analysis of catalog text; `conversions` (relation ids of
+ * engine/catalog/magnitude-conversion.ts, chosen on the page) convert ML, mb or Ms to Mw first.
+ */
+export function analyseCatalog(
+  text: string,
+  format?: CatalogFormat,
+  conversions: readonly string[] = [],
+): CatalogAnalysis {
   let load: CatalogLoad;
   try {
     load = readCatalogText(text, format);
@@ -43,7 +50,11 @@ export function analyseCatalog(text: string, format?: CatalogFormat): CatalogAna
     throw error;
   }
   try {
-    return { ok: true, load, fit: fitCatalog(load.events, fitOptions(load.events.length)) };
+    const options = {
+      ...fitOptions(load.events.length),
+      ...(conversions.length > 0 ? { conversions } : {}),
+    };
+    return { ok: true, load, fit: fitCatalog(load.events, options) };
   } catch (error) {
     if (error instanceof InvalidInput)
       return { ok: true, load, problem: error.issues.map((i) => i.message).join('; ') };

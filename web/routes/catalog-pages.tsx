@@ -4,6 +4,10 @@ import type { ZoneRecurrence } from '../../api/engine/catalog/zone-recurrence.ts
 import type { LonLat, Study } from '../../api/engine/model.ts';
 import { detectCatalogFormat } from '../../api/catalog/index.ts';
 import { validateStudy } from '../../api/operations/study-input.ts';
+import {
+  MAGNITUDE_RELATIONS,
+  type MagnitudeRelation,
+} from '../../api/engine/catalog/magnitude-conversion.ts';
 import { analyseCatalog, fitZone } from '../data/catalog-analysis.ts';
 import {
   attachCatalog,
@@ -102,7 +106,10 @@ export function catalogPages(app: Hono, kit: PageKit): void {
       uploadIssues?: InputIssue[];
     } = {},
   ) => {
-    const analysis = catalog ? analyseCatalog(catalog.text, catalog.format) : undefined;
+    const conversions = chosenConversions(c.req.queries('convert'));
+    const analysis = catalog
+      ? analyseCatalog(catalog.text, catalog.format, conversions)
+      : undefined;
     const failed = (extra.zoneIssues?.length ?? 0) > 0 || (extra.uploadIssues?.length ?? 0) > 0;
     return kit.render(
       c,
@@ -117,6 +124,7 @@ export function catalogPages(app: Hono, kit: PageKit): void {
         zoneIssues={extra.zoneIssues ?? []}
         uploadIssues={extra.uploadIssues ?? []}
         zoneAdded={c.req.query('zone') === 'added'}
+        conversions={conversions}
       />,
       failed ? 422 : 200,
     );
@@ -220,4 +228,17 @@ export function catalogPages(app: Hono, kit: PageKit): void {
     }
     return c.redirect(`/studies/${data.record.id}/catalog?zone=added`, 303);
   });
+}
+
+/**
+ * The relations chosen on the page (`?convert=ID`, repeatable): known ids only, one per scale
+ * (the first chosen); anything else is ignored, as a page query is not a request to refuse.
+ */
+function chosenConversions(given: readonly string[] | undefined): string[] {
+  const chosen: MagnitudeRelation[] = [];
+  for (const id of given ?? []) {
+    const relation = MAGNITUDE_RELATIONS.find((r) => r.id === id);
+    if (relation && !chosen.some((r) => r.scale === relation.scale)) chosen.push(relation);
+  }
+  return chosen.map((r) => r.id);
 }

@@ -233,6 +233,8 @@ export const EN = {
   'community.site': 'Ground: Vs30 {vs30} m/s ({basis}).',
   'community.site.measured': 'given',
   'community.site.site-class': 'from site class {siteClass}',
+  'community.site.slope-proxy':
+    'estimated from the slope of the land, not measured: class {siteClass}, likely {min} to {max} m/s',
   'community.people': '{people} people live here.',
   'community.coastal': 'This place is on the coast.',
   'community.warnings': 'Notes from the screening',
@@ -412,6 +414,11 @@ export const EN = {
   'catalog.col.why': 'Why',
   'catalog.nonMoment':
     '{n} events have a magnitude type other than moment magnitude; the fit leaves them out.',
+  'catalog.convert.legend':
+    'Convert other magnitudes to moment magnitude (by a published relation; check its coefficients against the paper)',
+  'catalog.convert.submit': 'Fit again',
+  'catalog.convert.done':
+    '{n} {scale} events converted to moment magnitude by {source} and marked as converted; {outside} outside its range left out.',
   'catalog.withoutDepth':
     '{n} earthquakes have no depth: they count in the recurrence fit and are left out of the felt history, which needs the distance to the hypocentre.',
   'catalog.declustered':

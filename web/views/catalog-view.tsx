@@ -1,4 +1,5 @@
 import type { Child } from 'hono/jsx';
+import { MAGNITUDE_RELATIONS } from '../../api/engine/catalog/magnitude-conversion.ts';
 import type { ZoneRecurrence } from '../../api/engine/catalog/zone-recurrence.ts';
 import type { InputIssue } from '../../api/engine/errors.ts';
 import type { Study } from '../../api/engine/model.ts';
@@ -34,6 +35,8 @@ export interface CatalogViewProps {
   readonly zoneIssues: readonly InputIssue[];
   readonly uploadIssues: readonly InputIssue[];
   readonly zoneAdded?: boolean;
+  /** Relation ids converting ML, mb or Ms to Mw, as chosen on the page (none by default). */
+  readonly conversions: readonly string[];
 }
 
 /** The catalog view: load, summary with rejected lines, frequency–magnitude plot with the fit, and the zone. */
@@ -143,6 +146,39 @@ export function CatalogView(props: CatalogViewProps) {
           {analysis.load.summary.nonMoment > 0 && (
             <p>{tr.text('catalog.nonMoment', { n: tr.number(analysis.load.summary.nonMoment) })}</p>
           )}
+          {analysis.load.summary.nonMoment > 0 && (
+            <form method="get" action={`/studies/${studyId}/catalog`} class="conversion-form">
+              <fieldset>
+                <legend>{tr.text('catalog.convert.legend')}</legend>
+                {MAGNITUDE_RELATIONS.map((r) => (
+                  <label>
+                    <input
+                      type="checkbox"
+                      name="convert"
+                      value={r.id}
+                      checked={props.conversions.includes(r.id)}
+                    />{' '}
+                    {r.scale}: {r.source} ({r.scale} {r.min}–{r.max})
+                  </label>
+                ))}
+                <button type="submit">{tr.text('catalog.convert.submit')}</button>
+              </fieldset>
+            </form>
+          )}
+          {MAGNITUDE_RELATIONS.filter(
+            (r) =>
+              (result?.conversion?.converted[r.id] ?? 0) > 0 ||
+              (result?.conversion?.outsideRange[r.id] ?? 0) > 0,
+          ).map((r) => (
+            <p class="converted" data-relation={r.id}>
+              {tr.text('catalog.convert.done', {
+                n: tr.number(result?.conversion?.converted[r.id] ?? 0),
+                scale: r.scale,
+                source: r.source,
+                outside: tr.number(result?.conversion?.outsideRange[r.id] ?? 0),
+              })}
+            </p>
+          ))}
           {analysis.load.summary.withoutDepth > 0 && (
             <p data-without-depth={analysis.load.summary.withoutDepth}>
               {tr.text('catalog.withoutDepth', {

@@ -186,7 +186,13 @@ export function CommunityView(props: CommunityViewProps) {
           basis:
             community.vs30Basis === 'measured'
               ? tr.text('community.site.measured')
-              : tr.text('community.site.site-class', { siteClass: community.siteClass ?? '' }),
+              : community.vs30Proxy !== undefined
+                ? tr.text('community.site.slope-proxy', {
+                    siteClass: community.vs30Proxy.siteClass,
+                    min: tr.number(community.vs30Proxy.vs30Range[0]),
+                    max: tr.number(community.vs30Proxy.vs30Range[1]),
+                  })
+                : tr.text('community.site.site-class', { siteClass: community.siteClass ?? '' }),
         })}
       </p>
       <Headline tr={tr} data={data} name={community.name} />

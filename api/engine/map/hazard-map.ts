@@ -9,6 +9,8 @@ import type { RuptureTable } from '../hazard/rupture-table.ts';
 import { studyRuptureTable } from '../hazard/study-rupture-table.ts';
 import type { HazardMeasure, ValiditySummary } from '../hazard/hazard-types.ts';
 import type { Study } from '../model.ts';
+import type { ElevationGrid } from '../terrain/elevation-grid.ts';
+import { siteProxy, type SiteProxy } from '../terrain/site-proxy.ts';
 import type { ModelCatalog } from '../motion/catalog.ts';
 import { measureUnit, parseMeasure } from '../motion/measure.ts';
 import { modelCatalog } from '../motion/registry.ts';
@@ -37,8 +39,13 @@ export interface HazardMapOptions {
   readonly spacingKm: number;
   /** The box to cover; the study area by default (map-grid.ts, studyBounds). */
   readonly bounds?: LonLatBounds;
-  /** Vs30 of every grid point, m/s; MAP_VS30 by default. */
+  /** Vs30 of every grid point, m/s; MAP_VS30 by default (and where `terrain` gives no proxy). */
   readonly vs30?: number;
+  /**
+   * The study's terrain grid: each point on land takes the slope–Vs30 proxy there
+   * (terrain/site-proxy.ts) instead of the one `vs30`.
+   */
+  readonly terrain?: ElevationGrid;
   readonly models?: ModelCatalog;
   readonly maxPoints?: number;
   /** The study's rupture table, already built: the study is not discretised again (a worker thread's case). */
@@ -63,6 +70,8 @@ export interface HazardMapPlan {
   readonly measure: HazardMeasure;
   readonly quantity: MapQuantity;
   readonly vs30: number;
+  /** Vs30 per point from the terrain's slope, where it gives one. */
+  readonly proxy?: SiteProxy;
   /** g, or cm/s for PGV; for a chance map, the unit of its level. */
   readonly unit: 'g' | 'cm/s';
   readonly table: RuptureTable;
@@ -99,6 +108,10 @@ export function planHazardMap(study: Study, options: HazardMapOptions): HazardMa
       : levelsFor(study.settings.levels, options.measure, parsed);
   const measure: HazardMeasure = { key: options.measure, measure: parsed, levels };
   const warnings: string[] = [];
+  if (options.terrain)
+    warnings.push(
+      `Vs30 at each point on land is a proxy from the topographic slope of ${options.terrain.label} (Wald & Allen 2007, active regions), not a measurement: each NEHRP class spans a range (D 180–360 m/s, C 360–760 m/s); ${vs30} m/s at sea and off the grid`,
+    );
   const branches = resolveBranches(
     study,
     { all: [measure] },
@@ -136,6 +149,7 @@ export function planHazardMap(study: Study, options: HazardMapOptions): HazardMa
     measure,
     quantity: options.quantity,
     vs30,
+    ...(options.terrain ? { proxy: siteProxy(options.terrain) } : {}),
     unit: measureUnit(parsed),
     table,
     warnings,
@@ -160,7 +174,6 @@ export function hazardMapChunk(
 ): MapPoint[] {
   const { grid, quantity } = plan;
   const last = Math.min(grid.count, firstIndex + count);
-  const site = { vs30: plan.vs30, vs30Measured: false };
   const rates = plan.rates();
   const points: MapPoint[] = [];
   // Where the last point's curve crossed the return period's rate: where to look first for the next.
@@ -168,7 +181,9 @@ export function hazardMapChunk(
   for (let index = firstIndex; index < last; index++) {
     if (shouldStop?.()) throw new Cancelled((index - firstIndex) / Math.max(1, last - firstIndex));
     const point = gridPoint(grid, index);
-    const hazard = fastSiteRates(rates, { point, site });
+    const [lon, lat] = plan.frame.toLonLat(point);
+    const vs30 = plan.proxy?.([lon, lat])?.vs30 ?? plan.vs30;
+    const hazard = fastSiteRates(rates, { point, site: { vs30, vs30Measured: false } });
     let value: number | null;
     let status: ReturnPeriodStatus;
     if (quantity.kind === 'return-period') {
@@ -185,7 +200,6 @@ export function hazardMapChunk(
       status = 'ok';
     }
     if (validity) mergeValidity(validity, hazard.validity);
-    const [lon, lat] = plan.frame.toLonLat(point);
     const column = index % grid.columns;
     points.push({ index, column, row: (index - column) / grid.columns, lon, lat, value, status });
   }

@@ -1,4 +1,5 @@
 import type { Community } from '../../engine/model.ts';
+import type { SiteProxy } from '../../engine/terrain/site-proxy.ts';
 import { MAX_COMMUNITIES, readCommunities } from '../community-schema.ts';
 import type { IssueList } from '../issues.ts';
 import { cellText, idFromName, readCoordinate, readNumber, readYesNo } from './cell-values.ts';
@@ -27,12 +28,14 @@ export interface TableCommunities {
 function missingFields(
   columnOf: ReadonlyMap<CommunityColumn, string>,
   hasGeometry: boolean,
+  hasProxy: boolean,
 ): CommunityColumn[] {
   const missing: CommunityColumn[] = [];
   if (!columnOf.has('name')) missing.push('name');
   if (!hasGeometry && !columnOf.has('lat')) missing.push('lat');
   if (!hasGeometry && !columnOf.has('lon')) missing.push('lon');
-  if (!columnOf.has('vs30') && !columnOf.has('siteClass')) missing.push('vs30', 'siteClass');
+  if (!hasProxy && !columnOf.has('vs30') && !columnOf.has('siteClass'))
+    missing.push('vs30', 'siteClass');
   return missing;
 }
 
@@ -89,20 +92,22 @@ function rowRecord(
  * The communities of a file read into a table. Columns are matched by their usual spellings
  * (or by `choice`); a missing id is made from the name; columns Tremora does not use are kept
  * as each community's details. Every problem goes to `issues` under `rootPath` and the row's
- * place in the file; valid rows are returned.
+ * place in the file; valid rows are returned. With `proxy` (the study's terrain grid), vs30 and
+ * site class may be missing: such rows take the slope–Vs30 proxy.
  */
 export function tableCommunities(
   table: CommunityTable,
   rootPath: readonly PropertyKey[],
   issues: IssueList,
   choice: ColumnChoice = {},
+  proxy?: SiteProxy,
 ): TableCommunities {
   const { columnOf, otherColumns } = matchColumns(
     table.columns,
     choice,
     table.hasGeometry ? ['lon', 'lat'] : [],
   );
-  const missingColumns = missingFields(columnOf, table.hasGeometry);
+  const missingColumns = missingFields(columnOf, table.hasGeometry, proxy !== undefined);
   const result = (communities: Community[]): TableCommunities => ({
     communities,
     missingColumns,
@@ -160,10 +165,12 @@ export function tableCommunities(
     }
     return record;
   });
-  const valid = readCommunities(raw, issues, (i) => [
-    ...rootPath,
-    (table.rows[i] as TableRow).where,
-  ]);
+  const valid = readCommunities(
+    raw,
+    issues,
+    (i) => [...rootPath, (table.rows[i] as TableRow).where],
+    proxy,
+  );
   const badIds = new Set(raw.filter((r) => r[BAD_POSITION] === true).map((r) => r.id));
   return result(valid.filter((c) => !badIds.has(c.id)));
 }

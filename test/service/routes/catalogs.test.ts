@@ -711,3 +711,45 @@ describe('against a started server', () => {
     expectFeltAtCove(((await felt.json()) as FeltAnswer).communities[0]);
   });
 });
+
+describe('POST /api/catalog/fit with magnitude conversions', () => {
+  // Project-made: two Mw events, three mb (one at 6.5, outside Scordilis's mb 3.5–6.2) and one ML.
+  const MIXED = [
+    'time,lon,lat,depthKm,magnitude,magnitudeType,id',
+    '2001-01-01T00:00:00Z,-150.1,-47.2,10,4.6,Mw,a',
+    '2002-01-01T00:00:00Z,-150.2,-47.3,10,4.0,mb,b',
+    '2003-01-01T00:00:00Z,-150.3,-47.4,10,5.0,mb,c',
+    '2004-01-01T00:00:00Z,-150.4,-47.5,10,6.5,mb,d',
+    '2005-01-01T00:00:00Z,-150.5,-47.6,10,3.8,ML,e',
+    '2006-01-01T00:00:00Z,-150.6,-47.7,10,4.9,Mw,f',
+  ].join('\n');
+
+  it('converts the chosen scale, counts what it converted and what it could not', async () => {
+    const response = await fit({ text: MIXED, conversions: ['scordilis2006-mb'] });
+    expect(response.status).toBe(200);
+    const body = (await response.json()) as {
+      conversion: { converted: Record<string, number>; outsideRange: Record<string, number> };
+      catalog: { summary: { nonMoment: number } };
+    };
+    expect(body.conversion).toEqual({
+      converted: { 'scordilis2006-mb': 2 },
+      outsideRange: { 'scordilis2006-mb': 1 },
+    });
+    expect(body.catalog.summary.nonMoment).toBe(4);
+  });
+
+  it('converts nothing by default', async () => {
+    const body = (await (await fit({ text: MIXED })).json()) as Record<string, unknown>;
+    expect(body.conversion ?? null).toBeNull();
+  });
+
+  it('refuses an unknown relation and two relations for one scale, naming the entry', async () => {
+    const unknown = await expectError(await fit({ text: MIXED, conversions: ['nobody-ml'] }), 422);
+    expect(unknown.issues[0]?.path).toBe('conversions[0]');
+    const twice = await expectError(
+      await fit({ text: MIXED, conversions: ['scordilis2006-mb', 'scordilis2006-mb'] }),
+      422,
+    );
+    expect(twice.issues[0]?.path).toBe('conversions[1]');
+  });
+});
