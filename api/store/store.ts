@@ -7,6 +7,7 @@ import { MapRunRepository } from './map-run-repository.ts';
 import { migrate, type MigrationOutcome } from './migrate.ts';
 import { RunRepository } from './run-repository.ts';
 import { StudyRepository } from './study-repository.ts';
+import { VisitRepository } from './visit-repository.ts';
 
 /** The database file used when TREMORA_DB is not set, relative to the working directory (git-ignored). */
 export const DEFAULT_DATABASE_PATH = '.tremora/tremora.db';
@@ -26,6 +27,8 @@ export interface Store {
   readonly runs: RunRepository;
   /** Hazard-map runs and their GeoJSON. */
   readonly maps: MapRunRepository;
+  /** Awareness visits to the studies' communities. */
+  readonly visits: VisitRepository;
   readonly migration: MigrationOutcome;
   /** Runs found queued or running at open (left by a crash), now marked interrupted. */
   readonly interruptedAtOpen: number;
@@ -82,6 +85,7 @@ export function openStore(path: string): Store {
       catalogs: new CatalogRepository(db),
       runs,
       maps,
+      visits: new VisitRepository(db),
       migration,
       interruptedAtOpen,
       mapRunsInterruptedAtOpen,
