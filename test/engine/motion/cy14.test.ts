@@ -24,18 +24,18 @@ import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
 import { readProbeRequest } from '../../../api/operations/probe-request.ts';
 import { expectClose } from '../../helpers/close.ts';
-import { inputOf, measureOf, readReferenceVectors } from './reference-vector-cases.ts';
+import { readVectors, vectorInput, vectorMeasure } from './reference-vectors.ts';
 
 /**
  * The reference: vectors/cy14.json, copied from ../shared/reference/gmm/vectors/cy14.json
- * (provenance in reference-vector-cases.ts and ../shared/reference/gmm/README.md, section
+ * (provenance in reference-vectors.ts and ../shared/reference/gmm/README.md, section
  * "CY14"): Chiou & Youngs (2014), Earthquake Spectra 30(3) 1117–1153, evaluated by an independent
  * implementation (its `generatedBy` field) for California/global (γ = 1), directivity off
  * (ΔDPP = 0), Z1 at the paper's default (ΔZ1 = 0), Vs30 measured or inferred per case, F_HW = 1
  * for Rx ≥ 0, the paper's rake classes; τ = (1 + NL0) τ(M) and φ = σ_NL0, the two parts of the
  * paper's σ.
  */
-const VECTORS = readReferenceVectors('cy14.json');
+const VECTORS = readVectors('cy14.json');
 const SOURCE = 'Chiou & Youngs (2014), reference vectors cy14.json';
 const TOLERANCE = 1e-4;
 
@@ -80,7 +80,7 @@ describe('CY14: the reference vectors', () => {
   it.each(VECTORS.cases.map((c) => [c.id, c.measure, c] as const))(
     '%s %s: ln median, τ, φ, σ within 1e-4',
     (id, _measure, c) => {
-      const p = cy14.predict(inputOf(c), measureOf(c));
+      const p = cy14.predict(vectorInput(c), vectorMeasure(c));
       expectClose(p.lnMedian, c.lnMedian, TOLERANCE, `${SOURCE} ${id} ln median`);
       expectClose(p.tau, c.tau, TOLERANCE, `${SOURCE} ${id} τ`);
       expectClose(p.phi, c.phi, TOLERANCE, `${SOURCE} ${id} φ`);
@@ -99,7 +99,7 @@ describe('CY14: the reference vectors', () => {
         `${SOURCE} ${c.id} default Z1(Vs30)`,
       );
       expectClose(
-        cy14.predict(inputOf(c, 'given'), measureOf(c)).lnMedian,
+        cy14.predict(vectorInput(c, 'given'), vectorMeasure(c)).lnMedian,
         c.lnMedian,
         TOLERANCE,
         `${SOURCE} ${c.id} with Z1 given`,
@@ -108,7 +108,8 @@ describe('CY14: the reference vectors', () => {
   });
 
   it("classes every case's rake as the vectors do", () => {
-    for (const c of VECTORS.cases) expect(cy14MechanismFromRake(c.rakeDeg), c.id).toBe(c.mechanism);
+    for (const c of VECTORS.cases)
+      expect(cy14MechanismFromRake(c.rakeDeg ?? 0), c.id).toBe(c.mechanism);
   });
 });
 
