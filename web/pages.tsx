@@ -7,6 +7,7 @@ import { LANGUAGE_COOKIE, pageKit, safeBackPath } from './routes/page-kit.ts';
 import { scenarioPages } from './routes/scenario-pages.tsx';
 import { staticFiles } from './routes/static-files.ts';
 import { studyPages } from './routes/study-pages.tsx';
+import { visitPages } from './routes/visit-pages.tsx';
 import { isLanguage } from './text/translator.ts';
 import { HomeView } from './views/home-view.tsx';
 import { LimitsView } from './views/limits-view.tsx';
@@ -55,6 +56,7 @@ export function createPages(ctx: ServiceContext, options: CreatePagesOptions = {
   scenarioPages(app, kit);
   editorPages(app, kit);
   catalogPages(app, kit);
+  visitPages(app, kit);
 
   // Unknown pages get a page; unknown API paths keep the API's JSON 404.
   app.get('*', (c) => {

@@ -63,7 +63,7 @@ function row(study: Study, community: CommunityResult): unknown[] {
  * `escapeFormulae: true` is /^[=+\-@\t\r].*$/, which misses a cell with a line break after
  * its first line ("=HYPERLINK(...)\nVillage"): `.` stops at the break and `$` needs the end.
  */
-const FORMULA_START = /^[=+\-@\t\r]/;
+export const FORMULA_START = /^[=+\-@\t\r]/;
 
 /**
  * A run's results as CSV, one row per community: the levels at each return period (g; PGV

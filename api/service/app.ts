@@ -15,6 +15,7 @@ import { runRoutes } from './routes/runs.ts';
 import { scenarioRoutes } from './routes/scenario.ts';
 import { studyRoutes } from './routes/studies.ts';
 import { tsunamiRoutes } from './routes/tsunami.ts';
+import { visitRoutes } from './routes/visits.ts';
 import { sameOriginWrites } from './same-origin.ts';
 import { securityHeaders } from './security-headers.ts';
 import type { ServiceContext } from '../operations/service-context.ts';
@@ -78,6 +79,7 @@ export function createApp(ctx: ServiceContext, options: CreateAppOptions = {}): 
     probeRoutes,
     catalogRoutes,
     tsunamiRoutes,
+    visitRoutes,
   ]) {
     api.route('/', routes(ctx));
   }

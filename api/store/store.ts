@@ -8,6 +8,7 @@ import { migrate, type MigrationOutcome } from './migrate.ts';
 import { PageAccessRepository } from './page-access-repository.ts';
 import { RunRepository } from './run-repository.ts';
 import { StudyRepository } from './study-repository.ts';
+import { VisitRepository } from './visit-repository.ts';
 
 /** The database file used when TREMORA_DB is not set, relative to the working directory (git-ignored). */
 export const DEFAULT_DATABASE_PATH = '.tremora/tremora.db';
@@ -29,6 +30,8 @@ export interface Store {
   readonly maps: MapRunRepository;
   /** Browsers given access to the pages of a service with a token. */
   readonly pageAccess: PageAccessRepository;
+  /** Awareness visits to the studies' communities. */
+  readonly visits: VisitRepository;
   readonly migration: MigrationOutcome;
   /** Runs found queued or running at open (left by a crash), now marked interrupted. */
   readonly interruptedAtOpen: number;
@@ -86,6 +89,7 @@ export function openStore(path: string): Store {
       runs,
       maps,
       pageAccess: new PageAccessRepository(db),
+      visits: new VisitRepository(db),
       migration,
       interruptedAtOpen,
       mapRunsInterruptedAtOpen,

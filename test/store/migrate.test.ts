@@ -28,6 +28,7 @@ describe('migrate', () => {
     const outcome = migrate(db, shipped);
     expect(outcome).toEqual({ fromVersion: 0, toVersion: shipped.length });
     expect(tables(db)).toEqual([
+      'community_visits',
       'map_runs',
       'page_access',
       'runs',

@@ -13,6 +13,7 @@ import {
   sortRanked,
   type SortDirection,
 } from '../data/ranking.ts';
+import { priorityRows, weightsFromQuery } from '../data/visit-priority-data.ts';
 import { feltData, studyCatalog } from '../data/study-catalog.ts';
 import { rankByTimeToAct, studyTsunami } from '../data/tsunami-data.ts';
 import { startScreening } from '../../api/operations/start-screening.ts';
@@ -35,6 +36,13 @@ export const COMMUNITY_MAP = {
   padding: 30,
   fit: 'communities',
 } as const;
+
+/** Visits recorded per community. */
+const visitCounts = (visits: readonly { readonly communityId: string }[]) => {
+  const counts = new Map<string, number>();
+  for (const v of visits) counts.set(v.communityId, (counts.get(v.communityId) ?? 0) + 1);
+  return counts;
+};
 
 /** What the overview shows again after a form post with problems. */
 interface OverviewAgain {
@@ -86,6 +94,15 @@ export function studyPages(app: Hono, kit: PageKit): void {
     const rows = runs.screening
       ? sortRanked(rankCommunities(data.study, runs.screening.results), sort, direction)
       : undefined;
+    const asked = weightsFromQuery((key) => c.req.query(key));
+    const priority = runs.screening
+      ? {
+          rows: priorityRows(data.study, runs.screening.results, asked.weights),
+          weights: asked.weights,
+          problems: asked.problems,
+          visitCounts: visitCounts(ctx.store.visits.list(id)),
+        }
+      : undefined;
     const tsunami = await studyTsunami(ctx, data.study);
     return kit.render(
       c,
@@ -96,6 +113,7 @@ export function studyPages(app: Hono, kit: PageKit): void {
         runs={runs}
         frame={mapFrame(data.study, OVERVIEW_MAP)}
         {...(rows ? { rows } : {})}
+        {...(priority ? { priority } : {})}
         years={leadHorizonYears(data.study.settings.horizonsYears)}
         sort={sort}
         direction={direction}
@@ -233,6 +251,7 @@ export function studyPages(app: Hono, kit: PageKit): void {
         {...(found.felt ? { felt: found.felt } : {})}
         feltTooMany={found.feltTooMany}
         {...(tsunami ? { tsunami } : {})}
+        visits={ctx.store.visits.list(id, page.community.id)}
       />,
     );
   });

@@ -18,6 +18,8 @@ import { SafetyAdvice } from './safety-advice.tsx';
 import type { TsunamiPageResult } from '../data/tsunami-data.ts';
 import { TsunamiTime } from './tsunami-time.tsx';
 import { CommunityDetails } from './community-details.tsx';
+import { VisitRecords } from './visit-records.tsx';
+import type { VisitRecord } from '../../api/store/visit-repository.ts';
 
 export interface CommunityViewProps {
   readonly page: PageContext;
@@ -31,6 +33,8 @@ export interface CommunityViewProps {
   readonly feltTooMany?: boolean;
   /** Tsunami time to act, for a coastal community of a study with a terrain grid. */
   readonly tsunami?: TsunamiPageResult;
+  /** The visits recorded here, newest first. */
+  readonly visits: readonly VisitRecord[];
 }
 
 const mmiKey = (level: number, part: 'name' | 'feel' | 'buildings') =>
@@ -332,6 +336,12 @@ export function CommunityView(props: CommunityViewProps) {
         headingLevel={2}
       />
       <CommunityDetails tr={tr} details={community.details} />
+      <VisitRecords
+        tr={tr}
+        studyId={props.studyId}
+        communityId={community.id}
+        visits={props.visits}
+      />
       <section aria-labelledby="todo-heading">
         <h2 id="todo-heading">{tr.text('community.todo')}</h2>
         <SafetyAdvice tr={tr} coastal={community.coastal} headingLevel={3} />

@@ -20,6 +20,7 @@ import type { MapFrame } from '../maps/map-frame.ts';
 import { StudyMap, StudyMapLegend } from '../maps/study-map.tsx';
 import type { Translator } from '../text/translator.ts';
 import { HazardMapPanel, type MapFormState } from './hazard-map-panel.tsx';
+import { VisitPriorityPanel, type VisitPriorityPanelProps } from './visit-priority-panel.tsx';
 import { ScreeningStatus } from './screening-status.tsx';
 
 export interface OverviewProps {
@@ -38,6 +39,8 @@ export interface OverviewProps {
   readonly mapSpacing: SuggestedSpacing;
   /** The hazard-map form as sent, when it had problems. */
   readonly mapForm?: MapFormState;
+  /** The visit priority, once the study is screened. */
+  readonly priority?: Omit<VisitPriorityPanelProps, 'tr' | 'studyId' | 'years'>;
   /** Coastal communities by tsunami time to act, when the study has a terrain grid. */
   readonly tsunami?: {
     readonly times: TsunamiPageResult;
@@ -269,6 +272,9 @@ export function OverviewView(props: OverviewProps) {
           </>
         )}
       </section>
+      {props.priority && (
+        <VisitPriorityPanel tr={tr} studyId={studyId} years={props.years} {...props.priority} />
+      )}
       {props.tsunami && (
         <TsunamiRanking
           tr={tr}

@@ -1,0 +1,55 @@
+import { describe, expect, it } from 'vitest';
+import { visitPriorities, type PriorityInput } from '../../api/results/visit-priority.ts';
+import { expectClose } from '../helpers/close.ts';
+
+// Check values worked by hand from the weighted mean of max-scaled shares (the scoring's own
+// definition, api/results/visit-priority.ts); a tolerance of 1e-9 points covers rounding only.
+const TOL = 1e-9;
+
+const a: PriorityInput = {
+  communityId: 'a',
+  values: { people: 1000, chance: 0.2, facilities: 2, isolation: 10 },
+};
+const b: PriorityInput = {
+  communityId: 'b',
+  values: { people: 500, chance: 0.4, isolation: 40 },
+};
+
+describe('visitPriorities', () => {
+  it('weights shares of the largest value with the default weights 3, 3, 1, 1', () => {
+    const [first, second] = visitPriorities([b, a]);
+    expect(first?.communityId).toBe('a');
+    // a: shares 1000/1000, 0.2/0.4, 2/2, 10/40 -> (3·1 + 3·0.5 + 1·1 + 1·0.25) / 8 = 0.71875
+    expectClose(first?.score ?? NaN, 71.875, TOL, 'by hand: 5.75 / 8');
+    // b: shares 0.5, 1, 0 (unknown facilities count as none), 1 -> (1.5 + 3 + 0 + 1) / 8 = 0.6875
+    expectClose(second?.score ?? NaN, 68.75, TOL, 'by hand: 5.5 / 8');
+    const chance = first?.components.find((c) => c.id === 'chance');
+    expectClose(chance?.share ?? NaN, 0.5, TOL, 'by hand: 0.2 / 0.4');
+    expectClose(chance?.points ?? NaN, 18.75, TOL, 'by hand: 100 · 3 · 0.5 / 8');
+  });
+
+  it('leaves out a component no community has, and keeps the input order on a tie', () => {
+    const bare = (p: PriorityInput): PriorityInput => ({
+      communityId: p.communityId,
+      values: { people: p.values.people, chance: p.values.chance },
+    });
+    const scored = visitPriorities([bare(b), bare(a)]);
+    // Both: (3·1 + 3·0.5) / 6 = 0.75 -> a tie, b stays first.
+    expect(scored.map((s) => s.communityId)).toEqual(['b', 'a']);
+    for (const s of scored) expectClose(s.score, 75, TOL, 'by hand: 4.5 / 6');
+    expect(scored[0]?.components.find((c) => c.id === 'isolation')?.used).toBe(false);
+  });
+
+  it('follows changed weights: the chance alone puts b first', () => {
+    const scored = visitPriorities([a, b], { people: 0, chance: 1, facilities: 0, isolation: 0 });
+    expect(scored.map((s) => [s.communityId, s.score])).toEqual([
+      ['b', 100],
+      ['a', 50],
+    ]);
+  });
+
+  it('gives every score 0 when every weight is 0', () => {
+    const scored = visitPriorities([a, b], { people: 0, chance: 0, facilities: 0, isolation: 0 });
+    expect(scored.map((s) => s.score)).toEqual([0, 0]);
+  });
+});

@@ -1,0 +1,183 @@
+import { readFileSync } from 'node:fs';
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { DEMO_STUDY_URL } from '../../../api/operations/demo-seed.ts';
+import { runFinished, startPageApp, type PageApp } from '../helpers/page-app.ts';
+
+/**
+ * Visit priority, trip plans and visit records through app.request(), on a cut-down demo
+ * (three villages with details, PGA only) so a screening is quick. The scoring and the trip
+ * order are checked by hand in test/results/visit-priority.test.ts and
+ * test/engine/trip/visit-order.test.ts; these tests check the pages and the API carry them.
+ */
+let page: PageApp;
+let id: string;
+
+beforeAll(async () => {
+  page = startPageApp();
+  const demo = JSON.parse(readFileSync(DEMO_STUDY_URL, 'utf8')) as Record<string, any>;
+  const { terrain: _terrain, ...rest } = demo;
+  const study = {
+    ...rest,
+    name: 'Demo coast, visits',
+    communities: demo.communities.filter((c: { id: string }) =>
+      ['harbour-point', 'vennick-bay', 'lisk-head'].includes(c.id),
+    ),
+    sources: {
+      type: 'FeatureCollection',
+      features: demo.sources.features.filter(
+        (f: { properties: { id: string } }) => f.properties.id === 'orle-interface',
+      ),
+    },
+    settings: { ...demo.settings, measures: ['PGA'], magnitudeStep: 0.5, horizonsYears: [50] },
+  };
+  id = page.ctx.store.studies.create({ name: study.name, document: JSON.stringify(study) }).id;
+  const started = await page.app.request(`/studies/${id}/screen`, {
+    method: 'POST',
+    body: new URLSearchParams(),
+  });
+  const runId = (started.headers.get('location') as string).split('/').at(-1) as string;
+  expect(await runFinished(page.ctx, runId)).toBe('done');
+}, 120_000);
+afterAll(async () => page?.close());
+
+const html = async (path: string, status = 200) => {
+  const response = await page.app.request(path);
+  expect(response.status).toBe(status);
+  return response.text();
+};
+/** The community ids of a table's rows, in page order. */
+const rowOrder = (text: string, table: string): string[] => {
+  const start = text.indexOf(table);
+  const body = text.slice(start, text.indexOf('</table>', start));
+  return [...body.matchAll(/<tr data-community="([^"]+)"/g)].map((m) => m[1] as string);
+};
+
+describe('visit priority on the overview', () => {
+  test('shows every component and follows the weights in the query', async () => {
+    const text = await html(`/studies/${id}`);
+    expect(text).toContain('id="priority-heading"');
+    for (const component of ['people', 'chance', 'facilities', 'isolation'])
+      expect(text).toContain(`data-component="${component}"`);
+    // People alone: Vennick Bay (2,900) before Harbour Point (420) before Lisk Head (35).
+    const people = await html(`/studies/${id}?w-people=1&w-chance=0&w-facilities=0&w-isolation=0`);
+    expect(rowOrder(people, 'priority-table')).toEqual([
+      'vennick-bay',
+      'harbour-point',
+      'lisk-head',
+    ]);
+    // Isolation alone: Lisk Head (61 km) first, Vennick Bay (3 km) last.
+    const isolation = await html(
+      `/studies/${id}?w-people=0&w-chance=0&w-facilities=0&w-isolation=1`,
+    );
+    expect(rowOrder(isolation, 'priority-table')).toEqual([
+      'lisk-head',
+      'harbour-point',
+      'vennick-bay',
+    ]);
+  });
+
+  test('names a weight that is not a number from 0 to 10 and keeps its default', async () => {
+    const text = await html(`/studies/${id}?w-people=lots`);
+    expect(text).toContain('w-people: expected a number from 0 to 10, got &quot;lots&quot;');
+    expect(text).toMatch(/name="w-people"[^>]*value="3"/);
+  });
+});
+
+describe('trip plan', () => {
+  test('orders the chosen villages with legs that add up to the total', async () => {
+    const text = await html(
+      `/studies/${id}/trip?c=vennick-bay&c=lisk-head&c=harbour-point&start=harbour-point`,
+    );
+    const order = rowOrder(text, 'trip-table');
+    expect(order[0]).toBe('harbour-point');
+    expect(order).toHaveLength(3);
+    expect(text).toContain('class="numeric trip-total"');
+  });
+
+  test('refuses an unknown village and an empty choice with a page that says so', async () => {
+    expect(await html(`/studies/${id}/trip?c=nowhere`, 422)).toContain('nowhere');
+    expect(await html(`/studies/${id}/trip`, 422)).toContain('Choose at least one village');
+  });
+});
+
+describe('visit records', () => {
+  test('a visit recorded on the page shows on the community page, the overview and the CSV', async () => {
+    const posted = await page.app.request(`/studies/${id}/communities/lisk-head/visits`, {
+      method: 'POST',
+      body: new URLSearchParams({
+        visitedOn: '2026-04-09',
+        language: 'English',
+        peopleReached: '31',
+        topics: '=SUM(A1) drills',
+        followUps: 'posters',
+        referral: 'requested',
+      }),
+    });
+    expect(posted.status).toBe(303);
+    const community = await html(`/studies/${id}/communities/lisk-head`);
+    expect(community).toContain('id="visits-heading"');
+    expect(community).toContain('posters');
+    const overview = await html(`/studies/${id}`);
+    expect(overview).toMatch(/data-community="lisk-head"[\s\S]*?data-key="visits">1</);
+    const csv = await (await page.app.request(`/api/studies/${id}/visits.csv`)).text();
+    expect(csv.split('\r\n')[1]).toContain(',"\'=SUM(A1) drills",');
+  });
+
+  test('a form with problems is shown again with each problem beside its field', async () => {
+    const posted = await page.app.request(`/studies/${id}/communities/lisk-head/visits`, {
+      method: 'POST',
+      body: new URLSearchParams({ visitedOn: '2026-02-30', language: '', peopleReached: 'many' }),
+    });
+    expect(posted.status).toBe(422);
+    const text = await posted.text();
+    expect(text).toContain('id="visit-visitedOn-problems"');
+    expect(text).toContain('id="visit-language-problems"');
+    expect(text).toContain('id="visit-peopleReached-problems"');
+  });
+
+  test('the API records, lists and deletes visits and answers bad input in the error shape', async () => {
+    const body = {
+      communityId: 'harbour-point',
+      visitedOn: '2026-05-01',
+      language: 'French',
+      peopleReached: 12,
+      referral: 'assessed',
+    };
+    const created = await page.app.request(`/api/studies/${id}/visits`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify(body),
+    });
+    expect(created.status).toBe(201);
+    const visit = (await created.json()) as { id: string; referral: string };
+    expect(visit.referral).toBe('assessed');
+    const listed = (await (
+      await page.app.request(`/api/studies/${id}/visits?community=harbour-point`)
+    ).json()) as { count: number };
+    expect(listed.count).toBe(1);
+    const bad = await page.app.request(`/api/studies/${id}/visits`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ ...body, communityId: 'nowhere', peopleReached: -1 }),
+    });
+    expect(bad.status).toBe(422);
+    const problem = (await bad.json()) as { error: string; issues: { path: string }[] };
+    expect(problem.issues.map((i) => i.path)).toEqual(['peopleReached']);
+    const unknown = await page.app.request(`/api/studies/${id}/visits`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ ...body, communityId: 'nowhere' }),
+    });
+    expect(((await unknown.json()) as { issues: { path: string }[] }).issues[0]?.path).toBe(
+      'communityId',
+    );
+    const gone = await page.app.request(`/api/studies/${id}/visits/${visit.id}`, {
+      method: 'DELETE',
+    });
+    expect(gone.status).toBe(204);
+    expect(
+      (await page.app.request(`/api/studies/${id}/visits/${visit.id}`, { method: 'DELETE' }))
+        .status,
+    ).toBe(404);
+  });
+});

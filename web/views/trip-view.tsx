@@ -1,0 +1,105 @@
+import type { ScreeningBandId } from '../../api/engine/intensity/screening-band.ts';
+import type { TripPlan } from '../../api/engine/trip/visit-order.ts';
+import { BandSwatch } from '../layout/band-swatch.tsx';
+import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+
+export interface TripViewProps {
+  readonly page: PageContext;
+  readonly studyId: string;
+  readonly studyName: string;
+  readonly plan: TripPlan;
+  readonly returnToStart: boolean;
+  /** Names and bands of the stops (bands only once the study is screened). */
+  readonly names: ReadonlyMap<string, string>;
+  readonly bands: ReadonlyMap<string, ScreeningBandId>;
+}
+
+/**
+ * A trip plan: the chosen villages in visiting order with the straight-line distance of each
+ * leg and the total, ready to print (the print rules of tremora.css leave the page's frame and forms off the paper).
+ */
+export function TripView(props: TripViewProps) {
+  const { tr } = props.page;
+  const { plan, studyId } = props;
+  let sumKm = 0;
+  const km = (value: number) => tr.t('priority.km', { km: tr.number(value, 1) });
+  return (
+    <PageShell
+      page={props.page}
+      title={tr.t('trip.title', { name: props.studyName })}
+      titleLang={tr.fallbackLang('trip.title')}
+      study={{ id: studyId, name: props.studyName }}
+      section="overview"
+      bodyClass="trip-page"
+      showsNumbers={true}
+    >
+      <h1>{tr.text('trip.title', { name: props.studyName })}</h1>
+      <p>{tr.text('trip.method')}</p>
+      <table class="data-table trip-table">
+        <caption>{tr.text('trip.caption')}</caption>
+        <thead>
+          <tr>
+            <th scope="col" class="numeric">
+              {tr.text('trip.col.stop')}
+            </th>
+            <th scope="col">{tr.text('overview.col.community')}</th>
+            <th scope="col">{tr.text('overview.col.band')}</th>
+            <th scope="col" class="numeric">
+              {tr.text('trip.col.leg')}
+            </th>
+            <th scope="col" class="numeric">
+              {tr.text('trip.col.sofar')}
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {plan.stops.map((stop, i) => {
+            const legKm = i === 0 ? undefined : plan.legsKm[i - 1];
+            sumKm += legKm ?? 0;
+            const band = props.bands.get(stop.id);
+            return (
+              <tr data-community={stop.id}>
+                <td class="numeric">{i + 1}</td>
+                <th scope="row">
+                  <a href={`/studies/${studyId}/communities/${stop.id}`}>
+                    {props.names.get(stop.id) ?? stop.id}
+                  </a>
+                </th>
+                <td>{band ? <BandSwatch tr={tr} bandId={band} /> : ''}</td>
+                <td class="numeric">{legKm === undefined ? tr.text('trip.start') : km(legKm)}</td>
+                <td class="numeric">{km(sumKm)}</td>
+              </tr>
+            );
+          })}
+          {props.returnToStart && plan.stops.length > 1 && (
+            <tr>
+              <td class="numeric">{plan.stops.length + 1}</td>
+              <th scope="row">
+                {tr.text('trip.backTo', {
+                  name: props.names.get(plan.stops[0]?.id ?? '') ?? '',
+                })}
+              </th>
+              <td></td>
+              <td class="numeric">{km(plan.legsKm.at(-1) ?? 0)}</td>
+              <td class="numeric">{km(plan.totalKm)}</td>
+            </tr>
+          )}
+        </tbody>
+        <tfoot>
+          <tr>
+            <th scope="row" colspan={3}>
+              {tr.text('trip.total')}
+            </th>
+            <td class="numeric trip-total" colspan={2}>
+              {km(plan.totalKm)}
+            </td>
+          </tr>
+        </tfoot>
+      </table>
+      <p class="legend-note">{tr.text('trip.straightLine')}</p>
+      <p class="no-print">
+        <a href={`/studies/${studyId}#priority-heading`}>{tr.text('trip.back')}</a>
+      </p>
+    </PageShell>
+  );
+}

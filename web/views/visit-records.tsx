@@ -1,0 +1,155 @@
+import type { InputIssue } from '../../api/engine/errors.ts';
+import { REFERRAL_STATUSES, type VisitRecord } from '../../api/store/visit-repository.ts';
+import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { Translator } from '../text/translator.ts';
+import { FieldProblems } from './field-problems.tsx';
+
+/** A community's recorded visits, newest first, with a link to record another. */
+export function VisitRecords(props: {
+  readonly tr: Translator;
+  readonly studyId: string;
+  readonly communityId: string;
+  readonly visits: readonly VisitRecord[];
+}) {
+  const { tr, studyId, communityId, visits } = props;
+  return (
+    <section aria-labelledby="visits-heading" class="visit-records">
+      <h2 id="visits-heading">{tr.text('visits.heading')}</h2>
+      {visits.length === 0 ? (
+        <p>{tr.text('visits.none')}</p>
+      ) : (
+        <table class="data-table">
+          <caption>{tr.text('visits.caption')}</caption>
+          <thead>
+            <tr>
+              <th scope="col">{tr.text('visits.field.visitedOn')}</th>
+              <th scope="col">{tr.text('visits.field.language')}</th>
+              <th scope="col" class="numeric">
+                {tr.text('visits.field.peopleReached')}
+              </th>
+              <th scope="col">{tr.text('visits.field.topics')}</th>
+              <th scope="col">{tr.text('visits.field.followUps')}</th>
+              <th scope="col">{tr.text('visits.field.referral')}</th>
+            </tr>
+          </thead>
+          <tbody>
+            {visits.map((v) => (
+              <tr data-visit={v.id}>
+                <th scope="row">{tr.date(`${v.visitedOn}T12:00:00Z`)}</th>
+                <td>{v.language}</td>
+                <td class="numeric">{tr.number(v.peopleReached)}</td>
+                <td>{v.topics}</td>
+                <td>{v.followUps}</td>
+                <td>{tr.text(`visits.referral.${v.referral}`)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      )}
+      <p>
+        <a href={`/studies/${studyId}/communities/${communityId}/visits/new`}>
+          {tr.text('visits.record')}
+        </a>
+      </p>
+    </section>
+  );
+}
+
+/** The visit form's fields as sent, to show again beside their problems. */
+export type VisitFormValues = Readonly<Record<string, string>>;
+
+export interface VisitFormViewProps {
+  readonly page: PageContext;
+  readonly studyId: string;
+  readonly studyName: string;
+  readonly communityId: string;
+  readonly communityName: string;
+  readonly values: VisitFormValues;
+  readonly issues: readonly InputIssue[];
+}
+
+const TEXT_FIELDS = [
+  { name: 'visitedOn', type: 'date' },
+  { name: 'language', type: 'text' },
+  { name: 'peopleReached', type: 'number' },
+] as const;
+
+/** The form that records one visit to a community (a plain POST; no script needed). */
+export function VisitFormView(props: VisitFormViewProps) {
+  const { tr } = props.page;
+  const { values, issues } = props;
+  const issuesOf = (name: string) => issues.filter((i) => i.path === name);
+  const described = (name: string) =>
+    issuesOf(name).length > 0 ? `visit-${name}-problems` : undefined;
+  return (
+    <PageShell
+      page={props.page}
+      title={tr.t('visits.formTitle', { name: props.communityName })}
+      titleLang={tr.fallbackLang('visits.formTitle')}
+      study={{ id: props.studyId, name: props.studyName }}
+      section="overview"
+    >
+      <h1>{tr.text('visits.formTitle', { name: props.communityName })}</h1>
+      {issues.length > 0 && (
+        <p role="alert" class="form-problems">
+          {tr.text('visits.problems')}
+        </p>
+      )}
+      <form
+        method="post"
+        action={`/studies/${props.studyId}/communities/${props.communityId}/visits`}
+        class="visit-form"
+      >
+        <fieldset>
+          <legend>{tr.text('visits.heading')}</legend>
+          {TEXT_FIELDS.map((f) => (
+            <label>
+              {tr.text(`visits.field.${f.name}`)}
+              <input
+                type={f.type}
+                name={f.name}
+                value={values[f.name] ?? ''}
+                required
+                {...(f.type === 'number' ? { min: '0', step: '1' } : {})}
+                aria-invalid={issuesOf(f.name).length > 0 ? 'true' : undefined}
+                aria-describedby={described(f.name)}
+              />
+              <FieldProblems tr={tr} id={`visit-${f.name}-problems`} issues={issuesOf(f.name)} />
+            </label>
+          ))}
+          {(['topics', 'followUps'] as const).map((name) => (
+            <label>
+              {tr.text(`visits.field.${name}`)}
+              <textarea
+                name={name}
+                rows={3}
+                aria-invalid={issuesOf(name).length > 0 ? 'true' : undefined}
+                aria-describedby={described(name)}
+              >
+                {values[name] ?? ''}
+              </textarea>
+              <FieldProblems tr={tr} id={`visit-${name}-problems`} issues={issuesOf(name)} />
+            </label>
+          ))}
+          <label>
+            {tr.text('visits.field.referral')}
+            <select name="referral">
+              {REFERRAL_STATUSES.map((status) => (
+                <option value={status} selected={(values['referral'] ?? 'none') === status}>
+                  {tr.t(`visits.referral.${status}`)}
+                </option>
+              ))}
+            </select>
+            <FieldProblems tr={tr} id="visit-referral-problems" issues={issuesOf('referral')} />
+          </label>
+          <button type="submit">{tr.text('visits.save')}</button>
+        </fieldset>
+      </form>
+      <p>
+        <a href={`/studies/${props.studyId}/communities/${props.communityId}#visits-heading`}>
+          {tr.text('visits.backToCommunity', { name: props.communityName })}
+        </a>
+      </p>
+    </PageShell>
+  );
+}
