@@ -24,8 +24,17 @@ export const STUDY_KEYS = [
   'terrain',
 ] as const;
 
+/** The parts a study must have before it can be screened; a draft may lack them. */
+export type StudyPart = 'communities' | 'sources';
+
 export type LoadResult =
-  | { readonly ok: true; readonly study: Study; readonly warnings: readonly InputIssue[] }
+  | {
+      readonly ok: true;
+      readonly study: Study;
+      readonly warnings: readonly InputIssue[];
+      /** What a draft still lacks (only with `allowIncomplete`); empty for a complete study. */
+      readonly missing: readonly StudyPart[];
+    }
   | {
       readonly ok: false;
       readonly issues: readonly InputIssue[];
@@ -45,6 +54,26 @@ export interface LoadStudyOptions {
    * (community-files/read-community-file.ts); used instead of `communitiesCsv` when given.
    */
   readonly communitiesTable?: CommunityTable;
+  /**
+   * Accept a draft: a study with no communities or no sources yet (an empty list, or the key left
+   * out). Everything it does hold is checked as usual; what it lacks comes back in `missing`, and
+   * a draft is never screened (the runs validate without this).
+   */
+  readonly allowIncomplete?: boolean;
+}
+
+/** An empty or absent list of communities or collection of sources, which a draft may have. */
+function isEmptyPart(part: StudyPart, raw: unknown): boolean {
+  if (raw === undefined) return true;
+  if (part === 'communities') return Array.isArray(raw) && raw.length === 0;
+  const collection = raw as { type?: unknown; features?: unknown } | null;
+  return (
+    typeof collection === 'object' &&
+    collection !== null &&
+    collection.type === 'FeatureCollection' &&
+    Array.isArray(collection.features) &&
+    collection.features.length === 0
+  );
 }
 
 /**
@@ -64,8 +93,13 @@ export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
   issues.warnUnknownKeys(doc, STUDY_KEYS, []);
 
   const name = issues.parse(text(200, 'a study name'), doc.name, ['name']);
-  const communities = readStudyCommunities(doc.communities, options, issues);
-  const sources = readSources(doc.sources, issues, ['sources']);
+  const missing = options.allowIncomplete
+    ? (['communities', 'sources'] as const).filter((part) => isEmptyPart(part, doc[part]))
+    : [];
+  const communities = missing.includes('communities')
+    ? []
+    : readStudyCommunities(doc.communities, options, issues);
+  const sources = missing.includes('sources') ? [] : readSources(doc.sources, issues, ['sources']);
   const settings = readSettings(doc.settings, issues, ['settings']);
   const used = new Set<TectonicSetting>(sources.map((s) => s.setting));
   const groundMotion = readBranches(doc.groundMotion, used, settings, options.models, issues, [
@@ -91,7 +125,7 @@ export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
     name === undefined ||
     !settings ||
     !groundMotion ||
-    communities.length === 0
+    (communities.length === 0 && !missing.includes('communities'))
   ) {
     return { ok: false, issues: issues.issues, warnings: issues.warnings };
   }
@@ -104,7 +138,7 @@ export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
     ...(outline ? { outline } : {}),
     ...(terrain ? { terrain } : {}),
   };
-  return { ok: true, study, warnings: issues.warnings };
+  return { ok: true, study, warnings: issues.warnings, missing };
 }
 
 function readStudyCommunities(

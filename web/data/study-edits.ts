@@ -2,7 +2,8 @@ import { InvalidInput, type InputIssue } from '../../api/engine/errors.ts';
 import type { Community } from '../../api/engine/model.ts';
 import type { ModelCatalog } from '../../api/engine/motion/catalog.ts';
 import type { StoredInputs } from '../../api/operations/study-input.ts';
-import { validateStudy } from '../../api/operations/study-input.ts';
+import { validateDraft } from '../../api/operations/study-input.ts';
+import { IMPORTED_COMMUNITIES_FILE } from '../../api/operations/study-records.ts';
 import { parseJsonText } from '../../api/study/json-text.ts';
 
 /**
@@ -79,7 +80,7 @@ function validated(
   csv?: string,
 ): EditOutcome {
   try {
-    const { study } = validateStudy(document, models, csv);
+    const { study } = validateDraft(document, models, csv);
     return { ok: true, document, name: study.name };
   } catch (error) {
     if (error instanceof InvalidInput) return { ok: false, issues: error.issues };
@@ -101,7 +102,7 @@ export function saveCommunity(
   return { ...validated({ ...inputs.raw, communities: list }, models), index: at };
 }
 
-/** Removes the community at `index` and validates (a study keeps at least one). */
+/** Removes the community at `index` and validates (without any left, the study is a draft again). */
 export function removeCommunity(
   inputs: StoredInputs,
   communities: readonly Community[],
@@ -113,8 +114,6 @@ export function removeCommunity(
   return validated({ ...inputs.raw, communities: list }, models);
 }
 
-/** The file name a CSV import is recorded under in the document (as the API's import does). */
-export const IMPORTED_COMMUNITIES_FILE = 'communities.csv';
 
 /** Replaces the communities from CSV text; issues name CSV lines (`communities[line 5].lat`). */
 export function importCommunitiesCsv(
