@@ -73,7 +73,7 @@ export function editorPages(app: Hono, kit: PageKit): void {
   ): { data: StudyData & { ok: true } } | { response: Response | Promise<Response> } => {
     const tr = kit.tr(c);
     const id = c.req.param('id') as string;
-    const data = readStudy(ctx, id);
+    const data = readStudy(ctx, id, { drafts: true });
     if (!data)
       return {
         response: kit.render(
@@ -140,6 +140,7 @@ export function editorPages(app: Hono, kit: PageKit): void {
         page={kit.page(c)}
         studyId={data.record.id}
         study={data.study}
+        missing={data.missing}
         saved={saved}
         {...extra}
       />,

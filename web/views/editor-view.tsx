@@ -1,11 +1,13 @@
 import type { Child } from 'hono/jsx';
 import type { InputIssue } from '../../api/engine/errors.ts';
 import type { Study } from '../../api/engine/model.ts';
+import type { StudyPart } from '../../api/study/load-study.ts';
 import type { ColumnPick } from '../data/community-import.ts';
 import { issueFeature, issueLine } from '../data/study-edits.ts';
 import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 import type { Translator } from '../text/translator.ts';
 import { ColumnPickForm } from './column-pick-view.tsx';
+import { DraftNotice } from './draft-notice.tsx';
 import { FieldProblems } from './field-problems.tsx';
 
 /** An upload that did not validate: which form, its problems, and the text (for the line view). */
@@ -21,6 +23,8 @@ export interface EditorViewProps {
   readonly page: PageContext;
   readonly studyId: string;
   readonly study: Study;
+  /** What a draft still lacks before it can be screened. */
+  readonly missing?: readonly StudyPart[];
   readonly saved?: boolean;
   readonly problem?: UploadProblem;
   /** Problems of a removal (e.g. the last community), shown at the top. */
@@ -105,6 +109,7 @@ export function EditorView(props: EditorViewProps) {
           {tr.text('editor.notSaved')}
         </p>
       )}
+      <DraftNotice tr={tr} studyId={studyId} missing={props.missing ?? []} linkToEditor={false} />
       <FieldProblems
         tr={tr}
         id="editor-notice"
