@@ -20,6 +20,7 @@ import { CommunityFormView } from '../views/community-form-view.tsx';
 import { EditorView, type UploadProblem } from '../views/editor-view.tsx';
 import { MessageView } from '../views/message-view.tsx';
 import { field, fileField, type PageKit } from './page-kit.ts';
+import { sourcePages } from './source-pages.tsx';
 
 const EMPTY_FORM: CommunityForm = {
   id: '',
@@ -324,4 +325,11 @@ export function editorPages(app: Hono, kit: PageKit): void {
     });
   });
   app.post('/studies/:id/edit/sources-geojson', upload('sources'));
+
+  sourcePages(app, kit, {
+    load,
+    afterBody,
+    write: (data, outcome) => void write(data, outcome),
+    editorWithNotice: (c, data, notice) => editor(c, data, { notice }),
+  });
 }

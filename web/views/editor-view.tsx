@@ -5,6 +5,8 @@ import type { StudyPart } from '../../api/study/load-study.ts';
 import type { ColumnPick } from '../data/community-import.ts';
 import { issueFeature, issueLine } from '../data/study-edits.ts';
 import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import { mapFrame, studyPoints } from '../maps/map-frame.ts';
+import { StudyMap } from '../maps/study-map.tsx';
 import type { Translator } from '../text/translator.ts';
 import { ColumnPickForm } from './column-pick-view.tsx';
 import { DraftNotice } from './draft-notice.tsx';
@@ -30,6 +32,9 @@ export interface EditorViewProps {
   /** Problems of a removal (e.g. the last community), shown at the top. */
   readonly notice?: readonly InputIssue[];
 }
+
+/** The editor's map of the study, px: small, a preview of where the sources and communities are. */
+const PREVIEW_MAP = { width: 480, maxHeight: 360, padding: 24 } as const;
 
 /** Most lines of an uploaded CSV shown back with their problems. */
 const PREVIEW_LINES = 200;
@@ -228,6 +233,23 @@ export function EditorView(props: EditorViewProps) {
 
       <section aria-labelledby="sources-heading">
         <h2 id="sources-heading">{tr.text('editor.sources')}</h2>
+        <p>
+          <a class="button" href={`/studies/${studyId}/edit/new-source`}>
+            {tr.text('source.add')}
+          </a>
+        </p>
+        {studyPoints(study).length > 0 && (
+          <figure class="editor-preview">
+            <StudyMap
+              tr={tr}
+              study={study}
+              frame={mapFrame(study, PREVIEW_MAP)}
+              idPrefix="editor-map"
+              labels={false}
+            />
+            <figcaption>{tr.text('source.preview')}</figcaption>
+          </figure>
+        )}
         <table class="data-table">
           <caption>{tr.text('editor.sourcesCaption')}</caption>
           <thead>
@@ -236,6 +258,7 @@ export function EditorView(props: EditorViewProps) {
               <th scope="col">{tr.text('editor.col.id')}</th>
               <th scope="col">{tr.text('editor.col.kind')}</th>
               <th scope="col">{tr.text('editor.col.setting')}</th>
+              <th scope="col">{tr.text('editor.col.actions')}</th>
             </tr>
           </thead>
           <tbody>
@@ -247,6 +270,20 @@ export function EditorView(props: EditorViewProps) {
                 </td>
                 <td>{tr.text(`editor.kind.${s.kind}`)}</td>
                 <td>{s.setting}</td>
+                <td class="row-actions">
+                  <a href={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}`}>
+                    {tr.text('source.edit', { name: s.name })}
+                  </a>
+                  <form
+                    method="post"
+                    action={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}/remove`}
+                    class="inline-form"
+                  >
+                    <button type="submit" class="button-quiet">
+                      {tr.text('source.remove', { name: s.name })}
+                    </button>
+                  </form>
+                </td>
               </tr>
             ))}
           </tbody>
