@@ -23,6 +23,20 @@ export default tseslint.config(
       // Data flows one way between folders; a cycle is a layering mistake even where it runs.
       'import-x/no-cycle': ['error', { ignoreExternal: true }],
       'import-x/no-self-import': 'error',
+      // The folders' layering (DEVELOPERS.md, Layout): the engine is pure and stands alone; what
+      // the service does never reaches back into HTTP or pages; pages never import a route.
+      'import-x/no-restricted-paths': [
+        'error',
+        {
+          zones: [
+            { target: './api/engine', from: './api', except: ['./engine'] },
+            { target: './api/engine', from: './web' },
+            { target: './api/operations', from: ['./api/service', './web'] },
+            { target: './api/*/**', from: './web', message: 'only api/server.ts mounts the pages' },
+            { target: './web', from: './api/service/routes' },
+          ],
+        },
+      ],
       '@typescript-eslint/no-unused-vars': [
         'error',
         {

@@ -32,7 +32,7 @@ import {
 } from './hazard-cases.ts';
 
 /**
- * The performance benchmark of issue 7: the demo study; 100 communities with the demo's
+ * The hazard benchmark: the demo study; 100 communities with the demo's
  * sources; a 10,000-point map of the demo at 475-year PGA; 200 point sources × 1,000 sites × 25
  * levels with one crustal model; and the peak memory of a 10,000- and a 100,000-point map. For
  * each: wall time, ruptures × sites per second, exceedance terms per second, peak resident

@@ -2,7 +2,7 @@ import { startService, tempDir } from '../service/helpers/service-process.ts';
 import { describeLoad, loadMix, startHeavyRun } from '../service/reliability/load-mix.ts';
 
 /**
- * Load on loopback (issue 8): autocannon against GET /api/health, the study overview page and
+ * Load on loopback: autocannon against GET /api/health, the study overview page and
  * a small POST /api/compute at once, while the demo study's run computes. Prints requests per
  * second and p50/p99 latency for each; asserts nothing about time. That no request fails under
  * such load is asserted by the short burst in test/service/reliability/load-burst.test.ts.

@@ -16,7 +16,7 @@ import { appRoutes } from '../service/reliability/hostile-requests.ts';
 import { launchChromium, offlineContext, type LaunchedBrowser } from './helpers/chromium.ts';
 
 /**
- * Injection in the pages (issue 8): a study whose study, community, source and catalog file
+ * Injection in the pages: a study whose study, community, source and catalog file
  * names are markup and script is shown in every page (found from the app's routes), the
  * handout, a scenario and an editor upload that echoes its text, in Chromium with script on.
  * Asserted on the DOM: no payload ran (window.__pwned stays unset, no dialog opened), no

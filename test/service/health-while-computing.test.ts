@@ -1,19 +1,10 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { saveHeavyStudy } from './helpers/heavy-study.ts';
 import { getRun, startRun, waitForStatus } from './helpers/runs.ts';
-import { type ServiceProcess, startService, tempDir, waitFor } from './helpers/service-process.ts';
+import { waitFor, serviceForFile } from './helpers/service-process.ts';
 
 /** Health is answered while a heavy run (helpers/heavy-study.ts) computes; its latency is in the benchmark. */
-const dir = tempDir();
-let service: ServiceProcess;
-
-beforeAll(async () => {
-  service = await startService({ databasePath: `${dir.path}/busy.db` });
-});
-afterAll(async () => {
-  await service?.stop();
-  dir.remove();
-});
+const service = serviceForFile('busy');
 
 describe('while a heavy study computes', () => {
   it('health answers, the run reports progress, and it can be cancelled', async () => {

@@ -18,7 +18,7 @@ import type {
  *
  * Bommer, J. J. & Alarcón, J. E. (2006). The prediction and use of peak ground velocity.
  * Journal of Earthquake Engineering 10(1), 1–31 (relation and constant from memory).
- * The σ of ln SA(0.5) is kept unchanged, as the task specifies; the true σ of ln PGV so
+ * The σ of ln SA(0.5) is kept unchanged, a simplification of this screening; the true σ of ln PGV so
  * derived is somewhat larger, so the derived PGV hazard is a screening estimate only.
  */
 export const PGV_FROM_SA_PERIOD_S = 0.5;

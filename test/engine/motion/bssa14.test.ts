@@ -12,6 +12,7 @@ import {
   predictBssa14,
 } from '../../../api/engine/motion/bssa14.ts';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
+import { verticalStrikeSlip } from './crustal-input.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 import { worstKink } from './crustal-table-checks.ts';
@@ -21,29 +22,7 @@ const PGA: Measure = { kind: 'PGA' };
 const PGV: Measure = { kind: 'PGV' };
 const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 
-/** A vertical strike-slip event and a rock site; tests change what they need. */
-function input(over: Partial<GmmInput> = {}): GmmInput {
-  const rjbKm = over.rjbKm ?? 10;
-  return {
-    magnitude: 7,
-    rakeDeg: 0,
-    mechanism: 'strike-slip',
-    setting: 'crustal',
-    dipDeg: 90,
-    ztorKm: 0,
-    widthKm: 15,
-    hypoDepthKm: 8,
-    rjbKm,
-    rrupKm: rjbKm,
-    rxKm: -rjbKm,
-    ry0Km: 0,
-    rhypoKm: Math.hypot(rjbKm, 8),
-    repiKm: rjbKm,
-    vs30: 760,
-    vs30Measured: true,
-    ...over,
-  };
-}
+const input = (over: Partial<GmmInput> = {}): GmmInput => verticalStrikeSlip(over);
 const lnY = (over: Partial<GmmInput>, m: Measure): number =>
   bssa14.predict(input(over), m).lnMedian;
 

@@ -16,6 +16,7 @@ import {
   type Cb14Scenario,
 } from '../../../api/engine/motion/cb14.ts';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
+import { verticalStrikeSlip } from './crustal-input.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 import { worstKink } from './crustal-table-checks.ts';
@@ -26,29 +27,7 @@ const PGV: Measure = { kind: 'PGV' };
 const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 const rowAt = (periodS: number): Cb14Row => CB14_SA.find((r) => r.periodS === periodS) as Cb14Row;
 
-/** A vertical strike-slip rupture reaching the surface, site on the footwall side; tests change what they need. */
-function input(over: Partial<GmmInput> = {}): GmmInput {
-  const rrupKm = over.rrupKm ?? 10;
-  return {
-    magnitude: 7,
-    rakeDeg: 0,
-    mechanism: 'strike-slip',
-    setting: 'crustal',
-    dipDeg: 90,
-    ztorKm: 0,
-    widthKm: 15,
-    hypoDepthKm: 7,
-    rjbKm: rrupKm,
-    rrupKm,
-    rxKm: -rrupKm,
-    ry0Km: 0,
-    rhypoKm: Math.hypot(rrupKm, 7),
-    repiKm: rrupKm,
-    vs30: 760,
-    vs30Measured: true,
-    ...over,
-  };
-}
+const input = (over: Partial<GmmInput> = {}): GmmInput => verticalStrikeSlip(over, 7);
 const lnY = (over: Partial<GmmInput>, m: Measure): number => cb14.predict(input(over), m).lnMedian;
 
 const scenario = (over: Partial<Cb14Scenario> = {}): Cb14Scenario => ({

@@ -11,8 +11,14 @@ import { expectClose } from '../../helpers/close.ts';
 import { pairColumns } from './prepared-checks.ts';
 
 /**
- * The independent test vectors of test/engine/motion/vectors/ (see the README there): each case
- * names every input of one prediction and the expected ln median, τ, φ and σ.
+ * The independent test vectors of the ground-motion models, copied unchanged from
+ * `../shared/reference/gmm/vectors/<model>.json` into `vectors/` beside this file (see the README
+ * there). Their provenance (`../shared/reference/gmm/README.md`): computed by a reference
+ * implementation that is not Tremora's, from the published coefficient tables, with every input
+ * written in each case and the expected ln median, τ, φ and σ to 10 significant digits; compare
+ * with an absolute tolerance of 1e-4 in natural-log units. Each file's `reference`,
+ * `generatedBy` and `conventions` fields say which paper and which conventions (region, Z1
+ * default, Vs30 measured or inferred) its numbers follow.
  */
 export interface VectorCase {
   readonly id: string;
@@ -34,6 +40,8 @@ export interface VectorCase {
   readonly repiKm: number;
   readonly vs30: number;
   readonly vs30Measured: boolean;
+  /** The model's own default Z1 for the case's Vs30, km (crustal models), else null. */
+  readonly z1Km?: number | null;
   readonly lnMedian: number;
   readonly tau: number;
   readonly phi: number;
@@ -45,6 +53,8 @@ export interface VectorFile {
   readonly model: string;
   readonly reference: string;
   readonly generatedBy: string;
+  readonly conventions?: readonly string[];
+  readonly caseCount: number;
   readonly cases: readonly VectorCase[];
 }
 
@@ -63,8 +73,11 @@ export function vectorMeasure(c: VectorCase): Measure {
   return { kind: 'SA', periodS: c.periodS };
 }
 
-/** The case as Tremora's model input; basin depths left to the model's defaults, as the vectors assume. */
-export function vectorInput(c: VectorCase): GmmInput {
+/**
+ * The case as Tremora's model input; the basin depth left to the model's default, as the vectors
+ * assume, unless `z1` is 'given' (the case's own z1Km passed in, which must give the same answer).
+ */
+export function vectorInput(c: VectorCase, z1: 'default' | 'given' = 'default'): GmmInput {
   const mechanism =
     c.mechanism === 'reverse' || c.mechanism === 'normal' ? c.mechanism : 'strike-slip';
   return {
@@ -84,6 +97,7 @@ export function vectorInput(c: VectorCase): GmmInput {
     repiKm: c.repiKm,
     vs30: c.vs30,
     vs30Measured: c.vs30Measured,
+    ...(z1 === 'given' && c.z1Km != null ? { z1Km: c.z1Km } : {}),
   };
 }
 

@@ -1,3 +1,4 @@
+import { afterAll, beforeAll } from 'vitest';
 import { type ChildProcess, spawn } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -140,3 +141,36 @@ export const jsonInit = (
   headers: { 'Content-Type': 'application/json', ...headers },
   body: typeof body === 'string' ? body : JSON.stringify(body),
 });
+
+/**
+ * A service of its own for one test file: started in a temporary folder before the file's
+ * tests (database `<name>.db`) and stopped, folder removed, after them. The object answers for
+ * the started process once the tests run.
+ */
+export function serviceForFile(name: string): ServiceProcess {
+  const dir = tempDir();
+  let started: ServiceProcess | undefined;
+  const current = (): ServiceProcess => {
+    if (!started) throw new Error(`the ${name} service is used before it has started`);
+    return started;
+  };
+  beforeAll(async () => {
+    started = await startService({ databasePath: join(dir.path, `${name}.db`) });
+  });
+  afterAll(async () => {
+    await started?.stop();
+    dir.remove();
+  });
+  return {
+    get url() {
+      return current().url;
+    },
+    get child() {
+      return current().child;
+    },
+    output: () => current().output(),
+    fetch: (path, init) => current().fetch(path, init),
+    stop: () => current().stop(),
+    kill: () => current().kill(),
+  };
+}

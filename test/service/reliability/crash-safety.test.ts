@@ -11,7 +11,7 @@ import { COMMUNITIES_CSV, smallStudy } from '../helpers/small-study.ts';
 import { Tally } from './answer-checks.ts';
 
 /**
- * Crash safety (issue 8): the service is killed with SIGKILL at a random moment while clients
+ * Crash safety: the service is killed with SIGKILL at a random moment while clients
  * save, update and import studies and start runs, 20 times over on one database. After each
  * kill the database passes PRAGMA integrity_check; after each restart every save that was
  * acknowledged is there exactly as sent (or as a later update still in flight left it), every

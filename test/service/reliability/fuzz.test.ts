@@ -19,7 +19,7 @@ import {
 import { closeClient, parseRawAnswer, send, sendRaw } from './http-client.ts';
 
 /**
- * API fuzz (issue 8): at least 2,000 generated malformed or hostile requests across every route
+ * API fuzz: at least 2,000 generated malformed or hostile requests across every route
  * of a started service, then a set of raw requests no HTTP client would send. Expected: no
  * answer of 500 or above, no stack trace, the process alive, no internal error logged, and every
  * 4xx in the documented error shape (answer-checks.ts).

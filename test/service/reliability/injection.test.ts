@@ -16,7 +16,7 @@ import {
 import { COMMUNITIES_CSV, COMMUNITY, smallStudy } from '../helpers/small-study.ts';
 
 /**
- * Injection (issue 8), the parts outside the browser: CSV exports neutralise cells that start
+ * Injection, the parts outside the browser: CSV exports neutralise cells that start
  * with = + - @, tab or carriage return (OWASP, "CSV Injection": prefix such cells with a single
  * quote; from memory), and uploaded file names never reach a file path. Markup rendered inert
  * in the pages is checked in the browser (test/web/injection.browser.test.ts).

@@ -13,7 +13,7 @@ import { answerProblem } from './answer-checks.ts';
 import { type Answer, closeClient, send } from './http-client.ts';
 
 /**
- * Limits (issue 8): body size, JSON nesting depth, vertices per geometry and per study,
+ * Limits: body size, JSON nesting depth, vertices per geometry and per study,
  * communities and sources per study, scenario grid size, ruptures per study, issues listed.
  * Each is answered 413 or 422 with the limit named in the answer, and a request just within
  * it is accepted. The limits are read from the code that keeps them.

@@ -10,7 +10,7 @@ import { smallStudy } from '../helpers/small-study.ts';
 import { describeLoad, loadMix, startHeavyRun } from './load-mix.ts';
 
 /**
- * Load (issue 8), the short burst: a fixed number of requests (autocannon on loopback) to
+ * Load, the short burst: a fixed number of requests (autocannon on loopback) to
  * health, the study overview page and a small compute while a heavy run computes. Asserted:
  * every request answered and none failed (errors, timeouts, non-2xx answers), whatever the
  * machine's speed; requests per second and latencies are printed, not asserted (the measured

@@ -5,7 +5,7 @@ import { smallStudy } from '../helpers/small-study.ts';
 import { send } from './http-client.ts';
 
 /**
- * The load of issue 8, shared by the short burst in the tests (load-burst.test.ts, which
+ * The mixed load on loopback, shared by the short burst in the tests (load-burst.test.ts, which
  * asserts no failed request) and the longer measured run (test/bench/load.bench.ts, figures
  * only): autocannon on loopback against health, the study overview page and a small compute,
  * all at once, while a heavy run (the demo's sources over 440 villages, helpers/heavy-study.ts)

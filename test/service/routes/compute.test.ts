@@ -1,27 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { StudyResult } from '../../../api/engine/results.ts';
 import { expectRelative } from '../../helpers/close.ts';
 import { DEFAULT_WORK_BUDGET } from '../../../api/operations/work-budget.ts';
 import { expectError, expectSecurityHeaders } from '../helpers/assertions.ts';
 import { startRun, waitForStatus } from '../helpers/runs.ts';
-import {
-  jsonInit,
-  type ServiceProcess,
-  startService,
-  tempDir,
-} from '../helpers/service-process.ts';
+import { jsonInit, serviceForFile } from '../helpers/service-process.ts';
 import { EXCEEDANCE_AT_LEVELS, RATE_PER_YEAR, smallStudy } from '../helpers/small-study.ts';
 
-const dir = tempDir();
-let service: ServiceProcess;
-
-beforeAll(async () => {
-  service = await startService({ databasePath: `${dir.path}/compute.db` });
-});
-afterAll(async () => {
-  await service?.stop();
-  dir.remove();
-});
+const service = serviceForFile('compute');
 
 describe('POST /api/validate', () => {
   it('says a valid study is valid, with its size, the budget and its input hash', async () => {

@@ -1,23 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { expectError, expectSecurityHeaders } from '../helpers/assertions.ts';
-import {
-  jsonInit,
-  type ServiceProcess,
-  startService,
-  tempDir,
-} from '../helpers/service-process.ts';
+import { jsonInit, serviceForFile } from '../helpers/service-process.ts';
 import { COMMUNITIES_CSV, smallStudy, sourcesCollection } from '../helpers/small-study.ts';
 
-const dir = tempDir();
-let service: ServiceProcess;
-
-beforeAll(async () => {
-  service = await startService({ databasePath: `${dir.path}/imports.db` });
-});
-afterAll(async () => {
-  await service?.stop();
-  dir.remove();
-});
+const service = serviceForFile('imports');
 
 interface Imported {
   id: string;

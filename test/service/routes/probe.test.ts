@@ -1,24 +1,10 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { expectRelative } from '../../helpers/close.ts';
 import { expectError } from '../helpers/assertions.ts';
-import {
-  jsonInit,
-  type ServiceProcess,
-  startService,
-  tempDir,
-} from '../helpers/service-process.ts';
+import { jsonInit, serviceForFile } from '../helpers/service-process.ts';
 import { CORNELL79, DEPTH_KM, MAGNITUDE, MEDIAN_PGA_G } from '../helpers/small-study.ts';
 
-const dir = tempDir();
-let service: ServiceProcess;
-
-beforeAll(async () => {
-  service = await startService({ databasePath: `${dir.path}/probe.db` });
-});
-afterAll(async () => {
-  await service?.stop();
-  dir.remove();
-});
+const service = serviceForFile('probe');
 
 describe('POST /api/probe', () => {
   it('evaluates one model at a stated geometry', async () => {

@@ -1,13 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { ScenarioResult } from '../../../api/engine/scenario/index.ts';
 import { expectRelative } from '../../helpers/close.ts';
 import { expectError } from '../helpers/assertions.ts';
-import {
-  jsonInit,
-  type ServiceProcess,
-  startService,
-  tempDir,
-} from '../helpers/service-process.ts';
+import { jsonInit, serviceForFile } from '../helpers/service-process.ts';
 import {
   CORNELL79,
   DEPTH_KM,
@@ -16,16 +11,7 @@ import {
   smallStudy,
 } from '../helpers/small-study.ts';
 
-const dir = tempDir();
-let service: ServiceProcess;
-
-beforeAll(async () => {
-  service = await startService({ databasePath: `${dir.path}/scenario.db` });
-});
-afterAll(async () => {
-  await service?.stop();
-  dir.remove();
-});
+const service = serviceForFile('scenario');
 
 describe('scenario', () => {
   const request = { sourceId: 'spot-below', magnitude: MAGNITUDE };
