@@ -73,7 +73,11 @@ export function duplicateStudy(
  * Renames a saved study: its document is read, given the new name and validated in the
  * transaction that writes it, so no save made meanwhile is lost. Undefined when there is none.
  */
-export function renameStudy(ctx: ServiceContext, id: string, name: string): StudyRecord | undefined {
+export function renameStudy(
+  ctx: ServiceContext,
+  id: string,
+  name: string,
+): StudyRecord | undefined {
   return ctx.store.studies.update(id, (current) => {
     const inputs = storedInputs(ctx.store, current);
     const { study } = validateDraft({ ...inputs.raw, name }, ctx.models, inputs.communitiesCsv);

@@ -129,58 +129,69 @@ export function EditorView(props: EditorViewProps) {
             {tr.text('editor.add')}
           </a>
         </p>
-        <table class="data-table editor-table">
-          <caption>{tr.text('editor.communitiesCaption')}</caption>
-          <thead>
-            <tr>
-              <th scope="col">{tr.text('editor.field.name')}</th>
-              <th scope="col">{tr.text('editor.col.id')}</th>
-              <th scope="col" class="numeric">
-                {tr.text('editor.col.lon')}
-              </th>
-              <th scope="col" class="numeric">
-                {tr.text('editor.col.lat')}
-              </th>
-              <th scope="col">{tr.text('editor.col.site')}</th>
-              <th scope="col" class="numeric">
-                {tr.text('editor.col.people')}
-              </th>
-              <th scope="col">{tr.text('editor.col.coastal')}</th>
-              <th scope="col">{tr.text('editor.col.actions')}</th>
-            </tr>
-          </thead>
-          <tbody>
-            {study.communities.map((c) => (
-              <tr data-community={c.id}>
-                <th scope="row">{c.name}</th>
-                <td>
-                  <code>{c.id}</code>
-                </td>
-                <td class="numeric">{String(c.lon)}</td>
-                <td class="numeric">{String(c.lat)}</td>
-                <td>
-                  {c.vs30Basis === 'measured' ? `${c.vs30} m/s` : `${c.siteClass} (${c.vs30} m/s)`}
-                </td>
-                <td class="numeric">{c.population === undefined ? '' : tr.number(c.population)}</td>
-                <td>{c.coastal ? tr.text('editor.coastalYes') : ''}</td>
-                <td class="row-actions">
-                  <a href={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}`}>
-                    {tr.text('editor.edit', { name: c.name })}
-                  </a>
-                  <form
-                    method="post"
-                    action={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}/remove`}
-                    class="inline-form"
-                  >
-                    <button type="submit" class="button-quiet">
-                      {tr.text('editor.remove', { name: c.name })}
-                    </button>
-                  </form>
-                </td>
+        <div
+          class="table-scroll"
+          tabindex={0}
+          role="region"
+          aria-label={tr.t('editor.communitiesCaption')}
+        >
+          <table class="data-table editor-table">
+            <caption>{tr.text('editor.communitiesCaption')}</caption>
+            <thead>
+              <tr>
+                <th scope="col">{tr.text('editor.field.name')}</th>
+                <th scope="col">{tr.text('editor.col.id')}</th>
+                <th scope="col" class="numeric">
+                  {tr.text('editor.col.lon')}
+                </th>
+                <th scope="col" class="numeric">
+                  {tr.text('editor.col.lat')}
+                </th>
+                <th scope="col">{tr.text('editor.col.site')}</th>
+                <th scope="col" class="numeric">
+                  {tr.text('editor.col.people')}
+                </th>
+                <th scope="col">{tr.text('editor.col.coastal')}</th>
+                <th scope="col">{tr.text('editor.col.actions')}</th>
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {study.communities.map((c) => (
+                <tr data-community={c.id}>
+                  <th scope="row">{c.name}</th>
+                  <td>
+                    <code>{c.id}</code>
+                  </td>
+                  <td class="numeric">{String(c.lon)}</td>
+                  <td class="numeric">{String(c.lat)}</td>
+                  <td>
+                    {c.vs30Basis === 'measured'
+                      ? `${c.vs30} m/s`
+                      : `${c.siteClass} (${c.vs30} m/s)`}
+                  </td>
+                  <td class="numeric">
+                    {c.population === undefined ? '' : tr.number(c.population)}
+                  </td>
+                  <td>{c.coastal ? tr.text('editor.coastalYes') : ''}</td>
+                  <td class="row-actions">
+                    <a href={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}`}>
+                      {tr.text('editor.edit', { name: c.name })}
+                    </a>
+                    <form
+                      method="post"
+                      action={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}/remove`}
+                      class="inline-form"
+                    >
+                      <button type="submit" class="button-quiet">
+                        {tr.text('editor.remove', { name: c.name })}
+                      </button>
+                    </form>
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
       </section>
 
       <section aria-labelledby="upload-communities-heading" class="upload">
@@ -250,44 +261,51 @@ export function EditorView(props: EditorViewProps) {
             <figcaption>{tr.text('source.preview')}</figcaption>
           </figure>
         )}
-        <table class="data-table">
-          <caption>{tr.text('editor.sourcesCaption')}</caption>
-          <thead>
-            <tr>
-              <th scope="col">{tr.text('editor.col.source')}</th>
-              <th scope="col">{tr.text('editor.col.id')}</th>
-              <th scope="col">{tr.text('editor.col.kind')}</th>
-              <th scope="col">{tr.text('editor.col.setting')}</th>
-              <th scope="col">{tr.text('editor.col.actions')}</th>
-            </tr>
-          </thead>
-          <tbody>
-            {study.sources.map((s) => (
-              <tr data-source={s.id}>
-                <th scope="row">{s.name}</th>
-                <td>
-                  <code>{s.id}</code>
-                </td>
-                <td>{tr.text(`editor.kind.${s.kind}`)}</td>
-                <td>{s.setting}</td>
-                <td class="row-actions">
-                  <a href={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}`}>
-                    {tr.text('source.edit', { name: s.name })}
-                  </a>
-                  <form
-                    method="post"
-                    action={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}/remove`}
-                    class="inline-form"
-                  >
-                    <button type="submit" class="button-quiet">
-                      {tr.text('source.remove', { name: s.name })}
-                    </button>
-                  </form>
-                </td>
+        <div
+          class="table-scroll"
+          tabindex={0}
+          role="region"
+          aria-label={tr.t('editor.sourcesCaption')}
+        >
+          <table class="data-table">
+            <caption>{tr.text('editor.sourcesCaption')}</caption>
+            <thead>
+              <tr>
+                <th scope="col">{tr.text('editor.col.source')}</th>
+                <th scope="col">{tr.text('editor.col.id')}</th>
+                <th scope="col">{tr.text('editor.col.kind')}</th>
+                <th scope="col">{tr.text('editor.col.setting')}</th>
+                <th scope="col">{tr.text('editor.col.actions')}</th>
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {study.sources.map((s) => (
+                <tr data-source={s.id}>
+                  <th scope="row">{s.name}</th>
+                  <td>
+                    <code>{s.id}</code>
+                  </td>
+                  <td>{tr.text(`editor.kind.${s.kind}`)}</td>
+                  <td>{s.setting}</td>
+                  <td class="row-actions">
+                    <a href={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}`}>
+                      {tr.text('source.edit', { name: s.name })}
+                    </a>
+                    <form
+                      method="post"
+                      action={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}/remove`}
+                      class="inline-form"
+                    >
+                      <button type="submit" class="button-quiet">
+                        {tr.text('source.remove', { name: s.name })}
+                      </button>
+                    </form>
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
       </section>
 
       <section aria-labelledby="upload-sources-heading" class="upload">

@@ -6,7 +6,6 @@ import { storedInputs, validateStudy, type ValidStudy } from '../../operations/s
 import { IMPORTED_COMMUNITIES_FILE } from '../../operations/study-records.ts';
 import { studyJson } from './studies.ts';
 
-
 /**
  * Imports into a saved study: a communities CSV or a GeoJSON FeatureCollection of sources
  * replaces the study's communities or sources. The whole study is validated with the import
