@@ -449,7 +449,7 @@ export const EN = {
   'source.choice.auto': 'tell from the numbers',
   'source.choice.lon-lat': 'longitude latitude',
   'source.choice.lat-lon': 'latitude, longitude',
-  'source.choice.crustal': 'crustal',
+  'source.choice.crustal': 'crustal (in the plate above)',
   'source.choice.interface': 'subduction interface',
   'source.choice.intraslab': 'in the subducting slab',
   'source.choice.strike-slip': 'strike-slip',

@@ -56,7 +56,6 @@ export const FR: Readonly<Partial<Record<TextKey, string>>> = {
 
   'home.title': 'Études',
   'home.new': 'Commencer une nouvelle étude',
-  'home.col.actions': 'Actions',
   'studyForm.name': 'Nom de l’étude',
   'studyForm.cancel': 'Retour à la liste des études',
   'newStudy.title': 'Commencer une nouvelle étude',

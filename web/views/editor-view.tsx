@@ -129,12 +129,7 @@ export function EditorView(props: EditorViewProps) {
             {tr.text('editor.add')}
           </a>
         </p>
-        <div
-          class="table-scroll"
-          tabindex={0}
-          role="region"
-          aria-label={tr.t('editor.communitiesCaption')}
-        >
+        <div class="table-scroll">
           <table class="data-table editor-table">
             <caption>{tr.text('editor.communitiesCaption')}</caption>
             <thead>
@@ -261,12 +256,7 @@ export function EditorView(props: EditorViewProps) {
             <figcaption>{tr.text('source.preview')}</figcaption>
           </figure>
         )}
-        <div
-          class="table-scroll"
-          tabindex={0}
-          role="region"
-          aria-label={tr.t('editor.sourcesCaption')}
-        >
+        <div class="table-scroll">
           <table class="data-table">
             <caption>{tr.text('editor.sourcesCaption')}</caption>
             <thead>
