@@ -102,7 +102,7 @@ export function buildDemoCatalog(studyText: string): {
         new Date(e.timeMs).toISOString(),
         e.lon.toFixed(3),
         e.lat.toFixed(3),
-        e.depthKm.toFixed(1),
+        e.depthKm?.toFixed(1) ?? '',
         e.magnitude.toFixed(1),
         e.magnitudeType,
         e.id,

@@ -60,6 +60,7 @@ const feltEventJson = (e: FeltEstimate) => ({
 export const feltJson = (history: FeltHistory) => ({
   eventCount: history.eventCount,
   excludedNonMoment: history.excludedNonMoment,
+  excludedWithoutDepth: history.excludedWithoutDepth,
   crustalMaxDepthKm: history.crustalMaxDepthKm,
   feltMmi: FELT_MMI,
   stronglyFeltMmi: STRONGLY_FELT_MMI,

@@ -23,6 +23,8 @@ export interface CatalogLoadSummary {
   readonly byMagnitudeType: Readonly<Record<string, number>>;
   /** Loaded events whose magnitude is not a moment magnitude (left out of analyses by default). */
   readonly nonMoment: number;
+  /** Loaded events without a depth: counted in recurrence, left out of the felt history. */
+  readonly withoutDepth: number;
 }
 
 export interface CatalogLoad {
@@ -68,6 +70,7 @@ export function catalogLoad(
       rejected: allRejected.length,
       byMagnitudeType: types.byType,
       nonMoment: types.nonMoment,
+      withoutDepth: events.filter((e) => e.depthKm === null).length,
     },
     notes,
   };
@@ -75,7 +78,7 @@ export function catalogLoad(
 
 /** One plain paragraph on a load: counts, where the rejects are, magnitude types to watch. */
 export function describeCatalogLoad(load: CatalogLoad): string {
-  const { loaded, rejected, nonMoment, byMagnitudeType } = load.summary;
+  const { loaded, rejected, nonMoment, withoutDepth, byMagnitudeType } = load.summary;
   const parts = [`Loaded ${loaded} event${loaded === 1 ? '' : 's'}; rejected ${rejected}.`];
   if (rejected > 0) {
     const shown = load.rejected.slice(0, 10).map((r) => `${r.where}: ${r.reasons.join('; ')}`);
@@ -92,5 +95,9 @@ export function describeCatalogLoad(load: CatalogLoad): string {
       `${nonMoment} event${nonMoment === 1 ? ' has a magnitude type' : 's have magnitude types'} other than moment magnitude (${others}); analyses use moment magnitudes only unless asked to use all.`,
     );
   }
+  if (withoutDepth > 0)
+    parts.push(
+      `${withoutDepth} event${withoutDepth === 1 ? ' has' : 's have'} no depth: counted in recurrence, left out of the felt history (which needs the distance to the hypocentre).`,
+    );
   return parts.join(' ');
 }

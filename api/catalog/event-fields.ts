@@ -54,7 +54,9 @@ export function eventFromFields(
   }
   const lon = number('lon', f.lon, [-180, 180], ' degrees');
   const lat = number('lat', f.lat, [-90, 90], ' degrees');
-  const depthKm = number('depthKm', f.depthKm, DEPTH_KM_RANGE, ' km');
+  // A depth left empty is no depth (many historical events have none); one given must be a number.
+  const depthKm =
+    (f.depthKm?.trim() ?? '') === '' ? null : number('depthKm', f.depthKm, DEPTH_KM_RANGE, ' km');
   const magnitude = number('magnitude', f.magnitude, MAGNITUDE_RANGE, '');
   if (reasons.length > 0) return { reasons };
   const type = f.magnitudeType?.trim() ?? '';

@@ -57,7 +57,7 @@ export function createApp(ctx: ServiceContext, options: CreateAppOptions = {}): 
     }),
   );
   app.use(sameOriginWrites());
-  if (options.token !== undefined) app.use(requireToken(options.token));
+  if (options.token !== undefined) app.use(requireToken(options.token, ctx.store.pageAccess));
   app.use(
     bodyLimit({
       maxSize,

@@ -1,13 +1,16 @@
 import { createHash, createHmac, timingSafeEqual } from 'node:crypto';
 import type { Context } from 'hono';
 import { deleteCookie, getCookie, setCookie } from 'hono/cookie';
+import type { PageAccessRepository } from '../store/page-access-repository.ts';
 
 /**
  * The way in for people using the pages of a service that has TREMORA_TOKEN: a browser form
  * cannot send "Authorization: Bearer", so the access page checks the token once and leaves a
- * cookie that require-token.ts accepts in its place. The cookie holds an HMAC-SHA256 of a
- * fixed label keyed by the token (RFC 2104), never the token: whoever reads the cookie cannot
- * recover the token, and starting the service with a new token ends every browser's access.
+ * cookie that require-token.ts accepts in its place. The cookie names an access recorded in
+ * the database (store/page-access-repository.ts) and carries an HMAC-SHA256 of that name keyed
+ * by the token (RFC 2104), never the token: whoever reads the cookie cannot recover the token,
+ * leaving ends that access on the service (a copy of the cookie no longer works, also after a
+ * restart), and starting the service with a new token ends every browser's access.
  * Page writes stay behind the same-origin check (same-origin.ts) as well as SameSite=Strict.
  */
 export const ACCESS_COOKIE = 'tremora_access';
@@ -20,9 +23,13 @@ export const ACCESS_MAX_AGE_S = 30 * 24 * 3600;
 
 const COOKIE_LABEL = 'tremora page access';
 
-/** The cookie's value for `token`: base64url of HMAC-SHA256(key = token, message = a fixed label). */
-export function accessCookieValue(token: string): string {
-  return createHmac('sha256', token).update(COOKIE_LABEL).digest('base64url');
+/**
+ * The cookie's value for the access `accessId` under `token`: the id, a dot, and base64url of
+ * HMAC-SHA256(key = token, message = a fixed label and the id).
+ */
+export function accessCookieValue(token: string, accessId: string): string {
+  const mac = createHmac('sha256', token).update(`${COOKIE_LABEL} ${accessId}`).digest('base64url');
+  return `${accessId}.${mac}`;
 }
 
 /**
@@ -34,10 +41,19 @@ export function sameSecret(given: string, expected: string): boolean {
   return timingSafeEqual(digest(given), digest(expected));
 }
 
-/** Whether the request carries the access cookie made from `token`. */
-export function hasPageAccess(c: Context, token: string): boolean {
+/** The access the request's cookie names, when the cookie was made with `token`. */
+function accessOf(c: Context, token: string): string | undefined {
   const value = getCookie(c, ACCESS_COOKIE);
-  return value !== undefined && sameSecret(value, accessCookieValue(token));
+  const dot = value?.indexOf('.') ?? -1;
+  if (value === undefined || dot <= 0) return undefined;
+  const accessId = value.slice(0, dot);
+  return sameSecret(value, accessCookieValue(token, accessId)) ? accessId : undefined;
+}
+
+/** Whether the request carries a cookie made from `token` for an access that is still open. */
+export function hasPageAccess(c: Context, token: string, records: PageAccessRepository): boolean {
+  const accessId = accessOf(c, token);
+  return accessId !== undefined && records.isOpen(accessId, new Date());
 }
 
 /**
@@ -49,9 +65,14 @@ function overHttps(c: Context): boolean {
   return new URL(c.req.url).protocol === 'https:' || forwarded === 'https';
 }
 
-/** Sets the access cookie on the answer: HttpOnly, SameSite=Strict, Path=/, Secure over https. */
-export function grantPageAccess(c: Context, token: string): void {
-  setCookie(c, ACCESS_COOKIE, accessCookieValue(token), {
+/**
+ * Records a new access and sets its cookie on the answer: HttpOnly, SameSite=Strict, Path=/,
+ * Secure over https.
+ */
+export function grantPageAccess(c: Context, token: string, records: PageAccessRepository): void {
+  const now = new Date();
+  const accessId = records.open(now, new Date(now.getTime() + ACCESS_MAX_AGE_S * 1000));
+  setCookie(c, ACCESS_COOKIE, accessCookieValue(token, accessId), {
     httpOnly: true,
     sameSite: 'Strict',
     path: '/',
@@ -60,8 +81,10 @@ export function grantPageAccess(c: Context, token: string): void {
   });
 }
 
-/** Clears the access cookie (same name, path and flags, expired). */
-export function endPageAccess(c: Context): void {
+/** Ends the access the cookie names, on the service, and clears the cookie (same name, path and flags, expired). */
+export function endPageAccess(c: Context, token: string, records: PageAccessRepository): void {
+  const accessId = accessOf(c, token);
+  if (accessId !== undefined) records.end(accessId);
   deleteCookie(c, ACCESS_COOKIE, {
     httpOnly: true,
     sameSite: 'Strict',

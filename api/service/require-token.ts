@@ -9,6 +9,7 @@ import {
   pageBehind,
 } from './page-access.ts';
 import { isWrite } from './same-origin.ts';
+import type { PageAccessRepository } from '../store/page-access-repository.ts';
 
 const refused = (c: Context, why: string) =>
   c.json(
@@ -30,7 +31,7 @@ const isAccessPost = (path: string): boolean => path === ACCESS_PATH || path ===
  * (page-access.ts). hono's bearer-auth compares in constant time. A page form posted without
  * access is sent to the access page (303) rather than answered with JSON; the API keeps 401.
  */
-export function requireToken(token: string): MiddlewareHandler {
+export function requireToken(token: string, records: PageAccessRepository): MiddlewareHandler {
   const check = bearerAuth({
     token,
     noAuthenticationHeader: { message: (c: Context) => refused(c, 'an access token is required') },
@@ -42,7 +43,7 @@ export function requireToken(token: string): MiddlewareHandler {
   return async (c, next) => {
     if (!isWrite(c.req.method) || isAccessPost(c.req.path)) return next();
     if (c.req.header('authorization') === undefined) {
-      if (hasPageAccess(c, token)) return next();
+      if (hasPageAccess(c, token, records)) return next();
       if (!isApiPath(c.req.path)) return c.redirect(accessPageFor(pageBehind(c)), 303);
     }
     return check(c, next);

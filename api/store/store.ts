@@ -5,6 +5,7 @@ import { CatalogRepository } from './catalog-repository.ts';
 import { checkDatabaseFile, isDiskFull, refusalFor } from './database-file.ts';
 import { MapRunRepository } from './map-run-repository.ts';
 import { migrate, type MigrationOutcome } from './migrate.ts';
+import { PageAccessRepository } from './page-access-repository.ts';
 import { RunRepository } from './run-repository.ts';
 import { StudyRepository } from './study-repository.ts';
 
@@ -26,6 +27,8 @@ export interface Store {
   readonly runs: RunRepository;
   /** Hazard-map runs and their GeoJSON. */
   readonly maps: MapRunRepository;
+  /** Browsers given access to the pages of a service with a token. */
+  readonly pageAccess: PageAccessRepository;
   readonly migration: MigrationOutcome;
   /** Runs found queued or running at open (left by a crash), now marked interrupted. */
   readonly interruptedAtOpen: number;
@@ -82,6 +85,7 @@ export function openStore(path: string): Store {
       catalogs: new CatalogRepository(db),
       runs,
       maps,
+      pageAccess: new PageAccessRepository(db),
       migration,
       interruptedAtOpen,
       mapRunsInterruptedAtOpen,

@@ -2,6 +2,7 @@ import * as turf from '@turf/turf';
 import type { LonLat } from '../engine/model.ts';
 import { describeValue } from './fields.ts';
 import type { IssueList } from './issues.ts';
+import { crossesItself } from './self-crossing.ts';
 
 /** Most vertices one source geometry may have (a screening trace, not a survey). */
 export const MAX_VERTICES = 5000;
@@ -145,7 +146,7 @@ export function readSourceGeometry(
       );
       return undefined;
     }
-    if (turf.kinks(line).features.length > 0) {
+    if (crossesItself([trace])) {
       issues.add(coordPath, 'the trace crosses itself; expected a simple line');
       return undefined;
     }
@@ -175,7 +176,7 @@ export function readSourceGeometry(
     rings.push(ring);
   }
   const polygon = turf.polygon(rings);
-  if (turf.kinks(polygon).features.length > 0) {
+  if (crossesItself(rings)) {
     issues.add(coordPath, 'the polygon crosses itself; expected simple rings');
     return undefined;
   }

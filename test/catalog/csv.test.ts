@@ -10,7 +10,7 @@ describe('catalog CSV', () => {
 
   it('loads the good rows with their fields', () => {
     expect(load.format).toBe('csv');
-    expect(load.events.map((e) => e.id)).toEqual(['ev-1', 'ev-2', 'ev-3', 'line-8']);
+    expect(load.events.map((e) => e.id)).toEqual(['ev-1', 'ev-2', 'ev-3', 'ev-5', 'line-8']);
     expect(load.events[0]).toEqual({
       id: 'ev-1',
       timeMs: Date.UTC(2001, 1, 3, 4, 5, 6),
@@ -23,30 +23,35 @@ describe('catalog CSV', () => {
     expect(load.events[1]?.timeMs).toBe(Date.UTC(2001, 1, 3, 5, 0, 0, 250));
     // No zone: UTC. "+02:00": two hours ahead of UTC.
     expect(load.events[2]?.timeMs).toBe(Date.UTC(2002, 6, 1, 12, 0, 0));
-    expect(load.events[3]?.timeMs).toBe(Date.UTC(2005, 4, 5, 3, 5, 5));
+    // An empty depth cell: loaded without a depth.
+    expect(load.events[3]?.depthKm).toBeNull();
+    expect(load.events[4]?.timeMs).toBe(Date.UTC(2005, 4, 5, 3, 5, 5));
   });
 
   it('reports each bad row with its line number and what was wrong', () => {
-    expect(load.rejected.map((r) => r.line)).toEqual([5, 6, 9, 10]);
+    expect(load.rejected.map((r) => r.line)).toEqual([5, 9, 10]);
     expect(load.rejected[0]?.reasons.join(' ')).toMatch(/time: expected a real calendar date/);
-    expect(load.rejected[1]?.reasons.join(' ')).toMatch(/depthKm: missing/);
-    expect(load.rejected[2]?.reasons.join(' ')).toMatch(/duplicate id "ev-1" \(first at line 2\)/);
-    expect(load.rejected[3]?.reasons.join(' ')).toMatch(/expected 7 fields; got 6/);
+    expect(load.rejected[1]?.reasons.join(' ')).toMatch(/duplicate id "ev-1" \(first at line 2\)/);
+    expect(load.rejected[2]?.reasons.join(' ')).toMatch(/expected 7 fields; got 6/);
     expect(load.rejected[0]?.id).toBe('ev-4');
   });
 
   it('summarises counts and flags magnitude types other than moment magnitude', () => {
     expect(load.summary).toEqual({
-      loaded: 4,
-      rejected: 4,
-      byMagnitudeType: { Mw: 1, ML: 1, Mww: 1, mb: 1 },
-      nonMoment: 2,
+      loaded: 5,
+      rejected: 3,
+      byMagnitudeType: { Mw: 1, ML: 1, Mww: 1, mb: 2 },
+      nonMoment: 3,
+      withoutDepth: 1,
     });
     expect(load.notes).toContain('1 rows had no id and were given "line-<number>"');
     const text = describeCatalogLoad(load);
-    expect(text).toMatch(/^Loaded 4 events; rejected 4\. Rejected: line 5: /);
+    expect(text).toMatch(/^Loaded 5 events; rejected 3\. Rejected: line 5: /);
     expect(text).toMatch(
-      /2 events have magnitude types other than moment magnitude \(ML 1, mb 1\)/,
+      /3 events have magnitude types other than moment magnitude \(ML 1, mb 2\)/,
+    );
+    expect(text).toMatch(
+      /1 event has no depth: counted in recurrence, left out of the felt history/,
     );
   });
 

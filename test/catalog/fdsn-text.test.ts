@@ -67,6 +67,7 @@ describe('FDSN event text', () => {
       rejected: 3,
       byMagnitudeType: { Mw: 1, ML: 1, Mwc: 1, unknown: 1 },
       nonMoment: 2,
+      withoutDepth: 0,
     });
   });
 

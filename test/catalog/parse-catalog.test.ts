@@ -14,9 +14,9 @@ describe('parseCatalog', () => {
   });
 
   it('parses each fixture through the detected format', () => {
-    expect(parseCatalog(read('small-catalog.csv')).summary.loaded).toBe(4);
+    expect(parseCatalog(read('small-catalog.csv')).summary.loaded).toBe(5);
     expect(parseCatalog(read('small-catalog.txt')).summary.loaded).toBe(4);
-    expect(parseCatalog(read('small-catalog.quakeml')).summary.loaded).toBe(2);
+    expect(parseCatalog(read('small-catalog.quakeml')).summary.loaded).toBe(3);
   });
 
   it('keeps events of years 0 to 99 in their century, in every format', () => {

@@ -30,6 +30,16 @@ describe('QuakeML 1.2', () => {
         magnitude: 3.7,
         magnitudeType: 'ML',
       },
+      // No depth: loaded without one.
+      {
+        id: 'smi:local/event/5',
+        timeMs: Date.UTC(2018, 1, 1),
+        lon: -150.1,
+        lat: -46.5,
+        depthKm: null,
+        magnitude: 4.4,
+        magnitudeType: 'Mw',
+      },
     ]);
   });
 
@@ -37,18 +47,17 @@ describe('QuakeML 1.2', () => {
     expect(load.rejected.map((r) => [r.index, r.id, r.where])).toEqual([
       [3, 'smi:local/event/3', 'event 3 (smi:local/event/3)'],
       [4, 'smi:local/event/4', 'event 4 (smi:local/event/4)'],
-      [5, 'smi:local/event/5', 'event 5 (smi:local/event/5)'],
     ]);
     expect(load.rejected[0]?.reasons).toEqual([
       'preferredOriginID: "smi:local/origin/missing" matches no origin of this event',
     ]);
     expect(load.rejected[1]?.reasons).toEqual(['type: "quarry blast" is not an earthquake']);
-    expect(load.rejected[2]?.reasons.join(' ')).toMatch(/^depth \(km, from metres\): missing/);
     expect(load.summary).toEqual({
-      loaded: 2,
-      rejected: 3,
-      byMagnitudeType: { Mww: 1, ML: 1 },
+      loaded: 3,
+      rejected: 2,
+      byMagnitudeType: { Mww: 1, ML: 1, Mw: 1 },
       nonMoment: 1,
+      withoutDepth: 1,
     });
   });
 

@@ -22,9 +22,11 @@ describe('while a heavy study computes', () => {
     }
     expect((await service.fetch('/api/studies')).status).toBe(200);
     // A run reports progress after each community's branch.
+    // Waits as long as a busy machine needs (up to 5 minutes); nothing asserted depends on speed.
     const moving = await waitFor(
       () => getRun(service, run.id),
       (r) => r.progress > 0,
+      3_000,
     );
     expect(moving.status).toBe('running');
     expect(moving.progress).toBeGreaterThan(0);
@@ -39,5 +41,5 @@ describe('while a heavy study computes', () => {
       workers: { runs: { alive: number; busy: number } };
     };
     expect(after.workers.runs).toMatchObject({ alive: 1, busy: 0 });
-  });
+  }, 420_000);
 });

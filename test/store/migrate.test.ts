@@ -29,6 +29,7 @@ describe('migrate', () => {
     expect(outcome).toEqual({ fromVersion: 0, toVersion: shipped.length });
     expect(tables(db)).toEqual([
       'map_runs',
+      'page_access',
       'runs',
       'schema_version',
       'studies',

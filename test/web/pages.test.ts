@@ -236,6 +236,8 @@ describe('pages', () => {
     expect(html).toContain('<table class="data-table rejected">');
     expect(html).toMatch(/<tr data-line="5"><th scope="row">line 5<\/th>/);
     expect(html).toMatch(/data-loaded="[1-9]\d*" data-rejected="[1-9]\d*"/);
+    // Line 6 has no depth: loaded, and counted on the page.
+    expect(html).toContain('<p data-without-depth="1">1 earthquakes have no depth');
     expect(page.ctx.store.catalogs.get(smallId)?.fileName).toBe('small-catalog.csv');
   });
 

@@ -45,7 +45,12 @@ export function accessPages(app: Hono, kit: PageKit, token: string | undefined):
   app.get(ACCESS_PATH, (c) => {
     const why = c.req.query('why');
     const notice = why === 'needed' || why === 'ended' ? why : undefined;
-    const state = token === undefined ? 'open' : hasPageAccess(c, token) ? 'granted' : 'closed';
+    const state =
+      token === undefined
+        ? 'open'
+        : hasPageAccess(c, token, kit.ctx.store.pageAccess)
+          ? 'granted'
+          : 'closed';
     return view(c, state, notice, backFrom(c.req.query('back')));
   });
 
@@ -58,12 +63,12 @@ export function accessPages(app: Hono, kit: PageKit, token: string | undefined):
     const given = field(form, 'token')?.trim() ?? '';
     if (given === '') return view(c, 'closed', 'missing', back, 422);
     if (!sameSecret(given, token)) return view(c, 'closed', 'wrong', back, 403);
-    grantPageAccess(c, token);
+    grantPageAccess(c, token, kit.ctx.store.pageAccess);
     return c.redirect(back, 303);
   });
 
   app.post(LEAVE_PATH, (c) => {
-    endPageAccess(c);
+    endPageAccess(c, token, kit.ctx.store.pageAccess);
     return c.redirect(`${ACCESS_PATH}?why=ended`, 303);
   });
 }

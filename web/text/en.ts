@@ -481,6 +481,8 @@ export const EN = {
   'catalog.col.why': 'Why',
   'catalog.nonMoment':
     '{n} events have a magnitude type other than moment magnitude; the fit leaves them out.',
+  'catalog.withoutDepth':
+    '{n} earthquakes have no depth: they count in the recurrence fit and are left out of the felt history, which needs the distance to the hypocentre.',
   'catalog.declustered':
     'Declustering (Gardner and Knopoff 1974) kept {main} main shocks and set aside {removed} fore- and aftershocks.',
   'catalog.fit': 'How often earthquakes come',

@@ -143,6 +143,13 @@ export function CatalogView(props: CatalogViewProps) {
           {analysis.load.summary.nonMoment > 0 && (
             <p>{tr.text('catalog.nonMoment', { n: tr.number(analysis.load.summary.nonMoment) })}</p>
           )}
+          {analysis.load.summary.withoutDepth > 0 && (
+            <p data-without-depth={analysis.load.summary.withoutDepth}>
+              {tr.text('catalog.withoutDepth', {
+                n: tr.number(analysis.load.summary.withoutDepth),
+              })}
+            </p>
+          )}
           {analysis.load.rejected.length > 0 && (
             <table class="data-table rejected">
               <caption>{tr.text('catalog.rejectedCaption')}</caption>

@@ -10,8 +10,11 @@ export interface CatalogEvent {
   /** Epicentre, WGS84 degrees. */
   readonly lon: number;
   readonly lat: number;
-  /** Hypocentral depth below sea level, km. */
-  readonly depthKm: number;
+  /**
+   * Hypocentral depth below sea level, km; null when the catalog gives none (recurrence does
+   * without it, the felt history leaves such events out).
+   */
+  readonly depthKm: number | null;
   readonly magnitude: number;
   /** As reported ("Mw", "Mww", "ML", "mb" ...); "unknown" when the source gave none. */
   readonly magnitudeType: string;

@@ -23,7 +23,8 @@ import { selectByMagnitudeType, type MagnitudeSelectionOptions } from './magnitu
  * strike-slip, intraslab normal; common practice) with the point-rupture width, dip and top of
  * rupture of ruptures/point-rupture.ts. Distances treat the event as a point at its hypocentre
  * (Rjb = Repi, Rrup = Rhypo, as geometry/distances.ts does for point ruptures), which
- * underestimates the shaking near large events. Depths above sea level are taken as 0 km.
+ * underestimates the shaking near large events. Depths above sea level are taken as 0 km;
+ * events without a depth are left out (neither the setting nor the distance is known) and counted.
  *
  * "Likely felt" is a median MMI of IV or more, "likely strongly felt" VI or more (the Modified
  * Mercalli descriptions: IV felt indoors by many, VI felt by all; common practice).
@@ -72,6 +73,8 @@ export interface FeltHistory {
   readonly communities: readonly CommunityFeltHistory[];
   readonly eventCount: number;
   readonly excludedNonMoment: number;
+  /** Events left out for want of a depth. */
+  readonly excludedWithoutDepth: number;
   readonly crustalMaxDepthKm: number;
   readonly notes: readonly string[];
 }
@@ -91,6 +94,10 @@ const MECHANISM_OF: Readonly<Record<'crustal' | 'intraslab', Mechanism>> = {
 };
 const RAKE_OF: Readonly<Record<Mechanism, number>> = { 'strike-slip': 0, reverse: 90, normal: -90 };
 
+/** A catalog event whose depth is known. */
+type DepthEvent = CatalogEvent & { readonly depthKm: number };
+const hasDepth = (event: CatalogEvent): event is DepthEvent => event.depthKm !== null;
+
 interface WeightedModel {
   readonly model: GroundMotionModel;
   readonly weight: number;
@@ -105,7 +112,8 @@ export function feltHistory(
   const models = options.models ?? modelCatalog;
   const crustalMaxDepthKm = options.crustalMaxDepthKm ?? 35;
   const selected = selectByMagnitudeType(events, options.magnitudes);
-  const ordered = [...selected.events].sort((a, b) => a.timeMs - b.timeMs);
+  const ordered = selected.events.filter(hasDepth).sort((a, b) => a.timeMs - b.timeMs);
+  const withoutDepth = selected.events.length - ordered.length;
   const notes = new Set<string>();
   const branchesOf = (setting: TectonicSetting) =>
     study.groundMotion[setting].map((b) => ({ model: models.get(b.model), weight: b.weight }));
@@ -131,6 +139,10 @@ export function feltHistory(
       stronglyFelt: estimates.filter((e) => e.mmi >= STRONGLY_FELT_MMI),
     };
   });
+  if (withoutDepth > 0)
+    notes.add(
+      `${withoutDepth} event${withoutDepth === 1 ? '' : 's'} left out: no depth, so no distance to the hypocentre`,
+    );
   const left = selected.excludedNonMoment;
   if (left > 0)
     notes.add(
@@ -140,6 +152,7 @@ export function feltHistory(
     communities,
     eventCount: ordered.length,
     excludedNonMoment: selected.excludedNonMoment,
+    excludedWithoutDepth: withoutDepth,
     crustalMaxDepthKm,
     notes: [...notes],
   };
@@ -147,7 +160,7 @@ export function feltHistory(
 
 function estimateAt(
   community: Community,
-  event: CatalogEvent,
+  event: DepthEvent,
   crustalMaxDepthKm: number,
   branches: Readonly<Record<'crustal' | 'intraslab', readonly WeightedModel[]>>,
   maxDistanceKm: number,

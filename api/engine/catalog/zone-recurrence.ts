@@ -46,7 +46,7 @@ export interface ZoneRecurrenceOptions extends MagnitudeSelectionOptions {
   readonly mMin?: number;
   /** Default 0.1. */
   readonly magnitudeStep?: number;
-  /** Keep only events with depth in [min, max] km. */
+  /** Keep only events with depth in [min, max] km (events without a depth are then left out). */
   readonly depthKm?: readonly [min: number, max: number];
 }
 
@@ -62,10 +62,10 @@ export function zoneRecurrence(
 ): ZoneRecurrence {
   const step = options.magnitudeStep ?? 0.1;
   const zone = zonePolygon(options.rings);
-  const [dMin, dMax] = options.depthKm ?? [-Infinity, Infinity];
-  const inZone = events.filter(
-    (e) => e.depthKm >= dMin && e.depthKm <= dMax && insideZone(zone, e.lon, e.lat),
-  );
+  const window = options.depthKm;
+  const inDepth = (depthKm: number | null) =>
+    window === undefined || (depthKm !== null && depthKm >= window[0] && depthKm <= window[1]);
+  const inZone = events.filter((e) => inDepth(e.depthKm) && insideZone(zone, e.lon, e.lat));
   const c = options.completeness;
   const common = {
     magnitudeStep: step,

@@ -138,6 +138,75 @@ function boxPart(zone: ZoneRings, box: CellBox): { centre: PointXY; areaKm2: num
     : null;
 }
 
+/** How far past an edge's reach (as a share of the cell) cells are still taken as touched by it. */
+const EDGE_MARGIN = 1e-6;
+
+/** The grid of zoneCells: anchored at (ax, ay), `cellKm` squares, rows row0 to row1 - 1. */
+interface CellGrid {
+  readonly ax: number;
+  readonly ay: number;
+  readonly cellKm: number;
+  readonly row0: number;
+  readonly row1: number;
+}
+
+/**
+ * For each row of the grid, the columns (west to east, each once) of the cells that may hold
+ * part of the zone; every other cell of the bounding box holds none. A cell holds part of the
+ * zone only if a ring edge passes through it (or along its sides) or it lies wholly inside;
+ * the first are found edge by edge over the rows each edge spans, the second between pairs of
+ * ring crossings along the row's middle line (even–odd rule, so holes count as outside), as a
+ * scanline fill does (Foley et al. 1990, Computer Graphics: Principles and Practice, section
+ * 3.6). The work is the edges' length in cells plus the cells inside, not the bounding box.
+ */
+function candidateColumns(rings: readonly (readonly Vertex[])[], grid: CellGrid): number[][] {
+  const { ax, ay, cellKm, row0, row1 } = grid;
+  const rowCount = row1 - row0;
+  const touched: Set<number>[] = Array.from({ length: rowCount }, () => new Set<number>());
+  const crossings: number[][] = Array.from({ length: rowCount }, () => []);
+  // A coordinate on a grid line, or within rounding of one, belongs to the cells on both sides
+  // of it; a cell taken in excess costs one clip and gives nothing.
+  const margin = EDGE_MARGIN * cellKm;
+  const firstIndex = (v: number) => Math.ceil((v - margin) / cellKm) - 1;
+  const lastIndex = (v: number) => Math.floor((v + margin) / cellKm);
+  for (const ring of rings) {
+    for (let i = 0; i < ring.length; i++) {
+      const [xa, ya] = ring[i] as Vertex;
+      const [xb, yb] = ring[(i + 1) % ring.length] as Vertex;
+      const yLow = Math.min(ya, yb);
+      const yHigh = Math.max(ya, yb);
+      const rowFirst = Math.max(row0, firstIndex(yLow - ay));
+      const rowLast = Math.min(row1 - 1, lastIndex(yHigh - ay));
+      for (let row = rowFirst; row <= rowLast; row++) {
+        const bandLow = ay + row * cellKm;
+        const bandHigh = bandLow + cellKm;
+        // The x reached by the edge within the row's band [bandLow, bandHigh].
+        const xAt = (y: number) => (yb === ya ? xa : xa + ((y - ya) * (xb - xa)) / (yb - ya));
+        const xIn =
+          yb === ya ? [xa, xb] : [xAt(Math.max(yLow, bandLow)), xAt(Math.min(yHigh, bandHigh))];
+        const cells = touched[row - row0] as Set<number>;
+        const colLast = lastIndex(Math.max(...xIn) - ax);
+        for (let col = firstIndex(Math.min(...xIn) - ax); col <= colLast; col++) cells.add(col);
+        // Half-open in y, so a vertex on the middle line is crossed once, not twice.
+        const yMiddle = bandLow + cellKm / 2;
+        if (Math.min(ya, yb) <= yMiddle && yMiddle < Math.max(ya, yb))
+          (crossings[row - row0] as number[]).push(xAt(yMiddle));
+      }
+    }
+  }
+  return touched.map((cells, r) => {
+    const xs = (crossings[r] as number[]).sort((a, b) => a - b);
+    for (let k = 0; k + 1 < xs.length; k += 2) {
+      // Cells whose middle lies between a pair of crossings; the rest of an inside run is
+      // touched by the edges at its ends, found above.
+      const colLast = Math.floor(((xs[k + 1] as number) - ax) / cellKm - 0.5);
+      for (let col = Math.ceil(((xs[k] as number) - ax) / cellKm - 0.5); col <= colLast; col++)
+        cells.add(col);
+    }
+    return [...cells].sort((a, b) => a - b);
+  });
+}
+
 /**
  * The zone's polygon cut into squares of `cellKm` (km) aligned with the local frame's axes,
  * on a grid anchored to the zone itself (grid lines through the first vertex of its outer
@@ -158,16 +227,15 @@ export function zoneCells(zone: ZoneSource, frame: LocalFrame, cellKm: number): 
   const prepared = zoneRings(zone, frame);
   const outer = prepared.rings[0] ?? [];
   const [ax, ay] = outer[0] ?? [0, 0];
-  const xs = outer.map((v) => v[0]);
   const ys = outer.map((v) => v[1]);
-  const col0 = Math.floor((Math.min(...xs) - ax) / cellKm);
-  const col1 = Math.ceil((Math.max(...xs) - ax) / cellKm);
   const row0 = Math.floor((Math.min(...ys) - ay) / cellKm);
   const row1 = Math.ceil((Math.max(...ys) - ay) / cellKm);
 
+  const grid: CellGrid = { ax, ay, cellKm, row0, row1 };
+  const candidates = candidateColumns(prepared.rings, grid);
   const parts: { centre: PointXY; areaKm2: number; box: CellBox }[] = [];
   for (let row = row0; row < row1; row++) {
-    for (let col = col0; col < col1; col++) {
+    for (const col of candidates[row - row0] ?? []) {
       const box: CellBox = [
         ax + col * cellKm,
         ay + row * cellKm,

@@ -47,7 +47,7 @@ function at(
   magnitude: number,
   distanceKm: number,
   azimuthDeg: number,
-  depthKm: number,
+  depthKm: number | null,
   isoDay: string,
   magnitudeType = 'Mw',
 ): CatalogEvent {
@@ -163,5 +163,18 @@ describe('feltHistory', () => {
       'N',
       'N',
     ]);
+  });
+});
+
+describe('feltHistory of events without a depth', () => {
+  it('leaves them out (no distance to the hypocentre), counts them and says so', () => {
+    const history = feltHistory(study, [
+      at('with-depth', 6.0, 30, 0, 10, '2001-02-03'),
+      at('no-depth', 6.5, 5, 135, null, '2003-04-05'),
+    ]);
+    expect(history.communities[0]?.estimates.map((e) => e.eventId)).toEqual(['with-depth']);
+    expect(history.eventCount).toBe(1);
+    expect(history.excludedWithoutDepth).toBe(1);
+    expect(history.notes).toContain('1 event left out: no depth, so no distance to the hypocentre');
   });
 });

@@ -53,6 +53,7 @@ describe('syntheticCatalog', () => {
       if (
         inNotch ||
         !inSquare ||
+        e.depthKm === null ||
         e.depthKm < 2 ||
         e.depthKm > 18 ||
         e.magnitude < 4 ||

@@ -78,6 +78,16 @@ describe('zoneRecurrence', () => {
     depthKm: [0, 30],
   });
 
+  it('counts events without a depth when no depth range is asked for, and leaves them out of one', () => {
+    const undated = inside.map((e) => ({ ...e, depthKm: null }));
+    const options = { rings: ZONE, completeness: { mc: 4.0, startMs: 0, endMs: END }, mMax: 7.5 };
+    expect(zoneRecurrence(undated, options).eventsInZone).toBe(inside.length);
+    // None left in a depth range: too few events to fit, said so.
+    expect(() => zoneRecurrence(undated, { ...options, depthKm: [0, 30] })).toThrow(
+      /expected at least 2 events at or above Mc 4; got 0/,
+    );
+  });
+
   it('fits only the events inside the zone and depth range', () => {
     expect(z.eventsInZone).toBe(inside.length);
     expect(z.eventCount).toBe(inside.length);

@@ -131,7 +131,9 @@ describe('the API under hostile requests', () => {
     expect(requests.length).toBeGreaterThanOrEqual(2_000);
     expect(problems.slice(0, 10), problems.slice(0, 10).join('\n')).toEqual([]);
     expect(byStatus.total).toBe(requests.length);
-  });
+    // A time limit for a fixed number of requests only: on a busy shared machine they take
+    // several minutes, and what is checked does not depend on how fast they are answered.
+  }, 600_000);
 
   it('answers raw requests no client would send (bad HTTP, header overflow, cut-short bodies) in the error shape', async () => {
     const port = Number(new URL(service.url).port);

@@ -153,16 +153,15 @@ describe('PUT /api/studies/:id/catalog', () => {
     );
     expect(xml.status).toBe(201);
     const quakeml = (await xml.json()) as CatalogAnswer;
-    // test/catalog/fixtures/small-catalog.quakeml: events 1 and 2 load; 3 (no such origin), 4 (a quarry blast) and 5 (no depth) do not.
+    // test/catalog/fixtures/small-catalog.quakeml: events 1, 2 and 5 (no depth) load; 3 (no such origin) and 4 (a quarry blast) do not.
     expect(quakeml).toMatchObject({
       format: 'quakeml',
       fileName: 'catalog.xml',
-      summary: { loaded: 2, rejected: 3 },
+      summary: { loaded: 3, rejected: 2, withoutDepth: 1 },
     });
     expect(quakeml.rejected.map((r) => r.where)).toEqual([
       'event 3 (smi:local/event/3)',
       'event 4 (smi:local/event/4)',
-      'event 5 (smi:local/event/5)',
     ]);
     const json = await app().request(
       `/api/studies/${id}/catalog`,
@@ -272,6 +271,7 @@ describe('GET and DELETE /api/studies/:id/catalog', () => {
       rejected: 0,
       byMagnitudeType: { Mw: 13, ML: 1 },
       nonMoment: 1,
+      withoutDepth: 0,
     });
     expect(body.events?.[7]).toEqual({
       id: 'ev-08',

@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { afterAll, beforeAll, beforeEach, describe, expect, test } from 'vitest';
 import {
   ACCESS_COOKIE,
   ACCESS_MAX_AGE_S,
@@ -44,15 +44,28 @@ const enter = (token: string, back?: string, headers: Record<string, string> = {
 /** The `name=value` part of a Set-Cookie header. */
 const cookiePair = (response: Response): string | undefined =>
   response.headers.get('set-cookie')?.split(';')[0];
-const accessCookie = `${ACCESS_COOKIE}=${accessCookieValue(TOKEN)}`;
+/**
+ * An access id of 32 random bytes, a dot, and an HMAC-SHA256 of it: SHA-256 gives 256 bits
+ * (FIPS 180-4); base64url without padding writes 32 bytes in 43 characters (RFC 4648, section 5).
+ */
+const COOKIE_PAIR = `${ACCESS_COOKIE}=[A-Za-z0-9_-]{43}\\.[A-Za-z0-9_-]{43}`;
+/** A cookie of an access given by the page just before each test (a test may end it). */
+let accessCookie: string;
+beforeEach(async () => {
+  accessCookie = cookiePair(await enter(TOKEN)) as string;
+});
+/** The access id a `name=value` cookie names. */
+const accessIdOf = (cookie: string): string => cookie.split('=')[1]?.split('.')[0] as string;
 
 describe('the access cookie', () => {
-  test('is 32 bytes of HMAC-SHA256 in base64url, not the token, and differs from token to token', () => {
-    // SHA-256 gives 256 bits (FIPS 180-4); base64url without padding writes 32 bytes in 43 characters (RFC 4648, section 5).
-    expect(accessCookieValue(TOKEN)).toMatch(/^[A-Za-z0-9_-]{43}$/);
-    expect(accessCookieValue(TOKEN)).not.toContain(TOKEN);
-    expect(accessCookieValue(TOKEN)).toBe(accessCookieValue(TOKEN));
-    expect(accessCookieValue(OTHER_TOKEN)).not.toBe(accessCookieValue(TOKEN));
+  test('names a new access each time, with an HMAC of it that is not the token and differs from token to token', async () => {
+    expect(accessCookie).toMatch(new RegExp(`^${COOKIE_PAIR}$`));
+    expect(accessCookie).not.toContain(TOKEN);
+    const another = cookiePair(await enter(TOKEN)) as string;
+    expect(accessIdOf(another)).not.toBe(accessIdOf(accessCookie));
+    const id = accessIdOf(accessCookie);
+    expect(accessCookieValue(TOKEN, id)).toBe(accessCookie.split('=')[1]);
+    expect(accessCookieValue(OTHER_TOKEN, id)).not.toBe(accessCookieValue(TOKEN, id));
   });
 });
 
@@ -74,8 +87,10 @@ describe('entering the token on the access page', () => {
     const response = await enter(TOKEN, '/studies/abc');
     expect(response.status).toBe(303);
     expect(response.headers.get('location')).toBe('/studies/abc');
-    expect(response.headers.get('set-cookie')).toBe(
-      `${accessCookie}; Max-Age=${ACCESS_MAX_AGE_S}; Path=/; HttpOnly; SameSite=Strict`,
+    expect(response.headers.get('set-cookie')).toMatch(
+      new RegExp(
+        `^${COOKIE_PAIR}; Max-Age=${ACCESS_MAX_AGE_S}; Path=/; HttpOnly; SameSite=Strict$`,
+      ),
     );
     expect(response.headers.get('set-cookie')).not.toContain(TOKEN);
   });
@@ -84,7 +99,7 @@ describe('entering the token on the access page', () => {
     const response = await enter(`  ${TOKEN}\n`);
     expect(response.status).toBe(303);
     expect(response.headers.get('location')).toBe('/access');
-    expect(cookiePair(response)).toBe(accessCookie);
+    expect(cookiePair(response)).toMatch(new RegExp(`^${COOKIE_PAIR}$`));
   });
 
   test('the cookie is Secure when the request came over https, directly or through a proxy that says so', async () => {
@@ -94,8 +109,10 @@ describe('entering the token on the access page', () => {
       body: new URLSearchParams({ token: TOKEN }),
     });
     expect(direct.status).toBe(303);
-    expect(direct.headers.get('set-cookie')).toBe(
-      `${accessCookie}; Max-Age=${ACCESS_MAX_AGE_S}; Path=/; HttpOnly; Secure; SameSite=Strict`,
+    expect(direct.headers.get('set-cookie')).toMatch(
+      new RegExp(
+        `^${COOKIE_PAIR}; Max-Age=${ACCESS_MAX_AGE_S}; Path=/; HttpOnly; Secure; SameSite=Strict$`,
+      ),
     );
     const proxied = await enter(TOKEN, '/', { 'X-Forwarded-Proto': 'https' });
     expect(proxied.headers.get('set-cookie')).toContain('; Secure;');
@@ -138,6 +155,23 @@ describe('entering the token on the access page', () => {
     );
     expect(await (await request('/access?why=ended')).text()).toContain(en.t('access.ended'));
   });
+
+  test('ending the access ends it on the service: a copy of the old cookie no longer writes', async () => {
+    const kept = accessCookie;
+    const write = () =>
+      request(`/studies/${studyId}/screen`, { method: 'POST', headers: { cookie: kept } });
+    const before = await write();
+    expect(before.status).toBe(303);
+    expect(before.headers.get('location')).toMatch(/\/runs\//);
+    await runFinished(guarded.ctx, before.headers.get('location')?.split('/').at(-1) as string);
+    await request('/access/leave', { method: 'POST', headers: { cookie: kept } });
+    const after = await write();
+    expect(after.status).toBe(303);
+    expect(after.headers.get('location')).toBe('/access?back=%2F&why=needed');
+    const page = await (await request('/access', { headers: { cookie: kept } })).text();
+    expect(page).not.toContain(en.t('access.granted'));
+    expect(page).toContain('name="token"');
+  });
 });
 
 describe('page writes on a service with a token', () => {
@@ -171,7 +205,9 @@ describe('page writes on a service with a token', () => {
   test('are refused with a cookie that is not the one of this token: the token itself, or one of another token', async () => {
     for (const cookie of [
       `${ACCESS_COOKIE}=${TOKEN}`,
-      `${ACCESS_COOKIE}=${accessCookieValue(OTHER_TOKEN)}`,
+      `${ACCESS_COOKIE}=${accessCookieValue(OTHER_TOKEN, accessIdOf(accessCookie))}`,
+      `${ACCESS_COOKIE}=${accessCookieValue(TOKEN, 'never-given-by-this-service')}`,
+      `${ACCESS_COOKIE}=${accessIdOf(accessCookie)}`,
       `${ACCESS_COOKIE}=`,
     ]) {
       const response = await request(`/studies/${studyId}/screen`, {

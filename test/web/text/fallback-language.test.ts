@@ -119,7 +119,8 @@ function unmarkedEnglish(found: readonly MarkedText[]): string[] {
 
 describe('French pages mark every English stand-in', { timeout: 120_000 }, () => {
   const TOKEN = 'token-for-tests-0123456789';
-  const headers = { cookie: `tremora_lang=fr; ${ACCESS_COOKIE}=${accessCookieValue(TOKEN)}` };
+  // The access cookie is added once the service has recorded an access (beforeAll).
+  const headers = { cookie: 'tremora_lang=fr' };
   let app: PageApp;
   let smallId: string;
   let demoId: string;
@@ -130,6 +131,9 @@ describe('French pages mark every English stand-in', { timeout: 120_000 }, () =>
 
   beforeAll(async () => {
     app = startPageApp({ token: TOKEN });
+    const now = new Date();
+    const accessId = app.ctx.store.pageAccess.open(now, new Date(now.getTime() + 3_600_000));
+    headers.cookie += `; ${ACCESS_COOKIE}=${accessCookieValue(TOKEN, accessId)}`;
     smallId = app.ctx.store.studies.create({
       name: 'Language fixture',
       document: JSON.stringify(smallStudy('Language fixture')),
