@@ -7,6 +7,7 @@ import { LANGUAGE_COOKIE, pageKit, safeBackPath } from './routes/page-kit.ts';
 import { scenarioPages } from './routes/scenario-pages.tsx';
 import { staticFiles } from './routes/static-files.ts';
 import { studyPages } from './routes/study-pages.tsx';
+import { studyRecordPages } from './routes/study-record-pages.tsx';
 import { visitPages } from './routes/visit-pages.tsx';
 import { isLanguage } from './text/translator.ts';
 import { HomeView } from './views/home-view.tsx';
@@ -33,7 +34,14 @@ export function createPages(ctx: ServiceContext, options: CreatePagesOptions = {
   staticFiles(app);
 
   app.get('/', (c) => {
-    return kit.render(c, <HomeView page={kit.page(c)} studies={ctx.store.studies.list()} />);
+    return kit.render(
+      c,
+      <HomeView
+        page={kit.page(c)}
+        studies={ctx.store.studies.list()}
+        deleted={c.req.query('deleted') === '1'}
+      />,
+    );
   });
 
   app.get('/limits', (c) => kit.render(c, <LimitsView page={kit.page(c)} />));
@@ -52,6 +60,8 @@ export function createPages(ctx: ServiceContext, options: CreatePagesOptions = {
   });
 
   accessPages(app, kit, options.token);
+  // Before the study pages, so that /studies/new is not read as a study's id.
+  studyRecordPages(app, kit);
   studyPages(app, kit);
   scenarioPages(app, kit);
   editorPages(app, kit);

@@ -2,7 +2,7 @@ import { InvalidInput, type InputIssue } from '../engine/errors.ts';
 import type { Study } from '../engine/model.ts';
 import type { ModelCatalog } from '../engine/motion/catalog.ts';
 import type { StudyRecord, Store } from '../store/index.ts';
-import { loadStudy } from '../study/load-study.ts';
+import { loadStudy, type StudyPart } from '../study/load-study.ts';
 import { jsonDepthExceeds, MAX_JSON_DEPTH, parseJsonText } from '../study/json-text.ts';
 
 export interface ValidStudy {
@@ -57,6 +57,27 @@ export function validateStudy(
   );
   if (!result.ok) throw new InvalidInput(under(pathPrefix, result.issues), 'invalid study');
   return { study: result.study, warnings: under(pathPrefix, result.warnings) };
+}
+
+/**
+ * Validates a study that may still be a draft (no communities or no sources yet: the pages create
+ * studies so); everything it holds is checked as validateStudy does, and what it lacks comes back
+ * in `missing`. A draft is saved but never screened: the runs go through validateStudy.
+ */
+export function validateDraft(
+  raw: unknown,
+  models: ModelCatalog,
+  communitiesCsv?: string,
+): ValidStudy & { readonly missing: readonly StudyPart[] } {
+  const tooDeep = nestingIssues(raw);
+  if (tooDeep.length > 0) throw new InvalidInput(tooDeep, 'invalid study');
+  const result = loadStudy(raw, {
+    models,
+    allowIncomplete: true,
+    ...(communitiesCsv === undefined ? {} : { communitiesCsv }),
+  });
+  if (!result.ok) throw new InvalidInput(result.issues, 'invalid study');
+  return { study: result.study, warnings: result.warnings, missing: result.missing };
 }
 
 /** The inputs of a saved study: its document text and, when it names one, the imported CSV. */

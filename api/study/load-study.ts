@@ -26,8 +26,17 @@ export const STUDY_KEYS = [
   'terrain',
 ] as const;
 
+/** The parts a study must have before it can be screened; a draft may lack them. */
+export type StudyPart = 'communities' | 'sources';
+
 export type LoadResult =
-  | { readonly ok: true; readonly study: Study; readonly warnings: readonly InputIssue[] }
+  | {
+      readonly ok: true;
+      readonly study: Study;
+      readonly warnings: readonly InputIssue[];
+      /** What a draft still lacks (only with `allowIncomplete`); empty for a complete study. */
+      readonly missing: readonly StudyPart[];
+    }
   | {
       readonly ok: false;
       readonly issues: readonly InputIssue[];
@@ -52,6 +61,26 @@ export interface LoadStudyOptions {
    * the caller: communities without vs30 or a site class take it.
    */
   readonly siteProxy?: SiteProxy;
+  /**
+   * Accept a draft: a study with no communities or no sources yet (an empty list, or the key left
+   * out). Everything it does hold is checked as usual; what it lacks comes back in `missing`, and
+   * a draft is never screened (the runs validate without this).
+   */
+  readonly allowIncomplete?: boolean;
+}
+
+/** An empty or absent list of communities or collection of sources, which a draft may have. */
+function isEmptyPart(part: StudyPart, raw: unknown): boolean {
+  if (raw === undefined) return true;
+  if (part === 'communities') return Array.isArray(raw) && raw.length === 0;
+  const collection = raw as { type?: unknown; features?: unknown } | null;
+  return (
+    typeof collection === 'object' &&
+    collection !== null &&
+    collection.type === 'FeatureCollection' &&
+    Array.isArray(collection.features) &&
+    collection.features.length === 0
+  );
 }
 
 /**
@@ -71,8 +100,13 @@ export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
   issues.warnUnknownKeys(doc, STUDY_KEYS, []);
 
   const name = issues.parse(text(200, 'a study name'), doc.name, ['name']);
-  const communities = readStudyCommunities(doc.communities, options, issues);
-  const sources = readSources(doc.sources, issues, ['sources']);
+  const missing = options.allowIncomplete
+    ? (['communities', 'sources'] as const).filter((part) => isEmptyPart(part, doc[part]))
+    : [];
+  const communities = missing.includes('communities')
+    ? []
+    : readStudyCommunities(doc.communities, options, issues);
+  const sources = missing.includes('sources') ? [] : readSources(doc.sources, issues, ['sources']);
   const settings = readSettings(doc.settings, issues, ['settings']);
   const used = new Set<TectonicSetting>(sources.map((s) => s.setting));
   const groundMotion = readBranches(doc.groundMotion, used, settings, options.models, issues, [
@@ -98,7 +132,7 @@ export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
     name === undefined ||
     !settings ||
     !groundMotion ||
-    communities.length === 0
+    (communities.length === 0 && !missing.includes('communities'))
   ) {
     return { ok: false, issues: issues.issues, warnings: issues.warnings };
   }
@@ -116,7 +150,7 @@ export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
       ['sources', 'features', w.sourceIndex, 'properties', ...w.field.split('.')],
       w.message,
     );
-  return { ok: true, study, warnings: issues.warnings };
+  return { ok: true, study, warnings: issues.warnings, missing };
 }
 
 function readStudyCommunities(

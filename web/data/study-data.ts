@@ -3,8 +3,10 @@ import type { Study } from '../../api/engine/model.ts';
 import type { StudyResult } from '../../api/engine/results.ts';
 import { inputHash } from '../../api/results/input-hash.ts';
 import type { ServiceContext } from '../../api/operations/service-context.ts';
+import type { StudyPart } from '../../api/study/load-study.ts';
 import {
   storedInputs,
+  validateDraft,
   validateStudy,
   type StoredInputs,
 } from '../../api/operations/study-input.ts';
@@ -18,25 +20,50 @@ export type StudyData =
       readonly inputs: StoredInputs;
       readonly study: Study;
       readonly hash: string;
+      /** What a draft still lacks (read with `drafts`); empty for a complete study. */
+      readonly missing: readonly StudyPart[];
     }
   | {
       readonly ok: false;
       readonly record: StudyRecord;
       readonly inputs: StoredInputs;
       readonly issues: readonly InputIssue[];
+      /** When the study is a valid draft: what it still lacks (else empty). */
+      readonly missing: readonly StudyPart[];
     };
 
-/** The study with `id`, validated; undefined when there is none. */
-export function readStudy(ctx: ServiceContext, id: string): StudyData | undefined {
+/**
+ * The study with `id`, validated; undefined when there is none. With `drafts` (the editor), a
+ * study without communities or sources yet reads as ok with what it lacks in `missing`; without
+ * (the pages that show or compute numbers) it is not ok, with `missing` saying why.
+ */
+export function readStudy(
+  ctx: ServiceContext,
+  id: string,
+  options: { readonly drafts?: boolean } = {},
+): StudyData | undefined {
   const record = ctx.store.studies.get(id);
   if (!record) return undefined;
   const inputs = storedInputs(ctx.store, record);
+  const draft = () => {
+    try {
+      return validateDraft(inputs.raw, ctx.models, inputs.communitiesCsv);
+    } catch (error) {
+      if (error instanceof InvalidInput) return undefined;
+      throw error;
+    }
+  };
   try {
+    if (options.drafts) {
+      const { study, missing } = validateDraft(inputs.raw, ctx.models, inputs.communitiesCsv);
+      return { ok: true, record, inputs, study, hash: inputHash(study), missing };
+    }
     const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
-    return { ok: true, record, inputs, study, hash: inputHash(study) };
+    return { ok: true, record, inputs, study, hash: inputHash(study), missing: [] };
   } catch (error) {
     // A study saved before a rule changed may no longer validate; the pages say so.
-    if (error instanceof InvalidInput) return { ok: false, record, inputs, issues: error.issues };
+    if (error instanceof InvalidInput)
+      return { ok: false, record, inputs, issues: error.issues, missing: draft()?.missing ?? [] };
     throw error;
   }
 }

@@ -2,8 +2,10 @@ import { InvalidInput, type InputIssue } from '../../api/engine/errors.ts';
 import type { Community } from '../../api/engine/model.ts';
 import type { ModelCatalog } from '../../api/engine/motion/catalog.ts';
 import type { StoredInputs } from '../../api/operations/study-input.ts';
-import { validateStudy } from '../../api/operations/study-input.ts';
+import { validateDraft } from '../../api/operations/study-input.ts';
+import { IMPORTED_COMMUNITIES_FILE } from '../../api/operations/study-records.ts';
 import { parseJsonText } from '../../api/study/json-text.ts';
+import { sourceFromForm, type SourceForm } from './source-form.ts';
 
 /**
  * Edits the editor makes to a study document. Each builds the whole candidate document and
@@ -79,7 +81,7 @@ function validated(
   csv?: string,
 ): EditOutcome {
   try {
-    const { study } = validateStudy(document, models, csv);
+    const { study } = validateDraft(document, models, csv);
     return { ok: true, document, name: study.name };
   } catch (error) {
     if (error instanceof InvalidInput) return { ok: false, issues: error.issues };
@@ -101,7 +103,7 @@ export function saveCommunity(
   return { ...validated({ ...inputs.raw, communities: list }, models), index: at };
 }
 
-/** Removes the community at `index` and validates (a study keeps at least one). */
+/** Removes the community at `index` and validates (without any left, the study is a draft again). */
 export function removeCommunity(
   inputs: StoredInputs,
   communities: readonly Community[],
@@ -112,9 +114,6 @@ export function removeCommunity(
   list.splice(index, 1);
   return validated({ ...inputs.raw, communities: list }, models);
 }
-
-/** The file name a CSV import is recorded under in the document (as the API's import does). */
-export const IMPORTED_COMMUNITIES_FILE = 'communities.csv';
 
 /** Replaces the communities from CSV text; issues name CSV lines (`communities[line 5].lat`). */
 export function importCommunitiesCsv(
@@ -160,4 +159,41 @@ export function issueField(path: string, index: number): string | undefined {
   if (!path.startsWith(prefix)) return undefined;
   const rest = path.slice(prefix.length);
   return rest.startsWith('.') ? (rest.slice(1).split(/[.[]/)[0] as string) : '(row)';
+}
+
+/** The study's source features as a list to edit (none yet in a draft). */
+export function sourceFeatures(inputs: StoredInputs): Record<string, unknown>[] {
+  const features = (inputs.raw.sources as { features?: unknown } | undefined)?.features;
+  return Array.isArray(features) ? features.map((f) => ({ ...(f as object) })) : [];
+}
+
+/**
+ * Replaces the source at `index` (or appends one when index is undefined) with the form's and
+ * validates the whole study; the other sources are kept as they were.
+ */
+export function saveSource(
+  inputs: StoredInputs,
+  form: SourceForm,
+  index: number | undefined,
+  models: ModelCatalog,
+): EditOutcome & { index: number } {
+  const list = sourceFeatures(inputs);
+  const at = index ?? list.length;
+  const read = sourceFromForm(form);
+  if (!read.ok) return { ok: false, issues: [read.issue], index: at };
+  list[at] = read.feature;
+  const document = { ...inputs.raw, sources: { type: 'FeatureCollection', features: list } };
+  return { ...validated(document, models, inputs.communitiesCsv), index: at };
+}
+
+/** Removes the source at `index` and validates (without any left, the study is a draft again). */
+export function removeSource(
+  inputs: StoredInputs,
+  index: number,
+  models: ModelCatalog,
+): EditOutcome {
+  const list = sourceFeatures(inputs);
+  list.splice(index, 1);
+  const document = { ...inputs.raw, sources: { type: 'FeatureCollection', features: list } };
+  return validated(document, models, inputs.communitiesCsv);
 }

@@ -20,6 +20,7 @@ import { CommunityFormView } from '../views/community-form-view.tsx';
 import { EditorView, type UploadProblem } from '../views/editor-view.tsx';
 import { MessageView } from '../views/message-view.tsx';
 import { field, fileField, type PageKit } from './page-kit.ts';
+import { sourcePages } from './source-pages.tsx';
 
 const EMPTY_FORM: CommunityForm = {
   id: '',
@@ -73,7 +74,7 @@ export function editorPages(app: Hono, kit: PageKit): void {
   ): { data: StudyData & { ok: true } } | { response: Response | Promise<Response> } => {
     const tr = kit.tr(c);
     const id = c.req.param('id') as string;
-    const data = readStudy(ctx, id);
+    const data = readStudy(ctx, id, { drafts: true });
     if (!data)
       return {
         response: kit.render(
@@ -140,6 +141,7 @@ export function editorPages(app: Hono, kit: PageKit): void {
         page={kit.page(c)}
         studyId={data.record.id}
         study={data.study}
+        missing={data.missing}
         saved={saved}
         {...extra}
       />,
@@ -323,4 +325,11 @@ export function editorPages(app: Hono, kit: PageKit): void {
     });
   });
   app.post('/studies/:id/edit/sources-geojson', upload('sources'));
+
+  sourcePages(app, kit, {
+    load,
+    afterBody,
+    write: (data, outcome) => void write(data, outcome),
+    editorWithNotice: (c, data, notice) => editor(c, data, { notice }),
+  });
 }

@@ -22,6 +22,7 @@ import { mapFrame } from '../maps/map-frame.ts';
 import { CommunityView } from '../views/community-view.tsx';
 import { HandoutView } from '../views/handout-view.tsx';
 import type { MapFormState } from '../views/hazard-map-panel.tsx';
+import { DraftNotice } from '../views/draft-notice.tsx';
 import { MessageView } from '../views/message-view.tsx';
 import { OverviewView } from '../views/overview-view.tsx';
 import { RunView } from '../views/run-view.tsx';
@@ -66,6 +67,13 @@ export function studyPages(app: Hono, kit: PageKit): void {
   };
   const invalid = (c: Context, data: StudyData & { ok: false }) => {
     const tr = kit.tr(c);
+    if (data.missing.length > 0)
+      return kit.render(
+        c,
+        <MessageView page={kit.page(c)} title={data.record.name} text="">
+          <DraftNotice tr={tr} studyId={data.record.id} missing={data.missing} />
+        </MessageView>,
+      );
     return kit.render(
       c,
       <MessageView

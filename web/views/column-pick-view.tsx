@@ -10,6 +10,8 @@ export function ColumnPickForm(props: {
   readonly tr: Translator;
   readonly action: string;
   readonly pick: ColumnPick;
+  /** Other fields of the form the file came with (a new study's name), sent again. */
+  readonly hidden?: Readonly<Record<string, string>>;
 }) {
   const { tr, pick } = props;
   return (
@@ -22,6 +24,9 @@ export function ColumnPickForm(props: {
     >
       <fieldset>
         <legend>{tr.text('editor.pick.legend', { file: pick.fileName })}</legend>
+        {Object.entries(props.hidden ?? {}).map(([name, value]) => (
+          <input type="hidden" name={name} value={value} />
+        ))}
         <p class="help">{tr.text('editor.pick.help')}</p>
         {Object.entries(pick.chosen).map(([key, column]) =>
           pick.missing.includes(key as never) || column === undefined ? null : (

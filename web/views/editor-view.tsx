@@ -2,11 +2,15 @@ import type { Child } from 'hono/jsx';
 import { sourceSanity } from '../../api/engine/sanity/source-sanity.ts';
 import type { InputIssue } from '../../api/engine/errors.ts';
 import type { Study } from '../../api/engine/model.ts';
+import type { StudyPart } from '../../api/study/load-study.ts';
 import type { ColumnPick } from '../data/community-import.ts';
 import { issueFeature, issueLine } from '../data/study-edits.ts';
 import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import { mapFrame, studyPoints } from '../maps/map-frame.ts';
+import { StudyMap } from '../maps/study-map.tsx';
 import type { Translator } from '../text/translator.ts';
 import { ColumnPickForm } from './column-pick-view.tsx';
+import { DraftNotice } from './draft-notice.tsx';
 import { FieldProblems } from './field-problems.tsx';
 
 /** An upload that did not validate: which form, its problems, and the text (for the line view). */
@@ -38,11 +42,16 @@ export interface EditorViewProps {
   readonly page: PageContext;
   readonly studyId: string;
   readonly study: Study;
+  /** What a draft still lacks before it can be screened. */
+  readonly missing?: readonly StudyPart[];
   readonly saved?: boolean;
   readonly problem?: UploadProblem;
   /** Problems of a removal (e.g. the last community), shown at the top. */
   readonly notice?: readonly InputIssue[];
 }
+
+/** The editor's map of the study, px: small, a preview of where the sources and communities are. */
+const PREVIEW_MAP = { width: 480, maxHeight: 360, padding: 24 } as const;
 
 /** Most lines of an uploaded CSV shown back with their problems. */
 const PREVIEW_LINES = 200;
@@ -122,6 +131,7 @@ export function EditorView(props: EditorViewProps) {
           {tr.text('editor.notSaved')}
         </p>
       )}
+      <DraftNotice tr={tr} studyId={studyId} missing={props.missing ?? []} linkToEditor={false} />
       <FieldProblems
         tr={tr}
         id="editor-notice"
@@ -137,58 +147,64 @@ export function EditorView(props: EditorViewProps) {
             {tr.text('editor.add')}
           </a>
         </p>
-        <table class="data-table editor-table">
-          <caption>{tr.text('editor.communitiesCaption')}</caption>
-          <thead>
-            <tr>
-              <th scope="col">{tr.text('editor.field.name')}</th>
-              <th scope="col">{tr.text('editor.col.id')}</th>
-              <th scope="col" class="numeric">
-                {tr.text('editor.col.lon')}
-              </th>
-              <th scope="col" class="numeric">
-                {tr.text('editor.col.lat')}
-              </th>
-              <th scope="col">{tr.text('editor.col.site')}</th>
-              <th scope="col" class="numeric">
-                {tr.text('editor.col.people')}
-              </th>
-              <th scope="col">{tr.text('editor.col.coastal')}</th>
-              <th scope="col">{tr.text('editor.col.actions')}</th>
-            </tr>
-          </thead>
-          <tbody>
-            {study.communities.map((c) => (
-              <tr data-community={c.id}>
-                <th scope="row">{c.name}</th>
-                <td>
-                  <code>{c.id}</code>
-                </td>
-                <td class="numeric">{String(c.lon)}</td>
-                <td class="numeric">{String(c.lat)}</td>
-                <td>
-                  {c.vs30Basis === 'measured' ? `${c.vs30} m/s` : `${c.siteClass} (${c.vs30} m/s)`}
-                </td>
-                <td class="numeric">{c.population === undefined ? '' : tr.number(c.population)}</td>
-                <td>{c.coastal ? tr.text('editor.coastalYes') : ''}</td>
-                <td class="row-actions">
-                  <a href={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}`}>
-                    {tr.text('editor.edit', { name: c.name })}
-                  </a>
-                  <form
-                    method="post"
-                    action={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}/remove`}
-                    class="inline-form"
-                  >
-                    <button type="submit" class="button-quiet">
-                      {tr.text('editor.remove', { name: c.name })}
-                    </button>
-                  </form>
-                </td>
+        <div class="table-scroll">
+          <table class="data-table editor-table">
+            <caption>{tr.text('editor.communitiesCaption')}</caption>
+            <thead>
+              <tr>
+                <th scope="col">{tr.text('editor.field.name')}</th>
+                <th scope="col">{tr.text('editor.col.id')}</th>
+                <th scope="col" class="numeric">
+                  {tr.text('editor.col.lon')}
+                </th>
+                <th scope="col" class="numeric">
+                  {tr.text('editor.col.lat')}
+                </th>
+                <th scope="col">{tr.text('editor.col.site')}</th>
+                <th scope="col" class="numeric">
+                  {tr.text('editor.col.people')}
+                </th>
+                <th scope="col">{tr.text('editor.col.coastal')}</th>
+                <th scope="col">{tr.text('editor.col.actions')}</th>
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {study.communities.map((c) => (
+                <tr data-community={c.id}>
+                  <th scope="row">{c.name}</th>
+                  <td>
+                    <code>{c.id}</code>
+                  </td>
+                  <td class="numeric">{String(c.lon)}</td>
+                  <td class="numeric">{String(c.lat)}</td>
+                  <td>
+                    {c.vs30Basis === 'measured'
+                      ? `${c.vs30} m/s`
+                      : `${c.siteClass} (${c.vs30} m/s)`}
+                  </td>
+                  <td class="numeric">
+                    {c.population === undefined ? '' : tr.number(c.population)}
+                  </td>
+                  <td>{c.coastal ? tr.text('editor.coastalYes') : ''}</td>
+                  <td class="row-actions">
+                    <a href={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}`}>
+                      {tr.text('editor.edit', { name: c.name })}
+                    </a>
+                    <form
+                      method="post"
+                      action={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}/remove`}
+                      class="inline-form"
+                    >
+                      <button type="submit" class="button-quiet">
+                        {tr.text('editor.remove', { name: c.name })}
+                      </button>
+                    </form>
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
       </section>
 
       <section aria-labelledby="upload-communities-heading" class="upload">
@@ -241,29 +257,63 @@ export function EditorView(props: EditorViewProps) {
 
       <section aria-labelledby="sources-heading">
         <h2 id="sources-heading">{tr.text('editor.sources')}</h2>
-        <table class="data-table">
-          <caption>{tr.text('editor.sourcesCaption')}</caption>
-          <thead>
-            <tr>
-              <th scope="col">{tr.text('editor.col.source')}</th>
-              <th scope="col">{tr.text('editor.col.id')}</th>
-              <th scope="col">{tr.text('editor.col.kind')}</th>
-              <th scope="col">{tr.text('editor.col.setting')}</th>
-            </tr>
-          </thead>
-          <tbody>
-            {study.sources.map((s) => (
-              <tr data-source={s.id}>
-                <th scope="row">{s.name}</th>
-                <td>
-                  <code>{s.id}</code>
-                </td>
-                <td>{tr.text(`editor.kind.${s.kind}`)}</td>
-                <td>{s.setting}</td>
+        <p>
+          <a class="button" href={`/studies/${studyId}/edit/new-source`}>
+            {tr.text('source.add')}
+          </a>
+        </p>
+        {studyPoints(study).length > 0 && (
+          <figure class="editor-preview">
+            <StudyMap
+              tr={tr}
+              study={study}
+              frame={mapFrame(study, PREVIEW_MAP)}
+              idPrefix="editor-map"
+              labels={false}
+            />
+            <figcaption>{tr.text('source.preview')}</figcaption>
+          </figure>
+        )}
+        <div class="table-scroll">
+          <table class="data-table">
+            <caption>{tr.text('editor.sourcesCaption')}</caption>
+            <thead>
+              <tr>
+                <th scope="col">{tr.text('editor.col.source')}</th>
+                <th scope="col">{tr.text('editor.col.id')}</th>
+                <th scope="col">{tr.text('editor.col.kind')}</th>
+                <th scope="col">{tr.text('editor.col.setting')}</th>
+                <th scope="col">{tr.text('editor.col.actions')}</th>
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {study.sources.map((s) => (
+                <tr data-source={s.id}>
+                  <th scope="row">{s.name}</th>
+                  <td>
+                    <code>{s.id}</code>
+                  </td>
+                  <td>{tr.text(`editor.kind.${s.kind}`)}</td>
+                  <td>{s.setting}</td>
+                  <td class="row-actions">
+                    <a href={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}`}>
+                      {tr.text('source.edit', { name: s.name })}
+                    </a>
+                    <form
+                      method="post"
+                      action={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}/remove`}
+                      class="inline-form"
+                    >
+                      <button type="submit" class="button-quiet">
+                        {tr.text('source.remove', { name: s.name })}
+                      </button>
+                    </form>
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
       </section>
 
       <section aria-labelledby="upload-sources-heading" class="upload">

@@ -4,6 +4,8 @@ import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 export function HomeView(props: {
   readonly page: PageContext;
   readonly studies: readonly StudySummary[];
+  /** A study was just deleted. */
+  readonly deleted?: boolean;
 }) {
   const { tr } = props.page;
   return (
@@ -13,8 +15,18 @@ export function HomeView(props: {
       titleLang={tr.fallbackLang('home.title')}
     >
       <h1>{tr.text('home.title')}</h1>
+      {props.deleted && (
+        <p class="notice" role="status">
+          {tr.text('deleteStudy.done')}
+        </p>
+      )}
       <p class="lead">{tr.text('home.intro')}</p>
       <p>{tr.text('home.start')}</p>
+      <p>
+        <a class="button button-primary" href="/studies/new">
+          {tr.text('home.new')}
+        </a>
+      </p>
       {props.studies.length === 0 ? (
         <p>{tr.text('home.none')}</p>
       ) : (
@@ -24,6 +36,7 @@ export function HomeView(props: {
             <tr>
               <th scope="col">{tr.text('home.col.name')}</th>
               <th scope="col">{tr.text('home.col.updated')}</th>
+              <th scope="col">{tr.text('home.col.actions')}</th>
             </tr>
           </thead>
           <tbody>
@@ -33,6 +46,17 @@ export function HomeView(props: {
                   <a href={`/studies/${s.id}`}>{s.name}</a>
                 </th>
                 <td>{tr.date(s.updatedAt)}</td>
+                <td class="row-actions">
+                  <a href={`/studies/${s.id}/rename`}>
+                    {tr.text('studyActions.rename', { name: s.name })}
+                  </a>{' '}
+                  <a href={`/studies/${s.id}/duplicate`}>
+                    {tr.text('studyActions.duplicate', { name: s.name })}
+                  </a>{' '}
+                  <a href={`/studies/${s.id}/delete`}>
+                    {tr.text('studyActions.delete', { name: s.name })}
+                  </a>
+                </td>
               </tr>
             ))}
           </tbody>

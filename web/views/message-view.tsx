@@ -7,12 +7,15 @@ export function MessageView(props: {
   readonly title: string;
   readonly text: Child;
   readonly details?: readonly string[];
+  /** More content below the text (a draft's notice). */
+  readonly children?: Child;
 }) {
   const { tr } = props.page;
   return (
     <PageShell page={props.page} title={props.title}>
       <h1>{props.title}</h1>
-      <p>{props.text}</p>
+      {props.text !== '' && <p>{props.text}</p>}
+      {props.children}
       {props.details && props.details.length > 0 && (
         <ul class="problems">
           {props.details.map((d) => (

@@ -3,13 +3,8 @@ import { notFound } from '../http-error.ts';
 import { CSV_TYPES, GEOJSON_TYPES, readJsonObject, readText } from '../request-body.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
 import { storedInputs, validateStudy, type ValidStudy } from '../../operations/study-input.ts';
+import { IMPORTED_COMMUNITIES_FILE } from '../../operations/study-records.ts';
 import { studyJson } from './studies.ts';
-
-/**
- * What an imported CSV is called in the study document (DESIGN.md section 2 lets `communities`
- * name a CSV file); the CSV itself is kept in the store beside the study.
- */
-export const IMPORTED_COMMUNITIES_FILE = 'communities.csv';
 
 /**
  * Imports into a saved study: a communities CSV or a GeoJSON FeatureCollection of sources

@@ -2,7 +2,12 @@ import { Hono } from 'hono';
 import type { StudySummary } from '../../store/index.ts';
 import { notFound } from '../http-error.ts';
 import { readJsonObject } from '../request-body.ts';
-import { mapRunsOf } from '../../operations/map-runs.ts';
+import {
+  deleteStudy,
+  duplicateStudy,
+  readStudyName,
+  renameStudy,
+} from '../../operations/study-records.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
 import { storedInputs, validateStudy } from '../../operations/study-input.ts';
 
@@ -78,11 +83,28 @@ export function studyRoutes(ctx: ServiceContext): Hono {
 
   app.delete('/studies/:id', (c) => {
     const id = c.req.param('id');
-    find(id);
-    for (const run of ctx.store.runs.listForStudy(id)) ctx.scheduler.cancel(run.id);
-    for (const map of ctx.store.maps.listForStudy(id)) mapRunsOf(ctx).cancel(map.id);
-    if (!studies.delete(id)) throw notFound('study', id);
+    if (!deleteStudy(ctx, id)) throw notFound('study', id);
     return c.body(null, 204);
+  });
+
+  // A copy under a new name (`{ name }`): the document and its communities file, not its runs.
+  app.post('/studies/:id/duplicate', async (c) => {
+    const id = c.req.param('id');
+    find(id);
+    const { value } = await readJsonObject(c, 'an object with the name of the copy');
+    const record = duplicateStudy(ctx, id, readStudyName(value.name));
+    if (!record) throw notFound('study', id);
+    return c.json(studyJson(record), 201, { Location: `/api/studies/${record.id}` });
+  });
+
+  // A new name (`{ name }`), written into the document in the transaction that reads it.
+  app.post('/studies/:id/rename', async (c) => {
+    const id = c.req.param('id');
+    find(id);
+    const { value } = await readJsonObject(c, 'an object with the new name');
+    const record = renameStudy(ctx, id, readStudyName(value.name));
+    if (!record) throw notFound('study', id);
+    return c.json(studyJson(record));
   });
 
   return app;

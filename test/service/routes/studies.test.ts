@@ -211,3 +211,42 @@ describe('errors on the study routes', () => {
     expect(body.error).toMatch(/^writes are accepted only from this service's own pages/);
   });
 });
+
+describe('POST /api/studies/:id/duplicate and /rename', () => {
+  it('a copy has the document under its own name; a rename writes the name into the document', async () => {
+    const created = await createSmall('First');
+    const copied = await service.fetch(
+      `/api/studies/${created.id}/duplicate`,
+      jsonInit('POST', { name: 'Second' }),
+    );
+    expect(copied.status).toBe(201);
+    const copy = (await copied.json()) as StudyAnswer;
+    expect(copied.headers.get('location')).toBe(`/api/studies/${copy.id}`);
+    const read = (await (await service.fetch(`/api/studies/${copy.id}`)).json()) as StudyAnswer;
+    expect(read.document).toEqual(smallStudy('Second'));
+
+    const renamed = await service.fetch(
+      `/api/studies/${created.id}/rename`,
+      jsonInit('POST', { name: 'First, renamed' }),
+    );
+    expect(renamed.status).toBe(200);
+    const again = (await (await service.fetch(`/api/studies/${created.id}`)).json()) as StudyAnswer;
+    expect(again.name).toBe('First, renamed');
+    expect(again.document).toEqual(smallStudy('First, renamed'));
+  });
+
+  it('a blank name is refused with its path; an unknown study is 404', async () => {
+    const created = await createSmall('Kept');
+    const body = await expectError(
+      await service.fetch(`/api/studies/${created.id}/rename`, jsonInit('POST', { name: ' ' })),
+      422,
+    );
+    expect(body.issues).toEqual([
+      { path: 'name', message: 'expected a study name of 1 to 200 characters, got " "' },
+    ]);
+    await expectError(
+      await service.fetch('/api/studies/no-such-study/duplicate', jsonInit('POST', { name: 'x' })),
+      404,
+    );
+  });
+});

@@ -1,0 +1,191 @@
+import type { Context, Hono } from 'hono';
+import { InvalidInput, type InputIssue } from '../../api/engine/errors.ts';
+import {
+  createStudy,
+  deleteStudy,
+  duplicateStudy,
+  readStudyName,
+  renameStudy,
+  studyDependents,
+} from '../../api/operations/study-records.ts';
+import {
+  COMMUNITY_COLUMNS,
+  type ColumnChoice,
+} from '../../api/study/community-files/column-names.ts';
+import { readCommunitiesFile } from '../data/community-import.ts';
+import { DeleteStudyView } from '../views/delete-study-view.tsx';
+import { MessageView } from '../views/message-view.tsx';
+import { StudyFormView, type StudyFormViewProps } from '../views/study-form-view.tsx';
+import { field, fileField, type PageKit } from './page-kit.ts';
+
+type Form = Record<string, string | File | (string | File)[]>;
+
+/** The issues of an InvalidInput split into the name's and the rest (the village file's). */
+function splitIssues(issues: readonly InputIssue[]) {
+  return {
+    nameIssues: issues.filter((i) => i.path === 'name'),
+    fileIssues: issues.filter((i) => i.path !== 'name'),
+  };
+}
+
+/** Runs `work`; an InvalidInput comes back as its issues instead of being thrown. */
+function attempt<T>(
+  work: () => T,
+): { ok: true; value: T } | { ok: false; issues: readonly InputIssue[] } {
+  try {
+    return { ok: true, value: work() };
+  } catch (error) {
+    if (error instanceof InvalidInput) return { ok: false, issues: error.issues };
+    throw error;
+  }
+}
+
+/** The village file of a new study's form: sent now, or carried back by the column choice. */
+async function postedFile(form: Form) {
+  const file = fileField(form, 'file');
+  if (file) return { bytes: new Uint8Array(await file.arrayBuffer()), name: file.name };
+  const carried = field(form, 'fileData');
+  const carriedName = field(form, 'fileName');
+  return carried && carriedName
+    ? { bytes: new Uint8Array(Buffer.from(carried, 'base64')), name: carriedName }
+    : undefined;
+}
+
+/**
+ * New study, rename, copy and delete, from the pages. The work is in
+ * api/operations/study-records.ts (the API calls the same); each write validates what it writes
+ * and reads the study in the transaction that writes it.
+ */
+export function studyRecordPages(app: Hono, kit: PageKit): void {
+  const { ctx } = kit;
+
+  const form = (c: Context, props: Omit<StudyFormViewProps, 'page'>, status: 200 | 422 = 200) =>
+    kit.render(c, <StudyFormView page={kit.page(c)} {...props} />, status);
+
+  const notFound = (c: Context) => {
+    const tr = kit.tr(c);
+    const id = c.req.param('id') as string;
+    return kit.render(
+      c,
+      <MessageView
+        page={kit.page(c)}
+        title={tr.t('error.notFound')}
+        text={tr.text('error.studyNotFound', { id })}
+      />,
+      404,
+    );
+  };
+
+  app.get('/studies/new', (c) => form(c, { kind: 'new', action: '/studies/new', name: '' }));
+
+  app.post('/studies/new', async (c) => {
+    const posted = await c.req.parseBody();
+    const name = field(posted, 'name') ?? '';
+    const again = { kind: 'new', action: '/studies/new', name } as const;
+    const named = attempt(() => readStudyName(name));
+    const upload = await postedFile(posted);
+    let communitiesCsv: string | undefined;
+    if (upload) {
+      const choice: ColumnChoice = {};
+      for (const key of COMMUNITY_COLUMNS) {
+        const column = field(posted, `column.${key}`);
+        if (column) choice[key] = column;
+      }
+      const read = await readCommunitiesFile(upload.bytes, upload.name, choice);
+      if (!read.ok)
+        return form(
+          c,
+          {
+            ...again,
+            fileIssues: read.issues,
+            ...(named.ok ? {} : { nameIssues: named.issues }),
+            ...(read.pick ? { pick: read.pick } : {}),
+          },
+          422,
+        );
+      communitiesCsv = read.csvText;
+    }
+    const created = attempt(() =>
+      createStudy(ctx, {
+        name,
+        ...(communitiesCsv === undefined ? {} : { communitiesCsv }),
+      }),
+    );
+    if (!created.ok) return form(c, { ...again, ...splitIssues(created.issues) }, 422);
+    return c.redirect(`/studies/${created.value.id}/edit`, 303);
+  });
+
+  app.get('/studies/:id/rename', (c) => {
+    const record = ctx.store.studies.get(c.req.param('id'));
+    if (!record) return notFound(c);
+    const study = { id: record.id, name: record.name };
+    return form(c, {
+      kind: 'rename',
+      action: `/studies/${record.id}/rename`,
+      study,
+      name: record.name,
+    });
+  });
+
+  app.post('/studies/:id/rename', async (c) => {
+    const id = c.req.param('id');
+    const name = field(await c.req.parseBody(), 'name') ?? '';
+    const renamed = attempt(() => renameStudy(ctx, id, readStudyName(name)));
+    if (renamed.ok && !renamed.value) return notFound(c);
+    if (!renamed.ok) {
+      const record = ctx.store.studies.get(id);
+      if (!record) return notFound(c);
+      const study = { id, name: record.name };
+      const again = { kind: 'rename', action: `/studies/${id}/rename`, study, name } as const;
+      return form(c, { ...again, ...splitIssues(renamed.issues) }, 422);
+    }
+    return c.redirect(`/studies/${id}`, 303);
+  });
+
+  app.get('/studies/:id/duplicate', (c) => {
+    const record = ctx.store.studies.get(c.req.param('id'));
+    if (!record) return notFound(c);
+    const study = { id: record.id, name: record.name };
+    return form(c, {
+      kind: 'duplicate',
+      action: `/studies/${record.id}/duplicate`,
+      study,
+      name: kit.tr(c).t('duplicateStudy.name', { name: record.name }),
+    });
+  });
+
+  app.post('/studies/:id/duplicate', async (c) => {
+    const id = c.req.param('id');
+    const name = field(await c.req.parseBody(), 'name') ?? '';
+    const copied = attempt(() => duplicateStudy(ctx, id, readStudyName(name)));
+    if (copied.ok && !copied.value) return notFound(c);
+    if (!copied.ok) {
+      const record = ctx.store.studies.get(id);
+      if (!record) return notFound(c);
+      const study = { id, name: record.name };
+      const again = { kind: 'duplicate', action: `/studies/${id}/duplicate`, study, name } as const;
+      return form(c, { ...again, ...splitIssues(copied.issues) }, 422);
+    }
+    return c.redirect(`/studies/${copied.value?.id}`, 303);
+  });
+
+  app.get('/studies/:id/delete', (c) => {
+    const record = ctx.store.studies.get(c.req.param('id'));
+    const dependents = record && studyDependents(ctx, record.id);
+    if (!record || !dependents) return notFound(c);
+    return kit.render(
+      c,
+      <DeleteStudyView
+        page={kit.page(c)}
+        study={{ id: record.id, name: record.name }}
+        dependents={dependents}
+      />,
+    );
+  });
+
+  app.post('/studies/:id/delete', (c) => {
+    const record = ctx.store.studies.get(c.req.param('id'));
+    if (!record || !deleteStudy(ctx, record.id)) return notFound(c);
+    return c.redirect('/?deleted=1', 303);
+  });
+}
