@@ -91,6 +91,8 @@ export interface StudyDependents {
   readonly maps: number;
   /** 1 when the study has an earthquake catalog attached. */
   readonly catalogs: number;
+  /** Awareness visits recorded for the study's communities. */
+  readonly visits: number;
   /** Runs and maps still queued or running: they are stopped first. */
   readonly unfinished: number;
 }
@@ -104,6 +106,7 @@ export function studyDependents(ctx: ServiceContext, id: string): StudyDependent
     runs: runs.length,
     maps: maps.length,
     catalogs: ctx.store.catalogs.get(id) ? 1 : 0,
+    visits: ctx.store.visits.count(id),
     unfinished: [...runs, ...maps].filter((r) => !isFinished(r.status)).length,
   };
 }

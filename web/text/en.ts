@@ -158,6 +158,7 @@ export const EN = {
   'deleteStudy.runs': 'screenings: {n}',
   'deleteStudy.maps': 'hazard maps: {n}',
   'deleteStudy.catalogs': 'earthquake catalogs: {n}',
+  'deleteStudy.visits': 'visit records: {n}',
   'deleteStudy.unfinished': '{n} of these are still being computed; they will be stopped.',
   'deleteStudy.button': 'Delete the study',
   'deleteStudy.keep': 'Keep it',

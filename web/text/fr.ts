@@ -98,6 +98,7 @@ export const FR: Readonly<Partial<Record<TextKey, string>>> = {
   'deleteStudy.runs': 'calculs : {n}',
   'deleteStudy.maps': 'cartes d’aléa : {n}',
   'deleteStudy.catalogs': 'catalogues de séismes : {n}',
+  'deleteStudy.visits': 'comptes rendus de visite : {n}',
   'deleteStudy.unfinished': '{n} d’entre eux sont encore en cours ; ils seront arrêtés.',
   'deleteStudy.button': 'Supprimer l’étude',
   'deleteStudy.keep': 'La garder',

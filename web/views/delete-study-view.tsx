@@ -26,6 +26,7 @@ export function DeleteStudyView(props: {
         <li data-count="catalogs">
           {tr.text('deleteStudy.catalogs', { n: tr.number(d.catalogs) })}
         </li>
+        <li data-count="visits">{tr.text('deleteStudy.visits', { n: tr.number(d.visits) })}</li>
       </ul>
       {d.unfinished > 0 && (
         <p class="notice">{tr.text('deleteStudy.unfinished', { n: tr.number(d.unfinished) })}</p>

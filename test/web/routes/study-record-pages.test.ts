@@ -129,17 +129,28 @@ describe('rename, copy and delete', () => {
   });
 
   test('the delete page counts what goes with the study; posting it deletes them', async () => {
+    page.ctx.store.visits.add(id, {
+      communityId: 'first',
+      visitedOn: '2026-03-14',
+      language: 'English',
+      peopleReached: 40,
+      topics: 'drop, cover, hold on',
+      followUps: '',
+      referral: 'requested',
+    });
     const confirm = await page.app.request(`/studies/${id}/delete`);
     expect(confirm.status).toBe(200);
     const html = await confirm.text();
     expect(html).toMatch(/data-count="runs">[^<]*screenings: 1/);
     expect(html).toMatch(/data-count="maps">[^<]*hazard maps: 0/);
     expect(html).toMatch(/data-count="catalogs">[^<]*earthquake catalogs: 0/);
+    expect(html).toMatch(/data-count="visits">[^<]*visit records: 1/);
     expect(page.ctx.store.studies.get(id)).toBeDefined();
     const response = await post(`/studies/${id}/delete`);
     expect(response.status).toBe(303);
     expect(page.ctx.store.studies.get(id)).toBeUndefined();
     expect(page.ctx.store.runs.listForStudy(id)).toHaveLength(0);
+    expect(page.ctx.store.visits.count(id)).toBe(0);
     expect((await page.app.request(`/studies/${id}/delete`)).status).toBe(404);
   });
 });
