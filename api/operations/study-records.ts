@@ -122,6 +122,20 @@ export function deleteStudy(ctx: ServiceContext, id: string): boolean {
   return ctx.store.studies.delete(id);
 }
 
+/**
+ * The `{ name }` body of a rename or a copy: any other key is refused, naming it, so that a
+ * document sent to the wrong address (a whole study, say) changes nothing.
+ */
+export function readNameBody(body: Readonly<Record<string, unknown>>): string {
+  const extra = Object.keys(body).filter((key) => key !== 'name');
+  if (extra.length > 0)
+    throw new InvalidInput(
+      extra.map((key) => ({ path: key, message: 'unexpected field; the body is { "name": ... }' })),
+      'invalid name',
+    );
+  return readStudyName(body.name);
+}
+
 /** The name of a study, as a form or a body gives it; InvalidInput naming `name` otherwise. */
 export function readStudyName(raw: unknown): string {
   const result = text(200, 'a study name').safeParse(raw, { reportInput: true });

@@ -80,7 +80,7 @@ describe('the demo coast in a browser', { timeout: 180_000 }, () => {
   test('a new user opens the overview and screens the study with one button; the page follows the run', async () => {
     await page.goto(`${service.url}/`);
     await checkView('home');
-    await page.getByRole('link', { name: 'Demo coast' }).click();
+    await page.getByRole('link', { name: 'Demo coast', exact: true }).click();
     await expect.poll(() => page.url()).toBe(`${service.url}/studies/${demoId}`);
     await page.getByRole('button', { name: en.t('overview.screenButton') }).click();
     await page.waitForURL(/\/runs\//);

@@ -5,7 +5,7 @@ import { readJsonObject } from '../request-body.ts';
 import {
   deleteStudy,
   duplicateStudy,
-  readStudyName,
+  readNameBody,
   renameStudy,
 } from '../../operations/study-records.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
@@ -92,7 +92,7 @@ export function studyRoutes(ctx: ServiceContext): Hono {
     const id = c.req.param('id');
     find(id);
     const { value } = await readJsonObject(c, 'an object with the name of the copy');
-    const record = duplicateStudy(ctx, id, readStudyName(value.name));
+    const record = duplicateStudy(ctx, id, readNameBody(value));
     if (!record) throw notFound('study', id);
     return c.json(studyJson(record), 201, { Location: `/api/studies/${record.id}` });
   });
@@ -102,7 +102,7 @@ export function studyRoutes(ctx: ServiceContext): Hono {
     const id = c.req.param('id');
     find(id);
     const { value } = await readJsonObject(c, 'an object with the new name');
-    const record = renameStudy(ctx, id, readStudyName(value.name));
+    const record = renameStudy(ctx, id, readNameBody(value));
     if (!record) throw notFound('study', id);
     return c.json(studyJson(record));
   });

@@ -249,4 +249,23 @@ describe('POST /api/studies/:id/duplicate and /rename', () => {
       404,
     );
   });
+
+  it('a body with more than the name (a whole study sent to the wrong address) changes nothing', async () => {
+    const created = await createSmall('Unchanged');
+    const body = await expectError(
+      await service.fetch(
+        `/api/studies/${created.id}/rename`,
+        jsonInit('POST', smallStudy('Other')),
+      ),
+      422,
+    );
+    expect(body.issues).toContainEqual({
+      path: 'communities',
+      message: 'unexpected field; the body is { "name": ... }',
+    });
+    const after = (await (await service.fetch(`/api/studies/${created.id}`)).json()) as {
+      name: string;
+    };
+    expect(after.name).toBe('Unchanged');
+  });
 });
