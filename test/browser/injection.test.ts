@@ -215,6 +215,8 @@ function pagePaths(): { path: string; names: string[] }[] {
       COMMUNITY_NAMES.forEach((name, i) =>
         out.push({ path: withIds.replace(':cid', `village-${i + 1}`), names: [name] }),
       );
+    } else if (withIds.includes(':sid')) {
+      out.push({ path: withIds.replace(':sid', 'near-fault'), names: [SOURCE_NAMES[1]] });
     } else if (route.path.endsWith('/maps/:mapId')) {
       out.push({ path: withIds, names: [STUDY_NAME] });
     } else if (withIds.endsWith('/catalog')) {
