@@ -3,6 +3,7 @@ import type { FaultSource, Study } from '../../api/engine/model.ts';
 import { screenStudy } from '../../api/engine/screen-study.ts';
 import { FRAME, contouredKm, faultKm } from '../engine/geometry/km-fixtures.ts';
 import { largestDifference, loadLine, machineLine } from './hazard-cases.ts';
+import { testSettings } from '../helpers/test-settings.ts';
 
 /**
  * The cost of a fault given by depth contours against the same fault as a plane: an invented
@@ -95,17 +96,7 @@ function study(source: FaultSource): Study {
       ],
       intraslab: [{ model: 'AGA16', weight: 1 }],
     },
-    settings: {
-      measures: ['PGA'],
-      levels: {},
-      horizonsYears: [50],
-      returnPeriodsYears: [475],
-      truncationSigma: 3,
-      maxDistanceKm: 300,
-      magnitudeStep: 0.1,
-      ruptureSpacingKm: 5,
-      zoneCellKm: 10,
-    },
+    settings: testSettings(),
   };
 }
 

@@ -2,6 +2,7 @@ import { arch, availableParallelism, cpus, loadavg, totalmem } from 'node:os';
 import type { Community, Study } from '../../api/engine/model.ts';
 import type { ScreeningOutput } from '../../api/engine/screen-study.ts';
 import { frameForStudy } from '../../api/engine/geometry/projection.ts';
+import { testSettings } from '../helpers/test-settings.ts';
 
 /**
  * Shared pieces of the hazard benchmarks (hazard.bench.ts and the map runs it starts): the
@@ -164,16 +165,6 @@ export function syntheticStudy(): Study {
     communities,
     sources,
     groundMotion: { crustal: [{ model: 'BSSA14', weight: 1 }], interface: [], intraslab: [] },
-    settings: {
-      measures: ['PGA'],
-      levels: {},
-      horizonsYears: [50],
-      returnPeriodsYears: [475],
-      truncationSigma: 3,
-      maxDistanceKm: 300,
-      magnitudeStep: 0.1,
-      ruptureSpacingKm: 5,
-      zoneCellKm: 10,
-    },
+    settings: testSettings(),
   };
 }

@@ -4,6 +4,7 @@ import type { CatalogEvent } from '../../../api/engine/catalog/event.ts';
 import { compassPoint, feltHistory } from '../../../api/engine/catalog/felt-history.ts';
 import type { Study } from '../../../api/engine/model.ts';
 import { expectClose } from '../../helpers/close.ts';
+import { testSettings } from '../../helpers/test-settings.ts';
 
 const WGS84 = geodesic.Geodesic.WGS84;
 
@@ -28,17 +29,7 @@ const study: Study = {
     interface: [{ model: 'AGA16', weight: 1 }],
     intraslab: [{ model: 'AGA16', weight: 1 }],
   },
-  settings: {
-    measures: ['PGA'],
-    levels: {},
-    horizonsYears: [50],
-    returnPeriodsYears: [475],
-    truncationSigma: 3,
-    maxDistanceKm: 300,
-    magnitudeStep: 0.1,
-    ruptureSpacingKm: 5,
-    zoneCellKm: 10,
-  },
+  settings: testSettings(),
 };
 
 /** An event at a geodesic distance and azimuth from the village. */

@@ -7,18 +7,9 @@ import { momentNm } from '../../../api/engine/recurrence/seismic-moment.ts';
 import { discretiseSource } from '../../../api/engine/ruptures/discretise.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 import { FRAME, contouredKm, faultKm } from './km-fixtures.ts';
+import { testSettings } from '../../helpers/test-settings.ts';
 
-const SETTINGS: Settings = {
-  measures: ['PGA'],
-  levels: {},
-  horizonsYears: [50],
-  returnPeriodsYears: [475],
-  truncationSigma: 3,
-  maxDistanceKm: 300,
-  magnitudeStep: 0.1,
-  ruptureSpacingKm: 5,
-  zoneCellKm: 10,
-};
+const SETTINGS: Settings = testSettings();
 
 const DIP_DEG = 35;
 const TAN_DIP = Math.tan((DIP_DEG * Math.PI) / 180);

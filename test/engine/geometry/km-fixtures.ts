@@ -7,6 +7,7 @@ import type {
   Settings,
   ZoneSource,
 } from '../../../api/engine/model.ts';
+import { testSettings } from '../../helpers/test-settings.ts';
 
 /**
  * Hand-made sources drawn in local km, so expected distances can be worked by hand. The frame
@@ -120,14 +121,4 @@ export function pointKm(
   };
 }
 
-export const SETTINGS: Settings = {
-  measures: ['PGA'],
-  levels: {},
-  horizonsYears: [50],
-  returnPeriodsYears: [475],
-  truncationSigma: 3,
-  maxDistanceKm: 300,
-  magnitudeStep: 0.1,
-  ruptureSpacingKm: 5,
-  zoneCellKm: 10,
-};
+export const SETTINGS: Settings = testSettings();

@@ -3,6 +3,7 @@ import type { FaultSource, Study } from '../../../api/engine/model.ts';
 import { screenStudy } from '../../../api/engine/screen-study.ts';
 import { expectRelative } from '../../helpers/close.ts';
 import { FRAME, contouredKm, faultKm } from '../geometry/km-fixtures.ts';
+import { testSettings } from '../../helpers/test-settings.ts';
 
 /**
  * A contoured source through the whole screening (ruptures, rupture table, fast distances,
@@ -36,17 +37,7 @@ function study(source: FaultSource, sites: readonly (readonly [number, number])[
       ],
       intraslab: [{ model: 'AGA16', weight: 1 }],
     },
-    settings: {
-      measures: ['PGA'],
-      levels: {},
-      horizonsYears: [50],
-      returnPeriodsYears: [475, 2475],
-      truncationSigma: 3,
-      maxDistanceKm: 300,
-      magnitudeStep: 0.1,
-      ruptureSpacingKm: 5,
-      zoneCellKm: 10,
-    },
+    settings: testSettings({ returnPeriodsYears: [475, 2475] }),
   };
 }
 

@@ -3,6 +3,7 @@ import type { Study } from '../../../api/engine/model.ts';
 import { screenStudy } from '../../../api/engine/screen-study.ts';
 import { expectRelative } from '../../helpers/close.ts';
 import { FRAME, faultKm } from '../geometry/km-fixtures.ts';
+import { testSettings } from '../../helpers/test-settings.ts';
 
 /**
  * Floating ruptures by the midpoint rule (geometry/floating-ruptures.ts) converge: the 475- and
@@ -49,17 +50,11 @@ function faultStudy(ruptureSpacingKm: number): Study {
       interface: [{ model: 'AGA16', weight: 1 }],
       intraslab: [{ model: 'AGA16', weight: 1 }],
     },
-    settings: {
-      measures: ['PGA'],
-      levels: {},
-      horizonsYears: [50],
+    settings: testSettings({
       returnPeriodsYears: [475, 2475],
-      truncationSigma: 3,
       maxDistanceKm: 200,
-      magnitudeStep: 0.1,
       ruptureSpacingKm,
-      zoneCellKm: 10,
-    },
+    }),
   };
 }
 

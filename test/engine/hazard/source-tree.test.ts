@@ -6,6 +6,7 @@ import { INTENSITY_CONVERSIONS } from '../../../api/engine/intensity/worden2012.
 import type { PointSource, Study } from '../../../api/engine/model.ts';
 import { screenStudy } from '../../../api/engine/screen-study.ts';
 import { expectClose } from '../../helpers/close.ts';
+import { testSettings } from '../../helpers/test-settings.ts';
 
 /*
  * An invented point source in open ocean (test data): M 6.5 only, 10 km straight below the one
@@ -56,17 +57,7 @@ const study: Study = {
   ],
   sources: [source],
   groundMotion: { crustal: [{ model: 'Cornell79', weight: 1 }], interface: [], intraslab: [] },
-  settings: {
-    measures: ['PGA'],
-    levels: { PGA: LEVELS },
-    horizonsYears: [50],
-    returnPeriodsYears: [475],
-    truncationSigma: 3,
-    maxDistanceKm: 300,
-    magnitudeStep: 0.1,
-    ruptureSpacingKm: 5,
-    zoneCellKm: 10,
-  },
+  settings: testSettings({ levels: { PGA: LEVELS } }),
 };
 
 /** Baker (2008) worked form of Cornell et al. (1979), truncated at 3σ (by hand). */

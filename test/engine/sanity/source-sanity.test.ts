@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { FaultSource, Recurrence, Study, ZoneSource } from '../../../api/engine/model.ts';
 import { sourceSanity } from '../../../api/engine/sanity/source-sanity.ts';
 import { expectRelative } from '../../helpers/close.ts';
+import { testSettings } from '../../helpers/test-settings.ts';
 
 /*
  * Invented sources in open ocean (test data). The fault: a vertical strike-slip trace along
@@ -52,17 +53,7 @@ const study = (...sources: Study['sources']): Study => ({
   communities: [],
   sources,
   groundMotion: { crustal: [], interface: [], intraslab: [] },
-  settings: {
-    measures: ['PGA'],
-    levels: {},
-    horizonsYears: [50],
-    returnPeriodsYears: [475],
-    truncationSigma: 3,
-    maxDistanceKm: 300,
-    magnitudeStep: 0.1,
-    ruptureSpacingKm: 5,
-    zoneCellKm: 10,
-  },
+  settings: testSettings(),
 });
 const messages = (s: Study) => sourceSanity(s).map((w) => w.message);
 const gr = (bValue: number, mMin: number, mMax: number): Recurrence => ({

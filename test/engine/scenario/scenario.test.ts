@@ -7,6 +7,7 @@ import { createModelCatalog } from '../../../api/engine/motion/catalog.ts';
 import { cornell79 } from '../../../api/engine/motion/cornell79.ts';
 import { runScenario } from '../../../api/engine/scenario/scenario.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
+import { testSettings } from '../../helpers/test-settings.ts';
 
 const models = createModelCatalog([cornell79], {
   crustal: [{ model: 'Cornell79', weight: 1 }],
@@ -33,17 +34,7 @@ function study(sources: Source[], communities: Community[]): Study {
     communities,
     sources,
     groundMotion: { crustal: [{ model: 'Cornell79', weight: 1 }], interface: [], intraslab: [] },
-    settings: {
-      measures: ['PGA'],
-      levels: {},
-      horizonsYears: [50],
-      returnPeriodsYears: [475],
-      truncationSigma: 3,
-      maxDistanceKm: 300,
-      magnitudeStep: 0.1,
-      ruptureSpacingKm: 2,
-      zoneCellKm: 10,
-    },
+    settings: testSettings({ ruptureSpacingKm: 2 }),
   };
 }
 
