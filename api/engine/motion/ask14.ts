@@ -55,7 +55,6 @@
  * How it is checked: test/engine/motion/ask14.test.ts reproduces the reference vectors
  * (../shared/reference/gmm/vectors/ask14.json, an independent implementation of the paper) within 1e-4.
  */
-import { UnsupportedMeasure } from '../errors.ts';
 import { toRadians } from '../units.ts';
 import {
   ASK14_CONSTANTS as K,
@@ -64,20 +63,22 @@ import {
   ASK14_SA,
   type Ask14Row,
 } from './ask14-coefficients.ts';
-import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
-import { prepareSplit, prepareSplitMeasures, type SplitModel } from './split-prepare.ts';
+import { assembleModel } from './model-assembly.ts';
+import {
+  predictSplit,
+  requirePositivePeriod,
+  splitPrepareMeasures,
+  type SplitModel,
+} from './split-prepare.ts';
 import type {
   GmmInput,
   GmmPrediction,
   GroundMotionModel,
-  PreparedMotion,
-  PreparedMotions,
-  RuptureContext,
   SiteContext,
   ValidityRange,
 } from './types.ts';
-import { requireInput, validityNotes } from './validity.ts';
+import { requireInputs, validityNotes } from './validity.ts';
 
 const NAME = 'ASK14';
 const SA_PERIODS_S: readonly number[] = Object.freeze(ASK14_SA.map((r) => r.periodS));
@@ -277,29 +278,8 @@ export const ASK14_VALIDITY: ValidityRange = Object.freeze({
   vs30: [180, 1000],
 } as const);
 
-const requireNumber = (
-  path: string,
-  value: number,
-  expected: string,
-  ok: (v: number) => boolean,
-): void => requireInput(NAME, path, value, expected, ok);
-
 function ruptureOf(input: GmmInput): Ask14Rupture {
-  requireNumber('magnitude', input.magnitude, 'a finite moment magnitude', () => true);
-  requireNumber('rakeDeg', input.rakeDeg, 'a finite rake in degrees', () => true);
-  requireNumber('dipDeg', input.dipDeg, 'a dip above 0° and at most 90°', (v) => v > 0 && v <= 90);
-  requireNumber(
-    'ztorKm',
-    input.ztorKm,
-    'a finite depth to the top of rupture of at least 0 km',
-    (v) => v >= 0,
-  );
-  requireNumber(
-    'widthKm',
-    input.widthKm,
-    'a finite down-dip width of at least 0 km',
-    (v) => v >= 0,
-  );
+  requireInputs(NAME, input, ['magnitude', 'rakeDeg', 'dipDeg', 'ztorKm', 'widthKm']);
   return {
     magnitude: input.magnitude,
     mechanism: ask14MechanismFromRake(input.rakeDeg),
@@ -310,23 +290,7 @@ function ruptureOf(input: GmmInput): Ask14Rupture {
 }
 
 function checkPair(input: GmmInput): void {
-  requireNumber(
-    'rrupKm',
-    input.rrupKm,
-    'a finite rupture distance of at least 0 km',
-    (v) => v >= 0,
-  );
-  requireNumber(
-    'rjbKm',
-    input.rjbKm,
-    'a finite Joyner–Boore distance of at least 0 km',
-    (v) => v >= 0,
-  );
-  requireNumber('rxKm', input.rxKm, 'a finite Rx in km', () => true);
-  requireNumber('ry0Km', input.ry0Km, 'a finite Ry0 of at least 0 km', (v) => v >= 0);
-  requireNumber('vs30', input.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
-  if (input.z1Km !== undefined)
-    requireNumber('z1Km', input.z1Km, 'a finite Z1 of at least 0 km', (v) => v >= 0);
+  requireInputs(NAME, input, ['rrupKm', 'rjbKm', 'rxKm', 'ry0Km', 'vs30', 'z1Km']);
 }
 
 function notesOf(input: GmmInput): string[] {
@@ -352,21 +316,7 @@ export function predictAsk14(input: GmmInput, measure: Measure): GmmPrediction {
     applicable,
     notes,
   });
-  switch (measure.kind) {
-    case 'PGA':
-      return predictRow(ASK14_PGA);
-    case 'PGV':
-      return predictRow(ASK14_PGV);
-    case 'SA':
-      if (!(measure.periodS > 0))
-        throw new UnsupportedMeasure(
-          `SA(${measure.periodS})`,
-          'the period must be greater than 0 s',
-        );
-      return predictAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) =>
-        predictRow(ASK14_SA[i] as Ask14Row),
-      );
-  }
+  return predictSplit(SPLIT, measure, predictRow);
 }
 
 /** The model as rupture terms and pair prediction, for the fast path (split-prepare.ts): the same functions predict() uses. */
@@ -377,10 +327,7 @@ const SPLIT: SplitModel<Ask14Row, Ask14RuptureTerms> = {
   sa: ASK14_SA,
   periodsS: SA_PERIODS_S,
   distances: ['rrupKm', 'rjbKm', 'rxKm', 'ry0Km'],
-  checkMeasure(measure) {
-    if (measure.kind === 'SA' && !(measure.periodS > 0))
-      throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
-  },
+  checkMeasure: requirePositivePeriod,
   checkRupture: (rupture) => void ruptureOf(rupture as GmmInput),
   ruptureTerms: (row, rupture) => ask14RuptureTerms(row, ruptureOf(rupture as GmmInput)),
   pairPrediction: (terms, pair) => ask14PairPrediction(terms, pair, pair),
@@ -388,21 +335,16 @@ const SPLIT: SplitModel<Ask14Row, Ask14RuptureTerms> = {
 };
 
 /** Abrahamson, Silva & Kamai (2014) for shallow crustal earthquakes (Rrup): PGA, PGV, PSA 0.01–10 s. */
-export const ask14: GroundMotionModel = Object.freeze({
+export const ask14: GroundMotionModel = assembleModel({
   name: NAME,
   citation:
     'Abrahamson, N. A., Silva, W. J. & Kamai, R. (2014). Summary of the ASK14 ground motion relation for active crustal regions. Earthquake Spectra 30(3), 1025–1055.',
-  settings: Object.freeze(['crustal'] as const),
+  settings: ['crustal'],
   distanceMetric: 'rrup',
   periodsS: SA_PERIODS_S,
   hasPga: true,
   hasPgv: true,
   validity: ASK14_VALIDITY,
-  predict: (input: GmmInput, measure: Measure): GmmPrediction => predictAsk14(input, measure),
-  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion =>
-    prepareSplit(SPLIT, ruptures, measure),
-  prepareMeasures: (
-    ruptures: readonly RuptureContext[],
-    measures: readonly Measure[],
-  ): PreparedMotions => prepareSplitMeasures(SPLIT, ruptures, measures),
+  predict: predictAsk14,
+  prepareMeasures: splitPrepareMeasures(SPLIT),
 });

@@ -49,7 +49,6 @@
  * predict() and the fast path (split-prepare.ts) both call them. How the table is checked:
  * test/engine/motion/cb14.vectors.test.ts (independent reference vectors, 1e-4 in ln units).
  */
-import { UnsupportedMeasure } from '../errors.ts';
 import { toRadians } from '../units.ts';
 import {
   CB14_CONSTANTS as K,
@@ -58,19 +57,22 @@ import {
   CB14_SA,
   type Cb14Row,
 } from './cb14-coefficients.ts';
-import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
-import { prepareSplit, prepareSplitMeasures, type SplitModel } from './split-prepare.ts';
+import { assembleModel } from './model-assembly.ts';
+import {
+  predictSplit,
+  requirePositivePeriod,
+  splitPrepareMeasures,
+  type SplitModel,
+} from './split-prepare.ts';
 import type {
   GmmInput,
   GmmPrediction,
   GroundMotionModel,
-  PreparedMotion,
-  PreparedMotions,
   RuptureContext,
   ValidityRange,
 } from './types.ts';
-import { requireInput, validityNotes } from './validity.ts';
+import { requireInputs, validityNotes } from './validity.ts';
 
 const NAME = 'CB14';
 
@@ -296,40 +298,15 @@ export const CB14_VALIDITY: ValidityRange = Object.freeze({
   depthKm: [0, 20],
 } as const);
 
-const requireNumber = (
-  path: string,
-  value: number,
-  expected: string,
-  ok: (v: number) => boolean,
-): void => requireInput(NAME, path, value, expected, ok);
-
 function ruptureOf(rupture: RuptureContext): Omit<Cb14Scenario, 'rrupKm' | 'rjbKm' | 'rxKm'> {
-  requireNumber('magnitude', rupture.magnitude, 'a finite moment magnitude', () => true);
-  requireNumber('rakeDeg', rupture.rakeDeg, 'a finite rake in degrees', () => true);
-  requireNumber(
+  requireInputs(NAME, rupture, [
+    'magnitude',
+    'rakeDeg',
     'dipDeg',
-    rupture.dipDeg,
-    'a dip above 0° and at most 90°',
-    (v) => v > 0 && v <= 90,
-  );
-  requireNumber(
     'ztorKm',
-    rupture.ztorKm,
-    'a finite depth to the top of rupture of at least 0 km',
-    (v) => v >= 0,
-  );
-  requireNumber(
     'hypoDepthKm',
-    rupture.hypoDepthKm,
-    'a finite hypocentral depth of at least 0 km',
-    (v) => v >= 0,
-  );
-  requireNumber(
     'widthKm',
-    rupture.widthKm,
-    'a finite down-dip width of at least 0 km',
-    (v) => v >= 0,
-  );
+  ]);
   return {
     magnitude: rupture.magnitude,
     mechanism: cb14MechanismFromRake(rupture.rakeDeg),
@@ -342,22 +319,7 @@ function ruptureOf(rupture: RuptureContext): Omit<Cb14Scenario, 'rrupKm' | 'rjbK
 
 function scenarioOf(input: GmmInput): Cb14Scenario {
   const rupture = ruptureOf(input);
-  requireNumber(
-    'rrupKm',
-    input.rrupKm,
-    'a finite rupture distance of at least 0 km',
-    (v) => v >= 0,
-  );
-  requireNumber(
-    'rjbKm',
-    input.rjbKm,
-    'a finite Joyner–Boore distance of at least 0 km',
-    (v) => v >= 0,
-  );
-  requireNumber('rxKm', input.rxKm, 'a finite Rx in km', () => true);
-  requireNumber('vs30', input.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
-  if (input.z2p5Km !== undefined)
-    requireNumber('z2p5Km', input.z2p5Km, 'a finite Z2.5 of at least 0 km', (v) => v >= 0);
+  requireInputs(NAME, input, ['rrupKm', 'rjbKm', 'rxKm', 'vs30', 'z2p5Km']);
   return { ...rupture, rrupKm: input.rrupKm, rjbKm: input.rjbKm, rxKm: input.rxKm };
 }
 
@@ -397,21 +359,7 @@ export function predictCb14(input: GmmInput, measure: Measure): GmmPrediction {
     applicable,
     notes,
   });
-  switch (measure.kind) {
-    case 'PGA':
-      return predictRow(CB14_PGA);
-    case 'PGV':
-      return predictRow(CB14_PGV);
-    case 'SA':
-      if (!(measure.periodS > 0))
-        throw new UnsupportedMeasure(
-          `SA(${measure.periodS})`,
-          'the period must be greater than 0 s',
-        );
-      return predictAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) =>
-        predictRow(CB14_SA[i] as Cb14Row),
-      );
-  }
+  return predictSplit(SPLIT, measure, predictRow);
 }
 
 /** What one row needs of the rupture alone: the rupture itself and the source terms of the row and of the PGA row. */
@@ -467,10 +415,7 @@ const SPLIT: SplitModel<Cb14Row, Cb14RuptureTerms> = {
   sa: CB14_SA,
   periodsS: SA_PERIODS_S,
   distances: ['rrupKm', 'rjbKm', 'rxKm'],
-  checkMeasure(measure) {
-    if (measure.kind === 'SA' && !(measure.periodS > 0))
-      throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
-  },
+  checkMeasure: requirePositivePeriod,
   checkRupture: (rupture) => void ruptureOf(rupture),
   ruptureTerms: (row, rupture) => cb14RuptureTerms(row, ruptureOf(rupture)),
   pairPrediction: (terms, pair) => cb14PairPrediction(terms, pair),
@@ -480,21 +425,16 @@ const SPLIT: SplitModel<Cb14Row, Cb14RuptureTerms> = {
 };
 
 /** Campbell & Bozorgnia (2014) for shallow crustal earthquakes (Rrup): PGA, PGV, PSA 0.01–10 s. */
-export const cb14: GroundMotionModel = Object.freeze({
+export const cb14: GroundMotionModel = assembleModel({
   name: NAME,
   citation:
     'Campbell, K. W. & Bozorgnia, Y. (2014). NGA-West2 ground motion model for the average horizontal components of PGA, PGV, and 5% damped linear acceleration response spectra. Earthquake Spectra 30(3), 1087–1115.',
-  settings: Object.freeze(['crustal'] as const),
+  settings: ['crustal'],
   distanceMetric: 'rrup',
   periodsS: SA_PERIODS_S,
   hasPga: true,
   hasPgv: true,
   validity: CB14_VALIDITY,
-  predict: (input: GmmInput, measure: Measure): GmmPrediction => predictCb14(input, measure),
-  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion =>
-    prepareSplit(SPLIT, ruptures, measure),
-  prepareMeasures: (
-    ruptures: readonly RuptureContext[],
-    measures: readonly Measure[],
-  ): PreparedMotions => prepareSplitMeasures(SPLIT, ruptures, measures),
+  predict: predictCb14,
+  prepareMeasures: splitPrepareMeasures(SPLIT),
 });

@@ -45,23 +45,24 @@
  * How it is checked: test/engine/motion/cy14.test.ts reproduces the reference vectors
  * (../shared/reference/gmm/vectors/cy14.json, an independent implementation of the paper) within 1e-4.
  */
-import { UnsupportedMeasure } from '../errors.ts';
 import { toRadians } from '../units.ts';
 import { CY14_PGA, CY14_PGV, CY14_SA, type Cy14Row } from './cy14-coefficients.ts';
-import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
-import { prepareSplit, prepareSplitMeasures, type SplitModel } from './split-prepare.ts';
+import { assembleModel } from './model-assembly.ts';
+import {
+  predictSplit,
+  requirePositivePeriod,
+  splitPrepareMeasures,
+  type SplitModel,
+} from './split-prepare.ts';
 import type {
   GmmInput,
   GmmPrediction,
   GroundMotionModel,
-  PreparedMotion,
-  PreparedMotions,
-  RuptureContext,
   SiteContext,
   ValidityRange,
 } from './types.ts';
-import { requireInput, validityNotes } from './validity.ts';
+import { requireInputs, validityNotes } from './validity.ts';
 
 const NAME = 'CY14';
 const SA_PERIODS_S: readonly number[] = Object.freeze(CY14_SA.map((r) => r.periodS));
@@ -240,23 +241,8 @@ export const CY14_VALIDITY: ValidityRange = Object.freeze({
   vs30: [180, 1500],
 } as const);
 
-const requireNumber = (
-  path: string,
-  value: number,
-  expected: string,
-  ok: (v: number) => boolean,
-): void => requireInput(NAME, path, value, expected, ok);
-
 function ruptureOf(input: GmmInput): Cy14Rupture {
-  requireNumber('magnitude', input.magnitude, 'a finite moment magnitude', () => true);
-  requireNumber('rakeDeg', input.rakeDeg, 'a finite rake in degrees', () => true);
-  requireNumber('dipDeg', input.dipDeg, 'a dip above 0° and at most 90°', (v) => v > 0 && v <= 90);
-  requireNumber(
-    'ztorKm',
-    input.ztorKm,
-    'a finite depth to the top of rupture of at least 0 km',
-    (v) => v >= 0,
-  );
+  requireInputs(NAME, input, ['magnitude', 'rakeDeg', 'dipDeg', 'ztorKm']);
   return {
     magnitude: input.magnitude,
     mechanism: cy14MechanismFromRake(input.rakeDeg),
@@ -266,22 +252,7 @@ function ruptureOf(input: GmmInput): Cy14Rupture {
 }
 
 function checkPair(input: GmmInput): void {
-  requireNumber(
-    'rrupKm',
-    input.rrupKm,
-    'a finite rupture distance of at least 0 km',
-    (v) => v >= 0,
-  );
-  requireNumber(
-    'rjbKm',
-    input.rjbKm,
-    'a finite Joyner–Boore distance of at least 0 km',
-    (v) => v >= 0,
-  );
-  requireNumber('rxKm', input.rxKm, 'a finite Rx in km', () => true);
-  requireNumber('vs30', input.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
-  if (input.z1Km !== undefined)
-    requireNumber('z1Km', input.z1Km, 'a finite Z1 of at least 0 km', (v) => v >= 0);
+  requireInputs(NAME, input, ['rrupKm', 'rjbKm', 'rxKm', 'vs30', 'z1Km']);
 }
 
 function notesOf(input: GmmInput, rupture: Cy14Rupture): string[] {
@@ -316,21 +287,7 @@ export function predictCy14(input: GmmInput, measure: Measure): GmmPrediction {
     applicable,
     notes,
   });
-  switch (measure.kind) {
-    case 'PGA':
-      return predictRow(CY14_PGA);
-    case 'PGV':
-      return predictRow(CY14_PGV);
-    case 'SA':
-      if (!(measure.periodS > 0))
-        throw new UnsupportedMeasure(
-          `SA(${measure.periodS})`,
-          'the period must be greater than 0 s',
-        );
-      return predictAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) =>
-        predictRow(CY14_SA[i] as Cy14Row),
-      );
-  }
+  return predictSplit(SPLIT, measure, predictRow);
 }
 
 /** The model as rupture terms and pair prediction, for the fast path (split-prepare.ts): the same functions predict() uses. */
@@ -341,10 +298,7 @@ const SPLIT: SplitModel<Cy14Row, Cy14RuptureTerms> = {
   sa: CY14_SA,
   periodsS: SA_PERIODS_S,
   distances: ['rrupKm', 'rjbKm', 'rxKm'],
-  checkMeasure(measure) {
-    if (measure.kind === 'SA' && !(measure.periodS > 0))
-      throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
-  },
+  checkMeasure: requirePositivePeriod,
   checkRupture: (rupture) => void ruptureOf(rupture as GmmInput),
   ruptureTerms: (row, rupture) => cy14RuptureTerms(row, ruptureOf(rupture as GmmInput)),
   pairPrediction: (terms, pair) => cy14PairPrediction(terms, pair, pair),
@@ -352,21 +306,16 @@ const SPLIT: SplitModel<Cy14Row, Cy14RuptureTerms> = {
 };
 
 /** Chiou & Youngs (2014) for shallow crustal earthquakes (Rrup): PGA, PGV, PSA 0.01–10 s. */
-export const cy14: GroundMotionModel = Object.freeze({
+export const cy14: GroundMotionModel = assembleModel({
   name: NAME,
   citation:
     'Chiou, B. S.-J. & Youngs, R. R. (2014). Update of the Chiou and Youngs NGA model for the average horizontal component of peak ground motion and response spectra. Earthquake Spectra 30(3), 1117–1153.',
-  settings: Object.freeze(['crustal'] as const),
+  settings: ['crustal'],
   distanceMetric: 'rrup',
   periodsS: SA_PERIODS_S,
   hasPga: true,
   hasPgv: true,
   validity: CY14_VALIDITY,
-  predict: (input: GmmInput, measure: Measure): GmmPrediction => predictCy14(input, measure),
-  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion =>
-    prepareSplit(SPLIT, ruptures, measure),
-  prepareMeasures: (
-    ruptures: readonly RuptureContext[],
-    measures: readonly Measure[],
-  ): PreparedMotions => prepareSplitMeasures(SPLIT, ruptures, measures),
+  predict: predictCy14,
+  prepareMeasures: splitPrepareMeasures(SPLIT),
 });

@@ -1,3 +1,5 @@
+import { UnsupportedMeasure } from '../errors.ts';
+import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
 import {
   createRowScratch,
@@ -5,16 +7,15 @@ import {
   periodRows,
   predictRows,
   rowMemo,
-  singleMeasure,
   singleRow,
   type RowPlan,
 } from './prepared-period.ts';
 import type {
   DistanceName,
   GmmInput,
+  GmmPrediction,
   PairDistances,
   PairPredictions,
-  PreparedMotion,
   PreparedMotions,
   RuptureContext,
   SiteContext,
@@ -134,9 +135,32 @@ export function prepareSplitMeasures<Row, Terms>(
   };
 }
 
-/** prepareSplitMeasures for one measure (a model's prepare hook). */
-export const prepareSplit = <Row, Terms>(
+/** Refuses SA at a period not above 0 s (PGA is asked for by name, not as SA(0)). */
+export function requirePositivePeriod(measure: Measure): void {
+  if (measure.kind === 'SA' && !(measure.periodS > 0))
+    throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
+}
+
+/**
+ * predict() of a SplitModel for one measure, once the caller has checked the inputs: the PGA
+ * or PGV row, or for SA the table rows either side of the period interpolated in ln(period)
+ * (interpolate-period.ts), each row through `predictRow`.
+ */
+export function predictSplit<Row, Terms>(
   model: SplitModel<Row, Terms>,
-  ruptures: readonly RuptureContext[],
   measure: Measure,
-): PreparedMotion => singleMeasure(prepareSplitMeasures(model, ruptures, [measure]));
+  predictRow: (row: Row) => GmmPrediction,
+): GmmPrediction {
+  model.checkMeasure(measure);
+  if (measure.kind === 'SA')
+    return predictAtPeriod(model.name, model.periodsS, measure.periodS, (i) =>
+      predictRow(model.sa[i] as Row),
+    );
+  return predictRow(measure.kind === 'PGA' ? model.pga : (model.pgv as Row));
+}
+
+/** The prepareMeasures hook of a SplitModel (model-assembly.ts derives prepare from it). */
+export const splitPrepareMeasures =
+  <Row, Terms>(model: SplitModel<Row, Terms>) =>
+  (ruptures: readonly RuptureContext[], measures: readonly Measure[]): PreparedMotions =>
+    prepareSplitMeasures(model, ruptures, measures);

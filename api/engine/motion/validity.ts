@@ -17,6 +17,49 @@ export function requireInput(
   }
 }
 
+type Rule = readonly [expected: string, ok: (v: number) => boolean];
+const anyFinite = (): boolean => true;
+const atLeastZero = (v: number): boolean => v >= 0;
+
+/** What the models ask of each input they read, in the words of the error they throw. */
+const INPUT_RULES = {
+  magnitude: ['a finite moment magnitude', anyFinite],
+  rakeDeg: ['a finite rake in degrees', anyFinite],
+  dipDeg: ['a dip above 0° and at most 90°', (v) => v > 0 && v <= 90],
+  ztorKm: ['a finite depth to the top of rupture of at least 0 km', atLeastZero],
+  widthKm: ['a finite down-dip width of at least 0 km', atLeastZero],
+  hypoDepthKm: ['a finite hypocentral depth of at least 0 km', atLeastZero],
+  rrupKm: ['a finite rupture distance of at least 0 km', atLeastZero],
+  rjbKm: ['a finite Joyner–Boore distance of at least 0 km', atLeastZero],
+  rxKm: ['a finite Rx in km', anyFinite],
+  ry0Km: ['a finite Ry0 of at least 0 km', atLeastZero],
+  vs30: ['a finite Vs30 above 0 m/s', (v) => v > 0],
+  z1Km: ['a finite Z1 of at least 0 km', atLeastZero],
+  z2p5Km: ['a finite Z2.5 of at least 0 km', atLeastZero],
+} as const satisfies Record<string, Rule>;
+
+/** Site inputs a model may do without (it then uses its own default). */
+const OPTIONAL: ReadonlySet<InputName> = new Set(['z1Km', 'z2p5Km']);
+
+export type InputName = keyof typeof INPUT_RULES;
+
+/**
+ * requireInput for each of `names` in order (the first bad one throws), by the rules above; an
+ * optional site input that is absent is not checked.
+ */
+export function requireInputs(
+  modelName: string,
+  input: Partial<Record<InputName, number>>,
+  names: readonly InputName[],
+): void {
+  for (const name of names) {
+    const value = input[name];
+    if (value === undefined && OPTIONAL.has(name)) continue;
+    const [expected, ok]: Rule = INPUT_RULES[name];
+    requireInput(modelName, name, value as number, expected, ok);
+  }
+}
+
 /**
  * Notes for every input outside a model's stated validity range; empty when all are inside.
  * `distanceKm` is the model's own metric, chosen by the caller.
