@@ -55,6 +55,7 @@ import {
 } from './aga16-coefficients.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
+import { assembleModel } from './model-assembly.ts';
 import {
   atLeast,
   createRowScratch,
@@ -64,7 +65,6 @@ import {
   plannedRows,
   predictRows,
   rowMemo,
-  singleMeasure,
   singleRow,
   type RowPlan,
 } from './prepared-period.ts';
@@ -74,12 +74,11 @@ import type {
   GmmPrediction,
   GroundMotionModel,
   PairPredictions,
-  PreparedMotion,
   PreparedMotions,
   RuptureContext,
   ValidityRange,
 } from './types.ts';
-import { requireInput, validityNotes } from './validity.ts';
+import { requireInput, requireInputs, validityNotes } from './validity.ts';
 
 const NAME = 'AGA16';
 
@@ -247,27 +246,17 @@ export const aga16Pga1000For = (
 
 const SA_PERIODS_S: readonly number[] = Object.freeze(AGA16_SA.map((r) => r.periodS));
 
-const requireNumber = (
-  path: string,
-  value: number,
-  expected: string,
-  ok: (v: number) => boolean,
-): void => requireInput(NAME, path, value, expected, ok);
-
 const eventTypeOf = (rupture: RuptureContext): Aga16EventType =>
   rupture.setting === 'intraslab' ? 'intraslab' : 'interface';
 
 /** Checks the rupture's own inputs; returns whether they are inside the model's validity. */
 function checkRupture(rupture: RuptureContext): boolean {
   const eventType = eventTypeOf(rupture);
-  requireNumber('magnitude', rupture.magnitude, 'a finite moment magnitude', () => true);
-  if (eventType === 'intraslab')
-    requireNumber(
-      'hypoDepthKm',
-      rupture.hypoDepthKm,
-      'a finite hypocentral depth of at least 0 km',
-      (v) => v >= 0,
-    );
+  requireInputs(
+    NAME,
+    rupture,
+    eventType === 'intraslab' ? ['magnitude', 'hypoDepthKm'] : ['magnitude'],
+  );
   const range = eventType === 'intraslab' ? AGA16_INTRASLAB_VALIDITY : AGA16_INTERFACE_VALIDITY;
   const depthInside =
     range.depthKm === undefined || insideRange(rupture.hypoDepthKm, range.depthKm);
@@ -276,8 +265,7 @@ function checkRupture(rupture: RuptureContext): boolean {
   );
 }
 
-const requireVs30 = (vs30: number): void =>
-  requireNumber('vs30', vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
+const requireVs30 = (vs30: number): void => requireInputs(NAME, { vs30 }, ['vs30']);
 
 function refusePgv(measure: Measure): void {
   if (measure.kind === 'PGV')
@@ -298,7 +286,7 @@ function predictAga16(
   const eventType = eventTypeOf(input);
   const distancePath = eventType === 'intraslab' ? 'rhypoKm' : 'rrupKm';
   const distanceKm = eventType === 'intraslab' ? input.rhypoKm : input.rrupKm;
-  requireNumber(distancePath, distanceKm, 'a finite distance of at least 0 km', (v) => v >= 0);
+  requireInput(NAME, distancePath, distanceKm, 'a finite distance of at least 0 km', (v) => v >= 0);
   requireVs30(input.vs30);
   const range = eventType === 'intraslab' ? AGA16_INTRASLAB_VALIDITY : AGA16_INTERFACE_VALIDITY;
   const notes = validityNotes(name, range, input, distanceKm);
@@ -436,13 +424,13 @@ export const aga16Name = (branch: Aga16DeltaC1Branch): string =>
  */
 export function createAga16(branch: Aga16DeltaC1Branch): GroundMotionModel {
   const name = aga16Name(branch);
-  return Object.freeze({
+  return assembleModel({
     name,
     citation:
       branch === 'central'
         ? CITATION
         : `${CITATION} ${branch[0]!.toUpperCase()}${branch.slice(1)} ΔC1 branch (central ${branch === 'lower' ? '−' : '+'} 0.2 for interface events).`,
-    settings: Object.freeze(['interface', 'intraslab'] as const),
+    settings: ['interface', 'intraslab'],
     // Rrup is the interface metric; intraslab predictions use Rhypo (see the top comment).
     distanceMetric: 'rrup',
     periodsS: SA_PERIODS_S,
@@ -455,8 +443,6 @@ export function createAga16(branch: Aga16DeltaC1Branch): GroundMotionModel {
     } as const),
     predict: (input: GmmInput, measure: Measure): GmmPrediction =>
       predictAga16(input, measure, branch, name),
-    prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion =>
-      singleMeasure(prepareAga16Measures(ruptures, [measure], branch, name)),
     prepareMeasures: (
       ruptures: readonly RuptureContext[],
       measures: readonly Measure[],

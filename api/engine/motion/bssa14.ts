@@ -43,7 +43,6 @@
  * How the table is checked: test/engine/motion/bssa14.vectors.test.ts (independent reference
  * vectors, 1e-4 in ln units).
  */
-import { UnsupportedMeasure } from '../errors.ts';
 import { hypot2 } from './fast-math.ts';
 import {
   BSSA14_CONSTANTS as K,
@@ -54,6 +53,8 @@ import {
 } from './bssa14-coefficients.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
+import { assembleModel } from './model-assembly.ts';
+import { requirePositivePeriod } from './split-prepare.ts';
 import {
   atLeast,
   createRowScratch,
@@ -79,7 +80,7 @@ import type {
   SiteContext,
   ValidityRange,
 } from './types.ts';
-import { requireInput, validityNotes } from './validity.ts';
+import { requireInputs, validityNotes } from './validity.ts';
 
 const NAME = 'BSSA14';
 
@@ -227,13 +228,6 @@ export const BSSA14_NORMAL_VALIDITY: ValidityRange = Object.freeze({
   magnitude: [3, 7],
 } as const);
 
-const requireNumber = (
-  path: string,
-  value: number,
-  expected: string,
-  ok: (v: number) => boolean,
-): void => requireInput(NAME, path, value, expected, ok);
-
 /** Options of predictBssa14 and prepareBssa14Measures. */
 export interface Bssa14Options {
   /** Overrides the mechanism the rake implies; 'unspecified' selects the paper's e0. */
@@ -242,21 +236,15 @@ export interface Bssa14Options {
 
 /** The rupture's mechanism for the equation, its inputs checked. */
 function mechanismOf(rupture: RuptureContext, options: Bssa14Options): Bssa14Mechanism {
-  requireNumber('magnitude', rupture.magnitude, 'a finite moment magnitude', () => true);
+  requireInputs(NAME, rupture, ['magnitude']);
   if (options.mechanism !== undefined) return options.mechanism;
-  requireNumber('rakeDeg', rupture.rakeDeg, 'a finite rake in degrees', () => true);
+  requireInputs(NAME, rupture, ['rakeDeg']);
   return bssa14MechanismFromRake(rupture.rakeDeg);
 }
 
-const requireVs30 = (vs30: number): void =>
-  requireNumber('vs30', vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
+const requireVs30 = (vs30: number): void => requireInputs(NAME, { vs30 }, ['vs30']);
 
 const SA_PERIODS_S: readonly number[] = Object.freeze(BSSA14_SA.map((r) => r.periodS));
-
-function checkPeriod(measure: Measure): void {
-  if (measure.kind === 'SA' && !(measure.periodS > 0))
-    throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
-}
 
 /**
  * BSSA14 median and standard deviations for one measure (PGA and PSA in g, PGV in cm/s; all
@@ -268,14 +256,8 @@ export function predictBssa14(
   options: Bssa14Options = {},
 ): GmmPrediction {
   const mechanism = mechanismOf(input, options);
-  requireNumber(
-    'rjbKm',
-    input.rjbKm,
-    'a finite Joyner–Boore distance of at least 0 km',
-    (v) => v >= 0,
-  );
-  requireVs30(input.vs30);
-  checkPeriod(measure);
+  requireInputs(NAME, input, ['rjbKm', 'vs30']);
+  requirePositivePeriod(measure);
   const range = mechanism === 'normal' ? BSSA14_NORMAL_VALIDITY : BSSA14_VALIDITY;
   const notes = validityNotes(NAME, range, input, input.rjbKm);
   if (input.setting !== 'crustal')
@@ -329,7 +311,7 @@ export function prepareBssa14Measures(
   measures: readonly Measure[],
   options: Bssa14Options = {},
 ): PreparedMotions {
-  measures.forEach(checkPeriod);
+  measures.forEach(requirePositivePeriod);
   const mechanisms = ruptures.map((r) => mechanismOf(r, options));
   const inside = Uint8Array.from(ruptures, (r, i) => {
     const range = mechanisms[i] === 'normal' ? BSSA14_NORMAL_VALIDITY : BSSA14_VALIDITY;
@@ -407,21 +389,17 @@ export function prepareBssa14(
 }
 
 /** Boore, Stewart, Seyhan & Atkinson (2014) for shallow crustal earthquakes (Rjb): PGA, PGV, PSA 0.01–10 s. */
-export const bssa14: GroundMotionModel = Object.freeze({
+export const bssa14: GroundMotionModel = assembleModel({
   name: NAME,
   citation:
     'Boore, D. M., Stewart, J. P., Seyhan, E. & Atkinson, G. M. (2014). NGA-West2 equations for predicting PGA, PGV, and 5% damped PSA for shallow crustal earthquakes. Earthquake Spectra 30(3), 1057–1085.',
-  settings: Object.freeze(['crustal'] as const),
+  settings: ['crustal'],
   distanceMetric: 'rjb',
   periodsS: SA_PERIODS_S,
   hasPga: true,
   hasPgv: true,
   validity: BSSA14_VALIDITY,
   predict: (input: GmmInput, measure: Measure): GmmPrediction => predictBssa14(input, measure),
-  prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion =>
-    prepareBssa14(ruptures, measure),
-  prepareMeasures: (
-    ruptures: readonly RuptureContext[],
-    measures: readonly Measure[],
-  ): PreparedMotions => prepareBssa14Measures(ruptures, measures),
+  prepareMeasures: (ruptures: readonly RuptureContext[], measures: readonly Measure[]) =>
+    prepareBssa14Measures(ruptures, measures),
 });

@@ -33,6 +33,7 @@ import { UnsupportedMeasure } from '../errors.ts';
 import type { TectonicSetting } from '../model.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
+import { assembleModel } from './model-assembly.ts';
 import {
   createRowScratch,
   insideRange,
@@ -40,7 +41,6 @@ import {
   periodRows,
   predictRows,
   rowMemo,
-  singleMeasure,
   singleRow,
   type RowPlan,
 } from './prepared-period.ts';
@@ -50,12 +50,11 @@ import type {
   GroundMotionModel,
   PairDistances,
   PairPredictions,
-  PreparedMotion,
   PreparedMotions,
   RuptureContext,
   ValidityRange,
 } from './types.ts';
-import { requireInput, validityNotes } from './validity.ts';
+import { requireInput, requireInputs, validityNotes } from './validity.ts';
 import {
   ZHAO06_CONSTANTS as K,
   ZHAO06_PGA,
@@ -186,7 +185,7 @@ export const ZHAO06_VALIDITY: ValidityRange = Object.freeze({
 const SA_PERIODS_S: readonly number[] = Object.freeze(ZHAO06_SA.map((r) => r.periodS));
 
 function checkRupture(name: string, rupture: RuptureContext): boolean {
-  requireInput(name, 'magnitude', rupture.magnitude, 'a finite moment magnitude', () => true);
+  requireInputs(name, rupture, ['magnitude']);
   requireInput(
     name,
     'hypoDepthKm',
@@ -194,7 +193,7 @@ function checkRupture(name: string, rupture: RuptureContext): boolean {
     'a finite focal depth of at least 0 km',
     (v) => v >= 0,
   );
-  requireInput(name, 'rakeDeg', rupture.rakeDeg, 'a finite rake in degrees', () => true);
+  requireInputs(name, rupture, ['rakeDeg']);
   return (
     insideRange(rupture.magnitude, ZHAO06_VALIDITY.magnitude) &&
     insideRange(rupture.hypoDepthKm, ZHAO06_VALIDITY.depthKm!)
@@ -223,14 +222,7 @@ export function createZhao06(magnitudeSquared: boolean): GroundMotionModel {
   function predict(input: GmmInput, measure: Measure): GmmPrediction {
     refusePgv(name, measure);
     checkRupture(name, input);
-    requireInput(
-      name,
-      'rrupKm',
-      input.rrupKm,
-      'a finite rupture distance of at least 0 km',
-      (v) => v >= 0,
-    );
-    requireInput(name, 'vs30', input.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
+    requireInputs(name, input, ['rrupKm', 'vs30']);
     const notes = validityNotes(name, ZHAO06_VALIDITY, input, input.rrupKm);
     const siteClass = zhao06SiteClass(input.vs30);
     const predictRow = (row: Zhao06Row): GmmPrediction => {
@@ -289,7 +281,7 @@ export function createZhao06(magnitudeSquared: boolean): GroundMotionModel {
     return {
       distances: ['rrupKm'],
       predictPairs(site, pairs, out) {
-        requireInput(name, 'vs30', site.vs30, 'a finite Vs30 above 0 m/s', (v) => v > 0);
+        requireInputs(name, site, ['vs30']);
         plans.forEach((plan, i) =>
           predictRows(plan, pairs.count, out[i] as PairPredictions, scratch, (p, into) =>
             evaluate(p, site.vs30, pairs, into),
@@ -299,18 +291,16 @@ export function createZhao06(magnitudeSquared: boolean): GroundMotionModel {
     };
   }
 
-  return Object.freeze({
+  return assembleModel({
     name,
     citation: `Zhao, J. X. et al. (2006). Attenuation relations of strong ground motion in Japan using site classification based on predominant period. Bulletin of the Seismological Society of America 96(3), 898–913.${magnitudeSquared ? ' With the magnitude-squared term.' : ''}`,
-    settings: Object.freeze(['interface', 'intraslab', 'crustal'] as const),
+    settings: ['interface', 'intraslab', 'crustal'],
     distanceMetric: 'rrup',
     periodsS: SA_PERIODS_S,
     hasPga: true,
     hasPgv: false,
     validity: ZHAO06_VALIDITY,
     predict,
-    prepare: (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion =>
-      singleMeasure(prepareMeasures(ruptures, [measure])),
     prepareMeasures,
   });
 }
