@@ -26,6 +26,7 @@ import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
 import { readProbeRequest } from '../../../api/operations/probe-request.ts';
 import { expectClose } from '../../helpers/close.ts';
+import { expectLnPeriodInterpolation, expectNotApplicable } from './model-checks.ts';
 import { verticalStrikeSlip } from './crustal-input.ts';
 import {
   expectMatchesVector,
@@ -270,24 +271,10 @@ describe('ASK14: properties', () => {
   });
 
   it('interpolates between rows in ln(period) and returns the row on a row', () => {
-    const between = ask14.predict(input(), sa(0.6));
-    const lo = ask14.predict(input(), sa(0.5));
-    const hi = ask14.predict(input(), sa(0.75));
-    const w = Math.log(0.6 / 0.5) / Math.log(0.75 / 0.5);
-    expectClose(
-      between.lnMedian,
-      lo.lnMedian + (hi.lnMedian - lo.lnMedian) * w,
-      1e-12,
-      'interpolate-period.ts rule (common practice)',
-    );
-    expectClose(
-      between.sigma,
-      lo.sigma + (hi.sigma - lo.sigma) * w,
-      1e-12,
-      'interpolate-period.ts rule (common practice)',
-    );
-    expect(ask14.predict(input(), sa(1)).lnMedian).toBe(
-      ask14.predict(input(), sa(1 + 1e-9)).lnMedian,
+    expectLnPeriodInterpolation(
+      (periodS) => ask14.predict(input(), sa(periodS)),
+      [0.5, 0.6, 0.75],
+      1,
     );
   });
 
@@ -311,14 +298,7 @@ describe('ASK14: properties', () => {
       { vs30: 1200 },
       { setting: 'interface' },
     ];
-    for (const over of outside) {
-      for (const m of measures) {
-        const p = ask14.predict(input(over), m);
-        expect(p.applicable, JSON.stringify(over)).toBe(false);
-        expect(p.notes.length).toBeGreaterThan(0);
-        for (const v of [p.lnMedian, p.sigma, p.tau, p.phi]) expect(Number.isFinite(v)).toBe(true);
-      }
-    }
+    expectNotApplicable((over, m) => ask14.predict(input(over), m), outside, measures);
     expect(ask14.predict(input({ magnitude: 8.5, vs30: 180 }), PGA).applicable).toBe(true);
   });
 

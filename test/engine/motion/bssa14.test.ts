@@ -15,6 +15,7 @@ import type { Measure } from '../../../api/engine/motion/measure.ts';
 import { verticalStrikeSlip } from './crustal-input.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
+import { expectLnPeriodInterpolation, expectNotApplicable } from './model-checks.ts';
 import { worstKink } from './crustal-table-checks.ts';
 
 const SOURCE = 'Boore et al. (2014)';
@@ -259,20 +260,10 @@ describe('BSSA14: properties', () => {
   });
 
   it('interpolates between rows in ln(period) and returns the row on a row', () => {
-    const between = bssa14.predict(input(), sa(0.175));
-    const lo = bssa14.predict(input(), sa(0.17));
-    const hi = bssa14.predict(input(), sa(0.18));
-    const w = Math.log(0.175 / 0.17) / Math.log(0.18 / 0.17);
-    expectClose(
-      between.lnMedian,
-      lo.lnMedian + (hi.lnMedian - lo.lnMedian) * w,
-      1e-12,
-      'interpolate-period.ts rule (common practice)',
-    );
-    expect(between.lnMedian).toBeGreaterThan(Math.min(lo.lnMedian, hi.lnMedian));
-    expect(between.lnMedian).toBeLessThan(Math.max(lo.lnMedian, hi.lnMedian));
-    expect(bssa14.predict(input(), sa(0.2)).lnMedian).toBe(
-      predictBssa14(input(), sa(0.2 * (1 + 1e-9))).lnMedian,
+    expectLnPeriodInterpolation(
+      (periodS) => bssa14.predict(input(), sa(periodS)),
+      [0.17, 0.175, 0.18],
+      0.2,
     );
   });
 
@@ -286,14 +277,7 @@ describe('BSSA14: properties', () => {
       { magnitude: 7.5, rakeDeg: -90 },
       { setting: 'interface' },
     ];
-    for (const over of outside) {
-      for (const m of measures) {
-        const p = bssa14.predict(input(over), m);
-        expect(p.applicable, JSON.stringify(over)).toBe(false);
-        expect(p.notes.length).toBeGreaterThan(0);
-        for (const v of [p.lnMedian, p.sigma, p.tau, p.phi]) expect(Number.isFinite(v)).toBe(true);
-      }
-    }
+    expectNotApplicable((over, m) => bssa14.predict(input(over), m), outside, measures);
     expect(bssa14.predict(input({ magnitude: 7.5, rakeDeg: 0 }), PGA).applicable).toBe(true);
   });
 

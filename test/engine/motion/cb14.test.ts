@@ -19,6 +19,7 @@ import type { Measure } from '../../../api/engine/motion/measure.ts';
 import { verticalStrikeSlip } from './crustal-input.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
+import { expectLnPeriodInterpolation, expectNotApplicable } from './model-checks.ts';
 import { worstKink } from './crustal-table-checks.ts';
 
 const SOURCE = 'Campbell & Bozorgnia (2014)';
@@ -343,26 +344,10 @@ describe('CB14: properties', () => {
   });
 
   it('interpolates between rows in ln(period) and returns the row on a row', () => {
-    const between = cb14.predict(input(), sa(0.6));
-    const lo = cb14.predict(input(), sa(0.5));
-    const hi = cb14.predict(input(), sa(0.75));
-    const w = Math.log(0.6 / 0.5) / Math.log(0.75 / 0.5);
-    expectClose(
-      between.lnMedian,
-      lo.lnMedian + (hi.lnMedian - lo.lnMedian) * w,
-      1e-12,
-      'interpolate-period.ts rule (common practice)',
-    );
-    expectClose(
-      between.sigma,
-      lo.sigma + (hi.sigma - lo.sigma) * w,
-      1e-12,
-      'interpolate-period.ts rule (common practice)',
-    );
-    expect(between.lnMedian).toBeLessThan(Math.max(lo.lnMedian, hi.lnMedian));
-    expect(between.lnMedian).toBeGreaterThan(Math.min(lo.lnMedian, hi.lnMedian));
-    expect(cb14.predict(input(), sa(1)).lnMedian).toBe(
-      cb14.predict(input(), sa(1 + 1e-9)).lnMedian,
+    expectLnPeriodInterpolation(
+      (periodS) => cb14.predict(input(), sa(periodS)),
+      [0.5, 0.6, 0.75],
+      1,
     );
   });
 
@@ -381,14 +366,7 @@ describe('CB14: properties', () => {
       { z2p5Km: 12 },
       { setting: 'intraslab' },
     ];
-    for (const over of outside) {
-      for (const m of measures) {
-        const p = cb14.predict(input(over), m);
-        expect(p.applicable, JSON.stringify(over)).toBe(false);
-        expect(p.notes.length).toBeGreaterThan(0);
-        for (const v of [p.lnMedian, p.sigma, p.tau, p.phi]) expect(Number.isFinite(v)).toBe(true);
-      }
-    }
+    expectNotApplicable((over, m) => cb14.predict(input(over), m), outside, measures);
     expect(cb14.predict(input({ magnitude: 8.2 }), PGA).applicable).toBe(true);
   });
 

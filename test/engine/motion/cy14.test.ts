@@ -24,6 +24,7 @@ import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
 import { readProbeRequest } from '../../../api/operations/probe-request.ts';
 import { expectClose } from '../../helpers/close.ts';
+import { expectLnPeriodInterpolation, expectNotApplicable } from './model-checks.ts';
 import { verticalStrikeSlip } from './crustal-input.ts';
 import {
   expectMatchesVector,
@@ -257,24 +258,10 @@ describe('CY14: properties', () => {
   });
 
   it('interpolates between rows in ln(period) and returns the row on a row', () => {
-    const between = cy14.predict(input(), sa(0.6));
-    const lo = cy14.predict(input(), sa(0.5));
-    const hi = cy14.predict(input(), sa(0.75));
-    const w = Math.log(0.6 / 0.5) / Math.log(0.75 / 0.5);
-    expectClose(
-      between.lnMedian,
-      lo.lnMedian + (hi.lnMedian - lo.lnMedian) * w,
-      1e-12,
-      'interpolate-period.ts rule (common practice)',
-    );
-    expectClose(
-      between.sigma,
-      lo.sigma + (hi.sigma - lo.sigma) * w,
-      1e-12,
-      'interpolate-period.ts rule (common practice)',
-    );
-    expect(cy14.predict(input(), sa(1)).lnMedian).toBe(
-      cy14.predict(input(), sa(1 + 1e-9)).lnMedian,
+    expectLnPeriodInterpolation(
+      (periodS) => cy14.predict(input(), sa(periodS)),
+      [0.5, 0.6, 0.75],
+      1,
     );
   });
 
@@ -297,14 +284,7 @@ describe('CY14: properties', () => {
       { ztorKm: 22 },
       { setting: 'intraslab' },
     ];
-    for (const over of outside) {
-      for (const m of measures) {
-        const p = cy14.predict(input(over), m);
-        expect(p.applicable, JSON.stringify(over)).toBe(false);
-        expect(p.notes.length).toBeGreaterThan(0);
-        for (const v of [p.lnMedian, p.sigma, p.tau, p.phi]) expect(Number.isFinite(v)).toBe(true);
-      }
-    }
+    expectNotApplicable((over, m) => cy14.predict(input(over), m), outside, measures);
     expect(cy14.predict(input({ magnitude: 8.2 }), PGA).applicable).toBe(true);
   });
 

@@ -135,3 +135,13 @@ export function expectFastPathMatchesVector(
   expectClose(out.lnMedian[0]!, c.lnMedian, VECTOR_TOLERANCE, `${where}: ln median`);
   expectClose(out.sigma[0]!, c.sigma, VECTOR_TOLERANCE, `${where}: sigma`);
 }
+
+/** A case through both of the model's paths: predict() (expectMatchesVector) and the fast path. */
+export function expectModelMatchesVector(
+  model: GroundMotionModel,
+  c: VectorCase,
+  source: string,
+): void {
+  expectMatchesVector(model.predict(vectorInput(c), vectorMeasure(c)), c, source);
+  expectFastPathMatchesVector(model, c, source);
+}
