@@ -1,41 +1,25 @@
 import { readFileSync } from 'node:fs';
 import { Hono } from 'hono';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { modelCatalog } from '../../api/engine/motion/registry.ts';
 import { createApp } from '../../api/service/app.ts';
 import type { ServiceContext } from '../../api/operations/service-context.ts';
-import { openStore, type Store } from '../../api/store/store.ts';
-import { RunScheduler } from '../../api/jobs/run-scheduler.ts';
-import { WorkerPool } from '../../api/workers/worker-pool.ts';
 import { expectError, expectSecurityHeaders } from './helpers/assertions.ts';
 import { tempDir } from './helpers/service-process.ts';
+import { closeServiceContext, testServiceContext } from './helpers/test-context.ts';
 
 /**
  * createApp through app.request(): what a started server cannot be made to show, such as a
  * pages sub-app and an internal failure.
  */
 const dir = tempDir();
-let store: Store;
 let ctx: ServiceContext;
 const logged: { id: string; context: string; error: unknown }[] = [];
 
 beforeAll(() => {
-  store = openStore(`${dir.path}/app.db`);
-  const runPool = new WorkerPool({ size: 1, log: () => {} });
-  const quickPool = new WorkerPool({ size: 1, log: () => {} });
-  ctx = {
-    store,
-    runPool,
-    quickPool,
-    scheduler: new RunScheduler({ store, pool: runPool, toolVersion: 'test' }),
-    models: modelCatalog,
-    toolVersion: 'test',
-    workBudget: 1_000,
-  };
+  ctx = testServiceContext(`${dir.path}/app.db`, 1_000);
 });
 afterAll(async () => {
-  await Promise.all([ctx.runPool.close(), ctx.quickPool.close()]);
-  store.close();
+  await closeServiceContext(ctx);
   dir.remove();
 });
 

@@ -1,11 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import { createApp } from '../../../api/service/app.ts';
 import type { ServiceContext } from '../../../api/operations/service-context.ts';
-import { openStore, type Store } from '../../../api/store/store.ts';
-import { RunScheduler } from '../../../api/jobs/run-scheduler.ts';
-import { WorkerPool } from '../../../api/workers/worker-pool.ts';
 import {
   DEFAULT_FIT,
   EAST_ZONE,
@@ -25,29 +21,17 @@ import {
   startService,
   tempDir,
 } from '../helpers/service-process.ts';
+import { closeServiceContext, testServiceContext } from '../helpers/test-context.ts';
 
 /** The catalog routes through app.request(), and one happy path against a started server. */
 const dir = tempDir();
-let store: Store;
 let ctx: ServiceContext;
 
 beforeAll(() => {
-  store = openStore(`${dir.path}/catalogs.db`);
-  const runPool = new WorkerPool({ size: 1, log: () => {} });
-  const quickPool = new WorkerPool({ size: 1, log: () => {} });
-  ctx = {
-    store,
-    runPool,
-    quickPool,
-    scheduler: new RunScheduler({ store, pool: runPool, toolVersion: 'test' }),
-    models: modelCatalog,
-    toolVersion: 'test',
-    workBudget: 1_000,
-  };
+  ctx = testServiceContext(`${dir.path}/catalogs.db`, 1_000);
 });
 afterAll(async () => {
-  await Promise.all([ctx.runPool.close(), ctx.quickPool.close()]);
-  store.close();
+  await closeServiceContext(ctx);
   dir.remove();
 });
 

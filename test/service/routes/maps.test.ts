@@ -1,12 +1,9 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import { createApp } from '../../../api/service/app.ts';
 import { DEMO_STUDY_URL } from '../../../api/operations/demo-seed.ts';
 import type { ServiceContext } from '../../../api/operations/service-context.ts';
-import { openStore, type Store } from '../../../api/store/store.ts';
-import { RunScheduler } from '../../../api/jobs/run-scheduler.ts';
-import { WorkerPool } from '../../../api/workers/worker-pool.ts';
+import type { Store } from '../../../api/store/store.ts';
 import { expectRelative } from '../../helpers/close.ts';
 import { expectError } from '../helpers/assertions.ts';
 import { tempDir } from '../helpers/service-process.ts';
@@ -17,6 +14,7 @@ import {
   poissonChance,
   smallStudy,
 } from '../helpers/small-study.ts';
+import { closeServiceContext, testServiceContext } from '../helpers/test-context.ts';
 
 /*
  * Map runs through app.request(), kept in the store. The small study (one earthquake straight
@@ -32,18 +30,8 @@ let studyId: string;
 let demoId: string;
 
 beforeAll(async () => {
-  store = openStore(`${dir.path}/maps.db`);
-  const runPool = new WorkerPool({ size: 1, log: () => {} });
-  const quickPool = new WorkerPool({ size: 1, log: () => {} });
-  ctx = {
-    store,
-    runPool,
-    quickPool,
-    scheduler: new RunScheduler({ store, pool: runPool, toolVersion: 'test' }),
-    models: modelCatalog,
-    toolVersion: 'test',
-    workBudget: 1e9,
-  };
+  ctx = testServiceContext(`${dir.path}/maps.db`, 1e9);
+  store = ctx.store;
   const created = await app().request('/api/studies', json('POST', smallStudy()));
   studyId = ((await created.json()) as { id: string }).id;
   demoId = store.studies.create({
@@ -52,8 +40,7 @@ beforeAll(async () => {
   }).id;
 });
 afterAll(async () => {
-  await Promise.all([ctx.runPool.close(), ctx.quickPool.close()]);
-  store.close();
+  await closeServiceContext(ctx);
   dir.remove();
 });
 
