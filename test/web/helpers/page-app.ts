@@ -1,12 +1,9 @@
 import type { Hono } from 'hono';
-import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import { createApp } from '../../../api/service/app.ts';
 import type { ServiceContext } from '../../../api/operations/service-context.ts';
-import { openStore } from '../../../api/store/store.ts';
-import { RunScheduler } from '../../../api/jobs/run-scheduler.ts';
-import { WorkerPool } from '../../../api/workers/worker-pool.ts';
 import { createPages } from '../../../web/pages.tsx';
 import { tempDir } from '../../service/helpers/service-process.ts';
+import { closeServiceContext, testServiceContext } from '../../service/helpers/test-context.ts';
 
 /** The service with its pages, in-process (app.request), on a temporary database. */
 export interface PageApp {
@@ -22,18 +19,7 @@ export interface StartPageAppOptions {
 
 export function startPageApp(options: StartPageAppOptions = {}): PageApp {
   const dir = tempDir('tremora-pages-');
-  const store = openStore(`${dir.path}/pages.db`);
-  const runPool = new WorkerPool({ size: 1, log: () => {} });
-  const quickPool = new WorkerPool({ size: 1, log: () => {} });
-  const ctx: ServiceContext = {
-    store,
-    runPool,
-    quickPool,
-    scheduler: new RunScheduler({ store, pool: runPool, toolVersion: 'test' }),
-    models: modelCatalog,
-    toolVersion: 'test',
-    workBudget: 1_000_000_000,
-  };
+  const ctx = testServiceContext(`${dir.path}/pages.db`, 1_000_000_000);
   const app = createApp(ctx, {
     pages: createPages(ctx, { token: options.token }),
     logError: () => {},
@@ -43,8 +29,7 @@ export function startPageApp(options: StartPageAppOptions = {}): PageApp {
     app,
     ctx,
     close: async () => {
-      await Promise.all([runPool.close(), quickPool.close()]);
-      store.close();
+      await closeServiceContext(ctx);
       dir.remove();
     },
   };
