@@ -8,27 +8,35 @@
  * about.
  */
 
-/** The components, in the order pages show them. A new one (for example robustness) is one more id here. */
-export const PRIORITY_COMPONENTS = ['people', 'chance', 'facilities', 'isolation'] as const;
+/** The components, in the order pages show them. */
+export const PRIORITY_COMPONENTS = [
+  'people',
+  'chance',
+  'firmness',
+  'facilities',
+  'isolation',
+] as const;
 export type PriorityComponentId = (typeof PRIORITY_COMPONENTS)[number];
 
 export type PriorityWeights = Readonly<Record<PriorityComponentId, number>>;
 
 /**
  * Default weights (relative; any non-negative numbers): the people exposed and the chance of
- * damaging shaking count three times as much as facilities and isolation, which refine the
- * choice but say nothing about the shaking or the number of people (common practice).
+ * damaging shaking count three times as much as the band's firmness, facilities and
+ * isolation, which refine the choice but say nothing about the shaking or the number of
+ * people (common practice).
  */
 export const DEFAULT_PRIORITY_WEIGHTS: PriorityWeights = {
   people: 3,
   chance: 3,
+  firmness: 1,
   facilities: 1,
   isolation: 1,
 };
 
 export interface PriorityInput {
   readonly communityId: string;
-  /** people: residents; chance: probability 0–1 of damaging shaking in the horizon; facilities: schools and clinics; isolation: km to the nearest airstrip or larger place. Undefined when unknown. */
+  /** people: residents; chance: probability 0–1 of damaging shaking in the horizon; firmness: share 0–1 of the logic tree's weight in the community's band; facilities: schools and clinics; isolation: km to the nearest airstrip or larger place. Undefined when unknown. */
   readonly values: Readonly<Partial<Record<PriorityComponentId, number>>>;
 }
 

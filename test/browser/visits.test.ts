@@ -76,7 +76,7 @@ async function shoot(name: string): Promise<void> {
 }
 
 describe('visits in a browser', { timeout: 120_000 }, () => {
-  test('a planner records a visit, then plans a trip from the visit priority', async () => {
+  test('a planner records a visit, plans a trip from the visit priority, then deletes the visit', async () => {
     await page.goto(`${service.url}/studies/${id}/communities/lisk-head`);
     await page.getByRole('link', { name: 'Record a visit' }).click();
     await page.getByLabel('Date of the visit').fill('2026-04-09');
@@ -116,6 +116,17 @@ describe('visits in a browser', { timeout: 120_000 }, () => {
     expect(await page.locator('table.trip-table').isVisible()).toBe(true);
     await page.screenshot({ path: join(ARTIFACTS, 'trip-plan-print.png'), fullPage: true });
     await page.emulateMedia({ media: 'screen' });
+
+    await page.goto(`${service.url}/studies/${id}/communities/lisk-head`);
+    await page.getByRole('link', { name: /^Delete the visit of / }).click();
+    expect(await page.locator('h1').textContent()).toMatch(/^Delete the visit to Lisk Head of /);
+    expect(await seriousAxeViolations(page)).toEqual([]);
+    await shoot('visit-delete');
+    await page.getByRole('button', { name: 'Delete this visit' }).click();
+    await page.waitForURL(/\/communities\/lisk-head(#visits-heading)?$/);
+    expect(await page.locator('.visit-records').textContent()).toContain(
+      'No visit has been recorded here yet.',
+    );
     expect(foreignRequests).toEqual([]);
   });
 });

@@ -16,7 +16,7 @@ const b: PriorityInput = {
 };
 
 describe('visitPriorities', () => {
-  it('weights shares of the largest value with the default weights 3, 3, 1, 1', () => {
+  it('weights shares of the largest value with the default weights 3, 3, 1, 1 (no firmness known)', () => {
     const [first, second] = visitPriorities([b, a]);
     expect(first?.communityId).toBe('a');
     // a: shares 1000/1000, 0.2/0.4, 2/2, 10/40 -> (3·1 + 3·0.5 + 1·1 + 1·0.25) / 8 = 0.71875
@@ -41,15 +41,50 @@ describe('visitPriorities', () => {
   });
 
   it('follows changed weights: the chance alone puts b first', () => {
-    const scored = visitPriorities([a, b], { people: 0, chance: 1, facilities: 0, isolation: 0 });
+    const scored = visitPriorities([a, b], {
+      people: 0,
+      chance: 1,
+      firmness: 0,
+      facilities: 0,
+      isolation: 0,
+    });
     expect(scored.map((s) => [s.communityId, s.score])).toEqual([
       ['b', 100],
       ['a', 50],
     ]);
   });
 
+  it("counts the band's firmness as one more share with its default weight of 1", () => {
+    const firm: PriorityInput = { communityId: 'a', values: { ...a.values, firmness: 0.9 } };
+    const loose: PriorityInput = { communityId: 'b', values: { ...b.values, firmness: 0.6 } };
+    const [first, second] = visitPriorities([loose, firm]);
+    // a: shares 1, 0.5, 0.9/0.9, 1, 0.25 -> (3 + 1.5 + 1 + 1 + 0.25) / 9 = 0.75
+    expect(first?.communityId).toBe('a');
+    expectClose(first?.score ?? NaN, 75, TOL, 'by hand: 6.75 / 9');
+    // b: shares 0.5, 1, 0.6/0.9, 0, 1 -> (1.5 + 3 + 2/3 + 0 + 1) / 9 = 0.685185...
+    expectClose(second?.score ?? NaN, (100 * (5.5 + 2 / 3)) / 9, TOL, 'by hand: 6.1667 / 9');
+    const firmness = second?.components.find((c) => c.id === 'firmness');
+    expectClose(firmness?.share ?? NaN, 2 / 3, TOL, 'by hand: 0.6 / 0.9');
+    expectClose(firmness?.points ?? NaN, (100 * 2) / 3 / 9, TOL, 'by hand: 100 · 1 · (2/3) / 9');
+    const alone = visitPriorities([firm, loose], {
+      people: 0,
+      chance: 0,
+      firmness: 1,
+      facilities: 0,
+      isolation: 0,
+    });
+    expect(alone.map((s) => s.communityId)).toEqual(['a', 'b']);
+    expectClose(alone[1]?.score ?? NaN, (100 * 2) / 3, TOL, 'by hand: 0.6 / 0.9');
+  });
+
   it('gives every score 0 when every weight is 0', () => {
-    const scored = visitPriorities([a, b], { people: 0, chance: 0, facilities: 0, isolation: 0 });
+    const scored = visitPriorities([a, b], {
+      people: 0,
+      chance: 0,
+      firmness: 0,
+      facilities: 0,
+      isolation: 0,
+    });
     expect(scored.map((s) => s.score)).toEqual([0, 0]);
   });
 });

@@ -101,8 +101,10 @@ export interface PriorityRow {
 
 /**
  * Every screened community's visit priority, highest first: the people, the chance of MMI VII
- * or more in the lead horizon (the damaging level of the screening bands), and what its details
- * say of facilities and isolation.
+ * or more in the lead horizon (the damaging level of the screening bands), the band's firmness
+ * (the share of the logic tree's weight that gives the community's own band: a band most
+ * choices agree on is firmer ground for what a visit tells people; unknown in results saved
+ * before the tree was summarised), and what its details say of facilities and isolation.
  */
 export function priorityRows(
   study: Study,
@@ -120,6 +122,9 @@ export function priorityRows(
         values: {
           ...(community?.population === undefined ? {} : { people: community.population }),
           chance: r.intensity.chanceOfReaching[String(years)]?.VII ?? 0,
+          ...(r.bandRobustness === undefined
+            ? {}
+            : { firmness: r.bandRobustness.bandShares[r.band.id] ?? 0 }),
           ...detailValues(community?.details),
         },
       };

@@ -1,9 +1,11 @@
 import type { Context, Hono } from 'hono';
+import type { Child } from 'hono/jsx';
 import type { ScreeningBandId } from '../../api/engine/intensity/screening-band.ts';
 import { InvalidInput, type InputIssue } from '../../api/engine/errors.ts';
 import { planTrip } from '../../api/engine/trip/visit-order.ts';
 import { readVisit } from '../../api/operations/visit-input.ts';
 import { readRuns, readStudy } from '../data/study-data.ts';
+import { DeleteVisitView } from '../views/delete-visit-view.tsx';
 import { MessageView } from '../views/message-view.tsx';
 import { TripView } from '../views/trip-view.tsx';
 import { VisitFormView, type VisitFormValues } from '../views/visit-records.tsx';
@@ -22,7 +24,7 @@ function visitFromForm(values: VisitFormValues, communityId: string): Record<str
   };
 }
 
-/** The trip plan of chosen villages, and the form that records a visit. */
+/** The trip plan of chosen villages, the form that records a visit, and deleting one. */
 export function visitPages(app: Hono, kit: PageKit): void {
   const { ctx } = kit;
 
@@ -77,24 +79,29 @@ export function visitPages(app: Hono, kit: PageKit): void {
     );
   });
 
+  /** The study and community of the path (`:id`, `:cid`), undefined when either is missing. */
+  const findCommunity = (c: Context) => {
+    const data = readStudy(ctx, c.req.param('id') as string);
+    const community = data?.ok
+      ? data.study.communities.find((x) => x.id === c.req.param('cid'))
+      : undefined;
+    return data?.ok && community ? { data, community } : undefined;
+  };
+
+  const notFound = (c: Context, text: Child) =>
+    kit.render(
+      c,
+      <MessageView page={kit.page(c)} title={kit.tr(c).t('error.notFound')} text={text} />,
+      404,
+    );
+
   const visitForm = (c: Context, values: VisitFormValues, issues: readonly InputIssue[]) => {
     const tr = kit.tr(c);
-    const id = c.req.param('id') as string;
     const communityId = c.req.param('cid') as string;
-    const data = readStudy(ctx, id);
-    const community = data?.ok
-      ? data.study.communities.find((x) => x.id === communityId)
-      : undefined;
-    if (!data?.ok || !community)
-      return kit.render(
-        c,
-        <MessageView
-          page={kit.page(c)}
-          title={tr.t('error.notFound')}
-          text={tr.text('error.communityNotFound', { id: communityId })}
-        />,
-        404,
-      );
+    const found = findCommunity(c);
+    if (!found) return notFound(c, tr.text('error.communityNotFound', { id: communityId }));
+    const { data, community } = found;
+    const id = data.record.id;
     return kit.render(
       c,
       <VisitFormView
@@ -133,5 +140,39 @@ export function visitPages(app: Hono, kit: PageKit): void {
       throw error;
     }
     return c.redirect(`/studies/${id}/communities/${communityId}#visits-heading`, 303);
+  });
+
+  /** The study, community and visit of the path (`:id`, `:cid`, `:vid`), undefined when one is missing. */
+  const findVisit = (c: Context) => {
+    const found = findCommunity(c);
+    const visit = found
+      ? ctx.store.visits
+          .list(found.data.record.id, found.community.id)
+          .find((v) => v.id === c.req.param('vid'))
+      : undefined;
+    return found && visit ? { ...found, visit } : undefined;
+  };
+
+  app.get('/studies/:id/communities/:cid/visits/:vid/delete', (c) => {
+    const found = findVisit(c);
+    if (!found) return notFound(c, kit.tr(c).text('error.notFoundText'));
+    const { data, community, visit } = found;
+    return kit.render(
+      c,
+      <DeleteVisitView
+        page={kit.page(c)}
+        study={{ id: data.record.id, name: data.record.name }}
+        community={{ id: community.id, name: community.name }}
+        visit={visit}
+      />,
+    );
+  });
+
+  app.post('/studies/:id/communities/:cid/visits/:vid/delete', (c) => {
+    const found = findVisit(c);
+    if (!found) return notFound(c, kit.tr(c).text('error.notFoundText'));
+    const { data, community, visit } = found;
+    ctx.store.visits.delete(data.record.id, visit.id);
+    return c.redirect(`/studies/${data.record.id}/communities/${community.id}#visits-heading`, 303);
   });
 }

@@ -68,8 +68,6 @@ export const EN = {
   'firmness.shares': 'Of the weight of the choices behind these numbers, {shares}.',
   'firmness.share': '{percent} gives {band}',
   'firmness.hinge': 'The band hinges most on {subject}: {alternatives}.',
-  'firmness.steady':
-    'No single choice moves it to another band. {subject} moves it most: {alternatives}.',
   'firmness.alternative': 'with {value}, {band}',
   'firmness.subject.source': "{source}'s {choice}",
   'firmness.subject.setting': 'the {setting} {choice}',
@@ -712,6 +710,19 @@ export const EN = {
   'error.studyNotFound': 'There is no study with id “{id}”.',
   'error.communityNotFound': 'This study has no community with id “{id}”.',
   'error.home': 'Go to the list of studies',
+
+  // ---- Band firmness in the visit priority, deleting a visit record, band firmness wording.
+  // One block, kept together so that it moves as one when the bundles become data files.
+  'priority.component.firmness': 'Firmness of the band (share of the choices that give it)',
+  'priority.firmnessValue': '{percent}% of the weight',
+  'firmness.steadyBand':
+    'No single choice moves it to another band. Even {subject}, the choice that moves its intensity most, gives {band} with every alternative.',
+  'visits.delete': 'Delete the visit of {date}',
+  'visits.deleteTitle': 'Delete the visit to {name} of {date}?',
+  'visits.deleteIntro':
+    'This deletes the record of this visit only. It cannot be undone. The other visits stay.',
+  'visits.deleteButton': 'Delete this visit',
+  'visits.keep': 'Keep it',
 } as const;
 
 export type TextKey = keyof typeof EN;

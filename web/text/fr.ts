@@ -55,8 +55,6 @@ export const FR: Readonly<Partial<Record<TextKey, string>>> = {
   'firmness.shares': 'Parmi les choix derrière ces chiffres, {shares}.',
   'firmness.share': '{percent} du poids donne {band}',
   'firmness.hinge': 'Le niveau dépend surtout de {subject} : {alternatives}.',
-  'firmness.steady':
-    'Aucun choix seul ne change le niveau. {subject} le fait le plus varier : {alternatives}.',
   'firmness.alternative': 'avec {value}, {band}',
   'firmness.subject.source': '{choice} de {source}',
   'firmness.subject.setting': '{choice} ({setting})',
@@ -203,4 +201,16 @@ export const FR: Readonly<Partial<Record<TextKey, string>>> = {
   'error.notFound': 'Page introuvable',
   'error.home': 'Aller à la liste des études',
   'map.contourDepth': 'à {depth} km de profondeur',
+
+  // ---- Band firmness in the visit priority, deleting a visit record, band firmness wording.
+  'priority.component.firmness': 'Fermeté du niveau (part des choix qui le donnent)',
+  'priority.firmnessValue': '{percent} % du poids',
+  'firmness.steadyBand':
+    'Aucun choix seul ne change le niveau. Même {subject}, le choix qui fait le plus varier l’intensité, donne {band} avec chacune de ses options.',
+  'visits.delete': 'Supprimer la visite du {date}',
+  'visits.deleteTitle': 'Supprimer la visite à {name} du {date} ?',
+  'visits.deleteIntro':
+    'Seul le compte rendu de cette visite est supprimé, sans retour possible. Les autres visites restent.',
+  'visits.deleteButton': 'Supprimer cette visite',
+  'visits.keep': 'La garder',
 };

@@ -23,7 +23,9 @@ const bandName = (tr: Translator, id: string): string =>
 
 /**
  * How firm a community's band is, in words: where the logic tree's weight falls, and the one
- * choice the band hinges on most (with the band each of its alternatives would give).
+ * choice the band hinges on most (with the band each of its alternatives would give). When no
+ * alternative of that choice changes the band, the band they all give is named once instead.
+ * The choice is never the first word of a sentence, so its lower-case article stays right.
  */
 export function bandFirmnessText(tr: Translator, robustness: BandRobustness): string {
   const shares = SCREENING_BANDS.filter(
@@ -38,15 +40,16 @@ export function bandFirmnessText(tr: Translator, robustness: BandRobustness): st
     .join(', ');
   const sentences = [tr.t('firmness.shares', { shares })];
   const first = robustness.hinges[0];
-  if (first && first.mmiShift > 0) {
+  if (first && first.mmiShift > 0 && first.changesBand) {
     const alternatives = first.alternatives
       .map((a) => tr.t('firmness.alternative', { value: a.value, band: bandName(tr, a.bandId) }))
       .join(', ');
+    sentences.push(tr.t('firmness.hinge', { subject: subject(tr, first), alternatives }));
+  } else if (first && first.mmiShift > 0) {
+    // Every alternative gives the same band (changesBand false): named once, not listed.
+    const band = first.alternatives[0]?.bandId ?? '';
     sentences.push(
-      tr.t(first.changesBand ? 'firmness.hinge' : 'firmness.steady', {
-        subject: subject(tr, first),
-        alternatives,
-      }),
+      tr.t('firmness.steadyBand', { subject: subject(tr, first), band: bandName(tr, band) }),
     );
   }
   return sentences.join(' ');

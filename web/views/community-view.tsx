@@ -318,7 +318,9 @@ export function CommunityView(props: CommunityViewProps) {
                     <th scope="row" class="numeric">
                       {String(level)}
                     </th>
-                    <td class="numeric">{(curve.annualRate[i] ?? 0).toPrecision(3)}</td>
+                    <td class="numeric" data-label={tr.t('plot.annualRate')}>
+                      {(curve.annualRate[i] ?? 0).toPrecision(3)}
+                    </td>
                   </tr>
                 ))}
               </tbody>

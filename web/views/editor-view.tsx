@@ -172,20 +172,26 @@ export function EditorView(props: EditorViewProps) {
               {study.communities.map((c) => (
                 <tr data-community={c.id}>
                   <th scope="row">{c.name}</th>
-                  <td>
+                  <td data-label={tr.t('editor.col.id')}>
                     <code>{c.id}</code>
                   </td>
-                  <td class="numeric">{String(c.lon)}</td>
-                  <td class="numeric">{String(c.lat)}</td>
-                  <td>
+                  <td class="numeric" data-label={tr.t('editor.col.lon')}>
+                    {String(c.lon)}
+                  </td>
+                  <td class="numeric" data-label={tr.t('editor.col.lat')}>
+                    {String(c.lat)}
+                  </td>
+                  <td data-label={tr.t('editor.col.site')}>
                     {c.vs30Basis === 'measured'
                       ? `${c.vs30} m/s`
                       : `${c.siteClass} (${c.vs30} m/s)`}
                   </td>
-                  <td class="numeric">
+                  <td class="numeric" data-label={tr.t('editor.col.people')}>
                     {c.population === undefined ? '' : tr.number(c.population)}
                   </td>
-                  <td>{c.coastal ? tr.text('editor.coastalYes') : ''}</td>
+                  <td data-label={c.coastal ? tr.t('editor.col.coastal') : undefined}>
+                    {c.coastal ? tr.text('editor.coastalYes') : ''}
+                  </td>
                   <td class="row-actions">
                     <a href={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}`}>
                       {tr.text('editor.edit', { name: c.name })}
@@ -290,11 +296,11 @@ export function EditorView(props: EditorViewProps) {
               {study.sources.map((s) => (
                 <tr data-source={s.id}>
                   <th scope="row">{s.name}</th>
-                  <td>
+                  <td data-label={tr.t('editor.col.id')}>
                     <code>{s.id}</code>
                   </td>
-                  <td>{tr.text(`editor.kind.${s.kind}`)}</td>
-                  <td>{s.setting}</td>
+                  <td data-label={tr.t('editor.col.kind')}>{tr.text(`editor.kind.${s.kind}`)}</td>
+                  <td data-label={tr.t('editor.col.setting')}>{s.setting}</td>
                   <td class="row-actions">
                     <a href={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}`}>
                       {tr.text('source.edit', { name: s.name })}

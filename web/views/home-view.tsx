@@ -45,7 +45,7 @@ export function HomeView(props: {
                 <th scope="row">
                   <a href={`/studies/${s.id}`}>{s.name}</a>
                 </th>
-                <td>{tr.date(s.updatedAt)}</td>
+                <td data-label={tr.t('home.col.updated')}>{tr.date(s.updatedAt)}</td>
                 <td class="row-actions">
                   <a href={`/studies/${s.id}/rename`}>
                     {tr.text('studyActions.rename', { name: s.name })}

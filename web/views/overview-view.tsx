@@ -196,7 +196,12 @@ export function OverviewView(props: OverviewProps) {
                   const chance = tr.chance(r.chanceVii);
                   return (
                     <tr data-community={r.communityId}>
-                      <td class="numeric" data-key="rank" data-value={r.rank}>
+                      <td
+                        class="numeric"
+                        data-key="rank"
+                        data-value={r.rank}
+                        data-label={tr.t('overview.col.rank')}
+                      >
                         {r.rank}
                       </td>
                       <th scope="row" data-key="name" data-value={r.name}>
@@ -208,6 +213,7 @@ export function OverviewView(props: OverviewProps) {
                           r.bandId,
                         )}
                         data-band={r.bandId}
+                        data-label={tr.t('overview.col.band')}
                       >
                         <BandSwatch tr={tr} bandId={r.bandId} />
                       </td>
@@ -216,16 +222,23 @@ export function OverviewView(props: OverviewProps) {
                         data-key="chance"
                         data-value={r.chanceVii}
                         data-probability={r.chanceVii}
+                        data-label={tr.t('overview.col.chance', { years: props.years })}
                       >
                         {chance.frequency} <span class="percent">({chance.percent})</span>
                       </td>
-                      <td class="numeric" data-key="people" data-value={r.population ?? ''}>
+                      <td
+                        class="numeric"
+                        data-key="people"
+                        data-value={r.population ?? ''}
+                        data-label={tr.t('overview.col.people')}
+                      >
                         {r.population === undefined
                           ? tr.text('overview.unknownPeople')
                           : tr.number(r.population)}
                       </td>
                       <td
                         data-key="fault"
+                        data-label={tr.t('overview.col.fault')}
                         data-value={
                           r.nearestFault === undefined
                             ? ''

@@ -141,20 +141,24 @@ export function ScenarioView(props: ScenarioViewProps) {
                       <th scope="row">
                         <a href={`/studies/${studyId}/communities/${c.communityId}`}>{c.name}</a>
                       </th>
-                      <td class="numeric">{tr.number(c.rrupKm)}</td>
-                      <td>
+                      <td class="numeric" data-label={tr.t('scenario.col.distance')}>
+                        {tr.number(c.rrupKm)}
+                      </td>
+                      <td data-label={tr.t('scenario.col.median')}>
                         {tr.mmi(c.mmi.median)} ·{' '}
                         {tr.text(
                           `mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.median)))}.name` as 'mmi.1.name',
                         )}
                       </td>
-                      <td>
+                      <td data-label={tr.t('scenario.col.high')}>
                         {tr.mmi(c.mmi.p84)} ·{' '}
                         {tr.text(
                           `mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.p84)))}.name` as 'mmi.1.name',
                         )}
                       </td>
-                      <td class="numeric">{tr.number(c.motions.PGA?.median ?? 0, 3)}</td>
+                      <td class="numeric" data-label={tr.t('scenario.col.pga')}>
+                        {tr.number(c.motions.PGA?.median ?? 0, 3)}
+                      </td>
                     </tr>
                   ))}
               </tbody>

@@ -59,15 +59,23 @@ export function TripView(props: TripViewProps) {
             const band = props.bands.get(stop.id);
             return (
               <tr data-community={stop.id}>
-                <td class="numeric">{i + 1}</td>
+                <td class="numeric" data-label={tr.t('trip.col.stop')}>
+                  {i + 1}
+                </td>
                 <th scope="row">
                   <a href={`/studies/${studyId}/communities/${stop.id}`}>
                     {props.names.get(stop.id) ?? stop.id}
                   </a>
                 </th>
-                <td>{band ? <BandSwatch tr={tr} bandId={band} /> : ''}</td>
-                <td class="numeric">{legKm === undefined ? tr.text('trip.start') : km(legKm)}</td>
-                <td class="numeric">{km(sumKm)}</td>
+                <td data-label={tr.t('overview.col.band')}>
+                  {band ? <BandSwatch tr={tr} bandId={band} /> : ''}
+                </td>
+                <td class="numeric" data-label={tr.t('trip.col.leg')}>
+                  {legKm === undefined ? tr.text('trip.start') : km(legKm)}
+                </td>
+                <td class="numeric" data-label={tr.t('trip.col.sofar')}>
+                  {km(sumKm)}
+                </td>
               </tr>
             );
           })}

@@ -150,7 +150,7 @@ export function TsunamiTable(props: {
                 <th scope="row">
                   <a href={`/studies/${props.studyId}/communities/${c.id}`}>{c.name}</a>
                 </th>
-                <td>
+                <td data-label={tr.t('tsunami.rank.arrival')}>
                   {c.firstArrivalMinutes === null || c.latestMinutes === null
                     ? tr.text('tsunami.rank.none')
                     : tr.text('tsunami.rank.minutes', {
@@ -158,7 +158,7 @@ export function TsunamiTable(props: {
                         to: tr.number(c.latestMinutes),
                       })}
                 </td>
-                <td>
+                <td data-label={tr.t('tsunami.rank.ground')}>
                   {g?.kind === 'found' &&
                     tr.text('tsunami.rank.groundAway', {
                       km: km(tr, g.distanceKm),

@@ -27,6 +27,8 @@ function componentValue(tr: Translator, c: PriorityComponent): string {
   switch (c.id) {
     case 'chance':
       return tr.chance(c.value).percent;
+    case 'firmness':
+      return tr.t('priority.firmnessValue', { percent: tr.number(Math.round(c.value * 100)) });
     case 'isolation':
       return tr.t('priority.km', { km: tr.number(c.value) });
     default:
@@ -127,15 +129,23 @@ export function VisitPriorityPanel(props: VisitPriorityPanelProps) {
                     aria-label={tr.t('priority.chooseOne', { name: row.name })}
                   />
                 </td>
-                <td class="numeric">{row.rank}</td>
+                <td class="numeric" data-label={tr.t('overview.col.rank')}>
+                  {row.rank}
+                </td>
                 <th scope="row">
                   <a href={`/studies/${studyId}/communities/${row.priority.communityId}`}>
                     {row.name}
                   </a>
                 </th>
-                <td class="numeric priority-score">{tr.number(row.priority.score, 0)}</td>
+                <td class="numeric priority-score" data-label={tr.t('priority.col.score')}>
+                  {tr.number(row.priority.score, 0)}
+                </td>
                 {row.priority.components.map((c) => (
-                  <td class="numeric" data-component={c.id}>
+                  <td
+                    class="numeric"
+                    data-component={c.id}
+                    data-label={tr.t(`priority.component.${c.id}`, { years })}
+                  >
                     {componentValue(tr, c)}
                     {c.used && (
                       <span class="component-share">
@@ -147,11 +157,11 @@ export function VisitPriorityPanel(props: VisitPriorityPanelProps) {
                     )}
                   </td>
                 ))}
-                <td>
+                <td data-label={tr.t('overview.col.band')}>
                   <BandSwatch tr={tr} bandId={row.bandId} />
                 </td>
                 {props.visitCounts && (
-                  <td class="numeric" data-key="visits">
+                  <td class="numeric" data-key="visits" data-label={tr.t('priority.col.visits')}>
                     {tr.number(props.visitCounts.get(row.priority.communityId) ?? 0)}
                   </td>
                 )}

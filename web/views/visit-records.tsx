@@ -4,7 +4,7 @@ import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 import type { Translator } from '../text/translator.ts';
 import { FieldProblems } from './field-problems.tsx';
 
-/** A community's recorded visits, newest first, with a link to record another. */
+/** A community's recorded visits, newest first, each with a link to delete it (asked first), and a link to record another. */
 export function VisitRecords(props: {
   readonly tr: Translator;
   readonly studyId: string;
@@ -30,17 +30,32 @@ export function VisitRecords(props: {
               <th scope="col">{tr.text('visits.field.topics')}</th>
               <th scope="col">{tr.text('visits.field.followUps')}</th>
               <th scope="col">{tr.text('visits.field.referral')}</th>
+              <td />
             </tr>
           </thead>
           <tbody>
             {visits.map((v) => (
               <tr data-visit={v.id}>
                 <th scope="row">{tr.date(`${v.visitedOn}T12:00:00Z`)}</th>
-                <td>{v.language}</td>
-                <td class="numeric">{tr.number(v.peopleReached)}</td>
-                <td>{v.topics}</td>
-                <td>{v.followUps}</td>
-                <td>{tr.text(`visits.referral.${v.referral}`)}</td>
+                <td data-label={tr.t('visits.field.language')}>{v.language}</td>
+                <td class="numeric" data-label={tr.t('visits.field.peopleReached')}>
+                  {tr.number(v.peopleReached)}
+                </td>
+                <td data-label={tr.t('visits.field.topics')}>{v.topics}</td>
+                <td data-label={tr.t('visits.field.followUps')}>{v.followUps}</td>
+                <td data-label={tr.t('visits.field.referral')}>
+                  {tr.text(`visits.referral.${v.referral}`)}
+                </td>
+                <td>
+                  <a
+                    class="button button-quiet"
+                    href={`/studies/${studyId}/communities/${communityId}/visits/${v.id}/delete`}
+                  >
+                    {tr.text('visits.delete', {
+                      date: tr.date(`${v.visitedOn}T12:00:00Z`),
+                    })}
+                  </a>
+                </td>
               </tr>
             ))}
           </tbody>

@@ -11,6 +11,7 @@ import { runFinished, startPageApp, type PageApp } from '../helpers/page-app.ts'
  */
 let page: PageApp;
 let id: string;
+let runId: string;
 
 beforeAll(async () => {
   page = startPageApp();
@@ -35,7 +36,7 @@ beforeAll(async () => {
     method: 'POST',
     body: new URLSearchParams(),
   });
-  const runId = (started.headers.get('location') as string).split('/').at(-1) as string;
+  runId = (started.headers.get('location') as string).split('/').at(-1) as string;
   expect(await runFinished(page.ctx, runId)).toBe('done');
 }, 120_000);
 afterAll(async () => page?.close());
@@ -56,10 +57,12 @@ describe('visit priority on the overview', () => {
   test('shows every component and follows the weights in the query', async () => {
     const text = await html(`/studies/${id}`);
     expect(text).toContain('id="priority-heading"');
-    for (const component of ['people', 'chance', 'facilities', 'isolation'])
+    for (const component of ['people', 'chance', 'firmness', 'facilities', 'isolation'])
       expect(text).toContain(`data-component="${component}"`);
     // People alone: Vennick Bay (2,900) before Harbour Point (420) before Lisk Head (35).
-    const people = await html(`/studies/${id}?w-people=1&w-chance=0&w-facilities=0&w-isolation=0`);
+    const people = await html(
+      `/studies/${id}?w-people=1&w-chance=0&w-firmness=0&w-facilities=0&w-isolation=0`,
+    );
     expect(rowOrder(people, 'priority-table')).toEqual([
       'vennick-bay',
       'harbour-point',
@@ -67,13 +70,41 @@ describe('visit priority on the overview', () => {
     ]);
     // Isolation alone: Lisk Head (61 km) first, Vennick Bay (3 km) last.
     const isolation = await html(
-      `/studies/${id}?w-people=0&w-chance=0&w-facilities=0&w-isolation=1`,
+      `/studies/${id}?w-people=0&w-chance=0&w-firmness=0&w-facilities=0&w-isolation=1`,
     );
     expect(rowOrder(isolation, 'priority-table')).toEqual([
       'lisk-head',
       'harbour-point',
       'vennick-bay',
     ]);
+  });
+
+  test("shows the band's firmness from the run's band shares and ranks by it alone", async () => {
+    const results = JSON.parse(page.ctx.store.runs.results(runId) as string) as {
+      communities: {
+        communityId: string;
+        band: { id: string };
+        bandRobustness: { bandShares: Record<string, number> };
+      }[];
+    };
+    const firmness = new Map(
+      results.communities.map((c) => [c.communityId, c.bandRobustness.bandShares[c.band.id]!]),
+    );
+    const text = await html(
+      `/studies/${id}?w-people=0&w-chance=0&w-firmness=1&w-facilities=0&w-isolation=0`,
+    );
+    const expected = [...firmness.keys()].sort((a, b) => firmness.get(b)! - firmness.get(a)!);
+    // Ties keep the ranking's input order, so compare the shares in page order, not the ids.
+    expect(rowOrder(text, 'priority-table').map((c) => firmness.get(c))).toEqual(
+      expected.map((c) => firmness.get(c)),
+    );
+    for (const [community, share] of firmness)
+      expect(text).toMatch(
+        new RegExp(
+          `data-community="${community}"[\\s\\S]*?data-component="firmness"[^>]*>${Math.round(share * 100)}% of the weight`,
+        ),
+      );
+    expect(text).toMatch(/name="w-firmness"[^>]*value="1"/);
   });
 
   test('names a weight that is not a number from 0 to 10 and keeps its default', async () => {
@@ -118,7 +149,7 @@ describe('visit records', () => {
     expect(community).toContain('id="visits-heading"');
     expect(community).toContain('posters');
     const overview = await html(`/studies/${id}`);
-    expect(overview).toMatch(/data-community="lisk-head"[\s\S]*?data-key="visits">1</);
+    expect(overview).toMatch(/data-community="lisk-head"[\s\S]*?data-key="visits"[^>]*>1</);
     const csv = await (await page.app.request(`/api/studies/${id}/visits.csv`)).text();
     expect(csv.split('\r\n')[1]).toContain(',"\'=SUM(A1) drills",');
   });
@@ -179,5 +210,41 @@ describe('visit records', () => {
       (await page.app.request(`/api/studies/${id}/visits/${visit.id}`, { method: 'DELETE' }))
         .status,
     ).toBe(404);
+  });
+
+  test('a visit is deleted from the pages after a confirmation, and the list follows', async () => {
+    const created = await page.app.request(`/api/studies/${id}/visits`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({
+        communityId: 'vennick-bay',
+        visitedOn: '2026-06-02',
+        language: 'English',
+        peopleReached: 48,
+        followUps: 'Second session at the harbour hall',
+      }),
+    });
+    expect(created.status).toBe(201);
+    const visit = (await created.json()) as { id: string };
+    const path = `/studies/${id}/communities/vennick-bay/visits/${visit.id}/delete`;
+    const before = await html(`/studies/${id}/communities/vennick-bay`);
+    expect(before).toContain(`href="${path}"`);
+    expect(before).toContain('Delete the visit of');
+    const confirm = await html(path);
+    expect(confirm).toContain('Second session at the harbour hall');
+    expect(confirm).toMatch(new RegExp(`<form method="post" action="${path}"`));
+    expect(page.ctx.store.visits.list(id, 'vennick-bay')).toHaveLength(1);
+    const deleted = await page.app.request(path, { method: 'POST' });
+    expect(deleted.status).toBe(303);
+    expect(deleted.headers.get('location')).toBe(
+      `/studies/${id}/communities/vennick-bay#visits-heading`,
+    );
+    expect(page.ctx.store.visits.list(id, 'vennick-bay')).toHaveLength(0);
+    const after = await html(`/studies/${id}/communities/vennick-bay`);
+    expect(after).not.toContain('Second session at the harbour hall');
+    expect(after).toContain('No visit has been recorded here yet.');
+    expect((await page.app.request(path, { method: 'POST' })).status).toBe(404);
+    await html(path, 404);
+    await html(`/studies/${id}/communities/lisk-head/visits/${visit.id}/delete`, 404);
   });
 });

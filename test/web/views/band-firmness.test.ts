@@ -36,6 +36,38 @@ describe('band firmness in words', () => {
     expect(text).toContain('Le niveau dépend surtout de la forme magnitude–fréquence de Fault A');
   });
 
+  it('names the one band every alternative gives, and starts each sentence with a capital', () => {
+    const steady: BandRobustness = {
+      ...robustness,
+      bandShares: { 'refer-first': 0, 'refer-soon': 1, prepare: 0, inform: 0 },
+      hinges: [
+        {
+          choice: 'groundMotion',
+          setting: 'interface',
+          mmiShift: 0.21,
+          changesBand: false,
+          alternatives: [
+            { value: 'model-a', weight: 0.5, mmi475: 7.62, bandId: 'refer-soon' },
+            { value: 'model-b', weight: 0.5, mmi475: 7.41, bandId: 'refer-soon' },
+          ],
+        },
+      ],
+    };
+    const en = bandFirmnessText(translator('en'), steady);
+    expect(en).toBe(
+      'Of the weight of the choices behind these numbers, 100% gives Refer soon. No single choice moves it to another band. Even the plate-interface ground-motion model, the choice that moves its intensity most, gives Refer soon with every alternative.',
+    );
+    const fr = bandFirmnessText(translator('fr'), steady);
+    expect(fr).toContain(
+      'Aucun choix seul ne change le niveau. Même le modèle de mouvement du sol',
+    );
+    for (const text of [en, fr]) {
+      expect(text).not.toContain('model-a');
+      for (const sentence of text.split(/(?<=\.) /))
+        expect(sentence[0], sentence).toBe(sentence[0]!.toLocaleUpperCase());
+    }
+  });
+
   it('says when no single choice changes the band', () => {
     const steady = {
       ...robustness,
