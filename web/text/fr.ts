@@ -203,4 +203,48 @@ export const FR: Readonly<Partial<Record<TextKey, string>>> = {
   'error.notFound': 'Page introuvable',
   'error.home': 'Aller à la liste des études',
   'map.contourDepth': 'à {depth} km de profondeur',
+
+  // --- Failles depuis un fichier régional (page d’import des failles) ---
+  'faults.title': 'Ajouter des failles depuis un fichier',
+  'faults.link': 'Ajouter des failles depuis un fichier régional',
+  'faults.intro':
+    'Ajoutez à cette étude les failles d’un fichier. Les sources qu’elle a restent. Vérifiez d’abord quels champs du fichier correspondent à ceux de Tremora, et donnez des valeurs pour ce qui manque au fichier. Rien n’est enregistré tant que chaque faille n’est pas valide.',
+  'faults.file': 'Fichier de failles',
+  'faults.fileHelp':
+    'GeoJSON, KML, KMZ ou un shapefile zippé (.zip avec .shp, .dbf et .prj), une ligne par faille.',
+  'faults.read': 'Lire le fichier',
+  'faults.readCount': '{file} : {count} failles lues. Rien n’est encore enregistré.',
+  'faults.mapping': 'Quel champ du fichier contient quoi',
+  'faults.mappingHelp':
+    'Les champs aux noms habituels sont reconnus. Corrigez ceux qui ne vont pas.',
+  'faults.notInFile': '— absent du fichier —',
+  'faults.field.id': 'Identifiant',
+  'faults.field.name': 'Nom',
+  'faults.field.slipRateMmYr': 'Vitesse de glissement (mm/an)',
+  'faults.field.dip': 'Pendage (degrés)',
+  'faults.field.dipDirection': 'Direction du pendage (degrés depuis le nord)',
+  'faults.field.rake': 'Angle de glissement (degrés)',
+  'faults.field.upperDepthKm': 'Profondeur du haut (km)',
+  'faults.field.lowerDepthKm': 'Profondeur du bas (km)',
+  'faults.defaults': 'Valeurs pour ce qui manque au fichier',
+  'faults.defaultsHelp':
+    'Utilisées pour chaque faille dont le fichier ne donne pas la valeur. Le taux de séismes de chaque faille vient de sa vitesse de glissement, entre la plus petite et la plus grande magnitude.',
+  'faults.default.setting': 'Contexte tectonique des failles',
+  'faults.default.dip': 'Pendage (degrés)',
+  'faults.default.rake': 'Angle de glissement (degrés)',
+  'faults.default.upperDepthKm': 'Profondeur du haut (km)',
+  'faults.default.lowerDepthKm': 'Profondeur du bas (km)',
+  'faults.default.slipRateMmYr': 'Vitesse de glissement (mm/an)',
+  'faults.default.bValue': 'Valeur b',
+  'faults.default.mMin': 'Plus petite magnitude',
+  'faults.default.mMax': 'Plus grande magnitude',
+  'faults.problems': '{count} valeurs à corriger avant d’ajouter les failles',
+  'faults.col.feature': 'Entité',
+  'faults.col.name': 'Faille',
+  'faults.col.field': 'Champ',
+  'faults.col.from': 'Source de la valeur',
+  'faults.col.problem': 'Problème',
+  'faults.check': 'Vérifier à nouveau',
+  'faults.save': 'Ajouter les {count} failles',
+  // --- fin de la page d’import des failles ---
 };
