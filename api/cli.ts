@@ -59,6 +59,15 @@ const VERBS: Readonly<Record<string, Verb>> = {
     load: async () =>
       import('./cli/tsunami.ts').then((m) => ({ usage: m.TSUNAMI_USAGE, run: m.tsunamiVerb })),
   },
+  'import-faults': {
+    synopsis:
+      'tremora import-faults STUDY FILE [--map FIELD=ATTRIBUTE]... [defaults] [--dry-run] [--json]',
+    load: async () =>
+      import('./cli/import-faults.ts').then((m) => ({
+        usage: m.IMPORT_FAULTS_USAGE,
+        run: m.importFaultsVerb,
+      })),
+  },
   worker: {
     synopsis: 'tremora worker [--threads N]',
     load: async () =>

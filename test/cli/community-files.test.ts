@@ -2,19 +2,10 @@ import { mkdtemp, readFile, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { runCli } from '../../api/cli.ts';
-import type { Io } from '../../api/cli/output.ts';
+import { runCapturing as run } from './helpers/run-cli.ts';
 import { kmlText, xlsxBytes } from '../study/community-files/fixtures.ts';
 
 const DEMO = new URL('../../data-demo/demo.study.json', import.meta.url).pathname;
-
-async function run(...argv: string[]): Promise<{ code: number; out: string; err: string }> {
-  let out = '';
-  let err = '';
-  const io: Io = { out: (t) => (out += `${t}\n`), err: (t) => (err += `${t}\n`) };
-  const code = await runCli(argv, io);
-  return { code, out, err };
-}
 
 /** The demo study with `communities` naming `fileName`, written with that file beside it. */
 async function studyWith(fileName: string, content: Uint8Array | string): Promise<string> {

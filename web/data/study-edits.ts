@@ -4,6 +4,7 @@ import type { ModelCatalog } from '../../api/engine/motion/catalog.ts';
 import type { StoredInputs } from '../../api/operations/study-input.ts';
 import { validateDraft } from '../../api/operations/study-input.ts';
 import { IMPORTED_COMMUNITIES_FILE } from '../../api/operations/study-records.ts';
+import { withFaults } from '../../api/study/fault-files/add-faults.ts';
 import { parseJsonText } from '../../api/study/json-text.ts';
 import { sourceFromForm, type SourceForm } from './source-form.ts';
 
@@ -196,4 +197,13 @@ export function removeSource(
   list.splice(index, 1);
   const document = { ...inputs.raw, sources: { type: 'FeatureCollection', features: list } };
   return validated(document, models, inputs.communitiesCsv);
+}
+
+/** Adds source features after the study's own (which are kept) and validates the whole study. */
+export function addSources(
+  inputs: StoredInputs,
+  features: readonly Record<string, unknown>[],
+  models: ModelCatalog,
+): EditOutcome {
+  return validated(withFaults(inputs.raw, features), models, inputs.communitiesCsv);
 }

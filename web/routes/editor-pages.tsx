@@ -19,7 +19,8 @@ import {
 import { CommunityFormView } from '../views/community-form-view.tsx';
 import { EditorView, type UploadProblem } from '../views/editor-view.tsx';
 import { MessageView } from '../views/message-view.tsx';
-import { field, fileField, type PageKit } from './page-kit.ts';
+import { field, fileField, type PageKit, uploadedOrCarried } from './page-kit.ts';
+import { faultImportPages } from './fault-import-pages.tsx';
 import { sourcePages } from './source-pages.tsx';
 
 const EMPTY_FORM: CommunityForm = {
@@ -287,14 +288,7 @@ export function editorPages(app: Hono, kit: PageKit): void {
     if ('response' in loaded) return loaded.response;
     const tr = kit.tr(c);
     const form = await c.req.parseBody();
-    const file = fileField(form, 'file');
-    const carried = field(form, 'fileData');
-    const carriedName = field(form, 'fileName');
-    const upload = file
-      ? { bytes: new Uint8Array(await file.arrayBuffer()), name: file.name }
-      : carried && carriedName
-        ? { bytes: new Uint8Array(Buffer.from(carried, 'base64')), name: carriedName }
-        : undefined;
+    const upload = await uploadedOrCarried(form);
     if (!upload)
       return editor(c, loaded.data, {
         problem: {
@@ -326,10 +320,14 @@ export function editorPages(app: Hono, kit: PageKit): void {
   });
   app.post('/studies/:id/edit/sources-geojson', upload('sources'));
 
-  sourcePages(app, kit, {
+  const steps = {
     load,
     afterBody,
-    write: (data, outcome) => void write(data, outcome),
-    editorWithNotice: (c, data, notice) => editor(c, data, { notice }),
-  });
+    write: (data: StudyData & { ok: true }, outcome: EditOutcome & { ok: true }) =>
+      void write(data, outcome),
+    editorWithNotice: (c: Context, data: StudyData & { ok: true }, notice: readonly InputIssue[]) =>
+      editor(c, data, { notice }),
+  };
+  sourcePages(app, kit, steps);
+  faultImportPages(app, kit, steps);
 }

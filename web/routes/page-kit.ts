@@ -98,3 +98,20 @@ export function fileField(
   const value = form[name];
   return value instanceof File && value.size > 0 ? value : undefined;
 }
+
+/**
+ * The file a form sends: chosen in its `file` field, or carried back from an earlier answer as
+ * `fileName` and `fileData` (base64) so that a choice form need not ask for it again.
+ */
+export async function uploadedOrCarried(
+  form: Record<string, string | File | (string | File)[]>,
+): Promise<{ bytes: Uint8Array; name: string; chosen: boolean } | undefined> {
+  const file = fileField(form, 'file');
+  if (file)
+    return { bytes: new Uint8Array(await file.arrayBuffer()), name: file.name, chosen: true };
+  const carried = field(form, 'fileData');
+  const carriedName = field(form, 'fileName');
+  return carried && carriedName
+    ? { bytes: new Uint8Array(Buffer.from(carried, 'base64')), name: carriedName, chosen: false }
+    : undefined;
+}

@@ -723,6 +723,48 @@ export const EN = {
     'This deletes the record of this visit only. It cannot be undone. The other visits stay.',
   'visits.deleteButton': 'Delete this visit',
   'visits.keep': 'Keep it',
+  // --- Faults from a regional file (the fault import page) ---
+  'faults.title': 'Add faults from a file',
+  'faults.link': 'Add faults from a regional file',
+  'faults.intro':
+    'Add the faults of a fault file to this study. The sources it has stay. First check how the file’s fields match Tremora’s, and give values for what the file lacks. Nothing is saved until every fault is valid.',
+  'faults.file': 'Fault file',
+  'faults.fileHelp':
+    'GeoJSON, KML, KMZ or a zipped shapefile (.zip with .shp, .dbf and .prj), one line per fault.',
+  'faults.read': 'Read the file',
+  'faults.readCount': '{file}: {count} faults read. Nothing is saved yet.',
+  'faults.mapping': 'Which field of the file holds what',
+  'faults.mappingHelp': 'Fields with usual names are matched for you. Change any that are wrong.',
+  'faults.notInFile': '— not in the file —',
+  'faults.field.id': 'Id',
+  'faults.field.name': 'Name',
+  'faults.field.slipRateMmYr': 'Slip rate (mm/yr)',
+  'faults.field.dip': 'Dip (degrees)',
+  'faults.field.dipDirection': 'Dip direction (degrees from north)',
+  'faults.field.rake': 'Rake (degrees)',
+  'faults.field.upperDepthKm': 'Upper depth (km)',
+  'faults.field.lowerDepthKm': 'Lower depth (km)',
+  'faults.defaults': 'Values for what the file lacks',
+  'faults.defaultsHelp':
+    'Used for every fault whose file gives no value. Each fault’s rate of earthquakes comes from its slip rate, between the smallest and largest magnitude.',
+  'faults.default.setting': 'Tectonic setting of the faults',
+  'faults.default.dip': 'Dip (degrees)',
+  'faults.default.rake': 'Rake (degrees)',
+  'faults.default.upperDepthKm': 'Upper depth (km)',
+  'faults.default.lowerDepthKm': 'Lower depth (km)',
+  'faults.default.slipRateMmYr': 'Slip rate (mm/yr)',
+  'faults.default.bValue': 'b-value',
+  'faults.default.mMin': 'Smallest magnitude',
+  'faults.default.mMax': 'Largest magnitude',
+  'faults.problems': '{count} values to fix before the faults can be added',
+  'faults.col.feature': 'Feature',
+  'faults.col.name': 'Fault',
+  'faults.col.field': 'Field',
+  'faults.col.from': 'From',
+  'faults.col.problem': 'Problem',
+  'faults.check': 'Check again',
+  'faults.save': 'Add the {count} faults',
+  // --- end of the fault import page ---
 } as const;
 
 export type TextKey = keyof typeof EN;

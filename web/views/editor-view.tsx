@@ -266,6 +266,9 @@ export function EditorView(props: EditorViewProps) {
         <p>
           <a class="button" href={`/studies/${studyId}/edit/new-source`}>
             {tr.text('source.add')}
+          </a>{' '}
+          <a class="button" href={`/studies/${studyId}/edit/import-faults`}>
+            {tr.text('faults.link')}
           </a>
         </p>
         {studyPoints(study).length > 0 && (

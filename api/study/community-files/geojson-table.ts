@@ -6,15 +6,10 @@ import { CommunityFileProblem } from './file-problem.ts';
 import { pointRows } from './point-rows.ts';
 
 /**
- * GeoJSON points as a table: a FeatureCollection (or one Feature) whose properties are the
- * columns; positions WGS84 `[lon, lat]` as RFC 7946 requires. Features are named `[feature n]`.
+ * The features of a GeoJSON FeatureCollection (or of one Feature); `what` names what they should
+ * be, for the message when the text is some other JSON or holds no feature.
  */
-export function geojsonTable(
-  text: string,
-  fileName: string,
-  rootPath: readonly PropertyKey[],
-  issues: IssueList,
-): CommunityTable {
+export function geojsonFeatures(text: string, fileName: string, what: string): Feature[] {
   const parsed = parseJsonText(text, fileName);
   if (!parsed.ok) throw new CommunityFileProblem(`${parsed.issue.path}: ${parsed.issue.message}`);
   const value = parsed.value as { type?: unknown; features?: unknown };
@@ -26,10 +21,26 @@ export function geojsonTable(
         : undefined;
   if (!features)
     throw new CommunityFileProblem(
-      `${fileName}: expected a GeoJSON FeatureCollection of points, got ${value?.type === undefined ? 'JSON without a "type"' : `a ${String(value.type)}`}`,
+      `${fileName}: expected a GeoJSON FeatureCollection of ${what}s, got ${value?.type === undefined ? 'JSON without a "type"' : `a ${String(value.type)}`}`,
     );
   if (features.length === 0)
-    throw new CommunityFileProblem(`${fileName}: expected at least one point feature, found none`);
+    throw new CommunityFileProblem(
+      `${fileName}: expected at least one ${what} feature, found none`,
+    );
+  return features;
+}
+
+/**
+ * GeoJSON points as a table: its features' properties are the columns; positions WGS84
+ * `[lon, lat]` as RFC 7946 requires. Features are named `[feature n]`.
+ */
+export function geojsonTable(
+  text: string,
+  fileName: string,
+  rootPath: readonly PropertyKey[],
+  issues: IssueList,
+): CommunityTable {
+  const features = geojsonFeatures(text, fileName, 'point');
   const { columns, rows } = pointRows(features, 'feature', fileName, rootPath, issues);
   return { fileName, format: 'GeoJSON', columns, rows, hasGeometry: true };
 }

@@ -42,13 +42,18 @@ export function detectFormat(fileName: string, bytes: Uint8Array): CommunityFile
     if (names.some((n) => n.endsWith('.kml'))) return 'kmz';
     return 'shapefile';
   }
+  return textKind(bytes) ?? 'csv';
+}
+
+/** Whether a text file looks like XML (KML) or JSON (GeoJSON) by its first characters. */
+export function textKind(bytes: Uint8Array): 'kml' | 'geojson' | undefined {
   const head = new TextDecoder()
     .decode(bytes.subarray(0, 200))
     .replace(/^\uFEFF/, '')
     .trimStart();
   if (head.startsWith('<')) return 'kml';
   if (head.startsWith('{')) return 'geojson';
-  return 'csv';
+  return undefined;
 }
 
 /**

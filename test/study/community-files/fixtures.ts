@@ -126,6 +126,14 @@ export function pointShapefile(
     shp.setFloat64(at + 20, y, true);
   });
 
+  return { shp: new Uint8Array(shp.buffer), dbf: dbfBytes(fields, records) };
+}
+
+/** A dBASE III table (.dbf) of the given fields and records. */
+export function dbfBytes(
+  fields: readonly DbfField[],
+  records: readonly (readonly (string | number)[])[],
+): Uint8Array {
   const headerLength = 32 + fields.length * 32 + 1;
   const recordLength = 1 + fields.reduce((n, f) => n + f.width, 0);
   const dbf = new Uint8Array(headerLength + records.length * recordLength + 1);
@@ -154,7 +162,7 @@ export function pointShapefile(
     });
   });
   dbf[dbf.length - 1] = 0x1a;
-  return { shp: new Uint8Array(shp.buffer), dbf };
+  return dbf;
 }
 
 /**

@@ -1,0 +1,13 @@
+import { runCli } from '../../../api/cli.ts';
+import type { Io } from '../../../api/cli/output.ts';
+
+/** Runs the CLI in-process with its output captured: exit code, standard output and standard error. */
+export async function runCapturing(
+  ...argv: string[]
+): Promise<{ code: number; out: string; err: string }> {
+  let out = '';
+  let err = '';
+  const io: Io = { out: (t) => (out += `${t}\n`), err: (t) => (err += `${t}\n`) };
+  const code = await runCli(argv, io);
+  return { code, out, err };
+}
