@@ -38,6 +38,8 @@ export interface MapFrameOptions {
   readonly include?: readonly LonLat[];
   /** What the map must show: everything (default), or the communities and outline only (sources may run off the edge). */
   readonly fit?: 'everything' | 'communities';
+  /** A square around one place instead (a village's own map): what lies outside is clipped. */
+  readonly around?: { readonly center: LonLat; readonly radiusKm: number };
 }
 
 /** Every coordinate of the study that a map shows: communities, sources, outline. */
@@ -66,7 +68,15 @@ export function mapFrame(
           ...(study.outline ? { outline: study.outline } : {}),
         })
       : studyPoints(study);
-  const points = [...shown, ...(options.include ?? [])].map((p) => local.toLocal(p));
+  const around = options.around;
+  const middle = around ? local.toLocal(around.center) : undefined;
+  const points =
+    around && middle
+      ? [-1, 1].map((k) => ({
+          x: middle.x + k * around.radiusKm,
+          y: middle.y + k * around.radiusKm,
+        }))
+      : [...shown, ...(options.include ?? [])].map((p) => local.toLocal(p));
   let minX = Infinity,
     maxX = -Infinity,
     minY = Infinity,

@@ -13,6 +13,7 @@ export function staticFiles(app: Hono): void {
   const css = `${paletteCss()}\n${read('tremora.css')}`;
   const script = read('tremora.js');
   const handoutCss = read('handout.css');
+  const posterCss = read('poster.css');
   const cache = { 'Cache-Control': 'no-cache' };
 
   app.get('/static/tremora.css', (c) =>
@@ -23,5 +24,8 @@ export function staticFiles(app: Hono): void {
   );
   app.get('/static/handout.css', (c) =>
     c.body(handoutCss, 200, { 'Content-Type': 'text/css; charset=utf-8', ...cache }),
+  );
+  app.get('/static/poster.css', (c) =>
+    c.body(posterCss, 200, { 'Content-Type': 'text/css; charset=utf-8', ...cache }),
   );
 }

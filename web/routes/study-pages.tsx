@@ -26,7 +26,9 @@ import { DraftNotice } from '../views/draft-notice.tsx';
 import { MessageView } from '../views/message-view.tsx';
 import { OverviewView } from '../views/overview-view.tsx';
 import { RunView } from '../views/run-view.tsx';
+import { villageFrame } from '../maps/village-map.tsx';
 import { mapPages } from './map-pages.tsx';
+import { materialPages } from './material-pages.tsx';
 import type { PageKit } from './page-kit.ts';
 
 /** Map sizes, px: the overview's map and the community page's smaller one. */
@@ -275,7 +277,9 @@ export function studyPages(app: Hono, kit: PageKit): void {
         tr={tr}
         path={kit.here(c)}
         studyId={id}
+        study={study}
         data={page}
+        frame={villageFrame(study, page.community, page.result.nearestFaults)}
         provenance={screening.results.provenance}
         printedAt={new Date().toISOString()}
         {...(found.felt ? { felt: found.felt } : {})}
@@ -283,4 +287,6 @@ export function studyPages(app: Hono, kit: PageKit): void {
       />,
     );
   });
+
+  materialPages(app, kit, communityContext);
 }

@@ -765,6 +765,35 @@ export const EN = {
   'faults.check': 'Check again',
   'faults.save': 'Add the {count} faults',
   // --- end of the fault import page ---
+  // ---- Session material: the handout's village map and picture strip, the village poster,
+  // ---- and the images for slides (web/views/handout-view.tsx, poster-view.tsx,
+  // ---- web/routes/material-pages.tsx).
+  'material.mapHeading': 'Faults and the plate boundary near {name}',
+  'material.mapCaption':
+    'Map of the area around {name}. A solid line is a fault that reaches the surface. The thick dashed line is the plate boundary, where one plate slides under the other.',
+  'material.plateBoundary': 'The plate boundary ({name}) meets the surface {place}.',
+  'material.boundaryPointer': 'Plate boundary, {km} km this way',
+  'material.intensity':
+    'Intensity, written as a Roman numeral from I to XII, says how strongly the ground shakes at one place: what people feel and what happens to buildings.',
+  'material.pictures': 'What each level of shaking means',
+  'material.picture.4': 'A hanging lamp swings. Cups and windows rattle.',
+  'material.picture.5': 'Things fall off shelves.',
+  'material.picture.6': 'Pictures hang crooked. Plaster cracks. People run outside.',
+  'material.picture.7': 'Chimneys break. Walls crack.',
+  'material.picture.8': 'Weak buildings partly fall down.',
+  'material.poster': 'Print the poster (A3)',
+  'material.posterTitle': '{name}: earthquakes and what to do',
+  'material.posterHint': 'Print on A3 paper, upright. It reads in black and white.',
+  'material.posterBack': 'Back to the community page',
+  'material.posterLevels': 'Shaking that could come here',
+  'material.posterDo': 'When the ground shakes',
+  'material.images': 'Images for slides',
+  'material.imagesIntro':
+    'Each picture as SVG (sharp at any size, for slides and print) or PNG (for any program).',
+  'material.image.map': 'Map of the area',
+  'material.image.curve': 'Hazard curve',
+  'material.image.cards': 'What shaking would feel like',
+  'material.cardsTitle': 'What shaking would feel like in {name}',
 } as const;
 
 export type TextKey = keyof typeof EN;

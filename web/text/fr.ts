@@ -256,4 +256,32 @@ export const FR: Readonly<Partial<Record<TextKey, string>>> = {
   'faults.check': 'Vérifier à nouveau',
   'faults.save': 'Ajouter les {count} failles',
   // --- fin de la page d’import des failles ---
+  // ---- Supports de séance : carte du village et vignettes de la fiche, affiche du village,
+  // ---- images pour les diapositives.
+  'material.mapHeading': 'Les failles et la limite des plaques près de {name}',
+  'material.mapCaption':
+    'Carte des environs de {name}. Un trait plein est une faille qui atteint la surface. Le gros trait tireté est la limite des plaques, là où une plaque glisse sous l’autre.',
+  'material.plateBoundary': 'La limite des plaques ({name}) atteint la surface {place}.',
+  'material.boundaryPointer': 'Limite des plaques, à {km} km par ici',
+  'material.intensity':
+    'L’intensité, écrite en chiffres romains de I à XII, dit la force des secousses en un lieu : ce que les gens ressentent et ce qui arrive aux bâtiments.',
+  'material.pictures': 'Ce que veut dire chaque niveau de secousse',
+  'material.picture.4': 'Une lampe suspendue se balance. Les tasses et les vitres tremblent.',
+  'material.picture.5': 'Des objets tombent des étagères.',
+  'material.picture.6': 'Les tableaux penchent. Le plâtre se fissure. Les gens sortent en courant.',
+  'material.picture.7': 'Les cheminées se brisent. Les murs se fissurent.',
+  'material.picture.8': 'Les bâtiments fragiles s’effondrent en partie.',
+  'material.poster': 'Imprimer l’affiche (A3)',
+  'material.posterTitle': '{name} : les séismes et que faire',
+  'material.posterHint': 'Imprimez sur du papier A3, à la verticale. Elle se lit en noir et blanc.',
+  'material.posterBack': 'Retour à la page de la communauté',
+  'material.posterLevels': 'Les secousses qui pourraient venir ici',
+  'material.posterDo': 'Quand le sol tremble',
+  'material.images': 'Images pour les diapositives',
+  'material.imagesIntro':
+    'Chaque image en SVG (nette à toute taille, pour les diapositives et l’impression) ou en PNG (pour tout logiciel).',
+  'material.image.map': 'Carte des environs',
+  'material.image.curve': 'Courbe d’aléa',
+  'material.image.cards': 'Ce que l’on ressentirait',
+  'material.cardsTitle': 'Ce que l’on ressentirait à {name}',
 };

@@ -19,6 +19,7 @@ import type { TsunamiPageResult } from '../data/tsunami-data.ts';
 import { TsunamiTime } from './tsunami-time.tsx';
 import { CommunityDetails } from './community-details.tsx';
 import { VisitRecords } from './visit-records.tsx';
+import { SlideImageLinks } from './slide-image-links.tsx';
 import type { VisitRecord } from '../../api/store/visit-repository.ts';
 
 export interface CommunityViewProps {
@@ -45,6 +46,8 @@ export function Headline(props: {
   readonly tr: Translator;
   readonly data: CommunityPageData;
   readonly name: string;
+  /** The longer explanation of MMI (the handout and poster give their own one sentence). */
+  readonly explainMmi?: boolean;
 }) {
   const { tr, data } = props;
   const vii = tr.chance(data.chances.VII);
@@ -59,7 +62,7 @@ export function Headline(props: {
         })}
       </p>
       <p>{tr.text('community.headlineStrongWhat')}</p>
-      <p class="mmi-explain">{tr.text('mmi.explain')}</p>
+      {props.explainMmi !== false && <p class="mmi-explain">{tr.text('mmi.explain')}</p>}
       <p class="other-chances-title">{tr.text('community.otherChances', { years: data.years })}</p>
       <ul class="other-chances">
         {(['VI', 'VII', 'VIII'] as const).map((roman) => {
@@ -213,6 +216,9 @@ export function CommunityView(props: CommunityViewProps) {
         <a class="button" href={`/studies/${studyId}/communities/${community.id}/handout`}>
           {tr.text('community.handout')}
         </a>{' '}
+        <a class="button" href={`/studies/${studyId}/communities/${community.id}/poster`}>
+          {tr.text('material.poster')}
+        </a>{' '}
         <a
           class="button"
           href={`/studies/${studyId}/scenario${data.sources[0]?.sourceId ? `?sourceId=${encodeURIComponent(data.sources[0].sourceId)}` : ''}`}
@@ -328,6 +334,12 @@ export function CommunityView(props: CommunityViewProps) {
           </details>
         </section>
       )}
+      <SlideImageLinks
+        tr={tr}
+        studyId={studyId}
+        communityId={community.id}
+        hasCurve={curve !== undefined}
+      />
       <FeltList
         tr={tr}
         studyId={studyId}

@@ -1,21 +1,26 @@
 import type { CommunityFeltHistory } from '../../api/engine/catalog/felt-history.ts';
-import type { ScreeningBandId } from '../../api/engine/intensity/screening-band.ts';
+import type { Study } from '../../api/engine/model.ts';
 import type { Provenance } from '../../api/engine/results.ts';
 import type { CommunityPageData } from '../data/community-data.ts';
-import { BandSwatch } from '../layout/band-swatch.tsx';
+import type { MapFrame } from '../maps/map-frame.ts';
 import { LANGUAGES, type Translator } from '../text/translator.ts';
-import type { TextKey } from '../text/en.ts';
 import { FeltList } from './felt-list.tsx';
 import { Headline, ProvenanceLine, ShakingLevels } from './community-view.tsx';
 import { SafetyAdvice } from './safety-advice.tsx';
 import type { TsunamiPageResult } from '../data/tsunami-data.ts';
 import { TsunamiTime } from './tsunami-time.tsx';
+import { IntensityStrip } from './intensity-pictograms.tsx';
+import { VillageMapSection } from './village-map-section.tsx';
 
 export interface HandoutViewProps {
   readonly tr: Translator;
   readonly path: string;
   readonly studyId: string;
+  /** The study as screened (its faults and places for the village map). */
+  readonly study: Study;
   readonly data: CommunityPageData;
+  /** The village map's frame (maps/village-map.tsx). */
+  readonly frame: MapFrame;
   readonly provenance: Provenance;
   /** When the handout was made (ISO), printed on it. */
   readonly printedAt: string;
@@ -29,11 +34,11 @@ export interface HandoutViewProps {
  * and the provenance sit in a table footer that Chromium repeats at the foot of every printed
  * page (a <tfoot> of a table split across pages; CSS 2.1 section 17.2, display
  * table-footer-group). Boxes of advice are kept whole on one page (break-inside: avoid).
+ * It is for residents: no screening band or other planner's label appears on it.
  */
 export function HandoutView(props: HandoutViewProps) {
   const { tr, data } = props;
-  const { community, result } = data;
-  const bandId = result.band.id as ScreeningBandId;
+  const { community } = data;
   const top = data.sources
     .filter((s) => s.sourceId !== null)
     .slice(0, 3)
@@ -89,11 +94,7 @@ export function HandoutView(props: HandoutViewProps) {
               <td>
                 <main id="main" tabindex={-1} class="handout">
                   <h1>{tr.text('handout.title', { name: community.name })}</h1>
-                  <p class="band-line">
-                    {tr.text('band.label')}: <BandSwatch tr={tr} bandId={bandId} /> —{' '}
-                    {tr.text(`band.${bandId}.meaning` as TextKey)}
-                  </p>
-                  <Headline tr={tr} data={data} name={community.name} />
+                  <Headline tr={tr} data={data} name={community.name} explainMmi={false} />
                   {props.tsunami && (
                     <TsunamiTime
                       tr={tr}
@@ -105,22 +106,22 @@ export function HandoutView(props: HandoutViewProps) {
                   )}
                   <section aria-labelledby="h-levels">
                     <h2 id="h-levels">{tr.text('community.levels')}</h2>
+                    <p class="intensity-sentence">{tr.text('material.intensity')}</p>
                     <ShakingLevels tr={tr} data={data} headingLevel={2} compact={true} />
                     {top && <p>{tr.text('handout.topSources', { sources: top })}</p>}
                   </section>
-                  {result.nearestFaults.length > 0 && (
-                    <section aria-labelledby="h-faults">
-                      <h2 id="h-faults">{tr.text('community.faults')}</h2>
-                      <ul class="faults">
-                        {result.nearestFaults.map((f) => (
-                          <li>
-                            <strong>{f.name}</strong>:{' '}
-                            {tr.place(f.distanceKm, f.bearingDeg, f.depthBelowKm)}
-                          </li>
-                        ))}
-                      </ul>
-                    </section>
-                  )}
+                  <section aria-labelledby="h-pictures" class="pictures">
+                    <h2 id="h-pictures">{tr.text('material.pictures')}</h2>
+                    <IntensityStrip tr={tr} />
+                  </section>
+                  <VillageMapSection
+                    tr={tr}
+                    study={props.study}
+                    data={data}
+                    frame={props.frame}
+                    idPrefix="village-map"
+                    headingLevel={2}
+                  />
                   {props.felt && props.felt.history.felt.length > 0 && (
                     <FeltList
                       tr={tr}
