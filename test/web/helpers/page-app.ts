@@ -12,12 +12,16 @@ import { tempDir } from '../../service/helpers/service-process.ts';
 export interface PageApp {
   readonly app: Hono;
   readonly ctx: ServiceContext;
+  /** The data folder: the database, and text/ for imported translations. */
+  readonly dataDir: string;
   close(): Promise<void>;
 }
 
 export interface StartPageAppOptions {
   /** The service's TREMORA_TOKEN, for both the token check and the access page. */
   readonly token?: string;
+  /** The shipped text bundles' folder (default: web/text/bundles/). */
+  readonly textDir?: string;
 }
 
 export function startPageApp(options: StartPageAppOptions = {}): PageApp {
@@ -35,13 +39,18 @@ export function startPageApp(options: StartPageAppOptions = {}): PageApp {
     workBudget: 1_000_000_000,
   };
   const app = createApp(ctx, {
-    pages: createPages(ctx, { token: options.token }),
+    pages: createPages(ctx, {
+      token: options.token,
+      textDir: options.textDir,
+      importedTextDir: `${dir.path}/text`,
+    }),
     logError: () => {},
     ...(options.token === undefined ? {} : { token: options.token }),
   });
   return {
     app,
     ctx,
+    dataDir: dir.path,
     close: async () => {
       await Promise.all([runPool.close(), quickPool.close()]);
       store.close();
