@@ -28,6 +28,11 @@ describe('coverage: what each language lacks, and where it shows', () => {
     ]);
   });
 
+  test('the shipped French is complete', () => {
+    const fr = coverage(shippedTextBundles()).find((c) => c.language.code === 'fr');
+    expect(fr?.missing.map((m) => m.key)).toEqual([]);
+  });
+
   test('every key prefix of the English bundle has its pages in the map', () => {
     const prefixes = [...new Set(keys.map(prefixOf))];
     expect(prefixes.filter((p) => !(p in PAGES_BY_PREFIX))).toEqual([]);
