@@ -1,7 +1,9 @@
 import type { AddressInfo } from 'node:net';
+import { dirname, join } from 'node:path';
 import { modelCatalog } from './engine/motion/registry.ts';
 import { startScreening } from './operations/start-screening.ts';
 import { createPages } from '../web/pages.tsx';
+import { BundleFileError } from '../web/text/text-bundles.ts';
 import { createApp } from './service/app.ts';
 import { answerClientError } from './service/client-error.ts';
 import { ConfigError, readConfig, type ServiceConfig } from './service/config.ts';
@@ -107,8 +109,25 @@ const context = {
   quickLimitS: config.quickLimitS,
   ...(queue ? { queue } : {}),
 };
+/** The pages; a text bundle that cannot be read stops the start with its file and problem. */
+function createPagesOrExit(): ReturnType<typeof createPages> {
+  try {
+    return createPages(context, {
+      token: config.token,
+      // Imported translations live beside the SQLite file (README, Translating Tremora).
+      importedTextDir:
+        config.databasePath === ':memory:' ? undefined : join(dirname(config.databasePath), 'text'),
+    });
+  } catch (error) {
+    if (!(error instanceof BundleFileError)) throw error;
+    console.error(`tremora: cannot start: ${error.message}`);
+    store.close();
+    process.exit(2);
+  }
+}
+
 const app = createApp(context, {
-  pages: createPages(context, { token: config.token }),
+  pages: createPagesOrExit(),
   ...(config.token === undefined ? {} : { token: config.token }),
   ...(config.allowedHosts === undefined ? {} : { allowedHosts: config.allowedHosts }),
 });

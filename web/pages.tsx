@@ -3,13 +3,14 @@ import type { ServiceContext } from '../api/operations/service-context.ts';
 import { accessPages } from './routes/access-pages.tsx';
 import { catalogPages } from './routes/catalog-pages.tsx';
 import { editorPages } from './routes/editor-pages.tsx';
+import { languagePages } from './routes/language-pages.tsx';
 import { LANGUAGE_COOKIE, pageKit, safeBackPath } from './routes/page-kit.ts';
 import { scenarioPages } from './routes/scenario-pages.tsx';
 import { staticFiles } from './routes/static-files.ts';
 import { studyPages } from './routes/study-pages.tsx';
 import { studyRecordPages } from './routes/study-record-pages.tsx';
 import { visitPages } from './routes/visit-pages.tsx';
-import { isLanguage } from './text/translator.ts';
+import { loadTextBundles } from './text/text-bundles.ts';
 import { HomeView } from './views/home-view.tsx';
 import { LimitsView } from './views/limits-view.tsx';
 import { MessageView } from './views/message-view.tsx';
@@ -20,6 +21,14 @@ const LANGUAGE_COOKIE_MAX_AGE_S = 365 * 24 * 3600;
 export interface CreatePagesOptions {
   /** The service's TREMORA_TOKEN, when it has one: the access page checks it (routes/access-pages.tsx). */
   readonly token?: string | undefined;
+  /** The shipped text bundles' folder (default: TREMORA_TEXT_DIR, else web/text/bundles/). */
+  readonly textDir?: string | undefined;
+  /**
+   * Where translations imported from the Languages page are kept and read from at start-up
+   * (the service gives its data folder's text/, beside the SQLite file); undefined: imports
+   * are refused.
+   */
+  readonly importedTextDir?: string | undefined;
 }
 
 /**
@@ -29,7 +38,8 @@ export interface CreatePagesOptions {
  */
 export function createPages(ctx: ServiceContext, options: CreatePagesOptions = {}): Hono {
   const app = new Hono();
-  const kit = pageKit(ctx);
+  const folders = { textDir: options.textDir, importedDir: options.importedTextDir };
+  const kit = pageKit(ctx, loadTextBundles(folders));
 
   staticFiles(app);
 
@@ -50,7 +60,7 @@ export function createPages(ctx: ServiceContext, options: CreatePagesOptions = {
   app.get('/language', (c) => {
     const lang = c.req.query('lang');
     const back = safeBackPath(c.req.query('back'));
-    if (isLanguage(lang)) {
+    if (kit.bundles.has(lang)) {
       c.header(
         'Set-Cookie',
         `${LANGUAGE_COOKIE}=${lang}; Path=/; Max-Age=${LANGUAGE_COOKIE_MAX_AGE_S}; SameSite=Lax`,
@@ -67,6 +77,7 @@ export function createPages(ctx: ServiceContext, options: CreatePagesOptions = {
   editorPages(app, kit);
   catalogPages(app, kit);
   visitPages(app, kit);
+  languagePages(app, kit, folders);
 
   // Unknown pages get a page; unknown API paths keep the API's JSON 404.
   app.get('*', (c) => {

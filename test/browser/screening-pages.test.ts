@@ -293,15 +293,18 @@ describe('the demo coast in a browser', { timeout: 180_000 }, () => {
     await checkView('catalog with a fit');
   });
 
-  test('the language switch on every page: French where translated, English where not', async () => {
+  test('the language switch on every page: the French bundle, read from its file', async () => {
     await page.goto(`${service.url}/limits`);
     await checkView('limits');
     await page.selectOption('#lang-select', 'fr');
     await page.getByRole('button', { name: en.t('lang.change') }).click();
     await page.waitForURL(`${service.url}/limits`);
     expect(await page.locator('html').getAttribute('lang')).toBe('fr');
-    expect(await page.locator('h1').textContent()).toBe('Les limites d’un dépistage');
-    expect(await page.locator('main .lead').textContent()).toBe(en.t('limits.intro'));
+    expect(await page.locator('h1').textContent()).toBe(
+      'Les limites d’une évaluation préliminaire',
+    );
+    expect(await page.locator('main .lead').textContent()).toBe(translator('fr').t('limits.intro'));
+    expect(await page.locator('main [lang="en"]').count()).toBe(0);
     await page.goto(`${service.url}/studies/${demoId}/communities/harbour-point`);
     expect(await page.locator('.band-name').first().textContent()).toBe('À signaler bientôt');
     await checkView('community page in French');

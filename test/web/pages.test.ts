@@ -185,7 +185,7 @@ describe('pages', () => {
     );
   });
 
-  test('the language switch sets a cookie and returns to a same-origin page; French falls back to English', async () => {
+  test('the language switch sets a cookie and returns to a same-origin page in that language', async () => {
     const switched = await get('/language?lang=fr&back=/limits');
     expect(switched.status).toBe(303);
     expect(switched.headers.get('location')).toBe('/limits');
@@ -193,8 +193,9 @@ describe('pages', () => {
     expect(cookie).toBe('tremora_lang=fr');
     const html = await (await get('/limits', { headers: { cookie } })).text();
     expect(html).toContain('<html lang="fr">');
-    expect(html).toContain('<h1>Les limites d’un dépistage</h1>');
-    expect(html).toContain(translator('en').t('limits.intro'));
+    expect(html).toContain('<h1>Les limites d’une évaluation préliminaire</h1>');
+    expect(html).toContain(translator('fr').t('limits.intro'));
+    expect(html).not.toContain('lang="en"><');
     expect(
       (await get('/language?lang=fr&back=//elsewhere.example/x')).headers.get('location'),
     ).toBe('/');
@@ -249,7 +250,7 @@ describe('pages', () => {
     expect(html).toMatch(/<tr data-line="5"><th scope="row">line 5<\/th>/);
     expect(html).toMatch(/data-loaded="[1-9]\d*" data-rejected="[1-9]\d*"/);
     // Line 6 has no depth: loaded, and counted on the page.
-    expect(html).toContain('<p data-without-depth="1">1 earthquakes have no depth');
+    expect(html).toContain('<p data-without-depth="1">1 earthquake has no depth');
     expect(page.ctx.store.catalogs.get(smallId)?.fileName).toBe('small-catalog.csv');
   });
 

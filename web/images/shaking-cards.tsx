@@ -1,6 +1,6 @@
 import type { CommunityPageData } from '../data/community-data.ts';
 import { INK, MAP_COLOURS, PAPER } from '../style/palette.ts';
-import type { TextKey } from '../text/en.ts';
+import type { TextKey } from '../text/text-key.ts';
 import type { Translator } from '../text/translator.ts';
 import {
   Pictogram,

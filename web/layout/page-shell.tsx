@@ -1,6 +1,7 @@
+import { LanguageSwitch } from './language-switch.tsx';
 import type { Child } from 'hono/jsx';
 import { isDemoStudy } from '../data/demo-study.ts';
-import { LANGUAGES, type Translator } from '../text/translator.ts';
+import type { Translator } from '../text/translator.ts';
 import { Caution } from './caution.tsx';
 
 export type StudySection = 'overview' | 'scenario' | 'catalog' | 'edit';
@@ -79,20 +80,12 @@ export function PageShell(props: PageShellProps) {
               <li>
                 <a href="/limits">{tr.text('nav.limits')}</a>
               </li>
+              <li>
+                <a href="/languages">{tr.text('nav.languages')}</a>
+              </li>
             </ul>
           </nav>
-          <form class="lang-switch" action="/language" method="get">
-            <label for="lang-select">{tr.text('lang.label')}</label>
-            <select id="lang-select" name="lang">
-              {LANGUAGES.map((l) => (
-                <option value={l.code} lang={l.code} selected={l.code === tr.lang}>
-                  {l.name}
-                </option>
-              ))}
-            </select>
-            <input type="hidden" name="back" value={path} />
-            <button type="submit">{tr.text('lang.change')}</button>
-          </form>
+          <LanguageSwitch tr={tr} path={path} />
         </header>
         {study && (
           <nav aria-label={tr.t('nav.study')} class="study-nav">

@@ -195,15 +195,13 @@ export function HazardMapLegend(props: HazardMapLegendProps) {
                   stroke={MAP_COLOURS.returnPeriod}
                 />
               </svg>{' '}
-              {label(c)} ({tr.text('hazardMap.class.points', { n: tr.number(c.count) })})
+              {label(c)} ({tr.plural('hazardMap.class.points', c.count)})
             </li>
           ))}
         </ul>
       )}
       {(classes?.clear ?? d.count) > 0 && (
-        <p class="legend-note">
-          {tr.text('hazardMap.clear', { n: tr.number(classes?.clear ?? d.count) })}
-        </p>
+        <p class="legend-note">{tr.plural('hazardMap.clear', classes?.clear ?? d.count)}</p>
       )}
       <p class="legend-note">
         {tr.text(

@@ -183,7 +183,7 @@ export function HazardCurveLegend(props: { readonly tr: Translator; readonly bra
         {props.branches > 0 && (
           <li>
             {sample(MAP_COLOURS.branch, 1.5)}{' '}
-            {tr.text('plot.branch', { n: tr.count(props.branches) })}
+            {tr.plural('plot.branch', props.branches, { n: tr.count(props.branches) })}
           </li>
         )}
         <li>

@@ -6,9 +6,9 @@ import type { ContentfulStatusCode } from 'hono/utils/http-status';
 import type { ServiceContext } from '../../api/operations/service-context.ts';
 import { ResultsCache } from '../data/study-data.ts';
 import type { PageContext } from '../layout/page-shell.tsx';
+import type { TextBundles } from '../text/text-bundles.ts';
 import {
   DEFAULT_LANGUAGE,
-  isLanguage,
   translator,
   type LanguageCode,
   type Translator,
@@ -20,17 +20,19 @@ import {
  */
 export const LANGUAGE_COOKIE = 'tremora_lang';
 
-export function languageOf(c: Context): LanguageCode {
+export function languageOf(c: Context, bundles: TextBundles): LanguageCode {
   const asked = c.req.query('lang');
-  if (isLanguage(asked)) return asked;
+  if (bundles.has(asked)) return asked;
   const saved = getCookie(c, LANGUAGE_COOKIE);
-  return isLanguage(saved) ? saved : DEFAULT_LANGUAGE;
+  return bundles.has(saved) ? saved : DEFAULT_LANGUAGE;
 }
 
 /** What every page route works with. */
 export interface PageKit {
   readonly ctx: ServiceContext;
   readonly results: ResultsCache;
+  /** The text bundles the pages speak (read at start-up, read again after an import). */
+  bundles: TextBundles;
   tr(c: Context): Translator;
   /** This request's path and query without `lang` (where the language switch returns). */
   here(c: Context): string;
@@ -39,21 +41,23 @@ export interface PageKit {
   render(c: Context, page: Child, status?: ContentfulStatusCode): Response | Promise<Response>;
 }
 
-export function pageKit(ctx: ServiceContext): PageKit {
-  const tr = (c: Context): Translator => translator(languageOf(c));
+export function pageKit(ctx: ServiceContext, bundles: TextBundles): PageKit {
+  const tr = (c: Context): Translator => translator(languageOf(c, kit.bundles), kit.bundles);
   const here = (c: Context): string => {
     const url = new URL(c.req.url);
     url.searchParams.delete('lang');
     return `${url.pathname}${url.search}`;
   };
-  return {
+  const kit: PageKit = {
     ctx,
     results: new ResultsCache(),
+    bundles,
     tr,
     here,
     page: (c) => ({ tr: tr(c), path: here(c), toolVersion: ctx.toolVersion }),
     render: (c, page, status = 200) => c.html(html`<!DOCTYPE html>${page}`, status),
   };
+  return kit;
 }
 
 /** Stands for this origin while a path is resolved as a browser would (a reserved name, RFC 2606). */

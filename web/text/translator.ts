@@ -1,25 +1,15 @@
 import { jsx, type Child } from 'hono/jsx';
 import { intensityWords } from '../format/intensity-words.ts';
-import { EN, type TextKey } from './en.ts';
-import { FR } from './fr.ts';
+import { pluralForm, type TextEntry } from './plural-forms.ts';
+import { shippedTextBundles, type Language, type TextBundles } from './text-bundles.ts';
+import type { PluralKey, TextKey } from './text-key.ts';
 import { naturalFrequency, percentText } from '../format/natural-frequency.ts';
 import { numberInWords } from '../format/number-words.ts';
 import { placeFrom, type Compass } from '../format/direction-words.ts';
 
-/**
- * Text bundles, one per language: English is complete (en.ts); others may leave keys out, and
- * each missing key falls back to English. Templates name their values in braces: "{name}".
- */
-export const LANGUAGES = [
-  { code: 'en', name: 'English', bundle: EN as Readonly<Partial<Record<TextKey, string>>> },
-  { code: 'fr', name: 'Français', bundle: FR },
-] as const;
-
-export type LanguageCode = (typeof LANGUAGES)[number]['code'];
+/** A language's code (BCP 47), as its bundle file names it (text-bundles.ts). */
+export type LanguageCode = string;
 export const DEFAULT_LANGUAGE: LanguageCode = 'en';
-
-export const isLanguage = (code: unknown): code is LanguageCode =>
-  LANGUAGES.some((l) => l.code === code);
 
 export type TextValues = Readonly<Record<string, string | number>>;
 
@@ -56,10 +46,17 @@ const isPlain = (piece: Child): piece is string | number =>
 
 export interface Translator {
   readonly lang: LanguageCode;
+  /** Every language with a bundle, for the language switch. */
+  readonly languages: readonly Language[];
   /** The BCP 47 tag for number and date formats. */
   readonly locale: string;
   /** The text for `key` in this language, or in English when the bundle lacks it. */
   t(key: TextKey, values?: TextValues): string;
+  /**
+   * A plural text: the form for `count` by this language's plural rules (Intl.PluralRules),
+   * as page content like text(); {n} is `count` in this language's number format unless given.
+   */
+  plural(key: PluralKey, count: number, values?: ContentValues): Child;
   /** Whether this language's own bundle has `key` (false: the English fallback is used). */
   has(key: TextKey): boolean;
   /**
@@ -87,32 +84,67 @@ export interface Translator {
   /** "14 km to the north-east", "about 40 km below this place" or "beneath or right beside this place". */
   place(distanceKm: number, bearingDeg: number, depthBelowKm?: number): string;
   compass(point: Compass): string;
+  /**
+   * "to the east": the direction with its article and preposition, written whole in each
+   * language, since they change with the word (French "au nord" but "à l'est").
+   */
+  toward(point: Compass): string;
   date(iso: string | number): string;
 }
 
-/** A translator for `lang`, with English as the fallback for every missing key. */
-export function translator(lang: LanguageCode): Translator {
-  const own = LANGUAGES.find((l) => l.code === lang)?.bundle ?? EN;
-  const locale = lang;
-  const text = (key: TextKey): string => own[key] ?? EN[key];
+/** The text of an entry: a plural entry gives the form for `count` (or "other"). */
+const entryText = (entry: TextEntry, count: number | undefined, locale: string): string =>
+  typeof entry === 'string'
+    ? entry
+    : count === undefined
+      ? entry.other
+      : pluralForm(entry, count, locale);
+
+/**
+ * A translator for `lang` (English when `bundles` has no such language), with English as the
+ * fallback for every missing key.
+ */
+export function translator(
+  lang: LanguageCode,
+  bundles: TextBundles = shippedTextBundles(),
+): Translator {
+  const english = bundles.english;
+  const bundle = bundles.get(lang) ?? english;
+  const own = bundle.text;
+  const { code, locale } = bundle.language;
+  const englishText = (key: TextKey, count?: number): string =>
+    entryText(english.text[key] ?? key, count, english.language.locale);
+  const ownText = (key: TextKey, count?: number): string | undefined => {
+    const entry = own[key];
+    return entry === undefined ? undefined : entryText(entry, count, locale);
+  };
+  const text = (key: TextKey): string => ownText(key) ?? englishText(key);
   const t = (key: TextKey, values?: TextValues) => fill(text(key), values);
+  const content = (key: TextKey, values: ContentValues, count?: number): Child => {
+    const mine = ownText(key, count);
+    if (mine !== undefined) {
+      const pieces = fillPieces(mine, values, (value) => value);
+      return pieces.every(isPlain) ? pieces.join('') : pieces;
+    }
+    const pageLanguage = (value: Child) =>
+      isPlain(value) ? jsx('span', { lang: code }, String(value)) : value;
+    return jsx(
+      'span',
+      { lang: DEFAULT_LANGUAGE },
+      ...fillPieces(englishText(key, count), values, pageLanguage),
+    );
+  };
   const self: Translator = {
-    lang,
+    lang: code,
+    languages: bundles.languages,
     locale,
     t,
     has: (key) => own[key] !== undefined,
-    text: (key, values = {}) => {
-      if (own[key] !== undefined) {
-        const pieces = fillPieces(own[key], values, (value) => value);
-        return pieces.every(isPlain) ? pieces.join('') : pieces;
-      }
-      const pageLanguage = (value: Child) =>
-        isPlain(value) ? jsx('span', { lang }, String(value)) : value;
-      return jsx('span', { lang: DEFAULT_LANGUAGE }, ...fillPieces(EN[key], values, pageLanguage));
-    },
+    text: (key, values = {}) => content(key, values),
+    plural: (key, count, values = {}) => content(key, { n: self.number(count), ...values }, count),
     fallbackLang: (key) => (own[key] === undefined ? DEFAULT_LANGUAGE : undefined),
     english: (message) =>
-      lang === DEFAULT_LANGUAGE ? message : jsx('span', { lang: DEFAULT_LANGUAGE }, message),
+      code === DEFAULT_LANGUAGE ? message : jsx('span', { lang: DEFAULT_LANGUAGE }, message),
     number: (value, fractionDigits = 0) =>
       new Intl.NumberFormat(locale, {
         minimumFractionDigits: fractionDigits,
@@ -149,10 +181,11 @@ export function translator(lang: LanguageCode): Translator {
       if (where.kind === 'below') return t('place.below', { km: self.number(where.depthKm) });
       return t('place.away', {
         km: self.number(where.distanceKm),
-        direction: self.compass(where.compass),
+        direction: self.toward(where.compass),
       });
     },
     compass: (point) => t(`compass.${point}` as TextKey),
+    toward: (point) => t(`compass.toward.${point}` as TextKey),
     date: (when) =>
       new Intl.DateTimeFormat(locale, { dateStyle: 'long', timeZone: 'UTC' }).format(
         new Date(when),

@@ -1,7 +1,7 @@
 import type { ScreeningBandId } from '../../api/engine/intensity/screening-band.ts';
 import { SCREENING_BANDS } from '../../api/engine/intensity/screening-band.ts';
 import type { BandHinge, BandRobustness } from '../../api/engine/results.ts';
-import type { TextKey } from '../text/en.ts';
+import type { TextKey } from '../text/text-key.ts';
 import type { Translator } from '../text/translator.ts';
 
 /** Bands with less weight than this are not named (they would read as "0%"). */

@@ -144,7 +144,7 @@ export function CatalogView(props: CatalogViewProps) {
             })}
           </p>
           {analysis.load.summary.nonMoment > 0 && (
-            <p>{tr.text('catalog.nonMoment', { n: tr.number(analysis.load.summary.nonMoment) })}</p>
+            <p>{tr.plural('catalog.nonMoment', analysis.load.summary.nonMoment)}</p>
           )}
           {analysis.load.summary.nonMoment > 0 && (
             <form method="get" action={`/studies/${studyId}/catalog`} class="conversion-form">
@@ -181,9 +181,7 @@ export function CatalogView(props: CatalogViewProps) {
           ))}
           {analysis.load.summary.withoutDepth > 0 && (
             <p data-without-depth={analysis.load.summary.withoutDepth}>
-              {tr.text('catalog.withoutDepth', {
-                n: tr.number(analysis.load.summary.withoutDepth),
-              })}
+              {tr.plural('catalog.withoutDepth', analysis.load.summary.withoutDepth)}
             </p>
           )}
           {analysis.load.rejected.length > 0 && (

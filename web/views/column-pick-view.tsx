@@ -1,5 +1,5 @@
 import type { ColumnPick } from '../data/community-import.ts';
-import type { TextKey } from '../text/en.ts';
+import type { TextKey } from '../text/text-key.ts';
 import type { Translator } from '../text/translator.ts';
 
 /**

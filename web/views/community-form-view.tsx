@@ -2,7 +2,7 @@ import type { InputIssue } from '../../api/engine/errors.ts';
 import { SITE_CLASSES } from '../../api/study/site-class.ts';
 import type { CommunityForm } from '../data/study-edits.ts';
 import { type PageContext, PageShell } from '../layout/page-shell.tsx';
-import type { TextKey } from '../text/en.ts';
+import type { TextKey } from '../text/text-key.ts';
 import { FieldProblems } from './field-problems.tsx';
 
 export interface CommunityFormViewProps {

@@ -11,7 +11,7 @@ import type { MapFrame } from '../maps/map-frame.ts';
 import { StudyMap } from '../maps/study-map.tsx';
 import { HazardCurveLegend, HazardCurvePlot } from '../plots/hazard-curve-plot.tsx';
 import { ShareBars } from '../plots/share-bars.tsx';
-import type { TextKey } from '../text/en.ts';
+import type { TextKey } from '../text/text-key.ts';
 import type { Translator } from '../text/translator.ts';
 import { FeltList } from './felt-list.tsx';
 import { SafetyAdvice } from './safety-advice.tsx';

@@ -29,7 +29,7 @@ export function DeleteStudyView(props: {
         <li data-count="visits">{tr.text('deleteStudy.visits', { n: tr.number(d.visits) })}</li>
       </ul>
       {d.unfinished > 0 && (
-        <p class="notice">{tr.text('deleteStudy.unfinished', { n: tr.number(d.unfinished) })}</p>
+        <p class="notice">{tr.plural('deleteStudy.unfinished', d.unfinished)}</p>
       )}
       <form method="post" action={`/studies/${study.id}/delete`} class="inline-form">
         <button type="submit" class="button-primary">

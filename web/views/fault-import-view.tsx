@@ -4,7 +4,7 @@ import { DEFAULT_NUMBERS } from '../../api/study/fault-files/fault-defaults.ts';
 import { FAULT_FIELDS } from '../../api/study/fault-files/fault-fields.ts';
 import type { FaultImportPreview } from '../data/fault-import.ts';
 import { type PageContext, PageShell } from '../layout/page-shell.tsx';
-import type { TextKey } from '../text/en.ts';
+import type { TextKey } from '../text/text-key.ts';
 import { FieldProblems } from './field-problems.tsx';
 
 export interface FaultImportViewProps {

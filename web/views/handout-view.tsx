@@ -1,9 +1,10 @@
+import { LanguageSwitch } from '../layout/language-switch.tsx';
 import type { CommunityFeltHistory } from '../../api/engine/catalog/felt-history.ts';
 import type { Study } from '../../api/engine/model.ts';
 import type { Provenance } from '../../api/engine/results.ts';
 import type { CommunityPageData } from '../data/community-data.ts';
 import type { MapFrame } from '../maps/map-frame.ts';
-import { LANGUAGES, type Translator } from '../text/translator.ts';
+import type { Translator } from '../text/translator.ts';
 import { FeltList } from './felt-list.tsx';
 import { Headline, ProvenanceLine, ShakingLevels } from './community-view.tsx';
 import { SafetyAdvice } from './safety-advice.tsx';
@@ -69,18 +70,7 @@ export function HandoutView(props: HandoutViewProps) {
             </a>
           </nav>
           <p>{tr.text('handout.printHint')}</p>
-          <form class="lang-switch" action="/language" method="get">
-            <label for="lang-select">{tr.text('lang.label')}</label>
-            <select id="lang-select" name="lang">
-              {LANGUAGES.map((l) => (
-                <option value={l.code} lang={l.code} selected={l.code === tr.lang}>
-                  {l.name}
-                </option>
-              ))}
-            </select>
-            <input type="hidden" name="back" value={props.path} />
-            <button type="submit">{tr.text('lang.change')}</button>
-          </form>
+          <LanguageSwitch tr={tr} path={props.path} />
           <p
             data-print-button="true"
             data-print-label={tr.t('handout.print')}

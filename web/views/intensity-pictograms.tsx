@@ -1,6 +1,6 @@
 import type { Child } from 'hono/jsx';
 import { INK, PAPER } from '../style/palette.ts';
-import type { TextKey } from '../text/en.ts';
+import type { TextKey } from '../text/text-key.ts';
 import type { Translator } from '../text/translator.ts';
 
 /** The levels the picture strip shows: from the first felt by many to heavy damage. */

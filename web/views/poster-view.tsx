@@ -3,7 +3,7 @@ import type { Provenance } from '../../api/engine/results.ts';
 import type { CommunityPageData } from '../data/community-data.ts';
 import type { PageContext } from '../layout/page-shell.tsx';
 import type { MapFrame } from '../maps/map-frame.ts';
-import type { TextKey } from '../text/en.ts';
+import type { TextKey } from '../text/text-key.ts';
 import { ProvenanceLine } from './community-view.tsx';
 import { Pictogram, PICTOGRAM_LEVELS, type PictogramLevel } from './intensity-pictograms.tsx';
 import { VillageMapSection } from './village-map-section.tsx';

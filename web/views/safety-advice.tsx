@@ -1,4 +1,4 @@
-import type { TextKey } from '../text/en.ts';
+import type { TextKey } from '../text/text-key.ts';
 import type { Translator } from '../text/translator.ts';
 
 /** A list from a one-item-per-line text; English standing in for a translation marks the whole list. */

@@ -1,4 +1,4 @@
-import type { TextKey } from '../text/en.ts';
+import type { TextKey } from '../text/text-key.ts';
 import type { Translator } from '../text/translator.ts';
 
 /** Each picture for slides with the words that name its link. */

@@ -2,7 +2,7 @@ import type { InputIssue } from '../../api/engine/errors.ts';
 import { TECTONIC_SETTINGS } from '../../api/engine/model.ts';
 import type { SourceForm, SourceTextField } from '../data/source-form.ts';
 import { type PageContext, PageShell } from '../layout/page-shell.tsx';
-import type { TextKey } from '../text/en.ts';
+import type { TextKey } from '../text/text-key.ts';
 import { FieldProblems } from './field-problems.tsx';
 
 export interface SourceFormViewProps {

@@ -38,7 +38,7 @@ function TimeToAct(props: {
           {ground?.kind === 'found' &&
             tr.text('tsunami.time.ground', {
               km: km(tr, ground.distanceKm),
-              direction: tr.compass(compassPoint(ground.bearingDeg)),
+              direction: tr.toward(compassPoint(ground.bearingDeg)),
             })}
         </p>
       )}
@@ -51,7 +51,7 @@ function TimeToAct(props: {
           {c.firstArrivalMinutes === null &&
             tr.text('tsunami.time.ground', {
               km: km(tr, ground.distanceKm),
-              direction: tr.compass(compassPoint(ground.bearingDeg)),
+              direction: tr.toward(compassPoint(ground.bearingDeg)),
             })}{' '}
           {tr.text('tsunami.time.walk', { minutes: tr.number(ground.walkingMinutes) })}{' '}
           {tr.text('tsunami.time.height', { height: tr.number(result.highGroundM) })}

@@ -9,25 +9,34 @@ import { closeServiceContext, testServiceContext } from '../../service/helpers/t
 export interface PageApp {
   readonly app: Hono;
   readonly ctx: ServiceContext;
+  /** The data folder: the database, and text/ for imported translations. */
+  readonly dataDir: string;
   close(): Promise<void>;
 }
 
 export interface StartPageAppOptions {
   /** The service's TREMORA_TOKEN, for both the token check and the access page. */
   readonly token?: string;
+  /** The shipped text bundles' folder (default: web/text/bundles/). */
+  readonly textDir?: string;
 }
 
 export function startPageApp(options: StartPageAppOptions = {}): PageApp {
   const dir = tempDir('tremora-pages-');
   const ctx = testServiceContext(`${dir.path}/pages.db`, 1_000_000_000);
   const app = createApp(ctx, {
-    pages: createPages(ctx, { token: options.token }),
+    pages: createPages(ctx, {
+      token: options.token,
+      textDir: options.textDir,
+      importedTextDir: `${dir.path}/text`,
+    }),
     logError: () => {},
     ...(options.token === undefined ? {} : { token: options.token }),
   });
   return {
     app,
     ctx,
+    dataDir: dir.path,
     close: async () => {
       await closeServiceContext(ctx);
       dir.remove();

@@ -1,6 +1,6 @@
 import { DOMParser, type Element } from '@xmldom/xmldom';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { EN } from '../../../web/text/en.ts';
+import type { TextKey } from '../../../web/text/text-key.ts';
 import { translator } from '../../../web/text/translator.ts';
 import { cutDownDemo } from '../helpers/cut-down-demo.ts';
 import { runFinished, startPageApp, type PageApp } from '../helpers/page-app.ts';
@@ -126,7 +126,7 @@ describe('the handout', () => {
     ]);
     for (const level of [4, 5, 6, 7, 8]) {
       expect(strip).toContain(`<g class="pictogram" data-mmi-level="${level}">`);
-      expect(strip).toContain(en.t(`material.picture.${level}` as keyof typeof EN));
+      expect(strip).toContain(en.t(`material.picture.${level}` as TextKey));
     }
     expect(strip).toContain('<strong>MMI IV</strong>');
   });

@@ -3,8 +3,9 @@ import { Fragment, jsx, type Child } from 'hono/jsx';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { ACCESS_COOKIE, accessCookieValue } from '../../../api/service/page-access.ts';
 import { DEMO_STUDY_URL } from '../../../api/operations/demo-seed.ts';
-import { EN, type TextKey } from '../../../web/text/en.ts';
-import { FR } from '../../../web/text/fr.ts';
+import type { TextKey } from '../../../web/text/text-key.ts';
+import { loadTextBundles } from '../../../web/text/text-bundles.ts';
+import { EN, partialFrenchTextDir } from '../helpers/bundles.ts';
 import { translator } from '../../../web/text/translator.ts';
 import { smallStudy } from '../../service/helpers/small-study.ts';
 import { fileForm, runFinished, startPageApp, type PageApp } from '../helpers/page-app.ts';
@@ -13,10 +14,14 @@ import { textLanguages, type MarkedText } from '../helpers/text-languages.ts';
 /**
  * English standing in for a missing translation is marked lang="en", so that readers and
  * screen readers know its language (WCAG 2.2, success criterion 3.1.2 "Language of Parts").
- * The French bundle is partial on purpose (web/text/fr.ts).
+ * The French here is partial on purpose (partialFrenchTextDir): a language being translated.
  */
-const fr = translator('fr');
-const en = translator('en');
+const textDir = partialFrenchTextDir();
+afterAll(() => textDir.remove());
+const bundles = loadTextBundles({ textDir: textDir.path });
+const FR = bundles.get('fr')?.text ?? {};
+const fr = translator('fr', bundles);
+const en = translator('en', bundles);
 const render = async (child: Child): Promise<string> =>
   String(await jsx(Fragment, {}, child).toString());
 
@@ -130,7 +135,7 @@ describe('French pages mark every English stand-in', { timeout: 120_000 }, () =>
     app.app.request(path, { method: 'POST', headers, body });
 
   beforeAll(async () => {
-    app = startPageApp({ token: TOKEN });
+    app = startPageApp({ token: TOKEN, textDir: textDir.path });
     const now = new Date();
     const accessId = app.ctx.store.pageAccess.open(now, new Date(now.getTime() + 3_600_000));
     headers.cookie += `; ${ACCESS_COOKIE}=${accessCookieValue(TOKEN, accessId)}`;

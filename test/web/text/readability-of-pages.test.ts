@@ -1,6 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { fleschKincaidGrade } from '../../../web/format/readability.ts';
-import { EN, type TextKey } from '../../../web/text/en.ts';
+import type { TextKey } from '../../../web/text/text-key.ts';
+import { EN } from '../helpers/bundles.ts';
 import { fill, translator } from '../../../web/text/translator.ts';
 
 /**

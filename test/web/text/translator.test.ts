@@ -1,7 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { SCREENING_BANDS } from '../../../api/engine/intensity/screening-band.ts';
-import { EN, type TextKey } from '../../../web/text/en.ts';
-import { FR } from '../../../web/text/fr.ts';
+import type { TextKey } from '../../../web/text/text-key.ts';
+import { EN, FR } from '../helpers/bundles.ts';
 import { fill, translator } from '../../../web/text/translator.ts';
 
 const placeholders = (text: string): string[] =>
@@ -17,13 +17,18 @@ describe('text bundles', () => {
     }
   });
 
-  test('the French bundle is partial: some keys fall back to English', () => {
+  test('the French speaks of a preliminary assessment, not a medical screening', () => {
     const fr = translator('fr');
-    expect(fr.has('caution.title')).toBe(true);
-    expect(fr.t('caution.title')).toBe('Un dépistage, pas une valeur de calcul');
-    expect(fr.has('community.levels')).toBe(false);
-    expect(fr.t('community.levels')).toBe(EN['community.levels']);
-    expect(Object.keys(FR).length).toBeLessThan(Object.keys(EN).length);
+    expect(fr.t('caution.title')).toBe('Une évaluation préliminaire, pas une valeur de calcul');
+    for (const [key, text] of Object.entries(FR)) expect(text, key).not.toMatch(/dépist/i);
+  });
+
+  test('French directions take their own article: "à l’est", "au nord"', () => {
+    const fr = translator('fr');
+    expect(fr.place(14, 90)).toBe('à 14 km à l’est');
+    expect(fr.place(14, 0)).toBe('à 14 km au nord');
+    expect(fr.place(3, 270)).toBe('à 3 km à l’ouest');
+    expect(translator('en').place(14, 90)).toBe('14 km to the east');
   });
 
   test('no English text is empty', () => {
