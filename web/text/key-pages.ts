@@ -62,6 +62,8 @@ export const PAGES_BY_PREFIX: Readonly<Record<string, readonly TextKey[]>> = {
   scenario: [SCENARIO],
   trip: [TRIP],
   visits: [COMMUNITY, OVERVIEW],
+  faults: [EDITOR],
+  material: [COMMUNITY, HANDOUT],
   languages: ['nav.languages'],
 };
 

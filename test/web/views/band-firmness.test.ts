@@ -33,7 +33,7 @@ describe('band firmness in words', () => {
 
   it('in French, with the band names of the French bundle or the English fallback', () => {
     const text = bandFirmnessText(translator('fr'), robustness);
-    expect(text).toContain('Le niveau dépend surtout de la forme magnitude–fréquence de Fault A');
+    expect(text).toContain('La classe dépend surtout de la forme magnitude–fréquence de Fault A');
   });
 
   it('names the one band every alternative gives, and starts each sentence with a capital', () => {
@@ -59,7 +59,7 @@ describe('band firmness in words', () => {
     );
     const fr = bandFirmnessText(translator('fr'), steady);
     expect(fr).toContain(
-      'Aucun choix seul ne change le niveau. Même le modèle de mouvement du sol',
+      'Aucun choix seul ne change la classe. Même le modèle de mouvement du sol',
     );
     for (const text of [en, fr]) {
       expect(text).not.toContain('model-a');
