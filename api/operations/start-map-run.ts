@@ -22,7 +22,7 @@ export interface MapWork {
   readonly points: number;
   readonly ruptures: number;
   readonly levels: number;
-  /** points × ruptures × levels. */
+  /** points × (ruptures × levels + planes beyond each rupture's first). */
   readonly size: number;
 }
 
@@ -40,14 +40,17 @@ export async function checkMapWork(
     spacingKm: request.spacingKm,
     ...(request.bounds ? { bounds: request.bounds } : {}),
   });
-  const { ruptures } = await runQuickTask(ctx, { kind: 'measure', study });
+  const { ruptures, extraPlanes } = await runQuickTask(ctx, { kind: 'measure', study });
   const levels = MAP_LEVELS_READ[request.quantity.kind];
-  const size = grid.count * ruptures * levels;
+  // A map sums the mean only (no per-variant sums); each plane beyond a rupture's first is one
+  // more distance per point, counted as one term (work-budget.ts).
+  const size = grid.count * (ruptures * levels + extraPlanes);
   if (size > ctx.workBudget)
     throw new StudyTooLarge(
       size,
       ctx.workBudget,
-      `${grid.count} map points x ${ruptures} ruptures x ${levels} levels read`,
+      `${grid.count} map points x ${ruptures} ruptures x ${levels} levels read` +
+        (extraPlanes > 0 ? ` + ${grid.count} map points x ${extraPlanes} planes` : ''),
     );
   return { points: grid.count, ruptures, levels, size };
 }

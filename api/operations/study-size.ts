@@ -13,6 +13,6 @@ export async function measureStudy(
   study: Study,
   signal?: AbortSignal,
 ): Promise<StudyWork> {
-  const { ruptures } = await runQuickTask(ctx, { kind: 'measure', study }, signal);
-  return checkWorkBudget(study, ruptures, ctx.workBudget);
+  const measured = await runQuickTask(ctx, { kind: 'measure', study }, signal);
+  return checkWorkBudget(study, measured, ctx.workBudget);
 }

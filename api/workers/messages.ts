@@ -1,3 +1,4 @@
+import type { RuptureWork } from '../engine/hazard/rupture-work.ts';
 import type { InputIssue } from '../engine/errors.ts';
 import type { RuptureTable } from '../engine/hazard/rupture-table.ts';
 import type { HazardMapOptions, MapPoint } from '../engine/map/hazard-map.ts';
@@ -72,9 +73,8 @@ export interface ScreenOutput {
   readonly provenance: Provenance;
 }
 
-export interface MeasureOutput {
-  readonly ruptures: number;
-}
+/** A study's ruptures, their planes beyond the first and their per-variant sums (engine/hazard/rupture-work.ts). */
+export type MeasureOutput = RuptureWork;
 
 export interface ScenarioOutput {
   readonly resultJson: string;

@@ -7,6 +7,7 @@ import { screenStudy } from '../engine/screen-study.ts';
 import type { TaskMessage, TaskOutputs, WorkerReply, WorkerTask } from './messages.ts';
 import { mapPointsTask, screenCommunitiesTask, type ChunkEvents } from './parallel-tasks.ts';
 import { shareTable } from './shared-table.ts';
+import { ruptureWork } from '../engine/hazard/rupture-work.ts';
 import { studyRuptureTable } from '../engine/hazard/study-rupture-table.ts';
 import { serialiseError } from './task-errors.ts';
 
@@ -60,8 +61,10 @@ function perform(message: TaskMessage): TaskOutputs[WorkerTask['kind']] {
   switch (task.kind) {
     case 'screen':
       return screen(task, id, stop);
-    case 'measure':
-      return { ruptures: studyRuptureTable(task.study).table.count };
+    case 'measure': {
+      const { frame, table } = studyRuptureTable(task.study);
+      return ruptureWork(task.study, table, frame);
+    }
     case 'scenario':
       return { resultJson: JSON.stringify(runScenario(task.study, modelCatalog, task.request)) };
     case 'rupture-table':

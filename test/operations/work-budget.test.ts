@@ -18,6 +18,8 @@ describe('studyWork', () => {
     expect(studyWork(study, 40)).toEqual({
       communities: 1,
       ruptures: 40,
+      variantRuptures: 0,
+      extraPlanes: 0,
       measures: 1,
       measureLevels: 3,
       size: 120,
@@ -33,6 +35,25 @@ describe('studyWork', () => {
     expect(work.measures).toBe(3);
     expect(work.measureLevels).toBe(3 * DEFAULT_LEVEL_COUNT);
     expect(work.size).toBe(10 * 3 * DEFAULT_LEVEL_COUNT);
+  });
+});
+
+describe('studyWork of a measured rupture table', () => {
+  it('adds the per-variant sums to the ruptures and one term per extra plane (a contoured fault mesh cells)', () => {
+    const study = load(smallStudy());
+    const work = studyWork(study, { ruptures: 40, variantRuptures: 80, extraPlanes: 1000 });
+    // 1 community x ((40 + 80) x 3 levels + 1000 planes)
+    expect(work.size).toBe(1 * ((40 + 80) * 3 + 1000));
+    expect(work.detail).toBe(
+      "1 community x (40 ruptures + 80 per-variant sums) x 3 levels (over 1 measure) + 1 community x 1000 planes beyond each rupture's first",
+    );
+  });
+
+  it('refuses a study whose contoured fault cells alone go over the budget', () => {
+    const study = load(smallStudy());
+    expect(() =>
+      checkWorkBudget(study, { ruptures: 40, variantRuptures: 0, extraPlanes: 1 }, 120),
+    ).toThrow(StudyTooLarge);
   });
 });
 
