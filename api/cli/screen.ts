@@ -1,7 +1,7 @@
 import { writeFile } from 'node:fs/promises';
 import { parseArgs } from 'node:util';
 import { modelCatalog } from '../engine/motion/registry.ts';
-import type { NearestFault, StudyResult } from '../engine/results.ts';
+import type { NearestFault, StudyResult, ZoneDepthReport } from '../engine/results.ts';
 import { screenStudy } from '../engine/screen-study.ts';
 import { inputHash } from '../results/input-hash.ts';
 import { buildProvenance } from '../results/provenance.ts';
@@ -98,9 +98,20 @@ export async function screenVerb(args: readonly string[], io: Io): Promise<numbe
     );
     for (const c of robust) io.out(`${c.name.padEnd(22)}${robustnessLine(c.bandRobustness!)}`);
   }
+  for (const zone of result.diagnostics?.zoneDepths ?? []) io.out(zoneDepthLine(zone));
   for (const w of result.warnings) io.err(`note: ${w}`);
   io.out(
     '\nScreening estimates only, not design values: building codes and licensed engineers decide.',
   );
   return EXIT_OK;
+}
+
+/** One zone's depths in a line: the range over its cells and where they came from (the JSON lists every cell). */
+function zoneDepthLine(zone: ZoneDepthReport): string {
+  const depths = zone.cells.flatMap((c) => c.depths.map((d) => d.depthKm));
+  const from =
+    zone.basis === 'depths'
+      ? 'its weighted depths'
+      : `${zone.basis.offsetKm} km below ${zone.basis.depthFromSource}`;
+  return `zone depths: ${zone.name}: ${zone.cells.length} cells at ${Math.min(...depths)}–${Math.max(...depths)} km (${from}; per cell in the JSON diagnostics)`;
 }

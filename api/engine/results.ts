@@ -168,9 +168,30 @@ export interface Provenance {
   readonly finishedAt: string;
 }
 
+/** The depths one zone's cells were given (ruptures/zone-depth-report.ts). */
+export interface ZoneDepthReport {
+  readonly sourceId: string;
+  readonly name: string;
+  /** Where the depths came from: a contoured source and the offset below it (km), or the zone's weighted list. */
+  readonly basis: { readonly depthFromSource: string; readonly offsetKm: number } | 'depths';
+  /** Each cell's centre (degrees) and its hypocentral depths (km) with their weights. */
+  readonly cells: readonly {
+    readonly lon: number;
+    readonly lat: number;
+    readonly depths: readonly { readonly depthKm: number; readonly weight: number }[];
+  }[];
+}
+
+/** What the screening used that is not a result: zone depths per cell. */
+export interface StudyDiagnostics {
+  readonly zoneDepths: readonly ZoneDepthReport[];
+}
+
 export interface StudyResult {
   readonly studyName: string;
   readonly communities: readonly CommunityResult[];
   readonly warnings: readonly string[];
+  /** Absent from results stored before diagnostics were reported. */
+  readonly diagnostics?: StudyDiagnostics;
   readonly provenance: Provenance;
 }

@@ -1,14 +1,17 @@
+import { zoneDepthReport } from './ruptures/zone-depth-report.ts';
 import { communityResult } from './community-result.ts';
 import { Cancelled } from './errors.ts';
 import { MAX_BRANCH_COMBINATIONS } from './hazard/logic-tree.ts';
 import { TECTONIC_SETTINGS } from './model.ts';
 import type { Study } from './model.ts';
 import type { ModelCatalog } from './motion/catalog.ts';
-import type { CommunityResult, StudyResult } from './results.ts';
+import type { CommunityResult, StudyDiagnostics, StudyResult } from './results.ts';
 import { planScreening, type ScreeningPlan } from './screening-plan.ts';
 
 /** A screening's results; the caller adds the provenance (it needs the clock and a hash). */
-export type ScreeningOutput = Omit<StudyResult, 'provenance'>;
+export type ScreeningOutput = Omit<StudyResult, 'provenance' | 'diagnostics'> & {
+  readonly diagnostics: StudyDiagnostics;
+};
 
 export interface ScreenStudyOptions {
   /** Called with the share of the work done, in (0, 1], after each community's branches. */
@@ -109,5 +112,10 @@ export function finishScreening(
       `the logic tree has ${combinations} branch combinations, more than the ${MAX_BRANCH_COMBINATIONS} listed; only mean curves are given`,
     );
   }
-  return { studyName: plan.study.name, communities: [...communities], warnings };
+  return {
+    studyName: plan.study.name,
+    communities: [...communities],
+    warnings,
+    diagnostics: { zoneDepths: zoneDepthReport(plan.study) },
+  };
 }

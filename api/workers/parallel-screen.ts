@@ -13,6 +13,7 @@ import type { TaskHandle, WorkerPool } from './worker-pool.ts';
 export interface ScreeningText {
   readonly studyName: string;
   readonly warnings: readonly string[];
+  readonly diagnostics: ScreeningOutput['diagnostics'];
   /** Each chunk's communities as a JSON array, in study order. */
   readonly communityChunks: readonly string[];
 }
@@ -22,7 +23,7 @@ export function screeningJson(text: ScreeningText, provenance: Provenance): stri
   const communities = text.communityChunks
     .map((chunk) => chunk.slice(1, -1))
     .filter((inner) => inner.length > 0);
-  return `{"studyName":${JSON.stringify(text.studyName)},"communities":[${communities.join(',')}],"warnings":${JSON.stringify(text.warnings)},"provenance":${JSON.stringify(provenance)}}`;
+  return `{"studyName":${JSON.stringify(text.studyName)},"communities":[${communities.join(',')}],"warnings":${JSON.stringify(text.warnings)},"diagnostics":${JSON.stringify(text.diagnostics)},"provenance":${JSON.stringify(provenance)}}`;
 }
 
 /** The screening's results as objects (the CLI prints from them). */
@@ -33,6 +34,7 @@ export function screeningOutput(text: ScreeningText): ScreeningOutput {
       (chunk) => JSON.parse(chunk) as ScreeningOutput['communities'],
     ),
     warnings: [...text.warnings],
+    diagnostics: text.diagnostics,
   };
 }
 
@@ -90,8 +92,16 @@ export function screenStudyOnPool(
     });
     active = run;
     const outputs = await run.result;
-    const { warnings, studyName } = finishScreening({ ...setup, ruptureCount: table.count }, []);
-    return { studyName, warnings, communityChunks: outputs.map((o) => o.communitiesJson) };
+    const { warnings, studyName, diagnostics } = finishScreening(
+      { ...setup, ruptureCount: table.count },
+      [],
+    );
+    return {
+      studyName,
+      warnings,
+      diagnostics,
+      communityChunks: outputs.map((o) => o.communitiesJson),
+    };
   })();
   return {
     result,
