@@ -67,8 +67,8 @@ describe('WorkerPool with the real run worker', () => {
   it('measures a study (rupture count) and gives identical outputs for identical inputs', async () => {
     const quick = pool({ size: 1 });
     const a = await quick.run({ kind: 'measure', study: validSmallStudy() }).result;
-    // Its one M 6.5 point earthquake is eight virtual ruptures (engine/ruptures/virtual-ruptures.ts), one plane each.
-    expect(a).toEqual({ ruptures: 8, extraPlanes: 0, variantRuptures: 0 });
+    // Its one point earthquake is one rupture of one plane, with no source-model alternatives.
+    expect(a).toEqual({ ruptures: 1, extraPlanes: 0, variantRuptures: 0 });
     const runs = pool({ size: 1 });
     const first = await runs.run({
       kind: 'screen',

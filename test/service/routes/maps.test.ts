@@ -214,9 +214,7 @@ describe('map runs', () => {
   });
 
   it('cancels a map on request: cancelled, no GeoJSON in the store or the API, and it stays so', async () => {
-    // 40 km: the demo's large zone earthquakes as finite ruptures (about 9 x 10^5) keep a
-    // 20 km grid over this test's budget.
-    const { id } = await startMap(demoId, { returnPeriodYears: 475, spacingKm: 40 });
+    const { id } = await startMap(demoId, { returnPeriodYears: 475, spacingKm: 20 });
     const response = await app().request(`/api/maps/${id}/cancel`, { method: 'POST' });
     expect(response.status).toBe(202);
     const done = await finished(id);
