@@ -20,17 +20,25 @@ export interface HazardCurvePlotProps {
 /** Lowest rate drawn, per year: below one in a million years a screening says nothing useful. */
 const MIN_RATE = 1e-6;
 const MARGIN = PLOT_MARGIN;
+/** Dotted, so the fractiles read apart from the mean without colour (greyscale prints). */
+const FRACTILE_DASH = '1.5 3';
 
 /**
  * The hazard curve on log–log axes (d3-scale, d3-shape): the mean curve dark, each logic-tree
- * branch lighter beneath it, dashed lines at the return periods with their level marked.
+ * branch lighter beneath it, the fractile curves of the whole logic tree (settings.fractiles)
+ * dotted in the mean's colour, dashed lines at the return periods with their level marked.
  * Rates of zero (past the truncation) cannot sit on a log axis and are left off.
  */
 export function HazardCurvePlot(props: HazardCurvePlotProps) {
   const { tr, curve } = props;
   const width = props.width ?? 640;
   const height = props.height ?? 380;
-  const all = [curve.annualRate, ...(curve.branches ?? []).map((b) => b.annualRate)];
+  const fractiles = Object.entries(curve.fractiles ?? {});
+  const all = [
+    curve.annualRate,
+    ...(curve.branches ?? []).map((b) => b.annualRate),
+    ...fractiles.map(([, rates]) => rates),
+  ];
   const positive = all.flat().filter((r) => r > 0);
   const maxRate = Math.max(...positive, (1 / Math.min(...props.returnPeriodsYears)) * 10);
   const minRate = Math.max(
@@ -86,6 +94,18 @@ export function HazardCurvePlot(props: HazardCurvePlotProps) {
             stroke={MAP_COLOURS.branch}
             stroke-width={1.6}
             data-branch={b.label}
+          />
+        ))}
+      </g>
+      <g class="fractiles">
+        {fractiles.map(([fractile, rates]) => (
+          <path
+            d={path(pointsOf(rates)) ?? ''}
+            fill="none"
+            stroke={MAP_COLOURS.mean}
+            stroke-width={1.4}
+            stroke-dasharray={FRACTILE_DASH}
+            data-fractile={fractile}
           />
         ))}
       </g>
@@ -156,7 +176,12 @@ export function HazardCurvePlot(props: HazardCurvePlotProps) {
 }
 
 /** The plot's legend in words. */
-export function HazardCurveLegend(props: { readonly tr: Translator; readonly branches: number }) {
+export function HazardCurveLegend(props: {
+  readonly tr: Translator;
+  readonly branches: number;
+  /** The fractiles drawn, as written in the settings ("0.16", "0.5", "0.84"). */
+  readonly fractiles?: readonly string[];
+}) {
   const { tr } = props;
   const sample = (stroke: string, w: number, dash?: string) => (
     <svg
@@ -184,6 +209,14 @@ export function HazardCurveLegend(props: { readonly tr: Translator; readonly bra
           <li>
             {sample(MAP_COLOURS.branch, 1.5)}{' '}
             {tr.plural('plot.branch', props.branches, { n: tr.count(props.branches) })}
+          </li>
+        )}
+        {props.fractiles && props.fractiles.length > 0 && (
+          <li>
+            {sample(MAP_COLOURS.mean, 1.4, FRACTILE_DASH)}{' '}
+            {tr.text('plot.fractiles', {
+              list: props.fractiles.map((f) => tr.chance(Number(f)).percent).join(', '),
+            })}
           </li>
         )}
         <li>

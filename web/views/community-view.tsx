@@ -292,7 +292,11 @@ export function CommunityView(props: CommunityViewProps) {
               idPrefix="curve"
             />
             <figcaption>
-              <HazardCurveLegend tr={tr} branches={curve.branches?.length ?? 0} />
+              <HazardCurveLegend
+                tr={tr}
+                branches={curve.branches?.length ?? 0}
+                fractiles={Object.keys(curve.fractiles ?? {})}
+              />
             </figcaption>
           </figure>
           {data.spread && (
