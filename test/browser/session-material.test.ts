@@ -78,7 +78,9 @@ async function shootPrint(name: string, width: number): Promise<void> {
     height: Number(await page.evaluate('document.documentElement.scrollHeight')),
   });
   await page.screenshot({ path: join(ARTIFACTS, `${name}-print.png`) });
-  await page.emulateMedia({ media: 'screen' });
+  // Back to no emulation: a later page.pdf() then prints with print media, as a browser does
+  // (an emulated 'screen' would carry over and print the screen layout).
+  await page.emulateMedia({ media: null });
 }
 
 describe('session material in a browser', { timeout: 120_000 }, () => {
