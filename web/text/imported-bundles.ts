@@ -1,7 +1,7 @@
 import { mkdirSync, renameSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { TextEntry } from './plural-forms.ts';
-import type { Language } from './text-bundles.ts';
+import { isLanguageCode, type Language } from './text-bundles.ts';
 import type { TextKey } from './text-key.ts';
 
 /**
@@ -14,6 +14,9 @@ export function saveImportedBundle(
   language: Language,
   text: Partial<Record<TextKey, TextEntry>>,
 ): string {
+  // The code names the file: only a language code (letters, digits, hyphens) may, never a path.
+  if (!isLanguageCode(language.code))
+    throw new Error(`expected a language code such as "fr" or "pt-BR", got "${language.code}"`);
   mkdirSync(dir, { recursive: true });
   const path = join(dir, `${language.code}.json`);
   const partial = `${path}.${process.pid}.partial`;
