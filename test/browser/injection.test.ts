@@ -204,7 +204,11 @@ function pagePaths(): { path: string; names: string[] }[] {
       route.method !== 'GET' ||
       route.path.startsWith('/api') ||
       route.path.startsWith('/static') ||
-      route.path === '/language'
+      route.path === '/language' ||
+      // Slide images are files to download, not pages; their escaping is checked below.
+      route.path.endsWith('/images/:file') ||
+      // This study has no visit records to delete (test/web/routes/visit-pages.test.ts covers the page).
+      route.path.includes(':vid')
     )
       continue;
     const withIds = route.path
@@ -256,6 +260,20 @@ describe('names made of markup, in the browser', () => {
     await expectInert(`/studies/${studyId}`, [...COMMUNITY_NAMES]);
     await expectInert('/', [STUDY_NAME]);
   }, 300_000);
+
+  test('slide images carry a name made of markup as escaped text, never as elements', async () => {
+    for (const i of COMMUNITY_NAMES.keys()) {
+      for (const file of ['map.svg', 'hazard-curve.svg', 'shaking-cards.svg']) {
+        const response = await fetch(
+          `${service.url}/studies/${studyId}/communities/village-${i + 1}/images/${file}`,
+        );
+        expect(response.status, file).toBe(200);
+        const svg = await response.text();
+        // Escaped, a payload's "<" is "&lt;": no element can carry its marker.
+        expect(svg, `${file} of village-${i + 1}`).not.toMatch(/<[a-z]+[^<>]*data-pwned/i);
+      }
+    }
+  });
 
   test('the overview stays inert after its script sorts the table', async () => {
     await expectInert(`/studies/${studyId}`);
