@@ -66,7 +66,8 @@ describe.each(WIDTHS)('tsunami time to act at $name width', ({ name, viewport })
     expect(await seriousAxeViolations(page), `${view}: serious axe-core violations`).toEqual([]);
     const selector = JSON.stringify(`${section}, ${section} *`);
     const wide = (await page.evaluate(
-      `[...document.querySelectorAll(${selector})].filter((el) => el.getBoundingClientRect().right > document.documentElement.clientWidth + 1).map((el) => el.tagName + '.' + el.className)`,
+      // A table's header row hidden for screen readers on a phone (clipped to nothing) is not drawn.
+      `[...document.querySelectorAll(${selector})].filter((el) => !el.closest('thead') || getComputedStyle(el.closest('thead')).clipPath === 'none').filter((el) => el.getBoundingClientRect().right > document.documentElement.clientWidth + 1).map((el) => el.tagName + '.' + el.className)`,
     )) as string[];
     expect(wide, `${view}: parts of the tsunami section wider than the window`).toEqual([]);
     await page
