@@ -345,10 +345,18 @@ export function readSources(
     seen.set(source.id, i);
     out.push(source);
   });
+  // A zone naming a source refused above is not refused again: that source's own problems say
+  // what to fix.
+  const refusedIds = new Set(
+    features
+      .map((f) => (f as { properties?: { id?: unknown } } | null)?.properties?.id)
+      .filter((id) => typeof id === 'string' && !seen.has(id)),
+  );
   out.forEach((source) => {
     if (source.kind !== 'zone' || !source.depthFrom) return;
     const named = out.find((s) => s.id === source.depthFrom?.sourceId);
     if (named?.kind === 'fault' && named.contours) return;
+    if (!named && refusedIds.has(source.depthFrom.sourceId)) return;
     issues.add(
       [...path, 'features', seen.get(source.id) as number, 'properties', 'depthFromSource', 'id'],
       `expected the id of a source given by depth contours (a MultiLineString fault) in this study, got "${source.depthFrom.sourceId}"`,

@@ -13,6 +13,7 @@ export const NEAR_KM = 1;
 
 export type PlaceFrom =
   | { readonly kind: 'here' }
+  | { readonly kind: 'beside' }
   | { readonly kind: 'below'; readonly depthKm: number }
   | { readonly kind: 'away'; readonly distanceKm: number; readonly compass: Compass };
 
@@ -25,10 +26,11 @@ export function roundDepthKm(depthKm: number): number {
 }
 
 /**
- * Where something is from a community: under NEAR_KM away, "below" at its depth when it lies
- * under the place (a dipping fault beneath it; `depthBelowKm` given and said as 1 km or more),
- * else "here" (beneath or right beside the place); further away, a whole number of km (rounded
- * to the nearest km) and the compass point towards it.
+ * Where something is from a community. "Below" and "here" are said only of what lies truly under
+ * the place (a horizontal distance of 0: the place stands over the surface or on its trace):
+ * "below" at its depth when that is known and said as 1 km or more, else "here". Under NEAR_KM
+ * away it is "beside" the place, never under it; further away, a whole number of km (rounded to
+ * the nearest km) and the compass point towards it.
  */
 export function placeFrom(
   distanceKm: number,
@@ -39,7 +41,7 @@ export function placeFrom(
     throw new RangeError(`expected a distance >= 0 km, got ${distanceKm}`);
   if (!Number.isFinite(bearingDeg))
     throw new RangeError(`expected a bearing in degrees, got ${bearingDeg}`);
-  if (distanceKm < NEAR_KM) {
+  if (distanceKm === 0) {
     if (
       depthBelowKm !== undefined &&
       Number.isFinite(depthBelowKm) &&
@@ -48,6 +50,7 @@ export function placeFrom(
       return { kind: 'below', depthKm: roundDepthKm(depthBelowKm) };
     return { kind: 'here' };
   }
+  if (distanceKm < NEAR_KM) return { kind: 'beside' };
   return { kind: 'away', distanceKm: Math.round(distanceKm), compass: compassPoint(bearingDeg) };
 }
 

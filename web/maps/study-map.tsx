@@ -38,12 +38,16 @@ const lineOf = (s: Source & { kind: 'fault' }) => ({
   type: 'LineString' as const,
   coordinates: s.trace.map((p) => [...p]),
 });
-/** A contoured fault's deeper contours (its top one is its trace), each with its depth, km. */
-const deeperContours = (s: Source & { kind: 'fault' }) =>
-  (s.contours?.lines ?? []).slice(1).map((line, k) => ({
+/**
+ * A contoured fault's contours, each with its depth, km. The top one is the fault's trace, drawn
+ * as the trace; it is labelled with its depth like the others.
+ */
+const contoursOf = (s: Source & { kind: 'fault' }) =>
+  (s.contours?.lines ?? []).map((line, k) => ({
+    top: k === 0,
     line: { type: 'LineString' as const, coordinates: line.map((p) => [...p]) },
     end: line[line.length - 1] as LonLat,
-    depthKm: s.contours?.depthsKm[k + 1] as number,
+    depthKm: s.contours?.depthsKm[k] as number,
   }));
 const polygonOf = (rings: Study['outline'] & object) => ({
   type: 'Polygon' as const,
@@ -151,17 +155,22 @@ export function StudyMap(props: StudyMapProps) {
           const label = faultLabel(i);
           return (
             <g data-source={s.id}>
-              {deeperContours(s).map((contour) => {
+              {contoursOf(s).map((contour) => {
                 const [x, y] = frame.project(contour.end);
                 return (
-                  <g class="map-contour" data-depth-km={contour.depthKm}>
-                    <path
-                      d={frame.path(contour.line)}
-                      fill="none"
-                      stroke={MAP_COLOURS.fault}
-                      stroke-width={1}
-                      stroke-dasharray="2 3"
-                    />
+                  <g
+                    class={contour.top ? 'map-contour-top' : 'map-contour'}
+                    data-depth-km={contour.depthKm}
+                  >
+                    {!contour.top && (
+                      <path
+                        d={frame.path(contour.line)}
+                        fill="none"
+                        stroke={MAP_COLOURS.fault}
+                        stroke-width={1}
+                        stroke-dasharray="2 3"
+                      />
+                    )}
                     <text
                       x={x}
                       y={y - 3}
@@ -368,6 +377,22 @@ export function StudyMapLegend(props: {
           <li>
             {swatch(<line x1={2} y1={8} x2={26} y2={8} stroke={INK} stroke-width={2} />)}{' '}
             {tr.text('map.fault')}
+          </li>
+        )}
+        {study.sources.some((s) => s.kind === 'fault' && s.contours) && (
+          <li>
+            {swatch(
+              <line
+                x1={2}
+                y1={8}
+                x2={26}
+                y2={8}
+                stroke={MAP_COLOURS.fault}
+                stroke-width={1}
+                stroke-dasharray="2 3"
+              />,
+            )}{' '}
+            {tr.text('map.contours')}
           </li>
         )}
         {has('zone') && (

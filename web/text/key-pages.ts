@@ -46,6 +46,7 @@ export const PAGES_BY_PREFIX: Readonly<Record<string, readonly TextKey[]>> = {
   source: [EDITOR],
   error: ['languages.page.error'],
   firmness: [OVERVIEW, COMMUNITY],
+  zoneDepths: [OVERVIEW],
   handout: [HANDOUT],
   hazardMap: [OVERVIEW],
   limits: [LIMITS, COMMUNITY],

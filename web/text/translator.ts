@@ -81,7 +81,7 @@ export interface Translator {
   chance(probability: number): { readonly frequency: string; readonly percent: string };
   /** An MMI value in words: "MMI VI" or "MMI VI, almost VII" (format/intensity-words.ts). */
   mmi(value: number): string;
-  /** "14 km to the north-east", "about 40 km below this place" or "beneath or right beside this place". */
+  /** "14 km to the north-east", "right beside this place", "about 40 km below this place" or "right under this place" (direction-words.ts). */
   place(distanceKm: number, bearingDeg: number, depthBelowKm?: number): string;
   compass(point: Compass): string;
   /**
@@ -178,6 +178,7 @@ export function translator(
     place: (distanceKm, bearingDeg, depthBelowKm) => {
       const where = placeFrom(distanceKm, bearingDeg, depthBelowKm);
       if (where.kind === 'here') return t('place.here');
+      if (where.kind === 'beside') return t('place.beside');
       if (where.kind === 'below') return t('place.below', { km: self.number(where.depthKm) });
       return t('place.away', {
         km: self.number(where.distanceKm),

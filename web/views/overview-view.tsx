@@ -22,6 +22,8 @@ import type { Translator } from '../text/translator.ts';
 import { HazardMapPanel, type MapFormState } from './hazard-map-panel.tsx';
 import { VisitPriorityPanel, type VisitPriorityPanelProps } from './visit-priority-panel.tsx';
 import { ScreeningStatus } from './screening-status.tsx';
+import { ZoneDepthsSection } from './zone-depths-section.tsx';
+import { zoneDepthSummaries } from '../data/zone-depth-summary.ts';
 
 export interface OverviewProps {
   readonly page: PageContext;
@@ -73,6 +75,10 @@ export function OverviewView(props: OverviewProps) {
   const { study, studyId, rows } = props;
   const bands = new Map(rows?.map((r) => [r.communityId, r.bandId]) ?? []);
   const shown = props.maps.shown;
+  const zoneDepths = zoneDepthSummaries(
+    props.runs.screening?.results.diagnostics?.zoneDepths ?? [],
+    study.sources,
+  );
   // A map with too many points to draw is offered as a download only (hazard-map-panel.tsx).
   const drawn = shown?.layer
     ? { run: shown.run, layer: shown.layer, classes: layerClasses(shown.layer.points) }
@@ -285,6 +291,13 @@ export function OverviewView(props: OverviewProps) {
           </>
         )}
       </section>
+      {zoneDepths.length > 0 && props.runs.screening && (
+        <ZoneDepthsSection
+          tr={tr}
+          zones={zoneDepths}
+          resultsUrl={`/api/runs/${props.runs.screening.run.id}/results`}
+        />
+      )}
       {props.priority && (
         <VisitPriorityPanel tr={tr} studyId={studyId} years={props.years} {...props.priority} />
       )}

@@ -36,12 +36,15 @@ describe('directions in words', () => {
     expect(compassPoint(450)).toBe('E');
   });
 
-  test('under 1 km is "here"; distances round to the nearest km', () => {
+  test('at 0 km it is "here", under 1 km "beside"; distances round to the nearest km', () => {
     expect(placeFrom(0, 270)).toEqual({ kind: 'here' });
-    expect(placeFrom(0.99, 10)).toEqual({ kind: 'here' });
+    expect(placeFrom(0.001, 10)).toEqual({ kind: 'beside' });
+    expect(placeFrom(0.99, 10)).toEqual({ kind: 'beside' });
     expect(placeFrom(1, 10)).toEqual({ kind: 'away', distanceKm: 1, compass: 'N' });
     expect(placeFrom(34.5, 105)).toEqual({ kind: 'away', distanceKm: 35, compass: 'E' });
-    expect(translator('en').place(0, 270)).toBe('beneath or right beside this place');
+    expect(translator('en').place(0, 270)).toBe('right under this place');
+    expect(translator('en').place(0.4, 270)).toBe('right beside this place, less than 1 km away');
+    expect(translator('fr').place(0.4, 270)).toBe('juste à côté de cet endroit, à moins d’1 km');
     expect(translator('en').place(1234.4, 210)).toBe('1,234 km to the south-west');
   });
 
@@ -59,7 +62,8 @@ describe('directions in words', () => {
     expect(placeFrom(0, 90, 37.4)).toEqual({ kind: 'below', depthKm: 35 });
     expect(placeFrom(0, 90, 19.4)).toEqual({ kind: 'below', depthKm: 19 });
     expect(placeFrom(0, 90, 19.6)).toEqual({ kind: 'below', depthKm: 20 });
-    expect(placeFrom(0.5, 90, 3)).toEqual({ kind: 'below', depthKm: 3 });
+    // Only what truly lies under the place is "below": half a km off, a depth is not said.
+    expect(placeFrom(0.5, 90, 3)).toEqual({ kind: 'beside' });
     // At the fault's top edge (depth under half a km) or with no depth known it is "here".
     expect(placeFrom(0, 90, 0.4)).toEqual({ kind: 'here' });
     expect(placeFrom(0, 90)).toEqual({ kind: 'here' });
