@@ -6,6 +6,7 @@ import { validateDraft } from '../../api/operations/study-input.ts';
 import { IMPORTED_COMMUNITIES_FILE } from '../../api/operations/study-records.ts';
 import { withFaults } from '../../api/study/fault-files/add-faults.ts';
 import { parseJsonText } from '../../api/study/json-text.ts';
+import { motionFromForm, type MotionForm } from './motion-form.ts';
 import { sourceFromForm, type SourceForm } from './source-form.ts';
 
 /**
@@ -206,4 +207,16 @@ export function addSources(
   models: ModelCatalog,
 ): EditOutcome {
   return validated(withFaults(inputs.raw, features), models, inputs.communitiesCsv);
+}
+
+/** Replaces the ground-motion branches and settings with the page's and validates the whole study. */
+export function saveMotion(
+  inputs: StoredInputs,
+  form: MotionForm,
+  models: ModelCatalog,
+): EditOutcome {
+  const read = motionFromForm(inputs.raw, form, models);
+  if (!read.ok) return read;
+  const document = { ...inputs.raw, groundMotion: read.groundMotion, settings: read.settings };
+  return validated(document, models, inputs.communitiesCsv);
 }

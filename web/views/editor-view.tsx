@@ -360,6 +360,16 @@ export function EditorView(props: EditorViewProps) {
           <button type="submit">{tr.text('editor.upload.button')}</button>
         </form>
       </section>
+
+      <section aria-labelledby="motion-heading">
+        <h2 id="motion-heading">{tr.text('motion.heading')}</h2>
+        <p>{tr.text('motion.editorIntro')}</p>
+        <p>
+          <a class="button" href={`/studies/${studyId}/edit/ground-motion`}>
+            {tr.text('motion.link')}
+          </a>
+        </p>
+      </section>
     </PageShell>
   );
 }
