@@ -184,7 +184,12 @@ export function EditorView(props: EditorViewProps) {
                   <td data-label={tr.t('editor.col.site')}>
                     {c.vs30Basis === 'measured'
                       ? `${c.vs30} m/s`
-                      : `${c.siteClass} (${c.vs30} m/s)`}
+                      : c.vs30Proxy !== undefined
+                        ? tr.text('editor.siteProxy', {
+                            vs30: tr.number(c.vs30),
+                            siteClass: c.vs30Proxy.siteClass,
+                          })
+                        : `${c.siteClass} (${c.vs30} m/s)`}
                   </td>
                   <td class="numeric" data-label={tr.t('editor.col.people')}>
                     {c.population === undefined ? '' : tr.number(c.population)}
