@@ -1,4 +1,5 @@
 import type { HazardMapSummary } from '../engine/map/hazard-map.ts';
+import type { ElevationGrid } from '../engine/terrain/elevation-grid.ts';
 import {
   mapDescription,
   mapGeoJsonFeatures,
@@ -50,8 +51,18 @@ export class MapRuns {
     this.#jobs = new JobLifecycle(options.logError);
   }
 
-  /** Records a queued map run of `study` (the saved study `studyId`, validated) and starts it. */
-  start(studyId: string, study: Study, request: MapRunRequest, inputHash: string): MapRunRecord {
+  /**
+   * Records a queued map run of `study` (the saved study `studyId`, validated) and starts it.
+   * With `terrain` (the study's grid), each point on land takes the slope–Vs30 proxy and
+   * `request.vs30` holds only at sea and off the grid; the map's warnings say so.
+   */
+  start(
+    studyId: string,
+    study: Study,
+    request: MapRunRequest,
+    inputHash: string,
+    terrain?: ElevationGrid,
+  ): MapRunRecord {
     const record = this.#store.maps.create({ studyId, request, inputHash });
     const pieces: string[] = [];
     let description: MapDescription | undefined;
@@ -62,7 +73,7 @@ export class MapRuns {
       kind: 'map run',
       progressOf: 'points',
       launch: (signals) =>
-        hazardMapOnPool(this.#pool, study, request, {
+        hazardMapOnPool(this.#pool, study, terrain ? { ...request, terrain } : request, {
           ...(this.#chunks ? { chunks: this.#chunks } : {}),
           onStart: (d) => {
             description = mapDescription(d);

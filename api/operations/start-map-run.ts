@@ -1,4 +1,5 @@
 import { StudyTooLarge } from '../engine/errors.ts';
+import { terrainGridsOf } from './terrain-grids.ts';
 import { frameForStudy } from '../engine/geometry/projection.ts';
 import { MAP_VS30 } from '../engine/map/hazard-map.ts';
 import { mapGrid } from '../engine/map/map-grid.ts';
@@ -59,7 +60,8 @@ export async function checkMapWork(
  * Starts a hazard map of a saved study, for the API and the pages alike: the saved inputs are
  * validated and the map's work checked against the budget first (InvalidInput or
  * StudyTooLarge; nothing is recorded), then the map run is recorded, queued, with the Vs30 of
- * its grid filled in (MAP_VS30 unless asked), and handed to the map runs. Undefined when the
+ * its grid filled in (MAP_VS30 unless asked; without one asked, the study's terrain grid gives
+ * each point on land the slope–Vs30 proxy), and handed to the map runs. Undefined when the
  * study was deleted meanwhile.
  */
 export async function startMapRun(
@@ -67,10 +69,15 @@ export async function startMapRun(
   record: StudyRecord,
   request: MapRequest,
 ): Promise<MapRunRecord | undefined> {
-  const inputs = storedInputs(ctx.store, record);
-  const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
+  const inputs = storedInputs(ctx.store, record, terrainGridsOf(ctx));
+  const { study } = validateStudy(inputs.raw, ctx.models, inputs);
   await checkMapWork(ctx, study, request);
+  // Without a Vs30 asked for, a study's terrain grid gives each point on land the slope proxy.
+  const terrain =
+    request.vs30 === undefined && study.terrain !== undefined
+      ? await terrainGridsOf(ctx).grid(study.terrain)
+      : undefined;
   if (!ctx.store.studies.get(record.id)) return undefined;
   const full = { ...request, vs30: request.vs30 ?? MAP_VS30 };
-  return mapRunsOf(ctx).start(record.id, study, full, inputHash(study));
+  return mapRunsOf(ctx).start(record.id, study, full, inputHash(study), terrain);
 }

@@ -1,4 +1,5 @@
 import { inputHash } from '../results/input-hash.ts';
+import { terrainGridsOf } from './terrain-grids.ts';
 import type { ServiceContext } from './service-context.ts';
 import { measureStudy } from './study-size.ts';
 import type { StudyWork } from './work-budget.ts';
@@ -16,8 +17,8 @@ export async function startScreening(
   record: StudyRecord,
   signal?: AbortSignal,
 ): Promise<{ readonly run: RunRecord; readonly work: StudyWork } | undefined> {
-  const inputs = storedInputs(ctx.store, record);
-  const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
+  const inputs = storedInputs(ctx.store, record, terrainGridsOf(ctx));
+  const { study } = validateStudy(inputs.raw, ctx.models, inputs);
   const work = await measureStudy(ctx, study, signal);
   // The study may have been deleted while it was measured.
   if (!ctx.store.studies.get(record.id)) return undefined;

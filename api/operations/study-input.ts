@@ -2,7 +2,8 @@ import { InvalidInput, type InputIssue } from '../engine/errors.ts';
 import type { Study } from '../engine/model.ts';
 import type { ModelCatalog } from '../engine/motion/catalog.ts';
 import type { StudyRecord, Store } from '../store/index.ts';
-import { loadStudy, type StudyPart } from '../study/load-study.ts';
+import type { SiteProxy } from '../engine/terrain/site-proxy.ts';
+import { loadStudy, type LoadStudyOptions, type StudyPart } from '../study/load-study.ts';
 import { jsonDepthExceeds, MAX_JSON_DEPTH, parseJsonText } from '../study/json-text.ts';
 
 export interface ValidStudy {
@@ -40,21 +41,34 @@ function nestingIssues(raw: unknown): InputIssue[] {
 }
 
 /**
- * Validates a study document; throws InvalidInput listing every problem. `communitiesCsv` is
- * the text for a document whose `communities` names a CSV file (imported earlier).
+ * What a study document names and the caller has read: the CSV of a document whose
+ * `communities` names a file (imported earlier), and the slope–Vs30 proxy over the terrain
+ * grid it names (terrain-grids.ts), which communities without vs30 or a site class take.
  */
+export interface StudyFiles {
+  readonly communitiesCsv?: string | undefined;
+  readonly siteProxy?: SiteProxy | undefined;
+  /** Why the terrain grid the document names could not be read, when it could not. */
+  readonly terrainProblem?: string | undefined;
+}
+
+const loadOptions = (models: ModelCatalog, files: StudyFiles): LoadStudyOptions => ({
+  models,
+  ...(files.communitiesCsv === undefined ? {} : { communitiesCsv: files.communitiesCsv }),
+  ...(files.siteProxy === undefined ? {} : { siteProxy: files.siteProxy }),
+  ...(files.terrainProblem === undefined ? {} : { terrainProblem: files.terrainProblem }),
+});
+
+/** Validates a study document; throws InvalidInput listing every problem. */
 export function validateStudy(
   raw: unknown,
   models: ModelCatalog,
-  communitiesCsv?: string,
+  files: StudyFiles = {},
   pathPrefix?: string,
 ): ValidStudy {
   const tooDeep = nestingIssues(raw);
   if (tooDeep.length > 0) throw new InvalidInput(under(pathPrefix, tooDeep), 'invalid study');
-  const result = loadStudy(
-    raw,
-    communitiesCsv === undefined ? { models } : { models, communitiesCsv },
-  );
+  const result = loadStudy(raw, loadOptions(models, files));
   if (!result.ok) throw new InvalidInput(under(pathPrefix, result.issues), 'invalid study');
   return { study: result.study, warnings: under(pathPrefix, result.warnings) };
 }
@@ -67,24 +81,25 @@ export function validateStudy(
 export function validateDraft(
   raw: unknown,
   models: ModelCatalog,
-  communitiesCsv?: string,
+  files: StudyFiles = {},
 ): ValidStudy & { readonly missing: readonly StudyPart[] } {
   const tooDeep = nestingIssues(raw);
   if (tooDeep.length > 0) throw new InvalidInput(tooDeep, 'invalid study');
-  const result = loadStudy(raw, {
-    models,
-    allowIncomplete: true,
-    ...(communitiesCsv === undefined ? {} : { communitiesCsv }),
-  });
+  const result = loadStudy(raw, { ...loadOptions(models, files), allowIncomplete: true });
   if (!result.ok) throw new InvalidInput(result.issues, 'invalid study');
   return { study: result.study, warnings: result.warnings, missing: result.missing };
 }
 
-/** The inputs of a saved study: its document text and, when it names one, the imported CSV. */
-export interface StoredInputs {
+/** The inputs of a saved study: its document text and what it names (the imported CSV, the terrain's proxy). */
+export interface StoredInputs extends StudyFiles {
   readonly document: string;
   readonly raw: Record<string, unknown>;
-  readonly communitiesCsv?: string;
+}
+
+/** Terrain grids read beforehand (terrain-grids.ts), looked up by the document that names them. */
+export interface TerrainLookup {
+  siteProxyFor(document: unknown): SiteProxy | undefined;
+  problemWith(document: unknown): string | undefined;
 }
 
 /** A stored document is one the service validated before writing, so it parses. */
@@ -98,20 +113,39 @@ function parseStored(text: string): Record<string, unknown> {
   return parsed.value as Record<string, unknown>;
 }
 
-/** A saved study's document and, when its `communities` names a file, the latest imported CSV. */
-export function storedInputs(store: Store, record: StudyRecord): StoredInputs {
-  const raw = parseStored(record.document);
-  if (typeof raw.communities !== 'string') return { document: record.document, raw };
-  const csv = store.studies.latestFile(record.id, 'communities-csv');
-  return csv === undefined
-    ? { document: record.document, raw }
-    : { document: record.document, raw, communitiesCsv: csv };
+/** The proxy over the terrain grid a document names, or why it could not be read. */
+export function terrainFiles(document: unknown, terrain: TerrainLookup | undefined): StudyFiles {
+  return {
+    siteProxy: terrain?.siteProxyFor(document),
+    terrainProblem: terrain?.problemWith(document),
+  };
 }
 
-/** The study a run computed, from the inputs copied into it. */
+/**
+ * A saved study's document and, when its `communities` names a file, the latest imported CSV;
+ * with `terrain`, the proxy over the grid it names (read beforehand: TerrainGrids.prepare).
+ */
+export function storedInputs(
+  store: Store,
+  record: StudyRecord,
+  terrain?: TerrainLookup,
+): StoredInputs {
+  const raw = parseStored(record.document);
+  const named = terrainFiles(raw, terrain);
+  if (typeof raw.communities !== 'string') return { document: record.document, raw, ...named };
+  const csv = store.studies.latestFile(record.id, 'communities-csv');
+  return { document: record.document, raw, communitiesCsv: csv, ...named };
+}
+
+/** The study a run computed, from the inputs copied into it (and the proxy of the terrain it names). */
 export function runStudy(
   inputs: { document: string; communitiesCsv?: string },
   models: ModelCatalog,
+  terrain?: TerrainLookup,
 ): ValidStudy {
-  return validateStudy(parseStored(inputs.document), models, inputs.communitiesCsv);
+  const raw = parseStored(inputs.document);
+  return validateStudy(raw, models, {
+    communitiesCsv: inputs.communitiesCsv,
+    ...terrainFiles(raw, terrain),
+  });
 }

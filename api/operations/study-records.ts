@@ -6,7 +6,8 @@ import type { StudyRecord } from '../store/index.ts';
 import type { StudyWrite } from '../store/study-repository.ts';
 import { mapRunsOf } from './map-runs.ts';
 import type { ServiceContext } from './service-context.ts';
-import { storedInputs, validateDraft } from './study-input.ts';
+import { storedInputs, validateDraft, type StudyFiles } from './study-input.ts';
+import { terrainGridsOf } from './terrain-grids.ts';
 
 /**
  * What an imported communities file is called in the study document (DESIGN.md section 2 lets
@@ -24,9 +25,10 @@ export interface NewStudy {
 function checkedWrite(
   ctx: ServiceContext,
   document: Record<string, unknown>,
-  communitiesCsv: string | undefined,
+  files: StudyFiles,
 ): StudyWrite {
-  const { study } = validateDraft(document, ctx.models, communitiesCsv);
+  const { study } = validateDraft(document, ctx.models, files);
+  const { communitiesCsv } = files;
   return {
     name: study.name,
     document: JSON.stringify(document, null, 2),
@@ -47,7 +49,9 @@ export function createStudy(ctx: ServiceContext, input: NewStudy): StudyRecord {
     communities: input.communitiesCsv === undefined ? [] : IMPORTED_COMMUNITIES_FILE,
     sources: { type: 'FeatureCollection', features: [] },
   };
-  return ctx.store.studies.create(checkedWrite(ctx, document, input.communitiesCsv));
+  return ctx.store.studies.create(
+    checkedWrite(ctx, document, { communitiesCsv: input.communitiesCsv }),
+  );
 }
 
 /**
@@ -62,10 +66,8 @@ export function duplicateStudy(
   return ctx.store.transaction(() => {
     const record = ctx.store.studies.get(id);
     if (!record) return undefined;
-    const inputs = storedInputs(ctx.store, record);
-    return ctx.store.studies.create(
-      checkedWrite(ctx, { ...inputs.raw, name }, inputs.communitiesCsv),
-    );
+    const inputs = storedInputs(ctx.store, record, terrainGridsOf(ctx));
+    return ctx.store.studies.create(checkedWrite(ctx, { ...inputs.raw, name }, inputs));
   });
 }
 
@@ -79,8 +81,8 @@ export function renameStudy(
   name: string,
 ): StudyRecord | undefined {
   return ctx.store.studies.update(id, (current) => {
-    const inputs = storedInputs(ctx.store, current);
-    const { study } = validateDraft({ ...inputs.raw, name }, ctx.models, inputs.communitiesCsv);
+    const inputs = storedInputs(ctx.store, current, terrainGridsOf(ctx));
+    const { study } = validateDraft({ ...inputs.raw, name }, ctx.models, inputs);
     return { name: study.name, document: JSON.stringify({ ...inputs.raw, name }, null, 2) };
   });
 }

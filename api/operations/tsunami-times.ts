@@ -1,5 +1,3 @@
-import { stat } from 'node:fs/promises';
-import { fileURLToPath } from 'node:url';
 import { InvalidInput } from '../engine/errors.ts';
 import type { Study } from '../engine/model.ts';
 import type { ScenarioRequest } from '../engine/scenario/index.ts';
@@ -10,30 +8,23 @@ import {
   tsunamiScreening,
   type TsunamiResult,
 } from '../engine/tsunami/index.ts';
-import { readTerrainFile, terrainInFolder } from '../terrain/index.ts';
+import { TerrainGrids, terrainGridsOf } from './terrain-grids.ts';
 
-/** Where the service reads terrain grids: TREMORA_TERRAIN_DIR, else the demo folder (data-demo/). */
-export const DEFAULT_TERRAIN_DIR = fileURLToPath(new URL('../../data-demo/', import.meta.url));
-
-/** Results and grids kept: a few studies' worth (a demo grid is about 0.2 MB, a result a few kB). */
+/** Results kept: a few studies' worth (a result is a few kB). */
 const KEEP = 8;
 
 /**
- * Tsunami times for saved studies, shared by the API route and the pages: the terrain grid is
- * read from the terrain folder (bare file names only, terrain-path.ts) and kept while its file
- * is unchanged; results are kept by the study's input hash and the options, as they never
+ * Tsunami times for saved studies, shared by the API route and the pages: the terrain grid
+ * comes from the context's TerrainGrids (terrain-grids.ts); results are kept by the study's input hash and the options, as they never
  * change for the same inputs and grid. A solve takes about a second on the demo grid.
  */
 export class TsunamiTimes {
-  readonly #grids = new Map<string, { mtimeMs: number; grid: ElevationGrid }>();
-  readonly #results = new Map<string, TsunamiResult>();
   /** A number per grid read, so results from a replaced file are never served again. */
   readonly #gridIds = new WeakMap<ElevationGrid, number>();
+  readonly #results = new Map<string, TsunamiResult>();
   #nextGridId = 1;
 
-  constructor(
-    readonly folder: string = process.env.TREMORA_TERRAIN_DIR?.trim() || DEFAULT_TERRAIN_DIR,
-  ) {}
+  constructor(readonly grids: TerrainGrids = new TerrainGrids()) {}
 
   /** The study's terrain grid; InvalidInput naming the file when it has none or cannot be read. */
   async grid(study: Study): Promise<ElevationGrid> {
@@ -46,16 +37,8 @@ export class TsunamiTimes {
         },
       ]);
     }
-    const path = terrainInFolder(this.folder, study.terrain);
-    const mtimeMs = await stat(path).then(
-      (s) => s.mtimeMs,
-      () => -1,
-    );
-    const kept = this.#grids.get(path);
-    if (kept && kept.mtimeMs === mtimeMs) return kept.grid;
-    const grid = await readTerrainFile(path);
-    this.#gridIds.set(grid, this.#nextGridId++);
-    remember(this.#grids, path, { mtimeMs, grid });
+    const grid = await this.grids.grid(study.terrain);
+    if (!this.#gridIds.has(grid)) this.#gridIds.set(grid, this.#nextGridId++);
     return grid;
   }
 
@@ -102,7 +85,7 @@ const perContext = new WeakMap<object, TsunamiTimes>();
 export function tsunamiTimesOf(ctx: object): TsunamiTimes {
   let times = perContext.get(ctx);
   if (!times) {
-    times = new TsunamiTimes();
+    times = new TsunamiTimes(terrainGridsOf(ctx));
     perContext.set(ctx, times);
   }
   return times;

@@ -1,4 +1,5 @@
 import { Hono } from 'hono';
+import { prepareTerrain } from './prepare-terrain.ts';
 import { bodyLimit } from 'hono/body-limit';
 import { methodNotAllowed } from 'hono/method-not-allowed';
 import { allowedHosts } from './allowed-hosts.ts';
@@ -66,6 +67,8 @@ export function createApp(ctx: ServiceContext, options: CreateAppOptions = {}): 
         c.json(errorBody(`the request body is over the limit of ${maxSize} bytes`), 413),
     }),
   );
+
+  app.use(prepareTerrain(ctx));
 
   const api = new Hono();
   for (const routes of [

@@ -61,6 +61,8 @@ export interface LoadStudyOptions {
    * the caller: communities without vs30 or a site class take it.
    */
   readonly siteProxy?: SiteProxy;
+  /** Why the terrain grid the study names could not be read (reported at `terrain`). */
+  readonly terrainProblem?: string;
   /**
    * Accept a draft: a study with no communities or no sources yet (an empty list, or the key left
    * out). Everything it does hold is checked as usual; what it lacks comes back in `missing`, and
@@ -122,6 +124,8 @@ export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
           doc.terrain,
           ['terrain'],
         );
+  if (terrain !== undefined && options.terrainProblem !== undefined)
+    issues.add(['terrain'], options.terrainProblem);
   // Only on a study without other problems: the valid sources then keep their feature order.
   // The extent first: beyond it the local frame, and with it the estimates, do not hold.
   if (issues.issues.length === 0) checkStudyExtent(communities, sources, outline, issues);

@@ -128,6 +128,7 @@ const pages = (): readonly (readonly [string, string])[] => [
   ['source-editor', `/studies/${id}/edit/sources/orle-interface`],
   ['new-source', `/studies/${id}/edit/new-source`],
   ['fault-import', `/studies/${id}/edit/import-faults`],
+  ['ground-motion', `/studies/${id}/edit/ground-motion`],
   ['languages', '/languages'],
   ['study-rename', `/studies/${id}/rename`],
   ['study-copy', `/studies/${id}/duplicate`],

@@ -1,4 +1,5 @@
 import { InvalidInput, type InputIssue } from '../../api/engine/errors.ts';
+import { terrainGridsOf } from '../../api/operations/terrain-grids.ts';
 import type { Study } from '../../api/engine/model.ts';
 import type { StudyResult } from '../../api/engine/results.ts';
 import { inputHash } from '../../api/results/input-hash.ts';
@@ -44,10 +45,10 @@ export function readStudy(
 ): StudyData | undefined {
   const record = ctx.store.studies.get(id);
   if (!record) return undefined;
-  const inputs = storedInputs(ctx.store, record);
+  const inputs = storedInputs(ctx.store, record, terrainGridsOf(ctx));
   const draft = () => {
     try {
-      return validateDraft(inputs.raw, ctx.models, inputs.communitiesCsv);
+      return validateDraft(inputs.raw, ctx.models, inputs);
     } catch (error) {
       if (error instanceof InvalidInput) return undefined;
       throw error;
@@ -55,10 +56,10 @@ export function readStudy(
   };
   try {
     if (options.drafts) {
-      const { study, missing } = validateDraft(inputs.raw, ctx.models, inputs.communitiesCsv);
+      const { study, missing } = validateDraft(inputs.raw, ctx.models, inputs);
       return { ok: true, record, inputs, study, hash: inputHash(study), missing };
     }
-    const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
+    const { study } = validateStudy(inputs.raw, ctx.models, inputs);
     return { ok: true, record, inputs, study, hash: inputHash(study), missing: [] };
   } catch (error) {
     // A study saved before a rule changed may no longer validate; the pages say so.

@@ -2,10 +2,11 @@ import { InvalidInput, type InputIssue } from '../../api/engine/errors.ts';
 import type { Community } from '../../api/engine/model.ts';
 import type { ModelCatalog } from '../../api/engine/motion/catalog.ts';
 import type { StoredInputs } from '../../api/operations/study-input.ts';
-import { validateDraft } from '../../api/operations/study-input.ts';
+import { validateDraft, type StudyFiles } from '../../api/operations/study-input.ts';
 import { IMPORTED_COMMUNITIES_FILE } from '../../api/operations/study-records.ts';
 import { withFaults } from '../../api/study/fault-files/add-faults.ts';
 import { parseJsonText } from '../../api/study/json-text.ts';
+import { motionFromForm, type MotionForm } from './motion-form.ts';
 import { sourceFromForm, type SourceForm } from './source-form.ts';
 
 /**
@@ -79,10 +80,10 @@ export function communityList(
 function validated(
   document: Record<string, unknown>,
   models: ModelCatalog,
-  csv?: string,
+  files: StudyFiles = {},
 ): EditOutcome {
   try {
-    const { study } = validateDraft(document, models, csv);
+    const { study } = validateDraft(document, models, files);
     return { ok: true, document, name: study.name };
   } catch (error) {
     if (error instanceof InvalidInput) return { ok: false, issues: error.issues };
@@ -122,7 +123,10 @@ export function importCommunitiesCsv(
   csv: string,
   models: ModelCatalog,
 ): EditOutcome {
-  const outcome = validated({ ...inputs.raw, communities: IMPORTED_COMMUNITIES_FILE }, models, csv);
+  const outcome = validated({ ...inputs.raw, communities: IMPORTED_COMMUNITIES_FILE }, models, {
+    ...inputs,
+    communitiesCsv: csv,
+  });
   return outcome.ok ? { ...outcome, file: { kind: 'communities-csv', content: csv } } : outcome;
 }
 
@@ -134,11 +138,7 @@ export function importSourcesGeoJson(
 ): EditOutcome {
   const parsed = parseJsonText(text, 'sources');
   if (!parsed.ok) return { ok: false, issues: [parsed.issue] };
-  const outcome = validated(
-    { ...inputs.raw, sources: parsed.value },
-    models,
-    inputs.communitiesCsv,
-  );
+  const outcome = validated({ ...inputs.raw, sources: parsed.value }, models, inputs);
   return outcome.ok ? { ...outcome, file: { kind: 'sources-geojson', content: text } } : outcome;
 }
 
@@ -184,7 +184,7 @@ export function saveSource(
   if (!read.ok) return { ok: false, issues: [read.issue], index: at };
   list[at] = read.feature;
   const document = { ...inputs.raw, sources: { type: 'FeatureCollection', features: list } };
-  return { ...validated(document, models, inputs.communitiesCsv), index: at };
+  return { ...validated(document, models, inputs), index: at };
 }
 
 /** Removes the source at `index` and validates (without any left, the study is a draft again). */
@@ -196,7 +196,7 @@ export function removeSource(
   const list = sourceFeatures(inputs);
   list.splice(index, 1);
   const document = { ...inputs.raw, sources: { type: 'FeatureCollection', features: list } };
-  return validated(document, models, inputs.communitiesCsv);
+  return validated(document, models, inputs);
 }
 
 /** Adds source features after the study's own (which are kept) and validates the whole study. */
@@ -205,5 +205,17 @@ export function addSources(
   features: readonly Record<string, unknown>[],
   models: ModelCatalog,
 ): EditOutcome {
-  return validated(withFaults(inputs.raw, features), models, inputs.communitiesCsv);
+  return validated(withFaults(inputs.raw, features), models, inputs);
+}
+
+/** Replaces the ground-motion branches and settings with the page's and validates the whole study. */
+export function saveMotion(
+  inputs: StoredInputs,
+  form: MotionForm,
+  models: ModelCatalog,
+): EditOutcome {
+  const read = motionFromForm(inputs.raw, form, models);
+  if (!read.ok) return read;
+  const document = { ...inputs.raw, groundMotion: read.groundMotion, settings: read.settings };
+  return validated(document, models, inputs);
 }

@@ -212,7 +212,7 @@ export function catalogPages(app: Hono, kit: PageKit): void {
       sources: { ...(sources ?? {}), type: 'FeatureCollection', features },
     };
     try {
-      const { study } = validateStudy(document, ctx.models, data.inputs.communitiesCsv);
+      const { study } = validateStudy(document, ctx.models, data.inputs);
       ctx.store.studies.replace(data.record.id, {
         name: study.name,
         document: JSON.stringify(document, null, 2),

@@ -21,6 +21,7 @@ import { EditorView, type UploadProblem } from '../views/editor-view.tsx';
 import { MessageView } from '../views/message-view.tsx';
 import { field, fileField, type PageKit, uploadedOrCarried } from './page-kit.ts';
 import { faultImportPages } from './fault-import-pages.tsx';
+import { motionPages } from './motion-pages.tsx';
 import { sourcePages } from './source-pages.tsx';
 
 const EMPTY_FORM: CommunityForm = {
@@ -330,4 +331,5 @@ export function editorPages(app: Hono, kit: PageKit): void {
   };
   sourcePages(app, kit, steps);
   faultImportPages(app, kit, steps);
+  motionPages(app, kit, steps);
 }

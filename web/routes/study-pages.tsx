@@ -1,4 +1,5 @@
 import type { Context, Hono } from 'hono';
+import { terrainGridsOf } from '../../api/operations/terrain-grids.ts';
 import type { Child } from 'hono/jsx';
 import { InvalidInput, StudyTooLarge, TremoraError } from '../../api/engine/errors.ts';
 import { runStudy } from '../../api/operations/study-input.ts';
@@ -195,7 +196,9 @@ export function studyPages(app: Hono, kit: PageKit): void {
     const result = screening?.results.communities.find((r) => r.communityId === communityId);
     // The run's own inputs say where the community was when it was screened.
     const runInputs = screening ? ctx.store.runs.inputs(screening.run.id) : undefined;
-    const ranStudy = runInputs ? runStudy(runInputs, ctx.models).study : undefined;
+    const ranStudy = runInputs
+      ? runStudy(runInputs, ctx.models, terrainGridsOf(ctx)).study
+      : undefined;
     const community =
       ranStudy?.communities.find((x) => x.id === communityId) ??
       data.study.communities.find((x) => x.id === communityId);

@@ -44,6 +44,7 @@ export const PAGES_BY_PREFIX: Readonly<Record<string, readonly TextKey[]>> = {
   home: [HOME],
   editor: [EDITOR],
   source: [EDITOR],
+  motion: [EDITOR],
   error: ['languages.page.error'],
   firmness: [OVERVIEW, COMMUNITY],
   zoneDepths: [OVERVIEW],

@@ -3,7 +3,7 @@ import { SITE_CLASSES } from '../../api/study/site-class.ts';
 import type { CommunityForm } from '../data/study-edits.ts';
 import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 import type { TextKey } from '../text/text-key.ts';
-import { FieldProblems } from './field-problems.tsx';
+import { FieldProblems, FormProblems } from './field-problems.tsx';
 
 export interface CommunityFormViewProps {
   readonly page: PageContext;
@@ -73,17 +73,7 @@ export function CommunityFormView(props: CommunityFormViewProps) {
     >
       <h1>{tr.text(headingKey, heading)}</h1>
       <p>{tr.text('editor.intro')}</p>
-      {(props.otherIssues.length > 0 || props.fieldIssues.size > 0) && (
-        <p class="problem" role="alert">
-          {tr.text('editor.notSaved')}
-        </p>
-      )}
-      <FieldProblems
-        tr={tr}
-        id="form-problems"
-        issues={props.otherIssues}
-        describe={(i) => tr.english(`${i.path}: ${i.message}`)}
-      />
+      <FormProblems tr={tr} fieldIssues={props.fieldIssues} otherIssues={props.otherIssues} />
       <form method="post" action={props.action} class="community-form" novalidate>
         {TEXT_FIELDS.map(input)}
         <div class={problems('siteClass').length > 0 ? 'field field-bad' : 'field'}>

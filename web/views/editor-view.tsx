@@ -184,7 +184,12 @@ export function EditorView(props: EditorViewProps) {
                   <td data-label={tr.t('editor.col.site')}>
                     {c.vs30Basis === 'measured'
                       ? `${c.vs30} m/s`
-                      : `${c.siteClass} (${c.vs30} m/s)`}
+                      : c.vs30Proxy !== undefined
+                        ? tr.text('editor.siteProxy', {
+                            vs30: tr.number(c.vs30),
+                            siteClass: c.vs30Proxy.siteClass,
+                          })
+                        : `${c.siteClass} (${c.vs30} m/s)`}
                   </td>
                   <td class="numeric" data-label={tr.t('editor.col.people')}>
                     {c.population === undefined ? '' : tr.number(c.population)}
@@ -359,6 +364,16 @@ export function EditorView(props: EditorViewProps) {
           </div>
           <button type="submit">{tr.text('editor.upload.button')}</button>
         </form>
+      </section>
+
+      <section aria-labelledby="motion-heading">
+        <h2 id="motion-heading">{tr.text('motion.heading')}</h2>
+        <p>{tr.text('motion.editorIntro')}</p>
+        <p>
+          <a class="button" href={`/studies/${studyId}/edit/ground-motion`}>
+            {tr.text('motion.link')}
+          </a>
+        </p>
       </section>
     </PageShell>
   );

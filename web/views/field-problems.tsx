@@ -23,3 +23,30 @@ export function FieldProblems(props: {
     </ul>
   );
 }
+
+/**
+ * A form's heading problems: "nothing was saved" when any problem is shown, and the problems
+ * that belong to no field, each with its path.
+ */
+export function FormProblems(props: {
+  readonly tr: Translator;
+  readonly fieldIssues: ReadonlyMap<string, readonly InputIssue[]>;
+  readonly otherIssues: readonly InputIssue[];
+}) {
+  const { tr } = props;
+  return (
+    <>
+      {(props.otherIssues.length > 0 || props.fieldIssues.size > 0) && (
+        <p class="problem" role="alert">
+          {tr.text('editor.notSaved')}
+        </p>
+      )}
+      <FieldProblems
+        tr={tr}
+        id="form-problems"
+        issues={props.otherIssues}
+        describe={(i) => tr.english(`${i.path}: ${i.message}`)}
+      />
+    </>
+  );
+}

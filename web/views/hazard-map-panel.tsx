@@ -181,7 +181,11 @@ export function HazardMapPanel(props: HazardMapPanelProps) {
           </p>
           <FieldProblems tr={tr} id="hazard-map-spacingKm-problem" issues={issuesAt('spacingKm')} />
         </div>
-        <p class="help">{tr.text('hazardMap.vs30Form', { vs30: tr.number(MAP_VS30) })}</p>
+        <p class="help" id="hazard-map-vs30-help">
+          {props.study.terrain === undefined
+            ? tr.text('hazardMap.vs30Form', { vs30: tr.number(MAP_VS30) })
+            : tr.text('hazardMap.vs30Terrain', { vs30: tr.number(MAP_VS30) })}
+        </p>
         <FieldProblems tr={tr} id="hazard-map-other-problems" issues={others} />
         <button type="submit" class="button-primary">
           {tr.text('hazardMap.compute')}

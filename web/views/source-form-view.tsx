@@ -3,7 +3,7 @@ import { TECTONIC_SETTINGS } from '../../api/engine/model.ts';
 import type { SourceForm, SourceTextField } from '../data/source-form.ts';
 import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 import type { TextKey } from '../text/text-key.ts';
-import { FieldProblems } from './field-problems.tsx';
+import { FieldProblems, FormProblems } from './field-problems.tsx';
 
 export interface SourceFormViewProps {
   readonly page: PageContext;
@@ -103,17 +103,7 @@ export function SourceFormView(props: SourceFormViewProps) {
     >
       <h1>{tr.text(headingKey, heading)}</h1>
       <p>{tr.text('source.intro')}</p>
-      {(props.otherIssues.length > 0 || props.fieldIssues.size > 0) && (
-        <p class="problem" role="alert">
-          {tr.text('editor.notSaved')}
-        </p>
-      )}
-      <FieldProblems
-        tr={tr}
-        id="form-problems"
-        issues={props.otherIssues}
-        describe={(i) => tr.english(`${i.path}: ${i.message}`)}
-      />
+      <FormProblems tr={tr} fieldIssues={props.fieldIssues} otherIssues={props.otherIssues} />
       <form method="post" action={props.action} class="community-form source-form" novalidate>
         <fieldset>
           <legend>{tr.text('source.group.where')}</legend>

@@ -1,4 +1,5 @@
 import { Hono } from 'hono';
+import { terrainGridsOf } from '../../operations/terrain-grids.ts';
 import { fitCatalog } from '../../catalog/catalog-fit.ts';
 import { catalogFormat } from '../../catalog/catalog-formats.ts';
 import { readCatalogText } from '../../catalog/catalog-input.ts';
@@ -104,8 +105,8 @@ export function catalogRoutes(ctx: ServiceContext): Hono {
         'invalid felt request',
       );
     }
-    const inputs = storedInputs(store, findStudy(id));
-    const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
+    const inputs = storedInputs(store, findStudy(id), terrainGridsOf(ctx));
+    const { study } = validateStudy(inputs.raw, ctx.models, inputs);
     const communityId = c.req.query('community');
     const communities =
       communityId === undefined

@@ -1,8 +1,9 @@
 import { Hono } from 'hono';
+import { terrainGridsOf } from '../../operations/terrain-grids.ts';
 import { readJsonObject } from '../request-body.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
 import { inputHash } from '../../results/input-hash.ts';
-import { validateStudy } from '../../operations/study-input.ts';
+import { validateStudy, terrainFiles } from '../../operations/study-input.ts';
 import { measureStudy } from '../../operations/study-size.ts';
 
 /** Stateless work on a posted study: validate only, or screen it without saving anything. */
@@ -11,7 +12,12 @@ export function computeRoutes(ctx: ServiceContext): Hono {
 
   app.post('/validate', async (c) => {
     const { value } = await readJsonObject(c, 'a study document');
-    const { study, warnings } = validateStudy(value, ctx.models);
+    await terrainGridsOf(ctx).prepare(value);
+    const { study, warnings } = validateStudy(
+      value,
+      ctx.models,
+      terrainFiles(value, terrainGridsOf(ctx)),
+    );
     const work = await measureStudy(ctx, study, c.req.raw.signal);
     return c.json({
       valid: true,
@@ -32,7 +38,8 @@ export function computeRoutes(ctx: ServiceContext): Hono {
 
   app.post('/compute', async (c) => {
     const { value } = await readJsonObject(c, 'a study document');
-    const { study } = validateStudy(value, ctx.models);
+    await terrainGridsOf(ctx).prepare(value);
+    const { study } = validateStudy(value, ctx.models, terrainFiles(value, terrainGridsOf(ctx)));
     await measureStudy(ctx, study, c.req.raw.signal);
     const handle = ctx.runPool.run({
       kind: 'screen',

@@ -1,8 +1,14 @@
 import { Hono } from 'hono';
+import { terrainGridsOf } from '../../operations/terrain-grids.ts';
 import { notFound } from '../http-error.ts';
 import { CSV_TYPES, GEOJSON_TYPES, readJsonObject, readText } from '../request-body.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
-import { storedInputs, validateStudy, type ValidStudy } from '../../operations/study-input.ts';
+import {
+  storedInputs,
+  validateStudy,
+  type ValidStudy,
+  terrainFiles,
+} from '../../operations/study-input.ts';
 import { IMPORTED_COMMUNITIES_FILE } from '../../operations/study-records.ts';
 import { studyJson } from './studies.ts';
 
@@ -33,10 +39,13 @@ export function importRoutes(ctx: ServiceContext): Hono {
     let outcome: ValidStudy | undefined;
     const updated = studies.update(id, (record) => {
       const document = {
-        ...storedInputs(ctx.store, record).raw,
+        ...storedInputs(ctx.store, record, terrainGridsOf(ctx)).raw,
         communities: IMPORTED_COMMUNITIES_FILE,
       };
-      outcome = validateStudy(document, ctx.models, csv);
+      outcome = validateStudy(document, ctx.models, {
+        communitiesCsv: csv,
+        ...terrainFiles(document, terrainGridsOf(ctx)),
+      });
       return {
         name: outcome.study.name,
         document: JSON.stringify(document, null, 2),
@@ -60,9 +69,9 @@ export function importRoutes(ctx: ServiceContext): Hono {
     );
     let outcome: ValidStudy | undefined;
     const updated = studies.update(id, (record) => {
-      const inputs = storedInputs(ctx.store, record);
+      const inputs = storedInputs(ctx.store, record, terrainGridsOf(ctx));
       const document = { ...inputs.raw, sources: value };
-      outcome = validateStudy(document, ctx.models, inputs.communitiesCsv);
+      outcome = validateStudy(document, ctx.models, inputs);
       return {
         name: outcome.study.name,
         document: JSON.stringify(document, null, 2),

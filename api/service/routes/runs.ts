@@ -1,4 +1,5 @@
 import { Hono } from 'hono';
+import { terrainGridsOf } from '../../operations/terrain-grids.ts';
 import type { StudyResult } from '../../engine/results.ts';
 import { isFinished, type RunRecord } from '../../store/index.ts';
 import { HttpError, notFound } from '../http-error.ts';
@@ -83,7 +84,11 @@ export function runRoutes(ctx: ServiceContext): Hono {
 
   app.get('/runs/:runId/results.csv', (c) => {
     const { run, text, inputs } = finishedResults(c.req.param('runId'));
-    const { study } = runStudy(inputs as NonNullable<typeof inputs>, ctx.models);
+    const { study } = runStudy(
+      inputs as NonNullable<typeof inputs>,
+      ctx.models,
+      terrainGridsOf(ctx),
+    );
     return c.body(runCsv(study, JSON.parse(text) as StudyResult), 200, {
       'Content-Type': 'text/csv; charset=utf-8',
       'Content-Disposition': `attachment; filename="tremora-run-${run.id}.csv"`,
@@ -92,7 +97,11 @@ export function runRoutes(ctx: ServiceContext): Hono {
 
   app.get('/runs/:runId/results.geojson', (c) => {
     const { run, text, inputs } = finishedResults(c.req.param('runId'));
-    const { study } = runStudy(inputs as NonNullable<typeof inputs>, ctx.models);
+    const { study } = runStudy(
+      inputs as NonNullable<typeof inputs>,
+      ctx.models,
+      terrainGridsOf(ctx),
+    );
     return c.body(JSON.stringify(runGeoJson(study, JSON.parse(text) as StudyResult)), 200, {
       'Content-Type': 'application/geo+json; charset=utf-8',
       'Content-Disposition': `attachment; filename="tremora-run-${run.id}.geojson"`,

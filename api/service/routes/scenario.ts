@@ -1,4 +1,5 @@
 import { Hono } from 'hono';
+import { terrainGridsOf } from '../../operations/terrain-grids.ts';
 import { InvalidInput, type InputIssue } from '../../engine/errors.ts';
 import type { Study } from '../../engine/model.ts';
 import type { ScenarioRequest } from '../../engine/scenario/index.ts';
@@ -7,7 +8,7 @@ import { readJsonObject } from '../request-body.ts';
 import { readScenarioRequest } from '../../operations/scenario-request.ts';
 import { runQuickTask } from '../../operations/quick-task.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
-import { storedInputs, validateStudy } from '../../operations/study-input.ts';
+import { storedInputs, terrainFiles, validateStudy } from '../../operations/study-input.ts';
 
 /** Runs `work`, adding its InvalidInput issues to `issues` instead of throwing them. */
 function collect<T>(issues: InputIssue[], work: () => T): T | undefined {
@@ -36,8 +37,14 @@ export function scenarioRoutes(ctx: ServiceContext): Hono {
     );
     const issues: InputIssue[] = [];
     const { study: studyDocument, ...fields } = value;
+    await terrainGridsOf(ctx).prepare(studyDocument);
     const valid = collect(issues, () =>
-      validateStudy(studyDocument, ctx.models, undefined, 'study'),
+      validateStudy(
+        studyDocument,
+        ctx.models,
+        terrainFiles(studyDocument, terrainGridsOf(ctx)),
+        'study',
+      ),
     );
     const request = collect(issues, () => readScenarioRequest(fields));
     if (issues.length > 0 || !valid || !request) throw new InvalidInput(issues, 'invalid scenario');
@@ -55,8 +62,8 @@ export function scenarioRoutes(ctx: ServiceContext): Hono {
       'a scenario request ({ "sourceId": ..., "magnitude": ... })',
     );
     const request = readScenarioRequest(value);
-    const inputs = storedInputs(ctx.store, record);
-    const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
+    const inputs = storedInputs(ctx.store, record, terrainGridsOf(ctx));
+    const { study } = validateStudy(inputs.raw, ctx.models, inputs);
     return c.body(await answer(study, request, c.req.raw.signal), 200, {
       'Content-Type': 'application/json; charset=utf-8',
     });

@@ -1,4 +1,5 @@
 import { Hono } from 'hono';
+import { terrainGridsOf } from '../../operations/terrain-grids.ts';
 import type { StudySummary } from '../../store/index.ts';
 import { notFound } from '../http-error.ts';
 import { readJsonObject } from '../request-body.ts';
@@ -9,7 +10,7 @@ import {
   renameStudy,
 } from '../../operations/study-records.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
-import { storedInputs, validateStudy } from '../../operations/study-input.ts';
+import { storedInputs, validateStudy, terrainFiles } from '../../operations/study-input.ts';
 
 /** Where a study's parts and actions are. */
 export const studyLinks = (id: string) => ({
@@ -45,7 +46,12 @@ export function studyRoutes(ctx: ServiceContext): Hono {
 
   app.post('/studies', async (c) => {
     const { value, text } = await readJsonObject(c, 'a study document');
-    const { study, warnings } = validateStudy(value, ctx.models);
+    await terrainGridsOf(ctx).prepare(value);
+    const { study, warnings } = validateStudy(
+      value,
+      ctx.models,
+      terrainFiles(value, terrainGridsOf(ctx)),
+    );
     const record = studies.create({ name: study.name, document: text });
     return c.json({ ...studyJson(record), warnings }, 201, {
       Location: `/api/studies/${record.id}`,
@@ -54,7 +60,7 @@ export function studyRoutes(ctx: ServiceContext): Hono {
 
   app.get('/studies/:id', (c) => {
     const record = find(c.req.param('id'));
-    const inputs = storedInputs(ctx.store, record);
+    const inputs = storedInputs(ctx.store, record, terrainGridsOf(ctx));
     return c.json({
       ...studyJson(record),
       document: inputs.raw,
@@ -75,7 +81,11 @@ export function studyRoutes(ctx: ServiceContext): Hono {
       typeof value.communities === 'string'
         ? studies.latestFile(existing.id, 'communities-csv')
         : undefined;
-    const { study, warnings } = validateStudy(value, ctx.models, csv);
+    await terrainGridsOf(ctx).prepare(value);
+    const { study, warnings } = validateStudy(value, ctx.models, {
+      communitiesCsv: csv,
+      ...terrainFiles(value, terrainGridsOf(ctx)),
+    });
     const record = studies.replace(id, { name: study.name, document: text });
     if (!record) throw notFound('study', id);
     return c.json({ ...studyJson(record), warnings });

@@ -1,4 +1,5 @@
 import { Hono } from 'hono';
+import { terrainGridsOf } from '../../operations/terrain-grids.ts';
 import { z } from 'zod';
 import { InvalidInput } from '../../engine/errors.ts';
 import { SLOW_WALK_MS } from '../../engine/tsunami/index.ts';
@@ -42,8 +43,8 @@ export function tsunamiRoutes(ctx: ServiceContext): Hono {
     );
     if (issues.issues.length > 0 || !query)
       throw new InvalidInput(issues.issues, 'invalid tsunami request');
-    const inputs = storedInputs(ctx.store, record);
-    const { study } = validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv);
+    const inputs = storedInputs(ctx.store, record, terrainGridsOf(ctx));
+    const { study } = validateStudy(inputs.raw, ctx.models, inputs);
     const result = await tsunamiTimesOf(ctx).forStudy(study, inputHash(study), {
       ...(query.source ? { sourceIds: query.source } : {}),
       ...(query.highGroundM !== undefined ? { highGroundM: query.highGroundM } : {}),

@@ -1,4 +1,5 @@
 import { Hono } from 'hono';
+import { terrainGridsOf } from '../../operations/terrain-grids.ts';
 import { visitCsv } from '../../results/visit-csv.ts';
 import type { VisitRecord } from '../../store/visit-repository.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
@@ -23,8 +24,8 @@ export function visitRoutes(ctx: ServiceContext): Hono {
   const findStudy = (id: string) => {
     const record = store.studies.get(id);
     if (!record) throw notFound('study', id);
-    const inputs = storedInputs(store, record);
-    return validateStudy(inputs.raw, ctx.models, inputs.communitiesCsv).study;
+    const inputs = storedInputs(store, record, terrainGridsOf(ctx));
+    return validateStudy(inputs.raw, ctx.models, inputs).study;
   };
 
   app.get('/studies/:id/visits', (c) => {

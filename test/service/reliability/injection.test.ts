@@ -193,7 +193,7 @@ const FILE_SYSTEM_USERS: Readonly<Record<string, string>> = {
   'api/study/read-study-file.ts': 'the CLI reads the study file it is given',
   'web/routes/static-files.ts': 'reads web/static/ by fixed names at start',
   'web/data/study-catalog.ts': 'reads the demo catalog by a fixed name',
-  'api/operations/tsunami-times.ts':
+  'api/operations/terrain-grids.ts':
     "stats the study's terrain grid, a bare file name in TREMORA_TERRAIN_DIR",
   'web/text/text-bundles.ts': 'reads the text bundles of web/text/bundles/ and the imported ones',
   'web/text/imported-bundles.ts':

@@ -98,7 +98,10 @@ describe('the hazard map on the overview', () => {
         span: en.number(suggested.spanKm),
       }),
     );
-    expect(html).toContain(en.t('hazardMap.vs30Form', { vs30: '760' }));
+    // The demo names a terrain grid: each point on land takes the slope–Vs30 proxy.
+    expect(textOfId(html, 'hazard-map-vs30-help')).toBe(
+      en.t('hazardMap.vs30Terrain', { vs30: '760' }),
+    );
   });
 
   test('a form post records a queued map and goes to its progress page, which follows it with a link and no meta refresh', async () => {
