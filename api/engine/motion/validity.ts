@@ -61,8 +61,8 @@ export function requireInputs(
 }
 
 /** Whether `value` lies outside [min, max] (NaN lies inside: the input checks refuse it first). */
-const isOutside = (value: number, [min, max]: readonly [number, number]): boolean =>
-  value < min || value > max;
+const isOutside = (value: number, range: readonly [number, number]): boolean =>
+  value < range[0] || value > range[1];
 
 /**
  * Notes for every input outside a model's stated validity range; empty when all are inside.
