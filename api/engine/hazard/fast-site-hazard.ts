@@ -4,7 +4,13 @@ import { TECTONIC_SETTINGS } from '../model.ts';
 import type { TectonicSetting } from '../model.ts';
 import { measureLabel } from '../motion/measure.ts';
 import { createPairPredictions } from '../motion/prepared-period.ts';
-import type { DistanceName, PairPredictions, SiteContext } from '../motion/types.ts';
+import type {
+  DistanceName,
+  PairDistances,
+  PairPredictions,
+  RuptureContext,
+  SiteContext,
+} from '../motion/types.ts';
 import type { HazardCurve } from '../results.ts';
 import {
   accumulatePairs,
@@ -22,7 +28,7 @@ import {
 } from './logic-tree.ts';
 import { pairDistanceContext, preparedMotions, type LazyMotions } from './prepared-motion.ts';
 import { gmmInput } from './gmm-input.ts';
-import { ruptureContexts, settingRuptures, type RuptureTable } from './rupture-table.ts';
+import { distinctContexts, settingRuptures, type RuptureTable } from './rupture-table.ts';
 import type { HazardBranch, HazardMeasure, ValiditySummary } from './hazard-types.ts';
 import { ruptureGeometry, type RuptureGeometry } from './rupture-geometry.ts';
 import { createPairBuffer, siteDistances, type PairBuffer } from './site-distances.ts';
@@ -73,10 +79,14 @@ export interface SettingWork {
   readonly setting: TectonicSetting;
   readonly ruptures: Int32Array;
   readonly rates: Float64Array;
-  readonly contexts: ReturnType<typeof ruptureContexts>;
+  /** The distinct contexts of the ruptures (the models are prepared on these) and each rupture's. */
+  readonly contexts: readonly RuptureContext[];
+  readonly contextOf: Int32Array;
   readonly branches: readonly BranchWork[];
   readonly distances: ReadonlySet<DistanceName>;
   readonly pairs: PairBuffer;
+  /** The same pairs as the models see them: the same distance columns, each pair's context for its rupture. */
+  readonly contextPairs: PairBuffer;
   /** One per measure. */
   readonly predictions: readonly PairPredictions[];
   readonly tree?: TreeSettingWork;
@@ -97,7 +107,7 @@ export function createFastHazard(options: FastHazardOptions): FastHazard {
     const given = options.branches[setting];
     if (!given || given.length === 0) continue;
     const ruptures = settingRuptures(table, setting);
-    const contexts = ruptureContexts(table, ruptures);
+    const { contexts, contextOf } = distinctContexts(table, ruptures);
     const measures = options.measures.map((m) => m.measure);
     const branches = given.map(({ model, weight }) => ({
       model,
@@ -107,14 +117,17 @@ export function createFastHazard(options: FastHazardOptions): FastHazard {
     }));
     const distances = new Set<DistanceName>(branches.flatMap((b) => b.motions.distances));
     if (options.keepFirstMeasure) distances.add('rrupKm');
+    const pairs = createPairBuffer(ruptures.length);
     settings.push({
       setting,
       ruptures,
       rates: ruptures.length === 0 ? new Float64Array(0) : gather(table.annualRate, ruptures),
       contexts,
+      contextOf,
       branches,
       distances,
-      pairs: createPairBuffer(ruptures.length),
+      pairs,
+      contextPairs: { ...pairs, rupture: new Int32Array(ruptures.length) },
       predictions: options.measures.map(() => createPairPredictions(ruptures.length)),
       ...(options.sourceTree
         ? {
@@ -134,6 +147,18 @@ export function createFastHazard(options: FastHazardOptions): FastHazard {
     exceedance: exceedanceTable(options.truncationSigma),
     settings,
   };
+}
+
+/**
+ * The setting's pairs at the current site (after siteDistances) as the models see them: each
+ * pair's rupture replaced by its context's index. The distance columns are the pairs' own.
+ */
+export function contextPairsOf(work: SettingWork): PairDistances {
+  const { pairs, contextPairs, contextOf } = work;
+  for (let k = 0; k < pairs.count; k++)
+    contextPairs.rupture[k] = contextOf[pairs.rupture[k] as number] as number;
+  contextPairs.count = pairs.count;
+  return contextPairs;
 }
 
 /** values[indices[k]] for each k. */
@@ -205,6 +230,7 @@ export function fastSiteHazard(
         ruptureIndex[k] = work.ruptures[pairs.rupture[k] as number] as number;
     }
     const rrupKm = options.keepFirstMeasure ? pairs.rrupKm.slice(0, count) : undefined;
+    const modelPairs = contextPairsOf(work);
 
     work.branches.forEach((branch, branchIndex) => {
       const summary = validity.get(branch.model.name) ?? {
@@ -212,7 +238,7 @@ export function fastSiteHazard(
         evaluated: 0,
         firstNote: '',
       };
-      if (count > 0) branch.motions.predict(at.site, pairs, predictions);
+      if (count > 0) branch.motions.predict(at.site, modelPairs, predictions);
       measures.forEach((m, i) => {
         const curve = branch.curves[i] as CurveAccumulator;
         const prediction = predictions[i] as PairPredictions;
@@ -319,7 +345,7 @@ export function noteOf(
   const distances = pairDistanceContext(hazard.geometry, work.ruptures[local] as number, at.point);
   const measure = (hazard.options.measures[measureIndex] as HazardMeasure).measure;
   const prediction = branch.model.predict(
-    gmmInput(work.contexts[local]!, distances, at.site),
+    gmmInput(work.contexts[work.contextOf[local] as number]!, distances, at.site),
     measure,
   );
   return prediction.notes[0] ?? `${branch.model.name}: outside its validity range`;

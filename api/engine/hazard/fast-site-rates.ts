@@ -11,6 +11,7 @@ import {
   type LevelCoefficients,
 } from './curve-accumulator.ts';
 import {
+  contextPairsOf,
   noteOf,
   type BranchWork,
   type FastHazard,
@@ -81,6 +82,7 @@ export function fastSiteRates(rates: FastRates, at: FastSite, measureIndex = 0):
       pairs,
     );
     const count = pairs.count;
+    const modelPairs = contextPairsOf(work);
     for (const branch of work.branches) {
       const all = rates.predictions.get(branch)!;
       const predictions = all[measureIndex]!;
@@ -90,7 +92,7 @@ export function fastSiteRates(rates: FastRates, at: FastSite, measureIndex = 0):
         firstNote: '',
       };
       if (count > 0) {
-        branch.motions.predict(at.site, pairs, all);
+        branch.motions.predict(at.site, modelPairs, all);
         const { lnMedian, sigma: sigmas, applicable } = predictions;
         let firstOutside = -1;
         for (let k = 0; k < count; k++) {

@@ -78,12 +78,38 @@ export function settingRuptures(table: RuptureTable, setting: TectonicSetting): 
   return kept;
 }
 
-/** The rupture contexts of the listed ruptures, for the ground-motion models. */
-export function ruptureContexts(table: RuptureTable, indices: Int32Array): RuptureContext[] {
-  const contexts: RuptureContext[] = [];
-  for (const i of indices) contexts.push(contextAt(table, i));
-  return contexts;
+/**
+ * The distinct rupture contexts of the listed ruptures, for the ground-motion models, and the
+ * place of each listed rupture among them. Many ruptures share one — every cell of a zone at one
+ * magnitude and depth, every position along strike of a floating rupture — so a model's work on
+ * the rupture alone is done once per context, not once per rupture.
+ */
+export interface DistinctContexts {
+  readonly contexts: readonly RuptureContext[];
+  /** contextOf[k] is the index in `contexts` of the rupture indices[k]. */
+  readonly contextOf: Int32Array;
 }
+
+export function distinctContexts(table: RuptureTable, indices: Int32Array): DistinctContexts {
+  const contexts: RuptureContext[] = [];
+  const contextOf = new Int32Array(indices.length);
+  const seen = new Map<string, number>();
+  indices.forEach((i, k) => {
+    const key = contextKey(table, i);
+    let at = seen.get(key);
+    if (at === undefined) {
+      at = contexts.push(contextAt(table, i)) - 1;
+      seen.set(key, at);
+    }
+    contextOf[k] = at;
+  });
+  return { contexts, contextOf };
+}
+
+/** Every number of rupture i's context, exactly (String keeps every bit of a double). */
+const contextKey = (table: RuptureTable, i: number): string =>
+  `${table.magnitude[i]}|${table.rakeDeg[i]}|${table.mechanism[i]}|${table.setting[i]}|` +
+  `${table.dipDeg[i]}|${table.ztorKm[i]}|${table.widthKm[i]}|${table.hypoDepthKm[i]}`;
 
 function contextAt(table: RuptureTable, i: number): RuptureContext {
   return {

@@ -56,6 +56,7 @@
  * (../shared/reference/gmm/vectors/ask14.json, an independent implementation of the paper) within 1e-4.
  */
 import { toRadians } from '../units.ts';
+import { hypot2 } from './fast-math.ts';
 import {
   ASK14_CONSTANTS as K,
   ASK14_PGA,
@@ -66,9 +67,11 @@ import {
 import type { Measure } from './measure.ts';
 import { assembleModel } from './model-assembly.ts';
 import {
+  emptyPairPrediction,
   predictSplit,
   requirePositivePeriod,
   splitPrepareMeasures,
+  type PairPrediction,
   type SplitModel,
 } from './split-prepare.ts';
 import type {
@@ -78,7 +81,7 @@ import type {
   SiteContext,
   ValidityRange,
 } from './types.ts';
-import { requireInputs, validityNotes } from './validity.ts';
+import { insideValidity, requireInputs, validityNotes } from './validity.ts';
 
 const NAME = 'ASK14';
 const SA_PERIODS_S: readonly number[] = Object.freeze(ASK14_SA.map((r) => r.periodS));
@@ -207,7 +210,7 @@ export function ask14HangingWallTaper(r1Km: number, rxKm: number, ry0Km: number)
 
 /** f1's distance part plus F_HW f4 (ln units): everything of the pair but the site. */
 export function ask14PathTerm(t: Ask14RuptureTerms, d: Ask14Distances): number {
-  const rKm = Math.hypot(d.rrupKm, t.c4mKm);
+  const rKm = hypot2(d.rrupKm, t.c4mKm);
   const hangingWall =
     d.rxKm >= 0 && t.hangingWall !== 0
       ? t.hangingWall * ask14HangingWallTaper(t.r1Km, d.rxKm, d.ry0Km)
@@ -252,12 +255,13 @@ export function ask14BasinTerm(row: Ask14Row, vs30: number, z1Km: number | undef
   return slope * Math.log((z1Km + 0.01) / (ask14DefaultZ1Km(vs30) + 0.01));
 }
 
-/** Median (ln units) and standard deviations of one row for one rupture–site pair. */
+/** Median (ln units) and standard deviations of one row for one rupture–site pair, written into `out`. */
 export function ask14PairPrediction(
   t: Ask14RuptureTerms,
   d: Ask14Distances,
   site: SiteContext,
-): { lnMedian: number; tau: number; phi: number; sigma: number } {
+  out: PairPrediction = emptyPairPrediction(),
+): PairPrediction {
   const { row } = t;
   const rockLn = t.sourceLn + ask14PathTerm(t, d);
   const sa1180 = Math.exp(rockLn + ask14SiteTerm(row, ASK14_ROCK_VS30, 0));
@@ -268,7 +272,11 @@ export function ask14PairPrediction(
   const phiB2 = phiA * phiA - K.phiAmp * K.phiAmp;
   const phi = Math.sqrt(phiB2 * (1 + slope) ** 2 + K.phiAmp * K.phiAmp);
   const tau = t.tauA * (1 + slope);
-  return { lnMedian, tau, phi, sigma: Math.hypot(phi, tau) };
+  out.lnMedian = lnMedian;
+  out.tau = tau;
+  out.phi = phi;
+  out.sigma = Math.sqrt(phi * phi + tau * tau);
+  return out;
 }
 
 /** Validity: the paper's abstract (M, Rrup, periods) and its stated Vs30 range (from memory). */
@@ -330,8 +338,10 @@ const SPLIT: SplitModel<Ask14Row, Ask14RuptureTerms> = {
   checkMeasure: requirePositivePeriod,
   checkRupture: (rupture) => void ruptureOf(rupture as GmmInput),
   ruptureTerms: (row, rupture) => ask14RuptureTerms(row, ruptureOf(rupture as GmmInput)),
-  pairPrediction: (terms, pair) => ask14PairPrediction(terms, pair, pair),
-  applicable: (pair) => notesOf(pair).length === 0,
+  pairPrediction: (terms, pair, out) => void ask14PairPrediction(terms, pair, pair, out),
+  // notesOf's checks, answered without building the notes.
+  applicable: (pair) =>
+    pair.setting === 'crustal' && insideValidity(ASK14_VALIDITY, pair, pair.rrupKm),
 };
 
 /** Abrahamson, Silva & Kamai (2014) for shallow crustal earthquakes (Rrup): PGA, PGV, PSA 0.01–10 s. */

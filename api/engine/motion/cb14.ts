@@ -50,6 +50,7 @@
  * test/engine/motion/cb14.vectors.test.ts (independent reference vectors, 1e-4 in ln units).
  */
 import { toRadians } from '../units.ts';
+import { hypot2 } from './fast-math.ts';
 import {
   CB14_CONSTANTS as K,
   CB14_PGA,
@@ -60,9 +61,11 @@ import {
 import type { Measure } from './measure.ts';
 import { assembleModel } from './model-assembly.ts';
 import {
+  emptyPairPrediction,
   predictSplit,
   requirePositivePeriod,
   splitPrepareMeasures,
+  type PairPrediction,
   type SplitModel,
 } from './split-prepare.ts';
 import type {
@@ -72,7 +75,7 @@ import type {
   RuptureContext,
   ValidityRange,
 } from './types.ts';
-import { requireInputs, validityNotes } from './validity.ts';
+import { insideValidity, requireInputs, validityNotes, within } from './validity.ts';
 
 const NAME = 'CB14';
 
@@ -109,7 +112,7 @@ export function cb14MagnitudeTerm(row: Cb14Row, m: number): number {
 
 /** f_dis (ln units) for Rrup in km. */
 export function cb14DistanceTerm(row: Cb14Row, m: number, rrupKm: number): number {
-  return (row.c5 + row.c6 * m) * Math.log(Math.hypot(rrupKm, row.c7));
+  return (row.c5 + row.c6 * m) * Math.log(hypot2(rrupKm, row.c7));
 }
 
 /** f_flt (ln units): style of faulting, faded in between M 4.5 and 5.5. */
@@ -140,24 +143,60 @@ export function cb14HangingWallRxTaper(
   return Math.max(K.h4 + row.h5 * x + row.h6 * x * x, 0);
 }
 
+/** c10 f_M f_Z f_δ: the factors of f_hng that depend on the rupture alone (0 where the term is off). */
+export function cb14HangingWallScale(
+  row: Cb14Row,
+  m: number,
+  ztorKm: number,
+  dipDeg: number,
+): number {
+  if (m <= 5.5 || ztorKm > 16.66) return 0;
+  const fM = m <= 6.5 ? (m - 5.5) * (1 + row.a2 * (m - 6.5)) : 1 + row.a2 * (m - 6.5);
+  const fZ = 1 - 0.06 * ztorKm;
+  const fDip = (90 - dipDeg) / 45;
+  return row.c10 * fM * fZ * fDip;
+}
+
+/** The rupture's hanging-wall geometry: R1 = W cos δ and R2 = 62 M − 350, km. */
+interface HangingWallGeometry {
+  readonly r1Km: number;
+  readonly r2Km: number;
+}
+
+const hangingWallGeometry = (
+  s: Pick<Cb14Scenario, 'widthKm' | 'dipDeg' | 'magnitude'>,
+): HangingWallGeometry => ({
+  r1Km: s.widthKm * Math.cos(toRadians(s.dipDeg)),
+  r2Km: 62 * s.magnitude - 350,
+});
+
+/** f_Rrup = (Rrup − Rjb)/Rrup, 1 at Rrup = 0. */
+function rrupTaper(rrupKm: number, rjbKm: number): number {
+  // Rjb ≤ Rrup by definition; the clamp keeps rounding in the distance code from making this negative.
+  return rrupKm === 0 ? 1 : Math.max(rrupKm - rjbKm, 0) / rrupKm;
+}
+
+/** f_hng of a pair from the rupture's scale (cb14HangingWallScale) and geometry. */
+function hangingWallOfPair(
+  row: Cb14Row,
+  scale: number,
+  g: HangingWallGeometry,
+  rxKm: number,
+  fRrup: number,
+): number {
+  if (rxKm < 0 || scale === 0) return 0;
+  return scale * cb14HangingWallRxTaper(row, rxKm, g.r1Km, g.r2Km) * fRrup;
+}
+
 /** f_hng (ln units): the hanging-wall term; zero on the footwall (Rx < 0) and for vertical faults. */
 export function cb14HangingWallTerm(row: Cb14Row, s: Cb14Scenario): number {
-  if (s.rxKm < 0 || s.magnitude <= 5.5 || s.ztorKm > 16.66) return 0;
-  const fRx = cb14HangingWallRxTaper(
+  return hangingWallOfPair(
     row,
+    cb14HangingWallScale(row, s.magnitude, s.ztorKm, s.dipDeg),
+    hangingWallGeometry(s),
     s.rxKm,
-    s.widthKm * Math.cos(toRadians(s.dipDeg)),
-    62 * s.magnitude - 350,
+    rrupTaper(s.rrupKm, s.rjbKm),
   );
-  // Rjb ≤ Rrup by definition; the clamp keeps rounding in the distance code from making this negative.
-  const fRrup = s.rrupKm === 0 ? 1 : Math.max(s.rrupKm - s.rjbKm, 0) / s.rrupKm;
-  const fM =
-    s.magnitude <= 6.5
-      ? (s.magnitude - 5.5) * (1 + row.a2 * (s.magnitude - 6.5))
-      : 1 + row.a2 * (s.magnitude - 6.5);
-  const fZ = 1 - 0.06 * s.ztorKm;
-  const fDip = (90 - s.dipDeg) / 45;
-  return row.c10 * fRx * fRrup * fM * fZ * fDip;
 }
 
 /** f_site (ln units) for Vs30 in m/s and A1100 in g (the Japan term off). */
@@ -224,13 +263,21 @@ export function cb14LnMedianFromSource(
   a1100G: number,
 ): number {
   return (
-    source +
-    cb14DistanceTerm(row, s.magnitude, s.rrupKm) +
-    cb14HangingWallTerm(row, s) +
+    lnRockPath(row, source, s.magnitude, s.rrupKm, cb14HangingWallTerm(row, s)) +
     cb14SiteTerm(row, vs30, a1100G) +
-    cb14BasinTerm(row, z2p5Km) +
-    cb14AnelasticTerm(row, s.rrupKm)
+    cb14BasinTerm(row, z2p5Km)
   );
+}
+
+/** The source, distance, hanging-wall and anelastic terms of one row (ln units): all but site and basin. */
+function lnRockPath(
+  row: Cb14Row,
+  source: number,
+  m: number,
+  rrupKm: number,
+  hangingWall: number,
+): number {
+  return source + cb14DistanceTerm(row, m, rrupKm) + hangingWall + cb14AnelasticTerm(row, rrupKm);
 }
 
 /** Vs30 of the paper's reference rock, m/s. */
@@ -239,11 +286,31 @@ export const CB14_ROCK_VS30 = 1100;
 /** Z2.5 (km) of the reference rock, the paper's default for Vs30 = 1100 m/s. */
 const ROCK_Z2P5_KM = cb14DefaultZ2p5Km(CB14_ROCK_VS30);
 
-/** A1100 from the PGA row's source term: median PGA (g) of the event on reference rock (Vs30 = 1100 m/s, its default Z2.5). */
-function a1100FromSource(pgaSource: number, s: Cb14Scenario): number {
-  // On rock above k1 the site term does not depend on A1100, so any value serves here.
-  return Math.exp(cb14LnMedianFromSource(CB14_PGA, pgaSource, s, CB14_ROCK_VS30, ROCK_Z2P5_KM, 0));
+/**
+ * The PGA row's site and basin terms on the reference rock (Vs30 = 1100 m/s, its default Z2.5),
+ * ln units. On rock above k1 the site term does not depend on A1100, so any value serves.
+ */
+const ROCK_SITE_LN =
+  cb14SiteTerm(CB14_PGA, CB14_ROCK_VS30, 0) + cb14BasinTerm(CB14_PGA, ROCK_Z2P5_KM);
+
+/** Magnitudes 4.5 and 5.5 bound the ramp of τ and φ between the small- and large-event values. */
+const rampM = (m: number, small: number, large: number): number =>
+  m <= 4.5 ? small : m >= 5.5 ? large : large + (small - large) * (5.5 - m);
+
+/** The magnitude-ramped τ and φ of a row and of the PGA row (ln units): what σ needs of the rupture. */
+interface Cb14SigmaTerms {
+  readonly tauY: number;
+  readonly phiY: number;
+  readonly tauPga: number;
+  readonly phiPga: number;
 }
+
+const sigmaTerms = (row: Cb14Row, m: number): Cb14SigmaTerms => ({
+  tauY: rampM(m, row.tau1, row.tau2),
+  phiY: rampM(m, row.phi1, row.phi2),
+  tauPga: rampM(m, CB14_PGA.tau1, CB14_PGA.tau2),
+  phiPga: rampM(m, CB14_PGA.phi1, CB14_PGA.phi2),
+});
 
 /** τ, φ and σ (ln units) of a row, with the nonlinear-site correction for Vs30 (m/s) below k1. */
 export function cb14Sigma(
@@ -252,21 +319,30 @@ export function cb14Sigma(
   vs30: number,
   a1100G: number,
 ): { tau: number; phi: number; sigma: number } {
-  // Magnitudes 4.5 and 5.5 bound the ramp between the small- and large-event values.
-  const ramp = (small: number, large: number): number =>
-    m <= 4.5 ? small : m >= 5.5 ? large : large + (small - large) * (5.5 - m);
-  const tauY = ramp(row.tau1, row.tau2);
-  const phiY = ramp(row.phi1, row.phi2);
+  return sigmaInto(row, sigmaTerms(row, m), vs30, a1100G, emptyPairPrediction());
+}
+
+/** cb14Sigma written into `out` from the rupture's ramped values. */
+function sigmaInto(
+  row: Cb14Row,
+  t: Cb14SigmaTerms,
+  vs30: number,
+  a1100G: number,
+  out: PairPrediction,
+): PairPrediction {
+  const { tauY, phiY, tauPga } = t;
   const alpha =
     vs30 < row.k1
       ? row.k2 * a1100G * (1 / (a1100G + K.c * (vs30 / row.k1) ** K.n) - 1 / (a1100G + K.c))
       : 0;
-  if (alpha === 0) return { tau: tauY, phi: phiY, sigma: Math.hypot(tauY, phiY) };
-  const tauPga = ramp(CB14_PGA.tau1, CB14_PGA.tau2);
-  const phiPga = ramp(CB14_PGA.phi1, CB14_PGA.phi2);
-  const base = (x: number): number => Math.sqrt(Math.max(x * x - row.phiLnAF * row.phiLnAF, 0));
-  const phiYB = base(phiY);
-  const phiPgaB = Math.sqrt(Math.max(phiPga * phiPga - CB14_PGA.phiLnAF * CB14_PGA.phiLnAF, 0));
+  if (alpha === 0) {
+    out.tau = tauY;
+    out.phi = phiY;
+    out.sigma = hypot2(tauY, phiY);
+    return out;
+  }
+  const phiYB = Math.sqrt(Math.max(phiY * phiY - row.phiLnAF * row.phiLnAF, 0));
+  const phiPgaB = Math.sqrt(Math.max(t.phiPga * t.phiPga - CB14_PGA.phiLnAF * CB14_PGA.phiLnAF, 0));
   const tau = Math.sqrt(
     Math.max(tauY ** 2 + alpha ** 2 * tauPga ** 2 + 2 * alpha * row.rho * tauY * tauPga, 0),
   );
@@ -279,7 +355,10 @@ export function cb14Sigma(
       0,
     ),
   );
-  return { tau, phi, sigma: Math.hypot(tau, phi) };
+  out.tau = tau;
+  out.phi = phi;
+  out.sigma = hypot2(tau, phi);
+  return out;
 }
 
 /** Magnitude validity by mechanism (the paper's ranges, from memory). */
@@ -323,13 +402,15 @@ function scenarioOf(input: GmmInput): Cb14Scenario {
   return { ...rupture, rrupKm: input.rrupKm, rjbKm: input.rjbKm, rxKm: input.rxKm };
 }
 
+/** CB14_VALIDITY with each mechanism's own magnitude range. */
+const MAGNITUDE_VALIDITY: Readonly<Record<Cb14Mechanism, ValidityRange>> = Object.freeze({
+  'strike-slip': { ...CB14_VALIDITY, magnitude: CB14_MAGNITUDE_RANGE['strike-slip'] },
+  reverse: { ...CB14_VALIDITY, magnitude: CB14_MAGNITUDE_RANGE.reverse },
+  normal: { ...CB14_VALIDITY, magnitude: CB14_MAGNITUDE_RANGE.normal },
+});
+
 function notesOf(input: GmmInput, s: Cb14Scenario): string[] {
-  const notes = validityNotes(
-    NAME,
-    { ...CB14_VALIDITY, magnitude: CB14_MAGNITUDE_RANGE[s.mechanism] },
-    input,
-    s.rrupKm,
-  );
+  const notes = validityNotes(NAME, MAGNITUDE_VALIDITY[s.mechanism], input, s.rrupKm);
   const outside = (label: string, value: number, min: number, max: number, unit: string): void => {
     if (value < min || value > max)
       notes.push(
@@ -362,49 +443,82 @@ export function predictCb14(input: GmmInput, measure: Measure): GmmPrediction {
   return predictSplit(SPLIT, measure, predictRow);
 }
 
-/** What one row needs of the rupture alone: the rupture itself and the source terms of the row and of the PGA row. */
+/** What one row needs of the rupture alone: the rupture, the source, hanging-wall and σ terms of the row and of the PGA row. */
 export interface Cb14RuptureTerms {
   readonly row: Cb14Row;
   readonly rupture: Omit<Cb14Scenario, 'rrupKm' | 'rjbKm' | 'rxKm'>;
   readonly source: number;
   readonly pgaSource: number;
+  readonly hangingWallScale: number;
+  readonly pgaHangingWallScale: number;
+  readonly geometry: HangingWallGeometry;
+  readonly sigma: Cb14SigmaTerms;
 }
 
 export function cb14RuptureTerms(
   row: Cb14Row,
   rupture: Omit<Cb14Scenario, 'rrupKm' | 'rjbKm' | 'rxKm'>,
 ): Cb14RuptureTerms {
+  const { magnitude: m, ztorKm, dipDeg } = rupture;
   const pgaSource = cb14SourceTerm(CB14_PGA, rupture);
+  const pgaHangingWallScale = cb14HangingWallScale(CB14_PGA, m, ztorKm, dipDeg);
   return {
     row,
     rupture,
     source: row === CB14_PGA ? pgaSource : cb14SourceTerm(row, rupture),
     pgaSource,
+    hangingWallScale:
+      row === CB14_PGA ? pgaHangingWallScale : cb14HangingWallScale(row, m, ztorKm, dipDeg),
+    pgaHangingWallScale,
+    geometry: hangingWallGeometry(rupture),
+    sigma: sigmaTerms(row, m),
   };
 }
 
 /**
- * Median and standard deviations (ln units) of one row for one rupture–site pair: A1100 from the
- * PGA row on reference rock, the row's ln median, and for PSA below 0.25 s not less than PGA.
+ * Median and standard deviations (ln units) of one row for one rupture–site pair, written into
+ * `out`: A1100 from the PGA row on reference rock, the row's ln median, and for PSA below
+ * 0.25 s not less than PGA.
  */
 export function cb14PairPrediction(
   t: Cb14RuptureTerms,
   pair: GmmInput,
-): { lnMedian: number; tau: number; phi: number; sigma: number } {
+  out: PairPrediction = emptyPairPrediction(),
+): PairPrediction {
   const { row } = t;
-  const s: Cb14Scenario = { ...t.rupture, rrupKm: pair.rrupKm, rjbKm: pair.rjbKm, rxKm: pair.rxKm };
-  const z2p5Km = pair.z2p5Km ?? cb14DefaultZ2p5Km(pair.vs30);
-  const a1100G = a1100FromSource(t.pgaSource, s);
-  const unfloored = cb14LnMedianFromSource(row, t.source, s, pair.vs30, z2p5Km, a1100G);
+  const m = t.rupture.magnitude;
+  const { rrupKm, rxKm, vs30 } = pair;
+  const z2p5Km = pair.z2p5Km ?? cb14DefaultZ2p5Km(vs30);
+  const fRrup = rrupTaper(rrupKm, pair.rjbKm);
+  const pgaHangingWall = hangingWallOfPair(
+    CB14_PGA,
+    t.pgaHangingWallScale,
+    t.geometry,
+    rxKm,
+    fRrup,
+  );
+  const pgaRockPath = lnRockPath(CB14_PGA, t.pgaSource, m, rrupKm, pgaHangingWall);
+  const a1100G = Math.exp(pgaRockPath + ROCK_SITE_LN);
+  const rockPath =
+    row === CB14_PGA
+      ? pgaRockPath
+      : lnRockPath(
+          row,
+          t.source,
+          m,
+          rrupKm,
+          hangingWallOfPair(row, t.hangingWallScale, t.geometry, rxKm, fRrup),
+        );
+  const unfloored = rockPath + cb14SiteTerm(row, vs30, a1100G) + cb14BasinTerm(row, z2p5Km);
   // CB14: at periods under 0.25 s the spectral acceleration is not allowed below PGA.
-  const lnMedian =
+  out.lnMedian =
     row.periodS > 0 && row.periodS < 0.25
       ? Math.max(
           unfloored,
-          cb14LnMedianFromSource(CB14_PGA, t.pgaSource, s, pair.vs30, z2p5Km, a1100G),
+          pgaRockPath + cb14SiteTerm(CB14_PGA, vs30, a1100G) + cb14BasinTerm(CB14_PGA, z2p5Km),
         )
       : unfloored;
-  return { lnMedian, ...cb14Sigma(row, s.magnitude, pair.vs30, a1100G) };
+  return sigmaInto(row, t.sigma, vs30, a1100G, out);
 }
 
 /** The model as rupture terms and pair prediction, for the fast path (split-prepare.ts): the same functions predict() uses. */
@@ -418,10 +532,14 @@ const SPLIT: SplitModel<Cb14Row, Cb14RuptureTerms> = {
   checkMeasure: requirePositivePeriod,
   checkRupture: (rupture) => void ruptureOf(rupture),
   ruptureTerms: (row, rupture) => cb14RuptureTerms(row, ruptureOf(rupture)),
-  pairPrediction: (terms, pair) => cb14PairPrediction(terms, pair),
+  pairPrediction: (terms, pair, out) => void cb14PairPrediction(terms, pair, out),
+  // notesOf's checks, answered without building the notes.
   applicable: (pair) =>
-    notesOf(pair, { ...ruptureOf(pair), rrupKm: pair.rrupKm, rjbKm: pair.rjbKm, rxKm: pair.rxKm })
-      .length === 0,
+    pair.setting === 'crustal' &&
+    within(pair.ztorKm, 0, 20) &&
+    within(pair.dipDeg, 15, 90) &&
+    (pair.z2p5Km === undefined || within(pair.z2p5Km, 0, 10)) &&
+    insideValidity(MAGNITUDE_VALIDITY[cb14MechanismFromRake(pair.rakeDeg)], pair, pair.rrupKm),
 };
 
 /** Campbell & Bozorgnia (2014) for shallow crustal earthquakes (Rrup): PGA, PGV, PSA 0.01–10 s. */

@@ -46,13 +46,16 @@
  * (../shared/reference/gmm/vectors/cy14.json, an independent implementation of the paper) within 1e-4.
  */
 import { toRadians } from '../units.ts';
+import { hypot2 } from './fast-math.ts';
 import { CY14_PGA, CY14_PGV, CY14_SA, type Cy14Row } from './cy14-coefficients.ts';
 import type { Measure } from './measure.ts';
 import { assembleModel } from './model-assembly.ts';
 import {
+  emptyPairPrediction,
   predictSplit,
   requirePositivePeriod,
   splitPrepareMeasures,
+  type PairPrediction,
   type SplitModel,
 } from './split-prepare.ts';
 import type {
@@ -62,7 +65,7 @@ import type {
   SiteContext,
   ValidityRange,
 } from './types.ts';
-import { requireInputs, validityNotes } from './validity.ts';
+import { insideValidity, requireInputs, validityNotes, within } from './validity.ts';
 
 const NAME = 'CY14';
 const SA_PERIODS_S: readonly number[] = Object.freeze(CY14_SA.map((r) => r.periodS));
@@ -165,12 +168,12 @@ export function cy14PathTerm(t: Cy14RuptureTerms, d: Cy14Distances): number {
   const { row } = t;
   const spreading =
     row.c4 * Math.log(d.rrupKm + t.nearFaultKm) +
-    (row.c4a - row.c4) * Math.log(Math.hypot(d.rrupKm, row.cRB));
+    (row.c4a - row.c4) * Math.log(hypot2(d.rrupKm, row.cRB));
   const hangingWall =
     d.rxKm >= 0
       ? t.hangingWall *
         (row.c9a + (1 - row.c9a) * Math.tanh(d.rxKm / row.c9b)) *
-        (1 - Math.hypot(d.rjbKm, t.ztorKm) / (d.rrupKm + 1))
+        (1 - hypot2(d.rjbKm, t.ztorKm) / (d.rrupKm + 1))
       : 0;
   return spreading + t.anelasticPerKm * d.rrupKm + hangingWall;
 }
@@ -209,12 +212,13 @@ export function cy14SiteSlope(row: Cy14Row, vs30: number, yRef: number): number 
   return (nonlinearStrength(row, vs30) * yRef) / (yRef + row.phi4);
 }
 
-/** Median (ln units) and standard deviations of one row for one rupture–site pair. */
+/** Median (ln units) and standard deviations of one row for one rupture–site pair, written into `out`. */
 export function cy14PairPrediction(
   t: Cy14RuptureTerms,
   d: Cy14Distances,
   site: SiteContext,
-): { lnMedian: number; tau: number; phi: number; sigma: number } {
+  out: PairPrediction = emptyPairPrediction(),
+): PairPrediction {
   const { row } = t;
   const lnYRef = t.sourceLn + cy14PathTerm(t, d);
   const yRef = Math.exp(lnYRef);
@@ -223,7 +227,11 @@ export function cy14PairPrediction(
   const phi =
     t.sigmaM * Math.sqrt((site.vs30Measured ? 0.7 : row.sigma3) + onePlusNl0 * onePlusNl0);
   const tau = onePlusNl0 * t.tau;
-  return { lnMedian, tau, phi, sigma: Math.hypot(tau, phi) };
+  out.lnMedian = lnMedian;
+  out.tau = tau;
+  out.phi = phi;
+  out.sigma = Math.sqrt(tau * tau + phi * phi);
+  return out;
 }
 
 /** Magnitude validity by mechanism (the paper's ranges, from memory). */
@@ -255,13 +263,15 @@ function checkPair(input: GmmInput): void {
   requireInputs(NAME, input, ['rrupKm', 'rjbKm', 'rxKm', 'vs30', 'z1Km']);
 }
 
+/** CY14_VALIDITY with each mechanism's own magnitude range. */
+const MAGNITUDE_VALIDITY: Readonly<Record<Cy14Mechanism, ValidityRange>> = Object.freeze({
+  'strike-slip': { ...CY14_VALIDITY, magnitude: CY14_MAGNITUDE_RANGE['strike-slip'] },
+  reverse: { ...CY14_VALIDITY, magnitude: CY14_MAGNITUDE_RANGE.reverse },
+  normal: { ...CY14_VALIDITY, magnitude: CY14_MAGNITUDE_RANGE.normal },
+});
+
 function notesOf(input: GmmInput, rupture: Cy14Rupture): string[] {
-  const notes = validityNotes(
-    NAME,
-    { ...CY14_VALIDITY, magnitude: CY14_MAGNITUDE_RANGE[rupture.mechanism] },
-    input,
-    input.rrupKm,
-  );
+  const notes = validityNotes(NAME, MAGNITUDE_VALIDITY[rupture.mechanism], input, input.rrupKm);
   if (rupture.ztorKm > 20)
     notes.push(
       `${NAME}: depth to top of rupture ${Math.round(rupture.ztorKm * 100) / 100} km is outside its range 0–20 km`,
@@ -301,8 +311,12 @@ const SPLIT: SplitModel<Cy14Row, Cy14RuptureTerms> = {
   checkMeasure: requirePositivePeriod,
   checkRupture: (rupture) => void ruptureOf(rupture as GmmInput),
   ruptureTerms: (row, rupture) => cy14RuptureTerms(row, ruptureOf(rupture as GmmInput)),
-  pairPrediction: (terms, pair) => cy14PairPrediction(terms, pair, pair),
-  applicable: (pair) => notesOf(pair, ruptureOf(pair)).length === 0,
+  pairPrediction: (terms, pair, out) => void cy14PairPrediction(terms, pair, pair, out),
+  // notesOf's checks, answered without building the notes.
+  applicable: (pair) =>
+    pair.setting === 'crustal' &&
+    within(pair.ztorKm, -Infinity, 20) &&
+    insideValidity(MAGNITUDE_VALIDITY[cy14MechanismFromRake(pair.rakeDeg)], pair, pair.rrupKm),
 };
 
 /** Chiou & Youngs (2014) for shallow crustal earthquakes (Rrup): PGA, PGV, PSA 0.01–10 s. */

@@ -40,13 +40,26 @@ export interface SplitModel<Row, Terms> {
   /** Throws what predict() throws for the rupture's own inputs. */
   checkRupture(rupture: RuptureContext): void;
   ruptureTerms(row: Row, rupture: RuptureContext): Terms;
-  pairPrediction(
-    terms: Terms,
-    pair: GmmInput,
-  ): { readonly lnMedian: number; readonly sigma: number };
-  /** Whether predict() would say applicable for the pair (no validity notes). */
+  /** Writes one row's prediction for one pair into `out` (reused from pair to pair: nothing is allocated per pair). */
+  pairPrediction(terms: Terms, pair: GmmInput, out: PairPrediction): void;
+  /** Whether predict() would say applicable for the pair (no validity notes), without building the notes. */
   applicable(pair: GmmInput): boolean;
 }
+
+/** One row's median and standard deviations for one pair, ln units. */
+export interface PairPrediction {
+  lnMedian: number;
+  tau: number;
+  phi: number;
+  sigma: number;
+}
+
+export const emptyPairPrediction = (): PairPrediction => ({
+  lnMedian: 0,
+  tau: 0,
+  phi: 0,
+  sigma: 0,
+});
 
 /** One row's rupture terms for every prepared rupture. */
 interface PreparedRow<Row, Terms> {
@@ -80,6 +93,7 @@ export function prepareSplitMeasures<Row, Terms>(
   });
   const scratch = createRowScratch();
   const pair = {} as MutablePair;
+  const prediction = emptyPairPrediction();
   let applicable = new Uint8Array(0);
 
   const setPair = (rupture: RuptureContext, pairs: PairDistances, k: number): void => {
@@ -107,9 +121,9 @@ export function prepareSplitMeasures<Row, Terms>(
     for (let k = 0; k < pairs.count; k++) {
       const r = pairs.rupture[k] as number;
       setPair(ruptures[r] as RuptureContext, pairs, k);
-      const p = model.pairPrediction(prepared.terms[r] as Terms, pair);
-      out.lnMedian[k] = p.lnMedian;
-      out.sigma[k] = p.sigma;
+      model.pairPrediction(prepared.terms[r] as Terms, pair, prediction);
+      out.lnMedian[k] = prediction.lnMedian;
+      out.sigma[k] = prediction.sigma;
       out.applicable[k] = applicable[k] as number;
     }
   };

@@ -60,6 +60,10 @@ export function requireInputs(
   }
 }
 
+/** Whether `value` lies outside [min, max] (NaN lies inside: the input checks refuse it first). */
+const isOutside = (value: number, range: readonly [number, number]): boolean =>
+  value < range[0] || value > range[1];
+
 /**
  * Notes for every input outside a model's stated validity range; empty when all are inside.
  * `distanceKm` is the model's own metric, chosen by the caller.
@@ -74,12 +78,12 @@ export function validityNotes(
   const outside = (
     label: string,
     value: number,
-    [min, max]: readonly [number, number],
+    limits: readonly [number, number],
     unit: string,
   ): void => {
-    if (value < min || value > max) {
+    if (isOutside(value, limits)) {
       notes.push(
-        `${modelName}: ${label} ${round(value)}${unit} is outside its range ${min}–${max}${unit}`,
+        `${modelName}: ${label} ${round(value)}${unit} is outside its range ${limits[0]}–${limits[1]}${unit}`,
       );
     }
   };
@@ -89,5 +93,22 @@ export function validityNotes(
   if (range.depthKm) outside('depth', input.hypoDepthKm, range.depthKm, ' km');
   return notes;
 }
+
+/**
+ * Whether validityNotes would be empty, without building a note: the fast path asks this of
+ * every rupture–site pair.
+ */
+export function insideValidity(range: ValidityRange, input: GmmInput, distanceKm: number): boolean {
+  return !(
+    isOutside(input.magnitude, range.magnitude) ||
+    isOutside(distanceKm, range.distanceKm) ||
+    isOutside(input.vs30, range.vs30) ||
+    (range.depthKm !== undefined && isOutside(input.hypoDepthKm, range.depthKm))
+  );
+}
+
+/** Whether `value` lies within [min, max], as the models' own extra range checks ask. */
+export const within = (value: number, min: number, max: number): boolean =>
+  !(value < min || value > max);
 
 const round = (x: number): string => String(Math.round(x * 100) / 100);

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { ruptureTable } from '../../../api/engine/hazard/rupture-table-builder.ts';
 import {
   PLANE_STRIDE,
-  ruptureContexts,
+  distinctContexts,
   settingRuptures,
 } from '../../../api/engine/hazard/rupture-table.ts';
 import { discretiseStudy } from '../../../api/engine/ruptures/discretise.ts';
@@ -15,13 +15,13 @@ const table = ruptureTable(ruptures);
 describe('ruptureTable', () => {
   it("holds each rupture's rate, context, source and hypocentre, in order", () => {
     expect(table.count).toBe(ruptures.length);
-    const contexts = ruptureContexts(
+    const { contexts, contextOf } = distinctContexts(
       table,
       Int32Array.from(ruptures, (_, i) => i),
     );
     ruptures.forEach((r, i) => {
       expect(table.annualRate[i]).toBe(r.annualRate);
-      expect(contexts[i]).toEqual(r.context);
+      expect(contexts[contextOf[i]!]).toEqual(r.context);
       expect(table.sourceIds[table.sourceIndex[i]!]).toBe(r.sourceId);
       expect([
         table.hypocentre[3 * i],
@@ -30,6 +30,18 @@ describe('ruptureTable', () => {
       ]).toEqual([r.surface.hypocentre.x, r.surface.hypocentre.y, r.surface.hypocentre.z]);
       expect(table.isPoint[i]).toBe(r.surface.kind === 'point' ? 1 : 0);
     });
+  });
+
+  it('lists each rupture context once, so that ruptures which share one share its model work', () => {
+    const { contexts, contextOf } = distinctContexts(
+      table,
+      Int32Array.from(ruptures, (_, i) => i),
+    );
+    const keys = contexts.map((c) => JSON.stringify(c));
+    expect(new Set(keys).size).toBe(contexts.length);
+    // The fixture's zone puts many cells at each magnitude: far fewer contexts than ruptures.
+    expect(contexts.length).toBeLessThan(ruptures.length / 2);
+    expect(Math.max(...contextOf)).toBe(contexts.length - 1);
   });
 
   it("holds every plane's corners, each rupture's planes in a row", () => {
