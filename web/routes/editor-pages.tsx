@@ -18,10 +18,10 @@ import {
 } from '../data/study-edits.ts';
 import { CommunityFormView } from '../views/community-form-view.tsx';
 import { EditorView, type UploadProblem } from '../views/editor-view.tsx';
-import { MessageView } from '../views/message-view.tsx';
 import { field, fileField, type PageKit, uploadedOrCarried } from './page-kit.ts';
 import { faultImportPages } from './fault-import-pages.tsx';
 import { sourcePages } from './source-pages.tsx';
+import { studyNotFoundPage, invalidStudyPage } from './message-pages.tsx';
 
 const EMPTY_FORM: CommunityForm = {
   id: '',
@@ -73,35 +73,9 @@ export function editorPages(app: Hono, kit: PageKit): void {
   const load = (
     c: Context,
   ): { data: StudyData & { ok: true } } | { response: Response | Promise<Response> } => {
-    const tr = kit.tr(c);
-    const id = c.req.param('id') as string;
-    const data = readStudy(ctx, id, { drafts: true });
-    if (!data)
-      return {
-        response: kit.render(
-          c,
-          <MessageView
-            page={kit.page(c)}
-            title={tr.t('error.notFound')}
-            text={tr.text('error.studyNotFound', { id })}
-          />,
-          404,
-        ),
-      };
-    if (!data.ok) {
-      return {
-        response: kit.render(
-          c,
-          <MessageView
-            page={kit.page(c)}
-            title={data.record.name}
-            text={tr.text('editor.otherProblems')}
-            details={data.issues.map((i) => `${i.path}: ${i.message}`)}
-          />,
-          422,
-        ),
-      };
-    }
+    const data = readStudy(ctx, c.req.param('id') as string, { drafts: true });
+    if (!data) return { response: studyNotFoundPage(kit, c) };
+    if (!data.ok) return { response: invalidStudyPage(kit, c, data) };
     return { data };
   };
 
