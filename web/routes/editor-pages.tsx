@@ -22,6 +22,7 @@ import { field, fileField, type PageKit, uploadedOrCarried } from './page-kit.ts
 import { faultImportPages } from './fault-import-pages.tsx';
 import { sourcePages } from './source-pages.tsx';
 import { studyNotFoundPage, invalidStudyPage } from './message-pages.tsx';
+import { editorFormProps, issuesByField } from './page-kit.ts';
 
 const EMPTY_FORM: CommunityForm = {
   id: '',
@@ -132,31 +133,15 @@ export function editorPages(app: Hono, kit: PageKit): void {
     issues: readonly InputIssue[],
   ) => {
     const at = index ?? communityList(data.inputs, data.study.communities).length;
-    const byField = new Map<string, InputIssue[]>();
-    const others: InputIssue[] = [];
-    for (const issue of issues) {
-      const name = issueField(issue.path, at);
-      if (name && name !== '(row)' && name in EMPTY_FORM)
-        byField.set(name, [...(byField.get(name) ?? []), issue]);
-      else others.push(issue);
-    }
+    const split = issuesByField(issues, (path) => {
+      const name = issueField(path, at);
+      return name && name !== '(row)' && name in EMPTY_FORM ? name : undefined;
+    });
     const existing = index === undefined ? undefined : data.study.communities[index];
+    const form = { existing, folder: 'communities', newPath: 'new-community', issues: split };
     return kit.render(
       c,
-      <CommunityFormView
-        page={kit.page(c)}
-        studyId={data.record.id}
-        studyName={data.study.name}
-        action={
-          existing
-            ? `/studies/${data.record.id}/edit/communities/${encodeURIComponent(existing.id)}`
-            : `/studies/${data.record.id}/edit/new-community`
-        }
-        editing={existing?.name}
-        values={values}
-        fieldIssues={byField}
-        otherIssues={others}
-      />,
+      <CommunityFormView {...editorFormProps(kit, c, data, form)} values={values} />,
       issues.length > 0 ? 422 : 200,
     );
   };
