@@ -13,7 +13,7 @@ import { visitPages } from './routes/visit-pages.tsx';
 import { loadTextBundles } from './text/text-bundles.ts';
 import { HomeView } from './views/home-view.tsx';
 import { LimitsView } from './views/limits-view.tsx';
-import { MessageView } from './views/message-view.tsx';
+import { notFoundPage } from './routes/message-pages.tsx';
 
 /** How long the language choice is kept, seconds (a year). */
 const LANGUAGE_COOKIE_MAX_AGE_S = 365 * 24 * 3600;
@@ -82,16 +82,7 @@ export function createPages(ctx: ServiceContext, options: CreatePagesOptions = {
   // Unknown pages get a page; unknown API paths keep the API's JSON 404.
   app.get('*', (c) => {
     if (c.req.path.startsWith('/api/') || c.req.path === '/api') return c.notFound();
-    const tr = kit.tr(c);
-    return kit.render(
-      c,
-      <MessageView
-        page={kit.page(c)}
-        title={tr.t('error.notFound')}
-        text={tr.text('error.notFoundText')}
-      />,
-      404,
-    );
+    return notFoundPage(kit, c);
   });
 
   return app;

@@ -1,16 +1,9 @@
 import { join } from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { startService, tempDir, type ServiceProcess } from '../service/helpers/service-process.ts';
-import { demoStudyId } from '../service/helpers/runs.ts';
 import { xlsxBytes } from '../study/community-files/fixtures.ts';
-import {
-  ARTIFACTS,
-  launchChromium,
-  offlineContext,
-  seriousAxeViolations,
-  type LaunchedBrowser,
-} from './helpers/chromium.ts';
+import { ARTIFACTS, offlineContext, seriousAxeViolations } from './helpers/chromium.ts';
+import { browserService } from './helpers/browser-service.ts';
 
 /**
  * A village workbook into the demo study from the editor in Chromium, at desktop and phone
@@ -18,10 +11,11 @@ import {
  * file's own columns, keeps the file, and saves once they are chosen. The workbook is made by
  * the test (fixtures.ts); its places are invented, off the demo coast.
  */
-const dir = tempDir('tremora-community-import-');
-let service: ServiceProcess;
-let chromium: LaunchedBrowser;
-let demoId: string;
+const rig = browserService({
+  tempPrefix: 'tremora-community-import-',
+  database: 'import.db',
+  context: false,
+});
 
 const WORKBOOK = xlsxBytes([
   ['Village', 'Pos S', 'Pos W', 'Site class', 'Clinic'],
@@ -30,19 +24,7 @@ const WORKBOOK = xlsxBytes([
 ]);
 
 const document = async (): Promise<string> =>
-  (await service.fetch(`/api/studies/${demoId}/document`)).text();
-
-beforeAll(async () => {
-  service = await startService({ databasePath: join(dir.path, 'import.db') });
-  demoId = await demoStudyId(service);
-  chromium = await launchChromium();
-});
-
-afterAll(async () => {
-  await chromium?.close();
-  await service?.stop();
-  dir.remove();
-});
+  (await rig.service.fetch(`/api/studies/${rig.studyId}/document`)).text();
 
 for (const width of [1100, 390]) {
   describe(`a village workbook at ${width} px`, { timeout: 120_000 }, () => {
@@ -51,9 +33,13 @@ for (const width of [1100, 390]) {
     let page: Page;
 
     beforeAll(async () => {
-      ({ context, foreignRequests: foreign } = await offlineContext(chromium.browser, service.url, {
-        viewport: { width, height: 900 },
-      }));
+      ({ context, foreignRequests: foreign } = await offlineContext(
+        rig.chromium.browser,
+        rig.service.url,
+        {
+          viewport: { width, height: 900 },
+        },
+      ));
       page = await context.newPage();
     });
     afterAll(async () => {
@@ -62,7 +48,7 @@ for (const width of [1100, 390]) {
 
     test("unrecognised columns are picked from the file's own, then the villages are saved", async () => {
       const before = await document();
-      await page.goto(`${service.url}/studies/${demoId}/edit`);
+      await page.goto(`${rig.service.url}/studies/${rig.studyId}/edit`);
       await page.setInputFiles('#communities-file', {
         name: 'villages.xlsx',
         mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
@@ -90,7 +76,7 @@ for (const width of [1100, 390]) {
       expect(violations, JSON.stringify(violations, null, 2)).toEqual([]);
       await page.locator('form.column-pick button[type="submit"]').click();
       await page.waitForURL(/\/edit\?saved=1(#|$)/);
-      const csv = JSON.parse(await (await service.fetch(`/api/studies/${demoId}`)).text())
+      const csv = JSON.parse(await (await rig.service.fetch(`/api/studies/${rig.studyId}`)).text())
         .communitiesCsv as string;
       // 47°18'S = -47.3 and 150°54'W = -150.9 (degrees + minutes/60).
       expect(csv.split('\n').slice(0, 3)).toEqual([

@@ -2,26 +2,24 @@ import { join } from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { translator } from '../../web/text/translator.ts';
-import { startService, tempDir, type ServiceProcess } from '../service/helpers/service-process.ts';
-import { demoStudyId } from '../service/helpers/runs.ts';
 import {
   ARTIFACTS,
-  launchChromium,
   offlineContext,
   seriousAxeViolations,
   walkWithTab,
-  type LaunchedBrowser,
 } from './helpers/chromium.ts';
+import { browserService } from './helpers/browser-service.ts';
 
 /**
  * The study editor in Chromium, with and without script: uploads that do not validate show
  * their problems next to the upload (and save nothing); a community form shows each problem
  * under its field; a valid change is saved.
  */
-const dir = tempDir('tremora-editor-');
-let service: ServiceProcess;
-let chromium: LaunchedBrowser;
-let demoId: string;
+const rig = browserService({
+  tempPrefix: 'tremora-editor-',
+  database: 'editor.db',
+  context: false,
+});
 const en = translator('en');
 
 /** A GeoJSON collection whose fault dips 120°, beyond the 0–90° a dip can have. */
@@ -52,19 +50,7 @@ const BROKEN_GEOJSON = JSON.stringify({
 });
 
 const document = async (): Promise<string> =>
-  (await service.fetch(`/api/studies/${demoId}/document`)).text();
-
-beforeAll(async () => {
-  service = await startService({ databasePath: join(dir.path, 'editor.db') });
-  demoId = await demoStudyId(service);
-  chromium = await launchChromium();
-});
-
-afterAll(async () => {
-  await chromium?.close();
-  await service?.stop();
-  dir.remove();
-});
+  (await rig.service.fetch(`/api/studies/${rig.studyId}/document`)).text();
 
 for (const javaScriptEnabled of [true, false]) {
   describe(
@@ -77,8 +63,8 @@ for (const javaScriptEnabled of [true, false]) {
 
       beforeAll(async () => {
         ({ context, foreignRequests: foreign } = await offlineContext(
-          chromium.browser,
-          service.url,
+          rig.chromium.browser,
+          rig.service.url,
           { javaScriptEnabled },
         ));
         page = await context.newPage();
@@ -89,7 +75,7 @@ for (const javaScriptEnabled of [true, false]) {
 
       test('a broken GeoJSON upload shows the message next to the upload and saves nothing', async () => {
         const before = await document();
-        await page.goto(`${service.url}/studies/${demoId}/edit`);
+        await page.goto(`${rig.service.url}/studies/${rig.studyId}/edit`);
         await page.setInputFiles('#sources-file', {
           name: 'sources.geojson',
           mimeType: 'application/geo+json',
@@ -119,7 +105,7 @@ for (const javaScriptEnabled of [true, false]) {
 
       test('a communities CSV with a bad line names the line, shows it, and saves nothing', async () => {
         const before = await document();
-        await page.goto(`${service.url}/studies/${demoId}/edit`);
+        await page.goto(`${rig.service.url}/studies/${rig.studyId}/edit`);
         const csv =
           'id,name,lon,lat,vs30,population,coastal,elevationM\nnew-cove,New Cove,-150.9,-47.2,420,80,true,5\nhigh-farm,High Farm,-150.1,-47.25,420,eighty,false,300\n';
         await page.setInputFiles('#communities-file', {
@@ -142,7 +128,7 @@ for (const javaScriptEnabled of [true, false]) {
       });
 
       test('a community form shows the problem under its field; once fixed, it is saved', async () => {
-        await page.goto(`${service.url}/studies/${demoId}/edit/communities/drumarrow`);
+        await page.goto(`${rig.service.url}/studies/${rig.studyId}/edit/communities/drumarrow`);
         await page.fill('#field-lat', '-91');
         await page.getByRole('button', { name: en.t('editor.save') }).click();
         await page.waitForSelector('#field-lat-problem');

@@ -1,22 +1,15 @@
 import { join } from 'node:path';
-import type { BrowserContext, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, test } from 'vitest';
 import { translator } from '../../web/text/translator.ts';
-import {
-  jsonInit,
-  startService,
-  tempDir,
-  type ServiceProcess,
-} from '../service/helpers/service-process.ts';
 import { spreadStudy } from '../web/helpers/map-study.ts';
 import {
   ARTIFACTS,
-  launchChromium,
   offlineContext,
   seriousAxeViolations,
   walkWithTab,
-  type LaunchedBrowser,
 } from './helpers/chromium.ts';
+import { browserService, saveStudy } from './helpers/browser-service.ts';
 
 /**
  * A hazard map from the overview in Chromium: a small study (two invented villages, one
@@ -24,35 +17,14 @@ import {
  * legend on the overview map; the same without script through the refresh link. Every view is
  * checked with axe-core and walked with the Tab key; no request may leave the service's origin.
  */
-const dir = tempDir('tremora-browser-maps-');
-let service: ServiceProcess;
-let chromium: LaunchedBrowser;
-let context: BrowserContext;
-let foreignRequests: string[];
-let page: Page;
-let studyId: string;
 const en = translator('en');
+const rig = browserService({
+  tempPrefix: 'tremora-browser-maps-',
+  database: 'maps.db',
+  prepare: (service) => saveStudy(service, spreadStudy('Spread coast')),
+});
 
 type MapAnswer = { id: string; status: string; map: { count: number } | null };
-
-beforeAll(async () => {
-  service = await startService({ databasePath: join(dir.path, 'maps.db') });
-  const created = await service.fetch(
-    '/api/studies',
-    jsonInit('POST', spreadStudy('Spread coast')),
-  );
-  studyId = ((await created.json()) as { id: string }).id;
-  chromium = await launchChromium();
-  ({ context, foreignRequests } = await offlineContext(chromium.browser, service.url));
-  page = await context.newPage();
-});
-
-afterAll(async () => {
-  await context?.close();
-  await chromium?.close();
-  await service?.stop();
-  dir.remove();
-});
 
 async function checkView(view: Page, name: string): Promise<void> {
   const violations = await seriousAxeViolations(view);
@@ -66,8 +38,11 @@ async function checkView(view: Page, name: string): Promise<void> {
 }
 
 const maps = async (): Promise<MapAnswer[]> =>
-  ((await (await service.fetch(`/api/studies/${studyId}/maps`)).json()) as { maps: MapAnswer[] })
-    .maps;
+  (
+    (await (await rig.service.fetch(`/api/studies/${rig.studyId}/maps`)).json()) as {
+      maps: MapAnswer[];
+    }
+  ).maps;
 
 const legendTitle = en.t('hazardMap.title.returnPeriod', {
   measure: en.t('hazardMap.measure.PGA'),
@@ -77,52 +52,56 @@ const legendTitle = en.t('hazardMap.title.returnPeriod', {
 
 describe('a hazard map from the overview, in a browser', { timeout: 180_000 }, () => {
   test('the overview offers the form; computing follows the map and comes back to the layer and its legend', async () => {
-    await page.goto(`${service.url}/studies/${studyId}`);
-    expect(await page.locator('svg.map .hazard-cells').count()).toBe(0);
-    await checkView(page, 'overview without a map');
-    expect(await page.locator('#hazard-map-spacing').inputValue()).toBe('1');
-    await page.selectOption('#hazard-map-return-period', '475');
-    await page.getByRole('button', { name: en.t('hazardMap.compute') }).click();
-    await page.waitForURL(/\/maps\/[\w-]+$/);
+    await rig.page.goto(`${rig.service.url}/studies/${rig.studyId}`);
+    expect(await rig.page.locator('svg.map .hazard-cells').count()).toBe(0);
+    await checkView(rig.page, 'overview without a map');
+    expect(await rig.page.locator('#hazard-map-spacing').inputValue()).toBe('1');
+    await rig.page.selectOption('#hazard-map-return-period', '475');
+    await rig.page.getByRole('button', { name: en.t('hazardMap.compute') }).click();
+    await rig.page.waitForURL(/\/maps\/[\w-]+$/);
     // The page's script follows the map and goes to the overview's map when it is done.
-    await page.waitForURL(`${service.url}/studies/${studyId}#map-heading`, { timeout: 120_000 });
+    await rig.page.waitForURL(`${rig.service.url}/studies/${rig.studyId}#map-heading`, {
+      timeout: 120_000,
+    });
     const [map] = await maps();
     expect(map?.status).toBe('done');
-    const cells = page.locator('svg.map .hazard-cells rect');
+    const cells = rig.page.locator('svg.map .hazard-cells rect');
     expect(await cells.count()).toBe(map?.map?.count);
-    expect((await page.locator('.hazard-legend .legend-title').textContent())?.trim()).toBe(
+    expect((await rig.page.locator('.hazard-legend .legend-title').textContent())?.trim()).toBe(
       legendTitle,
     );
-    expect(await page.locator('.hazard-legend .legend-classes li').count()).toBeGreaterThanOrEqual(
-      2,
-    );
-    expect(await page.locator('.hazard-legend').textContent()).toContain(
+    expect(
+      await rig.page.locator('.hazard-legend .legend-classes li').count(),
+    ).toBeGreaterThanOrEqual(2);
+    expect(await rig.page.locator('.hazard-legend').textContent()).toContain(
       en.t('hazardMap.vs30', { vs30: '760' }),
     );
-    expect(await page.locator('.hazard-legend').textContent()).toContain(en.t('hazardMap.caution'));
+    expect(await rig.page.locator('.hazard-legend').textContent()).toContain(
+      en.t('hazardMap.caution'),
+    );
     // The layer's text alternative: the map names the summary, which links to the GeoJSON.
-    expect(await page.locator('svg.map').getAttribute('aria-describedby')).toBe(
+    expect(await rig.page.locator('svg.map').getAttribute('aria-describedby')).toBe(
       'overview-map-hazard-summary',
     );
     expect(
-      await page
+      await rig.page
         .locator(`#overview-map-hazard-summary a[href="/api/maps/${map?.id}/map.geojson"]`)
         .count(),
     ).toBe(1);
-    await page.screenshot({ path: join(ARTIFACTS, 'overview-hazard-map.png'), fullPage: true });
-    await checkView(page, 'overview with a hazard map');
-    await page.goto(`${service.url}/studies/${studyId}/maps/${map?.id}`);
-    await checkView(page, 'hazard map done');
+    await rig.page.screenshot({ path: join(ARTIFACTS, 'overview-hazard-map.png'), fullPage: true });
+    await checkView(rig.page, 'overview with a hazard map');
+    await rig.page.goto(`${rig.service.url}/studies/${rig.studyId}/maps/${map?.id}`);
+    await checkView(rig.page, 'hazard map done');
   });
 
   test('without script: the form posts, the refresh link shows how far the map has got, and the done page links to the map', async () => {
     const { context: plain, foreignRequests: plainForeign } = await offlineContext(
-      chromium.browser,
-      service.url,
+      rig.chromium.browser,
+      rig.service.url,
       { javaScriptEnabled: false },
     );
     const noScript = await plain.newPage();
-    await noScript.goto(`${service.url}/studies/${studyId}`);
+    await noScript.goto(`${rig.service.url}/studies/${rig.studyId}`);
     await noScript.selectOption('#hazard-map-return-period', '2475');
     await noScript.getByRole('button', { name: en.t('hazardMap.compute') }).click();
     await noScript.waitForURL(/\/maps\/[\w-]+$/);
@@ -140,7 +119,7 @@ describe('a hazard map from the overview, in a browser', { timeout: 180_000 }, (
     }
     expect(await noScript.locator('.run-status').getAttribute('data-status')).toBe('done');
     await noScript.getByRole('link', { name: en.t('mapRun.see') }).click();
-    await noScript.waitForURL(`${service.url}/studies/${studyId}#map-heading`);
+    await noScript.waitForURL(`${rig.service.url}/studies/${rig.studyId}#map-heading`);
     const title = en.t('hazardMap.title.returnPeriod', {
       measure: en.t('hazardMap.measure.PGA'),
       years: '2,475',
@@ -157,6 +136,6 @@ describe('a hazard map from the overview, in a browser', { timeout: 180_000 }, (
   });
 
   test("no request left the service's origin", () => {
-    expect(foreignRequests).toEqual([]);
+    expect(rig.foreignRequests).toEqual([]);
   });
 });

@@ -1,22 +1,12 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { DEMO_STUDY_URL } from '../../api/operations/demo-seed.ts';
+import { describe, expect, test } from 'vitest';
 import { translator } from '../../web/text/translator.ts';
 import { startRun, waitForStatus } from '../service/helpers/runs.ts';
-import {
-  jsonInit,
-  startService,
-  tempDir,
-  type ServiceProcess,
-} from '../service/helpers/service-process.ts';
-import {
-  ARTIFACTS,
-  launchChromium,
-  offlineContext,
-  type LaunchedBrowser,
-} from './helpers/chromium.ts';
+import { jsonInit } from '../service/helpers/service-process.ts';
+import { ARTIFACTS } from './helpers/chromium.ts';
+import { browserService, saveStudy } from './helpers/browser-service.ts';
+import { cutDownDemo } from '../web/helpers/cut-down-demo.ts';
 
 /**
  * Every page at a phone's width (390 px): none may scroll sideways, that is the document may be
@@ -25,11 +15,6 @@ import {
  * catalog attached, a visit recorded and a map run started. Screenshots of every page at 390 px
  * and 1280 px go to test-artifacts/phone-*.png.
  */
-const dir = tempDir('tremora-phone-');
-let service: ServiceProcess;
-let chromium: LaunchedBrowser;
-let page: Page;
-let id: string;
 let runId: string;
 let mapId: string;
 let visitId: string;
@@ -39,68 +24,52 @@ const PHONE_PX = 390;
 const DESKTOP_PX = 1280;
 const COMMUNITIES = ['harbour-point', 'vennick-bay', 'lisk-head', 'quillan-landing'];
 
-beforeAll(async () => {
-  service = await startService({ databasePath: join(dir.path, 'phone.db') });
-  const demo = JSON.parse(readFileSync(DEMO_STUDY_URL, 'utf8')) as Record<string, any>;
-  const { terrain: _terrain, ...rest } = demo;
-  const study = {
-    ...rest,
-    name: 'Demo coast, phone',
-    communities: demo.communities.filter((c: { id: string }) => COMMUNITIES.includes(c.id)),
-    sources: {
-      type: 'FeatureCollection',
-      features: demo.sources.features.filter((f: { properties: { id: string } }) =>
-        ['orle-interface'].includes(f.properties.id),
-      ),
-    },
-    settings: { ...demo.settings, measures: ['PGA'], magnitudeStep: 0.5, horizonsYears: [50] },
-  };
-  const created = await service.fetch('/api/studies', jsonInit('POST', study));
-  expect(created.status, await created.clone().text()).toBe(201);
-  id = ((await created.json()) as { id: string }).id;
-  const catalog = await service.fetch(`/api/studies/${id}/catalog`, {
-    method: 'PUT',
-    headers: { 'Content-Type': 'text/csv' },
-    body: readFileSync(new URL('../../data-demo/catalog.csv', import.meta.url), 'utf8'),
-  });
-  expect(catalog.status, await catalog.clone().text()).toBe(201);
-  const visit = await service.fetch(
-    `/api/studies/${id}/visits`,
-    jsonInit('POST', {
-      communityId: 'lisk-head',
-      visitedOn: '2026-04-09',
-      language: 'English',
-      peopleReached: 31,
-      topics: 'What to do during shaking, and where to meet afterwards',
-      followUps: 'Bring posters for the school and the health post',
-      referral: 'requested',
-    }),
-  );
-  expect(visit.status, await visit.clone().text()).toBe(201);
-  visitId = ((await visit.json()) as { id: string }).id;
-  const run = await startRun(service, id);
-  runId = run.id;
-  expect((await waitForStatus(service, run.id)).status).toBe('done');
-  const map = await service.fetch(
-    `/api/studies/${id}/maps`,
-    jsonInit('POST', { measure: 'PGA', returnPeriodYears: 475, spacingKm: 40 }),
-  );
-  expect(map.status, await map.clone().text()).toBe(202);
-  mapId = ((await map.json()) as { id: string }).id;
-  chromium = await launchChromium();
-  const { context } = await offlineContext(chromium.browser, service.url, {
+const rig = browserService({
+  tempPrefix: 'tremora-phone-',
+  database: 'phone.db',
+  prepare: async (service) => {
+    const id = await saveStudy(
+      service,
+      cutDownDemo('Demo coast, phone', COMMUNITIES, ['orle-interface']),
+    );
+    const catalog = await service.fetch(`/api/studies/${id}/catalog`, {
+      method: 'PUT',
+      headers: { 'Content-Type': 'text/csv' },
+      body: readFileSync(new URL('../../data-demo/catalog.csv', import.meta.url), 'utf8'),
+    });
+    expect(catalog.status, await catalog.clone().text()).toBe(201);
+    const visit = await service.fetch(
+      `/api/studies/${id}/visits`,
+      jsonInit('POST', {
+        communityId: 'lisk-head',
+        visitedOn: '2026-04-09',
+        language: 'English',
+        peopleReached: 31,
+        topics: 'What to do during shaking, and where to meet afterwards',
+        followUps: 'Bring posters for the school and the health post',
+        referral: 'requested',
+      }),
+    );
+    expect(visit.status, await visit.clone().text()).toBe(201);
+    visitId = ((await visit.json()) as { id: string }).id;
+    const run = await startRun(service, id);
+    runId = run.id;
+    expect((await waitForStatus(service, run.id)).status).toBe('done');
+    const map = await service.fetch(
+      `/api/studies/${id}/maps`,
+      jsonInit('POST', { measure: 'PGA', returnPeriodYears: 475, spacingKm: 40 }),
+    );
+    expect(map.status, await map.clone().text()).toBe(202);
+    mapId = ((await map.json()) as { id: string }).id;
+    return id;
+  },
+  context: {
     viewport: { width: PHONE_PX, height: 844 },
     // A phone's scrollbars float over the page, so the whole 390 px is the page's.
     isMobile: true,
     hasTouch: true,
-  });
-  page = await context.newPage();
-}, 300_000);
-
-afterAll(async () => {
-  await chromium?.close();
-  await service?.stop();
-  dir.remove();
+  },
+  setupTimeoutMs: 300_000,
 });
 
 /** The pages, by name: every GET route of web/pages.tsx and web/routes/, with the demo's ids. */
@@ -110,29 +79,32 @@ const pages = (): readonly (readonly [string, string])[] => [
   ['access', '/access'],
   ['not-found', '/no-such-page'],
   ['study-create', '/studies/new'],
-  ['overview', `/studies/${id}`],
-  ['run', `/studies/${id}/runs/${runId}`],
-  ['community', `/studies/${id}/communities/lisk-head`],
-  ['coastal-community', `/studies/${id}/communities/quillan-landing`],
-  ['handout', `/studies/${id}/communities/quillan-landing/handout`],
-  ['poster', `/studies/${id}/communities/quillan-landing/poster`],
-  ['visit-form', `/studies/${id}/communities/lisk-head/visits/new`],
-  ['visit-delete', `/studies/${id}/communities/lisk-head/visits/${visitId}/delete`],
-  ['trip-plan', `/studies/${id}/trip?${COMMUNITIES.map((c) => `c=${c}`).join('&')}&return=1`],
-  ['scenario-form', `/studies/${id}/scenario?sourceId=orle-interface`],
-  ['map', `/studies/${id}/maps/${mapId}`],
-  ['catalog', `/studies/${id}/catalog`],
-  ['editor', `/studies/${id}/edit`],
-  ['community-editor', `/studies/${id}/edit/communities/lisk-head`],
-  ['new-community', `/studies/${id}/edit/new-community`],
-  ['source-editor', `/studies/${id}/edit/sources/orle-interface`],
-  ['new-source', `/studies/${id}/edit/new-source`],
-  ['fault-import', `/studies/${id}/edit/import-faults`],
-  ['ground-motion', `/studies/${id}/edit/ground-motion`],
+  ['overview', `/studies/${rig.studyId}`],
+  ['run', `/studies/${rig.studyId}/runs/${runId}`],
+  ['community', `/studies/${rig.studyId}/communities/lisk-head`],
+  ['coastal-community', `/studies/${rig.studyId}/communities/quillan-landing`],
+  ['handout', `/studies/${rig.studyId}/communities/quillan-landing/handout`],
+  ['poster', `/studies/${rig.studyId}/communities/quillan-landing/poster`],
+  ['visit-form', `/studies/${rig.studyId}/communities/lisk-head/visits/new`],
+  ['visit-delete', `/studies/${rig.studyId}/communities/lisk-head/visits/${visitId}/delete`],
+  [
+    'trip-plan',
+    `/studies/${rig.studyId}/trip?${COMMUNITIES.map((c) => `c=${c}`).join('&')}&return=1`,
+  ],
+  ['scenario-form', `/studies/${rig.studyId}/scenario?sourceId=orle-interface`],
+  ['map', `/studies/${rig.studyId}/maps/${mapId}`],
+  ['catalog', `/studies/${rig.studyId}/catalog`],
+  ['editor', `/studies/${rig.studyId}/edit`],
+  ['community-editor', `/studies/${rig.studyId}/edit/communities/lisk-head`],
+  ['new-community', `/studies/${rig.studyId}/edit/new-community`],
+  ['source-editor', `/studies/${rig.studyId}/edit/sources/orle-interface`],
+  ['new-source', `/studies/${rig.studyId}/edit/new-source`],
+  ['fault-import', `/studies/${rig.studyId}/edit/import-faults`],
+  ['ground-motion', `/studies/${rig.studyId}/edit/ground-motion`],
   ['languages', '/languages'],
-  ['study-rename', `/studies/${id}/rename`],
-  ['study-copy', `/studies/${id}/duplicate`],
-  ['study-delete', `/studies/${id}/delete`],
+  ['study-rename', `/studies/${rig.studyId}/rename`],
+  ['study-copy', `/studies/${rig.studyId}/duplicate`],
+  ['study-delete', `/studies/${rig.studyId}/delete`],
 ];
 
 /** The elements that reach past the window's right edge, deepest first, for the failure message. */
@@ -145,14 +117,15 @@ const WIDE_ELEMENTS = `(() => {
 })()`;
 
 async function checkWidth(name: string): Promise<void> {
-  await page.screenshot({ path: join(ARTIFACTS, `phone-${name}-390.png`), fullPage: true });
-  const [scrollWidth, clientWidth] = (await page.evaluate(
+  await rig.page.screenshot({ path: join(ARTIFACTS, `phone-${name}-390.png`), fullPage: true });
+  const [scrollWidth, clientWidth] = (await rig.page.evaluate(
     '[document.documentElement.scrollWidth, document.documentElement.clientWidth]',
   )) as [number, number];
-  const wide = scrollWidth > clientWidth ? ((await page.evaluate(WIDE_ELEMENTS)) as string[]) : [];
-  await page.setViewportSize({ width: DESKTOP_PX, height: 900 });
-  await page.screenshot({ path: join(ARTIFACTS, `phone-${name}-1280.png`), fullPage: true });
-  await page.setViewportSize({ width: PHONE_PX, height: 844 });
+  const wide =
+    scrollWidth > clientWidth ? ((await rig.page.evaluate(WIDE_ELEMENTS)) as string[]) : [];
+  await rig.page.setViewportSize({ width: DESKTOP_PX, height: 900 });
+  await rig.page.screenshot({ path: join(ARTIFACTS, `phone-${name}-1280.png`), fullPage: true });
+  await rig.page.setViewportSize({ width: PHONE_PX, height: 844 });
   expect(
     scrollWidth,
     `${name}: the page is ${scrollWidth} px wide at ${PHONE_PX} px (${wide.join('; ')})`,
@@ -165,14 +138,16 @@ async function checkWidth(name: string): Promise<void> {
 describe('every page at a phone width', { timeout: 300_000 }, () => {
   test.each(pages().map(([name]) => name))('%s scrolls no sideways at 390 px', async (name) => {
     const path = pages().find(([n]) => n === name)![1];
-    await page.goto(`${service.url}${path}`);
+    await rig.page.goto(`${rig.service.url}${path}`);
     await checkWidth(name);
   });
 
   test('the scenario result scrolls no sideways at 390 px', async () => {
-    await page.goto(`${service.url}/studies/${id}/scenario?sourceId=orle-interface`);
-    await page.getByRole('button', { name: en.t('scenario.run') }).click();
-    await page.waitForSelector('.scenario-table', { timeout: 240_000 });
+    await rig.page.goto(
+      `${rig.service.url}/studies/${rig.studyId}/scenario?sourceId=orle-interface`,
+    );
+    await rig.page.getByRole('button', { name: en.t('scenario.run') }).click();
+    await rig.page.waitForSelector('.scenario-table', { timeout: 240_000 });
     await checkWidth('scenario');
   });
 });

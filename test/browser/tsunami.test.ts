@@ -3,15 +3,9 @@ import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { TsunamiResult } from '../../api/engine/tsunami/index.ts';
 import { translator } from '../../web/text/translator.ts';
-import { startService, tempDir, type ServiceProcess } from '../service/helpers/service-process.ts';
-import { demoStudyId, startRun, waitForStatus } from '../service/helpers/runs.ts';
-import {
-  ARTIFACTS,
-  launchChromium,
-  offlineContext,
-  seriousAxeViolations,
-  type LaunchedBrowser,
-} from './helpers/chromium.ts';
+import { demoStudyId } from '../service/helpers/runs.ts';
+import { ARTIFACTS, offlineContext, seriousAxeViolations } from './helpers/chromium.ts';
+import { browserService, screenStudy } from './helpers/browser-service.ts';
 
 /**
  * The tsunami time to act on the demo coast in Chromium, at a desktop and a phone width: the
@@ -19,25 +13,18 @@ import {
  * is checked with axe-core, no part of its tsunami section may be wider than the window, and
  * no request may leave the service's origin. Screenshots go to test-artifacts/tsunami-*.png.
  */
-const dir = tempDir('tremora-tsunami-browser-');
-let service: ServiceProcess;
-let chromium: LaunchedBrowser;
-let demoId: string;
 let times: TsunamiResult;
-
-beforeAll(async () => {
-  service = await startService({ databasePath: join(dir.path, 'tsunami.db') });
-  demoId = await demoStudyId(service);
-  const run = await startRun(service, demoId);
-  expect((await waitForStatus(service, run.id)).status).toBe('done');
-  times = (await (await service.fetch(`/api/studies/${demoId}/tsunami`)).json()) as TsunamiResult;
-  chromium = await launchChromium();
-}, 300_000);
-
-afterAll(async () => {
-  await chromium?.close();
-  await service?.stop();
-  dir.remove();
+const rig = browserService({
+  tempPrefix: 'tremora-tsunami-browser-',
+  database: 'tsunami.db',
+  prepare: async (service) => {
+    const demoId = await demoStudyId(service);
+    await screenStudy(service, demoId);
+    times = (await (await service.fetch(`/api/studies/${demoId}/tsunami`)).json()) as TsunamiResult;
+    return demoId;
+  },
+  context: false,
+  setupTimeoutMs: 300_000,
 });
 
 /** Each view waits on the service and Chromium on a shared 2-core machine: a generous limit, no time asserted. */
@@ -54,7 +41,7 @@ describe.each(WIDTHS)('tsunami time to act at $name width', ({ name, viewport })
   let page: Page;
 
   beforeAll(async () => {
-    ({ context, foreignRequests } = await offlineContext(chromium.browser, service.url, {
+    ({ context, foreignRequests } = await offlineContext(rig.chromium.browser, rig.service.url, {
       viewport,
     }));
     page = await context.newPage();
@@ -81,7 +68,7 @@ describe.each(WIDTHS)('tsunami time to act at $name width', ({ name, viewport })
   test(
     'the overview ranks the coastal villages by time to act',
     async () => {
-      await page.goto(`${service.url}/studies/${demoId}`);
+      await page.goto(`${rig.service.url}/studies/${rig.studyId}`);
       const rows = page.locator('#tsunami-ranking tbody tr');
       expect(await rows.count()).toBe(times.communities.length);
       const minutes = await rows.evaluateAll((trs) =>
@@ -97,13 +84,15 @@ describe.each(WIDTHS)('tsunami time to act at $name width', ({ name, viewport })
     "a coastal village's page and handout say the time in plain words",
     async () => {
       const quillan = times.communities.find((c) => c.id === 'quillan-landing');
-      await page.goto(`${service.url}/studies/${demoId}/communities/quillan-landing`);
+      await page.goto(`${rig.service.url}/studies/${rig.studyId}/communities/quillan-landing`);
       await expect(page.locator('.tsunami-sentence').textContent()).resolves.toContain(
         `could reach this coast in about ${quillan?.firstArrivalMinutes} to ${quillan?.latestMinutes} minutes`,
       );
       await expect(page.locator('.tsunami-time .tsunami-caution').isVisible()).resolves.toBe(true);
       await check('community', '.tsunami-time');
-      await page.goto(`${service.url}/studies/${demoId}/communities/quillan-landing/handout`);
+      await page.goto(
+        `${rig.service.url}/studies/${rig.studyId}/communities/quillan-landing/handout`,
+      );
       await expect(page.locator('.tsunami-sentence').textContent()).resolves.toMatch(
         /could reach this coast in about \d+ to \d+ minutes/,
       );
@@ -115,7 +104,7 @@ describe.each(WIDTHS)('tsunami time to act at $name width', ({ name, viewport })
   test(
     'the scenario on the interface gives the times of its rupture',
     async () => {
-      await page.goto(`${service.url}/studies/${demoId}/scenario?sourceId=orle-interface`);
+      await page.goto(`${rig.service.url}/studies/${rig.studyId}/scenario?sourceId=orle-interface`);
       await page.getByRole('button', { name: translator('en').t('scenario.run') }).click();
       await page.waitForSelector('#tsunami-scenario', { timeout: 120_000 });
       expect(await page.locator('#tsunami-scenario tbody tr').count()).toBe(

@@ -17,8 +17,8 @@ import {
 } from '../data/study-catalog.ts';
 import { readStudy, type StudyData } from '../data/study-data.ts';
 import { CatalogView, OUTLINE_CHOICE, type ZoneForm } from '../views/catalog-view.tsx';
-import { MessageView } from '../views/message-view.tsx';
 import { field, fileField, type PageKit } from './page-kit.ts';
+import { studyNotFoundPage } from './message-pages.tsx';
 
 /** A zone form filled in for a first look: the study's first crustal zone (else its first zone), M 7, 10 km deep. */
 function defaultZone(study: Study): ZoneForm {
@@ -77,21 +77,8 @@ export function catalogPages(app: Hono, kit: PageKit): void {
   const load = (
     c: Context,
   ): { data: StudyData & { ok: true } } | { response: Response | Promise<Response> } => {
-    const tr = kit.tr(c);
-    const id = c.req.param('id') as string;
-    const data = readStudy(ctx, id);
-    if (!data || !data.ok)
-      return {
-        response: kit.render(
-          c,
-          <MessageView
-            page={kit.page(c)}
-            title={tr.t('error.notFound')}
-            text={tr.text('error.studyNotFound', { id })}
-          />,
-          404,
-        ),
-      };
+    const data = readStudy(ctx, c.req.param('id') as string);
+    if (!data || !data.ok) return { response: studyNotFoundPage(kit, c) };
     return { data };
   };
 

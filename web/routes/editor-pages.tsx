@@ -18,11 +18,12 @@ import {
 } from '../data/study-edits.ts';
 import { CommunityFormView } from '../views/community-form-view.tsx';
 import { EditorView, type UploadProblem } from '../views/editor-view.tsx';
-import { MessageView } from '../views/message-view.tsx';
 import { field, fileField, type PageKit, uploadedOrCarried } from './page-kit.ts';
 import { faultImportPages } from './fault-import-pages.tsx';
 import { motionPages } from './motion-pages.tsx';
 import { sourcePages } from './source-pages.tsx';
+import { studyNotFoundPage, invalidStudyPage } from './message-pages.tsx';
+import { editorFormProps, issuesByField } from './page-kit.ts';
 
 const EMPTY_FORM: CommunityForm = {
   id: '',
@@ -74,35 +75,9 @@ export function editorPages(app: Hono, kit: PageKit): void {
   const load = (
     c: Context,
   ): { data: StudyData & { ok: true } } | { response: Response | Promise<Response> } => {
-    const tr = kit.tr(c);
-    const id = c.req.param('id') as string;
-    const data = readStudy(ctx, id, { drafts: true });
-    if (!data)
-      return {
-        response: kit.render(
-          c,
-          <MessageView
-            page={kit.page(c)}
-            title={tr.t('error.notFound')}
-            text={tr.text('error.studyNotFound', { id })}
-          />,
-          404,
-        ),
-      };
-    if (!data.ok) {
-      return {
-        response: kit.render(
-          c,
-          <MessageView
-            page={kit.page(c)}
-            title={data.record.name}
-            text={tr.text('editor.otherProblems')}
-            details={data.issues.map((i) => `${i.path}: ${i.message}`)}
-          />,
-          422,
-        ),
-      };
-    }
+    const data = readStudy(ctx, c.req.param('id') as string, { drafts: true });
+    if (!data) return { response: studyNotFoundPage(kit, c) };
+    if (!data.ok) return { response: invalidStudyPage(kit, c, data) };
     return { data };
   };
 
@@ -159,31 +134,15 @@ export function editorPages(app: Hono, kit: PageKit): void {
     issues: readonly InputIssue[],
   ) => {
     const at = index ?? communityList(data.inputs, data.study.communities).length;
-    const byField = new Map<string, InputIssue[]>();
-    const others: InputIssue[] = [];
-    for (const issue of issues) {
-      const name = issueField(issue.path, at);
-      if (name && name !== '(row)' && name in EMPTY_FORM)
-        byField.set(name, [...(byField.get(name) ?? []), issue]);
-      else others.push(issue);
-    }
+    const split = issuesByField(issues, (path) => {
+      const name = issueField(path, at);
+      return name && name !== '(row)' && name in EMPTY_FORM ? name : undefined;
+    });
     const existing = index === undefined ? undefined : data.study.communities[index];
+    const form = { existing, folder: 'communities', newPath: 'new-community', issues: split };
     return kit.render(
       c,
-      <CommunityFormView
-        page={kit.page(c)}
-        studyId={data.record.id}
-        studyName={data.study.name}
-        action={
-          existing
-            ? `/studies/${data.record.id}/edit/communities/${encodeURIComponent(existing.id)}`
-            : `/studies/${data.record.id}/edit/new-community`
-        }
-        editing={existing?.name}
-        values={values}
-        fieldIssues={byField}
-        otherIssues={others}
-      />,
+      <CommunityFormView {...editorFormProps(kit, c, data, form)} values={values} />,
       issues.length > 0 ? 422 : 200,
     );
   };

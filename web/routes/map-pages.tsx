@@ -4,8 +4,8 @@ import { readMapRequest } from '../../api/operations/map-request.ts';
 import { startMapRun } from '../../api/operations/start-map-run.ts';
 import type { MapFormState } from '../views/hazard-map-panel.tsx';
 import { MapRunView } from '../views/map-run-view.tsx';
-import { MessageView } from '../views/message-view.tsx';
 import { field, type PageKit } from './page-kit.ts';
+import { notFoundPage, studyNotFoundPage } from './message-pages.tsx';
 
 /** The overview rendered again with the hazard-map form's problems (study-pages.tsx). */
 export type OverviewWithMapForm = (
@@ -28,18 +28,7 @@ function formNumber(text: string): number | string {
 export function mapPages(app: Hono, kit: PageKit, overview: OverviewWithMapForm): void {
   const { ctx } = kit;
 
-  const notFound = (c: Context) => {
-    const tr = kit.tr(c);
-    return kit.render(
-      c,
-      <MessageView
-        page={kit.page(c)}
-        title={tr.t('error.notFound')}
-        text={tr.text('error.studyNotFound', { id: c.req.param('id') ?? '' })}
-      />,
-      404,
-    );
-  };
+  const notFound = (c: Context) => studyNotFoundPage(kit, c);
 
   app.post('/studies/:id/maps', async (c) => {
     const id = c.req.param('id');
@@ -73,21 +62,10 @@ export function mapPages(app: Hono, kit: PageKit, overview: OverviewWithMapForm)
   });
 
   app.get('/studies/:id/maps/:mapId', (c) => {
-    const tr = kit.tr(c);
     const id = c.req.param('id');
     const record = ctx.store.studies.get(id);
     const run = ctx.store.maps.get(c.req.param('mapId'));
-    if (!record || !run || run.studyId !== id) {
-      return kit.render(
-        c,
-        <MessageView
-          page={kit.page(c)}
-          title={tr.t('error.notFound')}
-          text={tr.text('error.notFoundText')}
-        />,
-        404,
-      );
-    }
+    if (!record || !run || run.studyId !== id) return notFoundPage(kit, c);
     return kit.render(
       c,
       <MapRunView page={kit.page(c)} studyId={id} studyName={record.name} run={run} />,

@@ -6,9 +6,10 @@ import { isSlideImage, slideImageSvg } from '../images/slide-images.tsx';
 import { svgToPng } from '../images/svg-file.ts';
 import { villageFrame } from '../maps/village-map.tsx';
 import type { Translator } from '../text/translator.ts';
-import { MessageView } from '../views/message-view.tsx';
 import { PosterView } from '../views/poster-view.tsx';
+import type { CommunitySheetProps } from '../views/print-sheet.tsx';
 import type { PageKit } from './page-kit.ts';
+import { notFoundPage } from './message-pages.tsx';
 
 /** A community of a study's newest done run, or the answer to give instead (study-pages.tsx). */
 export type FoundCommunity =
@@ -21,6 +22,24 @@ export type FoundCommunity =
       readonly screening: { readonly results: { readonly provenance: Provenance } };
       readonly page: CommunityPageData;
     };
+
+/** What a community's printed sheet (handout, poster) is made from, printed now. */
+export function communitySheet(
+  kit: PageKit,
+  c: Context,
+  found: FoundCommunity & { readonly kind: 'page' },
+): CommunitySheetProps {
+  const { id, study, screening, page } = found;
+  return {
+    page: kit.page(c),
+    studyId: id,
+    study,
+    data: page,
+    frame: villageFrame(study, page.community, page.result.nearestFaults),
+    provenance: screening.results.provenance,
+    printedAt: new Date().toISOString(),
+  };
+}
 
 /** The media type of each picture format offered for slides. */
 const MEDIA_TYPES = { svg: 'image/svg+xml; charset=utf-8', png: 'image/png' } as const;
@@ -40,19 +59,7 @@ export function materialPages(
   app.get('/studies/:id/communities/:cid/poster', (c) => {
     const found = findCommunity(c);
     if (found.kind === 'response') return found.response;
-    const { id, study, screening, page } = found;
-    return kit.render(
-      c,
-      <PosterView
-        page={kit.page(c)}
-        studyId={id}
-        study={study}
-        data={page}
-        frame={villageFrame(study, page.community, page.result.nearestFaults)}
-        provenance={screening.results.provenance}
-        printedAt={new Date().toISOString()}
-      />,
-    );
+    return kit.render(c, <PosterView {...communitySheet(kit, c, found)} />);
   });
 
   app.get('/studies/:id/communities/:cid/images/:file', async (c) => {
@@ -60,18 +67,7 @@ export function materialPages(
     const match = /^([a-z-]+)\.(svg|png)$/.exec(file);
     const name = match?.[1] ?? '';
     const format = match?.[2] as 'svg' | 'png' | undefined;
-    const notFound = () => {
-      const tr = kit.tr(c);
-      return kit.render(
-        c,
-        <MessageView
-          page={kit.page(c)}
-          title={tr.t('error.notFound')}
-          text={tr.text('error.notFoundText')}
-        />,
-        404,
-      );
-    };
+    const notFound = () => notFoundPage(kit, c);
     if (!format || !isSlideImage(name)) return notFound();
     const found = findCommunity(c);
     if (found.kind === 'response') return found.response;

@@ -3,8 +3,9 @@ import { getCookie } from 'hono/cookie';
 import { html } from 'hono/html';
 import type { Child } from 'hono/jsx';
 import type { ContentfulStatusCode } from 'hono/utils/http-status';
+import type { InputIssue } from '../../api/engine/errors.ts';
 import type { ServiceContext } from '../../api/operations/service-context.ts';
-import { ResultsCache } from '../data/study-data.ts';
+import { ResultsCache, type StudyData } from '../data/study-data.ts';
 import type { PageContext } from '../layout/page-shell.tsx';
 import type { TextBundles } from '../text/text-bundles.ts';
 import {
@@ -118,4 +119,54 @@ export async function uploadedOrCarried(
   return carried && carriedName
     ? { bytes: new Uint8Array(Buffer.from(carried, 'base64')), name: carriedName, chosen: false }
     : undefined;
+}
+
+/**
+ * A form's issues split for its view: under each field the form shows (`fieldOf` names it, or
+ * gives undefined for an issue of no shown field), and the others, listed above the form.
+ */
+export function issuesByField(
+  issues: readonly InputIssue[],
+  fieldOf: (path: string) => string | undefined,
+): { byField: Map<string, InputIssue[]>; others: InputIssue[] } {
+  const byField = new Map<string, InputIssue[]>();
+  const others: InputIssue[] = [];
+  for (const issue of issues) {
+    const name = fieldOf(issue.path);
+    if (name) byField.set(name, [...(byField.get(name) ?? []), issue]);
+    else others.push(issue);
+  }
+  return { byField, others };
+}
+
+/**
+ * What an editor form's view (a community's, a source's) is given besides its values: the study,
+ * where the form posts (the item's own path when it is edited, else the path that adds one), and
+ * its issues split by issuesByField.
+ */
+export function editorFormProps(
+  kit: PageKit,
+  c: Context,
+  data: StudyData & { ok: true },
+  form: {
+    /** The item edited (none for a new one). */
+    readonly existing: { readonly id: string; readonly name: string } | undefined;
+    /** The editor's folder for these items (`communities`) and its path for a new one. */
+    readonly folder: string;
+    readonly newPath: string;
+    readonly issues: ReturnType<typeof issuesByField>;
+  },
+) {
+  const base = `/studies/${data.record.id}/edit`;
+  return {
+    page: kit.page(c),
+    studyId: data.record.id,
+    studyName: data.study.name,
+    action: form.existing
+      ? `${base}/${form.folder}/${encodeURIComponent(form.existing.id)}`
+      : `${base}/${form.newPath}`,
+    editing: form.existing?.name,
+    fieldIssues: form.issues.byField,
+    otherIssues: form.issues.others,
+  };
 }

@@ -7,10 +7,10 @@ import { readScenarioRequest } from '../../api/operations/scenario-request.ts';
 import { readStudy } from '../data/study-data.ts';
 import { scenarioTsunamiTimes, type TsunamiPageResult } from '../data/tsunami-data.ts';
 import { mapFrame, studyPoints } from '../maps/map-frame.ts';
-import { MessageView } from '../views/message-view.tsx';
 import { ScenarioView } from '../views/scenario-view.tsx';
 import { field, type PageKit } from './page-kit.ts';
 import { OVERVIEW_MAP } from './study-pages.tsx';
+import { studyNotFoundPage } from './message-pages.tsx';
 
 /** Cells across the scenario map's longer side: enough to show the pattern, few enough for a light page. */
 const GRID_CELLS_ACROSS = 64;
@@ -44,20 +44,9 @@ export function scenarioPages(app: Hono, kit: PageKit): void {
   const { ctx } = kit;
 
   const page = async (c: Context, form?: { sourceId: string; magnitude: string }) => {
-    const tr = kit.tr(c);
     const id = c.req.param('id') as string;
     const data = readStudy(ctx, id);
-    if (!data || !data.ok) {
-      return kit.render(
-        c,
-        <MessageView
-          page={kit.page(c)}
-          title={tr.t('error.notFound')}
-          text={tr.text('error.studyNotFound', { id })}
-        />,
-        404,
-      );
-    }
+    if (!data || !data.ok) return studyNotFoundPage(kit, c);
     const { study } = data;
     const first = study.sources[0];
     const asked = c.req.query('sourceId');

@@ -12,6 +12,7 @@ import type { StudyData } from '../data/study-data.ts';
 import { removeSource, saveSource, sourceFeatures, type EditOutcome } from '../data/study-edits.ts';
 import { SourceFormView } from '../views/source-form-view.tsx';
 import { field, type PageKit } from './page-kit.ts';
+import { editorFormProps, issuesByField } from './page-kit.ts';
 
 type Editable = StudyData & { ok: true };
 type Answer = Response | Promise<Response>;
@@ -76,31 +77,15 @@ export function sourcePages(app: Hono, kit: PageKit, steps: EditorSteps): void {
     issues: readonly InputIssue[],
   ) => {
     const at = index ?? sourceFeatures(data.inputs).length;
-    const byField = new Map<string, InputIssue[]>();
-    const others: InputIssue[] = [];
-    for (const issue of issues) {
-      const name = sourceIssueField(issue.path, at);
-      if (name && (name in EMPTY_SOURCE || name === 'coordinates'))
-        byField.set(name, [...(byField.get(name) ?? []), issue]);
-      else others.push(issue);
-    }
+    const split = issuesByField(issues, (path) => {
+      const name = sourceIssueField(path, at);
+      return name && (name in EMPTY_SOURCE || name === 'coordinates') ? name : undefined;
+    });
     const existing = index === undefined ? undefined : data.study.sources[index];
+    const form = { existing, folder: 'sources', newPath: 'new-source', issues: split };
     return kit.render(
       c,
-      <SourceFormView
-        page={kit.page(c)}
-        studyId={data.record.id}
-        studyName={data.study.name}
-        action={
-          existing
-            ? `/studies/${data.record.id}/edit/sources/${encodeURIComponent(existing.id)}`
-            : `/studies/${data.record.id}/edit/new-source`
-        }
-        editing={existing?.name}
-        values={values}
-        fieldIssues={byField}
-        otherIssues={others}
-      />,
+      <SourceFormView {...editorFormProps(kit, c, data, form)} values={values} />,
       issues.length > 0 ? 422 : 200,
     );
   };

@@ -27,10 +27,10 @@ import { DraftNotice } from '../views/draft-notice.tsx';
 import { MessageView } from '../views/message-view.tsx';
 import { OverviewView } from '../views/overview-view.tsx';
 import { RunView } from '../views/run-view.tsx';
-import { villageFrame } from '../maps/village-map.tsx';
 import { mapPages } from './map-pages.tsx';
-import { materialPages } from './material-pages.tsx';
+import { communitySheet, materialPages } from './material-pages.tsx';
 import type { PageKit } from './page-kit.ts';
+import { notFoundPage, invalidStudyPage } from './message-pages.tsx';
 
 /** Map sizes, px: the overview's map and the community page's smaller one. */
 export const OVERVIEW_MAP = { width: 760, maxHeight: 620, padding: 28 } as const;
@@ -60,14 +60,7 @@ export function studyPages(app: Hono, kit: PageKit): void {
   const { ctx } = kit;
   const layers = new MapLayerCache();
 
-  const notFound = (c: Context, text: Child) => {
-    const tr = kit.tr(c);
-    return kit.render(
-      c,
-      <MessageView page={kit.page(c)} title={tr.t('error.notFound')} text={text} />,
-      404,
-    );
-  };
+  const notFound = (c: Context, text: Child) => notFoundPage(kit, c, text);
   const invalid = (c: Context, data: StudyData & { ok: false }) => {
     const tr = kit.tr(c);
     if (data.missing.length > 0)
@@ -77,16 +70,7 @@ export function studyPages(app: Hono, kit: PageKit): void {
           <DraftNotice tr={tr} studyId={data.record.id} missing={data.missing} />
         </MessageView>,
       );
-    return kit.render(
-      c,
-      <MessageView
-        page={kit.page(c)}
-        title={data.record.name}
-        text={tr.text('editor.otherProblems')}
-        details={data.issues.map((i) => `${i.path}: ${i.message}`)}
-      />,
-      422,
-    );
+    return invalidStudyPage(kit, c, data);
   };
 
   const overview = async (c: Context, again: OverviewAgain = {}) => {
@@ -272,22 +256,11 @@ export function studyPages(app: Hono, kit: PageKit): void {
   app.get('/studies/:id/communities/:cid/handout', async (c) => {
     const found = communityContext(c);
     if (found.kind === 'response') return found.response;
-    const { tr, id, study, screening, page } = found;
+    const { study, page } = found;
     const tsunami = page.community.coastal ? await studyTsunami(ctx, study) : undefined;
     return kit.render(
       c,
-      <HandoutView
-        tr={tr}
-        path={kit.here(c)}
-        studyId={id}
-        study={study}
-        data={page}
-        frame={villageFrame(study, page.community, page.result.nearestFaults)}
-        provenance={screening.results.provenance}
-        printedAt={new Date().toISOString()}
-        {...(found.felt ? { felt: found.felt } : {})}
-        {...(tsunami ? { tsunami } : {})}
-      />,
+      <HandoutView {...communitySheet(kit, c, found)} felt={found.felt} tsunami={tsunami} />,
     );
   });
 

@@ -14,9 +14,9 @@ import {
 } from '../../api/study/community-files/column-names.ts';
 import { readCommunitiesFile } from '../data/community-import.ts';
 import { DeleteStudyView } from '../views/delete-study-view.tsx';
-import { MessageView } from '../views/message-view.tsx';
 import { StudyFormView, type StudyFormViewProps } from '../views/study-form-view.tsx';
 import { field, fileField, type PageKit } from './page-kit.ts';
+import { studyNotFoundPage } from './message-pages.tsx';
 
 type Form = Record<string, string | File | (string | File)[]>;
 
@@ -62,19 +62,7 @@ export function studyRecordPages(app: Hono, kit: PageKit): void {
   const form = (c: Context, props: Omit<StudyFormViewProps, 'page'>, status: 200 | 422 = 200) =>
     kit.render(c, <StudyFormView page={kit.page(c)} {...props} />, status);
 
-  const notFound = (c: Context) => {
-    const tr = kit.tr(c);
-    const id = c.req.param('id') as string;
-    return kit.render(
-      c,
-      <MessageView
-        page={kit.page(c)}
-        title={tr.t('error.notFound')}
-        text={tr.text('error.studyNotFound', { id })}
-      />,
-      404,
-    );
-  };
+  const notFound = (c: Context) => studyNotFoundPage(kit, c);
 
   app.get('/studies/new', (c) => form(c, { kind: 'new', action: '/studies/new', name: '' }));
 

@@ -1,22 +1,11 @@
-import type { InputIssue } from '../../api/engine/errors.ts';
 import { SITE_CLASSES } from '../../api/study/site-class.ts';
 import type { CommunityForm } from '../data/study-edits.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 import type { TextKey } from '../text/text-key.ts';
-import { FieldProblems, FormProblems } from './field-problems.tsx';
+import { FieldProblems } from './field-problems.tsx';
+import { EditorFormPage, type EditorFormProps } from './editor-form-page.tsx';
 
-export interface CommunityFormViewProps {
-  readonly page: PageContext;
-  readonly studyId: string;
-  readonly studyName: string;
-  /** Where the form posts. */
-  readonly action: string;
-  /** The name of the community being edited; absent when adding one. */
-  readonly editing?: string | undefined;
+export interface CommunityFormViewProps extends EditorFormProps {
   readonly values: CommunityForm;
-  /** Problems by field name ("lat", "vs30"...), and those of the row or study as a whole. */
-  readonly fieldIssues: ReadonlyMap<string, readonly InputIssue[]>;
-  readonly otherIssues: readonly InputIssue[];
 }
 
 const TEXT_FIELDS = [
@@ -36,8 +25,6 @@ const MORE_FIELDS = [
 export function CommunityFormView(props: CommunityFormViewProps) {
   const { tr } = props.page;
   const { values } = props;
-  const headingKey = props.editing === undefined ? 'editor.add' : 'editor.edit';
-  const heading = { name: props.editing ?? '' };
   const problems = (name: string) => props.fieldIssues.get(name) ?? [];
   const input = (f: {
     readonly name: keyof CommunityForm & string;
@@ -64,16 +51,10 @@ export function CommunityFormView(props: CommunityFormViewProps) {
     );
   };
   return (
-    <PageShell
-      page={props.page}
-      title={tr.t(headingKey, heading)}
-      titleLang={tr.fallbackLang(headingKey)}
-      study={{ id: props.studyId, name: props.studyName }}
-      section="edit"
+    <EditorFormPage
+      form={props}
+      text={{ add: 'editor.add', edit: 'editor.edit', intro: 'editor.intro' }}
     >
-      <h1>{tr.text(headingKey, heading)}</h1>
-      <p>{tr.text('editor.intro')}</p>
-      <FormProblems tr={tr} fieldIssues={props.fieldIssues} otherIssues={props.otherIssues} />
       <form method="post" action={props.action} class="community-form" novalidate>
         {TEXT_FIELDS.map(input)}
         <div class={problems('siteClass').length > 0 ? 'field field-bad' : 'field'}>
@@ -119,6 +100,6 @@ export function CommunityFormView(props: CommunityFormViewProps) {
           <a href={`/studies/${props.studyId}/edit`}>{tr.text('editor.cancel')}</a>
         </p>
       </form>
-    </PageShell>
+    </EditorFormPage>
   );
 }

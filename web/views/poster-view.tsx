@@ -1,23 +1,10 @@
-import type { Study } from '../../api/engine/model.ts';
-import type { Provenance } from '../../api/engine/results.ts';
-import type { CommunityPageData } from '../data/community-data.ts';
-import type { PageContext } from '../layout/page-shell.tsx';
-import type { MapFrame } from '../maps/map-frame.ts';
 import type { TextKey } from '../text/text-key.ts';
-import { ProvenanceLine } from './community-view.tsx';
 import { Pictogram, PICTOGRAM_LEVELS, type PictogramLevel } from './intensity-pictograms.tsx';
 import { VillageMapSection } from './village-map-section.tsx';
+import { PrintSheet, PrintedFooter } from './print-sheet.tsx';
+import type { CommunitySheetProps } from './print-sheet.tsx';
 
-export interface PosterViewProps {
-  readonly page: PageContext;
-  readonly studyId: string;
-  readonly study: Study;
-  readonly data: CommunityPageData;
-  readonly frame: MapFrame;
-  readonly provenance: Provenance;
-  /** When the poster was made (ISO), printed on it. */
-  readonly printedAt: string;
-}
+export type PosterViewProps = CommunitySheetProps;
 
 /** What to do during shaking, from the safety advice: its first lines, the ones a poster can hold. */
 const DURING_LINES = 3;
@@ -35,119 +22,92 @@ export function PosterView(props: PosterViewProps) {
   const title = tr.t('material.posterTitle', { name: community.name });
   const during = tr.t('safety.during').split('\n').slice(0, DURING_LINES);
   return (
-    <html lang={tr.lang}>
-      <head>
-        <meta charset="utf-8" />
-        <meta name="viewport" content="width=device-width, initial-scale=1" />
-        <title
-          lang={tr.fallbackLang('material.posterTitle')}
-        >{`${title} · ${tr.t('site.name')}`}</title>
-        <link rel="icon" href="data:," />
-        <link rel="stylesheet" href="/static/tremora.css" />
-        <link rel="stylesheet" href="/static/poster.css" />
-        <script src="/static/tremora.js" defer></script>
-      </head>
-      <body class="poster-page">
-        <header class="poster-tools no-print">
-          <nav aria-label={tr.t('nav.main')}>
-            <a href={`/studies/${props.studyId}/communities/${community.id}`}>
-              {tr.text('material.posterBack')}
-            </a>
-          </nav>
-          <p>{tr.text('material.posterHint')}</p>
-          <p
-            data-print-button="true"
-            data-print-label={tr.t('material.poster')}
-            lang={tr.fallbackLang('material.poster')}
-            class="print-slot"
-          ></p>
-        </header>
-        <main id="main" class="poster">
-          <h1>{title}</h1>
-          <p class="poster-headline" data-probability={data.chances.VII}>
-            {tr.text('community.headline', {
-              name: community.name,
-              chance: vii.frequency,
-              years: data.years,
-              percent: vii.percent,
-            })}
-          </p>
-          <p class="intensity-sentence">{tr.text('material.intensity')}</p>
-          <section aria-labelledby="poster-levels" class="poster-levels">
-            <h2 id="poster-levels">{tr.text('material.posterLevels')}</h2>
-            <ul>
-              {data.levels.map((level) =>
-                level.mmiLevel === null ? null : (
-                  <li data-mmi-level={level.mmiLevel}>
-                    {PICTOGRAM_LEVELS.includes(level.mmiLevel as PictogramLevel) && (
-                      <svg
-                        viewBox="0 0 100 100"
-                        class="pictogram-svg"
-                        aria-hidden="true"
-                        focusable="false"
-                      >
-                        <Pictogram level={level.mmiLevel as PictogramLevel} />
-                      </svg>
-                    )}
-                    <div>
-                      <p class="poster-level-period">
-                        {tr.text('community.level', { period: tr.number(level.returnPeriodYears) })}
-                      </p>
-                      <p class="poster-level-name">
-                        {tr.text('community.levelMmi', {
-                          mmi: tr.mmi(level.mmi ?? level.mmiLevel),
-                          name: tr.text(`mmi.${level.mmiLevel}.name` as TextKey),
-                        })}
-                      </p>
-                      <p>{tr.text(`mmi.${level.mmiLevel}.feel` as TextKey)}</p>
-                      <p>{tr.text(`mmi.${level.mmiLevel}.buildings` as TextKey)}</p>
-                    </div>
-                  </li>
-                ),
-              )}
-            </ul>
-          </section>
-          <section aria-labelledby="poster-do" class="poster-do">
-            <h2 id="poster-do">{tr.text('material.posterDo')}</h2>
-            <ul lang={tr.fallbackLang('safety.during')}>
-              {during.map((line) => (
-                <li>{line}</li>
-              ))}
-            </ul>
-            {community.coastal && (
-              <div class="poster-tsunami">
-                <h3>{tr.text('tsunami.title')}</h3>
-                <ul lang={tr.fallbackLang('tsunami.text')}>
-                  {tr
-                    .t('tsunami.text')
-                    .split('\n')
-                    .slice(0, 1)
-                    .map((line) => (
-                      <li>{line}</li>
-                    ))}
-                </ul>
-              </div>
+    <PrintSheet page={props.page} sheet="poster" studyId={props.studyId} community={community}>
+      <main id="main" class="poster">
+        <h1>{title}</h1>
+        <p class="poster-headline" data-probability={data.chances.VII}>
+          {tr.text('community.headline', {
+            name: community.name,
+            chance: vii.frequency,
+            years: data.years,
+            percent: vii.percent,
+          })}
+        </p>
+        <p class="intensity-sentence">{tr.text('material.intensity')}</p>
+        <section aria-labelledby="poster-levels" class="poster-levels">
+          <h2 id="poster-levels">{tr.text('material.posterLevels')}</h2>
+          <ul>
+            {data.levels.map((level) =>
+              level.mmiLevel === null ? null : (
+                <li data-mmi-level={level.mmiLevel}>
+                  {PICTOGRAM_LEVELS.includes(level.mmiLevel as PictogramLevel) && (
+                    <svg
+                      viewBox="0 0 100 100"
+                      class="pictogram-svg"
+                      aria-hidden="true"
+                      focusable="false"
+                    >
+                      <Pictogram level={level.mmiLevel as PictogramLevel} />
+                    </svg>
+                  )}
+                  <div>
+                    <p class="poster-level-period">
+                      {tr.text('community.level', { period: tr.number(level.returnPeriodYears) })}
+                    </p>
+                    <p class="poster-level-name">
+                      {tr.text('community.levelMmi', {
+                        mmi: tr.mmi(level.mmi ?? level.mmiLevel),
+                        name: tr.text(`mmi.${level.mmiLevel}.name` as TextKey),
+                      })}
+                    </p>
+                    <p>{tr.text(`mmi.${level.mmiLevel}.feel` as TextKey)}</p>
+                    <p>{tr.text(`mmi.${level.mmiLevel}.buildings` as TextKey)}</p>
+                  </div>
+                </li>
+              ),
             )}
-          </section>
-          <VillageMapSection
+          </ul>
+        </section>
+        <section aria-labelledby="poster-do" class="poster-do">
+          <h2 id="poster-do">{tr.text('material.posterDo')}</h2>
+          <ul lang={tr.fallbackLang('safety.during')}>
+            {during.map((line) => (
+              <li>{line}</li>
+            ))}
+          </ul>
+          {community.coastal && (
+            <div class="poster-tsunami">
+              <h3>{tr.text('tsunami.title')}</h3>
+              <ul lang={tr.fallbackLang('tsunami.text')}>
+                {tr
+                  .t('tsunami.text')
+                  .split('\n')
+                  .slice(0, 1)
+                  .map((line) => (
+                    <li>{line}</li>
+                  ))}
+              </ul>
+            </div>
+          )}
+        </section>
+        <VillageMapSection
+          tr={tr}
+          study={props.study}
+          data={data}
+          frame={props.frame}
+          idPrefix="poster-map"
+          headingLevel={2}
+        />
+        <footer class="poster-footer">
+          <PrintedFooter
             tr={tr}
-            study={props.study}
-            data={data}
-            frame={props.frame}
-            idPrefix="poster-map"
-            headingLevel={2}
+            sheet="poster"
+            provenance={props.provenance}
+            printedAt={props.printedAt}
+            more={<> {tr.text('safety.local')}</>}
           />
-          <footer class="poster-footer">
-            <p class="poster-caution">
-              <strong>{tr.text('caution.short')}</strong> {tr.text('safety.local')}
-            </p>
-            <ProvenanceLine tr={tr} provenance={props.provenance} />
-            <p class="printed">
-              {tr.text('provenance.printed', { date: tr.date(props.printedAt) })}
-            </p>
-          </footer>
-        </main>
-      </body>
-    </html>
+        </footer>
+      </main>
+    </PrintSheet>
   );
 }

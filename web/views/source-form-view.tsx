@@ -1,21 +1,11 @@
-import type { InputIssue } from '../../api/engine/errors.ts';
 import { TECTONIC_SETTINGS } from '../../api/engine/model.ts';
 import type { SourceForm, SourceTextField } from '../data/source-form.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 import type { TextKey } from '../text/text-key.ts';
-import { FieldProblems, FormProblems } from './field-problems.tsx';
+import { FieldProblems } from './field-problems.tsx';
+import { EditorFormPage, type EditorFormProps } from './editor-form-page.tsx';
 
-export interface SourceFormViewProps {
-  readonly page: PageContext;
-  readonly studyId: string;
-  readonly studyName: string;
-  readonly action: string;
-  /** The name of the source being edited; absent when adding one. */
-  readonly editing?: string | undefined;
+export interface SourceFormViewProps extends EditorFormProps {
   readonly values: SourceForm;
-  /** Problems by form field ("dip", "recurrence.bValue", "coordinates"), and the others. */
-  readonly fieldIssues: ReadonlyMap<string, readonly InputIssue[]>;
-  readonly otherIssues: readonly InputIssue[];
 }
 
 const CHOICES: Partial<Record<SourceTextField | 'kind' | 'order', readonly string[]>> = {
@@ -54,8 +44,6 @@ const GROUPS: readonly { readonly legend: TextKey; readonly fields: readonly Sou
 export function SourceFormView(props: SourceFormViewProps) {
   const { tr } = props.page;
   const { values } = props;
-  const headingKey = props.editing === undefined ? 'source.add' : 'source.edit';
-  const heading = { name: props.editing ?? '' };
   const problems = (name: string) => props.fieldIssues.get(name) ?? [];
   const idOf = (name: string) => `source-${name.replace('.', '-')}`;
   const control = (name: SourceTextField | 'kind' | 'order') => {
@@ -94,16 +82,10 @@ export function SourceFormView(props: SourceFormViewProps) {
   };
   const coordinateIssues = problems('coordinates');
   return (
-    <PageShell
-      page={props.page}
-      title={tr.t(headingKey, heading)}
-      titleLang={tr.fallbackLang(headingKey)}
-      study={{ id: props.studyId, name: props.studyName }}
-      section="edit"
+    <EditorFormPage
+      form={props}
+      text={{ add: 'source.add', edit: 'source.edit', intro: 'source.intro' }}
     >
-      <h1>{tr.text(headingKey, heading)}</h1>
-      <p>{tr.text('source.intro')}</p>
-      <FormProblems tr={tr} fieldIssues={props.fieldIssues} otherIssues={props.otherIssues} />
       <form method="post" action={props.action} class="community-form source-form" novalidate>
         <fieldset>
           <legend>{tr.text('source.group.where')}</legend>
@@ -144,6 +126,6 @@ export function SourceFormView(props: SourceFormViewProps) {
           <a href={`/studies/${props.studyId}/edit`}>{tr.text('editor.cancel')}</a>
         </p>
       </form>
-    </PageShell>
+    </EditorFormPage>
   );
 }

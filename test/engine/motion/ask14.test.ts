@@ -28,12 +28,7 @@ import { readProbeRequest } from '../../../api/operations/probe-request.ts';
 import { expectClose } from '../../helpers/close.ts';
 import { expectLnPeriodInterpolation, expectNotApplicable } from './model-checks.ts';
 import { verticalStrikeSlip } from './crustal-input.ts';
-import {
-  expectMatchesVector,
-  readVectors,
-  vectorInput,
-  vectorMeasure,
-} from './reference-vectors.ts';
+import { itMatchesVectorFile, itMatchesWithZ1Given, readVectors } from './reference-vectors.ts';
 
 /**
  * The reference: vectors/ask14.json, copied from ../shared/reference/gmm/vectors/ask14.json
@@ -46,7 +41,6 @@ import {
  */
 const VECTORS = readVectors('ask14.json');
 const SOURCE = 'Abrahamson, Silva & Kamai (2014), reference vectors ask14.json';
-const TOLERANCE = 1e-4;
 
 const PGA: Measure = { kind: 'PGA' };
 const PGV: Measure = { kind: 'PGV' };
@@ -56,39 +50,9 @@ const input = (over: Partial<GmmInput> = {}): GmmInput => verticalStrikeSlip(ove
 const lnY = (over: Partial<GmmInput>, m: Measure): number => ask14.predict(input(over), m).lnMedian;
 
 describe('ASK14: the reference vectors', () => {
-  it('are the file the README describes', () => {
-    expect(VECTORS.model).toBe('ASK14');
-    expect(VECTORS.cases.length).toBe(VECTORS.caseCount);
-    expect(VECTORS.caseCount).toBe(245);
-    // Both Vs30 kinds occur, so φ's measured and estimated coefficients are both checked.
-    expect(new Set(VECTORS.cases.map((c) => c.vs30Measured))).toEqual(new Set([true, false]));
-  });
-
-  it.each(VECTORS.cases.map((c) => [c.id, c.measure, c] as const))(
-    '%s %s: ln median, τ, φ, σ within 1e-4',
-    (_id, _measure, c) => {
-      expectMatchesVector(ask14.predict(vectorInput(c), vectorMeasure(c)), c, SOURCE);
-    },
-  );
-
-  it("gives the same numbers with the vectors' Z1 passed in (it is the paper's default Z1ref)", () => {
-    for (const c of VECTORS.cases) {
-      expect(c.z1Km).not.toBeNull();
-      // The file writes Z1 rounded to 1e-6 km: well inside the tolerance of f10 = a ln((Z1 + 0.01)/(Z1ref + 0.01)).
-      expectClose(
-        ask14DefaultZ1Km(c.vs30),
-        c.z1Km as number,
-        1e-6,
-        `${SOURCE} ${c.id} Z1ref(Vs30)`,
-      );
-      expectClose(
-        ask14.predict(vectorInput(c, 'given'), vectorMeasure(c)).lnMedian,
-        c.lnMedian,
-        TOLERANCE,
-        `${SOURCE} ${c.id} with Z1 given`,
-      );
-    }
-  });
+  // Both Vs30 kinds occur, so φ's measured and estimated coefficients are both checked.
+  itMatchesVectorFile(ask14, VECTORS, SOURCE, 245);
+  itMatchesWithZ1Given(ask14, VECTORS, SOURCE, ask14DefaultZ1Km);
 
   it("classes every case's rake as the vectors do", () => {
     for (const c of VECTORS.cases)

@@ -26,12 +26,7 @@ import { readProbeRequest } from '../../../api/operations/probe-request.ts';
 import { expectClose } from '../../helpers/close.ts';
 import { expectLnPeriodInterpolation, expectNotApplicable } from './model-checks.ts';
 import { verticalStrikeSlip } from './crustal-input.ts';
-import {
-  expectMatchesVector,
-  readVectors,
-  vectorInput,
-  vectorMeasure,
-} from './reference-vectors.ts';
+import { itMatchesVectorFile, itMatchesWithZ1Given, readVectors } from './reference-vectors.ts';
 
 /**
  * The reference: vectors/cy14.json, copied from ../shared/reference/gmm/vectors/cy14.json
@@ -44,7 +39,6 @@ import {
  */
 const VECTORS = readVectors('cy14.json');
 const SOURCE = 'Chiou & Youngs (2014), reference vectors cy14.json';
-const TOLERANCE = 1e-4;
 
 const PGA: Measure = { kind: 'PGA' };
 const PGV: Measure = { kind: 'PGV' };
@@ -54,39 +48,9 @@ const input = (over: Partial<GmmInput> = {}): GmmInput => verticalStrikeSlip(ove
 const lnY = (over: Partial<GmmInput>, m: Measure): number => cy14.predict(input(over), m).lnMedian;
 
 describe('CY14: the reference vectors', () => {
-  it('are the file the README describes', () => {
-    expect(VECTORS.model).toBe('CY14');
-    expect(VECTORS.cases.length).toBe(VECTORS.caseCount);
-    expect(VECTORS.caseCount).toBe(264);
-    // Both Vs30 kinds occur, so σ_NL0's measured (0.7) and inferred (σ3) factors are both checked.
-    expect(new Set(VECTORS.cases.map((c) => c.vs30Measured))).toEqual(new Set([true, false]));
-  });
-
-  it.each(VECTORS.cases.map((c) => [c.id, c.measure, c] as const))(
-    '%s %s: ln median, τ, φ, σ within 1e-4',
-    (_id, _measure, c) => {
-      expectMatchesVector(cy14.predict(vectorInput(c), vectorMeasure(c)), c, SOURCE);
-    },
-  );
-
-  it("gives the same numbers with the vectors' Z1 passed in (it is the paper's default)", () => {
-    for (const c of VECTORS.cases) {
-      expect(c.z1Km).not.toBeNull();
-      // The file writes Z1 rounded to 1e-6 km (1 mm of the 300 m scale φ6).
-      expectClose(
-        cy14DefaultZ1Km(c.vs30),
-        c.z1Km as number,
-        1e-6,
-        `${SOURCE} ${c.id} default Z1(Vs30)`,
-      );
-      expectClose(
-        cy14.predict(vectorInput(c, 'given'), vectorMeasure(c)).lnMedian,
-        c.lnMedian,
-        TOLERANCE,
-        `${SOURCE} ${c.id} with Z1 given`,
-      );
-    }
-  });
+  // Both Vs30 kinds occur, so σ_NL0's measured (0.7) and inferred (σ3) factors are both checked.
+  itMatchesVectorFile(cy14, VECTORS, SOURCE, 264);
+  itMatchesWithZ1Given(cy14, VECTORS, SOURCE, cy14DefaultZ1Km);
 
   it("classes every case's rake as the vectors do", () => {
     for (const c of VECTORS.cases)

@@ -1,5 +1,5 @@
 import { readFileSync } from 'node:fs';
-import { expect } from 'vitest';
+import { expect, it } from 'vitest';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
 import { createPairPredictions } from '../../../api/engine/motion/prepared-period.ts';
 import type {
@@ -144,4 +144,59 @@ export function expectModelMatchesVector(
 ): void {
   expectMatchesVector(model.predict(vectorInput(c), vectorMeasure(c)), c, source);
   expectFastPathMatchesVector(model, c, source);
+}
+
+/**
+ * The tests every vectors file gets: it is the file the README describes (the model's name, the
+ * case count, both Vs30 kinds, so the measured and inferred Vs30 coefficients are both checked),
+ * and each case's ln median, τ, φ and σ are within VECTOR_TOLERANCE.
+ */
+export function itMatchesVectorFile(
+  model: GroundMotionModel,
+  vectors: VectorFile,
+  source: string,
+  caseCount: number,
+): void {
+  it('are the file the README describes', () => {
+    expect(vectors.model).toBe(model.name);
+    expect(vectors.cases.length).toBe(vectors.caseCount);
+    expect(vectors.caseCount).toBe(caseCount);
+    expect(new Set(vectors.cases.map((c) => c.vs30Measured))).toEqual(new Set([true, false]));
+  });
+
+  it.each(vectors.cases.map((c) => [c.id, c.measure, c] as const))(
+    '%s %s: ln median, τ, φ, σ within 1e-4',
+    (_id, _measure, c) => {
+      expectMatchesVector(model.predict(vectorInput(c), vectorMeasure(c)), c, source);
+    },
+  );
+}
+
+/**
+ * For a file written with the paper's default Z1: each case's Z1 is `defaultZ1Km(Vs30)` within
+ * 1e-6 km (the file rounds Z1 to that), and passing it in gives the same ln median.
+ */
+export function itMatchesWithZ1Given(
+  model: GroundMotionModel,
+  vectors: VectorFile,
+  source: string,
+  defaultZ1Km: (vs30: number) => number,
+): void {
+  it("gives the same numbers with the vectors' Z1 passed in (it is the paper's default)", () => {
+    for (const c of vectors.cases) {
+      expect(c.z1Km).not.toBeNull();
+      expectClose(
+        defaultZ1Km(c.vs30),
+        c.z1Km as number,
+        1e-6,
+        `${source} ${c.id} default Z1(Vs30)`,
+      );
+      expectClose(
+        model.predict(vectorInput(c, 'given'), vectorMeasure(c)).lnMedian,
+        c.lnMedian,
+        VECTOR_TOLERANCE,
+        `${source} ${c.id} with Z1 given`,
+      );
+    }
+  });
 }

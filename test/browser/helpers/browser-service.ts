@@ -1,0 +1,108 @@
+import { join } from 'node:path';
+import type { BrowserContext, BrowserContextOptions, Page } from 'playwright-core';
+import { afterAll, beforeAll, expect } from 'vitest';
+import { demoStudyId, startRun, waitForStatus } from '../../service/helpers/runs.ts';
+import {
+  jsonInit,
+  startService,
+  tempDir,
+  type ServiceProcess,
+} from '../../service/helpers/service-process.ts';
+import { ARTIFACTS, launchChromium, offlineContext, type LaunchedBrowser } from './chromium.ts';
+
+export interface BrowserServiceOptions {
+  /** Prefix of the temporary folder that holds the service's database. */
+  readonly tempPrefix: string;
+  /** The database file's name inside that folder. */
+  readonly database: string;
+  readonly env?: Readonly<Record<string, string>>;
+  /**
+   * Runs once the service is up, before Chromium starts (saving a study, screening it), and
+   * gives the id of the study the tests work on; by default the demo saved on first start.
+   */
+  readonly prepare?: (service: ServiceProcess) => Promise<string>;
+  /**
+   * Options of the one offline context (and its page) shared by the file's tests; `false` when
+   * each describe opens its own context (one per width or per script setting).
+   */
+  readonly context?: BrowserContextOptions | false;
+  /** The set-up's time limit, for a set-up that screens a study. */
+  readonly setupTimeoutMs?: number;
+}
+
+/**
+ * What a browser test file shares, filled in by its beforeAll: the service, Chromium and, unless
+ * the file opens its own, an offline context with one page and the foreign requests it refused.
+ */
+export interface BrowserService {
+  service: ServiceProcess;
+  /** The study the tests work on (see BrowserServiceOptions.prepare). */
+  studyId: string;
+  chromium: LaunchedBrowser;
+  context: BrowserContext;
+  page: Page;
+  foreignRequests: string[];
+}
+
+/**
+ * Registers the file's beforeAll and afterAll: a service on a fresh database, Chromium with a
+ * fresh profile (launchChromium) and the offline context; afterAll closes them in reverse order
+ * and removes the folder, also after a set-up that failed part way.
+ */
+export function browserService(options: BrowserServiceOptions): BrowserService {
+  const dir = tempDir(options.tempPrefix);
+  // Filled in by beforeAll; afterAll closes only what was opened.
+  const shared: Partial<BrowserService> = {};
+  beforeAll(async () => {
+    const service = await startService({
+      databasePath: join(dir.path, options.database),
+      env: options.env,
+    });
+    shared.service = service;
+    shared.studyId = await (options.prepare ?? demoStudyId)(service);
+    const chromium = await launchChromium();
+    shared.chromium = chromium;
+    if (options.context === false) return;
+    const guarded = await offlineContext(chromium.browser, service.url, options.context);
+    shared.context = guarded.context;
+    shared.foreignRequests = guarded.foreignRequests;
+    shared.page = await guarded.context.newPage();
+  }, options.setupTimeoutMs);
+  afterAll(async () => {
+    await shared.context?.close();
+    await shared.chromium?.close();
+    await shared.service?.stop();
+    dir.remove();
+  });
+  return shared as BrowserService;
+}
+
+/** Saves a study through the API (201) and returns its id. */
+export async function saveStudy(service: ServiceProcess, study: unknown): Promise<string> {
+  const created = await service.fetch('/api/studies', jsonInit('POST', study));
+  expect(created.status, await created.clone().text()).toBe(201);
+  return ((await created.json()) as { id: string }).id;
+}
+
+/** Screens a saved study and waits until the run is done. */
+export async function screenStudy(service: ServiceProcess, studyId: string): Promise<void> {
+  const run = await startRun(service, studyId);
+  expect((await waitForStatus(service, run.id)).status).toBe('done');
+}
+
+/**
+ * Full-page screenshots to test-artifacts/ at desktop width (`<name>.png`) and at a phone's
+ * 390 px (`<name>-390.png`), leaving the page at desktop width again.
+ */
+export async function screenshotTwoWidths(
+  page: Page,
+  name: string,
+  desktopPx = 1280,
+): Promise<void> {
+  const desktop = { width: desktopPx, height: 900 };
+  await page.setViewportSize(desktop);
+  await page.screenshot({ path: join(ARTIFACTS, `${name}.png`), fullPage: true });
+  await page.setViewportSize({ width: 390, height: 844 });
+  await page.screenshot({ path: join(ARTIFACTS, `${name}-390.png`), fullPage: true });
+  await page.setViewportSize(desktop);
+}
