@@ -253,22 +253,6 @@ export function cb14SourceTerm(
   );
 }
 
-/** ln median of one row for one pair before the short-period PGA floor, from its source term (cb14SourceTerm). */
-export function cb14LnMedianFromSource(
-  row: Cb14Row,
-  source: number,
-  s: Cb14Scenario,
-  vs30: number,
-  z2p5Km: number,
-  a1100G: number,
-): number {
-  return (
-    lnRockPath(row, source, s.magnitude, s.rrupKm, cb14HangingWallTerm(row, s)) +
-    cb14SiteTerm(row, vs30, a1100G) +
-    cb14BasinTerm(row, z2p5Km)
-  );
-}
-
 /** The source, distance, hanging-wall and anelastic terms of one row (ln units): all but site and basin. */
 function lnRockPath(
   row: Cb14Row,
