@@ -21,7 +21,7 @@ interface DemoStudy {
   communities: { id: string; lon: number; lat: number; coastal: boolean }[];
   sources: {
     features: {
-      geometry: { type: string; coordinates: number[][] };
+      geometry: { type: string; coordinates: number[][] | number[][][] };
       properties: { id: string; setting: string };
     }[];
   };
@@ -40,10 +40,15 @@ export function buildDemoTerrain(study: DemoStudy): {
   const ring = (study.outline.coordinates[0] as number[][]).map(([lon, lat]) =>
     frame.toLocal([lon as number, lat as number]),
   );
-  const trench = (
-    study.sources.features.find((f) => f.properties.setting === 'interface')?.geometry
-      .coordinates ?? []
-  ).map(([lon, lat]) => frame.toLocal([lon as number, lat as number]));
+  // The trench follows the interface's trace, or its shallowest depth contour.
+  const geometry = study.sources.features.find(
+    (f) => f.properties.setting === 'interface',
+  )?.geometry;
+  const trace =
+    (geometry?.type === 'MultiLineString'
+      ? (geometry.coordinates as number[][][])[0]
+      : (geometry?.coordinates as number[][] | undefined)) ?? [];
+  const trench = trace.map(([lon, lat]) => frame.toLocal([lon as number, lat as number]));
   const at = (lon: number, lat: number) => frame.toLocal([lon, lat]);
 
   // An inlet from each coastal village to the nearest point of the outline, 1 km either side.
