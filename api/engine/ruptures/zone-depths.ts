@@ -30,9 +30,20 @@ export function zoneDepths(
       ]);
     const whole = wholeSurface(faultSurface(surfaceSource, frame));
     const planes = whole.kind === 'planes' ? whole.planes : [];
-    return (centre) => [
-      { depthKm: (depthUnderKm(planes, centre) ?? zone.depthKm) + offsetKm, weight: 1 },
-    ];
+    // Every magnitude asks again at the same cell centres; the search over the surface's planes
+    // is done once per centre.
+    const known = new Map<string, readonly WeightedDepth[]>();
+    return (centre) => {
+      const key = `${centre.x},${centre.y}`;
+      let depths = known.get(key);
+      if (!depths) {
+        depths = [
+          { depthKm: (depthUnderKm(planes, centre) ?? zone.depthKm) + offsetKm, weight: 1 },
+        ];
+        known.set(key, depths);
+      }
+      return depths;
+    };
   }
   const fixed = zone.depths ?? [{ depthKm: zone.depthKm, weight: 1 }];
   return () => fixed;
