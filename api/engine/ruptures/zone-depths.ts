@@ -30,17 +30,16 @@ export function zoneDepths(
       ]);
     const whole = wholeSurface(faultSurface(surfaceSource, frame));
     const planes = whole.kind === 'planes' ? whole.planes : [];
-    // Every magnitude asks again at the same cell centres; the search over the surface's planes
-    // is done once per centre.
-    const known = new Map<string, readonly WeightedDepth[]>();
+    // Every magnitude asks again at the same cell centres (the prepared cells' own points); the
+    // search over the surface's planes is done once per centre.
+    const known = new Map<PointXY, readonly WeightedDepth[]>();
     return (centre) => {
-      const key = `${centre.x},${centre.y}`;
-      let depths = known.get(key);
+      let depths = known.get(centre);
       if (!depths) {
         depths = [
           { depthKm: (depthUnderKm(planes, centre) ?? zone.depthKm) + offsetKm, weight: 1 },
         ];
-        known.set(key, depths);
+        known.set(centre, depths);
       }
       return depths;
     };
