@@ -51,7 +51,8 @@ export function buildDemoTerrain(study: DemoStudy): {
   const trench = trace.map(([lon, lat]) => frame.toLocal([lon as number, lat as number]));
   const at = (lon: number, lat: number) => frame.toLocal([lon, lat]);
 
-  // An inlet from each coastal village to the nearest point of the outline, 1 km either side.
+  // An inlet from each coastal village to the nearest point of the outline, 1.5 km either side:
+  // wide enough to stay open water when the tsunami solve resamples the grid (1.6 km cells).
   const inlets = study.communities
     .filter((c) => c.coastal)
     .map((c) => {
@@ -87,7 +88,7 @@ export function buildDemoTerrain(study: DemoStudy): {
     for (let c = 0; c < columns; c += 1) {
       const p = at(WEST + (c + 0.5) * CELL, NORTH - (r + 0.5) * CELL);
       const outlineKm = nearestOnPolyline(ring, p).km;
-      const inletKm = Math.min(...inlets.map(([a, b]) => segmentDistance(a, b, p))) - 1.0;
+      const inletKm = Math.min(...inlets.map(([a, b]) => segmentDistance(a, b, p))) - 1.5;
       let z: number;
       if (insidePolygon(ring, p) && inletKm > 0) {
         const shoreKm = Math.min(outlineKm, inletKm);
