@@ -21,7 +21,7 @@ interface DemoStudy {
   communities: { id: string; lon: number; lat: number; coastal: boolean }[];
   sources: {
     features: {
-      geometry: { type: string; coordinates: number[][] };
+      geometry: { type: string; coordinates: number[][] | number[][][] };
       properties: { id: string; setting: string };
     }[];
   };
@@ -40,13 +40,19 @@ export function buildDemoTerrain(study: DemoStudy): {
   const ring = (study.outline.coordinates[0] as number[][]).map(([lon, lat]) =>
     frame.toLocal([lon as number, lat as number]),
   );
-  const trench = (
-    study.sources.features.find((f) => f.properties.setting === 'interface')?.geometry
-      .coordinates ?? []
-  ).map(([lon, lat]) => frame.toLocal([lon as number, lat as number]));
+  // The trench follows the interface's trace, or its shallowest depth contour.
+  const geometry = study.sources.features.find(
+    (f) => f.properties.setting === 'interface',
+  )?.geometry;
+  const trace =
+    (geometry?.type === 'MultiLineString'
+      ? (geometry.coordinates as number[][][])[0]
+      : (geometry?.coordinates as number[][] | undefined)) ?? [];
+  const trench = trace.map(([lon, lat]) => frame.toLocal([lon as number, lat as number]));
   const at = (lon: number, lat: number) => frame.toLocal([lon, lat]);
 
-  // An inlet from each coastal village to the nearest point of the outline, 1 km either side.
+  // An inlet from each coastal village to the nearest point of the outline, 1.5 km either side:
+  // wide enough to stay open water when the tsunami solve resamples the grid (1.6 km cells).
   const inlets = study.communities
     .filter((c) => c.coastal)
     .map((c) => {
@@ -82,7 +88,7 @@ export function buildDemoTerrain(study: DemoStudy): {
     for (let c = 0; c < columns; c += 1) {
       const p = at(WEST + (c + 0.5) * CELL, NORTH - (r + 0.5) * CELL);
       const outlineKm = nearestOnPolyline(ring, p).km;
-      const inletKm = Math.min(...inlets.map(([a, b]) => segmentDistance(a, b, p))) - 1.0;
+      const inletKm = Math.min(...inlets.map(([a, b]) => segmentDistance(a, b, p))) - 1.5;
       let z: number;
       if (insidePolygon(ring, p) && inletKm > 0) {
         const shoreKm = Math.min(outlineKm, inletKm);

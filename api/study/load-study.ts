@@ -24,6 +24,7 @@ export const STUDY_KEYS = [
   'settings',
   'outline',
   'terrain',
+  'notes',
 ] as const;
 
 /** The parts a study must have before it can be screened; a draft may lack them. */
@@ -126,6 +127,8 @@ export function loadStudy(raw: unknown, options: LoadStudyOptions): LoadResult {
         );
   if (terrain !== undefined && options.terrainProblem !== undefined)
     issues.add(['terrain'], options.terrainProblem);
+  // Notes are the study author's words on where the model comes from; kept in the document only.
+  if (doc.notes !== undefined) issues.parse(text(4000, 'notes on the study'), doc.notes, ['notes']);
   // Only on a study without other problems: the valid sources then keep their feature order.
   // The extent first: beyond it the local frame, and with it the estimates, do not hold.
   if (issues.issues.length === 0) checkStudyExtent(communities, sources, outline, issues);

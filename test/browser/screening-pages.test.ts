@@ -297,7 +297,10 @@ describe('the demo coast in a browser', { timeout: 180_000 }, () => {
     );
     expect(await rig.page.locator('main [lang="en"]').count()).toBe(0);
     await rig.page.goto(`${rig.service.url}/studies/${rig.studyId}/communities/harbour-point`);
-    expect(await rig.page.locator('.band-name').first().textContent()).toBe('À signaler bientôt');
+    // The band's French name from the bundle, for the band the run gave Harbour Point.
+    const harbourBand = results.communities.find((c) => c.communityId === 'harbour-point')?.band.id;
+    expect(harbourBand).toBe('refer-first');
+    expect(await rig.page.locator('.band-name').first().textContent()).toBe('À signaler d’abord');
     await checkView('community page in French');
     await rig.page.goto(`${rig.service.url}/language?lang=en&back=/`);
     expect(await rig.page.locator('html').getAttribute('lang')).toBe('en');

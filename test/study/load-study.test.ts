@@ -97,6 +97,18 @@ describe('loadStudy: a valid study', () => {
     expect(result.ok).toBe(true);
     expect(result.warnings.map((w) => w.path)).toContain('sources.features[0].properties.dipp');
   });
+
+  it('keeps notes on the study without a warning, and refuses notes that are not text', () => {
+    const noted = load({
+      ...validStudy(),
+      notes: 'Convergence 40 mm/yr, coupling 0.5 (invented).',
+    });
+    expect(noted.ok).toBe(true);
+    expect(noted.warnings.map((w) => w.path)).not.toContain('notes');
+    expect(lines(issuesOf({ ...validStudy(), notes: 42 }))).toEqual([
+      'notes: expected notes on the study of 1 to 4000 characters, got 42',
+    ]);
+  });
 });
 
 describe('loadStudy: every problem at once, each with its path', () => {
@@ -287,7 +299,7 @@ describe('loadStudy: every problem at once, each with its path', () => {
 
   it('refuses a non-object study and a missing FeatureCollection', () => {
     expect(lines(issuesOf([1, 2]))).toEqual([
-      '(study): expected a study object with name, communities, sources, groundMotion, settings, outline, terrain, got a list of 2',
+      '(study): expected a study object with name, communities, sources, groundMotion, settings, outline, terrain, notes, got a list of 2',
     ]);
     const study = validStudy();
     study.sources = { type: 'Feature' };

@@ -42,12 +42,25 @@ function expectNoInlineCode(html: string): void {
 }
 
 describe('pages', () => {
-  test("the editor lists the sources' sanity warnings of the demo study (its interface slips about 1.3 mm/yr)", async () => {
-    const html = await (await get(`/studies/${demoId}/edit`)).text();
+  test("the editor lists the sources' sanity warnings (an interface slipping 1.2 mm/yr), and none for the demo", async () => {
+    const demo = JSON.parse(readFileSync(DEMO_STUDY_URL, 'utf8')) as {
+      sources: { features: { properties: { id: string; recurrence: object } }[] };
+    };
+    for (const f of demo.sources.features)
+      if (f.properties.id === 'orle-interface')
+        f.properties.recurrence = { ...f.properties.recurrence, slipRateMmYr: 1.2 };
+    const slowId = page.ctx.store.studies.create({
+      name: 'Demo coast, slow interface',
+      document: JSON.stringify({ ...demo, name: 'Demo coast, slow interface' }),
+    }).id;
+    const html = await (await get(`/studies/${slowId}/edit`)).text();
     expect(html).toContain('id="source-checks-heading"');
+    // 1.2 mm/yr lies below the 10 mm/yr the check takes as the least convergence times coupling.
     expect(html).toContain(
-      'source &quot;orle-interface&quot;: its rates imply a slip rate of 1.27 mm/yr',
+      'source &quot;orle-interface&quot;: its slip rate of 1.2 mm/yr, outside the 10–150 mm/yr',
     );
+    const demoHtml = await (await get(`/studies/${demoId}/edit`)).text();
+    expect(demoHtml).not.toContain('id="source-checks-heading"');
   });
 
   test('the footer says the data are invented on the demo study only', async () => {

@@ -49,9 +49,15 @@ function meshPoint(mesh: ContourMesh, r: number, c: number): PointKm {
   const b = mesh.nodes[r0 * n + c0 + 1] as PointKm;
   const d = mesh.nodes[(r0 + 1) * n + c0] as PointKm;
   const e = mesh.nodes[(r0 + 1) * n + c0 + 1] as PointKm;
-  const blend = (k: 'x' | 'y' | 'z'): number =>
-    (1 - fr) * ((1 - fc) * a[k] + fc * b[k]) + fr * ((1 - fc) * d[k] + fc * e[k]);
-  return { x: blend('x'), y: blend('y'), z: blend('z') };
+  // Written out rather than through a helper taking the coordinate's name: this runs for every
+  // corner of every floating rupture.
+  const top = 1 - fr;
+  const left = 1 - fc;
+  return {
+    x: top * (left * a.x + fc * b.x) + fr * (left * d.x + fc * e.x),
+    y: top * (left * a.y + fc * b.y) + fr * (left * d.y + fc * e.y),
+    z: top * (left * a.z + fc * b.z) + fr * (left * d.z + fc * e.z),
+  };
 }
 
 /** The point `alongKm` along strike and `downDipKm` down dip on the mesh. */

@@ -30,9 +30,19 @@ export function zoneDepths(
       ]);
     const whole = wholeSurface(faultSurface(surfaceSource, frame));
     const planes = whole.kind === 'planes' ? whole.planes : [];
-    return (centre) => [
-      { depthKm: (depthUnderKm(planes, centre) ?? zone.depthKm) + offsetKm, weight: 1 },
-    ];
+    // Every magnitude asks again at the same cell centres (the prepared cells' own points); the
+    // search over the surface's planes is done once per centre.
+    const known = new Map<PointXY, readonly WeightedDepth[]>();
+    return (centre) => {
+      let depths = known.get(centre);
+      if (!depths) {
+        depths = [
+          { depthKm: (depthUnderKm(planes, centre) ?? zone.depthKm) + offsetKm, weight: 1 },
+        ];
+        known.set(centre, depths);
+      }
+      return depths;
+    };
   }
   const fixed = zone.depths ?? [{ depthKm: zone.depthKm, weight: 1 }];
   return () => fixed;

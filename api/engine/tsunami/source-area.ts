@@ -9,8 +9,8 @@ import { cellCentre, cellIndexAt, type MetricGrid } from './metric-grid.ts';
 
 /**
  * Where a tsunami starts: the surface projection of a rupture, as polygons of the local frame
- * (km). The sea over it is taken as raised at once when the rupture stops, so the wave leaves
- * every water cell of the area at time zero: the usual start of a first-arrival estimate for a
+ * (km). The sea over it (offshore of the study's outline, startCells) is taken as raised at once
+ * when the rupture stops, so the wave leaves every such water cell at time zero: the usual start of a first-arrival estimate for a
  * near-field source, whose rupture lasts a minute or two and which this ignores.
  */
 export interface SourceArea {
@@ -56,16 +56,52 @@ export function interfaceSourceArea(source: Source, frame: LocalFrame): SourceAr
   });
 }
 
+/** A polygon ready for many point-in-polygon tests: its turf shape and bounding box (local km). */
+interface BoxedPolygon {
+  readonly shape: ReturnType<typeof polygon>;
+  readonly west: number;
+  readonly east: number;
+  readonly south: number;
+  readonly north: number;
+}
+
+function boxed(ring: readonly PointXY[]): BoxedPolygon {
+  return {
+    shape: polygon([
+      [...ring.map((p) => [p.x, p.y]), [(ring[0] as PointXY).x, (ring[0] as PointXY).y]],
+    ]),
+    west: Math.min(...ring.map((p) => p.x)),
+    east: Math.max(...ring.map((p) => p.x)),
+    south: Math.min(...ring.map((p) => p.y)),
+    north: Math.max(...ring.map((p) => p.y)),
+  };
+}
+
+const inAny = (polygons: readonly BoxedPolygon[], x: number, y: number): boolean =>
+  polygons.some(
+    (p) =>
+      x >= p.west &&
+      x <= p.east &&
+      y >= p.south &&
+      y <= p.north &&
+      booleanPointInPolygon([x, y], p.shape),
+  );
+
 /**
- * The water cells (elevation below 0 m) whose centres lie in the area, each starting at time
- * zero. The whole area must lie on the terrain: a corner off the grid or on missing data means
- * the grid does not cover the source, and an area with no water cell cannot start a tsunami.
+ * The water cells (elevation below 0 m) whose centres lie in the area and offshore of `land`
+ * (the study's outline rings, local km), each starting at time zero. Only the sea floor over a
+ * rupture lifts the sea: where an interface runs on under the land, the inlets, harbours and
+ * lagoons inside the outline lie over the rupture too, but the water they hold is not the
+ * source (it would put the start at the villages' own shore). The whole area must lie on the
+ * terrain: a corner off the grid or on missing data means the grid does not cover the source,
+ * and an area with no water cell offshore cannot start a tsunami.
  */
 export function startCells(
   m: MetricGrid,
   area: SourceArea,
   terrainLabel: string,
   toLonLat: (p: PointXY) => readonly [number, number],
+  land: readonly (readonly PointXY[])[] = [],
 ): StartCell[] {
   for (const footprint of area.footprints) {
     for (const corner of footprint) {
@@ -81,32 +117,19 @@ export function startCells(
       }
     }
   }
-  const polygons = area.footprints.map((f) => ({
-    shape: polygon([[...f.map((p) => [p.x, p.y]), [(f[0] as PointXY).x, (f[0] as PointXY).y]]]),
-    west: Math.min(...f.map((p) => p.x)),
-    east: Math.max(...f.map((p) => p.x)),
-    south: Math.min(...f.map((p) => p.y)),
-    north: Math.max(...f.map((p) => p.y)),
-  }));
+  const footprints = area.footprints.map(boxed);
+  const shores = land.filter((ring) => ring.length >= 3).map(boxed);
   const cells: StartCell[] = [];
   for (let index = 0; index < m.elevationM.length; index += 1) {
     if (!((m.elevationM[index] as number) < 0)) continue;
     const { x, y } = cellCentre(m, index);
-    const inside = polygons.some(
-      (p) =>
-        x >= p.west &&
-        x <= p.east &&
-        y >= p.south &&
-        y <= p.north &&
-        booleanPointInPolygon([x, y], p.shape),
-    );
-    if (inside) cells.push({ index, timeS: 0 });
+    if (inAny(footprints, x, y) && !inAny(shores, x, y)) cells.push({ index, timeS: 0 });
   }
   if (cells.length === 0) {
     throw new InvalidInput([
       {
         path: 'terrain',
-        message: `the rupture area of source "${area.sourceId}" has no sea on the terrain grid "${terrainLabel}"; expected part of it below sea level`,
+        message: `the rupture area of source "${area.sourceId}" has no sea on the terrain grid "${terrainLabel}" offshore of the study's outline; expected part of it under the sea`,
       },
     ]);
   }

@@ -1,5 +1,5 @@
 import { InvalidInput } from '../errors.ts';
-import { frameForStudy, type LocalFrame } from '../geometry/projection.ts';
+import { frameForStudy, type LocalFrame, type PointXY } from '../geometry/projection.ts';
 import type { Study } from '../model.ts';
 import type { ElevationGrid } from '../terrain/elevation-grid.ts';
 import { coastArrival, type TravelTimes } from './coast-arrival.ts';
@@ -59,7 +59,7 @@ export const MIN_SOLVE_SPACING_KM = 0.25;
 
 /**
  * Tsunami time-to-act for a study's coastal communities: the first arrival from each interface
- * source's area at the coast nearest each (fast marching of √(g h), fast-marching.ts) and the
+ * source's area (the part of it under the sea, offshore of the study's outline) at the coast nearest each (fast marching of √(g h), fast-marching.ts) and the
  * nearest high ground (high-ground.ts).
  */
 export function tsunamiScreening(
@@ -128,10 +128,12 @@ export function arrivalsFromAreas(
     ]);
   const { fine, coarse } = grids;
   const toLonLat = frame.toLonLat.bind(frame);
+  // The land the study outlines: the sea over a rupture starts the wave, not the water inside it.
+  const land = (study.outline ?? []).map((ring) => ring.map((p) => frame.toLocal(p)));
   const solves = areas.map((area) => ({
     area,
-    fine: solve(fine, area, grid.label, toLonLat),
-    coarse: solve(coarse, area, grid.label, toLonLat),
+    fine: solve(fine, area, grid.label, toLonLat, land),
+    coarse: solve(coarse, area, grid.label, toLonLat, land),
   }));
   const communities = study.communities
     .filter((c) => c.coastal)
@@ -191,6 +193,10 @@ function solve(
   area: SourceArea,
   label: string,
   toLonLat: (p: { x: number; y: number }) => readonly [number, number],
+  land: readonly (readonly PointXY[])[],
 ): TravelTimes {
-  return { grid: m, timesS: fastMarching(longWaveGrid(m), startCells(m, area, label, toLonLat)) };
+  return {
+    grid: m,
+    timesS: fastMarching(longWaveGrid(m), startCells(m, area, label, toLonLat, land)),
+  };
 }

@@ -137,6 +137,139 @@ describe('tsunami first arrival for coastal communities', () => {
   });
 });
 
+/** The test shore's inlet: sea reaching this far east at latitudes −47.215 to −47.185 (invented). */
+const INLET_EAST_LON = -139.8;
+const inletLat = (lat: number) => lat > -47.215 && lat < -47.185;
+
+/** The test shore with an inlet of the sea's depth cut into the land from the coast to INLET_EAST_LON. */
+function inletGrid() {
+  const plain = shoreGrid();
+  const values = Float32Array.from(plain.elevationM);
+  for (let r = 0; r < plain.rows; r += 1) {
+    const lat = plain.north - (r + 0.5) * plain.cellHeight;
+    if (!inletLat(lat)) continue;
+    for (let c = 0; c < plain.columns; c += 1) {
+      const lon = plain.west + (c + 0.5) * plain.cellWidth;
+      if (lon >= COAST_LON && lon < INLET_EAST_LON) values[r * plain.columns + c] = -SEA_DEPTH_M;
+    }
+  }
+  return createElevationGrid({ ...plain, label: 'inlet.asc', elevationM: values });
+}
+
+/**
+ * A study whose interface is given by depth contours running north–south, from 5 km at −140.4
+ * (under the sea) to 30 km at −139.7 (under the land east of the coast at −140.0), with an
+ * outline of the land: the coarse coastline a study draws, which does not follow the inlet.
+ */
+function contouredStudy(communities: object[]): Study {
+  const loaded = loadStudy(
+    {
+      name: 'Tsunami test shore, contoured',
+      communities,
+      outline: {
+        type: 'Polygon',
+        coordinates: [
+          [
+            [COAST_LON, -48.0],
+            [-139.0, -48.0],
+            [-139.0, -46.4],
+            [COAST_LON, -46.4],
+            [COAST_LON, -48.0],
+          ],
+        ],
+      },
+      sources: {
+        type: 'FeatureCollection',
+        features: [
+          {
+            type: 'Feature',
+            geometry: {
+              type: 'MultiLineString',
+              coordinates: [
+                [
+                  [-140.4, -47.5],
+                  [-140.4, -46.9],
+                ],
+                [
+                  [-139.7, -47.5],
+                  [-139.7, -46.9],
+                ],
+              ],
+            },
+            properties: {
+              id: 'curved-trench',
+              name: 'Test contoured trench',
+              setting: 'interface',
+              mechanism: 'reverse',
+              contourDepthsKm: [5, 30],
+              meshSpacingKm: 10,
+              recurrence: { type: 'fixed', magnitude: 8, rate: 0.001 },
+            },
+          },
+        ],
+      },
+      groundMotion: { interface: [{ model: 'AGA16', weight: 1 }] },
+      settings: { measures: ['PGA'], horizonsYears: [50], returnPeriodsYears: [475] },
+    },
+    { models: modelCatalog },
+  );
+  if (!loaded.ok) throw new Error(JSON.stringify(loaded.issues));
+  return loaded.study;
+}
+
+describe('tsunami source of an interface that runs on under the land', () => {
+  const head = { ...cove, id: 'inlet-head', name: 'Inlet Head', lon: -139.81 };
+
+  it("starts from the part under the sea: the inlet's head hears of it after the inlet's length / √(g h)", () => {
+    const s = contouredStudy([head]);
+    const result = tsunamiScreening(s, inletGrid());
+    const community = result.communities[0];
+    const arrival = community?.arrivals[0];
+    expect(community?.problems).toEqual([]);
+    if (!community || !arrival) throw new Error('no arrival');
+    // Distance (derived): from the coast, where the source's offshore part ends, along the
+    // inlet to the sea cell the time is read at.
+    const frame = frameForStudy(s);
+    const coastX = frame.toLocal([COAST_LON, head.lat]).x;
+    const siteX = frame.toLocal([head.lon, head.lat]).x;
+    const distanceKm = siteX - arrival.coastDistanceKm - coastX;
+    expect(distanceKm).toBeGreaterThan(10);
+    // The wave's path (km) from its time at √(g h) (Lamb 1932 §170); it starts at the centres of
+    // the solve grid's cells west of the coast and ends at a cell centre in the inlet, so it may
+    // be longer than the inlet by up to a cell and a half of the solve grid (derived).
+    const pathKm =
+      (arrival.gridMinutes * 60 * Math.sqrt(STANDARD_GRAVITY_MS2 * SEA_DEPTH_M)) / 1000;
+    const cellKm = result.terrain.spacingKm;
+    expectClose(
+      pathKm,
+      distanceKm + 0.75 * cellKm,
+      0.75 * cellKm,
+      'inlet length (derived) plus up to 1.5 solve cells between the coast, the start cells and the read cell',
+    );
+  });
+
+  it('without the outline, the water over the rupture inside the land would start the wave at the village', () => {
+    const s = contouredStudy([head]);
+    const result = tsunamiScreening({ ...s, outline: undefined }, inletGrid());
+    expect(result.communities[0]?.arrivals[0]?.gridMinutes).toBeLessThan(0.5);
+  });
+
+  it('refuses an interface wholly under the outlined land, saying it has no sea offshore', () => {
+    const s = contouredStudy([head]);
+    const allLand = [
+      [
+        [-141.0, -48.0],
+        [-139.0, -48.0],
+        [-139.0, -46.4],
+        [-141.0, -46.4],
+      ] as const,
+    ];
+    expect(() => tsunamiScreening({ ...s, outline: allLand }, inletGrid())).toThrow(
+      /source "curved-trench" has no sea on the terrain grid "inlet\.asc" offshore of the study's outline/,
+    );
+  });
+});
+
 describe('nearest high ground', () => {
   it('on land rising 10 m per km, finds 30 m due inland at (30 − 2) / 10 km from the shore (derived)', () => {
     const found = highGround(shoreGrid(), { ...cove, vs30Basis: 'measured', lon: -139.99 });
