@@ -1,5 +1,5 @@
 import { spawn } from 'node:child_process';
-import { writeFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { Queue } from 'bullmq';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -176,6 +176,22 @@ describe('screenings through the Redis queue with two workers', () => {
       await service?.stop();
       db.remove();
     }
+  }, 300_000);
+
+  it('retries the chunk of a worker killed mid-screening, and gives every community once', async () => {
+    const out = join(dir.path, 'killed.json');
+    let killing: Promise<void> | undefined;
+    const queued = await screenProcess(studyFile, ['--out', out], (err) => {
+      // Both workers are computing a chunk once progress shows: kill the first there.
+      if (/screening: [1-9]\d%/.test(err)) killing ??= (workers[0] as WorkerProcess).kill();
+    });
+    expect(killing).toBeDefined();
+    await killing;
+    expect(queued.code, queued.err).toBe(0);
+    expect(withoutTimes(readFileSync(out, 'utf8'))).toBe(withoutTimes(inProcessJson));
+    const completed = await screeningJobs(['completed']);
+    expect(completed.some((job) => job.stalledCounter > 0 || job.attemptsStarted > 1)).toBe(true);
+    workers[0] = await startWorker(redis.url, WORKER_ARGS);
   }, 300_000);
 
   it('Ctrl-C on tremora screen cancels the run on the workers: its chunks leave the queue', async () => {
