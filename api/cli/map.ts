@@ -17,6 +17,7 @@ import { hazardMapOnPool } from '../workers/parallel-map.ts';
 import { readTerrainFile, terrainBesideStudy } from '../terrain/index.ts';
 import { WorkerPool } from '../workers/worker-pool.ts';
 import { numberOption, requiredNumber, sig } from './args.ts';
+import { untilDoneOrInterrupted } from './interruptible.ts';
 import { loadStudyForVerb } from './load.ts';
 import { EXIT_OK, type Io, processIo, UsageError } from './output.ts';
 
@@ -37,7 +38,8 @@ or the chance of exceeding level L within the horizon.
   --threads N         worker threads (default: one per core)
   --json              print only machine-readable output: the GeoJSON (no --out) or a summary
 With TREMORA_QUEUE set (a Redis URL), the points are computed by \`tremora worker\` processes
-through that queue; this process lays out the ruptures and writes the map.
+through that queue; this process lays out the ruptures and writes the map. Ctrl-C cancels the
+map, on every worker too.
 A progress bar goes to stderr. Screening estimates, not design values.`;
 
 /** Characters of the progress bar. */
@@ -146,7 +148,7 @@ export async function mapVerb(args: readonly string[], io: Io): Promise<number> 
   const pool = new WorkerPool({ size: queueUrl === undefined ? threads : 1, name: 'tremora-map' });
   const queue = queueUrl === undefined ? undefined : await ChunkQueue.open({ url: queueUrl });
   try {
-    const summary = await hazardMapOnPool(pool, study, map, {
+    const handle = hazardMapOnPool(pool, study, map, {
       ...(queue ? { chunks: queue } : {}),
       onStart: (d) => {
         description = d;
@@ -159,7 +161,8 @@ export async function mapVerb(args: readonly string[], io: Io): Promise<number> 
           if (p.value !== null && (highest?.value == null || p.value > highest.value)) highest = p;
         bar(share, written, description!.count);
       },
-    }).result;
+    });
+    const summary = await untilDoneOrInterrupted(handle);
     write?.(mapGeoJsonTail(summary));
     if (file)
       await new Promise<void>((resolve, reject) =>

@@ -2,13 +2,20 @@ import { writeFile } from 'node:fs/promises';
 import { parseArgs } from 'node:util';
 import { modelCatalog } from '../engine/motion/registry.ts';
 import type { NearestFault, StudyResult, ZoneDepthReport } from '../engine/results.ts';
-import { screenStudy } from '../engine/screen-study.ts';
+import type { Study } from '../engine/model.ts';
+import { screenStudy, type ScreeningOutput } from '../engine/screen-study.ts';
+import { ChunkQueue } from '../queue/chunk-queue.ts';
+import { isQueuedScreening, QUEUED_SCREENING_COMMUNITIES } from '../queue/queued-screening.ts';
+import { queueUrlFrom } from '../queue/queue-setting.ts';
+import { screeningOutput, screenStudyOnPool } from '../workers/parallel-screen.ts';
+import { WorkerPool } from '../workers/worker-pool.ts';
 import { inputHash } from '../results/input-hash.ts';
 import { buildProvenance } from '../results/provenance.ts';
 import { robustnessLine } from '../results/band-robustness-words.ts';
 import { runCsv } from '../results/run-csv.ts';
 import { TOOL_VERSION } from '../results/tool-version.ts';
 import { choiceOption, sig } from './args.ts';
+import { untilDoneOrInterrupted } from './interruptible.ts';
 import { loadStudyForVerb } from './load.ts';
 import { EXIT_OK, type Io, UsageError } from './output.ts';
 
@@ -19,7 +26,29 @@ the horizons, intensity, deaggregation, nearest faults and the screening band.
   --out FILE          write the results there (JSON by default; --format csv for a table)
   --format FMT        json (every result, with the keys of README's Results) or csv (one row per community)
   --json              print only the JSON results on stdout (also with --out, which still writes)
+With TREMORA_QUEUE set (a Redis URL), a study of ${QUEUED_SCREENING_COMMUNITIES} communities or more is screened by
+\`tremora worker\` processes through that queue, in chunks of communities (the same results);
+Ctrl-C then cancels it on every worker.
 Screening estimates only, not design values: building codes and licensed engineers decide.`;
+
+/**
+ * The screening through the queue: this process lays out the ruptures on one thread and
+ * `tremora worker` processes screen the communities, chunk by chunk (parallel-screen.ts).
+ */
+async function screenThroughQueue(
+  study: Study,
+  url: string,
+  onProgress: (share: number) => void,
+): Promise<ScreeningOutput> {
+  const pool = new WorkerPool({ size: 1, name: 'tremora-screen' });
+  const queue = await ChunkQueue.open({ url });
+  try {
+    const handle = screenStudyOnPool(pool, study, { chunks: queue, onProgress });
+    return screeningOutput(await untilDoneOrInterrupted(handle));
+  } finally {
+    await Promise.all([pool.close(), queue.close()]);
+  }
+}
 
 /** PGA in one precision down the column: two decimals (0.50, 0.26), two significant figures below 0.01 g. */
 const pgaText = (g: number): string => (g >= 0.01 ? g.toFixed(2) : sig(g, 2));
@@ -46,16 +75,18 @@ export async function screenVerb(args: readonly string[], io: Io): Promise<numbe
 
   const startedAt = new Date().toISOString();
   let shown = -1;
-  const output = screenStudy(study, {
-    models: modelCatalog,
-    onProgress: (share) => {
-      const percent = Math.floor(share * 100);
-      if (!values.json && percent >= shown + 10) {
-        shown = percent;
-        io.err(`screening: ${percent}%`);
-      }
-    },
-  });
+  const onProgress = (share: number): void => {
+    const percent = Math.floor(share * 100);
+    if (!values.json && percent >= shown + 10) {
+      shown = percent;
+      io.err(`screening: ${percent}%`);
+    }
+  };
+  const queueUrl = queueUrlFrom(process.env);
+  const output =
+    queueUrl !== undefined && isQueuedScreening(study)
+      ? await screenThroughQueue(study, queueUrl, onProgress)
+      : screenStudy(study, { models: modelCatalog, onProgress });
   const result: StudyResult = {
     ...output,
     provenance: buildProvenance({

@@ -1,4 +1,5 @@
 import type { Study } from '../engine/model.ts';
+import { isQueuedScreening } from '../queue/queued-screening.ts';
 import type { RunRecord, Store } from '../store/index.ts';
 import type { ChunkPool } from '../workers/chunk-runner.ts';
 import { spreadScreening } from '../workers/parallel-screen.ts';
@@ -20,17 +21,11 @@ export interface RunSchedulerOptions {
   readonly spreadOverPool?: boolean;
   /**
    * The Redis queue of `tremora worker` machines (TREMORA_QUEUE): the communities of a screening
-   * of at least QUEUED_SCREENING_COMMUNITIES go there, in chunks; smaller ones stay here.
+   * of at least QUEUED_SCREENING_COMMUNITIES (queued-screening.ts) go there, in chunks; smaller
+   * ones stay here.
    */
   readonly chunks?: ChunkPool;
 }
-
-/**
- * Fewest communities for a screening to go to the queue: below this a screening takes seconds
- * here, less than the round trips of handing it out would save (a judgement, not a measurement
- * of every cluster).
- */
-export const QUEUED_SCREENING_COMMUNITIES = 50;
 
 /**
  * Screening runs of saved studies on the worker pool, their life recorded in the store through
@@ -67,17 +62,9 @@ export class RunScheduler {
           onStart: () => signals.started(),
           onProgress: (share: number) => signals.progress(share),
         };
-        const queued =
-          this.#chunks !== undefined && study.communities.length >= QUEUED_SCREENING_COMMUNITIES;
-        return queued
-          ? spreadScreening(
-              this.#pool,
-              study,
-              run.inputHash,
-              this.#toolVersion,
-              events,
-              this.#chunks,
-            )
+        const queue = isQueuedScreening(study) ? this.#chunks : undefined;
+        return queue
+          ? spreadScreening(this.#pool, study, run.inputHash, this.#toolVersion, events, queue)
           : this.#spread
             ? spreadScreening(this.#pool, study, run.inputHash, this.#toolVersion, events)
             : this.#pool.run(

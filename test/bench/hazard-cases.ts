@@ -1,3 +1,4 @@
+import { spawnSync } from 'node:child_process';
 import { arch, availableParallelism, cpus, loadavg, totalmem } from 'node:os';
 import type { Community, Study } from '../../api/engine/model.ts';
 import type { ScreeningOutput } from '../../api/engine/screen-study.ts';
@@ -167,4 +168,31 @@ export function syntheticStudy(): Study {
     groundMotion: { crustal: [{ model: 'BSSA14', weight: 1 }], interface: [], intraslab: [] },
     settings: testSettings(),
   };
+}
+
+/**
+ * Runs one map of the demo in a process of its own (map-run.ts) and reads its figures; `env`
+ * adds to its environment (TREMORA_QUEUE: the map goes through that queue).
+ */
+export function mapRun(
+  points: number,
+  sampleEvery: number,
+  stopAfter = Infinity,
+  env: Readonly<Record<string, string>> = {},
+): Record<string, any> {
+  const args = [
+    '--import',
+    'tsx',
+    new URL('./map-run.ts', import.meta.url).pathname,
+    String(points),
+    String(sampleEvery),
+    ...(Number.isFinite(stopAfter) ? [String(stopAfter)] : []),
+  ];
+  const run = spawnSync(process.execPath, args, {
+    encoding: 'utf8',
+    maxBuffer: 64 * 2 ** 20,
+    env: { ...process.env, ...env },
+  });
+  if (run.status !== 0) throw new Error(`map-run failed: ${run.stderr}`);
+  return JSON.parse(run.stdout.trim().split('\n').at(-1)!);
 }

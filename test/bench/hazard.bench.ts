@@ -1,4 +1,3 @@
-import { spawnSync } from 'node:child_process';
 import { availableParallelism } from 'node:os';
 import { ruptureDistances } from '../../api/engine/geometry/distances.ts';
 import { frameForStudy } from '../../api/engine/geometry/projection.ts';
@@ -26,6 +25,7 @@ import {
   latticeCommunities,
   loadLine,
   machineLine,
+  mapRun,
   screeningDifference,
   syntheticStudy,
   withPeakRss,
@@ -191,21 +191,6 @@ await screeningCase(
   console.log(
     `  the sum alone      ${rate(terms, ms)} in one thread (${seconds(ms)} for the curves of the 1,000 sites, the median of ${RUNS} passes after a warm-up, no results assembly; twice that on two threads at best)`,
   );
-}
-
-/** Runs one map of the demo in a process of its own (map-run.ts) and reads its figures. */
-function mapRun(points: number, sampleEvery: number, stopAfter = Infinity): Record<string, any> {
-  const args = [
-    '--import',
-    'tsx',
-    new URL('./map-run.ts', import.meta.url).pathname,
-    String(points),
-    String(sampleEvery),
-    ...(Number.isFinite(stopAfter) ? [String(stopAfter)] : []),
-  ];
-  const run = spawnSync(process.execPath, args, { encoding: 'utf8', maxBuffer: 64 * 2 ** 20 });
-  if (run.status !== 0) throw new Error(`map-run failed: ${run.stderr}`);
-  return JSON.parse(run.stdout.trim().split('\n').at(-1)!);
 }
 
 /** The reference path at sampled points of the demo map: site-hazard.ts over every rupture, in the map's own frame. */

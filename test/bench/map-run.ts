@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import { createWriteStream } from 'node:fs';
 import { mkdtemp, rm } from 'node:fs/promises';
 import { availableParallelism, tmpdir } from 'node:os';
@@ -11,6 +12,8 @@ import {
   type MapDescription,
 } from '../../api/engine/map/map-geojson.ts';
 import { modelCatalog } from '../../api/engine/motion/registry.ts';
+import { ChunkQueue } from '../../api/queue/chunk-queue.ts';
+import { queueUrlFrom } from '../../api/queue/queue-setting.ts';
 import { readStudyFile } from '../../api/study/read-study-file.ts';
 import { hazardMapOnPool } from '../../api/workers/parallel-map.ts';
 import { WorkerPool } from '../../api/workers/worker-pool.ts';
@@ -20,7 +23,10 @@ import { withPeakRss } from './hazard-cases.ts';
  * One hazard map of the demo coast at 475-year PGA, in a process of its own (hazard.bench.ts
  * starts it, so each map's peak memory is its own): the grid spacing that gives at least the
  * number of points asked for, every core's thread, the GeoJSON streamed to a temporary file as
- * `tremora map` writes it. Prints one JSON line: the figures and the values of sampled points.
+ * `tremora map` writes it. Prints one JSON line: the figures, the values of sampled points and
+ * the SHA-256 of the points' GeoJSON (two runs with the same digest gave the same map). With
+ * TREMORA_QUEUE set, the points are computed by `tremora worker` processes through that queue
+ * (queue-map.bench.ts) and this process keeps one thread, for the rupture table.
  *
  *   node --import tsx test/bench/map-run.ts POINTS [SAMPLE_EVERY] [STOP_AFTER]
  *
@@ -47,8 +53,11 @@ for (let i = 0; i < 60; i++) {
 }
 const spacingKm = Number(lo.toPrecision(6)) > lo ? lo : Number(lo.toPrecision(6));
 
-const threads = availableParallelism();
+const queueUrl = queueUrlFrom(process.env);
+const threads = queueUrl === undefined ? availableParallelism() : 1;
 const pool = new WorkerPool({ size: threads, name: 'bench-map', log: () => {} });
+const queue = queueUrl === undefined ? undefined : await ChunkQueue.open({ url: queueUrl });
+const digest = createHash('sha256');
 const dir = await mkdtemp(join(tmpdir(), 'tremora-bench-'));
 const file = createWriteStream(join(dir, 'map.geojson'));
 const samples: { index: number; value: number | null; status: string }[] = [];
@@ -64,12 +73,15 @@ const { value: summary, peakRssMb } = await withPeakRss(async () => {
     study,
     { measure: 'PGA', quantity: { kind: 'return-period', returnPeriodYears: 475 }, spacingKm },
     {
+      ...(queue ? { chunks: queue } : {}),
       onStart: (d) => {
         description = d;
         file.write(mapGeoJsonHead(d));
       },
       onPoints: (points) => {
-        file.write(mapGeoJsonFeatures(description!, points, first));
+        const features = mapGeoJsonFeatures(description!, points, first);
+        file.write(features);
+        digest.update(features);
         first = false;
         for (const p of points)
           if (sampleEvery > 0 && p.index % sampleEvery === 0)
@@ -94,7 +106,7 @@ const cpu = process.cpuUsage(cpuStart);
 if (summary) file.write(mapGeoJsonTail(summary));
 await new Promise<void>((resolve) => file.end(() => resolve()));
 await rm(dir, { recursive: true, force: true });
-await pool.close();
+await Promise.all([pool.close(), queue?.close()]);
 process.stdout.write(
-  `${JSON.stringify({ spacingKm, points: description?.count, computed: done, finished: summary !== undefined, threads, wallMs, cpuMs: (cpu.user + cpu.system) / 1000, peakRssMb, samples })}\n`,
+  `${JSON.stringify({ spacingKm, points: description?.count, computed: done, finished: summary !== undefined, threads, queued: queue !== undefined, wallMs, cpuMs: (cpu.user + cpu.system) / 1000, peakRssMb, digest: digest.digest('hex'), samples })}\n`,
 );

@@ -1,6 +1,6 @@
 import { type ChildProcess, spawn } from 'node:child_process';
 import { createServer } from 'node:net';
-import { REPO_ROOT, tempDir } from '../../service/helpers/service-process.ts';
+import { REPO_ROOT, tempDir } from '../../helpers/repo-files.ts';
 
 /** A free loopback port (the OS picks one; it is released for the caller to take). */
 export function freePort(): Promise<number> {

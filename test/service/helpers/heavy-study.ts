@@ -6,16 +6,17 @@ import { REPO_ROOT, jsonInit, type ServiceProcess } from './service-process.ts';
 const COPIES = 40;
 
 /**
- * The demo study with every village repeated COPIES times a little further north (0.01° a
- * copy): the demo's sources and models, minutes of work on one thread, well inside the work
- * budget. For tests and benchmarks that need a run still computing while they measure.
+ * The demo study with every village repeated `copies` times a little further north (0.01° a
+ * copy): the demo's sources and models; with COPIES, minutes of work on one thread, well inside
+ * the work budget. For tests and benchmarks that need a run still computing while they measure,
+ * or a study with many communities.
  */
-export function heavyStudy(): Record<string, unknown> {
+export function heavyStudy(copies: number = COPIES): Record<string, unknown> {
   const demo = JSON.parse(readFileSync(join(REPO_ROOT, 'data-demo/demo.study.json'), 'utf8')) as {
     communities: Record<string, any>[];
   } & Record<string, unknown>;
   const communities = demo.communities.flatMap((village) =>
-    Array.from({ length: COPIES }, (_, k) => ({
+    Array.from({ length: copies }, (_, k) => ({
       ...village,
       id: `${village.id}-${k + 1}`,
       name: `${village.name} ${k + 1}`,

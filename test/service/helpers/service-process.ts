@@ -1,12 +1,9 @@
 import { afterAll, beforeAll } from 'vitest';
 import { type ChildProcess, spawn } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { REPO_ROOT, tempDir } from '../../helpers/repo-files.ts';
 
-/** The repository root, where `node --import tsx api/server.ts` runs. */
-export const REPO_ROOT = fileURLToPath(new URL('../../../', import.meta.url));
+export { REPO_ROOT, tempDir };
 
 const ADDRESS = /listening on (http:\/\/\S+)/;
 
@@ -109,12 +106,6 @@ export function startExpectingRefusal(
   child.stdout?.on('data', (c: Buffer) => (output += c.toString('utf8')));
   child.stderr?.on('data', (c: Buffer) => (output += c.toString('utf8')));
   return new Promise((resolve) => child.once('exit', (code) => resolve({ code, output })));
-}
-
-/** A fresh temporary directory and its removal. */
-export function tempDir(prefix = 'tremora-test-'): { path: string; remove(): void } {
-  const path = mkdtempSync(join(tmpdir(), prefix));
-  return { path, remove: () => rmSync(path, { recursive: true, force: true }) };
 }
 
 /** Polls `read` until `done` holds (or gives up after `attempts`); no timing is asserted. */
