@@ -36,9 +36,8 @@ export function zoneDepths(
     return (centre) => {
       let depths = known.get(centre);
       if (!depths) {
-        depths = [
-          { depthKm: (depthUnderKm(planes, centre) ?? zone.depthKm) + offsetKm, weight: 1 },
-        ];
+        const depthKm = (depthUnderKm(planes, centre) ?? zone.depthKm) + offsetKm;
+        depths = [{ depthKm: toFollowedDepthStep(depthKm), weight: 1 }];
         known.set(centre, depths);
       }
       return depths;
@@ -47,3 +46,14 @@ export function zoneDepths(
   const fixed = zone.depths ?? [{ depthKm: zone.depthKm, weight: 1 }];
   return () => fixed;
 }
+
+/**
+ * Depths that follow a surface are taken to the nearest FOLLOWED_DEPTH_STEP_KM: far finer than
+ * any slab model's contours are known (common practice: slab depth models are uncertain by
+ * kilometres), and cells at one depth then share one rupture context, whose ground-motion work
+ * the fast path does once (hazard/rupture-table.ts distinctContexts).
+ */
+export const FOLLOWED_DEPTH_STEP_KM = 0.1;
+
+const toFollowedDepthStep = (depthKm: number): number =>
+  Math.round(depthKm / FOLLOWED_DEPTH_STEP_KM) / (1 / FOLLOWED_DEPTH_STEP_KM);
