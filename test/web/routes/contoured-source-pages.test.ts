@@ -65,15 +65,16 @@ describe('a contoured source through the API', () => {
     const [zone] = results.diagnostics?.zoneDepths ?? [];
     expect(zone?.basis).toEqual({ depthFromSource: 'slab-top', offsetKm: 10 });
     // The slab's depth at a cell's longitude, linear between the contours (hand calculation);
-    // 0.05 km allows for the report's rounding (1e-4°, about 0.01 km of depth) and for the
-    // local projection bending the meridians by metres over the zone.
+    // 0.08 km allows for the depth taken to the nearest 0.1 km (FOLLOWED_DEPTH_STEP_KM, up to
+    // 0.05 km), the report's rounding (1e-4°, about 0.01 km of depth) and the local projection
+    // bending the meridians by metres over the zone.
     const slabKm = (lon: number) =>
       lon < -140.4 ? 5 + (15 * (lon + 140.6)) / 0.2 : 20 + (15 * (lon + 140.4)) / 0.3;
     expect(zone?.cells.length).toBeGreaterThan(4);
     for (const cell of zone?.cells ?? []) {
       expect(cell.depths).toHaveLength(1);
       expect(Math.abs((cell.depths[0]?.depthKm as number) - (10 + slabKm(cell.lon)))).toBeLessThan(
-        0.05,
+        0.08,
       );
     }
   });
