@@ -156,12 +156,18 @@ export interface ZoneSource extends SourceCommon {
   readonly depthFrom?: { readonly sourceId: string; readonly offsetKm: number };
   /** Hypocentral depths with weights, the same in every cell. */
   readonly depths?: readonly WeightedDepth[];
+  /** Seismogenic depths (km) the finite ruptures of large earthquakes are kept within (ruptures/virtual-ruptures.ts); the ground and no lower bound when absent. */
+  readonly upperDepthKm?: number;
+  readonly lowerDepthKm?: number;
 }
 
 export interface PointSource extends SourceCommon {
   readonly kind: 'point';
   readonly location: LonLat;
   readonly depthKm: number;
+  /** As a zone's: the seismogenic depths its large earthquakes' finite ruptures are kept within, km. */
+  readonly upperDepthKm?: number;
+  readonly lowerDepthKm?: number;
 }
 
 export type Source = FaultSource | ZoneSource | PointSource;

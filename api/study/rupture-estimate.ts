@@ -1,5 +1,9 @@
 import * as turf from '@turf/turf';
 import type { Recurrence, Settings, Source } from '../engine/model.ts';
+import {
+  FINITE_RUPTURE_MIN_MAGNITUDE,
+  VIRTUAL_STRIKE_COUNT,
+} from '../engine/ruptures/virtual-ruptures.ts';
 import { contouredExtent, contouredPlaneCount } from './contour-cell-estimate.ts';
 import { faultPlaneCount } from './fault-plane-estimate.ts';
 import type { IssueList } from './issues.ts';
@@ -23,14 +27,20 @@ export const MAX_RUPTURE_PLANES = 2_000_000;
 
 /**
  * Magnitude bins of a recurrence at `stepM` (recurrence/magnitude-bins.ts makes at most this
- * many); over a logic tree, the sum over its mMax alternatives, at least the union's count.
+ * many); over a logic tree, the sum over its mMax alternatives, at least the union's count;
+ * `finite` counts a zone's or point's bins from M 6 up once per virtual rupture.
  */
-function binCount(recurrence: Recurrence, stepM: number): number {
-  if (recurrence.type === 'fixed') return 1;
+function binCount(recurrence: Recurrence, stepM: number, finite = false): number {
+  const weight = (m: number): number =>
+    finite && m >= FINITE_RUPTURE_MIN_MAGNITUDE - 1e-6 ? VIRTUAL_STRIKE_COUNT : 1;
+  if (recurrence.type === 'fixed') return weight(recurrence.magnitude);
   const maxima = new Set(recurrence.alternatives?.mMax?.map((a) => a.value) ?? [recurrence.mMax]);
   let count = 0;
-  for (const mMax of maxima)
-    count += Math.max(1, Math.ceil((mMax - recurrence.mMin) / stepM - 1e-6));
+  for (const mMax of maxima) {
+    const bins = Math.max(1, Math.ceil((mMax - recurrence.mMin) / stepM - 1e-6));
+    // A zone's or point's bins from M 6 up are VIRTUAL_STRIKE_COUNT ruptures each (ruptures/virtual-ruptures.ts).
+    for (let k = 0; k < bins; k++) count += weight(recurrence.mMin + (k + 0.5) * stepM);
+  }
   return count;
 }
 
@@ -63,6 +73,11 @@ function positionCount(source: Source, settings: Settings): number {
   return (Math.ceil(areaCells + 2 * outlineCells) + 1) * (source.depths?.length ?? 1);
 }
 
+/** The ruptures one source would make, estimated from above before any is built. */
+export const sourceRuptureEstimate = (source: Source, settings: Settings): number =>
+  binCount(source.recurrence, settings.magnitudeStep, source.kind !== 'fault') *
+  positionCount(source, settings);
+
 /**
  * Refuses a study whose sources would make more than MAX_RUPTURES ruptures, estimated from
  * above, naming the largest source and the settings that reduce the count. `sources` must be
@@ -76,8 +91,7 @@ export function checkRuptureEstimate(
   let total = 0;
   let largest = { index: 0, count: 0 };
   sources.forEach((source, index) => {
-    const count =
-      binCount(source.recurrence, settings.magnitudeStep) * positionCount(source, settings);
+    const count = sourceRuptureEstimate(source, settings);
     total += count;
     if (count > largest.count) largest = { index, count };
   });

@@ -19,29 +19,11 @@ const MECHANISMS = ['strike-slip', 'reverse', 'normal'] as const;
 /** Depth of earthquakes accepted, km: the deepest known events are near 700 km. */
 const DEPTH_KM = { min: 0, max: 700, unit: 'km' } as const;
 
-const FAULT_KEYS = [
-  'id',
-  'name',
-  'setting',
-  'mechanism',
-  'rake',
-  'recurrence',
-  'dip',
-  'dipDirection',
-  'upperDepthKm',
-  'lowerDepthKm',
-];
-const CONTOUR_KEYS = [
-  'id',
-  'name',
-  'setting',
-  'mechanism',
-  'rake',
-  'recurrence',
-  'contourDepthsKm',
-  'meshSpacingKm',
-];
-const POINT_KEYS = ['id', 'name', 'setting', 'mechanism', 'rake', 'recurrence', 'depthKm'];
+/** Properties every source may have. */
+const COMMON_KEYS = ['id', 'name', 'setting', 'mechanism', 'rake', 'recurrence'];
+const FAULT_KEYS = [...COMMON_KEYS, 'dip', 'dipDirection', 'upperDepthKm', 'lowerDepthKm'];
+const CONTOUR_KEYS = [...COMMON_KEYS, 'contourDepthsKm', 'meshSpacingKm'];
+const POINT_KEYS = [...COMMON_KEYS, 'depthKm', 'upperDepthKm', 'lowerDepthKm'];
 
 const commonSchema = z.object({
   id: identifier(),
@@ -58,12 +40,18 @@ const faultSchema = z.object({
   lowerDepthKm: numberIn({ ...DEPTH_KM, minOpen: true }),
 });
 
-const pointSchema = z.object({ depthKm: numberIn(DEPTH_KM) });
+/** The seismogenic depths of a zone or point source, km (ruptures/virtual-ruptures.ts). */
+const seismogenicDepths = {
+  upperDepthKm: numberIn(DEPTH_KM).optional(),
+  lowerDepthKm: numberIn({ ...DEPTH_KM, minOpen: true }).optional(),
+};
+const pointSchema = z.object({ depthKm: numberIn(DEPTH_KM), ...seismogenicDepths });
 
 const ZONE_KEYS = [...POINT_KEYS, 'depthFromSource', 'depths'];
 /** Weights of a zone's depths sum to 1 within this (as the logic tree's do). */
 const WEIGHT_SUM_SLACK = 1e-6;
 const zoneSchema = z.object({
+  ...seismogenicDepths,
   depthKm: numberIn(DEPTH_KM).optional(),
   depthFromSource: z
     .object({ id: identifier(), offsetKm: numberIn({ min: -50, max: 300, unit: 'km' }).optional() })
@@ -236,6 +224,22 @@ export function readSource(
       lowerDepthKm: f.lowerDepthKm,
     };
   }
+  const layer = shape as { upperDepthKm?: number; lowerDepthKm?: number };
+  if (
+    layer.upperDepthKm !== undefined &&
+    layer.lowerDepthKm !== undefined &&
+    layer.upperDepthKm >= layer.lowerDepthKm
+  ) {
+    issues.add(
+      [...propsPath, 'lowerDepthKm'],
+      `expected lowerDepthKm greater than upperDepthKm (${layer.upperDepthKm} km), got ${layer.lowerDepthKm} km`,
+    );
+    return undefined;
+  }
+  const seismogenic = {
+    ...(layer.upperDepthKm !== undefined ? { upperDepthKm: layer.upperDepthKm } : {}),
+    ...(layer.lowerDepthKm !== undefined ? { lowerDepthKm: layer.lowerDepthKm } : {}),
+  };
   if (geometry.kind === 'zone') {
     const zone = shape as z.output<typeof zoneSchema>;
     const given = [zone.depthKm, zone.depthFromSource, zone.depths].filter((v) => v !== undefined);
@@ -272,10 +276,11 @@ export function readSource(
           }
         : {}),
       ...(zone.depths ? { depths: zone.depths } : {}),
+      ...seismogenic,
     };
   }
   const { depthKm } = shape as z.output<typeof pointSchema>;
-  return { ...base, kind: 'point', location: geometry.location, depthKm };
+  return { ...base, kind: 'point', location: geometry.location, depthKm, ...seismogenic };
 }
 
 /** A contoured fault's MultiLineString, as its lines (contour-geometry.ts). */

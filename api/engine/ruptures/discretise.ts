@@ -8,7 +8,9 @@ import {
   type PlacedRupture,
   type PreparedSource,
 } from './placement.ts';
+import { pointRuptureContext } from './point-rupture.ts';
 import type { Rupture } from './rupture.ts';
+import { virtualRupturesAt } from './virtual-ruptures.ts';
 
 /**
  * Paths of the engine's errors are relative to a source ("dip", "recurrence.mMax") or to the
@@ -56,7 +58,8 @@ const toRupture = (placed: PlacedRupture, binRate: number): Rupture =>
 /**
  * Visits every rupture of one source, in discretisation order: for each magnitude bin in
  * increasing order, every position of that magnitude, with the bin's annual rate (per year;
- * the rupture's own is that times its share). Fault areas for moment balancing are the whole
+ * the rupture's own is that times its share); a zone's or point source's earthquakes from
+ * FINITE_RUPTURE_MIN_MAGNITUDE up as their virtual ruptures, strike after strike. Fault areas for moment balancing are the whole
  * surface's (length x down-dip width). The one walk over a source that both the Rupture objects
  * (discretiseSource) and the fast path's table (hazard/study-rupture-table.ts) are built from.
  */
@@ -81,10 +84,26 @@ export function visitSourceRuptures(
     const areaKm2 = prepared.kind === 'fault' ? prepared.surface.areaKm2 : undefined;
     // Over the source's logic tree, the weighted mean rate of each magnitude (exact for the mean hazard).
     const bins = treeMagnitudeBins(source.recurrence, settings, areaKm2);
+    const finite: PlacedRupture[] = [];
     for (let i = 0; i < bins.magnitudes.length; i++) {
       const binRate = bins.annualRates[i] as number;
-      for (const placed of placeRuptures(prepared, bins.magnitudes[i] as number))
-        visit(placed, binRate);
+      const magnitude = bins.magnitudes[i] as number;
+      // Large earthquakes of zones and point sources as finite ruptures (virtual-ruptures.ts).
+      const spread =
+        prepared.kind === 'fault'
+          ? null
+          : virtualRupturesAt(prepared.source, magnitude, (depthKm) =>
+              pointRuptureContext(prepared.source, magnitude, depthKm),
+            );
+      for (const placed of placeRuptures(prepared, magnitude)) {
+        if (!spread) {
+          visit(placed, binRate);
+          continue;
+        }
+        finite.length = 0;
+        spread(placed, finite);
+        for (const each of finite) visit(each, binRate);
+      }
     }
   });
 }
