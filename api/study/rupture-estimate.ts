@@ -28,7 +28,8 @@ export const MAX_RUPTURE_PLANES = 2_000_000;
 /**
  * Magnitude bins of a recurrence at `stepM` (recurrence/magnitude-bins.ts makes at most this
  * many); over a logic tree, the sum over its mMax alternatives, at least the union's count;
- * `finite` counts a zone's or point's bins from M 6 up once per virtual rupture.
+ * `finite` counts a point source's bins from FINITE_RUPTURE_MIN_MAGNITUDE up once per virtual
+ * rupture (a zone cell's large earthquake is one virtual rupture, so a zone counts as before).
  */
 function binCount(recurrence: Recurrence, stepM: number, finite = false): number {
   const weight = (m: number): number =>
@@ -38,7 +39,7 @@ function binCount(recurrence: Recurrence, stepM: number, finite = false): number
   let count = 0;
   for (const mMax of maxima) {
     const bins = Math.max(1, Math.ceil((mMax - recurrence.mMin) / stepM - 1e-6));
-    // A zone's or point's bins from M 6 up are VIRTUAL_STRIKE_COUNT ruptures each (ruptures/virtual-ruptures.ts).
+    // A point source's large earthquakes are VIRTUAL_STRIKE_COUNT ruptures each (ruptures/virtual-ruptures.ts).
     for (let k = 0; k < bins; k++) count += weight(recurrence.mMin + (k + 0.5) * stepM);
   }
   return count;
@@ -75,7 +76,7 @@ function positionCount(source: Source, settings: Settings): number {
 
 /** The ruptures one source would make, estimated from above before any is built. */
 export const sourceRuptureEstimate = (source: Source, settings: Settings): number =>
-  binCount(source.recurrence, settings.magnitudeStep, source.kind !== 'fault') *
+  binCount(source.recurrence, settings.magnitudeStep, source.kind === 'point') *
   positionCount(source, settings);
 
 /**

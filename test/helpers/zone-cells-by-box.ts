@@ -26,6 +26,8 @@ export function everyBoxCell(zone: ZoneSource, frame: LocalFrame, cellKm: number
       ax + (col0 + side) * cellKm,
       ay + (row0 + side) * cellKm,
     ],
+    // The squares' lattice is then counted from the box's corner, not the zone's anchor.
+    lattice: { column: 0, row: 0 },
   };
   return subdivideZoneCell(zone, frame, whole, side);
 }

@@ -13,6 +13,18 @@ export interface ZoneCell {
   readonly share: number;
   /** The square the cell was cut with: west, south, east, north edges, local km. */
   readonly box: CellBox;
+  /** Where the square lies on the zone's own grid. */
+  readonly lattice: CellLattice;
+}
+
+/**
+ * A cell's column (west to east) and row (south to north) on its zone's grid, counted from the
+ * grid's anchor (the zone's first vertex, so they do not move with the study's frame); the
+ * squares of a refined cell count on a grid as many times finer as the cell is cut.
+ */
+export interface CellLattice {
+  readonly column: number;
+  readonly row: number;
 }
 
 export type CellBox = readonly [x0: number, y0: number, x1: number, y1: number];
@@ -233,7 +245,7 @@ export function zoneCells(zone: ZoneSource, frame: LocalFrame, cellKm: number): 
 
   const grid: CellGrid = { ax, ay, cellKm, row0, row1 };
   const candidates = candidateColumns(prepared.rings, grid);
-  const parts: { centre: PointXY; areaKm2: number; box: CellBox }[] = [];
+  const parts: { centre: PointXY; areaKm2: number; box: CellBox; lattice: CellLattice }[] = [];
   for (let row = row0; row < row1; row++) {
     for (const col of candidates[row - row0] ?? []) {
       const box: CellBox = [
@@ -243,7 +255,7 @@ export function zoneCells(zone: ZoneSource, frame: LocalFrame, cellKm: number): 
         ay + (row + 1) * cellKm,
       ];
       const part = boxPart(prepared, box);
-      if (part) parts.push({ ...part, box });
+      if (part) parts.push({ ...part, box, lattice: { column: col, row } });
     }
   }
   // Shares over the sum of the parts, so they add to 1 whatever the rounding.
@@ -253,6 +265,7 @@ export function zoneCells(zone: ZoneSource, frame: LocalFrame, cellKm: number): 
     areaKm2: p.areaKm2,
     share: p.areaKm2 / total,
     box: p.box,
+    lattice: p.lattice,
   }));
 }
 
@@ -271,7 +284,7 @@ export function subdivideZoneCell(
   const [x0, y0, x1, y1] = cell.box;
   const dx = (x1 - x0) / parts;
   const dy = (y1 - y0) / parts;
-  const pieces: { centre: PointXY; areaKm2: number; box: CellBox }[] = [];
+  const pieces: { centre: PointXY; areaKm2: number; box: CellBox; lattice: CellLattice }[] = [];
   for (let row = 0; row < parts; row++) {
     for (let col = 0; col < parts; col++) {
       const box: CellBox = [
@@ -281,7 +294,11 @@ export function subdivideZoneCell(
         row === parts - 1 ? y1 : y0 + (row + 1) * dy,
       ];
       const part = boxPart(prepared, box);
-      if (part) pieces.push({ ...part, box });
+      const lattice = {
+        column: cell.lattice.column * parts + col,
+        row: cell.lattice.row * parts + row,
+      };
+      if (part) pieces.push({ ...part, box, lattice });
     }
   }
   const total = compensatedSum(pieces.map((p) => p.areaKm2));
@@ -290,5 +307,6 @@ export function subdivideZoneCell(
     areaKm2: p.areaKm2,
     share: (cell.share * p.areaKm2) / total,
     box: p.box,
+    lattice: p.lattice,
   }));
 }

@@ -7,7 +7,12 @@ import {
   scalingRelationFor,
 } from '../geometry/rupture-scaling.ts';
 import { refineRadiusKm, REFINE_PARTS } from '../geometry/cell-refinement.ts';
-import { subdivideZoneCell, zoneCells, type ZoneCell } from '../geometry/zone-cells.ts';
+import {
+  subdivideZoneCell,
+  zoneCells,
+  type CellLattice,
+  type ZoneCell,
+} from '../geometry/zone-cells.ts';
 import type { FaultSource, PointSource, Settings, Source, ZoneSource } from '../model.ts';
 import { pointRuptureContext } from './point-rupture.ts';
 import { zoneDepths, type DepthsAt } from './zone-depths.ts';
@@ -41,8 +46,15 @@ export type PreparedSource =
       readonly location: PointXY;
     };
 
-/** A rupture in place without a rate, and its share (0–1) of its magnitude bin's rate. */
-export type PlacedRupture = Omit<Rupture, 'annualRate'> & { readonly share: number };
+/**
+ * A rupture in place without a rate, its share (0–1) of its magnitude bin's rate, and for a
+ * zone's, where its cell lies on the zone's grid (which strike its large earthquakes take,
+ * virtual-ruptures.ts).
+ */
+export type PlacedRupture = Omit<Rupture, 'annualRate'> & {
+  readonly share: number;
+  readonly lattice?: CellLattice;
+};
 
 /**
  * The geometry of `source` in `frame`: a fault surface, zone cells (those near any of `sites`
@@ -140,10 +152,11 @@ export function placeRuptures(prepared: PreparedSource, magnitude: number): Plac
         };
         const share = at.share * weight;
         const context = contextAt(depthKm);
+        const { lattice } = at;
         placed.push(
           cellUse
-            ? { sourceIndex, sourceId, share, context, surface, cellUse }
-            : { sourceIndex, sourceId, share, context, surface },
+            ? { sourceIndex, sourceId, share, context, surface, cellUse, lattice }
+            : { sourceIndex, sourceId, share, context, surface, lattice },
         );
       }
     };

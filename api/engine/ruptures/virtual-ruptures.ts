@@ -1,4 +1,5 @@
 import { scaledDimensions, scalingRelationFor } from '../geometry/rupture-scaling.ts';
+import type { CellLattice } from '../geometry/zone-cells.ts';
 import type { PointSource, ZoneSource } from '../model.ts';
 import type { RuptureContext } from '../motion/types.ts';
 import { toRadians } from '../units.ts';
@@ -7,22 +8,49 @@ import { POINT_DIP_DEG } from './point-rupture.ts';
 import type { PointKm, RupturePlane } from './rupture.ts';
 
 /**
- * From this magnitude up, a zone's or point source's earthquakes are finite ruptures, not
- * points. At M 6.0 the median crustal rupture is already 13 km long and 7 km wide (Wells &
- * Coppersmith 1994 Table 2A, strike-slip: RA 95 km², RW 7.2 km), longer than the default zone
- * cell; epicentral and hypocentral distance then overstate the distance to the rupture for
- * sites near it (common practice: the virtual ruptures of many hazard models start near M 6).
+ * From this magnitude up (bins whose centre is M 6.5 or more), a zone's or point source's
+ * earthquakes are finite ruptures, not points. Worked from Wells & Coppersmith (1994) Table 2A
+ * (coefficients in geometry/rupture-scaling.ts): at M 6.5 the median reverse rupture is
+ * 10^(-3.99 + 0.98 x 6.5) = 240 km² and 10^(-1.61 + 0.41 x 6.5) = 11.4 km wide, so 21 km long,
+ * and the strike-slip one 27 km long; half of either is more than a 10 km cell and more than
+ * the usual crustal hypocentral depth, so Rhypo overstates the distance to the rupture by
+ * kilometres for sites within a few tens of km. At M 6.0 the reverse rupture is 11 km long and
+ * its half-length within a default cell of the point. Where finite ruptures start is a
+ * modelling choice (common practice: hazard models place virtual finite ruptures for the
+ * larger magnitudes of gridded seismicity, from about M 6 to 6.5).
  */
-export const FINITE_RUPTURE_MIN_MAGNITUDE = 6;
+export const FINITE_RUPTURE_MIN_MAGNITUDE = 6.5;
 
 /**
- * How many strikes each point earthquake is spread over, each with an equal share of its rate.
- * A power of two, so every share is its rate divided exactly. Eight strikes keep the mean PGA
- * of a dipping M 5–7.5 point source within 0.24% (475 years) and 1.03% (2475 years) of 36
- * strikes at sites 0 to 30 km from it; four strikes were 1.9% off at 475 years
+ * How many strikes the virtual ruptures take, spread evenly. A point source's earthquake is
+ * all of them, each with an equal share of its rate (a power of two, so every share is its
+ * rate divided exactly): eight strikes keep the mean PGA of a dipping M 5–7.5 point source
+ * within 0.13% (475 years) and 0.76% (2475 years) of 36 strikes at sites 0 to 30 km from it;
+ * four strikes were up to 0.95% off. A zone cell's earthquake is one of them
+ * (cellStrikeIndex), so a zone has as many ruptures as with points
  * (test/engine/ruptures/virtual-ruptures.test.ts).
  */
 export const VIRTUAL_STRIKE_COUNT = 8;
+
+/**
+ * Which of the `count` strikes a zone cell's earthquakes of the `magnitudeIndex`-th magnitude
+ * bin take, from the cell's place on the zone's own grid: (column + 3 row + magnitudeIndex)
+ * mod count. Every run of 8 cells along a row takes every strike, and so does every 3 x 3 block
+ * of cells (its offsets column + 3 row run over -4 to 4, nine consecutive values), so a site
+ * sees every strike among the cells around it, and each bin shifts the pattern so a cell does
+ * not keep one strike at every magnitude. It depends only on the zone and the cell, never on
+ * the study's other sources or communities. Against every cell taking all eight strikes, the
+ * mean 475- and 2475-year PGA inside and near a zone are within 0.05% and 0.16%
+ * (test/engine/ruptures/virtual-zone-strikes.test.ts).
+ */
+export function cellStrikeIndex(
+  lattice: CellLattice,
+  magnitudeIndex: number,
+  count: number = VIRTUAL_STRIKE_COUNT,
+): number {
+  const k = (lattice.column + 3 * lattice.row + magnitudeIndex) % count;
+  return k < 0 ? k + count : k;
+}
 
 /**
  * The strikes of the virtual ruptures, degrees clockwise from north, spread evenly: over
@@ -111,18 +139,26 @@ export function virtualPlane(o: VirtualPlaneOptions): VirtualPlane {
 }
 
 /**
- * The virtual ruptures of one point source or zone at `magnitude`, as a function replacing each
- * point placement by VIRTUAL_STRIKE_COUNT planar ones (each with an equal share of its share);
- * below FINITE_RUPTURE_MIN_MAGNITUDE, null: the points stay points. The planes of each depth
- * are worked out once.
+ * The virtual ruptures of one point source or zone at `magnitude` (the `magnitudeIndex`-th bin
+ * of its recurrence), as a function replacing each point placement by planar ones: a zone
+ * cell's (a placement with a lattice) by the one of cellStrikeIndex with its whole share, a
+ * point source's by `strikeCount` with equal shares of it. Below FINITE_RUPTURE_MIN_MAGNITUDE,
+ * null: the points stay points. The planes and context of each hypocentral depth are worked out
+ * once, so ruptures at one depth share one context (hazard/rupture-table.ts distinctContexts).
+ * The dip is the mechanism's (point-rupture.ts) wherever the hypocentre lies, also where a
+ * zone's depths follow a slab surface (zone-depths.ts): there the plane is centred on the
+ * hypocentre at the slab's depth with the zone's mechanism and its dip, not turned to the
+ * slab's local dip, which the study does not give for the zone's own earthquakes (a simple
+ * choice; the seismogenic depths, when given, still bound it).
  */
 export function virtualRupturesAt(
   source: ZoneSource | PointSource,
   magnitude: number,
-  context: (depthKm: number) => RuptureContext,
+  magnitudeIndex: number,
+  pointContext: (depthKm: number) => RuptureContext,
   strikeCount: number = VIRTUAL_STRIKE_COUNT,
 ): ((placed: PlacedRupture, out: PlacedRupture[]) => void) | null {
-  // A bin's centre a rounding below the threshold (5.999999) counts as at it.
+  // A bin's centre a rounding below the threshold (6.499999) counts as at it.
   if (magnitude < FINITE_RUPTURE_MIN_MAGNITUDE - 1e-9) return null;
   const dipDeg = POINT_DIP_DEG[source.mechanism];
   const { areaKm2, widthKm } = scaledDimensions(
@@ -138,11 +174,12 @@ export function virtualRupturesAt(
       const planes = strikes.map((strikeDeg) =>
         virtualPlane({ strikeDeg, dipDeg, areaKm2, widthKm, hypoDepthKm, upperKm, lowerKm }),
       );
+      // Ztor and width do not depend on the strike.
       const first = planes[0] as VirtualPlane;
       found = {
         planes,
         context: {
-          ...context(hypoDepthKm),
+          ...pointContext(hypoDepthKm),
           dipDeg,
           ztorKm: first.ztorKm,
           widthKm: first.widthKm,
@@ -158,29 +195,27 @@ export function virtualRupturesAt(
       return;
     }
     const h = placed.surface.hypocentre;
-    const { planes, context: c } = atDepth(h.z);
-    const share = placed.share / planes.length;
-    for (const p of planes) {
-      const plane: RupturePlane = {
-        corners: p.corners.map((q) => ({ x: h.x + q.x, y: h.y + q.y, z: q.z })) as [
-          PointKm,
-          PointKm,
-          PointKm,
-          PointKm,
-        ],
-      };
+    const { planes, context } = atDepth(h.z);
+    const { sourceIndex, sourceId, cellUse } = placed;
+    const push = (p: VirtualPlane, share: number): void => {
+      const at = (q: PointKm): PointKm => ({ x: h.x + q.x, y: h.y + q.y, z: q.z });
+      const [a, b, c, d] = p.corners;
+      const plane: RupturePlane = { corners: [at(a), at(b), at(c), at(d)] };
       const surface = { kind: 'planes' as const, planes: [plane], hypocentre: h };
       out.push(
-        placed.cellUse
-          ? { ...placed, share, context: c, surface }
-          : {
-              sourceIndex: placed.sourceIndex,
-              sourceId: placed.sourceId,
-              share,
-              context: c,
-              surface,
-            },
+        cellUse
+          ? { sourceIndex, sourceId, share, context, surface, cellUse }
+          : { sourceIndex, sourceId, share, context, surface },
       );
+    };
+    if (placed.lattice) {
+      push(
+        planes[cellStrikeIndex(placed.lattice, magnitudeIndex, planes.length)] as VirtualPlane,
+        placed.share,
+      );
+      return;
     }
+    const share = placed.share / planes.length;
+    for (const p of planes) push(p, share);
   };
 }

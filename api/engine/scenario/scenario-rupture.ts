@@ -50,7 +50,9 @@ export function candidateRuptures(prepared: PreparedSource, magnitude: number): 
       (p) => faultRupture(prepared, magnitude, p),
     );
   }
-  return placeRuptures(prepared, magnitude).map(({ share: _share, ...rupture }) => rupture);
+  return placeRuptures(prepared, magnitude).map(
+    ({ share: _share, lattice: _lattice, ...rupture }) => rupture,
+  );
 }
 
 /** The candidate with the smallest Rrup to `site` (first one on ties). */

@@ -117,12 +117,12 @@ describe('discretiseSource: rates per source sum to the source total', () => {
     );
   });
 
-  // 25 bins of 0.1 from M 5: the 10 below M 6 as points, the 15 from M 6.05 up as 8 virtual
-  // ruptures each (ruptures/virtual-ruptures.ts).
-  it('zone with a hole: 84 cells x (10 + 15 x 8) ruptures, rates summing to 10^(3.5 - 5)', () => {
+  // 25 bins of 0.1 from M 5: the 15 below M 6.5 as points, the 10 from M 6.55 up as virtual
+  // ruptures, one per zone cell, eight per point source (ruptures/virtual-ruptures.ts).
+  it('zone with a hole: 84 cells x 25 bins, rates summing to 10^(3.5 - 5)', () => {
     const zone = zoneKm([square(0, 0, 100, 100), square(30, 30, 70, 70)], GR, 12);
     const ruptures = discretiseSource(zone, 3, FRAME, SETTINGS);
-    expect(ruptures.length).toBe(84 * (10 + 15 * 8));
+    expect(ruptures.length).toBe(84 * 25);
     expectRelative(sumRates(ruptures), 10 ** -1.5, 1e-9, 'rate of M >= mMin');
     const first = ruptures[0];
     expect(first?.surface.kind).toBe('point');
@@ -131,10 +131,10 @@ describe('discretiseSource: rates per source sum to the source total', () => {
     expect(first?.sourceIndex).toBe(3);
   });
 
-  it('point source: one rupture per bin below M 6, eight from M 6, at its location and depth', () => {
+  it('point source: one rupture per bin below M 6.5, eight from M 6.5, at its location and depth', () => {
     const point = pointKm(-20, 35, GR, 8);
     const ruptures = discretiseSource(point, 0, FRAME, SETTINGS);
-    expect(ruptures.length).toBe(10 + 15 * 8);
+    expect(ruptures.length).toBe(15 + 10 * 8);
     expectRelative(sumRates(ruptures), 10 ** -1.5, 1e-9, 'rate of M >= mMin');
     expectClose(ruptures[0]?.surface.hypocentre.x ?? NaN, -20, 1e-6, 'projected location x');
     expectClose(ruptures[0]?.surface.hypocentre.y ?? NaN, 35, 1e-6, 'projected location y');
