@@ -9,7 +9,8 @@ import type { Mechanism, TectonicSetting } from '../model.ts';
  * Crustal faults: Wells & Coppersmith (1994), "New empirical relationships among magnitude,
  * rupture length, rupture width, rupture area, and surface displacement", BSSA 84(4), 974–1002,
  * Table 2A: subsurface rupture length (RLD), down-dip rupture width (RW) and rupture area (RA)
- * by slip type. Their normal-faulting sample is small (the paper advises the all-slip-type
+ * by slip type. Read against the text of Table 2A: log(RLD) = -2.57 + 0.62 M (strike-slip) and
+ * -2.42 + 0.58 M (reverse), log(RW) = -0.76 + 0.27 M (strike-slip); the other rows from memory. Their normal-faulting sample is small (the paper advises the all-slip-type
  * relations where the slip type is unknown).
  *
  * Subduction: Strasser, Arango & Bommer (2010), "Scaling of the source dimensions of interface

@@ -196,26 +196,36 @@ export function virtualRupturesAt(
     }
     const h = placed.surface.hypocentre;
     const { planes, context } = atDepth(h.z);
-    const { sourceIndex, sourceId, cellUse } = placed;
-    const push = (p: VirtualPlane, share: number): void => {
-      const at = (q: PointKm): PointKm => ({ x: h.x + q.x, y: h.y + q.y, z: q.z });
-      const [a, b, c, d] = p.corners;
-      const plane: RupturePlane = { corners: [at(a), at(b), at(c), at(d)] };
-      const surface = { kind: 'planes' as const, planes: [plane], hypocentre: h };
-      out.push(
-        cellUse
-          ? { sourceIndex, sourceId, share, context, surface, cellUse }
-          : { sourceIndex, sourceId, share, context, surface },
-      );
-    };
     if (placed.lattice) {
-      push(
-        planes[cellStrikeIndex(placed.lattice, magnitudeIndex, planes.length)] as VirtualPlane,
-        placed.share,
-      );
+      const p = planes[cellStrikeIndex(placed.lattice, magnitudeIndex, planes.length)];
+      out.push(virtualRupture(placed, p as VirtualPlane, placed.share, context));
       return;
     }
     const share = placed.share / planes.length;
-    for (const p of planes) push(p, share);
+    for (const p of planes) out.push(virtualRupture(placed, p, share, context));
   };
+}
+
+/** A point placement as the virtual rupture `p` (offsets from its epicentre) with `share`. */
+function virtualRupture(
+  placed: PlacedRupture,
+  p: VirtualPlane,
+  share: number,
+  context: RuptureContext,
+): PlacedRupture {
+  const h = placed.surface.hypocentre;
+  const [a, b, c, d] = p.corners;
+  const plane: RupturePlane = {
+    corners: [
+      { x: h.x + a.x, y: h.y + a.y, z: a.z },
+      { x: h.x + b.x, y: h.y + b.y, z: b.z },
+      { x: h.x + c.x, y: h.y + c.y, z: c.z },
+      { x: h.x + d.x, y: h.y + d.y, z: d.z },
+    ],
+  };
+  const surface = { kind: 'planes' as const, planes: [plane], hypocentre: h };
+  const { sourceIndex, sourceId, cellUse } = placed;
+  return cellUse
+    ? { sourceIndex, sourceId, share, context, surface, cellUse }
+    : { sourceIndex, sourceId, share, context, surface };
 }

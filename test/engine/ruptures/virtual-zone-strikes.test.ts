@@ -145,3 +145,25 @@ describe('one strike per zone cell against every strike in every cell', () => {
     }),
   );
 });
+
+describe('below M 6.5 a zone is what it was', () => {
+  it('M 5–6.5: the results of the zone, every curve and figure, bit-identical to its point ruptures', () => {
+    const zone = STUDY.sources[0]!;
+    const small: Study = {
+      ...STUDY,
+      sources: [
+        {
+          ...zone,
+          recurrence: { type: 'gutenberg-richter', bValue: 1, mMin: 5, mMax: 6.5, rate: 0.2 },
+        },
+      ],
+    };
+    const indices = small.communities.map((_, c) => c);
+    const built = screenCommunities(planScreening(small), indices);
+    const points = screenCommunities(
+      planScreening(small, { table: ruptureTable(referenceRuptures(small, 'points')) }),
+      indices,
+    );
+    expect(built).toEqual(points);
+  });
+});
