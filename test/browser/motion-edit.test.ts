@@ -13,6 +13,7 @@ import {
   walkWithTab,
   type LaunchedBrowser,
 } from './helpers/chromium.ts';
+import { followRunToOverview } from './helpers/run-page.ts';
 
 /**
  * The ground-motion page in Chromium: from the editor's link, a weight that leaves the crustal
@@ -114,8 +115,7 @@ describe('ground motion and settings from the pages', { timeout: 300_000 }, () =
     const studyUrl = `${service.url}/studies/${studyId}`;
     await page.goto(studyUrl);
     await page.getByRole('button', { name: en.t('overview.screenButton') }).click();
-    await page.waitForURL(/\/runs\//);
-    await page.waitForURL(studyUrl, { timeout: 240_000 });
+    await followRunToOverview(page, service, studyUrl, en);
     expect(await page.locator('tr[data-community] [data-band]').count()).toBe(1);
     // The new return period is offered for the hazard map of the study screened again.
     expect(await page.locator('option', { hasText: '(return period 975 years)' }).count()).toBe(1);

@@ -4,6 +4,7 @@ import { translator } from '../../web/text/translator.ts';
 import { ARTIFACTS, seriousAxeViolations } from './helpers/chromium.ts';
 import { browserService } from './helpers/browser-service.ts';
 import { screenshotTwoWidths } from './helpers/browser-service.ts';
+import { followRunToOverview } from './helpers/run-page.ts';
 
 /**
  * A new study from nothing in Chromium: "Start a new study" with a small village CSV, the
@@ -72,8 +73,7 @@ describe('a new study from the pages', { timeout: 400_000 }, () => {
 
     await rig.page.goto(studyUrl);
     await rig.page.getByRole('button', { name: en.t('overview.screenButton') }).click();
-    await rig.page.waitForURL(/\/runs\//);
-    await rig.page.waitForURL(studyUrl, { timeout: 300_000 });
+    await followRunToOverview(rig.page, rig.service, studyUrl, en);
     expect(await rig.page.locator('tr[data-community] [data-band]').count()).toBe(2);
     await screenshotTwoWidths(rig.page, 'new-study-screened');
   });
