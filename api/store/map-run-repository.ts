@@ -3,7 +3,7 @@ import type { MapQuantity } from '../engine/map/hazard-map.ts';
 import type { MapDescription } from '../engine/map/map-geojson.ts';
 import type { LonLatBounds } from '../engine/map/map-grid.ts';
 import { newId } from './new-id.ts';
-import { INTERRUPTED_MESSAGE, type RunStatus } from './run-repository.ts';
+import { JOB_COLUMNS, type JobRecord, type JobRow, JobTable, jobRecordOf } from './job-table.ts';
 
 /** What a map run maps: as asked, with the Vs30 it gives every point filled in. */
 export interface MapRunRequest {
@@ -18,24 +18,12 @@ export interface MapRunRequest {
 }
 
 /** A map run without its GeoJSON (which can be large; read it with `geojson`). */
-export interface MapRunRecord {
-  readonly id: string;
-  readonly studyId: string;
-  readonly status: RunStatus;
-  /** Share of the grid points done, 0 to 1. */
-  readonly progress: number;
+export interface MapRunRecord extends JobRecord {
   readonly request: MapRunRequest;
-  readonly inputHash: string;
   /** What the map is of and its grid, once the grid is known (status running and after). */
   readonly description: MapDescription | null;
   /** The map's warnings, once it is done; empty before. */
   readonly warnings: readonly string[];
-  /** Provenance JSON text, once the map is done. */
-  readonly provenance: string | null;
-  readonly error: string | null;
-  readonly createdAt: string;
-  readonly startedAt: string | null;
-  readonly finishedAt: string | null;
 }
 
 export interface MapRunInputs {
@@ -52,11 +40,7 @@ export interface MapRunOutputs {
   readonly finishedAt: string;
 }
 
-interface MapRunRow {
-  id: string;
-  study_id: string;
-  status: RunStatus;
-  progress: number;
+interface MapRunRow extends JobRow {
   measure: string;
   return_period_years: number | null;
   level: number | null;
@@ -64,18 +48,11 @@ interface MapRunRow {
   spacing_km: number;
   vs30: number;
   bounds: string | null;
-  input_hash: string;
   description: string | null;
   warnings: string | null;
-  provenance: string | null;
-  error: string | null;
-  created_at: string;
-  started_at: string | null;
-  finished_at: string | null;
 }
 
-const MAP_RUN_COLUMNS =
-  'id, study_id, status, progress, measure, return_period_years, level, horizon_years, spacing_km, vs30, bounds, input_hash, description, warnings, provenance, error, created_at, started_at, finished_at';
+const MAP_RUN_COLUMNS = `${JOB_COLUMNS}, measure, return_period_years, level, horizon_years, spacing_km, vs30, bounds, description, warnings`;
 
 function requestOf(row: MapRunRow): MapRunRequest {
   const quantity: MapQuantity =
@@ -87,38 +64,23 @@ function requestOf(row: MapRunRow): MapRunRequest {
 }
 
 const recordOf = (row: MapRunRow): MapRunRecord => ({
-  id: row.id,
-  studyId: row.study_id,
-  status: row.status,
-  progress: row.progress,
+  ...jobRecordOf(row),
   request: requestOf(row),
-  inputHash: row.input_hash,
   description: row.description === null ? null : (JSON.parse(row.description) as MapDescription),
   warnings: row.warnings === null ? [] : (JSON.parse(row.warnings) as string[]),
-  provenance: row.provenance,
-  error: row.error,
-  createdAt: row.created_at,
-  startedAt: row.started_at,
-  finishedAt: row.finished_at,
 });
 
-/**
- * Hazard-map runs and their GeoJSON, in the manner of RunRepository: only unfinished map runs
- * ever change, every update names the statuses it may change from, and a trigger (migration
- * 003) refuses any change to a finished one.
- */
-export class MapRunRepository {
+/** Hazard-map runs and their GeoJSON; what only unfinished map runs may change is JobTable's. */
+export class MapRunRepository extends JobTable {
   readonly #get: Statement;
   readonly #geojson: Statement;
   readonly #listForStudy: Statement;
   readonly #insert: Statement;
   readonly #markRunning: Statement;
-  readonly #progress: Statement;
   readonly #finishDone: Statement;
-  readonly #finishWithout: Statement;
-  readonly #interruptAll: Statement;
 
   constructor(db: Database) {
+    super(db, 'map_runs');
     this.#get = db.prepare(`SELECT ${MAP_RUN_COLUMNS} FROM map_runs WHERE id = ?`);
     this.#geojson = db.prepare("SELECT geojson FROM map_runs WHERE id = ? AND status = 'done'");
     // rowid keeps the order of creation among runs created in the same millisecond.
@@ -132,18 +94,8 @@ export class MapRunRepository {
     this.#markRunning = db.prepare(
       "UPDATE map_runs SET status = 'running', started_at = ?, description = ? WHERE id = ? AND status = 'queued'",
     );
-    // Progress only moves forward, so a late message cannot make a map look less done.
-    this.#progress = db.prepare(
-      "UPDATE map_runs SET progress = ? WHERE id = ? AND status = 'running' AND progress < ?",
-    );
     this.#finishDone = db.prepare(
       "UPDATE map_runs SET status = 'done', progress = 1, geojson = ?, warnings = ?, provenance = ?, finished_at = ?, error = NULL WHERE id = ? AND status = 'running'",
-    );
-    this.#finishWithout = db.prepare(
-      "UPDATE map_runs SET status = ?, error = ?, finished_at = ? WHERE id = ? AND status IN ('queued', 'running')",
-    );
-    this.#interruptAll = db.prepare(
-      "UPDATE map_runs SET status = 'interrupted', error = ?, finished_at = ? WHERE status IN ('queued', 'running')",
     );
   }
 
@@ -188,11 +140,6 @@ export class MapRunRepository {
     return this.#markRunning.run(startedAt, JSON.stringify(description), id).changes > 0;
   }
 
-  setProgress(id: string, share: number): void {
-    const clamped = Math.min(Math.max(share, 0), 1);
-    this.#progress.run(clamped, id, clamped);
-  }
-
   /** GeoJSON, warnings, provenance and the status 'done' are written in one statement: never half a map. */
   finishDone(id: string, outputs: MapRunOutputs): boolean {
     return (
@@ -204,19 +151,5 @@ export class MapRunRepository {
         id,
       ).changes > 0
     );
-  }
-
-  finishWithout(
-    id: string,
-    status: 'failed' | 'cancelled' | 'interrupted',
-    error: string,
-    finishedAt = new Date().toISOString(),
-  ): boolean {
-    return this.#finishWithout.run(status, error, finishedAt, id).changes > 0;
-  }
-
-  /** Marks every queued or running map run interrupted (at open, after a crash; at shutdown). */
-  interruptUnfinished(): number {
-    return this.#interruptAll.run(INTERRUPTED_MESSAGE, new Date().toISOString()).changes;
   }
 }

@@ -5,8 +5,11 @@ import { identifier, numberIn, oneOf, text, yesNo } from './fields.ts';
 import { formatPath, type IssueList } from './issues.ts';
 import { SITE_CLASSES, SITE_CLASS_VS30 } from './site-class.ts';
 
-/** The keys a community may carry (DESIGN.md section 2, plus siteClass). */
-export const COMMUNITY_KEYS = [
+/**
+ * A community's own fields (DESIGN.md section 2, plus siteClass), in the order of Tremora's
+ * CSV header; the fields a community file's columns are matched to.
+ */
+export const COMMUNITY_COLUMNS = [
   'id',
   'name',
   'lon',
@@ -16,8 +19,11 @@ export const COMMUNITY_KEYS = [
   'population',
   'coastal',
   'elevationM',
-  'details',
 ] as const;
+export type CommunityColumn = (typeof COMMUNITY_COLUMNS)[number];
+
+/** The keys a community may carry: its own fields and the details its file gave. */
+export const COMMUNITY_KEYS = [...COMMUNITY_COLUMNS, 'details'] as const;
 
 /**
  * A community's details: what its file says that Tremora does not use (school, clinic,

@@ -1,16 +1,6 @@
-/** Tremora's community fields that a file's columns are matched to. */
-export const COMMUNITY_COLUMNS = [
-  'id',
-  'name',
-  'lon',
-  'lat',
-  'vs30',
-  'siteClass',
-  'population',
-  'coastal',
-  'elevationM',
-] as const;
-export type CommunityColumn = (typeof COMMUNITY_COLUMNS)[number];
+import { COMMUNITY_COLUMNS, type CommunityColumn } from '../community-schema.ts';
+
+export { COMMUNITY_COLUMNS, type CommunityColumn };
 
 /**
  * The spellings recognised for each field, compared after `normaliseColumnName`. They are the

@@ -1,17 +1,6 @@
 import Papa from 'papaparse';
 import type { Community } from '../../engine/model.ts';
-
-const FIELDS = [
-  'id',
-  'name',
-  'lon',
-  'lat',
-  'vs30',
-  'siteClass',
-  'population',
-  'coastal',
-  'elevationM',
-] as const;
+import { COMMUNITY_COLUMNS } from '../community-schema.ts';
 
 /**
  * Validated communities as CSV with Tremora's own header, then their details' columns. An
@@ -32,7 +21,10 @@ export function communitiesCsvText(communities: readonly Community[]): string {
       coastal: c.coastal,
       elevationM: c.elevationM,
     };
-    return [...FIELDS.map((f) => own[f] ?? ''), ...detailColumns.map((d) => c.details?.[d] ?? '')];
+    return [
+      ...COMMUNITY_COLUMNS.map((f) => own[f] ?? ''),
+      ...detailColumns.map((d) => c.details?.[d] ?? ''),
+    ];
   });
-  return `${Papa.unparse({ fields: [...FIELDS, ...detailColumns], data: rows }, { newline: '\n' })}\n`;
+  return `${Papa.unparse({ fields: [...COMMUNITY_COLUMNS, ...detailColumns], data: rows }, { newline: '\n' })}\n`;
 }

@@ -3,6 +3,7 @@ import { createApp } from '../../../api/service/app.ts';
 import type { ServiceContext } from '../../../api/operations/service-context.ts';
 import { openStore } from '../../../api/store/store.ts';
 import { modelCatalog } from '../../../api/engine/motion/registry.ts';
+import { COMMUNITY_COLUMNS } from '../../../api/study/community-schema.ts';
 import { createPages } from '../../../web/pages.tsx';
 import { smallStudy, sourcesCollection } from '../helpers/small-study.ts';
 
@@ -469,15 +470,7 @@ export function requestsFor(route: RouteSpec, ids: KnownIds): fc.Arbitrary<FuzzR
 
 /** Form fields the pages read, with hostile values (the pages' forms post urlencoded). */
 const FORM_FIELDS = [
-  'name',
-  'id',
-  'lon',
-  'lat',
-  'vs30',
-  'siteClass',
-  'population',
-  'coastal',
-  'elevationM',
+  ...COMMUNITY_COLUMNS,
   'sourceId',
   'magnitude',
   'position',
