@@ -2,7 +2,7 @@ import type { Database, Statement } from 'better-sqlite3';
 import { JOB_COLUMNS, type JobRecord, type JobRow, JobTable, jobRecordOf } from './job-table.ts';
 import { newId } from './new-id.ts';
 
-export { FINISHED_STATUSES, INTERRUPTED_MESSAGE, isFinished, type RunStatus } from './job-table.ts';
+export { INTERRUPTED_MESSAGE, isFinished } from './job-table.ts';
 
 /** A run without its results (which can be large; read them with `results`). */
 export type RunRecord = JobRecord;
