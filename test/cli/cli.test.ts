@@ -2,21 +2,12 @@ import { copyFile, mkdtemp, readFile, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { runCli } from '../../api/cli.ts';
-import type { Io } from '../../api/cli/output.ts';
 import { normalSurvival } from '../../api/engine/hazard/normal-cdf.ts';
 import { expectRelative } from '../helpers/close.ts';
+import { runCapturing as run } from './helpers/run-cli.ts';
 
 const TINY = new URL('fixtures/tiny.study.json', import.meta.url).pathname;
 const DEMO = new URL('../../data-demo/demo.study.json', import.meta.url).pathname;
-
-async function run(...argv: string[]): Promise<{ code: number; out: string; err: string }> {
-  let out = '';
-  let err = '';
-  const io: Io = { out: (t) => (out += `${t}\n`), err: (t) => (err += `${t}\n`) };
-  const code = await runCli(argv, io);
-  return { code, out, err };
-}
 
 /** Cornell et al. (1979) as Baker (2008) states it: mean ln PGA = −0.152 + 0.859 M − 1.803 ln(R + 25), σ = 0.57. */
 const cornellLnPga = (m: number, rKm: number) => -0.152 + 0.859 * m - 1.803 * Math.log(rKm + 25);

@@ -2,19 +2,11 @@ import { mkdtemp, readFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { runCli } from '../../api/cli.ts';
-import type { Io } from '../../api/cli/output.ts';
+import { runCapturing as run } from './helpers/run-cli.ts';
 
 // The tiny invented study (one point source under one village, Cornell79), mapped over a small box.
 const TINY = new URL('fixtures/tiny.study.json', import.meta.url).pathname;
 const BOX = '-140.2,-47.1,-139.8,-46.9';
-
-async function run(...argv: string[]): Promise<{ code: number; out: string; err: string }> {
-  let out = '';
-  let err = '';
-  const io: Io = { out: (t) => (out += `${t}\n`), err: (t) => (err += `${t}\n`) };
-  return { code: await runCli(argv, io), out, err };
-}
 
 /** The checks of RFC 7946 a map's file must pass, and the properties Tremora promises on each point. */
 function expectMapGeoJson(doc: any, unit: string): void {

@@ -2,20 +2,11 @@ import { copyFile, mkdtemp, readFile, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { runCli } from '../../api/cli.ts';
-import type { Io } from '../../api/cli/output.ts';
+import { runCapturing as run } from './helpers/run-cli.ts';
 
 const TINY = new URL('fixtures/tiny.study.json', import.meta.url).pathname;
 const DEMO = new URL('../../data-demo/demo.study.json', import.meta.url).pathname;
 const DEMO_TERRAIN = new URL('../../data-demo/demo-terrain.asc', import.meta.url).pathname;
-
-async function run(...argv: string[]): Promise<{ code: number; out: string; err: string }> {
-  let out = '';
-  let err = '';
-  const io: Io = { out: (t) => (out += `${t}\n`), err: (t) => (err += `${t}\n`) };
-  const code = await runCli(argv, io);
-  return { code, out, err };
-}
 
 describe('tremora tsunami', () => {
   it('lists every coastal community of the demo with its id and first arrival in whole minutes (--json)', async () => {
