@@ -156,19 +156,12 @@ describe('tremora motion --json', () => {
     // Default intraslab hypocentral depth 60 km: Rhypo = sqrt(30² + 60²) = 67.08 km (geometry).
     expect(slab.out).toContain("distance in the model's equations: Rhypo (hypocentral) 67.1 km");
     expect(slab.out).toContain('Rhypo 67.1 km');
-    const iface = await run(
-      'motion',
-      '--model',
-      'AGA16',
-      '--magnitude',
-      '8',
-      '--rjb',
-      '0',
-      '--rrup',
-      '40',
-      '--setting',
-      'interface',
-    );
+    // An M 8 interface earthquake 40 km from the site (Rrup), right under it (Rjb 0).
+    const interfaceMotion = [
+      ...['motion', '--model', 'AGA16', '--magnitude', '8'],
+      ...['--rjb', '0', '--rrup', '40', '--setting', 'interface'],
+    ];
+    const iface = await run(...interfaceMotion);
     expect(iface.out).toContain("distance in the model's equations: Rrup 40 km");
     const assumed = iface.out.split('\n').find((l) => l.startsWith('assumed:')) ?? '';
     // Abrahamson et al. (2016) interface equations read M, Rrup and Vs30 only.
@@ -177,24 +170,7 @@ describe('tremora motion --json', () => {
     expect(iface.out).toMatch(
       /PGV .*derived, not predicted by the model: PGV derived from SA\(0\.5 s\) \/ 20 \(Bommer & Alarcón 2006\)/,
     );
-    const json = JSON.parse(
-      (
-        await run(
-          'motion',
-          '--model',
-          'AGA16',
-          '--magnitude',
-          '8',
-          '--rjb',
-          '0',
-          '--rrup',
-          '40',
-          '--setting',
-          'interface',
-          '--json',
-        )
-      ).out,
-    );
+    const json = JSON.parse((await run(...interfaceMotion, '--json')).out);
     expect(json.distanceUsed).toBe('rrupKm');
     expect(json.measures.PGV.derived).toMatch(/Bommer & Alarcón 2006/);
     expect(json.measures.PGA.derived).toBeNull();
