@@ -1,14 +1,13 @@
 import Database from 'better-sqlite3';
-import { afterAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { INTERRUPTED_MESSAGE } from '../../api/store/run-repository.ts';
 import { expectRelative } from '../helpers/close.ts';
 import { expectError } from './helpers/assertions.ts';
 import { demoStudyId } from './helpers/runs.ts';
 import {
   jsonInit,
+  restartableService,
   type ServiceProcess,
-  startService,
-  tempDir,
   waitFor,
 } from './helpers/service-process.ts';
 import {
@@ -25,19 +24,7 @@ import {
  * interrupted. The small map's one value is checked against the published formula so the
  * map that survives is known to be the right one (small-study.ts, Cornell et al. 1979).
  */
-const dir = tempDir();
-const databasePath = `${dir.path}/maps.db`;
-const running: ServiceProcess[] = [];
-const start = async () => {
-  const service = await startService({ databasePath, env: { TREMORA_WORKERS: '1' } });
-  running.push(service);
-  return service;
-};
-afterAll(async () => {
-  for (const service of running)
-    if (service.child.exitCode === null && service.child.signalCode === null) await service.stop();
-  dir.remove();
-});
+const { databasePath, start } = restartableService('maps');
 
 type MapAnswer = {
   id: string;

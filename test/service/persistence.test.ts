@@ -1,25 +1,13 @@
 import Database from 'better-sqlite3';
-import { afterAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { INTERRUPTED_MESSAGE } from '../../api/store/run-repository.ts';
 import { expectError } from './helpers/assertions.ts';
 import { saveHeavyStudy } from './helpers/heavy-study.ts';
 import { getRun, startRun, waitForStatus } from './helpers/runs.ts';
-import { jsonInit, type ServiceProcess, startService, tempDir } from './helpers/service-process.ts';
+import { jsonInit, restartableService } from './helpers/service-process.ts';
 import { smallStudy } from './helpers/small-study.ts';
 
-const dir = tempDir();
-const databasePath = `${dir.path}/persist.db`;
-const running: ServiceProcess[] = [];
-const start = async () => {
-  const service = await startService({ databasePath, env: { TREMORA_WORKERS: '1' } });
-  running.push(service);
-  return service;
-};
-afterAll(async () => {
-  for (const service of running)
-    if (service.child.exitCode === null && service.child.signalCode === null) await service.stop();
-  dir.remove();
-});
+const { databasePath, start } = restartableService('persist');
 
 const integrity = (): string => {
   const db = new Database(databasePath, { readonly: true });

@@ -165,3 +165,30 @@ export function serviceForFile(name: string): ServiceProcess {
     kill: () => current().kill(),
   };
 }
+
+/**
+ * Services started one after another on one database kept for a test file (`<name>.db` in a
+ * temporary folder), as a restart after a crash would find it: `start` starts one with a
+ * single worker thread; after the file's tests, any still alive is stopped and the folder
+ * removed.
+ */
+export function restartableService(name: string): {
+  readonly databasePath: string;
+  readonly start: () => Promise<ServiceProcess>;
+} {
+  const dir = tempDir();
+  const databasePath = join(dir.path, `${name}.db`);
+  const running: ServiceProcess[] = [];
+  afterAll(async () => {
+    for (const service of running)
+      if (service.child.exitCode === null && service.child.signalCode === null)
+        await service.stop();
+    dir.remove();
+  });
+  const start = async (): Promise<ServiceProcess> => {
+    const service = await startService({ databasePath, env: { TREMORA_WORKERS: '1' } });
+    running.push(service);
+    return service;
+  };
+  return { databasePath, start };
+}
