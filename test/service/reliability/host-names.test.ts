@@ -1,11 +1,6 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { afterAll, describe, expect, test } from 'vitest';
 import { readConfig } from '../../../api/service/config.ts';
-import {
-  jsonInit,
-  type ServiceProcess,
-  startService,
-  tempDir,
-} from '../helpers/service-process.ts';
+import { jsonInit, serviceForFile } from '../helpers/service-process.ts';
 import { smallStudy } from '../helpers/small-study.ts';
 import { closeClient, send, type Answer } from './http-client.ts';
 
@@ -14,17 +9,8 @@ import { closeClient, send, type Answer } from './http-client.ts';
  * 127.0.0.1 sends requests that say its own name in Host and Origin. The tokenless loopback
  * service must answer them 421 and change nothing; its own names keep working.
  */
-const dir = tempDir();
-let service: ServiceProcess;
-
-beforeAll(async () => {
-  service = await startService({ databasePath: `${dir.path}/hosts.db` });
-});
-afterAll(async () => {
-  await service?.stop();
-  closeClient();
-  dir.remove();
-});
+const service = serviceForFile('hosts');
+afterAll(() => closeClient());
 
 const port = () => new URL(service.url).port;
 const studyCount = async () =>
