@@ -1,25 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { expectError } from './helpers/assertions.ts';
-import { jsonInit, type ServiceProcess, startService, tempDir } from './helpers/service-process.ts';
+import { jsonInit, serviceForFile } from './helpers/service-process.ts';
 import { smallStudy } from './helpers/small-study.ts';
 
 /**
  * The work budget (api/operations/work-budget.ts) against a started service whose budget is set
  * below the small study's work (1 community x 1 rupture x 3 levels = 3).
  */
-const dir = tempDir();
-let service: ServiceProcess;
-
-beforeAll(async () => {
-  service = await startService({
-    databasePath: `${dir.path}/budget.db`,
-    env: { TREMORA_WORK_BUDGET: '2' },
-  });
-});
-afterAll(async () => {
-  await service?.stop();
-  dir.remove();
-});
+const service = serviceForFile('budget', { TREMORA_WORK_BUDGET: '2' });
 
 const EXPECTED_ERROR =
   'study is too large: 1 community x 1 rupture x 3 levels (over 1 measure) = 3, over the budget of 2';

@@ -134,11 +134,12 @@ export const jsonInit = (
 });
 
 /**
- * A service of its own for one test file: started in a temporary folder before the file's
- * tests (database `<name>.db`) and stopped, folder removed, after them. The object answers for
+ * A service of its own for one test file (or describe block): started in a temporary folder
+ * before its tests (database `<name>.db`, with `env` added to the environment) and stopped,
+ * folder removed, after them. The object answers for
  * the started process once the tests run.
  */
-export function serviceForFile(name: string): ServiceProcess {
+export function serviceForFile(name: string, env?: Record<string, string>): ServiceProcess {
   const dir = tempDir();
   let started: ServiceProcess | undefined;
   const current = (): ServiceProcess => {
@@ -146,7 +147,7 @@ export function serviceForFile(name: string): ServiceProcess {
     return started;
   };
   beforeAll(async () => {
-    started = await startService({ databasePath: join(dir.path, `${name}.db`) });
+    started = await startService({ databasePath: join(dir.path, `${name}.db`), env });
   });
   afterAll(async () => {
     await started?.stop();

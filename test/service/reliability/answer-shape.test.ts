@@ -1,22 +1,13 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { CONTENT_SECURITY_POLICY } from '../../../api/service/security-headers.ts';
-import { type ServiceProcess, startService, tempDir } from '../helpers/service-process.ts';
+import { serviceForFile } from '../helpers/service-process.ts';
 import { type Answer, parseRawAnswer, sendRaw } from './http-client.ts';
 
 /**
  * Requests that Node or the hono adapter answer before the app sees them, and HEAD on the
  * API: every answer carries the security headers, and every refusal the one error shape.
  */
-const dir = tempDir();
-let service: ServiceProcess;
-
-beforeAll(async () => {
-  service = await startService({ databasePath: `${dir.path}/shape.db` });
-});
-afterAll(async () => {
-  await service?.stop();
-  dir.remove();
-});
+const service = serviceForFile('shape');
 
 async function raw(lines: string[]): Promise<Answer> {
   const text = await sendRaw(Number(new URL(service.url).port), `${lines.join('\r\n')}\r\n\r\n`);

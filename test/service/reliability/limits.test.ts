@@ -7,7 +7,7 @@ import { MAX_JSON_DEPTH } from '../../../api/study/json-text.ts';
 import { MAX_RUPTURES } from '../../../api/study/rupture-estimate.ts';
 import { MAX_STUDY_VERTICES, MAX_VERTICES } from '../../../api/study/source-geometry.ts';
 import { MAX_SOURCES } from '../../../api/study/source-schema.ts';
-import { type ServiceProcess, startService, tempDir } from '../helpers/service-process.ts';
+import { serviceForFile } from '../helpers/service-process.ts';
 import { smallStudy } from '../helpers/small-study.ts';
 import { answerProblem } from './answer-checks.ts';
 import { type Answer, closeClient, send } from './http-client.ts';
@@ -19,24 +19,17 @@ import { type Answer, closeClient, send } from './http-client.ts';
  * it is accepted. The limits are read from the code that keeps them.
  */
 
-const dir = tempDir('tremora-limits-');
-let service: ServiceProcess;
+const service = serviceForFile('limits', { TREMORA_WORKERS: '1' });
 let studyId: string;
 const figures: string[] = [];
 
 beforeAll(async () => {
-  service = await startService({
-    databasePath: `${dir.path}/limits.db`,
-    env: { TREMORA_WORKERS: '1' },
-  });
   const created = await post('/api/studies', smallStudy('Limits'));
   studyId = (JSON.parse(created.text) as { id: string }).id;
 });
-afterAll(async () => {
+afterAll(() => {
   closeClient();
   console.log(`limits (status, limit named in the answer):\n  ${figures.join('\n  ')}`);
-  await service?.stop();
-  dir.remove();
 });
 
 const utf8 = (text: string) => new TextEncoder().encode(text);

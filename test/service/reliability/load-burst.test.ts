@@ -1,11 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { MAX_RUPTURE_PLANES } from '../../../api/study/rupture-estimate.ts';
-import {
-  jsonInit,
-  type ServiceProcess,
-  startService,
-  tempDir,
-} from '../helpers/service-process.ts';
+import { jsonInit, serviceForFile } from '../helpers/service-process.ts';
 import { smallStudy } from '../helpers/small-study.ts';
 import { describeLoad, loadMix, startHeavyRun } from './load-mix.ts';
 
@@ -21,19 +16,8 @@ import { describeLoad, loadMix, startHeavyRun } from './load-mix.ts';
 const AMOUNTS = { health: 200, page: 24, compute: 4 } as const;
 const CONNECTIONS = 8;
 
-const dir = tempDir('tremora-load-');
-let service: ServiceProcess;
-beforeAll(async () => {
-  // Two run workers: one for the heavy run, one for the computes beside it.
-  service = await startService({
-    databasePath: `${dir.path}/load.db`,
-    env: { TREMORA_WORKERS: '2' },
-  });
-});
-afterAll(async () => {
-  await service?.stop();
-  dir.remove();
-});
+// Two run workers: one for the heavy run, one for the computes beside it.
+const service = serviceForFile('load', { TREMORA_WORKERS: '2' });
 
 /** A study whose fault trace zig-zags through `vertices` vertices 0.01 degrees apart, ruptures up to M 8. */
 function zigZagStudy(vertices: number): Record<string, unknown> {

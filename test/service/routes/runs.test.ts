@@ -1,15 +1,10 @@
 import Papa from 'papaparse';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import type { StudyResult } from '../../../api/engine/results.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 import { expectError, expectSecurityHeaders } from '../helpers/assertions.ts';
 import { demoStudyId, getRun, startRun, waitForStatus } from '../helpers/runs.ts';
-import {
-  jsonInit,
-  type ServiceProcess,
-  startService,
-  tempDir,
-} from '../helpers/service-process.ts';
+import { jsonInit, serviceForFile } from '../helpers/service-process.ts';
 import {
   COMMUNITY,
   EXCEEDANCE_AT_LEVELS,
@@ -19,22 +14,13 @@ import {
   smallStudy,
 } from '../helpers/small-study.ts';
 
-const dir = tempDir();
-let service: ServiceProcess;
+// One worker, so a second run waits behind the first whatever the machine's cores.
+const service = serviceForFile('runs', { TREMORA_WORKERS: '1' });
 let studyId: string;
 
 beforeAll(async () => {
-  // One worker, so a second run waits behind the first whatever the machine's cores.
-  service = await startService({
-    databasePath: `${dir.path}/runs.db`,
-    env: { TREMORA_WORKERS: '1' },
-  });
   const created = await service.fetch('/api/studies', jsonInit('POST', smallStudy('Run me')));
   studyId = ((await created.json()) as { id: string }).id;
-});
-afterAll(async () => {
-  await service?.stop();
-  dir.remove();
 });
 
 const results = async (runId: string): Promise<{ response: Response; text: string }> => {
