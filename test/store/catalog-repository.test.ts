@@ -1,5 +1,6 @@
 import Database from 'better-sqlite3';
 import { beforeEach, describe, expect, it } from 'vitest';
+import { openStore } from '../../api/store/store.ts';
 import { CatalogRepository, type StudyCatalogWrite } from '../../api/store/catalog-repository.ts';
 import { migrate, readMigrations } from '../../api/store/migrate.ts';
 import { StudyRepository } from '../../api/store/study-repository.ts';
@@ -9,11 +10,7 @@ let catalogs: CatalogRepository;
 let studies: StudyRepository;
 
 beforeEach(() => {
-  db = new Database(':memory:');
-  db.pragma('foreign_keys = ON');
-  migrate(db);
-  studies = new StudyRepository(db);
-  catalogs = new CatalogRepository(db);
+  ({ db, catalogs, studies } = openStore(':memory:'));
 });
 
 // Kept byte for byte: a BOM, CRLF line ends and a trailing blank line.

@@ -1,19 +1,17 @@
 import Database from 'better-sqlite3';
 import { beforeEach, describe, expect, it } from 'vitest';
-import { migrate } from '../../api/store/migrate.ts';
-import { RunRepository } from '../../api/store/run-repository.ts';
-import { StudyRepository } from '../../api/store/study-repository.ts';
+import { openStore } from '../../api/store/store.ts';
+import { type RunRepository } from '../../api/store/run-repository.ts';
+import { type StudyRepository } from '../../api/store/study-repository.ts';
 
 let db: Database.Database;
 let runs: RunRepository;
+let studies: StudyRepository;
 let studyId: string;
 
 beforeEach(() => {
-  db = new Database(':memory:');
-  db.pragma('foreign_keys = ON');
-  migrate(db);
-  runs = new RunRepository(db);
-  studyId = new StudyRepository(db).create({ name: 'S', document: '{}' }).id;
+  ({ db, runs, studies } = openStore(':memory:'));
+  studyId = studies.create({ name: 'S', document: '{}' }).id;
 });
 
 const outputs = {

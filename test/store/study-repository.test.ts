@@ -1,17 +1,14 @@
 import Database from 'better-sqlite3';
 import { beforeEach, describe, expect, it } from 'vitest';
-import { migrate } from '../../api/store/migrate.ts';
+import { openStore } from '../../api/store/store.ts';
 import { RunRepository } from '../../api/store/run-repository.ts';
-import { StudyRepository } from '../../api/store/study-repository.ts';
+import { type StudyRepository } from '../../api/store/study-repository.ts';
 
 let db: Database.Database;
 let studies: StudyRepository;
 
 beforeEach(() => {
-  db = new Database(':memory:');
-  db.pragma('foreign_keys = ON');
-  migrate(db);
-  studies = new StudyRepository(db);
+  ({ db, studies } = openStore(':memory:'));
 });
 
 describe('StudyRepository', () => {

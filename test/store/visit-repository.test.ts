@@ -1,19 +1,13 @@
-import Database from 'better-sqlite3';
 import { beforeEach, describe, expect, it } from 'vitest';
-import { migrate } from '../../api/store/migrate.ts';
-import { StudyRepository } from '../../api/store/study-repository.ts';
-import { VisitRepository, type VisitWrite } from '../../api/store/visit-repository.ts';
+import { openStore } from '../../api/store/store.ts';
+import { type StudyRepository } from '../../api/store/study-repository.ts';
+import { type VisitRepository, type VisitWrite } from '../../api/store/visit-repository.ts';
 
-let db: Database.Database;
 let studies: StudyRepository;
 let visits: VisitRepository;
 
 beforeEach(() => {
-  db = new Database(':memory:');
-  db.pragma('foreign_keys = ON');
-  migrate(db);
-  studies = new StudyRepository(db);
-  visits = new VisitRepository(db);
+  ({ studies, visits } = openStore(':memory:'));
 });
 
 const visit = (overrides: Partial<VisitWrite> = {}): VisitWrite => ({
