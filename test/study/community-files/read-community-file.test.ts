@@ -14,6 +14,10 @@ import {
   zipBytes,
 } from './fixtures.ts';
 
+/** The two villages every format's fixture holds, where each file puts them. */
+const NORTH_COVE = { id: 'north-cove', name: 'North Cove', lon: -140.5, lat: -47.25 } as const;
+const RIDGE_CAMP = { id: 'ridge-camp', name: 'Ridge Camp', lon: -140.75, lat: -47.5 } as const;
+
 const utf8 = (s: string) => new TextEncoder().encode(s);
 
 /** Reads a file as a study's `communities` would be: its rows' problems and the valid communities. */
@@ -48,10 +52,7 @@ describe('communities from CSV', () => {
     expect(problems).toEqual([]);
     expect(communities).toEqual([
       {
-        id: 'north-cove',
-        name: 'North Cove',
-        lon: -140.5,
-        lat: -47.25,
+        ...NORTH_COVE,
         vs30: 260,
         vs30Basis: 'site-class',
         siteClass: 'D',
@@ -60,10 +61,7 @@ describe('communities from CSV', () => {
         details: { School: 'yes' },
       },
       {
-        id: 'ridge-camp',
-        name: 'Ridge Camp',
-        lon: -140.75,
-        lat: -47.5,
+        ...RIDGE_CAMP,
         vs30: 530,
         vs30Basis: 'site-class',
         siteClass: 'C',
@@ -147,10 +145,7 @@ describe('communities from XLSX', () => {
     expect(problems).toEqual([]);
     expect(communities).toEqual([
       {
-        id: 'north-cove',
-        name: 'North Cove',
-        lon: -140.5,
-        lat: -47.25,
+        ...NORTH_COVE,
         vs30: 380,
         vs30Basis: 'measured',
         population: 300,
@@ -158,10 +153,7 @@ describe('communities from XLSX', () => {
         details: { Clinic: 'weekly' },
       },
       {
-        id: 'ridge-camp',
-        name: 'Ridge Camp',
-        lon: -140.75,
-        lat: -47.5,
+        ...RIDGE_CAMP,
         vs30: 760,
         vs30Basis: 'measured',
         population: 40,
@@ -206,10 +198,7 @@ describe('communities from KML and KMZ', () => {
     expect(problems).toEqual([]);
     expect(communities).toEqual([
       {
-        id: 'north-cove',
-        name: 'North Cove',
-        lon: -140.5,
-        lat: -47.25,
+        ...NORTH_COVE,
         vs30: 380,
         vs30Basis: 'measured',
         population: 300,
@@ -217,10 +206,7 @@ describe('communities from KML and KMZ', () => {
         details: { airstrip: 'grass, 600 m' },
       },
       {
-        id: 'ridge-camp',
-        name: 'Ridge Camp',
-        lon: -140.75,
-        lat: -47.5,
+        ...RIDGE_CAMP,
         vs30: 530,
         vs30Basis: 'site-class',
         siteClass: 'C',
@@ -384,10 +370,7 @@ describe('communities from GeoJSON', () => {
     const { communities, problems } = await read(utf8(JSON.stringify(fc)), 'villages.geojson');
     expect(communities).toEqual([
       {
-        id: 'north-cove',
-        name: 'North Cove',
-        lon: -140.5,
-        lat: -47.25,
+        ...NORTH_COVE,
         vs30: 260,
         vs30Basis: 'site-class',
         siteClass: 'D',
