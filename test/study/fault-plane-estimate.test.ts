@@ -1,6 +1,5 @@
 import { describe, expect, test } from 'vitest';
 import { frameForStudy } from '../../api/engine/geometry/projection.ts';
-import { magnitudeBins } from '../../api/engine/recurrence/magnitude-bins.ts';
 import { treeMagnitudeBins } from '../../api/engine/recurrence/tree-magnitude-bins.ts';
 import { placeRuptures, prepareSource } from '../../api/engine/ruptures/placement.ts';
 import { modelCatalog } from '../../api/engine/motion/registry.ts';
@@ -29,6 +28,24 @@ function studyWithTrace(trace: number[][]): Record<string, any> {
   return study;
 }
 
+/**
+ * The fault's planes as faultPlaneCount estimates them, and as the engine builds them: every
+ * rupture of every magnitude bin the engine places (the union of a logic tree's alternatives).
+ */
+function planeCounts(raw: Record<string, any>): { estimated: number; built: number } {
+  const loaded = loadStudy(raw, { models: modelCatalog });
+  if (!loaded.ok) throw new Error(JSON.stringify(loaded.issues));
+  const { study } = loaded;
+  const fault = study.sources[0] as FaultSource;
+  const prepared = prepareSource(fault, 0, frameForStudy(study), study.settings);
+  let built = 0;
+  for (const magnitude of treeMagnitudeBins(fault.recurrence, study.settings).magnitudes) {
+    for (const rupture of placeRuptures(prepared, magnitude))
+      built += rupture.surface.kind === 'planes' ? rupture.surface.planes.length : 1;
+  }
+  return { estimated: faultPlaneCount(fault, study.settings), built };
+}
+
 describe('faultPlaneCount', () => {
   for (const [name, trace] of [
     [
@@ -50,19 +67,7 @@ describe('faultPlaneCount', () => {
     ['a zig-zag of 40 vertices', zigZag(40, 0.02)],
   ] as const) {
     test(`counts the planes the engine builds: ${name}`, () => {
-      const loaded = loadStudy(studyWithTrace(trace as unknown as number[][]), {
-        models: modelCatalog,
-      });
-      if (!loaded.ok) throw new Error(JSON.stringify(loaded.issues));
-      const { study } = loaded;
-      const fault = study.sources[0] as FaultSource;
-      const prepared = prepareSource(fault, 0, frameForStudy(study), study.settings);
-      let built = 0;
-      for (const magnitude of magnitudeBins(fault.recurrence, study.settings).magnitudes) {
-        for (const rupture of placeRuptures(prepared, magnitude))
-          built += rupture.surface.kind === 'planes' ? rupture.surface.planes.length : 1;
-      }
-      const estimated = faultPlaneCount(fault, study.settings);
+      const { estimated, built } = planeCounts(studyWithTrace(trace as unknown as number[][]));
       console.log(`${name}: ${estimated} planes estimated, ${built} built`);
       // Lengths differ between turf's sphere and the local frame by far less than a segment,
       // so a rupture end may rarely fall on the other side of a joint: within 1%.
@@ -81,17 +86,7 @@ describe('faultPlaneCount', () => {
         { value: 7.65, weight: 0.5 },
       ],
     };
-    const loaded = loadStudy(raw, { models: modelCatalog });
-    if (!loaded.ok) throw new Error(JSON.stringify(loaded.issues));
-    const { study } = loaded;
-    const fault = study.sources[0] as FaultSource;
-    const prepared = prepareSource(fault, 0, frameForStudy(study), study.settings);
-    let built = 0;
-    for (const magnitude of treeMagnitudeBins(fault.recurrence, study.settings).magnitudes) {
-      for (const rupture of placeRuptures(prepared, magnitude))
-        built += rupture.surface.kind === 'planes' ? rupture.surface.planes.length : 1;
-    }
-    const estimated = faultPlaneCount(fault, study.settings);
+    const { estimated, built } = planeCounts(raw);
     expect(Math.abs(estimated - built)).toBeLessThanOrEqual(Math.ceil(built * 0.01));
   });
 
