@@ -19,17 +19,20 @@ NODATA_value -9999
 50 55 60 65
 `;
 
+/** The plane fixture's frame: 4 columns by 3 rows of 0.5° cells, north-west corner at 140° W, 45.5° S. */
+const PLANE_GRID = {
+  columns: 4,
+  rows: 3,
+  west: -140,
+  north: -45.5,
+  cellWidth: 0.5,
+  cellHeight: 0.5,
+} as const;
+
 describe('ESRI ASCII grid', () => {
   it('reads the header, the rows north first and nodata as missing, and samples bilinearly', () => {
     const grid = readEsriAscii(ASCII, 'plane.asc', { kind: 'lonlat' });
-    expect(grid).toMatchObject({
-      columns: 4,
-      rows: 3,
-      west: -140,
-      north: -45.5,
-      cellWidth: 0.5,
-      cellHeight: 0.5,
-    });
+    expect(grid).toMatchObject(PLANE_GRID);
     // Cell centres: first row at lat -45.75, first column at lon -139.75.
     expect(elevationAt(grid, -139.75, -45.75)).toBe(-50);
     expect(elevationAt(grid, -138.25, -46.25)).toBeNull();
@@ -105,15 +108,7 @@ describe('GeoTIFF grid', () => {
   it('reads a georeferenced WGS84 GeoTIFF like the same ESRI ASCII grid', async () => {
     const bytes = tiff({ GeographicTypeGeoKey: 4326, GTModelTypeGeoKey: 2 });
     const grid = await readGeoTiff(bytes, 'plane.tif');
-    expect(grid).toMatchObject({
-      columns: 4,
-      rows: 3,
-      west: -140,
-      north: -45.5,
-      cellWidth: 0.5,
-      cellHeight: 0.5,
-      crs: { kind: 'lonlat' },
-    });
+    expect(grid).toMatchObject({ ...PLANE_GRID, crs: { kind: 'lonlat' } });
     expectClose(
       elevationAt(grid, -139.5, -46.0) as number,
       -22.5,
