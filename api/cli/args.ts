@@ -1,4 +1,40 @@
+import { parseArgs } from 'node:util';
 import { UsageError } from './output.ts';
+
+/** A verb's options as read: text, on/off, and options that may be given more than once. */
+export type VerbValues<S extends string, B extends string, L extends string> = {
+  readonly [K in S]?: string;
+} & { readonly [K in B]?: boolean } & { readonly [K in L]?: string[] };
+
+/**
+ * A verb's arguments read strictly (node:util parseArgs): an option not named here is a usage
+ * error, as is a file name for a verb that takes none (`positionals: false`).
+ */
+export function verbArgs<
+  const S extends string = never,
+  const B extends string = never,
+  const L extends string = never,
+>(
+  args: readonly string[],
+  options: {
+    readonly strings?: readonly S[];
+    readonly booleans?: readonly B[];
+    readonly lists?: readonly L[];
+    readonly positionals?: boolean;
+  },
+): { values: VerbValues<S, B, L>; positionals: string[] } {
+  const config: Record<string, { type: 'string' | 'boolean'; multiple?: boolean }> = {};
+  for (const name of options.strings ?? []) config[name] = { type: 'string' };
+  for (const name of options.booleans ?? []) config[name] = { type: 'boolean' };
+  for (const name of options.lists ?? []) config[name] = { type: 'string', multiple: true };
+  const parsed = parseArgs({
+    args: [...args],
+    options: config,
+    allowPositionals: options.positionals ?? true,
+    strict: true,
+  });
+  return { values: parsed.values as VerbValues<S, B, L>, positionals: parsed.positionals };
+}
 
 /** A numeric option: absent → undefined; present but not a finite number → a usage error naming it. */
 export function numberOption(values: Record<string, unknown>, name: string): number | undefined {

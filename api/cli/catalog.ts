@@ -1,6 +1,5 @@
 import { readFile } from 'node:fs/promises';
 import { basename } from 'node:path';
-import { parseArgs } from 'node:util';
 import { fitCatalog, type CatalogFit, type FitOptionNames } from '../catalog/catalog-fit.ts';
 import { readCatalogText } from '../catalog/catalog-input.ts';
 import { catalogFitJson, catalogLoadJson, feltJson, isoTime } from '../catalog/catalog-json.ts';
@@ -21,7 +20,7 @@ import { mmiRoman } from '../engine/intensity/mmi-roman.ts';
 import { modelCatalog } from '../engine/motion/registry.ts';
 import { parseJsonText } from '../study/json-text.ts';
 import type { CompletenessPeriod } from '../engine/catalog/completeness-periods.ts';
-import { numberOption, sig } from './args.ts';
+import { numberOption, sig, verbArgs } from './args.ts';
 import { loadStudyForVerb } from './load.ts';
 import { EXIT_OK, type Io, UsageError } from './output.ts';
 
@@ -111,21 +110,9 @@ async function readCatalogFile(path: string): Promise<CatalogLoad> {
 }
 
 async function fitVerb(args: readonly string[], io: Io): Promise<number> {
-  const { values, positionals } = parseArgs({
-    args: [...args],
-    options: {
-      polygon: { type: 'string' },
-      'm-max': { type: 'string' },
-      'no-decluster': { type: 'boolean' },
-      'all-magnitudes': { type: 'boolean' },
-      convert: { type: 'string' },
-      start: { type: 'string' },
-      end: { type: 'string' },
-      periods: { type: 'string' },
-      json: { type: 'boolean' },
-    },
-    allowPositionals: true,
-    strict: true,
+  const { values, positionals } = verbArgs(args, {
+    strings: ['polygon', 'm-max', 'convert', 'start', 'end', 'periods'],
+    booleans: ['no-decluster', 'all-magnitudes', 'json'],
   });
   if (positionals.length !== 1)
     throw new UsageError('expected exactly one CATALOG file after "catalog fit"');
@@ -316,15 +303,9 @@ const warningLines = (warnings: readonly string[]): string[] => [
 ];
 
 async function feltVerb(args: readonly string[], io: Io): Promise<number> {
-  const { values, positionals } = parseArgs({
-    args: [...args],
-    options: {
-      community: { type: 'string' },
-      'all-magnitudes': { type: 'boolean' },
-      json: { type: 'boolean' },
-    },
-    allowPositionals: true,
-    strict: true,
+  const { values, positionals } = verbArgs(args, {
+    strings: ['community'],
+    booleans: ['all-magnitudes', 'json'],
   });
   if (positionals.length !== 2)
     throw new UsageError('expected a STUDY file and a CATALOG file after "catalog felt"');

@@ -1,7 +1,7 @@
-import { parseArgs } from 'node:util';
 import { modelCatalog } from '../engine/motion/registry.ts';
 import { readStudyFile } from '../study/read-study-file.ts';
 import { EXIT_BAD_INPUT, EXIT_OK, formatIssues, type Io, UsageError } from './output.ts';
+import { verbArgs } from './args.ts';
 
 export const CHECK_USAGE = `tremora check STUDY [--json]
 
@@ -9,12 +9,7 @@ Validates a study file (and the communities CSV it names) without computing anyt
 Prints that it is valid, or every problem with the path of the field; exits 2 on problems.`;
 
 export async function checkVerb(args: readonly string[], io: Io): Promise<number> {
-  const { values, positionals } = parseArgs({
-    args: [...args],
-    options: { json: { type: 'boolean' } },
-    allowPositionals: true,
-    strict: true,
-  });
+  const { values, positionals } = verbArgs(args, { booleans: ['json'] });
   if (positionals.length !== 1) throw new UsageError('expected exactly one STUDY file');
   const path = positionals[0] as string;
   const result = await readStudyFile(path, modelCatalog);

@@ -1,6 +1,5 @@
 import { createWriteStream, type WriteStream } from 'node:fs';
 import { availableParallelism } from 'node:os';
-import { parseArgs } from 'node:util';
 import type { MapPoint, MapQuantity } from '../engine/map/hazard-map.ts';
 import type { LonLatBounds } from '../engine/map/map-grid.ts';
 import {
@@ -16,7 +15,7 @@ import { queueUrlFrom } from '../queue/queue-setting.ts';
 import { hazardMapOnPool } from '../workers/parallel-map.ts';
 import { readTerrainFile, terrainBesideStudy } from '../terrain/index.ts';
 import { WorkerPool } from '../workers/worker-pool.ts';
-import { numberOption, requiredNumber, sig } from './args.ts';
+import { numberOption, requiredNumber, sig, verbArgs } from './args.ts';
 import { untilDoneOrInterrupted } from './interruptible.ts';
 import { loadStudyForVerb } from './load.ts';
 import { EXIT_OK, type Io, processIo, UsageError } from './output.ts';
@@ -93,22 +92,19 @@ function progressBar(
 }
 
 export async function mapVerb(args: readonly string[], io: Io): Promise<number> {
-  const { values, positionals } = parseArgs({
-    args: [...args],
-    options: {
-      measure: { type: 'string' },
-      'return-period': { type: 'string' },
-      level: { type: 'string' },
-      horizon: { type: 'string' },
-      spacing: { type: 'string' },
-      vs30: { type: 'string' },
-      bounds: { type: 'string' },
-      out: { type: 'string' },
-      threads: { type: 'string' },
-      json: { type: 'boolean' },
-    },
-    allowPositionals: true,
-    strict: true,
+  const { values, positionals } = verbArgs(args, {
+    strings: [
+      'measure',
+      'return-period',
+      'level',
+      'horizon',
+      'spacing',
+      'vs30',
+      'bounds',
+      'out',
+      'threads',
+    ],
+    booleans: ['json'],
   });
   if (positionals.length !== 1) throw new UsageError('expected exactly one STUDY file');
   const quantity = quantityOf(values);

@@ -1,7 +1,6 @@
-import { parseArgs } from 'node:util';
 import { modelCatalog } from '../engine/motion/registry.ts';
 import { probeMotion } from '../engine/motion/probe.ts';
-import { choiceOption, numberOption, requiredNumber, sig } from './args.ts';
+import { choiceOption, numberOption, requiredNumber, sig, verbArgs } from './args.ts';
 import { EXIT_OK, type Io } from './output.ts';
 
 export const MOTION_USAGE = `tremora motion --model NAME --magnitude M --rjb KM [options] [--json]
@@ -22,27 +21,26 @@ sigma in natural-log units.`;
 const DISTANCE_NAMES = { rjbKm: 'Rjb', rrupKm: 'Rrup', rhypoKm: 'Rhypo (hypocentral)' } as const;
 
 export async function motionVerb(args: readonly string[], io: Io): Promise<number> {
-  const { values } = parseArgs({
-    args: [...args],
-    options: {
-      model: { type: 'string' },
-      magnitude: { type: 'string' },
-      rjb: { type: 'string' },
-      rrup: { type: 'string' },
-      rx: { type: 'string' },
-      ry0: { type: 'string' },
-      rhypo: { type: 'string' },
-      vs30: { type: 'string' },
-      mechanism: { type: 'string' },
-      dip: { type: 'string' },
-      ztor: { type: 'string' },
-      width: { type: 'string' },
-      depth: { type: 'string' },
-      setting: { type: 'string' },
-      measures: { type: 'string' },
-      json: { type: 'boolean' },
-    },
-    strict: true,
+  const { values } = verbArgs(args, {
+    strings: [
+      'model',
+      'magnitude',
+      'rjb',
+      'rrup',
+      'rx',
+      'ry0',
+      'rhypo',
+      'vs30',
+      'mechanism',
+      'dip',
+      'ztor',
+      'width',
+      'depth',
+      'setting',
+      'measures',
+    ],
+    booleans: ['json'],
+    positionals: false,
   });
   const optional = <K extends string>(key: K, value: number | undefined) =>
     value === undefined ? {} : { [key]: value };

@@ -1,8 +1,7 @@
-import { parseArgs } from 'node:util';
 import { modelCatalog } from '../engine/motion/registry.ts';
 import { runScenario, type ScenarioRequest } from '../engine/scenario/index.ts';
 import type { ScenarioPosition } from '../engine/scenario/index.ts';
-import { numberOption, requiredNumber, sig } from './args.ts';
+import { numberOption, requiredNumber, sig, verbArgs } from './args.ts';
 import { loadStudyForVerb } from './load.ts';
 import { EXIT_OK, type Io, UsageError } from './output.ts';
 
@@ -23,22 +22,9 @@ in the middle of the source. Rrup is the shortest distance to the rupture surfac
 lie deep below). Screening estimates only, not design values.`;
 
 export async function scenarioVerb(args: readonly string[], io: Io): Promise<number> {
-  const { values, positionals } = parseArgs({
-    args: [...args],
-    options: {
-      source: { type: 'string' },
-      magnitude: { type: 'string' },
-      near: { type: 'string' },
-      middle: { type: 'boolean' },
-      along: { type: 'string' },
-      'down-dip': { type: 'string' },
-      lon: { type: 'string' },
-      lat: { type: 'string' },
-      grid: { type: 'string' },
-      json: { type: 'boolean' },
-    },
-    allowPositionals: true,
-    strict: true,
+  const { values, positionals } = verbArgs(args, {
+    strings: ['source', 'magnitude', 'near', 'along', 'down-dip', 'lon', 'lat', 'grid'],
+    booleans: ['middle', 'json'],
   });
   if (positionals.length !== 1) throw new UsageError('expected exactly one STUDY file');
   if (!values.source) throw new UsageError('--source is required');

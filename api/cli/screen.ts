@@ -1,5 +1,4 @@
 import { writeFile } from 'node:fs/promises';
-import { parseArgs } from 'node:util';
 import { modelCatalog } from '../engine/motion/registry.ts';
 import type { NearestFault, StudyResult, ZoneDepthReport } from '../engine/results.ts';
 import type { Study } from '../engine/model.ts';
@@ -14,7 +13,7 @@ import { buildProvenance } from '../results/provenance.ts';
 import { robustnessLine } from '../results/band-robustness-words.ts';
 import { runCsv } from '../results/run-csv.ts';
 import { TOOL_VERSION } from '../results/tool-version.ts';
-import { choiceOption, sig } from './args.ts';
+import { choiceOption, sig, verbArgs } from './args.ts';
 import { untilDoneOrInterrupted } from './interruptible.ts';
 import { loadStudyForVerb } from './load.ts';
 import { EXIT_OK, type Io, UsageError } from './output.ts';
@@ -61,11 +60,9 @@ function faultWhere(fault: NearestFault): string {
 }
 
 export async function screenVerb(args: readonly string[], io: Io): Promise<number> {
-  const { values, positionals } = parseArgs({
-    args: [...args],
-    options: { out: { type: 'string' }, format: { type: 'string' }, json: { type: 'boolean' } },
-    allowPositionals: true,
-    strict: true,
+  const { values, positionals } = verbArgs(args, {
+    strings: ['out', 'format'],
+    booleans: ['json'],
   });
   if (positionals.length !== 1) throw new UsageError('expected exactly one STUDY file');
   const format = choiceOption(values, 'format', ['json', 'csv'] as const) ?? 'json';

@@ -1,4 +1,3 @@
-import { parseArgs } from 'node:util';
 import { compassPoint } from '../engine/catalog/felt-history.ts';
 import { InvalidInput } from '../engine/errors.ts';
 import {
@@ -8,7 +7,7 @@ import {
   type TsunamiCommunity,
 } from '../engine/tsunami/index.ts';
 import { readTerrainFile, terrainBesideStudy } from '../terrain/index.ts';
-import { numberOption, sig } from './args.ts';
+import { numberOption, sig, verbArgs } from './args.ts';
 import { loadStudyForVerb } from './load.ts';
 import { EXIT_BAD_INPUT, EXIT_OK, type Io, UsageError } from './output.ts';
 
@@ -27,15 +26,10 @@ const CAUTION =
   'Rough screening estimates, not a warning. After strong or long shaking go to high ground at once; follow official warnings and local evacuation plans. A tsunami from a landslide can arrive sooner.';
 
 export async function tsunamiVerb(args: readonly string[], io: Io): Promise<number> {
-  const { values, positionals } = parseArgs({
-    args: [...args],
-    options: {
-      source: { type: 'string', multiple: true },
-      'high-ground': { type: 'string' },
-      json: { type: 'boolean' },
-    },
-    allowPositionals: true,
-    strict: true,
+  const { values, positionals } = verbArgs(args, {
+    strings: ['high-ground'],
+    booleans: ['json'],
+    lists: ['source'],
   });
   const path = positionals[0];
   if (positionals.length !== 1 || path === undefined)

@@ -1,8 +1,7 @@
 import { availableParallelism } from 'node:os';
-import { parseArgs } from 'node:util';
 import { QUEUE_SETTING, queueUrlFrom } from '../queue/queue-setting.ts';
 import { DEFAULT_LOCK_MS, startQueueWorker } from '../queue/queue-worker.ts';
-import { numberOption } from './args.ts';
+import { numberOption, verbArgs } from './args.ts';
 import { EXIT_OK, type Io, UsageError } from './output.ts';
 
 export const WORKER_USAGE = `tremora worker [--threads N]
@@ -27,13 +26,7 @@ export async function workerVerb(
   io: Io,
   until: () => Promise<string> = waitForStop,
 ): Promise<number> {
-  const { values, positionals } = parseArgs({
-    args: [...args],
-    options: { threads: { type: 'string' }, 'lock-ms': { type: 'string' } },
-    allowPositionals: false,
-    strict: true,
-  });
-  void positionals;
+  const { values } = verbArgs(args, { strings: ['threads', 'lock-ms'], positionals: false });
   const url = queueUrlFrom(process.env);
   if (url === undefined)
     throw new UsageError(
