@@ -25,6 +25,12 @@ export const EDGE_LENGTH_SQ = 40; // |edge|², 4
 export const EDGE_LENGTH_SQ_XY = 44; // |edge projected|², 4
 // 48 numbers per plane in all.
 
+/**
+ * Slack on a plane's box, km: far above the rounding of the distances measured to the plane (about
+ * 1e-12 km at 1,000 km), so a box farther than the nearest plane found so far is truly farther.
+ */
+const BOX_SLACK_KM = 1e-6;
+
 /** Relative slack of the rectangle tests: corners off a rectangle by less than this share of its size are rounding. */
 const RECTANGLE_SLACK = 1e-9;
 
@@ -38,6 +44,13 @@ export interface RuptureGeometry {
   readonly quads: Float64Array;
   /** Centre x, y and radius (km) of a circle holding each rupture's surface projection. */
   readonly bounds: Float64Array;
+  /**
+   * Per plane, a box (min x, y, z, then max x, y, z; km) holding every point its Rrup or Rjb can
+   * be measured to: its corners, widened by how far corner c2 lies off the plane of c0, c1 and
+   * c3 (the quadrilateral tests measure a plane's inside from that plane) and by BOX_SLACK_KM.
+   * A site farther from the box than from a plane already measured needs no more of this one.
+   */
+  readonly planeBox: Float64Array;
 }
 
 export function ruptureGeometry(table: RuptureTable): RuptureGeometry {
@@ -46,6 +59,7 @@ export function ruptureGeometry(table: RuptureTable): RuptureGeometry {
   const quadStart = new Int32Array(planeCount).fill(-1);
   const c = table.planeCorners;
   const quadList: number[] = [];
+  const planeBox = new Float64Array(planeCount * 6);
   for (let p = 0; p < planeCount; p++) {
     const at = p * PLANE_FIELDS;
     const cAt = p * PLANE_STRIDE;
@@ -61,6 +75,15 @@ export function ruptureGeometry(table: RuptureTable): RuptureGeometry {
     const nx = uy * vz - uz * vy,
       ny = uz * vx - ux * vz,
       nz = ux * vy - uy * vx;
+    const warpKm =
+      nx === 0 && ny === 0 && nz === 0
+        ? 0
+        : Math.abs(
+            ((c[cAt + 6] as number) - x0) * nx +
+              ((c[cAt + 7] as number) - y0) * ny +
+              ((c[cAt + 8] as number) - z0) * nz,
+          ) / Math.sqrt(nx * nx + ny * ny + nz * nz);
+    planeBounds(planeBox, p, c, cAt, warpKm + BOX_SLACK_KM);
     planes[at + ORIGIN] = x0;
     planes[at + ORIGIN + 1] = y0;
     planes[at + ORIGIN + 2] = z0;
@@ -119,7 +142,28 @@ export function ruptureGeometry(table: RuptureTable): RuptureGeometry {
     bounds[3 * i + 1] = cy;
     bounds[3 * i + 2] = Math.sqrt(radiusSq);
   }
-  return { table, planes, quadStart, quads: Float64Array.from(quadList), bounds };
+  return { table, planes, quadStart, quads: Float64Array.from(quadList), bounds, planeBox };
+}
+
+/** Writes plane p's box, its corners' extent widened by slackKm, to box at 6p. */
+function planeBounds(
+  box: Float64Array,
+  p: number,
+  c: Float64Array,
+  cAt: number,
+  slackKm: number,
+): void {
+  for (let axis = 0; axis < 3; axis++) {
+    let min = Infinity,
+      max = -Infinity;
+    for (let k = 0; k < 4; k++) {
+      const v = c[cAt + 3 * k + axis] as number;
+      min = Math.min(min, v);
+      max = Math.max(max, v);
+    }
+    box[6 * p + axis] = min - slackKm;
+    box[6 * p + 3 + axis] = max + slackKm;
+  }
 }
 
 /**

@@ -76,11 +76,59 @@ export interface SiteDistancesOptions {
   readonly distances: ReadonlySet<DistanceName>;
 }
 
-/** Rjb of a rupture's planes: 0 inside a plane's projection, else the nearest edge (km). */
+/**
+ * Squared distance (km²) from the site (px, py, 0) to plane p's box (RuptureGeometry.planeBox),
+ * or with `depth` false from its surface projection to the box's: no point the plane's Rrup
+ * (or Rjb) is measured to is nearer.
+ */
+function boxDistanceSq(
+  box: Float64Array,
+  p: number,
+  px: number,
+  py: number,
+  depth: boolean,
+): number {
+  const at = 6 * p;
+  const dx = Math.max((box[at] as number) - px, 0, px - (box[at + 3] as number));
+  const dy = Math.max((box[at + 1] as number) - py, 0, py - (box[at + 4] as number));
+  const dz = depth ? Math.max(box[at + 2] as number, 0) : 0;
+  return dx * dx + dy * dy + dz * dz;
+}
+
+/** The plane of first .. last − 1 with the nearest box (boxDistanceSq): measured first, the others are then passed over the more often. */
+function nearestBoxPlane(
+  box: Float64Array,
+  first: number,
+  last: number,
+  px: number,
+  py: number,
+  depth: boolean,
+): number {
+  let nearest = first;
+  if (last - first > 1) {
+    let nearestSq = Infinity;
+    for (let p = first; p < last; p++) {
+      const sq = boxDistanceSq(box, p, px, py, depth);
+      if (sq < nearestSq) {
+        nearestSq = sq;
+        nearest = p;
+      }
+    }
+  }
+  return nearest;
+}
+
+/**
+ * Rjb of a rupture's planes: 0 inside a plane's projection, else the nearest edge (km). Planes
+ * are passed over by their boxes as in rrupKm.
+ */
 function rjbKm(g: RuptureGeometry, first: number, last: number, px: number, py: number): number {
-  const { planes, quads } = g;
+  const { planes, quads, planeBox } = g;
+  const nearest = nearestBoxPlane(planeBox, first, last, px, py, false);
   let best = Infinity;
-  for (let p = first; p < last; p++) {
+  for (let n = first - 1; n < last; n++) {
+    const p = n < first ? nearest : n;
+    if (n >= first && (p === nearest || boxDistanceSq(planeBox, p, px, py, false) > best)) continue;
     const at = p * PLANE_FIELDS;
     const q = g.quadStart[p] as number;
     if (q < 0) {
@@ -125,11 +173,18 @@ function rjbKm(g: RuptureGeometry, first: number, last: number, px: number, py: 
   return Math.sqrt(best);
 }
 
-/** Rrup of a rupture's planes for a site at the surface (km). */
+/**
+ * Rrup of a rupture's planes for a site at the surface (km). A plane whose box lies farther than
+ * the nearest plane so far is passed over: its distance could not be the minimum, so the result
+ * is the one every plane's distance would give.
+ */
 function rrupKm(g: RuptureGeometry, first: number, last: number, px: number, py: number): number {
-  const { planes, quads } = g;
+  const { planes, quads, planeBox } = g;
+  const nearest = nearestBoxPlane(planeBox, first, last, px, py, true);
   let best = Infinity;
-  for (let p = first; p < last; p++) {
+  for (let n = first - 1; n < last; n++) {
+    const p = n < first ? nearest : n;
+    if (n >= first && (p === nearest || boxDistanceSq(planeBox, p, px, py, true) > best)) continue;
     const at = p * PLANE_FIELDS;
     const q = g.quadStart[p] as number;
     if (q < 0) {

@@ -199,14 +199,38 @@ export function cb14HangingWallTerm(row: Cb14Row, s: Cb14Scenario): number {
   );
 }
 
+/**
+ * What one row's site term and σ need of Vs30 alone: the same for every pair at one Vs30, so a
+ * map of one Vs30 works them out once per row (Cb14RuptureTerms.vs30Terms), not per pair.
+ */
+interface Cb14Vs30Terms {
+  vs30: number;
+  /** ln(Vs30 / k1). */
+  lnRatio: number;
+  /** c · exp(n · ln(Vs30 / k1)), of the nonlinear site term. */
+  siteShift: number;
+  /** c · (Vs30 / k1)^n, of the nonlinear correction of σ. */
+  sigmaShift: number;
+}
+
+const vs30TermsOf = (row: Cb14Row, vs30: number): Cb14Vs30Terms => {
+  const lnRatio = Math.log(vs30 / row.k1);
+  return {
+    vs30,
+    lnRatio,
+    siteShift: K.c * Math.exp(K.n * lnRatio),
+    sigmaShift: K.c * (vs30 / row.k1) ** K.n,
+  };
+};
+
 /** f_site (ln units) for Vs30 in m/s and A1100 in g (the Japan term off). */
 export function cb14SiteTerm(row: Cb14Row, vs30: number, a1100G: number): number {
-  const lnRatio = Math.log(vs30 / row.k1);
-  if (vs30 > row.k1) return (row.c11 + row.k2 * K.n) * lnRatio;
-  return (
-    row.c11 * lnRatio +
-    row.k2 * (Math.log(a1100G + K.c * Math.exp(K.n * lnRatio)) - Math.log(a1100G + K.c))
-  );
+  return siteTermOf(row, vs30TermsOf(row, vs30), a1100G);
+}
+
+function siteTermOf(row: Cb14Row, v: Cb14Vs30Terms, a1100G: number): number {
+  if (v.vs30 > row.k1) return (row.c11 + row.k2 * K.n) * v.lnRatio;
+  return row.c11 * v.lnRatio + row.k2 * (Math.log(a1100G + v.siteShift) - Math.log(a1100G + K.c));
 }
 
 /** The paper's California default depth to Vs = 2.5 km/s (km) for Vs30 in m/s. */
@@ -281,20 +305,29 @@ const ROCK_SITE_LN =
 const rampM = (m: number, small: number, large: number): number =>
   m <= 4.5 ? small : m >= 5.5 ? large : large + (small - large) * (5.5 - m);
 
-/** The magnitude-ramped τ and φ of a row and of the PGA row (ln units): what σ needs of the rupture. */
+/**
+ * The magnitude-ramped τ and φ of a row and of the PGA row (ln units), and the φ of each with
+ * the site's own variability φ_lnAF taken out: what σ needs of the rupture.
+ */
 interface Cb14SigmaTerms {
   readonly tauY: number;
   readonly phiY: number;
   readonly tauPga: number;
-  readonly phiPga: number;
+  readonly phiYB: number;
+  readonly phiPgaB: number;
 }
 
-const sigmaTerms = (row: Cb14Row, m: number): Cb14SigmaTerms => ({
-  tauY: rampM(m, row.tau1, row.tau2),
-  phiY: rampM(m, row.phi1, row.phi2),
-  tauPga: rampM(m, CB14_PGA.tau1, CB14_PGA.tau2),
-  phiPga: rampM(m, CB14_PGA.phi1, CB14_PGA.phi2),
-});
+function sigmaTerms(row: Cb14Row, m: number): Cb14SigmaTerms {
+  const phiY = rampM(m, row.phi1, row.phi2);
+  const phiPga = rampM(m, CB14_PGA.phi1, CB14_PGA.phi2);
+  return {
+    tauY: rampM(m, row.tau1, row.tau2),
+    phiY,
+    tauPga: rampM(m, CB14_PGA.tau1, CB14_PGA.tau2),
+    phiYB: Math.sqrt(Math.max(phiY * phiY - row.phiLnAF * row.phiLnAF, 0)),
+    phiPgaB: Math.sqrt(Math.max(phiPga * phiPga - CB14_PGA.phiLnAF * CB14_PGA.phiLnAF, 0)),
+  };
+}
 
 /** τ, φ and σ (ln units) of a row, with the nonlinear-site correction for Vs30 (m/s) below k1. */
 export function cb14Sigma(
@@ -303,30 +336,26 @@ export function cb14Sigma(
   vs30: number,
   a1100G: number,
 ): { tau: number; phi: number; sigma: number } {
-  return sigmaInto(row, sigmaTerms(row, m), vs30, a1100G, emptyPairPrediction());
+  return sigmaInto(row, sigmaTerms(row, m), vs30TermsOf(row, vs30), a1100G, emptyPairPrediction());
 }
 
 /** cb14Sigma written into `out` from the rupture's ramped values. */
 function sigmaInto(
   row: Cb14Row,
   t: Cb14SigmaTerms,
-  vs30: number,
+  v: Cb14Vs30Terms,
   a1100G: number,
   out: PairPrediction,
 ): PairPrediction {
-  const { tauY, phiY, tauPga } = t;
+  const { tauY, phiY, tauPga, phiYB, phiPgaB } = t;
   const alpha =
-    vs30 < row.k1
-      ? row.k2 * a1100G * (1 / (a1100G + K.c * (vs30 / row.k1) ** K.n) - 1 / (a1100G + K.c))
-      : 0;
+    v.vs30 < row.k1 ? row.k2 * a1100G * (1 / (a1100G + v.sigmaShift) - 1 / (a1100G + K.c)) : 0;
   if (alpha === 0) {
     out.tau = tauY;
     out.phi = phiY;
     out.sigma = hypot2(tauY, phiY);
     return out;
   }
-  const phiYB = Math.sqrt(Math.max(phiY * phiY - row.phiLnAF * row.phiLnAF, 0));
-  const phiPgaB = Math.sqrt(Math.max(t.phiPga * t.phiPga - CB14_PGA.phiLnAF * CB14_PGA.phiLnAF, 0));
   const tau = Math.sqrt(
     Math.max(tauY ** 2 + alpha ** 2 * tauPga ** 2 + 2 * alpha * row.rho * tauY * tauPga, 0),
   );
@@ -437,6 +466,11 @@ export interface Cb14RuptureTerms {
   readonly pgaHangingWallScale: number;
   readonly geometry: HangingWallGeometry;
   readonly sigma: Cb14SigmaTerms;
+  /**
+   * The Vs30 terms of the row and of the PGA row and the default Z2.5 (km) at the Vs30 last
+   * asked for: pairs follow one another at one site, so they are worked out once per site.
+   */
+  readonly vs30Terms: { row: Cb14Vs30Terms; pga: Cb14Vs30Terms; defaultZ2p5Km: number };
 }
 
 export function cb14RuptureTerms(
@@ -456,7 +490,23 @@ export function cb14RuptureTerms(
     pgaHangingWallScale,
     geometry: hangingWallGeometry(rupture),
     sigma: sigmaTerms(row, m),
+    vs30Terms: {
+      row: vs30TermsOf(row, Number.NaN),
+      pga: vs30TermsOf(CB14_PGA, Number.NaN),
+      defaultZ2p5Km: Number.NaN,
+    },
   };
+}
+
+/** t.vs30Terms at `vs30` (NaN at first, so worked out on the first pair). */
+function vs30TermsAt(t: Cb14RuptureTerms, vs30: number): Cb14RuptureTerms['vs30Terms'] {
+  const terms = t.vs30Terms;
+  if (terms.row.vs30 !== vs30) {
+    terms.row = vs30TermsOf(t.row, vs30);
+    terms.pga = vs30TermsOf(CB14_PGA, vs30);
+    terms.defaultZ2p5Km = cb14DefaultZ2p5Km(vs30);
+  }
+  return terms;
 }
 
 /**
@@ -472,7 +522,8 @@ export function cb14PairPrediction(
   const { row } = t;
   const m = t.rupture.magnitude;
   const { rrupKm, rxKm, vs30 } = pair;
-  const z2p5Km = pair.z2p5Km ?? cb14DefaultZ2p5Km(vs30);
+  const v = vs30TermsAt(t, vs30);
+  const z2p5Km = pair.z2p5Km ?? v.defaultZ2p5Km;
   const fRrup = rrupTaper(rrupKm, pair.rjbKm);
   const pgaHangingWall = hangingWallOfPair(
     CB14_PGA,
@@ -493,16 +544,16 @@ export function cb14PairPrediction(
           rrupKm,
           hangingWallOfPair(row, t.hangingWallScale, t.geometry, rxKm, fRrup),
         );
-  const unfloored = rockPath + cb14SiteTerm(row, vs30, a1100G) + cb14BasinTerm(row, z2p5Km);
+  const unfloored = rockPath + siteTermOf(row, v.row, a1100G) + cb14BasinTerm(row, z2p5Km);
   // CB14: at periods under 0.25 s the spectral acceleration is not allowed below PGA.
   out.lnMedian =
     row.periodS > 0 && row.periodS < 0.25
       ? Math.max(
           unfloored,
-          pgaRockPath + cb14SiteTerm(CB14_PGA, vs30, a1100G) + cb14BasinTerm(CB14_PGA, z2p5Km),
+          pgaRockPath + siteTermOf(CB14_PGA, v.pga, a1100G) + cb14BasinTerm(CB14_PGA, z2p5Km),
         )
       : unfloored;
-  return sigmaInto(row, t.sigma, vs30, a1100G, out);
+  return sigmaInto(row, t.sigma, v.row, a1100G, out);
 }
 
 /** The model as rupture terms and pair prediction, for the fast path (split-prepare.ts): the same functions predict() uses. */

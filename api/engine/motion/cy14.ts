@@ -113,6 +113,34 @@ export interface Cy14RuptureTerms {
   /** τ(M) and the magnitude part of σ_NL0, ln units. */
   readonly tau: number;
   readonly sigmaM: number;
+  /**
+   * The row's site terms that depend on Vs30 alone, at the Vs30 last asked for: pairs follow one
+   * another at one site, so they are worked out once per site.
+   */
+  readonly vs30Terms: Cy14Vs30Terms;
+}
+
+/** What one row's site terms need of Vs30 (and Z1) alone, ln units. */
+interface Cy14Vs30Terms {
+  vs30: number;
+  z1Km: number | undefined;
+  /** φ1 min(ln(Vs30 / 1130), 0). */
+  linear: number;
+  /** nonlinearStrength at Vs30. */
+  strength: number;
+  /** φ5 (1 − e^(−ΔZ1 / φ6)), ΔZ1 in m. */
+  basin: number;
+}
+
+function vs30TermsOf(row: Cy14Row, vs30: number, z1Km: number | undefined): Cy14Vs30Terms {
+  const deltaZ1M = z1Km === undefined ? 0 : (z1Km - cy14DefaultZ1Km(vs30)) * 1000;
+  return {
+    vs30,
+    z1Km,
+    linear: row.phi1 * Math.min(Math.log(vs30 / CY14_REFERENCE_VS30), 0),
+    strength: nonlinearStrength(row, vs30),
+    basin: row.phi5 * (1 - Math.exp(-deltaZ1M / row.phi6)),
+  };
 }
 
 /** E[Ztor] (km), the paper's expected depth to the top of rupture for the magnitude and mechanism. */
@@ -160,6 +188,7 @@ export function cy14RuptureTerms(row: Cy14Row, r: Cy14Rupture): Cy14RuptureTerms
     ztorKm: r.ztorKm,
     tau: row.tau1 + (row.tau2 - row.tau1) * share,
     sigmaM: row.sigma1 + (row.sigma2 - row.sigma1) * share,
+    vs30Terms: vs30TermsOf(row, Number.NaN, undefined),
   };
 }
 
@@ -201,16 +230,21 @@ export function cy14SiteTerm(
   yRef: number,
   z1Km: number | undefined,
 ): number {
-  const linear = row.phi1 * Math.min(Math.log(vs30 / CY14_REFERENCE_VS30), 0);
-  const nonlinear = nonlinearStrength(row, vs30) * Math.log((yRef + row.phi4) / row.phi4);
-  const deltaZ1M = z1Km === undefined ? 0 : (z1Km - cy14DefaultZ1Km(vs30)) * 1000;
-  return linear + nonlinear + row.phi5 * (1 - Math.exp(-deltaZ1M / row.phi6));
+  return siteTermOf(row, vs30TermsOf(row, vs30, z1Km), yRef);
+}
+
+function siteTermOf(row: Cy14Row, v: Cy14Vs30Terms, yRef: number): number {
+  const nonlinear = v.strength * Math.log((yRef + row.phi4) / row.phi4);
+  return v.linear + nonlinear + v.basin;
 }
 
 /** NL0 = ∂(site term)/∂ln y_ref, the nonlinear site term's response to the reference motion. */
 export function cy14SiteSlope(row: Cy14Row, vs30: number, yRef: number): number {
-  return (nonlinearStrength(row, vs30) * yRef) / (yRef + row.phi4);
+  return siteSlopeOf(row, nonlinearStrength(row, vs30), yRef);
 }
+
+const siteSlopeOf = (row: Cy14Row, strength: number, yRef: number): number =>
+  (strength * yRef) / (yRef + row.phi4);
 
 /** Median (ln units) and standard deviations of one row for one rupture–site pair, written into `out`. */
 export function cy14PairPrediction(
@@ -222,8 +256,11 @@ export function cy14PairPrediction(
   const { row } = t;
   const lnYRef = t.sourceLn + cy14PathTerm(t, d);
   const yRef = Math.exp(lnYRef);
-  const lnMedian = lnYRef + cy14SiteTerm(row, site.vs30, yRef, site.z1Km);
-  const onePlusNl0 = 1 + cy14SiteSlope(row, site.vs30, yRef);
+  let v = t.vs30Terms;
+  if (v.vs30 !== site.vs30 || v.z1Km !== site.z1Km)
+    v = Object.assign(v, vs30TermsOf(row, site.vs30, site.z1Km));
+  const lnMedian = lnYRef + siteTermOf(row, v, yRef);
+  const onePlusNl0 = 1 + siteSlopeOf(row, v.strength, yRef);
   const phi =
     t.sigmaM * Math.sqrt((site.vs30Measured ? 0.7 : row.sigma3) + onePlusNl0 * onePlusNl0);
   const tau = onePlusNl0 * t.tau;

@@ -194,6 +194,58 @@ describe('siteDistances (the fast path) against ruptureDistances (the reference)
     }
   });
 
+  it('gives Rrup within 1e-9 km over, beside and far from a contoured mesh and over warped planes, where planes are passed over by their boxes', () => {
+    const buffer = createPairBuffer(all.length);
+    // The contoured source spans about x 100–142, y 100–160 km; the warped planes x 0–20, y 0–10.
+    const sites = [
+      ...[100, 108, 115, 125, 135, 142].flatMap((x) =>
+        [100, 120, 131, 145, 160].map((y) => ({ x, y })),
+      ),
+      { x: 90, y: 130 },
+      { x: 160, y: 130 },
+      { x: 120, y: 80 },
+      { x: 118, y: 185 },
+      { x: 400, y: 130 },
+      { x: 120, y: -200 },
+      { x: 5, y: 5 },
+      { x: 12, y: 6 },
+      { x: 16, y: 5 },
+      { x: 19, y: 9 },
+    ];
+    for (const site of sites) {
+      siteDistances(
+        {
+          geometry,
+          ruptures: indices,
+          site,
+          maxDistanceKm: Infinity,
+          distances: new Set<DistanceName>(['rrupKm']),
+        },
+        buffer,
+      );
+      expect(buffer.count).toBe(all.length);
+      for (let k = 0; k < buffer.count; k++)
+        expectClose(
+          buffer.rrupKm[k]!,
+          ruptureDistances(all[k]!.surface, site).rrupKm,
+          TOLERANCE_KM,
+          `Rrup of rupture ${k} at (${site.x}, ${site.y}) km, geometry/distances.ts`,
+        );
+    }
+  });
+
+  it('holds every corner of every plane in its box', () => {
+    const { planeBox } = geometry;
+    const corners = table.planeCorners;
+    for (let p = 0; p < corners.length / 12; p++)
+      for (let k = 0; k < 4; k++)
+        for (let axis = 0; axis < 3; axis++) {
+          const v = corners[12 * p + 3 * k + axis]!;
+          expect(v).toBeGreaterThan(planeBox[6 * p + axis]!);
+          expect(v).toBeLessThan(planeBox[6 * p + 3 + axis]!);
+        }
+  });
+
   it("pairs a subset by its own indices (one setting's ruptures)", () => {
     const crustal = settingRuptures(table, 'crustal');
     const subset = crustal.subarray(0, 5);

@@ -2,7 +2,11 @@ import { describe, expect, it } from 'vitest';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import { cb14 } from '../../../api/engine/motion/cb14.ts';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
-import { checkPreparedMeasures, checkPreparedModel } from './prepared-checks.ts';
+import {
+  checkPreparedAcrossSites,
+  checkPreparedMeasures,
+  checkPreparedModel,
+} from './prepared-checks.ts';
 
 // The hook's numbers against predict() (cb14.ts); predict() itself is checked against the paper in cb14.test.ts.
 const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
@@ -22,6 +26,10 @@ describe('CB14 precomputation hook', () => {
       [{ kind: 'PGA' }, sa(0.2), sa(1), { kind: 'PGV' }, sa(0.1), sa(0.12), sa(2.5)],
       ['crustal', 'crustal', 'intraslab'],
     );
+  });
+
+  it("keeps giving predict()'s numbers, within 1e-12, when one prepared model meets sites of one Vs30 after another (its Vs30 terms are worked out once per Vs30)", () => {
+    checkPreparedAcrossSites(cb14, [{ kind: 'PGA' }, sa(0.1), sa(1)], 'crustal');
   });
 
   it('asks for Rrup, Rjb and Rx; refuses a bad dip and a period outside the table as predict does', () => {

@@ -2,7 +2,11 @@ import { describe, it } from 'vitest';
 import { ask14 } from '../../../api/engine/motion/ask14.ts';
 import { cy14 } from '../../../api/engine/motion/cy14.ts';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
-import { checkPreparedMeasures, checkPreparedModel } from './prepared-checks.ts';
+import {
+  checkPreparedAcrossSites,
+  checkPreparedMeasures,
+  checkPreparedModel,
+} from './prepared-checks.ts';
 import { expectFastPathMatchesVector, readVectors } from './reference-vectors.ts';
 
 // ASK14 and CY14 through the fast path (split-prepare.ts over the models' own rupture terms and
@@ -19,6 +23,9 @@ describe('ASK14 and CY14 fast path', () => {
     it(`${model.name}: gives predict()'s ln median, σ and applicability within 1e-12`, () => {
       checkPreparedModel(model, MEASURES, ['crustal', 'crustal', 'interface'], 40);
       checkPreparedMeasures(model, MEASURES, ['crustal'], 20);
+    });
+    it(`${model.name}: one prepared model at sites of one Vs30 after another gives predict()'s numbers within 1e-12`, () => {
+      checkPreparedAcrossSites(model, MEASURES, 'crustal');
     });
     it(`${model.name}: every reference vector within 1e-4 through the fast path`, () => {
       for (const c of readVectors(file).cases) expectFastPathMatchesVector(model, c, source);

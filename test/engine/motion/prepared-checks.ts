@@ -190,3 +190,43 @@ export function checkPreparedMeasures(
     { numRuns, seed: 20_260_702 },
   );
 }
+
+/** Sites met one after another by one prepared model: below and above k1 and 1130 m/s, back again, with a Z1 and Z2.5 given, measured and not. */
+const SITE_SEQUENCE: readonly SiteContext[] = [
+  { vs30: 760, vs30Measured: false },
+  { vs30: 760, vs30Measured: false },
+  { vs30: 300, vs30Measured: true },
+  { vs30: 1200, vs30Measured: false },
+  { vs30: 760, vs30Measured: false, z1Km: 0.3, z2p5Km: 4 },
+  { vs30: 760, vs30Measured: false },
+  { vs30: 180, vs30Measured: false },
+];
+
+/**
+ * Checks that one prepared model (what a map keeps from point to point) gives predict()'s numbers
+ * within TOLERANCE at sites of one Vs30 after another: terms a model works out once per Vs30 must
+ * follow the site.
+ */
+export function checkPreparedAcrossSites(
+  model: GroundMotionModel,
+  measures: readonly Measure[],
+  setting: TectonicSetting,
+): void {
+  const cases = fc.sample(pairCasesArb([setting]), { numRuns: 1, seed: 20_260_703 })[0]!;
+  for (const measure of measures) {
+    const prepared = model.prepare!(
+      cases.map((c) => c.rupture),
+      measure,
+    );
+    for (const site of SITE_SEQUENCE) {
+      const out = createPairPredictions(cases.length);
+      prepared.predictPairs(site, pairColumns(cases), out);
+      cases.forEach((c, k) => {
+        const expected = model.predict({ ...c.rupture, ...c.distances, ...site }, measure);
+        const where = `${model.name} ${measureLabel(measure)} pair ${k} at ${JSON.stringify(site)}`;
+        expectClose(out.lnMedian[k]!, expected.lnMedian, TOLERANCE, `${where}: ln median`);
+        expectClose(out.sigma[k]!, expected.sigma, TOLERANCE, `${where}: sigma`);
+      });
+    }
+  }
+}
