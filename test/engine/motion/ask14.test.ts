@@ -3,10 +3,8 @@ import { describe, expect, it } from 'vitest';
 import { runCli } from '../../../api/cli.ts';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import {
-  ASK14_COLUMNS,
   ASK14_CONSTANTS,
   ASK14_PGA,
-  ASK14_PGV,
   ASK14_SA,
   type Ask14Row,
 } from '../../../api/engine/motion/ask14-coefficients.ts';
@@ -61,27 +59,7 @@ describe('ASK14: the reference vectors', () => {
 });
 
 describe('ASK14: the coefficient table', () => {
-  const rows: readonly Ask14Row[] = [ASK14_PGV, ASK14_PGA, ...ASK14_SA];
-
-  it('has PGV, PGA and 22 spectral rows at increasing periods from 0.01 to 10 s', () => {
-    expect(ASK14_PGV.periodS).toBe(-1);
-    expect(ASK14_PGA.periodS).toBe(0);
-    const periods = ASK14_SA.map((r) => r.periodS);
-    expect(periods.length).toBe(22);
-    expect(periods[0]).toBe(0.01);
-    expect(periods[periods.length - 1]).toBe(10);
-    for (let i = 1; i < periods.length; i++)
-      expect(periods[i] as number).toBeGreaterThan(periods[i - 1] as number);
-    expect(ask14.periodsS).toEqual(periods);
-  });
-
-  it('has every column, finite, in every row, and nothing else', () => {
-    expect(ASK14_COLUMNS.length).toBe(45);
-    for (const row of rows) {
-      expect(Object.keys(row).sort()).toEqual(['periodS', ...ASK14_COLUMNS].sort());
-      for (const column of ASK14_COLUMNS)
-        expect(Number.isFinite(row[column]), `${column} at ${row.periodS} s`).toBe(true);
-    }
+  it('has finite period-independent constants', () => {
     for (const value of Object.values(ASK14_CONSTANTS)) expect(Number.isFinite(value)).toBe(true);
   });
 
