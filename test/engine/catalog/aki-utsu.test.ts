@@ -1,19 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { akiUtsuBValue } from '../../../api/engine/catalog/aki-utsu.ts';
 import { syntheticCatalog } from '../../../api/engine/catalog/synthetic-catalog.ts';
-import type { LonLat } from '../../../api/engine/model.ts';
 import { createRandom } from '../../../api/engine/random.ts';
 import { expectClose } from '../../helpers/close.ts';
+import { SQUARE_ZONE } from '../fixtures/catalog-builders.ts';
 
-const ZONE: readonly (readonly LonLat[])[] = [
-  [
-    [-150, -48],
-    [-148, -48],
-    [-148, -46],
-    [-150, -46],
-    [-150, -48],
-  ],
-];
 const START = Date.UTC(1990, 0, 1);
 const END = Date.UTC(2020, 0, 1);
 
@@ -73,7 +64,7 @@ describe('b-value recovered from synthetic catalogs', () => {
         mMin: 3.95,
         mMax: 8.95,
         eventCount: n,
-        rings: ZONE,
+        rings: SQUARE_ZONE,
         depthKm: [5, 15],
         startMs: START,
         endMs: END,
@@ -108,7 +99,7 @@ describe('b-value recovered from synthetic catalogs', () => {
         mMin: 3.95,
         mMax: 8.95,
         eventCount: 500,
-        rings: ZONE,
+        rings: SQUARE_ZONE,
         depthKm: [5, 15],
         startMs: START,
         endMs: END,
