@@ -17,16 +17,29 @@ const SEA_DEPTH_M = 2000;
 const landM = (kmInland: number) => 2 + 10 * kmInland;
 
 /**
- * A test study of the shore (all invented): `communities`, one interface source (`source`, a
- * GeoJSON feature's geometry and properties) with AGA16, PGA at 475 years; `outline` if given.
+ * A test study of the shore (all invented): `communities`, one reverse interface source of M 8
+ * at 0.001 a year (its GeoJSON `geometry` and the rest of its `properties`) with AGA16, PGA at
+ * 475 years; `outline` if given.
  */
-function shoreStudy(name: string, communities: object[], source: object, outline?: object): Study {
+function shoreStudy(
+  name: string,
+  communities: object[],
+  source: { geometry: object; properties: object },
+  outline?: object,
+): Study {
+  const properties = {
+    setting: 'interface',
+    mechanism: 'reverse',
+    recurrence: { type: 'fixed', magnitude: 8, rate: 0.001 },
+    ...source.properties,
+  };
+  const feature = { type: 'Feature', geometry: source.geometry, properties };
   const loaded = loadStudy(
     {
       name,
       communities,
       ...(outline ? { outline } : {}),
-      sources: { type: 'FeatureCollection', features: [{ type: 'Feature', ...source }] },
+      sources: { type: 'FeatureCollection', features: [feature] },
       groundMotion: { interface: [{ model: 'AGA16', weight: 1 }] },
       settings: { measures: ['PGA'], horizonsYears: [50], returnPeriodsYears: [475] },
     },
@@ -49,12 +62,9 @@ function study(communities: object[]): Study {
     properties: {
       id: 'trench',
       name: 'Test trench',
-      setting: 'interface',
-      mechanism: 'reverse',
       dip: 45,
       upperDepthKm: 5,
       lowerDepthKm: 15,
-      recurrence: { type: 'fixed', magnitude: 8, rate: 0.001 },
     },
   });
 }
@@ -176,11 +186,8 @@ function contouredStudy(communities: object[]): Study {
       properties: {
         id: 'curved-trench',
         name: 'Test contoured trench',
-        setting: 'interface',
-        mechanism: 'reverse',
         contourDepthsKm: [5, 30],
         meshSpacingKm: 10,
-        recurrence: { type: 'fixed', magnitude: 8, rate: 0.001 },
       },
     },
     {
