@@ -6,7 +6,8 @@ import { zoneRecurrence } from '../../../api/engine/catalog/zone-recurrence.ts';
 import type { LonLat } from '../../../api/engine/model.ts';
 import { createRandom } from '../../../api/engine/random.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
-import { boxRing, SQUARE_ZONE } from '../fixtures/catalog-builders.ts';
+import { boxRing } from '../fixtures/box-ring.ts';
+import { SQUARE_ZONE } from '../fixtures/catalog-builders.ts';
 
 const NEIGHBOUR: readonly (readonly LonLat[])[] = [boxRing(-147, -48, -145, -46)];
 const END = 50 * MS_PER_YEAR;
