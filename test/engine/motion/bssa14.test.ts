@@ -1,4 +1,3 @@
-import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import { BSSA14_PGA, BSSA14_SA } from '../../../api/engine/motion/bssa14-coefficients.ts';
@@ -15,7 +14,11 @@ import type { Measure } from '../../../api/engine/motion/measure.ts';
 import { verticalStrikeSlip } from './crustal-input.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
-import { expectLnPeriodInterpolation, expectNotApplicable } from './model-checks.ts';
+import {
+  expectFallsWithDistanceRisesWithMagnitude,
+  expectLnPeriodInterpolation,
+  expectNotApplicable,
+} from './model-checks.ts';
 import { worstKink } from './crustal-table-checks.ts';
 
 const SOURCE = 'Boore et al. (2014)';
@@ -239,24 +242,12 @@ describe('BSSA14: properties', () => {
   const measures = [PGA, PGV, sa(0.2), sa(1), sa(3)];
 
   it('falls with distance and rises with magnitude', () => {
-    fc.assert(
-      fc.property(
-        fc.double({ min: 3, max: 8.5, noNaN: true }),
-        fc.double({ min: 0, max: 390, noNaN: true }),
-        fc.double({ min: 0.5, max: 10, noNaN: true }),
-        fc.double({ min: 0.05, max: 0.5, noNaN: true }),
-        fc.constantFrom(...measures),
-        (magnitude, rjbKm, stepKm, stepM, m) => {
-          expect(lnY({ magnitude, rjbKm: rjbKm + stepKm }, m)).toBeLessThan(
-            lnY({ magnitude, rjbKm }, m),
-          );
-          expect(lnY({ magnitude: magnitude + stepM, rjbKm }, m)).toBeGreaterThan(
-            lnY({ magnitude, rjbKm }, m),
-          );
-        },
-      ),
-      { seed: 20140301, numRuns: 300 },
-    );
+    expectFallsWithDistanceRisesWithMagnitude(lnY, {
+      magnitude: [3, 8.5],
+      distance: 'rjbKm',
+      distanceKm: [0, 390],
+      seed: 20140301,
+    });
   });
 
   it('interpolates between rows in ln(period) and returns the row on a row', () => {
