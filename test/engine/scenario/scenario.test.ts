@@ -40,6 +40,20 @@ function study(sources: Source[], communities: Community[]): Study {
 
 const common = { setting: 'crustal', mechanism: 'strike-slip', rakeDeg: 0 } as const;
 
+/** A vertical strike-slip fault 'f' along x = 0 from y = −40 to 40 km, 0–12 km deep, M 6 (invented). */
+const fault: Source = {
+  ...common,
+  id: 'f',
+  name: 'F',
+  kind: 'fault',
+  trace: [at(0, -40), at(0, 40)],
+  dipDeg: 90,
+  dipDirectionDeg: 90,
+  upperDepthKm: 0,
+  lowerDepthKm: 12,
+  recurrence: { type: 'fixed', magnitude: 6, rate: 0.01 },
+};
+
 describe('runScenario', () => {
   it('gives Cornell et al. (1979) medians, 84th percentiles and Worden et al. (2012) MMI for a point source', () => {
     const [lon, lat] = at(0, 0);
@@ -87,19 +101,6 @@ describe('runScenario', () => {
   });
 
   it("places the 'closest' rupture nearest each community and a named community's rupture for all", () => {
-    const trace = [at(0, -40), at(0, 40)];
-    const fault: Source = {
-      ...common,
-      id: 'f',
-      name: 'F',
-      kind: 'fault',
-      trace,
-      dipDeg: 90,
-      dipDirectionDeg: 90,
-      upperDepthKm: 0,
-      lowerDepthKm: 12,
-      recurrence: { type: 'fixed', magnitude: 6, rate: 0.01 },
-    };
     const s = study([fault], [community('north', 5, 35), community('south', 5, -35)]);
     const each = runScenario(s, models, { sourceId: 'f', magnitude: 6 });
     // A vertical fault reaching the surface: the closest floating rupture lies beside each site, Rrup = 5 km.
@@ -115,19 +116,6 @@ describe('runScenario', () => {
   });
 
   it('places an explicit fault position from the start of the trace and refuses one off the fault', () => {
-    const trace = [at(0, -40), at(0, 40)];
-    const fault: Source = {
-      ...common,
-      id: 'f',
-      name: 'F',
-      kind: 'fault',
-      trace,
-      dipDeg: 90,
-      dipDirectionDeg: 90,
-      upperDepthKm: 0,
-      lowerDepthKm: 12,
-      recurrence: { type: 'fixed', magnitude: 6, rate: 0.01 },
-    };
     const s = study([fault], [community('south', 5, -35), community('north', 5, 35)]);
     // M 6 strike-slip: Wells & Coppersmith (1994) area and width give a rupture about 13 km long
     // (from memory), so one starting at the south end runs from y = -40 to about y = -27 km.
@@ -199,19 +187,6 @@ describe('runScenario', () => {
   });
 
   it('with a map, the table and the map show one earthquake: each community reads as the map beside it', () => {
-    const trace = [at(0, -40), at(0, 40)];
-    const fault: Source = {
-      ...common,
-      id: 'f',
-      name: 'F',
-      kind: 'fault',
-      trace,
-      dipDeg: 90,
-      dipDirectionDeg: 90,
-      upperDepthKm: 0,
-      lowerDepthKm: 12,
-      recurrence: { type: 'fixed', magnitude: 6, rate: 0.01 },
-    };
     const s = study(
       [fault],
       [community('north', 5, 35), community('south', 5, -35), community('middle', 5, 0)],
