@@ -40,6 +40,17 @@ function study(sources: Source[], communities: Community[]): Study {
 
 const common = { setting: 'crustal', mechanism: 'strike-slip', rakeDeg: 0 } as const;
 
+/** A point source 'p' at the frame's origin, 10 km deep, M 6.5 (invented). */
+const point: Source = {
+  ...common,
+  id: 'p',
+  name: 'P',
+  kind: 'point',
+  location: at(0, 0),
+  depthKm: 10,
+  recurrence: { type: 'fixed', magnitude: 6.5, rate: 0.01 },
+};
+
 /** A vertical strike-slip fault 'f' along x = 0 from y = −40 to 40 km, 0–12 km deep, M 6 (invented). */
 const fault: Source = {
   ...common,
@@ -56,16 +67,6 @@ const fault: Source = {
 
 describe('runScenario', () => {
   it('gives Cornell et al. (1979) medians, 84th percentiles and Worden et al. (2012) MMI for a point source', () => {
-    const [lon, lat] = at(0, 0);
-    const point: Source = {
-      ...common,
-      id: 'p',
-      name: 'P',
-      kind: 'point',
-      location: [lon, lat],
-      depthKm: 10,
-      recurrence: { type: 'fixed', magnitude: 6.5, rate: 0.01 },
-    };
     // Communities 30 and 0 km from the epicentre: the test's study frame is centred elsewhere, so
     // distances carry the projection's small error (< 1e-3 relative within 50 km, projection.ts).
     const s = study([point], [community('a', 30, 0), community('b', 0, 0)]);
@@ -136,16 +137,6 @@ describe('runScenario', () => {
   });
 
   it('refuses an unknown source, a magnitude out of range and a bad explicit position, naming the field', () => {
-    const [lon, lat] = at(0, 0);
-    const point: Source = {
-      ...common,
-      id: 'p',
-      name: 'P',
-      kind: 'point',
-      location: [lon, lat],
-      depthKm: 10,
-      recurrence: { type: 'fixed', magnitude: 6.5, rate: 0.01 },
-    };
     const s = study([point], [community('a', 30, 0)]);
     const issuePaths = (request: Parameters<typeof runScenario>[2]) => {
       try {
@@ -167,16 +158,6 @@ describe('runScenario', () => {
   });
 
   it('maps median PGA on a grid, strongest at the grid point nearest the epicentre', () => {
-    const [lon, lat] = at(0, 0);
-    const point: Source = {
-      ...common,
-      id: 'p',
-      name: 'P',
-      kind: 'point',
-      location: [lon, lat],
-      depthKm: 10,
-      recurrence: { type: 'fixed', magnitude: 6.5, rate: 0.01 },
-    };
     const s = study([point], [community('a', 30, 0)]);
     const { grid } = runScenario(s, models, { sourceId: 'p', magnitude: 6.5, gridSpacingKm: 5 });
     expect(grid).toBeDefined();
