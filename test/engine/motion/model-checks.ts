@@ -1,8 +1,8 @@
 import fc from 'fast-check';
-import { expect } from 'vitest';
+import { expect, it } from 'vitest';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
 import type { GmmInput, GmmPrediction } from '../../../api/engine/motion/types.ts';
-import { expectClose } from '../../helpers/close.ts';
+import { expectClose, expectRelative } from '../../helpers/close.ts';
 
 const RULE = 'interpolate-period.ts rule (common practice)';
 
@@ -126,4 +126,36 @@ export function expectHangingWallAboveFootwall(
     expect(lnY(hanging, m)).toBeGreaterThan(lnY({ ...hanging, ...foot }, m));
     expect(lnY(hanging, m)).toBeGreaterThan(lnY({ ...hanging, rxKm: -10 }, m));
   }
+}
+
+const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
+
+/**
+ * Orders of magnitude read from memory of the NGA-West2 papers' and Gregor et al. (2014)'s
+ * figures of median motion against distance (Vs30 = 760 m/s, strike-slip): label, M, distance
+ * (km), measure, median (g; PGV cm/s).
+ */
+const FIGURE_MEDIANS: readonly (readonly [string, number, number, Measure, number])[] = [
+  ['PGA, M 7, 10 km', 7, 10, { kind: 'PGA' }, 0.26],
+  ['SA(0.2), M 7, 10 km', 7, 10, sa(0.2), 0.57],
+  ['SA(1.0), M 7, 10 km', 7, 10, sa(1), 0.2],
+  ['PGA, M 7, 100 km', 7, 100, { kind: 'PGA' }, 0.03],
+  ['PGA, M 5, 10 km', 5, 10, { kind: 'PGA' }, 0.07],
+  ['PGV, M 7, 10 km (cm/s)', 7, 10, { kind: 'PGV' }, 25],
+];
+
+/** One test a FIGURE_MEDIANS row: the median within ±30%, which suits a figure read by eye. */
+export function itMatchesFigureMedians(
+  lnY: (over: Partial<GmmInput>, measure: Measure) => number,
+  distance: 'rjbKm' | 'rrupKm',
+  source: string,
+): void {
+  it.each(FIGURE_MEDIANS)('%s', (label, magnitude, distanceKm, measure, expected) => {
+    expectRelative(
+      Math.exp(lnY({ magnitude, [distance]: distanceKm }, measure)),
+      expected,
+      0.3,
+      `${source} figures, ${label} (from memory)`,
+    );
+  });
 }
