@@ -54,6 +54,34 @@ export default tseslint.config(
     },
   },
   {
+    // The engine is pure: no file, network or process access. Its one read is the coefficient
+    // tables shipped beside their models, once at module load, in motion/coefficient-table.ts.
+    files: ['api/engine/**'],
+    ignores: ['api/engine/motion/coefficient-table.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              group: [
+                'node:*',
+                'fs',
+                'fs/*',
+                'path',
+                'url',
+                'os',
+                'child_process',
+                'worker_threads',
+              ],
+              message: 'the engine does no I/O; only motion/coefficient-table.ts reads its tables',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
     // Tests read parsed JSON and child-process output of loose shape.
     files: ['test/**'],
     rules: { '@typescript-eslint/no-explicit-any': 'off' },

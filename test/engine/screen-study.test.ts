@@ -11,6 +11,8 @@ import { discretiseStudy } from '../../api/engine/ruptures/discretise.ts';
 import { screenStudy } from '../../api/engine/screen-study.ts';
 import { expectClose, expectRelative } from '../helpers/close.ts';
 import { allKindsStudy } from './fixtures/all-kinds-study.ts';
+import { boxRing } from './fixtures/box-ring.ts';
+import { faultLonLat, zoneLonLat } from './geometry/km-fixtures.ts';
 
 /*
  * A small invented study in open ocean (test data, not check values): one vertical strike-slip
@@ -19,42 +21,24 @@ import { allKindsStudy } from './fixtures/all-kinds-study.ts';
  * of it, both with Cornell et al. (1979); community "inside" sits in the zone 0.2° west of the
  * fault, community "far" 4.5° east of it, beyond the 300 km cut-off.
  */
-const fault: FaultSource = {
-  kind: 'fault',
-  id: 'test-fault',
-  name: 'Test fault',
-  setting: 'crustal',
-  mechanism: 'strike-slip',
-  rakeDeg: 0,
-  recurrence: { type: 'fixed', magnitude: 6.5, rate: 0.01 },
-  trace: [
+const fault: FaultSource = faultLonLat(
+  [
     [-150, -47.1],
     [-150, -46.9],
   ],
-  dipDeg: 90,
-  dipDirectionDeg: 90,
-  upperDepthKm: 0,
-  lowerDepthKm: 12,
-};
-const zone: ZoneSource = {
-  kind: 'zone',
-  id: 'test-zone',
-  name: 'Test zone',
-  setting: 'crustal',
-  mechanism: 'strike-slip',
-  rakeDeg: 0,
-  recurrence: { type: 'gutenberg-richter', bValue: 1, mMin: 5, mMax: 6.5, rate: 0.05 },
-  rings: [
-    [
-      [-150.3, -47.1],
-      [-150.1, -47.1],
-      [-150.1, -46.9],
-      [-150.3, -46.9],
-      [-150.3, -47.1],
-    ],
-  ],
-  depthKm: 8,
-};
+  {
+    recurrence: { type: 'fixed', magnitude: 6.5, rate: 0.01 },
+    dipDeg: 90,
+    dipDirectionDeg: 90,
+    upperDepthKm: 0,
+    lowerDepthKm: 12,
+  },
+);
+const zone: ZoneSource = zoneLonLat(
+  [boxRing(-150.3, -47.1, -150.1, -46.9)],
+  { type: 'gutenberg-richter', bValue: 1, mMin: 5, mMax: 6.5, rate: 0.05 },
+  8,
+);
 const community = (id: string, lon: number): Community => ({
   id,
   name: id,

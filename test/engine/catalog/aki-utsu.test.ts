@@ -1,21 +1,36 @@
 import { describe, expect, it } from 'vitest';
 import { akiUtsuBValue } from '../../../api/engine/catalog/aki-utsu.ts';
 import { syntheticCatalog } from '../../../api/engine/catalog/synthetic-catalog.ts';
-import type { LonLat } from '../../../api/engine/model.ts';
 import { createRandom } from '../../../api/engine/random.ts';
 import { expectClose } from '../../helpers/close.ts';
+import { SQUARE_ZONE } from '../fixtures/catalog-builders.ts';
 
-const ZONE: readonly (readonly LonLat[])[] = [
-  [
-    [-150, -48],
-    [-148, -48],
-    [-148, -46],
-    [-150, -46],
-    [-150, -48],
-  ],
-];
 const START = Date.UTC(1990, 0, 1);
 const END = Date.UTC(2020, 0, 1);
+
+/**
+ * Aki–Utsu b (Mc 4.0, ΔM 0.1) of a synthetic catalog: `eventCount` magnitudes from 3.95 to 8.95
+ * at 0.1 with the given b, 1990–2020, in the square test zone.
+ */
+function syntheticBValue(seed: number, bValue: number, eventCount: number) {
+  const events = syntheticCatalog({
+    random: createRandom(seed),
+    bValue,
+    mMin: 3.95,
+    mMax: 8.95,
+    eventCount,
+    rings: SQUARE_ZONE,
+    depthKm: [5, 15],
+    startMs: START,
+    endMs: END,
+    magnitudeStep: 0.1,
+  });
+  return akiUtsuBValue(
+    events.map((x) => x.magnitude),
+    4.0,
+    0.1,
+  );
+}
 
 describe('Aki (1965) with the Utsu (1965) binning correction', () => {
   it('matches a hand computation on six binned magnitudes', () => {
@@ -67,23 +82,7 @@ describe('b-value recovered from synthetic catalogs', () => {
   for (const n of [200, 1000, 5000]) for (const b of [0.8, 1.0, 1.2]) cases.push([n, b]);
   cases.forEach(([n, b], i) => {
     it(`recovers b = ${b} from ${n} events`, () => {
-      const events = syntheticCatalog({
-        random: createRandom(i + 1),
-        bValue: b,
-        mMin: 3.95,
-        mMax: 8.95,
-        eventCount: n,
-        rings: ZONE,
-        depthKm: [5, 15],
-        startMs: START,
-        endMs: END,
-        magnitudeStep: 0.1,
-      });
-      const e = akiUtsuBValue(
-        events.map((x) => x.magnitude),
-        4.0,
-        0.1,
-      );
+      const e = syntheticBValue(i + 1, b, n);
       expect(e.eventCount).toBe(n);
       expectClose(
         e.bValue,
@@ -102,23 +101,7 @@ describe('b-value recovered from synthetic catalogs', () => {
     // (Bender 1983, from memory) is larger by (βΔM)²/12 ≈ 0.4% at b = 1, which is small against σb ≈ 0.045.
     let covered = 0;
     for (let seed = 101; seed <= 300; seed++) {
-      const events = syntheticCatalog({
-        random: createRandom(seed),
-        bValue: 1,
-        mMin: 3.95,
-        mMax: 8.95,
-        eventCount: 500,
-        rings: ZONE,
-        depthKm: [5, 15],
-        startMs: START,
-        endMs: END,
-        magnitudeStep: 0.1,
-      });
-      const e = akiUtsuBValue(
-        events.map((x) => x.magnitude),
-        4.0,
-        0.1,
-      );
+      const e = syntheticBValue(seed, 1, 500);
       if (Math.abs(e.bValue - 1) <= 2 * e.sigmaB) covered++;
     }
     expect(covered / 200).toBeGreaterThanOrEqual(0.9);

@@ -1,22 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { MS_PER_YEAR, type CatalogEvent } from '../../../api/engine/catalog/event.ts';
+import { MS_PER_YEAR } from '../../../api/engine/catalog/event.ts';
 import { frequencyMagnitude } from '../../../api/engine/catalog/frequency-magnitude.ts';
 import { expectClose } from '../../helpers/close.ts';
-
-const event = (
-  id: string,
-  years: number,
-  magnitude: number,
-  magnitudeType = 'Mw',
-): CatalogEvent => ({
-  id,
-  timeMs: years * MS_PER_YEAR,
-  lon: -150,
-  lat: -47,
-  depthKm: 10,
-  magnitude,
-  magnitudeType,
-});
+import { catalogEvent as event } from '../fixtures/catalog-builders.ts';
 
 describe('frequency–magnitude distribution', () => {
   // Hand-made: 4.0 three times, 4.1 twice, 4.3 once, over 10 Julian years; an ML event left out.

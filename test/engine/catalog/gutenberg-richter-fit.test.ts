@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { MS_PER_YEAR, type CatalogEvent } from '../../../api/engine/catalog/event.ts';
+import { MS_PER_YEAR } from '../../../api/engine/catalog/event.ts';
 import {
   annualRateAbove,
   fitGutenbergRichter,
@@ -7,34 +7,9 @@ import {
   truncatedRateAbove,
 } from '../../../api/engine/catalog/gutenberg-richter-fit.ts';
 import { syntheticCatalog } from '../../../api/engine/catalog/synthetic-catalog.ts';
-import type { LonLat } from '../../../api/engine/model.ts';
 import { createRandom } from '../../../api/engine/random.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
-
-const ZONE: readonly (readonly LonLat[])[] = [
-  [
-    [-150, -48],
-    [-148, -48],
-    [-148, -46],
-    [-150, -46],
-    [-150, -48],
-  ],
-];
-
-const event = (
-  id: string,
-  years: number,
-  magnitude: number,
-  magnitudeType = 'Mw',
-): CatalogEvent => ({
-  id,
-  timeMs: years * MS_PER_YEAR,
-  lon: -150,
-  lat: -47,
-  depthKm: 10,
-  magnitude,
-  magnitudeType,
-});
+import { SQUARE_ZONE, catalogEvent as event } from '../fixtures/catalog-builders.ts';
 
 describe('fitGutenbergRichter (Aki–Utsu over one span)', () => {
   // The six magnitudes of the Aki–Utsu hand computation over exactly 10 Julian years, with an
@@ -98,7 +73,7 @@ describe('fitGutenbergRichterWeichert (unequal completeness periods)', () => {
     mMin: 3.95,
     mMax: 8.45,
     annualRate: 15,
-    rings: ZONE,
+    rings: SQUARE_ZONE,
     depthKm: [5, 15],
     startMs: 0,
     endMs: 100 * MS_PER_YEAR,

@@ -4,19 +4,9 @@ import { observationBins } from '../../../api/engine/catalog/completeness-period
 import { MS_PER_YEAR } from '../../../api/engine/catalog/event.ts';
 import { syntheticCatalog } from '../../../api/engine/catalog/synthetic-catalog.ts';
 import { weichertFit } from '../../../api/engine/catalog/weichert.ts';
-import type { LonLat } from '../../../api/engine/model.ts';
 import { createRandom } from '../../../api/engine/random.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
-
-const ZONE: readonly (readonly LonLat[])[] = [
-  [
-    [-150, -48],
-    [-148, -48],
-    [-148, -46],
-    [-150, -46],
-    [-150, -48],
-  ],
-];
+import { SQUARE_ZONE } from '../fixtures/catalog-builders.ts';
 
 describe('Weichert (1980) maximum likelihood', () => {
   it('solves a table built to fit b exactly, with unequal periods', () => {
@@ -60,7 +50,7 @@ describe('Weichert (1980) maximum likelihood', () => {
         mMin: 3.95,
         mMax: 8.95,
         eventCount: 2000,
-        rings: ZONE,
+        rings: SQUARE_ZONE,
         depthKm: [5, 15],
         startMs: start,
         endMs: end,

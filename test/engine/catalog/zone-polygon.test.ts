@@ -1,37 +1,17 @@
 import { describe, expect, it } from 'vitest';
 import { insideZone, zonePolygon } from '../../../api/engine/catalog/zone-polygon.ts';
+import { boxRing } from '../fixtures/box-ring.ts';
 
 describe('zone polygons', () => {
   it('close an open ring and find its bounding box', () => {
-    const z = zonePolygon([
-      [
-        [-150, -48],
-        [-148, -48],
-        [-148, -46],
-        [-150, -46],
-      ],
-    ]);
+    // The square of the catalog tests without its closing point.
+    const z = zonePolygon([boxRing(-150, -48, -148, -46).slice(0, 4)]);
     expect(z.geometry.coordinates[0]).toHaveLength(5);
     expect(z.bbox).toEqual([-150, -48, -148, -46]);
   });
 
   it('tell inside from outside, holes and boundary included', () => {
-    const z = zonePolygon([
-      [
-        [-150, -48],
-        [-148, -48],
-        [-148, -46],
-        [-150, -46],
-        [-150, -48],
-      ],
-      [
-        [-149.5, -47.5],
-        [-148.5, -47.5],
-        [-148.5, -46.5],
-        [-149.5, -46.5],
-        [-149.5, -47.5],
-      ],
-    ]);
+    const z = zonePolygon([boxRing(-150, -48, -148, -46), boxRing(-149.5, -47.5, -148.5, -46.5)]);
     expect(insideZone(z, -149.8, -47.9)).toBe(true);
     expect(insideZone(z, -149, -47)).toBe(false); // in the hole
     expect(insideZone(z, -147.9, -47)).toBe(false);

@@ -6,25 +6,10 @@ import { zoneRecurrence } from '../../../api/engine/catalog/zone-recurrence.ts';
 import type { LonLat } from '../../../api/engine/model.ts';
 import { createRandom } from '../../../api/engine/random.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
+import { boxRing } from '../fixtures/box-ring.ts';
+import { SQUARE_ZONE } from '../fixtures/catalog-builders.ts';
 
-const ZONE: readonly (readonly LonLat[])[] = [
-  [
-    [-150, -48],
-    [-148, -48],
-    [-148, -46],
-    [-150, -46],
-    [-150, -48],
-  ],
-];
-const NEIGHBOUR: readonly (readonly LonLat[])[] = [
-  [
-    [-147, -48],
-    [-145, -48],
-    [-145, -46],
-    [-147, -46],
-    [-147, -48],
-  ],
-];
+const NEIGHBOUR: readonly (readonly LonLat[])[] = [boxRing(-147, -48, -145, -46)];
 const END = 50 * MS_PER_YEAR;
 
 // Inside the zone: b = 1, 4 events a year of M >= 3.95 for 50 years (seed 41). Next door a
@@ -36,7 +21,7 @@ const inside = syntheticCatalog({
   mMin: 3.95,
   mMax: 7.45,
   annualRate: 4,
-  rings: ZONE,
+  rings: SQUARE_ZONE,
   depthKm: [0, 20],
   startMs: 0,
   endMs: END,
@@ -61,7 +46,7 @@ const deep = syntheticCatalog({
   mMin: 3.95,
   mMax: 7.45,
   annualRate: 2,
-  rings: ZONE,
+  rings: SQUARE_ZONE,
   depthKm: [60, 100],
   startMs: 0,
   endMs: END,
@@ -72,7 +57,7 @@ const catalog = [...inside, ...outside, ...deep];
 
 describe('zoneRecurrence', () => {
   const z = zoneRecurrence(catalog, {
-    rings: ZONE,
+    rings: SQUARE_ZONE,
     completeness: { mc: 4.0, startMs: 0, endMs: END },
     mMax: 7.5,
     depthKm: [0, 30],
@@ -80,7 +65,11 @@ describe('zoneRecurrence', () => {
 
   it('counts events without a depth when no depth range is asked for, and leaves them out of one', () => {
     const undated = inside.map((e) => ({ ...e, depthKm: null }));
-    const options = { rings: ZONE, completeness: { mc: 4.0, startMs: 0, endMs: END }, mMax: 7.5 };
+    const options = {
+      rings: SQUARE_ZONE,
+      completeness: { mc: 4.0, startMs: 0, endMs: END },
+      mMax: 7.5,
+    };
     expect(zoneRecurrence(undated, options).eventsInZone).toBe(inside.length);
     // None left in a depth range: too few events to fit, said so.
     expect(() => zoneRecurrence(undated, { ...options, depthKm: [0, 30] })).toThrow(
@@ -121,7 +110,7 @@ describe('zoneRecurrence', () => {
 
   it('moves the rate to another mMin along the truncated line', () => {
     const at5 = zoneRecurrence(catalog, {
-      rings: ZONE,
+      rings: SQUARE_ZONE,
       completeness: { mc: 4.0, startMs: 0, endMs: END },
       mMax: 7.5,
       mMin: 5,
@@ -146,7 +135,7 @@ describe('zoneRecurrence', () => {
 
   it('uses Weichert with completeness periods', () => {
     const w = zoneRecurrence(catalog, {
-      rings: ZONE,
+      rings: SQUARE_ZONE,
       completeness: { periods: [{ magnitude: 4.0, startMs: 0 }], endMs: END },
       mMax: 7.5,
       depthKm: [0, 30],
@@ -161,7 +150,7 @@ describe('zoneRecurrence', () => {
       { ...(inside[0] as CatalogEvent), id: 'ml-1', magnitudeType: 'ML' },
     ];
     const r = zoneRecurrence(withMl, {
-      rings: ZONE,
+      rings: SQUARE_ZONE,
       completeness: { mc: 4.0, startMs: 0, endMs: END },
       mMax: 7.5,
       depthKm: [0, 30],
@@ -173,7 +162,7 @@ describe('zoneRecurrence', () => {
   it('refuses an mMax at or below mMin', () => {
     expect(() =>
       zoneRecurrence(catalog, {
-        rings: ZONE,
+        rings: SQUARE_ZONE,
         completeness: { mc: 4.0, startMs: 0, endMs: END },
         mMax: 3.9,
       }),

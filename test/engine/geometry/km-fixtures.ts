@@ -34,11 +34,8 @@ export interface FaultOptions {
   readonly id?: string;
 }
 
-export function faultKm(
-  traceKm: readonly (readonly [number, number])[],
-  options: FaultOptions,
-  frame: LocalFrame = FRAME,
-): FaultSource {
+/** A test fault (crustal strike-slip, M 7 at 0.01 a year unless the options say otherwise) with its trace in [lon, lat]. */
+export function faultLonLat(trace: readonly LonLat[], options: FaultOptions): FaultSource {
   return {
     kind: 'fault',
     id: options.id ?? 'test-fault',
@@ -47,12 +44,20 @@ export function faultKm(
     mechanism: options.mechanism ?? 'strike-slip',
     rakeDeg: 0,
     recurrence: options.recurrence ?? FIXED_M7,
-    trace: toLonLat(traceKm, frame),
+    trace: [...trace],
     dipDeg: options.dipDeg,
     dipDirectionDeg: options.dipDirectionDeg,
     upperDepthKm: options.upperDepthKm,
     lowerDepthKm: options.lowerDepthKm,
   };
+}
+
+export function faultKm(
+  traceKm: readonly (readonly [number, number])[],
+  options: FaultOptions,
+  frame: LocalFrame = FRAME,
+): FaultSource {
+  return faultLonLat(toLonLat(traceKm, frame), options);
 }
 
 /**
@@ -82,11 +87,11 @@ export function contouredKm(
   };
 }
 
-export function zoneKm(
-  ringsKm: readonly (readonly (readonly [number, number])[])[],
+/** A crustal strike-slip test zone with its rings in [lon, lat]. */
+export function zoneLonLat(
+  rings: readonly (readonly LonLat[])[],
   recurrence: Recurrence,
   depthKm = 10,
-  frame: LocalFrame = FRAME,
 ): ZoneSource {
   return {
     kind: 'zone',
@@ -96,9 +101,22 @@ export function zoneKm(
     mechanism: 'strike-slip',
     rakeDeg: 0,
     recurrence,
-    rings: ringsKm.map((ring) => toLonLat(ring, frame)),
+    rings: rings.map((ring) => [...ring]),
     depthKm,
   };
+}
+
+export function zoneKm(
+  ringsKm: readonly (readonly (readonly [number, number])[])[],
+  recurrence: Recurrence,
+  depthKm = 10,
+  frame: LocalFrame = FRAME,
+): ZoneSource {
+  return zoneLonLat(
+    ringsKm.map((ring) => toLonLat(ring, frame)),
+    recurrence,
+    depthKm,
+  );
 }
 
 export function pointKm(

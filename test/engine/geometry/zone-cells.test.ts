@@ -3,19 +3,26 @@ import { subdivideZoneCell, zoneCells } from '../../../api/engine/geometry/zone-
 import { InvalidInput } from '../../../api/engine/errors.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 import { FIXED_M7, FRAME, zoneKm } from './km-fixtures.ts';
+import { boxRing } from '../fixtures/box-ring.ts';
 
 /* Areas by hand (plane geometry). Rings go through [lon, lat] and back, ~1e-9 km. */
-const square = (x0: number, y0: number, x1: number, y1: number): [number, number][] => [
-  [x0, y0],
-  [x1, y0],
-  [x1, y1],
-  [x0, y1],
-  [x0, y0],
-];
+
+/** The triangle (0, 0), (60, 0), (0, 45) km. */
+const TRIANGLE = zoneKm(
+  [
+    [
+      [0, 0],
+      [60, 0],
+      [0, 45],
+      [0, 0],
+    ],
+  ],
+  FIXED_M7,
+);
 
 describe('zoneCells', () => {
   it('a 100 km square with a 40 km square hole on the grid: 84 whole 10 km cells, 1/84 each', () => {
-    const zone = zoneKm([square(0, 0, 100, 100), square(30, 30, 70, 70)], FIXED_M7);
+    const zone = zoneKm([boxRing(0, 0, 100, 100), boxRing(30, 30, 70, 70)], FIXED_M7);
     const cells = zoneCells(zone, FRAME, 10);
     expect(cells.length).toBe(100 - 16);
     for (const cell of cells) {
@@ -35,7 +42,7 @@ describe('zoneCells', () => {
 
   it('anchored to the zone, not the frame: a square from (5, 5) is cut along x, y = 5, 15, ..., holes respected', () => {
     // Outer 5..105 x 5..105 (10 000 km²) minus hole 33..67 x 33..67 (1156 km²) = 8844 km².
-    const zone = zoneKm([square(5, 5, 105, 105), square(33, 33, 67, 67)], FIXED_M7);
+    const zone = zoneKm([boxRing(5, 5, 105, 105), boxRing(33, 33, 67, 67)], FIXED_M7);
     const cells = zoneCells(zone, FRAME, 10);
     const total = cells.reduce((s, c) => s + c.areaKm2, 0);
     expectRelative(total, 8844, 1e-6, 'area by hand');
@@ -68,17 +75,7 @@ describe('zoneCells', () => {
 
   it("a cell subdivided into 5 x 5 squares: the parts inside, shares adding to the cell's", () => {
     // Triangle (0,0), (60,0), (0,45): the 10 km cell 20..30 x 20..30 is cut by the hypotenuse 3x + 4y = 180.
-    const zone = zoneKm(
-      [
-        [
-          [0, 0],
-          [60, 0],
-          [0, 45],
-          [0, 0],
-        ],
-      ],
-      FIXED_M7,
-    );
+    const zone = TRIANGLE;
     const cells = zoneCells(zone, FRAME, 10);
     const cell = cells.find(
       (c) => c.box[0] > 19 && c.box[0] < 21 && c.box[1] > 19 && c.box[1] < 21,
@@ -103,17 +100,7 @@ describe('zoneCells', () => {
   });
 
   it('a triangle: total area ½ b h, cells south row first, west to east', () => {
-    const zone = zoneKm(
-      [
-        [
-          [0, 0],
-          [60, 0],
-          [0, 45],
-          [0, 0],
-        ],
-      ],
-      FIXED_M7,
-    );
+    const zone = TRIANGLE;
     const cells = zoneCells(zone, FRAME, 7.5);
     expectRelative(
       cells.reduce((s, c) => s + c.areaKm2, 0),
@@ -165,7 +152,7 @@ describe('zoneCells', () => {
   });
 
   it('refuses a cell size that is not positive', () => {
-    expect(() => zoneCells(zoneKm([square(0, 0, 10, 10)], FIXED_M7), FRAME, 0)).toThrow(
+    expect(() => zoneCells(zoneKm([boxRing(0, 0, 10, 10)], FIXED_M7), FRAME, 0)).toThrow(
       InvalidInput,
     );
   });

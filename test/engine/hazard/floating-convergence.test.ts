@@ -4,6 +4,7 @@ import { screenStudy } from '../../../api/engine/screen-study.ts';
 import { expectRelative } from '../../helpers/close.ts';
 import { FRAME, faultKm } from '../geometry/km-fixtures.ts';
 import { testSettings } from '../../helpers/test-settings.ts';
+import { ALL_KINDS_GROUND_MOTION } from '../fixtures/all-kinds-study.ts';
 
 /**
  * Floating ruptures by the midpoint rule (geometry/floating-ruptures.ts) converge: the 475- and
@@ -42,14 +43,7 @@ function faultStudy(ruptureSpacingKm: number): Study {
     name: 'Floating convergence',
     communities: [site('hanging-wall', 12, 30), site('near-end', 6, 58), site('foot-wall', -10, 5)],
     sources: [fault],
-    groundMotion: {
-      crustal: [
-        { model: 'BSSA14', weight: 0.5 },
-        { model: 'CB14', weight: 0.5 },
-      ],
-      interface: [{ model: 'AGA16', weight: 1 }],
-      intraslab: [{ model: 'AGA16', weight: 1 }],
-    },
+    groundMotion: ALL_KINDS_GROUND_MOTION,
     settings: testSettings({
       returnPeriodsYears: [475, 2475],
       maxDistanceKm: 200,

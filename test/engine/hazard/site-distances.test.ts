@@ -10,6 +10,7 @@ import { discretiseSource } from '../../../api/engine/ruptures/discretise.ts';
 import type { Rupture } from '../../../api/engine/ruptures/rupture.ts';
 import { expectClose } from '../../helpers/close.ts';
 import { FRAME, SETTINGS, contouredKm, faultKm, pointKm, zoneKm } from '../geometry/km-fixtures.ts';
+import { BENT_TRACE_KM } from '../fixtures/all-kinds-study.ts';
 
 /*
  * The fast path's distances against geometry/distances.ts (the reference, itself checked by hand
@@ -28,21 +29,14 @@ const M6: { type: 'fixed'; magnitude: number; rate: number } = {
 };
 const ruptures: Rupture[] = [
   ...discretiseSource(
-    faultKm(
-      [
-        [0, 0],
-        [25, 40],
-        [25, 90],
-      ],
-      {
-        dipDeg: 35,
-        dipDirectionDeg: 110,
-        upperDepthKm: 1,
-        lowerDepthKm: 18,
-        mechanism: 'reverse',
-        recurrence: M6,
-      },
-    ),
+    faultKm(BENT_TRACE_KM, {
+      dipDeg: 35,
+      dipDirectionDeg: 110,
+      upperDepthKm: 1,
+      lowerDepthKm: 18,
+      mechanism: 'reverse',
+      recurrence: M6,
+    }),
     0,
     FRAME,
     SETTINGS,

@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { hazardMapChunk, planHazardMap } from '../../../api/engine/map/hazard-map.ts';
 import type { Study } from '../../../api/engine/model.ts';
-import { createElevationGrid } from '../../../api/engine/terrain/elevation-grid.ts';
 import { siteProxy } from '../../../api/engine/terrain/site-proxy.ts';
 import { allKindsStudy } from '../fixtures/all-kinds-study.ts';
+import { lonLatGrid } from '../fixtures/lonlat-grid.ts';
 
 // The invented all-kinds study (test scaffolding) on a coarse grid, over a project-made terrain
 // grid: land whose height rises with the square of the distance east of its west edge (so the
@@ -26,17 +26,7 @@ function terrainOver(points: readonly { lon: number; lat: number }[]) {
   for (let r = 0; r < rows; r += 1)
     for (let c = 0; c < columns; c += 1)
       values.push(r < rows / 3 ? -50 : 10 + 20 * ((c * cell) / 0.1) ** 2);
-  return createElevationGrid({
-    label: 'squares.asc',
-    crs: { kind: 'lonlat' },
-    columns,
-    rows,
-    west,
-    north,
-    cellWidth: cell,
-    cellHeight: cell,
-    elevationM: values,
-  });
+  return lonLatGrid('squares.asc', { west, north, cellDeg: cell, columns, rows }, values);
 }
 
 describe('a hazard map over a terrain grid', () => {

@@ -1,4 +1,3 @@
-import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import { BSSA14_PGA, BSSA14_SA } from '../../../api/engine/motion/bssa14-coefficients.ts';
@@ -14,8 +13,13 @@ import {
 import type { Measure } from '../../../api/engine/motion/measure.ts';
 import { verticalStrikeSlip } from './crustal-input.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
-import { expectClose, expectRelative } from '../../helpers/close.ts';
-import { expectLnPeriodInterpolation, expectNotApplicable } from './model-checks.ts';
+import { expectClose } from '../../helpers/close.ts';
+import {
+  expectFallsWithDistanceRisesWithMagnitude,
+  itMatchesFigureMedians,
+  expectLnPeriodInterpolation,
+  expectNotApplicable,
+} from './model-checks.ts';
 import { worstKink } from './crustal-table-checks.ts';
 
 const SOURCE = 'Boore et al. (2014)';
@@ -178,26 +182,7 @@ describe('BSSA14: standard deviations', () => {
 });
 
 describe('BSSA14: medians against published figures', () => {
-  // Orders of magnitude read from memory of the paper's and Gregor et al. (2014)'s figures of
-  // median motion against distance (Vs30 = 760 m/s, strike-slip); ±30% suits a figure read by eye.
-  const cases: [string, Partial<GmmInput>, Measure, number][] = [
-    ['PGA, M 7, 10 km', { magnitude: 7, rjbKm: 10 }, PGA, 0.26],
-    ['SA(0.2), M 7, 10 km', { magnitude: 7, rjbKm: 10 }, sa(0.2), 0.57],
-    ['SA(1.0), M 7, 10 km', { magnitude: 7, rjbKm: 10 }, sa(1), 0.2],
-    ['PGA, M 7, 100 km', { magnitude: 7, rjbKm: 100 }, PGA, 0.03],
-    ['PGA, M 5, 10 km', { magnitude: 5, rjbKm: 10 }, PGA, 0.07],
-    ['PGV, M 7, 10 km (cm/s)', { magnitude: 7, rjbKm: 10 }, PGV, 25],
-  ];
-  for (const [label, over, m, expected] of cases) {
-    it(label, () => {
-      expectRelative(
-        Math.exp(lnY(over, m)),
-        expected,
-        0.3,
-        `Boore et al. (2014) / Gregor et al. (2014) figures, ${label} (from memory)`,
-      );
-    });
-  }
+  itMatchesFigureMedians(lnY, 'rjbKm', 'Boore et al. (2014) / Gregor et al. (2014)');
 
   it('gives SA(0.01) practically equal to PGA', () => {
     // PSA at 0.01 s equals PGA to within a few percent (common practice; the paper's rows agree).
@@ -239,24 +224,12 @@ describe('BSSA14: properties', () => {
   const measures = [PGA, PGV, sa(0.2), sa(1), sa(3)];
 
   it('falls with distance and rises with magnitude', () => {
-    fc.assert(
-      fc.property(
-        fc.double({ min: 3, max: 8.5, noNaN: true }),
-        fc.double({ min: 0, max: 390, noNaN: true }),
-        fc.double({ min: 0.5, max: 10, noNaN: true }),
-        fc.double({ min: 0.05, max: 0.5, noNaN: true }),
-        fc.constantFrom(...measures),
-        (magnitude, rjbKm, stepKm, stepM, m) => {
-          expect(lnY({ magnitude, rjbKm: rjbKm + stepKm }, m)).toBeLessThan(
-            lnY({ magnitude, rjbKm }, m),
-          );
-          expect(lnY({ magnitude: magnitude + stepM, rjbKm }, m)).toBeGreaterThan(
-            lnY({ magnitude, rjbKm }, m),
-          );
-        },
-      ),
-      { seed: 20140301, numRuns: 300 },
-    );
+    expectFallsWithDistanceRisesWithMagnitude(lnY, {
+      magnitude: [3, 8.5],
+      distance: 'rjbKm',
+      distanceKm: [0, 390],
+      seed: 20140301,
+    });
   });
 
   it('interpolates between rows in ln(period) and returns the row on a row', () => {

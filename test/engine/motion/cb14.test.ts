@@ -18,8 +18,13 @@ import {
 import type { Measure } from '../../../api/engine/motion/measure.ts';
 import { verticalStrikeSlip } from './crustal-input.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
-import { expectClose, expectRelative } from '../../helpers/close.ts';
-import { expectLnPeriodInterpolation, expectNotApplicable } from './model-checks.ts';
+import { expectClose } from '../../helpers/close.ts';
+import {
+  expectFallsWithDistanceRisesWithMagnitude,
+  itMatchesFigureMedians,
+  expectLnPeriodInterpolation,
+  expectNotApplicable,
+} from './model-checks.ts';
 import { worstKink } from './crustal-table-checks.ts';
 
 const SOURCE = 'Campbell & Bozorgnia (2014)';
@@ -240,26 +245,7 @@ describe('CB14: standard deviations', () => {
 });
 
 describe('CB14: medians against published figures', () => {
-  // Orders of magnitude read from memory of the paper's and Gregor et al. (2014)'s figures of
-  // median motion against distance (Vs30 = 760 m/s, strike-slip); ±30% suits a figure read by eye.
-  const cases: [string, Partial<GmmInput>, Measure, number][] = [
-    ['PGA, M 7, 10 km', { magnitude: 7, rrupKm: 10 }, PGA, 0.26],
-    ['SA(0.2), M 7, 10 km', { magnitude: 7, rrupKm: 10 }, sa(0.2), 0.57],
-    ['SA(1.0), M 7, 10 km', { magnitude: 7, rrupKm: 10 }, sa(1), 0.2],
-    ['PGA, M 7, 100 km', { magnitude: 7, rrupKm: 100 }, PGA, 0.03],
-    ['PGA, M 5, 10 km', { magnitude: 5, rrupKm: 10 }, PGA, 0.07],
-    ['PGV, M 7, 10 km (cm/s)', { magnitude: 7, rrupKm: 10 }, PGV, 25],
-  ];
-  for (const [label, over, m, expected] of cases) {
-    it(label, () => {
-      expectRelative(
-        Math.exp(lnY(over, m)),
-        expected,
-        0.3,
-        `Campbell & Bozorgnia (2014) / Gregor et al. (2014) figures, ${label} (from memory)`,
-      );
-    });
-  }
+  itMatchesFigureMedians(lnY, 'rrupKm', 'Campbell & Bozorgnia (2014) / Gregor et al. (2014)');
 
   it('agrees with BSSA14 within the spread of the NGA-West2 models', () => {
     // Gregor et al. (2014), Earthquake Spectra 30(3): for M 6–8 at 10–100 km the NGA-West2
@@ -323,24 +309,10 @@ describe('CB14: properties', () => {
   it('falls with distance and rises with magnitude', () => {
     // At Rrup near zero and M > 6.5 the paper saturates on purpose (c1 + c2 + c3 + c4 nearly
     // cancels c6 ln c7 for PGA), so magnitude scaling is checked from 5 km out.
-    fc.assert(
-      fc.property(
-        fc.double({ min: 3.3, max: 8.4, noNaN: true }),
-        fc.double({ min: 5, max: 290, noNaN: true }),
-        fc.double({ min: 0.5, max: 10, noNaN: true }),
-        fc.double({ min: 0.05, max: 0.5, noNaN: true }),
-        fc.constantFrom(...measures),
-        (magnitude, rrupKm, stepKm, stepM, m) => {
-          expect(lnY({ magnitude, rrupKm: rrupKm + stepKm }, m)).toBeLessThan(
-            lnY({ magnitude, rrupKm }, m),
-          );
-          expect(lnY({ magnitude: magnitude + stepM, rrupKm }, m)).toBeGreaterThan(
-            lnY({ magnitude, rrupKm }, m),
-          );
-        },
-      ),
-      { seed: 20140303, numRuns: 300 },
-    );
+    expectFallsWithDistanceRisesWithMagnitude(lnY, {
+      magnitude: [3.3, 8.4],
+      seed: 20140303,
+    });
   });
 
   it('interpolates between rows in ln(period) and returns the row on a row', () => {

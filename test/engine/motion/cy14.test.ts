@@ -1,11 +1,9 @@
-import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { runCli } from '../../../api/cli.ts';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import {
   CY14_COLUMNS,
   CY14_PGA,
-  CY14_PGV,
   CY14_SA,
   type Cy14Row,
 } from '../../../api/engine/motion/cy14-coefficients.ts';
@@ -24,7 +22,12 @@ import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
 import { readProbeRequest } from '../../../api/operations/probe-request.ts';
 import { expectClose } from '../../helpers/close.ts';
-import { expectLnPeriodInterpolation, expectNotApplicable } from './model-checks.ts';
+import {
+  expectFallsWithDistanceRisesWithMagnitude,
+  expectHangingWallAboveFootwall,
+  expectLnPeriodInterpolation,
+  expectNotApplicable,
+} from './model-checks.ts';
 import { verticalStrikeSlip } from './crustal-input.ts';
 import { itMatchesVectorFile, itMatchesWithZ1Given, readVectors } from './reference-vectors.ts';
 
@@ -59,29 +62,6 @@ describe('CY14: the reference vectors', () => {
 });
 
 describe('CY14: the coefficient table', () => {
-  const rows: readonly Cy14Row[] = [CY14_PGV, CY14_PGA, ...CY14_SA];
-
-  it('has PGV, PGA and 24 spectral rows at increasing periods from 0.01 to 10 s', () => {
-    expect(CY14_PGV.periodS).toBe(-1);
-    expect(CY14_PGA.periodS).toBe(0);
-    const periods = CY14_SA.map((r) => r.periodS);
-    expect(periods.length).toBe(24);
-    expect(periods[0]).toBe(0.01);
-    expect(periods[periods.length - 1]).toBe(10);
-    for (let i = 1; i < periods.length; i++)
-      expect(periods[i] as number).toBeGreaterThan(periods[i - 1] as number);
-    expect(cy14.periodsS).toEqual(periods);
-  });
-
-  it('has every column, finite, in every row, and nothing else', () => {
-    expect(CY14_COLUMNS.length).toBe(45);
-    for (const row of rows) {
-      expect(Object.keys(row).sort()).toEqual(['periodS', ...CY14_COLUMNS].sort());
-      for (const column of CY14_COLUMNS)
-        expect(Number.isFinite(row[column]), `${column} at ${row.periodS} s`).toBe(true);
-    }
-  });
-
   it('has the PGA row equal to the 0.01 s row, as published', () => {
     const first = CY14_SA[0] as Cy14Row;
     for (const column of CY14_COLUMNS) expect(CY14_PGA[column], column).toBe(first[column]);
@@ -178,47 +158,15 @@ describe('CY14: properties', () => {
   const measures = [PGA, PGV, sa(0.2), sa(1), sa(3)];
 
   it('falls with distance and rises with magnitude', () => {
-    fc.assert(
-      fc.property(
-        fc.double({ min: 3.5, max: 8.4, noNaN: true }),
-        fc.double({ min: 5, max: 290, noNaN: true }),
-        fc.double({ min: 0.5, max: 10, noNaN: true }),
-        fc.double({ min: 0.05, max: 0.5, noNaN: true }),
-        fc.constantFrom(200, 400, 760),
-        fc.constantFrom(...measures),
-        (magnitude, rrupKm, stepKm, stepM, vs30, m) => {
-          expect(lnY({ magnitude, rrupKm: rrupKm + stepKm, vs30 }, m)).toBeLessThan(
-            lnY({ magnitude, rrupKm, vs30 }, m),
-          );
-          expect(lnY({ magnitude: magnitude + stepM, rrupKm, vs30 }, m)).toBeGreaterThan(
-            lnY({ magnitude, rrupKm, vs30 }, m),
-          );
-        },
-      ),
-      { seed: 20140802, numRuns: 300 },
-    );
+    expectFallsWithDistanceRisesWithMagnitude(lnY, {
+      magnitude: [3.5, 8.4],
+      vs30: [200, 400, 760],
+      seed: 20140802,
+    });
   });
 
   it('is higher on the hanging wall of a dipping reverse fault than on the footwall', () => {
-    // M 7, dip 45°, Ztor 2 km, W 20 km. Hanging wall at Rx 10 km (above the rupture: Rjb 0, Rrup
-    // (10 + 2)/√2); footwall at Rx −10 km (Rjb 10, Rrup √(10² + 2²)).
-    const fault = {
-      magnitude: 7,
-      rakeDeg: 90,
-      mechanism: 'reverse' as const,
-      dipDeg: 45,
-      ztorKm: 2,
-      widthKm: 20,
-    };
-    const hanging = input({ ...fault, rxKm: 10, rjbKm: 0, rrupKm: 12 / Math.SQRT2 });
-    const foot = input({ ...fault, rxKm: -10, rjbKm: 10, rrupKm: Math.hypot(10, 2) });
-    for (const m of [PGA, PGV, sa(0.2), sa(1), sa(3)]) {
-      expect(cy14.predict(hanging, m).lnMedian).toBeGreaterThan(cy14.predict(foot, m).lnMedian);
-      // The same distances on either side: the difference is the hanging-wall term alone, and positive.
-      expect(cy14.predict(hanging, m).lnMedian).toBeGreaterThan(
-        cy14.predict({ ...hanging, rxKm: -10 }, m).lnMedian,
-      );
-    }
+    expectHangingWallAboveFootwall(lnY, [PGA, PGV, sa(0.2), sa(1), sa(3)]);
   });
 
   it('interpolates between rows in ln(period) and returns the row on a row', () => {

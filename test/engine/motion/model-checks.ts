@@ -1,7 +1,8 @@
-import { expect } from 'vitest';
+import fc from 'fast-check';
+import { expect, it } from 'vitest';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
 import type { GmmInput, GmmPrediction } from '../../../api/engine/motion/types.ts';
-import { expectClose } from '../../helpers/close.ts';
+import { expectClose, expectRelative } from '../../helpers/close.ts';
 
 const RULE = 'interpolate-period.ts rule (common practice)';
 
@@ -40,4 +41,121 @@ export function expectNotApplicable(
       for (const v of [p.lnMedian, p.sigma, p.tau, p.phi]) expect(Number.isFinite(v)).toBe(true);
     }
   }
+}
+
+export interface MonotonyOptions {
+  /** Magnitudes drawn (from the model's lower end, or above where it saturates on purpose). */
+  readonly magnitude: readonly [number, number];
+  /** The model's distance input and the range drawn for it, km (Rrup 5–290 km when absent). */
+  readonly distance?: 'rjbKm' | 'rrupKm';
+  readonly distanceKm?: readonly [number, number];
+  /** Vs30 values drawn (m/s); the input's own Vs30 when absent. */
+  readonly vs30?: readonly number[];
+  /** fast-check seed, fixed so that a failure replays. */
+  readonly seed: number;
+}
+
+/** The measures the crustal models' property checks draw from. */
+export const CRUSTAL_MEASURES: readonly Measure[] = [
+  { kind: 'PGA' },
+  { kind: 'PGV' },
+  ...[0.2, 1, 3].map((periodS): Measure => ({ kind: 'SA', periodS })),
+];
+
+/**
+ * Property (300 drawn cases): ln median falls when the distance grows by 0.5–10 km and rises
+ * when the magnitude grows by 0.05–0.5, for each of CRUSTAL_MEASURES.
+ */
+export function expectFallsWithDistanceRisesWithMagnitude(
+  lnY: (over: Partial<GmmInput>, measure: Measure) => number,
+  options: MonotonyOptions,
+): void {
+  const [mMin, mMax] = options.magnitude;
+  const distance = options.distance ?? 'rrupKm';
+  const [dMin, dMax] = options.distanceKm ?? [5, 290];
+  const vs30 = options.vs30 ? fc.constantFrom(...options.vs30) : fc.constant(undefined);
+  fc.assert(
+    fc.property(
+      fc.double({ min: mMin, max: mMax, noNaN: true }),
+      fc.double({ min: dMin, max: dMax, noNaN: true }),
+      fc.double({ min: 0.5, max: 10, noNaN: true }),
+      fc.double({ min: 0.05, max: 0.5, noNaN: true }),
+      vs30,
+      fc.constantFrom(...CRUSTAL_MEASURES),
+      (magnitude, km, stepKm, stepM, vs30, m) => {
+        const site = vs30 === undefined ? {} : { vs30 };
+        const at = { magnitude, [distance]: km, ...site };
+        expect(lnY({ ...at, [distance]: km + stepKm }, m)).toBeLessThan(lnY(at, m));
+        expect(lnY({ ...at, magnitude: magnitude + stepM }, m)).toBeGreaterThan(lnY(at, m));
+      },
+    ),
+    { seed: options.seed, numRuns: 300 },
+  );
+}
+
+/**
+ * A reverse fault of M 7, dip 45°, Ztor 2 km, W 20 km: the hanging-wall site at Rx 10 km (above
+ * the rupture: Rjb 0, Rrup (10 + 2)/√2) and the footwall site at Rx −10 km (Rjb 10, Rrup
+ * √(10² + 2²)) (geometry by hand).
+ */
+export const HANGING_WALL_CASE = {
+  hanging: {
+    magnitude: 7,
+    rakeDeg: 90,
+    mechanism: 'reverse',
+    dipDeg: 45,
+    ztorKm: 2,
+    widthKm: 20,
+    rxKm: 10,
+    rjbKm: 0,
+    rrupKm: 12 / Math.SQRT2,
+  },
+  foot: { rxKm: -10, rjbKm: 10, rrupKm: Math.hypot(10, 2) },
+} as const satisfies { hanging: Partial<GmmInput>; foot: Partial<GmmInput> };
+
+/**
+ * ln median on the hanging wall of HANGING_WALL_CASE exceeds the footwall's, and exceeds that of
+ * the same distances on the footwall side (Rx −10 km): the hanging-wall term alone, positive.
+ */
+export function expectHangingWallAboveFootwall(
+  lnY: (over: Partial<GmmInput>, measure: Measure) => number,
+  measures: readonly Measure[],
+): void {
+  const { hanging, foot } = HANGING_WALL_CASE;
+  for (const m of measures) {
+    expect(lnY(hanging, m)).toBeGreaterThan(lnY({ ...hanging, ...foot }, m));
+    expect(lnY(hanging, m)).toBeGreaterThan(lnY({ ...hanging, rxKm: -10 }, m));
+  }
+}
+
+const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
+
+/**
+ * Orders of magnitude read from memory of the NGA-West2 papers' and Gregor et al. (2014)'s
+ * figures of median motion against distance (Vs30 = 760 m/s, strike-slip): label, M, distance
+ * (km), measure, median (g; PGV cm/s).
+ */
+const FIGURE_MEDIANS: readonly (readonly [string, number, number, Measure, number])[] = [
+  ['PGA, M 7, 10 km', 7, 10, { kind: 'PGA' }, 0.26],
+  ['SA(0.2), M 7, 10 km', 7, 10, sa(0.2), 0.57],
+  ['SA(1.0), M 7, 10 km', 7, 10, sa(1), 0.2],
+  ['PGA, M 7, 100 km', 7, 100, { kind: 'PGA' }, 0.03],
+  ['PGA, M 5, 10 km', 5, 10, { kind: 'PGA' }, 0.07],
+  ['PGV, M 7, 10 km (cm/s)', 7, 10, { kind: 'PGV' }, 25],
+];
+
+/** One test a FIGURE_MEDIANS row: the median within ±30%, which suits a figure read by eye. */
+export function itMatchesFigureMedians(
+  lnY: (over: Partial<GmmInput>, measure: Measure) => number,
+  distance: 'rjbKm' | 'rrupKm',
+  source: string,
+): void {
+  it.each(FIGURE_MEDIANS)('%s', (label, magnitude, distanceKm, measure, expected) => {
+    expectRelative(
+      Math.exp(lnY({ magnitude, [distance]: distanceKm }, measure)),
+      expected,
+      0.3,
+      `${source} figures, ${label} (from memory)`,
+    );
+  });
 }

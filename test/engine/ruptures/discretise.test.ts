@@ -5,17 +5,11 @@ import { discretiseSource, discretiseStudy } from '../../../api/engine/ruptures/
 import type { Rupture } from '../../../api/engine/ruptures/rupture.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 import { FIXED_M7, FRAME, SETTINGS, faultKm, pointKm, zoneKm } from '../geometry/km-fixtures.ts';
+import { boxRing } from '../fixtures/box-ring.ts';
 
 const sumRates = (ruptures: readonly Rupture[]): number =>
   ruptures.reduce((s, r) => s + r.annualRate, 0);
 const GR: Recurrence = { type: 'gutenberg-richter', bValue: 1, mMin: 5, mMax: 7.5, aValue: 3.5 };
-const square = (x0: number, y0: number, x1: number, y1: number): [number, number][] => [
-  [x0, y0],
-  [x1, y0],
-  [x1, y1],
-  [x0, y1],
-  [x0, y0],
-];
 
 describe('discretiseSource: a hand-made vertical strike-slip fault, 100 km x 15 km, M 7.0 at 0.01/yr', () => {
   // Wells & Coppersmith 1994 Table 2A strike-slip (from memory): RA = 10^2.88 = 758.58 km²,
@@ -120,7 +114,7 @@ describe('discretiseSource: rates per source sum to the source total', () => {
   // 25 bins of 0.1 from M 5: the 15 below M 6.5 as points, the 10 from M 6.55 up as virtual
   // ruptures, one per zone cell, eight per point source (ruptures/virtual-ruptures.ts).
   it('zone with a hole: 84 cells x 25 bins, rates summing to 10^(3.5 - 5)', () => {
-    const zone = zoneKm([square(0, 0, 100, 100), square(30, 30, 70, 70)], GR, 12);
+    const zone = zoneKm([boxRing(0, 0, 100, 100), boxRing(30, 30, 70, 70)], GR, 12);
     const ruptures = discretiseSource(zone, 3, FRAME, SETTINGS);
     expect(ruptures.length).toBe(84 * 25);
     expectRelative(sumRates(ruptures), 10 ** -1.5, 1e-9, 'rate of M >= mMin');

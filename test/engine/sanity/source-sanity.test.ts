@@ -3,51 +3,24 @@ import type { FaultSource, Recurrence, Study, ZoneSource } from '../../../api/en
 import { sourceSanity } from '../../../api/engine/sanity/source-sanity.ts';
 import { expectRelative } from '../../helpers/close.ts';
 import { testSettings } from '../../helpers/test-settings.ts';
+import { boxRing } from '../fixtures/box-ring.ts';
+import { faultLonLat, zoneLonLat } from '../geometry/km-fixtures.ts';
 
 /*
  * Invented sources in open ocean (test data). The fault: a vertical strike-slip trace along
  * 150° W from 47.135° S to 46.865° S (0.27° of latitude, 30.0 km on the WGS84 ellipsoid there,
  * from memory of the meridian arc, 111.1 km a degree), 0–15 km deep: about 450 km².
  */
-const fault = (
-  recurrence: Recurrence,
-  setting: FaultSource['setting'] = 'crustal',
-): FaultSource => ({
-  kind: 'fault',
-  id: 'test-fault',
-  name: 'Test fault',
-  setting,
-  mechanism: 'strike-slip',
-  rakeDeg: 0,
-  recurrence,
-  trace: [
-    [-150, -47.135],
-    [-150, -46.865],
-  ],
-  dipDeg: 90,
-  dipDirectionDeg: 90,
-  upperDepthKm: 0,
-  lowerDepthKm: 15,
-});
-const zone = (recurrence: Recurrence): ZoneSource => ({
-  kind: 'zone',
-  id: 'test-zone',
-  name: 'Test zone',
-  setting: 'crustal',
-  mechanism: 'strike-slip',
-  rakeDeg: 0,
-  recurrence,
-  rings: [
+const fault = (recurrence: Recurrence, setting: FaultSource['setting'] = 'crustal'): FaultSource =>
+  faultLonLat(
     [
-      [-150.5, -47.5],
-      [-149.5, -47.5],
-      [-149.5, -46.5],
-      [-150.5, -46.5],
-      [-150.5, -47.5],
+      [-150, -47.135],
+      [-150, -46.865],
     ],
-  ],
-  depthKm: 8,
-});
+    { recurrence, setting, dipDeg: 90, dipDirectionDeg: 90, upperDepthKm: 0, lowerDepthKm: 15 },
+  );
+const zone = (recurrence: Recurrence): ZoneSource =>
+  zoneLonLat([boxRing(-150.5, -47.5, -149.5, -46.5)], recurrence, 8);
 const study = (...sources: Study['sources']): Study => ({
   name: 'Sanity test',
   communities: [],

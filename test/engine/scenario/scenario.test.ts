@@ -40,18 +40,33 @@ function study(sources: Source[], communities: Community[]): Study {
 
 const common = { setting: 'crustal', mechanism: 'strike-slip', rakeDeg: 0 } as const;
 
+/** A point source 'p' at the frame's origin, 10 km deep, M 6.5 (invented). */
+const point: Source = {
+  ...common,
+  id: 'p',
+  name: 'P',
+  kind: 'point',
+  location: at(0, 0),
+  depthKm: 10,
+  recurrence: { type: 'fixed', magnitude: 6.5, rate: 0.01 },
+};
+
+/** A vertical strike-slip fault 'f' along x = 0 from y = −40 to 40 km, 0–12 km deep, M 6 (invented). */
+const fault: Source = {
+  ...common,
+  id: 'f',
+  name: 'F',
+  kind: 'fault',
+  trace: [at(0, -40), at(0, 40)],
+  dipDeg: 90,
+  dipDirectionDeg: 90,
+  upperDepthKm: 0,
+  lowerDepthKm: 12,
+  recurrence: { type: 'fixed', magnitude: 6, rate: 0.01 },
+};
+
 describe('runScenario', () => {
   it('gives Cornell et al. (1979) medians, 84th percentiles and Worden et al. (2012) MMI for a point source', () => {
-    const [lon, lat] = at(0, 0);
-    const point: Source = {
-      ...common,
-      id: 'p',
-      name: 'P',
-      kind: 'point',
-      location: [lon, lat],
-      depthKm: 10,
-      recurrence: { type: 'fixed', magnitude: 6.5, rate: 0.01 },
-    };
     // Communities 30 and 0 km from the epicentre: the test's study frame is centred elsewhere, so
     // distances carry the projection's small error (< 1e-3 relative within 50 km, projection.ts).
     const s = study([point], [community('a', 30, 0), community('b', 0, 0)]);
@@ -87,19 +102,6 @@ describe('runScenario', () => {
   });
 
   it("places the 'closest' rupture nearest each community and a named community's rupture for all", () => {
-    const trace = [at(0, -40), at(0, 40)];
-    const fault: Source = {
-      ...common,
-      id: 'f',
-      name: 'F',
-      kind: 'fault',
-      trace,
-      dipDeg: 90,
-      dipDirectionDeg: 90,
-      upperDepthKm: 0,
-      lowerDepthKm: 12,
-      recurrence: { type: 'fixed', magnitude: 6, rate: 0.01 },
-    };
     const s = study([fault], [community('north', 5, 35), community('south', 5, -35)]);
     const each = runScenario(s, models, { sourceId: 'f', magnitude: 6 });
     // A vertical fault reaching the surface: the closest floating rupture lies beside each site, Rrup = 5 km.
@@ -115,19 +117,6 @@ describe('runScenario', () => {
   });
 
   it('places an explicit fault position from the start of the trace and refuses one off the fault', () => {
-    const trace = [at(0, -40), at(0, 40)];
-    const fault: Source = {
-      ...common,
-      id: 'f',
-      name: 'F',
-      kind: 'fault',
-      trace,
-      dipDeg: 90,
-      dipDirectionDeg: 90,
-      upperDepthKm: 0,
-      lowerDepthKm: 12,
-      recurrence: { type: 'fixed', magnitude: 6, rate: 0.01 },
-    };
     const s = study([fault], [community('south', 5, -35), community('north', 5, 35)]);
     // M 6 strike-slip: Wells & Coppersmith (1994) area and width give a rupture about 13 km long
     // (from memory), so one starting at the south end runs from y = -40 to about y = -27 km.
@@ -148,16 +137,6 @@ describe('runScenario', () => {
   });
 
   it('refuses an unknown source, a magnitude out of range and a bad explicit position, naming the field', () => {
-    const [lon, lat] = at(0, 0);
-    const point: Source = {
-      ...common,
-      id: 'p',
-      name: 'P',
-      kind: 'point',
-      location: [lon, lat],
-      depthKm: 10,
-      recurrence: { type: 'fixed', magnitude: 6.5, rate: 0.01 },
-    };
     const s = study([point], [community('a', 30, 0)]);
     const issuePaths = (request: Parameters<typeof runScenario>[2]) => {
       try {
@@ -179,16 +158,6 @@ describe('runScenario', () => {
   });
 
   it('maps median PGA on a grid, strongest at the grid point nearest the epicentre', () => {
-    const [lon, lat] = at(0, 0);
-    const point: Source = {
-      ...common,
-      id: 'p',
-      name: 'P',
-      kind: 'point',
-      location: [lon, lat],
-      depthKm: 10,
-      recurrence: { type: 'fixed', magnitude: 6.5, rate: 0.01 },
-    };
     const s = study([point], [community('a', 30, 0)]);
     const { grid } = runScenario(s, models, { sourceId: 'p', magnitude: 6.5, gridSpacingKm: 5 });
     expect(grid).toBeDefined();
@@ -199,19 +168,6 @@ describe('runScenario', () => {
   });
 
   it('with a map, the table and the map show one earthquake: each community reads as the map beside it', () => {
-    const trace = [at(0, -40), at(0, 40)];
-    const fault: Source = {
-      ...common,
-      id: 'f',
-      name: 'F',
-      kind: 'fault',
-      trace,
-      dipDeg: 90,
-      dipDirectionDeg: 90,
-      upperDepthKm: 0,
-      lowerDepthKm: 12,
-      recurrence: { type: 'fixed', magnitude: 6, rate: 0.01 },
-    };
     const s = study(
       [fault],
       [community('north', 5, 35), community('south', 5, -35), community('middle', 5, 0)],

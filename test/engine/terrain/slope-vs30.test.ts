@@ -8,6 +8,7 @@ import {
   slopeStepDeg,
 } from '../../../api/engine/terrain/topographic-slope.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
+import { lonLatGrid } from '../fixtures/lonlat-grid.ts';
 
 const TABLE = 'Wald & Allen (2007) BSSA 97(5) Table 1, active tectonic regions (from memory)';
 
@@ -62,17 +63,7 @@ function tiltedGrid(riseMPerDegLon: number, cellDeg: number) {
   const values: number[] = [];
   for (let r = 0; r < rows; r += 1)
     for (let c = 0; c < columns; c += 1) values.push(10 + riseMPerDegLon * (c + 0.5) * cellDeg);
-  return createElevationGrid({
-    label: 'tilted.asc',
-    crs: { kind: 'lonlat' },
-    columns,
-    rows,
-    west,
-    north,
-    cellWidth: cellDeg,
-    cellHeight: cellDeg,
-    elevationM: values,
-  });
+  return lonLatGrid('tilted.asc', { west, north, cellDeg, columns, rows }, values);
 }
 
 describe('slope from a grid', () => {

@@ -8,6 +8,7 @@ import { SLOW_WALK_MS, highGround, tsunamiScreening } from '../../../api/engine/
 import { STANDARD_GRAVITY_MS2 } from '../../../api/engine/units.ts';
 import { loadStudy } from '../../../api/study/load-study.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
+import { lonLatGrid } from '../fixtures/lonlat-grid.ts';
 
 /** The coast of the test shore: sea west of this longitude, land east (invented). */
 const COAST_LON = -140.0;
@@ -15,37 +16,30 @@ const SEA_DEPTH_M = 2000;
 /** Land rises 10 m per km east of the coast from 2 m (invented). */
 const landM = (kmInland: number) => 2 + 10 * kmInland;
 
-/** A test study: one interface fault dipping east offshore and coastal communities (all invented). */
-function study(communities: object[]): Study {
+/**
+ * A test study of the shore (all invented): `communities`, one reverse interface source of M 8
+ * at 0.001 a year (its GeoJSON `geometry` and the rest of its `properties`) with AGA16, PGA at
+ * 475 years; `outline` if given.
+ */
+function shoreStudy(
+  name: string,
+  communities: object[],
+  source: { geometry: object; properties: object },
+  outline?: object,
+): Study {
+  const properties = {
+    setting: 'interface',
+    mechanism: 'reverse',
+    recurrence: { type: 'fixed', magnitude: 8, rate: 0.001 },
+    ...source.properties,
+  };
+  const feature = { type: 'Feature', geometry: source.geometry, properties };
   const loaded = loadStudy(
     {
-      name: 'Tsunami test shore',
+      name,
       communities,
-      sources: {
-        type: 'FeatureCollection',
-        features: [
-          {
-            type: 'Feature',
-            geometry: {
-              type: 'LineString',
-              coordinates: [
-                [-141.2, -47.5],
-                [-141.2, -46.9],
-              ],
-            },
-            properties: {
-              id: 'trench',
-              name: 'Test trench',
-              setting: 'interface',
-              mechanism: 'reverse',
-              dip: 45,
-              upperDepthKm: 5,
-              lowerDepthKm: 15,
-              recurrence: { type: 'fixed', magnitude: 8, rate: 0.001 },
-            },
-          },
-        ],
-      },
+      ...(outline ? { outline } : {}),
+      sources: { type: 'FeatureCollection', features: [feature] },
       groundMotion: { interface: [{ model: 'AGA16', weight: 1 }] },
       settings: { measures: ['PGA'], horizonsYears: [50], returnPeriodsYears: [475] },
     },
@@ -53,6 +47,26 @@ function study(communities: object[]): Study {
   );
   if (!loaded.ok) throw new Error(JSON.stringify(loaded.issues));
   return loaded.study;
+}
+
+/** A test study: one interface fault dipping east offshore and coastal communities (all invented). */
+function study(communities: object[]): Study {
+  return shoreStudy('Tsunami test shore', communities, {
+    geometry: {
+      type: 'LineString',
+      coordinates: [
+        [-141.2, -47.5],
+        [-141.2, -46.9],
+      ],
+    },
+    properties: {
+      id: 'trench',
+      name: 'Test trench',
+      dip: 45,
+      upperDepthKm: 5,
+      lowerDepthKm: 15,
+    },
+  });
 }
 
 /** A lon/lat grid of 0.01° from `west` to −139.0 and −48.0 to −46.4: sea of constant depth west of the coast, a ramp of land east. */
@@ -71,17 +85,7 @@ function shoreGrid(west = -142.0) {
         lon < COAST_LON ? -SEA_DEPTH_M : landM((lon - COAST_LON) * kmPerDeg);
     }
   }
-  return createElevationGrid({
-    label: 'shore.asc',
-    crs: { kind: 'lonlat' },
-    columns,
-    rows,
-    west,
-    north,
-    cellWidth: cell,
-    cellHeight: cell,
-    elevationM: values,
-  });
+  return lonLatGrid('shore.asc', { west, north, cellDeg: cell, columns, rows }, values);
 }
 
 const cove = { id: 'cove', name: 'Cove', lon: -139.995, lat: -47.2, vs30: 400, coastal: true };
@@ -162,59 +166,43 @@ function inletGrid() {
  * outline of the land: the coarse coastline a study draws, which does not follow the inlet.
  */
 function contouredStudy(communities: object[]): Study {
-  const loaded = loadStudy(
+  return shoreStudy(
+    'Tsunami test shore, contoured',
+    communities,
     {
-      name: 'Tsunami test shore, contoured',
-      communities,
-      outline: {
-        type: 'Polygon',
+      geometry: {
+        type: 'MultiLineString',
         coordinates: [
           [
-            [COAST_LON, -48.0],
-            [-139.0, -48.0],
-            [-139.0, -46.4],
-            [COAST_LON, -46.4],
-            [COAST_LON, -48.0],
+            [-140.4, -47.5],
+            [-140.4, -46.9],
+          ],
+          [
+            [-139.7, -47.5],
+            [-139.7, -46.9],
           ],
         ],
       },
-      sources: {
-        type: 'FeatureCollection',
-        features: [
-          {
-            type: 'Feature',
-            geometry: {
-              type: 'MultiLineString',
-              coordinates: [
-                [
-                  [-140.4, -47.5],
-                  [-140.4, -46.9],
-                ],
-                [
-                  [-139.7, -47.5],
-                  [-139.7, -46.9],
-                ],
-              ],
-            },
-            properties: {
-              id: 'curved-trench',
-              name: 'Test contoured trench',
-              setting: 'interface',
-              mechanism: 'reverse',
-              contourDepthsKm: [5, 30],
-              meshSpacingKm: 10,
-              recurrence: { type: 'fixed', magnitude: 8, rate: 0.001 },
-            },
-          },
-        ],
+      properties: {
+        id: 'curved-trench',
+        name: 'Test contoured trench',
+        contourDepthsKm: [5, 30],
+        meshSpacingKm: 10,
       },
-      groundMotion: { interface: [{ model: 'AGA16', weight: 1 }] },
-      settings: { measures: ['PGA'], horizonsYears: [50], returnPeriodsYears: [475] },
     },
-    { models: modelCatalog },
+    {
+      type: 'Polygon',
+      coordinates: [
+        [
+          [COAST_LON, -48.0],
+          [-139.0, -48.0],
+          [-139.0, -46.4],
+          [COAST_LON, -46.4],
+          [COAST_LON, -48.0],
+        ],
+      ],
+    },
   );
-  if (!loaded.ok) throw new Error(JSON.stringify(loaded.issues));
-  return loaded.study;
 }
 
 describe('tsunami source of an interface that runs on under the land', () => {

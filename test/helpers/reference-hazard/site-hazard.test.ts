@@ -40,7 +40,7 @@ const branches = {
 };
 
 describe('siteHazard: logic tree over two settings (hand computation)', () => {
-  const result = siteHazard({
+  const input = {
     ruptures,
     distances,
     site: ROCK_SITE,
@@ -48,7 +48,8 @@ describe('siteHazard: logic tree over two settings (hand computation)', () => {
     measures,
     truncationSigma: Infinity,
     maxDistanceKm: 300,
-  });
+  };
+  const result = siteHazard(input);
   const curve = result.curves.PGA!;
 
   it('mean curve = 0.6 λc Q(ε₁) + 0.4 λc Q(ε₂) + λi Q(εi)', () => {
@@ -93,31 +94,14 @@ describe('siteHazard: logic tree over two settings (hand computation)', () => {
   });
 
   it('omits the per-branch curves above the combination cap but keeps the same mean', () => {
-    const capped = siteHazard({
-      ruptures,
-      distances,
-      site: ROCK_SITE,
-      branches,
-      measures,
-      truncationSigma: Infinity,
-      maxDistanceKm: 300,
-      maxBranchCombinations: 1,
-    });
+    const capped = siteHazard({ ...input, maxBranchCombinations: 1 });
     expect(capped.branchCurvesOmitted).toBe(true);
     expect(capped.curves.PGA!.branches).toBeUndefined();
     expect(capped.curves.PGA!.annualRate).toEqual(curve.annualRate);
   });
 
   it('is deterministic: the same inputs give identical numbers', () => {
-    const again = siteHazard({
-      ruptures,
-      distances,
-      site: ROCK_SITE,
-      branches,
-      measures,
-      truncationSigma: Infinity,
-      maxDistanceKm: 300,
-    });
+    const again = siteHazard(input);
     expect(again.curves).toEqual(result.curves);
   });
 });
