@@ -16,6 +16,19 @@ export type DemoSeed =
   | { readonly seeded: true; readonly id: string }
   | { readonly seeded: false; readonly issues: readonly InputIssue[] };
 
+/** A file shipped with Tremora, or the issue that names it and why it cannot be read. */
+function readDemoFile(
+  url: URL,
+  what: string,
+): { ok: true; text: string } | { ok: false; issue: InputIssue } {
+  try {
+    return { ok: true, text: readFileSync(url, 'utf8') };
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code ?? 'error';
+    return { ok: false, issue: { path: url.pathname, message: `cannot read ${what} (${code})` } };
+  }
+}
+
 /**
  * Saves the demo study and its catalog, each validated like any other, into `store`. Called
  * once, when the database is new, so a user who deletes the demo does not find it back at the
@@ -27,38 +40,16 @@ export function seedDemoStudy(
   url: URL = DEMO_STUDY_URL,
   catalogUrl: URL = DEMO_CATALOG_URL,
 ): DemoSeed {
-  let text: string;
-  try {
-    text = readFileSync(url, 'utf8');
-  } catch (error) {
-    return {
-      seeded: false,
-      issues: [
-        {
-          path: url.pathname,
-          message: `cannot read the demo study (${(error as NodeJS.ErrnoException).code ?? 'error'})`,
-        },
-      ],
-    };
-  }
+  const read = readDemoFile(url, 'the demo study');
+  if (!read.ok) return { seeded: false, issues: [read.issue] };
+  const text = read.text;
   const parsed = parseJsonText(text, url.pathname);
   if (!parsed.ok) return { seeded: false, issues: [parsed.issue] };
   const result = loadStudy(parsed.value, { models });
   if (!result.ok) return { seeded: false, issues: result.issues };
-  let catalogText: string;
-  try {
-    catalogText = readFileSync(catalogUrl, 'utf8');
-  } catch (error) {
-    return {
-      seeded: false,
-      issues: [
-        {
-          path: catalogUrl.pathname,
-          message: `cannot read the demo catalog (${(error as NodeJS.ErrnoException).code ?? 'error'})`,
-        },
-      ],
-    };
-  }
+  const catalogRead = readDemoFile(catalogUrl, 'the demo catalog');
+  if (!catalogRead.ok) return { seeded: false, issues: [catalogRead.issue] };
+  const catalogText = catalogRead.text;
   let catalog: CatalogLoad;
   try {
     catalog = readCatalogText(catalogText, undefined, catalogUrl.pathname);
