@@ -5,12 +5,13 @@ import { smallStudy } from './helpers/small-study.ts';
 
 /**
  * The work budget (api/operations/work-budget.ts) against a started service whose budget is set
- * below the small study's work (1 community x 1 rupture x 3 levels = 3).
+ * below the small study's work (1 community x 3 levels x the M 6.5 point's 8 virtual ruptures
+ * = 24).
  */
 const service = serviceForFile('budget', { TREMORA_WORK_BUDGET: '2' });
 
 const EXPECTED_ERROR =
-  'study is too large: 1 community x 1 rupture x 3 levels (over 1 measure) = 3, over the budget of 2';
+  'study is too large: 1 community x 8 ruptures x 3 levels (over 1 measure) = 24, over the budget of 2';
 
 describe('a study over the work budget', () => {
   it('is refused by validate and compute with 422 naming the size and the budget', async () => {
@@ -20,7 +21,7 @@ describe('a study over the work budget', () => {
         422,
       );
       expect(body.error).toBe(EXPECTED_ERROR);
-      expect(body.size).toBe(3);
+      expect(body.size).toBe(24);
       expect(body.budget).toBe(2);
       expect(body.issues).toHaveLength(1);
       expect(body.issues[0]?.path).toBe('(study)');

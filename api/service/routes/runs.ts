@@ -52,7 +52,15 @@ export function runRoutes(ctx: ServiceContext): Hono {
         `run "${id}" is ${run.status}; results exist only once it is done${run.error ? ` (${run.error})` : ''}`,
       );
     }
-    return { run, text, inputs: runs.inputs(id) };
+    return { run, text };
+  };
+
+  /** A done run's study, as the run computed it, and its results. */
+  const finishedStudy = (id: string) => {
+    const { run, text } = finishedResults(id);
+    const inputs = runs.inputs(id) as NonNullable<ReturnType<typeof runs.inputs>>;
+    const { study } = runStudy(inputs, ctx.models, terrainGridsOf(ctx));
+    return { run, study, result: JSON.parse(text) as StudyResult };
   };
 
   app.post('/studies/:id/runs', async (c) => {
@@ -83,26 +91,16 @@ export function runRoutes(ctx: ServiceContext): Hono {
   });
 
   app.get('/runs/:runId/results.csv', (c) => {
-    const { run, text, inputs } = finishedResults(c.req.param('runId'));
-    const { study } = runStudy(
-      inputs as NonNullable<typeof inputs>,
-      ctx.models,
-      terrainGridsOf(ctx),
-    );
-    return c.body(runCsv(study, JSON.parse(text) as StudyResult), 200, {
+    const { run, study, result } = finishedStudy(c.req.param('runId'));
+    return c.body(runCsv(study, result), 200, {
       'Content-Type': 'text/csv; charset=utf-8',
       'Content-Disposition': `attachment; filename="tremora-run-${run.id}.csv"`,
     });
   });
 
   app.get('/runs/:runId/results.geojson', (c) => {
-    const { run, text, inputs } = finishedResults(c.req.param('runId'));
-    const { study } = runStudy(
-      inputs as NonNullable<typeof inputs>,
-      ctx.models,
-      terrainGridsOf(ctx),
-    );
-    return c.body(JSON.stringify(runGeoJson(study, JSON.parse(text) as StudyResult)), 200, {
+    const { run, study, result } = finishedStudy(c.req.param('runId'));
+    return c.body(JSON.stringify(runGeoJson(study, result)), 200, {
       'Content-Type': 'application/geo+json; charset=utf-8',
       'Content-Disposition': `attachment; filename="tremora-run-${run.id}.geojson"`,
     });

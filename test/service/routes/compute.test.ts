@@ -6,6 +6,7 @@ import { expectError, expectSecurityHeaders } from '../helpers/assertions.ts';
 import { startRun, waitForStatus } from '../helpers/runs.ts';
 import { jsonInit, serviceForFile } from '../helpers/service-process.ts';
 import { EXCEEDANCE_AT_LEVELS, RATE_PER_YEAR, smallStudy } from '../helpers/small-study.ts';
+import { VIRTUAL_STRIKE_COUNT } from '../../../api/engine/ruptures/virtual-ruptures.ts';
 
 const service = serviceForFile('compute');
 
@@ -22,7 +23,13 @@ describe('POST /api/validate', () => {
       measures: ['PGA'],
       warnings: [],
     });
-    expect(body.work).toMatchObject({ size: 3, ruptures: 1, budget: DEFAULT_WORK_BUDGET });
+    // The M 6.5 point is one virtual rupture per strike (ruptures/virtual-ruptures.ts), each
+    // computed at the 3 levels.
+    expect(body.work).toMatchObject({
+      size: 3 * VIRTUAL_STRIKE_COUNT,
+      ruptures: VIRTUAL_STRIKE_COUNT,
+      budget: DEFAULT_WORK_BUDGET,
+    });
     expect(body.inputHash).toMatch(/^[0-9a-f]{64}$/);
   });
 

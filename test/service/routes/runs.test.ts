@@ -13,6 +13,7 @@ import {
   RATE_PER_YEAR,
   smallStudy,
 } from '../helpers/small-study.ts';
+import { VIRTUAL_STRIKE_COUNT } from '../../../api/engine/ruptures/virtual-ruptures.ts';
 
 // One worker, so a second run waits behind the first whatever the machine's cores.
 const service = serviceForFile('runs', { TREMORA_WORKERS: '1' });
@@ -42,7 +43,8 @@ describe('a run of a saved study', () => {
       work: { size: number; detail: string };
     };
     expect(['queued', 'running']).toContain(accepted.status);
-    expect(accepted.work.size).toBe(3);
+    // 1 community x 3 levels x the M 6.5 point's virtual ruptures (ruptures/virtual-ruptures.ts).
+    expect(accepted.work.size).toBe(3 * VIRTUAL_STRIKE_COUNT);
     runId = accepted.id;
     const run = await waitForStatus(service, runId);
     expect(run).toMatchObject({ status: 'done', progress: 1, error: null, studyId });
