@@ -6,6 +6,7 @@ import { defaultPoolSize, WorkerPool } from '../../api/workers/worker-pool.ts';
 import { expectRelative } from '../helpers/close.ts';
 import { EXCEEDANCE_AT_LEVELS, RATE_PER_YEAR } from '../service/helpers/small-study.ts';
 import { namedStudy, validSmallStudy } from './fixtures/studies.ts';
+import { VIRTUAL_STRIKE_COUNT } from '../../api/engine/ruptures/virtual-ruptures.ts';
 
 const FIXTURE = new URL('./fixtures/crash-worker.ts', import.meta.url);
 const BROKEN = new URL('./fixtures/broken-worker.ts', import.meta.url);
@@ -67,8 +68,9 @@ describe('WorkerPool with the real run worker', () => {
   it('measures a study (rupture count) and gives identical outputs for identical inputs', async () => {
     const quick = pool({ size: 1 });
     const a = await quick.run({ kind: 'measure', study: validSmallStudy() }).result;
-    // Its one point earthquake is one rupture of one plane, with no source-model alternatives.
-    expect(a).toEqual({ ruptures: 1, extraPlanes: 0, variantRuptures: 0 });
+    // Its one M 6.5 point earthquake is a virtual rupture of one plane per strike
+    // (ruptures/virtual-ruptures.ts), with no source-model alternatives.
+    expect(a).toEqual({ ruptures: VIRTUAL_STRIKE_COUNT, extraPlanes: 0, variantRuptures: 0 });
     const runs = pool({ size: 1 });
     const first = await runs.run({
       kind: 'screen',
