@@ -202,11 +202,75 @@ export function cb14HangingWallTerm(row: Cb14Row, s: Cb14Scenario): number {
 /** f_site (ln units) for Vs30 in m/s and A1100 in g (the Japan term off). */
 export function cb14SiteTerm(row: Cb14Row, vs30: number, a1100G: number): number {
   const lnRatio = Math.log(vs30 / row.k1);
+  return siteTermFrom(row, vs30, lnRatio, K.c * Math.exp(K.n * lnRatio), a1100G);
+}
+
+/** f_site from ln(Vs30 / k1) and c (Vs30 / k1)^n, the parts that depend on the site alone. */
+function siteTermFrom(
+  row: Cb14Row,
+  vs30: number,
+  lnRatio: number,
+  cRatioPowN: number,
+  a1100G: number,
+): number {
   if (vs30 > row.k1) return (row.c11 + row.k2 * K.n) * lnRatio;
-  return (
-    row.c11 * lnRatio +
-    row.k2 * (Math.log(a1100G + K.c * Math.exp(K.n * lnRatio)) - Math.log(a1100G + K.c))
-  );
+  return row.c11 * lnRatio + row.k2 * (Math.log(a1100G + cRatioPowN) - Math.log(a1100G + K.c));
+}
+
+/**
+ * What a row's site, basin and σ terms need of the site alone, for the last site it was asked
+ * for: the fast path evaluates a row over all of a site's pairs in turn, so these are worked out
+ * once per row and site rather than once per pair, from the same expressions.
+ */
+interface Cb14SiteParts {
+  vs30: number;
+  /** Z2.5 as given (km), or undefined for the default of Vs30. */
+  z2p5Given: number | undefined;
+  z2p5Km: number;
+  lnRatio: number;
+  cRatioPowN: number;
+  basin: number;
+  /** (Vs30 / k1)^n as the nonlinear σ correction has it. */
+  ratioPowN: number;
+}
+
+const siteParts = new Map<Cb14Row, Cb14SiteParts>();
+
+function sitePartsOf(row: Cb14Row): Cb14SiteParts {
+  let parts = siteParts.get(row);
+  if (!parts) {
+    parts = {
+      vs30: NaN,
+      z2p5Given: undefined,
+      z2p5Km: NaN,
+      lnRatio: NaN,
+      cRatioPowN: NaN,
+      basin: NaN,
+      ratioPowN: NaN,
+    };
+    siteParts.set(row, parts);
+  }
+  return parts;
+}
+
+/** The row's site parts for Vs30 (m/s) and Z2.5 as given, worked out if the site is not the last one. */
+function siteAt(
+  parts: Cb14SiteParts,
+  row: Cb14Row,
+  vs30: number,
+  z2p5Given: number | undefined,
+): Cb14SiteParts {
+  if (parts.vs30 === vs30 && parts.z2p5Given === z2p5Given) return parts;
+  const z2p5Km = z2p5Given ?? cb14DefaultZ2p5Km(vs30);
+  const lnRatio = Math.log(vs30 / row.k1);
+  parts.vs30 = vs30;
+  parts.z2p5Given = z2p5Given;
+  parts.z2p5Km = z2p5Km;
+  parts.lnRatio = lnRatio;
+  parts.cRatioPowN = K.c * Math.exp(K.n * lnRatio);
+  parts.basin = cb14BasinTerm(row, z2p5Km);
+  parts.ratioPowN = (vs30 / row.k1) ** K.n;
+  return parts;
 }
 
 /** The paper's California default depth to Vs = 2.5 km/s (km) for Vs30 in m/s. */
@@ -303,22 +367,28 @@ export function cb14Sigma(
   vs30: number,
   a1100G: number,
 ): { tau: number; phi: number; sigma: number } {
-  return sigmaInto(row, sigmaTerms(row, m), vs30, a1100G, emptyPairPrediction());
+  return sigmaInto(
+    row,
+    sigmaTerms(row, m),
+    vs30,
+    (vs30 / row.k1) ** K.n,
+    a1100G,
+    emptyPairPrediction(),
+  );
 }
 
-/** cb14Sigma written into `out` from the rupture's ramped values. */
+/** cb14Sigma written into `out` from the rupture's ramped values and (Vs30 / k1)^n. */
 function sigmaInto(
   row: Cb14Row,
   t: Cb14SigmaTerms,
   vs30: number,
+  ratioPowN: number,
   a1100G: number,
   out: PairPrediction,
 ): PairPrediction {
   const { tauY, phiY, tauPga } = t;
   const alpha =
-    vs30 < row.k1
-      ? row.k2 * a1100G * (1 / (a1100G + K.c * (vs30 / row.k1) ** K.n) - 1 / (a1100G + K.c))
-      : 0;
+    vs30 < row.k1 ? row.k2 * a1100G * (1 / (a1100G + K.c * ratioPowN) - 1 / (a1100G + K.c)) : 0;
   if (alpha === 0) {
     out.tau = tauY;
     out.phi = phiY;
@@ -437,6 +507,9 @@ export interface Cb14RuptureTerms {
   readonly pgaHangingWallScale: number;
   readonly geometry: HangingWallGeometry;
   readonly sigma: Cb14SigmaTerms;
+  /** The row's and the PGA row's site parts, shared by every rupture's terms of the row. */
+  readonly site: Cb14SiteParts;
+  readonly pgaSite: Cb14SiteParts;
 }
 
 export function cb14RuptureTerms(
@@ -456,6 +529,8 @@ export function cb14RuptureTerms(
     pgaHangingWallScale,
     geometry: hangingWallGeometry(rupture),
     sigma: sigmaTerms(row, m),
+    site: sitePartsOf(row),
+    pgaSite: sitePartsOf(CB14_PGA),
   };
 }
 
@@ -472,7 +547,7 @@ export function cb14PairPrediction(
   const { row } = t;
   const m = t.rupture.magnitude;
   const { rrupKm, rxKm, vs30 } = pair;
-  const z2p5Km = pair.z2p5Km ?? cb14DefaultZ2p5Km(vs30);
+  const site = siteAt(t.site, row, vs30, pair.z2p5Km);
   const fRrup = rrupTaper(rrupKm, pair.rjbKm);
   const pgaHangingWall = hangingWallOfPair(
     CB14_PGA,
@@ -493,16 +568,17 @@ export function cb14PairPrediction(
           rrupKm,
           hangingWallOfPair(row, t.hangingWallScale, t.geometry, rxKm, fRrup),
         );
-  const unfloored = rockPath + cb14SiteTerm(row, vs30, a1100G) + cb14BasinTerm(row, z2p5Km);
+  const unfloored =
+    rockPath + siteTermFrom(row, vs30, site.lnRatio, site.cRatioPowN, a1100G) + site.basin;
   // CB14: at periods under 0.25 s the spectral acceleration is not allowed below PGA.
-  out.lnMedian =
-    row.periodS > 0 && row.periodS < 0.25
-      ? Math.max(
-          unfloored,
-          pgaRockPath + cb14SiteTerm(CB14_PGA, vs30, a1100G) + cb14BasinTerm(CB14_PGA, z2p5Km),
-        )
-      : unfloored;
-  return sigmaInto(row, t.sigma, vs30, a1100G, out);
+  if (row.periodS > 0 && row.periodS < 0.25) {
+    const pga = siteAt(t.pgaSite, CB14_PGA, vs30, pair.z2p5Km);
+    out.lnMedian = Math.max(
+      unfloored,
+      pgaRockPath + siteTermFrom(CB14_PGA, vs30, pga.lnRatio, pga.cRatioPowN, a1100G) + pga.basin,
+    );
+  } else out.lnMedian = unfloored;
+  return sigmaInto(row, t.sigma, vs30, site.ratioPowN, a1100G, out);
 }
 
 /** The model as rupture terms and pair prediction, for the fast path (split-prepare.ts): the same functions predict() uses. */
