@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import { cb14 } from '../../../api/engine/motion/cb14.ts';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
-import { checkPreparedMeasures, checkPreparedModel } from './prepared-checks.ts';
+import { checkPreparedMeasures, checkPreparedModel, checkSiteOrder } from './prepared-checks.ts';
 
 // The hook's numbers against predict() (cb14.ts); predict() itself is checked against the paper in cb14.test.ts.
 const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
@@ -44,40 +44,13 @@ describe('CB14 precomputation hook', () => {
   });
 
   it('gives each site the same numbers whatever site came before (site parts kept per row are renewed when Vs30 or Z2.5 changes)', () => {
-    const rupture = {
-      magnitude: 6.5,
-      rakeDeg: 90,
-      mechanism: 'reverse' as const,
-      setting: 'crustal' as const,
-      dipDeg: 45,
-      ztorKm: 2,
-      widthKm: 15,
-      hypoDepthKm: 9,
-    };
-    const distances = { rjbKm: 12, rrupKm: 14, rxKm: 8, ry0Km: 0, rhypoKm: 16, repiKm: 13 };
     // Below and above k1 (nonlinear site term and σ, linear), Z2.5 given, default and in each basin branch.
-    const sites = [
+    checkSiteOrder(cb14, [
       { vs30: 250, vs30Measured: true },
       { vs30: 760, vs30Measured: true },
       { vs30: 250, vs30Measured: true, z2p5Km: 0.5 },
       { vs30: 250, vs30Measured: true, z2p5Km: 5 },
       { vs30: 1300, vs30Measured: false, z2p5Km: 2 },
-    ];
-    const measures: Measure[] = [{ kind: 'PGA' }, sa(0.1), sa(1)];
-    const predictAt = (site: (typeof sites)[number], measure: Measure) =>
-      cb14.predict({ ...rupture, ...distances, ...site }, measure);
-    for (const measure of measures) {
-      const alone = sites.map((site) => {
-        predictAt(sites[(sites.indexOf(site) + 1) % sites.length]!, measure);
-        return predictAt(site, measure);
-      });
-      const inTurn = [...sites, ...sites].map((site) => predictAt(site, measure));
-      inTurn.forEach((p, i) => {
-        expect(p.lnMedian).toBe(alone[i % sites.length]!.lnMedian);
-        expect(p.sigma).toBe(alone[i % sites.length]!.sigma);
-      });
-      // Every site differs from the others somewhere: a stale site part would show.
-      expect(new Set(alone.map((p) => p.lnMedian)).size).toBe(sites.length);
-    }
+    ]);
   });
 });

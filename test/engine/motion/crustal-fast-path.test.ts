@@ -2,7 +2,7 @@ import { describe, it } from 'vitest';
 import { ask14 } from '../../../api/engine/motion/ask14.ts';
 import { cy14 } from '../../../api/engine/motion/cy14.ts';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
-import { checkPreparedMeasures, checkPreparedModel } from './prepared-checks.ts';
+import { checkPreparedMeasures, checkPreparedModel, checkSiteOrder } from './prepared-checks.ts';
 import { expectFastPathMatchesVector, readVectors } from './reference-vectors.ts';
 
 // ASK14 and CY14 through the fast path (split-prepare.ts over the models' own rupture terms and
@@ -24,4 +24,17 @@ describe('ASK14 and CY14 fast path', () => {
       for (const c of readVectors(file).cases) expectFastPathMatchesVector(model, c, source);
     });
   }
+});
+
+describe('ASK14 site parts', () => {
+  it('gives each site the same numbers whatever site came before (site parts kept per row are renewed when Vs30 or Z1 changes)', () => {
+    // Below and above Vlin (nonlinear site term and slope, linear), above V1, Z1 given and not.
+    checkSiteOrder(ask14, [
+      { vs30: 250, vs30Measured: true },
+      { vs30: 760, vs30Measured: true },
+      { vs30: 250, vs30Measured: true, z1Km: 0.05 },
+      { vs30: 250, vs30Measured: false, z1Km: 0.6 },
+      { vs30: 1400, vs30Measured: true },
+    ]);
+  });
 });

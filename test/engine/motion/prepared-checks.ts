@@ -190,3 +190,43 @@ export function checkPreparedMeasures(
     { numRuns, seed: 20_260_702 },
   );
 }
+
+/**
+ * Checks that a model's numbers at each of `sites` do not depend on the site asked before (a
+ * model may keep parts of the last site's terms): each site's prediction alone, after another
+ * site, must be exactly that site's in a run over all sites twice, and the sites must differ.
+ */
+export function checkSiteOrder(model: GroundMotionModel, sites: readonly SiteContext[]): void {
+  const rupture: RuptureContext = {
+    magnitude: 6.5,
+    rakeDeg: 90,
+    mechanism: 'reverse',
+    setting: 'crustal',
+    dipDeg: 45,
+    ztorKm: 2,
+    widthKm: 15,
+    hypoDepthKm: 9,
+  };
+  const distances = { rjbKm: 12, rrupKm: 14, rxKm: 8, ry0Km: 0, rhypoKm: 16, repiKm: 13 };
+  const predictAt = (site: SiteContext, measure: Measure) =>
+    model.predict({ ...rupture, ...distances, ...site }, measure);
+  const measures: Measure[] = [
+    { kind: 'PGA' },
+    { kind: 'SA', periodS: 0.1 },
+    { kind: 'SA', periodS: 1 },
+  ];
+  for (const measure of measures) {
+    const alone = sites.map((site, i) => {
+      predictAt(sites[(i + 1) % sites.length]!, measure);
+      return predictAt(site, measure);
+    });
+    [...sites, ...sites].forEach((site, i) => {
+      const p = predictAt(site, measure);
+      expect(p.lnMedian, `${model.name} ${measureLabel(measure)} site ${i}`).toBe(
+        alone[i % sites.length]!.lnMedian,
+      );
+      expect(p.sigma).toBe(alone[i % sites.length]!.sigma);
+    });
+    expect(new Set(alone.map((p) => p.lnMedian)).size).toBe(sites.length);
+  }
+}
