@@ -57,6 +57,7 @@
  */
 import { toRadians } from '../units.ts';
 import { hypot2 } from './fast-math.ts';
+import { rowMemo } from './prepared-period.ts';
 import {
   ASK14_CONSTANTS as K,
   ASK14_PGA,
@@ -279,24 +280,16 @@ interface Ask14SiteParts {
   basin: number;
 }
 
-const siteParts = new Map<Ask14Row, Ask14SiteParts>();
-
-function sitePartsOf(row: Ask14Row): Ask14SiteParts {
-  let parts = siteParts.get(row);
-  if (!parts) {
-    parts = {
-      rockSiteLn: ask14SiteTerm(row, ASK14_ROCK_VS30, 0),
-      vs30: NaN,
-      z1Given: undefined,
-      lnRatio: NaN,
-      expNLnRatio: NaN,
-      ratioPowN: NaN,
-      basin: NaN,
-    };
-    siteParts.set(row, parts);
-  }
-  return parts;
-}
+/** Each row's site parts, made when the row is first asked for (none of a site yet). */
+const sitePartsOf = rowMemo((row: Ask14Row): Ask14SiteParts => ({
+  rockSiteLn: ask14SiteTerm(row, ASK14_ROCK_VS30, 0),
+  vs30: NaN,
+  z1Given: undefined,
+  lnRatio: NaN,
+  expNLnRatio: NaN,
+  ratioPowN: NaN,
+  basin: NaN,
+}));
 
 function siteAt(parts: Ask14SiteParts, row: Ask14Row, site: SiteContext): Ask14SiteParts {
   const { vs30, z1Km } = site;

@@ -51,6 +51,7 @@
  */
 import { toRadians } from '../units.ts';
 import { hypot2 } from './fast-math.ts';
+import { rowMemo } from './prepared-period.ts';
 import {
   CB14_CONSTANTS as K,
   CB14_PGA,
@@ -234,24 +235,16 @@ interface Cb14SiteParts {
   ratioPowN: number;
 }
 
-const siteParts = new Map<Cb14Row, Cb14SiteParts>();
-
-function sitePartsOf(row: Cb14Row): Cb14SiteParts {
-  let parts = siteParts.get(row);
-  if (!parts) {
-    parts = {
-      vs30: NaN,
-      z2p5Given: undefined,
-      z2p5Km: NaN,
-      lnRatio: NaN,
-      cRatioPowN: NaN,
-      basin: NaN,
-      ratioPowN: NaN,
-    };
-    siteParts.set(row, parts);
-  }
-  return parts;
-}
+/** Each row's site parts, made when the row is first asked for (none of a site yet). */
+const sitePartsOf = rowMemo((_row: Cb14Row): Cb14SiteParts => ({
+  vs30: NaN,
+  z2p5Given: undefined,
+  z2p5Km: NaN,
+  lnRatio: NaN,
+  cRatioPowN: NaN,
+  basin: NaN,
+  ratioPowN: NaN,
+}));
 
 /** The row's site parts for Vs30 (m/s) and Z2.5 as given, worked out if the site is not the last one. */
 function siteAt(
