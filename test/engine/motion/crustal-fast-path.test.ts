@@ -26,8 +26,8 @@ describe('ASK14 and CY14 fast path', () => {
   }
 });
 
-describe('ASK14 site parts', () => {
-  it('gives each site the same numbers whatever site came before (site parts kept per row are renewed when Vs30 or Z1 changes)', () => {
+describe('ASK14 and CY14 site parts', () => {
+  it('ASK14 gives each site the same numbers whatever site came before (site parts kept per row are renewed when Vs30 or Z1 changes)', () => {
     // Below and above Vlin (nonlinear site term and slope, linear), above V1, Z1 given and not.
     checkSiteOrder(ask14, [
       { vs30: 250, vs30Measured: true },
@@ -35,6 +35,16 @@ describe('ASK14 site parts', () => {
       { vs30: 250, vs30Measured: true, z1Km: 0.05 },
       { vs30: 250, vs30Measured: false, z1Km: 0.6 },
       { vs30: 1400, vs30Measured: true },
+    ]);
+  });
+  it('CY14 gives each site the same numbers whatever site came before (site parts renewed when Vs30 or Z1 changes)', () => {
+    // Below and above the reference 1130 m/s (linear term, nonlinear strength), Z1 given and not.
+    checkSiteOrder(cy14, [
+      { vs30: 250, vs30Measured: true },
+      { vs30: 760, vs30Measured: true },
+      { vs30: 250, vs30Measured: true, z1Km: 0.05 },
+      { vs30: 250, vs30Measured: false, z1Km: 0.6 },
+      { vs30: 1300, vs30Measured: true },
     ]);
   });
 });

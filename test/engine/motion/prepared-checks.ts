@@ -215,18 +215,25 @@ export function checkSiteOrder(model: GroundMotionModel, sites: readonly SiteCon
     { kind: 'SA', periodS: 0.1 },
     { kind: 'SA', periodS: 1 },
   ];
-  for (const measure of measures) {
-    const alone = sites.map((site, i) => {
+  const alone = measures.map((measure) =>
+    sites.map((site, i) => {
       predictAt(sites[(i + 1) % sites.length]!, measure);
       return predictAt(site, measure);
-    });
+    }),
+  );
+  measures.forEach((measure, m) => {
     [...sites, ...sites].forEach((site, i) => {
       const p = predictAt(site, measure);
+      const expected = alone[m]![i % sites.length]!;
       expect(p.lnMedian, `${model.name} ${measureLabel(measure)} site ${i}`).toBe(
-        alone[i % sites.length]!.lnMedian,
+        expected.lnMedian,
       );
-      expect(p.sigma).toBe(alone[i % sites.length]!.sigma);
+      expect(p.sigma).toBe(expected.sigma);
     });
-    expect(new Set(alone.map((p) => p.lnMedian)).size).toBe(sites.length);
-  }
+  });
+  // Every site differs from the others in some measure's median or σ: a stale site part would show.
+  const bySite = sites.map((_, i) =>
+    alone.map((row) => `${row[i]!.lnMedian} ${row[i]!.sigma}`).join(' '),
+  );
+  expect(new Set(bySite).size).toBe(sites.length);
 }
