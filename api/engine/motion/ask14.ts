@@ -251,13 +251,10 @@ function siteTermFrom(
   );
 }
 
-/** δ = ∂f5/∂ln Sa1180, the nonlinear site term's response to the rock motion (0 at and above Vlin). */
-export function ask14SiteSlope(row: Ask14Row, vs30: number, sa1180: number): number {
-  const ratio = Math.min(vs30, ask14V1(row.periodS)) / row.Vlin;
-  return siteSlopeFrom(row, vs30, ratio ** row.n, sa1180);
-}
-
-/** δ from (min(Vs30, V1) / Vlin)^n, the part of the site alone. */
+/**
+ * δ = ∂f5/∂ln Sa1180, the nonlinear site term's response to the rock motion (0 at and above
+ * Vlin), from (min(Vs30, V1) / Vlin)^n, the part of the site alone.
+ */
 function siteSlopeFrom(row: Ask14Row, vs30: number, ratioPowN: number, sa1180: number): number {
   if (vs30 >= row.Vlin) return 0;
   return row.b * sa1180 * (1 / (sa1180 + row.c * ratioPowN) - 1 / (sa1180 + row.c));
