@@ -1,6 +1,7 @@
 import type { RuptureWork } from '../engine/hazard/rupture-work.ts';
 import type { InputIssue } from '../engine/errors.ts';
 import type { RuptureTable } from '../engine/hazard/rupture-table.ts';
+import type { SourceRange } from '../engine/hazard/study-rupture-table.ts';
 import type { HazardMapOptions, MapPoint } from '../engine/map/hazard-map.ts';
 import type { Study } from '../engine/model.ts';
 import type { Provenance } from '../engine/results.ts';
@@ -22,8 +23,11 @@ export type WorkerTask =
   | { readonly kind: 'measure'; readonly study: Study }
   /** One deterministic scenario (engine/scenario), as JSON text. */
   | { readonly kind: 'scenario'; readonly study: Study; readonly request: ScenarioRequest }
-  /** A study's ruptures laid out as a table on shared memory, for the parallel runners to hand out. */
-  | { readonly kind: 'rupture-table'; readonly study: Study }
+  /**
+   * A study's ruptures laid out as a table on shared memory, for the parallel runners to hand
+   * out; with `sources`, only those sources' (a part, for joinRuptureTables).
+   */
+  | { readonly kind: 'rupture-table'; readonly study: Study; readonly sources?: SourceRange }
   /**
    * Some communities of a study, from the rupture table the runner built once
    * (parallel-screen.ts); `planKey` names the run, so a thread builds its plan once per run.

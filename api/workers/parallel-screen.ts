@@ -7,6 +7,7 @@ import { screeningSetup } from '../engine/screening-plan.ts';
 import { buildProvenance } from '../results/provenance.ts';
 import { newPlanKey, runChunks, type ChunkPool } from './chunk-runner.ts';
 import type { ScreenOutput } from './messages.ts';
+import { tableOnPool } from './shared-table.ts';
 import type { TaskHandle, WorkerPool } from './worker-pool.ts';
 
 /** A screening's results as JSON text, piece by piece (the service stores them without parsing). */
@@ -50,8 +51,8 @@ export interface ParallelScreenOptions {
 }
 
 /**
- * Screens a study over the pool's threads: one thread lays the study's ruptures out in a table
- * on shared memory, then the communities are handed out in chunks, each thread building its plan once and taking chunks until none are left. The numbers are
+ * Screens a study over the pool's threads: the threads lay the study's ruptures out in a table
+ * on shared memory (tableOnPool), then the communities are handed out in chunks, each thread building its plan once and taking chunks until none are left. The numbers are
  * screenStudy's (the same engine functions, community by community). The models are the
  * registry's (a worker thread has no other). Cancel stops every chunk (Cancelled).
  */
@@ -65,12 +66,9 @@ export function screenStudyOnPool(
   const result = (async (): Promise<ScreeningText> => {
     // Branches and study warnings are checked here first: a bad study fails before any thread works.
     const setup = screeningSetup(study, modelCatalog);
-    const tableTask = pool.run(
-      { kind: 'rupture-table', study },
-      options.onStart ? { onStart: options.onStart } : {},
-    );
+    const tableTask = tableOnPool(pool, study, options.onStart ? { onStart: options.onStart } : {});
     active = tableTask;
-    const { table } = await tableTask.result;
+    const table = await tableTask.result;
     if (cancelled) throw new Cancelled(0);
     const count = study.communities.length;
     const chunks = options.chunks ?? pool;

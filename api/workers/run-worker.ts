@@ -68,7 +68,7 @@ function perform(message: TaskMessage): TaskOutputs[WorkerTask['kind']] {
     case 'scenario':
       return { resultJson: JSON.stringify(runScenario(task.study, modelCatalog, task.request)) };
     case 'rupture-table':
-      return { table: shareTable(studyRuptureTable(task.study).table) };
+      return { table: shareTable(studyRuptureTable(task.study, task.sources).table) };
     case 'screen-communities':
       return screenCommunitiesTask(task, chunkEvents(id, stop));
     case 'map-points':

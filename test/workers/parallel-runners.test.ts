@@ -9,7 +9,9 @@ import {
   screeningJson,
   screeningOutput,
 } from '../../api/workers/parallel-screen.ts';
+import { tableOnPool } from '../../api/workers/shared-table.ts';
 import { WorkerPool } from '../../api/workers/worker-pool.ts';
+import { studyRuptureTable } from '../../api/engine/hazard/study-rupture-table.ts';
 import { RunScheduler } from '../../api/jobs/run-scheduler.ts';
 import { openStore } from '../../api/store/store.ts';
 import { tempDir } from '../service/helpers/service-process.ts';
@@ -22,6 +24,23 @@ afterAll(() => pool.close());
 
 const base = allKindsStudy({ measures: ['PGA', 'SA(1.0)'] });
 const study: Study = { ...base, sources: base.sources.filter((s) => s.id !== 'background') };
+
+describe('tableOnPool', () => {
+  it('lays out the table one thread lays out, its sources in parts over two threads, on shared memory', async () => {
+    const whole = allKindsStudy();
+    expect(whole.sources.length).toBeGreaterThan(1);
+    const table = await tableOnPool(pool, whole).result;
+    const expected = studyRuptureTable(whole).table;
+    expect(table.count).toBe(expected.count);
+    expect(table.sourceIds).toEqual(expected.sourceIds);
+    for (const [name, column] of Object.entries(expected)) {
+      if (!ArrayBuffer.isView(column)) continue;
+      const got = table[name as keyof typeof table] as typeof column;
+      expect(got.buffer, name).toBeInstanceOf(SharedArrayBuffer);
+      expect(Array.from(got as Float64Array), name).toEqual(Array.from(column as Float64Array));
+    }
+  });
+});
 
 describe('screenStudyOnPool', () => {
   it("gives screenStudy's results, communities in study order, chunk by chunk over two threads", async () => {

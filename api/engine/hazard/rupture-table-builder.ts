@@ -169,3 +169,79 @@ export function ruptureTable(ruptures: readonly Rupture[]): RuptureTable {
   for (const r of ruptures) builder.add(r, r.annualRate);
   return builder.table();
 }
+
+type ColumnName = {
+  [K in keyof RuptureTable]: RuptureTable[K] extends Column ? K : never;
+}[keyof RuptureTable];
+
+/** Columns copied part after part as they are; planeStart and traceEnd are offset by the planes before. */
+const PLAIN_COLUMNS = [
+  'annualRate',
+  'magnitude',
+  'rakeDeg',
+  'dipDeg',
+  'ztorKm',
+  'widthKm',
+  'hypoDepthKm',
+  'setting',
+  'mechanism',
+  'sourceIndex',
+  'hypocentre',
+  'planeCorners',
+  'isPoint',
+  'cellRule',
+  'cellCentre',
+  'cellRadiusKm',
+] as const satisfies readonly ColumnName[];
+
+/**
+ * The tables of consecutive parts of a study's sources (studyRuptureTable with a SourceRange),
+ * joined in order into the table of all of them: the same columns, rupture by rupture, as the
+ * whole study's walk. `memory` gives each column's bytes (shared memory, say); plain by default.
+ */
+export function joinRuptureTables(
+  parts: readonly RuptureTable[],
+  memory: (bytes: number) => ArrayBufferLike = (bytes) => new ArrayBuffer(bytes),
+): RuptureTable {
+  const column = <T extends Column>(of: (t: RuptureTable) => T, length: number): T => {
+    const Kind = of(parts[0]!).constructor as {
+      new (buffer: ArrayBufferLike): T;
+      readonly BYTES_PER_ELEMENT: number;
+    };
+    return new Kind(memory(length * Kind.BYTES_PER_ELEMENT));
+  };
+  const count = parts.reduce((n, t) => n + t.count, 0);
+  const planes = parts.reduce((n, t) => n + (t.planeStart[t.count] as number), 0);
+  const plain = Object.fromEntries(
+    PLAIN_COLUMNS.map((name) => {
+      const out = column(
+        (t) => t[name],
+        parts.reduce((n, t) => n + t[name].length, 0),
+      );
+      let at = 0;
+      for (const t of parts) {
+        out.set(t[name] as never, at);
+        at += t[name].length;
+      }
+      return [name, out];
+    }),
+  ) as Pick<RuptureTable, (typeof PLAIN_COLUMNS)[number]>;
+  const planeStart = column((t) => t.planeStart, count + 1);
+  const traceEnd = column((t) => t.traceEnd, count);
+  let first = 0;
+  let planesBefore = 0;
+  for (const t of parts) {
+    for (let i = 0; i < t.count; i++) {
+      planeStart[first + i] = (t.planeStart[i] as number) + planesBefore;
+      traceEnd[first + i] = (t.traceEnd[i] as number) + planesBefore;
+    }
+    first += t.count;
+    planesBefore += t.planeStart[t.count] as number;
+  }
+  planeStart[count] = planes;
+  const sourceIds = Array.from(
+    { length: Math.max(0, ...parts.map((t) => t.sourceIds.length)) },
+    (_, s) => parts.find((t) => t.sourceIds[s])?.sourceIds[s] ?? '',
+  );
+  return { count, ...plain, sourceIds, planeStart, traceEnd };
+}

@@ -95,6 +95,11 @@ export function distinctContexts(table: RuptureTable, indices: Int32Array): Dist
   const contextOf = new Int32Array(indices.length);
   const seen = new Map<string, number>();
   indices.forEach((i, k) => {
+    // Neighbours in the table mostly share a context (a zone's cells in turn): no key for those.
+    if (k > 0 && sameContext(table, i, indices[k - 1] as number)) {
+      contextOf[k] = contextOf[k - 1] as number;
+      return;
+    }
     const key = contextKey(table, i);
     let at = seen.get(key);
     if (at === undefined) {
@@ -105,6 +110,17 @@ export function distinctContexts(table: RuptureTable, indices: Int32Array): Dist
   });
   return { contexts, contextOf };
 }
+
+/** Whether ruptures i and j have every number of their contexts equal (as their keys would be). */
+const sameContext = (table: RuptureTable, i: number, j: number): boolean =>
+  Object.is(table.magnitude[i], table.magnitude[j]) &&
+  Object.is(table.rakeDeg[i], table.rakeDeg[j]) &&
+  table.mechanism[i] === table.mechanism[j] &&
+  table.setting[i] === table.setting[j] &&
+  Object.is(table.dipDeg[i], table.dipDeg[j]) &&
+  Object.is(table.ztorKm[i], table.ztorKm[j]) &&
+  Object.is(table.widthKm[i], table.widthKm[j]) &&
+  Object.is(table.hypoDepthKm[i], table.hypoDepthKm[j]);
 
 /** Every number of rupture i's context, exactly (String keeps every bit of a double). */
 const contextKey = (table: RuptureTable, i: number): string =>

@@ -57,6 +57,7 @@
  */
 import { toRadians } from '../units.ts';
 import { hypot2 } from './fast-math.ts';
+import { rowMemo } from './prepared-period.ts';
 import {
   ASK14_CONSTANTS as K,
   ASK14_PGA,
@@ -133,6 +134,8 @@ export interface Ask14RuptureTerms {
   readonly tauA: number;
   readonly phiAMeasured: number;
   readonly phiAEstimated: number;
+  /** The row's site parts, shared by every rupture's terms of the row. */
+  readonly site: Ask14SiteParts;
 }
 
 /** The magnitude-only part of f1 (ln units). */
@@ -190,6 +193,7 @@ export function ask14RuptureTerms(row: Ask14Row, rupture: Ask14Rupture): Ask14Ru
     tauA: ramp(row.s3, row.s4, 5),
     phiAMeasured: ramp(row.s1Meas, row.s2Meas, 4),
     phiAEstimated: ramp(row.s1Est, row.s2Est, 4),
+    site: sitePartsOf(row),
   };
 }
 
@@ -228,19 +232,74 @@ export function ask14V1(periodS: number): number {
 /** f5 (ln units) for Vs30 in m/s and Sa1180 in g (cm/s for PGV). */
 export function ask14SiteTerm(row: Ask14Row, vs30: number, sa1180: number): number {
   const lnRatio = Math.log(Math.min(vs30, ask14V1(row.periodS)) / row.Vlin);
+  return siteTermFrom(row, vs30, lnRatio, Math.exp(row.n * lnRatio), sa1180);
+}
+
+/** f5 from ln(min(Vs30, V1) / Vlin) and its exponential e^(n ln ratio), the parts of the site alone. */
+function siteTermFrom(
+  row: Ask14Row,
+  vs30: number,
+  lnRatio: number,
+  expNLnRatio: number,
+  sa1180: number,
+): number {
   if (vs30 >= row.Vlin) return (row.a10 + row.b * row.n) * lnRatio;
   return (
     row.a10 * lnRatio -
     row.b * Math.log(sa1180 + row.c) +
-    row.b * Math.log(sa1180 + row.c * Math.exp(row.n * lnRatio))
+    row.b * Math.log(sa1180 + row.c * expNLnRatio)
   );
 }
 
-/** δ = ∂f5/∂ln Sa1180, the nonlinear site term's response to the rock motion (0 at and above Vlin). */
-export function ask14SiteSlope(row: Ask14Row, vs30: number, sa1180: number): number {
+/**
+ * δ = ∂f5/∂ln Sa1180, the nonlinear site term's response to the rock motion (0 at and above
+ * Vlin), from (min(Vs30, V1) / Vlin)^n, the part of the site alone.
+ */
+function siteSlopeFrom(row: Ask14Row, vs30: number, ratioPowN: number, sa1180: number): number {
   if (vs30 >= row.Vlin) return 0;
+  return row.b * sa1180 * (1 / (sa1180 + row.c * ratioPowN) - 1 / (sa1180 + row.c));
+}
+
+/**
+ * What a row's site and basin terms need of the site alone, for the last site it was asked for,
+ * and f5 on the reference rock: the fast path evaluates a row over all of a site's pairs in
+ * turn, so these are worked out once per row and site rather than once per pair, from the same
+ * expressions.
+ */
+interface Ask14SiteParts {
+  readonly rockSiteLn: number;
+  vs30: number;
+  /** Z1 as given (km), or undefined for none. */
+  z1Given: number | undefined;
+  lnRatio: number;
+  expNLnRatio: number;
+  ratioPowN: number;
+  basin: number;
+}
+
+/** Each row's site parts, made when the row is first asked for (none of a site yet). */
+const sitePartsOf = rowMemo((row: Ask14Row): Ask14SiteParts => ({
+  rockSiteLn: ask14SiteTerm(row, ASK14_ROCK_VS30, 0),
+  vs30: NaN,
+  z1Given: undefined,
+  lnRatio: NaN,
+  expNLnRatio: NaN,
+  ratioPowN: NaN,
+  basin: NaN,
+}));
+
+function siteAt(parts: Ask14SiteParts, row: Ask14Row, site: SiteContext): Ask14SiteParts {
+  const { vs30, z1Km } = site;
+  if (parts.vs30 === vs30 && parts.z1Given === z1Km) return parts;
   const ratio = Math.min(vs30, ask14V1(row.periodS)) / row.Vlin;
-  return row.b * sa1180 * (1 / (sa1180 + row.c * ratio ** row.n) - 1 / (sa1180 + row.c));
+  const lnRatio = Math.log(ratio);
+  parts.vs30 = vs30;
+  parts.z1Given = z1Km;
+  parts.lnRatio = lnRatio;
+  parts.expNLnRatio = Math.exp(row.n * lnRatio);
+  parts.ratioPowN = ratio ** row.n;
+  parts.basin = ask14BasinTerm(row, vs30, z1Km);
+  return parts;
 }
 
 /** The paper's California Z1ref (km) for Vs30 in m/s. */
@@ -263,11 +322,12 @@ export function ask14PairPrediction(
   out: PairPrediction = emptyPairPrediction(),
 ): PairPrediction {
   const { row } = t;
+  const parts = siteAt(t.site, row, site);
   const rockLn = t.sourceLn + ask14PathTerm(t, d);
-  const sa1180 = Math.exp(rockLn + ask14SiteTerm(row, ASK14_ROCK_VS30, 0));
+  const sa1180 = Math.exp(rockLn + parts.rockSiteLn);
   const lnMedian =
-    rockLn + ask14SiteTerm(row, site.vs30, sa1180) + ask14BasinTerm(row, site.vs30, site.z1Km);
-  const slope = ask14SiteSlope(row, site.vs30, sa1180);
+    rockLn + siteTermFrom(row, site.vs30, parts.lnRatio, parts.expNLnRatio, sa1180) + parts.basin;
+  const slope = siteSlopeFrom(row, site.vs30, parts.ratioPowN, sa1180);
   const phiA = site.vs30Measured ? t.phiAMeasured : t.phiAEstimated;
   const phiB2 = phiA * phiA - K.phiAmp * K.phiAmp;
   const phi = Math.sqrt(phiB2 * (1 + slope) ** 2 + K.phiAmp * K.phiAmp);

@@ -51,6 +51,7 @@
  */
 import { toRadians } from '../units.ts';
 import { hypot2 } from './fast-math.ts';
+import { rowMemo } from './prepared-period.ts';
 import {
   CB14_CONSTANTS as K,
   CB14_PGA,
@@ -199,38 +200,70 @@ export function cb14HangingWallTerm(row: Cb14Row, s: Cb14Scenario): number {
   );
 }
 
-/**
- * What one row's site term and σ need of Vs30 alone: the same for every pair at one Vs30, so a
- * map of one Vs30 works them out once per row (Cb14RuptureTerms.vs30Terms), not per pair.
- */
-interface Cb14Vs30Terms {
-  vs30: number;
-  /** ln(Vs30 / k1). */
-  lnRatio: number;
-  /** c · exp(n · ln(Vs30 / k1)), of the nonlinear site term. */
-  siteShift: number;
-  /** c · (Vs30 / k1)^n, of the nonlinear correction of σ. */
-  sigmaShift: number;
-}
-
-const vs30TermsOf = (row: Cb14Row, vs30: number): Cb14Vs30Terms => {
-  const lnRatio = Math.log(vs30 / row.k1);
-  return {
-    vs30,
-    lnRatio,
-    siteShift: K.c * Math.exp(K.n * lnRatio),
-    sigmaShift: K.c * (vs30 / row.k1) ** K.n,
-  };
-};
-
 /** f_site (ln units) for Vs30 in m/s and A1100 in g (the Japan term off). */
 export function cb14SiteTerm(row: Cb14Row, vs30: number, a1100G: number): number {
-  return siteTermOf(row, vs30TermsOf(row, vs30), a1100G);
+  const lnRatio = Math.log(vs30 / row.k1);
+  return siteTermFrom(row, vs30, lnRatio, K.c * Math.exp(K.n * lnRatio), a1100G);
 }
 
-function siteTermOf(row: Cb14Row, v: Cb14Vs30Terms, a1100G: number): number {
-  if (v.vs30 > row.k1) return (row.c11 + row.k2 * K.n) * v.lnRatio;
-  return row.c11 * v.lnRatio + row.k2 * (Math.log(a1100G + v.siteShift) - Math.log(a1100G + K.c));
+/** f_site from ln(Vs30 / k1) and c (Vs30 / k1)^n, the parts that depend on the site alone. */
+function siteTermFrom(
+  row: Cb14Row,
+  vs30: number,
+  lnRatio: number,
+  cRatioPowN: number,
+  a1100G: number,
+): number {
+  if (vs30 > row.k1) return (row.c11 + row.k2 * K.n) * lnRatio;
+  return row.c11 * lnRatio + row.k2 * (Math.log(a1100G + cRatioPowN) - Math.log(a1100G + K.c));
+}
+
+/**
+ * What a row's site, basin and σ terms need of the site alone, for the last site it was asked
+ * for: the fast path evaluates a row over all of a site's pairs in turn, so these are worked out
+ * once per row and site rather than once per pair, from the same expressions.
+ */
+interface Cb14SiteParts {
+  vs30: number;
+  /** Z2.5 as given (km), or undefined for the default of Vs30. */
+  z2p5Given: number | undefined;
+  z2p5Km: number;
+  lnRatio: number;
+  cRatioPowN: number;
+  basin: number;
+  /** (Vs30 / k1)^n as the nonlinear σ correction has it. */
+  ratioPowN: number;
+}
+
+/** Each row's site parts, made when the row is first asked for (none of a site yet). */
+const sitePartsOf = rowMemo((_row: Cb14Row): Cb14SiteParts => ({
+  vs30: NaN,
+  z2p5Given: undefined,
+  z2p5Km: NaN,
+  lnRatio: NaN,
+  cRatioPowN: NaN,
+  basin: NaN,
+  ratioPowN: NaN,
+}));
+
+/** The row's site parts for Vs30 (m/s) and Z2.5 as given, worked out if the site is not the last one. */
+function siteAt(
+  parts: Cb14SiteParts,
+  row: Cb14Row,
+  vs30: number,
+  z2p5Given: number | undefined,
+): Cb14SiteParts {
+  if (parts.vs30 === vs30 && parts.z2p5Given === z2p5Given) return parts;
+  const z2p5Km = z2p5Given ?? cb14DefaultZ2p5Km(vs30);
+  const lnRatio = Math.log(vs30 / row.k1);
+  parts.vs30 = vs30;
+  parts.z2p5Given = z2p5Given;
+  parts.z2p5Km = z2p5Km;
+  parts.lnRatio = lnRatio;
+  parts.cRatioPowN = K.c * Math.exp(K.n * lnRatio);
+  parts.basin = cb14BasinTerm(row, z2p5Km);
+  parts.ratioPowN = (vs30 / row.k1) ** K.n;
+  return parts;
 }
 
 /** The paper's California default depth to Vs = 2.5 km/s (km) for Vs30 in m/s. */
@@ -305,29 +338,20 @@ const ROCK_SITE_LN =
 const rampM = (m: number, small: number, large: number): number =>
   m <= 4.5 ? small : m >= 5.5 ? large : large + (small - large) * (5.5 - m);
 
-/**
- * The magnitude-ramped τ and φ of a row and of the PGA row (ln units), and the φ of each with
- * the site's own variability φ_lnAF taken out: what σ needs of the rupture.
- */
+/** The magnitude-ramped τ and φ of a row and of the PGA row (ln units): what σ needs of the rupture. */
 interface Cb14SigmaTerms {
   readonly tauY: number;
   readonly phiY: number;
   readonly tauPga: number;
-  readonly phiYB: number;
-  readonly phiPgaB: number;
+  readonly phiPga: number;
 }
 
-function sigmaTerms(row: Cb14Row, m: number): Cb14SigmaTerms {
-  const phiY = rampM(m, row.phi1, row.phi2);
-  const phiPga = rampM(m, CB14_PGA.phi1, CB14_PGA.phi2);
-  return {
-    tauY: rampM(m, row.tau1, row.tau2),
-    phiY,
-    tauPga: rampM(m, CB14_PGA.tau1, CB14_PGA.tau2),
-    phiYB: Math.sqrt(Math.max(phiY * phiY - row.phiLnAF * row.phiLnAF, 0)),
-    phiPgaB: Math.sqrt(Math.max(phiPga * phiPga - CB14_PGA.phiLnAF * CB14_PGA.phiLnAF, 0)),
-  };
-}
+const sigmaTerms = (row: Cb14Row, m: number): Cb14SigmaTerms => ({
+  tauY: rampM(m, row.tau1, row.tau2),
+  phiY: rampM(m, row.phi1, row.phi2),
+  tauPga: rampM(m, CB14_PGA.tau1, CB14_PGA.tau2),
+  phiPga: rampM(m, CB14_PGA.phi1, CB14_PGA.phi2),
+});
 
 /** τ, φ and σ (ln units) of a row, with the nonlinear-site correction for Vs30 (m/s) below k1. */
 export function cb14Sigma(
@@ -336,26 +360,36 @@ export function cb14Sigma(
   vs30: number,
   a1100G: number,
 ): { tau: number; phi: number; sigma: number } {
-  return sigmaInto(row, sigmaTerms(row, m), vs30TermsOf(row, vs30), a1100G, emptyPairPrediction());
+  return sigmaInto(
+    row,
+    sigmaTerms(row, m),
+    vs30,
+    (vs30 / row.k1) ** K.n,
+    a1100G,
+    emptyPairPrediction(),
+  );
 }
 
-/** cb14Sigma written into `out` from the rupture's ramped values. */
+/** cb14Sigma written into `out` from the rupture's ramped values and (Vs30 / k1)^n. */
 function sigmaInto(
   row: Cb14Row,
   t: Cb14SigmaTerms,
-  v: Cb14Vs30Terms,
+  vs30: number,
+  ratioPowN: number,
   a1100G: number,
   out: PairPrediction,
 ): PairPrediction {
-  const { tauY, phiY, tauPga, phiYB, phiPgaB } = t;
+  const { tauY, phiY, tauPga } = t;
   const alpha =
-    v.vs30 < row.k1 ? row.k2 * a1100G * (1 / (a1100G + v.sigmaShift) - 1 / (a1100G + K.c)) : 0;
+    vs30 < row.k1 ? row.k2 * a1100G * (1 / (a1100G + K.c * ratioPowN) - 1 / (a1100G + K.c)) : 0;
   if (alpha === 0) {
     out.tau = tauY;
     out.phi = phiY;
     out.sigma = hypot2(tauY, phiY);
     return out;
   }
+  const phiYB = Math.sqrt(Math.max(phiY * phiY - row.phiLnAF * row.phiLnAF, 0));
+  const phiPgaB = Math.sqrt(Math.max(t.phiPga * t.phiPga - CB14_PGA.phiLnAF * CB14_PGA.phiLnAF, 0));
   const tau = Math.sqrt(
     Math.max(tauY ** 2 + alpha ** 2 * tauPga ** 2 + 2 * alpha * row.rho * tauY * tauPga, 0),
   );
@@ -466,11 +500,9 @@ export interface Cb14RuptureTerms {
   readonly pgaHangingWallScale: number;
   readonly geometry: HangingWallGeometry;
   readonly sigma: Cb14SigmaTerms;
-  /**
-   * The Vs30 terms of the row and of the PGA row and the default Z2.5 (km) at the Vs30 last
-   * asked for: pairs follow one another at one site, so they are worked out once per site.
-   */
-  readonly vs30Terms: { row: Cb14Vs30Terms; pga: Cb14Vs30Terms; defaultZ2p5Km: number };
+  /** The row's and the PGA row's site parts, shared by every rupture's terms of the row. */
+  readonly site: Cb14SiteParts;
+  readonly pgaSite: Cb14SiteParts;
 }
 
 export function cb14RuptureTerms(
@@ -490,23 +522,9 @@ export function cb14RuptureTerms(
     pgaHangingWallScale,
     geometry: hangingWallGeometry(rupture),
     sigma: sigmaTerms(row, m),
-    vs30Terms: {
-      row: vs30TermsOf(row, Number.NaN),
-      pga: vs30TermsOf(CB14_PGA, Number.NaN),
-      defaultZ2p5Km: Number.NaN,
-    },
+    site: sitePartsOf(row),
+    pgaSite: sitePartsOf(CB14_PGA),
   };
-}
-
-/** t.vs30Terms at `vs30` (NaN at first, so worked out on the first pair). */
-function vs30TermsAt(t: Cb14RuptureTerms, vs30: number): Cb14RuptureTerms['vs30Terms'] {
-  const terms = t.vs30Terms;
-  if (terms.row.vs30 !== vs30) {
-    terms.row = vs30TermsOf(t.row, vs30);
-    terms.pga = vs30TermsOf(CB14_PGA, vs30);
-    terms.defaultZ2p5Km = cb14DefaultZ2p5Km(vs30);
-  }
-  return terms;
 }
 
 /**
@@ -522,8 +540,7 @@ export function cb14PairPrediction(
   const { row } = t;
   const m = t.rupture.magnitude;
   const { rrupKm, rxKm, vs30 } = pair;
-  const v = vs30TermsAt(t, vs30);
-  const z2p5Km = pair.z2p5Km ?? v.defaultZ2p5Km;
+  const site = siteAt(t.site, row, vs30, pair.z2p5Km);
   const fRrup = rrupTaper(rrupKm, pair.rjbKm);
   const pgaHangingWall = hangingWallOfPair(
     CB14_PGA,
@@ -544,16 +561,17 @@ export function cb14PairPrediction(
           rrupKm,
           hangingWallOfPair(row, t.hangingWallScale, t.geometry, rxKm, fRrup),
         );
-  const unfloored = rockPath + siteTermOf(row, v.row, a1100G) + cb14BasinTerm(row, z2p5Km);
+  const unfloored =
+    rockPath + siteTermFrom(row, vs30, site.lnRatio, site.cRatioPowN, a1100G) + site.basin;
   // CB14: at periods under 0.25 s the spectral acceleration is not allowed below PGA.
-  out.lnMedian =
-    row.periodS > 0 && row.periodS < 0.25
-      ? Math.max(
-          unfloored,
-          pgaRockPath + siteTermOf(CB14_PGA, v.pga, a1100G) + cb14BasinTerm(CB14_PGA, z2p5Km),
-        )
-      : unfloored;
-  return sigmaInto(row, t.sigma, v.row, a1100G, out);
+  if (row.periodS > 0 && row.periodS < 0.25) {
+    const pga = siteAt(t.pgaSite, CB14_PGA, vs30, pair.z2p5Km);
+    out.lnMedian = Math.max(
+      unfloored,
+      pgaRockPath + siteTermFrom(CB14_PGA, vs30, pga.lnRatio, pga.cRatioPowN, a1100G) + pga.basin,
+    );
+  } else out.lnMedian = unfloored;
+  return sigmaInto(row, t.sigma, vs30, site.ratioPowN, a1100G, out);
 }
 
 /** The model as rupture terms and pair prediction, for the fast path (split-prepare.ts): the same functions predict() uses. */

@@ -50,6 +50,7 @@ import { hypot2 } from './fast-math.ts';
 import { CY14_PGA, CY14_PGV, CY14_SA, type Cy14Row } from './cy14-coefficients.ts';
 import type { Measure } from './measure.ts';
 import { assembleModel } from './model-assembly.ts';
+import { rowMemo } from './prepared-period.ts';
 import {
   emptyPairPrediction,
   predictSplit,
@@ -113,34 +114,8 @@ export interface Cy14RuptureTerms {
   /** τ(M) and the magnitude part of σ_NL0, ln units. */
   readonly tau: number;
   readonly sigmaM: number;
-  /**
-   * The row's site terms that depend on Vs30 alone, at the Vs30 last asked for: pairs follow one
-   * another at one site, so they are worked out once per site.
-   */
-  readonly vs30Terms: Cy14Vs30Terms;
-}
-
-/** What one row's site terms need of Vs30 (and Z1) alone, ln units. */
-interface Cy14Vs30Terms {
-  vs30: number;
-  z1Km: number | undefined;
-  /** φ1 min(ln(Vs30 / 1130), 0). */
-  linear: number;
-  /** nonlinearStrength at Vs30. */
-  strength: number;
-  /** φ5 (1 − e^(−ΔZ1 / φ6)), ΔZ1 in m. */
-  basin: number;
-}
-
-function vs30TermsOf(row: Cy14Row, vs30: number, z1Km: number | undefined): Cy14Vs30Terms {
-  const deltaZ1M = z1Km === undefined ? 0 : (z1Km - cy14DefaultZ1Km(vs30)) * 1000;
-  return {
-    vs30,
-    z1Km,
-    linear: row.phi1 * Math.min(Math.log(vs30 / CY14_REFERENCE_VS30), 0),
-    strength: nonlinearStrength(row, vs30),
-    basin: row.phi5 * (1 - Math.exp(-deltaZ1M / row.phi6)),
-  };
+  /** The row's site parts, shared by every rupture's terms of the row. */
+  readonly site: Cy14SiteParts;
 }
 
 /** E[Ztor] (km), the paper's expected depth to the top of rupture for the magnitude and mechanism. */
@@ -188,7 +163,7 @@ export function cy14RuptureTerms(row: Cy14Row, r: Cy14Rupture): Cy14RuptureTerms
     ztorKm: r.ztorKm,
     tau: row.tau1 + (row.tau2 - row.tau1) * share,
     sigmaM: row.sigma1 + (row.sigma2 - row.sigma1) * share,
-    vs30Terms: vs30TermsOf(row, Number.NaN, undefined),
+    site: sitePartsOf(row),
   };
 }
 
@@ -230,21 +205,61 @@ export function cy14SiteTerm(
   yRef: number,
   z1Km: number | undefined,
 ): number {
-  return siteTermOf(row, vs30TermsOf(row, vs30, z1Km), yRef);
+  return siteTermFrom(row, siteAt(emptySiteParts(), row, vs30, z1Km), yRef);
 }
 
-function siteTermOf(row: Cy14Row, v: Cy14Vs30Terms, yRef: number): number {
-  const nonlinear = v.strength * Math.log((yRef + row.phi4) / row.phi4);
-  return v.linear + nonlinear + v.basin;
-}
+/** The site term from the parts of the site alone and the reference motion (g). */
+const siteTermFrom = (row: Cy14Row, parts: Cy14SiteParts, yRef: number): number =>
+  parts.linear + parts.strength * Math.log((yRef + row.phi4) / row.phi4) + parts.basin;
 
 /** NL0 = ∂(site term)/∂ln y_ref, the nonlinear site term's response to the reference motion. */
 export function cy14SiteSlope(row: Cy14Row, vs30: number, yRef: number): number {
-  return siteSlopeOf(row, nonlinearStrength(row, vs30), yRef);
+  return (nonlinearStrength(row, vs30) * yRef) / (yRef + row.phi4);
 }
 
-const siteSlopeOf = (row: Cy14Row, strength: number, yRef: number): number =>
-  (strength * yRef) / (yRef + row.phi4);
+/**
+ * What a row's site term and NL0 need of the site alone, for the last site it was asked for: the
+ * fast path evaluates a row over all of a site's pairs in turn, so these are worked out once per
+ * row and site rather than once per pair, from the same expressions.
+ */
+interface Cy14SiteParts {
+  vs30: number;
+  /** Z1 as given (km), or undefined for none. */
+  z1Given: number | undefined;
+  /** φ1 min(ln(Vs30 / 1130), 0). */
+  linear: number;
+  /** nonlinearStrength of the row at Vs30. */
+  strength: number;
+  /** φ5 (1 − e^(−ΔZ1 / φ6)), ΔZ1 in m (0 where Z1 is not given). */
+  basin: number;
+}
+
+const emptySiteParts = (): Cy14SiteParts => ({
+  vs30: NaN,
+  z1Given: undefined,
+  linear: NaN,
+  strength: NaN,
+  basin: NaN,
+});
+
+/** Each row's site parts, made when the row is first asked for (none of a site yet). */
+const sitePartsOf = rowMemo((_row: Cy14Row) => emptySiteParts());
+
+function siteAt(
+  parts: Cy14SiteParts,
+  row: Cy14Row,
+  vs30: number,
+  z1Km: number | undefined,
+): Cy14SiteParts {
+  if (parts.vs30 === vs30 && parts.z1Given === z1Km) return parts;
+  const deltaZ1M = z1Km === undefined ? 0 : (z1Km - cy14DefaultZ1Km(vs30)) * 1000;
+  parts.vs30 = vs30;
+  parts.z1Given = z1Km;
+  parts.linear = row.phi1 * Math.min(Math.log(vs30 / CY14_REFERENCE_VS30), 0);
+  parts.strength = nonlinearStrength(row, vs30);
+  parts.basin = row.phi5 * (1 - Math.exp(-deltaZ1M / row.phi6));
+  return parts;
+}
 
 /** Median (ln units) and standard deviations of one row for one rupture–site pair, written into `out`. */
 export function cy14PairPrediction(
@@ -256,11 +271,9 @@ export function cy14PairPrediction(
   const { row } = t;
   const lnYRef = t.sourceLn + cy14PathTerm(t, d);
   const yRef = Math.exp(lnYRef);
-  let v = t.vs30Terms;
-  if (v.vs30 !== site.vs30 || v.z1Km !== site.z1Km)
-    v = Object.assign(v, vs30TermsOf(row, site.vs30, site.z1Km));
-  const lnMedian = lnYRef + siteTermOf(row, v, yRef);
-  const onePlusNl0 = 1 + siteSlopeOf(row, v.strength, yRef);
+  const parts = siteAt(t.site, row, site.vs30, site.z1Km);
+  const lnMedian = lnYRef + siteTermFrom(row, parts, yRef);
+  const onePlusNl0 = 1 + (parts.strength * yRef) / (yRef + row.phi4);
   const phi =
     t.sigmaM * Math.sqrt((site.vs30Measured ? 0.7 : row.sigma3) + onePlusNl0 * onePlusNl0);
   const tau = onePlusNl0 * t.tau;

@@ -2,7 +2,10 @@ import { describe, expect, it } from 'vitest';
 import { InvalidInput } from '../../../api/engine/errors.ts';
 import { frameForStudy } from '../../../api/engine/geometry/projection.ts';
 import type { Study } from '../../../api/engine/model.ts';
-import { ruptureTable } from '../../../api/engine/hazard/rupture-table-builder.ts';
+import {
+  joinRuptureTables,
+  ruptureTable,
+} from '../../../api/engine/hazard/rupture-table-builder.ts';
 import type { RuptureTable } from '../../../api/engine/hazard/rupture-table.ts';
 import { studyRuptureTable } from '../../../api/engine/hazard/study-rupture-table.ts';
 import { discretiseStudy } from '../../../api/engine/ruptures/discretise.ts';
@@ -40,6 +43,40 @@ describe('studyRuptureTable', () => {
       expect(direct.table.count).toBe(ruptures.length);
       expect(direct.frame.origin).toEqual(frameForStudy(study).origin);
     }
+  });
+
+  it('joins the tables of consecutive parts of the sources into the whole table, however split', () => {
+    const study = allKindsStudy();
+    const whole = studyRuptureTable(study).table;
+    const n = study.sources.length;
+    expect(n).toBeGreaterThanOrEqual(3);
+    const splits = [
+      [0, n],
+      [0, 1, n],
+      [0, 2, n],
+      [0, 1, 2, n],
+      Array.from({ length: n + 1 }, (_, i) => i),
+    ];
+    for (const cuts of splits) {
+      const parts = cuts
+        .slice(1)
+        .map((end, p) => studyRuptureTable(study, { first: cuts[p]!, end }).table);
+      expect(joinRuptureTables(parts)).toEqual(whole);
+      const shared = joinRuptureTables(parts, (bytes) => new SharedArrayBuffer(bytes));
+      expect(shared.planeCorners.buffer).toBeInstanceOf(SharedArrayBuffer);
+      expect(Array.from(shared.planeStart)).toEqual(Array.from(whole.planeStart));
+      expect(Array.from(shared.planeCorners)).toEqual(Array.from(whole.planeCorners));
+    }
+    // A part with no sources is an empty table and changes nothing.
+    const empty = studyRuptureTable(study, { first: 1, end: 1 }).table;
+    expect(empty.count).toBe(0);
+    expect(
+      joinRuptureTables([
+        studyRuptureTable(study, { first: 0, end: 1 }).table,
+        empty,
+        studyRuptureTable(study, { first: 1, end: n }).table,
+      ]),
+    ).toEqual(whole);
   });
 
   it('names a bad field by its path in the study, as discretiseStudy does', () => {

@@ -6,6 +6,7 @@ import {
   checkPreparedAcrossSites,
   checkPreparedMeasures,
   checkPreparedModel,
+  checkSiteOrder,
 } from './prepared-checks.ts';
 
 // The hook's numbers against predict() (cb14.ts); predict() itself is checked against the paper in cb14.test.ts.
@@ -49,5 +50,16 @@ describe('CB14 precomputation hook', () => {
     expect(() => cb14.prepare!([rupture], { kind: 'PGA' })).toThrow(
       /dipDeg: expected a dip above 0° and at most 90°, got 0/,
     );
+  });
+
+  it('gives each site the same numbers whatever site came before (site parts kept per row are renewed when Vs30 or Z2.5 changes)', () => {
+    // Below and above k1 (nonlinear site term and σ, linear), Z2.5 given, default and in each basin branch.
+    checkSiteOrder(cb14, [
+      { vs30: 250, vs30Measured: true },
+      { vs30: 760, vs30Measured: true },
+      { vs30: 250, vs30Measured: true, z2p5Km: 0.5 },
+      { vs30: 250, vs30Measured: true, z2p5Km: 5 },
+      { vs30: 1300, vs30Measured: false, z2p5Km: 2 },
+    ]);
   });
 });

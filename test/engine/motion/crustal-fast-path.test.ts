@@ -6,6 +6,7 @@ import {
   checkPreparedAcrossSites,
   checkPreparedMeasures,
   checkPreparedModel,
+  checkSiteOrder,
 } from './prepared-checks.ts';
 import { expectFastPathMatchesVector, readVectors } from './reference-vectors.ts';
 
@@ -31,4 +32,27 @@ describe('ASK14 and CY14 fast path', () => {
       for (const c of readVectors(file).cases) expectFastPathMatchesVector(model, c, source);
     });
   }
+});
+
+describe('ASK14 and CY14 site parts', () => {
+  it('ASK14 gives each site the same numbers whatever site came before (site parts kept per row are renewed when Vs30 or Z1 changes)', () => {
+    // Below and above Vlin (nonlinear site term and slope, linear), above V1, Z1 given and not.
+    checkSiteOrder(ask14, [
+      { vs30: 250, vs30Measured: true },
+      { vs30: 760, vs30Measured: true },
+      { vs30: 250, vs30Measured: true, z1Km: 0.05 },
+      { vs30: 250, vs30Measured: false, z1Km: 0.6 },
+      { vs30: 1400, vs30Measured: true },
+    ]);
+  });
+  it('CY14 gives each site the same numbers whatever site came before (site parts renewed when Vs30 or Z1 changes)', () => {
+    // Below and above the reference 1130 m/s (linear term, nonlinear strength), Z1 given and not.
+    checkSiteOrder(cy14, [
+      { vs30: 250, vs30Measured: true },
+      { vs30: 760, vs30Measured: true },
+      { vs30: 250, vs30Measured: true, z1Km: 0.05 },
+      { vs30: 250, vs30Measured: false, z1Km: 0.6 },
+      { vs30: 1300, vs30Measured: true },
+    ]);
+  });
 });

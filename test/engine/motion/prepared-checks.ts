@@ -230,3 +230,50 @@ export function checkPreparedAcrossSites(
     }
   }
 }
+
+/**
+ * Checks that a model's numbers at each of `sites` do not depend on the site asked before (a
+ * model may keep parts of the last site's terms): each site's prediction alone, after another
+ * site, must be exactly that site's in a run over all sites twice, and the sites must differ.
+ */
+export function checkSiteOrder(model: GroundMotionModel, sites: readonly SiteContext[]): void {
+  const rupture: RuptureContext = {
+    magnitude: 6.5,
+    rakeDeg: 90,
+    mechanism: 'reverse',
+    setting: 'crustal',
+    dipDeg: 45,
+    ztorKm: 2,
+    widthKm: 15,
+    hypoDepthKm: 9,
+  };
+  const distances = { rjbKm: 12, rrupKm: 14, rxKm: 8, ry0Km: 0, rhypoKm: 16, repiKm: 13 };
+  const predictAt = (site: SiteContext, measure: Measure) =>
+    model.predict({ ...rupture, ...distances, ...site }, measure);
+  const measures: Measure[] = [
+    { kind: 'PGA' },
+    { kind: 'SA', periodS: 0.1 },
+    { kind: 'SA', periodS: 1 },
+  ];
+  const alone = measures.map((measure) =>
+    sites.map((site, i) => {
+      predictAt(sites[(i + 1) % sites.length]!, measure);
+      return predictAt(site, measure);
+    }),
+  );
+  measures.forEach((measure, m) => {
+    [...sites, ...sites].forEach((site, i) => {
+      const p = predictAt(site, measure);
+      const expected = alone[m]![i % sites.length]!;
+      expect(p.lnMedian, `${model.name} ${measureLabel(measure)} site ${i}`).toBe(
+        expected.lnMedian,
+      );
+      expect(p.sigma).toBe(expected.sigma);
+    });
+  });
+  // Every site differs from the others in some measure's median or σ: a stale site part would show.
+  const bySite = sites.map((_, i) =>
+    alone.map((row) => `${row[i]!.lnMedian} ${row[i]!.sigma}`).join(' '),
+  );
+  expect(new Set(bySite).size).toBe(sites.length);
+}
