@@ -5,12 +5,14 @@ import type { InputIssue } from '../../api/engine/errors.ts';
 import type { Study } from '../../api/engine/model.ts';
 import { chosenFit, type CatalogAnalysis } from '../data/catalog-analysis.ts';
 import type { AttachedCatalog } from '../data/study-catalog.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
 import {
   FrequencyMagnitudeLegend,
   FrequencyMagnitudePlot,
 } from '../plots/frequency-magnitude-plot.tsx';
 import { FieldProblems } from './field-problems.tsx';
+import { Notice } from '../components/notice.tsx';
 
 /** The zone form's values, as posted. */
 export interface ZoneForm {
@@ -77,21 +79,16 @@ export function CatalogView(props: CatalogViewProps) {
     </div>
   );
   return (
-    <PageShell
+    <TitledPage
       page={props.page}
-      title={tr.t('catalog.title', { name: study.name })}
-      titleLang={tr.fallbackLang('catalog.title')}
+      titleKey="catalog.title"
+      titleValues={{ name: study.name }}
       study={{ id: studyId, name: study.name }}
       section="catalog"
       showsNumbers={fit !== undefined}
     >
-      <h1>{tr.text('catalog.title', { name: study.name })}</h1>
       <p>{tr.text('catalog.intro')}</p>
-      {props.zoneAdded && (
-        <p class="notice" role="status">
-          {tr.text('catalog.zoneAdded')}
-        </p>
-      )}
+      {props.zoneAdded && <Notice>{tr.text('catalog.zoneAdded')}</Notice>}
       {catalog ? (
         <p>{tr.text('catalog.attached', { file: catalog.fileName, format: catalog.format })}</p>
       ) : (
@@ -326,6 +323,6 @@ export function CatalogView(props: CatalogViewProps) {
           )}
         </section>
       )}
-    </PageShell>
+    </TitledPage>
   );
 }

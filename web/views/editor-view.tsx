@@ -5,13 +5,15 @@ import type { Study } from '../../api/engine/model.ts';
 import type { StudyPart } from '../../api/study/load-study.ts';
 import type { ColumnPick } from '../data/community-import.ts';
 import { issueFeature, issueLine } from '../data/study-edits.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
 import { mapFrame, studyPoints } from '../maps/map-frame.ts';
 import { StudyMap } from '../maps/study-map.tsx';
 import type { Translator } from '../text/translator.ts';
 import { ColumnPickForm } from './column-pick-view.tsx';
 import { DraftNotice } from './draft-notice.tsx';
 import { FieldProblems } from './field-problems.tsx';
+import { Notice } from '../components/notice.tsx';
 
 /** An upload that did not validate: which form, its problems, and the text (for the line view). */
 export interface UploadProblem {
@@ -112,20 +114,15 @@ export function EditorView(props: EditorViewProps) {
   const geoProblem = problem?.upload === 'sources' ? problem : undefined;
   const featureIds = featureIdsOf(geoProblem?.text);
   return (
-    <PageShell
+    <TitledPage
       page={props.page}
-      title={tr.t('editor.title', { name: study.name })}
-      titleLang={tr.fallbackLang('editor.title')}
+      titleKey="editor.title"
+      titleValues={{ name: study.name }}
       study={{ id: studyId, name: study.name }}
       section="edit"
     >
-      <h1>{tr.text('editor.title', { name: study.name })}</h1>
       <p>{tr.text('editor.intro')}</p>
-      {props.saved && (
-        <p class="notice" role="status">
-          {tr.text('editor.saved')}
-        </p>
-      )}
+      {props.saved && <Notice>{tr.text('editor.saved')}</Notice>}
       {(problem || (props.notice?.length ?? 0) > 0) && (
         <p class="problem" role="alert">
           {tr.text('editor.notSaved')}
@@ -375,7 +372,7 @@ export function EditorView(props: EditorViewProps) {
           </a>
         </p>
       </section>
-    </PageShell>
+    </TitledPage>
   );
 }
 

@@ -3,7 +3,8 @@ import { TECTONIC_SETTINGS } from '../../api/engine/model.ts';
 import { DEFAULT_NUMBERS } from '../../api/study/fault-files/fault-defaults.ts';
 import { FAULT_FIELDS } from '../../api/study/fault-files/fault-fields.ts';
 import type { FaultImportPreview } from '../data/fault-import.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
 import type { TextKey } from '../text/text-key.ts';
 import { FieldProblems } from './field-problems.tsx';
 
@@ -28,16 +29,13 @@ export function FaultImportView(props: FaultImportViewProps) {
   const { tr } = props.page;
   const action = `/studies/${props.studyId}/edit/import-faults`;
   const preview = props.preview;
-  const title = tr.t('faults.title');
   return (
-    <PageShell
+    <TitledPage
       page={props.page}
-      title={title}
-      titleLang={tr.fallbackLang('faults.title')}
+      titleKey="faults.title"
       study={{ id: props.studyId, name: props.studyName }}
       section="edit"
     >
-      <h1>{tr.text('faults.title')}</h1>
       <p>{tr.text('faults.intro')}</p>
       <FieldProblems
         tr={tr}
@@ -173,6 +171,6 @@ export function FaultImportView(props: FaultImportViewProps) {
           </p>
         </form>
       )}
-    </PageShell>
+    </TitledPage>
   );
 }

@@ -1,5 +1,7 @@
 import type { StudySummary } from '../../api/store/index.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
+import { Notice } from '../components/notice.tsx';
 
 export function HomeView(props: {
   readonly page: PageContext;
@@ -9,17 +11,8 @@ export function HomeView(props: {
 }) {
   const { tr } = props.page;
   return (
-    <PageShell
-      page={props.page}
-      title={tr.t('home.title')}
-      titleLang={tr.fallbackLang('home.title')}
-    >
-      <h1>{tr.text('home.title')}</h1>
-      {props.deleted && (
-        <p class="notice" role="status">
-          {tr.text('deleteStudy.done')}
-        </p>
-      )}
+    <TitledPage page={props.page} titleKey="home.title">
+      {props.deleted && <Notice>{tr.text('deleteStudy.done')}</Notice>}
       <p class="lead">{tr.text('home.intro')}</p>
       <p>{tr.text('home.start')}</p>
       <p>
@@ -62,6 +55,6 @@ export function HomeView(props: {
           </tbody>
         </table>
       )}
-    </PageShell>
+    </TitledPage>
   );
 }

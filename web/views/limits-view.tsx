@@ -1,16 +1,12 @@
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
 import { SafetyAdvice } from './safety-advice.tsx';
 
 /** The limits of a screening and the safety advice (SAFETY.md in plain words). */
 export function LimitsView(props: { readonly page: PageContext }) {
   const { tr } = props.page;
   return (
-    <PageShell
-      page={props.page}
-      title={tr.t('limits.title')}
-      titleLang={tr.fallbackLang('limits.title')}
-    >
-      <h1>{tr.text('limits.title')}</h1>
+    <TitledPage page={props.page} titleKey="limits.title">
       <p class="lead">{tr.text('limits.intro')}</p>
       <ul class="limits" lang={tr.fallbackLang('limits.list')}>
         {tr
@@ -23,6 +19,6 @@ export function LimitsView(props: { readonly page: PageContext }) {
       <p>{tr.text('limits.source')}</p>
       <h2>{tr.text('community.todo')}</h2>
       <SafetyAdvice tr={tr} coastal={true} headingLevel={3} />
-    </PageShell>
+    </TitledPage>
   );
 }

@@ -3,7 +3,8 @@ import { TECTONIC_SETTINGS, type TectonicSetting } from '../../api/engine/model.
 import { DEFAULT_SETTINGS } from '../../api/study/settings-schema.ts';
 import { WEIGHT_SUM_TOLERANCE } from '../../api/study/branches-schema.ts';
 import { SETTING_FIELDS, type MotionForm, type SettingField } from '../data/motion-form.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
 import type { TextKey } from '../text/text-key.ts';
 import { FieldProblems, FormProblems } from './field-problems.tsx';
 
@@ -51,16 +52,14 @@ export function MotionFormView(props: MotionFormViewProps) {
   const bad = (name: string) => problems(name).length > 0;
   const described = (name: string, id: string, help?: string) =>
     [help, bad(name) ? `${id}-problem` : undefined].filter(Boolean).join(' ') || undefined;
-  const title = tr.t('motion.title', { name: props.studyName });
   return (
-    <PageShell
+    <TitledPage
       page={props.page}
-      title={title}
-      titleLang={tr.fallbackLang('motion.title')}
+      titleKey="motion.title"
+      titleValues={{ name: props.studyName }}
       study={{ id: props.studyId, name: props.studyName }}
       section="edit"
     >
-      <h1>{tr.text('motion.title', { name: props.studyName })}</h1>
       <p>{tr.text('motion.intro', { tolerance: String(WEIGHT_SUM_TOLERANCE) })}</p>
       <FormProblems tr={tr} fieldIssues={props.fieldIssues} otherIssues={props.otherIssues} />
       <form
@@ -217,6 +216,6 @@ export function MotionFormView(props: MotionFormViewProps) {
           <a href={`/studies/${props.studyId}/edit`}>{tr.text('editor.cancel')}</a>
         </p>
       </form>
-    </PageShell>
+    </TitledPage>
   );
 }

@@ -2,7 +2,8 @@ import type { InputIssue } from '../../api/engine/errors.ts';
 import { intensityWords } from '../format/intensity-words.ts';
 import type { Study } from '../../api/engine/model.ts';
 import type { ScenarioResult } from '../../api/engine/scenario/index.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
 import type { MapFrame } from '../maps/map-frame.ts';
 import { ScenarioLayer, ScenarioLegend } from '../maps/scenario-layer.tsx';
 import { StudyMap } from '../maps/study-map.tsx';
@@ -30,15 +31,14 @@ export function ScenarioView(props: ScenarioViewProps) {
   const issuesAt = (path: string) => props.issues.filter((i) => i.path === path);
   const others = props.issues.filter((i) => i.path !== 'sourceId' && i.path !== 'magnitude');
   return (
-    <PageShell
+    <TitledPage
       page={props.page}
-      title={tr.t('scenario.title', { name: study.name })}
-      titleLang={tr.fallbackLang('scenario.title')}
+      titleKey="scenario.title"
+      titleValues={{ name: study.name }}
       study={{ id: studyId, name: study.name }}
       section="scenario"
       showsNumbers={result !== undefined}
     >
-      <h1>{tr.text('scenario.title', { name: study.name })}</h1>
       <p>{tr.text('scenario.intro')}</p>
       <form method="post" action={`/studies/${studyId}/scenario`} class="scenario-form" novalidate>
         <div class="field">
@@ -179,6 +179,6 @@ export function ScenarioView(props: ScenarioViewProps) {
       {result && props.tsunami && (
         <TsunamiScenario tr={tr} studyId={studyId} tsunami={props.tsunami} />
       )}
-    </PageShell>
+    </TitledPage>
   );
 }

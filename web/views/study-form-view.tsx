@@ -1,6 +1,7 @@
 import type { InputIssue } from '../../api/engine/errors.ts';
 import type { ColumnPick } from '../data/community-import.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
 import { ColumnPickForm } from './column-pick-view.tsx';
 import { describeIssue } from './editor-view.tsx';
 import { FieldProblems } from './field-problems.tsx';
@@ -41,12 +42,7 @@ export function StudyFormView(props: StudyFormViewProps) {
   const fileIssues = props.fileIssues ?? [];
   const failed = nameIssues.length + fileIssues.length > 0;
   return (
-    <PageShell
-      page={props.page}
-      title={tr.t(TITLES[kind], values)}
-      titleLang={tr.fallbackLang(TITLES[kind])}
-    >
-      <h1>{tr.text(TITLES[kind], values)}</h1>
+    <TitledPage page={props.page} titleKey={TITLES[kind]} titleValues={values}>
       {kind === 'new' && <p>{tr.text('newStudy.intro')}</p>}
       {kind === 'duplicate' && <p>{tr.text('duplicateStudy.intro')}</p>}
       {failed && (
@@ -113,6 +109,6 @@ export function StudyFormView(props: StudyFormViewProps) {
           {props.study ? tr.text('nav.overview') : tr.text('studyForm.cancel')}
         </a>
       </p>
-    </PageShell>
+    </TitledPage>
   );
 }

@@ -1,7 +1,8 @@
 import type { ScreeningBandId } from '../../api/engine/intensity/screening-band.ts';
 import type { TripPlan } from '../../api/engine/trip/visit-order.ts';
 import { BandSwatch } from '../layout/band-swatch.tsx';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
 
 export interface TripViewProps {
   readonly page: PageContext;
@@ -24,16 +25,15 @@ export function TripView(props: TripViewProps) {
   let sumKm = 0;
   const km = (value: number) => tr.t('priority.km', { km: tr.number(value, 1) });
   return (
-    <PageShell
+    <TitledPage
       page={props.page}
-      title={tr.t('trip.title', { name: props.studyName })}
-      titleLang={tr.fallbackLang('trip.title')}
+      titleKey="trip.title"
+      titleValues={{ name: props.studyName }}
       study={{ id: studyId, name: props.studyName }}
       section="overview"
       bodyClass="trip-page"
       showsNumbers={true}
     >
-      <h1>{tr.text('trip.title', { name: props.studyName })}</h1>
       <p>{tr.text('trip.method')}</p>
       <table class="data-table trip-table">
         <caption>{tr.text('trip.caption')}</caption>
@@ -108,6 +108,6 @@ export function TripView(props: TripViewProps) {
       <p class="no-print">
         <a href={`/studies/${studyId}#priority-heading`}>{tr.text('trip.back')}</a>
       </p>
-    </PageShell>
+    </TitledPage>
   );
 }

@@ -1,6 +1,7 @@
 import type { InputIssue } from '../../api/engine/errors.ts';
 import { REFERRAL_STATUSES, type VisitRecord } from '../../api/store/visit-repository.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
 import type { Translator } from '../text/translator.ts';
 import { FieldProblems } from './field-problems.tsx';
 
@@ -97,14 +98,13 @@ export function VisitFormView(props: VisitFormViewProps) {
   const described = (name: string) =>
     issuesOf(name).length > 0 ? `visit-${name}-problems` : undefined;
   return (
-    <PageShell
+    <TitledPage
       page={props.page}
-      title={tr.t('visits.formTitle', { name: props.communityName })}
-      titleLang={tr.fallbackLang('visits.formTitle')}
+      titleKey="visits.formTitle"
+      titleValues={{ name: props.communityName }}
       study={{ id: props.studyId, name: props.studyName }}
       section="overview"
     >
-      <h1>{tr.text('visits.formTitle', { name: props.communityName })}</h1>
       {issues.length > 0 && (
         <p role="alert" class="form-problems">
           {tr.text('visits.problems')}
@@ -165,6 +165,6 @@ export function VisitFormView(props: VisitFormViewProps) {
           {tr.text('visits.backToCommunity', { name: props.communityName })}
         </a>
       </p>
-    </PageShell>
+    </TitledPage>
   );
 }
