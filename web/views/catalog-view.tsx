@@ -13,6 +13,7 @@ import {
 } from '../plots/frequency-magnitude-plot.tsx';
 import { FieldProblems } from './field-problems.tsx';
 import { Notice } from '../components/notice.tsx';
+import { DataTable } from '../components/data-table.tsx';
 
 /** The zone form's values, as posted. */
 export interface ZoneForm {
@@ -182,23 +183,19 @@ export function CatalogView(props: CatalogViewProps) {
             </p>
           )}
           {analysis.load.rejected.length > 0 && (
-            <table class="data-table rejected">
-              <caption>{tr.text('catalog.rejectedCaption')}</caption>
-              <thead>
-                <tr>
-                  <th scope="col">{tr.text('catalog.col.where')}</th>
-                  <th scope="col">{tr.text('catalog.col.why')}</th>
+            <DataTable
+              tr={tr}
+              class="rejected"
+              caption={tr.text('catalog.rejectedCaption')}
+              columns={['catalog.col.where', 'catalog.col.why']}
+            >
+              {analysis.load.rejected.slice(0, 100).map((r) => (
+                <tr data-line={r.line}>
+                  <th scope="row">{r.where}</th>
+                  <td>{tr.english(r.reasons.join('; '))}</td>
                 </tr>
-              </thead>
-              <tbody>
-                {analysis.load.rejected.slice(0, 100).map((r) => (
-                  <tr data-line={r.line}>
-                    <th scope="row">{r.where}</th>
-                    <td>{tr.english(r.reasons.join('; '))}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
+              ))}
+            </DataTable>
           )}
           {result?.declustering && (
             <p>

@@ -14,6 +14,7 @@ import { ColumnPickForm } from './column-pick-view.tsx';
 import { DraftNotice } from './draft-notice.tsx';
 import { FieldProblems } from './field-problems.tsx';
 import { Notice } from '../components/notice.tsx';
+import { DataTable, LabelledCell } from '../components/data-table.tsx';
 
 /** An upload that did not validate: which form, its problems, and the text (for the line view). */
 export interface UploadProblem {
@@ -144,75 +145,67 @@ export function EditorView(props: EditorViewProps) {
             {tr.text('editor.add')}
           </a>
         </p>
-        <div class="table-scroll">
-          <table class="data-table editor-table">
-            <caption>{tr.text('editor.communitiesCaption')}</caption>
-            <thead>
-              <tr>
-                <th scope="col">{tr.text('editor.field.name')}</th>
-                <th scope="col">{tr.text('editor.col.id')}</th>
-                <th scope="col" class="numeric">
-                  {tr.text('editor.col.lon')}
-                </th>
-                <th scope="col" class="numeric">
-                  {tr.text('editor.col.lat')}
-                </th>
-                <th scope="col">{tr.text('editor.col.site')}</th>
-                <th scope="col" class="numeric">
-                  {tr.text('editor.col.people')}
-                </th>
-                <th scope="col">{tr.text('editor.col.coastal')}</th>
-                <th scope="col">{tr.text('editor.col.actions')}</th>
-              </tr>
-            </thead>
-            <tbody>
-              {study.communities.map((c) => (
-                <tr data-community={c.id}>
-                  <th scope="row">{c.name}</th>
-                  <td data-label={tr.t('editor.col.id')}>
-                    <code>{c.id}</code>
-                  </td>
-                  <td class="numeric" data-label={tr.t('editor.col.lon')}>
-                    {String(c.lon)}
-                  </td>
-                  <td class="numeric" data-label={tr.t('editor.col.lat')}>
-                    {String(c.lat)}
-                  </td>
-                  <td data-label={tr.t('editor.col.site')}>
-                    {c.vs30Basis === 'measured'
-                      ? `${c.vs30} m/s`
-                      : c.vs30Proxy !== undefined
-                        ? tr.text('editor.siteProxy', {
-                            vs30: tr.number(c.vs30),
-                            siteClass: c.vs30Proxy.siteClass,
-                          })
-                        : `${c.siteClass} (${c.vs30} m/s)`}
-                  </td>
-                  <td class="numeric" data-label={tr.t('editor.col.people')}>
-                    {c.population === undefined ? '' : tr.number(c.population)}
-                  </td>
-                  <td data-label={c.coastal ? tr.t('editor.col.coastal') : undefined}>
-                    {c.coastal ? tr.text('editor.coastalYes') : ''}
-                  </td>
-                  <td class="row-actions">
-                    <a href={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}`}>
-                      {tr.text('editor.edit', { name: c.name })}
-                    </a>
-                    <form
-                      method="post"
-                      action={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}/remove`}
-                      class="inline-form"
-                    >
-                      <button type="submit" class="button-quiet">
-                        {tr.text('editor.remove', { name: c.name })}
-                      </button>
-                    </form>
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <DataTable
+          tr={tr}
+          class="editor-table"
+          scroll
+          caption={tr.text('editor.communitiesCaption')}
+          columns={[
+            'editor.field.name',
+            'editor.col.id',
+            { key: 'editor.col.lon', numeric: true },
+            { key: 'editor.col.lat', numeric: true },
+            'editor.col.site',
+            { key: 'editor.col.people', numeric: true },
+            'editor.col.coastal',
+            'editor.col.actions',
+          ]}
+        >
+          {study.communities.map((c) => (
+            <tr data-community={c.id}>
+              <th scope="row">{c.name}</th>
+              <LabelledCell tr={tr} column="editor.col.id">
+                <code>{c.id}</code>
+              </LabelledCell>
+              <LabelledCell tr={tr} column="editor.col.lon" numeric>
+                {String(c.lon)}
+              </LabelledCell>
+              <LabelledCell tr={tr} column="editor.col.lat" numeric>
+                {String(c.lat)}
+              </LabelledCell>
+              <LabelledCell tr={tr} column="editor.col.site">
+                {c.vs30Basis === 'measured'
+                  ? `${c.vs30} m/s`
+                  : c.vs30Proxy !== undefined
+                    ? tr.text('editor.siteProxy', {
+                        vs30: tr.number(c.vs30),
+                        siteClass: c.vs30Proxy.siteClass,
+                      })
+                    : `${c.siteClass} (${c.vs30} m/s)`}
+              </LabelledCell>
+              <LabelledCell tr={tr} column="editor.col.people" numeric>
+                {c.population === undefined ? '' : tr.number(c.population)}
+              </LabelledCell>
+              <td data-label={c.coastal ? tr.t('editor.col.coastal') : undefined}>
+                {c.coastal ? tr.text('editor.coastalYes') : ''}
+              </td>
+              <td class="row-actions">
+                <a href={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}`}>
+                  {tr.text('editor.edit', { name: c.name })}
+                </a>
+                <form
+                  method="post"
+                  action={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}/remove`}
+                  class="inline-form"
+                >
+                  <button type="submit" class="button-quiet">
+                    {tr.text('editor.remove', { name: c.name })}
+                  </button>
+                </form>
+              </td>
+            </tr>
+          ))}
+        </DataTable>
       </section>
 
       <section aria-labelledby="upload-communities-heading" class="upload">
@@ -285,46 +278,47 @@ export function EditorView(props: EditorViewProps) {
             <figcaption>{tr.text('source.preview')}</figcaption>
           </figure>
         )}
-        <div class="table-scroll">
-          <table class="data-table">
-            <caption>{tr.text('editor.sourcesCaption')}</caption>
-            <thead>
-              <tr>
-                <th scope="col">{tr.text('editor.col.source')}</th>
-                <th scope="col">{tr.text('editor.col.id')}</th>
-                <th scope="col">{tr.text('editor.col.kind')}</th>
-                <th scope="col">{tr.text('editor.col.setting')}</th>
-                <th scope="col">{tr.text('editor.col.actions')}</th>
-              </tr>
-            </thead>
-            <tbody>
-              {study.sources.map((s) => (
-                <tr data-source={s.id}>
-                  <th scope="row">{s.name}</th>
-                  <td data-label={tr.t('editor.col.id')}>
-                    <code>{s.id}</code>
-                  </td>
-                  <td data-label={tr.t('editor.col.kind')}>{tr.text(`editor.kind.${s.kind}`)}</td>
-                  <td data-label={tr.t('editor.col.setting')}>{s.setting}</td>
-                  <td class="row-actions">
-                    <a href={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}`}>
-                      {tr.text('source.edit', { name: s.name })}
-                    </a>
-                    <form
-                      method="post"
-                      action={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}/remove`}
-                      class="inline-form"
-                    >
-                      <button type="submit" class="button-quiet">
-                        {tr.text('source.remove', { name: s.name })}
-                      </button>
-                    </form>
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <DataTable
+          tr={tr}
+          scroll
+          caption={tr.text('editor.sourcesCaption')}
+          columns={[
+            'editor.col.source',
+            'editor.col.id',
+            'editor.col.kind',
+            'editor.col.setting',
+            'editor.col.actions',
+          ]}
+        >
+          {study.sources.map((s) => (
+            <tr data-source={s.id}>
+              <th scope="row">{s.name}</th>
+              <LabelledCell tr={tr} column="editor.col.id">
+                <code>{s.id}</code>
+              </LabelledCell>
+              <LabelledCell tr={tr} column="editor.col.kind">
+                {tr.text(`editor.kind.${s.kind}`)}
+              </LabelledCell>
+              <LabelledCell tr={tr} column="editor.col.setting">
+                {s.setting}
+              </LabelledCell>
+              <td class="row-actions">
+                <a href={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}`}>
+                  {tr.text('source.edit', { name: s.name })}
+                </a>
+                <form
+                  method="post"
+                  action={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}/remove`}
+                  class="inline-form"
+                >
+                  <button type="submit" class="button-quiet">
+                    {tr.text('source.remove', { name: s.name })}
+                  </button>
+                </form>
+              </td>
+            </tr>
+          ))}
+        </DataTable>
       </section>
 
       <section aria-labelledby="upload-sources-heading" class="upload">
@@ -393,42 +387,35 @@ function CsvLines(props: {
     if (line !== undefined) byLine.set(line, [...(byLine.get(line) ?? []), issue]);
   }
   return (
-    <table class="data-table csv-lines">
-      <caption>{tr.text('editor.csvPreview')}</caption>
-      <thead>
-        <tr>
-          <th scope="col" class="numeric">
-            {tr.text('editor.col.line')}
-          </th>
-          <th scope="col">{tr.text('editor.col.text')}</th>
-          <th scope="col">{tr.text('editor.col.problem')}</th>
-        </tr>
-      </thead>
-      <tbody>
-        {lines.map((text, i) => {
-          const problems = byLine.get(i + 1) ?? [];
-          return (
-            <tr class={problems.length > 0 ? 'line-bad' : undefined} data-line={i + 1}>
-              <th scope="row" class="numeric">
-                {i + 1}
-              </th>
-              <td>
-                <code>{text}</code>
-              </td>
-              <td>
-                {tr.english(
-                  problems
-                    .map(
-                      (p) =>
-                        p.path.split(`[line ${i + 1}]`)[1]?.replace(/^\./, '') + ': ' + p.message,
-                    )
-                    .join('; '),
-                )}
-              </td>
-            </tr>
-          );
-        })}
-      </tbody>
-    </table>
+    <DataTable
+      tr={tr}
+      class="csv-lines"
+      caption={tr.text('editor.csvPreview')}
+      columns={[{ key: 'editor.col.line', numeric: true }, 'editor.col.text', 'editor.col.problem']}
+    >
+      {lines.map((text, i) => {
+        const problems = byLine.get(i + 1) ?? [];
+        return (
+          <tr class={problems.length > 0 ? 'line-bad' : undefined} data-line={i + 1}>
+            <th scope="row" class="numeric">
+              {i + 1}
+            </th>
+            <td>
+              <code>{text}</code>
+            </td>
+            <td>
+              {tr.english(
+                problems
+                  .map(
+                    (p) =>
+                      p.path.split(`[line ${i + 1}]`)[1]?.replace(/^\./, '') + ': ' + p.message,
+                  )
+                  .join('; '),
+              )}
+            </td>
+          </tr>
+        );
+      })}
+    </DataTable>
   );
 }

@@ -7,6 +7,7 @@ import type { PageContext } from '../layout/page-shell.tsx';
 import { TitledPage } from '../layout/titled-page.tsx';
 import type { TextKey } from '../text/text-key.ts';
 import { FieldProblems } from './field-problems.tsx';
+import { DataTable } from '../components/data-table.tsx';
 
 export interface FaultImportViewProps {
   readonly page: PageContext;
@@ -130,35 +131,31 @@ export function FaultImportView(props: FaultImportViewProps) {
             })}
           </fieldset>
           {preview.problems.length > 0 && (
-            <div class="table-scroll">
-              <table class="data-table fault-problems">
-                <caption>
-                  {tr.text('faults.problems', { count: String(preview.problems.length) })}
-                </caption>
-                <thead>
-                  <tr>
-                    <th scope="col">{tr.text('faults.col.feature')}</th>
-                    <th scope="col">{tr.text('faults.col.name')}</th>
-                    <th scope="col">{tr.text('faults.col.field')}</th>
-                    <th scope="col">{tr.text('faults.col.from')}</th>
-                    <th scope="col">{tr.text('faults.col.problem')}</th>
-                  </tr>
-                </thead>
-                <tbody>
-                  {preview.problems.map((p) => (
-                    <tr data-feature={p.feature} data-field={p.field}>
-                      <td>{p.feature}</td>
-                      <th scope="row">{p.name}</th>
-                      <td>
-                        <code>{p.field}</code>
-                      </td>
-                      <td>{p.from ?? ''}</td>
-                      <td lang="en">{p.message}</td>
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
-            </div>
+            <DataTable
+              tr={tr}
+              class="fault-problems"
+              scroll
+              caption={tr.text('faults.problems', { count: String(preview.problems.length) })}
+              columns={[
+                'faults.col.feature',
+                'faults.col.name',
+                'faults.col.field',
+                'faults.col.from',
+                'faults.col.problem',
+              ]}
+            >
+              {preview.problems.map((p) => (
+                <tr data-feature={p.feature} data-field={p.field}>
+                  <td>{p.feature}</td>
+                  <th scope="row">{p.name}</th>
+                  <td>
+                    <code>{p.field}</code>
+                  </td>
+                  <td>{p.from ?? ''}</td>
+                  <td lang="en">{p.message}</td>
+                </tr>
+              ))}
+            </DataTable>
           )}
           <p class="form-actions">
             <button type="submit" name="step" value="check">

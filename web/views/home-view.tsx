@@ -2,6 +2,7 @@ import type { StudySummary } from '../../api/store/index.ts';
 import type { PageContext } from '../layout/page-shell.tsx';
 import { TitledPage } from '../layout/titled-page.tsx';
 import { Notice } from '../components/notice.tsx';
+import { DataTable, LabelledCell } from '../components/data-table.tsx';
 
 export function HomeView(props: {
   readonly page: PageContext;
@@ -23,37 +24,33 @@ export function HomeView(props: {
       {props.studies.length === 0 ? (
         <p>{tr.text('home.none')}</p>
       ) : (
-        <table class="data-table">
-          <caption>{tr.text('home.caption')}</caption>
-          <thead>
+        <DataTable
+          tr={tr}
+          caption={tr.text('home.caption')}
+          columns={['home.col.name', 'home.col.updated', 'home.col.actions']}
+        >
+          {props.studies.map((s) => (
             <tr>
-              <th scope="col">{tr.text('home.col.name')}</th>
-              <th scope="col">{tr.text('home.col.updated')}</th>
-              <th scope="col">{tr.text('home.col.actions')}</th>
+              <th scope="row">
+                <a href={`/studies/${s.id}`}>{s.name}</a>
+              </th>
+              <LabelledCell tr={tr} column="home.col.updated">
+                {tr.date(s.updatedAt)}
+              </LabelledCell>
+              <td class="row-actions">
+                <a href={`/studies/${s.id}/rename`}>
+                  {tr.text('studyActions.rename', { name: s.name })}
+                </a>{' '}
+                <a href={`/studies/${s.id}/duplicate`}>
+                  {tr.text('studyActions.duplicate', { name: s.name })}
+                </a>{' '}
+                <a href={`/studies/${s.id}/delete`}>
+                  {tr.text('studyActions.delete', { name: s.name })}
+                </a>
+              </td>
             </tr>
-          </thead>
-          <tbody>
-            {props.studies.map((s) => (
-              <tr>
-                <th scope="row">
-                  <a href={`/studies/${s.id}`}>{s.name}</a>
-                </th>
-                <td data-label={tr.t('home.col.updated')}>{tr.date(s.updatedAt)}</td>
-                <td class="row-actions">
-                  <a href={`/studies/${s.id}/rename`}>
-                    {tr.text('studyActions.rename', { name: s.name })}
-                  </a>{' '}
-                  <a href={`/studies/${s.id}/duplicate`}>
-                    {tr.text('studyActions.duplicate', { name: s.name })}
-                  </a>{' '}
-                  <a href={`/studies/${s.id}/delete`}>
-                    {tr.text('studyActions.delete', { name: s.name })}
-                  </a>
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+          ))}
+        </DataTable>
       )}
     </TitledPage>
   );

@@ -7,6 +7,7 @@ import type { PageContext } from '../layout/page-shell.tsx';
 import { TitledPage } from '../layout/titled-page.tsx';
 import type { TextKey } from '../text/text-key.ts';
 import { FieldProblems, FormProblems } from './field-problems.tsx';
+import { DataTable } from '../components/data-table.tsx';
 
 export interface MotionFormViewProps {
   readonly page: PageContext;
@@ -78,77 +79,67 @@ export function MotionFormView(props: MotionFormViewProps) {
           return (
             <fieldset data-setting={setting}>
               <legend>{tr.text(`source.choice.${setting}`)}</legend>
-              <div class="table-scroll">
-                <table class="data-table">
-                  <caption class="visually-hidden">
-                    {tr.text('motion.caption', { setting: tr.t(`source.choice.${setting}`) })}
-                  </caption>
-                  <thead>
-                    <tr>
-                      <th scope="col">{tr.text('motion.col.model')}</th>
-                      <th scope="col">{tr.text('motion.col.weight')}</th>
-                      <th scope="col">{tr.text('motion.col.remove')}</th>
+              <DataTable
+                tr={tr}
+                scroll
+                caption={tr.text('motion.caption', { setting: tr.t(`source.choice.${setting}`) })}
+                captionClass="visually-hidden"
+                columns={['motion.col.model', 'motion.col.weight', 'motion.col.remove']}
+              >
+                {rows.map((row, i) => {
+                  const at = `${setting}.${i}`;
+                  const id = `branch-${setting}-${i}`;
+                  return (
+                    <tr data-model={row.model}>
+                      <th scope="row">
+                        <input type="hidden" name={`branch.${at}.model`} value={row.model} />
+                        {row.model}
+                        <FieldProblems
+                          tr={tr}
+                          id={`${id}-model-problem`}
+                          issues={problems(`${at}.model`)}
+                        />
+                      </th>
+                      <td
+                        data-label={tr.t('motion.col.weight')}
+                        class={bad(`${at}.weight`) ? 'field-bad' : undefined}
+                      >
+                        <input
+                          id={`${id}-weight`}
+                          name={`branch.${at}.weight`}
+                          type="text"
+                          inputmode="decimal"
+                          value={row.weight}
+                          aria-label={tr.t('motion.weightOf', { model: row.model })}
+                          aria-invalid={bad(`${at}.weight`) || bad(setting) ? 'true' : undefined}
+                          aria-describedby={described(
+                            `${at}.weight`,
+                            `${id}-weight`,
+                            bad(setting) ? `${sumId} ${sumId}-problem` : sumId,
+                          )}
+                          autocomplete="off"
+                        />
+                        <FieldProblems
+                          tr={tr}
+                          id={`${id}-weight-problem`}
+                          issues={problems(`${at}.weight`)}
+                        />
+                      </td>
+                      <td class="field-check">
+                        <input
+                          id={`${id}-remove`}
+                          name={`branch.${at}.remove`}
+                          type="checkbox"
+                          value="true"
+                        />
+                        <label for={`${id}-remove`}>
+                          {tr.text('motion.removeModel', { model: row.model })}
+                        </label>
+                      </td>
                     </tr>
-                  </thead>
-                  <tbody>
-                    {rows.map((row, i) => {
-                      const at = `${setting}.${i}`;
-                      const id = `branch-${setting}-${i}`;
-                      return (
-                        <tr data-model={row.model}>
-                          <th scope="row">
-                            <input type="hidden" name={`branch.${at}.model`} value={row.model} />
-                            {row.model}
-                            <FieldProblems
-                              tr={tr}
-                              id={`${id}-model-problem`}
-                              issues={problems(`${at}.model`)}
-                            />
-                          </th>
-                          <td
-                            data-label={tr.t('motion.col.weight')}
-                            class={bad(`${at}.weight`) ? 'field-bad' : undefined}
-                          >
-                            <input
-                              id={`${id}-weight`}
-                              name={`branch.${at}.weight`}
-                              type="text"
-                              inputmode="decimal"
-                              value={row.weight}
-                              aria-label={tr.t('motion.weightOf', { model: row.model })}
-                              aria-invalid={
-                                bad(`${at}.weight`) || bad(setting) ? 'true' : undefined
-                              }
-                              aria-describedby={described(
-                                `${at}.weight`,
-                                `${id}-weight`,
-                                bad(setting) ? `${sumId} ${sumId}-problem` : sumId,
-                              )}
-                              autocomplete="off"
-                            />
-                            <FieldProblems
-                              tr={tr}
-                              id={`${id}-weight-problem`}
-                              issues={problems(`${at}.weight`)}
-                            />
-                          </td>
-                          <td class="field-check">
-                            <input
-                              id={`${id}-remove`}
-                              name={`branch.${at}.remove`}
-                              type="checkbox"
-                              value="true"
-                            />
-                            <label for={`${id}-remove`}>
-                              {tr.text('motion.removeModel', { model: row.model })}
-                            </label>
-                          </td>
-                        </tr>
-                      );
-                    })}
-                  </tbody>
-                </table>
-              </div>
+                  );
+                })}
+              </DataTable>
               <p id={sumId} class="help">
                 {sum === undefined
                   ? tr.text('motion.sumUnknown')

@@ -2,6 +2,7 @@ import { compassPoint } from '../../api/engine/catalog/felt-history.ts';
 import type { TsunamiCommunity, TsunamiResult } from '../../api/engine/tsunami/index.ts';
 import type { TsunamiPageResult } from '../data/tsunami-data.ts';
 import type { Translator } from '../text/translator.ts';
+import { DataTable, LabelledCell } from '../components/data-table.tsx';
 
 /** Distances to high ground in km with one decimal under this, whole km above. */
 const DECIMAL_KM_BELOW = 10;
@@ -132,50 +133,45 @@ export function TsunamiTable(props: {
 }) {
   const { tr } = props;
   return (
-    <div class="table-scroll">
-      <table class="data-table tsunami-table" id={props.id}>
-        <caption>{props.caption}</caption>
-        <thead>
-          <tr>
-            <th scope="col">{tr.text('tsunami.rank.place')}</th>
-            <th scope="col">{tr.text('tsunami.rank.arrival')}</th>
-            <th scope="col">{tr.text('tsunami.rank.ground')}</th>
+    <DataTable
+      tr={tr}
+      class="tsunami-table"
+      id={props.id}
+      scroll
+      caption={props.caption}
+      columns={['tsunami.rank.place', 'tsunami.rank.arrival', 'tsunami.rank.ground']}
+    >
+      {props.communities.map((c) => {
+        const g = c.highGround;
+        return (
+          <tr data-community={c.id} data-first-arrival-minutes={c.firstArrivalMinutes ?? ''}>
+            <th scope="row">
+              <a href={`/studies/${props.studyId}/communities/${c.id}`}>{c.name}</a>
+            </th>
+            <LabelledCell tr={tr} column="tsunami.rank.arrival">
+              {c.firstArrivalMinutes === null || c.latestMinutes === null
+                ? tr.text('tsunami.rank.none')
+                : tr.text('tsunami.rank.minutes', {
+                    from: tr.number(c.firstArrivalMinutes),
+                    to: tr.number(c.latestMinutes),
+                  })}
+            </LabelledCell>
+            <LabelledCell tr={tr} column="tsunami.rank.ground">
+              {g?.kind === 'found' &&
+                tr.text('tsunami.rank.groundAway', {
+                  km: km(tr, g.distanceKm),
+                  direction: tr.compass(compassPoint(g.bearingDeg)),
+                  minutes: tr.number(g.walkingMinutes),
+                })}
+              {g?.kind === 'already-above' &&
+                tr.text('tsunami.rank.groundAbove', { height: tr.number(g.heightM) })}
+              {g?.kind === 'none' &&
+                tr.text('tsunami.rank.groundNone', { km: tr.number(g.searchKm) })}
+            </LabelledCell>
           </tr>
-        </thead>
-        <tbody>
-          {props.communities.map((c) => {
-            const g = c.highGround;
-            return (
-              <tr data-community={c.id} data-first-arrival-minutes={c.firstArrivalMinutes ?? ''}>
-                <th scope="row">
-                  <a href={`/studies/${props.studyId}/communities/${c.id}`}>{c.name}</a>
-                </th>
-                <td data-label={tr.t('tsunami.rank.arrival')}>
-                  {c.firstArrivalMinutes === null || c.latestMinutes === null
-                    ? tr.text('tsunami.rank.none')
-                    : tr.text('tsunami.rank.minutes', {
-                        from: tr.number(c.firstArrivalMinutes),
-                        to: tr.number(c.latestMinutes),
-                      })}
-                </td>
-                <td data-label={tr.t('tsunami.rank.ground')}>
-                  {g?.kind === 'found' &&
-                    tr.text('tsunami.rank.groundAway', {
-                      km: km(tr, g.distanceKm),
-                      direction: tr.compass(compassPoint(g.bearingDeg)),
-                      minutes: tr.number(g.walkingMinutes),
-                    })}
-                  {g?.kind === 'already-above' &&
-                    tr.text('tsunami.rank.groundAbove', { height: tr.number(g.heightM) })}
-                  {g?.kind === 'none' &&
-                    tr.text('tsunami.rank.groundNone', { km: tr.number(g.searchKm) })}
-                </td>
-              </tr>
-            );
-          })}
-        </tbody>
-      </table>
-    </div>
+        );
+      })}
+    </DataTable>
   );
 }
 
