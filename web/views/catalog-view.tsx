@@ -14,6 +14,7 @@ import {
 import { FieldProblems } from './field-problems.tsx';
 import { Notice } from '../components/notice.tsx';
 import { DataTable } from '../components/data-table.tsx';
+import { FileField } from '../components/form-rows.tsx';
 
 /** The zone form's values, as posted. */
 export interface ZoneForm {
@@ -99,22 +100,14 @@ export function CatalogView(props: CatalogViewProps) {
       <section aria-labelledby="catalog-upload-heading" class="upload">
         <h2 id="catalog-upload-heading">{tr.text('catalog.upload')}</h2>
         <form method="post" action={`/studies/${studyId}/catalog`} enctype="multipart/form-data">
-          <div class="field">
-            <label for="catalog-file">{tr.text('catalog.file')}</label>
-            <input
-              id="catalog-file"
-              name="file"
-              type="file"
-              accept=".csv,.txt,.xml,.quakeml"
-              aria-describedby={
-                props.uploadIssues.length ? 'catalog-help catalog-problems' : 'catalog-help'
-              }
-            />
-            <p id="catalog-help" class="help">
-              {tr.text('catalog.uploadHelp')}
-            </p>
+          <FileField
+            tr={tr}
+            upload="catalog"
+            text={{ label: 'catalog.file', help: 'catalog.uploadHelp' }}
+            problems={props.uploadIssues.length > 0}
+          >
             <FieldProblems tr={tr} id="catalog-problems" issues={props.uploadIssues} />
-          </div>
+          </FileField>
           <button type="submit">{tr.text('catalog.load')}</button>
         </form>
         <form

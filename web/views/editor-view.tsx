@@ -14,6 +14,8 @@ import { ColumnPickForm } from './column-pick-view.tsx';
 import { DraftNotice } from './draft-notice.tsx';
 import { FieldProblems } from './field-problems.tsx';
 import { Notice } from '../components/notice.tsx';
+import { FileField } from '../components/form-rows.tsx';
+import { RowActions } from '../components/row-actions.tsx';
 import { DataTable, LabelledCell } from '../components/data-table.tsx';
 
 /** An upload that did not validate: which form, its problems, and the text (for the line view). */
@@ -189,64 +191,23 @@ export function EditorView(props: EditorViewProps) {
               <td data-label={c.coastal ? tr.t('editor.col.coastal') : undefined}>
                 {c.coastal ? tr.text('editor.coastalYes') : ''}
               </td>
-              <td class="row-actions">
-                <a href={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}`}>
-                  {tr.text('editor.edit', { name: c.name })}
-                </a>
-                <form
-                  method="post"
-                  action={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}/remove`}
-                  class="inline-form"
-                >
-                  <button type="submit" class="button-quiet">
-                    {tr.text('editor.remove', { name: c.name })}
-                  </button>
-                </form>
-              </td>
+              <RowActions
+                href={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}`}
+                edit={tr.text('editor.edit', { name: c.name })}
+                remove={tr.text('editor.remove', { name: c.name })}
+              />
             </tr>
           ))}
         </DataTable>
       </section>
 
-      <section aria-labelledby="upload-communities-heading" class="upload">
-        <h2 id="upload-communities-heading">{tr.text('editor.upload.communities')}</h2>
-        <form
-          method="post"
-          action={`/studies/${studyId}/edit/communities-csv#upload-communities-heading`}
-          enctype="multipart/form-data"
-        >
-          <div class="field">
-            <label for="communities-file">{tr.text('editor.upload.file')}</label>
-            <input
-              id="communities-file"
-              name="file"
-              type="file"
-              accept=".csv,.txt,.tsv,.xlsx,.kml,.kmz,.zip,.geojson,.json"
-              aria-describedby={
-                csvProblem ? 'communities-help communities-problems' : 'communities-help'
-              }
-              aria-invalid={csvProblem ? 'true' : undefined}
-            />
-            <p id="communities-help" class="help">
-              {tr.text('editor.upload.communitiesHelp')}
-            </p>
-            {csvProblem && (
-              <div class="upload-problems" data-upload="communities">
-                <p class="problem-title">{tr.text('editor.problems')}</p>
-                <FieldProblems
-                  tr={tr}
-                  id="communities-problems"
-                  issues={csvProblem.issues}
-                  describe={(i) => describeIssue(tr, i)}
-                />
-                {csvProblem.text !== undefined && (
-                  <CsvLines tr={tr} text={csvProblem.text} issues={csvProblem.issues} />
-                )}
-              </div>
-            )}
-          </div>
-          <button type="submit">{tr.text('editor.upload.button')}</button>
-        </form>
+      <UploadSection
+        tr={tr}
+        studyId={studyId}
+        upload="communities"
+        problem={csvProblem}
+        describe={(i) => describeIssue(tr, i)}
+      >
         {csvProblem?.pick && (
           <ColumnPickForm
             tr={tr}
@@ -254,7 +215,7 @@ export function EditorView(props: EditorViewProps) {
             pick={csvProblem.pick}
           />
         )}
-      </section>
+      </UploadSection>
 
       <section aria-labelledby="sources-heading">
         <h2 id="sources-heading">{tr.text('editor.sources')}</h2>
@@ -302,60 +263,23 @@ export function EditorView(props: EditorViewProps) {
               <LabelledCell tr={tr} column="editor.col.setting">
                 {s.setting}
               </LabelledCell>
-              <td class="row-actions">
-                <a href={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}`}>
-                  {tr.text('source.edit', { name: s.name })}
-                </a>
-                <form
-                  method="post"
-                  action={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}/remove`}
-                  class="inline-form"
-                >
-                  <button type="submit" class="button-quiet">
-                    {tr.text('source.remove', { name: s.name })}
-                  </button>
-                </form>
-              </td>
+              <RowActions
+                href={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}`}
+                edit={tr.text('source.edit', { name: s.name })}
+                remove={tr.text('source.remove', { name: s.name })}
+              />
             </tr>
           ))}
         </DataTable>
       </section>
 
-      <section aria-labelledby="upload-sources-heading" class="upload">
-        <h2 id="upload-sources-heading">{tr.text('editor.upload.sources')}</h2>
-        <form
-          method="post"
-          action={`/studies/${studyId}/edit/sources-geojson#upload-sources-heading`}
-          enctype="multipart/form-data"
-        >
-          <div class="field">
-            <label for="sources-file">{tr.text('editor.upload.file')}</label>
-            <input
-              id="sources-file"
-              name="file"
-              type="file"
-              accept=".geojson,.json,application/geo+json,application/json"
-              aria-describedby={geoProblem ? 'sources-help sources-problems' : 'sources-help'}
-              aria-invalid={geoProblem ? 'true' : undefined}
-            />
-            <p id="sources-help" class="help">
-              {tr.text('editor.upload.sourcesHelp')}
-            </p>
-            {geoProblem && (
-              <div class="upload-problems" data-upload="sources">
-                <p class="problem-title">{tr.text('editor.problems')}</p>
-                <FieldProblems
-                  tr={tr}
-                  id="sources-problems"
-                  issues={geoProblem.issues}
-                  describe={(i) => describeIssue(tr, i, featureIds)}
-                />
-              </div>
-            )}
-          </div>
-          <button type="submit">{tr.text('editor.upload.button')}</button>
-        </form>
-      </section>
+      <UploadSection
+        tr={tr}
+        studyId={studyId}
+        upload="sources"
+        problem={geoProblem}
+        describe={(i) => describeIssue(tr, i, featureIds)}
+      />
 
       <section aria-labelledby="motion-heading">
         <h2 id="motion-heading">{tr.text('motion.heading')}</h2>
@@ -367,6 +291,55 @@ export function EditorView(props: EditorViewProps) {
         </p>
       </section>
     </TitledPage>
+  );
+}
+
+/** Where each of the editor's uploads posts, below the study's editor. */
+const UPLOAD_PATHS = { communities: 'communities-csv', sources: 'sources-geojson' } as const;
+
+/** One of the editor's uploads: its section, the form with the file, and the last file's problems. */
+function UploadSection(props: {
+  readonly tr: Translator;
+  readonly studyId: string;
+  readonly upload: UploadProblem['upload'];
+  readonly problem: UploadProblem | undefined;
+  readonly describe: (issue: InputIssue) => Child;
+  /** What follows the form. */
+  readonly children?: Child;
+}) {
+  const { tr, upload, problem } = props;
+  const heading = `upload-${upload}-heading`;
+  const problemsId = `${upload}-problems`;
+  const action = `/studies/${props.studyId}/edit/${UPLOAD_PATHS[upload]}#${heading}`;
+  return (
+    <section aria-labelledby={heading} class="upload">
+      <h2 id={heading}>{tr.text(`editor.upload.${upload}`)}</h2>
+      <form method="post" action={action} enctype="multipart/form-data">
+        <FileField
+          tr={tr}
+          upload={upload}
+          text={{ label: 'editor.upload.file', help: `editor.upload.${upload}Help` }}
+          problems={problem !== undefined}
+        >
+          {problem && (
+            <div class="upload-problems" data-upload={upload}>
+              <p class="problem-title">{tr.text('editor.problems')}</p>
+              <FieldProblems
+                tr={tr}
+                id={problemsId}
+                issues={problem.issues}
+                describe={props.describe}
+              />
+              {upload === 'communities' && problem.text !== undefined && (
+                <CsvLines tr={tr} text={problem.text} issues={problem.issues} />
+              )}
+            </div>
+          )}
+        </FileField>
+        <button type="submit">{tr.text('editor.upload.button')}</button>
+      </form>
+      {props.children}
+    </section>
   );
 }
 

@@ -8,6 +8,7 @@ import { TitledPage } from '../layout/titled-page.tsx';
 import type { TextKey } from '../text/text-key.ts';
 import { FieldProblems } from './field-problems.tsx';
 import { DataTable } from '../components/data-table.tsx';
+import { FileField } from '../components/form-rows.tsx';
 
 export interface FaultImportViewProps {
   readonly page: PageContext;
@@ -45,19 +46,11 @@ export function FaultImportView(props: FaultImportViewProps) {
         describe={(i) => tr.english(`${i.path}: ${i.message}`)}
       />
       <form method="post" action={action} enctype="multipart/form-data" class="community-form">
-        <div class="field">
-          <label for="faults-file">{tr.text('faults.file')}</label>
-          <input
-            id="faults-file"
-            name="file"
-            type="file"
-            accept=".geojson,.json,.kml,.kmz,.zip"
-            aria-describedby="faults-file-help"
-          />
-          <p id="faults-file-help" class="help">
-            {tr.text('faults.fileHelp')}
-          </p>
-        </div>
+        <FileField
+          tr={tr}
+          upload="faults"
+          text={{ label: 'faults.file', help: 'faults.fileHelp' }}
+        />
         <button type="submit">{tr.text('faults.read')}</button>
       </form>
       {preview && (

@@ -8,6 +8,7 @@ import { TitledPage } from '../layout/titled-page.tsx';
 import type { TextKey } from '../text/text-key.ts';
 import { FieldProblems, FormProblems } from './field-problems.tsx';
 import { DataTable } from '../components/data-table.tsx';
+import { FormActions } from '../components/form-rows.tsx';
 
 export interface MotionFormViewProps {
   readonly page: PageContext;
@@ -200,12 +201,11 @@ export function MotionFormView(props: MotionFormViewProps) {
             );
           })}
         </fieldset>
-        <p class="form-actions">
-          <button type="submit" class="button-primary">
-            {tr.text('motion.save')}
-          </button>{' '}
-          <a href={`/studies/${props.studyId}/edit`}>{tr.text('editor.cancel')}</a>
-        </p>
+        <FormActions
+          tr={tr}
+          save={tr.text('motion.save')}
+          cancelHref={`/studies/${props.studyId}/edit`}
+        />
       </form>
     </TitledPage>
   );

@@ -3,6 +3,7 @@ import type { SourceForm, SourceTextField } from '../data/source-form.ts';
 import type { TextKey } from '../text/text-key.ts';
 import { FieldProblems } from './field-problems.tsx';
 import { EditorFormPage, type EditorFormProps } from './editor-form-page.tsx';
+import { FormActions } from '../components/form-rows.tsx';
 
 export interface SourceFormViewProps extends EditorFormProps {
   readonly values: SourceForm;
@@ -119,12 +120,11 @@ export function SourceFormView(props: SourceFormViewProps) {
             {group.fields.map(control)}
           </fieldset>
         ))}
-        <p class="form-actions">
-          <button type="submit" class="button-primary">
-            {tr.text('source.save')}
-          </button>{' '}
-          <a href={`/studies/${props.studyId}/edit`}>{tr.text('editor.cancel')}</a>
-        </p>
+        <FormActions
+          tr={tr}
+          save={tr.text('source.save')}
+          cancelHref={`/studies/${props.studyId}/edit`}
+        />
       </form>
     </EditorFormPage>
   );

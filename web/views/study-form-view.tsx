@@ -5,6 +5,7 @@ import { TitledPage } from '../layout/titled-page.tsx';
 import { ColumnPickForm } from './column-pick-view.tsx';
 import { describeIssue } from './editor-view.tsx';
 import { FieldProblems } from './field-problems.tsx';
+import { FileField } from '../components/form-rows.tsx';
 
 /** Which form: a new study (name and village file), a new name, or the name of a copy. */
 export type StudyFormKind = 'new' | 'rename' | 'duplicate';
@@ -71,28 +72,20 @@ export function StudyFormView(props: StudyFormViewProps) {
           <FieldProblems tr={tr} id="study-name-problems" issues={nameIssues} />
         </div>
         {kind === 'new' && (
-          <div class={fileIssues.length > 0 ? 'field field-bad' : 'field'}>
-            <label for="communities-file">{tr.text('newStudy.file')}</label>
-            <input
-              id="communities-file"
-              name="file"
-              type="file"
-              accept=".csv,.txt,.tsv,.xlsx,.kml,.kmz,.zip,.geojson,.json"
-              aria-describedby={
-                fileIssues.length > 0 ? 'communities-help communities-problems' : 'communities-help'
-              }
-              aria-invalid={fileIssues.length > 0 ? 'true' : undefined}
-            />
-            <p id="communities-help" class="help">
-              {tr.text('newStudy.fileHelp')}
-            </p>
+          <FileField
+            tr={tr}
+            upload="communities"
+            text={{ label: 'newStudy.file', help: 'newStudy.fileHelp' }}
+            problems={fileIssues.length > 0}
+            bad={fileIssues.length > 0}
+          >
             <FieldProblems
               tr={tr}
               id="communities-problems"
               issues={fileIssues}
               describe={(i) => describeIssue(tr, i)}
             />
-          </div>
+          </FileField>
         )}
         <button type="submit">{tr.text(BUTTONS[kind])}</button>
       </form>
