@@ -1,6 +1,11 @@
 import type { TextKey } from '../text/text-key.ts';
 import type { TextValues } from '../text/translator.ts';
-import { PageShell, type PageShellProps } from './page-shell.tsx';
+import {
+  PageShell,
+  type PageShellProps,
+  STUDY_SECTION_TITLES,
+  type StudySection,
+} from './page-shell.tsx';
 
 export interface TitledPageProps extends Omit<PageShellProps, 'title' | 'titleLang'> {
   /** The text that is both the page's title and its heading. */
@@ -18,4 +23,24 @@ export function TitledPage(props: TitledPageProps) {
       {children}
     </PageShell>
   );
+}
+
+export type StudyPageProps = Omit<
+  TitledPageProps,
+  'study' | 'titleKey' | 'titleValues' | 'section'
+> & {
+  readonly study: { readonly id: string; readonly name: string };
+} & (
+    | { readonly section: StudySection; readonly titleKey?: undefined }
+    | { readonly section?: StudySection; readonly titleKey: TextKey }
+  );
+
+/**
+ * A page of one study, titled "… of {name}" with the study's name: its section's own title
+ * unless it has one of its own (a run, a trip, the ground-motion settings).
+ */
+export function StudyPage(props: StudyPageProps) {
+  const titleKey =
+    props.titleKey === undefined ? STUDY_SECTION_TITLES[props.section] : props.titleKey;
+  return <TitledPage {...props} titleKey={titleKey} titleValues={{ name: props.study.name }} />;
 }

@@ -6,7 +6,7 @@ import type { Study } from '../../api/engine/model.ts';
 import { chosenFit, type CatalogAnalysis } from '../data/catalog-analysis.ts';
 import type { AttachedCatalog } from '../data/study-catalog.ts';
 import type { PageContext } from '../layout/page-shell.tsx';
-import { TitledPage } from '../layout/titled-page.tsx';
+import { StudyPage } from '../layout/titled-page.tsx';
 import {
   FrequencyMagnitudeLegend,
   FrequencyMagnitudePlot,
@@ -81,10 +81,8 @@ export function CatalogView(props: CatalogViewProps) {
     </div>
   );
   return (
-    <TitledPage
+    <StudyPage
       page={props.page}
-      titleKey="catalog.title"
-      titleValues={{ name: study.name }}
       study={{ id: studyId, name: study.name }}
       section="catalog"
       showsNumbers={fit !== undefined}
@@ -313,6 +311,6 @@ export function CatalogView(props: CatalogViewProps) {
           )}
         </section>
       )}
-    </TitledPage>
+    </StudyPage>
   );
 }

@@ -6,7 +6,7 @@ import type { StudyPart } from '../../api/study/load-study.ts';
 import type { ColumnPick } from '../data/community-import.ts';
 import { issueFeature, issueLine } from '../data/study-edits.ts';
 import type { PageContext } from '../layout/page-shell.tsx';
-import { TitledPage } from '../layout/titled-page.tsx';
+import { StudyPage } from '../layout/titled-page.tsx';
 import { mapFrame, studyPoints } from '../maps/map-frame.ts';
 import { StudyMap } from '../maps/study-map.tsx';
 import type { Translator } from '../text/translator.ts';
@@ -117,13 +117,7 @@ export function EditorView(props: EditorViewProps) {
   const geoProblem = problem?.upload === 'sources' ? problem : undefined;
   const featureIds = featureIdsOf(geoProblem?.text);
   return (
-    <TitledPage
-      page={props.page}
-      titleKey="editor.title"
-      titleValues={{ name: study.name }}
-      study={{ id: studyId, name: study.name }}
-      section="edit"
-    >
+    <StudyPage page={props.page} study={{ id: studyId, name: study.name }} section="edit">
       <p>{tr.text('editor.intro')}</p>
       {props.saved && <Notice>{tr.text('editor.saved')}</Notice>}
       {(problem || (props.notice?.length ?? 0) > 0) && (
@@ -290,7 +284,7 @@ export function EditorView(props: EditorViewProps) {
           </a>
         </p>
       </section>
-    </TitledPage>
+    </StudyPage>
   );
 }
 

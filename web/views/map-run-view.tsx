@@ -1,7 +1,7 @@
 import { measureUnit, parseMeasure } from '../../api/engine/motion/measure.ts';
 import type { MapRunRecord } from '../../api/store/index.ts';
 import type { PageContext } from '../layout/page-shell.tsx';
-import { TitledPage } from '../layout/titled-page.tsx';
+import { StudyPage } from '../layout/titled-page.tsx';
 import { mapTitle } from '../maps/hazard-layer.tsx';
 
 export interface MapRunViewProps {
@@ -27,11 +27,10 @@ export function MapRunView(props: MapRunViewProps) {
     quantity: run.request.quantity,
   };
   return (
-    <TitledPage
+    <StudyPage
       page={props.page}
-      titleKey="mapRun.title"
-      titleValues={{ name: props.studyName }}
       study={{ id: studyId, name: props.studyName }}
+      titleKey="mapRun.title"
     >
       <p>{mapTitle(tr, what)}</p>
       <div
@@ -70,6 +69,6 @@ export function MapRunView(props: MapRunViewProps) {
       <p>
         <a href={`/studies/${studyId}`}>{tr.text('mapRun.back')}</a>
       </p>
-    </TitledPage>
+    </StudyPage>
   );
 }

@@ -4,7 +4,7 @@ import { DEFAULT_SETTINGS } from '../../api/study/settings-schema.ts';
 import { WEIGHT_SUM_TOLERANCE } from '../../api/study/branches-schema.ts';
 import { SETTING_FIELDS, type MotionForm, type SettingField } from '../data/motion-form.ts';
 import type { PageContext } from '../layout/page-shell.tsx';
-import { TitledPage } from '../layout/titled-page.tsx';
+import { StudyPage } from '../layout/titled-page.tsx';
 import type { TextKey } from '../text/text-key.ts';
 import { FieldProblems, FormProblems } from './field-problems.tsx';
 import { DataTable } from '../components/data-table.tsx';
@@ -55,11 +55,10 @@ export function MotionFormView(props: MotionFormViewProps) {
   const described = (name: string, id: string, help?: string) =>
     [help, bad(name) ? `${id}-problem` : undefined].filter(Boolean).join(' ') || undefined;
   return (
-    <TitledPage
+    <StudyPage
       page={props.page}
-      titleKey="motion.title"
-      titleValues={{ name: props.studyName }}
       study={{ id: props.studyId, name: props.studyName }}
+      titleKey="motion.title"
       section="edit"
     >
       <p>{tr.text('motion.intro', { tolerance: String(WEIGHT_SUM_TOLERANCE) })}</p>
@@ -207,6 +206,6 @@ export function MotionFormView(props: MotionFormViewProps) {
           cancelHref={`/studies/${props.studyId}/edit`}
         />
       </form>
-    </TitledPage>
+    </StudyPage>
   );
 }

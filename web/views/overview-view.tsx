@@ -15,7 +15,7 @@ import type { RunState } from '../data/study-data.ts';
 import { BandSwatch } from '../layout/band-swatch.tsx';
 import { bandFirmnessText } from './band-firmness.tsx';
 import type { PageContext } from '../layout/page-shell.tsx';
-import { TitledPage } from '../layout/titled-page.tsx';
+import { StudyPage } from '../layout/titled-page.tsx';
 import { HazardLayer, HazardMapLegend, layerClasses } from '../maps/hazard-layer.tsx';
 import type { MapFrame } from '../maps/map-frame.ts';
 import { StudyMap, StudyMapLegend } from '../maps/study-map.tsx';
@@ -85,10 +85,8 @@ export function OverviewView(props: OverviewProps) {
     ? { run: shown.run, layer: shown.layer, classes: layerClasses(shown.layer.points) }
     : undefined;
   return (
-    <TitledPage
+    <StudyPage
       page={props.page}
-      titleKey="overview.title"
-      titleValues={{ name: study.name }}
       study={{ id: studyId, name: study.name }}
       section="overview"
       showsNumbers={rows !== undefined || drawn !== undefined || props.tsunami !== undefined}
@@ -309,6 +307,6 @@ export function OverviewView(props: OverviewProps) {
           ranked={props.tsunami.ranked}
         />
       )}
-    </TitledPage>
+    </StudyPage>
   );
 }

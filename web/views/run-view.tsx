@@ -1,6 +1,6 @@
 import type { RunRecord } from '../../api/store/index.ts';
 import type { PageContext } from '../layout/page-shell.tsx';
-import { TitledPage } from '../layout/titled-page.tsx';
+import { StudyPage } from '../layout/titled-page.tsx';
 
 /**
  * A run in progress. Without script the reader refreshes the page; with script
@@ -16,11 +16,10 @@ export function RunView(props: {
   const { run, studyId } = props;
   const unfinished = run.status === 'queued' || run.status === 'running';
   return (
-    <TitledPage
+    <StudyPage
       page={props.page}
-      titleKey="run.title"
-      titleValues={{ name: props.studyName }}
       study={{ id: studyId, name: props.studyName }}
+      titleKey="run.title"
     >
       <div
         class="run-status"
@@ -57,6 +56,6 @@ export function RunView(props: {
       <p>
         <a href={`/studies/${studyId}`}>{tr.text('run.back')}</a>
       </p>
-    </TitledPage>
+    </StudyPage>
   );
 }

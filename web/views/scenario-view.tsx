@@ -3,7 +3,7 @@ import { intensityWords } from '../format/intensity-words.ts';
 import type { Study } from '../../api/engine/model.ts';
 import type { ScenarioResult } from '../../api/engine/scenario/index.ts';
 import type { PageContext } from '../layout/page-shell.tsx';
-import { TitledPage } from '../layout/titled-page.tsx';
+import { StudyPage } from '../layout/titled-page.tsx';
 import type { MapFrame } from '../maps/map-frame.ts';
 import { ScenarioLayer, ScenarioLegend } from '../maps/scenario-layer.tsx';
 import { StudyMap } from '../maps/study-map.tsx';
@@ -32,10 +32,8 @@ export function ScenarioView(props: ScenarioViewProps) {
   const issuesAt = (path: string) => props.issues.filter((i) => i.path === path);
   const others = props.issues.filter((i) => i.path !== 'sourceId' && i.path !== 'magnitude');
   return (
-    <TitledPage
+    <StudyPage
       page={props.page}
-      titleKey="scenario.title"
-      titleValues={{ name: study.name }}
       study={{ id: studyId, name: study.name }}
       section="scenario"
       showsNumbers={result !== undefined}
@@ -175,6 +173,6 @@ export function ScenarioView(props: ScenarioViewProps) {
       {result && props.tsunami && (
         <TsunamiScenario tr={tr} studyId={studyId} tsunami={props.tsunami} />
       )}
-    </TitledPage>
+    </StudyPage>
   );
 }

@@ -2,7 +2,7 @@ import type { ScreeningBandId } from '../../api/engine/intensity/screening-band.
 import type { TripPlan } from '../../api/engine/trip/visit-order.ts';
 import { BandSwatch } from '../layout/band-swatch.tsx';
 import type { PageContext } from '../layout/page-shell.tsx';
-import { TitledPage } from '../layout/titled-page.tsx';
+import { StudyPage } from '../layout/titled-page.tsx';
 import { DataTable, LabelledCell } from '../components/data-table.tsx';
 
 export interface TripViewProps {
@@ -26,11 +26,10 @@ export function TripView(props: TripViewProps) {
   let sumKm = 0;
   const km = (value: number) => tr.t('priority.km', { km: tr.number(value, 1) });
   return (
-    <TitledPage
+    <StudyPage
       page={props.page}
-      titleKey="trip.title"
-      titleValues={{ name: props.studyName }}
       study={{ id: studyId, name: props.studyName }}
+      titleKey="trip.title"
       section="overview"
       bodyClass="trip-page"
       showsNumbers={true}
@@ -102,6 +101,6 @@ export function TripView(props: TripViewProps) {
       <p class="no-print">
         <a href={`/studies/${studyId}#priority-heading`}>{tr.text('trip.back')}</a>
       </p>
-    </TitledPage>
+    </StudyPage>
   );
 }
