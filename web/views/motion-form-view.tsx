@@ -125,16 +125,19 @@ export function MotionFormView(props: MotionFormViewProps) {
                           issues={problems(`${at}.weight`)}
                         />
                       </td>
-                      <td class="field-check">
-                        <input
-                          id={`${id}-remove`}
-                          name={`branch.${at}.remove`}
-                          type="checkbox"
-                          value="true"
-                        />
-                        <label for={`${id}-remove`}>
-                          {tr.text('motion.removeModel', { model: row.model })}
-                        </label>
+                      <td>
+                        {/* A table cell keeps its own display, so the row's borders line up. */}
+                        <div class="field-check">
+                          <input
+                            id={`${id}-remove`}
+                            name={`branch.${at}.remove`}
+                            type="checkbox"
+                            value="true"
+                          />
+                          <label for={`${id}-remove`}>
+                            {tr.text('motion.removeModel', { model: row.model })}
+                          </label>
+                        </div>
                       </td>
                     </tr>
                   );
