@@ -1,5 +1,5 @@
 import type { Hono } from 'hono';
-import { afterAll, beforeAll } from 'vitest';
+import { afterAll, beforeAll, expect } from 'vitest';
 import { createApp } from '../../../api/service/app.ts';
 import type { ServiceContext } from '../../../api/operations/service-context.ts';
 import { createPages } from '../../../web/pages.tsx';
@@ -100,4 +100,25 @@ export function pagesWithSmallStudy(name: string): SmallStudyPages {
   });
   afterAll(async () => shared.page?.close());
   return shared as SmallStudyPages;
+}
+
+/**
+ * Saves `study` in the pages' store and screens it with the overview's button (a form post),
+ * waiting until the run is done; gives the study's and the run's ids.
+ */
+export async function saveAndScreen(
+  page: PageApp,
+  study: { readonly name: string },
+): Promise<{ readonly id: string; readonly runId: string }> {
+  const id = page.ctx.store.studies.create({
+    name: study.name,
+    document: JSON.stringify(study),
+  }).id;
+  const started = await page.app.request(`/studies/${id}/screen`, {
+    method: 'POST',
+    body: new URLSearchParams(),
+  });
+  const runId = (started.headers.get('location') as string).split('/').at(-1) as string;
+  expect(await runFinished(page.ctx, runId)).toBe('done');
+  return { id, runId };
 }
