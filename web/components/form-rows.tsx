@@ -61,18 +61,18 @@ export function FileField(props: FileFieldProps) {
   );
 }
 
-/** A form's closing line: the primary button, and a way back without saving. */
+/** An editor form's closing line: the button that saves, and a way back to the study's editor. */
 export function FormActions(props: {
   readonly tr: Translator;
-  readonly save: Child;
-  readonly cancelHref: string;
+  readonly studyId: string;
+  readonly save: TextKey;
 }) {
   return (
     <p class="form-actions">
       <button type="submit" class="button-primary">
-        {props.save}
+        {props.tr.text(props.save)}
       </button>{' '}
-      <a href={props.cancelHref}>{props.tr.text('editor.cancel')}</a>
+      <a href={`/studies/${props.studyId}/edit`}>{props.tr.text('editor.cancel')}</a>
     </p>
   );
 }

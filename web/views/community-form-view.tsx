@@ -94,11 +94,7 @@ export function CommunityFormView(props: CommunityFormViewProps) {
           <label for="field-coastal">{tr.text('editor.field.coastal')}</label>
           <FieldProblems tr={tr} id="field-coastal-problem" issues={problems('coastal')} />
         </div>
-        <FormActions
-          tr={tr}
-          save={tr.text('editor.save')}
-          cancelHref={`/studies/${props.studyId}/edit`}
-        />
+        <FormActions tr={tr} studyId={props.studyId} save="editor.save" />
       </form>
     </EditorFormPage>
   );

@@ -203,11 +203,7 @@ export function MotionFormView(props: MotionFormViewProps) {
             );
           })}
         </fieldset>
-        <FormActions
-          tr={tr}
-          save={tr.text('motion.save')}
-          cancelHref={`/studies/${props.studyId}/edit`}
-        />
+        <FormActions tr={tr} studyId={props.studyId} save="motion.save" />
       </form>
     </StudyPage>
   );

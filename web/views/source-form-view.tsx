@@ -120,11 +120,7 @@ export function SourceFormView(props: SourceFormViewProps) {
             {group.fields.map(control)}
           </fieldset>
         ))}
-        <FormActions
-          tr={tr}
-          save={tr.text('source.save')}
-          cancelHref={`/studies/${props.studyId}/edit`}
-        />
+        <FormActions tr={tr} studyId={props.studyId} save="source.save" />
       </form>
     </EditorFormPage>
   );

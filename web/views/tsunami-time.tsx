@@ -175,25 +175,31 @@ export function TsunamiTable(props: {
   );
 }
 
-/** The overview's section: coastal communities ranked by time to act (data/tsunami-data.ts), with the caution. */
-export function TsunamiRanking(props: {
+/**
+ * A section of coastal communities' tsunami times with the caution: `id` names its class and
+ * table (`tsunami-<id>`), `text` its texts (`tsunami.<text>.title`, `.intro`).
+ */
+function TsunamiSection(props: {
   readonly tr: Translator;
   readonly studyId: string;
   readonly tsunami: TsunamiPageResult;
-  readonly ranked: readonly TsunamiCommunity[];
+  readonly communities: readonly TsunamiCommunity[];
+  readonly id: 'ranking' | 'scenario';
+  readonly text: 'rank' | 'scenario';
 }) {
-  const { tr, tsunami } = props;
+  const { tr, tsunami, text } = props;
+  const headingId = `tsunami-${text}-heading`;
   return (
-    <section class="tsunami-ranking" aria-labelledby="tsunami-rank-heading">
-      <h2 id="tsunami-rank-heading">{tr.text('tsunami.rank.title')}</h2>
-      <p>{tr.text('tsunami.rank.intro')}</p>
+    <section class={`tsunami-${props.id}`} aria-labelledby={headingId}>
+      <h2 id={headingId}>{tr.text(`tsunami.${text}.title`)}</h2>
+      <p>{tr.text(`tsunami.${text}.intro`)}</p>
       {tsunami.ok ? (
         <TsunamiTable
           tr={tr}
           studyId={props.studyId}
-          communities={props.ranked}
-          caption={tr.t('tsunami.rank.title')}
-          id="tsunami-ranking"
+          communities={props.communities}
+          caption={tr.t(`tsunami.${text}.title`)}
+          id={`tsunami-${props.id}`}
         />
       ) : (
         <p class="tsunami-problem">
@@ -205,31 +211,23 @@ export function TsunamiRanking(props: {
   );
 }
 
+/** The overview's section: coastal communities ranked by time to act (data/tsunami-data.ts). */
+export function TsunamiRanking(props: {
+  readonly tr: Translator;
+  readonly studyId: string;
+  readonly tsunami: TsunamiPageResult;
+  readonly ranked: readonly TsunamiCommunity[];
+}) {
+  return <TsunamiSection {...props} communities={props.ranked} id="ranking" text="rank" />;
+}
+
 /** The scenario page's section: each coastal community's first arrival from the chosen rupture. */
 export function TsunamiScenario(props: {
   readonly tr: Translator;
   readonly studyId: string;
   readonly tsunami: TsunamiPageResult;
 }) {
-  const { tr, tsunami } = props;
-  return (
-    <section class="tsunami-scenario" aria-labelledby="tsunami-scenario-heading">
-      <h2 id="tsunami-scenario-heading">{tr.text('tsunami.scenario.title')}</h2>
-      <p>{tr.text('tsunami.scenario.intro')}</p>
-      {tsunami.ok ? (
-        <TsunamiTable
-          tr={tr}
-          studyId={props.studyId}
-          communities={tsunami.result.communities}
-          caption={tr.t('tsunami.scenario.title')}
-          id="tsunami-scenario"
-        />
-      ) : (
-        <p class="tsunami-problem">
-          {tr.text('tsunami.time.problem', { problem: tr.english(tsunami.problem) })}
-        </p>
-      )}
-      <p class="tsunami-caution">{tr.text('tsunami.time.caution')}</p>
-    </section>
-  );
+  const { tsunami } = props;
+  const communities = tsunami.ok ? tsunami.result.communities : [];
+  return <TsunamiSection {...props} communities={communities} id="scenario" text="scenario" />;
 }
