@@ -22,6 +22,7 @@ import { VisitRecords } from './visit-records.tsx';
 import { SlideImageLinks } from './slide-image-links.tsx';
 import type { VisitRecord } from '../../api/store/visit-repository.ts';
 import { DataTable, LabelledCell } from '../components/data-table.tsx';
+import { LimitsList } from './limits-view.tsx';
 
 export interface CommunityViewProps {
   readonly page: PageContext;
@@ -361,14 +362,7 @@ export function CommunityView(props: CommunityViewProps) {
       </section>
       <section aria-labelledby="limits-heading">
         <h2 id="limits-heading">{tr.text('limits.title')}</h2>
-        <ul class="limits" lang={tr.fallbackLang('limits.list')}>
-          {tr
-            .t('limits.list')
-            .split('\n')
-            .map((item) => (
-              <li>{item}</li>
-            ))}
-        </ul>
+        <LimitsList tr={tr} />
         <p>
           <a href="/limits">{tr.text('caution.limitsLink')}</a>
         </p>
