@@ -26,7 +26,8 @@ export const SOURCE_FIELD_GROUPS = {
 export type SourceTextField =
   (typeof SOURCE_FIELD_GROUPS)[keyof typeof SOURCE_FIELD_GROUPS][number];
 
-export const SOURCE_TEXT_FIELDS: readonly SourceTextField[] = Object.values(SOURCE_FIELD_GROUPS).flat();
+export const SOURCE_TEXT_FIELDS: readonly SourceTextField[] =
+  Object.values(SOURCE_FIELD_GROUPS).flat();
 
 /** What the source form posts, as text. */
 export type SourceForm = Readonly<Record<SourceTextField, string>> & {
