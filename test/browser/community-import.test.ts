@@ -3,7 +3,7 @@ import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { xlsxBytes } from '../study/community-files/fixtures.ts';
 import { ARTIFACTS, offlineContext, seriousAxeViolations } from './helpers/chromium.ts';
-import { browserService } from './helpers/browser-service.ts';
+import { browserService, sendFile } from './helpers/browser-service.ts';
 
 /**
  * A village workbook into the demo study from the editor in Chromium, at desktop and phone
@@ -49,12 +49,11 @@ for (const width of [1100, 390]) {
     test("unrecognised columns are picked from the file's own, then the villages are saved", async () => {
       const before = await document();
       await page.goto(`${rig.service.url}/studies/${rig.studyId}/edit`);
-      await page.setInputFiles('#communities-file', {
+      await sendFile(page, 'communities', {
         name: 'villages.xlsx',
         mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
-        buffer: Buffer.from(WORKBOOK),
+        text: WORKBOOK,
       });
-      await page.locator('form:has(#communities-file) button[type="submit"]').click();
       await page.waitForSelector('#pick-lat');
       expect(await document()).toBe(before);
       expect(await page.locator('#pick-lat option').allTextContents()).toEqual([

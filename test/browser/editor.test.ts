@@ -8,7 +8,7 @@ import {
   seriousAxeViolations,
   walkWithTab,
 } from './helpers/chromium.ts';
-import { browserService } from './helpers/browser-service.ts';
+import { browserService, sendFile } from './helpers/browser-service.ts';
 
 /**
  * The study editor in Chromium, with and without script: uploads that do not validate show
@@ -76,12 +76,11 @@ for (const javaScriptEnabled of [true, false]) {
       test('a broken GeoJSON upload shows the message next to the upload and saves nothing', async () => {
         const before = await document();
         await page.goto(`${rig.service.url}/studies/${rig.studyId}/edit`);
-        await page.setInputFiles('#sources-file', {
+        await sendFile(page, 'sources', {
           name: 'sources.geojson',
           mimeType: 'application/geo+json',
-          buffer: Buffer.from(BROKEN_GEOJSON),
+          text: BROKEN_GEOJSON,
         });
-        await page.locator('form:has(#sources-file) button[type="submit"]').click();
         await page.waitForSelector('#sources-problems');
         // The message sits in the same field block as the upload, and the upload points to it.
         const message = await page
@@ -108,12 +107,11 @@ for (const javaScriptEnabled of [true, false]) {
         await page.goto(`${rig.service.url}/studies/${rig.studyId}/edit`);
         const csv =
           'id,name,lon,lat,vs30,population,coastal,elevationM\nnew-cove,New Cove,-150.9,-47.2,420,80,true,5\nhigh-farm,High Farm,-150.1,-47.25,420,eighty,false,300\n';
-        await page.setInputFiles('#communities-file', {
+        await sendFile(page, 'communities', {
           name: 'villages.csv',
           mimeType: 'text/csv',
-          buffer: Buffer.from(csv),
+          text: csv,
         });
-        await page.locator('form:has(#communities-file) button[type="submit"]').click();
         await page.waitForSelector('#communities-problems');
         expect(
           await page

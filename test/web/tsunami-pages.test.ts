@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { TsunamiResult } from '../../api/engine/tsunami/index.ts';
 import { DEMO_STUDY_URL } from '../../api/operations/demo-seed.ts';
-import { runFinished, startPageApp, type PageApp } from './helpers/page-app.ts';
+import { saveAndScreen, startPageApp, type PageApp } from './helpers/page-app.ts';
 
 /**
  * The tsunami time to act on the pages, through app.request(): a cut-down demo (its interface
@@ -13,7 +13,7 @@ import { runFinished, startPageApp, type PageApp } from './helpers/page-app.ts';
 let page: PageApp;
 let id: string;
 
-function cutDemo(): Record<string, unknown> {
+function cutDemo(): { readonly name: string } & Record<string, unknown> {
   const demo = JSON.parse(readFileSync(DEMO_STUDY_URL, 'utf8')) as Record<string, any>;
   return {
     ...demo,
@@ -39,16 +39,7 @@ function cutDemo(): Record<string, unknown> {
 
 beforeAll(async () => {
   page = startPageApp();
-  id = page.ctx.store.studies.create({
-    name: 'Demo coast, tsunami pages',
-    document: JSON.stringify(cutDemo()),
-  }).id;
-  const started = await page.app.request(`/studies/${id}/screen`, {
-    method: 'POST',
-    body: new URLSearchParams(),
-  });
-  const runId = (started.headers.get('location') as string).split('/').at(-1) as string;
-  expect(await runFinished(page.ctx, runId)).toBe('done');
+  ({ id } = await saveAndScreen(page, cutDemo()));
 }, 120_000);
 afterAll(async () => page?.close());
 

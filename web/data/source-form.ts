@@ -6,28 +6,28 @@ export type SourceKind = 'fault' | 'zone' | 'point';
 /** The order of the two numbers on each typed coordinate line, or `auto` to tell from the values. */
 export type CoordinateOrder = 'auto' | 'lon-lat' | 'lat-lon';
 
-/** The text fields of the source form; blanks are left out of the feature. */
-export const SOURCE_TEXT_FIELDS = [
-  'id',
-  'name',
-  'setting',
-  'mechanism',
-  'dip',
-  'dipDirection',
-  'upperDepthKm',
-  'lowerDepthKm',
-  'depthKm',
-  'recurrence.type',
-  'recurrence.bValue',
-  'recurrence.mMin',
-  'recurrence.mMax',
-  'recurrence.rate',
-  'recurrence.slipRateMmYr',
-  'recurrence.shape',
-  'recurrence.magnitude',
-] as const;
+/** The text fields of the source form, in the form's groups; blanks are left out of the feature. */
+export const SOURCE_FIELD_GROUPS = {
+  about: ['id', 'name', 'setting', 'mechanism'],
+  fault: ['dip', 'dipDirection', 'upperDepthKm', 'lowerDepthKm'],
+  area: ['depthKm'],
+  recurrence: [
+    'recurrence.type',
+    'recurrence.bValue',
+    'recurrence.mMin',
+    'recurrence.mMax',
+    'recurrence.rate',
+    'recurrence.slipRateMmYr',
+    'recurrence.shape',
+    'recurrence.magnitude',
+  ],
+} as const;
 
-export type SourceTextField = (typeof SOURCE_TEXT_FIELDS)[number];
+export type SourceTextField =
+  (typeof SOURCE_FIELD_GROUPS)[keyof typeof SOURCE_FIELD_GROUPS][number];
+
+export const SOURCE_TEXT_FIELDS: readonly SourceTextField[] =
+  Object.values(SOURCE_FIELD_GROUPS).flat();
 
 /** What the source form posts, as text. */
 export type SourceForm = Readonly<Record<SourceTextField, string>> & {

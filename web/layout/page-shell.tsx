@@ -40,6 +40,14 @@ const STUDY_SECTIONS: readonly {
   { id: 'edit', key: 'nav.edit', suffix: '/edit' },
 ];
 
+/** The title of each section's own page ("… of {name}", the study's name). */
+export const STUDY_SECTION_TITLES = {
+  overview: 'overview.title',
+  scenario: 'scenario.title',
+  catalog: 'catalog.title',
+  edit: 'editor.title',
+} as const satisfies Record<StudySection, string>;
+
 /**
  * The frame of every page: skip link, header with the main navigation and the language switch,
  * the study's own navigation, the main content, and a footer with the caution and the limits.

@@ -1,5 +1,7 @@
 import { ACCESS_PATH, LEAVE_PATH } from '../../api/service/page-access.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
+import { Notice } from '../components/notice.tsx';
 
 /** What the access page has to say: why the user is here, or how their last try went. */
 export type AccessNotice = 'needed' | 'missing' | 'wrong' | 'ended';
@@ -20,33 +22,20 @@ export function AccessView(props: AccessViewProps) {
   const { state, notice } = props;
   const refused = notice === 'missing' || notice === 'wrong';
   return (
-    <PageShell
-      page={props.page}
-      title={tr.t('access.title')}
-      titleLang={tr.fallbackLang('access.title')}
-    >
-      <h1>{tr.text('access.title')}</h1>
+    <TitledPage page={props.page} titleKey="access.title">
       {state === 'open' ? (
         <p>{tr.text('access.open')}</p>
       ) : (
         <>
           <p class="lead">{tr.text('access.intro')}</p>
-          {notice === 'needed' && state === 'closed' && (
-            <p class="notice" role="status">
-              {tr.text('access.needed')}
-            </p>
-          )}
-          {notice === 'ended' && (
-            <p class="notice" role="status">
-              {tr.text('access.ended')}
-            </p>
-          )}
+          {notice === 'needed' && state === 'closed' && <Notice>{tr.text('access.needed')}</Notice>}
+          {notice === 'ended' && <Notice>{tr.text('access.ended')}</Notice>}
           {state === 'granted' ? (
             <>
-              <p class="notice" role="status">
+              <Notice>
                 {tr.text('access.granted')}{' '}
                 {tr.text('access.kept', { days: tr.number(props.keptDays) })}
-              </p>
+              </Notice>
               <form method="post" action={LEAVE_PATH} class="inline-form">
                 <button type="submit" class="button-quiet">
                   {tr.text('access.end')}
@@ -91,6 +80,6 @@ export function AccessView(props: AccessViewProps) {
           <a href={props.back}>{tr.text('access.back')}</a>
         </p>
       )}
-    </PageShell>
+    </TitledPage>
   );
 }

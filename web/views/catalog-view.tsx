@@ -5,12 +5,16 @@ import type { InputIssue } from '../../api/engine/errors.ts';
 import type { Study } from '../../api/engine/model.ts';
 import { chosenFit, type CatalogAnalysis } from '../data/catalog-analysis.ts';
 import type { AttachedCatalog } from '../data/study-catalog.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { StudyPage } from '../layout/titled-page.tsx';
 import {
   FrequencyMagnitudeLegend,
   FrequencyMagnitudePlot,
 } from '../plots/frequency-magnitude-plot.tsx';
 import { FieldProblems } from './field-problems.tsx';
+import { Notice } from '../components/notice.tsx';
+import { DataTable } from '../components/data-table.tsx';
+import { FileField } from '../components/form-rows.tsx';
 
 /** The zone form's values, as posted. */
 export interface ZoneForm {
@@ -77,21 +81,14 @@ export function CatalogView(props: CatalogViewProps) {
     </div>
   );
   return (
-    <PageShell
+    <StudyPage
       page={props.page}
-      title={tr.t('catalog.title', { name: study.name })}
-      titleLang={tr.fallbackLang('catalog.title')}
       study={{ id: studyId, name: study.name }}
       section="catalog"
       showsNumbers={fit !== undefined}
     >
-      <h1>{tr.text('catalog.title', { name: study.name })}</h1>
       <p>{tr.text('catalog.intro')}</p>
-      {props.zoneAdded && (
-        <p class="notice" role="status">
-          {tr.text('catalog.zoneAdded')}
-        </p>
-      )}
+      {props.zoneAdded && <Notice>{tr.text('catalog.zoneAdded')}</Notice>}
       {catalog ? (
         <p>{tr.text('catalog.attached', { file: catalog.fileName, format: catalog.format })}</p>
       ) : (
@@ -101,22 +98,14 @@ export function CatalogView(props: CatalogViewProps) {
       <section aria-labelledby="catalog-upload-heading" class="upload">
         <h2 id="catalog-upload-heading">{tr.text('catalog.upload')}</h2>
         <form method="post" action={`/studies/${studyId}/catalog`} enctype="multipart/form-data">
-          <div class="field">
-            <label for="catalog-file">{tr.text('catalog.file')}</label>
-            <input
-              id="catalog-file"
-              name="file"
-              type="file"
-              accept=".csv,.txt,.xml,.quakeml"
-              aria-describedby={
-                props.uploadIssues.length ? 'catalog-help catalog-problems' : 'catalog-help'
-              }
-            />
-            <p id="catalog-help" class="help">
-              {tr.text('catalog.uploadHelp')}
-            </p>
+          <FileField
+            tr={tr}
+            upload="catalog"
+            text={{ label: 'catalog.file', help: 'catalog.uploadHelp' }}
+            problems={props.uploadIssues.length > 0}
+          >
             <FieldProblems tr={tr} id="catalog-problems" issues={props.uploadIssues} />
-          </div>
+          </FileField>
           <button type="submit">{tr.text('catalog.load')}</button>
         </form>
         <form
@@ -185,23 +174,19 @@ export function CatalogView(props: CatalogViewProps) {
             </p>
           )}
           {analysis.load.rejected.length > 0 && (
-            <table class="data-table rejected">
-              <caption>{tr.text('catalog.rejectedCaption')}</caption>
-              <thead>
-                <tr>
-                  <th scope="col">{tr.text('catalog.col.where')}</th>
-                  <th scope="col">{tr.text('catalog.col.why')}</th>
+            <DataTable
+              tr={tr}
+              class="rejected"
+              caption={tr.text('catalog.rejectedCaption')}
+              columns={['catalog.col.where', 'catalog.col.why']}
+            >
+              {analysis.load.rejected.slice(0, 100).map((r) => (
+                <tr data-line={r.line}>
+                  <th scope="row">{r.where}</th>
+                  <td>{tr.english(r.reasons.join('; '))}</td>
                 </tr>
-              </thead>
-              <tbody>
-                {analysis.load.rejected.slice(0, 100).map((r) => (
-                  <tr data-line={r.line}>
-                    <th scope="row">{r.where}</th>
-                    <td>{tr.english(r.reasons.join('; '))}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
+              ))}
+            </DataTable>
           )}
           {result?.declustering && (
             <p>
@@ -326,6 +311,6 @@ export function CatalogView(props: CatalogViewProps) {
           )}
         </section>
       )}
-    </PageShell>
+    </StudyPage>
   );
 }

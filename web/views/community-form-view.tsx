@@ -3,6 +3,7 @@ import type { CommunityForm } from '../data/study-edits.ts';
 import type { TextKey } from '../text/text-key.ts';
 import { FieldProblems } from './field-problems.tsx';
 import { EditorFormPage, type EditorFormProps } from './editor-form-page.tsx';
+import { FormActions } from '../components/form-rows.tsx';
 
 export interface CommunityFormViewProps extends EditorFormProps {
   readonly values: CommunityForm;
@@ -93,12 +94,7 @@ export function CommunityFormView(props: CommunityFormViewProps) {
           <label for="field-coastal">{tr.text('editor.field.coastal')}</label>
           <FieldProblems tr={tr} id="field-coastal-problem" issues={problems('coastal')} />
         </div>
-        <p class="form-actions">
-          <button type="submit" class="button-primary">
-            {tr.text('editor.save')}
-          </button>{' '}
-          <a href={`/studies/${props.studyId}/edit`}>{tr.text('editor.cancel')}</a>
-        </p>
+        <FormActions tr={tr} studyId={props.studyId} save="editor.save" />
       </form>
     </EditorFormPage>
   );

@@ -21,6 +21,8 @@ import { CommunityDetails } from './community-details.tsx';
 import { VisitRecords } from './visit-records.tsx';
 import { SlideImageLinks } from './slide-image-links.tsx';
 import type { VisitRecord } from '../../api/store/visit-repository.ts';
+import { DataTable, LabelledCell } from '../components/data-table.tsx';
+import { LimitsList } from './limits-view.tsx';
 
 export interface CommunityViewProps {
   readonly page: PageContext;
@@ -310,31 +312,25 @@ export function CommunityView(props: CommunityViewProps) {
           )}
           <details class="curve-numbers">
             <summary>{tr.text('community.curveTable')}</summary>
-            <table class="data-table">
-              <caption>{tr.text('community.curveTableCaption')}</caption>
-              <thead>
+            <DataTable
+              tr={tr}
+              caption={tr.text('community.curveTableCaption')}
+              columns={[
+                { key: 'plot.pga', numeric: true },
+                { key: 'plot.annualRate', numeric: true },
+              ]}
+            >
+              {curve.levels.map((level, i) => (
                 <tr>
-                  <th scope="col" class="numeric">
-                    {tr.text('plot.pga')}
+                  <th scope="row" class="numeric">
+                    {String(level)}
                   </th>
-                  <th scope="col" class="numeric">
-                    {tr.text('plot.annualRate')}
-                  </th>
+                  <LabelledCell tr={tr} column="plot.annualRate" numeric>
+                    {(curve.annualRate[i] ?? 0).toPrecision(3)}
+                  </LabelledCell>
                 </tr>
-              </thead>
-              <tbody>
-                {curve.levels.map((level, i) => (
-                  <tr>
-                    <th scope="row" class="numeric">
-                      {String(level)}
-                    </th>
-                    <td class="numeric" data-label={tr.t('plot.annualRate')}>
-                      {(curve.annualRate[i] ?? 0).toPrecision(3)}
-                    </td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
+              ))}
+            </DataTable>
           </details>
         </section>
       )}
@@ -366,14 +362,7 @@ export function CommunityView(props: CommunityViewProps) {
       </section>
       <section aria-labelledby="limits-heading">
         <h2 id="limits-heading">{tr.text('limits.title')}</h2>
-        <ul class="limits" lang={tr.fallbackLang('limits.list')}>
-          {tr
-            .t('limits.list')
-            .split('\n')
-            .map((item) => (
-              <li>{item}</li>
-            ))}
-        </ul>
+        <LimitsList tr={tr} />
         <p>
           <a href="/limits">{tr.text('caution.limitsLink')}</a>
         </p>

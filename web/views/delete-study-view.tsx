@@ -1,5 +1,6 @@
 import type { StudyDependents } from '../../api/operations/study-records.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
 
 /** Asks before a study is deleted, saying what goes with it (counted from the store). */
 export function DeleteStudyView(props: {
@@ -11,13 +12,7 @@ export function DeleteStudyView(props: {
   const { dependents: d, study } = props;
   const title = { name: study.name };
   return (
-    <PageShell
-      page={props.page}
-      title={tr.t('deleteStudy.title', title)}
-      titleLang={tr.fallbackLang('deleteStudy.title')}
-      study={study}
-    >
-      <h1>{tr.text('deleteStudy.title', title)}</h1>
+    <TitledPage page={props.page} titleKey="deleteStudy.title" titleValues={title} study={study}>
       <p>{tr.text('deleteStudy.intro')}</p>
       <ul class="delete-list">
         <li>{tr.text('deleteStudy.document')}</li>
@@ -39,6 +34,6 @@ export function DeleteStudyView(props: {
       <a class="button" href={`/studies/${study.id}`}>
         {tr.text('deleteStudy.keep')}
       </a>
-    </PageShell>
+    </TitledPage>
   );
 }

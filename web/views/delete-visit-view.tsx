@@ -1,5 +1,6 @@
 import type { VisitRecord } from '../../api/store/visit-repository.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
 
 /** Asks before one visit record is deleted, showing what it holds. */
 export function DeleteVisitView(props: {
@@ -13,14 +14,13 @@ export function DeleteVisitView(props: {
   const title = { name: community.name, date: tr.date(`${visit.visitedOn}T12:00:00Z`) };
   const back = `/studies/${study.id}/communities/${community.id}#visits-heading`;
   return (
-    <PageShell
+    <TitledPage
       page={props.page}
-      title={tr.t('visits.deleteTitle', title)}
-      titleLang={tr.fallbackLang('visits.deleteTitle')}
+      titleKey="visits.deleteTitle"
+      titleValues={title}
       study={study}
       section="overview"
     >
-      <h1>{tr.text('visits.deleteTitle', title)}</h1>
       <p>{tr.text('visits.deleteIntro')}</p>
       <dl class="visit-summary">
         <dt>{tr.text('visits.field.language')}</dt>
@@ -46,6 +46,6 @@ export function DeleteVisitView(props: {
       <a class="button" href={back}>
         {tr.text('visits.keep')}
       </a>
-    </PageShell>
+    </TitledPage>
   );
 }

@@ -1,6 +1,7 @@
 import type { Child } from 'hono/jsx';
 import type { InputIssue } from '../../api/engine/errors.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
 import type { TextKey } from '../text/text-key.ts';
 import { FormProblems } from './field-problems.tsx';
 
@@ -32,17 +33,16 @@ export function EditorFormPage(props: {
   const headingKey = form.editing === undefined ? props.text.add : props.text.edit;
   const heading = { name: form.editing ?? '' };
   return (
-    <PageShell
+    <TitledPage
       page={form.page}
-      title={tr.t(headingKey, heading)}
-      titleLang={tr.fallbackLang(headingKey)}
+      titleKey={headingKey}
+      titleValues={heading}
       study={{ id: form.studyId, name: form.studyName }}
       section="edit"
     >
-      <h1>{tr.text(headingKey, heading)}</h1>
       <p>{tr.text(props.text.intro)}</p>
       <FormProblems tr={tr} fieldIssues={form.fieldIssues} otherIssues={form.otherIssues} />
       {props.children}
-    </PageShell>
+    </TitledPage>
   );
 }

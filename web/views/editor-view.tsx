@@ -5,13 +5,18 @@ import type { Study } from '../../api/engine/model.ts';
 import type { StudyPart } from '../../api/study/load-study.ts';
 import type { ColumnPick } from '../data/community-import.ts';
 import { issueFeature, issueLine } from '../data/study-edits.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { StudyPage } from '../layout/titled-page.tsx';
 import { mapFrame, studyPoints } from '../maps/map-frame.ts';
 import { StudyMap } from '../maps/study-map.tsx';
 import type { Translator } from '../text/translator.ts';
 import { ColumnPickForm } from './column-pick-view.tsx';
 import { DraftNotice } from './draft-notice.tsx';
 import { FieldProblems } from './field-problems.tsx';
+import { Notice } from '../components/notice.tsx';
+import { FileField } from '../components/form-rows.tsx';
+import { RowActions } from '../components/row-actions.tsx';
+import { DataTable, LabelledCell } from '../components/data-table.tsx';
 
 /** An upload that did not validate: which form, its problems, and the text (for the line view). */
 export interface UploadProblem {
@@ -112,20 +117,9 @@ export function EditorView(props: EditorViewProps) {
   const geoProblem = problem?.upload === 'sources' ? problem : undefined;
   const featureIds = featureIdsOf(geoProblem?.text);
   return (
-    <PageShell
-      page={props.page}
-      title={tr.t('editor.title', { name: study.name })}
-      titleLang={tr.fallbackLang('editor.title')}
-      study={{ id: studyId, name: study.name }}
-      section="edit"
-    >
-      <h1>{tr.text('editor.title', { name: study.name })}</h1>
+    <StudyPage page={props.page} study={{ id: studyId, name: study.name }} section="edit">
       <p>{tr.text('editor.intro')}</p>
-      {props.saved && (
-        <p class="notice" role="status">
-          {tr.text('editor.saved')}
-        </p>
-      )}
+      {props.saved && <Notice>{tr.text('editor.saved')}</Notice>}
       {(problem || (props.notice?.length ?? 0) > 0) && (
         <p class="problem" role="alert">
           {tr.text('editor.notSaved')}
@@ -147,116 +141,67 @@ export function EditorView(props: EditorViewProps) {
             {tr.text('editor.add')}
           </a>
         </p>
-        <div class="table-scroll">
-          <table class="data-table editor-table">
-            <caption>{tr.text('editor.communitiesCaption')}</caption>
-            <thead>
-              <tr>
-                <th scope="col">{tr.text('editor.field.name')}</th>
-                <th scope="col">{tr.text('editor.col.id')}</th>
-                <th scope="col" class="numeric">
-                  {tr.text('editor.col.lon')}
-                </th>
-                <th scope="col" class="numeric">
-                  {tr.text('editor.col.lat')}
-                </th>
-                <th scope="col">{tr.text('editor.col.site')}</th>
-                <th scope="col" class="numeric">
-                  {tr.text('editor.col.people')}
-                </th>
-                <th scope="col">{tr.text('editor.col.coastal')}</th>
-                <th scope="col">{tr.text('editor.col.actions')}</th>
-              </tr>
-            </thead>
-            <tbody>
-              {study.communities.map((c) => (
-                <tr data-community={c.id}>
-                  <th scope="row">{c.name}</th>
-                  <td data-label={tr.t('editor.col.id')}>
-                    <code>{c.id}</code>
-                  </td>
-                  <td class="numeric" data-label={tr.t('editor.col.lon')}>
-                    {String(c.lon)}
-                  </td>
-                  <td class="numeric" data-label={tr.t('editor.col.lat')}>
-                    {String(c.lat)}
-                  </td>
-                  <td data-label={tr.t('editor.col.site')}>
-                    {c.vs30Basis === 'measured'
-                      ? `${c.vs30} m/s`
-                      : c.vs30Proxy !== undefined
-                        ? tr.text('editor.siteProxy', {
-                            vs30: tr.number(c.vs30),
-                            siteClass: c.vs30Proxy.siteClass,
-                          })
-                        : `${c.siteClass} (${c.vs30} m/s)`}
-                  </td>
-                  <td class="numeric" data-label={tr.t('editor.col.people')}>
-                    {c.population === undefined ? '' : tr.number(c.population)}
-                  </td>
-                  <td data-label={c.coastal ? tr.t('editor.col.coastal') : undefined}>
-                    {c.coastal ? tr.text('editor.coastalYes') : ''}
-                  </td>
-                  <td class="row-actions">
-                    <a href={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}`}>
-                      {tr.text('editor.edit', { name: c.name })}
-                    </a>
-                    <form
-                      method="post"
-                      action={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}/remove`}
-                      class="inline-form"
-                    >
-                      <button type="submit" class="button-quiet">
-                        {tr.text('editor.remove', { name: c.name })}
-                      </button>
-                    </form>
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <DataTable
+          tr={tr}
+          class="editor-table"
+          scroll
+          caption={tr.text('editor.communitiesCaption')}
+          columns={[
+            'editor.field.name',
+            'editor.col.id',
+            { key: 'editor.col.lon', numeric: true },
+            { key: 'editor.col.lat', numeric: true },
+            'editor.col.site',
+            { key: 'editor.col.people', numeric: true },
+            'editor.col.coastal',
+            'editor.col.actions',
+          ]}
+        >
+          {study.communities.map((c) => (
+            <tr data-community={c.id}>
+              <th scope="row">{c.name}</th>
+              <LabelledCell tr={tr} column="editor.col.id">
+                <code>{c.id}</code>
+              </LabelledCell>
+              <LabelledCell tr={tr} column="editor.col.lon" numeric>
+                {String(c.lon)}
+              </LabelledCell>
+              <LabelledCell tr={tr} column="editor.col.lat" numeric>
+                {String(c.lat)}
+              </LabelledCell>
+              <LabelledCell tr={tr} column="editor.col.site">
+                {c.vs30Basis === 'measured'
+                  ? `${c.vs30} m/s`
+                  : c.vs30Proxy !== undefined
+                    ? tr.text('editor.siteProxy', {
+                        vs30: tr.number(c.vs30),
+                        siteClass: c.vs30Proxy.siteClass,
+                      })
+                    : `${c.siteClass} (${c.vs30} m/s)`}
+              </LabelledCell>
+              <LabelledCell tr={tr} column="editor.col.people" numeric>
+                {c.population === undefined ? '' : tr.number(c.population)}
+              </LabelledCell>
+              <td data-label={c.coastal ? tr.t('editor.col.coastal') : undefined}>
+                {c.coastal ? tr.text('editor.coastalYes') : ''}
+              </td>
+              <RowActions
+                href={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}`}
+                edit={tr.text('editor.edit', { name: c.name })}
+                remove={tr.text('editor.remove', { name: c.name })}
+              />
+            </tr>
+          ))}
+        </DataTable>
       </section>
 
-      <section aria-labelledby="upload-communities-heading" class="upload">
-        <h2 id="upload-communities-heading">{tr.text('editor.upload.communities')}</h2>
-        <form
-          method="post"
-          action={`/studies/${studyId}/edit/communities-csv#upload-communities-heading`}
-          enctype="multipart/form-data"
-        >
-          <div class="field">
-            <label for="communities-file">{tr.text('editor.upload.file')}</label>
-            <input
-              id="communities-file"
-              name="file"
-              type="file"
-              accept=".csv,.txt,.tsv,.xlsx,.kml,.kmz,.zip,.geojson,.json"
-              aria-describedby={
-                csvProblem ? 'communities-help communities-problems' : 'communities-help'
-              }
-              aria-invalid={csvProblem ? 'true' : undefined}
-            />
-            <p id="communities-help" class="help">
-              {tr.text('editor.upload.communitiesHelp')}
-            </p>
-            {csvProblem && (
-              <div class="upload-problems" data-upload="communities">
-                <p class="problem-title">{tr.text('editor.problems')}</p>
-                <FieldProblems
-                  tr={tr}
-                  id="communities-problems"
-                  issues={csvProblem.issues}
-                  describe={(i) => describeIssue(tr, i)}
-                />
-                {csvProblem.text !== undefined && (
-                  <CsvLines tr={tr} text={csvProblem.text} issues={csvProblem.issues} />
-                )}
-              </div>
-            )}
-          </div>
-          <button type="submit">{tr.text('editor.upload.button')}</button>
-        </form>
+      <UploadSection
+        tr={tr}
+        studyId={studyId}
+        upload="communities"
+        problem={csvProblem}
+        describe={(i) => describeIssue(tr, i)}
+      >
         {csvProblem?.pick && (
           <ColumnPickForm
             tr={tr}
@@ -264,7 +209,7 @@ export function EditorView(props: EditorViewProps) {
             pick={csvProblem.pick}
           />
         )}
-      </section>
+      </UploadSection>
 
       <section aria-labelledby="sources-heading">
         <h2 id="sources-heading">{tr.text('editor.sources')}</h2>
@@ -288,83 +233,47 @@ export function EditorView(props: EditorViewProps) {
             <figcaption>{tr.text('source.preview')}</figcaption>
           </figure>
         )}
-        <div class="table-scroll">
-          <table class="data-table">
-            <caption>{tr.text('editor.sourcesCaption')}</caption>
-            <thead>
-              <tr>
-                <th scope="col">{tr.text('editor.col.source')}</th>
-                <th scope="col">{tr.text('editor.col.id')}</th>
-                <th scope="col">{tr.text('editor.col.kind')}</th>
-                <th scope="col">{tr.text('editor.col.setting')}</th>
-                <th scope="col">{tr.text('editor.col.actions')}</th>
-              </tr>
-            </thead>
-            <tbody>
-              {study.sources.map((s) => (
-                <tr data-source={s.id}>
-                  <th scope="row">{s.name}</th>
-                  <td data-label={tr.t('editor.col.id')}>
-                    <code>{s.id}</code>
-                  </td>
-                  <td data-label={tr.t('editor.col.kind')}>{tr.text(`editor.kind.${s.kind}`)}</td>
-                  <td data-label={tr.t('editor.col.setting')}>{s.setting}</td>
-                  <td class="row-actions">
-                    <a href={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}`}>
-                      {tr.text('source.edit', { name: s.name })}
-                    </a>
-                    <form
-                      method="post"
-                      action={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}/remove`}
-                      class="inline-form"
-                    >
-                      <button type="submit" class="button-quiet">
-                        {tr.text('source.remove', { name: s.name })}
-                      </button>
-                    </form>
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <DataTable
+          tr={tr}
+          scroll
+          caption={tr.text('editor.sourcesCaption')}
+          columns={[
+            'editor.col.source',
+            'editor.col.id',
+            'editor.col.kind',
+            'editor.col.setting',
+            'editor.col.actions',
+          ]}
+        >
+          {study.sources.map((s) => (
+            <tr data-source={s.id}>
+              <th scope="row">{s.name}</th>
+              <LabelledCell tr={tr} column="editor.col.id">
+                <code>{s.id}</code>
+              </LabelledCell>
+              <LabelledCell tr={tr} column="editor.col.kind">
+                {tr.text(`editor.kind.${s.kind}`)}
+              </LabelledCell>
+              <LabelledCell tr={tr} column="editor.col.setting">
+                {s.setting}
+              </LabelledCell>
+              <RowActions
+                href={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}`}
+                edit={tr.text('source.edit', { name: s.name })}
+                remove={tr.text('source.remove', { name: s.name })}
+              />
+            </tr>
+          ))}
+        </DataTable>
       </section>
 
-      <section aria-labelledby="upload-sources-heading" class="upload">
-        <h2 id="upload-sources-heading">{tr.text('editor.upload.sources')}</h2>
-        <form
-          method="post"
-          action={`/studies/${studyId}/edit/sources-geojson#upload-sources-heading`}
-          enctype="multipart/form-data"
-        >
-          <div class="field">
-            <label for="sources-file">{tr.text('editor.upload.file')}</label>
-            <input
-              id="sources-file"
-              name="file"
-              type="file"
-              accept=".geojson,.json,application/geo+json,application/json"
-              aria-describedby={geoProblem ? 'sources-help sources-problems' : 'sources-help'}
-              aria-invalid={geoProblem ? 'true' : undefined}
-            />
-            <p id="sources-help" class="help">
-              {tr.text('editor.upload.sourcesHelp')}
-            </p>
-            {geoProblem && (
-              <div class="upload-problems" data-upload="sources">
-                <p class="problem-title">{tr.text('editor.problems')}</p>
-                <FieldProblems
-                  tr={tr}
-                  id="sources-problems"
-                  issues={geoProblem.issues}
-                  describe={(i) => describeIssue(tr, i, featureIds)}
-                />
-              </div>
-            )}
-          </div>
-          <button type="submit">{tr.text('editor.upload.button')}</button>
-        </form>
-      </section>
+      <UploadSection
+        tr={tr}
+        studyId={studyId}
+        upload="sources"
+        problem={geoProblem}
+        describe={(i) => describeIssue(tr, i, featureIds)}
+      />
 
       <section aria-labelledby="motion-heading">
         <h2 id="motion-heading">{tr.text('motion.heading')}</h2>
@@ -375,7 +284,56 @@ export function EditorView(props: EditorViewProps) {
           </a>
         </p>
       </section>
-    </PageShell>
+    </StudyPage>
+  );
+}
+
+/** Where each of the editor's uploads posts, below the study's editor. */
+const UPLOAD_PATHS = { communities: 'communities-csv', sources: 'sources-geojson' } as const;
+
+/** One of the editor's uploads: its section, the form with the file, and the last file's problems. */
+function UploadSection(props: {
+  readonly tr: Translator;
+  readonly studyId: string;
+  readonly upload: UploadProblem['upload'];
+  readonly problem: UploadProblem | undefined;
+  readonly describe: (issue: InputIssue) => Child;
+  /** What follows the form. */
+  readonly children?: Child;
+}) {
+  const { tr, upload, problem } = props;
+  const heading = `upload-${upload}-heading`;
+  const problemsId = `${upload}-problems`;
+  const action = `/studies/${props.studyId}/edit/${UPLOAD_PATHS[upload]}#${heading}`;
+  return (
+    <section aria-labelledby={heading} class="upload">
+      <h2 id={heading}>{tr.text(`editor.upload.${upload}`)}</h2>
+      <form method="post" action={action} enctype="multipart/form-data">
+        <FileField
+          tr={tr}
+          upload={upload}
+          text={{ label: 'editor.upload.file', help: `editor.upload.${upload}Help` }}
+          problems={problem !== undefined}
+        >
+          {problem && (
+            <div class="upload-problems" data-upload={upload}>
+              <p class="problem-title">{tr.text('editor.problems')}</p>
+              <FieldProblems
+                tr={tr}
+                id={problemsId}
+                issues={problem.issues}
+                describe={props.describe}
+              />
+              {upload === 'communities' && problem.text !== undefined && (
+                <CsvLines tr={tr} text={problem.text} issues={problem.issues} />
+              )}
+            </div>
+          )}
+        </FileField>
+        <button type="submit">{tr.text('editor.upload.button')}</button>
+      </form>
+      {props.children}
+    </section>
   );
 }
 
@@ -396,42 +354,35 @@ function CsvLines(props: {
     if (line !== undefined) byLine.set(line, [...(byLine.get(line) ?? []), issue]);
   }
   return (
-    <table class="data-table csv-lines">
-      <caption>{tr.text('editor.csvPreview')}</caption>
-      <thead>
-        <tr>
-          <th scope="col" class="numeric">
-            {tr.text('editor.col.line')}
-          </th>
-          <th scope="col">{tr.text('editor.col.text')}</th>
-          <th scope="col">{tr.text('editor.col.problem')}</th>
-        </tr>
-      </thead>
-      <tbody>
-        {lines.map((text, i) => {
-          const problems = byLine.get(i + 1) ?? [];
-          return (
-            <tr class={problems.length > 0 ? 'line-bad' : undefined} data-line={i + 1}>
-              <th scope="row" class="numeric">
-                {i + 1}
-              </th>
-              <td>
-                <code>{text}</code>
-              </td>
-              <td>
-                {tr.english(
-                  problems
-                    .map(
-                      (p) =>
-                        p.path.split(`[line ${i + 1}]`)[1]?.replace(/^\./, '') + ': ' + p.message,
-                    )
-                    .join('; '),
-                )}
-              </td>
-            </tr>
-          );
-        })}
-      </tbody>
-    </table>
+    <DataTable
+      tr={tr}
+      class="csv-lines"
+      caption={tr.text('editor.csvPreview')}
+      columns={[{ key: 'editor.col.line', numeric: true }, 'editor.col.text', 'editor.col.problem']}
+    >
+      {lines.map((text, i) => {
+        const problems = byLine.get(i + 1) ?? [];
+        return (
+          <tr class={problems.length > 0 ? 'line-bad' : undefined} data-line={i + 1}>
+            <th scope="row" class="numeric">
+              {i + 1}
+            </th>
+            <td>
+              <code>{text}</code>
+            </td>
+            <td>
+              {tr.english(
+                problems
+                  .map(
+                    (p) =>
+                      p.path.split(`[line ${i + 1}]`)[1]?.replace(/^\./, '') + ': ' + p.message,
+                  )
+                  .join('; '),
+              )}
+            </td>
+          </tr>
+        );
+      })}
+    </DataTable>
   );
 }

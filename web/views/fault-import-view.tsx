@@ -3,9 +3,12 @@ import { TECTONIC_SETTINGS } from '../../api/engine/model.ts';
 import { DEFAULT_NUMBERS } from '../../api/study/fault-files/fault-defaults.ts';
 import { FAULT_FIELDS } from '../../api/study/fault-files/fault-fields.ts';
 import type { FaultImportPreview } from '../data/fault-import.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
 import type { TextKey } from '../text/text-key.ts';
 import { FieldProblems } from './field-problems.tsx';
+import { DataTable } from '../components/data-table.tsx';
+import { FileField } from '../components/form-rows.tsx';
 
 export interface FaultImportViewProps {
   readonly page: PageContext;
@@ -28,16 +31,13 @@ export function FaultImportView(props: FaultImportViewProps) {
   const { tr } = props.page;
   const action = `/studies/${props.studyId}/edit/import-faults`;
   const preview = props.preview;
-  const title = tr.t('faults.title');
   return (
-    <PageShell
+    <TitledPage
       page={props.page}
-      title={title}
-      titleLang={tr.fallbackLang('faults.title')}
+      titleKey="faults.title"
       study={{ id: props.studyId, name: props.studyName }}
       section="edit"
     >
-      <h1>{tr.text('faults.title')}</h1>
       <p>{tr.text('faults.intro')}</p>
       <FieldProblems
         tr={tr}
@@ -46,19 +46,11 @@ export function FaultImportView(props: FaultImportViewProps) {
         describe={(i) => tr.english(`${i.path}: ${i.message}`)}
       />
       <form method="post" action={action} enctype="multipart/form-data" class="community-form">
-        <div class="field">
-          <label for="faults-file">{tr.text('faults.file')}</label>
-          <input
-            id="faults-file"
-            name="file"
-            type="file"
-            accept=".geojson,.json,.kml,.kmz,.zip"
-            aria-describedby="faults-file-help"
-          />
-          <p id="faults-file-help" class="help">
-            {tr.text('faults.fileHelp')}
-          </p>
-        </div>
+        <FileField
+          tr={tr}
+          upload="faults"
+          text={{ label: 'faults.file', help: 'faults.fileHelp' }}
+        />
         <button type="submit">{tr.text('faults.read')}</button>
       </form>
       {preview && (
@@ -132,35 +124,31 @@ export function FaultImportView(props: FaultImportViewProps) {
             })}
           </fieldset>
           {preview.problems.length > 0 && (
-            <div class="table-scroll">
-              <table class="data-table fault-problems">
-                <caption>
-                  {tr.text('faults.problems', { count: String(preview.problems.length) })}
-                </caption>
-                <thead>
-                  <tr>
-                    <th scope="col">{tr.text('faults.col.feature')}</th>
-                    <th scope="col">{tr.text('faults.col.name')}</th>
-                    <th scope="col">{tr.text('faults.col.field')}</th>
-                    <th scope="col">{tr.text('faults.col.from')}</th>
-                    <th scope="col">{tr.text('faults.col.problem')}</th>
-                  </tr>
-                </thead>
-                <tbody>
-                  {preview.problems.map((p) => (
-                    <tr data-feature={p.feature} data-field={p.field}>
-                      <td>{p.feature}</td>
-                      <th scope="row">{p.name}</th>
-                      <td>
-                        <code>{p.field}</code>
-                      </td>
-                      <td>{p.from ?? ''}</td>
-                      <td lang="en">{p.message}</td>
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
-            </div>
+            <DataTable
+              tr={tr}
+              class="fault-problems"
+              scroll
+              caption={tr.text('faults.problems', { count: String(preview.problems.length) })}
+              columns={[
+                'faults.col.feature',
+                'faults.col.name',
+                'faults.col.field',
+                'faults.col.from',
+                'faults.col.problem',
+              ]}
+            >
+              {preview.problems.map((p) => (
+                <tr data-feature={p.feature} data-field={p.field}>
+                  <td>{p.feature}</td>
+                  <th scope="row">{p.name}</th>
+                  <td>
+                    <code>{p.field}</code>
+                  </td>
+                  <td>{p.from ?? ''}</td>
+                  <td lang="en">{p.message}</td>
+                </tr>
+              ))}
+            </DataTable>
           )}
           <p class="form-actions">
             <button type="submit" name="step" value="check">
@@ -173,6 +161,6 @@ export function FaultImportView(props: FaultImportViewProps) {
           </p>
         </form>
       )}
-    </PageShell>
+    </TitledPage>
   );
 }

@@ -1,5 +1,6 @@
 import type { CommunityFeltHistory, FeltEstimate } from '../../api/engine/catalog/felt-history.ts';
 import type { Translator } from '../text/translator.ts';
+import { DataTable } from '../components/data-table.tsx';
 
 export interface FeltListProps {
   readonly tr: Translator;
@@ -50,34 +51,31 @@ export function FeltList(props: FeltListProps) {
               strong: tr.count(felt.history.stronglyFelt.length),
             })}
           </p>
-          <table class="data-table felt-table">
-            <caption>{tr.text('community.feltCaption', { name: props.communityName })}</caption>
-            <thead>
-              <tr>
-                <th scope="col">{tr.text('community.feltCol.date')}</th>
-                <th scope="col" class="numeric">
-                  {tr.text('community.feltCol.magnitude')}
-                </th>
-                <th scope="col">{tr.text('community.feltCol.where')}</th>
-                <th scope="col">{tr.text('community.feltCol.mmi')}</th>
+          <DataTable
+            tr={tr}
+            class="felt-table"
+            caption={tr.text('community.feltCaption', { name: props.communityName })}
+            columns={[
+              'community.feltCol.date',
+              { key: 'community.feltCol.magnitude', numeric: true },
+              'community.feltCol.where',
+              'community.feltCol.mmi',
+            ]}
+          >
+            {strongestFelt(felt.history, props.limit).map((e) => (
+              <tr data-event={e.eventId}>
+                <th scope="row">{tr.date(e.timeMs)}</th>
+                <td class="numeric">{`M ${tr.number(e.magnitude, 1)}`}</td>
+                <td>{tr.place(e.distanceKm, e.bearingDeg)}</td>
+                <td>
+                  {tr.mmi(e.mmi)} ·{' '}
+                  {tr.text(
+                    `mmi.${Math.min(10, Math.max(1, Math.floor(e.mmi)))}.name` as 'mmi.1.name',
+                  )}
+                </td>
               </tr>
-            </thead>
-            <tbody>
-              {strongestFelt(felt.history, props.limit).map((e) => (
-                <tr data-event={e.eventId}>
-                  <th scope="row">{tr.date(e.timeMs)}</th>
-                  <td class="numeric">{`M ${tr.number(e.magnitude, 1)}`}</td>
-                  <td>{tr.place(e.distanceKm, e.bearingDeg)}</td>
-                  <td>
-                    {tr.mmi(e.mmi)} ·{' '}
-                    {tr.text(
-                      `mmi.${Math.min(10, Math.max(1, Math.floor(e.mmi)))}.name` as 'mmi.1.name',
-                    )}
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+            ))}
+          </DataTable>
         </>
       )}
     </section>

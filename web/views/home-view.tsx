@@ -1,5 +1,8 @@
 import type { StudySummary } from '../../api/store/index.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
+import { Notice } from '../components/notice.tsx';
+import { DataTable, LabelledCell } from '../components/data-table.tsx';
 
 export function HomeView(props: {
   readonly page: PageContext;
@@ -9,17 +12,8 @@ export function HomeView(props: {
 }) {
   const { tr } = props.page;
   return (
-    <PageShell
-      page={props.page}
-      title={tr.t('home.title')}
-      titleLang={tr.fallbackLang('home.title')}
-    >
-      <h1>{tr.text('home.title')}</h1>
-      {props.deleted && (
-        <p class="notice" role="status">
-          {tr.text('deleteStudy.done')}
-        </p>
-      )}
+    <TitledPage page={props.page} titleKey="home.title">
+      {props.deleted && <Notice>{tr.text('deleteStudy.done')}</Notice>}
       <p class="lead">{tr.text('home.intro')}</p>
       <p>{tr.text('home.start')}</p>
       <p>
@@ -30,38 +24,34 @@ export function HomeView(props: {
       {props.studies.length === 0 ? (
         <p>{tr.text('home.none')}</p>
       ) : (
-        <table class="data-table">
-          <caption>{tr.text('home.caption')}</caption>
-          <thead>
+        <DataTable
+          tr={tr}
+          caption={tr.text('home.caption')}
+          columns={['home.col.name', 'home.col.updated', 'home.col.actions']}
+        >
+          {props.studies.map((s) => (
             <tr>
-              <th scope="col">{tr.text('home.col.name')}</th>
-              <th scope="col">{tr.text('home.col.updated')}</th>
-              <th scope="col">{tr.text('home.col.actions')}</th>
+              <th scope="row">
+                <a href={`/studies/${s.id}`}>{s.name}</a>
+              </th>
+              <LabelledCell tr={tr} column="home.col.updated">
+                {tr.date(s.updatedAt)}
+              </LabelledCell>
+              <td class="row-actions">
+                <a href={`/studies/${s.id}/rename`}>
+                  {tr.text('studyActions.rename', { name: s.name })}
+                </a>{' '}
+                <a href={`/studies/${s.id}/duplicate`}>
+                  {tr.text('studyActions.duplicate', { name: s.name })}
+                </a>{' '}
+                <a href={`/studies/${s.id}/delete`}>
+                  {tr.text('studyActions.delete', { name: s.name })}
+                </a>
+              </td>
             </tr>
-          </thead>
-          <tbody>
-            {props.studies.map((s) => (
-              <tr>
-                <th scope="row">
-                  <a href={`/studies/${s.id}`}>{s.name}</a>
-                </th>
-                <td data-label={tr.t('home.col.updated')}>{tr.date(s.updatedAt)}</td>
-                <td class="row-actions">
-                  <a href={`/studies/${s.id}/rename`}>
-                    {tr.text('studyActions.rename', { name: s.name })}
-                  </a>{' '}
-                  <a href={`/studies/${s.id}/duplicate`}>
-                    {tr.text('studyActions.duplicate', { name: s.name })}
-                  </a>{' '}
-                  <a href={`/studies/${s.id}/delete`}>
-                    {tr.text('studyActions.delete', { name: s.name })}
-                  </a>
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+          ))}
+        </DataTable>
       )}
-    </PageShell>
+    </TitledPage>
   );
 }

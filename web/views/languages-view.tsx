@@ -1,4 +1,5 @@
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
 import type { LanguageCoverage } from '../text/coverage.ts';
 import type { FileProblem } from '../text/exchange/translation-rows.ts';
 import type { TextBundles } from '../text/text-bundles.ts';
@@ -64,12 +65,7 @@ export function LanguagesView(props: LanguagesViewProps) {
   const { tr } = props.page;
   const english = props.bundles.english.text;
   return (
-    <PageShell
-      page={props.page}
-      title={tr.t('languages.title')}
-      titleLang={tr.fallbackLang('languages.title')}
-    >
-      <h1>{tr.text('languages.title')}</h1>
+    <TitledPage page={props.page} titleKey="languages.title">
       <p class="lead">{tr.text('languages.intro')}</p>
       {props.outcome && <Outcome page={props.page} outcome={props.outcome} />}
 
@@ -158,6 +154,6 @@ export function LanguagesView(props: LanguagesViewProps) {
       ) : (
         <p>{tr.text('languages.noImports')}</p>
       )}
-    </PageShell>
+    </TitledPage>
   );
 }

@@ -1,6 +1,7 @@
 import { measureUnit, parseMeasure } from '../../api/engine/motion/measure.ts';
 import type { MapRunRecord } from '../../api/store/index.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { StudyPage } from '../layout/titled-page.tsx';
 import { mapTitle } from '../maps/hazard-layer.tsx';
 
 export interface MapRunViewProps {
@@ -26,13 +27,11 @@ export function MapRunView(props: MapRunViewProps) {
     quantity: run.request.quantity,
   };
   return (
-    <PageShell
+    <StudyPage
       page={props.page}
-      title={tr.t('mapRun.title', { name: props.studyName })}
-      titleLang={tr.fallbackLang('mapRun.title')}
       study={{ id: studyId, name: props.studyName }}
+      titleKey="mapRun.title"
     >
-      <h1>{tr.text('mapRun.title', { name: props.studyName })}</h1>
       <p>{mapTitle(tr, what)}</p>
       <div
         class="run-status"
@@ -70,6 +69,6 @@ export function MapRunView(props: MapRunViewProps) {
       <p>
         <a href={`/studies/${studyId}`}>{tr.text('mapRun.back')}</a>
       </p>
-    </PageShell>
+    </StudyPage>
   );
 }

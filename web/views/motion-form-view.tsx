@@ -3,9 +3,12 @@ import { TECTONIC_SETTINGS, type TectonicSetting } from '../../api/engine/model.
 import { DEFAULT_SETTINGS } from '../../api/study/settings-schema.ts';
 import { WEIGHT_SUM_TOLERANCE } from '../../api/study/branches-schema.ts';
 import { SETTING_FIELDS, type MotionForm, type SettingField } from '../data/motion-form.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { StudyPage } from '../layout/titled-page.tsx';
 import type { TextKey } from '../text/text-key.ts';
 import { FieldProblems, FormProblems } from './field-problems.tsx';
+import { DataTable } from '../components/data-table.tsx';
+import { FormActions } from '../components/form-rows.tsx';
 
 export interface MotionFormViewProps {
   readonly page: PageContext;
@@ -51,16 +54,13 @@ export function MotionFormView(props: MotionFormViewProps) {
   const bad = (name: string) => problems(name).length > 0;
   const described = (name: string, id: string, help?: string) =>
     [help, bad(name) ? `${id}-problem` : undefined].filter(Boolean).join(' ') || undefined;
-  const title = tr.t('motion.title', { name: props.studyName });
   return (
-    <PageShell
+    <StudyPage
       page={props.page}
-      title={title}
-      titleLang={tr.fallbackLang('motion.title')}
       study={{ id: props.studyId, name: props.studyName }}
+      titleKey="motion.title"
       section="edit"
     >
-      <h1>{tr.text('motion.title', { name: props.studyName })}</h1>
       <p>{tr.text('motion.intro', { tolerance: String(WEIGHT_SUM_TOLERANCE) })}</p>
       <FormProblems tr={tr} fieldIssues={props.fieldIssues} otherIssues={props.otherIssues} />
       <form
@@ -79,77 +79,70 @@ export function MotionFormView(props: MotionFormViewProps) {
           return (
             <fieldset data-setting={setting}>
               <legend>{tr.text(`source.choice.${setting}`)}</legend>
-              <div class="table-scroll">
-                <table class="data-table">
-                  <caption class="visually-hidden">
-                    {tr.text('motion.caption', { setting: tr.t(`source.choice.${setting}`) })}
-                  </caption>
-                  <thead>
-                    <tr>
-                      <th scope="col">{tr.text('motion.col.model')}</th>
-                      <th scope="col">{tr.text('motion.col.weight')}</th>
-                      <th scope="col">{tr.text('motion.col.remove')}</th>
+              <DataTable
+                tr={tr}
+                scroll
+                caption={tr.text('motion.caption', { setting: tr.t(`source.choice.${setting}`) })}
+                captionClass="visually-hidden"
+                columns={['motion.col.model', 'motion.col.weight', 'motion.col.remove']}
+              >
+                {rows.map((row, i) => {
+                  const at = `${setting}.${i}`;
+                  const id = `branch-${setting}-${i}`;
+                  return (
+                    <tr data-model={row.model}>
+                      <th scope="row">
+                        <input type="hidden" name={`branch.${at}.model`} value={row.model} />
+                        {row.model}
+                        <FieldProblems
+                          tr={tr}
+                          id={`${id}-model-problem`}
+                          issues={problems(`${at}.model`)}
+                        />
+                      </th>
+                      <td
+                        data-label={tr.t('motion.col.weight')}
+                        class={bad(`${at}.weight`) ? 'field-bad' : undefined}
+                      >
+                        <input
+                          id={`${id}-weight`}
+                          name={`branch.${at}.weight`}
+                          type="text"
+                          inputmode="decimal"
+                          value={row.weight}
+                          aria-label={tr.t('motion.weightOf', { model: row.model })}
+                          aria-invalid={bad(`${at}.weight`) || bad(setting) ? 'true' : undefined}
+                          aria-describedby={described(
+                            `${at}.weight`,
+                            `${id}-weight`,
+                            bad(setting) ? `${sumId} ${sumId}-problem` : sumId,
+                          )}
+                          autocomplete="off"
+                        />
+                        <FieldProblems
+                          tr={tr}
+                          id={`${id}-weight-problem`}
+                          issues={problems(`${at}.weight`)}
+                        />
+                      </td>
+                      <td>
+                        {/* A table cell keeps its own display, so the row's borders line up. */}
+                        <div class="field-check">
+                          <input
+                            id={`${id}-remove`}
+                            name={`branch.${at}.remove`}
+                            type="checkbox"
+                            value="true"
+                          />
+                          <label for={`${id}-remove`}>
+                            {tr.text('motion.removeModel', { model: row.model })}
+                          </label>
+                        </div>
+                      </td>
                     </tr>
-                  </thead>
-                  <tbody>
-                    {rows.map((row, i) => {
-                      const at = `${setting}.${i}`;
-                      const id = `branch-${setting}-${i}`;
-                      return (
-                        <tr data-model={row.model}>
-                          <th scope="row">
-                            <input type="hidden" name={`branch.${at}.model`} value={row.model} />
-                            {row.model}
-                            <FieldProblems
-                              tr={tr}
-                              id={`${id}-model-problem`}
-                              issues={problems(`${at}.model`)}
-                            />
-                          </th>
-                          <td
-                            data-label={tr.t('motion.col.weight')}
-                            class={bad(`${at}.weight`) ? 'field-bad' : undefined}
-                          >
-                            <input
-                              id={`${id}-weight`}
-                              name={`branch.${at}.weight`}
-                              type="text"
-                              inputmode="decimal"
-                              value={row.weight}
-                              aria-label={tr.t('motion.weightOf', { model: row.model })}
-                              aria-invalid={
-                                bad(`${at}.weight`) || bad(setting) ? 'true' : undefined
-                              }
-                              aria-describedby={described(
-                                `${at}.weight`,
-                                `${id}-weight`,
-                                bad(setting) ? `${sumId} ${sumId}-problem` : sumId,
-                              )}
-                              autocomplete="off"
-                            />
-                            <FieldProblems
-                              tr={tr}
-                              id={`${id}-weight-problem`}
-                              issues={problems(`${at}.weight`)}
-                            />
-                          </td>
-                          <td class="field-check">
-                            <input
-                              id={`${id}-remove`}
-                              name={`branch.${at}.remove`}
-                              type="checkbox"
-                              value="true"
-                            />
-                            <label for={`${id}-remove`}>
-                              {tr.text('motion.removeModel', { model: row.model })}
-                            </label>
-                          </td>
-                        </tr>
-                      );
-                    })}
-                  </tbody>
-                </table>
-              </div>
+                  );
+                })}
+              </DataTable>
               <p id={sumId} class="help">
                 {sum === undefined
                   ? tr.text('motion.sumUnknown')
@@ -210,13 +203,8 @@ export function MotionFormView(props: MotionFormViewProps) {
             );
           })}
         </fieldset>
-        <p class="form-actions">
-          <button type="submit" class="button-primary">
-            {tr.text('motion.save')}
-          </button>{' '}
-          <a href={`/studies/${props.studyId}/edit`}>{tr.text('editor.cancel')}</a>
-        </p>
+        <FormActions tr={tr} studyId={props.studyId} save="motion.save" />
       </form>
-    </PageShell>
+    </StudyPage>
   );
 }

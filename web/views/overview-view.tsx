@@ -14,7 +14,8 @@ import {
 import type { RunState } from '../data/study-data.ts';
 import { BandSwatch } from '../layout/band-swatch.tsx';
 import { bandFirmnessText } from './band-firmness.tsx';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { StudyPage } from '../layout/titled-page.tsx';
 import { HazardLayer, HazardMapLegend, layerClasses } from '../maps/hazard-layer.tsx';
 import type { MapFrame } from '../maps/map-frame.ts';
 import { StudyMap, StudyMapLegend } from '../maps/study-map.tsx';
@@ -84,15 +85,12 @@ export function OverviewView(props: OverviewProps) {
     ? { run: shown.run, layer: shown.layer, classes: layerClasses(shown.layer.points) }
     : undefined;
   return (
-    <PageShell
+    <StudyPage
       page={props.page}
-      title={tr.t('overview.title', { name: study.name })}
-      titleLang={tr.fallbackLang('overview.title')}
       study={{ id: studyId, name: study.name }}
       section="overview"
       showsNumbers={rows !== undefined || drawn !== undefined || props.tsunami !== undefined}
     >
-      <h1>{tr.text('overview.title', { name: study.name })}</h1>
       <ScreeningStatus
         tr={tr}
         studyId={studyId}
@@ -309,6 +307,6 @@ export function OverviewView(props: OverviewProps) {
           ranked={props.tsunami.ranked}
         />
       )}
-    </PageShell>
+    </StudyPage>
   );
 }

@@ -1,5 +1,6 @@
 import type { RunRecord } from '../../api/store/index.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { StudyPage } from '../layout/titled-page.tsx';
 
 /**
  * A run in progress. Without script the reader refreshes the page; with script
@@ -15,13 +16,11 @@ export function RunView(props: {
   const { run, studyId } = props;
   const unfinished = run.status === 'queued' || run.status === 'running';
   return (
-    <PageShell
+    <StudyPage
       page={props.page}
-      title={tr.t('run.title', { name: props.studyName })}
-      titleLang={tr.fallbackLang('run.title')}
       study={{ id: studyId, name: props.studyName }}
+      titleKey="run.title"
     >
-      <h1>{tr.text('run.title', { name: props.studyName })}</h1>
       <div
         class="run-status"
         data-run={run.id}
@@ -57,6 +56,6 @@ export function RunView(props: {
       <p>
         <a href={`/studies/${studyId}`}>{tr.text('run.back')}</a>
       </p>
-    </PageShell>
+    </StudyPage>
   );
 }

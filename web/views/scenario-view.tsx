@@ -2,13 +2,15 @@ import type { InputIssue } from '../../api/engine/errors.ts';
 import { intensityWords } from '../format/intensity-words.ts';
 import type { Study } from '../../api/engine/model.ts';
 import type { ScenarioResult } from '../../api/engine/scenario/index.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { StudyPage } from '../layout/titled-page.tsx';
 import type { MapFrame } from '../maps/map-frame.ts';
 import { ScenarioLayer, ScenarioLegend } from '../maps/scenario-layer.tsx';
 import { StudyMap } from '../maps/study-map.tsx';
 import { FieldProblems } from './field-problems.tsx';
 import type { TsunamiPageResult } from '../data/tsunami-data.ts';
 import { TsunamiScenario } from './tsunami-time.tsx';
+import { DataTable, LabelledCell } from '../components/data-table.tsx';
 
 export interface ScenarioViewProps {
   readonly page: PageContext;
@@ -30,15 +32,12 @@ export function ScenarioView(props: ScenarioViewProps) {
   const issuesAt = (path: string) => props.issues.filter((i) => i.path === path);
   const others = props.issues.filter((i) => i.path !== 'sourceId' && i.path !== 'magnitude');
   return (
-    <PageShell
+    <StudyPage
       page={props.page}
-      title={tr.t('scenario.title', { name: study.name })}
-      titleLang={tr.fallbackLang('scenario.title')}
       study={{ id: studyId, name: study.name }}
       section="scenario"
       showsNumbers={result !== undefined}
     >
-      <h1>{tr.text('scenario.title', { name: study.name })}</h1>
       <p>{tr.text('scenario.intro')}</p>
       <form method="post" action={`/studies/${studyId}/scenario`} class="scenario-form" novalidate>
         <div class="field">
@@ -118,51 +117,46 @@ export function ScenarioView(props: ScenarioViewProps) {
           </section>
           <section aria-labelledby="scenario-table-heading">
             <h2 id="scenario-table-heading">{tr.text('scenario.table')}</h2>
-            <table class="data-table scenario-table">
-              <caption>{tr.text('scenario.table')}</caption>
-              <thead>
-                <tr>
-                  <th scope="col">{tr.text('scenario.col.community')}</th>
-                  <th scope="col" class="numeric">
-                    {tr.text('scenario.col.distance')}
-                  </th>
-                  <th scope="col">{tr.text('scenario.col.median')}</th>
-                  <th scope="col">{tr.text('scenario.col.high')}</th>
-                  <th scope="col" class="numeric">
-                    {tr.text('scenario.col.pga')}
-                  </th>
-                </tr>
-              </thead>
-              <tbody>
-                {[...result.communities]
-                  .sort((a, b) => b.mmi.median - a.mmi.median)
-                  .map((c) => (
-                    <tr data-community={c.communityId} data-mmi={c.mmi.median}>
-                      <th scope="row">
-                        <a href={`/studies/${studyId}/communities/${c.communityId}`}>{c.name}</a>
-                      </th>
-                      <td class="numeric" data-label={tr.t('scenario.col.distance')}>
-                        {tr.number(c.rrupKm)}
-                      </td>
-                      <td data-label={tr.t('scenario.col.median')}>
-                        {tr.mmi(c.mmi.median)} ·{' '}
-                        {tr.text(
-                          `mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.median)))}.name` as 'mmi.1.name',
-                        )}
-                      </td>
-                      <td data-label={tr.t('scenario.col.high')}>
-                        {tr.mmi(c.mmi.p84)} ·{' '}
-                        {tr.text(
-                          `mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.p84)))}.name` as 'mmi.1.name',
-                        )}
-                      </td>
-                      <td class="numeric" data-label={tr.t('scenario.col.pga')}>
-                        {tr.number(c.motions.PGA?.median ?? 0, 3)}
-                      </td>
-                    </tr>
-                  ))}
-              </tbody>
-            </table>
+            <DataTable
+              tr={tr}
+              class="scenario-table"
+              caption={tr.text('scenario.table')}
+              columns={[
+                'scenario.col.community',
+                { key: 'scenario.col.distance', numeric: true },
+                'scenario.col.median',
+                'scenario.col.high',
+                { key: 'scenario.col.pga', numeric: true },
+              ]}
+            >
+              {[...result.communities]
+                .sort((a, b) => b.mmi.median - a.mmi.median)
+                .map((c) => (
+                  <tr data-community={c.communityId} data-mmi={c.mmi.median}>
+                    <th scope="row">
+                      <a href={`/studies/${studyId}/communities/${c.communityId}`}>{c.name}</a>
+                    </th>
+                    <LabelledCell tr={tr} column="scenario.col.distance" numeric>
+                      {tr.number(c.rrupKm)}
+                    </LabelledCell>
+                    <LabelledCell tr={tr} column="scenario.col.median">
+                      {tr.mmi(c.mmi.median)} ·{' '}
+                      {tr.text(
+                        `mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.median)))}.name` as 'mmi.1.name',
+                      )}
+                    </LabelledCell>
+                    <LabelledCell tr={tr} column="scenario.col.high">
+                      {tr.mmi(c.mmi.p84)} ·{' '}
+                      {tr.text(
+                        `mmi.${Math.min(10, Math.max(1, Math.floor(c.mmi.p84)))}.name` as 'mmi.1.name',
+                      )}
+                    </LabelledCell>
+                    <LabelledCell tr={tr} column="scenario.col.pga" numeric>
+                      {tr.number(c.motions.PGA?.median ?? 0, 3)}
+                    </LabelledCell>
+                  </tr>
+                ))}
+            </DataTable>
             {result.warnings.length > 0 && (
               <details>
                 <summary>{tr.text('scenario.warnings')}</summary>
@@ -179,6 +173,6 @@ export function ScenarioView(props: ScenarioViewProps) {
       {result && props.tsunami && (
         <TsunamiScenario tr={tr} studyId={studyId} tsunami={props.tsunami} />
       )}
-    </PageShell>
+    </StudyPage>
   );
 }

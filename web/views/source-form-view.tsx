@@ -1,8 +1,9 @@
 import { TECTONIC_SETTINGS } from '../../api/engine/model.ts';
-import type { SourceForm, SourceTextField } from '../data/source-form.ts';
+import { SOURCE_FIELD_GROUPS, type SourceForm, type SourceTextField } from '../data/source-form.ts';
 import type { TextKey } from '../text/text-key.ts';
 import { FieldProblems } from './field-problems.tsx';
 import { EditorFormPage, type EditorFormProps } from './editor-form-page.tsx';
+import { FormActions } from '../components/form-rows.tsx';
 
 export interface SourceFormViewProps extends EditorFormProps {
   readonly values: SourceForm;
@@ -17,28 +18,8 @@ const CHOICES: Partial<Record<SourceTextField | 'kind' | 'order', readonly strin
   'recurrence.shape': ['', 'gutenberg-richter', 'characteristic'],
 };
 
-const GROUPS: readonly { readonly legend: TextKey; readonly fields: readonly SourceTextField[] }[] =
-  [
-    { legend: 'source.group.about', fields: ['id', 'name', 'setting', 'mechanism'] },
-    {
-      legend: 'source.group.fault',
-      fields: ['dip', 'dipDirection', 'upperDepthKm', 'lowerDepthKm'],
-    },
-    { legend: 'source.group.area', fields: ['depthKm'] },
-    {
-      legend: 'source.group.recurrence',
-      fields: [
-        'recurrence.type',
-        'recurrence.bValue',
-        'recurrence.mMin',
-        'recurrence.mMax',
-        'recurrence.rate',
-        'recurrence.slipRateMmYr',
-        'recurrence.shape',
-        'recurrence.magnitude',
-      ],
-    },
-  ];
+/** The form's groups of fields, each in its own fieldset. */
+const GROUPS = Object.keys(SOURCE_FIELD_GROUPS) as (keyof typeof SOURCE_FIELD_GROUPS)[];
 
 /** Add or edit one source: kind, coordinates typed or pasted, properties and recurrence; problems under their fields. */
 export function SourceFormView(props: SourceFormViewProps) {
@@ -115,16 +96,11 @@ export function SourceFormView(props: SourceFormViewProps) {
         </fieldset>
         {GROUPS.map((group) => (
           <fieldset>
-            <legend>{tr.text(group.legend)}</legend>
-            {group.fields.map(control)}
+            <legend>{tr.text(`source.group.${group}`)}</legend>
+            {SOURCE_FIELD_GROUPS[group].map(control)}
           </fieldset>
         ))}
-        <p class="form-actions">
-          <button type="submit" class="button-primary">
-            {tr.text('source.save')}
-          </button>{' '}
-          <a href={`/studies/${props.studyId}/edit`}>{tr.text('editor.cancel')}</a>
-        </p>
+        <FormActions tr={tr} studyId={props.studyId} save="source.save" />
       </form>
     </EditorFormPage>
   );

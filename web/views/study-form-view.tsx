@@ -1,9 +1,11 @@
 import type { InputIssue } from '../../api/engine/errors.ts';
 import type { ColumnPick } from '../data/community-import.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
 import { ColumnPickForm } from './column-pick-view.tsx';
 import { describeIssue } from './editor-view.tsx';
 import { FieldProblems } from './field-problems.tsx';
+import { FileField } from '../components/form-rows.tsx';
 
 /** Which form: a new study (name and village file), a new name, or the name of a copy. */
 export type StudyFormKind = 'new' | 'rename' | 'duplicate';
@@ -41,12 +43,7 @@ export function StudyFormView(props: StudyFormViewProps) {
   const fileIssues = props.fileIssues ?? [];
   const failed = nameIssues.length + fileIssues.length > 0;
   return (
-    <PageShell
-      page={props.page}
-      title={tr.t(TITLES[kind], values)}
-      titleLang={tr.fallbackLang(TITLES[kind])}
-    >
-      <h1>{tr.text(TITLES[kind], values)}</h1>
+    <TitledPage page={props.page} titleKey={TITLES[kind]} titleValues={values}>
       {kind === 'new' && <p>{tr.text('newStudy.intro')}</p>}
       {kind === 'duplicate' && <p>{tr.text('duplicateStudy.intro')}</p>}
       {failed && (
@@ -75,28 +72,20 @@ export function StudyFormView(props: StudyFormViewProps) {
           <FieldProblems tr={tr} id="study-name-problems" issues={nameIssues} />
         </div>
         {kind === 'new' && (
-          <div class={fileIssues.length > 0 ? 'field field-bad' : 'field'}>
-            <label for="communities-file">{tr.text('newStudy.file')}</label>
-            <input
-              id="communities-file"
-              name="file"
-              type="file"
-              accept=".csv,.txt,.tsv,.xlsx,.kml,.kmz,.zip,.geojson,.json"
-              aria-describedby={
-                fileIssues.length > 0 ? 'communities-help communities-problems' : 'communities-help'
-              }
-              aria-invalid={fileIssues.length > 0 ? 'true' : undefined}
-            />
-            <p id="communities-help" class="help">
-              {tr.text('newStudy.fileHelp')}
-            </p>
+          <FileField
+            tr={tr}
+            upload="communities"
+            text={{ label: 'newStudy.file', help: 'newStudy.fileHelp' }}
+            problems={fileIssues.length > 0}
+            bad={fileIssues.length > 0}
+          >
             <FieldProblems
               tr={tr}
               id="communities-problems"
               issues={fileIssues}
               describe={(i) => describeIssue(tr, i)}
             />
-          </div>
+          </FileField>
         )}
         <button type="submit">{tr.text(BUTTONS[kind])}</button>
       </form>
@@ -113,6 +102,6 @@ export function StudyFormView(props: StudyFormViewProps) {
           {props.study ? tr.text('nav.overview') : tr.text('studyForm.cancel')}
         </a>
       </p>
-    </PageShell>
+    </TitledPage>
   );
 }

@@ -1,7 +1,9 @@
 import type { ScreeningBandId } from '../../api/engine/intensity/screening-band.ts';
 import type { TripPlan } from '../../api/engine/trip/visit-order.ts';
 import { BandSwatch } from '../layout/band-swatch.tsx';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { StudyPage } from '../layout/titled-page.tsx';
+import { DataTable, LabelledCell } from '../components/data-table.tsx';
 
 export interface TripViewProps {
   readonly page: PageContext;
@@ -24,76 +26,27 @@ export function TripView(props: TripViewProps) {
   let sumKm = 0;
   const km = (value: number) => tr.t('priority.km', { km: tr.number(value, 1) });
   return (
-    <PageShell
+    <StudyPage
       page={props.page}
-      title={tr.t('trip.title', { name: props.studyName })}
-      titleLang={tr.fallbackLang('trip.title')}
       study={{ id: studyId, name: props.studyName }}
+      titleKey="trip.title"
       section="overview"
       bodyClass="trip-page"
       showsNumbers={true}
     >
-      <h1>{tr.text('trip.title', { name: props.studyName })}</h1>
       <p>{tr.text('trip.method')}</p>
-      <table class="data-table trip-table">
-        <caption>{tr.text('trip.caption')}</caption>
-        <thead>
-          <tr>
-            <th scope="col" class="numeric">
-              {tr.text('trip.col.stop')}
-            </th>
-            <th scope="col">{tr.text('overview.col.community')}</th>
-            <th scope="col">{tr.text('overview.col.band')}</th>
-            <th scope="col" class="numeric">
-              {tr.text('trip.col.leg')}
-            </th>
-            <th scope="col" class="numeric">
-              {tr.text('trip.col.sofar')}
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {plan.stops.map((stop, i) => {
-            const legKm = i === 0 ? undefined : plan.legsKm[i - 1];
-            sumKm += legKm ?? 0;
-            const band = props.bands.get(stop.id);
-            return (
-              <tr data-community={stop.id}>
-                <td class="numeric" data-label={tr.t('trip.col.stop')}>
-                  {i + 1}
-                </td>
-                <th scope="row">
-                  <a href={`/studies/${studyId}/communities/${stop.id}`}>
-                    {props.names.get(stop.id) ?? stop.id}
-                  </a>
-                </th>
-                <td data-label={tr.t('overview.col.band')}>
-                  {band ? <BandSwatch tr={tr} bandId={band} /> : ''}
-                </td>
-                <td class="numeric" data-label={tr.t('trip.col.leg')}>
-                  {legKm === undefined ? tr.text('trip.start') : km(legKm)}
-                </td>
-                <td class="numeric" data-label={tr.t('trip.col.sofar')}>
-                  {km(sumKm)}
-                </td>
-              </tr>
-            );
-          })}
-          {props.returnToStart && plan.stops.length > 1 && (
-            <tr>
-              <td class="numeric">{plan.stops.length + 1}</td>
-              <th scope="row">
-                {tr.text('trip.backTo', {
-                  name: props.names.get(plan.stops[0]?.id ?? '') ?? '',
-                })}
-              </th>
-              <td></td>
-              <td class="numeric">{km(plan.legsKm.at(-1) ?? 0)}</td>
-              <td class="numeric">{km(plan.totalKm)}</td>
-            </tr>
-          )}
-        </tbody>
-        <tfoot>
+      <DataTable
+        tr={tr}
+        class="trip-table"
+        caption={tr.text('trip.caption')}
+        columns={[
+          { key: 'trip.col.stop', numeric: true },
+          'overview.col.community',
+          'overview.col.band',
+          { key: 'trip.col.leg', numeric: true },
+          { key: 'trip.col.sofar', numeric: true },
+        ]}
+        foot={
           <tr>
             <th scope="row" colspan={3}>
               {tr.text('trip.total')}
@@ -102,12 +55,52 @@ export function TripView(props: TripViewProps) {
               {km(plan.totalKm)}
             </td>
           </tr>
-        </tfoot>
-      </table>
+        }
+      >
+        {plan.stops.map((stop, i) => {
+          const legKm = i === 0 ? undefined : plan.legsKm[i - 1];
+          sumKm += legKm ?? 0;
+          const band = props.bands.get(stop.id);
+          return (
+            <tr data-community={stop.id}>
+              <LabelledCell tr={tr} column="trip.col.stop" numeric>
+                {i + 1}
+              </LabelledCell>
+              <th scope="row">
+                <a href={`/studies/${studyId}/communities/${stop.id}`}>
+                  {props.names.get(stop.id) ?? stop.id}
+                </a>
+              </th>
+              <LabelledCell tr={tr} column="overview.col.band">
+                {band ? <BandSwatch tr={tr} bandId={band} /> : ''}
+              </LabelledCell>
+              <LabelledCell tr={tr} column="trip.col.leg" numeric>
+                {legKm === undefined ? tr.text('trip.start') : km(legKm)}
+              </LabelledCell>
+              <LabelledCell tr={tr} column="trip.col.sofar" numeric>
+                {km(sumKm)}
+              </LabelledCell>
+            </tr>
+          );
+        })}
+        {props.returnToStart && plan.stops.length > 1 && (
+          <tr>
+            <td class="numeric">{plan.stops.length + 1}</td>
+            <th scope="row">
+              {tr.text('trip.backTo', {
+                name: props.names.get(plan.stops[0]?.id ?? '') ?? '',
+              })}
+            </th>
+            <td></td>
+            <td class="numeric">{km(plan.legsKm.at(-1) ?? 0)}</td>
+            <td class="numeric">{km(plan.totalKm)}</td>
+          </tr>
+        )}
+      </DataTable>
       <p class="legend-note">{tr.text('trip.straightLine')}</p>
       <p class="no-print">
         <a href={`/studies/${studyId}#priority-heading`}>{tr.text('trip.back')}</a>
       </p>
-    </PageShell>
+    </StudyPage>
   );
 }

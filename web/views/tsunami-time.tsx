@@ -2,6 +2,7 @@ import { compassPoint } from '../../api/engine/catalog/felt-history.ts';
 import type { TsunamiCommunity, TsunamiResult } from '../../api/engine/tsunami/index.ts';
 import type { TsunamiPageResult } from '../data/tsunami-data.ts';
 import type { Translator } from '../text/translator.ts';
+import { DataTable, LabelledCell } from '../components/data-table.tsx';
 
 /** Distances to high ground in km with one decimal under this, whole km above. */
 const DECIMAL_KM_BELOW = 10;
@@ -132,72 +133,73 @@ export function TsunamiTable(props: {
 }) {
   const { tr } = props;
   return (
-    <div class="table-scroll">
-      <table class="data-table tsunami-table" id={props.id}>
-        <caption>{props.caption}</caption>
-        <thead>
-          <tr>
-            <th scope="col">{tr.text('tsunami.rank.place')}</th>
-            <th scope="col">{tr.text('tsunami.rank.arrival')}</th>
-            <th scope="col">{tr.text('tsunami.rank.ground')}</th>
+    <DataTable
+      tr={tr}
+      class="tsunami-table"
+      id={props.id}
+      scroll
+      caption={props.caption}
+      columns={['tsunami.rank.place', 'tsunami.rank.arrival', 'tsunami.rank.ground']}
+    >
+      {props.communities.map((c) => {
+        const g = c.highGround;
+        return (
+          <tr data-community={c.id} data-first-arrival-minutes={c.firstArrivalMinutes ?? ''}>
+            <th scope="row">
+              <a href={`/studies/${props.studyId}/communities/${c.id}`}>{c.name}</a>
+            </th>
+            <LabelledCell tr={tr} column="tsunami.rank.arrival">
+              {c.firstArrivalMinutes === null || c.latestMinutes === null
+                ? tr.text('tsunami.rank.none')
+                : tr.text('tsunami.rank.minutes', {
+                    from: tr.number(c.firstArrivalMinutes),
+                    to: tr.number(c.latestMinutes),
+                  })}
+            </LabelledCell>
+            <LabelledCell tr={tr} column="tsunami.rank.ground">
+              {g?.kind === 'found' &&
+                tr.text('tsunami.rank.groundAway', {
+                  km: km(tr, g.distanceKm),
+                  direction: tr.compass(compassPoint(g.bearingDeg)),
+                  minutes: tr.number(g.walkingMinutes),
+                })}
+              {g?.kind === 'already-above' &&
+                tr.text('tsunami.rank.groundAbove', { height: tr.number(g.heightM) })}
+              {g?.kind === 'none' &&
+                tr.text('tsunami.rank.groundNone', { km: tr.number(g.searchKm) })}
+            </LabelledCell>
           </tr>
-        </thead>
-        <tbody>
-          {props.communities.map((c) => {
-            const g = c.highGround;
-            return (
-              <tr data-community={c.id} data-first-arrival-minutes={c.firstArrivalMinutes ?? ''}>
-                <th scope="row">
-                  <a href={`/studies/${props.studyId}/communities/${c.id}`}>{c.name}</a>
-                </th>
-                <td data-label={tr.t('tsunami.rank.arrival')}>
-                  {c.firstArrivalMinutes === null || c.latestMinutes === null
-                    ? tr.text('tsunami.rank.none')
-                    : tr.text('tsunami.rank.minutes', {
-                        from: tr.number(c.firstArrivalMinutes),
-                        to: tr.number(c.latestMinutes),
-                      })}
-                </td>
-                <td data-label={tr.t('tsunami.rank.ground')}>
-                  {g?.kind === 'found' &&
-                    tr.text('tsunami.rank.groundAway', {
-                      km: km(tr, g.distanceKm),
-                      direction: tr.compass(compassPoint(g.bearingDeg)),
-                      minutes: tr.number(g.walkingMinutes),
-                    })}
-                  {g?.kind === 'already-above' &&
-                    tr.text('tsunami.rank.groundAbove', { height: tr.number(g.heightM) })}
-                  {g?.kind === 'none' &&
-                    tr.text('tsunami.rank.groundNone', { km: tr.number(g.searchKm) })}
-                </td>
-              </tr>
-            );
-          })}
-        </tbody>
-      </table>
-    </div>
+        );
+      })}
+    </DataTable>
   );
 }
 
-/** The overview's section: coastal communities ranked by time to act (data/tsunami-data.ts), with the caution. */
-export function TsunamiRanking(props: {
+/**
+ * A section of coastal communities' tsunami times with the caution: `id` names its class and
+ * table (`tsunami-<id>`), `text` its texts (`tsunami.<text>.title`, `.intro`).
+ */
+function TsunamiSection(props: {
   readonly tr: Translator;
   readonly studyId: string;
   readonly tsunami: TsunamiPageResult;
-  readonly ranked: readonly TsunamiCommunity[];
+  readonly communities: readonly TsunamiCommunity[];
+  readonly id: 'ranking' | 'scenario';
+  readonly text: 'rank' | 'scenario';
 }) {
-  const { tr, tsunami } = props;
+  const { tr, tsunami, text } = props;
+  const headingId = `tsunami-${text}-heading`;
   return (
-    <section class="tsunami-ranking" aria-labelledby="tsunami-rank-heading">
-      <h2 id="tsunami-rank-heading">{tr.text('tsunami.rank.title')}</h2>
-      <p>{tr.text('tsunami.rank.intro')}</p>
+    <section class={`tsunami-${props.id}`} aria-labelledby={headingId}>
+      <h2 id={headingId}>{tr.text(`tsunami.${text}.title`)}</h2>
+      <p>{tr.text(`tsunami.${text}.intro`)}</p>
       {tsunami.ok ? (
         <TsunamiTable
           tr={tr}
           studyId={props.studyId}
-          communities={props.ranked}
-          caption={tr.t('tsunami.rank.title')}
-          id="tsunami-ranking"
+          communities={props.communities}
+          caption={tr.t(`tsunami.${text}.title`)}
+          id={`tsunami-${props.id}`}
         />
       ) : (
         <p class="tsunami-problem">
@@ -207,6 +209,16 @@ export function TsunamiRanking(props: {
       <p class="tsunami-caution">{tr.text('tsunami.time.caution')}</p>
     </section>
   );
+}
+
+/** The overview's section: coastal communities ranked by time to act (data/tsunami-data.ts). */
+export function TsunamiRanking(props: {
+  readonly tr: Translator;
+  readonly studyId: string;
+  readonly tsunami: TsunamiPageResult;
+  readonly ranked: readonly TsunamiCommunity[];
+}) {
+  return <TsunamiSection {...props} communities={props.ranked} id="ranking" text="rank" />;
 }
 
 /** The scenario page's section: each coastal community's first arrival from the chosen rupture. */
@@ -215,25 +227,7 @@ export function TsunamiScenario(props: {
   readonly studyId: string;
   readonly tsunami: TsunamiPageResult;
 }) {
-  const { tr, tsunami } = props;
-  return (
-    <section class="tsunami-scenario" aria-labelledby="tsunami-scenario-heading">
-      <h2 id="tsunami-scenario-heading">{tr.text('tsunami.scenario.title')}</h2>
-      <p>{tr.text('tsunami.scenario.intro')}</p>
-      {tsunami.ok ? (
-        <TsunamiTable
-          tr={tr}
-          studyId={props.studyId}
-          communities={tsunami.result.communities}
-          caption={tr.t('tsunami.scenario.title')}
-          id="tsunami-scenario"
-        />
-      ) : (
-        <p class="tsunami-problem">
-          {tr.text('tsunami.time.problem', { problem: tr.english(tsunami.problem) })}
-        </p>
-      )}
-      <p class="tsunami-caution">{tr.text('tsunami.time.caution')}</p>
-    </section>
-  );
+  const { tsunami } = props;
+  const communities = tsunami.ok ? tsunami.result.communities : [];
+  return <TsunamiSection {...props} communities={communities} id="scenario" text="scenario" />;
 }

@@ -8,6 +8,7 @@ import {
 import type { PriorityRow } from '../data/visit-priority-data.ts';
 import { BandSwatch } from '../layout/band-swatch.tsx';
 import type { Translator } from '../text/translator.ts';
+import { DataTable, LabelledCell } from '../components/data-table.tsx';
 
 export interface VisitPriorityPanelProps {
   readonly tr: Translator;
@@ -92,83 +93,73 @@ export function VisitPriorityPanel(props: VisitPriorityPanelProps) {
         </p>
       )}
       <form method="get" action={`/studies/${studyId}/trip`} class="trip-choice">
-        <table class="data-table priority-table">
-          <caption>{tr.text('priority.tableCaption')}</caption>
-          <thead>
-            <tr>
-              <th scope="col">{tr.text('priority.col.choose')}</th>
-              <th scope="col" class="numeric">
-                {tr.text('overview.col.rank')}
+        <DataTable
+          tr={tr}
+          class="priority-table"
+          caption={tr.text('priority.tableCaption')}
+          columns={[
+            'priority.col.choose',
+            { key: 'overview.col.rank', numeric: true },
+            'overview.col.community',
+            { key: 'priority.col.score', numeric: true },
+            ...PRIORITY_COMPONENTS.map((id) => ({
+              label: componentName(tr, id, years),
+              numeric: true as const,
+            })),
+            'overview.col.band',
+            ...(props.visitCounts ? [{ key: 'priority.col.visits', numeric: true } as const] : []),
+          ]}
+        >
+          {rows.map((row) => (
+            <tr data-community={row.priority.communityId}>
+              <td>
+                <input
+                  type="checkbox"
+                  name="c"
+                  value={row.priority.communityId}
+                  id={`trip-${row.priority.communityId}`}
+                  aria-label={tr.t('priority.chooseOne', { name: row.name })}
+                />
+              </td>
+              <LabelledCell tr={tr} column="overview.col.rank" numeric>
+                {row.rank}
+              </LabelledCell>
+              <th scope="row">
+                <a href={`/studies/${studyId}/communities/${row.priority.communityId}`}>
+                  {row.name}
+                </a>
               </th>
-              <th scope="col">{tr.text('overview.col.community')}</th>
-              <th scope="col" class="numeric">
-                {tr.text('priority.col.score')}
-              </th>
-              {PRIORITY_COMPONENTS.map((id) => (
-                <th scope="col" class="numeric">
-                  {componentName(tr, id, years)}
-                </th>
+              <td class="numeric priority-score" data-label={tr.t('priority.col.score')}>
+                {tr.number(row.priority.score, 0)}
+              </td>
+              {row.priority.components.map((c) => (
+                <td
+                  class="numeric"
+                  data-component={c.id}
+                  data-label={tr.t(`priority.component.${c.id}`, { years })}
+                >
+                  {componentValue(tr, c)}
+                  {c.used && (
+                    <span class="component-share">
+                      {tr.text('priority.share', {
+                        share: tr.number(Math.round(c.share * 100)),
+                        points: tr.number(c.points, 1),
+                      })}
+                    </span>
+                  )}
+                </td>
               ))}
-              <th scope="col">{tr.text('overview.col.band')}</th>
+              <LabelledCell tr={tr} column="overview.col.band">
+                <BandSwatch tr={tr} bandId={row.bandId} />
+              </LabelledCell>
               {props.visitCounts && (
-                <th scope="col" class="numeric">
-                  {tr.text('priority.col.visits')}
-                </th>
+                <td class="numeric" data-key="visits" data-label={tr.t('priority.col.visits')}>
+                  {tr.number(props.visitCounts.get(row.priority.communityId) ?? 0)}
+                </td>
               )}
             </tr>
-          </thead>
-          <tbody>
-            {rows.map((row) => (
-              <tr data-community={row.priority.communityId}>
-                <td>
-                  <input
-                    type="checkbox"
-                    name="c"
-                    value={row.priority.communityId}
-                    id={`trip-${row.priority.communityId}`}
-                    aria-label={tr.t('priority.chooseOne', { name: row.name })}
-                  />
-                </td>
-                <td class="numeric" data-label={tr.t('overview.col.rank')}>
-                  {row.rank}
-                </td>
-                <th scope="row">
-                  <a href={`/studies/${studyId}/communities/${row.priority.communityId}`}>
-                    {row.name}
-                  </a>
-                </th>
-                <td class="numeric priority-score" data-label={tr.t('priority.col.score')}>
-                  {tr.number(row.priority.score, 0)}
-                </td>
-                {row.priority.components.map((c) => (
-                  <td
-                    class="numeric"
-                    data-component={c.id}
-                    data-label={tr.t(`priority.component.${c.id}`, { years })}
-                  >
-                    {componentValue(tr, c)}
-                    {c.used && (
-                      <span class="component-share">
-                        {tr.text('priority.share', {
-                          share: tr.number(Math.round(c.share * 100)),
-                          points: tr.number(c.points, 1),
-                        })}
-                      </span>
-                    )}
-                  </td>
-                ))}
-                <td data-label={tr.t('overview.col.band')}>
-                  <BandSwatch tr={tr} bandId={row.bandId} />
-                </td>
-                {props.visitCounts && (
-                  <td class="numeric" data-key="visits" data-label={tr.t('priority.col.visits')}>
-                    {tr.number(props.visitCounts.get(row.priority.communityId) ?? 0)}
-                  </td>
-                )}
-              </tr>
-            ))}
-          </tbody>
-        </table>
+          ))}
+        </DataTable>
         <fieldset class="trip-options">
           <legend>{tr.text('trip.options')}</legend>
           <label>

@@ -1,8 +1,10 @@
 import type { InputIssue } from '../../api/engine/errors.ts';
 import { REFERRAL_STATUSES, type VisitRecord } from '../../api/store/visit-repository.ts';
-import { type PageContext, PageShell } from '../layout/page-shell.tsx';
+import type { PageContext } from '../layout/page-shell.tsx';
+import { TitledPage } from '../layout/titled-page.tsx';
 import type { Translator } from '../text/translator.ts';
 import { FieldProblems } from './field-problems.tsx';
+import { DataTable, LabelledCell } from '../components/data-table.tsx';
 
 /** A community's recorded visits, newest first, each with a link to delete it (asked first), and a link to record another. */
 export function VisitRecords(props: {
@@ -18,48 +20,50 @@ export function VisitRecords(props: {
       {visits.length === 0 ? (
         <p>{tr.text('visits.none')}</p>
       ) : (
-        <table class="data-table">
-          <caption>{tr.text('visits.caption')}</caption>
-          <thead>
-            <tr>
-              <th scope="col">{tr.text('visits.field.visitedOn')}</th>
-              <th scope="col">{tr.text('visits.field.language')}</th>
-              <th scope="col" class="numeric">
-                {tr.text('visits.field.peopleReached')}
-              </th>
-              <th scope="col">{tr.text('visits.field.topics')}</th>
-              <th scope="col">{tr.text('visits.field.followUps')}</th>
-              <th scope="col">{tr.text('visits.field.referral')}</th>
-              <td />
+        <DataTable
+          tr={tr}
+          caption={tr.text('visits.caption')}
+          columns={[
+            'visits.field.visitedOn',
+            'visits.field.language',
+            { key: 'visits.field.peopleReached', numeric: true },
+            'visits.field.topics',
+            'visits.field.followUps',
+            'visits.field.referral',
+            { blank: true },
+          ]}
+        >
+          {visits.map((v) => (
+            <tr data-visit={v.id}>
+              <th scope="row">{tr.date(`${v.visitedOn}T12:00:00Z`)}</th>
+              <LabelledCell tr={tr} column="visits.field.language">
+                {v.language}
+              </LabelledCell>
+              <LabelledCell tr={tr} column="visits.field.peopleReached" numeric>
+                {tr.number(v.peopleReached)}
+              </LabelledCell>
+              <LabelledCell tr={tr} column="visits.field.topics">
+                {v.topics}
+              </LabelledCell>
+              <LabelledCell tr={tr} column="visits.field.followUps">
+                {v.followUps}
+              </LabelledCell>
+              <LabelledCell tr={tr} column="visits.field.referral">
+                {tr.text(`visits.referral.${v.referral}`)}
+              </LabelledCell>
+              <td>
+                <a
+                  class="button button-quiet"
+                  href={`/studies/${studyId}/communities/${communityId}/visits/${v.id}/delete`}
+                >
+                  {tr.text('visits.delete', {
+                    date: tr.date(`${v.visitedOn}T12:00:00Z`),
+                  })}
+                </a>
+              </td>
             </tr>
-          </thead>
-          <tbody>
-            {visits.map((v) => (
-              <tr data-visit={v.id}>
-                <th scope="row">{tr.date(`${v.visitedOn}T12:00:00Z`)}</th>
-                <td data-label={tr.t('visits.field.language')}>{v.language}</td>
-                <td class="numeric" data-label={tr.t('visits.field.peopleReached')}>
-                  {tr.number(v.peopleReached)}
-                </td>
-                <td data-label={tr.t('visits.field.topics')}>{v.topics}</td>
-                <td data-label={tr.t('visits.field.followUps')}>{v.followUps}</td>
-                <td data-label={tr.t('visits.field.referral')}>
-                  {tr.text(`visits.referral.${v.referral}`)}
-                </td>
-                <td>
-                  <a
-                    class="button button-quiet"
-                    href={`/studies/${studyId}/communities/${communityId}/visits/${v.id}/delete`}
-                  >
-                    {tr.text('visits.delete', {
-                      date: tr.date(`${v.visitedOn}T12:00:00Z`),
-                    })}
-                  </a>
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+          ))}
+        </DataTable>
       )}
       <p>
         <a href={`/studies/${studyId}/communities/${communityId}/visits/new`}>
@@ -97,14 +101,13 @@ export function VisitFormView(props: VisitFormViewProps) {
   const described = (name: string) =>
     issuesOf(name).length > 0 ? `visit-${name}-problems` : undefined;
   return (
-    <PageShell
+    <TitledPage
       page={props.page}
-      title={tr.t('visits.formTitle', { name: props.communityName })}
-      titleLang={tr.fallbackLang('visits.formTitle')}
+      titleKey="visits.formTitle"
+      titleValues={{ name: props.communityName }}
       study={{ id: props.studyId, name: props.studyName }}
       section="overview"
     >
-      <h1>{tr.text('visits.formTitle', { name: props.communityName })}</h1>
       {issues.length > 0 && (
         <p role="alert" class="form-problems">
           {tr.text('visits.problems')}
@@ -165,6 +168,6 @@ export function VisitFormView(props: VisitFormViewProps) {
           {tr.text('visits.backToCommunity', { name: props.communityName })}
         </a>
       </p>
-    </PageShell>
+    </TitledPage>
   );
 }

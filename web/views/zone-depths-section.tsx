@@ -1,5 +1,6 @@
 import type { ZoneDepthSummary } from '../data/zone-depth-summary.ts';
 import type { Translator } from '../text/translator.ts';
+import { DataTable, LabelledCell } from '../components/data-table.tsx';
 
 export interface ZoneDepthsSectionProps {
   readonly tr: Translator;
@@ -27,54 +28,46 @@ function basisText(tr: Translator, basis: ZoneDepthSummary['basis']): string {
  */
 export function ZoneDepthsSection(props: ZoneDepthsSectionProps) {
   const { tr, zones } = props;
-  const col = (key: Parameters<Translator['t']>[0]) => tr.t(key);
   return (
     <section aria-labelledby="zone-depths-heading" class="zone-depths">
       <h2 id="zone-depths-heading">{tr.text('zoneDepths.heading')}</h2>
       <p>
         {tr.text('zoneDepths.intro')} <a href={props.resultsUrl}>{tr.text('zoneDepths.json')}</a>
       </p>
-      <table class="data-table zone-depths-table">
-        <caption>{tr.text('zoneDepths.heading')}</caption>
-        <thead>
-          <tr>
-            <th scope="col">{tr.text('zoneDepths.col.zone')}</th>
-            <th scope="col" class="numeric">
-              {tr.text('zoneDepths.col.cells')}
-            </th>
-            <th scope="col" class="numeric">
-              {tr.text('zoneDepths.col.shallowest')}
-            </th>
-            <th scope="col" class="numeric">
-              {tr.text('zoneDepths.col.median')}
-            </th>
-            <th scope="col" class="numeric">
-              {tr.text('zoneDepths.col.deepest')}
-            </th>
-            <th scope="col">{tr.text('zoneDepths.col.from')}</th>
+      <DataTable
+        tr={tr}
+        class="zone-depths-table"
+        caption={tr.text('zoneDepths.heading')}
+        columns={[
+          'zoneDepths.col.zone',
+          { key: 'zoneDepths.col.cells', numeric: true },
+          { key: 'zoneDepths.col.shallowest', numeric: true },
+          { key: 'zoneDepths.col.median', numeric: true },
+          { key: 'zoneDepths.col.deepest', numeric: true },
+          'zoneDepths.col.from',
+        ]}
+      >
+        {zones.map((z) => (
+          <tr data-source={z.sourceId}>
+            <th scope="row">{z.name}</th>
+            <LabelledCell tr={tr} column="zoneDepths.col.cells" numeric>
+              {tr.number(z.cells)}
+            </LabelledCell>
+            <LabelledCell tr={tr} column="zoneDepths.col.shallowest" numeric>
+              {km(tr, z.shallowestKm)}
+            </LabelledCell>
+            <LabelledCell tr={tr} column="zoneDepths.col.median" numeric>
+              {km(tr, z.medianKm)}
+            </LabelledCell>
+            <LabelledCell tr={tr} column="zoneDepths.col.deepest" numeric>
+              {km(tr, z.deepestKm)}
+            </LabelledCell>
+            <LabelledCell tr={tr} column="zoneDepths.col.from">
+              {basisText(tr, z.basis)}
+            </LabelledCell>
           </tr>
-        </thead>
-        <tbody>
-          {zones.map((z) => (
-            <tr data-source={z.sourceId}>
-              <th scope="row">{z.name}</th>
-              <td class="numeric" data-label={col('zoneDepths.col.cells')}>
-                {tr.number(z.cells)}
-              </td>
-              <td class="numeric" data-label={col('zoneDepths.col.shallowest')}>
-                {km(tr, z.shallowestKm)}
-              </td>
-              <td class="numeric" data-label={col('zoneDepths.col.median')}>
-                {km(tr, z.medianKm)}
-              </td>
-              <td class="numeric" data-label={col('zoneDepths.col.deepest')}>
-                {km(tr, z.deepestKm)}
-              </td>
-              <td data-label={col('zoneDepths.col.from')}>{basisText(tr, z.basis)}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
+        ))}
+      </DataTable>
     </section>
   );
 }

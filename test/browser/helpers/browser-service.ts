@@ -106,3 +106,17 @@ export async function screenshotTwoWidths(
   await page.screenshot({ path: join(ARTIFACTS, `${name}-390.png`), fullPage: true });
   await page.setViewportSize(desktop);
 }
+
+/** Chooses a file in a page's upload field `#<upload>-file` and sends the field's form. */
+export async function sendFile(
+  page: Page,
+  upload: string,
+  file: { readonly name: string; readonly mimeType: string; readonly text: string | Uint8Array },
+): Promise<void> {
+  await page.setInputFiles(`#${upload}-file`, {
+    name: file.name,
+    mimeType: file.mimeType,
+    buffer: Buffer.from(file.text),
+  });
+  await page.locator(`form:has(#${upload}-file) button[type="submit"]`).click();
+}

@@ -1,8 +1,10 @@
 import type { Hono } from 'hono';
+import { afterAll, beforeAll, expect } from 'vitest';
 import { createApp } from '../../../api/service/app.ts';
 import type { ServiceContext } from '../../../api/operations/service-context.ts';
 import { createPages } from '../../../web/pages.tsx';
 import { tempDir } from '../../service/helpers/service-process.ts';
+import { smallStudy } from '../../service/helpers/small-study.ts';
 import { closeServiceContext, testServiceContext } from '../../service/helpers/test-context.ts';
 
 /** The service with its pages, in-process (app.request), on a temporary database. */
@@ -75,4 +77,48 @@ export function textOfId(html: string, id: string): string | undefined {
   const tag = /^<(\w+)/.exec(html.slice(open))?.[1] as string;
   const end = html.indexOf(`</${tag}>`, start);
   return html.slice(html.indexOf('>', start) + 1, end).replace(/<[^>]+>/g, '');
+}
+
+/** What a route test file shares: the pages on a temporary database with one small study saved. */
+export interface SmallStudyPages {
+  page: PageApp;
+  studyId: string;
+}
+
+/**
+ * Registers the file's beforeAll and afterAll: the pages (startPageApp) with smallStudy(name)
+ * saved in the store, filled in before the file's tests run and closed after them.
+ */
+export function pagesWithSmallStudy(name: string): SmallStudyPages {
+  const shared: Partial<SmallStudyPages> = {};
+  beforeAll(() => {
+    shared.page = startPageApp();
+    shared.studyId = shared.page.ctx.store.studies.create({
+      name,
+      document: JSON.stringify(smallStudy(name)),
+    }).id;
+  });
+  afterAll(async () => shared.page?.close());
+  return shared as SmallStudyPages;
+}
+
+/**
+ * Saves `study` in the pages' store and screens it with the overview's button (a form post),
+ * waiting until the run is done; gives the study's and the run's ids.
+ */
+export async function saveAndScreen(
+  page: PageApp,
+  study: { readonly name: string },
+): Promise<{ readonly id: string; readonly runId: string }> {
+  const id = page.ctx.store.studies.create({
+    name: study.name,
+    document: JSON.stringify(study),
+  }).id;
+  const started = await page.app.request(`/studies/${id}/screen`, {
+    method: 'POST',
+    body: new URLSearchParams(),
+  });
+  const runId = (started.headers.get('location') as string).split('/').at(-1) as string;
+  expect(await runFinished(page.ctx, runId)).toBe('done');
+  return { id, runId };
 }

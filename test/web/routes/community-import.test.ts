@@ -1,7 +1,6 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { smallStudy } from '../../service/helpers/small-study.ts';
+import { describe, expect, test } from 'vitest';
 import { kmlText, xlsxBytes } from '../../study/community-files/fixtures.ts';
-import { runFinished, startPageApp, type PageApp } from '../helpers/page-app.ts';
+import { runFinished, pagesWithSmallStudy } from '../helpers/page-app.ts';
 
 /**
  * The editor's communities upload with files people keep (app.request): a workbook whose
@@ -9,21 +8,14 @@ import { runFinished, startPageApp, type PageApp } from '../helpers/page-app.ts'
  * the file back, saves nothing until they are chosen; then the other columns appear on the
  * community page.
  */
-let page: PageApp;
-let studyId: string;
+const pages = pagesWithSmallStudy('Import fixture');
 
-beforeAll(() => {
-  page = startPageApp();
-  studyId = page.ctx.store.studies.create({
-    name: 'Import fixture',
-    document: JSON.stringify(smallStudy('Import fixture')),
-  }).id;
-});
-afterAll(async () => page.close());
-
-const document = () => page.ctx.store.studies.get(studyId)?.document;
+const document = () => pages.page.ctx.store.studies.get(pages.studyId)?.document;
 const upload = (form: FormData) =>
-  page.app.request(`/studies/${studyId}/edit/communities-csv`, { method: 'POST', body: form });
+  pages.page.app.request(`/studies/${pages.studyId}/edit/communities-csv`, {
+    method: 'POST',
+    body: form,
+  });
 
 /** The value of the hidden input `name` in a page. */
 const hidden = (html: string, name: string) =>
@@ -74,19 +66,21 @@ describe('communities upload from the editor', () => {
     const saved = await upload(pick);
     expect(saved.status).toBe(303);
     expect(JSON.parse(document() as string).communities).toBe('communities.csv');
-    expect(page.ctx.store.studies.latestFile(studyId, 'communities-csv')).toBe(
+    expect(pages.page.ctx.store.studies.latestFile(pages.studyId, 'communities-csv')).toBe(
       'id,name,lon,lat,vs30,siteClass,population,coastal,elevationM,School,Airstrip\ntest-cove,Test Cove,-140.2,-47.4,,C,,false,,"primary, 40 pupils",none\n',
     );
   });
 
   test('the kept columns are shown on the community page', async () => {
-    const started = await page.app.request(`/studies/${studyId}/screen`, {
+    const started = await pages.page.app.request(`/studies/${pages.studyId}/screen`, {
       method: 'POST',
       body: new URLSearchParams(),
     });
     const runId = (started.headers.get('location') as string).split('/').at(-1) as string;
-    expect(await runFinished(page.ctx, runId)).toBe('done');
-    const html = await (await page.app.request(`/studies/${studyId}/communities/test-cove`)).text();
+    expect(await runFinished(pages.page.ctx, runId)).toBe('done');
+    const html = await (
+      await pages.page.app.request(`/studies/${pages.studyId}/communities/test-cove`)
+    ).text();
     expect(html).toContain('<dt>School</dt><dd>primary, 40 pupils</dd>');
     expect(html).toContain('<dt>Airstrip</dt><dd>none</dd>');
   });

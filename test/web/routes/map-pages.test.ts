@@ -60,6 +60,19 @@ beforeAll(async () => {
 });
 afterAll(async () => page.close());
 
+/** A map record of the spread study (475 years, PGA) stored without computing it, at `spacingKm`. */
+const storedMapRecord = (spacingKm: number) =>
+  page.ctx.store.maps.create({
+    studyId: spreadId,
+    request: {
+      measure: 'PGA',
+      quantity: { kind: 'return-period', returnPeriodYears: 475 },
+      spacingKm,
+      vs30: 760,
+    },
+    inputHash: 'h',
+  });
+
 describe('the hazard map on the overview', () => {
   test("before any map: the form offers the study's measures and return periods, the suggested spacing with its rule, the grid's Vs30", async () => {
     const response = await get(`/studies/${demoId}`);
@@ -132,16 +145,7 @@ describe('the hazard map on the overview', () => {
       }),
     );
     // The page of a map still queued (a record made here, so it stays queued while it is read): the bar and the refresh link.
-    const waiting = page.ctx.store.maps.create({
-      studyId: spreadId,
-      request: {
-        measure: 'PGA',
-        quantity: { kind: 'return-period', returnPeriodYears: 475 },
-        spacingKm: 1,
-        vs30: 760,
-      },
-      inputHash: 'h',
-    });
+    const waiting = storedMapRecord(1);
     const queued = await (await get(`/studies/${spreadId}/maps/${waiting.id}`)).text();
     expectPlainPage(queued);
     expect(queued).toContain('data-status="queued"');
@@ -250,16 +254,7 @@ describe('the hazard map on the overview', () => {
       name: record.name,
       document: JSON.stringify(edited),
     });
-    const failed = page.ctx.store.maps.create({
-      studyId: spreadId,
-      request: {
-        measure: 'PGA',
-        quantity: { kind: 'return-period', returnPeriodYears: 475 },
-        spacingKm: 1,
-        vs30: 760,
-      },
-      inputHash: 'h',
-    });
+    const failed = storedMapRecord(1);
     page.ctx.store.maps.finishWithout(failed.id, 'failed', 'a failure for the test');
     let html = await (await get(`/studies/${spreadId}`)).text();
     expect(html).toContain(en.t('hazardMap.stale'));
@@ -267,16 +262,7 @@ describe('the hazard map on the overview', () => {
     expect(html).toContain('class="hazard-cells"');
 
     // A stored map record standing in for one over the drawing limit (a page behaviour, not a computation).
-    const big = page.ctx.store.maps.create({
-      studyId: spreadId,
-      request: {
-        measure: 'PGA',
-        quantity: { kind: 'return-period', returnPeriodYears: 475 },
-        spacingKm: 0.5,
-        vs30: 760,
-      },
-      inputHash: 'h',
-    });
+    const big = storedMapRecord(0.5);
     const description = {
       measure: 'PGA',
       unit: 'g' as const,

@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { TextKey } from '../../../web/text/text-key.ts';
 import { translator } from '../../../web/text/translator.ts';
 import { cutDownDemo } from '../helpers/cut-down-demo.ts';
-import { runFinished, startPageApp, type PageApp } from '../helpers/page-app.ts';
+import { saveAndScreen, startPageApp, type PageApp } from '../helpers/page-app.ts';
 
 /**
  * Session material through app.request(), on a cut-down demo (two villages, the interface
@@ -19,13 +19,7 @@ const SOURCES = ['orle-interface', 'vennick-fault', 'pellow-thrust'];
 beforeAll(async () => {
   page = startPageApp();
   const study = cutDownDemo('Demo coast, material', ['harbour-point', 'vennick-bay'], SOURCES);
-  id = page.ctx.store.studies.create({ name: study.name, document: JSON.stringify(study) }).id;
-  const started = await page.app.request(`/studies/${id}/screen`, {
-    method: 'POST',
-    body: new URLSearchParams(),
-  });
-  const runId = (started.headers.get('location') as string).split('/').at(-1) as string;
-  expect(await runFinished(page.ctx, runId)).toBe('done');
+  ({ id } = await saveAndScreen(page, study));
 }, 120_000);
 afterAll(async () => page?.close());
 

@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { LEVELS_G, smallStudy } from '../../service/helpers/small-study.ts';
-import { startPageApp, type PageApp } from '../helpers/page-app.ts';
+import { describe, expect, test } from 'vitest';
+import { LEVELS_G } from '../../service/helpers/small-study.ts';
+import { pagesWithSmallStudy } from '../helpers/page-app.ts';
 
 /**
  * The ground-motion branches and settings in the editor (app.request): a saved change writes
@@ -8,25 +8,18 @@ import { startPageApp, type PageApp } from '../helpers/page-app.ts';
  * offer, a setting that does not exist and a bad setting value are each shown beside their
  * field (or at the top, naming it) with status 422, and nothing is written.
  */
-let page: PageApp;
-let studyId: string;
-
-beforeAll(() => {
-  page = startPageApp();
-  studyId = page.ctx.store.studies.create({
-    name: 'Motion fixture',
-    document: JSON.stringify(smallStudy('Motion fixture')),
-  }).id;
-});
-afterAll(async () => page.close());
+const pages = pagesWithSmallStudy('Motion fixture');
 
 const post = (fields: Record<string, string>) =>
-  page.app.request(`/studies/${studyId}/edit/ground-motion`, {
+  pages.page.app.request(`/studies/${pages.studyId}/edit/ground-motion`, {
     method: 'POST',
     body: new URLSearchParams(fields),
   });
 const stored = () =>
-  JSON.parse(page.ctx.store.studies.get(studyId)?.document ?? '{}') as Record<string, unknown>;
+  JSON.parse(pages.page.ctx.store.studies.get(pages.studyId)?.document ?? '{}') as Record<
+    string,
+    unknown
+  >;
 
 /** The form as the page posts it for the fixture: its one crustal branch and its settings. */
 const AS_SHOWN = {
@@ -40,7 +33,7 @@ const AS_SHOWN = {
 
 describe('the ground-motion page', () => {
   test('lists the branches by setting and offers the models of each setting', async () => {
-    const response = await page.app.request(`/studies/${studyId}/edit/ground-motion`);
+    const response = await pages.page.app.request(`/studies/${pages.studyId}/edit/ground-motion`);
     expect(response.status).toBe(200);
     const html = await response.text();
     expect(html).toMatch(/<tr data-model="Cornell79">/);
@@ -51,12 +44,12 @@ describe('the ground-motion page', () => {
     expect(crustalAdd).not.toContain('AGA16');
     expect(html).toMatch(/name="branch\.interface\.1\.model" value="AGA16"/);
     expect(html).toMatch(/id="setting-returnPeriodsYears"[^>]*value="475"/);
-    const editor = await (await page.app.request(`/studies/${studyId}/edit`)).text();
-    expect(editor).toContain(`href="/studies/${studyId}/edit/ground-motion"`);
+    const editor = await (await pages.page.app.request(`/studies/${pages.studyId}/edit`)).text();
+    expect(editor).toContain(`href="/studies/${pages.studyId}/edit/ground-motion"`);
   });
 
   test('weights that do not add up to 1 are shown with their setting and nothing is saved', async () => {
-    const before = page.ctx.store.studies.get(studyId)?.document;
+    const before = pages.page.ctx.store.studies.get(pages.studyId)?.document;
     const response = await post({ ...AS_SHOWN, 'branch.crustal.0.weight': '0,6' });
     expect(response.status).toBe(422);
     const html = await response.text();
@@ -69,21 +62,21 @@ describe('the ground-motion page', () => {
     expect(await notNumber.text()).toMatch(
       /id="branch-crustal-0-weight-problem"[^>]*>.*expected a number in \(0, 1\], got &quot;half&quot;/s,
     );
-    expect(page.ctx.store.studies.get(studyId)?.document).toBe(before);
+    expect(pages.page.ctx.store.studies.get(pages.studyId)?.document).toBe(before);
   });
 
   test('a model the engine does not offer is named beside its row', async () => {
-    const before = page.ctx.store.studies.get(studyId)?.document;
+    const before = pages.page.ctx.store.studies.get(pages.studyId)?.document;
     const response = await post({ ...AS_SHOWN, 'branch.crustal.0.model': 'NoSuchModel' });
     expect(response.status).toBe(422);
     expect(await response.text()).toMatch(
       /id="branch-crustal-0-model-problem"[^>]*>.*unknown model &quot;NoSuchModel&quot;; expected one of BSSA14/s,
     );
-    expect(page.ctx.store.studies.get(studyId)?.document).toBe(before);
+    expect(pages.page.ctx.store.studies.get(pages.studyId)?.document).toBe(before);
   });
 
   test('a tectonic setting that does not exist is refused, naming it', async () => {
-    const before = page.ctx.store.studies.get(studyId)?.document;
+    const before = pages.page.ctx.store.studies.get(pages.studyId)?.document;
     const response = await post({
       ...AS_SHOWN,
       'branch.volcanic.0.model': 'Cornell79',
@@ -93,7 +86,7 @@ describe('the ground-motion page', () => {
     expect(await response.text()).toMatch(
       /id="form-problems".*groundMotion\.volcanic: unknown tectonic setting &quot;volcanic&quot;; expected one of crustal, interface, intraslab/s,
     );
-    expect(page.ctx.store.studies.get(studyId)?.document).toBe(before);
+    expect(pages.page.ctx.store.studies.get(pages.studyId)?.document).toBe(before);
   });
 
   test('a setting out of range is shown beside its field', async () => {
@@ -119,7 +112,7 @@ describe('the ground-motion page', () => {
     });
     expect(response.status).toBe(303);
     expect(response.headers.get('location')).toBe(
-      `/studies/${studyId}/edit?saved=1#motion-heading`,
+      `/studies/${pages.studyId}/edit?saved=1#motion-heading`,
     );
     const doc = stored();
     // The intraslab rows posted are the catalog's defaults, which the study had left implicit.

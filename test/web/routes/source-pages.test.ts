@@ -1,23 +1,12 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { smallStudy } from '../../service/helpers/small-study.ts';
-import { startPageApp, type PageApp } from '../helpers/page-app.ts';
+import { describe, expect, test } from 'vitest';
+import { pagesWithSmallStudy } from '../helpers/page-app.ts';
 
 /**
  * One source at a time in the editor (app.request): a fault added from typed "lat, lon" lines
  * keeps the point source that was there; a bad dip is shown beside its field and nothing is
  * saved; an edit changes only its own source; a removal leaves the others.
  */
-let page: PageApp;
-let studyId: string;
-
-beforeAll(() => {
-  page = startPageApp();
-  studyId = page.ctx.store.studies.create({
-    name: 'Source fixture',
-    document: JSON.stringify(smallStudy('Source fixture')),
-  }).id;
-});
-afterAll(async () => page.close());
+const pages = pagesWithSmallStudy('Source fixture');
 
 const FAULT = {
   kind: 'fault',
@@ -37,10 +26,10 @@ const FAULT = {
 };
 
 const post = (path: string, fields: Record<string, string>) =>
-  page.app.request(path, { method: 'POST', body: new URLSearchParams(fields) });
+  pages.page.app.request(path, { method: 'POST', body: new URLSearchParams(fields) });
 const features = () =>
   (
-    JSON.parse(page.ctx.store.studies.get(studyId)?.document ?? '{}') as {
+    JSON.parse(pages.page.ctx.store.studies.get(pages.studyId)?.document ?? '{}') as {
       sources: {
         features: { geometry: { coordinates: unknown }; properties: Record<string, unknown> }[];
       };
@@ -49,16 +38,19 @@ const features = () =>
 
 describe('single sources in the editor', () => {
   test('a bad dip is shown beside its field and nothing is saved', async () => {
-    const before = page.ctx.store.studies.get(studyId)?.document;
-    const response = await post(`/studies/${studyId}/edit/new-source`, { ...FAULT, dip: '120' });
+    const before = pages.page.ctx.store.studies.get(pages.studyId)?.document;
+    const response = await post(`/studies/${pages.studyId}/edit/new-source`, {
+      ...FAULT,
+      dip: '120',
+    });
     expect(response.status).toBe(422);
     const html = await response.text();
     expect(html).toMatch(/id="source-dip-problem"[^>]*>.*expected a number in \(0, 90\]/s);
-    expect(page.ctx.store.studies.get(studyId)?.document).toBe(before);
+    expect(pages.page.ctx.store.studies.get(pages.studyId)?.document).toBe(before);
   });
 
   test('a fault from "lat, lon" lines is added beside the point source', async () => {
-    const response = await post(`/studies/${studyId}/edit/new-source`, FAULT);
+    const response = await post(`/studies/${pages.studyId}/edit/new-source`, FAULT);
     expect(response.status).toBe(303);
     const list = features();
     expect(list.map((f) => f.properties.id)).toEqual(['spot-below', 'test-fault']);
@@ -73,17 +65,17 @@ describe('single sources in the editor', () => {
       mMax: 7,
       rate: 0.02,
     });
-    const editor = await (await page.app.request(`/studies/${studyId}/edit`)).text();
+    const editor = await (await pages.page.app.request(`/studies/${pages.studyId}/edit`)).text();
     expect(editor).toContain('data-source="test-fault"');
     expect(editor).toContain('<svg');
   });
 
   test('editing one source keeps the other; removing one leaves the other', async () => {
     const form = await (
-      await page.app.request(`/studies/${studyId}/edit/sources/test-fault`)
+      await pages.page.app.request(`/studies/${pages.studyId}/edit/sources/test-fault`)
     ).text();
     expect(form).toContain('-140.3 -47.3');
-    const response = await post(`/studies/${studyId}/edit/sources/test-fault`, {
+    const response = await post(`/studies/${pages.studyId}/edit/sources/test-fault`, {
       ...FAULT,
       coordinates: '-140.3 -47.3\n-140.1 -47.5',
       order: 'lon-lat',
@@ -94,7 +86,7 @@ describe('single sources in the editor', () => {
       ['spot-below', undefined],
       ['test-fault', 60],
     ]);
-    const removed = await post(`/studies/${studyId}/edit/sources/spot-below/remove`, {});
+    const removed = await post(`/studies/${pages.studyId}/edit/sources/spot-below/remove`, {});
     expect(removed.status).toBe(303);
     expect(features().map((f) => f.properties.id)).toEqual(['test-fault']);
   });

@@ -1,7 +1,6 @@
-import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { DEMO_STUDY_URL } from '../../../api/operations/demo-seed.ts';
-import { runFinished, startPageApp, type PageApp } from '../helpers/page-app.ts';
+import { cutDownDemo } from '../helpers/cut-down-demo.ts';
+import { saveAndScreen, startPageApp, type PageApp } from '../helpers/page-app.ts';
 
 /**
  * Visit priority, trip plans and visit records through app.request(), on a cut-down demo
@@ -15,29 +14,12 @@ let runId: string;
 
 beforeAll(async () => {
   page = startPageApp();
-  const demo = JSON.parse(readFileSync(DEMO_STUDY_URL, 'utf8')) as Record<string, any>;
-  const { terrain: _terrain, ...rest } = demo;
-  const study = {
-    ...rest,
-    name: 'Demo coast, visits',
-    communities: demo.communities.filter((c: { id: string }) =>
-      ['harbour-point', 'vennick-bay', 'lisk-head'].includes(c.id),
-    ),
-    sources: {
-      type: 'FeatureCollection',
-      features: demo.sources.features.filter(
-        (f: { properties: { id: string } }) => f.properties.id === 'orle-interface',
-      ),
-    },
-    settings: { ...demo.settings, measures: ['PGA'], magnitudeStep: 0.5, horizonsYears: [50] },
-  };
-  id = page.ctx.store.studies.create({ name: study.name, document: JSON.stringify(study) }).id;
-  const started = await page.app.request(`/studies/${id}/screen`, {
-    method: 'POST',
-    body: new URLSearchParams(),
-  });
-  runId = (started.headers.get('location') as string).split('/').at(-1) as string;
-  expect(await runFinished(page.ctx, runId)).toBe('done');
+  const study = cutDownDemo(
+    'Demo coast, visits',
+    ['harbour-point', 'vennick-bay', 'lisk-head'],
+    ['orle-interface'],
+  );
+  ({ id, runId } = await saveAndScreen(page, study));
 }, 120_000);
 afterAll(async () => page?.close());
 
