@@ -88,6 +88,25 @@ export function mechanismOfRake(rakeDeg: number): Mechanism {
   return 'strike-slip';
 }
 
+/**
+ * Whether a source's upper and lower depths (km), where both are given, run downwards; if not,
+ * the issue at lowerDepthKm says so.
+ */
+function depthsInOrder(
+  upperDepthKm: number | undefined,
+  lowerDepthKm: number | undefined,
+  propsPath: readonly PropertyKey[],
+  issues: IssueList,
+): boolean {
+  if (upperDepthKm === undefined || lowerDepthKm === undefined || upperDepthKm < lowerDepthKm)
+    return true;
+  issues.add(
+    [...propsPath, 'lowerDepthKm'],
+    `expected lowerDepthKm greater than upperDepthKm (${upperDepthKm} km), got ${lowerDepthKm} km`,
+  );
+  return false;
+}
+
 /** Validates one GeoJSON source feature at `path`; every problem goes to `issues`. */
 export function readSource(
   raw: unknown,
@@ -207,13 +226,7 @@ export function readSource(
   if (geometry.kind === 'fault') {
     const f = shape as z.output<typeof faultSchema>;
     const upperDepthKm = f.upperDepthKm ?? 0;
-    if (upperDepthKm >= f.lowerDepthKm) {
-      issues.add(
-        [...propsPath, 'lowerDepthKm'],
-        `expected lowerDepthKm greater than upperDepthKm (${upperDepthKm} km), got ${f.lowerDepthKm} km`,
-      );
-      return undefined;
-    }
+    if (!depthsInOrder(upperDepthKm, f.lowerDepthKm, propsPath, issues)) return undefined;
     return {
       ...base,
       kind: 'fault',
@@ -225,17 +238,7 @@ export function readSource(
     };
   }
   const layer = shape as { upperDepthKm?: number; lowerDepthKm?: number };
-  if (
-    layer.upperDepthKm !== undefined &&
-    layer.lowerDepthKm !== undefined &&
-    layer.upperDepthKm >= layer.lowerDepthKm
-  ) {
-    issues.add(
-      [...propsPath, 'lowerDepthKm'],
-      `expected lowerDepthKm greater than upperDepthKm (${layer.upperDepthKm} km), got ${layer.lowerDepthKm} km`,
-    );
-    return undefined;
-  }
+  if (!depthsInOrder(layer.upperDepthKm, layer.lowerDepthKm, propsPath, issues)) return undefined;
   const seismogenic = {
     ...(layer.upperDepthKm !== undefined ? { upperDepthKm: layer.upperDepthKm } : {}),
     ...(layer.lowerDepthKm !== undefined ? { lowerDepthKm: layer.lowerDepthKm } : {}),

@@ -60,7 +60,8 @@ const toRupture = (placed: PlacedRupture, binRate: number): Rupture =>
  * increasing order, every position of that magnitude, with the bin's annual rate (per year;
  * the rupture's own is that times its share); a zone's or point source's earthquakes from
  * FINITE_RUPTURE_MIN_MAGNITUDE up as their virtual ruptures (a zone cell's one strike, a point
- * source's every strike in turn). Fault areas for moment balancing are the whole surface's (length x down-dip width). The one walk over a source that both the Rupture objects
+ * source's every strike in turn). Fault areas for moment balancing are the whole surface's
+ * (length x down-dip width). The one walk over a source that both the Rupture objects
  * (discretiseSource) and the fast path's table (hazard/study-rupture-table.ts) are built from.
  */
 export function visitSourceRuptures(
