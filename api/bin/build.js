@@ -2,9 +2,10 @@
 // JavaScript in dist/, one file per source file in the same tree, so the CLI, the service and
 // the worker threads start without a TypeScript loader. esbuild only strips types (the
 // type-check is `npm run typecheck`). Files the code reads beside itself (package.json for the
-// version, the demo data, the ground-motion models' coefficient tables, the SQL migrations, the
-// page styles and script, the text bundles) are copied so that every relative path stays the
-// same as in the source tree.
+// version, the demo data, the SQL migrations, the page styles and script, the text bundles) are
+// copied so that every relative path stays the same as in the source tree. The ground-motion
+// models' coefficient tables (JSON imported by their modules) are inlined into those modules:
+// esbuild would otherwise drop the import attribute Node needs to load JSON.
 import { cpSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join, relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -26,12 +27,12 @@ function sourceFiles(dir) {
 }
 
 // Each file stays its own module: relative imports are left to the compiled neighbour (".ts"
-// becomes ".js"), packages are left to node_modules.
+// becomes ".js"), packages are left to node_modules; JSON data is inlined.
 const keepModulesApart = {
   name: 'keep-modules-apart',
   setup(b) {
     b.onResolve({ filter: /^\.\.?\// }, (args) =>
-      args.kind === 'entry-point'
+      args.kind === 'entry-point' || args.path.endsWith('.json')
         ? undefined
         : { path: args.path.replace(/\.tsx?$/, '.js'), external: true },
     );
@@ -60,13 +61,7 @@ writeFileSync(
   join(OUT, 'package.json'),
   `${JSON.stringify({ name: pkg.name, version: pkg.version, private: true, type: 'module' }, null, 2)}\n`,
 );
-for (const dir of [
-  'data-demo',
-  'api/engine/motion',
-  'api/store/migrations',
-  'web/static',
-  'web/text/bundles',
-])
+for (const dir of ['data-demo', 'api/store/migrations', 'web/static', 'web/text/bundles'])
   cpSync(join(ROOT, dir), join(OUT, dir), {
     recursive: true,
     filter: (src) => !src.endsWith('.ts'),

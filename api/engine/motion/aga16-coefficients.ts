@@ -6,7 +6,7 @@
  * Source of the numbers: the paper's Table 3 (period-dependent coefficients: Vlin, b, θ1, θ2,
  * θ6, θ7, θ8, θ10–θ16; θ7, θ8, θ15, θ16 are the backarc terms, kept for the record: Tremora
  * takes every site as forearc), its period-independent constants (C1, θ3, θ4, θ5, θ9, C4, n,
- * c, φ, τ) and its ΔC1 table. Table 3 is kept in `aga16.csv` beside this module, copied
+ * c, φ, τ) and its ΔC1 table. Table 3 is kept in `aga16.json` beside this module, copied
  * unchanged from the project's reference record; the constants below are copied digit for digit
  * from the same record (`aga16.csv` and `aga16-constants.csv` of the shared GMM reference data; its README gives the
  * provenance: pygmm 0.8.0's data file "Coefficients from Table 3", cross-checked against three
@@ -26,6 +26,7 @@
  * ln(PGA + c) (PGA in g); θ13 per magnitude unit squared; Vlin m/s; φ, τ natural-log units.
  */
 import { readCoefficientTable, rowOfPeriod, type CoefficientRow } from './coefficient-table.ts';
+import AGA16_TABLE from './aga16.json' with { type: 'json' };
 
 /** Column names of Table 3, in the paper's order. */
 export const AGA16_COLUMNS = [
@@ -49,7 +50,11 @@ export const AGA16_COLUMNS = [
 export type Aga16Row = CoefficientRow<(typeof AGA16_COLUMNS)[number]>;
 
 /** Every row: PGA, then the spectral periods increasing. */
-export const AGA16_ROWS: readonly Aga16Row[] = readCoefficientTable('aga16.csv', AGA16_COLUMNS);
+export const AGA16_ROWS: readonly Aga16Row[] = readCoefficientTable(
+  'aga16.json',
+  AGA16_TABLE,
+  AGA16_COLUMNS,
+);
 
 /** The PGA row (periodS 0). */
 export const AGA16_PGA: Aga16Row = rowOfPeriod('AGA16', AGA16_ROWS, 0);

@@ -5,7 +5,7 @@
  *
  * Source of the numbers: the paper's tables of coefficients as given in its electronic
  * supplement (the coefficient file `ask14_coeffs.m.txt`), rows PGV, PGA and the 22 spectral
- * periods 0.01–10 s, kept in `ask14.csv` beside this module (copied unchanged from
+ * periods 0.01–10 s, kept in `ask14.json` beside this module (copied unchanged from
  * `../shared/reference/gmm/ask14.csv`); the
  * period-independent hanging-wall constants (a2HW, h1–h3) and φamp from
  * `../shared/reference/gmm/ask14-constants.csv`. That reference README records the provenance:
@@ -25,6 +25,7 @@
  * coefficients in ln units per unit of the quantity they multiply (see ask14.ts).
  */
 import { readCoefficientTable, rowOfPeriod } from './coefficient-table.ts';
+import ASK14_TABLE from './ask14.json' with { type: 'json' };
 
 /** One row of the table. `periodS` is 0 for PGA and −1 for PGV. */
 export interface Ask14Row {
@@ -154,7 +155,11 @@ export const ASK14_CONSTANTS = Object.freeze({
 });
 
 /** Every row: PGV, PGA, then the spectral periods increasing. */
-export const ASK14_ROWS: readonly Ask14Row[] = readCoefficientTable('ask14.csv', ASK14_COLUMNS);
+export const ASK14_ROWS: readonly Ask14Row[] = readCoefficientTable(
+  'ask14.json',
+  ASK14_TABLE,
+  ASK14_COLUMNS,
+);
 
 export const ASK14_PGV: Ask14Row = rowOfPeriod('ASK14', ASK14_ROWS, -1);
 export const ASK14_PGA: Ask14Row = rowOfPeriod('ASK14', ASK14_ROWS, 0);

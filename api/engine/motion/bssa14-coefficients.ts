@@ -5,7 +5,7 @@
  *
  * Source of the numbers: the paper's electronic-supplement table of coefficients with the
  * revised f4 column of 2014-07-15, all 107 rows (PGV, PGA and 105 periods 0.01–10 s), kept in
- * `bssa14.csv` beside this module, copied unchanged from the project's reference record (`bssa14.csv` of the shared GMM reference
+ * `bssa14.json` beside this module, its cells copied as written from the project's reference record (`bssa14.csv` of the shared GMM reference
  * data; its README gives the provenance: pygmm 0.8.0's data file "Revised 2014-07-15 / Revised
  * coefficients", cross-checked cell by cell against two other public records, every difference
  * listed and resolved there). Column order as in the supplement; the period-independent
@@ -26,6 +26,7 @@
  * (Rjb); ΔφR, ΔφV, φ1, φ2, τ1, τ2 natural-log standard deviations.
  */
 import { readCoefficientTable, rowOfPeriod, type CoefficientRow } from './coefficient-table.ts';
+import BSSA14_TABLE from './bssa14.json' with { type: 'json' };
 
 /** Column names of the table, in the supplement's order. */
 export const BSSA14_COLUMNS = [
@@ -71,7 +72,11 @@ export const BSSA14_COLUMNS = [
 export type Bssa14Row = CoefficientRow<(typeof BSSA14_COLUMNS)[number]>;
 
 /** Every row: PGV, PGA, then the spectral periods increasing. */
-export const BSSA14_ROWS: readonly Bssa14Row[] = readCoefficientTable('bssa14.csv', BSSA14_COLUMNS);
+export const BSSA14_ROWS: readonly Bssa14Row[] = readCoefficientTable(
+  'bssa14.json',
+  BSSA14_TABLE,
+  BSSA14_COLUMNS,
+);
 
 export const BSSA14_PGV: Bssa14Row = rowOfPeriod('BSSA14', BSSA14_ROWS, -1);
 export const BSSA14_PGA: Bssa14Row = rowOfPeriod('BSSA14', BSSA14_ROWS, 0);

@@ -6,7 +6,7 @@
  * Source of the numbers: the paper's Tables 1 and 2 (median and aleatory-variability
  * coefficients, with the journal's updates to c0–c6: c6 at 5, 7.5 and 10 s is the journal's
  * 0.135, 0.165, 0.180, not the PEER report's), rows PGV, PGA and 21 periods 0.01–10 s, kept
- * in `cb14.csv` beside this module, copied unchanged from the project's reference record (`cb14.csv` and `cb14-constants.csv` of
+ * in `cb14.json` beside this module, its cells copied as written from the project's reference record (`cb14.csv` and `cb14-constants.csv` of
  * the shared GMM reference data; its README gives the provenance: pygmm 0.8.0's data file,
  * cross-checked cell by cell against two other public records with no difference). The
  * period-independent constants c = 1.88 and n = 1.18 come from the same record. The four
@@ -25,6 +25,7 @@
  * φlnAF, φC and the sigma columns natural-log standard deviations; ρ dimensionless.
  */
 import { readCoefficientTable, rowOfPeriod, type CoefficientRow } from './coefficient-table.ts';
+import CB14_TABLE from './cb14.json' with { type: 'json' };
 
 /** Column names of Tables 1 and 2, in the paper's order (ρ is ρlnPGA,lnY). */
 // prettier-ignore
@@ -36,7 +37,11 @@ export const CB14_COLUMNS = [
 export type Cb14Row = CoefficientRow<(typeof CB14_COLUMNS)[number]>;
 
 /** Every row: PGV, PGA, then the spectral periods increasing. */
-export const CB14_ROWS: readonly Cb14Row[] = readCoefficientTable('cb14.csv', CB14_COLUMNS);
+export const CB14_ROWS: readonly Cb14Row[] = readCoefficientTable(
+  'cb14.json',
+  CB14_TABLE,
+  CB14_COLUMNS,
+);
 
 export const CB14_PGV: Cb14Row = rowOfPeriod('CB14', CB14_ROWS, -1);
 export const CB14_PGA: Cb14Row = rowOfPeriod('CB14', CB14_ROWS, 0);

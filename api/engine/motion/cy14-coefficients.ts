@@ -6,7 +6,7 @@
  * Source of the numbers: the paper's tables of coefficients (median and aleatory-variability
  * models) in the values of the NGA-West2 model spreadsheet v5.7 (2015-04-14), from which the
  * reference record was updated; rows PGV, PGA and the 24 spectral periods 0.01–10 s, kept
- * in `cy14.csv` beside this module, copied unchanged from `../shared/reference/gmm/cy14.csv` (the
+ * in `cy14.json` beside this module, copied unchanged from `../shared/reference/gmm/cy14.csv` (the
  * PGA row equals the 0.01 s row, as published). That
  * reference README records the provenance: the table was taken from a public record of the
  * spreadsheet's coefficients and cross-checked cell by cell against two further independent
@@ -27,6 +27,7 @@
  * quantity they multiply (see cy14.ts).
  */
 import { readCoefficientTable, rowOfPeriod } from './coefficient-table.ts';
+import CY14_TABLE from './cy14.json' with { type: 'json' };
 
 /** One row of the table. `periodS` is 0 for PGA and −1 for PGV. */
 export interface Cy14Row {
@@ -140,7 +141,11 @@ export const CY14_COLUMNS = [
 ] as const satisfies readonly (keyof Cy14Row)[];
 
 /** Every row: PGV, PGA, then the spectral periods increasing. */
-export const CY14_ROWS: readonly Cy14Row[] = readCoefficientTable('cy14.csv', CY14_COLUMNS);
+export const CY14_ROWS: readonly Cy14Row[] = readCoefficientTable(
+  'cy14.json',
+  CY14_TABLE,
+  CY14_COLUMNS,
+);
 
 export const CY14_PGV: Cy14Row = rowOfPeriod('CY14', CY14_ROWS, -1);
 export const CY14_PGA: Cy14Row = rowOfPeriod('CY14', CY14_ROWS, 0);

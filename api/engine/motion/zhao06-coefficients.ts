@@ -8,7 +8,7 @@
  * Source of the numbers: the paper's coefficient tables (a–e, the source terms FR, SI, SS, SSL,
  * the site-class terms CH, C1–C4, the within-event σ, between-event τ and tabulated total σT;
  * and the magnitude-squared terms QC, WC, τC, QI, WI, τI, PS, QS, WS, τS), rows PGA and 20
- * periods 0.05–5 s, kept in `zhao06.csv` beside this module, copied unchanged from the
+ * periods 0.05–5 s, kept in `zhao06.json` beside this module, copied unchanged from the
  * project's reference record (`zhao06.csv` and `zhao06-constants.csv` of the shared GMM
  * reference data). Its README says this table
  * rests on one public record (a second record agrees but looks derived from it): treat it as
@@ -23,6 +23,7 @@
  * units; σ, τ, σT and the τ of the magnitude-squared terms natural-log standard deviations.
  */
 import { readCoefficientTable, rowOfPeriod, type CoefficientRow } from './coefficient-table.ts';
+import ZHAO06_TABLE from './zhao06.json' with { type: 'json' };
 
 /** Column names, in the reference record's order. */
 // prettier-ignore
@@ -35,7 +36,11 @@ export const ZHAO06_COLUMNS = [
 export type Zhao06Row = CoefficientRow<(typeof ZHAO06_COLUMNS)[number]>;
 
 /** Every row: PGA, then the spectral periods increasing. */
-export const ZHAO06_ROWS: readonly Zhao06Row[] = readCoefficientTable('zhao06.csv', ZHAO06_COLUMNS);
+export const ZHAO06_ROWS: readonly Zhao06Row[] = readCoefficientTable(
+  'zhao06.json',
+  ZHAO06_TABLE,
+  ZHAO06_COLUMNS,
+);
 
 export const ZHAO06_PGA: Zhao06Row = rowOfPeriod('Zhao06', ZHAO06_ROWS, 0);
 

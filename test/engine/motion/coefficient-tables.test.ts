@@ -13,11 +13,11 @@ import { cy14 } from '../../../api/engine/motion/cy14.ts';
 import { ZHAO06_COLUMNS, ZHAO06_ROWS } from '../../../api/engine/motion/zhao06-coefficients.ts';
 import { zhao06 } from '../../../api/engine/motion/zhao06.ts';
 
-// The shape of each published table as read from its CSV file (api/engine/motion/<model>.csv):
+// The shape of each published table as read from its data file (api/engine/motion/<model>.json):
 // the rows (PGV −1, PGA 0, then the spectral periods) and columns of the paper's table, as
 // counted in the shared reference README (../shared/reference/gmm/README.md, "The coefficient
 // tables"), every cell finite, the model offering exactly the table's spectral periods. The
-// file's header is the reference record's (its spelling of the paper's symbols), which the
+// file's column names are the reference record's (its spelling of the paper's symbols), which the
 // reader maps in order onto the model's fields. The numbers themselves are checked through the
 // models against the independent reference vectors (<model>.vectors.test.ts and the models'
 // tests), never against the table itself.
@@ -25,7 +25,7 @@ const TABLES = [
   {
     name: 'BSSA14 (Boore et al. 2014, supplement table, revised 2014-07-15)',
     model: bssa14,
-    file: 'bssa14.csv',
+    file: 'bssa14.json',
     rows: BSSA14_ROWS,
     columns: BSSA14_COLUMNS,
     columnCount: 36,
@@ -35,7 +35,7 @@ const TABLES = [
   {
     name: 'CB14 (Campbell & Bozorgnia 2014, Tables 1 and 2)',
     model: cb14,
-    file: 'cb14.csv',
+    file: 'cb14.json',
     rows: CB14_ROWS,
     columns: CB14_COLUMNS,
     columnCount: 45,
@@ -45,7 +45,7 @@ const TABLES = [
   {
     name: 'ASK14 (Abrahamson, Silva & Kamai 2014, supplement ask14_coeffs.m.txt)',
     model: ask14,
-    file: 'ask14.csv',
+    file: 'ask14.json',
     rows: ASK14_ROWS,
     columns: ASK14_COLUMNS,
     columnCount: 45,
@@ -55,7 +55,7 @@ const TABLES = [
   {
     name: 'CY14 (Chiou & Youngs 2014, coefficient tables of the median and variability models)',
     model: cy14,
-    file: 'cy14.csv',
+    file: 'cy14.json',
     rows: CY14_ROWS,
     columns: CY14_COLUMNS,
     columnCount: 45,
@@ -65,7 +65,7 @@ const TABLES = [
   {
     name: 'AGA16 (Abrahamson, Gregor & Addo 2016, Table 3)',
     model: aga16,
-    file: 'aga16.csv',
+    file: 'aga16.json',
     rows: AGA16_ROWS,
     columns: AGA16_COLUMNS,
     columnCount: 14,
@@ -75,7 +75,7 @@ const TABLES = [
   {
     name: 'Zhao06 (Zhao et al. 2006, coefficient tables with the magnitude-squared terms)',
     model: zhao06,
-    file: 'zhao06.csv',
+    file: 'zhao06.json',
     rows: ZHAO06_ROWS,
     columns: ZHAO06_COLUMNS,
     columnCount: 27,
@@ -135,15 +135,10 @@ describe('published coefficient tables: shape', () => {
   it.each(TABLES)(
     '$name: $file names its columns in the order of the fields they are read into',
     ({ file, columns }) => {
-      const text = readFileSync(
-        new URL(`../../../api/engine/motion/${file}`, import.meta.url),
-        'utf8',
-      );
-      const [period, ...names] = text
-        .split('\n')
-        .find((line) => !line.startsWith('#'))!
-        .trim()
-        .split(',');
+      const table = JSON.parse(
+        readFileSync(new URL(`../../../api/engine/motion/${file}`, import.meta.url), 'utf8'),
+      ) as { columns: string[] };
+      const [period, ...names] = table.columns;
       expect(period).toBe('period');
       expect(columns.map(spelling)).toEqual(names.map((name) => spelling(FIELD_OF[name] ?? name)));
     },
