@@ -121,7 +121,7 @@ export function latticeCommunities(study: Study, count: number, prefix: string):
 }
 
 /**
- * The synthetic case of the issue: 200 point sources (one magnitude each, M 5 to 7.5, 10⁻⁴ to
+ * The synthetic case: 200 point sources (one magnitude each, M 5 to 7.5, 10⁻⁴ to
  * 10⁻² a year, depths 5–15 km) spread over a square 160 km across, 1,000 sites on a lattice over
  * it, one crustal model (BSSA14), PGA at 25 levels (the default levels). Invented, in open ocean.
  */
@@ -167,6 +167,40 @@ export function syntheticStudy(): Study {
     sources,
     groundMotion: { crustal: [{ model: 'BSSA14', weight: 1 }], interface: [], intraslab: [] },
     settings: testSettings(),
+  };
+}
+
+/**
+ * The synthetic case as a study file (README, "The study format"), for `tremora screen`: the
+ * same point sources as GeoJSON points, the same communities, BSSA14 for the crustal setting
+ * and the same settings. `tremora check` confirms that it reads back as the same study.
+ */
+export function syntheticStudyFile(): object {
+  const study = syntheticStudy();
+  const { levels: _levels, ...settings } = study.settings;
+  return {
+    name: study.name,
+    communities: study.communities.map(({ id, name, lon, lat, vs30 }) => ({
+      id,
+      name,
+      lon,
+      lat,
+      vs30,
+    })),
+    sources: {
+      type: 'FeatureCollection',
+      features: study.sources.map((source) => {
+        if (source.kind !== 'point') throw new Error('the synthetic case has point sources only');
+        const { id, name, setting, mechanism, rakeDeg, recurrence, depthKm } = source;
+        return {
+          type: 'Feature',
+          geometry: { type: 'Point', coordinates: source.location },
+          properties: { id, name, setting, mechanism, rake: rakeDeg, recurrence, depthKm },
+        };
+      }),
+    },
+    groundMotion: { crustal: [{ model: 'BSSA14', weight: 1 }] },
+    settings,
   };
 }
 

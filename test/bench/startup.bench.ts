@@ -1,7 +1,9 @@
 import { spawnSync } from 'node:child_process';
-import { existsSync } from 'node:fs';
+import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { REPO_ROOT } from '../service/helpers/service-process.ts';
+import { syntheticStudyFile } from './hazard-cases.ts';
 
 /**
  * Start-up time of the command line: `tremora --help` as installed (api/bin/tremora.js, the
@@ -10,6 +12,10 @@ import { REPO_ROOT } from '../service/helpers/service-process.ts';
  * the time over Node alone (what the program itself costs; on a busy machine Node's own start
  * varies most). Figures only; nothing about time is asserted. The target for the installed
  * command is under 0.5 s.
+ *
+ * Then the whole process of `tremora screen` on the synthetic case (hazard-cases.ts), split
+ * into start-up (`tremora --help`), reading and checking the study (`tremora check`, less the
+ * start-up) and the screening with its output (`tremora screen --out`, less `tremora check`).
  */
 const RUNS = Number(process.env.BENCH_STARTUP_RUNS ?? 7);
 
@@ -31,6 +37,8 @@ const CASES: readonly Case[] = [
   },
 ];
 
+const SCREEN_RUNS = Number(process.env.BENCH_SCREEN_RUNS ?? 3);
+
 const median = (xs: readonly number[]): number => {
   const sorted = [...xs].sort((a, b) => a - b);
   const mid = sorted.length >> 1;
@@ -47,21 +55,51 @@ if (!existsSync(join(REPO_ROOT, 'dist/api/cli.js'))) {
   if (built.status !== 0) throw new Error('the build failed');
 }
 
+/** Median wall time, s, of `runs` runs of Node with `args` after one warm-up run. */
+function medianWallS(label: string, args: readonly string[], runs: number): number {
+  const wall: number[] = [];
+  for (let i = 0; i <= runs; i++) {
+    const before = process.hrtime.bigint();
+    const run = spawnSync(process.execPath, [...args], { cwd: REPO_ROOT, encoding: 'utf8' });
+    const elapsedS = Number(process.hrtime.bigint() - before) / 1e9;
+    if (run.status !== 0) throw new Error(`${label} exited with ${run.status}: ${run.stderr}`);
+    if (i > 0) wall.push(elapsedS);
+  }
+  return median(wall);
+}
+
 console.log(`CLI start-up, median wall time of ${RUNS} runs after one warm-up run:`);
 let nodeAloneS = 0;
+let helpS = 0;
 for (const c of CASES) {
-  const wall: number[] = [];
-  for (let i = 0; i <= RUNS; i++) {
-    const before = process.hrtime.bigint();
-    const run = spawnSync(process.execPath, [...c.args], { cwd: REPO_ROOT, encoding: 'utf8' });
-    const elapsedS = Number(process.hrtime.bigint() - before) / 1e9;
-    if (run.status !== 0) throw new Error(`${c.label} exited with ${run.status}: ${run.stderr}`);
-    if (i === 0) continue;
-    wall.push(elapsedS);
-  }
-  const s = median(wall);
+  const s = medianWallS(c.label, c.args, RUNS);
+  if (c === CASES[1]) helpS = s;
   if (c === CASES[0]) nodeAloneS = s;
   console.log(
     `  ${c.label.padEnd(36)} ${s.toFixed(3)} s${c === CASES[0] ? '' : `  (${(s - nodeAloneS).toFixed(3)} s over Node alone)`}`,
   );
+}
+
+const dir = mkdtempSync(join(tmpdir(), 'tremora-startup-'));
+try {
+  const studyPath = join(dir, 'synthetic.study.json');
+  writeFileSync(studyPath, JSON.stringify(syntheticStudyFile()));
+  const cli = join(REPO_ROOT, 'api/bin/tremora.js');
+  const checkS = medianWallS('tremora check', [cli, 'check', studyPath], SCREEN_RUNS);
+  const screenS = medianWallS(
+    'tremora screen',
+    [cli, 'screen', studyPath, '--out', join(dir, 'screening.json')],
+    SCREEN_RUNS,
+  );
+  const part = (label: string, s: number): string =>
+    `  ${label.padEnd(36)} ${s.toFixed(3)} s  (${((100 * s) / screenS).toFixed(0)}%)`;
+  console.log(
+    `\ntremora screen of the synthetic case (200 point sources, 1,000 communities, BSSA14), whole process, median of ${SCREEN_RUNS} runs after one warm-up run:`,
+  );
+  console.log(`  ${'whole run'.padEnd(36)} ${screenS.toFixed(3)} s`);
+  console.log(part('start-up (tremora --help)', helpS));
+  console.log(part('reading and checking the study', checkS - helpS));
+  console.log(part('screening and writing the results', screenS - checkS));
+} finally {
+  rmSync(dir, { recursive: true, force: true });
 }
