@@ -46,8 +46,15 @@ import {
  *   TREMORA_BENCH_FULL_MAP=1           run the 100,000-point map to the end (about ten times the
  *                                      10,000-point map's time); by default it is stopped after
  *                                      20,000 points, past the point where its memory levels off
+ *   TREMORA_BENCH_CASES=demo,synthetic  only these of the cases demo, hundred (the 100
+ *                                      communities), synthetic and maps (both maps)
  */
 const THREADS = availableParallelism();
+const CASES = new Set(
+  (process.env.TREMORA_BENCH_CASES ?? 'demo,hundred,synthetic,maps')
+    .split(',')
+    .map((c) => c.trim()),
+);
 const STOP_100K = process.env.TREMORA_BENCH_FULL_MAP ? Infinity : 20_000;
 const seconds = (ms: number): string => `${(ms / 1000).toFixed(2)} s`;
 const rate = (n: number, ms: number): string => `${(n / (ms / 1000)).toExponential(2)}/s`;
@@ -141,25 +148,28 @@ async function screeningCase(label: string, study: Study, referenceNote: string)
   );
 }
 
-await screeningCase(
-  'demo study (all villages, all measures)',
-  demo,
-  'every rate of every curve and branch, every return-period level',
-);
-await screeningCase(
-  '100 communities × the demo sources',
-  { ...demo, communities: latticeCommunities(demo, 100, 'Bench village') },
-  'every rate, every level',
-);
+if (CASES.has('demo'))
+  await screeningCase(
+    'demo study (all villages, all measures)',
+    demo,
+    'every rate of every curve and branch, every return-period level',
+  );
+if (CASES.has('hundred'))
+  await screeningCase(
+    '100 communities × the demo sources',
+    { ...demo, communities: latticeCommunities(demo, 100, 'Bench village') },
+    'every rate, every level',
+  );
 
 // The synthetic case: its reference runs on every site (200 ruptures each is quick).
 const synthetic = syntheticStudy();
-await screeningCase(
-  'synthetic: 200 point sources × 1,000 sites × 25 levels, BSSA14',
-  synthetic,
-  'every site',
-);
-{
+if (CASES.has('synthetic'))
+  await screeningCase(
+    'synthetic: 200 point sources × 1,000 sites × 25 levels, BSSA14',
+    synthetic,
+    'every site',
+  );
+if (CASES.has('synthetic')) {
   // The sum alone, without the screening's per-community results (intensity, deaggregation, result objects): the
   // 25-level curves of the 1,000 sites on the fast path, in this thread, after one warm-up pass.
   const plan = planScreening(synthetic, { models: modelCatalog });
@@ -221,55 +231,57 @@ function referenceAtPoints(spacingKm: number, indices: readonly number[]): (numb
 }
 
 const SAMPLE_EVERY = 500;
-const map10k = mapRun(10_000, SAMPLE_EVERY);
-const sampled: { index: number; value: number | null }[] = map10k.samples;
-const refStart = performance.now();
-const referenceValues = referenceAtPoints(
-  map10k.spacingKm,
-  sampled.map((s) => s.index),
-);
-const refMs = performance.now() - refStart;
-const demoRuptures = discretiseStudy(demo).ruptures.length;
-const mapTerms = (() => {
-  // Pairs within the cut-off, from the sampled points, scaled to the grid (the map evaluates one level per pass; this counts the 25 levels of the curve it reads).
-  const frame = frameForStudy(demo);
-  const grid = mapGrid(demo, frame, { spacingKm: map10k.spacingKm, maxPoints: Infinity });
-  const sample = exceedanceTerms(
-    { ...demo, settings: { ...demo.settings, measures: ['PGA'] } },
-    sampled.map((s) => gridPoint(grid, s.index)),
+if (CASES.has('maps')) {
+  const map10k = mapRun(10_000, SAMPLE_EVERY);
+  const sampled: { index: number; value: number | null }[] = map10k.samples;
+  const refStart = performance.now();
+  const referenceValues = referenceAtPoints(
+    map10k.spacingKm,
+    sampled.map((s) => s.index),
   );
-  return (sample.terms / sampled.length) * map10k.points;
-})();
-console.log(
-  `\ngrid map of the demo region, 475-year PGA at Vs30 760: ${map10k.points} points every ${map10k.spacingKm.toFixed(3)} km × ${demoRuptures} ruptures`,
-);
-console.log(
-  `  wall time          ${seconds(map10k.wallMs)} (CPU ${seconds(map10k.cpuMs)}, all threads)`,
-);
-console.log(`  ruptures × sites   ${rate(demoRuptures * map10k.points, map10k.wallMs)}`);
-console.log(
-  `  exceedance terms   ${rate(mapTerms, map10k.wallMs)} (${mapTerms.toExponential(2)} terms of the 25-level curves, counted on the sampled points and scaled)`,
-);
-console.log(`  peak RSS           ${map10k.peakRssMb.toFixed(0)} MB`);
-console.log(`  worker threads     ${map10k.threads}`);
-console.log(
-  `  fast vs reference  largest relative difference ${largestDifference(
-    sampled.map((s) => s.value),
-    referenceValues,
-    1e-9,
-  ).toExponential(
-    2,
-  )} (475-year PGA at every ${SAMPLE_EVERY}th point: ${sampled.length} points; reference path ${seconds(refMs)})`,
-);
+  const refMs = performance.now() - refStart;
+  const demoRuptures = discretiseStudy(demo).ruptures.length;
+  const mapTerms = (() => {
+    // Pairs within the cut-off, from the sampled points, scaled to the grid (the map evaluates one level per pass; this counts the 25 levels of the curve it reads).
+    const frame = frameForStudy(demo);
+    const grid = mapGrid(demo, frame, { spacingKm: map10k.spacingKm, maxPoints: Infinity });
+    const sample = exceedanceTerms(
+      { ...demo, settings: { ...demo.settings, measures: ['PGA'] } },
+      sampled.map((s) => gridPoint(grid, s.index)),
+    );
+    return (sample.terms / sampled.length) * map10k.points;
+  })();
+  console.log(
+    `\ngrid map of the demo region, 475-year PGA at Vs30 760: ${map10k.points} points every ${map10k.spacingKm.toFixed(3)} km × ${demoRuptures} ruptures`,
+  );
+  console.log(
+    `  wall time          ${seconds(map10k.wallMs)} (CPU ${seconds(map10k.cpuMs)}, all threads)`,
+  );
+  console.log(`  ruptures × sites   ${rate(demoRuptures * map10k.points, map10k.wallMs)}`);
+  console.log(
+    `  exceedance terms   ${rate(mapTerms, map10k.wallMs)} (${mapTerms.toExponential(2)} terms of the 25-level curves, counted on the sampled points and scaled)`,
+  );
+  console.log(`  peak RSS           ${map10k.peakRssMb.toFixed(0)} MB`);
+  console.log(`  worker threads     ${map10k.threads}`);
+  console.log(
+    `  fast vs reference  largest relative difference ${largestDifference(
+      sampled.map((s) => s.value),
+      referenceValues,
+      1e-9,
+    ).toExponential(
+      2,
+    )} (475-year PGA at every ${SAMPLE_EVERY}th point: ${sampled.length} points; reference path ${seconds(refMs)})`,
+  );
 
-const map100k = mapRun(100_000, 0, STOP_100K);
-console.log(
-  `\nmemory as the map grows (each map in a process of its own, GeoJSON streamed to a file):`,
-);
-console.log(`  ${map10k.points}-point map   peak RSS ${map10k.peakRssMb.toFixed(0)} MB`);
-console.log(
-  `  ${map100k.points}-point map  peak RSS ${map100k.peakRssMb.toFixed(0)} MB${map100k.finished ? '' : ` (stopped after ${map100k.computed} points; TREMORA_BENCH_FULL_MAP=1 runs it to the end)`}, wall time ${seconds(map100k.wallMs)}`,
-);
-console.log(`  ratio              ${(map100k.peakRssMb / map10k.peakRssMb).toFixed(2)}`);
+  const map100k = mapRun(100_000, 0, STOP_100K);
+  console.log(
+    `\nmemory as the map grows (each map in a process of its own, GeoJSON streamed to a file):`,
+  );
+  console.log(`  ${map10k.points}-point map   peak RSS ${map10k.peakRssMb.toFixed(0)} MB`);
+  console.log(
+    `  ${map100k.points}-point map  peak RSS ${map100k.peakRssMb.toFixed(0)} MB${map100k.finished ? '' : ` (stopped after ${map100k.computed} points; TREMORA_BENCH_FULL_MAP=1 runs it to the end)`}, wall time ${seconds(map100k.wallMs)}`,
+  );
+  console.log(`  ratio              ${(map100k.peakRssMb / map10k.peakRssMb).toFixed(2)}`);
+}
 console.log(`\n${loadLine()} at the end`);
 await pool.close();
