@@ -11,7 +11,7 @@ import { discretiseStudy } from '../../api/engine/ruptures/discretise.ts';
 import { screenStudy } from '../../api/engine/screen-study.ts';
 import { expectClose, expectRelative } from '../helpers/close.ts';
 import { allKindsStudy } from './fixtures/all-kinds-study.ts';
-import { boxRing } from './fixtures/box-ring.ts';
+import { boxRing } from '../helpers/box-ring.ts';
 import { faultLonLat, zoneLonLat } from './geometry/km-fixtures.ts';
 
 /*
