@@ -2,7 +2,6 @@ import geodesic from 'geographiclib-geodesic';
 import { describe, expect, it } from 'vitest';
 import { Cancelled, InvalidInput, UnknownModel } from '../../api/engine/errors.ts';
 import { ruptureDistances } from '../../api/engine/geometry/distances.ts';
-import { cellUsedAt } from '../../api/engine/geometry/cell-refinement.ts';
 import { mmiFromPga } from '../../api/engine/intensity/worden2012.ts';
 import type { Community, FaultSource, Study, ZoneSource } from '../../api/engine/model.ts';
 import { normalSurvival } from '../../api/engine/hazard/normal-cdf.ts';
@@ -12,6 +11,8 @@ import { screenStudy } from '../../api/engine/screen-study.ts';
 import { expectClose, expectRelative } from '../helpers/close.ts';
 import { allKindsStudy } from './fixtures/all-kinds-study.ts';
 import { boxRing } from '../helpers/box-ring.ts';
+import { expectSharesSumToOne } from '../helpers/deaggregation-checks.ts';
+import { rupturesUsedAt } from '../helpers/reference-hazard/reference-screening.ts';
 import { faultLonLat, zoneLonLat } from './geometry/km-fixtures.ts';
 
 /*
@@ -104,19 +105,7 @@ describe('screenStudy: community inside the zone', () => {
     const stepResult = screenStudy(stepStudy).communities[0]!;
     const { frame, ruptures: all } = discretiseStudy(stepStudy);
     const site = frame.toLocal([-150.2, -47]);
-    // A refined zone cell counts as itself or as its squares by the site's distance (geometry/cell-refinement.ts).
-    const ruptures = all.filter(
-      (r) =>
-        !r.cellUse ||
-        cellUsedAt(
-          r.cellUse.near,
-          r.cellUse.centre.x,
-          r.cellUse.centre.y,
-          r.cellUse.radiusKm,
-          site.x,
-          site.y,
-        ),
-    );
+    const ruptures = rupturesUsedAt(all, site);
     const medians = ruptures.map((r) =>
       cornell79LnPga(r.context.magnitude, ruptureDistances(r.surface, site).rhypoKm),
     );
@@ -251,18 +240,7 @@ describe('screenStudy: community inside the zone', () => {
   it("deaggregation: shares sum to 1 within 1e-9; the fault's magnitudes are all 6.5, the zone's 5–6.5", () => {
     for (const years of ['475', '2475']) {
       const d = inside.deaggregation[years]!;
-      expectClose(
-        d.bySource.reduce((s, x) => s + x.share, 0),
-        1,
-        1e-9,
-        'source shares sum to 1',
-      );
-      expectClose(
-        d.bins.reduce((s, x) => s + x.share, 0),
-        1,
-        1e-9,
-        'bin shares sum to 1',
-      );
+      expectSharesSumToOne(d);
       expect(d.mean.magnitude).toBeGreaterThanOrEqual(5);
       expect(d.mean.magnitude).toBeLessThanOrEqual(6.5);
       expect(d.measure).toBe('PGA');
