@@ -372,29 +372,21 @@ describe('screenStudy: PGV from SA(0.5 s) for a model without PGV (AGA16)', () =
 });
 
 describe('screenStudy: bad branches', () => {
+  /** The study with these crustal branches and none for the other settings. */
+  const withCrustalBranches = (crustal: Study['groundMotion']['crustal']): Study => ({
+    ...study,
+    groundMotion: { crustal, interface: [], intraslab: [] },
+  });
+
   it('refuses a setting with sources but no branches, naming the field', () => {
-    const bad: Study = { ...study, groundMotion: { crustal: [], interface: [], intraslab: [] } };
+    const bad = withCrustalBranches([]);
     expect(() => screenStudy(bad)).toThrow(InvalidInput);
     expect(() => screenStudy(bad)).toThrow(/groundMotion\.crustal/);
   });
   it('refuses weights that do not sum to 1, and unknown models', () => {
-    const weights: Study = {
-      ...study,
-      groundMotion: {
-        crustal: [{ model: 'Cornell79', weight: 0.5 }],
-        interface: [],
-        intraslab: [],
-      },
-    };
+    const weights = withCrustalBranches([{ model: 'Cornell79', weight: 0.5 }]);
     expect(() => screenStudy(weights)).toThrow(/summing to 1, got 0.5/);
-    const unknown: Study = {
-      ...study,
-      groundMotion: {
-        crustal: [{ model: 'NoSuchModel', weight: 1 }],
-        interface: [],
-        intraslab: [],
-      },
-    };
+    const unknown = withCrustalBranches([{ model: 'NoSuchModel', weight: 1 }]);
     expect(() => screenStudy(unknown)).toThrow(UnknownModel);
   });
 });
