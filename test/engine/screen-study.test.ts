@@ -2,7 +2,6 @@ import geodesic from 'geographiclib-geodesic';
 import { describe, expect, it } from 'vitest';
 import { Cancelled, InvalidInput, UnknownModel } from '../../api/engine/errors.ts';
 import { ruptureDistances } from '../../api/engine/geometry/distances.ts';
-import { cellUsedAt } from '../../api/engine/geometry/cell-refinement.ts';
 import { mmiFromPga } from '../../api/engine/intensity/worden2012.ts';
 import type { Community, FaultSource, Study, ZoneSource } from '../../api/engine/model.ts';
 import { normalSurvival } from '../../api/engine/hazard/normal-cdf.ts';
@@ -11,7 +10,9 @@ import { discretiseStudy } from '../../api/engine/ruptures/discretise.ts';
 import { screenStudy } from '../../api/engine/screen-study.ts';
 import { expectClose, expectRelative } from '../helpers/close.ts';
 import { allKindsStudy } from './fixtures/all-kinds-study.ts';
-import { boxRing } from './fixtures/box-ring.ts';
+import { boxRing } from '../helpers/box-ring.ts';
+import { expectSharesSumToOne } from '../helpers/deaggregation-checks.ts';
+import { rupturesUsedAt } from '../helpers/reference-hazard/reference-screening.ts';
 import { faultLonLat, zoneLonLat } from './geometry/km-fixtures.ts';
 
 /*
@@ -104,19 +105,7 @@ describe('screenStudy: community inside the zone', () => {
     const stepResult = screenStudy(stepStudy).communities[0]!;
     const { frame, ruptures: all } = discretiseStudy(stepStudy);
     const site = frame.toLocal([-150.2, -47]);
-    // A refined zone cell counts as itself or as its squares by the site's distance (geometry/cell-refinement.ts).
-    const ruptures = all.filter(
-      (r) =>
-        !r.cellUse ||
-        cellUsedAt(
-          r.cellUse.near,
-          r.cellUse.centre.x,
-          r.cellUse.centre.y,
-          r.cellUse.radiusKm,
-          site.x,
-          site.y,
-        ),
-    );
+    const ruptures = rupturesUsedAt(all, site);
     const medians = ruptures.map((r) =>
       cornell79LnPga(r.context.magnitude, ruptureDistances(r.surface, site).rhypoKm),
     );
@@ -251,18 +240,7 @@ describe('screenStudy: community inside the zone', () => {
   it("deaggregation: shares sum to 1 within 1e-9; the fault's magnitudes are all 6.5, the zone's 5–6.5", () => {
     for (const years of ['475', '2475']) {
       const d = inside.deaggregation[years]!;
-      expectClose(
-        d.bySource.reduce((s, x) => s + x.share, 0),
-        1,
-        1e-9,
-        'source shares sum to 1',
-      );
-      expectClose(
-        d.bins.reduce((s, x) => s + x.share, 0),
-        1,
-        1e-9,
-        'bin shares sum to 1',
-      );
+      expectSharesSumToOne(d);
       expect(d.mean.magnitude).toBeGreaterThanOrEqual(5);
       expect(d.mean.magnitude).toBeLessThanOrEqual(6.5);
       expect(d.measure).toBe('PGA');
@@ -394,29 +372,21 @@ describe('screenStudy: PGV from SA(0.5 s) for a model without PGV (AGA16)', () =
 });
 
 describe('screenStudy: bad branches', () => {
+  /** The study with these crustal branches and none for the other settings. */
+  const withCrustalBranches = (crustal: Study['groundMotion']['crustal']): Study => ({
+    ...study,
+    groundMotion: { crustal, interface: [], intraslab: [] },
+  });
+
   it('refuses a setting with sources but no branches, naming the field', () => {
-    const bad: Study = { ...study, groundMotion: { crustal: [], interface: [], intraslab: [] } };
+    const bad = withCrustalBranches([]);
     expect(() => screenStudy(bad)).toThrow(InvalidInput);
     expect(() => screenStudy(bad)).toThrow(/groundMotion\.crustal/);
   });
   it('refuses weights that do not sum to 1, and unknown models', () => {
-    const weights: Study = {
-      ...study,
-      groundMotion: {
-        crustal: [{ model: 'Cornell79', weight: 0.5 }],
-        interface: [],
-        intraslab: [],
-      },
-    };
+    const weights = withCrustalBranches([{ model: 'Cornell79', weight: 0.5 }]);
     expect(() => screenStudy(weights)).toThrow(/summing to 1, got 0.5/);
-    const unknown: Study = {
-      ...study,
-      groundMotion: {
-        crustal: [{ model: 'NoSuchModel', weight: 1 }],
-        interface: [],
-        intraslab: [],
-      },
-    };
+    const unknown = withCrustalBranches([{ model: 'NoSuchModel', weight: 1 }]);
     expect(() => screenStudy(unknown)).toThrow(UnknownModel);
   });
 });

@@ -1,5 +1,6 @@
 import geodesic from 'geographiclib-geodesic';
 import { COMMUNITY, smallStudy } from '../service/helpers/small-study.ts';
+import { boxRing } from './box-ring.ts';
 
 /**
  * Small hand-written catalogs for the catalog verbs and routes, in an invented open-ocean test
@@ -39,15 +40,7 @@ export const EAST_ZONE = {
   properties: { id: 'east-box' },
   geometry: {
     type: 'Polygon',
-    coordinates: [
-      [
-        [-139.5, -50.5],
-        [-138.5, -50.5],
-        [-138.5, -49.5],
-        [-139.5, -49.5],
-        [-139.5, -50.5],
-      ],
-    ],
+    coordinates: [boxRing(-139.5, -50.5, -138.5, -49.5)],
   },
 } as const;
 

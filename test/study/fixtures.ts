@@ -1,3 +1,5 @@
+import { boxRing } from '../helpers/box-ring.ts';
+
 /**
  * A small valid study in an invented open-ocean setting (all values invented, for validation
  * tests only). Each test copies and breaks it.
@@ -71,15 +73,7 @@ export function validStudy(): Record<string, any> {
           type: 'Feature',
           geometry: {
             type: 'Polygon',
-            coordinates: [
-              [
-                [-141, -48],
-                [-139, -48],
-                [-139, -46.5],
-                [-141, -46.5],
-                [-141, -48],
-              ],
-            ],
+            coordinates: [boxRing(-141, -48, -139, -46.5)],
           },
           properties: {
             id: 'background',

@@ -3,6 +3,7 @@ import type { Recurrence } from '../../api/engine/model.ts';
 import { discretiseSource } from '../../api/engine/ruptures/discretise.ts';
 import { sourceRuptureEstimate } from '../../api/study/rupture-estimate.ts';
 import { FRAME, SETTINGS, pointKm, zoneKm } from '../engine/geometry/km-fixtures.ts';
+import { boxRing } from '../helpers/box-ring.ts';
 
 const GR: Recurrence = { type: 'gutenberg-richter', bValue: 1, mMin: 4.5, mMax: 7.5, rate: 1 };
 
@@ -18,18 +19,7 @@ describe('sourceRuptureEstimate counts virtual ruptures', () => {
   });
 
   it('a zone: one rupture per cell and bin as with points (6 x 4 cells x 30 bins), the estimate at least that and not above three times it', () => {
-    const zone = zoneKm(
-      [
-        [
-          [0, 0],
-          [60, 0],
-          [60, 40],
-          [0, 40],
-          [0, 0],
-        ],
-      ],
-      GR,
-    );
+    const zone = zoneKm([boxRing(0, 0, 60, 40)], GR);
     const built = discretiseSource(zone, 0, FRAME, SETTINGS).length;
     expect(built).toBe(6 * 4 * 30);
     const estimate = sourceRuptureEstimate(zone, SETTINGS);

@@ -10,6 +10,7 @@ import {
 import { syntheticCatalog } from '../../../api/engine/catalog/synthetic-catalog.ts';
 import { createRandom } from '../../../api/engine/random.ts';
 import { expectRelative } from '../../helpers/close.ts';
+import { boxRing } from '../../helpers/box-ring.ts';
 
 const YEAR_MS = 365.25 * 86_400_000;
 
@@ -79,15 +80,7 @@ describe('checks of a Gutenberg–Richter fit', () => {
       mMin: 4,
       mMax: 6,
       eventCount: 2000,
-      rings: [
-        [
-          [-140, -50],
-          [-139, -50],
-          [-139, -49],
-          [-140, -49],
-          [-140, -50],
-        ],
-      ],
+      rings: [boxRing(-140, -50, -139, -49)],
       depthKm: [5, 15],
       startMs: Date.UTC(2001, 0, 1),
       endMs: Date.UTC(2021, 0, 1),

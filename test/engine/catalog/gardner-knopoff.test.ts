@@ -8,6 +8,19 @@ import {
 } from '../../../api/engine/catalog/gardner-knopoff.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 
+/** Each row [M, km, days]: the window's distance and time within the relative tolerances. */
+function expectWindows(
+  rows: readonly (readonly [number, number, number])[],
+  tolerance: { readonly km: number; readonly days: number },
+  source: (what: 'distance' | 'time', m: number) => string,
+): void {
+  for (const [m, km, days] of rows) {
+    const w = gardnerKnopoffWindow(m);
+    expectRelative(w.distanceKm, km, tolerance.km, source('distance', m));
+    expectRelative(w.days, days, tolerance.days, source('time', m));
+  }
+}
+
 describe('Gardner & Knopoff (1974) windows', () => {
   it('follow the fitted form at M 5, 6 and 7', () => {
     // Hand computation (calculator) of L = 10^(0.1238 M + 0.983) km and
@@ -19,11 +32,11 @@ describe('Gardner & Knopoff (1974) windows', () => {
       [6, 53.1863, 499.344],
       [7, 70.7294, 918.121],
     ];
-    for (const [m, km, days] of expected) {
-      const w = gardnerKnopoffWindow(m);
-      expectRelative(w.distanceKm, km, 1e-5, `fitted Gardner & Knopoff distance window at M ${m}`);
-      expectRelative(w.days, days, 1e-5, `fitted Gardner & Knopoff time window at M ${m}`);
-    }
+    expectWindows(
+      expected,
+      { km: 1e-5, days: 1e-5 },
+      (what, m) => `fitted Gardner & Knopoff ${what} window at M ${m}`,
+    );
   });
 
   it('switch time branch at M 6.5', () => {
@@ -52,21 +65,11 @@ describe('Gardner & Knopoff (1974) windows', () => {
       [6, 54, 510],
       [7, 70, 915],
     ];
-    for (const [m, km, days] of table) {
-      const w = gardnerKnopoffWindow(m);
-      expectRelative(
-        w.distanceKm,
-        km,
-        0.02,
-        `Gardner & Knopoff (1974) table distance at M ${m} (from memory)`,
-      );
-      expectRelative(
-        w.days,
-        days,
-        0.08,
-        `Gardner & Knopoff (1974) table time at M ${m} (from memory)`,
-      );
-    }
+    expectWindows(
+      table,
+      { km: 0.02, days: 0.08 },
+      (what, m) => `Gardner & Knopoff (1974) table ${what} at M ${m} (from memory)`,
+    );
   });
 });
 

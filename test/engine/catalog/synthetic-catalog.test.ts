@@ -7,6 +7,7 @@ import {
 import type { LonLat } from '../../../api/engine/model.ts';
 import { createRandom } from '../../../api/engine/random.ts';
 import { expectClose } from '../../helpers/close.ts';
+import { boxRing } from '../../helpers/box-ring.ts';
 
 // An L-shaped test zone in open ocean: the square [-150, -148] x [-48, -46] without its
 // north-east quarter.
@@ -96,15 +97,7 @@ describe('syntheticCatalog', () => {
     // the poleward half (south of 30° S) holds (sin 60° − sin 30°) / sin 60° = 0.42265 of the
     // area (0.5 if latitudes were uniform); binomial standard error over 5000 events 0.0070,
     // tolerance 4 of those.
-    const band: readonly (readonly LonLat[])[] = [
-      [
-        [-130, -60],
-        [-120, -60],
-        [-120, 0],
-        [-130, 0],
-        [-130, -60],
-      ],
-    ];
+    const band: readonly (readonly LonLat[])[] = [boxRing(-130, -60, -120, 0)];
     const events = syntheticCatalog({ ...base(3), rings: band });
     const share = events.filter((e) => e.lat < -30).length / events.length;
     expectClose(

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { insideZone, zonePolygon } from '../../../api/engine/catalog/zone-polygon.ts';
-import { boxRing } from '../fixtures/box-ring.ts';
+import { boxRing } from '../../helpers/box-ring.ts';
 
 describe('zone polygons', () => {
   it('close an open ring and find its bounding box', () => {

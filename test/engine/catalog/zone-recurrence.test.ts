@@ -6,7 +6,7 @@ import { zoneRecurrence } from '../../../api/engine/catalog/zone-recurrence.ts';
 import type { LonLat } from '../../../api/engine/model.ts';
 import { createRandom } from '../../../api/engine/random.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
-import { boxRing } from '../fixtures/box-ring.ts';
+import { boxRing } from '../../helpers/box-ring.ts';
 import { SQUARE_ZONE } from '../fixtures/catalog-builders.ts';
 
 const NEIGHBOUR: readonly (readonly LonLat[])[] = [boxRing(-147, -48, -145, -46)];

@@ -8,7 +8,7 @@ import {
 import { ruptureDistances } from '../../../api/engine/geometry/distances.ts';
 import type { RuptureSurface } from '../../../api/engine/ruptures/rupture.ts';
 import { expectClose } from '../../helpers/close.ts';
-import { FRAME, faultKm } from './km-fixtures.ts';
+import { FRAME, faultKm, bentFaultSurface } from './km-fixtures.ts';
 
 /*
  * Hand-worked distances to a planar rupture (definitions of Rjb, Rrup, Rx, Ry0 as in the
@@ -217,17 +217,7 @@ describe('ruptureDistances on several planes', () => {
 
   it('Rjb and Rrup are the minima over the planes of a bent trace; Rx varies smoothly past the bend', () => {
     // North 40 km, then east 40 km; vertical, so every distance is to the trace.
-    const s = faultSurface(
-      faultKm(
-        [
-          [0, 0],
-          [0, 40],
-          [40, 40],
-        ],
-        { dipDeg: 90, dipDirectionDeg: 135, upperDepthKm: 0, lowerDepthKm: 12 },
-      ),
-      FRAME,
-    );
+    const s = bentFaultSurface(40, 90);
     const surface = wholeSurface(s);
     const inside = ruptureDistances(surface, { x: 10, y: 30 });
     expectClose(inside.rjbKm, 10, TOL, 'nearest is the northward segment');
@@ -253,17 +243,7 @@ describe('ruptureDistances on several planes', () => {
   });
 
   it('a patch across the joint is two planes whose top edges add to its length', () => {
-    const s = faultSurface(
-      faultKm(
-        [
-          [0, 0],
-          [0, 50],
-          [50, 50],
-        ],
-        { dipDeg: 90, dipDirectionDeg: 135, upperDepthKm: 0, lowerDepthKm: 12 },
-      ),
-      FRAME,
-    );
+    const s = bentFaultSurface(50, 90);
     const planes = surfacePatch(s, [30, 70], [0, 12]);
     expect(planes.length).toBe(2);
     const lengths = planes.map((p) =>

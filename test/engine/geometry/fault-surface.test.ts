@@ -9,17 +9,21 @@ import {
 import { expectClose } from '../../helpers/close.ts';
 import { FRAME, faultKm } from './km-fixtures.ts';
 
+/** A straight 100 km trace along the local y axis, south to north (km). */
+const NORTH_SOUTH_TRACE: [number, number][] = [
+  [0, -50],
+  [0, 50],
+];
 const TOL_KM = 1e-6; // projection round trip is good to about 1e-9 km
 
 describe('faultSurface', () => {
   it('builds a dipping plane from a straight trace (geometry by hand: width = depth range / sin dip)', () => {
-    const fault = faultKm(
-      [
-        [0, -50],
-        [0, 50],
-      ],
-      { dipDeg: 30, dipDirectionDeg: 90, upperDepthKm: 0, lowerDepthKm: 10 },
-    );
+    const fault = faultKm(NORTH_SOUTH_TRACE, {
+      dipDeg: 30,
+      dipDirectionDeg: 90,
+      upperDepthKm: 0,
+      lowerDepthKm: 10,
+    });
     const s = faultSurface(fault, FRAME);
     expect(s.reversed).toBe(false);
     expectClose(s.lengthKm, 100, TOL_KM, 'trace length by hand');
@@ -40,13 +44,12 @@ describe('faultSurface', () => {
   });
 
   it('walks the trace backwards when the fault dips to its left, keeping the dip on the right', () => {
-    const fault = faultKm(
-      [
-        [0, -50],
-        [0, 50],
-      ],
-      { dipDeg: 45, dipDirectionDeg: 270, upperDepthKm: 2, lowerDepthKm: 12 },
-    );
+    const fault = faultKm(NORTH_SOUTH_TRACE, {
+      dipDeg: 45,
+      dipDirectionDeg: 270,
+      upperDepthKm: 2,
+      lowerDepthKm: 12,
+    });
     const s = faultSurface(fault, FRAME);
     expect(s.reversed).toBe(true);
     const first = s.segments[0];
@@ -83,29 +86,26 @@ describe('faultSurface', () => {
   });
 
   it('refuses a dip direction along the trace, a dip outside (0, 90] and depths out of order', () => {
-    const along = faultKm(
-      [
-        [0, -50],
-        [0, 50],
-      ],
-      { dipDeg: 45, dipDirectionDeg: 0, upperDepthKm: 0, lowerDepthKm: 10 },
-    );
+    const along = faultKm(NORTH_SOUTH_TRACE, {
+      dipDeg: 45,
+      dipDirectionDeg: 0,
+      upperDepthKm: 0,
+      lowerDepthKm: 10,
+    });
     expect(() => faultSurface(along, FRAME)).toThrow(/dip direction/);
-    const flat = faultKm(
-      [
-        [0, -50],
-        [0, 50],
-      ],
-      { dipDeg: 0, dipDirectionDeg: 90, upperDepthKm: 0, lowerDepthKm: 10 },
-    );
+    const flat = faultKm(NORTH_SOUTH_TRACE, {
+      dipDeg: 0,
+      dipDirectionDeg: 90,
+      upperDepthKm: 0,
+      lowerDepthKm: 10,
+    });
     expect(() => faultSurface(flat, FRAME)).toThrow(InvalidInput);
-    const upside = faultKm(
-      [
-        [0, -50],
-        [0, 50],
-      ],
-      { dipDeg: 45, dipDirectionDeg: 90, upperDepthKm: 10, lowerDepthKm: 5 },
-    );
+    const upside = faultKm(NORTH_SOUTH_TRACE, {
+      dipDeg: 45,
+      dipDirectionDeg: 90,
+      upperDepthKm: 10,
+      lowerDepthKm: 5,
+    });
     expect(() => faultSurface(upside, FRAME)).toThrow(/lowerDepthKm/);
   });
 });

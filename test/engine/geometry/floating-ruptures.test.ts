@@ -7,7 +7,7 @@ import {
 } from '../../../api/engine/geometry/floating-ruptures.ts';
 import { InvalidInput } from '../../../api/engine/errors.ts';
 import { expectClose } from '../../helpers/close.ts';
-import { FRAME, faultKm } from './km-fixtures.ts';
+import { FRAME, faultKm, bentFaultSurface } from './km-fixtures.ts';
 
 /* Position counts and offsets by hand from the midpoint rule (Press et al. 2007, Numerical Recipes 3rd ed., section 4.1). */
 describe('positionOffsetsKm', () => {
@@ -91,17 +91,7 @@ describe('floatingRuptures', () => {
   });
 
   it('follows the trace across a joint: two planes, top edges adding to the rupture length', () => {
-    const bent = faultSurface(
-      faultKm(
-        [
-          [0, 0],
-          [0, 50],
-          [50, 50],
-        ],
-        { dipDeg: 60, dipDirectionDeg: 135, upperDepthKm: 0, lowerDepthKm: 12 },
-      ),
-      FRAME,
-    );
+    const bent = bentFaultSurface(50, 60);
     const ruptures = floatingRuptures(
       bent,
       { areaKm2: 40 * bent.widthKm, lengthKm: 40, widthKm: bent.widthKm },

@@ -1,3 +1,4 @@
+import { faultSurface, type FaultSurface } from '../../../api/engine/geometry/fault-surface.ts';
 import { createLocalFrame, type LocalFrame } from '../../../api/engine/geometry/projection.ts';
 import type {
   FaultSource,
@@ -34,6 +35,21 @@ export interface FaultOptions {
   readonly id?: string;
 }
 
+/**
+ * A fault whose trace runs north `legKm` from the origin, then east `legKm` (one joint, a right
+ * angle), dipping `dipDeg` towards 135°, from the surface to 12 km.
+ */
+export function bentFaultSurface(legKm: number, dipDeg: number): FaultSurface {
+  const trace: [number, number][] = [
+    [0, 0],
+    [0, legKm],
+    [legKm, legKm],
+  ];
+  return faultSurface(
+    faultKm(trace, { dipDeg, dipDirectionDeg: 135, upperDepthKm: 0, lowerDepthKm: 12 }),
+    FRAME,
+  );
+}
 /** A test fault (crustal strike-slip, M 7 at 0.01 a year unless the options say otherwise) with its trace in [lon, lat]. */
 export function faultLonLat(trace: readonly LonLat[], options: FaultOptions): FaultSource {
   return {

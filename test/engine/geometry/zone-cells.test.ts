@@ -3,7 +3,7 @@ import { subdivideZoneCell, zoneCells } from '../../../api/engine/geometry/zone-
 import { InvalidInput } from '../../../api/engine/errors.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 import { FIXED_M7, FRAME, zoneKm } from './km-fixtures.ts';
-import { boxRing } from '../fixtures/box-ring.ts';
+import { boxRing } from '../../helpers/box-ring.ts';
 
 /* Areas by hand (plane geometry). Rings go through [lon, lat] and back, ~1e-9 km. */
 

@@ -114,24 +114,19 @@ describe('levelRate and coefficientLevelRate', () => {
     }
     // The coefficients apply only to a table and σ > 0 throughout; this set has zero σs.
     const coefficients = createLevelCoefficients(ruptures.length);
-    fillLevelCoefficients(
-      coefficients,
-      exceedanceTable(3),
-      rates,
-      predictions.ruptureIndex,
-      pair,
-      ruptures.length,
-    );
+    const fill = (): void =>
+      fillLevelCoefficients(
+        coefficients,
+        exceedanceTable(3),
+        rates,
+        predictions.ruptureIndex,
+        pair,
+        ruptures.length,
+      );
+    fill();
     expect(coefficients.usable).toBe(false);
     for (let k = 0; k < pair.sigma.length; k++) if (pair.sigma[k] === 0) pair.sigma[k] = 0.6;
-    fillLevelCoefficients(
-      coefficients,
-      exceedanceTable(3),
-      rates,
-      predictions.ruptureIndex,
-      pair,
-      ruptures.length,
-    );
+    fill();
     expect(coefficients.usable).toBe(true);
     const table = exceedanceTable(3);
     const expected = exceedanceCurve({ ...predictions, sigma: pair.sigma }, ruptures, LEVELS, 3);

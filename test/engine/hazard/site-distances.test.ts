@@ -11,6 +11,7 @@ import type { Rupture } from '../../../api/engine/ruptures/rupture.ts';
 import { expectClose } from '../../helpers/close.ts';
 import { FRAME, SETTINGS, contouredKm, faultKm, pointKm, zoneKm } from '../geometry/km-fixtures.ts';
 import { BENT_TRACE_KM } from '../fixtures/all-kinds-study.ts';
+import { boxRing } from '../../helpers/box-ring.ts';
 
 /*
  * The fast path's distances against geometry/distances.ts (the reference, itself checked by hand
@@ -53,24 +54,7 @@ const ruptures: Rupture[] = [
     FRAME,
     SETTINGS,
   ),
-  ...discretiseSource(
-    zoneKm(
-      [
-        [
-          [50, 50],
-          [90, 50],
-          [90, 90],
-          [50, 90],
-          [50, 50],
-        ],
-      ],
-      M6,
-      9,
-    ),
-    2,
-    FRAME,
-    SETTINGS,
-  ),
+  ...discretiseSource(zoneKm([boxRing(50, 50, 90, 90)], M6, 9), 2, FRAME, SETTINGS),
   ...discretiseSource(pointKm(-10, 70, M6, 12), 3, FRAME, SETTINGS),
   ...discretiseSource(
     contouredKm(

@@ -1,12 +1,15 @@
 import { describe, it } from 'vitest';
 import { createFastHazard, fastSiteHazard } from '../../../api/engine/hazard/fast-site-hazard.ts';
 import { ruptureTable } from '../../../api/engine/hazard/rupture-table-builder.ts';
-import type { HazardMeasure } from '../../../api/engine/hazard/hazard-types.ts';
-import { cornell79 } from '../../../api/engine/motion/cornell79.ts';
 import { expectRelative } from '../../helpers/close.ts';
 import { checkPreparedModel } from '../motion/prepared-checks.ts';
-import { pointRuptures, ROCK_SITE } from './point-ruptures.ts';
+import { ROCK_SITE } from './point-ruptures.ts';
 import { scaledCornell } from './test-models.ts';
+import {
+  TWO_SETTING_BRANCHES,
+  TWO_SETTING_MEASURES,
+  TWO_SETTING_RUPTURES,
+} from './two-setting-tree.ts';
 
 /*
  * The scaled Cornell et al. (1979) scaffolding on the fast path: its hook must scale the median
@@ -15,25 +18,7 @@ import { scaledCornell } from './test-models.ts';
  * 250 km, 0.001/yr, under Cornell × 2), and so are the expected rates: the hand computation
  * 0.6 λc Q(ε₁) + 0.4 λc Q(ε₂) + λi Q(εi), untruncated, from the printed equation.
  */
-const { ruptures } = pointRuptures([
-  {
-    magnitude: 6.5,
-    annualRate: 0.01,
-    repiKm: 10,
-    setting: 'crustal',
-    sourceIndex: 0,
-    sourceId: 'ridge-fault',
-  },
-  {
-    magnitude: 8,
-    annualRate: 0.001,
-    repiKm: 250,
-    setting: 'interface',
-    sourceIndex: 1,
-    sourceId: 'trench',
-  },
-]);
-const measures: HazardMeasure[] = [{ key: 'PGA', measure: { kind: 'PGA' }, levels: [0.05, 0.3] }];
+const { ruptures } = TWO_SETTING_RUPTURES;
 
 describe('scaledCornell (test scaffolding) on the fast path', () => {
   it("its hook gives its predict()'s numbers pair by pair", () => {
@@ -43,14 +28,8 @@ describe('scaledCornell (test scaffolding) on the fast path', () => {
   it('a fast-path screening gives the hand-computed mean and branch curves', () => {
     const fast = createFastHazard({
       table: ruptureTable(ruptures),
-      branches: {
-        crustal: [
-          { model: cornell79, weight: 0.6 },
-          { model: scaledCornell('Scaled', 1.5), weight: 0.4 },
-        ],
-        interface: [{ model: scaledCornell('Trench2x', 2, 'interface'), weight: 1 }],
-      },
-      measures,
+      branches: TWO_SETTING_BRANCHES,
+      measures: TWO_SETTING_MEASURES,
       truncationSigma: Infinity,
       maxDistanceKm: 300,
     });

@@ -5,6 +5,7 @@ import { expectRelative } from '../../helpers/close.ts';
 import { referenceScreening } from '../../helpers/reference-hazard/reference-screening.ts';
 import { allKindsStudy, ALL_KINDS_COMMUNITIES } from '../fixtures/all-kinds-study.ts';
 import { FRAME, zoneKm } from '../geometry/km-fixtures.ts';
+import { boxRing } from '../../helpers/box-ring.ts';
 
 const site = (id: string, x: number, y: number): Community => {
   const [lon, lat] = FRAME.toLonLat({ x, y });
@@ -15,15 +16,7 @@ const site = (id: string, x: number, y: number): Community => {
 function zoneStudy(zoneCellKm: number, communities: readonly Community[]): Study {
   const zone = {
     ...zoneKm(
-      [
-        [
-          [0, 0],
-          [100, 0],
-          [100, 100],
-          [0, 100],
-          [0, 0],
-        ],
-      ],
+      [boxRing(0, 0, 100, 100)],
       { type: 'gutenberg-richter', bValue: 1, mMin: 4.5, mMax: 6.5, rate: 0.5 },
       6,
     ),

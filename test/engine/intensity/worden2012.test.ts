@@ -38,25 +38,32 @@ describe('Worden et al. (2012) GMICE', () => {
     });
   });
 
-  it('PGA 0.1 g = 98.0665 cm/s²: log10 = 1.991522 > t1, MMI = −1.60 + 3.70 × 1.991522 = 5.768626', () => {
-    expectClose(
-      mmiFromPga(0.1),
-      5.768626499635895,
-      1e-9,
-      'Worden 2012 eq. 3 upper segment, hand computation',
-    );
-  });
-  it('PGA 0.3 g: MMI = 7.533975 (upper segment)', () => {
-    expectClose(mmiFromPga(0.3), 7.533975142098647, 1e-9, 'Worden 2012 eq. 3, hand computation');
-  });
-  it('PGA 0.02 g = 19.6133 cm/s²: log10 = 1.292551 <= t1, MMI = 1.78 + 1.55 × 1.292551 = 3.783454 (lower segment)', () => {
-    expectClose(
-      mmiFromPga(0.02),
-      3.7834535404239373,
-      1e-9,
-      'Worden 2012 eq. 3 lower segment, hand computation',
-    );
-  });
+  const pgaCases = [
+    {
+      title:
+        'PGA 0.1 g = 98.0665 cm/s²: log10 = 1.991522 > t1, MMI = −1.60 + 3.70 × 1.991522 = 5.768626',
+      pgaG: 0.1,
+      mmi: 5.768626499635895,
+      source: 'Worden 2012 eq. 3 upper segment, hand computation',
+    },
+    {
+      title: 'PGA 0.3 g: MMI = 7.533975 (upper segment)',
+      pgaG: 0.3,
+      mmi: 7.533975142098647,
+      source: 'Worden 2012 eq. 3, hand computation',
+    },
+    {
+      title:
+        'PGA 0.02 g = 19.6133 cm/s²: log10 = 1.292551 <= t1, MMI = 1.78 + 1.55 × 1.292551 = 3.783454 (lower segment)',
+      pgaG: 0.02,
+      mmi: 3.7834535404239373,
+      source: 'Worden 2012 eq. 3 lower segment, hand computation',
+    },
+  ];
+  for (const { title, pgaG, mmi, source } of pgaCases)
+    it(title, () => {
+      expectClose(mmiFromPga(pgaG), mmi, 1e-9, source);
+    });
   it('PGV 1 cm/s: MMI = c1 = 3.78; PGV 10 cm/s: 2.89 + 3.16 = 6.05; PGV 50 cm/s: 8.258745', () => {
     expectClose(mmiFromPgv(1), 3.78, 1e-12, 'Worden 2012, log10(1) = 0');
     expectClose(mmiFromPgv(10), 6.05, 1e-12, 'Worden 2012, hand computation');

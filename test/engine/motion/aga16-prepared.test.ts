@@ -1,12 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { UnsupportedMeasure } from '../../../api/engine/errors.ts';
 import { aga16 } from '../../../api/engine/motion/aga16.ts';
-import type { Measure } from '../../../api/engine/motion/measure.ts';
 import { withPgvFromSa } from '../../../api/engine/motion/pgv-from-sa.ts';
 import { checkPreparedMeasures, checkPreparedModel } from './prepared-checks.ts';
+import { sa } from './measures.ts';
 
 // The hook's numbers against predict() (aga16.ts); predict() itself is checked against the paper in aga16.test.ts.
-const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 const interfaceRupture = {
   magnitude: 8,
   rakeDeg: 90,

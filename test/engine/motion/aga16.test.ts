@@ -16,6 +16,7 @@ import {
 import { parseMeasure, type Measure } from '../../../api/engine/motion/measure.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
 import { expectClose } from '../../helpers/close.ts';
+import { PGA, sa } from './measures.ts';
 
 const PAPER = 'Abrahamson, Gregor & Addo (2016)';
 
@@ -55,8 +56,6 @@ function input({
   };
 }
 
-const PGA: Measure = { kind: 'PGA' };
-const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 const lnAt = (options: CaseOptions, measure: Measure): number =>
   aga16.predict(input(options), measure).lnMedian;
 const rowAt = (periodS: number): Aga16Row =>

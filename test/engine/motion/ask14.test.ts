@@ -1,5 +1,4 @@
 import { describe, expect, it } from 'vitest';
-import { runCli } from '../../../api/cli.ts';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import {
   ASK14_CONSTANTS,
@@ -18,10 +17,7 @@ import {
   ask14V1,
 } from '../../../api/engine/motion/ask14.ts';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
-import { probeMotion } from '../../../api/engine/motion/probe.ts';
-import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
-import { readProbeRequest } from '../../../api/operations/probe-request.ts';
 import { expectClose } from '../../helpers/close.ts';
 import {
   expectFallsWithDistanceRisesWithMagnitude,
@@ -31,7 +27,14 @@ import {
   HANGING_WALL_CASE,
 } from './model-checks.ts';
 import { verticalStrikeSlip } from './crustal-input.ts';
-import { itMatchesVectorFile, itMatchesWithZ1Given, readVectors } from './reference-vectors.ts';
+import {
+  itClassesRakesAsTheVectors,
+  itMatchesVectorFile,
+  itMatchesWithZ1Given,
+  readVectors,
+} from './reference-vectors.ts';
+import { PGA, PGV, sa } from './measures.ts';
+import { itIsInTheRegistry } from './registry-checks.ts';
 
 /**
  * The reference: vectors/ask14.json, copied from ../shared/reference/gmm/vectors/ask14.json
@@ -45,10 +48,6 @@ import { itMatchesVectorFile, itMatchesWithZ1Given, readVectors } from './refere
 const VECTORS = readVectors('ask14.json');
 const SOURCE = 'Abrahamson, Silva & Kamai (2014), reference vectors ask14.json';
 
-const PGA: Measure = { kind: 'PGA' };
-const PGV: Measure = { kind: 'PGV' };
-const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
-
 const input = (over: Partial<GmmInput> = {}): GmmInput => verticalStrikeSlip(over);
 const lnY = (over: Partial<GmmInput>, m: Measure): number => ask14.predict(input(over), m).lnMedian;
 
@@ -56,11 +55,7 @@ describe('ASK14: the reference vectors', () => {
   // Both Vs30 kinds occur, so φ's measured and estimated coefficients are both checked.
   itMatchesVectorFile(ask14, VECTORS, SOURCE, 245);
   itMatchesWithZ1Given(ask14, VECTORS, SOURCE, ask14DefaultZ1Km);
-
-  it("classes every case's rake as the vectors do", () => {
-    for (const c of VECTORS.cases)
-      expect(ask14MechanismFromRake(c.rakeDeg ?? 0), c.id).toBe(c.mechanism);
-  });
+  itClassesRakesAsTheVectors(VECTORS, ask14MechanismFromRake);
 });
 
 describe('ASK14: the coefficient table', () => {
@@ -228,26 +223,9 @@ describe('ASK14: properties', () => {
     expect(() => ask14.predict(input({ z1Km: -1 }), PGA)).toThrow(/z1Km/);
   });
 
-  it('is in the registry, so studies, `tremora motion` and /api/probe can name it', async () => {
-    expect(modelCatalog.get('ASK14')).toBe(ask14);
-    const request = readProbeRequest({ model: 'ASK14', magnitude: 6.5, rjbKm: 20 }, modelCatalog);
-    const result = probeMotion(request, modelCatalog);
-    expect(Object.keys(result.measures)).toEqual(['PGA', 'PGV', 'SA(0.2)', 'SA(1.0)']);
-    expect(result.measures.PGA?.median).toBeCloseTo(
-      Math.exp(ask14.predict(result.input, PGA).lnMedian),
-      12,
-    );
-    expect(ask14.distanceMetric).toBe('rrup');
-    expect(ask14.settings).toEqual(['crustal']);
-    let out = '';
-    const code = await runCli(
-      ['motion', '--model', 'ASK14', '--magnitude', '6.5', '--rjb', '20', '--json'],
-      { out: (t) => (out += t), err: () => undefined },
-    );
-    expect(code).toBe(0);
-    expect(
-      (JSON.parse(out) as { model: string; measures: Record<string, { median: number }> }).measures
-        .PGA?.median,
-    ).toBe(result.measures.PGA?.median);
+  itIsInTheRegistry(ask14, {
+    name: 'ASK14',
+    distanceMetric: 'rrup',
+    settings: ['crustal'],
   });
 });

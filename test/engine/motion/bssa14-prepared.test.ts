@@ -1,11 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import { bssa14 } from '../../../api/engine/motion/bssa14.ts';
-import type { Measure } from '../../../api/engine/motion/measure.ts';
 import { checkPreparedMeasures, checkPreparedModel } from './prepared-checks.ts';
+import { sa } from './measures.ts';
 
 // The hook's numbers against predict() (bssa14.ts); predict() itself is checked against the paper in bssa14.test.ts.
-const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 
 describe('BSSA14 precomputation hook', () => {
   it("gives predict()'s ln median, σ and applicability, within 1e-12: PGA, PGV, SA on rows and between rows", () => {

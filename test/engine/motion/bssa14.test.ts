@@ -21,11 +21,9 @@ import {
   expectNotApplicable,
 } from './model-checks.ts';
 import { worstKink } from './crustal-table-checks.ts';
+import { PGA, PGV, sa } from './measures.ts';
 
 const SOURCE = 'Boore et al. (2014)';
-const PGA: Measure = { kind: 'PGA' };
-const PGV: Measure = { kind: 'PGV' };
-const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 
 const input = (over: Partial<GmmInput> = {}): GmmInput => verticalStrikeSlip(over);
 const lnY = (over: Partial<GmmInput>, m: Measure): number =>

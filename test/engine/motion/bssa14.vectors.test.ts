@@ -1,4 +1,4 @@
-import { describe, it } from 'vitest';
+import { describe } from 'vitest';
 import { bssa14, predictBssa14, prepareBssa14 } from '../../../api/engine/motion/bssa14.ts';
 import { createPairPredictions } from '../../../api/engine/motion/prepared-period.ts';
 import { expectClose } from '../../helpers/close.ts';
@@ -6,6 +6,7 @@ import { pairColumns } from './prepared-checks.ts';
 import {
   expectFastPathMatchesVector,
   expectMatchesVector,
+  itEachVectorCase,
   readVectors,
   VECTOR_TOLERANCE,
   vectorInput,
@@ -20,39 +21,36 @@ const vectors = readVectors('bssa14.json');
 const SOURCE = 'Boore et al. (2014), reference vectors (pygmm 0.8.0)';
 
 describe('BSSA14 against the reference vectors', () => {
-  it.each(vectors.cases.map((c) => [c.id, c] as const))(
-    '%s: ln median, τ, φ, σ within 1e-4',
-    (_, c) => {
-      const unspecified = c.mechanism === 'unspecified';
-      const prediction = predictBssa14(
-        vectorInput(c),
-        vectorMeasure(c),
-        unspecified ? { mechanism: 'unspecified' } : {},
+  itEachVectorCase(vectors, (c) => {
+    const unspecified = c.mechanism === 'unspecified';
+    const prediction = predictBssa14(
+      vectorInput(c),
+      vectorMeasure(c),
+      unspecified ? { mechanism: 'unspecified' } : {},
+    );
+    expectMatchesVector(prediction, c, SOURCE);
+    if (!unspecified) {
+      expectFastPathMatchesVector(bssa14, c, SOURCE);
+    } else {
+      const input = vectorInput(c);
+      const out = createPairPredictions(1);
+      prepareBssa14([input], vectorMeasure(c), { mechanism: 'unspecified' }).predictPairs(
+        input,
+        pairColumns([{ rupture: input, distances: input }]),
+        out,
       );
-      expectMatchesVector(prediction, c, SOURCE);
-      if (!unspecified) {
-        expectFastPathMatchesVector(bssa14, c, SOURCE);
-      } else {
-        const input = vectorInput(c);
-        const out = createPairPredictions(1);
-        prepareBssa14([input], vectorMeasure(c), { mechanism: 'unspecified' }).predictPairs(
-          input,
-          pairColumns([{ rupture: input, distances: input }]),
-          out,
-        );
-        expectClose(
-          out.lnMedian[0]!,
-          c.lnMedian,
-          VECTOR_TOLERANCE,
-          `${SOURCE}, case ${c.id}, fast path: ln median`,
-        );
-        expectClose(
-          out.sigma[0]!,
-          c.sigma,
-          VECTOR_TOLERANCE,
-          `${SOURCE}, case ${c.id}, fast path: sigma`,
-        );
-      }
-    },
-  );
+      expectClose(
+        out.lnMedian[0]!,
+        c.lnMedian,
+        VECTOR_TOLERANCE,
+        `${SOURCE}, case ${c.id}, fast path: ln median`,
+      );
+      expectClose(
+        out.sigma[0]!,
+        c.sigma,
+        VECTOR_TOLERANCE,
+        `${SOURCE}, case ${c.id}, fast path: sigma`,
+      );
+    }
+  });
 });

@@ -1,16 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import { cb14 } from '../../../api/engine/motion/cb14.ts';
-import type { Measure } from '../../../api/engine/motion/measure.ts';
 import {
   checkPreparedAcrossSites,
   checkPreparedMeasures,
   checkPreparedModel,
   checkSiteOrder,
 } from './prepared-checks.ts';
+import { sa } from './measures.ts';
 
 // The hook's numbers against predict() (cb14.ts); predict() itself is checked against the paper in cb14.test.ts.
-const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 
 describe('CB14 precomputation hook', () => {
   it("gives predict()'s ln median, σ and applicability, within 1e-12: PGA, PGV, SA with and without the PGA floor, between rows", () => {

@@ -26,11 +26,9 @@ import {
   expectNotApplicable,
 } from './model-checks.ts';
 import { worstKink } from './crustal-table-checks.ts';
+import { PGA, PGV, sa } from './measures.ts';
 
 const SOURCE = 'Campbell & Bozorgnia (2014)';
-const PGA: Measure = { kind: 'PGA' };
-const PGV: Measure = { kind: 'PGV' };
-const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 const rowAt = (periodS: number): Cb14Row => CB14_SA.find((r) => r.periodS === periodS) as Cb14Row;
 
 const input = (over: Partial<GmmInput> = {}): GmmInput => verticalStrikeSlip(over, 7);

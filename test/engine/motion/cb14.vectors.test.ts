@@ -1,6 +1,6 @@
-import { describe, it } from 'vitest';
+import { describe } from 'vitest';
 import { cb14 } from '../../../api/engine/motion/cb14.ts';
-import { expectModelMatchesVector, readVectors } from './reference-vectors.ts';
+import { expectModelMatchesVector, itEachVectorCase, readVectors } from './reference-vectors.ts';
 
 // Independent test vectors of Campbell & Bozorgnia (2014), computed by pygmm 0.8.0 from the
 // published Tables 1 and 2 plus the paper's PSA ≥ PGA rule below 0.25 s (vectors/README.md):
@@ -10,10 +10,7 @@ const vectors = readVectors('cb14.json');
 const SOURCE = 'Campbell & Bozorgnia (2014), reference vectors (pygmm 0.8.0)';
 
 describe('CB14 against the reference vectors', () => {
-  it.each(vectors.cases.map((c) => [c.id, c] as const))(
-    '%s: ln median, τ, φ, σ within 1e-4',
-    (_, c) => {
-      expectModelMatchesVector(cb14, c, SOURCE);
-    },
-  );
+  itEachVectorCase(vectors, (c) => {
+    expectModelMatchesVector(cb14, c, SOURCE);
+  });
 });

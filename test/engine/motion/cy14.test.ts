@@ -1,5 +1,4 @@
 import { describe, expect, it } from 'vitest';
-import { runCli } from '../../../api/cli.ts';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import {
   CY14_COLUMNS,
@@ -17,10 +16,7 @@ import {
   cy14SiteTerm,
 } from '../../../api/engine/motion/cy14.ts';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
-import { probeMotion } from '../../../api/engine/motion/probe.ts';
-import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
-import { readProbeRequest } from '../../../api/operations/probe-request.ts';
 import { expectClose } from '../../helpers/close.ts';
 import {
   expectFallsWithDistanceRisesWithMagnitude,
@@ -29,7 +25,14 @@ import {
   expectNotApplicable,
 } from './model-checks.ts';
 import { verticalStrikeSlip } from './crustal-input.ts';
-import { itMatchesVectorFile, itMatchesWithZ1Given, readVectors } from './reference-vectors.ts';
+import {
+  itClassesRakesAsTheVectors,
+  itMatchesVectorFile,
+  itMatchesWithZ1Given,
+  readVectors,
+} from './reference-vectors.ts';
+import { PGA, PGV, sa } from './measures.ts';
+import { itIsInTheRegistry } from './registry-checks.ts';
 
 /**
  * The reference: vectors/cy14.json, copied from ../shared/reference/gmm/vectors/cy14.json
@@ -43,10 +46,6 @@ import { itMatchesVectorFile, itMatchesWithZ1Given, readVectors } from './refere
 const VECTORS = readVectors('cy14.json');
 const SOURCE = 'Chiou & Youngs (2014), reference vectors cy14.json';
 
-const PGA: Measure = { kind: 'PGA' };
-const PGV: Measure = { kind: 'PGV' };
-const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
-
 const input = (over: Partial<GmmInput> = {}): GmmInput => verticalStrikeSlip(over);
 const lnY = (over: Partial<GmmInput>, m: Measure): number => cy14.predict(input(over), m).lnMedian;
 
@@ -54,11 +53,7 @@ describe('CY14: the reference vectors', () => {
   // Both Vs30 kinds occur, so σ_NL0's measured (0.7) and inferred (σ3) factors are both checked.
   itMatchesVectorFile(cy14, VECTORS, SOURCE, 264);
   itMatchesWithZ1Given(cy14, VECTORS, SOURCE, cy14DefaultZ1Km);
-
-  it("classes every case's rake as the vectors do", () => {
-    for (const c of VECTORS.cases)
-      expect(cy14MechanismFromRake(c.rakeDeg ?? 0), c.id).toBe(c.mechanism);
-  });
+  itClassesRakesAsTheVectors(VECTORS, cy14MechanismFromRake);
 });
 
 describe('CY14: the coefficient table', () => {
@@ -210,26 +205,9 @@ describe('CY14: properties', () => {
     expect(() => cy14.predict(input({ z1Km: -1 }), PGA)).toThrow(/z1Km/);
   });
 
-  it('is in the registry, so studies, `tremora motion` and /api/probe can name it', async () => {
-    expect(modelCatalog.get('CY14')).toBe(cy14);
-    const request = readProbeRequest({ model: 'CY14', magnitude: 6.5, rjbKm: 20 }, modelCatalog);
-    const result = probeMotion(request, modelCatalog);
-    expect(Object.keys(result.measures)).toEqual(['PGA', 'PGV', 'SA(0.2)', 'SA(1.0)']);
-    expect(result.measures.PGA?.median).toBeCloseTo(
-      Math.exp(cy14.predict(result.input, PGA).lnMedian),
-      12,
-    );
-    expect(cy14.distanceMetric).toBe('rrup');
-    expect(cy14.settings).toEqual(['crustal']);
-    let out = '';
-    const code = await runCli(
-      ['motion', '--model', 'CY14', '--magnitude', '6.5', '--rjb', '20', '--json'],
-      { out: (t) => (out += t), err: () => undefined },
-    );
-    expect(code).toBe(0);
-    expect(
-      (JSON.parse(out) as { model: string; measures: Record<string, { median: number }> }).measures
-        .PGA?.median,
-    ).toBe(result.measures.PGA?.median);
+  itIsInTheRegistry(cy14, {
+    name: 'CY14',
+    distanceMetric: 'rrup',
+    settings: ['crustal'],
   });
 });

@@ -3,6 +3,7 @@ import { expect, it } from 'vitest';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
 import type { GmmInput, GmmPrediction } from '../../../api/engine/motion/types.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
+import { sa } from './measures.ts';
 
 const RULE = 'interpolate-period.ts rule (common practice)';
 
@@ -127,8 +128,6 @@ export function expectHangingWallAboveFootwall(
     expect(lnY(hanging, m)).toBeGreaterThan(lnY({ ...hanging, rxKm: -10 }, m));
   }
 }
-
-const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 
 /**
  * Orders of magnitude read from memory of the NGA-West2 papers' and Gregor et al. (2014)'s

@@ -200,3 +200,24 @@ export function itMatchesWithZ1Given(
     }
   });
 }
+
+/** One test a case of `vectors`, named by its id: `check` compares the case within 1e-4. */
+export function itEachVectorCase(vectors: VectorFile, check: (c: VectorCase) => void): void {
+  it.each(vectors.cases.map((c) => [c.id, c] as const))(
+    '%s: ln median, τ, φ, σ within 1e-4',
+    (_id, c) => {
+      check(c);
+    },
+  );
+}
+
+/** Every case's rake falls in the mechanism class the vectors file gives it. */
+export function itClassesRakesAsTheVectors(
+  vectors: VectorFile,
+  mechanismFromRake: (rakeDeg: number) => string,
+): void {
+  it("classes every case's rake as the vectors do", () => {
+    for (const c of vectors.cases)
+      expect(mechanismFromRake(c.rakeDeg ?? 0), c.id).toBe(c.mechanism);
+  });
+}

@@ -1,11 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { UnsupportedMeasure, UnsupportedPeriod } from '../../../api/engine/errors.ts';
-import type { Measure } from '../../../api/engine/motion/measure.ts';
 import type { GmmInput } from '../../../api/engine/motion/types.ts';
 import { zhao06, zhao06Msq, zhao06SiteClass } from '../../../api/engine/motion/zhao06.ts';
 import { checkPreparedMeasures, checkPreparedModel } from './prepared-checks.ts';
+import { sa } from './measures.ts';
 
-const sa = (periodS: number): Measure => ({ kind: 'SA', periodS });
 const slab: GmmInput = {
   magnitude: 7,
   rakeDeg: -90,

@@ -1,6 +1,6 @@
-import { describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { zhao06, zhao06Msq, zhao06SiteClass } from '../../../api/engine/motion/zhao06.ts';
-import { expectModelMatchesVector, readVectors } from './reference-vectors.ts';
+import { expectModelMatchesVector, itEachVectorCase, readVectors } from './reference-vectors.ts';
 
 // Independent test vectors of Zhao et al. (2006): an independent transcription of the paper's
 // equations with the published coefficients, checked against a port of a public record to
@@ -10,12 +10,9 @@ const vectors = readVectors('zhao06.json');
 const SOURCE = 'Zhao et al. (2006), reference vectors (independent transcription)';
 
 describe('Zhao06 against the reference vectors', () => {
-  it.each(vectors.cases.map((c) => [c.id, c] as const))(
-    '%s: ln median, τ, φ, σ within 1e-4',
-    (_, c) => {
-      const model = c.magnitudeSquaredTerm ? zhao06Msq : zhao06;
-      expect(zhao06SiteClass(c.vs30), `${SOURCE}, case ${c.id}: site class`).toBe(c.siteClass);
-      expectModelMatchesVector(model, c, `${SOURCE}, ${model.name}`);
-    },
-  );
+  itEachVectorCase(vectors, (c) => {
+    const model = c.magnitudeSquaredTerm ? zhao06Msq : zhao06;
+    expect(zhao06SiteClass(c.vs30), `${SOURCE}, case ${c.id}: site class`).toBe(c.siteClass);
+    expectModelMatchesVector(model, c, `${SOURCE}, ${model.name}`);
+  });
 });

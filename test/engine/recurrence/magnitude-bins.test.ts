@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { InvalidInput } from '../../../api/engine/errors.ts';
+import type { Recurrence } from '../../../api/engine/model.ts';
 import { magnitudeBins, magnitudeEdges } from '../../../api/engine/recurrence/magnitude-bins.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 
@@ -42,30 +43,30 @@ describe('magnitudeBins', () => {
     expect(bins.magnitudes).toEqual([6.5]);
     expect(bins.annualRates).toEqual([0.01]);
   });
-  it('Gutenberg–Richter from aValue: bin rates sum to 10^(a - b mMin) (1e-9 relative)', () => {
-    const bins = magnitudeBins(
-      { type: 'gutenberg-richter', bValue: 1, mMin: 5, mMax: 7.5, aValue: 4 },
-      { magnitudeStep: 0.1 },
-    );
-    expectRelative(
-      bins.annualRates.reduce((s, r) => s + r, 0),
-      0.1,
-      1e-9,
-      'rate of M >= 5 = 10^(4 - 5) (DESIGN.md section 2)',
-    );
-  });
-  it('Gutenberg–Richter from rate, with an uneven last bin: rates still sum to the rate', () => {
-    const bins = magnitudeBins(
-      { type: 'gutenberg-richter', bValue: 0.9, mMin: 4.5, mMax: 7.33, rate: 0.37 },
-      { magnitudeStep: 0.1 },
-    );
-    expectRelative(
-      bins.annualRates.reduce((s, r) => s + r, 0),
-      0.37,
-      1e-9,
-      'rate of M >= mMin as given',
-    );
-  });
+  const sums: { title: string; recurrence: Recurrence; total: number; source: string }[] = [
+    {
+      title: 'Gutenberg–Richter from aValue: bin rates sum to 10^(a - b mMin) (1e-9 relative)',
+      recurrence: { type: 'gutenberg-richter', bValue: 1, mMin: 5, mMax: 7.5, aValue: 4 },
+      total: 0.1,
+      source: 'rate of M >= 5 = 10^(4 - 5) (DESIGN.md section 2)',
+    },
+    {
+      title: 'Gutenberg–Richter from rate, with an uneven last bin: rates still sum to the rate',
+      recurrence: { type: 'gutenberg-richter', bValue: 0.9, mMin: 4.5, mMax: 7.33, rate: 0.37 },
+      total: 0.37,
+      source: 'rate of M >= mMin as given',
+    },
+  ];
+  for (const { title, recurrence, total, source } of sums)
+    it(title, () => {
+      const bins = magnitudeBins(recurrence, { magnitudeStep: 0.1 });
+      expectRelative(
+        bins.annualRates.reduce((s, r) => s + r, 0),
+        total,
+        1e-9,
+        source,
+      );
+    });
   it('the rate above 6.0 follows the bounded Gutenberg–Richter law (Kramer 1996 eq. 4.x, from memory; evaluated by hand)', () => {
     // N(m) = N0 (10^(-b(m - mMin)) - 10^(-b(mMax - mMin))) / (1 - 10^(-b(mMax - mMin)))
     const bins = magnitudeBins(

@@ -5,7 +5,7 @@ import { discretiseSource, discretiseStudy } from '../../../api/engine/ruptures/
 import type { Rupture } from '../../../api/engine/ruptures/rupture.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 import { FIXED_M7, FRAME, SETTINGS, faultKm, pointKm, zoneKm } from '../geometry/km-fixtures.ts';
-import { boxRing } from '../fixtures/box-ring.ts';
+import { boxRing } from '../../helpers/box-ring.ts';
 
 const sumRates = (ruptures: readonly Rupture[]): number =>
   ruptures.reduce((s, r) => s + r.annualRate, 0);

@@ -18,6 +18,7 @@ import { screeningSetup } from '../../../api/engine/screening-plan.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 import { siteHazard } from '../../helpers/reference-hazard/site-hazard.ts';
 import { FRAME, SETTINGS, pointKm, zoneKm } from '../geometry/km-fixtures.ts';
+import { boxRing } from '../../helpers/box-ring.ts';
 
 const GR: Recurrence = { type: 'gutenberg-richter', bValue: 1, mMin: 5, mMax: 7.5, rate: 0.05 };
 
@@ -133,18 +134,7 @@ describe('virtual ruptures of large point earthquakes', () => {
   });
 
   it('a zone keeps one rupture per cell and depth: one strike each, its whole share, its rate conserved', () => {
-    const zone = zoneKm(
-      [
-        [
-          [0, 0],
-          [40, 0],
-          [40, 30],
-          [0, 30],
-          [0, 0],
-        ],
-      ],
-      GR,
-    );
+    const zone = zoneKm([boxRing(0, 0, 40, 30)], GR);
     const prepared = prepareSource(zone, 0, FRAME, SETTINGS);
     const bins = treeMagnitudeBins(zone.recurrence, SETTINGS);
     const points = bins.magnitudes.flatMap((m, i) =>

@@ -20,6 +20,7 @@ import { screenCommunities } from '../../../api/engine/screen-study.ts';
 import { expectRelative } from '../../helpers/close.ts';
 import { testSettings } from '../../helpers/test-settings.ts';
 import { FRAME, zoneKm } from '../geometry/km-fixtures.ts';
+import { boxRing } from '../../helpers/box-ring.ts';
 
 /** Subduction branches the crustal zone does not use. */
 const SUBDUCTION = [{ model: 'AGA16', weight: 1 }];
@@ -47,15 +48,7 @@ const STUDY: Study = {
   sources: [
     {
       ...zoneKm(
-        [
-          [
-            [0, 0],
-            [80, 0],
-            [80, 60],
-            [0, 60],
-            [0, 0],
-          ],
-        ],
+        [boxRing(0, 0, 80, 60)],
         { type: 'gutenberg-richter', bValue: 1, mMin: 5, mMax: 7.5, rate: 0.2 },
         10,
       ),

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { Settings, ZoneSource } from '../../../api/engine/model.ts';
 import { discretiseSource } from '../../../api/engine/ruptures/discretise.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
+import { testSettings } from '../../helpers/test-settings.ts';
 import { FRAME, contouredKm, zoneKm } from '../geometry/km-fixtures.ts';
 
 /**
@@ -10,17 +11,7 @@ import { FRAME, contouredKm, zoneKm } from '../geometry/km-fixtures.ts';
  * straight under x it lies 10 + x·tan 30° km deep (plain trigonometry); east of its deep edge
  * the edge's 40 km is carried out flat (ruptures/zone-depths.ts). Invented test scaffolding.
  */
-const SETTINGS: Settings = {
-  measures: ['PGA'],
-  levels: {},
-  horizonsYears: [50],
-  returnPeriodsYears: [475],
-  truncationSigma: 3,
-  maxDistanceKm: 300,
-  magnitudeStep: 0.5,
-  ruptureSpacingKm: 5,
-  zoneCellKm: 10,
-};
+const SETTINGS: Settings = testSettings({ magnitudeStep: 0.5 });
 const TAN_30 = Math.tan(Math.PI / 6);
 const X_BOTTOM = 30 / TAN_30;
 const slab = contouredKm(

@@ -3,7 +3,7 @@ import type { FaultSource, Recurrence, Study, ZoneSource } from '../../../api/en
 import { sourceSanity } from '../../../api/engine/sanity/source-sanity.ts';
 import { expectRelative } from '../../helpers/close.ts';
 import { testSettings } from '../../helpers/test-settings.ts';
-import { boxRing } from '../fixtures/box-ring.ts';
+import { boxRing } from '../../helpers/box-ring.ts';
 import { faultLonLat, zoneLonLat } from '../geometry/km-fixtures.ts';
 
 /*

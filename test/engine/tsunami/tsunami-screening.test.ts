@@ -88,16 +88,25 @@ function shoreGrid(west = -142.0) {
   return lonLatGrid('shore.asc', { west, north, cellDeg: cell, columns, rows }, values);
 }
 
+/** The one community's first arrival, after checking it has no problems. */
+function firstArrival(
+  s: Parameters<typeof tsunamiScreening>[0],
+  grid: Parameters<typeof tsunamiScreening>[1],
+) {
+  const result = tsunamiScreening(s, grid);
+  const community = result.communities[0];
+  const arrival = community?.arrivals[0];
+  expect(community?.problems).toEqual([]);
+  if (!community || !arrival) throw new Error('no arrival');
+  return { result, community, arrival };
+}
+
 const cove = { id: 'cove', name: 'Cove', lon: -139.995, lat: -47.2, vs30: 400, coastal: true };
 
 describe('tsunami first arrival for coastal communities', () => {
   it('over a sea of constant depth, the grid time is the distance from the rupture area / √(g h), and the range holds it', () => {
     const s = study([cove]);
-    const result = tsunamiScreening(s, shoreGrid());
-    const community = result.communities[0];
-    const arrival = community?.arrivals[0];
-    expect(community?.problems).toEqual([]);
-    if (!community || !arrival) throw new Error('no arrival');
+    const { community, arrival } = firstArrival(s, shoreGrid());
     // Distance (derived): from the east edge of the rupture's surface projection (the trace plus
     // the horizontal width (15 − 5) / tan 45° = 10 km, east) to the sea cell the time is read at.
     const frame = frameForStudy(s);
@@ -210,11 +219,7 @@ describe('tsunami source of an interface that runs on under the land', () => {
 
   it("starts from the part under the sea: the inlet's head hears of it after the inlet's length / √(g h)", () => {
     const s = contouredStudy([head]);
-    const result = tsunamiScreening(s, inletGrid());
-    const community = result.communities[0];
-    const arrival = community?.arrivals[0];
-    expect(community?.problems).toEqual([]);
-    if (!community || !arrival) throw new Error('no arrival');
+    const { result, arrival } = firstArrival(s, inletGrid());
     // Distance (derived): from the coast, where the source's offshore part ends, along the
     // inlet to the sea cell the time is read at.
     const frame = frameForStudy(s);

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { deaggregate } from './deaggregation.ts';
+import { expectSharesSumToOne } from '../deaggregation-checks.ts';
 import type { DeaggregationBranch } from './deaggregation.ts';
 import {
   distanceBin,
@@ -151,18 +152,7 @@ describe('deaggregate: properties', () => {
           const specs = raw.map((s) => ({ ...s, sourceId: `s${s.sourceIndex}` }));
           const d = deagg(specs, level, n);
           if (d === null) return;
-          expectClose(
-            d.bySource.reduce((s, b) => s + b.share, 0),
-            1,
-            1e-9,
-            'source shares sum to 1',
-          );
-          expectClose(
-            d.bins.reduce((s, b) => s + b.share, 0),
-            1,
-            1e-9,
-            'bin shares sum to 1',
-          );
+          expectSharesSumToOne(d);
           const ms = specs.map((s) => s.magnitude);
           expect(d.mean.magnitude).toBeGreaterThanOrEqual(Math.min(...ms) - 1e-9);
           expect(d.mean.magnitude).toBeLessThanOrEqual(Math.max(...ms) + 1e-9);

@@ -52,19 +52,7 @@ function referenceHazard(
 ): CommunityHazard {
   const { settings } = setup.study;
   const siteXY = frame.toLocal([community.lon, community.lat]);
-  // A refined zone cell counts as itself or as its squares by the site's distance (geometry/cell-refinement.ts).
-  const ruptures = all.filter(
-    (r) =>
-      !r.cellUse ||
-      cellUsedAt(
-        r.cellUse.near,
-        r.cellUse.centre.x,
-        r.cellUse.centre.y,
-        r.cellUse.radiusKm,
-        siteXY.x,
-        siteXY.y,
-      ),
-  );
+  const ruptures = rupturesUsedAt(all, siteXY);
   const distances = ruptures.map((r) => ruptureDistances(r.surface, siteXY));
   const hazard = siteHazard({
     ruptures,
@@ -96,4 +84,26 @@ function referenceHazard(
         truncationSigma: settings.truncationSigma,
       }),
   };
+}
+
+/**
+ * The ruptures that count at a site (local km): a refined zone cell counts as itself or as its
+ * squares by the site's distance (geometry/cell-refinement.ts).
+ */
+export function rupturesUsedAt(
+  all: readonly Rupture[],
+  siteXY: { readonly x: number; readonly y: number },
+): Rupture[] {
+  return all.filter(
+    (r) =>
+      !r.cellUse ||
+      cellUsedAt(
+        r.cellUse.near,
+        r.cellUse.centre.x,
+        r.cellUse.centre.y,
+        r.cellUse.radiusKm,
+        siteXY.x,
+        siteXY.y,
+      ),
+  );
 }

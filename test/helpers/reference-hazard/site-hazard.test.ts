@@ -1,9 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { siteHazard } from './site-hazard.ts';
-import type { HazardMeasure } from '../../../api/engine/hazard/hazard-types.ts';
-import { cornell79 } from '../../../api/engine/motion/cornell79.ts';
-import { pointRuptures, ROCK_SITE } from '../../engine/hazard/point-ruptures.ts';
-import { scaledCornell } from '../../engine/hazard/test-models.ts';
+import { ROCK_SITE } from '../../engine/hazard/point-ruptures.ts';
+import {
+  TWO_SETTING_BRANCHES,
+  TWO_SETTING_MEASURES,
+  TWO_SETTING_RUPTURES,
+} from '../../engine/hazard/two-setting-tree.ts';
 import { expectRelative } from '../close.ts';
 
 /*
@@ -12,32 +14,9 @@ import { expectRelative } from '../close.ts';
  * branch, Cornell × 2. Expected: the closed forms 0.01 Q(ε) and 0.001 Q(ε) (untruncated),
  * weighted and summed by hand.
  */
-const { ruptures, distances } = pointRuptures([
-  {
-    magnitude: 6.5,
-    annualRate: 0.01,
-    repiKm: 10,
-    setting: 'crustal',
-    sourceIndex: 0,
-    sourceId: 'ridge-fault',
-  },
-  {
-    magnitude: 8,
-    annualRate: 0.001,
-    repiKm: 250,
-    setting: 'interface',
-    sourceIndex: 1,
-    sourceId: 'trench',
-  },
-]);
-const measures: HazardMeasure[] = [{ key: 'PGA', measure: { kind: 'PGA' }, levels: [0.05, 0.3] }];
-const branches = {
-  crustal: [
-    { model: cornell79, weight: 0.6 },
-    { model: scaledCornell('Scaled', 1.5), weight: 0.4 },
-  ],
-  interface: [{ model: scaledCornell('Trench2x', 2, 'interface'), weight: 1 }],
-};
+const { ruptures, distances } = TWO_SETTING_RUPTURES;
+const measures = TWO_SETTING_MEASURES;
+const branches = TWO_SETTING_BRANCHES;
 
 describe('siteHazard: logic tree over two settings (hand computation)', () => {
   const input = {

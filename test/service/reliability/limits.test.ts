@@ -11,6 +11,7 @@ import { serviceForFile } from '../helpers/service-process.ts';
 import { smallStudy } from '../helpers/small-study.ts';
 import { answerProblem } from './answer-checks.ts';
 import { type Answer, closeClient, send } from './http-client.ts';
+import { boxRing } from '../../helpers/box-ring.ts';
 
 /**
  * Limits: body size, JSON nesting depth, vertices per geometry and per study,
@@ -315,15 +316,7 @@ describe('limits, each refused with the limit named', () => {
       type: 'Feature',
       geometry: {
         type: 'Polygon',
-        coordinates: [
-          [
-            [-144, -51],
-            [-136, -51],
-            [-136, -43],
-            [-144, -43],
-            [-144, -51],
-          ],
-        ],
+        coordinates: [boxRing(-144, -51, -136, -43)],
       },
       properties: {
         id: 'wide-zone',
