@@ -112,7 +112,7 @@ describe('loadStudy: a valid study', () => {
 });
 
 describe('loadStudy: every problem at once, each with its path', () => {
-  it('reports the issue example exactly (dip out of range)', () => {
+  it('names the feature, the field, the range and the value of a dip out of range', () => {
     const study = validStudy();
     study.sources.features[3] = {
       ...study.sources.features[1],
