@@ -48,8 +48,7 @@ import {
   AGA16_CONSTANTS as K,
   AGA16_DELTA_C1_INTERFACE,
   AGA16_DELTA_C1_INTRASLAB,
-  AGA16_PGA,
-  AGA16_SA,
+  AGA16_TABLE,
   type Aga16DeltaC1Branch,
   type Aga16Row,
 } from './aga16-coefficients.ts';
@@ -234,7 +233,7 @@ export const aga16SiteTerm = (row: Aga16Row, vs30: number, pga1000G: number): nu
   aga16SiteTermFor(row, aga16SiteTerms(row, vs30), pga1000G);
 
 /** Site term of the PGA row on the reference rock (Vs30 = 1000 m/s, linear there): PGA1000 = exp(ln median at Vlin + this). */
-const ROCK_SITE_TERM = aga16SiteTerm(AGA16_PGA, K.vs30CapMS, 0);
+const ROCK_SITE_TERM = aga16SiteTerm(AGA16_TABLE.pga, K.vs30CapMS, 0);
 
 /** PGA1000 (g) of a pair from the PGA row's rupture terms and spreading logarithm. */
 export const aga16Pga1000For = (
@@ -242,9 +241,9 @@ export const aga16Pga1000For = (
   spreadingLog: number,
   distanceKm: number,
 ): number =>
-  Math.exp(aga16LnMedianAtVlinFor(AGA16_PGA, pgaTerms, spreadingLog, distanceKm) + ROCK_SITE_TERM);
-
-const SA_PERIODS_S: readonly number[] = Object.freeze(AGA16_SA.map((r) => r.periodS));
+  Math.exp(
+    aga16LnMedianAtVlinFor(AGA16_TABLE.pga, pgaTerms, spreadingLog, distanceKm) + ROCK_SITE_TERM,
+  );
 
 const eventTypeOf = (rupture: RuptureContext): Aga16EventType =>
   rupture.setting === 'intraslab' ? 'intraslab' : 'interface';
@@ -296,7 +295,7 @@ function predictAga16(
     );
   const termsOf = (row: Aga16Row): Aga16RuptureTerms =>
     aga16RuptureTerms(row, eventType, input.magnitude, input.hypoDepthKm, branch);
-  const pgaTerms = termsOf(AGA16_PGA);
+  const pgaTerms = termsOf(AGA16_TABLE.pga);
   const spreadingLog = aga16SpreadingLog(pgaTerms, distanceKm);
   const pga1000G = aga16Pga1000For(pgaTerms, spreadingLog, distanceKm);
   const predictRow = (row: Aga16Row): GmmPrediction => ({
@@ -309,9 +308,12 @@ function predictAga16(
     applicable: notes.length === 0,
     notes,
   });
-  if (measure.kind === 'PGA') return predictRow(AGA16_PGA);
-  return predictAtPeriod(name, SA_PERIODS_S, (measure as { periodS: number }).periodS, (i) =>
-    predictRow(AGA16_SA[i] as Aga16Row),
+  if (measure.kind === 'PGA') return predictRow(AGA16_TABLE.pga);
+  return predictAtPeriod(
+    name,
+    AGA16_TABLE.saPeriodsS,
+    (measure as { periodS: number }).periodS,
+    (i) => predictRow(AGA16_TABLE.sa[i] as Aga16Row),
   );
 }
 
@@ -341,11 +343,11 @@ function prepareAga16Measures(
       aga16RuptureTerms(row, eventTypeOf(r), r.magnitude, r.hypoDepthKm, branch),
     ),
   }));
-  const pga = termsOf(AGA16_PGA).terms;
+  const pga = termsOf(AGA16_TABLE.pga).terms;
   const plans: RowPlan<PreparedRow>[] = measures.map((m) =>
     m.kind !== 'SA'
-      ? singleRow(termsOf(AGA16_PGA))
-      : mapPlan(periodRows(name, SA_PERIODS_S, AGA16_SA, m.periodS), termsOf),
+      ? singleRow(termsOf(AGA16_TABLE.pga))
+      : mapPlan(periodRows(name, AGA16_TABLE.saPeriodsS, AGA16_TABLE.sa, m.periodS), termsOf),
   );
   const rows = plannedRows(plans).map((p) => p.row);
   const distances: DistanceName[] = [];
@@ -433,7 +435,7 @@ export function createAga16(branch: Aga16DeltaC1Branch): GroundMotionModel {
     settings: ['interface', 'intraslab'],
     // Rrup is the interface metric; intraslab predictions use Rhypo (see the top comment).
     distanceMetric: 'rrup',
-    periodsS: SA_PERIODS_S,
+    periodsS: AGA16_TABLE.saPeriodsS,
     hasPga: true,
     hasPgv: false,
     validity: Object.freeze({

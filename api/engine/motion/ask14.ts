@@ -60,9 +60,8 @@ import { hypot2 } from './fast-math.ts';
 import { rowMemo } from './prepared-period.ts';
 import {
   ASK14_CONSTANTS as K,
-  ASK14_PGA,
+  ASK14_TABLE,
   ASK14_PGV,
-  ASK14_SA,
   type Ask14Row,
 } from './ask14-coefficients.ts';
 import type { Measure } from './measure.ts';
@@ -85,8 +84,6 @@ import type {
 import { insideValidity, requireInputs, validityNotes } from './validity.ts';
 
 const NAME = 'ASK14';
-const SA_PERIODS_S: readonly number[] = Object.freeze(ASK14_SA.map((r) => r.periodS));
-
 /** Vs30 of the reference rock whose median drives the nonlinear site term, m/s. */
 export const ASK14_ROCK_VS30 = 1180;
 
@@ -390,10 +387,8 @@ export function predictAsk14(input: GmmInput, measure: Measure): GmmPrediction {
 /** The model as rupture terms and pair prediction, for the fast path (split-prepare.ts): the same functions predict() uses. */
 const SPLIT: SplitModel<Ask14Row, Ask14RuptureTerms> = {
   name: NAME,
-  pga: ASK14_PGA,
+  table: ASK14_TABLE,
   pgv: ASK14_PGV,
-  sa: ASK14_SA,
-  periodsS: SA_PERIODS_S,
   distances: ['rrupKm', 'rjbKm', 'rxKm', 'ry0Km'],
   checkMeasure: requirePositivePeriod,
   checkRupture: (rupture) => void ruptureOf(rupture as GmmInput),
@@ -411,7 +406,7 @@ export const ask14: GroundMotionModel = assembleModel({
     'Abrahamson, N. A., Silva, W. J. & Kamai, R. (2014). Summary of the ASK14 ground motion relation for active crustal regions. Earthquake Spectra 30(3), 1025–1055.',
   settings: ['crustal'],
   distanceMetric: 'rrup',
-  periodsS: SA_PERIODS_S,
+  periodsS: ASK14_TABLE.saPeriodsS,
   hasPga: true,
   hasPgv: true,
   validity: ASK14_VALIDITY,

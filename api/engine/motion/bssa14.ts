@@ -46,9 +46,8 @@
 import { hypot2 } from './fast-math.ts';
 import {
   BSSA14_CONSTANTS as K,
-  BSSA14_PGA,
+  BSSA14_TABLE,
   BSSA14_PGV,
-  BSSA14_SA,
   type Bssa14Row,
 } from './bssa14-coefficients.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
@@ -183,7 +182,9 @@ export function bssa14PathTerm(row: Bssa14Row, slope: number, rjbKm: number): nu
  * rupture terms and Rjb in km: PGAr is the model's median PGA (g) at Vs30 = Vref = 760 m/s.
  */
 export function bssa14RockFactor(pgaTerms: Bssa14RuptureTerms, rjbKm: number): number {
-  const pgaRockG = Math.exp(pgaTerms.source + bssa14PathTerm(BSSA14_PGA, pgaTerms.slope, rjbKm));
+  const pgaRockG = Math.exp(
+    pgaTerms.source + bssa14PathTerm(BSSA14_TABLE.pga, pgaTerms.slope, rjbKm),
+  );
   return Math.log((pgaRockG + K.f3G) / K.f3G);
 }
 
@@ -244,8 +245,6 @@ function mechanismOf(rupture: RuptureContext, options: Bssa14Options): Bssa14Mec
 
 const requireVs30 = (vs30: number): void => requireInputs(NAME, { vs30 }, ['vs30']);
 
-const SA_PERIODS_S: readonly number[] = Object.freeze(BSSA14_SA.map((r) => r.periodS));
-
 /**
  * BSSA14 median and standard deviations for one measure (PGA and PSA in g, PGV in cm/s; all
  * in ln units). Uses magnitude, rakeDeg, rjbKm, vs30 and setting of the input.
@@ -265,7 +264,7 @@ export function predictBssa14(
       `${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`,
     );
   const rockFactor = bssa14RockFactor(
-    bssa14RuptureTerms(BSSA14_PGA, input.magnitude, mechanism),
+    bssa14RuptureTerms(BSSA14_TABLE.pga, input.magnitude, mechanism),
     input.rjbKm,
   );
 
@@ -285,12 +284,12 @@ export function predictBssa14(
   };
   switch (measure.kind) {
     case 'PGA':
-      return predictRow(BSSA14_PGA);
+      return predictRow(BSSA14_TABLE.pga);
     case 'PGV':
       return predictRow(BSSA14_PGV);
     case 'SA':
-      return predictAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) =>
-        predictRow(BSSA14_SA[i] as Bssa14Row),
+      return predictAtPeriod(NAME, BSSA14_TABLE.saPeriodsS, measure.periodS, (i) =>
+        predictRow(BSSA14_TABLE.sa[i] as Bssa14Row),
       );
   }
 }
@@ -324,8 +323,9 @@ export function prepareBssa14Measures(
     ),
   }));
   const plans: RowPlan<PreparedRow>[] = measures.map((m) => {
-    if (m.kind !== 'SA') return singleRow(termsOf(m.kind === 'PGA' ? BSSA14_PGA : BSSA14_PGV));
-    return mapPlan(periodRows(NAME, SA_PERIODS_S, BSSA14_SA, m.periodS), termsOf);
+    if (m.kind !== 'SA')
+      return singleRow(termsOf(m.kind === 'PGA' ? BSSA14_TABLE.pga : BSSA14_PGV));
+    return mapPlan(periodRows(NAME, BSSA14_TABLE.saPeriodsS, BSSA14_TABLE.sa, m.periodS), termsOf);
   });
   const rows = plannedRows(plans).map((p) => p.row);
   let pgaTerms: readonly Bssa14RuptureTerms[] | undefined;
@@ -363,7 +363,7 @@ export function prepareBssa14Measures(
       rockFactor = atLeast(rockFactor, count);
       // PGAr is needed only where some row's f2 is not 0 (Vs30 below 760 m/s).
       if (rows.some((row) => bssa14SiteTerms(row, site.vs30).f2 !== 0)) {
-        pgaTerms ??= termsOf(BSSA14_PGA).terms;
+        pgaTerms ??= termsOf(BSSA14_TABLE.pga).terms;
         for (let k = 0; k < count; k++)
           rockFactor[k] = bssa14RockFactor(
             pgaTerms[rupture[k] as number] as Bssa14RuptureTerms,
@@ -395,7 +395,7 @@ export const bssa14: GroundMotionModel = assembleModel({
     'Boore, D. M., Stewart, J. P., Seyhan, E. & Atkinson, G. M. (2014). NGA-West2 equations for predicting PGA, PGV, and 5% damped PSA for shallow crustal earthquakes. Earthquake Spectra 30(3), 1057–1085.',
   settings: ['crustal'],
   distanceMetric: 'rjb',
-  periodsS: SA_PERIODS_S,
+  periodsS: BSSA14_TABLE.saPeriodsS,
   hasPga: true,
   hasPgv: true,
   validity: BSSA14_VALIDITY,

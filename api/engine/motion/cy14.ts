@@ -47,7 +47,7 @@
  */
 import { toRadians } from '../units.ts';
 import { hypot2 } from './fast-math.ts';
-import { CY14_PGA, CY14_PGV, CY14_SA, type Cy14Row } from './cy14-coefficients.ts';
+import { CY14_TABLE, CY14_PGV, type Cy14Row } from './cy14-coefficients.ts';
 import type { Measure } from './measure.ts';
 import { assembleModel } from './model-assembly.ts';
 import { rowMemo } from './prepared-period.ts';
@@ -69,8 +69,6 @@ import type {
 import { insideValidity, requireInputs, validityNotes, within } from './validity.ts';
 
 const NAME = 'CY14';
-const SA_PERIODS_S: readonly number[] = Object.freeze(CY14_SA.map((r) => r.periodS));
-
 /** Vs30 of the reference motion y_ref, m/s. */
 export const CY14_REFERENCE_VS30 = 1130;
 
@@ -353,10 +351,8 @@ export function predictCy14(input: GmmInput, measure: Measure): GmmPrediction {
 /** The model as rupture terms and pair prediction, for the fast path (split-prepare.ts): the same functions predict() uses. */
 const SPLIT: SplitModel<Cy14Row, Cy14RuptureTerms> = {
   name: NAME,
-  pga: CY14_PGA,
+  table: CY14_TABLE,
   pgv: CY14_PGV,
-  sa: CY14_SA,
-  periodsS: SA_PERIODS_S,
   distances: ['rrupKm', 'rjbKm', 'rxKm'],
   checkMeasure: requirePositivePeriod,
   checkRupture: (rupture) => void ruptureOf(rupture as GmmInput),
@@ -376,7 +372,7 @@ export const cy14: GroundMotionModel = assembleModel({
     'Chiou, B. S.-J. & Youngs, R. R. (2014). Update of the Chiou and Youngs NGA model for the average horizontal component of peak ground motion and response spectra. Earthquake Spectra 30(3), 1117–1153.',
   settings: ['crustal'],
   distanceMetric: 'rrup',
-  periodsS: SA_PERIODS_S,
+  periodsS: CY14_TABLE.saPeriodsS,
   hasPga: true,
   hasPgv: true,
   validity: CY14_VALIDITY,

@@ -1,4 +1,5 @@
 import { UnsupportedMeasure } from '../errors.ts';
+import type { ModelTable } from './coefficient-table.ts';
 import { predictAtPeriod } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
 import {
@@ -28,11 +29,10 @@ import type {
  */
 export interface SplitModel<Row, Terms> {
   readonly name: string;
-  readonly pga: Row;
+  /** The model's coefficient table: its PGA row and spectral rows. */
+  readonly table: ModelTable<Row>;
   /** The PGV row, where the model has one (a model without refuses PGV in checkMeasure). */
   readonly pgv?: Row;
-  readonly sa: readonly Row[];
-  readonly periodsS: readonly number[];
   /** The distance columns pairPrediction reads. */
   readonly distances: readonly DistanceName[];
   /** Throws what predict() throws for a measure the model cannot give. */
@@ -88,8 +88,11 @@ export function prepareSplitMeasures<Row, Terms>(
   }));
   const plans: RowPlan<PreparedRow<Row, Terms>>[] = measures.map((m) => {
     if (m.kind === 'SA')
-      return mapPlan(periodRows(model.name, model.periodsS, model.sa, m.periodS), termsOf);
-    return singleRow(termsOf(m.kind === 'PGA' ? model.pga : (model.pgv as Row)));
+      return mapPlan(
+        periodRows(model.name, model.table.saPeriodsS, model.table.sa, m.periodS),
+        termsOf,
+      );
+    return singleRow(termsOf(m.kind === 'PGA' ? model.table.pga : (model.pgv as Row)));
   });
   const scratch = createRowScratch();
   const pair = {} as MutablePair;
@@ -167,10 +170,10 @@ export function predictSplit<Row, Terms>(
 ): GmmPrediction {
   model.checkMeasure(measure);
   if (measure.kind === 'SA')
-    return predictAtPeriod(model.name, model.periodsS, measure.periodS, (i) =>
-      predictRow(model.sa[i] as Row),
+    return predictAtPeriod(model.name, model.table.saPeriodsS, measure.periodS, (i) =>
+      predictRow(model.table.sa[i] as Row),
     );
-  return predictRow(measure.kind === 'PGA' ? model.pga : (model.pgv as Row));
+  return predictRow(measure.kind === 'PGA' ? model.table.pga : (model.pgv as Row));
 }
 
 /** The prepareMeasures hook of a SplitModel (model-assembly.ts derives prepare from it). */

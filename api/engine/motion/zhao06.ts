@@ -55,12 +55,7 @@ import type {
   ValidityRange,
 } from './types.ts';
 import { requireInput, requireInputs, validityNotes } from './validity.ts';
-import {
-  ZHAO06_CONSTANTS as K,
-  ZHAO06_PGA,
-  ZHAO06_SA,
-  type Zhao06Row,
-} from './zhao06-coefficients.ts';
+import { ZHAO06_CONSTANTS as K, ZHAO06_TABLE, type Zhao06Row } from './zhao06-coefficients.ts';
 
 /** Standard gravity, cm/s²: the equation's y is in cm/s². */
 const STANDARD_GRAVITY_CMS2 = 980.665;
@@ -182,8 +177,6 @@ export const ZHAO06_VALIDITY: ValidityRange = Object.freeze({
   depthKm: [0, 125],
 } as const);
 
-const SA_PERIODS_S: readonly number[] = Object.freeze(ZHAO06_SA.map((r) => r.periodS));
-
 function checkRupture(name: string, rupture: RuptureContext): boolean {
   requireInputs(name, rupture, ['magnitude']);
   requireInput(
@@ -236,9 +229,12 @@ export function createZhao06(magnitudeSquared: boolean): GroundMotionModel {
         notes,
       };
     };
-    if (measure.kind === 'PGA') return predictRow(ZHAO06_PGA);
-    return predictAtPeriod(name, SA_PERIODS_S, (measure as { periodS: number }).periodS, (i) =>
-      predictRow(ZHAO06_SA[i] as Zhao06Row),
+    if (measure.kind === 'PGA') return predictRow(ZHAO06_TABLE.pga);
+    return predictAtPeriod(
+      name,
+      ZHAO06_TABLE.saPeriodsS,
+      (measure as { periodS: number }).periodS,
+      (i) => predictRow(ZHAO06_TABLE.sa[i] as Zhao06Row),
     );
   }
 
@@ -254,8 +250,8 @@ export function createZhao06(magnitudeSquared: boolean): GroundMotionModel {
     }));
     const plans: RowPlan<PreparedRow>[] = measures.map((m) =>
       m.kind !== 'SA'
-        ? singleRow(termsOf(ZHAO06_PGA))
-        : mapPlan(periodRows(name, SA_PERIODS_S, ZHAO06_SA, m.periodS), termsOf),
+        ? singleRow(termsOf(ZHAO06_TABLE.pga))
+        : mapPlan(periodRows(name, ZHAO06_TABLE.saPeriodsS, ZHAO06_TABLE.sa, m.periodS), termsOf),
     );
     const scratch = createRowScratch();
     const [minKm, maxKm] = ZHAO06_VALIDITY.distanceKm;
@@ -296,7 +292,7 @@ export function createZhao06(magnitudeSquared: boolean): GroundMotionModel {
     citation: `Zhao, J. X. et al. (2006). Attenuation relations of strong ground motion in Japan using site classification based on predominant period. Bulletin of the Seismological Society of America 96(3), 898–913.${magnitudeSquared ? ' With the magnitude-squared term.' : ''}`,
     settings: ['interface', 'intraslab', 'crustal'],
     distanceMetric: 'rrup',
-    periodsS: SA_PERIODS_S,
+    periodsS: ZHAO06_TABLE.saPeriodsS,
     hasPga: true,
     hasPgv: false,
     validity: ZHAO06_VALIDITY,
