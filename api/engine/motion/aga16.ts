@@ -52,20 +52,18 @@ import {
   type Aga16DeltaC1Branch,
   type Aga16Row,
 } from './aga16-coefficients.ts';
-import { predictAtPeriod } from './interpolate-period.ts';
+import { predictOnTable } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
 import { assembleModel } from './model-assembly.ts';
 import {
   atLeast,
   createRowScratch,
   insideRange,
-  mapPlan,
-  periodRows,
   plannedRows,
   predictRows,
   rowMemo,
-  singleRow,
   type RowPlan,
+  measurePlan,
 } from './prepared-period.ts';
 import type {
   DistanceName,
@@ -308,13 +306,7 @@ function predictAga16(
     applicable: notes.length === 0,
     notes,
   });
-  if (measure.kind === 'PGA') return predictRow(AGA16_TABLE.pga);
-  return predictAtPeriod(
-    name,
-    AGA16_TABLE.saPeriodsS,
-    (measure as { periodS: number }).periodS,
-    (i) => predictRow(AGA16_TABLE.sa[i] as Aga16Row),
-  );
+  return predictOnTable(name, AGA16_TABLE, undefined, measure, predictRow);
 }
 
 /** One row's rupture terms for every prepared rupture. */
@@ -345,9 +337,7 @@ function prepareAga16Measures(
   }));
   const pga = termsOf(AGA16_TABLE.pga).terms;
   const plans: RowPlan<PreparedRow>[] = measures.map((m) =>
-    m.kind !== 'SA'
-      ? singleRow(termsOf(AGA16_TABLE.pga))
-      : mapPlan(periodRows(name, AGA16_TABLE.saPeriodsS, AGA16_TABLE.sa, m.periodS), termsOf),
+    measurePlan(name, AGA16_TABLE, undefined, m, termsOf),
   );
   const rows = plannedRows(plans).map((p) => p.row);
   const distances: DistanceName[] = [];

@@ -55,7 +55,7 @@
  * How it is checked: test/engine/motion/ask14.test.ts reproduces the reference vectors
  * (../shared/reference/gmm/vectors/ask14.json, an independent implementation of the paper) within 1e-4.
  */
-import { toRadians } from '../units.ts';
+import { toRadians, wrapDeg180 } from '../units.ts';
 import { hypot2 } from './fast-math.ts';
 import { rowMemo } from './prepared-period.ts';
 import {
@@ -81,7 +81,7 @@ import type {
   SiteContext,
   ValidityRange,
 } from './types.ts';
-import { insideValidity, requireInputs, validityNotes } from './validity.ts';
+import { crustalOnlyNotes, insideValidity, requireInputs, validityNotes } from './validity.ts';
 
 const NAME = 'ASK14';
 /** Vs30 of the reference rock whose median drives the nonlinear site term, m/s. */
@@ -91,7 +91,7 @@ export type Ask14Mechanism = 'strike-slip' | 'normal' | 'reverse';
 
 /** The paper's rake classes (degrees, any turn): reverse 30..150, normal −150..−30 (open). */
 export function ask14MechanismFromRake(rakeDeg: number): Ask14Mechanism {
-  const rake = ((((rakeDeg + 180) % 360) + 360) % 360) - 180;
+  const rake = wrapDeg180(rakeDeg);
   if (rake > 30 && rake < 150) return 'reverse';
   if (rake > -150 && rake < -30) return 'normal';
   return 'strike-slip';
@@ -360,11 +360,7 @@ function checkPair(input: GmmInput): void {
 
 function notesOf(input: GmmInput): string[] {
   const notes = validityNotes(NAME, ASK14_VALIDITY, input, input.rrupKm);
-  if (input.setting !== 'crustal')
-    notes.unshift(
-      `${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`,
-    );
-  return notes;
+  return crustalOnlyNotes(NAME, input.setting, notes);
 }
 
 /**

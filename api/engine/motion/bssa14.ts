@@ -43,6 +43,7 @@
  * How the table is checked: test/engine/motion/bssa14.vectors.test.ts (independent reference
  * vectors, 1e-4 in ln units).
  */
+import { wrapDeg180 } from '../units.ts';
 import { hypot2 } from './fast-math.ts';
 import {
   BSSA14_CONSTANTS as K,
@@ -50,7 +51,7 @@ import {
   BSSA14_PGV,
   type Bssa14Row,
 } from './bssa14-coefficients.ts';
-import { predictAtPeriod } from './interpolate-period.ts';
+import { predictOnTable } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
 import { assembleModel } from './model-assembly.ts';
 import { requirePositivePeriod } from './split-prepare.ts';
@@ -58,14 +59,12 @@ import {
   atLeast,
   createRowScratch,
   insideRange,
-  mapPlan,
-  periodRows,
   plannedRows,
   predictRows,
   rowMemo,
   singleMeasure,
-  singleRow,
   type RowPlan,
+  measurePlan,
 } from './prepared-period.ts';
 import type {
   GmmInput,
@@ -79,7 +78,7 @@ import type {
   SiteContext,
   ValidityRange,
 } from './types.ts';
-import { requireInputs, validityNotes } from './validity.ts';
+import { crustalOnlyNotes, requireInputs, validityNotes } from './validity.ts';
 
 const NAME = 'BSSA14';
 
@@ -87,7 +86,7 @@ export type Bssa14Mechanism = 'unspecified' | 'strike-slip' | 'normal' | 'revers
 
 /** The paper's rake classes (rake in degrees, any turn): normal −150..−30, reverse 30..150 (open). */
 export function bssa14MechanismFromRake(rakeDeg: number): 'strike-slip' | 'normal' | 'reverse' {
-  const rake = ((((rakeDeg + 180) % 360) + 360) % 360) - 180;
+  const rake = wrapDeg180(rakeDeg);
   if (rake > -150 && rake < -30) return 'normal';
   if (rake > 30 && rake < 150) return 'reverse';
   return 'strike-slip';
@@ -258,11 +257,11 @@ export function predictBssa14(
   requireInputs(NAME, input, ['rjbKm', 'vs30']);
   requirePositivePeriod(measure);
   const range = mechanism === 'normal' ? BSSA14_NORMAL_VALIDITY : BSSA14_VALIDITY;
-  const notes = validityNotes(NAME, range, input, input.rjbKm);
-  if (input.setting !== 'crustal')
-    notes.unshift(
-      `${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`,
-    );
+  const notes = crustalOnlyNotes(
+    NAME,
+    input.setting,
+    validityNotes(NAME, range, input, input.rjbKm),
+  );
   const rockFactor = bssa14RockFactor(
     bssa14RuptureTerms(BSSA14_TABLE.pga, input.magnitude, mechanism),
     input.rjbKm,
@@ -282,16 +281,7 @@ export function predictBssa14(
       notes,
     };
   };
-  switch (measure.kind) {
-    case 'PGA':
-      return predictRow(BSSA14_TABLE.pga);
-    case 'PGV':
-      return predictRow(BSSA14_PGV);
-    case 'SA':
-      return predictAtPeriod(NAME, BSSA14_TABLE.saPeriodsS, measure.periodS, (i) =>
-        predictRow(BSSA14_TABLE.sa[i] as Bssa14Row),
-      );
-  }
+  return predictOnTable(NAME, BSSA14_TABLE, BSSA14_PGV, measure, predictRow);
 }
 
 /** One row's rupture terms for every prepared rupture. */
@@ -322,11 +312,9 @@ export function prepareBssa14Measures(
       bssa14RuptureTerms(row, r.magnitude, mechanisms[i] as Bssa14Mechanism),
     ),
   }));
-  const plans: RowPlan<PreparedRow>[] = measures.map((m) => {
-    if (m.kind !== 'SA')
-      return singleRow(termsOf(m.kind === 'PGA' ? BSSA14_TABLE.pga : BSSA14_PGV));
-    return mapPlan(periodRows(NAME, BSSA14_TABLE.saPeriodsS, BSSA14_TABLE.sa, m.periodS), termsOf);
-  });
+  const plans: RowPlan<PreparedRow>[] = measures.map((m) =>
+    measurePlan(NAME, BSSA14_TABLE, BSSA14_PGV, m, termsOf),
+  );
   const rows = plannedRows(plans).map((p) => p.row);
   let pgaTerms: readonly Bssa14RuptureTerms[] | undefined;
   let rockFactor: Float64Array = new Float64Array(0);

@@ -49,7 +49,7 @@
  * predict() and the fast path (split-prepare.ts) both call them. How the table is checked:
  * test/engine/motion/cb14.vectors.test.ts (independent reference vectors, 1e-4 in ln units).
  */
-import { toRadians } from '../units.ts';
+import { toRadians, wrapDeg180 } from '../units.ts';
 import { hypot2 } from './fast-math.ts';
 import { rowMemo } from './prepared-period.ts';
 import { CB14_CONSTANTS as K, CB14_TABLE, CB14_PGV, type Cb14Row } from './cb14-coefficients.ts';
@@ -70,7 +70,14 @@ import type {
   RuptureContext,
   ValidityRange,
 } from './types.ts';
-import { insideValidity, requireInputs, validityNotes, within } from './validity.ts';
+import {
+  crustalOnlyNotes,
+  insideValidity,
+  requireInputs,
+  validityNotes,
+  within,
+  validityByMechanism,
+} from './validity.ts';
 
 const NAME = 'CB14';
 
@@ -78,7 +85,7 @@ export type Cb14Mechanism = 'strike-slip' | 'normal' | 'reverse';
 
 /** The paper's rake classes (degrees, any turn): reverse 30..150, normal −150..−30 (open). */
 export function cb14MechanismFromRake(rakeDeg: number): Cb14Mechanism {
-  const rake = ((((rakeDeg + 180) % 360) + 360) % 360) - 180;
+  const rake = wrapDeg180(rakeDeg);
   if (rake > 30 && rake < 150) return 'reverse';
   if (rake > -150 && rake < -30) return 'normal';
   return 'strike-slip';
@@ -412,7 +419,7 @@ export const CB14_MAGNITUDE_RANGE: Readonly<Record<Cb14Mechanism, readonly [numb
 
 /** Validity over all mechanisms (strike-slip's magnitude range; the others stop lower). */
 export const CB14_VALIDITY: ValidityRange = Object.freeze({
-  magnitude: [3.3, 8.5],
+  magnitude: CB14_MAGNITUDE_RANGE['strike-slip'],
   distanceKm: [0, 300],
   vs30: [150, 1500],
   depthKm: [0, 20],
@@ -444,11 +451,7 @@ function scenarioOf(input: GmmInput): Cb14Scenario {
 }
 
 /** CB14_VALIDITY with each mechanism's own magnitude range. */
-const MAGNITUDE_VALIDITY: Readonly<Record<Cb14Mechanism, ValidityRange>> = Object.freeze({
-  'strike-slip': { ...CB14_VALIDITY, magnitude: CB14_MAGNITUDE_RANGE['strike-slip'] },
-  reverse: { ...CB14_VALIDITY, magnitude: CB14_MAGNITUDE_RANGE.reverse },
-  normal: { ...CB14_VALIDITY, magnitude: CB14_MAGNITUDE_RANGE.normal },
-});
+const MAGNITUDE_VALIDITY = validityByMechanism(CB14_VALIDITY, CB14_MAGNITUDE_RANGE);
 
 function notesOf(input: GmmInput, s: Cb14Scenario): string[] {
   const notes = validityNotes(NAME, MAGNITUDE_VALIDITY[s.mechanism], input, s.rrupKm);
@@ -461,11 +464,7 @@ function notesOf(input: GmmInput, s: Cb14Scenario): string[] {
   outside('depth to top of rupture', s.ztorKm, 0, 20, ' km');
   outside('dip', s.dipDeg, 15, 90, '°');
   if (input.z2p5Km !== undefined) outside('Z2.5', input.z2p5Km, 0, 10, ' km');
-  if (input.setting !== 'crustal')
-    notes.unshift(
-      `${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`,
-    );
-  return notes;
+  return crustalOnlyNotes(NAME, input.setting, notes);
 }
 
 /**

@@ -45,7 +45,7 @@
  * How it is checked: test/engine/motion/cy14.test.ts reproduces the reference vectors
  * (../shared/reference/gmm/vectors/cy14.json, an independent implementation of the paper) within 1e-4.
  */
-import { toRadians } from '../units.ts';
+import { toRadians, wrapDeg180 } from '../units.ts';
 import { hypot2 } from './fast-math.ts';
 import { CY14_TABLE, CY14_PGV, type Cy14Row } from './cy14-coefficients.ts';
 import type { Measure } from './measure.ts';
@@ -66,7 +66,14 @@ import type {
   SiteContext,
   ValidityRange,
 } from './types.ts';
-import { insideValidity, requireInputs, validityNotes, within } from './validity.ts';
+import {
+  crustalOnlyNotes,
+  insideValidity,
+  requireInputs,
+  validityNotes,
+  within,
+  validityByMechanism,
+} from './validity.ts';
 
 const NAME = 'CY14';
 /** Vs30 of the reference motion y_ref, m/s. */
@@ -76,7 +83,7 @@ export type Cy14Mechanism = 'strike-slip' | 'normal' | 'reverse';
 
 /** The paper's rake classes (degrees, any turn): reverse 30..150, normal −120..−60 (closed). */
 export function cy14MechanismFromRake(rakeDeg: number): Cy14Mechanism {
-  const rake = ((((rakeDeg + 180) % 360) + 360) % 360) - 180;
+  const rake = wrapDeg180(rakeDeg);
   if (rake >= 30 && rake <= 150) return 'reverse';
   if (rake >= -120 && rake <= -60) return 'normal';
   return 'strike-slip';
@@ -292,7 +299,7 @@ export const CY14_MAGNITUDE_RANGE: Readonly<Record<Cy14Mechanism, readonly [numb
 
 /** Validity over all mechanisms (strike-slip's magnitude range; the others stop lower). */
 export const CY14_VALIDITY: ValidityRange = Object.freeze({
-  magnitude: [3.5, 8.5],
+  magnitude: CY14_MAGNITUDE_RANGE['strike-slip'],
   distanceKm: [0, 300],
   vs30: [180, 1500],
 } as const);
@@ -312,11 +319,7 @@ function checkPair(input: GmmInput): void {
 }
 
 /** CY14_VALIDITY with each mechanism's own magnitude range. */
-const MAGNITUDE_VALIDITY: Readonly<Record<Cy14Mechanism, ValidityRange>> = Object.freeze({
-  'strike-slip': { ...CY14_VALIDITY, magnitude: CY14_MAGNITUDE_RANGE['strike-slip'] },
-  reverse: { ...CY14_VALIDITY, magnitude: CY14_MAGNITUDE_RANGE.reverse },
-  normal: { ...CY14_VALIDITY, magnitude: CY14_MAGNITUDE_RANGE.normal },
-});
+const MAGNITUDE_VALIDITY = validityByMechanism(CY14_VALIDITY, CY14_MAGNITUDE_RANGE);
 
 function notesOf(input: GmmInput, rupture: Cy14Rupture): string[] {
   const notes = validityNotes(NAME, MAGNITUDE_VALIDITY[rupture.mechanism], input, input.rrupKm);
@@ -324,11 +327,7 @@ function notesOf(input: GmmInput, rupture: Cy14Rupture): string[] {
     notes.push(
       `${NAME}: depth to top of rupture ${Math.round(rupture.ztorKm * 100) / 100} km is outside its range 0–20 km`,
     );
-  if (input.setting !== 'crustal')
-    notes.unshift(
-      `${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`,
-    );
-  return notes;
+  return crustalOnlyNotes(NAME, input.setting, notes);
 }
 
 /**

@@ -1,15 +1,13 @@
 import { UnsupportedMeasure } from '../errors.ts';
 import type { ModelTable } from './coefficient-table.ts';
-import { predictAtPeriod } from './interpolate-period.ts';
+import { predictOnTable } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
 import {
   createRowScratch,
-  mapPlan,
-  periodRows,
   predictRows,
   rowMemo,
-  singleRow,
   type RowPlan,
+  measurePlan,
 } from './prepared-period.ts';
 import type {
   DistanceName,
@@ -86,14 +84,9 @@ export function prepareSplitMeasures<Row, Terms>(
     row,
     terms: ruptures.map((r) => model.ruptureTerms(row, r)),
   }));
-  const plans: RowPlan<PreparedRow<Row, Terms>>[] = measures.map((m) => {
-    if (m.kind === 'SA')
-      return mapPlan(
-        periodRows(model.name, model.table.saPeriodsS, model.table.sa, m.periodS),
-        termsOf,
-      );
-    return singleRow(termsOf(m.kind === 'PGA' ? model.table.pga : (model.pgv as Row)));
-  });
+  const plans: RowPlan<PreparedRow<Row, Terms>>[] = measures.map((m) =>
+    measurePlan(model.name, model.table, model.pgv, m, termsOf),
+  );
   const scratch = createRowScratch();
   const pair = {} as MutablePair;
   const prediction = emptyPairPrediction();
@@ -158,22 +151,14 @@ export function requirePositivePeriod(measure: Measure): void {
     throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
 }
 
-/**
- * predict() of a SplitModel for one measure, once the caller has checked the inputs: the PGA
- * or PGV row, or for SA the table rows either side of the period interpolated in ln(period)
- * (interpolate-period.ts), each row through `predictRow`.
- */
+/** predict() of a SplitModel for one measure, once the caller has checked the inputs (predictOnTable). */
 export function predictSplit<Row, Terms>(
   model: SplitModel<Row, Terms>,
   measure: Measure,
   predictRow: (row: Row) => GmmPrediction,
 ): GmmPrediction {
   model.checkMeasure(measure);
-  if (measure.kind === 'SA')
-    return predictAtPeriod(model.name, model.table.saPeriodsS, measure.periodS, (i) =>
-      predictRow(model.table.sa[i] as Row),
-    );
-  return predictRow(measure.kind === 'PGA' ? model.table.pga : (model.pgv as Row));
+  return predictOnTable(model.name, model.table, model.pgv, measure, predictRow);
 }
 
 /** The prepareMeasures hook of a SplitModel (model-assembly.ts derives prepare from it). */

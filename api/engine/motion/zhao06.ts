@@ -29,20 +29,19 @@
  * predict() and the fast path call both. Checked against independent vectors in
  * test/engine/motion/zhao06.vectors.test.ts.
  */
+import { wrapDeg180 } from '../units.ts';
 import { UnsupportedMeasure } from '../errors.ts';
 import type { TectonicSetting } from '../model.ts';
-import { predictAtPeriod } from './interpolate-period.ts';
+import { predictOnTable } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
 import { assembleModel } from './model-assembly.ts';
 import {
   createRowScratch,
   insideRange,
-  mapPlan,
-  periodRows,
   predictRows,
   rowMemo,
-  singleRow,
   type RowPlan,
+  measurePlan,
 } from './prepared-period.ts';
 import type {
   GmmInput,
@@ -103,7 +102,7 @@ export interface Zhao06RuptureTerms {
 
 /** Reverse faulting by rake (degrees, any turn): 30..150 (open), as for the other models. */
 const isReverse = (rakeDeg: number): boolean => {
-  const rake = ((((rakeDeg + 180) % 360) + 360) % 360) - 180;
+  const rake = wrapDeg180(rakeDeg);
   return rake > 30 && rake < 150;
 };
 
@@ -229,13 +228,7 @@ export function createZhao06(magnitudeSquared: boolean): GroundMotionModel {
         notes,
       };
     };
-    if (measure.kind === 'PGA') return predictRow(ZHAO06_TABLE.pga);
-    return predictAtPeriod(
-      name,
-      ZHAO06_TABLE.saPeriodsS,
-      (measure as { periodS: number }).periodS,
-      (i) => predictRow(ZHAO06_TABLE.sa[i] as Zhao06Row),
-    );
+    return predictOnTable(name, ZHAO06_TABLE, undefined, measure, predictRow);
   }
 
   function prepareMeasures(
@@ -249,9 +242,7 @@ export function createZhao06(magnitudeSquared: boolean): GroundMotionModel {
       terms: ruptures.map((r) => rowTerms(row, r)),
     }));
     const plans: RowPlan<PreparedRow>[] = measures.map((m) =>
-      m.kind !== 'SA'
-        ? singleRow(termsOf(ZHAO06_TABLE.pga))
-        : mapPlan(periodRows(name, ZHAO06_TABLE.saPeriodsS, ZHAO06_TABLE.sa, m.periodS), termsOf),
+      measurePlan(name, ZHAO06_TABLE, undefined, m, termsOf),
     );
     const scratch = createRowScratch();
     const [minKm, maxKm] = ZHAO06_VALIDITY.distanceKm;
