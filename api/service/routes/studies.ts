@@ -1,7 +1,7 @@
 import { Hono } from 'hono';
 import { terrainGridsOf } from '../../operations/terrain-grids.ts';
 import type { StudySummary } from '../../store/index.ts';
-import { notFound } from '../http-error.ts';
+import { notFound, found } from '../http-error.ts';
 import { readJsonObject } from '../request-body.ts';
 import {
   deleteStudy,
@@ -36,11 +36,7 @@ export function studyRoutes(ctx: ServiceContext): Hono {
   const app = new Hono();
   const { studies } = ctx.store;
 
-  const find = (id: string) => {
-    const record = studies.get(id);
-    if (!record) throw notFound('study', id);
-    return record;
-  };
+  const find = (id: string) => found(studies.get(id), 'study', id);
 
   app.get('/studies', (c) => c.json({ studies: studies.list().map(studyJson) }));
 
