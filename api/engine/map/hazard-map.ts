@@ -239,6 +239,13 @@ export function mapSummary(
         `${model}: ${v.outside} of ${v.evaluated} rupture predictions over the map are outside its validity range (for example, ${v.firstNote})`,
       );
   }
+  return { ...describeMap(plan), warnings };
+}
+
+/** What a planned map is of, known before any point is computed (the head of its GeoJSON). */
+export function describeMap(
+  plan: Pick<HazardMapPlan, 'grid' | 'measure' | 'unit' | 'quantity' | 'vs30'>,
+): Omit<HazardMapSummary, 'warnings'> {
   const { grid } = plan;
   return {
     measure: plan.measure.key,
@@ -249,7 +256,6 @@ export function mapSummary(
     columns: grid.columns,
     rows: grid.rows,
     count: grid.count,
-    warnings,
   };
 }
 

@@ -55,7 +55,7 @@
  * How it is checked: test/engine/motion/ask14.test.ts reproduces the reference vectors
  * (../shared/reference/gmm/vectors/ask14.json, an independent implementation of the paper) within 1e-4.
  */
-import { toRadians, wrapDeg180 } from '../units.ts';
+import { toRadians } from '../units.ts';
 import { hypot2 } from './fast-math.ts';
 import { rowMemo } from './prepared-period.ts';
 import {
@@ -65,6 +65,7 @@ import {
   type Ask14Row,
 } from './ask14-coefficients.ts';
 import type { Measure } from './measure.ts';
+import { openRakeClass, type RakeClass } from './rake-classes.ts';
 import { assembleModel } from './model-assembly.ts';
 import {
   emptyPairPrediction,
@@ -87,15 +88,10 @@ const NAME = 'ASK14';
 /** Vs30 of the reference rock whose median drives the nonlinear site term, m/s. */
 export const ASK14_ROCK_VS30 = 1180;
 
-export type Ask14Mechanism = 'strike-slip' | 'normal' | 'reverse';
+export type Ask14Mechanism = RakeClass;
 
-/** The paper's rake classes (degrees, any turn): reverse 30..150, normal −150..−30 (open). */
-export function ask14MechanismFromRake(rakeDeg: number): Ask14Mechanism {
-  const rake = wrapDeg180(rakeDeg);
-  if (rake > 30 && rake < 150) return 'reverse';
-  if (rake > -150 && rake < -30) return 'normal';
-  return 'strike-slip';
-}
+/** The paper's rake classes (rake-classes.ts): reverse 30..150, normal −150..−30 (open). */
+export const ask14MechanismFromRake: (rakeDeg: number) => Ask14Mechanism = openRakeClass;
 
 /** The rupture as the equation sees it; depths and width in km, dip in degrees. */
 export interface Ask14Rupture {

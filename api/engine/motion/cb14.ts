@@ -49,11 +49,12 @@
  * predict() and the fast path (split-prepare.ts) both call them. How the table is checked:
  * test/engine/motion/cb14.vectors.test.ts (independent reference vectors, 1e-4 in ln units).
  */
-import { toRadians, wrapDeg180 } from '../units.ts';
+import { toRadians } from '../units.ts';
 import { hypot2 } from './fast-math.ts';
 import { rowMemo } from './prepared-period.ts';
 import { CB14_CONSTANTS as K, CB14_TABLE, CB14_PGV, type Cb14Row } from './cb14-coefficients.ts';
 import type { Measure } from './measure.ts';
+import { openRakeClass, type RakeClass } from './rake-classes.ts';
 import { assembleModel } from './model-assembly.ts';
 import {
   emptyPairPrediction,
@@ -81,15 +82,10 @@ import {
 
 const NAME = 'CB14';
 
-export type Cb14Mechanism = 'strike-slip' | 'normal' | 'reverse';
+export type Cb14Mechanism = RakeClass;
 
-/** The paper's rake classes (degrees, any turn): reverse 30..150, normal −150..−30 (open). */
-export function cb14MechanismFromRake(rakeDeg: number): Cb14Mechanism {
-  const rake = wrapDeg180(rakeDeg);
-  if (rake > 30 && rake < 150) return 'reverse';
-  if (rake > -150 && rake < -30) return 'normal';
-  return 'strike-slip';
-}
+/** The paper's rake classes (rake-classes.ts): reverse 30..150, normal −150..−30 (open). */
+export const cb14MechanismFromRake: (rakeDeg: number) => Cb14Mechanism = openRakeClass;
 
 /** The earthquake and path as the equation sees them; distances and depths in km, dip in degrees. */
 export interface Cb14Scenario {
