@@ -82,7 +82,7 @@ import type {
   SiteContext,
   ValidityRange,
 } from './types.ts';
-import { crustalOnlyNotes, insideValidity, requireInputs, validityNotes } from './validity.ts';
+import { crustalValidityNotes, insideValidity, requireInputs } from './validity.ts';
 
 const NAME = 'ASK14';
 /** Vs30 of the reference rock whose median drives the nonlinear site term, m/s. */
@@ -355,8 +355,7 @@ function checkPair(input: GmmInput): void {
 }
 
 function notesOf(input: GmmInput): string[] {
-  const notes = validityNotes(NAME, ASK14_VALIDITY, input, input.rrupKm);
-  return crustalOnlyNotes(NAME, input.setting, notes);
+  return crustalValidityNotes(NAME, ASK14_VALIDITY, input, input.rrupKm);
 }
 
 /**

@@ -78,7 +78,7 @@ import type {
   SiteContext,
   ValidityRange,
 } from './types.ts';
-import { crustalOnlyNotes, requireInputs, validityNotes } from './validity.ts';
+import { crustalValidityNotes, requireInputs } from './validity.ts';
 
 const NAME = 'BSSA14';
 
@@ -257,11 +257,7 @@ export function predictBssa14(
   requireInputs(NAME, input, ['rjbKm', 'vs30']);
   requirePositivePeriod(measure);
   const range = mechanism === 'normal' ? BSSA14_NORMAL_VALIDITY : BSSA14_VALIDITY;
-  const notes = crustalOnlyNotes(
-    NAME,
-    input.setting,
-    validityNotes(NAME, range, input, input.rjbKm),
-  );
+  const notes = crustalValidityNotes(NAME, range, input, input.rjbKm);
   const rockFactor = bssa14RockFactor(
     bssa14RuptureTerms(BSSA14_TABLE.pga, input.magnitude, mechanism),
     input.rjbKm,

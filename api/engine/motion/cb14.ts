@@ -71,14 +71,7 @@ import type {
   RuptureContext,
   ValidityRange,
 } from './types.ts';
-import {
-  crustalOnlyNotes,
-  insideValidity,
-  requireInputs,
-  validityNotes,
-  within,
-  validityByMechanism,
-} from './validity.ts';
+import { crustalValidityNotes, insideValidity, requireInputs, within } from './validity.ts';
 
 const NAME = 'CB14';
 
@@ -447,10 +440,14 @@ function scenarioOf(input: GmmInput): Cb14Scenario {
 }
 
 /** CB14_VALIDITY with each mechanism's own magnitude range. */
-const MAGNITUDE_VALIDITY = validityByMechanism(CB14_VALIDITY, CB14_MAGNITUDE_RANGE);
+const MAGNITUDE_VALIDITY: Readonly<Record<Cb14Mechanism, ValidityRange>> = Object.freeze({
+  'strike-slip': { ...CB14_VALIDITY, magnitude: CB14_MAGNITUDE_RANGE['strike-slip'] },
+  reverse: { ...CB14_VALIDITY, magnitude: CB14_MAGNITUDE_RANGE.reverse },
+  normal: { ...CB14_VALIDITY, magnitude: CB14_MAGNITUDE_RANGE.normal },
+});
 
 function notesOf(input: GmmInput, s: Cb14Scenario): string[] {
-  const notes = validityNotes(NAME, MAGNITUDE_VALIDITY[s.mechanism], input, s.rrupKm);
+  const notes = crustalValidityNotes(NAME, MAGNITUDE_VALIDITY[s.mechanism], input, s.rrupKm);
   const outside = (label: string, value: number, min: number, max: number, unit: string): void => {
     if (value < min || value > max)
       notes.push(
@@ -460,7 +457,7 @@ function notesOf(input: GmmInput, s: Cb14Scenario): string[] {
   outside('depth to top of rupture', s.ztorKm, 0, 20, ' km');
   outside('dip', s.dipDeg, 15, 90, '°');
   if (input.z2p5Km !== undefined) outside('Z2.5', input.z2p5Km, 0, 10, ' km');
-  return crustalOnlyNotes(NAME, input.setting, notes);
+  return notes;
 }
 
 /**

@@ -66,14 +66,7 @@ import type {
   SiteContext,
   ValidityRange,
 } from './types.ts';
-import {
-  crustalOnlyNotes,
-  insideValidity,
-  requireInputs,
-  validityNotes,
-  within,
-  validityByMechanism,
-} from './validity.ts';
+import { crustalValidityNotes, insideValidity, requireInputs, within } from './validity.ts';
 
 const NAME = 'CY14';
 /** Vs30 of the reference motion y_ref, m/s. */
@@ -319,15 +312,24 @@ function checkPair(input: GmmInput): void {
 }
 
 /** CY14_VALIDITY with each mechanism's own magnitude range. */
-const MAGNITUDE_VALIDITY = validityByMechanism(CY14_VALIDITY, CY14_MAGNITUDE_RANGE);
+const MAGNITUDE_VALIDITY: Readonly<Record<Cy14Mechanism, ValidityRange>> = Object.freeze({
+  'strike-slip': { ...CY14_VALIDITY, magnitude: CY14_MAGNITUDE_RANGE['strike-slip'] },
+  reverse: { ...CY14_VALIDITY, magnitude: CY14_MAGNITUDE_RANGE.reverse },
+  normal: { ...CY14_VALIDITY, magnitude: CY14_MAGNITUDE_RANGE.normal },
+});
 
 function notesOf(input: GmmInput, rupture: Cy14Rupture): string[] {
-  const notes = validityNotes(NAME, MAGNITUDE_VALIDITY[rupture.mechanism], input, input.rrupKm);
+  const notes = crustalValidityNotes(
+    NAME,
+    MAGNITUDE_VALIDITY[rupture.mechanism],
+    input,
+    input.rrupKm,
+  );
   if (rupture.ztorKm > 20)
     notes.push(
       `${NAME}: depth to top of rupture ${Math.round(rupture.ztorKm * 100) / 100} km is outside its range 0–20 km`,
     );
-  return crustalOnlyNotes(NAME, input.setting, notes);
+  return notes;
 }
 
 /**

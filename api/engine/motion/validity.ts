@@ -112,26 +112,21 @@ export const within = (value: number, min: number, max: number): boolean =>
   !(value < min || value > max);
 
 /**
- * `notes` with, first, the note that a model of shallow crustal earthquakes is asked about an
- * earthquake of another setting (the NGA-West2 models' own scope).
+ * validityNotes of a model of shallow crustal earthquakes (the NGA-West2 models' own scope),
+ * after, first, a note when the earthquake is of another setting.
  */
-export function crustalOnlyNotes(modelName: string, setting: string, notes: string[]): string[] {
-  if (setting !== 'crustal')
+export function crustalValidityNotes(
+  modelName: string,
+  range: ValidityRange,
+  input: GmmInput,
+  distanceKm: number,
+): string[] {
+  const notes = validityNotes(modelName, range, input, distanceKm);
+  if (input.setting !== 'crustal')
     notes.unshift(
-      `${modelName}: it is a model for shallow crustal earthquakes, not ${setting} ones`,
+      `${modelName}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`,
     );
   return notes;
-}
-
-/** `range` once per mechanism, each with that mechanism's own magnitude range. */
-export function validityByMechanism<Mechanism extends string>(
-  range: ValidityRange,
-  magnitude: Readonly<Record<Mechanism, readonly [number, number]>>,
-): Readonly<Record<Mechanism, ValidityRange>> {
-  const byMechanism = {} as Record<Mechanism, ValidityRange>;
-  for (const mechanism of Object.keys(magnitude) as Mechanism[])
-    byMechanism[mechanism] = { ...range, magnitude: magnitude[mechanism] };
-  return Object.freeze(byMechanism);
 }
 
 const round = (x: number): string => String(Math.round(x * 100) / 100);
