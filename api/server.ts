@@ -24,15 +24,19 @@ import { WorkerPool } from './workers/worker-pool.ts';
  * marked interrupted and the database is closed.
  */
 
-function readConfigOrExit(): ServiceConfig {
+/** `read()`; when it throws a setting error of `kind`, says why the service cannot start and exits 2. */
+function settingOrExit<T>(read: () => T, kind: new (message: string) => Error): T {
   try {
-    return readConfig(process.env);
+    return read();
   } catch (error) {
-    if (!(error instanceof ConfigError)) throw error;
+    if (!(error instanceof kind)) throw error;
     console.error(`tremora: cannot start: ${error.message}`);
     process.exit(2);
   }
 }
+
+const readConfigOrExit = (): ServiceConfig =>
+  settingOrExit(() => readConfig(process.env), ConfigError);
 
 /** The demo study's id when this start saved it (a new database), else undefined. */
 function seedOnFirstStart(store: Store): string | undefined {
@@ -46,15 +50,8 @@ function seedOnFirstStart(store: Store): string | undefined {
 }
 
 /** The Redis URL of TREMORA_QUEUE (README, Running a cluster), when set; checked before anything opens. */
-function queueUrlOrExit(): string | undefined {
-  try {
-    return queueUrlFrom(process.env);
-  } catch (error) {
-    if (!(error instanceof QueueSettingError)) throw error;
-    console.error(`tremora: cannot start: ${error.message}`);
-    process.exit(2);
-  }
-}
+const queueUrlOrExit = (): string | undefined =>
+  settingOrExit(() => queueUrlFrom(process.env), QueueSettingError);
 
 async function openQueue(url: string | undefined): Promise<ChunkQueue | undefined> {
   if (url === undefined) return undefined;

@@ -1,12 +1,12 @@
 import type { CommunityHazard, ScreeningMeasures } from './community-result.ts';
 import { InvalidInput } from './errors.ts';
-import { frameForStudy, type LocalFrame } from './geometry/projection.ts';
+import type { LocalFrame } from './geometry/projection.ts';
 import { fastDeaggregate } from './hazard/fast-deaggregation.ts';
 import { createFastHazard, fastSiteHazard, type FastHazard } from './hazard/fast-site-hazard.ts';
 import { levelsFor } from './hazard/hazard-levels.ts';
 import type { RuptureTable } from './hazard/rupture-table.ts';
 import type { HazardBranch, HazardMeasure } from './hazard/hazard-types.ts';
-import { studyRuptureTable } from './hazard/study-rupture-table.ts';
+import { studyFrameAndTable } from './hazard/study-rupture-table.ts';
 import { DEFAULT_FRACTILES } from './hazard/fractiles.ts';
 import { sourceTree } from './hazard/source-tree.ts';
 import { treeSummary } from './hazard/tree-summary.ts';
@@ -67,14 +67,7 @@ export function planScreening(study: Study, options: ScreeningPlanOptions = {}):
   const { settings } = study;
   const sourceNames = study.sources.map((s) => s.name);
 
-  let frame: LocalFrame;
-  let table: RuptureTable;
-  if (options.table) {
-    frame = frameForStudy(study);
-    table = options.table;
-  } else {
-    ({ frame, table } = studyRuptureTable(study));
-  }
+  const { frame, table } = studyFrameAndTable(study, options.table);
   // Built when the first community asks: a thread that only hands communities to others needs none.
   let fast: FastHazard | undefined;
   let tree: ReturnType<typeof sourceTree> | undefined;

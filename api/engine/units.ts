@@ -10,4 +10,7 @@ export const toDegrees = (rad: number): number => rad * RAD_TO_DEG;
 export const STANDARD_GRAVITY_MS2 = 9.80665;
 
 /** Azimuth normalised to [0, 360). */
+/** An angle in degrees, any turn, as the same angle in [−180, 180). */
+export const wrapDeg180 = (deg: number): number => ((((deg + 180) % 360) + 360) % 360) - 180;
+
 export const normaliseAzimuthDeg = (deg: number): number => ((deg % 360) + 360) % 360;

@@ -34,3 +34,9 @@ export const errorBody = (
 /** 404 for an id that names nothing: `no study with id "…"`. */
 export const notFound = (what: string, id: string): HttpError =>
   new HttpError(404, `no ${what} with id "${id}"`);
+
+/** `record`, the store's answer for `id`; notFound when there is none. */
+export function found<T>(record: T | undefined, what: string, id: string): T {
+  if (record === undefined) throw notFound(what, id);
+  return record;
+}

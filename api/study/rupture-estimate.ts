@@ -79,6 +79,21 @@ export const sourceRuptureEstimate = (source: Source, settings: Settings): numbe
   binCount(source.recurrence, settings.magnitudeStep, source.kind === 'point') *
   positionCount(source, settings);
 
+/** The sum of `countOf` over the sources, and the first source with the largest count. */
+function totalAndLargest(
+  sources: readonly Source[],
+  countOf: (source: Source) => number,
+): { total: number; largest: { index: number; count: number } } {
+  let total = 0;
+  let largest = { index: 0, count: 0 };
+  sources.forEach((source, index) => {
+    const count = countOf(source);
+    total += count;
+    if (count > largest.count) largest = { index, count };
+  });
+  return { total, largest };
+}
+
 /**
  * Refuses a study whose sources would make more than MAX_RUPTURES ruptures, estimated from
  * above, naming the largest source and the settings that reduce the count. `sources` must be
@@ -89,13 +104,9 @@ export function checkRuptureEstimate(
   settings: Settings,
   issues: IssueList,
 ): void {
-  let total = 0;
-  let largest = { index: 0, count: 0 };
-  sources.forEach((source, index) => {
-    const count = sourceRuptureEstimate(source, settings);
-    total += count;
-    if (count > largest.count) largest = { index, count };
-  });
+  const { total, largest } = totalAndLargest(sources, (source) =>
+    sourceRuptureEstimate(source, settings),
+  );
   if (total <= MAX_RUPTURES) {
     checkPlaneEstimate(sources, settings, issues);
     return;
@@ -115,15 +126,12 @@ function checkPlaneEstimate(
   settings: Settings,
   issues: IssueList,
 ): void {
-  let total = 0;
-  let largest = { index: 0, count: 0 };
-  sources.forEach((source, index) => {
-    if (source.kind !== 'fault') return;
-    const count = source.contours
+  // Only faults are cut into planes: the other sources count 0.
+  const { total, largest } = totalAndLargest(sources, (source) => {
+    if (source.kind !== 'fault') return 0;
+    return source.contours
       ? contouredPlaneCount({ ...source, contours: source.contours }, settings)
       : faultPlaneCount(source, settings);
-    total += count;
-    if (count > largest.count) largest = { index, count };
   });
   if (total <= MAX_RUPTURE_PLANES) return;
   const source = sources[largest.index];

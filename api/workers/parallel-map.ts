@@ -1,5 +1,6 @@
 import { Cancelled } from '../engine/errors.ts';
 import {
+  describeMap,
   mapSummary,
   mergeValidity,
   planHazardMap,
@@ -50,17 +51,7 @@ export function hazardMapOnPool(
     if (cancelled) throw new Cancelled(0);
     // The grid and checks of the map, here; the models' work is left to the threads (it is built lazily).
     const plan = planHazardMap(study, { ...map, models: modelCatalog, table });
-    const { grid } = plan;
-    options.onStart?.({
-      measure: plan.measure.key,
-      unit: plan.unit,
-      quantity: plan.quantity,
-      vs30: plan.vs30,
-      spacingKm: grid.spacingKm,
-      columns: grid.columns,
-      rows: grid.rows,
-      count: grid.count,
-    });
+    options.onStart?.(describeMap(plan));
     const size = options.chunkPoints ?? MAP_CHUNK_POINTS;
     const planKey = newPlanKey();
     const tasks = [];

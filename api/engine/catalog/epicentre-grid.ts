@@ -1,3 +1,4 @@
+import { firstAtLeast } from '../sorted-search.ts';
 import { DEG_TO_RAD } from '../units.ts';
 
 /**
@@ -139,15 +140,3 @@ const cellOf = (km: number, cellKm: number): number => Math.floor(km / cellKm);
 
 const cellKey = (cx: number, cy: number, cz: number): number =>
   ((cx + LATTICE_HALF) * LATTICE + (cy + LATTICE_HALF)) * LATTICE + (cz + LATTICE_HALF);
-
-/** Position of the first member >= index in an ascending list (binary search). */
-function firstAtLeast(members: Int32Array, index: number): number {
-  let lo = 0;
-  let hi = members.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if ((members[mid] as number) < index) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
-}

@@ -1,4 +1,5 @@
 import { InvalidInput } from '../errors.ts';
+import { firstAbove, firstAtLeast } from '../sorted-search.ts';
 import { MS_PER_DAY, type CatalogEvent } from './event.ts';
 import { epicentralDistanceKm, MIN_KM_PER_DEGREE_LATITUDE } from './epicentral.ts';
 import { epicentreGrid, MIN_CELL_KM, visitNear } from './epicentre-grid.ts';
@@ -105,8 +106,8 @@ export function declusterGardnerKnopoff(
     const main = byTime[i] as CatalogEvent;
     const window = gardnerKnopoffWindow(main.magnitude);
     const windowMs = window.days * MS_PER_DAY;
-    const from = foreshocks ? firstAtOrAfter(times, main.timeMs - windowMs) : i + 1;
-    const to = firstAfter(times, main.timeMs + windowMs);
+    const from = foreshocks ? firstAtLeast(times, main.timeMs - windowMs) : i + 1;
+    const to = firstAbove(times, main.timeMs + windowMs);
     near.length = 0;
     visitNear(grid, i, window.distanceKm, from, to, (j) => {
       if (j !== i && mainshockOf[j] === -1) near.push(j);
@@ -163,28 +164,4 @@ function inTimeOrder(
     start = end;
   }
   return removed;
-}
-
-/** Index of the first time >= t in ascending `times` (binary search). */
-function firstAtOrAfter(times: readonly number[], t: number): number {
-  let lo = 0;
-  let hi = times.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if ((times[mid] as number) < t) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
-}
-
-/** Index of the first time > t in ascending `times` (binary search). */
-function firstAfter(times: readonly number[], t: number): number {
-  let lo = 0;
-  let hi = times.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if ((times[mid] as number) <= t) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
 }

@@ -1,6 +1,7 @@
 import proj4 from 'proj4';
 import { InvalidInput } from '../errors.ts';
 import type { LonLat, Study } from '../model.ts';
+import { wrapDeg180 } from '../units.ts';
 
 /** A point of the local frame at the ground surface: x east, y north, km. */
 export interface PointXY {
@@ -22,8 +23,6 @@ export interface LocalFrame {
   /** Local km to WGS84 [lon, lat] in degrees, longitude in [-180, 180). */
   toLonLat(point: PointXY): LonLat;
 }
-
-const wrapLongitudeDeg = (lonDeg: number): number => ((((lonDeg + 180) % 360) + 360) % 360) - 180;
 
 /**
  * A local frame centred on `origin` ([lon, lat], degrees). The projection is built at longitude
@@ -48,15 +47,12 @@ export function createLocalFrame(origin: LonLat): LocalFrame {
   return {
     origin: [lon0, lat0],
     toLocal([lonDeg, latDeg]) {
-      const [xM, yM] = converter.forward([wrapLongitudeDeg(lonDeg - lon0), latDeg]) as [
-        number,
-        number,
-      ];
+      const [xM, yM] = converter.forward([wrapDeg180(lonDeg - lon0), latDeg]) as [number, number];
       return { x: xM / 1000, y: yM / 1000 };
     },
     toLonLat({ x, y }) {
       const [dLonDeg, latDeg] = converter.inverse([x * 1000, y * 1000]) as [number, number];
-      return [wrapLongitudeDeg(dLonDeg + lon0), latDeg];
+      return [wrapDeg180(dLonDeg + lon0), latDeg];
     },
   };
 }
@@ -90,11 +86,11 @@ export function frameForStudy(study: Pick<Study, 'communities' | 'sources'>): Lo
     minLat = Infinity,
     maxLat = -Infinity;
   for (const [lon, lat] of points) {
-    const unwrapped = first[0] + wrapLongitudeDeg(lon - first[0]);
+    const unwrapped = first[0] + wrapDeg180(lon - first[0]);
     minLon = Math.min(minLon, unwrapped);
     maxLon = Math.max(maxLon, unwrapped);
     minLat = Math.min(minLat, lat);
     maxLat = Math.max(maxLat, lat);
   }
-  return createLocalFrame([wrapLongitudeDeg((minLon + maxLon) / 2), (minLat + maxLat) / 2]);
+  return createLocalFrame([wrapDeg180((minLon + maxLon) / 2), (minLat + maxLat) / 2]);
 }

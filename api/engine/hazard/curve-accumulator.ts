@@ -50,6 +50,20 @@ function foldBlock(acc: CurveAccumulator): void {
 }
 
 /**
+ * What the pair loops read of an exceedance table (exceedance-table.ts): the truncation n (0 for
+ * the step), and for a tabulated one its cubics, their scale and count (undefined, 0, 0 otherwise).
+ */
+function inlineTable(exceedance: ExceedanceTable) {
+  const table = exceedance.mode === 'table' ? exceedance : undefined;
+  return {
+    n: exceedance.mode === 'step' ? 0 : exceedance.truncationSigma,
+    cubic: table?.cubic,
+    scale: table?.scale ?? 0,
+    intervals: table?.intervals ?? 0,
+  };
+}
+
+/**
  * Adds `count` pairs: pair k has annual rate rates[pairRupture[k]] and the prediction k of
  * `predictions`. Returns −1, or the first pair whose ln median is not finite or whose σ is not
  * a finite number ≥ 0 (nothing of it or after it is added; the caller reports it).
@@ -64,13 +78,9 @@ export function accumulatePairs(
 ): number {
   const { lnLevels, partial, certain } = acc;
   const levelCount = lnLevels.length;
-  const lnMedians = predictions.lnMedian;
-  const sigmas = predictions.sigma;
-  const n = exceedance.mode === 'step' ? 0 : exceedance.truncationSigma;
-  // The table's cubics (exceedance-table.ts), evaluated inline here: this loop runs for every level of every pair.
-  const cubic = exceedance.mode === 'table' ? exceedance.cubic : undefined;
-  const scale = exceedance.mode === 'table' ? exceedance.scale : 0;
-  const intervals = exceedance.mode === 'table' ? exceedance.intervals : 0;
+  const { lnMedian: lnMedians, sigma: sigmas } = predictions;
+  // The table's cubics, evaluated inline here: this loop runs for every level of every pair.
+  const { n, cubic, scale, intervals } = inlineTable(exceedance);
 
   for (let k = 0; k < count; k++) {
     const mu = lnMedians[k] as number;
@@ -163,12 +173,8 @@ export function levelRate(
   predictions: PairPredictions,
   count: number,
 ): number {
-  const lnMedians = predictions.lnMedian;
-  const sigmas = predictions.sigma;
-  const n = exceedance.mode === 'step' ? 0 : exceedance.truncationSigma;
-  const cubic = exceedance.mode === 'table' ? exceedance.cubic : undefined;
-  const scale = exceedance.mode === 'table' ? exceedance.scale : 0;
-  const intervals = exceedance.mode === 'table' ? exceedance.intervals : 0;
+  const { lnMedian: lnMedians, sigma: sigmas } = predictions;
+  const { n, cubic, scale, intervals } = inlineTable(exceedance);
   const total = createLevelAccumulator(1);
   let block = 0;
   let inBlock = 0;

@@ -31,6 +31,7 @@ import { gmmInput } from './gmm-input.ts';
 import { distinctContexts, settingRuptures, type RuptureTable } from './rupture-table.ts';
 import type { HazardBranch, HazardMeasure, ValiditySummary } from './hazard-types.ts';
 import { ruptureGeometry, type RuptureGeometry } from './rupture-geometry.ts';
+import { countsOf, validitySummaries, type ValidityCounts } from './validity-counts.ts';
 import { createPairBuffer, siteDistances, type PairBuffer } from './site-distances.ts';
 import type { SourceTreeNode } from './source-tree.ts';
 import {
@@ -150,11 +151,22 @@ export function createFastHazard(options: FastHazardOptions): FastHazard {
 }
 
 /**
- * The setting's pairs at the current site (after siteDistances) as the models see them: each
- * pair's rupture replaced by its context's index. The distance columns are the pairs' own.
+ * The setting's pairs at site `at` (its ruptures within reach, by siteDistances, into
+ * `work.pairs`) as the models see them: each pair's rupture replaced by its context's index.
+ * The distance columns are the pairs' own.
  */
-export function contextPairsOf(work: SettingWork): PairDistances {
+export function pairsAtSite(hazard: FastHazard, work: SettingWork, at: FastSite): PairDistances {
   const { pairs, contextPairs, contextOf } = work;
+  siteDistances(
+    {
+      geometry: hazard.geometry,
+      ruptures: work.ruptures,
+      site: at.point,
+      maxDistanceKm: hazard.options.maxDistanceKm,
+      distances: work.distances,
+    },
+    pairs,
+  );
   for (let k = 0; k < pairs.count; k++)
     contextPairs.rupture[k] = contextOf[pairs.rupture[k] as number] as number;
   contextPairs.count = pairs.count;
@@ -201,9 +213,9 @@ export function fastSiteHazard(
   at: FastSite,
   afterBranch?: () => void,
 ): FastSiteHazard {
-  const { options, geometry, exceedance } = hazard;
+  const { options, exceedance } = hazard;
   const { measures } = options;
-  const validity = new Map<string, { outside: number; evaluated: number; firstNote: string }>();
+  const validity: ValidityCounts = new Map();
   const settingCurves: SettingBranchCurve[][] = measures.map(() => []);
   const firstMeasure: BranchPredictions[] = [];
   const treeCurves: NodeCurves[][] | undefined = options.sourceTree
@@ -212,16 +224,7 @@ export function fastSiteHazard(
 
   for (const work of hazard.settings) {
     const { pairs, predictions } = work;
-    siteDistances(
-      {
-        geometry,
-        ruptures: work.ruptures,
-        site: at.point,
-        maxDistanceKm: options.maxDistanceKm,
-        distances: work.distances,
-      },
-      pairs,
-    );
+    const modelPairs = pairsAtSite(hazard, work, at);
     const count = pairs.count;
     let ruptureIndex: Int32Array | undefined;
     if (options.keepFirstMeasure) {
@@ -230,14 +233,9 @@ export function fastSiteHazard(
         ruptureIndex[k] = work.ruptures[pairs.rupture[k] as number] as number;
     }
     const rrupKm = options.keepFirstMeasure ? pairs.rrupKm.slice(0, count) : undefined;
-    const modelPairs = contextPairsOf(work);
 
     work.branches.forEach((branch, branchIndex) => {
-      const summary = validity.get(branch.model.name) ?? {
-        outside: 0,
-        evaluated: 0,
-        firstNote: '',
-      };
+      const summary = countsOf(validity, branch.model.name);
       if (count > 0) branch.motions.predict(at.site, modelPairs, predictions);
       measures.forEach((m, i) => {
         const curve = branch.curves[i] as CurveAccumulator;
@@ -252,18 +250,16 @@ export function fastSiteHazard(
             prediction,
             count,
           );
-          if (bad >= 0) {
-            const sourceId =
-              options.table.sourceIds[
-                options.table.sourceIndex[
-                  work.ruptures[pairs.rupture[bad] as number] as number
-                ] as number
-              ];
-            throw new TremoraError(
-              `${branch.model.name} gave ln median ${prediction.lnMedian[bad]} and sigma ${prediction.sigma[bad]} for ${measureLabel(m.measure)} ` +
-                `from a rupture of source "${sourceId}"; expected finite numbers with sigma >= 0`,
+          if (bad >= 0)
+            throw unusablePrediction(
+              hazard,
+              work,
+              branch,
+              i,
+              bad,
+              prediction.lnMedian[bad],
+              prediction.sigma[bad],
             );
-          }
         }
         summary.evaluated += count;
         const firstOutside = prediction.applicable.subarray(0, count).indexOf(0);
@@ -302,7 +298,6 @@ export function fastSiteHazard(
             treeCurves[i]!,
           );
       });
-      validity.set(branch.model.name, summary);
       afterBranch?.();
     });
   }
@@ -324,12 +319,29 @@ export function fastSiteHazard(
   return {
     curves,
     branchCurvesOmitted,
-    validity: [...validity.entries()]
-      .filter(([, s]) => s.outside > 0)
-      .map(([model, s]) => ({ model, ...s })),
+    validity: validitySummaries(validity),
     firstMeasure,
     ...(treeCurves ? { treeCurves } : {}),
   };
+}
+
+/** The error for pair k, whose prediction is not a finite ln median with a finite σ >= 0. */
+export function unusablePrediction(
+  hazard: FastHazard,
+  work: SettingWork,
+  branch: BranchWork,
+  measureIndex: number,
+  k: number,
+  lnMedian: number | undefined,
+  sigma: number | undefined,
+): TremoraError {
+  const { table, measures } = hazard.options;
+  const source = table.sourceIndex[work.ruptures[work.pairs.rupture[k] as number] as number];
+  const measure = (measures[measureIndex] as HazardMeasure).measure;
+  return new TremoraError(
+    `${branch.model.name} gave ln median ${lnMedian} and sigma ${sigma} for ${measureLabel(measure)} ` +
+      `from a rupture of source "${table.sourceIds[source as number]}"; expected finite numbers with sigma >= 0`,
+  );
 }
 
 /** The first validity note of pair k, from the model's own predict() (as the reference path reports it). */

@@ -1,5 +1,3 @@
-import { TremoraError } from '../errors.ts';
-import { measureLabel } from '../motion/measure.ts';
 import { createPairPredictions } from '../motion/prepared-period.ts';
 import type { PairPredictions } from '../motion/types.ts';
 import { compensatedSum } from '../summation.ts';
@@ -11,14 +9,15 @@ import {
   type LevelCoefficients,
 } from './curve-accumulator.ts';
 import {
-  contextPairsOf,
+  pairsAtSite,
+  unusablePrediction,
   noteOf,
   type BranchWork,
   type FastHazard,
   type FastSite,
   type SettingWork,
 } from './fast-site-hazard.ts';
-import { siteDistances } from './site-distances.ts';
+import { countsOf, validitySummaries, type ValidityCounts } from './validity-counts.ts';
 import type { ValiditySummary } from './hazard-types.ts';
 
 /**
@@ -59,9 +58,9 @@ export function createFastRates(hazard: FastHazard): FastRates {
 /** Predictions of measure `measureIndex` at one site, with its rates readable by level. */
 export function fastSiteRates(rates: FastRates, at: FastSite, measureIndex = 0): SiteRates {
   const { hazard } = rates;
-  const { options, geometry, exceedance } = hazard;
+  const { options, exceedance } = hazard;
   const measure = options.measures[measureIndex]!;
-  const validity = new Map<string, { outside: number; evaluated: number; firstNote: string }>();
+  const validity: ValidityCounts = new Map();
   const terms: {
     weight: number;
     work: SettingWork;
@@ -71,26 +70,12 @@ export function fastSiteRates(rates: FastRates, at: FastSite, measureIndex = 0):
 
   for (const work of hazard.settings) {
     const { pairs } = work;
-    siteDistances(
-      {
-        geometry,
-        ruptures: work.ruptures,
-        site: at.point,
-        maxDistanceKm: options.maxDistanceKm,
-        distances: work.distances,
-      },
-      pairs,
-    );
+    const modelPairs = pairsAtSite(hazard, work, at);
     const count = pairs.count;
-    const modelPairs = contextPairsOf(work);
     for (const branch of work.branches) {
       const all = rates.predictions.get(branch)!;
       const predictions = all[measureIndex]!;
-      const summary = validity.get(branch.model.name) ?? {
-        outside: 0,
-        evaluated: 0,
-        firstNote: '',
-      };
+      const summary = countsOf(validity, branch.model.name);
       if (count > 0) {
         branch.motions.predict(at.site, modelPairs, all);
         const { lnMedian, sigma: sigmas, applicable } = predictions;
@@ -102,24 +87,13 @@ export function fastSiteRates(rates: FastRates, at: FastSite, measureIndex = 0):
             if (firstOutside < 0) firstOutside = k;
             summary.outside++;
           }
-          if (!(mu > -Infinity && mu < Infinity && sigma >= 0 && sigma < Infinity)) {
-            const sourceId =
-              options.table.sourceIds[
-                options.table.sourceIndex[
-                  work.ruptures[pairs.rupture[k] as number] as number
-                ] as number
-              ];
-            throw new TremoraError(
-              `${branch.model.name} gave ln median ${mu} and sigma ${sigma} for ${measureLabel(measure.measure)} ` +
-                `from a rupture of source "${sourceId}"; expected finite numbers with sigma >= 0`,
-            );
-          }
+          if (!(mu > -Infinity && mu < Infinity && sigma >= 0 && sigma < Infinity))
+            throw unusablePrediction(hazard, work, branch, measureIndex, k, mu, sigma);
         }
         if (firstOutside >= 0 && !summary.firstNote)
           summary.firstNote = noteOf(hazard, work, branch, measureIndex, at, firstOutside);
       }
       summary.evaluated += count;
-      validity.set(branch.model.name, summary);
       const coefficients = rates.coefficients.get(branch)!;
       fillLevelCoefficients(
         coefficients,
@@ -156,8 +130,6 @@ export function fastSiteRates(rates: FastRates, at: FastSite, measureIndex = 0):
         ),
       );
     },
-    validity: [...validity.entries()]
-      .filter(([, s]) => s.outside > 0)
-      .map(([model, s]) => ({ model, ...s })),
+    validity: validitySummaries(validity),
   };
 }

@@ -42,3 +42,10 @@ export function studyRuptureTable(
   while (builder.sourceIds.length < study.sources.length) builder.sourceIds.push('');
   return { frame, table: builder.table() };
 }
+
+/**
+ * The study's local frame and rupture table: `table` when the caller has it already (a table
+ * laid out once and shared between threads), else studyRuptureTable's.
+ */
+export const studyFrameAndTable = (study: Study, table?: RuptureTable): StudyRuptureTable =>
+  table ? { frame: frameForStudy(study), table } : studyRuptureTable(study);

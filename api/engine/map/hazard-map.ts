@@ -1,12 +1,13 @@
 import { Cancelled, InvalidInput } from '../errors.ts';
-import { frameForStudy, type LocalFrame } from '../geometry/projection.ts';
+import type { LocalFrame } from '../geometry/projection.ts';
 import { createFastHazard } from '../hazard/fast-site-hazard.ts';
 import { createFastRates, fastSiteRates, type FastRates } from '../hazard/fast-site-rates.ts';
 import { levelsFor } from '../hazard/hazard-levels.ts';
 import { poissonProbability } from '../hazard/poisson.ts';
 import { levelAtReturnPeriodBySearch } from '../hazard/return-period-search.ts';
 import type { RuptureTable } from '../hazard/rupture-table.ts';
-import { studyRuptureTable } from '../hazard/study-rupture-table.ts';
+import { studyFrameAndTable } from '../hazard/study-rupture-table.ts';
+import { countsOf, type ValidityCounts } from '../hazard/validity-counts.ts';
 import type { HazardMeasure, ValiditySummary } from '../hazard/hazard-types.ts';
 import type { Study } from '../model.ts';
 import type { ElevationGrid } from '../terrain/elevation-grid.ts';
@@ -118,14 +119,7 @@ export function planHazardMap(study: Study, options: HazardMapOptions): HazardMa
     options.models ?? modelCatalog,
     warnings,
   );
-  let frame: LocalFrame;
-  let table: RuptureTable;
-  if (options.table) {
-    frame = frameForStudy(study);
-    table = options.table;
-  } else {
-    ({ frame, table } = studyRuptureTable(study));
-  }
+  const { frame, table } = studyFrameAndTable(study, options.table);
   const grid = mapGrid(study, frame, {
     spacingKm: options.spacingKm,
     ...(options.bounds ? { bounds: options.bounds } : {}),
@@ -158,7 +152,7 @@ export function planHazardMap(study: Study, options: HazardMapOptions): HazardMa
 }
 
 /** Per-model counts of predictions outside validity over a map's points (as a community's warnings give them). */
-export type MapValidity = Map<string, { outside: number; evaluated: number; firstNote: string }>;
+export type MapValidity = ValidityCounts;
 
 /**
  * The values of points firstIndex .. firstIndex + count − 1 (clipped to the grid), in order;
@@ -213,11 +207,10 @@ export function mergeValidity(
   const entries =
     from instanceof Map ? [...from.entries()] : from.map((v) => [v.model, v] as const);
   for (const [model, v] of entries) {
-    const summary = into.get(model) ?? { outside: 0, evaluated: 0, firstNote: '' };
+    const summary = countsOf(into, model);
     summary.outside += v.outside;
     summary.evaluated += v.evaluated;
     if (!summary.firstNote) summary.firstNote = v.firstNote;
-    into.set(model, summary);
   }
 }
 
@@ -246,6 +239,13 @@ export function mapSummary(
         `${model}: ${v.outside} of ${v.evaluated} rupture predictions over the map are outside its validity range (for example, ${v.firstNote})`,
       );
   }
+  return { ...describeMap(plan), warnings };
+}
+
+/** What a planned map is of, known before any point is computed (the head of its GeoJSON). */
+export function describeMap(
+  plan: Pick<HazardMapPlan, 'grid' | 'measure' | 'unit' | 'quantity' | 'vs30'>,
+): Omit<HazardMapSummary, 'warnings'> {
   const { grid } = plan;
   return {
     measure: plan.measure.key,
@@ -256,7 +256,6 @@ export function mapSummary(
     columns: grid.columns,
     rows: grid.rows,
     count: grid.count,
-    warnings,
   };
 }
 

@@ -1,4 +1,4 @@
-import type { HazardMapSummary, MapPoint, MapQuantity } from './hazard-map.ts';
+import type { HazardMapSummary, MapPoint } from './hazard-map.ts';
 
 /**
  * A hazard map as GeoJSON (RFC 7946): a FeatureCollection of Points, WGS84 [lon, lat], each with
@@ -11,16 +11,7 @@ import type { HazardMapSummary, MapPoint, MapQuantity } from './hazard-map.ts';
 const COORDINATE_DECIMALS = 6;
 
 /** What a map's description says at the head of its file, before any value is known. */
-export interface MapDescription {
-  readonly measure: string;
-  readonly unit: 'g' | 'cm/s';
-  readonly quantity: MapQuantity;
-  readonly vs30: number;
-  readonly spacingKm: number;
-  readonly columns: number;
-  readonly rows: number;
-  readonly count: number;
-}
+export type MapDescription = Omit<HazardMapSummary, 'warnings'>;
 
 /** The unit of the values: the measure's for a return-period map, a probability (0–1) for a chance map. */
 export const valueUnit = (d: Pick<MapDescription, 'unit' | 'quantity'>): string =>

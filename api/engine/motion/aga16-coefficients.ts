@@ -25,8 +25,8 @@
  * km; θ6 per km of R; θ11 per km of hypocentral depth; θ12 and b multiply ln(Vs30 / Vlin) and
  * ln(PGA + c) (PGA in g); θ13 per magnitude unit squared; Vlin m/s; φ, τ natural-log units.
  */
-import { readCoefficientTable, rowOfPeriod, type CoefficientRow } from './coefficient-table.ts';
-import AGA16_TABLE from './aga16.json' with { type: 'json' };
+import { readModelTable, type CoefficientRow, type ModelTable } from './coefficient-table.ts';
+import PUBLISHED from './aga16.json' with { type: 'json' };
 
 /** Column names of Table 3, in the paper's order. */
 export const AGA16_COLUMNS = [
@@ -49,18 +49,8 @@ export const AGA16_COLUMNS = [
 /** One row of Table 3. `periodS` is 0 for the PGA row. */
 export type Aga16Row = CoefficientRow<(typeof AGA16_COLUMNS)[number]>;
 
-/** Every row: PGA, then the spectral periods increasing. */
-export const AGA16_ROWS: readonly Aga16Row[] = readCoefficientTable(
-  'aga16.json',
-  AGA16_TABLE,
-  AGA16_COLUMNS,
-);
-
-/** The PGA row (periodS 0). */
-export const AGA16_PGA: Aga16Row = rowOfPeriod('AGA16', AGA16_ROWS, 0);
-
-/** The spectral-acceleration rows, 0.02 s to 10 s, periods increasing. */
-export const AGA16_SA: readonly Aga16Row[] = Object.freeze(AGA16_ROWS.filter((r) => r.periodS > 0));
+/** The table as the model reads it: every row, the PGA row, the spectral rows and their periods. */
+export const AGA16_TABLE: ModelTable<Aga16Row> = readModelTable('AGA16', PUBLISHED, AGA16_COLUMNS);
 
 /** Period-independent constants of the paper (aga16-constants.csv). */
 export const AGA16_CONSTANTS = Object.freeze({

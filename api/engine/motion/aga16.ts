@@ -48,25 +48,22 @@ import {
   AGA16_CONSTANTS as K,
   AGA16_DELTA_C1_INTERFACE,
   AGA16_DELTA_C1_INTRASLAB,
-  AGA16_PGA,
-  AGA16_SA,
+  AGA16_TABLE,
   type Aga16DeltaC1Branch,
   type Aga16Row,
 } from './aga16-coefficients.ts';
-import { predictAtPeriod } from './interpolate-period.ts';
+import { predictOnTable } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
 import { assembleModel } from './model-assembly.ts';
 import {
   atLeast,
   createRowScratch,
   insideRange,
-  mapPlan,
-  periodRows,
   plannedRows,
   predictRows,
   rowMemo,
-  singleRow,
   type RowPlan,
+  measurePlan,
 } from './prepared-period.ts';
 import type {
   DistanceName,
@@ -234,7 +231,7 @@ export const aga16SiteTerm = (row: Aga16Row, vs30: number, pga1000G: number): nu
   aga16SiteTermFor(row, aga16SiteTerms(row, vs30), pga1000G);
 
 /** Site term of the PGA row on the reference rock (Vs30 = 1000 m/s, linear there): PGA1000 = exp(ln median at Vlin + this). */
-const ROCK_SITE_TERM = aga16SiteTerm(AGA16_PGA, K.vs30CapMS, 0);
+const ROCK_SITE_TERM = aga16SiteTerm(AGA16_TABLE.pga, K.vs30CapMS, 0);
 
 /** PGA1000 (g) of a pair from the PGA row's rupture terms and spreading logarithm. */
 export const aga16Pga1000For = (
@@ -242,9 +239,9 @@ export const aga16Pga1000For = (
   spreadingLog: number,
   distanceKm: number,
 ): number =>
-  Math.exp(aga16LnMedianAtVlinFor(AGA16_PGA, pgaTerms, spreadingLog, distanceKm) + ROCK_SITE_TERM);
-
-const SA_PERIODS_S: readonly number[] = Object.freeze(AGA16_SA.map((r) => r.periodS));
+  Math.exp(
+    aga16LnMedianAtVlinFor(AGA16_TABLE.pga, pgaTerms, spreadingLog, distanceKm) + ROCK_SITE_TERM,
+  );
 
 const eventTypeOf = (rupture: RuptureContext): Aga16EventType =>
   rupture.setting === 'intraslab' ? 'intraslab' : 'interface';
@@ -296,7 +293,7 @@ function predictAga16(
     );
   const termsOf = (row: Aga16Row): Aga16RuptureTerms =>
     aga16RuptureTerms(row, eventType, input.magnitude, input.hypoDepthKm, branch);
-  const pgaTerms = termsOf(AGA16_PGA);
+  const pgaTerms = termsOf(AGA16_TABLE.pga);
   const spreadingLog = aga16SpreadingLog(pgaTerms, distanceKm);
   const pga1000G = aga16Pga1000For(pgaTerms, spreadingLog, distanceKm);
   const predictRow = (row: Aga16Row): GmmPrediction => ({
@@ -309,10 +306,7 @@ function predictAga16(
     applicable: notes.length === 0,
     notes,
   });
-  if (measure.kind === 'PGA') return predictRow(AGA16_PGA);
-  return predictAtPeriod(name, SA_PERIODS_S, (measure as { periodS: number }).periodS, (i) =>
-    predictRow(AGA16_SA[i] as Aga16Row),
-  );
+  return predictOnTable(name, AGA16_TABLE, undefined, measure, predictRow);
 }
 
 /** One row's rupture terms for every prepared rupture. */
@@ -341,11 +335,9 @@ function prepareAga16Measures(
       aga16RuptureTerms(row, eventTypeOf(r), r.magnitude, r.hypoDepthKm, branch),
     ),
   }));
-  const pga = termsOf(AGA16_PGA).terms;
+  const pga = termsOf(AGA16_TABLE.pga).terms;
   const plans: RowPlan<PreparedRow>[] = measures.map((m) =>
-    m.kind !== 'SA'
-      ? singleRow(termsOf(AGA16_PGA))
-      : mapPlan(periodRows(name, SA_PERIODS_S, AGA16_SA, m.periodS), termsOf),
+    measurePlan(name, AGA16_TABLE, undefined, m, termsOf),
   );
   const rows = plannedRows(plans).map((p) => p.row);
   const distances: DistanceName[] = [];
@@ -433,7 +425,7 @@ export function createAga16(branch: Aga16DeltaC1Branch): GroundMotionModel {
     settings: ['interface', 'intraslab'],
     // Rrup is the interface metric; intraslab predictions use Rhypo (see the top comment).
     distanceMetric: 'rrup',
-    periodsS: SA_PERIODS_S,
+    periodsS: AGA16_TABLE.saPeriodsS,
     hasPga: true,
     hasPgv: false,
     validity: Object.freeze({

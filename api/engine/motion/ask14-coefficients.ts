@@ -24,8 +24,8 @@
  * the PGV row); a17 per km; the standard deviations s1–s4 in natural-log units; the other
  * coefficients in ln units per unit of the quantity they multiply (see ask14.ts).
  */
-import { readCoefficientTable, rowOfPeriod } from './coefficient-table.ts';
-import ASK14_TABLE from './ask14.json' with { type: 'json' };
+import { readModelTable, rowOfPeriod, type ModelTable } from './coefficient-table.ts';
+import PUBLISHED from './ask14.json' with { type: 'json' };
 
 /** One row of the table. `periodS` is 0 for PGA and −1 for PGV. */
 export interface Ask14Row {
@@ -154,15 +154,7 @@ export const ASK14_CONSTANTS = Object.freeze({
   phiAmp: 0.4,
 });
 
-/** Every row: PGV, PGA, then the spectral periods increasing. */
-export const ASK14_ROWS: readonly Ask14Row[] = readCoefficientTable(
-  'ask14.json',
-  ASK14_TABLE,
-  ASK14_COLUMNS,
-);
+/** The table as the model reads it: every row, the PGA row, the spectral rows and their periods. */
+export const ASK14_TABLE: ModelTable<Ask14Row> = readModelTable('ASK14', PUBLISHED, ASK14_COLUMNS);
 
-export const ASK14_PGV: Ask14Row = rowOfPeriod('ASK14', ASK14_ROWS, -1);
-export const ASK14_PGA: Ask14Row = rowOfPeriod('ASK14', ASK14_ROWS, 0);
-
-/** The spectral rows, periods in s, increasing. */
-export const ASK14_SA: readonly Ask14Row[] = Object.freeze(ASK14_ROWS.filter((r) => r.periodS > 0));
+export const ASK14_PGV: Ask14Row = rowOfPeriod('ASK14', ASK14_TABLE.rows, -1);

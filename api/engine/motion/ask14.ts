@@ -60,12 +60,12 @@ import { hypot2 } from './fast-math.ts';
 import { rowMemo } from './prepared-period.ts';
 import {
   ASK14_CONSTANTS as K,
-  ASK14_PGA,
+  ASK14_TABLE,
   ASK14_PGV,
-  ASK14_SA,
   type Ask14Row,
 } from './ask14-coefficients.ts';
 import type { Measure } from './measure.ts';
+import { openRakeClass, type RakeClass } from './rake-classes.ts';
 import { assembleModel } from './model-assembly.ts';
 import {
   emptyPairPrediction,
@@ -82,23 +82,16 @@ import type {
   SiteContext,
   ValidityRange,
 } from './types.ts';
-import { insideValidity, requireInputs, validityNotes } from './validity.ts';
+import { crustalValidityNotes, insideValidity, requireInputs } from './validity.ts';
 
 const NAME = 'ASK14';
-const SA_PERIODS_S: readonly number[] = Object.freeze(ASK14_SA.map((r) => r.periodS));
-
 /** Vs30 of the reference rock whose median drives the nonlinear site term, m/s. */
 export const ASK14_ROCK_VS30 = 1180;
 
-export type Ask14Mechanism = 'strike-slip' | 'normal' | 'reverse';
+export type Ask14Mechanism = RakeClass;
 
-/** The paper's rake classes (degrees, any turn): reverse 30..150, normal −150..−30 (open). */
-export function ask14MechanismFromRake(rakeDeg: number): Ask14Mechanism {
-  const rake = ((((rakeDeg + 180) % 360) + 360) % 360) - 180;
-  if (rake > 30 && rake < 150) return 'reverse';
-  if (rake > -150 && rake < -30) return 'normal';
-  return 'strike-slip';
-}
+/** The paper's rake classes (rake-classes.ts): reverse 30..150, normal −150..−30 (open). */
+export const ask14MechanismFromRake: (rakeDeg: number) => Ask14Mechanism = openRakeClass;
 
 /** The rupture as the equation sees it; depths and width in km, dip in degrees. */
 export interface Ask14Rupture {
@@ -362,12 +355,7 @@ function checkPair(input: GmmInput): void {
 }
 
 function notesOf(input: GmmInput): string[] {
-  const notes = validityNotes(NAME, ASK14_VALIDITY, input, input.rrupKm);
-  if (input.setting !== 'crustal')
-    notes.unshift(
-      `${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`,
-    );
-  return notes;
+  return crustalValidityNotes(NAME, ASK14_VALIDITY, input, input.rrupKm);
 }
 
 /**
@@ -390,10 +378,8 @@ export function predictAsk14(input: GmmInput, measure: Measure): GmmPrediction {
 /** The model as rupture terms and pair prediction, for the fast path (split-prepare.ts): the same functions predict() uses. */
 const SPLIT: SplitModel<Ask14Row, Ask14RuptureTerms> = {
   name: NAME,
-  pga: ASK14_PGA,
+  table: ASK14_TABLE,
   pgv: ASK14_PGV,
-  sa: ASK14_SA,
-  periodsS: SA_PERIODS_S,
   distances: ['rrupKm', 'rjbKm', 'rxKm', 'ry0Km'],
   checkMeasure: requirePositivePeriod,
   checkRupture: (rupture) => void ruptureOf(rupture as GmmInput),
@@ -411,7 +397,7 @@ export const ask14: GroundMotionModel = assembleModel({
     'Abrahamson, N. A., Silva, W. J. & Kamai, R. (2014). Summary of the ASK14 ground motion relation for active crustal regions. Earthquake Spectra 30(3), 1025–1055.',
   settings: ['crustal'],
   distanceMetric: 'rrup',
-  periodsS: SA_PERIODS_S,
+  periodsS: ASK14_TABLE.saPeriodsS,
   hasPga: true,
   hasPgv: true,
   validity: ASK14_VALIDITY,

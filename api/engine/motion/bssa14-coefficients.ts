@@ -25,8 +25,13 @@
  * f1 ln units; f3 g; f4 dimensionless; f5 per m/s; f6 ln units per km, f7 ln units; R1, R2 km
  * (Rjb); ΔφR, ΔφV, φ1, φ2, τ1, τ2 natural-log standard deviations.
  */
-import { readCoefficientTable, rowOfPeriod, type CoefficientRow } from './coefficient-table.ts';
-import BSSA14_TABLE from './bssa14.json' with { type: 'json' };
+import {
+  readModelTable,
+  rowOfPeriod,
+  type CoefficientRow,
+  type ModelTable,
+} from './coefficient-table.ts';
+import PUBLISHED from './bssa14.json' with { type: 'json' };
 
 /** Column names of the table, in the supplement's order. */
 export const BSSA14_COLUMNS = [
@@ -71,32 +76,26 @@ export const BSSA14_COLUMNS = [
 /** One row of the table. `periodS` is 0 for PGA and −1 for PGV, as in the supplement. */
 export type Bssa14Row = CoefficientRow<(typeof BSSA14_COLUMNS)[number]>;
 
-/** Every row: PGV, PGA, then the spectral periods increasing. */
-export const BSSA14_ROWS: readonly Bssa14Row[] = readCoefficientTable(
-  'bssa14.json',
-  BSSA14_TABLE,
+/** The table as the model reads it: every row, the PGA row, the spectral rows and their periods. */
+export const BSSA14_TABLE: ModelTable<Bssa14Row> = readModelTable(
+  'BSSA14',
+  PUBLISHED,
   BSSA14_COLUMNS,
 );
 
-export const BSSA14_PGV: Bssa14Row = rowOfPeriod('BSSA14', BSSA14_ROWS, -1);
-export const BSSA14_PGA: Bssa14Row = rowOfPeriod('BSSA14', BSSA14_ROWS, 0);
-
-/** The spectral rows, periods in s, increasing. */
-export const BSSA14_SA: readonly Bssa14Row[] = Object.freeze(
-  BSSA14_ROWS.filter((r) => r.periodS > 0),
-);
+export const BSSA14_PGV: Bssa14Row = rowOfPeriod('BSSA14', BSSA14_TABLE.rows, -1);
 
 /**
  * Period-independent coefficients, as repeated in every row of the table: Mref, Rref (km), Vref
  * (m/s), f1, f3 (g), V1, V2 (m/s); Δc3 of California, Taiwan and the other global regions (0).
  */
 export const BSSA14_CONSTANTS = Object.freeze({
-  mRef: BSSA14_PGA.mRef,
-  rRefKm: BSSA14_PGA.rRefKm,
-  vRef: BSSA14_PGA.vRef,
-  f1: BSSA14_PGA.f1,
-  f3G: BSSA14_PGA.f3G,
-  v1: BSSA14_PGA.v1,
-  v2: BSSA14_PGA.v2,
-  deltaC3: BSSA14_PGA.deltaC3Global,
+  mRef: BSSA14_TABLE.pga.mRef,
+  rRefKm: BSSA14_TABLE.pga.rRefKm,
+  vRef: BSSA14_TABLE.pga.vRef,
+  f1: BSSA14_TABLE.pga.f1,
+  f3G: BSSA14_TABLE.pga.f3G,
+  v1: BSSA14_TABLE.pga.v1,
+  v2: BSSA14_TABLE.pga.v2,
+  deltaC3: BSSA14_TABLE.pga.deltaC3Global,
 });

@@ -43,15 +43,15 @@
  * How the table is checked: test/engine/motion/bssa14.vectors.test.ts (independent reference
  * vectors, 1e-4 in ln units).
  */
+import { wrapDeg180 } from '../units.ts';
 import { hypot2 } from './fast-math.ts';
 import {
   BSSA14_CONSTANTS as K,
-  BSSA14_PGA,
+  BSSA14_TABLE,
   BSSA14_PGV,
-  BSSA14_SA,
   type Bssa14Row,
 } from './bssa14-coefficients.ts';
-import { predictAtPeriod } from './interpolate-period.ts';
+import { predictOnTable } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
 import { assembleModel } from './model-assembly.ts';
 import { requirePositivePeriod } from './split-prepare.ts';
@@ -59,14 +59,12 @@ import {
   atLeast,
   createRowScratch,
   insideRange,
-  mapPlan,
-  periodRows,
   plannedRows,
   predictRows,
   rowMemo,
   singleMeasure,
-  singleRow,
   type RowPlan,
+  measurePlan,
 } from './prepared-period.ts';
 import type {
   GmmInput,
@@ -80,7 +78,7 @@ import type {
   SiteContext,
   ValidityRange,
 } from './types.ts';
-import { requireInputs, validityNotes } from './validity.ts';
+import { crustalValidityNotes, requireInputs } from './validity.ts';
 
 const NAME = 'BSSA14';
 
@@ -88,7 +86,7 @@ export type Bssa14Mechanism = 'unspecified' | 'strike-slip' | 'normal' | 'revers
 
 /** The paper's rake classes (rake in degrees, any turn): normal −150..−30, reverse 30..150 (open). */
 export function bssa14MechanismFromRake(rakeDeg: number): 'strike-slip' | 'normal' | 'reverse' {
-  const rake = ((((rakeDeg + 180) % 360) + 360) % 360) - 180;
+  const rake = wrapDeg180(rakeDeg);
   if (rake > -150 && rake < -30) return 'normal';
   if (rake > 30 && rake < 150) return 'reverse';
   return 'strike-slip';
@@ -183,7 +181,9 @@ export function bssa14PathTerm(row: Bssa14Row, slope: number, rjbKm: number): nu
  * rupture terms and Rjb in km: PGAr is the model's median PGA (g) at Vs30 = Vref = 760 m/s.
  */
 export function bssa14RockFactor(pgaTerms: Bssa14RuptureTerms, rjbKm: number): number {
-  const pgaRockG = Math.exp(pgaTerms.source + bssa14PathTerm(BSSA14_PGA, pgaTerms.slope, rjbKm));
+  const pgaRockG = Math.exp(
+    pgaTerms.source + bssa14PathTerm(BSSA14_TABLE.pga, pgaTerms.slope, rjbKm),
+  );
   return Math.log((pgaRockG + K.f3G) / K.f3G);
 }
 
@@ -244,8 +244,6 @@ function mechanismOf(rupture: RuptureContext, options: Bssa14Options): Bssa14Mec
 
 const requireVs30 = (vs30: number): void => requireInputs(NAME, { vs30 }, ['vs30']);
 
-const SA_PERIODS_S: readonly number[] = Object.freeze(BSSA14_SA.map((r) => r.periodS));
-
 /**
  * BSSA14 median and standard deviations for one measure (PGA and PSA in g, PGV in cm/s; all
  * in ln units). Uses magnitude, rakeDeg, rjbKm, vs30 and setting of the input.
@@ -259,13 +257,9 @@ export function predictBssa14(
   requireInputs(NAME, input, ['rjbKm', 'vs30']);
   requirePositivePeriod(measure);
   const range = mechanism === 'normal' ? BSSA14_NORMAL_VALIDITY : BSSA14_VALIDITY;
-  const notes = validityNotes(NAME, range, input, input.rjbKm);
-  if (input.setting !== 'crustal')
-    notes.unshift(
-      `${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`,
-    );
+  const notes = crustalValidityNotes(NAME, range, input, input.rjbKm);
   const rockFactor = bssa14RockFactor(
-    bssa14RuptureTerms(BSSA14_PGA, input.magnitude, mechanism),
+    bssa14RuptureTerms(BSSA14_TABLE.pga, input.magnitude, mechanism),
     input.rjbKm,
   );
 
@@ -283,16 +277,7 @@ export function predictBssa14(
       notes,
     };
   };
-  switch (measure.kind) {
-    case 'PGA':
-      return predictRow(BSSA14_PGA);
-    case 'PGV':
-      return predictRow(BSSA14_PGV);
-    case 'SA':
-      return predictAtPeriod(NAME, SA_PERIODS_S, measure.periodS, (i) =>
-        predictRow(BSSA14_SA[i] as Bssa14Row),
-      );
-  }
+  return predictOnTable(NAME, BSSA14_TABLE, BSSA14_PGV, measure, predictRow);
 }
 
 /** One row's rupture terms for every prepared rupture. */
@@ -323,10 +308,9 @@ export function prepareBssa14Measures(
       bssa14RuptureTerms(row, r.magnitude, mechanisms[i] as Bssa14Mechanism),
     ),
   }));
-  const plans: RowPlan<PreparedRow>[] = measures.map((m) => {
-    if (m.kind !== 'SA') return singleRow(termsOf(m.kind === 'PGA' ? BSSA14_PGA : BSSA14_PGV));
-    return mapPlan(periodRows(NAME, SA_PERIODS_S, BSSA14_SA, m.periodS), termsOf);
-  });
+  const plans: RowPlan<PreparedRow>[] = measures.map((m) =>
+    measurePlan(NAME, BSSA14_TABLE, BSSA14_PGV, m, termsOf),
+  );
   const rows = plannedRows(plans).map((p) => p.row);
   let pgaTerms: readonly Bssa14RuptureTerms[] | undefined;
   let rockFactor: Float64Array = new Float64Array(0);
@@ -363,7 +347,7 @@ export function prepareBssa14Measures(
       rockFactor = atLeast(rockFactor, count);
       // PGAr is needed only where some row's f2 is not 0 (Vs30 below 760 m/s).
       if (rows.some((row) => bssa14SiteTerms(row, site.vs30).f2 !== 0)) {
-        pgaTerms ??= termsOf(BSSA14_PGA).terms;
+        pgaTerms ??= termsOf(BSSA14_TABLE.pga).terms;
         for (let k = 0; k < count; k++)
           rockFactor[k] = bssa14RockFactor(
             pgaTerms[rupture[k] as number] as Bssa14RuptureTerms,
@@ -395,7 +379,7 @@ export const bssa14: GroundMotionModel = assembleModel({
     'Boore, D. M., Stewart, J. P., Seyhan, E. & Atkinson, G. M. (2014). NGA-West2 equations for predicting PGA, PGV, and 5% damped PSA for shallow crustal earthquakes. Earthquake Spectra 30(3), 1057–1085.',
   settings: ['crustal'],
   distanceMetric: 'rjb',
-  periodsS: SA_PERIODS_S,
+  periodsS: BSSA14_TABLE.saPeriodsS,
   hasPga: true,
   hasPgv: true,
   validity: BSSA14_VALIDITY,

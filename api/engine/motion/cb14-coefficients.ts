@@ -24,8 +24,13 @@
  * a2 per magnitude unit; h1–h6 dimensionless; k1 m/s; k2, k3 dimensionless; φ1, φ2, τ1, τ2,
  * φlnAF, φC and the sigma columns natural-log standard deviations; ρ dimensionless.
  */
-import { readCoefficientTable, rowOfPeriod, type CoefficientRow } from './coefficient-table.ts';
-import CB14_TABLE from './cb14.json' with { type: 'json' };
+import {
+  readModelTable,
+  rowOfPeriod,
+  type CoefficientRow,
+  type ModelTable,
+} from './coefficient-table.ts';
+import PUBLISHED from './cb14.json' with { type: 'json' };
 
 /** Column names of Tables 1 and 2, in the paper's order (ρ is ρlnPGA,lnY). */
 // prettier-ignore
@@ -36,23 +41,15 @@ export const CB14_COLUMNS = [
 /** One row of Tables 1 and 2. `periodS` is 0 for PGA and −1 for PGV. */
 export type Cb14Row = CoefficientRow<(typeof CB14_COLUMNS)[number]>;
 
-/** Every row: PGV, PGA, then the spectral periods increasing. */
-export const CB14_ROWS: readonly Cb14Row[] = readCoefficientTable(
-  'cb14.json',
-  CB14_TABLE,
-  CB14_COLUMNS,
-);
+/** The table as the model reads it: every row, the PGA row, the spectral rows and their periods. */
+export const CB14_TABLE: ModelTable<Cb14Row> = readModelTable('CB14', PUBLISHED, CB14_COLUMNS);
 
-export const CB14_PGV: Cb14Row = rowOfPeriod('CB14', CB14_ROWS, -1);
-export const CB14_PGA: Cb14Row = rowOfPeriod('CB14', CB14_ROWS, 0);
-
-/** The spectral rows, periods in s, increasing. */
-export const CB14_SA: readonly Cb14Row[] = Object.freeze(CB14_ROWS.filter((r) => r.periodS > 0));
+export const CB14_PGV: Cb14Row = rowOfPeriod('CB14', CB14_TABLE.rows, -1);
 
 /** Period-independent constants (cb14-constants.csv): c, n of the nonlinear site term; h4 = 1 in every row; Δc20 = 0 for California and global use. */
 export const CB14_CONSTANTS = Object.freeze({
   c: 1.88,
   n: 1.18,
-  h4: CB14_PGA.h4,
-  deltaC20: CB14_PGA.deltaC20CA,
+  h4: CB14_TABLE.pga.h4,
+  deltaC20: CB14_TABLE.pga.deltaC20CA,
 });

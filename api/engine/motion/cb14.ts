@@ -52,14 +52,9 @@
 import { toRadians } from '../units.ts';
 import { hypot2 } from './fast-math.ts';
 import { rowMemo } from './prepared-period.ts';
-import {
-  CB14_CONSTANTS as K,
-  CB14_PGA,
-  CB14_PGV,
-  CB14_SA,
-  type Cb14Row,
-} from './cb14-coefficients.ts';
+import { CB14_CONSTANTS as K, CB14_TABLE, CB14_PGV, type Cb14Row } from './cb14-coefficients.ts';
 import type { Measure } from './measure.ts';
+import { openRakeClass, type RakeClass } from './rake-classes.ts';
 import { assembleModel } from './model-assembly.ts';
 import {
   emptyPairPrediction,
@@ -76,21 +71,14 @@ import type {
   RuptureContext,
   ValidityRange,
 } from './types.ts';
-import { insideValidity, requireInputs, validityNotes, within } from './validity.ts';
+import { crustalValidityNotes, insideValidity, requireInputs, within } from './validity.ts';
 
 const NAME = 'CB14';
 
-export type Cb14Mechanism = 'strike-slip' | 'normal' | 'reverse';
+export type Cb14Mechanism = RakeClass;
 
-/** The paper's rake classes (degrees, any turn): reverse 30..150, normal −150..−30 (open). */
-export function cb14MechanismFromRake(rakeDeg: number): Cb14Mechanism {
-  const rake = ((((rakeDeg + 180) % 360) + 360) % 360) - 180;
-  if (rake > 30 && rake < 150) return 'reverse';
-  if (rake > -150 && rake < -30) return 'normal';
-  return 'strike-slip';
-}
-
-const SA_PERIODS_S: readonly number[] = Object.freeze(CB14_SA.map((r) => r.periodS));
+/** The paper's rake classes (rake-classes.ts): reverse 30..150, normal −150..−30 (open). */
+export const cb14MechanismFromRake: (rakeDeg: number) => Cb14Mechanism = openRakeClass;
 
 /** The earthquake and path as the equation sees them; distances and depths in km, dip in degrees. */
 export interface Cb14Scenario {
@@ -332,7 +320,7 @@ const ROCK_Z2P5_KM = cb14DefaultZ2p5Km(CB14_ROCK_VS30);
  * ln units. On rock above k1 the site term does not depend on A1100, so any value serves.
  */
 const ROCK_SITE_LN =
-  cb14SiteTerm(CB14_PGA, CB14_ROCK_VS30, 0) + cb14BasinTerm(CB14_PGA, ROCK_Z2P5_KM);
+  cb14SiteTerm(CB14_TABLE.pga, CB14_ROCK_VS30, 0) + cb14BasinTerm(CB14_TABLE.pga, ROCK_Z2P5_KM);
 
 /** Magnitudes 4.5 and 5.5 bound the ramp of τ and φ between the small- and large-event values. */
 const rampM = (m: number, small: number, large: number): number =>
@@ -349,8 +337,8 @@ interface Cb14SigmaTerms {
 const sigmaTerms = (row: Cb14Row, m: number): Cb14SigmaTerms => ({
   tauY: rampM(m, row.tau1, row.tau2),
   phiY: rampM(m, row.phi1, row.phi2),
-  tauPga: rampM(m, CB14_PGA.tau1, CB14_PGA.tau2),
-  phiPga: rampM(m, CB14_PGA.phi1, CB14_PGA.phi2),
+  tauPga: rampM(m, CB14_TABLE.pga.tau1, CB14_TABLE.pga.tau2),
+  phiPga: rampM(m, CB14_TABLE.pga.phi1, CB14_TABLE.pga.phi2),
 });
 
 /** τ, φ and σ (ln units) of a row, with the nonlinear-site correction for Vs30 (m/s) below k1. */
@@ -389,7 +377,9 @@ function sigmaInto(
     return out;
   }
   const phiYB = Math.sqrt(Math.max(phiY * phiY - row.phiLnAF * row.phiLnAF, 0));
-  const phiPgaB = Math.sqrt(Math.max(t.phiPga * t.phiPga - CB14_PGA.phiLnAF * CB14_PGA.phiLnAF, 0));
+  const phiPgaB = Math.sqrt(
+    Math.max(t.phiPga * t.phiPga - CB14_TABLE.pga.phiLnAF * CB14_TABLE.pga.phiLnAF, 0),
+  );
   const tau = Math.sqrt(
     Math.max(tauY ** 2 + alpha ** 2 * tauPga ** 2 + 2 * alpha * row.rho * tauY * tauPga, 0),
   );
@@ -418,7 +408,7 @@ export const CB14_MAGNITUDE_RANGE: Readonly<Record<Cb14Mechanism, readonly [numb
 
 /** Validity over all mechanisms (strike-slip's magnitude range; the others stop lower). */
 export const CB14_VALIDITY: ValidityRange = Object.freeze({
-  magnitude: [3.3, 8.5],
+  magnitude: CB14_MAGNITUDE_RANGE['strike-slip'],
   distanceKm: [0, 300],
   vs30: [150, 1500],
   depthKm: [0, 20],
@@ -457,7 +447,7 @@ const MAGNITUDE_VALIDITY: Readonly<Record<Cb14Mechanism, ValidityRange>> = Objec
 });
 
 function notesOf(input: GmmInput, s: Cb14Scenario): string[] {
-  const notes = validityNotes(NAME, MAGNITUDE_VALIDITY[s.mechanism], input, s.rrupKm);
+  const notes = crustalValidityNotes(NAME, MAGNITUDE_VALIDITY[s.mechanism], input, s.rrupKm);
   const outside = (label: string, value: number, min: number, max: number, unit: string): void => {
     if (value < min || value > max)
       notes.push(
@@ -467,10 +457,6 @@ function notesOf(input: GmmInput, s: Cb14Scenario): string[] {
   outside('depth to top of rupture', s.ztorKm, 0, 20, ' km');
   outside('dip', s.dipDeg, 15, 90, '°');
   if (input.z2p5Km !== undefined) outside('Z2.5', input.z2p5Km, 0, 10, ' km');
-  if (input.setting !== 'crustal')
-    notes.unshift(
-      `${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`,
-    );
   return notes;
 }
 
@@ -510,20 +496,20 @@ export function cb14RuptureTerms(
   rupture: Omit<Cb14Scenario, 'rrupKm' | 'rjbKm' | 'rxKm'>,
 ): Cb14RuptureTerms {
   const { magnitude: m, ztorKm, dipDeg } = rupture;
-  const pgaSource = cb14SourceTerm(CB14_PGA, rupture);
-  const pgaHangingWallScale = cb14HangingWallScale(CB14_PGA, m, ztorKm, dipDeg);
+  const pgaSource = cb14SourceTerm(CB14_TABLE.pga, rupture);
+  const pgaHangingWallScale = cb14HangingWallScale(CB14_TABLE.pga, m, ztorKm, dipDeg);
   return {
     row,
     rupture,
-    source: row === CB14_PGA ? pgaSource : cb14SourceTerm(row, rupture),
+    source: row === CB14_TABLE.pga ? pgaSource : cb14SourceTerm(row, rupture),
     pgaSource,
     hangingWallScale:
-      row === CB14_PGA ? pgaHangingWallScale : cb14HangingWallScale(row, m, ztorKm, dipDeg),
+      row === CB14_TABLE.pga ? pgaHangingWallScale : cb14HangingWallScale(row, m, ztorKm, dipDeg),
     pgaHangingWallScale,
     geometry: hangingWallGeometry(rupture),
     sigma: sigmaTerms(row, m),
     site: sitePartsOf(row),
-    pgaSite: sitePartsOf(CB14_PGA),
+    pgaSite: sitePartsOf(CB14_TABLE.pga),
   };
 }
 
@@ -543,16 +529,16 @@ export function cb14PairPrediction(
   const site = siteAt(t.site, row, vs30, pair.z2p5Km);
   const fRrup = rrupTaper(rrupKm, pair.rjbKm);
   const pgaHangingWall = hangingWallOfPair(
-    CB14_PGA,
+    CB14_TABLE.pga,
     t.pgaHangingWallScale,
     t.geometry,
     rxKm,
     fRrup,
   );
-  const pgaRockPath = lnRockPath(CB14_PGA, t.pgaSource, m, rrupKm, pgaHangingWall);
+  const pgaRockPath = lnRockPath(CB14_TABLE.pga, t.pgaSource, m, rrupKm, pgaHangingWall);
   const a1100G = Math.exp(pgaRockPath + ROCK_SITE_LN);
   const rockPath =
-    row === CB14_PGA
+    row === CB14_TABLE.pga
       ? pgaRockPath
       : lnRockPath(
           row,
@@ -565,10 +551,12 @@ export function cb14PairPrediction(
     rockPath + siteTermFrom(row, vs30, site.lnRatio, site.cRatioPowN, a1100G) + site.basin;
   // CB14: at periods under 0.25 s the spectral acceleration is not allowed below PGA.
   if (row.periodS > 0 && row.periodS < 0.25) {
-    const pga = siteAt(t.pgaSite, CB14_PGA, vs30, pair.z2p5Km);
+    const pga = siteAt(t.pgaSite, CB14_TABLE.pga, vs30, pair.z2p5Km);
     out.lnMedian = Math.max(
       unfloored,
-      pgaRockPath + siteTermFrom(CB14_PGA, vs30, pga.lnRatio, pga.cRatioPowN, a1100G) + pga.basin,
+      pgaRockPath +
+        siteTermFrom(CB14_TABLE.pga, vs30, pga.lnRatio, pga.cRatioPowN, a1100G) +
+        pga.basin,
     );
   } else out.lnMedian = unfloored;
   return sigmaInto(row, t.sigma, vs30, site.ratioPowN, a1100G, out);
@@ -577,10 +565,8 @@ export function cb14PairPrediction(
 /** The model as rupture terms and pair prediction, for the fast path (split-prepare.ts): the same functions predict() uses. */
 const SPLIT: SplitModel<Cb14Row, Cb14RuptureTerms> = {
   name: NAME,
-  pga: CB14_PGA,
+  table: CB14_TABLE,
   pgv: CB14_PGV,
-  sa: CB14_SA,
-  periodsS: SA_PERIODS_S,
   distances: ['rrupKm', 'rjbKm', 'rxKm'],
   checkMeasure: requirePositivePeriod,
   checkRupture: (rupture) => void ruptureOf(rupture),
@@ -602,7 +588,7 @@ export const cb14: GroundMotionModel = assembleModel({
     'Campbell, K. W. & Bozorgnia, Y. (2014). NGA-West2 ground motion model for the average horizontal components of PGA, PGV, and 5% damped linear acceleration response spectra. Earthquake Spectra 30(3), 1087–1115.',
   settings: ['crustal'],
   distanceMetric: 'rrup',
-  periodsS: SA_PERIODS_S,
+  periodsS: CB14_TABLE.saPeriodsS,
   hasPga: true,
   hasPgv: true,
   validity: CB14_VALIDITY,

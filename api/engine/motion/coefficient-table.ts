@@ -19,20 +19,20 @@ export type CoefficientRow<Column extends string> = { readonly periodS: number }
 };
 
 /**
- * The rows of the table `file` (imported as `table`), frozen: `period`, then the cells taken in
+ * The rows of `model`'s table (its `<model>.json`, imported as `table`), frozen: `period`, then the cells taken in
  * the order of `columns`. The table's `columns` keep the reference record's spelling of the
  * paper's symbols (`Vlin` for the field `vlin`); that they name the fields in this order is
  * checked by test/engine/motion/coefficient-tables.test.ts. A table with another number of
  * columns or a cell that is not a finite number throws when the model's module loads, naming
- * the file, the row and the column.
+ * the model, the row and the column.
  */
-export function readCoefficientTable<Column extends string>(
-  file: string,
+function readCoefficientTable<Column extends string>(
+  model: string,
   table: PublishedTable,
   columns: readonly Column[],
 ): readonly CoefficientRow<Column>[] {
   const fail = (what: string): never => {
-    throw new Error(`coefficient table ${file}: ${what}`);
+    throw new Error(`${model} coefficient table: ${what}`);
   };
   const names = table.columns;
   if (names[0] !== 'period' || names.length !== columns.length + 1)
@@ -62,4 +62,35 @@ export function rowOfPeriod<Row extends { readonly periodS: number }>(
   const row = rows.find((r) => r.periodS === periodS);
   if (!row) throw new Error(`${model} coefficient table has no row for period ${periodS}`);
   return row;
+}
+
+/** A model's table as its model reads it: every row, the PGA row, the spectral rows and their periods. */
+export interface ModelTable<Row> {
+  /** Every row as published: PGV (where the table has one), PGA, then the spectral periods increasing. */
+  readonly rows: readonly Row[];
+  /** The PGA row (period 0). */
+  readonly pga: Row;
+  /** The spectral-acceleration rows, periods increasing. */
+  readonly sa: readonly Row[];
+  /** The periods of `sa`, s. */
+  readonly saPeriodsS: readonly number[];
+}
+
+/**
+ * The table of `model` read by readCoefficientTable and split into the rows its model reads;
+ * throws when the module loads if the table has no PGA row.
+ */
+export function readModelTable<Column extends string>(
+  model: string,
+  table: PublishedTable,
+  columns: readonly Column[],
+): ModelTable<CoefficientRow<Column>> {
+  const rows = readCoefficientTable(model, table, columns);
+  const sa = Object.freeze(rows.filter((r) => r.periodS > 0));
+  return Object.freeze({
+    rows,
+    pga: rowOfPeriod(model, rows, 0),
+    sa,
+    saPeriodsS: Object.freeze(sa.map((r) => r.periodS)),
+  });
 }

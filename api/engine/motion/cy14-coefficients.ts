@@ -26,8 +26,8 @@
  * units (sigma3 a factor of the variance); the other coefficients in ln units per unit of the
  * quantity they multiply (see cy14.ts).
  */
-import { readCoefficientTable, rowOfPeriod } from './coefficient-table.ts';
-import CY14_TABLE from './cy14.json' with { type: 'json' };
+import { readModelTable, rowOfPeriod, type ModelTable } from './coefficient-table.ts';
+import PUBLISHED from './cy14.json' with { type: 'json' };
 
 /** One row of the table. `periodS` is 0 for PGA and −1 for PGV. */
 export interface Cy14Row {
@@ -140,15 +140,7 @@ export const CY14_COLUMNS = [
   'sigma3',
 ] as const satisfies readonly (keyof Cy14Row)[];
 
-/** Every row: PGV, PGA, then the spectral periods increasing. */
-export const CY14_ROWS: readonly Cy14Row[] = readCoefficientTable(
-  'cy14.json',
-  CY14_TABLE,
-  CY14_COLUMNS,
-);
+/** The table as the model reads it: every row, the PGA row, the spectral rows and their periods. */
+export const CY14_TABLE: ModelTable<Cy14Row> = readModelTable('CY14', PUBLISHED, CY14_COLUMNS);
 
-export const CY14_PGV: Cy14Row = rowOfPeriod('CY14', CY14_ROWS, -1);
-export const CY14_PGA: Cy14Row = rowOfPeriod('CY14', CY14_ROWS, 0);
-
-/** The spectral rows, periods in s, increasing. */
-export const CY14_SA: readonly Cy14Row[] = Object.freeze(CY14_ROWS.filter((r) => r.periodS > 0));
+export const CY14_PGV: Cy14Row = rowOfPeriod('CY14', CY14_TABLE.rows, -1);

@@ -45,9 +45,9 @@
  * How it is checked: test/engine/motion/cy14.test.ts reproduces the reference vectors
  * (../shared/reference/gmm/vectors/cy14.json, an independent implementation of the paper) within 1e-4.
  */
-import { toRadians } from '../units.ts';
+import { toRadians, wrapDeg180 } from '../units.ts';
 import { hypot2 } from './fast-math.ts';
-import { CY14_PGA, CY14_PGV, CY14_SA, type Cy14Row } from './cy14-coefficients.ts';
+import { CY14_TABLE, CY14_PGV, type Cy14Row } from './cy14-coefficients.ts';
 import type { Measure } from './measure.ts';
 import { assembleModel } from './model-assembly.ts';
 import { rowMemo } from './prepared-period.ts';
@@ -66,11 +66,9 @@ import type {
   SiteContext,
   ValidityRange,
 } from './types.ts';
-import { insideValidity, requireInputs, validityNotes, within } from './validity.ts';
+import { crustalValidityNotes, insideValidity, requireInputs, within } from './validity.ts';
 
 const NAME = 'CY14';
-const SA_PERIODS_S: readonly number[] = Object.freeze(CY14_SA.map((r) => r.periodS));
-
 /** Vs30 of the reference motion y_ref, m/s. */
 export const CY14_REFERENCE_VS30 = 1130;
 
@@ -78,7 +76,7 @@ export type Cy14Mechanism = 'strike-slip' | 'normal' | 'reverse';
 
 /** The paper's rake classes (degrees, any turn): reverse 30..150, normal −120..−60 (closed). */
 export function cy14MechanismFromRake(rakeDeg: number): Cy14Mechanism {
-  const rake = ((((rakeDeg + 180) % 360) + 360) % 360) - 180;
+  const rake = wrapDeg180(rakeDeg);
   if (rake >= 30 && rake <= 150) return 'reverse';
   if (rake >= -120 && rake <= -60) return 'normal';
   return 'strike-slip';
@@ -294,7 +292,7 @@ export const CY14_MAGNITUDE_RANGE: Readonly<Record<Cy14Mechanism, readonly [numb
 
 /** Validity over all mechanisms (strike-slip's magnitude range; the others stop lower). */
 export const CY14_VALIDITY: ValidityRange = Object.freeze({
-  magnitude: [3.5, 8.5],
+  magnitude: CY14_MAGNITUDE_RANGE['strike-slip'],
   distanceKm: [0, 300],
   vs30: [180, 1500],
 } as const);
@@ -321,14 +319,15 @@ const MAGNITUDE_VALIDITY: Readonly<Record<Cy14Mechanism, ValidityRange>> = Objec
 });
 
 function notesOf(input: GmmInput, rupture: Cy14Rupture): string[] {
-  const notes = validityNotes(NAME, MAGNITUDE_VALIDITY[rupture.mechanism], input, input.rrupKm);
+  const notes = crustalValidityNotes(
+    NAME,
+    MAGNITUDE_VALIDITY[rupture.mechanism],
+    input,
+    input.rrupKm,
+  );
   if (rupture.ztorKm > 20)
     notes.push(
       `${NAME}: depth to top of rupture ${Math.round(rupture.ztorKm * 100) / 100} km is outside its range 0–20 km`,
-    );
-  if (input.setting !== 'crustal')
-    notes.unshift(
-      `${NAME}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`,
     );
   return notes;
 }
@@ -353,10 +352,8 @@ export function predictCy14(input: GmmInput, measure: Measure): GmmPrediction {
 /** The model as rupture terms and pair prediction, for the fast path (split-prepare.ts): the same functions predict() uses. */
 const SPLIT: SplitModel<Cy14Row, Cy14RuptureTerms> = {
   name: NAME,
-  pga: CY14_PGA,
+  table: CY14_TABLE,
   pgv: CY14_PGV,
-  sa: CY14_SA,
-  periodsS: SA_PERIODS_S,
   distances: ['rrupKm', 'rjbKm', 'rxKm'],
   checkMeasure: requirePositivePeriod,
   checkRupture: (rupture) => void ruptureOf(rupture as GmmInput),
@@ -376,7 +373,7 @@ export const cy14: GroundMotionModel = assembleModel({
     'Chiou, B. S.-J. & Youngs, R. R. (2014). Update of the Chiou and Youngs NGA model for the average horizontal component of peak ground motion and response spectra. Earthquake Spectra 30(3), 1117–1153.',
   settings: ['crustal'],
   distanceMetric: 'rrup',
-  periodsS: SA_PERIODS_S,
+  periodsS: CY14_TABLE.saPeriodsS,
   hasPga: true,
   hasPgv: true,
   validity: CY14_VALIDITY,

@@ -1,4 +1,6 @@
 import { UnsupportedPeriod } from '../errors.ts';
+import type { ModelTable } from './coefficient-table.ts';
+import type { Measure } from './measure.ts';
 import type { GmmPrediction } from './types.ts';
 
 /**
@@ -62,4 +64,23 @@ export function predictAtPeriod(
     applicable: lo.applicable && hi.applicable,
     notes: [...new Set([...lo.notes, ...hi.notes])],
   };
+}
+
+/**
+ * One measure's prediction from a model's table: the PGA row, the PGV row (`pgv`, for a model
+ * that has one; the others refuse PGV before they get here), or for SA the rows either side of
+ * the period by predictAtPeriod, each row through `predictRow`.
+ */
+export function predictOnTable<Row>(
+  modelName: string,
+  table: ModelTable<Row>,
+  pgv: Row | undefined,
+  measure: Measure,
+  predictRow: (row: Row) => GmmPrediction,
+): GmmPrediction {
+  if (measure.kind === 'SA')
+    return predictAtPeriod(modelName, table.saPeriodsS, measure.periodS, (i) =>
+      predictRow(table.sa[i] as Row),
+    );
+  return predictRow(measure.kind === 'PGV' ? (pgv as Row) : table.pga);
 }

@@ -1,4 +1,6 @@
+import type { ModelTable } from './coefficient-table.ts';
 import { bracketPeriod, lerp } from './interpolate-period.ts';
+import type { Measure } from './measure.ts';
 import type { PairPredictions, PreparedMotion, PreparedMotions } from './types.ts';
 
 /** Columns for `capacity` pair predictions. */
@@ -51,6 +53,22 @@ export const mapPlan = <Row, Terms>(
   upper: plan.upper === undefined ? undefined : f(plan.upper),
   fraction: plan.fraction,
 });
+
+/**
+ * The RowPlan of one measure over what `termsOf` makes of a model's table rows: the PGA row, the
+ * PGV row (`pgv`, for a model that has one; the others refuse PGV first), or for SA periodRows.
+ */
+export function measurePlan<Row, Terms>(
+  modelName: string,
+  table: ModelTable<Row>,
+  pgv: Row | undefined,
+  measure: Measure,
+  termsOf: (row: Row) => Terms,
+): RowPlan<Terms> {
+  if (measure.kind === 'SA')
+    return mapPlan(periodRows(modelName, table.saPeriodsS, table.sa, measure.periodS), termsOf);
+  return singleRow(termsOf(measure.kind === 'PGV' ? (pgv as Row) : table.pga));
+}
 
 /** The distinct rows the plans read, in the order they first appear. */
 export const plannedRows = <Row>(plans: readonly RowPlan<Row>[]): Row[] => [

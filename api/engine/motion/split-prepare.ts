@@ -1,14 +1,13 @@
 import { UnsupportedMeasure } from '../errors.ts';
-import { predictAtPeriod } from './interpolate-period.ts';
+import type { ModelTable } from './coefficient-table.ts';
+import { predictOnTable } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
 import {
   createRowScratch,
-  mapPlan,
-  periodRows,
   predictRows,
   rowMemo,
-  singleRow,
   type RowPlan,
+  measurePlan,
 } from './prepared-period.ts';
 import type {
   DistanceName,
@@ -28,11 +27,10 @@ import type {
  */
 export interface SplitModel<Row, Terms> {
   readonly name: string;
-  readonly pga: Row;
+  /** The model's coefficient table: its PGA row and spectral rows. */
+  readonly table: ModelTable<Row>;
   /** The PGV row, where the model has one (a model without refuses PGV in checkMeasure). */
   readonly pgv?: Row;
-  readonly sa: readonly Row[];
-  readonly periodsS: readonly number[];
   /** The distance columns pairPrediction reads. */
   readonly distances: readonly DistanceName[];
   /** Throws what predict() throws for a measure the model cannot give. */
@@ -86,11 +84,9 @@ export function prepareSplitMeasures<Row, Terms>(
     row,
     terms: ruptures.map((r) => model.ruptureTerms(row, r)),
   }));
-  const plans: RowPlan<PreparedRow<Row, Terms>>[] = measures.map((m) => {
-    if (m.kind === 'SA')
-      return mapPlan(periodRows(model.name, model.periodsS, model.sa, m.periodS), termsOf);
-    return singleRow(termsOf(m.kind === 'PGA' ? model.pga : (model.pgv as Row)));
-  });
+  const plans: RowPlan<PreparedRow<Row, Terms>>[] = measures.map((m) =>
+    measurePlan(model.name, model.table, model.pgv, m, termsOf),
+  );
   const scratch = createRowScratch();
   const pair = {} as MutablePair;
   const prediction = emptyPairPrediction();
@@ -155,22 +151,14 @@ export function requirePositivePeriod(measure: Measure): void {
     throw new UnsupportedMeasure(`SA(${measure.periodS})`, 'the period must be greater than 0 s');
 }
 
-/**
- * predict() of a SplitModel for one measure, once the caller has checked the inputs: the PGA
- * or PGV row, or for SA the table rows either side of the period interpolated in ln(period)
- * (interpolate-period.ts), each row through `predictRow`.
- */
+/** predict() of a SplitModel for one measure, once the caller has checked the inputs (predictOnTable). */
 export function predictSplit<Row, Terms>(
   model: SplitModel<Row, Terms>,
   measure: Measure,
   predictRow: (row: Row) => GmmPrediction,
 ): GmmPrediction {
   model.checkMeasure(measure);
-  if (measure.kind === 'SA')
-    return predictAtPeriod(model.name, model.periodsS, measure.periodS, (i) =>
-      predictRow(model.sa[i] as Row),
-    );
-  return predictRow(measure.kind === 'PGA' ? model.pga : (model.pgv as Row));
+  return predictOnTable(model.name, model.table, model.pgv, measure, predictRow);
 }
 
 /** The prepareMeasures hook of a SplitModel (model-assembly.ts derives prepare from it). */

@@ -111,4 +111,22 @@ export function insideValidity(range: ValidityRange, input: GmmInput, distanceKm
 export const within = (value: number, min: number, max: number): boolean =>
   !(value < min || value > max);
 
+/**
+ * validityNotes of a model of shallow crustal earthquakes (the NGA-West2 models' own scope),
+ * after, first, a note when the earthquake is of another setting.
+ */
+export function crustalValidityNotes(
+  modelName: string,
+  range: ValidityRange,
+  input: GmmInput,
+  distanceKm: number,
+): string[] {
+  const notes = validityNotes(modelName, range, input, distanceKm);
+  if (input.setting !== 'crustal')
+    notes.unshift(
+      `${modelName}: it is a model for shallow crustal earthquakes, not ${input.setting} ones`,
+    );
+  return notes;
+}
+
 const round = (x: number): string => String(Math.round(x * 100) / 100);

@@ -22,8 +22,8 @@
  * units; SSL multiplies ln x (x in km); Q per magnitude unit squared, P per magnitude unit, W ln
  * units; σ, τ, σT and the τ of the magnitude-squared terms natural-log standard deviations.
  */
-import { readCoefficientTable, rowOfPeriod, type CoefficientRow } from './coefficient-table.ts';
-import ZHAO06_TABLE from './zhao06.json' with { type: 'json' };
+import { readModelTable, type CoefficientRow, type ModelTable } from './coefficient-table.ts';
+import PUBLISHED from './zhao06.json' with { type: 'json' };
 
 /** Column names, in the reference record's order. */
 // prettier-ignore
@@ -35,18 +35,11 @@ export const ZHAO06_COLUMNS = [
 /** One row of the table. `periodS` is 0 for PGA. */
 export type Zhao06Row = CoefficientRow<(typeof ZHAO06_COLUMNS)[number]>;
 
-/** Every row: PGA, then the spectral periods increasing. */
-export const ZHAO06_ROWS: readonly Zhao06Row[] = readCoefficientTable(
-  'zhao06.json',
-  ZHAO06_TABLE,
+/** The table as the model reads it: every row, the PGA row, the spectral rows and their periods. */
+export const ZHAO06_TABLE: ModelTable<Zhao06Row> = readModelTable(
+  'Zhao06',
+  PUBLISHED,
   ZHAO06_COLUMNS,
-);
-
-export const ZHAO06_PGA: Zhao06Row = rowOfPeriod('Zhao06', ZHAO06_ROWS, 0);
-
-/** The spectral rows, 0.05–5 s, increasing. */
-export const ZHAO06_SA: readonly Zhao06Row[] = Object.freeze(
-  ZHAO06_ROWS.filter((r) => r.periodS > 0),
 );
 
 /** Period-independent constants (zhao06-constants.csv). */

@@ -29,20 +29,19 @@
  * predict() and the fast path call both. Checked against independent vectors in
  * test/engine/motion/zhao06.vectors.test.ts.
  */
+import { wrapDeg180 } from '../units.ts';
 import { UnsupportedMeasure } from '../errors.ts';
 import type { TectonicSetting } from '../model.ts';
-import { predictAtPeriod } from './interpolate-period.ts';
+import { predictOnTable } from './interpolate-period.ts';
 import type { Measure } from './measure.ts';
 import { assembleModel } from './model-assembly.ts';
 import {
   createRowScratch,
   insideRange,
-  mapPlan,
-  periodRows,
   predictRows,
   rowMemo,
-  singleRow,
   type RowPlan,
+  measurePlan,
 } from './prepared-period.ts';
 import type {
   GmmInput,
@@ -55,12 +54,7 @@ import type {
   ValidityRange,
 } from './types.ts';
 import { requireInput, requireInputs, validityNotes } from './validity.ts';
-import {
-  ZHAO06_CONSTANTS as K,
-  ZHAO06_PGA,
-  ZHAO06_SA,
-  type Zhao06Row,
-} from './zhao06-coefficients.ts';
+import { ZHAO06_CONSTANTS as K, ZHAO06_TABLE, type Zhao06Row } from './zhao06-coefficients.ts';
 
 /** Standard gravity, cm/s²: the equation's y is in cm/s². */
 const STANDARD_GRAVITY_CMS2 = 980.665;
@@ -108,7 +102,7 @@ export interface Zhao06RuptureTerms {
 
 /** Reverse faulting by rake (degrees, any turn): 30..150 (open), as for the other models. */
 const isReverse = (rakeDeg: number): boolean => {
-  const rake = ((((rakeDeg + 180) % 360) + 360) % 360) - 180;
+  const rake = wrapDeg180(rakeDeg);
   return rake > 30 && rake < 150;
 };
 
@@ -182,8 +176,6 @@ export const ZHAO06_VALIDITY: ValidityRange = Object.freeze({
   depthKm: [0, 125],
 } as const);
 
-const SA_PERIODS_S: readonly number[] = Object.freeze(ZHAO06_SA.map((r) => r.periodS));
-
 function checkRupture(name: string, rupture: RuptureContext): boolean {
   requireInputs(name, rupture, ['magnitude']);
   requireInput(
@@ -236,10 +228,7 @@ export function createZhao06(magnitudeSquared: boolean): GroundMotionModel {
         notes,
       };
     };
-    if (measure.kind === 'PGA') return predictRow(ZHAO06_PGA);
-    return predictAtPeriod(name, SA_PERIODS_S, (measure as { periodS: number }).periodS, (i) =>
-      predictRow(ZHAO06_SA[i] as Zhao06Row),
-    );
+    return predictOnTable(name, ZHAO06_TABLE, undefined, measure, predictRow);
   }
 
   function prepareMeasures(
@@ -253,9 +242,7 @@ export function createZhao06(magnitudeSquared: boolean): GroundMotionModel {
       terms: ruptures.map((r) => rowTerms(row, r)),
     }));
     const plans: RowPlan<PreparedRow>[] = measures.map((m) =>
-      m.kind !== 'SA'
-        ? singleRow(termsOf(ZHAO06_PGA))
-        : mapPlan(periodRows(name, SA_PERIODS_S, ZHAO06_SA, m.periodS), termsOf),
+      measurePlan(name, ZHAO06_TABLE, undefined, m, termsOf),
     );
     const scratch = createRowScratch();
     const [minKm, maxKm] = ZHAO06_VALIDITY.distanceKm;
@@ -296,7 +283,7 @@ export function createZhao06(magnitudeSquared: boolean): GroundMotionModel {
     citation: `Zhao, J. X. et al. (2006). Attenuation relations of strong ground motion in Japan using site classification based on predominant period. Bulletin of the Seismological Society of America 96(3), 898–913.${magnitudeSquared ? ' With the magnitude-squared term.' : ''}`,
     settings: ['interface', 'intraslab', 'crustal'],
     distanceMetric: 'rrup',
-    periodsS: SA_PERIODS_S,
+    periodsS: ZHAO06_TABLE.saPeriodsS,
     hasPga: true,
     hasPgv: false,
     validity: ZHAO06_VALIDITY,

@@ -1,6 +1,7 @@
 import proj4 from 'proj4';
 import { InvalidInput } from '../errors.ts';
 import type { LonLat } from '../model.ts';
+import { wrapDeg180 } from '../units.ts';
 
 /**
  * The coordinate reference system of a grid's cell coordinates:
@@ -143,7 +144,7 @@ export function elevationSampler(grid: ElevationGrid): (lonLat: LonLat) => numbe
 /** The grid's own x, y back to WGS84 [lon, lat]. */
 export function gridToLonLat(grid: ElevationGrid): (x: number, y: number) => LonLat {
   const { crs } = grid;
-  if (crs.kind === 'lonlat') return (x, y) => [((((x + 180) % 360) + 360) % 360) - 180, y];
+  if (crs.kind === 'lonlat') return (x, y) => [wrapDeg180(x), y];
   const converter = proj4('EPSG:4326', crs.proj4);
   return (x, y) => converter.inverse([x, y]) as unknown as LonLat;
 }

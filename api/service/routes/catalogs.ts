@@ -16,7 +16,7 @@ import type { StudyCatalogRecord } from '../../store/catalog-repository.ts';
 import { describeValue } from '../../study/fields.ts';
 import { FELT_PAIR_BUDGET, FIT_EVENT_BUDGET } from '../../operations/catalog-limits.ts';
 import { readCatalogFitRequest, readCatalogUpload } from '../catalog-requests.ts';
-import { HttpError, notFound } from '../http-error.ts';
+import { HttpError, notFound, found } from '../http-error.ts';
 import { readJsonObject } from '../request-body.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
 import { storedInputs, validateStudy } from '../../operations/study-input.ts';
@@ -39,11 +39,7 @@ export function catalogRoutes(ctx: ServiceContext): Hono {
   const app = new Hono();
   const { store } = ctx;
 
-  const findStudy = (id: string) => {
-    const record = store.studies.get(id);
-    if (!record) throw notFound('study', id);
-    return record;
-  };
+  const findStudy = (id: string) => found(store.studies.get(id), 'study', id);
   const findCatalog = (id: string): StudyCatalogRecord => {
     findStudy(id);
     const record = store.catalogs.get(id);

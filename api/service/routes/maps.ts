@@ -1,6 +1,6 @@
 import { Hono } from 'hono';
 import { isFinished, type MapRunRecord } from '../../store/index.ts';
-import { HttpError, notFound } from '../http-error.ts';
+import { HttpError, notFound, found } from '../http-error.ts';
 import { readMapRequest } from '../../operations/map-request.ts';
 import { mapRunsOf, type MapRuns } from '../../operations/map-runs.ts';
 import { readJsonObject } from '../request-body.ts';
@@ -43,8 +43,7 @@ export function mapRoutes(ctx: ServiceContext & { readonly maps?: MapRuns }): Ho
 
   app.post('/studies/:id/maps', async (c) => {
     const id = c.req.param('id');
-    const record = studies.get(id);
-    if (!record) throw notFound('study', id);
+    const record = found(studies.get(id), 'study', id);
     const { value } = await readJsonObject(
       c,
       'a map request ({ "measure": "PGA", "returnPeriodYears": 475, "spacingKm": 10 })',
@@ -56,7 +55,7 @@ export function mapRoutes(ctx: ServiceContext & { readonly maps?: MapRuns }): Ho
 
   app.get('/studies/:id/maps', (c) => {
     const id = c.req.param('id');
-    if (!studies.get(id)) throw notFound('study', id);
+    found(studies.get(id), 'study', id);
     return c.json({ maps: maps.listForStudy(id).map(mapRunJson) });
   });
 

@@ -2,7 +2,7 @@ import { Hono } from 'hono';
 import { terrainGridsOf } from '../../operations/terrain-grids.ts';
 import type { StudyResult } from '../../engine/results.ts';
 import { isFinished, type RunRecord } from '../../store/index.ts';
-import { HttpError, notFound } from '../http-error.ts';
+import { HttpError, notFound, found } from '../http-error.ts';
 import { runCsv } from '../../results/run-csv.ts';
 import { runGeoJson } from '../../results/run-geojson.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
@@ -65,8 +65,7 @@ export function runRoutes(ctx: ServiceContext): Hono {
 
   app.post('/studies/:id/runs', async (c) => {
     const id = c.req.param('id');
-    const record = studies.get(id);
-    if (!record) throw notFound('study', id);
+    const record = found(studies.get(id), 'study', id);
     const started = await startScreening(ctx, record, c.req.raw.signal);
     if (!started) throw notFound('study', id);
     const { run, work } = started;
@@ -79,7 +78,7 @@ export function runRoutes(ctx: ServiceContext): Hono {
 
   app.get('/studies/:id/runs', (c) => {
     const id = c.req.param('id');
-    if (!studies.get(id)) throw notFound('study', id);
+    found(studies.get(id), 'study', id);
     return c.json({ runs: runs.listForStudy(id).map(runJson) });
   });
 

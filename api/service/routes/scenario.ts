@@ -3,7 +3,7 @@ import { terrainGridsOf } from '../../operations/terrain-grids.ts';
 import { InvalidInput, type InputIssue } from '../../engine/errors.ts';
 import type { Study } from '../../engine/model.ts';
 import type { ScenarioRequest } from '../../engine/scenario/index.ts';
-import { notFound } from '../http-error.ts';
+import { found } from '../http-error.ts';
 import { readJsonObject } from '../request-body.ts';
 import { readScenarioRequest } from '../../operations/scenario-request.ts';
 import { runQuickTask } from '../../operations/quick-task.ts';
@@ -55,8 +55,7 @@ export function scenarioRoutes(ctx: ServiceContext): Hono {
 
   app.post('/studies/:id/scenario', async (c) => {
     const id = c.req.param('id');
-    const record = ctx.store.studies.get(id);
-    if (!record) throw notFound('study', id);
+    const record = found(ctx.store.studies.get(id), 'study', id);
     const { value } = await readJsonObject(
       c,
       'a scenario request ({ "sourceId": ..., "magnitude": ... })',

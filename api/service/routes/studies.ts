@@ -1,7 +1,7 @@
-import { Hono } from 'hono';
+import { Hono, type Context } from 'hono';
 import { terrainGridsOf } from '../../operations/terrain-grids.ts';
 import type { StudySummary } from '../../store/index.ts';
-import { notFound } from '../http-error.ts';
+import { notFound, found } from '../http-error.ts';
 import { readJsonObject } from '../request-body.ts';
 import {
   deleteStudy,
@@ -36,11 +36,7 @@ export function studyRoutes(ctx: ServiceContext): Hono {
   const app = new Hono();
   const { studies } = ctx.store;
 
-  const find = (id: string) => {
-    const record = studies.get(id);
-    if (!record) throw notFound('study', id);
-    return record;
-  };
+  const find = (id: string) => found(studies.get(id), 'study', id);
 
   app.get('/studies', (c) => c.json({ studies: studies.list().map(studyJson) }));
 
@@ -97,24 +93,32 @@ export function studyRoutes(ctx: ServiceContext): Hono {
     return c.body(null, 204);
   });
 
+  /**
+   * Reads `{ name }` (`what` says which name is asked for) and gives it to `change` for study
+   * `id`; 404 when the study is gone, before the body is read or by the time it is written.
+   */
+  const withName = async (
+    c: Context,
+    id: string,
+    what: string,
+    change: (ctx: ServiceContext, id: string, name: string) => StudySummary | undefined,
+  ) => {
+    find(id);
+    const { value } = await readJsonObject(c, what);
+    return found(change(ctx, id, readNameBody(value)), 'study', id);
+  };
+
   // A copy under a new name (`{ name }`): the document and its communities file, not its runs.
   app.post('/studies/:id/duplicate', async (c) => {
     const id = c.req.param('id');
-    find(id);
-    const { value } = await readJsonObject(c, 'an object with the name of the copy');
-    const record = duplicateStudy(ctx, id, readNameBody(value));
-    if (!record) throw notFound('study', id);
+    const record = await withName(c, id, 'an object with the name of the copy', duplicateStudy);
     return c.json(studyJson(record), 201, { Location: `/api/studies/${record.id}` });
   });
 
   // A new name (`{ name }`), written into the document in the transaction that reads it.
   app.post('/studies/:id/rename', async (c) => {
     const id = c.req.param('id');
-    find(id);
-    const { value } = await readJsonObject(c, 'an object with the new name');
-    const record = renameStudy(ctx, id, readNameBody(value));
-    if (!record) throw notFound('study', id);
-    return c.json(studyJson(record));
+    return c.json(studyJson(await withName(c, id, 'an object with the new name', renameStudy)));
   });
 
   return app;

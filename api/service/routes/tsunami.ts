@@ -5,7 +5,7 @@ import { InvalidInput } from '../../engine/errors.ts';
 import { SLOW_WALK_MS } from '../../engine/tsunami/index.ts';
 import { identifier, numberIn } from '../../study/fields.ts';
 import { IssueList } from '../../study/issues.ts';
-import { notFound } from '../http-error.ts';
+import { found } from '../http-error.ts';
 import { inputHash } from '../../results/input-hash.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
 import { storedInputs, validateStudy } from '../../operations/study-input.ts';
@@ -26,8 +26,7 @@ export function tsunamiRoutes(ctx: ServiceContext): Hono {
   const app = new Hono();
   app.get('/studies/:id/tsunami', async (c) => {
     const id = c.req.param('id');
-    const record = ctx.store.studies.get(id);
-    if (!record) throw notFound('study', id);
+    const record = found(ctx.store.studies.get(id), 'study', id);
     const issues = new IssueList();
     for (const key of Object.keys(c.req.queries()))
       if (key !== 'source' && key !== 'highGroundM')

@@ -5,7 +5,7 @@ import type { VisitRecord } from '../../store/visit-repository.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
 import { storedInputs, validateStudy } from '../../operations/study-input.ts';
 import { readVisit } from '../../operations/visit-input.ts';
-import { HttpError, notFound } from '../http-error.ts';
+import { HttpError, notFound, found } from '../http-error.ts';
 import { readJsonObject } from '../request-body.ts';
 
 const visitJson = (v: VisitRecord) => ({
@@ -22,8 +22,7 @@ export function visitRoutes(ctx: ServiceContext): Hono {
   const { store } = ctx;
 
   const findStudy = (id: string) => {
-    const record = store.studies.get(id);
-    if (!record) throw notFound('study', id);
+    const record = found(store.studies.get(id), 'study', id);
     const inputs = storedInputs(store, record, terrainGridsOf(ctx));
     return validateStudy(inputs.raw, ctx.models, inputs).study;
   };

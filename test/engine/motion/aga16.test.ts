@@ -2,11 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { InvalidInput, UnsupportedMeasure, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import type { TectonicSetting } from '../../../api/engine/model.ts';
-import {
-  AGA16_PGA,
-  AGA16_SA,
-  type Aga16Row,
-} from '../../../api/engine/motion/aga16-coefficients.ts';
+import { AGA16_TABLE, type Aga16Row } from '../../../api/engine/motion/aga16-coefficients.ts';
 import {
   aga16,
   aga16LnMedianAtVlin,
@@ -59,7 +55,7 @@ function input({
 const lnAt = (options: CaseOptions, measure: Measure): number =>
   aga16.predict(input(options), measure).lnMedian;
 const rowAt = (periodS: number): Aga16Row =>
-  AGA16_SA.find((r) => r.periodS === periodS) as Aga16Row;
+  AGA16_TABLE.sa.find((r) => r.periodS === periodS) as Aga16Row;
 
 // Worked examples: the paper's equation (from memory; the vectors test checks it) with its published coefficients (Table 3), evaluated
 // term by term by hand in a separate script written from the equation, not from this code.
@@ -78,13 +74,13 @@ describe('AGA16 worked examples', () => {
     // θ1 + θ4ΔC1 = 4.2203 + 0.9·0.2 = 4.4003; f_mag = 0.9·(8 − 8.0) − 0.0135·(10 − 8)² = −0.054;
     // spreading (−1.35 + 0.1·0.2)·ln(100 + 10e^0.8) = −1.33·ln(122.2554) = −6.392129; θ6R = −0.12.
     expectClose(
-      aga16LnMedianAtVlin(AGA16_PGA, scenario),
+      aga16LnMedianAtVlin(AGA16_TABLE.pga, scenario),
       4.4003 - 6.392129 - 0.12 - 0.054,
       HAND_TOLERANCE,
       HAND,
     );
     // Linear branch at Vs30 1000 ≥ Vlin 865.1: (0.980 − 1.186·1.18)·ln(1000/865.1) = −0.060787.
-    expectClose(aga16SiteTerm(AGA16_PGA, 1000, 0.1), -0.060787, HAND_TOLERANCE, HAND);
+    expectClose(aga16SiteTerm(AGA16_TABLE.pga, 1000, 0.1), -0.060787, HAND_TOLERANCE, HAND);
     expectClose(
       lnAt({ magnitude: 8, distanceKm: 100, vs30: 1000 }, PGA),
       -2.226616,
@@ -367,7 +363,7 @@ describe('AGA16 properties', () => {
   it('has a site term of zero at Vs30 = Vlin for any rock PGA', () => {
     // f_site vanishes at Vs30 = Vlin on both branches of the paper's site term. Where Vlin
     // exceeds 1000 m/s (0.05–0.1 s) the cap Vs* = min(Vs30, 1000) leaves (θ12 + b n) ln(1000/Vlin).
-    for (const row of [AGA16_PGA, ...AGA16_SA]) {
+    for (const row of [AGA16_TABLE.pga, ...AGA16_TABLE.sa]) {
       const expected =
         row.vlin <= 1000 ? 0 : (row.theta12 + row.b * 1.18) * Math.log(1000 / row.vlin);
       for (const pga1000G of [0.001, 0.1, 1]) {
@@ -383,7 +379,7 @@ describe('AGA16 properties', () => {
 
   it('is linear for weak motion and joins its linear branch at Vlin', () => {
     // As PGA1000 → 0 the nonlinear branch tends to (θ12 + b n) ln(Vs30/Vlin), the linear branch.
-    for (const row of [AGA16_PGA, rowAt(0.2), rowAt(1)]) {
+    for (const row of [AGA16_TABLE.pga, rowAt(0.2), rowAt(1)]) {
       const linear = (row.theta12 + row.b * 1.18) * Math.log(200 / row.vlin);
       expectClose(
         aga16SiteTerm(row, 200, 1e-9),
@@ -404,18 +400,18 @@ describe('AGA16 properties', () => {
     // Hand values from the paper's site term (from memory), PGA row, Vs30 200 m/s:
     // weak (PGA1000 → 0): (0.980 − 1.186·1.18)·ln(200/865.1) = +0.614340; strong (PGA1000 = 0.5 g): −0.191449.
     expectClose(
-      aga16SiteTerm(AGA16_PGA, 200, 1e-9),
+      aga16SiteTerm(AGA16_TABLE.pga, 200, 1e-9),
       0.61434,
       1e-5,
       `${PAPER}: site term, hand value`,
     );
     expectClose(
-      aga16SiteTerm(AGA16_PGA, 200, 0.5),
+      aga16SiteTerm(AGA16_TABLE.pga, 200, 0.5),
       -0.191449,
       1e-5,
       `${PAPER}: site term, hand value`,
     );
-    for (const row of [AGA16_PGA, rowAt(0.1), rowAt(0.2), rowAt(0.5)]) {
+    for (const row of [AGA16_TABLE.pga, rowAt(0.1), rowAt(0.2), rowAt(0.5)]) {
       expect(aga16SiteTerm(row, 200, 0.5)).toBeLessThan(aga16SiteTerm(row, 200, 0.05));
     }
     // No nonlinearity where b = 0 (2.5 s and longer).

@@ -2,8 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import {
   ASK14_CONSTANTS,
-  ASK14_PGA,
-  ASK14_SA,
+  ASK14_TABLE,
   type Ask14Row,
 } from '../../../api/engine/motion/ask14-coefficients.ts';
 import {
@@ -120,7 +119,7 @@ describe('ASK14: the equation by hand', () => {
   });
 
   it("has no basin term at the default Z1 and the paper's f10 elsewhere", () => {
-    const row = ASK14_SA.find((r) => r.periodS === 3) as Ask14Row;
+    const row = ASK14_TABLE.sa.find((r) => r.periodS === 3) as Ask14Row;
     expect(ask14BasinTerm(row, 400, undefined)).toBe(0);
     expectClose(ask14BasinTerm(row, 400, ask14DefaultZ1Km(400)), 0, 1e-15, 'ASK14 f10 at Z1ref');
     // Vs30 400 m/s uses a45: f10 = a45 ln((0.5 + 0.01)/(Z1ref + 0.01)).
@@ -134,23 +133,23 @@ describe('ASK14: the equation by hand', () => {
   });
 
   it('keeps the rupture terms and the pair terms apart', () => {
-    const terms = ask14RuptureTerms(ASK14_PGA, {
+    const terms = ask14RuptureTerms(ASK14_TABLE.pga, {
       magnitude: 6.5,
       mechanism: 'reverse',
       dipDeg: 45,
       ztorKm: 2,
       widthKm: 14,
     });
-    expect(terms.row).toBe(ASK14_PGA);
+    expect(terms.row).toBe(ASK14_TABLE.pga);
     expectClose(terms.r1Km, 14 * Math.SQRT1_2, 1e-12, 'R1 = W cos δ');
     // M 6.5: τA halfway between s3 and s4 (M 5 to 7 ramp); φA at s2 (M ≥ 6).
     expectClose(
       terms.tauA,
-      ASK14_PGA.s3 + 0.75 * (ASK14_PGA.s4 - ASK14_PGA.s3),
+      ASK14_TABLE.pga.s3 + 0.75 * (ASK14_TABLE.pga.s4 - ASK14_TABLE.pga.s3),
       1e-12,
       'ASK14 τA ramp',
     );
-    expectClose(terms.phiAMeasured, ASK14_PGA.s2Meas, 1e-12, 'ASK14 φA above M 6');
+    expectClose(terms.phiAMeasured, ASK14_TABLE.pga.s2Meas, 1e-12, 'ASK14 φA above M 6');
   });
 });
 

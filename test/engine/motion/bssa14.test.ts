@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
-import { BSSA14_PGA, BSSA14_SA } from '../../../api/engine/motion/bssa14-coefficients.ts';
+import { BSSA14_TABLE } from '../../../api/engine/motion/bssa14-coefficients.ts';
 import {
   bssa14,
   bssa14LnMedian,
@@ -52,7 +52,7 @@ describe('BSSA14: the equation', () => {
 
   it('has a linear site term of zero at Vref = 760 m/s and a nonlinear term of zero at and above it', () => {
     // Boore et al. (2014) site function (from memory): ln F_lin = c ln(Vs30/Vref); f2 vanishes at 760 m/s.
-    for (const row of [BSSA14_PGA, ...BSSA14_SA]) {
+    for (const row of [BSSA14_TABLE.pga, ...BSSA14_TABLE.sa]) {
       expectClose(
         bssa14SiteTerms(row, 760).linear,
         0,
@@ -67,18 +67,26 @@ describe('BSSA14: the equation', () => {
         `${SOURCE}: f2 at 1200 m/s, ${row.periodS} s`,
       );
     }
-    const rupture = bssa14RuptureTerms(BSSA14_PGA, 7, 'strike-slip');
+    const rupture = bssa14RuptureTerms(BSSA14_TABLE.pga, 7, 'strike-slip');
     for (const rockFactor of [0.1, 1, 3])
       expect(lnY({}, PGA)).toBe(
-        bssa14LnMedian(BSSA14_PGA, rupture, bssa14SiteTerms(BSSA14_PGA, 760), 10, rockFactor),
+        bssa14LnMedian(
+          BSSA14_TABLE.pga,
+          rupture,
+          bssa14SiteTerms(BSSA14_TABLE.pga, 760),
+          10,
+          rockFactor,
+        ),
       );
   });
 
   it('caps the linear site term at Vc', () => {
     // Boore et al. (2014) site function (from memory): ln F_lin stops changing above Vc (1500 m/s for PGA).
-    expect(bssa14SiteTerms(BSSA14_PGA, 1800).linear).toBe(bssa14SiteTerms(BSSA14_PGA, 1500).linear);
+    expect(bssa14SiteTerms(BSSA14_TABLE.pga, 1800).linear).toBe(
+      bssa14SiteTerms(BSSA14_TABLE.pga, 1500).linear,
+    );
     expectClose(
-      bssa14SiteTerms(BSSA14_PGA, 380).linear,
+      bssa14SiteTerms(BSSA14_TABLE.pga, 380).linear,
       -0.6 * Math.log(0.5),
       1e-12,
       `${SOURCE}: c ln(380/760), PGA`,
@@ -95,7 +103,7 @@ describe('BSSA14: the equation', () => {
     expect(weak).toBeGreaterThan(0);
     expect(strong).toBeLessThan(weak - 0.3);
     // f2 < 0 on soft soil: the nonlinear term falls as ln((PGAr + f3) / f3) grows.
-    expect(bssa14SiteTerms(BSSA14_PGA, 200).f2).toBeLessThan(0);
+    expect(bssa14SiteTerms(BSSA14_TABLE.pga, 200).f2).toBeLessThan(0);
   });
 });
 
@@ -161,13 +169,13 @@ describe('BSSA14: standard deviations', () => {
     // Rjb = √(R1 R2) gains half of ΔφR = 0.1; below V1 = 225 m/s φ loses ΔφV = 0.07.
     const phiAt = (magnitude: number, rjbKm: number, vs30: number): number =>
       bssa14Phi(
-        BSSA14_PGA,
-        bssa14RuptureTerms(BSSA14_PGA, magnitude, 'strike-slip'),
-        bssa14SiteTerms(BSSA14_PGA, vs30),
+        BSSA14_TABLE.pga,
+        bssa14RuptureTerms(BSSA14_TABLE.pga, magnitude, 'strike-slip'),
+        bssa14SiteTerms(BSSA14_TABLE.pga, vs30),
         rjbKm,
       );
     expectClose(
-      bssa14RuptureTerms(BSSA14_PGA, 5, 'strike-slip').tau,
+      bssa14RuptureTerms(BSSA14_TABLE.pga, 5, 'strike-slip').tau,
       0.373,
       1e-12,
       `${SOURCE}: τ(M 5), PGA`,
@@ -200,11 +208,11 @@ describe('BSSA14: medians against published figures', () => {
       for (const rjbKm of [0, 10, 50, 150]) {
         for (const vs30 of [180, 300, 760]) {
           for (const rakeDeg of [0, 90, -90]) {
-            const values = BSSA14_SA.map((r) =>
+            const values = BSSA14_TABLE.sa.map((r) =>
               lnY({ magnitude, rjbKm, vs30, rakeDeg }, sa(r.periodS)),
             );
             const kink = worstKink(
-              BSSA14_SA.map((r) => r.periodS),
+              BSSA14_TABLE.sa.map((r) => r.periodS),
               values,
             );
             expect(

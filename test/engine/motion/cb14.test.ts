@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import { bssa14 } from '../../../api/engine/motion/bssa14.ts';
-import { CB14_PGA, CB14_SA, type Cb14Row } from '../../../api/engine/motion/cb14-coefficients.ts';
+import { CB14_TABLE, type Cb14Row } from '../../../api/engine/motion/cb14-coefficients.ts';
 import {
   cb14,
   cb14BasinTerm,
@@ -29,7 +29,8 @@ import { worstKink } from './crustal-table-checks.ts';
 import { PGA, PGV, sa } from './measures.ts';
 
 const SOURCE = 'Campbell & Bozorgnia (2014)';
-const rowAt = (periodS: number): Cb14Row => CB14_SA.find((r) => r.periodS === periodS) as Cb14Row;
+const rowAt = (periodS: number): Cb14Row =>
+  CB14_TABLE.sa.find((r) => r.periodS === periodS) as Cb14Row;
 
 const input = (over: Partial<GmmInput> = {}): GmmInput => verticalStrikeSlip(over, 7);
 const lnY = (over: Partial<GmmInput>, m: Measure): number => cb14.predict(input(over), m).lnMedian;
@@ -67,7 +68,7 @@ describe('CB14: the equation', () => {
     // f_Rx = 0.241 + 1.474x − 0.715x² = 0.672763; f_Rrup = 1; f_M = 1 + 0.167·0.5 = 1.0835;
     // f_Z = 1 − 0.06·2 = 0.88; f_δ = 1; f_hng = 0.72 · … = 0.461855.
     expectClose(
-      cb14HangingWallTerm(CB14_PGA, scenario()),
+      cb14HangingWallTerm(CB14_TABLE.pga, scenario()),
       0.461855,
       1e-6,
       `${SOURCE}: f_hng, hand calculation`,
@@ -75,7 +76,7 @@ describe('CB14: the equation', () => {
     // Beyond R1 (Rx 30 km, R2 = 62·7 − 350 = 84 km): x = 0.227002, f_Rx = 1 − 0.337x − 0.270x² = 0.909587;
     // with Rrup 31, Rjb 29: f_Rrup = 2/31; f_hng = 0.040286.
     expectClose(
-      cb14HangingWallTerm(CB14_PGA, scenario({ rxKm: 30, rrupKm: 31, rjbKm: 29 })),
+      cb14HangingWallTerm(CB14_TABLE.pga, scenario({ rxKm: 30, rrupKm: 31, rjbKm: 29 })),
       0.040286,
       1e-6,
       `${SOURCE}: f_hng beyond R1, hand calculation`,
@@ -85,7 +86,7 @@ describe('CB14: the equation', () => {
   it('has no hanging-wall effect on the footwall, for vertical faults, small events or deep tops', () => {
     for (const over of [{ rxKm: -1 }, { dipDeg: 90 }, { magnitude: 5.5 }, { ztorKm: 17 }]) {
       expectClose(
-        cb14HangingWallTerm(CB14_PGA, scenario(over)),
+        cb14HangingWallTerm(CB14_TABLE.pga, scenario(over)),
         0,
         0,
         `${SOURCE}: f_hng zero for ${JSON.stringify(over)}`,
@@ -96,7 +97,7 @@ describe('CB14: the equation', () => {
   it('has a site term of zero at Vs30 = k1 and the linear form above it', () => {
     // Campbell & Bozorgnia (2014) site term (from memory): both branches vanish at Vs30 = k1; above k1 the term
     // is (c11 + k2 n) ln(Vs30/k1): at 1 s and 760 m/s (1.447 − 1.955·1.18) ln(760/400) = −0.551930.
-    for (const row of [CB14_PGA, ...CB14_SA]) {
+    for (const row of [CB14_TABLE.pga, ...CB14_TABLE.sa]) {
       for (const a1100G of [0.01, 0.3, 1.2])
         expectClose(
           cb14SiteTerm(row, row.k1, a1100G),
@@ -116,7 +117,9 @@ describe('CB14: the equation', () => {
   it('reduces soft-soil amplification under strong rock shaking (nonlinear site response)', () => {
     // Campbell & Bozorgnia (2014), after Walling et al. (2008): on Vs30 = 200 m/s the PGA site
     // term falls as A1100 grows.
-    expect(cb14SiteTerm(CB14_PGA, 200, 0.6)).toBeLessThan(cb14SiteTerm(CB14_PGA, 200, 0.05) - 0.3);
+    expect(cb14SiteTerm(CB14_TABLE.pga, 200, 0.6)).toBeLessThan(
+      cb14SiteTerm(CB14_TABLE.pga, 200, 0.05) - 0.3,
+    );
     const amplification = (over: Partial<GmmInput>): number =>
       lnY({ ...over, vs30: 200 }, PGA) - lnY({ ...over, vs30: 1100 }, PGA);
     expect(amplification({ magnitude: 7.5, rrupKm: 1 })).toBeLessThan(
@@ -128,28 +131,33 @@ describe('CB14: the equation', () => {
     // ln Z2.5 = 7.089 − 1.144 ln Vs30 (California; from memory): 0.606824 km at 760 m/s.
     expectClose(cb14DefaultZ2p5Km(760), 0.606824, 1e-6, `${SOURCE}: default Z2.5 at 760 m/s`);
     expectClose(
-      cb14BasinTerm(CB14_PGA, 0.5),
+      cb14BasinTerm(CB14_TABLE.pga, 0.5),
       -0.0064 * -0.5,
       1e-15,
       `${SOURCE}: f_sed, shallow sediment`,
     );
-    expectClose(cb14BasinTerm(CB14_PGA, 2), 0, 0, `${SOURCE}: f_sed between 1 and 3 km`);
+    expectClose(cb14BasinTerm(CB14_TABLE.pga, 2), 0, 0, `${SOURCE}: f_sed between 1 and 3 km`);
     expect(cb14BasinTerm(rowAt(3), 6)).toBeGreaterThan(0);
-    expectClose(cb14HypocentreTerm(CB14_PGA, 7, 5), 0, 0, `${SOURCE}: f_hyp above 7 km`);
+    expectClose(cb14HypocentreTerm(CB14_TABLE.pga, 7, 5), 0, 0, `${SOURCE}: f_hyp above 7 km`);
     expectClose(
-      cb14HypocentreTerm(CB14_PGA, 7, 25),
+      cb14HypocentreTerm(CB14_TABLE.pga, 7, 25),
       13 * 0.0333,
       1e-12,
       `${SOURCE}: f_hyp capped at 20 km (13 × c18)`,
     );
     expectClose(
-      cb14HypocentreTerm(CB14_PGA, 6, 10),
+      cb14HypocentreTerm(CB14_TABLE.pga, 6, 10),
       3 * (0.0977 + (0.0333 - 0.0977) * 0.5),
       1e-12,
       `${SOURCE}: f_hyp,M ramp`,
     );
-    expectClose(cb14DipTerm(CB14_PGA, 5, 60), 0.00757 * 0.5 * 60, 1e-12, `${SOURCE}: f_dip at M 5`);
-    expectClose(cb14DipTerm(CB14_PGA, 6, 60), 0, 0, `${SOURCE}: f_dip above M 5.5`);
+    expectClose(
+      cb14DipTerm(CB14_TABLE.pga, 5, 60),
+      0.00757 * 0.5 * 60,
+      1e-12,
+      `${SOURCE}: f_dip at M 5`,
+    );
+    expectClose(cb14DipTerm(CB14_TABLE.pga, 6, 60), 0, 0, `${SOURCE}: f_dip above M 5.5`);
   });
 
   it('keeps short-period PSA from falling below PGA', () => {
@@ -225,7 +233,7 @@ describe('CB14: standard deviations', () => {
     }
     // τ at M 5 is halfway between τ1 and τ2 (the paper's τ(M) ramp, from memory).
     expectClose(
-      cb14Sigma(CB14_PGA, 5, 1100, 0.1).tau,
+      cb14Sigma(CB14_TABLE.pga, 5, 1100, 0.1).tau,
       (0.409 + 0.322) / 2,
       1e-12,
       `${SOURCE}: τ(M 5), PGA`,
@@ -234,10 +242,10 @@ describe('CB14: standard deviations', () => {
 
   it('narrows PGA scatter on soft soil under strong shaking', () => {
     // Campbell & Bozorgnia (2014) φ with nonlinear site response (from memory): with ρ = 1 for PGA and α < 0, φ² = (φB + α φB,PGA)² + φlnAF² < φ².
-    const soft = cb14Sigma(CB14_PGA, 7, 200, 0.5);
+    const soft = cb14Sigma(CB14_TABLE.pga, 7, 200, 0.5);
     expect(soft.phi).toBeLessThan(0.492);
     expect(soft.tau).toBeLessThan(0.322);
-    const weak = cb14Sigma(CB14_PGA, 7, 200, 0.001);
+    const weak = cb14Sigma(CB14_TABLE.pga, 7, 200, 0.001);
     expectClose(weak.phi, 0.492, 0.005, `${SOURCE}: α → 0 as A1100 → 0`);
   });
 });
@@ -285,9 +293,9 @@ describe('CB14: medians against published figures', () => {
               rxKm,
               ztorKm: 2,
             };
-            const values = CB14_SA.map((r) => lnY(over, sa(r.periodS)));
+            const values = CB14_TABLE.sa.map((r) => lnY(over, sa(r.periodS)));
             const kink = worstKink(
-              CB14_SA.map((r) => r.periodS),
+              CB14_TABLE.sa.map((r) => r.periodS),
               values,
             );
             expect(
@@ -355,6 +363,6 @@ describe('CB14: properties', () => {
     expect(cb14.distanceMetric).toBe('rrup');
     expect(cb14.settings).toEqual(['crustal']);
     expect(cb14.hasPga && cb14.hasPgv).toBe(true);
-    expect(cb14.periodsS).toEqual(CB14_SA.map((r) => r.periodS));
+    expect(cb14.periodsS).toEqual(CB14_TABLE.sa.map((r) => r.periodS));
   });
 });

@@ -1,16 +1,16 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { AGA16_COLUMNS, AGA16_ROWS } from '../../../api/engine/motion/aga16-coefficients.ts';
+import { AGA16_COLUMNS, AGA16_TABLE } from '../../../api/engine/motion/aga16-coefficients.ts';
 import { aga16 } from '../../../api/engine/motion/aga16.ts';
-import { ASK14_COLUMNS, ASK14_ROWS } from '../../../api/engine/motion/ask14-coefficients.ts';
+import { ASK14_COLUMNS, ASK14_TABLE } from '../../../api/engine/motion/ask14-coefficients.ts';
 import { ask14 } from '../../../api/engine/motion/ask14.ts';
-import { BSSA14_COLUMNS, BSSA14_ROWS } from '../../../api/engine/motion/bssa14-coefficients.ts';
+import { BSSA14_COLUMNS, BSSA14_TABLE } from '../../../api/engine/motion/bssa14-coefficients.ts';
 import { bssa14 } from '../../../api/engine/motion/bssa14.ts';
-import { CB14_COLUMNS, CB14_ROWS } from '../../../api/engine/motion/cb14-coefficients.ts';
+import { CB14_COLUMNS, CB14_TABLE } from '../../../api/engine/motion/cb14-coefficients.ts';
 import { cb14 } from '../../../api/engine/motion/cb14.ts';
-import { CY14_COLUMNS, CY14_ROWS } from '../../../api/engine/motion/cy14-coefficients.ts';
+import { CY14_COLUMNS, CY14_TABLE } from '../../../api/engine/motion/cy14-coefficients.ts';
 import { cy14 } from '../../../api/engine/motion/cy14.ts';
-import { ZHAO06_COLUMNS, ZHAO06_ROWS } from '../../../api/engine/motion/zhao06-coefficients.ts';
+import { ZHAO06_COLUMNS, ZHAO06_TABLE } from '../../../api/engine/motion/zhao06-coefficients.ts';
 import { zhao06 } from '../../../api/engine/motion/zhao06.ts';
 
 // The shape of each published table as read from its data file (api/engine/motion/<model>.json):
@@ -26,7 +26,7 @@ const TABLES = [
     name: 'BSSA14 (Boore et al. 2014, supplement table, revised 2014-07-15)',
     model: bssa14,
     file: 'bssa14.json',
-    rows: BSSA14_ROWS,
+    rows: BSSA14_TABLE.rows,
     columns: BSSA14_COLUMNS,
     columnCount: 36,
     hasPgv: true,
@@ -36,7 +36,7 @@ const TABLES = [
     name: 'CB14 (Campbell & Bozorgnia 2014, Tables 1 and 2)',
     model: cb14,
     file: 'cb14.json',
-    rows: CB14_ROWS,
+    rows: CB14_TABLE.rows,
     columns: CB14_COLUMNS,
     columnCount: 45,
     hasPgv: true,
@@ -46,7 +46,7 @@ const TABLES = [
     name: 'ASK14 (Abrahamson, Silva & Kamai 2014, supplement ask14_coeffs.m.txt)',
     model: ask14,
     file: 'ask14.json',
-    rows: ASK14_ROWS,
+    rows: ASK14_TABLE.rows,
     columns: ASK14_COLUMNS,
     columnCount: 45,
     hasPgv: true,
@@ -56,7 +56,7 @@ const TABLES = [
     name: 'CY14 (Chiou & Youngs 2014, coefficient tables of the median and variability models)',
     model: cy14,
     file: 'cy14.json',
-    rows: CY14_ROWS,
+    rows: CY14_TABLE.rows,
     columns: CY14_COLUMNS,
     columnCount: 45,
     hasPgv: true,
@@ -66,7 +66,7 @@ const TABLES = [
     name: 'AGA16 (Abrahamson, Gregor & Addo 2016, Table 3)',
     model: aga16,
     file: 'aga16.json',
-    rows: AGA16_ROWS,
+    rows: AGA16_TABLE.rows,
     columns: AGA16_COLUMNS,
     columnCount: 14,
     hasPgv: false,
@@ -76,7 +76,7 @@ const TABLES = [
     name: 'Zhao06 (Zhao et al. 2006, coefficient tables with the magnitude-squared terms)',
     model: zhao06,
     file: 'zhao06.json',
-    rows: ZHAO06_ROWS,
+    rows: ZHAO06_TABLE.rows,
     columns: ZHAO06_COLUMNS,
     columnCount: 27,
     hasPgv: false,

@@ -2,8 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import {
   CY14_COLUMNS,
-  CY14_PGA,
-  CY14_SA,
+  CY14_TABLE,
   type Cy14Row,
 } from '../../../api/engine/motion/cy14-coefficients.ts';
 import {
@@ -58,8 +57,8 @@ describe('CY14: the reference vectors', () => {
 
 describe('CY14: the coefficient table', () => {
   it('has the PGA row equal to the 0.01 s row, as published', () => {
-    const first = CY14_SA[0] as Cy14Row;
-    for (const column of CY14_COLUMNS) expect(CY14_PGA[column], column).toBe(first[column]);
+    const first = CY14_TABLE.sa[0] as Cy14Row;
+    for (const column of CY14_COLUMNS) expect(CY14_TABLE.pga[column], column).toBe(first[column]);
   });
 });
 
@@ -95,14 +94,19 @@ describe('CY14: the equation by hand', () => {
   });
 
   it("has no site term at and above the reference Vs30 of 1130 m/s, and the table's σ there", () => {
-    expectClose(cy14SiteTerm(CY14_PGA, 1130, 0.3, undefined), 0, 0, 'CY14 site term at 1130 m/s');
     expectClose(
-      cy14SiteTerm(CY14_PGA, 1500, 0.3, undefined),
+      cy14SiteTerm(CY14_TABLE.pga, 1130, 0.3, undefined),
+      0,
+      0,
+      'CY14 site term at 1130 m/s',
+    );
+    expectClose(
+      cy14SiteTerm(CY14_TABLE.pga, 1500, 0.3, undefined),
       0,
       0,
       'CY14 site term above 1130 m/s',
     );
-    expectClose(cy14SiteSlope(CY14_PGA, 1500, 0.3), 0, 0, 'CY14 NL0 above 1130 m/s');
+    expectClose(cy14SiteSlope(CY14_TABLE.pga, 1500, 0.3), 0, 0, 'CY14 NL0 above 1130 m/s');
     expect(lnY({ vs30: 1500 }, PGA)).toBe(lnY({ vs30: 1130 }, PGA));
     // M 5 is the small-event end of the ramp: τ = τ1 = 0.4, φ = σ1 √(0.7 + 1) = 0.4912 · √1.7 (measured Vs30).
     const p = cy14.predict(input({ magnitude: 5, vs30: 1200 }), PGA);
@@ -117,7 +121,7 @@ describe('CY14: the equation by hand', () => {
   });
 
   it('has no basin term at the default Z1 and deepens long periods in a deeper basin', () => {
-    const row = CY14_SA.find((r) => r.periodS === 3) as Cy14Row;
+    const row = CY14_TABLE.sa.find((r) => r.periodS === 3) as Cy14Row;
     const at = cy14SiteTerm(row, 400, 0.05, undefined);
     expectClose(
       cy14SiteTerm(row, 400, 0.05, cy14DefaultZ1Km(400)),
@@ -137,15 +141,15 @@ describe('CY14: the equation by hand', () => {
   });
 
   it('keeps the rupture terms and the pair terms apart', () => {
-    const terms = cy14RuptureTerms(CY14_PGA, {
+    const terms = cy14RuptureTerms(CY14_TABLE.pga, {
       magnitude: 6.5,
       mechanism: 'reverse',
       dipDeg: 60,
       ztorKm: 2,
     });
-    expect(terms.row).toBe(CY14_PGA);
-    expectClose(terms.hangingWall, CY14_PGA.c9 * 0.5, 1e-12, 'c9 cos δ at 60°');
-    expectClose(terms.tau, CY14_PGA.tau2, 1e-12, 'CY14 τ at the large-event end (M ≥ 6.5)');
+    expect(terms.row).toBe(CY14_TABLE.pga);
+    expectClose(terms.hangingWall, CY14_TABLE.pga.c9 * 0.5, 1e-12, 'c9 cos δ at 60°');
+    expectClose(terms.tau, CY14_TABLE.pga.tau2, 1e-12, 'CY14 τ at the large-event end (M ≥ 6.5)');
   });
 });
 
