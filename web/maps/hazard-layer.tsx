@@ -1,6 +1,7 @@
 import type { Child } from 'hono/jsx';
 import type { MapDescription } from '../../api/engine/map/map-geojson.ts';
 import { parseMeasure } from '../../api/engine/motion/measure.ts';
+import { LegendBox, LegendSymbol } from '../components/legend-symbol.tsx';
 import type { LayerPoint } from '../data/map-data.ts';
 import { DUSK, MAP_COLOURS } from '../style/palette.ts';
 import type { Translator } from '../text/translator.ts';
@@ -178,23 +179,9 @@ export function HazardMapLegend(props: HazardMapLegendProps) {
         <ul class="legend-classes">
           {classes.classes.map((c, i) => (
             <li data-class={i} data-count={c.count}>
-              <svg
-                class="legend-symbol"
-                viewBox="0 0 28 16"
-                width="28"
-                height="16"
-                aria-hidden="true"
-                focusable="false"
-              >
-                <rect
-                  x={1}
-                  y={1}
-                  width={26}
-                  height={14}
-                  fill={DUSK[c.step]}
-                  stroke={MAP_COLOURS.returnPeriod}
-                />
-              </svg>{' '}
+              <LegendSymbol height={16}>
+                <LegendBox fill={DUSK[c.step]} stroke={MAP_COLOURS.returnPeriod} />
+              </LegendSymbol>{' '}
               {label(c)} ({tr.plural('hazardMap.class.points', c.count)})
             </li>
           ))}

@@ -1,4 +1,5 @@
 import type { ScenarioGrid } from '../../api/engine/scenario/index.ts';
+import { LegendBox, LegendSymbol } from '../components/legend-symbol.tsx';
 import { DUSK, MMI_CLASSES, mmiClass } from '../style/palette.ts';
 import type { Translator } from '../text/translator.ts';
 import type { MapFrame } from './map-frame.ts';
@@ -41,16 +42,9 @@ export function ScenarioLegend(props: { readonly tr: Translator }) {
       <ul class="legend-classes">
         {MMI_CLASSES.map((c) => (
           <li>
-            <svg
-              class="legend-symbol"
-              viewBox="0 0 28 16"
-              width="28"
-              height="16"
-              aria-hidden="true"
-              focusable="false"
-            >
-              <rect x={1} y={1} width={26} height={14} fill={DUSK[c.step]} stroke="#5d5a6b" />
-            </svg>{' '}
+            <LegendSymbol height={16}>
+              <LegendBox fill={DUSK[c.step]} stroke="#5d5a6b" />
+            </LegendSymbol>{' '}
             {`MMI ${c.label}`} · {tr.text(`mmi.${c.from === 1 ? 2 : c.from}.name` as 'mmi.1.name')}
           </li>
         ))}

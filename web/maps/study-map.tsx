@@ -3,6 +3,7 @@ import type { ScreeningBandId } from '../../api/engine/intensity/screening-band.
 import type { LonLat, Source, Study } from '../../api/engine/model.ts';
 import { BAND_STYLES, INK, MAP_COLOURS, PAPER } from '../style/palette.ts';
 import type { Translator } from '../text/translator.ts';
+import { LegendBox, LegendLine, LegendSymbol } from '../components/legend-symbol.tsx';
 import { BandMarker } from './band-marker.tsx';
 import { MapFurniture, ZoneHatch } from './map-furniture.tsx';
 import type { MapFrame } from './map-frame.ts';
@@ -296,18 +297,7 @@ export function StudyMapLegend(props: {
         (setting === undefined || (setting === 'interface') === (s.setting === 'interface')),
     );
   const hatch = `${props.idPrefix}-legend-hatch`;
-  const swatch = (content: Child) => (
-    <svg
-      class="legend-symbol"
-      viewBox="0 0 28 16"
-      width="28"
-      height="16"
-      aria-hidden="true"
-      focusable="false"
-    >
-      {content}
-    </svg>
-  );
+  const swatch = (content: Child) => <LegendSymbol height={16}>{content}</LegendSymbol>;
   return (
     <div class="map-legend">
       <h3 class="legend-title">{tr.text('map.legend')}</h3>
@@ -319,38 +309,18 @@ export function StudyMapLegend(props: {
       <ul>
         {(study.outline?.length ?? 0) > 0 && (
           <li>
-            {swatch(
-              <rect
-                x={1}
-                y={1}
-                width={26}
-                height={14}
-                fill={MAP_COLOURS.land}
-                stroke={MAP_COLOURS.coast}
-              />,
-            )}{' '}
+            {swatch(<LegendBox fill={MAP_COLOURS.land} stroke={MAP_COLOURS.coast} />)}{' '}
             {tr.text('map.land')}
           </li>
         )}
         {(study.outline?.length ?? 0) > 0 ? (
           <li>
-            {swatch(
-              <rect
-                x={1}
-                y={1}
-                width={26}
-                height={14}
-                fill={MAP_COLOURS.sea}
-                stroke={MAP_COLOURS.grid}
-              />,
-            )}{' '}
+            {swatch(<LegendBox fill={MAP_COLOURS.sea} stroke={MAP_COLOURS.grid} />)}{' '}
             {tr.text('map.sea')}
           </li>
         ) : (
           <li>
-            {swatch(
-              <rect x={1} y={1} width={26} height={14} fill={PAPER} stroke={MAP_COLOURS.grid} />,
-            )}{' '}
+            {swatch(<LegendBox fill={PAPER} stroke={MAP_COLOURS.grid} />)}{' '}
             {tr.text('map.noOutline')}
           </li>
         )}
@@ -358,16 +328,8 @@ export function StudyMapLegend(props: {
           <li>
             {swatch(
               <>
-                <line x1={2} y1={8} x2={26} y2={8} stroke={PAPER} stroke-width={7} />
-                <line
-                  x1={2}
-                  y1={8}
-                  x2={26}
-                  y2={8}
-                  stroke={INK}
-                  stroke-width={3}
-                  stroke-dasharray="10 4"
-                />
+                <LegendLine height={16} stroke={PAPER} strokeWidth={7} />
+                <LegendLine height={16} stroke={INK} strokeWidth={3} strokeDasharray="10 4" />
               </>,
             )}{' '}
             {tr.text('map.interface')}
@@ -375,21 +337,17 @@ export function StudyMapLegend(props: {
         )}
         {has('fault', 'crustal') && (
           <li>
-            {swatch(<line x1={2} y1={8} x2={26} y2={8} stroke={INK} stroke-width={2} />)}{' '}
-            {tr.text('map.fault')}
+            {swatch(<LegendLine height={16} stroke={INK} strokeWidth={2} />)} {tr.text('map.fault')}
           </li>
         )}
         {study.sources.some((s) => s.kind === 'fault' && s.contours) && (
           <li>
             {swatch(
-              <line
-                x1={2}
-                y1={8}
-                x2={26}
-                y2={8}
+              <LegendLine
+                height={16}
                 stroke={MAP_COLOURS.fault}
-                stroke-width={1}
-                stroke-dasharray="2 3"
+                strokeWidth={1}
+                strokeDasharray="2 3"
               />,
             )}{' '}
             {tr.text('map.contours')}
@@ -398,15 +356,11 @@ export function StudyMapLegend(props: {
         {has('zone') && (
           <li>
             {swatch(
-              <rect
-                x={1}
-                y={1}
-                width={26}
-                height={14}
+              <LegendBox
                 fill={`url(#${hatch})`}
-                fill-opacity={0.6}
+                fillOpacity={0.6}
                 stroke={MAP_COLOURS.zoneHatch}
-                stroke-dasharray="5 3"
+                strokeDasharray="5 3"
               />,
             )}{' '}
             {tr.text('map.zone')}
