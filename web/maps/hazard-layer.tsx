@@ -6,6 +6,7 @@ import type { LayerPoint } from '../data/map-data.ts';
 import { DUSK, MAP_COLOURS } from '../style/palette.ts';
 import type { Translator } from '../text/translator.ts';
 import { classIndex, valueClasses, type ValueClass } from './hazard-classes.ts';
+import { GridCell } from './grid-cell.tsx';
 import type { MapFrame } from './map-frame.ts';
 
 /** A map's points in classes: those with a value, those above the curve (in the top class) and those below it (left clear). */
@@ -62,13 +63,12 @@ export function HazardLayer(props: {
     if (index < 0) continue;
     const [x, y] = frame.project([p.lon, p.lat]);
     cells.push(
-      <rect
-        x={(x - side / 2).toFixed(1)}
-        y={(y - side / 2).toFixed(1)}
-        width={(side + 0.6).toFixed(1)}
-        height={(side + 0.6).toFixed(1)}
+      <GridCell
+        x={x}
+        y={y}
+        sidePx={side}
         fill={DUSK[(classes.classes[index] as ValueClass).step]}
-        data-class={index}
+        valueClass={index}
       />,
     );
   }

@@ -2,6 +2,7 @@ import type { ScenarioGrid } from '../../api/engine/scenario/index.ts';
 import { LegendBox, LegendSymbol } from '../components/legend-symbol.tsx';
 import { DUSK, MMI_CLASSES, mmiClass } from '../style/palette.ts';
 import type { Translator } from '../text/translator.ts';
+import { GridCell } from './grid-cell.tsx';
 import type { MapFrame } from './map-frame.ts';
 
 /**
@@ -16,15 +17,7 @@ export function ScenarioLayer(props: { readonly grid: ScenarioGrid; readonly fra
   for (let i = 0; i < grid.lon.length; i++) {
     const [x, y] = frame.project([grid.lon[i] as number, grid.lat[i] as number]);
     const step = mmiClass(grid.mmiMedian[i] as number).step;
-    cells.push(
-      <rect
-        x={(x - side / 2).toFixed(1)}
-        y={(y - side / 2).toFixed(1)}
-        width={(side + 0.6).toFixed(1)}
-        height={(side + 0.6).toFixed(1)}
-        fill={DUSK[step]}
-      />,
-    );
+    cells.push(<GridCell x={x} y={y} sidePx={side} fill={DUSK[step]} />);
   }
   return (
     <g class="scenario-cells" opacity={0.85} shape-rendering="crispEdges">

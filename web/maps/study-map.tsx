@@ -297,7 +297,11 @@ export function StudyMapLegend(props: {
         (setting === undefined || (setting === 'interface') === (s.setting === 'interface')),
     );
   const hatch = `${props.idPrefix}-legend-hatch`;
-  const swatch = (content: Child) => <LegendSymbol height={16}>{content}</LegendSymbol>;
+  const entry = (symbol: Child, words: Child) => (
+    <li>
+      <LegendSymbol height={16}>{symbol}</LegendSymbol> {words}
+    </li>
+  );
   return (
     <div class="map-legend">
       <h3 class="legend-title">{tr.text('map.legend')}</h3>
@@ -307,96 +311,75 @@ export function StudyMapLegend(props: {
         </defs>
       </svg>
       <ul>
-        {(study.outline?.length ?? 0) > 0 && (
-          <li>
-            {swatch(<LegendBox fill={MAP_COLOURS.land} stroke={MAP_COLOURS.coast} />)}{' '}
-            {tr.text('map.land')}
-          </li>
-        )}
-        {(study.outline?.length ?? 0) > 0 ? (
-          <li>
-            {swatch(<LegendBox fill={MAP_COLOURS.sea} stroke={MAP_COLOURS.grid} />)}{' '}
-            {tr.text('map.sea')}
-          </li>
-        ) : (
-          <li>
-            {swatch(<LegendBox fill={PAPER} stroke={MAP_COLOURS.grid} />)}{' '}
-            {tr.text('map.noOutline')}
-          </li>
-        )}
-        {has('fault', 'interface') && (
-          <li>
-            {swatch(
-              <>
-                <LegendLine height={16} stroke={PAPER} strokeWidth={7} />
-                <LegendLine height={16} stroke={INK} strokeWidth={3} strokeDasharray="10 4" />
-              </>,
-            )}{' '}
-            {tr.text('map.interface')}
-          </li>
-        )}
-        {has('fault', 'crustal') && (
-          <li>
-            {swatch(<LegendLine height={16} stroke={INK} strokeWidth={2} />)} {tr.text('map.fault')}
-          </li>
-        )}
-        {study.sources.some((s) => s.kind === 'fault' && s.contours) && (
-          <li>
-            {swatch(
-              <LegendLine
-                height={16}
-                stroke={MAP_COLOURS.fault}
-                strokeWidth={1}
-                strokeDasharray="2 3"
-              />,
-            )}{' '}
-            {tr.text('map.contours')}
-          </li>
-        )}
-        {has('zone') && (
-          <li>
-            {swatch(
-              <LegendBox
-                fill={`url(#${hatch})`}
-                fillOpacity={0.6}
-                stroke={MAP_COLOURS.zoneHatch}
-                strokeDasharray="5 3"
-              />,
-            )}{' '}
-            {tr.text('map.zone')}
-          </li>
-        )}
-        {has('point') && (
-          <li>
-            {swatch(<path d="M9,3L19,13M9,13L19,3" stroke={INK} stroke-width={2} />)}{' '}
-            {tr.text('map.point')}
-          </li>
-        )}
+        {(study.outline?.length ?? 0) > 0 &&
+          entry(
+            <LegendBox fill={MAP_COLOURS.land} stroke={MAP_COLOURS.coast} />,
+            tr.text('map.land'),
+          )}
+        {(study.outline?.length ?? 0) > 0
+          ? entry(
+              <LegendBox fill={MAP_COLOURS.sea} stroke={MAP_COLOURS.grid} />,
+              tr.text('map.sea'),
+            )
+          : entry(<LegendBox fill={PAPER} stroke={MAP_COLOURS.grid} />, tr.text('map.noOutline'))}
+        {has('fault', 'interface') &&
+          entry(
+            <>
+              <LegendLine height={16} stroke={PAPER} strokeWidth={7} />
+              <LegendLine height={16} stroke={INK} strokeWidth={3} strokeDasharray="10 4" />
+            </>,
+            tr.text('map.interface'),
+          )}
+        {has('fault', 'crustal') &&
+          entry(<LegendLine height={16} stroke={INK} strokeWidth={2} />, tr.text('map.fault'))}
+        {study.sources.some((s) => s.kind === 'fault' && s.contours) &&
+          entry(
+            <LegendLine
+              height={16}
+              stroke={MAP_COLOURS.fault}
+              strokeWidth={1}
+              strokeDasharray="2 3"
+            />,
+            tr.text('map.contours'),
+          )}
+        {has('zone') &&
+          entry(
+            <LegendBox
+              fill={`url(#${hatch})`}
+              fillOpacity={0.6}
+              stroke={MAP_COLOURS.zoneHatch}
+              strokeDasharray="5 3"
+            />,
+            tr.text('map.zone'),
+          )}
+        {has('point') &&
+          entry(
+            <path d="M9,3L19,13M9,13L19,3" stroke={INK} stroke-width={2} />,
+            tr.text('map.point'),
+          )}
         {props.bands ? (
           <li>
             {tr.text('map.community')}:
             <ul class="legend-bands">
-              {(['refer-first', 'refer-soon', 'prepare', 'inform'] as const).map((id) => (
-                <li>
-                  {swatch(
-                    <BandMarker
-                      shape={BAND_STYLES[id].shape}
-                      fill={BAND_STYLES[id].fill}
-                      size={6}
-                      x={14}
-                      y={8}
-                    />,
-                  )}{' '}
-                  {tr.text(`band.${id}`)}
-                </li>
-              ))}
+              {(['refer-first', 'refer-soon', 'prepare', 'inform'] as const).map((id) =>
+                entry(
+                  <BandMarker
+                    shape={BAND_STYLES[id].shape}
+                    fill={BAND_STYLES[id].fill}
+                    size={6}
+                    x={14}
+                    y={8}
+                  />,
+                  tr.text(`band.${id}`),
+                ),
+              )}
             </ul>
           </li>
         ) : (
-          <li>
-            {swatch(<BandMarker shape="circle" fill={PAPER} size={6} x={14} y={8} />)}{' '}
-            {tr.text('overview.communities')}
-          </li>
+          entry(
+            <BandMarker shape="circle" fill={PAPER} size={6} x={14} y={8} />,
+            tr.text('overview.communities'),
+          )
         )}
         {props.extra}
       </ul>
