@@ -5,6 +5,7 @@ import { DEMO_STUDY_URL } from '../../api/operations/demo-seed.ts';
 import { translator } from '../../web/text/translator.ts';
 import { smallStudy } from '../service/helpers/small-study.ts';
 import { fileForm, runFinished, startPageApp, textOfId, type PageApp } from './helpers/page-app.ts';
+import { saveDemoStudy, saveStudy } from '../service/helpers/saved-study.ts';
 
 /**
  * The pages through app.request(): status codes, inline problems, nothing saved on a problem,
@@ -17,15 +18,8 @@ let demoId: string;
 
 beforeAll(async () => {
   page = startPageApp();
-  const small = smallStudy('Pages fixture');
-  smallId = page.ctx.store.studies.create({
-    name: 'Pages fixture',
-    document: JSON.stringify(small),
-  }).id;
-  demoId = page.ctx.store.studies.create({
-    name: 'Demo coast',
-    document: readFileSync(DEMO_STUDY_URL, 'utf8'),
-  }).id;
+  smallId = saveStudy(page.ctx.store, smallStudy('Pages fixture'));
+  demoId = saveDemoStudy(page.ctx.store);
 });
 afterAll(async () => page.close());
 

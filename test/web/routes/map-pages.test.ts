@@ -1,7 +1,5 @@
-import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { ServiceContext } from '../../../api/operations/service-context.ts';
-import { DEMO_STUDY_URL } from '../../../api/operations/demo-seed.ts';
 import { MAX_DRAWN_POINTS } from '../../../web/data/map-data.ts';
 import { suggestedMapSpacing } from '../../../web/data/map-spacing.ts';
 import { DUSK } from '../../../web/style/palette.ts';
@@ -12,6 +10,7 @@ import { readStudy } from '../../../web/data/study-data.ts';
 import { startPageApp, textOfId, type PageApp } from '../helpers/page-app.ts';
 import { textLanguages } from '../helpers/text-languages.ts';
 import { spreadStudy } from '../helpers/map-study.ts';
+import { saveDemoStudy, saveStudy } from '../../service/helpers/saved-study.ts';
 
 /**
  * Hazard maps from the overview, through app.request(): the form, its problems beside the
@@ -49,14 +48,8 @@ const count = (html: string, pattern: RegExp): number => (html.match(pattern) ??
 
 beforeAll(async () => {
   page = startPageApp();
-  spreadId = page.ctx.store.studies.create({
-    name: 'Spread fixture',
-    document: JSON.stringify(spreadStudy('Spread fixture')),
-  }).id;
-  demoId = page.ctx.store.studies.create({
-    name: 'Demo coast',
-    document: readFileSync(DEMO_STUDY_URL, 'utf8'),
-  }).id;
+  spreadId = saveStudy(page.ctx.store, spreadStudy('Spread fixture'));
+  demoId = saveDemoStudy(page.ctx.store);
 });
 afterAll(async () => page.close());
 
