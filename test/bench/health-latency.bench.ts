@@ -1,4 +1,4 @@
-import { createRequire } from 'node:module';
+import { autocannon, type AutocannonResult } from '../service/helpers/autocannon.ts';
 import { saveHeavyStudy } from '../service/helpers/heavy-study.ts';
 import { startService, tempDir, type ServiceProcess } from '../service/helpers/service-process.ts';
 
@@ -7,26 +7,6 @@ import { startService, tempDir, type ServiceProcess } from '../service/helpers/s
  * sources over 440 villages) computes in the worker pool. Prints figures; asserts nothing about time (the tests assert only that
  * health answers while a run computes: test/service/health-while-computing.test.ts).
  */
-
-interface AutocannonResult {
-  readonly latency: {
-    readonly p50: number;
-    readonly p97_5: number;
-    readonly p99: number;
-    readonly max: number;
-    readonly average: number;
-  };
-  readonly requests: { readonly average: number; readonly total: number };
-  readonly non2xx: number;
-  readonly errors: number;
-}
-type Autocannon = (options: {
-  url: string;
-  connections: number;
-  duration: number;
-}) => Promise<AutocannonResult>;
-// autocannon ships no type declarations; this is the part of its API used here.
-const autocannon = createRequire(import.meta.url)('autocannon') as Autocannon;
 
 const DURATION_S = Number(process.env.BENCH_DURATION_S ?? 5);
 const CONNECTIONS = 10;

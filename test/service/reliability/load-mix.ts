@@ -1,4 +1,4 @@
-import { createRequire } from 'node:module';
+import { autocannon, type AutocannonResult } from '../helpers/autocannon.ts';
 import { saveHeavyStudy } from '../helpers/heavy-study.ts';
 import type { ServiceProcess } from '../helpers/service-process.ts';
 import { smallStudy } from '../helpers/small-study.ts';
@@ -11,35 +11,6 @@ import { send } from './http-client.ts';
  * all at once, while a heavy run (the demo's sources over 440 villages, helpers/heavy-study.ts)
  * is in flight.
  */
-
-export interface AutocannonResult {
-  readonly latency: {
-    readonly p50: number;
-    readonly p97_5: number;
-    readonly p99: number;
-    readonly max: number;
-    readonly average: number;
-  };
-  readonly requests: { readonly average: number; readonly total: number };
-  readonly non2xx: number;
-  readonly errors: number;
-  readonly timeouts: number;
-  readonly resets: number;
-}
-
-interface AutocannonOptions {
-  readonly url: string;
-  readonly connections: number;
-  readonly duration: number;
-  readonly method?: string;
-  readonly headers?: Record<string, string>;
-  readonly body?: string;
-  /** Seconds before a request counts as timed out. */
-  readonly timeout?: number;
-}
-type Autocannon = (options: AutocannonOptions) => Promise<AutocannonResult>;
-// autocannon ships no type declarations; this is the part of its API used here.
-const autocannon = createRequire(import.meta.url)('autocannon') as Autocannon;
 
 export interface LoadTarget {
   readonly label: string;
