@@ -1,3 +1,4 @@
+import type { Child } from 'hono/jsx';
 import type { InputIssue } from '../../api/engine/errors.ts';
 import { MAP_VS30 } from '../../api/engine/map/hazard-map.ts';
 import type { Study } from '../../api/engine/model.ts';
@@ -41,6 +42,17 @@ export function HazardMapPanel(props: HazardMapPanelProps) {
     [help, issuesAt(path).length > 0 ? `hazard-map-${path}-problem` : undefined]
       .filter(Boolean)
       .join(' ') || undefined;
+  /** A choice of the form: the field `path`, its select's id and label, its problems. */
+  const choice = (path: string, id: string, label: Child) => ({
+    tr,
+    id,
+    name: path,
+    label,
+    describedBy: describedBy(path),
+    invalid: issuesAt(path).length > 0,
+    problemId: `hazard-map-${path}-problem`,
+    issues: issuesAt(path),
+  });
   const latest = maps.latest;
   const shown = maps.shown;
   const unfinished = latest && (latest.status === 'queued' || latest.status === 'running');
@@ -109,16 +121,7 @@ export function HazardMapPanel(props: HazardMapPanelProps) {
       )}
       <p>{tr.text('hazardMap.intro')}</p>
       <form method="post" action={`/studies/${studyId}/maps`} class="hazard-map-form" novalidate>
-        <SelectField
-          tr={tr}
-          id="hazard-map-measure"
-          name="measure"
-          label={tr.text('hazardMap.measure')}
-          describedBy={describedBy('measure')}
-          invalid={issuesAt('measure').length > 0}
-          problemId="hazard-map-measure-problem"
-          issues={issuesAt('measure')}
-        >
+        <SelectField {...choice('measure', 'hazard-map-measure', tr.text('hazardMap.measure'))}>
           {study.settings.measures.map((m) => (
             <option
               value={m}
@@ -136,14 +139,11 @@ export function HazardMapPanel(props: HazardMapPanelProps) {
           ))}
         </SelectField>
         <SelectField
-          tr={tr}
-          id="hazard-map-return-period"
-          name="returnPeriodYears"
-          label={tr.text('hazardMap.returnPeriod')}
-          describedBy={describedBy('returnPeriodYears')}
-          invalid={issuesAt('returnPeriodYears').length > 0}
-          problemId="hazard-map-returnPeriodYears-problem"
-          issues={issuesAt('returnPeriodYears')}
+          {...choice(
+            'returnPeriodYears',
+            'hazard-map-return-period',
+            tr.text('hazardMap.returnPeriod'),
+          )}
         >
           {study.settings.returnPeriodsYears.map((y) => (
             <option
