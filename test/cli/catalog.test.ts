@@ -19,6 +19,7 @@ import {
   type HandFit,
 } from '../helpers/catalog-fixtures.ts';
 import { expectClose, expectRelative } from '../helpers/close.ts';
+import { expectOnePeriodWeichert } from '../service/helpers/one-period-weichert.ts';
 
 const dir = mkdtempSync(join(tmpdir(), 'tremora-cli-catalog-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -257,22 +258,7 @@ describe('tremora catalog fit', () => {
         periods: { magnitude: number; start: string }[] | null;
       }
     >('fit', fitCsv, '--m-max', '9.5', '--periods', '4.2@2001-01-15T00:00:00Z');
-    // As the API test (test/service/routes/catalogs.test.ts): for one period Weichert's (1980)
-    // equation gives Aki–Utsu's β_U times 2 artanh(y/2) / y with y = β_U ΔM; bins run to mMax 9.5.
-    const y = DEFAULT_FIT.bValue * Math.LN10 * 0.1;
-    expect(fit.weichert?.method).toBe('weichert');
-    expectRelative(
-      fit.weichert?.bValue ?? NaN,
-      (DEFAULT_FIT.bValue * 2 * Math.atanh(y / 2)) / y,
-      1e-5,
-      'Aki–Utsu with the binning term (Weichert 1980, one period)',
-    );
-    expectRelative(
-      fit.weichert?.rateAtReference ?? NaN,
-      7 / SPAN_YEARS,
-      1e-12,
-      'one period: N / T (Weichert 1980)',
-    );
+    expectOnePeriodWeichert(fit.weichert);
     expect(fit.periods).toEqual([{ magnitude: 4.2, start: '2001-01-15T00:00:00.000Z' }]);
     const { out } = await run(
       'fit',

@@ -5,6 +5,7 @@ import { DEMO_STUDY_URL } from '../../api/operations/demo-seed.ts';
 import { translator } from '../../web/text/translator.ts';
 import { smallStudy } from '../service/helpers/small-study.ts';
 import { fileForm, runFinished, startPageApp, textOfId, type PageApp } from './helpers/page-app.ts';
+import { saveDemoStudy, saveStudy } from '../service/helpers/saved-study.ts';
 
 /**
  * The pages through app.request(): status codes, inline problems, nothing saved on a problem,
@@ -17,15 +18,8 @@ let demoId: string;
 
 beforeAll(async () => {
   page = startPageApp();
-  const small = smallStudy('Pages fixture');
-  smallId = page.ctx.store.studies.create({
-    name: 'Pages fixture',
-    document: JSON.stringify(small),
-  }).id;
-  demoId = page.ctx.store.studies.create({
-    name: 'Demo coast',
-    document: readFileSync(DEMO_STUDY_URL, 'utf8'),
-  }).id;
+  smallId = saveStudy(page.ctx.store, smallStudy('Pages fixture'));
+  demoId = saveDemoStudy(page.ctx.store);
 });
 afterAll(async () => page.close());
 
@@ -120,46 +114,41 @@ describe('pages', () => {
     expect(handoutHtml).toContain(translator('en').t('caution.short'));
   });
 
-  test('a broken GeoJSON upload shows its problem next to the upload and saves nothing', async () => {
+  /** Posts an upload to the small study that is refused (422) and saves nothing; gives the page. */
+  const refusedUpload = async (upload: string, form: FormData): Promise<string> => {
     const saved = page.ctx.store.studies.get(smallId)?.document;
+    const response = await post(`/studies/${smallId}/edit/${upload}`, form);
+    expect(response.status).toBe(422);
+    expect(page.ctx.store.studies.get(smallId)?.document).toBe(saved);
+    return response.text();
+  };
+
+  test('a broken GeoJSON upload shows its problem next to the upload and saves nothing', async () => {
     const bad =
       '{"type":"FeatureCollection","features":[{"type":"Feature","geometry":{"type":"Point","coordinates":[-140.2,-47.4]},"properties":{"id":"p","setting":"volcanic","mechanism":"normal","depthKm":8,"recurrence":{"type":"fixed","magnitude":6,"rate":0.01}}}]}';
-    const response = await post(
-      `/studies/${smallId}/edit/sources-geojson`,
+    const html = await refusedUpload(
+      'sources-geojson',
       fileForm('bad.geojson', 'application/geo+json', bad),
     );
-    expect(response.status).toBe(422);
-    const html = await response.text();
     const problems = textOfId(html, 'sources-problems') as string;
     expect(problems).toContain('Feature 1 (p), setting');
     expect(html).toMatch(/id="sources-file"[^>]*aria-describedby="sources-help sources-problems"/);
-    expect(page.ctx.store.studies.get(smallId)?.document).toBe(saved);
   });
 
   test('malformed JSON is reported next to the upload too', async () => {
-    const response = await post(
-      `/studies/${smallId}/edit/sources-geojson`,
+    const html = await refusedUpload(
+      'sources-geojson',
       fileForm('broken.geojson', 'application/geo+json', '{"type": "FeatureCollection", '),
     );
-    expect(response.status).toBe(422);
-    expect(textOfId(await response.text(), 'sources-problems')).toMatch(
-      /^sources: expected valid JSON/,
-    );
+    expect(textOfId(html, 'sources-problems')).toMatch(/^sources: expected valid JSON/);
   });
 
   test('a CSV with a bad line shows the line with its problem; nothing is saved', async () => {
-    const saved = page.ctx.store.studies.get(smallId)?.document;
     const csv =
       'id,name,lon,lat,vs30,population,coastal\ntest-cove,Test Cove,-140.2,-47.4,500,120,true\nfar-ridge,Far Ridge,-140.5,-47.6,abc,45,false\n';
-    const response = await post(
-      `/studies/${smallId}/edit/communities-csv`,
-      fileForm('villages.csv', 'text/csv', csv),
-    );
-    expect(response.status).toBe(422);
-    const html = await response.text();
+    const html = await refusedUpload('communities-csv', fileForm('villages.csv', 'text/csv', csv));
     expect(textOfId(html, 'communities-problems')).toContain('Line 3, vs30:');
     expect(html).toMatch(/<tr class="line-bad" data-line="3">/);
-    expect(page.ctx.store.studies.get(smallId)?.document).toBe(saved);
   });
 
   test('adding a community: a bad field is shown under that field; a good one is saved', async () => {

@@ -1,6 +1,7 @@
 import type { ReturnPeriodStatus } from '../../api/engine/results.ts';
 import type { ServiceContext } from '../../api/operations/service-context.ts';
 import type { MapRunRecord } from '../../api/store/index.ts';
+import { RecentCache } from './recent-cache.ts';
 
 /**
  * Most grid points the overview draws as cells: beyond this the page (one SVG rect a point,
@@ -48,31 +49,26 @@ interface PointFeature {
  * most recent, as ResultsCache does for screenings.
  */
 export class MapLayerCache {
-  readonly #entries = new Map<string, MapLayer>();
-  constructor(readonly capacity = 4) {}
+  readonly #recent: RecentCache<MapLayer>;
+  constructor(readonly capacity = 4) {
+    this.#recent = new RecentCache(capacity);
+  }
 
   get(ctx: ServiceContext, runId: string): MapLayer | undefined {
-    const hit = this.#entries.get(runId);
-    if (hit) {
-      this.#entries.delete(runId);
-      this.#entries.set(runId, hit);
-      return hit;
-    }
-    const text = ctx.store.maps.geojson(runId);
-    if (text === undefined) return undefined;
-    const features = (JSON.parse(text) as { features: readonly PointFeature[] }).features;
-    const layer: MapLayer = {
-      points: features.map((f) => ({
-        lon: f.geometry.coordinates[0],
-        lat: f.geometry.coordinates[1],
-        value: f.properties.value,
-        status: f.properties.status,
-      })),
-    };
-    this.#entries.set(runId, layer);
-    while (this.#entries.size > this.capacity)
-      this.#entries.delete(this.#entries.keys().next().value as string);
-    return layer;
+    return this.#recent.get(runId, () => {
+      const text = ctx.store.maps.geojson(runId);
+      if (text === undefined) return undefined;
+      const features = (JSON.parse(text) as { features: readonly PointFeature[] }).features;
+      const layer: MapLayer = {
+        points: features.map((f) => ({
+          lon: f.geometry.coordinates[0],
+          lat: f.geometry.coordinates[1],
+          value: f.properties.value,
+          status: f.properties.status,
+        })),
+      };
+      return layer;
+    });
   }
 }
 

@@ -12,6 +12,7 @@ import {
   type StoredInputs,
 } from '../../api/operations/study-input.ts';
 import type { RunRecord, StudyRecord } from '../../api/store/index.ts';
+import { RecentCache } from './recent-cache.ts';
 
 /** A saved study as the pages read it, in-process from the store. */
 export type StudyData =
@@ -88,23 +89,16 @@ export interface RunState {
  * id; the cache lives with the pages (createPages), holding the few most recent.
  */
 export class ResultsCache {
-  readonly #entries = new Map<string, StudyResult>();
-  constructor(readonly capacity = 8) {}
+  readonly #recent: RecentCache<StudyResult>;
+  constructor(readonly capacity = 8) {
+    this.#recent = new RecentCache(capacity);
+  }
 
   get(ctx: ServiceContext, runId: string): StudyResult | undefined {
-    const hit = this.#entries.get(runId);
-    if (hit) {
-      this.#entries.delete(runId);
-      this.#entries.set(runId, hit);
-      return hit;
-    }
-    const text = ctx.store.runs.results(runId);
-    if (text === undefined) return undefined;
-    const results = JSON.parse(text) as StudyResult;
-    this.#entries.set(runId, results);
-    while (this.#entries.size > this.capacity)
-      this.#entries.delete(this.#entries.keys().next().value as string);
-    return results;
+    return this.#recent.get(runId, () => {
+      const text = ctx.store.runs.results(runId);
+      return text === undefined ? undefined : (JSON.parse(text) as StudyResult);
+    });
   }
 }
 

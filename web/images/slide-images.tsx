@@ -2,7 +2,7 @@ import type { Study } from '../../api/engine/model.ts';
 import { INTENSITY_MEASURE } from '../../api/engine/intensity/site-intensity.ts';
 import type { CommunityPageData } from '../data/community-data.ts';
 import { VillageMap, villageFrame } from '../maps/village-map.tsx';
-import { HazardCurvePlot } from '../plots/hazard-curve-plot.tsx';
+import { CommunityCurvePlot } from '../plots/community-curve-plot.tsx';
 import type { Translator } from '../text/translator.ts';
 import { ShakingCards, SLIDE } from './shaking-cards.tsx';
 import { standaloneSvg } from './svg-file.ts';
@@ -39,20 +39,13 @@ export async function slideImageSvg(
   if (name === 'hazard-curve') {
     const curve = result.curves[INTENSITY_MEASURE];
     if (!curve) return undefined;
-    const levels = Object.fromEntries(
-      study.settings.returnPeriodsYears.map((t) => [
-        String(t),
-        result.atReturnPeriod[String(t)]?.[INTENSITY_MEASURE] ?? null,
-      ]),
-    );
     return standaloneSvg(
       await (
-        <HazardCurvePlot
+        <CommunityCurvePlot
           tr={tr}
+          study={study}
+          result={result}
           curve={curve}
-          returnPeriodsYears={study.settings.returnPeriodsYears}
-          levelsAtReturnPeriods={levels}
-          idPrefix="curve"
           width={960}
           height={600}
         />

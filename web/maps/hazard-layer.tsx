@@ -1,10 +1,12 @@
 import type { Child } from 'hono/jsx';
 import type { MapDescription } from '../../api/engine/map/map-geojson.ts';
 import { parseMeasure } from '../../api/engine/motion/measure.ts';
+import { LegendBox, LegendSymbol } from '../components/legend-symbol.tsx';
 import type { LayerPoint } from '../data/map-data.ts';
 import { DUSK, MAP_COLOURS } from '../style/palette.ts';
 import type { Translator } from '../text/translator.ts';
 import { classIndex, valueClasses, type ValueClass } from './hazard-classes.ts';
+import { GridCell } from './grid-cell.tsx';
 import type { MapFrame } from './map-frame.ts';
 
 /** A map's points in classes: those with a value, those above the curve (in the top class) and those below it (left clear). */
@@ -61,13 +63,12 @@ export function HazardLayer(props: {
     if (index < 0) continue;
     const [x, y] = frame.project([p.lon, p.lat]);
     cells.push(
-      <rect
-        x={(x - side / 2).toFixed(1)}
-        y={(y - side / 2).toFixed(1)}
-        width={(side + 0.6).toFixed(1)}
-        height={(side + 0.6).toFixed(1)}
+      <GridCell
+        x={x}
+        y={y}
+        sidePx={side}
         fill={DUSK[(classes.classes[index] as ValueClass).step]}
-        data-class={index}
+        valueClass={index}
       />,
     );
   }
@@ -178,23 +179,9 @@ export function HazardMapLegend(props: HazardMapLegendProps) {
         <ul class="legend-classes">
           {classes.classes.map((c, i) => (
             <li data-class={i} data-count={c.count}>
-              <svg
-                class="legend-symbol"
-                viewBox="0 0 28 16"
-                width="28"
-                height="16"
-                aria-hidden="true"
-                focusable="false"
-              >
-                <rect
-                  x={1}
-                  y={1}
-                  width={26}
-                  height={14}
-                  fill={DUSK[c.step]}
-                  stroke={MAP_COLOURS.returnPeriod}
-                />
-              </svg>{' '}
+              <LegendSymbol height={16}>
+                <LegendBox fill={DUSK[c.step]} stroke={MAP_COLOURS.returnPeriod} />
+              </LegendSymbol>{' '}
               {label(c)} ({tr.plural('hazardMap.class.points', c.count)})
             </li>
           ))}

@@ -1,6 +1,8 @@
 import type { ScenarioGrid } from '../../api/engine/scenario/index.ts';
+import { LegendBox, LegendSymbol } from '../components/legend-symbol.tsx';
 import { DUSK, MMI_CLASSES, mmiClass } from '../style/palette.ts';
 import type { Translator } from '../text/translator.ts';
+import { GridCell } from './grid-cell.tsx';
 import type { MapFrame } from './map-frame.ts';
 
 /**
@@ -15,15 +17,7 @@ export function ScenarioLayer(props: { readonly grid: ScenarioGrid; readonly fra
   for (let i = 0; i < grid.lon.length; i++) {
     const [x, y] = frame.project([grid.lon[i] as number, grid.lat[i] as number]);
     const step = mmiClass(grid.mmiMedian[i] as number).step;
-    cells.push(
-      <rect
-        x={(x - side / 2).toFixed(1)}
-        y={(y - side / 2).toFixed(1)}
-        width={(side + 0.6).toFixed(1)}
-        height={(side + 0.6).toFixed(1)}
-        fill={DUSK[step]}
-      />,
-    );
+    cells.push(<GridCell x={x} y={y} sidePx={side} fill={DUSK[step]} />);
   }
   return (
     <g class="scenario-cells" opacity={0.85} shape-rendering="crispEdges">
@@ -41,16 +35,9 @@ export function ScenarioLegend(props: { readonly tr: Translator }) {
       <ul class="legend-classes">
         {MMI_CLASSES.map((c) => (
           <li>
-            <svg
-              class="legend-symbol"
-              viewBox="0 0 28 16"
-              width="28"
-              height="16"
-              aria-hidden="true"
-              focusable="false"
-            >
-              <rect x={1} y={1} width={26} height={14} fill={DUSK[c.step]} stroke="#5d5a6b" />
-            </svg>{' '}
+            <LegendSymbol height={16}>
+              <LegendBox fill={DUSK[c.step]} stroke="#5d5a6b" />
+            </LegendSymbol>{' '}
             {`MMI ${c.label}`} · {tr.text(`mmi.${c.from === 1 ? 2 : c.from}.name` as 'mmi.1.name')}
           </li>
         ))}

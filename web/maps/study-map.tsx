@@ -3,6 +3,7 @@ import type { ScreeningBandId } from '../../api/engine/intensity/screening-band.
 import type { LonLat, Source, Study } from '../../api/engine/model.ts';
 import { BAND_STYLES, INK, MAP_COLOURS, PAPER } from '../style/palette.ts';
 import type { Translator } from '../text/translator.ts';
+import { LegendBox, LegendLine, LegendSymbol } from '../components/legend-symbol.tsx';
 import { BandMarker } from './band-marker.tsx';
 import { MapFurniture, ZoneHatch } from './map-furniture.tsx';
 import type { MapFrame } from './map-frame.ts';
@@ -296,17 +297,10 @@ export function StudyMapLegend(props: {
         (setting === undefined || (setting === 'interface') === (s.setting === 'interface')),
     );
   const hatch = `${props.idPrefix}-legend-hatch`;
-  const swatch = (content: Child) => (
-    <svg
-      class="legend-symbol"
-      viewBox="0 0 28 16"
-      width="28"
-      height="16"
-      aria-hidden="true"
-      focusable="false"
-    >
-      {content}
-    </svg>
+  const entry = (symbol: Child, words: Child) => (
+    <li>
+      <LegendSymbol height={16}>{symbol}</LegendSymbol> {words}
+    </li>
   );
   return (
     <div class="map-legend">
@@ -317,132 +311,75 @@ export function StudyMapLegend(props: {
         </defs>
       </svg>
       <ul>
-        {(study.outline?.length ?? 0) > 0 && (
-          <li>
-            {swatch(
-              <rect
-                x={1}
-                y={1}
-                width={26}
-                height={14}
-                fill={MAP_COLOURS.land}
-                stroke={MAP_COLOURS.coast}
-              />,
-            )}{' '}
-            {tr.text('map.land')}
-          </li>
-        )}
-        {(study.outline?.length ?? 0) > 0 ? (
-          <li>
-            {swatch(
-              <rect
-                x={1}
-                y={1}
-                width={26}
-                height={14}
-                fill={MAP_COLOURS.sea}
-                stroke={MAP_COLOURS.grid}
-              />,
-            )}{' '}
-            {tr.text('map.sea')}
-          </li>
-        ) : (
-          <li>
-            {swatch(
-              <rect x={1} y={1} width={26} height={14} fill={PAPER} stroke={MAP_COLOURS.grid} />,
-            )}{' '}
-            {tr.text('map.noOutline')}
-          </li>
-        )}
-        {has('fault', 'interface') && (
-          <li>
-            {swatch(
-              <>
-                <line x1={2} y1={8} x2={26} y2={8} stroke={PAPER} stroke-width={7} />
-                <line
-                  x1={2}
-                  y1={8}
-                  x2={26}
-                  y2={8}
-                  stroke={INK}
-                  stroke-width={3}
-                  stroke-dasharray="10 4"
-                />
-              </>,
-            )}{' '}
-            {tr.text('map.interface')}
-          </li>
-        )}
-        {has('fault', 'crustal') && (
-          <li>
-            {swatch(<line x1={2} y1={8} x2={26} y2={8} stroke={INK} stroke-width={2} />)}{' '}
-            {tr.text('map.fault')}
-          </li>
-        )}
-        {study.sources.some((s) => s.kind === 'fault' && s.contours) && (
-          <li>
-            {swatch(
-              <line
-                x1={2}
-                y1={8}
-                x2={26}
-                y2={8}
-                stroke={MAP_COLOURS.fault}
-                stroke-width={1}
-                stroke-dasharray="2 3"
-              />,
-            )}{' '}
-            {tr.text('map.contours')}
-          </li>
-        )}
-        {has('zone') && (
-          <li>
-            {swatch(
-              <rect
-                x={1}
-                y={1}
-                width={26}
-                height={14}
-                fill={`url(#${hatch})`}
-                fill-opacity={0.6}
-                stroke={MAP_COLOURS.zoneHatch}
-                stroke-dasharray="5 3"
-              />,
-            )}{' '}
-            {tr.text('map.zone')}
-          </li>
-        )}
-        {has('point') && (
-          <li>
-            {swatch(<path d="M9,3L19,13M9,13L19,3" stroke={INK} stroke-width={2} />)}{' '}
-            {tr.text('map.point')}
-          </li>
-        )}
+        {(study.outline?.length ?? 0) > 0 &&
+          entry(
+            <LegendBox fill={MAP_COLOURS.land} stroke={MAP_COLOURS.coast} />,
+            tr.text('map.land'),
+          )}
+        {(study.outline?.length ?? 0) > 0
+          ? entry(
+              <LegendBox fill={MAP_COLOURS.sea} stroke={MAP_COLOURS.grid} />,
+              tr.text('map.sea'),
+            )
+          : entry(<LegendBox fill={PAPER} stroke={MAP_COLOURS.grid} />, tr.text('map.noOutline'))}
+        {has('fault', 'interface') &&
+          entry(
+            <>
+              <LegendLine height={16} stroke={PAPER} strokeWidth={7} />
+              <LegendLine height={16} stroke={INK} strokeWidth={3} strokeDasharray="10 4" />
+            </>,
+            tr.text('map.interface'),
+          )}
+        {has('fault', 'crustal') &&
+          entry(<LegendLine height={16} stroke={INK} strokeWidth={2} />, tr.text('map.fault'))}
+        {study.sources.some((s) => s.kind === 'fault' && s.contours) &&
+          entry(
+            <LegendLine
+              height={16}
+              stroke={MAP_COLOURS.fault}
+              strokeWidth={1}
+              strokeDasharray="2 3"
+            />,
+            tr.text('map.contours'),
+          )}
+        {has('zone') &&
+          entry(
+            <LegendBox
+              fill={`url(#${hatch})`}
+              fillOpacity={0.6}
+              stroke={MAP_COLOURS.zoneHatch}
+              strokeDasharray="5 3"
+            />,
+            tr.text('map.zone'),
+          )}
+        {has('point') &&
+          entry(
+            <path d="M9,3L19,13M9,13L19,3" stroke={INK} stroke-width={2} />,
+            tr.text('map.point'),
+          )}
         {props.bands ? (
           <li>
             {tr.text('map.community')}:
             <ul class="legend-bands">
-              {(['refer-first', 'refer-soon', 'prepare', 'inform'] as const).map((id) => (
-                <li>
-                  {swatch(
-                    <BandMarker
-                      shape={BAND_STYLES[id].shape}
-                      fill={BAND_STYLES[id].fill}
-                      size={6}
-                      x={14}
-                      y={8}
-                    />,
-                  )}{' '}
-                  {tr.text(`band.${id}`)}
-                </li>
-              ))}
+              {(['refer-first', 'refer-soon', 'prepare', 'inform'] as const).map((id) =>
+                entry(
+                  <BandMarker
+                    shape={BAND_STYLES[id].shape}
+                    fill={BAND_STYLES[id].fill}
+                    size={6}
+                    x={14}
+                    y={8}
+                  />,
+                  tr.text(`band.${id}`),
+                ),
+              )}
             </ul>
           </li>
         ) : (
-          <li>
-            {swatch(<BandMarker shape="circle" fill={PAPER} size={6} x={14} y={8} />)}{' '}
-            {tr.text('overview.communities')}
-          </li>
+          entry(
+            <BandMarker shape="circle" fill={PAPER} size={6} x={14} y={8} />,
+            tr.text('overview.communities'),
+          )
         )}
         {props.extra}
       </ul>

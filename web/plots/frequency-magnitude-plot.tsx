@@ -1,10 +1,12 @@
 import { scaleLinear, scaleLog } from 'd3-scale';
+import type { Child } from 'hono/jsx';
 import { line } from 'd3-shape';
 import type { FrequencyMagnitude } from '../../api/engine/catalog/frequency-magnitude.ts';
 import { DUSK, INK, MAP_COLOURS, PAPER } from '../style/palette.ts';
 import type { Translator } from '../text/translator.ts';
-import { logTicks, tickLabel } from './log-axis.tsx';
-import { PLOT_MARGIN, PlotFrame } from './plot-frame.tsx';
+import { LegendLine, LegendSymbol } from '../components/legend-symbol.tsx';
+import { logFrameAxis, PLOT_MARGIN, PlotFrame, titleText } from './plot-frame.tsx';
+import { PlotLegend } from './plot-legend.tsx';
 
 const MARGIN = PLOT_MARGIN;
 
@@ -48,22 +50,14 @@ export function FrequencyMagnitudePlot(props: {
       width={width}
       height={height}
       idPrefix={props.idPrefix}
-      title={tr.t('catalog.plot')}
-      titleLang={tr.fallbackLang('catalog.plot')}
+      {...titleText(tr, 'catalog.plot')}
       x={{
         ticks: x.ticks(8),
         position: x,
         label: (v) => tr.number(v, 1),
-        title: tr.t('plot.magnitude'),
-        titleLang: tr.fallbackLang('plot.magnitude'),
+        ...titleText(tr, 'plot.magnitude'),
       }}
-      y={{
-        ticks: logTicks(y),
-        position: y,
-        label: (v) => tickLabel(v, tr.locale, logTicks(y)),
-        title: tr.t('plot.perYear'),
-        titleLang: tr.fallbackLang('plot.perYear'),
-      }}
+      y={logFrameAxis(tr, y, 'plot.perYear')}
     >
       <line
         x1={x(props.mc)}
@@ -115,50 +109,24 @@ export function FrequencyMagnitudePlot(props: {
 /** The plot's legend in words, with the symbols. */
 export function FrequencyMagnitudeLegend(props: { readonly tr: Translator }) {
   const { tr } = props;
-  const symbol = (content: unknown) => (
-    <svg
-      class="legend-symbol"
-      viewBox="0 0 28 12"
-      width="28"
-      height="12"
-      aria-hidden="true"
-      focusable="false"
-    >
-      {content}
-    </svg>
-  );
+  const symbol = (content: Child) => <LegendSymbol height={12}>{content}</LegendSymbol>;
   return (
-    <>
-      {/* Named by a hidden element rather than aria-label, which cannot mark an English stand-in's language. */}
-      <span id="fm-legend-name" hidden>
-        {tr.text('plot.legend')}
-      </span>
-      <ul class="plot-legend" aria-labelledby="fm-legend-name">
-        <li>
-          {symbol(<circle cx={14} cy={6} r={4} fill={DUSK[6]} />)} {tr.text('plot.cumulative')}
-        </li>
-        <li>
-          {symbol(<rect x={10} y={2} width={8} height={8} fill={PAPER} stroke={INK} />)}{' '}
-          {tr.text('plot.incremental')}
-        </li>
-        <li>
-          {symbol(<line x1={1} y1={6} x2={27} y2={6} stroke={DUSK[5]} stroke-width={2.5} />)}{' '}
-          {tr.text('plot.fitLine')}
-        </li>
-        <li>
-          {symbol(
-            <line
-              x1={1}
-              y1={6}
-              x2={27}
-              y2={6}
-              stroke={MAP_COLOURS.returnPeriod}
-              stroke-dasharray="6 4"
-            />,
-          )}{' '}
-          {tr.text('plot.mcLine')}
-        </li>
-      </ul>
-    </>
+    <PlotLegend tr={tr} nameId="fm-legend-name">
+      <li>
+        {symbol(<circle cx={14} cy={6} r={4} fill={DUSK[6]} />)} {tr.text('plot.cumulative')}
+      </li>
+      <li>
+        {symbol(<rect x={10} y={2} width={8} height={8} fill={PAPER} stroke={INK} />)}{' '}
+        {tr.text('plot.incremental')}
+      </li>
+      <li>
+        {symbol(<LegendLine height={12} stroke={DUSK[5]} strokeWidth={2.5} />)}{' '}
+        {tr.text('plot.fitLine')}
+      </li>
+      <li>
+        {symbol(<LegendLine height={12} stroke={MAP_COLOURS.returnPeriod} strokeDasharray="6 4" />)}{' '}
+        {tr.text('plot.mcLine')}
+      </li>
+    </PlotLegend>
   );
 }

@@ -3,8 +3,9 @@ import { line } from 'd3-shape';
 import type { HazardCurve } from '../../api/engine/results.ts';
 import { MAP_COLOURS, PAPER } from '../style/palette.ts';
 import type { Translator } from '../text/translator.ts';
-import { logTicks, tickLabel } from './log-axis.tsx';
-import { PLOT_MARGIN, PlotFrame } from './plot-frame.tsx';
+import { LegendLine, LegendSymbol } from '../components/legend-symbol.tsx';
+import { logFrameAxis, PLOT_MARGIN, PlotFrame, titleText } from './plot-frame.tsx';
+import { PlotLegend } from './plot-legend.tsx';
 
 export interface HazardCurvePlotProps {
   readonly tr: Translator;
@@ -65,26 +66,13 @@ export function HazardCurvePlot(props: HazardCurvePlotProps) {
       width={width}
       height={height}
       idPrefix={props.idPrefix}
-      title={tr.t('community.curve')}
-      titleLang={tr.fallbackLang('community.curve')}
+      {...titleText(tr, 'community.curve')}
       description={{
         text: `${tr.t('plot.pga')}; ${tr.t('plot.annualRate')}.`,
         lang: tr.fallbackLang('plot.pga'),
       }}
-      x={{
-        ticks: logTicks(x),
-        position: x,
-        label: (v) => tickLabel(v, tr.locale, logTicks(x)),
-        title: tr.t('plot.pga'),
-        titleLang: tr.fallbackLang('plot.pga'),
-      }}
-      y={{
-        ticks: logTicks(y),
-        position: y,
-        label: (v) => tickLabel(v, tr.locale, logTicks(y)),
-        title: tr.t('plot.annualRate'),
-        titleLang: tr.fallbackLang('plot.annualRate'),
-      }}
+      x={logFrameAxis(tr, x, 'plot.pga')}
+      y={logFrameAxis(tr, y, 'plot.annualRate')}
     >
       <g class="branches">
         {(curve.branches ?? []).map((b) => (
@@ -184,45 +172,32 @@ export function HazardCurveLegend(props: {
 }) {
   const { tr } = props;
   const sample = (stroke: string, w: number, dash?: string) => (
-    <svg
-      class="legend-symbol"
-      viewBox="0 0 28 12"
-      width="28"
-      height="12"
-      aria-hidden="true"
-      focusable="false"
-    >
-      <line x1={1} y1={6} x2={27} y2={6} stroke={stroke} stroke-width={w} stroke-dasharray={dash} />
-    </svg>
+    <LegendSymbol height={12}>
+      <LegendLine height={12} stroke={stroke} strokeWidth={w} strokeDasharray={dash} />
+    </LegendSymbol>
   );
   return (
-    <>
-      {/* Named by a hidden element rather than aria-label, which cannot mark an English stand-in's language. */}
-      <span id="curve-legend-name" hidden>
-        {tr.text('plot.legend')}
-      </span>
-      <ul class="plot-legend" aria-labelledby="curve-legend-name">
+    <PlotLegend tr={tr} nameId="curve-legend-name">
+      <li>
+        {sample(MAP_COLOURS.mean, 3)} {tr.text('plot.mean')}
+      </li>
+      {props.branches > 0 && (
         <li>
-          {sample(MAP_COLOURS.mean, 3)} {tr.text('plot.mean')}
+          {sample(MAP_COLOURS.branch, 1.5)}{' '}
+          {tr.plural('plot.branch', props.branches, { n: tr.count(props.branches) })}
         </li>
-        {props.branches > 0 && (
-          <li>
-            {sample(MAP_COLOURS.branch, 1.5)}{' '}
-            {tr.plural('plot.branch', props.branches, { n: tr.count(props.branches) })}
-          </li>
-        )}
-        {props.fractiles && props.fractiles.length > 0 && (
-          <li>
-            {sample(MAP_COLOURS.mean, 1.4, FRACTILE_DASH)}{' '}
-            {tr.text('plot.fractiles', {
-              list: props.fractiles.map((f) => tr.chance(Number(f)).percent).join(', '),
-            })}
-          </li>
-        )}
+      )}
+      {props.fractiles && props.fractiles.length > 0 && (
         <li>
-          {sample(MAP_COLOURS.returnPeriod, 1.2, '6 4')} {tr.text('plot.returnPeriodLegend')}
+          {sample(MAP_COLOURS.mean, 1.4, FRACTILE_DASH)}{' '}
+          {tr.text('plot.fractiles', {
+            list: props.fractiles.map((f) => tr.chance(Number(f)).percent).join(', '),
+          })}
         </li>
-      </ul>
-    </>
+      )}
+      <li>
+        {sample(MAP_COLOURS.returnPeriod, 1.2, '6 4')} {tr.text('plot.returnPeriodLegend')}
+      </li>
+    </PlotLegend>
   );
 }

@@ -80,33 +80,26 @@ export function Axis(props: AxisProps) {
     <g class={`axis axis-${props.orientation}`} font-size={12} fill={MAP_COLOURS.axis}>
       {props.ticks.map((t) => {
         const p = props.position(t);
-        return bottom ? (
+        // A line at the tick, from one coordinate to another along the other direction: a bottom
+        // axis's ticks stand at an x, a left axis's at a y.
+        const tickLine = (from: number, to: number) =>
+          bottom ? { x1: p, x2: p, y1: from, y2: to } : { y1: p, y2: p, x1: from, x2: to };
+        return (
           <g>
             <line
-              x1={p}
-              x2={p}
-              y1={props.across[0]}
-              y2={props.across[1]}
+              {...tickLine(props.across[0], props.across[1])}
               stroke={MAP_COLOURS.grid}
               stroke-width={1}
             />
-            <line x1={p} x2={p} y1={props.at} y2={props.at + 5} stroke={MAP_COLOURS.axis} />
-            <text x={p} y={props.at + 18} text-anchor="middle">
-              {props.label(t)}
-            </text>
-          </g>
-        ) : (
-          <g>
             <line
-              y1={p}
-              y2={p}
-              x1={props.across[0]}
-              x2={props.across[1]}
-              stroke={MAP_COLOURS.grid}
-              stroke-width={1}
+              {...(bottom ? tickLine(props.at, props.at + 5) : tickLine(props.at - 5, props.at))}
+              stroke={MAP_COLOURS.axis}
             />
-            <line y1={p} y2={p} x1={props.at - 5} x2={props.at} stroke={MAP_COLOURS.axis} />
-            <text x={props.at - 8} y={p + 4} text-anchor="end">
+            <text
+              {...(bottom
+                ? { x: p, y: props.at + 18, 'text-anchor': 'middle' }
+                : { x: props.at - 8, y: p + 4, 'text-anchor': 'end' })}
+            >
               {props.label(t)}
             </text>
           </g>

@@ -1,6 +1,9 @@
+import type { ScaleLogarithmic } from 'd3-scale';
 import type { Child } from 'hono/jsx';
 import { MAP_COLOURS } from '../style/palette.ts';
-import { Axis } from './log-axis.tsx';
+import type { TextKey } from '../text/text-key.ts';
+import type { Translator } from '../text/translator.ts';
+import { Axis, logTicks, tickLabel } from './log-axis.tsx';
 
 /** Space around a plot's area, px: room for tick labels and the axis titles. */
 export const PLOT_MARGIN = { top: 16, right: 24, bottom: 52, left: 78 } as const;
@@ -13,6 +16,32 @@ export interface FrameAxis {
   readonly title: string;
   /** "en" when the title is English standing in for a missing translation. */
   readonly titleLang?: string | undefined;
+}
+
+/** A title in the reader's language, with the language of an English stand-in. */
+export function titleText(
+  tr: Translator,
+  key: TextKey,
+): { readonly title: string; readonly titleLang: string | undefined } {
+  return { title: tr.t(key), titleLang: tr.fallbackLang(key) };
+}
+
+/**
+ * A log axis of a plot: ticks at the powers of ten (and 2 and 5 times them on a short axis),
+ * every label in the one style those ticks call for.
+ */
+export function logFrameAxis(
+  tr: Translator,
+  scale: ScaleLogarithmic<number, number>,
+  title: TextKey,
+): FrameAxis {
+  const ticks = logTicks(scale);
+  return {
+    ticks,
+    position: scale,
+    label: (v) => tickLabel(v, tr.locale, ticks),
+    ...titleText(tr, title),
+  };
 }
 
 export interface PlotFrameProps {

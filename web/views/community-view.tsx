@@ -9,11 +9,13 @@ import { BandFirmness } from './band-firmness.tsx';
 import { type PageContext, PageShell } from '../layout/page-shell.tsx';
 import type { MapFrame } from '../maps/map-frame.ts';
 import { StudyMap } from '../maps/study-map.tsx';
-import { HazardCurveLegend, HazardCurvePlot } from '../plots/hazard-curve-plot.tsx';
+import { CommunityCurvePlot } from '../plots/community-curve-plot.tsx';
+import { HazardCurveLegend } from '../plots/hazard-curve-plot.tsx';
 import { ShareBars } from '../plots/share-bars.tsx';
 import type { TextKey } from '../text/text-key.ts';
 import type { Translator } from '../text/translator.ts';
 import { FeltList } from './felt-list.tsx';
+import { NearestFaults } from './nearest-faults.tsx';
 import { SafetyAdvice } from './safety-advice.tsx';
 import type { TsunamiPageResult } from '../data/tsunami-data.ts';
 import { TsunamiTime } from './tsunami-time.tsx';
@@ -166,12 +168,6 @@ export function CommunityView(props: CommunityViewProps) {
   const { community, result } = data;
   const bandId = result.band.id as ScreeningBandId;
   const curve = result.curves[INTENSITY_MEASURE];
-  const rpLevels = Object.fromEntries(
-    study.settings.returnPeriodsYears.map((t) => [
-      String(t),
-      result.atReturnPeriod[String(t)]?.[INTENSITY_MEASURE] ?? null,
-    ]),
-  );
   return (
     <PageShell
       page={props.page}
@@ -262,13 +258,7 @@ export function CommunityView(props: CommunityViewProps) {
         {result.nearestFaults.length === 0 ? (
           <p>{tr.text('community.faultsNone')}</p>
         ) : (
-          <ul class="faults">
-            {result.nearestFaults.map((f) => (
-              <li data-source={f.sourceId}>
-                <strong>{f.name}</strong>: {tr.place(f.distanceKm, f.bearingDeg, f.depthBelowKm)}
-              </li>
-            ))}
-          </ul>
+          <NearestFaults tr={tr} faults={result.nearestFaults} />
         )}
         <figure class="map-figure map-small">
           <StudyMap
@@ -286,13 +276,7 @@ export function CommunityView(props: CommunityViewProps) {
           <h2 id="curve-heading">{tr.text('community.curve')}</h2>
           <p>{tr.text('community.curveIntro')}</p>
           <figure class="plot-figure">
-            <HazardCurvePlot
-              tr={tr}
-              curve={curve}
-              returnPeriodsYears={study.settings.returnPeriodsYears}
-              levelsAtReturnPeriods={rpLevels}
-              idPrefix="curve"
-            />
+            <CommunityCurvePlot tr={tr} study={study} result={result} curve={curve} />
             <figcaption>
               <HazardCurveLegend
                 tr={tr}

@@ -1,3 +1,4 @@
+import type { Child } from 'hono/jsx';
 import type { InputIssue } from '../../api/engine/errors.ts';
 import { MAP_VS30 } from '../../api/engine/map/hazard-map.ts';
 import type { Study } from '../../api/engine/model.ts';
@@ -6,6 +7,7 @@ import type { SuggestedSpacing } from '../data/map-spacing.ts';
 import { measureWords } from '../maps/hazard-layer.tsx';
 import type { Translator } from '../text/translator.ts';
 import { FieldProblems } from './field-problems.tsx';
+import { SelectField } from './select-field.tsx';
 
 /** The hazard-map form as sent, with its problems, when it is shown again. */
 export interface MapFormState {
@@ -40,6 +42,17 @@ export function HazardMapPanel(props: HazardMapPanelProps) {
     [help, issuesAt(path).length > 0 ? `hazard-map-${path}-problem` : undefined]
       .filter(Boolean)
       .join(' ') || undefined;
+  /** A choice of the form: the field `path`, its select's id and label, its problems. */
+  const choice = (path: string, id: string, label: Child) => ({
+    tr,
+    id,
+    name: path,
+    label,
+    describedBy: describedBy(path),
+    invalid: issuesAt(path).length > 0,
+    problemId: `hazard-map-${path}-problem`,
+    issues: issuesAt(path),
+  });
   const latest = maps.latest;
   const shown = maps.shown;
   const unfinished = latest && (latest.status === 'queued' || latest.status === 'running');
@@ -108,56 +121,40 @@ export function HazardMapPanel(props: HazardMapPanelProps) {
       )}
       <p>{tr.text('hazardMap.intro')}</p>
       <form method="post" action={`/studies/${studyId}/maps`} class="hazard-map-form" novalidate>
-        <div class="field">
-          <label for="hazard-map-measure">{tr.text('hazardMap.measure')}</label>
-          <select
-            id="hazard-map-measure"
-            name="measure"
-            aria-describedby={describedBy('measure')}
-            aria-invalid={issuesAt('measure').length > 0 ? 'true' : undefined}
-          >
-            {study.settings.measures.map((m) => (
-              <option
-                value={m}
-                selected={m === measure}
-                lang={tr.fallbackLang(
-                  m.startsWith('SA')
-                    ? 'hazardMap.measure.SA'
-                    : m === 'PGV'
-                      ? 'hazardMap.measure.PGV'
-                      : 'hazardMap.measure.PGA',
-                )}
-              >
-                {measureWords(tr, m, true)}
-              </option>
-            ))}
-          </select>
-          <FieldProblems tr={tr} id="hazard-map-measure-problem" issues={issuesAt('measure')} />
-        </div>
-        <div class="field">
-          <label for="hazard-map-return-period">{tr.text('hazardMap.returnPeriod')}</label>
-          <select
-            id="hazard-map-return-period"
-            name="returnPeriodYears"
-            aria-describedby={describedBy('returnPeriodYears')}
-            aria-invalid={issuesAt('returnPeriodYears').length > 0 ? 'true' : undefined}
-          >
-            {study.settings.returnPeriodsYears.map((y) => (
-              <option
-                value={String(y)}
-                selected={String(y) === years}
-                lang={tr.fallbackLang('hazardMap.returnPeriodOption')}
-              >
-                {tr.t('hazardMap.returnPeriodOption', { years: tr.number(y) })}
-              </option>
-            ))}
-          </select>
-          <FieldProblems
-            tr={tr}
-            id="hazard-map-returnPeriodYears-problem"
-            issues={issuesAt('returnPeriodYears')}
-          />
-        </div>
+        <SelectField {...choice('measure', 'hazard-map-measure', tr.text('hazardMap.measure'))}>
+          {study.settings.measures.map((m) => (
+            <option
+              value={m}
+              selected={m === measure}
+              lang={tr.fallbackLang(
+                m.startsWith('SA')
+                  ? 'hazardMap.measure.SA'
+                  : m === 'PGV'
+                    ? 'hazardMap.measure.PGV'
+                    : 'hazardMap.measure.PGA',
+              )}
+            >
+              {measureWords(tr, m, true)}
+            </option>
+          ))}
+        </SelectField>
+        <SelectField
+          {...choice(
+            'returnPeriodYears',
+            'hazard-map-return-period',
+            tr.text('hazardMap.returnPeriod'),
+          )}
+        >
+          {study.settings.returnPeriodsYears.map((y) => (
+            <option
+              value={String(y)}
+              selected={String(y) === years}
+              lang={tr.fallbackLang('hazardMap.returnPeriodOption')}
+            >
+              {tr.t('hazardMap.returnPeriodOption', { years: tr.number(y) })}
+            </option>
+          ))}
+        </SelectField>
         <div class="field">
           <label for="hazard-map-spacing">{tr.text('hazardMap.spacing')}</label>
           <input

@@ -8,6 +8,7 @@ import type { MapFrame } from '../maps/map-frame.ts';
 import { ScenarioLayer, ScenarioLegend } from '../maps/scenario-layer.tsx';
 import { StudyMap } from '../maps/study-map.tsx';
 import { FieldProblems } from './field-problems.tsx';
+import { SelectField } from './select-field.tsx';
 import type { TsunamiPageResult } from '../data/tsunami-data.ts';
 import { TsunamiScenario } from './tsunami-time.tsx';
 import { DataTable, LabelledCell } from '../components/data-table.tsx';
@@ -40,21 +41,21 @@ export function ScenarioView(props: ScenarioViewProps) {
     >
       <p>{tr.text('scenario.intro')}</p>
       <form method="post" action={`/studies/${studyId}/scenario`} class="scenario-form" novalidate>
-        <div class="field">
-          <label for="scenario-source">{tr.text('scenario.source')}</label>
-          <select
-            id="scenario-source"
-            name="sourceId"
-            aria-describedby={issuesAt('sourceId').length ? 'scenario-source-problem' : undefined}
-          >
-            {study.sources.map((s) => (
-              <option value={s.id} selected={s.id === props.sourceId}>
-                {s.name}
-              </option>
-            ))}
-          </select>
-          <FieldProblems tr={tr} id="scenario-source-problem" issues={issuesAt('sourceId')} />
-        </div>
+        <SelectField
+          tr={tr}
+          id="scenario-source"
+          name="sourceId"
+          label={tr.text('scenario.source')}
+          describedBy={issuesAt('sourceId').length ? 'scenario-source-problem' : undefined}
+          problemId="scenario-source-problem"
+          issues={issuesAt('sourceId')}
+        >
+          {study.sources.map((s) => (
+            <option value={s.id} selected={s.id === props.sourceId}>
+              {s.name}
+            </option>
+          ))}
+        </SelectField>
         <div class="field">
           <label for="scenario-magnitude">{tr.text('scenario.magnitude')}</label>
           <input

@@ -3,6 +3,7 @@ import type { CommunityPageData } from '../data/community-data.ts';
 import type { MapFrame } from '../maps/map-frame.ts';
 import { plateBoundary, traceFrom, VillageMap } from '../maps/village-map.tsx';
 import type { Translator } from '../text/translator.ts';
+import { NearestFaults } from './nearest-faults.tsx';
 
 /**
  * The village's map with its faults and the plate boundary, then the same in words: the
@@ -46,13 +47,7 @@ export function VillageMapSection(props: {
             </p>
           )}
           {result.nearestFaults.length > 0 && (
-            <ul class="faults">
-              {result.nearestFaults.map((f) => (
-                <li data-source={f.sourceId}>
-                  <strong>{f.name}</strong>: {tr.place(f.distanceKm, f.bearingDeg, f.depthBelowKm)}
-                </li>
-              ))}
-            </ul>
+            <NearestFaults tr={tr} faults={result.nearestFaults} />
           )}
         </div>
       </div>

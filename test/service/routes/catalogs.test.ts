@@ -10,10 +10,10 @@ import {
   FELT_EXPECTED,
   feltStudy,
   FIT_CATALOG_CSV,
-  SPAN_YEARS,
 } from '../../helpers/catalog-fixtures.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 import { expectError, expectSecurityHeaders } from '../helpers/assertions.ts';
+import { expectOnePeriodWeichert } from '../helpers/one-period-weichert.ts';
 import { demoStudyId } from '../helpers/runs.ts';
 import {
   jsonInit,
@@ -501,24 +501,7 @@ describe('POST /api/catalog/fit', () => {
       1e-6,
       'Aki–Utsu hand computation (catalog-fixtures.ts)',
     );
-    // One period: Weichert's equation is the maximum likelihood of binned Gutenberg–Richter
-    // magnitudes, β = ln(1 + ΔM / (mean − Mc)) / ΔM (derived from Weichert 1980 for one period),
-    // which is Aki–Utsu's β_U times 2 artanh(y/2) / y with y = β_U ΔM. Bins run to mMax = 9.5,
-    // where the untruncated tail left out, 10^(−1.25 · 5.3), is below 1e-6.
-    const y = DEFAULT_FIT.bValue * Math.LN10 * 0.1;
-    expect(body.weichert?.method).toBe('weichert');
-    expectRelative(
-      body.weichert?.bValue ?? NaN,
-      (DEFAULT_FIT.bValue * 2 * Math.atanh(y / 2)) / y,
-      1e-5,
-      'Aki–Utsu with the binning term (Weichert 1980, one period)',
-    );
-    expectRelative(
-      body.weichert?.rateAtReference ?? NaN,
-      7 / SPAN_YEARS,
-      1e-12,
-      'one period: N / T (Weichert 1980)',
-    );
+    expectOnePeriodWeichert(body.weichert);
     expect(body.recurrence?.method).toBe('weichert');
     expect(body.periods).toEqual([{ magnitude: 4.2, start: '2001-01-15T00:00:00.000Z' }]);
   });

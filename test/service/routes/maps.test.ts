@@ -1,7 +1,5 @@
-import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../../api/service/app.ts';
-import { DEMO_STUDY_URL } from '../../../api/operations/demo-seed.ts';
 import type { ServiceContext } from '../../../api/operations/service-context.ts';
 import type { Store } from '../../../api/store/store.ts';
 import { expectRelative } from '../../helpers/close.ts';
@@ -15,6 +13,7 @@ import {
   smallStudy,
 } from '../helpers/small-study.ts';
 import { closeServiceContext, testServiceContext } from '../helpers/test-context.ts';
+import { saveDemoStudy } from '../helpers/saved-study.ts';
 
 /*
  * Map runs through app.request(), kept in the store. The small study (one earthquake straight
@@ -34,10 +33,7 @@ beforeAll(async () => {
   store = ctx.store;
   const created = await app().request('/api/studies', json('POST', smallStudy()));
   studyId = ((await created.json()) as { id: string }).id;
-  demoId = store.studies.create({
-    name: 'Demo coast',
-    document: readFileSync(DEMO_STUDY_URL, 'utf8'),
-  }).id;
+  demoId = saveDemoStudy(store);
 });
 afterAll(async () => {
   await closeServiceContext(ctx);

@@ -1,3 +1,5 @@
+import { COMMUNITY } from '../../service/helpers/small-study.ts';
+
 /**
  * A small study spread over about 15 × 17 km of open ocean, for hazard maps that draw a few
  * hundred cells quickly: two invented villages and one invented earthquake source between
@@ -16,16 +18,8 @@ export function spreadStudy(name = 'Spread test study'): Record<string, unknown>
   return {
     name,
     communities: [
-      {
-        id: 'low-cove',
-        name: 'Low Cove',
-        lon: -140.2,
-        lat: -47.4,
-        vs30: 500,
-        population: 120,
-        coastal: true,
-        elevationM: 4,
-      },
+      // Where the small study's one village stands.
+      { ...COMMUNITY, id: 'low-cove', name: 'Low Cove' },
       {
         id: 'ridge-end',
         name: 'Ridge End',

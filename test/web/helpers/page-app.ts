@@ -6,6 +6,7 @@ import { createPages } from '../../../web/pages.tsx';
 import { tempDir } from '../../service/helpers/service-process.ts';
 import { smallStudy } from '../../service/helpers/small-study.ts';
 import { closeServiceContext, testServiceContext } from '../../service/helpers/test-context.ts';
+import { saveStudy } from '../../service/helpers/saved-study.ts';
 
 /** The service with its pages, in-process (app.request), on a temporary database. */
 export interface PageApp {
@@ -93,10 +94,7 @@ export function pagesWithSmallStudy(name: string): SmallStudyPages {
   const shared: Partial<SmallStudyPages> = {};
   beforeAll(() => {
     shared.page = startPageApp();
-    shared.studyId = shared.page.ctx.store.studies.create({
-      name,
-      document: JSON.stringify(smallStudy(name)),
-    }).id;
+    shared.studyId = saveStudy(shared.page.ctx.store, smallStudy(name));
   });
   afterAll(async () => shared.page?.close());
   return shared as SmallStudyPages;
@@ -110,10 +108,7 @@ export async function saveAndScreen(
   page: PageApp,
   study: { readonly name: string },
 ): Promise<{ readonly id: string; readonly runId: string }> {
-  const id = page.ctx.store.studies.create({
-    name: study.name,
-    document: JSON.stringify(study),
-  }).id;
+  const id = saveStudy(page.ctx.store, study);
   const started = await page.app.request(`/studies/${id}/screen`, {
     method: 'POST',
     body: new URLSearchParams(),

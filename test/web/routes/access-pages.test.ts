@@ -8,6 +8,7 @@ import { translator } from '../../../web/text/translator.ts';
 import { expectError, expectSecurityHeaders } from '../../service/helpers/assertions.ts';
 import { smallStudy } from '../../service/helpers/small-study.ts';
 import { runFinished, startPageApp, type PageApp } from '../helpers/page-app.ts';
+import { saveStudy } from '../../service/helpers/saved-study.ts';
 
 /**
  * The access page of a service with TREMORA_TOKEN (web/routes/access-pages.tsx) and the token
@@ -24,10 +25,7 @@ let studyId: string;
 beforeAll(() => {
   guarded = startPageApp({ token: TOKEN });
   open = startPageApp();
-  studyId = guarded.ctx.store.studies.create({
-    name: 'Access fixture',
-    document: JSON.stringify(smallStudy('Access fixture')),
-  }).id;
+  studyId = saveStudy(guarded.ctx.store, smallStudy('Access fixture'));
 });
 afterAll(async () => {
   await guarded.close();

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { smallStudy } from '../../service/helpers/small-study.ts';
 import { faultGeoJson, faultShapefileZip } from '../../study/fault-files/fixtures.ts';
+import { saveStudy } from '../../service/helpers/saved-study.ts';
 import { startPageApp, type PageApp } from '../helpers/page-app.ts';
 
 /**
@@ -23,10 +24,7 @@ beforeAll(() => {
   (study.sources.features[0] as { geometry: { coordinates: number[] } }).geometry.coordinates = [
     -150, -47.4,
   ];
-  studyId = page.ctx.store.studies.create({
-    name: 'Fault import fixture',
-    document: JSON.stringify(study),
-  }).id;
+  studyId = saveStudy(page.ctx.store, study);
 });
 afterAll(async () => page.close());
 

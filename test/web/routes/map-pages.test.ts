@@ -1,7 +1,5 @@
-import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { ServiceContext } from '../../../api/operations/service-context.ts';
-import { DEMO_STUDY_URL } from '../../../api/operations/demo-seed.ts';
 import { MAX_DRAWN_POINTS } from '../../../web/data/map-data.ts';
 import { suggestedMapSpacing } from '../../../web/data/map-spacing.ts';
 import { DUSK } from '../../../web/style/palette.ts';
@@ -12,6 +10,7 @@ import { readStudy } from '../../../web/data/study-data.ts';
 import { startPageApp, textOfId, type PageApp } from '../helpers/page-app.ts';
 import { textLanguages } from '../helpers/text-languages.ts';
 import { spreadStudy } from '../helpers/map-study.ts';
+import { saveDemoStudy, saveStudy } from '../../service/helpers/saved-study.ts';
 
 /**
  * Hazard maps from the overview, through app.request(): the form, its problems beside the
@@ -49,14 +48,8 @@ const count = (html: string, pattern: RegExp): number => (html.match(pattern) ??
 
 beforeAll(async () => {
   page = startPageApp();
-  spreadId = page.ctx.store.studies.create({
-    name: 'Spread fixture',
-    document: JSON.stringify(spreadStudy('Spread fixture')),
-  }).id;
-  demoId = page.ctx.store.studies.create({
-    name: 'Demo coast',
-    document: readFileSync(DEMO_STUDY_URL, 'utf8'),
-  }).id;
+  spreadId = saveStudy(page.ctx.store, spreadStudy('Spread fixture'));
+  demoId = saveDemoStudy(page.ctx.store);
 });
 afterAll(async () => page.close());
 
@@ -215,33 +208,38 @@ describe('the hazard map on the overview', () => {
     expect(html).toMatch(
       /id="hazard-map-spacing"[^>]*value="abc"[^>]*aria-describedby="hazard-map-spacing-help hazard-map-spacingKm-problem" aria-invalid="true"/,
     );
-    const measure = await post(`/studies/${spreadId}/maps`, {
-      measure: 'PGX',
-      returnPeriodYears: '475',
-      spacingKm: '5',
-    });
-    expect(measure.status).toBe(422);
-    expect(textOfId(await measure.text(), 'hazard-map-measure-problem')).toMatch(
-      /^unsupported measure &quot;PGX&quot;: expected/,
-    );
-    const fine = await post(`/studies/${spreadId}/maps`, {
-      measure: 'PGA',
-      returnPeriodYears: '475',
-      spacingKm: '0,25',
-    });
-    expect(fine.status).toBe(422);
-    expect(textOfId(await fine.text(), 'hazard-map-spacingKm-problem')).toBe(
-      'expected a number in [0.5, 200] km, got 0.25',
-    );
-    const large = await post(`/studies/${demoId}/maps`, {
-      measure: 'PGA',
-      returnPeriodYears: '475',
-      spacingKm: '0.5',
-    });
-    expect(large.status).toBe(422);
-    expect(textOfId(await large.text(), 'hazard-map-other-problems')).toMatch(
-      /^study is too large: map grid points at 0\.5 km spacing = \d+, over the budget of 250000$/,
-    );
+    // Each refused form, and the problem shown where it belongs: exact text, or its pattern.
+    const refused = [
+      {
+        studyId: spreadId,
+        form: { measure: 'PGX', spacingKm: '5' },
+        problemId: 'hazard-map-measure-problem',
+        problem: /^unsupported measure &quot;PGX&quot;: expected/,
+      },
+      {
+        studyId: spreadId,
+        form: { measure: 'PGA', spacingKm: '0,25' },
+        problemId: 'hazard-map-spacingKm-problem',
+        problem: 'expected a number in [0.5, 200] km, got 0.25',
+      },
+      {
+        studyId: demoId,
+        form: { measure: 'PGA', spacingKm: '0.5' },
+        problemId: 'hazard-map-other-problems',
+        problem:
+          /^study is too large: map grid points at 0\.5 km spacing = \d+, over the budget of 250000$/,
+      },
+    ];
+    for (const { studyId, form, problemId, problem } of refused) {
+      const response = await post(`/studies/${studyId}/maps`, {
+        ...form,
+        returnPeriodYears: '475',
+      });
+      expect(response.status, problemId).toBe(422);
+      const shown = textOfId(await response.text(), problemId);
+      if (typeof problem === 'string') expect(shown).toBe(problem);
+      else expect(shown).toMatch(problem);
+    }
     expect(page.ctx.store.maps.listForStudy(spreadId)).toHaveLength(before);
     expect(page.ctx.store.maps.listForStudy(demoId)).toHaveLength(0);
   });

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { smallStudy } from '../../service/helpers/small-study.ts';
 import { startPageApp, type PageApp } from '../helpers/page-app.ts';
+import { saveStudy } from '../../service/helpers/saved-study.ts';
 
 /**
  * New study, rename, copy and delete from the pages (app.request): a study is created from a
@@ -94,10 +95,7 @@ describe('a new study from the pages', () => {
 describe('rename, copy and delete', () => {
   let id: string;
   beforeAll(() => {
-    id = page.ctx.store.studies.create({
-      name: 'Original',
-      document: JSON.stringify(smallStudy('Original')),
-    }).id;
+    id = saveStudy(page.ctx.store, smallStudy('Original'));
   });
 
   test('a rename is written into the document; a blank one is refused', async () => {

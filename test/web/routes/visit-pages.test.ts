@@ -39,26 +39,22 @@ describe('visit priority on the overview', () => {
   test('shows every component and follows the weights in the query', async () => {
     const text = await html(`/studies/${id}`);
     expect(text).toContain('id="priority-heading"');
-    for (const component of ['people', 'chance', 'firmness', 'facilities', 'isolation'])
-      expect(text).toContain(`data-component="${component}"`);
-    // People alone: Vennick Bay (2,900) before Harbour Point (420) before Lisk Head (35).
-    const people = await html(
-      `/studies/${id}?w-people=1&w-chance=0&w-firmness=0&w-facilities=0&w-isolation=0`,
-    );
-    expect(rowOrder(people, 'priority-table')).toEqual([
-      'vennick-bay',
-      'harbour-point',
-      'lisk-head',
-    ]);
-    // Isolation alone: Lisk Head (61 km) first, Vennick Bay (3 km) last.
-    const isolation = await html(
-      `/studies/${id}?w-people=0&w-chance=0&w-firmness=0&w-facilities=0&w-isolation=1`,
-    );
-    expect(rowOrder(isolation, 'priority-table')).toEqual([
-      'lisk-head',
-      'harbour-point',
-      'vennick-bay',
-    ]);
+    const components = ['people', 'chance', 'firmness', 'facilities', 'isolation'];
+    for (const component of components) expect(text).toContain(`data-component="${component}"`);
+    // One component weighted alone orders the villages by it.
+    const alone = [
+      // People: Vennick Bay (2,900) before Harbour Point (420) before Lisk Head (35).
+      { component: 'people', order: ['vennick-bay', 'harbour-point', 'lisk-head'] },
+      // Isolation: Lisk Head (61 km) first, Vennick Bay (3 km) last.
+      { component: 'isolation', order: ['lisk-head', 'harbour-point', 'vennick-bay'] },
+    ];
+    for (const { component, order } of alone) {
+      const weights = components.map((c) => `w-${c}=${c === component ? 1 : 0}`).join('&');
+      expect(
+        rowOrder(await html(`/studies/${id}?${weights}`), 'priority-table'),
+        component,
+      ).toEqual(order);
+    }
   });
 
   test("shows the band's firmness from the run's band shares and ranks by it alone", async () => {

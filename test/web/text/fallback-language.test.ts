@@ -1,8 +1,6 @@
-import { readFileSync } from 'node:fs';
 import { Fragment, jsx, type Child } from 'hono/jsx';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { ACCESS_COOKIE, accessCookieValue } from '../../../api/service/page-access.ts';
-import { DEMO_STUDY_URL } from '../../../api/operations/demo-seed.ts';
 import type { TextKey } from '../../../web/text/text-key.ts';
 import { loadTextBundles } from '../../../web/text/text-bundles.ts';
 import { EN, partialFrenchTextDir } from '../helpers/bundles.ts';
@@ -10,6 +8,7 @@ import { translator } from '../../../web/text/translator.ts';
 import { smallStudy } from '../../service/helpers/small-study.ts';
 import { fileForm, runFinished, startPageApp, type PageApp } from '../helpers/page-app.ts';
 import { textLanguages, type MarkedText } from '../helpers/text-languages.ts';
+import { saveDemoStudy, saveStudy } from '../../service/helpers/saved-study.ts';
 
 /**
  * English standing in for a missing translation is marked lang="en", so that readers and
@@ -139,14 +138,8 @@ describe('French pages mark every English stand-in', { timeout: 120_000 }, () =>
     const now = new Date();
     const accessId = app.ctx.store.pageAccess.open(now, new Date(now.getTime() + 3_600_000));
     headers.cookie += `; ${ACCESS_COOKIE}=${accessCookieValue(TOKEN, accessId)}`;
-    smallId = app.ctx.store.studies.create({
-      name: 'Language fixture',
-      document: JSON.stringify(smallStudy('Language fixture')),
-    }).id;
-    demoId = app.ctx.store.studies.create({
-      name: 'Demo coast',
-      document: readFileSync(DEMO_STUDY_URL, 'utf8'),
-    }).id;
+    smallId = saveStudy(app.ctx.store, smallStudy('Language fixture'));
+    demoId = saveDemoStudy(app.ctx.store);
     const started = await post(`/studies/${smallId}/screen`, new URLSearchParams());
     runId = (started.headers.get('location') as string).split('/').at(-1) as string;
     expect(await runFinished(app.ctx, runId)).toBe('done');
