@@ -5,7 +5,7 @@ import { translator } from '../../../web/text/translator.ts';
 // Eight compass points, 45° sectors centred on each point (the rule stated in
 // web/format/direction-words.ts; the sectors are the usual ones, common practice).
 describe('directions in words', () => {
-  test('the issue example: 14 km to the north-east', () => {
+  test('14.2 km at 44° reads as 14 km to the north-east', () => {
     expect(translator('en').place(14.2, 44)).toBe('14 km to the north-east');
   });
 
