@@ -2,6 +2,7 @@ import { faultSurface, type FaultSurface } from '../../../api/engine/geometry/fa
 import { createLocalFrame, type LocalFrame } from '../../../api/engine/geometry/projection.ts';
 import type {
   FaultSource,
+  GroundMotionBranches,
   LonLat,
   PointSource,
   Recurrence,
@@ -156,3 +157,10 @@ export function pointKm(
 }
 
 export const SETTINGS: Settings = testSettings();
+
+/** One model per setting: BSSA14 for crustal sources, AGA16 for interface and intraslab ones. */
+export const ONE_MODEL_PER_SETTING: GroundMotionBranches = {
+  crustal: [{ model: 'BSSA14', weight: 1 }],
+  interface: [{ model: 'AGA16', weight: 1 }],
+  intraslab: [{ model: 'AGA16', weight: 1 }],
+};
