@@ -164,3 +164,20 @@ export const ONE_MODEL_PER_SETTING: GroundMotionBranches = {
   interface: [{ model: 'AGA16', weight: 1 }],
   intraslab: [{ model: 'AGA16', weight: 1 }],
 };
+
+/**
+ * A circular arc in the local frame (km): `points` vertices about `centreKm` at `radiusKm`, from
+ * `fromDeg` in steps of `stepDeg` (degrees anticlockwise from east). Plain geometry, for
+ * contours bent in plan.
+ */
+export const arcKm = (
+  centreKm: [number, number],
+  radiusKm: number,
+  fromDeg: number,
+  stepDeg: number,
+  points = 81,
+): [number, number][] =>
+  Array.from({ length: points }, (_, k) => {
+    const angle = ((fromDeg + stepDeg * k) * Math.PI) / 180;
+    return [centreKm[0] + radiusKm * Math.cos(angle), centreKm[1] + radiusKm * Math.sin(angle)];
+  });
