@@ -1,7 +1,7 @@
 import { studyRuptureTable } from '../../api/engine/hazard/study-rupture-table.ts';
 import type { FaultSource, Study } from '../../api/engine/model.ts';
 import { screenStudy } from '../../api/engine/screen-study.ts';
-import { FRAME, contouredKm, faultKm } from '../engine/geometry/km-fixtures.ts';
+import { FRAME, arcKm, contouredKm, faultKm } from '../engine/geometry/km-fixtures.ts';
 import { largestDifference, loadLine, machineLine } from './hazard-cases.ts';
 import { testSettings } from '../helpers/test-settings.ts';
 
@@ -51,11 +51,7 @@ const contouredPlane: FaultSource = {
 // 300 km west (plain geometry, invented).
 const slabDepths = [5, 10, 15, 20, 25, 30, 35, 40, 45];
 const offsetKm = (d: number) => 150 * Math.sin(Math.acos((155 - d) / 150));
-const arc = (radiusKm: number): [number, number][] =>
-  Array.from({ length: 81 }, (_, k) => {
-    const angle = ((-19 + 0.475 * k) * Math.PI) / 180;
-    return [-300 + radiusKm * Math.cos(angle), 100 + radiusKm * Math.sin(angle)];
-  });
+const arc = (radiusKm: number) => arcKm([-300, 100], radiusKm, -19, 0.475);
 const bentSlab: FaultSource = {
   ...contouredKm(
     slabDepths.map((d) => arc(300 + offsetKm(d))),

@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { normalSurvival } from '../../api/engine/hazard/normal-cdf.ts';
 import { expectRelative } from '../helpers/close.ts';
-import { runCapturing as run } from './helpers/run-cli.ts';
+import { expectCheckedValid, runCapturing as run } from './helpers/run-cli.ts';
 
 const TINY = new URL('fixtures/tiny.study.json', import.meta.url).pathname;
 const DEMO = new URL('../../data-demo/demo.study.json', import.meta.url).pathname;
@@ -14,9 +14,7 @@ const cornellLnPga = (m: number, rKm: number) => -0.152 + 0.859 * m - 1.803 * Ma
 
 describe('tremora check', () => {
   it('says a valid study is valid and exits 0', async () => {
-    const { code, out } = await run('check', DEMO);
-    expect(code).toBe(0);
-    expect(out).toMatch(/valid — "Demo coast", 11 communities, 6 sources/);
+    await expectCheckedValid(DEMO, /valid — "Demo coast", 11 communities, 6 sources/);
   });
 
   it('prints every problem of a broken copy with its path and exits 2', async () => {

@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { StudyResult } from '../../api/engine/results.ts';
 import { expectClose } from '../helpers/close.ts';
-import { runCapturing as run } from './helpers/run-cli.ts';
+import { expectCheckedValid, runCapturing as run } from './helpers/run-cli.ts';
 
 /**
  * `tremora check` and `tremora screen` on a study whose interface is given by depth contours
@@ -16,9 +16,10 @@ const SLAB = new URL('fixtures/slab.study.json', import.meta.url).pathname;
 
 describe('a study with a contoured source on the command line', () => {
   it('is checked valid', async () => {
-    const { code, out } = await run('check', SLAB);
-    expect(code).toBe(0);
-    expect(out).toMatch(/valid — "Slab test shore \(invented\)", 2 communities, 2 sources/);
+    await expectCheckedValid(
+      SLAB,
+      /valid — "Slab test shore \(invented\)", 2 communities, 2 sources/,
+    );
   });
 
   it('is screened: the slab is said below the village over it, away from the one beyond it', async () => {

@@ -48,19 +48,29 @@ function manualJob() {
   };
 }
 
+/**
+ * Starts a hand-driven job on `jobs`, recorded in a memory ledger; its done record is its
+ * output unless `done` says otherwise.
+ */
+function startManualJob(
+  jobs: JobLifecycle,
+  spec: { id: string; kind: string; progressOf: string; done?: (output: string) => string },
+) {
+  const memory = memoryLedger();
+  const job = manualJob();
+  jobs.start({ done: (out: string) => out, ...spec, ledger: memory.ledger, launch: job.launch });
+  return { ...memory, job };
+}
+
 const settle = () => new Promise((r) => setTimeout(r, 0));
 
 describe('JobLifecycle', () => {
   it('records running, progress in steps of at least 1%, and done once', async () => {
-    const { ledger, writes } = memoryLedger();
-    const job = manualJob();
     const jobs = new JobLifecycle();
-    jobs.start({
+    const { writes, job } = startManualJob(jobs, {
       id: 'j1',
-      ledger,
       kind: 'job',
       progressOf: 'work',
-      launch: job.launch,
       done: (out) => `${out}!`,
     });
     expect(jobs.activeCount).toBe(1);
@@ -74,16 +84,11 @@ describe('JobLifecycle', () => {
   });
 
   it('names the share done when a job is cancelled, and the end is the last write', async () => {
-    const { ledger, writes, status } = memoryLedger();
-    const job = manualJob();
     const jobs = new JobLifecycle();
-    jobs.start({
+    const { writes, status, job } = startManualJob(jobs, {
       id: 'j2',
-      ledger,
       kind: 'job',
       progressOf: 'points',
-      launch: job.launch,
-      done: (out) => out,
     });
     job.signals().started('grid');
     job.signals().progress(0.3);
@@ -104,15 +109,10 @@ describe('JobLifecycle', () => {
         'failed: invalid input: sources[0]: expected a source',
       ],
     ] as const) {
-      const { ledger, writes } = memoryLedger();
-      const job = manualJob();
-      new JobLifecycle().start({
+      const { writes, job } = startManualJob(new JobLifecycle(), {
         id: 'j3',
-        ledger,
         kind: 'job',
         progressOf: 'work',
-        launch: job.launch,
-        done: (out) => out,
       });
       job.reject(error);
       await settle();
@@ -121,17 +121,11 @@ describe('JobLifecycle', () => {
   });
 
   it('logs an unexpected failure with an id the record names', async () => {
-    const { ledger, writes } = memoryLedger();
-    const job = manualJob();
     const logged: { id: string; context: string }[] = [];
-    new JobLifecycle((id, context) => logged.push({ id, context })).start({
-      id: 'j4',
-      ledger,
-      kind: 'map run',
-      progressOf: 'points',
-      launch: job.launch,
-      done: (out) => out,
-    });
+    const { writes, job } = startManualJob(
+      new JobLifecycle((id, context) => logged.push({ id, context })),
+      { id: 'j4', kind: 'map run', progressOf: 'points' },
+    );
     job.signals().started('grid');
     job.reject(new TypeError('boom'));
     await settle();

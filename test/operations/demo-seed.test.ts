@@ -18,6 +18,12 @@ afterEach(() => {
   dir.remove();
 });
 
+/** Seeds from a study file, or the shipped study with a catalog file, in the test folder. */
+const seedWithStudy = (fileName: string) =>
+  seedDemoStudy(store, modelCatalog, pathToFileURL(`${dir.path}/${fileName}`));
+const seedWithCatalog = (fileName: string) =>
+  seedDemoStudy(store, modelCatalog, undefined, pathToFileURL(`${dir.path}/${fileName}`));
+
 describe('seedDemoStudy', () => {
   it('saves the demo study with its document text as shipped', () => {
     const seed = seedDemoStudy(store, modelCatalog);
@@ -27,17 +33,15 @@ describe('seedDemoStudy', () => {
   });
 
   it('saves nothing and says why when the file is missing, malformed or invalid', () => {
-    const missing = seedDemoStudy(store, modelCatalog, pathToFileURL(`${dir.path}/absent.json`));
+    const missing = seedWithStudy('absent.json');
     expect(missing).toMatchObject({
       seeded: false,
       issues: [{ message: 'cannot read the demo study (ENOENT)' }],
     });
     writeFileSync(`${dir.path}/bad.json`, '{ "name": ');
-    expect(seedDemoStudy(store, modelCatalog, pathToFileURL(`${dir.path}/bad.json`)).seeded).toBe(
-      false,
-    );
+    expect(seedWithStudy('bad.json').seeded).toBe(false);
     writeFileSync(`${dir.path}/invalid.json`, '{ "name": "Invalid" }');
-    const invalid = seedDemoStudy(store, modelCatalog, pathToFileURL(`${dir.path}/invalid.json`));
+    const invalid = seedWithStudy('invalid.json');
     expect(invalid.seeded).toBe(false);
     expect(store.studies.list()).toEqual([]);
   });
@@ -50,12 +54,7 @@ describe('seedDemoStudy', () => {
   });
 
   it('saves nothing when the demo catalog is missing or loads no event', () => {
-    const missing = seedDemoStudy(
-      store,
-      modelCatalog,
-      undefined,
-      pathToFileURL(`${dir.path}/absent.csv`),
-    );
+    const missing = seedWithCatalog('absent.csv');
     expect(missing).toMatchObject({
       seeded: false,
       issues: [{ message: 'cannot read the demo catalog (ENOENT)' }],
@@ -64,12 +63,7 @@ describe('seedDemoStudy', () => {
       `${dir.path}/empty.csv`,
       'time,lon,lat,depthKm,magnitude,magnitudeType,id\n2001-13-01T00:00:00Z,-150,-47,10,5,Mw,x\n',
     );
-    const empty = seedDemoStudy(
-      store,
-      modelCatalog,
-      undefined,
-      pathToFileURL(`${dir.path}/empty.csv`),
-    );
+    const empty = seedWithCatalog('empty.csv');
     expect(empty).toMatchObject({
       seeded: false,
       issues: [{ path: `${dir.path}/empty.csv[line 2]` }],

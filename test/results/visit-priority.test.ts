@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { visitPriorities, type PriorityInput } from '../../api/results/visit-priority.ts';
+import {
+  PRIORITY_COMPONENTS,
+  visitPriorities,
+  type PriorityComponentId,
+  type PriorityInput,
+  type PriorityWeights,
+} from '../../api/results/visit-priority.ts';
 import { expectClose } from '../helpers/close.ts';
 
 // Check values worked by hand from the weighted mean of max-scaled shares (the scoring's own
@@ -14,6 +20,12 @@ const b: PriorityInput = {
   communityId: 'b',
   values: { people: 500, chance: 0.4, isolation: 40 },
 };
+
+/** Weight 1 on the named components, 0 on every other. */
+const onlyWeights = (...on: PriorityComponentId[]): PriorityWeights =>
+  Object.fromEntries(
+    PRIORITY_COMPONENTS.map((id) => [id, on.includes(id) ? 1 : 0]),
+  ) as PriorityWeights;
 
 describe('visitPriorities', () => {
   it('weights shares of the largest value with the default weights 3, 3, 1, 1 (no firmness known)', () => {
@@ -41,13 +53,7 @@ describe('visitPriorities', () => {
   });
 
   it('follows changed weights: the chance alone puts b first', () => {
-    const scored = visitPriorities([a, b], {
-      people: 0,
-      chance: 1,
-      firmness: 0,
-      facilities: 0,
-      isolation: 0,
-    });
+    const scored = visitPriorities([a, b], onlyWeights('chance'));
     expect(scored.map((s) => [s.communityId, s.score])).toEqual([
       ['b', 100],
       ['a', 50],
@@ -66,25 +72,13 @@ describe('visitPriorities', () => {
     const firmness = second?.components.find((c) => c.id === 'firmness');
     expectClose(firmness?.share ?? NaN, 2 / 3, TOL, 'by hand: 0.6 / 0.9');
     expectClose(firmness?.points ?? NaN, (100 * 2) / 3 / 9, TOL, 'by hand: 100 · 1 · (2/3) / 9');
-    const alone = visitPriorities([firm, loose], {
-      people: 0,
-      chance: 0,
-      firmness: 1,
-      facilities: 0,
-      isolation: 0,
-    });
+    const alone = visitPriorities([firm, loose], onlyWeights('firmness'));
     expect(alone.map((s) => s.communityId)).toEqual(['a', 'b']);
     expectClose(alone[1]?.score ?? NaN, (100 * 2) / 3, TOL, 'by hand: 0.6 / 0.9');
   });
 
   it('gives every score 0 when every weight is 0', () => {
-    const scored = visitPriorities([a, b], {
-      people: 0,
-      chance: 0,
-      firmness: 0,
-      facilities: 0,
-      isolation: 0,
-    });
+    const scored = visitPriorities([a, b], onlyWeights());
     expect(scored.map((s) => s.score)).toEqual([0, 0]);
   });
 });

@@ -3,13 +3,8 @@ import { describe, expect, it } from 'vitest';
 import { INTERRUPTED_MESSAGE } from '../../api/store/run-repository.ts';
 import { expectRelative } from '../helpers/close.ts';
 import { expectError } from './helpers/assertions.ts';
-import { demoStudyId } from './helpers/runs.ts';
-import {
-  jsonInit,
-  restartableService,
-  type ServiceProcess,
-  waitFor,
-} from './helpers/service-process.ts';
+import { demoStudyId, expectInterrupted, waitForAnswer } from './helpers/runs.ts';
+import { jsonInit, restartableService, type ServiceProcess } from './helpers/service-process.ts';
 import {
   EXCEEDANCE_AT_LEVELS,
   MEDIAN_PGA_G,
@@ -53,12 +48,7 @@ async function waitForMap(
   id: string,
   statuses: readonly string[],
 ): Promise<MapAnswer> {
-  const map = await waitFor(
-    () => getMap(service, id),
-    (m) => statuses.includes(m.status),
-  );
-  expect(statuses, `map ${id} stayed ${map.status}`).toContain(map.status);
-  return map;
+  return waitForAnswer(`map ${id}`, () => getMap(service, id), statuses);
 }
 
 const rowOf = (id: string) => {
@@ -105,11 +95,7 @@ describe('hazard maps across a restart of the service', () => {
       geojsonBefore,
     );
     const interrupted = await getMap(second, inFlight.id);
-    expect(interrupted).toMatchObject({
-      status: 'interrupted',
-      error: INTERRUPTED_MESSAGE,
-      provenance: null,
-    });
+    expectInterrupted(interrupted);
     await expectError(await second.fetch(`/api/maps/${inFlight.id}/map.geojson`), 409);
     await expectError(
       await second.fetch(`/api/maps/${inFlight.id}/cancel`, { method: 'POST' }),

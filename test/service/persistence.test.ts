@@ -1,9 +1,8 @@
 import Database from 'better-sqlite3';
 import { describe, expect, it } from 'vitest';
-import { INTERRUPTED_MESSAGE } from '../../api/store/run-repository.ts';
 import { expectError } from './helpers/assertions.ts';
 import { saveHeavyStudy } from './helpers/heavy-study.ts';
-import { getRun, startRun, waitForStatus } from './helpers/runs.ts';
+import { expectInterrupted, getRun, startRun, waitForStatus } from './helpers/runs.ts';
 import { jsonInit, restartableService } from './helpers/service-process.ts';
 import { smallStudy } from './helpers/small-study.ts';
 
@@ -48,11 +47,7 @@ describe('a crash of the service (SIGKILL)', () => {
     );
 
     const interrupted = await getRun(second, inFlight.id);
-    expect(interrupted).toMatchObject({
-      status: 'interrupted',
-      error: INTERRUPTED_MESSAGE,
-      provenance: null,
-    });
+    expectInterrupted(interrupted);
     await expectError(await second.fetch(`/api/runs/${inFlight.id}/results`), 409);
 
     expect(await second.stop()).toBe(0);

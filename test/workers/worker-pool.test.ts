@@ -18,6 +18,10 @@ const pool = (options: ConstructorParameters<typeof WorkerPool>[0]) => {
   return p;
 };
 
+/** Runs a measure task on a named test study; resolves with its result or the error it failed with. */
+const measureOutcome = (p: WorkerPool, studyName: string): Promise<unknown> =>
+  p.run({ kind: 'measure', study: namedStudy(studyName) }).result.catch((e: unknown) => e);
+
 afterEach(async () => {
   await Promise.all(pools.splice(0).map((p) => p.close()));
 });
@@ -106,9 +110,7 @@ describe('WorkerPool with the real run worker', () => {
 describe('WorkerPool failures and cancellation (fixture worker)', () => {
   it('fails only the task whose thread crashed, replaces the thread and runs the next task', async () => {
     const p = pool({ size: 1, workerUrl: FIXTURE });
-    const crashed = p
-      .run({ kind: 'measure', study: namedStudy('crash') })
-      .result.catch((e: unknown) => e);
+    const crashed = measureOutcome(p, 'crash');
     const next = p.run({ kind: 'measure', study: namedStudy('after') }).result;
     const error = await crashed;
     expect(error).toBeInstanceOf(WorkerCrashed);
@@ -163,9 +165,7 @@ describe('WorkerPool failures and cancellation (fixture worker)', () => {
 
   it('passes domain errors through with their issues', async () => {
     const p = pool({ size: 1, workerUrl: FIXTURE });
-    const error = await p
-      .run({ kind: 'measure', study: namedStudy('bad-input') })
-      .result.catch((e: unknown) => e);
+    const error = await measureOutcome(p, 'bad-input');
     expect(error).toBeInstanceOf(InvalidInput);
     expect((error as InvalidInput).issues).toEqual([
       { path: 'settings.measures[0]', message: 'expected a measure' },
@@ -174,29 +174,19 @@ describe('WorkerPool failures and cancellation (fixture worker)', () => {
 
   it('rejects queued and new tasks once closed', async () => {
     const p = pool({ size: 1, workerUrl: FIXTURE });
-    const running = p
-      .run({ kind: 'measure', study: namedStudy('hang') })
-      .result.catch((e: unknown) => e);
-    const queued = p
-      .run({ kind: 'measure', study: namedStudy('later') })
-      .result.catch((e: unknown) => e);
+    const running = measureOutcome(p, 'hang');
+    const queued = measureOutcome(p, 'later');
     await p.close();
     expect(await running).toBeInstanceOf(PoolClosed);
     expect(await queued).toBeInstanceOf(PoolClosed);
-    expect(
-      await p.run({ kind: 'measure', study: namedStudy('late') }).result.catch((e: unknown) => e),
-    ).toBeInstanceOf(PoolClosed);
+    expect(await measureOutcome(p, 'late')).toBeInstanceOf(PoolClosed);
   });
 
   it('does not respawn a worker module that fails to load, and fails its tasks', async () => {
     const p = pool({ size: 1, workerUrl: BROKEN });
-    const error = await p
-      .run({ kind: 'measure', study: namedStudy('any') })
-      .result.catch((e: unknown) => e);
+    const error = await measureOutcome(p, 'any');
     expect(error).toBeInstanceOf(WorkerCrashed);
     expect(p.stats().alive).toBe(0);
-    expect(
-      await p.run({ kind: 'measure', study: namedStudy('again') }).result.catch((e: unknown) => e),
-    ).toBeInstanceOf(WorkerCrashed);
+    expect(await measureOutcome(p, 'again')).toBeInstanceOf(WorkerCrashed);
   });
 });

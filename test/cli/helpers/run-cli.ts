@@ -1,3 +1,4 @@
+import { expect } from 'vitest';
 import { runCli } from '../../../api/cli.ts';
 import type { Io } from '../../../api/cli/output.ts';
 
@@ -10,4 +11,11 @@ export async function runCapturing(
   const io: Io = { out: (t) => (out += `${t}\n`), err: (t) => (err += `${t}\n`) };
   const code = await runCli(argv, io);
   return { code, out, err };
+}
+
+/** `tremora check` on a study: exit 0 and the summary line it should print. */
+export async function expectCheckedValid(studyPath: string, summary: RegExp): Promise<void> {
+  const { code, out } = await runCapturing('check', studyPath);
+  expect(code).toBe(0);
+  expect(out).toMatch(summary);
 }

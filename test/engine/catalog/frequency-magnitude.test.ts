@@ -1,6 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { MS_PER_YEAR } from '../../../api/engine/catalog/event.ts';
-import { frequencyMagnitude } from '../../../api/engine/catalog/frequency-magnitude.ts';
+import {
+  frequencyMagnitude,
+  type FrequencyMagnitude,
+} from '../../../api/engine/catalog/frequency-magnitude.ts';
 import { expectClose } from '../../helpers/close.ts';
 import { catalogEvent as event } from '../fixtures/catalog-builders.ts';
 
@@ -15,6 +18,18 @@ describe('frequency–magnitude distribution', () => {
     event('f', 6, 4.3),
     event('g', 7, 4.2, 'ML'),
   ];
+  /** The span from `startYear` to year 10; M >= 4.0 complete from `m40FromYear`, M >= 4.2 from year 0. */
+  const withTwoPeriods = (startYear: number, m40FromYear: number) =>
+    frequencyMagnitude(events, {
+      startMs: startYear * MS_PER_YEAR,
+      endMs: 10 * MS_PER_YEAR,
+      periods: [
+        { magnitude: 4.0, startMs: m40FromYear * MS_PER_YEAR },
+        { magnitude: 4.2, startMs: 0 },
+      ],
+    });
+  const binYears = (fmd: FrequencyMagnitude) =>
+    fmd.bins.map((b) => [b.magnitude, b.count, b.years]);
 
   it('counts per bin and cumulatively, with annual rates', () => {
     const fmd = frequencyMagnitude(events, { startMs: 0, endMs: 10 * MS_PER_YEAR });
@@ -73,15 +88,8 @@ describe('frequency–magnitude distribution', () => {
   it("uses each bin's own years under completeness periods", () => {
     // M >= 4.0 from year 5, M >= 4.2 from year 0: bins 4.0 and 4.1 hold only e (year 5),
     // observed 5 years; 4.3 holds f, observed 10 years (hand count).
-    const fmd = frequencyMagnitude(events, {
-      startMs: 0,
-      endMs: 10 * MS_PER_YEAR,
-      periods: [
-        { magnitude: 4.0, startMs: 5 * MS_PER_YEAR },
-        { magnitude: 4.2, startMs: 0 },
-      ],
-    });
-    expect(fmd.bins.map((b) => [b.magnitude, b.count, b.years])).toEqual([
+    const fmd = withTwoPeriods(0, 5);
+    expect(binYears(fmd)).toEqual([
       [4.1, 1, 5],
       [4.2, 0, 10],
       [4.3, 1, 10],
@@ -98,15 +106,8 @@ describe('frequency–magnitude distribution', () => {
     // The span runs from the first event (year 1) to year 10, but M >= 4.2 is complete from
     // year 0 and M >= 4.0 from year 0.5: a bin's years are from its period's start (hand count),
     // not from the first event, so the plotted rates sit on the line fitted with the same years.
-    const fmd = frequencyMagnitude(events, {
-      startMs: 1 * MS_PER_YEAR,
-      endMs: 10 * MS_PER_YEAR,
-      periods: [
-        { magnitude: 4.0, startMs: 0.5 * MS_PER_YEAR },
-        { magnitude: 4.2, startMs: 0 },
-      ],
-    });
-    expect(fmd.bins.map((b) => [b.magnitude, b.count, b.years])).toEqual([
+    const fmd = withTwoPeriods(1, 0.5);
+    expect(binYears(fmd)).toEqual([
       [4.0, 3, 9.5],
       [4.1, 2, 9.5],
       [4.2, 0, 10],

@@ -20,6 +20,8 @@ const event = (id: string, magnitude: number, magnitudeType: string): CatalogEve
 // Coefficients as the relations' sources state them (recalled, "from memory" in the source
 // text); the checks are the published formulas worked by hand. 1e-12: rounding only.
 const TOL = 1e-12;
+const expectMw = (converted: CatalogEvent | undefined, expectedMw: number, source: string): void =>
+  expectClose(converted?.magnitude as number, expectedMw, TOL, source);
 
 describe('convertMagnitudes', () => {
   it('converts Ms by Scordilis (2006), each branch on its range', () => {
@@ -28,24 +30,9 @@ describe('convertMagnitudes', () => {
       ['scordilis2006-ms'],
     );
     // Scordilis (2006): Mw = 0.67 Ms + 2.07 (Ms 3.0–6.1); Mw = 0.99 Ms + 0.08 (Ms 6.2–8.2) (from memory).
-    expectClose(
-      events[0]?.magnitude as number,
-      0.67 * 5.0 + 2.07,
-      TOL,
-      'Scordilis 2006, Ms 3.0–6.1 branch',
-    );
-    expectClose(
-      events[1]?.magnitude as number,
-      0.99 * 7.0 + 0.08,
-      TOL,
-      'Scordilis 2006, Ms 6.2–8.2 branch',
-    );
-    expectClose(
-      events[2]?.magnitude as number,
-      0.67 * 6.1 + 2.07,
-      TOL,
-      'Scordilis 2006, Ms 3.0–6.1 branch at its upper bound',
-    );
+    expectMw(events[0], 0.67 * 5.0 + 2.07, 'Scordilis 2006, Ms 3.0–6.1 branch');
+    expectMw(events[1], 0.99 * 7.0 + 0.08, 'Scordilis 2006, Ms 6.2–8.2 branch');
+    expectMw(events[2], 0.67 * 6.1 + 2.07, 'Scordilis 2006, Ms 3.0–6.1 branch at its upper bound');
     expect(converted).toEqual({ 'scordilis2006-ms': 3 });
   });
 
@@ -55,19 +42,9 @@ describe('convertMagnitudes', () => {
       ['scordilis2006-mb', 'grunthal2009-ml'],
     );
     // Scordilis (2006): Mw = 0.85 mb + 1.03 (from memory).
-    expectClose(
-      events[0]?.magnitude as number,
-      0.85 * 5.0 + 1.03,
-      TOL,
-      'Scordilis 2006 mb relation',
-    );
+    expectMw(events[0], 0.85 * 5.0 + 1.03, 'Scordilis 2006 mb relation');
     // Grünthal et al. (2009): Mw = 0.53 + 0.646 ML + 0.0376 ML² (from memory).
-    expectClose(
-      events[1]?.magnitude as number,
-      0.53 + 0.646 * 4 + 0.0376 * 16,
-      TOL,
-      'Grünthal et al. 2009 ML relation',
-    );
+    expectMw(events[1], 0.53 + 0.646 * 4 + 0.0376 * 16, 'Grünthal et al. 2009 ML relation');
     expect(
       events.map((e) => [e.magnitudeType, 'convertedFrom' in e ? e.convertedFrom : undefined]),
     ).toEqual([

@@ -14,16 +14,18 @@ const NORTH_SOUTH_TRACE: [number, number][] = [
   [0, -50],
   [0, 50],
 ];
+/** A fault on NORTH_SOUTH_TRACE: dip, dip direction (degrees), upper and lower depth (km). */
+const northSouthFault = (
+  dipDeg: number,
+  dipDirectionDeg: number,
+  upperDepthKm: number,
+  lowerDepthKm: number,
+) => faultKm(NORTH_SOUTH_TRACE, { dipDeg, dipDirectionDeg, upperDepthKm, lowerDepthKm });
 const TOL_KM = 1e-6; // projection round trip is good to about 1e-9 km
 
 describe('faultSurface', () => {
   it('builds a dipping plane from a straight trace (geometry by hand: width = depth range / sin dip)', () => {
-    const fault = faultKm(NORTH_SOUTH_TRACE, {
-      dipDeg: 30,
-      dipDirectionDeg: 90,
-      upperDepthKm: 0,
-      lowerDepthKm: 10,
-    });
+    const fault = northSouthFault(30, 90, 0, 10);
     const s = faultSurface(fault, FRAME);
     expect(s.reversed).toBe(false);
     expectClose(s.lengthKm, 100, TOL_KM, 'trace length by hand');
@@ -44,12 +46,7 @@ describe('faultSurface', () => {
   });
 
   it('walks the trace backwards when the fault dips to its left, keeping the dip on the right', () => {
-    const fault = faultKm(NORTH_SOUTH_TRACE, {
-      dipDeg: 45,
-      dipDirectionDeg: 270,
-      upperDepthKm: 2,
-      lowerDepthKm: 12,
-    });
+    const fault = northSouthFault(45, 270, 2, 12);
     const s = faultSurface(fault, FRAME);
     expect(s.reversed).toBe(true);
     const first = s.segments[0];
@@ -86,26 +83,11 @@ describe('faultSurface', () => {
   });
 
   it('refuses a dip direction along the trace, a dip outside (0, 90] and depths out of order', () => {
-    const along = faultKm(NORTH_SOUTH_TRACE, {
-      dipDeg: 45,
-      dipDirectionDeg: 0,
-      upperDepthKm: 0,
-      lowerDepthKm: 10,
-    });
+    const along = northSouthFault(45, 0, 0, 10);
     expect(() => faultSurface(along, FRAME)).toThrow(/dip direction/);
-    const flat = faultKm(NORTH_SOUTH_TRACE, {
-      dipDeg: 0,
-      dipDirectionDeg: 90,
-      upperDepthKm: 0,
-      lowerDepthKm: 10,
-    });
+    const flat = northSouthFault(0, 90, 0, 10);
     expect(() => faultSurface(flat, FRAME)).toThrow(InvalidInput);
-    const upside = faultKm(NORTH_SOUTH_TRACE, {
-      dipDeg: 45,
-      dipDirectionDeg: 90,
-      upperDepthKm: 10,
-      lowerDepthKm: 5,
-    });
+    const upside = northSouthFault(45, 90, 10, 5);
     expect(() => faultSurface(upside, FRAME)).toThrow(/lowerDepthKm/);
   });
 });

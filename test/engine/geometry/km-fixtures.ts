@@ -2,6 +2,7 @@ import { faultSurface, type FaultSurface } from '../../../api/engine/geometry/fa
 import { createLocalFrame, type LocalFrame } from '../../../api/engine/geometry/projection.ts';
 import type {
   FaultSource,
+  GroundMotionBranches,
   LonLat,
   PointSource,
   Recurrence,
@@ -156,3 +157,27 @@ export function pointKm(
 }
 
 export const SETTINGS: Settings = testSettings();
+
+/** One model per setting: BSSA14 for crustal sources, AGA16 for interface and intraslab ones. */
+export const ONE_MODEL_PER_SETTING: GroundMotionBranches = {
+  crustal: [{ model: 'BSSA14', weight: 1 }],
+  interface: [{ model: 'AGA16', weight: 1 }],
+  intraslab: [{ model: 'AGA16', weight: 1 }],
+};
+
+/**
+ * A circular arc in the local frame (km): `points` vertices about `centreKm` at `radiusKm`, from
+ * `fromDeg` in steps of `stepDeg` (degrees anticlockwise from east). Plain geometry, for
+ * contours bent in plan.
+ */
+export const arcKm = (
+  centreKm: [number, number],
+  radiusKm: number,
+  fromDeg: number,
+  stepDeg: number,
+  points = 81,
+): [number, number][] =>
+  Array.from({ length: points }, (_, k) => {
+    const angle = ((fromDeg + stepDeg * k) * Math.PI) / 180;
+    return [centreKm[0] + radiusKm * Math.cos(angle), centreKm[1] + radiusKm * Math.sin(angle)];
+  });

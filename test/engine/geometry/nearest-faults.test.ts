@@ -18,6 +18,14 @@ const azimuthTo = (from: readonly [number, number], to: readonly [number, number
 
 describe('nearestFaults', () => {
   const site = FRAME.origin;
+  // Trace 5 km west of the site, dipping 30° east under it (W cos δ = 20 km at 30°, 10 km deep).
+  const dipping = faultKm(
+    [
+      [-5, -30],
+      [-5, 30],
+    ],
+    { id: 'dipping', dipDeg: 30, dipDirectionDeg: 90, upperDepthKm: 0, lowerDepthKm: 10 },
+  );
   const east = faultKm(
     [
       [10, -20],
@@ -75,14 +83,6 @@ describe('nearestFaults', () => {
   });
 
   it('a site above a dipping fault: distance 0 and the bearing to the nearest point of its trace', () => {
-    // Trace 5 km west of the site, dipping east under it (W cos δ = 20 km at 30°, 10 km deep).
-    const dipping = faultKm(
-      [
-        [-5, -30],
-        [-5, 30],
-      ],
-      { id: 'dipping', dipDeg: 30, dipDirectionDeg: 90, upperDepthKm: 0, lowerDepthKm: 10 },
-    );
     const [found] = nearestFaults([dipping], FRAME, site, 1);
     expectClose(found?.distanceKm ?? NaN, 0, 1e-9, 'Rjb = 0 on the hanging wall above the plane');
     expectClose(
@@ -96,13 +96,6 @@ describe('nearestFaults', () => {
   it('above a dipping fault: its depth straight below and Rrup, by hand geometry', () => {
     // Trace 5 km west, dipping 30° east: straight below the site the plane is 5 tan 30° deep,
     // and the shortest distance to it is 5 sin 30° = 2.5 km (perpendicular to the plane).
-    const dipping = faultKm(
-      [
-        [-5, -30],
-        [-5, 30],
-      ],
-      { id: 'dipping', dipDeg: 30, dipDirectionDeg: 90, upperDepthKm: 0, lowerDepthKm: 10 },
-    );
     const [found] = nearestFaults([dipping], FRAME, site, 1);
     expectClose(
       found?.depthBelowKm ?? NaN,

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { FaultSource, Study } from '../../../api/engine/model.ts';
 import { screenStudy } from '../../../api/engine/screen-study.ts';
 import { expectRelative } from '../../helpers/close.ts';
-import { FRAME, contouredKm, faultKm } from '../geometry/km-fixtures.ts';
+import { FRAME, arcKm, contouredKm, faultKm } from '../geometry/km-fixtures.ts';
 import { testSettings } from '../../helpers/test-settings.ts';
 
 /**
@@ -113,11 +113,7 @@ describe('the mesh of a bent interface converges as its spacing halves', () => {
   // machines' rounding and still fails for a mesh that misses the bend.
   const depths = [10, 15, 20, 25, 30, 35, 40, 45, 50];
   const offsetAt = (d: number) => 100 * Math.sin(Math.acos((105 - d) / 100));
-  const arc = (radiusKm: number): [number, number][] =>
-    Array.from({ length: 81 }, (_, k) => {
-      const angle = ((-20 + 0.5 * k) * Math.PI) / 180;
-      return [-150 + radiusKm * Math.cos(angle), 50 + radiusKm * Math.sin(angle)];
-    });
+  const arc = (radiusKm: number) => arcKm([-150, 50], radiusKm, -20, 0.5);
   const slab = (meshSpacingKm: number): FaultSource => ({
     ...contouredKm(
       depths.map((d) => arc(150 + offsetAt(d))),

@@ -3,7 +3,7 @@ import { ruptureWork } from '../../../api/engine/hazard/rupture-work.ts';
 import { studyRuptureTable } from '../../../api/engine/hazard/study-rupture-table.ts';
 import type { Recurrence, Study } from '../../../api/engine/model.ts';
 import { discretiseStudy } from '../../../api/engine/ruptures/discretise.ts';
-import { SETTINGS, contouredKm, pointKm } from '../geometry/km-fixtures.ts';
+import { ONE_MODEL_PER_SETTING, SETTINGS, contouredKm, pointKm } from '../geometry/km-fixtures.ts';
 
 /*
  * The work budget (operations/work-budget.ts) counts what a screening sums at every site: each
@@ -48,11 +48,7 @@ const study: Study = {
     { ...slab, id: 'slab' },
     { ...pointKm(30, 30, WITH_ALTERNATIVES, 10), id: 'point' },
   ],
-  groundMotion: {
-    crustal: [{ model: 'BSSA14', weight: 1 }],
-    interface: [{ model: 'AGA16', weight: 1 }],
-    intraslab: [{ model: 'AGA16', weight: 1 }],
-  },
+  groundMotion: ONE_MODEL_PER_SETTING,
   settings: SETTINGS,
 };
 

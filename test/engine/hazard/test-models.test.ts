@@ -9,6 +9,7 @@ import {
   TWO_SETTING_BRANCHES,
   TWO_SETTING_MEASURES,
   TWO_SETTING_RUPTURES,
+  expectTwoSettingBranchRatesAt03g,
 } from './two-setting-tree.ts';
 
 /*
@@ -47,17 +48,6 @@ describe('scaledCornell (test scaffolding) on the fast path', () => {
       1e-9,
       'hand computation at 0.3 g (site-hazard.test.ts)',
     );
-    expectRelative(
-      curve.branches![0]!.annualRate[1]!,
-      0.0065400181466918296,
-      1e-9,
-      'hand computation, crustal=Cornell79 branch',
-    );
-    expectRelative(
-      curve.branches![1]!.annualRate[1]!,
-      0.008661259605819887,
-      1e-9,
-      'hand computation, crustal=Scaled branch',
-    );
+    expectTwoSettingBranchRatesAt03g(curve.branches!, 1e-9);
   });
 });

@@ -1,5 +1,6 @@
 import type { HazardMeasure } from '../../../api/engine/hazard/hazard-types.ts';
 import { cornell79 } from '../../../api/engine/motion/cornell79.ts';
+import { expectRelative } from '../../helpers/close.ts';
 import { pointRuptures } from './point-ruptures.ts';
 import { scaledCornell } from './test-models.ts';
 
@@ -38,3 +39,25 @@ export const TWO_SETTING_BRANCHES = {
 export const TWO_SETTING_MEASURES: HazardMeasure[] = [
   { key: 'PGA', measure: { kind: 'PGA' }, levels: [0.05, 0.3] },
 ];
+
+/**
+ * Checks the per-branch curves at 0.3 g against the hand computation λc Q(ε) + λi Q(εi) for each
+ * crustal branch, the interface branch added (untruncated; worked in site-hazard.test.ts).
+ */
+export function expectTwoSettingBranchRatesAt03g(
+  branches: readonly { annualRate: readonly number[] }[],
+  tolerance: number,
+): void {
+  expectRelative(
+    branches[0]!.annualRate[1]!,
+    0.0065400181466918296,
+    tolerance,
+    'hand computation, crustal=Cornell79 branch',
+  );
+  expectRelative(
+    branches[1]!.annualRate[1]!,
+    0.008661259605819887,
+    tolerance,
+    'hand computation, crustal=Scaled branch',
+  );
+}

@@ -4,7 +4,7 @@ import { screenStudy } from '../../../api/engine/screen-study.ts';
 import { expectRelative } from '../../helpers/close.ts';
 import { referenceScreening } from '../../helpers/reference-hazard/reference-screening.ts';
 import { allKindsStudy, ALL_KINDS_COMMUNITIES } from '../fixtures/all-kinds-study.ts';
-import { FRAME, zoneKm } from '../geometry/km-fixtures.ts';
+import { FRAME, ONE_MODEL_PER_SETTING, zoneKm } from '../geometry/km-fixtures.ts';
 import { boxRing } from '../../helpers/box-ring.ts';
 
 const site = (id: string, x: number, y: number): Community => {
@@ -26,11 +26,7 @@ function zoneStudy(zoneCellKm: number, communities: readonly Community[]): Study
     name: 'Zone refinement',
     communities,
     sources: [zone],
-    groundMotion: {
-      crustal: [{ model: 'BSSA14', weight: 1 }],
-      interface: [{ model: 'AGA16', weight: 1 }],
-      intraslab: [{ model: 'AGA16', weight: 1 }],
-    },
+    groundMotion: ONE_MODEL_PER_SETTING,
     settings: {
       measures: ['PGA'],
       levels: {},

@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { siteIntensity } from '../../../api/engine/intensity/site-intensity.ts';
+import {
+  siteIntensity,
+  type SiteIntensity,
+  type SiteIntensityOptions,
+} from '../../../api/engine/intensity/site-intensity.ts';
 import { INTENSITY_CONVERSIONS } from '../../../api/engine/intensity/worden2012.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
 
@@ -20,6 +24,22 @@ const k = 1e-4;
 const levels = [0.01, 0.03, 0.1, 0.3, 1];
 const annualRate = levels.map((x) => k * x ** -2.5);
 
+/** A curve read at 475 years, chances over 50 years unless `over` says otherwise. */
+const at475Years = (
+  curveLevels: number[],
+  curveRates: number[],
+  over: Partial<SiteIntensityOptions> = {},
+): SiteIntensity =>
+  siteIntensity({
+    levels: curveLevels,
+    annualRate: curveRates,
+    returnPeriodsYears: [475],
+    horizonsYears: [50],
+    ...over,
+  });
+const atYears = (r: SiteIntensity, returnPeriodYears: string) =>
+  r.intensity.atReturnPeriod[returnPeriodYears]!;
+
 describe('siteIntensity', () => {
   const result = siteIntensity({
     levels,
@@ -29,28 +49,18 @@ describe('siteIntensity', () => {
   });
 
   it('MMI at 475 years = 7.510133 (VII), at 2475 years = 8.571118 (IX, rounded)', () => {
-    const at475 = result.intensity.atReturnPeriod['475']!;
+    const at475 = atYears(result, '475');
     expectClose(at475.mmi!, 7.510133041880696, 1e-9, 'hand computation');
     expect([at475.roman, at475.fromMeasure]).toEqual(['VIII', 'PGA']);
-    expectClose(
-      result.intensity.atReturnPeriod['2475']!.mmi!,
-      8.571117800474884,
-      1e-9,
-      'hand computation',
-    );
-    expect(result.intensity.atReturnPeriod['2475']!.roman).toBe('IX');
+    expectClose(atYears(result, '2475').mmi!, 8.571117800474884, 1e-9, 'hand computation');
+    expect(atYears(result, '2475').roman).toBe('IX');
   });
 
   it('the rate of reaching MMI VIII with the scatter matches the closed form for a power-law curve', () => {
     // Levels 0.04–20 g on the upper segment, 60 per decade: the sum over the curve against the closed form.
     const wide = Array.from({ length: 163 }, (_, i) => 0.04 * 10 ** (i / 60));
     const wideRates = wide.map((x) => k * x ** -2.5);
-    const high = siteIntensity({
-      levels: wide,
-      annualRate: wideRates,
-      returnPeriodsYears: [475],
-      horizonsYears: [1],
-    });
+    const high = at475Years(wide, wideRates, { horizonsYears: [1] });
     const yM = 10 ** (9.1 / 3.7) / 980.665;
     const beta = (0.73 * Math.LN10) / 3.7;
     const expected = k * yM ** -2.5 * Math.exp((6.25 * beta * beta) / 2);
@@ -80,21 +90,16 @@ describe('siteIntensity', () => {
 
   it('from PGV: the PGV relation and its σ 0.65, recorded', () => {
     const pgvLevels = [1, 3, 10, 30, 100, 300];
-    const pgv = siteIntensity({
-      levels: pgvLevels,
-      annualRate: pgvLevels.map((v) => 1e-2 * v ** -2),
-      returnPeriodsYears: [475],
-      horizonsYears: [50],
-      conversion: INTENSITY_CONVERSIONS.PGV,
-    });
+    const pgvRates = pgvLevels.map((v) => 1e-2 * v ** -2);
+    const pgv = at475Years(pgvLevels, pgvRates, { conversion: INTENSITY_CONVERSIONS.PGV });
     // 475-year PGV = (1e-2 × 475)^(1/2) = 2.179449 cm/s: log10 = 0.338347 <= t1, MMI = 3.78 + 1.47 × 0.338347 = 4.277370.
     expectClose(
-      pgv.intensity.atReturnPeriod['475']!.mmi!,
+      atYears(pgv, '475').mmi!,
       4.27737,
       1e-5,
       'Worden 2012 PGV relation, hand computation',
     );
-    expect(pgv.intensity.atReturnPeriod['475']!.fromMeasure).toBe('PGV');
+    expect(atYears(pgv, '475').fromMeasure).toBe('PGV');
     expect(pgv.intensity.conversion?.sigmaMmi).toBe(0.65);
   });
 
@@ -104,12 +109,8 @@ describe('siteIntensity', () => {
   });
 
   it('a curve too low to reach the 475-year rate gives null MMI and the inform band', () => {
-    const low = siteIntensity({
-      levels,
-      annualRate: annualRate.map((r) => r * 1e-4),
-      returnPeriodsYears: [475],
-      horizonsYears: [50],
-    });
+    const lowRates = annualRate.map((r) => r * 1e-4);
+    const low = at475Years(levels, lowRates);
     expect(low.intensity.atReturnPeriod['475']).toEqual({
       mmi: null,
       roman: null,
@@ -119,12 +120,7 @@ describe('siteIntensity', () => {
   });
 
   it('a curve above its highest level at 475 years bands from that level (a lower bound) and says so', () => {
-    const high = siteIntensity({
-      levels: [0.01, 0.05],
-      annualRate: [0.5, 0.1],
-      returnPeriodsYears: [475],
-      horizonsYears: [50],
-    });
+    const high = at475Years([0.01, 0.05], [0.5, 0.1]);
     expect(high.band.mmi475).toBeNull();
     expect(high.band.id).toBe('inform'); // MMI at 0.05 g is 4.7: a lower bound only
     expect(high.warnings.some((w) => w.includes('475-year'))).toBe(true);

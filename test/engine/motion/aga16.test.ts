@@ -52,6 +52,13 @@ function input({
   };
 }
 
+/** An intraslab M 7 case at the given depth, distance (Rhypo) and Vs30. */
+const intraslabM7 = (where: Required<Omit<CaseOptions, 'setting' | 'magnitude'>>): CaseOptions => ({
+  setting: 'intraslab',
+  magnitude: 7,
+  ...where,
+});
+
 const lnAt = (options: CaseOptions, measure: Measure): number =>
   aga16.predict(input(options), measure).lnMedian;
 const rowAt = (periodS: number): Aga16Row =>
@@ -62,6 +69,8 @@ const rowAt = (periodS: number): Aga16Row =>
 // Tolerance 1e-5 ln units: the hand values are rounded to 6 decimals.
 const HAND = `${PAPER}, equation (from memory) and Table 3; terms evaluated by hand`;
 const HAND_TOLERANCE = 1e-5;
+const expectByHand = (actual: number, expected: number): void =>
+  expectClose(actual, expected, HAND_TOLERANCE, HAND);
 
 describe('AGA16 worked examples', () => {
   it('interface M 8, Rrup 100 km, Vs30 1000 m/s, PGA, term by term', () => {
@@ -73,77 +82,40 @@ describe('AGA16 worked examples', () => {
     };
     // θ1 + θ4ΔC1 = 4.2203 + 0.9·0.2 = 4.4003; f_mag = 0.9·(8 − 8.0) − 0.0135·(10 − 8)² = −0.054;
     // spreading (−1.35 + 0.1·0.2)·ln(100 + 10e^0.8) = −1.33·ln(122.2554) = −6.392129; θ6R = −0.12.
-    expectClose(
-      aga16LnMedianAtVlin(AGA16_TABLE.pga, scenario),
-      4.4003 - 6.392129 - 0.12 - 0.054,
-      HAND_TOLERANCE,
-      HAND,
-    );
+    expectByHand(aga16LnMedianAtVlin(AGA16_TABLE.pga, scenario), 4.4003 - 6.392129 - 0.12 - 0.054);
     // Linear branch at Vs30 1000 ≥ Vlin 865.1: (0.980 − 1.186·1.18)·ln(1000/865.1) = −0.060787.
-    expectClose(aga16SiteTerm(AGA16_TABLE.pga, 1000, 0.1), -0.060787, HAND_TOLERANCE, HAND);
-    expectClose(
-      lnAt({ magnitude: 8, distanceKm: 100, vs30: 1000 }, PGA),
-      -2.226616,
-      HAND_TOLERANCE,
-      HAND,
-    );
+    expectByHand(aga16SiteTerm(AGA16_TABLE.pga, 1000, 0.1), -0.060787);
+    expectByHand(lnAt({ magnitude: 8, distanceKm: 100, vs30: 1000 }, PGA), -2.226616);
   });
 
   it('interface M 9, Rrup 100 km, Vs30 760 m/s, PGA: above the magnitude break, nonlinear site', () => {
     // f_mag = 0·(9 − 8) − 0.0135 = −0.0135; spreading −1.23·ln(100 + 10e^1.2) = −6.016988;
     // PGA1000 = 0.163495 g; f_site = 0.980·ln(760/865.1) + 1.186·ln(2.043495) − 1.186·ln(0.163495 + 1.88·(760/865.1)^1.18) = 0.038767.
-    expectClose(
-      lnAt({ magnitude: 9, distanceKm: 100, vs30: 760 }, PGA),
-      -1.711422,
-      HAND_TOLERANCE,
-      HAND,
-    );
+    expectByHand(lnAt({ magnitude: 9, distanceKm: 100, vs30: 760 }, PGA), -1.711422);
   });
 
   it('interface M 8, Rrup 50 km, Vs30 400 m/s = Vlin, SA(1.0): site term zero', () => {
     // ΔC1(1 s) = 0: θ1 = 2.7981; f_mag = θ5·0.2 − 0.0363·4 = −0.1452; spreading (−0.85 + 0.02)·ln(50 + 10e^0.8) = −3.552572; θ6R = −0.31.
-    expectClose(
-      lnAt({ magnitude: 8, distanceKm: 50, vs30: 400 }, sa(1)),
-      -1.209672,
-      HAND_TOLERANCE,
-      HAND,
-    );
+    expectByHand(lnAt({ magnitude: 8, distanceKm: 50, vs30: 400 }, sa(1)), -1.209672);
   });
 
   it('interface M 8.5, Rrup 150 km, Vs30 300 m/s, SA(3.0)', () => {
     // ΔC1(3 s) = −0.2, break M 7.6: θ1 + θ4ΔC1 = 0.4643; f_mag = −0.0798·1.5² = −0.17955; spreading −2.950994; θ6R = −0.96; f_site = 0.193610.
-    expectClose(
-      lnAt({ magnitude: 8.5, distanceKm: 150, vs30: 300 }, sa(3)),
-      -3.432634,
-      HAND_TOLERANCE,
-      HAND,
-    );
+    expectByHand(lnAt({ magnitude: 8.5, distanceKm: 150, vs30: 300 }, sa(3)), -3.432634);
   });
 
   it('intraslab M 7 at 60 km depth, Rhypo 70 km, Vs30 760 m/s, PGA and SA(0.2)', () => {
     // ΔC1 = −0.3, break M 7.5: θ1 + θ4ΔC1 = 3.9503; f_mag = 0.9·(−0.5) − 0.0135·9 = −0.5715;
     // spreading (−1.35 − 0.40 − 0.08)·ln(70 + 10e^0.4) = −8.128291; θ6R = −0.084; θ10 = 3.12; f_depth = 0.
-    const slab = {
-      setting: 'intraslab' as const,
-      magnitude: 7,
-      distanceKm: 70,
-      vs30: 760,
-      hypoDepthKm: 60,
-    };
-    expectClose(lnAt(slab, PGA), -1.675254, HAND_TOLERANCE, HAND);
-    expectClose(lnAt(slab, sa(0.2)), -0.829606, HAND_TOLERANCE, HAND);
+    const slab = intraslabM7({ hypoDepthKm: 60, distanceKm: 70, vs30: 760 });
+    expectByHand(lnAt(slab, PGA), -1.675254);
+    expectByHand(lnAt(slab, sa(0.2)), -0.829606);
   });
 
   it('intraslab M 7 at 100 km depth, Rhypo 110 km, Vs30 250 m/s, SA(0.2): depth term and soft soil', () => {
     // f_depth = 0.0129·(100 − 60) = 0.516; PGA1000 = 0.134176 g; f_site = 0.199344.
-    const slab = {
-      setting: 'intraslab' as const,
-      magnitude: 7,
-      distanceKm: 110,
-      vs30: 250,
-      hypoDepthKm: 100,
-    };
-    expectClose(lnAt(slab, sa(0.2)), -0.884673, HAND_TOLERANCE, HAND);
+    const slab = intraslabM7({ hypoDepthKm: 100, distanceKm: 110, vs30: 250 });
+    expectByHand(lnAt(slab, sa(0.2)), -0.884673);
   });
 });
 

@@ -74,30 +74,27 @@ describe('ASK14: the coefficient table', () => {
 });
 
 describe('ASK14: the equation by hand', () => {
+  // Terms worked by hand from the paper's equations: 1e-12 covers rounding only.
+  const expectByHand = (actual: number, expected: number, what: string): void =>
+    expectClose(actual, expected, 1e-12, what);
+
   it('tapers the hanging-wall term as the paper gives it', () => {
     // T1 (δ 45°) = 1; T2 (M 6) = 1 + 0.2(−0.5) − 0.8(0.25) = 0.7; T4 (Ztor 2 km) = 0.96: 0.672.
-    expectClose(
+    expectByHand(
       ask14HangingWallScale(6, 45, 2),
       0.672,
-      1e-12,
       'Abrahamson, Silva & Kamai (2014) T1 T2 T4, by hand',
     );
     expect(ask14HangingWallScale(5.5, 45, 2)).toBe(0);
     expect(ask14HangingWallScale(7, 45, 10)).toBe(0);
     // R1 10 km: T3 at Rx 5 = 0.25 + 0.75 − 0.1875 = 0.8125; at Rx 20 (R2 30) = 0.5; T5 fades 5 km beyond Ry1 = Rx tan 20°.
-    expectClose(ask14HangingWallTaper(10, 5, 0), 0.8125, 1e-12, 'ASK14 T3 below R1, by hand');
-    expectClose(
-      ask14HangingWallTaper(10, 20, 0),
-      0.5,
-      1e-12,
-      'ASK14 T3 between R1 and R2, by hand',
-    );
+    expectByHand(ask14HangingWallTaper(10, 5, 0), 0.8125, 'ASK14 T3 below R1, by hand');
+    expectByHand(ask14HangingWallTaper(10, 20, 0), 0.5, 'ASK14 T3 between R1 and R2, by hand');
     expect(ask14HangingWallTaper(10, 30, 0)).toBe(0);
     const ry1 = 5 * Math.tan((20 * Math.PI) / 180);
-    expectClose(
+    expectByHand(
       ask14HangingWallTaper(10, 5, ry1 + 2.5),
       0.8125 * 0.5,
-      1e-12,
       'ASK14 T5 halfway, by hand',
     );
     expect(ask14HangingWallTaper(10, 5, ry1 + 5)).toBe(0);

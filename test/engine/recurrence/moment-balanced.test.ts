@@ -34,14 +34,14 @@ const recurrence = (shape: MomentBalancedRecurrence['shape']): MomentBalancedRec
   shearModulusPa: 3e10,
 });
 
+/** The 0.1-unit bins of a shape over AREA_KM2. */
+const bins = (shape: MomentBalancedRecurrence['shape']) =>
+  magnitudeBins(recurrence(shape), { magnitudeStep: 0.1 }, AREA_KM2);
+
 describe('moment-balanced rates', () => {
   for (const shape of ['gutenberg-richter', 'characteristic'] as const) {
     it(`${shape}: the bins release μ A s`, () => {
-      const { magnitudes, annualRates } = magnitudeBins(
-        recurrence(shape),
-        { magnitudeStep: 0.1 },
-        AREA_KM2,
-      );
+      const { magnitudes, annualRates } = bins(shape);
       const released = annualRates.reduce((s, r, i) => s + r * m0(magnitudes[i] as number), 0);
       expectRelative(
         released,
@@ -53,11 +53,7 @@ describe('moment-balanced rates', () => {
   }
 
   it('gutenberg-richter: the continuous truncated exponential releases μ A s within 0.5%', () => {
-    const { annualRates } = magnitudeBins(
-      recurrence('gutenberg-richter'),
-      { magnitudeStep: 0.1 },
-      AREA_KM2,
-    );
+    const { annualRates } = bins('gutenberg-richter');
     const n0 = annualRates.reduce((s, r) => s + r, 0);
     const density = (m: number): number =>
       (beta * Math.exp(-beta * (m - 5))) / (1 - Math.exp(-beta * 2.5));
@@ -70,11 +66,7 @@ describe('moment-balanced rates', () => {
   });
 
   it('characteristic: the continuous Youngs & Coppersmith density releases μ A s within 0.5%', () => {
-    const { annualRates } = magnitudeBins(
-      recurrence('characteristic'),
-      { magnitudeStep: 0.1 },
-      AREA_KM2,
-    );
+    const { annualRates } = bins('characteristic');
     const n0 = annualRates.reduce((s, r) => s + r, 0);
     const d = 1 - Math.exp(-beta * 2);
     const c2 = (beta * Math.exp(-beta * 1) * 0.5) / d;

@@ -4,7 +4,13 @@ import { frameForStudy } from '../../../api/engine/geometry/projection.ts';
 import type { Study } from '../../../api/engine/model.ts';
 import { screenStudy } from '../../../api/engine/screen-study.ts';
 import { expectClose } from '../../helpers/close.ts';
-import { FRAME, SETTINGS, contouredKm, zoneKm } from '../geometry/km-fixtures.ts';
+import {
+  FRAME,
+  ONE_MODEL_PER_SETTING,
+  SETTINGS,
+  contouredKm,
+  zoneKm,
+} from '../geometry/km-fixtures.ts';
 
 /*
  * A plane dipping 45° east from 5 km depth at x = 0 (contours every 10 km of depth, 10 km
@@ -55,11 +61,7 @@ const study: Study = {
   name: 'depths',
   communities: [{ id: 'c', name: 'c', lon, lat, vs30: 400, vs30Basis: 'measured', coastal: false }],
   sources: [slab, following, listed, { ...zoneKm([square], RECURRENCE), id: 'one-depth' }],
-  groundMotion: {
-    crustal: [{ model: 'BSSA14', weight: 1 }],
-    interface: [{ model: 'AGA16', weight: 1 }],
-    intraslab: [{ model: 'AGA16', weight: 1 }],
-  },
+  groundMotion: ONE_MODEL_PER_SETTING,
   settings: SETTINGS,
 };
 

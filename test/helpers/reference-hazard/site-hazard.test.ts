@@ -5,6 +5,7 @@ import {
   TWO_SETTING_BRANCHES,
   TWO_SETTING_MEASURES,
   TWO_SETTING_RUPTURES,
+  expectTwoSettingBranchRatesAt03g,
 } from '../../engine/hazard/two-setting-tree.ts';
 import { expectRelative } from '../close.ts';
 
@@ -41,18 +42,7 @@ describe('siteHazard: logic tree over two settings (hand computation)', () => {
       ['crustal=Cornell79, interface=Trench2x', 0.6],
       ['crustal=Scaled, interface=Trench2x', 0.4],
     ]);
-    expectRelative(
-      curve.branches![0]!.annualRate[1]!,
-      0.0065400181466918296,
-      1e-12,
-      'hand computation',
-    );
-    expectRelative(
-      curve.branches![1]!.annualRate[1]!,
-      0.008661259605819887,
-      1e-12,
-      'hand computation',
-    );
+    expectTwoSettingBranchRatesAt03g(curve.branches!, 1e-12);
   });
 
   it("summarises ruptures outside a model's validity (the interface rupture is at 250 km, past 200 km)", () => {

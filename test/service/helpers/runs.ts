@@ -1,4 +1,5 @@
 import { expect } from 'vitest';
+import { INTERRUPTED_MESSAGE } from '../../../api/store/run-repository.ts';
 import type { ServiceProcess } from './service-process.ts';
 import { waitFor } from './service-process.ts';
 
@@ -42,12 +43,27 @@ export async function waitForStatus(
   id: string,
   statuses: readonly string[] = FINISHED,
 ): Promise<RunAnswer> {
-  const run = await waitFor(
-    () => getRun(service, id),
-    (r) => statuses.includes(r.status),
-  );
-  expect(statuses, `run ${id} stayed ${run.status}`).toContain(run.status);
-  return run;
+  return waitForAnswer(`run ${id}`, () => getRun(service, id), statuses);
+}
+
+/** Polls `get` until the answer (a run or a map, named by `what`) reaches one of `statuses`. */
+export async function waitForAnswer<T extends { status: string }>(
+  what: string,
+  get: () => Promise<T>,
+  statuses: readonly string[],
+): Promise<T> {
+  const answer = await waitFor(get, (a) => statuses.includes(a.status));
+  expect(statuses, `${what} stayed ${answer.status}`).toContain(answer.status);
+  return answer;
+}
+
+/** Checks a run or map answer that a stop or crash cut short: interrupted, saying so, no provenance. */
+export function expectInterrupted(answer: unknown): void {
+  expect(answer).toMatchObject({
+    status: 'interrupted',
+    error: INTERRUPTED_MESSAGE,
+    provenance: null,
+  });
 }
 
 /** The id of the demo study saved on first start. */

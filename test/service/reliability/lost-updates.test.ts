@@ -73,6 +73,20 @@ async function raceWithPut(
   return (await pending).status;
 }
 
+/** The editor's community form for a coastal community. */
+const coastalCommunityForm = (id: string, name: string, lon: string, lat: string, vs30: string) =>
+  new URLSearchParams({ id, name, lon, lat, vs30, coastal: 'true' });
+
+/** raceWithPut for a form, encoded with the content type a browser gives it. */
+async function raceFormWithPut(
+  id: string,
+  path: string,
+  form: FormData | URLSearchParams,
+): Promise<number> {
+  const { bytes, type } = await bytesOf(form);
+  return raceWithPut(id, path, bytes, type);
+}
+
 describe('no lost update while a body is on its way', () => {
   test('API communities import', async () => {
     const id = newStudy();
@@ -100,21 +114,10 @@ describe('no lost update while a body is on its way', () => {
 
   test('editor: add a community', async () => {
     const id = newStudy();
-    const form = await bytesOf(
-      new URLSearchParams({
-        id: 'second-cove',
-        name: 'Second Cove',
-        lon: '-140.1',
-        lat: '-47.3',
-        vs30: '400',
-        coastal: 'true',
-      }),
-    );
-    const status = await raceWithPut(
+    const status = await raceFormWithPut(
       id,
       `/studies/${id}/edit/new-community`,
-      form.bytes,
-      form.type,
+      coastalCommunityForm('second-cove', 'Second Cove', '-140.1', '-47.3', '400'),
     );
     expect(status).toBe(303);
     expect(savedName(id)).toBe('Renamed meanwhile');
@@ -123,21 +126,10 @@ describe('no lost update while a body is on its way', () => {
 
   test('editor: edit a community', async () => {
     const id = newStudy();
-    const form = await bytesOf(
-      new URLSearchParams({
-        id: 'test-cove',
-        name: 'Test Cove',
-        lon: '-140.2',
-        lat: '-47.4',
-        vs30: '650',
-        coastal: 'true',
-      }),
-    );
-    const status = await raceWithPut(
+    const status = await raceFormWithPut(
       id,
       `/studies/${id}/edit/communities/test-cove`,
-      form.bytes,
-      form.type,
+      coastalCommunityForm('test-cove', 'Test Cove', '-140.2', '-47.4', '650'),
     );
     expect(status).toBe(303);
     expect(savedName(id)).toBe('Renamed meanwhile');
@@ -146,14 +138,10 @@ describe('no lost update while a body is on its way', () => {
 
   test('editor: sources upload', async () => {
     const id = newStudy();
-    const form = await bytesOf(
-      fileForm('sources.geojson', 'application/geo+json', JSON.stringify(sourcesCollection())),
-    );
-    const status = await raceWithPut(
+    const status = await raceFormWithPut(
       id,
       `/studies/${id}/edit/sources-geojson`,
-      form.bytes,
-      form.type,
+      fileForm('sources.geojson', 'application/geo+json', JSON.stringify(sourcesCollection())),
     );
     expect(status).toBe(303);
     expect(savedName(id)).toBe('Renamed meanwhile');

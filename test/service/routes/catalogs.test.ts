@@ -44,6 +44,10 @@ const raw = (method: string, type: string, body: string): RequestInit => ({
   body,
 });
 
+/** PUTs a catalog body of the given content type to a study's catalog (`query` after the path). */
+const putCatalog = (studyId: string, type: string, body: string, query = '') =>
+  app().request(`/api/studies/${studyId}/catalog${query}`, raw('PUT', type, body));
+
 async function newStudy(): Promise<string> {
   const response = await app().request('/api/studies', jsonInit('POST', feltStudy()));
   expect(response.status).toBe(201);
@@ -75,17 +79,23 @@ interface CatalogAnswer {
   }[];
 }
 
+/** A new study with a catalog PUT to it, which must be answered 201 (created). */
+async function newStudyWithCatalog(type: string, catalog: string) {
+  const id = await newStudy();
+  const response = await putCatalog(id, type, catalog);
+  expect(response.status).toBe(201);
+  return { id, response, body: (await response.json()) as CatalogAnswer };
+}
+
 describe('PUT /api/studies/:id/catalog', () => {
   it('attaches a CSV catalog (201, Location), then replaces it (200)', async () => {
-    const id = await newStudy();
-    const first = await app().request(
-      `/api/studies/${id}/catalog`,
-      raw('PUT', 'text/csv; charset=utf-8', FELT_CATALOG_CSV),
-    );
-    expect(first.status).toBe(201);
+    const {
+      id,
+      response: first,
+      body,
+    } = await newStudyWithCatalog('text/csv; charset=utf-8', FELT_CATALOG_CSV);
     expectSecurityHeaders(first);
     expect(first.headers.get('location')).toBe(`/api/studies/${id}/catalog`);
-    const body = (await first.json()) as CatalogAnswer;
     expect(body).toMatchObject({
       studyId: id,
       fileName: 'catalog.csv',
@@ -98,22 +108,18 @@ describe('PUT /api/studies/:id/catalog', () => {
         study: `/api/studies/${id}`,
       },
     });
-    const second = await app().request(
-      `/api/studies/${id}/catalog?fileName=network%202024.csv`,
-      raw('PUT', 'text/csv', FIT_CATALOG_CSV),
+    const second = await putCatalog(
+      id,
+      'text/csv',
+      FIT_CATALOG_CSV,
+      '?fileName=network%202024.csv',
     );
     expect(second.status).toBe(200);
     expect(((await second.json()) as CatalogAnswer).fileName).toBe('network 2024.csv');
   });
 
   it('takes FDSN event text as text/plain and reports the rejected lines', async () => {
-    const id = await newStudy();
-    const response = await app().request(
-      `/api/studies/${id}/catalog`,
-      raw('PUT', 'text/plain', fixture('small-catalog.txt')),
-    );
-    expect(response.status).toBe(201);
-    const body = (await response.json()) as CatalogAnswer;
+    const { body } = await newStudyWithCatalog('text/plain', fixture('small-catalog.txt'));
     // test/catalog/fixtures/small-catalog.txt: lines 4 (30 February), 5 (latitude −95) and 6 (too few fields) are bad.
     expect(body).toMatchObject({
       format: 'fdsn-text',
@@ -130,13 +136,10 @@ describe('PUT /api/studies/:id/catalog', () => {
   });
 
   it('takes QuakeML as application/xml, and JSON { fileName, format, text }', async () => {
-    const id = await newStudy();
-    const xml = await app().request(
-      `/api/studies/${id}/catalog`,
-      raw('PUT', 'application/xml', fixture('small-catalog.quakeml')),
+    const { id, body: quakeml } = await newStudyWithCatalog(
+      'application/xml',
+      fixture('small-catalog.quakeml'),
     );
-    expect(xml.status).toBe(201);
-    const quakeml = (await xml.json()) as CatalogAnswer;
     // test/catalog/fixtures/small-catalog.quakeml: events 1, 2 and 5 (no depth) load; 3 (no such origin) and 4 (a quarry blast) do not.
     expect(quakeml).toMatchObject({
       format: 'quakeml',
@@ -161,7 +164,7 @@ describe('PUT /api/studies/:id/catalog', () => {
 
   it('validates before writing: bad catalogs are 4xx naming the line, and the attached catalog stays', async () => {
     const id = await newStudy();
-    await app().request(`/api/studies/${id}/catalog`, raw('PUT', 'text/csv', FELT_CATALOG_CSV));
+    await putCatalog(id, 'text/csv', FELT_CATALOG_CSV);
     const cases: [RequestInit, number, string[]][] = [
       [raw('PUT', 'text/csv', 'when,where\n2001,x\n'), 422, ['catalog[line 1]']],
       [
@@ -202,18 +205,12 @@ describe('PUT /api/studies/:id/catalog', () => {
           'expected the catalog text (QuakeML 1.2, FDSN event text or our CSV) as a string, got 42',
       },
     ]);
-    const unsupported = await app().request(
-      `/api/studies/${id}/catalog`,
-      raw('PUT', 'application/octet-stream', FELT_CATALOG_CSV),
-    );
+    const unsupported = await putCatalog(id, 'application/octet-stream', FELT_CATALOG_CSV);
     expect(unsupported.headers.get('accept')).toBe(
       'application/xml, text/xml, text/plain, text/csv, application/json',
     );
     const badName = await expectError(
-      await app().request(
-        `/api/studies/${id}/catalog?fileName=a%07b.csv`,
-        raw('PUT', 'text/csv', FIT_CATALOG_CSV),
-      ),
+      await putCatalog(id, 'text/csv', FIT_CATALOG_CSV, '?fileName=a%07b.csv'),
       422,
     );
     expect(badName.issues).toEqual([
@@ -233,10 +230,7 @@ describe('PUT /api/studies/:id/catalog', () => {
 
   it('names the unknown study (404)', async () => {
     const body = await expectError(
-      await app().request(
-        '/api/studies/none-such/catalog',
-        raw('PUT', 'text/csv', FELT_CATALOG_CSV),
-      ),
+      await putCatalog('none-such', 'text/csv', FELT_CATALOG_CSV),
       404,
     );
     expect(body.error).toBe('no study with id "none-such"');
@@ -246,7 +240,7 @@ describe('PUT /api/studies/:id/catalog', () => {
 describe('GET and DELETE /api/studies/:id/catalog', () => {
   it('gives the summary and the events in the catalog CSV names; DELETE detaches it', async () => {
     const id = await newStudy();
-    await app().request(`/api/studies/${id}/catalog`, raw('PUT', 'text/csv', FIT_CATALOG_CSV));
+    await putCatalog(id, 'text/csv', FIT_CATALOG_CSV);
     const response = await app().request(`/api/studies/${id}/catalog`);
     expect(response.status).toBe(200);
     const body = (await response.json()) as CatalogAnswer;
@@ -278,7 +272,7 @@ describe('GET and DELETE /api/studies/:id/catalog', () => {
 
   it('goes with its study', async () => {
     const id = await newStudy();
-    await app().request(`/api/studies/${id}/catalog`, raw('PUT', 'text/csv', FIT_CATALOG_CSV));
+    await putCatalog(id, 'text/csv', FIT_CATALOG_CSV);
     expect((await app().request(`/api/studies/${id}`, { method: 'DELETE' })).status).toBe(204);
     const body = await expectError(await app().request(`/api/studies/${id}/catalog`), 404);
     expect(body.error).toBe(`no study with id "${id}"`);
@@ -332,10 +326,7 @@ function expectFeltAtCove(cove: FeltAnswer['communities'][number] | undefined): 
 describe('GET /api/studies/:id/felt', () => {
   it("gives each community's likely felt and strongly felt events", async () => {
     const id = await newStudy();
-    await app().request(
-      `/api/studies/${id}/catalog?fileName=felt.csv`,
-      raw('PUT', 'text/csv', FELT_CATALOG_CSV),
-    );
+    await putCatalog(id, 'text/csv', FELT_CATALOG_CSV, '?fileName=felt.csv');
     const response = await app().request(`/api/studies/${id}/felt`);
     expect(response.status).toBe(200);
     const body = (await response.json()) as FeltAnswer;
@@ -373,7 +364,7 @@ describe('GET /api/studies/:id/felt', () => {
     expect(none.error).toBe(
       `study "${id}" has no catalog attached; attach one with PUT /api/studies/${id}/catalog`,
     );
-    await app().request(`/api/studies/${id}/catalog`, raw('PUT', 'text/csv', FELT_CATALOG_CSV));
+    await putCatalog(id, 'text/csv', FELT_CATALOG_CSV);
     const community = await expectError(
       await app().request(`/api/studies/${id}/felt?community=nowhere`),
       404,

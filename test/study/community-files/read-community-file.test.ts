@@ -16,7 +16,22 @@ import {
 
 /** The two villages every format's fixture holds, where each file puts them. */
 const NORTH_COVE = { id: 'north-cove', name: 'North Cove', lon: -140.5, lat: -47.25 } as const;
+/** North Cove as the XLSX and KML files give it: Vs30 380 m/s measured, 300 people. */
+const NORTH_COVE_MEASURED_380 = {
+  ...NORTH_COVE,
+  vs30: 380,
+  vs30Basis: 'measured',
+  population: 300,
+} as const;
 const RIDGE_CAMP = { id: 'ridge-camp', name: 'Ridge Camp', lon: -140.75, lat: -47.5 } as const;
+
+/** Reads a file that must come out in `format` with no problem; gives its communities. */
+async function readWithoutProblems(bytes: Uint8Array, fileName: string, format: string) {
+  const file = await read(bytes, fileName);
+  expect(file.format).toBe(format);
+  expect(file.problems).toEqual([]);
+  return file.communities;
+}
 
 const utf8 = (s: string) => new TextEncoder().encode(s);
 
@@ -140,15 +155,10 @@ describe('communities from XLSX', () => {
       [null, null, null, null, null, null, null],
       ['Ridge Camp', `47°30'S`, '-140,75', 760, 40, 'no', null],
     ]);
-    const { communities, problems, format } = await read(bytes, 'villages.xlsx');
-    expect(format).toBe('XLSX');
-    expect(problems).toEqual([]);
+    const communities = await readWithoutProblems(bytes, 'villages.xlsx', 'XLSX');
     expect(communities).toEqual([
       {
-        ...NORTH_COVE,
-        vs30: 380,
-        vs30Basis: 'measured',
-        population: 300,
+        ...NORTH_COVE_MEASURED_380,
         coastal: true,
         details: { Clinic: 'weekly' },
       },
@@ -193,15 +203,10 @@ describe('communities from KML and KMZ', () => {
   ];
 
   it('reads placemarks: name, extended data, point; style left out', async () => {
-    const { communities, problems, format } = await read(utf8(kmlText(placemarks)), 'villages.kml');
-    expect(format).toBe('KML');
-    expect(problems).toEqual([]);
+    const communities = await readWithoutProblems(utf8(kmlText(placemarks)), 'villages.kml', 'KML');
     expect(communities).toEqual([
       {
-        ...NORTH_COVE,
-        vs30: 380,
-        vs30Basis: 'measured',
-        population: 300,
+        ...NORTH_COVE_MEASURED_380,
         coastal: false,
         details: { airstrip: 'grass, 600 m' },
       },
@@ -269,12 +274,11 @@ describe('communities from a zipped shapefile', () => {
 
   it('reads points in longitude and latitude with their attributes', async () => {
     const { shp, dbf } = pointShapefile(lonLats, fields, records);
-    const { communities, problems, format } = await read(
+    const communities = await readWithoutProblems(
       zipBytes({ 'villages.shp': shp, 'villages.dbf': dbf }),
       'villages.zip',
+      'shapefile',
     );
-    expect(format).toBe('shapefile');
-    expect(problems).toEqual([]);
     expect(communities.map((c) => [c.id, c.lon, c.lat, c.vs30, c.details])).toEqual([
       ['north-cove', -140.5, -47.25, 380, { SCHOOL: 'primary' }],
       ['ridge-camp', -140.75, -47.5, 760, undefined],
