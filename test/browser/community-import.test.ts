@@ -1,9 +1,8 @@
 import { join } from 'node:path';
-import type { BrowserContext, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { xlsxBytes } from '../study/community-files/fixtures.ts';
-import { ARTIFACTS, offlineContext, seriousAxeViolations } from './helpers/chromium.ts';
-import { browserService, sendFile } from './helpers/browser-service.ts';
+import { ARTIFACTS, seriousAxeViolations } from './helpers/chromium.ts';
+import { browserService, describeContext, sendFile } from './helpers/browser-service.ts';
 
 /**
  * A village workbook into the demo study from the editor in Chromium, at desktop and phone
@@ -23,40 +22,23 @@ const WORKBOOK = xlsxBytes([
   ['Upper Terrace', -47.35, -150.7, 'C', null],
 ]);
 
-const document = async (): Promise<string> =>
-  (await rig.service.fetch(`/api/studies/${rig.studyId}/document`)).text();
-
 for (const width of [1100, 390]) {
   describe(`a village workbook at ${width} px`, { timeout: 120_000 }, () => {
-    let context: BrowserContext;
-    let foreign: string[];
-    let page: Page;
-
-    beforeAll(async () => {
-      ({ context, foreignRequests: foreign } = await offlineContext(
-        rig.chromium.browser,
-        rig.service.url,
-        {
-          viewport: { width, height: 900 },
-        },
-      ));
-      page = await context.newPage();
-    });
-    afterAll(async () => {
-      await context.close();
+    const own = describeContext(rig, {
+      viewport: { width, height: 900 },
     });
 
     test("unrecognised columns are picked from the file's own, then the villages are saved", async () => {
-      const before = await document();
-      await page.goto(`${rig.service.url}/studies/${rig.studyId}/edit`);
-      await sendFile(page, 'communities', {
+      const before = await rig.document();
+      await own.page.goto(`${rig.service.url}/studies/${rig.studyId}/edit`);
+      await sendFile(own.page, 'communities', {
         name: 'villages.xlsx',
         mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
         text: WORKBOOK,
       });
-      await page.waitForSelector('#pick-lat');
-      expect(await document()).toBe(before);
-      expect(await page.locator('#pick-lat option').allTextContents()).toEqual([
+      await own.page.waitForSelector('#pick-lat');
+      expect(await rig.document()).toBe(before);
+      expect(await own.page.locator('#pick-lat option').allTextContents()).toEqual([
         '(choose a column)',
         'Village',
         'Pos S',
@@ -64,17 +46,17 @@ for (const width of [1100, 390]) {
         'Site class',
         'Clinic',
       ]);
-      await page.selectOption('#pick-lat', 'Pos S');
-      await page.selectOption('#pick-lon', 'Pos W');
-      await page.locator('#pick-lat').scrollIntoViewIfNeeded();
-      await page.screenshot({
+      await own.page.selectOption('#pick-lat', 'Pos S');
+      await own.page.selectOption('#pick-lon', 'Pos W');
+      await own.page.locator('#pick-lat').scrollIntoViewIfNeeded();
+      await own.page.screenshot({
         path: join(ARTIFACTS, `community-import-pick-${width}.png`),
         fullPage: false,
       });
-      const violations = await seriousAxeViolations(page);
+      const violations = await seriousAxeViolations(own.page);
       expect(violations, JSON.stringify(violations, null, 2)).toEqual([]);
-      await page.locator('form.column-pick button[type="submit"]').click();
-      await page.waitForURL(/\/edit\?saved=1(#|$)/);
+      await own.page.locator('form.column-pick button[type="submit"]').click();
+      await own.page.waitForURL(/\/edit\?saved=1(#|$)/);
       const csv = JSON.parse(await (await rig.service.fetch(`/api/studies/${rig.studyId}`)).text())
         .communitiesCsv as string;
       // 47°18'S = -47.3 and 150°54'W = -150.9 (degrees + minutes/60).
@@ -84,14 +66,14 @@ for (const width of [1100, 390]) {
         'upper-terrace,Upper Terrace,-150.7,-47.35,,C,,false,,',
       ]);
       expect(
-        await page
+        await own.page
           .locator('tr[data-community]')
           .evaluateAll((rows) => rows.map((r) => r.getAttribute('data-community'))),
       ).toEqual(['kelp-landing', 'upper-terrace']);
     });
 
     test('no request left the origin', () => {
-      expect(foreign).toEqual([]);
+      expect(own.foreignRequests).toEqual([]);
     });
   });
 }

@@ -1,7 +1,7 @@
 import type { ReturnPeriodStatus } from '../../api/engine/results.ts';
 import type { ServiceContext } from '../../api/operations/service-context.ts';
 import type { MapRunRecord } from '../../api/store/index.ts';
-import { RecentCache } from './recent-cache.ts';
+import { DoneRunCache } from './done-run-cache.ts';
 
 /**
  * Most grid points the overview draws as cells: beyond this the page (one SVG rect a point,
@@ -48,14 +48,9 @@ interface PointFeature {
  * parsed points are kept; the cache lives with the pages (study-pages.tsx), holding the few
  * most recent, as ResultsCache does for screenings.
  */
-export class MapLayerCache {
-  readonly #recent: RecentCache<MapLayer>;
-  constructor(readonly capacity = 4) {
-    this.#recent = new RecentCache(capacity);
-  }
-
-  get(ctx: ServiceContext, runId: string): MapLayer | undefined {
-    return this.#recent.get(runId, () => {
+export class MapLayerCache extends DoneRunCache<MapLayer> {
+  constructor(capacity = 4) {
+    super(capacity, (ctx, runId) => {
       const text = ctx.store.maps.geojson(runId);
       if (text === undefined) return undefined;
       const features = (JSON.parse(text) as { features: readonly PointFeature[] }).features;

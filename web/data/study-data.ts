@@ -12,7 +12,7 @@ import {
   type StoredInputs,
 } from '../../api/operations/study-input.ts';
 import type { RunRecord, StudyRecord } from '../../api/store/index.ts';
-import { RecentCache } from './recent-cache.ts';
+import { DoneRunCache } from './done-run-cache.ts';
 
 /** A saved study as the pages read it, in-process from the store. */
 export type StudyData =
@@ -88,14 +88,9 @@ export interface RunState {
  * Results of done runs never change (the store refuses it), so parsed results are kept by run
  * id; the cache lives with the pages (createPages), holding the few most recent.
  */
-export class ResultsCache {
-  readonly #recent: RecentCache<StudyResult>;
-  constructor(readonly capacity = 8) {
-    this.#recent = new RecentCache(capacity);
-  }
-
-  get(ctx: ServiceContext, runId: string): StudyResult | undefined {
-    return this.#recent.get(runId, () => {
+export class ResultsCache extends DoneRunCache<StudyResult> {
+  constructor(capacity = 8) {
+    super(capacity, (ctx, runId) => {
       const text = ctx.store.runs.results(runId);
       return text === undefined ? undefined : (JSON.parse(text) as StudyResult);
     });

@@ -17,7 +17,8 @@ import {
   type EditOutcome,
 } from '../data/study-edits.ts';
 import { CommunityFormView } from '../views/community-form-view.tsx';
-import { EditorView, type UploadProblem } from '../views/editor-view.tsx';
+import { EditorView } from '../views/editor-view.tsx';
+import type { UploadProblem } from '../views/upload-section.tsx';
 import { field, fileField, type PageKit, uploadedOrCarried } from './page-kit.ts';
 import { faultImportPages } from './fault-import-pages.tsx';
 import { motionPages } from './motion-pages.tsx';

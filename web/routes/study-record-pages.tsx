@@ -103,59 +103,50 @@ export function studyRecordPages(app: Hono, kit: PageKit): void {
     return c.redirect(`/studies/${created.value.id}/edit`, 303);
   });
 
-  app.get('/studies/:id/rename', (c) => {
-    const record = ctx.store.studies.get(c.req.param('id'));
-    if (!record) return notFound(c);
-    const study = { id: record.id, name: record.name };
-    return form(c, {
-      kind: 'rename',
-      action: `/studies/${record.id}/rename`,
-      study,
-      name: record.name,
-    });
-  });
-
-  app.post('/studies/:id/rename', async (c) => {
-    const id = c.req.param('id');
-    const name = field(await c.req.parseBody(), 'name') ?? '';
-    const renamed = attempt(() => renameStudy(ctx, id, readStudyName(name)));
-    if (renamed.ok && !renamed.value) return notFound(c);
-    if (!renamed.ok) {
-      const record = ctx.store.studies.get(id);
+  /**
+   * The rename and duplicate forms of the study of the path: `named` is the name the form
+   * starts with; a post applies `write` (undefined when there is no such study) and goes to
+   * the study it wrote, or shows the form again with the name's problems.
+   */
+  const nameForm = (
+    kind: 'rename' | 'duplicate',
+    named: (c: Context, name: string) => string,
+    write: (id: string, name: string) => { readonly id: string } | undefined,
+  ) => {
+    app.get(`/studies/:id/${kind}`, (c) => {
+      const record = ctx.store.studies.get(c.req.param('id'));
       if (!record) return notFound(c);
-      const study = { id, name: record.name };
-      const again = { kind: 'rename', action: `/studies/${id}/rename`, study, name } as const;
-      return form(c, { ...again, ...splitIssues(renamed.issues) }, 422);
-    }
-    return c.redirect(`/studies/${id}`, 303);
-  });
-
-  app.get('/studies/:id/duplicate', (c) => {
-    const record = ctx.store.studies.get(c.req.param('id'));
-    if (!record) return notFound(c);
-    const study = { id: record.id, name: record.name };
-    return form(c, {
-      kind: 'duplicate',
-      action: `/studies/${record.id}/duplicate`,
-      study,
-      name: kit.tr(c).t('duplicateStudy.name', { name: record.name }),
+      const study = { id: record.id, name: record.name };
+      const action = `/studies/${record.id}/${kind}`;
+      return form(c, { kind, action, study, name: named(c, record.name) });
     });
-  });
 
-  app.post('/studies/:id/duplicate', async (c) => {
-    const id = c.req.param('id');
-    const name = field(await c.req.parseBody(), 'name') ?? '';
-    const copied = attempt(() => duplicateStudy(ctx, id, readStudyName(name)));
-    if (copied.ok && !copied.value) return notFound(c);
-    if (!copied.ok) {
-      const record = ctx.store.studies.get(id);
-      if (!record) return notFound(c);
-      const study = { id, name: record.name };
-      const again = { kind: 'duplicate', action: `/studies/${id}/duplicate`, study, name } as const;
-      return form(c, { ...again, ...splitIssues(copied.issues) }, 422);
-    }
-    return c.redirect(`/studies/${copied.value?.id}`, 303);
-  });
+    app.post(`/studies/:id/${kind}`, async (c) => {
+      const id = c.req.param('id');
+      const name = field(await c.req.parseBody(), 'name') ?? '';
+      const written = attempt(() => write(id, readStudyName(name)));
+      if (written.ok && !written.value) return notFound(c);
+      if (!written.ok) {
+        const record = ctx.store.studies.get(id);
+        if (!record) return notFound(c);
+        const study = { id, name: record.name };
+        const again = { kind, action: `/studies/${id}/${kind}`, study, name };
+        return form(c, { ...again, ...splitIssues(written.issues) }, 422);
+      }
+      return c.redirect(`/studies/${written.value?.id}`, 303);
+    });
+  };
+
+  nameForm(
+    'rename',
+    (_c, name) => name,
+    (id, name) => renameStudy(ctx, id, name),
+  );
+  nameForm(
+    'duplicate',
+    (c, name) => kit.tr(c).t('duplicateStudy.name', { name }),
+    (id, name) => duplicateStudy(ctx, id, name),
+  );
 
   app.get('/studies/:id/delete', (c) => {
     const record = ctx.store.studies.get(c.req.param('id'));

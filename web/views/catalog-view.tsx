@@ -1,4 +1,5 @@
 import type { Child } from 'hono/jsx';
+import { StepActions } from '../components/step-actions.tsx';
 import { MAGNITUDE_RELATIONS } from '../../api/engine/catalog/magnitude-conversion.ts';
 import type { ZoneRecurrence } from '../../api/engine/catalog/zone-recurrence.ts';
 import type { InputIssue } from '../../api/engine/errors.ts';
@@ -299,14 +300,11 @@ export function CatalogView(props: CatalogViewProps) {
                   {tr.text('catalog.zoneResult', { summary: props.zoneFit.summary })}
                 </p>
               )}
-              <p class="form-actions">
-                <button type="submit" name="action" value="fit">
-                  {tr.text('catalog.zoneFit')}
-                </button>{' '}
-                <button type="submit" name="action" value="add" class="button-primary">
-                  {tr.text('catalog.zoneAdd')}
-                </button>
-              </p>
+              <StepActions
+                name="action"
+                check={{ value: 'fit', label: tr.text('catalog.zoneFit') }}
+                next={{ value: 'add', label: tr.text('catalog.zoneAdd') }}
+              />
             </form>
           )}
         </section>

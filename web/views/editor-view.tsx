@@ -3,7 +3,6 @@ import { sourceSanity } from '../../api/engine/sanity/source-sanity.ts';
 import type { InputIssue } from '../../api/engine/errors.ts';
 import type { Study } from '../../api/engine/model.ts';
 import type { StudyPart } from '../../api/study/load-study.ts';
-import type { ColumnPick } from '../data/community-import.ts';
 import { issueFeature, issueLine } from '../data/study-edits.ts';
 import type { PageContext } from '../layout/page-shell.tsx';
 import { StudyPage } from '../layout/titled-page.tsx';
@@ -14,18 +13,9 @@ import { ColumnPickForm } from './column-pick-view.tsx';
 import { DraftNotice } from './draft-notice.tsx';
 import { FieldProblems } from './field-problems.tsx';
 import { Notice } from '../components/notice.tsx';
-import { FileField } from '../components/form-rows.tsx';
-import { RowActions } from '../components/row-actions.tsx';
-import { DataTable, LabelledCell } from '../components/data-table.tsx';
-
-/** An upload that did not validate: which form, its problems, and the text (for the line view). */
-export interface UploadProblem {
-  readonly upload: 'communities' | 'sources';
-  readonly issues: readonly InputIssue[];
-  readonly text?: string;
-  /** Columns to pick, when a communities file's required columns were not recognised. */
-  readonly pick?: ColumnPick;
-}
+import { LabelledCell } from '../components/data-table.tsx';
+import { EditorListRow, EditorListSection } from './editor-list-section.tsx';
+import type { UploadProblem } from './upload-section.tsx';
 
 /** Warnings about the sources (engine/sanity/source-sanity.ts): shown, never a reason to refuse. */
 function SourceChecks(props: { tr: Translator; study: Study }) {
@@ -57,9 +47,6 @@ export interface EditorViewProps {
 
 /** The editor's map of the study, px: small, a preview of where the sources and communities are. */
 const PREVIEW_MAP = { width: 480, maxHeight: 360, padding: 24 } as const;
-
-/** Most lines of an uploaded CSV shown back with their problems. */
-const PREVIEW_LINES = 200;
 
 /** "Line 5, lat: expected a number ..." / "Feature 4 (vennick), dip: ..." / the path as it is. */
 export function describeIssue(
@@ -134,19 +121,14 @@ export function EditorView(props: EditorViewProps) {
       />
       <SourceChecks tr={tr} study={study} />
 
-      <section aria-labelledby="communities-heading">
-        <h2 id="communities-heading">{tr.text('editor.communities')}</h2>
-        <p>
-          <a class="button" href={`/studies/${studyId}/edit/new-community`}>
-            {tr.text('editor.add')}
-          </a>
-        </p>
-        <DataTable
-          tr={tr}
-          class="editor-table"
-          scroll
-          caption={tr.text('editor.communitiesCaption')}
-          columns={[
+      <EditorListSection
+        tr={tr}
+        studyId={studyId}
+        list="communities"
+        links={[{ path: 'new-community', text: 'editor.add' }]}
+        table={{
+          class: 'editor-table',
+          columns: [
             'editor.field.name',
             'editor.col.id',
             { key: 'editor.col.lon', numeric: true },
@@ -155,122 +137,88 @@ export function EditorView(props: EditorViewProps) {
             { key: 'editor.col.people', numeric: true },
             'editor.col.coastal',
             'editor.col.actions',
-          ]}
-        >
-          {study.communities.map((c) => (
-            <tr data-community={c.id}>
-              <th scope="row">{c.name}</th>
-              <LabelledCell tr={tr} column="editor.col.id">
-                <code>{c.id}</code>
-              </LabelledCell>
-              <LabelledCell tr={tr} column="editor.col.lon" numeric>
-                {String(c.lon)}
-              </LabelledCell>
-              <LabelledCell tr={tr} column="editor.col.lat" numeric>
-                {String(c.lat)}
-              </LabelledCell>
-              <LabelledCell tr={tr} column="editor.col.site">
-                {c.vs30Basis === 'measured'
-                  ? `${c.vs30} m/s`
-                  : c.vs30Proxy !== undefined
-                    ? tr.text('editor.siteProxy', {
-                        vs30: tr.number(c.vs30),
-                        siteClass: c.vs30Proxy.siteClass,
-                      })
-                    : `${c.siteClass} (${c.vs30} m/s)`}
-              </LabelledCell>
-              <LabelledCell tr={tr} column="editor.col.people" numeric>
-                {c.population === undefined ? '' : tr.number(c.population)}
-              </LabelledCell>
-              <td data-label={c.coastal ? tr.t('editor.col.coastal') : undefined}>
-                {c.coastal ? tr.text('editor.coastalYes') : ''}
-              </td>
-              <RowActions
-                href={`/studies/${studyId}/edit/communities/${encodeURIComponent(c.id)}`}
-                edit={tr.text('editor.edit', { name: c.name })}
-                remove={tr.text('editor.remove', { name: c.name })}
-              />
-            </tr>
-          ))}
-        </DataTable>
-      </section>
-
-      <UploadSection
-        tr={tr}
-        studyId={studyId}
-        upload="communities"
+          ],
+        }}
+        rows={study.communities.map((c) => (
+          <EditorListRow tr={tr} studyId={studyId} list="communities" item={c}>
+            <LabelledCell tr={tr} column="editor.col.lon" numeric>
+              {String(c.lon)}
+            </LabelledCell>
+            <LabelledCell tr={tr} column="editor.col.lat" numeric>
+              {String(c.lat)}
+            </LabelledCell>
+            <LabelledCell tr={tr} column="editor.col.site">
+              {c.vs30Basis === 'measured'
+                ? `${c.vs30} m/s`
+                : c.vs30Proxy !== undefined
+                  ? tr.text('editor.siteProxy', {
+                      vs30: tr.number(c.vs30),
+                      siteClass: c.vs30Proxy.siteClass,
+                    })
+                  : `${c.siteClass} (${c.vs30} m/s)`}
+            </LabelledCell>
+            <LabelledCell tr={tr} column="editor.col.people" numeric>
+              {c.population === undefined ? '' : tr.number(c.population)}
+            </LabelledCell>
+            <td data-label={c.coastal ? tr.t('editor.col.coastal') : undefined}>
+              {c.coastal ? tr.text('editor.coastalYes') : ''}
+            </td>
+          </EditorListRow>
+        ))}
         problem={csvProblem}
         describe={(i) => describeIssue(tr, i)}
-      >
-        {csvProblem?.pick && (
-          <ColumnPickForm
-            tr={tr}
-            action={`/studies/${studyId}/edit/communities-csv#upload-communities-heading`}
-            pick={csvProblem.pick}
-          />
-        )}
-      </UploadSection>
-
-      <section aria-labelledby="sources-heading">
-        <h2 id="sources-heading">{tr.text('editor.sources')}</h2>
-        <p>
-          <a class="button" href={`/studies/${studyId}/edit/new-source`}>
-            {tr.text('source.add')}
-          </a>{' '}
-          <a class="button" href={`/studies/${studyId}/edit/import-faults`}>
-            {tr.text('faults.link')}
-          </a>
-        </p>
-        {studyPoints(study).length > 0 && (
-          <figure class="editor-preview">
-            <StudyMap
+        afterUpload={
+          csvProblem?.pick && (
+            <ColumnPickForm
               tr={tr}
-              study={study}
-              frame={mapFrame(study, PREVIEW_MAP)}
-              idPrefix="editor-map"
-              labels={false}
+              action={`/studies/${studyId}/edit/communities-csv#upload-communities-heading`}
+              pick={csvProblem.pick}
             />
-            <figcaption>{tr.text('source.preview')}</figcaption>
-          </figure>
-        )}
-        <DataTable
-          tr={tr}
-          scroll
-          caption={tr.text('editor.sourcesCaption')}
-          columns={[
+          )
+        }
+      />
+
+      <EditorListSection
+        tr={tr}
+        studyId={studyId}
+        list="sources"
+        links={[
+          { path: 'new-source', text: 'source.add' },
+          { path: 'import-faults', text: 'faults.link' },
+        ]}
+        preview={
+          studyPoints(study).length > 0 && (
+            <figure class="editor-preview">
+              <StudyMap
+                tr={tr}
+                study={study}
+                frame={mapFrame(study, PREVIEW_MAP)}
+                idPrefix="editor-map"
+                labels={false}
+              />
+              <figcaption>{tr.text('source.preview')}</figcaption>
+            </figure>
+          )
+        }
+        table={{
+          columns: [
             'editor.col.source',
             'editor.col.id',
             'editor.col.kind',
             'editor.col.setting',
             'editor.col.actions',
-          ]}
-        >
-          {study.sources.map((s) => (
-            <tr data-source={s.id}>
-              <th scope="row">{s.name}</th>
-              <LabelledCell tr={tr} column="editor.col.id">
-                <code>{s.id}</code>
-              </LabelledCell>
-              <LabelledCell tr={tr} column="editor.col.kind">
-                {tr.text(`editor.kind.${s.kind}`)}
-              </LabelledCell>
-              <LabelledCell tr={tr} column="editor.col.setting">
-                {s.setting}
-              </LabelledCell>
-              <RowActions
-                href={`/studies/${studyId}/edit/sources/${encodeURIComponent(s.id)}`}
-                edit={tr.text('source.edit', { name: s.name })}
-                remove={tr.text('source.remove', { name: s.name })}
-              />
-            </tr>
-          ))}
-        </DataTable>
-      </section>
-
-      <UploadSection
-        tr={tr}
-        studyId={studyId}
-        upload="sources"
+          ],
+        }}
+        rows={study.sources.map((s) => (
+          <EditorListRow tr={tr} studyId={studyId} list="sources" item={s}>
+            <LabelledCell tr={tr} column="editor.col.kind">
+              {tr.text(`editor.kind.${s.kind}`)}
+            </LabelledCell>
+            <LabelledCell tr={tr} column="editor.col.setting">
+              {s.setting}
+            </LabelledCell>
+          </EditorListRow>
+        ))}
         problem={geoProblem}
         describe={(i) => describeIssue(tr, i, featureIds)}
       />
@@ -285,104 +233,5 @@ export function EditorView(props: EditorViewProps) {
         </p>
       </section>
     </StudyPage>
-  );
-}
-
-/** Where each of the editor's uploads posts, below the study's editor. */
-const UPLOAD_PATHS = { communities: 'communities-csv', sources: 'sources-geojson' } as const;
-
-/** One of the editor's uploads: its section, the form with the file, and the last file's problems. */
-function UploadSection(props: {
-  readonly tr: Translator;
-  readonly studyId: string;
-  readonly upload: UploadProblem['upload'];
-  readonly problem: UploadProblem | undefined;
-  readonly describe: (issue: InputIssue) => Child;
-  /** What follows the form. */
-  readonly children?: Child;
-}) {
-  const { tr, upload, problem } = props;
-  const heading = `upload-${upload}-heading`;
-  const problemsId = `${upload}-problems`;
-  const action = `/studies/${props.studyId}/edit/${UPLOAD_PATHS[upload]}#${heading}`;
-  return (
-    <section aria-labelledby={heading} class="upload">
-      <h2 id={heading}>{tr.text(`editor.upload.${upload}`)}</h2>
-      <form method="post" action={action} enctype="multipart/form-data">
-        <FileField
-          tr={tr}
-          upload={upload}
-          text={{ label: 'editor.upload.file', help: `editor.upload.${upload}Help` }}
-          problems={problem !== undefined}
-        >
-          {problem && (
-            <div class="upload-problems" data-upload={upload}>
-              <p class="problem-title">{tr.text('editor.problems')}</p>
-              <FieldProblems
-                tr={tr}
-                id={problemsId}
-                issues={problem.issues}
-                describe={props.describe}
-              />
-              {upload === 'communities' && problem.text !== undefined && (
-                <CsvLines tr={tr} text={problem.text} issues={problem.issues} />
-              )}
-            </div>
-          )}
-        </FileField>
-        <button type="submit">{tr.text('editor.upload.button')}</button>
-      </form>
-      {props.children}
-    </section>
-  );
-}
-
-/** The uploaded CSV's lines, each bad line with its problems beside it. */
-function CsvLines(props: {
-  readonly tr: Translator;
-  readonly text: string;
-  readonly issues: readonly InputIssue[];
-}) {
-  const { tr } = props;
-  const lines = props.text
-    .replace(/^\uFEFF/, '')
-    .split(/\r\n|\r|\n/)
-    .slice(0, PREVIEW_LINES);
-  const byLine = new Map<number, InputIssue[]>();
-  for (const issue of props.issues) {
-    const line = issueLine(issue.path);
-    if (line !== undefined) byLine.set(line, [...(byLine.get(line) ?? []), issue]);
-  }
-  return (
-    <DataTable
-      tr={tr}
-      class="csv-lines"
-      caption={tr.text('editor.csvPreview')}
-      columns={[{ key: 'editor.col.line', numeric: true }, 'editor.col.text', 'editor.col.problem']}
-    >
-      {lines.map((text, i) => {
-        const problems = byLine.get(i + 1) ?? [];
-        return (
-          <tr class={problems.length > 0 ? 'line-bad' : undefined} data-line={i + 1}>
-            <th scope="row" class="numeric">
-              {i + 1}
-            </th>
-            <td>
-              <code>{text}</code>
-            </td>
-            <td>
-              {tr.english(
-                problems
-                  .map(
-                    (p) =>
-                      p.path.split(`[line ${i + 1}]`)[1]?.replace(/^\./, '') + ': ' + p.message,
-                  )
-                  .join('; '),
-              )}
-            </td>
-          </tr>
-        );
-      })}
-    </DataTable>
   );
 }

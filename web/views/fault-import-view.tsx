@@ -1,4 +1,5 @@
 import type { InputIssue } from '../../api/engine/errors.ts';
+import { StepActions } from '../components/step-actions.tsx';
 import { TECTONIC_SETTINGS } from '../../api/engine/model.ts';
 import { DEFAULT_NUMBERS } from '../../api/study/fault-files/fault-defaults.ts';
 import { FAULT_FIELDS } from '../../api/study/fault-files/fault-fields.ts';
@@ -150,15 +151,20 @@ export function FaultImportView(props: FaultImportViewProps) {
               ))}
             </DataTable>
           )}
-          <p class="form-actions">
-            <button type="submit" name="step" value="check">
-              {tr.text('faults.check')}
-            </button>{' '}
-            <button type="submit" name="step" value="save" class="button-primary">
-              {tr.text('faults.save', { count: String(preview.file.records.length) })}
-            </button>{' '}
-            <a href={`/studies/${props.studyId}/edit`}>{tr.text('editor.cancel')}</a>
-          </p>
+          <StepActions
+            name="step"
+            check={{ value: 'check', label: tr.text('faults.check') }}
+            next={{
+              value: 'save',
+              label: tr.text('faults.save', { count: String(preview.file.records.length) }),
+            }}
+            after={
+              <>
+                {' '}
+                <a href={`/studies/${props.studyId}/edit`}>{tr.text('editor.cancel')}</a>
+              </>
+            }
+          />
         </form>
       )}
     </TitledPage>

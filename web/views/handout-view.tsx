@@ -67,14 +67,7 @@ export function HandoutView(props: HandoutViewProps) {
                   <h2 id="h-pictures">{tr.text('material.pictures')}</h2>
                   <IntensityStrip tr={tr} />
                 </section>
-                <VillageMapSection
-                  tr={tr}
-                  study={props.study}
-                  data={data}
-                  frame={props.frame}
-                  idPrefix="village-map"
-                  headingLevel={2}
-                />
+                <VillageMapSection sheet={props} idPrefix="village-map" />
                 {props.felt && props.felt.history.felt.length > 0 && (
                   <FeltList
                     tr={tr}
@@ -98,12 +91,7 @@ export function HandoutView(props: HandoutViewProps) {
           <tr>
             <td>
               <div class="handout-footer">
-                <PrintedFooter
-                  tr={tr}
-                  sheet="handout"
-                  provenance={props.provenance}
-                  printedAt={props.printedAt}
-                />
+                <PrintedFooter sheet="handout" of={props} />
               </div>
             </td>
           </tr>

@@ -90,22 +90,9 @@ export function PosterView(props: PosterViewProps) {
             </div>
           )}
         </section>
-        <VillageMapSection
-          tr={tr}
-          study={props.study}
-          data={data}
-          frame={props.frame}
-          idPrefix="poster-map"
-          headingLevel={2}
-        />
+        <VillageMapSection sheet={props} idPrefix="poster-map" />
         <footer class="poster-footer">
-          <PrintedFooter
-            tr={tr}
-            sheet="poster"
-            provenance={props.provenance}
-            printedAt={props.printedAt}
-            more={<> {tr.text('safety.local')}</>}
-          />
+          <PrintedFooter sheet="poster" of={props} more={<> {tr.text('safety.local')}</>} />
         </footer>
       </main>
     </PrintSheet>

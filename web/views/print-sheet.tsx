@@ -6,7 +6,6 @@ import type { PageContext } from '../layout/page-shell.tsx';
 import type { MapFrame } from '../maps/map-frame.ts';
 import { LanguageSwitch } from '../layout/language-switch.tsx';
 import type { TextKey } from '../text/text-key.ts';
-import type { Translator } from '../text/translator.ts';
 import { ProvenanceLine } from './community-view.tsx';
 
 /** What a printed sheet for one community is made from (handout, poster). */
@@ -100,22 +99,20 @@ export function PrintSheet(props: PrintSheetProps) {
  * come from, and when the sheet was printed (SAFETY.md: every printed page carries the caution).
  */
 export function PrintedFooter(props: {
-  readonly tr: Translator;
   readonly sheet: 'handout' | 'poster';
-  readonly provenance: Provenance;
-  /** When the sheet was made (ISO). */
-  readonly printedAt: string;
+  /** What the sheet is made from: its provenance and when it was printed. */
+  readonly of: CommunitySheetProps;
   readonly more?: Child;
 }) {
-  const { tr } = props;
+  const { tr } = props.of.page;
   return (
     <>
       <p class={`${props.sheet}-caution`}>
         <strong>{tr.text('caution.short')}</strong>
         {props.more}
       </p>
-      <ProvenanceLine tr={tr} provenance={props.provenance} />
-      <p class="printed">{tr.text('provenance.printed', { date: tr.date(props.printedAt) })}</p>
+      <ProvenanceLine tr={tr} provenance={props.of.provenance} />
+      <p class="printed">{tr.text('provenance.printed', { date: tr.date(props.of.printedAt) })}</p>
     </>
   );
 }

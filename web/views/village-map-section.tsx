@@ -1,38 +1,32 @@
-import type { Study } from '../../api/engine/model.ts';
-import type { CommunityPageData } from '../data/community-data.ts';
-import type { MapFrame } from '../maps/map-frame.ts';
 import { plateBoundary, traceFrom, VillageMap } from '../maps/village-map.tsx';
-import type { Translator } from '../text/translator.ts';
 import { NearestFaults } from './nearest-faults.tsx';
+import type { CommunitySheetProps } from './print-sheet.tsx';
 
 /**
  * The village's map with its faults and the plate boundary, then the same in words: the
  * plate boundary's trace and each nearest fault with its distance and direction.
  */
 export function VillageMapSection(props: {
-  readonly tr: Translator;
-  readonly study: Study;
-  readonly data: CommunityPageData;
-  readonly frame: MapFrame;
+  /** The sheet the section is on: its study, community data and map frame. */
+  readonly sheet: CommunitySheetProps;
   readonly idPrefix: string;
-  readonly headingLevel: 2 | 3;
 }) {
-  const { tr, study, data } = props;
+  const { study, data } = props.sheet;
+  const { tr } = props.sheet.page;
   const { community, result } = data;
-  const H = props.headingLevel === 2 ? 'h2' : 'h3';
   const boundary = plateBoundary(study);
   const trace = boundary ? traceFrom(community, boundary) : undefined;
   const headingId = `${props.idPrefix}-heading`;
   return (
     <section aria-labelledby={headingId} class="village-map">
-      <H id={headingId}>{tr.text('material.mapHeading', { name: community.name })}</H>
+      <h2 id={headingId}>{tr.text('material.mapHeading', { name: community.name })}</h2>
       <div class="village-map-body">
         <figure class="village-map-figure">
           <VillageMap
             tr={tr}
             study={study}
             community={community}
-            frame={props.frame}
+            frame={props.sheet.frame}
             idPrefix={props.idPrefix}
           />
           <figcaption>{tr.text('material.mapCaption', { name: community.name })}</figcaption>

@@ -42,6 +42,8 @@ export interface BrowserService {
   context: BrowserContext;
   page: Page;
   foreignRequests: string[];
+  /** The text of the study's document as the API gives it (to see that nothing was saved). */
+  document(): Promise<string>;
 }
 
 /**
@@ -52,7 +54,12 @@ export interface BrowserService {
 export function browserService(options: BrowserServiceOptions): BrowserService {
   const dir = tempDir(options.tempPrefix);
   // Filled in by beforeAll; afterAll closes only what was opened.
-  const shared: Partial<BrowserService> = {};
+  const shared: Partial<BrowserService> = {
+    document: async () => {
+      const service = shared.service as ServiceProcess;
+      return (await service.fetch(`/api/studies/${shared.studyId}/document`)).text();
+    },
+  };
   beforeAll(async () => {
     const service = await startService({
       databasePath: join(dir.path, options.database),
@@ -75,6 +82,36 @@ export function browserService(options: BrowserServiceOptions): BrowserService {
     dir.remove();
   });
   return shared as BrowserService;
+}
+
+/** A describe's own offline context, its one page and the foreign requests it refused. */
+export interface DescribeContext {
+  context: BrowserContext;
+  page: Page;
+  foreignRequests: string[];
+}
+
+/**
+ * For a file whose describes each open their own context (`context: false`): registers the
+ * describe's beforeAll, which opens an offline context with `options` and one page, and its
+ * afterAll, which closes the context.
+ */
+export function describeContext(
+  rig: BrowserService,
+  options?: BrowserContextOptions,
+): DescribeContext {
+  // Filled in by beforeAll.
+  const own: Partial<DescribeContext> = {};
+  beforeAll(async () => {
+    const guarded = await offlineContext(rig.chromium.browser, rig.service.url, options);
+    own.context = guarded.context;
+    own.foreignRequests = guarded.foreignRequests;
+    own.page = await guarded.context.newPage();
+  });
+  afterAll(async () => {
+    await own.context?.close();
+  });
+  return own as DescribeContext;
 }
 
 /** Saves a study through the API (201) and returns its id. */
