@@ -1,5 +1,4 @@
 import { describe, expect, it } from 'vitest';
-import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import {
   ASK14_CONSTANTS,
   ASK14_TABLE,
@@ -23,6 +22,8 @@ import {
   expectHangingWallAboveFootwall,
   expectLnPeriodInterpolation,
   expectNotApplicable,
+  itRefusesByName,
+  RRUP_REFUSALS,
   HANGING_WALL_CASE,
 } from './model-checks.ts';
 import { verticalStrikeSlip } from './crustal-input.ts';
@@ -209,14 +210,9 @@ describe('ASK14: properties', () => {
     expect(ask14.predict(input({ magnitude: 8.5, vs30: 180 }), PGA).applicable).toBe(true);
   });
 
-  it('refuses periods outside its table and bad input by name', () => {
-    expect(() => ask14.predict(input(), sa(0.005))).toThrow(UnsupportedPeriod);
-    expect(() => ask14.predict(input(), sa(11))).toThrow(UnsupportedPeriod);
-    expect(() => ask14.predict(input({ magnitude: Number.NaN }), PGA)).toThrow(/magnitude/);
-    expect(() => ask14.predict(input({ rrupKm: -2 }), PGA)).toThrow(InvalidInput);
-    expect(() => ask14.predict(input({ dipDeg: 0 }), PGA)).toThrow(/dipDeg/);
-    expect(() => ask14.predict(input({ ry0Km: Number.NaN }), PGA)).toThrow(/ry0Km/);
-    expect(() => ask14.predict(input({ z1Km: -1 }), PGA)).toThrow(/z1Km/);
+  itRefusesByName((over, m) => ask14.predict(input(over), m), {
+    ...RRUP_REFUSALS,
+    inputs: [...RRUP_REFUSALS.inputs, [{ ry0Km: Number.NaN }, /ry0Km/], [{ z1Km: -1 }, /z1Km/]],
   });
 
   itIsInTheRegistry(ask14, {

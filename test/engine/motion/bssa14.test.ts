@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
+import { InvalidInput } from '../../../api/engine/errors.ts';
 import { BSSA14_TABLE } from '../../../api/engine/motion/bssa14-coefficients.ts';
 import {
   bssa14,
@@ -19,6 +19,7 @@ import {
   itMatchesFigureMedians,
   expectLnPeriodInterpolation,
   expectNotApplicable,
+  itRefusesByName,
 } from './model-checks.ts';
 import { worstKink } from './crustal-table-checks.ts';
 import { PGA, PGV, sa } from './measures.ts';
@@ -260,15 +261,14 @@ describe('BSSA14: properties', () => {
     expect(bssa14.predict(input({ magnitude: 7.5, rakeDeg: 0 }), PGA).applicable).toBe(true);
   });
 
-  it('refuses periods outside its table and bad input by name', () => {
-    expect(() => bssa14.predict(input(), sa(0.005))).toThrow(UnsupportedPeriod);
-    expect(() => bssa14.predict(input(), sa(12))).toThrow(UnsupportedPeriod);
-    expect(() => bssa14.predict(input({ magnitude: Number.NaN }), PGA)).toThrow(/magnitude/);
-    expect(() => bssa14.predict(input({ rjbKm: -1 }), PGA)).toThrow(InvalidInput);
-    expect(() => bssa14.predict(input({ vs30: 0 }), PGA)).toThrow(/vs30/);
-    expect(() => bssa14.predict(input({ rakeDeg: Number.POSITIVE_INFINITY }), PGA)).toThrow(
-      /rakeDeg/,
-    );
+  itRefusesByName((over, m) => bssa14.predict(input(over), m), {
+    periodsS: [0.005, 12],
+    inputs: [
+      [{ magnitude: Number.NaN }, /magnitude/],
+      [{ rjbKm: -1 }, InvalidInput],
+      [{ vs30: 0 }, /vs30/],
+      [{ rakeDeg: Number.POSITIVE_INFINITY }, /rakeDeg/],
+    ],
   });
 
   it('describes itself for the registry', () => {

@@ -1,6 +1,5 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import { bssa14 } from '../../../api/engine/motion/bssa14.ts';
 import { CB14_TABLE, type Cb14Row } from '../../../api/engine/motion/cb14-coefficients.ts';
 import {
@@ -24,6 +23,8 @@ import {
   itMatchesFigureMedians,
   expectLnPeriodInterpolation,
   expectNotApplicable,
+  itRefusesByName,
+  RRUP_REFUSALS,
 } from './model-checks.ts';
 import { worstKink } from './crustal-table-checks.ts';
 import { PGA, PGV, sa } from './measures.ts';
@@ -348,14 +349,13 @@ describe('CB14: properties', () => {
     expect(cb14.predict(input({ magnitude: 8.2 }), PGA).applicable).toBe(true);
   });
 
-  it('refuses periods outside its table and bad input by name', () => {
-    expect(() => cb14.predict(input(), sa(0.005))).toThrow(UnsupportedPeriod);
-    expect(() => cb14.predict(input(), sa(11))).toThrow(UnsupportedPeriod);
-    expect(() => cb14.predict(input({ magnitude: Number.NaN }), PGA)).toThrow(/magnitude/);
-    expect(() => cb14.predict(input({ rrupKm: -2 }), PGA)).toThrow(InvalidInput);
-    expect(() => cb14.predict(input({ dipDeg: 0 }), PGA)).toThrow(/dipDeg/);
-    expect(() => cb14.predict(input({ widthKm: Number.NaN }), PGA)).toThrow(/widthKm/);
-    expect(() => cb14.predict(input({ z2p5Km: -1 }), PGA)).toThrow(/z2p5Km/);
+  itRefusesByName((over, m) => cb14.predict(input(over), m), {
+    ...RRUP_REFUSALS,
+    inputs: [
+      ...RRUP_REFUSALS.inputs,
+      [{ widthKm: Number.NaN }, /widthKm/],
+      [{ z2p5Km: -1 }, /z2p5Km/],
+    ],
   });
 
   it('describes itself for the registry', () => {

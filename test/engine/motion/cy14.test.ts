@@ -1,5 +1,4 @@
 import { describe, expect, it } from 'vitest';
-import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import {
   CY14_COLUMNS,
   CY14_TABLE,
@@ -22,6 +21,8 @@ import {
   expectHangingWallAboveFootwall,
   expectLnPeriodInterpolation,
   expectNotApplicable,
+  itRefusesByName,
+  RRUP_REFUSALS,
 } from './model-checks.ts';
 import { verticalStrikeSlip } from './crustal-input.ts';
 import {
@@ -199,14 +200,9 @@ describe('CY14: properties', () => {
     expect(cy14.predict(input({ magnitude: 8.2 }), PGA).applicable).toBe(true);
   });
 
-  it('refuses periods outside its table and bad input by name', () => {
-    expect(() => cy14.predict(input(), sa(0.005))).toThrow(UnsupportedPeriod);
-    expect(() => cy14.predict(input(), sa(11))).toThrow(UnsupportedPeriod);
-    expect(() => cy14.predict(input({ magnitude: Number.NaN }), PGA)).toThrow(/magnitude/);
-    expect(() => cy14.predict(input({ rrupKm: -2 }), PGA)).toThrow(InvalidInput);
-    expect(() => cy14.predict(input({ dipDeg: 0 }), PGA)).toThrow(/dipDeg/);
-    expect(() => cy14.predict(input({ ztorKm: Number.NaN }), PGA)).toThrow(/ztorKm/);
-    expect(() => cy14.predict(input({ z1Km: -1 }), PGA)).toThrow(/z1Km/);
+  itRefusesByName((over, m) => cy14.predict(input(over), m), {
+    ...RRUP_REFUSALS,
+    inputs: [...RRUP_REFUSALS.inputs, [{ ztorKm: Number.NaN }, /ztorKm/], [{ z1Km: -1 }, /z1Km/]],
   });
 
   itIsInTheRegistry(cy14, {
