@@ -20,7 +20,7 @@ import { expectClose } from '../../helpers/close.ts';
 import {
   expectFallsWithDistanceRisesWithMagnitude,
   expectHangingWallAboveFootwall,
-  expectLnPeriodInterpolation,
+  itInterpolatesInLnPeriod,
   expectNotApplicable,
   itRefusesByName,
   RRUP_REFUSALS,
@@ -178,13 +178,7 @@ describe('ASK14: properties', () => {
     expect(estimated.phi).toBeGreaterThan(measured.phi);
   });
 
-  it('interpolates between rows in ln(period) and returns the row on a row', () => {
-    expectLnPeriodInterpolation(
-      (periodS) => ask14.predict(input(), sa(periodS)),
-      [0.5, 0.6, 0.75],
-      1,
-    );
-  });
+  itInterpolatesInLnPeriod((periodS) => ask14.predict(input(), sa(periodS)), [0.5, 0.6, 0.75], 1);
 
   it('answers at zero distance and zero width with finite numbers', () => {
     for (const m of measures) {

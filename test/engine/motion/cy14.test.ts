@@ -19,7 +19,7 @@ import { expectClose } from '../../helpers/close.ts';
 import {
   expectFallsWithDistanceRisesWithMagnitude,
   expectHangingWallAboveFootwall,
-  expectLnPeriodInterpolation,
+  itInterpolatesInLnPeriod,
   expectNotApplicable,
   itRefusesByName,
   RRUP_REFUSALS,
@@ -169,13 +169,7 @@ describe('CY14: properties', () => {
     expectHangingWallAboveFootwall(lnY, [PGA, PGV, sa(0.2), sa(1), sa(3)]);
   });
 
-  it('interpolates between rows in ln(period) and returns the row on a row', () => {
-    expectLnPeriodInterpolation(
-      (periodS) => cy14.predict(input(), sa(periodS)),
-      [0.5, 0.6, 0.75],
-      1,
-    );
-  });
+  itInterpolatesInLnPeriod((periodS) => cy14.predict(input(), sa(periodS)), [0.5, 0.6, 0.75], 1);
 
   it('answers at zero distance with finite numbers', () => {
     for (const m of measures) {
