@@ -3,13 +3,8 @@ import type { Page } from 'playwright-core';
 import { describe, expect, test } from 'vitest';
 import { translator } from '../../web/text/translator.ts';
 import { spreadStudy } from '../web/helpers/map-study.ts';
-import {
-  ARTIFACTS,
-  offlineContext,
-  seriousAxeViolations,
-  walkWithTab,
-} from './helpers/chromium.ts';
-import { browserService, saveStudy } from './helpers/browser-service.ts';
+import { ARTIFACTS, seriousAxeViolations, walkWithTab } from './helpers/chromium.ts';
+import { browserService, noScriptOverview, saveStudy } from './helpers/browser-service.ts';
 
 /**
  * A hazard map from the overview in Chromium: a small study (two invented villages, one
@@ -95,13 +90,11 @@ describe('a hazard map from the overview, in a browser', { timeout: 180_000 }, (
   });
 
   test('without script: the form posts, the refresh link shows how far the map has got, and the done page links to the map', async () => {
-    const { context: plain, foreignRequests: plainForeign } = await offlineContext(
-      rig.chromium.browser,
-      rig.service.url,
-      { javaScriptEnabled: false },
-    );
-    const noScript = await plain.newPage();
-    await noScript.goto(`${rig.service.url}/studies/${rig.studyId}`);
+    const {
+      context: plain,
+      page: noScript,
+      foreignRequests: plainForeign,
+    } = await noScriptOverview(rig);
     await noScript.selectOption('#hazard-map-return-period', '2475');
     await noScript.getByRole('button', { name: en.t('hazardMap.compute') }).click();
     await noScript.waitForURL(/\/maps\/[\w-]+$/);

@@ -2,14 +2,8 @@ import { join } from 'node:path';
 import { describe, expect, test } from 'vitest';
 import type { StudyResult } from '../../api/engine/results.ts';
 import { translator } from '../../web/text/translator.ts';
-import {
-  ARTIFACTS,
-  offlineContext,
-  pdfPageCount,
-  seriousAxeViolations,
-  walkWithTab,
-} from './helpers/chromium.ts';
-import { browserService } from './helpers/browser-service.ts';
+import { ARTIFACTS, pdfPageCount, seriousAxeViolations, walkWithTab } from './helpers/chromium.ts';
+import { browserService, noScriptOverview } from './helpers/browser-service.ts';
 
 /**
  * A new user's path through the demo coast in Chromium: open the overview, screen the study,
@@ -126,13 +120,11 @@ describe('the demo coast in a browser', { timeout: 180_000 }, () => {
     expect(await rig.page.locator('th[aria-sort="descending"]').count()).toBe(1);
     expect(rig.page.url()).toContain('sort=people');
 
-    const { context: plain, foreignRequests: plainForeign } = await offlineContext(
-      rig.chromium.browser,
-      rig.service.url,
-      { javaScriptEnabled: false },
-    );
-    const noScript = await plain.newPage();
-    await noScript.goto(`${rig.service.url}/studies/${rig.studyId}`);
+    const {
+      context: plain,
+      page: noScript,
+      foreignRequests: plainForeign,
+    } = await noScriptOverview(rig);
     await noScript
       .getByRole('link', { name: new RegExp(`^${en.t('overview.col.people')}`) })
       .click();

@@ -114,6 +114,21 @@ export function describeContext(
   return own as DescribeContext;
 }
 
+/**
+ * Inside a test: a second offline context without script, its page already on the study's
+ * overview, and the foreign requests it refused (the test closes the context).
+ */
+export async function noScriptOverview(
+  rig: BrowserService,
+): Promise<{ context: BrowserContext; page: Page; foreignRequests: string[] }> {
+  const { context, foreignRequests } = await offlineContext(rig.chromium.browser, rig.service.url, {
+    javaScriptEnabled: false,
+  });
+  const page = await context.newPage();
+  await page.goto(`${rig.service.url}/studies/${rig.studyId}`);
+  return { context, page, foreignRequests };
+}
+
 /** Saves a study through the API (201) and returns its id. */
 export async function saveStudy(service: ServiceProcess, study: unknown): Promise<string> {
   const created = await service.fetch('/api/studies', jsonInit('POST', study));

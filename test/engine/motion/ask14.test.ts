@@ -1,5 +1,4 @@
 import { describe, expect, it } from 'vitest';
-import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import {
   ASK14_CONSTANTS,
   ASK14_TABLE,
@@ -21,8 +20,10 @@ import { expectClose } from '../../helpers/close.ts';
 import {
   expectFallsWithDistanceRisesWithMagnitude,
   expectHangingWallAboveFootwall,
-  expectLnPeriodInterpolation,
+  itInterpolatesInLnPeriod,
   expectNotApplicable,
+  itRefusesByName,
+  RRUP_REFUSALS,
   HANGING_WALL_CASE,
 } from './model-checks.ts';
 import { verticalStrikeSlip } from './crustal-input.ts';
@@ -177,13 +178,7 @@ describe('ASK14: properties', () => {
     expect(estimated.phi).toBeGreaterThan(measured.phi);
   });
 
-  it('interpolates between rows in ln(period) and returns the row on a row', () => {
-    expectLnPeriodInterpolation(
-      (periodS) => ask14.predict(input(), sa(periodS)),
-      [0.5, 0.6, 0.75],
-      1,
-    );
-  });
+  itInterpolatesInLnPeriod((periodS) => ask14.predict(input(), sa(periodS)), [0.5, 0.6, 0.75], 1);
 
   it('answers at zero distance and zero width with finite numbers', () => {
     for (const m of measures) {
@@ -209,14 +204,9 @@ describe('ASK14: properties', () => {
     expect(ask14.predict(input({ magnitude: 8.5, vs30: 180 }), PGA).applicable).toBe(true);
   });
 
-  it('refuses periods outside its table and bad input by name', () => {
-    expect(() => ask14.predict(input(), sa(0.005))).toThrow(UnsupportedPeriod);
-    expect(() => ask14.predict(input(), sa(11))).toThrow(UnsupportedPeriod);
-    expect(() => ask14.predict(input({ magnitude: Number.NaN }), PGA)).toThrow(/magnitude/);
-    expect(() => ask14.predict(input({ rrupKm: -2 }), PGA)).toThrow(InvalidInput);
-    expect(() => ask14.predict(input({ dipDeg: 0 }), PGA)).toThrow(/dipDeg/);
-    expect(() => ask14.predict(input({ ry0Km: Number.NaN }), PGA)).toThrow(/ry0Km/);
-    expect(() => ask14.predict(input({ z1Km: -1 }), PGA)).toThrow(/z1Km/);
+  itRefusesByName((over, m) => ask14.predict(input(over), m), {
+    ...RRUP_REFUSALS,
+    inputs: [...RRUP_REFUSALS.inputs, [{ ry0Km: Number.NaN }, /ry0Km/], [{ z1Km: -1 }, /z1Km/]],
   });
 
   itIsInTheRegistry(ask14, {

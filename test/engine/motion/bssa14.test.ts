@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
+import { InvalidInput } from '../../../api/engine/errors.ts';
 import { BSSA14_TABLE } from '../../../api/engine/motion/bssa14-coefficients.ts';
 import {
   bssa14,
@@ -17,10 +17,11 @@ import { expectClose } from '../../helpers/close.ts';
 import {
   expectFallsWithDistanceRisesWithMagnitude,
   itMatchesFigureMedians,
-  expectLnPeriodInterpolation,
+  itInterpolatesInLnPeriod,
   expectNotApplicable,
+  itRefusesByName,
 } from './model-checks.ts';
-import { worstKink } from './crustal-table-checks.ts';
+import { expectSmoothSpectrum } from './crustal-table-checks.ts';
 import { PGA, PGV, sa } from './measures.ts';
 
 const SOURCE = 'Boore et al. (2014)';
@@ -208,17 +209,12 @@ describe('BSSA14: medians against published figures', () => {
       for (const rjbKm of [0, 10, 50, 150]) {
         for (const vs30 of [180, 300, 760]) {
           for (const rakeDeg of [0, 90, -90]) {
-            const values = BSSA14_TABLE.sa.map((r) =>
-              lnY({ magnitude, rjbKm, vs30, rakeDeg }, sa(r.periodS)),
-            );
-            const kink = worstKink(
+            expectSmoothSpectrum(
               BSSA14_TABLE.sa.map((r) => r.periodS),
-              values,
+              (periodS) => lnY({ magnitude, rjbKm, vs30, rakeDeg }, sa(periodS)),
+              0.2,
+              `M ${magnitude}, ${rjbKm} km, ${vs30} m/s, rake ${rakeDeg}`,
             );
-            expect(
-              kink.residual <= 0.2,
-              `M ${magnitude}, ${rjbKm} km, ${vs30} m/s, rake ${rakeDeg}: ${kink.residual.toFixed(3)} at ${kink.periodS} s`,
-            ).toBe(true);
           }
         }
       }
@@ -238,13 +234,11 @@ describe('BSSA14: properties', () => {
     });
   });
 
-  it('interpolates between rows in ln(period) and returns the row on a row', () => {
-    expectLnPeriodInterpolation(
-      (periodS) => bssa14.predict(input(), sa(periodS)),
-      [0.17, 0.175, 0.18],
-      0.2,
-    );
-  });
+  itInterpolatesInLnPeriod(
+    (periodS) => bssa14.predict(input(), sa(periodS)),
+    [0.17, 0.175, 0.18],
+    0.2,
+  );
 
   it('answers outside its validity with applicable false and finite numbers', () => {
     const outside: Partial<GmmInput>[] = [
@@ -260,15 +254,14 @@ describe('BSSA14: properties', () => {
     expect(bssa14.predict(input({ magnitude: 7.5, rakeDeg: 0 }), PGA).applicable).toBe(true);
   });
 
-  it('refuses periods outside its table and bad input by name', () => {
-    expect(() => bssa14.predict(input(), sa(0.005))).toThrow(UnsupportedPeriod);
-    expect(() => bssa14.predict(input(), sa(12))).toThrow(UnsupportedPeriod);
-    expect(() => bssa14.predict(input({ magnitude: Number.NaN }), PGA)).toThrow(/magnitude/);
-    expect(() => bssa14.predict(input({ rjbKm: -1 }), PGA)).toThrow(InvalidInput);
-    expect(() => bssa14.predict(input({ vs30: 0 }), PGA)).toThrow(/vs30/);
-    expect(() => bssa14.predict(input({ rakeDeg: Number.POSITIVE_INFINITY }), PGA)).toThrow(
-      /rakeDeg/,
-    );
+  itRefusesByName((over, m) => bssa14.predict(input(over), m), {
+    periodsS: [0.005, 12],
+    inputs: [
+      [{ magnitude: Number.NaN }, /magnitude/],
+      [{ rjbKm: -1 }, InvalidInput],
+      [{ vs30: 0 }, /vs30/],
+      [{ rakeDeg: Number.POSITIVE_INFINITY }, /rakeDeg/],
+    ],
   });
 
   it('describes itself for the registry', () => {

@@ -1,6 +1,5 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import { bssa14 } from '../../../api/engine/motion/bssa14.ts';
 import { CB14_TABLE, type Cb14Row } from '../../../api/engine/motion/cb14-coefficients.ts';
 import {
@@ -22,10 +21,12 @@ import { expectClose } from '../../helpers/close.ts';
 import {
   expectFallsWithDistanceRisesWithMagnitude,
   itMatchesFigureMedians,
-  expectLnPeriodInterpolation,
+  itInterpolatesInLnPeriod,
   expectNotApplicable,
+  itRefusesByName,
+  RRUP_REFUSALS,
 } from './model-checks.ts';
-import { worstKink } from './crustal-table-checks.ts';
+import { expectSmoothSpectrum } from './crustal-table-checks.ts';
 import { PGA, PGV, sa } from './measures.ts';
 
 const SOURCE = 'Campbell & Bozorgnia (2014)';
@@ -293,15 +294,12 @@ describe('CB14: medians against published figures', () => {
               rxKm,
               ztorKm: 2,
             };
-            const values = CB14_TABLE.sa.map((r) => lnY(over, sa(r.periodS)));
-            const kink = worstKink(
+            expectSmoothSpectrum(
               CB14_TABLE.sa.map((r) => r.periodS),
-              values,
+              (periodS) => lnY(over, sa(periodS)),
+              0.25,
+              JSON.stringify(over),
             );
-            expect(
-              kink.residual <= 0.25,
-              `${JSON.stringify(over)}: ${kink.residual.toFixed(3)} at ${kink.periodS} s`,
-            ).toBe(true);
           }
         }
       }
@@ -321,13 +319,7 @@ describe('CB14: properties', () => {
     });
   });
 
-  it('interpolates between rows in ln(period) and returns the row on a row', () => {
-    expectLnPeriodInterpolation(
-      (periodS) => cb14.predict(input(), sa(periodS)),
-      [0.5, 0.6, 0.75],
-      1,
-    );
-  });
+  itInterpolatesInLnPeriod((periodS) => cb14.predict(input(), sa(periodS)), [0.5, 0.6, 0.75], 1);
 
   it('answers outside its validity with applicable false and finite numbers', () => {
     const outside: Partial<GmmInput>[] = [
@@ -348,14 +340,13 @@ describe('CB14: properties', () => {
     expect(cb14.predict(input({ magnitude: 8.2 }), PGA).applicable).toBe(true);
   });
 
-  it('refuses periods outside its table and bad input by name', () => {
-    expect(() => cb14.predict(input(), sa(0.005))).toThrow(UnsupportedPeriod);
-    expect(() => cb14.predict(input(), sa(11))).toThrow(UnsupportedPeriod);
-    expect(() => cb14.predict(input({ magnitude: Number.NaN }), PGA)).toThrow(/magnitude/);
-    expect(() => cb14.predict(input({ rrupKm: -2 }), PGA)).toThrow(InvalidInput);
-    expect(() => cb14.predict(input({ dipDeg: 0 }), PGA)).toThrow(/dipDeg/);
-    expect(() => cb14.predict(input({ widthKm: Number.NaN }), PGA)).toThrow(/widthKm/);
-    expect(() => cb14.predict(input({ z2p5Km: -1 }), PGA)).toThrow(/z2p5Km/);
+  itRefusesByName((over, m) => cb14.predict(input(over), m), {
+    ...RRUP_REFUSALS,
+    inputs: [
+      ...RRUP_REFUSALS.inputs,
+      [{ widthKm: Number.NaN }, /widthKm/],
+      [{ z2p5Km: -1 }, /z2p5Km/],
+    ],
   });
 
   it('describes itself for the registry', () => {

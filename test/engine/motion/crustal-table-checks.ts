@@ -1,3 +1,5 @@
+import { expect } from 'vitest';
+
 /**
  * Checks shared by the crustal-model table tests (BSSA14, CB14): how far a column or a median
  * spectrum strays from smooth variation with ln(period). A row typed from the wrong period, or
@@ -24,4 +26,20 @@ export function worstKink(periodsS: readonly number[], values: readonly number[]
     if (residual > worst.residual) worst = { residual, periodS: periodsS[i] as number };
   }
   return worst;
+}
+
+/**
+ * The median spectrum `lnAt` (ln units) over the table's `periodsS` has no kink larger than
+ * `bound`; `what` names the case in the failure message.
+ */
+export function expectSmoothSpectrum(
+  periodsS: readonly number[],
+  lnAt: (periodS: number) => number,
+  bound: number,
+  what: string,
+): void {
+  const kink = worstKink(periodsS, periodsS.map(lnAt));
+  expect(kink.residual <= bound, `${what}: ${kink.residual.toFixed(3)} at ${kink.periodS} s`).toBe(
+    true,
+  );
 }

@@ -1,5 +1,4 @@
 import { describe, expect, it } from 'vitest';
-import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import {
   CY14_COLUMNS,
   CY14_TABLE,
@@ -20,8 +19,10 @@ import { expectClose } from '../../helpers/close.ts';
 import {
   expectFallsWithDistanceRisesWithMagnitude,
   expectHangingWallAboveFootwall,
-  expectLnPeriodInterpolation,
+  itInterpolatesInLnPeriod,
   expectNotApplicable,
+  itRefusesByName,
+  RRUP_REFUSALS,
 } from './model-checks.ts';
 import { verticalStrikeSlip } from './crustal-input.ts';
 import {
@@ -168,13 +169,7 @@ describe('CY14: properties', () => {
     expectHangingWallAboveFootwall(lnY, [PGA, PGV, sa(0.2), sa(1), sa(3)]);
   });
 
-  it('interpolates between rows in ln(period) and returns the row on a row', () => {
-    expectLnPeriodInterpolation(
-      (periodS) => cy14.predict(input(), sa(periodS)),
-      [0.5, 0.6, 0.75],
-      1,
-    );
-  });
+  itInterpolatesInLnPeriod((periodS) => cy14.predict(input(), sa(periodS)), [0.5, 0.6, 0.75], 1);
 
   it('answers at zero distance with finite numbers', () => {
     for (const m of measures) {
@@ -199,14 +194,9 @@ describe('CY14: properties', () => {
     expect(cy14.predict(input({ magnitude: 8.2 }), PGA).applicable).toBe(true);
   });
 
-  it('refuses periods outside its table and bad input by name', () => {
-    expect(() => cy14.predict(input(), sa(0.005))).toThrow(UnsupportedPeriod);
-    expect(() => cy14.predict(input(), sa(11))).toThrow(UnsupportedPeriod);
-    expect(() => cy14.predict(input({ magnitude: Number.NaN }), PGA)).toThrow(/magnitude/);
-    expect(() => cy14.predict(input({ rrupKm: -2 }), PGA)).toThrow(InvalidInput);
-    expect(() => cy14.predict(input({ dipDeg: 0 }), PGA)).toThrow(/dipDeg/);
-    expect(() => cy14.predict(input({ ztorKm: Number.NaN }), PGA)).toThrow(/ztorKm/);
-    expect(() => cy14.predict(input({ z1Km: -1 }), PGA)).toThrow(/z1Km/);
+  itRefusesByName((over, m) => cy14.predict(input(over), m), {
+    ...RRUP_REFUSALS,
+    inputs: [...RRUP_REFUSALS.inputs, [{ ztorKm: Number.NaN }, /ztorKm/], [{ z1Km: -1 }, /z1Km/]],
   });
 
   itIsInTheRegistry(cy14, {

@@ -1,31 +1,35 @@
 import fc from 'fast-check';
 import { expect, it } from 'vitest';
+import { InvalidInput, UnsupportedPeriod } from '../../../api/engine/errors.ts';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
 import type { GmmInput, GmmPrediction } from '../../../api/engine/motion/types.ts';
 import { expectClose, expectRelative } from '../../helpers/close.ts';
-import { sa } from './measures.ts';
+import { PGA, sa } from './measures.ts';
 
 const RULE = 'interpolate-period.ts rule (common practice)';
 
 /**
- * Between the table rows `loS` and `hiS`, ln median and σ at `periodS` are linear in ln(period)
- * (to 1e-12) and the median lies strictly between the rows'; at the row `rowS`, a period 1e-9
- * off the row gives the row itself.
+ * The test "interpolates between rows in ln(period) and returns the row on a row": between the
+ * table rows `loS` and `hiS`, ln median and σ at `periodS` are linear in ln(period) (to 1e-12)
+ * and the median lies strictly between the rows'; at the row `rowS`, a period 1e-9 off the row
+ * gives the row itself.
  */
-export function expectLnPeriodInterpolation(
+export function itInterpolatesInLnPeriod(
   predictAt: (periodS: number) => GmmPrediction,
   [loS, periodS, hiS]: readonly [number, number, number],
   rowS: number,
 ): void {
-  const between = predictAt(periodS);
-  const lo = predictAt(loS);
-  const hi = predictAt(hiS);
-  const w = Math.log(periodS / loS) / Math.log(hiS / loS);
-  expectClose(between.lnMedian, lo.lnMedian + (hi.lnMedian - lo.lnMedian) * w, 1e-12, RULE);
-  expectClose(between.sigma, lo.sigma + (hi.sigma - lo.sigma) * w, 1e-12, RULE);
-  expect(between.lnMedian).toBeGreaterThan(Math.min(lo.lnMedian, hi.lnMedian));
-  expect(between.lnMedian).toBeLessThan(Math.max(lo.lnMedian, hi.lnMedian));
-  expect(predictAt(rowS).lnMedian).toBe(predictAt(rowS * (1 + 1e-9)).lnMedian);
+  it('interpolates between rows in ln(period) and returns the row on a row', () => {
+    const between = predictAt(periodS);
+    const lo = predictAt(loS);
+    const hi = predictAt(hiS);
+    const w = Math.log(periodS / loS) / Math.log(hiS / loS);
+    expectClose(between.lnMedian, lo.lnMedian + (hi.lnMedian - lo.lnMedian) * w, 1e-12, RULE);
+    expectClose(between.sigma, lo.sigma + (hi.sigma - lo.sigma) * w, 1e-12, RULE);
+    expect(between.lnMedian).toBeGreaterThan(Math.min(lo.lnMedian, hi.lnMedian));
+    expect(between.lnMedian).toBeLessThan(Math.max(lo.lnMedian, hi.lnMedian));
+    expect(predictAt(rowS).lnMedian).toBe(predictAt(rowS * (1 + 1e-9)).lnMedian);
+  });
 }
 
 /** Each input change of `outside`, for each measure: applicable false, a note, finite numbers. */
@@ -43,6 +47,45 @@ export function expectNotApplicable(
     }
   }
 }
+
+/** What a model refuses: periods off its table, and inputs with the error each must throw. */
+export interface Refusals {
+  /** SA periods (s) outside the model's table: each throws UnsupportedPeriod. */
+  readonly periodsS: readonly number[];
+  /** Input changes and, for each, the error class or the field name the PGA call throws with. */
+  readonly inputs: readonly (readonly [Partial<GmmInput>, RegExp | typeof InvalidInput])[];
+}
+
+/**
+ * The test "refuses periods outside its table and bad input by name": each period of
+ * `refusals` throws UnsupportedPeriod, each input change the error named beside it.
+ */
+export function itRefusesByName(
+  predict: (over: Partial<GmmInput>, measure: Measure) => GmmPrediction,
+  refusals: Refusals,
+): void {
+  it('refuses periods outside its table and bad input by name', () => {
+    for (const periodS of refusals.periodsS) {
+      expect(() => predict({}, sa(periodS)), `SA(${periodS})`).toThrow(UnsupportedPeriod);
+    }
+    for (const [over, error] of refusals.inputs) {
+      expect(() => predict(over, PGA), Object.keys(over).join()).toThrow(error);
+    }
+  });
+}
+
+/**
+ * What ASK14, CB14 and CY14 all refuse: SA below and above their 0.01–10 s tables, a NaN
+ * magnitude, a negative Rrup, a zero dip.
+ */
+export const RRUP_REFUSALS: Refusals = {
+  periodsS: [0.005, 11],
+  inputs: [
+    [{ magnitude: Number.NaN }, /magnitude/],
+    [{ rrupKm: -2 }, InvalidInput],
+    [{ dipDeg: 0 }, /dipDeg/],
+  ],
+};
 
 export interface MonotonyOptions {
   /** Magnitudes drawn (from the model's lower end, or above where it saturates on purpose). */
