@@ -19,6 +19,40 @@ export function Field(props: {
   );
 }
 
+/** A decimal number typed in (the form field `name`) under its label; help and problems follow (children). */
+export function NumberField(props: {
+  readonly id: string;
+  /** The id of the help among the children, if any. */
+  readonly helpId?: string;
+  readonly name: string;
+  readonly label: Child;
+  /** The input's min, max and step. */
+  readonly range: { readonly min: string; readonly max: string; readonly step: string };
+  readonly value: string;
+  /** The id of the problems among the children, when the value was refused. */
+  readonly problemId: string | undefined;
+  readonly children?: Child;
+}) {
+  const { range, problemId } = props;
+  return (
+    <Field id={props.id} label={props.label}>
+      <input
+        id={props.id}
+        name={props.name}
+        type="number"
+        min={range.min}
+        max={range.max}
+        step={range.step}
+        inputmode="decimal"
+        value={props.value}
+        aria-describedby={[props.helpId, problemId].filter(Boolean).join(' ') || undefined}
+        aria-invalid={problemId === undefined ? undefined : 'true'}
+      />
+      {props.children}
+    </Field>
+  );
+}
+
 /** The files each upload takes, as the browser's file picker offers them. */
 const UPLOAD_TYPES = {
   communities: '.csv,.txt,.tsv,.xlsx,.kml,.kmz,.zip,.geojson,.json',

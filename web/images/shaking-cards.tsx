@@ -99,22 +99,17 @@ export function ShakingCards(props: { readonly tr: Translator; readonly data: Co
                 textWidth,
                 TEXT_PX,
               );
-        const feel =
+        /** The level's words on one aspect of the shaking, after their label, as lines. */
+        const aspectLines = (label: TextKey, aspect: 'feel' | 'buildings') =>
           level.mmiLevel === null
             ? []
             : wrapWords(
-                `${tr.t('community.feels')}: ${tr.t(`mmi.${level.mmiLevel}.feel` as TextKey)}`,
+                `${tr.t(label)}: ${tr.t(`mmi.${level.mmiLevel}.${aspect}` as TextKey)}`,
                 textWidth,
                 TEXT_PX,
               );
-        const buildings =
-          level.mmiLevel === null
-            ? []
-            : wrapWords(
-                `${tr.t('community.buildings')}: ${tr.t(`mmi.${level.mmiLevel}.buildings` as TextKey)}`,
-                textWidth,
-                TEXT_PX,
-              );
+        const feel = aspectLines('community.feels', 'feel');
+        const buildings = aspectLines('community.buildings', 'buildings');
         const feelY = mmiY + (mmiText.length + 0.6) * TEXT_PX * LINE;
         const buildingsY = feelY + (feel.length + 0.4) * TEXT_PX * LINE;
         return (

@@ -6,6 +6,7 @@ import { MAX_DRAWN_POINTS, type MapState } from '../data/map-data.ts';
 import type { SuggestedSpacing } from '../data/map-spacing.ts';
 import { measureWords } from '../maps/hazard-layer.tsx';
 import type { Translator } from '../text/translator.ts';
+import { NumberField } from '../components/form-rows.tsx';
 import { FieldProblems } from './field-problems.tsx';
 import { SelectField } from './select-field.tsx';
 
@@ -38,10 +39,8 @@ export function HazardMapPanel(props: HazardMapPanelProps) {
   const issues = props.form?.issues ?? [];
   const issuesAt = (path: string) => issues.filter((i) => i.path === path);
   const others = issues.filter((i) => !(FIELDS as readonly string[]).includes(i.path));
-  const describedBy = (path: string, help?: string) =>
-    [help, issuesAt(path).length > 0 ? `hazard-map-${path}-problem` : undefined]
-      .filter(Boolean)
-      .join(' ') || undefined;
+  const describedBy = (path: string) =>
+    issuesAt(path).length > 0 ? `hazard-map-${path}-problem` : undefined;
   /** A choice of the form: the field `path`, its select's id and label, its problems. */
   const choice = (path: string, id: string, label: Child) => ({
     tr,
@@ -155,20 +154,15 @@ export function HazardMapPanel(props: HazardMapPanelProps) {
             </option>
           ))}
         </SelectField>
-        <div class="field">
-          <label for="hazard-map-spacing">{tr.text('hazardMap.spacing')}</label>
-          <input
-            id="hazard-map-spacing"
-            name="spacingKm"
-            type="number"
-            min="0.5"
-            max="200"
-            step="0.5"
-            inputmode="decimal"
-            value={spacing}
-            aria-describedby={describedBy('spacingKm', 'hazard-map-spacing-help')}
-            aria-invalid={issuesAt('spacingKm').length > 0 ? 'true' : undefined}
-          />
+        <NumberField
+          id="hazard-map-spacing"
+          helpId="hazard-map-spacing-help"
+          name="spacingKm"
+          label={tr.text('hazardMap.spacing')}
+          range={{ min: '0.5', max: '200', step: '0.5' }}
+          value={spacing}
+          problemId={issuesAt('spacingKm').length ? 'hazard-map-spacingKm-problem' : undefined}
+        >
           <p class="help" id="hazard-map-spacing-help">
             {tr.text('hazardMap.spacingHelp', {
               km: tr.number(suggestion.spacingKm),
@@ -177,7 +171,7 @@ export function HazardMapPanel(props: HazardMapPanelProps) {
             })}
           </p>
           <FieldProblems tr={tr} id="hazard-map-spacingKm-problem" issues={issuesAt('spacingKm')} />
-        </div>
+        </NumberField>
         <p class="help" id="hazard-map-vs30-help">
           {props.study.terrain === undefined
             ? tr.text('hazardMap.vs30Form', { vs30: tr.number(MAP_VS30) })

@@ -22,6 +22,25 @@ const house = (roof: string) => (
   </>
 );
 
+/** A box of `fill` turned by `degrees` about its own centre (things that fall or hang askew). */
+const tilted = (
+  box: { readonly x: number; readonly y: number; readonly width: number; readonly height: number },
+  fill: string,
+  strokeWidth: number,
+  degrees: number,
+) => (
+  <rect
+    x={box.x}
+    y={box.y}
+    width={box.width}
+    height={box.height}
+    fill={fill}
+    stroke={INK}
+    stroke-width={strokeWidth}
+    transform={`rotate(${degrees} ${box.x + box.width / 2} ${box.y + box.height / 2})`}
+  />
+);
+
 /** Our own drawings, one per level, in a 100 × 100 box. */
 const DRAWINGS: Readonly<Record<PictogramLevel, Child>> = {
   // IV: a hanging lamp swings; cups rattle on the shelf.
@@ -44,16 +63,7 @@ const DRAWINGS: Readonly<Record<PictogramLevel, Child>> = {
       <line x1={12} y1={36} x2={70} y2={36} {...line} />
       <rect x={18} y={16} width={12} height={20} fill={LIGHT} stroke={INK} stroke-width={2} />
       <rect x={38} y={22} width={14} height={14} fill={MID} stroke={INK} stroke-width={2} />
-      <rect
-        x={66}
-        y={46}
-        width={14}
-        height={18}
-        fill={LIGHT}
-        stroke={INK}
-        stroke-width={2}
-        transform="rotate(35 73 55)"
-      />
+      {tilted({ x: 66, y: 46, width: 14, height: 18 }, LIGHT, 2, 35)}
       <path d="M58,40 l-6,8 M62,50 l-8,4" {...thin} />
       <line x1={10} y1={90} x2={90} y2={90} {...line} />
       <path d="M56,90 l6,-8 l6,8 M72,90 l8,-6" {...thin} />
@@ -63,16 +73,7 @@ const DRAWINGS: Readonly<Record<PictogramLevel, Child>> = {
   6: (
     <>
       <rect x={8} y={8} width={84} height={84} fill={PAPER} stroke={INK} stroke-width={3} />
-      <rect
-        x={24}
-        y={20}
-        width={30}
-        height={22}
-        fill={LIGHT}
-        stroke={INK}
-        stroke-width={2.5}
-        transform="rotate(-14 39 31)"
-      />
+      {tilted({ x: 24, y: 20, width: 30, height: 22 }, LIGHT, 2.5, -14)}
       <path d="M70,12 L64,28 L72,40 L62,58" {...thin} />
       <circle cx={72} cy={66} r={5} fill={INK} />
       <path d="M72,71 L70,84 M70,84 L62,92 M70,84 L80,92 M71,76 L60,72 M71,76 L82,70" {...thin} />
@@ -83,16 +84,7 @@ const DRAWINGS: Readonly<Record<PictogramLevel, Child>> = {
   7: (
     <>
       {house('M16,52 L50,22 L84,52 Z')}
-      <rect
-        x={62}
-        y={18}
-        width={10}
-        height={16}
-        fill={MID}
-        stroke={INK}
-        stroke-width={2.5}
-        transform="rotate(20 67 26)"
-      />
+      {tilted({ x: 62, y: 18, width: 10, height: 16 }, MID, 2.5, 20)}
       <rect x={84} y={40} width={8} height={6} fill={MID} stroke={INK} stroke-width={2} />
       <rect x={88} y={60} width={7} height={5} fill={MID} stroke={INK} stroke-width={2} />
       <path d="M36,52 L42,64 L36,74 L42,88" {...thin} />
@@ -118,16 +110,7 @@ const DRAWINGS: Readonly<Record<PictogramLevel, Child>> = {
         stroke-width={2.5}
         stroke-linejoin="round"
       />
-      <rect
-        x={74}
-        y={60}
-        width={8}
-        height={6}
-        fill={MID}
-        stroke={INK}
-        stroke-width={2}
-        transform="rotate(25 78 63)"
-      />
+      {tilted({ x: 74, y: 60, width: 8, height: 6 }, MID, 2, 25)}
       <line x1={6} y1={92} x2={94} y2={92} {...line} />
     </>
   ),

@@ -12,6 +12,7 @@ import { SelectField } from './select-field.tsx';
 import type { TsunamiPageResult } from '../data/tsunami-data.ts';
 import { TsunamiScenario } from './tsunami-time.tsx';
 import { DataTable, LabelledCell } from '../components/data-table.tsx';
+import { NumberField } from '../components/form-rows.tsx';
 
 export interface ScenarioViewProps {
   readonly page: PageContext;
@@ -56,24 +57,16 @@ export function ScenarioView(props: ScenarioViewProps) {
             </option>
           ))}
         </SelectField>
-        <div class="field">
-          <label for="scenario-magnitude">{tr.text('scenario.magnitude')}</label>
-          <input
-            id="scenario-magnitude"
-            name="magnitude"
-            type="number"
-            min="3"
-            max="9.6"
-            step="0.1"
-            value={props.magnitude}
-            inputmode="decimal"
-            aria-invalid={issuesAt('magnitude').length > 0 ? 'true' : undefined}
-            aria-describedby={
-              issuesAt('magnitude').length ? 'scenario-magnitude-problem' : undefined
-            }
-          />
+        <NumberField
+          id="scenario-magnitude"
+          name="magnitude"
+          label={tr.text('scenario.magnitude')}
+          range={{ min: '3', max: '9.6', step: '0.1' }}
+          value={props.magnitude}
+          problemId={issuesAt('magnitude').length ? 'scenario-magnitude-problem' : undefined}
+        >
           <FieldProblems tr={tr} id="scenario-magnitude-problem" issues={issuesAt('magnitude')} />
-        </div>
+        </NumberField>
         <FieldProblems tr={tr} id="scenario-other-problems" issues={others} />
         <button type="submit" class="button-primary">
           {tr.text('scenario.run')}
