@@ -10,8 +10,7 @@ import {
   valueUnit,
   type MapDescription,
 } from '../engine/map/map-geojson.ts';
-import { ChunkQueue } from '../queue/chunk-queue.ts';
-import { queueUrlFrom } from '../queue/queue-setting.ts';
+import { openChunkQueue, queueUrlFrom } from '../queue/queue-setting.ts';
 import { hazardMapOnPool } from '../workers/parallel-map.ts';
 import { readTerrainFile, terrainBesideStudy } from '../terrain/index.ts';
 import { WorkerPool } from '../workers/worker-pool.ts';
@@ -142,7 +141,7 @@ export async function mapVerb(args: readonly string[], io: Io): Promise<number> 
   let highest: MapPoint | undefined;
   const queueUrl = queueUrlFrom(process.env);
   const pool = new WorkerPool({ size: queueUrl === undefined ? threads : 1, name: 'tremora-map' });
-  const queue = queueUrl === undefined ? undefined : await ChunkQueue.open({ url: queueUrl });
+  const queue = queueUrl === undefined ? undefined : await openChunkQueue(queueUrl);
   try {
     const handle = hazardMapOnPool(pool, study, map, {
       ...(queue ? { chunks: queue } : {}),

@@ -3,9 +3,8 @@ import { modelCatalog } from '../engine/motion/registry.ts';
 import type { NearestFault, StudyResult, ZoneDepthReport } from '../engine/results.ts';
 import type { Study } from '../engine/model.ts';
 import { screenStudy, type ScreeningOutput } from '../engine/screen-study.ts';
-import { ChunkQueue } from '../queue/chunk-queue.ts';
 import { isQueuedScreening, QUEUED_SCREENING_COMMUNITIES } from '../queue/queued-screening.ts';
-import { queueUrlFrom } from '../queue/queue-setting.ts';
+import { openChunkQueue, queueUrlFrom } from '../queue/queue-setting.ts';
 import { screeningOutput, screenStudyOnPool } from '../workers/parallel-screen.ts';
 import { WorkerPool } from '../workers/worker-pool.ts';
 import { inputHash } from '../results/input-hash.ts';
@@ -40,7 +39,7 @@ async function screenThroughQueue(
   onProgress: (share: number) => void,
 ): Promise<ScreeningOutput> {
   const pool = new WorkerPool({ size: 1, name: 'tremora-screen' });
-  const queue = await ChunkQueue.open({ url });
+  const queue = await openChunkQueue(url);
   try {
     const handle = screenStudyOnPool(pool, study, { chunks: queue, onProgress });
     return screeningOutput(await untilDoneOrInterrupted(handle));
