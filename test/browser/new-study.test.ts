@@ -18,6 +18,26 @@ const en = translator('en');
 const VILLAGES_CSV =
   'Name,Latitude,Longitude,Site class,Population\nTest Cove,-47.40,-140.20,C,120\nFar Reef,-47.55,-140.45,D,60\n';
 
+/**
+ * The fault typed into the new-source form, in the form's order (the kind and the recurrence type
+ * choose which fields follow): a select is chosen, any other field typed.
+ */
+const NEW_FAULT: [action: 'select' | 'fill', selector: string, value: string | number][] = [
+  ['select', '#source-kind', 'fault'],
+  ['fill', '#source-coordinates', '-47.30, -140.35\n-47.60, -140.15'],
+  ['fill', '#source-id', 'reef-fault'],
+  ['fill', '#source-name', 'Reef Fault'],
+  ['select', '#source-setting', 'crustal'],
+  ['select', '#source-mechanism', 'strike-slip'],
+  ['fill', '#source-dip', 80],
+  ['fill', '#source-lowerDepthKm', 15],
+  ['select', '#source-recurrence-type', 'gutenberg-richter'],
+  ['fill', '#source-recurrence-bValue', 1],
+  ['fill', '#source-recurrence-mMin', 5],
+  ['fill', '#source-recurrence-mMax', 7],
+  ['fill', '#source-recurrence-rate', 0.02],
+];
+
 const rig = browserService({
   tempPrefix: 'tremora-new-study-',
   database: 'new-study.db',
@@ -48,19 +68,10 @@ describe('a new study from the pages', { timeout: 400_000 }, () => {
 
     await rig.page.getByRole('link', { name: en.t('source.add') }).click();
     await rig.page.waitForURL(/\/edit\/new-source$/);
-    await rig.page.selectOption('#source-kind', 'fault');
-    await rig.page.fill('#source-coordinates', '-47.30, -140.35\n-47.60, -140.15');
-    await rig.page.fill('#source-id', 'reef-fault');
-    await rig.page.fill('#source-name', 'Reef Fault');
-    await rig.page.selectOption('#source-setting', 'crustal');
-    await rig.page.selectOption('#source-mechanism', 'strike-slip');
-    await rig.page.fill('#source-dip', '80');
-    await rig.page.fill('#source-lowerDepthKm', '15');
-    await rig.page.selectOption('#source-recurrence-type', 'gutenberg-richter');
-    await rig.page.fill('#source-recurrence-bValue', '1');
-    await rig.page.fill('#source-recurrence-mMin', '5');
-    await rig.page.fill('#source-recurrence-mMax', '7');
-    await rig.page.fill('#source-recurrence-rate', '0.02');
+    for (const [action, selector, value] of NEW_FAULT) {
+      if (action === 'select') await rig.page.selectOption(selector, String(value));
+      else await rig.page.fill(selector, String(value));
+    }
     await rig.page.screenshot({ path: join(ARTIFACTS, 'new-source.png'), fullPage: true });
     const violations = await seriousAxeViolations(rig.page);
     expect(violations, JSON.stringify(violations, null, 2)).toEqual([]);

@@ -88,62 +88,54 @@ async function raceFormWithPut(
 }
 
 describe('no lost update while a body is on its way', () => {
-  test('API communities import', async () => {
+  test.each([
+    { route: 'communities', body: COMMUNITIES_CSV, type: 'text/csv' },
+    {
+      route: 'sources',
+      body: JSON.stringify(sourcesCollection()),
+      type: 'application/geo+json',
+    },
+  ])('API $route import', async ({ route, body, type }) => {
     const id = newStudy();
     const status = await raceWithPut(
       id,
-      `/api/studies/${id}/communities`,
-      new TextEncoder().encode(COMMUNITIES_CSV),
-      'text/csv',
+      `/api/studies/${id}/${route}`,
+      new TextEncoder().encode(body),
+      type,
     );
     expect(status).toBe(200);
     expect(savedName(id)).toBe('Renamed meanwhile');
   });
 
-  test('API sources import', async () => {
+  // `saved`: what the form brings that the study must hold afterwards.
+  test.each([
+    {
+      what: 'add a community',
+      path: 'edit/new-community',
+      form: coastalCommunityForm('second-cove', 'Second Cove', '-140.1', '-47.3', '400'),
+      saved: 'second-cove',
+    },
+    {
+      what: 'edit a community',
+      path: 'edit/communities/test-cove',
+      form: coastalCommunityForm('test-cove', 'Test Cove', '-140.2', '-47.4', '650'),
+      saved: '650',
+    },
+    {
+      what: 'sources upload',
+      path: 'edit/sources-geojson',
+      form: fileForm(
+        'sources.geojson',
+        'application/geo+json',
+        JSON.stringify(sourcesCollection()),
+      ),
+      saved: 'spot-west',
+    },
+  ])('editor: $what', async ({ path, form, saved }) => {
     const id = newStudy();
-    const status = await raceWithPut(
-      id,
-      `/api/studies/${id}/sources`,
-      new TextEncoder().encode(JSON.stringify(sourcesCollection())),
-      'application/geo+json',
-    );
-    expect(status).toBe(200);
-    expect(savedName(id)).toBe('Renamed meanwhile');
-  });
-
-  test('editor: add a community', async () => {
-    const id = newStudy();
-    const status = await raceFormWithPut(
-      id,
-      `/studies/${id}/edit/new-community`,
-      coastalCommunityForm('second-cove', 'Second Cove', '-140.1', '-47.3', '400'),
-    );
+    const status = await raceFormWithPut(id, `/studies/${id}/${path}`, form);
     expect(status).toBe(303);
     expect(savedName(id)).toBe('Renamed meanwhile');
-    expect(page.ctx.store.studies.get(id)?.document).toContain('second-cove');
-  });
-
-  test('editor: edit a community', async () => {
-    const id = newStudy();
-    const status = await raceFormWithPut(
-      id,
-      `/studies/${id}/edit/communities/test-cove`,
-      coastalCommunityForm('test-cove', 'Test Cove', '-140.2', '-47.4', '650'),
-    );
-    expect(status).toBe(303);
-    expect(savedName(id)).toBe('Renamed meanwhile');
-    expect(page.ctx.store.studies.get(id)?.document).toContain('650');
-  });
-
-  test('editor: sources upload', async () => {
-    const id = newStudy();
-    const status = await raceFormWithPut(
-      id,
-      `/studies/${id}/edit/sources-geojson`,
-      fileForm('sources.geojson', 'application/geo+json', JSON.stringify(sourcesCollection())),
-    );
-    expect(status).toBe(303);
-    expect(savedName(id)).toBe('Renamed meanwhile');
+    expect(page.ctx.store.studies.get(id)?.document).toContain(saved);
   });
 });
