@@ -3,6 +3,7 @@ import { describe, expect, test } from 'vitest';
 import { translator } from '../../web/text/translator.ts';
 import { ARTIFACTS, seriousAxeViolations, walkWithTab } from './helpers/chromium.ts';
 import { browserService, describeContext, sendFile } from './helpers/browser-service.ts';
+import { validStudy } from '../study/fixtures.ts';
 
 /**
  * The study editor in Chromium, with and without script: uploads that do not validate show
@@ -16,31 +17,11 @@ const rig = browserService({
 });
 const en = translator('en');
 
-/** A GeoJSON collection whose fault dips 120°, beyond the 0–90° a dip can have. */
+/** A GeoJSON collection of one fault, the validation fixture's first, dipping 120°: beyond the 0–90° a dip can have. */
+const [fault] = validStudy().sources.features;
 const BROKEN_GEOJSON = JSON.stringify({
   type: 'FeatureCollection',
-  features: [
-    {
-      type: 'Feature',
-      geometry: {
-        type: 'LineString',
-        coordinates: [
-          [-150.2, -47.0],
-          [-150.3, -47.3],
-        ],
-      },
-      properties: {
-        id: 'steep-fault',
-        name: 'Steep fault',
-        setting: 'crustal',
-        mechanism: 'normal',
-        dip: 120,
-        upperDepthKm: 0,
-        lowerDepthKm: 12,
-        recurrence: { type: 'fixed', magnitude: 6.2, rate: 0.001 },
-      },
-    },
-  ],
+  features: [{ ...fault, properties: { ...fault.properties, id: 'steep-fault', dip: 120 } }],
 });
 
 for (const javaScriptEnabled of [true, false]) {

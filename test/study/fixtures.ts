@@ -1,4 +1,5 @@
 import { boxRing } from '../helpers/box-ring.ts';
+import { lineFeature } from '../helpers/line-feature.ts';
 
 /**
  * A small valid study in an invented open-ocean setting (all values invented, for validation
@@ -23,16 +24,12 @@ export function validStudy(): Record<string, any> {
     sources: {
       type: 'FeatureCollection',
       features: [
-        {
-          type: 'Feature',
-          geometry: {
-            type: 'LineString',
-            coordinates: [
-              [-140.5, -47.6],
-              [-140.5, -47.2],
-            ],
-          },
-          properties: {
+        lineFeature(
+          [
+            [-140.5, -47.6],
+            [-140.5, -47.2],
+          ],
+          {
             id: 'fault-a',
             name: 'Fault A',
             setting: 'crustal',
@@ -42,18 +39,14 @@ export function validStudy(): Record<string, any> {
             lowerDepthKm: 15,
             recurrence: { type: 'gutenberg-richter', bValue: 1, mMin: 5, mMax: 7.2, aValue: 3.1 },
           },
-        },
-        {
-          type: 'Feature',
-          geometry: {
-            type: 'LineString',
-            coordinates: [
-              [-140.0, -47.8],
-              [-139.8, -47.5],
-              [-139.7, -47.1],
-            ],
-          },
-          properties: {
+        ),
+        lineFeature(
+          [
+            [-140.0, -47.8],
+            [-139.8, -47.5],
+            [-139.7, -47.1],
+          ],
+          {
             id: 'fault-b',
             setting: 'crustal',
             rake: 95,
@@ -68,7 +61,7 @@ export function validStudy(): Record<string, any> {
               shape: 'characteristic',
             },
           },
-        },
+        ),
         {
           type: 'Feature',
           geometry: {
