@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { normalSurvival } from '../../api/engine/hazard/normal-cdf.ts';
 import { expectRelative } from '../helpers/close.ts';
-import { expectCheckedValid, runCapturing as run } from './helpers/run-cli.ts';
+import { expectCheckedValid, runCapturing as run, runJson } from './helpers/run-cli.ts';
 
 const TINY = new URL('fixtures/tiny.study.json', import.meta.url).pathname;
 const DEMO = new URL('../../data-demo/demo.study.json', import.meta.url).pathname;
@@ -106,19 +106,12 @@ describe('tremora check', () => {
 });
 
 describe('tremora motion --json', () => {
+  /** An M 6.5 earthquake 20 km away (Rjb) by `model`, as JSON. */
+  const m65At20Km = (model: string) =>
+    runJson('motion', '--model', model, '--magnitude', '6.5', '--rjb', '20');
+
   it('prints the median in g and the sigmas in natural-log units', async () => {
-    const { code, out } = await run(
-      'motion',
-      '--model',
-      'Cornell79',
-      '--magnitude',
-      '6.5',
-      '--rjb',
-      '20',
-      '--json',
-    );
-    expect(code).toBe(0);
-    const result = JSON.parse(out);
+    const result = await m65At20Km('Cornell79');
     // Default hypocentral depth 10 km: R = sqrt(20² + 10²).
     expectRelative(
       result.measures.PGA.median,
@@ -175,10 +168,7 @@ describe('tremora motion --json', () => {
   });
 
   it('takes a model name in any case', async () => {
-    const lower = JSON.parse(
-      (await run('motion', '--model', 'cornell79', '--magnitude', '6.5', '--rjb', '20', '--json'))
-        .out,
-    );
+    const lower = await m65At20Km('cornell79');
     expect(lower.model).toBe('Cornell79');
     expectRelative(
       lower.measures.PGA.median,
@@ -191,9 +181,7 @@ describe('tremora motion --json', () => {
 
 describe('tremora screen', () => {
   it('gives the result keys of the study format, with the hazard of a point source below the village', async () => {
-    const { code, out } = await run('screen', TINY, '--json');
-    expect(code).toBe(0);
-    const result = JSON.parse(out);
+    const result = await runJson('screen', TINY);
     const [c] = result.communities;
     expect(Object.keys(c)).toEqual(
       expect.arrayContaining([
@@ -249,25 +237,14 @@ describe('tremora screen', () => {
     study.groundMotion.crustal[0].model = 'CORNELL79';
     const file = join(dir, 'upper.study.json');
     await writeFile(file, JSON.stringify(study));
-    const { code, out } = await run('screen', file, '--json');
-    expect(code).toBe(0);
-    expect(JSON.parse(out).provenance.models.crustal).toEqual([{ model: 'Cornell79', weight: 1 }]);
+    const result = await runJson('screen', file);
+    expect(result.provenance.models.crustal).toEqual([{ model: 'Cornell79', weight: 1 }]);
   });
 });
 
 describe('tremora scenario', () => {
   it('prints medians at every community and exits 2 on an unknown source', async () => {
-    const { code, out } = await run(
-      'scenario',
-      TINY,
-      '--source',
-      'below',
-      '--magnitude',
-      '6.5',
-      '--json',
-    );
-    expect(code).toBe(0);
-    const result = JSON.parse(out);
+    const result = await runJson('scenario', TINY, '--source', 'below', '--magnitude', '6.5');
     expectRelative(
       result.communities[0].motions.PGA.median,
       Math.exp(cornellLnPga(6.5, 10)),

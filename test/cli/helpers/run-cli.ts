@@ -19,3 +19,10 @@ export async function expectCheckedValid(studyPath: string, summary: RegExp): Pr
   expect(code).toBe(0);
   expect(out).toMatch(summary);
 }
+
+/** Runs the CLI with `--json` added: exit 0, and its standard output read as JSON. */
+export async function runJson(...argv: string[]): Promise<any> {
+  const { code, out } = await runCapturing(...argv, '--json');
+  expect(code).toBe(0);
+  return JSON.parse(out);
+}
