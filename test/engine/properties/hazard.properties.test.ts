@@ -5,6 +5,7 @@ import { modelCatalog } from '../../../api/engine/motion/registry.ts';
 import type { CommunityResult } from '../../../api/engine/results.ts';
 import { screenStudy } from '../../../api/engine/screen-study.ts';
 import { loadStudy } from '../../../api/study/load-study.ts';
+import { lineFeature } from '../../helpers/line-feature.ts';
 import { referenceScreening } from '../../helpers/reference-hazard/reference-screening.ts';
 import {
   type Doc,
@@ -34,6 +35,10 @@ type SumPath = (typeof PATHS)[number];
 const RUNS = 40;
 /** Fixed seed so a failure reproduces; fast-check prints the seed and the shrunk counterexample. */
 const SEED = 20_240_817;
+
+/** Checks `check` on RUNS generated studies drawn from SEED. */
+const forEachStudy = (check: (doc: Doc) => void) =>
+  fc.assert(fc.property(studyDocArb(), check), { numRuns: RUNS, seed: SEED });
 
 const figures: string[] = [];
 afterAll(() =>
@@ -73,71 +78,60 @@ const ROUNDING = 1e-12;
 describe.each(PATHS)('hazard curves (%s path)', (path) => {
   it('are finite, non-negative and non-increasing, and so are the chances of exceeding', () => {
     let curves = 0;
-    fc.assert(
-      fc.property(studyDocArb(), (doc) => {
-        const result = screen(doc, path);
-        for (const c of result.communities) {
-          for (const [label, levels, rates] of curvesOf(c)) {
-            curves++;
-            expect(rates.length, label).toBe(levels.length);
-            rates.forEach((r, i) => {
+    forEachStudy((doc) => {
+      const result = screen(doc, path);
+      for (const c of result.communities) {
+        for (const [label, levels, rates] of curvesOf(c)) {
+          curves++;
+          expect(rates.length, label).toBe(levels.length);
+          rates.forEach((r, i) => {
+            expect(Number.isFinite(r) && r >= 0, `${label}: rate ${r} at level ${levels[i]}`).toBe(
+              true,
+            );
+            const previous = rates[i - 1];
+            if (previous !== undefined)
               expect(
-                Number.isFinite(r) && r >= 0,
-                `${label}: rate ${r} at level ${levels[i]}`,
+                r <= previous * (1 + ROUNDING),
+                `${label}: ${r} at ${levels[i]} after ${previous}`,
               ).toBe(true);
-              const previous = rates[i - 1];
-              if (previous !== undefined)
-                expect(
-                  r <= previous * (1 + ROUNDING),
-                  `${label}: ${r} at ${levels[i]} after ${previous}`,
-                ).toBe(true);
+          });
+        }
+        for (const [years, byMeasure] of Object.entries(c.chanceOfExceeding)) {
+          for (const [key, chances] of Object.entries(byMeasure)) {
+            chances.forEach((p, i) => {
+              expect(p >= 0 && p <= 1, `${c.communityId} ${key} ${years} yr: chance ${p}`).toBe(
+                true,
+              );
+              const previous = chances[i - 1];
+              if (previous !== undefined) expect(p <= previous * (1 + ROUNDING)).toBe(true);
             });
           }
-          for (const [years, byMeasure] of Object.entries(c.chanceOfExceeding)) {
-            for (const [key, chances] of Object.entries(byMeasure)) {
-              chances.forEach((p, i) => {
-                expect(p >= 0 && p <= 1, `${c.communityId} ${key} ${years} yr: chance ${p}`).toBe(
-                  true,
-                );
-                const previous = chances[i - 1];
-                if (previous !== undefined) expect(p <= previous * (1 + ROUNDING)).toBe(true);
-              });
-            }
-          }
         }
-      }),
-      { numRuns: RUNS, seed: SEED },
-    );
+      }
+    });
     figures.push(`${path}: ${curves} curves non-negative and non-increasing`);
   });
 
   it('deaggregation shares by source and by M–R–ε bin each sum to 1', () => {
     let checked = 0;
-    fc.assert(
-      fc.property(studyDocArb(), (doc) => {
-        for (const c of screen(doc, path).communities) {
-          for (const [years, d] of Object.entries(c.deaggregation)) {
-            checked++;
-            const label = `${c.communityId} at ${years} years`;
-            for (const share of [
-              ...d.bySource.map((s) => s.share),
-              ...d.bins.map((b) => b.share),
-            ]) {
-              expect(share >= 0 && share <= 1 + ROUNDING, `${label}: share ${share}`).toBe(true);
-            }
-            // Shares are ratios of compensated sums: their sum is 1 to a few units in the last place.
-            const bySource = d.bySource.reduce((s, x) => s + x.share, 0);
-            const byBin = d.bins.reduce((s, x) => s + x.share, 0);
-            expect(
-              Math.abs(bySource - 1),
-              `${label}: source shares sum to ${bySource}`,
-            ).toBeLessThan(1e-9);
-            expect(Math.abs(byBin - 1), `${label}: bin shares sum to ${byBin}`).toBeLessThan(1e-9);
+    forEachStudy((doc) => {
+      for (const c of screen(doc, path).communities) {
+        for (const [years, d] of Object.entries(c.deaggregation)) {
+          checked++;
+          const label = `${c.communityId} at ${years} years`;
+          for (const share of [...d.bySource.map((s) => s.share), ...d.bins.map((b) => b.share)]) {
+            expect(share >= 0 && share <= 1 + ROUNDING, `${label}: share ${share}`).toBe(true);
           }
+          // Shares are ratios of compensated sums: their sum is 1 to a few units in the last place.
+          const bySource = d.bySource.reduce((s, x) => s + x.share, 0);
+          const byBin = d.bins.reduce((s, x) => s + x.share, 0);
+          expect(Math.abs(bySource - 1), `${label}: source shares sum to ${bySource}`).toBeLessThan(
+            1e-9,
+          );
+          expect(Math.abs(byBin - 1), `${label}: bin shares sum to ${byBin}`).toBeLessThan(1e-9);
         }
-      }),
-      { numRuns: RUNS, seed: SEED },
-    );
+      }
+    });
     figures.push(`${path}: ${checked} deaggregations with shares summing to 1`);
     // Without any deaggregation the property would hold vacuously.
     expect(checked).toBeGreaterThan(0);
@@ -168,28 +162,25 @@ const LINEARITY = 1e-9;
 describe.each(PATHS)('linearity in the rates (%s path)', (path) => {
   it('doubling every rate doubles every exceedance rate', () => {
     let compared = 0;
-    fc.assert(
-      fc.property(studyDocArb(), (doc) => {
-        const once = screen(doc, path).communities;
-        const twice = screen(doubledRates(doc), path).communities;
-        once.forEach((c, ci) => {
-          const d = twice[ci] as CommunityResult;
-          const doubled = [...curvesOf(d)];
-          [...curvesOf(c)].forEach(([label, , rates], k) => {
-            const other = (doubled[k] as [string, readonly number[], readonly number[]])[2];
-            rates.forEach((r, i) => {
-              compared++;
-              const got = other[i] as number;
-              expect(
-                Math.abs(got - 2 * r) <= LINEARITY * 2 * r,
-                `${label}: ${got} for twice ${r}`,
-              ).toBe(true);
-            });
+    forEachStudy((doc) => {
+      const once = screen(doc, path).communities;
+      const twice = screen(doubledRates(doc), path).communities;
+      once.forEach((c, ci) => {
+        const d = twice[ci] as CommunityResult;
+        const doubled = [...curvesOf(d)];
+        [...curvesOf(c)].forEach(([label, , rates], k) => {
+          const other = (doubled[k] as [string, readonly number[], readonly number[]])[2];
+          rates.forEach((r, i) => {
+            compared++;
+            const got = other[i] as number;
+            expect(
+              Math.abs(got - 2 * r) <= LINEARITY * 2 * r,
+              `${label}: ${got} for twice ${r}`,
+            ).toBe(true);
           });
         });
-      }),
-      { numRuns: RUNS, seed: SEED },
-    );
+      });
+    });
     figures.push(`${path}: ${compared} exceedance rates doubled with the rates`);
   });
 });
@@ -234,16 +225,12 @@ function withFarSources(doc: Doc, recurrences: readonly [Doc, Doc]): Doc {
         recurrence: recurrences[0],
       },
     },
-    {
-      type: 'Feature',
-      geometry: {
-        type: 'LineString',
-        coordinates: [
-          [east, midLat],
-          [east - 0.25, midLat],
-        ],
-      },
-      properties: {
+    lineFeature(
+      [
+        [east, midLat],
+        [east - 0.25, midLat],
+      ],
+      {
         id: 'far-east',
         setting: 'crustal',
         mechanism: 'strike-slip',
@@ -251,7 +238,7 @@ function withFarSources(doc: Doc, recurrences: readonly [Doc, Doc]): Doc {
         lowerDepthKm: 15,
         recurrence: recurrences[1],
       },
-    },
+    ),
   );
   return copy;
 }
