@@ -1,4 +1,6 @@
 import fc from 'fast-check';
+import { boxRing } from '../helpers/box-ring.ts';
+import { lineFeature } from '../helpers/line-feature.ts';
 
 /**
  * fast-check generators of study documents (DESIGN.md section 2) for property tests: small,
@@ -108,23 +110,15 @@ export function faultSourceArb(id: string): fc.Arbitrary<Doc> {
       recurrence: fc.oneof(fixedRecurrenceArb, grRecurrenceArb, momentRecurrenceArb),
     })
     .filter(({ dx, dy }) => Math.hypot(dx * 0.68, dy) >= 4)
-    .map(({ lon, lat, dx, dy, thicknessKm, upperDepthKm, ...p }) => ({
-      type: 'Feature',
-      geometry: {
-        type: 'LineString',
-        coordinates: [
+    .map(({ lon, lat, dx, dy, thicknessKm, upperDepthKm, ...p }) =>
+      lineFeature(
+        [
           [lon, lat],
           [lon + dx * GRID_DEG, lat + dy * GRID_DEG],
         ],
-      },
-      properties: {
-        id,
-        setting: 'crustal',
-        upperDepthKm,
-        lowerDepthKm: upperDepthKm + thicknessKm,
-        ...p,
-      },
-    }));
+        { id, setting: 'crustal', upperDepthKm, lowerDepthKm: upperDepthKm + thicknessKm, ...p },
+      ),
+    );
 }
 
 /** A small square zone, 1/8 to 1/4 degree a side. */
@@ -143,18 +137,7 @@ export function zoneSourceArb(id: string): fc.Arbitrary<Doc> {
       const d = side * GRID_DEG;
       return {
         type: 'Feature',
-        geometry: {
-          type: 'Polygon',
-          coordinates: [
-            [
-              [lon, lat],
-              [lon + d, lat],
-              [lon + d, lat + d],
-              [lon, lat + d],
-              [lon, lat],
-            ],
-          ],
-        },
+        geometry: { type: 'Polygon', coordinates: [boxRing(lon, lat, lon + d, lat + d)] },
         properties: { id, setting: 'crustal', ...p },
       };
     });
