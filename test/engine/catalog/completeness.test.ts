@@ -75,24 +75,13 @@ describe('maximum curvature (Wiemer & Wyss 2000) with the +0.2 correction (Woess
 });
 
 describe('completeness over time', () => {
-  // Two eras, hand-made: before 1950 the histogram peaks at 4.0 (Mc 4.2), from 1950 at 3.0
+  // Two eras, hand-made, with one histogram of 50 events falling from its peak bin (20, 12, 8,
+  // 5, 3, 2 events in bins of 0.1): before 1950 it peaks at 4.0 (Mc 4.2), from 1950 at 3.0
   // (Mc 3.2). Two windows of 50 events in each era.
-  const early: [number, number][] = [
-    [4.0, 20],
-    [4.1, 12],
-    [4.2, 8],
-    [4.3, 5],
-    [4.4, 3],
-    [4.5, 2],
-  ];
-  const late: [number, number][] = [
-    [3.0, 20],
-    [3.1, 12],
-    [3.2, 8],
-    [3.3, 5],
-    [3.4, 3],
-    [3.5, 2],
-  ];
+  const fallingFrom = (peak: number): [number, number][] =>
+    [20, 12, 8, 5, 3, 2].map((count, i) => [Math.round(peak * 10 + i) / 10, count]);
+  const early = fallingFrom(4.0);
+  const late = fallingFrom(3.0);
   const events: CatalogEvent[] = [];
   const windowStarts = [
     Date.UTC(1900, 0, 1),
