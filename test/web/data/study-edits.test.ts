@@ -25,6 +25,9 @@ const form = {
 };
 
 const inputsOf = (raw: Record<string, unknown>) => ({ document: JSON.stringify(raw), raw });
+/** What an import (a communities CSV or a sources GeoJSON) of `text` into the small study gives. */
+const importedIntoSmallStudy = (importer: typeof importCommunitiesCsv, text: string) =>
+  importer(inputsOf(smallStudy()), text, modelCatalog);
 const communitiesOf = (raw: Record<string, unknown>) => {
   const loaded = loadStudy(raw, { models: modelCatalog });
   if (!loaded.ok) throw new Error('fixture study does not load');
@@ -68,28 +71,23 @@ describe('study edits', () => {
   });
 
   test('a CSV with a bad line names the line; a good one is kept as the study file', () => {
-    const raw = smallStudy();
-    const bad = importCommunitiesCsv(
-      inputsOf(raw),
+    const bad = importedIntoSmallStudy(
+      importCommunitiesCsv,
       'id,name,lon,lat,vs30\ncove,Cove,-140.2,-47.4,500\nreef,Reef,-140.3,-95,500\n',
-      modelCatalog,
     );
     expect(bad.ok).toBe(false);
     if (!bad.ok) expect(bad.issues.map((i) => i.path)).toEqual(['communities[line 3].lat']);
-    const good = importCommunitiesCsv(
-      inputsOf(raw),
+    const good = importedIntoSmallStudy(
+      importCommunitiesCsv,
       'id,name,lon,lat,vs30\ncove,Cove,-140.2,-47.4,500\n',
-      modelCatalog,
     );
     expect(good.ok && good.file?.kind).toBe('communities-csv');
   });
 
   test('malformed GeoJSON is one issue at "sources"', () => {
-    const raw = smallStudy();
-    const outcome = importSourcesGeoJson(
-      inputsOf(raw),
+    const outcome = importedIntoSmallStudy(
+      importSourcesGeoJson,
       '{\n  "type": "FeatureCollection",\n  "features": [,]\n}',
-      modelCatalog,
     );
     expect(outcome.ok).toBe(false);
     if (!outcome.ok) {
