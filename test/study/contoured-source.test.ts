@@ -13,23 +13,10 @@ import { validStudy } from './fixtures.ts';
  */
 const load = (raw: unknown) => loadStudy(raw, { models: testCatalog });
 
-const CONTOURS = [
-  [
-    [-140.6, -47.8],
-    [-140.6, -47.5],
-    [-140.6, -47.2],
-  ],
-  [
-    [-140.4, -47.8],
-    [-140.4, -47.5],
-    [-140.4, -47.2],
-  ],
-  [
-    [-140.1, -47.8],
-    [-140.1, -47.5],
-    [-140.1, -47.2],
-  ],
-];
+/** Three contours running north–south at 140.6°, 140.4° and 140.1° W, each through 47.8°, 47.5° and 47.2° S. */
+const CONTOURS = [-140.6, -140.4, -140.1].map((lon) =>
+  [-47.8, -47.5, -47.2].map((lat) => [lon, lat]),
+);
 
 function withContours(
   coordinates: unknown,
