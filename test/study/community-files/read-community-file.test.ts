@@ -4,6 +4,7 @@ import { CommunityFileProblem } from '../../../api/study/community-files/file-pr
 import { readCommunityFile } from '../../../api/study/community-files/read-community-file.ts';
 import { tableCommunities } from '../../../api/study/community-files/table-communities.ts';
 import { IssueList } from '../../../api/study/issues.ts';
+import { boxRing } from '../../helpers/box-ring.ts';
 import { expectClose } from '../../helpers/close.ts';
 import {
   kmlText,
@@ -357,17 +358,7 @@ describe('communities from GeoJSON', () => {
         {
           type: 'Feature',
           properties: { name: 'Reef' },
-          geometry: {
-            type: 'Polygon',
-            coordinates: [
-              [
-                [-140, -47],
-                [-140.1, -47],
-                [-140, -47.1],
-                [-140, -47],
-              ],
-            ],
-          },
+          geometry: { type: 'Polygon', coordinates: [boxRing(-140.1, -47.1, -140, -47)] },
         },
       ],
     };
