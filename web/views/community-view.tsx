@@ -24,6 +24,7 @@ import { VisitRecords } from './visit-records.tsx';
 import { SlideImageLinks } from './slide-image-links.tsx';
 import type { VisitRecord } from '../../api/store/visit-repository.ts';
 import { DataTable, LabelledCell } from '../components/data-table.tsx';
+import { WarningDetails } from '../components/warning-details.tsx';
 import { LimitsList } from './limits-view.tsx';
 
 export interface CommunityViewProps {
@@ -350,16 +351,7 @@ export function CommunityView(props: CommunityViewProps) {
         <p>
           <a href="/limits">{tr.text('caution.limitsLink')}</a>
         </p>
-        {result.warnings.length > 0 && (
-          <details>
-            <summary>{tr.text('community.warnings')}</summary>
-            <ul>
-              {result.warnings.map((w) => (
-                <li>{tr.english(w)}</li>
-              ))}
-            </ul>
-          </details>
-        )}
+        <WarningDetails tr={tr} summary="community.warnings" warnings={result.warnings} />
         <ProvenanceLine tr={tr} provenance={props.provenance} />
       </section>
     </PageShell>

@@ -58,20 +58,17 @@ function TimeToAct(props: {
           {tr.text('tsunami.time.height', { height: tr.number(result.highGroundM) })}
         </p>
       )}
-      {ground?.kind === 'already-above' && (
+      {ground && ground.kind !== 'found' && (
         <p class="tsunami-ground">
-          {tr.text('tsunami.time.above', {
-            elevation: tr.number(ground.elevationM),
-            height: tr.number(ground.heightM),
-          })}
-        </p>
-      )}
-      {ground?.kind === 'none' && (
-        <p class="tsunami-ground">
-          {tr.text('tsunami.time.none', {
-            height: tr.number(ground.heightM),
-            km: tr.number(ground.searchKm),
-          })}
+          {ground.kind === 'already-above'
+            ? tr.text('tsunami.time.above', {
+                elevation: tr.number(ground.elevationM),
+                height: tr.number(ground.heightM),
+              })
+            : tr.text('tsunami.time.none', {
+                height: tr.number(ground.heightM),
+                km: tr.number(ground.searchKm),
+              })}
         </p>
       )}
       {!props.compact && (
