@@ -1,39 +1,46 @@
 import type { Context } from 'hono';
-import { isFinished } from '../store/index.ts';
-import type { JobRecord } from '../store/job-table.ts';
+import { mapRunsOf } from '../operations/map-runs.ts';
 import type { ServiceContext } from '../operations/service-context.ts';
+import { isFinished, type MapRunRecord, type RunRecord } from '../store/index.ts';
 import { HttpError, found } from './http-error.ts';
 
-/** The store's side of one kind of run: screening runs or map runs. */
-interface JobStore<R extends JobRecord> {
-  get(id: string): R | undefined;
-  listForStudy(studyId: string): R[];
-  finishWithout(id: string, status: 'cancelled', error: string): boolean;
+/** The record of each kind of run, by the name the API gives it. */
+interface JobRecords {
+  readonly run: RunRecord;
+  readonly map: MapRunRecord;
 }
 
-export interface JobHandlersOptions<R extends JobRecord> {
-  /** The kind's name in answers and messages ("run", "map"); its plural keys the study's list. */
-  readonly noun: 'run' | 'map';
-  /** The path parameter that holds the run's id (`runId` in `/runs/:runId`). */
-  readonly param: string;
-  readonly store: JobStore<R>;
-  /** The record as the API shows it. */
-  readonly json: (record: R) => unknown;
-  /** Stops a run of this process; false when none of its threads is working on it. */
-  readonly cancel: (id: string) => boolean;
+/** Where the store keeps one kind of run, and what stops one of this process. */
+interface JobKind<R> {
+  store(ctx: ServiceContext): {
+    get(id: string): R | undefined;
+    listForStudy(studyId: string): R[];
+    finishWithout(id: string, status: 'cancelled', error: string): boolean;
+  };
+  /** Stops a run; false when none of this process's threads is working on it. */
+  cancel(ctx: ServiceContext, id: string): boolean;
 }
+
+const KINDS: { readonly [K in keyof JobRecords]: JobKind<JobRecords[K]> } = {
+  run: { store: (ctx) => ctx.store.runs, cancel: (ctx, id) => ctx.scheduler.cancel(id) },
+  map: { store: (ctx) => ctx.store.maps, cancel: (ctx, id) => mapRunsOf(ctx).cancel(id) },
+};
 
 /**
  * What the API does alike for screening runs and map runs, as handlers for the routes that name
- * their paths: a study's list, one by id (404 when there is none), and its cancel.
+ * their paths (`/studies/:id/<noun>s`, `/<noun>s/:<noun>Id`, `/<noun>s/:<noun>Id/cancel`): a
+ * study's list, one by id (`find`: 404 when there is none), and its cancel. `json` is the record
+ * as the API shows it.
  */
-export function jobHandlers<R extends JobRecord>(
+export function jobHandlers<K extends keyof JobRecords>(
   ctx: ServiceContext,
-  options: JobHandlersOptions<R>,
+  noun: K,
+  json: (record: JobRecords[K]) => unknown,
 ) {
-  const { noun, store, json } = options;
-  const find = (id: string): R => found(store.get(id), noun, id);
-  const idOf = (c: Context) => c.req.param(options.param) as string;
+  const kind = KINDS[noun] as JobKind<JobRecords[K]>;
+  const store = kind.store(ctx);
+  const find = (id: string): JobRecords[K] => found(store.get(id), noun, id);
+  const idOf = (c: Context) => c.req.param(`${noun}Id`) as string;
   return {
     find,
     list: (c: Context) => {
@@ -51,7 +58,7 @@ export function jobHandlers<R extends JobRecord>(
           `${noun} "${id}" is already ${run.status}; only a queued or running ${noun} can be cancelled`,
         );
       // Every unfinished run belongs to this process (the store marks the others interrupted at open).
-      if (!options.cancel(id)) store.finishWithout(id, 'cancelled', 'cancelled on request');
+      if (!kind.cancel(ctx, id)) store.finishWithout(id, 'cancelled', 'cancelled on request');
       return c.json(json(find(id)), 202);
     },
   };

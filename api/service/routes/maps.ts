@@ -3,7 +3,7 @@ import type { MapRunRecord } from '../../store/index.ts';
 import { HttpError, notFound, found } from '../http-error.ts';
 import { jobHandlers } from '../job-handlers.ts';
 import { readMapRequest } from '../../operations/map-request.ts';
-import { mapRunsOf, type MapRuns } from '../../operations/map-runs.ts';
+import type { MapRuns } from '../../operations/map-runs.ts';
 import { readJsonObject } from '../request-body.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
 import { startMapRun } from '../../operations/start-map-run.ts';
@@ -35,13 +35,7 @@ export const mapRunJson = (run: MapRunRecord) => ({
 export function mapRoutes(ctx: ServiceContext & { readonly maps?: MapRuns }): Hono {
   const app = new Hono();
   const { studies, maps } = ctx.store;
-  const jobs = jobHandlers(ctx, {
-    noun: 'map',
-    param: 'mapId',
-    store: maps,
-    json: mapRunJson,
-    cancel: (id) => mapRunsOf(ctx).cancel(id),
-  });
+  const jobs = jobHandlers(ctx, 'map', mapRunJson);
 
   app.post('/studies/:id/maps', async (c) => {
     const id = c.req.param('id');

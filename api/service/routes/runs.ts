@@ -36,13 +36,7 @@ export const runJson = (run: RunRecord) => ({
 export function runRoutes(ctx: ServiceContext): Hono {
   const app = new Hono();
   const { studies, runs } = ctx.store;
-  const jobs = jobHandlers(ctx, {
-    noun: 'run',
-    param: 'runId',
-    store: runs,
-    json: runJson,
-    cancel: (id) => ctx.scheduler.cancel(id),
-  });
+  const jobs = jobHandlers(ctx, 'run', runJson);
 
   /** A done run's results with the study it computed (for coordinates); 409 before that. */
   const finishedResults = (id: string) => {
