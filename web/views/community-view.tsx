@@ -14,6 +14,7 @@ import { HazardCurveLegend } from '../plots/hazard-curve-plot.tsx';
 import { ShareBars } from '../plots/share-bars.tsx';
 import type { TextKey } from '../text/text-key.ts';
 import type { Translator } from '../text/translator.ts';
+import type { SheetBlockProps } from './sheet-block.ts';
 import { FeltList } from './felt-list.tsx';
 import { NearestFaults } from './nearest-faults.tsx';
 import { SafetyAdvice } from './safety-advice.tsx';
@@ -84,12 +85,7 @@ export function Headline(props: {
 }
 
 /** What the shaking at each return-period level feels like and does, in our own words. */
-export function ShakingLevels(props: {
-  readonly tr: Translator;
-  readonly data: CommunityPageData;
-  readonly headingLevel: 2 | 3;
-  readonly compact?: boolean;
-}) {
+export function ShakingLevels(props: SheetBlockProps & { readonly data: CommunityPageData }) {
   const { tr, data } = props;
   const H = props.headingLevel === 2 ? 'h3' : 'h4';
   return (
