@@ -8,23 +8,13 @@ import {
   type MapDescription,
 } from '../engine/map/map-geojson.ts';
 import type { Study } from '../engine/model.ts';
-import { JobLifecycle, type LogError } from '../jobs/job-lifecycle.ts';
+import { PooledJobs, type PooledJobsOptions } from '../jobs/pooled-jobs.ts';
 import { mapLedger } from '../jobs/store-ledgers.ts';
 import { buildProvenance } from '../results/provenance.ts';
-import type { MapRunRecord, MapRunRequest, Store } from '../store/index.ts';
+import type { MapRunOutputs, MapRunRecord, MapRunRequest, Store } from '../store/index.ts';
 import type { ChunkPool } from '../workers/chunk-runner.ts';
 import { hazardMapOnPool } from '../workers/parallel-map.ts';
 import type { WorkerPool } from '../workers/worker-pool.ts';
-
-export interface MapRunsOptions {
-  readonly store: Store;
-  /** The threads maps are spread over (the run pool). */
-  readonly pool: WorkerPool;
-  readonly toolVersion: string;
-  readonly logError?: LogError;
-  /** Where the map's chunks of points go (the Redis queue); the pool's threads by default. */
-  readonly chunks?: ChunkPool;
-}
 
 /**
  * Hazard-map runs of saved studies, spread over the run pool (parallel-map.ts) and recorded
@@ -34,21 +24,13 @@ export interface MapRunsOptions {
  * interrupted by a shutdown. Only the GeoJSON of a map still computing is held here, piece by
  * piece; a finished map is read from the store and outlives the service.
  */
-export class MapRuns {
+export class MapRuns extends PooledJobs<MapDescription, MapRunOutputs> {
   readonly #store: Store;
-  readonly #pool: WorkerPool;
-  readonly #toolVersion: string;
-  readonly #chunks: ChunkPool | undefined;
-  readonly #ledger: ReturnType<typeof mapLedger>;
-  readonly #jobs: JobLifecycle;
 
-  constructor(options: MapRunsOptions) {
+  /** `chunks`: where the map's chunks of points go; the pool's threads by default. */
+  constructor(options: PooledJobsOptions) {
+    super(options, mapLedger(options.store));
     this.#store = options.store;
-    this.#pool = options.pool;
-    this.#toolVersion = options.toolVersion;
-    this.#chunks = options.chunks;
-    this.#ledger = mapLedger(options.store);
-    this.#jobs = new JobLifecycle(options.logError);
   }
 
   /**
@@ -67,14 +49,14 @@ export class MapRuns {
     const pieces: string[] = [];
     let description: MapDescription | undefined;
     let first = true;
-    this.#jobs.start({
+    this.jobs.start({
       id: record.id,
-      ledger: this.#ledger,
+      ledger: this.ledger,
       kind: 'map run',
       progressOf: 'points',
       launch: (signals) =>
-        hazardMapOnPool(this.#pool, study, terrain ? { ...request, terrain } : request, {
-          ...(this.#chunks ? { chunks: this.#chunks } : {}),
+        hazardMapOnPool(this.pool, study, terrain ? { ...request, terrain } : request, {
+          ...(this.chunks ? { chunks: this.chunks } : {}),
           onStart: (d) => {
             description = mapDescription(d);
             pieces.push(mapGeoJsonHead(d));
@@ -93,7 +75,7 @@ export class MapRuns {
         const provenance = {
           ...buildProvenance({
             study,
-            toolVersion: this.#toolVersion,
+            toolVersion: this.toolVersion,
             inputHash,
             startedAt,
             finishedAt,
@@ -112,15 +94,6 @@ export class MapRuns {
       },
     });
     return record;
-  }
-
-  /** Asks an active map run to stop; false when it is not active in this process. */
-  cancel(id: string): boolean {
-    return this.#jobs.cancel(id);
-  }
-
-  get activeCount(): number {
-    return this.#jobs.activeCount;
   }
 }
 

@@ -77,6 +77,20 @@ export const FIRST_DIRECTION: Readonly<Record<SortKey, SortDirection>> = {
   fault: 'ascending',
 };
 
+/** A column's value for a row; undefined (sorted last) where the row has none. */
+type SortValue = (row: RankedCommunity) => number | string | undefined;
+
+/** What each column sorts by. */
+const SORT_VALUE: Readonly<Record<SortKey, SortValue>> = {
+  rank: (r) => r.rank,
+  name: (r) => r.name,
+  band: (r) => BAND_ORDER.indexOf(r.bandId),
+  chance: (r) => r.chanceVii,
+  people: (r) => r.population,
+  // Results saved before faults carried rrupKm sort by their Joyner-Boore distance.
+  fault: (r) => r.nearestFault && (r.nearestFault.rrupKm ?? r.nearestFault.distanceKm),
+};
+
 /**
  * The ranked rows sorted by one column; ties keep the ranking's order. "band" ascending puts
  * Refer first on top; a missing population or fault sorts last either way.
@@ -87,25 +101,7 @@ export function sortRanked(
   direction: SortDirection,
 ): RankedCommunity[] {
   const sign = direction === 'ascending' ? 1 : -1;
-  const value = (r: RankedCommunity): number | string | undefined => {
-    switch (key) {
-      case 'rank':
-        return r.rank;
-      case 'name':
-        return r.name;
-      case 'band':
-        return BAND_ORDER.indexOf(r.bandId);
-      case 'chance':
-        return r.chanceVii;
-      case 'people':
-        return r.population;
-      case 'fault':
-        // Results saved before faults carried rrupKm sort by their Joyner-Boore distance.
-        return r.nearestFault === undefined
-          ? undefined
-          : (r.nearestFault.rrupKm ?? r.nearestFault.distanceKm);
-    }
-  };
+  const value = SORT_VALUE[key];
   return [...rows].sort((a, b) => {
     const va = value(a);
     const vb = value(b);

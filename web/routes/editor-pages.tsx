@@ -163,23 +163,26 @@ export function editorPages(app: Hono, kit: PageKit): void {
       : communityForm(c, loaded.data, undefined, EMPTY_FORM, []);
   });
 
-  app.post('/studies/:id/edit/new-community', async (c) => {
+  /**
+   * Saves the posted community, a new one when `communityId` is undefined, and goes back to the
+   * editor; the form again with its problems when the study would not be valid.
+   */
+  const postCommunity = async (c: Context, communityId: string | undefined) => {
     const loaded = load(c);
     if ('response' in loaded) return loaded.response;
     const values = postedForm(await c.req.parseBody());
     return afterBody(c, (data) => {
-      const outcome = saveCommunity(
-        data.inputs,
-        data.study.communities,
-        values,
-        undefined,
-        ctx.models,
-      );
-      if (!outcome.ok) return communityForm(c, data, undefined, values, outcome.issues);
+      const index = communityId === undefined ? undefined : indexOf(data, communityId);
+      if (index !== undefined && index < 0)
+        return c.redirect(`/studies/${data.record.id}/edit`, 303);
+      const outcome = saveCommunity(data.inputs, data.study.communities, values, index, ctx.models);
+      if (!outcome.ok) return communityForm(c, data, index, values, outcome.issues);
       write(data, outcome);
       return c.redirect(`/studies/${data.record.id}/edit?saved=1`, 303);
     });
-  });
+  };
+
+  app.post('/studies/:id/edit/new-community', (c) => postCommunity(c, undefined));
 
   app.get('/studies/:id/edit/communities/:cid', (c) => {
     const loaded = load(c);
@@ -190,19 +193,7 @@ export function editorPages(app: Hono, kit: PageKit): void {
     return communityForm(c, loaded.data, index, formOf(community), []);
   });
 
-  app.post('/studies/:id/edit/communities/:cid', async (c) => {
-    const loaded = load(c);
-    if ('response' in loaded) return loaded.response;
-    const values = postedForm(await c.req.parseBody());
-    return afterBody(c, (data) => {
-      const index = indexOf(data, c.req.param('cid'));
-      if (index < 0) return c.redirect(`/studies/${data.record.id}/edit`, 303);
-      const outcome = saveCommunity(data.inputs, data.study.communities, values, index, ctx.models);
-      if (!outcome.ok) return communityForm(c, data, index, values, outcome.issues);
-      write(data, outcome);
-      return c.redirect(`/studies/${data.record.id}/edit?saved=1`, 303);
-    });
-  });
+  app.post('/studies/:id/edit/communities/:cid', (c) => postCommunity(c, c.req.param('cid')));
 
   app.post('/studies/:id/edit/communities/:cid/remove', (c) => {
     const loaded = load(c);

@@ -10,7 +10,7 @@ import {
 import { saveMotion } from '../data/study-edits.ts';
 import type { StudyData } from '../data/study-data.ts';
 import { MotionFormView } from '../views/motion-form-view.tsx';
-import type { PageKit } from './page-kit.ts';
+import { issuesByField, type PageKit } from './page-kit.ts';
 import type { EditorSteps } from './source-pages.tsx';
 
 type Editable = StudyData & { ok: true };
@@ -29,13 +29,7 @@ export function motionPages(app: Hono, kit: PageKit, steps: EditorSteps): void {
   ) as Record<TectonicSetting, string[]>;
 
   const form = (c: Context, data: Editable, values: MotionForm, issues: readonly InputIssue[]) => {
-    const byField = new Map<string, InputIssue[]>();
-    const others: InputIssue[] = [];
-    for (const issue of issues) {
-      const name = motionIssueField(issue.path);
-      if (name) byField.set(name, [...(byField.get(name) ?? []), issue]);
-      else others.push(issue);
-    }
+    const { byField, others } = issuesByField(issues, motionIssueField);
     // Settings the post left out are shown as the study holds them.
     const shown = motionFormOf(data.inputs.raw, ctx.models);
     return kit.render(

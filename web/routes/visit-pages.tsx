@@ -1,5 +1,4 @@
 import type { Context, Hono } from 'hono';
-import type { Child } from 'hono/jsx';
 import type { ScreeningBandId } from '../../api/engine/intensity/screening-band.ts';
 import { InvalidInput, type InputIssue } from '../../api/engine/errors.ts';
 import { planTrip } from '../../api/engine/trip/visit-order.ts';
@@ -9,6 +8,7 @@ import { DeleteVisitView } from '../views/delete-visit-view.tsx';
 import { MessageView } from '../views/message-view.tsx';
 import { TripView } from '../views/trip-view.tsx';
 import { VisitFormView, type VisitFormValues } from '../views/visit-records.tsx';
+import { notFoundPage } from './message-pages.tsx';
 import { field, type PageKit } from './page-kit.ts';
 
 /** The visit form's text fields. */
@@ -88,18 +88,12 @@ export function visitPages(app: Hono, kit: PageKit): void {
     return data?.ok && community ? { data, community } : undefined;
   };
 
-  const notFound = (c: Context, text: Child) =>
-    kit.render(
-      c,
-      <MessageView page={kit.page(c)} title={kit.tr(c).t('error.notFound')} text={text} />,
-      404,
-    );
-
   const visitForm = (c: Context, values: VisitFormValues, issues: readonly InputIssue[]) => {
     const tr = kit.tr(c);
     const communityId = c.req.param('cid') as string;
     const found = findCommunity(c);
-    if (!found) return notFound(c, tr.text('error.communityNotFound', { id: communityId }));
+    if (!found)
+      return notFoundPage(kit, c, tr.text('error.communityNotFound', { id: communityId }));
     const { data, community } = found;
     const id = data.record.id;
     return kit.render(
@@ -155,7 +149,7 @@ export function visitPages(app: Hono, kit: PageKit): void {
 
   app.get('/studies/:id/communities/:cid/visits/:vid/delete', (c) => {
     const found = findVisit(c);
-    if (!found) return notFound(c, kit.tr(c).text('error.notFoundText'));
+    if (!found) return notFoundPage(kit, c);
     const { data, community, visit } = found;
     return kit.render(
       c,
@@ -170,7 +164,7 @@ export function visitPages(app: Hono, kit: PageKit): void {
 
   app.post('/studies/:id/communities/:cid/visits/:vid/delete', (c) => {
     const found = findVisit(c);
-    if (!found) return notFound(c, kit.tr(c).text('error.notFoundText'));
+    if (!found) return notFoundPage(kit, c);
     const { data, community, visit } = found;
     ctx.store.visits.delete(data.record.id, visit.id);
     return c.redirect(`/studies/${data.record.id}/communities/${community.id}#visits-heading`, 303);

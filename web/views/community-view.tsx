@@ -14,6 +14,7 @@ import { HazardCurveLegend } from '../plots/hazard-curve-plot.tsx';
 import { ShareBars } from '../plots/share-bars.tsx';
 import type { TextKey } from '../text/text-key.ts';
 import type { Translator } from '../text/translator.ts';
+import type { SheetBlockProps } from './sheet-block.ts';
 import { FeltList } from './felt-list.tsx';
 import { NearestFaults } from './nearest-faults.tsx';
 import { SafetyAdvice } from './safety-advice.tsx';
@@ -24,6 +25,7 @@ import { VisitRecords } from './visit-records.tsx';
 import { SlideImageLinks } from './slide-image-links.tsx';
 import type { VisitRecord } from '../../api/store/visit-repository.ts';
 import { DataTable, LabelledCell } from '../components/data-table.tsx';
+import { WarningDetails } from '../components/warning-details.tsx';
 import { LimitsList } from './limits-view.tsx';
 
 export interface CommunityViewProps {
@@ -83,12 +85,7 @@ export function Headline(props: {
 }
 
 /** What the shaking at each return-period level feels like and does, in our own words. */
-export function ShakingLevels(props: {
-  readonly tr: Translator;
-  readonly data: CommunityPageData;
-  readonly headingLevel: 2 | 3;
-  readonly compact?: boolean;
-}) {
+export function ShakingLevels(props: SheetBlockProps & { readonly data: CommunityPageData }) {
   const { tr, data } = props;
   const H = props.headingLevel === 2 ? 'h3' : 'h4';
   return (
@@ -350,16 +347,7 @@ export function CommunityView(props: CommunityViewProps) {
         <p>
           <a href="/limits">{tr.text('caution.limitsLink')}</a>
         </p>
-        {result.warnings.length > 0 && (
-          <details>
-            <summary>{tr.text('community.warnings')}</summary>
-            <ul>
-              {result.warnings.map((w) => (
-                <li>{tr.english(w)}</li>
-              ))}
-            </ul>
-          </details>
-        )}
+        <WarningDetails tr={tr} summary="community.warnings" warnings={result.warnings} />
         <ProvenanceLine tr={tr} provenance={props.provenance} />
       </section>
     </PageShell>

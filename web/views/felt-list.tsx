@@ -1,17 +1,14 @@
 import type { CommunityFeltHistory, FeltEstimate } from '../../api/engine/catalog/felt-history.ts';
-import type { Translator } from '../text/translator.ts';
+import type { SheetBlockProps } from './sheet-block.ts';
 import { DataTable } from '../components/data-table.tsx';
 
-export interface FeltListProps {
-  readonly tr: Translator;
+export interface FeltListProps extends SheetBlockProps {
   readonly studyId: string;
   readonly communityName: string;
   /** Undefined when the study has no catalog. */
   readonly felt?: { readonly history: CommunityFeltHistory; readonly eventCount: number };
   /** Rows shown, strongest first. */
   readonly limit: number;
-  readonly headingLevel: 2 | 3;
-  readonly compact?: boolean;
   /** The study has a catalog, too large for this page. */
   readonly tooMany?: boolean;
 }

@@ -7,6 +7,7 @@ import type { SuggestedSpacing } from '../data/map-spacing.ts';
 import { measureWords } from '../maps/hazard-layer.tsx';
 import type { Translator } from '../text/translator.ts';
 import { NumberField } from '../components/form-rows.tsx';
+import { WarningDetails } from '../components/warning-details.tsx';
 import { FieldProblems } from './field-problems.tsx';
 import { SelectField } from './select-field.tsx';
 
@@ -104,16 +105,7 @@ export function HazardMapPanel(props: HazardMapPanelProps) {
                   </a>
                 </p>
               )}
-              {shown.run.warnings.length > 0 && (
-                <details>
-                  <summary>{tr.text('hazardMap.warnings')}</summary>
-                  <ul>
-                    {shown.run.warnings.map((w) => (
-                      <li>{tr.english(w)}</li>
-                    ))}
-                  </ul>
-                </details>
-              )}
+              <WarningDetails tr={tr} summary="hazardMap.warnings" warnings={shown.run.warnings} />
             </>
           ) : null}
         </div>

@@ -13,6 +13,7 @@ import type { TsunamiPageResult } from '../data/tsunami-data.ts';
 import { TsunamiScenario } from './tsunami-time.tsx';
 import { DataTable, LabelledCell } from '../components/data-table.tsx';
 import { NumberField } from '../components/form-rows.tsx';
+import { WarningDetails } from '../components/warning-details.tsx';
 
 export interface ScenarioViewProps {
   readonly page: PageContext;
@@ -151,16 +152,7 @@ export function ScenarioView(props: ScenarioViewProps) {
                   </tr>
                 ))}
             </DataTable>
-            {result.warnings.length > 0 && (
-              <details>
-                <summary>{tr.text('scenario.warnings')}</summary>
-                <ul>
-                  {result.warnings.map((w) => (
-                    <li>{tr.english(w)}</li>
-                  ))}
-                </ul>
-              </details>
-            )}
+            <WarningDetails tr={tr} summary="scenario.warnings" warnings={result.warnings} />
           </section>
         </>
       )}

@@ -2,6 +2,7 @@ import { compassPoint } from '../../api/engine/catalog/felt-history.ts';
 import type { TsunamiCommunity, TsunamiResult } from '../../api/engine/tsunami/index.ts';
 import type { TsunamiPageResult } from '../data/tsunami-data.ts';
 import type { Translator } from '../text/translator.ts';
+import type { SheetBlockProps } from './sheet-block.ts';
 import { DataTable, LabelledCell } from '../components/data-table.tsx';
 
 /** Distances to high ground in km with one decimal under this, whole km above. */
@@ -58,20 +59,17 @@ function TimeToAct(props: {
           {tr.text('tsunami.time.height', { height: tr.number(result.highGroundM) })}
         </p>
       )}
-      {ground?.kind === 'already-above' && (
+      {ground && ground.kind !== 'found' && (
         <p class="tsunami-ground">
-          {tr.text('tsunami.time.above', {
-            elevation: tr.number(ground.elevationM),
-            height: tr.number(ground.heightM),
-          })}
-        </p>
-      )}
-      {ground?.kind === 'none' && (
-        <p class="tsunami-ground">
-          {tr.text('tsunami.time.none', {
-            height: tr.number(ground.heightM),
-            km: tr.number(ground.searchKm),
-          })}
+          {ground.kind === 'already-above'
+            ? tr.text('tsunami.time.above', {
+                elevation: tr.number(ground.elevationM),
+                height: tr.number(ground.heightM),
+              })
+            : tr.text('tsunami.time.none', {
+                height: tr.number(ground.heightM),
+                km: tr.number(ground.searchKm),
+              })}
         </p>
       )}
       {!props.compact && (
@@ -88,13 +86,9 @@ function TimeToAct(props: {
 }
 
 /** The community page's and handout's tsunami block: time to act, high ground and the caution. */
-export function TsunamiTime(props: {
-  readonly tr: Translator;
-  readonly communityId: string;
-  readonly tsunami: TsunamiPageResult;
-  readonly headingLevel: 2 | 3;
-  readonly compact?: boolean;
-}) {
+export function TsunamiTime(
+  props: SheetBlockProps & { readonly communityId: string; readonly tsunami: TsunamiPageResult },
+) {
   const { tr, tsunami } = props;
   const H = props.headingLevel === 2 ? 'h2' : 'h3';
   const community = tsunami.ok

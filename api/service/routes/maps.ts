@@ -1,8 +1,9 @@
 import { Hono } from 'hono';
-import { isFinished, type MapRunRecord } from '../../store/index.ts';
+import type { MapRunRecord } from '../../store/index.ts';
 import { HttpError, notFound, found } from '../http-error.ts';
+import { jobHandlers } from '../job-handlers.ts';
 import { readMapRequest } from '../../operations/map-request.ts';
-import { mapRunsOf, type MapRuns } from '../../operations/map-runs.ts';
+import type { MapRuns } from '../../operations/map-runs.ts';
 import { readJsonObject } from '../request-body.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
 import { startMapRun } from '../../operations/start-map-run.ts';
@@ -34,12 +35,7 @@ export const mapRunJson = (run: MapRunRecord) => ({
 export function mapRoutes(ctx: ServiceContext & { readonly maps?: MapRuns }): Hono {
   const app = new Hono();
   const { studies, maps } = ctx.store;
-
-  const findMap = (id: string): MapRunRecord => {
-    const run = maps.get(id);
-    if (!run) throw notFound('map', id);
-    return run;
-  };
+  const jobs = jobHandlers(ctx, 'map', mapRunJson);
 
   app.post('/studies/:id/maps', async (c) => {
     const id = c.req.param('id');
@@ -53,16 +49,11 @@ export function mapRoutes(ctx: ServiceContext & { readonly maps?: MapRuns }): Ho
     return c.json(mapRunJson(run), 202, { Location: `/api/maps/${run.id}` });
   });
 
-  app.get('/studies/:id/maps', (c) => {
-    const id = c.req.param('id');
-    found(studies.get(id), 'study', id);
-    return c.json({ maps: maps.listForStudy(id).map(mapRunJson) });
-  });
-
-  app.get('/maps/:mapId', (c) => c.json(mapRunJson(findMap(c.req.param('mapId')))));
+  app.get('/studies/:id/maps', jobs.list);
+  app.get('/maps/:mapId', jobs.one);
 
   app.get('/maps/:mapId/map.geojson', (c) => {
-    const run = findMap(c.req.param('mapId'));
+    const run = jobs.find(c.req.param('mapId'));
     const text = maps.geojson(run.id);
     if (run.status !== 'done' || text === undefined)
       throw new HttpError(
@@ -75,18 +66,7 @@ export function mapRoutes(ctx: ServiceContext & { readonly maps?: MapRuns }): Ho
     });
   });
 
-  app.post('/maps/:mapId/cancel', (c) => {
-    const run = findMap(c.req.param('mapId'));
-    if (isFinished(run.status))
-      throw new HttpError(
-        409,
-        `map "${run.id}" is already ${run.status}; only a queued or running map can be cancelled`,
-      );
-    // Every unfinished map run belongs to this process (others were marked interrupted at open).
-    if (!mapRunsOf(ctx).cancel(run.id))
-      maps.finishWithout(run.id, 'cancelled', 'cancelled on request');
-    return c.json(mapRunJson(findMap(run.id)), 202);
-  });
+  app.post('/maps/:mapId/cancel', jobs.cancel);
 
   return app;
 }

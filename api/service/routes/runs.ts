@@ -1,8 +1,9 @@
 import { Hono } from 'hono';
 import { terrainGridsOf } from '../../operations/terrain-grids.ts';
 import type { StudyResult } from '../../engine/results.ts';
-import { isFinished, type RunRecord } from '../../store/index.ts';
+import type { RunRecord } from '../../store/index.ts';
 import { HttpError, notFound, found } from '../http-error.ts';
+import { jobHandlers } from '../job-handlers.ts';
 import { runCsv } from '../../results/run-csv.ts';
 import { runGeoJson } from '../../results/run-geojson.ts';
 import type { ServiceContext } from '../../operations/service-context.ts';
@@ -35,16 +36,11 @@ export const runJson = (run: RunRecord) => ({
 export function runRoutes(ctx: ServiceContext): Hono {
   const app = new Hono();
   const { studies, runs } = ctx.store;
-
-  const findRun = (id: string): RunRecord => {
-    const run = runs.get(id);
-    if (!run) throw notFound('run', id);
-    return run;
-  };
+  const jobs = jobHandlers(ctx, 'run', runJson);
 
   /** A done run's results with the study it computed (for coordinates); 409 before that. */
   const finishedResults = (id: string) => {
-    const run = findRun(id);
+    const run = jobs.find(id);
     const text = runs.results(id);
     if (run.status !== 'done' || text === undefined) {
       throw new HttpError(
@@ -76,13 +72,8 @@ export function runRoutes(ctx: ServiceContext): Hono {
     );
   });
 
-  app.get('/studies/:id/runs', (c) => {
-    const id = c.req.param('id');
-    found(studies.get(id), 'study', id);
-    return c.json({ runs: runs.listForStudy(id).map(runJson) });
-  });
-
-  app.get('/runs/:runId', (c) => c.json(runJson(findRun(c.req.param('runId')))));
+  app.get('/studies/:id/runs', jobs.list);
+  app.get('/runs/:runId', jobs.one);
 
   app.get('/runs/:runId/results', (c) => {
     const { text } = finishedResults(c.req.param('runId'));
@@ -105,18 +96,7 @@ export function runRoutes(ctx: ServiceContext): Hono {
     });
   });
 
-  app.post('/runs/:runId/cancel', (c) => {
-    const id = c.req.param('runId');
-    const run = findRun(id);
-    if (isFinished(run.status))
-      throw new HttpError(
-        409,
-        `run "${id}" is already ${run.status}; only a queued or running run can be cancelled`,
-      );
-    // Every unfinished run belongs to this process (others were marked interrupted at start).
-    if (!ctx.scheduler.cancel(id)) runs.finishWithout(id, 'cancelled', 'cancelled on request');
-    return c.json(runJson(findRun(id)), 202);
-  });
+  app.post('/runs/:runId/cancel', jobs.cancel);
 
   return app;
 }
