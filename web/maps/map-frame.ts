@@ -5,6 +5,7 @@ import {
   type PointXY,
 } from '../../api/engine/geometry/projection.ts';
 import type { LonLat, Study } from '../../api/engine/model.ts';
+import { studyPoints } from '../../api/engine/geometry/study-points.ts';
 
 /**
  * Maps are drawn in the study's own local frame (api/engine/geometry/projection.ts: a WGS84
@@ -40,18 +41,6 @@ export interface MapFrameOptions {
   readonly fit?: 'everything' | 'communities';
   /** A square around one place instead (a village's own map): what lies outside is clipped. */
   readonly around?: { readonly center: LonLat; readonly radiusKm: number };
-}
-
-/** Every coordinate of the study that a map shows: communities, sources, outline. */
-export function studyPoints(study: Pick<Study, 'communities' | 'sources' | 'outline'>): LonLat[] {
-  const points: LonLat[] = study.communities.map((c) => [c.lon, c.lat] as const);
-  for (const s of study.sources) {
-    if (s.kind === 'fault') points.push(...(s.contours?.lines.flat() ?? s.trace));
-    else if (s.kind === 'zone') for (const ring of s.rings) points.push(...ring);
-    else points.push(s.location);
-  }
-  for (const ring of study.outline ?? []) points.push(...ring);
-  return points;
 }
 
 /** The frame fitting the study (and `include`) into the map's box, north up. */

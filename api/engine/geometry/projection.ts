@@ -2,6 +2,7 @@ import proj4 from 'proj4';
 import { InvalidInput } from '../errors.ts';
 import type { LonLat, Study } from '../model.ts';
 import { wrapDeg180 } from '../units.ts';
+import { sourcePoints } from './study-points.ts';
 
 /** A point of the local frame at the ground surface: x east, y north, km. */
 export interface PointXY {
@@ -65,12 +66,7 @@ export function createLocalFrame(origin: LonLat): LocalFrame {
  * the 180° meridian gets its true middle.
  */
 export function frameForStudy(study: Pick<Study, 'communities' | 'sources'>): LocalFrame {
-  const points: LonLat[] = [];
-  for (const source of study.sources) {
-    if (source.kind === 'fault') points.push(...(source.contours?.lines.flat() ?? source.trace));
-    else if (source.kind === 'zone') for (const ring of source.rings) points.push(...ring);
-    else points.push(source.location);
-  }
+  const points = sourcePoints(study.sources);
   if (points.length === 0) points.push(...study.communities.map((c) => [c.lon, c.lat] as const));
   const first = points[0];
   if (first === undefined) {

@@ -1,6 +1,7 @@
 import { InvalidInput, StudyTooLarge } from '../errors.ts';
 import type { LocalFrame, PointXY } from '../geometry/projection.ts';
 import type { LonLat, Study } from '../model.ts';
+import { studyPoints } from '../geometry/study-points.ts';
 
 /** Most points one hazard map may have (a 1 km grid over a region about 450 km square). */
 export const MAX_MAP_POINTS = 250_000;
@@ -47,13 +48,7 @@ export interface MapGridOptions {
 export function studyBounds(
   study: Pick<Study, 'communities' | 'sources' | 'outline'>,
 ): LonLatBounds {
-  const points: LonLat[] = study.communities.map((c) => [c.lon, c.lat] as const);
-  for (const source of study.sources) {
-    if (source.kind === 'fault') points.push(...(source.contours?.lines.flat() ?? source.trace));
-    else if (source.kind === 'zone') for (const ring of source.rings) points.push(...ring);
-    else points.push(source.location);
-  }
-  for (const ring of study.outline ?? []) points.push(...ring);
+  const points = studyPoints(study);
   const first = points[0];
   if (!first)
     throw new InvalidInput([
