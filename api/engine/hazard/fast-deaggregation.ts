@@ -17,6 +17,7 @@ import {
 } from './deaggregation-bins.ts';
 import type { BranchPredictions } from './fast-site-hazard.ts';
 import type { RuptureTable } from './rupture-table.ts';
+import { sourceShares, type SourceContribution } from './source-shares.ts';
 import { exceedanceFromTable, type ExceedanceTable } from './exceedance-table.ts';
 import { standardisedLevel } from './truncated-exceedance.ts';
 
@@ -165,7 +166,7 @@ export function fastDeaggregate(options: FastDeaggregationOptions): Deaggregatio
     };
   });
 
-  const sources: { sourceId: string; name: string; rate: number }[] = [];
+  const sources: SourceContribution[] = [];
   sourceSeen.forEach((seen, sourceIndex) => {
     if (!seen) return;
     const sourceId = table.sourceIds[sourceIndex] as string;
@@ -175,19 +176,12 @@ export function fastDeaggregate(options: FastDeaggregationOptions): Deaggregatio
       rate: accumulatedTotal(sourceSums, sourceIndex),
     });
   });
-  const sourceTotal = compensatedSum(sources.map((s) => s.rate));
-  const bySource = sources
-    .map(({ sourceId, name, rate }) => ({ sourceId, name, share: rate / sourceTotal }))
-    .sort(
-      (a, b) =>
-        b.share - a.share || (a.sourceId < b.sourceId ? -1 : a.sourceId > b.sourceId ? 1 : 0),
-    );
 
   return {
     measure: options.measure,
     level: options.level,
     returnPeriodYears: options.returnPeriodYears,
-    bySource,
+    bySource: sourceShares(sources),
     mean: { magnitude: mean(1), distanceKm: mean(2), epsilon: mean(3) },
     mode: {
       magnitude: totalAt(modal * SLOTS + 1) / modalRate,

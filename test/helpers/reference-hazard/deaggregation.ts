@@ -17,6 +17,7 @@ import {
   type LevelAccumulator,
 } from '../../../api/engine/summation.ts';
 import type { RupturePredictions } from './rupture-predictions.ts';
+import { sourceShares } from '../../../api/engine/hazard/source-shares.ts';
 import {
   exceedanceProbability,
   standardisedLevel,
@@ -141,19 +142,14 @@ export function deaggregate(options: DeaggregationOptions): Deaggregation | null
     name: options.sourceNames[sourceIndex] ?? sourceId,
     rate: accumulatedTotals(acc)[0] as number,
   }));
-  const sourceSum = compensatedSum(sources.map((s) => s.rate));
-  const bySourceShares = sources
-    .map(({ sourceId, name, rate }) => ({ sourceId, name, share: rate / sourceSum }))
-    .sort(
-      (a, b) =>
-        b.share - a.share || (a.sourceId < b.sourceId ? -1 : a.sourceId > b.sourceId ? 1 : 0),
-    );
 
   return {
     measure: options.measure,
     level: options.level,
     returnPeriodYears: options.returnPeriodYears,
-    bySource: bySourceShares,
+    // Normalising and ordering the per-source sums is plain bookkeeping, shared with the engine;
+    // what this oracle checks is the contributions summed into them above.
+    bySource: sourceShares(sources),
     mean: { magnitude: sumM / total, distanceKm: sumR / total, epsilon: sumE / total },
     mode: {
       magnitude: (modal.totals[M] as number) / modalRate,
