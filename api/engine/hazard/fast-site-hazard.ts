@@ -20,12 +20,7 @@ import {
   type CurveAccumulator,
 } from './curve-accumulator.ts';
 import { exceedanceTable, type ExceedanceTable } from './exceedance-table.ts';
-import {
-  branchCombinationCurves,
-  MAX_BRANCH_COMBINATIONS,
-  meanHazard,
-  type SettingBranchCurve,
-} from './logic-tree.ts';
+import { MAX_BRANCH_COMBINATIONS, treeHazardCurve, type SettingBranchCurve } from './logic-tree.ts';
 import { pairDistanceContext, preparedMotions, type LazyMotions } from './prepared-motion.ts';
 import { gmmInput } from './gmm-input.ts';
 import { distinctContexts, settingRuptures, type RuptureTable } from './rupture-table.ts';
@@ -307,14 +302,13 @@ export function fastSiteHazard(
   const curves: Record<string, HazardCurve> = {};
   measures.forEach((m, i) => {
     const list = settingCurves[i] as SettingBranchCurve[];
-    const annualRate = meanHazard(list, m.levels.length);
-    const combinations =
-      options.branchCurves === false ? null : branchCombinationCurves(list, m.levels.length, cap);
-    if (combinations === null) branchCurvesOmitted = true;
-    curves[m.key] =
-      combinations === null
-        ? { levels: [...m.levels], annualRate }
-        : { levels: [...m.levels], annualRate, branches: combinations };
+    const { curve, branchesOmitted } = treeHazardCurve(
+      list,
+      m.levels,
+      options.branchCurves === false ? null : cap,
+    );
+    if (branchesOmitted) branchCurvesOmitted = true;
+    curves[m.key] = curve;
   });
   return {
     curves,

@@ -3,11 +3,7 @@ import type {
   HazardMeasure,
   ValiditySummary,
 } from '../../../api/engine/hazard/hazard-types.ts';
-import {
-  branchCombinationCurves,
-  MAX_BRANCH_COMBINATIONS,
-  meanHazard,
-} from '../../../api/engine/hazard/logic-tree.ts';
+import { MAX_BRANCH_COMBINATIONS, treeHazardCurve } from '../../../api/engine/hazard/logic-tree.ts';
 import type { SettingBranchCurve } from '../../../api/engine/hazard/logic-tree.ts';
 import { TECTONIC_SETTINGS } from '../../../api/engine/model.ts';
 import type { TectonicSetting } from '../../../api/engine/model.ts';
@@ -94,13 +90,11 @@ export function siteHazard(options: SiteHazardOptions): SiteHazard {
       weight: b.weight,
       annualRate: b.annualRate[i] as number[],
     }));
-    const annualRate = meanHazard(settingCurves, m.levels.length);
-    const combinations = branchCombinationCurves(settingCurves, m.levels.length, cap);
-    if (combinations === null) branchCurvesOmitted = true;
-    curves[m.key] =
-      combinations === null
-        ? { levels: [...m.levels], annualRate }
-        : { levels: [...m.levels], annualRate, branches: combinations };
+    // The weighted mean and the branch combinations are the engine's (logic-tree.ts, with its
+    // own tests): this oracle checks each branch's curve, summed rupture by rupture above.
+    const { curve, branchesOmitted } = treeHazardCurve(settingCurves, m.levels, cap);
+    if (branchesOmitted) branchCurvesOmitted = true;
+    curves[m.key] = curve;
   });
 
   return {
