@@ -64,12 +64,23 @@ export interface DeclusterOptions extends MagnitudeSelectionOptions {
   readonly removeForeshocks?: boolean;
 }
 
-/** Gardner & Knopoff (1974) declustering (see the file comment). */
-export function declusterGardnerKnopoff(
+/** What a declustering works on: the selected events in time order, and the options' choices. */
+export interface DeclusterCatalog {
+  readonly byTime: readonly CatalogEvent[];
+  /** byTime's times, ms. */
+  readonly times: readonly number[];
+  readonly removeForeshocks: boolean;
+  readonly excludedNonMoment: number;
+}
+
+/**
+ * The events of the magnitude types asked for (magnitude-type.ts) in time order, events at one
+ * instant kept in catalog order; ids must be unique (InvalidInput names the first repeat).
+ */
+export function declusterCatalog(
   events: readonly CatalogEvent[],
-  options: DeclusterOptions = {},
-): DeclusteredCatalog {
-  const foreshocks = options.removeForeshocks ?? true;
+  options: DeclusterOptions,
+): DeclusterCatalog {
   const selected = selectByMagnitudeType(events, options.magnitudes);
   const byTime = [...selected.events].sort((a, b) => a.timeMs - b.timeMs);
   const ids = new Set<string>();
@@ -80,8 +91,62 @@ export function declusterGardnerKnopoff(
       ]);
     ids.add(e.id);
   });
+  return {
+    byTime,
+    times: byTime.map((e) => e.timeMs),
+    removeForeshocks: options.removeForeshocks ?? true,
+    excludedNonMoment: selected.excludedNonMoment,
+  };
+}
+
+/**
+ * `other` as removed into the cluster of `main`, or null when its epicentre is farther than the
+ * window's distance (the time window is the caller's). The latitude difference alone rules out
+ * most events before the geodesic is computed.
+ */
+export function windowMember(
+  main: CatalogEvent,
+  window: { readonly distanceKm: number },
+  other: CatalogEvent,
+): RemovedEvent | null {
+  if (Math.abs(other.lat - main.lat) * MIN_KM_PER_DEGREE_LATITUDE > window.distanceKm) return null;
+  const distanceKm = epicentralDistanceKm(main.lon, main.lat, other.lon, other.lat);
+  if (distanceKm > window.distanceKm) return null;
+  return {
+    event: other,
+    mainshockId: main.id,
+    distanceKm,
+    daysFromMainshock: (other.timeMs - main.timeMs) / MS_PER_DAY,
+  };
+}
+
+/**
+ * The result, from each event's mainshock by time-order index (its own index for a mainshock),
+ * the removed events in time order and how many mainshocks have a cluster.
+ */
+export function declusteredCatalog(
+  catalog: DeclusterCatalog,
+  mainshockOf: Int32Array,
+  removed: readonly RemovedEvent[],
+  clusterCount: number,
+): DeclusteredCatalog {
+  return {
+    mainshocks: catalog.byTime.filter((_, i) => mainshockOf[i] === i),
+    removed,
+    clusterCount,
+    excludedNonMoment: catalog.excludedNonMoment,
+    windows: GARDNER_KNOPOFF_WINDOWS,
+  };
+}
+
+/** Gardner & Knopoff (1974) declustering (see the file comment). */
+export function declusterGardnerKnopoff(
+  events: readonly CatalogEvent[],
+  options: DeclusterOptions = {},
+): DeclusteredCatalog {
+  const catalog = declusterCatalog(events, options);
+  const { byTime, times } = catalog;
   const n = byTime.length;
-  const times = byTime.map((e) => e.timeMs);
   const magnitudes = Float64Array.from(byTime, (e) => e.magnitude);
   const order = Int32Array.from(byTime, (_, i) => i).sort(
     (a, b) => (magnitudes[b] as number) - (magnitudes[a] as number) || a - b,
@@ -106,7 +171,7 @@ export function declusterGardnerKnopoff(
     const main = byTime[i] as CatalogEvent;
     const window = gardnerKnopoffWindow(main.magnitude);
     const windowMs = window.days * MS_PER_DAY;
-    const from = foreshocks ? firstAtLeast(times, main.timeMs - windowMs) : i + 1;
+    const from = catalog.removeForeshocks ? firstAtLeast(times, main.timeMs - windowMs) : i + 1;
     const to = firstAbove(times, main.timeMs + windowMs);
     near.length = 0;
     visitNear(grid, i, window.distanceKm, from, to, (j) => {
@@ -114,28 +179,20 @@ export function declusterGardnerKnopoff(
     });
     near.sort((a, b) => a - b);
     for (const j of near) {
-      const other = byTime[j] as CatalogEvent;
-      if (Math.abs(other.lat - main.lat) * MIN_KM_PER_DEGREE_LATITUDE > window.distanceKm) continue;
-      const distanceKm = epicentralDistanceKm(main.lon, main.lat, other.lon, other.lat);
-      if (distanceKm > window.distanceKm) continue;
+      const member = windowMember(main, window, byTime[j] as CatalogEvent);
+      if (member === null) continue;
       mainshockOf[j] = i;
       clustered.add(i);
-      removedAt[j] = {
-        event: other,
-        mainshockId: main.id,
-        distanceKm,
-        daysFromMainshock: (other.timeMs - main.timeMs) / MS_PER_DAY,
-      };
+      removedAt[j] = member;
       removedSeq[j] = removedCount++;
     }
   }
-  return {
-    mainshocks: byTime.filter((_, i) => mainshockOf[i] === i),
-    removed: inTimeOrder(removedAt, removedSeq, times),
-    clusterCount: clustered.size,
-    excludedNonMoment: selected.excludedNonMoment,
-    windows: GARDNER_KNOPOFF_WINDOWS,
-  };
+  return declusteredCatalog(
+    catalog,
+    mainshockOf,
+    inTimeOrder(removedAt, removedSeq, times),
+    clustered.size,
+  );
 }
 
 /**
