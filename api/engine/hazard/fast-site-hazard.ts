@@ -24,7 +24,12 @@ import { MAX_BRANCH_COMBINATIONS, treeHazardCurve, type SettingBranchCurve } fro
 import { pairDistanceContext, preparedMotions, type LazyMotions } from './prepared-motion.ts';
 import { gmmInput } from './gmm-input.ts';
 import { distinctContexts, settingRuptures, type RuptureTable } from './rupture-table.ts';
-import type { HazardBranch, HazardMeasure, ValiditySummary } from './hazard-types.ts';
+import type {
+  HazardBranch,
+  HazardIntegralOptions,
+  HazardMeasure,
+  ValiditySummary,
+} from './hazard-types.ts';
 import { ruptureGeometry, type RuptureGeometry } from './rupture-geometry.ts';
 import { countsOf, validitySummaries, type ValidityCounts } from './validity-counts.ts';
 import { createPairBuffer, siteDistances, type PairBuffer } from './site-distances.ts';
@@ -45,18 +50,12 @@ import {
  * site, so one FastHazard serves one thread's sites in turn.
  */
 
-export interface FastHazardOptions {
+export interface FastHazardOptions extends HazardIntegralOptions {
   readonly table: RuptureTable;
-  /** The branches of every setting that has ruptures (others are ignored). */
-  readonly branches: Readonly<Partial<Record<TectonicSetting, readonly HazardBranch[]>>>;
-  readonly measures: readonly HazardMeasure[];
-  readonly truncationSigma: number;
-  readonly maxDistanceKm: number;
   /** Keep each branch's predictions of the first measure and each pair's Rrup, for deaggregation. */
   readonly keepFirstMeasure?: boolean;
   /** Per-branch curves besides the mean (true by default; a map needs only the mean). */
   readonly branchCurves?: boolean;
-  readonly maxBranchCombinations?: number;
   /** The source-model logic tree (source-tree.ts): each node's curves are kept per branch and variant. */
   readonly sourceTree?: readonly SourceTreeNode[];
 }

@@ -1,5 +1,5 @@
 import type {
-  HazardBranch,
+  HazardIntegralOptions,
   HazardMeasure,
   ValiditySummary,
 } from '../../../api/engine/hazard/hazard-types.ts';
@@ -32,17 +32,11 @@ export interface SiteHazard {
   readonly validity: readonly ValiditySummary[];
 }
 
-export interface SiteHazardOptions {
+export interface SiteHazardOptions extends HazardIntegralOptions {
   readonly ruptures: readonly Rupture[];
   /** One per rupture, for this site. */
   readonly distances: readonly DistanceContext[];
   readonly site: SiteContext;
-  /** The branches of every setting that has sources in the study (others are ignored). */
-  readonly branches: Readonly<Partial<Record<TectonicSetting, readonly HazardBranch[]>>>;
-  readonly measures: readonly HazardMeasure[];
-  readonly truncationSigma: number;
-  readonly maxDistanceKm: number;
-  readonly maxBranchCombinations?: number;
   /** Called after each branch is done; may throw to stop (cancellation). */
   readonly afterBranch?: () => void;
 }
