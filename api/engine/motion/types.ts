@@ -123,6 +123,16 @@ export interface GroundMotionModel {
 /** A distance of DistanceContext, by its field name. */
 export type DistanceName = keyof DistanceContext;
 
+/** Every distance of DistanceContext, in its order. */
+export const DISTANCE_NAMES = [
+  'rjbKm',
+  'rrupKm',
+  'rxKm',
+  'ry0Km',
+  'rhypoKm',
+  'repiKm',
+] as const satisfies readonly DistanceName[];
+
 /**
  * Distances (km) of many (rupture, site) pairs at one site, as columns: entry k is one pair.
  * Only the columns a predictor lists in `PreparedMotion.distances` need be filled.
