@@ -21,15 +21,20 @@ import { sourceShares, type SourceContribution } from './source-shares.ts';
 import { exceedanceFromTable, type ExceedanceTable } from './exceedance-table.ts';
 import { standardisedLevel } from './truncated-exceedance.ts';
 
-export interface FastDeaggregationOptions {
+/** What a deaggregation is of: one measure's level at a return period, and the sources' names. */
+export interface DeaggregationTarget {
   readonly measure: string;
+  /** The level deaggregated, in the measure's units (the return period's level). */
   readonly level: number;
   readonly returnPeriodYears: number;
+  /** Names by source index (the source id is used where missing). */
+  readonly sourceNames: readonly string[];
+}
+
+export interface FastDeaggregationOptions extends DeaggregationTarget {
   readonly table: RuptureTable;
   /** The branches' predictions of the measure at the site (fastSiteHazard's firstMeasure). */
   readonly branches: readonly BranchPredictions[];
-  /** Names by source index (the source id is used where missing). */
-  readonly sourceNames: readonly string[];
   /** The fast path's truncated exceedance (exceedance-table.ts). */
   readonly exceedance: ExceedanceTable;
 }

@@ -18,6 +18,7 @@ import {
 } from '../../../api/engine/summation.ts';
 import type { RupturePredictions } from './rupture-predictions.ts';
 import { sourceShares } from '../../../api/engine/hazard/source-shares.ts';
+import type { DeaggregationTarget } from '../../../api/engine/hazard/fast-deaggregation.ts';
 import {
   exceedanceProbability,
   standardisedLevel,
@@ -29,17 +30,12 @@ export interface DeaggregationBranch {
   readonly predictions: RupturePredictions;
 }
 
-export interface DeaggregationOptions {
-  readonly measure: string;
-  /** The level deaggregated, in the measure's units (the return period's level). */
-  readonly level: number;
-  readonly returnPeriodYears: number;
+/** The plain sum's inputs besides the target (sourceNames by rupture.sourceIndex). */
+export interface DeaggregationOptions extends DeaggregationTarget {
   readonly ruptures: readonly Rupture[];
   readonly distances: readonly DistanceContext[];
   /** Every branch of every setting; contributions are weighted by branch weight. */
   readonly branches: readonly DeaggregationBranch[];
-  /** Names by rupture.sourceIndex (the rupture's sourceId is used where missing). */
-  readonly sourceNames: readonly string[];
   readonly truncationSigma: number;
 }
 
