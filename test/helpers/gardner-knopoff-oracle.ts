@@ -4,7 +4,7 @@ import {
   declusterCatalog,
   declusteredCatalog,
   declusterGardnerKnopoff,
-  gardnerKnopoffWindow,
+  mainshocksInTurn,
   windowMember,
   type RemovedEvent,
 } from '../../api/engine/catalog/gardner-knopoff.ts';
@@ -13,9 +13,9 @@ import {
  * The plain Gardner & Knopoff (1974) procedure, with the engine's signature and no index: each
  * mainshock scans every event inside its time window. Quadratic on large catalogs, so the engine
  * indexes epicentres in space; this stays with the tests as the oracle the indexed version must
- * match exactly. What it checks is that search; the selection of events, the distance test of
- * one event and the packing of the result are the engine's (gardner-knopoff.ts, checked by
- * test/engine/catalog/gardner-knopoff.test.ts).
+ * match exactly. What it checks is that search; the selection of events, the mainshocks' turns,
+ * the distance test of one event and the packing of the result are the engine's
+ * (gardner-knopoff.ts, checked by test/engine/catalog/gardner-knopoff.test.ts).
  */
 export const declusterGardnerKnopoffByScan: typeof declusterGardnerKnopoff = (
   events,
@@ -24,20 +24,10 @@ export const declusterGardnerKnopoffByScan: typeof declusterGardnerKnopoff = (
   const catalog = declusterCatalog(events, options);
   const { byTime, times } = catalog;
   const n = byTime.length;
-  const order = byTime
-    .map((_, i) => i)
-    .sort(
-      (a, b) =>
-        (byTime[b] as CatalogEvent).magnitude - (byTime[a] as CatalogEvent).magnitude || a - b,
-    );
   const mainshockOf = new Int32Array(n).fill(-1);
   const removed: RemovedEvent[] = [];
   const clustered = new Set<number>();
-  for (const i of order) {
-    if (mainshockOf[i] !== -1) continue;
-    mainshockOf[i] = i;
-    const main = byTime[i] as CatalogEvent;
-    const window = gardnerKnopoffWindow(main.magnitude);
+  for (const { i, main, window } of mainshocksInTurn(catalog, mainshockOf)) {
     const windowMs = window.days * MS_PER_DAY;
     const from = catalog.removeForeshocks ? firstAtOrAfter(times, main.timeMs - windowMs) : i + 1;
     for (let j = from; j < n && (times[j] as number) <= main.timeMs + windowMs; j++) {

@@ -69,6 +69,8 @@ export interface DeclusterCatalog {
   readonly byTime: readonly CatalogEvent[];
   /** byTime's times, ms. */
   readonly times: readonly number[];
+  /** Indices into byTime by decreasing magnitude, earlier first on ties: the mainshocks' turns. */
+  readonly order: Int32Array;
   readonly removeForeshocks: boolean;
   readonly excludedNonMoment: number;
 }
@@ -91,12 +93,40 @@ export function declusterCatalog(
       ]);
     ids.add(e.id);
   });
+  const magnitudes = Float64Array.from(byTime, (e) => e.magnitude);
   return {
     byTime,
     times: byTime.map((e) => e.timeMs),
+    order: Int32Array.from(byTime, (_, i) => i).sort(
+      (a, b) => (magnitudes[b] as number) - (magnitudes[a] as number) || a - b,
+    ),
     removeForeshocks: options.removeForeshocks ?? true,
     excludedNonMoment: selected.excludedNonMoment,
   };
+}
+
+/** A mainshock: its index in time order, the event and its window. */
+export interface Mainshock {
+  readonly i: number;
+  readonly main: CatalogEvent;
+  readonly window: ReturnType<typeof gardnerKnopoffWindow>;
+}
+
+/**
+ * The mainshocks as their turns come (catalog.order): each event not yet in a cluster
+ * (mainshockOf −1) when its turn comes is made its own mainshock (mainshockOf[i] = i); the
+ * caller puts the events of its window into its cluster before the next is taken.
+ */
+export function* mainshocksInTurn(
+  catalog: DeclusterCatalog,
+  mainshockOf: Int32Array,
+): Generator<Mainshock> {
+  for (const i of catalog.order) {
+    if (mainshockOf[i] !== -1) continue;
+    mainshockOf[i] = i;
+    const main = catalog.byTime[i] as CatalogEvent;
+    yield { i, main, window: gardnerKnopoffWindow(main.magnitude) };
+  }
 }
 
 /**
@@ -145,13 +175,9 @@ export function declusterGardnerKnopoff(
   options: DeclusterOptions = {},
 ): DeclusteredCatalog {
   const catalog = declusterCatalog(events, options);
-  const { byTime, times } = catalog;
+  const { byTime, times, order } = catalog;
   const n = byTime.length;
-  const magnitudes = Float64Array.from(byTime, (e) => e.magnitude);
-  const order = Int32Array.from(byTime, (_, i) => i).sort(
-    (a, b) => (magnitudes[b] as number) - (magnitudes[a] as number) || a - b,
-  );
-  const smallest = n === 0 ? 0 : (magnitudes[order[n - 1] as number] as number);
+  const smallest = n === 0 ? 0 : (byTime[order[n - 1] as number] as CatalogEvent).magnitude;
   // Cells as wide as the smallest window: most mainshocks are small, and theirs then spans a few cells.
   const grid = epicentreGrid(
     byTime.map((e) => e.lon),
@@ -165,11 +191,7 @@ export function declusterGardnerKnopoff(
   let removedCount = 0;
   const clustered = new Set<number>();
   const near: number[] = [];
-  for (const i of order) {
-    if (mainshockOf[i] !== -1) continue;
-    mainshockOf[i] = i;
-    const main = byTime[i] as CatalogEvent;
-    const window = gardnerKnopoffWindow(main.magnitude);
+  for (const { i, main, window } of mainshocksInTurn(catalog, mainshockOf)) {
     const windowMs = window.days * MS_PER_DAY;
     const from = catalog.removeForeshocks ? firstAtLeast(times, main.timeMs - windowMs) : i + 1;
     const to = firstAbove(times, main.timeMs + windowMs);
