@@ -236,14 +236,12 @@ export function fastSiteHazard(
         const prediction = predictions[i] as PairPredictions;
         resetCurveAccumulator(curve);
         if (count > 0) {
-          const bad = accumulatePairs(
-            curve,
-            exceedance,
-            work.rates,
-            pairs.rupture,
-            prediction,
+          const bad = accumulatePairs(curve, exceedance, {
+            rates: work.rates,
+            pairRupture: pairs.rupture,
+            predictions: prediction,
             count,
-          );
+          });
           if (bad >= 0)
             throw unusablePrediction(
               hazard,
