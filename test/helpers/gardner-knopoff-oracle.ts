@@ -23,13 +23,14 @@ export const declusterGardnerKnopoffByScan: typeof declusterGardnerKnopoff = (
 ) => {
   const catalog = declusterCatalog(events, options);
   const { byTime, times } = catalog;
+  const foreshocks = options.removeForeshocks ?? true;
   const n = byTime.length;
   const mainshockOf = new Int32Array(n).fill(-1);
   const removed: RemovedEvent[] = [];
   const clustered = new Set<number>();
   for (const { i, main, window } of mainshocksInTurn(catalog, mainshockOf)) {
     const windowMs = window.days * MS_PER_DAY;
-    const from = catalog.removeForeshocks ? firstAtOrAfter(times, main.timeMs - windowMs) : i + 1;
+    const from = foreshocks ? firstAtOrAfter(times, main.timeMs - windowMs) : i + 1;
     for (let j = from; j < n && (times[j] as number) <= main.timeMs + windowMs; j++) {
       if (j === i || mainshockOf[j] !== -1) continue;
       const member = windowMember(main, window, byTime[j] as CatalogEvent);

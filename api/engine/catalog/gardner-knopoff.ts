@@ -64,14 +64,13 @@ export interface DeclusterOptions extends MagnitudeSelectionOptions {
   readonly removeForeshocks?: boolean;
 }
 
-/** What a declustering works on: the selected events in time order, and the options' choices. */
+/** What a declustering works on: the events selected by magnitude type, in time order. */
 export interface DeclusterCatalog {
   readonly byTime: readonly CatalogEvent[];
   /** byTime's times, ms. */
   readonly times: readonly number[];
   /** Indices into byTime by decreasing magnitude, earlier first on ties: the mainshocks' turns. */
   readonly order: Int32Array;
-  readonly removeForeshocks: boolean;
   readonly excludedNonMoment: number;
 }
 
@@ -81,7 +80,7 @@ export interface DeclusterCatalog {
  */
 export function declusterCatalog(
   events: readonly CatalogEvent[],
-  options: DeclusterOptions,
+  options: MagnitudeSelectionOptions,
 ): DeclusterCatalog {
   const selected = selectByMagnitudeType(events, options.magnitudes);
   const byTime = [...selected.events].sort((a, b) => a.timeMs - b.timeMs);
@@ -100,7 +99,6 @@ export function declusterCatalog(
     order: Int32Array.from(byTime, (_, i) => i).sort(
       (a, b) => (magnitudes[b] as number) - (magnitudes[a] as number) || a - b,
     ),
-    removeForeshocks: options.removeForeshocks ?? true,
     excludedNonMoment: selected.excludedNonMoment,
   };
 }
@@ -176,6 +174,7 @@ export function declusterGardnerKnopoff(
 ): DeclusteredCatalog {
   const catalog = declusterCatalog(events, options);
   const { byTime, times, order } = catalog;
+  const foreshocks = options.removeForeshocks ?? true;
   const n = byTime.length;
   const smallest = n === 0 ? 0 : (byTime[order[n - 1] as number] as CatalogEvent).magnitude;
   // Cells as wide as the smallest window: most mainshocks are small, and theirs then spans a few cells.
@@ -193,7 +192,7 @@ export function declusterGardnerKnopoff(
   const near: number[] = [];
   for (const { i, main, window } of mainshocksInTurn(catalog, mainshockOf)) {
     const windowMs = window.days * MS_PER_DAY;
-    const from = catalog.removeForeshocks ? firstAtLeast(times, main.timeMs - windowMs) : i + 1;
+    const from = foreshocks ? firstAtLeast(times, main.timeMs - windowMs) : i + 1;
     const to = firstAbove(times, main.timeMs + windowMs);
     near.length = 0;
     visitNear(grid, i, window.distanceKm, from, to, (j) => {
