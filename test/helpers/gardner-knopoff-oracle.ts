@@ -1,73 +1,48 @@
 import type { CatalogEvent } from '../../api/engine/catalog/event.ts';
 import { MS_PER_DAY } from '../../api/engine/catalog/event.ts';
 import {
-  epicentralDistanceKm,
-  MIN_KM_PER_DEGREE_LATITUDE,
-} from '../../api/engine/catalog/epicentral.ts';
-import {
-  GARDNER_KNOPOFF_WINDOWS,
-  gardnerKnopoffWindow,
-  type DeclusterOptions,
-  type DeclusteredCatalog,
+  declusterCatalog,
+  declusteredCatalog,
+  declusterGardnerKnopoff,
+  mainshocksInTurn,
+  windowMember,
   type RemovedEvent,
 } from '../../api/engine/catalog/gardner-knopoff.ts';
-import { selectByMagnitudeType } from '../../api/engine/catalog/magnitude-type.ts';
 
 /**
- * The plain Gardner & Knopoff (1974) procedure, with no index: each mainshock scans every event
- * inside its time window. Quadratic on large catalogs, so the engine indexes epicentres in
- * space; this stays with the tests as the oracle the indexed version must match exactly.
+ * The plain Gardner & Knopoff (1974) procedure, with the engine's signature and no index: each
+ * mainshock scans every event inside its time window. Quadratic on large catalogs, so the engine
+ * indexes epicentres in space; this stays with the tests as the oracle the indexed version must
+ * match exactly. What it checks is that search; the selection of events, the mainshocks' turns,
+ * the distance test of one event and the packing of the result are the engine's
+ * (gardner-knopoff.ts, checked by test/engine/catalog/gardner-knopoff.test.ts).
  */
-export function declusterGardnerKnopoffByScan(
-  events: readonly CatalogEvent[],
-  options: DeclusterOptions = {},
-): DeclusteredCatalog {
+export const declusterGardnerKnopoffByScan: typeof declusterGardnerKnopoff = (
+  events,
+  options = {},
+) => {
+  const catalog = declusterCatalog(events, options);
+  const { byTime, times } = catalog;
   const foreshocks = options.removeForeshocks ?? true;
-  const selected = selectByMagnitudeType(events, options.magnitudes);
-  const byTime = [...selected.events].sort((a, b) => a.timeMs - b.timeMs);
   const n = byTime.length;
-  const times = byTime.map((e) => e.timeMs);
-  const order = byTime
-    .map((_, i) => i)
-    .sort(
-      (a, b) =>
-        (byTime[b] as CatalogEvent).magnitude - (byTime[a] as CatalogEvent).magnitude || a - b,
-    );
   const mainshockOf = new Int32Array(n).fill(-1);
   const removed: RemovedEvent[] = [];
   const clustered = new Set<number>();
-  for (const i of order) {
-    if (mainshockOf[i] !== -1) continue;
-    mainshockOf[i] = i;
-    const main = byTime[i] as CatalogEvent;
-    const window = gardnerKnopoffWindow(main.magnitude);
+  for (const { i, main, window } of mainshocksInTurn(catalog, mainshockOf)) {
     const windowMs = window.days * MS_PER_DAY;
     const from = foreshocks ? firstAtOrAfter(times, main.timeMs - windowMs) : i + 1;
     for (let j = from; j < n && (times[j] as number) <= main.timeMs + windowMs; j++) {
       if (j === i || mainshockOf[j] !== -1) continue;
-      const other = byTime[j] as CatalogEvent;
-      if (Math.abs(other.lat - main.lat) * MIN_KM_PER_DEGREE_LATITUDE > window.distanceKm) continue;
-      const distanceKm = epicentralDistanceKm(main.lon, main.lat, other.lon, other.lat);
-      if (distanceKm > window.distanceKm) continue;
+      const member = windowMember(main, window, byTime[j] as CatalogEvent);
+      if (member === null) continue;
       mainshockOf[j] = i;
       clustered.add(i);
-      removed.push({
-        event: other,
-        mainshockId: main.id,
-        distanceKm,
-        daysFromMainshock: (other.timeMs - main.timeMs) / MS_PER_DAY,
-      });
+      removed.push(member);
     }
   }
   removed.sort((a, b) => a.event.timeMs - b.event.timeMs);
-  return {
-    mainshocks: byTime.filter((_, i) => mainshockOf[i] === i),
-    removed,
-    clusterCount: clustered.size,
-    excludedNonMoment: selected.excludedNonMoment,
-    windows: GARDNER_KNOPOFF_WINDOWS,
-  };
-}
+  return declusteredCatalog(catalog, mainshockOf, removed, clustered.size);
+};
 
 function firstAtOrAfter(times: readonly number[], t: number): number {
   let lo = 0;

@@ -64,12 +64,24 @@ export interface DeclusterOptions extends MagnitudeSelectionOptions {
   readonly removeForeshocks?: boolean;
 }
 
-/** Gardner & Knopoff (1974) declustering (see the file comment). */
-export function declusterGardnerKnopoff(
+/** What a declustering works on: the events selected by magnitude type, in time order. */
+export interface DeclusterCatalog {
+  readonly byTime: readonly CatalogEvent[];
+  /** byTime's times, ms. */
+  readonly times: readonly number[];
+  /** Indices into byTime by decreasing magnitude, earlier first on ties: the mainshocks' turns. */
+  readonly order: Int32Array;
+  readonly excludedNonMoment: number;
+}
+
+/**
+ * The events of the magnitude types asked for (magnitude-type.ts) in time order, events at one
+ * instant kept in catalog order; ids must be unique (InvalidInput names the first repeat).
+ */
+export function declusterCatalog(
   events: readonly CatalogEvent[],
-  options: DeclusterOptions = {},
-): DeclusteredCatalog {
-  const foreshocks = options.removeForeshocks ?? true;
+  options: MagnitudeSelectionOptions,
+): DeclusterCatalog {
   const selected = selectByMagnitudeType(events, options.magnitudes);
   const byTime = [...selected.events].sort((a, b) => a.timeMs - b.timeMs);
   const ids = new Set<string>();
@@ -80,13 +92,91 @@ export function declusterGardnerKnopoff(
       ]);
     ids.add(e.id);
   });
-  const n = byTime.length;
-  const times = byTime.map((e) => e.timeMs);
   const magnitudes = Float64Array.from(byTime, (e) => e.magnitude);
-  const order = Int32Array.from(byTime, (_, i) => i).sort(
-    (a, b) => (magnitudes[b] as number) - (magnitudes[a] as number) || a - b,
-  );
-  const smallest = n === 0 ? 0 : (magnitudes[order[n - 1] as number] as number);
+  return {
+    byTime,
+    times: byTime.map((e) => e.timeMs),
+    order: Int32Array.from(byTime, (_, i) => i).sort(
+      (a, b) => (magnitudes[b] as number) - (magnitudes[a] as number) || a - b,
+    ),
+    excludedNonMoment: selected.excludedNonMoment,
+  };
+}
+
+/** A mainshock: its index in time order, the event and its window. */
+export interface Mainshock {
+  readonly i: number;
+  readonly main: CatalogEvent;
+  readonly window: ReturnType<typeof gardnerKnopoffWindow>;
+}
+
+/**
+ * The mainshocks as their turns come (catalog.order): each event not yet in a cluster
+ * (mainshockOf −1) when its turn comes is made its own mainshock (mainshockOf[i] = i); the
+ * caller puts the events of its window into its cluster before the next is taken.
+ */
+export function* mainshocksInTurn(
+  catalog: DeclusterCatalog,
+  mainshockOf: Int32Array,
+): Generator<Mainshock> {
+  for (const i of catalog.order) {
+    if (mainshockOf[i] !== -1) continue;
+    mainshockOf[i] = i;
+    const main = catalog.byTime[i] as CatalogEvent;
+    yield { i, main, window: gardnerKnopoffWindow(main.magnitude) };
+  }
+}
+
+/**
+ * `other` as removed into the cluster of `main`, or null when its epicentre is farther than the
+ * window's distance (the time window is the caller's). The latitude difference alone rules out
+ * most events before the geodesic is computed.
+ */
+export function windowMember(
+  main: CatalogEvent,
+  window: { readonly distanceKm: number },
+  other: CatalogEvent,
+): RemovedEvent | null {
+  if (Math.abs(other.lat - main.lat) * MIN_KM_PER_DEGREE_LATITUDE > window.distanceKm) return null;
+  const distanceKm = epicentralDistanceKm(main.lon, main.lat, other.lon, other.lat);
+  if (distanceKm > window.distanceKm) return null;
+  return {
+    event: other,
+    mainshockId: main.id,
+    distanceKm,
+    daysFromMainshock: (other.timeMs - main.timeMs) / MS_PER_DAY,
+  };
+}
+
+/**
+ * The result, from each event's mainshock by time-order index (its own index for a mainshock),
+ * the removed events in time order and how many mainshocks have a cluster.
+ */
+export function declusteredCatalog(
+  catalog: DeclusterCatalog,
+  mainshockOf: Int32Array,
+  removed: readonly RemovedEvent[],
+  clusterCount: number,
+): DeclusteredCatalog {
+  return {
+    mainshocks: catalog.byTime.filter((_, i) => mainshockOf[i] === i),
+    removed,
+    clusterCount,
+    excludedNonMoment: catalog.excludedNonMoment,
+    windows: GARDNER_KNOPOFF_WINDOWS,
+  };
+}
+
+/** Gardner & Knopoff (1974) declustering (see the file comment). */
+export function declusterGardnerKnopoff(
+  events: readonly CatalogEvent[],
+  options: DeclusterOptions = {},
+): DeclusteredCatalog {
+  const catalog = declusterCatalog(events, options);
+  const { byTime, times, order } = catalog;
+  const foreshocks = options.removeForeshocks ?? true;
+  const n = byTime.length;
+  const smallest = n === 0 ? 0 : (byTime[order[n - 1] as number] as CatalogEvent).magnitude;
   // Cells as wide as the smallest window: most mainshocks are small, and theirs then spans a few cells.
   const grid = epicentreGrid(
     byTime.map((e) => e.lon),
@@ -100,11 +190,7 @@ export function declusterGardnerKnopoff(
   let removedCount = 0;
   const clustered = new Set<number>();
   const near: number[] = [];
-  for (const i of order) {
-    if (mainshockOf[i] !== -1) continue;
-    mainshockOf[i] = i;
-    const main = byTime[i] as CatalogEvent;
-    const window = gardnerKnopoffWindow(main.magnitude);
+  for (const { i, main, window } of mainshocksInTurn(catalog, mainshockOf)) {
     const windowMs = window.days * MS_PER_DAY;
     const from = foreshocks ? firstAtLeast(times, main.timeMs - windowMs) : i + 1;
     const to = firstAbove(times, main.timeMs + windowMs);
@@ -114,28 +200,20 @@ export function declusterGardnerKnopoff(
     });
     near.sort((a, b) => a - b);
     for (const j of near) {
-      const other = byTime[j] as CatalogEvent;
-      if (Math.abs(other.lat - main.lat) * MIN_KM_PER_DEGREE_LATITUDE > window.distanceKm) continue;
-      const distanceKm = epicentralDistanceKm(main.lon, main.lat, other.lon, other.lat);
-      if (distanceKm > window.distanceKm) continue;
+      const member = windowMember(main, window, byTime[j] as CatalogEvent);
+      if (member === null) continue;
       mainshockOf[j] = i;
       clustered.add(i);
-      removedAt[j] = {
-        event: other,
-        mainshockId: main.id,
-        distanceKm,
-        daysFromMainshock: (other.timeMs - main.timeMs) / MS_PER_DAY,
-      };
+      removedAt[j] = member;
       removedSeq[j] = removedCount++;
     }
   }
-  return {
-    mainshocks: byTime.filter((_, i) => mainshockOf[i] === i),
-    removed: inTimeOrder(removedAt, removedSeq, times),
-    clusterCount: clustered.size,
-    excludedNonMoment: selected.excludedNonMoment,
-    windows: GARDNER_KNOPOFF_WINDOWS,
-  };
+  return declusteredCatalog(
+    catalog,
+    mainshockOf,
+    inTimeOrder(removedAt, removedSeq, times),
+    clustered.size,
+  );
 }
 
 /**

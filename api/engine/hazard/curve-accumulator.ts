@@ -64,18 +64,26 @@ function inlineTable(exceedance: ExceedanceTable) {
 }
 
 /**
- * Adds `count` pairs: pair k has annual rate rates[pairRupture[k]] and the prediction k of
- * `predictions`. Returns −1, or the first pair whose ln median is not finite or whose σ is not
+ * One branch's pairs at a site, for one measure: pair k is of rupture pairRupture[k], whose
+ * annual rate is rates[pairRupture[k]], and has prediction k of `predictions`; `count` pairs.
+ */
+export interface RatedPairs {
+  readonly rates: Float64Array;
+  readonly pairRupture: Int32Array;
+  readonly predictions: PairPredictions;
+  readonly count: number;
+}
+
+/**
+ * Adds the pairs to the curve. Returns −1, or the first pair whose ln median is not finite or whose σ is not
  * a finite number ≥ 0 (nothing of it or after it is added; the caller reports it).
  */
 export function accumulatePairs(
   acc: CurveAccumulator,
   exceedance: ExceedanceTable,
-  rates: Float64Array,
-  pairRupture: Int32Array,
-  predictions: PairPredictions,
-  count: number,
+  pairs: RatedPairs,
 ): number {
+  const { rates, pairRupture, predictions, count } = pairs;
   const { lnLevels, partial, certain } = acc;
   const levelCount = lnLevels.length;
   const { lnMedian: lnMedians, sigma: sigmas } = predictions;
@@ -161,18 +169,12 @@ export function resetCurveAccumulator(acc: CurveAccumulator): void {
 }
 
 /**
- * The annual rate of exceeding one level (ln units) from `count` pairs: the sum accumulatePairs
+ * The annual rate of exceeding one level (ln units) from the pairs: the sum accumulatePairs
  * forms at that level, the same terms added the same way, for a search that needs a few levels
  * of a curve and not all (map/return-period search). Assumes predictions already checked finite.
  */
-export function levelRate(
-  lnLevel: number,
-  exceedance: ExceedanceTable,
-  rates: Float64Array,
-  pairRupture: Int32Array,
-  predictions: PairPredictions,
-  count: number,
-): number {
+export function levelRate(lnLevel: number, exceedance: ExceedanceTable, pairs: RatedPairs): number {
+  const { rates, pairRupture, predictions, count } = pairs;
   const { lnMedian: lnMedians, sigma: sigmas } = predictions;
   const { n, cubic, scale, intervals } = inlineTable(exceedance);
   const total = createLevelAccumulator(1);
@@ -243,11 +245,9 @@ export function createLevelCoefficients(capacity: number): LevelCoefficients {
 export function fillLevelCoefficients(
   into: LevelCoefficients,
   exceedance: ExceedanceTable,
-  rates: Float64Array,
-  pairRupture: Int32Array,
-  predictions: PairPredictions,
-  count: number,
+  pairs: RatedPairs,
 ): void {
+  const { rates, pairRupture, predictions, count } = pairs;
   into.count = 0;
   into.usable = false;
   if (exceedance.mode !== 'table') return;

@@ -17,18 +17,24 @@ import {
 } from './deaggregation-bins.ts';
 import type { BranchPredictions } from './fast-site-hazard.ts';
 import type { RuptureTable } from './rupture-table.ts';
+import { sourceShares, type SourceContribution } from './source-shares.ts';
 import { exceedanceFromTable, type ExceedanceTable } from './exceedance-table.ts';
 import { standardisedLevel } from './truncated-exceedance.ts';
 
-export interface FastDeaggregationOptions {
+/** What a deaggregation is of: one measure's level at a return period, and the sources' names. */
+export interface DeaggregationTarget {
   readonly measure: string;
+  /** The level deaggregated, in the measure's units (the return period's level). */
   readonly level: number;
   readonly returnPeriodYears: number;
+  /** Names by source index (the source id is used where missing). */
+  readonly sourceNames: readonly string[];
+}
+
+export interface FastDeaggregationOptions extends DeaggregationTarget {
   readonly table: RuptureTable;
   /** The branches' predictions of the measure at the site (fastSiteHazard's firstMeasure). */
   readonly branches: readonly BranchPredictions[];
-  /** Names by source index (the source id is used where missing). */
-  readonly sourceNames: readonly string[];
   /** The fast path's truncated exceedance (exceedance-table.ts). */
   readonly exceedance: ExceedanceTable;
 }
@@ -165,7 +171,7 @@ export function fastDeaggregate(options: FastDeaggregationOptions): Deaggregatio
     };
   });
 
-  const sources: { sourceId: string; name: string; rate: number }[] = [];
+  const sources: SourceContribution[] = [];
   sourceSeen.forEach((seen, sourceIndex) => {
     if (!seen) return;
     const sourceId = table.sourceIds[sourceIndex] as string;
@@ -175,19 +181,12 @@ export function fastDeaggregate(options: FastDeaggregationOptions): Deaggregatio
       rate: accumulatedTotal(sourceSums, sourceIndex),
     });
   });
-  const sourceTotal = compensatedSum(sources.map((s) => s.rate));
-  const bySource = sources
-    .map(({ sourceId, name, rate }) => ({ sourceId, name, share: rate / sourceTotal }))
-    .sort(
-      (a, b) =>
-        b.share - a.share || (a.sourceId < b.sourceId ? -1 : a.sourceId > b.sourceId ? 1 : 0),
-    );
 
   return {
     measure: options.measure,
     level: options.level,
     returnPeriodYears: options.returnPeriodYears,
-    bySource,
+    bySource: sourceShares(sources),
     mean: { magnitude: mean(1), distanceKm: mean(2), epsilon: mean(3) },
     mode: {
       magnitude: totalAt(modal * SLOTS + 1) / modalRate,

@@ -20,16 +20,16 @@ import {
   type CurveAccumulator,
 } from './curve-accumulator.ts';
 import { exceedanceTable, type ExceedanceTable } from './exceedance-table.ts';
-import {
-  branchCombinationCurves,
-  MAX_BRANCH_COMBINATIONS,
-  meanHazard,
-  type SettingBranchCurve,
-} from './logic-tree.ts';
+import { MAX_BRANCH_COMBINATIONS, treeHazardCurve, type SettingBranchCurve } from './logic-tree.ts';
 import { pairDistanceContext, preparedMotions, type LazyMotions } from './prepared-motion.ts';
 import { gmmInput } from './gmm-input.ts';
 import { distinctContexts, settingRuptures, type RuptureTable } from './rupture-table.ts';
-import type { HazardBranch, HazardMeasure, ValiditySummary } from './hazard-types.ts';
+import type {
+  HazardBranch,
+  HazardIntegralOptions,
+  HazardMeasure,
+  ValiditySummary,
+} from './hazard-types.ts';
 import { ruptureGeometry, type RuptureGeometry } from './rupture-geometry.ts';
 import { countsOf, validitySummaries, type ValidityCounts } from './validity-counts.ts';
 import { createPairBuffer, siteDistances, type PairBuffer } from './site-distances.ts';
@@ -50,18 +50,12 @@ import {
  * site, so one FastHazard serves one thread's sites in turn.
  */
 
-export interface FastHazardOptions {
+export interface FastHazardOptions extends HazardIntegralOptions {
   readonly table: RuptureTable;
-  /** The branches of every setting that has ruptures (others are ignored). */
-  readonly branches: Readonly<Partial<Record<TectonicSetting, readonly HazardBranch[]>>>;
-  readonly measures: readonly HazardMeasure[];
-  readonly truncationSigma: number;
-  readonly maxDistanceKm: number;
   /** Keep each branch's predictions of the first measure and each pair's Rrup, for deaggregation. */
   readonly keepFirstMeasure?: boolean;
   /** Per-branch curves besides the mean (true by default; a map needs only the mean). */
   readonly branchCurves?: boolean;
-  readonly maxBranchCombinations?: number;
   /** The source-model logic tree (source-tree.ts): each node's curves are kept per branch and variant. */
   readonly sourceTree?: readonly SourceTreeNode[];
 }
@@ -242,14 +236,12 @@ export function fastSiteHazard(
         const prediction = predictions[i] as PairPredictions;
         resetCurveAccumulator(curve);
         if (count > 0) {
-          const bad = accumulatePairs(
-            curve,
-            exceedance,
-            work.rates,
-            pairs.rupture,
-            prediction,
+          const bad = accumulatePairs(curve, exceedance, {
+            rates: work.rates,
+            pairRupture: pairs.rupture,
+            predictions: prediction,
             count,
-          );
+          });
           if (bad >= 0)
             throw unusablePrediction(
               hazard,
@@ -307,14 +299,13 @@ export function fastSiteHazard(
   const curves: Record<string, HazardCurve> = {};
   measures.forEach((m, i) => {
     const list = settingCurves[i] as SettingBranchCurve[];
-    const annualRate = meanHazard(list, m.levels.length);
-    const combinations =
-      options.branchCurves === false ? null : branchCombinationCurves(list, m.levels.length, cap);
-    if (combinations === null) branchCurvesOmitted = true;
-    curves[m.key] =
-      combinations === null
-        ? { levels: [...m.levels], annualRate }
-        : { levels: [...m.levels], annualRate, branches: combinations };
+    const { curve, branchesOmitted } = treeHazardCurve(
+      list,
+      m.levels,
+      options.branchCurves === false ? null : cap,
+    );
+    if (branchesOmitted) branchCurvesOmitted = true;
+    curves[m.key] = curve;
   });
   return {
     curves,

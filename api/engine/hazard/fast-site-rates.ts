@@ -7,6 +7,7 @@ import {
   fillLevelCoefficients,
   levelRate,
   type LevelCoefficients,
+  type RatedPairs,
 } from './curve-accumulator.ts';
 import {
   pairsAtSite,
@@ -15,7 +16,6 @@ import {
   type BranchWork,
   type FastHazard,
   type FastSite,
-  type SettingWork,
 } from './fast-site-hazard.ts';
 import { countsOf, validitySummaries, type ValidityCounts } from './validity-counts.ts';
 import type { ValiditySummary } from './hazard-types.ts';
@@ -61,12 +61,7 @@ export function fastSiteRates(rates: FastRates, at: FastSite, measureIndex = 0):
   const { options, exceedance } = hazard;
   const measure = options.measures[measureIndex]!;
   const validity: ValidityCounts = new Map();
-  const terms: {
-    weight: number;
-    work: SettingWork;
-    predictions: PairPredictions;
-    coefficients: LevelCoefficients;
-  }[] = [];
+  const terms: { weight: number; pairs: RatedPairs; coefficients: LevelCoefficients }[] = [];
 
   for (const work of hazard.settings) {
     const { pairs } = work;
@@ -95,38 +90,29 @@ export function fastSiteRates(rates: FastRates, at: FastSite, measureIndex = 0):
       }
       summary.evaluated += count;
       const coefficients = rates.coefficients.get(branch)!;
-      fillLevelCoefficients(
-        coefficients,
-        exceedance,
-        work.rates,
-        pairs.rupture,
+      // Each setting's pairs stay in its buffer until the next site, so the terms can be summed at any level.
+      const rated: RatedPairs = {
+        rates: work.rates,
+        pairRupture: pairs.rupture,
         predictions,
         count,
-      );
-      terms.push({ weight: branch.weight, work, predictions, coefficients });
+      };
+      fillLevelCoefficients(coefficients, exceedance, rated);
+      terms.push({ weight: branch.weight, pairs: rated, coefficients });
     }
   }
 
   const lnLevels = measure.levels.map(Math.log);
-  // Each setting's pairs stay in its buffer until the next site, so the terms can be summed at any level.
-  const counts = terms.map((t) => t.work.pairs.count);
   return {
     rateAt(levelIndex) {
       const lnLevel = lnLevels[levelIndex] as number;
       return compensatedSum(
         terms.map(
-          (t, i) =>
+          (t) =>
             t.weight *
             (t.coefficients.usable && exceedance.mode === 'table'
               ? coefficientLevelRate(lnLevel, exceedance, t.coefficients)
-              : levelRate(
-                  lnLevel,
-                  exceedance,
-                  t.work.rates,
-                  t.work.pairs.rupture,
-                  t.predictions,
-                  counts[i] as number,
-                )),
+              : levelRate(lnLevel, exceedance, t.pairs)),
         ),
       );
     },

@@ -1,3 +1,4 @@
+import type { TectonicSetting } from '../model.ts';
 import type { GroundMotionModel } from '../motion/types.ts';
 import type { Measure } from '../motion/measure.ts';
 
@@ -20,4 +21,17 @@ export interface ValiditySummary {
   readonly outside: number;
   readonly evaluated: number;
   readonly firstNote: string;
+}
+
+/** What a site's hazard integral is asked for: the logic tree, the measures and the cut-offs. */
+export interface HazardIntegralOptions {
+  /** The branches of every setting that has ruptures (others are ignored). */
+  readonly branches: Readonly<Partial<Record<TectonicSetting, readonly HazardBranch[]>>>;
+  readonly measures: readonly HazardMeasure[];
+  /** Ground-motion distribution truncated at this many standard deviations (Settings). */
+  readonly truncationSigma: number;
+  /** Ruptures farther than this (Rjb, km) from the site are skipped (Settings). */
+  readonly maxDistanceKm: number;
+  /** Per-branch curves are listed for at most this many branch combinations (logic-tree.ts). */
+  readonly maxBranchCombinations?: number;
 }

@@ -1,6 +1,6 @@
 import { TECTONIC_SETTINGS } from '../model.ts';
 import type { TectonicSetting } from '../model.ts';
-import type { BranchCurve } from '../results.ts';
+import type { BranchCurve, HazardCurve } from '../results.ts';
 import { compensatedSum } from '../summation.ts';
 
 /** The exceedance rates of one setting's sources under one of its branches (not yet weighted). */
@@ -64,4 +64,33 @@ export function branchCombinationCurves(
       compensatedSum(chosen.map((c) => c.annualRate[j] as number)),
     ),
   }));
+}
+
+/** One measure's curve over the logic tree, and whether its per-branch curves were left out. */
+export interface TreeHazardCurve {
+  readonly curve: HazardCurve;
+  readonly branchesOmitted: boolean;
+}
+
+/**
+ * The mean curve of one measure over the logic tree with, when `maxCombinations` is not null,
+ * the per-branch curves if there are at most that many combinations. Null `maxCombinations`:
+ * the per-branch curves are not wanted (they count as left out).
+ */
+export function treeHazardCurve(
+  curves: readonly SettingBranchCurve[],
+  levels: readonly number[],
+  maxCombinations: number | null,
+): TreeHazardCurve {
+  const annualRate = meanHazard(curves, levels.length);
+  const combinations =
+    maxCombinations === null
+      ? null
+      : branchCombinationCurves(curves, levels.length, maxCombinations);
+  return combinations === null
+    ? { curve: { levels: [...levels], annualRate }, branchesOmitted: true }
+    : {
+        curve: { levels: [...levels], annualRate, branches: combinations },
+        branchesOmitted: false,
+      };
 }

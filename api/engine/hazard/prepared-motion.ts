@@ -1,27 +1,19 @@
 import type { PointXY } from '../geometry/projection.ts';
 import type { Measure } from '../motion/measure.ts';
-import type {
-  DistanceContext,
-  DistanceName,
-  GroundMotionModel,
-  PairDistances,
-  PairPredictions,
-  PreparedMotion,
-  RuptureContext,
-  SiteContext,
+import {
+  DISTANCE_NAMES,
+  type DistanceContext,
+  type DistanceName,
+  type GroundMotionModel,
+  type PairDistances,
+  type PairPredictions,
+  type PreparedMotion,
+  type RuptureContext,
+  type SiteContext,
 } from '../motion/types.ts';
 import { gmmInput } from './gmm-input.ts';
 import type { RuptureGeometry } from './rupture-geometry.ts';
 import { createPairBuffer, siteDistances } from './site-distances.ts';
-
-const ALL_DISTANCES: readonly DistanceName[] = [
-  'rjbKm',
-  'rrupKm',
-  'rxKm',
-  'ry0Km',
-  'rhypoKm',
-  'repiKm',
-];
 
 /**
  * A model that has no precomputation hook, evaluated pair by pair through predict() with every
@@ -33,7 +25,7 @@ function pairByPair(
   measure: Measure,
 ): PreparedMotion {
   return {
-    distances: ALL_DISTANCES,
+    distances: DISTANCE_NAMES,
     predictPairs(site, pairs, out) {
       for (let k = 0; k < pairs.count; k++) {
         const distances: DistanceContext = {
@@ -83,7 +75,7 @@ function measureByMeasure(
         return { distances: motion.distances, predictor: () => motion };
       } catch (error) {
         return {
-          distances: ALL_DISTANCES,
+          distances: DISTANCE_NAMES,
           predictor: () => {
             throw error;
           },
@@ -133,7 +125,7 @@ export function pairDistanceContext(
       ruptures: Int32Array.of(ruptureIndex),
       site,
       maxDistanceKm: Infinity,
-      distances: new Set(ALL_DISTANCES),
+      distances: new Set(DISTANCE_NAMES),
     },
     one,
   );

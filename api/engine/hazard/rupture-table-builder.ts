@@ -2,6 +2,7 @@ import { TremoraError } from '../errors.ts';
 import { TECTONIC_SETTINGS } from '../model.ts';
 import type { PointKm, Rupture, RupturePlane } from '../ruptures/rupture.ts';
 import { MECHANISMS, PLANE_STRIDE, type RuptureTable } from './rupture-table.ts';
+import { RUPTURE_NUMBERS } from '../motion/types.ts';
 
 /** What the table keeps of a rupture, its rate aside (a Rupture, or a placed one with its share). */
 export type TableRupture = Pick<
@@ -177,12 +178,7 @@ type ColumnName = {
 /** Columns copied part after part as they are; planeStart and traceEnd are offset by the planes before. */
 const PLAIN_COLUMNS = [
   'annualRate',
-  'magnitude',
-  'rakeDeg',
-  'dipDeg',
-  'ztorKm',
-  'widthKm',
-  'hypoDepthKm',
+  ...RUPTURE_NUMBERS,
   'setting',
   'mechanism',
   'sourceIndex',

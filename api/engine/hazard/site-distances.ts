@@ -119,141 +119,161 @@ function nearestBoxPlane(
 }
 
 /**
- * Rjb of a rupture's planes: 0 inside a plane's projection, else the nearest edge (km). Planes
- * are passed over by their boxes as in rrupKm.
+ * Squared distance (km²) from the site (px, py, 0) to a plane: to its surface projection for
+ * Rjb, to the plane for Rrup. `at` is the plane's offset in g.planes, `q` its offset in g.quads
+ * (RuptureGeometry.quadStart), −1 for a rectangle.
  */
-function rjbKm(g: RuptureGeometry, first: number, last: number, px: number, py: number): number {
-  const { planes, quads, planeBox } = g;
-  const nearest = nearestBoxPlane(planeBox, first, last, px, py, false);
-  let best = Infinity;
-  for (let n = first - 1; n < last; n++) {
-    const p = n < first ? nearest : n;
-    if (n >= first && (p === nearest || boxDistanceSq(planeBox, p, px, py, false) > best)) continue;
-    const at = p * PLANE_FIELDS;
-    const q = g.quadStart[p] as number;
-    if (q < 0) {
-      const dx = px - (planes[at] as number),
-        dy = py - (planes[at + 1] as number);
-      const s =
-        dx * (planes[at + RECT_XY + 1] as number) + dy * (planes[at + RECT_XY + 2] as number);
-      const t =
-        dx * (planes[at + RECT_XY + 3] as number) + dy * (planes[at + RECT_XY + 4] as number);
-      const length = planes[at + RECT_XY + 5] as number,
-        width = planes[at + RECT_XY + 6] as number;
-      const ds = s < 0 ? s : s > length ? s - length : 0;
-      const dt = t < 0 ? t : t > width ? t - width : 0;
-      best = Math.min(best, ds * ds + dt * dt);
-      continue;
-    }
-    let positive = 0;
-    let negative = 0;
-    for (let k = 0; k < 4; k++) {
-      const ax = quads[q + CORNERS + 3 * k] as number,
-        ay = quads[q + CORNERS + 3 * k + 1] as number;
-      const side =
-        (quads[q + EDGE + 3 * k] as number) * (py - ay) -
-        (quads[q + EDGE + 3 * k + 1] as number) * (px - ax);
-      if (side > 0) positive++;
-      else if (side < 0) negative++;
-    }
-    if (positive === 4 || negative === 4) return 0;
-    for (let k = 0; k < 4; k++) {
-      const ax = quads[q + CORNERS + 3 * k] as number,
-        ay = quads[q + CORNERS + 3 * k + 1] as number;
-      const ex = quads[q + EDGE + 3 * k] as number,
-        ey = quads[q + EDGE + 3 * k + 1] as number;
-      const lengthSq = quads[q + EDGE_LENGTH_SQ_XY + k] as number;
-      const t =
-        lengthSq === 0 ? 0 : Math.min(1, Math.max(0, ((px - ax) * ex + (py - ay) * ey) / lengthSq));
-      const dx = px - (ax + ex * t),
-        dy = py - (ay + ey * t);
-      best = Math.min(best, dx * dx + dy * dy);
-    }
-  }
-  return Math.sqrt(best);
-}
+type PlaneDistanceSq = (
+  g: RuptureGeometry,
+  at: number,
+  q: number,
+  px: number,
+  py: number,
+) => number;
 
 /**
- * Rrup of a rupture's planes for a site at the surface (km). A plane whose box lies farther than
- * the nearest plane so far is passed over: its distance could not be the minimum, so the result
- * is the one every plane's distance would give.
+ * The smallest `planeSq` of planes first .. last − 1 (km²): the plane with the nearest box
+ * first, then each other plane whose box (boxDistanceSq, with `depth` for Rrup) is not farther
+ * than the nearest plane so far: a farther box could not hold the minimum, so the result is the
+ * one every plane's distance would give. Nothing is nearer than 0, so the scan stops there.
  */
-function rrupKm(g: RuptureGeometry, first: number, last: number, px: number, py: number): number {
-  const { planes, quads, planeBox } = g;
-  const nearest = nearestBoxPlane(planeBox, first, last, px, py, true);
+function nearestPlaneSq(
+  g: RuptureGeometry,
+  first: number,
+  last: number,
+  px: number,
+  py: number,
+  depth: boolean,
+  planeSq: PlaneDistanceSq,
+): number {
+  const { planeBox, quadStart } = g;
+  const nearest = nearestBoxPlane(planeBox, first, last, px, py, depth);
+  let best = planeSq(g, nearest * PLANE_FIELDS, quadStart[nearest] as number, px, py);
+  for (let p = first; p < last && best > 0; p++) {
+    if (p === nearest || boxDistanceSq(planeBox, p, px, py, depth) > best) continue;
+    best = Math.min(best, planeSq(g, p * PLANE_FIELDS, quadStart[p] as number, px, py));
+  }
+  return best;
+}
+
+/** Squared Rjb of a plane (km²): 0 inside its projection, else to the nearest edge. */
+const rjbPlaneSq: PlaneDistanceSq = (g, at, q, px, py) => {
+  const { planes, quads } = g;
+  if (q < 0) {
+    const dx = px - (planes[at] as number),
+      dy = py - (planes[at + 1] as number);
+    const s = dx * (planes[at + RECT_XY + 1] as number) + dy * (planes[at + RECT_XY + 2] as number);
+    const t = dx * (planes[at + RECT_XY + 3] as number) + dy * (planes[at + RECT_XY + 4] as number);
+    const length = planes[at + RECT_XY + 5] as number,
+      width = planes[at + RECT_XY + 6] as number;
+    const ds = s < 0 ? s : s > length ? s - length : 0;
+    const dt = t < 0 ? t : t > width ? t - width : 0;
+    return ds * ds + dt * dt;
+  }
+  let positive = 0;
+  let negative = 0;
+  for (let k = 0; k < 4; k++) {
+    const ax = quads[q + CORNERS + 3 * k] as number,
+      ay = quads[q + CORNERS + 3 * k + 1] as number;
+    const side =
+      (quads[q + EDGE + 3 * k] as number) * (py - ay) -
+      (quads[q + EDGE + 3 * k + 1] as number) * (px - ax);
+    if (side > 0) positive++;
+    else if (side < 0) negative++;
+  }
+  if (positive === 4 || negative === 4) return 0;
   let best = Infinity;
-  for (let n = first - 1; n < last; n++) {
-    const p = n < first ? nearest : n;
-    if (n >= first && (p === nearest || boxDistanceSq(planeBox, p, px, py, true) > best)) continue;
-    const at = p * PLANE_FIELDS;
-    const q = g.quadStart[p] as number;
-    if (q < 0) {
-      const wx = px - (planes[at] as number),
-        wy = py - (planes[at + 1] as number),
-        wz = -(planes[at + 2] as number);
-      const s =
-        wx * (planes[at + RECT + 1] as number) +
-        wy * (planes[at + RECT + 2] as number) +
-        wz * (planes[at + RECT + 3] as number);
-      const t =
-        wx * (planes[at + RECT + 4] as number) +
-        wy * (planes[at + RECT + 5] as number) +
-        wz * (planes[at + RECT + 6] as number);
-      const d =
-        wx * (planes[at + RECT + 7] as number) +
-        wy * (planes[at + RECT + 8] as number) +
-        wz * (planes[at + RECT + 9] as number);
-      const length = planes[at + RECT + 10] as number,
-        width = planes[at + RECT + 11] as number;
-      const ds = s < 0 ? s : s > length ? s - length : 0;
-      const dt = t < 0 ? t : t > width ? t - width : 0;
-      best = Math.min(best, ds * ds + dt * dt + d * d);
-      continue;
-    }
-    const normalLength = quads[q + NORMAL + 3] as number;
-    if (normalLength > 0) {
-      let positive = 0;
-      for (let k = 0; k < 4; k++) {
-        const m = q + EDGE_NORMAL + 3 * k;
-        const a = q + CORNERS + 3 * k;
-        const dot =
-          (px - (quads[a] as number)) * (quads[m] as number) +
-          (py - (quads[a + 1] as number)) * (quads[m + 1] as number) -
-          (quads[a + 2] as number) * (quads[m + 2] as number);
-        if (dot > 0) positive++;
-      }
-      if (positive === 4) {
-        const d =
-          Math.abs(
-            (px - (quads[q] as number)) * (quads[q + NORMAL] as number) +
-              (py - (quads[q + 1] as number)) * (quads[q + NORMAL + 1] as number) -
-              (quads[q + 2] as number) * (quads[q + NORMAL + 2] as number),
-          ) / normalLength;
-        best = Math.min(best, d * d);
-        continue;
-      }
-    }
+  for (let k = 0; k < 4; k++) {
+    const ax = quads[q + CORNERS + 3 * k] as number,
+      ay = quads[q + CORNERS + 3 * k + 1] as number;
+    const ex = quads[q + EDGE + 3 * k] as number,
+      ey = quads[q + EDGE + 3 * k + 1] as number;
+    const lengthSq = quads[q + EDGE_LENGTH_SQ_XY + k] as number;
+    const t =
+      lengthSq === 0 ? 0 : Math.min(1, Math.max(0, ((px - ax) * ex + (py - ay) * ey) / lengthSq));
+    const dx = px - (ax + ex * t),
+      dy = py - (ay + ey * t);
+    best = Math.min(best, dx * dx + dy * dy);
+  }
+  return best;
+};
+
+/** Squared Rrup of a plane (km²), for a site at the surface. */
+const rrupPlaneSq: PlaneDistanceSq = (g, at, q, px, py) => {
+  const { planes, quads } = g;
+  if (q < 0) {
+    const wx = px - (planes[at] as number),
+      wy = py - (planes[at + 1] as number),
+      wz = -(planes[at + 2] as number);
+    const s =
+      wx * (planes[at + RECT + 1] as number) +
+      wy * (planes[at + RECT + 2] as number) +
+      wz * (planes[at + RECT + 3] as number);
+    const t =
+      wx * (planes[at + RECT + 4] as number) +
+      wy * (planes[at + RECT + 5] as number) +
+      wz * (planes[at + RECT + 6] as number);
+    const d =
+      wx * (planes[at + RECT + 7] as number) +
+      wy * (planes[at + RECT + 8] as number) +
+      wz * (planes[at + RECT + 9] as number);
+    const length = planes[at + RECT + 10] as number,
+      width = planes[at + RECT + 11] as number;
+    const ds = s < 0 ? s : s > length ? s - length : 0;
+    const dt = t < 0 ? t : t > width ? t - width : 0;
+    return ds * ds + dt * dt + d * d;
+  }
+  const normalLength = quads[q + NORMAL + 3] as number;
+  if (normalLength > 0) {
+    let positive = 0;
     for (let k = 0; k < 4; k++) {
+      const m = q + EDGE_NORMAL + 3 * k;
       const a = q + CORNERS + 3 * k;
-      const ax = quads[a] as number,
-        ay = quads[a + 1] as number,
-        az = quads[a + 2] as number;
-      const ex = quads[q + EDGE + 3 * k] as number,
-        ey = quads[q + EDGE + 3 * k + 1] as number,
-        ez = quads[q + EDGE + 3 * k + 2] as number;
-      const lengthSq = quads[q + EDGE_LENGTH_SQ + k] as number;
-      const t =
-        lengthSq === 0
-          ? 0
-          : Math.min(1, Math.max(0, ((px - ax) * ex + (py - ay) * ey - az * ez) / lengthSq));
-      const dx = px - (ax + ex * t),
-        dy = py - (ay + ey * t),
-        dz = az + ez * t;
-      best = Math.min(best, dx * dx + dy * dy + dz * dz);
+      const dot =
+        (px - (quads[a] as number)) * (quads[m] as number) +
+        (py - (quads[a + 1] as number)) * (quads[m + 1] as number) -
+        (quads[a + 2] as number) * (quads[m + 2] as number);
+      if (dot > 0) positive++;
+    }
+    if (positive === 4) {
+      const d =
+        Math.abs(
+          (px - (quads[q] as number)) * (quads[q + NORMAL] as number) +
+            (py - (quads[q + 1] as number)) * (quads[q + NORMAL + 1] as number) -
+            (quads[q + 2] as number) * (quads[q + NORMAL + 2] as number),
+        ) / normalLength;
+      return d * d;
     }
   }
-  return Math.sqrt(best);
-}
+  let best = Infinity;
+  for (let k = 0; k < 4; k++) {
+    const a = q + CORNERS + 3 * k;
+    const ax = quads[a] as number,
+      ay = quads[a + 1] as number,
+      az = quads[a + 2] as number;
+    const ex = quads[q + EDGE + 3 * k] as number,
+      ey = quads[q + EDGE + 3 * k + 1] as number,
+      ez = quads[q + EDGE + 3 * k + 2] as number;
+    const lengthSq = quads[q + EDGE_LENGTH_SQ + k] as number;
+    const t =
+      lengthSq === 0
+        ? 0
+        : Math.min(1, Math.max(0, ((px - ax) * ex + (py - ay) * ey - az * ez) / lengthSq));
+    const dx = px - (ax + ex * t),
+      dy = py - (ay + ey * t),
+      dz = az + ez * t;
+    best = Math.min(best, dx * dx + dy * dy + dz * dz);
+  }
+  return best;
+};
+
+/** Rjb of a rupture's planes (km). */
+const rjbKm = (g: RuptureGeometry, first: number, last: number, px: number, py: number): number =>
+  Math.sqrt(nearestPlaneSq(g, first, last, px, py, false, rjbPlaneSq));
+
+/** Rrup of a rupture's planes for a site at the surface (km). */
+const rrupKm = (g: RuptureGeometry, first: number, last: number, px: number, py: number): number =>
+  Math.sqrt(nearestPlaneSq(g, first, last, px, py, true, rrupPlaneSq));
 
 /** GC2 T (Rx) and Ry0 of the top edges of planes first .. last − 1 (geometry/gc2.ts); written to out at k. */
 function gc2(

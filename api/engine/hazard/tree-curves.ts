@@ -93,7 +93,12 @@ export function accumulateTreeNodes(
     curves[branch] = node.variantRates.map((rates) => {
       resetCurveAccumulator(acc);
       // The predictions were checked finite when the setting's curve was summed.
-      accumulatePairs(acc, exceedance, rates, work.pairRupture, work.predictions, kept);
+      accumulatePairs(acc, exceedance, {
+        rates,
+        pairRupture: work.pairRupture,
+        predictions: work.predictions,
+        count: kept,
+      });
       return curveRates(acc);
     });
   }

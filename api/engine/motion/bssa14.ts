@@ -92,18 +92,17 @@ export function bssa14MechanismFromRake(rakeDeg: number): 'strike-slip' | 'norma
   return 'strike-slip';
 }
 
+/** The column of e_mech for each mechanism: e0 unspecified, e1, e2, e3. */
+const MECHANISM_COLUMN = {
+  unspecified: 'e0',
+  'strike-slip': 'e1',
+  normal: 'e2',
+  reverse: 'e3',
+} as const satisfies Record<Bssa14Mechanism, keyof Bssa14Row>;
+
 /** The mechanism constant e_mech (ln units) of a row: e0 unspecified, e1, e2, e3 by mechanism. */
 export function bssa14MechanismConstant(row: Bssa14Row, mechanism: Bssa14Mechanism): number {
-  switch (mechanism) {
-    case 'unspecified':
-      return row.e0;
-    case 'strike-slip':
-      return row.e1;
-    case 'normal':
-      return row.e2;
-    case 'reverse':
-      return row.e3;
-  }
+  return row[MECHANISM_COLUMN[mechanism]];
 }
 
 /** Source function F_E (ln units) of a row for moment magnitude M, given its mechanism constant. */

@@ -1,6 +1,7 @@
 import { UnsupportedMeasure } from '../errors.ts';
 import { STANDARD_GRAVITY_MS2 } from '../units.ts';
 import type { Measure } from './measure.ts';
+import { shiftedMotion } from './shifted-motion.ts';
 import type {
   GmmInput,
   GmmPrediction,
@@ -58,18 +59,10 @@ export function withPgvFromSa(model: GroundMotionModel): GroundMotionModel {
   // The fast path's hook (GroundMotionModel.prepare), where the model has one: its SA(0.5 s)
   // predictor with the same constant added to every ln median.
   const prepare = inner
-    ? (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion => {
-        if (measure.kind !== 'PGV') return inner(ruptures, measure);
-        const sa = inner(ruptures, saMeasure);
-        return {
-          distances: sa.distances,
-          predictPairs(site, pairs, out) {
-            sa.predictPairs(site, pairs, out);
-            for (let k = 0; k < pairs.count; k++)
-              out.lnMedian[k] = (out.lnMedian[k] as number) + LN_G_TO_PGV_CMS;
-          },
-        };
-      }
+    ? (ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion =>
+        measure.kind === 'PGV'
+          ? shiftedMotion(inner(ruptures, saMeasure), LN_G_TO_PGV_CMS)
+          : inner(ruptures, measure)
     : undefined;
   const innerMeasures = model.prepareMeasures?.bind(model);
   // The same for several measures at once: PGV asked of the model as SA(0.5 s), the constant added to its output.

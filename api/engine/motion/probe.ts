@@ -3,7 +3,7 @@ import { measureSupport, type ModelCatalog } from './catalog.ts';
 import { InvalidInput } from '../errors.ts';
 import { measureUnit, parseMeasure } from './measure.ts';
 import { PGV_FROM_SA_NOTE, withPgvFromSa } from './pgv-from-sa.ts';
-import type { GmmInput } from './types.ts';
+import { RUPTURE_NUMBERS, type GmmInput } from './types.ts';
 
 /** What the probe is asked: one model, one rupture–site geometry, some measures. */
 export interface ProbeRequest {
@@ -178,18 +178,8 @@ export function probeMotion(request: ProbeRequest, models: ModelCatalog): ProbeR
 const INPUTS_READ: Readonly<Record<string, (setting: TectonicSetting) => readonly string[]>> = {
   Cornell79: () => ['magnitude', 'rhypoKm'],
   BSSA14: () => ['magnitude', 'rakeDeg', 'rjbKm', 'vs30'],
-  CB14: () => [
-    'magnitude',
-    'rakeDeg',
-    'dipDeg',
-    'ztorKm',
-    'widthKm',
-    'hypoDepthKm',
-    'rjbKm',
-    'rrupKm',
-    'rxKm',
-    'vs30',
-  ],
+  // Campbell & Bozorgnia (2014) read every number of the rupture context.
+  CB14: () => [...RUPTURE_NUMBERS, 'rjbKm', 'rrupKm', 'rxKm', 'vs30'],
   // Abrahamson et al. (2016): Rrup for interface events; Rhypo and the hypocentral depth for intraslab ones.
   AGA16: (setting) =>
     setting === 'intraslab'

@@ -16,6 +16,16 @@ export interface RuptureContext {
   readonly hypoDepthKm: number;
 }
 
+/** The numeric fields of a RuptureContext (the rupture table keeps one column for each). */
+export const RUPTURE_NUMBERS = [
+  'magnitude',
+  'rakeDeg',
+  'dipDeg',
+  'ztorKm',
+  'widthKm',
+  'hypoDepthKm',
+] as const satisfies readonly (keyof RuptureContext)[];
+
 /** Source-to-site distances, km (definitions as in the NGA-West2 flatfile). */
 export interface DistanceContext {
   /** Joyner-Boore: shortest horizontal distance to the surface projection of the rupture. */
@@ -112,6 +122,16 @@ export interface GroundMotionModel {
 
 /** A distance of DistanceContext, by its field name. */
 export type DistanceName = keyof DistanceContext;
+
+/** Every distance of DistanceContext, in its order. */
+export const DISTANCE_NAMES = [
+  'rjbKm',
+  'rrupKm',
+  'rxKm',
+  'ry0Km',
+  'rhypoKm',
+  'repiKm',
+] as const satisfies readonly DistanceName[];
 
 /**
  * Distances (km) of many (rupture, site) pairs at one site, as columns: entry k is one pair.

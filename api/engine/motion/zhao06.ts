@@ -72,20 +72,18 @@ export function zhao06SiteClass(vs30: number): Zhao06SiteClass {
   return 'SC IV';
 }
 
+/** The column of C_k for each site class: CH hard rock, C1–C4 for SC I–IV. */
+const SITE_CLASS_COLUMN = {
+  'hard rock': 'ch',
+  'SC I': 'c1',
+  'SC II': 'c2',
+  'SC III': 'c3',
+  'SC IV': 'c4',
+} as const satisfies Record<Zhao06SiteClass, keyof Zhao06Row>;
+
 /** C_k of a row for a site class, ln units. */
 export function zhao06SiteTerm(row: Zhao06Row, siteClass: Zhao06SiteClass): number {
-  switch (siteClass) {
-    case 'hard rock':
-      return row.ch;
-    case 'SC I':
-      return row.c1;
-    case 'SC II':
-      return row.c2;
-    case 'SC III':
-      return row.c3;
-    case 'SC IV':
-      return row.c4;
-  }
+  return row[SITE_CLASS_COLUMN[siteClass]];
 }
 
 /** What one row of the equation needs of the rupture alone. */

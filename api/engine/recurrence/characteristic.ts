@@ -1,5 +1,5 @@
 import { InvalidInput } from '../errors.ts';
-import { betaOf, exponentialMass } from './truncated-gr.ts';
+import { betaOf, exponentialMass, type BinProbabilities } from './truncated-gr.ts';
 
 /**
  * The characteristic magnitude distribution of Youngs & Coppersmith (1985), "Implications of
@@ -16,12 +16,7 @@ export const CHARACTERISTIC_BOX_WIDTH = 0.5;
 export const CHARACTERISTIC_HEIGHT_OFFSET = 1.0;
 
 /** Probability of each bin [edges[i], edges[i+1]] under the Youngs & Coppersmith distribution. */
-export function characteristicBinProbabilities(
-  edges: readonly number[],
-  mMin: number,
-  mMax: number,
-  bValue: number,
-): number[] {
+export const characteristicBinProbabilities: BinProbabilities = (edges, mMin, mMax, bValue) => {
   const beta = betaOf(bValue);
   const mc = mMax - CHARACTERISTIC_BOX_WIDTH;
   if (!(mc > mMin)) {
@@ -47,4 +42,4 @@ export function characteristicBinProbabilities(
     out.push((exponential + box) / (1 + c2));
   }
   return out;
-}
+};

@@ -3,7 +3,13 @@ import type { MomentBalancedRecurrence } from '../model.ts';
 import { compensatedSum } from '../summation.ts';
 import { characteristicBinProbabilities } from './characteristic.ts';
 import { momentNm, momentRateNmYr } from './seismic-moment.ts';
-import { truncatedExponentialBinProbabilities } from './truncated-gr.ts';
+import { truncatedExponentialBinProbabilities, type BinProbabilities } from './truncated-gr.ts';
+
+/** The bin probabilities of each shape a moment-balanced fault may take. */
+const SHAPE_BIN_PROBABILITIES = {
+  'gutenberg-richter': truncatedExponentialBinProbabilities,
+  characteristic: characteristicBinProbabilities,
+} as const satisfies Record<MomentBalancedRecurrence['shape'], BinProbabilities>;
 
 /**
  * Annual rates of the bins of a moment-balanced fault (per year): the shape's bin
@@ -31,10 +37,7 @@ export function momentBalancedRates(
     ]);
   }
   const { mMin, mMax, bValue } = recurrence;
-  const shares =
-    recurrence.shape === 'characteristic'
-      ? characteristicBinProbabilities(edges, mMin, mMax, bValue)
-      : truncatedExponentialBinProbabilities(edges, mMin, mMax, bValue);
+  const shares = SHAPE_BIN_PROBABILITIES[recurrence.shape](edges, mMin, mMax, bValue);
   const momentPerEvent = compensatedSum(
     shares.map((p, i) => p * momentNm(magnitudes[i] as number)),
   );

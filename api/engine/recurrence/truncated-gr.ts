@@ -25,16 +25,28 @@ export const exponentialMass = (beta: number, x0: number, x1: number): number =>
   -Math.exp(-beta * x0) * Math.expm1(-beta * (x1 - x0));
 
 /**
- * Probability of each bin [edges[i], edges[i+1]] under the truncated exponential between
- * mMin and mMax (parts of a bin outside them carry nothing). Sums to 1 when the edges span
- * [mMin, mMax].
+ * Probability of each magnitude bin [edges[i], edges[i+1]] under a magnitude-frequency shape on
+ * [mMin, mMax] with the given b-value: the truncated exponential below, the characteristic
+ * shape in characteristic.ts.
  */
-export function truncatedExponentialBinProbabilities(
+export type BinProbabilities = (
   edges: readonly number[],
   mMin: number,
   mMax: number,
   bValue: number,
-): number[] {
+) => number[];
+
+/**
+ * Probability of each bin [edges[i], edges[i+1]] under the truncated exponential between
+ * mMin and mMax (parts of a bin outside them carry nothing). Sums to 1 when the edges span
+ * [mMin, mMax].
+ */
+export const truncatedExponentialBinProbabilities: BinProbabilities = (
+  edges,
+  mMin,
+  mMax,
+  bValue,
+) => {
   const beta = betaOf(bValue);
   const total = exponentialMass(beta, 0, mMax - mMin);
   const out: number[] = [];
@@ -44,7 +56,7 @@ export function truncatedExponentialBinProbabilities(
     out.push(hi > lo ? exponentialMass(beta, lo - mMin, hi - mMin) / total : 0);
   }
   return out;
-}
+};
 
 /** Annual rate of M >= mMin of a Gutenberg–Richter recurrence: `rate`, else 10^(a - b mMin). */
 export function rateAboveMinimum(recurrence: {

@@ -9,6 +9,7 @@ import {
   fillLevelCoefficients,
   levelRate,
   resetCurveAccumulator,
+  type RatedPairs,
 } from '../../../api/engine/hazard/curve-accumulator.ts';
 import { exceedanceCurve } from '../../helpers/reference-hazard/exceedance-curve.ts';
 import { exceedanceTable } from '../../../api/engine/hazard/exceedance-table.ts';
@@ -46,29 +47,22 @@ function cases(count: number, seed: number) {
     firstNote: null,
   };
   const rates = Float64Array.from(ruptures, (r) => r.annualRate);
-  return {
-    ruptures,
-    predictions,
+  const pair = { lnMedian, sigma, applicable: new Uint8Array(count) };
+  const rated: RatedPairs = {
     rates,
-    pair: { lnMedian, sigma, applicable: new Uint8Array(count) },
+    pairRupture: predictions.ruptureIndex,
+    predictions: pair,
+    count,
   };
+  return { ruptures, predictions, pair, rated };
 }
 
 describe('accumulatePairs and curveRates', () => {
   for (const truncation of [3, 2, 0, Infinity]) {
     it(`equal exceedanceCurve at truncation ${truncation} over ${3 * BLOCK_PAIRS + 5} pairs (several blocks)`, () => {
-      const { ruptures, predictions, rates, pair } = cases(3 * BLOCK_PAIRS + 5, 42);
+      const { ruptures, predictions, rated } = cases(3 * BLOCK_PAIRS + 5, 42);
       const acc = createCurveAccumulator(LEVELS);
-      expect(
-        accumulatePairs(
-          acc,
-          exceedanceTable(truncation),
-          rates,
-          predictions.ruptureIndex,
-          pair,
-          ruptures.length,
-        ),
-      ).toBe(-1);
+      expect(accumulatePairs(acc, exceedanceTable(truncation), rated)).toBe(-1);
       const expected = exceedanceCurve(predictions, ruptures, LEVELS, truncation);
       curveRates(acc).forEach((rate, j) =>
         expectClose(
@@ -82,30 +76,26 @@ describe('accumulatePairs and curveRates', () => {
   }
 
   it('reports the first pair with a non-finite median or a negative σ and sums nothing from it on', () => {
-    const { predictions, rates, pair } = cases(10, 1);
+    const { pair, rated } = cases(10, 1);
     pair.sigma[6] = -0.1;
     const acc = createCurveAccumulator(LEVELS);
-    expect(
-      accumulatePairs(acc, exceedanceTable(3), rates, predictions.ruptureIndex, pair, 10),
-    ).toBe(6);
+    expect(accumulatePairs(acc, exceedanceTable(3), rated)).toBe(6);
     pair.sigma[6] = 0.5;
     pair.lnMedian[2] = Number.POSITIVE_INFINITY;
     resetCurveAccumulator(acc);
-    expect(
-      accumulatePairs(acc, exceedanceTable(3), rates, predictions.ruptureIndex, pair, 10),
-    ).toBe(2);
+    expect(accumulatePairs(acc, exceedanceTable(3), rated)).toBe(2);
   });
 });
 
 describe('levelRate and coefficientLevelRate', () => {
   it("give the curve's rate at any single level", () => {
-    const { ruptures, predictions, rates, pair } = cases(2 * BLOCK_PAIRS + 3, 9);
+    const { ruptures, predictions, pair, rated } = cases(2 * BLOCK_PAIRS + 3, 9);
     for (const truncation of [3, 0, Infinity]) {
       const table = exceedanceTable(truncation);
       const expected = exceedanceCurve(predictions, ruptures, LEVELS, truncation);
       LEVELS.forEach((level, j) =>
         expectClose(
-          levelRate(Math.log(level), table, rates, predictions.ruptureIndex, pair, ruptures.length),
+          levelRate(Math.log(level), table, rated),
           expected[j]!,
           1e-9 * expected[j]! + 1e-18,
           `levelRate at ${level} g, truncation ${truncation}`,
@@ -114,15 +104,7 @@ describe('levelRate and coefficientLevelRate', () => {
     }
     // The coefficients apply only to a table and σ > 0 throughout; this set has zero σs.
     const coefficients = createLevelCoefficients(ruptures.length);
-    const fill = (): void =>
-      fillLevelCoefficients(
-        coefficients,
-        exceedanceTable(3),
-        rates,
-        predictions.ruptureIndex,
-        pair,
-        ruptures.length,
-      );
+    const fill = (): void => fillLevelCoefficients(coefficients, exceedanceTable(3), rated);
     fill();
     expect(coefficients.usable).toBe(false);
     for (let k = 0; k < pair.sigma.length; k++) if (pair.sigma[k] === 0) pair.sigma[k] = 0.6;

@@ -3,6 +3,7 @@ import {
   branchCombinationCount,
   branchCombinationCurves,
   meanHazard,
+  treeHazardCurve,
 } from '../../../api/engine/hazard/logic-tree.ts';
 import type { SettingBranchCurve } from '../../../api/engine/hazard/logic-tree.ts';
 import { expectClose } from '../../helpers/close.ts';
@@ -49,5 +50,19 @@ describe('logic tree', () => {
     expect(branchCombinationCount(curves)).toBe(2);
     expect(branchCombinationCurves(curves, 2, 1)).toBeNull();
     expect(branchCombinationCurves([], 2)).toEqual([]);
+  });
+
+  it('the tree curve of a measure keeps its levels and the mean, with the branch curves only when wanted and within the cap', () => {
+    const levels = [0.1, 0.2];
+    const within = treeHazardCurve(curves, levels, 2);
+    expect(within.branchesOmitted).toBe(false);
+    expect(within.curve.levels).toEqual(levels);
+    expect(within.curve.annualRate).toEqual(meanHazard(curves, 2));
+    expect(within.curve.branches).toEqual(branchCombinationCurves(curves, 2));
+    for (const cap of [1, null]) {
+      const omitted = treeHazardCurve(curves, levels, cap);
+      expect(omitted.branchesOmitted).toBe(true);
+      expect(omitted.curve).toEqual({ levels, annualRate: meanHazard(curves, 2) });
+    }
   });
 });

@@ -5,7 +5,7 @@ import { ruptureTable } from '../../../api/engine/hazard/rupture-table-builder.t
 import { settingRuptures } from '../../../api/engine/hazard/rupture-table.ts';
 import { ruptureGeometry } from '../../../api/engine/hazard/rupture-geometry.ts';
 import { createPairBuffer, siteDistances } from '../../../api/engine/hazard/site-distances.ts';
-import type { DistanceName } from '../../../api/engine/motion/types.ts';
+import { DISTANCE_NAMES, type DistanceName } from '../../../api/engine/motion/types.ts';
 import { discretiseSource } from '../../../api/engine/ruptures/discretise.ts';
 import type { Rupture } from '../../../api/engine/ruptures/rupture.ts';
 import { expectClose } from '../../helpers/close.ts';
@@ -100,14 +100,7 @@ const skewed: Rupture = {
 const all = [...ruptures, skewed];
 const table = ruptureTable(all);
 const geometry = ruptureGeometry(table);
-const everyDistance = new Set<DistanceName>([
-  'rjbKm',
-  'rrupKm',
-  'rxKm',
-  'ry0Km',
-  'rhypoKm',
-  'repiKm',
-]);
+const everyDistance = new Set<DistanceName>(DISTANCE_NAMES);
 const indices = Int32Array.from(all, (_, i) => i);
 // Site coordinates, km; denormal ones are left out: there both paths' GC2 divides ∞ by ∞ (a limit case of geometry/gc2.ts).
 const coordinate = (min: number, max: number) =>

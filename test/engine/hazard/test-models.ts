@@ -1,5 +1,6 @@
 import { cornell79 } from '../../../api/engine/motion/cornell79.ts';
 import type { Measure } from '../../../api/engine/motion/measure.ts';
+import { shiftedMotion } from '../../../api/engine/motion/shifted-motion.ts';
 import type {
   GmmInput,
   GmmPrediction,
@@ -31,15 +32,7 @@ export function scaledCornell(
       return { ...p, lnMedian: p.lnMedian + lnFactor };
     },
     prepare(ruptures: readonly RuptureContext[], measure: Measure): PreparedMotion {
-      const inner = cornell79.prepare!(ruptures, measure);
-      return {
-        distances: inner.distances,
-        predictPairs(site, pairs, out) {
-          inner.predictPairs(site, pairs, out);
-          for (let k = 0; k < pairs.count; k++)
-            out.lnMedian[k] = (out.lnMedian[k] as number) + lnFactor;
-        },
-      };
+      return shiftedMotion(cornell79.prepare!(ruptures, measure), lnFactor);
     },
   };
 }

@@ -17,6 +17,8 @@ import {
   type LevelAccumulator,
 } from '../../../api/engine/summation.ts';
 import type { RupturePredictions } from './rupture-predictions.ts';
+import { sourceShares } from '../../../api/engine/hazard/source-shares.ts';
+import type { DeaggregationTarget } from '../../../api/engine/hazard/fast-deaggregation.ts';
 import {
   exceedanceProbability,
   standardisedLevel,
@@ -28,17 +30,12 @@ export interface DeaggregationBranch {
   readonly predictions: RupturePredictions;
 }
 
-export interface DeaggregationOptions {
-  readonly measure: string;
-  /** The level deaggregated, in the measure's units (the return period's level). */
-  readonly level: number;
-  readonly returnPeriodYears: number;
+/** The plain sum's inputs besides the target (sourceNames by rupture.sourceIndex). */
+export interface DeaggregationOptions extends DeaggregationTarget {
   readonly ruptures: readonly Rupture[];
   readonly distances: readonly DistanceContext[];
   /** Every branch of every setting; contributions are weighted by branch weight. */
   readonly branches: readonly DeaggregationBranch[];
-  /** Names by rupture.sourceIndex (the rupture's sourceId is used where missing). */
-  readonly sourceNames: readonly string[];
   readonly truncationSigma: number;
 }
 
@@ -141,19 +138,14 @@ export function deaggregate(options: DeaggregationOptions): Deaggregation | null
     name: options.sourceNames[sourceIndex] ?? sourceId,
     rate: accumulatedTotals(acc)[0] as number,
   }));
-  const sourceSum = compensatedSum(sources.map((s) => s.rate));
-  const bySourceShares = sources
-    .map(({ sourceId, name, rate }) => ({ sourceId, name, share: rate / sourceSum }))
-    .sort(
-      (a, b) =>
-        b.share - a.share || (a.sourceId < b.sourceId ? -1 : a.sourceId > b.sourceId ? 1 : 0),
-    );
 
   return {
     measure: options.measure,
     level: options.level,
     returnPeriodYears: options.returnPeriodYears,
-    bySource: bySourceShares,
+    // Normalising and ordering the per-source sums is plain bookkeeping, shared with the engine;
+    // what this oracle checks is the contributions summed into them above.
+    bySource: sourceShares(sources),
     mean: { magnitude: sumM / total, distanceKm: sumR / total, epsilon: sumE / total },
     mode: {
       magnitude: (modal.totals[M] as number) / modalRate,

@@ -1,13 +1,9 @@
 import type {
-  HazardBranch,
+  HazardIntegralOptions,
   HazardMeasure,
   ValiditySummary,
 } from '../../../api/engine/hazard/hazard-types.ts';
-import {
-  branchCombinationCurves,
-  MAX_BRANCH_COMBINATIONS,
-  meanHazard,
-} from '../../../api/engine/hazard/logic-tree.ts';
+import { MAX_BRANCH_COMBINATIONS, treeHazardCurve } from '../../../api/engine/hazard/logic-tree.ts';
 import type { SettingBranchCurve } from '../../../api/engine/hazard/logic-tree.ts';
 import { TECTONIC_SETTINGS } from '../../../api/engine/model.ts';
 import type { TectonicSetting } from '../../../api/engine/model.ts';
@@ -36,17 +32,11 @@ export interface SiteHazard {
   readonly validity: readonly ValiditySummary[];
 }
 
-export interface SiteHazardOptions {
+export interface SiteHazardOptions extends HazardIntegralOptions {
   readonly ruptures: readonly Rupture[];
   /** One per rupture, for this site. */
   readonly distances: readonly DistanceContext[];
   readonly site: SiteContext;
-  /** The branches of every setting that has sources in the study (others are ignored). */
-  readonly branches: Readonly<Partial<Record<TectonicSetting, readonly HazardBranch[]>>>;
-  readonly measures: readonly HazardMeasure[];
-  readonly truncationSigma: number;
-  readonly maxDistanceKm: number;
-  readonly maxBranchCombinations?: number;
   /** Called after each branch is done; may throw to stop (cancellation). */
   readonly afterBranch?: () => void;
 }
@@ -94,13 +84,11 @@ export function siteHazard(options: SiteHazardOptions): SiteHazard {
       weight: b.weight,
       annualRate: b.annualRate[i] as number[],
     }));
-    const annualRate = meanHazard(settingCurves, m.levels.length);
-    const combinations = branchCombinationCurves(settingCurves, m.levels.length, cap);
-    if (combinations === null) branchCurvesOmitted = true;
-    curves[m.key] =
-      combinations === null
-        ? { levels: [...m.levels], annualRate }
-        : { levels: [...m.levels], annualRate, branches: combinations };
+    // The weighted mean and the branch combinations are the engine's (logic-tree.ts, with its
+    // own tests): this oracle checks each branch's curve, summed rupture by rupture above.
+    const { curve, branchesOmitted } = treeHazardCurve(settingCurves, m.levels, cap);
+    if (branchesOmitted) branchCurvesOmitted = true;
+    curves[m.key] = curve;
   });
 
   return {
