@@ -203,7 +203,7 @@ describe('screenings through the Redis queue with two workers', () => {
       }
     });
     expect(interrupted).toBe(true);
-    expect(queued.code).toBe(2);
+    expect(queued.code, queued.err).toBe(2);
     expect(queued.err).toMatch(
       /tremora screen: screening cancelled on request after \d+% of the work/,
     );
