@@ -1,7 +1,7 @@
 import { UnsupportedMeasure } from '../errors.ts';
 import { STANDARD_GRAVITY_MS2 } from '../units.ts';
 import type { Measure } from './measure.ts';
-import { shiftedMotion } from './shifted-motion.ts';
+import { shiftedMotion, shiftLnMedians } from './shifted-motion.ts';
 import type {
   GmmInput,
   GmmPrediction,
@@ -78,10 +78,7 @@ export function withPgvFromSa(model: GroundMotionModel): GroundMotionModel {
           predictPairs(site, pairs, out) {
             motions.predictPairs(site, pairs, out);
             derived.forEach((isPgv, i) => {
-              if (!isPgv) return;
-              const lnMedian = (out[i] as PairPredictions).lnMedian;
-              for (let k = 0; k < pairs.count; k++)
-                lnMedian[k] = (lnMedian[k] as number) + LN_G_TO_PGV_CMS;
+              if (isPgv) shiftLnMedians(out[i] as PairPredictions, pairs.count, LN_G_TO_PGV_CMS);
             });
           },
         };

@@ -1,4 +1,10 @@
-import type { PreparedMotion } from './types.ts';
+import type { PairPredictions, PreparedMotion } from './types.ts';
+
+/** Adds `lnShift` to the first `count` ln medians of `out` (a median scaled by exp(lnShift)). */
+export function shiftLnMedians(out: PairPredictions, count: number, lnShift: number): void {
+  const { lnMedian } = out;
+  for (let k = 0; k < count; k++) lnMedian[k] = (lnMedian[k] as number) + lnShift;
+}
 
 /**
  * `inner` with the constant `lnShift` added to every ln median it predicts (a median scaled by
@@ -9,7 +15,7 @@ export function shiftedMotion(inner: PreparedMotion, lnShift: number): PreparedM
     distances: inner.distances,
     predictPairs(site, pairs, out) {
       inner.predictPairs(site, pairs, out);
-      for (let k = 0; k < pairs.count; k++) out.lnMedian[k] = (out.lnMedian[k] as number) + lnShift;
+      shiftLnMedians(out, pairs.count, lnShift);
     },
   };
 }
